@@ -1,0 +1,173 @@
+// The PEGTL grammar of the plumb notation: the single source of truth for its syntax.
+// NOTATION.md beside this folder is the reference for people; the two must agree.
+//
+// The grammar parses one logical line (a statement with its continuation lines); the
+// library splits files into logical lines so that one bad line never hides the rest.
+// Rules carry no error policy: notation_errors.hpp maps the hard-error points to messages.
+#pragma once
+
+#include <tao/pegtl.hpp>
+
+namespace plumb::notation {
+
+using namespace tao::pegtl; // NOLINT: the grammar reads better with unqualified combinators
+
+// --- Whitespace, comments, continuation ---------------------------------------------------
+struct comment : seq<one<'#'>, star<not_one<'\n'>>> {};
+struct continuation : seq<one<'\\'>, star<one<' ', '\t', '\r'>>, opt<comment>, one<'\n'>> {};
+struct space : one<' ', '\t', '\r'> {};
+struct ws : star<sor<space, continuation>> {};
+
+// --- Names --------------------------------------------------------------------------------
+// Latin-1 and Latin Extended letters without × (U+00D7) and ÷ (U+00F7); the micro sign;
+// Greek and Greek Extended. Engineers write ρ, μ, Δp, φ'.
+struct utf8_letter
+    : utf8::ranges<0xB5, 0xB5, 0xC0, 0xD6, 0xD8, 0xF6, 0xF8, 0x24F, 0x370, 0x3FF, 0x1F00, 0x1FFF> {
+};
+struct letter : sor<ranges<'a', 'z', 'A', 'Z'>, utf8_letter> {};
+struct name_char : sor<ranges<'a', 'z', 'A', 'Z', '0', '9', '_'>, utf8_letter> {};
+struct name : seq<letter, star<name_char>, star<one<'\''>>> {};
+
+// --- Numbers ------------------------------------------------------------------------------
+struct digits : plus<digit> {};
+struct decimal_exponent : seq<one<'e', 'E'>, opt<one<'+', '-'>>, digits> {};
+struct number
+    : seq<sor<seq<digits, opt<one<'.'>, star<digit>>>, seq<one<'.'>, digits>>, opt<decimal_exponent>> {
+};
+// "2g" is a product written without its operator; say so instead of failing further on.
+struct number_end : not_at<name_char> {};
+struct number_term : seq<number, must<number_end>> {};
+
+// An exponent written inside a unit or a dimension: 3, -2, 0.5, (1/2), (-3/2).
+struct signed_decimal : seq<opt<one<'-', '+'>>, digits, opt<one<'.'>, digits>> {};
+struct fraction_close : one<')'> {};
+struct fraction_body : seq<signed_decimal, star<space>, opt<one<'/'>, star<space>, must<digits>>> {};
+struct literal_exponent
+    : sor<signed_decimal, if_must<one<'('>, star<space>, fraction_body, star<space>, fraction_close>> {};
+
+// --- Expressions --------------------------------------------------------------------------
+struct expression;
+
+struct pi_constant : seq<sor<TAO_PEGTL_STRING("pi"), utf8::one<0x3C0>>, not_at<name_char>> {};
+struct symbol : name {};
+
+struct group_close : one<')'> {};
+struct group : if_must<one<'('>, ws, expression, ws, group_close> {};
+
+struct call_open : one<'('> {};
+struct call_close : one<')'> {};
+struct argument : seq<expression> {};
+struct next_argument : if_must<one<','>, ws, argument> {};
+struct call : seq<name, star<space>, call_open, ws, opt<argument, star<ws, next_argument>>, ws,
+                  must<call_close>> {};
+
+struct primary : sor<number_term, pi_constant, call, symbol, group> {};
+
+struct unary;
+struct power_operand : seq<unary> {};
+struct power_tail : seq<ws, one<'^'>, ws, must<power_operand>> {};
+struct power : seq<primary, opt<power_tail>> {};
+struct negated_operand : seq<unary> {};
+struct negation : seq<one<'-'>, ws, must<negated_operand>> {};
+struct positive_operand : seq<unary> {};
+struct positive : seq<one<'+'>, ws, must<positive_operand>> {};
+struct unary : sor<negation, positive, power> {};
+
+struct multiply_sign : sor<one<'*'>, utf8::one<0xB7, 0xD7, 0x22C5>> {}; // * · × ⋅
+struct factor : unary {};
+// "x**2" is another notation's power; point at it rather than at the second '*'.
+struct single_star : not_at<one<'*'>> {};
+struct multiply_tail : seq<ws, multiply_sign, must<single_star>, ws, must<factor>> {};
+struct divide_tail : seq<ws, one<'/'>, ws, must<factor>> {};
+struct product : seq<unary, star<sor<multiply_tail, divide_tail>>> {};
+
+struct term : product {};
+struct add_tail : seq<ws, one<'+'>, ws, must<term>> {};
+struct subtract_tail : seq<ws, one<'-'>, ws, must<term>> {};
+struct expression : seq<product, star<sor<add_tail, subtract_tail>>> {};
+
+// --- Formulas: equations and limits -------------------------------------------------------
+struct less_equal : sor<TAO_PEGTL_STRING("<="), utf8::one<0x2264>> {};
+struct greater_equal : sor<TAO_PEGTL_STRING(">="), utf8::one<0x2265>> {};
+struct less : one<'<'> {};
+struct greater : one<'>'> {};
+struct equal : one<'='> {};
+struct relation_sign : sor<less_equal, greater_equal, less, greater, equal> {};
+
+struct side : expression {};
+struct first_side : expression {};
+struct relation : seq<relation_sign, ws, must<side>> {};
+struct label_name : plus<sor<name_char, one<'-', '.'>>> {};
+struct label : if_must<one<'@'>, label_name, plus<space>> {};
+struct formula : seq<opt<label>, ws, first_side, ws, must<relation>, star<ws, relation>> {};
+
+// --- Dimensions in brackets: [M L^-3] -----------------------------------------------------
+struct base_mass : one<'M'> {};
+struct base_length : one<'L'> {};
+struct base_temperature : sor<TAO_PEGTL_STRING("Th"), utf8::one<0x398>> {};
+struct base_time : one<'T'> {};
+struct base_amount : one<'N'> {};
+struct base_current : one<'I'> {};
+struct base_luminous : one<'J'> {};
+struct base_symbol : seq<sor<base_mass, base_length, base_temperature, base_time, base_amount,
+                             base_current, base_luminous>,
+                         not_at<name_char>> {};
+struct dimension_exponent : literal_exponent {};
+struct dimension_factor
+    : seq<base_symbol, opt<star<space>, one<'^'>, star<space>, must<dimension_exponent>>> {};
+struct dimension_separator : sor<plus<space>, seq<star<space>, multiply_sign, star<space>>> {};
+struct dimension_factors : list<dimension_factor, dimension_separator> {};
+struct dimensionless_mark : sor<one<'-'>, seq<one<'1'>, not_at<digit>>> {};
+struct dimension_close : one<']'> {};
+struct dimension_brackets
+    : if_must<one<'['>, star<space>, opt<sor<dimensionless_mark, dimension_factors>>, star<space>,
+              dimension_close> {};
+
+// --- Units: kg/m^3, W/(m*K), m^3/s --------------------------------------------------------
+struct unit_expression;
+struct unit_symbol : seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>> {};
+struct unit_percent : one<'%'> {};
+struct unit_one : seq<one<'1'>, not_at<digit>> {};
+struct unit_group_close : one<')'> {};
+struct unit_group : if_must<one<'('>, star<space>, unit_expression, star<space>, unit_group_close> {};
+struct unit_primary : sor<unit_group, unit_one, unit_percent, unit_symbol> {};
+struct unit_exponent : literal_exponent {};
+struct unit_power : seq<unit_primary, opt<star<space>, one<'^'>, star<space>, must<unit_exponent>>> {
+};
+struct unit_factor : unit_power {};
+struct unit_multiply : seq<star<space>, multiply_sign, star<space>, must<unit_factor>> {};
+struct unit_divide : seq<star<space>, one<'/'>, star<space>, must<unit_factor>> {};
+struct unit_expression : seq<unit_power, star<sor<unit_multiply, unit_divide>>> {};
+
+// --- Declarations -------------------------------------------------------------------------
+struct declared_name : name {};
+struct next_declared_name : if_must<one<','>, ws, declared_name> {};
+struct name_list : seq<declared_name, star<ws, next_declared_name>> {};
+struct declaration_spec : sor<dimension_brackets, unit_expression> {};
+struct constant_value : seq<opt<one<'-'>>, number, must<number_end>> {};
+struct constant_assignment : if_must<one<'='>, ws, constant_value> {};
+struct description_close : one<'"'> {};
+struct description_text : star<not_one<'"', '\n'>> {};
+struct description : if_must<one<'"'>, description_text, description_close> {};
+struct declaration_head : seq<name, star<ws, one<','>, ws, name>, ws, one<':'>> {};
+struct declaration : seq<at<declaration_head>, name_list, ws, one<':'>, ws, must<declaration_spec>,
+                         opt<ws, constant_assignment>, opt<ws, description>> {};
+
+// --- Shared dictionaries: use "path" ------------------------------------------------------
+struct use_path_text : star<not_one<'"', '\n'>> {};
+struct use_path_close : one<'"'> {};
+struct use_path : if_must<one<'"'>, use_path_text, use_path_close> {};
+struct use_statement : seq<TAO_PEGTL_STRING("use"), plus<space>, at<one<'"'>>, use_path> {};
+
+// --- One logical line ---------------------------------------------------------------------
+struct statement : sor<use_statement, declaration, formula> {};
+struct line_end : seq<ws, opt<comment>, eof> {};
+struct line : seq<ws, opt<statement>, must<line_end>> {};
+
+} // namespace plumb::notation
+
+namespace plumb::notation {
+// A bare expression, for asking its dimension ("plumb dim").
+struct query_end : seq<ws, opt<comment>, eof> {};
+struct query : seq<ws, first_side, must<query_end>> {};
+} // namespace plumb::notation

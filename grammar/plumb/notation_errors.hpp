@@ -1,0 +1,49 @@
+// Messages for every hard-error point of the grammar, written for the engineer who reads
+// them. Kept apart from notation.hpp so the grammar stays a plain description of the syntax.
+#pragma once
+
+#include "plumb/notation.hpp"
+
+namespace plumb::notation {
+
+// nullptr means "no message of its own": the parser then says "unexpected text here".
+template <typename Rule> inline constexpr const char* error_message = nullptr;
+
+// clang-format off
+template <> inline constexpr const char* error_message<number_end> = "a number runs straight into a name; write a product with '*', as in 2*g";
+template <> inline constexpr const char* error_message<single_star> = "'**' is not an operator here; write a power with '^', as in V^2";
+template <> inline constexpr const char* error_message<negated_operand> = "expected a term after '-'";
+template <> inline constexpr const char* error_message<positive_operand> = "expected a term after '+'";
+template <> inline constexpr const char* error_message<power_operand> = "expected an exponent after '^'";
+template <> inline constexpr const char* error_message<factor> = "expected a term after '*' or '/'";
+template <> inline constexpr const char* error_message<term> = "expected a term after '+' or '-'";
+template <> inline constexpr const char* error_message<expression> = "expected an expression after '('";
+template <> inline constexpr const char* error_message<group_close> = "expected ')' to close the parenthesis";
+template <> inline constexpr const char* error_message<call_close> = "expected ',' or ')' in the function's argument list";
+template <> inline constexpr const char* error_message<argument> = "expected an argument after ','";
+template <> inline constexpr const char* error_message<relation> = "expected an operator, '=' or a comparison (<, <=, >, >=) here";
+template <> inline constexpr const char* error_message<side> = "expected an expression after the '=' or comparison sign";
+template <> inline constexpr const char* error_message<label_name> = "expected a label name after '@', as in @darcy";
+template <> inline constexpr const char* error_message<plus<space>> = "expected a space after the label";
+template <> inline constexpr const char* error_message<dimension_exponent> = "expected an exponent such as 2, -3 or (1/2)";
+template <> inline constexpr const char* error_message<unit_exponent> = "expected an exponent such as 2, -3 or (1/2)";
+template <> inline constexpr const char* error_message<fraction_body> = "expected a number inside the parentheses, such as (1/2)";
+template <> inline constexpr const char* error_message<digits> = "expected a whole number here";
+template <> inline constexpr const char* error_message<fraction_close> = "expected ')' after the exponent";
+template <> inline constexpr const char* error_message<dimension_close> = "expected a base dimension (M, L, T, \u0398, N, I, J) or ']'; write a quotient with negative exponents, as in [L T^-1]";
+template <> inline constexpr const char* error_message<unit_expression> = "expected a unit after '('";
+template <> inline constexpr const char* error_message<unit_group_close> = "expected ')' to close the unit's parenthesis";
+template <> inline constexpr const char* error_message<unit_factor> = "expected a unit after '*' or '/'";
+template <> inline constexpr const char* error_message<declaration_spec> = "expected a dimension such as [M L^-3], a unit such as kg/m^3, or 1 for a dimensionless symbol";
+template <> inline constexpr const char* error_message<constant_value> = "expected a number after '=' (the constant's value in the stated unit)";
+template <> inline constexpr const char* error_message<description_close> = "the description has no closing '\"'";
+template <> inline constexpr const char* error_message<declared_name> = "expected a name after ','";
+template <> inline constexpr const char* error_message<use_path_close> = "the path has no closing '\"'";
+template <> inline constexpr const char* error_message<line_end> = "expected an operator, a comparison or the end of the line here";
+// clang-format on
+
+} // namespace plumb::notation
+
+namespace plumb::notation {
+template <> inline constexpr const char* error_message<query_end> = "expected an operator or the end of the expression here";
+} // namespace plumb::notation

@@ -1,0 +1,51 @@
+// The library's front door: check files or text, or ask the dimension of an expression.
+#pragma once
+
+#include "plumb/diagnostic.hpp"
+#include "plumb/source.hpp"
+
+#include <filesystem>
+#include <memory>
+#include <optional>
+#include <string>
+#include <string_view>
+#include <vector>
+
+namespace plumb {
+
+struct check_options {
+    std::vector<std::filesystem::path> dictionaries; // read before every checked file
+};
+
+struct check_report {
+    // Every file read (checked files, dictionaries, `use`d files); diagnostics point into them.
+    std::vector<std::unique_ptr<source_file>> sources;
+    std::vector<diagnostic> diagnostics;
+    std::size_t files_checked = 0;
+    std::size_t formulas_checked = 0;
+    std::size_t bytes_checked = 0;
+    // True when a path could not be read or a file could not be parsed (exit status 2).
+    bool input_failed = false;
+
+    [[nodiscard]] std::size_t count(severity level) const;
+};
+
+// Checks .plumb files; a directory is searched recursively for *.plumb, in sorted order.
+check_report check_paths(const std::vector<std::filesystem::path>& paths,
+                         const check_options& options = {});
+
+// Checks text held in memory as if it were the file `name` (`use` paths resolve against
+// the current directory).
+check_report check_text(std::string name, std::string text, const check_options& options = {});
+
+// The dimension of `expression` against the symbols the context files declare. Diagnostics
+// about the expression land in report.diagnostics, pointing into a source named "<query>".
+struct query_result {
+    check_report report;
+    std::optional<dimension> dim; // empty when the expression has an error
+};
+query_result query_dimension(std::string expression,
+                             const std::vector<std::filesystem::path>& context_files,
+                             const check_options& options = {});
+
+} // namespace plumb

@@ -1,0 +1,26 @@
+// Renderers: diagnostics as compiler-style text or as one JSON document.
+#pragma once
+
+#include "plumb/check.hpp"
+
+#include <string>
+
+namespace plumb {
+
+struct text_style {
+    bool colour = false;
+};
+
+// GNU form: "file:line:col: severity: message [rule]", the source line with the range
+// underlined, then notes with each disagreeing term's dimension.
+std::string render_text(const diagnostic& d, const text_style& style = {});
+// All diagnostics followed by a one-line summary and the caution.
+std::string render_text(const check_report& report, const text_style& style = {});
+
+// Said with every report: a consistent formula can still be wrong.
+std::string_view caution_text();
+
+// The JSON document described in the README ("plumb check --format json").
+std::string render_json(const check_report& report);
+
+} // namespace plumb

@@ -1,0 +1,36 @@
+// The stable ids of every rule. They appear in output and in `# expect:` comments; never
+// rename one.
+#pragma once
+
+#include <span>
+#include <string_view>
+
+namespace plumb::rules {
+
+inline constexpr std::string_view syntax = "syntax";
+inline constexpr std::string_view sum_mismatch = "sum-mismatch";
+inline constexpr std::string_view side_mismatch = "side-mismatch";
+inline constexpr std::string_view dimensioned_argument = "dimensioned-argument";
+inline constexpr std::string_view dimensioned_exponent = "dimensioned-exponent";
+inline constexpr std::string_view variable_exponent = "variable-exponent";
+inline constexpr std::string_view argument_mismatch = "argument-mismatch";
+inline constexpr std::string_view undeclared = "undeclared";
+inline constexpr std::string_view unused = "unused";
+inline constexpr std::string_view conflicting_declaration = "conflicting-declaration";
+inline constexpr std::string_view reserved_name = "reserved-name";
+inline constexpr std::string_view unknown_unit = "unknown-unit";
+inline constexpr std::string_view unknown_function = "unknown-function";
+inline constexpr std::string_view wrong_arity = "wrong-arity";
+inline constexpr std::string_view overflow = "overflow";
+inline constexpr std::string_view unreadable = "unreadable";
+inline constexpr std::string_view include_cycle = "include-cycle";
+
+struct rule_info {
+    std::string_view id;
+    std::string_view summary;
+};
+
+// Every rule with a one-line summary, for `plumb rules` and the README.
+std::span<const rule_info> all();
+
+} // namespace plumb::rules

@@ -1,0 +1,49 @@
+// A source file held in memory with a line index, and byte ranges into it.
+#pragma once
+
+#include <cstdint>
+#include <string>
+#include <string_view>
+#include <vector>
+
+namespace plumb {
+
+// A half-open byte range [begin, end) in one source file.
+struct span {
+    std::uint32_t begin = 0;
+    std::uint32_t end = 0;
+};
+
+struct line_column {
+    std::uint32_t line = 1;   // 1-based
+    std::uint32_t column = 1; // 1-based, in characters (UTF-8 code points), as editors count
+};
+
+class source_file {
+  public:
+    source_file(std::string path, std::string text);
+
+    [[nodiscard]] const std::string& path() const { return path_; }
+    [[nodiscard]] std::string_view text() const { return text_; }
+    [[nodiscard]] std::string_view text(span s) const {
+        return std::string_view(text_).substr(s.begin, s.end - s.begin);
+    }
+
+    [[nodiscard]] line_column position(std::uint32_t byte_offset) const;
+    // Byte offset where a 1-based line starts.
+    [[nodiscard]] std::uint32_t line_start(std::uint32_t line) const {
+        return line_starts_[line - 1];
+    }
+    // The text of a 1-based line without its line break.
+    [[nodiscard]] std::string_view line_text(std::uint32_t line) const;
+    [[nodiscard]] std::uint32_t line_count() const {
+        return static_cast<std::uint32_t>(line_starts_.size());
+    }
+
+  private:
+    std::string path_;
+    std::string text_;
+    std::vector<std::uint32_t> line_starts_;
+};
+
+} // namespace plumb

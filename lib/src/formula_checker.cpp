@@ -1,0 +1,604 @@
+// Gives every subexpression a dimension and applies the rules where dimensions meet: the
+// terms of a sum, the sides of a formula, function arguments and exponents.
+#include "formula_checker.hpp"
+
+#include "edit_distance.hpp"
+#include "functions.hpp"
+#include "plumb/rules.hpp"
+
+#include <algorithm>
+#include <fmt/format.h>
+
+namespace plumb {
+namespace {
+
+using syntax::expr_kind;
+
+// A subexpression's type: its dimension, and what the rules need to know about its value.
+struct typed {
+    dimension dim;
+    bool known = true;    // false below an error already reported: stops cascades
+    bool zero = false;    // the literal 0, which agrees with any dimension
+    bool numeric = false; // built from numbers alone
+    std::optional<rational> value; // exact value, when numeric and exactly representable
+};
+
+typed unknown_type() {
+    typed t;
+    t.known = false;
+    return t;
+}
+
+std::string describe(const dimension& d) {
+    const std::string_view name = quantity_name(d);
+    if (name.empty() || d.is_dimensionless())
+        return d.is_dimensionless() ? std::string("[1] (dimensionless)") : d.to_string();
+    return fmt::format("{} ({})", d.to_string(), name);
+}
+
+// The operands of one meeting point (terms of a sum, arguments, sides of a formula).
+struct operand {
+    std::uint32_t node;
+    typed type;
+};
+
+struct agreement {
+    std::optional<dimension> reference; // the dimension most operands share
+    std::vector<std::size_t> odd;       // operands that differ from it
+};
+
+// The reference is the dimension most operands share (the first such on a tie), so that one
+// wrong term among several right ones is the one pointed at.
+agreement find_agreement(const std::vector<operand>& ops) {
+    agreement result;
+    std::vector<std::pair<dimension, std::size_t>> counts;
+    for (const auto& op : ops) {
+        if (!op.type.known || op.type.zero)
+            continue;
+        auto it = std::find_if(counts.begin(), counts.end(),
+                               [&](const auto& c) { return c.first == op.type.dim; });
+        if (it == counts.end())
+            counts.emplace_back(op.type.dim, 1);
+        else
+            ++it->second;
+    }
+    if (counts.empty())
+        return result;
+    std::size_t best = 0;
+    for (std::size_t i = 1; i < counts.size(); ++i)
+        if (counts[i].second > counts[best].second)
+            best = i;
+    result.reference = counts[best].first;
+    for (std::size_t i = 0; i < ops.size(); ++i)
+        if (ops[i].type.known && !ops[i].type.zero && !(ops[i].type.dim == *result.reference))
+            result.odd.push_back(i);
+    return result;
+}
+
+class checker {
+  public:
+    checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out)
+        : file_(file), symbols_(symbols), out_(out) {}
+
+    typed eval(std::uint32_t index) {
+        const syntax::expr_node& n = file_.nodes[index];
+        switch (n.kind) {
+        case expr_kind::number:
+            return eval_number(n);
+        case expr_kind::pi: {
+            typed t;
+            t.numeric = true;
+            return t;
+        }
+        case expr_kind::symbol:
+            return eval_symbol(n);
+        case expr_kind::negate: {
+            typed t = eval(n.lhs);
+            if (t.value)
+                t.value = -*t.value;
+            return t;
+        }
+        case expr_kind::add:
+        case expr_kind::subtract:
+            return eval_sum(index);
+        case expr_kind::multiply:
+        case expr_kind::divide:
+            return eval_product(index);
+        case expr_kind::power:
+            return apply_power(eval(n.lhs), eval(n.rhs), n.lhs, n.rhs);
+        case expr_kind::call:
+            return eval_call(n);
+        }
+        return unknown_type();
+    }
+
+    void check_formula(const syntax::formula& f) {
+        std::vector<operand> sides;
+        bool equation = true;
+        for (std::uint32_t i = 0; i < f.side_count; ++i) {
+            const syntax::formula_side& s = file_.sides[f.first_side + i];
+            if (s.relation_before != syntax::relation_kind::none &&
+                s.relation_before != syntax::relation_kind::equal)
+                equation = false;
+            sides.push_back({s.root, eval(s.root)});
+        }
+        const agreement a = find_agreement(sides);
+        if (a.odd.empty())
+            return;
+        const char* what = equation ? "equation" : "limit";
+        std::string message = sides.size() == 2
+                                  ? fmt::format("the two sides of this {} differ in dimension", what)
+                                  : fmt::format("the sides of this {} differ in dimension", what);
+        diagnostic& d = report(rules::side_mismatch, std::move(message),
+                               file_.nodes[sides[a.odd.front()].node].range);
+        for (std::size_t i = 0; i < sides.size(); ++i) {
+            if (!sides[i].type.known)
+                continue;
+            add_term(d, sides[i]);
+            const char* position = sides.size() == 2 ? (i == 0 ? "left side " : "right side ") : "";
+            d.notes.push_back({fmt::format("{}{} is {}", position, quote(sides[i].node),
+                                           describe(sides[i].type.dim)),
+                               {}});
+        }
+    }
+
+    std::string display_text(span s) const {
+        const std::string_view raw = file_.source->text(s);
+        std::string out;
+        bool pending_space = false;
+        for (std::size_t i = 0; i < raw.size(); ++i) {
+            char c = raw[i];
+            if (c == '\\' || c == '#') {
+                // A continuation: skip its comment and line break.
+                const std::size_t nl = raw.find('\n', i);
+                if (nl == std::string_view::npos)
+                    break;
+                i = nl;
+                pending_space = true;
+                continue;
+            }
+            if (c == ' ' || c == '\t' || c == '\r' || c == '\n') {
+                pending_space = true;
+                continue;
+            }
+            if (pending_space && !out.empty())
+                out += ' ';
+            pending_space = false;
+            out += c;
+        }
+        return out;
+    }
+
+  private:
+    const syntax::parsed_file& file_;
+    symbol_table& symbols_;
+    std::vector<diagnostic>& out_;
+
+    std::string_view text(span s) const { return file_.source->text(s); }
+
+    // 'text' for messages, shortened so one long term cannot swamp a line.
+    std::string quote(std::uint32_t node) const {
+        std::string t = display_text(file_.nodes[node].range);
+        constexpr std::size_t limit = 48;
+        if (t.size() > limit) {
+            std::size_t cut = limit;
+            while (cut > 0 && (static_cast<unsigned char>(t[cut]) & 0xC0) == 0x80)
+                --cut;
+            t = t.substr(0, cut) + "\u2026";
+        }
+        const syntax::expr_node& n = file_.nodes[node];
+        if (n.kind == expr_kind::symbol) {
+            if (const symbol_entry* e = symbols_.find(text(n.range));
+                e != nullptr && !e->description.empty())
+                return fmt::format("'{}' ({})", t, e->description);
+        }
+        return fmt::format("'{}'", t);
+    }
+
+    diagnostic& report(std::string_view rule, std::string message, span where) {
+        diagnostic d;
+        d.level = severity::error;
+        d.rule = std::string(rule);
+        d.message = std::move(message);
+        d.where = {file_.source, where};
+        out_.push_back(std::move(d));
+        return out_.back();
+    }
+
+    void add_term(diagnostic& d, const operand& op) const {
+        d.terms.push_back({{file_.source, file_.nodes[op.node].range},
+                           display_text(file_.nodes[op.node].range),
+                           op.type.dim});
+    }
+
+    // Notes for operands that disagree: each odd one with its dimension, then the rest.
+    void explain(diagnostic& d, const std::vector<operand>& ops, const agreement& a,
+                 std::string_view others) const {
+        for (const auto& op : ops)
+            if (op.type.known)
+                add_term(d, op);
+        for (std::size_t i : a.odd)
+            d.notes.push_back(
+                {fmt::format("{} is {}", quote(ops[i].node), describe(ops[i].type.dim)), {}});
+        std::vector<std::string> agreeing;
+        for (std::size_t i = 0; i < ops.size(); ++i)
+            if (ops[i].type.known && !ops[i].type.zero &&
+                std::find(a.odd.begin(), a.odd.end(), i) == a.odd.end())
+                agreeing.push_back(quote(ops[i].node));
+        if (agreeing.size() == 1)
+            d.notes.push_back(
+                {fmt::format("{} is {}", agreeing.front(), describe(*a.reference)), {}});
+        else if (!agreeing.empty())
+            d.notes.push_back({fmt::format("the other {} are {}: {}", others,
+                                           describe(*a.reference), fmt::join(agreeing, ", ")),
+                               {}});
+    }
+
+    typed eval_number(const syntax::expr_node& n) const {
+        typed t;
+        t.numeric = true;
+        t.value = rational::parse(text(n.range));
+        t.zero = t.value && t.value->is_zero();
+        return t;
+    }
+
+    typed eval_symbol(const syntax::expr_node& n) {
+        const std::string_view name = text(n.range);
+        symbol_entry* entry = symbols_.find(name);
+        if (entry == nullptr) {
+            diagnostic& d =
+                report(rules::undeclared, fmt::format("'{}' is not declared", name), n.range);
+            const auto near = symbols_.nearest(name);
+            if (!near.empty()) {
+                std::string list;
+                for (std::size_t i = 0; i < near.size(); ++i)
+                    list += fmt::format("{}'{}'", i == 0 ? "" : (i + 1 == near.size() ? " or " : ", "),
+                                        near[i]);
+                d.notes.push_back({fmt::format("did you mean {}?", list), {}});
+            }
+            if (find_function(name) != nullptr)
+                d.notes.push_back(
+                    {fmt::format("'{}' is a function; call it as {}(x)", name, name), {}});
+            else
+                d.notes.push_back({fmt::format("declare it with its dimension or unit, as in "
+                                               "'{} : [L]' or '{} : m'",
+                                               name, name),
+                                   {}});
+            return unknown_type();
+        }
+        entry->used = true;
+        if (!entry->dim)
+            return unknown_type();
+        typed t;
+        t.dim = *entry->dim;
+        return t;
+    }
+
+    typed eval_sum(std::uint32_t index) {
+        // Walk the left spine iteratively: a long sum must not recurse once per term.
+        std::vector<std::pair<std::uint32_t, bool>> parts; // node, subtracted
+        std::uint32_t n = index;
+        while (file_.nodes[n].kind == expr_kind::add || file_.nodes[n].kind == expr_kind::subtract) {
+            parts.emplace_back(file_.nodes[n].rhs, file_.nodes[n].kind == expr_kind::subtract);
+            n = file_.nodes[n].lhs;
+        }
+        parts.emplace_back(n, false);
+        std::reverse(parts.begin(), parts.end());
+
+        std::vector<operand> terms;
+        terms.reserve(parts.size());
+        typed result;
+        result.numeric = true;
+        result.zero = true;
+        result.value = rational(0);
+        for (const auto& [node, subtracted] : parts) {
+            typed t = eval(node);
+            result.known = result.known && t.known;
+            result.numeric = result.numeric && t.numeric;
+            result.zero = result.zero && t.zero;
+            if (result.value && t.value)
+                result.value = subtracted ? *result.value - *t.value : *result.value + *t.value;
+            else
+                result.value.reset();
+            terms.push_back({node, std::move(t)});
+        }
+        const agreement a = find_agreement(terms);
+        if (!a.odd.empty()) {
+            const std::size_t first_odd = a.odd.front();
+            std::string message;
+            if (terms.size() == 2) {
+                const bool subtracted = parts[1].second;
+                message = fmt::format("cannot {} {} {} {}: their dimensions differ",
+                                      subtracted ? "subtract" : "add", quote(terms[1].node),
+                                      subtracted ? "from" : "to", quote(terms[0].node));
+            } else {
+                message = fmt::format("{} does not have the dimension of the other terms of this sum",
+                                      quote(terms[first_odd].node));
+            }
+            diagnostic& d =
+                report(rules::sum_mismatch, std::move(message), file_.nodes[terms[first_odd].node].range);
+            explain(d, terms, a, "terms");
+            return unknown_type();
+        }
+        if (!result.known)
+            return unknown_type();
+        if (a.reference)
+            result.dim = *a.reference;
+        if (!result.numeric)
+            result.value.reset();
+        return result;
+    }
+
+    typed eval_product(std::uint32_t index) {
+        std::vector<std::pair<std::uint32_t, bool>> factors; // node, divided
+        std::uint32_t n = index;
+        while (file_.nodes[n].kind == expr_kind::multiply || file_.nodes[n].kind == expr_kind::divide) {
+            factors.emplace_back(file_.nodes[n].rhs, file_.nodes[n].kind == expr_kind::divide);
+            n = file_.nodes[n].lhs;
+        }
+        typed result = eval(n);
+        result.zero = false;
+        for (auto it = factors.rbegin(); it != factors.rend(); ++it) {
+            const typed t = eval(it->first);
+            const bool divided = it->second;
+            result.known = result.known && t.known;
+            result.numeric = result.numeric && t.numeric;
+            if (result.known)
+                result.dim = divided ? result.dim / t.dim : result.dim * t.dim;
+            if (result.value && t.value && !(divided && t.value->is_zero())) {
+                try {
+                    result.value = divided ? *result.value / *t.value : *result.value * *t.value;
+                } catch (const arithmetic_overflow&) {
+                    result.value.reset(); // the value only matters to exponents; see apply_power
+                }
+            } else {
+                result.value.reset();
+            }
+        }
+        if (!result.known)
+            return unknown_type();
+        return result;
+    }
+
+    typed apply_power(const typed& base, const typed& exponent, std::uint32_t base_node,
+                      std::uint32_t exponent_node) {
+        if (exponent.known && !exponent.dim.is_dimensionless()) {
+            diagnostic& d = report(rules::dimensioned_exponent,
+                                   fmt::format("the exponent {} has a dimension; an exponent must "
+                                               "be dimensionless",
+                                               quote(exponent_node)),
+                                   file_.nodes[exponent_node].range);
+            add_term(d, {exponent_node, exponent});
+            d.notes.push_back({fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}});
+            return unknown_type();
+        }
+        if (!base.known || !exponent.known)
+            return unknown_type();
+        typed result;
+        result.numeric = base.numeric && exponent.numeric;
+        if (base.dim.is_dimensionless())
+            return result;
+        if (!exponent.value) {
+            const char* why = exponent.numeric ? "is not a number plumb can hold exactly"
+                                               : "is not a constant number";
+            diagnostic& d = report(
+                rules::variable_exponent,
+                fmt::format("{} has a dimension, so its exponent must be a constant number, but {} {}",
+                            quote(base_node), quote(exponent_node), why),
+                file_.nodes[exponent_node].range);
+            add_term(d, {base_node, base});
+            d.notes.push_back({fmt::format("{} is {}", quote(base_node), describe(base.dim)), {}});
+            d.notes.push_back({"the dimension of the power would depend on the exponent's value; "
+                               "make the base dimensionless (divide by a reference value) first",
+                               {}});
+            return unknown_type();
+        }
+        result.dim = base.dim.pow(*exponent.value);
+        return result;
+    }
+
+    std::string_view call_name(const syntax::expr_node& n) const {
+        std::string_view t = text(n.range);
+        t = t.substr(0, t.find('('));
+        while (!t.empty() && (t.back() == ' ' || t.back() == '\t'))
+            t.remove_suffix(1);
+        return t;
+    }
+
+    typed eval_call(const syntax::expr_node& n) {
+        const std::string_view name = call_name(n);
+        const span name_range{n.range.begin, n.range.begin + static_cast<std::uint32_t>(name.size())};
+        std::vector<operand> args;
+        for (std::uint32_t i = 0; i < n.rhs; ++i) {
+            const std::uint32_t node = file_.call_args[n.lhs + i];
+            args.push_back({node, eval(node)});
+        }
+        const builtin_function* f = find_function(name);
+        if (f == nullptr) {
+            diagnostic& d = report(rules::unknown_function,
+                                   fmt::format("'{}' is not a known function", name), name_range);
+            std::string_view best;
+            std::size_t best_distance = 3;
+            for (const auto& candidate : builtin_functions()) {
+                const std::size_t dist = edit_distance(name, candidate.name, 2);
+                if (dist < best_distance) {
+                    best_distance = dist;
+                    best = candidate.name;
+                }
+            }
+            if (!best.empty())
+                d.notes.push_back({fmt::format("did you mean '{}'?", best), {}});
+            if (symbols_.find(name) != nullptr)
+                d.notes.push_back({fmt::format("'{}' is a declared symbol; write a product with '*', "
+                                               "as in {}*(...)",
+                                               name, name),
+                                   {}});
+            return unknown_type();
+        }
+        const std::size_t count = args.size();
+        if (count < f->min_args || count > f->max_args ||
+            (f->rule == function_rule::integral && count == 3)) {
+            std::string expected;
+            if (f->rule == function_rule::integral)
+                expected = "2 arguments (or 4, with the limits)";
+            else if (f->min_args == f->max_args)
+                expected = fmt::format("{} argument{}", f->min_args, f->min_args == 1 ? "" : "s");
+            else if (f->max_args == 255)
+                expected = fmt::format("at least {} arguments", f->min_args);
+            else
+                expected = fmt::format("{} to {} arguments", f->min_args, f->max_args);
+            report(rules::wrong_arity,
+                   fmt::format("{} takes {}, but {} {} given", f->name, expected, count,
+                               count == 1 ? "is" : "are"),
+                   n.range);
+            return unknown_type();
+        }
+        typed result;
+        result.numeric = std::all_of(args.begin(), args.end(),
+                                     [](const operand& a) { return a.type.numeric; });
+        switch (f->rule) {
+        case function_rule::root:
+            if (!args[0].type.known)
+                return unknown_type();
+            result.dim = args[0].type.dim.pow(f->power);
+            return result;
+        case function_rule::same:
+            if (!args[0].type.known)
+                return unknown_type();
+            result.dim = args[0].type.dim;
+            return result;
+        case function_rule::dimensionless:
+        case function_rule::log_base:
+            for (const auto& a : args)
+                require_dimensionless(*f, a);
+            return result;
+        case function_rule::angle_of:
+        case function_rule::common: {
+            const agreement a = find_agreement(args);
+            if (!a.odd.empty()) {
+                diagnostic& d = report(
+                    rules::argument_mismatch,
+                    fmt::format("the arguments of {} differ in dimension", f->name),
+                    file_.nodes[args[a.odd.front()].node].range);
+                explain(d, args, a, "arguments");
+                return unknown_type();
+            }
+            if (f->rule == function_rule::angle_of)
+                return result;
+            if (!std::all_of(args.begin(), args.end(), [](const operand& o) { return o.type.known; }))
+                return unknown_type();
+            result.dim = a.reference.value_or(dimension{});
+            return result;
+        }
+        case function_rule::power:
+            return apply_power(args[0].type, args[1].type, args[0].node, args[1].node);
+        case function_rule::derivative:
+            return derivative(args);
+        case function_rule::integral:
+            return integral(args);
+        }
+        return unknown_type();
+    }
+
+    void require_dimensionless(const builtin_function& f, const operand& a) {
+        if (!a.type.known || a.type.dim.is_dimensionless())
+            return;
+        const bool trig = f.name.find("sin") != std::string_view::npos ||
+                          f.name.find("cos") != std::string_view::npos ||
+                          f.name.find("tan") != std::string_view::npos;
+        diagnostic& d = report(rules::dimensioned_argument,
+                               fmt::format("{} needs a dimensionless argument, but {} is {}", f.name,
+                                           quote(a.node), describe(a.type.dim)),
+                               file_.nodes[a.node].range);
+        add_term(d, a);
+        d.notes.push_back({trig ? std::string("an angle is dimensionless: give it in radians, or "
+                                              "as a ratio of two lengths")
+                                : std::string("divide by a reference value of the same dimension, "
+                                              "as in ln(p/p_ref)"),
+                           {}});
+    }
+
+    typed derivative(const std::vector<operand>& args) {
+        rational order = 1;
+        if (args.size() == 3) {
+            const typed& n = args[2].type;
+            if (!n.value || !n.value->is_integer() || n.value->num() < 1) {
+                report(rules::variable_exponent,
+                       fmt::format("the order of deriv must be a whole number such as 2, but {} is "
+                                   "not",
+                                   quote(args[2].node)),
+                       file_.nodes[args[2].node].range);
+                return unknown_type();
+            }
+            order = *n.value;
+        }
+        if (!args[0].type.known || !args[1].type.known)
+            return unknown_type();
+        typed result;
+        result.dim = args[0].type.dim / args[1].type.dim.pow(order);
+        return result;
+    }
+
+    typed integral(const std::vector<operand>& args) {
+        if (args.size() == 4) {
+            const std::vector<operand> variable_and_limits = {args[1], args[2], args[3]};
+            const agreement a = find_agreement(variable_and_limits);
+            if (!a.odd.empty()) {
+                diagnostic& d = report(
+                    rules::argument_mismatch,
+                    fmt::format("the limits of integral must have the dimension of the variable {}",
+                                quote(args[1].node)),
+                    file_.nodes[variable_and_limits[a.odd.front()].node].range);
+                explain(d, variable_and_limits, a, "arguments");
+                return unknown_type();
+            }
+        }
+        if (!args[0].type.known || !args[1].type.known)
+            return unknown_type();
+        typed result;
+        result.dim = args[0].type.dim * args[1].type.dim;
+        return result;
+    }
+};
+
+} // namespace
+
+void check_formulas(const syntax::parsed_file& file, symbol_table& symbols,
+                    std::vector<diagnostic>& out) {
+    checker c(file, symbols, out);
+    for (const auto& f : file.formulas) {
+        const std::size_t before = out.size();
+        try {
+            c.check_formula(f);
+        } catch (const arithmetic_overflow&) {
+            out.resize(before);
+            diagnostic d;
+            d.rule = std::string(rules::overflow);
+            d.message = "the exponents in this formula exceed the exact range (64-bit numerator "
+                        "and denominator)";
+            d.where = {file.source, f.range};
+            out.push_back(std::move(d));
+        }
+    }
+}
+
+std::optional<dimension> expression_dimension(const syntax::parsed_file& file, std::uint32_t root,
+                                              symbol_table& symbols, std::vector<diagnostic>& out) {
+    checker c(file, symbols, out);
+    const std::size_t before = out.size();
+    try {
+        const auto t = c.eval(root);
+        if (!t.known || out.size() != before)
+            return std::nullopt;
+        return t.dim;
+    } catch (const arithmetic_overflow&) {
+        diagnostic d;
+        d.rule = std::string(rules::overflow);
+        d.message = "the exponents in this expression exceed the exact range";
+        d.where = {file.source, file.nodes[root].range};
+        out.push_back(std::move(d));
+        return std::nullopt;
+    }
+}
+
+} // namespace plumb

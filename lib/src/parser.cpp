@@ -1,0 +1,561 @@
+// Builds the syntax tree from PEGTL actions. Actions fire only on success, and every choice
+// point in an expression either commits (must<>) or fails before any action ran, so the
+// operand stack is always consistent.
+#include "parser.hpp"
+
+#include "plumb/notation.hpp"
+#include "plumb/notation_errors.hpp"
+#include "plumb/rules.hpp"
+
+#include <cmath>
+#include <cstring>
+#include <fmt/core.h>
+
+namespace plumb {
+namespace {
+
+namespace pg = tao::pegtl;
+namespace nt = plumb::notation;
+using syntax::expr_kind;
+using syntax::relation_kind;
+
+// Raised by the control class at a hard-error point; carries the message from
+// notation_errors.hpp and the byte where the grammar gave up.
+struct syntax_failure {
+    const char* message;
+    const char* at;
+};
+
+// Nesting deeper than this is no formula a person wrote; refusing it keeps the parser's
+// recursion (and the checker's) far from the stack's end on hostile input.
+constexpr int max_nesting = 256;
+
+struct parse_state;
+int& nesting_depth(parse_state& s);
+
+template <typename Rule> struct control : pg::normal<Rule> {
+    static constexpr bool nests =
+        std::is_same_v<Rule, nt::unary> || std::is_same_v<Rule, nt::unit_primary>;
+
+    template <typename Input, typename... States>
+    static void start(const Input& in, States&... st) {
+        if constexpr (nests) {
+            if (++nesting_depth(st...) > max_nesting)
+                throw syntax_failure{"this formula nests too deeply to check", in.current()};
+        }
+    }
+    template <typename Input, typename... States>
+    static void success(const Input& /*in*/, States&... st) {
+        if constexpr (nests)
+            --nesting_depth(st...);
+    }
+    template <typename Input, typename... States>
+    static void failure(const Input& /*in*/, States&... st) {
+        if constexpr (nests)
+            --nesting_depth(st...);
+    }
+
+    template <typename Input, typename... States>
+    [[noreturn]] static void raise(const Input& in, States&&... /*unused*/) {
+        constexpr const char* own = nt::error_message<Rule>;
+        throw syntax_failure{own != nullptr ? own : "unexpected text here", in.current()};
+    }
+};
+
+// A unit expression's value while it is being built.
+struct unit_value {
+    dimension dim;
+    double factor = 1.0;
+    const unit_definition* single = nullptr;
+    bool ok = true;
+};
+
+struct parse_state {
+    parse_state(const source_file& f, syntax::parsed_file& o)
+        : file(f), out(o), file_begin(f.text().data()) {}
+
+    const source_file& file;
+    syntax::parsed_file& out;
+    const char* file_begin;
+
+    std::vector<std::uint32_t> operands;
+    std::vector<std::uint32_t> argument_counts;
+    int depth = 0;
+    std::uint32_t formula_first_side = 0;
+    relation_kind pending_relation = relation_kind::none;
+    span pending_label{};
+
+    // Declaration under construction.
+    syntax::declared_kind pending_kind{};
+    span pending_spec{}, pending_value{}, pending_description{};
+    std::uint32_t pending_first_name = 0;
+    bool spec_in_brackets = false;
+    dimension bracket_dimension;
+    base_dimension pending_base = base_dimension::mass;
+    std::optional<rational> pending_exponent;
+    std::vector<unit_value> units;
+    span pending_use_path{};
+
+    [[nodiscard]] span range(const char* b, const char* e) const {
+        return {static_cast<std::uint32_t>(b - file_begin), static_cast<std::uint32_t>(e - file_begin)};
+    }
+    template <typename Input> [[nodiscard]] span range(const Input& in) const {
+        return range(in.begin(), in.end());
+    }
+
+    std::uint32_t push_node(syntax::expr_node n) {
+        out.nodes.push_back(n);
+        const auto index = static_cast<std::uint32_t>(out.nodes.size() - 1);
+        operands.push_back(index);
+        return index;
+    }
+    std::uint32_t pop() {
+        const std::uint32_t v = operands.back();
+        operands.pop_back();
+        return v;
+    }
+    void push_binary(expr_kind kind) {
+        const std::uint32_t rhs = pop();
+        const std::uint32_t lhs = pop();
+        const span r{out.nodes[lhs].range.begin, out.nodes[rhs].range.end};
+        push_node({kind, r, lhs, rhs});
+    }
+    void reset_line() {
+        depth = 0;
+        operands.clear();
+        argument_counts.clear();
+        pending_relation = relation_kind::none;
+        pending_label = {};
+        pending_kind = {};
+        pending_spec = pending_value = pending_description = {};
+        pending_first_name = static_cast<std::uint32_t>(out.names.size());
+        spec_in_brackets = false;
+        bracket_dimension = {};
+        pending_exponent.reset();
+        units.clear();
+    }
+    void report(std::string_view rule, std::string message, span where) {
+        diagnostic d;
+        d.level = severity::error;
+        d.rule = std::string(rule);
+        d.message = std::move(message);
+        d.where = {&file, where};
+        out.diagnostics.push_back(std::move(d));
+    }
+};
+
+int& nesting_depth(parse_state& s) { return s.depth; }
+
+// "(1/2)", "( -3 / 2 )", "-3", "0.5" to an exact rational.
+std::optional<rational> exponent_value(std::string_view text) {
+    std::string compact;
+    for (char c : text)
+        if (c != '(' && c != ')' && c != ' ' && c != '\t' && c != '+')
+            compact += c;
+    return rational::parse(compact);
+}
+
+template <typename Rule> struct action : pg::nothing<Rule> {};
+
+// --- Expressions ---
+template <> struct action<nt::number_term> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.push_node({expr_kind::number, s.range(in)});
+    }
+};
+template <> struct action<nt::pi_constant> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.push_node({expr_kind::pi, s.range(in)});
+    }
+};
+template <> struct action<nt::symbol> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.push_node({expr_kind::symbol, s.range(in)});
+    }
+};
+template <> struct action<nt::call_open> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.argument_counts.push_back(0);
+    }
+};
+template <> struct action<nt::argument> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        ++s.argument_counts.back();
+    }
+};
+template <> struct action<nt::call> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const std::uint32_t count = s.argument_counts.back();
+        s.argument_counts.pop_back();
+        const auto first = static_cast<std::uint32_t>(s.out.call_args.size());
+        const std::size_t base = s.operands.size() - count;
+        for (std::size_t i = base; i < s.operands.size(); ++i)
+            s.out.call_args.push_back(s.operands[i]);
+        s.operands.resize(base);
+        s.push_node({expr_kind::call, s.range(in), first, count});
+    }
+};
+template <> struct action<nt::group> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.out.nodes[s.operands.back()].range = s.range(in);
+    }
+};
+template <> struct action<nt::power_tail> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.push_binary(expr_kind::power);
+    }
+};
+template <> struct action<nt::negation> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const std::uint32_t operand = s.pop();
+        s.push_node({expr_kind::negate, s.range(in), operand});
+    }
+};
+template <> struct action<nt::positive> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.out.nodes[s.operands.back()].range = s.range(in);
+    }
+};
+template <> struct action<nt::multiply_tail> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.push_binary(expr_kind::multiply);
+    }
+};
+template <> struct action<nt::divide_tail> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.push_binary(expr_kind::divide);
+    }
+};
+template <> struct action<nt::add_tail> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.push_binary(expr_kind::add);
+    }
+};
+template <> struct action<nt::subtract_tail> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.push_binary(expr_kind::subtract);
+    }
+};
+
+// --- Formulas ---
+template <relation_kind Kind> struct relation_action {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.pending_relation = Kind;
+    }
+};
+template <> struct action<nt::equal> : relation_action<relation_kind::equal> {};
+template <> struct action<nt::less> : relation_action<relation_kind::less> {};
+template <> struct action<nt::less_equal> : relation_action<relation_kind::less_equal> {};
+template <> struct action<nt::greater> : relation_action<relation_kind::greater> {};
+template <> struct action<nt::greater_equal> : relation_action<relation_kind::greater_equal> {};
+
+template <> struct action<nt::label_name> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_label = s.range(in);
+    }
+};
+template <> struct action<nt::first_side> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.formula_first_side = static_cast<std::uint32_t>(s.out.sides.size());
+        s.out.sides.push_back({s.pop(), relation_kind::none});
+    }
+};
+template <> struct action<nt::side> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.out.sides.push_back({s.pop(), s.pending_relation});
+    }
+};
+template <> struct action<nt::formula> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const auto count = static_cast<std::uint32_t>(s.out.sides.size()) - s.formula_first_side;
+        s.out.formulas.push_back({s.range(in), s.pending_label, s.formula_first_side, count});
+    }
+};
+
+// --- Dimensions in brackets ---
+template <base_dimension Base> struct base_action {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.pending_base = Base;
+        s.pending_exponent.reset();
+    }
+};
+template <> struct action<nt::base_mass> : base_action<base_dimension::mass> {};
+template <> struct action<nt::base_length> : base_action<base_dimension::length> {};
+template <> struct action<nt::base_time> : base_action<base_dimension::time> {};
+template <> struct action<nt::base_temperature> : base_action<base_dimension::temperature> {};
+template <> struct action<nt::base_amount> : base_action<base_dimension::amount> {};
+template <> struct action<nt::base_current> : base_action<base_dimension::current> {};
+template <> struct action<nt::base_luminous> : base_action<base_dimension::luminous_intensity> {};
+
+template <typename In> void read_exponent(const In& in, parse_state& s) {
+    s.pending_exponent = exponent_value(in.string_view());
+    if (!s.pending_exponent) {
+        s.report(rules::overflow, "this exponent is too large to hold exactly", s.range(in));
+        s.pending_exponent = rational(0);
+    }
+}
+template <> struct action<nt::dimension_exponent> {
+    template <typename In> static void apply(const In& in, parse_state& s) { read_exponent(in, s); }
+};
+template <> struct action<nt::dimension_factor> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.bracket_dimension =
+            s.bracket_dimension * dimension::base(s.pending_base).pow(s.pending_exponent.value_or(1));
+        s.pending_exponent.reset();
+    }
+};
+template <> struct action<nt::dimension_brackets> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.spec_in_brackets = true;
+    }
+};
+
+// --- Units ---
+template <> struct action<nt::unit_symbol> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const std::string_view text = in.string_view();
+        const auto unit = unit_table::standard().resolve(text);
+        if (!unit) {
+            std::string message = fmt::format("unknown unit '{}'", text);
+            const auto near = unit_table::standard().nearest(text);
+            if (!near.empty()) {
+                message += "; did you mean ";
+                for (std::size_t i = 0; i < near.size(); ++i)
+                    message += fmt::format("{}'{}'", i == 0 ? "" : (i + 1 == near.size() ? " or " : ", "),
+                                           near[i]);
+            }
+            s.report(rules::unknown_unit, message, s.range(in));
+            diagnostic& d = s.out.diagnostics.back();
+            d.notes.push_back({"a unit the table lacks can be written as a dimension instead, such as "
+                               "[L T^-1]; `plumb units` lists the built-in units",
+                               {}});
+            s.units.push_back({{}, 1.0, nullptr, false});
+            return;
+        }
+        s.units.push_back({unit->dim(), unit->factor(), unit->prefix ? nullptr : unit->unit, true});
+    }
+};
+template <> struct action<nt::unit_one> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.units.push_back({});
+    }
+};
+template <> struct action<nt::unit_percent> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.units.push_back({{}, 0.01, nullptr, true});
+    }
+};
+template <> struct action<nt::unit_exponent> {
+    template <typename In> static void apply(const In& in, parse_state& s) { read_exponent(in, s); }
+};
+template <> struct action<nt::unit_power> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        if (!s.pending_exponent)
+            return;
+        unit_value& top = s.units.back();
+        const rational e = *s.pending_exponent;
+        s.pending_exponent.reset();
+        top.dim = top.dim.pow(e);
+        top.factor = std::pow(top.factor, e.to_double());
+        top.single = nullptr;
+    }
+};
+template <> struct action<nt::unit_factor> : action<nt::unit_power> {};
+template <> struct action<nt::unit_group> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.units.back().single = nullptr;
+    }
+};
+template <bool Divide> struct unit_combine {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        const unit_value rhs = s.units.back();
+        s.units.pop_back();
+        unit_value& lhs = s.units.back();
+        lhs.dim = Divide ? lhs.dim / rhs.dim : lhs.dim * rhs.dim;
+        lhs.factor = Divide ? lhs.factor / rhs.factor : lhs.factor * rhs.factor;
+        lhs.single = nullptr;
+        lhs.ok = lhs.ok && rhs.ok;
+    }
+};
+template <> struct action<nt::unit_multiply> : unit_combine<false> {};
+template <> struct action<nt::unit_divide> : unit_combine<true> {};
+
+// --- Declarations ---
+template <> struct action<nt::declared_name> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.out.names.push_back(
+            {s.range(in), static_cast<std::uint32_t>(s.out.declarations.size())});
+    }
+};
+template <> struct action<nt::declaration_spec> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_spec = s.range(in);
+        if (s.spec_in_brackets) {
+            s.pending_kind.dim = s.bracket_dimension;
+            return;
+        }
+        const unit_value& v = s.units.back();
+        if (v.ok)
+            s.pending_kind.dim = v.dim;
+        s.pending_kind.si_factor = v.factor;
+        s.pending_kind.single_unit = v.single;
+        s.pending_kind.by_unit = true;
+    }
+};
+template <> struct action<nt::constant_value> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_value = s.range(in);
+    }
+};
+template <> struct action<nt::description_text> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_description = s.range(in);
+    }
+};
+template <> struct action<nt::declaration> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const auto count = static_cast<std::uint32_t>(s.out.names.size()) - s.pending_first_name;
+        s.out.declarations.push_back({s.range(in), s.pending_spec, s.pending_description,
+                                      s.pending_value, s.pending_kind, s.pending_first_name, count});
+    }
+};
+
+// --- use "path" ---
+template <> struct action<nt::use_path_text> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_use_path = s.range(in);
+    }
+};
+template <> struct action<nt::use_statement> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.out.uses.push_back({s.range(in), s.pending_use_path});
+    }
+};
+
+// The end of the logical line starting at `begin`: physical lines whose last character
+// before any comment is '\' continue onto the next. Quotes shield '#' inside descriptions.
+std::size_t logical_line_end(std::string_view text, std::size_t begin) {
+    std::size_t pos = begin;
+    while (true) {
+        const void* nl = std::memchr(text.data() + pos, '\n', text.size() - pos);
+        const std::size_t end =
+            nl ? static_cast<std::size_t>(static_cast<const char*>(nl) - text.data()) : text.size();
+        std::size_t content_end = end;
+        bool in_quotes = false;
+        for (std::size_t i = pos; i < end; ++i) {
+            const char c = text[i];
+            if (c == '"')
+                in_quotes = !in_quotes;
+            else if (c == '#' && !in_quotes) {
+                content_end = i;
+                break;
+            }
+        }
+        while (content_end > pos && (text[content_end - 1] == ' ' || text[content_end - 1] == '\t' ||
+                                     text[content_end - 1] == '\r'))
+            --content_end;
+        const bool continues = content_end > pos && text[content_end - 1] == '\\' && nl != nullptr;
+        if (!continues)
+            return end;
+        pos = end + 1;
+    }
+}
+
+// Rolls back whatever a failed line added, so the tree holds only complete statements.
+struct tree_mark {
+    std::size_t nodes, call_args, sides, formulas, declarations, names, uses, diagnostics;
+    explicit tree_mark(const syntax::parsed_file& f)
+        : nodes(f.nodes.size()), call_args(f.call_args.size()), sides(f.sides.size()),
+          formulas(f.formulas.size()), declarations(f.declarations.size()), names(f.names.size()),
+          uses(f.uses.size()), diagnostics(f.diagnostics.size()) {}
+    void restore(syntax::parsed_file& f) const {
+        f.nodes.resize(nodes);
+        f.call_args.resize(call_args);
+        f.sides.resize(sides);
+        f.formulas.resize(formulas);
+        f.declarations.resize(declarations);
+        f.names.resize(names);
+        f.uses.resize(uses);
+        f.diagnostics.resize(diagnostics);
+    }
+};
+
+// Past this many, a file is more likely not ours at all than a calc with typos.
+constexpr std::size_t max_syntax_errors = 50;
+
+} // namespace
+
+syntax::parsed_file parse_expression(const source_file& file) {
+    syntax::parsed_file out;
+    out.source = &file;
+    const std::string_view text = file.text();
+    parse_state state(file, out);
+    state.reset_line();
+    pg::memory_input<pg::tracking_mode::lazy, pg::eol::lf_crlf, const char*> in(
+        text.data(), text.data() + text.size(), "");
+    try {
+        pg::parse<nt::query, action, control>(in, state);
+    } catch (const syntax_failure& failure) {
+        const auto at = static_cast<std::uint32_t>(failure.at - text.data());
+        state.report(rules::syntax, failure.message,
+                     {at, std::min<std::uint32_t>(at + 1, static_cast<std::uint32_t>(text.size()))});
+        out.has_syntax_error = true;
+    } catch (const arithmetic_overflow&) {
+        state.report(rules::overflow, "the exponents in this expression exceed the exact range",
+                     state.range(text.data(), text.data() + text.size()));
+    }
+    return out;
+}
+
+syntax::parsed_file parse_file(const source_file& file) {
+    syntax::parsed_file out;
+    out.source = &file;
+    const std::string_view text = file.text();
+    parse_state state(file, out);
+
+    std::size_t begin = 0;
+    // A byte-order mark at the start is an editor's artefact, not part of the first line.
+    if (text.substr(0, 3) == "\xEF\xBB\xBF")
+        begin = 3;
+    std::size_t syntax_errors = 0;
+    while (begin <= text.size()) {
+        const std::size_t end = logical_line_end(text, begin);
+        if (syntax_errors == max_syntax_errors) {
+            state.report(rules::syntax,
+                         "too many syntax errors; the rest of this file is not checked (is it a "
+                         ".plumb file?)",
+                         state.range(text.data() + begin, text.data() + begin));
+            break;
+        }
+        state.reset_line();
+        const tree_mark mark(out);
+        pg::memory_input<pg::tracking_mode::lazy, pg::eol::lf_crlf, const char*> in(
+            text.data() + begin, text.data() + end, "");
+        try {
+            pg::parse<nt::line, action, control>(in, state);
+        } catch (const syntax_failure& failure) {
+            mark.restore(out);
+            const auto at = static_cast<std::uint32_t>(failure.at - text.data());
+            // Underline the offending character (a whole UTF-8 sequence), or the line's end.
+            std::uint32_t stop = at;
+            if (stop < end) {
+                ++stop;
+                while (stop < end && (static_cast<unsigned char>(text[stop]) & 0xC0) == 0x80)
+                    ++stop;
+            }
+            state.report(rules::syntax, failure.message, {at, stop});
+            out.has_syntax_error = true;
+            ++syntax_errors;
+        } catch (const arithmetic_overflow&) {
+            mark.restore(out);
+            state.report(rules::overflow, "the exponents on this line exceed the exact range",
+                         state.range(text.data() + begin, text.data() + end));
+        }
+        if (end >= text.size())
+            break;
+        begin = end + 1;
+    }
+    return out;
+}
+
+} // namespace plumb

@@ -1,0 +1,31 @@
+// One-line summaries of the rules, for `plumb rules` and the README's table.
+#include "plumb/rules.hpp"
+
+#include <array>
+
+namespace plumb::rules {
+
+std::span<const rule_info> all() {
+    static constexpr std::array<rule_info, 17> table = {{
+        {syntax, "a line does not follow the notation"},
+        {sum_mismatch, "the terms of a sum or difference differ in dimension"},
+        {side_mismatch, "the sides of an equation or limit differ in dimension"},
+        {dimensioned_argument, "a function that needs a dimensionless argument gets a dimension"},
+        {dimensioned_exponent, "an exponent has a dimension"},
+        {variable_exponent, "an exponent is not a constant number while its base has a dimension"},
+        {argument_mismatch, "the arguments of min, max, hypot, atan2 or integral's limits differ"},
+        {undeclared, "a symbol is used but not declared"},
+        {unused, "a symbol is declared but never used (warning)"},
+        {conflicting_declaration, "a symbol is declared twice with different dimensions"},
+        {reserved_name, "a declaration uses a name the notation keeps (pi)"},
+        {unknown_unit, "a declaration names a unit the table does not have"},
+        {unknown_function, "a call names a function that does not exist"},
+        {wrong_arity, "a function gets the wrong number of arguments"},
+        {overflow, "exact exponent arithmetic would exceed 64 bits"},
+        {unreadable, "a file or a `use`d dictionary cannot be read"},
+        {include_cycle, "dictionaries `use` each other in a cycle"},
+    }};
+    return table;
+}
+
+} // namespace plumb::rules

@@ -1,0 +1,377 @@
+// Loads files once each, resolves `use` lines and dictionaries into symbol tables, runs the
+// checks, and gathers the findings in file order.
+#include "edit_distance.hpp"
+#include "formula_checker.hpp"
+#include "parser.hpp"
+#include "plumb/check.hpp"
+#include "plumb/rules.hpp"
+
+#include <algorithm>
+#include <fmt/format.h>
+#include <fstream>
+#include <limits>
+#include <map>
+#include <system_error>
+#include <unordered_set>
+
+namespace plumb {
+
+namespace fs = std::filesystem;
+
+std::size_t check_report::count(severity level) const {
+    return static_cast<std::size_t>(std::count_if(
+        diagnostics.begin(), diagnostics.end(), [&](const diagnostic& d) { return d.level == level; }));
+}
+
+std::vector<std::string_view> symbol_table::nearest(std::string_view name, std::size_t limit) const {
+    // Longer names allow more edits ("velocty" for "velocity"). A one- or two-letter name is
+    // close to every other short name, so for those only a subscripted form counts ("h" for
+    // "h_f").
+    const std::size_t max_distance = std::min<std::size_t>(3, name.size() / 3);
+    std::vector<std::pair<std::size_t, std::string_view>> scored;
+    for (const auto& [candidate, entry] : entries_) {
+        if (candidate.size() > name.size() && candidate.substr(0, name.size()) == name &&
+            candidate[name.size()] == '_') {
+            scored.emplace_back(candidate.size() - name.size(), candidate);
+            continue;
+        }
+        if (max_distance == 0)
+            continue;
+        const std::size_t d = edit_distance(name, candidate, max_distance);
+        if (d <= max_distance)
+            scored.emplace_back(d, candidate);
+    }
+    std::sort(scored.begin(), scored.end());
+    std::vector<std::string_view> out;
+    for (std::size_t i = 0; i < scored.size() && i < limit; ++i)
+        out.push_back(scored[i].second);
+    return out;
+}
+
+namespace {
+
+struct loaded_file {
+    source_file* source = nullptr;
+    syntax::parsed_file tree;
+    std::vector<loaded_file*> uses;
+    std::vector<diagnostic> diagnostics;
+    bool loading = false;
+};
+
+diagnostic make_diagnostic(severity level, std::string_view rule, std::string message,
+                           location where) {
+    diagnostic d;
+    d.level = level;
+    d.rule = std::string(rule);
+    d.message = std::move(message);
+    d.where = where;
+    return d;
+}
+
+class session {
+  public:
+    session(check_report& report, const check_options& options) : report_(report) {
+        for (const auto& path : options.dictionaries)
+            if (loaded_file* f = load(path, {}))
+                dictionaries_.push_back(f);
+    }
+
+    loaded_file* load(const fs::path& path, location requested_at) {
+        std::error_code ec;
+        fs::path key = fs::weakly_canonical(path, ec);
+        if (ec)
+            key = path;
+        if (auto it = by_path_.find(key.string()); it != by_path_.end())
+            return it->second;
+
+        std::string text;
+        if (!read_file(path, text, requested_at))
+            return nullptr;
+        return add(key.string(), path.string(), std::move(text));
+    }
+
+    loaded_file* add(const std::string& key, std::string display_path, std::string text) {
+        report_.sources.push_back(std::make_unique<source_file>(std::move(display_path), std::move(text)));
+        auto owned = std::make_unique<loaded_file>();
+        loaded_file* f = owned.get();
+        files_.push_back(std::move(owned));
+        if (!key.empty())
+            by_path_.emplace(key, f);
+        f->source = report_.sources.back().get();
+        f->tree = parse_file(*f->source);
+        if (f->tree.has_syntax_error)
+            report_.input_failed = true;
+        f->diagnostics = std::move(f->tree.diagnostics);
+        f->loading = true;
+        const fs::path base = fs::path(f->source->path()).parent_path();
+        for (const auto& use : f->tree.uses) {
+            const location at{f->source, use.range};
+            const fs::path target = base / std::string(f->source->text(use.path));
+            loaded_file* used = load(target, at);
+            if (used == nullptr)
+                continue;
+            if (used->loading) {
+                f->diagnostics.push_back(make_diagnostic(
+                    severity::error, rules::include_cycle,
+                    fmt::format("'{}' uses this file in turn, so they form a cycle; move the shared "
+                                "declarations into a dictionary that uses neither",
+                                f->source->text(use.path)),
+                    at));
+                continue;
+            }
+            f->uses.push_back(used);
+        }
+        f->loading = false;
+        return f;
+    }
+
+    void check(loaded_file* f) {
+        symbol_table table;
+        std::unordered_set<const loaded_file*> visited;
+        for (loaded_file* d : dictionaries_)
+            declare_from(d, table, visited, false);
+        visited.insert(f); // a dictionary that uses the checked file back adds nothing new
+        for (loaded_file* u : f->uses)
+            declare_from(u, table, visited, false);
+        declare(f, table, true);
+
+        check_formulas(f->tree, table, f->diagnostics);
+        if (!f->tree.formulas.empty())
+            report_unused(f, table);
+        ++report_.files_checked;
+        report_.formulas_checked += f->tree.formulas.size();
+        report_.bytes_checked += f->source->text().size();
+        // The expression trees are not needed again; a dictionary's declarations are.
+        f->tree.nodes = {};
+        f->tree.call_args = {};
+        f->tree.sides = {};
+        f->tree.formulas = {};
+    }
+
+    std::optional<dimension> query(std::string expression, const std::vector<fs::path>& context) {
+        symbol_table table;
+        std::unordered_set<const loaded_file*> visited;
+        for (loaded_file* d : dictionaries_)
+            declare_from(d, table, visited, false);
+        for (const auto& path : context)
+            if (loaded_file* f = load(path, {}))
+                declare_from(f, table, visited, false);
+        report_.sources.push_back(std::make_unique<source_file>("<query>", std::move(expression)));
+        const source_file& src = *report_.sources.back();
+        syntax::parsed_file tree = parse_expression(src);
+        query_diagnostics_ = std::move(tree.diagnostics);
+        if (tree.sides.empty())
+            return std::nullopt;
+        return expression_dimension(tree, tree.sides.front().root, table, query_diagnostics_);
+    }
+
+    // Findings in the order files were first read, each file's sorted by position, with
+    // repeats (a conflict between two dictionaries seen from several files) dropped.
+    void finish() {
+        auto& out = report_.diagnostics;
+        out.insert(out.end(), std::make_move_iterator(general_.begin()),
+                   std::make_move_iterator(general_.end()));
+        for (auto& f : files_) {
+            auto& ds = f->diagnostics;
+            std::stable_sort(ds.begin(), ds.end(), [](const diagnostic& a, const diagnostic& b) {
+                return a.where.range.begin < b.where.range.begin;
+            });
+            for (auto& d : ds) {
+                const bool repeated = std::any_of(out.end() - std::min<std::ptrdiff_t>(
+                                                                  static_cast<std::ptrdiff_t>(out.size()), 8),
+                                                  out.end(), [&](const diagnostic& e) {
+                                                      return e.where.file == d.where.file &&
+                                                             e.where.range.begin == d.where.range.begin &&
+                                                             e.rule == d.rule && e.message == d.message;
+                                                  });
+                if (!repeated)
+                    out.push_back(std::move(d));
+            }
+            ds.clear();
+        }
+        out.insert(out.end(), std::make_move_iterator(query_diagnostics_.begin()),
+                   std::make_move_iterator(query_diagnostics_.end()));
+    }
+
+    void fail(std::string message) {
+        general_.push_back(make_diagnostic(severity::error, rules::unreadable, std::move(message), {}));
+        report_.input_failed = true;
+    }
+
+  private:
+    check_report& report_;
+    std::vector<loaded_file*> dictionaries_;
+    std::vector<std::unique_ptr<loaded_file>> files_;
+    std::map<std::string, loaded_file*> by_path_;
+    std::vector<diagnostic> general_;
+    std::vector<diagnostic> query_diagnostics_;
+
+    bool read_file(const fs::path& path, std::string& text, location requested_at) {
+        std::error_code ec;
+        const bool is_dir = fs::is_directory(path, ec);
+        std::ifstream in(path, std::ios::binary);
+        std::string why;
+        if (is_dir)
+            why = "it is a folder";
+        else if (!in)
+            why = fs::exists(path, ec) ? "permission denied or not a regular file"
+                                       : "no such file";
+        if (why.empty()) {
+            text.assign(std::istreambuf_iterator<char>(in), std::istreambuf_iterator<char>());
+            if (in.bad())
+                why = "a read error occurred";
+            else if (text.size() >= std::numeric_limits<std::uint32_t>::max())
+                why = "it is larger than 4 GiB";
+        }
+        if (why.empty())
+            return true;
+        const std::string message = fmt::format("cannot read '{}': {}", path.string(), why);
+        if (requested_at.file == nullptr) {
+            fail(message);
+        } else {
+            // Report it in the file that asked for it, once.
+            for (auto& f : files_)
+                if (f->source == requested_at.file)
+                    f->diagnostics.push_back(
+                        make_diagnostic(severity::error, rules::unreadable, message, requested_at));
+            report_.input_failed = true;
+        }
+        return false;
+    }
+
+    void declare_from(loaded_file* f, symbol_table& table,
+                      std::unordered_set<const loaded_file*>& visited, bool local) {
+        if (!visited.insert(f).second)
+            return;
+        for (loaded_file* u : f->uses)
+            declare_from(u, table, visited, local);
+        declare(f, table, local);
+    }
+
+    void declare(loaded_file* f, symbol_table& table, bool local) {
+        const syntax::parsed_file& tree = f->tree;
+        for (const auto& n : tree.names) {
+            const std::string_view name = f->source->text(n.name);
+            const location at{f->source, n.name};
+            if (name == "pi" || name == "\u03C0") {
+                f->diagnostics.push_back(make_diagnostic(
+                    severity::error, rules::reserved_name,
+                    fmt::format("'{}' is the number \u03C0 and cannot be declared; choose another "
+                                "name",
+                                name),
+                    at));
+                continue;
+            }
+            const syntax::declaration& decl = tree.declarations[n.declaration];
+            symbol_entry entry;
+            entry.dim = decl.kind.dim;
+            entry.declared_at = at;
+            entry.description = f->source->text(decl.description);
+            entry.local = local;
+            auto [existing, inserted] = table.insert(name, entry);
+            if (inserted)
+                continue;
+            if (existing->declared_at.file == at.file && existing->declared_at.range.begin == at.range.begin)
+                continue;
+            if (existing->dim && entry.dim && !(*existing->dim == *entry.dim)) {
+                diagnostic d = make_diagnostic(
+                    severity::error, rules::conflicting_declaration,
+                    fmt::format("'{}' is declared again with a different dimension: {} here, {} "
+                                "before",
+                                name, entry.dim->to_string(), existing->dim->to_string()),
+                    at);
+                d.terms.push_back({at, std::string(name), *entry.dim});
+                d.terms.push_back({existing->declared_at, std::string(name), *existing->dim});
+                const line_column first = existing->declared_at.file->position(existing->declared_at.range.begin);
+                d.notes.push_back({fmt::format("'{}' is first declared at {}:{}:{} as {}", name,
+                                               existing->declared_at.file->path(), first.line,
+                                               first.column, existing->dim->to_string()),
+                                   existing->declared_at});
+                f->diagnostics.push_back(std::move(d));
+                continue;
+            }
+            if (local && !existing->local) {
+                // The file declares it itself; it answers for it being used.
+                existing->local = true;
+                existing->declared_at = at;
+                if (!entry.description.empty())
+                    existing->description = entry.description;
+            }
+        }
+    }
+
+    void report_unused(loaded_file* f, symbol_table& table) {
+        for (const auto& n : f->tree.names) {
+            const std::string_view name = f->source->text(n.name);
+            const symbol_entry* e = table.find(name);
+            if (e == nullptr || e->used || !e->local || e->declared_at.file != f->source ||
+                e->declared_at.range.begin != n.name.begin)
+                continue;
+            diagnostic d = make_diagnostic(severity::warning, rules::unused,
+                                           fmt::format("'{}' is declared but never used", name),
+                                           {f->source, n.name});
+            d.notes.push_back({"remove the declaration, or check the formula that should use it", {}});
+            f->diagnostics.push_back(std::move(d));
+        }
+    }
+};
+
+void collect_plumb_files(const fs::path& dir, std::vector<fs::path>& out, session& s) {
+    std::error_code ec;
+    std::vector<fs::path> found;
+    fs::recursive_directory_iterator it(dir, fs::directory_options::skip_permission_denied, ec);
+    if (ec) {
+        s.fail(fmt::format("cannot read folder '{}': {}", dir.string(), ec.message()));
+        return;
+    }
+    for (; it != fs::recursive_directory_iterator(); it.increment(ec)) {
+        if (ec) {
+            s.fail(fmt::format("cannot read folder '{}': {}", dir.string(), ec.message()));
+            break;
+        }
+        std::error_code type_ec;
+        if (it->is_regular_file(type_ec) && it->path().extension() == ".plumb")
+            found.push_back(it->path());
+    }
+    std::sort(found.begin(), found.end());
+    out.insert(out.end(), found.begin(), found.end());
+}
+
+} // namespace
+
+check_report check_paths(const std::vector<fs::path>& paths, const check_options& options) {
+    check_report report;
+    session s(report, options);
+    std::vector<fs::path> files;
+    for (const auto& p : paths) {
+        std::error_code ec;
+        if (fs::is_directory(p, ec))
+            collect_plumb_files(p, files, s);
+        else
+            files.push_back(p);
+    }
+    for (const auto& p : files)
+        if (loaded_file* f = s.load(p, {}))
+            s.check(f);
+    s.finish();
+    return report;
+}
+
+check_report check_text(std::string name, std::string text, const check_options& options) {
+    check_report report;
+    session s(report, options);
+    s.check(s.add("", std::move(name), std::move(text)));
+    s.finish();
+    return report;
+}
+
+query_result query_dimension(std::string expression, const std::vector<fs::path>& context_files,
+                             const check_options& options) {
+    query_result result;
+    session s(result.report, options);
+    result.dim = s.query(std::move(expression), context_files);
+    s.finish();
+    return result;
+}
+
+} // namespace plumb

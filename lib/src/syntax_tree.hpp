@@ -1,0 +1,94 @@
+// The typed-free syntax tree of one parsed file: flat arrays indexed by number, so that a
+// file of a million formulas is a handful of allocations, not millions.
+#pragma once
+
+#include "plumb/diagnostic.hpp"
+#include "plumb/dimension.hpp"
+#include "plumb/source.hpp"
+#include "plumb/unit_table.hpp"
+
+#include <cstdint>
+#include <limits>
+#include <optional>
+#include <vector>
+
+namespace plumb::syntax {
+
+inline constexpr std::uint32_t no_index = std::numeric_limits<std::uint32_t>::max();
+
+enum class expr_kind : std::uint8_t {
+    number,   // range is the literal
+    pi,
+    symbol,   // range is the name
+    negate,   // lhs
+    add,      // lhs + rhs
+    subtract, // lhs - rhs
+    multiply,
+    divide,
+    power,    // lhs ^ rhs
+    call,     // range starts with the function name; lhs = first index into call_args, rhs = count
+};
+
+struct expr_node {
+    expr_kind kind;
+    span range;   // covers the whole subexpression, parentheses included
+    std::uint32_t lhs = no_index;
+    std::uint32_t rhs = no_index;
+};
+
+enum class relation_kind : std::uint8_t { none, equal, less, less_equal, greater, greater_equal };
+
+struct formula_side {
+    std::uint32_t root;
+    relation_kind relation_before; // none for the first side
+};
+
+struct formula {
+    span range;
+    span label; // empty when the formula has none
+    std::uint32_t first_side;
+    std::uint32_t side_count;
+};
+
+// What a declaration's right-hand side says, once units are resolved.
+struct declared_kind {
+    std::optional<dimension> dim; // empty when the spec had an error (already reported)
+    double si_factor = 1.0;       // SI value of one unit of the spec; 1 for bracket dimensions
+    const unit_definition* single_unit = nullptr; // set when the spec is one unit, no algebra
+    bool by_unit = false;
+};
+
+struct declaration {
+    span range;
+    span spec;
+    span description; // inside the quotes; empty when none
+    span value;       // the constant's number; empty when not a constant
+    declared_kind kind;
+    std::uint32_t first_name;
+    std::uint32_t name_count;
+};
+
+struct declared_name {
+    span name;
+    std::uint32_t declaration;
+};
+
+struct use_line {
+    span range;
+    span path; // inside the quotes
+};
+
+struct parsed_file {
+    const source_file* source = nullptr;
+    std::vector<expr_node> nodes;
+    std::vector<std::uint32_t> call_args;
+    std::vector<formula_side> sides;
+    std::vector<formula> formulas;
+    std::vector<declaration> declarations;
+    std::vector<declared_name> names;
+    std::vector<use_line> uses;
+    std::vector<diagnostic> diagnostics; // syntax errors and unknown units
+    bool has_syntax_error = false;
+};
+
+} // namespace plumb::syntax
