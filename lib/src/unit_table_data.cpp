@@ -1,0 +1,364 @@
+// The rows of the built-in unit table and the SI prefixes.
+//
+// Policy for the factor columns:
+// - `exact_factor` holds the exact relation to SI whenever the unit is defined exactly in
+//   terms of SI units, as a decimal or as an integer fraction (the forms rational::parse reads).
+//   Where NIST SP 811 prints that exact value rounded to 7 digits, `source` says so and names
+//   the definition the exact value follows from.
+// - Where no exact relation exists (the acre on the U.S. survey foot, the dalton), the published
+//   digits are stored and `source` says "(rounded)" or names the measurement.
+// - `factor` is the same value as a double; a test parses `exact_factor` back and compares.
+#include "plumb/unit_table.hpp"
+
+#include <span>
+
+namespace plumb::detail {
+
+// Shared with unit_table.cpp, which builds the lookup index over these rows.
+std::span<const unit_definition> builtin_units();
+std::span<const unit_prefix> builtin_prefixes();
+
+namespace {
+
+using exponents = std::array<std::int8_t, base_dimension_count>;
+
+// Exponents in the order M L T Θ N I J (dimension.hpp).
+constexpr exponents dims(int m, int l, int t, int th = 0, int n = 0, int i = 0, int j = 0) {
+    return {static_cast<std::int8_t>(m),  static_cast<std::int8_t>(l), static_cast<std::int8_t>(t),
+            static_cast<std::int8_t>(th), static_cast<std::int8_t>(n), static_cast<std::int8_t>(i),
+            static_cast<std::int8_t>(j)};
+}
+
+constexpr exponents none = dims(0, 0, 0);
+constexpr exponents mass = dims(1, 0, 0);
+constexpr exponents length = dims(0, 1, 0);
+constexpr exponents area = dims(0, 2, 0);
+constexpr exponents volume = dims(0, 3, 0);
+constexpr exponents time = dims(0, 0, 1);
+constexpr exponents temperature = dims(0, 0, 0, 1);
+constexpr exponents per_time = dims(0, 0, -1);
+constexpr exponents velocity = dims(0, 1, -1);
+constexpr exponents force = dims(1, 1, -2);
+constexpr exponents pressure = dims(1, -1, -2);
+constexpr exponents energy = dims(1, 2, -2);
+constexpr exponents power = dims(1, 2, -3);
+constexpr exponents dynamic_viscosity = dims(1, -1, -1);
+constexpr exponents kinematic_viscosity = dims(0, 2, -1);
+constexpr exponents volumetric_flow = dims(0, 3, -1);
+constexpr exponents resistance = dims(1, 2, -3, 0, 0, -2);
+constexpr exponents specific_energy = dims(0, 2, -2);
+
+enum class prefixes : bool { refused, accepted };
+
+constexpr unit_definition absolute(std::string_view symbol, std::string_view name, exponents e,
+                                   double factor, std::string_view exact, prefixes p,
+                                   std::string_view source) {
+    return {symbol, name, e, factor, 0.0, exact, unit_scale::absolute, p == prefixes::accepted,
+            source};
+}
+
+// Interval scales never take prefixes: "m°C" could mean a thousandth of a degree or a scale
+// whose zero also moved, and nobody writes it.
+constexpr unit_definition interval(std::string_view symbol, std::string_view name, double factor,
+                                   double offset, std::string_view exact, std::string_view source) {
+    return {symbol, name, temperature, factor, offset, exact, unit_scale::offset, false, source};
+}
+
+// Common practice: gauge pressure is read against the standard atmosphere (101325 Pa); the
+// local atmospheric pressure differs, so converting a gauge reading is only as good as that.
+constexpr double standard_atmosphere = 101325.0;
+
+constexpr unit_definition gauge(std::string_view symbol, std::string_view name, double factor,
+                                std::string_view exact, std::string_view source) {
+    return {symbol, name,  pressure, factor, standard_atmosphere, exact, unit_scale::gauge,
+            false,  source};
+}
+
+// A second spelling of a row: ASCII for a Unicode symbol, or a spelling the trade also uses.
+// It is a row of its own so that listings show it and lookups need no second table.
+constexpr unit_definition spelled(std::string_view symbol, unit_definition row) {
+    row.symbol = symbol;
+    return row;
+}
+
+constexpr std::string_view si_base = "SI Brochure 9th ed., Table 2";
+constexpr std::string_view si_derived = "SI Brochure 9th ed., Table 4";
+constexpr std::string_view si_accepted = "SI Brochure 9th ed., Table 8";
+constexpr std::string_view nist = "NIST SP 811 (2008), B.8";
+
+// π is irrational: no decimal or fraction is exact, so the text names it.
+constexpr double pi = 3.14159265358979323846;
+
+constexpr unit_definition ohm =
+    absolute("\u03A9", "ohm", resistance, 1.0, "1", prefixes::accepted, si_derived);
+constexpr unit_definition degree_celsius =
+    interval("\u00B0C", "degree Celsius", 1.0, 273.15, "1", si_derived);
+// The offset is 459.67 × 5/9 K = 45967/180 K exactly.
+constexpr unit_definition degree_fahrenheit =
+    interval("\u00B0F", "degree Fahrenheit", 5.0 / 9.0, 459.67 * 5.0 / 9.0, "5/9",
+             "NIST SP 811 (2008), B.8 (T/K = (t/°F + 459.67)/1.8)");
+constexpr unit_definition degree_rankine =
+    absolute("\u00B0R", "degree Rankine", temperature, 5.0 / 9.0, "5/9", prefixes::refused,
+             "NIST SP 811 (2008), B.8 (T/K = (T/°R)/1.8)");
+constexpr unit_definition angle_degree = absolute("\u00B0", "degree (angle)", none, pi / 180.0,
+                                                  "pi/180", prefixes::refused, si_accepted);
+constexpr unit_definition angle_minute = absolute("\u2032", "minute (angle)", none, pi / 10800.0,
+                                                  "pi/10800", prefixes::refused, si_accepted);
+constexpr unit_definition angle_second = absolute("\u2033", "second (angle)", none, pi / 648000.0,
+                                                  "pi/648000", prefixes::refused, si_accepted);
+constexpr unit_definition litre =
+    absolute("L", "litre", volume, 1e-3, "0.001", prefixes::accepted, si_accepted);
+// The avoirdupois pound, exact since the 1959 international yard and pound agreement (from
+// memory); NIST prints it rounded to 4.535924E-01.
+constexpr unit_definition pound_mass =
+    absolute("lb", "pound (avoirdupois)", mass, 0.45359237, "0.45359237", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 4.535924E-01; exact 0.45359237 by definition");
+// Btu_IT = cal_IT/(g·°C) × lb × °F = 4.1868 J × 453.59237 × 5/9 exactly (the derivation is
+// from memory; the product matches the exact value NIST gives).
+constexpr unit_definition btu_it =
+    absolute("Btu", "British thermal unit (IT)", energy, 1055.05585262, "1055.05585262",
+             prefixes::refused, nist);
+constexpr unit_definition calorie_it =
+    absolute("cal", "calorie (IT)", energy, 4.1868, "4.1868", prefixes::refused, nist);
+constexpr unit_definition torr =
+    absolute("Torr", "torr", pressure, 101325.0 / 760.0, "20265/152", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 1.333224E+02; exact as 101325/760 Pa");
+constexpr unit_definition knot =
+    absolute("kn", "knot", velocity, 1852.0 / 3600.0, "463/900", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 5.144444E-01; exact as 1852 m/h");
+// A darcy passes 1 cm³/s of a 1 cP fluid through 1 cm² under 1 atm/cm (the definition is from
+// memory), so 1 D = 1e-3 Pa·s × 1e-6 m³/s × 1e-2 m / (1e-4 m² × 101325 Pa × 1 s).
+constexpr std::string_view darcy_source =
+    "NIST SP 811 (2008), B.8 prints 9.869233E-13; exact from the darcy's definition";
+constexpr unit_definition darcy = absolute("D", "darcy", area, 1e-7 / 101325.0, "1/1013250000000",
+                                           prefixes::refused, darcy_source);
+constexpr unit_definition millidarcy =
+    absolute("mD", "millidarcy", area, 1e-10 / 101325.0, "1/1013250000000000", prefixes::refused,
+             darcy_source);
+constexpr unit_definition pound_per_square_inch =
+    absolute("psi", "pound-force per square inch", pressure, 8896443230521.0 / 1290320000.0,
+             "8896443230521/1290320000", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 6.894757E+03; exact as lbf/in²");
+
+constexpr unit_definition rows[] = {
+    // SI base units. Prefixes go on the gram, never on the kilogram (SI Brochure 9th ed.,
+    // section 3), so "kg" refuses them and "g" is a row of its own. "kg" also reads as k + g;
+    // both readings mean the same mass.
+    absolute("m", "metre", length, 1.0, "1", prefixes::accepted, si_base),
+    absolute("kg", "kilogram", mass, 1.0, "1", prefixes::refused, si_base),
+    absolute("g", "gram", mass, 1e-3, "0.001", prefixes::accepted,
+             "SI Brochure 9th ed., Table 2 and section 3 (prefixes attach to the gram)"),
+    absolute("s", "second", time, 1.0, "1", prefixes::accepted, si_base),
+    absolute("A", "ampere", dims(0, 0, 0, 0, 0, 1), 1.0, "1", prefixes::accepted, si_base),
+    absolute("K", "kelvin", temperature, 1.0, "1", prefixes::accepted, si_base),
+    absolute("mol", "mole", dims(0, 0, 0, 0, 1), 1.0, "1", prefixes::accepted, si_base),
+    absolute("cd", "candela", dims(0, 0, 0, 0, 0, 0, 1), 1.0, "1", prefixes::accepted, si_base),
+
+    // The 22 SI derived units with special names, in base units.
+    absolute("rad", "radian", none, 1.0, "1", prefixes::accepted, si_derived),
+    absolute("sr", "steradian", none, 1.0, "1", prefixes::accepted, si_derived),
+    absolute("Hz", "hertz", per_time, 1.0, "1", prefixes::accepted, si_derived),
+    absolute("N", "newton", force, 1.0, "1", prefixes::accepted, si_derived),
+    absolute("Pa", "pascal", pressure, 1.0, "1", prefixes::accepted, si_derived),
+    absolute("J", "joule", energy, 1.0, "1", prefixes::accepted, si_derived),
+    absolute("W", "watt", power, 1.0, "1", prefixes::accepted, si_derived),
+    absolute("C", "coulomb", dims(0, 0, 1, 0, 0, 1), 1.0, "1", prefixes::accepted, si_derived),
+    absolute("V", "volt", dims(1, 2, -3, 0, 0, -1), 1.0, "1", prefixes::accepted, si_derived),
+    absolute("F", "farad", dims(-1, -2, 4, 0, 0, 2), 1.0, "1", prefixes::accepted, si_derived),
+    ohm,
+    // Both the Greek capital omega and the ohm sign reach keyboards; "ohm" is for ASCII files.
+    spelled("\u2126", ohm),
+    spelled("ohm", ohm),
+    absolute("S", "siemens", dims(-1, -2, 3, 0, 0, 2), 1.0, "1", prefixes::accepted, si_derived),
+    absolute("Wb", "weber", dims(1, 2, -2, 0, 0, -1), 1.0, "1", prefixes::accepted, si_derived),
+    absolute("T", "tesla", dims(1, 0, -2, 0, 0, -1), 1.0, "1", prefixes::accepted, si_derived),
+    absolute("H", "henry", dims(1, 2, -2, 0, 0, -2), 1.0, "1", prefixes::accepted, si_derived),
+    degree_celsius,
+    spelled("degC", degree_celsius),
+    spelled("\u2103", degree_celsius),
+    // lm = cd·sr and lx = cd·sr/m²; the steradian is dimensionless.
+    absolute("lm", "lumen", dims(0, 0, 0, 0, 0, 0, 1), 1.0, "1", prefixes::accepted, si_derived),
+    absolute("lx", "lux", dims(0, -2, 0, 0, 0, 0, 1), 1.0, "1", prefixes::accepted, si_derived),
+    absolute("Bq", "becquerel", per_time, 1.0, "1", prefixes::accepted, si_derived),
+    absolute("Gy", "gray", specific_energy, 1.0, "1", prefixes::accepted, si_derived),
+    absolute("Sv", "sievert", specific_energy, 1.0, "1", prefixes::accepted, si_derived),
+    absolute("kat", "katal", dims(0, 0, -1, 0, 1), 1.0, "1", prefixes::accepted, si_derived),
+
+    // Non-SI units accepted for use with the SI. The neper, bel and decibel are left out: they
+    // name the logarithm of a ratio, so no factor times the value gives an SI quantity.
+    // The unified atomic mass unit "u" is left out too: "u" is the ASCII micro prefix here.
+    absolute("min", "minute", time, 60.0, "60", prefixes::refused, si_accepted),
+    absolute("h", "hour", time, 3600.0, "3600", prefixes::refused, si_accepted),
+    absolute("d", "day", time, 86400.0, "86400", prefixes::refused, si_accepted),
+    absolute("au", "astronomical unit", length, 149597870700.0, "149597870700", prefixes::refused,
+             si_accepted),
+    angle_degree,
+    spelled("deg", angle_degree),
+    angle_minute,
+    spelled("arcmin", angle_minute),
+    angle_second,
+    spelled("arcsec", angle_second),
+    absolute("ha", "hectare", area, 1e4, "10000", prefixes::refused, si_accepted),
+    litre,
+    spelled("l", litre),
+    absolute("t", "tonne", mass, 1e3, "1000", prefixes::accepted, si_accepted),
+    // Measured, not defined: CODATA 2018 (from memory), standard uncertainty 5.0E-37 kg.
+    absolute("Da", "dalton", mass, 1.66053906660e-27, "1.66053906660e-27", prefixes::accepted,
+             "SI Brochure 9th ed., Table 8; value CODATA 2018 (measured)"),
+    absolute("eV", "electronvolt", energy, 1.602176634e-19, "1.602176634e-19", prefixes::accepted,
+             si_accepted),
+
+    // Length. "ft" also reads as femto + tonne; the exact row wins, and nobody writes a
+    // femtotonne. "mi", "nmi" and "min" have no prefix reading: the inch and mile refuse
+    // prefixes.
+    absolute("ft", "foot", length, 0.3048, "0.3048", prefixes::refused, nist),
+    absolute("in", "inch", length, 0.0254, "0.0254", prefixes::refused, nist),
+    absolute("yd", "yard", length, 0.9144, "0.9144", prefixes::refused, nist),
+    absolute("mi", "mile (international)", length, 1609.344, "1609.344", prefixes::refused, nist),
+    absolute("nmi", "nautical mile (international)", length, 1852.0, "1852", prefixes::refused,
+             nist),
+    absolute("mil", "mil (0.001 in)", length, 2.54e-5, "0.0000254", prefixes::refused, nist),
+
+    // Area. The digit suffix spells the power because a symbol row cannot hold "ft^2"; the
+    // expression "ft^2" means the same and is resolved by the checker.
+    absolute("ft2", "square foot", area, 0.09290304, "0.09290304", prefixes::refused, nist),
+    absolute("in2", "square inch", area, 6.4516e-4, "0.00064516", prefixes::refused, nist),
+    // Defined on the U.S. survey foot (1200/3937 m), so no short exact decimal exists.
+    absolute("acre", "acre (U.S. survey foot)", area, 4046.873, "4046.873", prefixes::refused,
+             "NIST SP 811 (2008), B.8 (rounded)"),
+    darcy,
+    spelled("darcy", darcy),
+    millidarcy,
+    // Oilfield reports write the millidarcy "md"; the day takes no prefixes, so nothing else
+    // reads that way.
+    spelled("md", millidarcy),
+
+    // Volume.
+    absolute("ft3", "cubic foot", volume, 0.028316846592, "0.028316846592", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 2.831685E-02; exact as (0.3048 m)^3"),
+    absolute("in3", "cubic inch", volume, 1.6387064e-5, "0.000016387064", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 1.638706E-05; exact as (0.0254 m)^3"),
+    absolute("gal", "gallon (U.S.)", volume, 0.003785411784, "0.003785411784", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 3.785412E-03; exact as 231 in^3"),
+    absolute("bbl", "barrel (oil, 42 U.S. gal)", volume, 0.158987294928, "0.158987294928",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 1.589873E-01; exact as 42 gal"),
+
+    // Mass.
+    pound_mass,
+    spelled("lbm", pound_mass),
+    absolute("slug", "slug", mass, 8896443230521.0 / 609600000000.0, "8896443230521/609600000000",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 1.459390E+01; exact as lbf·s²/ft"),
+    // "ton" alone is the U.S. short ton; the refrigeration ton is a power and is not a row.
+    absolute("ton", "ton (short, 2000 lb)", mass, 907.18474, "907.18474", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 9.071847E+02; exact as 2000 lb"),
+
+    // Force. The pound-force is lb × standard gravity (9.80665 m/s², exact).
+    absolute("lbf", "pound-force", force, 4.4482216152605, "4.4482216152605", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 4.448222E+00; exact as lb × 9.80665 m/s²"),
+    absolute("kip", "kip (1000 lbf)", force, 4448.2216152605, "4448.2216152605", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 4.448222E+03; exact as 1000 lbf"),
+    absolute("kgf", "kilogram-force", force, 9.80665, "9.80665", prefixes::refused, nist),
+
+    // Pressure.
+    pound_per_square_inch,
+    // "psia" says explicitly what "psi" means anyway: absolute pressure.
+    spelled("psia", pound_per_square_inch),
+    gauge("psig", "pound-force per sq. inch, gauge", pound_per_square_inch.factor,
+          pound_per_square_inch.exact_factor,
+          "NIST SP 811 (2008), B.8 (psi)"
+          "; common practice: standard atmosphere as the reference; local atmospheric "
+          "pressure differs"),
+    // "kpsi" is not a row: the trade writes "ksi", and prefixes never attach to psi.
+    absolute("ksi", "kip per square inch", pressure, 8896443230521.0 / 1290320.0,
+             "8896443230521/1290320", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 6.894757E+06; exact as 1000 lbf/in²"),
+    absolute("atm", "standard atmosphere", pressure, standard_atmosphere, "101325",
+             prefixes::refused, nist),
+    // The bar takes prefixes because the millibar is everyday meteorology.
+    absolute("bar", "bar", pressure, 1e5, "100000", prefixes::accepted, nist),
+    gauge("barg", "bar, gauge", 1e5, "100000",
+          "NIST SP 811 (2008), B.8 (bar)"
+          "; common practice: standard atmosphere as the reference; local atmospheric "
+          "pressure differs"),
+    torr,
+    spelled("torr", torr),
+    // Conventional mercury (13595.1 kg/m³) and water (1000 kg/m³) columns under standard
+    // gravity; the densities are from memory, the products agree with NIST's printed digits.
+    absolute("mmHg", "millimetre of mercury (conv.)", pressure, 133.322387415, "133.322387415",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 1.333224E+02; exact by convention"),
+    absolute("inHg", "inch of mercury (conventional)", pressure, 3386.388640341, "3386.388640341",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 3.386389E+03; exact by convention"),
+    absolute("inH2O", "inch of water (conventional)", pressure, 249.08891, "249.08891",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 2.490889E+02; exact by convention"),
+    absolute("ftH2O", "foot of water (conventional)", pressure, 2989.06692, "2989.06692",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 2.989067E+03; exact by convention"),
+
+    // Energy. Steam tables use the IT calorie (common practice), so the bare "cal" means it.
+    btu_it,
+    spelled("Btu_IT", btu_it),
+    spelled("BTU", btu_it),
+    calorie_it,
+    spelled("cal_IT", calorie_it),
+    absolute("cal_th", "calorie (thermochemical)", energy, 4.184, "4.184", prefixes::refused, nist),
+    // Calories take no prefixes, yet the kilocalorie is everywhere, so it is a row.
+    absolute("kcal", "kilocalorie (IT)", energy, 4186.8, "4186.8", prefixes::refused, nist),
+    absolute("Wh", "watt hour", energy, 3600.0, "3600", prefixes::refused, nist),
+    absolute("kWh", "kilowatt hour", energy, 3.6e6, "3600000", prefixes::refused, nist),
+    absolute("MWh", "megawatt hour", energy, 3.6e9, "3600000000", prefixes::refused,
+             "NIST SP 811 (2008), B.8 (kW·h) × 1000"),
+
+    // Power: 550 ft·lbf/s.
+    absolute("hp", "horsepower (550 ft·lbf/s)", power, 745.69987158227022, "745.69987158227022",
+             prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 7.456999E+02; exact as 550 ft·lbf/s"),
+
+    // Temperature.
+    degree_fahrenheit,
+    spelled("degF", degree_fahrenheit),
+    spelled("\u2109", degree_fahrenheit),
+    degree_rankine,
+    spelled("degR", degree_rankine),
+
+    // Velocity.
+    absolute("mph", "mile per hour", velocity, 0.44704, "0.44704", prefixes::refused, nist),
+    knot,
+    // Not "kt": that is the kilotonne, and a row would hide it.
+    spelled("knot", knot),
+
+    // Viscosity. "P" alone is the poise; it never reads as the peta prefix because a prefix
+    // needs a unit after it.
+    absolute("P", "poise", dynamic_viscosity, 0.1, "0.1", prefixes::refused, nist),
+    absolute("cP", "centipoise", dynamic_viscosity, 1e-3, "0.001", prefixes::refused, nist),
+    absolute("St", "stokes", kinematic_viscosity, 1e-4, "0.0001", prefixes::refused, nist),
+    absolute("cSt", "centistokes", kinematic_viscosity, 1e-6, "0.000001", prefixes::refused, nist),
+
+    // Flow rates. Standard-volume units (scf, Mscf) are left out: the reference conditions
+    // differ between conventions, and a row would silently pick one.
+    absolute("gpm", "gallon (U.S.) per minute", volumetric_flow, 0.0000630901964, "0.0000630901964",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 6.309020E-05; exact as gal/min"),
+    absolute("cfm", "cubic foot per minute", volumetric_flow, 0.0004719474432, "0.0004719474432",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 4.719474E-04; exact as ft^3/min"),
+};
+
+// SI Brochure 9th ed., Table 7, plus ronna, quetta, ronto and quecto, which the 27th CGPM
+// added in 2022 (Resolution 3, from memory). The micro sign U+00B5 is the canonical spelling;
+// the index also accepts the Greek mu and ASCII "u".
+constexpr unit_prefix prefix_rows[] = {
+    {"Q", "quetta", 30}, {"R", "ronna", 27},  {"Y", "yotta", 24},  {"Z", "zetta", 21},
+    {"E", "exa", 18},    {"P", "peta", 15},   {"T", "tera", 12},   {"G", "giga", 9},
+    {"M", "mega", 6},    {"k", "kilo", 3},    {"h", "hecto", 2},   {"da", "deca", 1},
+    {"d", "deci", -1},   {"c", "centi", -2},  {"m", "milli", -3},  {"\u00B5", "micro", -6},
+    {"n", "nano", -9},   {"p", "pico", -12},  {"f", "femto", -15}, {"a", "atto", -18},
+    {"z", "zepto", -21}, {"y", "yocto", -24}, {"r", "ronto", -27}, {"q", "quecto", -30},
+};
+
+} // namespace
+
+std::span<const unit_definition> builtin_units() {
+    return rows;
+}
+std::span<const unit_prefix> builtin_prefixes() {
+    return prefix_rows;
+}
+
+} // namespace plumb::detail
