@@ -49,19 +49,21 @@ struct literal_exponent
 struct expression;
 
 struct pi_constant : seq<sor<TAO_PEGTL_STRING("pi"), utf8::one<0x3C0>>, not_at<name_char>> {};
-struct symbol : name {};
 
 struct group_close : one<')'> {};
 struct group : if_must<one<'('>, ws, expression, ws, group_close> {};
 
+// A name followed by '(' is a function call; the name is read once either way.
+struct symbol : name {};
 struct call_open : one<'('> {};
 struct call_close : one<')'> {};
 struct argument : seq<expression> {};
 struct next_argument : if_must<one<','>, ws, argument> {};
-struct call : seq<name, star<space>, call_open, ws, opt<argument, star<ws, next_argument>>, ws,
-                  must<call_close>> {};
+struct call_arguments
+    : seq<call_open, ws, opt<argument, star<ws, next_argument>>, ws, must<call_close>> {};
+struct symbol_or_call : seq<symbol, opt<star<space>, call_arguments>> {};
 
-struct primary : sor<number_term, pi_constant, call, symbol, group> {};
+struct primary : sor<number_term, pi_constant, symbol_or_call, group> {};
 
 struct unary;
 struct power_operand : seq<unary> {};

@@ -28,20 +28,6 @@ bool dimension::is_dimensionless() const {
     return true;
 }
 
-dimension operator*(const dimension& a, const dimension& b) {
-    dimension r;
-    for (std::size_t i = 0; i < base_dimension_count; ++i)
-        r.exponents_[i] = a.exponents_[i] + b.exponents_[i];
-    return r;
-}
-
-dimension operator/(const dimension& a, const dimension& b) {
-    dimension r;
-    for (std::size_t i = 0; i < base_dimension_count; ++i)
-        r.exponents_[i] = a.exponents_[i] - b.exponents_[i];
-    return r;
-}
-
 dimension dimension::pow(rational p) const {
     dimension r;
     for (std::size_t i = 0; i < base_dimension_count; ++i)
@@ -66,7 +52,11 @@ std::string dimension::to_string() const {
         if (e.is_integer())
             out += e.to_string();
         else
-            out += "(" + e.to_string() + ")";
+        {
+            out += '(';
+            out += e.to_string();
+            out += ')';
+        }
     }
     if (first)
         out += '1';

@@ -7,6 +7,7 @@
 #include "plumb/rules.hpp"
 
 #include <algorithm>
+#include <span>
 #include <fmt/format.h>
 
 namespace plumb {
@@ -49,8 +50,26 @@ struct agreement {
 
 // The reference is the dimension most operands share (the first such on a tie), so that one
 // wrong term among several right ones is the one pointed at.
-agreement find_agreement(const std::vector<operand>& ops) {
+agreement find_agreement(std::span<const operand> ops) {
     agreement result;
+    // Fast path: nearly every meeting point in a real calc agrees.
+    const operand* first_known = nullptr;
+    bool all_same = true;
+    for (const auto& op : ops) {
+        if (!op.type.known || op.type.zero)
+            continue;
+        if (first_known == nullptr)
+            first_known = &op;
+        else if (!(op.type.dim == first_known->type.dim)) {
+            all_same = false;
+            break;
+        }
+    }
+    if (all_same) {
+        if (first_known != nullptr)
+            result.reference = first_known->type.dim;
+        return result;
+    }
     std::vector<std::pair<dimension, std::size_t>> counts;
     for (const auto& op : ops) {
         if (!op.type.known || op.type.zero)
@@ -75,10 +94,45 @@ agreement find_agreement(const std::vector<operand>& ops) {
     return result;
 }
 
+struct scratch_stacks {
+    std::vector<std::uint32_t> spine;
+    std::vector<operand> operands;
+};
+
+scratch_stacks& scratch() {
+    thread_local scratch_stacks stacks;
+    return stacks;
+}
+
+// The operands a caller pushed above `base` on a scratch stack, popped when it goes.
+class scratch_region {
+  public:
+    scratch_region(std::vector<operand>& stack, std::size_t base) : stack_(stack), base_(base) {}
+    scratch_region(const scratch_region&) = delete;
+    scratch_region& operator=(const scratch_region&) = delete;
+    ~scratch_region() { stack_.resize(base_); }
+    [[nodiscard]] std::span<const operand> view() const {
+        return {stack_.data() + base_, stack_.size() - base_};
+    }
+
+  private:
+    std::vector<operand>& stack_;
+    std::size_t base_;
+};
+
+// Thrown out of a check that meets a name not declared yet, when the caller will retry.
+struct symbol_not_yet_declared {};
+
 class checker {
   public:
-    checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out)
-        : file_(file), symbols_(symbols), out_(out) {}
+    checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out,
+            bool defer_unknown = false)
+        : file_(file), symbols_(symbols), out_(out), defer_unknown_(defer_unknown),
+          spine_(scratch().spine), operands_(scratch().operands) {
+        // A check abandoned by an exception may have left its part behind.
+        spine_.clear();
+        operands_.clear();
+    }
 
     typed eval(std::uint32_t index) {
         const syntax::expr_node& n = file_.nodes[index];
@@ -108,20 +162,25 @@ class checker {
             return apply_power(eval(n.lhs), eval(n.rhs), n.lhs, n.rhs);
         case expr_kind::call:
             return eval_call(n);
+        case expr_kind::group:
+            return eval(n.lhs);
         }
         return unknown_type();
     }
 
     void check_formula(const syntax::formula& f) {
-        std::vector<operand> sides;
+        const std::size_t base = operands_.size();
         bool equation = true;
         for (std::uint32_t i = 0; i < f.side_count; ++i) {
             const syntax::formula_side& s = file_.sides[f.first_side + i];
             if (s.relation_before != syntax::relation_kind::none &&
                 s.relation_before != syntax::relation_kind::equal)
                 equation = false;
-            sides.push_back({s.root, eval(s.root)});
+            typed t = eval(s.root);
+            operands_.push_back({s.root, std::move(t)});
         }
+        const scratch_region region(operands_, base);
+        const std::span<const operand> sides = region.view();
         const agreement a = find_agreement(sides);
         if (a.odd.empty())
             return;
@@ -173,6 +232,11 @@ class checker {
     const syntax::parsed_file& file_;
     symbol_table& symbols_;
     std::vector<diagnostic>& out_;
+    bool defer_unknown_;
+    // Scratch stacks shared by nested sums and products, so checking allocates nothing once
+    // warm. Each user takes the part above the size it found and gives it back.
+    std::vector<std::uint32_t>& spine_;
+    std::vector<operand>& operands_;
 
     std::string_view text(span s) const { return file_.source->text(s); }
 
@@ -212,7 +276,7 @@ class checker {
     }
 
     // Notes for operands that disagree: each odd one with its dimension, then the rest.
-    void explain(diagnostic& d, const std::vector<operand>& ops, const agreement& a,
+    void explain(diagnostic& d, std::span<const operand> ops, const agreement& a,
                  std::string_view others) const {
         for (const auto& op : ops)
             if (op.type.known)
@@ -246,6 +310,8 @@ class checker {
         const std::string_view name = text(n.range);
         symbol_entry* entry = symbols_.find(name);
         if (entry == nullptr) {
+            if (defer_unknown_)
+                throw symbol_not_yet_declared{};
             diagnostic& d =
                 report(rules::undeclared, fmt::format("'{}' is not declared", name), n.range);
             const auto near = symbols_.nearest(name);
@@ -276,22 +342,26 @@ class checker {
 
     typed eval_sum(std::uint32_t index) {
         // Walk the left spine iteratively: a long sum must not recurse once per term.
-        std::vector<std::pair<std::uint32_t, bool>> parts; // node, subtracted
+        const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
         while (file_.nodes[n].kind == expr_kind::add || file_.nodes[n].kind == expr_kind::subtract) {
-            parts.emplace_back(file_.nodes[n].rhs, file_.nodes[n].kind == expr_kind::subtract);
+            spine_.push_back(n);
             n = file_.nodes[n].lhs;
         }
-        parts.emplace_back(n, false);
-        std::reverse(parts.begin(), parts.end());
+        const std::size_t term_count = spine_.size() - spine_base + 1;
 
-        std::vector<operand> terms;
-        terms.reserve(parts.size());
+        const std::size_t base = operands_.size();
         typed result;
         result.numeric = true;
         result.zero = true;
         result.value = rational(0);
-        for (const auto& [node, subtracted] : parts) {
+        for (std::size_t k = 0; k < term_count; ++k) {
+            // Term k is the leftmost leaf for k == 0, else the right child of the spine node
+            // k levels up from it.
+            const std::uint32_t node =
+                k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
+            const bool subtracted =
+                k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
             typed t = eval(node);
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
@@ -300,17 +370,21 @@ class checker {
                 result.value = subtracted ? *result.value - *t.value : *result.value + *t.value;
             else
                 result.value.reset();
-            terms.push_back({node, std::move(t)});
+            operands_.push_back({node, std::move(t)});
         }
+        const bool last_subtracted = file_.nodes[index].kind == expr_kind::subtract;
+        spine_.resize(spine_base);
+
+        const scratch_region region(operands_, base);
+        const std::span<const operand> terms = region.view();
         const agreement a = find_agreement(terms);
         if (!a.odd.empty()) {
             const std::size_t first_odd = a.odd.front();
             std::string message;
             if (terms.size() == 2) {
-                const bool subtracted = parts[1].second;
                 message = fmt::format("cannot {} {} {} {}: their dimensions differ",
-                                      subtracted ? "subtract" : "add", quote(terms[1].node),
-                                      subtracted ? "from" : "to", quote(terms[0].node));
+                                      last_subtracted ? "subtract" : "add", quote(terms[1].node),
+                                      last_subtracted ? "from" : "to", quote(terms[0].node));
             } else {
                 message = fmt::format("{} does not have the dimension of the other terms of this sum",
                                       quote(terms[first_odd].node));
@@ -330,17 +404,19 @@ class checker {
     }
 
     typed eval_product(std::uint32_t index) {
-        std::vector<std::pair<std::uint32_t, bool>> factors; // node, divided
+        const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
         while (file_.nodes[n].kind == expr_kind::multiply || file_.nodes[n].kind == expr_kind::divide) {
-            factors.emplace_back(file_.nodes[n].rhs, file_.nodes[n].kind == expr_kind::divide);
+            spine_.push_back(n);
             n = file_.nodes[n].lhs;
         }
         typed result = eval(n);
         result.zero = false;
-        for (auto it = factors.rbegin(); it != factors.rend(); ++it) {
-            const typed t = eval(it->first);
-            const bool divided = it->second;
+        // Spine nodes were pushed outermost first; the innermost applies first.
+        for (std::size_t k = spine_.size(); k > spine_base; --k) {
+            const syntax::expr_node& op = file_.nodes[spine_[k - 1]];
+            const bool divided = op.kind == expr_kind::divide;
+            const typed t = eval(op.rhs);
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
             if (result.known)
@@ -355,6 +431,7 @@ class checker {
                 result.value.reset();
             }
         }
+        spine_.resize(spine_base);
         if (!result.known)
             return unknown_type();
         return result;
@@ -397,17 +474,21 @@ class checker {
         return result;
     }
 
-    std::string_view call_name(const syntax::expr_node& n) const {
-        std::string_view t = text(n.range);
-        t = t.substr(0, t.find('('));
-        while (!t.empty() && (t.back() == ' ' || t.back() == '\t'))
-            t.remove_suffix(1);
-        return t;
+    // The function's name and where it stands. A call in parentheses, as in x^(sin(a)), has
+    // its range widened to the parentheses, so skip those first.
+    span call_name_range(const syntax::expr_node& n) const {
+        const std::string_view t = text(n.range);
+        const std::size_t begin = t.find_first_not_of("( \t\r\n\\");
+        std::size_t end = t.find('(', begin);
+        while (end > begin && (t[end - 1] == ' ' || t[end - 1] == '\t'))
+            --end;
+        return {n.range.begin + static_cast<std::uint32_t>(begin),
+                n.range.begin + static_cast<std::uint32_t>(end)};
     }
 
     typed eval_call(const syntax::expr_node& n) {
-        const std::string_view name = call_name(n);
-        const span name_range{n.range.begin, n.range.begin + static_cast<std::uint32_t>(name.size())};
+        const span name_range = call_name_range(n);
+        const std::string_view name = text(name_range);
         std::vector<operand> args;
         for (std::uint32_t i = 0; i < n.rhs; ++i) {
             const std::uint32_t node = file_.call_args[n.lhs + i];
@@ -563,23 +644,25 @@ class checker {
 
 } // namespace
 
-void check_formulas(const syntax::parsed_file& file, symbol_table& symbols,
-                    std::vector<diagnostic>& out) {
-    checker c(file, symbols, out);
-    for (const auto& f : file.formulas) {
-        const std::size_t before = out.size();
-        try {
-            c.check_formula(f);
-        } catch (const arithmetic_overflow&) {
-            out.resize(before);
-            diagnostic d;
-            d.rule = std::string(rules::overflow);
-            d.message = "the exponents in this formula exceed the exact range (64-bit numerator "
-                        "and denominator)";
-            d.where = {file.source, f.range};
-            out.push_back(std::move(d));
-        }
+bool check_formula(const syntax::parsed_file& file, const syntax::formula& formula,
+                   symbol_table& symbols, std::vector<diagnostic>& out, bool defer_unknown) {
+    checker c(file, symbols, out, defer_unknown);
+    const std::size_t before = out.size();
+    try {
+        c.check_formula(formula);
+    } catch (const symbol_not_yet_declared&) {
+        out.resize(before);
+        return false;
+    } catch (const arithmetic_overflow&) {
+        out.resize(before);
+        diagnostic d;
+        d.rule = std::string(rules::overflow);
+        d.message = "the exponents in this formula exceed the exact range (64-bit numerator "
+                    "and denominator)";
+        d.where = {file.source, formula.range};
+        out.push_back(std::move(d));
     }
+    return true;
 }
 
 std::optional<dimension> expression_dimension(const syntax::parsed_file& file, std::uint32_t root,

@@ -183,7 +183,8 @@ template <> struct action<nt::argument> {
         ++s.argument_counts.back();
     }
 };
-template <> struct action<nt::call> {
+// The function's name was pushed as a symbol; it becomes the call node.
+template <> struct action<nt::call_arguments> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const std::uint32_t count = s.argument_counts.back();
         s.argument_counts.pop_back();
@@ -192,12 +193,17 @@ template <> struct action<nt::call> {
         for (std::size_t i = base; i < s.operands.size(); ++i)
             s.out.call_args.push_back(s.operands[i]);
         s.operands.resize(base);
-        s.push_node({expr_kind::call, s.range(in), first, count});
+        syntax::expr_node& call = s.out.nodes[s.operands.back()];
+        call.kind = expr_kind::call;
+        call.range.end = s.range(in).end;
+        call.lhs = first;
+        call.rhs = count;
     }
 };
 template <> struct action<nt::group> {
     template <typename In> static void apply(const In& in, parse_state& s) {
-        s.out.nodes[s.operands.back()].range = s.range(in);
+        const std::uint32_t inner = s.pop();
+        s.push_node({expr_kind::group, s.range(in), inner});
     }
 };
 template <> struct action<nt::power_tail> {
@@ -209,11 +215,6 @@ template <> struct action<nt::negation> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const std::uint32_t operand = s.pop();
         s.push_node({expr_kind::negate, s.range(in), operand});
-    }
-};
-template <> struct action<nt::positive> {
-    template <typename In> static void apply(const In& in, parse_state& s) {
-        s.out.nodes[s.operands.back()].range = s.range(in);
     }
 };
 template <> struct action<nt::multiply_tail> {
@@ -480,6 +481,20 @@ struct tree_mark {
     }
 };
 
+// Passes the statement a line added to the sink; drops a formula's tree once it is checked.
+void tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark) {
+    if (out.uses.size() > mark.uses)
+        sink.on_use(out, out.uses.back());
+    if (out.declarations.size() > mark.declarations)
+        sink.on_declaration(out, static_cast<std::uint32_t>(out.declarations.size() - 1));
+    if (out.formulas.size() > mark.formulas && sink.on_formula(out, out.formulas.back())) {
+        out.nodes.resize(mark.nodes);
+        out.call_args.resize(mark.call_args);
+        out.sides.resize(mark.sides);
+        out.formulas.resize(mark.formulas);
+    }
+}
+
 // Past this many, a file is more likely not ours at all than a calc with typos.
 constexpr std::size_t max_syntax_errors = 50;
 
@@ -507,7 +522,7 @@ syntax::parsed_file parse_expression(const source_file& file) {
     return out;
 }
 
-syntax::parsed_file parse_file(const source_file& file) {
+syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
     syntax::parsed_file out;
     out.source = &file;
     const std::string_view text = file.text();
@@ -533,6 +548,8 @@ syntax::parsed_file parse_file(const source_file& file) {
             text.data() + begin, text.data() + end, "");
         try {
             pg::parse<nt::line, action, control>(in, state);
+            if (sink != nullptr)
+                tell(*sink, out, mark);
         } catch (const syntax_failure& failure) {
             mark.restore(out);
             const auto at = static_cast<std::uint32_t>(failure.at - text.data());

@@ -53,7 +53,7 @@ rational::rational(std::int64_t num, std::int64_t den) {
     den_ = den / g;
 }
 
-rational operator+(rational a, rational b) {
+rational rational::add_slow(rational a, rational b) {
     if (a.den_ == 1 && b.den_ == 1)
         return rational(checked_add(a.num_, b.num_));
     // Reduce by the gcd of the denominators first so small operands stay small.
@@ -70,9 +70,10 @@ rational rational::operator-() const {
     return r;
 }
 
-rational operator-(rational a, rational b) { return a + (-b); }
-
-rational operator*(rational a, rational b) {
+rational rational::multiply_slow(rational a, rational b) {
+    // std::gcd is undefined for INT64_MIN, and no product with it can be reduced safely.
+    if (a.num_ == INT64_MIN || b.num_ == INT64_MIN)
+        overflow();
     if (a.den_ == 1 && b.den_ == 1)
         return rational(checked_mul(a.num_, b.num_));
     // Cross-cancel before multiplying to keep intermediates small.
@@ -110,68 +111,93 @@ std::string rational::to_string() const {
 }
 
 std::optional<rational> rational::parse(std::string_view text) {
+    // Read sign, digits, fraction and exponent first, then scale once: trailing zeros and
+    // powers of ten cancel before anything is multiplied, so every value that fits is exact.
+    std::size_t i = 0;
+    bool negative = false;
+    if (i < text.size() && (text[i] == '-' || text[i] == '+')) {
+        negative = text[i] == '-';
+        ++i;
+    }
+    const auto digits_from = [&](std::size_t from) {
+        std::size_t to = from;
+        while (to < text.size() && text[to] >= '0' && text[to] <= '9')
+            ++to;
+        return to;
+    };
+    const std::size_t whole_end = digits_from(i);
+    std::string_view whole = text.substr(i, whole_end - i);
+    i = whole_end;
     try {
-        bool negative = false;
-        std::size_t i = 0;
-        if (i < text.size() && (text[i] == '-' || text[i] == '+')) {
-            negative = text[i] == '-';
-            ++i;
-        }
-        std::int64_t num = 0;
-        std::int64_t den = 1;
-        bool any_digit = false;
-        for (; i < text.size() && text[i] >= '0' && text[i] <= '9'; ++i) {
-            num = checked_add(checked_mul(num, 10), text[i] - '0');
-            any_digit = true;
-        }
         if (i < text.size() && text[i] == '/') {
-            ++i;
-            std::int64_t d = 0;
-            bool any_den = false;
-            for (; i < text.size() && text[i] >= '0' && text[i] <= '9'; ++i) {
-                d = checked_add(checked_mul(d, 10), text[i] - '0');
-                any_den = true;
-            }
-            if (!any_digit || !any_den || d == 0 || i != text.size())
+            const std::size_t den_end = digits_from(i + 1);
+            const std::string_view den_text = text.substr(i + 1, den_end - i - 1);
+            if (whole.empty() || den_text.empty() || den_end != text.size())
                 return std::nullopt;
-            return rational(negative ? -num : num, d);
+            std::int64_t num = 0;
+            std::int64_t den = 0;
+            for (char c : whole)
+                num = checked_add(checked_mul(num, 10), c - '0');
+            for (char c : den_text)
+                den = checked_add(checked_mul(den, 10), c - '0');
+            if (den == 0)
+                return std::nullopt;
+            return rational(negative ? -num : num, den);
         }
+        std::string_view fraction;
         if (i < text.size() && text[i] == '.') {
-            ++i;
-            for (; i < text.size() && text[i] >= '0' && text[i] <= '9'; ++i) {
-                num = checked_add(checked_mul(num, 10), text[i] - '0');
-                den = checked_mul(den, 10);
-                any_digit = true;
-            }
+            const std::size_t fraction_end = digits_from(i + 1);
+            fraction = text.substr(i + 1, fraction_end - i - 1);
+            i = fraction_end;
         }
-        if (!any_digit)
+        if (whole.empty() && fraction.empty())
             return std::nullopt;
+        std::int64_t exponent = 0;
         if (i < text.size() && (text[i] == 'e' || text[i] == 'E')) {
             ++i;
-            bool exp_negative = false;
+            bool exponent_negative = false;
             if (i < text.size() && (text[i] == '-' || text[i] == '+')) {
-                exp_negative = text[i] == '-';
+                exponent_negative = text[i] == '-';
                 ++i;
             }
-            int exponent = 0;
-            bool any_exp = false;
-            for (; i < text.size() && text[i] >= '0' && text[i] <= '9'; ++i) {
-                exponent = exponent * 10 + (text[i] - '0');
-                if (exponent > 18)
-                    overflow();
-                any_exp = true;
-            }
-            if (!any_exp)
+            const std::size_t exponent_end = digits_from(i);
+            if (exponent_end == i || exponent_end - i > 6)
                 return std::nullopt;
-            for (int k = 0; k < exponent; ++k) {
-                if (exp_negative)
-                    den = checked_mul(den, 10);
-                else
-                    num = checked_mul(num, 10);
-            }
+            for (; i < exponent_end; ++i)
+                exponent = exponent * 10 + (text[i] - '0');
+            if (exponent_negative)
+                exponent = -exponent;
         }
         if (i != text.size())
             return std::nullopt;
+        while (!fraction.empty() && fraction.back() == '0')
+            fraction.remove_suffix(1);
+        while (whole.size() > 1 && whole.front() == '0')
+            whole.remove_prefix(1);
+        std::int64_t num = 0;
+        for (char c : whole)
+            num = checked_add(checked_mul(num, 10), c - '0');
+        for (char c : fraction)
+            num = checked_add(checked_mul(num, 10), c - '0');
+        std::int64_t scale = exponent - static_cast<std::int64_t>(fraction.size());
+        if (num == 0)
+            return rational(0);
+        while (scale < 0 && num % 10 == 0) {
+            num /= 10;
+            ++scale;
+        }
+        // Past 10^±40 no 64-bit value fits however it reduces; stop before looping long.
+        if (scale > 40 || scale < -40)
+            return std::nullopt;
+        std::int64_t den = 1;
+        for (; scale > 0; --scale)
+            num = checked_mul(num, 10);
+        for (; scale < 0; ++scale) {
+            den = checked_mul(den, 10);
+            const std::int64_t g = std::gcd(num, den);
+            num /= g;
+            den /= g;
+        }
         return rational(negative ? -num : num, den);
     } catch (const arithmetic_overflow&) {
         return std::nullopt;

@@ -52,10 +52,11 @@ namespace {
 
 struct loaded_file {
     source_file* source = nullptr;
-    syntax::parsed_file tree;
+    syntax::parsed_file tree; // declarations and uses; formulas only while deferred
     std::vector<loaded_file*> uses;
     std::vector<diagnostic> diagnostics;
-    bool loading = false;
+    bool parsed = false;  // tree holds the file's declarations and its parse findings
+    bool loading = false; // being parsed now: a `use` of it closes a cycle
 };
 
 diagnostic make_diagnostic(severity level, std::string_view rule, std::string message,
@@ -68,14 +69,52 @@ diagnostic make_diagnostic(severity level, std::string_view rule, std::string me
     return d;
 }
 
+class session;
+
+// Reads a dictionary: declarations stay in the tree, `use`d files are resolved as met,
+// formulas are dropped unchecked.
+class dictionary_reader : public statement_sink {
+  public:
+    dictionary_reader(session& s, loaded_file* f) : session_(s), file_(f) {}
+    void on_use(const syntax::parsed_file& tree, const syntax::use_line& use) override;
+    void on_declaration(const syntax::parsed_file& /*tree*/, std::uint32_t /*index*/) override {}
+    bool on_formula(const syntax::parsed_file& /*tree*/, const syntax::formula& /*f*/) override {
+        return true;
+    }
+
+  protected:
+    session& session_;
+    loaded_file* file_;
+};
+
+// Reads a file being checked: symbols enter the table as they are declared, and each
+// formula is checked as soon as it is parsed (or kept for the end when it names a symbol
+// declared further down).
+class checking_reader : public dictionary_reader {
+  public:
+    checking_reader(session& s, loaded_file* f, symbol_table& table,
+                    std::unordered_set<const loaded_file*>& visited)
+        : dictionary_reader(s, f), table_(table), visited_(visited) {}
+    void on_use(const syntax::parsed_file& tree, const syntax::use_line& use) override;
+    void on_declaration(const syntax::parsed_file& tree, std::uint32_t index) override;
+    bool on_formula(const syntax::parsed_file& tree, const syntax::formula& f) override;
+
+    std::size_t formulas = 0;
+
+  private:
+    symbol_table& table_;
+    std::unordered_set<const loaded_file*>& visited_;
+};
+
 class session {
   public:
     session(check_report& report, const check_options& options) : report_(report) {
         for (const auto& path : options.dictionaries)
             if (loaded_file* f = load(path, {}))
-                dictionaries_.push_back(f);
+                dictionaries_.push_back(as_dictionary(f));
     }
 
+    // Reads a file once; its text is parsed on demand (as a dictionary or when checked).
     loaded_file* load(const fs::path& path, location requested_at) {
         std::error_code ec;
         fs::path key = fs::weakly_canonical(path, ec);
@@ -98,29 +137,16 @@ class session {
         if (!key.empty())
             by_path_.emplace(key, f);
         f->source = report_.sources.back().get();
-        f->tree = parse_file(*f->source);
-        if (f->tree.has_syntax_error)
-            report_.input_failed = true;
-        f->diagnostics = std::move(f->tree.diagnostics);
+        return f;
+    }
+
+    // Parses a file for its declarations (its formulas are not needed) and resolves its uses.
+    loaded_file* as_dictionary(loaded_file* f) {
+        if (f->parsed || f->loading)
+            return f;
         f->loading = true;
-        const fs::path base = fs::path(f->source->path()).parent_path();
-        for (const auto& use : f->tree.uses) {
-            const location at{f->source, use.range};
-            const fs::path target = base / std::string(f->source->text(use.path));
-            loaded_file* used = load(target, at);
-            if (used == nullptr)
-                continue;
-            if (used->loading) {
-                f->diagnostics.push_back(make_diagnostic(
-                    severity::error, rules::include_cycle,
-                    fmt::format("'{}' uses this file in turn, so they form a cycle; move the shared "
-                                "declarations into a dictionary that uses neither",
-                                f->source->text(use.path)),
-                    at));
-                continue;
-            }
-            f->uses.push_back(used);
-        }
+        dictionary_reader reader(*this, f);
+        take_parse(f, parse_file(*f->source, &reader));
         f->loading = false;
         return f;
     }
@@ -131,21 +157,24 @@ class session {
         for (loaded_file* d : dictionaries_)
             declare_from(d, table, visited, false);
         visited.insert(f); // a dictionary that uses the checked file back adds nothing new
-        for (loaded_file* u : f->uses)
-            declare_from(u, table, visited, false);
-        declare(f, table, true);
 
-        check_formulas(f->tree, table, f->diagnostics);
-        if (!f->tree.formulas.empty())
+        f->loading = true;
+        checking_reader reader(*this, f, table, visited);
+        syntax::parsed_file tree = parse_file(*f->source, &reader);
+        f->loading = false;
+        // Formulas that named a symbol declared further down are checked now, against all.
+        for (const auto& formula : tree.formulas)
+            check_formula(tree, formula, table, f->diagnostics, false);
+        const std::size_t formulas = reader.formulas;
+        if (f->parsed)
+            tree.diagnostics.clear(); // reported when the file was read as a dictionary
+        else
+            take_parse(f, std::move(tree));
+        if (formulas > 0)
             report_unused(f, table);
         ++report_.files_checked;
-        report_.formulas_checked += f->tree.formulas.size();
+        report_.formulas_checked += formulas;
         report_.bytes_checked += f->source->text().size();
-        // The expression trees are not needed again; a dictionary's declarations are.
-        f->tree.nodes = {};
-        f->tree.call_args = {};
-        f->tree.sides = {};
-        f->tree.formulas = {};
     }
 
     std::optional<dimension> query(std::string expression, const std::vector<fs::path>& context) {
@@ -155,7 +184,7 @@ class session {
             declare_from(d, table, visited, false);
         for (const auto& path : context)
             if (loaded_file* f = load(path, {}))
-                declare_from(f, table, visited, false);
+                declare_from(as_dictionary(f), table, visited, false);
         report_.sources.push_back(std::make_unique<source_file>("<query>", std::move(expression)));
         const source_file& src = *report_.sources.back();
         syntax::parsed_file tree = parse_expression(src);
@@ -217,7 +246,18 @@ class session {
             why = fs::exists(path, ec) ? "permission denied or not a regular file"
                                        : "no such file";
         if (why.empty()) {
-            text.assign(std::istreambuf_iterator<char>(in), std::istreambuf_iterator<char>());
+            in.seekg(0, std::ios::end);
+            const std::streamoff size = in.tellg();
+            in.seekg(0, std::ios::beg);
+            if (size > 0) {
+                text.resize(static_cast<std::size_t>(size));
+                in.read(text.data(), size);
+                text.resize(static_cast<std::size_t>(in.gcount()));
+            } else {
+                // A pipe or a special file reports no size; read it as a stream.
+                in.clear();
+                text.assign(std::istreambuf_iterator<char>(in), std::istreambuf_iterator<char>());
+            }
             if (in.bad())
                 why = "a read error occurred";
             else if (text.size() >= std::numeric_limits<std::uint32_t>::max())
@@ -239,6 +279,44 @@ class session {
         return false;
     }
 
+    friend class dictionary_reader;
+    friend class checking_reader;
+
+    void take_parse(loaded_file* f, syntax::parsed_file tree) {
+        if (tree.has_syntax_error)
+            report_.input_failed = true;
+        for (auto& d : tree.diagnostics)
+            f->diagnostics.push_back(std::move(d));
+        tree.diagnostics.clear();
+        tree.nodes = {};
+        tree.call_args = {};
+        tree.sides = {};
+        tree.formulas = {};
+        f->tree = std::move(tree);
+        f->parsed = true;
+    }
+
+    // The file a `use` line names, read as a dictionary; null (and reported) when it cannot be.
+    loaded_file* resolve_use(loaded_file* f, const syntax::use_line& use) {
+        const location at{f->source, use.range};
+        const fs::path base = fs::path(f->source->path()).parent_path();
+        loaded_file* used = load(base / std::string(f->source->text(use.path)), at);
+        if (used == nullptr)
+            return nullptr;
+        if (used->loading) {
+            f->diagnostics.push_back(make_diagnostic(
+                severity::error, rules::include_cycle,
+                fmt::format("'{}' uses this file in turn, so they form a cycle; move the shared "
+                            "declarations into a dictionary that uses neither",
+                            f->source->text(use.path)),
+                at));
+            return nullptr;
+        }
+        as_dictionary(used);
+        f->uses.push_back(used);
+        return used;
+    }
+
     void declare_from(loaded_file* f, symbol_table& table,
                       std::unordered_set<const loaded_file*>& visited, bool local) {
         if (!visited.insert(f).second)
@@ -249,8 +327,13 @@ class session {
     }
 
     void declare(loaded_file* f, symbol_table& table, bool local) {
-        const syntax::parsed_file& tree = f->tree;
-        for (const auto& n : tree.names) {
+        declare_names(f, f->tree, 0, static_cast<std::uint32_t>(f->tree.names.size()), table, local);
+    }
+
+    void declare_names(loaded_file* f, const syntax::parsed_file& tree, std::uint32_t first,
+                       std::uint32_t count, symbol_table& table, bool local) {
+        for (std::uint32_t i = first; i < first + count; ++i) {
+            const syntax::declared_name& n = tree.names[i];
             const std::string_view name = f->source->text(n.name);
             const location at{f->source, n.name};
             if (name == "pi" || name == "\u03C0") {
@@ -315,6 +398,25 @@ class session {
         }
     }
 };
+
+void dictionary_reader::on_use(const syntax::parsed_file& /*tree*/, const syntax::use_line& use) {
+    session_.resolve_use(file_, use);
+}
+
+void checking_reader::on_use(const syntax::parsed_file& /*tree*/, const syntax::use_line& use) {
+    if (loaded_file* used = session_.resolve_use(file_, use))
+        session_.declare_from(used, table_, visited_, false);
+}
+
+void checking_reader::on_declaration(const syntax::parsed_file& tree, std::uint32_t index) {
+    const syntax::declaration& d = tree.declarations[index];
+    session_.declare_names(file_, tree, d.first_name, d.name_count, table_, true);
+}
+
+bool checking_reader::on_formula(const syntax::parsed_file& tree, const syntax::formula& f) {
+    ++formulas;
+    return check_formula(tree, f, table_, file_->diagnostics, true);
+}
 
 void collect_plumb_files(const fs::path& dir, std::vector<fs::path>& out, session& s) {
     std::error_code ec;

@@ -27,6 +27,7 @@ enum class expr_kind : std::uint8_t {
     divide,
     power,    // lhs ^ rhs
     call,     // range starts with the function name; lhs = first index into call_args, rhs = count
+    group,    // ( lhs ): kept so that messages quote terms with their parentheses
 };
 
 struct expr_node {

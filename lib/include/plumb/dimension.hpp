@@ -44,8 +44,18 @@ class dimension {
 
     // Products, quotients and powers add, subtract and scale exponents; each may throw
     // arithmetic_overflow.
-    friend dimension operator*(const dimension& a, const dimension& b);
-    friend dimension operator/(const dimension& a, const dimension& b);
+    friend dimension operator*(const dimension& a, const dimension& b) {
+        dimension r;
+        for (std::size_t i = 0; i < base_dimension_count; ++i)
+            r.exponents_[i] = a.exponents_[i] + b.exponents_[i];
+        return r;
+    }
+    friend dimension operator/(const dimension& a, const dimension& b) {
+        dimension r;
+        for (std::size_t i = 0; i < base_dimension_count; ++i)
+            r.exponents_[i] = a.exponents_[i] - b.exponents_[i];
+        return r;
+    }
     [[nodiscard]] dimension pow(rational p) const;
 
     friend bool operator==(const dimension& a, const dimension& b) = default;

@@ -31,9 +31,25 @@ class rational {
         return static_cast<double>(num_) / static_cast<double>(den_);
     }
 
-    friend rational operator+(rational a, rational b);
-    friend rational operator-(rational a, rational b);
-    friend rational operator*(rational a, rational b);
+    // Whole exponents are the common case; their fast paths are inline, the rest is not.
+    friend rational operator+(rational a, rational b) {
+        std::int64_t sum = 0;
+        if (a.den_ == 1 && b.den_ == 1 && !__builtin_add_overflow(a.num_, b.num_, &sum))
+            return rational(sum);
+        return add_slow(a, b);
+    }
+    friend rational operator-(rational a, rational b) {
+        std::int64_t difference = 0;
+        if (a.den_ == 1 && b.den_ == 1 && !__builtin_sub_overflow(a.num_, b.num_, &difference))
+            return rational(difference);
+        return add_slow(a, -b);
+    }
+    friend rational operator*(rational a, rational b) {
+        std::int64_t product = 0;
+        if (a.den_ == 1 && b.den_ == 1 && !__builtin_mul_overflow(a.num_, b.num_, &product))
+            return rational(product);
+        return multiply_slow(a, b);
+    }
     friend rational operator/(rational a, rational b); // throws std::domain_error on b == 0
     rational operator-() const;
     rational& operator+=(rational b) { return *this = *this + b; }
@@ -53,6 +69,9 @@ class rational {
     static std::optional<rational> parse(std::string_view text);
 
   private:
+    static rational add_slow(rational a, rational b);
+    static rational multiply_slow(rational a, rational b);
+
     std::int64_t num_ = 0;
     std::int64_t den_ = 1;
 };
