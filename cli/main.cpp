@@ -21,7 +21,8 @@ constexpr int exit_clean = 0;
 constexpr int exit_findings = 1;
 constexpr int exit_usage = 2;
 
-constexpr std::string_view usage_text = R"(plumb - check engineering formulas for dimensional homogeneity
+constexpr std::string_view usage_text =
+    R"(plumb - check engineering formulas for dimensional homogeneity
 
 usage:
   plumb check [options] PATH...   check .plumb files (folders are searched for *.plumb)
@@ -45,7 +46,9 @@ A dimensionally consistent formula can still be wrong; plumb does not replace
 independent review under the applicable codes and licensed practice.
 )";
 
-void print(std::string_view text) { std::fwrite(text.data(), 1, text.size(), stdout); }
+void print(std::string_view text) {
+    std::fwrite(text.data(), 1, text.size(), stdout);
+}
 
 int usage_error(std::string_view message) {
     fmt::print(stderr, "plumb: {}\nrun 'plumb --help' for usage\n", message);
@@ -170,14 +173,15 @@ int run_units(const std::vector<std::string>& args) {
             scale = fmt::format(" + {:g}", u.offset);
         else if (u.scale == plumb::unit_scale::gauge)
             scale = fmt::format(" + {:g} (gauge)", u.offset);
-        print(fmt::format("{:<8} {:<32} {:<22} = {}{} SI{}\n", u.symbol, u.name, u.dim().to_string(),
-                          u.exact_factor, scale, u.takes_prefixes ? ", takes SI prefixes" : ""));
+        print(fmt::format("{:<8} {:<32} {:<22} = {}{} SI{}\n", u.symbol, u.name,
+                          u.dim().to_string(), u.exact_factor, scale,
+                          u.takes_prefixes ? ", takes SI prefixes" : ""));
     }
     if (filter.empty()) {
         std::string prefixes;
         for (const auto& p : table.prefixes())
-            prefixes += fmt::format("{}{} ({}, 1e{})", prefixes.empty() ? "" : ", ", p.symbol, p.name,
-                                    p.power_of_ten);
+            prefixes += fmt::format("{}{} ({}, 1e{})", prefixes.empty() ? "" : ", ", p.symbol,
+                                    p.name, p.power_of_ten);
         print(fmt::format("\nprefixes: {}\n", prefixes));
     }
     return exit_clean;
@@ -219,8 +223,8 @@ int run(int argc, char** argv) {
     if (command == "rules")
         return run_rules();
     if (command.size() > 6 && command.substr(command.size() - 6) == ".plumb")
-        return usage_error(fmt::format("unknown command '{}'; did you mean 'plumb check {}'?",
-                                       command, command));
+        return usage_error(
+            fmt::format("unknown command '{}'; did you mean 'plumb check {}'?", command, command));
     return usage_error(fmt::format("unknown command '{}'", command));
 }
 

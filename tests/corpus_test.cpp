@@ -78,7 +78,8 @@ TEST_CASE("corpus: every finding is recorded with '# expect:' and every record i
     finding_set actual;
     for (const auto& d : report.diagnostics) {
         REQUIRE_MESSAGE(d.where.file != nullptr, d.message);
-        actual.insert(key(d.where.file->path(), d.where.file->position(d.where.range.begin).line, d.rule));
+        actual.insert(
+            key(d.where.file->path(), d.where.file->position(d.where.range.begin).line, d.rule));
     }
     const finding_set expected = expected_findings();
     INFO("reported but not expected:\n" << difference(actual, expected));
@@ -95,7 +96,8 @@ TEST_CASE("corpus: published formulas name their source and there are at least 4
         if (folder == "demo" || folder == "mistakes" || folder == "dictionaries")
             continue;
         std::ifstream in(file);
-        const std::string text((std::istreambuf_iterator<char>(in)), std::istreambuf_iterator<char>());
+        const std::string text((std::istreambuf_iterator<char>(in)),
+                               std::istreambuf_iterator<char>());
         const plumb::check_report one = plumb::check_paths({file});
         if (one.formulas_checked == 0)
             continue; // a dictionary kept beside its formulas

@@ -31,9 +31,8 @@ struct name : seq<letter, star<name_char>, star<one<'\''>>> {};
 // --- Numbers ------------------------------------------------------------------------------
 struct digits : plus<digit> {};
 struct decimal_exponent : seq<one<'e', 'E'>, opt<one<'+', '-'>>, digits> {};
-struct number
-    : seq<sor<seq<digits, opt<one<'.'>, star<digit>>>, seq<one<'.'>, digits>>, opt<decimal_exponent>> {
-};
+struct number : seq<sor<seq<digits, opt<one<'.'>, star<digit>>>, seq<one<'.'>, digits>>,
+                    opt<decimal_exponent>> {};
 // "2g" is a product written without its operator; say so instead of failing further on.
 struct number_end : not_at<name_char> {};
 struct number_term : seq<number, must<number_end>> {};
@@ -41,9 +40,11 @@ struct number_term : seq<number, must<number_end>> {};
 // An exponent written inside a unit or a dimension: 3, -2, 0.5, (1/2), (-3/2).
 struct signed_decimal : seq<opt<one<'-', '+'>>, digits, opt<one<'.'>, digits>> {};
 struct fraction_close : one<')'> {};
-struct fraction_body : seq<signed_decimal, star<space>, opt<one<'/'>, star<space>, must<digits>>> {};
+struct fraction_body : seq<signed_decimal, star<space>, opt<one<'/'>, star<space>, must<digits>>> {
+};
 struct literal_exponent
-    : sor<signed_decimal, if_must<one<'('>, star<space>, fraction_body, star<space>, fraction_close>> {};
+    : sor<signed_decimal,
+          if_must<one<'('>, star<space>, fraction_body, star<space>, fraction_close>> {};
 
 // --- Expressions --------------------------------------------------------------------------
 struct expression;
@@ -131,11 +132,12 @@ struct unit_symbol : seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'
 struct unit_percent : one<'%'> {};
 struct unit_one : seq<one<'1'>, not_at<digit>> {};
 struct unit_group_close : one<')'> {};
-struct unit_group : if_must<one<'('>, star<space>, unit_expression, star<space>, unit_group_close> {};
+struct unit_group : if_must<one<'('>, star<space>, unit_expression, star<space>, unit_group_close> {
+};
 struct unit_primary : sor<unit_group, unit_one, unit_percent, unit_symbol> {};
 struct unit_exponent : literal_exponent {};
-struct unit_power : seq<unit_primary, opt<star<space>, one<'^'>, star<space>, must<unit_exponent>>> {
-};
+struct unit_power
+    : seq<unit_primary, opt<star<space>, one<'^'>, star<space>, must<unit_exponent>>> {};
 struct unit_factor : unit_power {};
 struct unit_multiply : seq<star<space>, multiply_sign, star<space>, must<unit_factor>> {};
 struct unit_divide : seq<star<space>, one<'/'>, star<space>, must<unit_factor>> {};
@@ -151,7 +153,9 @@ struct constant_assignment : if_must<one<'='>, ws, constant_value> {};
 struct description_close : one<'"'> {};
 struct description_text : star<not_one<'"', '\n'>> {};
 struct description : if_must<one<'"'>, description_text, description_close> {};
-struct declaration_head : seq<name, star<ws, one<','>, ws, name>, ws, one<':'>> {};
+// The lookahead that tells a declaration from a formula; a missing name after a comma still
+// counts, so that name_list can say what is missing.
+struct declaration_head : seq<name, star<ws, one<','>, ws, opt<name>>, ws, one<':'>> {};
 struct declaration : seq<at<declaration_head>, name_list, ws, one<':'>, ws, must<declaration_spec>,
                          opt<ws, constant_assignment>, opt<ws, description>> {};
 

@@ -45,5 +45,7 @@ template <> inline constexpr const char* error_message<line_end> = "expected an 
 } // namespace plumb::notation
 
 namespace plumb::notation {
-template <> inline constexpr const char* error_message<query_end> = "expected an operator or the end of the expression here";
+template <>
+inline constexpr const char* error_message<query_end> =
+    "expected an operator or the end of the expression here";
 } // namespace plumb::notation

@@ -51,8 +51,7 @@ std::string dimension::to_string() const {
         out += '^';
         if (e.is_integer())
             out += e.to_string();
-        else
-        {
+        else {
             out += '(';
             out += e.to_string();
             out += ')';

@@ -7,8 +7,8 @@
 #include "plumb/rules.hpp"
 
 #include <algorithm>
-#include <span>
 #include <fmt/format.h>
+#include <span>
 
 namespace plumb {
 namespace {
@@ -18,9 +18,9 @@ using syntax::expr_kind;
 // A subexpression's type: its dimension, and what the rules need to know about its value.
 struct typed {
     dimension dim;
-    bool known = true;    // false below an error already reported: stops cascades
-    bool zero = false;    // the literal 0, which agrees with any dimension
-    bool numeric = false; // built from numbers alone
+    bool known = true;             // false below an error already reported: stops cascades
+    bool zero = false;             // the literal 0, which agrees with any dimension
+    bool numeric = false;          // built from numbers alone
     std::optional<rational> value; // exact value, when numeric and exactly representable
 };
 
@@ -185,9 +185,9 @@ class checker {
         if (a.odd.empty())
             return;
         const char* what = equation ? "equation" : "limit";
-        std::string message = sides.size() == 2
-                                  ? fmt::format("the two sides of this {} differ in dimension", what)
-                                  : fmt::format("the sides of this {} differ in dimension", what);
+        std::string message =
+            sides.size() == 2 ? fmt::format("the two sides of this {} differ in dimension", what)
+                              : fmt::format("the sides of this {} differ in dimension", what);
         diagnostic& d = report(rules::side_mismatch, std::move(message),
                                file_.nodes[sides[a.odd.front()].node].range);
         for (std::size_t i = 0; i < sides.size(); ++i) {
@@ -278,21 +278,45 @@ class checker {
     // Notes for operands that disagree: each odd one with its dimension, then the rest.
     void explain(diagnostic& d, std::span<const operand> ops, const agreement& a,
                  std::string_view others) const {
-        for (const auto& op : ops)
-            if (op.type.known)
-                add_term(d, op);
-        for (std::size_t i : a.odd)
-            d.notes.push_back(
-                {fmt::format("{} is {}", quote(ops[i].node), describe(ops[i].type.dim)), {}});
-        std::vector<std::string> agreeing;
+        // A sum of thousands of terms must not bury the finding (or slow the renderers):
+        // the odd ones are all named, the agreeing ones up to a handful.
+        constexpr std::size_t max_listed = 8;
+        constexpr std::size_t max_odd = 32;
+        for (std::size_t k = 0; k < a.odd.size() && k < max_odd; ++k) {
+            add_term(d, ops[a.odd[k]]);
+            d.notes.push_back({fmt::format("{} is {}", quote(ops[a.odd[k]].node),
+                                           describe(ops[a.odd[k]].type.dim)),
+                               {}});
+        }
+        if (a.odd.size() > max_odd)
+            d.notes.push_back({fmt::format("and {} more that differ", a.odd.size() - max_odd), {}});
+        std::vector<std::size_t> agreeing_index;
         for (std::size_t i = 0; i < ops.size(); ++i)
             if (ops[i].type.known && !ops[i].type.zero &&
                 std::find(a.odd.begin(), a.odd.end(), i) == a.odd.end())
-                agreeing.push_back(quote(ops[i].node));
-        if (agreeing.size() == 1)
+                agreeing_index.push_back(i);
+        const std::size_t agreeing_count = agreeing_index.size();
+        if (agreeing_count > max_listed) {
+            // Keep the ones nearest the first odd term: they are what the reader sees beside it.
+            const std::size_t odd = a.odd.front();
+            std::stable_sort(
+                agreeing_index.begin(), agreeing_index.end(), [odd](std::size_t x, std::size_t y) {
+                    return (x > odd ? x - odd : odd - x) < (y > odd ? y - odd : odd - y);
+                });
+            agreeing_index.resize(max_listed);
+            std::sort(agreeing_index.begin(), agreeing_index.end());
+        }
+        std::vector<std::string> agreeing;
+        for (std::size_t i : agreeing_index) {
+            add_term(d, ops[i]);
+            agreeing.push_back(quote(ops[i].node));
+        }
+        if (agreeing_count > max_listed)
+            agreeing.push_back(fmt::format("and {} more", agreeing_count - max_listed));
+        if (agreeing_count == 1)
             d.notes.push_back(
                 {fmt::format("{} is {}", agreeing.front(), describe(*a.reference)), {}});
-        else if (!agreeing.empty())
+        else if (agreeing_count > 1)
             d.notes.push_back({fmt::format("the other {} are {}: {}", others,
                                            describe(*a.reference), fmt::join(agreeing, ", ")),
                                {}});
@@ -318,8 +342,8 @@ class checker {
             if (!near.empty()) {
                 std::string list;
                 for (std::size_t i = 0; i < near.size(); ++i)
-                    list += fmt::format("{}'{}'", i == 0 ? "" : (i + 1 == near.size() ? " or " : ", "),
-                                        near[i]);
+                    list += fmt::format(
+                        "{}'{}'", i == 0 ? "" : (i + 1 == near.size() ? " or " : ", "), near[i]);
                 d.notes.push_back({fmt::format("did you mean {}?", list), {}});
             }
             if (find_function(name) != nullptr)
@@ -344,7 +368,8 @@ class checker {
         // Walk the left spine iteratively: a long sum must not recurse once per term.
         const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
-        while (file_.nodes[n].kind == expr_kind::add || file_.nodes[n].kind == expr_kind::subtract) {
+        while (file_.nodes[n].kind == expr_kind::add ||
+               file_.nodes[n].kind == expr_kind::subtract) {
             spine_.push_back(n);
             n = file_.nodes[n].lhs;
         }
@@ -358,8 +383,7 @@ class checker {
         for (std::size_t k = 0; k < term_count; ++k) {
             // Term k is the leftmost leaf for k == 0, else the right child of the spine node
             // k levels up from it.
-            const std::uint32_t node =
-                k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
+            const std::uint32_t node = k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
             typed t = eval(node);
@@ -386,11 +410,12 @@ class checker {
                                       last_subtracted ? "subtract" : "add", quote(terms[1].node),
                                       last_subtracted ? "from" : "to", quote(terms[0].node));
             } else {
-                message = fmt::format("{} does not have the dimension of the other terms of this sum",
-                                      quote(terms[first_odd].node));
+                message =
+                    fmt::format("{} does not have the dimension of the other terms of this sum",
+                                quote(terms[first_odd].node));
             }
-            diagnostic& d =
-                report(rules::sum_mismatch, std::move(message), file_.nodes[terms[first_odd].node].range);
+            diagnostic& d = report(rules::sum_mismatch, std::move(message),
+                                   file_.nodes[terms[first_odd].node].range);
             explain(d, terms, a, "terms");
             return unknown_type();
         }
@@ -406,7 +431,8 @@ class checker {
     typed eval_product(std::uint32_t index) {
         const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
-        while (file_.nodes[n].kind == expr_kind::multiply || file_.nodes[n].kind == expr_kind::divide) {
+        while (file_.nodes[n].kind == expr_kind::multiply ||
+               file_.nodes[n].kind == expr_kind::divide) {
             spine_.push_back(n);
             n = file_.nodes[n].lhs;
         }
@@ -446,22 +472,26 @@ class checker {
                                                quote(exponent_node)),
                                    file_.nodes[exponent_node].range);
             add_term(d, {exponent_node, exponent});
-            d.notes.push_back({fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}});
+            d.notes.push_back(
+                {fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}});
             return unknown_type();
         }
         if (!base.known || !exponent.known)
             return unknown_type();
         typed result;
         result.numeric = base.numeric && exponent.numeric;
-        if (base.dim.is_dimensionless())
+        if (base.dim.is_dimensionless()) {
+            result.value = exact_power(base.value, exponent.value);
             return result;
+        }
         if (!exponent.value) {
             const char* why = exponent.numeric ? "is not a number plumb can hold exactly"
                                                : "is not a constant number";
             diagnostic& d = report(
                 rules::variable_exponent,
-                fmt::format("{} has a dimension, so its exponent must be a constant number, but {} {}",
-                            quote(base_node), quote(exponent_node), why),
+                fmt::format(
+                    "{} has a dimension, so its exponent must be a constant number, but {} {}",
+                    quote(base_node), quote(exponent_node), why),
                 file_.nodes[exponent_node].range);
             add_term(d, {base_node, base});
             d.notes.push_back({fmt::format("{} is {}", quote(base_node), describe(base.dim)), {}});
@@ -472,6 +502,23 @@ class checker {
         }
         result.dim = base.dim.pow(*exponent.value);
         return result;
+    }
+
+    // b^e exactly, for the whole exponents that constant exponents such as 2^3 need.
+    static std::optional<rational> exact_power(const std::optional<rational>& base,
+                                               const std::optional<rational>& exponent) {
+        if (!base || !exponent || !exponent->is_integer() || exponent->num() > 64 ||
+            exponent->num() < -64 || (base->is_zero() && exponent->num() < 0))
+            return std::nullopt;
+        try {
+            rational r = 1;
+            for (std::int64_t k = 0; k < (exponent->num() < 0 ? -exponent->num() : exponent->num());
+                 ++k)
+                r *= *base;
+            return exponent->num() < 0 ? rational(1) / r : r;
+        } catch (const arithmetic_overflow&) {
+            return std::nullopt;
+        }
     }
 
     // The function's name and where it stands. A call in parentheses, as in x^(sin(a)), has
@@ -499,9 +546,10 @@ class checker {
             diagnostic& d = report(rules::unknown_function,
                                    fmt::format("'{}' is not a known function", name), name_range);
             std::string_view best;
-            std::size_t best_distance = 3;
+            const std::size_t allowed = std::max<std::size_t>(1, name.size() / 3);
+            std::size_t best_distance = allowed + 1;
             for (const auto& candidate : builtin_functions()) {
-                const std::size_t dist = edit_distance(name, candidate.name, 2);
+                const std::size_t dist = edit_distance(name, candidate.name, allowed);
                 if (dist < best_distance) {
                     best_distance = dist;
                     best = candidate.name;
@@ -510,21 +558,22 @@ class checker {
             if (!best.empty())
                 d.notes.push_back({fmt::format("did you mean '{}'?", best), {}});
             if (symbols_.find(name) != nullptr)
-                d.notes.push_back({fmt::format("'{}' is a declared symbol; write a product with '*', "
-                                               "as in {}*(...)",
-                                               name, name),
-                                   {}});
+                d.notes.push_back(
+                    {fmt::format("'{}' is a declared symbol; write a product with '*', "
+                                 "as in {}*(...)",
+                                 name, name),
+                     {}});
             return unknown_type();
         }
         const std::size_t count = args.size();
-        if (count < f->min_args || count > f->max_args ||
+        if (count < f->min_args || (f->max_args != unlimited_args && count > f->max_args) ||
             (f->rule == function_rule::integral && count == 3)) {
             std::string expected;
             if (f->rule == function_rule::integral)
                 expected = "2 arguments (or 4, with the limits)";
             else if (f->min_args == f->max_args)
                 expected = fmt::format("{} argument{}", f->min_args, f->min_args == 1 ? "" : "s");
-            else if (f->max_args == 255)
+            else if (f->max_args == unlimited_args)
                 expected = fmt::format("at least {} arguments", f->min_args);
             else
                 expected = fmt::format("{} to {} arguments", f->min_args, f->max_args);
@@ -535,8 +584,8 @@ class checker {
             return unknown_type();
         }
         typed result;
-        result.numeric = std::all_of(args.begin(), args.end(),
-                                     [](const operand& a) { return a.type.numeric; });
+        result.numeric =
+            std::all_of(args.begin(), args.end(), [](const operand& a) { return a.type.numeric; });
         switch (f->rule) {
         case function_rule::root:
             if (!args[0].type.known)
@@ -557,16 +606,17 @@ class checker {
         case function_rule::common: {
             const agreement a = find_agreement(args);
             if (!a.odd.empty()) {
-                diagnostic& d = report(
-                    rules::argument_mismatch,
-                    fmt::format("the arguments of {} differ in dimension", f->name),
-                    file_.nodes[args[a.odd.front()].node].range);
+                diagnostic& d =
+                    report(rules::argument_mismatch,
+                           fmt::format("the arguments of {} differ in dimension", f->name),
+                           file_.nodes[args[a.odd.front()].node].range);
                 explain(d, args, a, "arguments");
                 return unknown_type();
             }
             if (f->rule == function_rule::angle_of)
                 return result;
-            if (!std::all_of(args.begin(), args.end(), [](const operand& o) { return o.type.known; }))
+            if (!std::all_of(args.begin(), args.end(),
+                             [](const operand& o) { return o.type.known; }))
                 return unknown_type();
             result.dim = a.reference.value_or(dimension{});
             return result;
@@ -588,8 +638,8 @@ class checker {
                           f.name.find("cos") != std::string_view::npos ||
                           f.name.find("tan") != std::string_view::npos;
         diagnostic& d = report(rules::dimensioned_argument,
-                               fmt::format("{} needs a dimensionless argument, but {} is {}", f.name,
-                                           quote(a.node), describe(a.type.dim)),
+                               fmt::format("{} needs a dimensionless argument, but {} is {}",
+                                           f.name, quote(a.node), describe(a.type.dim)),
                                file_.nodes[a.node].range);
         add_term(d, a);
         d.notes.push_back({trig ? std::string("an angle is dimensionless: give it in radians, or "
@@ -621,16 +671,27 @@ class checker {
     }
 
     typed integral(const std::vector<operand>& args) {
-        if (args.size() == 4) {
-            const std::vector<operand> variable_and_limits = {args[1], args[2], args[3]};
-            const agreement a = find_agreement(variable_and_limits);
-            if (!a.odd.empty()) {
+        // The limits answer to the variable of integration, however many of them there are.
+        if (args.size() == 4 && args[1].type.known) {
+            const operand* odd = nullptr;
+            for (std::size_t i = 2; i < 4 && odd == nullptr; ++i)
+                if (args[i].type.known && !args[i].type.zero &&
+                    !(args[i].type.dim == args[1].type.dim))
+                    odd = &args[i];
+            if (odd != nullptr) {
                 diagnostic& d = report(
                     rules::argument_mismatch,
                     fmt::format("the limits of integral must have the dimension of the variable {}",
                                 quote(args[1].node)),
-                    file_.nodes[variable_and_limits[a.odd.front()].node].range);
-                explain(d, variable_and_limits, a, "arguments");
+                    file_.nodes[odd->node].range);
+                for (std::size_t i = 1; i < 4; ++i) {
+                    if (!args[i].type.known)
+                        continue;
+                    add_term(d, args[i]);
+                    d.notes.push_back(
+                        {fmt::format("{} is {}", quote(args[i].node), describe(args[i].type.dim)),
+                         {}});
+                }
                 return unknown_type();
             }
         }

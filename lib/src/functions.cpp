@@ -6,7 +6,7 @@
 namespace plumb {
 namespace {
 
-constexpr std::uint8_t unlimited = 255;
+constexpr std::uint8_t unlimited = unlimited_args;
 
 const std::array<builtin_function, 26>& table() {
     using r = function_rule;
@@ -50,6 +50,8 @@ const builtin_function* find_function(std::string_view name) {
     return nullptr;
 }
 
-std::span<const builtin_function> builtin_functions() { return table(); }
+std::span<const builtin_function> builtin_functions() {
+    return table();
+}
 
 } // namespace plumb

@@ -21,11 +21,13 @@ enum class function_rule : std::uint8_t {
     integral,      // integral(f, x[, a, b]): dim(f) * dim(x); a and b agree with x
 };
 
+inline constexpr std::uint8_t unlimited_args = 255;
+
 struct builtin_function {
     std::string_view name;
     function_rule rule;
     std::uint8_t min_args;
-    std::uint8_t max_args; // 255: no limit
+    std::uint8_t max_args; // unlimited_args: no limit
     rational power;        // for root
 };
 

@@ -97,7 +97,8 @@ struct parse_state {
     span pending_use_path{};
 
     [[nodiscard]] span range(const char* b, const char* e) const {
-        return {static_cast<std::uint32_t>(b - file_begin), static_cast<std::uint32_t>(e - file_begin)};
+        return {static_cast<std::uint32_t>(b - file_begin),
+                static_cast<std::uint32_t>(e - file_begin)};
     }
     template <typename Input> [[nodiscard]] span range(const Input& in) const {
         return range(in.begin(), in.end());
@@ -144,7 +145,9 @@ struct parse_state {
     }
 };
 
-int& nesting_depth(parse_state& s) { return s.depth; }
+int& nesting_depth(parse_state& s) {
+    return s.depth;
+}
 
 // "(1/2)", "( -3 / 2 )", "-3", "0.5" to an exact rational.
 std::optional<rational> exponent_value(std::string_view text) {
@@ -300,8 +303,8 @@ template <> struct action<nt::dimension_exponent> {
 };
 template <> struct action<nt::dimension_factor> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
-        s.bracket_dimension =
-            s.bracket_dimension * dimension::base(s.pending_base).pow(s.pending_exponent.value_or(1));
+        s.bracket_dimension = s.bracket_dimension *
+                              dimension::base(s.pending_base).pow(s.pending_exponent.value_or(1));
         s.pending_exponent.reset();
     }
 };
@@ -322,14 +325,15 @@ template <> struct action<nt::unit_symbol> {
             if (!near.empty()) {
                 message += "; did you mean ";
                 for (std::size_t i = 0; i < near.size(); ++i)
-                    message += fmt::format("{}'{}'", i == 0 ? "" : (i + 1 == near.size() ? " or " : ", "),
-                                           near[i]);
+                    message += fmt::format(
+                        "{}'{}'", i == 0 ? "" : (i + 1 == near.size() ? " or " : ", "), near[i]);
             }
             s.report(rules::unknown_unit, message, s.range(in));
             diagnostic& d = s.out.diagnostics.back();
-            d.notes.push_back({"a unit the table lacks can be written as a dimension instead, such as "
-                               "[L T^-1]; `plumb units` lists the built-in units",
-                               {}});
+            d.notes.push_back(
+                {"a unit the table lacks can be written as a dimension instead, such as "
+                 "[L T^-1]; `plumb units` lists the built-in units",
+                 {}});
             s.units.push_back({{}, 1.0, nullptr, false});
             return;
         }
@@ -384,8 +388,7 @@ template <> struct action<nt::unit_divide> : unit_combine<true> {};
 // --- Declarations ---
 template <> struct action<nt::declared_name> {
     template <typename In> static void apply(const In& in, parse_state& s) {
-        s.out.names.push_back(
-            {s.range(in), static_cast<std::uint32_t>(s.out.declarations.size())});
+        s.out.names.push_back({s.range(in), static_cast<std::uint32_t>(s.out.declarations.size())});
     }
 };
 template <> struct action<nt::declaration_spec> {
@@ -417,7 +420,8 @@ template <> struct action<nt::declaration> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const auto count = static_cast<std::uint32_t>(s.out.names.size()) - s.pending_first_name;
         s.out.declarations.push_back({s.range(in), s.pending_spec, s.pending_description,
-                                      s.pending_value, s.pending_kind, s.pending_first_name, count});
+                                      s.pending_value, s.pending_kind, s.pending_first_name,
+                                      count});
     }
 };
 
@@ -452,8 +456,9 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin) {
                 break;
             }
         }
-        while (content_end > pos && (text[content_end - 1] == ' ' || text[content_end - 1] == '\t' ||
-                                     text[content_end - 1] == '\r'))
+        while (content_end > pos &&
+               (text[content_end - 1] == ' ' || text[content_end - 1] == '\t' ||
+                text[content_end - 1] == '\r'))
             --content_end;
         const bool continues = content_end > pos && text[content_end - 1] == '\\' && nl != nullptr;
         if (!continues)
@@ -512,8 +517,9 @@ syntax::parsed_file parse_expression(const source_file& file) {
         pg::parse<nt::query, action, control>(in, state);
     } catch (const syntax_failure& failure) {
         const auto at = static_cast<std::uint32_t>(failure.at - text.data());
-        state.report(rules::syntax, failure.message,
-                     {at, std::min<std::uint32_t>(at + 1, static_cast<std::uint32_t>(text.size()))});
+        state.report(
+            rules::syntax, failure.message,
+            {at, std::min<std::uint32_t>(at + 1, static_cast<std::uint32_t>(text.size()))});
         out.has_syntax_error = true;
     } catch (const arithmetic_overflow&) {
         state.report(rules::overflow, "the exponents in this expression exceed the exact range",

@@ -28,7 +28,8 @@ void append_string(std::string& out, std::string_view s) {
             break;
         default:
             if (static_cast<unsigned char>(c) < 0x20)
-                out += fmt::format("\\u{:04x}", static_cast<unsigned>(static_cast<unsigned char>(c)));
+                out +=
+                    fmt::format("\\u{:04x}", static_cast<unsigned>(static_cast<unsigned char>(c)));
             else
                 out += c;
         }
@@ -42,7 +43,11 @@ std::string valid_utf8(std::string_view s) {
     out.reserve(s.size());
     for (std::size_t i = 0; i < s.size();) {
         const auto c = static_cast<unsigned char>(s[i]);
-        std::size_t len = c < 0x80 ? 1 : (c >> 5) == 0x6 ? 2 : (c >> 4) == 0xE ? 3 : (c >> 3) == 0x1E ? 4 : 0;
+        std::size_t len = c < 0x80           ? 1
+                          : (c >> 5) == 0x6  ? 2
+                          : (c >> 4) == 0xE  ? 3
+                          : (c >> 3) == 0x1E ? 4
+                                             : 0;
         bool ok = len > 0 && i + len <= s.size();
         for (std::size_t k = 1; ok && k < len; ++k)
             ok = (static_cast<unsigned char>(s[i + k]) & 0xC0) == 0x80;
@@ -64,8 +69,8 @@ void append_location(std::string& out, const location& where) {
     const line_column e = where.file->position(where.range.end);
     out += "\"file\": ";
     append_string(out, valid_utf8(where.file->path()));
-    out += fmt::format(", \"line\": {}, \"column\": {}, \"end_line\": {}, \"end_column\": {}, ", b.line,
-                       b.column, e.line, e.column);
+    out += fmt::format(", \"line\": {}, \"column\": {}, \"end_line\": {}, \"end_column\": {}, ",
+                       b.line, b.column, e.line, e.column);
 }
 
 void append_dimension(std::string& out, const dimension& d) {
@@ -98,8 +103,9 @@ std::string_view severity_name(severity s) {
 
 std::string render_json(const check_report& report) {
     std::string out;
-    out += fmt::format("{{\n  \"tool\": \"plumb\",\n  \"version\": \"{}\",\n  \"schema\": 1,\n  \"findings\": [",
-                       version());
+    out += fmt::format(
+        "{{\n  \"tool\": \"plumb\",\n  \"version\": \"{}\",\n  \"schema\": 1,\n  \"findings\": [",
+        version());
     bool first = true;
     for (const auto& d : report.diagnostics) {
         out += first ? "\n    {" : ",\n    {";
@@ -130,10 +136,11 @@ std::string render_json(const check_report& report) {
         out += "]}";
     }
     out += first ? "],\n" : "\n  ],\n";
-    out += fmt::format("  \"summary\": {{\"files_checked\": {}, \"formulas_checked\": {}, \"errors\": {}, "
-                       "\"warnings\": {}, \"input_failed\": {}}},\n",
-                       report.files_checked, report.formulas_checked, report.count(severity::error),
-                       report.count(severity::warning), report.input_failed ? "true" : "false");
+    out += fmt::format(
+        "  \"summary\": {{\"files_checked\": {}, \"formulas_checked\": {}, \"errors\": {}, "
+        "\"warnings\": {}, \"input_failed\": {}}},\n",
+        report.files_checked, report.formulas_checked, report.count(severity::error),
+        report.count(severity::warning), report.input_failed ? "true" : "false");
     out += "  \"caution\": ";
     append_string(out, caution_text());
     out += "\n}\n";

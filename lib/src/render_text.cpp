@@ -24,13 +24,15 @@ struct painter {
     }
 };
 
-bool is_continuation_byte(char c) { return (static_cast<unsigned char>(c) & 0xC0) == 0x80; }
+bool is_continuation_byte(char c) {
+    return (static_cast<unsigned char>(c) & 0xC0) == 0x80;
+}
 
 // One display cell per code point, tabs to the next multiple of 4; the printed line and
 // the underline use the same rule so they stay aligned.
 struct display_line {
-    std::string text;                 // with tabs expanded
-    std::vector<std::uint32_t> cell;  // display cell of each byte of the original line
+    std::string text;                // with tabs expanded
+    std::vector<std::uint32_t> cell; // display cell of each byte of the original line
 };
 
 display_line layout(std::string_view line) {
@@ -102,7 +104,8 @@ void render_snippet(std::string& out, const diagnostic& d, const painter& paint)
     if (width > max_shown_columns) {
         const std::uint32_t focus = shown.cell[to_line(d.where.range.begin)];
         first_cell = focus > 40 ? focus - 40 : 0;
-        const std::uint32_t last_cell = std::min<std::uint32_t>(width, first_cell + max_shown_columns);
+        const std::uint32_t last_cell =
+            std::min<std::uint32_t>(width, first_cell + max_shown_columns);
         const std::size_t b = byte_at_cell(text, first_cell);
         const std::size_t e = byte_at_cell(text, last_cell);
         if (first_cell > 0)
@@ -116,8 +119,8 @@ void render_snippet(std::string& out, const diagnostic& d, const painter& paint)
     }
     const std::string gutter = fmt::format("{:>5}", start.line);
     out += fmt::format("{} | {}{}{}\n", gutter, prefix, text, suffix);
-    out += fmt::format("{} | {}{}\n", std::string(gutter.size(), ' '),
-                       prefix.empty() ? "" : " ", paint(green, marks));
+    out += fmt::format("{} | {}{}\n", std::string(gutter.size(), ' '), prefix.empty() ? "" : " ",
+                       paint(green, marks));
 }
 
 } // namespace
@@ -149,9 +152,10 @@ std::string render_text(const diagnostic& d, const text_style& style) {
     for (const auto& n : d.notes) {
         if (n.where.file != nullptr) {
             const line_column p = n.where.file->position(n.where.range.begin);
-            out += fmt::format("      {} {}\n",
-                               paint(bold, fmt::format("{}:{}:{}:", n.where.file->path(), p.line, p.column)),
-                               fmt::format("{} {}", paint(cyan, "note:"), n.message));
+            out += fmt::format(
+                "      {} {}\n",
+                paint(bold, fmt::format("{}:{}:{}:", n.where.file->path(), p.line, p.column)),
+                fmt::format("{} {}", paint(cyan, "note:"), n.message));
         } else {
             out += fmt::format("      {} {}\n", paint(cyan, "note:"), n.message);
         }
@@ -174,10 +178,11 @@ std::string render_text(const check_report& report, const text_style& style) {
     const std::string scope = fmt::format("{} in {}", plural(report.formulas_checked, "formula"),
                                           plural(report.files_checked, "file"));
     if (errors == 0 && warnings == 0)
-        out += fmt::format("{} {}: no dimensional inconsistency found\n", paint(bold, "plumb:"), scope);
+        out += fmt::format("{} {}: no dimensional inconsistency found\n", paint(bold, "plumb:"),
+                           scope);
     else
-        out += fmt::format("{} {}, {} ({} checked)\n", paint(bold, "plumb:"), plural(errors, "error"),
-                           plural(warnings, "warning"), scope);
+        out += fmt::format("{} {}, {} ({} checked)\n", paint(bold, "plumb:"),
+                           plural(errors, "error"), plural(warnings, "warning"), scope);
     out += fmt::format("{} {}\n", paint(cyan, "caution:"), caution_text());
     return out;
 }

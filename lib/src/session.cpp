@@ -19,11 +19,13 @@ namespace plumb {
 namespace fs = std::filesystem;
 
 std::size_t check_report::count(severity level) const {
-    return static_cast<std::size_t>(std::count_if(
-        diagnostics.begin(), diagnostics.end(), [&](const diagnostic& d) { return d.level == level; }));
+    return static_cast<std::size_t>(
+        std::count_if(diagnostics.begin(), diagnostics.end(),
+                      [&](const diagnostic& d) { return d.level == level; }));
 }
 
-std::vector<std::string_view> symbol_table::nearest(std::string_view name, std::size_t limit) const {
+std::vector<std::string_view> symbol_table::nearest(std::string_view name,
+                                                    std::size_t limit) const {
     // Longer names allow more edits ("velocty" for "velocity"). A one- or two-letter name is
     // close to every other short name, so for those only a subscripted form counts ("h" for
     // "h_f").
@@ -34,6 +36,17 @@ std::vector<std::string_view> symbol_table::nearest(std::string_view name, std::
             candidate[name.size()] == '_') {
             scored.emplace_back(candidate.size() - name.size(), candidate);
             continue;
+        }
+        // A shortened or lengthened subscript: "a_wave" for "a_w", "h_f" for "h_fric".
+        const std::size_t underscore = name.find('_');
+        if (underscore != std::string_view::npos && candidate.size() > underscore + 1 &&
+            candidate.substr(0, underscore + 1) == name.substr(0, underscore + 1)) {
+            const std::string_view shorter = candidate.size() < name.size() ? candidate : name;
+            const std::string_view longer = candidate.size() < name.size() ? name : candidate;
+            if (longer.substr(0, shorter.size()) == shorter) {
+                scored.emplace_back(longer.size() - shorter.size(), candidate);
+                continue;
+            }
         }
         if (max_distance == 0)
             continue;
@@ -130,7 +143,8 @@ class session {
     }
 
     loaded_file* add(const std::string& key, std::string display_path, std::string text) {
-        report_.sources.push_back(std::make_unique<source_file>(std::move(display_path), std::move(text)));
+        report_.sources.push_back(
+            std::make_unique<source_file>(std::move(display_path), std::move(text)));
         auto owned = std::make_unique<loaded_file>();
         loaded_file* f = owned.get();
         files_.push_back(std::move(owned));
@@ -189,7 +203,9 @@ class session {
         const source_file& src = *report_.sources.back();
         syntax::parsed_file tree = parse_expression(src);
         query_diagnostics_ = std::move(tree.diagnostics);
-        if (tree.sides.empty())
+        if (tree.has_syntax_error)
+            report_.input_failed = true;
+        if (tree.sides.empty() || tree.has_syntax_error)
             return std::nullopt;
         return expression_dimension(tree, tree.sides.front().root, table, query_diagnostics_);
     }
@@ -206,13 +222,14 @@ class session {
                 return a.where.range.begin < b.where.range.begin;
             });
             for (auto& d : ds) {
-                const bool repeated = std::any_of(out.end() - std::min<std::ptrdiff_t>(
-                                                                  static_cast<std::ptrdiff_t>(out.size()), 8),
-                                                  out.end(), [&](const diagnostic& e) {
-                                                      return e.where.file == d.where.file &&
-                                                             e.where.range.begin == d.where.range.begin &&
-                                                             e.rule == d.rule && e.message == d.message;
-                                                  });
+                const bool repeated =
+                    std::any_of(out.end() - std::min<std::ptrdiff_t>(
+                                                static_cast<std::ptrdiff_t>(out.size()), 8),
+                                out.end(), [&](const diagnostic& e) {
+                                    return e.where.file == d.where.file &&
+                                           e.where.range.begin == d.where.range.begin &&
+                                           e.rule == d.rule && e.message == d.message;
+                                });
                 if (!repeated)
                     out.push_back(std::move(d));
             }
@@ -223,7 +240,8 @@ class session {
     }
 
     void fail(std::string message) {
-        general_.push_back(make_diagnostic(severity::error, rules::unreadable, std::move(message), {}));
+        general_.push_back(
+            make_diagnostic(severity::error, rules::unreadable, std::move(message), {}));
         report_.input_failed = true;
     }
 
@@ -243,8 +261,7 @@ class session {
         if (is_dir)
             why = "it is a folder";
         else if (!in)
-            why = fs::exists(path, ec) ? "permission denied or not a regular file"
-                                       : "no such file";
+            why = fs::exists(path, ec) ? "permission denied or not a regular file" : "no such file";
         if (why.empty()) {
             in.seekg(0, std::ios::end);
             const std::streamoff size = in.tellg();
@@ -327,7 +344,8 @@ class session {
     }
 
     void declare(loaded_file* f, symbol_table& table, bool local) {
-        declare_names(f, f->tree, 0, static_cast<std::uint32_t>(f->tree.names.size()), table, local);
+        declare_names(f, f->tree, 0, static_cast<std::uint32_t>(f->tree.names.size()), table,
+                      local);
     }
 
     void declare_names(loaded_file* f, const syntax::parsed_file& tree, std::uint32_t first,
@@ -354,7 +372,8 @@ class session {
             auto [existing, inserted] = table.insert(name, entry);
             if (inserted)
                 continue;
-            if (existing->declared_at.file == at.file && existing->declared_at.range.begin == at.range.begin)
+            if (existing->declared_at.file == at.file &&
+                existing->declared_at.range.begin == at.range.begin)
                 continue;
             if (existing->dim && entry.dim && !(*existing->dim == *entry.dim)) {
                 diagnostic d = make_diagnostic(
@@ -365,7 +384,8 @@ class session {
                     at);
                 d.terms.push_back({at, std::string(name), *entry.dim});
                 d.terms.push_back({existing->declared_at, std::string(name), *existing->dim});
-                const line_column first = existing->declared_at.file->position(existing->declared_at.range.begin);
+                const line_column first =
+                    existing->declared_at.file->position(existing->declared_at.range.begin);
                 d.notes.push_back({fmt::format("'{}' is first declared at {}:{}:{} as {}", name,
                                                existing->declared_at.file->path(), first.line,
                                                first.column, existing->dim->to_string()),
@@ -393,7 +413,8 @@ class session {
             diagnostic d = make_diagnostic(severity::warning, rules::unused,
                                            fmt::format("'{}' is declared but never used", name),
                                            {f->source, n.name});
-            d.notes.push_back({"remove the declaration, or check the formula that should use it", {}});
+            d.notes.push_back(
+                {"remove the declaration, or check the formula that should use it", {}});
             f->diagnostics.push_back(std::move(d));
         }
     }

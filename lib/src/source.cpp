@@ -24,7 +24,8 @@ line_column source_file::position(std::uint32_t byte_offset) const {
     const auto it = std::upper_bound(line_starts_.begin(), line_starts_.end(), byte_offset);
     const auto line = static_cast<std::uint32_t>(it - line_starts_.begin());
     std::uint32_t column = 1;
-    const std::uint32_t stop = std::min<std::uint32_t>(byte_offset, static_cast<std::uint32_t>(text_.size()));
+    const std::uint32_t stop =
+        std::min<std::uint32_t>(byte_offset, static_cast<std::uint32_t>(text_.size()));
     for (std::uint32_t i = line_starts_[line - 1]; i < stop; ++i)
         if ((static_cast<unsigned char>(text_[i]) & 0xC0) != 0x80)
             ++column;
@@ -35,8 +36,8 @@ std::string_view source_file::line_text(std::uint32_t line) const {
     if (line == 0 || line > line_starts_.size())
         return {};
     const std::uint32_t begin = line_starts_[line - 1];
-    std::uint32_t end =
-        line < line_starts_.size() ? line_starts_[line] - 1 : static_cast<std::uint32_t>(text_.size());
+    std::uint32_t end = line < line_starts_.size() ? line_starts_[line] - 1
+                                                   : static_cast<std::uint32_t>(text_.size());
     if (end > begin && text_[end - 1] == '\r')
         --end;
     return std::string_view(text_).substr(begin, end - begin);

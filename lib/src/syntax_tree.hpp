@@ -17,7 +17,7 @@ namespace plumb::syntax {
 inline constexpr std::uint32_t no_index = std::numeric_limits<std::uint32_t>::max();
 
 enum class expr_kind : std::uint8_t {
-    number,   // range is the literal
+    number, // range is the literal
     pi,
     symbol,   // range is the name
     negate,   // lhs
@@ -25,14 +25,14 @@ enum class expr_kind : std::uint8_t {
     subtract, // lhs - rhs
     multiply,
     divide,
-    power,    // lhs ^ rhs
-    call,     // range starts with the function name; lhs = first index into call_args, rhs = count
-    group,    // ( lhs ): kept so that messages quote terms with their parentheses
+    power, // lhs ^ rhs
+    call,  // range starts with the function name; lhs = first index into call_args, rhs = count
+    group, // ( lhs ): kept so that messages quote terms with their parentheses
 };
 
 struct expr_node {
     expr_kind kind;
-    span range;   // covers the whole subexpression, parentheses included
+    span range; // covers the whole subexpression, parentheses included
     std::uint32_t lhs = no_index;
     std::uint32_t rhs = no_index;
 };

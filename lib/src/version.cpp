@@ -1,5 +1,7 @@
 #include "plumb/version.hpp"
 
 namespace plumb {
-std::string_view version() { return PLUMB_VERSION; }
+std::string_view version() {
+    return PLUMB_VERSION;
+}
 } // namespace plumb

@@ -22,7 +22,7 @@ struct location {
 // each, and JSON lists them.
 struct term {
     location where;
-    std::string text;      // the term as written (continuation lines folded)
+    std::string text; // the term as written (continuation lines folded)
     dimension dim;
 };
 

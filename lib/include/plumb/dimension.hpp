@@ -13,13 +13,13 @@ namespace plumb {
 // Order follows the SI Brochure (9th ed., 2.3.3): mass is listed first here because the
 // trade writes [M L T] in that order.
 enum class base_dimension : std::size_t {
-    mass,                // M
-    length,              // L
-    time,                // T
-    temperature,         // Θ
-    amount,              // N
-    current,             // I
-    luminous_intensity,  // J
+    mass,               // M
+    length,             // L
+    time,               // T
+    temperature,        // Θ
+    amount,             // N
+    current,            // I
+    luminous_intensity, // J
 };
 
 inline constexpr std::size_t base_dimension_count = 7;

@@ -16,23 +16,24 @@ namespace plumb {
 
 // How a unit's zero relates to the absolute zero of its quantity.
 enum class unit_scale : std::uint8_t {
-    absolute,  // ratio scale: zero means none of the quantity (K, Pa, m)
-    offset,    // interval scale with an arbitrary zero (°C, °F)
-    gauge,     // pressure measured from the atmosphere (psig, barg)
+    absolute, // ratio scale: zero means none of the quantity (K, Pa, m)
+    offset,   // interval scale with an arbitrary zero (°C, °F)
+    gauge,    // pressure measured from the atmosphere (psig, barg)
 };
 
 // One row of the table. value_in_si = factor * value_in_unit + offset.
 struct unit_definition {
-    std::string_view symbol;       // as written in formulas: "Pa", "°C", "lbf"
-    std::string_view name;         // "pascal", "degree Celsius"
+    std::string_view symbol; // as written in formulas: "Pa", "°C", "lbf"
+    std::string_view name;   // "pascal", "degree Celsius"
     std::array<std::int8_t, base_dimension_count> exponents; // M L T Θ N I J
     double factor;                 // SI value of one unit (for offset scales: of one degree)
     double offset;                 // SI value of the scale's zero; 0 for absolute units
-    std::string_view exact_factor; // factor as published (decimal or fraction text), or
-                                   // "approx" where the published factor is rounded
+    std::string_view exact_factor; // the exact factor as decimal or fraction text where the
+                                   // unit is defined exactly; otherwise the published digits
+                                   // (and `source` says "rounded")
     unit_scale scale;
-    bool takes_prefixes;           // SI prefixes (SI Brochure 9th ed., 3) may be attached
-    std::string_view source;       // where the factor comes from
+    bool takes_prefixes;     // SI prefixes (SI Brochure 9th ed., 3) may be attached
+    std::string_view source; // where the factor comes from
 
     [[nodiscard]] dimension dim() const;
 };

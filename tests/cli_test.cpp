@@ -1,0 +1,1179 @@
+// End-to-end tests of the command line: each test runs the real plumb binary on files written
+// into a fresh temporary folder and checks its exit status, stdout and stderr.
+#include "plumb/render.hpp"
+#include "plumb/rules.hpp"
+#include "plumb/version.hpp"
+
+#include <doctest/doctest.h>
+#include <fmt/format.h>
+
+#include <algorithm>
+#include <atomic>
+#include <cerrno>
+#include <cstring>
+#include <filesystem>
+#include <fstream>
+#include <map>
+#include <memory>
+#include <optional>
+#include <sstream>
+#include <stdexcept>
+#include <string>
+#include <string_view>
+#include <utility>
+#include <variant>
+#include <vector>
+
+#include <fcntl.h>
+#include <poll.h>
+#include <spawn.h>
+#include <sys/wait.h>
+#include <unistd.h>
+
+extern char** environ; // NOLINT: POSIX declares it nowhere else
+
+namespace fs = std::filesystem;
+
+namespace {
+
+// ---------------------------------------------------------------------------------------------
+// Running the binary
+
+struct run_result {
+    int status = -1; // exit status; -1 when the process did not exit normally
+    std::string out;
+    std::string err;
+};
+
+// Environment overrides: a value sets the variable, std::nullopt removes it.
+using env_changes = std::map<std::string, std::optional<std::string>>;
+
+// Runs plumb with `args`, stdout and stderr on pipes. NO_COLOR is removed from the child's
+// environment unless `env` says otherwise, so the host's settings cannot change the results.
+run_result run_plumb(const std::vector<std::string>& args, env_changes env = {}) {
+    env.try_emplace("NO_COLOR", std::nullopt);
+
+    std::vector<std::string> env_strings;
+    for (char** e = environ; *e != nullptr; ++e) {
+        const std::string_view entry(*e);
+        const std::string name(entry.substr(0, entry.find('=')));
+        if (env.find(name) == env.end())
+            env_strings.emplace_back(entry);
+    }
+    for (const auto& [name, value] : env)
+        if (value)
+            env_strings.push_back(name + "=" + *value);
+    std::vector<char*> envp;
+    for (auto& s : env_strings)
+        envp.push_back(s.data());
+    envp.push_back(nullptr);
+
+    std::vector<std::string> argv_strings{PLUMB_CLI_PATH};
+    argv_strings.insert(argv_strings.end(), args.begin(), args.end());
+    std::vector<char*> argv;
+    for (auto& s : argv_strings)
+        argv.push_back(s.data());
+    argv.push_back(nullptr);
+
+    int out_pipe[2];
+    int err_pipe[2];
+    if (pipe(out_pipe) != 0 || pipe(err_pipe) != 0)
+        throw std::runtime_error("pipe failed");
+
+    posix_spawn_file_actions_t actions;
+    posix_spawn_file_actions_init(&actions);
+    posix_spawn_file_actions_addclose(&actions, out_pipe[0]);
+    posix_spawn_file_actions_addclose(&actions, err_pipe[0]);
+    posix_spawn_file_actions_adddup2(&actions, out_pipe[1], STDOUT_FILENO);
+    posix_spawn_file_actions_adddup2(&actions, err_pipe[1], STDERR_FILENO);
+    posix_spawn_file_actions_addclose(&actions, out_pipe[1]);
+    posix_spawn_file_actions_addclose(&actions, err_pipe[1]);
+    posix_spawn_file_actions_addopen(&actions, STDIN_FILENO, "/dev/null", O_RDONLY, 0);
+
+    pid_t pid = 0;
+    const int spawned =
+        posix_spawn(&pid, argv_strings[0].c_str(), &actions, nullptr, argv.data(), envp.data());
+    posix_spawn_file_actions_destroy(&actions);
+    close(out_pipe[1]);
+    close(err_pipe[1]);
+    if (spawned != 0) {
+        close(out_pipe[0]);
+        close(err_pipe[0]);
+        throw std::runtime_error(
+            fmt::format("cannot run {}: {}", argv_strings[0], std::strerror(spawned)));
+    }
+
+    // Read both pipes together, so that a child filling one cannot block on the other.
+    run_result result;
+    pollfd fds[2] = {{out_pipe[0], POLLIN, 0}, {err_pipe[0], POLLIN, 0}};
+    std::string* sinks[2] = {&result.out, &result.err};
+    int open_pipes = 2;
+    while (open_pipes > 0) {
+        if (poll(fds, 2, -1) < 0) {
+            if (errno == EINTR)
+                continue;
+            break;
+        }
+        for (int i = 0; i < 2; ++i) {
+            if (fds[i].fd < 0 || fds[i].revents == 0)
+                continue;
+            char buffer[65536];
+            const ssize_t n = read(fds[i].fd, buffer, sizeof buffer);
+            if (n > 0) {
+                sinks[i]->append(buffer, static_cast<std::size_t>(n));
+            } else if (n == 0 || errno != EINTR) {
+                close(fds[i].fd);
+                fds[i].fd = -1;
+                --open_pipes;
+            }
+        }
+    }
+    int wait_status = 0;
+    while (waitpid(pid, &wait_status, 0) < 0 && errno == EINTR) {
+    }
+    result.status = WIFEXITED(wait_status) ? WEXITSTATUS(wait_status) : -1;
+    return result;
+}
+
+// ---------------------------------------------------------------------------------------------
+// A fresh temporary folder per test, removed afterwards
+
+class temp_folder {
+  public:
+    temp_folder() {
+        static std::atomic<unsigned> counter{0};
+        path_ = fs::temp_directory_path() /
+                fmt::format("plumb-cli-test-{}-{}", static_cast<long>(getpid()), counter++);
+        fs::remove_all(path_);
+        fs::create_directories(path_);
+    }
+    temp_folder(const temp_folder&) = delete;
+    temp_folder& operator=(const temp_folder&) = delete;
+    ~temp_folder() {
+        std::error_code ignored;
+        fs::remove_all(path_, ignored);
+    }
+
+    // Writes `content` byte for byte to `name` (which may contain folders); returns its path.
+    [[nodiscard]] std::string write(const std::string& name, std::string_view content) const {
+        const fs::path p = path_ / name;
+        fs::create_directories(p.parent_path());
+        std::ofstream out(p, std::ios::binary);
+        out.write(content.data(), static_cast<std::streamsize>(content.size()));
+        return p.string();
+    }
+    [[nodiscard]] std::string path(const std::string& name = "") const {
+        return name.empty() ? path_.string() : (path_ / name).string();
+    }
+
+  private:
+    fs::path path_;
+};
+
+bool contains(std::string_view haystack, std::string_view needle) {
+    return haystack.find(needle) != std::string_view::npos;
+}
+
+std::vector<std::string> lines_of(std::string_view text) {
+    std::vector<std::string> lines;
+    std::istringstream in{std::string(text)};
+    for (std::string line; std::getline(in, line);)
+        lines.push_back(line);
+    return lines;
+}
+
+std::size_t count_of(std::string_view haystack, std::string_view needle) {
+    std::size_t n = 0;
+    for (auto at = haystack.find(needle); at != std::string_view::npos;
+         at = haystack.find(needle, at + needle.size()))
+        ++n;
+    return n;
+}
+
+// Number of UTF-8 code points in `s` (each is one display cell in plumb's output).
+std::size_t code_points(std::string_view s) {
+    return static_cast<std::size_t>(std::count_if(
+        s.begin(), s.end(), [](char c) { return (static_cast<unsigned char>(c) & 0xC0) != 0x80; }));
+}
+
+// `s` cut into its UTF-8 code points, one string each.
+std::vector<std::string> split_code_points(std::string_view s) {
+    std::vector<std::string> out;
+    for (const char c : s) {
+        if ((static_cast<unsigned char>(c) & 0xC0) == 0x80 && !out.empty())
+            out.back() += c;
+        else
+            out.emplace_back(1, c);
+    }
+    return out;
+}
+
+// The summary and caution lines that end every text report.
+std::string tail(std::string_view summary) {
+    return fmt::format("plumb: {}\ncaution: {}\n", summary, plumb::caution_text());
+}
+
+// ---------------------------------------------------------------------------------------------
+// A small JSON reader, strict per RFC 8259 (including UTF-8 validity of strings), so the test
+// needs nothing beyond the standard library.
+
+struct json;
+using json_object = std::map<std::string, json>;
+using json_array = std::vector<json>;
+
+struct json {
+    std::variant<std::nullptr_t, bool, double, std::string, json_array, json_object> value;
+
+    [[nodiscard]] bool is_object() const { return std::holds_alternative<json_object>(value); }
+    [[nodiscard]] bool is_array() const { return std::holds_alternative<json_array>(value); }
+    [[nodiscard]] bool is_string() const { return std::holds_alternative<std::string>(value); }
+    [[nodiscard]] bool is_number() const { return std::holds_alternative<double>(value); }
+    [[nodiscard]] bool is_bool() const { return std::holds_alternative<bool>(value); }
+    [[nodiscard]] const json_object& object() const { return std::get<json_object>(value); }
+    [[nodiscard]] const json_array& array() const { return std::get<json_array>(value); }
+    [[nodiscard]] const std::string& string() const { return std::get<std::string>(value); }
+    [[nodiscard]] double number() const { return std::get<double>(value); }
+    [[nodiscard]] bool boolean() const { return std::get<bool>(value); }
+    [[nodiscard]] bool has(const std::string& key) const {
+        return is_object() && object().count(key) == 1;
+    }
+    [[nodiscard]] const json& operator[](const std::string& key) const { return object().at(key); }
+};
+
+class json_reader {
+  public:
+    explicit json_reader(std::string_view text) : text_(text) {}
+
+    // The document, or std::nullopt with error() saying where it went wrong.
+    std::optional<json> document() {
+        try {
+            json v = value(0);
+            skip_space();
+            if (pos_ != text_.size())
+                fail("text after the document");
+            return v;
+        } catch (const std::runtime_error& e) {
+            error_ = e.what();
+            return std::nullopt;
+        }
+    }
+    [[nodiscard]] const std::string& error() const { return error_; }
+
+  private:
+    std::string_view text_;
+    std::size_t pos_ = 0;
+    std::string error_;
+
+    [[noreturn]] void fail(std::string_view what) const {
+        throw std::runtime_error(fmt::format("{} at byte {}", what, pos_));
+    }
+    void skip_space() {
+        while (pos_ < text_.size() && (text_[pos_] == ' ' || text_[pos_] == '\t' ||
+                                       text_[pos_] == '\n' || text_[pos_] == '\r'))
+            ++pos_;
+    }
+    [[nodiscard]] char peek() const { return pos_ < text_.size() ? text_[pos_] : '\0'; }
+    void expect(char c) {
+        if (peek() != c)
+            fail(fmt::format("expected '{}'", c));
+        ++pos_;
+    }
+    void literal(std::string_view word) {
+        if (text_.substr(pos_, word.size()) != word)
+            fail("bad literal");
+        pos_ += word.size();
+    }
+
+    json value(int depth) {
+        if (depth > 200)
+            fail("nesting too deep");
+        skip_space();
+        switch (peek()) {
+        case '{':
+            return object(depth);
+        case '[':
+            return array(depth);
+        case '"':
+            return json{string()};
+        case 't':
+            literal("true");
+            return json{true};
+        case 'f':
+            literal("false");
+            return json{false};
+        case 'n':
+            literal("null");
+            return json{nullptr};
+        default:
+            return json{number()};
+        }
+    }
+
+    json object(int depth) {
+        expect('{');
+        json_object members;
+        skip_space();
+        if (peek() == '}') {
+            ++pos_;
+            return json{std::move(members)};
+        }
+        for (;;) {
+            skip_space();
+            std::string key = string();
+            skip_space();
+            expect(':');
+            if (!members.emplace(key, value(depth + 1)).second)
+                fail("duplicate key '" + key + "'");
+            skip_space();
+            if (peek() == ',') {
+                ++pos_;
+                continue;
+            }
+            expect('}');
+            return json{std::move(members)};
+        }
+    }
+
+    json array(int depth) {
+        expect('[');
+        json_array items;
+        skip_space();
+        if (peek() == ']') {
+            ++pos_;
+            return json{std::move(items)};
+        }
+        for (;;) {
+            items.push_back(value(depth + 1));
+            skip_space();
+            if (peek() == ',') {
+                ++pos_;
+                continue;
+            }
+            expect(']');
+            return json{std::move(items)};
+        }
+    }
+
+    double number() {
+        const std::size_t start = pos_;
+        if (peek() == '-')
+            ++pos_;
+        const auto digits = [&] {
+            const std::size_t from = pos_;
+            while (peek() >= '0' && peek() <= '9')
+                ++pos_;
+            return pos_ - from;
+        };
+        if (peek() == '0')
+            ++pos_;
+        else if (digits() == 0)
+            fail("expected a value");
+        if (peek() == '.') {
+            ++pos_;
+            if (digits() == 0)
+                fail("expected digits after '.'");
+        }
+        if (peek() == 'e' || peek() == 'E') {
+            ++pos_;
+            if (peek() == '+' || peek() == '-')
+                ++pos_;
+            if (digits() == 0)
+                fail("expected exponent digits");
+        }
+        return std::stod(std::string(text_.substr(start, pos_ - start)));
+    }
+
+    unsigned hex4() {
+        unsigned v = 0;
+        for (int i = 0; i < 4; ++i) {
+            const char c = peek();
+            v <<= 4;
+            if (c >= '0' && c <= '9')
+                v |= static_cast<unsigned>(c - '0');
+            else if (c >= 'a' && c <= 'f')
+                v |= static_cast<unsigned>(c - 'a' + 10);
+            else if (c >= 'A' && c <= 'F')
+                v |= static_cast<unsigned>(c - 'A' + 10);
+            else
+                fail("bad \\u escape");
+            ++pos_;
+        }
+        return v;
+    }
+
+    static void append_utf8(std::string& out, unsigned cp) {
+        if (cp < 0x80) {
+            out += static_cast<char>(cp);
+        } else if (cp < 0x800) {
+            out += static_cast<char>(0xC0 | (cp >> 6));
+            out += static_cast<char>(0x80 | (cp & 0x3F));
+        } else if (cp < 0x10000) {
+            out += static_cast<char>(0xE0 | (cp >> 12));
+            out += static_cast<char>(0x80 | ((cp >> 6) & 0x3F));
+            out += static_cast<char>(0x80 | (cp & 0x3F));
+        } else {
+            out += static_cast<char>(0xF0 | (cp >> 18));
+            out += static_cast<char>(0x80 | ((cp >> 12) & 0x3F));
+            out += static_cast<char>(0x80 | ((cp >> 6) & 0x3F));
+            out += static_cast<char>(0x80 | (cp & 0x3F));
+        }
+    }
+
+    // One UTF-8 encoded code point, validated (no overlongs, surrogates or values past U+10FFFF).
+    void utf8_char(std::string& out) {
+        const auto b0 = static_cast<unsigned char>(text_[pos_]);
+        std::size_t len = 0;
+        unsigned cp = 0;
+        unsigned min = 0;
+        if (b0 >= 0xC2 && b0 <= 0xDF) {
+            len = 2, cp = b0 & 0x1Fu, min = 0x80;
+        } else if ((b0 & 0xF0) == 0xE0) {
+            len = 3, cp = b0 & 0x0Fu, min = 0x800;
+        } else if (b0 >= 0xF0 && b0 <= 0xF4) {
+            len = 4, cp = b0 & 0x07u, min = 0x10000;
+        } else {
+            fail("invalid UTF-8 in a string");
+        }
+        if (pos_ + len > text_.size())
+            fail("truncated UTF-8 in a string");
+        for (std::size_t k = 1; k < len; ++k) {
+            const auto b = static_cast<unsigned char>(text_[pos_ + k]);
+            if ((b & 0xC0) != 0x80)
+                fail("invalid UTF-8 in a string");
+            cp = (cp << 6) | (b & 0x3Fu);
+        }
+        if (cp < min || cp > 0x10FFFF || (cp >= 0xD800 && cp <= 0xDFFF))
+            fail("invalid UTF-8 in a string");
+        out.append(text_.substr(pos_, len));
+        pos_ += len;
+    }
+
+    std::string string() {
+        expect('"');
+        std::string out;
+        for (;;) {
+            if (pos_ >= text_.size())
+                fail("unterminated string");
+            const char c = text_[pos_];
+            if (c == '"') {
+                ++pos_;
+                return out;
+            }
+            if (static_cast<unsigned char>(c) < 0x20)
+                fail("raw control character in a string");
+            if (static_cast<unsigned char>(c) >= 0x80) {
+                utf8_char(out);
+                continue;
+            }
+            ++pos_;
+            if (c != '\\') {
+                out += c;
+                continue;
+            }
+            const char e = peek();
+            ++pos_;
+            switch (e) {
+            case '"':
+            case '\\':
+            case '/':
+                out += e;
+                break;
+            case 'b':
+                out += '\b';
+                break;
+            case 'f':
+                out += '\f';
+                break;
+            case 'n':
+                out += '\n';
+                break;
+            case 'r':
+                out += '\r';
+                break;
+            case 't':
+                out += '\t';
+                break;
+            case 'u': {
+                unsigned cp = hex4();
+                if (cp >= 0xD800 && cp <= 0xDBFF) {
+                    expect('\\');
+                    expect('u');
+                    const unsigned low = hex4();
+                    if (low < 0xDC00 || low > 0xDFFF)
+                        fail("unpaired surrogate");
+                    cp = 0x10000 + ((cp - 0xD800) << 10) + (low - 0xDC00);
+                } else if (cp >= 0xDC00 && cp <= 0xDFFF) {
+                    fail("unpaired surrogate");
+                }
+                append_utf8(out, cp);
+                break;
+            }
+            default:
+                fail("bad escape");
+            }
+        }
+    }
+};
+
+std::optional<json> parse_json(std::string_view text) {
+    json_reader reader(text);
+    auto doc = reader.document();
+    INFO("JSON error: ", reader.error());
+    CHECK(doc.has_value());
+    return doc;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Input files used by several tests
+
+constexpr std::string_view clean_file = "D : m \"pipe diameter\"\n"
+                                        "A : m^2 \"flow area\"\n"
+                                        "\n"
+                                        "@circle-area A = pi*D^2/4\n";
+
+constexpr std::string_view sum_file = "ρ : kg/m^3 \"fluid density\"\n"
+                                      "g : m/s^2\n"
+                                      "V : m/s\n"
+                                      "p : Pa \"static pressure\"\n"
+                                      "H : m \"total head\"\n"
+                                      "\n"
+                                      "@head H = p/(ρ*g) + V^2/(2*g) + p\n";
+
+constexpr std::string_view side_file = "ρ : kg/m^3 \"fluid density\"\n"
+                                       "h : m \"depth below the surface\"\n"
+                                       "Δp : Pa \"pressure difference\"\n"
+                                       "\n"
+                                       "@hydrostatic Δp = ρ*h\n";
+
+constexpr std::string_view warning_only_file = "a : m\n"
+                                               "b : m\n"
+                                               "c : s \"never used\"\n"
+                                               "a = b\n";
+
+} // namespace
+
+// =============================================================================================
+
+TEST_SUITE("cli") {
+
+    TEST_CASE("a clean file exits 0 and says so") {
+        const temp_folder dir;
+        const auto file = dir.write("clean.plumb", clean_file);
+        const auto r = run_plumb({"check", "--color", "never", file});
+        CHECK(r.status == 0);
+        CHECK(r.out == tail("1 formula in 1 file: no dimensional inconsistency found"));
+        CHECK(r.err.empty());
+    }
+
+    TEST_CASE("a file with an error exits 1") {
+        const temp_folder dir;
+        const auto r = run_plumb({"check", dir.write("sum.plumb", sum_file)});
+        CHECK(r.status == 1);
+        CHECK(contains(r.out, "[sum-mismatch]"));
+        CHECK(contains(r.out, "plumb: 1 error, 0 warnings (1 formula in 1 file checked)"));
+    }
+
+    TEST_CASE("warnings alone exit 0") {
+        const temp_folder dir;
+        const auto r =
+            run_plumb({"check", "--color", "never", dir.write("w.plumb", warning_only_file)});
+        CHECK(r.status == 0);
+        CHECK(contains(r.out, "warning: 'c' is declared but never used [unused]"));
+        CHECK(contains(r.out, "plumb: 0 errors, 1 warning (1 formula in 1 file checked)"));
+    }
+
+    TEST_CASE("an error in one file of several still exits 1") {
+        const temp_folder dir;
+        const auto r =
+            run_plumb({"check", dir.write("a.plumb", clean_file), dir.write("b.plumb", side_file)});
+        CHECK(r.status == 1);
+        CHECK(contains(r.out, "(2 formulas in 2 files checked)"));
+    }
+
+    TEST_CASE("an unreadable path exits 2 with an 'unreadable' finding") {
+        const temp_folder dir;
+        const auto missing = dir.path("no-such-file.plumb");
+        const auto r = run_plumb({"check", "--color", "never", missing});
+        CHECK(r.status == 2);
+        CHECK(contains(r.out, fmt::format("plumb: error: cannot read '{}'", missing)));
+        CHECK(contains(r.out, "[unreadable]"));
+
+        SUBCASE("even next to a clean file") {
+            const auto both = run_plumb({"check", dir.write("ok.plumb", clean_file), missing});
+            CHECK(both.status == 2);
+        }
+        SUBCASE("and an unreadable --dict too") {
+            const auto r2 =
+                run_plumb({"check", "--dict", missing, dir.write("ok.plumb", clean_file)});
+            CHECK(r2.status == 2);
+            CHECK(contains(r2.out, "[unreadable]"));
+        }
+    }
+
+    TEST_CASE("a syntax error exits 2") {
+        const temp_folder dir;
+        const auto file = dir.write("syntax.plumb", "a : m\nb : m\nb = (a +\n");
+        const auto r = run_plumb({"check", "--color", "never", file});
+        CHECK(r.status == 2);
+        CHECK(contains(r.out, fmt::format("{}:3:9: error: ", file)));
+        CHECK(contains(r.out, "[syntax]"));
+    }
+
+    TEST_CASE("bad usage exits 2 with a message on stderr") {
+        const temp_folder dir;
+        const auto file = dir.write("clean.plumb", clean_file);
+
+        SUBCASE("an unknown option") {
+            const auto r = run_plumb({"check", "--bogus", file});
+            CHECK(r.status == 2);
+            CHECK(r.out.empty());
+            CHECK(contains(r.err, "unknown option '--bogus'"));
+            CHECK(contains(r.err, "plumb --help"));
+        }
+        SUBCASE("a bad --format value") {
+            const auto r = run_plumb({"check", "--format", "xml", file});
+            CHECK(r.status == 2);
+            CHECK(contains(r.err, "--format"));
+        }
+        SUBCASE("a bad --color value") {
+            const auto r = run_plumb({"check", "--color=sometimes", file});
+            CHECK(r.status == 2);
+            CHECK(contains(r.err, "--color"));
+        }
+        SUBCASE("--dict without its file") {
+            const auto r = run_plumb({"check", file, "--dict"});
+            CHECK(r.status == 2);
+            CHECK(contains(r.err, "--dict"));
+        }
+        SUBCASE("check without a path") {
+            const auto r = run_plumb({"check"});
+            CHECK(r.status == 2);
+            CHECK(contains(r.err, "check needs at least one file or folder"));
+        }
+        SUBCASE("dim without an expression") {
+            const auto r = run_plumb({"dim"});
+            CHECK(r.status == 2);
+            CHECK(contains(r.err, "dim needs an expression"));
+        }
+        SUBCASE("an unknown command") {
+            const auto r = run_plumb({"frobnicate"});
+            CHECK(r.status == 2);
+            CHECK(contains(r.err, "unknown command 'frobnicate'"));
+        }
+        SUBCASE("a file given without 'check'") {
+            const auto r = run_plumb({file});
+            CHECK(r.status == 2);
+            CHECK(contains(r.err, fmt::format("did you mean 'plumb check {}'?", file)));
+        }
+        SUBCASE("units with two filters") {
+            const auto r = run_plumb({"units", "Pa", "m"});
+            CHECK(r.status == 2);
+            CHECK(contains(r.err, "units takes at most one filter"));
+        }
+    }
+
+    TEST_CASE("no arguments at all exits 2 and shows the usage") {
+        const auto r = run_plumb({});
+        CHECK(r.status == 2);
+        CHECK(contains(r.out + r.err, "usage:"));
+        CHECK(contains(r.out + r.err, "plumb check"));
+    }
+
+    TEST_CASE("--help and --version exit 0") {
+        for (const char* flag : {"--help", "-h", "help"}) {
+            CAPTURE(flag);
+            const auto r = run_plumb({flag});
+            CHECK(r.status == 0);
+            CHECK(contains(r.out, "usage:"));
+            CHECK(contains(r.out, "plumb check [options] PATH..."));
+            CHECK(contains(r.out, "--format text|json"));
+            CHECK(r.err.empty());
+        }
+        SUBCASE("--help after a command") {
+            const auto r = run_plumb({"check", "--help"});
+            CHECK(r.status == 0);
+            CHECK(contains(r.out, "usage:"));
+        }
+        SUBCASE("--version") {
+            const auto expected = fmt::format("plumb {}\n", plumb::version());
+            CHECK(run_plumb({"--version"}).out == expected);
+            CHECK(run_plumb({"--version"}).status == 0);
+            CHECK(run_plumb({"-V"}).out == expected);
+            CHECK(plumb::version() == "0.1.0"); // the CMake project version reaches the binary
+        }
+    }
+
+    // --------------------------------------------------------------------------------------------
+    // Golden text
+
+    TEST_CASE("golden text: a term of a sum with another dimension") {
+        const temp_folder dir;
+        const auto file = dir.write("head.plumb", sum_file);
+        const auto r = run_plumb({"check", "--color", "never", file});
+        CHECK(r.status == 1);
+        // The underlines sit under the terms although 'ρ' takes two bytes: one column per
+        // character.
+        const std::string expected =
+            fmt::format("{}:7:33: error: 'p' (static pressure) does not have the dimension of the "
+                        "other terms of this sum [sum-mismatch]\n",
+                        file) +
+            "    7 | @head H = p/(ρ*g) + V^2/(2*g) + p\n"
+            "      |           ~~~~~~~   ~~~~~~~~~   ^\n"
+            "      note: 'p' (static pressure) is [M L^-1 T^-2] (pressure or stress)\n"
+            "      note: the other terms are [L] (length): 'p/(ρ*g)', 'V^2/(2*g)'\n"
+            "\n" +
+            tail("1 error, 0 warnings (1 formula in 1 file checked)");
+        CHECK(r.out == expected);
+        CHECK(r.err.empty());
+    }
+
+    TEST_CASE("golden text: the two sides of an equation differ") {
+        const temp_folder dir;
+        const auto file = dir.write("hydrostatic.plumb", side_file);
+        const auto r = run_plumb({"check", "--color", "never", file});
+        CHECK(r.status == 1);
+        const std::string expected =
+            fmt::format("{}:5:19: error: the two sides of this equation differ in dimension "
+                        "[side-mismatch]\n",
+                        file) +
+            "    5 | @hydrostatic Δp = ρ*h\n"
+            "      |              ~~   ^~~\n"
+            "      note: left side 'Δp' (pressure difference) is [M L^-1 T^-2] (pressure or "
+            "stress)\n"
+            "      note: right side 'ρ*h' is [M L^-2] (areal density)\n"
+            "\n" +
+            tail("1 error, 0 warnings (1 formula in 1 file checked)");
+        CHECK(r.out == expected);
+    }
+
+    TEST_CASE("golden text: a tab before the finding keeps the underline aligned") {
+        const temp_folder dir;
+        const auto file = dir.write("tab.plumb", "a : m\nb : s\nc : m\n\tc = a +\tb\n");
+        const auto r = run_plumb({"check", "--color", "never", file});
+        CHECK(r.status == 1);
+        // Tabs expand to the next multiple of 4 cells in the line and in the underline alike; the
+        // column in the location counts the tab as one character, as editors do.
+        const std::string expected =
+            fmt::format("{}:4:10: error: cannot add 'b' to 'a': their dimensions differ "
+                        "[sum-mismatch]\n",
+                        file) +
+            "    4 |     c = a + b\n"
+            "      |         ~   ^\n"
+            "      note: 'b' is [T] (time)\n"
+            "      note: 'a' is [L] (length)\n"
+            "\n" +
+            tail("1 error, 0 warnings (1 formula in 1 file checked)");
+        CHECK(r.out == expected);
+    }
+
+    TEST_CASE("a 5000-character line is shown as a window with the underline in place") {
+        const temp_folder dir;
+        // Greek names before the finding, so byte and character offsets disagree thousands of
+        // times.
+        std::string formula = "@long c = ";
+        for (int i = 0; i < 600; ++i)
+            formula += "ρ*a + ";
+        formula += "b";
+        for (int i = 0; i < 250; ++i)
+            formula += " + ρ*a";
+        REQUIRE(code_points(formula) >= 4000);
+        REQUIRE(formula.size() >= 5000);
+        const auto file = dir.write("long.plumb", "ρ : 1\na : m\nb : s\nc : m\n" + formula + "\n");
+        const auto r = run_plumb({"check", "--color", "never", file});
+        CHECK(r.status == 1);
+
+        const auto lines = lines_of(r.out);
+        REQUIRE(lines.size() >= 3);
+        const std::size_t column = code_points(formula.substr(0, formula.find('b'))) + 1;
+        CHECK(lines[0] ==
+              fmt::format("{}:5:{}: error: 'b' does not have the dimension of the other "
+                          "terms of this sum [sum-mismatch]",
+                          file, column));
+        const std::string source = lines[1];
+        const std::string marks = lines[2];
+        REQUIRE(source.rfind("    5 | ", 0) == 0);
+        REQUIRE(marks.rfind("      | ", 0) == 0);
+        const std::string shown = source.substr(8);
+        const std::string under = marks.substr(8);
+        // Cut on both sides, marked with an ellipsis, and short enough for a terminal.
+        CHECK(shown.rfind("…", 0) == 0);
+        CHECK(shown.size() > 3);
+        CHECK(shown.substr(shown.size() - 3) == "…");
+        CHECK(code_points(shown) <= 150);
+        CHECK(code_points(under) <= 150);
+        // The '^' sits under the 'b', counting characters, not bytes.
+        const std::size_t caret = under.find('^');
+        REQUIRE(caret != std::string::npos);
+        REQUIRE(shown.find('b') != std::string::npos);
+        CHECK(caret == code_points(shown.substr(0, shown.find('b'))));
+        CHECK(count_of(under, "^") == 1);
+        // The other terms in the window are underlined as well, each '~' under part of a 'ρ*a'.
+        const auto shown_cells = split_code_points(shown);
+        CHECK(count_of(under.substr(0, caret), "~") >= 1);
+        for (std::size_t i = 0; i < caret; ++i)
+            if (under[i] == '~') {
+                CAPTURE(i);
+                REQUIRE(i < shown_cells.size());
+                CHECK((shown_cells[i] == "ρ" || shown_cells[i] == "*" || shown_cells[i] == "a"));
+            }
+    }
+
+    // --------------------------------------------------------------------------------------------
+    // Colour
+
+    TEST_CASE("colour: always, never, and auto on a pipe") {
+        const temp_folder dir;
+        const auto file = dir.write("side.plumb", side_file);
+        const auto always = run_plumb({"check", "--color", "always", file});
+        const auto never = run_plumb({"check", "--color", "never", file});
+        const auto automatic = run_plumb({"check", file});
+        const auto british = run_plumb({"check", "--colour=always", file});
+
+        CHECK(contains(always.out, "\x1b["));
+        CHECK(contains(always.out, "\x1b[1;31merror:\x1b[0m"));
+        CHECK(contains(always.out, "\x1b[0m"));
+        CHECK(always.out == british.out);
+        CHECK_FALSE(contains(never.out, "\x1b"));
+        CHECK_FALSE(contains(automatic.out, "\x1b")); // stdout is a pipe, not a terminal
+        CHECK(never.out == automatic.out);
+        CHECK(always.status == 1);
+        CHECK(never.status == 1);
+
+        // Colour changes nothing but the escapes.
+        std::string stripped;
+        for (std::size_t i = 0; i < always.out.size(); ++i) {
+            if (always.out[i] == '\x1b') {
+                i = always.out.find('m', i);
+                REQUIRE(i != std::string::npos);
+                continue;
+            }
+            stripped += always.out[i];
+        }
+        CHECK(stripped == never.out);
+
+        SUBCASE("NO_COLOR and TERM=dumb turn auto off; an explicit --color always wins") {
+            const auto no_colour =
+                run_plumb({"check", "--color", "auto", file}, {{"NO_COLOR", "1"}});
+            CHECK_FALSE(contains(no_colour.out, "\x1b"));
+            const auto dumb = run_plumb({"check", "--color", "auto", file}, {{"TERM", "dumb"}});
+            CHECK_FALSE(contains(dumb.out, "\x1b"));
+            const auto forced =
+                run_plumb({"check", "--color", "always", file}, {{"NO_COLOR", "1"}});
+            CHECK(contains(forced.out, "\x1b["));
+        }
+    }
+
+    // --------------------------------------------------------------------------------------------
+    // JSON
+
+    TEST_CASE("json: the report is valid JSON with every field") {
+        const temp_folder dir;
+        const auto file = dir.write("side.plumb", std::string(side_file) + "z : m \"unused\"\n");
+        const auto r = run_plumb({"check", "--format", "json", file});
+        CHECK(r.status == 1);
+        const auto doc = parse_json(r.out);
+        REQUIRE(doc);
+        REQUIRE(doc->is_object());
+        CHECK((*doc)["tool"].string() == "plumb");
+        CHECK((*doc)["version"].string() == plumb::version());
+        CHECK((*doc)["schema"].number() == 1);
+        CHECK((*doc)["caution"].string() == plumb::caution_text());
+
+        const auto& summary = (*doc)["summary"];
+        CHECK(summary["files_checked"].number() == 1);
+        CHECK(summary["formulas_checked"].number() == 1);
+        CHECK(summary["errors"].number() == 1);
+        CHECK(summary["warnings"].number() == 1);
+        CHECK(summary["input_failed"].boolean() == false);
+
+        const auto& findings = (*doc)["findings"].array();
+        REQUIRE(findings.size() == 2);
+        for (const auto& f : findings)
+            for (const char* key : {"file", "line", "column", "end_line", "end_column", "severity",
+                                    "rule", "message", "terms", "notes"}) {
+                CAPTURE(key);
+                CHECK(f.has(key));
+            }
+
+        const json* side = nullptr;
+        const json* unused = nullptr;
+        for (const auto& f : findings)
+            (f["rule"].string() == "side-mismatch" ? side : unused) = &f;
+        REQUIRE(side != nullptr);
+        REQUIRE(unused != nullptr);
+
+        CHECK((*side)["file"].string() == file);
+        CHECK((*side)["severity"].string() == "error");
+        CHECK((*side)["message"].string() == "the two sides of this equation differ in dimension");
+        // Columns count characters: "@hydrostatic Δp = " is 18 characters, 19 bytes.
+        CHECK((*side)["line"].number() == 5);
+        CHECK((*side)["column"].number() == 19);
+        CHECK((*side)["end_line"].number() == 5);
+        CHECK((*side)["end_column"].number() == 22);
+
+        const auto& terms = (*side)["terms"].array();
+        REQUIRE(terms.size() == 2);
+        CHECK(terms[0]["text"].string() == "Δp");
+        CHECK(terms[0]["column"].number() == 14);
+        CHECK(terms[0]["end_column"].number() == 16);
+        CHECK(terms[0]["dimension"].string() == "[M L^-1 T^-2]");
+        CHECK(terms[0]["quantity"].string() == "pressure or stress");
+        const auto& p = terms[0]["exponents"];
+        CHECK(p.object().size() == 7);
+        CHECK(p["mass"].string() == "1");
+        CHECK(p["length"].string() == "-1");
+        CHECK(p["time"].string() == "-2");
+        for (const char* base : {"temperature", "amount", "current", "luminous_intensity"})
+            CHECK(p[base].string() == "0");
+        CHECK(terms[1]["text"].string() == "ρ*h");
+        CHECK(terms[1]["dimension"].string() == "[M L^-2]");
+        CHECK(terms[1]["exponents"]["length"].string() == "-2");
+
+        const auto& notes = (*side)["notes"].array();
+        REQUIRE(notes.size() == 2);
+        CHECK(notes[0]["message"].string() ==
+              "left side 'Δp' (pressure difference) is [M L^-1 T^-2] (pressure or stress)");
+        CHECK(notes[1]["message"].string() == "right side 'ρ*h' is [M L^-2] (areal density)");
+
+        CHECK((*unused)["severity"].string() == "warning");
+        CHECK((*unused)["line"].number() == 6);
+        CHECK((*unused)["column"].number() == 1);
+        CHECK((*unused)["terms"].array().empty());
+    }
+
+    TEST_CASE("json: a clean run, an unreadable path and awkward bytes stay valid JSON") {
+        const temp_folder dir;
+        SUBCASE("clean") {
+            const auto r = run_plumb({"check", "--format=json", dir.write("ok.plumb", clean_file)});
+            CHECK(r.status == 0);
+            const auto doc = parse_json(r.out);
+            REQUIRE(doc);
+            CHECK((*doc)["findings"].array().empty());
+            CHECK((*doc)["summary"]["errors"].number() == 0);
+        }
+        SUBCASE("unreadable") {
+            const auto r = run_plumb({"check", "--format", "json", dir.path("missing.plumb")});
+            CHECK(r.status == 2);
+            const auto doc = parse_json(r.out);
+            REQUIRE(doc);
+            CHECK((*doc)["summary"]["input_failed"].boolean() == true);
+            REQUIRE((*doc)["findings"].array().size() == 1);
+            const auto& f = (*doc)["findings"].array()[0];
+            CHECK(f["rule"].string() == "unreadable");
+            CHECK_FALSE(f.has("line")); // no place in a file
+        }
+        SUBCASE("quotes, backslashes, control and invalid UTF-8 bytes") {
+            const auto file = dir.write("odd \"name\\.plumb",
+                                        "p : Pa \"a \\ \x01 and \xff\xfe bytes\"\nh : m\np = h\n");
+            const auto r = run_plumb({"check", "--format", "json", file});
+            CHECK(r.status == 1);
+            const auto doc = parse_json(r.out);
+            REQUIRE(doc);
+            REQUIRE_FALSE((*doc)["findings"].array().empty());
+            CHECK((*doc)["findings"].array()[0]["file"].string() == file);
+        }
+    }
+
+    // --------------------------------------------------------------------------------------------
+    // dim, units, rules
+
+    TEST_CASE("dim: the dimension of an expression against a file's symbols") {
+        const temp_folder dir;
+        const auto dict = dir.write("fluids.plumb", "rho : kg/m^3 \"fluid density\"\n"
+                                                    "mu : Pa*s \"dynamic viscosity\"\n"
+                                                    "V : m/s\n"
+                                                    "D : m\n"
+                                                    "g : m/s^2\n"
+                                                    "h : m\n"
+                                                    "ρ : kg/m^3\n");
+        SUBCASE("Reynolds number") {
+            const auto r = run_plumb({"dim", "rho*V*D/mu", dict});
+            CHECK(r.status == 0);
+            CHECK(r.out == "[1] (dimensionless)\n");
+            CHECK(r.err.empty());
+        }
+        SUBCASE("a pressure") {
+            const auto r = run_plumb({"dim", "ρ*g*h", dict});
+            CHECK(r.status == 0);
+            CHECK(r.out == "[M L^-1 T^-2] (pressure or stress)\n");
+        }
+        SUBCASE("a dimension without a common name") {
+            const auto r = run_plumb({"dim", "rho*g^3", dict});
+            CHECK(r.status == 0);
+            CHECK(r.out == "[M T^-6]\n");
+        }
+        SUBCASE("an inconsistent expression exits 1 and shows the finding") {
+            const auto r = run_plumb({"dim", "--color", "never", "rho*g*h + D", dict});
+            CHECK(r.status == 1);
+            CHECK(contains(r.out, "<query>:1:11: error: "));
+            CHECK(contains(r.out, "[sum-mismatch]"));
+            CHECK(contains(r.out, "    1 | rho*g*h + D\n"));
+        }
+        SUBCASE("without a file only numbers and built-ins are known") {
+            const auto r = run_plumb({"dim", "2*pi"});
+            CHECK(r.status == 0);
+            CHECK(r.out == "[1] (dimensionless)\n");
+            const auto u = run_plumb({"dim", "rho"});
+            CHECK(u.status == 1);
+            CHECK(contains(u.out, "[undeclared]"));
+        }
+        SUBCASE("--dict gives the symbols too") {
+            const auto r = run_plumb({"dim", "--dict", dict, "mu/rho"});
+            CHECK(r.status == 0);
+            CHECK(r.out == "[L^2 T^-1] (kinematic viscosity or diffusivity)\n");
+        }
+    }
+
+    TEST_CASE("units: the table, and a filter on symbol or name") {
+        const auto all = run_plumb({"units"});
+        CHECK(all.status == 0);
+        CHECK(contains(all.out, "\nprefixes: "));
+        CHECK(contains(all.out, "k (kilo, 1e3)"));
+
+        const auto pa = run_plumb({"units", "Pa"});
+        CHECK(pa.status == 0);
+        const auto rows = lines_of(pa.out);
+        REQUIRE_FALSE(rows.empty());
+        bool pascal_row = false;
+        for (const auto& row : rows) {
+            CAPTURE(row);
+            CHECK(contains(row, "Pa"));
+            if (row.rfind("Pa ", 0) == 0) {
+                pascal_row = true;
+                CHECK(contains(row, "pascal"));
+                CHECK(contains(row, "[M L^-1 T^-2]"));
+                CHECK(contains(row, "takes SI prefixes"));
+            }
+        }
+        CHECK(pascal_row);
+        CHECK_FALSE(
+            contains(pa.out, "prefixes: ")); // the prefix list only comes with the full table
+        CHECK(rows.size() < lines_of(all.out).size());
+
+        const auto by_name = run_plumb({"units", "pascal"});
+        CHECK(by_name.status == 0);
+        CHECK(contains(by_name.out, "Pa "));
+    }
+
+    TEST_CASE("rules: every rule id is listed with its summary") {
+        const auto r = run_plumb({"rules"});
+        CHECK(r.status == 0);
+        const auto rows = lines_of(r.out);
+        CHECK(rows.size() == plumb::rules::all().size());
+        for (const auto& rule : plumb::rules::all()) {
+            CAPTURE(rule.id);
+            const auto row = std::find_if(rows.begin(), rows.end(), [&](const std::string& line) {
+                return line.rfind(std::string(rule.id) + " ", 0) == 0;
+            });
+            REQUIRE(row != rows.end());
+            CHECK(contains(*row, rule.summary));
+        }
+        for (const auto id : {plumb::rules::sum_mismatch, plumb::rules::side_mismatch,
+                              plumb::rules::unreadable, plumb::rules::include_cycle})
+            CHECK(contains(r.out, id));
+    }
+
+    // --------------------------------------------------------------------------------------------
+    // Inputs: dictionaries, folders, line endings, byte order mark
+
+    TEST_CASE("--dict supplies declarations to every checked file") {
+        const temp_folder dir;
+        const auto dict = dir.write("dict/fluids.plumb", "ρ : kg/m^3\nV : m/s\nD : m\n");
+        const auto a = dir.write("a.plumb", "G : [M L^-2 T^-1]\nG = ρ*V\n");
+        const auto b = dir.write("b.plumb", "x : [M L^-1 T^-1]\nx = ρ*V*D\n");
+
+        const auto without = run_plumb({"check", a, b});
+        CHECK(without.status == 1);
+        CHECK(contains(without.out, "'ρ' is not declared [undeclared]"));
+
+        const auto with = run_plumb({"check", "--dict", dict, a, b});
+        CHECK(with.status == 0);
+        CHECK(contains(with.out, "2 formulas in 2 files: no dimensional inconsistency found"));
+        // A dictionary's symbols are never unused.
+        CHECK_FALSE(contains(with.out, "[unused]"));
+
+        const auto equals_form = run_plumb({"check", "--dict=" + dict, a});
+        CHECK(equals_form.status == 0);
+
+        const auto wrong = run_plumb({"check", "--dict", dict, dir.write("c.plumb", "D = ρ*V\n")});
+        CHECK(wrong.status == 1);
+        CHECK(contains(wrong.out, "[side-mismatch]"));
+    }
+
+    TEST_CASE("a folder is searched recursively for *.plumb files only") {
+        const temp_folder dir;
+        (void)dir.write("tree/top.plumb", clean_file);
+        (void)dir.write("tree/deep/er/side.plumb", side_file);
+        (void)dir.write("tree/notes.txt", "this is (( not a plumb file\n");
+        (void)dir.write("tree/deep/broken.plumb.bak", "a = = =\n");
+        (void)dir.write("tree/README", "x = (\n");
+
+        const auto r = run_plumb({"check", "--color", "never", dir.path("tree")});
+        CHECK(r.status ==
+              1); // the side mismatch; the other files would have been syntax errors (2)
+        CHECK(contains(r.out, "(2 formulas in 2 files checked)"));
+        CHECK(contains(r.out, fmt::format("{}:5:19: error:", dir.path("tree/deep/er/side.plumb"))));
+        CHECK_FALSE(contains(r.out, "[syntax]"));
+
+        const auto clean_only = run_plumb({"check", dir.write("clean/a/b/c.plumb", clean_file)});
+        CHECK(clean_only.status == 0);
+        const auto empty = run_plumb({"check", dir.path("clean")});
+        CHECK(empty.status == 0);
+        CHECK(contains(empty.out, "1 formula in 1 file"));
+    }
+
+    TEST_CASE("CRLF line endings give the same findings as LF") {
+        const temp_folder dir;
+        const std::string lf =
+            std::string(sum_file) + "L : m\n" + "@cont L = \\\n    H + \\\n  V\n";
+        std::string crlf;
+        for (const char c : lf)
+            crlf += c == '\n' ? std::string("\r\n") : std::string(1, c);
+
+        const auto lf_run = run_plumb({"check", "--color", "never", dir.write("lf/f.plumb", lf)});
+        const auto crlf_run =
+            run_plumb({"check", "--color", "never", dir.write("crlf/f.plumb", crlf)});
+        CHECK(lf_run.status == 1);
+        CHECK(crlf_run.status == lf_run.status);
+        CHECK(count_of(lf_run.out, " error: ") == 2);
+        CHECK_FALSE(contains(crlf_run.out, "\r"));
+
+        // The same text once the folder names are made equal.
+        std::string normalised = crlf_run.out;
+        const std::string from = dir.path("crlf");
+        const std::string to = dir.path("lf");
+        for (auto at = normalised.find(from); at != std::string::npos;
+             at = normalised.find(from, at))
+            normalised.replace(at, from.size(), to);
+        CHECK(normalised == lf_run.out);
+
+        const auto lf_json = run_plumb({"check", "--format", "json", dir.path("lf/f.plumb")});
+        const auto crlf_json = run_plumb({"check", "--format", "json", dir.path("crlf/f.plumb")});
+        const auto a = parse_json(lf_json.out);
+        const auto b = parse_json(crlf_json.out);
+        REQUIRE(a);
+        REQUIRE(b);
+        const auto& fa = (*a)["findings"].array();
+        const auto& fb = (*b)["findings"].array();
+        REQUIRE(fa.size() == fb.size());
+        for (std::size_t i = 0; i < fa.size(); ++i)
+            for (const char* key : {"line", "column", "end_line", "end_column"})
+                CHECK(fa[i][key].number() == fb[i][key].number());
+    }
+
+    TEST_CASE("a file that starts with a UTF-8 byte order mark parses") {
+        const temp_folder dir;
+        const std::string bom = "\xEF\xBB\xBF";
+        const auto clean =
+            run_plumb({"check", dir.write("bom.plumb", bom + std::string(clean_file))});
+        CHECK(clean.status == 0);
+        CHECK(contains(clean.out, "1 formula in 1 file: no dimensional inconsistency found"));
+
+        const auto with_error =
+            run_plumb({"check", "--color", "never",
+                       dir.write("bom-side.plumb", bom + std::string(side_file))});
+        CHECK(with_error.status == 1);
+        CHECK(contains(with_error.out, ":5:19: error: the two sides of this equation differ"));
+    }
+
+} // TEST_SUITE
