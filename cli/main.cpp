@@ -5,6 +5,7 @@
 #include "plumb/unit_table.hpp"
 #include "plumb/version.hpp"
 
+#include <algorithm>
 #include <cstdio>
 #include <cstdlib>
 #include <cstring>
@@ -225,6 +226,18 @@ int run(int argc, char** argv) {
     if (command.size() > 6 && command.substr(command.size() - 6) == ".plumb")
         return usage_error(
             fmt::format("unknown command '{}'; did you mean 'plumb check {}'?", command, command));
+    for (const std::string_view known : {"check", "dim", "units", "rules"}) {
+        // One slip of the keyboard ("chek", "unit") deserves a pointer, not just a refusal.
+        const bool near =
+            command.size() + 1 >= known.size() && command.size() <= known.size() + 1 &&
+            std::count_if(known.begin(), known.end(),
+                          [&](char c) { return command.find(c) != std::string::npos; }) +
+                    1 >=
+                static_cast<std::ptrdiff_t>(known.size());
+        if (near)
+            return usage_error(
+                fmt::format("unknown command '{}'; did you mean 'plumb {}'?", command, known));
+    }
     return usage_error(fmt::format("unknown command '{}'", command));
 }
 

@@ -350,8 +350,8 @@ class checker {
                 d.notes.push_back(
                     {fmt::format("'{}' is a function; call it as {}(x)", name, name), {}});
             else
-                d.notes.push_back({fmt::format("declare it with its dimension or unit, as in "
-                                               "'{} : [L]' or '{} : m'",
+                d.notes.push_back({fmt::format("declare it with its dimension or its unit, in the "
+                                               "form '{} : [M L^-3]' or '{} : kg/m^3'",
                                                name, name),
                                    {}});
             return unknown_type();
