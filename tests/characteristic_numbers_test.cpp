@@ -8,6 +8,8 @@
 #include "plumb/dimension.hpp"
 #include "plumb/rules.hpp"
 
+#include "test_support.hpp"
+
 #include <doctest/doctest.h>
 #include <fmt/format.h>
 
@@ -74,32 +76,7 @@ dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th 
                                       rational(n), rational(i), rational(j)});
 }
 
-class temp_dir {
-  public:
-    temp_dir() {
-        static int counter = 0;
-        const auto stamp = std::chrono::steady_clock::now().time_since_epoch().count();
-        path_ = fs::temp_directory_path() /
-                ("plumb-numbers-test-" + std::to_string(stamp) + "-" + std::to_string(++counter));
-        fs::create_directories(path_);
-    }
-    ~temp_dir() {
-        std::error_code ec;
-        fs::remove_all(path_, ec);
-    }
-    temp_dir(const temp_dir&) = delete;
-    temp_dir& operator=(const temp_dir&) = delete;
-
-    fs::path write(const std::string& name, const std::string& text) const {
-        const fs::path file = path_ / name;
-        std::ofstream out(file, std::ios::binary);
-        out << text;
-        return file;
-    }
-
-  private:
-    fs::path path_;
-};
+using plumb::test::temp_dir;
 
 void dimension_is(const std::string& expression, const fs::path& context,
                   const dimension& expected) {

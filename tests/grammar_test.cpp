@@ -8,6 +8,8 @@
 #include "plumb/notation.hpp"
 #include "plumb/rules.hpp"
 
+#include "test_support.hpp"
+
 #include <doctest/doctest.h>
 #include <tao/pegtl/contrib/analyze.hpp>
 
@@ -102,32 +104,7 @@ dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th 
 }
 
 // A fresh folder under the system's temporary directory, removed with everything in it.
-class temp_dir {
-  public:
-    temp_dir() {
-        static int counter = 0;
-        const auto stamp = std::chrono::steady_clock::now().time_since_epoch().count();
-        path_ = std::filesystem::temp_directory_path() /
-                ("plumb-grammar-test-" + std::to_string(stamp) + "-" + std::to_string(++counter));
-        std::filesystem::create_directories(path_);
-    }
-    ~temp_dir() {
-        std::error_code ec;
-        std::filesystem::remove_all(path_, ec);
-    }
-    temp_dir(const temp_dir&) = delete;
-    temp_dir& operator=(const temp_dir&) = delete;
-
-    std::filesystem::path write(const std::string& name, const std::string& text) const {
-        const auto file = path_ / name;
-        std::ofstream out(file, std::ios::binary);
-        out << text;
-        return file;
-    }
-
-  private:
-    std::filesystem::path path_;
-};
+using plumb::test::temp_dir;
 
 // Asserts the dimension of `expression` against the symbols `context` declares.
 void dimension_is(const std::string& expression, const std::filesystem::path& context,

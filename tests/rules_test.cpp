@@ -6,6 +6,8 @@
 #include "plumb/dimension.hpp"
 #include "plumb/rules.hpp"
 
+#include "test_support.hpp"
+
 #include <doctest/doctest.h>
 
 #include <chrono>
@@ -107,34 +109,7 @@ check_report check(const std::string& text) {
 }
 
 // A fresh folder under the system's temporary directory, removed with everything in it.
-class temp_dir {
-  public:
-    temp_dir() {
-        static int counter = 0;
-        const auto stamp = std::chrono::steady_clock::now().time_since_epoch().count();
-        path_ = fs::temp_directory_path() /
-                ("plumb-rules-test-" + std::to_string(stamp) + "-" + std::to_string(++counter));
-        fs::create_directories(path_);
-    }
-    ~temp_dir() {
-        std::error_code ec;
-        fs::remove_all(path_, ec);
-    }
-    temp_dir(const temp_dir&) = delete;
-    temp_dir& operator=(const temp_dir&) = delete;
-
-    [[nodiscard]] const fs::path& path() const { return path_; }
-    fs::path write(const std::string& name, const std::string& text) const {
-        const fs::path file = path_ / name;
-        fs::create_directories(file.parent_path());
-        std::ofstream out(file, std::ios::binary);
-        out << text;
-        return file;
-    }
-
-  private:
-    fs::path path_;
-};
+using plumb::test::temp_dir;
 
 dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th = 0) {
     return dimension::from_exponents({rational(m), rational(l), rational(t), rational(th),
