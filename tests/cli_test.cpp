@@ -554,631 +554,621 @@ constexpr std::string_view warning_only_file = "a : m\n"
 
 // =============================================================================================
 
-TEST_SUITE("cli") {
+TEST_SUITE_BEGIN("cli");
 
-    TEST_CASE("a clean file exits 0 and says so") {
-        const temp_folder dir;
-        const auto file = dir.write("clean.plumb", clean_file);
-        const auto r = run_plumb({"check", "--color", "never", file});
+TEST_CASE("a clean file exits 0 and says so") {
+    const temp_folder dir;
+    const auto file = dir.write("clean.plumb", clean_file);
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 0);
+    CHECK(r.out == tail("1 formula in 1 file: no dimensional inconsistency found"));
+    CHECK(r.err.empty());
+}
+
+TEST_CASE("a file with an error exits 1") {
+    const temp_folder dir;
+    const auto r = run_plumb({"check", dir.write("sum.plumb", sum_file)});
+    CHECK(r.status == 1);
+    CHECK(contains(r.out, "[sum-mismatch]"));
+    CHECK(contains(r.out, "plumb: 1 error, 0 warnings (1 formula in 1 file checked)"));
+}
+
+TEST_CASE("warnings alone exit 0") {
+    const temp_folder dir;
+    const auto r =
+        run_plumb({"check", "--color", "never", dir.write("w.plumb", warning_only_file)});
+    CHECK(r.status == 0);
+    CHECK(contains(r.out, "warning: 'c' is declared but never used [unused]"));
+    CHECK(contains(r.out, "plumb: 0 errors, 1 warning (1 formula in 1 file checked)"));
+}
+
+TEST_CASE("an error in one file of several still exits 1") {
+    const temp_folder dir;
+    const auto r =
+        run_plumb({"check", dir.write("a.plumb", clean_file), dir.write("b.plumb", side_file)});
+    CHECK(r.status == 1);
+    CHECK(contains(r.out, "(2 formulas in 2 files checked)"));
+}
+
+TEST_CASE("an unreadable path exits 2 with an 'unreadable' finding") {
+    const temp_folder dir;
+    const auto missing = dir.path("no-such-file.plumb");
+    const auto r = run_plumb({"check", "--color", "never", missing});
+    CHECK(r.status == 2);
+    CHECK(contains(r.out, fmt::format("plumb: error: cannot read '{}'", missing)));
+    CHECK(contains(r.out, "[unreadable]"));
+
+    SUBCASE("even next to a clean file") {
+        const auto both = run_plumb({"check", dir.write("ok.plumb", clean_file), missing});
+        CHECK(both.status == 2);
+    }
+    SUBCASE("and an unreadable --dict too") {
+        const auto r2 = run_plumb({"check", "--dict", missing, dir.write("ok.plumb", clean_file)});
+        CHECK(r2.status == 2);
+        CHECK(contains(r2.out, "[unreadable]"));
+    }
+}
+
+TEST_CASE("a syntax error exits 2") {
+    const temp_folder dir;
+    const auto file = dir.write("syntax.plumb", "a : m\nb : m\nb = (a +\n");
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 2);
+    CHECK(contains(r.out, fmt::format("{}:3:9: error: ", file)));
+    CHECK(contains(r.out, "[syntax]"));
+}
+
+TEST_CASE("bad usage exits 2 with a message on stderr") {
+    const temp_folder dir;
+    const auto file = dir.write("clean.plumb", clean_file);
+
+    SUBCASE("an unknown option") {
+        const auto r = run_plumb({"check", "--bogus", file});
+        CHECK(r.status == 2);
+        CHECK(r.out.empty());
+        CHECK(contains(r.err, "unknown option '--bogus'"));
+        CHECK(contains(r.err, "plumb --help"));
+    }
+    SUBCASE("a bad --format value") {
+        const auto r = run_plumb({"check", "--format", "xml", file});
+        CHECK(r.status == 2);
+        CHECK(contains(r.err, "--format"));
+    }
+    SUBCASE("a bad --color value") {
+        const auto r = run_plumb({"check", "--color=sometimes", file});
+        CHECK(r.status == 2);
+        CHECK(contains(r.err, "--color"));
+    }
+    SUBCASE("--dict without its file") {
+        const auto r = run_plumb({"check", file, "--dict"});
+        CHECK(r.status == 2);
+        CHECK(contains(r.err, "--dict"));
+    }
+    SUBCASE("check without a path") {
+        const auto r = run_plumb({"check"});
+        CHECK(r.status == 2);
+        CHECK(contains(r.err, "check needs at least one file or folder"));
+    }
+    SUBCASE("dim without an expression") {
+        const auto r = run_plumb({"dim"});
+        CHECK(r.status == 2);
+        CHECK(contains(r.err, "dim needs an expression"));
+    }
+    SUBCASE("an unknown command") {
+        const auto r = run_plumb({"frobnicate"});
+        CHECK(r.status == 2);
+        CHECK(contains(r.err, "unknown command 'frobnicate'"));
+    }
+    SUBCASE("a file given without 'check'") {
+        const auto r = run_plumb({file});
+        CHECK(r.status == 2);
+        CHECK(contains(r.err, fmt::format("did you mean 'plumb check {}'?", file)));
+    }
+    SUBCASE("units with two filters") {
+        const auto r = run_plumb({"units", "Pa", "m"});
+        CHECK(r.status == 2);
+        CHECK(contains(r.err, "units takes at most one filter"));
+    }
+}
+
+TEST_CASE("no arguments at all exits 2 and shows the usage") {
+    const auto r = run_plumb({});
+    CHECK(r.status == 2);
+    CHECK(contains(r.out + r.err, "usage:"));
+    CHECK(contains(r.out + r.err, "plumb check"));
+}
+
+TEST_CASE("--help and --version exit 0") {
+    for (const char* flag : {"--help", "-h", "help"}) {
+        CAPTURE(flag);
+        const auto r = run_plumb({flag});
         CHECK(r.status == 0);
-        CHECK(r.out == tail("1 formula in 1 file: no dimensional inconsistency found"));
+        CHECK(contains(r.out, "usage:"));
+        CHECK(contains(r.out, "plumb check [options] PATH..."));
+        CHECK(contains(r.out, "--format text|json"));
         CHECK(r.err.empty());
     }
-
-    TEST_CASE("a file with an error exits 1") {
-        const temp_folder dir;
-        const auto r = run_plumb({"check", dir.write("sum.plumb", sum_file)});
-        CHECK(r.status == 1);
-        CHECK(contains(r.out, "[sum-mismatch]"));
-        CHECK(contains(r.out, "plumb: 1 error, 0 warnings (1 formula in 1 file checked)"));
-    }
-
-    TEST_CASE("warnings alone exit 0") {
-        const temp_folder dir;
-        const auto r =
-            run_plumb({"check", "--color", "never", dir.write("w.plumb", warning_only_file)});
+    SUBCASE("--help after a command") {
+        const auto r = run_plumb({"check", "--help"});
         CHECK(r.status == 0);
-        CHECK(contains(r.out, "warning: 'c' is declared but never used [unused]"));
-        CHECK(contains(r.out, "plumb: 0 errors, 1 warning (1 formula in 1 file checked)"));
+        CHECK(contains(r.out, "usage:"));
     }
-
-    TEST_CASE("an error in one file of several still exits 1") {
-        const temp_folder dir;
-        const auto r =
-            run_plumb({"check", dir.write("a.plumb", clean_file), dir.write("b.plumb", side_file)});
-        CHECK(r.status == 1);
-        CHECK(contains(r.out, "(2 formulas in 2 files checked)"));
+    SUBCASE("--version") {
+        const auto expected = fmt::format("plumb {}\n", plumb::version());
+        CHECK(run_plumb({"--version"}).out == expected);
+        CHECK(run_plumb({"--version"}).status == 0);
+        CHECK(run_plumb({"-V"}).out == expected);
+        CHECK(plumb::version() == "0.1.0"); // the CMake project version reaches the binary
     }
+}
 
-    TEST_CASE("an unreadable path exits 2 with an 'unreadable' finding") {
-        const temp_folder dir;
-        const auto missing = dir.path("no-such-file.plumb");
-        const auto r = run_plumb({"check", "--color", "never", missing});
+// --------------------------------------------------------------------------------------------
+// Golden text
+
+TEST_CASE("golden text: a term of a sum with another dimension") {
+    const temp_folder dir;
+    const auto file = dir.write("head.plumb", sum_file);
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 1);
+    // The underlines sit under the terms although 'ρ' takes two bytes: one column per
+    // character.
+    const std::string expected =
+        fmt::format("{}:7:33: error: 'p' (static pressure) does not have the dimension of the "
+                    "other terms of this sum [sum-mismatch]\n",
+                    file) +
+        "    7 | @head H = p/(ρ*g) + V^2/(2*g) + p\n"
+        "      |           ~~~~~~~   ~~~~~~~~~   ^\n"
+        "      note: 'p' (static pressure) is [M L^-1 T^-2] (pressure or stress)\n"
+        "      note: the other terms are [L] (length): 'p/(ρ*g)', 'V^2/(2*g)'\n"
+        "\n" +
+        tail("1 error, 0 warnings (1 formula in 1 file checked)");
+    CHECK(r.out == expected);
+    CHECK(r.err.empty());
+}
+
+TEST_CASE("golden text: the two sides of an equation differ") {
+    const temp_folder dir;
+    const auto file = dir.write("hydrostatic.plumb", side_file);
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 1);
+    const std::string expected =
+        fmt::format("{}:5:19: error: the two sides of this equation differ in dimension "
+                    "[side-mismatch]\n",
+                    file) +
+        "    5 | @hydrostatic Δp = ρ*h\n"
+        "      |              ~~   ^~~\n"
+        "      note: left side 'Δp' (pressure difference) is [M L^-1 T^-2] (pressure or "
+        "stress)\n"
+        "      note: right side 'ρ*h' is [M L^-2] (areal density)\n"
+        "\n" +
+        tail("1 error, 0 warnings (1 formula in 1 file checked)");
+    CHECK(r.out == expected);
+}
+
+TEST_CASE("golden text: a tab before the finding keeps the underline aligned") {
+    const temp_folder dir;
+    const auto file = dir.write("tab.plumb", "a : m\nb : s\nc : m\n\tc = a +\tb\n");
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 1);
+    // Tabs expand to the next multiple of 4 cells in the line and in the underline alike; the
+    // column in the location counts the tab as one character, as editors do.
+    const std::string expected =
+        fmt::format("{}:4:10: error: cannot add 'b' to 'a': their dimensions differ "
+                    "[sum-mismatch]\n",
+                    file) +
+        "    4 |     c = a + b\n"
+        "      |         ~   ^\n"
+        "      note: 'b' is [T] (time)\n"
+        "      note: 'a' is [L] (length)\n"
+        "\n" +
+        tail("1 error, 0 warnings (1 formula in 1 file checked)");
+    CHECK(r.out == expected);
+}
+
+TEST_CASE("a 5000-character line is shown as a window with the underline in place") {
+    const temp_folder dir;
+    // Greek names before the finding, so byte and character offsets disagree thousands of
+    // times.
+    std::string formula = "@long c = ";
+    for (int i = 0; i < 600; ++i)
+        formula += "ρ*a + ";
+    formula += "b";
+    for (int i = 0; i < 250; ++i)
+        formula += " + ρ*a";
+    REQUIRE(code_points(formula) >= 4000);
+    REQUIRE(formula.size() >= 5000);
+    const auto file = dir.write("long.plumb", "ρ : 1\na : m\nb : s\nc : m\n" + formula + "\n");
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 1);
+
+    const auto lines = lines_of(r.out);
+    REQUIRE(lines.size() >= 3);
+    const std::size_t column = code_points(formula.substr(0, formula.find('b'))) + 1;
+    CHECK(lines[0] == fmt::format("{}:5:{}: error: 'b' does not have the dimension of the other "
+                                  "terms of this sum [sum-mismatch]",
+                                  file, column));
+    // No line of the report grows with the formula: the 800 other terms are not all listed.
+    for (const auto& line : lines) {
+        CAPTURE(line.substr(0, 200));
+        CHECK(code_points(line) < 400);
+    }
+    const std::string source = lines[1];
+    const std::string marks = lines[2];
+    REQUIRE(source.rfind("    5 | ", 0) == 0);
+    REQUIRE(marks.rfind("      | ", 0) == 0);
+    const std::string shown = source.substr(8);
+    const std::string under = marks.substr(8);
+    // Cut on both sides, marked with an ellipsis, and short enough for a terminal.
+    CHECK(shown.rfind("…", 0) == 0);
+    CHECK(shown.size() > 3);
+    CHECK(shown.substr(shown.size() - 3) == "…");
+    CHECK(code_points(shown) <= 150);
+    CHECK(code_points(under) <= 150);
+    // The '^' sits under the 'b', counting characters, not bytes.
+    const std::size_t caret = under.find('^');
+    REQUIRE(caret != std::string::npos);
+    REQUIRE(shown.find('b') != std::string::npos);
+    CHECK(caret == code_points(shown.substr(0, shown.find('b'))));
+    CHECK(count_of(under, "^") == 1);
+    // The other terms in the window are underlined as well, each '~' under part of a 'ρ*a'.
+    const auto shown_cells = split_code_points(shown);
+    CHECK(count_of(under.substr(0, caret), "~") >= 1);
+    for (std::size_t i = 0; i < caret; ++i)
+        if (under[i] == '~') {
+            CAPTURE(i);
+            REQUIRE(i < shown_cells.size());
+            CHECK((shown_cells[i] == "ρ" || shown_cells[i] == "*" || shown_cells[i] == "a"));
+        }
+}
+
+// --------------------------------------------------------------------------------------------
+// Colour
+
+TEST_CASE("colour: always, never, and auto on a pipe") {
+    const temp_folder dir;
+    const auto file = dir.write("side.plumb", side_file);
+    const auto always = run_plumb({"check", "--color", "always", file});
+    const auto never = run_plumb({"check", "--color", "never", file});
+    const auto automatic = run_plumb({"check", file});
+    const auto british = run_plumb({"check", "--colour=always", file});
+
+    CHECK(contains(always.out, "\x1b["));
+    CHECK(contains(always.out, "\x1b[1;31merror:\x1b[0m"));
+    CHECK(contains(always.out, "\x1b[0m"));
+    CHECK(always.out == british.out);
+    CHECK_FALSE(contains(never.out, "\x1b"));
+    CHECK_FALSE(contains(automatic.out, "\x1b")); // stdout is a pipe, not a terminal
+    CHECK(never.out == automatic.out);
+    CHECK(always.status == 1);
+    CHECK(never.status == 1);
+
+    // Colour changes nothing but the escapes.
+    std::string stripped;
+    for (std::size_t i = 0; i < always.out.size(); ++i) {
+        if (always.out[i] == '\x1b') {
+            i = always.out.find('m', i);
+            REQUIRE(i != std::string::npos);
+            continue;
+        }
+        stripped += always.out[i];
+    }
+    CHECK(stripped == never.out);
+
+    SUBCASE("NO_COLOR and TERM=dumb turn auto off; an explicit --color always wins") {
+        const auto no_colour = run_plumb({"check", "--color", "auto", file}, {{"NO_COLOR", "1"}});
+        CHECK_FALSE(contains(no_colour.out, "\x1b"));
+        const auto dumb = run_plumb({"check", "--color", "auto", file}, {{"TERM", "dumb"}});
+        CHECK_FALSE(contains(dumb.out, "\x1b"));
+        const auto forced = run_plumb({"check", "--color", "always", file}, {{"NO_COLOR", "1"}});
+        CHECK(contains(forced.out, "\x1b["));
+    }
+}
+
+// --------------------------------------------------------------------------------------------
+// JSON
+
+TEST_CASE("json: the report is valid JSON with every field") {
+    const temp_folder dir;
+    const auto file = dir.write("side.plumb", std::string(side_file) + "z : m \"unused\"\n");
+    const auto r = run_plumb({"check", "--format", "json", file});
+    CHECK(r.status == 1);
+    const auto doc = parse_json(r.out);
+    REQUIRE(doc);
+    REQUIRE(doc->is_object());
+    CHECK((*doc)["tool"].string() == "plumb");
+    CHECK((*doc)["version"].string() == plumb::version());
+    CHECK((*doc)["schema"].number() == 1);
+    CHECK((*doc)["caution"].string() == plumb::caution_text());
+
+    const auto& summary = (*doc)["summary"];
+    CHECK(summary["files_checked"].number() == 1);
+    CHECK(summary["formulas_checked"].number() == 1);
+    CHECK(summary["errors"].number() == 1);
+    CHECK(summary["warnings"].number() == 1);
+    CHECK(summary["input_failed"].boolean() == false);
+
+    const auto& findings = (*doc)["findings"].array();
+    REQUIRE(findings.size() == 2);
+    for (const auto& f : findings)
+        for (const char* key : {"file", "line", "column", "end_line", "end_column", "severity",
+                                "rule", "message", "terms", "notes"}) {
+            CAPTURE(key);
+            CHECK(f.has(key));
+        }
+
+    const json* side = nullptr;
+    const json* unused = nullptr;
+    for (const auto& f : findings)
+        (f["rule"].string() == "side-mismatch" ? side : unused) = &f;
+    REQUIRE(side != nullptr);
+    REQUIRE(unused != nullptr);
+
+    CHECK((*side)["file"].string() == file);
+    CHECK((*side)["severity"].string() == "error");
+    CHECK((*side)["message"].string() == "the two sides of this equation differ in dimension");
+    // Columns count characters: "@hydrostatic Δp = " is 18 characters, 19 bytes.
+    CHECK((*side)["line"].number() == 5);
+    CHECK((*side)["column"].number() == 19);
+    CHECK((*side)["end_line"].number() == 5);
+    CHECK((*side)["end_column"].number() == 22);
+
+    const auto& terms = (*side)["terms"].array();
+    REQUIRE(terms.size() == 2);
+    CHECK(terms[0]["text"].string() == "Δp");
+    CHECK(terms[0]["column"].number() == 14);
+    CHECK(terms[0]["end_column"].number() == 16);
+    CHECK(terms[0]["dimension"].string() == "[M L^-1 T^-2]");
+    CHECK(terms[0]["quantity"].string() == "pressure or stress");
+    const auto& p = terms[0]["exponents"];
+    CHECK(p.object().size() == 7);
+    CHECK(p["mass"].string() == "1");
+    CHECK(p["length"].string() == "-1");
+    CHECK(p["time"].string() == "-2");
+    for (const char* base : {"temperature", "amount", "current", "luminous_intensity"})
+        CHECK(p[base].string() == "0");
+    CHECK(terms[1]["text"].string() == "ρ*h");
+    CHECK(terms[1]["dimension"].string() == "[M L^-2]");
+    CHECK(terms[1]["exponents"]["length"].string() == "-2");
+
+    const auto& notes = (*side)["notes"].array();
+    REQUIRE(notes.size() == 2);
+    CHECK(notes[0]["message"].string() ==
+          "left side 'Δp' (pressure difference) is [M L^-1 T^-2] (pressure or stress)");
+    CHECK(notes[1]["message"].string() == "right side 'ρ*h' is [M L^-2] (areal density)");
+
+    CHECK((*unused)["severity"].string() == "warning");
+    CHECK((*unused)["line"].number() == 6);
+    CHECK((*unused)["column"].number() == 1);
+    CHECK((*unused)["terms"].array().empty());
+}
+
+TEST_CASE("json: a clean run, an unreadable path and awkward bytes stay valid JSON") {
+    const temp_folder dir;
+    SUBCASE("clean") {
+        const auto r = run_plumb({"check", "--format=json", dir.write("ok.plumb", clean_file)});
+        CHECK(r.status == 0);
+        const auto doc = parse_json(r.out);
+        REQUIRE(doc);
+        CHECK((*doc)["findings"].array().empty());
+        CHECK((*doc)["summary"]["errors"].number() == 0);
+    }
+    SUBCASE("unreadable") {
+        const auto r = run_plumb({"check", "--format", "json", dir.path("missing.plumb")});
         CHECK(r.status == 2);
-        CHECK(contains(r.out, fmt::format("plumb: error: cannot read '{}'", missing)));
-        CHECK(contains(r.out, "[unreadable]"));
-
-        SUBCASE("even next to a clean file") {
-            const auto both = run_plumb({"check", dir.write("ok.plumb", clean_file), missing});
-            CHECK(both.status == 2);
-        }
-        SUBCASE("and an unreadable --dict too") {
-            const auto r2 =
-                run_plumb({"check", "--dict", missing, dir.write("ok.plumb", clean_file)});
-            CHECK(r2.status == 2);
-            CHECK(contains(r2.out, "[unreadable]"));
-        }
+        const auto doc = parse_json(r.out);
+        REQUIRE(doc);
+        CHECK((*doc)["summary"]["input_failed"].boolean() == true);
+        REQUIRE((*doc)["findings"].array().size() == 1);
+        const auto& f = (*doc)["findings"].array()[0];
+        CHECK(f["rule"].string() == "unreadable");
+        CHECK_FALSE(f.has("line")); // no place in a file
     }
-
-    TEST_CASE("a syntax error exits 2") {
-        const temp_folder dir;
-        const auto file = dir.write("syntax.plumb", "a : m\nb : m\nb = (a +\n");
-        const auto r = run_plumb({"check", "--color", "never", file});
-        CHECK(r.status == 2);
-        CHECK(contains(r.out, fmt::format("{}:3:9: error: ", file)));
-        CHECK(contains(r.out, "[syntax]"));
-    }
-
-    TEST_CASE("bad usage exits 2 with a message on stderr") {
-        const temp_folder dir;
-        const auto file = dir.write("clean.plumb", clean_file);
-
-        SUBCASE("an unknown option") {
-            const auto r = run_plumb({"check", "--bogus", file});
-            CHECK(r.status == 2);
-            CHECK(r.out.empty());
-            CHECK(contains(r.err, "unknown option '--bogus'"));
-            CHECK(contains(r.err, "plumb --help"));
-        }
-        SUBCASE("a bad --format value") {
-            const auto r = run_plumb({"check", "--format", "xml", file});
-            CHECK(r.status == 2);
-            CHECK(contains(r.err, "--format"));
-        }
-        SUBCASE("a bad --color value") {
-            const auto r = run_plumb({"check", "--color=sometimes", file});
-            CHECK(r.status == 2);
-            CHECK(contains(r.err, "--color"));
-        }
-        SUBCASE("--dict without its file") {
-            const auto r = run_plumb({"check", file, "--dict"});
-            CHECK(r.status == 2);
-            CHECK(contains(r.err, "--dict"));
-        }
-        SUBCASE("check without a path") {
-            const auto r = run_plumb({"check"});
-            CHECK(r.status == 2);
-            CHECK(contains(r.err, "check needs at least one file or folder"));
-        }
-        SUBCASE("dim without an expression") {
-            const auto r = run_plumb({"dim"});
-            CHECK(r.status == 2);
-            CHECK(contains(r.err, "dim needs an expression"));
-        }
-        SUBCASE("an unknown command") {
-            const auto r = run_plumb({"frobnicate"});
-            CHECK(r.status == 2);
-            CHECK(contains(r.err, "unknown command 'frobnicate'"));
-        }
-        SUBCASE("a file given without 'check'") {
-            const auto r = run_plumb({file});
-            CHECK(r.status == 2);
-            CHECK(contains(r.err, fmt::format("did you mean 'plumb check {}'?", file)));
-        }
-        SUBCASE("units with two filters") {
-            const auto r = run_plumb({"units", "Pa", "m"});
-            CHECK(r.status == 2);
-            CHECK(contains(r.err, "units takes at most one filter"));
-        }
-    }
-
-    TEST_CASE("no arguments at all exits 2 and shows the usage") {
-        const auto r = run_plumb({});
-        CHECK(r.status == 2);
-        CHECK(contains(r.out + r.err, "usage:"));
-        CHECK(contains(r.out + r.err, "plumb check"));
-    }
-
-    TEST_CASE("--help and --version exit 0") {
-        for (const char* flag : {"--help", "-h", "help"}) {
-            CAPTURE(flag);
-            const auto r = run_plumb({flag});
-            CHECK(r.status == 0);
-            CHECK(contains(r.out, "usage:"));
-            CHECK(contains(r.out, "plumb check [options] PATH..."));
-            CHECK(contains(r.out, "--format text|json"));
-            CHECK(r.err.empty());
-        }
-        SUBCASE("--help after a command") {
-            const auto r = run_plumb({"check", "--help"});
-            CHECK(r.status == 0);
-            CHECK(contains(r.out, "usage:"));
-        }
-        SUBCASE("--version") {
-            const auto expected = fmt::format("plumb {}\n", plumb::version());
-            CHECK(run_plumb({"--version"}).out == expected);
-            CHECK(run_plumb({"--version"}).status == 0);
-            CHECK(run_plumb({"-V"}).out == expected);
-            CHECK(plumb::version() == "0.1.0"); // the CMake project version reaches the binary
-        }
-    }
-
-    // --------------------------------------------------------------------------------------------
-    // Golden text
-
-    TEST_CASE("golden text: a term of a sum with another dimension") {
-        const temp_folder dir;
-        const auto file = dir.write("head.plumb", sum_file);
-        const auto r = run_plumb({"check", "--color", "never", file});
-        CHECK(r.status == 1);
-        // The underlines sit under the terms although 'ρ' takes two bytes: one column per
-        // character.
-        const std::string expected =
-            fmt::format("{}:7:33: error: 'p' (static pressure) does not have the dimension of the "
-                        "other terms of this sum [sum-mismatch]\n",
-                        file) +
-            "    7 | @head H = p/(ρ*g) + V^2/(2*g) + p\n"
-            "      |           ~~~~~~~   ~~~~~~~~~   ^\n"
-            "      note: 'p' (static pressure) is [M L^-1 T^-2] (pressure or stress)\n"
-            "      note: the other terms are [L] (length): 'p/(ρ*g)', 'V^2/(2*g)'\n"
-            "\n" +
-            tail("1 error, 0 warnings (1 formula in 1 file checked)");
-        CHECK(r.out == expected);
-        CHECK(r.err.empty());
-    }
-
-    TEST_CASE("golden text: the two sides of an equation differ") {
-        const temp_folder dir;
-        const auto file = dir.write("hydrostatic.plumb", side_file);
-        const auto r = run_plumb({"check", "--color", "never", file});
-        CHECK(r.status == 1);
-        const std::string expected =
-            fmt::format("{}:5:19: error: the two sides of this equation differ in dimension "
-                        "[side-mismatch]\n",
-                        file) +
-            "    5 | @hydrostatic Δp = ρ*h\n"
-            "      |              ~~   ^~~\n"
-            "      note: left side 'Δp' (pressure difference) is [M L^-1 T^-2] (pressure or "
-            "stress)\n"
-            "      note: right side 'ρ*h' is [M L^-2] (areal density)\n"
-            "\n" +
-            tail("1 error, 0 warnings (1 formula in 1 file checked)");
-        CHECK(r.out == expected);
-    }
-
-    TEST_CASE("golden text: a tab before the finding keeps the underline aligned") {
-        const temp_folder dir;
-        const auto file = dir.write("tab.plumb", "a : m\nb : s\nc : m\n\tc = a +\tb\n");
-        const auto r = run_plumb({"check", "--color", "never", file});
-        CHECK(r.status == 1);
-        // Tabs expand to the next multiple of 4 cells in the line and in the underline alike; the
-        // column in the location counts the tab as one character, as editors do.
-        const std::string expected =
-            fmt::format("{}:4:10: error: cannot add 'b' to 'a': their dimensions differ "
-                        "[sum-mismatch]\n",
-                        file) +
-            "    4 |     c = a + b\n"
-            "      |         ~   ^\n"
-            "      note: 'b' is [T] (time)\n"
-            "      note: 'a' is [L] (length)\n"
-            "\n" +
-            tail("1 error, 0 warnings (1 formula in 1 file checked)");
-        CHECK(r.out == expected);
-    }
-
-    TEST_CASE("a 5000-character line is shown as a window with the underline in place") {
-        const temp_folder dir;
-        // Greek names before the finding, so byte and character offsets disagree thousands of
-        // times.
-        std::string formula = "@long c = ";
-        for (int i = 0; i < 600; ++i)
-            formula += "ρ*a + ";
-        formula += "b";
-        for (int i = 0; i < 250; ++i)
-            formula += " + ρ*a";
-        REQUIRE(code_points(formula) >= 4000);
-        REQUIRE(formula.size() >= 5000);
-        const auto file = dir.write("long.plumb", "ρ : 1\na : m\nb : s\nc : m\n" + formula + "\n");
-        const auto r = run_plumb({"check", "--color", "never", file});
-        CHECK(r.status == 1);
-
-        const auto lines = lines_of(r.out);
-        REQUIRE(lines.size() >= 3);
-        const std::size_t column = code_points(formula.substr(0, formula.find('b'))) + 1;
-        CHECK(lines[0] ==
-              fmt::format("{}:5:{}: error: 'b' does not have the dimension of the other "
-                          "terms of this sum [sum-mismatch]",
-                          file, column));
-        // No line of the report grows with the formula: the 800 other terms are not all listed.
-        for (const auto& line : lines) {
-            CAPTURE(line.substr(0, 200));
-            CHECK(code_points(line) < 400);
-        }
-        const std::string source = lines[1];
-        const std::string marks = lines[2];
-        REQUIRE(source.rfind("    5 | ", 0) == 0);
-        REQUIRE(marks.rfind("      | ", 0) == 0);
-        const std::string shown = source.substr(8);
-        const std::string under = marks.substr(8);
-        // Cut on both sides, marked with an ellipsis, and short enough for a terminal.
-        CHECK(shown.rfind("…", 0) == 0);
-        CHECK(shown.size() > 3);
-        CHECK(shown.substr(shown.size() - 3) == "…");
-        CHECK(code_points(shown) <= 150);
-        CHECK(code_points(under) <= 150);
-        // The '^' sits under the 'b', counting characters, not bytes.
-        const std::size_t caret = under.find('^');
-        REQUIRE(caret != std::string::npos);
-        REQUIRE(shown.find('b') != std::string::npos);
-        CHECK(caret == code_points(shown.substr(0, shown.find('b'))));
-        CHECK(count_of(under, "^") == 1);
-        // The other terms in the window are underlined as well, each '~' under part of a 'ρ*a'.
-        const auto shown_cells = split_code_points(shown);
-        CHECK(count_of(under.substr(0, caret), "~") >= 1);
-        for (std::size_t i = 0; i < caret; ++i)
-            if (under[i] == '~') {
-                CAPTURE(i);
-                REQUIRE(i < shown_cells.size());
-                CHECK((shown_cells[i] == "ρ" || shown_cells[i] == "*" || shown_cells[i] == "a"));
-            }
-    }
-
-    // --------------------------------------------------------------------------------------------
-    // Colour
-
-    TEST_CASE("colour: always, never, and auto on a pipe") {
-        const temp_folder dir;
-        const auto file = dir.write("side.plumb", side_file);
-        const auto always = run_plumb({"check", "--color", "always", file});
-        const auto never = run_plumb({"check", "--color", "never", file});
-        const auto automatic = run_plumb({"check", file});
-        const auto british = run_plumb({"check", "--colour=always", file});
-
-        CHECK(contains(always.out, "\x1b["));
-        CHECK(contains(always.out, "\x1b[1;31merror:\x1b[0m"));
-        CHECK(contains(always.out, "\x1b[0m"));
-        CHECK(always.out == british.out);
-        CHECK_FALSE(contains(never.out, "\x1b"));
-        CHECK_FALSE(contains(automatic.out, "\x1b")); // stdout is a pipe, not a terminal
-        CHECK(never.out == automatic.out);
-        CHECK(always.status == 1);
-        CHECK(never.status == 1);
-
-        // Colour changes nothing but the escapes.
-        std::string stripped;
-        for (std::size_t i = 0; i < always.out.size(); ++i) {
-            if (always.out[i] == '\x1b') {
-                i = always.out.find('m', i);
-                REQUIRE(i != std::string::npos);
-                continue;
-            }
-            stripped += always.out[i];
-        }
-        CHECK(stripped == never.out);
-
-        SUBCASE("NO_COLOR and TERM=dumb turn auto off; an explicit --color always wins") {
-            const auto no_colour =
-                run_plumb({"check", "--color", "auto", file}, {{"NO_COLOR", "1"}});
-            CHECK_FALSE(contains(no_colour.out, "\x1b"));
-            const auto dumb = run_plumb({"check", "--color", "auto", file}, {{"TERM", "dumb"}});
-            CHECK_FALSE(contains(dumb.out, "\x1b"));
-            const auto forced =
-                run_plumb({"check", "--color", "always", file}, {{"NO_COLOR", "1"}});
-            CHECK(contains(forced.out, "\x1b["));
-        }
-    }
-
-    // --------------------------------------------------------------------------------------------
-    // JSON
-
-    TEST_CASE("json: the report is valid JSON with every field") {
-        const temp_folder dir;
-        const auto file = dir.write("side.plumb", std::string(side_file) + "z : m \"unused\"\n");
+    SUBCASE("quotes, backslashes, control and invalid UTF-8 bytes") {
+        const auto file = dir.write("odd \"name\\.plumb",
+                                    "p : Pa \"a \\ \x01 and \xff\xfe bytes\"\nh : m\np = h\n");
         const auto r = run_plumb({"check", "--format", "json", file});
         CHECK(r.status == 1);
         const auto doc = parse_json(r.out);
         REQUIRE(doc);
-        REQUIRE(doc->is_object());
-        CHECK((*doc)["tool"].string() == "plumb");
-        CHECK((*doc)["version"].string() == plumb::version());
-        CHECK((*doc)["schema"].number() == 1);
-        CHECK((*doc)["caution"].string() == plumb::caution_text());
-
-        const auto& summary = (*doc)["summary"];
-        CHECK(summary["files_checked"].number() == 1);
-        CHECK(summary["formulas_checked"].number() == 1);
-        CHECK(summary["errors"].number() == 1);
-        CHECK(summary["warnings"].number() == 1);
-        CHECK(summary["input_failed"].boolean() == false);
-
-        const auto& findings = (*doc)["findings"].array();
-        REQUIRE(findings.size() == 2);
-        for (const auto& f : findings)
-            for (const char* key : {"file", "line", "column", "end_line", "end_column", "severity",
-                                    "rule", "message", "terms", "notes"}) {
-                CAPTURE(key);
-                CHECK(f.has(key));
-            }
-
-        const json* side = nullptr;
-        const json* unused = nullptr;
-        for (const auto& f : findings)
-            (f["rule"].string() == "side-mismatch" ? side : unused) = &f;
-        REQUIRE(side != nullptr);
-        REQUIRE(unused != nullptr);
-
-        CHECK((*side)["file"].string() == file);
-        CHECK((*side)["severity"].string() == "error");
-        CHECK((*side)["message"].string() == "the two sides of this equation differ in dimension");
-        // Columns count characters: "@hydrostatic Δp = " is 18 characters, 19 bytes.
-        CHECK((*side)["line"].number() == 5);
-        CHECK((*side)["column"].number() == 19);
-        CHECK((*side)["end_line"].number() == 5);
-        CHECK((*side)["end_column"].number() == 22);
-
-        const auto& terms = (*side)["terms"].array();
-        REQUIRE(terms.size() == 2);
-        CHECK(terms[0]["text"].string() == "Δp");
-        CHECK(terms[0]["column"].number() == 14);
-        CHECK(terms[0]["end_column"].number() == 16);
-        CHECK(terms[0]["dimension"].string() == "[M L^-1 T^-2]");
-        CHECK(terms[0]["quantity"].string() == "pressure or stress");
-        const auto& p = terms[0]["exponents"];
-        CHECK(p.object().size() == 7);
-        CHECK(p["mass"].string() == "1");
-        CHECK(p["length"].string() == "-1");
-        CHECK(p["time"].string() == "-2");
-        for (const char* base : {"temperature", "amount", "current", "luminous_intensity"})
-            CHECK(p[base].string() == "0");
-        CHECK(terms[1]["text"].string() == "ρ*h");
-        CHECK(terms[1]["dimension"].string() == "[M L^-2]");
-        CHECK(terms[1]["exponents"]["length"].string() == "-2");
-
-        const auto& notes = (*side)["notes"].array();
-        REQUIRE(notes.size() == 2);
-        CHECK(notes[0]["message"].string() ==
-              "left side 'Δp' (pressure difference) is [M L^-1 T^-2] (pressure or stress)");
-        CHECK(notes[1]["message"].string() == "right side 'ρ*h' is [M L^-2] (areal density)");
-
-        CHECK((*unused)["severity"].string() == "warning");
-        CHECK((*unused)["line"].number() == 6);
-        CHECK((*unused)["column"].number() == 1);
-        CHECK((*unused)["terms"].array().empty());
+        REQUIRE_FALSE((*doc)["findings"].array().empty());
+        CHECK((*doc)["findings"].array()[0]["file"].string() == file);
     }
+}
 
-    TEST_CASE("json: a clean run, an unreadable path and awkward bytes stay valid JSON") {
-        const temp_folder dir;
-        SUBCASE("clean") {
-            const auto r = run_plumb({"check", "--format=json", dir.write("ok.plumb", clean_file)});
-            CHECK(r.status == 0);
-            const auto doc = parse_json(r.out);
-            REQUIRE(doc);
-            CHECK((*doc)["findings"].array().empty());
-            CHECK((*doc)["summary"]["errors"].number() == 0);
-        }
-        SUBCASE("unreadable") {
-            const auto r = run_plumb({"check", "--format", "json", dir.path("missing.plumb")});
-            CHECK(r.status == 2);
-            const auto doc = parse_json(r.out);
-            REQUIRE(doc);
-            CHECK((*doc)["summary"]["input_failed"].boolean() == true);
-            REQUIRE((*doc)["findings"].array().size() == 1);
-            const auto& f = (*doc)["findings"].array()[0];
-            CHECK(f["rule"].string() == "unreadable");
-            CHECK_FALSE(f.has("line")); // no place in a file
-        }
-        SUBCASE("quotes, backslashes, control and invalid UTF-8 bytes") {
-            const auto file = dir.write("odd \"name\\.plumb",
-                                        "p : Pa \"a \\ \x01 and \xff\xfe bytes\"\nh : m\np = h\n");
-            const auto r = run_plumb({"check", "--format", "json", file});
-            CHECK(r.status == 1);
-            const auto doc = parse_json(r.out);
-            REQUIRE(doc);
-            REQUIRE_FALSE((*doc)["findings"].array().empty());
-            CHECK((*doc)["findings"].array()[0]["file"].string() == file);
-        }
-    }
+// --------------------------------------------------------------------------------------------
+// dim, units, rules
 
-    // --------------------------------------------------------------------------------------------
-    // dim, units, rules
-
-    TEST_CASE("dim: the dimension of an expression against a file's symbols") {
-        const temp_folder dir;
-        const auto dict = dir.write("fluids.plumb", "rho : kg/m^3 \"fluid density\"\n"
-                                                    "mu : Pa*s \"dynamic viscosity\"\n"
-                                                    "V : m/s\n"
-                                                    "D : m\n"
-                                                    "g : m/s^2\n"
-                                                    "h : m\n"
-                                                    "ρ : kg/m^3\n");
-        SUBCASE("Reynolds number") {
-            const auto r = run_plumb({"dim", "rho*V*D/mu", dict});
-            CHECK(r.status == 0);
-            CHECK(r.out == "[1] (dimensionless)\n");
-            CHECK(r.err.empty());
-        }
-        SUBCASE("a pressure") {
-            const auto r = run_plumb({"dim", "ρ*g*h", dict});
-            CHECK(r.status == 0);
-            CHECK(r.out == "[M L^-1 T^-2] (pressure or stress)\n");
-        }
-        SUBCASE("a dimension without a common name") {
-            const auto r = run_plumb({"dim", "rho*g^3", dict});
-            CHECK(r.status == 0);
-            CHECK(r.out == "[M T^-6]\n");
-        }
-        SUBCASE("an inconsistent expression exits 1 and shows the finding") {
-            const auto r = run_plumb({"dim", "--color", "never", "rho*g*h + D", dict});
-            CHECK(r.status == 1);
-            CHECK(contains(r.out, "<query>:1:11: error: "));
-            CHECK(contains(r.out, "[sum-mismatch]"));
-            CHECK(contains(r.out, "    1 | rho*g*h + D\n"));
-        }
-        SUBCASE("without a file only numbers and built-ins are known") {
-            const auto r = run_plumb({"dim", "2*pi"});
-            CHECK(r.status == 0);
-            CHECK(r.out == "[1] (dimensionless)\n");
-            const auto u = run_plumb({"dim", "rho"});
-            CHECK(u.status == 1);
-            CHECK(contains(u.out, "[undeclared]"));
-        }
-        SUBCASE("--dict gives the symbols too") {
-            const auto r = run_plumb({"dim", "--dict", dict, "mu/rho"});
-            CHECK(r.status == 0);
-            CHECK(r.out == "[L^2 T^-1] (kinematic viscosity or diffusivity)\n");
-        }
-    }
-
-    TEST_CASE("units: the table, and a filter on symbol or name") {
-        const auto all = run_plumb({"units"});
-        CHECK(all.status == 0);
-        CHECK(contains(all.out, "\nprefixes: "));
-        CHECK(contains(all.out, "k (kilo, 1e3)"));
-
-        const auto pa = run_plumb({"units", "Pa"});
-        CHECK(pa.status == 0);
-        const auto rows = lines_of(pa.out);
-        REQUIRE_FALSE(rows.empty());
-        bool pascal_row = false;
-        for (const auto& row : rows) {
-            CAPTURE(row);
-            CHECK(contains(row, "Pa"));
-            if (row.rfind("Pa ", 0) == 0) {
-                pascal_row = true;
-                CHECK(contains(row, "pascal"));
-                CHECK(contains(row, "[M L^-1 T^-2]"));
-                CHECK(contains(row, "takes SI prefixes"));
-            }
-        }
-        CHECK(pascal_row);
-        CHECK_FALSE(
-            contains(pa.out, "prefixes: ")); // the prefix list only comes with the full table
-        CHECK(rows.size() < lines_of(all.out).size());
-
-        const auto by_name = run_plumb({"units", "pascal"});
-        CHECK(by_name.status == 0);
-        CHECK(contains(by_name.out, "Pa "));
-    }
-
-    TEST_CASE("rules: every rule id is listed with its summary") {
-        const auto r = run_plumb({"rules"});
+TEST_CASE("dim: the dimension of an expression against a file's symbols") {
+    const temp_folder dir;
+    const auto dict = dir.write("fluids.plumb", "rho : kg/m^3 \"fluid density\"\n"
+                                                "mu : Pa*s \"dynamic viscosity\"\n"
+                                                "V : m/s\n"
+                                                "D : m\n"
+                                                "g : m/s^2\n"
+                                                "h : m\n"
+                                                "ρ : kg/m^3\n");
+    SUBCASE("Reynolds number") {
+        const auto r = run_plumb({"dim", "rho*V*D/mu", dict});
         CHECK(r.status == 0);
-        const auto rows = lines_of(r.out);
-        CHECK(rows.size() == plumb::rules::all().size());
-        for (const auto& rule : plumb::rules::all()) {
-            CAPTURE(rule.id);
-            const auto row = std::find_if(rows.begin(), rows.end(), [&](const std::string& line) {
-                return line.rfind(std::string(rule.id) + " ", 0) == 0;
-            });
-            REQUIRE(row != rows.end());
-            CHECK(contains(*row, rule.summary));
+        CHECK(r.out == "[1] (dimensionless)\n");
+        CHECK(r.err.empty());
+    }
+    SUBCASE("a pressure") {
+        const auto r = run_plumb({"dim", "ρ*g*h", dict});
+        CHECK(r.status == 0);
+        CHECK(r.out == "[M L^-1 T^-2] (pressure or stress)\n");
+    }
+    SUBCASE("a dimension without a common name") {
+        const auto r = run_plumb({"dim", "rho*g^3", dict});
+        CHECK(r.status == 0);
+        CHECK(r.out == "[M T^-6]\n");
+    }
+    SUBCASE("an inconsistent expression exits 1 and shows the finding") {
+        const auto r = run_plumb({"dim", "--color", "never", "rho*g*h + D", dict});
+        CHECK(r.status == 1);
+        CHECK(contains(r.out, "<query>:1:11: error: "));
+        CHECK(contains(r.out, "[sum-mismatch]"));
+        CHECK(contains(r.out, "    1 | rho*g*h + D\n"));
+    }
+    SUBCASE("without a file only numbers and built-ins are known") {
+        const auto r = run_plumb({"dim", "2*pi"});
+        CHECK(r.status == 0);
+        CHECK(r.out == "[1] (dimensionless)\n");
+        const auto u = run_plumb({"dim", "rho"});
+        CHECK(u.status == 1);
+        CHECK(contains(u.out, "[undeclared]"));
+    }
+    SUBCASE("--dict gives the symbols too") {
+        const auto r = run_plumb({"dim", "--dict", dict, "mu/rho"});
+        CHECK(r.status == 0);
+        CHECK(r.out == "[L^2 T^-1] (kinematic viscosity or diffusivity)\n");
+    }
+}
+
+TEST_CASE("units: the table, and a filter on symbol or name") {
+    const auto all = run_plumb({"units"});
+    CHECK(all.status == 0);
+    CHECK(contains(all.out, "\nprefixes: "));
+    CHECK(contains(all.out, "k (kilo, 1e3)"));
+
+    const auto pa = run_plumb({"units", "Pa"});
+    CHECK(pa.status == 0);
+    const auto rows = lines_of(pa.out);
+    REQUIRE_FALSE(rows.empty());
+    bool pascal_row = false;
+    for (const auto& row : rows) {
+        CAPTURE(row);
+        CHECK(contains(row, "Pa"));
+        if (row.rfind("Pa ", 0) == 0) {
+            pascal_row = true;
+            CHECK(contains(row, "pascal"));
+            CHECK(contains(row, "[M L^-1 T^-2]"));
+            CHECK(contains(row, "takes SI prefixes"));
         }
-        for (const auto id : {plumb::rules::sum_mismatch, plumb::rules::side_mismatch,
-                              plumb::rules::unreadable, plumb::rules::include_cycle})
-            CHECK(contains(r.out, id));
     }
+    CHECK(pascal_row);
+    CHECK_FALSE(contains(pa.out, "prefixes: ")); // the prefix list only comes with the full table
+    CHECK(rows.size() < lines_of(all.out).size());
 
-    // --------------------------------------------------------------------------------------------
-    // Inputs: dictionaries, folders, line endings, byte order mark
+    const auto by_name = run_plumb({"units", "pascal"});
+    CHECK(by_name.status == 0);
+    CHECK(contains(by_name.out, "Pa "));
+}
 
-    TEST_CASE("--dict supplies declarations to every checked file") {
-        const temp_folder dir;
-        const auto dict = dir.write("dict/fluids.plumb", "ρ : kg/m^3\nV : m/s\nD : m\n");
-        const auto a = dir.write("a.plumb", "G : [M L^-2 T^-1]\nG = ρ*V\n");
-        const auto b = dir.write("b.plumb", "x : [M L^-1 T^-1]\nx = ρ*V*D\n");
-
-        const auto without = run_plumb({"check", a, b});
-        CHECK(without.status == 1);
-        CHECK(contains(without.out, "'ρ' is not declared [undeclared]"));
-
-        const auto with = run_plumb({"check", "--dict", dict, a, b});
-        CHECK(with.status == 0);
-        CHECK(contains(with.out, "2 formulas in 2 files: no dimensional inconsistency found"));
-        // A dictionary's symbols are never unused.
-        CHECK_FALSE(contains(with.out, "[unused]"));
-
-        const auto equals_form = run_plumb({"check", "--dict=" + dict, a});
-        CHECK(equals_form.status == 0);
-
-        const auto wrong = run_plumb({"check", "--dict", dict, dir.write("c.plumb", "D = ρ*V\n")});
-        CHECK(wrong.status == 1);
-        CHECK(contains(wrong.out, "[side-mismatch]"));
+TEST_CASE("rules: every rule id is listed with its summary") {
+    const auto r = run_plumb({"rules"});
+    CHECK(r.status == 0);
+    const auto rows = lines_of(r.out);
+    CHECK(rows.size() == plumb::rules::all().size());
+    for (const auto& rule : plumb::rules::all()) {
+        CAPTURE(rule.id);
+        const auto row = std::find_if(rows.begin(), rows.end(), [&](const std::string& line) {
+            return line.rfind(std::string(rule.id) + " ", 0) == 0;
+        });
+        REQUIRE(row != rows.end());
+        CHECK(contains(*row, rule.summary));
     }
+    for (const auto id : {plumb::rules::sum_mismatch, plumb::rules::side_mismatch,
+                          plumb::rules::unreadable, plumb::rules::include_cycle})
+        CHECK(contains(r.out, id));
+}
 
-    TEST_CASE("a folder is searched recursively for *.plumb files only") {
-        const temp_folder dir;
-        (void)dir.write("tree/top.plumb", clean_file);
-        (void)dir.write("tree/deep/er/side.plumb", side_file);
-        (void)dir.write("tree/notes.txt", "this is (( not a plumb file\n");
-        (void)dir.write("tree/deep/broken.plumb.bak", "a = = =\n");
-        (void)dir.write("tree/README", "x = (\n");
+// --------------------------------------------------------------------------------------------
+// Inputs: dictionaries, folders, line endings, byte order mark
 
-        const auto r = run_plumb({"check", "--color", "never", dir.path("tree")});
-        CHECK(r.status ==
-              1); // the side mismatch; the other files would have been syntax errors (2)
-        CHECK(contains(r.out, "(2 formulas in 2 files checked)"));
-        CHECK(contains(r.out, fmt::format("{}:5:19: error:", dir.path("tree/deep/er/side.plumb"))));
-        CHECK_FALSE(contains(r.out, "[syntax]"));
+TEST_CASE("--dict supplies declarations to every checked file") {
+    const temp_folder dir;
+    const auto dict = dir.write("dict/fluids.plumb", "ρ : kg/m^3\nV : m/s\nD : m\n");
+    const auto a = dir.write("a.plumb", "G : [M L^-2 T^-1]\nG = ρ*V\n");
+    const auto b = dir.write("b.plumb", "x : [M L^-1 T^-1]\nx = ρ*V*D\n");
 
-        const auto clean_only = run_plumb({"check", dir.write("clean/a/b/c.plumb", clean_file)});
-        CHECK(clean_only.status == 0);
-        const auto empty = run_plumb({"check", dir.path("clean")});
-        CHECK(empty.status == 0);
-        CHECK(contains(empty.out, "1 formula in 1 file"));
-    }
+    const auto without = run_plumb({"check", a, b});
+    CHECK(without.status == 1);
+    CHECK(contains(without.out, "'ρ' is not declared [undeclared]"));
 
-    TEST_CASE("CRLF line endings give the same findings as LF") {
-        const temp_folder dir;
-        const std::string lf =
-            std::string(sum_file) + "L : m\n" + "@cont L = \\\n    H + \\\n  V\n";
-        std::string crlf;
-        for (const char c : lf)
-            crlf += c == '\n' ? std::string("\r\n") : std::string(1, c);
+    const auto with = run_plumb({"check", "--dict", dict, a, b});
+    CHECK(with.status == 0);
+    CHECK(contains(with.out, "2 formulas in 2 files: no dimensional inconsistency found"));
+    // A dictionary's symbols are never unused.
+    CHECK_FALSE(contains(with.out, "[unused]"));
 
-        const auto lf_run = run_plumb({"check", "--color", "never", dir.write("lf/f.plumb", lf)});
-        const auto crlf_run =
-            run_plumb({"check", "--color", "never", dir.write("crlf/f.plumb", crlf)});
-        CHECK(lf_run.status == 1);
-        CHECK(crlf_run.status == lf_run.status);
-        CHECK(count_of(lf_run.out, " error: ") == 2);
-        CHECK_FALSE(contains(crlf_run.out, "\r"));
+    const auto equals_form = run_plumb({"check", "--dict=" + dict, a});
+    CHECK(equals_form.status == 0);
 
-        // The same text once the folder names are made equal.
-        std::string normalised = crlf_run.out;
-        const std::string from = dir.path("crlf");
-        const std::string to = dir.path("lf");
-        for (auto at = normalised.find(from); at != std::string::npos;
-             at = normalised.find(from, at))
-            normalised.replace(at, from.size(), to);
-        CHECK(normalised == lf_run.out);
+    const auto wrong = run_plumb({"check", "--dict", dict, dir.write("c.plumb", "D = ρ*V\n")});
+    CHECK(wrong.status == 1);
+    CHECK(contains(wrong.out, "[side-mismatch]"));
+}
 
-        const auto lf_json = run_plumb({"check", "--format", "json", dir.path("lf/f.plumb")});
-        const auto crlf_json = run_plumb({"check", "--format", "json", dir.path("crlf/f.plumb")});
-        const auto a = parse_json(lf_json.out);
-        const auto b = parse_json(crlf_json.out);
-        REQUIRE(a);
-        REQUIRE(b);
-        const auto& fa = (*a)["findings"].array();
-        const auto& fb = (*b)["findings"].array();
-        REQUIRE(fa.size() == fb.size());
-        for (std::size_t i = 0; i < fa.size(); ++i)
-            for (const char* key : {"line", "column", "end_line", "end_column"})
-                CHECK(fa[i][key].number() == fb[i][key].number());
-    }
+TEST_CASE("a folder is searched recursively for *.plumb files only") {
+    const temp_folder dir;
+    (void)dir.write("tree/top.plumb", clean_file);
+    (void)dir.write("tree/deep/er/side.plumb", side_file);
+    (void)dir.write("tree/notes.txt", "this is (( not a plumb file\n");
+    (void)dir.write("tree/deep/broken.plumb.bak", "a = = =\n");
+    (void)dir.write("tree/README", "x = (\n");
 
-    TEST_CASE("a file that starts with a UTF-8 byte order mark parses") {
-        const temp_folder dir;
-        const std::string bom = "\xEF\xBB\xBF";
-        const auto clean =
-            run_plumb({"check", dir.write("bom.plumb", bom + std::string(clean_file))});
-        CHECK(clean.status == 0);
-        CHECK(contains(clean.out, "1 formula in 1 file: no dimensional inconsistency found"));
+    const auto r = run_plumb({"check", "--color", "never", dir.path("tree")});
+    // The side mismatch; the other files would have been syntax errors (status 2).
+    CHECK(r.status == 1);
+    CHECK(contains(r.out, "(2 formulas in 2 files checked)"));
+    CHECK(contains(r.out, fmt::format("{}:5:19: error:", dir.path("tree/deep/er/side.plumb"))));
+    CHECK_FALSE(contains(r.out, "[syntax]"));
 
-        const auto with_error =
-            run_plumb({"check", "--color", "never",
-                       dir.write("bom-side.plumb", bom + std::string(side_file))});
-        CHECK(with_error.status == 1);
-        CHECK(contains(with_error.out, ":5:19: error: the two sides of this equation differ"));
-    }
+    const auto clean_only = run_plumb({"check", dir.write("clean/a/b/c.plumb", clean_file)});
+    CHECK(clean_only.status == 0);
+    const auto nested = run_plumb({"check", dir.path("clean")});
+    CHECK(nested.status == 0);
+    CHECK(contains(nested.out, "1 formula in 1 file"));
+}
 
-} // TEST_SUITE
+TEST_CASE("CRLF line endings give the same findings as LF") {
+    const temp_folder dir;
+    const std::string lf = std::string(sum_file) + "L : m\n" + "@cont L = \\\n    H + \\\n  V\n";
+    std::string crlf;
+    for (const char c : lf)
+        crlf += c == '\n' ? std::string("\r\n") : std::string(1, c);
+
+    const auto lf_run = run_plumb({"check", "--color", "never", dir.write("lf/f.plumb", lf)});
+    const auto crlf_run = run_plumb({"check", "--color", "never", dir.write("crlf/f.plumb", crlf)});
+    CHECK(lf_run.status == 1);
+    CHECK(crlf_run.status == lf_run.status);
+    CHECK(count_of(lf_run.out, " error: ") == 2);
+    CHECK_FALSE(contains(crlf_run.out, "\r"));
+
+    // The same text once the folder names are made equal.
+    std::string normalised = crlf_run.out;
+    const std::string from = dir.path("crlf");
+    const std::string to = dir.path("lf");
+    for (auto at = normalised.find(from); at != std::string::npos; at = normalised.find(from, at))
+        normalised.replace(at, from.size(), to);
+    CHECK(normalised == lf_run.out);
+
+    const auto lf_json = run_plumb({"check", "--format", "json", dir.path("lf/f.plumb")});
+    const auto crlf_json = run_plumb({"check", "--format", "json", dir.path("crlf/f.plumb")});
+    const auto a = parse_json(lf_json.out);
+    const auto b = parse_json(crlf_json.out);
+    REQUIRE(a);
+    REQUIRE(b);
+    const auto& fa = (*a)["findings"].array();
+    const auto& fb = (*b)["findings"].array();
+    REQUIRE(fa.size() == fb.size());
+    for (std::size_t i = 0; i < fa.size(); ++i)
+        for (const char* key : {"line", "column", "end_line", "end_column"})
+            CHECK(fa[i][key].number() == fb[i][key].number());
+}
+
+TEST_CASE("a file that starts with a UTF-8 byte order mark parses") {
+    const temp_folder dir;
+    const std::string bom = "\xEF\xBB\xBF";
+    const auto clean = run_plumb({"check", dir.write("bom.plumb", bom + std::string(clean_file))});
+    CHECK(clean.status == 0);
+    CHECK(contains(clean.out, "1 formula in 1 file: no dimensional inconsistency found"));
+
+    const auto with_error = run_plumb(
+        {"check", "--color", "never", dir.write("bom-side.plumb", bom + std::string(side_file))});
+    CHECK(with_error.status == 1);
+    CHECK(contains(with_error.out, ":5:19: error: the two sides of this equation differ"));
+}
+
+TEST_SUITE_END();

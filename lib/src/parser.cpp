@@ -8,6 +8,7 @@
 #include "plumb/rules.hpp"
 
 #include <cmath>
+#include <cstdlib>
 #include <cstring>
 #include <fmt/core.h>
 
@@ -96,6 +97,16 @@ struct parse_state {
     std::vector<unit_value> units;
     span pending_use_path{};
 
+    // Study and case under construction.
+    span pending_study_name{}, pending_dependent{};
+    std::uint32_t line_first_study_name = 0;
+    std::uint32_t pending_repeating_count = 0;
+    std::uint32_t line_first_case_value = 0;
+    bool pending_is_model = false;
+    std::optional<double> pending_scale;
+    span pending_scale_text{};
+    std::optional<unit_value> pending_value_unit;
+
     [[nodiscard]] span range(const char* b, const char* e) const {
         return {static_cast<std::uint32_t>(b - file_begin),
                 static_cast<std::uint32_t>(e - file_begin)};
@@ -134,6 +145,13 @@ struct parse_state {
         bracket_dimension = {};
         pending_exponent.reset();
         units.clear();
+        pending_study_name = pending_dependent = pending_scale_text = {};
+        line_first_study_name = static_cast<std::uint32_t>(out.study_names.size());
+        pending_repeating_count = 0;
+        line_first_case_value = static_cast<std::uint32_t>(out.case_values.size());
+        pending_is_model = false;
+        pending_scale.reset();
+        pending_value_unit.reset();
     }
     void report(std::string_view rule, std::string message, span where) {
         diagnostic d;
@@ -327,6 +345,7 @@ template <> struct action<nt::unit_symbol> {
                 for (std::size_t i = 0; i < near.size(); ++i)
                     message += fmt::format(
                         "{}'{}'", i == 0 ? "" : (i + 1 == near.size() ? " or " : ", "), near[i]);
+                message += "?";
             }
             s.report(rules::unknown_unit, message, s.range(in));
             diagnostic& d = s.out.diagnostics.back();
@@ -437,6 +456,106 @@ template <> struct action<nt::use_statement> {
     }
 };
 
+// --- Studies ---
+template <> struct action<nt::study_name> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_study_name = s.range(in);
+    }
+};
+template <> struct action<nt::study_dependent> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_dependent = s.range(in);
+    }
+};
+template <> struct action<nt::study_variable> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.out.study_names.push_back(s.range(in));
+    }
+};
+template <> struct action<nt::repeating_variable> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.out.study_names.push_back(s.range(in));
+        ++s.pending_repeating_count;
+    }
+};
+template <> struct action<nt::study_statement> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const auto total =
+            static_cast<std::uint32_t>(s.out.study_names.size()) - s.line_first_study_name;
+        s.out.studies.push_back({s.range(in), s.pending_study_name, s.pending_dependent,
+                                 s.line_first_study_name, total - s.pending_repeating_count,
+                                 s.pending_repeating_count});
+    }
+};
+
+// --- Prototype and model values ---
+template <> struct action<nt::model_keyword> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.pending_is_model = true;
+    }
+};
+template <> struct action<nt::scale_value> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const std::string text(in.string_view());
+        s.pending_scale_text = s.range(in);
+        const auto colon = text.find(':');
+        if (colon == std::string::npos) {
+            s.pending_scale = std::strtod(text.c_str(), nullptr);
+            return;
+        }
+        const double model = std::strtod(text.substr(0, colon).c_str(), nullptr);
+        const double prototype = std::strtod(text.substr(colon + 1).c_str(), nullptr);
+        s.pending_scale = prototype > 0 ? model / prototype : 0.0;
+    }
+};
+template <> struct action<nt::value_unit> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.pending_value_unit = s.units.back();
+        s.units.pop_back();
+    }
+};
+template <> struct action<nt::value_assignment> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        // The name is the text before '='; the quantity follows it.
+        const std::string_view text = in.string_view();
+        const std::size_t eq = text.find('=');
+        std::size_t name_end = eq;
+        while (name_end > 0 && (text[name_end - 1] == ' ' || text[name_end - 1] == '\t'))
+            --name_end;
+        std::size_t value_begin = eq + 1;
+        while (value_begin < text.size() && (text[value_begin] == ' ' || text[value_begin] == '\t'))
+            ++value_begin;
+        const span whole = s.range(in);
+        syntax::case_value v;
+        v.name = {whole.begin, whole.begin + static_cast<std::uint32_t>(name_end)};
+        v.value = {whole.begin + static_cast<std::uint32_t>(value_begin), whole.end};
+        const double number = std::strtod(std::string(text.substr(value_begin)).c_str(), nullptr);
+        if (s.pending_value_unit) {
+            v.has_unit = true;
+            if (s.pending_value_unit->ok) {
+                v.dim = s.pending_value_unit->dim;
+                const unit_definition* single = s.pending_value_unit->single;
+                v.si_value =
+                    number * s.pending_value_unit->factor + (single ? single->offset : 0.0);
+            }
+        } else {
+            v.dim = dimension{};
+            v.si_value = number;
+        }
+        s.pending_value_unit.reset();
+        s.out.case_values.push_back(v);
+    }
+};
+template <> struct action<nt::case_statement> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const auto count =
+            static_cast<std::uint32_t>(s.out.case_values.size()) - s.line_first_case_value;
+        s.out.cases.push_back({s.range(in), s.pending_study_name, s.pending_is_model,
+                               s.pending_scale, s.pending_scale_text, s.line_first_case_value,
+                               count});
+    }
+};
+
 // The end of the logical line starting at `begin`: physical lines whose last character
 // before any comment is '\' continue onto the next. Quotes shield '#' inside descriptions.
 std::size_t logical_line_end(std::string_view text, std::size_t begin) {
@@ -469,11 +588,14 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin) {
 
 // Rolls back whatever a failed line added, so the tree holds only complete statements.
 struct tree_mark {
-    std::size_t nodes, call_args, sides, formulas, declarations, names, uses, diagnostics;
+    std::size_t nodes, call_args, sides, formulas, declarations, names, uses, studies, study_names,
+        cases, case_values, diagnostics;
     explicit tree_mark(const syntax::parsed_file& f)
         : nodes(f.nodes.size()), call_args(f.call_args.size()), sides(f.sides.size()),
           formulas(f.formulas.size()), declarations(f.declarations.size()), names(f.names.size()),
-          uses(f.uses.size()), diagnostics(f.diagnostics.size()) {}
+          uses(f.uses.size()), studies(f.studies.size()), study_names(f.study_names.size()),
+          cases(f.cases.size()), case_values(f.case_values.size()),
+          diagnostics(f.diagnostics.size()) {}
     void restore(syntax::parsed_file& f) const {
         f.nodes.resize(nodes);
         f.call_args.resize(call_args);
@@ -482,6 +604,10 @@ struct tree_mark {
         f.declarations.resize(declarations);
         f.names.resize(names);
         f.uses.resize(uses);
+        f.studies.resize(studies);
+        f.study_names.resize(study_names);
+        f.cases.resize(cases);
+        f.case_values.resize(case_values);
         f.diagnostics.resize(diagnostics);
     }
 };
@@ -535,9 +661,6 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
     parse_state state(file, out);
 
     std::size_t begin = 0;
-    // A byte-order mark at the start is an editor's artefact, not part of the first line.
-    if (text.substr(0, 3) == "\xEF\xBB\xBF")
-        begin = 3;
     std::size_t syntax_errors = 0;
     while (begin <= text.size()) {
         const std::size_t end = logical_line_end(text, begin);

@@ -5,8 +5,10 @@
 #include "parser.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
+#include "studies.hpp"
 
 #include <algorithm>
+#include <array>
 #include <fmt/format.h>
 #include <fstream>
 #include <limits>
@@ -31,7 +33,7 @@ std::vector<std::string_view> symbol_table::nearest(std::string_view name,
     // "h_f").
     const std::size_t max_distance = std::min<std::size_t>(3, name.size() / 3);
     std::vector<std::pair<std::size_t, std::string_view>> scored;
-    for (const auto& [candidate, entry] : entries_) {
+    for (const std::string_view candidate : names_) {
         if (candidate.size() > name.size() && candidate.substr(0, name.size()) == name &&
             candidate[name.size()] == '_') {
             scored.emplace_back(candidate.size() - name.size(), candidate);
@@ -55,6 +57,35 @@ std::vector<std::string_view> symbol_table::nearest(std::string_view name,
             scored.emplace_back(d, candidate);
     }
     std::sort(scored.begin(), scored.end());
+    // "rho" for "ρ", "mu" for "μ", and the other way round: the ASCII spelling of a Greek
+    // letter is the commonest near miss of all.
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 31> greek = {{
+        {"alpha", "\u03B1"},   {"beta", "\u03B2"},   {"gamma", "\u03B3"},   {"delta", "\u03B4"},
+        {"epsilon", "\u03B5"}, {"zeta", "\u03B6"},   {"eta", "\u03B7"},     {"theta", "\u03B8"},
+        {"kappa", "\u03BA"},   {"lambda", "\u03BB"}, {"mu", "\u03BC"},      {"nu", "\u03BD"},
+        {"xi", "\u03BE"},      {"rho", "\u03C1"},    {"sigma", "\u03C3"},   {"tau", "\u03C4"},
+        {"phi", "\u03C6"},     {"chi", "\u03C7"},    {"psi", "\u03C8"},     {"omega", "\u03C9"},
+        {"Gamma", "\u0393"},   {"Delta", "\u0394"},  {"Theta", "\u0398"},   {"Lambda", "\u039B"},
+        {"Sigma", "\u03A3"},   {"Phi", "\u03A6"},    {"Psi", "\u03A8"},     {"Omega", "\u03A9"},
+        {"upsilon", "\u03C5"}, {"iota", "\u03B9"},   {"omicron", "\u03BF"},
+    }};
+    const std::size_t stem_end = std::min(name.find('_'), name.size());
+    const std::string_view stem = name.substr(0, stem_end);
+    const std::string_view rest = name.substr(stem_end);
+    for (const auto& [ascii, letter] : greek) {
+        std::string other;
+        if (stem == ascii)
+            other = std::string(letter) + std::string(rest);
+        else if (stem == letter)
+            other = std::string(ascii) + std::string(rest);
+        else
+            continue;
+        const auto it = std::find(names_.begin(), names_.end(), other);
+        if (it != names_.end()) {
+            std::erase_if(scored, [&](const auto& p) { return p.second == *it; });
+            scored.insert(scored.begin(), {0, *it});
+        }
+    }
     std::vector<std::string_view> out;
     for (std::size_t i = 0; i < scored.size() && i < limit; ++i)
         out.push_back(scored[i].second);
@@ -179,7 +210,8 @@ class session {
         // Formulas that named a symbol declared further down are checked now, against all.
         for (const auto& formula : tree.formulas)
             check_formula(tree, formula, table, f->diagnostics, false);
-        const std::size_t formulas = reader.formulas;
+        // PENDING: work_out_studies(tree, table, f->diagnostics, report_.studies);
+        const std::size_t formulas = reader.formulas + tree.studies.size();
         if (f->parsed)
             tree.diagnostics.clear(); // reported when the file was read as a dictionary
         else
@@ -384,11 +416,8 @@ class session {
                     at);
                 d.terms.push_back({at, std::string(name), *entry.dim});
                 d.terms.push_back({existing->declared_at, std::string(name), *existing->dim});
-                const line_column first =
-                    existing->declared_at.file->position(existing->declared_at.range.begin);
-                d.notes.push_back({fmt::format("'{}' is first declared at {}:{}:{} as {}", name,
-                                               existing->declared_at.file->path(), first.line,
-                                               first.column, existing->dim->to_string()),
+                d.notes.push_back({fmt::format("'{}' is first declared here, as {}", name,
+                                               existing->dim->to_string()),
                                    existing->declared_at});
                 f->diagnostics.push_back(std::move(d));
                 continue;

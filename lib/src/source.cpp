@@ -8,6 +8,10 @@ namespace plumb {
 
 source_file::source_file(std::string path, std::string text)
     : path_(std::move(path)), text_(std::move(text)) {
+    // A byte-order mark is an editor's artefact: dropping it keeps columns and the shown line
+    // as the engineer sees them.
+    if (text_.compare(0, 3, "\xEF\xBB\xBF") == 0)
+        text_.erase(0, 3);
     line_starts_.push_back(0);
     const char* data = text_.data();
     const char* end = data + text_.size();

@@ -4,9 +4,9 @@
 #include "plumb/diagnostic.hpp"
 #include "plumb/dimension.hpp"
 
+#include <cstdint>
 #include <optional>
 #include <string_view>
-#include <unordered_map>
 #include <vector>
 
 namespace plumb {
@@ -19,27 +19,65 @@ struct symbol_entry {
     bool used = false;
 };
 
+// Names to entries. Look-up is the hottest operation of a check (every symbol of every
+// formula), so this is a flat open-addressing table with a cheap hash rather than a node-based
+// map; names are views into source files that outlive the table.
 class symbol_table {
   public:
     [[nodiscard]] symbol_entry* find(std::string_view name) {
-        const auto it = entries_.find(name);
-        return it == entries_.end() ? nullptr : &it->second;
+        if (slots_.empty())
+            return nullptr;
+        for (std::size_t i = hash(name) & mask();; i = (i + 1) & mask()) {
+            const std::uint32_t slot = slots_[i];
+            if (slot == empty_slot)
+                return nullptr;
+            if (names_[slot] == name)
+                return &entries_[slot];
+        }
     }
     // Inserts, or returns the entry already there (second = false).
     std::pair<symbol_entry*, bool> insert(std::string_view name, const symbol_entry& entry) {
-        auto [it, inserted] = entries_.try_emplace(name, entry);
-        return {&it->second, inserted};
+        if (symbol_entry* existing = find(name))
+            return {existing, false};
+        if ((names_.size() + 1) * 2 > slots_.size())
+            grow();
+        names_.push_back(name);
+        entries_.push_back(entry);
+        place(static_cast<std::uint32_t>(names_.size() - 1));
+        return {&entries_.back(), true};
     }
     // Declared names closest to `name`, for "did you mean".
     [[nodiscard]] std::vector<std::string_view> nearest(std::string_view name,
                                                         std::size_t limit = 3) const;
 
-    [[nodiscard]] const std::unordered_map<std::string_view, symbol_entry>& entries() const {
-        return entries_;
-    }
-
   private:
-    std::unordered_map<std::string_view, symbol_entry> entries_;
+    static constexpr std::uint32_t empty_slot = 0xFFFFFFFFU;
+    std::vector<std::string_view> names_;
+    std::vector<symbol_entry> entries_; // parallel to names_; never shrinks, so pointers into
+                                        // it stay valid only until the next insert
+    std::vector<std::uint32_t> slots_;
+
+    [[nodiscard]] std::size_t mask() const { return slots_.size() - 1; }
+
+    static std::size_t hash(std::string_view s) {
+        std::uint64_t h = 1469598103934665603ULL; // FNV-1a: short names, few collisions
+        for (const char c : s) {
+            h ^= static_cast<unsigned char>(c);
+            h *= 1099511628211ULL;
+        }
+        return static_cast<std::size_t>(h ^ (h >> 29));
+    }
+    void place(std::uint32_t index) {
+        std::size_t i = hash(names_[index]) & mask();
+        while (slots_[i] != empty_slot)
+            i = (i + 1) & mask();
+        slots_[i] = index;
+    }
+    void grow() {
+        slots_.assign(slots_.empty() ? 64 : slots_.size() * 2, empty_slot);
+        for (std::uint32_t k = 0; k < names_.size(); ++k)
+            place(k);
+    }
 };
 
 } // namespace plumb
