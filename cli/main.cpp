@@ -29,13 +29,19 @@ usage:
   plumb check [options] PATH...   check .plumb files (folders are searched for *.plumb)
   plumb dim EXPRESSION [FILE...]  print the dimension of an expression, using the
                                   symbols that FILEs declare
+  plumb groups [options] PATH...  the dimensionless groups of each study in the files,
+                                  and the model plan where prototype and model lines
+                                  give values
+  plumb groups --vars 'F ~ rho, V, D, mu' [--repeating 'rho, V, D'] FILE...
+                                  the groups of variables that FILEs declare
   plumb units [TEXT]              list the built-in units (those matching TEXT)
   plumb rules                     list the rules and their ids
   plumb --version | --help
 
-options for check and dim:
+options for check, groups and dim:
   --dict FILE          read FILE's declarations before each file (repeatable)
-  --format text|json   output format for check (default: text)
+  --format text|json   output format for check and groups (default: text)
+  --study NAME         groups: only the study called NAME
   --color auto|always|never
                        colour the text output (default: auto, which means on a
                        terminal only, and never when NO_COLOR is set or TERM=dumb)
@@ -71,6 +77,9 @@ bool use_colour(colour_choice choice) {
 
 struct options {
     std::vector<std::string> positional;
+    std::string study;
+    std::string variables;
+    std::string repeating;
     plumb::check_options check;
     bool json = false;
     colour_choice colour = colour_choice::automatic;
@@ -98,6 +107,21 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
             if (!v)
                 return "--dict needs a file";
             out.check.dictionaries.emplace_back(*v);
+        } else if (a == "--study" || a.rfind("--study=", 0) == 0) {
+            const auto v = value("--study");
+            if (!v)
+                return "--study needs a study name";
+            out.study = *v;
+        } else if (a == "--vars" || a.rfind("--vars=", 0) == 0) {
+            const auto v = value("--vars");
+            if (!v)
+                return "--vars needs a list such as 'F ~ rho, V, D, mu'";
+            out.variables = *v;
+        } else if (a == "--repeating" || a.rfind("--repeating=", 0) == 0) {
+            const auto v = value("--repeating");
+            if (!v)
+                return "--repeating needs a list such as 'rho, V, D'";
+            out.repeating = *v;
         } else if (a == "--format" || a.rfind("--format=", 0) == 0) {
             const auto v = value("--format");
             if (!v || (*v != "text" && *v != "json"))
@@ -135,6 +159,54 @@ int run_check(const std::vector<std::string>& args) {
     return report.count(plumb::severity::error) > 0 ? exit_findings : exit_clean;
 }
 
+int run_groups(const std::vector<std::string>& args) {
+    options opts;
+    if (auto error = parse_options(args, opts))
+        return usage_error(*error);
+    if (!opts.repeating.empty() && opts.variables.empty())
+        return usage_error("--repeating goes with --vars");
+    plumb::check_report report;
+    if (!opts.variables.empty()) {
+        // The command line's variables become a study in a file that uses the given ones.
+        std::string text;
+        for (const auto& path : opts.positional)
+            text += fmt::format("use \"{}\"\n", std::filesystem::absolute(path).string());
+        text += fmt::format("study command-line: {}{}\n", opts.variables,
+                            opts.repeating.empty() ? "" : " repeating " + opts.repeating);
+        report = plumb::check_text("<command line>", text, opts.check);
+    } else {
+        if (opts.positional.empty())
+            return usage_error("groups needs at least one file or folder, or --vars");
+        std::vector<std::filesystem::path> paths(opts.positional.begin(), opts.positional.end());
+        report = plumb::check_paths(paths, opts.check);
+    }
+    if (!opts.study.empty()) {
+        std::erase_if(report.studies,
+                      [&](const plumb::study_report& s) { return s.name != opts.study; });
+        if (report.studies.empty())
+            return usage_error(fmt::format("no study named '{}' in the files given", opts.study));
+    }
+    // Only findings that stop a study from being worked out belong here; `check` shows all.
+    const plumb::text_style style{use_colour(opts.colour)};
+    bool study_errors = false;
+    std::string findings;
+    for (const auto& d : report.diagnostics) {
+        const bool about_studies = d.rule == "study-problem" || d.rule == "value-mismatch" ||
+                                   d.rule == "syntax" || d.rule == "unreadable" ||
+                                   (d.rule == "undeclared" && !d.notes.empty() &&
+                                    d.notes.front().message.find("study") != std::string::npos);
+        if (!about_studies)
+            continue;
+        study_errors = true;
+        findings += plumb::render_text(d, style) + "\n";
+    }
+    // PENDING: render_groups_*
+    print(findings);
+    if (report.input_failed)
+        return exit_usage;
+    return study_errors ? exit_findings : exit_clean;
+}
+
 int run_dim(const std::vector<std::string>& args) {
     options opts;
     if (auto error = parse_options(args, opts))
@@ -147,7 +219,7 @@ int run_dim(const std::vector<std::string>& args) {
     // Findings inside the context files belong to 'plumb check'; here only the expression's.
     for (const auto& d : result.report.diagnostics)
         if (d.where.file == nullptr || d.where.file->path() == "<query>")
-            print(plumb::render_text(d, style));
+            print(plumb::render_text(d, style) + "\n");
     if (!result.dim)
         return result.report.input_failed ? exit_usage : exit_findings;
     const std::string_view name = plumb::quantity_name(*result.dim);
@@ -165,10 +237,12 @@ int run_units(const std::vector<std::string>& args) {
         return usage_error("units takes at most one filter text");
     const std::string filter = args.empty() ? "" : args.front();
     const auto& table = plumb::unit_table::standard();
+    bool listed = false;
     for (const auto& u : table.units()) {
         if (!filter.empty() && u.symbol.find(filter) == std::string_view::npos &&
             u.name.find(filter) == std::string_view::npos)
             continue;
+        listed = true;
         std::string scale;
         if (u.scale == plumb::unit_scale::offset)
             scale = fmt::format(" + {:g}", u.offset);
@@ -177,6 +251,17 @@ int run_units(const std::vector<std::string>& args) {
         print(fmt::format("{:<8} {:<32} {:<22} = {}{} SI{}\n", u.symbol, u.name,
                           u.dim().to_string(), u.exact_factor, scale,
                           u.takes_prefixes ? ", takes SI prefixes" : ""));
+    }
+    if (!filter.empty() && !listed) {
+        // A prefixed unit is no row of its own; show how it resolves.
+        const auto resolved = table.resolve(filter);
+        if (!resolved) {
+            fmt::print(stderr, "plumb: no unit matches '{}'\n", filter);
+            return exit_findings;
+        }
+        print(fmt::format("{:<8} {} {} = {:g} SI {}\n", filter,
+                          resolved->prefix ? resolved->prefix->name : "", resolved->unit->name,
+                          resolved->factor(), resolved->dim().to_string()));
     }
     if (filter.empty()) {
         std::string prefixes;
@@ -197,7 +282,7 @@ int run_rules() {
 int run(int argc, char** argv) {
     std::vector<std::string> args(argv + 1, argv + argc);
     if (args.empty()) {
-        print(usage_text);
+        std::fwrite(usage_text.data(), 1, usage_text.size(), stderr);
         return exit_usage;
     }
     const std::string command = args.front();
@@ -219,6 +304,8 @@ int run(int argc, char** argv) {
         return run_check(args);
     if (command == "dim")
         return run_dim(args);
+    if (command == "groups")
+        return run_groups(args);
     if (command == "units")
         return run_units(args);
     if (command == "rules")
@@ -226,7 +313,7 @@ int run(int argc, char** argv) {
     if (command.size() > 6 && command.substr(command.size() - 6) == ".plumb")
         return usage_error(
             fmt::format("unknown command '{}'; did you mean 'plumb check {}'?", command, command));
-    for (const std::string_view known : {"check", "dim", "units", "rules"}) {
+    for (const std::string_view known : {"check", "dim", "groups", "units", "rules"}) {
         // One slip of the keyboard ("chek", "unit") deserves a pointer, not just a refusal.
         const bool near =
             command.size() + 1 >= known.size() && command.size() <= known.size() + 1 &&

@@ -165,8 +165,47 @@ struct use_path_close : one<'"'> {};
 struct use_path : if_must<one<'"'>, use_path_text, use_path_close> {};
 struct use_statement : seq<TAO_PEGTL_STRING("use"), plus<space>, at<one<'"'>>, use_path> {};
 
+// --- Studies: the variables of one phenomenon, for its dimensionless groups ---------------
+//   study drag: F_D ~ ρ, V, D, μ repeating ρ, V, D
+struct study_name : label_name {};
+struct list_separator : seq<ws, one<','>, ws> {};
+struct study_variable : name {};
+struct study_dependent : name {};
+struct dependent_mark : seq<at<name, ws, one<'~'>>, study_dependent, ws, one<'~'>, ws> {};
+struct study_variables : list_must<study_variable, list_separator> {};
+struct repeating_variable : name {};
+struct repeating_variables : list_must<repeating_variable, list_separator> {};
+struct repeating_clause
+    : if_must<seq<plus<space>, TAO_PEGTL_STRING("repeating"), plus<space>>, repeating_variables> {};
+struct study_colon : one<':'> {};
+struct study_statement
+    : seq<at<TAO_PEGTL_STRING("study"), plus<space>, label_name, ws, one<':'>>,
+          TAO_PEGTL_STRING("study"), plus<space>, study_name, ws, study_colon, ws,
+          opt<dependent_mark>, must<study_variables>, opt<repeating_clause>> {};
+
+// --- Prototype and model values for a study -----------------------------------------------
+//   prototype spillway: Q = 2500 m^3/s, H = 6.5 m
+//   model spillway: scale = 1:40, ρ = 998 kg/m^3
+struct value_number : seq<opt<one<'-'>>, number> {};
+struct value_unit : unit_expression {};
+struct value_quantity : seq<value_number, must<number_end>, opt<plus<space>, value_unit>> {};
+struct value_name : name {};
+struct value_assignment : seq<value_name, ws, one<'='>, ws, must<value_quantity>> {};
+struct scale_ratio : seq<digits, opt<one<'.'>, digits>, star<space>, one<':'>, star<space>, digits,
+                         opt<one<'.'>, digits>> {};
+struct scale_number : seq<digits, opt<one<'.'>, star<digit>>, opt<decimal_exponent>> {};
+struct scale_value : sor<scale_ratio, scale_number> {};
+struct scale_assignment : seq<TAO_PEGTL_STRING("scale"), ws, one<'='>, ws, must<scale_value>> {};
+struct case_item : sor<scale_assignment, value_assignment> {};
+struct case_items : list_must<case_item, list_separator> {};
+struct prototype_keyword : TAO_PEGTL_STRING("prototype") {};
+struct model_keyword : TAO_PEGTL_STRING("model") {};
+struct case_kind : sor<prototype_keyword, model_keyword> {};
+struct case_statement : seq<at<case_kind, plus<space>, label_name, ws, one<':'>>, case_kind,
+                            plus<space>, study_name, ws, study_colon, ws, must<case_items>> {};
+
 // --- One logical line ---------------------------------------------------------------------
-struct statement : sor<use_statement, declaration, formula> {};
+struct statement : sor<use_statement, study_statement, case_statement, declaration, formula> {};
 struct line_end : seq<ws, opt<comment>, eof> {};
 struct line : seq<ws, opt<statement>, must<line_end>> {};
 

@@ -39,6 +39,14 @@ template <> inline constexpr const char* error_message<constant_value> = "expect
 template <> inline constexpr const char* error_message<description_close> = "the description has no closing '\"'";
 template <> inline constexpr const char* error_message<declared_name> = "expected a name after ','";
 template <> inline constexpr const char* error_message<use_path_close> = "the path has no closing '\"'";
+template <> inline constexpr const char* error_message<study_variables> = "expected the study's variables, separated by commas, as in: study drag: F ~ rho, V, D, mu";
+template <> inline constexpr const char* error_message<repeating_variables> = "expected the repeating variables after 'repeating', separated by commas";
+template <> inline constexpr const char* error_message<study_variable> = "expected a variable name after ','";
+template <> inline constexpr const char* error_message<repeating_variable> = "expected a variable name after ','";
+template <> inline constexpr const char* error_message<case_items> = "expected values such as: V = 3 m/s, D = 0.5 m (and, for a model, scale = 1:25)";
+template <> inline constexpr const char* error_message<case_item> = "expected a value such as V = 3 m/s, or scale = 1:25";
+template <> inline constexpr const char* error_message<value_quantity> = "expected a number and its unit, as in 3 m/s";
+template <> inline constexpr const char* error_message<scale_value> = "expected the model scale as a ratio such as 1:25, or a number such as 0.04";
 template <> inline constexpr const char* error_message<line_end> = "expected an operator, a comparison or the end of the line here";
 // clang-format on
 

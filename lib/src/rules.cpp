@@ -6,7 +6,7 @@
 namespace plumb::rules {
 
 std::span<const rule_info> all() {
-    static constexpr std::array<rule_info, 17> table = {{
+    static constexpr std::array<rule_info, 19> table = {{
         {syntax, "a line does not follow the notation"},
         {sum_mismatch, "the terms of a sum or difference differ in dimension"},
         {side_mismatch, "the sides of an equation or limit differ in dimension"},
@@ -24,6 +24,8 @@ std::span<const rule_info> all() {
         {overflow, "exact exponent arithmetic would exceed 64 bits"},
         {unreadable, "a file or a `use`d dictionary cannot be read"},
         {include_cycle, "dictionaries `use` each other in a cycle"},
+        {study_problem, "a study, prototype or model line cannot be worked out as written"},
+        {value_mismatch, "a prototype or model value's unit disagrees with its variable"},
     }};
     return table;
 }

@@ -79,6 +79,36 @@ struct use_line {
     span path; // inside the quotes
 };
 
+// study NAME: [dependent ~] variables [repeating variables]
+struct study {
+    span range;
+    span name;
+    span dependent;               // empty when none is named
+    std::uint32_t first_variable; // into study_names: the variables, then the repeating ones
+    std::uint32_t variable_count;
+    std::uint32_t repeating_count;
+};
+
+// One "name = number unit" of a prototype or model line.
+struct case_value {
+    span name;
+    span value;                   // the number and its unit as written
+    std::optional<dimension> dim; // of the unit; dimensionless without one; empty on error
+    double si_value = 0.0;
+    bool has_unit = false;
+};
+
+// prototype NAME: values   /   model NAME: scale = 1:25, values
+struct study_case {
+    span range;
+    span study;
+    bool model = false;
+    std::optional<double> scale; // model length / prototype length
+    span scale_text;
+    std::uint32_t first_value;
+    std::uint32_t value_count;
+};
+
 struct parsed_file {
     const source_file* source = nullptr;
     std::vector<expr_node> nodes;
@@ -88,6 +118,10 @@ struct parsed_file {
     std::vector<declaration> declarations;
     std::vector<declared_name> names;
     std::vector<use_line> uses;
+    std::vector<study> studies;
+    std::vector<span> study_names;
+    std::vector<study_case> cases;
+    std::vector<case_value> case_values;
     std::vector<diagnostic> diagnostics; // syntax errors and unknown units
     bool has_syntax_error = false;
 };

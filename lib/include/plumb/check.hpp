@@ -2,6 +2,7 @@
 #pragma once
 
 #include "plumb/diagnostic.hpp"
+#include "plumb/groups.hpp"
 #include "plumb/source.hpp"
 
 #include <filesystem>
@@ -17,10 +18,24 @@ struct check_options {
     std::vector<std::filesystem::path> dictionaries; // read before every checked file
 };
 
+// One `study` line worked out: its groups and, when prototype and model lines give values,
+// the model plan.
+struct study_report {
+    location where;
+    std::string name;
+    std::vector<group_variable> variables;
+    group_analysis analysis;
+    std::optional<double> length_scale;           // from the model line
+    std::vector<std::optional<double>> prototype; // SI value per variable, when given
+    std::vector<std::optional<double>> model;
+    std::optional<similitude_plan> plan; // when a prototype line exists
+};
+
 struct check_report {
     // Every file read (checked files, dictionaries, `use`d files); diagnostics point into them.
     std::vector<std::unique_ptr<source_file>> sources;
     std::vector<diagnostic> diagnostics;
+    std::vector<study_report> studies;
     std::size_t files_checked = 0;
     std::size_t formulas_checked = 0;
     std::size_t bytes_checked = 0;

@@ -20,6 +20,11 @@ std::string render_text(const check_report& report, const text_style& style = {}
 // Said with every report: a consistent formula can still be wrong.
 std::string_view caution_text();
 
+// Each study's dimension matrix, repeating variables, groups and model plan, for people.
+std::string render_groups_text(const check_report& report, const text_style& style = {});
+// The same as one JSON document (schema in the README, "Groups as JSON").
+std::string render_groups_json(const check_report& report);
+
 // The JSON document described in the README ("plumb check --format json").
 std::string render_json(const check_report& report);
 

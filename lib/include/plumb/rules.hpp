@@ -24,6 +24,8 @@ inline constexpr std::string_view wrong_arity = "wrong-arity";
 inline constexpr std::string_view overflow = "overflow";
 inline constexpr std::string_view unreadable = "unreadable";
 inline constexpr std::string_view include_cycle = "include-cycle";
+inline constexpr std::string_view study_problem = "study-problem";
+inline constexpr std::string_view value_mismatch = "value-mismatch";
 
 struct rule_info {
     std::string_view id;

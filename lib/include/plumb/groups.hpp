@@ -1,0 +1,153 @@
+// Dimensionless groups of a phenomenon (Buckingham's pi theorem, by exact rational
+// elimination), the characteristic numbers they form, and scale-model similitude.
+#pragma once
+
+#include "plumb/dimension.hpp"
+#include "plumb/rational.hpp"
+
+#include <cstddef>
+#include <optional>
+#include <span>
+#include <string>
+#include <string_view>
+#include <vector>
+
+namespace plumb {
+
+// ---- Exact linear algebra --------------------------------------------------------------
+// Every operation is exact; anything that would leave 64 bits throws arithmetic_overflow.
+
+class rational_matrix {
+  public:
+    rational_matrix() = default;
+    rational_matrix(std::size_t rows, std::size_t cols)
+        : rows_(rows), cols_(cols), data_(rows * cols) {}
+    [[nodiscard]] std::size_t rows() const { return rows_; }
+    [[nodiscard]] std::size_t cols() const { return cols_; }
+    rational& at(std::size_t r, std::size_t c) { return data_[r * cols_ + c]; }
+    [[nodiscard]] const rational& at(std::size_t r, std::size_t c) const {
+        return data_[r * cols_ + c];
+    }
+    friend bool operator==(const rational_matrix&, const rational_matrix&) = default;
+
+  private:
+    std::size_t rows_ = 0;
+    std::size_t cols_ = 0;
+    std::vector<rational> data_;
+};
+
+// Reduced row echelon form in place; returns the pivot columns in order.
+std::vector<std::size_t> row_reduce(rational_matrix& m);
+std::size_t matrix_rank(const rational_matrix& m);
+// A basis of {x : m x = 0}, one column per basis vector (cols() == m.cols() - rank).
+rational_matrix nullspace_basis(const rational_matrix& m);
+
+// ---- The problem -----------------------------------------------------------------------
+
+struct group_variable {
+    std::string name; // as written in the .plumb file: "ρ", "F_D"
+    dimension dim;
+};
+
+// Rows are the base dimensions that occur in at least one variable, in SI order.
+struct dimension_matrix {
+    std::vector<base_dimension> rows;
+    rational_matrix values; // rows.size() x variables
+};
+dimension_matrix build_dimension_matrix(std::span<const group_variable> variables);
+
+struct group_request {
+    std::vector<group_variable> variables;
+    std::optional<std::size_t> dependent; // index into variables
+    std::vector<std::size_t> repeating;   // given by the user; empty: chosen by the rule
+};
+
+struct pi_group {
+    std::vector<rational> exponents; // one per variable, in the request's order
+    std::string formula;             // "ρ*V*D/μ", "F_D/(ρ*V^2*D^2)", "T*g^(1/2)/L^(1/2)"
+    bool has_dependent = false;
+    // Filled by name_groups: "Reynolds number", "inverse of the Reynolds number",
+    // "square of the Froude number"; empty when no named number fits.
+    std::string name;
+    // How a named group was recombined from the basis ("π2 / π3"); empty when it is one.
+    std::string recombined_from;
+};
+
+struct group_analysis {
+    dimension_matrix matrix;
+    std::size_t rank = 0;
+    std::vector<std::size_t> repeating;
+    bool repeating_chosen = false; // by the documented rule rather than by the user
+    std::vector<pi_group> groups;  // variables.size() - rank of them
+    // When the request cannot be answered (repeating variables not independent or not
+    // spanning, the dependent variable among them, too few variables...), the reasons in
+    // plain words; groups is then empty.
+    std::vector<std::string> problems;
+};
+
+// Forms a complete set of independent groups. Each group has one non-repeating variable to
+// the first power times powers of the repeating ones, scaled to the smallest whole exponents,
+// except the group of the dependent variable, which keeps it to the first power.
+group_analysis analyse_groups(const group_request& request);
+
+// The formula text of a group over `variables` (used by analyse_groups and by recombination).
+std::string group_formula(std::span<const group_variable> variables,
+                          std::span<const rational> exponents);
+
+// ---- Named characteristic numbers -------------------------------------------------------
+
+struct named_group_match {
+    std::string_view name; // "Reynolds number"
+    rational power;        // the group is the named number to this power (1, -1, 2, 1/2...)
+};
+
+// Recognises a group by the dimensions of its variables and their exponents: the named
+// number's defining quantities, possibly to a power. Ambiguous cases name all candidates.
+std::vector<named_group_match> recognise_group(std::span<const group_variable> variables,
+                                               std::span<const rational> exponents);
+
+// Names every group, recombining unnamed basis groups (products and powers of two of them)
+// into named numbers where that keeps the set independent, and says which.
+void name_groups(group_analysis& analysis, std::span<const group_variable> variables);
+
+// ---- Similitude --------------------------------------------------------------------------
+
+struct similitude_request {
+    std::vector<group_variable> variables;
+    group_analysis analysis;                      // groups over those variables
+    std::vector<std::optional<double>> prototype; // SI value per variable
+    double length_scale = 1.0;                    // model length / prototype length
+    std::vector<std::optional<double>> model;     // SI values given for the model (its fluid)
+};
+
+struct group_values {
+    std::size_t group;
+    std::optional<double> prototype;
+    std::optional<double> model;
+    bool matched = false;
+};
+
+struct model_variable {
+    std::size_t variable;
+    std::optional<double> value; // SI; empty when it cannot be fixed
+    std::string how;             // "scaled by the length scale", "given", "from the Froude number"
+};
+
+struct unmatched_groups {
+    std::vector<std::size_t> groups; // groups that cannot all match at once
+    std::string explanation;         // in plain words, with the property a model fluid would need
+};
+
+struct similitude_plan {
+    std::vector<group_values> groups;
+    std::vector<model_variable> model;
+    std::vector<unmatched_groups> conflicts;
+    std::vector<std::string> problems; // missing prototype values and the like
+};
+
+similitude_plan plan_model(const similitude_request& request);
+
+// Said with every model plan: partial similarity, scale effects, codes of practice.
+std::string_view similitude_caution();
+
+} // namespace plumb
