@@ -49,8 +49,6 @@ struct literal_exponent
 // --- Expressions --------------------------------------------------------------------------
 struct expression;
 
-struct pi_constant : seq<sor<TAO_PEGTL_STRING("pi"), utf8::one<0x3C0>>, not_at<name_char>> {};
-
 struct group_close : one<')'> {};
 struct group : if_must<one<'('>, ws, expression, ws, group_close> {};
 
@@ -64,7 +62,8 @@ struct call_arguments
     : seq<call_open, ws, opt<argument, star<ws, next_argument>>, ws, must<call_close>> {};
 struct symbol_or_call : seq<symbol, opt<star<space>, call_arguments>> {};
 
-struct primary : sor<number_term, pi_constant, symbol_or_call, group> {};
+// `pi` and `π` are names to the grammar; the parser makes them the number.
+struct primary : sor<number_term, symbol_or_call, group> {};
 
 struct unary;
 struct power_operand : seq<unary> {};

@@ -184,14 +184,11 @@ template <> struct action<nt::number_term> {
         s.push_node({expr_kind::number, s.range(in)});
     }
 };
-template <> struct action<nt::pi_constant> {
-    template <typename In> static void apply(const In& in, parse_state& s) {
-        s.push_node({expr_kind::pi, s.range(in)});
-    }
-};
 template <> struct action<nt::symbol> {
     template <typename In> static void apply(const In& in, parse_state& s) {
-        s.push_node({expr_kind::symbol, s.range(in)});
+        // pi is read as a name and told apart here: one rule fewer tried at every term.
+        const std::string_view t = in.string_view();
+        s.push_node({t == "pi" || t == "\u03C0" ? expr_kind::pi : expr_kind::symbol, s.range(in)});
     }
 };
 template <> struct action<nt::call_open> {
@@ -565,14 +562,17 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin) {
         const std::size_t end =
             nl ? static_cast<std::size_t>(static_cast<const char*>(nl) - text.data()) : text.size();
         std::size_t content_end = end;
-        bool in_quotes = false;
-        for (std::size_t i = pos; i < end; ++i) {
-            const char c = text[i];
-            if (c == '"')
-                in_quotes = !in_quotes;
-            else if (c == '#' && !in_quotes) {
-                content_end = i;
-                break;
+        // Most lines have no comment; only those need the quote-aware scan.
+        if (std::memchr(text.data() + pos, '#', end - pos) != nullptr) {
+            bool in_quotes = false;
+            for (std::size_t i = pos; i < end; ++i) {
+                const char c = text[i];
+                if (c == '"')
+                    in_quotes = !in_quotes;
+                else if (c == '#' && !in_quotes) {
+                    content_end = i;
+                    break;
+                }
             }
         }
         while (content_end > pos &&
