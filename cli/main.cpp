@@ -200,8 +200,12 @@ int run_groups(const std::vector<std::string>& args) {
         study_errors = true;
         findings += plumb::render_text(d, style) + "\n";
     }
-    // PENDING: render_groups_*
-    print(findings);
+    if (opts.json) {
+        print(plumb::render_groups_json(report));
+    } else {
+        print(findings);
+        print(plumb::render_groups_text(report, style));
+    }
     if (report.input_failed)
         return exit_usage;
     return study_errors ? exit_findings : exit_clean;

@@ -1171,4 +1171,43 @@ TEST_CASE("a file that starts with a UTF-8 byte order mark parses") {
     CHECK(contains(with_error.out, ":5:19: error: the two sides of this equation differ"));
 }
 
+TEST_CASE("groups: a study's groups, the --vars form, --study and JSON") {
+    const temp_folder dir;
+    // Sphere drag: F_D/(ρV²D²) = φ(ρVD/μ) (F. M. White, Fluid Mechanics, 7th ed., ch. 5,
+    // chapter from memory).
+    const std::string declarations = "F_D : N\nρ : kg/m^3\nV : m/s\nD : m\nμ : Pa*s\n";
+    const auto file = dir.write("drag.plumb", declarations + "study drag: F_D ~ ρ, V, D, μ\n");
+
+    const auto r = run_plumb({"groups", "--color", "never", file});
+    CHECK(r.status == 0);
+    CHECK(contains(r.out, "study drag"));
+    CHECK(contains(r.out, "rank 3: 5 variables give 2 independent groups"));
+    CHECK(contains(r.out, "F_D/(ρ*V^2*D^2)"));
+    CHECK(contains(r.out, "ρ*V*D/μ"));
+
+    const auto from_vars = run_plumb({"groups", "--vars", "F_D ~ ρ, V, D, μ", "--repeating",
+                                      "ρ, V, D", dir.write("dictionary.plumb", declarations)});
+    CHECK(from_vars.status == 0);
+    CHECK(contains(from_vars.out, "study command-line"));
+    CHECK(contains(from_vars.out, "(as given)"));
+
+    CHECK(run_plumb({"groups", "--study", "nothing-like-it", file}).status == 2);
+    CHECK(run_plumb({"groups", "--repeating", "ρ", file}).status == 2);
+
+    const auto json = run_plumb({"groups", "--format", "json", file});
+    CHECK(json.status == 0);
+    const auto doc = parse_json(json.out);
+    REQUIRE(doc.has_value());
+    CHECK(contains(json.out, "\"studies\": ["));
+
+    // A study that cannot be worked out is a finding: exit 1, the reason on stdout.
+    const auto bad = run_plumb(
+        {"groups", "--color", "never",
+         dir.write("bad.plumb", declarations +
+                                    "U : m/s\n"
+                                    "study drag: F_D ~ ρ, V, U, D, μ repeating ρ, V, U\n")});
+    CHECK(bad.status == 1);
+    CHECK(contains(bad.out, "[study-problem]"));
+}
+
 TEST_SUITE_END();

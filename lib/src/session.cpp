@@ -210,7 +210,7 @@ class session {
         // Formulas that named a symbol declared further down are checked now, against all.
         for (const auto& formula : tree.formulas)
             check_formula(tree, formula, table, f->diagnostics, false);
-        // PENDING: work_out_studies(tree, table, f->diagnostics, report_.studies);
+        work_out_studies(tree, table, f->diagnostics, report_.studies);
         const std::size_t formulas = reader.formulas + tree.studies.size();
         if (f->parsed)
             tree.diagnostics.clear(); // reported when the file was read as a dictionary

@@ -1,0 +1,246 @@
+// Studies for people and for programs: matrix, repeating variables, groups, model plan.
+#include "plumb/render.hpp"
+#include "plumb/version.hpp"
+
+#include <cmath>
+#include <fmt/format.h>
+
+namespace plumb {
+namespace {
+
+std::size_t display_width(std::string_view s) {
+    std::size_t n = 0;
+    for (const char c : s)
+        if ((static_cast<unsigned char>(c) & 0xC0) != 0x80)
+            ++n;
+    return n;
+}
+
+std::string pad(std::string_view s, std::size_t width, bool right = false) {
+    const std::size_t w = display_width(s);
+    const std::string fill(w < width ? width - w : 0, ' ');
+    return right ? fill + std::string(s) : std::string(s) + fill;
+}
+
+std::string describe(const dimension& d) {
+    const std::string_view name = quantity_name(d);
+    if (d.is_dimensionless())
+        return "[1] (dimensionless)";
+    return name.empty() ? d.to_string() : fmt::format("{} ({})", d.to_string(), name);
+}
+
+// The SI unit of a dimension written from base units: "kg m^-1 s^-2".
+std::string si_unit(const dimension& d) {
+    static constexpr std::array<std::string_view, base_dimension_count> units = {
+        "kg", "m", "s", "K", "mol", "A", "cd"};
+    std::string out;
+    for (std::size_t i = 0; i < base_dimension_count; ++i) {
+        const rational e = d.exponent(static_cast<base_dimension>(i));
+        if (e.is_zero())
+            continue;
+        if (!out.empty())
+            out += ' ';
+        out += units[i];
+        if (!(e == rational(1)))
+            out += e.is_integer() ? fmt::format("^{}", e.to_string())
+                                  : fmt::format("^({})", e.to_string());
+    }
+    return out.empty() ? "(dimensionless)" : out;
+}
+
+std::string number(double v) {
+    return fmt::format("{:.4g}", v);
+}
+
+void render_matrix(std::string& out, const study_report& s) {
+    const auto& m = s.analysis.matrix;
+    std::size_t width = 3;
+    for (const auto& v : s.variables)
+        width = std::max(width, display_width(v.name));
+    for (std::size_t r = 0; r < m.values.rows(); ++r)
+        for (std::size_t c = 0; c < m.values.cols(); ++c)
+            width = std::max(width, m.values.at(r, c).to_string().size());
+    out += "    " + std::string(4, ' ');
+    for (const auto& v : s.variables)
+        out += "  " + pad(v.name, width, true);
+    out += '\n';
+    for (std::size_t r = 0; r < m.values.rows(); ++r) {
+        out += "    " + pad(base_dimension_symbol(m.rows[r]), 4);
+        for (std::size_t c = 0; c < m.values.cols(); ++c)
+            out += "  " + pad(m.values.at(r, c).to_string(), width, true);
+        out += '\n';
+    }
+}
+
+void render_plan(std::string& out, const study_report& s, const similitude_plan& plan) {
+    out += fmt::format("  model plan (scale {}), values in SI units:\n",
+                       s.length_scale ? fmt::format("1:{:.4g}", 1.0 / *s.length_scale)
+                                      : std::string("not given: 1:1 assumed"));
+    for (const auto& g : plan.groups) {
+        const pi_group& group = s.analysis.groups[g.group];
+        out += fmt::format("    π{} {:<28} prototype {:>11}  model {:>11}  {}\n", g.group + 1,
+                           group.name.empty() ? group.formula : group.name,
+                           g.prototype ? number(*g.prototype) : "-",
+                           g.model ? number(*g.model) : "-", g.matched ? "matched" : "NOT matched");
+    }
+    for (const auto& v : plan.model) {
+        const group_variable& var = s.variables[v.variable];
+        const auto& proto =
+            s.prototype.size() > v.variable ? s.prototype[v.variable] : std::nullopt;
+        out += fmt::format("    {} = {} {}   (prototype {}; {})\n", pad(var.name, 6),
+                           v.value ? number(*v.value) : "?", si_unit(var.dim),
+                           proto ? number(*proto) : "?", v.how);
+    }
+    for (const auto& c : plan.conflicts)
+        out += fmt::format("    cannot match together: {}\n", c.explanation);
+    out += fmt::format("  caution: {}\n", similitude_caution());
+}
+
+} // namespace
+
+std::string render_groups_text(const check_report& report, const text_style& /*style*/) {
+    std::string out;
+    for (const auto& s : report.studies) {
+        const line_column at = s.where.file->position(s.where.range.begin);
+        out += fmt::format("study {} ({}:{})\n", s.name, s.where.file->path(), at.line);
+        for (const auto& v : s.variables)
+            out += fmt::format("    {} {}\n", pad(v.name, 8), describe(v.dim));
+        if (!s.analysis.problems.empty()) {
+            for (const auto& p : s.analysis.problems)
+                out += fmt::format("  cannot form groups: {}\n", p);
+            out += '\n';
+            continue;
+        }
+        out += "  dimension matrix:\n";
+        render_matrix(out, s);
+        out += fmt::format("  rank {}: {} variables give {} independent group{}\n", s.analysis.rank,
+                           s.variables.size(), s.analysis.groups.size(),
+                           s.analysis.groups.size() == 1 ? "" : "s");
+        std::string repeating;
+        for (std::size_t i : s.analysis.repeating)
+            repeating += (repeating.empty() ? "" : ", ") + s.variables[i].name;
+        out += fmt::format("  repeating variables: {} ({})\n", repeating,
+                           s.analysis.repeating_chosen ? "chosen: never the dependent variable; a "
+                                                         "density, a speed and a length first"
+                                                       : "as given");
+        std::size_t formula_width = 0;
+        for (const auto& g : s.analysis.groups)
+            formula_width = std::max(formula_width, display_width(g.formula));
+        for (std::size_t i = 0; i < s.analysis.groups.size(); ++i) {
+            const pi_group& g = s.analysis.groups[i];
+            std::string remark = g.name;
+            if (!g.recombined_from.empty())
+                remark += fmt::format("{}recombined as {}", remark.empty() ? "" : "; ",
+                                      g.recombined_from);
+            if (g.has_dependent)
+                remark += remark.empty() ? "holds the dependent variable"
+                                         : "; holds the dependent variable";
+            out += fmt::format("  π{} = {}  {}\n", i + 1, pad(g.formula, formula_width), remark);
+        }
+        if (s.plan)
+            render_plan(out, s, *s.plan);
+        out += '\n';
+    }
+    if (report.studies.empty())
+        out += "plumb: no study found; declare one as: study NAME: dependent ~ variable, variable, "
+               "...\n";
+    return out;
+}
+
+std::string render_groups_json(const check_report& report) {
+    const auto str = [](std::string_view s) {
+        std::string out = "\"";
+        for (const char c : s) {
+            if (c == '"' || c == '\\')
+                out += '\\';
+            if (static_cast<unsigned char>(c) < 0x20)
+                out += fmt::format("\\u{:04x}", static_cast<unsigned>(c));
+            else
+                out += c;
+        }
+        return out + "\"";
+    };
+    const auto num = [](const std::optional<double>& v) {
+        return v && std::isfinite(*v) ? fmt::format("{:.17g}", *v) : std::string("null");
+    };
+    std::string out = fmt::format(
+        "{{\n  \"tool\": \"plumb\",\n  \"version\": \"{}\",\n  \"schema\": 1,\n  \"studies\": [",
+        version());
+    for (std::size_t k = 0; k < report.studies.size(); ++k) {
+        const auto& s = report.studies[k];
+        const line_column at = s.where.file->position(s.where.range.begin);
+        out += fmt::format("{}\n    {{\"name\": {}, \"file\": {}, \"line\": {}, \"variables\": [",
+                           k ? "," : "", str(s.name), str(s.where.file->path()), at.line);
+        for (std::size_t i = 0; i < s.variables.size(); ++i)
+            out += fmt::format("{}{{\"name\": {}, \"dimension\": {}}}", i ? ", " : "",
+                               str(s.variables[i].name), str(s.variables[i].dim.to_string()));
+        out += "],\n     \"problems\": [";
+        for (std::size_t i = 0; i < s.analysis.problems.size(); ++i)
+            out += (i ? ", " : "") + str(s.analysis.problems[i]);
+        out += fmt::format("], \"rank\": {}, \"repeating\": [", s.analysis.rank);
+        for (std::size_t i = 0; i < s.analysis.repeating.size(); ++i)
+            out += (i ? ", " : "") + str(s.variables[s.analysis.repeating[i]].name);
+        out += fmt::format("], \"repeating_chosen\": {},\n     \"matrix\": {{\"rows\": [",
+                           s.analysis.repeating_chosen ? "true" : "false");
+        const auto& m = s.analysis.matrix;
+        for (std::size_t r = 0; r < m.rows.size(); ++r)
+            out += (r ? ", " : "") + str(base_dimension_symbol(m.rows[r]));
+        out += "], \"values\": [";
+        for (std::size_t r = 0; r < m.values.rows(); ++r) {
+            out += r ? ", [" : "[";
+            for (std::size_t c = 0; c < m.values.cols(); ++c)
+                out += (c ? ", " : "") + str(m.values.at(r, c).to_string());
+            out += "]";
+        }
+        out += "]},\n     \"groups\": [";
+        for (std::size_t g = 0; g < s.analysis.groups.size(); ++g) {
+            const auto& group = s.analysis.groups[g];
+            out +=
+                fmt::format("{}\n       {{\"formula\": {}, \"name\": {}, \"recombined_from\": {}, "
+                            "\"has_dependent\": {}, \"exponents\": {{",
+                            g ? "," : "", str(group.formula), str(group.name),
+                            str(group.recombined_from), group.has_dependent ? "true" : "false");
+            bool first = true;
+            for (std::size_t i = 0; i < group.exponents.size(); ++i) {
+                if (group.exponents[i].is_zero())
+                    continue;
+                out += fmt::format("{}{}: {}", first ? "" : ", ", str(s.variables[i].name),
+                                   str(group.exponents[i].to_string()));
+                first = false;
+            }
+            out += "}}";
+        }
+        out += "]";
+        if (s.plan) {
+            out += fmt::format(",\n     \"model\": {{\"length_scale\": {}, \"groups\": [",
+                               num(s.length_scale));
+            for (std::size_t i = 0; i < s.plan->groups.size(); ++i) {
+                const auto& g = s.plan->groups[i];
+                out += fmt::format(
+                    "{}{{\"group\": {}, \"prototype\": {}, \"model\": {}, \"matched\": {}}}",
+                    i ? ", " : "", g.group + 1, num(g.prototype), num(g.model),
+                    g.matched ? "true" : "false");
+            }
+            out += "], \"variables\": [";
+            for (std::size_t i = 0; i < s.plan->model.size(); ++i) {
+                const auto& v = s.plan->model[i];
+                out += fmt::format(
+                    "{}{{\"name\": {}, \"model\": {}, \"prototype\": {}, \"si_unit\": {}, \"how\": "
+                    "{}}}",
+                    i ? ", " : "", str(s.variables[v.variable].name), num(v.value),
+                    num(s.prototype.size() > v.variable ? s.prototype[v.variable] : std::nullopt),
+                    str(si_unit(s.variables[v.variable].dim)), str(v.how));
+            }
+            out += "], \"conflicts\": [";
+            for (std::size_t i = 0; i < s.plan->conflicts.size(); ++i)
+                out += (i ? ", " : "") + str(s.plan->conflicts[i].explanation);
+            out += fmt::format("], \"caution\": {}}}", str(similitude_caution()));
+        }
+        out += "}";
+    }
+    out += report.studies.empty() ? "],\n" : "\n  ],\n";
+    out += fmt::format("  \"caution\": {}\n}}\n", str(caution_text()));
+    return out;
+}
+
+} // namespace plumb

@@ -1,0 +1,238 @@
+// The groups corpus: every `study` line in corpus/groups carries the published dimensionless
+// groups of its problem in a trailing `# expect-groups: π1; π2; ...` comment, worked out by
+// hand from the source the file names. plumb must form exactly those groups, in that order;
+// every group must be dimensionless, and there must be (variables - rank) of them. The model
+// studies must follow the published Froude scale ratios.
+#include "plumb/check.hpp"
+
+#include <doctest/doctest.h>
+
+#include <algorithm>
+#include <cmath>
+#include <cstdint>
+#include <filesystem>
+#include <fstream>
+#include <map>
+#include <sstream>
+#include <string>
+#include <utility>
+#include <vector>
+
+namespace fs = std::filesystem;
+
+namespace {
+
+const fs::path groups_dir = fs::path(PLUMB_SOURCE_DIR) / "corpus" / "groups";
+
+std::string trim(const std::string& s) {
+    const auto b = s.find_first_not_of(" \t\r");
+    const auto e = s.find_last_not_of(" \t\r");
+    return b == std::string::npos ? std::string() : s.substr(b, e - b + 1);
+}
+
+struct expected_study {
+    std::string name;
+    std::vector<std::string> groups;
+};
+
+// "file-name:line" of a study line.
+using study_key = std::pair<std::string, std::uint32_t>;
+
+// Every `study` line of the folder with its `# expect-groups:` list (empty when it has none).
+std::map<study_key, expected_study> expected_studies() {
+    std::map<study_key, expected_study> out;
+    for (const auto& entry : fs::directory_iterator(groups_dir)) {
+        if (!entry.is_regular_file() || entry.path().extension() != ".plumb")
+            continue;
+        std::ifstream in(entry.path());
+        std::string line;
+        for (std::uint32_t n = 1; std::getline(in, line); ++n) {
+            if (line.rfind("study ", 0) != 0)
+                continue;
+            const auto colon = line.find(':');
+            REQUIRE(colon != std::string::npos);
+            expected_study study{trim(line.substr(6, colon - 6)), {}};
+            const std::string marker = "# expect-groups:";
+            if (const auto at = line.find(marker); at != std::string::npos) {
+                std::stringstream list(line.substr(at + marker.size()));
+                std::string formula;
+                while (std::getline(list, formula, ';'))
+                    study.groups.push_back(trim(formula));
+            }
+            out.emplace(study_key{entry.path().filename().string(), n}, std::move(study));
+        }
+    }
+    return out;
+}
+
+study_key key_of(const plumb::study_report& study) {
+    REQUIRE(study.where.file != nullptr);
+    const auto line = study.where.file->position(study.where.range.begin).line;
+    return {fs::path(study.where.file->path()).filename().string(), line};
+}
+
+std::string joined(const std::vector<std::string>& formulas) {
+    std::string text;
+    for (const auto& f : formulas)
+        text += (text.empty() ? "" : "; ") + f;
+    return text;
+}
+
+const plumb::check_report& corpus_report() {
+    static const plumb::check_report report = plumb::check_paths({groups_dir});
+    return report;
+}
+
+const plumb::study_report& find_study(const std::string& name) {
+    const auto& studies = corpus_report().studies;
+    const auto it = std::find_if(studies.begin(), studies.end(),
+                                 [&](const plumb::study_report& s) { return s.name == name; });
+    REQUIRE_MESSAGE(it != studies.end(), "no study called " << name);
+    return *it;
+}
+
+std::size_t variable_index(const plumb::study_report& study, const std::string& name) {
+    for (std::size_t i = 0; i < study.variables.size(); ++i)
+        if (study.variables[i].name == name)
+            return i;
+    FAIL("study " << study.name << " has no variable " << name);
+    return 0;
+}
+
+// Model value over prototype value of one variable, both in SI units.
+double model_ratio(const plumb::study_report& study, const std::string& name) {
+    const std::size_t i = variable_index(study, name);
+    REQUIRE(study.plan.has_value());
+    REQUIRE(i < study.plan->model.size());
+    REQUIRE(study.plan->model[i].variable == i);
+    REQUIRE(study.plan->model[i].value.has_value());
+    REQUIRE(study.prototype.at(i).has_value());
+    return *study.plan->model[i].value / *study.prototype[i];
+}
+
+bool within(double actual, double expected, double relative) {
+    return std::abs(actual - expected) <= relative * std::abs(expected);
+}
+
+} // namespace
+
+TEST_SUITE("groups corpus") {
+
+    TEST_CASE("groups corpus: every file checks clean") {
+        REQUIRE(fs::is_directory(groups_dir));
+        const auto& report = corpus_report();
+        for (const auto& d : report.diagnostics)
+            FAIL_CHECK(d.rule << ": " << d.message);
+        CHECK_FALSE(report.input_failed);
+        CHECK(report.files_checked >= 14);
+    }
+
+    TEST_CASE("groups corpus: each study forms the published groups recorded on its line") {
+        const auto expected = expected_studies();
+        const auto& report = corpus_report();
+        REQUIRE(expected.size() >= 16);
+        CHECK(report.studies.size() == expected.size());
+
+        std::map<study_key, const plumb::study_report*> by_key;
+        for (const auto& study : report.studies)
+            by_key.emplace(key_of(study), &study);
+
+        for (const auto& entry : expected) {
+            const study_key& where = entry.first;
+            const expected_study& want = entry.second;
+            INFO(where.first << ":" << where.second << " study " << want.name);
+            CHECK_FALSE(want.groups.empty()); // every study records what it must give
+            const auto it = by_key.find(where);
+            REQUIRE(it != by_key.end());
+            const plumb::study_report& study = *it->second;
+            CHECK(study.name == want.name);
+            INFO("problems: " << joined(study.analysis.problems));
+            CHECK(study.analysis.problems.empty());
+            std::vector<std::string> got;
+            for (const auto& g : study.analysis.groups)
+                got.push_back(g.formula);
+            CHECK(joined(got) == joined(want.groups));
+        }
+    }
+
+    TEST_CASE("groups corpus: every group is dimensionless and there are variables - rank") {
+        const auto& report = corpus_report();
+        REQUIRE_FALSE(report.studies.empty());
+        for (const auto& study : report.studies) {
+            INFO("study " << study.name);
+            const auto& a = study.analysis;
+            REQUIRE(a.rank <= study.variables.size());
+            CHECK(a.groups.size() == study.variables.size() - a.rank);
+            for (const auto& g : a.groups) {
+                INFO("group " << g.formula);
+                REQUIRE(g.exponents.size() == study.variables.size());
+                plumb::dimension product;
+                bool any = false;
+                for (std::size_t i = 0; i < g.exponents.size(); ++i) {
+                    product = product * study.variables[i].dim.pow(g.exponents[i]);
+                    any = any || !g.exponents[i].is_zero();
+                }
+                CHECK(product.is_dimensionless());
+                CHECK(any);
+            }
+        }
+    }
+
+    TEST_CASE("groups corpus: reduced rank where two base dimensions only occur together") {
+        // Çengel & Cimbala, ch. 7, Example 7-7 (from memory): M and T occur only as M T^-2, so
+        // three base dimensions give rank 2 and the three variables one group. The cantilever
+        // (Gere & Goodno, App. H, from memory) has the same pairing: five variables, three groups.
+        for (const auto* name : {"soap-bubble", "cantilever"}) {
+            INFO(name);
+            const auto& study = find_study(name);
+            CHECK(study.analysis.matrix.rows.size() == 3);
+            CHECK(study.analysis.rank == 2);
+        }
+    }
+
+    TEST_CASE("groups corpus: the pendulum's mass drops out of every group") {
+        // Çengel & Cimbala, ch. 7 (from memory): T√(g/L) = f(θ_0), whatever the mass of the bob.
+        const auto& study = find_study("pendulum");
+        const std::size_t m = variable_index(study, "m");
+        REQUIRE_FALSE(study.analysis.groups.empty());
+        for (const auto& g : study.analysis.groups)
+            CHECK(g.exponents.at(m).is_zero());
+    }
+
+    TEST_CASE("groups corpus: the spillway model follows the Froude scale ratios") {
+        // H. Chanson, The Hydraulics of Open Channel Flow, 2nd ed., 2004, ch. 14 (from memory):
+        // under Froude similitude with the same fluid and gravity, velocity scales as λ^(1/2)
+        // and discharge as λ^(5/2), λ = L_model/L_prototype (here 1:50).
+        const auto& study = find_study("spillway");
+        REQUIRE(study.length_scale.has_value());
+        const double lambda = *study.length_scale;
+        CHECK(within(lambda, 1.0 / 50.0, 1e-12));
+        REQUIRE(study.plan.has_value());
+        INFO("problems: " << joined(study.plan->problems));
+        CHECK(study.plan->problems.empty());
+        CHECK(within(model_ratio(study, "V_t"), std::pow(lambda, 0.5), 1e-9));
+        CHECK(within(model_ratio(study, "Q"), std::pow(lambda, 2.5), 1e-9));
+        CHECK(within(model_ratio(study, "b"), lambda, 1e-9));
+        // The same water cannot also keep the viscous group: one conflict.
+        CHECK(study.plan->conflicts.size() == 1);
+    }
+
+    TEST_CASE("groups corpus: the ship model follows the Froude scale ratios") {
+        // F. M. White, Fluid Mechanics, 7th ed., Sec. 5.5, and Chanson, 2nd ed., ch. 14 (both
+        // from memory): velocity λ^(1/2); force ρ_r λ^3, λ^3 in the same fluid. Here the model
+        // runs in fresh water against a prototype in sea water, at 1:36.
+        const auto& study = find_study("ship-resistance");
+        REQUIRE(study.length_scale.has_value());
+        const double lambda = *study.length_scale;
+        CHECK(within(lambda, 1.0 / 36.0, 1e-12));
+        REQUIRE(study.plan.has_value());
+        INFO("problems: " << joined(study.plan->problems));
+        CHECK(study.plan->problems.empty());
+        const double density_ratio = model_ratio(study, "ρ");
+        CHECK(within(density_ratio, 998.0 / 1025.0, 1e-12));
+        CHECK(within(model_ratio(study, "V"), std::pow(lambda, 0.5), 1e-9));
+        CHECK(within(model_ratio(study, "F"), density_ratio * std::pow(lambda, 3.0), 1e-9));
+        // The Reynolds number cannot be matched at the same time.
+        CHECK(study.plan->conflicts.size() == 1);
+    }
+}
