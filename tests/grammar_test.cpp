@@ -136,8 +136,8 @@ const std::string no_label = "expected a label name after '@', as in @darcy";
 const std::string after_plus_minus = "expected a term after '+' or '-'";
 const std::string after_times_divide = "expected a term after '*' or '/'";
 const std::string no_relation = "expected an operator, '=' or a comparison (<, <=, >, >=) here";
-const std::string no_spec = "expected a dimension such as [M L^-3], a unit such as kg/m^3, or 1 "
-                            "for a dimensionless symbol";
+const std::string no_spec = "expected a dimension such as [M L^-3], a unit such as kg/m^3, 1 "
+                            "for a dimensionless symbol, or ? for one to infer";
 const std::string no_exponent = "expected an exponent such as 2, -3 or (1/2)";
 const std::string line_end = "expected an operator, a comparison or the end of the line here";
 

@@ -48,6 +48,7 @@ const dimension power = typed(1, 2, -3);             // W = kg·m²/s³
 const dimension specific_energy = typed(0, 2, -2);   // J/kg = m²/s²
 const dimension temperature = typed(0, 0, 0, 1);     // K
 const dimension expansion = typed(0, 0, 0, -1);      // 1/K
+const dimension buoyancy = typed(0, 1, -2, -1);      // gβ: (m/s²)·(1/K) = m/(s²·K)
 const dimension heat_transfer = typed(1, 0, -3, -1); // W/(m²·K) = kg/(s³·K)
 const dimension conductivity = typed(1, 1, -3, -1);  // W/(m·K) = kg·m/(s³·K)
 const dimension specific_heat = typed(0, 2, -2, -1); // J/(kg·K) = m²/(s²·K)
@@ -146,6 +147,13 @@ TEST_CASE("named numbers are recognised from their defining variables, inverted 
         {"Reynolds number",
          "ISO 80000-11:2019, item 11-4.1 (Reynolds): Re = vl/ν",
          {{"V", speed, 1}, {"D", length, 1}, {"ν", diffusivity, -1}}},
+        {"Reynolds number",
+         "common practice for pumps and fans (White, Fluid Mechanics, 7th ed., ch. 11, from "
+         "memory): the rotational Re = ρND²/μ",
+         {{"ρ", density, 1}, {"N", frequency, 1}, {"D", length, 2}, {"μ", viscosity, -1}}},
+        {"Reynolds number",
+         "the same with ν = μ/ρ: Re = ND²/ν",
+         {{"N", frequency, 1}, {"D", length, 2}, {"ν", diffusivity, -1}}},
         {"Euler number",
          "ISO 80000-11:2019, item 11-4.2, from memory (Euler): Eu = Δp/(ρv²)",
          {{"Δp", pressure, 1}, {"ρ", density, -1}, {"V", speed, -2}}},
@@ -207,10 +215,27 @@ TEST_CASE("named numbers are recognised from their defining variables, inverted 
           {"L", length, 3},
           {"ρ", density, 2},
           {"μ", viscosity, -2}}},
+        {"Grashof number",
+         "the same with gβ as one variable (Boussinesq): Gr = gβ·ΔT·l³/ν²",
+         {{"gβ", buoyancy, 1}, {"ΔT", temperature, 1}, {"L", length, 3}, {"ν", diffusivity, -2}}},
+        {"Grashof number",
+         "gβ as one variable and ν = μ/ρ: Gr = gβ·ΔT·l³ρ²/μ²",
+         {{"gβ", buoyancy, 1},
+          {"ΔT", temperature, 1},
+          {"L", length, 3},
+          {"ρ", density, 2},
+          {"μ", viscosity, -2}}},
         {"Rayleigh number",
          "ISO 80000-11:2019, item 11-5.3, from memory (Rayleigh): Ra = l³gα_VΔT/(νa)",
          {{"g", acceleration, 1},
           {"β", expansion, 1},
+          {"ΔT", temperature, 1},
+          {"L", length, 3},
+          {"ν", diffusivity, -1},
+          {"α", diffusivity, -1}}},
+        {"Rayleigh number",
+         "the same with gβ as one variable: Ra = gβ·ΔT·l³/(νa)",
+         {{"gβ", buoyancy, 1},
           {"ΔT", temperature, 1},
           {"L", length, 3},
           {"ν", diffusivity, -1},
@@ -279,6 +304,10 @@ TEST_CASE("named numbers are recognised from their defining variables, inverted 
         {"power coefficient",
          "common practice for pumps and fans: P/(ρN³D⁵)",
          {{"P", power, 1}, {"ρ", density, -1}, {"N", frequency, -3}, {"D", length, -5}}},
+        {"discharge coefficient",
+         "common practice for weirs and spillways: Q/√(gH⁵), the V-notch weir's C_d but for "
+         "constants (Munson et al., 6th ed., Sec. 10.6, from memory)",
+         {{"Q", flow_rate, 1}, {"g", acceleration, -half}, {"H", length, -rational(5, 2)}}},
     };
     for (const named_case& c : cases) {
         INFO(c.number);
@@ -667,5 +696,130 @@ TEST_CASE("inverted groups are turned the plain way round") {
         CHECK(a.groups[0].name == "Mach number");
         CHECK(a.groups[0].recombined_from == "1/π1");
         CHECK(a.groups[0].formula == "V/c");
+    }
+}
+
+TEST_CASE("the rotational Reynolds number of pumps and fans") {
+    // Common practice (F. M. White, Fluid Mechanics, 7th ed., ch. 11, from memory): with a
+    // rotational speed N, ND stands for the speed: Re = ρND²/μ. Dimensions: kg/m³ · 1/s · m² over
+    // kg/(m·s) = kg/(m·s) over kg/(m·s), dimensionless.
+    const group re =
+        group_of({{"ρ", density, 1}, {"n", frequency, 1}, {"D", length, 2}, {"μ", viscosity, -1}});
+    const auto matches = recognise(re);
+    INFO(listing(matches));
+    REQUIRE(matches.size() == 1);
+    CHECK(matches.front().name == "Reynolds number");
+    CHECK(matches.front().power == rational(1));
+    CHECK(name_of(re) == "Reynolds number (rotational, ρND²/μ)");
+
+    // nD²/ν with a diffusivity the name does not call ν: what it is by dimension is said.
+    const group with_x = group_of({{"n", frequency, 1}, {"D", length, 2}, {"X", diffusivity, -1}});
+    CHECK(name_of(with_x) == "Reynolds number (rotational, ND²/ν; a rotational speed times a "
+                             "length squared over a diffusivity)");
+
+    // nD/ν is not dimensionless (1/s · m over m²/s leaves 1/m), so it is no number at all.
+    const group short_d = group_of({{"n", frequency, 1}, {"D", length, 1}, {"ν", diffusivity, -1}});
+    CHECK(recognise(short_d).empty());
+}
+
+TEST_CASE("the pump's inverse rotational Reynolds group becomes ρnD²/μ") {
+    // Pump head, gH = f(ρ, n, D, Q, μ), repeating ρ, n, D (White, 7th ed., Sec. 11.4, from
+    // memory): π1 = gH/(n²D²), π2 = Q/(nD³), π3 = μ/(ρnD²). 1/π3 = ρnD²/μ: exponents of
+    // π3 (ρ −1, n −1, D −2, μ 1) negated.
+    const std::vector<group_variable> vars = {{"gH", specific_energy}, {"ρ", density},
+                                              {"n", frequency},        {"D", length},
+                                              {"Q", flow_rate},        {"μ", viscosity}};
+    group_analysis a;
+    a.rank = 3;
+    a.repeating = {1, 2, 3};
+    a.groups.push_back(basis_group(whole({1, 0, -2, -2, 0, 0}), "gH/(n^2*D^2)", true));
+    a.groups.push_back(basis_group(whole({0, 0, -1, -3, 1, 0}), "Q/(n*D^3)"));
+    a.groups.push_back(basis_group(whole({0, -1, -1, -2, 0, 1}), "μ/(ρ*n*D^2)"));
+    plumb::name_groups(a, vars);
+
+    CHECK(a.groups[0].name == "head coefficient");
+    CHECK(a.groups[0].recombined_from.empty());
+    CHECK(a.groups[1].name == "flow coefficient");
+    CHECK(a.groups[1].recombined_from.empty());
+    CHECK(a.groups[2].exponents == whole({0, 1, 1, 2, 0, -1}));
+    CHECK(a.groups[2].name == "Reynolds number (rotational, ρND²/μ)");
+    CHECK(a.groups[2].recombined_from == "1/π3");
+    CHECK(a.groups[2].formula == "ρ*n*D^2/μ");
+}
+
+TEST_CASE("Grashof with gβ as one variable, and the Prandtl number beside it") {
+    // Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., ch. 9 (from memory):
+    // Gr = gβ(T_s − T_∞)L³/ν². gβ in m/(s²·K), ΔT in K, L³ in m³, ν² in m⁴/s²: m⁴/s² over
+    // m⁴/s², dimensionless. Variables h, k, gβ, ΔT, L, ν, α as the natural-convection study.
+    const std::vector<group_variable> vars = {
+        {"h", heat_transfer}, {"k", conductivity}, {"gβ", buoyancy},  {"ΔT", temperature},
+        {"L", length},        {"ν", diffusivity},  {"α", diffusivity}};
+    group_analysis a;
+    a.groups.push_back(basis_group(whole({1, -1, 0, 0, 1, 0, 0}), "h*L/k", true));
+    a.groups.push_back(basis_group(whole({0, 0, 1, 1, 3, -2, 0}), "gβ*ΔT*L^3/ν^2"));
+    a.groups.push_back(basis_group(whole({0, 0, 0, 0, 0, -1, 1}), "α/ν"));
+    plumb::name_groups(a, vars);
+
+    CHECK(a.groups[1].name == "Grashof number");
+    CHECK(a.groups[1].recombined_from.empty()); // named already: not made a Rayleigh number
+    CHECK(a.groups[1].formula == "gβ*ΔT*L^3/ν^2");
+    // α/ν = 1/Pr (ISO 80000-11:2019, item 11-7.1, from memory) is turned round.
+    CHECK(a.groups[2].exponents == whole({0, 0, 0, 0, 0, 1, -1}));
+    CHECK(a.groups[2].name == "Prandtl number (a ratio of two diffusivities)");
+    CHECK(a.groups[2].recombined_from == "1/π3");
+
+    // gβ·ΔT·L³/(να) = Gr·Pr is the Rayleigh number (item 11-5.3, from memory).
+    const group ra = group_of({{"gβ", buoyancy, 1},
+                               {"ΔT", temperature, 1},
+                               {"L", length, 3},
+                               {"ν", diffusivity, -1},
+                               {"α", diffusivity, -1}});
+    CHECK(name_of(ra) == "Rayleigh number");
+    // Without ΔT, gβL³/ν² keeps 1/K and is not dimensionless: nothing.
+    const group no_dt = group_of({{"gβ", buoyancy, 1}, {"L", length, 3}, {"ν", diffusivity, -2}});
+    CHECK(recognise(no_dt).empty());
+}
+
+TEST_CASE("the discharge group of weirs and spillways") {
+    // Common practice (V-notch weir Q = (8/15)·C_d·√(2g)·tan(θ/2)·H^(5/2); Munson et al., 6th
+    // ed., Sec. 10.6, from memory): Q/√(gH⁵). m³/s over √(m/s² · m⁵) = m³/s, dimensionless.
+    SUBCASE("the weir: Q/(g^(1/2)·H^(5/2)) holds the dependent variable and stays as it is") {
+        const std::vector<group_variable> vars = {
+            {"Q", flow_rate}, {"g", acceleration}, {"H", length}, {"b", length}};
+        group_analysis a;
+        a.groups.push_back(basis_group({rational(1), -half, -rational(5, 2), rational(0)},
+                                       "Q/(g^(1/2)*H^(5/2))", true));
+        a.groups.push_back(basis_group(whole({0, 0, -1, 1}), "b/H"));
+        plumb::name_groups(a, vars);
+        CHECK(a.groups[0].name == "discharge coefficient (Q/√(gH⁵))");
+        CHECK(a.groups[0].recombined_from.empty());
+        CHECK(a.groups[0].formula == "Q/(g^(1/2)*H^(5/2))");
+        CHECK(a.groups[1].name == "ratio of two lengths");
+    }
+    SUBCASE("the spillway: Q²/(gP⁵) is its square, kept with whole exponents") {
+        // (Q/(g^(1/2)P^(5/2)))² = Q²/(gP⁵); the square root would bring back halves.
+        const std::vector<group_variable> vars = {
+            {"Q", flow_rate}, {"g", acceleration}, {"P", length}};
+        group_analysis a;
+        a.groups.push_back(basis_group(whole({2, -1, -5}), "Q^2/(g*P^5)"));
+        plumb::name_groups(a, vars);
+        CHECK(a.groups[0].exponents == whole({2, -1, -5}));
+        CHECK(a.groups[0].name == "square of the discharge coefficient (Q/√(gH⁵))");
+        CHECK(a.groups[0].recombined_from.empty());
+        const auto matches =
+            recognise(group_of({{"Q", flow_rate, 2}, {"g", acceleration, -1}, {"P", length, -5}}));
+        INFO(listing(matches));
+        REQUIRE(matches.size() == 1);
+        CHECK(matches.front().power == rational(2));
+    }
+    SUBCASE("gP⁵/Q² is turned round to the square") {
+        const std::vector<group_variable> vars = {
+            {"Q", flow_rate}, {"g", acceleration}, {"P", length}};
+        group_analysis a;
+        a.groups.push_back(basis_group(whole({-2, 1, 5}), "g*P^5/Q^2"));
+        plumb::name_groups(a, vars);
+        CHECK(a.groups[0].exponents == whole({2, -1, -5}));
+        CHECK(a.groups[0].recombined_from == "1/π1");
+        CHECK(a.groups[0].formula == "Q^2/(g*P^5)");
     }
 }

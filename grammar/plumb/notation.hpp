@@ -35,7 +35,6 @@ struct number : seq<sor<seq<digits, opt<one<'.'>, star<digit>>>, seq<one<'.'>, d
                     opt<decimal_exponent>> {};
 // "2g" is a product written without its operator; say so instead of failing further on.
 struct number_end : not_at<name_char> {};
-struct number_term : seq<number, must<number_end>> {};
 
 // An exponent written inside a unit or a dimension: 3, -2, 0.5, (1/2), (-3/2).
 struct signed_decimal : seq<opt<one<'-', '+'>>, digits, opt<one<'.'>, digits>> {};
@@ -52,6 +51,17 @@ struct expression;
 struct group_close : one<')'> {};
 struct group : if_must<one<'('>, ws, expression, ws, group_close> {};
 
+// A quantity in braces: "0.5 {m}" is half a metre, "{g_n}" standard gravity (a named
+// constant, or one unit). The braces keep a unit apart from the symbols around it.
+struct brace_open : one<'{'> {};
+struct brace_close : one<'}'> {};
+struct braced_unit;
+// A number whose dimension the checker is to infer: "1.486?" in an empirical formula.
+struct inferred_mark : one<'?'> {};
+struct number_term
+    : seq<number, must<number_end>, opt<sor<seq<star<space>, braced_unit>, inferred_mark>>> {};
+struct quantity_term : seq<braced_unit> {};
+
 // A name followed by '(' is a function call; the name is read once either way.
 struct symbol : name {};
 struct call_open : one<'('> {};
@@ -63,7 +73,7 @@ struct call_arguments
 struct symbol_or_call : seq<symbol, opt<star<space>, call_arguments>> {};
 
 // `pi` and `π` are names to the grammar; the parser makes them the number.
-struct primary : sor<number_term, symbol_or_call, group> {};
+struct primary : sor<number_term, quantity_term, symbol_or_call, group> {};
 
 struct unary;
 struct power_operand : seq<unary> {};
@@ -141,12 +151,15 @@ struct unit_factor : unit_power {};
 struct unit_multiply : seq<star<space>, multiply_sign, star<space>, must<unit_factor>> {};
 struct unit_divide : seq<star<space>, one<'/'>, star<space>, must<unit_factor>> {};
 struct unit_expression : seq<unit_power, star<sor<unit_multiply, unit_divide>>> {};
+struct braced_unit : if_must<brace_open, star<space>, unit_expression, star<space>, brace_close> {};
 
 // --- Declarations -------------------------------------------------------------------------
 struct declared_name : name {};
 struct next_declared_name : if_must<one<','>, ws, declared_name> {};
 struct name_list : seq<declared_name, star<ws, next_declared_name>> {};
-struct declaration_spec : sor<dimension_brackets, unit_expression> {};
+// "X : ?" declares a symbol whose dimension the checker infers from the formulas.
+struct unknown_dimension : one<'?'> {};
+struct declaration_spec : sor<unknown_dimension, dimension_brackets, unit_expression> {};
 struct constant_value : seq<opt<one<'-'>>, number, must<number_end>> {};
 struct constant_assignment : if_must<one<'='>, ws, constant_value> {};
 struct description_close : one<'"'> {};

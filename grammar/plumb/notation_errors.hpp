@@ -31,10 +31,10 @@ template <> inline constexpr const char* error_message<fraction_body> = "expecte
 template <> inline constexpr const char* error_message<digits> = "expected a whole number here";
 template <> inline constexpr const char* error_message<fraction_close> = "expected ')' after the exponent";
 template <> inline constexpr const char* error_message<dimension_close> = "expected a base dimension (M, L, T, \u0398, N, I, J) or ']'; write a quotient with negative exponents, as in [L T^-1]";
-template <> inline constexpr const char* error_message<unit_expression> = "expected a unit after '('";
+template <> inline constexpr const char* error_message<unit_expression> = "expected a unit here, such as m/s";
 template <> inline constexpr const char* error_message<unit_group_close> = "expected ')' to close the unit's parenthesis";
 template <> inline constexpr const char* error_message<unit_factor> = "expected a unit after '*' or '/'";
-template <> inline constexpr const char* error_message<declaration_spec> = "expected a dimension such as [M L^-3], a unit such as kg/m^3, or 1 for a dimensionless symbol";
+template <> inline constexpr const char* error_message<declaration_spec> = "expected a dimension such as [M L^-3], a unit such as kg/m^3, 1 for a dimensionless symbol, or ? for one to infer";
 template <> inline constexpr const char* error_message<constant_value> = "expected a number after '=' (the constant's value in the stated unit)";
 template <> inline constexpr const char* error_message<description_close> = "the description has no closing '\"'";
 template <> inline constexpr const char* error_message<declared_name> = "expected a name after ','";
@@ -47,6 +47,7 @@ template <> inline constexpr const char* error_message<case_items> = "expected v
 template <> inline constexpr const char* error_message<case_item> = "expected a value such as V = 3 m/s, or scale = 1:25";
 template <> inline constexpr const char* error_message<value_quantity> = "expected a number and its unit, as in 3 m/s";
 template <> inline constexpr const char* error_message<scale_value> = "expected the model scale as a ratio such as 1:25, or a number such as 0.04";
+template <> inline constexpr const char* error_message<brace_close> = "expected '}' to close the braces; inside them goes a unit such as m/s or a constant such as g_n";
 template <> inline constexpr const char* error_message<line_end> = "expected an operator, a comparison or the end of the line here";
 // clang-format on
 

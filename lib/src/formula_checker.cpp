@@ -7,7 +7,9 @@
 #include "plumb/rules.hpp"
 
 #include <algorithm>
+#include <cmath>
 #include <fmt/format.h>
+#include <limits>
 #include <span>
 
 namespace plumb {
@@ -22,6 +24,12 @@ struct typed {
     bool zero = false;             // the literal 0, which agrees with any dimension
     bool numeric = false;          // built from numbers alone
     std::optional<rational> value; // exact value, when numeric and exactly representable
+    // SI value per written value: the product of the declared units' factors. Terms that agree
+    // in dimension but not in scale give numbers off by that factor.
+    double scale = 1.0;
+    // Set while the value is on an offset scale (°C, °F, gauge pressure): it may be compared
+    // and subtracted, but not multiplied, divided or raised to a power.
+    const unit_definition* offset = nullptr;
 };
 
 typed unknown_type() {
@@ -41,6 +49,7 @@ std::string describe(const dimension& d) {
 struct operand {
     std::uint32_t node;
     typed type;
+    bool subtracted = false; // a term after '-'
 };
 
 struct agreement {
@@ -164,11 +173,16 @@ class checker {
             return eval_call(n);
         case expr_kind::group:
             return eval(n.lhs);
+        case expr_kind::quantity:
+            return eval_quantity(n);
+        case expr_kind::inferred:
+            return unknown_type(); // its dimension is inferred afterwards, not checked here
         }
         return unknown_type();
     }
 
     void check_formula(const syntax::formula& f) {
+        current_ = &f;
         const std::size_t base = operands_.size();
         bool equation = true;
         for (std::uint32_t i = 0; i < f.side_count; ++i) {
@@ -182,9 +196,11 @@ class checker {
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
         const agreement a = find_agreement(sides);
-        if (a.odd.empty())
-            return;
         const char* what = equation ? "equation" : "limit";
+        if (a.odd.empty()) {
+            check_scales(sides, equation ? "sides of this equation" : "sides of this limit");
+            return;
+        }
         std::string message =
             sides.size() == 2 ? fmt::format("the two sides of this {} differ in dimension", what)
                               : fmt::format("the sides of this {} differ in dimension", what);
@@ -237,6 +253,7 @@ class checker {
     // warm. Each user takes the part above the size it found and gives it back.
     std::vector<std::uint32_t>& spine_;
     std::vector<operand>& operands_;
+    const syntax::formula* current_ = nullptr; // the formula being checked
 
     std::string_view text(span s) const { return file_.source->text(s); }
 
@@ -322,6 +339,19 @@ class checker {
                                {}});
     }
 
+    typed eval_quantity(const syntax::expr_node& n) const {
+        const syntax::quantity_literal& q = file_.quantities[n.lhs];
+        if (!q.dim)
+            return unknown_type();
+        typed t;
+        t.dim = *q.dim;
+        // A constant stands for its SI value; a number in braces is in the unit written.
+        t.scale = q.constant ? 1.0 : q.si_factor;
+        if (q.single_unit != nullptr && q.single_unit->scale != unit_scale::absolute)
+            t.offset = q.single_unit;
+        return t;
+    }
+
     typed eval_number(const syntax::expr_node& n) const {
         typed t;
         t.numeric = true;
@@ -361,6 +391,8 @@ class checker {
             return unknown_type();
         typed t;
         t.dim = *entry->dim;
+        t.scale = entry->si_factor;
+        t.offset = entry->offset_unit;
         return t;
     }
 
@@ -394,11 +426,12 @@ class checker {
                 result.value = subtracted ? *result.value - *t.value : *result.value + *t.value;
             else
                 result.value.reset();
-            operands_.push_back({node, std::move(t)});
+            operands_.push_back({node, std::move(t), subtracted});
         }
         const bool last_subtracted = file_.nodes[index].kind == expr_kind::subtract;
         spine_.resize(spine_base);
 
+        const bool converted = recognise_offset_conversion(base);
         const scratch_region region(operands_, base);
         const std::span<const operand> terms = region.view();
         const agreement a = find_agreement(terms);
@@ -425,7 +458,227 @@ class checker {
             result.dim = *a.reference;
         if (!result.numeric)
             result.value.reset();
+        // After a unit-scale warning the scale is unknown (NaN), so it is not reported again
+        // further up; the dimension stays known.
+        result.scale = check_scales(terms, "terms of this sum")
+                           ? first_scale(terms)
+                           : std::numeric_limits<double>::quiet_NaN();
+        result.offset = converted ? nullptr : offset_of_sum(terms);
         return result;
+    }
+
+    // In a sum with a value on an offset scale, a bare number is a value on that scale
+    // ("T_F = 1.8*T_C + 32"); one that is exactly the scale's offset, as a number (273.15,
+    // 459.67) or as a quantity (273.15 {K}, 14.7 {psi}, {p_atm}), converts the sum to the
+    // absolute scale.
+    bool recognise_offset_conversion(std::size_t base) {
+        const typed* offset_term = nullptr;
+        for (std::size_t i = base; i < operands_.size(); ++i)
+            if (operands_[i].type.known && operands_[i].type.offset != nullptr)
+                offset_term = &operands_[i].type;
+        if (offset_term == nullptr)
+            return false;
+        const unit_definition& unit = *offset_term->offset;
+        const dimension dim = offset_term->dim;
+        const double scale = offset_term->scale;
+        // People write 14.7 for 14.696 psi: a relative 1e-3 covers the usual roundings.
+        const auto is_shift = [&](double si_value) {
+            return std::abs(si_value - unit.offset) <= 1e-3 * std::abs(unit.offset);
+        };
+        bool converted = false;
+        for (std::size_t i = base; i < operands_.size(); ++i) {
+            typed& t = operands_[i].type;
+            const syntax::expr_node& n = file_.nodes[operands_[i].node];
+            if (t.numeric && t.value && t.dim.is_dimensionless()) {
+                t.dim = dim;
+                t.scale = scale;
+                converted = converted || (!operands_[i].subtracted &&
+                                          is_shift(t.value->to_double() * unit.factor));
+            } else if (n.kind == expr_kind::quantity && t.known && t.offset == nullptr &&
+                       !operands_[i].subtracted && t.dim == dim && is_shift(quantity_si_value(n))) {
+                converted = true;
+                t.scale = scale; // the conversion is exact whatever unit it is written in
+            }
+        }
+        return converted;
+    }
+
+    // The SI value of "14.7 {psi}" or "{p_atm}".
+    double quantity_si_value(const syntax::expr_node& n) const {
+        const syntax::quantity_literal& q = file_.quantities[n.lhs];
+        if (q.constant)
+            return q.si_factor;
+        const std::string_view t = text(n.range);
+        const auto number = rational::parse(t.substr(0, t.find_first_of(" \t{")));
+        return number ? number->to_double() * q.si_factor : 0.0;
+    }
+
+    // Offsets cancel in a difference (T_2 - T_1 is a plain temperature difference); a sum with
+    // one more offset value added than subtracted is still on the offset scale.
+    static const unit_definition* offset_of_sum(std::span<const operand> terms) {
+        int balance = 0;
+        const unit_definition* unit = nullptr;
+        for (const auto& t : terms) {
+            if (t.type.offset == nullptr)
+                continue;
+            unit = t.type.offset;
+            balance += t.subtracted ? -1 : 1;
+        }
+        return balance == 0 ? nullptr : unit;
+    }
+
+    static double first_scale(std::span<const operand> ops) {
+        for (const auto& op : ops)
+            if (op.type.known && !op.type.zero && !op.type.numeric)
+                return op.type.scale;
+        return 1.0;
+    }
+
+    // Terms of one dimension in different units give numbers off by a factor, unless a number
+    // in the formula supplies exactly that conversion. False when a finding was reported.
+    bool check_scales(std::span<const operand> ops, std::string_view what) {
+        const operand* reference = nullptr;
+        for (const auto& op : ops) {
+            if (!op.type.known || op.type.zero)
+                continue;
+            if (op.type.numeric && op.type.dim.is_dimensionless())
+                continue; // a bare number carries no unit of its own
+            if (!std::isfinite(op.type.scale))
+                continue; // already reported below
+            if (reference == nullptr) {
+                reference = &op;
+                continue;
+            }
+            const double ratio = reference->type.scale / op.type.scale;
+            if (std::abs(ratio - 1.0) <= 1e-9 || conversion_in_formula(ratio))
+                continue;
+            // A warning: in a unit-aware calc the units convert themselves; where numbers are
+            // put in as declared (spreadsheets, code), the result is off by the ratio.
+            diagnostic& d = report(rules::unit_scale,
+                                   fmt::format("as written, {} counts {} times as much as {}: the "
+                                               "{} agree in dimension but not in unit",
+                                               quote(op.node), format_ratio(ratio),
+                                               quote(reference->node), what),
+                                   file_.nodes[op.node].range);
+            d.level = severity::warning;
+            add_term(d, op);
+            add_term(d, *reference);
+            for (const operand* side : {&op, reference}) {
+                const std::string units = units_in(side->node);
+                if (!units.empty())
+                    d.notes.push_back({fmt::format("in {}: {}", quote(side->node), units), {}});
+            }
+            d.notes.push_back({"convert one of them (declare the symbols in coherent units, or "
+                               "write the conversion factor into the formula)",
+                               {}});
+            return false;
+        }
+        return true;
+    }
+
+    static std::string format_ratio(double r) { return fmt::format("{:.6g}", r); }
+
+    // Whether the numbers written in the current formula supply the ratio: one of them, or a
+    // product or quotient of two (5/9 for 1.8), is the ratio or its inverse.
+    bool conversion_in_formula(double ratio) const {
+        if (current_ == nullptr)
+            return false;
+        std::vector<double> numbers;
+        visit_nodes([&](const syntax::expr_node& n) {
+            if (n.kind != expr_kind::number || numbers.size() >= 32)
+                return;
+            const auto v = rational::parse(text(n.range));
+            if (v && !v->is_zero())
+                numbers.push_back(std::abs(v->to_double()));
+        });
+        const auto matches = [ratio](double x) {
+            return std::abs(ratio * x - 1.0) <= 1e-6 || std::abs(ratio / x - 1.0) <= 1e-6;
+        };
+        for (std::size_t i = 0; i < numbers.size(); ++i) {
+            if (matches(numbers[i]))
+                return true;
+            for (std::size_t j = i + 1; j < numbers.size(); ++j)
+                if (matches(numbers[i] * numbers[j]) || matches(numbers[i] / numbers[j]))
+                    return true;
+        }
+        return false;
+    }
+
+    // "'D' is in mm, 'Q' in L/s": the symbols under a node declared in non-coherent units.
+    std::string units_in(std::uint32_t root) const {
+        std::string out;
+        std::vector<std::uint32_t> stack{root};
+        std::size_t listed = 0;
+        while (!stack.empty() && listed < 6) {
+            const syntax::expr_node& n = file_.nodes[stack.back()];
+            stack.pop_back();
+            if (n.kind == expr_kind::symbol) {
+                const symbol_entry* e = symbols_.find(text(n.range));
+                if (e != nullptr && !e->unit_text.empty() && std::abs(e->si_factor - 1.0) > 1e-12 &&
+                    out.find(fmt::format("'{}'", text(n.range))) == std::string::npos) {
+                    out += fmt::format("{}'{}' is in {}", out.empty() ? "" : ", ", text(n.range),
+                                       e->unit_text);
+                    ++listed;
+                }
+            } else if (n.kind == expr_kind::call) {
+                for (std::uint32_t i = 0; i < n.rhs; ++i)
+                    stack.push_back(file_.call_args[n.lhs + i]);
+            } else if (n.kind != expr_kind::number && n.kind != expr_kind::pi &&
+                       n.kind != expr_kind::quantity && n.kind != expr_kind::inferred) {
+                if (n.rhs != syntax::no_index)
+                    stack.push_back(n.rhs);
+                if (n.lhs != syntax::no_index)
+                    stack.push_back(n.lhs);
+            }
+        }
+        return out;
+    }
+
+    template <typename F> void visit_nodes(F&& f) const {
+        std::vector<std::uint32_t> stack;
+        for (std::uint32_t i = 0; i < current_->side_count; ++i)
+            stack.push_back(file_.sides[current_->first_side + i].root);
+        while (!stack.empty()) {
+            const syntax::expr_node& n = file_.nodes[stack.back()];
+            stack.pop_back();
+            f(n);
+            if (n.kind == expr_kind::call) {
+                for (std::uint32_t i = 0; i < n.rhs; ++i)
+                    stack.push_back(file_.call_args[n.lhs + i]);
+            } else if (n.kind != expr_kind::number && n.kind != expr_kind::pi &&
+                       n.kind != expr_kind::symbol && n.kind != expr_kind::quantity &&
+                       n.kind != expr_kind::inferred) {
+                if (n.rhs != syntax::no_index)
+                    stack.push_back(n.rhs);
+                if (n.lhs != syntax::no_index)
+                    stack.push_back(n.lhs);
+            }
+        }
+    }
+
+    // A value on an offset scale used where only an absolute one makes sense.
+    void report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where) {
+        const bool temperature =
+            unit.exponents[static_cast<std::size_t>(base_dimension::temperature)] != 0;
+        diagnostic& d =
+            report(rules::offset_scale,
+                   fmt::format("{} is on the {} scale, whose zero is arbitrary, so it cannot be {}",
+                               quote(node), unit.symbol, where),
+                   file_.nodes[node].range);
+        d.notes.push_back(
+            {temperature
+                 ? fmt::format("gas laws, Arrhenius and radiation need absolute temperature: "
+                               "declare it in K (or °R), or convert the {} value first by adding "
+                               "{:g}",
+                               unit.symbol, unit.offset / unit.factor)
+                 : fmt::format("gas laws and pressure ratios need absolute pressure: add the "
+                               "atmospheric pressure, or declare it as an absolute pressure "
+                               "(Pa, bar, psia)"),
+             {}});
+        d.notes.push_back(
+            {"a difference of two values on the same scale, such as T_2 - T_1, is an ordinary "
+             "quantity and may be used freely",
+             {}});
     }
 
     typed eval_product(std::uint32_t index) {
@@ -438,11 +691,28 @@ class checker {
         }
         typed result = eval(n);
         result.zero = false;
+        std::uint32_t offset_node = n;
         // Spine nodes were pushed outermost first; the innermost applies first.
         for (std::size_t k = spine_.size(); k > spine_base; --k) {
             const syntax::expr_node& op = file_.nodes[spine_[k - 1]];
             const bool divided = op.kind == expr_kind::divide;
             const typed t = eval(op.rhs);
+            // An offset value may be scaled by a pure number (the mean (T_1 + T_2)/2), not
+            // multiplied by a quantity.
+            if (result.known && t.known && (result.offset != nullptr || t.offset != nullptr) &&
+                !(result.offset != nullptr && t.numeric) &&
+                !(t.offset != nullptr && result.numeric && !divided)) {
+                const bool left = result.offset != nullptr;
+                report_offset(left ? offset_node : op.rhs, left ? *result.offset : *t.offset,
+                              divided ? "used in a quotient" : "multiplied");
+                spine_.resize(spine_base);
+                return unknown_type();
+            }
+            if (t.offset != nullptr) {
+                result.offset = t.offset;
+                offset_node = op.rhs;
+            }
+            result.scale = divided ? result.scale / t.scale : result.scale * t.scale;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
             if (result.known)
@@ -478,8 +748,14 @@ class checker {
         }
         if (!base.known || !exponent.known)
             return unknown_type();
+        if (base.offset != nullptr && !(exponent.value && *exponent.value == rational(1))) {
+            report_offset(base_node, *base.offset, "raised to a power");
+            return unknown_type();
+        }
         typed result;
         result.numeric = base.numeric && exponent.numeric;
+        if (exponent.value)
+            result.scale = std::pow(base.scale, exponent.value->to_double());
         if (base.dim.is_dimensionless()) {
             result.value = exact_power(base.value, exponent.value);
             return result;
@@ -590,17 +866,30 @@ class checker {
         case function_rule::root:
             if (!args[0].type.known)
                 return unknown_type();
+            if (args[0].type.offset != nullptr) {
+                report_offset(args[0].node, *args[0].type.offset,
+                              fmt::format("the argument of {}", f->name));
+                return unknown_type();
+            }
             result.dim = args[0].type.dim.pow(f->power);
+            result.scale = std::pow(args[0].type.scale, f->power.to_double());
             return result;
         case function_rule::same:
             if (!args[0].type.known)
                 return unknown_type();
             result.dim = args[0].type.dim;
+            result.scale = args[0].type.scale;
+            result.offset = args[0].type.offset;
             return result;
         case function_rule::dimensionless:
         case function_rule::log_base:
-            for (const auto& a : args)
-                require_dimensionless(*f, a);
+            for (const auto& a : args) {
+                if (a.type.known && a.type.offset != nullptr)
+                    report_offset(a.node, *a.type.offset,
+                                  fmt::format("the argument of {}", f->name));
+                else if (require_dimensionless(*f, a))
+                    require_unit_free(*f, a);
+            }
             return result;
         case function_rule::angle_of:
         case function_rule::common: {
@@ -613,12 +902,16 @@ class checker {
                 explain(d, args, a, "arguments");
                 return unknown_type();
             }
+            const bool scales_agree = check_scales(args, fmt::format("arguments of {}", f->name));
             if (f->rule == function_rule::angle_of)
                 return result;
             if (!std::all_of(args.begin(), args.end(),
                              [](const operand& o) { return o.type.known; }))
                 return unknown_type();
             result.dim = a.reference.value_or(dimension{});
+            result.scale =
+                scales_agree ? first_scale(args) : std::numeric_limits<double>::quiet_NaN();
+            result.offset = args[0].type.offset;
             return result;
         }
         case function_rule::power:
@@ -631,9 +924,28 @@ class checker {
         return unknown_type();
     }
 
-    void require_dimensionless(const builtin_function& f, const operand& a) {
-        if (!a.type.known || a.type.dim.is_dimensionless())
+    // A dimensionless argument written in mixed units (ln(p/p_ref) with p in kPa and p_ref in
+    // Pa) is off by the factor between them.
+    void require_unit_free(const builtin_function& f, const operand& a) {
+        if (!a.type.known || !std::isfinite(a.type.scale) || std::abs(a.type.scale - 1.0) <= 1e-9 ||
+            a.type.numeric || conversion_in_formula(1.0 / a.type.scale))
             return;
+        diagnostic& d = report(rules::unit_scale,
+                               fmt::format("as written, the argument of {} is {} times its true "
+                                           "value: its units do not cancel",
+                                           f.name, format_ratio(1.0 / a.type.scale)),
+                               file_.nodes[a.node].range);
+        d.level = severity::warning;
+        add_term(d, a);
+        const std::string units = units_in(a.node);
+        if (!units.empty())
+            d.notes.push_back({units, {}});
+    }
+
+    // True when the argument is dimensionless (or unknown), false when a finding was made.
+    bool require_dimensionless(const builtin_function& f, const operand& a) {
+        if (!a.type.known || a.type.dim.is_dimensionless())
+            return true;
         const bool trig = f.name.find("sin") != std::string_view::npos ||
                           f.name.find("cos") != std::string_view::npos ||
                           f.name.find("tan") != std::string_view::npos;
@@ -647,6 +959,7 @@ class checker {
                                 : std::string("divide by a reference value of the same dimension, "
                                               "as in ln(p/p_ref)"),
                            {}});
+        return false;
     }
 
     typed derivative(const std::vector<operand>& args) {
@@ -667,6 +980,7 @@ class checker {
             return unknown_type();
         typed result;
         result.dim = args[0].type.dim / args[1].type.dim.pow(order);
+        result.scale = args[0].type.scale / std::pow(args[1].type.scale, order.to_double());
         return result;
     }
 
@@ -699,6 +1013,7 @@ class checker {
             return unknown_type();
         typed result;
         result.dim = args[0].type.dim * args[1].type.dim;
+        result.scale = args[0].type.scale * args[1].type.scale;
         return result;
     }
 };

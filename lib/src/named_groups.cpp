@@ -49,6 +49,9 @@ constexpr exponents power = dims(1, 2, -3);
 constexpr exponents specific_energy = dims(0, 2, -2); // gH as one variable
 constexpr exponents temperature = dims(0, 0, 0, 1);
 constexpr exponents expansion = dims(0, 0, 0, -1); // thermal expansion coefficient
+// Gravity times the expansion coefficient, gβ, as one variable: with the Boussinesq
+// approximation the two occur only as that product.
+constexpr exponents buoyancy = dims(0, 1, -2, -1);
 constexpr exponents heat_transfer = dims(1, 0, -3, -1);
 constexpr exponents conductivity = dims(1, 1, -3, -1);
 constexpr exponents specific_heat = dims(0, 2, -2, -1);
@@ -132,6 +135,8 @@ constexpr std::string_view diffusion_ratio = "a ratio of two diffusivities";
 constexpr std::string_view diffusion_ratio_eta = "a ratio of two diffusivities, one as η/ρ";
 constexpr std::string_view diffusion_ratio_lambda = "a ratio of two diffusivities, one as λ/(ρc_p)";
 constexpr std::string_view transport = "a speed times a length over a diffusivity";
+constexpr std::string_view rotational_transport =
+    "a rotational speed times a length squared over a diffusivity";
 constexpr std::string_view length_ratio = "a ratio of two lengths";
 constexpr std::string_view dynamic_pressure = "a pressure over ρv²";
 constexpr std::string_view force_area = "a force over ρv² times an area";
@@ -148,6 +153,15 @@ constexpr definition table[] = {
     def("Reynolds number", {q(density, 1), q(speed, 1), q(length, 1), q(viscosity, -1)}),
     def("Reynolds number",
         {q(speed, 1), q(length, 1), q(diffusivity, -1, hint::kinematic_viscosity)}, transport),
+    // Common practice for pumps and fans (F. M. White, Fluid Mechanics, 7th ed., ch. 11, from
+    // memory): the rotational Reynolds number ρND²/μ = ND²/ν, N a rotational speed, ND taking
+    // the place of the speed.
+    noted(def("Reynolds number", {q(density, 1), q(frequency, 1), q(length, 2), q(viscosity, -1)}),
+          "rotational, ρND²/μ", max_slots),
+    noted(def("Reynolds number",
+              {q(frequency, 1), q(length, 2), q(diffusivity, -1, hint::kinematic_viscosity)},
+              rotational_transport),
+          "rotational, ND²/ν", max_slots),
     // ISO 80000-11:2019, item 11-4.2 (from memory): Eu = Δp/(ρv²).
     def("Euler number", {q(pressure, 1, hint::pressure_difference), q(density, -1), q(speed, -2)},
         dynamic_pressure),
@@ -192,6 +206,11 @@ constexpr definition table[] = {
                            q(diffusivity, -2, hint::kinematic_viscosity)}),
     def("Grashof number", {q(acceleration, 1), q(length, 3), q(expansion, 1), q(temperature, 1),
                            q(density, 2), q(viscosity, -2)}),
+    // The same with gβ as one variable, the way the Boussinesq approximation leaves it.
+    def("Grashof number", {q(buoyancy, 1), q(length, 3), q(temperature, 1),
+                           q(diffusivity, -2, hint::kinematic_viscosity)}),
+    def("Grashof number",
+        {q(buoyancy, 1), q(length, 3), q(temperature, 1), q(density, 2), q(viscosity, -2)}),
     // ISO 80000-11:2019, item 11-5.3 (from memory): Ra = l³gα_VΔT/(νa), with ν as η/ρ and a
     // as λ/(ρc_p) where a problem lists those instead: Gr·Pr in every spelling.
     def("Rayleigh number", {q(acceleration, 1), q(length, 3), q(expansion, 1), q(temperature, 1),
@@ -206,6 +225,10 @@ constexpr definition table[] = {
     def("Rayleigh number",
         {q(acceleration, 1), q(length, 3), q(expansion, 1), q(temperature, 1), q(density, 2),
          q(specific_heat, 1), q(viscosity, -1), q(conductivity, -1)}),
+    // And with gβ as one variable: gβΔTl³/(νa).
+    def("Rayleigh number", {q(buoyancy, 1), q(length, 3), q(temperature, 1),
+                            q(diffusivity, -1, hint::kinematic_viscosity),
+                            q(diffusivity, -1, hint::thermal_diffusivity)}),
     // ISO 80000-11:2019, item 11-5.1 (from memory): Fo = at/l².
     def("Fourier number", {q(diffusivity, 1), q(time_, 1), q(length, -2)}),
     def("Fourier number",
@@ -279,6 +302,13 @@ constexpr definition table[] = {
         def("head coefficient", {q(pressure, 1), q(density, -1), q(frequency, -2), q(length, -2)}),
         "a pressure rise in place of ρgH", max_slots),
     def("power coefficient", {q(power, 1), q(density, -1), q(frequency, -3), q(length, -5)}),
+    // Common practice for weirs and spillways: the discharge group Q/√(gH⁵), H a head or height.
+    // It is the discharge coefficient of the V-notch weir equation
+    // Q = (8/15)·C_d·√(2g)·tan(θ/2)·H^(5/2) but for the constant factors (e.g. Munson et al.,
+    // Fundamentals of Fluid Mechanics, 6th ed., Sec. 10.6, from memory); for a rectangular weir
+    // of width b it is C_w·b/H, C_w of Q = C_w·b·√g·H^(3/2).
+    noted(def("discharge coefficient", {q(flow_rate, 1), half(acceleration, -1), half(length, -5)}),
+          "Q/√(gH⁵)", max_slots),
 };
 
 // A wrong exponent in the table would name groups that are not dimensionless.

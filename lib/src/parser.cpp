@@ -3,6 +3,7 @@
 // operand stack is always consistent.
 #include "parser.hpp"
 
+#include "plumb/constants.hpp"
 #include "plumb/notation.hpp"
 #include "plumb/notation_errors.hpp"
 #include "plumb/rules.hpp"
@@ -69,6 +70,7 @@ struct unit_value {
     double factor = 1.0;
     const unit_definition* single = nullptr;
     bool ok = true;
+    bool constant = false;
 };
 
 struct parse_state {
@@ -82,6 +84,8 @@ struct parse_state {
     std::vector<std::uint32_t> operands;
     std::vector<std::uint32_t> argument_counts;
     int depth = 0;
+    bool in_braces = false;
+    bool line_has_inferred = false;
     std::uint32_t formula_first_side = 0;
     relation_kind pending_relation = relation_kind::none;
     span pending_label{};
@@ -134,6 +138,8 @@ struct parse_state {
     }
     void reset_line() {
         depth = 0;
+        in_braces = false;
+        line_has_inferred = false;
         operands.clear();
         argument_counts.clear();
         pending_relation = relation_kind::none;
@@ -176,12 +182,51 @@ std::optional<rational> exponent_value(std::string_view text) {
     return rational::parse(compact);
 }
 
+// The unit (or constant) of a braced quantity is on the unit stack; it becomes a node.
+template <typename In> void push_quantity(const In& in, parse_state& s) {
+    const unit_value u = s.units.back();
+    s.units.pop_back();
+    syntax::quantity_literal q;
+    if (u.ok)
+        q.dim = u.dim;
+    q.si_factor = u.factor;
+    q.single_unit = u.single;
+    q.constant = u.constant;
+    s.out.quantities.push_back(q);
+    s.push_node({expr_kind::quantity, s.range(in),
+                 static_cast<std::uint32_t>(s.out.quantities.size() - 1)});
+}
+
 template <typename Rule> struct action : pg::nothing<Rule> {};
 
 // --- Expressions ---
+// A number, a number with a unit in braces, or a number marked for inference.
 template <> struct action<nt::number_term> {
     template <typename In> static void apply(const In& in, parse_state& s) {
+        const std::string_view t = in.string_view();
+        if (t.back() == '?') {
+            s.line_has_inferred = true;
+            s.push_node({expr_kind::inferred, s.range(in)});
+            return;
+        }
+        if (t.back() == '}') {
+            push_quantity(in, s);
+            return;
+        }
         s.push_node({expr_kind::number, s.range(in)});
+    }
+};
+template <> struct action<nt::quantity_term> {
+    template <typename In> static void apply(const In& in, parse_state& s) { push_quantity(in, s); }
+};
+template <> struct action<nt::brace_open> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.in_braces = true;
+    }
+};
+template <> struct action<nt::brace_close> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.in_braces = false;
     }
 };
 template <> struct action<nt::symbol> {
@@ -287,7 +332,8 @@ template <> struct action<nt::side> {
 template <> struct action<nt::formula> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const auto count = static_cast<std::uint32_t>(s.out.sides.size()) - s.formula_first_side;
-        s.out.formulas.push_back({s.range(in), s.pending_label, s.formula_first_side, count});
+        s.out.formulas.push_back(
+            {s.range(in), s.pending_label, s.formula_first_side, count, s.line_has_inferred});
     }
 };
 
@@ -333,6 +379,12 @@ template <> struct action<nt::dimension_brackets> {
 template <> struct action<nt::unit_symbol> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const std::string_view text = in.string_view();
+        if (s.in_braces) {
+            if (const physical_constant* c = find_constant(text)) {
+                s.units.push_back({c->dim(), c->value, nullptr, true, true});
+                return;
+            }
+        }
         const auto unit = unit_table::standard().resolve(text);
         if (!unit) {
             std::string message = fmt::format("unknown unit '{}'", text);
@@ -353,7 +405,8 @@ template <> struct action<nt::unit_symbol> {
             s.units.push_back({{}, 1.0, nullptr, false});
             return;
         }
-        s.units.push_back({unit->dim(), unit->factor(), unit->prefix ? nullptr : unit->unit, true});
+        s.units.push_back(
+            {unit->dim(), unit->factor(), unit->prefix ? nullptr : unit->unit, true, false});
     }
 };
 template <> struct action<nt::unit_one> {
@@ -410,6 +463,10 @@ template <> struct action<nt::declared_name> {
 template <> struct action<nt::declaration_spec> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         s.pending_spec = s.range(in);
+        if (in.string_view() == "?") {
+            s.pending_kind.to_infer = true;
+            return;
+        }
         if (s.spec_in_brackets) {
             s.pending_kind.dim = s.bracket_dimension;
             return;
@@ -588,17 +645,18 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin) {
 
 // Rolls back whatever a failed line added, so the tree holds only complete statements.
 struct tree_mark {
-    std::size_t nodes, call_args, sides, formulas, declarations, names, uses, studies, study_names,
-        cases, case_values, diagnostics;
+    std::size_t nodes, call_args, quantities, sides, formulas, declarations, names, uses, studies,
+        study_names, cases, case_values, diagnostics;
     explicit tree_mark(const syntax::parsed_file& f)
-        : nodes(f.nodes.size()), call_args(f.call_args.size()), sides(f.sides.size()),
-          formulas(f.formulas.size()), declarations(f.declarations.size()), names(f.names.size()),
-          uses(f.uses.size()), studies(f.studies.size()), study_names(f.study_names.size()),
-          cases(f.cases.size()), case_values(f.case_values.size()),
-          diagnostics(f.diagnostics.size()) {}
+        : nodes(f.nodes.size()), call_args(f.call_args.size()), quantities(f.quantities.size()),
+          sides(f.sides.size()), formulas(f.formulas.size()), declarations(f.declarations.size()),
+          names(f.names.size()), uses(f.uses.size()), studies(f.studies.size()),
+          study_names(f.study_names.size()), cases(f.cases.size()),
+          case_values(f.case_values.size()), diagnostics(f.diagnostics.size()) {}
     void restore(syntax::parsed_file& f) const {
         f.nodes.resize(nodes);
         f.call_args.resize(call_args);
+        f.quantities.resize(quantities);
         f.sides.resize(sides);
         f.formulas.resize(formulas);
         f.declarations.resize(declarations);
@@ -621,6 +679,7 @@ void tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark)
     if (out.formulas.size() > mark.formulas && sink.on_formula(out, out.formulas.back())) {
         out.nodes.resize(mark.nodes);
         out.call_args.resize(mark.call_args);
+        out.quantities.resize(mark.quantities);
         out.sides.resize(mark.sides);
         out.formulas.resize(mark.formulas);
     }

@@ -6,7 +6,7 @@
 namespace plumb::rules {
 
 std::span<const rule_info> all() {
-    static constexpr std::array<rule_info, 19> table = {{
+    static constexpr std::array<rule_info, 23> table = {{
         {syntax, "a line does not follow the notation"},
         {sum_mismatch, "the terms of a sum or difference differ in dimension"},
         {side_mismatch, "the sides of an equation or limit differ in dimension"},
@@ -26,6 +26,12 @@ std::span<const rule_info> all() {
         {include_cycle, "dictionaries `use` each other in a cycle"},
         {study_problem, "a study, prototype or model line cannot be worked out as written"},
         {value_mismatch, "a prototype or model value's unit disagrees with its variable"},
+        {offset_scale, "a value on an offset scale (°C, °F, gauge pressure) is multiplied, divided "
+                       "or raised to a power"},
+        {unit_scale,
+         "terms agree in dimension but not in unit, so the numbers are off by a factor"},
+        {inferred_dimension, "the dimension a symbol or coefficient marked ? must have (note)"},
+        {inference_conflict, "formulas disagree about the dimension of a symbol marked ?"},
     }};
     return table;
 }

@@ -2,6 +2,7 @@
 // checks, and gathers the findings in file order.
 #include "edit_distance.hpp"
 #include "formula_checker.hpp"
+#include "inference.hpp"
 #include "parser.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
@@ -144,6 +145,9 @@ class checking_reader : public dictionary_reader {
     bool on_formula(const syntax::parsed_file& tree, const syntax::formula& f) override;
 
     std::size_t formulas = 0;
+    std::size_t kept_for_inference = 0;
+    std::vector<bool> checked_already; // for each formula left in the tree
+    bool infers_symbols = false;       // a "X : ?" declaration has been read
 
   private:
     symbol_table& table_;
@@ -208,8 +212,11 @@ class session {
         syntax::parsed_file tree = parse_file(*f->source, &reader);
         f->loading = false;
         // Formulas that named a symbol declared further down are checked now, against all.
-        for (const auto& formula : tree.formulas)
-            check_formula(tree, formula, table, f->diagnostics, false);
+        for (std::size_t i = 0; i < tree.formulas.size(); ++i)
+            if (i >= reader.checked_already.size() || !reader.checked_already[i])
+                check_formula(tree, tree.formulas[i], table, f->diagnostics, false);
+        if (reader.infers_symbols || reader.kept_for_inference > 0)
+            infer_dimensions(tree, tree.formulas, table, f->diagnostics);
         work_out_studies(tree, table, f->diagnostics, report_.studies);
         const std::size_t formulas = reader.formulas + tree.studies.size();
         if (f->parsed)
@@ -339,6 +346,7 @@ class session {
         tree.diagnostics.clear();
         tree.nodes = {};
         tree.call_args = {};
+        tree.quantities = {};
         tree.sides = {};
         tree.formulas = {};
         f->tree = std::move(tree);
@@ -401,6 +409,14 @@ class session {
             entry.declared_at = at;
             entry.description = f->source->text(decl.description);
             entry.local = local;
+            entry.to_infer = decl.kind.to_infer;
+            if (decl.kind.by_unit) {
+                entry.unit_text = f->source->text(decl.spec);
+                entry.si_factor = decl.kind.si_factor;
+                if (decl.kind.single_unit != nullptr &&
+                    decl.kind.single_unit->scale != unit_scale::absolute)
+                    entry.offset_unit = decl.kind.single_unit;
+            }
             auto [existing, inserted] = table.insert(name, entry);
             if (inserted)
                 continue;
@@ -436,8 +452,9 @@ class session {
         for (const auto& n : f->tree.names) {
             const std::string_view name = f->source->text(n.name);
             const symbol_entry* e = table.find(name);
-            if (e == nullptr || e->used || !e->local || e->declared_at.file != f->source ||
-                e->declared_at.range.begin != n.name.begin)
+            // A "X : ?" symbol that nothing uses is reported by inference, once.
+            if (e == nullptr || e->used || !e->local || e->to_infer ||
+                e->declared_at.file != f->source || e->declared_at.range.begin != n.name.begin)
                 continue;
             diagnostic d = make_diagnostic(severity::warning, rules::unused,
                                            fmt::format("'{}' is declared but never used", name),
@@ -460,12 +477,22 @@ void checking_reader::on_use(const syntax::parsed_file& /*tree*/, const syntax::
 
 void checking_reader::on_declaration(const syntax::parsed_file& tree, std::uint32_t index) {
     const syntax::declaration& d = tree.declarations[index];
+    if (d.kind.to_infer)
+        infers_symbols = true;
     session_.declare_names(file_, tree, d.first_name, d.name_count, table_, true);
 }
 
 bool checking_reader::on_formula(const syntax::parsed_file& tree, const syntax::formula& f) {
     ++formulas;
-    return check_formula(tree, f, table_, file_->diagnostics, true);
+    const bool checked = check_formula(tree, f, table_, file_->diagnostics, true);
+    // Formulas that inference needs stay in the tree until the end of the file, as do those
+    // that name a symbol declared further down (checked then).
+    const bool keep = !checked || f.has_inferred || infers_symbols;
+    if (keep)
+        checked_already.push_back(checked);
+    if (checked && keep)
+        ++kept_for_inference;
+    return !keep;
 }
 
 void collect_plumb_files(const fs::path& dir, std::vector<fs::path>& out, session& s) {

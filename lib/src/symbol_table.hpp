@@ -11,10 +11,18 @@
 
 namespace plumb {
 
+struct unit_definition;
+
 struct symbol_entry {
     std::optional<dimension> dim; // empty when its declaration had an error (already reported)
+                                  // or when it is to be inferred
     location declared_at;
     std::string_view description;
+    std::string_view unit_text; // the declared unit as written ("mm", "kg/m^3"); empty for
+                                // a bracket dimension
+    double si_factor = 1.0;     // SI value of one declared unit; 1 for bracket dimensions
+    const unit_definition* offset_unit = nullptr; // set when declared in °C, °F, psig...
+    bool to_infer = false;                        // declared "X : ?"
     bool local = false; // declared in the file being checked, not in a dictionary
     bool used = false;
 };

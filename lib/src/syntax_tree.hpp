@@ -25,9 +25,19 @@ enum class expr_kind : std::uint8_t {
     subtract, // lhs - rhs
     multiply,
     divide,
-    power, // lhs ^ rhs
-    call,  // range starts with the function name; lhs = first index into call_args, rhs = count
-    group, // ( lhs ): kept so that messages quote terms with their parentheses
+    power,    // lhs ^ rhs
+    call,     // range starts with the function name; lhs = first index into call_args, rhs = count
+    group,    // ( lhs ): kept so that messages quote terms with their parentheses
+    quantity, // 0.5 {m} or {g_n}: lhs = index into quantities
+    inferred, // 1.486?: a coefficient whose dimension is to be inferred
+};
+
+// A number with a unit, or a named constant, inside a formula.
+struct quantity_literal {
+    std::optional<dimension> dim; // empty when the unit was unknown (reported)
+    double si_factor = 1.0;       // SI value of one unit (of the constant: its SI value)
+    const unit_definition* single_unit = nullptr; // a lone unit without prefix, for offsets
+    bool constant = false;
 };
 
 struct expr_node {
@@ -49,6 +59,7 @@ struct formula {
     span label; // empty when the formula has none
     std::uint32_t first_side;
     std::uint32_t side_count;
+    bool has_inferred = false; // holds a coefficient written "k?"
 };
 
 // What a declaration's right-hand side says, once units are resolved.
@@ -57,6 +68,7 @@ struct declared_kind {
     double si_factor = 1.0;       // SI value of one unit of the spec; 1 for bracket dimensions
     const unit_definition* single_unit = nullptr; // set when the spec is one unit, no algebra
     bool by_unit = false;
+    bool to_infer = false; // "X : ?"
 };
 
 struct declaration {
@@ -113,6 +125,7 @@ struct parsed_file {
     const source_file* source = nullptr;
     std::vector<expr_node> nodes;
     std::vector<std::uint32_t> call_args;
+    std::vector<quantity_literal> quantities;
     std::vector<formula_side> sides;
     std::vector<formula> formulas;
     std::vector<declaration> declarations;

@@ -51,17 +51,17 @@ g     : [L T^-2]                 "local gravitational acceleration"
 μ              : Pa*s            "dynamic viscosity"
 ν              : m^2/s           "kinematic viscosity"
 γ              : [M L^-2 T^-2]   "specific weight"
-K_v            : GPa             "bulk modulus"
+K_v            : Pa              "bulk modulus"
 β              : [M^-1 L T^2]    "compressibility"
 c              : m/s             "speed of sound in the fluid"
 σ_st           : N/m             "surface tension"
-p_v            : kPa             "vapour pressure"
+p_v            : Pa              "vapour pressure"
 
 # --- geometry ---------------------------------------------------------------------------
 L, L_e         : m               "pipe length, equivalent length of fittings"
 D, D_h         : m               "inside diameter, hydraulic diameter"
-D_1, D_2, D_3  : mm              "inside diameter at station"
-ε              : mm              "absolute roughness"
+D_1, D_2, D_3  : m               "inside diameter at station"
+ε              : m               "absolute roughness"
 A              : m^2             "flow area"
 A_1, A_2, A_3  : [L^2]           "flow area at station"
 A_o            : [L·L]           "orifice or nozzle area"
@@ -83,14 +83,14 @@ Q              : m^3/s           "volumetric flow rate"
 Q_1, Q_2, Q_3  : [L^3 T^-1]      "flow rate in branch"
 m_dot          : kg/s            "mass flow rate"
 p              : Pa              "pressure"
-p_1, p_2, p_3  : kPa             "pressure at station"
+p_1, p_2, p_3  : Pa              "pressure at station"
 Δp             : Pa              "pressure drop"
-Δp_max         : kPa             "allowable pressure drop"
+Δp_max         : Pa              "allowable pressure drop"
 τ, τ_w         : Pa              "shear stress, wall shear stress"
 h_f, h_m, h_p, h_t, H : m        "friction loss, minor loss, pump head, turbine head, total head"
 h_1, h_2       : m               "liquid level"
 h_c            : m               "depth of centroid below the surface"
-F_h            : kN              "hydrostatic force on the gate"
+F_h            : N               "hydrostatic force on the gate"
 F_D            : N               "drag force"
 n_M            : [T L^(-1/3)]    "Manning roughness coefficient, SI form"
 C_HW           : [L^(37/100) T^-1] "Hazen-Williams coefficient, SI form with its constant"
@@ -98,8 +98,8 @@ f              : 1               "Darcy friction factor"
 K_L, K_ent, K_bend, K_exit, K_valve : [-] "loss coefficient"
 C_d, C_D       : []              "discharge coefficient, drag coefficient"
 Re, Fr, Ma, We : 1               "Reynolds, Froude, Mach and Weber numbers"
-P_pump, P_shaft : kW             "hydraulic power, shaft power"
-P_turb         : MW              "turbine output"
+P_pump, P_shaft : W              "hydraulic power, shaft power"
+P_turb         : W               "turbine output"
 η_p, η_m, η_t  : 1               "pump, motor and turbine efficiency"
 ω              : [T^-1]          "shaft angular speed"
 T_q            : N*m             "shaft torque"
@@ -111,7 +111,7 @@ U              : [M T^-3 Θ^-1]   "overall heat transfer coefficient"
 q              : W               "heat rate"
 q_flux         : W/m^2           "heat flux"
 q_gen          : W/m^3           "volumetric heat generation"
-Q_heat         : kJ              "heat transferred"
+Q_heat         : J               "heat transferred"
 T, T_1, T_2, T_3 : K             "temperature"
 T_s, T_inf, T_sur, T_i : K       "surface, free-stream, surroundings, initial temperature"
 T_in, T_out    : [Θ]             "inlet and outlet temperature"
@@ -119,11 +119,11 @@ T_amb, T_amb_max : °C            "ambient temperature and its design maximum"
 ΔT, ΔT_1, ΔT_2, ΔT_lm : [Th]     "temperature difference; log-mean"
 β_T            : [Θ^-1]          "volumetric thermal expansion coefficient"
 r, r_i, r_o    : m               "radius; inner and outer radius"
-r_1, r_2       : mm              "radius at the two faces"
+r_1, r_2       : m               "radius at the two faces"
 L_c, L_w, L_fin : m              "characteristic length, wall thickness, fin length"
 A_s            : m^2             "heat transfer surface"
-A_cf           : mm^2            "fin cross-section"
-P_fin          : mm              "fin perimeter"
+A_cf           : m^2             "fin cross-section"
+P_fin          : m               "fin perimeter"
 m_fin          : [L^-1]          "fin parameter"
 θ_b            : K               "fin base excess temperature"
 Vol, Vol_1, Vol_2 : m^3          "volume"
@@ -135,31 +135,31 @@ Nu, Pr, Bi, Gr, Fo : 1           "Nusselt, Prandtl, Biot, Grashof and Fourier nu
 ε_r            : 1               "emissivity"
 t, t_1, t_2    : s               "time"
 x              : m               "position through the wall"
-W_b            : kJ              "boundary work"
+W_b            : J               "boundary work"
 
 # --- structures --------------------------------------------------------------------------
-E, G           : GPa             "elastic and shear modulus"
+E, G           : Pa              "elastic and shear modulus"
 ν_p            : 1               "Poisson's ratio"
-f_y, f_u       : MPa             "yield and ultimate strength"
-f_c'           : MPa             "specified compressive strength of concrete"
-σ, σ_1, σ_2, σ_3 : MPa           "normal stress; principal stresses"
+f_y, f_u       : Pa              "yield and ultimate strength"
+f_c'           : Pa              "specified compressive strength of concrete"
+σ, σ_1, σ_2, σ_3 : Pa            "normal stress; principal stresses"
 σ_x, σ_y, σ_h, σ_vm, σ_max : [M·L^-1·T^-2] "stress components, hoop, von Mises, peak"
-τ_s, τ_xy      : MPa             "shear stress"
+τ_s, τ_xy      : Pa              "shear stress"
 ε_s            : [-]             "strain"
 α_T            : [Θ^-1]          "coefficient of thermal expansion"
-M_b, M_y       : kN*m            "bending moment about the strong and weak axis"
-V_s            : kN              "shear force"
-P, P_cr        : kN              "axial load; Euler critical load"
-w              : kN/m            "distributed load"
+M_b, M_y       : N*m             "bending moment about the strong and weak axis"
+V_s            : N               "shear force"
+P, P_cr        : N               "axial load; Euler critical load"
+w              : N/m             "distributed load"
 L_b            : m               "span"
-I_z, I_y       : mm^4            "second moment of area"
+I_z, I_y       : m^4             "second moment of area"
 S_x, Z_x       : [L^3]           "elastic and plastic section modulus"
-Q_s            : mm^3            "first moment of area above the cut"
-A_c            : mm^2            "cross-section area"
-b, t_w, y_c, x_c : mm            "width, wall thickness, fibre distances"
-r_g            : mm              "radius of gyration"
+Q_s            : m^3             "first moment of area above the cut"
+A_c            : m^2             "cross-section area"
+b, t_w, y_c, x_c : m             "width, wall thickness, fibre distances"
+r_g            : m               "radius of gyration"
 K_e, λ, φ, θ   : 1               "effective length factor, slenderness, resistance factor, rotation"
-δ, δ_max       : mm              "deflection and its limit"
+δ, δ_max       : m               "deflection and its limit"
 k_s            : N/m             "spring stiffness"
 m_s            : kg              "vibrating mass"
 ω_n, f_n       : [T^-1]          "natural circular frequency, natural frequency"
@@ -366,7 +366,7 @@ constexpr std::array<std::string_view, 12> section_comments = {
     "# values from the site survey; see sketch {n}",
     "# ---- loads case {n} -----------------------------------------------------",
     "# exchanger E-{n}: shell side",
-    "# all stresses in MPa; lengths in the dictionary's units",
+    "# stresses in Pa; every symbol in coherent SI units",
     "# assumptions: steady, incompressible, fully developed",
     "# ρ and μ at 15 °C",
     "# member M{n}: simply supported, lateral restraint at thirds",
@@ -468,7 +468,7 @@ std::size_t count_dictionary_symbols() {
 constexpr std::array<std::array<std::string_view, 4>, 3> local_symbols = {{
     {"L_run : m \"pipe run, this calc\"", "h_f = f*(L_run/D)*V^2/(2*g)",
      "K_fit : [1] \"sum of fitting coefficients\"", "h_m = K_fit*V^2/(2*g)"},
-    {"t_ins : mm \"insulation thickness\"", "R_cond = t_ins/(k*A_s)",
+    {"t_ins : m \"insulation thickness\"", "R_cond = t_ins/(k*A_s)",
      "h_rad : W/(m^2*K) \"linearised radiation coefficient\"", "q = (h + h_rad)*A_s*(T_s - T_inf)"},
     {"L_cant : m \"cantilever length\"", "δ = P*L_cant^3/(3*E*I_z)",
      "n_bolts : 1 \"bolts in the splice\"", "V_s <= n_bolts*φ*f_u*A_c"},
@@ -583,7 +583,7 @@ void write_small_file(const std::filesystem::path& file) {
              "D, L, h_f, h_p : m",
              "Q : m^3/s",
              "A : m^2",
-             "P : kW",
+             "P : W",
              "f, Re, η : 1",
              "Re = ρ*V*D/μ",
              "Re > 4000",

@@ -26,6 +26,10 @@ inline constexpr std::string_view unreadable = "unreadable";
 inline constexpr std::string_view include_cycle = "include-cycle";
 inline constexpr std::string_view study_problem = "study-problem";
 inline constexpr std::string_view value_mismatch = "value-mismatch";
+inline constexpr std::string_view offset_scale = "offset-scale";
+inline constexpr std::string_view unit_scale = "unit-scale";
+inline constexpr std::string_view inferred_dimension = "inferred-dimension";
+inline constexpr std::string_view inference_conflict = "inference-conflict";
 
 struct rule_info {
     std::string_view id;

@@ -1,0 +1,1168 @@
+// Dimension inference. Each subexpression gets a linear form: a known dimension plus a rational
+// combination of the unknowns' dimensions (the exponents of a product add, of a power scale).
+// Wherever the checker compares two dimensions, the difference of the two forms must vanish;
+// wherever it wants a dimensionless value, the form must. Those equations share one
+// coefficient matrix for all seven base dimensions (only the right-hand sides differ), so one
+// exact elimination of [A | B] answers every base dimension at once.
+#include "inference.hpp"
+
+#include "functions.hpp"
+#include "plumb/groups.hpp"
+#include "plumb/rules.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <cstdlib>
+#include <fmt/format.h>
+#include <numeric>
+#include <optional>
+#include <string>
+#include <unordered_map>
+
+namespace plumb {
+namespace {
+
+using syntax::expr_kind;
+
+// Σ c_k·u_k, sorted by unknown, without zero coefficients.
+using combination = std::vector<std::pair<std::uint32_t, rational>>;
+
+// a + s·b.
+combination combine(const combination& a, const combination& b, rational s) {
+    combination out;
+    out.reserve(a.size() + b.size());
+    std::size_t i = 0;
+    std::size_t j = 0;
+    while (i < a.size() || j < b.size()) {
+        if (j == b.size() || (i < a.size() && a[i].first < b[j].first)) {
+            out.push_back(a[i++]);
+        } else if (i == a.size() || b[j].first < a[i].first) {
+            out.emplace_back(b[j].first, s * b[j].second);
+            ++j;
+        } else {
+            const rational c = a[i].second + s * b[j].second;
+            if (!c.is_zero())
+                out.emplace_back(a[i].first, c);
+            ++i;
+            ++j;
+        }
+    }
+    return out;
+}
+
+struct linear_form {
+    dimension known;
+    combination unknowns;
+    // Nothing can be said about it (an undeclared symbol, an unknown function, a power we give
+    // up on): it constrains nothing, and what contains it is opaque too.
+    bool opaque = false;
+    bool zero = false;             // the literal 0, which agrees with any dimension
+    std::optional<rational> value; // exact value of an expression of numbers alone
+};
+
+linear_form opaque_form() {
+    linear_form f;
+    f.opaque = true;
+    return f;
+}
+
+linear_form product(const linear_form& a, const linear_form& b, bool divide) {
+    if (a.opaque || b.opaque)
+        return opaque_form();
+    linear_form r;
+    r.known = divide ? a.known / b.known : a.known * b.known;
+    r.unknowns = combine(a.unknowns, b.unknowns, divide ? rational(-1) : rational(1));
+    return r;
+}
+
+linear_form scaled(const linear_form& a, rational p) {
+    if (a.opaque)
+        return opaque_form();
+    linear_form r;
+    r.known = a.known.pow(p);
+    if (!p.is_zero())
+        for (const auto& [u, c] : a.unknowns)
+            r.unknowns.emplace_back(u, c * p);
+    return r;
+}
+
+// Σ c_k·u_k = rhs, in every base dimension; from formula number `formula`.
+struct equation {
+    combination unknowns;
+    dimension rhs;
+    std::uint32_t formula = 0;
+};
+
+struct unknown {
+    bool coefficient = false;
+    std::string name;          // the symbol, or the coefficient's number as written ("1.486")
+    location where;            // the declaration, or the coefficient in its formula
+    std::uint32_t formula = 0; // a coefficient's formula
+    std::uint32_t node = syntax::no_index; // a coefficient's node
+    std::vector<std::uint32_t> formulas;   // every formula it occurs in, ascending, once each
+};
+
+// b^e exactly, for the whole exponents that constant exponents such as 2^3 need.
+std::optional<rational> exact_power(const std::optional<rational>& base,
+                                    const std::optional<rational>& exponent) {
+    if (!base || !exponent || !exponent->is_integer() || exponent->num() > 64 ||
+        exponent->num() < -64 || (base->is_zero() && exponent->num() < 0))
+        return std::nullopt;
+    try {
+        rational r = 1;
+        const std::int64_t n = exponent->num() < 0 ? -exponent->num() : exponent->num();
+        for (std::int64_t k = 0; k < n; ++k)
+            r *= *base;
+        return exponent->num() < 0 ? rational(1) / r : r;
+    } catch (const arithmetic_overflow&) {
+        return std::nullopt;
+    }
+}
+
+// The function's name in a call's range, which may start with the parentheses of a group.
+std::string_view call_name(const source_file& src, const syntax::expr_node& n) {
+    const std::string_view t = src.text(n.range);
+    const std::size_t begin = t.find_first_not_of("( \t\r\n\\");
+    if (begin == std::string_view::npos)
+        return {};
+    std::size_t end = t.find('(', begin);
+    if (end == std::string_view::npos)
+        end = t.size();
+    while (end > begin && (t[end - 1] == ' ' || t[end - 1] == '\t'))
+        --end;
+    return t.substr(begin, end - begin);
+}
+
+// Collects the equations of a file's formulas, and the unknowns they mention.
+class equation_builder {
+  public:
+    equation_builder(const syntax::parsed_file& file, symbol_table& symbols)
+        : file_(file), symbols_(symbols) {}
+
+    std::vector<unknown> unknowns;
+    std::vector<equation> equations;
+    std::unordered_map<const symbol_entry*, std::uint32_t> by_symbol;
+
+    // May throw arithmetic_overflow; the caller then drops this formula's equations.
+    void add_formula(std::uint32_t index, const syntax::formula& f) {
+        current_ = index;
+        spine_.clear(); // an earlier formula abandoned by an exception may have left its part
+        std::vector<linear_form> sides;
+        for (std::uint32_t i = 0; i < f.side_count; ++i)
+            sides.push_back(eval(file_.sides[f.first_side + i].root));
+        agree_all(sides);
+    }
+
+  private:
+    const syntax::parsed_file& file_;
+    symbol_table& symbols_;
+    std::uint32_t current_ = 0;
+    std::vector<std::uint32_t> spine_; // shared by nested sums and products, as in the checker
+
+    std::string_view text(span s) const { return file_.source->text(s); }
+
+    void occurs(std::uint32_t u) {
+        auto& fs = unknowns[u].formulas;
+        if (fs.empty() || fs.back() != current_)
+            fs.push_back(current_);
+    }
+
+    linear_form of_unknown(std::uint32_t u) {
+        occurs(u);
+        linear_form f;
+        f.unknowns.emplace_back(u, rational(1));
+        return f;
+    }
+
+    void agree(const linear_form& a, const linear_form& b) {
+        if (a.opaque || b.opaque || a.zero || b.zero)
+            return;
+        combination c = combine(a.unknowns, b.unknowns, rational(-1));
+        // Without an unknown, a disagreement is the checker's to report, not ours to solve.
+        if (c.empty())
+            return;
+        equations.push_back({std::move(c), b.known / a.known, current_});
+    }
+
+    void require_dimensionless(const linear_form& a) {
+        if (a.opaque || a.unknowns.empty())
+            return;
+        equations.push_back({a.unknowns, dimension{} / a.known, current_});
+    }
+
+    // Every usable operand agrees with the first; returns that one's index.
+    std::optional<std::size_t> agree_all(const std::vector<linear_form>& ops) {
+        std::optional<std::size_t> reference;
+        for (std::size_t i = 0; i < ops.size(); ++i) {
+            if (ops[i].opaque || ops[i].zero)
+                continue;
+            if (!reference)
+                reference = i;
+            else
+                agree(ops[*reference], ops[i]);
+        }
+        return reference;
+    }
+
+    linear_form eval(std::uint32_t index) {
+        const syntax::expr_node& n = file_.nodes[index];
+        switch (n.kind) {
+        case expr_kind::number: {
+            linear_form f;
+            f.value = rational::parse(text(n.range));
+            f.zero = f.value && f.value->is_zero();
+            return f;
+        }
+        case expr_kind::pi:
+            return {};
+        case expr_kind::symbol:
+            return eval_symbol(n);
+        case expr_kind::negate: {
+            linear_form f = eval(n.lhs);
+            if (f.value)
+                f.value = -*f.value;
+            return f;
+        }
+        case expr_kind::add:
+        case expr_kind::subtract:
+            return eval_sum(index);
+        case expr_kind::multiply:
+        case expr_kind::divide:
+            return eval_product(index);
+        case expr_kind::power: {
+            const linear_form base = eval(n.lhs);
+            return power(base, eval(n.rhs));
+        }
+        case expr_kind::call:
+            return eval_call(n);
+        case expr_kind::group:
+            return eval(n.lhs);
+        case expr_kind::quantity: {
+            if (n.lhs >= file_.quantities.size() || !file_.quantities[n.lhs].dim)
+                return opaque_form(); // an unknown unit, already reported
+            linear_form f;
+            f.known = *file_.quantities[n.lhs].dim;
+            return f;
+        }
+        case expr_kind::inferred: {
+            // Each coefficient is an unknown of its own, even when two are written alike.
+            unknown u;
+            u.coefficient = true;
+            std::string_view t = text(n.range);
+            while (!t.empty() && (t.back() == '?' || t.back() == ' ' || t.back() == '\t'))
+                t.remove_suffix(1);
+            u.name = std::string(t);
+            u.where = {file_.source, n.range};
+            u.formula = current_;
+            u.node = index;
+            unknowns.push_back(std::move(u));
+            return of_unknown(static_cast<std::uint32_t>(unknowns.size() - 1));
+        }
+        }
+        return opaque_form();
+    }
+
+    linear_form eval_symbol(const syntax::expr_node& n) {
+        const std::string_view name = text(n.range);
+        symbol_entry* entry = symbols_.find(name);
+        if (entry == nullptr)
+            return opaque_form(); // undeclared: the checker says so
+        if (entry->to_infer) {
+            auto [it, inserted] =
+                by_symbol.try_emplace(entry, static_cast<std::uint32_t>(unknowns.size()));
+            if (inserted) {
+                unknown u;
+                u.name = std::string(name);
+                u.where = entry->declared_at;
+                unknowns.push_back(std::move(u));
+            }
+            return of_unknown(it->second);
+        }
+        if (!entry->dim)
+            return opaque_form(); // its declaration had an error, already reported
+        linear_form f;
+        f.known = *entry->dim;
+        return f;
+    }
+
+    linear_form eval_sum(std::uint32_t index) {
+        // Along the left spine, iteratively: a long sum must not recurse once per term.
+        const std::size_t spine_base = spine_.size();
+        std::uint32_t n = index;
+        while (file_.nodes[n].kind == expr_kind::add ||
+               file_.nodes[n].kind == expr_kind::subtract) {
+            spine_.push_back(n);
+            n = file_.nodes[n].lhs;
+        }
+        const std::size_t term_count = spine_.size() - spine_base + 1;
+        std::vector<linear_form> terms;
+        terms.reserve(term_count);
+        std::optional<rational> value = rational(0);
+        bool all_zero = true;
+        bool any_opaque = false;
+        for (std::size_t k = 0; k < term_count; ++k) {
+            const std::uint32_t op = k == 0 ? 0 : spine_[spine_.size() - k];
+            const std::uint32_t node = k == 0 ? n : file_.nodes[op].rhs;
+            const bool subtracted = k > 0 && file_.nodes[op].kind == expr_kind::subtract;
+            terms.push_back(eval(node));
+            const linear_form& t = terms.back();
+            all_zero = all_zero && t.zero;
+            any_opaque = any_opaque || t.opaque;
+            if (value && t.value) {
+                try {
+                    value = subtracted ? *value - *t.value : *value + *t.value;
+                } catch (const arithmetic_overflow&) {
+                    value.reset(); // a value only serves as an exponent
+                }
+            } else {
+                value.reset();
+            }
+        }
+        spine_.resize(spine_base);
+        const std::optional<std::size_t> reference = agree_all(terms);
+        if (!reference) {
+            if (all_zero) {
+                linear_form z;
+                z.zero = true;
+                z.value = rational(0);
+                return z;
+            }
+            return opaque_form();
+        }
+        // Every term has the reference's dimension once the equations hold; an opaque term
+        // does not change that.
+        linear_form result = terms[*reference];
+        result.zero = false;
+        result.value = any_opaque ? std::nullopt : value;
+        return result;
+    }
+
+    linear_form eval_product(std::uint32_t index) {
+        const std::size_t spine_base = spine_.size();
+        std::uint32_t n = index;
+        while (file_.nodes[n].kind == expr_kind::multiply ||
+               file_.nodes[n].kind == expr_kind::divide) {
+            spine_.push_back(n);
+            n = file_.nodes[n].lhs;
+        }
+        linear_form result = eval(n);
+        result.zero = false;
+        // Spine nodes were pushed outermost first; the innermost applies first.
+        for (std::size_t k = spine_.size(); k > spine_base; --k) {
+            const syntax::expr_node& op = file_.nodes[spine_[k - 1]];
+            const bool divided = op.kind == expr_kind::divide;
+            const linear_form t = eval(op.rhs);
+            std::optional<rational> value;
+            if (result.value && t.value && !(divided && t.value->is_zero())) {
+                try {
+                    value = divided ? *result.value / *t.value : *result.value * *t.value;
+                } catch (const arithmetic_overflow&) {
+                    value.reset();
+                }
+            }
+            // Keep walking an opaque product: its other factors may still hold equations.
+            result = product(result, t, divided);
+            result.value = value;
+        }
+        spine_.resize(spine_base);
+        return result;
+    }
+
+    linear_form power(const linear_form& base, const linear_form& exponent) {
+        require_dimensionless(exponent);
+        if (base.opaque)
+            return opaque_form();
+        if (exponent.value) {
+            linear_form r = scaled(base, *exponent.value);
+            r.value = exact_power(base.value, exponent.value);
+            return r;
+        }
+        if (base.unknowns.empty() && base.known.is_dimensionless())
+            return {}; // (1 + r)^n: any dimensionless exponent will do
+        // The exponent is not a constant number (a symbol, a coefficient, a number too long to
+        // hold exactly) and the base is not known to be dimensionless. One could conclude that
+        // the base must be dimensionless, since only then may the exponent vary; but the
+        // notation treats a variable exponent on a dimensioned base as a mistake for the
+        // checker to report, and inferring "dimensionless" would turn that possible mistake into
+        // a silent assumption about the unknowns. So this power constrains nothing.
+        return opaque_form();
+    }
+
+    linear_form eval_call(const syntax::expr_node& n) {
+        std::vector<linear_form> args;
+        args.reserve(n.rhs);
+        for (std::uint32_t i = 0; i < n.rhs; ++i)
+            args.push_back(eval(file_.call_args[n.lhs + i]));
+        const builtin_function* f = find_function(call_name(*file_.source, n));
+        const std::size_t count = args.size();
+        // An unknown function or a wrong count: the checker reports it; it tells us nothing.
+        if (f == nullptr || count < f->min_args ||
+            (f->max_args != unlimited_args && count > f->max_args) ||
+            (f->rule == function_rule::integral && count == 3))
+            return opaque_form();
+        switch (f->rule) {
+        case function_rule::root:
+            return scaled(args[0], f->power);
+        case function_rule::same: {
+            linear_form r = args[0];
+            r.value.reset();
+            r.zero = false;
+            return r;
+        }
+        case function_rule::dimensionless:
+        case function_rule::log_base:
+            for (const auto& a : args)
+                require_dimensionless(a);
+            return {};
+        case function_rule::angle_of:
+            agree_all(args);
+            return {};
+        case function_rule::common: {
+            const std::optional<std::size_t> reference = agree_all(args);
+            if (!reference) {
+                if (std::all_of(args.begin(), args.end(),
+                                [](const linear_form& a) { return a.zero; })) {
+                    linear_form z;
+                    z.zero = true;
+                    return z;
+                }
+                return opaque_form();
+            }
+            linear_form r = args[*reference];
+            r.value.reset();
+            return r;
+        }
+        case function_rule::power:
+            return power(args[0], args[1]);
+        case function_rule::derivative: {
+            rational order = 1;
+            if (count == 3) {
+                const auto& v = args[2].value;
+                if (!v || !v->is_integer() || v->num() < 1)
+                    return opaque_form(); // the checker reports the order
+                order = *v;
+            }
+            return product(args[0], scaled(args[1], order), true);
+        }
+        case function_rule::integral:
+            if (count == 4) {
+                // The limits answer to the variable, and so to each other when it is opaque.
+                if (!args[1].opaque && !args[1].zero) {
+                    agree(args[1], args[2]);
+                    agree(args[1], args[3]);
+                } else {
+                    agree(args[2], args[3]);
+                }
+            }
+            return product(args[0], args[1], false);
+        }
+        return opaque_form();
+    }
+};
+
+// ---- Solving --------------------------------------------------------------------------------
+
+struct solution {
+    bool consistent = true;
+    std::size_t rank = 0;
+    std::vector<std::optional<dimension>> values; // per column: set when determined
+    rational_matrix reduced;                      // [A | B] in reduced row echelon form
+};
+
+// Solves the equations of one component, leaving out those of the formulas in `left_out`
+// (sorted).
+// `column` maps an unknown to its column; `n` is the number of columns.
+solution solve(const std::vector<const equation*>& equations,
+               const std::vector<std::uint32_t>& column, std::size_t n,
+               const std::vector<std::uint32_t>& left_out) {
+    std::vector<const equation*> kept;
+    for (const equation* e : equations)
+        if (!std::binary_search(left_out.begin(), left_out.end(), e->formula))
+            kept.push_back(e);
+    solution s;
+    s.values.resize(n);
+    s.reduced = rational_matrix(kept.size(), n + base_dimension_count);
+    for (std::size_t r = 0; r < kept.size(); ++r) {
+        for (const auto& [u, c] : kept[r]->unknowns)
+            s.reduced.at(r, column[u]) = c;
+        for (std::size_t d = 0; d < base_dimension_count; ++d)
+            s.reduced.at(r, n + d) = kept[r]->rhs.exponents()[d];
+    }
+    if (kept.empty())
+        return s;
+    // Elimination runs column by column, so a pivot among the right-hand sides belongs to a row
+    // whose unknowns all vanished: 0 = nonzero in some base dimension.
+    const std::vector<std::size_t> pivots = row_reduce(s.reduced);
+    for (std::size_t r = 0; r < pivots.size(); ++r) {
+        const std::size_t p = pivots[r];
+        if (p >= n) {
+            s.consistent = false;
+            continue;
+        }
+        ++s.rank;
+        // Determined exactly when the pivot row names no other unknown (no free column).
+        bool alone = true;
+        for (std::size_t c = 0; c < n && alone; ++c)
+            alone = c == p || s.reduced.at(r, c).is_zero();
+        if (!alone)
+            continue;
+        std::array<rational, base_dimension_count> e{};
+        for (std::size_t d = 0; d < base_dimension_count; ++d)
+            e[d] = s.reduced.at(r, n + d);
+        s.values[p] = dimension::from_exponents(e);
+    }
+    return s;
+}
+
+// ---- Reporting ------------------------------------------------------------------------------
+
+std::string describe(const dimension& d) {
+    if (d.is_dimensionless())
+        return "[1] (dimensionless)";
+    const std::string_view name = quantity_name(d);
+    return name.empty() ? d.to_string() : fmt::format("{} ({})", d.to_string(), name);
+}
+
+// "'X'" or "the coefficient 1.486".
+std::string who(const unknown& u) {
+    return u.coefficient ? fmt::format("the coefficient {}", u.name) : fmt::format("'{}'", u.name);
+}
+
+// A formula as written, on one line: continuations and their comments folded, blanks squeezed.
+std::string one_line(std::string_view raw) {
+    std::string out;
+    bool pending_space = false;
+    for (std::size_t i = 0; i < raw.size(); ++i) {
+        const char c = raw[i];
+        if (c == '\\' || c == '#') {
+            const std::size_t nl = raw.find('\n', i);
+            if (nl == std::string_view::npos)
+                break;
+            i = nl;
+            pending_space = true;
+            continue;
+        }
+        if (c == ' ' || c == '\t' || c == '\r' || c == '\n') {
+            pending_space = true;
+            continue;
+        }
+        if (pending_space && !out.empty())
+            out += ' ';
+        pending_space = false;
+        out += c;
+    }
+    return out;
+}
+
+// A formula for a note: its label when it has one, else its text, shortened.
+std::string formula_name(const syntax::parsed_file& file, const syntax::formula& f) {
+    if (f.label.end > f.label.begin)
+        return fmt::format("@{}", file.source->text(f.label));
+    std::string t = one_line(file.source->text(f.range));
+    constexpr std::size_t limit = 48;
+    if (t.size() > limit) {
+        std::size_t cut = limit;
+        while (cut > 0 && (static_cast<unsigned char>(t[cut]) & 0xC0) == 0x80)
+            --cut;
+        t = t.substr(0, cut) + "\u2026";
+    }
+    return fmt::format("'{}'", t);
+}
+
+std::string exponent_text(rational e) {
+    return e.is_integer() ? e.to_string() : fmt::format("({})", e.to_string());
+}
+
+// "a*b^2/(c*d^(1/3))" from bases and exponents; a base with an operator in it is bracketed.
+std::string render_product(const std::vector<std::pair<std::string, rational>>& factors) {
+    auto append = [](std::string& side, const std::string& base, rational e) {
+        if (!side.empty())
+            side += '*';
+        const bool product = base.find_first_of("/* ") != std::string::npos ||
+                             base.find("\u00B7") != std::string::npos;
+        if (e == rational(1)) {
+            side += product ? "(" + base + ")" : base;
+            return;
+        }
+        side += product || base.find('^') != std::string::npos ? "(" + base + ")" : base;
+        side += '^';
+        side += exponent_text(e);
+    };
+    std::string numerator;
+    std::string denominator;
+    std::size_t below = 0;
+    for (const auto& [base, e] : factors) {
+        if (e.is_zero())
+            continue;
+        if (e.num() > 0) {
+            append(numerator, base, e);
+        } else {
+            append(denominator, base, -e);
+            ++below;
+        }
+    }
+    if (numerator.empty())
+        numerator = "1";
+    if (below == 0)
+        return numerator;
+    return below > 1 ? numerator + "/(" + denominator + ")" : numerator + "/" + denominator;
+}
+
+// One symbol of an empirical formula, with the exponent its unit factor takes in k_SI.
+struct unit_factor {
+    const symbol_entry* entry;
+    std::string_view name;
+    rational exponent;
+};
+
+// The value of an exponent such as 2, -1, 0.54 or (2/3).
+std::optional<rational> constant_of(const syntax::parsed_file& file, std::uint32_t index) {
+    const syntax::expr_node& n = file.nodes[index];
+    try {
+        switch (n.kind) {
+        case expr_kind::number:
+            return rational::parse(file.source->text(n.range));
+        case expr_kind::group:
+            return constant_of(file, n.lhs);
+        case expr_kind::negate: {
+            const auto v = constant_of(file, n.lhs);
+            return v ? std::optional<rational>(-*v) : std::nullopt;
+        }
+        case expr_kind::add:
+        case expr_kind::subtract:
+        case expr_kind::multiply:
+        case expr_kind::divide: {
+            const auto a = constant_of(file, n.lhs);
+            const auto b = constant_of(file, n.rhs);
+            if (!a || !b)
+                return std::nullopt;
+            if (n.kind == expr_kind::add)
+                return *a + *b;
+            if (n.kind == expr_kind::subtract)
+                return *a - *b;
+            if (n.kind == expr_kind::multiply)
+                return *a * *b;
+            if (b->is_zero())
+                return std::nullopt;
+            return *a / *b;
+        }
+        default:
+            return std::nullopt;
+        }
+    } catch (const arithmetic_overflow&) {
+        return std::nullopt;
+    }
+}
+
+// The factors of one side of y = k·Π x_i^e_i, each symbol with `sign`·its exponent; the
+// coefficient's own exponent goes to `k_exponent`. False for any other shape: a sum, a
+// quantity in braces, another unknown, a unit with an offset (°F is not a pure scale), a
+// function other than a root, abs or pow.
+bool collect_factors(const syntax::parsed_file& file, symbol_table& symbols, std::uint32_t index,
+                     rational e, std::uint32_t coefficient, rational& k_exponent,
+                     std::vector<unit_factor>& out) {
+    const syntax::expr_node& n = file.nodes[index];
+    switch (n.kind) {
+    case expr_kind::number:
+    case expr_kind::pi:
+        return true; // a pure number is the same in every system of units
+    case expr_kind::group:
+    case expr_kind::negate:
+        return collect_factors(file, symbols, n.lhs, e, coefficient, k_exponent, out);
+    case expr_kind::multiply:
+    case expr_kind::divide: {
+        // Along the left spine, iteratively, like the checker.
+        std::uint32_t m = index;
+        while (file.nodes[m].kind == expr_kind::multiply ||
+               file.nodes[m].kind == expr_kind::divide) {
+            const bool divided = file.nodes[m].kind == expr_kind::divide;
+            if (!collect_factors(file, symbols, file.nodes[m].rhs, divided ? -e : e, coefficient,
+                                 k_exponent, out))
+                return false;
+            m = file.nodes[m].lhs;
+        }
+        return collect_factors(file, symbols, m, e, coefficient, k_exponent, out);
+    }
+    case expr_kind::power: {
+        const auto p = constant_of(file, n.rhs);
+        return p && collect_factors(file, symbols, n.lhs, e * *p, coefficient, k_exponent, out);
+    }
+    case expr_kind::call: {
+        const builtin_function* f = find_function(call_name(*file.source, n));
+        if (f == nullptr)
+            return false;
+        if (f->rule == function_rule::root && n.rhs == 1)
+            return collect_factors(file, symbols, file.call_args[n.lhs], e * f->power, coefficient,
+                                   k_exponent, out);
+        if (f->rule == function_rule::same && n.rhs == 1)
+            return collect_factors(file, symbols, file.call_args[n.lhs], e, coefficient, k_exponent,
+                                   out);
+        if (f->rule == function_rule::power && n.rhs == 2) {
+            const auto p = constant_of(file, file.call_args[n.lhs + 1]);
+            return p && collect_factors(file, symbols, file.call_args[n.lhs], e * *p, coefficient,
+                                        k_exponent, out);
+        }
+        return false;
+    }
+    case expr_kind::symbol: {
+        const std::string_view name = file.source->text(n.range);
+        const symbol_entry* entry = symbols.find(name);
+        if (entry == nullptr || entry->to_infer || !entry->dim || entry->offset_unit != nullptr)
+            return false;
+        out.push_back({entry, name, e});
+        return true;
+    }
+    case expr_kind::inferred:
+        if (index != coefficient)
+            return false;
+        k_exponent += e;
+        return true;
+    default:
+        return false;
+    }
+}
+
+// Notes restating a determined coefficient for coherent SI units, or saying why it cannot be.
+void restate_coefficient(const syntax::parsed_file& file, const syntax::formula& f,
+                         std::uint32_t coefficient, const unknown& u, symbol_table& symbols,
+                         diagnostic& d) {
+    const char* other_shape = "the formula is not of the form y = k\u00B7x1^a\u00B7x2^b\u2026, so "
+                              "the coefficient is not restated for coherent SI units; it holds "
+                              "only with the symbols in the units they are declared in";
+    if (f.side_count != 2 ||
+        file.sides[f.first_side + 1].relation_before != syntax::relation_kind::equal) {
+        d.notes.push_back({other_shape, {}});
+        return;
+    }
+    std::vector<unit_factor> factors;
+    rational k_left = 0;
+    rational k_right = 0;
+    bool shaped = collect_factors(file, symbols, file.sides[f.first_side].root, rational(1),
+                                  coefficient, k_left, factors);
+    const std::size_t left_count = factors.size();
+    shaped = shaped && collect_factors(file, symbols, file.sides[f.first_side + 1].root,
+                                       rational(1), coefficient, k_right, factors);
+    if (!shaped || (!k_left.is_zero() && !k_right.is_zero())) {
+        d.notes.push_back({other_shape, {}});
+        return;
+    }
+    // Write it as k^ek = Π f^g: symbols on the coefficient's side move across, so with the
+    // coefficient on the right the left side's factors keep their sign. Then k_SI = k · Π f^G,
+    // G = g/ek, for ek = ±1 (k or 1/k); other powers of k are not restated.
+    const bool k_on_left = !k_left.is_zero();
+    const rational ek = k_on_left ? k_left : k_right;
+    if (ek != rational(1) && ek != rational(-1)) {
+        d.notes.push_back({other_shape, {}});
+        return;
+    }
+    std::vector<std::pair<std::string, rational>> units; // by unit text
+    std::vector<std::pair<double, rational>> numbers;    // by SI factor
+    std::vector<std::string> bound;                      // "V in ft/s"
+    for (std::size_t i = 0; i < factors.size(); ++i) {
+        const bool on_left = i < left_count;
+        // g: + for the side without k, − for the side with it; then divided by ek.
+        rational g = (on_left == k_on_left) ? -factors[i].exponent : factors[i].exponent;
+        g = ek == rational(1) ? g : -g;
+        const symbol_entry& e = *factors[i].entry;
+        if (e.si_factor == 1.0 || e.unit_text.empty())
+            continue; // a coherent SI unit, or a dimension in brackets: nothing to convert
+        const std::string unit(e.unit_text);
+        std::string entry = fmt::format("{} in {}", factors[i].name, unit);
+        if (std::find(bound.begin(), bound.end(), entry) == bound.end())
+            bound.push_back(std::move(entry));
+        auto ut = std::find_if(units.begin(), units.end(),
+                               [&](const auto& p) { return p.first == unit; });
+        if (ut == units.end())
+            units.emplace_back(unit, g);
+        else
+            ut->second += g;
+        auto nt = std::find_if(numbers.begin(), numbers.end(),
+                               [&](const auto& p) { return p.first == e.si_factor; });
+        if (nt == numbers.end())
+            numbers.emplace_back(e.si_factor, g);
+        else
+            nt->second += g;
+    }
+    std::erase_if(units, [](const auto& p) { return p.first.empty() || p.second.is_zero(); });
+    std::erase_if(numbers, [](const auto& p) { return p.second.is_zero(); });
+    if (bound.empty()) {
+        d.notes.push_back({fmt::format("the symbols are declared in coherent SI units, so {} is "
+                                       "the coefficient for coherent SI units",
+                                       u.name),
+                           {}});
+        return;
+    }
+    constexpr std::size_t max_listed = 6;
+    std::string list;
+    for (std::size_t i = 0; i < bound.size() && i < max_listed; ++i)
+        list +=
+            fmt::format("{}{}", i == 0 ? "" : (i + 1 == bound.size() ? " and " : ", "), bound[i]);
+    if (bound.size() > max_listed)
+        list += fmt::format(" and {} more", bound.size() - max_listed);
+    d.notes.push_back({fmt::format("{} holds only with {}, as declared", u.name, list), {}});
+    if (numbers.empty()) {
+        d.notes.push_back({fmt::format("the unit factors cancel, so the coefficient is {} in "
+                                       "coherent SI units too",
+                                       u.name),
+                           {}});
+        return;
+    }
+    const std::string value_text(u.name);
+    char* end = nullptr;
+    const double k = std::strtod(value_text.c_str(), &end);
+    if (end == value_text.c_str())
+        return;
+    std::vector<std::pair<double, rational>> inverse; // coherent_coefficient wants f^(-e)
+    std::vector<std::pair<std::string, rational>> number_text;
+    for (const auto& [factor, g] : numbers) {
+        inverse.emplace_back(factor, -g);
+        // 1.840131e-06^(1/3) would read ambiguously.
+        std::string t = fmt::format("{:.7g}", factor);
+        if (t.find('e') != std::string::npos && g != rational(1) && g != rational(-1))
+            t = "(" + t + ")";
+        number_text.emplace_back(std::move(t), g);
+    }
+    const double k_si = coherent_coefficient(k, 1.0, inverse);
+    d.notes.push_back(
+        {fmt::format("in coherent SI units the coefficient is {} \u00D7 {} = {} "
+                     "\u00D7 {} = {:.6g}",
+                     u.name, render_product(units), u.name, render_product(number_text), k_si),
+         {}});
+}
+
+diagnostic make(severity level, std::string_view rule, std::string message, location where) {
+    diagnostic d;
+    d.level = level;
+    d.rule = std::string(rule);
+    d.message = std::move(message);
+    d.where = where;
+    return d;
+}
+
+class reporter {
+  public:
+    reporter(const syntax::parsed_file& file, std::span<const syntax::formula> formulas,
+             symbol_table& symbols, const std::vector<unknown>& unknowns,
+             std::vector<diagnostic>& out)
+        : file_(file), formulas_(formulas), symbols_(symbols), unknowns_(unknowns), out_(out) {}
+
+    void determined(std::uint32_t u, const dimension& dim) {
+        const unknown& x = unknowns_[u];
+        std::string message;
+        if (x.coefficient)
+            message = dim.is_dimensionless()
+                          ? fmt::format("the coefficient {} must be dimensionless", x.name)
+                          : fmt::format("the coefficient {} must carry {}", x.name, describe(dim));
+        else
+            message = dim.is_dimensionless()
+                          ? fmt::format("'{}' must be dimensionless", x.name)
+                          : fmt::format("'{}' must have dimension {}", x.name, describe(dim));
+        diagnostic d = make(severity::note, rules::inferred_dimension, std::move(message), x.where);
+        d.terms.push_back({x.where, x.coefficient ? x.name + "?" : x.name, dim});
+        if (x.coefficient)
+            restate_coefficient(file_, formulas_[x.formula], x.node, x, symbols_, d);
+        out_.push_back(std::move(d));
+    }
+
+    // Free in a consistent component: say what the formulas do fix, and what would fix it.
+    void free(std::uint32_t u, const solution& s, const std::vector<std::uint32_t>& members,
+              std::size_t column) {
+        const unknown& x = unknowns_[u];
+        const std::size_t freedom = members.size() - s.rank;
+        // The coefficient matrix is the same in every base dimension, so an unknown is fixed in
+        // all of them or in none: there is no "fixed in M and L, free in T" to report. What can
+        // be said is which combinations of unknowns the formulas do fix.
+        diagnostic d =
+            make(severity::warning, rules::inferred_dimension,
+                 fmt::format("the formulas leave the dimension of {} free ({} degree{} of freedom)",
+                             who(x), freedom, freedom == 1 ? "" : "s"),
+                 x.where);
+        const std::size_t n = members.size();
+        std::vector<group_variable> names;
+        for (std::uint32_t m : members)
+            names.push_back(
+                {unknowns_[m].coefficient ? unknowns_[m].name + "?" : unknowns_[m].name, {}});
+        std::size_t listed = 0;
+        constexpr std::size_t max_listed = 3;
+        for (std::size_t r = 0; r < s.reduced.rows(); ++r) {
+            if (s.reduced.at(r, column).is_zero())
+                continue;
+            if (listed++ == max_listed)
+                break;
+            std::vector<rational> exponents(n);
+            std::array<rational, base_dimension_count> rhs{};
+            for (std::size_t c = 0; c < n; ++c)
+                exponents[c] = s.reduced.at(r, c);
+            for (std::size_t b = 0; b < base_dimension_count; ++b)
+                rhs[b] = s.reduced.at(r, n + b);
+            d.notes.push_back(
+                {fmt::format("the formulas fix only '{}', as {}", group_formula(names, exponents),
+                             describe(dimension::from_exponents(rhs))),
+                 {}});
+        }
+        if (listed == 0) {
+            d.notes.push_back({"nothing in the formulas constrains it: it cancels out, or stands "
+                               "where its dimension cannot be followed (under a variable "
+                               "exponent, in an unknown function)",
+                               {}});
+        } else if (n > 1) {
+            // Fixing the free columns of the reduced matrix fixes every pivot column.
+            std::vector<bool> pivot(n, false);
+            for (std::size_t r = 0; r < s.reduced.rows(); ++r)
+                for (std::size_t c = 0; c < n; ++c)
+                    if (!s.reduced.at(r, c).is_zero()) {
+                        pivot[c] = true;
+                        break;
+                    }
+            std::vector<std::string> free_names;
+            for (std::size_t c = 0; c < n; ++c)
+                if (!pivot[c])
+                    free_names.push_back(fmt::format("'{}'", names[c].name));
+            d.notes.push_back(
+                {fmt::format("declaring the dimension of {} would fix the rest",
+                             fmt::join(free_names, free_names.size() == 2 ? " and " : ", ")),
+                 {}});
+        }
+        out_.push_back(std::move(d));
+    }
+
+    void conflict(std::uint32_t u, const std::vector<std::uint32_t>& culprits,
+                  const std::vector<solution>& without, std::size_t column) {
+        const unknown& x = unknowns_[u];
+        diagnostic d =
+            make(severity::error, rules::inference_conflict,
+                 fmt::format("the formulas disagree about the dimension of {}", who(x)), x.where);
+        constexpr std::size_t max_listed = 8;
+        if (!culprits.empty()) {
+            for (std::size_t i = 0; i < culprits.size() && i < max_listed; ++i) {
+                const syntax::formula& f = formulas_[culprits[i]];
+                const auto& value = without[i].values[column];
+                std::string message =
+                    value ? fmt::format("{}: the other formulas make {} {}", formula_name(file_, f),
+                                        who(x), describe(*value))
+                          : fmt::format("{} is one of the formulas that disagree",
+                                        formula_name(file_, f));
+                d.notes.push_back({std::move(message), {file_.source, f.range}});
+            }
+            if (culprits.size() > max_listed)
+                d.notes.push_back(
+                    {fmt::format("and {} more formulas", culprits.size() - max_listed), {}});
+        } else {
+            // No single formula is to blame: name every formula the unknown takes part in.
+            for (std::size_t i = 0; i < x.formulas.size() && i < max_listed; ++i) {
+                const syntax::formula& f = formulas_[x.formulas[i]];
+                d.notes.push_back({fmt::format("{} involves {}", formula_name(file_, f), who(x)),
+                                   {file_.source, f.range}});
+            }
+            if (x.formulas.size() > max_listed)
+                d.notes.push_back(
+                    {fmt::format("and {} more formulas", x.formulas.size() - max_listed), {}});
+            d.notes.push_back({"no one formula's removal settles it; several disagree", {}});
+        }
+        out_.push_back(std::move(d));
+    }
+
+    void undecided(std::uint32_t u, const std::vector<std::string>& disputed) {
+        const unknown& x = unknowns_[u];
+        out_.push_back(make(severity::warning, rules::inferred_dimension,
+                            fmt::format("the dimension of {} cannot be inferred while the "
+                                        "formulas disagree about {}",
+                                        who(x), fmt::join(disputed, ", ")),
+                            x.where));
+    }
+
+    void overflow(std::uint32_t u) {
+        out_.push_back(make(severity::error, rules::overflow,
+                            fmt::format("inferring the dimension of {} needs exponents beyond the "
+                                        "exact range (64-bit numerator and denominator)",
+                                        who(unknowns_[u])),
+                            unknowns_[u].where));
+    }
+
+  private:
+    const syntax::parsed_file& file_;
+    std::span<const syntax::formula> formulas_;
+    symbol_table& symbols_;
+    const std::vector<unknown>& unknowns_;
+    std::vector<diagnostic>& out_;
+};
+
+// Above this many formulas in one tangle, trying each one's removal costs too much; every
+// formula involved is named instead.
+constexpr std::size_t max_culprit_search = 64;
+
+struct component {
+    std::vector<std::uint32_t> members; // unknowns, ascending
+    std::vector<const equation*> equations;
+};
+
+void settle(const component& c, const std::vector<unknown>& unknowns,
+            std::vector<std::uint32_t>& column, reporter& report) {
+    const std::size_t n = c.members.size();
+    for (std::size_t i = 0; i < n; ++i)
+        column[c.members[i]] = static_cast<std::uint32_t>(i);
+    solution all;
+    try {
+        all = solve(c.equations, column, n, {});
+    } catch (const arithmetic_overflow&) {
+        report.overflow(c.members.front());
+        return;
+    }
+    if (all.consistent) {
+        for (std::size_t i = 0; i < n; ++i) {
+            if (all.values[i])
+                report.determined(c.members[i], *all.values[i]);
+            else
+                report.free(c.members[i], all, c.members, i);
+        }
+        return;
+    }
+    std::vector<std::uint32_t> involved;
+    for (const equation* e : c.equations)
+        involved.push_back(e->formula);
+    std::sort(involved.begin(), involved.end());
+    involved.erase(std::unique(involved.begin(), involved.end()), involved.end());
+    std::vector<std::uint32_t> culprits;
+    std::vector<solution> without;
+    if (involved.size() <= max_culprit_search) {
+        for (std::uint32_t f : involved) {
+            try {
+                solution s = solve(c.equations, column, n, {f});
+                if (s.consistent) {
+                    culprits.push_back(f);
+                    without.push_back(std::move(s));
+                }
+            } catch (const arithmetic_overflow&) {
+                // Too large to tell: this formula is simply not named as the one to blame.
+            }
+        }
+    }
+    if (culprits.empty()) {
+        for (std::size_t i = 0; i < n; ++i)
+            report.conflict(c.members[i], culprits, without, i);
+        return;
+    }
+    // The unknowns of the formulas to blame are in dispute. The others are settled only by
+    // formulas that involve none of those: a value that leans on a disputed unknown (Z = X*t
+    // while X is in dispute) would be as doubtful as the unknown itself.
+    std::vector<bool> disputed(n, false);
+    std::vector<std::string> disputed_names;
+    std::vector<std::uint32_t> left_out;
+    for (std::size_t i = 0; i < n; ++i) {
+        const auto& fs = unknowns[c.members[i]].formulas;
+        disputed[i] = std::any_of(culprits.begin(), culprits.end(), [&](std::uint32_t f) {
+            return std::binary_search(fs.begin(), fs.end(), f);
+        });
+        if (!disputed[i])
+            continue;
+        if (disputed_names.size() < 3)
+            disputed_names.push_back(who(unknowns[c.members[i]]));
+        left_out.insert(left_out.end(), fs.begin(), fs.end());
+    }
+    std::sort(left_out.begin(), left_out.end());
+    left_out.erase(std::unique(left_out.begin(), left_out.end()), left_out.end());
+    std::optional<solution> rest;
+    try {
+        rest = solve(c.equations, column, n, left_out);
+    } catch (const arithmetic_overflow&) {
+        rest.reset();
+    }
+    for (std::size_t i = 0; i < n; ++i) {
+        if (disputed[i])
+            report.conflict(c.members[i], culprits, without, i);
+        else if (rest && rest->values[i])
+            report.determined(c.members[i], *rest->values[i]);
+        else
+            report.undecided(c.members[i], disputed_names);
+    }
+}
+
+std::uint32_t find_root(std::vector<std::uint32_t>& parent, std::uint32_t x) {
+    while (parent[x] != x) {
+        parent[x] = parent[parent[x]];
+        x = parent[x];
+    }
+    return x;
+}
+
+} // namespace
+
+double coherent_coefficient(double k, double f_y,
+                            std::span<const std::pair<double, rational>> factors_and_exponents) {
+    double result = k * f_y;
+    for (const auto& [factor, exponent] : factors_and_exponents)
+        result *= std::pow(factor, -exponent.to_double());
+    return result;
+}
+
+void infer_dimensions(const syntax::parsed_file& file, std::span<const syntax::formula> formulas,
+                      symbol_table& symbols, std::vector<diagnostic>& out) {
+    if (file.source == nullptr)
+        return;
+    equation_builder builder(file, symbols);
+    for (std::uint32_t i = 0; i < formulas.size(); ++i) {
+        const std::size_t before = builder.equations.size();
+        try {
+            builder.add_formula(i, formulas[i]);
+        } catch (const arithmetic_overflow&) {
+            builder.equations.erase(builder.equations.begin() + static_cast<std::ptrdiff_t>(before),
+                                    builder.equations.end());
+            // Worded as the checker words it, so that the two findings merge into one.
+            out.push_back(make(severity::error, rules::overflow,
+                               "the exponents in this formula exceed the exact range (64-bit "
+                               "numerator and denominator)",
+                               {file.source, formulas[i].range}));
+        }
+    }
+    std::vector<unknown>& unknowns = builder.unknowns;
+
+    // A `?` declaration of this file that no formula mentions (a dictionary, with no formulas,
+    // is exempt, as it is from the unused-symbol warning).
+    if (!formulas.empty()) {
+        for (const auto& decl : file.declarations) {
+            if (!decl.kind.to_infer)
+                continue;
+            for (std::uint32_t k = 0; k < decl.name_count; ++k) {
+                const syntax::declared_name& dn = file.names[decl.first_name + k];
+                const std::string_view name = file.source->text(dn.name);
+                const symbol_entry* e = symbols.find(name);
+                if (e == nullptr || !e->to_infer || e->declared_at.file != file.source ||
+                    e->declared_at.range.begin != dn.name.begin || builder.by_symbol.contains(e))
+                    continue;
+                out.push_back(
+                    make(severity::warning, rules::inferred_dimension,
+                         fmt::format("'{}' is declared with ? but no formula uses it", name),
+                         {file.source, dn.name}));
+            }
+        }
+    }
+    if (unknowns.empty())
+        return;
+
+    // Unknowns tied by an equation are solved together; the rest do not affect them, and a
+    // disagreement stays within the tangle that holds it.
+    std::vector<std::uint32_t> parent(unknowns.size());
+    std::iota(parent.begin(), parent.end(), 0U);
+    for (const equation& e : builder.equations)
+        for (std::size_t i = 1; i < e.unknowns.size(); ++i)
+            parent[find_root(parent, e.unknowns[i].first)] = find_root(parent, e.unknowns[0].first);
+    std::vector<std::uint32_t> component_of(unknowns.size(), syntax::no_index);
+    std::vector<component> components;
+    for (std::uint32_t u = 0; u < unknowns.size(); ++u) {
+        const std::uint32_t root = find_root(parent, u);
+        if (component_of[root] == syntax::no_index) {
+            component_of[root] = static_cast<std::uint32_t>(components.size());
+            components.emplace_back();
+        }
+        components[component_of[root]].members.push_back(u);
+    }
+    for (const equation& e : builder.equations)
+        components[component_of[find_root(parent, e.unknowns[0].first)]].equations.push_back(&e);
+
+    reporter report(file, formulas, symbols, unknowns, out);
+    std::vector<std::uint32_t> column(unknowns.size(), 0);
+    for (const component& c : components)
+        settle(c, unknowns, column, report);
+}
+
+} // namespace plumb

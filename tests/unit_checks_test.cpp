@@ -1,0 +1,160 @@
+// Checks that need units, not only dimensions: offset scales, mixed units within one
+// dimension, and quantities and constants written inside formulas.
+#include "plumb/check.hpp"
+#include "plumb/rules.hpp"
+
+#include <doctest/doctest.h>
+
+#include <algorithm>
+#include <string>
+#include <vector>
+
+namespace {
+
+std::vector<const plumb::diagnostic*> findings(const plumb::check_report& r,
+                                               std::string_view rule) {
+    std::vector<const plumb::diagnostic*> out;
+    for (const auto& d : r.diagnostics)
+        if (d.rule == rule)
+            out.push_back(&d);
+    return out;
+}
+
+std::uint32_t line_of(const plumb::diagnostic& d) {
+    return d.where.file->position(d.where.range.begin).line;
+}
+
+bool mentions(const plumb::diagnostic& d, std::string_view text) {
+    if (d.message.find(text) != std::string::npos)
+        return true;
+    return std::any_of(d.notes.begin(), d.notes.end(),
+                       [&](const auto& n) { return n.message.find(text) != std::string::npos; });
+}
+
+// The ideal gas law, p V = n R T, needs absolute temperature (common practice; any
+// thermodynamics text, e.g. Çengel & Boles, Thermodynamics, ch. 3, from memory).
+const std::string gas = "p : Pa\nV : m^3\nn : mol\nR_u : J/(mol*K)\nT_C, T_1, T_2 : °C\n"
+                        "T_K : K\nQ : W\nm_dot : kg/s\nc_p : J/(kg*K)\n";
+
+} // namespace
+
+TEST_CASE(
+    "offset scales: a °C value in a product is reported, conversions and differences are not") {
+    const auto r = plumb::check_text("gas.plumb", gas + "p*V = n*R_u*T_C\n"            // line 10
+                                                        "p*V = n*R_u*(T_C + 273.15)\n" // 11
+                                                        "Q = m_dot*c_p*(T_2 - T_1)\n"  // 12
+                                                        "T_K = T_C + 273.15\n"         // 13
+                                                        "T_C <= T_2\n");               // 14
+    const auto offsets = findings(r, plumb::rules::offset_scale);
+    REQUIRE(offsets.size() == 1);
+    CHECK(line_of(*offsets[0]) == 10);
+    CHECK(mentions(*offsets[0], "°C"));
+    CHECK(mentions(*offsets[0], "K"));
+    CHECK(findings(r, plumb::rules::sum_mismatch).empty()); // 273.15 counts as a temperature
+    CHECK(r.count(plumb::severity::error) == 1);
+}
+
+TEST_CASE("offset scales: powers, functions, quotients and gauge pressure") {
+    SUBCASE("Stefan–Boltzmann with °C (radiation needs K; Incropera et al., 6th ed., eq. 1.5, from "
+            "memory)") {
+        const auto r =
+            plumb::check_text("r.plumb", "q : W/m^2\nε : 1\nT_s : °C\nq = ε*{σ}*T_s^4\n");
+        REQUIRE(findings(r, plumb::rules::offset_scale).size() == 1);
+        CHECK(mentions(*findings(r, plumb::rules::offset_scale)[0], "power"));
+    }
+    SUBCASE("Arrhenius with °C (Fogler, Elements of Chemical Reaction Engineering, ch. 3, from "
+            "memory)") {
+        const auto r = plumb::check_text(
+            "a.plumb",
+            "k, A : 1/s\nE_a : J/mol\nR_u : J/(mol*K)\nT : °C\nk = A*exp(-E_a/(R_u*T))\n");
+        CHECK(findings(r, plumb::rules::offset_scale).size() == 1);
+    }
+    SUBCASE(
+        "a gauge pressure in a pressure ratio (common practice: ratios need absolute pressure)") {
+        const auto r = plumb::check_text("g.plumb", "p_1 : psig\np_2 : psia\nr : 1\nr = p_2/p_1\n");
+        const auto offsets = findings(r, plumb::rules::offset_scale);
+        REQUIRE(offsets.size() == 1);
+        CHECK(mentions(*offsets[0], "psig"));
+        CHECK(mentions(*offsets[0], "absolute pressure"));
+    }
+    SUBCASE("°F converts with 459.67 (NIST SP 811 (2008), B.9: T/K = (t/°F + 459.67)/1.8)") {
+        const auto r = plumb::check_text("f.plumb", "p : Pa\nV : m^3\nn : mol\nR_u : J/(mol*K)\n"
+                                                    "t : °F\np*V = n*R_u*(t + 459.67)*5/9\n");
+        CHECK(findings(r, plumb::rules::offset_scale).empty());
+        CHECK(findings(r, plumb::rules::sum_mismatch).empty());
+    }
+    SUBCASE("a mean of two offset values divided by a number is fine") {
+        const auto r = plumb::check_text("m.plumb", "T_1, T_2, T_m : °C\nT_m = (T_1 + T_2)/2\n");
+        CHECK(r.diagnostics.empty());
+    }
+}
+
+TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6") {
+    const std::string decl = "Q : m^3/s\nV : m/s\nD : mm\n";
+    const auto r = plumb::check_text("q.plumb", decl + "Q = V*pi*D^2/4\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(scales[0]->level == plumb::severity::warning);
+    CHECK(scales[0]->message.find("1e+06 times") != std::string::npos);
+    CHECK(mentions(*scales[0], "'D' is in mm"));
+
+    // The conversion written into the formula (1 m^2 = 10^6 mm^2) answers it.
+    const auto fixed = plumb::check_text("q.plumb", decl + "Q = V*pi*D^2/4/1e6\n");
+    CHECK(findings(fixed, plumb::rules::unit_scale).empty());
+}
+
+TEST_CASE("mixed units: a pressure in kPa beside ρ g h in Pa is off by 1000") {
+    // Put in as declared, ρ*g*h gives pascals while p_0 is in kilopascals: ρ*g*h counts 1000
+    // times too much against it.
+    const auto r = plumb::check_text(
+        "p.plumb", "p, p_0 : kPa\nρ : kg/m^3\ng : m/s^2\nh : m\np = p_0 + ρ*g*h\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(scales[0]->message.find("'ρ*g*h' counts 1000 times as much as 'p_0'") !=
+          std::string::npos);
+    // Coherent declarations are clean.
+    const auto clean = plumb::check_text(
+        "p.plumb", "p, p_0 : Pa\nρ : kg/m^3\ng : m/s^2\nh : m\np = p_0 + ρ*g*h\n");
+    CHECK(clean.diagnostics.empty());
+}
+
+TEST_CASE("mixed units: the argument of ln must come out as a pure number") {
+    // p's number is in kPa, a thousandth of its value in Pa: the ratio comes out 1000 too small.
+    const auto r = plumb::check_text("l.plumb", "p : kPa\np_ref : Pa\nx : 1\nx = ln(p/p_ref)\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(scales[0]->message.find("0.001 times its true value") != std::string::npos);
+}
+
+TEST_CASE("quantities and constants inside formulas") {
+    SUBCASE("a freeboard of 0.5 m added to a depth") {
+        const auto r = plumb::check_text("f.plumb", "h, H : m\nH = h + 0.5 {m}\n");
+        CHECK(r.diagnostics.empty());
+        const auto wrong = plumb::check_text("f.plumb", "h, H : m\nH = h + 0.5 {s}\n");
+        CHECK(findings(wrong, plumb::rules::sum_mismatch).size() == 1);
+        const auto scaled = plumb::check_text("f.plumb", "h, H : m\nH = h + 500 {mm}\n");
+        CHECK(findings(scaled, plumb::rules::unit_scale).size() == 1);
+    }
+    SUBCASE("standard gravity, the molar gas constant and Stefan–Boltzmann (SI Brochure 9th ed.; "
+            "CODATA 2018)") {
+        const auto r = plumb::check_text(
+            "c.plumb", "W : N\nm : kg\np : Pa\nV : m^3\nn : mol\nT : K\nq : W/m^2\n"
+                       "W = m*{g_n}\np*V = n*{R}*T\nq = {σ}*T^4\n");
+        CHECK(r.diagnostics.empty());
+        // A wrong use still fails: σ T^3 is not a heat flux.
+        const auto wrong = plumb::check_text("c.plumb", "T : K\nq : W/m^2\nq = {σ}*T^3\n");
+        CHECK(findings(wrong, plumb::rules::side_mismatch).size() == 1);
+    }
+    SUBCASE("an unknown name in braces says which and suggests") {
+        const auto r = plumb::check_text("u.plumb", "x : m\nx = 3 {meter}\n");
+        const auto unknown = findings(r, plumb::rules::unknown_unit);
+        REQUIRE(unknown.size() == 1);
+        CHECK(unknown[0]->message.find("'meter'") != std::string::npos);
+    }
+    SUBCASE("an unclosed brace is a syntax error that says what goes inside") {
+        const auto r = plumb::check_text("b.plumb", "x : m\nx = 3 {m\n");
+        const auto syntax = findings(r, plumb::rules::syntax);
+        REQUIRE(syntax.size() == 1);
+        CHECK(syntax[0]->message.find("'}'") != std::string::npos);
+    }
+}
