@@ -171,6 +171,13 @@ struct declaration_head : seq<name, star<ws, one<','>, ws, opt<name>>, ws, one<'
 struct declaration : seq<at<declaration_head>, name_list, ws, one<':'>, ws, must<declaration_spec>,
                          opt<ws, constant_assignment>, opt<ws, description>> {};
 
+// --- Units of one's own: unit mgd = 0.0438126 m^3/s "million US gallons per day" -----------
+struct new_unit_name : seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>> {};
+struct new_unit_value : seq<number, must<number_end>, star<space>, unit_expression> {};
+struct unit_statement : seq<at<TAO_PEGTL_STRING("unit"), plus<space>, new_unit_name, ws, one<'='>>,
+                            TAO_PEGTL_STRING("unit"), plus<space>, new_unit_name, ws, one<'='>, ws,
+                            must<new_unit_value>, opt<ws, description>> {};
+
 // --- Shared dictionaries: use "path" ------------------------------------------------------
 struct use_path_text : star<not_one<'"', '\n'>> {};
 struct use_path_close : one<'"'> {};
@@ -217,7 +224,8 @@ struct case_statement : seq<at<case_kind, plus<space>, label_name, ws, one<':'>>
                             plus<space>, study_name, ws, study_colon, ws, must<case_items>> {};
 
 // --- One logical line ---------------------------------------------------------------------
-struct statement : sor<use_statement, study_statement, case_statement, declaration, formula> {};
+struct statement
+    : sor<use_statement, unit_statement, study_statement, case_statement, declaration, formula> {};
 struct line_end : seq<ws, opt<comment>, eof> {};
 struct line : seq<ws, opt<statement>, must<line_end>> {};
 

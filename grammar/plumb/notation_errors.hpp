@@ -48,6 +48,7 @@ template <> inline constexpr const char* error_message<case_item> = "expected a 
 template <> inline constexpr const char* error_message<value_quantity> = "expected a number and its unit, as in 3 m/s";
 template <> inline constexpr const char* error_message<scale_value> = "expected the model scale as a ratio such as 1:25, or a number such as 0.04";
 template <> inline constexpr const char* error_message<brace_close> = "expected '}' to close the braces; inside them goes a unit such as m/s or a constant such as g_n";
+template <> inline constexpr const char* error_message<new_unit_value> = "expected the unit's size as a number and a known unit, as in: unit mgd = 0.0438126 m^3/s";
 template <> inline constexpr const char* error_message<line_end> = "expected an operator, a comparison or the end of the line here";
 // clang-format on
 

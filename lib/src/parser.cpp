@@ -80,6 +80,7 @@ struct parse_state {
     const source_file& file;
     syntax::parsed_file& out;
     const char* file_begin;
+    const statement_sink* sink = nullptr; // for units defined in used files
 
     std::vector<std::uint32_t> operands;
     std::vector<std::uint32_t> argument_counts;
@@ -100,6 +101,10 @@ struct parse_state {
     std::optional<rational> pending_exponent;
     std::vector<unit_value> units;
     span pending_use_path{};
+    span pending_unit_name{};
+    bool pending_unit_ok = false;
+    dimension pending_unit_dim;
+    double pending_unit_factor = 0.0;
 
     // Study and case under construction.
     span pending_study_name{}, pending_dependent{};
@@ -117,6 +122,13 @@ struct parse_state {
     }
     template <typename Input> [[nodiscard]] span range(const Input& in) const {
         return range(in.begin(), in.end());
+    }
+
+    [[nodiscard]] const syntax::defined_unit* find_defined_unit(std::string_view name) const {
+        for (const auto& u : out.units)
+            if (u.name == name)
+                return &u;
+        return sink != nullptr ? sink->imported_unit(name) : nullptr;
     }
 
     std::uint32_t push_node(syntax::expr_node n) {
@@ -385,6 +397,10 @@ template <> struct action<nt::unit_symbol> {
                 return;
             }
         }
+        if (const syntax::defined_unit* own = s.find_defined_unit(text)) {
+            s.units.push_back({own->dim, own->si_factor, nullptr, true, false});
+            return;
+        }
         const auto unit = unit_table::standard().resolve(text);
         if (!unit) {
             std::string message = fmt::format("unknown unit '{}'", text);
@@ -399,8 +415,10 @@ template <> struct action<nt::unit_symbol> {
             s.report(rules::unknown_unit, message, s.range(in));
             diagnostic& d = s.out.diagnostics.back();
             d.notes.push_back(
-                {"a unit the table lacks can be written as a dimension instead, such as "
-                 "[L T^-1]; `plumb units` lists the built-in units",
+                {fmt::format("define it on a line of its own, as in: unit {} = 0.3048 m (its size "
+                             "in a known unit), or declare the symbol by its dimension, as in "
+                             "[L T^-1]; `plumb units` lists the built-in units",
+                             text),
                  {}});
             s.units.push_back({{}, 1.0, nullptr, false});
             return;
@@ -495,6 +513,42 @@ template <> struct action<nt::declaration> {
         s.out.declarations.push_back({s.range(in), s.pending_spec, s.pending_description,
                                       s.pending_value, s.pending_kind, s.pending_first_name,
                                       count});
+    }
+};
+
+// --- unit NAME = number unit ---
+template <> struct action<nt::new_unit_value> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const unit_value u = s.units.back();
+        s.units.pop_back();
+        s.pending_unit_ok = u.ok;
+        s.pending_unit_dim = u.dim;
+        const std::string text(in.string_view());
+        s.pending_unit_factor = std::strtod(text.c_str(), nullptr) * u.factor;
+    }
+};
+template <> struct action<nt::new_unit_name> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_unit_name = s.range(in);
+    }
+};
+template <> struct action<nt::unit_statement> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        const std::string_view name = s.file.text(s.pending_unit_name);
+        if (!s.pending_unit_ok)
+            return; // its unit was unknown, and said so
+        if (unit_table::standard().resolve(name) || s.find_defined_unit(name) != nullptr) {
+            s.report(rules::conflicting_declaration,
+                     fmt::format("'{}' is already a unit; choose another name for this one", name),
+                     s.pending_unit_name);
+            return;
+        }
+        if (!(s.pending_unit_factor > 0.0)) {
+            s.report(rules::syntax, "a unit's size must be a positive number", s.pending_unit_name);
+            return;
+        }
+        s.out.units.push_back(
+            {std::string(name), s.pending_unit_dim, s.pending_unit_factor, s.pending_unit_name});
     }
 };
 
@@ -645,13 +699,13 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin) {
 
 // Rolls back whatever a failed line added, so the tree holds only complete statements.
 struct tree_mark {
-    std::size_t nodes, call_args, quantities, sides, formulas, declarations, names, uses, studies,
-        study_names, cases, case_values, diagnostics;
+    std::size_t nodes, call_args, quantities, sides, formulas, declarations, names, uses, units,
+        studies, study_names, cases, case_values, diagnostics;
     explicit tree_mark(const syntax::parsed_file& f)
         : nodes(f.nodes.size()), call_args(f.call_args.size()), quantities(f.quantities.size()),
           sides(f.sides.size()), formulas(f.formulas.size()), declarations(f.declarations.size()),
-          names(f.names.size()), uses(f.uses.size()), studies(f.studies.size()),
-          study_names(f.study_names.size()), cases(f.cases.size()),
+          names(f.names.size()), uses(f.uses.size()), units(f.units.size()),
+          studies(f.studies.size()), study_names(f.study_names.size()), cases(f.cases.size()),
           case_values(f.case_values.size()), diagnostics(f.diagnostics.size()) {}
     void restore(syntax::parsed_file& f) const {
         f.nodes.resize(nodes);
@@ -662,6 +716,7 @@ struct tree_mark {
         f.declarations.resize(declarations);
         f.names.resize(names);
         f.uses.resize(uses);
+        f.units.resize(units);
         f.studies.resize(studies);
         f.study_names.resize(study_names);
         f.cases.resize(cases);
@@ -718,6 +773,7 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
     out.source = &file;
     const std::string_view text = file.text();
     parse_state state(file, out);
+    state.sink = sink;
 
     std::size_t begin = 0;
     std::size_t syntax_errors = 0;

@@ -15,6 +15,11 @@ class statement_sink {
     virtual void on_declaration(const syntax::parsed_file& file, std::uint32_t declaration) = 0;
     // True when the formula is dealt with and its tree may be dropped.
     virtual bool on_formula(const syntax::parsed_file& file, const syntax::formula& formula) = 0;
+    // A unit defined in a file this one uses, by name; null when there is none.
+    [[nodiscard]] virtual const syntax::defined_unit* imported_unit(std::string_view name) const {
+        (void)name;
+        return nullptr;
+    }
 };
 
 // Never throws on any input: syntax errors, unknown units and exponent overflow become

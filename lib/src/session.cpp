@@ -126,10 +126,33 @@ class dictionary_reader : public statement_sink {
     bool on_formula(const syntax::parsed_file& /*tree*/, const syntax::formula& /*f*/) override {
         return true;
     }
+    [[nodiscard]] const syntax::defined_unit* imported_unit(std::string_view name) const override {
+        for (const auto* u : imported_)
+            if (u->name == name)
+                return u;
+        return nullptr;
+    }
 
   protected:
     session& session_;
     loaded_file* file_;
+    std::vector<const syntax::defined_unit*> imported_;
+
+    // The units a used file defines, and those of the files it uses in turn.
+    void import_units(const loaded_file* used) {
+        std::vector<const loaded_file*> pending{used};
+        std::vector<const loaded_file*> seen;
+        while (!pending.empty()) {
+            const loaded_file* f = pending.back();
+            pending.pop_back();
+            if (std::find(seen.begin(), seen.end(), f) != seen.end())
+                continue;
+            seen.push_back(f);
+            for (const auto& u : f->tree.units)
+                imported_.push_back(&u);
+            pending.insert(pending.end(), f->uses.begin(), f->uses.end());
+        }
+    }
 };
 
 // Reads a file being checked: symbols enter the table as they are declared, and each
@@ -467,12 +490,15 @@ class session {
 };
 
 void dictionary_reader::on_use(const syntax::parsed_file& /*tree*/, const syntax::use_line& use) {
-    session_.resolve_use(file_, use);
+    if (const loaded_file* used = session_.resolve_use(file_, use))
+        import_units(used);
 }
 
 void checking_reader::on_use(const syntax::parsed_file& /*tree*/, const syntax::use_line& use) {
-    if (loaded_file* used = session_.resolve_use(file_, use))
+    if (loaded_file* used = session_.resolve_use(file_, use)) {
+        import_units(used);
         session_.declare_from(used, table_, visited_, false);
+    }
 }
 
 void checking_reader::on_declaration(const syntax::parsed_file& tree, std::uint32_t index) {

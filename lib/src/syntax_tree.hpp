@@ -10,6 +10,7 @@
 #include <cstdint>
 #include <limits>
 #include <optional>
+#include <string>
 #include <vector>
 
 namespace plumb::syntax {
@@ -121,6 +122,15 @@ struct study_case {
     std::uint32_t value_count;
 };
 
+// unit NAME = number unit: a unit of the user's own, known after its line in this file and
+// in files that `use` this one.
+struct defined_unit {
+    std::string name;
+    dimension dim;
+    double si_factor = 1.0;
+    span where;
+};
+
 struct parsed_file {
     const source_file* source = nullptr;
     std::vector<expr_node> nodes;
@@ -131,6 +141,7 @@ struct parsed_file {
     std::vector<declaration> declarations;
     std::vector<declared_name> names;
     std::vector<use_line> uses;
+    std::vector<defined_unit> units;
     std::vector<study> studies;
     std::vector<span> study_names;
     std::vector<study_case> cases;
