@@ -174,6 +174,20 @@ TEST_CASE("inference: function arguments and exponents constrain") {
     CHECK(r.about("'W'").terms.at(0).dim == dim({{L, 1}}));
 }
 
+TEST_CASE("inference: quantities in braces, named constants and limits") {
+    // 9.81 {m/s^2} * t is [L T^-1]; {g_n} (standard gravity) over Y is [T^-1] when Y = [L T^-1];
+    // 0 <= W <= d: the 0 agrees with anything, so W = [L].
+    const run r = infer("X, Y, W : ?\n"
+                        "t : s\n"
+                        "d : m\n"
+                        "X = 9.81 {m/s^2} * t\n"
+                        "1/t = {g_n} / Y\n"
+                        "0 <= W <= d\n");
+    CHECK(r.about("'X'").terms.at(0).dim == dim({{L, 1}, {T, -1}}));
+    CHECK(r.about("'Y'").terms.at(0).dim == dim({{L, 1}, {T, -1}}));
+    CHECK(r.about("'W'").terms.at(0).dim == dim({{L, 1}}));
+}
+
 TEST_CASE("inference: derivatives and integrals") {
     // tau = mu * deriv(u, y): mu = [M L^-1 T^-2] / [T^-1] = [M L^-1 T^-1].
     // W = integral(p, V): p = [M L^2 T^-2] / [L^3] = [M L^-1 T^-2].
@@ -281,8 +295,9 @@ TEST_CASE("inference: an unknown with a formula of its own is settled despite a 
     CHECK(z.terms.at(0).dim == dim({{L, 1}, {T, 1}}));
 }
 
-TEST_CASE("inference: a disagreement no single formula settles names every formula") {
-    // Two formulas say [L], two say [T]: removing any one leaves a disagreement.
+TEST_CASE("inference: a disagreement no single formula settles names a minimal set") {
+    // Two formulas say [L], two say [T]: removing any one leaves a disagreement. Dropping each
+    // in turn while the rest still disagree leaves one of each: X = 3*d and X = 3*t.
     const run r = infer("X : ?\n"
                         "d : m\n"
                         "t : s\n"
@@ -291,9 +306,42 @@ TEST_CASE("inference: a disagreement no single formula settles names every formu
                         "X = t\n"
                         "X = 3*t\n");
     REQUIRE(r.diagnostics.size() == 1);
-    CHECK(r.diagnostics[0].rule == plumb::rules::inference_conflict);
-    CHECK(has_note(r.diagnostics[0], "'X = 3*t' involves 'X'"));
-    CHECK(r.diagnostics[0].notes.size() == 5); // four formulas and the explanation
+    const diagnostic& d = r.diagnostics[0];
+    CHECK(d.rule == plumb::rules::inference_conflict);
+    REQUIRE(d.notes.size() == 3);
+    CHECK(d.notes[0].message == "'X = 3*d' is one of the formulas that disagree");
+    CHECK(r.source->position(d.notes[0].where.range.begin).line == 5);
+    CHECK(d.notes[1].message == "'X = 3*t' is one of the formulas that disagree");
+    CHECK(r.source->position(d.notes[1].where.range.begin).line == 7);
+    CHECK(d.notes[2].message.starts_with("no one formula's removal settles it"));
+}
+
+TEST_CASE("inference: a formula that contradicts itself is said to") {
+    // X + X*t needs X = [L] (from d) and X*t = [L] at once.
+    const run r = infer("X : ?\n"
+                        "d : m\n"
+                        "t : s\n"
+                        "@self X + X*t = d\n"
+                        "@plain X = d\n");
+    REQUIRE(r.diagnostics.size() == 1);
+    REQUIRE(r.diagnostics[0].notes.size() == 1);
+    CHECK(r.diagnostics[0].notes[0].message ==
+          "@self cannot hold on its own, whatever dimensions its unknowns have");
+}
+
+TEST_CASE("inference: two separate disagreements in one tangle are both found") {
+    // X and Y are tied by @tie; X disagrees in @x1/@x2 and Y in @y1/@y2. No single removal
+    // settles both, so each round finds one set.
+    const run r = infer("X, Y : ?\n"
+                        "d : m\n"
+                        "t : s\n"
+                        "@x1 X = d\n"
+                        "@x2 X = t\n"
+                        "@y1 Y = d\n"
+                        "@y2 Y = t\n"
+                        "@tie X*Y = d*t\n");
+    CHECK(r.with_rule(plumb::rules::inference_conflict).size() == 2);
+    CHECK(r.diagnostics.size() == 2);
 }
 
 TEST_CASE("inference: a disagreement without unknowns is left to the checker") {
@@ -313,6 +361,9 @@ TEST_CASE("inference: exponents beyond the exact range are reported, not thrown"
                         "d : m\n"
                         "X^(1/4611686018427387903) * X^(1/4611686018427387902) = d\n");
     CHECK(!r.with_rule(plumb::rules::overflow).empty());
+    // X stands only in that formula, so nothing is left to fix it, and the warning says why.
+    CHECK(has_note(r.about("the formulas leave the dimension of 'X' free"),
+                   "exceeds the exact range"));
 }
 
 // ---- Coefficients of empirical formulas ----------------------------------------------------
@@ -321,7 +372,7 @@ TEST_CASE("inference: Manning's coefficient in US customary units") {
     // Chow, Open-Channel Hydraulics (1959), ch. 5 (from memory): V = (1.49/n) R^(2/3) S^(1/2)
     // in ft/s and ft, 1.486 to more figures; in SI, V = (1/n) R^(2/3) S^(1/2). The coefficient
     // carries [L T^-1] / [L^(2/3)] = [L^(1/3) T^-1]; in SI it is 1.486 * 0.3048 / 0.3048^(2/3)
-    // = 1.486 * 0.3048^(1/3) = 1.486 * 0.672985 = 1.00005.
+    // = 1.486 * 0.3048^(1/3) = 1.486 * 0.672984 = 1.00005.
     const run r = infer("V : ft/s\n"
                         "R : ft\n"
                         "n, S : 1\n"
@@ -373,7 +424,25 @@ TEST_CASE("inference: Darcy's law in oilfield units has a dimensionless coeffici
                         "q = 0.001127? * k * A * dp / (mu * L)\n");
     REQUIRE(r.diagnostics.size() == 1);
     CHECK(r.diagnostics[0].message == "the coefficient 0.001127 must be dimensionless");
-    CHECK(has_note(r.diagnostics[0], "= 0.999897"));
+    CHECK(has_note(r.diagnostics[0], "0.001127 holds only with q in bbl/d, k in mD, A in ft^2, "
+                                     "dp in psi, mu in cP and L in ft, as declared"));
+    // ft^2 / ft leaves one foot below; the factors print to 7 figures, the result to 6.
+    CHECK(has_note(r.diagnostics[0],
+                   "in coherent SI units the coefficient is 0.001127 \u00D7 (bbl/d)*cP*ft/"
+                   "(mD*ft^2*psi) = 0.001127 \u00D7 1.840131e-06*0.001/(9.869233e-16*0.3048*"
+                   "6894.757) = 0.999897"));
+}
+
+TEST_CASE("inference: a coefficient written as a divisor is restated too") {
+    // V = R^(2/3) S^(1/2) / (n k): k = 1/1.486 = 0.6729 carries [L^(-1/3) T]; in SI it is
+    // 0.6729 / 0.3048^(1/3) = 0.6729 / 0.672984 = 0.999875.
+    const run r = infer("V : ft/s\n"
+                        "R : ft\n"
+                        "n, S : 1\n"
+                        "V = R^(2/3) * S^(1/2) / (n * 0.6729?)\n");
+    REQUIRE(r.diagnostics.size() == 1);
+    CHECK(r.diagnostics[0].message == "the coefficient 0.6729 must carry [L^(-1/3) T]");
+    CHECK(has_note(r.diagnostics[0], "= 0.6729 \u00D7 1/0.3048^(1/3) = 0.999875"));
 }
 
 TEST_CASE("inference: a coefficient in a formula of another shape is not restated") {
@@ -444,7 +513,9 @@ TEST_CASE("inference: the Francis weir coefficient restated through a formula") 
                         "Q = 3.33? * b * H^(3/2)\n");
     REQUIRE(r.diagnostics.size() == 1);
     CHECK(r.diagnostics[0].message == "the coefficient 3.33 must carry [L^(1/2) T^-1]");
-    CHECK(has_note(r.diagnostics[0], "= 1.83845"));
+    // ft^3/s is 0.3048^3, so the derivation shows one power of 0.3048.
+    CHECK(has_note(r.diagnostics[0], "in coherent SI units the coefficient is 3.33 \u00D7 "
+                                     "(ft^3/s)/ft^(5/2) = 3.33 \u00D7 0.3048^(1/2) = 1.83845"));
 }
 
 // ---- Through the library's front door (needs session integration) ---------------------------

@@ -14,6 +14,7 @@
 #include <cmath>
 #include <cstdlib>
 #include <fmt/format.h>
+#include <iterator>
 #include <numeric>
 #include <optional>
 #include <string>
@@ -58,7 +59,14 @@ struct linear_form {
     bool opaque = false;
     bool zero = false;             // the literal 0, which agrees with any dimension
     std::optional<rational> value; // exact value of an expression of numbers alone
+    // An unknown it mentions, even when all have cancelled (X/X): X + X*t = d has no unknown
+    // left in X − X*t, yet it cannot hold, and the unknown is what the finding is about.
+    std::uint32_t anchor = syntax::no_index;
 };
+
+std::uint32_t either(std::uint32_t a, std::uint32_t b) {
+    return a != syntax::no_index ? a : b;
+}
 
 linear_form opaque_form() {
     linear_form f;
@@ -72,6 +80,7 @@ linear_form product(const linear_form& a, const linear_form& b, bool divide) {
     linear_form r;
     r.known = divide ? a.known / b.known : a.known * b.known;
     r.unknowns = combine(a.unknowns, b.unknowns, divide ? rational(-1) : rational(1));
+    r.anchor = either(a.anchor, b.anchor);
     return r;
 }
 
@@ -80,6 +89,7 @@ linear_form scaled(const linear_form& a, rational p) {
         return opaque_form();
     linear_form r;
     r.known = a.known.pow(p);
+    r.anchor = a.anchor;
     if (!p.is_zero())
         for (const auto& [u, c] : a.unknowns)
             r.unknowns.emplace_back(u, c * p);
@@ -91,6 +101,12 @@ struct equation {
     combination unknowns;
     dimension rhs;
     std::uint32_t formula = 0;
+    std::uint32_t anchor = 0; // an unknown mentioned, for an equation whose unknowns cancelled
+
+    // The unknown whose tangle this equation belongs to.
+    [[nodiscard]] std::uint32_t owner() const {
+        return unknowns.empty() ? anchor : unknowns.front().first;
+    }
 };
 
 struct unknown {
@@ -171,23 +187,32 @@ class equation_builder {
         occurs(u);
         linear_form f;
         f.unknowns.emplace_back(u, rational(1));
+        f.anchor = u;
         return f;
     }
 
     void agree(const linear_form& a, const linear_form& b) {
         if (a.opaque || b.opaque || a.zero || b.zero)
             return;
-        combination c = combine(a.unknowns, b.unknowns, rational(-1));
-        // Without an unknown, a disagreement is the checker's to report, not ours to solve.
-        if (c.empty())
-            return;
-        equations.push_back({std::move(c), b.known / a.known, current_});
+        add(combine(a.unknowns, b.unknowns, rational(-1)), b.known / a.known,
+            either(a.anchor, b.anchor));
     }
 
     void require_dimensionless(const linear_form& a) {
-        if (a.opaque || a.unknowns.empty())
+        if (a.opaque)
             return;
-        equations.push_back({a.unknowns, dimension{} / a.known, current_});
+        add(a.unknowns, dimension{} / a.known, a.anchor);
+    }
+
+    void add(combination c, const dimension& rhs, std::uint32_t anchor) {
+        // Without any unknown, a disagreement is the checker's to report, not ours to solve.
+        if (anchor == syntax::no_index)
+            return;
+        // Unknowns that cancelled leave 0 = rhs: nothing when rhs is [1], else a disagreement
+        // the checker cannot see (it does not know the unknown's dimension).
+        if (c.empty() && rhs.is_dimensionless())
+            return;
+        equations.push_back({std::move(c), rhs, current_, anchor});
     }
 
     // Every usable operand agrees with the first; returns that one's index.
@@ -333,6 +358,8 @@ class equation_builder {
         // does not change that.
         linear_form result = terms[*reference];
         result.zero = false;
+        for (const auto& t : terms)
+            result.anchor = either(result.anchor, t.anchor);
         result.value = any_opaque ? std::nullopt : value;
         return result;
     }
@@ -469,9 +496,17 @@ struct solution {
     rational_matrix reduced;                      // [A | B] in reduced row echelon form
 };
 
+// Formulas that disagree, found by find_conflict.
+struct conflict_set {
+    std::vector<std::uint32_t> formulas;
+    bool each_settles = false;     // leaving out any one of them restores agreement
+    std::vector<solution> without; // with each_settles: the solution without each one
+    std::vector<bool> on_its_own;  // the formula cannot hold even alone
+    bool searched = false;         // false when there were too many formulas to search
+};
+
 // Solves the equations of one component, leaving out those of the formulas in `left_out`
-// (sorted).
-// `column` maps an unknown to its column; `n` is the number of columns.
+// (sorted). `column` maps an unknown to its column; `n` is the number of columns.
 solution solve(const std::vector<const equation*>& equations,
                const std::vector<std::uint32_t>& column, std::size_t n,
                const std::vector<std::uint32_t>& left_out) {
@@ -613,6 +648,7 @@ struct unit_factor {
     const symbol_entry* entry;
     std::string_view name;
     rational exponent;
+    std::uint32_t at; // where it stands, to list factors in the order they are written
 };
 
 // The value of an exponent such as 2, -1, 0.54 or (2/3).
@@ -709,7 +745,7 @@ bool collect_factors(const syntax::parsed_file& file, symbol_table& symbols, std
         const symbol_entry* entry = symbols.find(name);
         if (entry == nullptr || entry->to_infer || !entry->dim || entry->offset_unit != nullptr)
             return false;
-        out.push_back({entry, name, e});
+        out.push_back({entry, name, e, n.range.begin});
         return true;
     }
     case expr_kind::inferred:
@@ -720,6 +756,47 @@ bool collect_factors(const syntax::parsed_file& file, symbol_table& symbols, std
     default:
         return false;
     }
+}
+
+// Unit factors with their exponents, for display: a factor that is a small rational power of
+// one listed before it joins it (ft^3/s is 0.3048^3, ft^2 is 0.3048^2), so that the derivation
+// reads 3.33 × 0.3048^(1/2) rather than 3.33 × 0.02831685/0.3048^(5/2). Display only: the
+// value itself is computed from the factors as they are.
+std::vector<std::pair<double, rational>>
+merge_powers(const std::vector<std::pair<double, rational>>& factors) {
+    std::vector<std::pair<double, rational>> out;
+    for (const auto& [factor, g] : factors) {
+        bool merged = false;
+        for (auto& [base, sum] : out) {
+            if (base == factor) {
+                sum += g;
+                merged = true;
+                break;
+            }
+            const double ratio = std::log(factor) / std::log(base);
+            for (std::int64_t q = 1; q <= 6 && !merged; ++q) {
+                const double p = std::round(ratio * static_cast<double>(q));
+                if (std::abs(p) > 0 && std::abs(p) <= 60 &&
+                    std::abs(ratio * static_cast<double>(q) - p) < 1e-9) {
+                    const rational r(static_cast<std::int64_t>(p), q);
+                    if (std::abs(ratio) >= 1) {
+                        sum += g * r;
+                    } else {
+                        // The newcomer is the smaller power (ft after ft^2): it becomes the base.
+                        sum = sum / r + g;
+                        base = factor;
+                    }
+                    merged = true;
+                }
+            }
+            if (merged)
+                break;
+        }
+        if (!merged)
+            out.emplace_back(factor, g);
+    }
+    std::erase_if(out, [](const auto& p) { return p.second.is_zero(); });
+    return out;
 }
 
 // Notes restating a determined coefficient for coherent SI units, or saying why it cannot be.
@@ -746,6 +823,11 @@ void restate_coefficient(const syntax::parsed_file& file, const syntax::formula&
         d.notes.push_back({other_shape, {}});
         return;
     }
+    // Products are collected from their outermost factor in; list them as written.
+    const auto by_place = [](const unit_factor& a, const unit_factor& b) { return a.at < b.at; };
+    const auto middle = factors.begin() + static_cast<std::ptrdiff_t>(left_count);
+    std::stable_sort(factors.begin(), middle, by_place);
+    std::stable_sort(middle, factors.end(), by_place);
     // Write it as k^ek = Π f^g: symbols on the coefficient's side move across, so with the
     // coefficient on the right the left side's factors keep their sign. Then k_SI = k · Π f^G,
     // G = g/ek, for ek = ±1 (k or 1/k); other powers of k are not restated.
@@ -776,15 +858,9 @@ void restate_coefficient(const syntax::parsed_file& file, const syntax::formula&
             units.emplace_back(unit, g);
         else
             ut->second += g;
-        auto nt = std::find_if(numbers.begin(), numbers.end(),
-                               [&](const auto& p) { return p.first == e.si_factor; });
-        if (nt == numbers.end())
-            numbers.emplace_back(e.si_factor, g);
-        else
-            nt->second += g;
+        numbers.emplace_back(e.si_factor, g);
     }
     std::erase_if(units, [](const auto& p) { return p.first.empty() || p.second.is_zero(); });
-    std::erase_if(numbers, [](const auto& p) { return p.second.is_zero(); });
     if (bound.empty()) {
         d.notes.push_back({fmt::format("the symbols are declared in coherent SI units, so {} is "
                                        "the coefficient for coherent SI units",
@@ -800,7 +876,7 @@ void restate_coefficient(const syntax::parsed_file& file, const syntax::formula&
     if (bound.size() > max_listed)
         list += fmt::format(" and {} more", bound.size() - max_listed);
     d.notes.push_back({fmt::format("{} holds only with {}, as declared", u.name, list), {}});
-    if (numbers.empty()) {
+    if (merge_powers(numbers).empty()) {
         d.notes.push_back({fmt::format("the unit factors cancel, so the coefficient is {} in "
                                        "coherent SI units too",
                                        u.name),
@@ -813,20 +889,24 @@ void restate_coefficient(const syntax::parsed_file& file, const syntax::formula&
     if (end == value_text.c_str())
         return;
     std::vector<std::pair<double, rational>> inverse; // coherent_coefficient wants f^(-e)
-    std::vector<std::pair<std::string, rational>> number_text;
-    for (const auto& [factor, g] : numbers) {
+    for (const auto& [factor, g] : numbers)
         inverse.emplace_back(factor, -g);
+    const double k_si = coherent_coefficient(k, 1.0, inverse);
+    const std::string k_si_text = std::isfinite(k_si) && k_si != 0.0
+                                      ? fmt::format("{:.6g}", k_si)
+                                      : std::string("a number beyond floating-point range");
+    std::vector<std::pair<std::string, rational>> number_text;
+    for (const auto& [factor, g] : merge_powers(numbers)) {
         // 1.840131e-06^(1/3) would read ambiguously.
         std::string t = fmt::format("{:.7g}", factor);
         if (t.find('e') != std::string::npos && g != rational(1) && g != rational(-1))
             t = "(" + t + ")";
         number_text.emplace_back(std::move(t), g);
     }
-    const double k_si = coherent_coefficient(k, 1.0, inverse);
     d.notes.push_back(
         {fmt::format("in coherent SI units the coefficient is {} \u00D7 {} = {} "
-                     "\u00D7 {} = {:.6g}",
-                     u.name, render_product(units), u.name, render_product(number_text), k_si),
+                     "\u00D7 {} = {}",
+                     u.name, render_product(units), u.name, render_product(number_text), k_si_text),
          {}});
 }
 
@@ -843,8 +923,9 @@ class reporter {
   public:
     reporter(const syntax::parsed_file& file, std::span<const syntax::formula> formulas,
              symbol_table& symbols, const std::vector<unknown>& unknowns,
-             std::vector<diagnostic>& out)
-        : file_(file), formulas_(formulas), symbols_(symbols), unknowns_(unknowns), out_(out) {}
+             const std::vector<bool>& overflowed, std::vector<diagnostic>& out)
+        : file_(file), formulas_(formulas), symbols_(symbols), unknowns_(unknowns),
+          overflowed_(overflowed), out_(out) {}
 
     void determined(std::uint32_t u, const dimension& dim) {
         const unknown& x = unknowns_[u];
@@ -859,16 +940,28 @@ class reporter {
                           : fmt::format("'{}' must have dimension {}", x.name, describe(dim));
         diagnostic d = make(severity::note, rules::inferred_dimension, std::move(message), x.where);
         d.terms.push_back({x.where, x.coefficient ? x.name + "?" : x.name, dim});
-        if (x.coefficient)
-            restate_coefficient(file_, formulas_[x.formula], x.node, x, symbols_, d);
+        if (x.coefficient) {
+            try {
+                restate_coefficient(file_, formulas_[x.formula], x.node, x, symbols_, d);
+            } catch (const arithmetic_overflow&) {
+                d.notes.push_back({"the coefficient is not restated for coherent SI units: its "
+                                   "exponents exceed the exact range",
+                                   {}});
+            }
+        }
         out_.push_back(std::move(d));
     }
 
-    // Free in a consistent component: say what the formulas do fix, and what would fix it.
+    // Not fixed by the formulas that settle it: say what they do fix, and what would fix it.
+    // Columns marked in `disputed` belong to unknowns reported as in conflict; they have no
+    // equations in `s` and are not counted.
     void free(std::uint32_t u, const solution& s, const std::vector<std::uint32_t>& members,
-              std::size_t column) {
+              const std::vector<bool>& disputed, std::size_t column) {
         const unknown& x = unknowns_[u];
-        const std::size_t freedom = members.size() - s.rank;
+        const std::size_t n = members.size();
+        const auto open =
+            static_cast<std::size_t>(std::count(disputed.begin(), disputed.end(), false));
+        const std::size_t freedom = open - s.rank;
         // The coefficient matrix is the same in every base dimension, so an unknown is fixed in
         // all of them or in none: there is no "fixed in M and L, free in T" to report. What can
         // be said is which combinations of unknowns the formulas do fix.
@@ -877,7 +970,6 @@ class reporter {
                  fmt::format("the formulas leave the dimension of {} free ({} degree{} of freedom)",
                              who(x), freedom, freedom == 1 ? "" : "s"),
                  x.where);
-        const std::size_t n = members.size();
         std::vector<group_variable> names;
         for (std::uint32_t m : members)
             names.push_back(
@@ -900,12 +992,17 @@ class reporter {
                              describe(dimension::from_exponents(rhs))),
                  {}});
         }
-        if (listed == 0) {
+        const bool lost = std::any_of(x.formulas.begin(), x.formulas.end(),
+                                      [&](std::uint32_t f) { return overflowed_[f]; });
+        if (lost)
+            d.notes.push_back(
+                {"a formula it stands in exceeds the exact range and is left out", {}});
+        if (listed == 0 && !lost) {
             d.notes.push_back({"nothing in the formulas constrains it: it cancels out, or stands "
                                "where its dimension cannot be followed (under a variable "
                                "exponent, in an unknown function)",
                                {}});
-        } else if (n > 1) {
+        } else if (open > 1) {
             // Fixing the free columns of the reduced matrix fixes every pivot column.
             std::vector<bool> pivot(n, false);
             for (std::size_t r = 0; r < s.reduced.rows(); ++r)
@@ -916,7 +1013,7 @@ class reporter {
                     }
             std::vector<std::string> free_names;
             for (std::size_t c = 0; c < n; ++c)
-                if (!pivot[c])
+                if (!pivot[c] && !disputed[c])
                     free_names.push_back(fmt::format("'{}'", names[c].name));
             d.notes.push_back(
                 {fmt::format("declaring the dimension of {} would fix the rest",
@@ -926,39 +1023,38 @@ class reporter {
         out_.push_back(std::move(d));
     }
 
-    void conflict(std::uint32_t u, const std::vector<std::uint32_t>& culprits,
-                  const std::vector<solution>& without, std::size_t column) {
+    void conflict(std::uint32_t u, const conflict_set& set, std::size_t column) {
         const unknown& x = unknowns_[u];
         diagnostic d =
             make(severity::error, rules::inference_conflict,
                  fmt::format("the formulas disagree about the dimension of {}", who(x)), x.where);
         constexpr std::size_t max_listed = 8;
-        if (!culprits.empty()) {
-            for (std::size_t i = 0; i < culprits.size() && i < max_listed; ++i) {
-                const syntax::formula& f = formulas_[culprits[i]];
-                const auto& value = without[i].values[column];
-                std::string message =
-                    value ? fmt::format("{}: the other formulas make {} {}", formula_name(file_, f),
-                                        who(x), describe(*value))
-                          : fmt::format("{} is one of the formulas that disagree",
-                                        formula_name(file_, f));
-                d.notes.push_back({std::move(message), {file_.source, f.range}});
-            }
-            if (culprits.size() > max_listed)
-                d.notes.push_back(
-                    {fmt::format("and {} more formulas", culprits.size() - max_listed), {}});
-        } else {
-            // No single formula is to blame: name every formula the unknown takes part in.
-            for (std::size_t i = 0; i < x.formulas.size() && i < max_listed; ++i) {
-                const syntax::formula& f = formulas_[x.formulas[i]];
-                d.notes.push_back({fmt::format("{} involves {}", formula_name(file_, f), who(x)),
-                                   {file_.source, f.range}});
-            }
-            if (x.formulas.size() > max_listed)
-                d.notes.push_back(
-                    {fmt::format("and {} more formulas", x.formulas.size() - max_listed), {}});
-            d.notes.push_back({"no one formula's removal settles it; several disagree", {}});
+        for (std::size_t i = 0; i < set.formulas.size() && i < max_listed; ++i) {
+            const syntax::formula& f = formulas_[set.formulas[i]];
+            const std::string name = formula_name(file_, f);
+            std::string message;
+            if (set.on_its_own[i])
+                message = fmt::format("{} cannot hold on its own, whatever dimensions its "
+                                      "unknowns have",
+                                      name);
+            else if (set.each_settles && set.without[i].values[column])
+                message = fmt::format("{}: the other formulas make {} {}", name, who(x),
+                                      describe(*set.without[i].values[column]));
+            else if (!set.searched)
+                message = fmt::format("{} involves {}", name, who(x));
+            else
+                message = fmt::format("{} is one of the formulas that disagree", name);
+            d.notes.push_back({std::move(message), {file_.source, f.range}});
         }
+        if (set.formulas.size() > max_listed)
+            d.notes.push_back(
+                {fmt::format("and {} more formulas", set.formulas.size() - max_listed), {}});
+        if (!set.each_settles)
+            d.notes.push_back({set.searched ? "no one formula's removal settles it: these "
+                                              "cannot all hold together"
+                                            : "too many formulas are tangled here to find the "
+                                              "few that disagree",
+                               {}});
         out_.push_back(std::move(d));
     }
 
@@ -984,96 +1080,142 @@ class reporter {
     std::span<const syntax::formula> formulas_;
     symbol_table& symbols_;
     const std::vector<unknown>& unknowns_;
+    const std::vector<bool>& overflowed_; // per formula: left out of the equations
     std::vector<diagnostic>& out_;
 };
 
-// Above this many formulas in one tangle, trying each one's removal costs too much; every
-// formula involved is named instead.
-constexpr std::size_t max_culprit_search = 64;
+// Finding the formulas to blame solves the tangle once per formula, each solve costing about
+// rows × columns² rational operations. Up to this many formulas the search always runs; beyond,
+// only while the total stays within the budget (a fraction of a second); otherwise every
+// formula involved is named.
+constexpr std::size_t always_searched = 64;
+constexpr double search_budget = 2e7;
 
 struct component {
     std::vector<std::uint32_t> members; // unknowns, ascending
     std::vector<const equation*> equations;
+    std::vector<std::uint32_t> formulas; // those with equations, ascending
 };
+
+// a \ b, both sorted.
+std::vector<std::uint32_t> without_these(const std::vector<std::uint32_t>& a,
+                                         const std::vector<std::uint32_t>& b) {
+    std::vector<std::uint32_t> out;
+    std::set_difference(a.begin(), a.end(), b.begin(), b.end(), std::back_inserter(out));
+    return out;
+}
+
+// Finds a small set of formulas that disagree among the `active` ones (inconsistent): those
+// whose removal alone restores agreement, or else a minimal set that cannot all hold (each
+// member dropped in turn, kept out when the rest still disagree).
+conflict_set find_conflict(const component& c, const std::vector<std::uint32_t>& column,
+                           const std::vector<std::uint32_t>& active) {
+    const std::size_t n = c.members.size();
+    auto solve_only = [&](const std::vector<std::uint32_t>& these) {
+        return solve(c.equations, column, n, without_these(c.formulas, these));
+    };
+    conflict_set set;
+    const double columns = static_cast<double>(n + base_dimension_count);
+    const double cost = static_cast<double>(active.size()) *
+                        static_cast<double>(c.equations.size()) * columns * columns;
+    if (active.size() > always_searched && cost > search_budget) {
+        set.formulas = active;
+        set.on_its_own.assign(active.size(), false);
+        return set;
+    }
+    set.searched = true;
+    for (std::uint32_t f : active) {
+        try {
+            solution s = solve_only(without_these(active, {f}));
+            if (s.consistent) {
+                set.formulas.push_back(f);
+                set.without.push_back(std::move(s));
+            }
+        } catch (const arithmetic_overflow&) {
+            // Too large to tell: this formula is simply not named as one to blame.
+        }
+    }
+    set.each_settles = !set.formulas.empty();
+    if (!set.each_settles) {
+        std::vector<std::uint32_t> kept = active;
+        for (std::uint32_t f : active) {
+            std::vector<std::uint32_t> fewer = without_these(kept, {f});
+            try {
+                if (!solve_only(fewer).consistent)
+                    kept = std::move(fewer);
+            } catch (const arithmetic_overflow&) {
+                // Keep it: the set stays one that disagrees, if not the smallest.
+            }
+        }
+        set.formulas = std::move(kept);
+    }
+    for (std::uint32_t f : set.formulas) {
+        bool alone = false;
+        try {
+            alone = !solve_only({f}).consistent;
+        } catch (const arithmetic_overflow&) {
+            alone = false;
+        }
+        set.on_its_own.push_back(alone);
+    }
+    return set;
+}
 
 void settle(const component& c, const std::vector<unknown>& unknowns,
             std::vector<std::uint32_t>& column, reporter& report) {
     const std::size_t n = c.members.size();
     for (std::size_t i = 0; i < n; ++i)
         column[c.members[i]] = static_cast<std::uint32_t>(i);
-    solution all;
     try {
-        all = solve(c.equations, column, n, {});
+        // Each round finds formulas that disagree; the unknowns they name are in dispute, and
+        // every formula naming one of those leaves the active set: a value that leans on a
+        // disputed unknown (Z = X*t while X is in dispute) would be as doubtful as it. What
+        // remains is solved again, until it agrees.
+        std::vector<std::uint32_t> active = c.formulas;
+        std::vector<conflict_set> sets;
+        std::vector<std::size_t> set_of(n, 0); // read only for disputed unknowns
+        std::vector<bool> disputed(n, false);
+        solution current = solve(c.equations, column, n, {});
+        while (!current.consistent) {
+            conflict_set set = find_conflict(c, column, active);
+            std::vector<std::uint32_t> gone;
+            for (std::size_t i = 0; i < n; ++i) {
+                const auto& fs = unknowns[c.members[i]].formulas;
+                if (disputed[i] ||
+                    std::none_of(set.formulas.begin(), set.formulas.end(), [&](std::uint32_t f) {
+                        return std::binary_search(fs.begin(), fs.end(), f);
+                    }))
+                    continue;
+                disputed[i] = true;
+                set_of[i] = sets.size();
+                gone.insert(gone.end(), fs.begin(), fs.end());
+            }
+            sets.push_back(std::move(set));
+            std::sort(gone.begin(), gone.end());
+            active = without_these(active, gone);
+            current = solve(c.equations, column, n, without_these(c.formulas, active));
+        }
+        std::vector<std::string> disputed_names;
+        for (std::size_t i = 0; i < n && disputed_names.size() < 3; ++i)
+            if (disputed[i])
+                disputed_names.push_back(who(unknowns[c.members[i]]));
+        for (std::size_t i = 0; i < n; ++i) {
+            const auto& fs = unknowns[c.members[i]].formulas;
+            const bool lost_some = std::any_of(fs.begin(), fs.end(), [&](std::uint32_t f) {
+                return std::binary_search(c.formulas.begin(), c.formulas.end(), f) &&
+                       !std::binary_search(active.begin(), active.end(), f);
+            });
+            if (disputed[i])
+                report.conflict(c.members[i], sets[set_of[i]], i);
+            else if (current.values[i])
+                report.determined(c.members[i], *current.values[i]);
+            else if (lost_some)
+                report.undecided(c.members[i], disputed_names);
+            else
+                report.free(c.members[i], current, c.members, disputed, i);
+        }
     } catch (const arithmetic_overflow&) {
         report.overflow(c.members.front());
-        return;
-    }
-    if (all.consistent) {
-        for (std::size_t i = 0; i < n; ++i) {
-            if (all.values[i])
-                report.determined(c.members[i], *all.values[i]);
-            else
-                report.free(c.members[i], all, c.members, i);
-        }
-        return;
-    }
-    std::vector<std::uint32_t> involved;
-    for (const equation* e : c.equations)
-        involved.push_back(e->formula);
-    std::sort(involved.begin(), involved.end());
-    involved.erase(std::unique(involved.begin(), involved.end()), involved.end());
-    std::vector<std::uint32_t> culprits;
-    std::vector<solution> without;
-    if (involved.size() <= max_culprit_search) {
-        for (std::uint32_t f : involved) {
-            try {
-                solution s = solve(c.equations, column, n, {f});
-                if (s.consistent) {
-                    culprits.push_back(f);
-                    without.push_back(std::move(s));
-                }
-            } catch (const arithmetic_overflow&) {
-                // Too large to tell: this formula is simply not named as the one to blame.
-            }
-        }
-    }
-    if (culprits.empty()) {
-        for (std::size_t i = 0; i < n; ++i)
-            report.conflict(c.members[i], culprits, without, i);
-        return;
-    }
-    // The unknowns of the formulas to blame are in dispute. The others are settled only by
-    // formulas that involve none of those: a value that leans on a disputed unknown (Z = X*t
-    // while X is in dispute) would be as doubtful as the unknown itself.
-    std::vector<bool> disputed(n, false);
-    std::vector<std::string> disputed_names;
-    std::vector<std::uint32_t> left_out;
-    for (std::size_t i = 0; i < n; ++i) {
-        const auto& fs = unknowns[c.members[i]].formulas;
-        disputed[i] = std::any_of(culprits.begin(), culprits.end(), [&](std::uint32_t f) {
-            return std::binary_search(fs.begin(), fs.end(), f);
-        });
-        if (!disputed[i])
-            continue;
-        if (disputed_names.size() < 3)
-            disputed_names.push_back(who(unknowns[c.members[i]]));
-        left_out.insert(left_out.end(), fs.begin(), fs.end());
-    }
-    std::sort(left_out.begin(), left_out.end());
-    left_out.erase(std::unique(left_out.begin(), left_out.end()), left_out.end());
-    std::optional<solution> rest;
-    try {
-        rest = solve(c.equations, column, n, left_out);
-    } catch (const arithmetic_overflow&) {
-        rest.reset();
-    }
-    for (std::size_t i = 0; i < n; ++i) {
-        if (disputed[i])
-            report.conflict(c.members[i], culprits, without, i);
-        else if (rest && rest->values[i])
-            report.determined(c.members[i], *rest->values[i]);
-        else
-            report.undecided(c.members[i], disputed_names);
     }
 }
 
@@ -1100,6 +1242,7 @@ void infer_dimensions(const syntax::parsed_file& file, std::span<const syntax::f
     if (file.source == nullptr)
         return;
     equation_builder builder(file, symbols);
+    std::vector<bool> overflowed(formulas.size(), false);
     for (std::uint32_t i = 0; i < formulas.size(); ++i) {
         const std::size_t before = builder.equations.size();
         try {
@@ -1107,6 +1250,7 @@ void infer_dimensions(const syntax::parsed_file& file, std::span<const syntax::f
         } catch (const arithmetic_overflow&) {
             builder.equations.erase(builder.equations.begin() + static_cast<std::ptrdiff_t>(before),
                                     builder.equations.end());
+            overflowed[i] = true;
             // Worded as the checker words it, so that the two findings merge into one.
             out.push_back(make(severity::error, rules::overflow,
                                "the exponents in this formula exceed the exact range (64-bit "
@@ -1145,7 +1289,7 @@ void infer_dimensions(const syntax::parsed_file& file, std::span<const syntax::f
     std::iota(parent.begin(), parent.end(), 0U);
     for (const equation& e : builder.equations)
         for (std::size_t i = 1; i < e.unknowns.size(); ++i)
-            parent[find_root(parent, e.unknowns[i].first)] = find_root(parent, e.unknowns[0].first);
+            parent[find_root(parent, e.unknowns[i].first)] = find_root(parent, e.owner());
     std::vector<std::uint32_t> component_of(unknowns.size(), syntax::no_index);
     std::vector<component> components;
     for (std::uint32_t u = 0; u < unknowns.size(); ++u) {
@@ -1156,10 +1300,14 @@ void infer_dimensions(const syntax::parsed_file& file, std::span<const syntax::f
         }
         components[component_of[root]].members.push_back(u);
     }
-    for (const equation& e : builder.equations)
-        components[component_of[find_root(parent, e.unknowns[0].first)]].equations.push_back(&e);
+    for (const equation& e : builder.equations) {
+        component& c = components[component_of[find_root(parent, e.owner())]];
+        c.equations.push_back(&e);
+        if (c.formulas.empty() || c.formulas.back() != e.formula)
+            c.formulas.push_back(e.formula); // equations come in formula order
+    }
 
-    reporter report(file, formulas, symbols, unknowns, out);
+    reporter report(file, formulas, symbols, unknowns, overflowed, out);
     std::vector<std::uint32_t> column(unknowns.size(), 0);
     for (const component& c : components)
         settle(c, unknowns, column, report);

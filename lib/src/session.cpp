@@ -232,6 +232,9 @@ class session {
 
         f->loading = true;
         checking_reader reader(*this, f, table, visited);
+        // A "X : ?" may come after the formulas that fix it; a file with any '?' keeps its
+        // formulas for inference (a cheap scan, and rare outside such files).
+        reader.infers_symbols = f->source->text().find('?') != std::string_view::npos;
         syntax::parsed_file tree = parse_file(*f->source, &reader);
         f->loading = false;
         // Formulas that named a symbol declared further down are checked now, against all.
