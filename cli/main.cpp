@@ -42,6 +42,8 @@ options for check, groups and dim:
   --dict FILE          read FILE's declarations before each file (repeatable)
   --format text|json   output format for check and groups (default: text)
   --study NAME         groups: only the study called NAME
+  --restate-in UNITS   check: restate coefficients marked ? also for the consistent set
+                       of units with these base units, e.g. 'ft, lb, s'
   --color auto|always|never
                        colour the text output (default: auto, which means on a
                        terminal only, and never when NO_COLOR is set or TERM=dumb)
@@ -107,6 +109,20 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
             if (!v)
                 return "--dict needs a file";
             out.check.dictionaries.emplace_back(*v);
+        } else if (a == "--restate-in" || a.rfind("--restate-in=", 0) == 0) {
+            const auto v = value("--restate-in");
+            if (!v || v->empty())
+                return "--restate-in needs base units, such as 'ft, lb, s'";
+            std::string item;
+            for (const char c : *v + ",") {
+                if (c == ',' || c == ' ') {
+                    if (!item.empty())
+                        out.check.restate_in.push_back(item);
+                    item.clear();
+                } else {
+                    item += c;
+                }
+            }
         } else if (a == "--study" || a.rfind("--study=", 0) == 0) {
             const auto v = value("--study");
             if (!v)
@@ -142,9 +158,32 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
     return std::nullopt;
 }
 
+// Each unit of --restate-in must be a unit of exactly one base dimension.
+std::optional<std::string> check_restate_units(const std::vector<std::string>& units) {
+    for (const auto& u : units) {
+        const auto resolved = plumb::unit_table::standard().resolve(u);
+        int bases = 0;
+        bool unit_power = true;
+        const plumb::dimension dim = resolved ? resolved->dim() : plumb::dimension{};
+        if (resolved)
+            for (const auto& e : dim.exponents())
+                if (!e.is_zero()) {
+                    ++bases;
+                    unit_power = unit_power && e == plumb::rational(1);
+                }
+        if (!resolved || bases != 1 || !unit_power)
+            return fmt::format("--restate-in: '{}' is not a unit of one base dimension (such as "
+                               "ft, lb, s or °R)",
+                               u);
+    }
+    return std::nullopt;
+}
+
 int run_check(const std::vector<std::string>& args) {
     options opts;
     if (auto error = parse_options(args, opts))
+        return usage_error(*error);
+    if (auto error = check_restate_units(opts.check.restate_in))
         return usage_error(*error);
     if (opts.positional.empty())
         return usage_error("check needs at least one file or folder");

@@ -183,3 +183,23 @@ TEST_CASE("units of one's own: defined, used, imported and refused") {
         CHECK(mentions(*f[0], "unit furlong = "));
     }
 }
+
+TEST_CASE("unit-bound coefficients restated for another consistent set of units") {
+    // Manning's equation: coefficient 1 in SI, 1.486 in US customary units (V. T. Chow,
+    // Open-Channel Hydraulics, 1959, ch. 5, from memory); 1/0.3048^(1/3) = 1.48592 with the
+    // exact foot of NIST SP 811 (2008), B.8.
+    plumb::check_options options;
+    options.restate_in = {"ft", "s"};
+    const auto r = plumb::check_text(
+        "manning.plumb", "V : m/s\nR_h : m\nn, S : 1\nV = 1?/n * R_h^(2/3) * S^(1/2)\n", options);
+    const auto notes = findings(r, plumb::rules::inferred_dimension);
+    REQUIRE(notes.size() == 1);
+    CHECK(mentions(*notes[0], "in coherent units of ft, s the coefficient is"));
+    CHECK(mentions(*notes[0], "= 1.48592"));
+    // Without the option there is no such note.
+    const auto plain = plumb::check_text(
+        "manning.plumb", "V : m/s\nR_h : m\nn, S : 1\nV = 1?/n * R_h^(2/3) * S^(1/2)\n");
+    REQUIRE(findings(plain, plumb::rules::inferred_dimension).size() == 1);
+    CHECK_FALSE(
+        mentions(*findings(plain, plumb::rules::inferred_dimension)[0], "coherent units of"));
+}

@@ -800,9 +800,13 @@ merge_powers(const std::vector<std::pair<double, rational>>& factors) {
 }
 
 // Notes restating a determined coefficient for coherent SI units, or saying why it cannot be.
+void restate_for(const std::vector<unit_factor>& factors, std::size_t left_count, bool k_on_left,
+                 const rational& ek, double k_si, const unknown& u, const coherent_units& target,
+                 diagnostic& d);
+
 void restate_coefficient(const syntax::parsed_file& file, const syntax::formula& f,
                          std::uint32_t coefficient, const unknown& u, symbol_table& symbols,
-                         diagnostic& d) {
+                         diagnostic& d, const coherent_units* restate_in) {
     const char* other_shape = "the formula is not of the form y = k\u00B7x1^a\u00B7x2^b\u2026, so "
                               "the coefficient is not restated for coherent SI units; it holds "
                               "only with the symbols in the units they are declared in";
@@ -861,11 +865,17 @@ void restate_coefficient(const syntax::parsed_file& file, const syntax::formula&
         numbers.emplace_back(e.si_factor, g);
     }
     std::erase_if(units, [](const auto& p) { return p.first.empty() || p.second.is_zero(); });
+    const std::string value_text(u.name);
+    char* end = nullptr;
+    const double k = std::strtod(value_text.c_str(), &end);
+    const bool k_read = end != value_text.c_str();
     if (bound.empty()) {
         d.notes.push_back({fmt::format("the symbols are declared in coherent SI units, so {} is "
                                        "the coefficient for coherent SI units",
                                        u.name),
                            {}});
+        if (restate_in != nullptr && k_read)
+            restate_for(factors, left_count, k_on_left, ek, k, u, *restate_in, d);
         return;
     }
     constexpr std::size_t max_listed = 6;
@@ -881,12 +891,11 @@ void restate_coefficient(const syntax::parsed_file& file, const syntax::formula&
                                        "coherent SI units too",
                                        u.name),
                            {}});
+        if (restate_in != nullptr && k_read)
+            restate_for(factors, left_count, k_on_left, ek, k, u, *restate_in, d);
         return;
     }
-    const std::string value_text(u.name);
-    char* end = nullptr;
-    const double k = std::strtod(value_text.c_str(), &end);
-    if (end == value_text.c_str())
+    if (!k_read)
         return;
     std::vector<std::pair<double, rational>> inverse; // coherent_coefficient wants f^(-e)
     for (const auto& [factor, g] : numbers)
@@ -908,6 +917,37 @@ void restate_coefficient(const syntax::parsed_file& file, const syntax::formula&
                      "\u00D7 {} = {}",
                      u.name, render_product(units), u.name, render_product(number_text), k_si_text),
          {}});
+    if (restate_in != nullptr && std::isfinite(k_si))
+        restate_for(factors, left_count, k_on_left, ek, k_si, u, *restate_in, d);
+}
+
+// k_target = k_SI / Π F_i^g_i, F_i the SI value of symbol i's coherent unit in the target set.
+void restate_for(const std::vector<unit_factor>& factors, std::size_t left_count, bool k_on_left,
+                 const rational& ek, double k_si, const unknown& u, const coherent_units& target,
+                 diagnostic& d) {
+    double divisor = 1.0;
+    for (std::size_t i = 0; i < factors.size(); ++i) {
+        const bool on_left = i < left_count;
+        rational g = (on_left == k_on_left) ? -factors[i].exponent : factors[i].exponent;
+        g = ek == rational(1) ? g : -g;
+        const symbol_entry& e = *factors[i].entry;
+        if (!e.dim)
+            return;
+        double coherent = 1.0;
+        for (std::size_t b = 0; b < base_dimension_count; ++b)
+            coherent *= std::pow(target.base_factor[b],
+                                 e.dim->exponent(static_cast<base_dimension>(b)).to_double());
+        divisor *= std::pow(coherent, g.to_double());
+    }
+    const double k_target = k_si / divisor;
+    if (!std::isfinite(k_target))
+        return;
+    d.notes.push_back({fmt::format("in coherent units of {} the coefficient is {:.6g} / {:.6g} = "
+                                   "{:.6g} (each symbol in the unit of its dimension built from "
+                                   "those base units)",
+                                   target.label, k_si, divisor, k_target),
+                       {}});
+    (void)u;
 }
 
 diagnostic make(severity level, std::string_view rule, std::string message, location where) {
@@ -923,9 +963,10 @@ class reporter {
   public:
     reporter(const syntax::parsed_file& file, std::span<const syntax::formula> formulas,
              symbol_table& symbols, const std::vector<unknown>& unknowns,
-             const std::vector<bool>& overflowed, std::vector<diagnostic>& out)
+             const std::vector<bool>& overflowed, std::vector<diagnostic>& out,
+             const coherent_units* restate_in = nullptr)
         : file_(file), formulas_(formulas), symbols_(symbols), unknowns_(unknowns),
-          overflowed_(overflowed), out_(out) {}
+          overflowed_(overflowed), out_(out), restate_in_(restate_in) {}
 
     void determined(std::uint32_t u, const dimension& dim) {
         const unknown& x = unknowns_[u];
@@ -942,7 +983,8 @@ class reporter {
         d.terms.push_back({x.where, x.coefficient ? x.name + "?" : x.name, dim});
         if (x.coefficient) {
             try {
-                restate_coefficient(file_, formulas_[x.formula], x.node, x, symbols_, d);
+                restate_coefficient(file_, formulas_[x.formula], x.node, x, symbols_, d,
+                                    restate_in_);
             } catch (const arithmetic_overflow&) {
                 d.notes.push_back({"the coefficient is not restated for coherent SI units: its "
                                    "exponents exceed the exact range",
@@ -1082,6 +1124,7 @@ class reporter {
     const std::vector<unknown>& unknowns_;
     const std::vector<bool>& overflowed_; // per formula: left out of the equations
     std::vector<diagnostic>& out_;
+    const coherent_units* restate_in_;
 };
 
 // Finding the formulas to blame solves the tangle once per formula, each solve costing about
@@ -1238,7 +1281,8 @@ double coherent_coefficient(double k, double f_y,
 }
 
 void infer_dimensions(const syntax::parsed_file& file, std::span<const syntax::formula> formulas,
-                      symbol_table& symbols, std::vector<diagnostic>& out) {
+                      symbol_table& symbols, std::vector<diagnostic>& out,
+                      const coherent_units* restate_in) {
     if (file.source == nullptr)
         return;
     equation_builder builder(file, symbols);
@@ -1307,7 +1351,7 @@ void infer_dimensions(const syntax::parsed_file& file, std::span<const syntax::f
             c.formulas.push_back(e.formula); // equations come in formula order
     }
 
-    reporter report(file, formulas, symbols, unknowns, overflowed, out);
+    reporter report(file, formulas, symbols, unknowns, overflowed, out, restate_in);
     std::vector<std::uint32_t> column(unknowns.size(), 0);
     for (const component& c : components)
         settle(c, unknowns, column, report);

@@ -9,11 +9,20 @@
 #include "symbol_table.hpp"
 #include "syntax_tree.hpp"
 
+#include <array>
 #include <span>
+#include <string>
 #include <utility>
 #include <vector>
 
 namespace plumb {
+
+// A consistent set of units other than SI, by its base units ("ft, lb, s"): a coefficient is
+// restated for it too. Base dimensions not named keep their SI unit.
+struct coherent_units {
+    std::string label;                                                         // "ft, lb, s"
+    std::array<double, base_dimension_count> base_factor{1, 1, 1, 1, 1, 1, 1}; // SI per unit
+};
 
 // Infers the dimension of every symbol declared `X : ?` and every coefficient written `k?` from
 // the formulas that use them, and reports it. Diagnostics go to `out`.
@@ -24,7 +33,8 @@ namespace plumb {
 // unknown, a warning for each one left free or unused) and "inference-conflict" (an error
 // when the formulas disagree). `symbols` is only read; it is non-const because look-up is.
 void infer_dimensions(const syntax::parsed_file& file, std::span<const syntax::formula> formulas,
-                      symbol_table& symbols, std::vector<diagnostic>& out);
+                      symbol_table& symbols, std::vector<diagnostic>& out,
+                      const coherent_units* restate_in = nullptr);
 
 // k_SI = k · f_y · Π f_i^(-e_i): the coefficient restated for coherent SI units.
 //

@@ -180,6 +180,7 @@ class checking_reader : public dictionary_reader {
 class session {
   public:
     session(check_report& report, const check_options& options) : report_(report) {
+        read_restate_units(options.restate_in);
         for (const auto& path : options.dictionaries)
             if (loaded_file* f = load(path, {}))
                 dictionaries_.push_back(as_dictionary(f));
@@ -242,7 +243,8 @@ class session {
             if (i >= reader.checked_already.size() || !reader.checked_already[i])
                 check_formula(tree, tree.formulas[i], table, f->diagnostics, false);
         if (reader.infers_symbols || reader.kept_for_inference > 0)
-            infer_dimensions(tree, tree.formulas, table, f->diagnostics);
+            infer_dimensions(tree, tree.formulas, table, f->diagnostics,
+                             restate_in_ ? &*restate_in_ : nullptr);
         work_out_studies(tree, table, f->diagnostics, report_.studies);
         const std::size_t formulas = reader.formulas + tree.studies.size();
         if (f->parsed)
@@ -312,6 +314,37 @@ class session {
 
   private:
     check_report& report_;
+    std::optional<coherent_units> restate_in_;
+
+    // "ft", "lb", "s": each must be a unit of exactly one base dimension.
+    void read_restate_units(const std::vector<std::string>& symbols) {
+        if (symbols.empty())
+            return;
+        coherent_units target;
+        for (const auto& symbol : symbols) {
+            const auto unit = unit_table::standard().resolve(symbol);
+            std::optional<std::size_t> base;
+            if (unit) {
+                const dimension d = unit->dim();
+                for (std::size_t b = 0; b < base_dimension_count; ++b) {
+                    const rational e = d.exponent(static_cast<base_dimension>(b));
+                    if (e.is_zero())
+                        continue;
+                    if (base || !(e == rational(1))) {
+                        base.reset();
+                        break;
+                    }
+                    base = b;
+                }
+            }
+            if (!unit || !base)
+                return; // not a base unit: no restatement (the command line says why)
+            target.base_factor[*base] = unit->factor();
+            target.label += (target.label.empty() ? "" : ", ") + symbol;
+        }
+        restate_in_ = target;
+    }
+
     std::vector<loaded_file*> dictionaries_;
     std::vector<std::unique_ptr<loaded_file>> files_;
     std::map<std::string, loaded_file*> by_path_;

@@ -16,6 +16,9 @@ namespace plumb {
 
 struct check_options {
     std::vector<std::filesystem::path> dictionaries; // read before every checked file
+    // Base units of a consistent set other than SI ("ft", "lb", "s"): coefficients marked `?`
+    // are restated for it as well as for coherent SI units.
+    std::vector<std::string> restate_in;
 };
 
 // One `study` line worked out: its groups and, when prototype and model lines give values,
