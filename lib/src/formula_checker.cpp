@@ -380,8 +380,8 @@ class checker {
                 d.notes.push_back(
                     {fmt::format("'{}' is a function; call it as {}(x)", name, name), {}});
             else
-                d.notes.push_back({fmt::format("declare it with its dimension or its unit, in the "
-                                               "form '{} : [M L^-3]' or '{} : kg/m^3'",
+                d.notes.push_back({fmt::format("declare it with its unit or its dimension, as in "
+                                               "'{} : <unit>' or '{} : [<dimension>]'",
                                                name, name),
                                    {}});
             return unknown_type();

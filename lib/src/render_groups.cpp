@@ -76,10 +76,16 @@ void render_plan(std::string& out, const study_report& s, const similitude_plan&
     out += fmt::format("  model plan (scale {}), values in SI units:\n",
                        s.length_scale ? fmt::format("1:{:.4g}", 1.0 / *s.length_scale)
                                       : std::string("not given: 1:1 assumed"));
+    std::size_t label_width = 0;
     for (const auto& g : plan.groups) {
         const pi_group& group = s.analysis.groups[g.group];
-        out += fmt::format("    π{} {:<28} prototype {:>11}  model {:>11}  {}\n", g.group + 1,
-                           group.name.empty() ? group.formula : group.name,
+        label_width =
+            std::max(label_width, display_width(group.name.empty() ? group.formula : group.name));
+    }
+    for (const auto& g : plan.groups) {
+        const pi_group& group = s.analysis.groups[g.group];
+        out += fmt::format("    π{} {}  prototype {:>11}  model {:>11}  {}\n", g.group + 1,
+                           pad(group.name.empty() ? group.formula : group.name, label_width),
                            g.prototype ? number(*g.prototype) : "-",
                            g.model ? number(*g.model) : "-", g.matched ? "matched" : "NOT matched");
     }
