@@ -217,32 +217,7 @@ class checker {
         }
     }
 
-    std::string display_text(span s) const {
-        const std::string_view raw = file_.source->text(s);
-        std::string out;
-        bool pending_space = false;
-        for (std::size_t i = 0; i < raw.size(); ++i) {
-            char c = raw[i];
-            if (c == '\\' || c == '#') {
-                // A continuation: skip its comment and line break.
-                const std::size_t nl = raw.find('\n', i);
-                if (nl == std::string_view::npos)
-                    break;
-                i = nl;
-                pending_space = true;
-                continue;
-            }
-            if (c == ' ' || c == '\t' || c == '\r' || c == '\n') {
-                pending_space = true;
-                continue;
-            }
-            if (pending_space && !out.empty())
-                out += ' ';
-            pending_space = false;
-            out += c;
-        }
-        return out;
-    }
+    std::string display_text(span s) const { return single_line(file_.source->text(s)); }
 
   private:
     const syntax::parsed_file& file_;

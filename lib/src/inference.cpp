@@ -563,30 +563,9 @@ std::string who(const unknown& u) {
     return u.coefficient ? fmt::format("the coefficient {}", u.name) : fmt::format("'{}'", u.name);
 }
 
-// A formula as written, on one line: continuations and their comments folded, blanks squeezed.
+// A formula as written, on one line.
 std::string one_line(std::string_view raw) {
-    std::string out;
-    bool pending_space = false;
-    for (std::size_t i = 0; i < raw.size(); ++i) {
-        const char c = raw[i];
-        if (c == '\\' || c == '#') {
-            const std::size_t nl = raw.find('\n', i);
-            if (nl == std::string_view::npos)
-                break;
-            i = nl;
-            pending_space = true;
-            continue;
-        }
-        if (c == ' ' || c == '\t' || c == '\r' || c == '\n') {
-            pending_space = true;
-            continue;
-        }
-        if (pending_space && !out.empty())
-            out += ' ';
-        pending_space = false;
-        out += c;
-    }
-    return out;
+    return single_line(raw);
 }
 
 // A formula for a note: its label when it has one, else its text, shortened.

@@ -47,4 +47,30 @@ std::string_view source_file::line_text(std::uint32_t line) const {
     return std::string_view(text_).substr(begin, end - begin);
 }
 
+std::string single_line(std::string_view raw) {
+    std::string out;
+    bool pending_space = false;
+    for (std::size_t i = 0; i < raw.size(); ++i) {
+        const char c = raw[i];
+        if (c == '\\' || c == '#') {
+            // A continuation: skip its comment and line break.
+            const std::size_t nl = raw.find('\n', i);
+            if (nl == std::string_view::npos)
+                break;
+            i = nl;
+            pending_space = true;
+            continue;
+        }
+        if (c == ' ' || c == '\t' || c == '\r' || c == '\n') {
+            pending_space = true;
+            continue;
+        }
+        if (pending_space && !out.empty())
+            out += ' ';
+        pending_space = false;
+        out += c;
+    }
+    return out;
+}
+
 } // namespace plumb

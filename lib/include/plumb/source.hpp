@@ -46,4 +46,8 @@ class source_file {
     std::vector<std::uint32_t> line_starts_;
 };
 
+// Source text shown on one line: continuation breaks and their comments folded, runs of
+// blanks squeezed to one space. Messages quote terms this way.
+std::string single_line(std::string_view raw);
+
 } // namespace plumb
