@@ -69,12 +69,7 @@ void fails(const named_text& c, std::uint32_t line) {
     CHECK(d.where.file->position(d.where.range.begin).line == line);
 }
 
-// Exponents typed in the order M L T Θ N I J.
-dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th = 0,
-                std::int64_t n = 0, std::int64_t i = 0, std::int64_t j = 0) {
-    return dimension::from_exponents({rational(m), rational(l), rational(t), rational(th),
-                                      rational(n), rational(i), rational(j)});
-}
+using plumb::test::typed;
 
 using plumb::test::temp_dir;
 
@@ -266,30 +261,7 @@ TEST_CASE("SI derived units with special names reduce to base dimensions") {
         const char* unit;
         dimension expected;
     };
-    const derived table4[] = {
-        {"rad", typed(0, 0, 0)},               // m/m
-        {"sr", typed(0, 0, 0)},                // m²/m²
-        {"Hz", typed(0, 0, -1)},               // s^-1
-        {"N", typed(1, 1, -2)},                // kg m s^-2
-        {"Pa", typed(1, -1, -2)},              // kg m^-1 s^-2
-        {"J", typed(1, 2, -2)},                // kg m² s^-2
-        {"W", typed(1, 2, -3)},                // kg m² s^-3
-        {"C", typed(0, 0, 1, 0, 0, 1)},        // A s
-        {"V", typed(1, 2, -3, 0, 0, -1)},      // kg m² s^-3 A^-1
-        {"F", typed(-1, -2, 4, 0, 0, 2)},      // kg^-1 m^-2 s^4 A²
-        {"\u03A9", typed(1, 2, -3, 0, 0, -2)}, // kg m² s^-3 A^-2
-        {"S", typed(-1, -2, 3, 0, 0, 2)},      // kg^-1 m^-2 s³ A²
-        {"Wb", typed(1, 2, -2, 0, 0, -1)},     // kg m² s^-2 A^-1
-        {"T", typed(1, 0, -2, 0, 0, -1)},      // kg s^-2 A^-1
-        {"H", typed(1, 2, -2, 0, 0, -2)},      // kg m² s^-2 A^-2
-        {"\u00B0C", typed(0, 0, 0, 1)},        // K
-        {"lm", typed(0, 0, 0, 0, 0, 0, 1)},    // cd sr = cd
-        {"lx", typed(0, -2, 0, 0, 0, 0, 1)},   // cd sr m^-2 = cd m^-2
-        {"Bq", typed(0, 0, -1)},               // s^-1
-        {"Gy", typed(0, 2, -2)},               // m² s^-2
-        {"Sv", typed(0, 2, -2)},               // m² s^-2
-        {"kat", typed(0, 0, -1, 0, 1)},        // mol s^-1
-    };
+    const auto& table4 = plumb::test::si_derived_units();
     // SI Brochure 9th ed., Table 2: the base units themselves.
     const derived table2[] = {
         {"m", typed(0, 1, 0)},
@@ -303,15 +275,15 @@ TEST_CASE("SI derived units with special names reduce to base dimensions") {
     std::string declarations;
     int index = 0;
     for (const auto& d : table4)
-        declarations += fmt::format("x{} : {}\n", index++, d.unit);
+        declarations += fmt::format("x{} : {}\n", index++, d.symbol);
     for (const auto& d : table2)
         declarations += fmt::format("x{} : {}\n", index++, d.unit);
     const temp_dir dir;
     const auto context = dir.write("si.plumb", declarations);
     index = 0;
     for (const auto& d : table4) {
-        INFO("unit: ", d.unit);
-        dimension_is(fmt::format("x{}", index++), context, d.expected);
+        INFO("unit: ", d.symbol);
+        dimension_is(fmt::format("x{}", index++), context, d.dim);
     }
     for (const auto& d : table2) {
         INFO("unit: ", d.unit);

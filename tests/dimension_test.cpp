@@ -2,6 +2,8 @@
 // powers the checker uses, then compared with exponents typed independently from a source.
 #include "plumb/dimension.hpp"
 
+#include "test_support.hpp"
+
 #include <doctest/doctest.h>
 
 #include <cstdint>
@@ -24,13 +26,7 @@ const dimension I = dimension::base(base_dimension::current);
 const dimension J = dimension::base(base_dimension::luminous_intensity);
 const dimension one{};
 
-// Exponents typed in the order M L T Θ N I J, whole numbers only: the reference side of each
-// comparison deliberately avoids the algebra under test.
-dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th = 0,
-                std::int64_t n = 0, std::int64_t i = 0, std::int64_t j = 0) {
-    return dimension::from_exponents({rational(m), rational(l), rational(t), rational(th),
-                                      rational(n), rational(i), rational(j)});
-}
+using plumb::test::typed;
 
 } // namespace
 

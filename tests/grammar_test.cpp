@@ -98,10 +98,7 @@ void fails_with(const expected_error& e) {
     CHECK(syntax.front().message == e.message);
 }
 
-dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th = 0) {
-    return dimension::from_exponents({rational(m), rational(l), rational(t), rational(th),
-                                      rational(0), rational(0), rational(0)});
-}
+using plumb::test::typed;
 
 // A fresh folder under the system's temporary directory, removed with everything in it.
 using plumb::test::temp_dir;

@@ -6,6 +6,8 @@
 #include "plumb/groups.hpp"
 #include "plumb/rational.hpp"
 
+#include "test_support.hpp"
+
 #include <doctest/doctest.h>
 
 #include <cstdint>
@@ -24,11 +26,7 @@ using plumb::rational;
 
 namespace {
 
-// Exponents typed in the order M L T Θ.
-dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th = 0) {
-    return dimension::from_exponents({rational(m), rational(l), rational(t), rational(th),
-                                      rational(0), rational(0), rational(0)});
-}
+using plumb::test::typed;
 
 // Dimensions from the coherent SI unit of each quantity.
 const dimension length = typed(0, 1, 0);             // m

@@ -3,6 +3,8 @@
 #include "plumb/dimension.hpp"
 #include "plumb/unit_table.hpp"
 
+#include "test_support.hpp"
+
 #include <doctest/doctest.h>
 
 #include <cstdint>
@@ -17,12 +19,7 @@ using plumb::rational;
 
 namespace {
 
-// Exponents typed in the order M L T Θ N I J.
-dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th = 0,
-                std::int64_t n = 0, std::int64_t i = 0, std::int64_t j = 0) {
-    return dimension::from_exponents({rational(m), rational(l), rational(t), rational(th),
-                                      rational(n), rational(i), rational(j)});
-}
+using plumb::test::typed;
 
 bool mentions(std::string_view name, std::string_view word) {
     return name.find(word) != std::string_view::npos;

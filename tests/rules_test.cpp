@@ -111,10 +111,7 @@ check_report check(const std::string& text) {
 // A fresh folder under the system's temporary directory, removed with everything in it.
 using plumb::test::temp_dir;
 
-dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th = 0) {
-    return dimension::from_exponents({rational(m), rational(l), rational(t), rational(th),
-                                      rational(0), rational(0), rational(0)});
-}
+using plumb::test::typed;
 
 dimension length_to(rational p) {
     return dimension::from_exponents({0, p, 0, 0, 0, 0, 0});

@@ -1,13 +1,60 @@
 // Helpers shared by the test files: a scratch folder that cleans up after itself.
 #pragma once
 
+#include "plumb/dimension.hpp"
+
 #include <chrono>
+#include <cstdint>
 #include <filesystem>
 #include <fstream>
 #include <string>
 #include <system_error>
+#include <vector>
 
 namespace plumb::test {
+
+// A dimension from whole exponents typed in the order M L T Θ N I J: the reference side of a
+// comparison, built without the algebra under test.
+inline dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th = 0,
+                       std::int64_t n = 0, std::int64_t i = 0, std::int64_t j = 0) {
+    return dimension::from_exponents({rational(m), rational(l), rational(t), rational(th),
+                                      rational(n), rational(i), rational(j)});
+}
+
+struct unit_in_base_units {
+    const char* symbol;
+    dimension dim;
+};
+
+// SI Brochure 9th ed., Table 4: the 22 derived units with special names, in the column
+// "expressed in terms of SI base units".
+inline const std::vector<unit_in_base_units>& si_derived_units() {
+    static const std::vector<unit_in_base_units> table = {
+        {"rad", typed(0, 0, 0)},               // m/m
+        {"sr", typed(0, 0, 0)},                // m²/m²
+        {"Hz", typed(0, 0, -1)},               // s^-1
+        {"N", typed(1, 1, -2)},                // kg m s^-2
+        {"Pa", typed(1, -1, -2)},              // kg m^-1 s^-2
+        {"J", typed(1, 2, -2)},                // kg m² s^-2
+        {"W", typed(1, 2, -3)},                // kg m² s^-3
+        {"C", typed(0, 0, 1, 0, 0, 1)},        // A s
+        {"V", typed(1, 2, -3, 0, 0, -1)},      // kg m² s^-3 A^-1
+        {"F", typed(-1, -2, 4, 0, 0, 2)},      // kg^-1 m^-2 s^4 A²
+        {"\u03A9", typed(1, 2, -3, 0, 0, -2)}, // kg m² s^-3 A^-2
+        {"S", typed(-1, -2, 3, 0, 0, 2)},      // kg^-1 m^-2 s³ A²
+        {"Wb", typed(1, 2, -2, 0, 0, -1)},     // kg m² s^-2 A^-1
+        {"T", typed(1, 0, -2, 0, 0, -1)},      // kg s^-2 A^-1
+        {"H", typed(1, 2, -2, 0, 0, -2)},      // kg m² s^-2 A^-2
+        {"\u00B0C", typed(0, 0, 0, 1)},        // K
+        {"lm", typed(0, 0, 0, 0, 0, 0, 1)},    // cd sr = cd
+        {"lx", typed(0, -2, 0, 0, 0, 0, 1)},   // cd sr m^-2 = cd m^-2
+        {"Bq", typed(0, 0, -1)},               // s^-1
+        {"Gy", typed(0, 2, -2)},               // m² s^-2
+        {"Sv", typed(0, 2, -2)},               // m² s^-2
+        {"kat", typed(0, 0, -1, 0, 1)},        // mol s^-1
+    };
+    return table;
+}
 
 // A fresh folder under the system's temporary directory, removed with everything in it.
 class temp_dir {

@@ -2,6 +2,8 @@
 // publication named beside it, never read back from the table, so a wrong row fails here.
 #include "plumb/unit_table.hpp"
 
+#include "test_support.hpp"
+
 #include <doctest/doctest.h>
 
 #include <algorithm>
@@ -23,12 +25,7 @@ using plumb::unit_table;
 
 namespace {
 
-// Exponents typed in the order M L T Θ N I J.
-dimension typed(std::int64_t m, std::int64_t l, std::int64_t t, std::int64_t th = 0,
-                std::int64_t n = 0, std::int64_t i = 0, std::int64_t j = 0) {
-    return dimension::from_exponents({rational(m), rational(l), rational(t), rational(th),
-                                      rational(n), rational(i), rational(j)});
-}
+using plumb::test::typed;
 
 const unit_table& table() {
     return unit_table::standard();
@@ -79,42 +76,16 @@ TEST_CASE("SI base units are coherent (SI Brochure 9th ed., Table 2)") {
 
 TEST_CASE("the 22 derived units with special names, in base units (SI Brochure 9th ed., "
           "Table 4)") {
-    struct row {
-        std::string_view symbol;
-        dimension dim;
-    };
-    const row expected[] = {
-        {"rad", typed(0, 0, 0)},               // m/m
-        {"sr", typed(0, 0, 0)},                // m²/m²
-        {"Hz", typed(0, 0, -1)},               // s^-1
-        {"N", typed(1, 1, -2)},                // kg m s^-2
-        {"Pa", typed(1, -1, -2)},              // kg m^-1 s^-2
-        {"J", typed(1, 2, -2)},                // kg m² s^-2
-        {"W", typed(1, 2, -3)},                // kg m² s^-3
-        {"C", typed(0, 0, 1, 0, 0, 1)},        // A s
-        {"V", typed(1, 2, -3, 0, 0, -1)},      // kg m² s^-3 A^-1
-        {"F", typed(-1, -2, 4, 0, 0, 2)},      // kg^-1 m^-2 s^4 A²
-        {"\u03A9", typed(1, 2, -3, 0, 0, -2)}, // kg m² s^-3 A^-2
-        {"S", typed(-1, -2, 3, 0, 0, 2)},      // kg^-1 m^-2 s³ A²
-        {"Wb", typed(1, 2, -2, 0, 0, -1)},     // kg m² s^-2 A^-1
-        {"T", typed(1, 0, -2, 0, 0, -1)},      // kg s^-2 A^-1
-        {"H", typed(1, 2, -2, 0, 0, -2)},      // kg m² s^-2 A^-2
-        {"\u00B0C", typed(0, 0, 0, 1)},        // K
-        {"lm", typed(0, 0, 0, 0, 0, 0, 1)},    // cd sr
-        {"lx", typed(0, -2, 0, 0, 0, 0, 1)},   // cd sr m^-2
-        {"Bq", typed(0, 0, -1)},               // s^-1
-        {"Gy", typed(0, 2, -2)},               // m² s^-2
-        {"Sv", typed(0, 2, -2)},               // m² s^-2
-        {"kat", typed(0, 0, -1, 0, 1)},        // mol s^-1
-    };
-    CHECK(std::size(expected) == 22);
-    for (const row& r : expected) {
-        CAPTURE(std::string(r.symbol));
+    const auto& expected = plumb::test::si_derived_units();
+    CHECK(expected.size() == 22);
+    for (const auto& r : expected) {
+        const std::string_view symbol = r.symbol;
+        CAPTURE(std::string(symbol));
         const resolved_unit u = must_resolve(r.symbol);
         CHECK(u.prefix == nullptr);
         CHECK(u.dim() == r.dim);
         CHECK(u.factor() == 1.0);
-        CHECK(u.unit->takes_prefixes != (r.symbol == "\u00B0C"));
+        CHECK(u.unit->takes_prefixes != (symbol == "\u00B0C"));
     }
 }
 
