@@ -10,8 +10,8 @@
 // published value's printed precision. Unit factors: NIST SP 811 (2008), Appendix B (ft =
 // 0.3048 m exactly, bbl = 0.158987294928 m^3, psi = 6894.757293168 Pa, cP = 0.001 Pa*s,
 // millidarcy = 9.869233e-16 m^2, day = 86400 s).
-#include "../lib/src/inference.hpp"
-#include "../lib/src/parser.hpp"
+#include "check/inference.hpp"
+#include "notation/parser.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
 

@@ -6,8 +6,8 @@
 
 #include "plumb/diagnostic.hpp"
 #include "plumb/rational.hpp"
-#include "symbol_table.hpp"
-#include "syntax_tree.hpp"
+#include "model/symbol_table.hpp"
+#include "model/syntax_tree.hpp"
 
 #include <array>
 #include <span>

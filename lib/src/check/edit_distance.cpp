@@ -1,5 +1,5 @@
 // Edit distance with a cut-off, so suggestions over large dictionaries stay cheap.
-#include "edit_distance.hpp"
+#include "check/edit_distance.hpp"
 
 #include <algorithm>
 #include <vector>

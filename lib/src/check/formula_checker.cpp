@@ -1,9 +1,9 @@
 // Gives every subexpression a dimension and applies the rules where dimensions meet: the
 // terms of a sum, the sides of a formula, function arguments and exponents.
-#include "formula_checker.hpp"
+#include "check/formula_checker.hpp"
 
-#include "edit_distance.hpp"
-#include "functions.hpp"
+#include "check/edit_distance.hpp"
+#include "check/functions.hpp"
 #include "plumb/rules.hpp"
 
 #include <algorithm>

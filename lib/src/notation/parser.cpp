@@ -1,7 +1,7 @@
 // Builds the syntax tree from PEGTL actions. Actions fire only on success, and every choice
 // point in an expression either commits (must<>) or fails before any action ran, so the
 // operand stack is always consistent.
-#include "parser.hpp"
+#include "notation/parser.hpp"
 
 #include "plumb/constants.hpp"
 #include "plumb/notation.hpp"

@@ -1,5 +1,5 @@
 // The table of built-in functions (NOTATION.md, "Functions", lists the same).
-#include "functions.hpp"
+#include "check/functions.hpp"
 
 #include <array>
 

@@ -1,7 +1,7 @@
 // Text to syntax tree: splits a file into logical lines and parses each with the grammar.
 #pragma once
 
-#include "syntax_tree.hpp"
+#include "model/syntax_tree.hpp"
 
 namespace plumb {
 

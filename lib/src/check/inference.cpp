@@ -4,9 +4,9 @@
 // wherever it wants a dimensionless value, the form must. Those equations share one
 // coefficient matrix for all seven base dimensions (only the right-hand sides differ), so one
 // exact elimination of [A | B] answers every base dimension at once.
-#include "inference.hpp"
+#include "check/inference.hpp"
 
-#include "functions.hpp"
+#include "check/functions.hpp"
 #include "plumb/groups.hpp"
 #include "plumb/rules.hpp"
 

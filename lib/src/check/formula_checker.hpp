@@ -1,8 +1,8 @@
 // Typed expressions and the dimension rules: sums, sides, functions, exponents, symbols.
 #pragma once
 
-#include "symbol_table.hpp"
-#include "syntax_tree.hpp"
+#include "model/symbol_table.hpp"
+#include "model/syntax_tree.hpp"
 
 #include <optional>
 #include <vector>

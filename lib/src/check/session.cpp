@@ -1,12 +1,12 @@
 // Loads files once each, resolves `use` lines and dictionaries into symbol tables, runs the
 // checks, and gathers the findings in file order.
-#include "edit_distance.hpp"
-#include "formula_checker.hpp"
-#include "inference.hpp"
-#include "parser.hpp"
+#include "check/edit_distance.hpp"
+#include "check/formula_checker.hpp"
+#include "check/inference.hpp"
+#include "notation/parser.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
-#include "studies.hpp"
+#include "groups/studies.hpp"
 
 #include <algorithm>
 #include <array>

@@ -1,5 +1,5 @@
 // Studies: resolve variables, form groups, name them, plan the model.
-#include "studies.hpp"
+#include "groups/studies.hpp"
 
 #include "plumb/rules.hpp"
 

@@ -2,8 +2,8 @@
 #pragma once
 
 #include "plumb/check.hpp"
-#include "symbol_table.hpp"
-#include "syntax_tree.hpp"
+#include "model/symbol_table.hpp"
+#include "model/syntax_tree.hpp"
 
 #include <vector>
 
