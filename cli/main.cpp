@@ -32,7 +32,7 @@ usage:
   plumb groups [options] PATH...  the dimensionless groups of each study in the files,
                                   and the model plan where prototype and model lines
                                   give values
-  plumb groups --vars 'F ~ rho, V, D, mu' [--repeating 'rho, V, D'] FILE...
+  plumb groups --vars 'F depends on rho, V, D, mu' [--repeating 'rho, V, D'] FILE...
                                   the groups of variables that FILEs declare
   plumb units [TEXT]              list the built-in units (those matching TEXT)
   plumb rules                     list the rules and their ids
@@ -131,7 +131,7 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
         } else if (a == "--vars" || a.rfind("--vars=", 0) == 0) {
             const auto v = value("--vars");
             if (!v)
-                return "--vars needs a list such as 'F ~ rho, V, D, mu'";
+                return "--vars needs a list such as 'F depends on rho, V, D, mu'";
             out.variables = *v;
         } else if (a == "--repeating" || a.rfind("--repeating=", 0) == 0) {
             const auto v = value("--repeating");

@@ -1176,7 +1176,7 @@ TEST_CASE("groups: a study's groups, the --vars form, --study and JSON") {
     // Sphere drag: F_D/(ρV²D²) = φ(ρVD/μ) (F. M. White, Fluid Mechanics, 7th ed., ch. 5,
     // chapter from memory).
     const std::string declarations = "F_D : N\nρ : kg/m^3\nV : m/s\nD : m\nμ : Pa*s\n";
-    const auto file = dir.write("drag.plumb", declarations + "study drag: F_D ~ ρ, V, D, μ\n");
+    const auto file = dir.write("drag.plumb", declarations + "study drag: F_D depends on ρ, V, D, μ\n");
 
     const auto r = run_plumb({"groups", "--color", "never", file});
     CHECK(r.status == 0);
@@ -1185,7 +1185,7 @@ TEST_CASE("groups: a study's groups, the --vars form, --study and JSON") {
     CHECK(contains(r.out, "F_D/(ρ*V^2*D^2)"));
     CHECK(contains(r.out, "ρ*V*D/μ"));
 
-    const auto from_vars = run_plumb({"groups", "--vars", "F_D ~ ρ, V, D, μ", "--repeating",
+    const auto from_vars = run_plumb({"groups", "--vars", "F_D depends on ρ, V, D, μ", "--repeating",
                                       "ρ, V, D", dir.write("dictionary.plumb", declarations)});
     CHECK(from_vars.status == 0);
     CHECK(contains(from_vars.out, "study command-line"));
@@ -1205,7 +1205,7 @@ TEST_CASE("groups: a study's groups, the --vars form, --study and JSON") {
         {"groups", "--color", "never",
          dir.write("bad.plumb", declarations +
                                     "U : m/s\n"
-                                    "study drag: F_D ~ ρ, V, U, D, μ repeating ρ, V, U\n")});
+                                    "study drag: F_D depends on ρ, V, U, D, μ repeating ρ, V, U\n")});
     CHECK(bad.status == 1);
     CHECK(contains(bad.out, "[study-problem]"));
 }

@@ -39,7 +39,7 @@ const std::string sphere = "F_D : N\n"
 } // namespace
 
 TEST_CASE("studies: a study line gives its variables, dependent and groups") {
-    const auto r = check_text("sphere.plumb", sphere + "study drag: F_D ~ ρ, V, D, μ\n");
+    const auto r = check_text("sphere.plumb", sphere + "study drag: F_D depends on ρ, V, D, μ\n");
     CHECK(r.diagnostics.empty());
     REQUIRE(r.studies.size() == 1);
     const auto& s = r.studies.front();
@@ -53,8 +53,8 @@ TEST_CASE("studies: a study line gives its variables, dependent and groups") {
 }
 
 TEST_CASE("studies: given repeating variables are used as given") {
-    const auto r =
-        check_text("sphere.plumb", sphere + "study drag: F_D ~ ρ, V, D, μ repeating μ, V, D\n");
+    const auto r = check_text("sphere.plumb",
+                              sphere + "study drag: F_D depends on ρ, V, D, μ repeating μ, V, D\n");
     REQUIRE(r.studies.size() == 1);
     const auto& a = r.studies.front().analysis;
     CHECK_FALSE(a.repeating_chosen);
@@ -67,38 +67,42 @@ TEST_CASE("studies: given repeating variables are used as given") {
 
 TEST_CASE("studies: findings on study lines") {
     SUBCASE("an undeclared variable") {
-        const auto r = check_text("s.plumb", sphere + "study drag: F_D ~ ρ, V, D, nu\n");
+        const auto r = check_text("s.plumb", sphere + "study drag: F_D depends on ρ, V, D, nu\n");
         const auto* d = find_rule(r, plumb::rules::undeclared);
         REQUIRE(d != nullptr);
-        CHECK(r.sources.front()->position(d->where.range.begin).column == 28);
+        CHECK(r.sources.front()->position(d->where.range.begin).column == 37);
         CHECK(r.studies.empty());
     }
     SUBCASE("a variable listed twice") {
-        const auto r = check_text("s.plumb", sphere + "study drag: F_D ~ ρ, V, D, μ, V\n");
+        const auto r = check_text("s.plumb", sphere + "study drag: F_D depends on ρ, V, D, μ, V\n");
         REQUIRE(find_rule(r, plumb::rules::study_problem) != nullptr);
         CHECK(find_rule(r, plumb::rules::study_problem)->message.find("listed twice") !=
               std::string::npos);
     }
     SUBCASE("a repeating variable outside the study") {
         const auto r = check_text(
-            "s.plumb", sphere + "g : m/s^2\nstudy drag: F_D ~ ρ, V, D, μ repeating ρ, V, g\n");
+            "s.plumb",
+            sphere + "g : m/s^2\nstudy drag: F_D depends on ρ, V, D, μ repeating ρ, V, g\n");
         REQUIRE(find_rule(r, plumb::rules::study_problem) != nullptr);
     }
     SUBCASE("repeating variables that are not independent") {
         // Two speeds cannot both repeat: U has the dimension of V.
         const auto r = check_text(
-            "s.plumb", sphere + "U : m/s\nstudy drag: F_D ~ ρ, V, U, D, μ repeating ρ, V, U\n");
+            "s.plumb",
+            sphere + "U : m/s\nstudy drag: F_D depends on ρ, V, U, D, μ repeating ρ, V, U\n");
         const auto* d = find_rule(r, plumb::rules::study_problem);
         REQUIRE(d != nullptr);
         CHECK(r.studies.front().analysis.groups.empty());
     }
     SUBCASE("two studies with one name") {
         const auto r = check_text(
-            "s.plumb", sphere + "study drag: F_D ~ ρ, V, D, μ\nstudy drag: F_D ~ ρ, V, D, μ\n");
+            "s.plumb",
+            sphere +
+                "study drag: F_D depends on ρ, V, D, μ\nstudy drag: F_D depends on ρ, V, D, μ\n");
         CHECK(count_rule(r, plumb::rules::study_problem) == 1);
     }
     SUBCASE("a syntax error names what was expected") {
-        const auto r = check_text("s.plumb", sphere + "study drag: F_D ~ ρ, V,\n");
+        const auto r = check_text("s.plumb", sphere + "study drag: F_D depends on ρ, V,\n");
         const auto* d = find_rule(r, plumb::rules::syntax);
         REQUIRE(d != nullptr);
         CHECK(d->message == "expected a variable name after ','");
@@ -117,7 +121,7 @@ TEST_CASE("studies: prototype and model values") {
     // e.g. Chanson, The Hydraulics of Open Channel Flow, 2nd ed., ch. 14, from memory):
     // velocity ratio λ^(1/2) = 0.2.
     const std::string text = "V : m/s\nL : m\ng : m/s^2\n"
-                             "study wave: V ~ g, L\n"
+                             "study wave: V depends on g, L\n"
                              "prototype wave: V = 5 m/s, L = 100 m, g = 9.81 m/s^2\n"
                              "model wave: scale = 1:25\n";
     const auto r = check_text("w.plumb", text);
@@ -151,7 +155,7 @@ TEST_CASE("studies: prototype and model values") {
 }
 
 TEST_CASE("studies: findings on value lines") {
-    const std::string base = "V : m/s\nL : m\ng : m/s^2\nstudy wave: V ~ g, L\n";
+    const std::string base = "V : m/s\nL : m\ng : m/s^2\nstudy wave: V depends on g, L\n";
     SUBCASE("a unit of the wrong dimension") {
         const auto r =
             check_text("w.plumb", base + "prototype wave: V = 5 m, L = 100 m, g = 9.81 m/s^2\n");
@@ -190,7 +194,7 @@ TEST_CASE("studies: findings on value lines") {
 }
 
 TEST_CASE("studies: the text and JSON renderings carry the groups and the caution") {
-    const auto r = check_text("sphere.plumb", sphere + "study drag: F_D ~ ρ, V, D, μ\n");
+    const auto r = check_text("sphere.plumb", sphere + "study drag: F_D depends on ρ, V, D, μ\n");
     const std::string text = plumb::render_groups_text(r);
     CHECK(text.find("study drag") != std::string::npos);
     CHECK(text.find("rank 3: 5 variables give 2 independent groups") != std::string::npos);

@@ -162,9 +162,9 @@ TEST_CASE("quantities and constants inside formulas") {
 TEST_CASE("units of one's own: defined, used, imported and refused") {
     // 1 US gallon = 3.785411784e-3 m^3 exactly (NIST SP 811 (2008), B.8), so one million
     // gallons a day is 3785.411784 m^3 / 86400 s = 0.0438126364 m^3/s.
-    const auto r =
-        plumb::check_text("u.plumb", "unit mgd = 0.0438126364 m^3/s \"million US gallons a day\"\n"
-                                     "Q, Q_2 : mgd\nQ_3 : m^3/s\nQ = Q_2\nQ = Q_3\n");
+    const auto r = plumb::check_text(
+        "u.plumb", "measure mgd = 0.0438126364 m^3/s \"million US gallons a day\"\n"
+                   "Q, Q_2 : mgd\nQ_3 : m^3/s\nQ = Q_2\nQ = Q_3\n");
     CHECK(findings(r, plumb::rules::unknown_unit).empty());
     CHECK(findings(r, plumb::rules::sum_mismatch).empty());
     const auto scales = findings(r, plumb::rules::unit_scale);
@@ -173,14 +173,14 @@ TEST_CASE("units of one's own: defined, used, imported and refused") {
     CHECK(scales[0]->message.find("0.0438126") != std::string::npos);
 
     SUBCASE("a built-in name cannot be redefined") {
-        const auto again = plumb::check_text("u.plumb", "unit m = 2 ft\n");
+        const auto again = plumb::check_text("u.plumb", "measure m = 2 ft\n");
         CHECK(findings(again, plumb::rules::conflicting_declaration).size() == 1);
     }
     SUBCASE("an unknown unit's message shows how to define it") {
         const auto unknown = plumb::check_text("u.plumb", "x : furlong\n");
         const auto f = findings(unknown, plumb::rules::unknown_unit);
         REQUIRE(f.size() == 1);
-        CHECK(mentions(*f[0], "unit furlong = "));
+        CHECK(mentions(*f[0], "measure furlong = "));
     }
 }
 

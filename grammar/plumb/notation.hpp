@@ -143,7 +143,9 @@ struct unit_one : seq<one<'1'>, not_at<digit>> {};
 struct unit_group_close : one<')'> {};
 struct unit_group : if_must<one<'('>, star<space>, unit_expression, star<space>, unit_group_close> {
 };
-struct unit_primary : sor<unit_group, unit_one, unit_percent, unit_symbol> {};
+// "Δ°C": a difference on an offset scale, an ordinary quantity (1 Δ°C = 1 K).
+struct unit_difference : seq<utf8::one<0x394>, unit_symbol> {};
+struct unit_primary : sor<unit_group, unit_one, unit_percent, unit_difference, unit_symbol> {};
 struct unit_exponent : literal_exponent {};
 struct unit_power
     : seq<unit_primary, opt<star<space>, one<'^'>, star<space>, must<unit_exponent>>> {};
@@ -171,12 +173,26 @@ struct declaration_head : seq<name, star<ws, one<','>, ws, opt<name>>, ws, one<'
 struct declaration : seq<at<declaration_head>, name_list, ws, one<':'>, ws, must<declaration_spec>,
                          opt<ws, constant_assignment>, opt<ws, description>> {};
 
-// --- Units of one's own: unit mgd = 0.0438126 m^3/s "million US gallons per day" -----------
+// --- Units of one's own --------------------------------------------------------------------
+//   measure mgd = 1e6 gal/d "million US gallons per day"
+//   measure kPag = kPa zero at 101.325 kPa      (a gauge or offset scale: reads zero there)
+struct measure_keyword : TAO_PEGTL_STRING("measure") {};
 struct new_unit_name : seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>> {};
-struct new_unit_value : seq<number, must<number_end>, star<space>, unit_expression> {};
-struct unit_statement : seq<at<TAO_PEGTL_STRING("unit"), plus<space>, new_unit_name, ws, one<'='>>,
-                            TAO_PEGTL_STRING("unit"), plus<space>, new_unit_name, ws, one<'='>, ws,
-                            must<new_unit_value>, opt<ws, description>> {};
+struct new_unit_size : seq<number, must<number_end>, star<space>> {};
+struct origin_number : seq<opt<one<'-'>>, number, must<number_end>> {};
+struct origin_value : seq<origin_number, star<space>, must<unit_expression>> {};
+struct origin_clause
+    : seq<plus<space>, TAO_PEGTL_STRING("zero"), plus<space>, TAO_PEGTL_STRING("at"),
+          not_at<name_char>, star<space>, must<origin_value>> {};
+struct new_unit_value : seq<opt<new_unit_size>, unit_expression, opt<origin_clause>> {};
+struct measure_statement : seq<at<measure_keyword, plus<space>, new_unit_name, ws, one<'='>>,
+                               measure_keyword, plus<space>, new_unit_name, ws, one<'='>, ws,
+                               must<new_unit_value>, opt<ws, description>> {};
+// The spelling before "measure"; kept only to say what to write instead.
+struct retired_unit_keyword : failure {};
+struct retired_unit_statement
+    : seq<at<TAO_PEGTL_STRING("unit"), plus<space>, new_unit_name, ws, one<'='>>,
+          must<retired_unit_keyword>> {};
 
 // --- Shared dictionaries: use "path" ------------------------------------------------------
 struct use_path_text : star<not_one<'"', '\n'>> {};
@@ -185,22 +201,30 @@ struct use_path : if_must<one<'"'>, use_path_text, use_path_close> {};
 struct use_statement : seq<TAO_PEGTL_STRING("use"), plus<space>, at<one<'"'>>, use_path> {};
 
 // --- Studies: the variables of one phenomenon, for its dimensionless groups ---------------
-//   study drag: F_D ~ ρ, V, D, μ repeating ρ, V, D
+//   study drag: F_D depends on ρ, V, D, μ repeating ρ, V, D
+//   study pump: H, P depend on Q, N, D, ρ, μ
 struct study_name : label_name {};
 struct list_separator : seq<ws, one<','>, ws> {};
 struct study_variable : name {};
 struct study_dependent : name {};
-struct dependent_mark : seq<at<name, ws, one<'~'>>, study_dependent, ws, one<'~'>, ws> {};
+struct depends_on : seq<TAO_PEGTL_STRING("depend"), opt<one<'s'>>, plus<space>,
+                        TAO_PEGTL_STRING("on"), not_at<name_char>> {};
+struct dependents_clause : seq<at<list<name, list_separator>, plus<space>, depends_on>,
+                               list<study_dependent, list_separator>, plus<space>, depends_on, ws> {
+};
+// "F ~ a, b" was the separator before "depends on"; say so where the '~' stands.
+struct no_tilde : not_at<one<'~'>> {};
+struct retired_tilde : seq<at<name, ws, one<'~'>>, name, ws, must<no_tilde>> {};
 struct study_variables : list_must<study_variable, list_separator> {};
 struct repeating_variable : name {};
 struct repeating_variables : list_must<repeating_variable, list_separator> {};
 struct repeating_clause
     : if_must<seq<plus<space>, TAO_PEGTL_STRING("repeating"), plus<space>>, repeating_variables> {};
 struct study_colon : one<':'> {};
-struct study_statement
-    : seq<at<TAO_PEGTL_STRING("study"), plus<space>, label_name, ws, one<':'>>,
-          TAO_PEGTL_STRING("study"), plus<space>, study_name, ws, study_colon, ws,
-          opt<dependent_mark>, must<study_variables>, opt<repeating_clause>> {};
+struct study_statement : seq<at<TAO_PEGTL_STRING("study"), plus<space>, label_name, ws, one<':'>>,
+                             TAO_PEGTL_STRING("study"), plus<space>, study_name, ws, study_colon,
+                             ws, opt<dependents_clause>, opt<retired_tilde>, must<study_variables>,
+                             opt<repeating_clause>> {};
 
 // --- Prototype and model values for a study -----------------------------------------------
 //   prototype spillway: Q = 2500 m^3/s, H = 6.5 m
@@ -224,8 +248,8 @@ struct case_statement : seq<at<case_kind, plus<space>, label_name, ws, one<':'>>
                             plus<space>, study_name, ws, study_colon, ws, must<case_items>> {};
 
 // --- One logical line ---------------------------------------------------------------------
-struct statement
-    : sor<use_statement, unit_statement, study_statement, case_statement, declaration, formula> {};
+struct statement : sor<use_statement, measure_statement, retired_unit_statement, study_statement,
+                       case_statement, declaration, formula> {};
 struct line_end : seq<ws, opt<comment>, eof> {};
 struct line : seq<ws, opt<statement>, must<line_end>> {};
 

@@ -39,7 +39,8 @@ template <> inline constexpr const char* error_message<constant_value> = "expect
 template <> inline constexpr const char* error_message<description_close> = "the description has no closing '\"'";
 template <> inline constexpr const char* error_message<declared_name> = "expected a name after ','";
 template <> inline constexpr const char* error_message<use_path_close> = "the path has no closing '\"'";
-template <> inline constexpr const char* error_message<study_variables> = "expected the study's variables, separated by commas, as in: study drag: F ~ rho, V, D, mu";
+template <> inline constexpr const char* error_message<study_variables> = "expected the study's variables, separated by commas, as in: study drag: F depends on rho, V, D, mu";
+template <> inline constexpr const char* error_message<no_tilde> = "a study names what depends on what in words now: write 'study drag: F depends on rho, V, D, mu' (or 'H, P depend on ...'), not '~'";
 template <> inline constexpr const char* error_message<repeating_variables> = "expected the repeating variables after 'repeating', separated by commas";
 template <> inline constexpr const char* error_message<study_variable> = "expected a variable name after ','";
 template <> inline constexpr const char* error_message<repeating_variable> = "expected a variable name after ','";
@@ -48,7 +49,9 @@ template <> inline constexpr const char* error_message<case_item> = "expected a 
 template <> inline constexpr const char* error_message<value_quantity> = "expected a number and its unit, as in 3 m/s";
 template <> inline constexpr const char* error_message<scale_value> = "expected the model scale as a ratio such as 1:25, or a number such as 0.04";
 template <> inline constexpr const char* error_message<brace_close> = "expected '}' to close the braces; inside them goes a unit such as m/s or a constant such as g_n";
-template <> inline constexpr const char* error_message<new_unit_value> = "expected the unit's size as a number and a known unit, as in: unit mgd = 0.0438126 m^3/s";
+template <> inline constexpr const char* error_message<new_unit_value> = "expected the unit's size as a number and a known unit, as in: measure mgd = 1e6 gal/d";
+template <> inline constexpr const char* error_message<origin_value> = "expected where the scale reads zero, as a number and a known unit, as in: measure kPag = kPa zero at 101.325 kPa";
+template <> inline constexpr const char* error_message<retired_unit_keyword> = "units of one's own are defined with 'measure' now, as in: measure mgd = 1e6 gal/d (or, for a gauge or offset scale, measure kPag = kPa zero at 101.325 kPa)";
 template <> inline constexpr const char* error_message<line_end> = "expected an operator, a comparison or the end of the line here";
 // clang-format on
 

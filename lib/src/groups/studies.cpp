@@ -36,9 +36,7 @@ class study_worker {
         r.where = at(s.range);
         r.name = std::string(text(s.name));
         std::vector<span> variable_spans;
-        if (s.dependent.end > s.dependent.begin)
-            variable_spans.push_back(s.dependent);
-        for (std::uint32_t i = 0; i < s.variable_count; ++i)
+        for (std::uint32_t i = 0; i < s.dependent_count + s.variable_count; ++i)
             variable_spans.push_back(file_.study_names[s.first_variable + i]);
 
         bool ok = true;
@@ -74,10 +72,19 @@ class study_worker {
 
         group_request request;
         request.variables = r.variables;
-        if (s.dependent.end > s.dependent.begin)
+        if (s.dependent_count > 1) {
+            report(out_, rules::study_problem,
+                   fmt::format("study '{}' names {} dependent variables; the groups are formed for "
+                               "one dependent variable at a time: write one study for each",
+                               r.name, s.dependent_count),
+                   at(s.range));
+            return std::nullopt;
+        }
+        if (s.dependent_count == 1)
             request.dependent = 0;
         for (std::uint32_t i = 0; i < s.repeating_count; ++i) {
-            const span v = file_.study_names[s.first_variable + s.variable_count + i];
+            const span v =
+                file_.study_names[s.first_variable + s.dependent_count + s.variable_count + i];
             const auto it =
                 std::find_if(r.variables.begin(), r.variables.end(),
                              [&](const group_variable& g) { return g.name == text(v); });

@@ -9,6 +9,7 @@
 
 #include <cstdint>
 #include <limits>
+#include <memory>
 #include <optional>
 #include <string>
 #include <vector>
@@ -92,12 +93,12 @@ struct use_line {
     span path; // inside the quotes
 };
 
-// study NAME: [dependent ~] variables [repeating variables]
+// study NAME: [dependents depend(s) on] variables [repeating variables]
 struct study {
     span range;
     span name;
-    span dependent;               // empty when none is named
-    std::uint32_t first_variable; // into study_names: the variables, then the repeating ones
+    std::uint32_t first_variable; // into study_names: dependents, variables, then repeating ones
+    std::uint32_t dependent_count;
     std::uint32_t variable_count;
     std::uint32_t repeating_count;
 };
@@ -122,13 +123,22 @@ struct study_case {
     std::uint32_t value_count;
 };
 
-// unit NAME = number unit: a unit of the user's own, known after its line in this file and
-// in files that `use` this one.
+// measure NAME = [number] unit [zero at number unit]: a unit of the user's own, known after
+// its line in this file and in files that `use` this one.
 struct defined_unit {
+    // A unit with an origin of its own ("zero at"), or defined from one (0.01 barg), reads
+    // from that zero: the checker's offset rules see it through this row, as they see °C.
+    // Shared so that the row's address survives the file's units vector growing.
+    struct scale_row {
+        std::string symbol;
+        std::string name;
+        unit_definition row{};
+    };
     std::string name;
     dimension dim;
     double si_factor = 1.0;
     span where;
+    std::shared_ptr<const scale_row> origin; // null for a unit that counts from nothing
 };
 
 struct parsed_file {

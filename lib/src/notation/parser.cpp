@@ -103,11 +103,17 @@ struct parse_state {
     span pending_use_path{};
     span pending_unit_name{};
     bool pending_unit_ok = false;
+    const unit_definition* pending_unit_base = nullptr; // a measure's lone unit, if offset
     dimension pending_unit_dim;
     double pending_unit_factor = 0.0;
+    double pending_unit_size = 1.0;
+    std::optional<double> pending_origin; // SI value where a measure's scale reads zero
+    dimension pending_origin_dim;
+    span pending_origin_span{};
+    std::uint32_t pending_dependent_count = 0;
 
     // Study and case under construction.
-    span pending_study_name{}, pending_dependent{};
+    span pending_study_name{};
     std::uint32_t line_first_study_name = 0;
     std::uint32_t pending_repeating_count = 0;
     std::uint32_t line_first_case_value = 0;
@@ -163,7 +169,10 @@ struct parse_state {
         bracket_dimension = {};
         pending_exponent.reset();
         units.clear();
-        pending_study_name = pending_dependent = pending_scale_text = {};
+        pending_study_name = pending_scale_text = {};
+        pending_dependent_count = 0;
+        pending_unit_size = 1.0;
+        pending_origin.reset();
         line_first_study_name = static_cast<std::uint32_t>(out.study_names.size());
         pending_repeating_count = 0;
         line_first_case_value = static_cast<std::uint32_t>(out.case_values.size());
@@ -398,7 +407,8 @@ template <> struct action<nt::unit_symbol> {
             }
         }
         if (const syntax::defined_unit* own = s.find_defined_unit(text)) {
-            s.units.push_back({own->dim, own->si_factor, nullptr, true, false});
+            s.units.push_back(
+                {own->dim, own->si_factor, own->origin ? &own->origin->row : nullptr, true, false});
             return;
         }
         const auto unit = unit_table::standard().resolve(text);
@@ -415,16 +425,23 @@ template <> struct action<nt::unit_symbol> {
             s.report(rules::unknown_unit, message, s.range(in));
             diagnostic& d = s.out.diagnostics.back();
             d.notes.push_back(
-                {fmt::format("define it on a line of its own, as in: unit {} = 0.3048 m (its size "
-                             "in a known unit), or declare the symbol by its dimension, as in "
-                             "[L T^-1]; `plumb units` lists the built-in units",
-                             text),
+                {fmt::format(
+                     "define it on a line of its own, as in: measure {} = 0.3048 m (its size "
+                     "in a known unit), or declare the symbol by its dimension, as in "
+                     "[L T^-1]; `plumb catalogue` lists the built-in units",
+                     text),
                  {}});
             s.units.push_back({{}, 1.0, nullptr, false});
             return;
         }
         s.units.push_back(
             {unit->dim(), unit->factor(), unit->prefix ? nullptr : unit->unit, true, false});
+    }
+};
+// Δ°C, Δbarg: a difference on that scale is an ordinary quantity, with no zero to mind.
+template <> struct action<nt::unit_difference> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.units.back().single = nullptr;
     }
 };
 template <> struct action<nt::unit_one> {
@@ -516,15 +533,29 @@ template <> struct action<nt::declaration> {
     }
 };
 
-// --- unit NAME = number unit ---
-template <> struct action<nt::new_unit_value> {
+// --- measure NAME = [number] unit [zero at number unit] ---
+bool is_pressure(const dimension& d) {
+    static const dimension pascal = unit_table::standard().resolve("Pa")->dim();
+    return d == pascal;
+}
+template <> struct action<nt::new_unit_size> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const std::string text(in.string_view());
+        s.pending_unit_size = std::strtod(text.c_str(), nullptr);
+    }
+};
+template <> struct action<nt::origin_value> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const unit_value u = s.units.back();
         s.units.pop_back();
-        s.pending_unit_ok = u.ok;
-        s.pending_unit_dim = u.dim;
         const std::string text(in.string_view());
-        s.pending_unit_factor = std::strtod(text.c_str(), nullptr) * u.factor;
+        const double number = std::strtod(text.c_str(), nullptr);
+        // "zero at 14.696 psi": the origin is an absolute value; a gauge origin reads from
+        // its own zero, so it is added in.
+        s.pending_origin = number * u.factor + (u.single ? u.single->offset : 0.0);
+        s.pending_origin_dim = u.dim;
+        s.pending_origin_span = s.range(in);
+        s.pending_unit_ok = s.pending_unit_ok && u.ok;
     }
 };
 template <> struct action<nt::new_unit_name> {
@@ -532,7 +563,23 @@ template <> struct action<nt::new_unit_name> {
         s.pending_unit_name = s.range(in);
     }
 };
-template <> struct action<nt::unit_statement> {
+template <> struct action<nt::measure_keyword> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.pending_unit_ok = true;
+    }
+};
+template <> struct action<nt::new_unit_value> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        // The size's unit sits below the origin's (already taken) on the stack.
+        const unit_value u = s.units.back();
+        s.units.pop_back();
+        s.pending_unit_ok = s.pending_unit_ok && u.ok;
+        s.pending_unit_dim = u.dim;
+        s.pending_unit_base = u.single;
+        s.pending_unit_factor = s.pending_unit_size * u.factor;
+    }
+};
+template <> struct action<nt::measure_statement> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         const std::string_view name = s.file.text(s.pending_unit_name);
         if (!s.pending_unit_ok)
@@ -547,8 +594,46 @@ template <> struct action<nt::unit_statement> {
             s.report(rules::syntax, "a unit's size must be a positive number", s.pending_unit_name);
             return;
         }
-        s.out.units.push_back(
-            {std::string(name), s.pending_unit_dim, s.pending_unit_factor, s.pending_unit_name});
+        if (s.pending_origin && s.pending_origin_dim != s.pending_unit_dim) {
+            s.report(rules::conflicting_declaration,
+                     fmt::format("the zero is given in {}, but the unit measures {}",
+                                 s.pending_origin_dim.to_string(), s.pending_unit_dim.to_string()),
+                     s.pending_origin_span);
+            return;
+        }
+        syntax::defined_unit unit{std::string(name), s.pending_unit_dim, s.pending_unit_factor,
+                                  s.pending_unit_name, nullptr};
+        // An origin of its own, or the one of the offset unit it is measured in (0.01 barg).
+        const unit_definition* base = s.pending_unit_base;
+        const bool inherits = base != nullptr && base->scale != unit_scale::absolute;
+        if (s.pending_origin || inherits) {
+            auto origin = std::make_shared<syntax::defined_unit::scale_row>();
+            origin->symbol = name;
+            origin->name = fmt::format("{} (a unit of this file's own)", name);
+            unit_definition& row = origin->row;
+            for (std::size_t i = 0; i < base_dimension_count; ++i) {
+                const rational e = s.pending_unit_dim.exponent(static_cast<base_dimension>(i));
+                if (!e.is_integer() || e.num() > 100 || e.num() < -100) {
+                    s.report(rules::syntax,
+                             "a unit with a zero of its own must have whole-number exponents",
+                             s.pending_unit_name);
+                    return;
+                }
+                row.exponents[i] = static_cast<std::int8_t>(e.num());
+            }
+            row.factor = s.pending_unit_factor;
+            row.offset = s.pending_origin ? *s.pending_origin : base->offset;
+            row.scale =
+                inherits && !s.pending_origin
+                    ? base->scale
+                    : (is_pressure(s.pending_unit_dim) ? unit_scale::gauge : unit_scale::offset);
+            row.takes_prefixes = false;
+            row.source = "defined in this file";
+            row.symbol = origin->symbol;
+            row.name = origin->name;
+            unit.origin = std::move(origin);
+        }
+        s.out.units.push_back(std::move(unit));
     }
 };
 
@@ -572,7 +657,8 @@ template <> struct action<nt::study_name> {
 };
 template <> struct action<nt::study_dependent> {
     template <typename In> static void apply(const In& in, parse_state& s) {
-        s.pending_dependent = s.range(in);
+        s.out.study_names.push_back(s.range(in));
+        ++s.pending_dependent_count;
     }
 };
 template <> struct action<nt::study_variable> {
@@ -590,8 +676,9 @@ template <> struct action<nt::study_statement> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const auto total =
             static_cast<std::uint32_t>(s.out.study_names.size()) - s.line_first_study_name;
-        s.out.studies.push_back({s.range(in), s.pending_study_name, s.pending_dependent,
-                                 s.line_first_study_name, total - s.pending_repeating_count,
+        s.out.studies.push_back({s.range(in), s.pending_study_name, s.line_first_study_name,
+                                 s.pending_dependent_count,
+                                 total - s.pending_dependent_count - s.pending_repeating_count,
                                  s.pending_repeating_count});
     }
 };

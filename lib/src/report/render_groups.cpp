@@ -148,7 +148,8 @@ std::string render_groups_text(const check_report& report, const text_style& /*s
         out += '\n';
     }
     if (report.studies.empty())
-        out += "plumb: no study found; declare one as: study NAME: dependent ~ variable, variable, "
+        out += "plumb: no study found; declare one as: study NAME: dependent depends on variable, "
+               "variable, "
                "...\n";
     return out;
 }
