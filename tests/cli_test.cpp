@@ -710,16 +710,19 @@ TEST_CASE("golden text: a term of a sum with another dimension") {
     const auto file = dir.write("head.plumb", sum_file);
     const auto r = run_plumb({"check", "--color", "never", file});
     CHECK(r.status == 1);
-    // The underlines sit under the terms although 'ρ' takes two bytes: one column per
-    // character.
+    // The braces sit under the terms although 'ρ' takes two bytes: one cell per character.
+    // The odd term, one character wide, has a double tick and its key on the line below; the
+    // notes that only repeated the dimensions are left to the ledger.
     const std::string expected =
         fmt::format("{}:7:33: error: 'p' (static pressure) does not have the dimension of the "
                     "other terms of this sum [sum-mismatch]\n",
                     file) +
-        "    7 | @head H = p/(ρ*g) + V^2/(2*g) + p\n"
-        "      |           ~~~~~~~   ~~~~~~~~~   ^\n"
-        "      note: 'p' (static pressure) is [M L^-1 T^-2] (pressure or stress)\n"
-        "      note: the other terms are [L] (length): 'p/(ρ*g)', 'V^2/(2*g)'\n"
+        "    @head H = p/(ρ*g) + V^2/(2*g) + p\n"
+        "              └──a──┘   └───b───┘   ║\n"
+        "                                    c\n"
+        "    a  [L]            length\n"
+        "    b  [L]            length\n"
+        "  ▶ c  [M L^-1 T^-2]  pressure or stress  ◀ does not match\n"
         "\n" +
         tail("1 error, 0 warnings (1 formula in 1 file checked)");
     CHECK(r.out == expected);
@@ -735,37 +738,97 @@ TEST_CASE("golden text: the two sides of an equation differ") {
         fmt::format("{}:5:19: error: the two sides of this equation differ in dimension "
                     "[side-mismatch]\n",
                     file) +
-        "    5 | @hydrostatic Δp = ρ*h\n"
-        "      |              ~~   ^~~\n"
-        "      note: left side 'Δp' (pressure difference) is [M L^-1 T^-2] (pressure or "
-        "stress)\n"
-        "      note: right side 'ρ*h' is [M L^-2] (areal density)\n"
+        "    @hydrostatic Δp = ρ*h\n"
+        "                 └┘   ╘b╛\n"
+        "                 a\n"
+        "    a  [M L^-1 T^-2]  pressure or stress\n"
+        "  ▶ b  [M L^-2]       areal density       ◀ does not match\n"
         "\n" +
         tail("1 error, 0 warnings (1 formula in 1 file checked)");
     CHECK(r.out == expected);
 }
 
-TEST_CASE("golden text: a tab before the finding keeps the underline aligned") {
+TEST_CASE("golden text: a term of two-byte characters beside another") {
     const temp_folder dir;
-    const auto file = dir.write("tab.plumb", "a : m\nb : s\nc : m\n\tc = a +\tb\n");
+    const auto file = dir.write("viscosity.plumb", "ν : m^2/s \"kinematic viscosity\"\n"
+                                                   "μ : Pa*s\n"
+                                                   "ρ : kg/m^3\n"
+                                                   "τ_w : Pa \"wall shear stress\"\n"
+                                                   "@viscosity ν = μ/ρ + τ_w\n");
     const auto r = run_plumb({"check", "--color", "never", file});
     CHECK(r.status == 1);
-    // Tabs expand to the next multiple of 4 cells in the line and in the underline alike; the
-    // column in the location counts the tab as one character, as editors do.
+    // Every name is Greek: two bytes a character, one cell each.
+    const std::string expected =
+        fmt::format("{}:5:22: error: cannot add 'τ_w' (wall shear stress) to 'μ/ρ': their "
+                    "dimensions differ [sum-mismatch]\n",
+                    file) +
+        "    @viscosity ν = μ/ρ + τ_w\n"
+        "                   └a┘   ╘b╛\n"
+        "    a  [L^2 T^-1]     kinematic viscosity or diffusivity\n"
+        "  ▶ b  [M L^-1 T^-2]  pressure or stress                  ◀ does not match\n"
+        "\n" +
+        tail("1 error, 0 warnings (1 formula in 1 file checked)");
+    CHECK(r.out == expected);
+}
+
+TEST_CASE("golden text: an undeclared symbol is the only mark, and the comment is dropped") {
+    const temp_folder dir;
+    const auto file = dir.write("continuity.plumb", "Q : m^3/s\n"
+                                                    "V : m/s\n"
+                                                    "@continuity Q = V*A_p   # flow area\n");
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 1);
+    const std::string expected =
+        fmt::format("{}:3:19: error: 'A_p' is not declared [undeclared]\n", file) +
+        "    @continuity Q = V*A_p\n"
+        "                      ╘a╛\n"
+        "  ▶ a  not declared\n"
+        "   · declare it with its unit or its dimension, as in 'A_p : <unit>' or "
+        "'A_p : [<dimension>]'\n"
+        "\n" +
+        tail("1 error, 0 warnings (1 formula in 1 file checked)");
+    CHECK(r.out == expected);
+}
+
+TEST_CASE("golden text: a syntax error marks its place and has no ledger") {
+    const temp_folder dir;
+    const auto file = dir.write("open.plumb", "Q, V : m\nQ = V*(V +\n");
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 2);
+    // The place is one past the line's last character: the mark stands there, over blank.
+    const std::string expected =
+        fmt::format("{}:2:11: error: expected a term after '+' or '-' [syntax]\n", file) +
+        "    Q = V*(V +\n"
+        "              ║\n"
+        "\n" +
+        tail("1 error, 0 warnings (0 formulas in 1 file checked)");
+    CHECK(r.out == expected);
+}
+
+TEST_CASE("golden text: a tab before the finding keeps the braces aligned") {
+    const temp_folder dir;
+    const auto file =
+        dir.write("tab.plumb", "a : m\nb : s\nc : m\n\tc = a +\tb\t# the tab is the point\n");
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 1);
+    // Tabs expand to the next multiple of 4 cells in the line and under it alike; the column
+    // in the location counts the tab as one character, as editors do. The file's indentation
+    // and the comment are not shown.
     const std::string expected =
         fmt::format("{}:4:10: error: cannot add 'b' to 'a': their dimensions differ "
                     "[sum-mismatch]\n",
                     file) +
-        "    4 |     c = a + b\n"
-        "      |         ~   ^\n"
-        "      note: 'b' is [T] (time)\n"
-        "      note: 'a' is [L] (length)\n"
+        "    c = a + b\n"
+        "        │   ║\n"
+        "        a   b\n"
+        "    a  [L]  length\n"
+        "  ▶ b  [T]  time    ◀ does not match\n"
         "\n" +
         tail("1 error, 0 warnings (1 formula in 1 file checked)");
     CHECK(r.out == expected);
 }
 
-TEST_CASE("a 5000-character line is shown as a window with the underline in place") {
+TEST_CASE("a 5000-character line is shown as a window with the braces in place") {
     const temp_folder dir;
     // Greek names before the finding, so byte and character offsets disagree thousands of
     // times.
@@ -782,7 +845,7 @@ TEST_CASE("a 5000-character line is shown as a window with the underline in plac
     CHECK(r.status == 1);
 
     const auto lines = lines_of(r.out);
-    REQUIRE(lines.size() >= 3);
+    REQUIRE(lines.size() >= 5);
     const std::size_t column = code_points(formula.substr(0, formula.find('b'))) + 1;
     CHECK(lines[0] == fmt::format("{}:5:{}: error: 'b' does not have the dimension of the other "
                                   "terms of this sum [sum-mismatch]",
@@ -793,28 +856,34 @@ TEST_CASE("a 5000-character line is shown as a window with the underline in plac
         CHECK(code_points(line) < 400);
     }
     const std::string source = lines[1];
-    const std::string marks = lines[2];
-    REQUIRE(source.rfind("    5 | ", 0) == 0);
-    REQUIRE(marks.rfind("      | ", 0) == 0);
-    const std::string shown = source.substr(8);
-    const std::string under = marks.substr(8);
+    const std::string braces = lines[2];
+    const std::string keys = lines[3];
+    REQUIRE(source.rfind("    ", 0) == 0);
+    REQUIRE(braces.rfind("    ", 0) == 0);
+    const std::string shown = source.substr(4);
+    const auto under = split_code_points(braces.substr(4));
     // Cut on both sides, marked with an ellipsis, and short enough for a terminal.
     CHECK(shown.rfind("…", 0) == 0);
     CHECK(shown.size() > 3);
     CHECK(shown.substr(shown.size() - 3) == "…");
     CHECK(code_points(shown) <= 150);
-    CHECK(code_points(under) <= 150);
-    // The '^' sits under the 'b', counting characters, not bytes.
-    const std::size_t caret = under.find('^');
-    REQUIRE(caret != std::string::npos);
+    CHECK(under.size() <= 150);
+    // The double tick sits under the 'b', counting characters, not bytes, with its key below.
     REQUIRE(shown.find('b') != std::string::npos);
-    CHECK(caret == code_points(shown.substr(0, shown.find('b'))));
-    CHECK(count_of(under, "^") == 1);
-    // The other terms in the window are underlined as well, each '~' under part of a 'ρ*a'.
+    const std::size_t b_cell = code_points(shown.substr(0, shown.find('b')));
+    REQUIRE(under.size() > b_cell);
+    CHECK(under[b_cell] == "║");
+    CHECK(std::count(under.begin(), under.end(), "║") == 1);
+    const auto key_cells = split_code_points(keys.substr(std::min<std::size_t>(4, keys.size())));
+    REQUIRE(key_cells.size() > b_cell);
+    const std::string key = key_cells[b_cell];
+    CHECK(key != " ");
+    CHECK(contains(r.out, fmt::format("\n  ▶ {}  [T]  time    ◀ does not match\n", key)));
+    // The other terms in the window have braces too, each cell under part of a 'ρ*a'.
     const auto shown_cells = split_code_points(shown);
-    CHECK(count_of(under.substr(0, caret), "~") >= 1);
-    for (std::size_t i = 0; i < caret; ++i)
-        if (under[i] == '~') {
+    CHECK(std::count(under.begin(), under.end(), "└") >= 1);
+    for (std::size_t i = 0; i < under.size(); ++i)
+        if (under[i] != " " && i != b_cell) {
             CAPTURE(i);
             REQUIRE(i < shown_cells.size());
             CHECK((shown_cells[i] == "ρ" || shown_cells[i] == "*" || shown_cells[i] == "a"));
@@ -833,7 +902,7 @@ TEST_CASE("colour: always, never, and auto on a pipe") {
     const auto british = run_plumb({"check", "--colour=always", file});
 
     CHECK(contains(always.out, "\x1b["));
-    CHECK(contains(always.out, "\x1b[1;31merror:\x1b[0m"));
+    CHECK(contains(always.out, "\x1b[1;38;5;202merror:\x1b[0m"));
     CHECK(contains(always.out, "\x1b[0m"));
     CHECK(always.out == british.out);
     CHECK_FALSE(contains(never.out, "\x1b"));
@@ -854,6 +923,22 @@ TEST_CASE("colour: always, never, and auto on a pipe") {
     }
     CHECK(stripped == never.out);
 
+    SUBCASE("the palette: orange error and odd term, steel-blue terms, grey rule id") {
+        const std::string expected =
+            fmt::format("{}:5:19: \x1b[1;38;5;202merror:\x1b[0m the two sides of this equation "
+                        "differ in dimension \x1b[38;5;245m[side-mismatch]\x1b[0m\n",
+                        file) +
+            "    @hydrostatic Δp = ρ*h\n"
+            "                 \x1b[38;5;109m└┘\x1b[0m   \x1b[38;5;202m╘b╛\x1b[0m\n"
+            "                 \x1b[38;5;109ma\x1b[0m\n"
+            "    a  \x1b[38;5;109m[M L^-1 T^-2]\x1b[0m  pressure or stress\n"
+            "  \x1b[38;5;202m▶ b  [M L^-2]       areal density       ◀ does not match\x1b[0m\n"
+            "\n"
+            "\x1b[1mplumb:\x1b[0m 1 error, 0 warnings (1 formula in 1 file checked)\n"
+            "\x1b[1;38;5;178mcaution:\x1b[0m " +
+            std::string(plumb::caution_text()) + "\n";
+        CHECK(always.out == expected);
+    }
     SUBCASE("NO_COLOR and TERM=dumb turn auto off; an explicit --color always wins") {
         const auto no_colour = run_plumb({"check", "--color", "auto", file}, {{"NO_COLOR", "1"}});
         CHECK_FALSE(contains(no_colour.out, "\x1b"));
@@ -1008,7 +1093,7 @@ TEST_CASE("dim: the dimension of an expression against a file's symbols") {
         CHECK(r.status == 1);
         CHECK(contains(r.out, "<query>:1:11: error: "));
         CHECK(contains(r.out, "[sum-mismatch]"));
-        CHECK(contains(r.out, "    1 | rho*g*h + D\n"));
+        CHECK(contains(r.out, "\n    rho*g*h + D\n"));
     }
     SUBCASE("without a file only numbers and built-ins are known") {
         const auto r = run_plumb({"dim", "2*pi"});
