@@ -664,10 +664,10 @@ TEST_CASE("bad usage exits 2 with a message on stderr") {
         CHECK(r.status == 2);
         CHECK(contains(r.err, fmt::format("did you mean 'plumb check {}'?", file)));
     }
-    SUBCASE("units with two filters") {
-        const auto r = run_plumb({"units", "Pa", "m"});
+    SUBCASE("catalogue with two filters") {
+        const auto r = run_plumb({"catalogue", "Pa", "m"});
         CHECK(r.status == 2);
-        CHECK(contains(r.err, "units takes at most one filter"));
+        CHECK(contains(r.err, "catalogue takes at most one filter"));
     }
 }
 
@@ -1110,34 +1110,98 @@ TEST_CASE("dim: the dimension of an expression against a file's symbols") {
     }
 }
 
-TEST_CASE("units: the table, and a filter on symbol or name") {
-    const auto all = run_plumb({"units"});
+TEST_CASE("catalogue: units grouped by quantity, exact factors, origins and sources") {
+    const auto all = run_plumb({"catalogue"});
     CHECK(all.status == 0);
-    CHECK(contains(all.out, "\nprefixes: "));
-    CHECK(contains(all.out, "k (kilo, 1e3)"));
+    CHECK(all.err.empty());
+    // Never float noise or C-style exponents.
+    CHECK_FALSE(contains(all.out, "e+"));
+    CHECK_FALSE(contains(all.out, "e-0"));
+    CHECK_FALSE(contains(all.out, "0000001"));
 
-    const auto pa = run_plumb({"units", "Pa"});
+    const auto lines = lines_of(all.out);
+    const auto row_of = [&](std::string_view start) -> std::string {
+        for (const auto& l : lines)
+            if (l.rfind(start, 0) == 0)
+                return l;
+        return {};
+    };
+    // One heading per quantity, with its dimension; each unit under its own.
+    const auto heading = [&](std::string_view h) {
+        return std::find_if(lines.begin(), lines.end(),
+                            [&](const std::string& l) { return l.rfind(h, 0) == 0; });
+    };
+    const auto pressure = heading("pressure or stress [M L^-1 T^-2]  SI: Pa");
+    const auto energy = heading("energy, work, heat or torque [M L^2 T^-2]");
+    const auto temperature = heading("temperature [Θ]  SI: K");
+    REQUIRE(pressure != lines.end());
+    REQUIRE(energy != lines.end());
+    REQUIRE(temperature != lines.end());
+    const auto psi = std::find_if(lines.begin(), lines.end(), [](const std::string& l) {
+        return l.rfind("  psi, psia ", 0) == 0;
+    });
+    REQUIRE(psi != lines.end());
+    CHECK(psi > pressure);
+    CHECK((psi < energy || energy < pressure));
+
+    // NIST SP 811 (2008), B.8: 1 psi = 6.894757E+03 Pa; lbf/in² exactly is
+    // 4.4482216152605 N / 0.00064516 m² = 8896443230521/1290320000 Pa, which does not end.
+    CHECK(contains(*psi, "pound-force per square inch"));
+    CHECK(contains(*psi, "6894.75729316… (8896443230521/1290320000)"));
+    CHECK(contains(*psi, "NIST SP 811 (2008)"));
+    // NIST SP 811 (2008), B.8: T/K = (t/°F + 459.67)/1.8, so the degree is 5/9 K and the
+    // scale's zero is 459.67 × 5/9 K = 45967/180 K.
+    const std::string fahrenheit = row_of("  °F");
+    CHECK(contains(fahrenheit, "0.555555555555… (5/9)"));
+    CHECK(contains(fahrenheit, "zero at 255.372222222… (45967/180) K"));
+    // SI Brochure 9th ed., Table 4 note: t/°C = T/K − 273.15.
+    CHECK(contains(row_of("  °C"), "zero at 273.15 K"));
+    // NIST SP 811 (2008), B.8: 1 ft = 0.3048 m exactly; a decimal that ends is shown whole.
+    CHECK(contains(row_of("  ft "), "  0.3048  "));
+    // Gauge pressure: common practice reads it against the standard atmosphere, 101325 Pa
+    // (NIST SP 811 (2008), B.8, atmosphere, standard).
+    CHECK(contains(row_of("  psig "), "zero at 101325 Pa"));
+    // A measured value keeps its published digits: CODATA 2018, 1.660 539 066 60 × 10^-27 kg.
+    CHECK(contains(row_of("  Da "), "1.66053906660 × 10^-27"));
+    CHECK(contains(row_of("  Pa "), "takes SI prefixes"));
+    // The prefixes come last (SI Brochure 9th ed., Table 7).
+    const auto prefixes = heading("SI prefixes");
+    REQUIRE(prefixes != lines.end());
+    CHECK(prefixes > psi);
+    CHECK(contains(all.out, "k  kilo    10^3"));
+}
+
+TEST_CASE("catalogue: the filter by symbol, name or quantity; a prefixed symbol resolves") {
+    const auto pa = run_plumb({"catalogue", "Pa"});
     CHECK(pa.status == 0);
-    const auto rows = lines_of(pa.out);
-    REQUIRE_FALSE(rows.empty());
-    bool pascal_row = false;
-    for (const auto& row : rows) {
-        CAPTURE(row);
-        CHECK(contains(row, "Pa"));
-        if (row.rfind("Pa ", 0) == 0) {
-            pascal_row = true;
-            CHECK(contains(row, "pascal"));
-            CHECK(contains(row, "[M L^-1 T^-2]"));
-            CHECK(contains(row, "takes SI prefixes"));
-        }
-    }
-    CHECK(pascal_row);
-    CHECK_FALSE(contains(pa.out, "prefixes: ")); // the prefix list only comes with the full table
-    CHECK(rows.size() < lines_of(all.out).size());
+    CHECK(contains(pa.out, "\n  Pa "));
+    CHECK_FALSE(contains(pa.out, "\n  psi"));       // "Pa" is no part of psi's symbol or name
+    CHECK_FALSE(contains(pa.out, "\nSI prefixes")); // the prefix list comes with the full table
+    CHECK(lines_of(pa.out).size() < lines_of(run_plumb({"catalogue"}).out).size());
 
-    const auto by_name = run_plumb({"units", "pascal"});
+    const auto by_name = run_plumb({"catalogue", "FAHRENHEIT"});
     CHECK(by_name.status == 0);
-    CHECK(contains(by_name.out, "Pa "));
+    CHECK(contains(by_name.out, "\n  °F, degF"));
+    CHECK_FALSE(contains(by_name.out, "\n  K "));
+
+    const auto by_quantity = run_plumb({"catalogue", "viscosity"});
+    CHECK(by_quantity.status == 0);
+    CHECK(contains(by_quantity.out, "dynamic viscosity [M L^-1 T^-1]"));
+    CHECK(contains(by_quantity.out, "\n  cP "));
+    CHECK(contains(by_quantity.out, "\n  cSt "));
+
+    // SI Brochure 9th ed., Table 7: kilo is 10^3.
+    const auto prefixed = run_plumb({"catalogue", "kPa"});
+    CHECK(prefixed.status == 0);
+    CHECK(contains(prefixed.out, "kPa  kilo + pascal  1000  "));
+
+    const auto none = run_plumb({"catalogue", "furlong"});
+    CHECK(none.status == 1);
+    CHECK(contains(none.err, "no unit matches 'furlong'"));
+
+    const auto old = run_plumb({"units"});
+    CHECK(old.status == 2);
+    CHECK(contains(old.err, "'plumb units' is now 'plumb catalogue'"));
 }
 
 TEST_CASE("rules: every rule id is listed with its summary") {

@@ -28,4 +28,10 @@ std::string render_groups_json(const check_report& report);
 // The JSON document described in the README ("plumb check --format json").
 std::string render_json(const check_report& report);
 
+// The built-in units grouped by the quantity they measure: symbols, name, exact factor to the
+// coherent SI unit, origin of an interval or gauge scale, source; then the SI prefixes. With a
+// filter, only units whose symbol, name or quantity contains it (a prefixed symbol such as
+// "kPa" is resolved). Empty when nothing matches.
+std::string render_catalogue(std::string_view filter, const text_style& style = {});
+
 } // namespace plumb

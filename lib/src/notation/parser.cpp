@@ -417,7 +417,7 @@ template <> struct action<nt::unit_symbol> {
             d.notes.push_back(
                 {fmt::format("define it on a line of its own, as in: unit {} = 0.3048 m (its size "
                              "in a known unit), or declare the symbol by its dimension, as in "
-                             "[L T^-1]; `plumb units` lists the built-in units",
+                             "[L T^-1]; `plumb catalogue` lists the built-in units",
                              text),
                  {}});
             s.units.push_back({{}, 1.0, nullptr, false});
