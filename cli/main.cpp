@@ -34,11 +34,13 @@ usage:
                                   give values
   plumb groups --vars 'F depends on rho, V, D, mu' [--repeating 'rho, V, D'] FILE...
                                   the groups of variables that FILEs declare
-  plumb units [TEXT]              list the built-in units (those matching TEXT)
+  plumb catalogue [TEXT]          the built-in units by quantity, with exact factors,
+                                  origins and sources (those whose symbol, name or
+                                  quantity contains TEXT)
   plumb rules                     list the rules and their ids
   plumb --version | --help
 
-options for check, groups and dim:
+options for check, groups, dim and catalogue:
   --dict FILE          read FILE's declarations before each file (repeatable)
   --format text|json   output format for check and groups (default: text)
   --study NAME         groups: only the study called NAME
@@ -275,44 +277,16 @@ int run_dim(const std::vector<std::string>& args) {
     return exit_clean;
 }
 
-int run_units(const std::vector<std::string>& args) {
+int run_catalogue(const std::vector<std::string>& args, colour_choice colour) {
     if (args.size() > 1)
-        return usage_error("units takes at most one filter text");
+        return usage_error("catalogue takes at most one filter text");
     const std::string filter = args.empty() ? "" : args.front();
-    const auto& table = plumb::unit_table::standard();
-    bool listed = false;
-    for (const auto& u : table.units()) {
-        if (!filter.empty() && u.symbol.find(filter) == std::string_view::npos &&
-            u.name.find(filter) == std::string_view::npos)
-            continue;
-        listed = true;
-        std::string scale;
-        if (u.scale == plumb::unit_scale::offset)
-            scale = fmt::format(" + {:g}", u.offset);
-        else if (u.scale == plumb::unit_scale::gauge)
-            scale = fmt::format(" + {:g} (gauge)", u.offset);
-        print(fmt::format("{:<8} {:<32} {:<22} = {}{} SI{}\n", u.symbol, u.name,
-                          u.dim().to_string(), u.exact_factor, scale,
-                          u.takes_prefixes ? ", takes SI prefixes" : ""));
+    const std::string listing = plumb::render_catalogue(filter, {use_colour(colour)});
+    if (listing.empty()) {
+        fmt::print(stderr, "plumb: no unit matches '{}'\n", filter);
+        return exit_findings;
     }
-    if (!filter.empty() && !listed) {
-        // A prefixed unit is no row of its own; show how it resolves.
-        const auto resolved = table.resolve(filter);
-        if (!resolved) {
-            fmt::print(stderr, "plumb: no unit matches '{}'\n", filter);
-            return exit_findings;
-        }
-        print(fmt::format("{:<8} {} {} = {:g} SI {}\n", filter,
-                          resolved->prefix ? resolved->prefix->name : "", resolved->unit->name,
-                          resolved->factor(), resolved->dim().to_string()));
-    }
-    if (filter.empty()) {
-        std::string prefixes;
-        for (const auto& p : table.prefixes())
-            prefixes += fmt::format("{}{} ({}, 1e{})", prefixes.empty() ? "" : ", ", p.symbol,
-                                    p.name, p.power_of_ten);
-        print(fmt::format("\nprefixes: {}\n", prefixes));
-    }
+    print(listing);
     return exit_clean;
 }
 
@@ -349,14 +323,20 @@ int run(int argc, char** argv) {
         return run_dim(args);
     if (command == "groups")
         return run_groups(args);
+    if (command == "catalogue") {
+        options opts;
+        if (auto error = parse_options(args, opts))
+            return usage_error(*error);
+        return run_catalogue(opts.positional, opts.colour);
+    }
     if (command == "units")
-        return run_units(args);
+        return usage_error("'plumb units' is now 'plumb catalogue'");
     if (command == "rules")
         return run_rules();
     if (command.size() > 6 && command.substr(command.size() - 6) == ".plumb")
         return usage_error(
             fmt::format("unknown command '{}'; did you mean 'plumb check {}'?", command, command));
-    for (const std::string_view known : {"check", "dim", "groups", "units", "rules"}) {
+    for (const std::string_view known : {"check", "dim", "groups", "catalogue", "rules"}) {
         // One slip of the keyboard ("chek", "unit") deserves a pointer, not just a refusal.
         const bool near =
             command.size() + 1 >= known.size() && command.size() <= known.size() + 1 &&

@@ -664,10 +664,10 @@ TEST_CASE("bad usage exits 2 with a message on stderr") {
         CHECK(r.status == 2);
         CHECK(contains(r.err, fmt::format("did you mean 'plumb check {}'?", file)));
     }
-    SUBCASE("units with two filters") {
-        const auto r = run_plumb({"units", "Pa", "m"});
+    SUBCASE("catalogue with two filters") {
+        const auto r = run_plumb({"catalogue", "Pa", "m"});
         CHECK(r.status == 2);
-        CHECK(contains(r.err, "units takes at most one filter"));
+        CHECK(contains(r.err, "catalogue takes at most one filter"));
     }
 }
 
@@ -710,16 +710,19 @@ TEST_CASE("golden text: a term of a sum with another dimension") {
     const auto file = dir.write("head.plumb", sum_file);
     const auto r = run_plumb({"check", "--color", "never", file});
     CHECK(r.status == 1);
-    // The underlines sit under the terms although 'ρ' takes two bytes: one column per
-    // character.
+    // The braces sit under the terms although 'ρ' takes two bytes: one cell per character.
+    // The odd term, one character wide, has a double tick and its key on the line below; the
+    // notes that only repeated the dimensions are left to the ledger.
     const std::string expected =
         fmt::format("{}:7:33: error: 'p' (static pressure) does not have the dimension of the "
                     "other terms of this sum [sum-mismatch]\n",
                     file) +
-        "    7 | @head H = p/(ρ*g) + V^2/(2*g) + p\n"
-        "      |           ~~~~~~~   ~~~~~~~~~   ^\n"
-        "      note: 'p' (static pressure) is [M L^-1 T^-2] (pressure or stress)\n"
-        "      note: the other terms are [L] (length): 'p/(ρ*g)', 'V^2/(2*g)'\n"
+        "    @head H = p/(ρ*g) + V^2/(2*g) + p\n"
+        "              └──a──┘   └───b───┘   ║\n"
+        "                                    c\n"
+        "    a  [L]            length\n"
+        "    b  [L]            length\n"
+        "  ▶ c  [M L^-1 T^-2]  pressure or stress  ◀ does not match\n"
         "\n" +
         tail("1 error, 0 warnings (1 formula in 1 file checked)");
     CHECK(r.out == expected);
@@ -735,37 +738,97 @@ TEST_CASE("golden text: the two sides of an equation differ") {
         fmt::format("{}:5:19: error: the two sides of this equation differ in dimension "
                     "[side-mismatch]\n",
                     file) +
-        "    5 | @hydrostatic Δp = ρ*h\n"
-        "      |              ~~   ^~~\n"
-        "      note: left side 'Δp' (pressure difference) is [M L^-1 T^-2] (pressure or "
-        "stress)\n"
-        "      note: right side 'ρ*h' is [M L^-2] (areal density)\n"
+        "    @hydrostatic Δp = ρ*h\n"
+        "                 └┘   ╘b╛\n"
+        "                 a\n"
+        "    a  [M L^-1 T^-2]  pressure or stress\n"
+        "  ▶ b  [M L^-2]       areal density       ◀ does not match\n"
         "\n" +
         tail("1 error, 0 warnings (1 formula in 1 file checked)");
     CHECK(r.out == expected);
 }
 
-TEST_CASE("golden text: a tab before the finding keeps the underline aligned") {
+TEST_CASE("golden text: a term of two-byte characters beside another") {
     const temp_folder dir;
-    const auto file = dir.write("tab.plumb", "a : m\nb : s\nc : m\n\tc = a +\tb\n");
+    const auto file = dir.write("viscosity.plumb", "ν : m^2/s \"kinematic viscosity\"\n"
+                                                   "μ : Pa*s\n"
+                                                   "ρ : kg/m^3\n"
+                                                   "τ_w : Pa \"wall shear stress\"\n"
+                                                   "@viscosity ν = μ/ρ + τ_w\n");
     const auto r = run_plumb({"check", "--color", "never", file});
     CHECK(r.status == 1);
-    // Tabs expand to the next multiple of 4 cells in the line and in the underline alike; the
-    // column in the location counts the tab as one character, as editors do.
+    // Every name is Greek: two bytes a character, one cell each.
+    const std::string expected =
+        fmt::format("{}:5:22: error: cannot add 'τ_w' (wall shear stress) to 'μ/ρ': their "
+                    "dimensions differ [sum-mismatch]\n",
+                    file) +
+        "    @viscosity ν = μ/ρ + τ_w\n"
+        "                   └a┘   ╘b╛\n"
+        "    a  [L^2 T^-1]     kinematic viscosity or diffusivity\n"
+        "  ▶ b  [M L^-1 T^-2]  pressure or stress                  ◀ does not match\n"
+        "\n" +
+        tail("1 error, 0 warnings (1 formula in 1 file checked)");
+    CHECK(r.out == expected);
+}
+
+TEST_CASE("golden text: an undeclared symbol is the only mark, and the comment is dropped") {
+    const temp_folder dir;
+    const auto file = dir.write("continuity.plumb", "Q : m^3/s\n"
+                                                    "V : m/s\n"
+                                                    "@continuity Q = V*A_p   # flow area\n");
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 1);
+    const std::string expected =
+        fmt::format("{}:3:19: error: 'A_p' is not declared [undeclared]\n", file) +
+        "    @continuity Q = V*A_p\n"
+        "                      ╘a╛\n"
+        "  ▶ a  not declared\n"
+        "   · declare it with its unit or its dimension, as in 'A_p : <unit>' or "
+        "'A_p : [<dimension>]'\n"
+        "\n" +
+        tail("1 error, 0 warnings (1 formula in 1 file checked)");
+    CHECK(r.out == expected);
+}
+
+TEST_CASE("golden text: a syntax error marks its place and has no ledger") {
+    const temp_folder dir;
+    const auto file = dir.write("open.plumb", "Q, V : m\nQ = V*(V +\n");
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 2);
+    // The place is one past the line's last character: the mark stands there, over blank.
+    const std::string expected =
+        fmt::format("{}:2:11: error: expected a term after '+' or '-' [syntax]\n", file) +
+        "    Q = V*(V +\n"
+        "              ║\n"
+        "\n" +
+        tail("1 error, 0 warnings (0 formulas in 1 file checked)");
+    CHECK(r.out == expected);
+}
+
+TEST_CASE("golden text: a tab before the finding keeps the braces aligned") {
+    const temp_folder dir;
+    const auto file =
+        dir.write("tab.plumb", "a : m\nb : s\nc : m\n\tc = a +\tb\t# the tab is the point\n");
+    const auto r = run_plumb({"check", "--color", "never", file});
+    CHECK(r.status == 1);
+    // Tabs expand to the next multiple of 4 cells in the line and under it alike; the column
+    // in the location counts the tab as one character, as editors do. The file's indentation
+    // and the comment are not shown.
     const std::string expected =
         fmt::format("{}:4:10: error: cannot add 'b' to 'a': their dimensions differ "
                     "[sum-mismatch]\n",
                     file) +
-        "    4 |     c = a + b\n"
-        "      |         ~   ^\n"
-        "      note: 'b' is [T] (time)\n"
-        "      note: 'a' is [L] (length)\n"
+        "    c = a + b\n"
+        "        │   ║\n"
+        "        a   b\n"
+        "    a  [L]  length\n"
+        "  ▶ b  [T]  time    ◀ does not match\n"
         "\n" +
         tail("1 error, 0 warnings (1 formula in 1 file checked)");
     CHECK(r.out == expected);
 }
 
-TEST_CASE("a 5000-character line is shown as a window with the underline in place") {
+TEST_CASE("a 5000-character line is shown as a window with the braces in place") {
     const temp_folder dir;
     // Greek names before the finding, so byte and character offsets disagree thousands of
     // times.
@@ -782,7 +845,7 @@ TEST_CASE("a 5000-character line is shown as a window with the underline in plac
     CHECK(r.status == 1);
 
     const auto lines = lines_of(r.out);
-    REQUIRE(lines.size() >= 3);
+    REQUIRE(lines.size() >= 5);
     const std::size_t column = code_points(formula.substr(0, formula.find('b'))) + 1;
     CHECK(lines[0] == fmt::format("{}:5:{}: error: 'b' does not have the dimension of the other "
                                   "terms of this sum [sum-mismatch]",
@@ -793,28 +856,34 @@ TEST_CASE("a 5000-character line is shown as a window with the underline in plac
         CHECK(code_points(line) < 400);
     }
     const std::string source = lines[1];
-    const std::string marks = lines[2];
-    REQUIRE(source.rfind("    5 | ", 0) == 0);
-    REQUIRE(marks.rfind("      | ", 0) == 0);
-    const std::string shown = source.substr(8);
-    const std::string under = marks.substr(8);
+    const std::string braces = lines[2];
+    const std::string keys = lines[3];
+    REQUIRE(source.rfind("    ", 0) == 0);
+    REQUIRE(braces.rfind("    ", 0) == 0);
+    const std::string shown = source.substr(4);
+    const auto under = split_code_points(braces.substr(4));
     // Cut on both sides, marked with an ellipsis, and short enough for a terminal.
     CHECK(shown.rfind("…", 0) == 0);
     CHECK(shown.size() > 3);
     CHECK(shown.substr(shown.size() - 3) == "…");
     CHECK(code_points(shown) <= 150);
-    CHECK(code_points(under) <= 150);
-    // The '^' sits under the 'b', counting characters, not bytes.
-    const std::size_t caret = under.find('^');
-    REQUIRE(caret != std::string::npos);
+    CHECK(under.size() <= 150);
+    // The double tick sits under the 'b', counting characters, not bytes, with its key below.
     REQUIRE(shown.find('b') != std::string::npos);
-    CHECK(caret == code_points(shown.substr(0, shown.find('b'))));
-    CHECK(count_of(under, "^") == 1);
-    // The other terms in the window are underlined as well, each '~' under part of a 'ρ*a'.
+    const std::size_t b_cell = code_points(shown.substr(0, shown.find('b')));
+    REQUIRE(under.size() > b_cell);
+    CHECK(under[b_cell] == "║");
+    CHECK(std::count(under.begin(), under.end(), "║") == 1);
+    const auto key_cells = split_code_points(keys.substr(std::min<std::size_t>(4, keys.size())));
+    REQUIRE(key_cells.size() > b_cell);
+    const std::string key = key_cells[b_cell];
+    CHECK(key != " ");
+    CHECK(contains(r.out, fmt::format("\n  ▶ {}  [T]  time    ◀ does not match\n", key)));
+    // The other terms in the window have braces too, each cell under part of a 'ρ*a'.
     const auto shown_cells = split_code_points(shown);
-    CHECK(count_of(under.substr(0, caret), "~") >= 1);
-    for (std::size_t i = 0; i < caret; ++i)
-        if (under[i] == '~') {
+    CHECK(std::count(under.begin(), under.end(), "└") >= 1);
+    for (std::size_t i = 0; i < under.size(); ++i)
+        if (under[i] != " " && i != b_cell) {
             CAPTURE(i);
             REQUIRE(i < shown_cells.size());
             CHECK((shown_cells[i] == "ρ" || shown_cells[i] == "*" || shown_cells[i] == "a"));
@@ -833,7 +902,7 @@ TEST_CASE("colour: always, never, and auto on a pipe") {
     const auto british = run_plumb({"check", "--colour=always", file});
 
     CHECK(contains(always.out, "\x1b["));
-    CHECK(contains(always.out, "\x1b[1;31merror:\x1b[0m"));
+    CHECK(contains(always.out, "\x1b[1;38;5;202merror:\x1b[0m"));
     CHECK(contains(always.out, "\x1b[0m"));
     CHECK(always.out == british.out);
     CHECK_FALSE(contains(never.out, "\x1b"));
@@ -854,6 +923,22 @@ TEST_CASE("colour: always, never, and auto on a pipe") {
     }
     CHECK(stripped == never.out);
 
+    SUBCASE("the palette: orange error and odd term, steel-blue terms, grey rule id") {
+        const std::string expected =
+            fmt::format("{}:5:19: \x1b[1;38;5;202merror:\x1b[0m the two sides of this equation "
+                        "differ in dimension \x1b[38;5;245m[side-mismatch]\x1b[0m\n",
+                        file) +
+            "    @hydrostatic Δp = ρ*h\n"
+            "                 \x1b[38;5;109m└┘\x1b[0m   \x1b[38;5;202m╘b╛\x1b[0m\n"
+            "                 \x1b[38;5;109ma\x1b[0m\n"
+            "    a  \x1b[38;5;109m[M L^-1 T^-2]\x1b[0m  pressure or stress\n"
+            "  \x1b[38;5;202m▶ b  [M L^-2]       areal density       ◀ does not match\x1b[0m\n"
+            "\n"
+            "\x1b[1mplumb:\x1b[0m 1 error, 0 warnings (1 formula in 1 file checked)\n"
+            "\x1b[1;38;5;178mcaution:\x1b[0m " +
+            std::string(plumb::caution_text()) + "\n";
+        CHECK(always.out == expected);
+    }
     SUBCASE("NO_COLOR and TERM=dumb turn auto off; an explicit --color always wins") {
         const auto no_colour = run_plumb({"check", "--color", "auto", file}, {{"NO_COLOR", "1"}});
         CHECK_FALSE(contains(no_colour.out, "\x1b"));
@@ -1008,7 +1093,7 @@ TEST_CASE("dim: the dimension of an expression against a file's symbols") {
         CHECK(r.status == 1);
         CHECK(contains(r.out, "<query>:1:11: error: "));
         CHECK(contains(r.out, "[sum-mismatch]"));
-        CHECK(contains(r.out, "    1 | rho*g*h + D\n"));
+        CHECK(contains(r.out, "\n    rho*g*h + D\n"));
     }
     SUBCASE("without a file only numbers and built-ins are known") {
         const auto r = run_plumb({"dim", "2*pi"});
@@ -1025,34 +1110,98 @@ TEST_CASE("dim: the dimension of an expression against a file's symbols") {
     }
 }
 
-TEST_CASE("units: the table, and a filter on symbol or name") {
-    const auto all = run_plumb({"units"});
+TEST_CASE("catalogue: units grouped by quantity, exact factors, origins and sources") {
+    const auto all = run_plumb({"catalogue"});
     CHECK(all.status == 0);
-    CHECK(contains(all.out, "\nprefixes: "));
-    CHECK(contains(all.out, "k (kilo, 1e3)"));
+    CHECK(all.err.empty());
+    // Never float noise or C-style exponents.
+    CHECK_FALSE(contains(all.out, "e+"));
+    CHECK_FALSE(contains(all.out, "e-0"));
+    CHECK_FALSE(contains(all.out, "0000001"));
 
-    const auto pa = run_plumb({"units", "Pa"});
+    const auto lines = lines_of(all.out);
+    const auto row_of = [&](std::string_view start) -> std::string {
+        for (const auto& l : lines)
+            if (l.rfind(start, 0) == 0)
+                return l;
+        return {};
+    };
+    // One heading per quantity, with its dimension; each unit under its own.
+    const auto heading = [&](std::string_view h) {
+        return std::find_if(lines.begin(), lines.end(),
+                            [&](const std::string& l) { return l.rfind(h, 0) == 0; });
+    };
+    const auto pressure = heading("pressure or stress [M L^-1 T^-2]  SI: Pa");
+    const auto energy = heading("energy, work, heat or torque [M L^2 T^-2]");
+    const auto temperature = heading("temperature [Θ]  SI: K");
+    REQUIRE(pressure != lines.end());
+    REQUIRE(energy != lines.end());
+    REQUIRE(temperature != lines.end());
+    const auto psi = std::find_if(lines.begin(), lines.end(), [](const std::string& l) {
+        return l.rfind("  psi, psia ", 0) == 0;
+    });
+    REQUIRE(psi != lines.end());
+    CHECK(psi > pressure);
+    CHECK((psi < energy || energy < pressure));
+
+    // NIST SP 811 (2008), B.8: 1 psi = 6.894757E+03 Pa; lbf/in² exactly is
+    // 4.4482216152605 N / 0.00064516 m² = 8896443230521/1290320000 Pa, which does not end.
+    CHECK(contains(*psi, "pound-force per square inch"));
+    CHECK(contains(*psi, "6894.75729316… (8896443230521/1290320000)"));
+    CHECK(contains(*psi, "NIST SP 811 (2008)"));
+    // NIST SP 811 (2008), B.8: T/K = (t/°F + 459.67)/1.8, so the degree is 5/9 K and the
+    // scale's zero is 459.67 × 5/9 K = 45967/180 K.
+    const std::string fahrenheit = row_of("  °F");
+    CHECK(contains(fahrenheit, "0.555555555555… (5/9)"));
+    CHECK(contains(fahrenheit, "zero at 255.372222222… (45967/180) K"));
+    // SI Brochure 9th ed., Table 4 note: t/°C = T/K − 273.15.
+    CHECK(contains(row_of("  °C"), "zero at 273.15 K"));
+    // NIST SP 811 (2008), B.8: 1 ft = 0.3048 m exactly; a decimal that ends is shown whole.
+    CHECK(contains(row_of("  ft "), "  0.3048  "));
+    // Gauge pressure: common practice reads it against the standard atmosphere, 101325 Pa
+    // (NIST SP 811 (2008), B.8, atmosphere, standard).
+    CHECK(contains(row_of("  psig "), "zero at 101325 Pa"));
+    // A measured value keeps its published digits: CODATA 2018, 1.660 539 066 60 × 10^-27 kg.
+    CHECK(contains(row_of("  Da "), "1.66053906660 × 10^-27"));
+    CHECK(contains(row_of("  Pa "), "takes SI prefixes"));
+    // The prefixes come last (SI Brochure 9th ed., Table 7).
+    const auto prefixes = heading("SI prefixes");
+    REQUIRE(prefixes != lines.end());
+    CHECK(prefixes > psi);
+    CHECK(contains(all.out, "k  kilo    10^3"));
+}
+
+TEST_CASE("catalogue: the filter by symbol, name or quantity; a prefixed symbol resolves") {
+    const auto pa = run_plumb({"catalogue", "Pa"});
     CHECK(pa.status == 0);
-    const auto rows = lines_of(pa.out);
-    REQUIRE_FALSE(rows.empty());
-    bool pascal_row = false;
-    for (const auto& row : rows) {
-        CAPTURE(row);
-        CHECK(contains(row, "Pa"));
-        if (row.rfind("Pa ", 0) == 0) {
-            pascal_row = true;
-            CHECK(contains(row, "pascal"));
-            CHECK(contains(row, "[M L^-1 T^-2]"));
-            CHECK(contains(row, "takes SI prefixes"));
-        }
-    }
-    CHECK(pascal_row);
-    CHECK_FALSE(contains(pa.out, "prefixes: ")); // the prefix list only comes with the full table
-    CHECK(rows.size() < lines_of(all.out).size());
+    CHECK(contains(pa.out, "\n  Pa "));
+    CHECK_FALSE(contains(pa.out, "\n  psi"));       // "Pa" is no part of psi's symbol or name
+    CHECK_FALSE(contains(pa.out, "\nSI prefixes")); // the prefix list comes with the full table
+    CHECK(lines_of(pa.out).size() < lines_of(run_plumb({"catalogue"}).out).size());
 
-    const auto by_name = run_plumb({"units", "pascal"});
+    const auto by_name = run_plumb({"catalogue", "FAHRENHEIT"});
     CHECK(by_name.status == 0);
-    CHECK(contains(by_name.out, "Pa "));
+    CHECK(contains(by_name.out, "\n  °F, degF"));
+    CHECK_FALSE(contains(by_name.out, "\n  K "));
+
+    const auto by_quantity = run_plumb({"catalogue", "viscosity"});
+    CHECK(by_quantity.status == 0);
+    CHECK(contains(by_quantity.out, "dynamic viscosity [M L^-1 T^-1]"));
+    CHECK(contains(by_quantity.out, "\n  cP "));
+    CHECK(contains(by_quantity.out, "\n  cSt "));
+
+    // SI Brochure 9th ed., Table 7: kilo is 10^3.
+    const auto prefixed = run_plumb({"catalogue", "kPa"});
+    CHECK(prefixed.status == 0);
+    CHECK(contains(prefixed.out, "kPa  kilo + pascal  1000  "));
+
+    const auto none = run_plumb({"catalogue", "furlong"});
+    CHECK(none.status == 1);
+    CHECK(contains(none.err, "no unit matches 'furlong'"));
+
+    const auto old = run_plumb({"units"});
+    CHECK(old.status == 2);
+    CHECK(contains(old.err, "'plumb units' is now 'plumb catalogue'"));
 }
 
 TEST_CASE("rules: every rule id is listed with its summary") {

@@ -18,25 +18,31 @@ struct location {
     span range{};
 };
 
-// A term that takes part in a disagreement, with its dimension: renderers print one note for
-// each, and JSON lists them.
+// A term that takes part in a disagreement, with its dimension: the text excerpt draws a brace
+// under it and a ledger row for it, and JSON lists them.
 struct term {
     location where;
     std::string text; // the term as written (continuation lines folded)
     dimension dim;
+    bool differs = false; // the odd one out: its dimension does not match the others'
 };
 
 // A secondary remark, optionally at a place of its own ("first declared here").
 struct note {
     std::string message;
     location where;
+    // Only repeats the terms' dimensions, which the text excerpt's ledger already shows; text
+    // leaves it out, JSON keeps it.
+    bool restates_terms = false;
 };
 
 struct diagnostic {
     severity level = severity::error;
     std::string rule;    // stable rule id, see rules.hpp
     std::string message; // lower case, no trailing period
-    location where;      // primary range: underlined with ^~~~
+    location where;      // primary range: marked in the excerpt
+    // A few words for the primary range's ledger row when no term covers it ("not declared").
+    std::string mark_label;
     std::vector<term> terms;
     std::vector<note> notes;
 };

@@ -1,4 +1,4 @@
-// Renderers: diagnostics as compiler-style text or as one JSON document.
+// Renderers: diagnostics as text for people or as one JSON document; the unit catalogue.
 #pragma once
 
 #include "plumb/check.hpp"
@@ -11,8 +11,8 @@ struct text_style {
     bool colour = false;
 };
 
-// GNU form: "file:line:col: severity: message [rule]", the source line with the range
-// underlined, then notes with each disagreeing term's dimension.
+// GNU form: "file:line:col: severity: message [rule]", then the formula once with a keyed
+// brace under each term that matters and a ledger of their dimensions, then the notes.
 std::string render_text(const diagnostic& d, const text_style& style = {});
 // All diagnostics followed by a one-line summary and the caution.
 std::string render_text(const check_report& report, const text_style& style = {});
@@ -27,5 +27,11 @@ std::string render_groups_json(const check_report& report);
 
 // The JSON document described in the README ("plumb check --format json").
 std::string render_json(const check_report& report);
+
+// The built-in units grouped by the quantity they measure: symbols, name, exact factor to the
+// coherent SI unit, origin of an interval or gauge scale, source; then the SI prefixes. With a
+// filter, only units whose symbol, name or quantity contains it (a prefixed symbol such as
+// "kPa" is resolved). Empty when nothing matches.
+std::string render_catalogue(std::string_view filter, const text_style& style = {});
 
 } // namespace plumb

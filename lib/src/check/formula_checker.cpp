@@ -209,11 +209,12 @@ class checker {
         for (std::size_t i = 0; i < sides.size(); ++i) {
             if (!sides[i].type.known)
                 continue;
-            add_term(d, sides[i]);
+            add_term(d, sides[i], std::find(a.odd.begin(), a.odd.end(), i) != a.odd.end());
             const char* position = sides.size() == 2 ? (i == 0 ? "left side " : "right side ") : "";
             d.notes.push_back({fmt::format("{}{} is {}", position, quote(sides[i].node),
                                            describe(sides[i].type.dim)),
-                               {}});
+                               {},
+                               true});
         }
     }
 
@@ -261,10 +262,11 @@ class checker {
         return out_.back();
     }
 
-    void add_term(diagnostic& d, const operand& op) const {
+    void add_term(diagnostic& d, const operand& op, bool differs = false) const {
         d.terms.push_back({{file_.source, file_.nodes[op.node].range},
                            display_text(file_.nodes[op.node].range),
-                           op.type.dim});
+                           op.type.dim,
+                           differs});
     }
 
     // Notes for operands that disagree: each odd one with its dimension, then the rest.
@@ -275,10 +277,11 @@ class checker {
         constexpr std::size_t max_listed = 8;
         constexpr std::size_t max_odd = 32;
         for (std::size_t k = 0; k < a.odd.size() && k < max_odd; ++k) {
-            add_term(d, ops[a.odd[k]]);
+            add_term(d, ops[a.odd[k]], true);
             d.notes.push_back({fmt::format("{} is {}", quote(ops[a.odd[k]].node),
                                            describe(ops[a.odd[k]].type.dim)),
-                               {}});
+                               {},
+                               true});
         }
         if (a.odd.size() > max_odd)
             d.notes.push_back({fmt::format("and {} more that differ", a.odd.size() - max_odd), {}});
@@ -305,13 +308,16 @@ class checker {
         }
         if (agreeing_count > max_listed)
             agreeing.push_back(fmt::format("and {} more", agreeing_count - max_listed));
+        // With more than are listed, the note's count is news the terms do not carry.
+        const bool restates = agreeing_count <= max_listed;
         if (agreeing_count == 1)
             d.notes.push_back(
-                {fmt::format("{} is {}", agreeing.front(), describe(*a.reference)), {}});
+                {fmt::format("{} is {}", agreeing.front(), describe(*a.reference)), {}, restates});
         else if (agreeing_count > 1)
             d.notes.push_back({fmt::format("the other {} are {}: {}", others,
                                            describe(*a.reference), fmt::join(agreeing, ", ")),
-                               {}});
+                               {},
+                               restates});
     }
 
     typed eval_quantity(const syntax::expr_node& n) const {
@@ -343,6 +349,7 @@ class checker {
                 throw symbol_not_yet_declared{};
             diagnostic& d =
                 report(rules::undeclared, fmt::format("'{}' is not declared", name), n.range);
+            d.mark_label = "not declared";
             const auto near = symbols_.nearest(name);
             if (!near.empty()) {
                 std::string list;
@@ -640,6 +647,7 @@ class checker {
                    fmt::format("{} is on the {} scale, whose zero is arbitrary, so it cannot be {}",
                                quote(node), unit.symbol, where),
                    file_.nodes[node].range);
+        d.mark_label = fmt::format("on the {} scale, whose zero is arbitrary", unit.symbol);
         d.notes.push_back(
             {temperature
                  ? fmt::format("gas laws, Arrhenius and radiation need absolute temperature: "
@@ -718,7 +726,7 @@ class checker {
                                    file_.nodes[exponent_node].range);
             add_term(d, {exponent_node, exponent});
             d.notes.push_back(
-                {fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}});
+                {fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}, true});
             return unknown_type();
         }
         if (!base.known || !exponent.known)
@@ -745,7 +753,8 @@ class checker {
                     quote(base_node), quote(exponent_node), why),
                 file_.nodes[exponent_node].range);
             add_term(d, {base_node, base});
-            d.notes.push_back({fmt::format("{} is {}", quote(base_node), describe(base.dim)), {}});
+            d.notes.push_back(
+                {fmt::format("{} is {}", quote(base_node), describe(base.dim)), {}, true});
             d.notes.push_back({"the dimension of the power would depend on the exponent's value; "
                                "make the base dimensionless (divide by a reference value) first",
                                {}});
@@ -976,10 +985,11 @@ class checker {
                 for (std::size_t i = 1; i < 4; ++i) {
                     if (!args[i].type.known)
                         continue;
-                    add_term(d, args[i]);
+                    add_term(d, args[i], &args[i] == odd);
                     d.notes.push_back(
                         {fmt::format("{} is {}", quote(args[i].node), describe(args[i].type.dim)),
-                         {}});
+                         {},
+                         true});
                 }
                 return unknown_type();
             }

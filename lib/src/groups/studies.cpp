@@ -54,6 +54,7 @@ class study_worker {
             if (entry == nullptr) {
                 diagnostic& d = report(out_, rules::undeclared,
                                        fmt::format("'{}' is not declared", name), at(v));
+                d.mark_label = "not declared";
                 d.notes.push_back({"a study's variables are declared like any symbol, with their "
                                    "dimension or unit",
                                    {}});
