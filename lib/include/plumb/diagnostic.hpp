@@ -32,6 +32,15 @@ struct note {
     location where;
 };
 
+// Why a reviewed finding is accepted: an inline mark on its line or an entry of the project's
+// file of accepted findings. An accepted finding is still reported, with its reason; it only
+// stops failing the run.
+struct acceptance {
+    std::string reason;
+    location mark; // the inline mark, or the entry in the file of accepted findings
+    bool by_inline_mark = true;
+};
+
 struct diagnostic {
     severity level = severity::error;
     std::string rule;    // stable rule id, see rules.hpp
@@ -39,6 +48,7 @@ struct diagnostic {
     location where;      // primary range: underlined with ^~~~
     std::vector<term> terms;
     std::vector<note> notes;
+    std::optional<acceptance> accepted;
 };
 
 } // namespace plumb
