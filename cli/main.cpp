@@ -268,8 +268,8 @@ std::optional<std::string> prepare_project(options& opts, project_run& run,
         if (!fs::is_regular_file(*settings_path, ec))
             return fmt::format("--settings: cannot read '{}'", opts.settings_file);
     } else {
-        settings_path = plumb::find_settings(opts.positional.empty() ? fs::path(".")
-                                                                     : fs::path(opts.positional[0]));
+        settings_path = plumb::find_settings(
+            opts.positional.empty() ? fs::path(".") : fs::path(opts.positional[0]));
     }
     plumb::check_options& check = opts.check;
     if (settings_path) {
@@ -373,8 +373,7 @@ int run_accept(const std::vector<std::string>& args) {
     out << text;
     out.close();
     if (!out)
-        return usage_error(
-            fmt::format("cannot write '{}'", opts.check.accepted_findings.string()));
+        return usage_error(fmt::format("cannot write '{}'", opts.check.accepted_findings.string()));
     print(fmt::format("plumb: {} new finding{} accepted in {} (with earlier entries kept); "
                       "stale entries about the checked files removed\n",
                       to_accept, to_accept == 1 ? "" : "s", opts.check.accepted_findings.string()));

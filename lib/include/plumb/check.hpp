@@ -40,7 +40,7 @@ struct check_options {
 // One formula as the sign-off report lists it.
 struct formula_record {
     location where;
-    std::string label;                        // without '@'; empty when none
+    std::string label;                           // without '@'; empty when none
     std::vector<std::optional<dimension>> sides; // empty optional where a side has an error
     std::vector<std::string> relations;          // "=", "<=", ... between the sides
 };

@@ -89,8 +89,8 @@ std::vector<entry> read_entries(const source_file& file, std::vector<diagnostic>
         e.where = place(file, t->source());
         bool well_formed = true;
         for (const auto& [key, value] : *t) {
-            const bool known = std::find(entry_keys.begin(), entry_keys.end(), key.str()) !=
-                               entry_keys.end();
+            const bool known =
+                std::find(entry_keys.begin(), entry_keys.end(), key.str()) != entry_keys.end();
             if (!known || !value.is_string()) {
                 out.push_back(problem(
                     rules::acceptance_problem, severity::error,
@@ -114,10 +114,10 @@ std::vector<entry> read_entries(const source_file& file, std::vector<diagnostic>
             else
                 e.finding = text;
         }
-        for (const auto& [name, value] : {std::pair<std::string_view, const std::string*>{
-                                              "file", &e.file},
-                                          {"rule", &e.rule},
-                                          {"statement", &e.statement}})
+        for (const auto& [name, value] :
+             {std::pair<std::string_view, const std::string*>{"file", &e.file},
+              {"rule", &e.rule},
+              {"statement", &e.statement}})
             if (value->empty() && well_formed) {
                 out.push_back(problem(rules::acceptance_problem, severity::error,
                                       fmt::format("this accepted finding has no '{}'", name),
@@ -209,7 +209,8 @@ void apply_accepted_findings(check_report& report, const fs::path& file,
                                            "but there is no such finding any more",
                                            e.rule, e.statement, e.file),
                                e.where);
-        d.notes.push_back({"remove the entry, or run 'plumb accept' again to rewrite the file", {}});
+        d.notes.push_back(
+            {"remove the entry, or run 'plumb accept' again to rewrite the file", {}});
         found.push_back(std::move(d));
     }
     report.diagnostics.insert(report.diagnostics.end(), std::make_move_iterator(found.begin()),

@@ -75,7 +75,8 @@ std::vector<mark> read_marks(const source_file& file, std::vector<diagnostic>& o
         if (hash == std::string_view::npos)
             continue;
         const std::string_view comment = trim(text.substr(hash + 1));
-        if (comment.substr(0, mark_word.size()) != mark_word || comment.size() == mark_word.size() ||
+        if (comment.substr(0, mark_word.size()) != mark_word ||
+            comment.size() == mark_word.size() ||
             (comment[mark_word.size()] != ' ' && comment[mark_word.size()] != '\t'))
             continue;
         const std::string_view body = trim(comment.substr(mark_word.size()));
@@ -87,7 +88,8 @@ std::vector<mark> read_marks(const source_file& file, std::vector<diagnostic>& o
         if (!is_rule_id(first_word) && !looks_like_rule_id(first_word))
             continue;
         const std::uint32_t begin = file.line_start(line) + static_cast<std::uint32_t>(hash);
-        const location where{&file, {begin, begin + static_cast<std::uint32_t>(text.size() - hash)}};
+        const location where{&file,
+                             {begin, begin + static_cast<std::uint32_t>(text.size() - hash)}};
         mark m;
         m.where = where;
         m.lines = logical_line_around(file, line);
@@ -102,9 +104,9 @@ std::vector<mark> read_marks(const source_file& file, std::vector<diagnostic>& o
             if (id == rules::acceptance_problem || id == rules::stale_acceptance ||
                 !is_rule_id(id)) {
                 const std::string near = nearest_rule(id);
-                diagnostic d = problem(
-                    rules::acceptance_problem, severity::error,
-                    fmt::format("'{}' is not a rule that a mark can accept", id), where);
+                diagnostic d =
+                    problem(rules::acceptance_problem, severity::error,
+                            fmt::format("'{}' is not a rule that a mark can accept", id), where);
                 d.notes.push_back({near.empty() || near == id
                                        ? std::string("'plumb rules' lists the rule ids")
                                        : fmt::format("did you mean '{}'?", near),
@@ -163,12 +165,12 @@ void apply_inline_marks(check_report& report) {
         for (const auto& m : marks)
             for (std::size_t i = 0; i < m.rules.size(); ++i)
                 if (!m.used[i]) {
-                    diagnostic d = problem(
-                        rules::stale_acceptance, severity::warning,
-                        fmt::format("this mark accepts '{}', but the statement has no such "
-                                    "finding any more",
-                                    m.rules[i]),
-                        m.where);
+                    diagnostic d =
+                        problem(rules::stale_acceptance, severity::warning,
+                                fmt::format("this mark accepts '{}', but the statement has no such "
+                                            "finding any more",
+                                            m.rules[i]),
+                                m.where);
                     d.notes.push_back(
                         {"remove the rule from the mark (or the mark), so that a new finding "
                          "here is not taken as reviewed",

@@ -63,8 +63,9 @@ std::vector<fs::path> files_using(const std::vector<fs::path>& changed,
         if (p.extension() != ".plumb" && p.extension() != ".md")
             continue;
         const std::string relative = project_relative(p, root);
-        if (std::any_of(options.exclude.begin(), options.exclude.end(),
-                        [&](const std::string& pattern) { return path_matches(pattern, relative); }))
+        if (std::any_of(
+                options.exclude.begin(), options.exclude.end(),
+                [&](const std::string& pattern) { return path_matches(pattern, relative); }))
             continue;
         graph.emplace(key_of(p), std::make_pair(p, uses_in(p)));
     }

@@ -5,12 +5,12 @@
 #include "check/formula_checker.hpp"
 #include "check/inference.hpp"
 #include "check/path_patterns.hpp"
+#include "groups/studies.hpp"
 #include "notation/markdown.hpp"
 #include "notation/parser.hpp"
 #include "plumb/accepted.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
-#include "groups/studies.hpp"
 
 #include <algorithm>
 #include <array>
@@ -32,8 +32,8 @@ std::size_t check_report::count(severity level) const {
 }
 
 std::size_t check_report::count_accepted() const {
-    return static_cast<std::size_t>(std::count_if(
-        diagnostics.begin(), diagnostics.end(), [](const diagnostic& d) { return d.accepted; }));
+    return static_cast<std::size_t>(std::count_if(diagnostics.begin(), diagnostics.end(),
+                                                  [](const diagnostic& d) { return d.accepted; }));
 }
 
 std::vector<std::string_view> symbol_table::nearest(std::string_view name,
@@ -660,10 +660,9 @@ check_report check_paths(const std::vector<fs::path>& paths, const check_options
     if (!options.exclude.empty())
         std::erase_if(files, [&](const fs::path& p) {
             const std::string relative = project_relative(p, options.project_root);
-            return std::any_of(options.exclude.begin(), options.exclude.end(),
-                               [&](const std::string& pattern) {
-                                   return path_matches(pattern, relative);
-                               });
+            return std::any_of(
+                options.exclude.begin(), options.exclude.end(),
+                [&](const std::string& pattern) { return path_matches(pattern, relative); });
         });
     for (const auto& p : files)
         if (loaded_file* f = s.load(p, {}))

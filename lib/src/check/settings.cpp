@@ -50,9 +50,9 @@ class reader {
         std::vector<std::string> items;
         const toml::array* list = value.as_array();
         if (list == nullptr) {
-            problem(value.source(),
-                    fmt::format("'{}' must be a list of strings, such as [\"a\", \"b\"]",
-                                key.str()));
+            problem(
+                value.source(),
+                fmt::format("'{}' must be a list of strings, such as [\"a\", \"b\"]", key.str()));
             return items;
         }
         for (const auto& item : *list) {

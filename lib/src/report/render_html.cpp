@@ -180,8 +180,8 @@ std::string render_signoff_html(const check_report& report, const signoff_contex
     out += fmt::format("<tr><th>paths</th><td>{}</td></tr>\n", paths);
     out += fmt::format("<tr><th>checked at (UTC)</th><td id=\"checked-at\">{}</td></tr>\n",
                        esc(context.checked_at));
-    out += fmt::format("<tr><th>plumb version</th><td id=\"version\">{}</td></tr>\n",
-                       esc(version()));
+    out +=
+        fmt::format("<tr><th>plumb version</th><td id=\"version\">{}</td></tr>\n", esc(version()));
     out += fmt::format("<tr><th>git commit</th><td class=\"mono\" id=\"commit\">{}</td></tr>\n",
                        context.git_commit.empty() ? "(not in a git repository)"
                                                   : esc(context.git_commit));

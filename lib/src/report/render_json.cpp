@@ -1,7 +1,7 @@
 // The JSON report: one document, schema described in the README ("JSON output").
 #include "plumb/render.hpp"
-#include "report/json_text.hpp"
 #include "plumb/version.hpp"
+#include "report/json_text.hpp"
 
 #include <fmt/format.h>
 

@@ -28,8 +28,8 @@ std::string render_accepted_line(const diagnostic& d) {
         return render_one_line(d);
     return fmt::format("{}: accepted {}: {} [{}]\n    reason ({} {}): {}", place(d.where),
                        level_word(d.level), d.message, d.rule,
-                       d.accepted->by_inline_mark ? "mark at" : "entry at",
-                       place(d.accepted->mark), d.accepted->reason);
+                       d.accepted->by_inline_mark ? "mark at" : "entry at", place(d.accepted->mark),
+                       d.accepted->reason);
 }
 
 std::string render_quiet(const check_report& report, severity fail_on) {

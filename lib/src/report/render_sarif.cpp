@@ -65,9 +65,9 @@ class sarif_writer {
         out += "\n      ]}},\n";
         std::error_code ec;
         const fs::path absolute_root = fs::weakly_canonical(root_.empty() ? "." : root_, ec);
-        out += fmt::format("    \"originalUriBaseIds\": {{{}: {{\"uri\": {}}}}},\n",
-                           str(root_base_id),
-                           str("file://" + uri_path(absolute_root.generic_string() + "/")));
+        out +=
+            fmt::format("    \"originalUriBaseIds\": {{{}: {{\"uri\": {}}}}},\n", str(root_base_id),
+                        str("file://" + uri_path(absolute_root.generic_string() + "/")));
         out += "    \"columnKind\": \"unicodeCodePoints\",\n";
         out += "    \"results\": [";
         bool first = true;
