@@ -372,7 +372,7 @@ TEST_CASE("sign-off report: header, summary, formulas with side dimensions, caut
     CHECK(contains(html, "[L] (length) <b>&lt;=</b> [L] (length)"));
     CHECK(contains(html, "Reynolds number"));
     CHECK(std::count(html.begin(), html.end(), '\n') > 20);
-    CHECK(contains(html, std::string(plumb::caution_text())));
+    CHECK(contains(html, plumb::caution_text().substr(1))); // capitalised there
     auto missing = plumb_run({"report", "calcs"}, dir.path());
     CHECK(missing.status == 2);
 }

@@ -117,10 +117,13 @@ std::string finding_html(const diagnostic& d) {
 }
 
 std::string caution_html() {
+    std::string text(caution_text());
+    if (!text.empty() && text.front() >= 'a' && text.front() <= 'z')
+        text.front() = static_cast<char>(text.front() - 'a' + 'A');
     return fmt::format("<div class=\"caution\" id=\"caution\"><strong>Caution.</strong> {}. "
                        "This report records a check of dimensions and units only; it is not an "
                        "approval of the design.</div>\n",
-                       esc(caution_text()));
+                       esc(text));
 }
 
 struct file_entry {
