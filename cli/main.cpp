@@ -62,7 +62,6 @@ options for check, groups and dim:
   --with-users         check: also check the project's files that `use` the given ones
   --settings FILE      use FILE as the settings (default: plumb.toml in the checked
                        path's folder or the nearest folder above)
-  --jobs N             check files on N threads (default: one per core)
   --study NAME         groups: only the study called NAME
   --restate-in UNITS   check: restate coefficients marked ? also for the consistent set
                        of units with these base units, e.g. 'ft, lb, s'
@@ -205,14 +204,6 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
             if (!v)
                 return "--reason needs a text";
             out.reason = *v;
-        } else if (a == "--jobs" || a == "-j" || a.rfind("--jobs=", 0) == 0) {
-            const auto v = value(a == "-j" ? "-j" : "--jobs");
-            unsigned jobs = 0;
-            if (!v || v->empty() || v->size() > 4 ||
-                v->find_first_not_of("0123456789") != std::string::npos ||
-                (jobs = static_cast<unsigned>(std::stoul(*v))) == 0)
-                return "--jobs takes a number of threads from 1 to 9999";
-            out.check.jobs = jobs;
         } else if (a == "--color" || a == "--colour" || a.rfind("--color=", 0) == 0 ||
                    a.rfind("--colour=", 0) == 0) {
             const auto v = value(a.rfind("--colour", 0) == 0 ? "--colour" : "--color");

@@ -33,8 +33,6 @@ struct check_options {
     std::filesystem::path accepted_findings; // the file of accepted findings; none when empty
     // Keep every formula's label and side dimensions for the sign-off report.
     bool record_formulas = false;
-    // Files checked at once; 0 means one per core. The findings' order never depends on it.
-    unsigned jobs = 1;
 };
 
 // One formula as the sign-off report lists it.
