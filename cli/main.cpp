@@ -1,7 +1,10 @@
 // plumb's command line: parses arguments, calls libplumb, prints. No checking logic here.
+#include "plumb/accepted.hpp"
 #include "plumb/check.hpp"
+#include "plumb/provenance.hpp"
 #include "plumb/render.hpp"
 #include "plumb/rules.hpp"
+#include "plumb/settings.hpp"
 #include "plumb/unit_table.hpp"
 #include "plumb/version.hpp"
 
@@ -9,8 +12,10 @@
 #include <cstdio>
 #include <cstdlib>
 #include <cstring>
+#include <ctime>
 #include <exception>
 #include <fmt/format.h>
+#include <fstream>
 #include <optional>
 #include <string>
 #include <unistd.h>
@@ -26,7 +31,14 @@ constexpr std::string_view usage_text =
     R"(plumb - check engineering formulas for dimensional homogeneity
 
 usage:
-  plumb check [options] PATH...   check .plumb files (folders are searched for *.plumb)
+  plumb check [options] PATH...   check .plumb files and Markdown notes with ```plumb
+                                  blocks (folders are searched); PATH may be left out
+                                  when the settings file has 'include'
+  plumb accept --reason TEXT [PATH...]
+                                  accept every finding not yet accepted, writing the
+                                  project's file of accepted findings
+  plumb report [PATH...] -o FILE.html
+                                  write the sign-off report: one self-contained page
   plumb dim EXPRESSION [FILE...]  print the dimension of an expression, using the
                                   symbols that FILEs declare
   plumb groups [options] PATH...  the dimensionless groups of each study in the files,
@@ -38,11 +50,20 @@ usage:
                                   origins and sources (those whose symbol, name or
                                   quantity contains TEXT)
   plumb rules                     list the rules and their ids
+  plumb settings                  list the keys of the settings file, plumb.toml
   plumb --version | --help
 
 options for check, groups, dim and catalogue:
   --dict FILE          read FILE's declarations before each file (repeatable)
-  --format text|json   output format for check and groups (default: text)
+  --format text|json|sarif
+                       output format (default: text; sarif for check only)
+  --quiet              check: one line per failing finding, a summary line and the
+                       caution (for commit hooks)
+  --fail-on error|warning
+                       check: what fails the run (default: error, or the settings)
+  --with-users         check: also check the project's files that `use` the given ones
+  --settings FILE      use FILE as the settings (default: plumb.toml in the checked
+                       path's folder or the nearest folder above)
   --study NAME         groups: only the study called NAME
   --restate-in UNITS   check: restate coefficients marked ? also for the consistent set
                        of units with these base units, e.g. 'ft, lb, s'
@@ -50,8 +71,12 @@ options for check, groups, dim and catalogue:
                        colour the text output (default: auto, which means on a
                        terminal only, and never when NO_COLOR is set or TERM=dumb)
 
-exit status: 0 no errors (warnings allowed), 1 errors found, 2 bad usage or a file
-that cannot be read or parsed.
+A finding is accepted by a mark at the end of its line, with a reason:
+  @ooip N = 7758*A*h*φ*(1 - S_w)/B_o   # reviewed unit-scale: 7758 is bbl per acre-ft
+or by an entry that 'plumb accept' writes; accepted findings are still reported.
+
+exit status: 0 nothing fails (warnings allowed unless --fail-on warning), 1 findings
+fail the run, 2 bad usage, bad settings, or a file that cannot be read or parsed.
 
 A dimensionally consistent formula can still be wrong; plumb does not replace
 independent review under the applicable codes and licensed practice.
@@ -79,8 +104,17 @@ bool use_colour(colour_choice choice) {
     return isatty(STDOUT_FILENO) != 0;
 }
 
+enum class output_format { text, json, sarif };
+
 struct options {
     std::vector<std::string> positional;
+    output_format format = output_format::text;
+    bool quiet = false;
+    bool with_users = false;
+    std::optional<plumb::severity> fail_on;
+    std::string settings_file;
+    std::string output;
+    std::optional<std::string> reason;
     std::string study;
     std::string variables;
     std::string repeating;
@@ -142,9 +176,36 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
             out.repeating = *v;
         } else if (a == "--format" || a.rfind("--format=", 0) == 0) {
             const auto v = value("--format");
-            if (!v || (*v != "text" && *v != "json"))
-                return "--format takes 'text' or 'json'";
+            if (!v || (*v != "text" && *v != "json" && *v != "sarif"))
+                return "--format takes 'text', 'json' or 'sarif'";
             out.json = *v == "json";
+            out.format = *v == "json"    ? output_format::json
+                         : *v == "sarif" ? output_format::sarif
+                                         : output_format::text;
+        } else if (a == "--quiet" || a == "-q") {
+            out.quiet = true;
+        } else if (a == "--with-users") {
+            out.with_users = true;
+        } else if (a == "--fail-on" || a.rfind("--fail-on=", 0) == 0) {
+            const auto v = value("--fail-on");
+            if (!v || (*v != "error" && *v != "warning"))
+                return "--fail-on takes 'error' or 'warning'";
+            out.fail_on = *v == "warning" ? plumb::severity::warning : plumb::severity::error;
+        } else if (a == "--settings" || a.rfind("--settings=", 0) == 0) {
+            const auto v = value("--settings");
+            if (!v || v->empty())
+                return "--settings needs a file";
+            out.settings_file = *v;
+        } else if (a == "-o" || a == "--output" || a.rfind("--output=", 0) == 0) {
+            const auto v = value(a == "-o" ? "-o" : "--output");
+            if (!v || v->empty())
+                return "-o needs a file name, such as calc-check.html";
+            out.output = *v;
+        } else if (a == "--reason" || a.rfind("--reason=", 0) == 0) {
+            const auto v = value("--reason");
+            if (!v)
+                return "--reason needs a text";
+            out.reason = *v;
         } else if (a == "--color" || a == "--colour" || a.rfind("--color=", 0) == 0 ||
                    a.rfind("--colour=", 0) == 0) {
             const auto v = value(a.rfind("--colour", 0) == 0 ? "--colour" : "--color");
@@ -181,23 +242,180 @@ std::optional<std::string> check_restate_units(const std::vector<std::string>& u
     return std::nullopt;
 }
 
+// What a run checks once the settings file (if any) is read.
+struct project_run {
+    std::vector<std::filesystem::path> paths;
+    plumb::severity fail_on = plumb::severity::error;
+    std::string settings_file; // empty when none
+};
+
+// Finds and reads the settings, merges them under the command line's options, and picks the
+// paths; an error message when the settings are bad or there is nothing to check.
+std::optional<std::string> prepare_project(options& opts, project_run& run,
+                                           std::string_view command) {
+    namespace fs = std::filesystem;
+    std::optional<fs::path> settings_path;
+    if (!opts.settings_file.empty()) {
+        settings_path = opts.settings_file;
+        std::error_code ec;
+        if (!fs::is_regular_file(*settings_path, ec))
+            return fmt::format("--settings: cannot read '{}'", opts.settings_file);
+    } else {
+        settings_path = plumb::find_settings(
+            opts.positional.empty() ? fs::path(".") : fs::path(opts.positional[0]));
+    }
+    plumb::check_options& check = opts.check;
+    if (settings_path) {
+        const plumb::settings_result read = plumb::read_settings(*settings_path);
+        if (!read.problems.empty()) {
+            std::string message = "the settings file has problems; nothing was checked";
+            for (const auto& p : read.problems)
+                message += fmt::format("\n  {}:{}:{}: {}", settings_path->string(), p.line,
+                                       p.column, p.message);
+            return message;
+        }
+        const plumb::project_settings& s = read.settings;
+        run.settings_file = settings_path->string();
+        check.dictionaries.insert(check.dictionaries.begin(), s.dictionaries.begin(),
+                                  s.dictionaries.end());
+        if (check.restate_in.empty())
+            check.restate_in = s.restate_in;
+        check.exclude = s.exclude;
+        check.rule_levels = s.rule_levels;
+        check.project_root = s.root;
+        check.accepted_findings = s.accepted_findings;
+        run.fail_on = s.fail_on;
+        if (opts.positional.empty())
+            for (const auto& i : s.include)
+                run.paths.push_back(s.root / i);
+    } else {
+        // Without settings the project is the current folder.
+        check.project_root = fs::current_path();
+        check.accepted_findings = check.project_root / plumb::accepted_findings_name;
+    }
+    if (opts.fail_on)
+        run.fail_on = *opts.fail_on;
+    for (const auto& p : opts.positional)
+        run.paths.emplace_back(p);
+    if (run.paths.empty())
+        return fmt::format("{} needs at least one file or folder (or a settings file with "
+                           "'include')",
+                           command);
+    if (auto error = check_restate_units(check.restate_in))
+        return error;
+    return std::nullopt;
+}
+
+bool fails(const plumb::check_report& report, plumb::severity fail_on) {
+    return report.count(plumb::severity::error) > 0 ||
+           (fail_on == plumb::severity::warning && report.count(plumb::severity::warning) > 0);
+}
+
 int run_check(const std::vector<std::string>& args) {
     options opts;
     if (auto error = parse_options(args, opts))
         return usage_error(*error);
-    if (auto error = check_restate_units(opts.check.restate_in))
+    project_run run;
+    if (auto error = prepare_project(opts, run, "check"))
         return usage_error(*error);
-    if (opts.positional.empty())
-        return usage_error("check needs at least one file or folder");
-    std::vector<std::filesystem::path> paths(opts.positional.begin(), opts.positional.end());
-    const plumb::check_report report = plumb::check_paths(paths, opts.check);
-    if (opts.json)
+    if (opts.with_users) {
+        const auto users = plumb::files_using(run.paths, opts.check);
+        run.paths.insert(run.paths.end(), users.begin(), users.end());
+    }
+    const plumb::check_report report = plumb::check_paths(run.paths, opts.check);
+    if (opts.format == output_format::sarif)
+        print(plumb::render_sarif(report, opts.check.project_root));
+    else if (opts.format == output_format::json)
         print(plumb::render_json(report));
+    else if (opts.quiet)
+        print(plumb::render_quiet(report, run.fail_on));
     else
         print(plumb::render_text(report, {use_colour(opts.colour)}));
     if (report.input_failed)
         return exit_usage;
-    return report.count(plumb::severity::error) > 0 ? exit_findings : exit_clean;
+    return fails(report, run.fail_on) ? exit_findings : exit_clean;
+}
+
+int run_accept(const std::vector<std::string>& args) {
+    options opts;
+    if (auto error = parse_options(args, opts))
+        return usage_error(*error);
+    project_run run;
+    if (auto error = prepare_project(opts, run, "accept"))
+        return usage_error(*error);
+    const plumb::check_report report = plumb::check_paths(run.paths, opts.check);
+    if (report.input_failed) {
+        print(plumb::render_text(report, {use_colour(opts.colour)}));
+        fmt::print(stderr, "plumb: some input could not be read or parsed; nothing accepted\n");
+        return exit_usage;
+    }
+    std::size_t to_accept = 0;
+    for (const auto& d : report.diagnostics)
+        if (!d.accepted && d.where.file != nullptr && d.level != plumb::severity::note &&
+            d.rule != plumb::rules::acceptance_problem && d.rule != plumb::rules::stale_acceptance)
+            ++to_accept;
+    const std::string reason = opts.reason.value_or("");
+    if (to_accept > 0 && reason.find_first_not_of(" \t") == std::string::npos)
+        return usage_error(fmt::format(
+            "accept needs --reason TEXT: {} finding{} would be accepted, and each needs a reason "
+            "the checker can read (edit each entry's reason in the file afterwards if they differ)",
+            to_accept, to_accept == 1 ? "" : "s"));
+    const std::string text = plumb::accepted_findings_text(report, opts.check.project_root,
+                                                           opts.check.accepted_findings, reason);
+    std::ofstream out(opts.check.accepted_findings, std::ios::binary | std::ios::trunc);
+    out << text;
+    out.close();
+    if (!out)
+        return usage_error(fmt::format("cannot write '{}'", opts.check.accepted_findings.string()));
+    print(fmt::format("plumb: {} new finding{} accepted in {} (with earlier entries kept); "
+                      "stale entries about the checked files removed\n",
+                      to_accept, to_accept == 1 ? "" : "s", opts.check.accepted_findings.string()));
+    return exit_clean;
+}
+
+std::string utc_now() {
+    std::time_t now = std::time(nullptr);
+    // SOURCE_DATE_EPOCH makes a report reproducible byte for byte.
+    if (const char* fixed = std::getenv("SOURCE_DATE_EPOCH"); fixed != nullptr && *fixed != '\0')
+        now = static_cast<std::time_t>(std::strtoll(fixed, nullptr, 10));
+    std::tm parts{};
+    gmtime_r(&now, &parts);
+    char text[32];
+    std::strftime(text, sizeof text, "%Y-%m-%dT%H:%M:%SZ", &parts);
+    return text;
+}
+
+int run_report(const std::vector<std::string>& args) {
+    options opts;
+    if (auto error = parse_options(args, opts))
+        return usage_error(*error);
+    if (opts.output.empty())
+        return usage_error("report needs -o FILE.html");
+    project_run run;
+    if (auto error = prepare_project(opts, run, "report"))
+        return usage_error(*error);
+    opts.check.record_formulas = true;
+    const plumb::check_report report = plumb::check_paths(run.paths, opts.check);
+    plumb::signoff_context context;
+    for (const auto& p : run.paths)
+        context.paths_checked.push_back(p.string());
+    context.checked_at = utc_now();
+    context.git_commit = plumb::git_commit_of(opts.check.project_root);
+    context.settings_file = run.settings_file;
+    context.project_root = opts.check.project_root;
+    std::ofstream out(opts.output, std::ios::binary | std::ios::trunc);
+    out << plumb::render_signoff_html(report, context);
+    out.close();
+    if (!out)
+        return usage_error(fmt::format("cannot write '{}'", opts.output));
+    print(fmt::format("plumb: sign-off report written to {}: {} formulas in {} files, {} errors, "
+                      "{} warnings, {} accepted\ncaution: {}\n",
+                      opts.output, report.formulas_checked, report.files_checked,
+                      report.count(plumb::severity::error), report.count(plumb::severity::warning),
+                      report.count_accepted(), plumb::caution_text()));
+    if (report.input_failed)
+        return exit_usage;
+    return fails(report, run.fail_on) ? exit_findings : exit_clean;
 }
 
 int run_groups(const std::vector<std::string>& args) {
@@ -333,10 +551,19 @@ int run(int argc, char** argv) {
         return usage_error("'plumb units' is now 'plumb catalogue'");
     if (command == "rules")
         return run_rules();
+    if (command == "accept")
+        return run_accept(args);
+    if (command == "report")
+        return run_report(args);
+    if (command == "settings") {
+        print(plumb::settings_reference());
+        return exit_clean;
+    }
     if (command.size() > 6 && command.substr(command.size() - 6) == ".plumb")
         return usage_error(
             fmt::format("unknown command '{}'; did you mean 'plumb check {}'?", command, command));
-    for (const std::string_view known : {"check", "dim", "groups", "catalogue", "rules"}) {
+    for (const std::string_view known :
+         {"check", "dim", "groups", "catalogue", "rules", "accept", "report", "settings"}) {
         // One slip of the keyboard ("chek", "unit") deserves a pointer, not just a refusal.
         const bool near =
             command.size() + 1 >= known.size() && command.size() <= known.size() + 1 &&

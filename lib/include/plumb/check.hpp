@@ -14,11 +14,33 @@
 
 namespace plumb {
 
+// A rule's severity as a project sets it; `off` drops its findings.
+struct rule_level {
+    std::string rule;
+    std::optional<severity> level; // empty: off
+};
+
 struct check_options {
     std::vector<std::filesystem::path> dictionaries; // read before every checked file
     // Base units of a consistent set other than SI ("ft", "lb", "s"): coefficients marked `?`
     // are restated for it as well as for coherent SI units.
     std::vector<std::string> restate_in;
+
+    // Project settings (see settings.hpp); all empty when there is no settings file.
+    std::filesystem::path project_root;      // paths below are relative to it
+    std::vector<std::string> exclude;        // glob patterns of files never checked
+    std::vector<rule_level> rule_levels;     // severities changed or rules turned off
+    std::filesystem::path accepted_findings; // the file of accepted findings; none when empty
+    // Keep every formula's label and side dimensions for the sign-off report.
+    bool record_formulas = false;
+};
+
+// One formula as the sign-off report lists it.
+struct formula_record {
+    location where;
+    std::string label;                           // without '@'; empty when none
+    std::vector<std::optional<dimension>> sides; // empty optional where a side has an error
+    std::vector<std::string> relations;          // "=", "<=", ... between the sides
 };
 
 // One `study` line worked out: its groups and, when prototype and model lines give values,
@@ -37,18 +59,23 @@ struct study_report {
 struct check_report {
     // Every file read (checked files, dictionaries, `use`d files); diagnostics point into them.
     std::vector<std::unique_ptr<source_file>> sources;
+    std::vector<const source_file*> checked_files; // those of `sources` checked, in order
     std::vector<diagnostic> diagnostics;
     std::vector<study_report> studies;
+    std::vector<formula_record> formulas; // only with check_options::record_formulas
     std::size_t files_checked = 0;
     std::size_t formulas_checked = 0;
     std::size_t bytes_checked = 0;
     // True when a path could not be read or a file could not be parsed (exit status 2).
     bool input_failed = false;
 
+    // Findings of `level` that fail the run: accepted ones are not counted.
     [[nodiscard]] std::size_t count(severity level) const;
+    [[nodiscard]] std::size_t count_accepted() const;
 };
 
-// Checks .plumb files; a directory is searched recursively for *.plumb, in sorted order.
+// Checks .plumb files; a directory is searched recursively for *.plumb, and for Markdown
+// notes (*.md) holding ```plumb blocks, in sorted order.
 check_report check_paths(const std::vector<std::filesystem::path>& paths,
                          const check_options& options = {});
 

@@ -36,6 +36,15 @@ struct note {
     bool restates_terms = false;
 };
 
+// Why a reviewed finding is accepted: an inline mark on its line or an entry of the project's
+// file of accepted findings. An accepted finding is still reported, with its reason; it only
+// stops failing the run.
+struct acceptance {
+    std::string reason;
+    location mark; // the inline mark, or the entry in the file of accepted findings
+    bool by_inline_mark = true;
+};
+
 struct diagnostic {
     severity level = severity::error;
     std::string rule;    // stable rule id, see rules.hpp
@@ -45,6 +54,7 @@ struct diagnostic {
     std::string mark_label;
     std::vector<term> terms;
     std::vector<note> notes;
+    std::optional<acceptance> accepted;
 };
 
 } // namespace plumb

@@ -30,6 +30,8 @@ inline constexpr std::string_view offset_scale = "offset-scale";
 inline constexpr std::string_view unit_scale = "unit-scale";
 inline constexpr std::string_view inferred_dimension = "inferred-dimension";
 inline constexpr std::string_view inference_conflict = "inference-conflict";
+inline constexpr std::string_view acceptance_problem = "acceptance-problem";
+inline constexpr std::string_view stale_acceptance = "stale-acceptance";
 
 struct rule_info {
     std::string_view id;

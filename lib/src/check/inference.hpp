@@ -4,10 +4,10 @@
 // free, or shows that the formulas disagree about it.
 #pragma once
 
-#include "plumb/diagnostic.hpp"
-#include "plumb/rational.hpp"
 #include "model/symbol_table.hpp"
 #include "model/syntax_tree.hpp"
+#include "plumb/diagnostic.hpp"
+#include "plumb/rational.hpp"
 
 #include <array>
 #include <span>

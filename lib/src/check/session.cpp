@@ -1,12 +1,16 @@
 // Loads files once each, resolves `use` lines and dictionaries into symbol tables, runs the
 // checks, and gathers the findings in file order.
+#include "check/acceptance.hpp"
 #include "check/edit_distance.hpp"
 #include "check/formula_checker.hpp"
 #include "check/inference.hpp"
+#include "check/path_patterns.hpp"
+#include "groups/studies.hpp"
+#include "notation/markdown.hpp"
 #include "notation/parser.hpp"
+#include "plumb/accepted.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
-#include "groups/studies.hpp"
 
 #include <algorithm>
 #include <array>
@@ -24,7 +28,12 @@ namespace fs = std::filesystem;
 std::size_t check_report::count(severity level) const {
     return static_cast<std::size_t>(
         std::count_if(diagnostics.begin(), diagnostics.end(),
-                      [&](const diagnostic& d) { return d.level == level; }));
+                      [&](const diagnostic& d) { return d.level == level && !d.accepted; }));
+}
+
+std::size_t check_report::count_accepted() const {
+    return static_cast<std::size_t>(std::count_if(diagnostics.begin(), diagnostics.end(),
+                                                  [](const diagnostic& d) { return d.accepted; }));
 }
 
 std::vector<std::string_view> symbol_table::nearest(std::string_view name,
@@ -179,7 +188,8 @@ class checking_reader : public dictionary_reader {
 
 class session {
   public:
-    session(check_report& report, const check_options& options) : report_(report) {
+    session(check_report& report, const check_options& options)
+        : report_(report), record_formulas_(options.record_formulas) {
         read_restate_units(options.restate_in);
         for (const auto& path : options.dictionaries)
             if (loaded_file* f = load(path, {}))
@@ -198,6 +208,8 @@ class session {
         std::string text;
         if (!read_file(path, text, requested_at))
             return nullptr;
+        if (path.extension() == ".md")
+            text = plumb_blocks_of(text); // lines and columns stay those of the notes
         return add(key.string(), path.string(), std::move(text));
     }
 
@@ -240,8 +252,10 @@ class session {
         f->loading = false;
         // Formulas that named a symbol declared further down are checked now, against all.
         for (std::size_t i = 0; i < tree.formulas.size(); ++i)
-            if (i >= reader.checked_already.size() || !reader.checked_already[i])
+            if (i >= reader.checked_already.size() || !reader.checked_already[i]) {
                 check_formula(tree, tree.formulas[i], table, f->diagnostics, false);
+                record(tree, tree.formulas[i], table);
+            }
         if (reader.infers_symbols || reader.kept_for_inference > 0)
             infer_dimensions(tree, tree.formulas, table, f->diagnostics,
                              restate_in_ ? &*restate_in_ : nullptr);
@@ -254,6 +268,7 @@ class session {
         if (formulas > 0)
             report_unused(f, table);
         ++report_.files_checked;
+        report_.checked_files.push_back(f->source);
         report_.formulas_checked += formulas;
         report_.bytes_checked += f->source->text().size();
     }
@@ -312,9 +327,48 @@ class session {
         report_.input_failed = true;
     }
 
+    // The sign-off report lists every formula with the dimension of each side.
+    void record(const syntax::parsed_file& tree, const syntax::formula& f, symbol_table& table) {
+        if (!record_formulas_)
+            return;
+        formula_record r;
+        r.where = {tree.source, f.range};
+        r.label = std::string(tree.source->text(f.label));
+        std::vector<diagnostic> already_reported;
+        for (std::uint32_t i = 0; i < f.side_count; ++i) {
+            const syntax::formula_side& side = tree.sides[f.first_side + i];
+            if (i > 0)
+                r.relations.emplace_back(relation_text(side.relation_before));
+            r.sides.push_back(expression_dimension(tree, side.root, table, already_reported));
+        }
+        auto& all = report_.formulas;
+        // Formulas checked at the end of their file go back into file order.
+        auto at = all.end();
+        while (at != all.begin() && (at - 1)->where.file == r.where.file &&
+               (at - 1)->where.range.begin > r.where.range.begin)
+            --at;
+        all.insert(at, std::move(r));
+    }
+
   private:
     check_report& report_;
+    bool record_formulas_ = false;
     std::optional<coherent_units> restate_in_;
+
+    static std::string_view relation_text(syntax::relation_kind k) {
+        switch (k) {
+        case syntax::relation_kind::less:
+            return "<";
+        case syntax::relation_kind::less_equal:
+            return "<=";
+        case syntax::relation_kind::greater:
+            return ">";
+        case syntax::relation_kind::greater_equal:
+            return ">=";
+        default:
+            return "=";
+        }
+    }
 
     // "ft", "lb", "s": each must be a unit of exactly one base dimension.
     void read_restate_units(const std::vector<std::string>& symbols) {
@@ -547,6 +601,8 @@ void checking_reader::on_declaration(const syntax::parsed_file& tree, std::uint3
 bool checking_reader::on_formula(const syntax::parsed_file& tree, const syntax::formula& f) {
     ++formulas;
     const bool checked = check_formula(tree, f, table_, file_->diagnostics, true);
+    if (checked)
+        session_.record(tree, f, table_);
     // Formulas that inference needs stay in the tree until the end of the file, as do those
     // that name a symbol declared further down (checked then).
     const bool keep = !checked || f.has_inferred || infers_symbols;
@@ -555,6 +611,13 @@ bool checking_reader::on_formula(const syntax::parsed_file& tree, const syntax::
     if (checked && keep)
         ++kept_for_inference;
     return !keep;
+}
+
+// A Markdown file is a calc note when it holds a plumb block.
+bool is_calc_note(const fs::path& path) {
+    std::ifstream in(path, std::ios::binary);
+    const std::string text{std::istreambuf_iterator<char>(in), std::istreambuf_iterator<char>()};
+    return has_plumb_blocks(text);
 }
 
 void collect_plumb_files(const fs::path& dir, std::vector<fs::path>& out, session& s) {
@@ -571,7 +634,10 @@ void collect_plumb_files(const fs::path& dir, std::vector<fs::path>& out, sessio
             break;
         }
         std::error_code type_ec;
-        if (it->is_regular_file(type_ec) && it->path().extension() == ".plumb")
+        if (!it->is_regular_file(type_ec))
+            continue;
+        if (it->path().extension() == ".plumb" ||
+            (it->path().extension() == ".md" && is_calc_note(it->path())))
             found.push_back(it->path());
     }
     std::sort(found.begin(), found.end());
@@ -591,10 +657,18 @@ check_report check_paths(const std::vector<fs::path>& paths, const check_options
         else
             files.push_back(p);
     }
+    if (!options.exclude.empty())
+        std::erase_if(files, [&](const fs::path& p) {
+            const std::string relative = project_relative(p, options.project_root);
+            return std::any_of(
+                options.exclude.begin(), options.exclude.end(),
+                [&](const std::string& pattern) { return path_matches(pattern, relative); });
+        });
     for (const auto& p : files)
         if (loaded_file* f = s.load(p, {}))
             s.check(f);
     s.finish();
+    review_findings(report, options);
     return report;
 }
 
@@ -603,6 +677,7 @@ check_report check_text(std::string name, std::string text, const check_options&
     session s(report, options);
     s.check(s.add("", std::move(name), std::move(text)));
     s.finish();
+    review_findings(report, options);
     return report;
 }
 

@@ -1,6 +1,7 @@
 // The JSON report: one document, schema described in the README ("JSON output").
 #include "plumb/render.hpp"
 #include "plumb/version.hpp"
+#include "report/json_text.hpp"
 
 #include <fmt/format.h>
 
@@ -8,58 +9,7 @@ namespace plumb {
 namespace {
 
 void append_string(std::string& out, std::string_view s) {
-    out += '"';
-    for (const char c : s) {
-        switch (c) {
-        case '"':
-            out += "\\\"";
-            break;
-        case '\\':
-            out += "\\\\";
-            break;
-        case '\n':
-            out += "\\n";
-            break;
-        case '\r':
-            out += "\\r";
-            break;
-        case '\t':
-            out += "\\t";
-            break;
-        default:
-            if (static_cast<unsigned char>(c) < 0x20)
-                out +=
-                    fmt::format("\\u{:04x}", static_cast<unsigned>(static_cast<unsigned char>(c)));
-            else
-                out += c;
-        }
-    }
-    out += '"';
-}
-
-// Invalid UTF-8 in a source line must not make the document invalid JSON.
-std::string valid_utf8(std::string_view s) {
-    std::string out;
-    out.reserve(s.size());
-    for (std::size_t i = 0; i < s.size();) {
-        const auto c = static_cast<unsigned char>(s[i]);
-        std::size_t len = c < 0x80           ? 1
-                          : (c >> 5) == 0x6  ? 2
-                          : (c >> 4) == 0xE  ? 3
-                          : (c >> 3) == 0x1E ? 4
-                                             : 0;
-        bool ok = len > 0 && i + len <= s.size();
-        for (std::size_t k = 1; ok && k < len; ++k)
-            ok = (static_cast<unsigned char>(s[i + k]) & 0xC0) == 0x80;
-        if (ok) {
-            out.append(s.substr(i, len));
-            i += len;
-        } else {
-            out += "\uFFFD";
-            ++i;
-        }
-    }
-    return out;
+    append_json_string(out, s);
 }
 
 void append_location(std::string& out, const location& where) {
@@ -133,14 +83,25 @@ std::string render_json(const check_report& report) {
             append_string(out, valid_utf8(d.notes[i].message));
             out += "}";
         }
-        out += "]}";
+        out += "]";
+        if (d.accepted) {
+            // Accepted after review: still listed, with the reason and where it was given.
+            out += ",\n      \"accepted\": {";
+            append_location(out, d.accepted->mark);
+            out += fmt::format("\"by\": \"{}\", \"reason\": ",
+                               d.accepted->by_inline_mark ? "mark" : "accepted-findings");
+            append_string(out, valid_utf8(d.accepted->reason));
+            out += "}";
+        }
+        out += "}";
     }
     out += first ? "],\n" : "\n  ],\n";
     out += fmt::format(
         "  \"summary\": {{\"files_checked\": {}, \"formulas_checked\": {}, \"errors\": {}, "
-        "\"warnings\": {}, \"input_failed\": {}}},\n",
+        "\"warnings\": {}, \"accepted\": {}, \"input_failed\": {}}},\n",
         report.files_checked, report.formulas_checked, report.count(severity::error),
-        report.count(severity::warning), report.input_failed ? "true" : "false");
+        report.count(severity::warning), report.count_accepted(),
+        report.input_failed ? "true" : "false");
     out += "  \"caution\": ";
     append_string(out, caution_text());
     out += "\n}\n";

@@ -51,10 +51,18 @@ std::string render_text(const diagnostic& d, const text_style& style) {
 std::string render_text(const check_report& report, const text_style& style) {
     const palette::painter paint{style.colour};
     std::string out;
+    std::string accepted;
     for (const auto& d : report.diagnostics) {
+        if (d.accepted) {
+            // Reviewed already: one line with its reason, so that it is seen but not re-read.
+            accepted += render_accepted_line(d) + '\n';
+            continue;
+        }
         out += render_text(d, style);
         out += '\n';
     }
+    if (!accepted.empty())
+        out += fmt::format("{}\n{}\n", paint(palette::strong, "accepted after review:"), accepted);
     const std::size_t errors = report.count(severity::error);
     const std::size_t warnings = report.count(severity::warning);
     const auto plural = [](std::size_t n, std::string_view word) {
@@ -68,6 +76,9 @@ std::string render_text(const check_report& report, const text_style& style) {
     else
         out += fmt::format("{} {}, {} ({} checked)\n", paint(palette::strong, "plumb:"),
                            plural(errors, "error"), plural(warnings, "warning"), scope);
+    if (report.count_accepted() > 0)
+        out += fmt::format("{} {} accepted after review (listed above, with reasons)\n",
+                           paint(palette::strong, "plumb:"), plural(report.count_accepted(), "finding"));
     out += fmt::format("{} {}\n", paint(palette::warning, "caution:"), caution_text());
     return out;
 }
