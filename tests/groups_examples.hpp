@@ -51,7 +51,8 @@ struct worked_example {
     std::optional<std::size_t> dependent;
 
     [[nodiscard]] group_request request() const {
-        return {variables, dependent ? std::vector<std::size_t>{*dependent} : std::vector<std::size_t>{},
+        return {variables,
+                dependent ? std::vector<std::size_t>{*dependent} : std::vector<std::size_t>{},
                 {}};
     }
 };

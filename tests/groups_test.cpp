@@ -371,7 +371,9 @@ TEST_CASE("repeating variables that do not exist or appear twice are refused") {
 TEST_CASE("a dependent variable no other variable can balance is reported") {
     // F [M L T^-2] against V, D and L: nothing else carries mass.
     const group_request request{
-        {{"F", dims::force}, {"V", dims::speed}, {"D", dims::length}, {"L", dims::length}}, {0}, {}};
+        {{"F", dims::force}, {"V", dims::speed}, {"D", dims::length}, {"L", dims::length}},
+        {0},
+        {}};
     const auto got = plumb::analyse_groups(request);
     CHECK(got.groups.empty());
     CHECK(got.problems ==
@@ -445,8 +447,7 @@ TEST_CASE("exponents beyond 64 bits are a problem, never a wrapped answer or an 
 
 TEST_CASE("large exponents that do fit are still answered exactly") {
     const rational big(2'000'000'000'000'000'000);
-    const group_request request{
-        {{"x", dim(0, big * 2, 0)}, {"y", dim(0, big, 0)}}, {}, {}};
+    const group_request request{{{"x", dim(0, big * 2, 0)}, {"y", dim(0, big, 0)}}, {}, {}};
     const auto got = plumb::analyse_groups(request);
     INFO(listing(got));
     REQUIRE(got.problems.empty());

@@ -244,17 +244,17 @@ struct scale_assignment : seq<TAO_PEGTL_STRING("scale"), ws, one<'='>, ws, must<
 //   model hull: scale = 1:30, match Froude
 //   model pipe: scale = 1:4, match Reynolds and Froude within 0.5 %
 struct match_keyword_end : not_at<name_char> {};
-struct match_word : seq<not_at<sor<TAO_PEGTL_STRING("and"), TAO_PEGTL_STRING("within")>,
-                               match_keyword_end>,
-                        name> {};
+struct match_word
+    : seq<not_at<sor<TAO_PEGTL_STRING("and"), TAO_PEGTL_STRING("within")>, match_keyword_end>,
+          name> {};
 struct match_target : list<match_word, plus<space>> {};
-struct match_targets : seq<match_target, star<plus<space>, TAO_PEGTL_STRING("and"),
-                                              plus<space>, must<match_target>>> {};
+struct match_targets
+    : seq<match_target,
+          star<plus<space>, TAO_PEGTL_STRING("and"), plus<space>, must<match_target>>> {};
 struct tolerance_percent : seq<digits, opt<one<'.'>, star<digit>>> {};
 struct percent_sign : one<'%'> {};
-struct match_tolerance
-    : if_must<seq<plus<space>, TAO_PEGTL_STRING("within"), plus<space>>, tolerance_percent, ws,
-              percent_sign> {};
+struct match_tolerance : if_must<seq<plus<space>, TAO_PEGTL_STRING("within"), plus<space>>,
+                                 tolerance_percent, ws, percent_sign> {};
 struct match_clause : seq<TAO_PEGTL_STRING("match"), plus<space>, not_at<one<'='>>,
                           must<match_targets>, opt<match_tolerance>> {};
 struct case_item : sor<scale_assignment, match_clause, value_assignment> {};

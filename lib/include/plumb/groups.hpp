@@ -62,7 +62,7 @@ dimension_matrix build_dimension_matrix(std::span<const group_variable> variable
 struct group_request {
     std::vector<group_variable> variables;
     std::vector<std::size_t> dependents; // indices into variables; each gets a group of its own
-    std::vector<std::size_t> repeating;   // given by the user; empty: chosen by the rule
+    std::vector<std::size_t> repeating;  // given by the user; empty: chosen by the rule
 };
 
 struct pi_group {

@@ -103,8 +103,8 @@ std::string planner::explain_conflict(std::size_t g, const std::vector<std::size
         out = fmt::format("{} and {} cannot both be matched with the given model values: "
                           "matching {} fixes {} in the model, and {} then is {} in the model "
                           "against {} in the prototype.",
-                          labels(fixers), label(g), labels(fixers), join(fixed, " and "),
-                          label(g), number_text(model.value()), number_text(prototype.value()));
+                          labels(fixers), label(g), labels(fixers), join(fixed, " and "), label(g),
+                          number_text(model.value()), number_text(prototype.value()));
         out.front() = static_cast<char>(std::toupper(static_cast<unsigned char>(out.front())));
     }
 
@@ -124,7 +124,9 @@ std::string planner::explain_conflict(std::size_t g, const std::vector<std::size
         const auto need = requirement(g, j);
         if (!need)
             continue;
-        (is_density(d) ? density_needs : is_acceleration(d) ? gravity_needs : needs)
+        (is_density(d)        ? density_needs
+         : is_acceleration(d) ? gravity_needs
+                              : needs)
             .push_back(*need);
     }
     needs.insert(needs.end(), density_needs.begin(), density_needs.end());

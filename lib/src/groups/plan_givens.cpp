@@ -60,7 +60,6 @@ std::optional<signed_log> planner::checked_value(std::size_t j, double v, std::s
     return to_signed_log(v);
 }
 
-
 void planner::validate_inputs() {
     const std::size_t n = r_.variables.size();
     if (!r_.analysis.problems.empty())

@@ -113,12 +113,10 @@ std::string planner::scale_effect(std::size_t g, double ratio) const {
     }
     const double shown = number_ratio.value_or(ratio);
     const bool lower = shown < 1.0;
-    std::string out =
-        fmt::format("{} in the model: {} {} the prototype's", lower ? "lower" : "higher",
-                    number.empty() ? std::string("its value is") : "the " + std::string(number) +
-                                                                       " is",
-                    shown < 1.0 ? "1/" + number_text(1.0 / shown) + " of"
-                                : number_text(shown) + " times");
+    std::string out = fmt::format(
+        "{} in the model: {} {} the prototype's", lower ? "lower" : "higher",
+        number.empty() ? std::string("its value is") : "the " + std::string(number) + " is",
+        shown < 1.0 ? "1/" + number_text(1.0 / shown) + " of" : number_text(shown) + " times");
     for (const meaning& m : meanings) {
         if (m.number != number)
             continue;

@@ -113,8 +113,7 @@ namespace {
 
 // Without a choice, when groups conflict: the plan fixes only what every choice agrees on, and
 // each contested group becomes an alternative (match it, and these are off by so much).
-similitude_plan plan_with_alternatives(const similitude_request& request,
-                                       similitude_plan full) {
+similitude_plan plan_with_alternatives(const similitude_request& request, similitude_plan full) {
     const auto& groups = request.analysis.groups;
     std::vector<std::size_t> contested;
     for (const auto& c : full.conflicts)

@@ -35,14 +35,14 @@ std::string_view group_symbol(std::string_view symbol) {
         std::string_view name;
     };
     static constexpr entry symbols[] = {
-        {"Re", "Reynolds number"},    {"Fr", "Froude number"},    {"We", "Weber number"},
-        {"Ma", "Mach number"},        {"Eu", "Euler number"},     {"Sr", "Strouhal number"},
-        {"Ca", "capillary number"},   {"Ga", "Galilei number"},   {"Gr", "Grashof number"},
-        {"Ra", "Rayleigh number"},    {"Pr", "Prandtl number"},   {"Nu", "Nusselt number"},
-        {"Bi", "Biot number"},        {"Fo", "Fourier number"},   {"Pe", "Péclet number"},
-        {"Sh", "Sherwood number"},    {"Sc", "Schmidt number"},   {"Le", "Lewis number"},
-        {"Kn", "Knudsen number"},     {"Ar", "Archimedes number"}, {"Cy", "Cauchy number"},
-        {"St", "Stanton number"},     {"J", "advance ratio"},     {"K_T", "thrust coefficient"},
+        {"Re", "Reynolds number"},     {"Fr", "Froude number"},     {"We", "Weber number"},
+        {"Ma", "Mach number"},         {"Eu", "Euler number"},      {"Sr", "Strouhal number"},
+        {"Ca", "capillary number"},    {"Ga", "Galilei number"},    {"Gr", "Grashof number"},
+        {"Ra", "Rayleigh number"},     {"Pr", "Prandtl number"},    {"Nu", "Nusselt number"},
+        {"Bi", "Biot number"},         {"Fo", "Fourier number"},    {"Pe", "Péclet number"},
+        {"Sh", "Sherwood number"},     {"Sc", "Schmidt number"},    {"Le", "Lewis number"},
+        {"Kn", "Knudsen number"},      {"Ar", "Archimedes number"}, {"Cy", "Cauchy number"},
+        {"St", "Stanton number"},      {"J", "advance ratio"},      {"K_T", "thrust coefficient"},
         {"K_Q", "torque coefficient"}, {"C_D", "drag coefficient"}, {"C_L", "lift coefficient"},
     };
     for (const entry& e : symbols)
@@ -76,7 +76,8 @@ bool group_answers_to(const pi_group& group, std::size_t index, std::string_view
         return name.find(by_symbol) != std::string_view::npos;
     std::string lower(wanted);
     if (!lower.empty() && lower.front() >= 'a' && lower.front() <= 'z' &&
-        word_in(name, std::string(1, static_cast<char>(lower.front() - 'a' + 'A')) + lower.substr(1)))
+        word_in(name,
+                std::string(1, static_cast<char>(lower.front() - 'a' + 'A')) + lower.substr(1)))
         return true;
     return word_in(name, wanted);
 }
@@ -261,9 +262,9 @@ class study_worker {
             if (group_answers_to(groups[g], g, wanted))
                 found.push_back(g);
         if (found.empty()) {
-            diagnostic& d = report(
-                out_, rules::study_problem,
-                fmt::format("'{}' names no group of study '{}'", wanted, r.name), at(target));
+            diagnostic& d = report(out_, rules::study_problem,
+                                   fmt::format("'{}' names no group of study '{}'", wanted, r.name),
+                                   at(target));
             std::string list;
             for (std::size_t g = 0; g < groups.size(); ++g)
                 list += fmt::format("{}π{} = {}{}", g ? "; " : "", g + 1, groups[g].formula,
@@ -292,8 +293,8 @@ class study_worker {
         const auto scale_text = std::find_if(scale_at_.begin(), scale_at_.end(),
                                              [&](const auto& p) { return p.first == r.name; });
         for (std::size_t j = 0; j < r.variables.size(); ++j) {
-            if (!(r.variables[j].dim == dimension::base(base_dimension::length)) ||
-                !r.model[j] || j >= r.prototype.size() || !r.prototype[j] || *r.prototype[j] == 0)
+            if (!(r.variables[j].dim == dimension::base(base_dimension::length)) || !r.model[j] ||
+                j >= r.prototype.size() || !r.prototype[j] || *r.prototype[j] == 0)
                 continue;
             const double ratio = *r.model[j] / *r.prototype[j];
             if (!r.length_scale) {

@@ -89,7 +89,9 @@ void render_matrix(std::string& out, const study_report& s) {
 
 std::string group_label(const study_report& s, std::size_t g) {
     const pi_group& group = s.analysis.groups[g];
-    return fmt::format("π{} {}", g + 1, group.name.empty() ? group.formula : group.name);
+    // The name without its remarks: the groups list above gives them in full.
+    const std::string_view name = std::string_view(group.name).substr(0, group.name.find(" ("));
+    return fmt::format("π{} {}", g + 1, name.empty() ? std::string_view(group.formula) : name);
 }
 
 void render_plan(std::string& out, const study_report& s, const similitude_plan& plan) {
@@ -126,8 +128,8 @@ void render_plan(std::string& out, const study_report& s, const similitude_plan&
     }
     for (const auto& g : plan.groups)
         if (!g.scale_effect.empty())
-            out += fmt::format("    scale effect, {}: {}\n", group_label(s, g.group),
-                               g.scale_effect);
+            out +=
+                fmt::format("    scale effect, {}: {}\n", group_label(s, g.group), g.scale_effect);
     for (const auto& c : plan.conflicts)
         out += fmt::format("    cannot match together: {}\n", c.explanation);
     if (!plan.alternatives.empty()) {
@@ -274,8 +276,7 @@ std::string render_groups_json(const check_report& report) {
                 out += fmt::format("{}{{\"group\": {}, \"prototype\": {}, \"model\": {}, "
                                    "\"matched\": {}, \"ratio\": {}, \"scale_effect\": {}}}",
                                    i ? ", " : "", g.group + 1, num(g.prototype), num(g.model),
-                                   g.matched ? "true" : "false", num(g.ratio),
-                                   str(g.scale_effect));
+                                   g.matched ? "true" : "false", num(g.ratio), str(g.scale_effect));
             }
             out += "], \"variables\": [";
             for (std::size_t i = 0; i < s.plan->model.size(); ++i) {
