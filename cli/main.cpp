@@ -450,8 +450,11 @@ int run_groups(const std::vector<std::string>& args) {
     bool study_errors = false;
     std::string findings;
     for (const auto& d : report.diagnostics) {
+        // An unknown unit drops a declaration's dimension or a prototype value, so it stops
+        // or changes a study wherever it stands.
         const bool about_studies = d.rule == "study-problem" || d.rule == "value-mismatch" ||
                                    d.rule == "syntax" || d.rule == "unreadable" ||
+                                   d.rule == "unknown-unit" ||
                                    (d.rule == "undeclared" && !d.notes.empty() &&
                                     d.notes.front().message.find("study") != std::string::npos);
         if (!about_studies)
@@ -463,7 +466,9 @@ int run_groups(const std::vector<std::string>& args) {
         print(plumb::render_groups_json(report));
     } else {
         print(findings);
-        print(plumb::render_groups_text(report, style));
+        // With findings and no study left, the findings say why; "no study found" would not.
+        if (!report.studies.empty() || findings.empty())
+            print(plumb::render_groups_text(report, style));
     }
     if (report.input_failed)
         return exit_usage;

@@ -514,3 +514,18 @@ TEST_CASE("a query is a bare expression") {
     CHECK(open_findings.front().column == 7);
     CHECK(open_findings.front().message == close_paren);
 }
+
+TEST_CASE("model lines: the match clause and its tolerance") {
+    parses("model hull: scale = 1:30, match Froude");
+    parses("model hull: scale = 1:30, ρ = 998 kg/m^3, match Froude number");
+    parses("model pipe: match Reynolds and Froude within 0.5 %");
+    parses("model pipe: match Re and π2 within 1%, μ = 1e-3 Pa*s");
+    // "match" stays usable as a variable on a value line.
+    parses("model pipe: match = 3 m");
+    fails_with({"model pipe: match Re and ", 1, 26,
+                "expected a group after 'and', such as Froude, Re or π2"});
+    fails_with({"model pipe: match Re within x", 1, 29,
+                "expected the tolerance as a percentage after 'within', as in: within 0.5 %"});
+    fails_with({"model pipe: match Re within 2", 1, 30,
+                "expected '%' after the tolerance, as in: within 0.5 %"});
+}

@@ -50,7 +50,11 @@ struct worked_example {
     std::vector<group_variable> variables;
     std::optional<std::size_t> dependent;
 
-    [[nodiscard]] group_request request() const { return {variables, dependent, {}}; }
+    [[nodiscard]] group_request request() const {
+        return {variables,
+                dependent ? std::vector<std::size_t>{*dependent} : std::vector<std::size_t>{},
+                {}};
+    }
 };
 
 // F. M. White, Fluid Mechanics, 7th ed., §5.1: the drag of a sphere, F = f(D, V, ρ, μ).

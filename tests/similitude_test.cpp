@@ -100,6 +100,7 @@ similitude_request spillway() {
     r.model[6] = 1000.0;
     r.model[7] = 1.0e-3;
     r.model[8] = 0.073;
+    r.match = {2}; // a free surface: Froude similarity, as a hydraulic laboratory plans it
     return r;
 }
 
@@ -123,6 +124,7 @@ similitude_request ship() {
     r.prototype = {1.0e6, 1025.0, 1.22e-3, 10.0, 100.0, 9.81};
     r.length_scale = 1.0 / 25.0;
     r.model = {std::nullopt, 1025.0, 1.22e-3, std::nullopt, std::nullopt, std::nullopt};
+    r.match = {1}; // towing-tank practice: the Froude number
     return r;
 }
 
@@ -168,7 +170,9 @@ TEST_SUITE("similitude") {
 
     TEST_CASE(
         "similitude: the spillway's Reynolds and Weber numbers conflict with its Froude number") {
-        const auto plan = plumb::plan_model(spillway());
+        auto request = spillway();
+        request.match.clear(); // no choice made: the plan must not pick one silently
+        const auto plan = plumb::plan_model(request);
         REQUIRE(plan.conflicts.size() == 2);
 
         // Reynolds: ν_m = ν_p*λ^(3/2) = 1e-6/125 = 8e-9 m^2/s; at the same density μ_m = 8e-6 Pa*s;
@@ -184,7 +188,6 @@ TEST_SUITE("similitude") {
         CHECK(contains(re.explanation, "ν_model/ν_prototype = λ^(3/2) = 0.008"));
         CHECK(contains(re.explanation, "1.25e5 kg/m^3"));
         CHECK(contains(re.explanation, "λ^(-3/2) = 125"));
-        CHECK(contains(re.explanation, "scale effects"));
 
         // Weber: σ_m = σ_p*λ^2 = 0.073/625 = 1.168e-4 N/m.
         const auto& we = plan.conflicts[1];
@@ -192,6 +195,30 @@ TEST_SUITE("similitude") {
         INFO(we.explanation);
         CHECK(contains(we.explanation, "surface tension σ of 1.17e-4 N/m"));
         CHECK(contains(we.explanation, "σ_model/σ_prototype = λ^2 = 0.0016"));
+
+        // The choices: Froude, Reynolds or Weber, each fixing V; the speed waits for the choice.
+        REQUIRE(plan.alternatives.size() == 3);
+        CHECK_FALSE(plan.model[3].value.has_value());
+        CHECK(plan.model[3].how == "depends on the group chosen to match");
+        CHECK(plan.model[1].value == near(2.0 / 25.0)); // lengths follow the scale whatever
+        const auto& froude = plan.alternatives[0];
+        CHECK(froude.group == 2);
+        const auto speed = std::find_if(froude.fixed.begin(), froude.fixed.end(),
+                                        [](const auto& v) { return v.variable == 3; });
+        REQUIRE(speed != froude.fixed.end());
+        CHECK(speed->value == near(3.0)); // λ^(1/2)·15 m/s
+        REQUIRE(froude.off.size() == 2);
+        CHECK(froude.off[0].group == 4);
+        CHECK(froude.off[0].ratio == near(1.0 / 125.0));
+        CHECK(contains(froude.off[0].scale_effect, "lower in the model"));
+        // Matching Reynolds in the same water: V_m = V_p/λ = 375 m/s, and the Froude group
+        // V/√(gH) rises by λ^(-3/2) = 125.
+        const auto& reynolds = plan.alternatives[1];
+        CHECK(reynolds.group == 4);
+        const auto fast = std::find_if(reynolds.fixed.begin(), reynolds.fixed.end(),
+                                       [](const auto& v) { return v.variable == 3; });
+        REQUIRE(fast != reynolds.fixed.end());
+        CHECK(fast->value == near(375.0));
     }
 
     TEST_CASE("similitude: a ship model at Froude similarity and its Reynolds-number conflict") {
@@ -204,20 +231,31 @@ TEST_SUITE("similitude") {
 
         CHECK(plan.model[3].value == near(10.0 / 5.0)); // V: λ^(1/2)
         CHECK(plan.model[3].how == "from the Froude number");
+        // The Reynolds number is the scale effect the choice accepts, not a conflict: with the
+        // same water it falls by λ^(3/2) = 1/125, and friction counts for more in the model.
+        CHECK(plan.conflicts.empty());
+        REQUIRE(plan.groups.size() == 3);
+        CHECK_FALSE(plan.groups[0].matched);
+        CHECK(plan.groups[0].ratio == near(1.0 / 125.0));
+        CHECK(contains(plan.groups[0].scale_effect, "lower in the model"));
+        CHECK(contains(plan.groups[0].scale_effect, "viscous forces count for more"));
         CHECK(plan.model[4].value == near(4.0));
         CHECK(plan.model[0].value == near(1.0e6 / 15625.0)); // F: λ^3 = 1/15625
         CHECK(plan.model[0].how == "from F/(ρ*V^2*L^2)");
 
-        REQUIRE(plan.conflicts.size() == 1);
-        const auto& c = plan.conflicts[0];
+        auto unchosen = r;
+        unchosen.match.clear();
+        const auto open = plumb::plan_model(unchosen);
+        REQUIRE(open.conflicts.size() == 1);
+        const auto& c = open.conflicts[0];
         CHECK(c.groups == std::vector<std::size_t>{1, 0}); // Froude fixes V, Reynolds fails
         INFO(c.explanation);
-        CHECK(contains(c.explanation, "Matching the Froude number fixes V"));
+        CHECK(contains(c.explanation, "matching the Froude number fixes V"));
         CHECK(contains(c.explanation, "To match the Reynolds number as well"));
         // ν_m = (1.22e-3/1025)/125 = 9.52e-9 m^2/s; μ_m = 1.22e-3/125 = 9.76e-6 Pa*s.
         CHECK(contains(c.explanation, "9.76e-6 Pa*s"));
         CHECK(contains(c.explanation, "9.52e-9 m^2/s (ν_model/ν_prototype = λ^(3/2) = 0.008)"));
-        CHECK(contains(c.explanation, "with the Froude number matched"));
+        CHECK(open.alternatives.size() == 2);
 
         const auto caution = std::string(plumb::similitude_caution());
         CHECK(contains(caution, "partial similarity"));
@@ -367,7 +405,7 @@ TEST_SUITE("similitude") {
         // the analysis writes, the Froude-scaled speed and force and the Reynolds conflict follow.
         plumb::group_request request;
         request.variables = ship().variables;
-        request.dependent = 0;
+        request.dependents = {0};
         request.repeating = {1, 3, 4};
         auto analysis = plumb::analyse_groups(request);
         REQUIRE(analysis.problems.empty());
@@ -375,16 +413,29 @@ TEST_SUITE("similitude") {
 
         auto r = ship();
         r.analysis = analysis;
+        // Chosen by what the group holds, not by its place: the group with g is the Froude one.
+        r.match.clear();
+        for (std::size_t g = 0; g < analysis.groups.size(); ++g)
+            if (!analysis.groups[g].exponents[5].is_zero())
+                r.match.push_back(g);
+        REQUIRE(r.match.size() == 1);
         const auto plan = plumb::plan_model(r);
         INFO(all_problems(plan));
         CHECK(plan.problems.empty());
         CHECK(plan.model[3].value == near(2.0));
         CHECK(plan.model[0].value == near(64.0));
-        REQUIRE(plan.conflicts.size() == 1);
-        const std::size_t failing = plan.conflicts[0].groups.back();
-        CHECK_FALSE(analysis.groups[failing].exponents[2].is_zero()); // the group holding μ
-        INFO(plan.conflicts[0].explanation);
-        CHECK(contains(plan.conflicts[0].explanation, "λ^(3/2)"));
+        CHECK(plan.conflicts.empty());
+        std::size_t off = 0;
+        for (const auto& g : plan.groups) {
+            if (g.matched)
+                continue;
+            ++off;
+            CHECK_FALSE(analysis.groups[g.group].exponents[2].is_zero()); // the group holding μ
+            REQUIRE(g.ratio.has_value());
+            // ρVL/μ or its inverse: 1/125 or 125 (λ^(3/2) with the same water).
+            CHECK((*g.ratio == near(1.0 / 125.0) || *g.ratio == near(125.0)));
+        }
+        CHECK(off == 1);
     }
 
 } // TEST_SUITE

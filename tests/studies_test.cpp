@@ -204,3 +204,80 @@ TEST_CASE("studies: the text and JSON renderings carry the groups and the cautio
     CHECK(json.find("\"rank\": 3") != std::string::npos);
     CHECK(json.find("\"caution\":") != std::string::npos);
 }
+
+TEST_CASE("studies: several dependent variables each get a group of their own") {
+    // Pump affinity: head and power depend on flow, speed, size and fluid (Karassik et al.,
+    // Pump Handbook, 4th ed., sec. 2.1; from memory).
+    const auto r = check_text("pump.plumb", "gH : J/kg\nP : W\nQ : m^3/s\nn : 1/s\nD : m\n"
+                                            "ρ : kg/m^3\nμ : Pa*s\n"
+                                            "study pump: gH, P depend on Q, n, D, ρ, μ\n");
+    REQUIRE(r.studies.size() == 1);
+    const auto& groups = r.studies[0].analysis.groups;
+    REQUIRE(groups.size() == 4);
+    for (const std::size_t dependent : {0, 1}) {
+        std::size_t holders = 0;
+        for (const auto& g : groups)
+            holders += g.exponents[dependent].is_zero() ? 0 : 1;
+        CHECK(holders == 1);
+    }
+    CHECK(groups[0].name == "head coefficient");
+    CHECK(groups[1].name == "power number");
+}
+
+TEST_CASE("studies: a variable on an offset scale never repeats") {
+    const std::string decls = "h : W/(m^2*K)\nk : W/(m*K)\nL : m\nT_s : °C\n";
+    const auto chosen = check_text("t.plumb", decls + "study s: h depends on k, L, T_s\n");
+    CHECK(count_rule(chosen, plumb::rules::study_problem) == 1);
+    const auto named =
+        check_text("t.plumb", decls + "study s: h depends on k, L, T_s repeating k, L, T_s\n");
+    const auto* d = find_rule(named, plumb::rules::study_problem);
+    REQUIRE(d != nullptr);
+    CHECK(d->message.find("'T_s' is on a scale with a zero of its own") != std::string::npos);
+}
+
+TEST_CASE("studies: the match clause chooses the groups, and its mistakes are named") {
+    // White, Fluid Mechanics, 7th ed., sec. 5.5 (from memory): a hull towed at Froude scale,
+    // V_m = V_p·√λ. At 1:25, 10 m/s becomes 2 m/s.
+    const std::string hull = "R : kN\nρ : kg/m^3\nV : m/s\nL : m\nμ : Pa*s\ng : m/s^2\n"
+                             "study hull: R depends on ρ, V, L, μ, g\n"
+                             "prototype hull: R = 1000 kN, ρ = 1000 kg/m^3, V = 10 m/s, "
+                             "L = 100 m, μ = 1e-3 Pa*s, g = 9.81 m/s^2\n";
+    for (const std::string how : {"match Froude", "match Fr", "match froude number", "match π3"}) {
+        INFO(how);
+        const auto r = check_text("h.plumb", hull + "model hull: scale = 1:25, " + how + "\n");
+        REQUIRE(r.studies.size() == 1);
+        REQUIRE(r.studies[0].plan.has_value());
+        CHECK(r.studies[0].match == std::vector<std::size_t>{2});
+        CHECK(std::fabs(*r.studies[0].plan->model[2].value - 2.0) < 1e-9);
+        CHECK(count_rule(r, plumb::rules::study_problem) == 0);
+    }
+    SUBCASE("a name that is no group") {
+        const auto r = check_text("h.plumb", hull + "model hull: scale = 1:25, match Weber\n");
+        const auto* d = find_rule(r, plumb::rules::study_problem);
+        REQUIRE(d != nullptr);
+        CHECK(d->message == "'Weber' names no group of study 'hull'");
+    }
+    SUBCASE("a stated tolerance") {
+        // 2.0005 m/s is 0.025 % off the Froude speed, so V²/(Lg) is 0.05 % off: matched
+        // within 0.1 %, not within 0.01 %.
+        const std::string model = "model hull: scale = 1:25, V = 2.0005 m/s, match Froude";
+        const auto loose = check_text("h.plumb", hull + model + " within 0.1 %\n");
+        const auto tight = check_text("h.plumb", hull + model + " within 0.01 %\n");
+        REQUIRE(loose.studies[0].plan.has_value());
+        REQUIRE(tight.studies[0].plan.has_value());
+        CHECK(loose.studies[0].plan->groups[2].matched);
+        CHECK_FALSE(tight.studies[0].plan->groups[2].matched);
+    }
+    SUBCASE("a model length that contradicts the scale") {
+        const auto r = check_text("h.plumb", hull + "model hull: scale = 1:25, L = 5 m\n");
+        const auto* d = find_rule(r, plumb::rules::study_problem);
+        REQUIRE(d != nullptr);
+        CHECK(d->message.find("the model's L is 1:20 of the prototype's") != std::string::npos);
+        CHECK(d->message.find("scale = 1:25") != std::string::npos);
+    }
+    SUBCASE("an unknown unit on a value line is an error, not a dropped value") {
+        const auto r = check_text("h.plumb", hull + "model hull: scale = 1:25, μ = 1 blorp\n");
+        CHECK(count_rule(r, plumb::rules::unknown_unit) == 1);
+        CHECK(count_rule(r, plumb::rules::study_problem) == 1);
+    }
+}

@@ -239,7 +239,25 @@ struct scale_ratio : seq<digits, opt<one<'.'>, digits>, star<space>, one<':'>, s
 struct scale_number : seq<digits, opt<one<'.'>, star<digit>>, opt<decimal_exponent>> {};
 struct scale_value : sor<scale_ratio, scale_number> {};
 struct scale_assignment : seq<TAO_PEGTL_STRING("scale"), ws, one<'='>, ws, must<scale_value>> {};
-struct case_item : sor<scale_assignment, value_assignment> {};
+// Which groups the model must match: by the number's name, its symbol or its π label, and how
+// closely a model value must agree to count as matched.
+//   model hull: scale = 1:30, match Froude
+//   model pipe: scale = 1:4, match Reynolds and Froude within 0.5 %
+struct match_keyword_end : not_at<name_char> {};
+struct match_word
+    : seq<not_at<sor<TAO_PEGTL_STRING("and"), TAO_PEGTL_STRING("within")>, match_keyword_end>,
+          name> {};
+struct match_target : list<match_word, plus<space>> {};
+struct match_targets
+    : seq<match_target,
+          star<plus<space>, TAO_PEGTL_STRING("and"), plus<space>, must<match_target>>> {};
+struct tolerance_percent : seq<digits, opt<one<'.'>, star<digit>>> {};
+struct percent_sign : one<'%'> {};
+struct match_tolerance : if_must<seq<plus<space>, TAO_PEGTL_STRING("within"), plus<space>>,
+                                 tolerance_percent, ws, percent_sign> {};
+struct match_clause : seq<TAO_PEGTL_STRING("match"), plus<space>, not_at<one<'='>>,
+                          must<match_targets>, opt<match_tolerance>> {};
+struct case_item : sor<scale_assignment, match_clause, value_assignment> {};
 struct case_items : list_must<case_item, list_separator> {};
 struct prototype_keyword : TAO_PEGTL_STRING("prototype") {};
 struct model_keyword : TAO_PEGTL_STRING("model") {};

@@ -45,9 +45,13 @@ template <> inline constexpr const char* error_message<repeating_variables> = "e
 template <> inline constexpr const char* error_message<study_variable> = "expected a variable name after ','";
 template <> inline constexpr const char* error_message<repeating_variable> = "expected a variable name after ','";
 template <> inline constexpr const char* error_message<case_items> = "expected values such as: V = 3 m/s, D = 0.5 m (and, for a model, scale = 1:25)";
-template <> inline constexpr const char* error_message<case_item> = "expected a value such as V = 3 m/s, or scale = 1:25";
+template <> inline constexpr const char* error_message<case_item> = "expected a value such as V = 3 m/s, scale = 1:25, or match Froude";
 template <> inline constexpr const char* error_message<value_quantity> = "expected a number and its unit, as in 3 m/s";
 template <> inline constexpr const char* error_message<scale_value> = "expected the model scale as a ratio such as 1:25, or a number such as 0.04";
+template <> inline constexpr const char* error_message<match_targets> = "expected the groups the model must match after 'match', as in: match Froude, or match Reynolds and Froude";
+template <> inline constexpr const char* error_message<match_target> = "expected a group after 'and', such as Froude, Re or π2";
+template <> inline constexpr const char* error_message<tolerance_percent> = "expected the tolerance as a percentage after 'within', as in: within 0.5 %";
+template <> inline constexpr const char* error_message<percent_sign> = "expected '%' after the tolerance, as in: within 0.5 %";
 template <> inline constexpr const char* error_message<brace_close> = "expected '}' to close the braces; inside them goes a unit such as m/s or a constant such as g_n";
 template <> inline constexpr const char* error_message<new_unit_value> = "expected the unit's size as a number and a known unit, as in: measure mgd = 1e6 gal/d";
 template <> inline constexpr const char* error_message<origin_value> = "expected where the scale reads zero, as a number and a known unit, as in: measure kPag = kPa zero at 101.325 kPa";

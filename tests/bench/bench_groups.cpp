@@ -96,7 +96,7 @@ int main(int argc, char** argv) {
     fmt::print("{:>9} {:>5} {:>7} {:>12} {:>12}\n", "variables", "rank", "groups", "best µs",
                "median µs");
     for (std::size_t n : {8, 16, 32, 64, 128}) {
-        const plumb::group_request request{random_variables(rng, n), 0, {}};
+        const plumb::group_request request{random_variables(rng, n), {0}, {}};
         const auto a = plumb::analyse_groups(request);
         const std::string wrong = wrong_answer(request, a);
         if (!wrong.empty()) {
@@ -118,7 +118,7 @@ int main(int argc, char** argv) {
         e[static_cast<std::size_t>((i + 3) % 7)] = 3 + i;
         huge.push_back({"y" + std::to_string(i + 1), plumb::dimension::from_exponents(e)});
     }
-    const plumb::group_request overflow_request{huge, std::nullopt, {}};
+    const plumb::group_request overflow_request{huge, {}, {}};
     const auto a = plumb::analyse_groups(overflow_request);
     const bool reported = a.groups.empty() && !a.problems.empty() &&
                           a.problems.front().find("64-bit") != std::string::npos;

@@ -53,6 +53,11 @@ struct study_report {
     std::optional<double> length_scale;           // from the model line
     std::vector<std::optional<double>> prototype; // SI value per variable, when given
     std::vector<std::optional<double>> model;
+    // Per variable, the unit its values are shown in: as given on the prototype line, else as
+    // declared (an offset unit such as °C is shown as declared only when given so).
+    std::vector<shown_unit> units;
+    std::vector<std::size_t> match; // groups the model line says to match
+    double tolerance = default_match_tolerance;
     std::optional<similitude_plan> plan; // when a prototype line exists
 };
 

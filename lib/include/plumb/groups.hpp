@@ -47,6 +47,9 @@ rational_matrix nullspace_basis(const rational_matrix& m);
 struct group_variable {
     std::string name; // as written in the .plumb file: "ρ", "F_D"
     dimension dim;
+    // Declared on a scale with a zero of its own (°C, psig): its values are not proportional to
+    // the quantity, so it cannot be a repeating variable.
+    bool offset_scale = false;
 };
 
 // Rows are the base dimensions that occur in at least one variable, in SI order.
@@ -58,8 +61,8 @@ dimension_matrix build_dimension_matrix(std::span<const group_variable> variable
 
 struct group_request {
     std::vector<group_variable> variables;
-    std::optional<std::size_t> dependent; // index into variables
-    std::vector<std::size_t> repeating;   // given by the user; empty: chosen by the rule
+    std::vector<std::size_t> dependents; // indices into variables; each gets a group of its own
+    std::vector<std::size_t> repeating;  // given by the user; empty: chosen by the rule
 };
 
 struct pi_group {
@@ -69,7 +72,8 @@ struct pi_group {
     // Filled by name_groups: "Reynolds number", "inverse of the Reynolds number",
     // "square of the Froude number"; empty when no named number fits.
     std::string name;
-    // How a named group was recombined from the basis ("π2 / π3"); empty when it is one.
+    // How a named group was recombined from the groups elimination gave, written out with
+    // their formulas ("(ρ*V*D/μ)^-1", "(g*L^3/ν^2)·(β*ΔT)"); empty when it is one of them.
     std::string recombined_from;
 };
 
@@ -112,12 +116,29 @@ void name_groups(group_analysis& analysis, std::span<const group_variable> varia
 
 // ---- Similitude --------------------------------------------------------------------------
 
+// How a variable's values are written: the unit the user gave or declared. SI value =
+// number * factor + offset.
+struct shown_unit {
+    std::string text; // "kN", "rpm"; empty: dimensionless or coherent SI
+    double factor = 1.0;
+    double offset = 0.0;
+};
+
+// Agreement to about four significant digits: a model speed rounded to four digits still
+// matches its Froude number (common practice in reporting model test conditions).
+constexpr double default_match_tolerance = 1e-3;
+
 struct similitude_request {
     std::vector<group_variable> variables;
     group_analysis analysis;                      // groups over those variables
     std::vector<std::optional<double>> prototype; // SI value per variable
     double length_scale = 1.0;                    // model length / prototype length
     std::vector<std::optional<double>> model;     // SI values given for the model (its fluid)
+    // The groups the model must match, as the user chose them; empty: every group, and where
+    // they cannot all match, the plan lists the alternatives instead of choosing.
+    std::vector<std::size_t> match;
+    double tolerance = default_match_tolerance; // relative; a group within it counts as matched
+    std::vector<shown_unit> units;              // per variable; missing ones show coherent SI
 };
 
 struct group_values {
@@ -125,6 +146,10 @@ struct group_values {
     std::optional<double> prototype;
     std::optional<double> model;
     bool matched = false;
+    // For a group that is not matched: model / prototype, and which way the scale effect goes
+    // ("lower in the model: viscous forces count for more in the model than at full size").
+    std::optional<double> ratio;
+    std::string scale_effect;
 };
 
 struct model_variable {
@@ -138,10 +163,20 @@ struct unmatched_groups {
     std::string explanation;         // in plain words, with the property a model fluid would need
 };
 
+// One way to run a model whose groups cannot all match: match this group, and these are off.
+struct plan_alternative {
+    std::size_t group;                 // the group matched
+    std::vector<model_variable> fixed; // the variables matching it fixes
+    std::vector<group_values> off;     // the groups then not matched
+};
+
 struct similitude_plan {
     std::vector<group_values> groups;
     std::vector<model_variable> model;
     std::vector<unmatched_groups> conflicts;
+    // Filled when no groups were chosen and not all can match: the plan then fixes only what
+    // every choice agrees on, and lists the choices.
+    std::vector<plan_alternative> alternatives;
     std::vector<std::string> problems; // missing prototype values and the like
 };
 

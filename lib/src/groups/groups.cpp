@@ -34,6 +34,9 @@ dimension dimension_of(std::int64_t m, std::int64_t l, std::int64_t t) {
 // The rule's order of preference: a density, a speed and a length together carry mass, length
 // and time in the form that yields the groups engineers recognise (Reynolds, Froude, drag
 // coefficient), so they come first.
+// After them, the other mechanical variables (mass, length and time only: geometry, kinematics,
+// dynamics), then the rest; a coefficient per degree (an expansion coefficient) comes last,
+// since repeating it would hide the temperature difference inside every group it enters.
 int preference(const dimension& d) {
     if (d == dimension_of(1, -3, 0))
         return 0;
@@ -41,7 +44,19 @@ int preference(const dimension& d) {
         return 1;
     if (d == dimension_of(0, 1, 0))
         return 2;
-    return 3;
+    bool mechanical = true;
+    for (std::size_t b = 3; b < base_dimension_count; ++b)
+        mechanical = mechanical && d.exponents()[b].is_zero();
+    if (mechanical)
+        return 3;
+    if (d == dimension::base(base_dimension::temperature).pow(-1))
+        return 5;
+    return 4;
+}
+
+bool is_dependent(const group_request& request, std::size_t i) {
+    return std::find(request.dependents.begin(), request.dependents.end(), i) !=
+           request.dependents.end();
 }
 
 // Sum of |exponents|, exact; empty when even that sum leaves 64 bits, which sorts such a
@@ -88,8 +103,10 @@ std::vector<std::size_t> choose_repeating(const group_request& request,
                                           const rational_matrix& values, std::size_t rank) {
     const auto& variables = request.variables;
     std::vector<std::size_t> candidates;
+    // A value on an offset scale (°C) is not proportional to its quantity: as a repeating
+    // variable it would make groups that change with the choice of zero.
     for (std::size_t i = 0; i < variables.size(); ++i)
-        if (i != request.dependent)
+        if (!is_dependent(request, i) && !variables[i].offset_scale)
             candidates.push_back(i);
     std::vector<std::optional<rational>> totals;
     for (const auto& v : variables)
@@ -136,10 +153,16 @@ std::vector<std::string> check_given(const group_request& request, const rationa
             problems.push_back(quoted(variables[index]) +
                                " is named more than once among the repeating variables");
         seen[index] = true;
-        if (request.dependent == index)
+        if (is_dependent(request, index))
             problems.push_back(quoted(variables[index]) +
                                " is the dependent variable, so it cannot repeat: it would appear "
                                "in every group instead of standing alone in one");
+        if (variables[index].offset_scale)
+            problems.push_back(quoted(variables[index]) +
+                               " is on a scale with a zero of its own (such as °C), so it cannot "
+                               "repeat: its values are not proportional to the quantity, and the "
+                               "groups would change with the choice of zero; declare it in K, or "
+                               "use a temperature difference");
     }
     if (given.size() != rank)
         problems.push_back(std::to_string(rank) +
@@ -223,11 +246,12 @@ std::vector<pi_group> form_groups(const group_request& request, const rational_m
         repeats[r] = true;
     std::vector<std::size_t> order = repeating;
     std::vector<std::size_t> others;
-    // The dependent variable's group comes first: it is the one the others are a function of.
-    if (request.dependent)
-        others.push_back(*request.dependent);
+    // The dependent variables' groups come first: they are what the others are a function of.
+    for (const std::size_t d : request.dependents)
+        if (!repeats[d])
+            others.push_back(d);
     for (std::size_t i = 0; i < variables.size(); ++i)
-        if (!repeats[i] && i != request.dependent)
+        if (!repeats[i] && !is_dependent(request, i))
             others.push_back(i);
     order.insert(order.end(), others.begin(), others.end());
 
@@ -251,7 +275,7 @@ std::vector<pi_group> form_groups(const group_request& request, const rational_m
         g.exponents[v] = 1;
         for (std::size_t i = 0; i < repeating.size(); ++i)
             g.exponents[repeating[i]] = -reduced.at(i, repeating.size() + j);
-        g.has_dependent = request.dependent == v;
+        g.has_dependent = is_dependent(request, v);
         if (!g.has_dependent)
             scale_to_whole(g.exponents, v);
         g.formula = group_formula(variables, g.exponents);
@@ -274,11 +298,13 @@ void analyse(const group_request& request, group_analysis& result) {
         result.problems.emplace_back("no variables were given");
         return;
     }
-    if (request.dependent && *request.dependent >= variables.size()) {
-        result.problems.push_back("the dependent variable (number " +
-                                  std::to_string(*request.dependent + 1) + ") is not among the " +
-                                  std::to_string(variables.size()) + " variables");
-        return;
+    for (const std::size_t d : request.dependents) {
+        if (d >= variables.size()) {
+            result.problems.push_back("the dependent variable (number " + std::to_string(d + 1) +
+                                      ") is not among the " + std::to_string(variables.size()) +
+                                      " variables");
+            return;
+        }
     }
     result.matrix = build_dimension_matrix(variables);
     const rational_matrix& values = result.matrix.values;
@@ -293,13 +319,17 @@ void analyse(const group_request& request, group_analysis& result) {
                                   ", so a variable the phenomenon depends on is missing");
         return;
     }
-    if (request.dependent) {
-        std::vector<std::size_t> rest;
-        for (std::size_t i = 0; i < variables.size(); ++i)
-            if (i != *request.dependent)
-                rest.push_back(i);
-        if (matrix_rank(select_columns(values, rest)) < result.rank) {
-            const group_variable& dep = variables[*request.dependent];
+    // Every dependent variable must be balanced by the independent ones alone.
+    std::vector<std::size_t> independent;
+    for (std::size_t i = 0; i < variables.size(); ++i)
+        if (!is_dependent(request, i))
+            independent.push_back(i);
+    for (const std::size_t d : request.dependents) {
+        std::vector<std::size_t> rest = independent;
+        rest.push_back(d);
+        if (matrix_rank(select_columns(values, independent)) <
+            matrix_rank(select_columns(values, rest))) {
+            const group_variable& dep = variables[d];
             result.problems.push_back(
                 quoted(dep) +
                 " cannot enter any dimensionless group: no combination of the "
@@ -313,6 +343,18 @@ void analyse(const group_request& request, group_analysis& result) {
         if (!result.problems.empty())
             return;
         result.repeating = choose_repeating(request, values, result.rank);
+        if (result.repeating.size() < result.rank) {
+            std::vector<std::string> offset;
+            for (const auto& v : variables)
+                if (v.offset_scale)
+                    offset.push_back(v.name);
+            result.problems.push_back(
+                "the repeating variables cannot be chosen without " + join_names(offset) +
+                ", which " + (offset.size() == 1 ? "is" : "are") +
+                " on a scale with a zero of its own (such as °C): declare it in K, or use a "
+                "temperature difference");
+            return;
+        }
     } else {
         result.repeating = request.repeating;
         auto reasons = check_given(request, values, result.rank);

@@ -46,6 +46,7 @@ constexpr exponents pressure = dims(1, -1, -2);  // also moduli of elasticity
 constexpr exponents surface_tension = dims(1, 0, -2);
 constexpr exponents force = dims(1, 1, -2);
 constexpr exponents power = dims(1, 2, -3);
+constexpr exponents torque = dims(1, 2, -2);
 constexpr exponents specific_energy = dims(0, 2, -2); // gH as one variable
 constexpr exponents temperature = dims(0, 0, 0, 1);
 constexpr exponents expansion = dims(0, 0, 0, -1); // thermal expansion coefficient
@@ -74,6 +75,7 @@ enum class hint : std::uint8_t {
     lift_force,
     pressure_difference,
     modulus,
+    rotational_speed,
 };
 
 struct slot {
@@ -194,7 +196,11 @@ constexpr definition table[] = {
     def("Bond (Eötvös) number",
         {q(density, 1), q(acceleration, 1), q(length, 2), q(surface_tension, -1)}),
     // Common practice (ISO 80000-11:2019 lists it too, from memory): Ga = gl³/ν².
-    def("Galilei number", {q(acceleration, 1), q(length, 3), q(diffusivity, -2)}),
+    // Only a kinematic viscosity makes gl³/ν² the Galilei number: gl³/a², with a thermal
+    // diffusivity, is no number of its own.
+    def("Galilei number",
+        {q(acceleration, 1), q(length, 3), q(diffusivity, -2, hint::kinematic_viscosity)}, {},
+        kind::needs_hint),
     def("Galilei number", {q(acceleration, 1), q(length, 3), q(density, 2), q(viscosity, -2)}),
     // Common practice (ISO 80000-11:2019 lists it too, from memory): Ar = gl³Δρ/(ρν²).
     def("Archimedes number",
@@ -301,7 +307,17 @@ constexpr definition table[] = {
     noted(
         def("head coefficient", {q(pressure, 1), q(density, -1), q(frequency, -2), q(length, -2)}),
         "a pressure rise in place of ρgH", max_slots),
-    def("power coefficient", {q(power, 1), q(density, -1), q(frequency, -3), q(length, -5)}),
+    // Called the power number where it describes the power drawn by a pump, fan or stirrer.
+    def("power number", {q(power, 1), q(density, -1), q(frequency, -3), q(length, -5)}),
+    // Propellers: J. Carlton, Marine Propellers and Propulsion, 2nd ed., Butterworth-Heinemann,
+    // 2007, ch. 6 (open-water characteristics; chapter from memory): the advance ratio
+    // J = V_a/(nD), the thrust coefficient K_T = T/(ρn²D⁴), the torque coefficient
+    // K_Q = Q/(ρn²D⁵). V/(nD) has the dimensions of an inverse Strouhal number, so only a
+    // rotational speed by name (n, N, ω) makes it an advance ratio.
+    def("advance ratio", {q(speed, 1), q(frequency, -1, hint::rotational_speed), q(length, -1)},
+        "a speed over a rotational speed times a length", kind::needs_hint),
+    def("thrust coefficient", {q(force, 1), q(density, -1), q(frequency, -2), q(length, -4)}),
+    def("torque coefficient", {q(torque, 1), q(density, -1), q(frequency, -2), q(length, -5)}),
     // Common practice for weirs and spillways: the discharge group Q/√(gH⁵), H a head or height.
     // It is the discharge coefficient of the V-notch weir equation
     // Q = (8/15)·C_d·√(2g)·tan(θ/2)·H^(5/2) but for the constant factors (e.g. Munson et al.,
@@ -367,6 +383,8 @@ bool suggests(hint h, std::string_view name) {
         return one_of(base, {"p", "P", "Δp", "ΔP", "dp", "dP"}) || name == "delta_p";
     case hint::modulus:
         return one_of(base, {"K", "E", "B", "G"});
+    case hint::rotational_speed:
+        return one_of(base, {"n", "N", "ω", "Ω", "omega", "rpm", "rps"});
     }
     return false;
 }
@@ -637,8 +655,8 @@ quality quality_of(const std::vector<candidate>& cs, bool fractional) {
     return q;
 }
 
-std::string basis_term(std::size_t index, rational e) {
-    std::string out = "π" + std::to_string(index + 1);
+std::string basis_term(const std::string& formula, rational e) {
+    std::string out = "(" + formula + ")";
     const rational magnitude = e < rational(0) ? -e : e;
     if (magnitude == rational(1))
         return out;
@@ -647,8 +665,10 @@ std::string basis_term(std::size_t index, rational e) {
     return out + "^(" + magnitude.to_string() + ")";
 }
 
-// "1/π2", "π2·π3", "π2/π1^2" over the basis groups involved, lowest index first.
-std::string recombination_text(std::vector<std::pair<std::size_t, rational>> terms) {
+// "1/(ρ*V*D/μ)", "(g*L^3/ν^2)·(β*ΔT)" over the groups elimination gave, written out: the reader
+// never saw them numbered, since the recombined group takes the place of its first term.
+std::string recombination_text(std::vector<std::pair<std::size_t, rational>> terms,
+                               const std::vector<std::string>& basis) {
     std::sort(terms.begin(), terms.end(),
               [](const auto& a, const auto& b) { return a.first < b.first; });
     std::string above;
@@ -657,9 +677,9 @@ std::string recombination_text(std::vector<std::pair<std::size_t, rational>> ter
         if (e.is_zero())
             continue;
         if (rational(0) < e)
-            above += (above.empty() ? "" : "·") + basis_term(index, e);
+            above += (above.empty() ? "" : "·") + basis_term(basis[index], e);
         else
-            below.push_back(basis_term(index, e));
+            below.push_back(basis_term(basis[index], e));
     }
     if (above.empty())
         above.push_back('1'); // appended, not assigned: g++ 12 warns falsely on `= "1"` (PR 105651)
@@ -717,6 +737,9 @@ void name_groups(group_analysis& analysis, std::span<const group_variable> varia
     };
 
     std::vector<bool> replaced(n, false);
+    std::vector<std::string> basis;
+    for (const pi_group& g : groups)
+        basis.push_back(g.formula);
     for (std::size_t i = 0; i < n; ++i) {
         const std::vector<rational> own = groups[i].exponents;
         const bool whole = all_whole(own);
@@ -767,7 +790,7 @@ void name_groups(group_analysis& analysis, std::span<const group_variable> varia
             continue;
         groups[i].exponents = std::move(best->exponents);
         groups[i].formula = group_formula(variables, groups[i].exponents);
-        groups[i].recombined_from = recombination_text(std::move(best->terms));
+        groups[i].recombined_from = recombination_text(std::move(best->terms), basis);
         replaced[i] = true;
     }
 

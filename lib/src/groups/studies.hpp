@@ -1,9 +1,9 @@
 // From `study`, `prototype` and `model` lines to group analyses and model plans.
 #pragma once
 
-#include "plumb/check.hpp"
 #include "model/symbol_table.hpp"
 #include "model/syntax_tree.hpp"
+#include "plumb/check.hpp"
 
 #include <vector>
 

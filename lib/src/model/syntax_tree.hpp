@@ -110,6 +110,9 @@ struct case_value {
     std::optional<dimension> dim; // of the unit; dimensionless without one; empty on error
     double si_value = 0.0;
     bool has_unit = false;
+    span unit;                // the unit as written; empty without one
+    double unit_factor = 1.0; // SI value of one unit, and the SI value where its scale reads 0
+    double unit_offset = 0.0;
 };
 
 // prototype NAME: values   /   model NAME: scale = 1:25, values
@@ -121,6 +124,10 @@ struct study_case {
     span scale_text;
     std::uint32_t first_value;
     std::uint32_t value_count;
+    std::uint32_t first_match = 0; // into case_matches: the groups after "match"
+    std::uint32_t match_count = 0;
+    std::optional<double> tolerance; // relative, from "within 0.5 %"
+    span tolerance_text;
 };
 
 // measure NAME = [number] unit [zero at number unit]: a unit of the user's own, known after
@@ -156,6 +163,7 @@ struct parsed_file {
     std::vector<span> study_names;
     std::vector<study_case> cases;
     std::vector<case_value> case_values;
+    std::vector<span> case_matches;
     std::vector<diagnostic> diagnostics; // syntax errors and unknown units
     bool has_syntax_error = false;
 };

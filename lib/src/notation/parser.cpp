@@ -121,6 +121,10 @@ struct parse_state {
     std::optional<double> pending_scale;
     span pending_scale_text{};
     std::optional<unit_value> pending_value_unit;
+    span pending_value_unit_text{};
+    std::uint32_t line_first_case_match = 0;
+    std::optional<double> pending_tolerance;
+    span pending_tolerance_text{};
 
     [[nodiscard]] span range(const char* b, const char* e) const {
         return {static_cast<std::uint32_t>(b - file_begin),
@@ -179,6 +183,9 @@ struct parse_state {
         pending_is_model = false;
         pending_scale.reset();
         pending_value_unit.reset();
+        line_first_case_match = static_cast<std::uint32_t>(out.case_matches.size());
+        pending_tolerance.reset();
+        pending_tolerance_text = {};
     }
     void report(std::string_view rule, std::string message, span where) {
         diagnostic d;
@@ -704,7 +711,8 @@ template <> struct action<nt::scale_value> {
     }
 };
 template <> struct action<nt::value_unit> {
-    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_value_unit_text = s.range(in);
         s.pending_value_unit = s.units.back();
         s.units.pop_back();
     }
@@ -727,11 +735,13 @@ template <> struct action<nt::value_assignment> {
         const double number = std::strtod(std::string(text.substr(value_begin)).c_str(), nullptr);
         if (s.pending_value_unit) {
             v.has_unit = true;
+            v.unit = s.pending_value_unit_text;
             if (s.pending_value_unit->ok) {
                 v.dim = s.pending_value_unit->dim;
                 const unit_definition* single = s.pending_value_unit->single;
-                v.si_value =
-                    number * s.pending_value_unit->factor + (single ? single->offset : 0.0);
+                v.unit_factor = s.pending_value_unit->factor;
+                v.unit_offset = single ? single->offset : 0.0;
+                v.si_value = number * v.unit_factor + v.unit_offset;
             }
         } else {
             v.dim = dimension{};
@@ -745,9 +755,23 @@ template <> struct action<nt::case_statement> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const auto count =
             static_cast<std::uint32_t>(s.out.case_values.size()) - s.line_first_case_value;
+        const auto matches =
+            static_cast<std::uint32_t>(s.out.case_matches.size()) - s.line_first_case_match;
         s.out.cases.push_back({s.range(in), s.pending_study_name, s.pending_is_model,
                                s.pending_scale, s.pending_scale_text, s.line_first_case_value,
-                               count});
+                               count, s.line_first_case_match, matches, s.pending_tolerance,
+                               s.pending_tolerance_text});
+    }
+};
+template <> struct action<nt::match_target> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.out.case_matches.push_back(s.range(in));
+    }
+};
+template <> struct action<nt::tolerance_percent> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_tolerance_text = s.range(in);
+        s.pending_tolerance = std::strtod(std::string(in.string_view()).c_str(), nullptr) / 100.0;
     }
 };
 
@@ -787,13 +811,14 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin) {
 // Rolls back whatever a failed line added, so the tree holds only complete statements.
 struct tree_mark {
     std::size_t nodes, call_args, quantities, sides, formulas, declarations, names, uses, units,
-        studies, study_names, cases, case_values, diagnostics;
+        studies, study_names, cases, case_values, case_matches, diagnostics;
     explicit tree_mark(const syntax::parsed_file& f)
         : nodes(f.nodes.size()), call_args(f.call_args.size()), quantities(f.quantities.size()),
           sides(f.sides.size()), formulas(f.formulas.size()), declarations(f.declarations.size()),
           names(f.names.size()), uses(f.uses.size()), units(f.units.size()),
           studies(f.studies.size()), study_names(f.study_names.size()), cases(f.cases.size()),
-          case_values(f.case_values.size()), diagnostics(f.diagnostics.size()) {}
+          case_values(f.case_values.size()), case_matches(f.case_matches.size()),
+          diagnostics(f.diagnostics.size()) {}
     void restore(syntax::parsed_file& f) const {
         f.nodes.resize(nodes);
         f.call_args.resize(call_args);
@@ -808,6 +833,7 @@ struct tree_mark {
         f.study_names.resize(study_names);
         f.cases.resize(cases);
         f.case_values.resize(case_values);
+        f.case_matches.resize(case_matches);
         f.diagnostics.resize(diagnostics);
     }
 };

@@ -2,6 +2,7 @@
 #include "plumb/render.hpp"
 #include "plumb/version.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <fmt/format.h>
 
@@ -48,8 +49,22 @@ std::string si_unit(const dimension& d) {
     return out.empty() ? "(dimensionless)" : out;
 }
 
+// Four significant figures at most and no float noise: "999", "1.643", "1.2e+06" only where
+// plain digits would mislead.
 std::string number(double v) {
     return fmt::format("{:.4g}", v);
+}
+
+// A variable's value in the unit the user gave or declared: "43.27 kN", "1.643 m/s".
+std::string value_in_unit(double si, const study_report& s, std::size_t variable) {
+    const group_variable& var = s.variables[variable];
+    if (variable < s.units.size() && !s.units[variable].text.empty() &&
+        s.units[variable].factor != 0.0) {
+        const shown_unit& u = s.units[variable];
+        return number((si - u.offset) / u.factor) + " " + u.text;
+    }
+    const std::string unit = var.dim.is_dimensionless() ? std::string() : si_unit(var.dim);
+    return unit.empty() ? number(si) : number(si) + " " + unit;
 }
 
 void render_matrix(std::string& out, const study_report& s) {
@@ -72,33 +87,67 @@ void render_matrix(std::string& out, const study_report& s) {
     }
 }
 
+std::string group_label(const study_report& s, std::size_t g) {
+    const pi_group& group = s.analysis.groups[g];
+    // The name without its remarks: the groups list above gives them in full.
+    const std::string_view name = std::string_view(group.name).substr(0, group.name.find(" ("));
+    return fmt::format("π{} {}", g + 1, name.empty() ? std::string_view(group.formula) : name);
+}
+
 void render_plan(std::string& out, const study_report& s, const similitude_plan& plan) {
-    out += fmt::format("  model plan (scale {}), values in SI units:\n",
+    std::string chosen;
+    for (const std::size_t g : s.match)
+        chosen += (chosen.empty() ? "" : ", ") + group_label(s, g);
+    out += fmt::format("  model plan (scale {}{}; matched within {}%):\n",
                        s.length_scale ? fmt::format("1:{:.4g}", 1.0 / *s.length_scale)
-                                      : std::string("not given: 1:1 assumed"));
+                                      : std::string("not given: 1:1 assumed"),
+                       chosen.empty() ? "" : ", matching " + chosen, number(s.tolerance * 100));
     std::size_t label_width = 0;
+    for (const auto& g : plan.groups)
+        label_width = std::max(label_width, display_width(group_label(s, g.group)));
     for (const auto& g : plan.groups) {
-        const pi_group& group = s.analysis.groups[g.group];
-        label_width =
-            std::max(label_width, display_width(group.name.empty() ? group.formula : group.name));
-    }
-    for (const auto& g : plan.groups) {
-        const pi_group& group = s.analysis.groups[g.group];
-        out += fmt::format("    π{} {}  prototype {:>11}  model {:>11}  {}\n", g.group + 1,
-                           pad(group.name.empty() ? group.formula : group.name, label_width),
+        std::string verdict = g.matched ? "matched" : g.model ? "off" : "-";
+        if (g.matched && std::find(s.match.begin(), s.match.end(), g.group) != s.match.end())
+            verdict = "matched (chosen)";
+        out += fmt::format("    {}  prototype {:>10}  model {:>10}  {}\n",
+                           pad(group_label(s, g.group), label_width),
                            g.prototype ? number(*g.prototype) : "-",
-                           g.model ? number(*g.model) : "-", g.matched ? "matched" : "NOT matched");
+                           g.model ? number(*g.model) : "-", verdict);
     }
+    std::size_t name_width = 0;
+    for (const auto& v : plan.model)
+        name_width = std::max(name_width, display_width(s.variables[v.variable].name));
+    out += "    model values:\n";
     for (const auto& v : plan.model) {
-        const group_variable& var = s.variables[v.variable];
         const auto& proto =
             s.prototype.size() > v.variable ? s.prototype[v.variable] : std::nullopt;
-        out += fmt::format("    {} = {} {}   (prototype {}; {})\n", pad(var.name, 6),
-                           v.value ? number(*v.value) : "?", si_unit(var.dim),
-                           proto ? number(*proto) : "?", v.how);
+        out += fmt::format("      {} = {}   (prototype {}; {})\n",
+                           pad(s.variables[v.variable].name, name_width),
+                           v.value ? value_in_unit(*v.value, s, v.variable) : "?",
+                           proto ? value_in_unit(*proto, s, v.variable) : "not given", v.how);
     }
+    for (const auto& g : plan.groups)
+        if (!g.scale_effect.empty())
+            out +=
+                fmt::format("    scale effect, {}: {}\n", group_label(s, g.group), g.scale_effect);
     for (const auto& c : plan.conflicts)
         out += fmt::format("    cannot match together: {}\n", c.explanation);
+    if (!plan.alternatives.empty()) {
+        out += "    not every group can match with these model values; say which the model must "
+               "match, as in 'match Froude' on the model line. The choices:\n";
+        for (const auto& a : plan.alternatives) {
+            std::string fixed;
+            for (const auto& v : a.fixed)
+                fixed += fmt::format("{}{} = {}", fixed.empty() ? "" : ", ",
+                                     s.variables[v.variable].name,
+                                     value_in_unit(*v.value, s, v.variable));
+            out += fmt::format("      match {}: {}\n", group_label(s, a.group),
+                               fixed.empty() ? std::string("fixes nothing further") : fixed);
+            for (const auto& off : a.off)
+                out += fmt::format("        {} off: {}\n", group_label(s, off.group),
+                                   off.scale_effect);
+        }
+    }
     out += fmt::format("  caution: {}\n", similitude_caution());
 }
 
@@ -136,7 +185,7 @@ std::string render_groups_text(const check_report& report, const text_style& /*s
             const pi_group& g = s.analysis.groups[i];
             std::string remark = g.name;
             if (!g.recombined_from.empty())
-                remark += fmt::format("{}recombined as {}", remark.empty() ? "" : "; ",
+                remark += fmt::format("{}recombined from {}", remark.empty() ? "" : "; ",
                                       g.recombined_from);
             if (g.has_dependent)
                 remark += remark.empty() ? "holds the dependent variable"
@@ -168,7 +217,8 @@ std::string render_groups_json(const check_report& report) {
         return out + "\"";
     };
     const auto num = [](const std::optional<double>& v) {
-        return v && std::isfinite(*v) ? fmt::format("{:.17g}", *v) : std::string("null");
+        // Ten significant figures: far beyond any input, short of float noise.
+        return v && std::isfinite(*v) ? fmt::format("{:.10g}", *v) : std::string("null");
     };
     std::string out = fmt::format(
         "{{\n  \"tool\": \"plumb\",\n  \"version\": \"{}\",\n  \"schema\": 1,\n  \"studies\": [",
@@ -223,10 +273,10 @@ std::string render_groups_json(const check_report& report) {
                                num(s.length_scale));
             for (std::size_t i = 0; i < s.plan->groups.size(); ++i) {
                 const auto& g = s.plan->groups[i];
-                out += fmt::format(
-                    "{}{{\"group\": {}, \"prototype\": {}, \"model\": {}, \"matched\": {}}}",
-                    i ? ", " : "", g.group + 1, num(g.prototype), num(g.model),
-                    g.matched ? "true" : "false");
+                out += fmt::format("{}{{\"group\": {}, \"prototype\": {}, \"model\": {}, "
+                                   "\"matched\": {}, \"ratio\": {}, \"scale_effect\": {}}}",
+                                   i ? ", " : "", g.group + 1, num(g.prototype), num(g.model),
+                                   g.matched ? "true" : "false", num(g.ratio), str(g.scale_effect));
             }
             out += "], \"variables\": [";
             for (std::size_t i = 0; i < s.plan->model.size(); ++i) {
@@ -237,6 +287,24 @@ std::string render_groups_json(const check_report& report) {
                     i ? ", " : "", str(s.variables[v.variable].name), num(v.value),
                     num(s.prototype.size() > v.variable ? s.prototype[v.variable] : std::nullopt),
                     str(si_unit(s.variables[v.variable].dim)), str(v.how));
+            }
+            out += "], \"match\": [";
+            for (std::size_t i = 0; i < s.match.size(); ++i)
+                out += fmt::format("{}{}", i ? ", " : "", s.match[i] + 1);
+            out += fmt::format("], \"tolerance\": {}, \"alternatives\": [", num(s.tolerance));
+            for (std::size_t i = 0; i < s.plan->alternatives.size(); ++i) {
+                const auto& a = s.plan->alternatives[i];
+                out += fmt::format("{}{{\"match\": {}, \"fixes\": {{", i ? ", " : "", a.group + 1);
+                for (std::size_t k = 0; k < a.fixed.size(); ++k)
+                    out += fmt::format("{}{}: {}", k ? ", " : "",
+                                       str(s.variables[a.fixed[k].variable].name),
+                                       num(a.fixed[k].value));
+                out += "}, \"off\": [";
+                for (std::size_t k = 0; k < a.off.size(); ++k)
+                    out += fmt::format("{}{{\"group\": {}, \"ratio\": {}, \"scale_effect\": {}}}",
+                                       k ? ", " : "", a.off[k].group + 1, num(a.off[k].ratio),
+                                       str(a.off[k].scale_effect));
+                out += "]}";
             }
             out += "], \"conflicts\": [";
             for (std::size_t i = 0; i < s.plan->conflicts.size(); ++i)
