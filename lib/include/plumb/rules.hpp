@@ -30,6 +30,7 @@ inline constexpr std::string_view offset_scale = "offset-scale";
 inline constexpr std::string_view unit_scale = "unit-scale";
 inline constexpr std::string_view inferred_dimension = "inferred-dimension";
 inline constexpr std::string_view inference_conflict = "inference-conflict";
+inline constexpr std::string_view coefficient_mismatch = "coefficient-mismatch";
 
 struct rule_info {
     std::string_view id;

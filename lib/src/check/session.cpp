@@ -3,10 +3,10 @@
 #include "check/edit_distance.hpp"
 #include "check/formula_checker.hpp"
 #include "check/inference.hpp"
+#include "groups/studies.hpp"
 #include "notation/parser.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
-#include "groups/studies.hpp"
 
 #include <algorithm>
 #include <array>
@@ -320,29 +320,8 @@ class session {
     void read_restate_units(const std::vector<std::string>& symbols) {
         if (symbols.empty())
             return;
-        coherent_units target;
-        for (const auto& symbol : symbols) {
-            const auto unit = unit_table::standard().resolve(symbol);
-            std::optional<std::size_t> base;
-            if (unit) {
-                const dimension d = unit->dim();
-                for (std::size_t b = 0; b < base_dimension_count; ++b) {
-                    const rational e = d.exponent(static_cast<base_dimension>(b));
-                    if (e.is_zero())
-                        continue;
-                    if (base || !(e == rational(1))) {
-                        base.reset();
-                        break;
-                    }
-                    base = b;
-                }
-            }
-            if (!unit || !base)
-                return; // not a base unit: no restatement (the command line says why)
-            target.base_factor[*base] = unit->factor();
-            target.label += (target.label.empty() ? "" : ", ") + symbol;
-        }
-        restate_in_ = target;
+        std::string why; // the command line reports it (restate_units_problem)
+        restate_in_ = coherent_units_from(symbols, why);
     }
 
     std::vector<loaded_file*> dictionaries_;

@@ -6,7 +6,7 @@
 namespace plumb::rules {
 
 std::span<const rule_info> all() {
-    static constexpr std::array<rule_info, 23> table = {{
+    static constexpr std::array<rule_info, 24> table = {{
         {syntax, "a line does not follow the notation"},
         {sum_mismatch, "the terms of a sum or difference differ in dimension"},
         {side_mismatch, "the sides of an equation or limit differ in dimension"},
@@ -32,6 +32,8 @@ std::span<const rule_info> all() {
          "terms agree in dimension but not in unit, so the numbers are off by a factor"},
         {inferred_dimension, "the dimension a symbol or coefficient marked ? must have (note)"},
         {inference_conflict, "formulas disagree about the dimension of a symbol marked ?"},
+        {coefficient_mismatch, "a coefficient marked ?[...] is not the dimension or SI value "
+                               "stated for it"},
     }};
     return table;
 }

@@ -12,6 +12,8 @@
 #include <cstdlib>
 #include <cstring>
 #include <fmt/core.h>
+#include <numbers>
+#include <optional>
 
 namespace plumb {
 namespace {
@@ -87,6 +89,11 @@ struct parse_state {
     int depth = 0;
     bool in_braces = false;
     bool line_has_inferred = false;
+    // The statement "[L^(1/3) T^-1, SI 1 ± 0.1%]" of the coefficient being read, if any.
+    std::optional<syntax::coefficient_statement> pending_statement;
+    double pending_tolerance = 0.0;
+    bool pending_tolerance_percent = false;
+    bool pending_tolerance_stated = false;
     std::uint32_t formula_first_side = 0;
     relation_kind pending_relation = relation_kind::none;
     span pending_label{};
@@ -158,6 +165,7 @@ struct parse_state {
         depth = 0;
         in_braces = false;
         line_has_inferred = false;
+        pending_statement.reset();
         operands.clear();
         argument_counts.clear();
         pending_relation = relation_kind::none;
@@ -225,9 +233,15 @@ template <typename Rule> struct action : pg::nothing<Rule> {};
 template <> struct action<nt::number_term> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const std::string_view t = in.string_view();
-        if (t.back() == '?') {
+        if (t.find('?') != std::string_view::npos) {
             s.line_has_inferred = true;
-            s.push_node({expr_kind::inferred, s.range(in)});
+            std::uint32_t statement = syntax::no_index;
+            if (s.pending_statement) {
+                s.out.coefficient_statements.push_back(*s.pending_statement);
+                statement = static_cast<std::uint32_t>(s.out.coefficient_statements.size() - 1);
+                s.pending_statement.reset();
+            }
+            s.push_node({expr_kind::inferred, s.range(in), statement});
             return;
         }
         if (t.back() == '}') {
@@ -235,6 +249,74 @@ template <> struct action<nt::number_term> {
             return;
         }
         s.push_node({expr_kind::number, s.range(in)});
+    }
+};
+// --- What a coefficient is stated to be: 1.486?[L^(1/3) T^-1, SI 1 ± 0.1%] ---
+template <> struct action<nt::stated_open> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.pending_statement.emplace();
+        s.bracket_dimension = {};
+        s.pending_tolerance_stated = false;
+        s.pending_tolerance_percent = false;
+    }
+};
+template <> struct action<nt::stated_dimension> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        if (s.pending_statement)
+            s.pending_statement->dim = s.bracket_dimension;
+    }
+};
+template <> struct action<nt::stated_number> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        if (!s.pending_statement)
+            return;
+        const std::string_view t = in.string_view();
+        const std::size_t end = t.find_first_not_of("0123456789.eE+-");
+        const std::string digits(t.substr(0, end));
+        double value = std::strtod(digits.c_str(), nullptr);
+        // As precise as written: half a unit in the last digit ("1.84" is 1.835 to 1.845).
+        const std::size_t e = digits.find_first_of("eE");
+        const std::string mantissa = digits.substr(0, e);
+        const std::size_t point = mantissa.find('.');
+        const int decimals =
+            point == std::string::npos ? 0 : static_cast<int>(mantissa.size() - point - 1);
+        const int power = e == std::string::npos ? 0 : std::atoi(digits.c_str() + e + 1);
+        double half_unit = 0.5 * std::pow(10.0, static_cast<double>(power - decimals));
+        if (end != std::string_view::npos) { // a multiple of π
+            value *= std::numbers::pi;
+            half_unit *= std::numbers::pi;
+        }
+        s.pending_statement->si_value = value;
+        s.pending_statement->tolerance = half_unit;
+    }
+};
+template <> struct action<nt::stated_tolerance_number> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_tolerance = std::strtod(std::string(in.string_view()).c_str(), nullptr);
+        s.pending_tolerance_stated = true;
+    }
+};
+template <> struct action<nt::stated_percent> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.pending_tolerance_percent = true;
+    }
+};
+template <> struct action<nt::stated_value> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        if (!s.pending_statement || !s.pending_statement->si_value)
+            return;
+        s.pending_statement->value_text = s.range(in);
+        if (s.pending_tolerance_stated)
+            s.pending_statement->tolerance =
+                s.pending_tolerance_percent
+                    ? std::abs(*s.pending_statement->si_value) * s.pending_tolerance / 100.0
+                    : s.pending_tolerance;
+    }
+};
+template <> struct action<nt::coefficient_statement> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        if (s.pending_statement)
+            s.pending_statement->range = s.range(in);
     }
 };
 template <> struct action<nt::quantity_term> {
