@@ -854,11 +854,14 @@ class reporter {
         if (!st.si_value)
             return;
         const std::string value_text = single_line(file_.source->text(st.value_text));
-        if (!k_si) {
+        if (!k_si || !std::isfinite(*st.si_value) || !std::isfinite(st.tolerance)) {
             diagnostic d = make(severity::warning, rules::coefficient_mismatch,
                                 fmt::format("the value stated for the coefficient {} ({}) cannot "
-                                            "be checked: it is not restated for coherent SI units",
-                                            x.name, value_text),
+                                            "be checked: {}",
+                                            x.name, value_text,
+                                            k_si ? "the stated value is beyond floating-point "
+                                                   "range"
+                                                 : "it is not restated for coherent SI units"),
                                 x.where);
             d.notes.push_back({fmt::format("stated as {}", stated_text), stated_at});
             for (const auto& n : inferred.notes)

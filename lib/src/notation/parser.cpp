@@ -8,6 +8,7 @@
 #include "plumb/notation_errors.hpp"
 #include "plumb/rules.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <cstdlib>
 #include <cstring>
@@ -280,7 +281,11 @@ template <> struct action<nt::stated_number> {
         const std::size_t point = mantissa.find('.');
         const int decimals =
             point == std::string::npos ? 0 : static_cast<int>(mantissa.size() - point - 1);
-        const int power = e == std::string::npos ? 0 : std::atoi(digits.c_str() + e + 1);
+        // Clamped: a huge exponent only has to give an infinite value, never overflow an int.
+        const long power =
+            e == std::string::npos
+                ? 0
+                : std::clamp(std::strtol(digits.c_str() + e + 1, nullptr, 10), -100000L, 100000L);
         double half_unit = 0.5 * std::pow(10.0, static_cast<double>(power - decimals));
         if (end != std::string_view::npos) { // a multiple of π
             value *= std::numbers::pi;
