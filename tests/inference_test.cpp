@@ -816,3 +816,13 @@ TEST_CASE("inference through check_text: a mass-bearing coefficient in ft, lbf, 
     REQUIRE(report.diagnostics[0].restated.size() == 2);
     CHECK(rounds_to(report.diagnostics[0].restated[1].value, 0.0685218, 7));
 }
+
+TEST_CASE("inference: a statement on a coefficient left free is said to go unchecked") {
+    // y = k X with X : ? leaves k free: its stated dimension cannot be compared with anything.
+    const run r = infer("y : m\n"
+                        "X : ?\n"
+                        "y = 2?[L]*X\n");
+    const diagnostic& d = r.about("the formulas leave the dimension of the coefficient 2 free");
+    CHECK(has_note(d, "what is stated for it, [L], cannot be checked until its dimension is "
+                      "settled"));
+}

@@ -967,7 +967,20 @@ class reporter {
                              fmt::join(free_names, free_names.size() == 2 ? " and " : ", ")),
                  {}});
         }
+        unchecked_statement(x, d);
         out_.push_back(std::move(d));
+    }
+
+    // A stated coefficient whose dimension is not settled: what was stated goes unchecked, and
+    // the finding says so rather than letting the statement look satisfied.
+    void unchecked_statement(const unknown& x, diagnostic& d) const {
+        if (x.statement == syntax::no_index)
+            return;
+        const syntax::coefficient_statement& st = file_.coefficient_statements[x.statement];
+        d.notes.push_back({fmt::format("what is stated for it, {}, cannot be checked until its "
+                                       "dimension is settled",
+                                       single_line(file_.source->text(st.range))),
+                           {file_.source, st.range}});
     }
 
     void conflict(std::uint32_t u, const conflict_set& set, std::size_t column) {
@@ -1014,16 +1027,19 @@ class reporter {
                                             : "too many formulas are tangled here to find the "
                                               "few that disagree",
                                {}});
+        unchecked_statement(x, d);
         out_.push_back(std::move(d));
     }
 
     void undecided(std::uint32_t u, const std::vector<std::string>& disputed) {
         const unknown& x = unknowns_[u];
-        out_.push_back(make(severity::warning, rules::inferred_dimension,
+        diagnostic d = make(severity::warning, rules::inferred_dimension,
                             fmt::format("the dimension of {} cannot be inferred while the "
                                         "formulas disagree about {}",
                                         who(x), fmt::join(disputed, ", ")),
-                            x.where));
+                            x.where);
+        unchecked_statement(x, d);
+        out_.push_back(std::move(d));
     }
 
     void overflow(std::uint32_t u) {
