@@ -1255,11 +1255,12 @@ std::optional<coherent_units> coherent_units_from(const std::vector<std::string>
     }
     // Solve for the logarithms of the base factors: Gaussian elimination with partial pivoting
     // on a small, non-singular system (its rank was checked exactly above).
-    std::vector<std::vector<double>> a(n, std::vector<double>(n + 1));
+    // At most seven base dimensions (checked above: as many units as bases), so a fixed array.
+    std::array<std::array<double, base_dimension_count + 1>, base_dimension_count> a{};
     for (std::size_t r = 0; r < n; ++r) {
         for (std::size_t c = 0; c < n; ++c)
             a[r][c] = exponents[r][bases[c]].to_double();
-        a[r][n] = logs[r];
+        a[r][base_dimension_count] = logs[r];
     }
     for (std::size_t c = 0; c < n; ++c) {
         std::size_t pivot = c;
@@ -1271,13 +1272,14 @@ std::optional<coherent_units> coherent_units_from(const std::vector<std::string>
             if (r == c)
                 continue;
             const double f = a[r][c] / a[c][c];
-            for (std::size_t k = c; k <= n; ++k)
+            for (std::size_t k = c; k < n; ++k)
                 a[r][k] -= f * a[c][k];
+            a[r][base_dimension_count] -= f * a[c][base_dimension_count];
         }
     }
     coherent_units target;
     for (std::size_t c = 0; c < n; ++c)
-        target.base_factor[bases[c]] = std::exp(a[c][n] / a[c][c]);
+        target.base_factor[bases[c]] = std::exp(a[c][base_dimension_count] / a[c][c]);
     target.label = fmt::format("{}", fmt::join(symbols, ", "));
     return target;
 }
