@@ -221,24 +221,10 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
     return std::nullopt;
 }
 
-// Each unit of --restate-in must be a unit of exactly one base dimension.
+// The units of --restate-in must name a consistent set ("ft, lb, s" or "ft, lbf, s").
 std::optional<std::string> check_restate_units(const std::vector<std::string>& units) {
-    for (const auto& u : units) {
-        const auto resolved = plumb::unit_table::standard().resolve(u);
-        int bases = 0;
-        bool unit_power = true;
-        const plumb::dimension dim = resolved ? resolved->dim() : plumb::dimension{};
-        if (resolved)
-            for (const auto& e : dim.exponents())
-                if (!e.is_zero()) {
-                    ++bases;
-                    unit_power = unit_power && e == plumb::rational(1);
-                }
-        if (!resolved || bases != 1 || !unit_power)
-            return fmt::format("--restate-in: '{}' is not a unit of one base dimension (such as "
-                               "ft, lb, s or °R)",
-                               u);
-    }
+    if (auto why = plumb::restate_units_problem(units))
+        return fmt::format("--restate-in: {}", *why);
     return std::nullopt;
 }
 

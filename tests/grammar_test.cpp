@@ -529,3 +529,55 @@ TEST_CASE("model lines: the match clause and its tolerance") {
     fails_with({"model pipe: match Re within 2", 1, 30,
                 "expected '%' after the tolerance, as in: within 0.5 %"});
 }
+
+TEST_CASE("a coefficient's statement: the forms NOTATION.md shows") {
+    parses("V : ft/s\nR : ft\nn, S : 1\nV = 1.486?[L^(1/3) T^-1] / n * R^(2/3) * S^(1/2)");
+    parses("Q : ft^3/s\nb, H : ft\nQ = 3.33?[L^(1/2) T^-1, SI 1.84] * b * H^(3/2)");
+    parses("q, k : 1\nq = 0.5?[SI 2π ± 0.1%] * k");
+    parses("q, k : 1\nq = 0.5?[SI 2 pi +- 0.001] * k");
+    parses("q, k : 1\nq = 0.5?[SI 2*pi] * k");
+    parses("q, k : 1\nq = 0.5?[1, SI 0.5] * k");
+    parses("q, k : 1\nq = 0.5?[-] * k");
+    parses("q, k : 1\nq = 0.5?[ SI 1.2e-3 ± 1e-5 ] * k");
+}
+
+TEST_CASE("a coefficient's statement: mistakes get a plain message at the right place") {
+    const std::vector<expected_error> cases = {
+        // A unit where a dimension or 'SI' belongs: the statement's body starts at 'k'.
+        {"q = 0.5?[kg] * k", 1, 10,
+         "expected what the coefficient must be: a dimension such as [L^(1/3) T^-1], its value "
+         "in coherent SI units such as [SI 1 \u00B1 0.1%], or both, as in [L^(1/3) T^-1, SI 1]"},
+        // 'SI' without its value.
+        {"q = 0.5?[SI] * k", 1, 12,
+         "expected the coefficient's value in coherent SI units after 'SI', such as 1.84 or "
+         "2\u03C0"},
+        // A tolerance sign without a tolerance.
+        {"q = 0.5?[SI 1 ±] * k", 1, 16,
+         "expected a tolerance after '\u00B1', such as 0.005 or 0.1%"},
+        // After the comma only the value may follow.
+        {"q = 0.5?[L, M] * k", 1, 13,
+         "expected 'SI' and the coefficient's value in coherent SI units after ',', as in "
+         "[L^(1/3) T^-1, SI 1]"},
+        // The bracket left open.
+        {"q = 0.5?[L T^-1 * k", 1, 17,
+         "expected ']' to close what the coefficient must be; write the dimension first, then "
+         "', SI' and the value, as in [L^(1/3) T^-1, SI 1 \u00B1 0.1%]"},
+    };
+    for (const auto& e : cases)
+        fails_with(e);
+}
+
+TEST_CASE("a coefficient's statement is checked through the library's front door") {
+    // Manning (Chow, Open-Channel Hydraulics, 1959, from memory), reviewed, then R^(2/3) edited.
+    const auto good = check("V : ft/s\nR : ft\nn, S : 1\n"
+                            "V = 1.486?[L^(1/3) T^-1, SI 1 ± 0.1%] / n * R^(2/3) * S^(1/2)\n");
+    INFO(listing(good));
+    CHECK(of_rule(good, plumb::rules::coefficient_mismatch).empty());
+    const auto edited = check("V : ft/s\nR : ft\nn, S : 1\n"
+                              "V = 1.486?[L^(1/3) T^-1, SI 1 ± 0.1%] / n * R^(3/2) * S^(1/2)\n");
+    INFO(listing(edited));
+    const auto found = of_rule(edited, plumb::rules::coefficient_mismatch);
+    REQUIRE(found.size() == 1);
+    CHECK(found[0].line == 4);
+    CHECK(found[0].column == 5);
+}

@@ -13,7 +13,9 @@
 #include "check/inference.hpp"
 #include "notation/parser.hpp"
 #include "plumb/check.hpp"
+#include "plumb/render.hpp"
 #include "plumb/rules.hpp"
+#include "plumb/unit_table.hpp"
 
 #include <doctest/doctest.h>
 
@@ -88,6 +90,9 @@ run infer(std::string text) {
         if (decl.kind.by_unit) {
             e.unit_text = r.source->text(decl.spec);
             e.si_factor = decl.kind.si_factor;
+            if (decl.kind.single_unit != nullptr &&
+                decl.kind.single_unit->scale != plumb::unit_scale::absolute)
+                e.offset_unit = decl.kind.single_unit;
         }
         table.insert(r.source->text(n.name), e);
     }
@@ -256,11 +261,13 @@ TEST_CASE("inference: two equations that disagree, both named") {
     CHECK(d.rule == plumb::rules::inference_conflict);
     CHECK(d.message == "the formulas disagree about the dimension of 'X'");
     REQUIRE(d.notes.size() == 2);
-    // Each note stands at its formula and says what the other one makes X.
+    // Each note stands at its formula and says what it makes X on its own, and the others.
     CHECK(r.source->position(d.notes[0].where.range.begin).line == 4);
-    CHECK(d.notes[0].message == "@length: the other formulas make 'X' [T] (time)");
+    CHECK(d.notes[0].message == "@length at 4:1 on its own makes 'X' [L] (length); the other "
+                                "formulas make it [T] (time)");
     CHECK(r.source->position(d.notes[1].where.range.begin).line == 5);
-    CHECK(d.notes[1].message == "@time: the other formulas make 'X' [L] (length)");
+    CHECK(d.notes[1].message == "@time at 5:1 on its own makes 'X' [T] (time); the other "
+                                "formulas make it [L] (length)");
 }
 
 TEST_CASE("inference: the one formula against the rest is the one named") {
@@ -275,7 +282,8 @@ TEST_CASE("inference: the one formula against the rest is the one named") {
     const auto conflicts = r.with_rule(plumb::rules::inference_conflict);
     REQUIRE(conflicts.size() == 1);
     REQUIRE(conflicts[0]->notes.size() == 1);
-    CHECK(conflicts[0]->notes[0].message == "@time: the other formulas make 'X' [L] (length)");
+    CHECK(conflicts[0]->notes[0].message == "@time at 6:1 on its own makes 'X' [T] (time); the "
+                                            "other formulas make it [L] (length)");
     // Z hangs on X, about which the formulas disagree.
     CHECK(r.about("the dimension of 'Z' cannot be inferred").level == severity::warning);
 }
@@ -309,9 +317,9 @@ TEST_CASE("inference: a disagreement no single formula settles names a minimal s
     const diagnostic& d = r.diagnostics[0];
     CHECK(d.rule == plumb::rules::inference_conflict);
     REQUIRE(d.notes.size() == 3);
-    CHECK(d.notes[0].message == "'X = 3*d' is one of the formulas that disagree");
+    CHECK(d.notes[0].message == "'X = 3*d' at 5:1 on its own makes 'X' [L] (length)");
     CHECK(r.source->position(d.notes[0].where.range.begin).line == 5);
-    CHECK(d.notes[1].message == "'X = 3*t' is one of the formulas that disagree");
+    CHECK(d.notes[1].message == "'X = 3*t' at 7:1 on its own makes 'X' [T] (time)");
     CHECK(r.source->position(d.notes[1].where.range.begin).line == 7);
     CHECK(d.notes[2].message.starts_with("no one formula's removal settles it"));
 }
@@ -445,12 +453,16 @@ TEST_CASE("inference: a coefficient written as a divisor is restated too") {
     CHECK(has_note(r.diagnostics[0], "= 0.6729 \u00D7 1/0.3048^(1/3) = 0.999875"));
 }
 
-TEST_CASE("inference: a coefficient in a formula of another shape is not restated") {
+TEST_CASE("inference: a coefficient in a sum of terms in like units is restated") {
+    // h = 0.5 d + d with everything in ft: the feet cancel, so 0.5 is 0.5 in SI too.
     const run r = infer("h, d : ft\n"
                         "h = 0.5? * d + d\n");
     REQUIRE(r.diagnostics.size() == 1);
     CHECK(r.diagnostics[0].message == "the coefficient 0.5 must be dimensionless");
-    CHECK(has_note(r.diagnostics[0], "is not of the form"));
+    CHECK(has_note(r.diagnostics[0], "the unit factors cancel, so the coefficient is 0.5 in "
+                                     "coherent SI units too"));
+    REQUIRE(r.diagnostics[0].restated.size() == 1);
+    CHECK(r.diagnostics[0].restated[0].value == 0.5);
 }
 
 TEST_CASE("inference: each coefficient is its own unknown") {
@@ -518,6 +530,225 @@ TEST_CASE("inference: the Francis weir coefficient restated through a formula") 
                                      "(ft^3/s)/ft^(5/2) = 3.33 \u00D7 0.3048^(1/2) = 1.83845"));
 }
 
+// ---- Coefficients in formulas of any shape ---------------------------------------------------
+
+TEST_CASE("inference: radial Darcy flow in oilfield units restates to 2 pi") {
+    // Steady radial flow with skin, q = 0.00708 k h (p_e - p_w) / (μ B (ln(r_e/r_w) - 0.75 +
+    // s)), q in bbl/d, k in mD, h and r in ft, p in psi, μ in cP (Ahmed, Reservoir Engineering
+    // Handbook, ch. 6, from memory; Craft & Hawkins give the same law). In coherent SI units the
+    // law is q = 2π k h Δp / (μ B (...)). By hand from NIST SP 811 (2008) Appendix B exact
+    // factors: bbl/d = 0.158987294928/86400 = 1.8401307e-6 m^3/s; mD = 9.869233e-16 m^2
+    // (the table takes 1e-10/101325 from its definition through the atmosphere); ft = 0.3048 m;
+    // psi = 4.4482216152605/0.0254^2 = 6894.7573 Pa; cP = 0.001 Pa s. k_SI = 0.00708 ×
+    // 1.8401307e-6 × 0.001 / (9.869233e-16 × 0.3048 × 6894.7573) = 6.28152, which is 2π =
+    // 6.28319 to 0.03 %: the ln term, the -0.75 and the skin are pure numbers whose scale is 1,
+    // and p_e - p_w keeps the scale of psi.
+    const run r = infer("q : bbl/d\n"
+                        "k : mD\n"
+                        "h, r_e, r_w : ft\n"
+                        "p_e, p_w : psi\n"
+                        "μ : cP\n"
+                        "B, s : 1\n"
+                        "@radial q = 0.00708?*k*h*(p_e - p_w)/(μ*B*(ln(r_e/r_w) - 0.75 + s))\n");
+    REQUIRE(r.diagnostics.size() == 1);
+    const diagnostic& d = r.diagnostics[0];
+    CHECK(d.message == "the coefficient 0.00708 must be dimensionless");
+    REQUIRE(d.restated.size() == 1);
+    CHECK(d.restated[0].units == "SI");
+    CHECK(std::abs(d.restated[0].value / (2 * std::numbers::pi) - 1) < 1e-3);
+    CHECK(std::abs(d.restated[0].value - 6.281518) < 5e-6);
+    CHECK(d.restated[0].factor == "(bbl/d)*cP/(mD*ft*psi)");
+    CHECK(has_note(d, "0.00708 holds only with q in bbl/d, k in mD, h in ft, p_e in psi, p_w in "
+                      "psi, μ in cP and 2 more, as declared"));
+    CHECK(has_note(d, "= 6.28152"));
+}
+
+TEST_CASE("inference: the Francis weir with end contractions, (b - 0.1*n*H)") {
+    // Francis: Q = 3.33 (b - 0.1 n H) H^(3/2), ft^3/s and ft, n end contractions (Brater and
+    // King, Handbook of Hydraulics, from memory). b and 0.1 n H are both in ft, so the sum keeps
+    // the scale of ft: 3.33 × 0.3048^(1/2) = 1.83845, the SI coefficient 1.84.
+    const run r = infer("Q : ft^3/s\n"
+                        "b, H : ft\n"
+                        "n : 1\n"
+                        "Q = 3.33?*(b - 0.1*n*H)*H^(3/2)\n");
+    REQUIRE(r.diagnostics.size() == 1);
+    CHECK(r.diagnostics[0].message == "the coefficient 3.33 must carry [L^(1/2) T^-1]");
+    CHECK(has_note(r.diagnostics[0], "= 3.33 \u00D7 0.3048^(1/2) = 1.83845"));
+}
+
+TEST_CASE("inference: (1 - S_w) in the volumetric oil in place, 7758 bbl per acre-ft") {
+    // N = 7758 A h φ (1 - S_w) / B_o, N in bbl, A in acres, h in ft (Craft & Hawkins, Applied
+    // Petroleum Reservoir Engineering, from memory). 7758 = 43560 ft^3 / 5.6146 ft^3 per bbl,
+    // so in SI it is 1: 7758 × 0.158987294928 / (4046.873 × 0.3048) = 0.999949 (NIST SP 811
+    // (2008) Appendix B: acre (U.S. survey foot) = 4046.873 m^2, barrel = 0.158987294928 m^3).
+    const run r = infer("N : bbl\n"
+                        "A : acre\n"
+                        "h : ft\n"
+                        "φ, S_w, B_o : 1\n"
+                        "N = 7758?*A*h*φ*(1 - S_w)/B_o\n");
+    REQUIRE(r.diagnostics.size() == 1);
+    REQUIRE(r.diagnostics[0].restated.size() == 1);
+    CHECK(rounds_to(r.diagnostics[0].restated[0].value, 0.999949, 6));
+}
+
+TEST_CASE("inference: a coefficient under a root") {
+    // Torricelli, V = sqrt(2 g h) with 2g = 64.4 ft/s^2 (common practice): the coefficient
+    // carries [L T^-2] and in SI is 64.4 × 0.3048 = 19.6291, 2 × 9.80665 = 19.6133 to 0.08 %.
+    const run r = infer("V : ft/s\n"
+                        "h : ft\n"
+                        "V = sqrt(64.4?*h)\n");
+    REQUIRE(r.diagnostics.size() == 1);
+    CHECK(r.diagnostics[0].message == "the coefficient 64.4 must carry [L T^-2] (acceleration)");
+    REQUIRE(r.diagnostics[0].restated.size() == 1);
+    CHECK(rounds_to(r.diagnostics[0].restated[0].value, 19.62912, 5));
+}
+
+TEST_CASE("inference: a coefficient under a power and in an exponential") {
+    // (k x)^2 = y: k^2 ft^2 = m^2... with y in ft^2 and x in in: k = 12 ft/in, in SI 1.
+    // exp(-k t) with t in h: k per hour is k/3600 per second.
+    const run r = infer("y : ft^2\n"
+                        "x : in\n"
+                        "t : h\n"
+                        "c : 1\n"
+                        "y = (0.0833333333333?*x)^2\n"
+                        "c = exp(-0.5?*t)\n");
+    REQUIRE(r.diagnostics.size() == 2);
+    REQUIRE(r.about("the coefficient 0.0833").restated.size() == 1);
+    CHECK(rounds_to(r.about("the coefficient 0.0833").restated[0].value, 1.0, 9));
+    REQUIRE(r.about("the coefficient 0.5").restated.size() == 1);
+    CHECK(rounds_to(r.about("the coefficient 0.5").restated[0].value, 0.5 / 3600, 12));
+}
+
+TEST_CASE("inference: a formula whose scales cannot be followed is not restated, and says why") {
+    SUBCASE("terms in different units") {
+        const run r = infer("h : ft\n"
+                            "d : ft\n"
+                            "w : m\n"
+                            "h = 0.5?*d + w\n");
+        REQUIRE(r.diagnostics.size() == 1);
+        CHECK(r.diagnostics[0].restated.empty());
+        CHECK(has_note(r.diagnostics[0], "are not in the same units"));
+    }
+    SUBCASE("a °F value in a product") {
+        const run r = infer("q : Btu/h\n"
+                            "T_F : °F\n"
+                            "A : ft^2\n"
+                            "q = 0.1714?*A*T_F\n");
+        REQUIRE(r.diagnostics.size() == 1);
+        CHECK(r.diagnostics[0].restated.empty());
+        CHECK(has_note(r.diagnostics[0], "'T_F' is on the °F scale, whose zero is arbitrary"));
+    }
+    SUBCASE("a temperature difference in °F is followed") {
+        // 1 °F difference = 5/9 K: q = k A (T_2 - T_1) restates with the factor of the interval.
+        const run r = infer("q : W\n"
+                            "T_1, T_2 : °F\n"
+                            "A : m^2\n"
+                            "q = 1.8?*A*(T_2 - T_1)\n");
+        REQUIRE(r.diagnostics.size() == 1);
+        REQUIRE(r.diagnostics[0].restated.size() == 1);
+        CHECK(rounds_to(r.diagnostics[0].restated[0].value, 1.8 * 1.8, 9));
+    }
+    SUBCASE("a ln of a ratio of lengths in different units") {
+        const run r = infer("q : m^3/s\n"
+                            "r_e : ft\n"
+                            "r_w : in\n"
+                            "q = 2?*ln(r_e/r_w)\n");
+        REQUIRE(r.diagnostics.size() == 1);
+        CHECK(r.diagnostics[0].restated.empty());
+        CHECK(has_note(r.diagnostics[0], "its units do not cancel"));
+    }
+}
+
+// ---- Stated coefficients ---------------------------------------------------------------------
+
+TEST_CASE("inference: a stated dimension and SI value that hold are noted, not flagged") {
+    // Manning (Chow, Open-Channel Hydraulics, 1959, from memory): 1.486 carries [L^(1/3)
+    // T^-1] and is 1.00005 in SI.
+    const run r = infer("V : ft/s\n"
+                        "R : ft\n"
+                        "n, S : 1\n"
+                        "V = 1.486?[L^(1/3) T^-1, SI 1 ± 0.1%]/n*R^(2/3)*S^(1/2)\n");
+    REQUIRE(r.diagnostics.size() == 1);
+    CHECK(r.diagnostics[0].level == severity::note);
+    CHECK(has_note(r.diagnostics[0], "its dimension is the [L^(1/3) T^-1] stated for it"));
+    CHECK(has_note(r.diagnostics[0], "1.00005 lies within the stated SI 1 ± 0.1% (0.999 to "
+                                     "1.001)"));
+}
+
+TEST_CASE("inference: a reviewed coefficient fails when the formula is edited later") {
+    // The radial Darcy law of the test above, reviewed as 2π in SI; then someone puts the linear
+    // law's 0.001127 in its place (Ahmed, from memory): 0.999897 in SI, far from 2π.
+    const std::string declarations = "q : bbl/d\n"
+                                     "k : mD\n"
+                                     "h, r_e, r_w : ft\n"
+                                     "p_e, p_w : psi\n"
+                                     "μ : cP\n"
+                                     "B, s : 1\n";
+    const run good = infer(declarations + "q = 0.00708?[SI 2π ± 0.1%]*k*h*(p_e - p_w)/(μ*B*"
+                                          "(ln(r_e/r_w) - 0.75 + s))\n");
+    CHECK(good.with_rule(plumb::rules::coefficient_mismatch).empty());
+    const run edited = infer(declarations + "q = 0.001127?[SI 2π ± 0.1%]*k*h*(p_e - p_w)/(μ*B*"
+                                            "(ln(r_e/r_w) - 0.75 + s))\n");
+    REQUIRE(edited.with_rule(plumb::rules::coefficient_mismatch).size() == 1);
+    const diagnostic& d = *edited.with_rule(plumb::rules::coefficient_mismatch)[0];
+    CHECK(d.level == severity::error);
+    CHECK(d.message.starts_with("restated for coherent SI units the coefficient 0.001127 is "
+                                "0.99989"));
+    CHECK(d.message.find("outside the stated SI 2π ± 0.1%") != std::string::npos);
+    // And a unit edited: h declared in inches instead of feet moves it by 12.
+    std::string in_inches = declarations;
+    in_inches.replace(in_inches.find("h, r_e, r_w : ft"), 16, "h : in\nr_e, r_w : ft");
+    const run unit_edit = infer(in_inches + "q = 0.00708?[SI 2π ± 0.1%]*k*h*(p_e - p_w)/(μ*B*"
+                                            "(ln(r_e/r_w) - 0.75 + s))\n");
+    CHECK(unit_edit.with_rule(plumb::rules::coefficient_mismatch).size() == 1);
+}
+
+TEST_CASE("inference: a stated dimension that the formula no longer gives is an error") {
+    // Manning reviewed with its dimension; then R^(2/3) is edited to R^(1/2).
+    const run r = infer("V : ft/s\n"
+                        "R : ft\n"
+                        "n, S : 1\n"
+                        "V = 1.486?[L^(1/3) T^-1]/n*R^(1/2)*S^(1/2)\n");
+    REQUIRE(r.with_rule(plumb::rules::coefficient_mismatch).size() == 1);
+    CHECK(r.with_rule(plumb::rules::coefficient_mismatch)[0]->message ==
+          "the coefficient 1.486 carries [L^(1/2) T^-1], not the [L^(1/3) T^-1] stated for it");
+}
+
+TEST_CASE("inference: a stated value without tolerance is as precise as written") {
+    // Francis 3.33 in ft-s is 1.83845 in SI: "SI 1.84" accepts 1.835 to 1.845, "SI 1.840" not.
+    const std::string text = "Q : ft^3/s\nb, H : ft\nQ = 3.33?[SI ";
+    CHECK(infer(text + "1.84]*b*H^(3/2)\n").with_rule(plumb::rules::coefficient_mismatch).empty());
+    CHECK(infer(text + "1.840]*b*H^(3/2)\n").with_rule(plumb::rules::coefficient_mismatch).size() ==
+          1);
+}
+
+TEST_CASE("inference: a stated value that cannot be checked is a warning") {
+    const run r = infer("q : Btu/h\n"
+                        "T_F : °F\n"
+                        "A : ft^2\n"
+                        "q = 0.1714?[SI 1]*A*T_F\n");
+    REQUIRE(r.with_rule(plumb::rules::coefficient_mismatch).size() == 1);
+    CHECK(r.with_rule(plumb::rules::coefficient_mismatch)[0]->level == severity::warning);
+}
+
+// ---- Consistent sets with force as a base ----------------------------------------------------
+
+TEST_CASE("coherent units: ft, lbf, s fix the slug as the unit of mass") {
+    // NIST SP 811 (2008) Appendix B: slug = 1.459390E+01 kg; lbf = 4.4482216152605 N exactly
+    // and ft = 0.3048 m exactly, so lbf s^2/ft = 14.5939029.
+    std::string why;
+    const auto set = plumb::coherent_units_from({"ft", "lbf", "s"}, why);
+    REQUIRE(set);
+    CHECK(rounds_to(set->base_factor[0], 14.593903, 6));
+    CHECK(rounds_to(set->base_factor[1], 0.3048, 12));
+    CHECK(rounds_to(set->base_factor[2], 1.0, 12));
+    CHECK(!plumb::coherent_units_from({"ft", "lbf"}, why));
+    CHECK(!plumb::coherent_units_from({"ft", "m", "s"}, why));
+    CHECK(!plumb::coherent_units_from({"ft", "furlong"}, why));
+    CHECK(plumb::restate_units_problem({"ft", "lb", "s"}) == std::nullopt);
+    CHECK(plumb::restate_units_problem({"N", "lbf", "s"}).has_value()); // two forces
+}
+
 // ---- Through the library's front door (needs session integration) ---------------------------
 
 TEST_CASE("inference through check_text (needs session integration): Manning and a conflict") {
@@ -544,4 +775,54 @@ TEST_CASE("inference through check_text (needs session integration): Manning and
     CHECK(manning);
     CHECK(conflict);
     CHECK(report.count(severity::error) == 1);
+}
+
+TEST_CASE("inference through check_text: restated for ft, lbf, s and listed in JSON") {
+    // Manning's SI coefficient 1 is 1/0.3048^(1/3) = 1.48592 in any set whose length unit is
+    // the foot and time unit the second (Chow, 1959, from memory: 1.486); force as a base does
+    // not change a coefficient without mass in its dimension.
+    plumb::check_options options;
+    options.restate_in = {"ft", "lbf", "s"};
+    const plumb::check_report report = plumb::check_text("manning.plumb",
+                                                         "V : m/s\n"
+                                                         "R : m\n"
+                                                         "n, S : 1\n"
+                                                         "V = 1?/n*R^(2/3)*S^(1/2)\n",
+                                                         options);
+    REQUIRE(report.diagnostics.size() == 1);
+    const diagnostic& d = report.diagnostics[0];
+    REQUIRE(d.restated.size() == 2);
+    CHECK(d.restated[0].units == "SI");
+    CHECK(d.restated[0].value == 1.0);
+    CHECK(d.restated[1].units == "ft, lbf, s");
+    CHECK(rounds_to(d.restated[1].value, 1.48592, 5));
+    const std::string json = plumb::render_json(report);
+    CHECK(json.find("\"restated\": [{\"units\": \"SI\", \"value\": 1, ") != std::string::npos);
+    CHECK(json.find("{\"units\": \"ft, lbf, s\", \"value\": 1.4859") != std::string::npos);
+}
+
+TEST_CASE("inference through check_text: a mass-bearing coefficient in ft, lbf, s") {
+    // F = k a with F in N and a in m/s^2: k carries [M] and is 1 kg in SI; in the set ft, lbf,
+    // s its unit is the slug, lbf s^2/ft = 14.5939 kg (NIST SP 811 (2008) Appendix B: slug =
+    // 1.459390E+01 kg), so k is 1/14.5939 = 0.0685218.
+    plumb::check_options options;
+    options.restate_in = {"ft", "lbf", "s"};
+    const plumb::check_report report = plumb::check_text("mass.plumb",
+                                                         "F : N\n"
+                                                         "a : m/s^2\n"
+                                                         "F = 1?*a\n",
+                                                         options);
+    REQUIRE(report.diagnostics.size() == 1);
+    REQUIRE(report.diagnostics[0].restated.size() == 2);
+    CHECK(rounds_to(report.diagnostics[0].restated[1].value, 0.0685218, 7));
+}
+
+TEST_CASE("inference: a statement on a coefficient left free is said to go unchecked") {
+    // y = k X with X : ? leaves k free: its stated dimension cannot be compared with anything.
+    const run r = infer("y : m\n"
+                        "X : ?\n"
+                        "y = 2?[L]*X\n");
+    const diagnostic& d = r.about("the formulas leave the dimension of the coefficient 2 free");
+    CHECK(has_note(d, "what is stated for it, [L], cannot be checked until its dimension is "
+                      "settled"));
 }

@@ -56,10 +56,34 @@ struct group : if_must<one<'('>, ws, expression, ws, group_close> {};
 struct brace_open : one<'{'> {};
 struct brace_close : one<'}'> {};
 struct braced_unit;
+struct dimension_factors;
+struct dimensionless_mark;
 // A number whose dimension the checker is to infer: "1.486?" in an empirical formula.
 struct inferred_mark : one<'?'> {};
+// What a reviewed coefficient is stated to be, so that a later edit that breaks it is found:
+//   1.486?[L^(1/3) T^-1]            its dimension
+//   0.00708?[SI 2π ± 0.1%]          its value restated in coherent SI units, within 0.1 %
+//   3.33?[L^(1/2) T^-1, SI 1.84]    both; without '±' as precise as written (1.835 to 1.845)
+struct stated_open : one<'['> {};
+struct stated_close : one<']'> {};
+struct stated_dimension : sor<dimensionless_mark, dimension_factors> {};
+struct stated_pi : sor<utf8::one<0x3C0>, seq<TAO_PEGTL_STRING("pi"), not_at<name_char>>> {};
+struct stated_number : seq<number, opt<star<space>, opt<one<'*'>, star<space>>, stated_pi>> {};
+struct plus_minus : sor<utf8::one<0xB1>, TAO_PEGTL_STRING("+-")> {};
+struct stated_percent : one<'%'> {};
+struct stated_tolerance_number : number {};
+struct stated_tolerance : if_must<seq<star<space>, plus_minus>, star<space>,
+                                  stated_tolerance_number, opt<star<space>, stated_percent>> {};
+struct si_keyword : seq<TAO_PEGTL_STRING("SI"), not_at<name_char>> {};
+struct stated_value : if_must<si_keyword, star<space>, stated_number, opt<stated_tolerance>> {};
+struct stated_more : if_must<seq<star<space>, one<','>>, star<space>, stated_value> {};
+struct stated_body : sor<stated_value, seq<stated_dimension, opt<stated_more>>> {};
+struct coefficient_statement
+    : if_must<stated_open, star<space>, stated_body, star<space>, stated_close> {};
 struct number_term
-    : seq<number, must<number_end>, opt<sor<seq<star<space>, braced_unit>, inferred_mark>>> {};
+    : seq<number, must<number_end>,
+          opt<sor<seq<star<space>, braced_unit>, seq<inferred_mark, opt<coefficient_statement>>>>> {
+};
 struct quantity_term : seq<braced_unit> {};
 
 // A name followed by '(' is a function call; the name is read once either way.

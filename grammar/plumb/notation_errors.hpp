@@ -56,6 +56,11 @@ template <> inline constexpr const char* error_message<brace_close> = "expected 
 template <> inline constexpr const char* error_message<new_unit_value> = "expected the unit's size as a number and a known unit, as in: measure mgd = 1e6 gal/d";
 template <> inline constexpr const char* error_message<origin_value> = "expected where the scale reads zero, as a number and a known unit, as in: measure kPag = kPa zero at 101.325 kPa";
 template <> inline constexpr const char* error_message<retired_unit_keyword> = "units of one's own are defined with 'measure' now, as in: measure mgd = 1e6 gal/d (or, for a gauge or offset scale, measure kPag = kPa zero at 101.325 kPa)";
+template <> inline constexpr const char* error_message<stated_body> = "expected what the coefficient must be: a dimension such as [L^(1/3) T^-1], its value in coherent SI units such as [SI 1 \u00B1 0.1%], or both, as in [L^(1/3) T^-1, SI 1]";
+template <> inline constexpr const char* error_message<stated_number> = "expected the coefficient's value in coherent SI units after 'SI', such as 1.84 or 2\u03C0";
+template <> inline constexpr const char* error_message<stated_tolerance_number> = "expected a tolerance after '\u00B1', such as 0.005 or 0.1%";
+template <> inline constexpr const char* error_message<stated_value> = "expected 'SI' and the coefficient's value in coherent SI units after ',', as in [L^(1/3) T^-1, SI 1]";
+template <> inline constexpr const char* error_message<stated_close> = "expected ']' to close what the coefficient must be; write the dimension first, then ', SI' and the value, as in [L^(1/3) T^-1, SI 1 \u00B1 0.1%]";
 template <> inline constexpr const char* error_message<line_end> = "expected an operator, a comparison or the end of the line here";
 // clang-format on
 

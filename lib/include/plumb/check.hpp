@@ -43,6 +43,11 @@ struct formula_record {
     std::vector<std::string> relations;          // "=", "<=", ... between the sides
 };
 
+// Why `restate_in` does not name a consistent set of units, or nothing when it does: each
+// must be a unit of the table, and together they must fix one unit for every base dimension
+// they involve ("ft, lb, s"; or "ft, lbf, s", where the force fixes the unit of mass).
+std::optional<std::string> restate_units_problem(const std::vector<std::string>& restate_in);
+
 // One `study` line worked out: its groups and, when prototype and model lines give values,
 // the model plan.
 struct study_report {

@@ -45,6 +45,17 @@ struct acceptance {
     bool by_inline_mark = true;
 };
 
+// A unit-bound coefficient ("1.486?") restated for a consistent set of units: JSON lists them.
+struct restated_coefficient {
+    std::string units;         // "SI", or the base units of another set ("ft, lbf, s")
+    double value = 0.0;        // the coefficient for that set, to full double precision
+    std::string factor;        // value = written × factor; the factor in units, exact as
+                               // written ("(ft/s)/ft^(2/3)")
+    std::string factor_digits; // the same with the units' SI values ("0.3048^(1/3)")
+    double factor_value = 1.0;
+    std::vector<std::string> holds_with; // the units the written coefficient needs: "V in ft/s"
+};
+
 struct diagnostic {
     severity level = severity::error;
     std::string rule;    // stable rule id, see rules.hpp
@@ -55,6 +66,7 @@ struct diagnostic {
     std::vector<term> terms;
     std::vector<note> notes;
     std::optional<acceptance> accepted;
+    std::vector<restated_coefficient> restated; // inferred-dimension notes of a coefficient
 };
 
 } // namespace plumb

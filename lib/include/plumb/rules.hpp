@@ -32,6 +32,7 @@ inline constexpr std::string_view inferred_dimension = "inferred-dimension";
 inline constexpr std::string_view inference_conflict = "inference-conflict";
 inline constexpr std::string_view acceptance_problem = "acceptance-problem";
 inline constexpr std::string_view stale_acceptance = "stale-acceptance";
+inline constexpr std::string_view coefficient_mismatch = "coefficient-mismatch";
 
 struct rule_info {
     std::string_view id;

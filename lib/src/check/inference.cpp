@@ -7,8 +7,11 @@
 #include "check/inference.hpp"
 
 #include "check/functions.hpp"
+#include "check/restatement.hpp"
+#include "plumb/check.hpp"
 #include "plumb/groups.hpp"
 #include "plumb/rules.hpp"
+#include "plumb/unit_table.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -115,7 +118,9 @@ struct unknown {
     location where;            // the declaration, or the coefficient in its formula
     std::uint32_t formula = 0; // a coefficient's formula
     std::uint32_t node = syntax::no_index; // a coefficient's node
-    std::vector<std::uint32_t> formulas;   // every formula it occurs in, ascending, once each
+    // What a coefficient written "k?[...]" is stated to be: index into coefficient_statements.
+    std::uint32_t statement = syntax::no_index;
+    std::vector<std::uint32_t> formulas; // every formula it occurs in, ascending, once each
 };
 
 // b^e exactly, for the whole exponents that constant exponents such as 2^3 need.
@@ -133,20 +138,6 @@ std::optional<rational> exact_power(const std::optional<rational>& base,
     } catch (const arithmetic_overflow&) {
         return std::nullopt;
     }
-}
-
-// The function's name in a call's range, which may start with the parentheses of a group.
-std::string_view call_name(const source_file& src, const syntax::expr_node& n) {
-    const std::string_view t = src.text(n.range);
-    const std::size_t begin = t.find_first_not_of("( \t\r\n\\");
-    if (begin == std::string_view::npos)
-        return {};
-    std::size_t end = t.find('(', begin);
-    if (end == std::string_view::npos)
-        end = t.size();
-    while (end > begin && (t[end - 1] == ' ' || t[end - 1] == '\t'))
-        --end;
-    return t.substr(begin, end - begin);
 }
 
 // Collects the equations of a file's formulas, and the unknowns they mention.
@@ -274,12 +265,14 @@ class equation_builder {
             unknown u;
             u.coefficient = true;
             std::string_view t = text(n.range);
-            while (!t.empty() && (t.back() == '?' || t.back() == ' ' || t.back() == '\t'))
+            t = t.substr(0, t.find('?')); // "1.486?[L^(1/3) T^-1]" is the coefficient 1.486
+            while (!t.empty() && (t.back() == ' ' || t.back() == '\t'))
                 t.remove_suffix(1);
             u.name = std::string(t);
             u.where = {file_.source, n.range};
             u.formula = current_;
             u.node = index;
+            u.statement = n.lhs < file_.coefficient_statements.size() ? n.lhs : syntax::no_index;
             unknowns.push_back(std::move(u));
             return of_unknown(static_cast<std::uint32_t>(unknowns.size() - 1));
         }
@@ -502,7 +495,9 @@ struct conflict_set {
     bool each_settles = false;     // leaving out any one of them restores agreement
     std::vector<solution> without; // with each_settles: the solution without each one
     std::vector<bool> on_its_own;  // the formula cannot hold even alone
-    bool searched = false;         // false when there were too many formulas to search
+    // Per formula, per column: what the formula alone makes each unknown, where it fixes it.
+    std::vector<std::vector<std::optional<dimension>>> alone;
+    bool searched = false; // false when there were too many formulas to search
 };
 
 // Solves the equations of one component, leaving out those of the formulas in `left_out`
@@ -622,121 +617,6 @@ std::string render_product(const std::vector<std::pair<std::string, rational>>& 
     return below > 1 ? numerator + "/(" + denominator + ")" : numerator + "/" + denominator;
 }
 
-// One symbol of an empirical formula, with the exponent its unit factor takes in k_SI.
-struct unit_factor {
-    const symbol_entry* entry;
-    std::string_view name;
-    rational exponent;
-    std::uint32_t at; // where it stands, to list factors in the order they are written
-};
-
-// The value of an exponent such as 2, -1, 0.54 or (2/3).
-std::optional<rational> constant_of(const syntax::parsed_file& file, std::uint32_t index) {
-    const syntax::expr_node& n = file.nodes[index];
-    try {
-        switch (n.kind) {
-        case expr_kind::number:
-            return rational::parse(file.source->text(n.range));
-        case expr_kind::group:
-            return constant_of(file, n.lhs);
-        case expr_kind::negate: {
-            const auto v = constant_of(file, n.lhs);
-            return v ? std::optional<rational>(-*v) : std::nullopt;
-        }
-        case expr_kind::add:
-        case expr_kind::subtract:
-        case expr_kind::multiply:
-        case expr_kind::divide: {
-            const auto a = constant_of(file, n.lhs);
-            const auto b = constant_of(file, n.rhs);
-            if (!a || !b)
-                return std::nullopt;
-            if (n.kind == expr_kind::add)
-                return *a + *b;
-            if (n.kind == expr_kind::subtract)
-                return *a - *b;
-            if (n.kind == expr_kind::multiply)
-                return *a * *b;
-            if (b->is_zero())
-                return std::nullopt;
-            return *a / *b;
-        }
-        default:
-            return std::nullopt;
-        }
-    } catch (const arithmetic_overflow&) {
-        return std::nullopt;
-    }
-}
-
-// The factors of one side of y = k·Π x_i^e_i, each symbol with `sign`·its exponent; the
-// coefficient's own exponent goes to `k_exponent`. False for any other shape: a sum, a
-// quantity in braces, another unknown, a unit with an offset (°F is not a pure scale), a
-// function other than a root, abs or pow.
-bool collect_factors(const syntax::parsed_file& file, symbol_table& symbols, std::uint32_t index,
-                     rational e, std::uint32_t coefficient, rational& k_exponent,
-                     std::vector<unit_factor>& out) {
-    const syntax::expr_node& n = file.nodes[index];
-    switch (n.kind) {
-    case expr_kind::number:
-    case expr_kind::pi:
-        return true; // a pure number is the same in every system of units
-    case expr_kind::group:
-    case expr_kind::negate:
-        return collect_factors(file, symbols, n.lhs, e, coefficient, k_exponent, out);
-    case expr_kind::multiply:
-    case expr_kind::divide: {
-        // Along the left spine, iteratively, like the checker.
-        std::uint32_t m = index;
-        while (file.nodes[m].kind == expr_kind::multiply ||
-               file.nodes[m].kind == expr_kind::divide) {
-            const bool divided = file.nodes[m].kind == expr_kind::divide;
-            if (!collect_factors(file, symbols, file.nodes[m].rhs, divided ? -e : e, coefficient,
-                                 k_exponent, out))
-                return false;
-            m = file.nodes[m].lhs;
-        }
-        return collect_factors(file, symbols, m, e, coefficient, k_exponent, out);
-    }
-    case expr_kind::power: {
-        const auto p = constant_of(file, n.rhs);
-        return p && collect_factors(file, symbols, n.lhs, e * *p, coefficient, k_exponent, out);
-    }
-    case expr_kind::call: {
-        const builtin_function* f = find_function(call_name(*file.source, n));
-        if (f == nullptr)
-            return false;
-        if (f->rule == function_rule::root && n.rhs == 1)
-            return collect_factors(file, symbols, file.call_args[n.lhs], e * f->power, coefficient,
-                                   k_exponent, out);
-        if (f->rule == function_rule::same && n.rhs == 1)
-            return collect_factors(file, symbols, file.call_args[n.lhs], e, coefficient, k_exponent,
-                                   out);
-        if (f->rule == function_rule::power && n.rhs == 2) {
-            const auto p = constant_of(file, file.call_args[n.lhs + 1]);
-            return p && collect_factors(file, symbols, file.call_args[n.lhs], e * *p, coefficient,
-                                        k_exponent, out);
-        }
-        return false;
-    }
-    case expr_kind::symbol: {
-        const std::string_view name = file.source->text(n.range);
-        const symbol_entry* entry = symbols.find(name);
-        if (entry == nullptr || entry->to_infer || !entry->dim || entry->offset_unit != nullptr)
-            return false;
-        out.push_back({entry, name, e, n.range.begin});
-        return true;
-    }
-    case expr_kind::inferred:
-        if (index != coefficient)
-            return false;
-        k_exponent += e;
-        return true;
-    default:
-        return false;
-    }
-}
-
 // Unit factors with their exponents, for display: a factor that is a small rational power of
 // one listed before it joins it (ft^3/s is 0.3048^3, ft^2 is 0.3048^2), so that the derivation
 // reads 3.33 × 0.3048^(1/2) rather than 3.33 × 0.02831685/0.3048^(5/2). Display only: the
@@ -778,155 +658,125 @@ merge_powers(const std::vector<std::pair<double, rational>>& factors) {
     return out;
 }
 
-// Notes restating a determined coefficient for coherent SI units, or saying why it cannot be.
-void restate_for(const std::vector<unit_factor>& factors, std::size_t left_count, bool k_on_left,
-                 const rational& ek, double k_si, const unknown& u, const coherent_units& target,
-                 diagnostic& d);
+// The SI value of the coherent unit of `dim` in the set `target`.
+double coherent_unit_value(const dimension& dim, const coherent_units& target) {
+    double v = 1.0;
+    for (std::size_t b = 0; b < base_dimension_count; ++b)
+        v *= std::pow(target.base_factor[b],
+                      dim.exponent(static_cast<base_dimension>(b)).to_double());
+    return v;
+}
 
-void restate_coefficient(const syntax::parsed_file& file, const syntax::formula& f,
-                         std::uint32_t coefficient, const unknown& u, symbol_table& symbols,
-                         diagnostic& d, const coherent_units* restate_in) {
-    const char* other_shape = "the formula is not of the form y = k\u00B7x1^a\u00B7x2^b\u2026, so "
-                              "the coefficient is not restated for coherent SI units; it holds "
-                              "only with the symbols in the units they are declared in";
-    if (f.side_count != 2 ||
-        file.sides[f.first_side + 1].relation_before != syntax::relation_kind::equal) {
-        d.notes.push_back({other_shape, {}});
-        return;
-    }
-    std::vector<unit_factor> factors;
-    rational k_left = 0;
-    rational k_right = 0;
-    bool shaped = collect_factors(file, symbols, file.sides[f.first_side].root, rational(1),
-                                  coefficient, k_left, factors);
-    const std::size_t left_count = factors.size();
-    shaped = shaped && collect_factors(file, symbols, file.sides[f.first_side + 1].root,
-                                       rational(1), coefficient, k_right, factors);
-    if (!shaped || (!k_left.is_zero() && !k_right.is_zero())) {
-        d.notes.push_back({other_shape, {}});
-        return;
-    }
-    // Products are collected from their outermost factor in; list them as written.
-    const auto by_place = [](const unit_factor& a, const unit_factor& b) { return a.at < b.at; };
-    const auto middle = factors.begin() + static_cast<std::ptrdiff_t>(left_count);
-    std::stable_sort(factors.begin(), middle, by_place);
-    std::stable_sort(middle, factors.end(), by_place);
-    // Write it as k^ek = Π f^g: symbols on the coefficient's side move across, so with the
-    // coefficient on the right the left side's factors keep their sign. Then k_SI = k · Π f^G,
-    // G = g/ek, for ek = ±1 (k or 1/k); other powers of k are not restated.
-    const bool k_on_left = !k_left.is_zero();
-    const rational ek = k_on_left ? k_left : k_right;
-    if (ek != rational(1) && ek != rational(-1)) {
-        d.notes.push_back({other_shape, {}});
-        return;
+// Notes restating a determined coefficient for coherent SI units and for `restate_in`, or
+// saying why it cannot be; the values also go to d.restated. Returns the SI value.
+std::optional<double> restate_coefficient(const syntax::parsed_file& file, const syntax::formula& f,
+                                          const unknown& u, const dimension& dim,
+                                          symbol_table& symbols, diagnostic& d,
+                                          const coherent_units* restate_in) {
+    const coefficient_trace trace = trace_coefficient(file, f, u.node, symbols);
+    if (!trace.traced) {
+        d.notes.push_back({fmt::format("the coefficient is not restated for coherent SI units: "
+                                       "{}; it holds only with the symbols in the units they are "
+                                       "declared in",
+                                       trace.why_not),
+                           {}});
+        return std::nullopt;
     }
     std::vector<std::pair<std::string, rational>> units; // by unit text
     std::vector<std::pair<double, rational>> numbers;    // by SI factor
-    std::vector<std::string> bound;                      // "V in ft/s"
-    for (std::size_t i = 0; i < factors.size(); ++i) {
-        const bool on_left = i < left_count;
-        // g: + for the side without k, − for the side with it; then divided by ek.
-        rational g = (on_left == k_on_left) ? -factors[i].exponent : factors[i].exponent;
-        g = ek == rational(1) ? g : -g;
-        const symbol_entry& e = *factors[i].entry;
-        if (e.si_factor == 1.0 || e.unit_text.empty())
-            continue; // a coherent SI unit, or a dimension in brackets: nothing to convert
-        const std::string unit(e.unit_text);
-        std::string entry = fmt::format("{} in {}", factors[i].name, unit);
-        if (std::find(bound.begin(), bound.end(), entry) == bound.end())
-            bound.push_back(std::move(entry));
+    for (const scale_factor& s : trace.factor) {
         auto ut = std::find_if(units.begin(), units.end(),
-                               [&](const auto& p) { return p.first == unit; });
+                               [&](const auto& p) { return p.first == s.unit; });
         if (ut == units.end())
-            units.emplace_back(unit, g);
+            units.emplace_back(s.unit, s.power);
         else
-            ut->second += g;
-        numbers.emplace_back(e.si_factor, g);
+            ut->second += s.power;
+        numbers.emplace_back(s.si, s.power);
     }
     std::erase_if(units, [](const auto& p) { return p.first.empty() || p.second.is_zero(); });
     const std::string value_text(u.name);
     char* end = nullptr;
     const double k = std::strtod(value_text.c_str(), &end);
-    const bool k_read = end != value_text.c_str();
-    if (bound.empty()) {
-        d.notes.push_back({fmt::format("the symbols are declared in coherent SI units, so {} is "
-                                       "the coefficient for coherent SI units",
-                                       u.name),
-                           {}});
-        if (restate_in != nullptr && k_read)
-            restate_for(factors, left_count, k_on_left, ek, k, u, *restate_in, d);
-        return;
+    if (end == value_text.c_str() || !std::isfinite(k))
+        return std::nullopt;
+    double factor = 1.0;
+    for (const auto& [si, power] : numbers)
+        factor *= std::pow(si, power.to_double());
+    const std::vector<std::pair<double, rational>> merged = merge_powers(numbers);
+    restated_coefficient si;
+    si.units = "SI";
+    si.holds_with = trace.bound;
+    if (!trace.bound.empty()) {
+        constexpr std::size_t max_listed = 6;
+        std::string list;
+        for (std::size_t i = 0; i < trace.bound.size() && i < max_listed; ++i)
+            list +=
+                fmt::format("{}{}", i == 0 ? "" : (i + 1 == trace.bound.size() ? " and " : ", "),
+                            trace.bound[i]);
+        if (trace.bound.size() > max_listed)
+            list += fmt::format(" and {} more", trace.bound.size() - max_listed);
+        d.notes.push_back({fmt::format("{} holds only with {}, as declared", u.name, list), {}});
     }
-    constexpr std::size_t max_listed = 6;
-    std::string list;
-    for (std::size_t i = 0; i < bound.size() && i < max_listed; ++i)
-        list +=
-            fmt::format("{}{}", i == 0 ? "" : (i + 1 == bound.size() ? " and " : ", "), bound[i]);
-    if (bound.size() > max_listed)
-        list += fmt::format(" and {} more", bound.size() - max_listed);
-    d.notes.push_back({fmt::format("{} holds only with {}, as declared", u.name, list), {}});
-    if (merge_powers(numbers).empty()) {
-        d.notes.push_back({fmt::format("the unit factors cancel, so the coefficient is {} in "
-                                       "coherent SI units too",
-                                       u.name),
-                           {}});
-        if (restate_in != nullptr && k_read)
-            restate_for(factors, left_count, k_on_left, ek, k, u, *restate_in, d);
-        return;
+    if (merged.empty()) {
+        factor = 1.0; // the factors cancel exactly; rounding must not say otherwise
+        d.notes.push_back(
+            {trace.bound.empty()
+                 ? fmt::format("the symbols are declared in coherent SI units, so {} is the "
+                               "coefficient for coherent SI units",
+                               u.name)
+                 : fmt::format("the unit factors cancel, so the coefficient is {} in coherent SI "
+                               "units too",
+                               u.name),
+             {}});
+        si.factor = "1";
+        si.factor_digits = "1";
+    } else {
+        std::vector<std::pair<std::string, rational>> number_text;
+        for (const auto& [value, g] : merged) {
+            // 1.840131e-06^(1/3) would read ambiguously.
+            std::string t = fmt::format("{:.7g}", value);
+            if (t.find('e') != std::string::npos && g != rational(1) && g != rational(-1))
+                t = "(" + t + ")";
+            number_text.emplace_back(std::move(t), g);
+        }
+        si.factor = render_product(units);
+        si.factor_digits = render_product(number_text);
     }
-    if (!k_read)
-        return;
-    std::vector<std::pair<double, rational>> inverse; // coherent_coefficient wants f^(-e)
-    for (const auto& [factor, g] : numbers)
-        inverse.emplace_back(factor, -g);
-    const double k_si = coherent_coefficient(k, 1.0, inverse);
-    const std::string k_si_text = std::isfinite(k_si) && k_si != 0.0
-                                      ? fmt::format("{:.6g}", k_si)
-                                      : std::string("a number beyond floating-point range");
-    std::vector<std::pair<std::string, rational>> number_text;
-    for (const auto& [factor, g] : merge_powers(numbers)) {
-        // 1.840131e-06^(1/3) would read ambiguously.
-        std::string t = fmt::format("{:.7g}", factor);
-        if (t.find('e') != std::string::npos && g != rational(1) && g != rational(-1))
-            t = "(" + t + ")";
-        number_text.emplace_back(std::move(t), g);
+    const double k_si = k * factor;
+    si.value = k_si;
+    si.factor_value = factor;
+    if (!merged.empty())
+        d.notes.push_back(
+            {fmt::format("in coherent SI units the coefficient is {} \u00D7 {} = {} \u00D7 {} = {}",
+                         u.name, si.factor, u.name, si.factor_digits,
+                         std::isfinite(k_si) && k_si != 0.0
+                             ? fmt::format("{:.6g}", k_si)
+                             : std::string("a number beyond floating-point range")),
+             {}});
+    if (!std::isfinite(k_si) || !std::isfinite(factor))
+        return std::nullopt;
+    d.restated.push_back(si);
+    if (restate_in != nullptr) {
+        const double divisor = coherent_unit_value(dim, *restate_in);
+        const double k_target = k_si / divisor;
+        if (std::isfinite(k_target) && divisor != 0.0) {
+            d.notes.push_back(
+                {fmt::format("in coherent units of {} the coefficient is {:.6g} / {:.6g} = {:.6g} "
+                             "(the SI value of their unit of {})",
+                             restate_in->label, k_si, divisor, k_target, dim.to_string()),
+                 {}});
+            restated_coefficient other;
+            other.units = restate_in->label;
+            other.value = k_target;
+            other.factor = fmt::format("{} per coherent unit of {} in {}", si.factor,
+                                       dim.to_string(), restate_in->label);
+            other.factor_digits = fmt::format("{} / {}", si.factor_digits, divisor);
+            other.factor_value = factor / divisor;
+            other.holds_with = trace.bound;
+            d.restated.push_back(std::move(other));
+        }
     }
-    d.notes.push_back(
-        {fmt::format("in coherent SI units the coefficient is {} \u00D7 {} = {} "
-                     "\u00D7 {} = {}",
-                     u.name, render_product(units), u.name, render_product(number_text), k_si_text),
-         {}});
-    if (restate_in != nullptr && std::isfinite(k_si))
-        restate_for(factors, left_count, k_on_left, ek, k_si, u, *restate_in, d);
-}
-
-// k_target = k_SI / Π F_i^g_i, F_i the SI value of symbol i's coherent unit in the target set.
-void restate_for(const std::vector<unit_factor>& factors, std::size_t left_count, bool k_on_left,
-                 const rational& ek, double k_si, const unknown& u, const coherent_units& target,
-                 diagnostic& d) {
-    double divisor = 1.0;
-    for (std::size_t i = 0; i < factors.size(); ++i) {
-        const bool on_left = i < left_count;
-        rational g = (on_left == k_on_left) ? -factors[i].exponent : factors[i].exponent;
-        g = ek == rational(1) ? g : -g;
-        const symbol_entry& e = *factors[i].entry;
-        if (!e.dim)
-            return;
-        double coherent = 1.0;
-        for (std::size_t b = 0; b < base_dimension_count; ++b)
-            coherent *= std::pow(target.base_factor[b],
-                                 e.dim->exponent(static_cast<base_dimension>(b)).to_double());
-        divisor *= std::pow(coherent, g.to_double());
-    }
-    const double k_target = k_si / divisor;
-    if (!std::isfinite(k_target))
-        return;
-    d.notes.push_back({fmt::format("in coherent units of {} the coefficient is {:.6g} / {:.6g} = "
-                                   "{:.6g} (each symbol in the unit of its dimension built from "
-                                   "those base units)",
-                                   target.label, k_si, divisor, k_target),
-                       {}});
-    (void)u;
+    return k_si;
 }
 
 diagnostic make(severity level, std::string_view rule, std::string message, location where) {
@@ -960,16 +810,92 @@ class reporter {
                           : fmt::format("'{}' must have dimension {}", x.name, describe(dim));
         diagnostic d = make(severity::note, rules::inferred_dimension, std::move(message), x.where);
         d.terms.push_back({x.where, x.coefficient ? x.name + "?" : x.name, dim});
+        std::optional<double> k_si;
+        std::string why_not;
         if (x.coefficient) {
             try {
-                restate_coefficient(file_, formulas_[x.formula], x.node, x, symbols_, d,
-                                    restate_in_);
+                k_si = restate_coefficient(file_, formulas_[x.formula], x, dim, symbols_, d,
+                                           restate_in_);
             } catch (const arithmetic_overflow&) {
                 d.notes.push_back({"the coefficient is not restated for coherent SI units: its "
                                    "exponents exceed the exact range",
                                    {}});
             }
         }
+        out_.push_back(std::move(d));
+        if (x.statement != syntax::no_index)
+            check_statement(x, dim, k_si, out_.back());
+    }
+
+    // A coefficient written "k?[...]": what the formula makes it against what was stated.
+    void check_statement(const unknown& x, const dimension& dim, std::optional<double> k_si,
+                         diagnostic& inferred) {
+        const syntax::coefficient_statement& st = file_.coefficient_statements[x.statement];
+        const location stated_at{file_.source, st.range};
+        const std::string stated_text = single_line(file_.source->text(st.range));
+        if (st.dim && !(*st.dim == dim)) {
+            diagnostic d = make(severity::error, rules::coefficient_mismatch,
+                                fmt::format("the coefficient {} carries {}, not the {} stated "
+                                            "for it",
+                                            x.name, describe(dim), describe(*st.dim)),
+                                x.where);
+            d.terms.push_back({x.where, x.name + "?", dim});
+            d.notes.push_back({fmt::format("stated as {}", stated_text), stated_at});
+            d.notes.push_back({"the formula around the coefficient has changed since it was "
+                               "reviewed, or the statement is wrong: check both against the "
+                               "source of the formula",
+                               {}});
+            out_.push_back(std::move(d));
+            return; // its value in SI is of another quantity: comparing it says nothing more
+        }
+        if (st.dim)
+            inferred.notes.push_back(
+                {fmt::format("its dimension is the {} stated for it", describe(*st.dim)), {}});
+        if (!st.si_value)
+            return;
+        const std::string value_text = single_line(file_.source->text(st.value_text));
+        if (!k_si || !std::isfinite(*st.si_value) || !std::isfinite(st.tolerance)) {
+            diagnostic d = make(severity::warning, rules::coefficient_mismatch,
+                                fmt::format("the value stated for the coefficient {} ({}) cannot "
+                                            "be checked: {}",
+                                            x.name, value_text,
+                                            k_si ? "the stated value is beyond floating-point "
+                                                   "range"
+                                                 : "it is not restated for coherent SI units"),
+                                x.where);
+            d.notes.push_back({fmt::format("stated as {}", stated_text), stated_at});
+            for (const auto& n : inferred.notes)
+                if (n.message.starts_with("the coefficient is not restated"))
+                    d.notes.push_back(n);
+            out_.push_back(std::move(d));
+            return;
+        }
+        const double low = *st.si_value - st.tolerance;
+        const double high = *st.si_value + st.tolerance;
+        // A relative 1e-12 keeps a value printed at its full precision from failing on rounding.
+        const double slack = 1e-12 * std::max(std::abs(*st.si_value), std::abs(*k_si));
+        if (*k_si >= low - slack && *k_si <= high + slack) {
+            inferred.notes.push_back(
+                {fmt::format("{:.6g} lies within the stated {} ({:.6g} to {:.6g})", *k_si,
+                             value_text, low, high),
+                 {}});
+            return;
+        }
+        diagnostic d =
+            make(severity::error, rules::coefficient_mismatch,
+                 fmt::format("restated for coherent SI units the coefficient {} is {:.6g}, outside "
+                             "the stated {} ({:.6g} to {:.6g})",
+                             x.name, *k_si, value_text, low, high),
+                 x.where);
+        d.terms.push_back({x.where, x.name + "?", dim});
+        d.notes.push_back({fmt::format("stated as {}", stated_text), stated_at});
+        for (const auto& n : inferred.notes)
+            if (n.message.starts_with("in coherent SI units") ||
+                n.message.find(" holds only with ") != std::string::npos)
+                d.notes.push_back(n);
+        d.notes.push_back({"the coefficient, a unit of a symbol or the formula has changed since "
+                           "it was reviewed, or the statement is wrong",
+                           {}});
         out_.push_back(std::move(d));
     }
 
@@ -1041,7 +967,20 @@ class reporter {
                              fmt::join(free_names, free_names.size() == 2 ? " and " : ", ")),
                  {}});
         }
+        unchecked_statement(x, d);
         out_.push_back(std::move(d));
+    }
+
+    // A stated coefficient whose dimension is not settled: what was stated goes unchecked, and
+    // the finding says so rather than letting the statement look satisfied.
+    void unchecked_statement(const unknown& x, diagnostic& d) const {
+        if (x.statement == syntax::no_index)
+            return;
+        const syntax::coefficient_statement& st = file_.coefficient_statements[x.statement];
+        d.notes.push_back({fmt::format("what is stated for it, {}, cannot be checked until its "
+                                       "dimension is settled",
+                                       single_line(file_.source->text(st.range))),
+                           {file_.source, st.range}});
     }
 
     void conflict(std::uint32_t u, const conflict_set& set, std::size_t column) {
@@ -1054,13 +993,25 @@ class reporter {
             const syntax::formula& f = formulas_[set.formulas[i]];
             const std::string name = formula_name(file_, f);
             std::string message;
+            const line_column at = file_.source->position(f.range.begin);
+            const std::optional<dimension>& alone = set.alone[i][column];
+            const std::optional<dimension> others =
+                set.each_settles ? set.without[i].values[column] : std::nullopt;
             if (set.on_its_own[i])
                 message = fmt::format("{} cannot hold on its own, whatever dimensions its "
                                       "unknowns have",
                                       name);
-            else if (set.each_settles && set.without[i].values[column])
+            else if (alone && others)
+                message = fmt::format("{} at {}:{} on its own makes {} {}; the other formulas "
+                                      "make it {}",
+                                      name, at.line, at.column, who(x), describe(*alone),
+                                      describe(*others));
+            else if (alone)
+                message = fmt::format("{} at {}:{} on its own makes {} {}", name, at.line,
+                                      at.column, who(x), describe(*alone));
+            else if (others)
                 message = fmt::format("{}: the other formulas make {} {}", name, who(x),
-                                      describe(*set.without[i].values[column]));
+                                      describe(*others));
             else if (!set.searched)
                 message = fmt::format("{} involves {}", name, who(x));
             else
@@ -1076,16 +1027,19 @@ class reporter {
                                             : "too many formulas are tangled here to find the "
                                               "few that disagree",
                                {}});
+        unchecked_statement(x, d);
         out_.push_back(std::move(d));
     }
 
     void undecided(std::uint32_t u, const std::vector<std::string>& disputed) {
         const unknown& x = unknowns_[u];
-        out_.push_back(make(severity::warning, rules::inferred_dimension,
+        diagnostic d = make(severity::warning, rules::inferred_dimension,
                             fmt::format("the dimension of {} cannot be inferred while the "
                                         "formulas disagree about {}",
                                         who(x), fmt::join(disputed, ", ")),
-                            x.where));
+                            x.where);
+        unchecked_statement(x, d);
+        out_.push_back(std::move(d));
     }
 
     void overflow(std::uint32_t u) {
@@ -1173,12 +1127,17 @@ conflict_set find_conflict(const component& c, const std::vector<std::uint32_t>&
     }
     for (std::uint32_t f : set.formulas) {
         bool alone = false;
+        std::vector<std::optional<dimension>> values(n);
         try {
-            alone = !solve_only({f}).consistent;
+            solution s = solve_only({f});
+            alone = !s.consistent;
+            if (s.consistent)
+                values = std::move(s.values);
         } catch (const arithmetic_overflow&) {
             alone = false;
         }
         set.on_its_own.push_back(alone);
+        set.alone.push_back(std::move(values));
     }
     return set;
 }
@@ -1257,6 +1216,81 @@ double coherent_coefficient(double k, double f_y,
     for (const auto& [factor, exponent] : factors_and_exponents)
         result *= std::pow(factor, -exponent.to_double());
     return result;
+}
+
+std::optional<coherent_units> coherent_units_from(const std::vector<std::string>& symbols,
+                                                  std::string& why) {
+    const std::size_t n = symbols.size();
+    std::vector<std::array<rational, base_dimension_count>> exponents;
+    std::vector<double> logs;
+    std::array<bool, base_dimension_count> touched{};
+    for (const auto& symbol : symbols) {
+        const auto unit = unit_table::standard().resolve(symbol);
+        if (!unit) {
+            why = fmt::format("'{}' is not a unit plumb knows", symbol);
+            return std::nullopt;
+        }
+        if (unit->unit->scale == unit_scale::gauge) {
+            why = fmt::format("'{}' is a gauge pressure, not a unit of a consistent set", symbol);
+            return std::nullopt;
+        }
+        exponents.push_back(unit->dim().exponents());
+        logs.push_back(std::log(unit->factor()));
+        for (std::size_t b = 0; b < base_dimension_count; ++b)
+            touched[b] = touched[b] || !exponents.back()[b].is_zero();
+    }
+    std::vector<std::size_t> bases;
+    for (std::size_t b = 0; b < base_dimension_count; ++b)
+        if (touched[b])
+            bases.push_back(b);
+    rational_matrix m(n, bases.size());
+    for (std::size_t r = 0; r < n; ++r)
+        for (std::size_t c = 0; c < bases.size(); ++c)
+            m.at(r, c) = exponents[r][bases[c]];
+    if (n == 0 || bases.size() != n || matrix_rank(m) != n) {
+        why = fmt::format("{} do not fix one unit for each base dimension they involve (give one "
+                          "unit per base dimension, such as ft, lb, s or ft, lbf, s)",
+                          fmt::join(symbols, ", "));
+        return std::nullopt;
+    }
+    // Solve for the logarithms of the base factors: Gaussian elimination with partial pivoting
+    // on a small, non-singular system (its rank was checked exactly above).
+    // At most seven base dimensions (checked above: as many units as bases), so a fixed array.
+    std::array<std::array<double, base_dimension_count + 1>, base_dimension_count> a{};
+    for (std::size_t r = 0; r < n; ++r) {
+        for (std::size_t c = 0; c < n; ++c)
+            a[r][c] = exponents[r][bases[c]].to_double();
+        a[r][base_dimension_count] = logs[r];
+    }
+    for (std::size_t c = 0; c < n; ++c) {
+        std::size_t pivot = c;
+        for (std::size_t r = c + 1; r < n; ++r)
+            if (std::abs(a[r][c]) > std::abs(a[pivot][c]))
+                pivot = r;
+        std::swap(a[c], a[pivot]);
+        for (std::size_t r = 0; r < n; ++r) {
+            if (r == c)
+                continue;
+            const double f = a[r][c] / a[c][c];
+            for (std::size_t k = c; k < n; ++k)
+                a[r][k] -= f * a[c][k];
+            a[r][base_dimension_count] -= f * a[c][base_dimension_count];
+        }
+    }
+    coherent_units target;
+    for (std::size_t c = 0; c < n; ++c)
+        target.base_factor[bases[c]] = std::exp(a[c][base_dimension_count] / a[c][c]);
+    target.label = fmt::format("{}", fmt::join(symbols, ", "));
+    return target;
+}
+
+std::optional<std::string> restate_units_problem(const std::vector<std::string>& restate_in) {
+    if (restate_in.empty())
+        return std::nullopt;
+    std::string why;
+    if (!coherent_units_from(restate_in, why))
+        return why;
+    return std::nullopt;
 }
 
 void infer_dimensions(const syntax::parsed_file& file, std::span<const syntax::formula> formulas,

@@ -10,6 +10,7 @@
 #include "plumb/rational.hpp"
 
 #include <array>
+#include <optional>
 #include <span>
 #include <string>
 #include <utility>
@@ -23,6 +24,13 @@ struct coherent_units {
     std::string label;                                                         // "ft, lb, s"
     std::array<double, base_dimension_count> base_factor{1, 1, 1, 1, 1, 1, 1}; // SI per unit
 };
+
+// The consistent set named by its base units ("ft, lb, s"; "ft, lbf, s", where a force, a
+// length and a time fix the unit of mass, lbf·s²/ft): a unit for every base dimension the
+// units involve, found by solving Π F_b^e_ub = f_u for the base factors F_b. Empty, with `why`
+// set, when a unit is unknown or the units do not fix one unit per base dimension.
+std::optional<coherent_units> coherent_units_from(const std::vector<std::string>& symbols,
+                                                  std::string& why);
 
 // Infers the dimension of every symbol declared `X : ?` and every coefficient written `k?` from
 // the formulas that use them, and reports it. Diagnostics go to `out`.

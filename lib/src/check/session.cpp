@@ -374,29 +374,8 @@ class session {
     void read_restate_units(const std::vector<std::string>& symbols) {
         if (symbols.empty())
             return;
-        coherent_units target;
-        for (const auto& symbol : symbols) {
-            const auto unit = unit_table::standard().resolve(symbol);
-            std::optional<std::size_t> base;
-            if (unit) {
-                const dimension d = unit->dim();
-                for (std::size_t b = 0; b < base_dimension_count; ++b) {
-                    const rational e = d.exponent(static_cast<base_dimension>(b));
-                    if (e.is_zero())
-                        continue;
-                    if (base || !(e == rational(1))) {
-                        base.reset();
-                        break;
-                    }
-                    base = b;
-                }
-            }
-            if (!unit || !base)
-                return; // not a base unit: no restatement (the command line says why)
-            target.base_factor[*base] = unit->factor();
-            target.label += (target.label.empty() ? "" : ", ") + symbol;
-        }
-        restate_in_ = target;
+        std::string why; // the command line reports it (restate_units_problem)
+        restate_in_ = coherent_units_from(symbols, why);
     }
 
     std::vector<loaded_file*> dictionaries_;

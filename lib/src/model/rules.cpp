@@ -6,7 +6,7 @@
 namespace plumb::rules {
 
 std::span<const rule_info> all() {
-    static constexpr std::array<rule_info, 25> table = {{
+    static constexpr std::array<rule_info, 26> table = {{
         {syntax, "a line does not follow the notation"},
         {sum_mismatch, "the terms of a sum or difference differ in dimension"},
         {side_mismatch, "the sides of an equation or limit differ in dimension"},
@@ -36,6 +36,8 @@ std::span<const rule_info> all() {
                              "or naming an unknown rule"},
         {stale_acceptance,
          "a `# reviewed` mark or an accepted-findings entry that no longer accepts anything"},
+        {coefficient_mismatch, "a coefficient marked ?[...] is not the dimension or SI value "
+                               "stated for it"},
     }};
     return table;
 }

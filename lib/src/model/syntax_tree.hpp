@@ -31,7 +31,8 @@ enum class expr_kind : std::uint8_t {
     call,     // range starts with the function name; lhs = first index into call_args, rhs = count
     group,    // ( lhs ): kept so that messages quote terms with their parentheses
     quantity, // 0.5 {m} or {g_n}: lhs = index into quantities
-    inferred, // 1.486?: a coefficient whose dimension is to be inferred
+    inferred, // 1.486?: a coefficient whose dimension is to be inferred; lhs = index into
+              // coefficient_statements when written 1.486?[...], else no_index
 };
 
 // A number with a unit, or a named constant, inside a formula.
@@ -40,6 +41,15 @@ struct quantity_literal {
     double si_factor = 1.0;       // SI value of one unit (of the constant: its SI value)
     const unit_definition* single_unit = nullptr; // a lone unit without prefix, for offsets
     bool constant = false;
+};
+
+// What a coefficient written "k?[...]" is stated to be.
+struct coefficient_statement {
+    span range;                     // the brackets
+    std::optional<dimension> dim;   // its dimension, when stated
+    std::optional<double> si_value; // its value in coherent SI units, when stated
+    double tolerance = 0.0;         // how far the restated value may lie from si_value
+    span value_text;                // "2π ± 0.1%" as written
 };
 
 struct expr_node {
@@ -153,6 +163,7 @@ struct parsed_file {
     std::vector<expr_node> nodes;
     std::vector<std::uint32_t> call_args;
     std::vector<quantity_literal> quantities;
+    std::vector<coefficient_statement> coefficient_statements;
     std::vector<formula_side> sides;
     std::vector<formula> formulas;
     std::vector<declaration> declarations;

@@ -8,10 +8,13 @@
 #include "plumb/notation_errors.hpp"
 #include "plumb/rules.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <cstdlib>
 #include <cstring>
 #include <fmt/core.h>
+#include <numbers>
+#include <optional>
 
 namespace plumb {
 namespace {
@@ -87,6 +90,11 @@ struct parse_state {
     int depth = 0;
     bool in_braces = false;
     bool line_has_inferred = false;
+    // The statement "[L^(1/3) T^-1, SI 1 ± 0.1%]" of the coefficient being read, if any.
+    std::optional<syntax::coefficient_statement> pending_statement;
+    double pending_tolerance = 0.0;
+    bool pending_tolerance_percent = false;
+    bool pending_tolerance_stated = false;
     std::uint32_t formula_first_side = 0;
     relation_kind pending_relation = relation_kind::none;
     span pending_label{};
@@ -123,8 +131,8 @@ struct parse_state {
     std::optional<unit_value> pending_value_unit;
     span pending_value_unit_text{};
     std::uint32_t line_first_case_match = 0;
-    std::optional<double> pending_tolerance;
-    span pending_tolerance_text{};
+    std::optional<double> pending_match_tolerance;
+    span pending_match_tolerance_text{};
 
     [[nodiscard]] span range(const char* b, const char* e) const {
         return {static_cast<std::uint32_t>(b - file_begin),
@@ -162,6 +170,7 @@ struct parse_state {
         depth = 0;
         in_braces = false;
         line_has_inferred = false;
+        pending_statement.reset();
         operands.clear();
         argument_counts.clear();
         pending_relation = relation_kind::none;
@@ -184,8 +193,8 @@ struct parse_state {
         pending_scale.reset();
         pending_value_unit.reset();
         line_first_case_match = static_cast<std::uint32_t>(out.case_matches.size());
-        pending_tolerance.reset();
-        pending_tolerance_text = {};
+        pending_match_tolerance.reset();
+        pending_match_tolerance_text = {};
     }
     void report(std::string_view rule, std::string message, span where) {
         diagnostic d;
@@ -232,9 +241,15 @@ template <typename Rule> struct action : pg::nothing<Rule> {};
 template <> struct action<nt::number_term> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const std::string_view t = in.string_view();
-        if (t.back() == '?') {
+        if (t.find('?') != std::string_view::npos) {
             s.line_has_inferred = true;
-            s.push_node({expr_kind::inferred, s.range(in)});
+            std::uint32_t statement = syntax::no_index;
+            if (s.pending_statement) {
+                s.out.coefficient_statements.push_back(*s.pending_statement);
+                statement = static_cast<std::uint32_t>(s.out.coefficient_statements.size() - 1);
+                s.pending_statement.reset();
+            }
+            s.push_node({expr_kind::inferred, s.range(in), statement});
             return;
         }
         if (t.back() == '}') {
@@ -242,6 +257,78 @@ template <> struct action<nt::number_term> {
             return;
         }
         s.push_node({expr_kind::number, s.range(in)});
+    }
+};
+// --- What a coefficient is stated to be: 1.486?[L^(1/3) T^-1, SI 1 ± 0.1%] ---
+template <> struct action<nt::stated_open> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.pending_statement.emplace();
+        s.bracket_dimension = {};
+        s.pending_tolerance_stated = false;
+        s.pending_tolerance_percent = false;
+    }
+};
+template <> struct action<nt::stated_dimension> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        if (s.pending_statement)
+            s.pending_statement->dim = s.bracket_dimension;
+    }
+};
+template <> struct action<nt::stated_number> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        if (!s.pending_statement)
+            return;
+        const std::string_view t = in.string_view();
+        const std::size_t end = t.find_first_not_of("0123456789.eE+-");
+        const std::string digits(t.substr(0, end));
+        double value = std::strtod(digits.c_str(), nullptr);
+        // As precise as written: half a unit in the last digit ("1.84" is 1.835 to 1.845).
+        const std::size_t e = digits.find_first_of("eE");
+        const std::string mantissa = digits.substr(0, e);
+        const std::size_t point = mantissa.find('.');
+        const int decimals =
+            point == std::string::npos ? 0 : static_cast<int>(mantissa.size() - point - 1);
+        // Clamped: a huge exponent only has to give an infinite value, never overflow an int.
+        const long power =
+            e == std::string::npos
+                ? 0
+                : std::clamp(std::strtol(digits.c_str() + e + 1, nullptr, 10), -100000L, 100000L);
+        double half_unit = 0.5 * std::pow(10.0, static_cast<double>(power - decimals));
+        if (end != std::string_view::npos) { // a multiple of π
+            value *= std::numbers::pi;
+            half_unit *= std::numbers::pi;
+        }
+        s.pending_statement->si_value = value;
+        s.pending_statement->tolerance = half_unit;
+    }
+};
+template <> struct action<nt::stated_tolerance_number> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_tolerance = std::strtod(std::string(in.string_view()).c_str(), nullptr);
+        s.pending_tolerance_stated = true;
+    }
+};
+template <> struct action<nt::stated_percent> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.pending_tolerance_percent = true;
+    }
+};
+template <> struct action<nt::stated_value> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        if (!s.pending_statement || !s.pending_statement->si_value)
+            return;
+        s.pending_statement->value_text = s.range(in);
+        if (s.pending_tolerance_stated)
+            s.pending_statement->tolerance =
+                s.pending_tolerance_percent
+                    ? std::abs(*s.pending_statement->si_value) * s.pending_tolerance / 100.0
+                    : s.pending_tolerance;
+    }
+};
+template <> struct action<nt::coefficient_statement> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        if (s.pending_statement)
+            s.pending_statement->range = s.range(in);
     }
 };
 template <> struct action<nt::quantity_term> {
@@ -759,8 +846,8 @@ template <> struct action<nt::case_statement> {
             static_cast<std::uint32_t>(s.out.case_matches.size()) - s.line_first_case_match;
         s.out.cases.push_back({s.range(in), s.pending_study_name, s.pending_is_model,
                                s.pending_scale, s.pending_scale_text, s.line_first_case_value,
-                               count, s.line_first_case_match, matches, s.pending_tolerance,
-                               s.pending_tolerance_text});
+                               count, s.line_first_case_match, matches, s.pending_match_tolerance,
+                               s.pending_match_tolerance_text});
     }
 };
 template <> struct action<nt::match_target> {
@@ -770,8 +857,9 @@ template <> struct action<nt::match_target> {
 };
 template <> struct action<nt::tolerance_percent> {
     template <typename In> static void apply(const In& in, parse_state& s) {
-        s.pending_tolerance_text = s.range(in);
-        s.pending_tolerance = std::strtod(std::string(in.string_view()).c_str(), nullptr) / 100.0;
+        s.pending_match_tolerance_text = s.range(in);
+        s.pending_match_tolerance =
+            std::strtod(std::string(in.string_view()).c_str(), nullptr) / 100.0;
     }
 };
 

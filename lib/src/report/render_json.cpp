@@ -37,6 +37,32 @@ void append_dimension(std::string& out, const dimension& d) {
     append_string(out, quantity_name(d));
 }
 
+// A unit-bound coefficient restated for coherent units: the value to full precision (the
+// shortest text that reads back as the same double), the factor that gives it, as units and
+// as digits, and the units the written coefficient holds for. Only on findings that have one.
+void append_restated(std::string& out, const std::vector<restated_coefficient>& restated) {
+    if (restated.empty())
+        return;
+    out += ",\n      \"restated\": [";
+    for (std::size_t i = 0; i < restated.size(); ++i) {
+        const restated_coefficient& r = restated[i];
+        out += i == 0 ? "{\"units\": " : ", {\"units\": ";
+        append_string(out, valid_utf8(r.units));
+        out += fmt::format(", \"value\": {}, \"factor\": ", r.value);
+        append_string(out, valid_utf8(r.factor));
+        out += ", \"factor_digits\": ";
+        append_string(out, valid_utf8(r.factor_digits));
+        out += fmt::format(", \"factor_value\": {}, \"holds_with\": [", r.factor_value);
+        for (std::size_t k = 0; k < r.holds_with.size(); ++k) {
+            if (k > 0)
+                out += ", ";
+            append_string(out, valid_utf8(r.holds_with[k]));
+        }
+        out += "]}";
+    }
+    out += "]";
+}
+
 std::string_view severity_name(severity s) {
     switch (s) {
     case severity::error:
@@ -93,6 +119,7 @@ std::string render_json(const check_report& report) {
             append_string(out, valid_utf8(d.accepted->reason));
             out += "}";
         }
+        append_restated(out, d.restated);
         out += "}";
     }
     out += first ? "],\n" : "\n  ],\n";
