@@ -398,7 +398,7 @@ TEST_CASE("syntax messages name no C++ rule or type") {
         "x = (a + b",  "a = ",      "x = 2g",    "y = x**2",  "z : [M L/T]",  "p : m \"x",
         "@ x = y",     "x = a +",   "a b = c",   "V : ",      "w : m^",       "x = sqrt(a",
         "x = a)",      "x = ,",     "= x",       "x = 1.2.3", "x = 1e",       "x = [a]",
-        "x : [M^(1/]", "x = \"a\"", "x = a $ b", "x : m m",   "x : m = y",    "@",
+        "x : [M^(1/]", "x = \"a\"", "x = a $ b", "x : m m +", "x : m = y",    "@",
         "x",           "use x",     "x : ((((m", "\x01\x02",  "x = a\u00F7b", "x <",
         "x = a,b",     "x : [Q]",   "x : m^x",   "x = max(",  "\xFF\xFE = 1", ":",
     };
