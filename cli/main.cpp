@@ -188,6 +188,7 @@ int run_check(const std::vector<std::string>& args) {
     if (opts.positional.empty())
         return usage_error("check needs at least one file or folder");
     std::vector<std::filesystem::path> paths(opts.positional.begin(), opts.positional.end());
+    opts.check.record_formulas = opts.json;
     const plumb::check_report report = plumb::check_paths(paths, opts.check);
     if (opts.json)
         print(plumb::render_json(report));

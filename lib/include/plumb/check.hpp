@@ -19,6 +19,16 @@ struct check_options {
     // Base units of a consistent set other than SI ("ft", "lb", "s"): coefficients marked `?`
     // are restated for it as well as for coherent SI units.
     std::vector<std::string> restate_in;
+    // Keep one formula_result per formula checked (for reports that list every formula, such
+    // as the JSON one); off by default so that memory stays flat on large checks.
+    bool record_formulas = false;
+};
+
+// One formula checked, with its label and the most severe finding on it.
+struct formula_result {
+    location where;                // the whole formula
+    std::string_view label;        // without the '@'; empty when the formula has none
+    std::optional<severity> worst; // empty when nothing was reported: the formula passed
 };
 
 // One `study` line worked out: its groups and, when prototype and model lines give values,
@@ -39,6 +49,7 @@ struct check_report {
     std::vector<std::unique_ptr<source_file>> sources;
     std::vector<diagnostic> diagnostics;
     std::vector<study_report> studies;
+    std::vector<formula_result> formulas; // when check_options::record_formulas is set
     std::size_t files_checked = 0;
     std::size_t formulas_checked = 0;
     std::size_t bytes_checked = 0;
