@@ -8,6 +8,7 @@
 #include "plumb/notation_errors.hpp"
 #include "plumb/rules.hpp"
 
+#include <cctype>
 #include <cmath>
 #include <cstdlib>
 #include <cstring>
@@ -928,6 +929,59 @@ void tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark)
     }
 }
 
+bool is_word_byte(char c) {
+    const auto u = static_cast<unsigned char>(c);
+    return std::isalnum(u) != 0 || c == '_' || c == '\'' || u >= 0x80;
+}
+
+// First attempts that stop the grammar where two terms stand side by side: "ρ g h" (a product
+// without '*') and "101.325 kPa" (a quantity without braces). The grammar only knows that it
+// wanted an operator; the words around the place say which of the two was meant.
+std::string side_by_side_hint(std::string_view line, std::size_t at, const parse_state& s) {
+    std::size_t before = at;
+    while (before > 0 && (line[before - 1] == ' ' || line[before - 1] == '\t'))
+        --before;
+    std::size_t next = at;
+    while (next < line.size() && (line[next] == ' ' || line[next] == '\t'))
+        ++next;
+    if (before == at || before == 0 || next >= line.size() || !is_word_byte(line[next]) ||
+        std::isdigit(static_cast<unsigned char>(line[next])) != 0)
+        return {};
+    std::size_t word_end = next;
+    while (word_end < line.size() && is_word_byte(line[word_end]))
+        ++word_end;
+    const std::string_view word = line.substr(next, word_end - next);
+    std::size_t token = before;
+    while (token > 0 && is_word_byte(line[token - 1]))
+        --token;
+    const std::string_view previous = line.substr(token, before - token);
+    const bool number_before =
+        !previous.empty() && std::isdigit(static_cast<unsigned char>(previous.front())) != 0;
+    if (number_before || (token > 0 && line[token - 1] == '.')) {
+        // Take the whole number (digits, '.', an exponent) and the unit as far as it runs.
+        std::size_t number_begin = token;
+        while (number_begin > 0 &&
+               (std::isdigit(static_cast<unsigned char>(line[number_begin - 1])) != 0 ||
+                line[number_begin - 1] == '.'))
+            --number_begin;
+        std::size_t unit_end = next;
+        while (unit_end < line.size() &&
+               (is_word_byte(line[unit_end]) || line[unit_end] == '/' || line[unit_end] == '^' ||
+                line[unit_end] == '(' || line[unit_end] == ')'))
+            ++unit_end;
+        if (!lookup_unit(word, s))
+            return {};
+        return fmt::format("a number and its unit in a formula go in braces: write {} {{{}}}",
+                           line.substr(number_begin, before - number_begin),
+                           line.substr(next, unit_end - next));
+    }
+    if (previous.empty() && line[before - 1] != ')')
+        return {};
+    return fmt::format("two terms stand side by side; a product needs '*' between its factors, "
+                       "as in {}*{}",
+                       previous.empty() ? std::string_view("(...)") : previous, word);
+}
+
 // Past this many, a file is more likely not ours at all than a calc with typos.
 constexpr std::size_t max_syntax_errors = 50;
 
@@ -992,7 +1046,15 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
                 while (stop < end && (static_cast<unsigned char>(text[stop]) & 0xC0) == 0x80)
                     ++stop;
             }
-            state.report(rules::syntax, failure.message, {at, stop});
+            std::string message = failure.message;
+            if (failure.message == nt::error_message<nt::line_end> ||
+                failure.message == nt::error_message<nt::relation>) {
+                const std::string hint =
+                    side_by_side_hint(text.substr(begin, end - begin), at - begin, state);
+                if (!hint.empty())
+                    message = hint;
+            }
+            state.report(rules::syntax, std::move(message), {at, stop});
             out.has_syntax_error = true;
             ++syntax_errors;
         } catch (const arithmetic_overflow&) {
