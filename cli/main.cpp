@@ -43,7 +43,7 @@ options for check, groups and dim:
   --format text|json   output format for check and groups (default: text)
   --study NAME         groups: only the study called NAME
   --restate-in UNITS   check: restate coefficients marked ? also for the consistent set
-                       of units with these base units, e.g. 'ft, lb, s'
+                       of units with these base units, e.g. 'ft, lb, s' or 'ft, lbf, s'
   --color auto|always|never
                        colour the text output (default: auto, which means on a
                        terminal only, and never when NO_COLOR is set or TERM=dumb)
@@ -158,25 +158,14 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
     return std::nullopt;
 }
 
-// Each unit of --restate-in must be a unit of exactly one base dimension.
+// The units of --restate-in must make a consistent set (one base each, or force as a base).
 std::optional<std::string> check_restate_units(const std::vector<std::string>& units) {
-    for (const auto& u : units) {
-        const auto resolved = plumb::unit_table::standard().resolve(u);
-        int bases = 0;
-        bool unit_power = true;
-        const plumb::dimension dim = resolved ? resolved->dim() : plumb::dimension{};
-        if (resolved)
-            for (const auto& e : dim.exponents())
-                if (!e.is_zero()) {
-                    ++bases;
-                    unit_power = unit_power && e == plumb::rational(1);
-                }
-        if (!resolved || bases != 1 || !unit_power)
-            return fmt::format("--restate-in: '{}' is not a unit of one base dimension (such as "
-                               "ft, lb, s or °R)",
-                               u);
-    }
-    return std::nullopt;
+    if (units.empty())
+        return std::nullopt;
+    const std::string problem = plumb::restate_units_problem(units);
+    if (problem.empty())
+        return std::nullopt;
+    return fmt::format("--restate-in: {}", problem);
 }
 
 int run_check(const std::vector<std::string>& args) {

@@ -156,3 +156,35 @@ TEST_CASE("rotational speed: rpm, r/min, rev/s, one revolution counted as one cy
     INFO(listing(r));
     CHECK(r.diagnostics.empty());
 }
+
+TEST_CASE("--restate-in accepts a set that takes force as a base: ft, lbf, s") {
+    // Water at 1000 kg/m^3 is 1.940 slug/ft^3 and 62.43 lb/ft^3 (common practice, from
+    // memory); the slug is lbf·s²/ft (NIST SP 811 (2008), B.8).
+    const std::string calc = "ρ_w : kg/m^3\nρ_w = 1000?\n";
+    const auto restated = [&](std::vector<std::string> set) {
+        plumb::check_options options;
+        options.restate_in = std::move(set);
+        const auto r = plumb::check_text("r.plumb", calc, options);
+        std::string notes;
+        for (const auto* d : findings(r, plumb::rules::inferred_dimension))
+            for (const auto& n : d->notes)
+                notes += n.message + "\n";
+        return notes;
+    };
+    const std::string force_based = restated({"ft", "lbf", "s"});
+    CHECK(force_based.find("in coherent units of ft, lbf, s the coefficient is") !=
+          std::string::npos);
+    CHECK(force_based.find("= 1.94") != std::string::npos);
+    const std::string mass_based = restated({"ft", "lb", "s"});
+    CHECK(mass_based.find("= 62.4") != std::string::npos);
+
+    CHECK(plumb::restate_units_problem({"ft", "lbf", "s"}).empty());
+    CHECK(plumb::restate_units_problem({"m", "N", "s"}).empty());
+    CHECK(plumb::restate_units_problem({"ft", "s"}).empty());
+    // One unit short, one too many, or two that follow from each other: refused, with why.
+    CHECK_FALSE(plumb::restate_units_problem({"lbf"}).empty());
+    CHECK_FALSE(plumb::restate_units_problem({"ft", "lbf", "s", "lb"}).empty());
+    CHECK_FALSE(plumb::restate_units_problem({"ft", "ft2"}).empty());
+    CHECK_FALSE(plumb::restate_units_problem({"furlong"}).empty());
+    CHECK_FALSE(plumb::restate_units_problem({"\u00B0C"}).empty());
+}

@@ -59,6 +59,11 @@ struct check_report {
     [[nodiscard]] std::size_t count(severity level) const;
 };
 
+// Why the units given for restating coefficients (check_options::restate_in) do not make a
+// consistent set, or empty when they do: one unit per base dimension, each of one base ("ft,
+// lb, s") or a set that takes force as a base ("ft, lbf, s", mass then being lbf·s²/ft).
+std::string restate_units_problem(const std::vector<std::string>& symbols);
+
 // Checks .plumb files; a directory is searched recursively for *.plumb, in sorted order.
 check_report check_paths(const std::vector<std::filesystem::path>& paths,
                          const check_options& options = {});

@@ -22,6 +22,92 @@ namespace plumb {
 
 namespace fs = std::filesystem;
 
+namespace {
+
+// The base units of a consistent set given by its units: "ft, lb, s" directly, or a set that
+// takes force as a base, "ft, lbf, s", whose mass unit follows (lbf·s²/ft, the slug). Each
+// unit's dimension is a row of a square matrix over the bases the units involve; inverting it
+// exactly gives each base unit as a product of powers of the given units.
+std::optional<coherent_units> coherent_set(const std::vector<std::string>& symbols,
+                                           std::string& why) {
+    std::vector<std::array<rational, base_dimension_count>> rows;
+    std::vector<double> factors;
+    std::array<bool, base_dimension_count> involved{};
+    coherent_units set;
+    for (const auto& symbol : symbols) {
+        const auto unit = unit_table::standard().resolve(symbol);
+        if (!unit || unit->unit->scale != unit_scale::absolute || unit->dim().is_dimensionless()) {
+            why = fmt::format("'{}' is not a unit of a base or of force (such as ft, lb, lbf, s or "
+                              "\u00B0R)",
+                              symbol);
+            return std::nullopt;
+        }
+        std::array<rational, base_dimension_count> row{};
+        for (std::size_t b = 0; b < base_dimension_count; ++b) {
+            row[b] = unit->dim().exponent(static_cast<base_dimension>(b));
+            involved[b] = involved[b] || !row[b].is_zero();
+        }
+        rows.push_back(row);
+        factors.push_back(unit->factor());
+        set.label += (set.label.empty() ? "" : ", ") + symbol;
+    }
+    std::vector<std::size_t> bases;
+    for (std::size_t b = 0; b < base_dimension_count; ++b)
+        if (involved[b])
+            bases.push_back(b);
+    const std::size_t n = rows.size();
+    if (bases.size() != n) {
+        why = fmt::format("the units {} span {} base dimensions; give one unit for each", set.label,
+                          bases.size());
+        return std::nullopt;
+    }
+    // Gauss-Jordan on [A | I] with exact rationals: A[k][j] is unit k's exponent of base j.
+    std::vector<std::vector<rational>> a(n, std::vector<rational>(2 * n));
+    for (std::size_t k = 0; k < n; ++k) {
+        for (std::size_t j = 0; j < n; ++j)
+            a[k][j] = rows[k][bases[j]];
+        a[k][n + k] = rational(1);
+    }
+    for (std::size_t col = 0; col < n; ++col) {
+        std::size_t pivot = col;
+        while (pivot < n && a[pivot][col].is_zero())
+            ++pivot;
+        if (pivot == n) {
+            why = fmt::format("the units {} are not independent (one follows from the others)",
+                              set.label);
+            return std::nullopt;
+        }
+        std::swap(a[pivot], a[col]);
+        const rational lead = a[col][col];
+        for (auto& x : a[col])
+            x = x / lead;
+        for (std::size_t r = 0; r < n; ++r) {
+            if (r == col || a[r][col].is_zero())
+                continue;
+            const rational m = a[r][col];
+            for (std::size_t c = 0; c < 2 * n; ++c)
+                a[r][c] = a[r][c] - m * a[col][c];
+        }
+    }
+    // log b = A^-1 log u: base j is the product over units k of u_k^(A^-1)[j][k].
+    for (std::size_t j = 0; j < n; ++j) {
+        double factor = 1.0;
+        for (std::size_t k = 0; k < n; ++k)
+            factor *= std::pow(factors[k], a[j][n + k].to_double());
+        set.base_factor[bases[j]] = factor;
+    }
+    return set;
+}
+
+} // namespace
+
+std::string restate_units_problem(const std::vector<std::string>& symbols) {
+    std::string why;
+    if (!coherent_set(symbols, why))
+        return why;
+    return {};
+}
+
 std::size_t check_report::count(severity level) const {
     return static_cast<std::size_t>(
         std::count_if(diagnostics.begin(), diagnostics.end(),
@@ -361,33 +447,11 @@ class session {
 
     std::optional<coherent_units> restate_in_;
 
-    // "ft", "lb", "s": each must be a unit of exactly one base dimension.
     void read_restate_units(const std::vector<std::string>& symbols) {
         if (symbols.empty())
             return;
-        coherent_units target;
-        for (const auto& symbol : symbols) {
-            const auto unit = unit_table::standard().resolve(symbol);
-            std::optional<std::size_t> base;
-            if (unit) {
-                const dimension d = unit->dim();
-                for (std::size_t b = 0; b < base_dimension_count; ++b) {
-                    const rational e = d.exponent(static_cast<base_dimension>(b));
-                    if (e.is_zero())
-                        continue;
-                    if (base || !(e == rational(1))) {
-                        base.reset();
-                        break;
-                    }
-                    base = b;
-                }
-            }
-            if (!unit || !base)
-                return; // not a base unit: no restatement (the command line says why)
-            target.base_factor[*base] = unit->factor();
-            target.label += (target.label.empty() ? "" : ", ") + symbol;
-        }
-        restate_in_ = target;
+        std::string why;
+        restate_in_ = coherent_set(symbols, why); // empty when unusable (the command line says)
     }
 
     std::vector<loaded_file*> dictionaries_;
