@@ -142,9 +142,9 @@ struct gauge_mark : seq<one<'('>, one<'g', 'a'>, one<')'>> {};
 // "°" alone is the angle degree; "°C", "°F" are symbols that start with it. "° C" with a
 // space would read as degree times coulomb, so it is refused with a message.
 struct no_spaced_degree_scale : not_at<plus<space>, one<'C', 'F'>, not_at<name_char>> {};
-struct unit_symbol : sor<seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>,
-                             opt<gauge_mark>>,
-                         seq<utf8::one<0xB0>, must<no_spaced_degree_scale>>> {};
+struct unit_symbol
+    : sor<seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>, opt<gauge_mark>>,
+          seq<utf8::one<0xB0>, must<no_spaced_degree_scale>>> {};
 struct unit_percent : one<'%'> {};
 struct unit_one : seq<one<'1'>, not_at<digit>> {};
 struct unit_group_close : one<')'> {};
@@ -167,12 +167,12 @@ struct unit_multiply : seq<star<space>, multiply_sign, star<space>, must<unit_fa
 struct unit_divide : seq<star<space>, one<'/'>, star<space>, must<unit_factor>> {};
 // A space multiplies too, as printed: "kN m", "W/(m^2 K)". It never takes the words that may
 // follow a unit: "zero at" in a measure line (a description or '=' cannot start a unit).
-struct origin_words : seq<TAO_PEGTL_STRING("zero"), plus<space>, TAO_PEGTL_STRING("at"),
-                          not_at<name_char>> {};
+struct origin_words
+    : seq<TAO_PEGTL_STRING("zero"), plus<space>, TAO_PEGTL_STRING("at"), not_at<name_char>> {};
 struct unit_after_space : sor<letter, utf8::one<0xB0, 0x394>, one<'('>> {};
 struct spaced_unit_factor : unit_power {};
-struct unit_spaced_multiply : seq<plus<space>, at<unit_after_space>, not_at<origin_words>,
-                                  must<spaced_unit_factor>> {};
+struct unit_spaced_multiply
+    : seq<plus<space>, at<unit_after_space>, not_at<origin_words>, must<spaced_unit_factor>> {};
 struct unit_expression
     : seq<unit_power, star<sor<unit_multiply, unit_divide, unit_spaced_multiply>>> {};
 struct braced_unit : if_must<brace_open, star<space>, unit_expression, star<space>, brace_close> {};
