@@ -66,7 +66,7 @@ options for check, groups, dim and catalogue:
                        path's folder or the nearest folder above)
   --study NAME         groups: only the study called NAME
   --restate-in UNITS   check: restate coefficients marked ? also for the consistent set
-                       of units with these base units, e.g. 'ft, lb, s'
+                       of units with these base units, e.g. 'ft, lb, s' or 'ft, lbf, s'
   --color auto|always|never
                        colour the text output (default: auto, which means on a
                        terminal only, and never when NO_COLOR is set or TERM=dumb)
@@ -308,6 +308,7 @@ int run_check(const std::vector<std::string>& args) {
         const auto users = plumb::files_using(run.paths, opts.check);
         run.paths.insert(run.paths.end(), users.begin(), users.end());
     }
+    opts.check.record_formulas = opts.format == output_format::json;
     const plumb::check_report report = plumb::check_paths(run.paths, opts.check);
     if (opts.format == output_format::sarif)
         print(plumb::render_sarif(report, opts.check.project_root));

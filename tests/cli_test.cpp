@@ -1187,13 +1187,15 @@ TEST_CASE("catalogue: the filter by symbol, name or quantity; a prefixed symbol 
     const auto by_quantity = run_plumb({"catalogue", "viscosity"});
     CHECK(by_quantity.status == 0);
     CHECK(contains(by_quantity.out, "dynamic viscosity [M L^-1 T^-1]"));
-    CHECK(contains(by_quantity.out, "\n  cP "));
+    CHECK(contains(by_quantity.out, "\n  cP, cp "));
     CHECK(contains(by_quantity.out, "\n  cSt "));
 
     // SI Brochure 9th ed., Table 7: kilo is 10^3.
     const auto prefixed = run_plumb({"catalogue", "kPa"});
     CHECK(prefixed.status == 0);
-    CHECK(contains(prefixed.out, "kPa  kilo + pascal  1000  "));
+    CHECK(contains(prefixed.out, "\n  kPa "));
+    CHECK(contains(prefixed.out, " kilo + pascal "));
+    CHECK(contains(prefixed.out, " 1000 "));
 
     const auto none = run_plumb({"catalogue", "furlong"});
     CHECK(none.status == 1);
@@ -1271,6 +1273,66 @@ TEST_CASE("a folder is searched recursively for *.plumb files only") {
     CHECK(contains(nested.out, "1 formula in 1 file"));
 }
 
+TEST_CASE("what a hook relies on: nothing to check is status 2, a file named twice is checked "
+          "once") {
+    const temp_folder dir;
+    (void)dir.write("empty/notes.txt", "no calc here\n");
+    const auto empty = run_plumb({"check", "--color", "never", dir.path("empty")});
+    CHECK(empty.status == 2);
+    CHECK(contains(empty.out, fmt::format("nothing to check in '{}'", dir.path("empty"))));
+
+    const auto mistyped = run_plumb({"check", "--color", "never", dir.path("emtpy")});
+    CHECK(mistyped.status == 2);
+    CHECK(contains(mistyped.out, "no such file"));
+
+    const auto file = dir.write("calc/side.plumb", side_file);
+    const auto twice = run_plumb({"check", "--color", "never", file, file, dir.path("calc")});
+    CHECK(twice.status == 1);
+    CHECK(contains(twice.out, "(1 formula in 1 file checked)"));
+    // One finding, not three.
+    const auto first = twice.out.find("[side-mismatch]");
+    REQUIRE(first != std::string::npos);
+    CHECK(twice.out.find("[side-mismatch]", first + 1) == std::string::npos);
+}
+
+TEST_CASE("json: every formula with its label and result, those that passed too") {
+    const temp_folder dir;
+    const auto file = dir.write("calc.plumb", "a, b : m\nt : s\n\n"
+                                              "@fine a = b\n"  // line 4: passes
+                                              "@wrong a = t\n" // line 5: error
+                                              "a = 1.5?*t\n"   // line 6: note (inferred)
+                                              "b = 2 {mm}\n"); // line 7: warning (scale)
+    const auto r = run_plumb({"check", "--format", "json", file});
+    const auto doc = parse_json(r.out);
+    REQUIRE(doc);
+    const auto& formulas = (*doc)["formulas"].array();
+    REQUIRE(formulas.size() == 4);
+    const char* labels[] = {"fine", "wrong", "", ""};
+    const char* results[] = {"passed", "error", "note", "warning"};
+    for (std::size_t i = 0; i < 4; ++i) {
+        CAPTURE(i);
+        CHECK(formulas[i]["file"].string() == file);
+        CHECK(formulas[i]["line"].number() == static_cast<double>(i + 4));
+        CHECK(formulas[i]["column"].number() == 1);
+        CHECK(formulas[i]["label"].string() == labels[i]);
+        CHECK(formulas[i]["result"].string() == results[i]);
+    }
+}
+
+TEST_CASE("--dict carries the dictionary's own units, as `use` does") {
+    const temp_folder dir;
+    const auto dict = dir.write("units.plumb", "measure mgal = 1e6 gal \"million US gallons\"\n"
+                                               "measure kPa_g = kPa zero at 101.325 kPa\n");
+    const auto calc = dir.write("calc.plumb", "V_t : mgal\nV_2 : m^3\np : kPa_g\n"
+                                              "V_t >= V_2/1e6*264.172\np >= 0\n");
+    const auto without = run_plumb({"check", "--color", "never", calc});
+    CHECK(without.status == 1);
+    CHECK(contains(without.out, "unknown unit 'mgal'"));
+    const auto with = run_plumb({"check", "--color", "never", "--dict", dict, calc});
+    CHECK_FALSE(contains(with.out, "[unknown-unit]"));
+    CHECK(with.status == 0);
+}
+
 TEST_CASE("CRLF line endings give the same findings as LF") {
     const temp_folder dir;
     const std::string lf = std::string(sum_file) + "L : m\n" + "@cont L = \\\n    H + \\\n  V\n";
@@ -1325,7 +1387,8 @@ TEST_CASE("groups: a study's groups, the --vars form, --study and JSON") {
     // Sphere drag: F_D/(ρV²D²) = φ(ρVD/μ) (F. M. White, Fluid Mechanics, 7th ed., ch. 5,
     // chapter from memory).
     const std::string declarations = "F_D : N\nρ : kg/m^3\nV : m/s\nD : m\nμ : Pa*s\n";
-    const auto file = dir.write("drag.plumb", declarations + "study drag: F_D depends on ρ, V, D, μ\n");
+    const auto file =
+        dir.write("drag.plumb", declarations + "study drag: F_D depends on ρ, V, D, μ\n");
 
     const auto r = run_plumb({"groups", "--color", "never", file});
     CHECK(r.status == 0);
@@ -1334,8 +1397,9 @@ TEST_CASE("groups: a study's groups, the --vars form, --study and JSON") {
     CHECK(contains(r.out, "F_D/(ρ*V^2*D^2)"));
     CHECK(contains(r.out, "ρ*V*D/μ"));
 
-    const auto from_vars = run_plumb({"groups", "--vars", "F_D depends on ρ, V, D, μ", "--repeating",
-                                      "ρ, V, D", dir.write("dictionary.plumb", declarations)});
+    const auto from_vars =
+        run_plumb({"groups", "--vars", "F_D depends on ρ, V, D, μ", "--repeating", "ρ, V, D",
+                   dir.write("dictionary.plumb", declarations)});
     CHECK(from_vars.status == 0);
     CHECK(contains(from_vars.out, "study command-line"));
     CHECK(contains(from_vars.out, "(as given)"));
@@ -1352,9 +1416,9 @@ TEST_CASE("groups: a study's groups, the --vars form, --study and JSON") {
     // A study that cannot be worked out is a finding: exit 1, the reason on stdout.
     const auto bad = run_plumb(
         {"groups", "--color", "never",
-         dir.write("bad.plumb", declarations +
-                                    "U : m/s\n"
-                                    "study drag: F_D depends on ρ, V, U, D, μ repeating ρ, V, U\n")});
+         dir.write("bad.plumb",
+                   declarations + "U : m/s\n"
+                                  "study drag: F_D depends on ρ, V, U, D, μ repeating ρ, V, U\n")});
     CHECK(bad.status == 1);
     CHECK(contains(bad.out, "[study-problem]"));
 }

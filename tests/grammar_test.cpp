@@ -336,6 +336,9 @@ TEST_CASE("operators bind as NOTATION.md says") {
     dimension_is("-x^2", file, typed(0, 2, 0));
 }
 
+constexpr const char* side_by_side =
+    "two terms stand side by side; a product needs '*' between its factors, as in a*b";
+
 TEST_CASE("typical mistakes: exact line, column and message") {
     const std::vector<expected_error> cases = {
         // Unbalanced '(': the ')' is missing at the end of the line.
@@ -360,10 +363,11 @@ TEST_CASE("typical mistakes: exact line, column and message") {
         {"x = a / ", 1, 9, after_times_divide},
         {"x = a ^", 1, 8, "expected an exponent after '^'"},
         {"x = -", 1, 6, "expected a term after '-'"},
-        // Two names side by side before the relation.
-        {"a b = c", 1, 3, no_relation},
-        // ... and after it.
-        {"x = a b", 1, 7, line_end},
+        // Two names side by side before the relation, and after it: a product without '*'.
+        {"a b = c", 1, 3, side_by_side},
+        {"x = a b", 1, 7, side_by_side},
+        // An operator missing elsewhere keeps the grammar's own words.
+        {"x = a 2", 1, 7, line_end},
         // A declaration without its dimension or unit.
         {"V : ", 1, 5, no_spec},
         // A unit exponent that is missing, in a unit and in brackets.
@@ -398,7 +402,7 @@ TEST_CASE("syntax messages name no C++ rule or type") {
         "x = (a + b",  "a = ",      "x = 2g",    "y = x**2",  "z : [M L/T]",  "p : m \"x",
         "@ x = y",     "x = a +",   "a b = c",   "V : ",      "w : m^",       "x = sqrt(a",
         "x = a)",      "x = ,",     "= x",       "x = 1.2.3", "x = 1e",       "x = [a]",
-        "x : [M^(1/]", "x = \"a\"", "x = a $ b", "x : m m",   "x : m = y",    "@",
+        "x : [M^(1/]", "x = \"a\"", "x = a $ b", "x : m m +", "x : m = y",    "@",
         "x",           "use x",     "x : ((((m", "\x01\x02",  "x = a\u00F7b", "x <",
         "x = a,b",     "x : [Q]",   "x : m^x",   "x = max(",  "\xFF\xFE = 1", ":",
     };

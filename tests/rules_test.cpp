@@ -410,12 +410,55 @@ TEST_CASE("conflicting-declaration names both places") {
              contains(n.message, "first declared here"));
     CHECK(names_dictionary);
 
-    // Near misses: the same dimension twice, by unit and by brackets, is allowed.
-    clean("v : m/s\nv : [L T^-1]\nv : km/h\nv = v");
+    // Near misses: the same dimension twice, by unit and by brackets, is allowed, as is the
+    // same scale spelled another way.
+    clean("v : m/s\nv : [L T^-1]\nv : m*s^-1\nv = v");
+    clean("ρ : kg/m^3\nρ : kg/m3\nρ : kg m\u207B\u00B3\nρ = ρ");
     const auto same = plumb::check_text((dir.path() / "same.plumb").string(),
                                         "use \"dict.plumb\"\nv : [L T^-1]\nv = v\n");
     INFO(listing(same));
     CHECK(same.diagnostics.empty());
+}
+
+TEST_CASE("conflicting-declaration: one dimension in units of different scales, both places") {
+    // A density declared in kg/m^3 and in lb/ft^3 (1 lb/ft^3 = 16.01846 kg/m^3, NIST SP 811
+    // (2008), B.8, from memory): the numbers put in for it mean different amounts.
+    const auto report = check("ρ : kg/m^3\n"
+                              "ρ : lb/ft^3\n"
+                              "ρ = ρ\n");
+    const diagnostic& d = finding_on(report, plumb::rules::conflicting_declaration, 2);
+    CHECK(d.level == severity::error);
+    at(d, 2, 1);
+    CHECK(contains(d.message, "lb/ft^3 here, kg/m^3 before"));
+    bool names_first = false;
+    for (const auto& n : d.notes)
+        names_first = names_first || (n.where.file != nullptr &&
+                                      n.where.file->position(n.where.range.begin).line == 1 &&
+                                      contains(n.message, "first declared here"));
+    CHECK(names_first);
+    bool states_factor = false;
+    for (const auto& n : d.notes)
+        states_factor = states_factor || contains(n.message, "16.01846");
+    CHECK(states_factor);
+
+    // An offset scale differs from the absolute one though the degree is the same size.
+    const auto celsius = check("T : K\nT : \u00B0C\nT = T\n");
+    finding_on(celsius, plumb::rules::conflicting_declaration, 2);
+
+    // Across two dictionaries that a file uses: the second names the first.
+    const temp_dir dir;
+    dir.write("si.plumb", "ρ : kg/m^3\n");
+    dir.write("us.plumb", "ρ : lb/ft^3\n");
+    const auto across = plumb::check_text((dir.path() / "main.plumb").string(),
+                                          "use \"si.plumb\"\nuse \"us.plumb\"\nx : 1\nx = ρ/ρ\n");
+    const auto conflicts = of_rule(across, plumb::rules::conflicting_declaration);
+    REQUIRE(conflicts.size() == 1);
+    CHECK(contains(conflicts[0]->where.file->path(), "us.plumb"));
+    bool names_si = false;
+    for (const auto& n : conflicts[0]->notes)
+        names_si =
+            names_si || (n.where.file != nullptr && contains(n.where.file->path(), "si.plumb"));
+    CHECK(names_si);
 }
 
 TEST_CASE("reserved-name") {

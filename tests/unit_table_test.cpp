@@ -173,7 +173,7 @@ TEST_CASE("pressure (NIST SP 811 (2008), Appendix B.8/B.9)") {
 }
 
 TEST_CASE("gauge pressures read from the standard atmosphere (common practice)") {
-    for (std::string_view symbol : {"psig", "barg"}) {
+    for (std::string_view symbol : {"psig", "barg", "kPag"}) {
         CAPTURE(std::string(symbol));
         const resolved_unit r = must_resolve(symbol);
         CHECK(r.dim() == pressure);
@@ -225,6 +225,50 @@ TEST_CASE("velocity, viscosity and flow (NIST SP 811 (2008), Appendix B.8/B.9)")
     check_exact("cSt", typed(0, 2, -1), 1e-6); // centistokes 1.0 E-06 m²/s
     check_printed("gpm", typed(0, 3, -1), 6.309020e-5, 1e-11);
     check_printed("cfm", typed(0, 3, -1), 4.719474e-4, 1e-10);
+}
+
+TEST_CASE("units the trades type (NIST SP 811 (2008), Appendix B.8, printed digits from memory; "
+          "the rest as named)") {
+    const dimension flow = typed(0, 3, -1);
+    const dimension volume = typed(0, 3, 0);
+    const dimension power = typed(1, 2, -3);
+    check_printed("cfs", flow, 2.831685e-2, 1e-8); // cubic foot per second
+    check_exact("fpm", typed(0, 1, -1), 5.08e-3);  // foot per minute, 5.08 E-03, exact
+    check_exact("gal_imp", volume, 4.54609e-3);    // gallon (Imperial) 4.54609 E-03, exact
+    check_exact("igpm", flow, 4.54609e-3 / 60.0);  // that gallon over the minute
+    check_exact("dyn", typed(1, 1, -2), 1e-5);     // dyne 1.0 E-05 N, exact
+    check_exact("erg", energy, 1e-7);              // erg 1.0 E-07 J, exact
+    check_printed("TR", power, 3.516853e3, 1e-3);  // ton of refrigeration (12 000 Btu_IT/h)
+    check_printed("tonR", power, 3.516853e3, 1e-3);
+    check_printed("ppg", typed(1, -3, 0), 1.198264e2, 1e-4); // pound per gallon (U.S.)
+    check_exact("cp", typed(1, -1, -1), 1e-3); // centipoise 1.0 E-03 Pa·s, lower case
+    // The day: 86 400 s (SI Brochure 9th ed., Table 8).
+    check_exact("day", typed(0, 0, 1), 86400.0);
+    // Million U.S. gallons a day (common practice): 1e6 × 3.785411784e-3 m³ / 86 400 s.
+    check_exact("mgd", flow, 1e6 * 3.785411784e-3 / 86400.0);
+    // Revolutions counted as cycles (common practice): 1 r/min = 1/60 s⁻¹, 1 rev = 1.
+    check_exact("rpm", typed(0, 0, -1), 1.0 / 60.0);
+    check_exact("r", typed(0, 0, 0), 1.0);
+    check_exact("rev", typed(0, 0, 0), 1.0);
+    // Apparent and reactive power are watts to the dimension (IEC 80000-6, from memory).
+    check_exact("VA", power, 1.0);
+    check_exact("kVA", power, 1e3);
+    check_exact("var", power, 1.0);
+    check_exact("Mvar", power, 1e6);
+    // Oilfield volumes (SPE convention, from memory: M = 10^3, MM = 10^6, not the SI mega).
+    check_printed("scf", volume, 2.831685e-2, 1e-8);
+    check_printed("Mscf", volume, 2.831685e1, 1e-5);
+    check_printed("MMscf", volume, 2.831685e4, 1e-2);
+    check_printed("STB", volume, 1.589873e-1, 1e-7); // stock-tank barrel = 42 U.S. gal
+    check_printed("stb", volume, 1.589873e-1, 1e-7);
+    // Percent: 0.01 (SI Brochure 9th ed., 5.4.7).
+    check_exact("%", typed(0, 0, 0), 0.01);
+    // Gauge kilopascal: zero at one standard atmosphere (common practice), 101 325 Pa.
+    const unit_definition& kpag = *must_resolve("kPag").unit;
+    CHECK(kpag.dim() == pressure);
+    CHECK(kpag.scale == unit_scale::gauge);
+    CHECK(kpag.factor == 1000.0);
+    CHECK(kpag.offset == 101325.0);
 }
 
 TEST_CASE("every exact_factor text agrees with its double") {
@@ -358,7 +402,10 @@ TEST_CASE("no prefixed spelling is ambiguous or silently shadowed") {
 
 TEST_CASE("prefixes never attach to units that refuse them") {
     for (std::string_view symbol : {"kpsi", "kft", "Mft", "kmin", "kh", "mpsi", "kkg", "kkm",
-                                    "m\u00B0C", "kdegC", "kbbl", "kcP", "mhp", "kcal_th", "MBtu"}) {
+                                    "m\u00B0C", "kdegC", "kbbl", "kcP", "mhp", "kcal_th", "MBtu",
+                                    // "M" on oilfield volumes is the trade's thousand, never
+                                    // the SI mega: only the rows Mscf and MMscf read it.
+                                    "Mbbl", "kscf", "MSTB", "krpm", "kmgd"}) {
         CAPTURE(std::string(symbol));
         CHECK_FALSE(table().resolve(symbol).has_value());
     }

@@ -159,9 +159,16 @@ struct dimension_brackets
     : if_must<one<'['>, star<space>, opt<sor<dimensionless_mark, dimension_factors>>, star<space>,
               dimension_close> {};
 
-// --- Units: kg/m^3, W/(m*K), m^3/s --------------------------------------------------------
+// --- Units: kg/m^3, W/(m*K), m^3/s, m³/h, kN m ----------------------------------------------
 struct unit_expression;
-struct unit_symbol : seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>> {};
+// "psi(g)", "kPa(a)": the trade's marks for a gauge or an absolute reading, kept with the symbol.
+struct gauge_mark : seq<one<'('>, one<'g', 'a'>, one<')'>> {};
+// "°" alone is the angle degree; "°C", "°F" are symbols that start with it. "° C" with a
+// space would read as degree times coulomb, so it is refused with a message.
+struct no_spaced_degree_scale : not_at<plus<space>, one<'C', 'F'>, not_at<name_char>> {};
+struct unit_symbol
+    : sor<seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>, opt<gauge_mark>>,
+          seq<utf8::one<0xB0>, must<no_spaced_degree_scale>>> {};
 struct unit_percent : one<'%'> {};
 struct unit_one : seq<one<'1'>, not_at<digit>> {};
 struct unit_group_close : one<')'> {};
@@ -171,12 +178,27 @@ struct unit_group : if_must<one<'('>, star<space>, unit_expression, star<space>,
 struct unit_difference : seq<utf8::one<0x394>, unit_symbol> {};
 struct unit_primary : sor<unit_group, unit_one, unit_percent, unit_difference, unit_symbol> {};
 struct unit_exponent : literal_exponent {};
+// Exponents as documents print them: m², s⁻¹, m³/h.
+struct superscript_sign : utf8::one<0x207B, 0x207A> {};
+struct superscript_digit
+    : utf8::one<0x2070, 0xB9, 0xB2, 0xB3, 0x2074, 0x2075, 0x2076, 0x2077, 0x2078, 0x2079> {};
+struct superscript_exponent : seq<opt<superscript_sign>, plus<superscript_digit>> {};
 struct unit_power
-    : seq<unit_primary, opt<star<space>, one<'^'>, star<space>, must<unit_exponent>>> {};
+    : seq<unit_primary, opt<sor<seq<star<space>, one<'^'>, star<space>, must<unit_exponent>>,
+                                superscript_exponent>>> {};
 struct unit_factor : unit_power {};
 struct unit_multiply : seq<star<space>, multiply_sign, star<space>, must<unit_factor>> {};
 struct unit_divide : seq<star<space>, one<'/'>, star<space>, must<unit_factor>> {};
-struct unit_expression : seq<unit_power, star<sor<unit_multiply, unit_divide>>> {};
+// A space multiplies too, as printed: "kN m", "W/(m^2 K)". It never takes the words that may
+// follow a unit: "zero at" in a measure line (a description or '=' cannot start a unit).
+struct origin_words
+    : seq<TAO_PEGTL_STRING("zero"), plus<space>, TAO_PEGTL_STRING("at"), not_at<name_char>> {};
+struct unit_after_space : sor<letter, utf8::one<0xB0, 0x394>, one<'('>> {};
+struct spaced_unit_factor : unit_power {};
+struct unit_spaced_multiply
+    : seq<plus<space>, at<unit_after_space>, not_at<origin_words>, must<spaced_unit_factor>> {};
+struct unit_expression
+    : seq<unit_power, star<sor<unit_multiply, unit_divide, unit_spaced_multiply>>> {};
 struct braced_unit : if_must<brace_open, star<space>, unit_expression, star<space>, brace_close> {};
 
 // --- Declarations -------------------------------------------------------------------------

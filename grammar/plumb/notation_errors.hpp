@@ -34,6 +34,8 @@ template <> inline constexpr const char* error_message<dimension_close> = "expec
 template <> inline constexpr const char* error_message<unit_expression> = "expected a unit here, such as m/s";
 template <> inline constexpr const char* error_message<unit_group_close> = "expected ')' to close the unit's parenthesis";
 template <> inline constexpr const char* error_message<unit_factor> = "expected a unit after '*' or '/'";
+template <> inline constexpr const char* error_message<no_spaced_degree_scale> = "write \u00B0C or \u00B0F without a space; \u00B0 alone is the angle degree";
+template <> inline constexpr const char* error_message<spaced_unit_factor> = "expected a unit here: a space between units multiplies them, as in kN m";
 template <> inline constexpr const char* error_message<declaration_spec> = "expected a dimension such as [M L^-3], a unit such as kg/m^3, 1 for a dimensionless symbol, or ? for one to infer";
 template <> inline constexpr const char* error_message<constant_value> = "expected a number after '=' (the constant's value in the stated unit)";
 template <> inline constexpr const char* error_message<description_close> = "the description has no closing '\"'";

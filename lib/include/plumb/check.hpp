@@ -31,7 +31,8 @@ struct check_options {
     std::vector<std::string> exclude;        // glob patterns of files never checked
     std::vector<rule_level> rule_levels;     // severities changed or rules turned off
     std::filesystem::path accepted_findings; // the file of accepted findings; none when empty
-    // Keep every formula's label and side dimensions for the sign-off report.
+    // Keep every formula's label, side dimensions and result, for the sign-off report and
+    // the JSON list of formulas; off by default so that memory stays flat on large checks.
     bool record_formulas = false;
 };
 
@@ -41,6 +42,7 @@ struct formula_record {
     std::string label;                           // without '@'; empty when none
     std::vector<std::optional<dimension>> sides; // empty optional where a side has an error
     std::vector<std::string> relations;          // "=", "<=", ... between the sides
+    std::optional<severity> worst; // the most severe finding starting inside it; empty: passed
 };
 
 // Why `restate_in` does not name a consistent set of units, or nothing when it does: each

@@ -216,6 +216,30 @@ class checker {
                                {},
                                true});
         }
+        note_bare_number_side(d, sides);
+    }
+
+    // "V <= 7.5": a limit typed as a bare number has no unit; say how to give it one, in the
+    // unit of the other side when that side is one symbol declared by unit.
+    void note_bare_number_side(diagnostic& d, std::span<const operand> sides) const {
+        if (sides.size() != 2)
+            return;
+        for (std::size_t i = 0; i < 2; ++i) {
+            const syntax::expr_node& bare = file_.nodes[sides[i].node];
+            const syntax::expr_node& other = file_.nodes[sides[1 - i].node];
+            if (bare.kind != syntax::expr_kind::number || !sides[1 - i].type.known)
+                continue;
+            std::string unit = "<unit>";
+            if (other.kind == syntax::expr_kind::symbol)
+                if (const symbol_entry* e = symbols_.find(text(other.range));
+                    e != nullptr && !e->unit_text.empty())
+                    unit = std::string(e->unit_text);
+            d.notes.push_back({fmt::format("a bare number has no unit; give it the other side's, "
+                                           "as in {} {{{}}}",
+                                           display_text(bare.range), unit),
+                               {}});
+            return;
+        }
     }
 
     std::string display_text(span s) const { return single_line(file_.source->text(s)); }
@@ -361,6 +385,8 @@ class checker {
             if (find_function(name) != nullptr)
                 d.notes.push_back(
                     {fmt::format("'{}' is a function; call it as {}(x)", name, name), {}});
+            else if (name == "e")
+                d.notes.push_back({"for Euler's number raised to a power, e^x, write exp(x)", {}});
             else
                 d.notes.push_back({fmt::format("declare it with its unit or its dimension, as in "
                                                "'{} : <unit>' or '{} : [<dimension>]'",
@@ -841,6 +867,11 @@ class checker {
                    fmt::format("{} takes {}, but {} {} given", f->name, expected, count,
                                count == 1 ? "is" : "are"),
                    n.range);
+            if (f->rule == function_rule::log_base && count == 1)
+                out_.back().notes.push_back(
+                    {"log needs its base as the second argument, as in log(x, 2); write ln(x) "
+                     "for the natural logarithm and log10(x) for the common one",
+                     {}});
             return unknown_type();
         }
         typed result;

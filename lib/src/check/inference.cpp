@@ -1234,6 +1234,12 @@ std::optional<coherent_units> coherent_units_from(const std::vector<std::string>
             why = fmt::format("'{}' is a gauge pressure, not a unit of a consistent set", symbol);
             return std::nullopt;
         }
+        if (unit->unit->scale == unit_scale::offset) {
+            why = fmt::format("'{}' reads from an arbitrary zero, so it is no unit of a consistent "
+                              "set; name K or °R",
+                              symbol);
+            return std::nullopt;
+        }
         exponents.push_back(unit->dim().exponents());
         logs.push_back(std::log(unit->factor()));
         for (std::size_t b = 0; b < base_dimension_count; ++b)

@@ -14,6 +14,7 @@
 
 #include <algorithm>
 #include <array>
+#include <cmath>
 #include <fmt/format.h>
 #include <fstream>
 #include <limits>
@@ -24,6 +25,8 @@
 namespace plumb {
 
 namespace fs = std::filesystem;
+
+namespace {} // namespace
 
 std::size_t check_report::count(severity level) const {
     return static_cast<std::size_t>(
@@ -104,6 +107,20 @@ std::vector<std::string_view> symbol_table::nearest(std::string_view name,
 
 namespace {
 
+// Two declarations by unit of one dimension whose numbers mean different amounts: kg/m^3 and
+// lb/ft^3, or °C and K. A bracket dimension says nothing about scale, so it never differs.
+bool differ_in_scale(const symbol_entry& a, const symbol_entry& b) {
+    if (a.unit_text.empty() || b.unit_text.empty())
+        return false;
+    const double relative = std::abs(a.si_factor - b.si_factor) /
+                            std::max(std::abs(a.si_factor), std::abs(b.si_factor));
+    if (relative > 1e-12)
+        return true;
+    const double a_zero = a.offset_unit != nullptr ? a.offset_unit->offset : 0.0;
+    const double b_zero = b.offset_unit != nullptr ? b.offset_unit->offset : 0.0;
+    return a_zero != b_zero;
+}
+
 struct loaded_file {
     source_file* source = nullptr;
     syntax::parsed_file tree; // declarations and uses; formulas only while deferred
@@ -135,6 +152,8 @@ class dictionary_reader : public statement_sink {
     bool on_formula(const syntax::parsed_file& /*tree*/, const syntax::formula& /*f*/) override {
         return true;
     }
+    // Units that a --dict dictionary (or the files it uses) defines, as a `use` line would.
+    void import_dictionary_units(const loaded_file* dictionary) { import_units(dictionary); }
     [[nodiscard]] const syntax::defined_unit* imported_unit(std::string_view name) const override {
         for (const auto* u : imported_)
             if (u->name == name)
@@ -245,6 +264,9 @@ class session {
 
         f->loading = true;
         checking_reader reader(*this, f, table, visited);
+        const std::size_t first_result = report_.formulas.size();
+        for (const loaded_file* d : dictionaries_)
+            reader.import_dictionary_units(d);
         // A "X : ?" may come after the formulas that fix it; a file with any '?' keeps its
         // formulas for inference (a cheap scan, and rare outside such files).
         reader.infers_symbols = f->source->text().find('?') != std::string_view::npos;
@@ -267,6 +289,8 @@ class session {
             take_parse(f, std::move(tree));
         if (formulas > 0)
             report_unused(f, table);
+        if (record_formulas_)
+            grade_formulas(f, first_result);
         ++report_.files_checked;
         report_.checked_files.push_back(f->source);
         report_.formulas_checked += formulas;
@@ -376,6 +400,23 @@ class session {
             return;
         std::string why; // the command line reports it (restate_units_problem)
         restate_in_ = coherent_units_from(symbols, why);
+    }
+
+    // Each recorded formula of `f` takes the most severe finding that starts inside it.
+    void grade_formulas(const loaded_file* f, std::size_t first) {
+        std::vector<std::pair<std::uint32_t, severity>> starts;
+        for (const diagnostic& d : f->diagnostics)
+            if (d.where.file == f->source)
+                starts.emplace_back(d.where.range.begin, d.level);
+        std::sort(starts.begin(), starts.end());
+        for (std::size_t i = first; i < report_.formulas.size(); ++i) {
+            formula_record& r = report_.formulas[i];
+            auto it = std::lower_bound(starts.begin(), starts.end(),
+                                       std::pair{r.where.range.begin, severity::note});
+            for (; it != starts.end() && it->first < r.where.range.end; ++it)
+                if (!r.worst || *r.worst < it->second)
+                    r.worst = it->second;
+        }
     }
 
     std::vector<loaded_file*> dictionaries_;
@@ -530,6 +571,30 @@ class session {
                 f->diagnostics.push_back(std::move(d));
                 continue;
             }
+            if (existing->dim && entry.dim && differ_in_scale(*existing, entry)) {
+                const auto unit_of = [](const symbol_entry& e) {
+                    return fmt::format("{} (1 {} = {:.7g} in SI units{})", e.unit_text, e.unit_text,
+                                       e.si_factor,
+                                       e.offset_unit != nullptr ? ", with a zero of its own" : "");
+                };
+                diagnostic d = make_diagnostic(
+                    severity::error, rules::conflicting_declaration,
+                    fmt::format("'{}' is declared again in a unit of another scale: {} here, {} "
+                                "before; the numbers put in for it would be read two ways",
+                                name, entry.unit_text, existing->unit_text),
+                    at);
+                d.terms.push_back({at, std::string(name), *entry.dim});
+                d.terms.push_back({existing->declared_at, std::string(name), *existing->dim});
+                d.notes.push_back(
+                    {fmt::format("'{}' is first declared here, in {}", name, unit_of(*existing)),
+                     existing->declared_at});
+                d.notes.push_back({fmt::format("here it is in {}; declare it once, or give the "
+                                               "two quantities different names",
+                                               unit_of(entry)),
+                                   {}});
+                f->diagnostics.push_back(std::move(d));
+                continue;
+            }
             if (local && !existing->local) {
                 // The file declares it itself; it answers for it being used.
                 existing->local = true;
@@ -631,10 +696,16 @@ check_report check_paths(const std::vector<fs::path>& paths, const check_options
     std::vector<fs::path> files;
     for (const auto& p : paths) {
         std::error_code ec;
-        if (fs::is_directory(p, ec))
-            collect_plumb_files(p, files, s);
-        else
+        if (!fs::is_directory(p, ec)) {
             files.push_back(p);
+            continue;
+        }
+        const std::size_t before = files.size();
+        collect_plumb_files(p, files, s);
+        // A hook run on an empty or mistyped folder must not pass for a clean check.
+        if (files.size() == before)
+            s.fail(fmt::format("nothing to check in '{}': no .plumb files in it or below",
+                               p.string()));
     }
     if (!options.exclude.empty())
         std::erase_if(files, [&](const fs::path& p) {
@@ -643,8 +714,10 @@ check_report check_paths(const std::vector<fs::path>& paths, const check_options
                 options.exclude.begin(), options.exclude.end(),
                 [&](const std::string& pattern) { return path_matches(pattern, relative); });
         });
+    // A file named twice (or inside two folders given) is checked once.
+    std::unordered_set<const loaded_file*> checked;
     for (const auto& p : files)
-        if (loaded_file* f = s.load(p, {}))
+        if (loaded_file* f = s.load(p, {}); f != nullptr && checked.insert(f).second)
             s.check(f);
     s.finish();
     review_findings(report, options);

@@ -9,6 +9,7 @@
 #include "plumb/rules.hpp"
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 #include <cstdlib>
 #include <cstring>
@@ -491,45 +492,148 @@ template <> struct action<nt::dimension_brackets> {
 };
 
 // --- Units ---
+// A unit symbol as written, from the file's own units, the constants (in braces) or the table.
+std::optional<unit_value> lookup_unit(std::string_view text, const parse_state& s) {
+    if (s.in_braces) {
+        if (const physical_constant* c = find_constant(text))
+            return unit_value{c->dim(), c->value, nullptr, true, true};
+    }
+    if (const syntax::defined_unit* own = s.find_defined_unit(text))
+        return unit_value{own->dim, own->si_factor, own->origin ? &own->origin->row : nullptr, true,
+                          false};
+    if (const auto unit = unit_table::standard().resolve(text))
+        return unit_value{unit->dim(), unit->factor(), unit->prefix ? nullptr : unit->unit, true,
+                          false};
+    return std::nullopt;
+}
+
+bool is_pressure(const dimension& d) {
+    static const dimension pascal = unit_table::standard().resolve("Pa")->dim();
+    return d == pascal;
+}
+
+// "psi(g)", "kPa(g)": the gauge row of that unit (psig, kPag); "kPa(a)": the absolute unit.
+// An empty result with a message when the mark does not fit the unit.
+std::optional<unit_value> lookup_marked_unit(std::string_view text, const parse_state& s,
+                                             std::string& why) {
+    const std::string_view base = text.substr(0, text.size() - 3);
+    const bool gauge = text[text.size() - 2] == 'g';
+    const auto absolute = lookup_unit(base, s);
+    if (!absolute || !is_pressure(absolute->dim) ||
+        (absolute->single != nullptr && absolute->single->scale != unit_scale::absolute)) {
+        why = fmt::format("'{}' marks a gauge or absolute pressure, but '{}' is not an absolute "
+                          "pressure unit",
+                          text, base);
+        return std::nullopt;
+    }
+    if (!gauge)
+        return absolute;
+    const std::string gauge_symbol = std::string(base) + "g";
+    const auto marked = lookup_unit(gauge_symbol, s);
+    if (marked && marked->single != nullptr && marked->single->scale == unit_scale::gauge &&
+        marked->factor == absolute->factor)
+        return marked;
+    why = fmt::format("no gauge form of '{}' is known; define one on a line of its own: measure "
+                      "{} = {} zero at 101.325 kPa",
+                      base, gauge_symbol, base);
+    return std::nullopt;
+}
+
+// "m3", "mm4", "ft3": a digit after a symbol is its power, as in "m3/h" and "kg/m3". A row that
+// ends in a digit ("ft3", "inH2O") is found as written before this is tried.
+std::optional<unit_value> lookup_digit_power(std::string_view text, const parse_state& s) {
+    if (text.size() < 2 || text.back() < '2' || text.back() > '9' ||
+        (text[text.size() - 2] >= '0' && text[text.size() - 2] <= '9'))
+        return std::nullopt;
+    auto base = lookup_unit(text.substr(0, text.size() - 1), s);
+    if (!base || base->constant)
+        return std::nullopt;
+    const int power = text.back() - '0';
+    base->dim = base->dim.pow(rational(power));
+    base->factor = std::pow(base->factor, power);
+    base->single = nullptr;
+    return base;
+}
+
+std::string unknown_unit_message(std::string_view text) {
+    std::string message = fmt::format("unknown unit '{}'", text);
+    const auto near = unit_table::standard().nearest(text);
+    if (!near.empty()) {
+        message += "; did you mean ";
+        for (std::size_t i = 0; i < near.size(); ++i)
+            message += fmt::format("{}'{}'", i == 0 ? "" : (i + 1 == near.size() ? " or " : ", "),
+                                   near[i]);
+        message += "?";
+    }
+    return message;
+}
+
+// How to define the very unit that was not found. A name that reads as a pressure with a
+// trailing "g" ("MPag") gets the gauge form.
+std::string definition_template(std::string_view text, const parse_state& s) {
+    if (text.size() > 1 && text.back() == 'g') {
+        const std::string_view base = text.substr(0, text.size() - 1);
+        if (const auto absolute = lookup_unit(base, s); absolute && is_pressure(absolute->dim))
+            return fmt::format("measure {} = {} zero at 101.325 kPa", text, base);
+    }
+    return fmt::format("measure {} = <size> <known unit>", text);
+}
+
 template <> struct action<nt::unit_symbol> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const std::string_view text = in.string_view();
-        if (s.in_braces) {
-            if (const physical_constant* c = find_constant(text)) {
-                s.units.push_back({c->dim(), c->value, nullptr, true, true});
-                return;
-            }
-        }
-        if (const syntax::defined_unit* own = s.find_defined_unit(text)) {
-            s.units.push_back(
-                {own->dim, own->si_factor, own->origin ? &own->origin->row : nullptr, true, false});
+        std::string why;
+        std::optional<unit_value> found;
+        if (text.ends_with("(g)") || text.ends_with("(a)"))
+            found = lookup_marked_unit(text, s, why);
+        else if (!(found = lookup_unit(text, s)))
+            found = lookup_digit_power(text, s);
+        if (found) {
+            s.units.push_back(*found);
             return;
         }
-        const auto unit = unit_table::standard().resolve(text);
-        if (!unit) {
-            std::string message = fmt::format("unknown unit '{}'", text);
-            const auto near = unit_table::standard().nearest(text);
-            if (!near.empty()) {
-                message += "; did you mean ";
-                for (std::size_t i = 0; i < near.size(); ++i)
-                    message += fmt::format(
-                        "{}'{}'", i == 0 ? "" : (i + 1 == near.size() ? " or " : ", "), near[i]);
-                message += "?";
-            }
-            s.report(rules::unknown_unit, message, s.range(in));
-            diagnostic& d = s.out.diagnostics.back();
-            d.notes.push_back(
-                {fmt::format(
-                     "define it on a line of its own, as in: measure {} = 0.3048 m (its size "
-                     "in a known unit), or declare the symbol by its dimension, as in "
-                     "[L T^-1]; `plumb catalogue` lists the built-in units",
-                     text),
+        if (!why.empty()) {
+            s.report(rules::unknown_unit, why, s.range(in));
+        } else {
+            s.report(rules::unknown_unit, unknown_unit_message(text), s.range(in));
+            s.out.diagnostics.back().notes.push_back(
+                {fmt::format("define it on a line of its own: {}; or declare the symbol by "
+                             "its dimension, as in [L T^-1]; `plumb catalogue` lists the "
+                             "built-in units",
+                             definition_template(text, s)),
                  {}});
-            s.units.push_back({{}, 1.0, nullptr, false});
-            return;
         }
-        s.units.push_back(
-            {unit->dim(), unit->factor(), unit->prefix ? nullptr : unit->unit, true, false});
+        s.units.push_back({{}, 1.0, nullptr, false});
+    }
+};
+// m², s⁻¹: the exponent in superscript digits.
+template <> struct action<nt::superscript_exponent> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        std::string plain;
+        const std::string_view text = in.string_view();
+        for (std::size_t i = 0; i < text.size();) {
+            const auto lead = static_cast<unsigned char>(text[i]);
+            const std::size_t length = lead >= 0xE0 ? 3 : 2;
+            const std::string_view glyph = text.substr(i, length);
+            i += length;
+            if (glyph == "\u207B")
+                plain += '-';
+            else if (glyph == "\u00B9")
+                plain += '1';
+            else if (glyph == "\u00B2")
+                plain += '2';
+            else if (glyph == "\u00B3")
+                plain += '3';
+            else if (glyph == "\u2070")
+                plain += '0';
+            else if (glyph != "\u207A")
+                plain += static_cast<char>('0' + (static_cast<unsigned char>(glyph[2]) - 0xB0));
+        }
+        s.pending_exponent = exponent_value(plain);
+        if (!s.pending_exponent) {
+            s.report(rules::overflow, "this exponent is too large to hold exactly", s.range(in));
+            s.pending_exponent = rational(0);
+        }
     }
 };
 // Δ°C, Δbarg: a difference on that scale is an ordinary quantity, with no zero to mind.
@@ -564,6 +668,7 @@ template <> struct action<nt::unit_power> {
     }
 };
 template <> struct action<nt::unit_factor> : action<nt::unit_power> {};
+template <> struct action<nt::spaced_unit_factor> : action<nt::unit_power> {};
 template <> struct action<nt::unit_group> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.units.back().single = nullptr;
@@ -582,6 +687,7 @@ template <bool Divide> struct unit_combine {
 };
 template <> struct action<nt::unit_multiply> : unit_combine<false> {};
 template <> struct action<nt::unit_divide> : unit_combine<true> {};
+template <> struct action<nt::unit_spaced_multiply> : unit_combine<false> {};
 
 // --- Declarations ---
 template <> struct action<nt::declared_name> {
@@ -628,10 +734,6 @@ template <> struct action<nt::declaration> {
 };
 
 // --- measure NAME = [number] unit [zero at number unit] ---
-bool is_pressure(const dimension& d) {
-    static const dimension pascal = unit_table::standard().resolve("Pa")->dim();
-    return d == pascal;
-}
 template <> struct action<nt::new_unit_size> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const std::string text(in.string_view());
@@ -941,6 +1043,59 @@ void tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark)
     }
 }
 
+bool is_word_byte(char c) {
+    const auto u = static_cast<unsigned char>(c);
+    return std::isalnum(u) != 0 || c == '_' || c == '\'' || u >= 0x80;
+}
+
+// First attempts that stop the grammar where two terms stand side by side: "ρ g h" (a product
+// without '*') and "101.325 kPa" (a quantity without braces). The grammar only knows that it
+// wanted an operator; the words around the place say which of the two was meant.
+std::string side_by_side_hint(std::string_view line, std::size_t at, const parse_state& s) {
+    std::size_t before = at;
+    while (before > 0 && (line[before - 1] == ' ' || line[before - 1] == '\t'))
+        --before;
+    std::size_t next = at;
+    while (next < line.size() && (line[next] == ' ' || line[next] == '\t'))
+        ++next;
+    if (before == at || before == 0 || next >= line.size() || !is_word_byte(line[next]) ||
+        std::isdigit(static_cast<unsigned char>(line[next])) != 0)
+        return {};
+    std::size_t word_end = next;
+    while (word_end < line.size() && is_word_byte(line[word_end]))
+        ++word_end;
+    const std::string_view word = line.substr(next, word_end - next);
+    std::size_t token = before;
+    while (token > 0 && is_word_byte(line[token - 1]))
+        --token;
+    const std::string_view previous = line.substr(token, before - token);
+    const bool number_before =
+        !previous.empty() && std::isdigit(static_cast<unsigned char>(previous.front())) != 0;
+    if (number_before || (token > 0 && line[token - 1] == '.')) {
+        // Take the whole number (digits, '.', an exponent) and the unit as far as it runs.
+        std::size_t number_begin = token;
+        while (number_begin > 0 &&
+               (std::isdigit(static_cast<unsigned char>(line[number_begin - 1])) != 0 ||
+                line[number_begin - 1] == '.'))
+            --number_begin;
+        std::size_t unit_end = next;
+        while (unit_end < line.size() &&
+               (is_word_byte(line[unit_end]) || line[unit_end] == '/' || line[unit_end] == '^' ||
+                line[unit_end] == '(' || line[unit_end] == ')'))
+            ++unit_end;
+        if (!lookup_unit(word, s))
+            return {};
+        return fmt::format("a number and its unit in a formula go in braces: write {} {{{}}}",
+                           line.substr(number_begin, before - number_begin),
+                           line.substr(next, unit_end - next));
+    }
+    if (previous.empty() && line[before - 1] != ')')
+        return {};
+    return fmt::format("two terms stand side by side; a product needs '*' between its factors, "
+                       "as in {}*{}",
+                       previous.empty() ? std::string_view("(...)") : previous, word);
+}
+
 // Past this many, a file is more likely not ours at all than a calc with typos.
 constexpr std::size_t max_syntax_errors = 50;
 
@@ -1005,7 +1160,15 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
                 while (stop < end && (static_cast<unsigned char>(text[stop]) & 0xC0) == 0x80)
                     ++stop;
             }
-            state.report(rules::syntax, failure.message, {at, stop});
+            std::string message = failure.message;
+            if (failure.message == nt::error_message<nt::line_end> ||
+                failure.message == nt::error_message<nt::relation>) {
+                const std::string hint =
+                    side_by_side_hint(text.substr(begin, end - begin), at - begin, state);
+                if (!hint.empty())
+                    message = hint;
+            }
+            state.report(rules::syntax, std::move(message), {at, stop});
             out.has_syntax_error = true;
             ++syntax_errors;
         } catch (const arithmetic_overflow&) {

@@ -190,8 +190,14 @@ std::string render_catalogue(std::string_view filter, const text_style& style) {
             });
         }
         std::erase_if(groups, [](const group& g) { return g.entries.empty(); });
-        // A prefixed unit is no row of its own: show what it resolves to.
-        if (groups.empty())
+        // A prefixed unit is no row of its own: show what it resolves to, also when other
+        // rows merely contain its text ("kPa" in "kPag").
+        const bool exact_row = std::any_of(groups.begin(), groups.end(), [&](const group& g) {
+            return std::any_of(g.entries.begin(), g.entries.end(), [&](const entry& e) {
+                return std::find(e.symbols.begin(), e.symbols.end(), filter) != e.symbols.end();
+            });
+        });
+        if (!exact_row)
             if (const auto r = table.resolve(filter); r && r->prefix != nullptr) {
                 const auto unit = read_exact(r->unit->exact_factor);
                 entry e{{std::string(filter)},
@@ -202,7 +208,12 @@ std::string render_catalogue(std::string_view filter, const text_style& style) {
                              : fmt::format("10^{} \u00D7 {}", r->prefix->power_of_ten,
                                            factor_of(*r->unit)),
                         fmt::format("{}; prefix: {}", r->unit->source, prefix_source)};
-                groups.push_back({r->dim(), {std::move(e)}});
+                const auto same = std::find_if(groups.begin(), groups.end(),
+                                               [&](const group& g) { return g.dim == r->dim(); });
+                if (same != groups.end())
+                    same->entries.insert(same->entries.begin(), std::move(e));
+                else
+                    groups.push_back({r->dim(), {std::move(e)}});
             }
     }
     const bool prefixes_too =

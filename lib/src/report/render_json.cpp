@@ -123,6 +123,18 @@ std::string render_json(const check_report& report) {
         out += "}";
     }
     out += first ? "],\n" : "\n  ],\n";
+    // Every formula checked, those that passed too, when the check recorded them.
+    out += "  \"formulas\": [";
+    for (std::size_t i = 0; i < report.formulas.size(); ++i) {
+        const formula_record& f = report.formulas[i];
+        out += i == 0 ? "\n    {" : ",\n    {";
+        append_location(out, f.where);
+        out += "\"label\": ";
+        append_string(out, valid_utf8(f.label));
+        out += fmt::format(", \"result\": \"{}\"}}",
+                           f.worst ? severity_name(*f.worst) : std::string_view("passed"));
+    }
+    out += report.formulas.empty() ? "],\n" : "\n  ],\n";
     out += fmt::format(
         "  \"summary\": {{\"files_checked\": {}, \"formulas_checked\": {}, \"errors\": {}, "
         "\"warnings\": {}, \"accepted\": {}, \"input_failed\": {}}},\n",

@@ -135,6 +135,33 @@ constexpr unit_definition darcy = absolute("D", "darcy", area, 1e-7 / 101325.0, 
 constexpr unit_definition millidarcy =
     absolute("mD", "millidarcy", area, 1e-10 / 101325.0, "1/1013250000000000", prefixes::refused,
              darcy_source);
+// A revolution counted as one cycle, as engineers use the speed n in the affinity laws,
+// synchronous speed (n = 120 f/p) and shaft power P = 2π n T: 1 r/min = 1/60 s⁻¹ (common
+// practice). Counted as 2π rad it would be 0.1047198 rad/s; the 2π then belongs in the formula.
+constexpr unit_definition revolution =
+    absolute("r", "revolution (one cycle)", none, 1.0, "1", prefixes::refused,
+             "common practice: one revolution counted as one cycle, as in n = 120 f/p");
+constexpr unit_definition revolution_per_minute =
+    absolute("rpm", "revolution per minute", per_time, 1.0 / 60.0, "1/60", prefixes::refused,
+             "common practice: one revolution counted as one cycle (1/60 Hz)");
+constexpr unit_definition centipoise =
+    absolute("cP", "centipoise", dynamic_viscosity, 1e-3, "0.001", prefixes::refused, nist);
+constexpr unit_definition day =
+    absolute("d", "day", time, 86400.0, "86400", prefixes::refused, si_accepted);
+// A standard cubic foot is a cubic foot of gas at the reference conditions; as a volume it is
+// the cubic foot. Which reference conditions apply is for the calc to say (common practice).
+constexpr std::string_view standard_volume_source =
+    "NIST SP 811 (2008), B.8 (ft^3); oilfield convention (SPE): a cubic foot at standard "
+    "conditions";
+constexpr unit_definition stock_tank_barrel = absolute(
+    "STB", "stock-tank barrel (42 U.S. gal)", volume, 0.158987294928, "0.158987294928",
+    prefixes::refused,
+    "NIST SP 811 (2008), B.8 (bbl); oilfield convention (SPE): a barrel at stock-tank conditions");
+constexpr unit_definition ton_of_refrigeration =
+    absolute("TR", "ton of refrigeration (12 000 Btu/h)", power, 52752792631.0 / 15000000.0,
+             "52752792631/15000000", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 3.516853E+03; exact as 12 000 Btu_IT/h");
+
 constexpr unit_definition pound_per_square_inch =
     absolute("psi", "pound-force per square inch", pressure, 8896443230521.0 / 1290320000.0,
              "8896443230521/1290320000", prefixes::refused,
@@ -189,7 +216,8 @@ constexpr unit_definition rows[] = {
     // The unified atomic mass unit "u" is left out too: "u" is the ASCII micro prefix here.
     absolute("min", "minute", time, 60.0, "60", prefixes::refused, si_accepted),
     absolute("h", "hour", time, 3600.0, "3600", prefixes::refused, si_accepted),
-    absolute("d", "day", time, 86400.0, "86400", prefixes::refused, si_accepted),
+    day,
+    spelled("day", day),
     absolute("au", "astronomical unit", length, 149597870700.0, "149597870700", prefixes::refused,
              si_accepted),
     angle_degree,
@@ -248,7 +276,7 @@ constexpr unit_definition rows[] = {
     spelled("lbm", pound_mass),
     absolute("slug", "slug", mass, 8896443230521.0 / 609600000000.0, "8896443230521/609600000000",
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 1.459390E+01; exact as lbf·s²/ft"),
-    // "ton" alone is the U.S. short ton; the refrigeration ton is a power and is not a row.
+    // "ton" alone is the U.S. short ton; the refrigeration ton is a power, "TR" below.
     absolute("ton", "ton (short, 2000 lb)", mass, 907.18474, "907.18474", prefixes::refused,
              "NIST SP 811 (2008), B.8 prints 9.071847E+02; exact as 2000 lb"),
 
@@ -278,6 +306,10 @@ constexpr unit_definition rows[] = {
     absolute("bar", "bar", pressure, 1e5, "100000", prefixes::accepted, nist),
     gauge("barg", "bar, gauge", 1e5, "100000",
           "NIST SP 811 (2008), B.8 (bar)"
+          "; common practice: standard atmosphere as the reference; local atmospheric "
+          "pressure differs"),
+    gauge("kPag", "kilopascal, gauge", 1e3, "1000",
+          "SI Brochure 9th ed., Table 4 (Pa) and Table 7 (k)"
           "; common practice: standard atmosphere as the reference; local atmospheric "
           "pressure differs"),
     torr,
@@ -328,16 +360,68 @@ constexpr unit_definition rows[] = {
     // Viscosity. "P" alone is the poise; it never reads as the peta prefix because a prefix
     // needs a unit after it.
     absolute("P", "poise", dynamic_viscosity, 0.1, "0.1", prefixes::refused, nist),
-    absolute("cP", "centipoise", dynamic_viscosity, 1e-3, "0.001", prefixes::refused, nist),
+    centipoise,
+    // Drilling and reservoir reports write the centipoise in lower case; "cp" has no other
+    // reading (the poise refuses prefixes).
+    spelled("cp", centipoise),
     absolute("St", "stokes", kinematic_viscosity, 1e-4, "0.0001", prefixes::refused, nist),
     absolute("cSt", "centistokes", kinematic_viscosity, 1e-6, "0.000001", prefixes::refused, nist),
 
-    // Flow rates. Standard-volume units (scf, Mscf) are left out: the reference conditions
-    // differ between conventions, and a row would silently pick one.
+    // Flow rates.
     absolute("gpm", "gallon (U.S.) per minute", volumetric_flow, 0.0000630901964, "0.0000630901964",
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 6.309020E-05; exact as gal/min"),
     absolute("cfm", "cubic foot per minute", volumetric_flow, 0.0004719474432, "0.0004719474432",
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 4.719474E-04; exact as ft^3/min"),
+    absolute("cfs", "cubic foot per second", volumetric_flow, 0.028316846592, "0.028316846592",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 2.831685E-02; exact as ft^3/s"),
+    // Water and wastewater plants rate flow in million U.S. gallons a day (common practice).
+    absolute("mgd", "million gallons (U.S.) per day", volumetric_flow, 157725491.0 / 3600000000.0,
+             "157725491/3600000000", prefixes::refused,
+             "common practice (1e6 gal/d); NIST SP 811 (2008), B.8 gallon (U.S.) and day, exact"),
+    absolute("gal_imp", "gallon (Imperial)", volume, 0.00454609, "0.00454609", prefixes::refused,
+             "NIST SP 811 (2008), B.8 gallon [Canadian and U.K. (Imperial)] 4.54609E-03, exact"),
+    absolute("igpm", "gallon (Imperial) per minute", volumetric_flow, 454609.0 / 6000000000.0,
+             "454609/6000000000", prefixes::refused,
+             "NIST SP 811 (2008), B.8 gallon (Imperial) 4.54609E-03 per minute, exact"),
+
+    // Rotational speed: "rpm", or the revolution over a time, "r/min", "rev/s" (common practice).
+    revolution,
+    spelled("rev", revolution),
+    revolution_per_minute,
+
+    // Electrical power: apparent (volt ampere) and reactive (var) power are watts to the
+    // dimension; IEC 80000-6 names them (from memory).
+    absolute("VA", "volt ampere (apparent power)", power, 1.0, "1", prefixes::accepted,
+             "IEC 80000-6 (from memory): 1 V·A"),
+    absolute("var", "var (reactive power)", power, 1.0, "1", prefixes::accepted,
+             "IEC 80000-6 (from memory): 1 V·A"),
+    ton_of_refrigeration,
+    spelled("tonR", ton_of_refrigeration),
+
+    // CGS mechanical units.
+    absolute("dyn", "dyne", force, 1e-5, "0.00001", prefixes::refused, nist),
+    absolute("erg", "erg", energy, 1e-7, "0.0000001", prefixes::refused, nist),
+
+    // Oilfield units. "M" and "MM" are the trade's thousand and million (SPE convention), not
+    // the SI mega: "Mscf" is 1000 scf. The rows spell them out so that no SI prefix reads them.
+    absolute("scf", "standard cubic foot", volume, 0.028316846592, "0.028316846592",
+             prefixes::refused, standard_volume_source),
+    absolute("Mscf", "thousand standard cubic feet", volume, 28.316846592, "28.316846592",
+             prefixes::refused, standard_volume_source),
+    absolute("MMscf", "million standard cubic feet", volume, 28316.846592, "28316.846592",
+             prefixes::refused, standard_volume_source),
+    stock_tank_barrel,
+    spelled("stb", stock_tank_barrel),
+    // Mud weight in pounds per U.S. gallon.
+    absolute("ppg", "pound per gallon (U.S.)", dims(1, -3, 0), 736351250.0 / 6145149.0,
+             "736351250/6145149", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 1.198264E+02; exact as lb/gal"),
+    absolute("fpm", "foot per minute", velocity, 0.00508, "0.00508", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 5.08E-03; exact as ft/min"),
+
+    // Percent: 0.01 (SI Brochure 9th ed., 5.4.7).
+    absolute("%", "percent", none, 0.01, "0.01", prefixes::refused,
+             "SI Brochure 9th ed., 5.4.7 (% = 0.01)"),
 };
 
 // SI Brochure 9th ed., Table 7, plus ronna, quetta, ronto and quecto, which the 27th CGPM

@@ -1,0 +1,108 @@
+// Messages for what people type first: a product without '*', a quantity without braces,
+// log with one argument, e^x, a limit written as a bare number, and an unknown unit whose
+// note shows how to define that very unit. Each has a near miss that must stay quiet.
+#include "plumb/check.hpp"
+#include "plumb/rules.hpp"
+
+#include <doctest/doctest.h>
+
+#include <string>
+#include <vector>
+
+namespace {
+
+// Declarations of the hydrostatic relation p = ρ g h (common practice).
+const std::string hydrostatic = "p, p_0 : Pa\nρ : kg/m^3\ng : m/s^2\nh : m\nV : m/s\nx, y : 1\n";
+
+const plumb::diagnostic* only(const plumb::check_report& r, std::string_view rule) {
+    const plumb::diagnostic* found = nullptr;
+    std::size_t count = 0;
+    for (const auto& d : r.diagnostics)
+        if (d.rule == rule) {
+            found = &d;
+            ++count;
+        }
+    return count == 1 ? found : nullptr;
+}
+
+bool any_note(const plumb::diagnostic& d, std::string_view text) {
+    for (const auto& n : d.notes)
+        if (n.message.find(text) != std::string::npos)
+            return true;
+    return false;
+}
+
+} // namespace
+
+TEST_CASE("'ρ g h' without operators: a product needs '*'") {
+    const auto r = plumb::check_text("h.plumb", hydrostatic + "p = ρ g h\n");
+    const plumb::diagnostic* d = only(r, plumb::rules::syntax);
+    REQUIRE(d != nullptr);
+    CHECK(d->message.find("needs '*'") != std::string::npos);
+    CHECK(d->message.find("ρ*g") != std::string::npos);
+    const auto fixed = plumb::check_text("h.plumb", hydrostatic + "p = ρ*g*h\nV >= 0\nx = y\n"
+                                                                  "p_0 >= 0\n");
+    CHECK(fixed.diagnostics.empty());
+}
+
+TEST_CASE("'101.325 kPa' in a formula: the unit goes in braces") {
+    const auto r = plumb::check_text("h.plumb", hydrostatic + "p = p_0 + 101.325 kPa\n");
+    const plumb::diagnostic* d = only(r, plumb::rules::syntax);
+    REQUIRE(d != nullptr);
+    CHECK(d->message.find("write 101.325 {kPa}") != std::string::npos);
+    const auto compound = plumb::check_text("h.plumb", hydrostatic + "g = 9.81 m/s^2\n");
+    REQUIRE(only(compound, plumb::rules::syntax) != nullptr);
+    CHECK(only(compound, plumb::rules::syntax)->message.find("write 9.81 {m/s^2}") !=
+          std::string::npos);
+    // A number next to a word that is no unit is a product without '*', not a quantity.
+    const auto not_unit = plumb::check_text("h.plumb", hydrostatic + "p = 2 ρ\n");
+    REQUIRE(only(not_unit, plumb::rules::syntax) != nullptr);
+    CHECK(only(not_unit, plumb::rules::syntax)->message.find("braces") == std::string::npos);
+}
+
+TEST_CASE("log with one argument: ln, log10 or log(x, base)") {
+    const auto r = plumb::check_text("h.plumb", hydrostatic + "y = log(x)\n");
+    const plumb::diagnostic* d = only(r, plumb::rules::wrong_arity);
+    REQUIRE(d != nullptr);
+    CHECK(any_note(*d, "ln(x)"));
+    CHECK(any_note(*d, "log10(x)"));
+    const auto two = plumb::check_text("h.plumb", hydrostatic + "y = log(x, 10)\n");
+    CHECK(only(two, plumb::rules::wrong_arity) == nullptr);
+}
+
+TEST_CASE("e^x: write exp(x)") {
+    const auto r = plumb::check_text("h.plumb", hydrostatic + "y = e^x\n");
+    const plumb::diagnostic* d = only(r, plumb::rules::undeclared);
+    REQUIRE(d != nullptr);
+    CHECK(any_note(*d, "exp(x)"));
+    const auto other = plumb::check_text("h.plumb", hydrostatic + "y = f^x\n");
+    REQUIRE(only(other, plumb::rules::undeclared) != nullptr);
+    CHECK_FALSE(any_note(*only(other, plumb::rules::undeclared), "exp(x)"));
+}
+
+TEST_CASE("a limit typed as a bare number: give it the other side's unit") {
+    const auto r = plumb::check_text("h.plumb", hydrostatic + "V <= 7.5\n");
+    const plumb::diagnostic* d = only(r, plumb::rules::side_mismatch);
+    REQUIRE(d != nullptr);
+    CHECK(any_note(*d, "7.5 {m/s}"));
+    const auto fixed = plumb::check_text("h.plumb", hydrostatic + "V <= 7.5 {m/s}\n");
+    CHECK(only(fixed, plumb::rules::side_mismatch) == nullptr);
+}
+
+TEST_CASE("an unknown unit's note shows how to define that very unit") {
+    const auto r = plumb::check_text("h.plumb", "Q : Mgald\n");
+    const plumb::diagnostic* d = only(r, plumb::rules::unknown_unit);
+    REQUIRE(d != nullptr);
+    CHECK(any_note(*d, "measure Mgald = <size> <known unit>"));
+    // A pressure with a trailing g is offered the gauge form.
+    const auto gauge = plumb::check_text("h.plumb", "p : MPag\n");
+    REQUIRE(only(gauge, plumb::rules::unknown_unit) != nullptr);
+    CHECK(any_note(*only(gauge, plumb::rules::unknown_unit),
+                   "measure MPag = MPa zero at 101.325 kPa"));
+    // The nearest spelling is offered first: "MGD" is a change of case from "mgd" (common
+    // practice: million gallons a day), not the millidarcy.
+    const auto flow = plumb::check_text("h.plumb", "Q : mgdd\n");
+    REQUIRE(only(flow, plumb::rules::unknown_unit) != nullptr);
+    CHECK(only(flow, plumb::rules::unknown_unit)->message.find("did you mean 'mgd'") !=
+          std::string::npos);
+}
