@@ -577,6 +577,11 @@ class checker {
         for (std::size_t i = base; i < operands_.size() && offset_term == nullptr; ++i)
             if (operands_[i].type.known && operands_[i].type.offset != nullptr)
                 offset_term = &operands_[i].type;
+        // A reading on an absolute scale may be shifted onto an offset one (T_K - 273.15).
+        for (std::size_t i = base; i < operands_.size() && offset_term == nullptr; ++i)
+            if (operands_[i].type.known && operands_[i].type.point &&
+                operands_[i].type.literal_count == 0)
+                offset_term = &operands_[i].type;
         if (offset_term == nullptr)
             return nullptr;
         for (std::size_t i = base; i < operands_.size(); ++i) {
