@@ -163,6 +163,7 @@ struct scratch_stacks {
     std::vector<operand> operands;
     std::vector<scale_literal> literals;
     std::vector<scaled_operand> scaled;
+    std::vector<std::size_t> scaled_index; // which operand each scaled one stands for
 };
 
 scratch_stacks& scratch() {
@@ -195,12 +196,13 @@ class checker {
             bool defer_unknown = false)
         : file_(file), symbols_(symbols), out_(out), defer_unknown_(defer_unknown),
           spine_(scratch().spine), operands_(scratch().operands), literals_(scratch().literals),
-          scaled_(scratch().scaled) {
+          scaled_(scratch().scaled), scaled_index_(scratch().scaled_index) {
         // A check abandoned by an exception may have left its part behind.
         spine_.clear();
         operands_.clear();
         literals_.clear();
         scaled_.clear();
+        scaled_index_.clear();
     }
 
     // A node's type, with the numbers along its multiplicative path left on the literal stack
@@ -315,6 +317,7 @@ class checker {
     std::vector<operand>& operands_;
     std::vector<scale_literal>& literals_;
     std::vector<scaled_operand>& scaled_;
+    std::vector<std::size_t>& scaled_index_;
     const syntax::formula* current_ = nullptr; // the formula being checked
     // The argument of ln, exp, sin...: in a sum there, the dimensionless terms are right.
     std::uint32_t prefer_dimensionless_ = syntax::no_index;
@@ -899,7 +902,6 @@ class checker {
     // of the unit they agree in. False when a finding was reported.
     bool check_scales(std::span<const operand> ops, std::string_view what, double& unit) {
         const std::size_t base = scaled_.size();
-        std::vector<std::size_t> index; // into ops, parallel to the scaled operands
         bool dimensionless = false;
         for (std::size_t i = 0; i < ops.size(); ++i) {
             const operand& op = ops[i];
@@ -910,14 +912,19 @@ class checker {
             if (number && !dimensionless)
                 continue;
             scaled_.push_back(scaled(op.type, number));
-            index.push_back(i);
+            scaled_index_.push_back(i);
         }
         struct release {
             std::vector<scaled_operand>& v;
+            std::vector<std::size_t>& w;
             std::size_t base;
-            ~release() { v.resize(base); }
-        } const keep{scaled_, base};
+            ~release() {
+                v.resize(base);
+                w.resize(base);
+            }
+        } const keep{scaled_, scaled_index_, base};
         const std::span<const scaled_operand> parts(scaled_.data() + base, scaled_.size() - base);
+        const std::span<const std::size_t> index(scaled_index_.data() + base, parts.size());
         unit = parts.empty() ? 1.0 : parts.front().scale;
         if (parts.size() < 2)
             return true;
@@ -928,8 +935,10 @@ class checker {
                 return !report_unneeded_factor(ops, index, parts, dimensionless);
             return true;
         }
-        // A conversion factor written the wrong way round.
-        for (std::size_t i = 0; i < parts.size(); ++i)
+        // A conversion factor written the wrong way round (asked of the short meeting points
+        // that formulas have; a sum of thousands of terms is not searched term by term).
+        constexpr std::size_t max_operands_for_flips = 16;
+        for (std::size_t i = 0; i < parts.size() && parts.size() <= max_operands_for_flips; ++i)
             for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
                 if (!looks_like_conversion(parts[i].literals[k], !dimensionless) &&
                     !parts[i].literals[k].factor_like)

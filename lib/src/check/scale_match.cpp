@@ -5,6 +5,7 @@
 #include "plumb/unit_table.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 #include <fmt/format.h>
 #include <vector>
@@ -60,10 +61,13 @@ struct subset_value {
     double tolerance = 0.0;
 };
 
-constexpr std::size_t max_literals_searched = 10;
-
+// The search tries every subset of each operand's numbers against every other operand's, so
+// its cost grows as (operands × 2^numbers)²: the numbers searched shrink as operands grow,
+// keeping one search to about 2.6e5 steps whatever the input.
 std::size_t searched(const scaled_operand& op, std::size_t operand_count) {
-    const std::size_t cap = operand_count > 8 ? 6 : max_literals_searched;
+    std::size_t cap = 0;
+    while (cap < 8 && operand_count * (std::size_t{2} << cap) <= 512)
+        ++cap;
     return std::min(op.literals.size(), cap);
 }
 
@@ -178,11 +182,24 @@ reconciliation reconcile(std::span<const scaled_operand> ops, flipped_literal fl
     std::size_t best_count = 0;
     double best_unit = ops[0].scale;
     double best_tolerance = 0.0;
+    // A long sum tries only a few distinct units, so the search stays linear in its length.
+    constexpr std::size_t max_units_tried = 16;
+    std::array<double, max_units_tried> tried{};
+    std::size_t tried_count = 0;
     for (std::size_t i = 0; i < count && best_count < count; ++i) {
         const std::size_t n = searched(ops[i], count);
         for (std::uint32_t mask = 0; mask < (1U << n) && best_count < count; ++mask) {
             const subset_value s = subset(ops[i], i, mask, flip);
             const double u = ops[i].scale / s.product;
+            if (n == 0) {
+                if (std::find(tried.begin(),
+                              tried.begin() + static_cast<std::ptrdiff_t>(tried_count),
+                              u) != tried.begin() + static_cast<std::ptrdiff_t>(tried_count))
+                    continue;
+                if (tried_count == max_units_tried)
+                    break;
+                tried[tried_count++] = u;
+            }
             std::size_t reached = 0;
             for (std::size_t j = 0; j < count; ++j)
                 if (j == i || reaches(ops[j], j, count, u, s.tolerance, flip, nullptr))

@@ -3,10 +3,10 @@
 #include "check/edit_distance.hpp"
 #include "check/formula_checker.hpp"
 #include "check/inference.hpp"
+#include "groups/studies.hpp"
 #include "notation/parser.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
-#include "groups/studies.hpp"
 
 #include <algorithm>
 #include <array>
