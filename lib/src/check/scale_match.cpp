@@ -113,6 +113,13 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
         l.value = 1.0;
         return l;
     }
+    // Small whole numbers (2, 8, 12, 384) are the common case: no logarithms for them.
+    if (text.size() <= 3 && text.find_first_not_of("0123456789") == std::string_view::npos) {
+        l.tolerance = std::min(1.0 / l.value, 0.01);
+        l.power_of_ten = l.value == 1 || l.value == 10 || l.value == 100;
+        l.power = static_cast<std::int8_t>(l.value >= 100 ? 2 : (l.value >= 10 ? 1 : 0));
+        return l;
+    }
     const std::size_t e = text.find_first_of("eE");
     const std::string_view mantissa = text.substr(0, e);
     int exponent = 0;
@@ -142,17 +149,21 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
     // One unit in the last printed digit: published factors are rounded or cut short (8.34 for
     // 8.3454 lb per US gallon and mg/L); no more than 1 % so that a 2 is never a 2.2.
     l.tolerance = std::clamp(last_place / l.value, 1e-12, 0.01);
-    l.power_of_ten = is_power_of_ten(l.value);
+    int power = 0;
+    l.power_of_ten = is_power_of_ten(l.value, &power);
+    l.power = static_cast<std::int8_t>(std::clamp(power, -100, 100));
     const bool whole = point == std::string_view::npos && e == std::string_view::npos;
     l.factor_like = !l.power_of_ten && (whole ? l.value >= 1000 : significant >= 3);
+    // Safety and load factors (1.15, 1.35) have 3 digits and may lie near some unit ratio
+    // (nautical mile per mile, 1.151); a conversion typed to name a ratio has 4 (3.281).
+    l.table_digits = !l.power_of_ten && (whole ? l.value >= 1000 : significant >= 4);
     return l;
 }
 
 bool looks_like_conversion(const scale_literal& l, bool allow_hundred) {
-    int power = 0;
-    if (l.power_of_ten && is_power_of_ten(l.value, &power))
-        return std::abs(power * l.exponent) >= (allow_hundred ? 2 : 3);
-    return l.factor_like && is_unit_ratio(l.value, l.tolerance);
+    if (l.power_of_ten)
+        return std::abs(l.power * l.exponent) >= (allow_hundred ? 2 : 3);
+    return l.table_digits && is_unit_ratio(l.value, l.tolerance);
 }
 
 double apparent_scale(const scaled_operand& op) {

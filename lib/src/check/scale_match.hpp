@@ -16,8 +16,10 @@ struct scale_literal {
     double tolerance = 0.0; // relative: one unit in the last printed digit (7758 for 7758.37)
     double exponent = 1.0;  // along the path: L/1000 gives -1, (L/1000)^2 gives -2
     std::uint32_t node = 0; // where it is written, to mark it
+    std::int8_t power = 0;  // the power, when the value is a power of ten
     bool power_of_ten = false;
-    bool factor_like = false; // written like a conversion factor (3.281, 5.615, 43560)
+    bool factor_like = false;  // written to 3 or more digits (3.28, 5.615, 43560), as factors are
+    bool table_digits = false; // to 4 or more (3.281, 0.3048): precise enough to name a unit ratio
 };
 
 // One operand where terms meet: the SI value of one written unit of it, and its numbers.
