@@ -60,6 +60,22 @@ const dimension& pressure_dimension() {
     return d;
 }
 
+// The table's offset and gauge units with their dimensions, for naming a scale by its zero.
+struct offset_row {
+    const unit_definition* unit;
+    dimension dim;
+};
+const std::vector<offset_row>& offset_rows() {
+    static const std::vector<offset_row> rows = [] {
+        std::vector<offset_row> out;
+        for (const auto& u : unit_table::standard().units())
+            if (u.scale != unit_scale::absolute)
+                out.push_back({&u, u.dim()});
+        return out;
+    }();
+    return rows;
+}
+
 // A temperature or pressure declared in an absolute unit is a reading on the absolute scale,
 // unless its name or description says it is a difference (ΔT, dp, "temperature rise").
 bool names_a_difference(std::string_view name, std::string_view description) {
@@ -472,9 +488,14 @@ class checker {
         if (t.offset != nullptr) {
             t.origin = t.offset->offset;
             t.point = true;
-        } else if ((t.dim == temperature_dimension() || t.dim == pressure_dimension()) &&
-                   !names_a_difference(name, entry->description)) {
+        } else if (entry->reading == 1) {
             t.point = true;
+        } else if (entry->reading == -1) {
+            const bool reading =
+                (t.dim == temperature_dimension() || t.dim == pressure_dimension()) &&
+                !names_a_difference(name, entry->description);
+            entry->reading = reading ? 1 : 0;
+            t.point = reading;
         }
         return t;
     }
@@ -642,9 +663,8 @@ class checker {
         for (const auto& t : terms)
             if (t.type.offset != nullptr && std::abs(t.type.offset->offset - origin) <= slack)
                 return true;
-        for (const auto& u : unit_table::standard().units())
-            if (u.scale != unit_scale::absolute && u.dim() == dim &&
-                std::abs(u.offset - origin) <= slack)
+        for (const auto& row : offset_rows())
+            if (row.dim == dim && std::abs(row.unit->offset - origin) <= slack)
                 return true;
         return false;
     }
@@ -656,10 +676,9 @@ class checker {
         for (const auto& t : terms)
             if (t.type.offset != nullptr && std::abs(t.type.offset->offset - origin) <= slack)
                 return t.type.offset;
-        for (const auto& u : unit_table::standard().units())
-            if (u.scale != unit_scale::absolute && u.dim() == dim &&
-                std::abs(u.offset - origin) <= slack)
-                return &u;
+        for (const auto& row : offset_rows())
+            if (row.dim == dim && std::abs(row.unit->offset - origin) <= slack)
+                return row.unit;
         for (const auto& t : terms)
             if (t.type.offset != nullptr)
                 return t.type.offset;
@@ -901,6 +920,33 @@ class checker {
     // in the formula supply that conversion, the right way round. `unit` receives the SI value
     // of the unit they agree in. False when a finding was reported.
     bool check_scales(std::span<const operand> ops, std::string_view what, double& unit) {
+        // Fast path: nearly every meeting point has one unit and no numbers to weigh.
+        {
+            double first = 0.0;
+            bool plain = true;
+            for (const auto& op : ops) {
+                if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale))
+                    continue;
+                const bool number = op.type.numeric;
+                if (number && !op.type.dim.is_dimensionless())
+                    continue; // a number in the others' unit
+                if (!number && op.type.literal_count != 0) {
+                    plain = false;
+                    break;
+                }
+                const double s = number ? 1.0 : op.type.scale;
+                if (first == 0.0) {
+                    first = s;
+                } else if (s != first) {
+                    plain = false;
+                    break;
+                }
+            }
+            if (plain) {
+                unit = first == 0.0 ? 1.0 : first;
+                return true;
+            }
+        }
         const std::size_t base = scaled_.size();
         bool dimensionless = false;
         for (std::size_t i = 0; i < ops.size(); ++i) {
@@ -1030,6 +1076,9 @@ class checker {
 
     // "T_K = T_C": readings on scales with different zeros set equal or compared.
     void check_origins(std::span<const operand> sides, bool equation) {
+        if (std::all_of(sides.begin(), sides.end(),
+                        [](const operand& side) { return side.type.origin == 0.0; }))
+            return;
         const operand* reference = nullptr;
         for (const auto& side : sides) {
             if (!side.type.known || side.type.zero || side.type.numeric ||

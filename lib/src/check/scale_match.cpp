@@ -105,6 +105,17 @@ bool reaches(const scaled_operand& op, std::size_t index, std::size_t count, dou
 
 } // namespace
 
+// 10^k without a logarithm or a power function: numbers are read on the hot path.
+double power_of_ten_value(int k) {
+    static const std::array<double, 61> table = [] {
+        std::array<double, 61> t{};
+        for (int i = 0; i < 61; ++i)
+            t[static_cast<std::size_t>(i)] = std::pow(10.0, i - 30);
+        return t;
+    }();
+    return k >= -30 && k <= 30 ? table[static_cast<std::size_t>(k + 30)] : std::pow(10.0, k);
+}
+
 scale_literal read_literal(std::string_view text, double value, std::uint32_t node) {
     scale_literal l;
     l.value = std::abs(value);
@@ -113,46 +124,50 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
         l.value = 1.0;
         return l;
     }
-    // Small whole numbers (2, 8, 12, 384) are the common case: no logarithms for them.
-    if (text.size() <= 3 && text.find_first_not_of("0123456789") == std::string_view::npos) {
-        l.tolerance = std::min(1.0 / l.value, 0.01);
-        l.power_of_ten = l.value == 1 || l.value == 10 || l.value == 100;
-        l.power = static_cast<std::int8_t>(l.value >= 100 ? 2 : (l.value >= 10 ? 1 : 0));
-        return l;
-    }
     const std::size_t e = text.find_first_of("eE");
     const std::string_view mantissa = text.substr(0, e);
     int exponent = 0;
     if (e != std::string_view::npos) {
-        const std::string digits(text.substr(e + 1));
-        exponent = std::atoi(digits.c_str());
+        bool negative = false;
+        for (std::size_t i = e + 1; i < text.size(); ++i) {
+            if (text[i] == '-')
+                negative = true;
+            else if (text[i] >= '0' && text[i] <= '9' && exponent < 1000)
+                exponent = exponent * 10 + (text[i] - '0');
+        }
+        exponent = negative ? -exponent : exponent;
     }
-    const std::size_t point = mantissa.find('.');
-    const int decimals =
-        point == std::string_view::npos ? 0 : static_cast<int>(mantissa.size() - point - 1);
+    const std::size_t point_at = mantissa.find('.');
+    const bool has_point = point_at != std::string_view::npos;
+    const std::size_t point = has_point ? point_at : mantissa.size();
+    const int decimals = has_point ? static_cast<int>(mantissa.size() - point - 1) : 0;
     int significant = 0;
-    bool leading = true;
-    for (const char c : mantissa) {
-        if (c < '0' || c > '9')
+    int first_place = 0; // the power of ten of the first significant digit
+    bool only_a_one = true;
+    for (std::size_t i = 0; i < mantissa.size(); ++i) {
+        const char c = mantissa[i];
+        if (c < '0' || c > '9' || (significant == 0 && c == '0'))
             continue;
-        if (leading && c == '0')
-            continue;
-        leading = false;
+        if (significant == 0)
+            first_place =
+                i < point ? static_cast<int>(point - i - 1) : -static_cast<int>(i - point);
+        else if (c != '0')
+            only_a_one = false;
+        if (significant == 0 && c != '1')
+            only_a_one = false;
         ++significant;
     }
     // Trailing zeros of a whole number are not significant (1000 is written as a power of ten).
-    if (point == std::string_view::npos)
+    if (!has_point)
         for (std::size_t i = mantissa.size(); i > 0 && mantissa[i - 1] == '0' && significant > 1;
              --i)
             --significant;
-    const double last_place = std::pow(10.0, exponent - decimals);
     // One unit in the last printed digit: published factors are rounded or cut short (8.34 for
     // 8.3454 lb per US gallon and mg/L); no more than 1 % so that a 2 is never a 2.2.
-    l.tolerance = std::clamp(last_place / l.value, 1e-12, 0.01);
-    int power = 0;
-    l.power_of_ten = is_power_of_ten(l.value, &power);
-    l.power = static_cast<std::int8_t>(std::clamp(power, -100, 100));
-    const bool whole = point == std::string_view::npos && e == std::string_view::npos;
+    l.tolerance = std::clamp(power_of_ten_value(exponent - decimals) / l.value, 1e-12, 0.01);
+    l.power_of_ten = significant >= 1 && only_a_one;
+    l.power = static_cast<std::int8_t>(std::clamp(first_place + exponent, -100, 100));
+    const bool whole = !has_point && e == std::string_view::npos;
     l.factor_like = !l.power_of_ten && (whole ? l.value >= 1000 : significant >= 3);
     // Safety and load factors (1.15, 1.35) have 3 digits and may lie near some unit ratio
     // (nautical mile per mile, 1.151); a conversion typed to name a ratio has 4 (3.281).
