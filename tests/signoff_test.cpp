@@ -35,9 +35,10 @@ std::vector<const plumb::diagnostic*> with_rule(const plumb::check_report& r,
     return out;
 }
 
-// Field units (common practice): 7758 bbl per acre-ft makes the mixed-unit warning that the
-// mark accepts.
-constexpr std::string_view reservoir_declarations = "A : acre\nh : ft\nφ, S_w, B_o : 1\nN : bbl\n";
+// Water horsepower in US units, P = Q H / 3960 (hp, gpm, ft; Karassik et al., Pump Handbook,
+// from memory): 3960 carries water's specific weight, so the sides differ in dimension, and a
+// team that uses it for water only accepts the finding.
+constexpr std::string_view reservoir_declarations = "P_w : hp\nQ : gpm\nH : ft\n";
 
 plumb_test::process_result plumb_run(const std::vector<std::string>& args,
                                      const std::filesystem::path& folder) {
@@ -50,20 +51,21 @@ plumb_test::process_result plumb_run(const std::vector<std::string>& args,
 
 TEST_CASE("inline mark: accepts the named rule on its statement, with its reason") {
     const std::string text = std::string(reservoir_declarations) +
-                             "@ooip N = 7758*A*h*φ*(1 - S_w)/B_o   # reviewed unit-scale: 7758 "
-                             "is bbl per acre-ft, from the field-units table\n";
+                             "@whp P_w = Q*H/3960   # reviewed side-mismatch: 3960 "
+                             "holds the specific weight of water, from the pump handbook\n";
     const auto report = plumb::check_text("ooip.plumb", text);
-    const auto found = with_rule(report, plumb::rules::unit_scale);
+    const auto found = with_rule(report, plumb::rules::side_mismatch);
     REQUIRE(found.size() == 1);
     REQUIRE(found[0]->accepted.has_value());
-    CHECK(found[0]->accepted->reason == "7758 is bbl per acre-ft, from the field-units table");
+    CHECK(found[0]->accepted->reason ==
+          "3960 holds the specific weight of water, from the pump handbook");
     CHECK(found[0]->accepted->by_inline_mark);
-    CHECK(report.count(severity::warning) == 0);
+    CHECK(report.count(severity::error) == 0);
     CHECK(report.count_accepted() == 1);
-    // Without the mark the same formula is a warning that counts.
-    const auto unmarked = plumb::check_text(
-        "ooip.plumb", std::string(reservoir_declarations) + "@ooip N = 7758*A*h*φ*(1 - S_w)/B_o\n");
-    CHECK(unmarked.count(severity::warning) == 1);
+    // Without the mark the same formula is an error that counts.
+    const auto unmarked = plumb::check_text("ooip.plumb", std::string(reservoir_declarations) +
+                                                              "@whp P_w = Q*H/3960\n");
+    CHECK(unmarked.count(severity::error) == 1);
     CHECK(unmarked.count_accepted() == 0);
 }
 
@@ -331,7 +333,7 @@ TEST_CASE("git commit: read from HEAD, a loose ref or packed-refs, without git")
 
 TEST_CASE("SARIF: rules, locations, related locations and suppressions") {
     const std::string text = std::string(reservoir_declarations) +
-                             "@ooip N = 7758*A*h*φ*(1 - S_w)/B_o   # reviewed unit-scale: field "
+                             "@whp P_w = Q*H/3960   # reviewed side-mismatch: field "
                              "units\nx, y : m\nz : s\ny = x + z\n";
     const auto report = plumb::check_text("calc.plumb", text);
     const std::string sarif = plumb::render_sarif(report, ".");
@@ -339,7 +341,7 @@ TEST_CASE("SARIF: rules, locations, related locations and suppressions") {
     CHECK(contains(sarif, "\"id\": \"sum-mismatch\""));
     CHECK(contains(sarif, "\"ruleId\": \"sum-mismatch\", \"ruleIndex\": 1, \"level\": \"error\""));
     CHECK(contains(sarif, "\"uri\": \"calc.plumb\", \"uriBaseId\": \"PROJECTROOT\""));
-    CHECK(contains(sarif, "\"startLine\": 8, \"startColumn\": 9"));
+    CHECK(contains(sarif, "\"startLine\": 7, \"startColumn\": 9"));
     CHECK(contains(sarif, "\"relatedLocations\""));
     CHECK(contains(sarif, "\"kind\": \"inSource\", \"status\": \"accepted\", "
                           "\"justification\": \"field units\""));
@@ -350,8 +352,9 @@ TEST_CASE("sign-off report: header, summary, formulas with side dimensions, caut
     dir.write("plumb.toml", "");
     dir.write("calcs/ooip.plumb",
               std::string(reservoir_declarations) +
-                  "@ooip N = 7758*A*h*φ*(1 - S_w)/B_o   # reviewed unit-scale: field units\n"
-                  "F_D : N\nρ : kg/m^3\nV : m/s\nD : m\nμ : Pa*s\nstudy sphere: F_D depends on ρ, V, D, μ\n"
+                  "@whp P_w = Q*H/3960   # reviewed side-mismatch: field units\n"
+                  "F_D : N\nρ : kg/m^3\nV : m/s\nD : m\nμ : Pa*s\nstudy sphere: F_D depends on ρ, "
+                  "V, D, μ\n"
                   "x, y : m\nz : s\ny = x + z\ny <= 3*x\n");
     auto r = plumb_run({"report", "calcs", "-o", "check.html"}, dir.path());
     CHECK(r.status == 1);

@@ -95,7 +95,7 @@ TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6")
     const auto scales = findings(r, plumb::rules::unit_scale);
     REQUIRE(scales.size() == 1);
     CHECK(scales[0]->level == plumb::severity::warning);
-    CHECK(scales[0]->message.find("1e+06 times") != std::string::npos);
+    CHECK(scales[0]->message.find("10⁶ times") != std::string::npos);
     CHECK(mentions(*scales[0], "'D' is in mm"));
 
     // The conversion written into the formula (1 m^2 = 10^6 mm^2) answers it.

@@ -4,9 +4,11 @@
 
 #include "check/edit_distance.hpp"
 #include "check/functions.hpp"
+#include "check/scale_match.hpp"
 #include "plumb/rules.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 #include <fmt/format.h>
 #include <limits>
@@ -28,14 +30,68 @@ struct typed {
     // in dimension but not in scale give numbers off by that factor.
     double scale = 1.0;
     // Set while the value is on an offset scale (°C, °F, gauge pressure): it may be compared
-    // and subtracted, but not multiplied, divided or raised to a power.
+    // and subtracted, but not multiplied, divided or raised to a power. Names the scale.
     const unit_definition* offset = nullptr;
+    double origin = 0.0;           // SI value of the scale's zero: 273.15 K for °C, 0 absolute
+    double origin_tolerance = 0.0; // from rounded numbers that moved it (14.7 psi)
+    bool point = false; // a reading on a scale (a temperature, a pressure), not a difference
+    // "(T - 20)": a reading less a number that is not a scale's zero. Beside other readings
+    // it is a reading; as a factor it is the difference from a reference reading.
+    bool reading_or_difference = false;
+    bool inferred = false; // unknown because a `?` coefficient stands in it, not an error
+    // The numbers along its multiplicative path, on the checker's literal stack.
+    std::uint32_t literal_begin = 0;
+    std::uint32_t literal_count = 0;
 };
 
-typed unknown_type() {
+typed unknown_type(bool inferred = false) {
     typed t;
     t.known = false;
+    t.inferred = inferred;
     return t;
+}
+
+const dimension& temperature_dimension() {
+    static const dimension d = unit_table::standard().resolve("K")->dim();
+    return d;
+}
+const dimension& pressure_dimension() {
+    static const dimension d = unit_table::standard().resolve("Pa")->dim();
+    return d;
+}
+
+// The table's offset and gauge units with their dimensions, for naming a scale by its zero.
+struct offset_row {
+    const unit_definition* unit;
+    dimension dim;
+};
+const std::vector<offset_row>& offset_rows() {
+    static const std::vector<offset_row> rows = [] {
+        std::vector<offset_row> out;
+        for (const auto& u : unit_table::standard().units())
+            if (u.scale != unit_scale::absolute)
+                out.push_back({&u, u.dim()});
+        return out;
+    }();
+    return rows;
+}
+
+// A temperature or pressure declared in an absolute unit is a reading on the absolute scale,
+// unless its name or description says it is a difference (ΔT, dp, "temperature rise").
+bool names_a_difference(std::string_view name, std::string_view description) {
+    const auto starts = [&](std::string_view p) { return name.substr(0, p.size()) == p; };
+    if (starts("Δ") || starts("δ") || starts("delta") || starts("Delta") || starts("d") ||
+        starts("LMTD") || starts("lmtd"))
+        return true;
+    for (const std::string_view word : {"rise", "drop", "diff", "loss", "lm", "approach"})
+        if (name.find(word) != std::string_view::npos)
+            return true;
+    for (const std::string_view word :
+         {"difference", "rise", "drop", "loss", "change", "increase", "decrease", "approach",
+          "range", "head", "gradient", "swing"})
+        if (description.find(word) != std::string_view::npos)
+            return true;
+    return false;
 }
 
 std::string describe(const dimension& d) {
@@ -59,8 +115,23 @@ struct agreement {
 
 // The reference is the dimension most operands share (the first such on a tie), so that one
 // wrong term among several right ones is the one pointed at.
-agreement find_agreement(std::span<const operand> ops) {
+agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless = false) {
     agreement result;
+    // In the argument of ln, exp or sin the dimensionless terms are the right ones.
+    if (prefer_dimensionless &&
+        std::any_of(ops.begin(), ops.end(),
+                    [](const operand& op) {
+                        return op.type.known && !op.type.zero && op.type.dim.is_dimensionless();
+                    }) &&
+        std::any_of(ops.begin(), ops.end(), [](const operand& op) {
+            return op.type.known && !op.type.zero && !op.type.dim.is_dimensionless();
+        })) {
+        result.reference = dimension{};
+        for (std::size_t i = 0; i < ops.size(); ++i)
+            if (ops[i].type.known && !ops[i].type.zero && !ops[i].type.dim.is_dimensionless())
+                result.odd.push_back(i);
+        return result;
+    }
     // Fast path: nearly every meeting point in a real calc agrees.
     const operand* first_known = nullptr;
     bool all_same = true;
@@ -106,6 +177,9 @@ agreement find_agreement(std::span<const operand> ops) {
 struct scratch_stacks {
     std::vector<std::uint32_t> spine;
     std::vector<operand> operands;
+    std::vector<scale_literal> literals;
+    std::vector<scaled_operand> scaled;
+    std::vector<std::size_t> scaled_index; // which operand each scaled one stands for
 };
 
 scratch_stacks& scratch() {
@@ -137,20 +211,39 @@ class checker {
     checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out,
             bool defer_unknown = false)
         : file_(file), symbols_(symbols), out_(out), defer_unknown_(defer_unknown),
-          spine_(scratch().spine), operands_(scratch().operands) {
+          spine_(scratch().spine), operands_(scratch().operands), literals_(scratch().literals),
+          scaled_(scratch().scaled), scaled_index_(scratch().scaled_index) {
         // A check abandoned by an exception may have left its part behind.
         spine_.clear();
         operands_.clear();
+        literals_.clear();
+        scaled_.clear();
+        scaled_index_.clear();
     }
 
+    // A node's type, with the numbers along its multiplicative path left on the literal stack
+    // from where it started.
     typed eval(std::uint32_t index) {
+        const auto start = static_cast<std::uint32_t>(literals_.size());
+        typed t = eval_node(index);
+        t.literal_begin = start;
+        t.literal_count = static_cast<std::uint32_t>(literals_.size()) - start;
+        return t;
+    }
+
+    typed eval_node(std::uint32_t index) {
         const syntax::expr_node& n = file_.nodes[index];
         switch (n.kind) {
         case expr_kind::number:
-            return eval_number(n);
+            return eval_number(n, index);
         case expr_kind::pi: {
             typed t;
             t.numeric = true;
+            scale_literal l;
+            l.value = 3.14159265358979323846;
+            l.tolerance = 1e-12;
+            l.node = index;
+            literals_.push_back(l);
             return t;
         }
         case expr_kind::symbol:
@@ -167,16 +260,23 @@ class checker {
         case expr_kind::multiply:
         case expr_kind::divide:
             return eval_product(index);
-        case expr_kind::power:
-            return apply_power(eval(n.lhs), eval(n.rhs), n.lhs, n.rhs);
+        case expr_kind::power: {
+            const typed base = eval(n.lhs);
+            const typed exponent = eval(n.rhs);
+            return apply_power(base, exponent, n.lhs, n.rhs);
+        }
         case expr_kind::call:
             return eval_call(n);
         case expr_kind::group:
+            if (index == prefer_dimensionless_)
+                prefer_dimensionless_ = n.lhs;
             return eval(n.lhs);
         case expr_kind::quantity:
             return eval_quantity(n);
         case expr_kind::inferred:
-            return unknown_type(); // its dimension is inferred afterwards, not checked here
+            // Its dimension is inferred afterwards, not checked here; the rules that do not
+            // need it still apply around it.
+            return unknown_type(true);
         }
         return unknown_type();
     }
@@ -198,7 +298,10 @@ class checker {
         const agreement a = find_agreement(sides);
         const char* what = equation ? "equation" : "limit";
         if (a.odd.empty()) {
-            check_scales(sides, equation ? "sides of this equation" : "sides of this limit");
+            double unit = 1.0;
+            if (check_scales(sides, equation ? "sides of this equation" : "sides of this limit",
+                             unit))
+                check_origins(sides, equation);
             return;
         }
         std::string message =
@@ -253,7 +356,12 @@ class checker {
     // warm. Each user takes the part above the size it found and gives it back.
     std::vector<std::uint32_t>& spine_;
     std::vector<operand>& operands_;
+    std::vector<scale_literal>& literals_;
+    std::vector<scaled_operand>& scaled_;
+    std::vector<std::size_t>& scaled_index_;
     const syntax::formula* current_ = nullptr; // the formula being checked
+    // The argument of ln, exp, sin...: in a sum there, the dimensionless terms are right.
+    std::uint32_t prefer_dimensionless_ = syntax::no_index;
 
     std::string_view text(span s) const { return file_.source->text(s); }
 
@@ -352,16 +460,25 @@ class checker {
         t.dim = *q.dim;
         // A constant stands for its SI value; a number in braces is in the unit written.
         t.scale = q.constant ? 1.0 : q.si_factor;
-        if (q.single_unit != nullptr && q.single_unit->scale != unit_scale::absolute)
+        if (q.single_unit != nullptr && q.single_unit->scale != unit_scale::absolute) {
             t.offset = q.single_unit;
+            t.origin = q.single_unit->offset;
+            t.point = true;
+        }
         return t;
     }
 
-    typed eval_number(const syntax::expr_node& n) const {
+    typed eval_number(const syntax::expr_node& n, std::uint32_t index) {
         typed t;
         t.numeric = true;
-        t.value = rational::parse(text(n.range));
+        const std::string_view written = text(n.range);
+        t.value = rational::parse(written);
         t.zero = t.value && t.value->is_zero();
+        if (!t.zero) {
+            const double v =
+                t.value ? t.value->to_double() : std::strtod(std::string(written).c_str(), nullptr);
+            literals_.push_back(read_literal(written, v, index));
+        }
         return t;
     }
 
@@ -401,10 +518,23 @@ class checker {
         t.dim = *entry->dim;
         t.scale = entry->si_factor;
         t.offset = entry->offset_unit;
+        if (t.offset != nullptr) {
+            t.origin = t.offset->offset;
+            t.point = true;
+        } else if (entry->reading == 1) {
+            t.point = true;
+        } else if (entry->reading == -1) {
+            const bool reading =
+                (t.dim == temperature_dimension() || t.dim == pressure_dimension()) &&
+                !names_a_difference(name, entry->description);
+            entry->reading = reading ? 1 : 0;
+            t.point = reading;
+        }
         return t;
     }
 
     typed eval_sum(std::uint32_t index) {
+        const bool prefer_dimensionless = index == prefer_dimensionless_;
         // Walk the left spine iteratively: a long sum must not recurse once per term.
         const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
@@ -416,10 +546,12 @@ class checker {
         const std::size_t term_count = spine_.size() - spine_base + 1;
 
         const std::size_t base = operands_.size();
+        const std::size_t literal_base = literals_.size();
         typed result;
         result.numeric = true;
         result.zero = true;
         result.value = rational(0);
+        bool inferred = false;
         for (std::size_t k = 0; k < term_count; ++k) {
             // Term k is the leftmost leaf for k == 0, else the right child of the spine node
             // k levels up from it.
@@ -430,6 +562,7 @@ class checker {
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
             result.zero = result.zero && t.zero;
+            inferred = inferred || t.inferred;
             if (result.value && t.value)
                 result.value = subtracted ? *result.value - *t.value : *result.value + *t.value;
             else
@@ -439,11 +572,12 @@ class checker {
         const bool last_subtracted = file_.nodes[index].kind == expr_kind::subtract;
         spine_.resize(spine_base);
 
-        const bool converted = recognise_offset_conversion(base);
+        const typed* offset_term = adopt_numbers_on_offset_scale(base);
         const scratch_region region(operands_, base);
         const std::span<const operand> terms = region.view();
-        const agreement a = find_agreement(terms);
+        const agreement a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty()) {
+            literals_.resize(literal_base);
             const std::size_t first_odd = a.odd.front();
             std::string message;
             if (terms.size() == 2) {
@@ -460,55 +594,341 @@ class checker {
             explain(d, terms, a, "terms");
             return unknown_type();
         }
-        if (!result.known)
-            return unknown_type();
+        if (!result.known) {
+            literals_.resize(literal_base);
+            return unknown_type(inferred);
+        }
         if (a.reference)
             result.dim = *a.reference;
         if (!result.numeric)
             result.value.reset();
-        // After a unit-scale warning the scale is unknown (NaN), so it is not reported again
+        if (result.numeric) {
+            // A sum of numbers is one number: physics or a conversion as a whole.
+            literals_.resize(literal_base);
+            if (result.value && !result.value->is_zero())
+                literals_.push_back(
+                    read_literal(text(file_.nodes[index].range), result.value->to_double(), index));
+            return result;
+        }
+        if (offset_term != nullptr)
+            return finish_offset_sum(terms, result, literal_base);
+        // After a unit-scale finding the scale is unknown (NaN), so it is not reported again
         // further up; the dimension stays known.
-        result.scale = check_scales(terms, "terms of this sum")
-                           ? first_scale(terms)
+        double unit = 1.0;
+        result.scale = check_scales(terms, "terms of this sum", unit)
+                           ? unit
                            : std::numeric_limits<double>::quiet_NaN();
-        result.offset = converted ? nullptr : offset_of_sum(terms);
+        literals_.resize(literal_base);
+        int points = 0;
+        for (const auto& t : terms)
+            if (t.type.point)
+                points += t.subtracted ? -1 : 1;
+        result.point = points == 1;
         return result;
     }
 
-    // In a sum with a value on an offset scale, a bare number is a value on that scale
-    // ("T_F = 1.8*T_C + 32"); one that is exactly the scale's offset, as a number (273.15,
-    // 459.67) or as a quantity (273.15 {K}, 14.7 {psi}, {p_atm}), converts the sum to the
-    // absolute scale.
-    bool recognise_offset_conversion(std::size_t base) {
+    // In a sum with a value on an offset scale, a bare number is a value in that unit
+    // ("T_F = 1.8*T_C + 32"). Returns the first such value, or null.
+    const typed* adopt_numbers_on_offset_scale(std::size_t base) {
         const typed* offset_term = nullptr;
-        for (std::size_t i = base; i < operands_.size(); ++i)
+        for (std::size_t i = base; i < operands_.size() && offset_term == nullptr; ++i)
             if (operands_[i].type.known && operands_[i].type.offset != nullptr)
                 offset_term = &operands_[i].type;
+        // A reading on an absolute scale may be shifted onto an offset one (T_K - 273.15).
+        for (std::size_t i = base; i < operands_.size() && offset_term == nullptr; ++i)
+            if (operands_[i].type.known && operands_[i].type.point &&
+                operands_[i].type.literal_count == 0)
+                offset_term = &operands_[i].type;
         if (offset_term == nullptr)
-            return false;
-        const unit_definition& unit = *offset_term->offset;
-        const dimension dim = offset_term->dim;
-        const double scale = offset_term->scale;
-        // People write 14.7 for 14.696 psi: a relative 1e-3 covers the usual roundings.
-        const auto is_shift = [&](double si_value) {
-            return std::abs(si_value - unit.offset) <= 1e-3 * std::abs(unit.offset);
-        };
-        bool converted = false;
+            return nullptr;
         for (std::size_t i = base; i < operands_.size(); ++i) {
             typed& t = operands_[i].type;
-            const syntax::expr_node& n = file_.nodes[operands_[i].node];
-            if (t.numeric && t.value && t.dim.is_dimensionless()) {
-                t.dim = dim;
-                t.scale = scale;
-                converted = converted || (!operands_[i].subtracted &&
-                                          is_shift(t.value->to_double() * unit.factor));
-            } else if (n.kind == expr_kind::quantity && t.known && t.offset == nullptr &&
-                       !operands_[i].subtracted && t.dim == dim && is_shift(quantity_si_value(n))) {
-                converted = true;
-                t.scale = scale; // the conversion is exact whatever unit it is written in
+            if (t.numeric && t.value && !t.zero && t.dim.is_dimensionless()) {
+                t.dim = offset_term->dim;
+                t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
             }
         }
-        return converted;
+        return offset_term;
+    }
+
+    // A number or a quantity in a sum on an offset scale may shift the zero: 273.15 from °C to
+    // K, 32 between °F and °C, 14.696 psi or {p_atm} from gauge to absolute.
+    struct shift {
+        double written = 0.0;   // in the sum's unit (bare numbers), signed
+        double si = 0.0;        // already in SI (quantities), signed
+        double tolerance = 0.0; // relative
+    };
+
+    bool is_shift_candidate(const operand& op) const {
+        if (!op.type.known || op.type.zero)
+            return false;
+        if (op.type.numeric && op.type.value)
+            return true;
+        return file_.nodes[op.node].kind == expr_kind::quantity && op.type.offset == nullptr;
+    }
+
+    shift shift_of(const operand& op) const {
+        shift s;
+        const double sign = op.subtracted ? -1.0 : 1.0;
+        if (op.type.numeric && op.type.value) {
+            s.written = sign * op.type.value->to_double();
+            s.tolerance =
+                op.type.literal_count == 1 ? literals_[op.type.literal_begin].tolerance : 1e-9;
+            return s;
+        }
+        const syntax::expr_node& n = file_.nodes[op.node];
+        const syntax::quantity_literal& q = file_.quantities[n.lhs];
+        s.si = sign * quantity_si_value(n);
+        const std::string_view t = text(n.range);
+        const std::string_view number = t.substr(0, t.find_first_of(" \t{"));
+        s.tolerance = q.constant || number.empty()
+                          ? 1e-9
+                          : read_literal(number, std::abs(s.si) / q.si_factor, 0).tolerance;
+        return s;
+    }
+
+    // Where a scale of this dimension can have its zero: absolute, or an offset unit's zero.
+    bool recognised_origin(double origin, double tolerance, const dimension& dim,
+                           std::span<const operand> terms) const {
+        const double slack = tolerance + 1e-9 * std::abs(origin) + 1e-9;
+        if (std::abs(origin) <= slack)
+            return true;
+        for (const auto& t : terms)
+            if (t.type.offset != nullptr && std::abs(t.type.offset->offset - origin) <= slack)
+                return true;
+        for (const auto& row : offset_rows())
+            if (row.dim == dim && std::abs(row.unit->offset - origin) <= slack)
+                return true;
+        return false;
+    }
+
+    // The table's (or the formula's) offset unit whose zero is `origin`, to name the scale.
+    const unit_definition* scale_named(double origin, double tolerance, const dimension& dim,
+                                       std::span<const operand> terms) const {
+        const double slack = tolerance + 1e-9 * std::abs(origin) + 1e-9;
+        for (const auto& t : terms)
+            if (t.type.offset != nullptr && std::abs(t.type.offset->offset - origin) <= slack)
+                return t.type.offset;
+        for (const auto& row : offset_rows())
+            if (row.dim == dim && std::abs(row.unit->offset - origin) <= slack)
+                return row.unit;
+        for (const auto& t : terms)
+            if (t.type.offset != nullptr)
+                return t.type.offset;
+        return nullptr;
+    }
+
+    // The scale and zero of a sum with a value on an offset scale. Values on one scale subtract
+    // to an ordinary difference; a shift by the scale's zero converts it; an absolute pressure
+    // added to a gauge one (+ p_atm) gives an absolute pressure.
+    typed finish_offset_sum(std::span<const operand> terms, typed result,
+                            std::size_t literal_base) {
+        // The terms with units (not the numbers that shift the zero).
+        std::size_t unit_terms = 0;
+        std::size_t only = 0;
+        for (std::size_t i = 0; i < terms.size(); ++i)
+            if (terms[i].type.known && !terms[i].type.zero && !is_shift_candidate(terms[i])) {
+                ++unit_terms;
+                only = i;
+            }
+        // Zeros of the values on a scale, signed, and the absolute pressures added to gauge ones.
+        double origin = 0.0;
+        double origin_tolerance = 0.0;
+        int points = 0;
+        int gauges = 0;
+        int absolute_pressures_added = 0;
+        double gauge_zero = 0.0;
+        for (const auto& t : terms) {
+            if (!t.type.known || t.type.zero || is_shift_candidate(t) || !t.type.point)
+                continue;
+            const double sign = t.subtracted ? -1.0 : 1.0;
+            origin += sign * t.type.origin;
+            origin_tolerance += t.type.origin_tolerance;
+            points += t.subtracted ? -1 : 1;
+            if (t.type.offset != nullptr && t.type.offset->scale == unit_scale::gauge &&
+                !t.subtracted) {
+                ++gauges;
+                gauge_zero = t.type.offset->offset;
+            } else if (t.type.offset == nullptr && t.type.dim == pressure_dimension() &&
+                       !t.subtracted) {
+                ++absolute_pressures_added;
+            }
+        }
+        // "p_g + p_atm": any absolute pressure added to a gauge reading supplies its zero.
+        if (gauges > 0 && absolute_pressures_added > 0) {
+            origin -= gauge_zero;
+            --points;
+        }
+        const auto shifted = [&](double unit, double* tolerance) {
+            double o = origin;
+            double tol = origin_tolerance;
+            for (const auto& t : terms)
+                if (is_shift_candidate(t)) {
+                    const shift s = shift_of(t);
+                    const double si = s.si + s.written * unit;
+                    o -= si;
+                    tol += std::abs(si) * s.tolerance;
+                }
+            *tolerance = tol;
+            return o;
+        };
+        bool has_shift = false;
+        for (const auto& t : terms)
+            has_shift = has_shift || is_shift_candidate(t);
+
+        double unit = terms[only].type.scale;
+        bool keep_literals = false;
+        if (unit_terms == 1) {
+            // "1.8*T_C + 32": the numbers that multiply the one value with a unit may convert
+            // it; the choice that puts the zero where some scale has one is the conversion.
+            const operand& term = terms[only];
+            keep_literals = true;
+            if (has_shift) {
+                const std::span<const scale_literal> lits(
+                    literals_.data() + term.type.literal_begin,
+                    std::min<std::size_t>(term.type.literal_count, 8));
+                for (std::uint32_t mask = 0; mask < (1U << lits.size()); ++mask) {
+                    double product = 1.0;
+                    for (std::size_t k = 0; k < lits.size(); ++k)
+                        if ((mask >> k) & 1U)
+                            product *= std::pow(lits[k].value, lits[k].exponent);
+                    double tol = 0.0;
+                    const double o = shifted(term.type.scale / product, &tol);
+                    if (recognised_origin(o, tol, term.type.dim, terms)) {
+                        unit = term.type.scale / product;
+                        keep_literals = mask == 0;
+                        break;
+                    }
+                }
+            }
+        } else {
+            std::vector<operand> unit_operands;
+            for (const auto& t : terms)
+                if (t.type.known && !t.type.zero && !is_shift_candidate(t))
+                    unit_operands.push_back(t);
+            if (!check_scales(unit_operands, "terms of this sum", unit)) {
+                literals_.resize(literal_base);
+                return unknown_type();
+            }
+        }
+        double tolerance = origin_tolerance;
+        double final_origin = origin;
+        bool shifted_to_a_zero = false;
+        if (has_shift) {
+            double tol = 0.0;
+            const double o = shifted(unit, &tol);
+            // A number that does not land the zero on a scale is a difference (T + 5).
+            if (recognised_origin(o, tol, result.dim, terms)) {
+                final_origin = o;
+                tolerance = tol;
+                shifted_to_a_zero = true;
+            }
+        }
+        if (has_shift && !shifted_to_a_zero && points == 1) {
+            for (const auto& t : terms) {
+                if (!is_shift_candidate(t) || !t.subtracted)
+                    continue;
+                const shift sh = shift_of(t);
+                const double si = std::abs(sh.si + sh.written * unit);
+                // "T_C - 273.15": the conversion, with the wrong sign.
+                if (origin > 0 && std::abs(si - origin) <= si * sh.tolerance + 1e-9 * origin) {
+                    const unit_definition* named = scale_named(origin, 0.0, result.dim, terms);
+                    diagnostic& d = report(
+                        rules::offset_scale,
+                        fmt::format("{} is subtracted from a reading on the {} scale: that moves "
+                                    "its zero twice as far, it does not convert it",
+                                    display_text(file_.nodes[t.node].range),
+                                    named != nullptr ? named->symbol : "offset"),
+                        file_.nodes[t.node].range);
+                    add_term(d, t);
+                    d.notes.push_back({fmt::format("to convert to the absolute scale, add it: "
+                                                   "(... + {})",
+                                                   display_text(file_.nodes[t.node].range)),
+                                       {}});
+                    literals_.resize(literal_base);
+                    return unknown_type();
+                }
+                // "(T - 20)": the difference from a reference reading, where a factor.
+                result.reading_or_difference = true;
+            }
+        }
+        if (keep_literals) {
+            // Pass the one term's numbers on: the conversion may be decided further up.
+            const operand& term = terms[only];
+            std::copy(literals_.begin() + term.type.literal_begin,
+                      literals_.begin() + term.type.literal_begin + term.type.literal_count,
+                      literals_.begin() + static_cast<std::ptrdiff_t>(literal_base));
+            literals_.resize(literal_base + term.type.literal_count);
+            unit = terms[only].type.scale;
+        } else {
+            literals_.resize(literal_base);
+        }
+        result.scale = unit;
+        const double slack = tolerance + 1e-9 * std::abs(final_origin) + 1e-9;
+        if (points == 0) {
+            if (std::abs(final_origin) > slack) {
+                report_mixed_scales(terms, final_origin);
+                literals_.resize(literal_base);
+                return unknown_type();
+            }
+            return result; // an ordinary difference
+        }
+        result.point = true;
+        if (points != 1) {
+            // A sum of two readings on one scale, halved for the mean: its zero is the scale's.
+            result.offset = scale_named(final_origin / points, slack, result.dim, terms);
+            result.origin = final_origin / points;
+            result.origin_tolerance = std::numeric_limits<double>::infinity();
+            return result;
+        }
+        result.origin = final_origin;
+        result.origin_tolerance = tolerance;
+        result.offset = std::abs(final_origin) > slack
+                            ? scale_named(final_origin, slack, result.dim, terms)
+                            : nullptr;
+        return result;
+    }
+
+    // "T_C - T_K", "p_bar - p_barg": readings on two scales with different zeros.
+    void report_mixed_scales(std::span<const operand> terms, double difference) {
+        const operand* on_offset = nullptr;
+        const operand* other = nullptr;
+        for (const auto& t : terms) {
+            if (!t.type.known || !t.type.point)
+                continue;
+            if (t.type.offset != nullptr && on_offset == nullptr)
+                on_offset = &t;
+            else if (other == nullptr)
+                other = &t;
+        }
+        if (on_offset == nullptr)
+            on_offset = &terms.front();
+        const unit_definition& unit =
+            *scale_named(on_offset->type.origin, 0.0, on_offset->type.dim, terms);
+        const bool temperature = on_offset->type.dim == temperature_dimension();
+        diagnostic& d = report(
+            rules::offset_scale,
+            other != nullptr
+                ? fmt::format("{} is on the {} scale and {} on an absolute one, so their "
+                              "difference is off by the {} scale's zero",
+                              quote(on_offset->node), unit.symbol, quote(other->node), unit.symbol)
+                : fmt::format("{} is on the {} scale, and the other terms do not cancel its zero",
+                              quote(on_offset->node), unit.symbol),
+            file_.nodes[on_offset->node].range);
+        add_term(d, *on_offset);
+        if (other != nullptr)
+            add_term(d, *other);
+        d.notes.push_back(
+            {fmt::format("as written the result is off by {} {}",
+                         format_factor(std::abs(difference)), temperature ? "K" : "Pa"),
+             {}});
+        d.notes.push_back(
+            {temperature
+                 ? fmt::format("convert first: a {} reading plus {:g} is in K", unit.symbol,
+                               unit.offset / unit.factor)
+                 : std::string("convert first: a gauge reading plus the atmospheric pressure is "
+                               "absolute"),
+             {}});
     }
 
     // The SI value of "14.7 {psi}" or "{p_atm}".
@@ -521,95 +941,227 @@ class checker {
         return number ? number->to_double() * q.si_factor : 0.0;
     }
 
-    // Offsets cancel in a difference (T_2 - T_1 is a plain temperature difference); a sum with
-    // one more offset value added than subtracted is still on the offset scale.
-    static const unit_definition* offset_of_sum(std::span<const operand> terms) {
-        int balance = 0;
-        const unit_definition* unit = nullptr;
-        for (const auto& t : terms) {
-            if (t.type.offset == nullptr)
-                continue;
-            unit = t.type.offset;
-            balance += t.subtracted ? -1 : 1;
-        }
-        return balance == 0 ? nullptr : unit;
+    // A side or term's units and numbers, for reconcile().
+    scaled_operand scaled(const typed& t, bool as_number) const {
+        if (as_number)
+            return {1.0, {}};
+        return {t.scale, std::span<const scale_literal>(literals_.data() + t.literal_begin,
+                                                        t.literal_count)};
     }
 
-    static double first_scale(std::span<const operand> ops) {
-        for (const auto& op : ops)
-            if (op.type.known && !op.type.zero && !op.type.numeric)
-                return op.type.scale;
-        return 1.0;
-    }
-
-    // Terms of one dimension in different units give numbers off by a factor, unless a number
-    // in the formula supplies exactly that conversion. False when a finding was reported.
-    bool check_scales(std::span<const operand> ops, std::string_view what) {
-        const operand* reference = nullptr;
-        for (const auto& op : ops) {
-            if (!op.type.known || op.type.zero)
-                continue;
-            if (op.type.numeric && op.type.dim.is_dimensionless())
-                continue; // a bare number carries no unit of its own
-            if (!std::isfinite(op.type.scale))
-                continue; // already reported below
-            if (reference == nullptr) {
-                reference = &op;
-                continue;
+    // Terms of one dimension in different units give numbers off by a factor, unless numbers
+    // in the formula supply that conversion, the right way round. `unit` receives the SI value
+    // of the unit they agree in. False when a finding was reported.
+    bool check_scales(std::span<const operand> ops, std::string_view what, double& unit) {
+        // Fast path: nearly every meeting point has one unit and no numbers to weigh.
+        {
+            double first = 0.0;
+            bool plain = true;
+            for (const auto& op : ops) {
+                if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale))
+                    continue;
+                const bool number = op.type.numeric;
+                if (number && !op.type.dim.is_dimensionless())
+                    continue; // a number in the others' unit
+                if (!number && op.type.literal_count != 0) {
+                    plain = false;
+                    break;
+                }
+                const double s = number ? 1.0 : op.type.scale;
+                if (first == 0.0) {
+                    first = s;
+                } else if (s != first) {
+                    plain = false;
+                    break;
+                }
             }
-            const double ratio = reference->type.scale / op.type.scale;
-            if (std::abs(ratio - 1.0) <= 1e-9 || conversion_in_formula(ratio))
-                continue;
-            // A warning: in a unit-aware calc the units convert themselves; where numbers are
-            // put in as declared (spreadsheets, code), the result is off by the ratio.
-            diagnostic& d = report(rules::unit_scale,
-                                   fmt::format("as written, {} counts {} times as much as {}: the "
-                                               "{} agree in dimension but not in unit",
-                                               quote(op.node), format_ratio(ratio),
-                                               quote(reference->node), what),
-                                   file_.nodes[op.node].range);
-            d.level = severity::warning;
-            add_term(d, op);
-            add_term(d, *reference);
-            for (const operand* side : {&op, reference}) {
-                const std::string units = units_in(side->node);
-                if (!units.empty())
-                    d.notes.push_back({fmt::format("in {}: {}", quote(side->node), units), {}});
-            }
-            d.notes.push_back({"convert one of them (declare the symbols in coherent units, or "
-                               "write the conversion factor into the formula)",
-                               {}});
-            return false;
-        }
-        return true;
-    }
-
-    static std::string format_ratio(double r) { return fmt::format("{:.6g}", r); }
-
-    // Whether the numbers written in the current formula supply the ratio: one of them, or a
-    // product or quotient of two (5/9 for 1.8), is the ratio or its inverse.
-    bool conversion_in_formula(double ratio) const {
-        if (current_ == nullptr)
-            return false;
-        std::vector<double> numbers;
-        visit_nodes([&](const syntax::expr_node& n) {
-            if (n.kind != expr_kind::number || numbers.size() >= 32)
-                return;
-            const auto v = rational::parse(text(n.range));
-            if (v && !v->is_zero())
-                numbers.push_back(std::abs(v->to_double()));
-        });
-        const auto matches = [ratio](double x) {
-            return std::abs(ratio * x - 1.0) <= 1e-6 || std::abs(ratio / x - 1.0) <= 1e-6;
-        };
-        for (std::size_t i = 0; i < numbers.size(); ++i) {
-            if (matches(numbers[i]))
+            if (plain) {
+                unit = first == 0.0 ? 1.0 : first;
                 return true;
-            for (std::size_t j = i + 1; j < numbers.size(); ++j)
-                if (matches(numbers[i] * numbers[j]) || matches(numbers[i] / numbers[j]))
-                    return true;
+            }
         }
+        const std::size_t base = scaled_.size();
+        bool dimensionless = false;
+        for (std::size_t i = 0; i < ops.size(); ++i) {
+            const operand& op = ops[i];
+            if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale))
+                continue;
+            dimensionless = op.type.dim.is_dimensionless();
+            const bool number = op.type.numeric;
+            if (number && !dimensionless)
+                continue;
+            scaled_.push_back(scaled(op.type, number));
+            scaled_index_.push_back(i);
+        }
+        struct release {
+            std::vector<scaled_operand>& v;
+            std::vector<std::size_t>& w;
+            std::size_t base;
+            ~release() {
+                v.resize(base);
+                w.resize(base);
+            }
+        } const keep{scaled_, scaled_index_, base};
+        const std::span<const scaled_operand> parts(scaled_.data() + base, scaled_.size() - base);
+        const std::span<const std::size_t> index(scaled_index_.data() + base, parts.size());
+        unit = parts.empty() ? 1.0 : parts.front().scale;
+        if (parts.size() < 2)
+            return true;
+        const reconciliation r = reconcile(parts);
+        if (r.agree) {
+            unit = r.unit;
+            if (!r.used_literals)
+                return !report_unneeded_factor(ops, index, parts, dimensionless);
+            return true;
+        }
+        // A conversion factor written the wrong way round (asked of the short meeting points
+        // that formulas have; a sum of thousands of terms is not searched term by term).
+        constexpr std::size_t max_operands_for_flips = 16;
+        for (std::size_t i = 0; i < parts.size() && parts.size() <= max_operands_for_flips; ++i)
+            for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
+                if (!looks_like_conversion(parts[i].literals[k], !dimensionless) &&
+                    !parts[i].literals[k].factor_like)
+                    continue;
+                const reconciliation flipped = reconcile(parts, {i, k});
+                if (!flipped.agree)
+                    continue;
+                report_inverted_factor(ops[index[i]], parts[i].literals[k]);
+                return false;
+            }
+        const operand& op = ops[index[r.odd]];
+        const operand& reference = ops[index[r.reference]];
+        // What the numbers as written give: the conversion-like ones taken as conversions.
+        const double ratio = apparent_scale(parts[r.reference]) / apparent_scale(parts[r.odd]);
+        // A warning: in a unit-aware calc the units convert themselves; where numbers are
+        // put in as declared (spreadsheets, code), the result is off by the ratio.
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("as written, {} counts {} times as much as {}: the {} agree in "
+                               "dimension but not in unit",
+                               quote(op.node), format_factor(ratio), quote(reference.node), what),
+                   file_.nodes[op.node].range);
+        d.level = severity::warning;
+        add_term(d, op);
+        add_term(d, reference);
+        for (const operand* side : {&op, &reference}) {
+            const std::string units = units_in(side->node);
+            if (!units.empty())
+                d.notes.push_back({fmt::format("in {}: {}", quote(side->node), units), {}});
+        }
+        d.notes.push_back(
+            {ratio < 1 ? fmt::format("multiply {} by {} (declare the symbols in coherent units, or "
+                                     "write the conversion factor into the formula)",
+                                     quote(op.node), format_factor(1.0 / ratio))
+                       : fmt::format("divide {} by {} (declare the symbols in coherent units, or "
+                                     "write the conversion factor into the formula)",
+                                     quote(op.node), format_factor(ratio)),
+             {}});
         return false;
+    }
+
+    // "P = E*I/L^2/1000" with P already in kN: the units agree without the factor.
+    bool report_unneeded_factor(std::span<const operand> ops, std::span<const std::size_t> index,
+                                std::span<const scaled_operand> parts, bool dimensionless) {
+        for (std::size_t i = 0; i < parts.size(); ++i)
+            for (const auto& l : parts[i].literals) {
+                if (!looks_like_conversion(l, !dimensionless))
+                    continue;
+                const double factor = std::pow(l.value, l.exponent);
+                diagnostic& d = report(
+                    rules::unit_scale,
+                    fmt::format("the factor {} is not needed: the units of {} already agree, so "
+                                "as written it is {} times its true value",
+                                text(file_.nodes[l.node].range), quote(ops[index[i]].node),
+                                format_factor(factor)),
+                    file_.nodes[l.node].range);
+                add_term(d, ops[index[i]]);
+                const std::string units = units_in(ops[index[i]].node);
+                if (!units.empty())
+                    d.notes.push_back({units, {}});
+                d.notes.push_back({"remove the factor, or declare the symbols in the units it "
+                                   "converts from",
+                                   {}});
+                return true;
+            }
+        return false;
+    }
+
+    // "M = w*L^2/8*1e6" with L in mm: the factor is needed, but the other way round.
+    void report_inverted_factor(const operand& op, const scale_literal& l) {
+        const double factor = std::pow(l.value, l.exponent);
+        const std::string_view written = text(file_.nodes[l.node].range);
+        const bool divides = l.exponent < 0;
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("the factor {} is the wrong way round: the units of {} "
+                               "need {} by it, not {}",
+                               written, quote(op.node), divides ? "a multiplication" : "a division",
+                               divides ? "a division" : "a multiplication"),
+                   file_.nodes[l.node].range);
+        add_term(d, op);
+        const std::string units = units_in(op.node);
+        if (!units.empty())
+            d.notes.push_back({units, {}});
+        d.notes.push_back({fmt::format("as written the result is {} times its true value",
+                                       format_factor(factor * factor)),
+                           {}});
+    }
+
+    // "T_K = T_C": readings on scales with different zeros set equal or compared.
+    void check_origins(std::span<const operand> sides, bool equation) {
+        if (std::all_of(sides.begin(), sides.end(),
+                        [](const operand& side) { return side.type.origin == 0.0; }))
+            return;
+        const operand* reference = nullptr;
+        for (const auto& side : sides) {
+            if (!side.type.known || side.type.zero || side.type.numeric ||
+                !std::isfinite(side.type.origin_tolerance))
+                continue;
+            if (reference == nullptr) {
+                reference = &side;
+                continue;
+            }
+            const double slack = side.type.origin_tolerance + reference->type.origin_tolerance +
+                                 1e-9 * (std::abs(side.type.origin) + 1.0);
+            const double difference = side.type.origin - reference->type.origin;
+            if (std::abs(difference) <= slack)
+                continue;
+            const operand& off = side.type.offset != nullptr ? side : *reference;
+            const operand& other = &off == &side ? *reference : side;
+            const unit_definition* unit = off.type.offset;
+            const bool temperature = off.type.dim == temperature_dimension();
+            const std::string scale_of_other =
+                other.type.offset != nullptr
+                    ? fmt::format("the {} scale", other.type.offset->symbol)
+                    : std::string(temperature ? "the absolute scale (K)"
+                                              : "the absolute scale (Pa, bar, psia)");
+            diagnostic& d = report(
+                rules::offset_scale,
+                fmt::format("{} is on the {} scale but {} is on {}: the {} of this {} differ by {} "
+                            "{}",
+                            quote(off.node), unit != nullptr ? unit->symbol : "offset",
+                            quote(other.node), scale_of_other, "zeros",
+                            equation ? "equation" : "limit", format_factor(std::abs(difference)),
+                            temperature ? "K" : "Pa"),
+                file_.nodes[off.node].range);
+            add_term(d, off);
+            add_term(d, other);
+            if (unit != nullptr && other.type.offset == nullptr)
+                d.notes.push_back(
+                    {temperature
+                         ? fmt::format("a {} reading plus {:g} is in kelvins: write ({} + {:g})",
+                                       unit->symbol, unit->offset / unit->factor,
+                                       display_text(file_.nodes[off.node].range),
+                                       unit->offset / unit->factor)
+                         : fmt::format("a gauge reading plus the atmospheric pressure is "
+                                       "absolute: write ({} + p_atm), or ({} + {}) at sea level, "
+                                       "the standard atmosphere in {}",
+                                       display_text(file_.nodes[off.node].range),
+                                       display_text(file_.nodes[off.node].range),
+                                       format_factor(unit->offset / unit->factor), unit->symbol),
+                     {}});
+            return;
+        }
     }
 
     // "'D' is in mm, 'Q' in L/s": the symbols under a node declared in non-coherent units.
@@ -665,7 +1217,8 @@ class checker {
     }
 
     // A value on an offset scale used where only an absolute one makes sense.
-    void report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where) {
+    void report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where,
+                       const dimension* partner = nullptr) {
         const bool temperature =
             unit.exponents[static_cast<std::size_t>(base_dimension::temperature)] != 0;
         diagnostic& d =
@@ -674,6 +1227,19 @@ class checker {
                                quote(node), unit.symbol, where),
                    file_.nodes[node].range);
         d.mark_label = fmt::format("on the {} scale, whose zero is arbitrary", unit.symbol);
+        // A coefficient per degree (α in R_20*(1 + α*T)) multiplies a difference from its
+        // reference temperature, not an absolute temperature.
+        if (temperature && partner != nullptr && *partner == temperature_dimension().pow(-1)) {
+            const std::string reference = reference_temperature();
+            d.notes.push_back(
+                {fmt::format("a coefficient per degree multiplies a temperature difference: "
+                             "write ({} - {}) with {} the coefficient's reference temperature "
+                             "in {}",
+                             display_text(file_.nodes[node].range), reference, reference,
+                             unit.symbol),
+                 {}});
+            return;
+        }
         d.notes.push_back(
             {temperature
                  ? fmt::format("gas laws, Arrhenius and radiation need absolute temperature: "
@@ -690,6 +1256,25 @@ class checker {
              {}});
     }
 
+    // "20" from R_20 or T_20 in the formula: the reference temperature a coefficient per
+    // degree is tabulated at; "T_ref" when the formula names none.
+    std::string reference_temperature() const {
+        std::string found;
+        visit_nodes([&](const syntax::expr_node& n) {
+            if (n.kind != expr_kind::symbol || !found.empty())
+                return;
+            const std::string_view name = text(n.range);
+            const std::size_t underscore = name.rfind('_');
+            if (underscore == std::string_view::npos || underscore + 1 >= name.size())
+                return;
+            const std::string_view digits = name.substr(underscore + 1);
+            if (std::all_of(digits.begin(), digits.end(),
+                            [](char c) { return c >= '0' && c <= '9'; }))
+                found = std::string(digits);
+        });
+        return found.empty() ? std::string("T_ref") : found;
+    }
+
     typed eval_product(std::uint32_t index) {
         const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
@@ -701,26 +1286,50 @@ class checker {
         typed result = eval(n);
         result.zero = false;
         std::uint32_t offset_node = n;
+        if (result.reading_or_difference)
+            result.offset = nullptr;
         // Spine nodes were pushed outermost first; the innermost applies first.
         for (std::size_t k = spine_.size(); k > spine_base; --k) {
             const syntax::expr_node& op = file_.nodes[spine_[k - 1]];
             const bool divided = op.kind == expr_kind::divide;
-            const typed t = eval(op.rhs);
+            typed t = eval(op.rhs);
+            if (t.reading_or_difference)
+                t.offset = nullptr;
+            if (divided)
+                for (std::uint32_t i = 0; i < t.literal_count; ++i)
+                    literals_[t.literal_begin + i].exponent =
+                        -literals_[t.literal_begin + i].exponent;
             // An offset value may be scaled by a pure number (the mean (T_1 + T_2)/2), not
-            // multiplied by a quantity.
-            if (result.known && t.known && (result.offset != nullptr || t.offset != nullptr) &&
-                !(result.offset != nullptr && t.numeric) &&
-                !(t.offset != nullptr && result.numeric && !divided)) {
-                const bool left = result.offset != nullptr;
-                report_offset(left ? offset_node : op.rhs, left ? *result.offset : *t.offset,
-                              divided ? "used in a quotient" : "multiplied");
+            // multiplied by a quantity, nor by a `?` coefficient (which has a dimension).
+            const auto scales_a_reading = [](const typed& reading, const typed& other) {
+                return reading.known && reading.offset != nullptr &&
+                       (other.known ? !other.numeric : other.inferred);
+            };
+            const bool left_off = scales_a_reading(result, t);
+            const bool right_off =
+                scales_a_reading(t, result) && !(result.known && result.numeric && !divided);
+            if (left_off || right_off) {
+                report_offset(left_off ? offset_node : op.rhs,
+                              left_off ? *result.offset : *t.offset,
+                              divided ? "used in a quotient" : "multiplied",
+                              left_off ? (t.known ? &t.dim : nullptr)
+                                       : (result.known ? &result.dim : nullptr));
                 spine_.resize(spine_base);
                 return unknown_type();
             }
             if (t.offset != nullptr) {
                 result.offset = t.offset;
+                result.origin = t.origin;
+                result.origin_tolerance = t.origin_tolerance;
                 offset_node = op.rhs;
             }
+            // A reading scaled by a number is still a reading; times a quantity it is not.
+            result.point = (result.point && t.numeric) || (t.point && result.numeric);
+            if (!result.point) {
+                result.origin = 0.0;
+                result.origin_tolerance = 0.0;
+            }
+            result.inferred = result.inferred || t.inferred;
             result.scale = divided ? result.scale / t.scale : result.scale * t.scale;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
@@ -738,7 +1347,7 @@ class checker {
         }
         spine_.resize(spine_base);
         if (!result.known)
-            return unknown_type();
+            return unknown_type(result.inferred);
         return result;
     }
 
@@ -755,9 +1364,17 @@ class checker {
                 {fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}, true});
             return unknown_type();
         }
+        // The exponent's own numbers are not factors of the power; the base's are, raised.
+        literals_.resize(base.literal_begin + base.literal_count);
+        if (exponent.value)
+            for (std::uint32_t i = 0; i < base.literal_count; ++i)
+                literals_[base.literal_begin + i].exponent *= exponent.value->to_double();
+        else
+            literals_.resize(base.literal_begin);
         if (!base.known || !exponent.known)
-            return unknown_type();
-        if (base.offset != nullptr && !(exponent.value && *exponent.value == rational(1))) {
+            return unknown_type(base.inferred || exponent.inferred);
+        if (base.offset != nullptr && !base.reading_or_difference &&
+            !(exponent.value && *exponent.value == rational(1))) {
             report_offset(base_node, *base.offset, "raised to a power");
             return unknown_type();
         }
@@ -822,12 +1439,29 @@ class checker {
     typed eval_call(const syntax::expr_node& n) {
         const span name_range = call_name_range(n);
         const std::string_view name = text(name_range);
+        const builtin_function* f = find_function(name);
+        const bool wants_number = f != nullptr && (f->rule == function_rule::dimensionless ||
+                                                   f->rule == function_rule::log_base);
+        const std::size_t literal_start = literals_.size();
         std::vector<operand> args;
         for (std::uint32_t i = 0; i < n.rhs; ++i) {
             const std::uint32_t node = file_.call_args[n.lhs + i];
+            const std::uint32_t saved = prefer_dimensionless_;
+            if (wants_number)
+                prefer_dimensionless_ = node;
             args.push_back({node, eval(node)});
+            prefer_dimensionless_ = saved;
         }
-        const builtin_function* f = find_function(name);
+        // Only a root or abs passes its argument's numbers on, as factors of the result.
+        const auto keep_first_argument_numbers = [&](double power) {
+            if (args.empty()) {
+                literals_.resize(literal_start);
+                return;
+            }
+            literals_.resize(args[0].type.literal_begin + args[0].type.literal_count);
+            for (std::uint32_t i = 0; i < args[0].type.literal_count; ++i)
+                literals_[args[0].type.literal_begin + i].exponent *= power;
+        };
         if (f == nullptr) {
             diagnostic& d = report(rules::unknown_function,
                                    fmt::format("'{}' is not a known function", name), name_range);
@@ -879,9 +1513,10 @@ class checker {
             std::all_of(args.begin(), args.end(), [](const operand& a) { return a.type.numeric; });
         switch (f->rule) {
         case function_rule::root:
+            keep_first_argument_numbers(f->power.to_double());
             if (!args[0].type.known)
-                return unknown_type();
-            if (args[0].type.offset != nullptr) {
+                return unknown_type(args[0].type.inferred);
+            if (args[0].type.offset != nullptr && !args[0].type.reading_or_difference) {
                 report_offset(args[0].node, *args[0].type.offset,
                               fmt::format("the argument of {}", f->name));
                 return unknown_type();
@@ -890,8 +1525,9 @@ class checker {
             result.scale = std::pow(args[0].type.scale, f->power.to_double());
             return result;
         case function_rule::same:
+            keep_first_argument_numbers(1.0);
             if (!args[0].type.known)
-                return unknown_type();
+                return unknown_type(args[0].type.inferred);
             result.dim = args[0].type.dim;
             result.scale = args[0].type.scale;
             result.offset = args[0].type.offset;
@@ -899,17 +1535,19 @@ class checker {
         case function_rule::dimensionless:
         case function_rule::log_base:
             for (const auto& a : args) {
-                if (a.type.known && a.type.offset != nullptr)
+                if (a.type.known && a.type.offset != nullptr && !a.type.reading_or_difference)
                     report_offset(a.node, *a.type.offset,
                                   fmt::format("the argument of {}", f->name));
                 else if (require_dimensionless(*f, a))
                     require_unit_free(*f, a);
             }
+            literals_.resize(literal_start);
             return result;
         case function_rule::angle_of:
         case function_rule::common: {
             const agreement a = find_agreement(args);
             if (!a.odd.empty()) {
+                literals_.resize(literal_start);
                 diagnostic& d =
                     report(rules::argument_mismatch,
                            fmt::format("the arguments of {} differ in dimension", f->name),
@@ -917,23 +1555,30 @@ class checker {
                 explain(d, args, a, "arguments");
                 return unknown_type();
             }
-            const bool scales_agree = check_scales(args, fmt::format("arguments of {}", f->name));
+            double unit = 1.0;
+            const bool scales_agree =
+                check_scales(args, fmt::format("arguments of {}", f->name), unit);
+            literals_.resize(literal_start);
             if (f->rule == function_rule::angle_of)
                 return result;
             if (!std::all_of(args.begin(), args.end(),
                              [](const operand& o) { return o.type.known; }))
                 return unknown_type();
             result.dim = a.reference.value_or(dimension{});
-            result.scale =
-                scales_agree ? first_scale(args) : std::numeric_limits<double>::quiet_NaN();
+            result.scale = scales_agree ? unit : std::numeric_limits<double>::quiet_NaN();
             result.offset = args[0].type.offset;
+            result.origin = args[0].type.origin;
+            result.origin_tolerance = args[0].type.origin_tolerance;
+            result.point = args[0].type.point;
             return result;
         }
         case function_rule::power:
             return apply_power(args[0].type, args[1].type, args[0].node, args[1].node);
         case function_rule::derivative:
+            literals_.resize(literal_start);
             return derivative(args);
         case function_rule::integral:
+            literals_.resize(literal_start);
             return integral(args);
         }
         return unknown_type();
@@ -942,13 +1587,22 @@ class checker {
     // A dimensionless argument written in mixed units (ln(p/p_ref) with p in kPa and p_ref in
     // Pa) is off by the factor between them.
     void require_unit_free(const builtin_function& f, const operand& a) {
-        if (!a.type.known || !std::isfinite(a.type.scale) || std::abs(a.type.scale - 1.0) <= 1e-9 ||
-            a.type.numeric || conversion_in_formula(1.0 / a.type.scale))
+        if (!a.type.known || !std::isfinite(a.type.scale) || a.type.numeric)
             return;
+        const std::array<scaled_operand, 2> parts{scaled(a.type, false), scaled_operand{}};
+        if (reconcile(parts).agree)
+            return;
+        for (std::size_t k = 0; k < parts[0].literals.size() && k < 10; ++k)
+            if ((looks_like_conversion(parts[0].literals[k], true) ||
+                 parts[0].literals[k].factor_like) &&
+                reconcile(parts, {0, k}).agree) {
+                report_inverted_factor(a, parts[0].literals[k]);
+                return;
+            }
         diagnostic& d = report(rules::unit_scale,
                                fmt::format("as written, the argument of {} is {} times its true "
                                            "value: its units do not cancel",
-                                           f.name, format_ratio(1.0 / a.type.scale)),
+                                           f.name, format_factor(1.0 / apparent_scale(parts[0]))),
                                file_.nodes[a.node].range);
         d.level = severity::warning;
         add_term(d, a);

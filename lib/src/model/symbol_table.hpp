@@ -25,6 +25,9 @@ struct symbol_entry {
     bool to_infer = false;                        // declared "X : ?"
     bool local = false; // declared in the file being checked, not in a dictionary
     bool used = false;
+    // A temperature or pressure in an absolute unit: a reading (1) or a difference (0), worked
+    // out from its name and description on first use; -1 until then.
+    std::int8_t reading = -1;
 };
 
 // Names to entries. Look-up is the hottest operation of a check (every symbol of every

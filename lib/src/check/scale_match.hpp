@@ -1,0 +1,61 @@
+// The scale of a term beside its dimension: the units' factor and the numbers written along its
+// multiplicative path, and which of those numbers reconcile one term's units with another's.
+#pragma once
+
+#include <cstdint>
+#include <span>
+#include <string>
+#include <string_view>
+
+namespace plumb {
+
+// A number that multiplies (exponent > 0) or divides (< 0) a term: physics (2, 8, π) or a
+// conversion factor (1000, 3.281). Which it is is decided where terms meet.
+struct scale_literal {
+    double value = 1.0;     // as written, without sign
+    double tolerance = 0.0; // relative: one unit in the last printed digit (7758 for 7758.37)
+    double exponent = 1.0;  // along the path: L/1000 gives -1, (L/1000)^2 gives -2
+    std::uint32_t node = 0; // where it is written, to mark it
+    std::int8_t power = 0;  // the power, when the value is a power of ten
+    bool power_of_ten = false;
+    bool factor_like = false;  // written to 3 or more digits (3.28, 5.615, 43560), as factors are
+    bool table_digits = false; // to 4 or more (3.281, 0.3048): precise enough to name a unit ratio
+};
+
+// One operand where terms meet: the SI value of one written unit of it, and its numbers.
+struct scaled_operand {
+    double scale = 1.0;
+    std::span<const scale_literal> literals;
+};
+
+// The literal's relative tolerance and how it is written, from its text ("8.34", "1e6").
+scale_literal read_literal(std::string_view text, double value, std::uint32_t node);
+
+// Whether the operands can agree: each one's value in a common unit, some of its numbers taken
+// as conversion factors. `flip` inverts one literal (operand index, literal index) first, to
+// ask whether a factor written the wrong way round explains a disagreement.
+struct flipped_literal {
+    std::size_t operand = static_cast<std::size_t>(-1);
+    std::size_t literal = 0;
+};
+struct reconciliation {
+    bool agree = false;
+    double unit = 1.0;          // the common unit's SI value (the reference's, as converted)
+    std::size_t reference = 0;  // the operand most others agree with
+    std::size_t odd = 0;        // the first that does not, when they disagree
+    bool used_literals = false; // some number was taken as a conversion
+};
+reconciliation reconcile(std::span<const scaled_operand> ops, flipped_literal flip = {});
+
+// The literal looks like a conversion (a power of ten of 100 or more either way, or the ratio of
+// two table units of one dimension written to 3 or more digits).
+bool looks_like_conversion(const scale_literal& l, bool allow_hundred);
+
+// The operand's value per SI unit once its conversion-like numbers are applied: what an
+// engineer reads the term as.
+double apparent_scale(const scaled_operand& op);
+
+// 1000, 0.001, 10⁶, 10⁻⁶, 0.0438126, 2.5 × 10⁷: as an engineer reads a factor.
+std::string format_factor(double factor);
+
+} // namespace plumb
