@@ -24,6 +24,9 @@ struct term {
     location where;
     std::string text; // the term as written (continuation lines folded)
     dimension dim;
+    // In a workbook, the cell or range the term names, when it names one.
+    std::string sheet = {};
+    std::string cell = {}; // A1 form, "C4" or "C4:C9"
 };
 
 // A secondary remark, optionally at a place of its own ("first declared here").

@@ -30,6 +30,12 @@ inline constexpr std::string_view offset_scale = "offset-scale";
 inline constexpr std::string_view unit_scale = "unit-scale";
 inline constexpr std::string_view inferred_dimension = "inferred-dimension";
 inline constexpr std::string_view inference_conflict = "inference-conflict";
+// Workbooks (.xlsx, .ods):
+inline constexpr std::string_view result_unit = "result-unit";
+inline constexpr std::string_view mixed_range = "mixed-range";
+inline constexpr std::string_view no_unit = "no-unit";
+inline constexpr std::string_view circular_reference = "circular-reference";
+inline constexpr std::string_view not_checked = "not-checked";
 
 struct rule_info {
     std::string_view id;

@@ -3,10 +3,11 @@
 #include "check/edit_distance.hpp"
 #include "check/formula_checker.hpp"
 #include "check/inference.hpp"
+#include "groups/studies.hpp"
 #include "notation/parser.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
-#include "groups/studies.hpp"
+#include "sheets/workbook_file.hpp"
 
 #include <algorithm>
 #include <array>
@@ -571,7 +572,10 @@ void collect_plumb_files(const fs::path& dir, std::vector<fs::path>& out, sessio
             break;
         }
         std::error_code type_ec;
-        if (it->is_regular_file(type_ec) && it->path().extension() == ".plumb")
+        // A workbook's sidecar is read with its workbook, never checked on its own.
+        if (it->is_regular_file(type_ec) &&
+            ((it->path().extension() == ".plumb" && !sheets::is_sidecar_path(it->path())) ||
+             sheets::is_workbook_path(it->path())))
             found.push_back(it->path());
     }
     std::sort(found.begin(), found.end());
@@ -591,10 +595,15 @@ check_report check_paths(const std::vector<fs::path>& paths, const check_options
         else
             files.push_back(p);
     }
+    std::vector<fs::path> workbooks;
     for (const auto& p : files)
-        if (loaded_file* f = s.load(p, {}))
+        if (sheets::is_workbook_path(p))
+            workbooks.push_back(p);
+        else if (loaded_file* f = s.load(p, {}))
             s.check(f);
     s.finish();
+    for (const auto& p : workbooks)
+        sheets::check_workbook_file(p, options, report);
     return report;
 }
 

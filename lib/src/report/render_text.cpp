@@ -117,7 +117,10 @@ void render_snippet(std::string& out, const diagnostic& d, const painter& paint)
         while (!marks.empty() && marks.back() == ' ')
             marks.pop_back();
     }
-    const std::string gutter = fmt::format("{:>5}", start.line);
+    // A workbook's formula is shown under its cell, not a line number of plumb's listing.
+    const cell_place* place = file.cell_at(d.where.range.begin);
+    const std::string gutter =
+        place != nullptr ? fmt::format("{:>5}", place->cell) : fmt::format("{:>5}", start.line);
     out += fmt::format("{} | {}{}{}\n", gutter, prefix, text, suffix);
     out += fmt::format("{} | {}{}\n", std::string(gutter.size(), ' '), prefix.empty() ? "" : " ",
                        paint(green, marks));
@@ -134,7 +137,10 @@ std::string_view caution_text() {
 std::string render_text(const diagnostic& d, const text_style& style) {
     const painter paint{style.colour};
     std::string out;
-    if (d.where.file != nullptr) {
+    if (d.where.file != nullptr && d.where.file->cell_at(d.where.range.begin) != nullptr) {
+        out += paint(bold, fmt::format("{}:{}:", d.where.file->path(),
+                                       cell_text(*d.where.file->cell_at(d.where.range.begin))));
+    } else if (d.where.file != nullptr) {
         const line_column p = d.where.file->position(d.where.range.begin);
         out += paint(bold, fmt::format("{}:{}:{}:", d.where.file->path(), p.line, p.column));
     } else {
@@ -177,6 +183,11 @@ std::string render_text(const check_report& report, const text_style& style) {
     };
     const std::string scope = fmt::format("{} in {}", plural(report.formulas_checked, "formula"),
                                           plural(report.files_checked, "file"));
+    if (report.workbooks_checked > 0)
+        out +=
+            fmt::format("{} {} checked, {} not checked, {} without units\n", paint(bold, "plumb:"),
+                        plural(report.cells_checked, "formula cell"), report.cells_not_checked,
+                        plural(report.inputs_without_units, "input cell"));
     if (errors == 0 && warnings == 0)
         out += fmt::format("{} {}: no dimensional inconsistency found\n", paint(bold, "plumb:"),
                            scope);
