@@ -4,6 +4,7 @@
 #include "plumb/a1_formula.hpp"
 #include "plumb/check.hpp"
 #include "plumb/openformula.hpp"
+#include "plumb/render.hpp"
 #include "sheets/a1_front_end.hpp"
 #include "sheets/readers.hpp"
 #include "sheets/unit_text.hpp"
@@ -221,4 +222,10 @@ TEST_CASE("sheets: a bad workbook is exit status 2 and the good one beside it is
     CHECK(report.input_failed);
     CHECK(report.workbooks_checked == 1);
     CHECK(report.cells_checked > 20);
+    // Findings are placed by sheet and cell, in text and in JSON.
+    const std::string text = render_text(report);
+    CHECK(text.find("pump-sizing.xlsx:Pump!C14: error:") != std::string::npos);
+    const std::string json = render_json(report);
+    CHECK(json.find("\"sheet\": \"Pump\", \"cell\": \"C14\"") != std::string::npos);
+    CHECK(json.find("\"inputs_without_units\": 1") != std::string::npos);
 }

@@ -138,3 +138,40 @@ BOOKS = {
         ],
     },
 }
+
+# The demo workbook (corpus/demo-workbook): the Corran Vale booster station of corpus/demo,
+# as its spreadsheet calc, with three mistakes of the kind such sheets carry.
+STATION = {
+    "A1": "Corran Vale booster station: duty point check (invented scenario)",
+    "A2": "Item", "B2": "Symbol", "C2": "Value", "D2": "Unit",
+    "A3": "Duty flow", "B3": "Q", "C3": 62, "D3": "L/s",
+    "A4": "Rising main bore", "B4": "D", "C4": 306, "D4": "mm",
+    "A5": "Rising main length", "B5": "L", "C5": 1.85, "D5": "km",
+    "A6": "Darcy friction factor", "B6": "f", "C6": 0.0165, "D6": "-",
+    "A7": "Static lift", "B7": "H_st", "C7": 57, "D7": "m",
+    "A8": "Standard gravity", "B8": "g", "C8": 9.80665, "D8": "m/s2",
+    "A9": "Water density", "B9": "rho", "C9": 999.1, "D9": "kg/m³",
+    "A10": "Bore area", "B10": "A", "C10": "=PI()*(C4/1000)^2/4", "D10": "m²",
+    "A11": "Velocity", "B11": "V", "C11": "=C3/1000/C10", "D11": "m/s",
+    "A12": "Friction head", "B12": "h_f", "C12": "=C6*(C5*1000)/(C4/1000)*C11^2/(2*C8)",
+    "D12": "m",
+    "A13": "Total head", "B13": "H", "C13": "=C7+C12", "D13": "m",
+    "A14": "Hydraulic power", "B14": "P_h", "C14": "=C9*C8*C3*C13/1000", "D14": "kW",
+    "A15": "Pump efficiency", "B15": "eta", "C15": 0.78, "D15": "-",
+    "A16": "Shaft power", "B16": "P_s", "C16": "=C14/C15", "D16": "kW",
+    "A17": "Motor rating", "B17": "P_m", "C17": 55, "D17": "kW",
+    "A18": "Motor loading", "B18": "x", "C18": "=C16/C17", "D18": "-",
+    "A19": "Suction gauge", "B19": "p_s", "C19": 35, "D19": "kPa(g)",
+    "A20": "Vapour pressure", "B20": "p_v", "C20": 1.7, "D20": "kPa",
+    "A21": "NPSH available", "B21": "NPSH_a", "C21": "=(C19-C20)*1000/(C9*C8)", "D21": "m",
+    "A23": "Period", "B23": "Flow [L/s]", "C23": "Duration [h]", "D23": "Volume [m3]",
+    "A24": "Night", "B24": 48, "C24": 8, "D24": "=B24*C24*3.6",
+    "A25": "Day", "B25": 62, "C25": 12, "D25": "=B25*C25*3.6",
+    "A26": "Evening", "B26": 58, "C26": 4, "D26": "=B26*C26*3600",
+    "A27": "Day total", "D27": "=SUM(D24:D26)",
+}
+BOOKS["corran-vale-station"] = {
+    "folder": "../demo-workbook",
+    "sheets": [("Duty", STATION)],
+    "expect": ["Duty!C14 unit-scale", "Duty!C21 offset-scale", "Duty!D26 unit-scale"],
+}

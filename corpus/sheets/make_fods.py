@@ -88,8 +88,11 @@ def book_xml(book):
 
 def main(out_dir):
     for name, book in books.BOOKS.items():
+        folder = book.get("folder", ".")
         with open("%s/%s.fods" % (out_dir, name), "w", encoding="utf-8") as f:
             f.write(book_xml(book))
+        with open("%s/%s.folder" % (out_dir, name), "w", encoding="utf-8") as f:
+            f.write(folder)
         with open("%s/%s.expect" % (out_dir, name), "w", encoding="utf-8") as f:
             f.write("# sheet!cell rule: the findings plumb must report, and no others\n")
             for line in sorted(book["expect"]):

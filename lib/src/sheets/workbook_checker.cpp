@@ -522,23 +522,30 @@ class workbook_checker {
         return it == range_cache_.end() ? cell_value{} : it->second;
     }
 
-    // The numbers multiplied into the formula's result (divisors inverted), outermost
-    // product only: a conversion factor written into a formula stands there.
-    void top_factors(std::uint32_t node, bool inverted, std::vector<double>& out) const {
+    // The numbers multiplied into the formula's result, each raised to the power it enters
+    // with (a divisor to -1, (B4/1000)^2 to -2): the outermost product only, where a
+    // conversion factor written into a formula stands.
+    void top_factors(std::uint32_t node, double exponent, std::vector<double>& out) const {
         const auto& n = lowered_.tree.nodes[node];
         switch (n.kind) {
         case syntax::expr_kind::group:
-            top_factors(n.lhs, inverted, out);
+            top_factors(n.lhs, exponent, out);
             return;
         case syntax::expr_kind::multiply:
         case syntax::expr_kind::divide:
-            top_factors(n.lhs, inverted, out);
-            top_factors(n.rhs, n.kind == syntax::expr_kind::divide ? !inverted : inverted, out);
+            top_factors(n.lhs, exponent, out);
+            top_factors(n.rhs, n.kind == syntax::expr_kind::divide ? -exponent : exponent, out);
+            return;
+        case syntax::expr_kind::power:
+            if (lowered_.tree.nodes[n.rhs].kind == syntax::expr_kind::number)
+                if (const auto e =
+                        rational::parse(listing_->text(lowered_.tree.nodes[n.rhs].range)))
+                    top_factors(n.lhs, exponent * e->to_double(), out);
             return;
         case syntax::expr_kind::number: {
             const auto v = rational::parse(listing_->text(n.range));
             if (v && !v->is_zero() && out.size() < 32)
-                out.push_back(inverted ? 1.0 / v->to_double() : v->to_double());
+                out.push_back(std::pow(v->to_double(), exponent));
             return;
         }
         default:
@@ -607,7 +614,7 @@ class workbook_checker {
         if (!std::isfinite(needed) || std::abs(needed - 1.0) <= 1e-9)
             return;
         std::vector<double> factors;
-        top_factors(lowered_.tree.sides[formula.first_side].root, false, factors);
+        top_factors(lowered_.tree.sides[formula.first_side].root, 1.0, factors);
         // Published factors are often rounded to four significant figures (3.281, 0.0283):
         // common practice; a relative 1e-3 accepts those and nothing a unit slip gives.
         const auto near = [](double a, double b) { return std::abs(a / b - 1.0) <= 1e-3; };
@@ -624,22 +631,32 @@ class workbook_checker {
         if (supplies(needed))
             return;
         const bool reversed = supplies(1.0 / needed);
+        // How far off the value shown is: after the factors already written, when what is
+        // left is a clean power of ten (a missed "/1000"); otherwise the whole ratio.
+        double written_product = 1.0;
+        for (const double x : factors)
+            written_product *= x;
+        const double left = needed / written_product;
+        const double decades = std::log10(std::abs(left));
+        const double off =
+            std::abs(decades - std::round(decades)) < 1e-9 && std::round(decades) != 0 ? left
+                                                                                       : needed;
         diagnostic& d = report(
             severity::error, rules::unit_scale,
-            reversed ? fmt::format("the conversion factor in this formula is the wrong way round: "
-                                   "to give {} it must multiply by {:.6g}, but it multiplies by "
-                                   "{:.6g}",
-                                   written.unit.text, needed, 1.0 / needed)
-                     : fmt::format("as written, this formula gives a number in units {:.6g} times "
-                                   "the size of {}, the unit written for its cell: the value "
-                                   "shown is {:.6g} times too {}",
-                                   needed, where_unit, needed >= 1 ? needed : 1.0 / needed,
-                                   needed >= 1 ? "small" : "large"),
+            reversed
+                ? fmt::format("the conversion factor in this formula is the wrong way round: "
+                              "to give {} it must multiply by {:.6g}, but it multiplies by "
+                              "{:.6g}",
+                              written.unit.text, needed, 1.0 / needed)
+                : fmt::format("as written, this formula does not give {}, the unit written "
+                              "for its cell: the value shown is {:.6g} times too {}",
+                              where_unit, off >= 1 ? off : 1.0 / off, off >= 1 ? "small" : "large"),
             formula.range);
         if (!reversed)
-            d.notes.push_back({fmt::format("multiply by {:.6g} in the formula, or write the unit "
-                                           "its inputs give",
-                                           needed),
+            d.notes.push_back({fmt::format("its inputs give numbers in units of {:.6g} {}; "
+                                           "convert them in the formula, or write the unit they "
+                                           "give",
+                                           needed, written.unit.text),
                                {}});
         add_input_notes(d, f);
     }
