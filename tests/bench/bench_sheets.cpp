@@ -3,7 +3,9 @@
 // folder, and prints how long `check_paths` takes on it. Figures only; it never fails on time.
 #include "plumb/check.hpp"
 
+#include <algorithm>
 #include <chrono>
+#include <cstdlib>
 #include <filesystem>
 #include <fmt/format.h>
 #include <fstream>
@@ -33,7 +35,8 @@ std::string zip_parts(const std::vector<std::pair<std::string, std::string>>& pa
 }
 
 // Rows of: A flow [L/s] input, B diameter [mm] input, C velocity =A/1000/(PI()*(B/1000)^2/4),
-// D head loss =0.02*100/(B/1000)*C^2/(2*9.81), E sum =D+D(previous row)... 4 formulas a row.
+// D head loss =0.02*G/(B/1000)*C^2/(2*H) with G the length [m] and H gravity [m/s2],
+// E the running sum of D, F =A/1000: four formulas a row.
 std::string sheet_xml(int rows) {
     std::string x = "<?xml version=\"1.0\" encoding=\"UTF-8\"?><worksheet xmlns=\"http://"
                     "schemas.openxmlformats.org/spreadsheetml/2006/main\"><sheetData>";
@@ -42,12 +45,15 @@ std::string sheet_xml(int rows) {
          "<c r=\"C1\" t=\"inlineStr\"><is><t>V [m/s]</t></is></c>"
          "<c r=\"D1\" t=\"inlineStr\"><is><t>h_f [m]</t></is></c>"
          "<c r=\"E1\" t=\"inlineStr\"><is><t>Sum h_f [m]</t></is></c>"
-         "<c r=\"F1\" t=\"inlineStr\"><is><t>Q [m3/s]</t></is></c></row>";
+         "<c r=\"F1\" t=\"inlineStr\"><is><t>Q [m3/s]</t></is></c>"
+         "<c r=\"G1\" t=\"inlineStr\"><is><t>L [m]</t></is></c>"
+         "<c r=\"H1\" t=\"inlineStr\"><is><t>g [m/s2]</t></is></c></row>";
     for (int r = 2; r < rows + 2; ++r) {
         x += fmt::format("<row r=\"{0}\"><c r=\"A{0}\"><v>{1}</v></c><c r=\"B{0}\"><v>{2}</v></c>"
                          "<c r=\"C{0}\"><f>F{0}/(PI()*(B{0}/1000)^2/4)</f></c>"
-                         "<c r=\"D{0}\"><f>0.02*100/(B{0}/1000)*C{0}^2/(2*9.81)</f></c>"
-                         "<c r=\"E{0}\"><f>{3}</f></c><c r=\"F{0}\"><f>A{0}/1000</f></c></row>",
+                         "<c r=\"D{0}\"><f>0.02*G{0}/(B{0}/1000)*C{0}^2/(2*H{0})</f></c>"
+                         "<c r=\"E{0}\"><f>{3}</f></c><c r=\"F{0}\"><f>A{0}/1000</f></c>"
+                         "<c r=\"G{0}\"><v>100</v></c><c r=\"H{0}\"><v>9.80665</v></c></row>",
                          r, 10 + r % 50, 100 + r % 200,
                          r == 2 ? std::string("D2") : fmt::format("E{}+D{}", r - 1, r));
     }
@@ -56,8 +62,9 @@ std::string sheet_xml(int rows) {
 
 } // namespace
 
-int main() {
-    constexpr int rows = 25000; // four formula cells a row: 100 000
+int main(int argc, char** argv) {
+    // Four formula cells a row: 100 000. `plumb_bench_sheets ROWS PATH` keeps the workbook.
+    const int rows = argc > 1 ? std::max(1, std::atoi(argv[1])) : 25000;
     const std::string book = zip_parts({
         {"[Content_Types].xml",
          "<Types xmlns=\"http://schemas.openxmlformats.org/package/2006/content-types\">"
@@ -80,7 +87,10 @@ int main() {
         const std::chrono::duration<double> took = std::chrono::steady_clock::now() - start;
         best = std::min(best, took.count());
     }
-    std::filesystem::remove(path);
+    if (argc > 2)
+        std::filesystem::rename(path, argv[2]);
+    else
+        std::filesystem::remove(path);
     fmt::print(
         "workbook: {} formula cells checked, {} not checked, {} findings, {:.1f} KiB packed\n",
         report.cells_checked, report.cells_not_checked, report.diagnostics.size(),

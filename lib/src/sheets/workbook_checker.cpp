@@ -35,8 +35,13 @@ struct cell_value {
     double scale = 1.0;
     const unit_definition* offset = nullptr;
     std::optional<rational> value;
-    std::string unit_text; // as written, for notes; empty when computed
-    std::string origin;
+    const cell_unit* unit = nullptr; // the unit written for it; null when computed
+
+    [[nodiscard]] std::string describe_for(const std::string& name) const {
+        if (unit == nullptr)
+            return fmt::format("{} is {}, computed by its formula", name, describe(*dim));
+        return fmt::format("{} is in {}, unit {}", name, unit->unit.text, unit->origin);
+    }
 };
 
 constexpr std::uint64_t book_key(std::size_t sheet, cell_address a) {
@@ -95,6 +100,12 @@ class workbook_checker {
 
     void collect_formulas() {
         text_rows_.resize(book_.sheets.size());
+        std::size_t cells = 0;
+        for (const auto& sh : book_.sheets)
+            cells += sh.cells.size();
+        formula_at_.reserve(cells);
+        formulas_.reserve(cells);
+        unit_cache_.reserve(cells);
         for (std::size_t s = 0; s < book_.sheets.size(); ++s)
             for (const auto& c : book_.sheets[s].cells) {
                 if (c.kind == cell_kind::formula) {
@@ -264,13 +275,14 @@ class workbook_checker {
 
     // ---- Units of cells -------------------------------------------------------------------
 
-    std::optional<cell_unit> unit_of(std::size_t s, cell_address a) {
+    // Cached: a unit is read once per cell however many formulas use it. The map's nodes
+    // never move, so the pointer stays valid.
+    const cell_unit* unit_of(std::size_t s, cell_address a) {
         const std::uint64_t key = book_key(s, a);
-        if (const auto it = unit_cache_.find(key); it != unit_cache_.end())
-            return it->second;
-        std::optional<cell_unit> u = discover_unit(s, a);
-        unit_cache_.emplace(key, u);
-        return u;
+        auto it = unit_cache_.find(key);
+        if (it == unit_cache_.end())
+            it = unit_cache_.emplace(key, discover_unit(s, a)).first;
+        return it->second ? &*it->second : nullptr;
     }
 
     std::optional<cell_unit> discover_unit(std::size_t s, cell_address a) const {
@@ -319,8 +331,7 @@ class workbook_checker {
         v.dim = u.unit.dim;
         v.scale = u.unit.scale;
         v.offset = u.unit.offset;
-        v.unit_text = u.unit.text;
-        v.origin = u.origin;
+        v.unit = &u;
         return v;
     }
 
@@ -336,8 +347,8 @@ class workbook_checker {
         }
         if (c.kind != cell_kind::number)
             return {};
-        const auto u = unit_of(s, c.at);
-        if (!u) {
+        const cell_unit* u = unit_of(s, c.at);
+        if (u == nullptr) {
             auto& users = unitless_[book_key(s, c.at)];
             if (users.empty() || users.back() != current_)
                 users.push_back(current_);
@@ -382,8 +393,6 @@ class workbook_checker {
             if (odd == nullptr) {
                 result = members.front().v;
                 result.value.reset();
-                if (!r.area.single())
-                    result.origin = fmt::format("{} ({} cells)", result.origin, members.size());
             } else {
                 const member& first = members.front();
                 const bool same_dim = *odd->v.dim == *first.v.dim;
@@ -395,13 +404,7 @@ class workbook_checker {
                                 a1_name(first.c->at), a1_name(odd->c->at)),
                     r.where);
                 for (const member* m : {&first, odd}) {
-                    d.notes.push_back(
-                        {fmt::format(
-                             "{} is {}{}", a1_name(m->c->at), describe(*m->v.dim),
-                             m->v.unit_text.empty()
-                                 ? std::string(" (computed)")
-                                 : fmt::format(", in {} ({})", m->v.unit_text, m->v.origin)),
-                         {}});
+                    d.notes.push_back({m->v.describe_for(a1_name(m->c->at)), {}});
                 }
                 reported = true;
             }
@@ -415,8 +418,8 @@ class workbook_checker {
     void check_cell(std::uint32_t id) {
         current_ = id;
         formula_cell& f = formulas_[id];
-        const auto written = unit_of(f.sheet, f.source->at);
-        if (written)
+        const cell_unit* written = unit_of(f.sheet, f.source->at);
+        if (written != nullptr)
             f.result = from_unit(*written); // downstream cells take the written unit
         if (f.lowered.formula == syntax::no_index || f.in_cycle) {
             ++report_.cells_not_checked;
@@ -461,7 +464,6 @@ class workbook_checker {
             f.result.dim = computed->dim;
             f.result.scale = computed->scale;
             f.result.offset = computed->offset;
-            f.result.origin = "computed by its formula";
             return;
         }
         if (out_.size() == before && !range_reported)
@@ -496,10 +498,7 @@ class workbook_checker {
                     continue;
                 ++noted;
                 const std::string name = a1_name(r.area);
-                const std::string remark =
-                    v.unit_text.empty()
-                        ? fmt::format("{} is {}, {}", name, describe(*v.dim), v.origin)
-                        : fmt::format("{} is in {}, unit {}", name, v.unit_text, v.origin);
+                const std::string remark = v.describe_for(name);
                 if (std::none_of(d.notes.begin(), d.notes.end(),
                                  [&](const note& n) { return n.message == remark; }))
                     d.notes.push_back({remark, {}});
@@ -674,11 +673,7 @@ class workbook_checker {
             if (!v.dim)
                 continue;
             ++listed;
-            d.notes.push_back(
-                {v.unit_text.empty()
-                     ? fmt::format("{} is {}, {}", name, describe(*v.dim), v.origin)
-                     : fmt::format("{} is in {}, unit {}", name, v.unit_text, v.origin),
-                 {}});
+            d.notes.push_back({v.describe_for(name), {}});
         }
     }
 
