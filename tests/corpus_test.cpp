@@ -27,10 +27,28 @@ std::string key(const fs::path& file, std::uint32_t line, std::string_view rule)
     return fmt::format("{}:{}: {}", fs::relative(file, corpus_dir).generic_string(), line, rule);
 }
 
+bool is_sidecar(const fs::path& p) {
+    const std::string name = p.filename().string();
+    return name.size() > 12 && name.substr(name.size() - 12) == ".cells.plumb";
+}
+
 std::vector<fs::path> corpus_files() {
     std::vector<fs::path> files;
     for (const auto& entry : fs::recursive_directory_iterator(corpus_dir))
-        if (entry.is_regular_file() && entry.path().extension() == ".plumb")
+        if (entry.is_regular_file() && entry.path().extension() == ".plumb" &&
+            !is_sidecar(entry.path()))
+            files.push_back(entry.path());
+    std::sort(files.begin(), files.end());
+    return files;
+}
+
+// Workbooks saved by LibreOffice (corpus/sheets/make-workbooks.sh), each .xlsx and .ods with
+// the findings its book.expect records as "Sheet!Cell rule".
+std::vector<fs::path> corpus_workbooks() {
+    std::vector<fs::path> files;
+    for (const auto& entry : fs::recursive_directory_iterator(corpus_dir))
+        if (entry.is_regular_file() &&
+            (entry.path().extension() == ".xlsx" || entry.path().extension() == ".ods"))
             files.push_back(entry.path());
     std::sort(files.begin(), files.end());
     return files;
@@ -58,6 +76,21 @@ finding_set expected_findings() {
                     expected.insert(key(file, n, trim(id)));
         }
     }
+    for (const auto& book : corpus_workbooks()) {
+        fs::path record = book;
+        record.replace_extension(".expect");
+        std::ifstream in(record);
+        REQUIRE_MESSAGE(in, "no " << record.string());
+        std::string line;
+        while (std::getline(in, line)) {
+            line = trim(line);
+            if (line.empty() || line[0] == '#')
+                continue;
+            const auto space = line.find(' ');
+            expected.insert(fmt::format("{}:{} {}", fs::relative(book, corpus_dir).generic_string(),
+                                        line.substr(0, space), trim(line.substr(space + 1))));
+        }
+    }
     return expected;
 }
 
@@ -78,14 +111,19 @@ TEST_CASE("corpus: every finding is recorded with '# expect:' and every record i
     finding_set actual;
     for (const auto& d : report.diagnostics) {
         REQUIRE_MESSAGE(d.where.file != nullptr, d.message);
-        actual.insert(
-            key(d.where.file->path(), d.where.file->position(d.where.range.begin).line, d.rule));
+        if (const plumb::cell_place* cell = d.where.file->cell_at(d.where.range.begin))
+            actual.insert(fmt::format(
+                "{}:{} {}", fs::relative(d.where.file->path(), corpus_dir).generic_string(),
+                plumb::cell_text(*cell), d.rule));
+        else
+            actual.insert(key(d.where.file->path(),
+                              d.where.file->position(d.where.range.begin).line, d.rule));
     }
     const finding_set expected = expected_findings();
     INFO("reported but not expected:\n" << difference(actual, expected));
     INFO("expected but not reported:\n" << difference(expected, actual));
     CHECK(actual == expected);
-    CHECK(report.files_checked == corpus_files().size());
+    CHECK(report.files_checked == corpus_files().size() + corpus_workbooks().size());
 }
 
 TEST_CASE("corpus: published formulas name their source and there are at least 40 of them") {

@@ -78,6 +78,13 @@ struct check_report {
     std::size_t files_checked = 0;
     std::size_t formulas_checked = 0;
     std::size_t bytes_checked = 0;
+    // Workbooks (.xlsx, .ods): formula cells checked, formula cells that could not be
+    // (a function plumb does not know, a circular reference...), and input cells that feed
+    // formulas but have no unit.
+    std::size_t workbooks_checked = 0;
+    std::size_t cells_checked = 0;
+    std::size_t cells_not_checked = 0;
+    std::size_t inputs_without_units = 0;
     // True when a path could not be read or a file could not be parsed (exit status 2).
     bool input_failed = false;
 
@@ -86,8 +93,9 @@ struct check_report {
     [[nodiscard]] std::size_t count_accepted() const;
 };
 
-// Checks .plumb files; a directory is searched recursively for *.plumb, and for Markdown
-// notes (*.md) holding ```plumb blocks, in sorted order.
+// Checks .plumb files, Markdown notes (*.md) holding ```plumb blocks, and .xlsx/.ods
+// workbooks; a directory is searched recursively for them, in sorted order. A workbook's
+// sidecar (book.cells.plumb beside book.xlsx) is read with its workbook, not checked alone.
 check_report check_paths(const std::vector<std::filesystem::path>& paths,
                          const check_options& options = {});
 

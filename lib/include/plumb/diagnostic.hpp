@@ -25,6 +25,9 @@ struct term {
     std::string text; // the term as written (continuation lines folded)
     dimension dim;
     bool differs = false; // the odd one out: its dimension does not match the others'
+    // In a workbook, the cell or range the term names, when it names one.
+    std::string sheet = {};
+    std::string cell = {}; // A1 form, "C4" or "C4:C9"
 };
 
 // A secondary remark, optionally at a place of its own ("first declared here").

@@ -33,6 +33,12 @@ inline constexpr std::string_view inference_conflict = "inference-conflict";
 inline constexpr std::string_view acceptance_problem = "acceptance-problem";
 inline constexpr std::string_view stale_acceptance = "stale-acceptance";
 inline constexpr std::string_view coefficient_mismatch = "coefficient-mismatch";
+// Workbooks (.xlsx, .ods):
+inline constexpr std::string_view result_unit = "result-unit";
+inline constexpr std::string_view mixed_range = "mixed-range";
+inline constexpr std::string_view no_unit = "no-unit";
+inline constexpr std::string_view circular_reference = "circular-reference";
+inline constexpr std::string_view not_checked = "not-checked";
 
 struct rule_info {
     std::string_view id;

@@ -19,6 +19,12 @@ struct line_column {
     std::uint32_t column = 1; // 1-based, in characters (UTF-8 code points), as editors count
 };
 
+// Where a line of a workbook's formula listing stands in the workbook.
+struct cell_place {
+    std::string sheet;
+    std::string cell; // A1 form, "C44"
+};
+
 class source_file {
   public:
     source_file(std::string path, std::string text);
@@ -40,11 +46,21 @@ class source_file {
         return static_cast<std::uint32_t>(line_starts_.size());
     }
 
+    // A workbook's listing has one formula (or input value) per line, each from a cell;
+    // findings in it are placed by sheet and cell rather than by line and column.
+    void set_cell_places(std::vector<cell_place> places) { cell_places_ = std::move(places); }
+    // The cell of the line holding `byte_offset`; null for an ordinary file.
+    [[nodiscard]] const cell_place* cell_at(std::uint32_t byte_offset) const;
+
   private:
     std::string path_;
     std::string text_;
     std::vector<std::uint32_t> line_starts_;
+    std::vector<cell_place> cell_places_;
 };
+
+// "Pump!C44", "'Pump data'!C44": a cell as a spreadsheet user writes it.
+std::string cell_text(const cell_place& place);
 
 // Source text shown on one line: continuation breaks and their comments folded, runs of
 // blanks squeezed to one space. Messages quote terms this way.

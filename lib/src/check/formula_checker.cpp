@@ -12,6 +12,7 @@
 #include <cmath>
 #include <fmt/format.h>
 #include <limits>
+#include <numbers>
 #include <span>
 
 namespace plumb {
@@ -277,6 +278,10 @@ class checker {
             // Its dimension is inferred afterwards, not checked here; the rules that do not
             // need it still apply around it.
             return unknown_type(true);
+        case expr_kind::reference:
+            return eval_reference(n);
+        case expr_kind::compare:
+            return eval_compare(n);
         }
         return unknown_type();
     }
@@ -346,6 +351,16 @@ class checker {
     }
 
     std::string display_text(span s) const { return single_line(file_.source->text(s)); }
+
+    // A spreadsheet formula: one side, whose type the front end compares with the unit
+    // written beside its cell.
+    std::optional<value_type> check_value(const syntax::formula& f) {
+        current_ = &f;
+        const typed t = eval(file_.sides[f.first_side].root);
+        if (!t.known)
+            return std::nullopt;
+        return value_type{t.dim, t.scale, t.offset, t.zero};
+    }
 
   private:
     const syntax::parsed_file& file_;
@@ -1184,7 +1199,8 @@ class checker {
                 for (std::uint32_t i = 0; i < n.rhs; ++i)
                     stack.push_back(file_.call_args[n.lhs + i]);
             } else if (n.kind != expr_kind::number && n.kind != expr_kind::pi &&
-                       n.kind != expr_kind::quantity && n.kind != expr_kind::inferred) {
+                       n.kind != expr_kind::quantity && n.kind != expr_kind::inferred &&
+                       n.kind != expr_kind::reference) {
                 if (n.rhs != syntax::no_index)
                     stack.push_back(n.rhs);
                 if (n.lhs != syntax::no_index)
@@ -1207,7 +1223,7 @@ class checker {
                     stack.push_back(file_.call_args[n.lhs + i]);
             } else if (n.kind != expr_kind::number && n.kind != expr_kind::pi &&
                        n.kind != expr_kind::symbol && n.kind != expr_kind::quantity &&
-                       n.kind != expr_kind::inferred) {
+                       n.kind != expr_kind::inferred && n.kind != expr_kind::reference) {
                 if (n.rhs != syntax::no_index)
                     stack.push_back(n.rhs);
                 if (n.lhs != syntax::no_index)
@@ -1439,7 +1455,8 @@ class checker {
     typed eval_call(const syntax::expr_node& n) {
         const span name_range = call_name_range(n);
         const std::string_view name = text(name_range);
-        const builtin_function* f = find_function(name);
+        const bool sheet = file_.functions == syntax::function_names::spreadsheet;
+        const builtin_function* f = sheet ? find_sheet_function(name) : find_function(name);
         const bool wants_number = f != nullptr && (f->rule == function_rule::dimensionless ||
                                                    f->rule == function_rule::log_base);
         const std::size_t literal_start = literals_.size();
@@ -1468,7 +1485,7 @@ class checker {
             std::string_view best;
             const std::size_t allowed = std::max<std::size_t>(1, name.size() / 3);
             std::size_t best_distance = allowed + 1;
-            for (const auto& candidate : builtin_functions()) {
+            for (const auto& candidate : sheet ? sheet_functions() : builtin_functions()) {
                 const std::size_t dist = edit_distance(name, candidate.name, allowed);
                 if (dist < best_distance) {
                     best_distance = dist;
@@ -1580,8 +1597,139 @@ class checker {
         case function_rule::integral:
             literals_.resize(literal_start);
             return integral(args);
+        default:
+            return eval_sheet_call(*f, args);
         }
         return unknown_type();
+    }
+
+    // ---- Spreadsheet operands and functions ----------------------------------------------
+
+    typed eval_reference(const syntax::expr_node& n) const {
+        const syntax::reference_value& r = file_.references[n.lhs];
+        if (!r.dim)
+            return unknown_type();
+        typed t;
+        t.dim = *r.dim;
+        t.scale = r.scale;
+        t.offset = r.offset;
+        t.value = r.value;
+        // A cell holds a reading, as a declared temperature or pressure does; a cell has no
+        // name to say it is a difference, so a gauge cell less an absolute one is reported.
+        if (t.offset != nullptr) {
+            t.origin = t.offset->offset;
+            t.point = true;
+        } else {
+            t.point = t.dim == temperature_dimension() || t.dim == pressure_dimension();
+        }
+        return t;
+    }
+
+    // A comparison inside a formula (IF's condition): its sides agree as a limit's do.
+    typed eval_compare(const syntax::expr_node& n) {
+        const std::size_t base = operands_.size();
+        operands_.push_back({n.lhs, eval(n.lhs)});
+        operands_.push_back({n.rhs, eval(n.rhs)});
+        const scratch_region region(operands_, base);
+        const std::span<const operand> sides = region.view();
+        const agreement a = find_agreement(sides);
+        if (!a.odd.empty()) {
+            diagnostic& d =
+                report(rules::side_mismatch, "the two sides of this comparison differ in dimension",
+                       file_.nodes[sides[a.odd.front()].node].range);
+            for (std::size_t i = 0; i < sides.size(); ++i) {
+                add_term(d, sides[i]);
+                d.notes.push_back({fmt::format("{}{} is {}", i == 0 ? "left side " : "right side ",
+                                               quote(sides[i].node), describe(sides[i].type.dim)),
+                                   {}});
+            }
+            return unknown_type();
+        }
+        double unit = 1.0;
+        check_scales(sides, "sides of this comparison", unit);
+        return typed{}; // true or false: a dimensionless number
+    }
+
+    // Arguments from `first` on must agree; their common type, or unknown after a finding.
+    typed agreeing(const builtin_function& f, std::span<const operand> args, std::size_t first,
+                   std::string_view others) {
+        const std::span<const operand> tail = args.subspan(first);
+        const agreement a = find_agreement(tail);
+        if (!a.odd.empty()) {
+            diagnostic& d = report(rules::argument_mismatch,
+                                   fmt::format("the {} of {} differ in dimension", others, f.name),
+                                   file_.nodes[tail[a.odd.front()].node].range);
+            explain(d, tail, a, others);
+            return unknown_type();
+        }
+        double unit = 1.0;
+        const bool scales_agree = check_scales(tail, fmt::format("{} of {}", others, f.name), unit);
+        if (!std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.known; }))
+            return unknown_type();
+        typed result;
+        result.dim = a.reference.value_or(dimension{});
+        result.zero =
+            std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.zero; });
+        result.numeric =
+            std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.numeric; });
+        result.scale = scales_agree ? unit : std::numeric_limits<double>::quiet_NaN();
+        for (const auto& o : tail)
+            if (o.type.offset != nullptr)
+                result.offset = o.type.offset;
+        return result;
+    }
+
+    typed eval_sheet_call(const builtin_function& f, const std::vector<operand>& args) {
+        switch (f.rule) {
+        case function_rule::choice:
+            return agreeing(f, args, 1, "branches");
+        case function_rule::product: {
+            typed result;
+            for (const auto& a : args) {
+                if (!a.type.known)
+                    return unknown_type();
+                if (a.type.offset != nullptr) {
+                    report_offset(a.node, *a.type.offset, fmt::format("multiplied in {}", f.name));
+                    return unknown_type();
+                }
+                result.dim = result.dim * a.type.dim;
+                result.scale *= a.type.scale;
+            }
+            return result;
+        }
+        case function_rule::keep_first:
+            for (std::size_t i = 1; i < args.size(); ++i)
+                require_dimensionless(f, args[i]);
+            return args[0].type.known ? args[0].type : unknown_type();
+        case function_rule::lookup: {
+            typed key = agreeing(f, std::span<const operand>(args).first(2), 0, "key and column");
+            (void)key;
+            return args[2].type.known ? args[2].type : unknown_type();
+        }
+        case function_rule::pick:
+            for (std::size_t i = 1; i < args.size(); ++i)
+                require_dimensionless(f, args[i]);
+            return args[0].type.known ? args[0].type : unknown_type();
+        case function_rule::position:
+            (void)agreeing(f, std::span<const operand>(args).first(2), 0, "key and range");
+            return typed{};
+        case function_rule::count:
+        case function_rule::logical:
+            return typed{};
+        case function_rule::to_radians:
+        case function_rule::to_degrees: {
+            if (!args[0].type.known)
+                return unknown_type();
+            if (!require_dimensionless(f, args[0]))
+                return unknown_type();
+            typed result;
+            // The value in degrees counts π/180 of the radian.
+            result.scale = f.rule == function_rule::to_degrees ? std::numbers::pi / 180.0 : 1.0;
+            return result;
+        }
+        default:
+            return unknown_type();
+        }
     }
 
     // A dimensionless argument written in mixed units (ln(p/p_ref) with p in kPa and p_ref in
@@ -1709,6 +1857,25 @@ bool check_formula(const syntax::parsed_file& file, const syntax::formula& formu
         out.push_back(std::move(d));
     }
     return true;
+}
+
+std::optional<value_type> check_sheet_formula(const syntax::parsed_file& file,
+                                              const syntax::formula& formula, symbol_table& symbols,
+                                              std::vector<diagnostic>& out) {
+    checker c(file, symbols, out);
+    const std::size_t before = out.size();
+    try {
+        return c.check_value(formula);
+    } catch (const arithmetic_overflow&) {
+        out.resize(before);
+        diagnostic d;
+        d.rule = std::string(rules::overflow);
+        d.message = "the exponents in this formula exceed the exact range (64-bit numerator "
+                    "and denominator)";
+        d.where = {file.source, formula.range};
+        out.push_back(std::move(d));
+        return std::nullopt;
+    }
 }
 
 std::optional<dimension> expression_dimension(const syntax::parsed_file& file, std::uint32_t root,

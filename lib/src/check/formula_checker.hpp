@@ -15,6 +15,21 @@ namespace plumb {
 bool check_formula(const syntax::parsed_file& file, const syntax::formula& formula,
                    symbol_table& symbols, std::vector<diagnostic>& out, bool defer_unknown);
 
+// What a spreadsheet formula computes: its dimension, the SI value of one unit of the
+// numbers it gives, and the offset scale it is on (°C, gauge), if any.
+struct value_type {
+    dimension dim;
+    double scale = 1.0;
+    const unit_definition* offset = nullptr;
+    bool zero = false; // the literal 0
+};
+
+// Checks the single side of a spreadsheet formula lowered into `file` (file.references typed)
+// and returns its type; empty when an error was found below it or it is not known.
+std::optional<value_type> check_sheet_formula(const syntax::parsed_file& file,
+                                              const syntax::formula& formula, symbol_table& symbols,
+                                              std::vector<diagnostic>& out);
+
 // The dimension of one expression tree, or empty when it has an error (reported in `out`).
 std::optional<dimension> expression_dimension(const syntax::parsed_file& file, std::uint32_t root,
                                               symbol_table& symbols, std::vector<diagnostic>& out);

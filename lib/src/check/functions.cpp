@@ -1,4 +1,5 @@
-// The table of built-in functions (NOTATION.md, "Functions", lists the same).
+// The tables of built-in functions: the notation's (NOTATION.md, "Functions", lists the same)
+// and the spreadsheet functions plumb checks in workbooks (README, "Spreadsheets").
 #include "check/functions.hpp"
 
 #include <array>
@@ -41,6 +42,73 @@ const std::array<builtin_function, 26>& table() {
     return functions;
 }
 
+// Argument counts as the spreadsheet applications accept them (ECMA-376 Part 1, 18.17.7;
+// OpenFormula, ODF 1.2 Part 2, chapter 6).
+const std::array<builtin_function, 50>& sheet_table() {
+    using r = function_rule;
+    static const std::array<builtin_function, 50> functions = {{
+        {"SUM", r::common, 1, unlimited, 1},
+        {"AVERAGE", r::common, 1, unlimited, 1},
+        {"MEDIAN", r::common, 1, unlimited, 1},
+        {"MIN", r::common, 1, unlimited, 1},
+        {"MAX", r::common, 1, unlimited, 1},
+        {"CEILING", r::common, 1, 2, 1},
+        {"FLOOR", r::common, 1, 2, 1},
+        {"MROUND", r::common, 2, 2, 1},
+        {"PRODUCT", r::product, 1, unlimited, 1},
+        {"SUMPRODUCT", r::product, 1, unlimited, 1},
+        {"SQRT", r::root, 1, 1, rational(1, 2)},
+        {"ABS", r::same, 1, 1, 1},
+        {"EXP", r::dimensionless, 1, 1, 1},
+        {"LN", r::dimensionless, 1, 1, 1},
+        {"LOG10", r::dimensionless, 1, 1, 1},
+        {"LOG", r::log_base, 1, 2, 1},
+        {"SIN", r::dimensionless, 1, 1, 1},
+        {"COS", r::dimensionless, 1, 1, 1},
+        {"TAN", r::dimensionless, 1, 1, 1},
+        {"ASIN", r::dimensionless, 1, 1, 1},
+        {"ACOS", r::dimensionless, 1, 1, 1},
+        {"ATAN", r::dimensionless, 1, 1, 1},
+        {"SINH", r::dimensionless, 1, 1, 1},
+        {"COSH", r::dimensionless, 1, 1, 1},
+        {"TANH", r::dimensionless, 1, 1, 1},
+        {"ASINH", r::dimensionless, 1, 1, 1},
+        {"ACOSH", r::dimensionless, 1, 1, 1},
+        {"ATANH", r::dimensionless, 1, 1, 1},
+        // ATAN2(x, y) in the spreadsheet order; both agree either way.
+        {"ATAN2", r::angle_of, 2, 2, 1},
+        {"POWER", r::power, 2, 2, 1},
+        {"IF", r::choice, 2, 3, 1},
+        {"ROUND", r::keep_first, 2, 2, 1},
+        {"ROUNDUP", r::keep_first, 2, 2, 1},
+        {"ROUNDDOWN", r::keep_first, 2, 2, 1},
+        {"TRUNC", r::keep_first, 1, 2, 1},
+        {"INT", r::keep_first, 1, 1, 1},
+        {"VLOOKUP", r::lookup, 3, 3, 1},
+        {"HLOOKUP", r::lookup, 3, 3, 1},
+        {"INDEX", r::pick, 1, 3, 1},
+        {"MATCH", r::position, 2, 3, 1},
+        {"COUNT", r::count, 1, unlimited, 1},
+        {"COUNTA", r::count, 1, unlimited, 1},
+        {"ROWS", r::count, 1, 1, 1},
+        {"COLUMNS", r::count, 1, 1, 1},
+        {"AND", r::logical, 1, unlimited, 1},
+        {"OR", r::logical, 1, unlimited, 1},
+        {"NOT", r::logical, 1, 1, 1},
+        {"RADIANS", r::to_radians, 1, 1, 1},
+        {"DEGREES", r::to_degrees, 1, 1, 1},
+        {"SIGN", r::logical, 1, 1, 1},
+    }};
+    return functions;
+}
+
+std::string_view without_prefix(std::string_view name) {
+    for (const std::string_view prefix : {"_xlfn.", "COM.MICROSOFT.", "ORG.OPENOFFICE."})
+        if (name.substr(0, prefix.size()) == prefix)
+            return name.substr(prefix.size());
+    return name;
+}
+
 } // namespace
 
 const builtin_function* find_function(std::string_view name) {
@@ -52,6 +120,18 @@ const builtin_function* find_function(std::string_view name) {
 
 std::span<const builtin_function> builtin_functions() {
     return table();
+}
+
+const builtin_function* find_sheet_function(std::string_view name) {
+    name = without_prefix(name);
+    for (const auto& f : sheet_table())
+        if (f.name == name)
+            return &f;
+    return nullptr;
+}
+
+std::span<const builtin_function> sheet_functions() {
+    return sheet_table();
 }
 
 } // namespace plumb

@@ -276,6 +276,9 @@ class equation_builder {
             unknowns.push_back(std::move(u));
             return of_unknown(static_cast<std::uint32_t>(unknowns.size() - 1));
         }
+        case expr_kind::reference: // spreadsheet operands: no unknowns to infer there
+        case expr_kind::compare:
+            return opaque_form();
         }
         return opaque_form();
     }
@@ -475,6 +478,8 @@ class equation_builder {
                 }
             }
             return product(args[0], args[1], false);
+        default: // spreadsheet functions: never met in the notation
+            return opaque_form();
         }
         return opaque_form();
     }

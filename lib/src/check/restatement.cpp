@@ -254,6 +254,10 @@ class tracer {
             return eval_call(index);
         case expr_kind::quantity:
             return eval_quantity(n);
+        case expr_kind::reference:
+        case expr_kind::compare:
+            return fail(fmt::format("{} is a cell or a comparison, which carries no unit here",
+                                    quote(index)));
         case expr_kind::inferred:
             if (index != coefficient_)
                 return fail(fmt::format("another coefficient marked ?, {}, stands in the formula",
@@ -534,6 +538,8 @@ class tracer {
             return out;
         }
         case function_rule::power:
+            break;
+        default: // the spreadsheet front ends' functions carry no coefficient to restate
             break;
         }
         return fail(fmt::format("{} is not a function call plumb can follow", quote(index)));

@@ -11,6 +11,7 @@
 #include "plumb/accepted.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
+#include "sheets/workbook_file.hpp"
 
 #include <algorithm>
 #include <array>
@@ -678,10 +679,12 @@ void collect_plumb_files(const fs::path& dir, std::vector<fs::path>& out, sessio
             break;
         }
         std::error_code type_ec;
+        // A workbook's sidecar is read with its workbook, never checked on its own.
         if (!it->is_regular_file(type_ec))
             continue;
-        if (it->path().extension() == ".plumb" ||
-            (it->path().extension() == ".md" && is_calc_note(it->path())))
+        if ((it->path().extension() == ".plumb" && !sheets::is_sidecar_path(it->path())) ||
+            (it->path().extension() == ".md" && is_calc_note(it->path())) ||
+            sheets::is_workbook_path(it->path()))
             found.push_back(it->path());
     }
     std::sort(found.begin(), found.end());
@@ -716,10 +719,17 @@ check_report check_paths(const std::vector<fs::path>& paths, const check_options
         });
     // A file named twice (or inside two folders given) is checked once.
     std::unordered_set<const loaded_file*> checked;
+    std::vector<fs::path> workbooks;
     for (const auto& p : files)
-        if (loaded_file* f = s.load(p, {}); f != nullptr && checked.insert(f).second)
+        if (sheets::is_workbook_path(p)) {
+            if (std::find(workbooks.begin(), workbooks.end(), p) == workbooks.end())
+                workbooks.push_back(p);
+        } else if (loaded_file* f = s.load(p, {}); f != nullptr && checked.insert(f).second) {
             s.check(f);
+        }
     s.finish();
+    for (const auto& p : workbooks)
+        sheets::check_workbook_file(p, options, report);
     review_findings(report, options);
     return report;
 }

@@ -73,4 +73,30 @@ std::string single_line(std::string_view raw) {
     return out;
 }
 
+const cell_place* source_file::cell_at(std::uint32_t byte_offset) const {
+    if (cell_places_.empty())
+        return nullptr;
+    const std::uint32_t line = position(byte_offset).line;
+    return line <= cell_places_.size() ? &cell_places_[line - 1] : nullptr;
+}
+
+std::string cell_text(const cell_place& place) {
+    const bool plain = !place.sheet.empty() &&
+                       std::all_of(place.sheet.begin(), place.sheet.end(),
+                                   [](char c) {
+                                       return (c >= 'A' && c <= 'Z') || (c >= 'a' && c <= 'z') ||
+                                              (c >= '0' && c <= '9') || c == '_';
+                                   }) &&
+                       !(place.sheet[0] >= '0' && place.sheet[0] <= '9');
+    if (plain)
+        return place.sheet + "!" + place.cell;
+    std::string quoted = "'";
+    for (const char c : place.sheet) {
+        quoted += c;
+        if (c == '\'')
+            quoted += '\'';
+    }
+    return quoted + "'!" + place.cell;
+}
+
 } // namespace plumb

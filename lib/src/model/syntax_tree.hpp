@@ -33,7 +33,23 @@ enum class expr_kind : std::uint8_t {
     quantity, // 0.5 {m} or {g_n}: lhs = index into quantities
     inferred, // 1.486?: a coefficient whose dimension is to be inferred; lhs = index into
               // coefficient_statements when written 1.486?[...], else no_index
+    // Spreadsheet front ends only:
+    reference, // a cell, a range or another operand the front end types: lhs = index into
+               // references
+    compare,   // lhs = rhs, lhs < rhs...: a comparison inside an expression (IF's condition)
 };
+
+// The value a spreadsheet formula refers to (a cell, a range, a looked-up column), typed by
+// the front end that lowered the formula before the formula is checked.
+struct reference_value {
+    std::optional<dimension> dim; // empty: unknown (no unit, text, below an error): not checked
+    double scale = 1.0;           // SI value of one written unit
+    const unit_definition* offset = nullptr; // set for °C, gauge...
+    std::optional<rational> value;           // a dimensionless constant cell's exact value
+};
+
+// Which names a call may use: the notation's functions or a spreadsheet's.
+enum class function_names : std::uint8_t { notation, spreadsheet };
 
 // A number with a unit, or a named constant, inside a formula.
 struct quantity_literal {
@@ -177,6 +193,8 @@ struct parsed_file {
     std::vector<span> case_matches;
     std::vector<diagnostic> diagnostics; // syntax errors and unknown units
     bool has_syntax_error = false;
+    std::vector<reference_value> references; // spreadsheet front ends only
+    function_names functions = function_names::notation;
 };
 
 } // namespace plumb::syntax

@@ -15,6 +15,16 @@ void append_string(std::string& out, std::string_view s) {
 void append_location(std::string& out, const location& where) {
     if (where.file == nullptr)
         return;
+    if (const cell_place* place = where.file->cell_at(where.range.begin)) {
+        out += "\"file\": ";
+        append_string(out, valid_utf8(where.file->path()));
+        out += ", \"sheet\": ";
+        append_string(out, valid_utf8(place->sheet));
+        out += ", \"cell\": ";
+        append_string(out, place->cell);
+        out += ", ";
+        return;
+    }
     const line_column b = where.file->position(where.range.begin);
     const line_column e = where.file->position(where.range.end);
     out += "\"file\": ";
@@ -94,7 +104,18 @@ std::string render_json(const check_report& report) {
         out += ",\n      \"terms\": [";
         for (std::size_t i = 0; i < d.terms.size(); ++i) {
             out += i == 0 ? "{" : ", {";
-            append_location(out, d.terms[i].where);
+            if (!d.terms[i].cell.empty()) {
+                // A term that names a cell or range: that cell, not the formula's.
+                out += "\"file\": ";
+                append_string(out, valid_utf8(d.terms[i].where.file->path()));
+                out += ", \"sheet\": ";
+                append_string(out, valid_utf8(d.terms[i].sheet));
+                out += ", \"cell\": ";
+                append_string(out, d.terms[i].cell);
+                out += ", ";
+            } else {
+                append_location(out, d.terms[i].where);
+            }
             out += "\"text\": ";
             append_string(out, valid_utf8(d.terms[i].text));
             out += ", ";
@@ -137,10 +158,12 @@ std::string render_json(const check_report& report) {
     out += report.formulas.empty() ? "],\n" : "\n  ],\n";
     out += fmt::format(
         "  \"summary\": {{\"files_checked\": {}, \"formulas_checked\": {}, \"errors\": {}, "
-        "\"warnings\": {}, \"accepted\": {}, \"input_failed\": {}}},\n",
+        "\"warnings\": {}, \"accepted\": {}, \"input_failed\": {}, \"formula_cells_checked\": {}, "
+        "\"cells_not_checked\": {}, \"inputs_without_units\": {}}},\n",
         report.files_checked, report.formulas_checked, report.count(severity::error),
         report.count(severity::warning), report.count_accepted(),
-        report.input_failed ? "true" : "false");
+        report.input_failed ? "true" : "false", report.cells_checked, report.cells_not_checked,
+        report.inputs_without_units);
     out += "  \"caution\": ";
     append_string(out, caution_text());
     out += "\n}\n";

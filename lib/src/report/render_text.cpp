@@ -17,7 +17,10 @@ std::string_view caution_text() {
 std::string render_text(const diagnostic& d, const text_style& style) {
     const palette::painter paint{style.colour};
     std::string out;
-    if (d.where.file != nullptr) {
+    if (d.where.file != nullptr && d.where.file->cell_at(d.where.range.begin) != nullptr) {
+        out += fmt::format("{}:{}:", d.where.file->path(),
+                           cell_text(*d.where.file->cell_at(d.where.range.begin)));
+    } else if (d.where.file != nullptr) {
         const line_column p = d.where.file->position(d.where.range.begin);
         out += fmt::format("{}:{}:{}:", d.where.file->path(), p.line, p.column);
     } else {
@@ -70,6 +73,11 @@ std::string render_text(const check_report& report, const text_style& style) {
     };
     const std::string scope = fmt::format("{} in {}", plural(report.formulas_checked, "formula"),
                                           plural(report.files_checked, "file"));
+    if (report.workbooks_checked > 0)
+        out += fmt::format("{} {} checked, {} not checked, {} without units\n",
+                           paint(palette::strong, "plumb:"),
+                           plural(report.cells_checked, "formula cell"), report.cells_not_checked,
+                           plural(report.inputs_without_units, "input cell"));
     if (errors == 0 && warnings == 0)
         out += fmt::format("{} {}: no dimensional inconsistency found\n",
                            paint(palette::strong, "plumb:"), scope);
@@ -78,7 +86,8 @@ std::string render_text(const check_report& report, const text_style& style) {
                            plural(errors, "error"), plural(warnings, "warning"), scope);
     if (report.count_accepted() > 0)
         out += fmt::format("{} {} accepted after review (listed above, with reasons)\n",
-                           paint(palette::strong, "plumb:"), plural(report.count_accepted(), "finding"));
+                           paint(palette::strong, "plumb:"),
+                           plural(report.count_accepted(), "finding"));
     out += fmt::format("{} {}\n", paint(palette::warning, "caution:"), caution_text());
     return out;
 }

@@ -1,0 +1,180 @@
+// Unit texts are rewritten into the notation's unit syntax and read by the notation's own
+// parser, so a cell's "kg/m³" means exactly what "kg/m^3" means in a .plumb file.
+#include "sheets/unit_text.hpp"
+
+#include "notation/parser.hpp"
+
+#include <deque>
+#include <mutex>
+#include <unordered_map>
+
+namespace plumb::sheets {
+
+namespace {
+
+// Gauge pressures the table has no row for ("kPa(g)"): built once per base unit, against
+// the standard atmosphere as the table's psig and barg rows are (common practice).
+const unit_definition* gauge_of(std::string_view base_symbol, const resolved_unit& base) {
+    static std::mutex lock;
+    static std::deque<std::string> symbols;
+    static std::deque<unit_definition> rows;
+    const std::scoped_lock guard(lock);
+    const std::string symbol = std::string(base_symbol) + "(g)";
+    for (const auto& r : rows)
+        if (r.symbol == symbol)
+            return &r;
+    symbols.push_back(symbol);
+    unit_definition row = *base.unit;
+    row.symbol = symbols.back();
+    row.name = "gauge pressure";
+    row.factor = base.factor();
+    row.offset = 101325.0;
+    row.scale = unit_scale::gauge;
+    row.takes_prefixes = false;
+    row.source = "common practice: gauge pressure read against the standard atmosphere";
+    rows.push_back(row);
+    return &rows.back();
+}
+
+std::string trim(std::string_view s) {
+    const auto blank = [](char c) { return c == ' ' || c == '\t' || c == '\n' || c == '\r'; };
+    while (!s.empty() && blank(s.front()))
+        s.remove_prefix(1);
+    while (!s.empty() && blank(s.back()))
+        s.remove_suffix(1);
+    return std::string(s);
+}
+
+bool is_letter(char c) {
+    return (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z');
+}
+
+// "m3/s" -> "m^3/s", "m²" -> "m^2", "m⁻¹" -> "m^-1".
+std::string to_notation(std::string_view t) {
+    std::string out;
+    for (std::size_t i = 0; i < t.size(); ++i) {
+        const std::string_view rest = t.substr(i);
+        if (rest.substr(0, 2) == "\u00B2" || rest.substr(0, 2) == "\u00B3" ||
+            rest.substr(0, 2) == "\u00B9") {
+            out += rest[1] == '\xB2' ? "^2" : rest[1] == '\xB3' ? "^3" : "^1";
+            ++i;
+            continue;
+        }
+        if (rest.substr(0, 3) == "\u207B") { // superscript minus
+            out += "^-";
+            i += 2;
+            if (t.substr(i + 1, 2) == "\u00B9" || t.substr(i + 1, 2) == "\u00B2" ||
+                t.substr(i + 1, 2) == "\u00B3") {
+                out += t[i + 2] == '\xB2' ? "2" : t[i + 2] == '\xB3' ? "3" : "1";
+                i += 2;
+            }
+            continue;
+        }
+        const char c = t[i];
+        if (c >= '0' && c <= '9' && i > 0 && is_letter(t[i - 1]))
+            out += '^';
+        out += c;
+    }
+    return out;
+}
+
+std::optional<written_unit> evaluate(std::string_view text) {
+    std::string t = trim(text);
+    if (t.empty() || t.size() > 40)
+        return std::nullopt;
+    if (t == "\u00B0")
+        t = "deg"; // the degree of angle, written alone
+    if (t == "-" || t == "1" || t == "\u2014" || t == "\u2013") {
+        written_unit u;
+        u.text = t;
+        return u;
+    }
+    // Gauge and absolute marks: "kPa(g)", "kPa (g)", "kPa g", "kPag"; "kPa(a)", "kPa abs".
+    bool gauge = false;
+    for (const std::string_view mark : {"(g)", " (g)", " g", "(a)", " (a)", " abs", " a"}) {
+        if (t.size() > mark.size() && t.compare(t.size() - mark.size(), mark.size(), mark) == 0) {
+            gauge = mark.find('g') != std::string_view::npos;
+            t = trim(t.substr(0, t.size() - mark.size()));
+            break;
+        }
+    }
+    // "Δ°C" and "delta °C": a difference, of the size of the kelvin (SI Brochure 9th ed.,
+    // 2.3.1: a Celsius difference equals the kelvin difference).
+    for (const std::string_view delta : {"\u0394", "delta "})
+        if (t.rfind(delta, 0) == 0) {
+            t = trim(t.substr(delta.size()));
+            if (t == "\u00B0C")
+                t = "K";
+            else if (t == "\u00B0F")
+                t = "\u00B0R";
+        }
+    // "kPag": a pressure unit with a gauge g that the table has no row for (it has psig, barg).
+    if (!gauge && t.size() > 2 && t.back() == 'g' && !unit_table::standard().resolve(t)) {
+        const auto base = unit_table::standard().resolve(t.substr(0, t.size() - 1));
+        const auto pascal = unit_table::standard().resolve("Pa");
+        if (base && pascal && base->dim() == pascal->dim()) {
+            gauge = true;
+            t.pop_back();
+        }
+    }
+    const std::string notation = to_notation(t);
+    // A declaration, not a quantity in braces: there "h" would be Planck's constant.
+    const source_file src("<unit>", "x : " + notation);
+    const syntax::parsed_file tree = parse_file(src);
+    if (tree.has_syntax_error || !tree.diagnostics.empty() || tree.declarations.size() != 1)
+        return std::nullopt;
+    const syntax::declared_kind& q = tree.declarations.front().kind;
+    if (!q.dim || !q.by_unit)
+        return std::nullopt;
+    written_unit u;
+    u.dim = *q.dim;
+    u.scale = q.si_factor;
+    u.text = trim(text);
+    if (q.single_unit != nullptr && q.single_unit->scale != unit_scale::absolute)
+        u.offset = q.single_unit;
+    if (gauge) {
+        const auto base = unit_table::standard().resolve(notation);
+        if (!base || base->unit->scale != unit_scale::absolute)
+            return std::nullopt;
+        const auto pascal = unit_table::standard().resolve("Pa");
+        if (!(base->dim() == pascal->dim()))
+            return std::nullopt;
+        u.offset = gauge_of(notation, *base);
+    }
+    return u;
+}
+
+} // namespace
+
+std::optional<written_unit> read_unit_text(std::string_view text) {
+    // Reading a unit costs a parse; calcs repeat a handful of unit texts thousands of times.
+    thread_local std::unordered_map<std::string, std::optional<written_unit>> cache;
+    const std::string key(text);
+    if (const auto it = cache.find(key); it != cache.end())
+        return it->second;
+    auto u = cache.size() < 100000 ? evaluate(text) : std::nullopt;
+    if (cache.size() < 100000)
+        cache.emplace(key, u);
+    return u;
+}
+
+std::optional<written_unit> read_heading_unit(std::string_view text) {
+    const std::string t = trim(text);
+    if (t.size() < 3)
+        return std::nullopt;
+    const char close = t.back();
+    if (close != ']' && close != ')')
+        return std::nullopt;
+    const char open = close == ']' ? '[' : '(';
+    // The matching opening bracket, allowing "W/(m·K)" inside parentheses.
+    int depth = 0;
+    for (std::size_t i = t.size(); i-- > 0;) {
+        if (t[i] == close)
+            ++depth;
+        else if (t[i] == open && --depth == 0)
+            return read_unit_text(std::string_view(t).substr(i + 1, t.size() - i - 2));
+    }
+    return std::nullopt;
+}
+
+} // namespace plumb::sheets

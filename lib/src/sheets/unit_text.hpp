@@ -1,0 +1,27 @@
+// A unit as engineers type it into a cell: "m3/s", "mm4", "m²", "kg/m³", "kPa(g)", "kPa g",
+// "psig", "°C", "Δ°C", "W/(m·K)", "N·m", "L/s", "%", and "-", "1" or "—" for dimensionless.
+#pragma once
+
+#include "plumb/dimension.hpp"
+#include "plumb/unit_table.hpp"
+
+#include <optional>
+#include <string>
+#include <string_view>
+
+namespace plumb::sheets {
+
+struct written_unit {
+    dimension dim;
+    double scale = 1.0;                      // SI value of one unit
+    const unit_definition* offset = nullptr; // °C, °F or a gauge pressure
+    std::string text;                        // as written in the cell
+};
+
+// The unit the whole text reads as, or empty when it does not read as one.
+std::optional<written_unit> read_unit_text(std::string_view text);
+
+// The unit in a column heading's last brackets or parentheses: "Flow [m3/s]", "D (mm)".
+std::optional<written_unit> read_heading_unit(std::string_view text);
+
+} // namespace plumb::sheets

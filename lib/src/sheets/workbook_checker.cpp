@@ -1,0 +1,741 @@
+// Units for cells (sidecar, defined names, the cell beside, the column's heading), the
+// dependency order of formula cells, and the checks only a workbook has: the unit written
+// beside a formula against what it computes, ranges of one dimension, inputs without units.
+#include "sheets/workbook_checker.hpp"
+
+#include "check/formula_checker.hpp"
+#include "plumb/rules.hpp"
+#include "sheets/a1_front_end.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <fmt/format.h>
+#include <map>
+
+namespace plumb::sheets {
+
+namespace {
+
+std::string describe(const dimension& d) {
+    if (d.is_dimensionless())
+        return "[1] (dimensionless)";
+    const std::string_view name = quantity_name(d);
+    return name.empty() ? d.to_string() : fmt::format("{} ({})", d.to_string(), name);
+}
+
+// A cell's unit and where it came from, or none.
+struct cell_unit {
+    written_unit unit;
+    std::string origin; // "beside it in D44", "from the heading in C12", ...
+};
+
+// What a cell holds for the formulas that use it.
+struct cell_value {
+    std::optional<dimension> dim; // empty: unknown, not checked
+    double scale = 1.0;
+    const unit_definition* offset = nullptr;
+    std::optional<rational> value;
+    const cell_unit* unit = nullptr; // the unit written for it; null when computed
+
+    [[nodiscard]] std::string describe_for(const std::string& name) const {
+        if (unit == nullptr)
+            return fmt::format("{} is {}, computed by its formula", name, describe(*dim));
+        return fmt::format("{} is in {}, unit {}", name, unit->unit.text, unit->origin);
+    }
+};
+
+constexpr std::uint64_t book_key(std::size_t sheet, cell_address a) {
+    return (static_cast<std::uint64_t>(sheet) << 45) | sheet::key(a);
+}
+
+class workbook_checker {
+  public:
+    workbook_checker(const workbook& book, const std::string& path, const outside_units& units,
+                     check_report& report)
+        : book_(book), path_(path), units_(units), report_(report) {}
+
+    void run() {
+        collect_formulas();
+        build_listing();
+        lower_all();
+        order_and_check();
+        report_unitless_inputs();
+        ++report_.workbooks_checked;
+        report_.files_checked += 1;
+    }
+
+  private:
+    const workbook& book_;
+    const std::string& path_;
+    const outside_units& units_;
+    check_report& report_;
+
+    struct formula_cell {
+        std::size_t sheet;
+        const cell* source;
+        span text;
+        lowered_formula lowered;
+        std::vector<std::uint32_t> depends_on; // formula ids
+        bool checked = false;
+        bool in_cycle = false;
+        cell_value result;
+    };
+    std::vector<formula_cell> formulas_;
+    std::unordered_map<std::uint64_t, std::uint32_t> formula_at_;
+    lowered_book lowered_;
+    const source_file* listing_ = nullptr;
+    span hundred_{};
+    symbol_table no_symbols_;
+    std::vector<diagnostic> out_;
+    std::unordered_map<std::uint64_t, std::optional<cell_unit>> unit_cache_;
+    // Per sheet and column: the rows of text cells, in order, for headings.
+    std::vector<std::unordered_map<std::uint32_t, std::vector<std::uint32_t>>> text_rows_;
+    // Inputs without units: the formula cells that use each, in order.
+    std::map<std::uint64_t, std::vector<std::uint32_t>> unitless_;
+    struct range_result {
+        cell_value value;
+    };
+    std::map<std::tuple<std::size_t, std::uint64_t, std::uint64_t>, cell_value> range_cache_;
+    std::uint32_t current_ = 0; // the formula being checked
+
+    void collect_formulas() {
+        text_rows_.resize(book_.sheets.size());
+        std::size_t cells = 0;
+        for (const auto& sh : book_.sheets)
+            cells += sh.cells.size();
+        formula_at_.reserve(cells);
+        formulas_.reserve(cells);
+        unit_cache_.reserve(cells);
+        for (std::size_t s = 0; s < book_.sheets.size(); ++s)
+            for (const auto& c : book_.sheets[s].cells) {
+                if (c.kind == cell_kind::formula) {
+                    formula_at_[book_key(s, c.at)] = static_cast<std::uint32_t>(formulas_.size());
+                    formulas_.push_back({s, &c, {}, {}, {}, false, false, {}});
+                } else if (c.kind == cell_kind::text) {
+                    text_rows_[s][c.at.column].push_back(c.at.row);
+                }
+            }
+        for (auto& sheet_rows : text_rows_)
+            for (auto& [column, rows] : sheet_rows)
+                std::sort(rows.begin(), rows.end());
+    }
+
+    void build_listing() {
+        std::string text;
+        std::vector<cell_place> places;
+        for (auto& f : formulas_) {
+            std::string_view shown = f.source->text;
+            if (!shown.empty() && shown.front() == '\x01')
+                shown.remove_prefix(1);
+            if (shown.empty())
+                shown = "=";
+            const auto begin = static_cast<std::uint32_t>(text.size());
+            for (const char c : shown)
+                text += (c == '\n' || c == '\r') ? ' ' : c;
+            f.text = {begin, static_cast<std::uint32_t>(text.size())};
+            text += '\n';
+            places.push_back({book_.sheets[f.sheet].name, a1_name(f.source->at)});
+        }
+        hundred_ = {static_cast<std::uint32_t>(text.size()),
+                    static_cast<std::uint32_t>(text.size() + 3)};
+        text += "100\n";
+        report_.sources.push_back(std::make_unique<source_file>(path_, std::move(text)));
+        report_.sources.back()->set_cell_places(std::move(places));
+        listing_ = report_.sources.back().get();
+        lowered_.tree.source = listing_;
+        lowered_.tree.functions = syntax::function_names::spreadsheet;
+    }
+
+    diagnostic& report(severity level, std::string_view rule, std::string message, span where) {
+        diagnostic d;
+        d.level = level;
+        d.rule = std::string(rule);
+        d.message = std::move(message);
+        d.where = {listing_, where};
+        out_.push_back(std::move(d));
+        return out_.back();
+    }
+
+    void lower_all() {
+        for (auto& f : formulas_) {
+            const std::string_view raw = f.source->text;
+            if (raw.empty()) {
+                report(severity::warning, rules::not_checked,
+                       "this cell holds a shared formula that plumb does not expand, so it is "
+                       "not checked",
+                       f.text);
+                continue;
+            }
+            if (raw.front() == '\x01') {
+                report(severity::warning, rules::not_checked,
+                       "this formula is not OpenFormula that plumb can read, so it is not checked",
+                       f.text);
+                continue;
+            }
+            f.lowered = lower_formula(lowered_, book_, f.sheet, f.text.begin, f.text.end, hundred_);
+            if (!f.lowered.syntax_error.empty()) {
+                diagnostic& d = report(severity::warning, rules::not_checked,
+                                       fmt::format("this formula cannot be read ({}), so it is not "
+                                                   "checked",
+                                                   f.lowered.syntax_error),
+                                       f.lowered.syntax_at);
+                d.notes.push_back({"plumb reads the formula as the spreadsheet stores it "
+                                   "(ECMA-376 or OpenFormula syntax)",
+                                   {}});
+                continue;
+            }
+            for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i) {
+                const lowered_reference& r = lowered_.references[f.lowered.first_reference + i];
+                for_each_cell(r.sheet, r.area, [&](const cell& c) {
+                    if (c.kind != cell_kind::formula)
+                        return;
+                    f.depends_on.push_back(formula_at_.at(book_key(r.sheet, c.at)));
+                });
+            }
+        }
+    }
+
+    template <typename F> void for_each_cell(std::size_t s, const cell_area& area, F&& f) const {
+        const sheet& sh = book_.sheets[s];
+        const std::uint64_t cells = static_cast<std::uint64_t>(area.last.row - area.first.row + 1) *
+                                    (area.last.column - area.first.column + 1);
+        if (cells <= sh.cells.size()) {
+            for (std::uint32_t r = area.first.row; r <= area.last.row; ++r)
+                for (std::uint32_t c = area.first.column; c <= area.last.column; ++c)
+                    if (const cell* found = sh.find({r, c}))
+                        f(*found);
+        } else {
+            for (const auto& c : sh.cells)
+                if (area.contains(c.at))
+                    f(c);
+        }
+    }
+
+    // Depth-first, without recursion: a column of 100 000 chained cells must not overflow.
+    void order_and_check() {
+        enum class mark : std::uint8_t { unseen, open, done };
+        std::vector<mark> marks(formulas_.size(), mark::unseen);
+        std::vector<std::pair<std::uint32_t, std::size_t>> stack;
+        for (std::uint32_t start = 0; start < formulas_.size(); ++start) {
+            if (marks[start] != mark::unseen)
+                continue;
+            stack.push_back({start, 0});
+            marks[start] = mark::open;
+            while (!stack.empty()) {
+                auto& [id, next] = stack.back();
+                if (next < formulas_[id].depends_on.size()) {
+                    const std::uint32_t dep = formulas_[id].depends_on[next++];
+                    if (marks[dep] == mark::unseen) {
+                        marks[dep] = mark::open;
+                        stack.push_back({dep, 0});
+                    } else if (marks[dep] == mark::open) {
+                        report_cycle(stack, dep);
+                    }
+                    continue;
+                }
+                marks[id] = mark::done;
+                const std::uint32_t finished = id;
+                stack.pop_back();
+                check_cell(finished);
+            }
+        }
+    }
+
+    void report_cycle(const std::vector<std::pair<std::uint32_t, std::size_t>>& stack,
+                      std::uint32_t back_to) {
+        std::vector<std::uint32_t> cycle;
+        for (auto it = stack.rbegin(); it != stack.rend(); ++it) {
+            cycle.push_back(it->first);
+            if (it->first == back_to)
+                break;
+        }
+        if (std::any_of(cycle.begin(), cycle.end(),
+                        [&](std::uint32_t id) { return formulas_[id].in_cycle; }))
+            return; // one report per cycle
+        std::reverse(cycle.begin(), cycle.end());
+        std::vector<std::string> names;
+        for (const std::uint32_t id : cycle) {
+            formulas_[id].in_cycle = true;
+            names.push_back(cell_name(id));
+        }
+        names.push_back(cell_name(cycle.front()));
+        diagnostic& d = report(
+            severity::error, rules::circular_reference,
+            fmt::format("this formula depends on itself through {}", fmt::join(names, " -> ")),
+            formulas_[cycle.front()].text);
+        d.notes.push_back({"a circular reference has no value to check; the cells in it are not "
+                           "checked",
+                           {}});
+    }
+
+    std::string cell_name(std::uint32_t id) const {
+        const auto& f = formulas_[id];
+        return cell_text({book_.sheets[f.sheet].name, a1_name(f.source->at)});
+    }
+
+    // ---- Units of cells -------------------------------------------------------------------
+
+    // Cached: a unit is read once per cell however many formulas use it. The map's nodes
+    // never move, so the pointer stays valid.
+    const cell_unit* unit_of(std::size_t s, cell_address a) {
+        const std::uint64_t key = book_key(s, a);
+        auto it = unit_cache_.find(key);
+        if (it == unit_cache_.end())
+            it = unit_cache_.emplace(key, discover_unit(s, a)).first;
+        return it->second ? &*it->second : nullptr;
+    }
+
+    std::optional<cell_unit> discover_unit(std::size_t s, cell_address a) const {
+        const sheet& sh = book_.sheets[s];
+        // 1. The sidecar.
+        for (const auto& au : units_.areas)
+            if ((au.sheet.empty() || au.sheet == sh.name) && au.area.contains(a))
+                return cell_unit{au.unit.unit, fmt::format("from {}", au.unit.origin)};
+        // 2. A defined name a dictionary declares.
+        if (!units_.names.empty())
+            for (const auto& n : book_.names) {
+                std::string upper_name = n.name;
+                std::transform(upper_name.begin(), upper_name.end(), upper_name.begin(),
+                               [](unsigned char c) { return static_cast<char>(std::toupper(c)); });
+                const auto it = units_.names.find(upper_name);
+                if (it == units_.names.end())
+                    continue;
+                const auto r = resolve_reference(book_, s, n.refers_to);
+                if (r && r->first == s && r->second.contains(a))
+                    return cell_unit{it->second.unit, fmt::format("from the name {} in {}", n.name,
+                                                                  it->second.origin)};
+            }
+        // 3. The cell beside it.
+        if (a.column + 1 < max_columns)
+            if (const cell* right = sh.find({a.row, a.column + 1});
+                right != nullptr && right->kind == cell_kind::text)
+                if (auto u = read_unit_text(right->text))
+                    return cell_unit{*u, fmt::format("beside it in {}",
+                                                     a1_name(cell_address{a.row, a.column + 1}))};
+        // 4. The column's heading: the nearest text cell above.
+        const auto column = text_rows_[s].find(a.column);
+        if (column != text_rows_[s].end()) {
+            const auto& rows = column->second;
+            const auto it = std::lower_bound(rows.begin(), rows.end(), a.row);
+            if (it != rows.begin()) {
+                const cell_address heading{*(it - 1), a.column};
+                if (auto u = read_heading_unit(sh.find(heading)->text))
+                    return cell_unit{*u, fmt::format("from the heading in {}", a1_name(heading))};
+            }
+        }
+        return std::nullopt;
+    }
+
+    static cell_value from_unit(const cell_unit& u) {
+        cell_value v;
+        v.dim = u.unit.dim;
+        v.scale = u.unit.scale;
+        v.offset = u.unit.offset;
+        v.unit = &u;
+        return v;
+    }
+
+    cell_value value_of(std::size_t s, const cell& c) {
+        if (c.kind == cell_kind::formula) {
+            const auto it = formula_at_.find(book_key(s, c.at));
+            return formulas_[it->second].result;
+        }
+        if (c.kind == cell_kind::boolean) {
+            cell_value v;
+            v.dim = dimension{};
+            return v;
+        }
+        if (c.kind != cell_kind::number)
+            return {};
+        const cell_unit* u = unit_of(s, c.at);
+        if (u == nullptr) {
+            auto& users = unitless_[book_key(s, c.at)];
+            if (users.empty() || users.back() != current_)
+                users.push_back(current_);
+            return {};
+        }
+        cell_value v = from_unit(*u);
+        if (v.dim && v.dim->is_dimensionless() && v.scale == 1.0)
+            v.value = rational::parse(c.text);
+        return v;
+    }
+
+    cell_value value_of_range(const lowered_reference& r, bool& reported) {
+        const auto key = std::tuple{r.sheet, sheet::key(r.area.first), sheet::key(r.area.last)};
+        if (const auto it = range_cache_.find(key); it != range_cache_.end()) {
+            // Cells without units are reported with each formula that uses them.
+            for_each_cell(r.sheet, r.area, [&](const cell& c) {
+                if (c.kind == cell_kind::number && !unit_of(r.sheet, c.at))
+                    (void)value_of(r.sheet, c);
+            });
+            return it->second;
+        }
+        struct member {
+            const cell* c;
+            cell_value v;
+        };
+        std::vector<member> members;
+        for_each_cell(r.sheet, r.area, [&](const cell& c) {
+            cell_value v = value_of(r.sheet, c);
+            if (v.dim)
+                members.push_back({&c, std::move(v)});
+        });
+        cell_value result;
+        if (!members.empty()) {
+            const member* odd = nullptr;
+            for (const auto& m : members)
+                if (!(*m.v.dim == *members.front().v.dim) ||
+                    std::abs(m.v.scale / members.front().v.scale - 1.0) > 1e-9 ||
+                    m.v.offset != members.front().v.offset) {
+                    odd = &m;
+                    break;
+                }
+            if (odd == nullptr) {
+                result = members.front().v;
+                result.value.reset();
+            } else {
+                const member& first = members.front();
+                const bool same_dim = *odd->v.dim == *first.v.dim;
+                diagnostic& d = report(
+                    severity::error, rules::mixed_range,
+                    fmt::format("the range {} holds values of different {}: {} and {} cannot be "
+                                "summed, averaged or compared as one",
+                                a1_name(r.area), same_dim ? "units" : "dimensions",
+                                a1_name(first.c->at), a1_name(odd->c->at)),
+                    r.where);
+                for (const member* m : {&first, odd}) {
+                    d.notes.push_back({m->v.describe_for(a1_name(m->c->at)), {}});
+                }
+                reported = true;
+            }
+        }
+        range_cache_.emplace(key, result);
+        return result;
+    }
+
+    // ---- Checking one formula cell --------------------------------------------------------
+
+    void check_cell(std::uint32_t id) {
+        current_ = id;
+        formula_cell& f = formulas_[id];
+        const cell_unit* written = unit_of(f.sheet, f.source->at);
+        if (written != nullptr)
+            f.result = from_unit(*written); // downstream cells take the written unit
+        if (f.lowered.formula == syntax::no_index || f.in_cycle) {
+            ++report_.cells_not_checked;
+            return;
+        }
+        bool range_reported = false;
+        for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i) {
+            const lowered_reference& r = lowered_.references[f.lowered.first_reference + i];
+            cell_value v;
+            if (r.area.single()) {
+                if (const cell* c = book_.sheets[r.sheet].find(r.area.first))
+                    v = value_of(r.sheet, *c);
+            } else {
+                v = value_of_range(r, range_reported);
+            }
+            syntax::reference_value& target = lowered_.tree.references[r.reference];
+            target.dim = v.dim;
+            target.scale = v.scale;
+            target.offset = v.offset;
+            target.value = v.value;
+        }
+        const std::size_t before = out_.size();
+        const syntax::formula& formula = lowered_.tree.formulas[f.lowered.formula];
+        const std::optional<value_type> computed =
+            check_sheet_formula(lowered_.tree, formula, no_symbols_, out_);
+        bool not_checked = !f.lowered.not_checked.empty();
+        for (std::size_t k = before; k < out_.size(); ++k)
+            not_checked = adapt(out_[k], f) || not_checked;
+        if (not_checked) {
+            if (!f.lowered.not_checked.empty())
+                report(severity::warning, rules::not_checked,
+                       fmt::format("{}, so this cell is not checked", f.lowered.not_checked),
+                       formula.range);
+            ++report_.cells_not_checked;
+            return;
+        }
+        ++report_.cells_checked;
+        ++report_.formulas_checked;
+        if (!computed)
+            return;
+        if (!written) {
+            f.result.dim = computed->dim;
+            f.result.scale = computed->scale;
+            f.result.offset = computed->offset;
+            return;
+        }
+        if (out_.size() == before && !range_reported)
+            compare_with_written(f, formula, *computed, *written);
+    }
+
+    // Checker findings in a workbook's words; true when the cell cannot be checked.
+    bool adapt(diagnostic& d, const formula_cell& f) {
+        if (d.rule == rules::unknown_function) {
+            d.level = severity::warning;
+            d.rule = std::string(rules::not_checked);
+            d.message = fmt::format("{}: plumb does not know this function, so this cell is not "
+                                    "checked",
+                                    d.message.substr(0, d.message.find(" is not")));
+            return true;
+        }
+        // Numbers in a workbook carry no units: terms in different units give a wrong result.
+        if (d.rule == rules::unit_scale)
+            d.level = severity::error;
+        std::size_t noted = 0;
+        for (auto& t : d.terms) {
+            for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i) {
+                const lowered_reference& r = lowered_.references[f.lowered.first_reference + i];
+                if (r.where.begin < t.where.range.begin || r.where.end > t.where.range.end)
+                    continue;
+                if (r.where.begin == t.where.range.begin && r.where.end == t.where.range.end) {
+                    t.sheet = book_.sheets[r.sheet].name;
+                    t.cell = a1_name(r.area);
+                }
+                const cell_value v = note_value(r);
+                if (!v.dim || noted >= 6)
+                    continue;
+                ++noted;
+                const std::string name = a1_name(r.area);
+                const std::string remark = v.describe_for(name);
+                if (std::none_of(d.notes.begin(), d.notes.end(),
+                                 [&](const note& n) { return n.message == remark; }))
+                    d.notes.push_back({remark, {}});
+            }
+        }
+        return false;
+    }
+
+    cell_value note_value(const lowered_reference& r) {
+        if (r.area.single()) {
+            if (const cell* c = book_.sheets[r.sheet].find(r.area.first))
+                return c->kind == cell_kind::formula
+                           ? formulas_[formula_at_.at(book_key(r.sheet, c->at))].result
+                           : (unit_of(r.sheet, c->at) ? from_unit(*unit_of(r.sheet, c->at))
+                                                      : cell_value{});
+            return {};
+        }
+        const auto it = range_cache_.find(
+            std::tuple{r.sheet, sheet::key(r.area.first), sheet::key(r.area.last)});
+        return it == range_cache_.end() ? cell_value{} : it->second;
+    }
+
+    // The numbers multiplied into the formula's result, each raised to the power it enters
+    // with (a divisor to -1, (B4/1000)^2 to -2): the outermost product only, where a
+    // conversion factor written into a formula stands.
+    void top_factors(std::uint32_t node, double exponent, std::vector<double>& out) const {
+        const auto& n = lowered_.tree.nodes[node];
+        switch (n.kind) {
+        case syntax::expr_kind::group:
+            top_factors(n.lhs, exponent, out);
+            return;
+        case syntax::expr_kind::multiply:
+        case syntax::expr_kind::divide:
+            top_factors(n.lhs, exponent, out);
+            top_factors(n.rhs, n.kind == syntax::expr_kind::divide ? -exponent : exponent, out);
+            return;
+        case syntax::expr_kind::power:
+            if (lowered_.tree.nodes[n.rhs].kind == syntax::expr_kind::number)
+                if (const auto e =
+                        rational::parse(listing_->text(lowered_.tree.nodes[n.rhs].range)))
+                    top_factors(n.lhs, exponent * e->to_double(), out);
+            return;
+        case syntax::expr_kind::number: {
+            const auto v = rational::parse(listing_->text(n.range));
+            if (v && !v->is_zero() && out.size() < 32)
+                out.push_back(std::pow(v->to_double(), exponent));
+            return;
+        }
+        default:
+            return;
+        }
+    }
+
+    void compare_with_written(const formula_cell& f, const syntax::formula& formula,
+                              const value_type& computed, const cell_unit& written) {
+        if (computed.zero)
+            return;
+        const std::string where_unit = fmt::format("'{}' ({})", written.unit.text, written.origin);
+        if (!(computed.dim == written.unit.dim)) {
+            diagnostic& d =
+                report(severity::error, rules::result_unit,
+                       fmt::format("this formula computes {}, but the unit written for its cell, "
+                                   "{}, is {}",
+                                   describe(computed.dim), where_unit, describe(written.unit.dim)),
+                       formula.range);
+            d.terms.push_back({{listing_, formula.range},
+                               std::string(listing_->text(formula.range)),
+                               computed.dim,
+                               {},
+                               {}});
+            add_input_notes(d, f);
+            return;
+        }
+        const bool uses_offset_values = [&] {
+            for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i)
+                if (lowered_.tree
+                        .references[lowered_.references[f.lowered.first_reference + i].reference]
+                        .offset != nullptr)
+                    return true;
+            return false;
+        }();
+        if (written.unit.offset != computed.offset &&
+            (computed.offset != nullptr || !uses_offset_values)) {
+            const unit_definition* on_scale =
+                computed.offset != nullptr ? computed.offset : written.unit.offset;
+            const bool temperature =
+                on_scale->exponents[static_cast<std::size_t>(base_dimension::temperature)] != 0;
+            diagnostic& d = report(
+                severity::error, rules::offset_scale,
+                computed.offset != nullptr
+                    ? fmt::format("this formula gives a value on the {} scale, but the unit "
+                                  "written for its cell, {}, is {}: the value is off by the "
+                                  "scale's zero",
+                                  computed.offset->symbol, where_unit,
+                                  temperature ? "an absolute temperature" : "an absolute pressure")
+                    : fmt::format("this formula gives {}, but the unit written for its cell, {}, "
+                                  "is on the {} scale: the value is off by the scale's zero",
+                                  temperature ? "an absolute temperature" : "an absolute pressure",
+                                  where_unit, written.unit.offset->symbol),
+                formula.range);
+            d.notes.push_back(
+                {temperature ? fmt::format("convert with the offset ({:g}), as in =B4-273.15, "
+                                           "or write the unit the formula gives",
+                                           on_scale->offset / on_scale->factor)
+                             : std::string("add or subtract the atmospheric pressure, or write "
+                                           "the unit the formula gives"),
+                 {}});
+            add_input_notes(d, f);
+            return;
+        }
+        const double needed = computed.scale / written.unit.scale;
+        if (!std::isfinite(needed) || std::abs(needed - 1.0) <= 1e-9)
+            return;
+        std::vector<double> factors;
+        top_factors(lowered_.tree.sides[formula.first_side].root, 1.0, factors);
+        // Published factors are often rounded to four significant figures (3.281, 0.0283):
+        // common practice; a relative 1e-3 accepts those and nothing a unit slip gives.
+        const auto near = [](double a, double b) { return std::abs(a / b - 1.0) <= 1e-3; };
+        const auto supplies = [&](double r) {
+            for (std::size_t i = 0; i < factors.size(); ++i) {
+                if (near(factors[i], r))
+                    return true;
+                for (std::size_t j = i + 1; j < factors.size(); ++j)
+                    if (near(factors[i] * factors[j], r))
+                        return true;
+            }
+            return false;
+        };
+        if (supplies(needed))
+            return;
+        const bool reversed = supplies(1.0 / needed);
+        // How far off the value shown is: after the factors already written, when what is
+        // left is a clean power of ten (a missed "/1000"); otherwise the whole ratio.
+        double written_product = 1.0;
+        for (const double x : factors)
+            written_product *= x;
+        const double left = needed / written_product;
+        const double decades = std::log10(std::abs(left));
+        const double off =
+            std::abs(decades - std::round(decades)) < 1e-9 && std::round(decades) != 0 ? left
+                                                                                       : needed;
+        diagnostic& d = report(
+            severity::error, rules::unit_scale,
+            reversed
+                ? fmt::format("the conversion factor in this formula is the wrong way round: "
+                              "to give {} it must multiply by {:.6g}, but it multiplies by "
+                              "{:.6g}",
+                              written.unit.text, needed, 1.0 / needed)
+                : fmt::format("as written, this formula does not give {}, the unit written "
+                              "for its cell: the value shown is {:.6g} times too {}",
+                              where_unit, off >= 1 ? off : 1.0 / off, off >= 1 ? "small" : "large"),
+            formula.range);
+        if (!reversed)
+            d.notes.push_back({fmt::format("its inputs give numbers in units of {:.6g} {}; "
+                                           "convert them in the formula, or write the unit they "
+                                           "give",
+                                           needed, written.unit.text),
+                               {}});
+        add_input_notes(d, f);
+    }
+
+    void add_input_notes(diagnostic& d, const formula_cell& f) {
+        std::size_t listed = 0;
+        std::vector<std::string> seen;
+        for (std::uint32_t i = 0; i < f.lowered.reference_count && listed < 6; ++i) {
+            const lowered_reference& r = lowered_.references[f.lowered.first_reference + i];
+            const std::string name = a1_name(r.area);
+            if (std::find(seen.begin(), seen.end(), name) != seen.end())
+                continue;
+            seen.push_back(name);
+            const cell_value v = note_value(r);
+            if (!v.dim)
+                continue;
+            ++listed;
+            d.notes.push_back({v.describe_for(name), {}});
+        }
+    }
+
+    // ---- Inputs without units -------------------------------------------------------------
+
+    void report_unitless_inputs() {
+        if (!unitless_.empty()) {
+            std::string text;
+            std::vector<cell_place> places;
+            std::vector<std::pair<span, std::uint64_t>> lines;
+            for (const auto& [key, users] : unitless_) {
+                const std::size_t s = static_cast<std::size_t>(key >> 45);
+                const cell_address a{static_cast<std::uint32_t>((key >> 20) & 0x1FFFFFFULL),
+                                     static_cast<std::uint32_t>(key & 0xFFFFF)};
+                const cell* c = book_.sheets[s].find(a);
+                const auto begin = static_cast<std::uint32_t>(text.size());
+                text += c != nullptr ? c->text : "";
+                lines.push_back({{begin, static_cast<std::uint32_t>(text.size())}, key});
+                text += '\n';
+                places.push_back({book_.sheets[s].name, a1_name(a)});
+            }
+            report_.sources.push_back(std::make_unique<source_file>(path_, std::move(text)));
+            report_.sources.back()->set_cell_places(std::move(places));
+            const source_file* values = report_.sources.back().get();
+            for (const auto& [where, key] : lines) {
+                const auto& users = unitless_.at(key);
+                std::vector<std::string> names;
+                for (std::size_t i = 0; i < users.size() && i < 5; ++i)
+                    names.push_back(cell_name(users[i]));
+                if (users.size() > 5)
+                    names.push_back(fmt::format("and {} more", users.size() - 5));
+                diagnostic d;
+                d.level = severity::warning;
+                d.rule = std::string(rules::no_unit);
+                d.message = fmt::format("this value feeds formulas but has no unit, so they are "
+                                        "checked without it: {}",
+                                        fmt::join(names, ", "));
+                d.where = {values, where};
+                d.notes.push_back({"write its unit in the cell to its right (as in m3/s, kPa, "
+                                   "-), in the column's heading (as in 'Flow [m3/s]'), or in the "
+                                   "workbook's sidecar",
+                                   {}});
+                out_.push_back(std::move(d));
+            }
+            report_.inputs_without_units += unitless_.size();
+        }
+        // In cell order: the listing, then the inputs.
+        std::stable_sort(out_.begin(), out_.end(), [](const diagnostic& a, const diagnostic& b) {
+            if (a.where.file != b.where.file)
+                return false;
+            return a.where.range.begin < b.where.range.begin;
+        });
+        for (auto& d : out_)
+            report_.diagnostics.push_back(std::move(d));
+    }
+};
+
+} // namespace
+
+void check_workbook(const workbook& book, const std::string& path, const outside_units& units,
+                    check_report& report) {
+    workbook_checker(book, path, units, report).run();
+}
+
+} // namespace plumb::sheets

@@ -1,0 +1,36 @@
+// Checks every formula cell of a workbook, in dependency order, through the one checker.
+#pragma once
+
+#include "plumb/check.hpp"
+#include "sheets/unit_text.hpp"
+#include "sheets/workbook.hpp"
+
+#include <string>
+#include <unordered_map>
+#include <vector>
+
+namespace plumb::sheets {
+
+// A unit given to cells by a sidecar or a dictionary, with where it was given.
+struct declared_unit {
+    written_unit unit;
+    std::string origin; // "the sidecar pump.cells.plumb", "the dictionary fluids.plumb"
+};
+
+// Units given outside the workbook: defined names declared as symbols (upper-cased names).
+struct outside_units {
+    std::unordered_map<std::string, declared_unit> names;
+    // Cells, ranges or whole columns given a unit by a sidecar: sheet (empty: any) and area.
+    struct area_unit {
+        std::string sheet;
+        cell_area area;
+        declared_unit unit;
+    };
+    std::vector<area_unit> areas;
+};
+
+// Appends the findings to report.diagnostics and the listing to report.sources.
+void check_workbook(const workbook& book, const std::string& path, const outside_units& units,
+                    check_report& report);
+
+} // namespace plumb::sheets

@@ -1,0 +1,21 @@
+// A workbook file on disk: read read-only, its sidecar and dictionaries found, checked.
+#pragma once
+
+#include "plumb/check.hpp"
+
+#include <filesystem>
+
+namespace plumb::sheets {
+
+// True for .xlsx and .ods (and .xlsm, whose formulas are the same).
+bool is_workbook_path(const std::filesystem::path& path);
+// True for book.cells.plumb: a workbook's sidecar, read with it and never checked alone.
+bool is_sidecar_path(const std::filesystem::path& path);
+// The sidecar that belongs beside a workbook: pump-station.xlsx -> pump-station.cells.plumb.
+std::filesystem::path sidecar_for(const std::filesystem::path& workbook);
+
+// Checks one workbook; an unreadable one is an `unreadable` finding and input_failed.
+void check_workbook_file(const std::filesystem::path& path, const check_options& options,
+                         check_report& report);
+
+} // namespace plumb::sheets

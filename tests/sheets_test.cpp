@@ -1,0 +1,231 @@
+// Workbooks: the A1 and OpenFormula grammars, unit texts as engineers type them, the
+// spreadsheet's operator precedence, and files that must be refused with a plain message.
+#include "check/formula_checker.hpp"
+#include "plumb/a1_formula.hpp"
+#include "plumb/check.hpp"
+#include "plumb/openformula.hpp"
+#include "plumb/render.hpp"
+#include "sheets/a1_front_end.hpp"
+#include "sheets/readers.hpp"
+#include "sheets/unit_text.hpp"
+#include "test_support.hpp"
+
+#include <doctest/doctest.h>
+#include <fstream>
+#include <tao/pegtl/contrib/analyze.hpp>
+#include <zip.h>
+
+using namespace plumb;
+using namespace plumb::sheets;
+
+namespace {
+
+// A zip package built in memory (libzip), for files no spreadsheet would save.
+std::string make_zip(const std::vector<std::pair<std::string, std::string>>& parts) {
+    zip_error_t error;
+    zip_error_init(&error);
+    zip_source_t* buffer = zip_source_buffer_create(nullptr, 0, 0, &error);
+    REQUIRE(buffer != nullptr);
+    zip_source_keep(buffer);
+    zip_t* z = zip_open_from_source(buffer, ZIP_TRUNCATE, &error);
+    REQUIRE(z != nullptr);
+    for (const auto& [name, data] : parts) {
+        zip_source_t* s = zip_source_buffer(z, data.data(), data.size(), 0);
+        REQUIRE(zip_file_add(z, name.c_str(), s, ZIP_FL_OVERWRITE) >= 0);
+    }
+    REQUIRE(zip_close(z) == 0);
+    REQUIRE(zip_source_open(buffer) == 0);
+    zip_source_seek(buffer, 0, SEEK_END);
+    const zip_int64_t size = zip_source_tell(buffer);
+    zip_source_seek(buffer, 0, SEEK_SET);
+    std::string out(static_cast<std::size_t>(size), '\0');
+    zip_source_read(buffer, out.data(), static_cast<zip_uint64_t>(size));
+    zip_source_close(buffer);
+    zip_source_free(buffer);
+    zip_error_fini(&error);
+    return out;
+}
+
+std::string refusal(const std::string& bytes, std::string_view name, read_limits limits = {}) {
+    try {
+        (void)read_workbook(bytes, name, limits);
+    } catch (const workbook_error& e) {
+        return e.what();
+    }
+    return "";
+}
+
+const char* ods_mimetype = "application/vnd.oasis.opendocument.spreadsheet";
+
+std::string ods_with_content(const std::string& content) {
+    return make_zip({{"mimetype", ods_mimetype}, {"content.xml", content}});
+}
+
+std::string read_corpus(const std::string& name) {
+    std::ifstream in(std::string(PLUMB_SOURCE_DIR) + "/corpus/sheets/" + name, std::ios::binary);
+    return {std::istreambuf_iterator<char>(in), std::istreambuf_iterator<char>()};
+}
+
+} // namespace
+
+TEST_CASE("sheets: the A1 and OpenFormula grammars have no PEGTL analysis issues") {
+    CHECK(tao::pegtl::analyze<plumb::a1::formula>() == 0);
+    CHECK(tao::pegtl::analyze<plumb::openformula::formula>() == 0);
+}
+
+TEST_CASE("sheets: OpenFormula references become A1 references (ODF 1.2 Part 2, 5.8)") {
+    CHECK(openformula_to_a1("of:=[.C42]+[$Sheet2.A1]") == "=C42+Sheet2!A1");
+    CHECK(openformula_to_a1("of:=SUM([.A1:.B5];2)") == "=SUM(A1:B5,2)");
+    CHECK(openformula_to_a1("of:=[$'Pump data'.$C$4]*2") == "='Pump data'!$C$4*2");
+    CHECK(openformula_to_a1("of:=IF([.A1]>0;\"a;b\";[.B1])") == "=IF(A1>0,\"a;b\",B1)");
+    CHECK_THROWS_AS(openformula_to_a1("of:=[.A1"), workbook_error);
+    CHECK(openformula_address_to_a1("$Inputs.$C$3") == "Inputs!$C$3");
+}
+
+TEST_CASE("sheets: unit texts read the way engineers type them") {
+    // SI Brochure 9th ed., Table 8: litre = 10^-3 m^3; Table 7: milli = 10^-3.
+    const auto flow = read_unit_text("m3/s");
+    REQUIRE(flow);
+    CHECK(flow->dim == plumb::test::typed(0, 3, -1));
+    CHECK(read_unit_text("L/s")->scale == doctest::Approx(1e-3));
+    CHECK(read_unit_text("mm4")->dim == plumb::test::typed(0, 4, 0));
+    CHECK(read_unit_text("mm4")->scale == doctest::Approx(1e-12));
+    CHECK(read_unit_text("m\u00B2")->dim == plumb::test::typed(0, 2, 0));
+    CHECK(read_unit_text("kg/m\u00B3")->dim == plumb::test::typed(1, -3, 0));
+    CHECK(read_unit_text("W/(m\u00B7K)")->dim == plumb::test::typed(1, 1, -3, -1));
+    CHECK(read_unit_text("N\u00B7m")->dim == plumb::test::typed(1, 2, -2));
+    CHECK(read_unit_text("mm/h")->dim == plumb::test::typed(0, 1, -1)); // h is the hour here
+    CHECK(read_unit_text("%")->scale == doctest::Approx(0.01));
+    for (const char* none : {"-", "1", "\u2014"})
+        CHECK(read_unit_text(none)->dim.is_dimensionless());
+    // Gauge: read against the standard atmosphere, 101 325 Pa (common practice).
+    for (const char* gauge : {"kPa(g)", "kPa g", "kPag", "psig", "barg"}) {
+        const auto u = read_unit_text(gauge);
+        REQUIRE_MESSAGE(u, gauge);
+        REQUIRE(u->offset != nullptr);
+        CHECK(u->offset->scale == unit_scale::gauge);
+    }
+    CHECK(read_unit_text("kPa")->offset == nullptr);
+    REQUIRE(read_unit_text("\u00B0C"));
+    CHECK(read_unit_text("\u00B0C")->offset != nullptr);
+    // A Celsius difference is a kelvin (SI Brochure 9th ed., 2.3.1).
+    CHECK(read_unit_text("\u0394\u00B0C")->offset == nullptr);
+    CHECK_FALSE(read_unit_text("Flow rate"));
+    CHECK_FALSE(read_unit_text("OK"));
+    CHECK(read_heading_unit("Flow [m3/s]")->dim == plumb::test::typed(0, 3, -1));
+    CHECK(read_heading_unit("D (mm)")->scale == doctest::Approx(1e-3));
+    CHECK(read_heading_unit("cp [kJ/(kg\u00B7K)]")->dim == plumb::test::typed(0, 2, -2, -1));
+    CHECK_FALSE(read_heading_unit("Flow rate (design)"));
+}
+
+TEST_CASE("sheets: unary minus binds tighter than ^, and % is a postfix operator") {
+    // ECMA-376 Part 1, 18.17.2.2: negation before percent before exponentiation.
+    workbook wb;
+    wb.sheets.push_back({"S", {}, {}});
+    const std::string text = "=-2^2\n=A1*5%\n=2^3^2\n100\n";
+    const source_file src("t", text);
+    lowered_book book;
+    book.tree.source = &src;
+    const span hundred{static_cast<std::uint32_t>(text.size() - 4),
+                       static_cast<std::uint32_t>(text.size() - 1)};
+    const auto a = lower_formula(book, wb, 0, 0, 5, hundred);
+    REQUIRE(a.formula != syntax::no_index);
+    const auto& root =
+        book.tree.nodes[book.tree.sides[book.tree.formulas[a.formula].first_side].root];
+    CHECK(root.kind == syntax::expr_kind::power);
+    CHECK(book.tree.nodes[root.lhs].kind == syntax::expr_kind::negate);
+    const auto b = lower_formula(book, wb, 0, 6, 12, hundred);
+    REQUIRE(b.formula != syntax::no_index);
+    const auto& product =
+        book.tree.nodes[book.tree.sides[book.tree.formulas[b.formula].first_side].root];
+    CHECK(product.kind == syntax::expr_kind::multiply);
+    CHECK(book.tree.nodes[product.rhs].kind == syntax::expr_kind::divide);
+    // '^' groups to the left: 2^3^2 is (2^3)^2.
+    const auto c = lower_formula(book, wb, 0, 13, 19, hundred);
+    const auto& power =
+        book.tree.nodes[book.tree.sides[book.tree.formulas[c.formula].first_side].root];
+    CHECK(power.kind == syntax::expr_kind::power);
+    CHECK(book.tree.nodes[power.lhs].kind == syntax::expr_kind::power);
+    const auto bad = lower_formula(book, wb, 0, 6, 10, hundred); // "=A1*"
+    CHECK(bad.formula == syntax::no_index);
+    CHECK(bad.syntax_error == std::string("expected a term after '*' or '/'"));
+}
+
+TEST_CASE("sheets: the corpus workbooks saved by LibreOffice read the same in both formats") {
+    const workbook x = read_workbook(read_corpus("well-test.xlsx"), "well-test.xlsx");
+    const workbook o = read_workbook(read_corpus("well-test.ods"), "well-test.ods");
+    REQUIRE(x.sheets.size() == 3);
+    REQUIRE(o.sheets.size() == 3);
+    for (std::size_t s = 0; s < 3; ++s) {
+        CHECK(x.sheets[s].name == o.sheets[s].name);
+        for (const auto& c : x.sheets[s].cells)
+            if (c.kind == cell_kind::formula) {
+                const cell* other = o.sheets[s].find(c.at);
+                REQUIRE(other != nullptr);
+                CHECK(other->text == c.text);
+            }
+    }
+    CHECK(x.names.size() == 2);
+    CHECK(o.names.size() == 2);
+}
+
+TEST_CASE("sheets: hostile and damaged files are refused with a plain message") {
+    // A compression bomb: 20 MiB of spaces packs into a few kilobytes.
+    const std::string bomb = ods_with_content(std::string(20U << 20, ' '));
+    CHECK(refusal(bomb, "b.ods").find("compression bomb") != std::string::npos);
+    // Entities: any DOCTYPE is refused before parsing, so no expansion can happen.
+    const std::string laughs =
+        "<?xml version=\"1.0\"?><!DOCTYPE lolz [<!ENTITY lol \"lol\"><!ENTITY lol2 "
+        "\"&lol;&lol;&lol;&lol;\">]><office:document-content>&lol2;</office:document-content>";
+    CHECK(refusal(ods_with_content(laughs), "e.ods").find("DOCTYPE") != std::string::npos);
+    // Depth: 100 000 nested elements.
+    std::string deep;
+    for (int i = 0; i < 100000; ++i)
+        deep += "<a>";
+    for (int i = 0; i < 100000; ++i)
+        deep += "</a>";
+    CHECK(refusal(ods_with_content(deep), "d.ods").find("nests") != std::string::npos);
+    // Truncation: half of a workbook LibreOffice saved.
+    const std::string whole = read_corpus("pump-sizing.xlsx");
+    REQUIRE(whole.size() > 1000);
+    CHECK(refusal(whole.substr(0, whole.size() / 2), "t.xlsx").find("zip") != std::string::npos);
+    // A word-processing package named .xlsx.
+    const std::string docx =
+        make_zip({{"[Content_Types].xml",
+                   "<Types><Override PartName=\"/word/document.xml\" ContentType=\"application/"
+                   "vnd.openxmlformats-officedocument.wordprocessingml.document.main+xml\"/>"
+                   "</Types>"},
+                  {"word/document.xml", "<w:document/>"}});
+    CHECK(refusal(docx, "w.xlsx").find("word-processing") != std::string::npos);
+    // An encrypted workbook is a compound file, not a zip.
+    CHECK(refusal(std::string("\xD0\xCF\x11\xE0\xA1\xB1\x1A\xE1", 8) + std::string(600, '\0'),
+                  "p.xlsx")
+              .find("encrypted") != std::string::npos);
+    CHECK(refusal("just some text", "n.xlsx").find("not a zip") != std::string::npos);
+    // Mislabelled: an OpenDocument spreadsheet named .xlsx.
+    CHECK(refusal(read_corpus("pump-sizing.ods"), "m.xlsx").find("rename") != std::string::npos);
+    // Too many cells for the limit.
+    read_limits few;
+    few.max_cells = 10;
+    CHECK(refusal(whole, "c.xlsx", few).find("cells") != std::string::npos);
+}
+
+TEST_CASE("sheets: a bad workbook is exit status 2 and the good one beside it is still checked") {
+    const std::string dir = std::string(PLUMB_SOURCE_DIR) + "/corpus/sheets/";
+    const auto bad = std::filesystem::temp_directory_path() / "plumb-bad-workbook.xlsx";
+    {
+        std::ofstream out(bad, std::ios::binary);
+        out << "not a workbook";
+    }
+    const check_report report = check_paths({bad, dir + "pump-sizing.xlsx"});
+    std::filesystem::remove(bad);
+    CHECK(report.input_failed);
+    CHECK(report.workbooks_checked == 1);
+    CHECK(report.cells_checked > 20);
+    // Findings are placed by sheet and cell, in text and in JSON.
+    const std::string text = render_text(report);
+    CHECK(text.find("pump-sizing.xlsx:Pump!C14: error:") != std::string::npos);
+    const std::string json = render_json(report);
+    CHECK(json.find("\"sheet\": \"Pump\", \"cell\": \"C14\"") != std::string::npos);
+    CHECK(json.find("\"inputs_without_units\": 1") != std::string::npos);
+}
