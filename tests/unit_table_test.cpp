@@ -11,6 +11,7 @@
 #include <cmath>
 #include <cstdint>
 #include <map>
+#include <optional>
 #include <set>
 #include <string>
 #include <string_view>
@@ -480,4 +481,19 @@ TEST_CASE("exact factors: read once, prefixes exact, inexact rows left to the do
     CHECK_FALSE(exact("Da").has_value());
     // NIST SP 811 (2008), B.8: the acre on the U.S. survey foot is printed rounded.
     CHECK_FALSE(exact("acre").has_value());
+}
+
+TEST_CASE("exact products and powers of factors; a rational power is left to the double") {
+    // SI Brochure 9th ed., Table 7: milli = 10⁻³, so (10⁻³)² = 10⁻⁶ exactly.
+    const std::optional<rational> milli = rational(1, 1000);
+    CHECK(*plumb::exact_power(milli, rational(2)) == rational(1, 1000000));
+    CHECK(*plumb::exact_power(milli, rational(-2)) == rational(1000000));
+    CHECK_FALSE(plumb::exact_power(milli, rational(1, 2)).has_value());
+    CHECK_FALSE(plumb::exact_power(std::nullopt, rational(2)).has_value());
+    // NIST SP 811 (2008), B.8: 1 L/s = 10⁻³ m³/s; 1 gal/min = 6.309020E-05 m³/s.
+    CHECK(*plumb::exact_product(rational(1, 1000), rational(60), false) == rational(3, 50));
+    CHECK_FALSE(plumb::exact_product(rational(1), rational(0), true).has_value());
+    // Too large for 64 bits: empty, never wrapped.
+    const std::optional<rational> big = rational(1000000000000LL);
+    CHECK_FALSE(plumb::exact_power(big, rational(2)).has_value());
 }

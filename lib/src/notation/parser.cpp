@@ -503,18 +503,11 @@ std::optional<unit_value> lookup_unit(std::string_view text, const parse_state& 
             return unit_value{c->dim(), c->value, nullptr, true, true, std::nullopt};
     }
     if (const syntax::defined_unit* own = s.find_defined_unit(text))
-        return unit_value{own->dim,
-                          own->si_factor,
-                          own->origin ? &own->origin->row : nullptr,
-                          true,
-                          false,
-                          std::nullopt};
+        return unit_value{own->dim, own->si_factor, own->origin ? &own->origin->row : nullptr,
+                          true,     false,          std::nullopt};
     if (const auto unit = unit_table::standard().resolve(text))
-        return unit_value{unit->dim(),        unit->factor(),
-                          unit->prefix ? nullptr : unit->unit,
-                          true,
-                          false,
-                          exact_factor(*unit)};
+        return unit_value{unit->dim(), unit->factor(), unit->prefix ? nullptr : unit->unit,
+                          true,        false,          exact_factor(*unit)};
     return std::nullopt;
 }
 
