@@ -227,3 +227,26 @@ TEST_CASE("in the argument of exp or ln, the terms with a dimension are the odd 
     REQUIRE(f.size() == 1);
     CHECK(marked(r, *f[0]) == "x");
 }
+
+TEST_CASE("exact scales: units defined exactly agree exactly, and differ when they differ") {
+    // NIST SP 811 (2008), B.8: gallon (U.S.) = 3.785412E-03 m³, exactly 0.003785411784 m³;
+    // minute = 60 s (SI Brochure 9th ed., Table 8). So gal/min is exactly one gpm row.
+    SUBCASE("gal/min beside gpm, and ft^3 beside ft3, agree") {
+        CHECK(clean(check("Q_1 : gal/min\nQ_2 : gpm\n", "Q_1 = Q_2")));
+        CHECK(clean(check("V_1 : ft^3\nV_2 : ft3\n", "V_1 = V_2")));
+    }
+    SUBCASE("gal/min beside L/s is off by a factor and is found") {
+        const auto r = check("Q_1 : gal/min\nQ_2 : L/s\n", "Q_1 = Q_2");
+        CHECK(findings(r, plumb::rules::unit_scale).size() == 1);
+    }
+    SUBCASE("m^3/s beside 1000 L/s agree; (L/1000)^2 with L in mm is m²") {
+        // SI Brochure 9th ed., Table 8: 1 L = 10⁻³ m³.
+        CHECK(clean(check("Q_1 : m^3/s\nQ_2 : L/s\n", "Q_1 = Q_2/1000")));
+        CHECK(clean(check("A : m^2\nL : mm\n", "A = (L/1000)^2")));
+    }
+    SUBCASE("a rational power falls back to the double and still agrees") {
+        // v = sqrt(g h) in coherent units (shallow-water wave speed, common practice).
+        CHECK(clean(check("v : m/s\ng : m/s^2\nh : m\n", "v = (g*h)^(1/2)")));
+        CHECK(clean(check("v : m/s\nk : m^(1/2)\nh : m\ng : m^(1/2)/s\n", "v = g*h^(1/2)")));
+    }
+}

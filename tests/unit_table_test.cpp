@@ -3,6 +3,7 @@
 #include "plumb/unit_table.hpp"
 
 #include "test_support.hpp"
+#include "units/exact_factor.hpp"
 
 #include <doctest/doctest.h>
 
@@ -10,6 +11,7 @@
 #include <cmath>
 #include <cstdint>
 #include <map>
+#include <optional>
 #include <set>
 #include <string>
 #include <string_view>
@@ -448,4 +450,50 @@ TEST_CASE("unknown symbols resolve to nothing and suggest near ones") {
 
     CHECK(table().nearest("Pas", 1).size() == 1);
     CHECK(table().nearest("xqzwvjk").empty());
+}
+
+TEST_CASE("exact factors: read once, prefixes exact, inexact rows left to the double") {
+    const auto exact = [](std::string_view symbol) {
+        const auto u = table().resolve(symbol);
+        REQUIRE(u.has_value());
+        return plumb::exact_factor(*u);
+    };
+    // NIST SP 811 (2008), B.8: 1 psi = 6.894757E+03 Pa, exactly 0.45359237 kg × 9.80665 m/s² /
+    // (0.0254 m)² = 8896443230521/1290320000 Pa.
+    REQUIRE(exact("psi").has_value());
+    CHECK(*exact("psi") == rational(8896443230521, 1290320000));
+    // NIST SP 811 (2008), B.8: 1 ft = 0.3048 m exactly; 1 ft³ = 2.831685E-02 m³, exactly
+    // 0.3048³ = 0.028316846592. Double arithmetic gives 0.3048³ only to within rounding.
+    const rational foot = *exact("ft");
+    CHECK(foot == rational(3048, 10000));
+    CHECK(foot * foot * foot == rational(28316846592, 1000000000000));
+    CHECK(*exact("ft3") == foot * foot * foot);
+    // SI Brochure 9th ed., Table 7: milli = 10⁻³, mega = 10⁶; the litre is 10⁻³ m³ (Table 8).
+    CHECK(*exact("mm") == rational(1, 1000));
+    CHECK(*exact("MPa") == rational(1000000));
+    CHECK(*exact("mL") == rational(1, 1000000));
+    // NIST SP 811 (2008), B.8: the U.S. gallon is 3.785412E-03 m³, exactly 231 in³ =
+    // 0.003785411784 m³; a gallon per minute is that over 60 s.
+    CHECK(*exact("gal") == rational(3785411784, 1000000000000));
+    CHECK(*exact("gal") / *exact("min") == *exact("gpm"));
+    CHECK(*exact("gpm") == rational(630901964, 10000000000000));
+    // SI Brochure 9th ed., Table 8: the dalton is measured (CODATA), not defined: no exact value.
+    CHECK_FALSE(exact("Da").has_value());
+    // NIST SP 811 (2008), B.8: the acre on the U.S. survey foot is printed rounded.
+    CHECK_FALSE(exact("acre").has_value());
+}
+
+TEST_CASE("exact products and powers of factors; a rational power is left to the double") {
+    // SI Brochure 9th ed., Table 7: milli = 10⁻³, so (10⁻³)² = 10⁻⁶ exactly.
+    const std::optional<rational> milli = rational(1, 1000);
+    CHECK(*plumb::exact_power(milli, rational(2)) == rational(1, 1000000));
+    CHECK(*plumb::exact_power(milli, rational(-2)) == rational(1000000));
+    CHECK_FALSE(plumb::exact_power(milli, rational(1, 2)).has_value());
+    CHECK_FALSE(plumb::exact_power(std::nullopt, rational(2)).has_value());
+    // NIST SP 811 (2008), B.8: 1 L/s = 10⁻³ m³/s; 1 gal/min = 6.309020E-05 m³/s.
+    CHECK(*plumb::exact_product(rational(1, 1000), rational(60), false) == rational(3, 50));
+    CHECK_FALSE(plumb::exact_product(rational(1), rational(0), true).has_value());
+    // Too large for 64 bits: empty, never wrapped.
+    const std::optional<rational> big = rational(1000000000000LL);
+    CHECK_FALSE(plumb::exact_power(big, rational(2)).has_value());
 }

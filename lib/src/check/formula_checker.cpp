@@ -6,6 +6,7 @@
 #include "check/functions.hpp"
 #include "check/scale_match.hpp"
 #include "plumb/rules.hpp"
+#include "units/exact_factor.hpp"
 
 #include <algorithm>
 #include <array>
@@ -30,6 +31,9 @@ struct typed {
     // SI value per written value: the product of the declared units' factors. Terms that agree
     // in dimension but not in scale give numbers off by that factor.
     double scale = 1.0;
+    // The same exactly, where every unit along the way is defined exactly and the powers are
+    // whole; empty otherwise, and the double decides.
+    std::optional<rational> exact_scale = rational(1);
     // Set while the value is on an offset scale (°C, °F, gauge pressure): it may be compared
     // and subtracted, but not multiplied, divided or raised to a power. Names the scale.
     const unit_definition* offset = nullptr;
@@ -475,6 +479,7 @@ class checker {
         t.dim = *q.dim;
         // A constant stands for its SI value; a number in braces is in the unit written.
         t.scale = q.constant ? 1.0 : q.si_factor;
+        t.exact_scale = q.constant ? std::optional<rational>(rational(1)) : q.si_exact;
         if (q.single_unit != nullptr && q.single_unit->scale != unit_scale::absolute) {
             t.offset = q.single_unit;
             t.origin = q.single_unit->offset;
@@ -532,6 +537,7 @@ class checker {
         typed t;
         t.dim = *entry->dim;
         t.scale = entry->si_factor;
+        t.exact_scale = entry->si_exact;
         t.offset = entry->offset_unit;
         if (t.offset != nullptr) {
             t.origin = t.offset->offset;
@@ -630,7 +636,7 @@ class checker {
         // After a unit-scale finding the scale is unknown (NaN), so it is not reported again
         // further up; the dimension stays known.
         double unit = 1.0;
-        result.scale = check_scales(terms, "terms of this sum", unit)
+        result.scale = check_scales(terms, "terms of this sum", unit, &result.exact_scale)
                            ? unit
                            : std::numeric_limits<double>::quiet_NaN();
         literals_.resize(literal_base);
@@ -661,6 +667,7 @@ class checker {
             if (t.numeric && t.value && !t.zero && t.dim.is_dimensionless()) {
                 t.dim = offset_term->dim;
                 t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
+                t.exact_scale.reset();
             }
         }
         return offset_term;
@@ -879,6 +886,7 @@ class checker {
             literals_.resize(literal_base);
         }
         result.scale = unit;
+        result.exact_scale.reset();
         const double slack = tolerance + 1e-9 * std::abs(final_origin) + 1e-9;
         if (points == 0) {
             if (std::abs(final_origin) > slack) {
@@ -967,9 +975,15 @@ class checker {
     // Terms of one dimension in different units give numbers off by a factor, unless numbers
     // in the formula supply that conversion, the right way round. `unit` receives the SI value
     // of the unit they agree in. False when a finding was reported.
-    bool check_scales(std::span<const operand> ops, std::string_view what, double& unit) {
-        // Fast path: nearly every meeting point has one unit and no numbers to weigh.
+    bool check_scales(std::span<const operand> ops, std::string_view what, double& unit,
+                      std::optional<rational>* exact_unit = nullptr) {
+        if (exact_unit != nullptr)
+            exact_unit->reset();
+        // Fast path: nearly every meeting point has one unit and no numbers to weigh. Where
+        // every scale is exact they are compared exactly, else as doubles.
         {
+            const rational* exact_first = nullptr;
+            bool all_exact = true;
             double first = 0.0;
             bool plain = true;
             for (const auto& op : ops) {
@@ -983,15 +997,22 @@ class checker {
                     break;
                 }
                 const double s = number ? 1.0 : op.type.scale;
+                static const rational one(1);
+                const rational* exact =
+                    number ? &one : (op.type.exact_scale ? &*op.type.exact_scale : nullptr);
+                all_exact = all_exact && exact != nullptr;
                 if (first == 0.0) {
                     first = s;
-                } else if (s != first) {
+                    exact_first = exact;
+                } else if (all_exact ? !(*exact == *exact_first) : s != first) {
                     plain = false;
                     break;
                 }
             }
             if (plain) {
                 unit = first == 0.0 ? 1.0 : first;
+                if (exact_unit != nullptr && all_exact)
+                    *exact_unit = exact_first != nullptr ? *exact_first : rational(1);
                 return true;
             }
         }
@@ -1347,6 +1368,7 @@ class checker {
             }
             result.inferred = result.inferred || t.inferred;
             result.scale = divided ? result.scale / t.scale : result.scale * t.scale;
+            result.exact_scale = exact_product(result.exact_scale, t.exact_scale, divided);
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
             if (result.known)
@@ -1396,8 +1418,12 @@ class checker {
         }
         typed result;
         result.numeric = base.numeric && exponent.numeric;
-        if (exponent.value)
+        result.exact_scale.reset();
+        if (exponent.value) {
             result.scale = std::pow(base.scale, exponent.value->to_double());
+            // A whole power stays exact; a rational one falls back to the double.
+            result.exact_scale = plumb::exact_power(base.exact_scale, *exponent.value);
+        }
         if (base.dim.is_dimensionless()) {
             result.value = exact_power(base.value, exponent.value);
             return result;
@@ -1540,6 +1566,7 @@ class checker {
             }
             result.dim = args[0].type.dim.pow(f->power);
             result.scale = std::pow(args[0].type.scale, f->power.to_double());
+            result.exact_scale = plumb::exact_power(args[0].type.exact_scale, f->power);
             return result;
         case function_rule::same:
             keep_first_argument_numbers(1.0);
@@ -1547,6 +1574,7 @@ class checker {
                 return unknown_type(args[0].type.inferred);
             result.dim = args[0].type.dim;
             result.scale = args[0].type.scale;
+            result.exact_scale = args[0].type.exact_scale;
             result.offset = args[0].type.offset;
             return result;
         case function_rule::dimensionless:
@@ -1573,8 +1601,8 @@ class checker {
                 return unknown_type();
             }
             double unit = 1.0;
-            const bool scales_agree =
-                check_scales(args, fmt::format("arguments of {}", f->name), unit);
+            const bool scales_agree = check_scales(args, fmt::format("arguments of {}", f->name),
+                                                   unit, &result.exact_scale);
             literals_.resize(literal_start);
             if (f->rule == function_rule::angle_of)
                 return result;
@@ -1612,6 +1640,7 @@ class checker {
         typed t;
         t.dim = *r.dim;
         t.scale = r.scale;
+        t.exact_scale.reset();
         t.offset = r.offset;
         t.value = r.value;
         // A cell holds a reading, as a declared temperature or pressure does; a cell has no
@@ -1673,6 +1702,7 @@ class checker {
         result.numeric =
             std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.numeric; });
         result.scale = scales_agree ? unit : std::numeric_limits<double>::quiet_NaN();
+        result.exact_scale.reset();
         for (const auto& o : tail)
             if (o.type.offset != nullptr)
                 result.offset = o.type.offset;
@@ -1725,6 +1755,8 @@ class checker {
             typed result;
             // The value in degrees counts π/180 of the radian.
             result.scale = f.rule == function_rule::to_degrees ? std::numbers::pi / 180.0 : 1.0;
+            if (f.rule == function_rule::to_degrees)
+                result.exact_scale.reset();
             return result;
         }
         default:
@@ -1798,6 +1830,8 @@ class checker {
         typed result;
         result.dim = args[0].type.dim / args[1].type.dim.pow(order);
         result.scale = args[0].type.scale / std::pow(args[1].type.scale, order.to_double());
+        result.exact_scale = exact_product(
+            args[0].type.exact_scale, plumb::exact_power(args[1].type.exact_scale, order), true);
         return result;
     }
 
@@ -1832,6 +1866,8 @@ class checker {
         typed result;
         result.dim = args[0].type.dim * args[1].type.dim;
         result.scale = args[0].type.scale * args[1].type.scale;
+        result.exact_scale =
+            exact_product(args[0].type.exact_scale, args[1].type.exact_scale, false);
         return result;
     }
 };

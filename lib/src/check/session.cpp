@@ -547,6 +547,7 @@ class session {
             if (decl.kind.by_unit) {
                 entry.unit_text = f->source->text(decl.spec);
                 entry.si_factor = decl.kind.si_factor;
+                entry.si_exact = decl.kind.si_exact;
                 if (decl.kind.single_unit != nullptr &&
                     decl.kind.single_unit->scale != unit_scale::absolute)
                     entry.offset_unit = decl.kind.single_unit;

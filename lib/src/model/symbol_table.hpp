@@ -21,8 +21,9 @@ struct symbol_entry {
     std::string_view unit_text; // the declared unit as written ("mm", "kg/m^3"); empty for
                                 // a bracket dimension
     double si_factor = 1.0;     // SI value of one declared unit; 1 for bracket dimensions
-    const unit_definition* offset_unit = nullptr; // set when declared in °C, °F, psig...
-    bool to_infer = false;                        // declared "X : ?"
+    std::optional<rational> si_exact = rational(1); // the same exactly; empty when not exact
+    const unit_definition* offset_unit = nullptr;   // set when declared in °C, °F, psig...
+    bool to_infer = false;                          // declared "X : ?"
     bool local = false; // declared in the file being checked, not in a dictionary
     bool used = false;
     // A temperature or pressure in an absolute unit: a reading (1) or a difference (0), worked

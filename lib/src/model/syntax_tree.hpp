@@ -53,8 +53,9 @@ enum class function_names : std::uint8_t { notation, spreadsheet };
 
 // A number with a unit, or a named constant, inside a formula.
 struct quantity_literal {
-    std::optional<dimension> dim; // empty when the unit was unknown (reported)
-    double si_factor = 1.0;       // SI value of one unit (of the constant: its SI value)
+    std::optional<dimension> dim;     // empty when the unit was unknown (reported)
+    double si_factor = 1.0;           // SI value of one unit (of the constant: its SI value)
+    std::optional<rational> si_exact; // the same exactly, where the units are defined exactly
     const unit_definition* single_unit = nullptr; // a lone unit without prefix, for offsets
     bool constant = false;
 };
@@ -94,7 +95,8 @@ struct formula {
 struct declared_kind {
     std::optional<dimension> dim; // empty when the spec had an error (already reported)
     double si_factor = 1.0;       // SI value of one unit of the spec; 1 for bracket dimensions
-    const unit_definition* single_unit = nullptr; // set when the spec is one unit, no algebra
+    std::optional<rational> si_exact = rational(1); // the same exactly; empty when not exact
+    const unit_definition* single_unit = nullptr;   // set when the spec is one unit, no algebra
     bool by_unit = false;
     bool to_infer = false; // "X : ?"
 };

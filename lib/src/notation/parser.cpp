@@ -7,6 +7,7 @@
 #include "plumb/notation.hpp"
 #include "plumb/notation_errors.hpp"
 #include "plumb/rules.hpp"
+#include "units/exact_factor.hpp"
 
 #include <algorithm>
 #include <cctype>
@@ -75,6 +76,8 @@ struct unit_value {
     const unit_definition* single = nullptr;
     bool ok = true;
     bool constant = false;
+    // The factor exactly, where every unit in it is defined exactly; else the double stands.
+    std::optional<rational> exact = rational(1);
 };
 
 struct parse_state {
@@ -228,6 +231,7 @@ template <typename In> void push_quantity(const In& in, parse_state& s) {
     if (u.ok)
         q.dim = u.dim;
     q.si_factor = u.factor;
+    q.si_exact = u.constant ? std::nullopt : u.exact;
     q.single_unit = u.single;
     q.constant = u.constant;
     s.out.quantities.push_back(q);
@@ -496,14 +500,14 @@ template <> struct action<nt::dimension_brackets> {
 std::optional<unit_value> lookup_unit(std::string_view text, const parse_state& s) {
     if (s.in_braces) {
         if (const physical_constant* c = find_constant(text))
-            return unit_value{c->dim(), c->value, nullptr, true, true};
+            return unit_value{c->dim(), c->value, nullptr, true, true, std::nullopt};
     }
     if (const syntax::defined_unit* own = s.find_defined_unit(text))
-        return unit_value{own->dim, own->si_factor, own->origin ? &own->origin->row : nullptr, true,
-                          false};
+        return unit_value{own->dim, own->si_factor, own->origin ? &own->origin->row : nullptr,
+                          true,     false,          std::nullopt};
     if (const auto unit = unit_table::standard().resolve(text))
-        return unit_value{unit->dim(), unit->factor(), unit->prefix ? nullptr : unit->unit, true,
-                          false};
+        return unit_value{unit->dim(), unit->factor(), unit->prefix ? nullptr : unit->unit,
+                          true,        false,          exact_factor(*unit)};
     return std::nullopt;
 }
 
@@ -551,6 +555,7 @@ std::optional<unit_value> lookup_digit_power(std::string_view text, const parse_
     const int power = text.back() - '0';
     base->dim = base->dim.pow(rational(power));
     base->factor = std::pow(base->factor, power);
+    base->exact = exact_power(base->exact, rational(power));
     base->single = nullptr;
     return base;
 }
@@ -603,7 +608,7 @@ template <> struct action<nt::unit_symbol> {
                              definition_template(text, s)),
                  {}});
         }
-        s.units.push_back({{}, 1.0, nullptr, false});
+        s.units.push_back({{}, 1.0, nullptr, false, false, std::nullopt});
     }
 };
 // m², s⁻¹: the exponent in superscript digits.
@@ -649,7 +654,7 @@ template <> struct action<nt::unit_one> {
 };
 template <> struct action<nt::unit_percent> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
-        s.units.push_back({{}, 0.01, nullptr, true});
+        s.units.push_back({{}, 0.01, nullptr, true, false, rational(1, 100)});
     }
 };
 template <> struct action<nt::unit_exponent> {
@@ -664,6 +669,7 @@ template <> struct action<nt::unit_power> {
         s.pending_exponent.reset();
         top.dim = top.dim.pow(e);
         top.factor = std::pow(top.factor, e.to_double());
+        top.exact = exact_power(top.exact, e); // a rational power is left to the double
         top.single = nullptr;
     }
 };
@@ -681,6 +687,7 @@ template <bool Divide> struct unit_combine {
         unit_value& lhs = s.units.back();
         lhs.dim = Divide ? lhs.dim / rhs.dim : lhs.dim * rhs.dim;
         lhs.factor = Divide ? lhs.factor / rhs.factor : lhs.factor * rhs.factor;
+        lhs.exact = exact_product(lhs.exact, rhs.exact, Divide);
         lhs.single = nullptr;
         lhs.ok = lhs.ok && rhs.ok;
     }
@@ -710,6 +717,7 @@ template <> struct action<nt::declaration_spec> {
         if (v.ok)
             s.pending_kind.dim = v.dim;
         s.pending_kind.si_factor = v.factor;
+        s.pending_kind.si_exact = v.exact;
         s.pending_kind.single_unit = v.single;
         s.pending_kind.by_unit = true;
     }

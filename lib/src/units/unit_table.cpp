@@ -1,8 +1,11 @@
 // Lookup over the built-in unit rows: exact symbols, SI prefixes, and "did you mean".
 #include "plumb/unit_table.hpp"
 
+#include "units/exact_factor.hpp"
+
 #include <algorithm>
 #include <cstdlib>
+#include <functional>
 #include <tuple>
 #include <unordered_map>
 
@@ -34,6 +37,76 @@ dimension unit_definition::dim() const {
     for (std::size_t i = 0; i < base_dimension_count; ++i)
         e[i] = rational(exponents[i]);
     return dimension::from_exponents(e);
+}
+
+namespace {
+
+// The exact factor of one row, or empty: see exact_factor() in the header.
+std::optional<rational> read_exact_factor(const unit_definition& row) {
+    if (row.source.find("rounded") != std::string_view::npos ||
+        row.source.find("measured") != std::string_view::npos)
+        return std::nullopt;
+    const auto value = rational::parse(row.exact_factor);
+    if (!value || !(value->num() > 0))
+        return std::nullopt;
+    return value;
+}
+
+// start × base^n for whole n, exactly; empty on overflow or a zero base with n < 0.
+std::optional<rational> exact_power_product(std::optional<rational> start, rational base,
+                                            std::int64_t n) {
+    if (!start || (base.is_zero() && n < 0) || n > 64 || n < -64)
+        return std::nullopt;
+    try {
+        rational result = *start;
+        for (std::int64_t i = 0; i < (n < 0 ? -n : n); ++i)
+            result = n < 0 ? result / base : result * base;
+        return result;
+    } catch (const arithmetic_overflow&) {
+        return std::nullopt;
+    }
+}
+
+} // namespace
+
+std::optional<rational> exact_factor(const unit_definition& row) {
+    // A function-local static is initialised once, thread-safely (C++11 "magic statics").
+    static const std::vector<std::optional<rational>> cache = [] {
+        std::vector<std::optional<rational>> out;
+        for (const unit_definition& u : detail::builtin_units())
+            out.push_back(read_exact_factor(u));
+        return out;
+    }();
+    const auto rows = detail::builtin_units();
+    // std::less gives a total order even over pointers into different arrays.
+    if (!rows.empty() && !std::less<>{}(&row, rows.data()) &&
+        std::less<>{}(&row, rows.data() + rows.size()))
+        return cache[static_cast<std::size_t>(&row - rows.data())];
+    return read_exact_factor(row);
+}
+
+std::optional<rational> exact_factor(const resolved_unit& unit) {
+    auto value = exact_factor(*unit.unit);
+    if (!value || unit.prefix == nullptr)
+        return value;
+    return exact_power_product(value, rational(10), unit.prefix->power_of_ten);
+}
+
+std::optional<rational> exact_product(const std::optional<rational>& a,
+                                      const std::optional<rational>& b, bool divide) {
+    if (!a || !b || (divide && b->is_zero()))
+        return std::nullopt;
+    try {
+        return divide ? *a / *b : *a * *b;
+    } catch (const arithmetic_overflow&) {
+        return std::nullopt;
+    }
+}
+
+std::optional<rational> exact_power(const std::optional<rational>& a, const rational& power) {
+    if (!a || !power.is_integer())
+        return std::nullopt; // a rational power of a unit is left to the double
+    return exact_power_product(rational(1), *a, power.num());
 }
 
 double resolved_unit::factor() const {
