@@ -1,5 +1,7 @@
 // End-to-end tests of the command line: each test runs the real plumb binary on files written
 // into a fresh temporary folder and checks its exit status, stdout and stderr.
+#include "process_support.hpp"
+
 #include "plumb/render.hpp"
 #include "plumb/rules.hpp"
 #include "plumb/version.hpp"
@@ -39,11 +41,7 @@ namespace {
 // ---------------------------------------------------------------------------------------------
 // Running the binary
 
-struct run_result {
-    int status = -1; // exit status; -1 when the process did not exit normally
-    std::string out;
-    std::string err;
-};
+using run_result = plumb_test::process_result;
 
 // Environment overrides: a value sets the variable, std::nullopt removes it.
 using env_changes = std::map<std::string, std::optional<std::string>>;
@@ -52,7 +50,6 @@ using env_changes = std::map<std::string, std::optional<std::string>>;
 // environment unless `env` says otherwise, so the host's settings cannot change the results.
 run_result run_plumb(const std::vector<std::string>& args, env_changes env = {}) {
     env.try_emplace("NO_COLOR", std::nullopt);
-
     std::vector<std::string> env_strings;
     for (char** e = environ; *e != nullptr; ++e) {
         const std::string_view entry(*e);
@@ -63,75 +60,11 @@ run_result run_plumb(const std::vector<std::string>& args, env_changes env = {})
     for (const auto& [name, value] : env)
         if (value)
             env_strings.push_back(name + "=" + *value);
-    std::vector<char*> envp;
-    for (auto& s : env_strings)
-        envp.push_back(s.data());
-    envp.push_back(nullptr);
-
-    std::vector<std::string> argv_strings{PLUMB_CLI_PATH};
-    argv_strings.insert(argv_strings.end(), args.begin(), args.end());
-    std::vector<char*> argv;
-    for (auto& s : argv_strings)
-        argv.push_back(s.data());
-    argv.push_back(nullptr);
-
-    int out_pipe[2];
-    int err_pipe[2];
-    if (pipe(out_pipe) != 0 || pipe(err_pipe) != 0)
-        throw std::runtime_error("pipe failed");
-
-    posix_spawn_file_actions_t actions;
-    posix_spawn_file_actions_init(&actions);
-    posix_spawn_file_actions_addclose(&actions, out_pipe[0]);
-    posix_spawn_file_actions_addclose(&actions, err_pipe[0]);
-    posix_spawn_file_actions_adddup2(&actions, out_pipe[1], STDOUT_FILENO);
-    posix_spawn_file_actions_adddup2(&actions, err_pipe[1], STDERR_FILENO);
-    posix_spawn_file_actions_addclose(&actions, out_pipe[1]);
-    posix_spawn_file_actions_addclose(&actions, err_pipe[1]);
-    posix_spawn_file_actions_addopen(&actions, STDIN_FILENO, "/dev/null", O_RDONLY, 0);
-
-    pid_t pid = 0;
-    const int spawned =
-        posix_spawn(&pid, argv_strings[0].c_str(), &actions, nullptr, argv.data(), envp.data());
-    posix_spawn_file_actions_destroy(&actions);
-    close(out_pipe[1]);
-    close(err_pipe[1]);
-    if (spawned != 0) {
-        close(out_pipe[0]);
-        close(err_pipe[0]);
-        throw std::runtime_error(
-            fmt::format("cannot run {}: {}", argv_strings[0], std::strerror(spawned)));
-    }
-
-    // Read both pipes together, so that a child filling one cannot block on the other.
-    run_result result;
-    pollfd fds[2] = {{out_pipe[0], POLLIN, 0}, {err_pipe[0], POLLIN, 0}};
-    std::string* sinks[2] = {&result.out, &result.err};
-    int open_pipes = 2;
-    while (open_pipes > 0) {
-        if (poll(fds, 2, -1) < 0) {
-            if (errno == EINTR)
-                continue;
-            break;
-        }
-        for (int i = 0; i < 2; ++i) {
-            if (fds[i].fd < 0 || fds[i].revents == 0)
-                continue;
-            char buffer[65536];
-            const ssize_t n = read(fds[i].fd, buffer, sizeof buffer);
-            if (n > 0) {
-                sinks[i]->append(buffer, static_cast<std::size_t>(n));
-            } else if (n == 0 || errno != EINTR) {
-                close(fds[i].fd);
-                fds[i].fd = -1;
-                --open_pipes;
-            }
-        }
-    }
-    int wait_status = 0;
-    while (waitpid(pid, &wait_status, 0) < 0 && errno == EINTR) {
-    }
-    result.status = WIFEXITED(wait_status) ? WEXITSTATUS(wait_status) : -1;
+    std::vector<std::string> argv{PLUMB_CLI_PATH};
+    argv.insert(argv.end(), args.begin(), args.end());
+    run_result result = plumb_test::run_process(argv, {}, &env_strings);
+    if (result.status == -1 && result.err.rfind("cannot run ", 0) == 0)
+        throw std::runtime_error(result.err);
     return result;
 }
 

@@ -24,8 +24,19 @@ struct process_result {
     std::string err;
 };
 
+// Runs args[0] (searched on PATH) with stdout and stderr on pipes, in `folder` when given, with
+// `environment` ("NAME=value" strings) instead of this process's own when given.
 inline process_result run_process(const std::vector<std::string>& args,
-                                  const std::filesystem::path& folder = {}) {
+                                  const std::filesystem::path& folder = {},
+                                  const std::vector<std::string>* environment = nullptr) {
+    std::vector<std::string> env_strings;
+    std::vector<char*> envp;
+    if (environment != nullptr) {
+        env_strings = *environment;
+        for (auto& s : env_strings)
+            envp.push_back(s.data());
+        envp.push_back(nullptr);
+    }
     std::vector<std::string> argv_strings = args;
     std::vector<char*> argv;
     for (auto& s : argv_strings)
@@ -47,8 +58,8 @@ inline process_result run_process(const std::vector<std::string>& args,
     if (!folder.empty())
         posix_spawn_file_actions_addchdir_np(&actions, folder.c_str());
     pid_t pid = 0;
-    const int spawned =
-        posix_spawnp(&pid, argv_strings[0].c_str(), &actions, nullptr, argv.data(), environ);
+    const int spawned = posix_spawnp(&pid, argv_strings[0].c_str(), &actions, nullptr, argv.data(),
+                                     environment != nullptr ? envp.data() : environ);
     posix_spawn_file_actions_destroy(&actions);
     close(out_pipe[1]);
     close(err_pipe[1]);
