@@ -281,12 +281,31 @@ std::string render_groups_json(const check_report& report) {
             out += "], \"variables\": [";
             for (std::size_t i = 0; i < s.plan->model.size(); ++i) {
                 const auto& v = s.plan->model[i];
+                const std::optional<double> proto =
+                    s.prototype.size() > v.variable ? s.prototype[v.variable] : std::nullopt;
+                // The unit the user declared or gave, and the values in it beside the SI ones;
+                // coherent SI again where the user gave none.
+                const shown_unit* shown = v.variable < s.units.size() &&
+                                                  !s.units[v.variable].text.empty() &&
+                                                  s.units[v.variable].factor != 0.0
+                                              ? &s.units[v.variable]
+                                              : nullptr;
+                const auto in_unit = [&](const std::optional<double>& si) -> std::optional<double> {
+                    if (!si || shown == nullptr)
+                        return si;
+                    return (*si - shown->offset) / shown->factor;
+                };
+                const std::string unit = shown != nullptr ? shown->text
+                                         : s.variables[v.variable].dim.is_dimensionless()
+                                             ? std::string()
+                                             : si_unit(s.variables[v.variable].dim);
                 out += fmt::format(
-                    "{}{{\"name\": {}, \"model\": {}, \"prototype\": {}, \"si_unit\": {}, \"how\": "
+                    "{}{{\"name\": {}, \"model\": {}, \"prototype\": {}, \"si_unit\": {}, "
+                    "\"unit\": {}, \"model_in_unit\": {}, \"prototype_in_unit\": {}, \"how\": "
                     "{}}}",
-                    i ? ", " : "", str(s.variables[v.variable].name), num(v.value),
-                    num(s.prototype.size() > v.variable ? s.prototype[v.variable] : std::nullopt),
-                    str(si_unit(s.variables[v.variable].dim)), str(v.how));
+                    i ? ", " : "", str(s.variables[v.variable].name), num(v.value), num(proto),
+                    str(si_unit(s.variables[v.variable].dim)), str(unit), num(in_unit(v.value)),
+                    num(in_unit(proto)), str(v.how));
             }
             out += "], \"match\": [";
             for (std::size_t i = 0; i < s.match.size(); ++i)
