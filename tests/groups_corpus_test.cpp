@@ -214,8 +214,14 @@ TEST_SUITE("groups corpus") {
         CHECK(within(model_ratio(study, "V_t"), std::pow(lambda, 0.5), 1e-9));
         CHECK(within(model_ratio(study, "Q"), std::pow(lambda, 2.5), 1e-9));
         CHECK(within(model_ratio(study, "b"), lambda, 1e-9));
-        // The same water cannot also keep the viscous group: one conflict.
+        // The same water cannot also keep the viscous group: one conflict. Every variable of
+        // that group is given, so matching it instead is no choice, and none is offered.
         CHECK(study.plan->conflicts.size() == 1);
+        CHECK(study.plan->alternatives.empty());
+        REQUIRE_FALSE(study.plan->conflicts.empty());
+        // Its numbers read as the plan table prints them, four figures: 5.003e12 and 6.253e17.
+        CHECK(study.plan->conflicts[0].explanation.find("5.003e12 in the model against 6.253e17") !=
+              std::string::npos);
     }
 
     TEST_CASE("groups corpus: the ship model follows the Froude scale ratios") {
@@ -371,6 +377,18 @@ TEST_SUITE("groups corpus: worked examples") {
         CHECK(as_printed(model_ratio(study, "P"), 1.331, 4));
         CHECK(as_printed(model_in_unit(study, "P"), 8.6515, 5));
         CHECK(as_printed(model_in_unit(study, "n"), 1100, 4));
+    }
+
+    TEST_CASE("groups corpus: the text report is written for a test-rig engineer") {
+        const std::string text = plumb::render_groups_text(corpus_report());
+        // Exponents written short, as everywhere in plumb: "6.253e17", never "6.253e+17".
+        CHECK(text.find("e+") == std::string::npos);
+        CHECK(text.find("e-0") == std::string::npos);
+        CHECK(text.find("prototype   6.253e17  model   5.003e12  off") != std::string::npos);
+        // A choice that fixes nothing and leaves its own group off is never offered.
+        CHECK(text.find("fixes nothing further") == std::string::npos);
+        // Munson's model time in hours, the unit of the prototype line.
+        CHECK(text.find("t = 6.197 h   (prototype 24 h;") != std::string::npos);
     }
 
     TEST_CASE("worked example: JSON gives each plan value in its display unit beside SI") {

@@ -49,10 +49,19 @@ std::string si_unit(const dimension& d) {
     return out.empty() ? "(dimensionless)" : out;
 }
 
-// Four significant figures at most and no float noise: "999", "1.643", "1.2e+06" only where
-// plain digits would mislead.
+// Four significant figures at most and no float noise: "999", "1.643", and an exponent only
+// where plain digits would mislead, written short as elsewhere in plumb: "1.2e6", "8.6e-7".
 std::string number(double v) {
-    return fmt::format("{:.4g}", v);
+    std::string s = fmt::format("{:.4g}", v);
+    const auto e = s.find('e');
+    if (e == std::string::npos)
+        return s;
+    std::string exponent = s.substr(e + 1);
+    const bool negative = !exponent.empty() && exponent.front() == '-';
+    if (!exponent.empty() && (exponent.front() == '-' || exponent.front() == '+'))
+        exponent.erase(0, 1);
+    exponent.erase(0, std::min(exponent.find_first_not_of('0'), exponent.size() - 1));
+    return s.substr(0, e + 1) + (negative ? "-" : "") + exponent;
 }
 
 // A variable's value in the unit the user gave or declared: "43.27 kN", "1.643 m/s".
@@ -131,7 +140,7 @@ void render_plan(std::string& out, const study_report& s, const similitude_plan&
             out +=
                 fmt::format("    scale effect, {}: {}\n", group_label(s, g.group), g.scale_effect);
     for (const auto& c : plan.conflicts)
-        out += fmt::format("    cannot match together: {}\n", c.explanation);
+        out += fmt::format("    cannot match: {}\n", c.explanation);
     if (!plan.alternatives.empty()) {
         out += "    not every group can match with these model values; say which the model must "
                "match, as in 'match Froude' on the model line. The choices:\n";
