@@ -4,6 +4,7 @@
 // every group must be dimensionless, and there must be (variables - rank) of them. The model
 // studies must follow the published Froude scale ratios.
 #include "plumb/check.hpp"
+#include "plumb/render.hpp"
 
 #include <doctest/doctest.h>
 
@@ -213,8 +214,14 @@ TEST_SUITE("groups corpus") {
         CHECK(within(model_ratio(study, "V_t"), std::pow(lambda, 0.5), 1e-9));
         CHECK(within(model_ratio(study, "Q"), std::pow(lambda, 2.5), 1e-9));
         CHECK(within(model_ratio(study, "b"), lambda, 1e-9));
-        // The same water cannot also keep the viscous group: one conflict.
+        // The same water cannot also keep the viscous group: one conflict. Every variable of
+        // that group is given, so matching it instead is no choice, and none is offered.
         CHECK(study.plan->conflicts.size() == 1);
+        CHECK(study.plan->alternatives.empty());
+        REQUIRE_FALSE(study.plan->conflicts.empty());
+        // Its numbers read as the plan table prints them, four figures: 5.003e12 and 6.253e17.
+        CHECK(study.plan->conflicts[0].explanation.find("5.003e12 in the model against 6.253e17") !=
+              std::string::npos);
     }
 
     TEST_CASE("groups corpus: the ship model follows the Froude scale ratios") {
@@ -301,5 +308,97 @@ TEST_SUITE("groups corpus") {
         REQUIRE(study.plan.has_value());
         const double expected = (0.0327 / 2.707e-3) * std::pow(8.6e-7 / 1.59e-5, 2.0) * 8.0;
         CHECK(within(model_ratio(study, "ΔT"), expected, 1e-9));
+    }
+}
+
+namespace {
+
+// The value in the unit the user declared or gave, as the book prints it: rounded to `figures`
+// significant figures, it must read the printed number.
+bool as_printed(double value, double printed, int figures) {
+    if (value == 0.0 || printed == 0.0)
+        return value == printed;
+    const double scale =
+        std::pow(10.0, figures - 1 - static_cast<int>(std::floor(std::log10(std::abs(value)))));
+    return std::abs(std::round(value * scale) / scale - printed) <= 1e-9 * std::abs(printed);
+}
+
+// A model value in its display unit (the declared or given one).
+double model_in_unit(const plumb::study_report& study, const std::string& name) {
+    const std::size_t i = variable_index(study, name);
+    REQUIRE(study.plan.has_value());
+    REQUIRE(study.plan->model.at(i).value.has_value());
+    const auto& u = study.units.at(i);
+    return (*study.plan->model[i].value - u.offset) / u.factor;
+}
+
+} // namespace
+
+TEST_SUITE("groups corpus: worked examples") {
+    TEST_CASE("worked example: Munson's 1:15 spillway model, width, discharge and time") {
+        // Munson, Young & Okiishi, Fundamentals of Fluid Mechanics, ch. 7, spillway example
+        // (from memory): 20 m wide, 125 m^3/s, 1:15 model; printed w_m = 1.33 m,
+        // Q_m = 0.143 m^3/s, and 6.20 hr of model time for 24 hr of prototype time.
+        const auto& study = find_study("spillway-munson");
+        REQUIRE(study.plan.has_value());
+        INFO("problems: " << joined(study.plan->problems));
+        CHECK(study.plan->problems.empty());
+        CHECK(study.plan->conflicts.empty());
+        CHECK(as_printed(model_in_unit(study, "w"), 1.33, 3));
+        CHECK(as_printed(model_in_unit(study, "Q"), 0.143, 3));
+        CHECK(as_printed(model_in_unit(study, "t"), 6.20, 3));
+        CHECK(study.units.at(variable_index(study, "t")).text == "h");
+    }
+
+    TEST_CASE("worked example: Reynolds-scaled water model of an air duct") {
+        // White, Fluid Mechanics, 7th ed., Sec. 5.5 (from memory): V_m/V_p = (ν_m/ν_p)(L_p/L_m).
+        // Air 1.205 kg/m^3, 1.80e-5 Pa*s; water 998 kg/m^3, 1.0e-3 Pa*s (White, Tables A.1 and
+        // A.2, from memory); 12 m/s in a 0.6 m duct at 1:4: V_m = 3.22 m/s to three figures.
+        const auto& study = find_study("duct");
+        REQUIRE(study.plan.has_value());
+        CHECK(study.plan->problems.empty());
+        CHECK(as_printed(model_in_unit(study, "V"), 3.22, 3));
+        CHECK(as_printed(model_in_unit(study, "D"), 0.15, 3));
+        // Equal pressure coefficient: Δp_m = Δp_p (ρ_m/ρ_p)(V_m/V_p)^2.
+        const double v_ratio = (1.0e-3 / 998.0) / (1.80e-5 / 1.205) * 4.0;
+        CHECK(within(model_ratio(study, "Δp"), 998.0 / 1.205 * v_ratio * v_ratio, 1e-9));
+        for (const auto& g : study.plan->groups)
+            CHECK(g.matched);
+    }
+
+    TEST_CASE("worked example: the fan laws, 10 % more speed") {
+        // Jorgensen, Fan Engineering, 9th ed., fan laws (from memory); the rule of thumb (common
+        // practice): +10 % speed gives +10 % flow, +21 % pressure, +33.1 % power.
+        const auto& study = find_study("fan");
+        REQUIRE(study.plan.has_value());
+        CHECK(study.plan->problems.empty());
+        CHECK(as_printed(model_ratio(study, "Q"), 1.10, 3));
+        CHECK(as_printed(model_ratio(study, "Δp"), 1.21, 3));
+        CHECK(as_printed(model_ratio(study, "P"), 1.331, 4));
+        CHECK(as_printed(model_in_unit(study, "P"), 8.6515, 5));
+        CHECK(as_printed(model_in_unit(study, "n"), 1100, 4));
+    }
+
+    TEST_CASE("groups corpus: the text report is written for a test-rig engineer") {
+        const std::string text = plumb::render_groups_text(corpus_report());
+        // Exponents written short, as everywhere in plumb: "6.253e17", never "6.253e+17".
+        CHECK(text.find("e+") == std::string::npos);
+        CHECK(text.find("e-0") == std::string::npos);
+        CHECK(text.find("prototype   6.253e17  model   5.003e12  off") != std::string::npos);
+        // A choice that fixes nothing and leaves its own group off is never offered.
+        CHECK(text.find("fixes nothing further") == std::string::npos);
+        // Munson's model time in hours, the unit of the prototype line.
+        CHECK(text.find("t = 6.197 h   (prototype 24 h;") != std::string::npos);
+    }
+
+    TEST_CASE("worked example: JSON gives each plan value in its display unit beside SI") {
+        const std::string json = plumb::render_groups_json(corpus_report());
+        // 1100 rpm is 18.33... 1/s in SI; in its given unit it prints whole, without float noise.
+        CHECK(json.find("{\"name\": \"n\", \"model\": 18.33333333, \"prototype\": 16.66666667, "
+                        "\"si_unit\": \"s^-1\", \"unit\": \"rpm\", \"model_in_unit\": 1100, "
+                        "\"prototype_in_unit\": 1000,") != std::string::npos);
+        // 24 h of prototype time, 6.197 h of model time (Munson's 6.20 hr).
+        CHECK(json.find("\"unit\": \"h\", \"model_in_unit\": 6.196773354, \"prototype_in_unit\": "
+                        "24,") != std::string::npos);
     }
 }

@@ -14,6 +14,9 @@
 
 namespace plumb::planning {
 
+// Values in an explanation are read beside the plan table, which prints four figures.
+constexpr int table_figures = 4;
+
 // The value that variable j alone would need for group g to match, every other variable at its
 // model value; nothing for gravity lower than the prototype's, which no test rig can provide.
 std::optional<std::string> planner::requirement(std::size_t g, std::size_t j) const {
@@ -40,7 +43,7 @@ std::optional<std::string> planner::requirement(std::size_t g, std::size_t j) co
         std::string out = fmt::format("{0}_model/{0}_prototype = ", symbol);
         if (p)
             out += power_text(*p) + " = ";
-        return out + number_text(ratio);
+        return out + number_text(ratio, table_figures);
     };
     const double prototype_log = prototype_[j]->log;
     // A centrifuge raises gravity; nothing in a laboratory lowers it.
@@ -48,7 +51,7 @@ std::optional<std::string> planner::requirement(std::size_t g, std::size_t j) co
         return std::nullopt;
     std::string out =
         fmt::format("{} {} {} of {} ({})", article(quantity_text(v.dim)), quantity_text(v.dim),
-                    v.name, value_text(value, v.dim, unit_of(j)),
+                    v.name, value_text(value, v.dim, unit_of(j), table_figures),
                     ratio_text(v.name, power, std::exp(log - prototype_log)));
 
     if (is_dynamic_viscosity(v.dim)) {
@@ -75,8 +78,9 @@ std::optional<std::string> planner::requirement(std::size_t g, std::size_t j) co
             out += fmt::format(
                 " at the model density {} = {}, that is a kinematic viscosity {}/{} of {} "
                 "m^2/s ({})",
-                d.name, value_text(model_[*rho].value->value(), d.dim, unit_of(*rho)), v.name,
-                d.name, number_text(std::exp(nu_log)),
+                d.name,
+                value_text(model_[*rho].value->value(), d.dim, unit_of(*rho), table_figures),
+                v.name, d.name, number_text(std::exp(nu_log), table_figures),
                 ratio_text("ν", nu_power, std::exp(nu_log - nu_prototype_log)));
         }
     }
@@ -93,7 +97,8 @@ std::string planner::explain_conflict(std::size_t g, const std::vector<std::size
         out = fmt::format("With the model values that are given, scaled by the length scale or "
                           "kept from the prototype, {} is {} in the model against {} in the "
                           "prototype, so it is not matched.",
-                          label(g), number_text(model.value()), number_text(prototype.value()));
+                          label(g), number_text(model.value(), table_figures),
+                          number_text(prototype.value(), table_figures));
     } else {
         std::vector<std::string> fixed;
         const auto& a = exponents(g);
@@ -104,7 +109,8 @@ std::string planner::explain_conflict(std::size_t g, const std::vector<std::size
                           "matching {} fixes {} in the model, and {} then is {} in the model "
                           "against {} in the prototype.",
                           labels(fixers), label(g), labels(fixers), join(fixed, " and "), label(g),
-                          number_text(model.value()), number_text(prototype.value()));
+                          number_text(model.value(), table_figures),
+                          number_text(prototype.value(), table_figures));
         out.front() = static_cast<char>(std::toupper(static_cast<unsigned char>(out.front())));
     }
 

@@ -37,7 +37,7 @@ bool is_density(const dimension& d) {
 
 // Three significant figures, plain between 0.001 and 1e5 and with a short exponent outside:
 // "0.008", "1000", "5.33", "8.43e-9", "1.25e5".
-std::string number_text(double v) {
+std::string number_text(double v, int figures) {
     if (!std::isfinite(v) || v == 0.0)
         return fmt::format("{}", v);
     const auto strip = [](std::string s) {
@@ -51,9 +51,9 @@ std::string number_text(double v) {
     const double magnitude = std::fabs(v);
     if (magnitude >= 1e-3 && magnitude < 1e5) {
         const int digits = static_cast<int>(std::floor(std::log10(magnitude)));
-        return strip(fmt::format("{:.{}f}", v, std::max(0, 2 - digits)));
+        return strip(fmt::format("{:.{}f}", v, std::max(0, figures - 1 - digits)));
     }
-    const std::string s = fmt::format("{:.2e}", v);
+    const std::string s = fmt::format("{:.{}e}", v, std::max(0, figures - 1));
     const auto e = s.find('e');
     const int exponent = std::stoi(s.substr(e + 1));
     return strip(s.substr(0, e)) + "e" + std::to_string(exponent);
@@ -156,11 +156,12 @@ std::string join(const std::vector<std::string>& parts, std::string_view last_se
     return out;
 }
 
-std::string value_text(double si, const dimension& d, const shown_unit* unit) {
+std::string value_text(double si, const dimension& d, const shown_unit* unit, int figures) {
     if (unit != nullptr && !unit->text.empty() && unit->factor != 0.0)
-        return number_text((si - unit->offset) / unit->factor) + " " + unit->text;
+        return number_text((si - unit->offset) / unit->factor, figures) + " " + unit->text;
     const std::string si_unit = si_unit_text(d);
-    return si_unit.empty() ? number_text(si) : number_text(si) + " " + si_unit;
+    const std::string number = number_text(si, figures);
+    return si_unit.empty() ? number : number + " " + si_unit;
 }
 
 } // namespace plumb::planning

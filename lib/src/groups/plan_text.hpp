@@ -19,12 +19,13 @@ bool is_density(const dimension& d);
 
 // "an acceleration", "a density".
 std::string_view article(std::string_view noun);
-// Three significant figures: "0.008", "1000", "5.33", "8.43e-9", "1.25e5".
-std::string number_text(double v);
+// Three significant figures by default: "0.008", "1000", "5.33", "8.43e-9", "1.25e5". Four
+// where a value is read beside the plan table, which prints four.
+std::string number_text(double v, int figures = 3);
 // The coherent SI unit of a dimension, as the notation writes units ("Pa*s", "m^2/s").
 std::string si_unit_text(const dimension& d);
 // An SI value in the unit the user wrote, with it: "43.3 kN", "1.64 m/s"; coherent SI without one.
-std::string value_text(double si, const dimension& d, const shown_unit* unit);
+std::string value_text(double si, const dimension& d, const shown_unit* unit, int figures = 3);
 // The first name of a dimension's quantity ("surface tension"), or "value".
 std::string quantity_text(const dimension& d);
 std::string power_text(rational p);

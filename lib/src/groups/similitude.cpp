@@ -131,7 +131,7 @@ similitude_plan plan_with_alternatives(const similitude_request& request, simili
             agreed.push_back(g);
 
     similitude_plan shared = planner(request, {agreed, false, false}).run();
-    shared.conflicts = std::move(full.conflicts);
+    shared.conflicts = full.conflicts;
     for (const std::size_t g : contested) {
         const similitude_plan one = planner(request, {{g}, true, true}).run();
         plan_alternative alternative;
@@ -139,11 +139,19 @@ similitude_plan plan_with_alternatives(const similitude_request& request, simili
         for (const auto& v : one.model)
             if (v.variable < shared.model.size() && !shared.model[v.variable].value && v.value)
                 alternative.fixed.push_back(v);
-        for (const auto& gv : one.groups)
+        bool itself_off = false;
+        for (const auto& gv : one.groups) {
             if (!gv.matched && gv.ratio)
                 alternative.off.push_back(gv);
-        shared.alternatives.push_back(std::move(alternative));
+            itself_off = itself_off || (gv.group == g && !gv.matched);
+        }
+        // A group that stays off even when chosen (every variable in it is given) is no
+        // choice: "match it" would fix nothing and leave it off. The conflict says what it needs.
+        if (!itself_off)
+            shared.alternatives.push_back(std::move(alternative));
     }
+    if (shared.alternatives.empty())
+        return full; // nothing to choose between: the plan as solved, with its conflicts
     return shared;
 }
 

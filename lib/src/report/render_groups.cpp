@@ -49,10 +49,19 @@ std::string si_unit(const dimension& d) {
     return out.empty() ? "(dimensionless)" : out;
 }
 
-// Four significant figures at most and no float noise: "999", "1.643", "1.2e+06" only where
-// plain digits would mislead.
+// Four significant figures at most and no float noise: "999", "1.643", and an exponent only
+// where plain digits would mislead, written short as elsewhere in plumb: "1.2e6", "8.6e-7".
 std::string number(double v) {
-    return fmt::format("{:.4g}", v);
+    std::string s = fmt::format("{:.4g}", v);
+    const auto e = s.find('e');
+    if (e == std::string::npos)
+        return s;
+    std::string exponent = s.substr(e + 1);
+    const bool negative = !exponent.empty() && exponent.front() == '-';
+    if (!exponent.empty() && (exponent.front() == '-' || exponent.front() == '+'))
+        exponent.erase(0, 1);
+    exponent.erase(0, std::min(exponent.find_first_not_of('0'), exponent.size() - 1));
+    return s.substr(0, e + 1) + (negative ? "-" : "") + exponent;
 }
 
 // A variable's value in the unit the user gave or declared: "43.27 kN", "1.643 m/s".
@@ -131,7 +140,7 @@ void render_plan(std::string& out, const study_report& s, const similitude_plan&
             out +=
                 fmt::format("    scale effect, {}: {}\n", group_label(s, g.group), g.scale_effect);
     for (const auto& c : plan.conflicts)
-        out += fmt::format("    cannot match together: {}\n", c.explanation);
+        out += fmt::format("    cannot match: {}\n", c.explanation);
     if (!plan.alternatives.empty()) {
         out += "    not every group can match with these model values; say which the model must "
                "match, as in 'match Froude' on the model line. The choices:\n";
@@ -281,12 +290,31 @@ std::string render_groups_json(const check_report& report) {
             out += "], \"variables\": [";
             for (std::size_t i = 0; i < s.plan->model.size(); ++i) {
                 const auto& v = s.plan->model[i];
+                const std::optional<double> proto =
+                    s.prototype.size() > v.variable ? s.prototype[v.variable] : std::nullopt;
+                // The unit the user declared or gave, and the values in it beside the SI ones;
+                // coherent SI again where the user gave none.
+                const shown_unit* shown = v.variable < s.units.size() &&
+                                                  !s.units[v.variable].text.empty() &&
+                                                  s.units[v.variable].factor != 0.0
+                                              ? &s.units[v.variable]
+                                              : nullptr;
+                const auto in_unit = [&](const std::optional<double>& si) -> std::optional<double> {
+                    if (!si || shown == nullptr)
+                        return si;
+                    return (*si - shown->offset) / shown->factor;
+                };
+                const std::string unit = shown != nullptr ? shown->text
+                                         : s.variables[v.variable].dim.is_dimensionless()
+                                             ? std::string()
+                                             : si_unit(s.variables[v.variable].dim);
                 out += fmt::format(
-                    "{}{{\"name\": {}, \"model\": {}, \"prototype\": {}, \"si_unit\": {}, \"how\": "
+                    "{}{{\"name\": {}, \"model\": {}, \"prototype\": {}, \"si_unit\": {}, "
+                    "\"unit\": {}, \"model_in_unit\": {}, \"prototype_in_unit\": {}, \"how\": "
                     "{}}}",
-                    i ? ", " : "", str(s.variables[v.variable].name), num(v.value),
-                    num(s.prototype.size() > v.variable ? s.prototype[v.variable] : std::nullopt),
-                    str(si_unit(s.variables[v.variable].dim)), str(v.how));
+                    i ? ", " : "", str(s.variables[v.variable].name), num(v.value), num(proto),
+                    str(si_unit(s.variables[v.variable].dim)), str(unit), num(in_unit(v.value)),
+                    num(in_unit(proto)), str(v.how));
             }
             out += "], \"match\": [";
             for (std::size_t i = 0; i < s.match.size(); ++i)
