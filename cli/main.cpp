@@ -9,6 +9,7 @@
 #include "plumb/version.hpp"
 
 #include <algorithm>
+#include <charconv>
 #include <cstdio>
 #include <cstdlib>
 #include <cstring>
@@ -65,6 +66,8 @@ options for check, groups, dim and catalogue:
   --settings FILE      use FILE as the settings (default: plumb.toml in the checked
                        path's folder or the nearest folder above)
   --study NAME         groups: only the study called NAME
+  --jobs N             check, report: check files on N threads at once (default: one
+                       per core, at most 8); the output is the same for any N
   --restate-in UNITS   check: restate coefficients marked ? also for the consistent set
                        of units with these base units, e.g. 'ft, lb, s' or 'ft, lbf, s'
   --color auto|always|never
@@ -191,6 +194,14 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
             if (!v || (*v != "error" && *v != "warning"))
                 return "--fail-on takes 'error' or 'warning'";
             out.fail_on = *v == "warning" ? plumb::severity::warning : plumb::severity::error;
+        } else if (a == "--jobs" || a.rfind("--jobs=", 0) == 0) {
+            const auto v = value("--jobs");
+            unsigned jobs = 0;
+            const char* end = v ? v->data() + v->size() : nullptr;
+            if (!v || v->empty() || std::from_chars(v->data(), end, jobs).ptr != end || jobs == 0 ||
+                jobs > 256)
+                return "--jobs takes a number of threads from 1 to 256";
+            out.check.jobs = jobs;
         } else if (a == "--settings" || a.rfind("--settings=", 0) == 0) {
             const auto v = value("--settings");
             if (!v || v->empty())

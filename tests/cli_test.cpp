@@ -523,6 +523,25 @@ TEST_CASE("an error in one file of several still exits 1") {
     CHECK(contains(r.out, "(2 formulas in 2 files checked)"));
 }
 
+TEST_CASE("--jobs: the same output on one thread and on three; a bad count is bad usage") {
+    const temp_folder dir;
+    const std::string a = dir.write("a.plumb", clean_file);
+    const std::string b = dir.write("b.plumb", side_file);
+    const std::string c = dir.write("c.plumb", warning_only_file);
+    const auto one = run_plumb({"check", "--color", "never", "--jobs", "1", a, b, c});
+    const auto three = run_plumb({"check", "--color", "never", "--jobs=3", a, b, c});
+    CHECK(one.status == 1);
+    CHECK(contains(one.out, "in 3 files checked)"));
+    CHECK(three.status == one.status);
+    CHECK(three.out == one.out);
+    for (const std::string bad : {"0", "x", "-2", "3x", ""}) {
+        CAPTURE(bad);
+        const auto r = run_plumb({"check", "--jobs", bad, a});
+        CHECK(r.status == 2);
+        CHECK(contains(r.err, "--jobs takes a number of threads"));
+    }
+}
+
 TEST_CASE("an unreadable path exits 2 with an 'unreadable' finding") {
     const temp_folder dir;
     const auto missing = dir.path("no-such-file.plumb");

@@ -395,28 +395,39 @@ int run(const options& opt) {
         fmt::print("          {}\n", s);
     failed = failed || !v.ok();
 
-    std::vector<double> times;
-    for (std::size_t i = 0; i < opt.runs; ++i) {
-        const auto start = clock_type::now();
-        const plumb::check_report report = plumb::check_paths({dir});
-        times.push_back(seconds(clock_type::now() - start));
-        if (report.diagnostics.size() != warm.diagnostics.size()) {
-            fmt::print("FAILED:   run {} gave {} findings, the warm-up {}\n", i + 1,
-                       report.diagnostics.size(), warm.diagnostics.size());
-            failed = true;
-        }
-    }
     const double bytes =
         static_cast<double>(warm.bytes_checked > 0 ? warm.bytes_checked : corpus.bytes);
     const auto eq = static_cast<double>(corpus.equations);
-    const double best = *std::min_element(times.begin(), times.end());
-    const double med = median(times);
-    fmt::print("check_paths, single-threaded, {} timed run{} after 1 warm-up:\n", opt.runs,
-               opt.runs == 1 ? "" : "s");
-    fmt::print("  best   {:8.3f} s  {:8.2f} MB/s  {:>12} equations/s\n", best, bytes / best / 1e6,
-               grouped(static_cast<std::size_t>(eq / best)));
-    fmt::print("  median {:8.3f} s  {:8.2f} MB/s  {:>12} equations/s\n", med, bytes / med / 1e6,
-               grouped(static_cast<std::size_t>(eq / med)));
+    // The same corpus on one thread and on two (each thread checks a run of the files in a
+    // session of its own; the report is the same either way).
+    double one_thread_best = 0.0;
+    for (const unsigned jobs : {1U, 2U}) {
+        plumb::check_options options;
+        options.jobs = jobs;
+        std::vector<double> times;
+        for (std::size_t i = 0; i < opt.runs; ++i) {
+            const auto start = clock_type::now();
+            const plumb::check_report report = plumb::check_paths({dir}, options);
+            times.push_back(seconds(clock_type::now() - start));
+            if (report.diagnostics.size() != warm.diagnostics.size()) {
+                fmt::print("FAILED:   run {} on {} thread(s) gave {} findings, the warm-up {}\n",
+                           i + 1, jobs, report.diagnostics.size(), warm.diagnostics.size());
+                failed = true;
+            }
+        }
+        const double best = *std::min_element(times.begin(), times.end());
+        const double med = median(times);
+        if (jobs == 1)
+            one_thread_best = best;
+        fmt::print("check_paths, --jobs {}, {} timed run{} after 1 warm-up:\n", jobs, opt.runs,
+                   opt.runs == 1 ? "" : "s");
+        fmt::print("  best   {:8.3f} s  {:8.2f} MB/s  {:>12} equations/s\n", best,
+                   bytes / best / 1e6, grouped(static_cast<std::size_t>(eq / best)));
+        fmt::print("  median {:8.3f} s  {:8.2f} MB/s  {:>12} equations/s\n", med, bytes / med / 1e6,
+                   grouped(static_cast<std::size_t>(eq / med)));
+        if (jobs > 1)
+            fmt::print("  speed-up over one thread (best runs): {:.2f}x\n", one_thread_best / best);
+    }
 
     if (opt.spawns > 0) {
         const fs::path small = dir / "small" / "pump-check.plumb";

@@ -34,6 +34,9 @@ struct check_options {
     // Keep every formula's label, side dimensions and result, for the sign-off report and
     // the JSON list of formulas; off by default so that memory stays flat on large checks.
     bool record_formulas = false;
+    // Threads that check files at once; 0: one per core (at most 8). The report is the same
+    // whatever the number.
+    unsigned jobs = 0;
 };
 
 // One formula as the sign-off report lists it.

@@ -1232,6 +1232,10 @@ class checker {
     }
 
     template <typename F> void visit_nodes(F&& f) const {
+        // An expression on its own (expression_dimension: a query, or a side's dimension for
+        // the list of formulas) belongs to no formula.
+        if (current_ == nullptr)
+            return;
         std::vector<std::uint32_t> stack;
         for (std::uint32_t i = 0; i < current_->side_count; ++i)
             stack.push_back(file_.sides[current_->first_side + i].root);

@@ -4,6 +4,7 @@
 #include "check/edit_distance.hpp"
 #include "check/formula_checker.hpp"
 #include "check/inference.hpp"
+#include "check/parallel_check.hpp"
 #include "check/path_patterns.hpp"
 #include "groups/studies.hpp"
 #include "notation/markdown.hpp"
@@ -124,6 +125,7 @@ bool differ_in_scale(const symbol_entry& a, const symbol_entry& b) {
 
 struct loaded_file {
     source_file* source = nullptr;
+    std::string key;          // canonical path; empty for text not read from a file
     syntax::parsed_file tree; // declarations and uses; formulas only while deferred
     std::vector<loaded_file*> uses;
     std::vector<diagnostic> diagnostics;
@@ -214,6 +216,7 @@ class session {
         for (const auto& path : options.dictionaries)
             if (loaded_file* f = load(path, {}))
                 dictionaries_.push_back(as_dictionary(f));
+        general_from_dictionaries_ = general_.size();
     }
 
     // Reads a file once; its text is parsed on demand (as a dictionary or when checked).
@@ -242,6 +245,7 @@ class session {
         if (!key.empty())
             by_path_.emplace(key, f);
         f->source = report_.sources.back().get();
+        f->key = key;
         return f;
     }
 
@@ -346,6 +350,22 @@ class session {
                    std::make_move_iterator(query_diagnostics_.end()));
     }
 
+    // The findings left grouped by file, for merging with other sessions' (see
+    // parallel_check.hpp) rather than put in order by finish().
+    detail::session_findings take_grouped() {
+        detail::session_findings out;
+        const auto split =
+            general_.begin() + static_cast<std::ptrdiff_t>(general_from_dictionaries_);
+        out.reading_dictionaries.assign(std::make_move_iterator(general_.begin()),
+                                        std::make_move_iterator(split));
+        out.about_run.assign(std::make_move_iterator(split),
+                             std::make_move_iterator(general_.end()));
+        general_.clear();
+        for (auto& f : files_)
+            out.files.push_back({f->source, f->key, std::move(f->diagnostics)});
+        return out;
+    }
+
     void fail(std::string message) {
         general_.push_back(
             make_diagnostic(severity::error, rules::unreadable, std::move(message), {}));
@@ -424,6 +444,7 @@ class session {
     std::vector<std::unique_ptr<loaded_file>> files_;
     std::map<std::string, loaded_file*> by_path_;
     std::vector<diagnostic> general_;
+    std::size_t general_from_dictionaries_ = 0; // of general_, those from reading --dict files
     std::vector<diagnostic> query_diagnostics_;
 
     bool read_file(const fs::path& path, std::string& text, location requested_at) {
@@ -666,17 +687,24 @@ bool is_calc_note(const fs::path& path) {
     return has_plumb_blocks(text);
 }
 
-void collect_plumb_files(const fs::path& dir, std::vector<fs::path>& out, session& s) {
+diagnostic run_failure(std::string message) {
+    return make_diagnostic(severity::error, rules::unreadable, std::move(message), {});
+}
+
+void collect_plumb_files(const fs::path& dir, std::vector<fs::path>& out,
+                         std::vector<diagnostic>& failures) {
     std::error_code ec;
     std::vector<fs::path> found;
     fs::recursive_directory_iterator it(dir, fs::directory_options::skip_permission_denied, ec);
     if (ec) {
-        s.fail(fmt::format("cannot read folder '{}': {}", dir.string(), ec.message()));
+        failures.push_back(
+            run_failure(fmt::format("cannot read folder '{}': {}", dir.string(), ec.message())));
         return;
     }
     for (; it != fs::recursive_directory_iterator(); it.increment(ec)) {
         if (ec) {
-            s.fail(fmt::format("cannot read folder '{}': {}", dir.string(), ec.message()));
+            failures.push_back(run_failure(
+                fmt::format("cannot read folder '{}': {}", dir.string(), ec.message())));
             break;
         }
         std::error_code type_ec;
@@ -694,9 +722,24 @@ void collect_plumb_files(const fs::path& dir, std::vector<fs::path>& out, sessio
 
 } // namespace
 
+namespace detail {
+
+session_findings check_in_one_session(const std::vector<fs::path>& files,
+                                      const check_options& options, check_report& report) {
+    session s(report, options);
+    // A file named twice (or inside two folders given) is checked once.
+    std::unordered_set<const loaded_file*> checked;
+    for (const auto& p : files)
+        if (loaded_file* f = s.load(p, {}); f != nullptr && checked.insert(f).second)
+            s.check(f);
+    return s.take_grouped();
+}
+
+} // namespace detail
+
 check_report check_paths(const std::vector<fs::path>& paths, const check_options& options) {
     check_report report;
-    session s(report, options);
+    std::vector<diagnostic> listing_failures;
     std::vector<fs::path> files;
     for (const auto& p : paths) {
         std::error_code ec;
@@ -705,11 +748,11 @@ check_report check_paths(const std::vector<fs::path>& paths, const check_options
             continue;
         }
         const std::size_t before = files.size();
-        collect_plumb_files(p, files, s);
+        collect_plumb_files(p, files, listing_failures);
         // A hook run on an empty or mistyped folder must not pass for a clean check.
         if (files.size() == before)
-            s.fail(fmt::format("nothing to check in '{}': no .plumb files in it or below",
-                               p.string()));
+            listing_failures.push_back(run_failure(fmt::format(
+                "nothing to check in '{}': no .plumb files in it or below", p.string())));
     }
     if (!options.exclude.empty())
         std::erase_if(files, [&](const fs::path& p) {
@@ -718,19 +761,21 @@ check_report check_paths(const std::vector<fs::path>& paths, const check_options
                 options.exclude.begin(), options.exclude.end(),
                 [&](const std::string& pattern) { return path_matches(pattern, relative); });
         });
-    // A file named twice (or inside two folders given) is checked once.
-    std::unordered_set<const loaded_file*> checked;
+    // A file named twice (or inside two folders given) is checked once: sessions on other
+    // threads could not tell.
+    std::vector<fs::path> notation_files;
     std::vector<fs::path> workbooks;
-    for (const auto& p : files)
-        if (sheets::is_workbook_path(p)) {
-            if (std::find(workbooks.begin(), workbooks.end(), p) == workbooks.end())
-                workbooks.push_back(p);
-        } else if (loaded_file* f = s.load(p, {}); f != nullptr && checked.insert(f).second) {
-            s.check(f);
-        }
-    s.finish();
-    for (const auto& p : workbooks)
-        sheets::check_workbook_file(p, options, report);
+    std::unordered_set<std::string> listed;
+    for (const auto& p : files) {
+        std::error_code ec;
+        fs::path key = fs::weakly_canonical(p, ec);
+        if (ec)
+            key = p;
+        if (listed.insert(key.string()).second)
+            (sheets::is_workbook_path(p) ? workbooks : notation_files).push_back(p);
+    }
+    detail::check_listed_files(notation_files, workbooks, std::move(listing_failures), options,
+                               report);
     review_findings(report, options);
     return report;
 }
