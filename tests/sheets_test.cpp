@@ -5,6 +5,7 @@
 #include "plumb/check.hpp"
 #include "plumb/openformula.hpp"
 #include "plumb/render.hpp"
+#include "plumb/rules.hpp"
 #include "sheets/a1_front_end.hpp"
 #include "sheets/readers.hpp"
 #include "sheets/unit_text.hpp"
@@ -228,4 +229,81 @@ TEST_CASE("sheets: a bad workbook is exit status 2 and the good one beside it is
     const std::string json = render_json(report);
     CHECK(json.find("\"sheet\": \"Pump\", \"cell\": \"C14\"") != std::string::npos);
     CHECK(json.find("\"inputs_without_units\": 1") != std::string::npos);
+}
+
+namespace {
+
+// The corpus's well-test.xlsx copied to a folder of its own, with `sidecar` beside it.
+check_report check_well_test_with(const std::string& sidecar, const std::string& folder) {
+    const auto dir = std::filesystem::temp_directory_path() / folder;
+    std::filesystem::create_directories(dir);
+    {
+        std::ofstream out(dir / "well-test.xlsx", std::ios::binary);
+        out << read_corpus("well-test.xlsx");
+        std::ofstream side(dir / "well-test.cells.plumb", std::ios::binary);
+        side << sidecar;
+    }
+    check_report report = check_paths({dir / "well-test.xlsx"});
+    return report;
+}
+
+const diagnostic* finding_at(const check_report& report, std::string_view place,
+                             std::string_view rule) {
+    for (const auto& d : report.diagnostics)
+        if (d.rule == rule && d.where.file != nullptr)
+            if (const cell_place* at = d.where.file->cell_at(d.where.range.begin);
+                at != nullptr && cell_text(*at) == place)
+                return &d;
+    return nullptr;
+}
+
+} // namespace
+
+TEST_CASE("sheets: a sidecar's cells lines give cells a unit that wins over the text beside") {
+    // Without the sidecar's line, Inputs!C6 is in psi (beside it in D6), and Calc!C7, which
+    // subtracts it from kPa, is a unit-scale error; so is Calc!C5, a lookup of it in a kPa
+    // table (corpus/sheets/well-test.expect).
+    const check_report plain = check_well_test_with("Rate : bbl/d\n", "plumb-sidecar-plain");
+    CHECK(finding_at(plain, "Calc!C7", rules::unit_scale) != nullptr);
+    CHECK(finding_at(plain, "Calc!C5", rules::unit_scale) != nullptr);
+    // The sidecar says the gauge was re-read in kPa: the subtraction and the lookup now agree.
+    const check_report cells = check_well_test_with(
+        "Rate : bbl/d\ncells Inputs!C6 : kPa \"re-read in kPa\"\n", "plumb-sidecar-cell");
+    INFO(render_text(cells));
+    CHECK(finding_at(cells, "Calc!C7", rules::unit_scale) == nullptr);
+    CHECK(finding_at(cells, "Calc!C5", rules::unit_scale) == nullptr);
+    // Untouched cells keep their findings.
+    CHECK(finding_at(cells, "Calc!C11", rules::unit_scale) != nullptr);
+    CHECK_FALSE(cells.input_failed);
+}
+
+TEST_CASE("sheets: a whole column and a range from the sidecar, named in the notes") {
+    // The viscosity table's column given in Pa·s (1000 mPa·s, SI Brochure 9th ed., Table 4
+    // and prefixes): the lookup at Calc!C4, written as mPa·s, is now 1000 times off.
+    const check_report column = check_well_test_with(
+        "cells Tables!B : Pa*s\ncells Inputs!C5:C6 : kPa\n", "plumb-sidecar-column");
+    INFO(render_text(column));
+    const diagnostic* lookup = finding_at(column, "Calc!C4", rules::unit_scale);
+    REQUIRE(lookup != nullptr);
+    bool noted = false;
+    for (const auto& n : lookup->notes)
+        noted =
+            noted || n.message.find("from the sidecar well-test.cells.plumb") != std::string::npos;
+    CHECK(noted);
+    // The range made C6 kPa as well: the drawdown's subtraction agrees.
+    CHECK(finding_at(column, "Calc!C7", rules::unit_scale) == nullptr);
+}
+
+TEST_CASE("sheets: a sidecar line naming a sheet the workbook lacks is a clear finding") {
+    const check_report report =
+        check_well_test_with("cells Pumps!C4 : kPa\n", "plumb-sidecar-no-sheet");
+    std::vector<const diagnostic*> problems;
+    for (const auto& d : report.diagnostics)
+        if (d.rule == rules::sidecar_problem)
+            problems.push_back(&d);
+    REQUIRE(problems.size() == 1);
+    CHECK(problems.front()->message.find("no sheet named 'Pumps'") != std::string::npos);
+    REQUIRE(!problems.front()->notes.empty());
+    CHECK(problems.front()->notes.front().message.find("Inputs, Tables, Calc") !=
+          std::string::npos);
 }
