@@ -603,6 +603,10 @@ TEST_CASE("cells lines: the forms NOTATION.md shows parse, and belong in a sidec
     CHECK(misplaced.front().column == 1);
     CHECK(misplaced.front().message.find("sidecar") != std::string::npos);
     CHECK(all.size() == 1);
+    // A sidecar named on the command line holds its cells lines where they belong.
+    const auto sidecar = findings(plumb::check_text("book.cells.plumb", "cells Duty!C4 : kPa"));
+    INFO(listing(sidecar));
+    CHECK(of_rule(sidecar, plumb::rules::sidecar_problem).empty());
 }
 
 TEST_CASE("cells lines: mistakes get a plain message at the right place") {
