@@ -8,6 +8,7 @@
 #include "plumb/rules.hpp"
 #include "sheets/a1_front_end.hpp"
 #include "sheets/readers.hpp"
+#include "sheets/shared_formula.hpp"
 #include "sheets/unit_text.hpp"
 #include "test_support.hpp"
 
@@ -306,4 +307,57 @@ TEST_CASE("sheets: a sidecar line naming a sheet the workbook lacks is a clear f
     REQUIRE(!problems.front()->notes.empty());
     CHECK(problems.front()->notes.front().message.find("Inputs, Tables, Calc") !=
           std::string::npos);
+}
+
+TEST_CASE("sheets: a shared formula moves its relative references (ECMA-376 Part 1, 18.3.1.40)") {
+    // Master in C2 (row 1, column 2), follower in C5: three rows down, same column.
+    const cell_address c2{1, 2};
+    CHECK(shift_formula("A2*B2", c2, {4, 2}) == "A5*B5");
+    // '$' parts stay; a follower one column right moves only relative columns.
+    CHECK(shift_formula("$A2*B$2+$C$3", c2, {1, 3}) == "$A2*C$2+$C$3");
+    // Other sheets' cells move too; quoted names, strings, functions and names stay.
+    CHECK(shift_formula("SUM('Pump data'!A2:A4)+IF(B2>0,\"B2\",Rate)*LOG10(B2)", c2, {2, 2}) ==
+          "SUM('Pump data'!A3:A5)+IF(B3>0,\"B2\",Rate)*LOG10(B3)");
+    // Numbers are not references.
+    CHECK(shift_formula("B2*3.6+1E3", c2, {2, 2}) == "B3*3.6+1E3");
+    // Whole columns and rows, and a reference moved off the sheet, are not guessed.
+    CHECK_FALSE(shift_formula("SUM(A:A)", c2, {2, 2}).has_value());
+    CHECK_FALSE(shift_formula("SUM(2:2)", c2, {2, 2}).has_value());
+    CHECK_FALSE(shift_formula("A1", c2, {0, 2}).has_value());
+}
+
+TEST_CASE("sheets: shared formulas in an .xlsx are expanded to every cell of their area") {
+    // A hand-built package (invented demo data): D2 is the master of D2:D4 (flow = area *
+    // velocity); D3 and D4 follow it and read their own row.
+    const std::string sheet =
+        "<worksheet><sheetData>"
+        "<row r=\"1\"><c r=\"B1\" t=\"inlineStr\"><is><t>Area [m2]</t></is></c>"
+        "<c r=\"C1\" t=\"inlineStr\"><is><t>Velocity [m/s]</t></is></c>"
+        "<c r=\"D1\" t=\"inlineStr\"><is><t>Flow [m3/s]</t></is></c></row>"
+        "<row r=\"2\"><c r=\"B2\"><v>0.5</v></c><c r=\"C2\"><v>2</v></c>"
+        "<c r=\"D2\"><f t=\"shared\" ref=\"D2:D4\" si=\"0\">B2*C2</f><v>1</v></c></row>"
+        "<row r=\"3\"><c r=\"B3\"><v>0.25</v></c><c r=\"C3\"><v>2</v></c>"
+        "<c r=\"D3\"><f t=\"shared\" si=\"0\"/><v>0.5</v></c></row>"
+        "<row r=\"4\"><c r=\"B4\"><v>2000</v></c><c r=\"C4\"><v>2</v></c>"
+        "<c r=\"D4\"><f t=\"shared\" si=\"0\"/><v>4000</v></c>"
+        "<c r=\"E4\" t=\"inlineStr\"><is><t>m3/s</t></is></c></row>"
+        "</sheetData></worksheet>";
+    const std::string book = make_zip(
+        {{"[Content_Types].xml",
+          "<Types><Override PartName=\"/xl/workbook.xml\" ContentType=\"application/"
+          "vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml\"/></Types>"},
+         {"xl/workbook.xml",
+          "<workbook><sheets><sheet name=\"Flow\" sheetId=\"1\" id=\"rId1\"/></sheets></workbook>"},
+         {"xl/_rels/workbook.xml.rels",
+          "<Relationships><Relationship Id=\"rId1\" Target=\"worksheets/sheet1.xml\"/>"
+          "</Relationships>"},
+         {"xl/worksheets/sheet1.xml", sheet}});
+    const workbook read = read_workbook(book, "flow.xlsx");
+    REQUIRE(read.sheets.size() == 1);
+    const cell* d3 = read.sheets[0].find({2, 3});
+    REQUIRE(d3 != nullptr);
+    CHECK(d3->text == "=B3*C3");
+    const cell* d4 = read.sheets[0].find({3, 3});
+    REQUIRE(d4 != nullptr);
+    CHECK(d4->text == "=B4*C4");
 }
