@@ -585,3 +585,48 @@ TEST_CASE("a coefficient's statement is checked through the library's front door
     CHECK(found[0].line == 4);
     CHECK(found[0].column == 5);
 }
+
+TEST_CASE("cells lines: the forms NOTATION.md shows parse, and belong in a sidecar") {
+    parses("cells Duty!C4 : kPa \"suction gauge\"");
+    parses("cells Duty!C4:C9 : mm");
+    parses("cells 'Pump data'!D : m^3/s");
+    parses("cells 'It''s'!$B$3 : [L]");
+    // A symbol named "cells" is still an ordinary name: no '!' follows it.
+    parses("cells : 1\nn : 1\nn = cells");
+    // In a file that is not a workbook's sidecar, the line gives no cell a unit: say where it
+    // belongs, once, and nothing else.
+    const auto all = check("cells Duty!C4 : kPa");
+    INFO(listing(all));
+    const auto misplaced = of_rule(all, plumb::rules::sidecar_problem);
+    REQUIRE(misplaced.size() == 1);
+    CHECK(misplaced.front().line == 1);
+    CHECK(misplaced.front().column == 1);
+    CHECK(misplaced.front().message.find("sidecar") != std::string::npos);
+    CHECK(all.size() == 1);
+    // A sidecar named on the command line holds its cells lines where they belong.
+    const auto sidecar = findings(plumb::check_text("book.cells.plumb", "cells Duty!C4 : kPa"));
+    INFO(listing(sidecar));
+    CHECK(of_rule(sidecar, plumb::rules::sidecar_problem).empty());
+}
+
+TEST_CASE("cells lines: mistakes get a plain message at the right place") {
+    const std::string no_area = "expected a cell, a range or a column after the sheet's '!', as "
+                                "in Duty!C4, Duty!C4:C9 or Duty!D (columns in capitals)";
+    const std::string no_colon = "expected ':' and the cells' unit, as in: cells Duty!C4 : kPa";
+    const std::string no_spec =
+        "expected the cells' unit, such as kPa or m^3/s, or a dimension such as [L]";
+    const std::vector<expected_error> cases = {
+        // Lower-case column letters: the area starts right after '!'.
+        {"cells Duty!c4 : kPa", 1, 12, no_area},
+        // A row number glued to a name: "C4x" is no cell.
+        {"cells Duty!C4x : kPa", 1, 12, no_area},
+        // The unit without its ':'; the grammar stops after the space.
+        {"cells Duty!C4 kPa", 1, 15, no_colon},
+        // ':' with nothing after it.
+        {"cells Duty!C4 :", 1, 16, no_spec},
+        // A '?' infers a symbol's dimension; a cell's unit must be given.
+        {"cells Duty!C4 : ?", 1, 17, no_spec},
+    };
+    for (const auto& e : cases)
+        fails_with(e);
+}

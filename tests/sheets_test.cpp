@@ -5,8 +5,10 @@
 #include "plumb/check.hpp"
 #include "plumb/openformula.hpp"
 #include "plumb/render.hpp"
+#include "plumb/rules.hpp"
 #include "sheets/a1_front_end.hpp"
 #include "sheets/readers.hpp"
+#include "sheets/shared_formula.hpp"
 #include "sheets/unit_text.hpp"
 #include "test_support.hpp"
 
@@ -228,4 +230,134 @@ TEST_CASE("sheets: a bad workbook is exit status 2 and the good one beside it is
     const std::string json = render_json(report);
     CHECK(json.find("\"sheet\": \"Pump\", \"cell\": \"C14\"") != std::string::npos);
     CHECK(json.find("\"inputs_without_units\": 1") != std::string::npos);
+}
+
+namespace {
+
+// The corpus's well-test.xlsx copied to a folder of its own, with `sidecar` beside it.
+check_report check_well_test_with(const std::string& sidecar, const std::string& folder) {
+    const auto dir = std::filesystem::temp_directory_path() / folder;
+    std::filesystem::create_directories(dir);
+    {
+        std::ofstream out(dir / "well-test.xlsx", std::ios::binary);
+        out << read_corpus("well-test.xlsx");
+        std::ofstream side(dir / "well-test.cells.plumb", std::ios::binary);
+        side << sidecar;
+    }
+    check_report report = check_paths({dir / "well-test.xlsx"});
+    return report;
+}
+
+const diagnostic* finding_at(const check_report& report, std::string_view place,
+                             std::string_view rule) {
+    for (const auto& d : report.diagnostics)
+        if (d.rule == rule && d.where.file != nullptr)
+            if (const cell_place* at = d.where.file->cell_at(d.where.range.begin);
+                at != nullptr && cell_text(*at) == place)
+                return &d;
+    return nullptr;
+}
+
+} // namespace
+
+TEST_CASE("sheets: a sidecar's cells lines give cells a unit that wins over the text beside") {
+    // Without the sidecar's line, Inputs!C6 is in psi (beside it in D6), and Calc!C7, which
+    // subtracts it from kPa, is a unit-scale error; so is Calc!C5, a lookup of it in a kPa
+    // table (corpus/sheets/well-test.expect).
+    const check_report plain = check_well_test_with("Rate : bbl/d\n", "plumb-sidecar-plain");
+    CHECK(finding_at(plain, "Calc!C7", rules::unit_scale) != nullptr);
+    CHECK(finding_at(plain, "Calc!C5", rules::unit_scale) != nullptr);
+    // The sidecar says the gauge was re-read in kPa: the subtraction and the lookup now agree.
+    const check_report cells = check_well_test_with(
+        "Rate : bbl/d\ncells Inputs!C6 : kPa \"re-read in kPa\"\n", "plumb-sidecar-cell");
+    INFO(render_text(cells));
+    CHECK(finding_at(cells, "Calc!C7", rules::unit_scale) == nullptr);
+    CHECK(finding_at(cells, "Calc!C5", rules::unit_scale) == nullptr);
+    // Untouched cells keep their findings.
+    CHECK(finding_at(cells, "Calc!C11", rules::unit_scale) != nullptr);
+    CHECK_FALSE(cells.input_failed);
+}
+
+TEST_CASE("sheets: a whole column and a range from the sidecar, named in the notes") {
+    // The viscosity table's column given in Pa·s (1000 mPa·s, SI Brochure 9th ed., Table 4
+    // and prefixes): the lookup at Calc!C4, written as mPa·s, is now 1000 times off.
+    const check_report column = check_well_test_with(
+        "cells Tables!B : Pa*s\ncells Inputs!C5:C6 : kPa\n", "plumb-sidecar-column");
+    INFO(render_text(column));
+    const diagnostic* lookup = finding_at(column, "Calc!C4", rules::unit_scale);
+    REQUIRE(lookup != nullptr);
+    bool noted = false;
+    for (const auto& n : lookup->notes)
+        noted =
+            noted || n.message.find("from the sidecar well-test.cells.plumb") != std::string::npos;
+    CHECK(noted);
+    // The range made C6 kPa as well: the drawdown's subtraction agrees.
+    CHECK(finding_at(column, "Calc!C7", rules::unit_scale) == nullptr);
+}
+
+TEST_CASE("sheets: a sidecar line naming a sheet the workbook lacks is a clear finding") {
+    const check_report report =
+        check_well_test_with("cells Pumps!C4 : kPa\n", "plumb-sidecar-no-sheet");
+    std::vector<const diagnostic*> problems;
+    for (const auto& d : report.diagnostics)
+        if (d.rule == rules::sidecar_problem)
+            problems.push_back(&d);
+    REQUIRE(problems.size() == 1);
+    CHECK(problems.front()->message.find("no sheet named 'Pumps'") != std::string::npos);
+    REQUIRE(!problems.front()->notes.empty());
+    CHECK(problems.front()->notes.front().message.find("Inputs, Tables, Calc") !=
+          std::string::npos);
+}
+
+TEST_CASE("sheets: a shared formula moves its relative references (ECMA-376 Part 1, 18.3.1.40)") {
+    // Master in C2 (row 1, column 2), follower in C5: three rows down, same column.
+    const cell_address c2{1, 2};
+    CHECK(shift_formula("A2*B2", c2, {4, 2}) == "A5*B5");
+    // '$' parts stay; a follower one column right moves only relative columns.
+    CHECK(shift_formula("$A2*B$2+$C$3", c2, {1, 3}) == "$A2*C$2+$C$3");
+    // Other sheets' cells move too; quoted names, strings, functions and names stay.
+    CHECK(shift_formula("SUM('Pump data'!A2:A4)+IF(B2>0,\"B2\",Rate)*LOG10(B2)", c2, {2, 2}) ==
+          "SUM('Pump data'!A3:A5)+IF(B3>0,\"B2\",Rate)*LOG10(B3)");
+    // Numbers are not references.
+    CHECK(shift_formula("B2*3.6+1E3", c2, {2, 2}) == "B3*3.6+1E3");
+    // Whole columns and rows, and a reference moved off the sheet, are not guessed.
+    CHECK_FALSE(shift_formula("SUM(A:A)", c2, {2, 2}).has_value());
+    CHECK_FALSE(shift_formula("SUM(2:2)", c2, {2, 2}).has_value());
+    CHECK_FALSE(shift_formula("A1", c2, {0, 2}).has_value());
+}
+
+TEST_CASE("sheets: shared formulas in an .xlsx are expanded to every cell of their area") {
+    // A hand-built package (invented demo data): D2 is the master of D2:D4 (flow = area *
+    // velocity); D3 and D4 follow it and read their own row.
+    const std::string sheet =
+        "<worksheet><sheetData>"
+        "<row r=\"1\"><c r=\"B1\" t=\"inlineStr\"><is><t>Area [m2]</t></is></c>"
+        "<c r=\"C1\" t=\"inlineStr\"><is><t>Velocity [m/s]</t></is></c>"
+        "<c r=\"D1\" t=\"inlineStr\"><is><t>Flow [m3/s]</t></is></c></row>"
+        "<row r=\"2\"><c r=\"B2\"><v>0.5</v></c><c r=\"C2\"><v>2</v></c>"
+        "<c r=\"D2\"><f t=\"shared\" ref=\"D2:D4\" si=\"0\">B2*C2</f><v>1</v></c></row>"
+        "<row r=\"3\"><c r=\"B3\"><v>0.25</v></c><c r=\"C3\"><v>2</v></c>"
+        "<c r=\"D3\"><f t=\"shared\" si=\"0\"/><v>0.5</v></c></row>"
+        "<row r=\"4\"><c r=\"B4\"><v>2000</v></c><c r=\"C4\"><v>2</v></c>"
+        "<c r=\"D4\"><f t=\"shared\" si=\"0\"/><v>4000</v></c>"
+        "<c r=\"E4\" t=\"inlineStr\"><is><t>m3/s</t></is></c></row>"
+        "</sheetData></worksheet>";
+    const std::string book = make_zip(
+        {{"[Content_Types].xml",
+          "<Types><Override PartName=\"/xl/workbook.xml\" ContentType=\"application/"
+          "vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml\"/></Types>"},
+         {"xl/workbook.xml",
+          "<workbook><sheets><sheet name=\"Flow\" sheetId=\"1\" id=\"rId1\"/></sheets></workbook>"},
+         {"xl/_rels/workbook.xml.rels",
+          "<Relationships><Relationship Id=\"rId1\" Target=\"worksheets/sheet1.xml\"/>"
+          "</Relationships>"},
+         {"xl/worksheets/sheet1.xml", sheet}});
+    const workbook read = read_workbook(book, "flow.xlsx");
+    REQUIRE(read.sheets.size() == 1);
+    const cell* d3 = read.sheets[0].find({2, 3});
+    REQUIRE(d3 != nullptr);
+    CHECK(d3->text == "=B3*C3");
+    const cell* d4 = read.sheets[0].find({3, 3});
+    REQUIRE(d4 != nullptr);
+    CHECK(d4->text == "=B4*C4");
 }

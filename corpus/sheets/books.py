@@ -131,7 +131,12 @@ BOOKS = {
         "sheets": [("Inputs", INPUTS), ("Tables", TABLES), ("Calc", CALC)],
         "names": {"Rate": ("Inputs", "$C$3"), "FVF": ("Inputs", "$C$4")},
         "sidecar": "# Units of the workbook's defined names (plumb reads this with well-test.*)\n"
-                   "Rate : bbl/d \"stock-tank oil rate\"\n",
+                   "Rate : bbl/d \"stock-tank oil rate\"\n"
+                   "# Units of cells, ranges and whole columns; they win over the text beside a cell and\n"
+                   "# over its column's heading\n"
+                   "cells Tables!A : kPa \"the PVT table's pressures\"\n"
+                   "cells Tables!B3:B7 : mPa*s \"viscosities from the lab report\"\n"
+                   "cells Inputs!C7 : m \"net pay from the log\"\n",
         "expect": [
             "Calc!C5 unit-scale", "Calc!C7 unit-scale", "Calc!C8 circular-reference",
             "Calc!C11 unit-scale", "Calc!C12 argument-mismatch", "Calc!C16 sum-mismatch",

@@ -311,9 +311,30 @@ struct case_kind : sor<prototype_keyword, model_keyword> {};
 struct case_statement : seq<at<case_kind, plus<space>, label_name, ws, one<':'>>, case_kind,
                             plus<space>, study_name, ws, study_colon, ws, must<case_items>> {};
 
+// --- Units of workbook cells, in a workbook's sidecar (book.cells.plumb) -------------------
+//   cells Duty!C4 : kPa "suction gauge"
+//   cells Duty!C4:C9 : mm
+//   cells 'Pump data'!D : m^3/s          (a whole column)
+// The '!' after the sheet tells this line from a declaration of a symbol named "cells".
+struct cells_keyword : TAO_PEGTL_STRING("cells") {};
+struct quoted_sheet_text : plus<sor<TAO_PEGTL_STRING("''"), not_one<'\'', '\n'>>> {};
+struct quoted_sheet : seq<one<'\''>, quoted_sheet_text, one<'\''>> {};
+struct plain_sheet : plus<sor<name_char, one<'.'>>> {};
+struct cells_sheet : sor<quoted_sheet, plain_sheet> {};
+struct cell_column : rep_min_max<1, 3, range<'A', 'Z'>> {};
+struct cell_row : seq<range<'1', '9'>, star<digit>> {};
+struct cell_corner
+    : seq<opt<one<'$'>>, cell_column, opt<opt<one<'$'>>, cell_row>, not_at<name_char>> {};
+struct cells_area : seq<cell_corner, opt<one<':'>, cell_corner>> {};
+struct cells_colon : one<':'> {};
+struct cells_spec : sor<dimension_brackets, unit_expression> {};
+struct cells_statement : seq<at<cells_keyword, plus<space>, cells_sheet, one<'!'>>, cells_keyword,
+                             plus<space>, cells_sheet, one<'!'>, must<cells_area>, ws,
+                             must<cells_colon>, ws, must<cells_spec>, opt<ws, description>> {};
+
 // --- One logical line ---------------------------------------------------------------------
-struct statement : sor<use_statement, measure_statement, retired_unit_statement, study_statement,
-                       case_statement, declaration, formula> {};
+struct statement : sor<use_statement, cells_statement, measure_statement, retired_unit_statement,
+                       study_statement, case_statement, declaration, formula> {};
 struct line_end : seq<ws, opt<comment>, eof> {};
 struct line : seq<ws, opt<statement>, must<line_end>> {};
 

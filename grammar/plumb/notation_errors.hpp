@@ -63,6 +63,9 @@ template <> inline constexpr const char* error_message<stated_number> = "expecte
 template <> inline constexpr const char* error_message<stated_tolerance_number> = "expected a tolerance after '\u00B1', such as 0.005 or 0.1%";
 template <> inline constexpr const char* error_message<stated_value> = "expected 'SI' and the coefficient's value in coherent SI units after ',', as in [L^(1/3) T^-1, SI 1]";
 template <> inline constexpr const char* error_message<stated_close> = "expected ']' to close what the coefficient must be; write the dimension first, then ', SI' and the value, as in [L^(1/3) T^-1, SI 1 \u00B1 0.1%]";
+template <> inline constexpr const char* error_message<cells_area> = "expected a cell, a range or a column after the sheet's '!', as in Duty!C4, Duty!C4:C9 or Duty!D (columns in capitals)";
+template <> inline constexpr const char* error_message<cells_colon> = "expected ':' and the cells' unit, as in: cells Duty!C4 : kPa";
+template <> inline constexpr const char* error_message<cells_spec> = "expected the cells' unit, such as kPa or m^3/s, or a dimension such as [L]";
 template <> inline constexpr const char* error_message<line_end> = "expected an operator, a comparison or the end of the line here";
 // clang-format on
 

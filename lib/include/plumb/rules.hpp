@@ -39,6 +39,7 @@ inline constexpr std::string_view mixed_range = "mixed-range";
 inline constexpr std::string_view no_unit = "no-unit";
 inline constexpr std::string_view circular_reference = "circular-reference";
 inline constexpr std::string_view not_checked = "not-checked";
+inline constexpr std::string_view sidecar_problem = "sidecar-problem";
 
 struct rule_info {
     std::string_view id;

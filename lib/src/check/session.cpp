@@ -287,6 +287,7 @@ class session {
             infer_dimensions(tree, tree.formulas, table, f->diagnostics,
                              restate_in_ ? &*restate_in_ : nullptr);
         work_out_studies(tree, table, f->diagnostics, report_.studies);
+        sheets::report_cells_outside_sidecar(tree, f->diagnostics);
         const std::size_t formulas = reader.formulas + tree.studies.size();
         if (f->parsed)
             tree.diagnostics.clear(); // reported when the file was read as a dictionary

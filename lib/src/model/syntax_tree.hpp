@@ -176,6 +176,16 @@ struct defined_unit {
     std::shared_ptr<const scale_row> origin; // null for a unit that counts from nothing
 };
 
+// cells SHEET!AREA : unit ["description"]: a unit for workbook cells, read from a sidecar.
+struct cells_line {
+    span range;
+    span sheet; // as written, quotes included when quoted
+    span area;  // "C4", "C4:C9", "D"
+    span spec;
+    span description;
+    declared_kind kind;
+};
+
 struct parsed_file {
     const source_file* source = nullptr;
     std::vector<expr_node> nodes;
@@ -193,6 +203,7 @@ struct parsed_file {
     std::vector<study_case> cases;
     std::vector<case_value> case_values;
     std::vector<span> case_matches;
+    std::vector<cells_line> cells;
     std::vector<diagnostic> diagnostics; // syntax errors and unknown units
     bool has_syntax_error = false;
     std::vector<reference_value> references; // spreadsheet front ends only

@@ -113,6 +113,7 @@ struct parse_state {
     std::optional<rational> pending_exponent;
     std::vector<unit_value> units;
     span pending_use_path{};
+    span pending_cells_sheet{}, pending_cells_area{};
     span pending_unit_name{};
     bool pending_unit_ok = false;
     const unit_definition* pending_unit_base = nullptr; // a measure's lone unit, if offset
@@ -703,7 +704,8 @@ template <> struct action<nt::declared_name> {
     }
 };
 template <> struct action<nt::declaration_spec> {
-    template <typename In> static void apply(const In& in, parse_state& s) {
+    template <typename In> static void apply(const In& in, parse_state& s) { take_spec(in, s); }
+    template <typename In> static void take_spec(const In& in, parse_state& s) {
         s.pending_spec = s.range(in);
         if (in.string_view() == "?") {
             s.pending_kind.to_infer = true;
@@ -738,6 +740,29 @@ template <> struct action<nt::declaration> {
         s.out.declarations.push_back({s.range(in), s.pending_spec, s.pending_description,
                                       s.pending_value, s.pending_kind, s.pending_first_name,
                                       count});
+    }
+};
+
+// --- cells SHEET!AREA : unit ---
+template <> struct action<nt::cells_sheet> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_cells_sheet = s.range(in);
+    }
+};
+template <> struct action<nt::cells_area> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.pending_cells_area = s.range(in);
+    }
+};
+template <> struct action<nt::cells_spec> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        action<nt::declaration_spec>::take_spec(in, s);
+    }
+};
+template <> struct action<nt::cells_statement> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        s.out.cells.push_back({s.range(in), s.pending_cells_sheet, s.pending_cells_area,
+                               s.pending_spec, s.pending_description, s.pending_kind});
     }
 };
 
@@ -1009,14 +1034,14 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin) {
 // Rolls back whatever a failed line added, so the tree holds only complete statements.
 struct tree_mark {
     std::size_t nodes, call_args, quantities, sides, formulas, declarations, names, uses, units,
-        studies, study_names, cases, case_values, case_matches, diagnostics;
+        studies, study_names, cases, case_values, case_matches, cells, diagnostics;
     explicit tree_mark(const syntax::parsed_file& f)
         : nodes(f.nodes.size()), call_args(f.call_args.size()), quantities(f.quantities.size()),
           sides(f.sides.size()), formulas(f.formulas.size()), declarations(f.declarations.size()),
           names(f.names.size()), uses(f.uses.size()), units(f.units.size()),
           studies(f.studies.size()), study_names(f.study_names.size()), cases(f.cases.size()),
           case_values(f.case_values.size()), case_matches(f.case_matches.size()),
-          diagnostics(f.diagnostics.size()) {}
+          cells(f.cells.size()), diagnostics(f.diagnostics.size()) {}
     void restore(syntax::parsed_file& f) const {
         f.nodes.resize(nodes);
         f.call_args.resize(call_args);
@@ -1032,6 +1057,7 @@ struct tree_mark {
         f.cases.resize(cases);
         f.case_values.resize(case_values);
         f.case_matches.resize(case_matches);
+        f.cells.resize(cells);
         f.diagnostics.resize(diagnostics);
     }
 };

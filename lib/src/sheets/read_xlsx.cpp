@@ -3,8 +3,10 @@
 #include "sheets/archive.hpp"
 #include "sheets/readers.hpp"
 #include "sheets/safe_xml.hpp"
+#include "sheets/shared_formula.hpp"
 
 #include <fmt/format.h>
+#include <map>
 
 namespace plumb::sheets {
 
@@ -41,6 +43,7 @@ void read_sheet(archive& zip, const std::string& part, sheet& out,
     parse_xml(doc, *text, part, limits);
     const pugi::xml_node data = child_named(child_named(doc, "worksheet"), "sheetData");
     std::uint32_t next_row = 0;
+    std::map<std::string, std::pair<cell_address, std::string>> masters; // by "si"
     for (pugi::xml_node row = data.first_child(); row; row = row.next_sibling()) {
         if (local_name(row) != "row")
             continue;
@@ -73,10 +76,22 @@ void read_sheet(archive& zip, const std::string& part, sheet& out,
             if (f) {
                 item.kind = cell_kind::formula;
                 const std::string_view body = f.text().get();
-                if (body.empty() && std::string_view(attribute_named(f, "t").value()) == "shared")
-                    item.text = ""; // a shared formula's follower: not expanded (reported)
-                else
+                const bool is_shared =
+                    std::string_view(attribute_named(f, "t").value()) == "shared";
+                const std::string index = attribute_named(f, "si").value();
+                if (is_shared && !body.empty())
+                    masters[index] = {at, std::string(body)};
+                if (is_shared && body.empty()) {
+                    // A follower: the master's formula moved to this cell; one that cannot be
+                    // moved stays empty and is reported as not checked.
+                    const auto master = masters.find(index);
+                    std::optional<std::string> moved;
+                    if (master != masters.end())
+                        moved = shift_formula(master->second.second, master->second.first, at);
+                    item.text = moved ? "=" + *moved : "";
+                } else {
                     item.text = "=" + std::string(body);
+                }
             } else if (type == "s") {
                 const unsigned long long i = v.text().as_ullong(~0ULL);
                 if (i >= shared.size())

@@ -161,8 +161,9 @@ class workbook_checker {
             const std::string_view raw = f.source->text;
             if (raw.empty()) {
                 report(severity::warning, rules::not_checked,
-                       "this cell holds a shared formula that plumb does not expand, so it is "
-                       "not checked",
+                       "this cell follows a shared formula whose references plumb cannot move "
+                       "here (a whole row or column, a cell off the sheet, or no master), so it "
+                       "is not checked",
                        f.text);
                 continue;
             }

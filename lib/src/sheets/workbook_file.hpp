@@ -1,6 +1,7 @@
 // A workbook file on disk: read read-only, its sidecar and dictionaries found, checked.
 #pragma once
 
+#include "model/syntax_tree.hpp"
 #include "plumb/check.hpp"
 
 #include <filesystem>
@@ -13,6 +14,10 @@ bool is_workbook_path(const std::filesystem::path& path);
 bool is_sidecar_path(const std::filesystem::path& path);
 // The sidecar that belongs beside a workbook: pump-station.xlsx -> pump-station.cells.plumb.
 std::filesystem::path sidecar_for(const std::filesystem::path& workbook);
+
+// A `cells` line in a file that is not a workbook's sidecar gives no cell a unit: each is a
+// finding that says where it belongs.
+void report_cells_outside_sidecar(const syntax::parsed_file& tree, std::vector<diagnostic>& out);
 
 // Checks one workbook; an unreadable one is an `unreadable` finding and input_failed.
 void check_workbook_file(const std::filesystem::path& path, const check_options& options,
