@@ -1878,6 +1878,18 @@ class checker {
 
 } // namespace
 
+// Exponents beyond the exact range: the formula's partial findings give way to one that says so.
+static void replace_with_overflow(const syntax::parsed_file& file, const syntax::formula& formula,
+                                  std::vector<diagnostic>& out, std::size_t before) {
+    out.resize(before);
+    diagnostic d;
+    d.rule = std::string(rules::overflow);
+    d.message = "the exponents in this formula exceed the exact range (64-bit numerator "
+                "and denominator)";
+    d.where = {file.source, formula.range};
+    out.push_back(std::move(d));
+}
+
 bool check_formula(const syntax::parsed_file& file, const syntax::formula& formula,
                    symbol_table& symbols, std::vector<diagnostic>& out, bool defer_unknown) {
     checker c(file, symbols, out, defer_unknown);
@@ -1888,13 +1900,7 @@ bool check_formula(const syntax::parsed_file& file, const syntax::formula& formu
         out.resize(before);
         return false;
     } catch (const arithmetic_overflow&) {
-        out.resize(before);
-        diagnostic d;
-        d.rule = std::string(rules::overflow);
-        d.message = "the exponents in this formula exceed the exact range (64-bit numerator "
-                    "and denominator)";
-        d.where = {file.source, formula.range};
-        out.push_back(std::move(d));
+        replace_with_overflow(file, formula, out, before);
     }
     return true;
 }
@@ -1907,13 +1913,7 @@ std::optional<value_type> check_sheet_formula(const syntax::parsed_file& file,
     try {
         return c.check_value(formula);
     } catch (const arithmetic_overflow&) {
-        out.resize(before);
-        diagnostic d;
-        d.rule = std::string(rules::overflow);
-        d.message = "the exponents in this formula exceed the exact range (64-bit numerator "
-                    "and denominator)";
-        d.where = {file.source, formula.range};
-        out.push_back(std::move(d));
+        replace_with_overflow(file, formula, out, before);
         return std::nullopt;
     }
 }

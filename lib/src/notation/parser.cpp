@@ -3,6 +3,8 @@
 // operand stack is always consistent.
 #include "notation/parser.hpp"
 
+#include "model/node_stack.hpp"
+
 #include "plumb/constants.hpp"
 #include "plumb/notation.hpp"
 #include "plumb/notation_errors.hpp"
@@ -89,7 +91,7 @@ struct parse_state {
     const char* file_begin;
     const statement_sink* sink = nullptr; // for units defined in used files
 
-    std::vector<std::uint32_t> operands;
+    syntax::node_stack stack;
     std::vector<std::uint32_t> argument_counts;
     int depth = 0;
     bool in_braces = false;
@@ -154,29 +156,15 @@ struct parse_state {
         return sink != nullptr ? sink->imported_unit(name) : nullptr;
     }
 
-    std::uint32_t push_node(syntax::expr_node n) {
-        out.nodes.push_back(n);
-        const auto index = static_cast<std::uint32_t>(out.nodes.size() - 1);
-        operands.push_back(index);
-        return index;
-    }
-    std::uint32_t pop() {
-        const std::uint32_t v = operands.back();
-        operands.pop_back();
-        return v;
-    }
-    void push_binary(expr_kind kind) {
-        const std::uint32_t rhs = pop();
-        const std::uint32_t lhs = pop();
-        const span r{out.nodes[lhs].range.begin, out.nodes[rhs].range.end};
-        push_node({kind, r, lhs, rhs});
-    }
+    std::uint32_t push_node(syntax::expr_node n) { return stack.push(out, n); }
+    std::uint32_t pop() { return stack.pop(); }
+    void push_binary(expr_kind kind) { stack.push_binary(out, kind); }
     void reset_line() {
         depth = 0;
         in_braces = false;
         line_has_inferred = false;
         pending_statement.reset();
-        operands.clear();
+        stack.operands.clear();
         argument_counts.clear();
         pending_relation = relation_kind::none;
         pending_label = {};
@@ -373,11 +361,11 @@ template <> struct action<nt::call_arguments> {
         const std::uint32_t count = s.argument_counts.back();
         s.argument_counts.pop_back();
         const auto first = static_cast<std::uint32_t>(s.out.call_args.size());
-        const std::size_t base = s.operands.size() - count;
-        for (std::size_t i = base; i < s.operands.size(); ++i)
-            s.out.call_args.push_back(s.operands[i]);
-        s.operands.resize(base);
-        syntax::expr_node& call = s.out.nodes[s.operands.back()];
+        const std::size_t base = s.stack.operands.size() - count;
+        for (std::size_t i = base; i < s.stack.operands.size(); ++i)
+            s.out.call_args.push_back(s.stack.operands[i]);
+        s.stack.operands.resize(base);
+        syntax::expr_node& call = s.out.nodes[s.stack.operands.back()];
         call.kind = expr_kind::call;
         call.range.end = s.range(in).end;
         call.lhs = first;

@@ -3,6 +3,8 @@
 // commits (must<>) or fails before an action ran, so the operand stack stays consistent.
 #include "sheets/a1_front_end.hpp"
 
+#include "model/node_stack.hpp"
+
 #include "plumb/a1_formula.hpp"
 #include "plumb/a1_formula_errors.hpp"
 
@@ -31,7 +33,7 @@ struct lowering {
     std::size_t sheet;
     const char* text_begin; // the listing's first byte: spans are offsets from it
     span hundred;
-    std::vector<std::uint32_t> operands;
+    syntax::node_stack stack;
     std::vector<std::uint32_t> argument_counts;
     std::string not_checked;
     int depth = 0;
@@ -42,22 +44,9 @@ struct lowering {
         return {static_cast<std::uint32_t>(in.begin() - text_begin),
                 static_cast<std::uint32_t>(in.end() - text_begin)};
     }
-    std::uint32_t push_node(syntax::expr_node n) {
-        out().nodes.push_back(n);
-        const auto index = static_cast<std::uint32_t>(out().nodes.size() - 1);
-        operands.push_back(index);
-        return index;
-    }
-    std::uint32_t pop() {
-        const std::uint32_t v = operands.back();
-        operands.pop_back();
-        return v;
-    }
-    void push_binary(expr_kind kind) {
-        const std::uint32_t rhs = pop();
-        const std::uint32_t lhs = pop();
-        push_node({kind, {out().nodes[lhs].range.begin, out().nodes[rhs].range.end}, lhs, rhs});
-    }
+    std::uint32_t push_node(syntax::expr_node n) { return stack.push(out(), n); }
+    std::uint32_t pop() { return stack.pop(); }
+    void push_binary(expr_kind kind) { stack.push_binary(out(), kind); }
     // A value the checker cannot type (text, TRUE, an error value): unknown, so not checked.
     std::uint32_t push_opaque(span where) {
         out().references.emplace_back();
@@ -213,9 +202,9 @@ template <> struct action<g::call_arguments> {
     template <typename In> static void apply(const In& in, lowering& s) {
         const std::uint32_t count = s.argument_counts.back();
         s.argument_counts.pop_back();
-        std::vector<std::uint32_t> args(s.operands.end() - count, s.operands.end());
-        s.operands.resize(s.operands.size() - count);
-        const std::uint32_t call_index = s.operands.back();
+        std::vector<std::uint32_t> args(s.stack.operands.end() - count, s.stack.operands.end());
+        s.stack.operands.resize(s.stack.operands.size() - count);
+        const std::uint32_t call_index = s.stack.operands.back();
         auto& out = s.out();
         const std::string name = upper(
             std::string_view(s.text_begin + out.nodes[call_index].range.begin,
@@ -264,7 +253,7 @@ template <> struct action<g::call_arguments> {
             s.book.references.erase(s.book.references.begin() + (table - s.book.references.data()));
             const std::uint32_t key_column = s.push_reference(where, sheet, *key_line);
             const std::uint32_t result_column = s.push_reference(where, sheet, *result_line);
-            s.operands.resize(s.operands.size() - 2);
+            s.stack.operands.resize(s.stack.operands.size() - 2);
             args = {args[0], key_column, result_column};
         } else if (name == "INDEX" && count >= 1) {
             if (const lowered_reference* range = reference_of(args[0])) {
@@ -281,7 +270,7 @@ template <> struct action<g::call_arguments> {
                     s.book.references.erase(s.book.references.begin() +
                                             (range - s.book.references.data()));
                     args[0] = s.push_reference(where, sheet, *line);
-                    s.operands.pop_back();
+                    s.stack.operands.pop_back();
                 }
             }
         }
@@ -308,10 +297,10 @@ template <> struct action<g::percent_mark> {
     template <typename In> static void apply(const In& in, lowering& s) {
         const std::uint32_t operand = s.pop();
         const span whole{s.out().nodes[operand].range.begin, s.range(in).end};
-        s.operands.push_back(operand);
+        s.stack.operands.push_back(operand);
         s.push_node({expr_kind::number, s.hundred});
         s.push_binary(expr_kind::divide);
-        s.out().nodes[s.operands.back()].range = whole;
+        s.out().nodes[s.stack.operands.back()].range = whole;
     }
 };
 template <expr_kind Kind> struct binary_action {
@@ -383,16 +372,16 @@ lowered_formula lower_formula(lowered_book& book, const workbook& wb, std::size_
         book.references.resize(result.first_reference);
         return result;
     }
-    if (s.operands.size() != 1) {
+    if (s.stack.operands.size() != 1) {
         result.syntax_error = "unexpected text here";
         result.syntax_at = {begin, end};
         book.references.resize(result.first_reference);
         return result;
     }
     auto& tree = book.tree;
-    tree.sides.push_back({s.operands.back(), syntax::relation_kind::none});
+    tree.sides.push_back({s.stack.operands.back(), syntax::relation_kind::none});
     syntax::formula f{};
-    f.range = tree.nodes[s.operands.back()].range;
+    f.range = tree.nodes[s.stack.operands.back()].range;
     f.first_side = static_cast<std::uint32_t>(tree.sides.size() - 1);
     f.side_count = 1;
     tree.formulas.push_back(f);

@@ -1,0 +1,34 @@
+// The operand stack that every front end's parse actions use to build the flat expression
+// tree: operands are pushed as they are read and combined when their operator completes.
+#pragma once
+
+#include "model/syntax_tree.hpp"
+
+#include <cstdint>
+#include <vector>
+
+namespace plumb::syntax {
+
+struct node_stack {
+    std::vector<std::uint32_t> operands; // indices into the tree's nodes, innermost last
+
+    std::uint32_t push(parsed_file& tree, expr_node n) {
+        tree.nodes.push_back(n);
+        const auto index = static_cast<std::uint32_t>(tree.nodes.size() - 1);
+        operands.push_back(index);
+        return index;
+    }
+    std::uint32_t pop() {
+        const std::uint32_t v = operands.back();
+        operands.pop_back();
+        return v;
+    }
+    // The two operands on top become one node spanning both.
+    void push_binary(parsed_file& tree, expr_kind kind) {
+        const std::uint32_t rhs = pop();
+        const std::uint32_t lhs = pop();
+        push(tree, {kind, {tree.nodes[lhs].range.begin, tree.nodes[rhs].range.end}, lhs, rhs});
+    }
+};
+
+} // namespace plumb::syntax
