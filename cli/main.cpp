@@ -127,6 +127,13 @@ struct options {
 };
 
 // Parses the options shared by check and dim; an error message when they are wrong.
+// The units of --restate-in must name a consistent set ("ft, lb, s" or "ft, lbf, s").
+std::optional<std::string> check_restate_units(const std::vector<std::string>& units) {
+    if (auto why = plumb::restate_units_problem(units))
+        return fmt::format("--restate-in: {}", *why);
+    return std::nullopt;
+}
+
 std::optional<std::string> parse_options(const std::vector<std::string>& args, options& out) {
     bool only_paths = false;
     for (std::size_t i = 0; i < args.size(); ++i) {
@@ -162,6 +169,9 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
                     item += c;
                 }
             }
+            // Refused here, for every command that takes it, not only for check.
+            if (auto error = check_restate_units(out.check.restate_in))
+                return *error;
         } else if (a == "--study" || a.rfind("--study=", 0) == 0) {
             const auto v = value("--study");
             if (!v)
@@ -229,13 +239,6 @@ std::optional<std::string> parse_options(const std::vector<std::string>& args, o
             return fmt::format("unknown option '{}'", a);
         }
     }
-    return std::nullopt;
-}
-
-// The units of --restate-in must name a consistent set ("ft, lb, s" or "ft, lbf, s").
-std::optional<std::string> check_restate_units(const std::vector<std::string>& units) {
-    if (auto why = plumb::restate_units_problem(units))
-        return fmt::format("--restate-in: {}", *why);
     return std::nullopt;
 }
 
@@ -424,12 +427,20 @@ int run_groups(const std::vector<std::string>& args) {
         return usage_error("--repeating goes with --vars");
     plumb::check_report report;
     if (!opts.variables.empty()) {
-        // The command line's variables become a study in a file that uses the given ones.
-        std::string text;
+        // The command line's variables become one study line, with the given files read as
+        // dictionaries. Nothing in an argument may end that line or start another statement.
+        for (const std::string* arg : {&opts.variables, &opts.repeating})
+            if (std::any_of(arg->begin(), arg->end(), [](char c) {
+                    return static_cast<unsigned char>(c) < 0x20 || c == '\\' || c == '#' ||
+                           c == '"';
+                }))
+                return usage_error("--vars and --repeating take one line of names and commas, "
+                                   "without line breaks, '\\', '#' or quotes");
         for (const auto& path : opts.positional)
-            text += fmt::format("use \"{}\"\n", std::filesystem::absolute(path).string());
-        text += fmt::format("study command-line: {}{}\n", opts.variables,
-                            opts.repeating.empty() ? "" : " repeating " + opts.repeating);
+            opts.check.dictionaries.emplace_back(path);
+        const std::string text =
+            fmt::format("study command-line: {}{}\n", opts.variables,
+                        opts.repeating.empty() ? "" : " repeating " + opts.repeating);
         report = plumb::check_text("<command line>", text, opts.check);
     } else {
         if (opts.positional.empty())
@@ -495,7 +506,9 @@ int run_dim(const std::vector<std::string>& args) {
         print(fmt::format("{}\n", result.dim->to_string()));
     else
         print(fmt::format("{} ({})\n", result.dim->to_string(), name));
-    return exit_clean;
+    // A context file that could not be read is a failure even when the expression was worked
+    // out without it.
+    return result.report.input_failed ? exit_usage : exit_clean;
 }
 
 int run_catalogue(const std::vector<std::string>& args, colour_choice colour) {

@@ -1004,12 +1004,56 @@ TEST_CASE("json: a clean run, an unreadable path and awkward bytes stay valid JS
         const auto file = dir.write("odd \"name\\.plumb",
                                     "p : Pa \"a \\ \x01 and \xff\xfe bytes\"\nh : m\np = h\n");
         const auto r = run_plumb({"check", "--format", "json", file});
-        CHECK(r.status == 1);
+        CHECK(r.status == 2); // bytes that are not UTF-8 make the file a bad input
         const auto doc = parse_json(r.out);
         REQUIRE(doc);
         REQUIRE_FALSE((*doc)["findings"].array().empty());
         CHECK((*doc)["findings"].array()[0]["file"].string() == file);
     }
+}
+
+TEST_CASE("json: bytes that are not UTF-8 are a finding and never reach JSON or SARIF") {
+    // RFC 3629, section 4, and the Unicode Standard, table 3-7: overlong forms, C0, C1, F5-FF,
+    // surrogates, code points past U+10FFFF and sequences cut short are not UTF-8.
+    const temp_folder dir;
+    for (const std::string bad :
+         {"\xC0\xAF", "\xC1\xBF", "\xE0\x80\xAF", "\xED\xA0\x80", "\xF4\x90\x80\x80",
+          "\xF5\x80\x80\x80", "\xF7\xBF\xBF\xBF", "\xFF", "\xE2\x82"}) {
+        std::string shown_bytes;
+        for (const char c : bad)
+            shown_bytes += fmt::format("\\x{:02X}", static_cast<unsigned char>(c));
+        CAPTURE(shown_bytes);
+        // In a description, in a comment and in a formula; with a real mistake beside them.
+        const auto file = dir.write("bytes.plumb", "p : Pa \"a " + bad + " b\"\nh : m # " + bad +
+                                                       "\n@mixed p = h + x" + bad + "\n");
+        const auto json = run_plumb({"check", "--format", "json", file});
+        CHECK(json.status == 2);
+        const auto doc = parse_json(json.out);
+        REQUIRE(doc);
+        bool said = false;
+        for (const auto& f : (*doc)["findings"].array())
+            said = said || f["message"].string().find("not valid UTF-8") != std::string::npos;
+        CHECK(said);
+        const auto sarif = run_plumb({"check", "--format", "sarif", file});
+        CHECK(sarif.status == 2);
+        CHECK(parse_json(sarif.out));
+        const auto grouped = run_plumb({"groups", "--format", "json", file});
+        CHECK(parse_json(grouped.out));
+    }
+}
+
+TEST_CASE("json: a file name that is not UTF-8 is written with U+FFFD for each bad byte") {
+    const temp_folder dir;
+    const std::string file = dir.write("calc-\xC0\xAF.plumb", "h : m\nt : s\n@mixed h = t\n");
+    const auto r = run_plumb({"check", "--format", "json", file});
+    CHECK(r.status == 1);
+    const auto doc = parse_json(r.out);
+    REQUIRE(doc);
+    REQUIRE((*doc)["findings"].array().size() == 1);
+    const std::string shown = (*doc)["findings"].array()[0]["file"].string();
+    CHECK(shown == file.substr(0, file.size() - 8) + "\uFFFD\uFFFD.plumb");
+    const auto sarif = run_plumb({"check", "--format", "sarif", file});
+    CHECK(parse_json(sarif.out));
 }
 
 // --------------------------------------------------------------------------------------------

@@ -2,6 +2,8 @@
 // file, rule and statement key, never by line number, so that edits elsewhere keep them.
 #include "check/acceptance.hpp"
 #include "check/statement_text.hpp"
+#include "model/user_file.hpp"
+#include "model/utf8.hpp"
 #include "plumb/accepted.hpp"
 #include "plumb/rules.hpp"
 
@@ -151,13 +153,27 @@ struct relative_paths {
 
 std::vector<entry> read_entries_of(check_report& report, const fs::path& path,
                                    std::vector<diagnostic>& out, const source_file*& source) {
-    std::ifstream in(path, std::ios::binary);
-    if (!in)
+    user_file read = read_user_file(path);
+    if (read.missing)
         return {}; // no file yet: nothing accepted
-    std::ostringstream text;
-    text << in.rdbuf();
-    report.sources.push_back(std::make_unique<source_file>(path.string(), text.str()));
+    if (!read.problem.empty()) {
+        out.push_back(problem(rules::unreadable, severity::error,
+                              fmt::format("cannot read '{}': {}", path.string(), read.problem),
+                              {}));
+        report.input_failed = true;
+        return {};
+    }
+    report.sources.push_back(std::make_unique<source_file>(path.string(), std::move(read.text)));
     source = report.sources.back().get();
+    if (const auto bad = first_invalid_utf8(source->text())) {
+        const auto at = static_cast<std::uint32_t>(*bad);
+        out.push_back(problem(rules::acceptance_problem, severity::error,
+                              fmt::format("this file is not valid UTF-8: the bytes {} here are "
+                                          "not a character; save the file as UTF-8",
+                                          invalid_bytes_text(source->text(), *bad)),
+                              {source, {at, at + 1}}));
+        return {};
+    }
     return read_entries(*source, out);
 }
 
@@ -236,10 +252,8 @@ std::string accepted_findings_text(const check_report& report, const fs::path& p
         list.push_back(std::move(t));
     };
     // Entries about files this run did not check stay as they were.
-    if (std::ifstream in(existing_file, std::ios::binary); in) {
-        std::ostringstream text;
-        text << in.rdbuf();
-        const source_file old(existing_file.string(), text.str());
+    if (user_file read = read_user_file(existing_file); read.problem.empty()) {
+        const source_file old(existing_file.string(), std::move(read.text));
         std::vector<diagnostic> ignored;
         for (const auto& e : read_entries(old, ignored))
             if (e.complete && std::find(checked.begin(), checked.end(), e.file) == checked.end())

@@ -584,10 +584,15 @@ class checker {
             result.numeric = result.numeric && t.numeric;
             result.zero = result.zero && t.zero;
             inferred = inferred || t.inferred;
-            if (result.value && t.value)
-                result.value = subtracted ? *result.value - *t.value : *result.value + *t.value;
-            else
+            if (result.value && t.value) {
+                try {
+                    result.value = subtracted ? *result.value - *t.value : *result.value + *t.value;
+                } catch (const arithmetic_overflow&) {
+                    result.value.reset(); // as in a product: the value only matters to exponents
+                }
+            } else {
                 result.value.reset();
+            }
             operands_.push_back({node, std::move(t), subtracted});
         }
         const bool last_subtracted = file_.nodes[index].kind == expr_kind::subtract;
@@ -1924,7 +1929,12 @@ std::optional<dimension> expression_dimension(const syntax::parsed_file& file, s
     const std::size_t before = out.size();
     try {
         const auto t = c.eval(root);
-        if (!t.known || out.size() != before)
+        // A warning (an angle in degrees, a reading on an offset scale) leaves the dimension
+        // known; only an error takes it away.
+        const bool erred =
+            std::any_of(out.begin() + static_cast<std::ptrdiff_t>(before), out.end(),
+                        [](const diagnostic& d) { return d.level == severity::error; });
+        if (!t.known || erred)
             return std::nullopt;
         return t.dim;
     } catch (const arithmetic_overflow&) {

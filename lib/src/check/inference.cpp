@@ -1229,7 +1229,15 @@ std::optional<coherent_units> coherent_units_from(const std::vector<std::string>
     std::vector<std::array<rational, base_dimension_count>> exponents;
     std::vector<double> logs;
     std::array<bool, base_dimension_count> touched{};
-    for (const auto& symbol : symbols) {
+    for (std::size_t i = 0; i < n; ++i) {
+        const std::string& symbol = symbols[i];
+        if (std::find(symbols.begin(), symbols.begin() + static_cast<std::ptrdiff_t>(i), symbol) !=
+            symbols.begin() + static_cast<std::ptrdiff_t>(i)) {
+            why = fmt::format("'{}' is named twice; give one unit per base dimension, such as "
+                              "ft, lb, s",
+                              symbol);
+            return std::nullopt;
+        }
         const auto unit = unit_table::standard().resolve(symbol);
         if (!unit) {
             why = fmt::format("'{}' is not a unit plumb knows", symbol);

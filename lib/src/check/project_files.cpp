@@ -1,6 +1,7 @@
 // The project's `use` graph, from a light scan of each file's `use "..."` lines, so that a
 // hook given a changed dictionary also checks the calcs built on it.
 #include "check/path_patterns.hpp"
+#include "model/user_file.hpp"
 #include "notation/markdown.hpp"
 #include "plumb/accepted.hpp"
 #include "plumb/settings.hpp"
@@ -24,10 +25,7 @@ std::string key_of(const fs::path& p) {
 
 // The paths a file's `use` lines name, resolved against its folder.
 std::vector<std::string> uses_in(const fs::path& file) {
-    std::ifstream in(file, std::ios::binary);
-    std::ostringstream buffer;
-    buffer << in.rdbuf();
-    std::string text = buffer.str();
+    std::string text = read_user_file(file).text; // unreadable: no uses (checking says why)
     if (file.extension() == ".md")
         text = plumb_blocks_of(text);
     std::vector<std::string> out;

@@ -9,6 +9,7 @@
 #include <cmath>
 #include <fmt/format.h>
 #include <optional>
+#include <vector>
 
 namespace plumb {
 
@@ -27,41 +28,71 @@ std::string_view call_name(const source_file& src, const syntax::expr_node& n) {
 
 std::optional<rational> constant_of(const syntax::parsed_file& file, std::uint32_t index) {
     using syntax::expr_kind;
-    const syntax::expr_node& n = file.nodes[index];
+    // Post-order over an explicit stack: an exponent written as a sum of 100,000 numbers must
+    // not recurse once per term.
+    struct visit {
+        std::uint32_t node;
+        bool operands_done;
+    };
+    std::vector<visit> pending{{index, false}};
+    std::vector<rational> values;
     try {
-        switch (n.kind) {
-        case expr_kind::number:
-            return rational::parse(file.source->text(n.range));
-        case expr_kind::group:
-            return constant_of(file, n.lhs);
-        case expr_kind::negate: {
-            const auto v = constant_of(file, n.lhs);
-            return v ? std::optional<rational>(-*v) : std::nullopt;
-        }
-        case expr_kind::add:
-        case expr_kind::subtract:
-        case expr_kind::multiply:
-        case expr_kind::divide: {
-            const auto a = constant_of(file, n.lhs);
-            const auto b = constant_of(file, n.rhs);
-            if (!a || !b)
+        while (!pending.empty()) {
+            const visit v = pending.back();
+            pending.pop_back();
+            const syntax::expr_node& n = file.nodes[v.node];
+            switch (n.kind) {
+            case expr_kind::number: {
+                const auto parsed = rational::parse(file.source->text(n.range));
+                if (!parsed)
+                    return std::nullopt;
+                values.push_back(*parsed);
+                break;
+            }
+            case expr_kind::group:
+            case expr_kind::negate:
+                if (!v.operands_done) {
+                    pending.push_back({v.node, true});
+                    pending.push_back({n.lhs, false});
+                } else if (n.kind == expr_kind::negate) {
+                    values.back() = -values.back();
+                }
+                break;
+            case expr_kind::add:
+            case expr_kind::subtract:
+            case expr_kind::multiply:
+            case expr_kind::divide: {
+                if (!v.operands_done) {
+                    pending.push_back({v.node, true});
+                    pending.push_back({n.rhs, false});
+                    pending.push_back({n.lhs, false}); // taken first, so its value lies below
+                    break;
+                }
+                const rational b = values.back();
+                values.pop_back();
+                rational& a = values.back();
+                if (n.kind == expr_kind::add)
+                    a = a + b;
+                else if (n.kind == expr_kind::subtract)
+                    a = a - b;
+                else if (n.kind == expr_kind::multiply)
+                    a = a * b;
+                else if (b.is_zero())
+                    return std::nullopt;
+                else
+                    a = a / b;
+                break;
+            }
+            default:
                 return std::nullopt;
-            if (n.kind == expr_kind::add)
-                return *a + *b;
-            if (n.kind == expr_kind::subtract)
-                return *a - *b;
-            if (n.kind == expr_kind::multiply)
-                return *a * *b;
-            if (b->is_zero())
-                return std::nullopt;
-            return *a / *b;
-        }
-        default:
-            return std::nullopt;
+            }
         }
     } catch (const arithmetic_overflow&) {
         return std::nullopt;
     }
+    if (values.size() != 1)
+        return std::nullopt;
+    return values.back();
 }
 
 namespace {

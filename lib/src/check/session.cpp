@@ -7,6 +7,8 @@
 #include "check/parallel_check.hpp"
 #include "check/path_patterns.hpp"
 #include "groups/studies.hpp"
+#include "model/user_file.hpp"
+#include "model/utf8.hpp"
 #include "notation/markdown.hpp"
 #include "notation/parser.hpp"
 #include "plumb/accepted.hpp"
@@ -236,6 +238,24 @@ class session {
         return add(key.string(), path.string(), std::move(text));
     }
 
+    // Bytes that are not UTF-8 (a file saved as Latin-1, a damaged file) are one finding, at
+    // the first of them; the rest of the file is still checked, and the renderers show such
+    // bytes as U+FFFD.
+    void report_invalid_utf8(loaded_file* f) {
+        const std::string_view text = f->source->text();
+        const auto bad = first_invalid_utf8(text);
+        if (!bad)
+            return;
+        const auto at = static_cast<std::uint32_t>(*bad);
+        f->diagnostics.push_back(make_diagnostic(
+            severity::error, rules::syntax,
+            fmt::format("this file is not valid UTF-8: the bytes {} here are not a character; "
+                        "save the file as UTF-8",
+                        invalid_bytes_text(text, *bad)),
+            {f->source, {at, at + 1}}));
+        report_.input_failed = true;
+    }
+
     loaded_file* add(const std::string& key, std::string display_path, std::string text) {
         report_.sources.push_back(
             std::make_unique<source_file>(std::move(display_path), std::move(text)));
@@ -246,6 +266,7 @@ class session {
             by_path_.emplace(key, f);
         f->source = report_.sources.back().get();
         f->key = key;
+        report_invalid_utf8(f);
         return f;
     }
 
@@ -315,8 +336,24 @@ class session {
         const source_file& src = *report_.sources.back();
         syntax::parsed_file tree = parse_expression(src);
         query_diagnostics_ = std::move(tree.diagnostics);
+        if (const auto bad = first_invalid_utf8(src.text())) {
+            const auto at = static_cast<std::uint32_t>(*bad);
+            query_diagnostics_.push_back(
+                make_diagnostic(severity::error, rules::syntax,
+                                fmt::format("the bytes {} here are not UTF-8",
+                                            invalid_bytes_text(src.text(), *bad)),
+                                {&src, {at, at + 1}}));
+            report_.input_failed = true;
+            return std::nullopt;
+        }
         if (tree.has_syntax_error)
             report_.input_failed = true;
+        if (tree.sides.empty() && !tree.has_syntax_error) {
+            query_diagnostics_.push_back(make_diagnostic(
+                severity::error, rules::syntax,
+                "there is no expression here to work out ('#' starts a comment)", {}));
+            report_.input_failed = true;
+        }
         if (tree.sides.empty() || tree.has_syntax_error)
             return std::nullopt;
         return expression_dimension(tree, tree.sides.front().root, table, query_diagnostics_);
@@ -449,34 +486,12 @@ class session {
     std::vector<diagnostic> query_diagnostics_;
 
     bool read_file(const fs::path& path, std::string& text, location requested_at) {
-        std::error_code ec;
-        const bool is_dir = fs::is_directory(path, ec);
-        std::ifstream in(path, std::ios::binary);
-        std::string why;
-        if (is_dir)
-            why = "it is a folder";
-        else if (!in)
-            why = fs::exists(path, ec) ? "permission denied or not a regular file" : "no such file";
-        if (why.empty()) {
-            in.seekg(0, std::ios::end);
-            const std::streamoff size = in.tellg();
-            in.seekg(0, std::ios::beg);
-            if (size > 0) {
-                text.resize(static_cast<std::size_t>(size));
-                in.read(text.data(), size);
-                text.resize(static_cast<std::size_t>(in.gcount()));
-            } else {
-                // A pipe or a special file reports no size; read it as a stream.
-                in.clear();
-                text.assign(std::istreambuf_iterator<char>(in), std::istreambuf_iterator<char>());
-            }
-            if (in.bad())
-                why = "a read error occurred";
-            else if (text.size() >= std::numeric_limits<std::uint32_t>::max())
-                why = "it is larger than 4 GiB";
-        }
-        if (why.empty())
+        user_file read = read_user_file(path);
+        if (read.problem.empty()) {
+            text = std::move(read.text);
             return true;
+        }
+        const std::string& why = read.problem;
         const std::string message = fmt::format("cannot read '{}': {}", path.string(), why);
         if (requested_at.file == nullptr) {
             fail(message);
@@ -683,9 +698,9 @@ bool checking_reader::on_formula(const syntax::parsed_file& tree, const syntax::
 
 // A Markdown file is a calc note when it holds a plumb block.
 bool is_calc_note(const fs::path& path) {
-    std::ifstream in(path, std::ios::binary);
-    const std::string text{std::istreambuf_iterator<char>(in), std::istreambuf_iterator<char>()};
-    return has_plumb_blocks(text);
+    // A note too large or unreadable is taken as a calc note, so that checking it says why.
+    const user_file read = read_user_file(path);
+    return !read.problem.empty() || has_plumb_blocks(read.text);
 }
 
 diagnostic run_failure(std::string message) {

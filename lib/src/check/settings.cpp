@@ -1,6 +1,8 @@
 // plumb.toml, read with toml++. Every key is known here and documented in
 // settings_reference(); anything else is a problem, never silently ignored.
 #include "plumb/settings.hpp"
+#include "model/user_file.hpp"
+#include "model/utf8.hpp"
 #include "plumb/accepted.hpp"
 #include "plumb/rules.hpp"
 
@@ -123,9 +125,27 @@ settings_result read_settings(const fs::path& file) {
     s.root = fs::absolute(file).parent_path();
     s.accepted_findings = s.root / accepted_findings_name;
     reader r(out);
+    user_file read = read_user_file(file);
+    if (!read.problem.empty()) {
+        out.problems.push_back(
+            {0, 0, fmt::format("cannot read '{}': {}", file.string(), read.problem)});
+        return out;
+    }
+    if (const auto bad = first_invalid_utf8(read.text)) {
+        const std::string_view before = std::string_view(read.text).substr(0, *bad);
+        const auto line =
+            static_cast<std::uint32_t>(std::count(before.begin(), before.end(), '\n') + 1);
+        const std::size_t line_start = before.rfind('\n');
+        const auto column = static_cast<std::uint32_t>(
+            *bad - (line_start == std::string_view::npos ? 0 : line_start + 1) + 1);
+        out.problems.push_back({line, column,
+                                fmt::format("the bytes {} are not UTF-8; save the file as UTF-8",
+                                            invalid_bytes_text(read.text, *bad))});
+        return out;
+    }
     toml::table doc;
     try {
-        doc = toml::parse_file(file.string());
+        doc = toml::parse(read.text, file.string());
     } catch (const toml::parse_error& e) {
         out.problems.push_back(
             {e.source().begin.line, e.source().begin.column, std::string(e.description())});

@@ -122,6 +122,7 @@ struct parse_state {
     dimension pending_unit_dim;
     double pending_unit_factor = 0.0;
     double pending_unit_size = 1.0;
+    bool pending_unit_size_written_zero = false;
     std::optional<double> pending_origin; // SI value where a measure's scale reads zero
     dimension pending_origin_dim;
     span pending_origin_span{};
@@ -178,6 +179,7 @@ struct parse_state {
         pending_study_name = pending_scale_text = {};
         pending_dependent_count = 0;
         pending_unit_size = 1.0;
+        pending_unit_size_written_zero = false;
         pending_origin.reset();
         line_first_study_name = static_cast<std::uint32_t>(out.study_names.size());
         pending_repeating_count = 0;
@@ -196,6 +198,8 @@ struct parse_state {
         d.message = std::move(message);
         d.where = {&file, where};
         out.diagnostics.push_back(std::move(d));
+        if (rule == rules::syntax)
+            out.has_syntax_error = true; // exit status 2, as for the grammar's own errors
     }
 };
 
@@ -461,10 +465,24 @@ template <> struct action<nt::base_amount> : base_action<base_dimension::amount>
 template <> struct action<nt::base_current> : base_action<base_dimension::current> {};
 template <> struct action<nt::base_luminous> : base_action<base_dimension::luminous_intensity> {};
 
+// "1/0", "(2/00)": an exponent that is no number because it divides by zero.
+bool divides_by_zero(std::string_view exponent) {
+    const std::size_t slash = exponent.find('/');
+    if (slash == std::string_view::npos)
+        return false;
+    const std::string_view divisor = exponent.substr(slash + 1);
+    const std::size_t digit = divisor.find_first_of("0123456789");
+    return digit != std::string_view::npos &&
+           divisor.find_first_not_of('0', digit) == divisor.find_first_not_of("0123456789", digit);
+}
+
 template <typename In> void read_exponent(const In& in, parse_state& s) {
     s.pending_exponent = exponent_value(in.string_view());
     if (!s.pending_exponent) {
-        s.report(rules::overflow, "this exponent is too large to hold exactly", s.range(in));
+        if (divides_by_zero(in.string_view()))
+            s.report(rules::syntax, "this exponent divides by zero", s.range(in));
+        else
+            s.report(rules::overflow, "this exponent is too large to hold exactly", s.range(in));
         s.pending_exponent = rational(0);
     }
 }
@@ -649,8 +667,20 @@ template <> struct action<nt::unit_percent> {
 template <> struct action<nt::unit_exponent> {
     template <typename In> static void apply(const In& in, parse_state& s) { read_exponent(in, s); }
 };
+// A unit's size that a double cannot hold (0 or infinity) would silently turn off the scale
+// checks for every symbol declared in it: it is an error instead.
+template <typename In> void refuse_unheld_size(const In& in, parse_state& s, unit_value& v) {
+    if (!v.ok || (std::isfinite(v.factor) && v.factor > 0.0))
+        return;
+    s.report(rules::syntax,
+             fmt::format("the size of this unit in SI units is too {} to hold (it comes to {})",
+                         v.factor == 0.0 ? "small" : "large", v.factor == 0.0 ? "0" : "infinity"),
+             s.range(in));
+    v.ok = false;
+}
+
 template <> struct action<nt::unit_power> {
-    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+    template <typename In> static void apply(const In& in, parse_state& s) {
         if (!s.pending_exponent)
             return;
         unit_value& top = s.units.back();
@@ -660,6 +690,7 @@ template <> struct action<nt::unit_power> {
         top.factor = std::pow(top.factor, e.to_double());
         top.exact = exact_power(top.exact, e); // a rational power is left to the double
         top.single = nullptr;
+        refuse_unheld_size(in, s, top);
     }
 };
 template <> struct action<nt::unit_factor> : action<nt::unit_power> {};
@@ -670,7 +701,7 @@ template <> struct action<nt::unit_group> {
     }
 };
 template <bool Divide> struct unit_combine {
-    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+    template <typename In> static void apply(const In& in, parse_state& s) {
         const unit_value rhs = s.units.back();
         s.units.pop_back();
         unit_value& lhs = s.units.back();
@@ -679,6 +710,7 @@ template <bool Divide> struct unit_combine {
         lhs.exact = exact_product(lhs.exact, rhs.exact, Divide);
         lhs.single = nullptr;
         lhs.ok = lhs.ok && rhs.ok;
+        refuse_unheld_size(in, s, lhs);
     }
 };
 template <> struct action<nt::unit_multiply> : unit_combine<false> {};
@@ -759,6 +791,10 @@ template <> struct action<nt::new_unit_size> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const std::string text(in.string_view());
         s.pending_unit_size = std::strtod(text.c_str(), nullptr);
+        // "0" or "0.0e5" is a size of zero; "1e-400" is a size too small to hold.
+        const std::string_view mantissa =
+            std::string_view(text).substr(0, text.find_first_of("eE"));
+        s.pending_unit_size_written_zero = mantissa.find_first_of("123456789") == std::string::npos;
     }
 };
 template <> struct action<nt::origin_value> {
@@ -807,8 +843,16 @@ template <> struct action<nt::measure_statement> {
                      s.pending_unit_name);
             return;
         }
-        if (!(s.pending_unit_factor > 0.0)) {
+        if (s.pending_unit_size == 0.0 && s.pending_unit_size_written_zero) {
             s.report(rules::syntax, "a unit's size must be a positive number", s.pending_unit_name);
+            return;
+        }
+        if (!(s.pending_unit_factor > 0.0) || !std::isfinite(s.pending_unit_factor)) {
+            s.report(rules::syntax,
+                     fmt::format("the size of '{}' in SI units is too {} to hold (it comes to {})",
+                                 name, s.pending_unit_factor == 0.0 ? "small" : "large",
+                                 s.pending_unit_factor == 0.0 ? "0" : "infinity"),
+                     s.pending_unit_name);
             return;
         }
         if (s.pending_origin && s.pending_origin_dim != s.pending_unit_dim) {

@@ -249,13 +249,25 @@ class excerpt {
             first_cell_ = std::min(blank, leftmost);
             last_cell_ = extent;
         }
-        for (auto& m : marks_)
+        for (auto& m : marks_) {
             m.visible = m.on_line && m.first >= first_cell_ && m.last <= last_cell_;
+            // The term the finding is about always keeps its marker: one wider than the window
+            // is drawn to the window's edge rather than dropped.
+            if (m.on_line && !m.visible && is_primary(m) && m.first >= first_cell_ &&
+                m.first < last_cell_) {
+                m.last = last_cell_;
+                m.visible = true;
+            }
+        }
+    }
+
+    [[nodiscard]] bool is_primary(const mark& m) const {
+        return m.t == nullptr || same_place(m.t->where, d_.where);
     }
 
     [[nodiscard]] std::uint32_t first_cell_of_primary() const {
         for (const auto& m : marks_)
-            if (m.on_line && (m.t == nullptr || same_place(m.t->where, d_.where)))
+            if (m.on_line && is_primary(m))
                 return m.first;
         return shown_.cell[to_line(d_.where.range.begin)];
     }

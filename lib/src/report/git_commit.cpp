@@ -2,7 +2,9 @@
 // refs, packed-refs; a worktree's .git file and its commondir), so that no git is needed.
 #include "plumb/provenance.hpp"
 
-#include <fstream>
+#include "model/user_file.hpp"
+
+#include <algorithm>
 #include <sstream>
 
 namespace plumb {
@@ -12,9 +14,9 @@ namespace fs = std::filesystem;
 namespace {
 
 std::string first_line(const fs::path& file) {
-    std::ifstream in(file);
-    std::string line;
-    std::getline(in, line);
+    // HEAD and refs are a line each; anything larger is not git's.
+    std::string line = read_user_file(file, 4096).text;
+    line.erase(std::min(line.find('\n'), line.size()));
     while (!line.empty() && (line.back() == '\r' || line.back() == ' '))
         line.pop_back();
     return line;
@@ -58,7 +60,7 @@ std::string resolve_ref(const fs::path& git_dir, const fs::path& common_dir,
         if (is_object_id(loose))
             return loose;
     }
-    std::ifstream packed(common_dir / "packed-refs");
+    std::istringstream packed(read_user_file(common_dir / "packed-refs").text);
     for (std::string line; std::getline(packed, line);) {
         const std::size_t space = line.find(' ');
         if (space != std::string::npos && line.substr(space + 1) == ref &&

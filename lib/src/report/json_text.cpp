@@ -1,6 +1,8 @@
 // JSON string escaping (RFC 8259, section 7) and UTF-8 repair.
 #include "report/json_text.hpp"
 
+#include "model/utf8.hpp"
+
 #include <fmt/format.h>
 
 namespace plumb {
@@ -37,27 +39,7 @@ void append_json_string(std::string& out, std::string_view s) {
 
 // Invalid UTF-8 in a source line must not make the document invalid JSON.
 std::string valid_utf8(std::string_view s) {
-    std::string out;
-    out.reserve(s.size());
-    for (std::size_t i = 0; i < s.size();) {
-        const auto c = static_cast<unsigned char>(s[i]);
-        std::size_t len = c < 0x80           ? 1
-                          : (c >> 5) == 0x6  ? 2
-                          : (c >> 4) == 0xE  ? 3
-                          : (c >> 3) == 0x1E ? 4
-                                             : 0;
-        bool ok = len > 0 && i + len <= s.size();
-        for (std::size_t k = 1; ok && k < len; ++k)
-            ok = (static_cast<unsigned char>(s[i + k]) & 0xC0) == 0x80;
-        if (ok) {
-            out.append(s.substr(i, len));
-            i += len;
-        } else {
-            out += "\uFFFD";
-            ++i;
-        }
-    }
-    return out;
+    return repaired_utf8(s);
 }
 
 } // namespace plumb

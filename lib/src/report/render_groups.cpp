@@ -1,6 +1,7 @@
 // Studies for people and for programs: matrix, repeating variables, groups, model plan.
 #include "plumb/render.hpp"
 #include "plumb/version.hpp"
+#include "report/json_text.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -214,16 +215,9 @@ std::string render_groups_text(const check_report& report, const text_style& /*s
 
 std::string render_groups_json(const check_report& report) {
     const auto str = [](std::string_view s) {
-        std::string out = "\"";
-        for (const char c : s) {
-            if (c == '"' || c == '\\')
-                out += '\\';
-            if (static_cast<unsigned char>(c) < 0x20)
-                out += fmt::format("\\u{:04x}", static_cast<unsigned>(c));
-            else
-                out += c;
-        }
-        return out + "\"";
+        std::string out;
+        append_json_string(out, valid_utf8(s)); // a file or variable name may not be UTF-8
+        return out;
     };
     const auto num = [](const std::optional<double>& v) {
         // Ten significant figures: far beyond any input, short of float noise.

@@ -1,5 +1,6 @@
 // The sign-off report: one self-contained HTML page (inline style, no scripts, no network
 // resources: its Content-Security-Policy forbids them) that prints cleanly.
+#include "model/user_file.hpp"
 #include "plumb/accepted.hpp"
 #include "plumb/provenance.hpp"
 #include "plumb/render.hpp"
@@ -145,12 +146,10 @@ std::vector<file_entry> file_entries(const check_report& report) {
         const bool checked = std::find(report.checked_files.begin(), report.checked_files.end(),
                                        s.get()) != report.checked_files.end();
         e.role = checked ? "checked" : "read (dictionary or accepted findings)";
-        std::ifstream in(s->path(), std::ios::binary);
-        if (in) {
-            std::ostringstream bytes;
-            bytes << in.rdbuf();
-            e.bytes = bytes.str().size();
-            e.digest = sha256_hex(bytes.str());
+        if (const user_file read = read_user_file(s->path(), max_workbook_file_bytes);
+            read.problem.empty()) {
+            e.bytes = read.text.size();
+            e.digest = sha256_hex(read.text);
         } else {
             e.digest = "(could not be read again to hash)";
         }

@@ -306,12 +306,24 @@ template <> struct action<g::percent_mark> {
 template <expr_kind Kind> struct binary_action {
     template <typename In> static void apply(const In& /*in*/, lowering& s) { s.push_binary(Kind); }
 };
-template <> struct action<g::power_tail> : binary_action<expr_kind::power> {};
+// '^' and comparisons chain to the left without nesting ("=2^2^2"), and the checker follows
+// such a chain by recursion: a chain longer than the nesting limit is refused as deep nesting is.
+template <expr_kind Kind> struct chained_action {
+    template <typename In> static void apply(const In& in, lowering& s) {
+        s.push_binary(Kind);
+        const auto& nodes = s.out().nodes;
+        int length = 0;
+        for (std::uint32_t n = s.stack.operands.back(); nodes[n].kind == Kind; n = nodes[n].lhs)
+            if (++length > max_nesting)
+                throw formula_syntax_error{"this formula nests too deeply to check", in.begin()};
+    }
+};
+template <> struct action<g::power_tail> : chained_action<expr_kind::power> {};
 template <> struct action<g::multiply_tail> : binary_action<expr_kind::multiply> {};
 template <> struct action<g::divide_tail> : binary_action<expr_kind::divide> {};
 template <> struct action<g::add_tail> : binary_action<expr_kind::add> {};
 template <> struct action<g::subtract_tail> : binary_action<expr_kind::subtract> {};
-template <> struct action<g::comparison_tail> : binary_action<expr_kind::compare> {};
+template <> struct action<g::comparison_tail> : chained_action<expr_kind::compare> {};
 // Joined text has no dimension: the result is opaque, its parts are not checked.
 template <> struct action<g::concat_tail> {
     template <typename In> static void apply(const In& /*in*/, lowering& s) {

@@ -2,6 +2,8 @@
 // workbook part, so it is refused outright rather than skipped.
 #include "sheets/safe_xml.hpp"
 
+#include "model/utf8.hpp"
+
 #include <algorithm>
 #include <fmt/format.h>
 
@@ -32,6 +34,10 @@ void parse_xml(pugi::xml_document& doc, std::string& text, std::string_view part
         throw workbook_error(fmt::format("the part '{}' declares a document type (DOCTYPE), "
                                          "which no workbook needs; it is refused for safety",
                                          part));
+    if (const auto bad = first_invalid_utf8(text))
+        throw workbook_error(fmt::format("the part '{}' is not valid UTF-8 ({} at byte {}); the "
+                                         "file is damaged or was not saved by a spreadsheet",
+                                         part, invalid_bytes_text(text, *bad), *bad));
     const pugi::xml_parse_result result = doc.load_buffer_inplace(
         text.data(), text.size(), pugi::parse_default & ~pugi::parse_doctype, pugi::encoding_utf8);
     if (!result)

@@ -2,6 +2,8 @@
 // the workbook's defined names. Both readers (.xlsx, .ods) produce this.
 #pragma once
 
+#include "model/user_file.hpp"
+
 #include <cstdint>
 #include <optional>
 #include <stdexcept>
@@ -88,7 +90,7 @@ struct workbook_error : std::runtime_error {
 
 // Limits that keep a hostile file from exhausting memory or time.
 struct read_limits {
-    std::size_t max_file_bytes = 256U << 20;
+    std::size_t max_file_bytes = max_workbook_file_bytes;
     std::size_t max_entries = 10000;
     std::size_t max_entry_bytes = 256U << 20; // one part, uncompressed
     std::size_t max_total_bytes = 768U << 20; // all parts read, uncompressed

@@ -525,31 +525,39 @@ class workbook_checker {
     // The numbers multiplied into the formula's result, each raised to the power it enters
     // with (a divisor to -1, (B4/1000)^2 to -2): the outermost product only, where a
     // conversion factor written into a formula stands.
-    void top_factors(std::uint32_t node, double exponent, std::vector<double>& out) const {
-        const auto& n = lowered_.tree.nodes[node];
-        switch (n.kind) {
-        case syntax::expr_kind::group:
-            top_factors(n.lhs, exponent, out);
-            return;
-        case syntax::expr_kind::multiply:
-        case syntax::expr_kind::divide:
-            top_factors(n.lhs, exponent, out);
-            top_factors(n.rhs, n.kind == syntax::expr_kind::divide ? -exponent : exponent, out);
-            return;
-        case syntax::expr_kind::power:
-            if (lowered_.tree.nodes[n.rhs].kind == syntax::expr_kind::number)
-                if (const auto e =
-                        rational::parse(listing_->text(lowered_.tree.nodes[n.rhs].range)))
-                    top_factors(n.lhs, exponent * e->to_double(), out);
-            return;
-        case syntax::expr_kind::number: {
-            const auto v = rational::parse(listing_->text(n.range));
-            if (v && !v->is_zero() && out.size() < 32)
-                out.push_back(std::pow(v->to_double(), exponent));
-            return;
-        }
-        default:
-            return;
+    void top_factors(std::uint32_t root, double root_exponent, std::vector<double>& out) const {
+        // Left to right over an explicit stack: a product of 100,000 cells must not recurse
+        // once per factor.
+        std::vector<std::pair<std::uint32_t, double>> pending{{root, root_exponent}};
+        while (!pending.empty()) {
+            const auto [node, exponent] = pending.back();
+            pending.pop_back();
+            const auto& n = lowered_.tree.nodes[node];
+            switch (n.kind) {
+            case syntax::expr_kind::group:
+                pending.emplace_back(n.lhs, exponent);
+                break;
+            case syntax::expr_kind::multiply:
+            case syntax::expr_kind::divide:
+                pending.emplace_back(n.rhs,
+                                     n.kind == syntax::expr_kind::divide ? -exponent : exponent);
+                pending.emplace_back(n.lhs, exponent); // taken first
+                break;
+            case syntax::expr_kind::power:
+                if (lowered_.tree.nodes[n.rhs].kind == syntax::expr_kind::number)
+                    if (const auto e =
+                            rational::parse(listing_->text(lowered_.tree.nodes[n.rhs].range)))
+                        pending.emplace_back(n.lhs, exponent * e->to_double());
+                break;
+            case syntax::expr_kind::number: {
+                const auto v = rational::parse(listing_->text(n.range));
+                if (v && !v->is_zero() && out.size() < 32)
+                    out.push_back(std::pow(v->to_double(), exponent));
+                break;
+            }
+            default:
+                break;
+            }
         }
     }
 

@@ -2,6 +2,8 @@
 // hands them to the workbook checker. A bad file is one finding; the caller goes on.
 #include "sheets/workbook_file.hpp"
 
+#include "model/user_file.hpp"
+#include "model/utf8.hpp"
 #include "notation/parser.hpp"
 #include "plumb/rules.hpp"
 #include "sheets/workbook_checker.hpp"
@@ -9,7 +11,6 @@
 #include <algorithm>
 #include <fmt/format.h>
 #include <fmt/ranges.h>
-#include <fstream>
 
 namespace plumb::sheets {
 
@@ -30,30 +31,12 @@ void fail(check_report& report, std::string message) {
     report.input_failed = true;
 }
 
-bool read_bytes(const fs::path& path, std::string& out, std::string& why) {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) {
-        why = "it cannot be opened";
-        return false;
-    }
-    in.seekg(0, std::ios::end);
-    const std::streamoff size = in.tellg();
-    if (size < 0) {
-        why = "its size cannot be read";
-        return false;
-    }
-    if (static_cast<std::uint64_t>(size) > read_limits{}.max_file_bytes) {
-        why = fmt::format("it is larger than {} MiB", read_limits{}.max_file_bytes >> 20);
-        return false;
-    }
-    in.seekg(0);
-    out.resize(static_cast<std::size_t>(size));
-    in.read(out.data(), size);
-    if (!in) {
-        why = "a read error occurred";
-        return false;
-    }
-    return true;
+bool read_bytes(const fs::path& path, std::string& out, std::string& why,
+                std::uint64_t limit = max_text_file_bytes) {
+    user_file read = read_user_file(path, limit);
+    why = std::move(read.problem);
+    out = std::move(read.text);
+    return why.empty();
 }
 
 // "D" to its 0-based column; empty when the text is not a column's letters.
@@ -173,6 +156,16 @@ void take_declarations(const fs::path& path, const std::string& origin, const wo
     }
     report.sources.push_back(std::make_unique<source_file>(path.string(), std::move(text)));
     const source_file& src = *report.sources.back();
+    if (const auto bad = first_invalid_utf8(src.text())) {
+        diagnostic d;
+        d.rule = std::string(rules::syntax);
+        d.message = fmt::format("this file is not valid UTF-8: the bytes {} here are not a "
+                                "character; save the file as UTF-8",
+                                invalid_bytes_text(src.text(), *bad));
+        d.where = {&src, {static_cast<std::uint32_t>(*bad), static_cast<std::uint32_t>(*bad + 1)}};
+        report.diagnostics.push_back(std::move(d));
+        report.input_failed = true;
+    }
     const syntax::parsed_file tree = parse_file(src);
     for (const auto& d : tree.diagnostics)
         report.diagnostics.push_back(d);
@@ -228,7 +221,7 @@ void report_cells_outside_sidecar(const syntax::parsed_file& tree, std::vector<d
 
 void check_workbook_file(const fs::path& path, const check_options& options, check_report& report) {
     std::string bytes, why;
-    if (!read_bytes(path, bytes, why)) {
+    if (!read_bytes(path, bytes, why, read_limits{}.max_file_bytes)) {
         fail(report, fmt::format("cannot read '{}': {}", path.string(), why));
         return;
     }
