@@ -87,11 +87,16 @@ struct group_analysis {
     // spanning, the dependent variable among them, too few variables...), the reasons in
     // plain words; groups is then empty.
     std::vector<std::string> problems;
+    // Remarks on an answer that is right but less complete than usual: naming cut short in a
+    // study too large to search in full.
+    std::vector<std::string> notes;
 };
 
 // Forms a complete set of independent groups. Each group has one non-repeating variable to
 // the first power times powers of the repeating ones, scaled to the smallest whole exponents,
 // except the group of the dependent variable, which keeps it to the first power.
+// A study of more variables is answered with a problem rather than worked out.
+constexpr std::size_t max_study_variables = 1000;
 group_analysis analyse_groups(const group_request& request);
 
 // The formula text of a group over `variables` (used by analyse_groups and by recombination).
@@ -112,7 +117,12 @@ std::vector<named_group_match> recognise_group(std::span<const group_variable> v
 
 // Names every group, recombining unnamed basis groups (products and powers of two of them)
 // into named numbers where that keeps the set independent, and says which.
-void name_groups(group_analysis& analysis, std::span<const group_variable> variables);
+// Each group is tried with every other, so the work grows with the square of the number of
+// groups: past `max_pairs` pairs (every pair of a study of up to 50 groups) the remaining groups
+// keep the form elimination gave them, and a note in `analysis.notes` says so.
+constexpr std::size_t default_max_group_pairs = 2500;
+void name_groups(group_analysis& analysis, std::span<const group_variable> variables,
+                 std::size_t max_pairs = default_max_group_pairs);
 
 // ---- Similitude --------------------------------------------------------------------------
 

@@ -30,6 +30,9 @@ class source_file {
     source_file(std::string path, std::string text);
 
     [[nodiscard]] const std::string& path() const { return path_; }
+    // Distinct for every source_file made in this process: a key for caches that must not
+    // mistake a new file at a freed one's address for it.
+    [[nodiscard]] std::uint64_t serial() const { return serial_; }
     [[nodiscard]] std::string_view text() const { return text_; }
     [[nodiscard]] std::string_view text(span s) const {
         return std::string_view(text_).substr(s.begin, s.end - s.begin);
@@ -53,9 +56,17 @@ class source_file {
     [[nodiscard]] const cell_place* cell_at(std::uint32_t byte_offset) const;
 
   private:
+    struct column_mark {
+        std::uint32_t offset; // a byte offset within a long line
+        std::uint32_t column; // its column
+    };
+    static constexpr std::uint32_t column_mark_stride = 4096;
+
     std::string path_;
     std::string text_;
+    std::uint64_t serial_ = 0;
     std::vector<std::uint32_t> line_starts_;
+    std::vector<column_mark> column_marks_; // ascending by offset, for lines longer than the stride
     std::vector<cell_place> cell_places_;
 };
 

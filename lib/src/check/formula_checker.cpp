@@ -15,6 +15,7 @@
 #include <limits>
 #include <numbers>
 #include <span>
+#include <unordered_map>
 
 namespace plumb {
 namespace {
@@ -113,6 +114,16 @@ struct operand {
     bool subtracted = false; // a term after '-'
 };
 
+struct dimension_hash {
+    std::size_t operator()(const dimension& d) const noexcept {
+        std::size_t h = 0;
+        for (const rational& e : d.exponents())
+            h = h * 1'000'003 + std::hash<std::int64_t>{}(e.num()) * 31 +
+                std::hash<std::int64_t>{}(e.den());
+        return h;
+    }
+};
+
 struct agreement {
     std::optional<dimension> reference; // the dimension most operands share
     std::vector<std::size_t> odd;       // operands that differ from it
@@ -155,16 +166,18 @@ agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless
             result.reference = first_known->type.dim;
         return result;
     }
+    // Counted in a hash map, since a sum may have thousands of terms of as many dimensions;
+    // `counts` keeps the order of first appearance, which breaks ties.
     std::vector<std::pair<dimension, std::size_t>> counts;
+    std::unordered_map<dimension, std::size_t, dimension_hash> index;
     for (const auto& op : ops) {
         if (!op.type.known || op.type.zero)
             continue;
-        auto it = std::find_if(counts.begin(), counts.end(),
-                               [&](const auto& c) { return c.first == op.type.dim; });
-        if (it == counts.end())
+        const auto [it, added] = index.try_emplace(op.type.dim, counts.size());
+        if (added)
             counts.emplace_back(op.type.dim, 1);
         else
-            ++it->second;
+            ++counts[it->second].second;
     }
     if (counts.empty())
         return result;
@@ -224,6 +237,16 @@ class checker {
         literals_.clear();
         scaled_.clear();
         scaled_index_.clear();
+        // One generated formula of millions of terms must not keep its stacks' memory for the
+        // rest of the run; ordinary formulas never come near this.
+        constexpr std::size_t kept_capacity = 1U << 16;
+        if (operands_.capacity() > kept_capacity) {
+            operands_.shrink_to_fit();
+            spine_.shrink_to_fit();
+            literals_.shrink_to_fit();
+            scaled_.shrink_to_fit();
+            scaled_index_.shrink_to_fit();
+        }
     }
 
     // A node's type, with the numbers along its multiplicative path left on the literal stack
@@ -318,10 +341,20 @@ class checker {
                               : fmt::format("the sides of this {} differ in dimension", what);
         diagnostic& d = report(rules::side_mismatch, std::move(message),
                                file_.nodes[sides[a.odd.front()].node].range);
+        // A generated chain of thousands of relations is explained as a long sum is: the odd
+        // sides up to a limit, a few of the others, and counts.
+        constexpr std::size_t max_sides_listed = 16;
+        if (sides.size() > max_sides_listed) {
+            explain(d, sides, a, "sides");
+            return;
+        }
+        std::vector<bool> is_odd(sides.size(), false);
+        for (const std::size_t k : a.odd)
+            is_odd[k] = true;
         for (std::size_t i = 0; i < sides.size(); ++i) {
             if (!sides[i].type.known)
                 continue;
-            add_term(d, sides[i], std::find(a.odd.begin(), a.odd.end(), i) != a.odd.end());
+            add_term(d, sides[i], is_odd[i]);
             const char* position = sides.size() == 2 ? (i == 0 ? "left side " : "right side ") : "";
             d.notes.push_back({fmt::format("{}{} is {}", position, quote(sides[i].node),
                                            describe(sides[i].type.dim)),
@@ -436,10 +469,12 @@ class checker {
         }
         if (a.odd.size() > max_odd)
             d.notes.push_back({fmt::format("and {} more that differ", a.odd.size() - max_odd), {}});
+        std::vector<bool> is_odd(ops.size(), false);
+        for (const std::size_t k : a.odd)
+            is_odd[k] = true;
         std::vector<std::size_t> agreeing_index;
         for (std::size_t i = 0; i < ops.size(); ++i)
-            if (ops[i].type.known && !ops[i].type.zero &&
-                std::find(a.odd.begin(), a.odd.end(), i) == a.odd.end())
+            if (ops[i].type.known && !ops[i].type.zero && !is_odd[i])
                 agreeing_index.push_back(i);
         const std::size_t agreeing_count = agreeing_index.size();
         if (agreeing_count > max_listed) {
@@ -519,6 +554,14 @@ class checker {
                         "{}'{}'", i == 0 ? "" : (i + 1 == near.size() ? " or " : ", "), near[i]);
                 d.notes.push_back({fmt::format("did you mean {}?", list), {}});
             }
+            if (symbols_.suggestions_cut_short())
+                d.notes.push_back(
+                    {fmt::format("similar names are no longer looked for in this file: the "
+                                 "search for them stops after {} name comparisons, so that a "
+                                 "file with thousands of undeclared names is still checked "
+                                 "quickly",
+                                 symbol_table::max_suggestion_comparisons),
+                     {}});
             if (find_function(name) != nullptr)
                 d.notes.push_back(
                     {fmt::format("'{}' is a function; call it as {}(x)", name, name), {}});
@@ -567,6 +610,9 @@ class checker {
         const std::size_t term_count = spine_.size() - spine_base + 1;
 
         const std::size_t base = operands_.size();
+        // Reserved once: growing by doubling would leave the stack up to twice the size a long
+        // sum needs, and briefly three times while it moves.
+        operands_.reserve(base + term_count);
         const std::size_t literal_base = literals_.size();
         typed result;
         result.numeric = true;

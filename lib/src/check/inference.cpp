@@ -487,6 +487,11 @@ class equation_builder {
 
 // ---- Solving --------------------------------------------------------------------------------
 
+// Exact elimination over a dense matrix costs about unknowns³ rational operations: a few
+// hundred unknowns tied together solve in well under a second, thousands would take minutes.
+// A larger tangle is reported as too large rather than solved.
+constexpr std::size_t max_unknowns_solved_together = 500;
+
 struct solution {
     bool consistent = true;
     std::size_t rank = 0;
@@ -1047,6 +1052,22 @@ class reporter {
         out_.push_back(std::move(d));
     }
 
+    void too_many(std::uint32_t u, std::size_t tied) {
+        const unknown& x = unknowns_[u];
+        diagnostic d =
+            make(severity::warning, rules::inferred_dimension,
+                 fmt::format("the dimension of {} is not inferred: the formulas tie it to {} other "
+                             "unknowns, more than the {} that plumb solves together",
+                             who(x), tied - 1, max_unknowns_solved_together),
+                 x.where);
+        d.notes.push_back({"the formulas that use it are not checked either; declare the "
+                           "dimensions of some of these symbols, so that fewer are left to infer "
+                           "together",
+                           {}});
+        unchecked_statement(x, d);
+        out_.push_back(std::move(d));
+    }
+
     void overflow(std::uint32_t u) {
         out_.push_back(make(severity::error, rules::overflow,
                             fmt::format("inferring the dimension of {} needs exponents beyond the "
@@ -1150,6 +1171,11 @@ conflict_set find_conflict(const component& c, const std::vector<std::uint32_t>&
 void settle(const component& c, const std::vector<unknown>& unknowns,
             std::vector<std::uint32_t>& column, reporter& report) {
     const std::size_t n = c.members.size();
+    if (n > max_unknowns_solved_together) {
+        for (const std::uint32_t u : c.members)
+            report.too_many(u, n);
+        return;
+    }
     for (std::size_t i = 0; i < n; ++i)
         column[c.members[i]] = static_cast<std::uint32_t>(i);
     try {

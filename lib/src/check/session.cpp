@@ -23,7 +23,9 @@
 #include <fstream>
 #include <limits>
 #include <map>
+#include <span>
 #include <system_error>
+#include <unordered_map>
 #include <unordered_set>
 
 namespace plumb {
@@ -50,7 +52,14 @@ std::vector<std::string_view> symbol_table::nearest(std::string_view name,
     // "h_f").
     const std::size_t max_distance = std::min<std::size_t>(3, name.size() / 3);
     std::vector<std::pair<std::size_t, std::string_view>> scored;
-    for (const std::string_view candidate : names_) {
+    const bool within_budget =
+        suggestion_comparisons_ + names_.size() <= max_suggestion_comparisons;
+    if (within_budget)
+        suggestion_comparisons_ += names_.size();
+    else
+        suggestions_cut_short_ = true;
+    for (const std::string_view candidate :
+         within_budget ? std::span(names_) : std::span<const std::string_view>()) {
         if (candidate.size() > name.size() && candidate.substr(0, name.size()) == name &&
             candidate[name.size()] == '_') {
             scored.emplace_back(candidate.size() - name.size(), candidate);
@@ -97,10 +106,10 @@ std::vector<std::string_view> symbol_table::nearest(std::string_view name,
             other = std::string(ascii) + std::string(rest);
         else
             continue;
-        const auto it = std::find(names_.begin(), names_.end(), other);
-        if (it != names_.end()) {
-            std::erase_if(scored, [&](const auto& p) { return p.second == *it; });
-            scored.insert(scored.begin(), {0, *it});
+        if (const std::string_view* declared = declared_name(other)) {
+            const std::string_view found = *declared;
+            std::erase_if(scored, [&](const auto& p) { return p.second == found; });
+            scored.insert(scored.begin(), {0, found});
         }
     }
     std::vector<std::string_view> out;
@@ -160,16 +169,15 @@ class dictionary_reader : public statement_sink {
     // Units that a --dict dictionary (or the files it uses) defines, as a `use` line would.
     void import_dictionary_units(const loaded_file* dictionary) { import_units(dictionary); }
     [[nodiscard]] const syntax::defined_unit* imported_unit(std::string_view name) const override {
-        for (const auto* u : imported_)
-            if (u->name == name)
-                return u;
-        return nullptr;
+        const auto it = imported_.find(name);
+        return it != imported_.end() ? it->second : nullptr;
     }
 
   protected:
     session& session_;
     loaded_file* file_;
-    std::vector<const syntax::defined_unit*> imported_;
+    // By name; the first file to define a name keeps it.
+    std::unordered_map<std::string_view, const syntax::defined_unit*> imported_;
 
     // The units a used file defines, and those of the files it uses in turn.
     void import_units(const loaded_file* used) {
@@ -182,7 +190,7 @@ class dictionary_reader : public statement_sink {
                 continue;
             seen.push_back(f);
             for (const auto& u : f->tree.units)
-                imported_.push_back(&u);
+                imported_.emplace(u.name, &u);
             pending.insert(pending.end(), f->uses.begin(), f->uses.end());
         }
     }

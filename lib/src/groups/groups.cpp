@@ -2,6 +2,8 @@
 // variables (given or chosen by a fixed rule) and one dimensionless group per other variable.
 #include "plumb/groups.hpp"
 
+#include <fmt/format.h>
+
 #include <algorithm>
 #include <cstdint>
 #include <numeric>
@@ -296,6 +298,15 @@ void analyse(const group_request& request, group_analysis& result) {
     const auto& variables = request.variables;
     if (variables.empty()) {
         result.problems.emplace_back("no variables were given");
+        return;
+    }
+    // Each group holds an exponent for every variable, so the answer grows with the square of
+    // the study; past this size it would take memory and time out of all proportion.
+    if (variables.size() > max_study_variables) {
+        result.problems.push_back(fmt::format(
+            "the study has {} variables, more than the {} whose groups plumb works out; split "
+            "it into studies of the variables that act together",
+            variables.size(), max_study_variables));
         return;
     }
     for (const std::size_t d : request.dependents) {

@@ -7,6 +7,8 @@
 // coefficient and the group without its ½ are the same group.
 #include "plumb/groups.hpp"
 
+#include <fmt/format.h>
+
 #include <algorithm>
 #include <array>
 #include <cstddef>
@@ -416,6 +418,35 @@ bool same_dimension(const dimension& d, const exponents& e) {
     return true;
 }
 
+// A dimension's exponents when they are whole and small enough for a form's slot; empty when
+// not, since no form then fits.
+std::optional<exponents> small_exponents(const dimension& d) {
+    exponents e{};
+    for (std::size_t b = 0; b < base_dimension_count; ++b) {
+        const rational x = d.exponent(static_cast<base_dimension>(b));
+        if (!x.is_integer() || x.num() < -127 || x.num() > 127)
+            return std::nullopt;
+        e[b] = static_cast<std::int8_t>(x.num());
+    }
+    return e;
+}
+
+// Per form of the table, its slots' dimensions in sorted order.
+const std::vector<std::array<exponents, max_slots>>& sorted_slot_dimensions() {
+    static const std::vector<std::array<exponents, max_slots>> sorted = [] {
+        std::vector<std::array<exponents, max_slots>> out;
+        for (const definition& d : table) {
+            std::array<exponents, max_slots> dims{};
+            for (std::size_t s = 0; s < d.count; ++s)
+                dims[s] = d.slots[s].dim;
+            std::sort(dims.begin(), dims.begin() + static_cast<std::ptrdiff_t>(d.count));
+            out.push_back(dims);
+        }
+        return out;
+    }();
+    return sorted;
+}
+
 // The best-scoring one-to-one assignment of the group's variables to a form's slots.
 class assignment_search {
   public:
@@ -466,21 +497,30 @@ class assignment_search {
 
 // Every named number the group may be, best first: names that suggest the quantities first,
 // then plain numbers before inverses and powers, then table order.
-std::vector<candidate> candidates_for(std::span<const group_variable> variables,
-                                      std::span<const rational> exponents) {
+// `items` are the group's nonzero exponents in variable order.
+std::vector<candidate> candidates_for_items(std::span<const group_variable> variables,
+                                            std::span<const item> items) {
     std::vector<candidate> found;
-    if (variables.size() != exponents.size())
-        return found;
-    std::vector<item> items;
-    for (std::size_t v = 0; v < variables.size(); ++v)
-        if (!exponents[v].is_zero())
-            items.push_back({v, exponents[v]});
     if (items.empty() || items.size() > max_slots)
         return found;
+    // A form fits only if its slots' dimensions are the items' dimensions, one for one,
+    // whatever the power: comparing the two sorted lists first spares the assignment search
+    // for nearly every form, which matters when a large study tries thousands of combinations.
+    std::array<exponents, max_slots> have{};
+    for (std::size_t k = 0; k < items.size(); ++k) {
+        const std::optional<exponents> e = small_exponents(variables[items[k].variable].dim);
+        if (!e)
+            return found; // a fractional or large exponent: no form has it
+        have[k] = *e;
+    }
+    std::sort(have.begin(), have.begin() + static_cast<std::ptrdiff_t>(items.size()));
+    const auto& slot_dimensions = sorted_slot_dimensions();
 
     for (std::size_t d = 0; d < std::size(table); ++d) {
         const definition& form = table[d];
-        if (form.count != items.size())
+        if (form.count != items.size() ||
+            !std::equal(have.begin(), have.begin() + static_cast<std::ptrdiff_t>(form.count),
+                        slot_dimensions[d].begin()))
             continue;
         std::optional<candidate> best;
         for (std::size_t r = 0; r < powers.size(); ++r) {
@@ -511,6 +551,17 @@ std::vector<candidate> candidates_for(std::span<const group_variable> variables,
         return a.power_rank < b.power_rank;
     });
     return found;
+}
+
+std::vector<candidate> candidates_for(std::span<const group_variable> variables,
+                                      std::span<const rational> exponents) {
+    if (variables.size() != exponents.size())
+        return {};
+    std::vector<item> items;
+    for (std::size_t v = 0; v < variables.size(); ++v)
+        if (!exponents[v].is_zero())
+            items.push_back({v, exponents[v]});
+    return candidates_for_items(variables, items);
 }
 
 // ---- Wording -----------------------------------------------------------------------------
@@ -640,11 +691,6 @@ struct quality {
     }
 };
 
-bool all_whole(std::span<const rational> exponents) {
-    return std::all_of(exponents.begin(), exponents.end(),
-                       [](rational e) { return e.is_integer(); });
-}
-
 quality quality_of(const std::vector<candidate>& cs, bool fractional) {
     quality q;
     if (cs.empty())
@@ -696,6 +742,15 @@ struct recombination {
     quality q;
 };
 
+// The largest number of groups whose every pair fits within `max_pairs` (each group is tried
+// with each of the others).
+std::size_t named_in_full(std::size_t max_pairs) {
+    std::size_t n = 1;
+    while ((n + 1) * (n + 1) <= max_pairs)
+        ++n;
+    return n;
+}
+
 } // namespace
 
 std::vector<named_group_match> recognise_group(std::span<const group_variable> variables,
@@ -706,7 +761,8 @@ std::vector<named_group_match> recognise_group(std::span<const group_variable> v
     return out;
 }
 
-void name_groups(group_analysis& analysis, std::span<const group_variable> variables) {
+void name_groups(group_analysis& analysis, std::span<const group_variable> variables,
+                 std::size_t max_pairs) {
     std::vector<pi_group>& groups = analysis.groups;
     const std::size_t n = groups.size();
     for (const pi_group& g : groups)
@@ -730,32 +786,69 @@ void name_groups(group_analysis& analysis, std::span<const group_variable> varia
                 dependents.push_back(v);
         }
     }
-    const auto keeps_dependent = [&](const std::vector<rational>& e, bool dependent_group) {
+    // Combinations are worked on their nonzero exponents only: a group has one variable of its
+    // own and the repeating ones, so a pair of groups touches a handful of variables however
+    // many the study has.
+    const auto exponent_in = [](const std::vector<item>& e, std::size_t v) {
+        const auto it = std::lower_bound(
+            e.begin(), e.end(), v, [](const item& x, std::size_t w) { return x.variable < w; });
+        return it != e.end() && it->variable == v ? it->exponent : rational(0);
+    };
+    const auto keeps_dependent = [&](const std::vector<item>& e, bool dependent_group) {
         return std::all_of(dependents.begin(), dependents.end(), [&](std::size_t v) {
-            return dependent_group ? e[v] == rational(1) : e[v].is_zero();
+            return dependent_group ? exponent_in(e, v) == rational(1) : exponent_in(e, v).is_zero();
         });
     };
+    std::vector<std::vector<item>> sparse(n);
+    for (std::size_t g = 0; g < n; ++g)
+        for (std::size_t v = 0; v < variables.size(); ++v)
+            if (!groups[g].exponents[v].is_zero())
+                sparse[g].push_back({v, groups[g].exponents[v]});
 
     std::vector<bool> replaced(n, false);
     std::vector<std::string> basis;
     for (const pi_group& g : groups)
         basis.push_back(g.formula);
+    std::size_t pairs_tried = 0;
     for (std::size_t i = 0; i < n; ++i) {
-        const std::vector<rational> own = groups[i].exponents;
-        const bool whole = all_whole(own);
-        const quality now = quality_of(candidates_for(variables, own), false);
+        const std::vector<item>& own = sparse[i];
+        const bool whole = std::all_of(own.begin(), own.end(),
+                                       [](const item& x) { return x.exponent.is_integer(); });
+        const quality now = quality_of(candidates_for_items(variables, own), false);
         if (now.tier == 0)
             continue; // already a named number, or a power of one: the basis stands
+        // Every pair of groups is a search of its own, so a study of hundreds of groups would
+        // take minutes; past the budget the rest keep the form elimination gave them, and the
+        // output says so.
+        if (pairs_tried + n > max_pairs) {
+            const std::string searched =
+                i == 0 ? std::string("for none of them") : fmt::format("for π1 to π{} only", i);
+            analysis.notes.push_back(fmt::format(
+                "named numbers were sought among combinations of two groups {}: with {} groups, "
+                "trying every pair would take too long (the search stops after {} pairs, which "
+                "covers every pair of a study of up to {} groups); π{} to π{} are named only "
+                "as elimination gave them, so a named number that a combination of them would "
+                "make may be missing",
+                searched, n, max_pairs, named_in_full(max_pairs), i + 1, n));
+            break;
+        }
+        pairs_tried += n;
 
         std::optional<recombination> best;
-        const auto consider = [&](std::vector<rational> e,
-                                  std::vector<std::pair<std::size_t, rational>> terms) {
+        std::vector<item> e;
+        const auto consider = [&](std::vector<std::pair<std::size_t, rational>> terms) {
             if (!keeps_dependent(e, groups[i].has_dependent))
                 return;
-            const quality q = quality_of(candidates_for(variables, e), whole && !all_whole(e));
+            const bool fractional = whole && !std::all_of(e.begin(), e.end(), [](const item& x) {
+                                        return x.exponent.is_integer();
+                                    });
+            const quality q = quality_of(candidates_for_items(variables, e), fractional);
             if (q.tier == 2 || !(q < (best ? best->q : now)))
                 return;
-            best = recombination{std::move(e), std::move(terms), q};
+            std::vector<rational> dense(variables.size());
+            for (const item& x : e)
+                dense[x.variable] = x.exponent;
+            best = recombination{std::move(dense), std::move(terms), q};
         };
         try {
             // A new group involving group i keeps the set independent; a partner that was
@@ -766,20 +859,37 @@ void name_groups(group_analysis& analysis, std::span<const group_variable> varia
                 if (groups[i].has_dependent && a != rational(1))
                     continue;
                 if (a != rational(1)) {
-                    std::vector<rational> e(own.size());
-                    for (std::size_t v = 0; v < own.size(); ++v)
-                        e[v] = own[v] * a;
-                    consider(std::move(e), {{i, a}});
+                    e.clear();
+                    for (const item& x : own)
+                        e.push_back({x.variable, x.exponent * a});
+                    consider({{i, a}});
                 }
                 for (std::size_t j = 0; j < n; ++j) {
                     if (j == i || replaced[j] || groups[j].has_dependent)
                         continue;
+                    const std::vector<item>& other = sparse[j];
                     for (const auto& [bn, bd] : powers) {
                         const rational b(bn, bd);
-                        std::vector<rational> e(own.size());
-                        for (std::size_t v = 0; v < own.size(); ++v)
-                            e[v] = own[v] * a + groups[j].exponents[v] * b;
-                        consider(std::move(e), {{i, a}, {j, b}});
+                        // own·a + other·b over the union of their variables, in order.
+                        e.clear();
+                        std::size_t x = 0;
+                        std::size_t y = 0;
+                        while (x < own.size() || y < other.size()) {
+                            const std::size_t v =
+                                y == other.size() ||
+                                        (x < own.size() && own[x].variable < other[y].variable)
+                                    ? own[x].variable
+                                    : other[y].variable;
+                            rational sum = 0;
+                            if (x < own.size() && own[x].variable == v)
+                                sum += own[x++].exponent * a;
+                            if (y < other.size() && other[y].variable == v)
+                                sum += other[y++].exponent * b;
+                            if (!sum.is_zero())
+                                e.push_back({v, sum});
+                        }
+                        if (e.size() <= max_slots)
+                            consider({{i, a}, {j, b}});
                     }
                 }
             }

@@ -6,6 +6,7 @@
 #include <algorithm>
 #include <cmath>
 #include <fmt/format.h>
+#include <unordered_set>
 
 namespace plumb {
 namespace {
@@ -102,11 +103,10 @@ class study_worker {
             variable_spans.push_back(file_.study_names[s.first_variable + i]);
 
         bool ok = true;
+        std::unordered_set<std::string_view> listed;
         for (const span v : variable_spans) {
             const std::string_view name = text(v);
-            const auto same = std::find_if(r.variables.begin(), r.variables.end(),
-                                           [&](const group_variable& g) { return g.name == name; });
-            if (same != r.variables.end()) {
+            if (listed.contains(name)) {
                 report(out_, rules::study_problem,
                        fmt::format("'{}' is listed twice in study '{}'", name, r.name), at(v));
                 ok = false;
@@ -135,6 +135,7 @@ class study_worker {
                 ok = false;
                 continue;
             }
+            listed.insert(name);
             r.variables.push_back({std::string(name), *entry->dim, entry->offset_unit != nullptr});
             shown_unit unit;
             if (!entry->unit_text.empty()) {

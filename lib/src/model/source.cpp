@@ -2,12 +2,18 @@
 #include "plumb/source.hpp"
 
 #include <algorithm>
+#include <atomic>
 #include <cstring>
+#include <iterator>
 
 namespace plumb {
 
+namespace {
+std::atomic<std::uint64_t> next_serial{1};
+} // namespace
+
 source_file::source_file(std::string path, std::string text)
-    : path_(std::move(path)), text_(std::move(text)) {
+    : path_(std::move(path)), text_(std::move(text)), serial_(next_serial++) {
     // A byte-order mark is an editor's artefact: dropping it keeps columns and the shown line
     // as the engineer sees them.
     if (text_.compare(0, 3, "\xEF\xBB\xBF") == 0)
@@ -22,6 +28,23 @@ source_file::source_file(std::string path, std::string text)
         p = static_cast<const char*>(nl) + 1;
         line_starts_.push_back(static_cast<std::uint32_t>(p - data));
     }
+    // Columns count code points from the line's start, so a place far along a long line would
+    // cost a walk along it for every finding, term and side placed there. Marks every
+    // `column_mark_stride` bytes of such a line let the walk start nearby.
+    const auto size = static_cast<std::uint32_t>(text_.size());
+    for (std::size_t line = 0; line < line_starts_.size(); ++line) {
+        const std::uint32_t begin = line_starts_[line];
+        const std::uint32_t end = line + 1 < line_starts_.size() ? line_starts_[line + 1] : size;
+        if (end - begin <= column_mark_stride)
+            continue;
+        std::uint32_t column = 1;
+        for (std::uint32_t i = begin; i < end; ++i) {
+            if ((i - begin) % column_mark_stride == 0 && i != begin)
+                column_marks_.push_back({i, column});
+            if ((static_cast<unsigned char>(text_[i]) & 0xC0) != 0x80)
+                ++column;
+        }
+    }
 }
 
 line_column source_file::position(std::uint32_t byte_offset) const {
@@ -30,7 +53,17 @@ line_column source_file::position(std::uint32_t byte_offset) const {
     std::uint32_t column = 1;
     const std::uint32_t stop =
         std::min<std::uint32_t>(byte_offset, static_cast<std::uint32_t>(text_.size()));
-    for (std::uint32_t i = line_starts_[line - 1]; i < stop; ++i)
+    std::uint32_t from = line_starts_[line - 1];
+    if (stop - from > column_mark_stride) {
+        const auto mark = std::upper_bound(
+            column_marks_.begin(), column_marks_.end(), stop,
+            [](std::uint32_t offset, const column_mark& m) { return offset < m.offset; });
+        if (mark != column_marks_.begin() && std::prev(mark)->offset >= from) {
+            from = std::prev(mark)->offset;
+            column = std::prev(mark)->column;
+        }
+    }
+    for (std::uint32_t i = from; i < stop; ++i)
         if ((static_cast<unsigned char>(text_[i]) & 0xC0) != 0x80)
             ++column;
     return {line, column};

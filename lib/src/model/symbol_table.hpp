@@ -58,9 +58,14 @@ class symbol_table {
         place(static_cast<std::uint32_t>(names_.size() - 1));
         return {&entries_.back(), true};
     }
-    // Declared names closest to `name`, for "did you mean".
+    // Declared names closest to `name`, for "did you mean". Each call compares `name` with
+    // every declared name, so a file with thousands of undeclared names among thousands of
+    // declared ones would take minutes: past `max_suggestion_comparisons` in all, only the
+    // cheap spellings (ASCII for Greek) are still offered, and suggestions_cut_short() says so.
     [[nodiscard]] std::vector<std::string_view> nearest(std::string_view name,
                                                         std::size_t limit = 3) const;
+    [[nodiscard]] bool suggestions_cut_short() const { return suggestions_cut_short_; }
+    static constexpr std::size_t max_suggestion_comparisons = 5'000'000;
 
   private:
     static constexpr std::uint32_t empty_slot = 0xFFFFFFFFU;
@@ -68,6 +73,20 @@ class symbol_table {
     std::vector<symbol_entry> entries_; // parallel to names_; never shrinks, so pointers into
                                         // it stay valid only until the next insert
     std::vector<std::uint32_t> slots_;
+    mutable std::size_t suggestion_comparisons_ = 0;
+    mutable bool suggestions_cut_short_ = false;
+
+    // The declared name equal to `name` (a view into its file), or null.
+    [[nodiscard]] const std::string_view* declared_name(std::string_view name) const {
+        if (slots_.empty())
+            return nullptr;
+        for (std::size_t i = hash(name) & mask();; i = (i + 1) & mask()) {
+            if (slots_[i] == empty_slot)
+                return nullptr;
+            if (names_[slots_[i]] == name)
+                return &names_[slots_[i]];
+        }
+    }
 
     [[nodiscard]] std::size_t mask() const { return slots_.size() - 1; }
 

@@ -19,6 +19,7 @@
 #include <fmt/core.h>
 #include <numbers>
 #include <optional>
+#include <unordered_map>
 
 namespace plumb {
 namespace {
@@ -150,10 +151,16 @@ struct parse_state {
         return range(in.begin(), in.end());
     }
 
+    // The file's own units by name (views into the source), so each unit written is found in
+    // constant time however many `measure` lines there are. An index may be stale after a
+    // failed line was rolled back, hence the check of the name.
+    std::unordered_map<std::string_view, std::size_t> unit_index;
+
     [[nodiscard]] const syntax::defined_unit* find_defined_unit(std::string_view name) const {
-        for (const auto& u : out.units)
-            if (u.name == name)
-                return &u;
+        if (const auto it = unit_index.find(name); it != unit_index.end() &&
+                                                   it->second < out.units.size() &&
+                                                   out.units[it->second].name == name)
+            return &out.units[it->second];
         return sink != nullptr ? sink->imported_unit(name) : nullptr;
     }
 
@@ -895,6 +902,7 @@ template <> struct action<nt::measure_statement> {
             unit.origin = std::move(origin);
         }
         s.out.units.push_back(std::move(unit));
+        s.unit_index[name] = s.out.units.size() - 1;
     }
 };
 

@@ -71,6 +71,42 @@ std::size_t comment_start(std::string_view line) {
     return std::string_view::npos;
 }
 
+// A line laid out once for all the findings on it: a generated line may carry thousands,
+// and laying it out (or scanning it for its comment or a cell) for each would make the
+// report quadratic in the line's length.
+struct laid_out_line {
+    std::uint64_t file_serial = 0;
+    std::uint32_t line = 0;
+    display_line shown;
+    std::vector<std::uint32_t> byte_of_cell; // in shown.text, per display cell, and its end
+    std::size_t comment = std::string_view::npos;
+
+    // The byte of shown.text where `cell` starts; its end when the text is shorter.
+    [[nodiscard]] std::size_t byte_at(std::uint32_t cell) const {
+        return cell < byte_of_cell.size() ? byte_of_cell[cell] : shown.text.size();
+    }
+};
+
+// The layout of one line, kept for the next finding on the same thread; valid until the next
+// call.
+const laid_out_line& laid_out(const source_file& file, std::uint32_t line) {
+    thread_local laid_out_line cached;
+    if (cached.file_serial == file.serial() && cached.line == line)
+        return cached;
+    const std::string_view whole = file.line_text(line);
+    cached.file_serial = file.serial();
+    cached.line = line;
+    cached.shown = layout(whole);
+    cached.comment = comment_start(whole);
+    cached.byte_of_cell.clear();
+    const std::string& text = cached.shown.text;
+    for (std::size_t i = 0; i < text.size(); ++i)
+        if ((static_cast<unsigned char>(text[i]) & 0xC0) != 0x80)
+            cached.byte_of_cell.push_back(static_cast<std::uint32_t>(i));
+    cached.byte_of_cell.push_back(static_cast<std::uint32_t>(text.size()));
+    return cached;
+}
+
 std::string padded(std::string_view text, std::uint32_t cells) {
     std::string out(text);
     const std::uint32_t have = cell_count(text);
@@ -158,7 +194,8 @@ class excerpt {
     std::uint32_t line_number_;
     std::uint32_t line_begin_;
     std::string_view line_;
-    display_line shown_;
+    const laid_out_line* laid_ = nullptr;
+    const display_line* shown_ = nullptr;
     std::vector<mark> marks_;
     std::uint32_t first_cell_ = 0;
     std::uint32_t last_cell_ = 0;
@@ -204,10 +241,11 @@ class excerpt {
     // error: something was expected before it) stays where it is, over blank cells.
     void cut_line() {
         const std::string_view whole = file_.line_text(line_number_);
-        shown_ = layout(whole);
+        laid_ = &laid_out(file_, line_number_);
+        shown_ = &laid_->shown;
         line_ = whole;
         bool into_comment = false;
-        const std::size_t hash = comment_start(whole);
+        const std::size_t hash = laid_->comment;
         for (auto& m : marks_) {
             if (!m.on_line)
                 continue;
@@ -216,8 +254,8 @@ class excerpt {
             const std::size_t e = to_line(r.end);
             into_comment = into_comment || (hash != std::string_view::npos && b > hash) ||
                            (hash != std::string_view::npos && b < hash && e > hash);
-            m.first = shown_.cell[b];
-            m.last = std::max(shown_.cell[std::max(b, e)], m.first + 1);
+            m.first = shown_->cell[b];
+            m.last = std::max(shown_->cell[std::max(b, e)], m.first + 1);
         }
         if (hash != std::string_view::npos && !into_comment)
             line_ = whole.substr(0, hash);
@@ -227,7 +265,7 @@ class excerpt {
     }
 
     void choose_window() {
-        const std::uint32_t width = shown_.cell[line_.size()]; // of the text shown
+        const std::uint32_t width = shown_->cell[line_.size()]; // of the text shown
         std::uint32_t extent = width;
         std::uint32_t leftmost = width;
         for (const auto& m : marks_)
@@ -244,7 +282,7 @@ class excerpt {
         } else {
             // Indentation in the file says nothing here: the excerpt has its own.
             std::uint32_t blank = 0;
-            while (blank < shown_.text.size() && shown_.text[blank] == ' ')
+            while (blank < shown_->text.size() && shown_->text[blank] == ' ')
                 ++blank;
             first_cell_ = std::min(blank, leftmost);
             last_cell_ = extent;
@@ -269,7 +307,7 @@ class excerpt {
         for (const auto& m : marks_)
             if (m.on_line && is_primary(m))
                 return m.first;
-        return shown_.cell[to_line(d_.where.range.begin)];
+        return shown_->cell[to_line(d_.where.range.begin)];
     }
 
     // Keys run left to right along the line, then the terms shown only in the ledger.
@@ -357,12 +395,11 @@ class excerpt {
     }
 
     void draw(std::string& out) const {
-        const std::size_t b = byte_at_cell(shown_.text, first_cell_);
-        const std::size_t e =
-            byte_at_cell(shown_.text, std::min(last_cell_, shown_.cell[line_.size()]));
-        out +=
-            fmt::format("{}{}{}{}\n", indent, cut_left_ ? "\u2026" : "",
-                        std::string_view(shown_.text).substr(b, e - b), cut_right_ ? "\u2026" : "");
+        const std::size_t b = laid_->byte_at(first_cell_);
+        const std::size_t e = laid_->byte_at(std::min(last_cell_, shown_->cell[line_.size()]));
+        out += fmt::format("{}{}{}{}\n", indent, cut_left_ ? "\u2026" : "",
+                           std::string_view(shown_->text).substr(b, e - b),
+                           cut_right_ ? "\u2026" : "");
         for (const auto& row : rows_) {
             const std::string braces = row.braces.render(paint_);
             if (!braces.empty())

@@ -202,6 +202,8 @@ std::string render_groups_text(const check_report& report, const text_style& /*s
                                          : "; holds the dependent variable";
             out += fmt::format("  π{} = {}  {}\n", i + 1, pad(g.formula, formula_width), remark);
         }
+        for (const auto& note : s.analysis.notes)
+            out += fmt::format("  note: {}\n", note);
         if (s.plan)
             render_plan(out, s, *s.plan);
         out += '\n';
@@ -237,6 +239,9 @@ std::string render_groups_json(const check_report& report) {
         out += "],\n     \"problems\": [";
         for (std::size_t i = 0; i < s.analysis.problems.size(); ++i)
             out += (i ? ", " : "") + str(s.analysis.problems[i]);
+        out += "], \"notes\": [";
+        for (std::size_t i = 0; i < s.analysis.notes.size(); ++i)
+            out += (i ? ", " : "") + str(s.analysis.notes[i]);
         out += fmt::format("], \"rank\": {}, \"repeating\": [", s.analysis.rank);
         for (std::size_t i = 0; i < s.analysis.repeating.size(); ++i)
             out += (i ? ", " : "") + str(s.variables[s.analysis.repeating[i]].name);
