@@ -1171,8 +1171,10 @@ class checker {
         constexpr std::size_t max_operands_for_flips = 16;
         for (std::size_t i = 0; i < parts.size() && parts.size() <= max_operands_for_flips; ++i)
             for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
-                if (!looks_like_conversion(parts[i].literals[k], !dimensionless) &&
-                    !parts[i].literals[k].factor_like)
+                // Any number may be the conversion written upside down (/60 for *60, /3.6,
+                // *360): only a flip that reconciles every operand counts, and the formula is
+                // reported either way; this only chooses the clearer message.
+                if (parts[i].literals[k].value == 1.0)
                     continue;
                 const reconciliation flipped = reconcile(parts, {i, k});
                 if (!flipped.agree)
