@@ -361,3 +361,39 @@ TEST_CASE("sheets: shared formulas in an .xlsx are expanded to every cell of the
     REQUIRE(d4 != nullptr);
     CHECK(d4->text == "=B4*C4");
 }
+
+TEST_CASE("sheets: standard gravity written as a number in a cell formula (9.81)") {
+    // p = ρ g h (g_n = 9.80665 m/s², 3rd CGPM 1901); an invented tank sheet. B4 converts to kPa
+    // and is right; B5 lacks g; B6 has g but gives Pa in a kPa cell.
+    const auto row = [](int r, const std::string& value, const std::string& unit) {
+        const std::string n = std::to_string(r);
+        const bool formula = value.front() == '=';
+        return "<row r=\"" + n + "\"><c r=\"B" + n + "\">" +
+               (formula ? "<f>" + value.substr(1) + "</f><v>0</v>" : "<v>" + value + "</v>") +
+               "</c><c r=\"C" + n + "\" t=\"inlineStr\"><is><t>" + unit + "</t></is></c></row>";
+    };
+    const std::string sheet = "<worksheet><sheetData>" + row(2, "1000", "kg/m3") +
+                              row(3, "12", "m") + row(4, "=B2*9.81*B3/1000", "kPa") +
+                              row(5, "=B2*B3", "Pa") + row(6, "=B2*9.81*B3", "kPa") +
+                              "</sheetData></worksheet>";
+    const std::string book = make_zip(
+        {{"[Content_Types].xml",
+          "<Types><Override PartName=\"/xl/workbook.xml\" ContentType=\"application/"
+          "vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml\"/></Types>"},
+         {"xl/workbook.xml",
+          "<workbook><sheets><sheet name=\"Tank\" sheetId=\"1\" id=\"rId1\"/></sheets></workbook>"},
+         {"xl/_rels/workbook.xml.rels",
+          "<Relationships><Relationship Id=\"rId1\" Target=\"worksheets/sheet1.xml\"/>"
+          "</Relationships>"},
+         {"xl/worksheets/sheet1.xml", sheet}});
+    plumb::test::temp_dir dir;
+    const auto path = dir.write("tank.xlsx", book);
+    const check_report report = check_paths({path});
+    std::vector<std::string> found;
+    for (const auto& d : report.diagnostics)
+        if (const cell_place* c = d.where.file->cell_at(d.where.range.begin))
+            found.push_back(cell_text(*c) + " " + d.rule);
+    std::sort(found.begin(), found.end());
+    CHECK(found == std::vector<std::string>{"Tank!B4 gravity-number", "Tank!B5 result-unit",
+                                            "Tank!B6 gravity-number", "Tank!B6 unit-scale"});
+}

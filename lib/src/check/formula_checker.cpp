@@ -4,6 +4,7 @@
 
 #include "check/edit_distance.hpp"
 #include "check/functions.hpp"
+#include "check/gravity_number.hpp"
 #include "check/scale_match.hpp"
 #include "plumb/rules.hpp"
 #include "units/exact_factor.hpp"
@@ -59,6 +60,12 @@ typed unknown_type(bool inferred = false) {
 
 const dimension& temperature_dimension() {
     static const dimension d = unit_table::standard().resolve("K")->dim();
+    return d;
+}
+const dimension& acceleration_dimension() {
+    static const dimension d = dimension::base(base_dimension::length) /
+                               dimension::base(base_dimension::time) /
+                               dimension::base(base_dimension::time);
     return d;
 }
 const dimension& pressure_dimension() {
@@ -327,7 +334,9 @@ class checker {
         }
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
-        const agreement a = find_agreement(sides);
+        agreement a = find_agreement(sides);
+        if (!a.odd.empty() && read_gravity_numbers(base, a))
+            a = find_agreement(sides);
         const char* what = equation ? "equation" : "limit";
         if (a.odd.empty()) {
             double unit = 1.0;
@@ -444,6 +453,111 @@ class checker {
         d.where = {file_.source, where};
         out_.push_back(std::move(d));
         return out_.back();
+    }
+
+    // The dimension a term lacks is an acceleration to the power `exponent` (1, -1, 1/2...).
+    static bool lacks_gravity_to(const dimension& lacking, double exponent) {
+        for (std::int64_t denominator = 1; denominator <= 3; ++denominator) {
+            const double scaled = exponent * static_cast<double>(denominator);
+            const double whole = std::round(scaled);
+            if (std::abs(scaled - whole) > 1e-9 || whole == 0.0 || std::abs(whole) > 6)
+                continue;
+            try {
+                return acceleration_dimension().pow(
+                           rational(static_cast<std::int64_t>(whole), denominator)) == lacking;
+            } catch (const std::exception&) {
+                return false;
+            }
+        }
+        return false;
+    }
+
+    // Where the odd operands lack exactly an acceleration (or have one too many) and each holds
+    // g_n written as a number in its own units, the number is read as g_n: the operand takes the
+    // reference's dimension and the scale g_n gives it, and a note says which number was read so.
+    bool read_gravity_numbers(std::size_t base, const agreement& a) {
+        if (!a.reference)
+            return false;
+        const std::size_t count = operands_.size() - base;
+        const auto is_odd = [&](std::size_t i) {
+            return std::find(a.odd.begin(), a.odd.end(), i) != a.odd.end();
+        };
+        double reference_scale = std::numeric_limits<double>::quiet_NaN();
+        for (std::size_t i = 0; i < count; ++i) {
+            const typed& t = operands_[base + i].type;
+            if (!is_odd(i) && t.known && !t.zero && !t.numeric && t.dim == *a.reference &&
+                t.literal_count == 0 && std::isfinite(t.scale)) {
+                reference_scale = t.scale;
+                break;
+            }
+        }
+        if (!std::isfinite(reference_scale))
+            return false;
+        struct found {
+            std::size_t operand;
+            gravity_reading reading;
+        };
+        std::array<found, 4> readings{};
+        std::size_t found_count = 0;
+        std::array<std::string_view, 8> texts{};
+        for (const std::size_t i : a.odd) {
+            const typed& t = operands_[base + i].type;
+            if (found_count == readings.size() || !t.known || t.numeric || t.offset != nullptr ||
+                t.literal_count == 0 || t.literal_count > texts.size())
+                return false;
+            dimension lacking;
+            try {
+                lacking = *a.reference / t.dim;
+            } catch (const std::exception&) {
+                return false;
+            }
+            const std::span<const scale_literal> numbers(literals_.data() + t.literal_begin,
+                                                         t.literal_count);
+            std::array<bool, 8> fits{};
+            bool any_fits = false;
+            for (std::size_t k = 0; k < numbers.size(); ++k) {
+                texts[k] = text(file_.nodes[numbers[k].node].range);
+                fits[k] = lacks_gravity_to(lacking, numbers[k].exponent);
+                any_fits = any_fits || fits[k];
+            }
+            if (!any_fits)
+                return false;
+            const auto reading =
+                read_gravity_number(t.scale, reference_scale, numbers,
+                                    {texts.data(), numbers.size()}, {fits.data(), numbers.size()});
+            if (!reading)
+                return false;
+            readings[found_count++] = {i, *reading};
+        }
+        for (std::size_t r = 0; r < found_count; ++r) {
+            typed& t = operands_[base + readings[r].operand].type;
+            scale_literal& number = literals_[t.literal_begin + readings[r].reading.literal];
+            t.dim = *a.reference;
+            t.scale = readings[r].reading.term_scale;
+            t.exact_scale.reset();
+            const std::uint32_t node = number.node;
+            // The number is g_n now, not a factor for the scale rules to weigh.
+            number.value = 1.0;
+            number.tolerance = 0.0;
+            number.power_of_ten = false;
+            number.factor_like = false;
+            number.table_digits = false;
+            const std::string written = display_text(file_.nodes[node].range);
+            const double g = readings[r].reading.stands_for;
+            diagnostic& d = report(
+                rules::gravity_number,
+                std::abs(g - 9.80665) < 1e-9
+                    ? fmt::format("'{}' is read as standard gravity, g_n = 9.80665 m/s²", written)
+                    : fmt::format("'{}' is read as standard gravity in the units around it: "
+                                  "g_n = 9.80665 m/s² comes to {:.5g} there",
+                                  written, g),
+                file_.nodes[node].range);
+            d.level = severity::note;
+            d.notes.push_back({"write {g_n} instead to say so, or declare local gravity with "
+                               "its unit (g_site : m/s^2) where it differs",
+                               {}});
+        }
+        return true;
     }
 
     void add_term(diagnostic& d, const operand& op, bool differs = false) const {
@@ -647,7 +761,9 @@ class checker {
         const typed* offset_term = adopt_numbers_on_offset_scale(base);
         const scratch_region region(operands_, base);
         const std::span<const operand> terms = region.view();
-        const agreement a = find_agreement(terms, prefer_dimensionless);
+        agreement a = find_agreement(terms, prefer_dimensionless);
+        if (!a.odd.empty() && !prefer_dimensionless && read_gravity_numbers(base, a))
+            a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty()) {
             literals_.resize(literal_base);
             const std::size_t first_odd = a.odd.front();
@@ -1106,8 +1222,10 @@ class checker {
         constexpr std::size_t max_operands_for_flips = 16;
         for (std::size_t i = 0; i < parts.size() && parts.size() <= max_operands_for_flips; ++i)
             for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
-                if (!looks_like_conversion(parts[i].literals[k], !dimensionless) &&
-                    !parts[i].literals[k].factor_like)
+                // Any number may be the conversion written upside down (/60 for *60, /3.6,
+                // *360): only a flip that reconciles every operand counts, and the formula is
+                // reported either way; this only chooses the clearer message.
+                if (parts[i].literals[k].value == 1.0)
                     continue;
                 const reconciliation flipped = reconcile(parts, {i, k});
                 if (!flipped.agree)
@@ -1716,7 +1834,9 @@ class checker {
         operands_.push_back({n.rhs, eval(n.rhs)});
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
-        const agreement a = find_agreement(sides);
+        agreement a = find_agreement(sides);
+        if (!a.odd.empty() && read_gravity_numbers(base, a))
+            a = find_agreement(sides);
         if (!a.odd.empty()) {
             diagnostic& d =
                 report(rules::side_mismatch, "the two sides of this comparison differ in dimension",

@@ -4,6 +4,7 @@
 #include "sheets/workbook_checker.hpp"
 
 #include "check/formula_checker.hpp"
+#include "check/gravity_number.hpp"
 #include "plumb/rules.hpp"
 #include "sheets/a1_front_end.hpp"
 
@@ -561,11 +562,100 @@ class workbook_checker {
         }
     }
 
+    // The numbers of the outermost product with the power each enters with, as top_factors
+    // finds them, and where each is written.
+    void top_numbers(std::uint32_t node, double exponent, std::vector<scale_literal>& out) const {
+        const auto& n = lowered_.tree.nodes[node];
+        switch (n.kind) {
+        case syntax::expr_kind::group:
+            top_numbers(n.lhs, exponent, out);
+            return;
+        case syntax::expr_kind::multiply:
+        case syntax::expr_kind::divide:
+            top_numbers(n.lhs, exponent, out);
+            top_numbers(n.rhs, n.kind == syntax::expr_kind::divide ? -exponent : exponent, out);
+            return;
+        case syntax::expr_kind::number: {
+            const auto v = rational::parse(listing_->text(n.range));
+            if (v && !v->is_zero() && out.size() < 32) {
+                scale_literal l;
+                l.value = std::abs(v->to_double());
+                l.exponent = exponent;
+                l.node = node;
+                out.push_back(l);
+            }
+            return;
+        }
+        default:
+            return;
+        }
+    }
+
+    // =B4*9.81*B5 beside Pa: standard gravity written as a number, as in the notation (see
+    // check/gravity_number.hpp). On a reading, the formula's value takes the cell's dimension
+    // and the note is made; the scale is then compared as for any formula.
+    bool read_gravity_in_cell(const syntax::formula& formula, value_type& computed,
+                              const cell_unit& written, std::vector<double>& factors) {
+        std::vector<scale_literal> numbers;
+        top_numbers(lowered_.tree.sides[formula.first_side].root, 1.0, numbers);
+        if (numbers.empty() || numbers.size() > 8)
+            return false;
+        dimension lacking;
+        try {
+            lacking = written.unit.dim / computed.dim;
+        } catch (const std::exception&) {
+            return false;
+        }
+        const dimension acceleration = dimension::base(base_dimension::length) /
+                                       dimension::base(base_dimension::time) /
+                                       dimension::base(base_dimension::time);
+        std::array<std::string_view, 8> texts{};
+        std::array<bool, 8> fits{};
+        for (std::size_t k = 0; k < numbers.size(); ++k) {
+            texts[k] = listing_->text(lowered_.tree.nodes[numbers[k].node].range);
+            try {
+                fits[k] = numbers[k].exponent == 1.0 || numbers[k].exponent == -1.0
+                              ? acceleration.pow(rational(
+                                    static_cast<std::int64_t>(numbers[k].exponent))) == lacking
+                              : false;
+            } catch (const std::exception&) {
+                fits[k] = false;
+            }
+        }
+        const auto reading =
+            read_gravity_number(computed.scale, written.unit.scale, numbers,
+                                {texts.data(), numbers.size()}, {fits.data(), numbers.size()});
+        if (!reading)
+            return false;
+        computed.dim = written.unit.dim;
+        computed.scale = reading->term_scale;
+        factors.clear();
+        for (std::size_t k = 0; k < numbers.size(); ++k)
+            if (k != reading->literal)
+                factors.push_back(std::pow(numbers[k].value, numbers[k].exponent));
+        const double g = reading->stands_for;
+        diagnostic& d = report(
+            severity::note, rules::gravity_number,
+            std::abs(g - 9.80665) < 1e-9
+                ? fmt::format("'{}' is read as standard gravity, g_n = 9.80665 m/s\u00B2",
+                              texts[reading->literal])
+                : fmt::format("'{}' is read as standard gravity in the units around it: g_n = "
+                              "9.80665 m/s\u00B2 comes to {:.5g} there",
+                              texts[reading->literal], g),
+            lowered_.tree.nodes[numbers[reading->literal].node].range);
+        d.notes.push_back({"write 9.80665 or a cell that holds g with its unit to say so", {}});
+        return true;
+    }
+
     void compare_with_written(const formula_cell& f, const syntax::formula& formula,
-                              const value_type& computed, const cell_unit& written) {
+                              value_type computed, const cell_unit& written) {
         if (computed.zero)
             return;
         const std::string where_unit = fmt::format("'{}' ({})", written.unit.text, written.origin);
+        std::vector<double> factors;
+        bool factors_found = false;
+        if (!(computed.dim == written.unit.dim))
+            factors_found = read_gravity_in_cell(formula, computed, written, factors);
         if (!(computed.dim == written.unit.dim)) {
             diagnostic& d =
                 report(severity::error, rules::result_unit,
@@ -621,8 +711,8 @@ class workbook_checker {
         const double needed = computed.scale / written.unit.scale;
         if (!std::isfinite(needed) || std::abs(needed - 1.0) <= 1e-9)
             return;
-        std::vector<double> factors;
-        top_factors(lowered_.tree.sides[formula.first_side].root, 1.0, factors);
+        if (!factors_found)
+            top_factors(lowered_.tree.sides[formula.first_side].root, 1.0, factors);
         // Published factors are often rounded to four significant figures (3.281, 0.0283):
         // common practice; a relative 1e-3 accepts those and nothing a unit slip gives.
         const auto near = [](double a, double b) { return std::abs(a / b - 1.0) <= 1e-3; };

@@ -1,0 +1,48 @@
+// A short factor written upside down (/60 for *60, /3.6, *360, /1.8) is named as the wrong way
+// round, like the long ones, so that following the message fixes the formula.
+#include "plumb/check.hpp"
+#include "plumb/rules.hpp"
+
+#include <doctest/doctest.h>
+
+#include <string>
+
+namespace {
+
+std::string only_finding(const std::string& text) {
+    const auto r = plumb::check_text("f.plumb", text);
+    std::string out;
+    for (const auto& d : r.diagnostics)
+        if (d.rule != plumb::rules::unused)
+            out += d.message + "\n";
+    return out;
+}
+
+} // namespace
+
+// 1 min = 60 s, 1 L/s = 3.6 m³/h, 1 K = 1.8 °F in differences (NIST SP 811 (2008), App. B and
+// B.9); the metric rational method's 1/360 follows from 1 mm/h on 1 ha = 10 m³/h (common
+// practice, computed from the SI prefixes).
+TEST_CASE("factor direction: short factors written the wrong way round") {
+    const std::string decl = "Q : m^3/s\nt : min\nV : m^3\nq : L/s\nq_h : m^3/h\n"
+                             "d_C : Δ°C\nd_F : Δ°F\ni : mm/h\nA : ha\nC : 1\n";
+    struct row {
+        const char* wrong;
+        const char* right;
+        const char* factor;
+    };
+    for (const row& r :
+         {row{"V = Q*t/60", "V = Q*t*60", "60"}, row{"q_h = q/3.6", "q_h = q*3.6", "3.6"},
+          row{"d_F = d_C/1.8", "d_F = d_C*1.8", "1.8"},
+          row{"Q = C*i*A*360", "Q = C*i*A/360", "360"}}) {
+        CAPTURE(r.wrong);
+        const std::string wrong = only_finding(decl + r.wrong + "\n");
+        CHECK(wrong.find(std::string("the factor ") + r.factor + " is the wrong way round") !=
+              std::string::npos);
+        CHECK(only_finding(decl + r.right + "\n").empty());
+    }
+    // A physics number is not blamed when flipping it does not reconcile the units.
+    const std::string physics = only_finding(decl + "V = Q*t/2\n");
+    CHECK(physics.find("wrong way round") == std::string::npos);
+    CHECK(physics.find("counts") != std::string::npos);
+}
