@@ -14,6 +14,7 @@
 #include <filesystem>
 #include <fstream>
 #include <map>
+#include <optional>
 #include <sstream>
 #include <string>
 #include <utility>
@@ -113,6 +114,20 @@ double model_ratio(const plumb::study_report& study, const std::string& name) {
 
 bool within(double actual, double expected, double relative) {
     return std::abs(actual - expected) <= relative * std::abs(expected);
+}
+
+// A group's value from SI values of its variables; nothing when one is missing.
+std::optional<double> group_value(const std::vector<plumb::rational>& exponents,
+                                  const std::vector<std::optional<double>>& values) {
+    double product = 1.0;
+    for (std::size_t j = 0; j < exponents.size(); ++j) {
+        if (exponents[j].is_zero())
+            continue;
+        if (j >= values.size() || !values[j])
+            return std::nullopt;
+        product *= std::pow(*values[j], exponents[j].to_double());
+    }
+    return product;
 }
 
 } // namespace
@@ -270,7 +285,77 @@ TEST_SUITE("groups corpus") {
             for (const auto& v : study.plan->model)
                 CHECK((v.value.has_value() || !study.plan->alternatives.empty()));
         }
-        CHECK(plans >= 5);
+        // One plan for every prototype line in the folder, so no study's plan goes missing.
+        std::size_t prototype_lines = 0;
+        for (const auto& entry : fs::directory_iterator(groups_dir)) {
+            if (entry.path().extension() != ".plumb")
+                continue;
+            std::ifstream in(entry.path());
+            std::string line;
+            while (std::getline(in, line))
+                prototype_lines += line.rfind("prototype ", 0) == 0 ? 1 : 0;
+        }
+        CHECK(prototype_lines >= 12);
+        CHECK(plans == prototype_lines);
+    }
+
+    TEST_CASE("groups corpus: every plan's values satisfy the groups it calls matched") {
+        // The plan's own arithmetic, redone here from its SI values: a group reported matched
+        // must hold, within the study's tolerance, when evaluated from the model values the
+        // plan prints; the group values it prints must be those of its variables; no value is
+        // 0, infinite or NaN; a chosen group is matched; and each alternative, applied to the
+        // shared values, matches the group it offers to match.
+        std::size_t groups_checked = 0;
+        for (const auto& study : corpus_report().studies) {
+            if (!study.plan)
+                continue;
+            INFO(study.name);
+            const auto& plan = *study.plan;
+            std::vector<std::optional<double>> model(study.variables.size());
+            for (const auto& v : plan.model) {
+                REQUIRE(v.variable < model.size());
+                if (v.value) {
+                    CHECK(std::isnormal(*v.value));
+                    model[v.variable] = v.value;
+                }
+            }
+            for (const auto& gv : plan.groups) {
+                INFO("group " << study.analysis.groups.at(gv.group).formula);
+                const auto& exponents = study.analysis.groups.at(gv.group).exponents;
+                const auto from_model = group_value(exponents, model);
+                const auto from_prototype = group_value(exponents, study.prototype);
+                if (gv.model) {
+                    REQUIRE(from_model.has_value());
+                    CHECK(within(*gv.model, *from_model, 1e-9));
+                }
+                if (gv.prototype) {
+                    REQUIRE(from_prototype.has_value());
+                    CHECK(within(*gv.prototype, *from_prototype, 1e-9));
+                }
+                if (gv.matched) {
+                    ++groups_checked;
+                    REQUIRE(from_model.has_value());
+                    REQUIRE(from_prototype.has_value());
+                    CHECK(std::isnormal(*from_model));
+                    CHECK(within(*from_model, *from_prototype, study.tolerance));
+                }
+                if (std::find(study.match.begin(), study.match.end(), gv.group) !=
+                    study.match.end())
+                    CHECK(gv.matched);
+            }
+            for (const auto& alternative : plan.alternatives) {
+                auto chosen = model;
+                for (const auto& v : alternative.fixed)
+                    chosen.at(v.variable) = v.value;
+                const auto& exponents = study.analysis.groups.at(alternative.group).exponents;
+                const auto from_model = group_value(exponents, chosen);
+                const auto from_prototype = group_value(exponents, study.prototype);
+                REQUIRE(from_model.has_value());
+                REQUIRE(from_prototype.has_value());
+                CHECK(within(*from_model, *from_prototype, study.tolerance));
+            }
+        }
+        CHECK(groups_checked >= 20);
     }
 
     TEST_CASE("groups corpus: the pump model follows the affinity laws") {
@@ -377,6 +462,76 @@ TEST_SUITE("groups corpus: worked examples") {
         CHECK(as_printed(model_ratio(study, "P"), 1.331, 4));
         CHECK(as_printed(model_in_unit(study, "P"), 8.6515, 5));
         CHECK(as_printed(model_in_unit(study, "n"), 1100, 4));
+    }
+
+    TEST_CASE("worked example: Bansal's 1:50 ship model towed at Froude similarity") {
+        // R. K. Bansal, A Textbook of Fluid Mechanics and Hydraulic Machines, 9th ed., ch. 12,
+        // the 1:50 ship model problem (from memory): model 1 m/s and 2 N; printed ship values
+        // 7.071 m/s and 250000 N, which the prototype line carries. Back to the model: the
+        // book's data, V = 1 m/s at four figures and F = 2 N (force ratio λ³ in the same water).
+        const auto& study = find_study("ship-towing");
+        REQUIRE(study.plan.has_value());
+        INFO("problems: " << joined(study.plan->problems));
+        CHECK(study.plan->problems.empty());
+        CHECK(study.plan->conflicts.empty());
+        CHECK(as_printed(model_in_unit(study, "V"), 1.000, 4));
+        CHECK(as_printed(model_in_unit(study, "F"), 2.000, 4));
+        CHECK(within(model_ratio(study, "F"), 1.0 / 125000.0, 1e-12));
+        CHECK(within(model_ratio(study, "V"), 1.0 / std::sqrt(50.0), 1e-12));
+        for (const auto& g : study.plan->groups)
+            CHECK(g.matched);
+    }
+
+    TEST_CASE("worked example: Bansal's water and oil pipes at equal Reynolds numbers") {
+        // Bansal, 9th ed., ch. 12, Reynolds' model law (from memory): water at 4 m/s in a 30 cm
+        // pipe, μ = 0.01 poise; oil of specific gravity 0.8, μ = 0.025 poise, in a 10 cm pipe;
+        // printed answer 37.5 m/s. The oil pipe's pressure gradient at the equal pressure
+        // group: Δp_L times (ρ_o/ρ_w)(V_o/V_w)²(D_w/D_o) = 0.8 × 9.375² × 3 = 210.9375.
+        const auto& study = find_study("pipe-oil");
+        REQUIRE(study.plan.has_value());
+        INFO("problems: " << joined(study.plan->problems));
+        CHECK(study.plan->problems.empty());
+        REQUIRE(study.length_scale.has_value());
+        CHECK(within(*study.length_scale, 1.0 / 3.0, 1e-12));
+        CHECK(as_printed(model_in_unit(study, "V"), 37.5, 3));
+        CHECK(within(model_ratio(study, "Δp_L"), 0.8 * 9.375 * 9.375 * 3.0, 1e-9));
+        CHECK(study.units.at(variable_index(study, "μ")).text == "P");
+        for (const auto& g : study.plan->groups)
+            CHECK(g.matched);
+    }
+
+    TEST_CASE("worked example: Çengel and Cimbala's one-fifth scale car in a cold tunnel") {
+        // Çengel & Cimbala, Fluid Mechanics, 1st ed., Examples 7-5 and 7-6 (from memory): the
+        // tunnel speed 221 mi/h as printed, and the model drag 21.2 lbf the prototype's
+        // 25.25 lbf was recomputed from. By hand, F_m/F_p = (ρ_m/ρ_p)(V_m/V_p)²(1/5)².
+        const auto& study = find_study("car");
+        REQUIRE(study.plan.has_value());
+        INFO("problems: " << joined(study.plan->problems));
+        CHECK(study.plan->problems.empty());
+        CHECK(as_printed(model_in_unit(study, "V"), 221, 3));
+        CHECK(as_printed(model_in_unit(study, "F"), 21.2, 3));
+        const double v_ratio = (1.754 / 1.849) * (1.184 / 1.269) * 5.0;
+        CHECK(within(model_ratio(study, "F"), (1.269 / 1.184) * v_ratio * v_ratio / 25.0, 1e-9));
+        CHECK(study.units.at(variable_index(study, "V")).text == "mi/h");
+        for (const auto& g : study.plan->groups)
+            CHECK(g.matched);
+    }
+
+    TEST_CASE("worked example: Mott's pump at 1250 rpm by the affinity laws") {
+        // R. L. Mott, Applied Fluid Mechanics, 6th ed., ch. 13 (from memory): 1500 gal/min,
+        // 130 ft and 50 hp at 1750 rpm; at 1250 rpm the book prints 1071 gal/min, 66.3 ft and
+        // 18.2 hp.
+        const auto& study = find_study("pump-speed");
+        REQUIRE(study.plan.has_value());
+        INFO("problems: " << joined(study.plan->problems));
+        CHECK(study.plan->problems.empty());
+        CHECK(study.plan->conflicts.empty());
+        CHECK(as_printed(model_in_unit(study, "Q"), 1071, 4));
+        CHECK(as_printed(model_in_unit(study, "gH"), 66.3, 3));
+        CHECK(as_printed(model_in_unit(study, "P"), 18.2, 3));
+        CHECK(study.units.at(variable_index(study, "P")).text == "hp");
+        for (const auto& g : study.plan->groups)
+            CHECK(g.matched);
     }
 
     TEST_CASE("groups corpus: the text report is written for a test-rig engineer") {

@@ -324,6 +324,194 @@ TEST_SUITE("similitude") {
         CHECK(plan.groups[1].matched);
     }
 
+    TEST_CASE("similitude: unknowns solved together are never 0 or infinite and 'matched'") {
+        // Density and speed both unknown, fixed together by the Reynolds number ρVD/μ and the
+        // pressure group Δp/(ρV²): ρV = Re·μ/D and ρV² = Δp/Eu. Prototype by hand: ρ = 1000,
+        // V = 2, D = 0.1, μ = 1e-3, Δp = 4000, so Re = 2e5 and Eu = 1. A model line with
+        // Δp = 1e300 Pa and μ = 1e-300 Pa*s needs V = Δp·D/(Eu·Re·μ) = 5e593 m/s and
+        // ρ = (Re·μ/D)²/(Δp/Eu) = 4e-888 kg/m^3: beyond a double, which once printed as a
+        // speed of infinity and a density of 0, both "matched".
+        similitude_request r;
+        r.variables = {var("ρ", 1, -3, 0), var("V", 0, 1, -1), var("D", 0, 1, 0),
+                       var("μ", 1, -1, -1), var("Δp", 1, -1, -2)};
+        r.analysis.groups = {
+            group({1, 1, 1, -1, 0}, "ρ*V*D/μ", false, "Reynolds number"),
+            group({-1, -2, 0, 0, 1}, "Δp/(ρ*V^2)", false, "Euler number"),
+        };
+        require_dimensionless(r);
+        r.prototype = {1000.0, 2.0, 0.1, 1.0e-3, 4000.0};
+        r.length_scale = 1.0;
+        SUBCASE("ordinary values: solved together and matched, by hand") {
+            // Model Δp = 1000 and μ = 2e-3: ρV = 2e5·2e-3/0.1 = 4000, ρV² = 1000, so V = 0.25
+            // and ρ = 16000.
+            r.model = {std::nullopt, std::nullopt, std::nullopt, 2.0e-3, 1000.0};
+            const auto plan = plumb::plan_model(r);
+            INFO(all_problems(plan));
+            CHECK(plan.problems.empty());
+            CHECK(plan.model[0].value == near(16000.0));
+            CHECK(plan.model[1].value == near(0.25));
+            CHECK(plan.groups[0].matched);
+            CHECK(plan.groups[1].matched);
+        }
+        SUBCASE("values beyond a double: no model value, nothing matched, said plainly") {
+            r.model = {std::nullopt, std::nullopt, std::nullopt, 1.0e-300, 1.0e300};
+            const auto plan = plumb::plan_model(r);
+            INFO(all_problems(plan));
+            CHECK(any_contains(plan.problems, "model V of about 5e593 m/s"));
+            CHECK(any_contains(plan.problems, "model ρ of about 4e-888 kg/m^3"));
+            CHECK(any_contains(plan.problems, "beyond the numbers plumb can compute with"));
+            REQUIRE(plan.model.size() == 5);
+            CHECK_FALSE(plan.model[0].value.has_value());
+            CHECK_FALSE(plan.model[1].value.has_value());
+            CHECK(contains(plan.model[1].how, "no model value"));
+            for (const auto& g : plan.groups) {
+                CHECK_FALSE(g.matched);
+                CHECK_FALSE(g.model.has_value());
+            }
+        }
+    }
+
+    TEST_CASE("similitude: signs that differ between the lines give real values or a problem") {
+        // The Reynolds and capillary numbers fix V and μ together (by hand, as above: V/μ and
+        // V·μ). Prototype all positive: Re = 2e5 and Ca = 1e-3·2/0.072.
+        similitude_request r;
+        r.variables = {var("ρ", 1, -3, 0), var("V", 0, 1, -1), var("D", 0, 1, 0),
+                       var("μ", 1, -1, -1), var("σ", 1, 0, -2)};
+        r.analysis.groups = {
+            group({1, 1, 1, -1, 0}, "ρ*V*D/μ", false, "Reynolds number"),
+            group({0, 1, 0, 1, -1}, "V*μ/σ", false, "capillary number"),
+        };
+        require_dimensionless(r);
+        r.prototype = {1000.0, 2.0, 0.1, 1.0e-3, 0.072};
+        r.length_scale = 0.5;
+        SUBCASE("both given values negative: V/μ and V·μ both negative, so V < 0 < μ") {
+            // Magnitudes as in the test above: V = 2, μ = 5e-4. Keeping the prototype's
+            // positive signs once gave values whose own groups came out negative.
+            r.model = {-1000.0, std::nullopt, std::nullopt, std::nullopt, -0.036};
+            const auto plan = plumb::plan_model(r);
+            INFO(all_problems(plan));
+            CHECK(plan.problems.empty());
+            CHECK(plan.model[1].value == near(-2.0));
+            CHECK(plan.model[3].value == near(5.0e-4));
+            CHECK(plan.groups[0].matched);
+            CHECK(plan.groups[1].matched);
+            CHECK(plan.groups[0].model == near(2.0e5));
+        }
+        SUBCASE("one negative: V/μ < 0 and V·μ > 0 have no real solution") {
+            r.model = {-1000.0, std::nullopt, std::nullopt, std::nullopt, 0.036};
+            const auto plan = plumb::plan_model(r);
+            INFO(all_problems(plan));
+            CHECK(any_contains(plan.problems, "cannot all match with real values"));
+            CHECK(any_contains(plan.problems, "V and μ"));
+            CHECK_FALSE(plan.model[1].value.has_value());
+            CHECK_FALSE(plan.model[3].value.has_value());
+            CHECK_FALSE(plan.groups[0].matched);
+            CHECK_FALSE(plan.groups[1].matched);
+        }
+        SUBCASE("an even power cannot take a sign: Δp/(ρV²) with a negative model Δp") {
+            similitude_request e;
+            e.variables = {var("Δp", 1, -1, -2), var("ρ", 1, -3, 0), var("V", 0, 1, -1)};
+            e.analysis.groups = {group({1, -1, -2}, "Δp/(ρ*V^2)", false, "Euler number")};
+            require_dimensionless(e);
+            e.prototype = {4000.0, 1000.0, 2.0};
+            e.model = {-1000.0, 1000.0, std::nullopt};
+            const auto plan = plumb::plan_model(e);
+            INFO(all_problems(plan));
+            CHECK(any_contains(plan.problems, "the Euler number cannot match with real values"));
+            CHECK(any_contains(plan.problems, "V enters it as its -2 power"));
+            CHECK_FALSE(plan.model[2].value.has_value());
+            CHECK_FALSE(plan.groups[0].matched);
+        }
+    }
+
+    TEST_CASE("similitude: gravity must change only when it must, and only upwards") {
+        // Reynolds VL/ν against Froude V²/(gL), by hand. Prototype V = 2 m/s, L = 10 m,
+        // ν = 1e-6 m²/s, g = 9.81 m/s²; λ = 1/10. With the same ν the Reynolds number needs
+        // V_m = 20 m/s, and then the Froude number needs g_m = V_m²/(Fr·L_m) = 9810 m/s², a
+        // thousand times gravity (λ^-3): only a centrifuge raises gravity (common practice of
+        // geotechnical centrifuge modelling). With ν_m = 1e-9 m²/s the speed is 0.02 m/s and
+        // the gravity needed 0.00981 m/s², which nothing provides.
+        similitude_request r;
+        r.variables = {var("V", 0, 1, -1), var("L", 0, 1, 0), var("ν", 0, 2, -1),
+                       var("g", 0, 1, -2)};
+        r.analysis.groups = {
+            group({1, 1, -1, 0}, "V*L/ν", false, "Reynolds number"),
+            group({2, -1, 0, -1}, "V^2/(L*g)", false, "Froude number"),
+        };
+        require_dimensionless(r);
+        r.prototype = {2.0, 10.0, 1.0e-6, 9.81};
+        r.length_scale = 0.1;
+        SUBCASE("higher gravity: a centrifuge") {
+            r.model = {std::nullopt, std::nullopt, 1.0e-6, 9.81};
+            const auto plan = plumb::plan_model(r);
+            INFO(all_problems(plan));
+            REQUIRE(plan.conflicts.size() == 1);
+            const std::string& why = plan.conflicts[0].explanation;
+            INFO(why);
+            CHECK(contains(why, "an acceleration g of 9810 m/s^2 (g_model/g_prototype = λ^-3 = "
+                                "1000), higher than the prototype's, which only a centrifuge "
+                                "can provide"));
+        }
+        SUBCASE("lower gravity: no rig provides it, and no value is asked for") {
+            r.model = {std::nullopt, std::nullopt, 1.0e-9, 9.81};
+            const auto plan = plumb::plan_model(r);
+            INFO(all_problems(plan));
+            REQUIRE(plan.conflicts.size() == 1);
+            const std::string& why = plan.conflicts[0].explanation;
+            INFO(why);
+            CHECK(contains(why, "would take a gravity lower than the prototype's, which no test "
+                                "rig can provide"));
+            CHECK_FALSE(contains(why, "0.00981"));
+            CHECK_FALSE(contains(why, "only a centrifuge can provide"));
+        }
+        SUBCASE("another acceleration is the rig's to set, and gravity stays") {
+            // A shaking table's peak acceleration a against g, a/g: prototype 3 m/s², table 6 m/s².
+            similitude_request t;
+            t.variables = {var("a", 0, 1, -2), var("g", 0, 1, -2)};
+            t.analysis.groups = {group({1, -1}, "a/g")};
+            require_dimensionless(t);
+            t.prototype = {3.0, 9.81};
+            t.model = {6.0, 9.81};
+            t.length_scale = 0.1;
+            const auto plan = plumb::plan_model(t);
+            REQUIRE(plan.conflicts.size() == 1);
+            const std::string& why = plan.conflicts[0].explanation;
+            INFO(why);
+            CHECK(contains(why, "an acceleration a of 3 m/s^2 (a_model/a_prototype = 1)."));
+            CHECK_FALSE(contains(why, "centrifuge"));
+        }
+    }
+
+    TEST_CASE("similitude: a group just off never reads as matched in its scale effect") {
+        // a/g with a table acceleration 0.2 % above the prototype's, by hand: 3.006/3 = 1.002.
+        // At three figures the ratio would read "1 times the prototype's".
+        similitude_request t;
+        t.variables = {var("a", 0, 1, -2), var("g", 0, 1, -2)};
+        t.analysis.groups = {group({1, -1}, "a/g")};
+        require_dimensionless(t);
+        t.prototype = {3.0, 9.81};
+        t.model = {3.006, 9.81};
+        t.length_scale = 0.1;
+        auto plan = plumb::plan_model(t);
+        REQUIRE(plan.groups.size() == 1);
+        CHECK_FALSE(plan.groups[0].matched);
+        CHECK(plan.groups[0].scale_effect ==
+              "higher in the model: its value is 0.2 % above the prototype's");
+        // Within a tolerance of 0.5 % it is matched, and has no scale effect.
+        t.tolerance = 0.005;
+        plan = plumb::plan_model(t);
+        CHECK(plan.groups[0].matched);
+        CHECK(plan.groups[0].scale_effect.empty());
+        // Far off, a ratio: 6/3 = 2 times, 1.5/3 = 1/2 of.
+        t.tolerance = plumb::default_match_tolerance;
+        t.model = {6.0, 9.81};
+        CHECK(plumb::plan_model(t).groups[0].scale_effect ==
+              "higher in the model: its value is 2 times the prototype's");
+        t.model = {1.5, 9.81};
+        CHECK(plumb::plan_model(t).groups[0].scale_effect ==
+              "lower in the model: its value is 1/2 of the prototype's");
+    }
+
     TEST_CASE("similitude: a variable no group fixes stays free") {
         // Pipe flow with only the model fluid's density given: Re = ρVD/μ holds both V and μ, so
         // neither is fixed, and the pressure-drop group then holds Δp and V.

@@ -281,3 +281,29 @@ TEST_CASE("studies: the match clause chooses the groups, and its mistakes are na
         CHECK(count_rule(r, plumb::rules::study_problem) == 1);
     }
 }
+
+TEST_CASE("studies: a conflict gives the model fluid's ν in the unit the user declared for ν") {
+    // The 1:50 spillway of corpus/groups/spillway-model.plumb (Chanson, The Hydraulics of Open
+    // Channel Flow, 2nd ed., ch. 14, from memory: the viscous group cannot match with the same
+    // water). By hand: ν_m = ν_p·λ^(3/2) = (1e-3/998)·0.02^1.5 = 2.834e-9 m²/s = 0.002834 mm²/s
+    // (SI Brochure 9th ed., Table 7: milli = 1e-3, so 1 mm²/s = 1e-6 m²/s).
+    const std::string spillway =
+        "V_t : m/s\nQ : m^3/s\nb : m\nP : m\ng : m/s^2\nρ : kg/m^3\nμ : Pa*s\n"
+        "study spillway: V_t depends on Q, b, g, P, ρ, μ repeating ρ, g, P\n"
+        "prototype spillway: V_t = 27 m/s, Q = 2500 m^3/s, b = 60 m, P = 40 m, g = 9.81 m/s^2, "
+        "ρ = 998 kg/m^3, μ = 1.0e-3 Pa*s\n"
+        "model spillway: scale = 1:50, g = 9.81 m/s^2, ρ = 998 kg/m^3, μ = 1.0e-3 Pa*s\n";
+    const auto explanation = [](const plumb::check_report& r) {
+        REQUIRE(r.studies.size() == 1);
+        REQUIRE(r.studies[0].plan.has_value());
+        REQUIRE(r.studies[0].plan->conflicts.size() == 1);
+        return r.studies[0].plan->conflicts[0].explanation;
+    };
+    const std::string in_si = explanation(check_text("s.plumb", spillway));
+    CHECK(in_si.find("a kinematic viscosity μ/ρ of 2.834e-9 m^2/s") != std::string::npos);
+    const std::string declared =
+        explanation(check_text("s.plumb", "ν : mm^2/s \"kinematic viscosity\"\n" + spillway));
+    INFO(declared);
+    CHECK(declared.find("a kinematic viscosity μ/ρ of 0.002834 mm^2/s") != std::string::npos);
+    CHECK(declared.find(" m^2/s") == std::string::npos);
+}

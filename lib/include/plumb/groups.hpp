@@ -149,6 +149,9 @@ struct similitude_request {
     std::vector<std::size_t> match;
     double tolerance = default_match_tolerance; // relative; a group within it counts as matched
     std::vector<shown_unit> units;              // per variable; missing ones show coherent SI
+    // The unit the user declared for a kinematic viscosity (a symbol ν or nu), in which a
+    // conflict states the ν a model fluid needs; empty: m^2/s.
+    shown_unit kinematic_viscosity_unit;
 };
 
 struct group_values {

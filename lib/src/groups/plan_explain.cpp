@@ -32,6 +32,8 @@ std::optional<std::string> planner::requirement(std::size_t g, std::size_t j) co
     }
     const double log = (group_proto_[g]->log - rest) / a[j].to_double();
     const double value = model_[j].value->sign * std::exp(log);
+    if (!std::isnormal(value))
+        return std::nullopt; // beyond a double: no fluid to name
     std::optional<rational> power;
     if (power_rest) {
         try {
@@ -41,13 +43,13 @@ std::optional<std::string> planner::requirement(std::size_t g, std::size_t j) co
     }
     const auto ratio_text = [](std::string_view symbol, std::optional<rational> p, double ratio) {
         std::string out = fmt::format("{0}_model/{0}_prototype = ", symbol);
-        if (p)
+        if (p && !p->is_zero()) // "λ^0 = 1" says nothing the 1 does not
             out += power_text(*p) + " = ";
         return out + number_text(ratio, table_figures);
     };
     const double prototype_log = prototype_[j]->log;
     // A centrifuge raises gravity; nothing in a laboratory lowers it.
-    if (is_acceleration(v.dim) && log < prototype_log)
+    if (is_gravity(v) && log < prototype_log)
         return std::nullopt;
     std::string out =
         fmt::format("{} {} {} of {} ({})", article(quantity_text(v.dim)), quantity_text(v.dim),
@@ -75,16 +77,18 @@ std::optional<std::string> planner::requirement(std::size_t g, std::size_t j) co
                 } catch (const arithmetic_overflow&) {
                 }
             }
+            const dimension nu_dim = v.dim / d.dim;
+            const shown_unit* nu_unit =
+                r_.kinematic_viscosity_unit.text.empty() ? nullptr : &r_.kinematic_viscosity_unit;
             out += fmt::format(
-                " at the model density {} = {}, that is a kinematic viscosity {}/{} of {} "
-                "m^2/s ({})",
+                " at the model density {} = {}, that is a kinematic viscosity {}/{} of {} ({})",
                 d.name,
                 value_text(model_[*rho].value->value(), d.dim, unit_of(*rho), table_figures),
-                v.name, d.name, number_text(std::exp(nu_log), table_figures),
+                v.name, d.name, value_text(std::exp(nu_log), nu_dim, nu_unit, table_figures),
                 ratio_text("ν", nu_power, std::exp(nu_log - nu_prototype_log)));
         }
     }
-    if (is_acceleration(v.dim))
+    if (is_gravity(v))
         out += ", higher than the prototype's, which only a centrifuge can provide";
     return out;
 }
@@ -126,14 +130,12 @@ std::string planner::explain_conflict(std::size_t g, const std::vector<std::size
         if (a[j].is_zero() || model_[j].from != origin::given || !prototype_[j])
             continue;
         const dimension& d = r_.variables[j].dim;
-        gravity_enters = gravity_enters || is_acceleration(d);
+        const bool gravity = is_gravity(r_.variables[j]);
+        gravity_enters = gravity_enters || gravity;
         const auto need = requirement(g, j);
         if (!need)
             continue;
-        (is_density(d)        ? density_needs
-         : is_acceleration(d) ? gravity_needs
-                              : needs)
-            .push_back(*need);
+        (is_density(d) ? density_needs : gravity ? gravity_needs : needs).push_back(*need);
     }
     needs.insert(needs.end(), density_needs.begin(), density_needs.end());
     if (needs.empty())

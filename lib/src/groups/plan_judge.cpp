@@ -10,6 +10,7 @@
 #include <optional>
 #include <string>
 #include <string_view>
+#include <utility>
 #include <vector>
 
 namespace plumb::planning {
@@ -73,17 +74,52 @@ group_values planner::judge(std::size_t g) const {
     group_values gv;
     gv.group = g;
     const auto model = evaluate(g, model_values());
-    if (group_proto_[g])
+    const bool prototype_shown = group_proto_[g] && representable(*group_proto_[g]);
+    const bool model_shown = model && representable(*model);
+    if (prototype_shown)
         gv.prototype = group_proto_[g]->value();
-    if (model)
+    if (model_shown)
         gv.model = model->value();
-    gv.matched = model && group_proto_[g] && agree(*model, *group_proto_[g]);
-    if (!gv.matched && model && group_proto_[g] && model->sign == group_proto_[g]->sign) {
+    // A value of 0, infinity or NaN never matches, however well the logarithms agree.
+    gv.matched = prototype_shown && model_shown && agree(*model, *group_proto_[g]);
+    if (!gv.matched && prototype_shown && model_shown && model->sign == group_proto_[g]->sign) {
         gv.ratio = std::exp(model->log - group_proto_[g]->log);
         gv.scale_effect = scale_effect(g, *gv.ratio);
     }
     return gv;
 }
+
+// A group whose value is beyond a double in the model or the prototype is neither matched nor
+// off by a ratio anyone could read: say so instead of printing 0 or infinity.
+void planner::report_unrepresentable_groups() {
+    const auto model = model_values();
+    for (std::size_t g = 0; g < r_.analysis.groups.size(); ++g) {
+        for (const auto& [which, value] :
+             {std::pair{"prototype", group_proto_[g]}, std::pair{"model", evaluate(g, model)}}) {
+            if (!value || representable(*value))
+                continue;
+            plan_.problems.push_back(fmt::format(
+                "{} is about {} in the {}, beyond the numbers plumb can compute with, so it is "
+                "not counted as matched",
+                label(g), log_number_text(value->sign, value->log), which));
+        }
+    }
+}
+
+namespace {
+
+// How far off, in words that never read as matched: near 1 a ratio at three figures would say
+// "1 times", so the difference is given in per cent to two figures ("0.15 % above");
+// further off, a ratio ("6.49 times", "1/6.49 of"), exponents written short as in the table.
+std::string ratio_words(double shown) {
+    constexpr double near_one = 0.1;
+    if (std::fabs(shown - 1.0) < near_one)
+        return fmt::format("{} % {}", number_text(std::fabs(shown - 1.0) * 100.0, 2),
+                           shown < 1.0 ? "below" : "above");
+    return shown < 1.0 ? "1/" + number_text(1.0 / shown) + " of" : number_text(shown) + " times";
+}
+
+} // namespace
 
 // Which way a group that is off goes, and for the numbers whose meaning is a ratio of forces,
 // what then counts for more in the model than at full size (the usual reading of each number,
@@ -116,7 +152,7 @@ std::string planner::scale_effect(std::size_t g, double ratio) const {
     std::string out = fmt::format(
         "{} in the model: {} {} the prototype's", lower ? "lower" : "higher",
         number.empty() ? std::string("its value is") : "the " + std::string(number) + " is",
-        shown < 1.0 ? "1/" + number_text(1.0 / shown) + " of" : number_text(shown) + " times");
+        ratio_words(shown));
     for (const meaning& m : meanings) {
         if (m.number != number)
             continue;

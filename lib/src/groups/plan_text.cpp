@@ -25,6 +25,13 @@ bool is_acceleration(const dimension& d) {
            dimension::base(base_dimension::length) / dimension::base(base_dimension::time).pow(2);
 }
 
+// Gravity, as engineers write it (g, g_n, g_0): an acceleration of another name, such as a
+// shaking table's, is a given of the rig like any other, not the gravity only a centrifuge
+// changes.
+bool is_gravity(const group_variable& v) {
+    return is_acceleration(v.dim) && (v.name == "g" || v.name.rfind("g_", 0) == 0);
+}
+
 bool is_dynamic_viscosity(const dimension& d) {
     return d == dimension::base(base_dimension::mass) / (dimension::base(base_dimension::length) *
                                                          dimension::base(base_dimension::time));
@@ -57,6 +64,20 @@ std::string number_text(double v, int figures) {
     const auto e = s.find('e');
     const int exponent = std::stoi(s.substr(e + 1));
     return strip(s.substr(0, e)) + "e" + std::to_string(exponent);
+}
+
+// log10 splits into a whole exponent and a mantissa, which is then rounded to two figures.
+std::string log_number_text(int sign, double natural_log) {
+    if (!std::isfinite(natural_log))
+        return natural_log > 0 ? "infinity" : "0";
+    const double l = natural_log / std::log(10.0);
+    auto exponent = static_cast<long long>(std::floor(l));
+    double mantissa = std::round(std::pow(10.0, l - static_cast<double>(exponent)) * 10.0) / 10.0;
+    if (mantissa >= 10.0) {
+        mantissa /= 10.0;
+        ++exponent;
+    }
+    return fmt::format("{}{}e{}", sign < 0 ? "-" : "", mantissa, exponent);
 }
 
 // The coherent SI unit of a dimension, as the .plumb notation writes units ("Pa*s", "m^2/s").

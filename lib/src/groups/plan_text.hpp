@@ -14,6 +14,7 @@ namespace plumb::planning {
 
 bool is_length(const dimension& d);
 bool is_acceleration(const dimension& d);
+bool is_gravity(const group_variable& v);
 bool is_dynamic_viscosity(const dimension& d);
 bool is_density(const dimension& d);
 
@@ -22,6 +23,8 @@ std::string_view article(std::string_view noun);
 // Three significant figures by default: "0.008", "1000", "5.33", "8.43e-9", "1.25e5". Four
 // where a value is read beside the plan table, which prints four.
 std::string number_text(double v, int figures = 3);
+// A number given by its sign and natural logarithm, however far beyond a double: "5e593".
+std::string log_number_text(int sign, double natural_log);
 // The coherent SI unit of a dimension, as the notation writes units ("Pa*s", "m^2/s").
 std::string si_unit_text(const dimension& d);
 // An SI value in the unit the user wrote, with it: "43.3 kN", "1.64 m/s"; coherent SI without one.

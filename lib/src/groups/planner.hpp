@@ -28,7 +28,15 @@ inline std::optional<signed_log> to_signed_log(double v) {
     return signed_log{v < 0 ? -1 : 1, std::log(std::fabs(v))};
 }
 
-enum class origin { unknown, given, scaled, gravity, solved };
+// A value that can be printed and computed with: a normal double. Zero, infinity and NaN are
+// never a model value and never "matched", however well their logarithms agree.
+inline bool representable(const signed_log& v) {
+    return std::isnormal(v.value());
+}
+
+// no_value: a group would fix it, but no real, representable value does (the signs on the
+// prototype and model lines disagree, or the value is beyond a double); the plan says which.
+enum class origin { unknown, given, scaled, gravity, solved, no_value };
 
 struct model_state {
     origin from = origin::unknown;
@@ -82,6 +90,14 @@ class planner {
     void solve(bool chosen_only, bool with_dependent);
     void fix_single(std::size_t g, std::size_t u);
     bool solve_system(const std::vector<std::size_t>& candidates);
+    // Keeps a solved value only when it is representable, else says why and leaves it out.
+    void settle(std::size_t u, signed_log value, const std::vector<std::size_t>& fixed_by);
+    void withhold(std::size_t u, const std::vector<std::size_t>& fixed_by);
+    // The sign each group's known model values give it, times the prototype's sign.
+    [[nodiscard]] int needed_sign(std::size_t g) const;
+    // Whether the model values satisfy group g to the rounding of the arithmetic, whatever the
+    // user's tolerance: the plan's own check that what it solved matches what it solved for.
+    [[nodiscard]] bool satisfied(std::size_t g) const;
 
     // Judge each group (plan_judge.cpp).
     [[nodiscard]] std::optional<signed_log>
@@ -91,6 +107,7 @@ class planner {
     void check(std::size_t g);
     [[nodiscard]] group_values judge(std::size_t g) const;
     [[nodiscard]] std::string scale_effect(std::size_t g, double ratio) const;
+    void report_unrepresentable_groups();
 
     // Explain what cannot match (plan_explain.cpp).
     [[nodiscard]] std::optional<std::string> requirement(std::size_t g, std::size_t j) const;

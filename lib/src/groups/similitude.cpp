@@ -72,6 +72,7 @@ similitude_plan planner::run() {
 
     for (std::size_t g = 0; g < count; ++g)
         plan_.groups.push_back(judge(g));
+    report_unrepresentable_groups();
     for (std::size_t j = 0; j < model_.size(); ++j) {
         const model_state& m = model_[j];
         model_variable mv;
@@ -90,6 +91,10 @@ similitude_plan planner::run() {
             break;
         case origin::solved:
             mv.how = "from " + labels(m.fixed_by) + (m.fixed_by.size() > 1 ? " together" : "");
+            break;
+        case origin::no_value:
+            mv.how = "no model value: " + labels(m.fixed_by) +
+                     (m.fixed_by.size() > 1 ? " give" : " gives") + " none that is real and finite";
             break;
         case origin::unknown:
             mv.how = choice_.others_may_fix ? "free: no group fixes it"

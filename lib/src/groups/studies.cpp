@@ -203,6 +203,7 @@ class study_worker {
             request.match = r.match;
             request.tolerance = r.tolerance;
             request.units = r.units;
+            request.kinematic_viscosity_unit = declared_kinematic_viscosity_unit();
             r.plan = plan_model(request);
             for (const auto& problem : r.plan->problems)
                 report(out_, rules::study_problem, problem, r.where);
@@ -210,6 +211,19 @@ class study_worker {
     }
 
   private:
+    // The unit of a declared ν (or nu) with the dimension of a kinematic viscosity, if any.
+    shown_unit declared_kinematic_viscosity_unit() {
+        const dimension nu =
+            dimension::base(base_dimension::length).pow(2) / dimension::base(base_dimension::time);
+        for (const std::string_view name : {std::string_view("ν"), std::string_view("nu")}) {
+            const symbol_entry* entry = symbols_.find(name);
+            if (entry != nullptr && entry->dim && *entry->dim == nu && !entry->unit_text.empty() &&
+                entry->offset_unit == nullptr)
+                return {std::string(entry->unit_text), entry->si_factor, 0.0};
+        }
+        return {};
+    }
+
     const syntax::parsed_file& file_;
     symbol_table& symbols_;
     std::vector<diagnostic>& out_;
