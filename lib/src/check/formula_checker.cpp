@@ -5,6 +5,7 @@
 #include "check/edit_distance.hpp"
 #include "check/functions.hpp"
 #include "check/scale_match.hpp"
+#include "check/trade_constants.hpp"
 #include "plumb/rules.hpp"
 #include "units/exact_factor.hpp"
 
@@ -497,7 +498,7 @@ class checker {
         if (!t.zero) {
             const double v =
                 t.value ? t.value->to_double() : std::strtod(std::string(written).c_str(), nullptr);
-            literals_.push_back(read_literal(written, v, index));
+            literals_.push_back(read_literal(written, v, index, t.value));
         }
         return t;
     }
@@ -627,8 +628,8 @@ class checker {
             // A sum of numbers is one number: physics or a conversion as a whole.
             literals_.resize(literal_base);
             if (result.value && !result.value->is_zero())
-                literals_.push_back(
-                    read_literal(text(file_.nodes[index].range), result.value->to_double(), index));
+                literals_.push_back(read_literal(text(file_.nodes[index].range),
+                                                 result.value->to_double(), index, result.value));
             return result;
         }
         if (offset_term != nullptr)
@@ -966,10 +967,12 @@ class checker {
 
     // A side or term's units and numbers, for reconcile().
     scaled_operand scaled(const typed& t, bool as_number) const {
+        static const rational one(1);
         if (as_number)
-            return {1.0, {}};
-        return {t.scale, std::span<const scale_literal>(literals_.data() + t.literal_begin,
-                                                        t.literal_count)};
+            return {1.0, &one, {}};
+        return {
+            t.scale, t.exact_scale ? &*t.exact_scale : nullptr,
+            std::span<const scale_literal>(literals_.data() + t.literal_begin, t.literal_count)};
     }
 
     // Terms of one dimension in different units give numbers off by a factor, unless numbers
@@ -1064,17 +1067,23 @@ class checker {
                 report_inverted_factor(ops[index[i]], parts[i].literals[k]);
                 return false;
             }
+        if (parts.size() <= max_operands_for_flips && accept_trade_constant(parts, unit))
+            return true;
         const operand& op = ops[index[r.odd]];
         const operand& reference = ops[index[r.reference]];
         // What the numbers as written give: the conversion-like ones taken as conversions.
         const double ratio = apparent_scale(parts[r.reference]) / apparent_scale(parts[r.odd]);
+        const std::optional<rational> exact_ratio = exact_product(
+            apparent_exact_scale(parts[r.reference]), apparent_exact_scale(parts[r.odd]), true);
+        const std::optional<rational> exact_inverse = exact_product(rational(1), exact_ratio, true);
         // A warning: in a unit-aware calc the units convert themselves; where numbers are
         // put in as declared (spreadsheets, code), the result is off by the ratio.
         diagnostic& d =
             report(rules::unit_scale,
                    fmt::format("as written, {} counts {} times as much as {}: the {} agree in "
                                "dimension but not in unit",
-                               quote(op.node), format_factor(ratio), quote(reference.node), what),
+                               quote(op.node), format_factor(exact_ratio, ratio),
+                               quote(reference.node), what),
                    file_.nodes[op.node].range);
         d.level = severity::warning;
         add_term(d, op);
@@ -1087,11 +1096,56 @@ class checker {
         d.notes.push_back(
             {ratio < 1 ? fmt::format("multiply {} by {} (declare the symbols in coherent units, or "
                                      "write the conversion factor into the formula)",
-                                     quote(op.node), format_factor(1.0 / ratio))
+                                     quote(op.node), format_factor(exact_inverse, 1.0 / ratio))
                        : fmt::format("divide {} by {} (declare the symbols in coherent units, or "
                                      "write the conversion factor into the formula)",
-                                     quote(op.node), format_factor(ratio)),
+                                     quote(op.node), format_factor(exact_ratio, ratio)),
              {}});
+        return false;
+    }
+
+    // "W = 8.34*Q*C" (lb/d from mgd and mg/L): not the conversion, 8.3454, but water's weight
+    // per gallon, which the trade writes there. Accepted where the number is a published value
+    // of the property and the exact conversion would reconcile the units; a note says so.
+    bool accept_trade_constant(std::span<const scaled_operand> parts, double& unit) {
+        for (std::size_t i = 0; i < parts.size(); ++i)
+            for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
+                const scale_literal& l = parts[i].literals[k];
+                const std::optional<rational> printed = printed_power(l, 1.0);
+                if (!printed || !l.factor_like)
+                    continue;
+                for (const trade_constant& c : trade_constants()) {
+                    if (*printed < c.least || c.greatest < *printed)
+                        continue;
+                    std::vector<scale_literal> literals(parts[i].literals.begin(),
+                                                        parts[i].literals.end());
+                    literals[k].low = c.exact_conversion;
+                    literals[k].high = c.exact_conversion;
+                    literals[k].value = c.exact_conversion.to_double();
+                    literals[k].tolerance = 0.0;
+                    std::vector<scaled_operand> changed(parts.begin(), parts.end());
+                    changed[i].literals = literals;
+                    const reconciliation r = reconcile(changed);
+                    if (!r.agree)
+                        continue;
+                    unit = r.unit;
+                    diagnostic& d = report(
+                        rules::trade_constant,
+                        fmt::format("{} is read as {}, not as a unit conversion: the units "
+                                    "need {}, {}",
+                                    text(file_.nodes[l.node].range), c.name,
+                                    format_factor(std::nullopt, c.exact_conversion.to_double()),
+                                    c.conversion),
+                        file_.nodes[l.node].range);
+                    d.level = severity::note;
+                    d.notes.push_back(
+                        {fmt::format("water weighs {}; source: {}", c.range_text, c.source), {}});
+                    d.notes.push_back({"the result holds for water; for another liquid write "
+                                       "its own density",
+                                       {}});
+                    return true;
+                }
+            }
         return false;
     }
 
@@ -1108,7 +1162,7 @@ class checker {
                     fmt::format("the factor {} is not needed: the units of {} already agree, so "
                                 "as written it is {} times its true value",
                                 text(file_.nodes[l.node].range), quote(ops[index[i]].node),
-                                format_factor(factor)),
+                                format_factor(printed_power(l, l.exponent), factor)),
                     file_.nodes[l.node].range);
                 add_term(d, ops[index[i]]);
                 const std::string units = units_in(ops[index[i]].node);
@@ -1138,9 +1192,10 @@ class checker {
         const std::string units = units_in(op.node);
         if (!units.empty())
             d.notes.push_back({units, {}});
-        d.notes.push_back({fmt::format("as written the result is {} times its true value",
-                                       format_factor(factor * factor)),
-                           {}});
+        d.notes.push_back(
+            {fmt::format("as written the result is {} times its true value",
+                         format_factor(printed_power(l, 2 * l.exponent), factor * factor)),
+             {}});
     }
 
     // "T_K = T_C": readings on scales with different zeros set equal or compared.
