@@ -261,8 +261,33 @@ TEST_CASE("readings on scales with different zeros") {
         "p_a, p_atm, p_a2 : bar\np_g : barg\nΔp : bar\np_s : psig\np_sa : psia\n";
     SUBCASE("absolute set equal to gauge; a bar reading minus a barg one") {
         REQUIRE(findings(check(pressures, "p_a = p_g"), plumb::rules::offset_scale).size() == 1);
-        REQUIRE(findings(check(pressures, "p_a2 = p_a - p_g"), plumb::rules::offset_scale).size() ==
-                1);
+        // As a difference, or inside a product, absolute less gauge is off by the atmosphere.
+        const auto difference = check(pressures, "Δp = p_a - p_g");
+        REQUIRE(findings(difference, plumb::rules::offset_scale).size() == 1);
+        CHECK(mentions(*findings(difference, plumb::rules::offset_scale)[0], "is a difference"));
+        CHECK(findings(check(pressures + "F : N\nA : m^2\n", "F = (p_a - p_g)*A"),
+                       plumb::rules::offset_scale)
+                  .size() == 1);
+    }
+    SUBCASE("absolute less gauge is the atmosphere; absolute less the atmosphere is gauge") {
+        // A gauge reads absolute pressure less the atmosphere's: p_g = p_abs - p_atm, so
+        // p_atm = p_abs - p_g (common practice; 1 atm = 101325 Pa, NIST SP 811 (2008), B.8).
+        CHECK(clean(check(pressures, "p_atm = p_a - p_g")));
+        CHECK(clean(check(pressures, "p_atm = (p_a - p_g)")));
+        CHECK(clean(check(pressures, "p_g = p_a - p_atm")));
+        CHECK(clean(check(pressures + "p_o : psia\n", "p_s = p_sa - p_o")));
+        // The wrong neighbours: gauge set equal to absolute, the subtraction reversed (minus
+        // the atmosphere), and absolute less gauge set equal to a gauge reading.
+        CHECK(findings(check(pressures, "p_a = p_g"), plumb::rules::offset_scale).size() == 1);
+        const auto reversed = check(pressures, "p_atm = p_g - p_a");
+        REQUIRE(findings(reversed, plumb::rules::offset_scale).size() == 1);
+        CHECK(mentions(*findings(reversed, plumb::rules::offset_scale)[0], "its negative"));
+        CHECK(findings(check(pressures + "p_g2 : barg\n", "p_g = p_a - p_g2"),
+                       plumb::rules::offset_scale)
+                  .size() == 1);
+        // The same origin arithmetic for temperatures: K less °C is the ice point, 273.15 K.
+        CHECK(clean(check(temps, "T_K2 = T_K - T_C")));
+        CHECK(findings(check(temps, "ΔT = T_K - T_C"), plumb::rules::offset_scale).size() == 1);
     }
     SUBCASE("gauge + atmosphere, in any declared absolute pressure or the rounded number") {
         // 1 atm = 101.325 kPa = 1.01325 bar = 14.696 psi (NIST SP 811 (2008), B.8).

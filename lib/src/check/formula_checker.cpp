@@ -44,6 +44,12 @@ struct typed {
     // "(T - 20)": a reading less a number that is not a scale's zero. Beside other readings
     // it is a reading; as a factor it is the difference from a reference reading.
     bool reading_or_difference = false;
+    // "p_abs - p_g": an absolute reading less a reading on an offset scale is that scale's
+    // zero, the atmosphere, as a reading on the absolute scale. Names the offset scale.
+    const unit_definition* zero_of = nullptr;
+    // "p_abs - p_atm": the difference of two absolute pressures, which a gauge reads when the
+    // one subtracted is the atmosphere.
+    bool absolute_pressure_difference = false;
     bool inferred = false; // unknown because a `?` coefficient stands in it, not an error
     // The numbers along its multiplicative path, on the checker's literal stack.
     std::uint32_t literal_begin = 0;
@@ -633,7 +639,7 @@ class checker {
             return result;
         }
         if (offset_term != nullptr)
-            return finish_offset_sum(terms, result, literal_base);
+            return finish_offset_sum(terms, result, literal_base, index);
         // After a unit-scale finding the scale is unknown (NaN), so it is not reported again
         // further up; the dimension stays known.
         double unit = 1.0;
@@ -744,8 +750,8 @@ class checker {
     // The scale and zero of a sum with a value on an offset scale. Values on one scale subtract
     // to an ordinary difference; a shift by the scale's zero converts it; an absolute pressure
     // added to a gauge one (+ p_atm) gives an absolute pressure.
-    typed finish_offset_sum(std::span<const operand> terms, typed result,
-                            std::size_t literal_base) {
+    typed finish_offset_sum(std::span<const operand> terms, typed result, std::size_t literal_base,
+                            std::uint32_t index) {
         // The terms with units (not the numbers that shift the zero).
         std::size_t unit_terms = 0;
         std::size_t only = 0;
@@ -891,10 +897,26 @@ class checker {
         const double slack = tolerance + 1e-9 * std::abs(final_origin) + 1e-9;
         if (points == 0) {
             if (std::abs(final_origin) > slack) {
+                const unit_definition* zero =
+                    has_shift || !is_whole_side(index)
+                        ? nullptr
+                        : subtracted_scale_zero(terms, final_origin, slack);
+                if (zero != nullptr) {
+                    result.point = true;
+                    result.origin = 0.0;
+                    result.origin_tolerance = tolerance;
+                    result.zero_of = zero;
+                    return result;
+                }
                 report_mixed_scales(terms, final_origin);
                 literals_.resize(literal_base);
                 return unknown_type();
             }
+            result.absolute_pressure_difference =
+                !has_shift && result.dim == pressure_dimension() &&
+                std::all_of(terms.begin(), terms.end(), [](const operand& t) {
+                    return !t.type.known || !t.type.point || t.type.offset == nullptr;
+                });
             return result; // an ordinary difference
         }
         result.point = true;
@@ -911,6 +933,45 @@ class checker {
                             ? scale_named(final_origin, slack, result.dim, terms)
                             : nullptr;
         return result;
+    }
+
+    // Whether the node is one whole side of a formula of two or more sides (in parentheses or
+    // not): there alone "p_abs - p_g" can stand for the atmosphere, set equal to a reading of
+    // it. Inside a product or a sum it is a slip (a bar value less a barg one).
+    bool is_whole_side(std::uint32_t node) const {
+        if (current_ == nullptr || current_->side_count < 2)
+            return false;
+        for (std::uint32_t i = 0; i < current_->side_count; ++i) {
+            std::uint32_t root = file_.sides[current_->first_side + i].root;
+            while (file_.nodes[root].kind == expr_kind::group)
+                root = file_.nodes[root].lhs;
+            if (root == node)
+                return true;
+        }
+        return false;
+    }
+
+    // "p_abs - p_g": one absolute reading less one reading on an offset scale leaves that
+    // scale's zero (the atmosphere for a gauge): the offset unit, or null when the terms are
+    // anything else.
+    const unit_definition* subtracted_scale_zero(std::span<const operand> terms,
+                                                 double final_origin, double slack) const {
+        const operand* added = nullptr;
+        const operand* subtracted = nullptr;
+        for (const auto& t : terms) {
+            if (!t.type.known || !t.type.point)
+                continue;
+            const operand*& slot = t.subtracted ? subtracted : added;
+            if (slot != nullptr)
+                return nullptr;
+            slot = &t;
+        }
+        if (added == nullptr || subtracted == nullptr || added->type.offset != nullptr ||
+            added->type.origin != 0.0 || subtracted->type.offset == nullptr)
+            return nullptr;
+        if (std::abs(subtracted->type.origin + final_origin) > slack)
+            return nullptr;
+        return subtracted->type.offset;
     }
 
     // "T_C - T_K", "p_bar - p_barg": readings on two scales with different zeros.
@@ -946,6 +1007,13 @@ class checker {
             {fmt::format("as written the result is off by {} {}",
                          format_factor(std::abs(difference)), temperature ? "K" : "Pa"),
              {}});
+        if (other != nullptr && !on_offset->subtracted && other->subtracted &&
+            other->type.offset == nullptr)
+            d.notes.push_back(
+                {fmt::format("{} less {} would be the {} scale's zero as an absolute reading; "
+                             "this way round it is its negative",
+                             quote(other->node), quote(on_offset->node), unit.symbol),
+                 {}});
         d.notes.push_back(
             {temperature
                  ? fmt::format("convert first: a {} reading plus {:g} is in K", unit.symbol,
@@ -1200,6 +1268,8 @@ class checker {
 
     // "T_K = T_C": readings on scales with different zeros set equal or compared.
     void check_origins(std::span<const operand> sides, bool equation) {
+        if (report_scale_zero_beside_difference(sides))
+            return;
         if (std::all_of(sides.begin(), sides.end(),
                         [](const operand& side) { return side.type.origin == 0.0; }))
             return;
@@ -1216,6 +1286,13 @@ class checker {
                                  1e-9 * (std::abs(side.type.origin) + 1.0);
             const double difference = side.type.origin - reference->type.origin;
             if (std::abs(difference) <= slack)
+                continue;
+            // "p_g = p_abs - p_atm": a gauge reads the difference from the atmosphere.
+            const auto on_gauge = [](const operand& o) {
+                return o.type.offset != nullptr && o.type.offset->scale == unit_scale::gauge;
+            };
+            if ((side.type.absolute_pressure_difference && on_gauge(*reference)) ||
+                (reference->type.absolute_pressure_difference && on_gauge(side)))
                 continue;
             const operand& off = side.type.offset != nullptr ? side : *reference;
             const operand& other = &off == &side ? *reference : side;
@@ -1253,6 +1330,42 @@ class checker {
                      {}});
             return;
         }
+    }
+
+    // "dp = p_abs - p_g": the right side is the atmosphere, a reading, not a difference.
+    bool report_scale_zero_beside_difference(std::span<const operand> sides) {
+        for (const auto& zero : sides) {
+            if (!zero.type.known || zero.type.zero_of == nullptr)
+                continue;
+            for (const auto& other : sides) {
+                if (&other == &zero || !other.type.known || other.type.zero || other.type.numeric ||
+                    other.type.point)
+                    continue;
+                const unit_definition& scale = *zero.type.zero_of;
+                diagnostic& d =
+                    report(rules::offset_scale,
+                           fmt::format("{} is the zero of the {} scale ({} {}) as a reading on the "
+                                       "absolute scale, but {} is a difference",
+                                       quote(zero.node), scale.symbol, format_factor(scale.offset),
+                                       zero.type.dim == temperature_dimension() ? "K" : "Pa",
+                                       quote(other.node)),
+                           file_.nodes[zero.node].range);
+                add_term(d, zero);
+                add_term(d, other);
+                d.notes.push_back(
+                    {scale.scale == unit_scale::gauge
+                         ? std::string("an absolute pressure less a gauge reading of it is the "
+                                       "atmospheric pressure; a gauge reading is the absolute "
+                                       "pressure less the atmosphere's (p_abs - p_atm)")
+                         : fmt::format("a kelvin reading less a {} reading of it is the {} "
+                                       "scale's zero; a difference needs two readings on one "
+                                       "scale",
+                                       scale.symbol, scale.symbol),
+                     {}});
+                return true;
+            }
+        }
+        return false;
     }
 
     // "'D' is in mm, 'Q' in L/s": the symbols under a node declared in non-coherent units.
