@@ -361,3 +361,73 @@ TEST_CASE("sheets: shared formulas in an .xlsx are expanded to every cell of the
     REQUIRE(d4 != nullptr);
     CHECK(d4->text == "=B4*C4");
 }
+
+namespace {
+
+// A one-sheet .ods built in memory: each row's entries are a number ("250"), a formula in
+// OpenFormula ("of:=[.B2]/[.B1]") or a text ("mm"); "" leaves the cell empty.
+std::string ods_of_rows(const std::vector<std::vector<std::string>>& rows) {
+    std::string xml = "<?xml version=\"1.0\"?><office:document-content><office:body>"
+                      "<office:spreadsheet><table:table table:name=\"Calc\">";
+    for (const auto& row : rows) {
+        xml += "<table:table-row>";
+        for (const auto& entry : row) {
+            if (entry.empty())
+                xml += "<table:table-cell/>";
+            else if (entry.rfind("of:=", 0) == 0)
+                xml += "<table:table-cell table:formula=\"" + entry +
+                       "\" office:value-type=\"float\" office:value=\"0\"/>";
+            else if (entry.find_first_not_of("0123456789.") == std::string::npos)
+                xml += "<table:table-cell office:value-type=\"float\" office:value=\"" + entry +
+                       "\"/>";
+            else
+                xml += "<table:table-cell office:value-type=\"string\"><text:p>" + entry +
+                       "</text:p></table:table-cell>";
+        }
+        xml += "</table:table-row>";
+    }
+    xml += "</table:table></office:spreadsheet></office:body></office:document-content>";
+    return ods_with_content(xml);
+}
+
+check_report check_ods_rows(const std::vector<std::vector<std::string>>& rows,
+                            const std::string& folder) {
+    const auto dir = std::filesystem::temp_directory_path() / folder;
+    std::filesystem::create_directories(dir);
+    {
+        std::ofstream out(dir / "calc.ods", std::ios::binary);
+        out << ods_of_rows(rows);
+    }
+    return check_paths({dir / "calc.ods"});
+}
+
+} // namespace
+
+TEST_CASE("sheets: a factor written into a formula agrees by the notation's exact rule") {
+    // 1 kg = 1/0.45359237 lb = 2.2046226 lb (NIST SP 811 (2008), B.8). 2.205 is that factor
+    // rounded (within 2.205 ± 0.0005); 2.204 is cut short, 0.00062 away: more than half a unit
+    // in its last digit, so it is not the factor (a relative 1e-3 would have taken it).
+    const check_report r = check_ods_rows(
+        {
+            {"mass", "12", "kg"},
+            {"rounded", "of:=[.B1]*2.205", "lb"},
+            {"cut short", "of:=[.B1]*2.204", "lb"},
+            {"inverted", "of:=[.B1]/2.205", "lb"},
+            {"exact", "of:=[.B1]/0.45359237", "lb"},
+        },
+        "plumb-sheet-factor-rule");
+    INFO(render_text(r));
+    CHECK(finding_at(r, "Calc!B2", rules::unit_scale) == nullptr);
+    const diagnostic* cut = finding_at(r, "Calc!B3", rules::unit_scale);
+    REQUIRE(cut != nullptr);
+    CHECK(cut->message.find("the factor 2.204 is near the conversion to lb but is not it") !=
+          std::string::npos);
+    CHECK(cut->message.find("reads 2.205") != std::string::npos);
+    const diagnostic* inverted = finding_at(r, "Calc!B4", rules::unit_scale);
+    REQUIRE(inverted != nullptr);
+    CHECK(inverted->message.find("wrong way round") != std::string::npos);
+    CHECK(finding_at(r, "Calc!B5", rules::unit_scale) == nullptr);
+    // Factors are printed as engineers read them, never in e-notation.
+    for (const auto& d : r.diagnostics)
+        CHECK(d.message.find("e+") == std::string::npos);
+}

@@ -370,7 +370,7 @@ class checker {
         const typed t = eval(file_.sides[f.first_side].root);
         if (!t.known)
             return std::nullopt;
-        return value_type{t.dim, t.scale, t.offset, t.zero};
+        return value_type{t.dim, t.scale, t.offset, t.zero, t.exact_scale};
     }
 
   private:
@@ -1812,7 +1812,7 @@ class checker {
         typed t;
         t.dim = *r.dim;
         t.scale = r.scale;
-        t.exact_scale.reset();
+        t.exact_scale = r.exact_scale;
         t.offset = r.offset;
         t.value = r.value;
         // A cell holds a reading, as a declared temperature or pressure does; a cell has no

@@ -4,10 +4,13 @@
 #include "sheets/workbook_checker.hpp"
 
 #include "check/formula_checker.hpp"
+#include "check/scale_match.hpp"
 #include "plumb/rules.hpp"
 #include "sheets/a1_front_end.hpp"
+#include "units/exact_factor.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 #include <fmt/format.h>
 #include <map>
@@ -33,6 +36,7 @@ struct cell_unit {
 struct cell_value {
     std::optional<dimension> dim; // empty: unknown, not checked
     double scale = 1.0;
+    std::optional<rational> exact_scale; // the same exactly, where its unit is exact
     const unit_definition* offset = nullptr;
     std::optional<rational> value;
     const cell_unit* unit = nullptr; // the unit written for it; null when computed
@@ -331,6 +335,7 @@ class workbook_checker {
         cell_value v;
         v.dim = u.unit.dim;
         v.scale = u.unit.scale;
+        v.exact_scale = u.unit.exact_scale;
         v.offset = u.unit.offset;
         v.unit = &u;
         return v;
@@ -439,6 +444,7 @@ class workbook_checker {
             syntax::reference_value& target = lowered_.tree.references[r.reference];
             target.dim = v.dim;
             target.scale = v.scale;
+            target.exact_scale = v.exact_scale;
             target.offset = v.offset;
             target.value = v.value;
         }
@@ -464,6 +470,7 @@ class workbook_checker {
         if (!written) {
             f.result.dim = computed->dim;
             f.result.scale = computed->scale;
+            f.result.exact_scale = computed->exact_scale;
             f.result.offset = computed->offset;
             return;
         }
@@ -522,10 +529,10 @@ class workbook_checker {
         return it == range_cache_.end() ? cell_value{} : it->second;
     }
 
-    // The numbers multiplied into the formula's result, each raised to the power it enters
-    // with (a divisor to -1, (B4/1000)^2 to -2): the outermost product only, where a
-    // conversion factor written into a formula stands.
-    void top_factors(std::uint32_t node, double exponent, std::vector<double>& out) const {
+    // The numbers multiplied into the formula's result, each with the power it enters with (a
+    // divisor -1, (B4/1000)^2 -2): the outermost product only, where a conversion factor
+    // written into a formula stands. Each keeps the interval its printed digits stand for.
+    void top_factors(std::uint32_t node, double exponent, std::vector<scale_literal>& out) const {
         const auto& n = lowered_.tree.nodes[node];
         switch (n.kind) {
         case syntax::expr_kind::group:
@@ -543,9 +550,13 @@ class workbook_checker {
                     top_factors(n.lhs, exponent * e->to_double(), out);
             return;
         case syntax::expr_kind::number: {
-            const auto v = rational::parse(listing_->text(n.range));
-            if (v && !v->is_zero() && out.size() < 32)
-                out.push_back(std::pow(v->to_double(), exponent));
+            const std::string_view text = listing_->text(n.range);
+            const auto v = rational::parse(text);
+            if (v && !v->is_zero() && out.size() < 32) {
+                scale_literal l = read_literal(text, v->to_double(), node, v);
+                l.exponent = exponent;
+                out.push_back(l);
+            }
             return;
         }
         default:
@@ -611,54 +622,96 @@ class workbook_checker {
             return;
         }
         const double needed = computed.scale / written.unit.scale;
-        if (!std::isfinite(needed) || std::abs(needed - 1.0) <= 1e-9)
+        if (!std::isfinite(needed))
             return;
-        std::vector<double> factors;
+        std::vector<scale_literal> factors;
         top_factors(lowered_.tree.sides[formula.first_side].root, 1.0, factors);
-        // Published factors are often rounded to four significant figures (3.281, 0.0283):
-        // common practice; a relative 1e-3 accepts those and nothing a unit slip gives.
-        const auto near = [](double a, double b) { return std::abs(a / b - 1.0) <= 1e-3; };
-        const auto supplies = [&](double r) {
-            for (std::size_t i = 0; i < factors.size(); ++i) {
-                if (near(factors[i], r))
-                    return true;
-                for (std::size_t j = i + 1; j < factors.size(); ++j)
-                    if (near(factors[i] * factors[j], r))
-                        return true;
-            }
-            return false;
-        };
-        if (supplies(needed))
+        // The numbers written into the formula reconcile its units with the cell's when some of
+        // them, each anywhere within half a unit of its last printed digit (3.281 for 3.28084),
+        // make up the ratio exactly: the rule of the notation's checker.
+        const std::array<scaled_operand, 2> parts{
+            scaled_operand{computed.scale, computed.exact_scale ? &*computed.exact_scale : nullptr,
+                           factors},
+            scaled_operand{written.unit.scale,
+                           written.unit.exact_scale ? &*written.unit.exact_scale : nullptr,
+                           {}}};
+        if (reconcile(parts).agree)
             return;
-        const bool reversed = supplies(1.0 / needed);
+        bool reversed = false;
+        for (std::size_t k = 0; k < factors.size() && k < 10 && !reversed; ++k)
+            reversed = reconcile(parts, {0, k}).agree;
+        if (!reversed && report_near_factor(f, factors, computed, written, needed))
+            return;
         // How far off the value shown is: after the factors already written, when what is
         // left is a clean power of ten (a missed "/1000"); otherwise the whole ratio.
         double written_product = 1.0;
-        for (const double x : factors)
-            written_product *= x;
+        for (const auto& x : factors)
+            written_product *= std::pow(x.value, x.exponent);
         const double left = needed / written_product;
         const double decades = std::log10(std::abs(left));
         const double off =
             std::abs(decades - std::round(decades)) < 1e-9 && std::round(decades) != 0 ? left
                                                                                        : needed;
+        const std::optional<rational> exact_needed =
+            exact_product(computed.exact_scale, written.unit.exact_scale, true);
+        const std::optional<rational> exact_inverse =
+            exact_product(rational(1), exact_needed, true);
+        const bool whole_ratio = off == needed;
+        const std::string off_text =
+            off >= 1 ? format_factor(whole_ratio ? exact_needed : std::nullopt, off)
+                     : format_factor(whole_ratio ? exact_inverse : std::nullopt, 1.0 / off);
         diagnostic& d = report(
             severity::error, rules::unit_scale,
-            reversed
-                ? fmt::format("the conversion factor in this formula is the wrong way round: "
-                              "to give {} it must multiply by {:.6g}, but it multiplies by "
-                              "{:.6g}",
-                              written.unit.text, needed, 1.0 / needed)
-                : fmt::format("as written, this formula does not give {}, the unit written "
-                              "for its cell: the value shown is {:.6g} times too {}",
-                              where_unit, off >= 1 ? off : 1.0 / off, off >= 1 ? "small" : "large"),
+            reversed ? fmt::format("the conversion factor in this formula is the wrong way round: "
+                                   "to give {} it must multiply by {}, but it multiplies by {}",
+                                   written.unit.text, format_factor(exact_needed, needed),
+                                   format_factor(exact_inverse, 1.0 / needed))
+                     : fmt::format("as written, this formula does not give {}, the unit written "
+                                   "for its cell: the value shown is {} times too {}",
+                                   where_unit, off_text, off >= 1 ? "small" : "large"),
             formula.range);
         if (!reversed)
-            d.notes.push_back({fmt::format("its inputs give numbers in units of {:.6g} {}; "
+            d.notes.push_back({fmt::format("its inputs give numbers in units of {} {}; "
                                            "convert them in the formula, or write the unit they "
                                            "give",
-                                           needed, written.unit.text),
+                                           format_factor(exact_needed, needed), written.unit.text),
                                {}});
         add_input_notes(d, f);
+    }
+
+    // "=B1*2.204" for kg to lb (2.20462): a number within 1 % of the conversion the units need,
+    // but not that conversion rounded. Says which factor, and what it should read.
+    bool report_near_factor(const formula_cell& f, std::span<const scale_literal> factors,
+                            const value_type& computed, const cell_unit& written, double needed) {
+        for (const scale_literal& l : factors) {
+            if (std::abs(l.exponent) != 1.0)
+                continue;
+            const double wanted = l.exponent > 0 ? needed : 1.0 / needed;
+            if (std::abs(l.value / wanted - 1.0) > 0.01)
+                continue;
+            const std::string_view text = listing_->text(lowered_.tree.nodes[l.node].range);
+            const std::size_t point = text.find('.');
+            const int decimals =
+                point == std::string_view::npos ? 0 : static_cast<int>(text.size() - point - 1);
+            const std::optional<rational> exact_needed =
+                exact_product(computed.exact_scale, written.unit.exact_scale, true);
+            const std::optional<rational> exact_wanted =
+                l.exponent > 0 ? exact_needed : exact_product(rational(1), exact_needed, true);
+            diagnostic& d = report(
+                severity::error, rules::unit_scale,
+                fmt::format("the factor {} is near the conversion to {} but is not it: the units "
+                            "need {} ({:.6g}), which to {} decimal{} reads {:.{}f}",
+                            text, written.unit.text, format_factor(exact_wanted, wanted), wanted,
+                            decimals, decimals == 1 ? "" : "s", wanted, decimals),
+                lowered_.tree.nodes[l.node].range);
+            d.notes.push_back({fmt::format("as written the value shown is off by a factor of "
+                                           "{:.6g}",
+                                           wanted / l.value),
+                               {}});
+            add_input_notes(d, f);
+            return true;
+        }
+        return false;
     }
 
     void add_input_notes(diagnostic& d, const formula_cell& f) {

@@ -122,6 +122,7 @@ declared_unit unit_of(const syntax::declared_kind& kind, std::string text, std::
     declared_unit u;
     u.unit.dim = *kind.dim;
     u.unit.scale = kind.si_factor;
+    u.unit.exact_scale = kind.si_exact;
     if (kind.single_unit != nullptr && kind.single_unit->scale != unit_scale::absolute)
         u.unit.offset = kind.single_unit;
     u.unit.text = std::move(text);
