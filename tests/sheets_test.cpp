@@ -431,3 +431,41 @@ TEST_CASE("sheets: a factor written into a formula agrees by the notation's exac
     for (const auto& d : r.diagnostics)
         CHECK(d.message.find("e+") == std::string::npos);
 }
+
+TEST_CASE("sheets: an input without a unit is told the dimension and scale its uses require") {
+    // Relative roughness ε/D is dimensionless (Moody chart, common practice), so with D in mm
+    // ε must be a length in mm; distance = speed × time (a time in s beside m/s); x + D needs x
+    // as a length, √x = length needs x as an area: those two uses disagree.
+    const check_report r = check_ods_rows(
+        {
+            {"D", "250", "mm"},
+            {"eps", "0.05", ""},
+            {"eps/D", "of:=[.B2]/[.B1]", "-"},
+            {"t", "12", ""},
+            {"distance", "of:=[.B4]*[.B6]", "m"},
+            {"speed", "2", "m/s"},
+            {"x", "3", ""},
+            {"x+D", "of:=[.B7]+[.B1]", "mm"},
+            {"root x", "of:=SQRT([.B7])", "m"},
+        },
+        "plumb-input-requirement");
+    INFO(render_text(r));
+    CHECK(r.inputs_without_units == 3);
+    const diagnostic* eps = finding_at(r, "Calc!B2", rules::no_unit);
+    REQUIRE(eps != nullptr);
+    CHECK(eps->message.find("used as a length [L] in Calc!B3") != std::string::npos);
+    CHECK(std::any_of(eps->notes.begin(), eps->notes.end(), [](const note& n) {
+        return n.message.find("must be in mm, as B1 is") != std::string::npos;
+    }));
+    const diagnostic* t = finding_at(r, "Calc!B4", rules::no_unit);
+    REQUIRE(t != nullptr);
+    CHECK(t->message.find("used as a time [T] in Calc!B5") != std::string::npos);
+    CHECK(std::any_of(t->notes.begin(), t->notes.end(), [](const note& n) {
+        return n.message.find("coherent SI units") != std::string::npos;
+    }));
+    const diagnostic* x = finding_at(r, "Calc!B7", rules::no_unit);
+    REQUIRE(x != nullptr);
+    CHECK(x->message.find("its uses disagree") != std::string::npos);
+    CHECK(x->message.find("a length [L] in Calc!B8") != std::string::npos);
+    CHECK(x->message.find("an area [L^2] in Calc!B9") != std::string::npos);
+}

@@ -7,6 +7,7 @@
 #include "check/scale_match.hpp"
 #include "plumb/rules.hpp"
 #include "sheets/a1_front_end.hpp"
+#include "sheets/input_requirement.hpp"
 #include "units/exact_factor.hpp"
 
 #include <algorithm>
@@ -24,6 +25,17 @@ std::string describe(const dimension& d) {
         return "[1] (dimensionless)";
     const std::string_view name = quantity_name(d);
     return name.empty() ? d.to_string() : fmt::format("{} ({})", d.to_string(), name);
+}
+
+// "a length [L]", "a dimensionless number [1]": what a value must be, in words.
+std::string kind_of(const dimension& d) {
+    if (d.is_dimensionless())
+        return "a dimensionless number [1]";
+    const std::string_view name = quantity_name(d);
+    if (name.empty())
+        return d.to_string();
+    const bool vowel = std::string_view("aeiou").find(name.front()) != std::string_view::npos;
+    return fmt::format("{} {} {}", vowel ? "an" : "a", name, d.to_string());
 }
 
 // A cell's unit and where it came from, or none.
@@ -733,6 +745,102 @@ class workbook_checker {
 
     // ---- Inputs without units -------------------------------------------------------------
 
+    // What each formula that uses the input requires of it, solved from its uses.
+    struct use_requirement {
+        std::uint32_t user;
+        input_requirement need;
+    };
+
+    std::vector<use_requirement> requirements_for(std::uint64_t key,
+                                                  const std::vector<std::uint32_t>& users) {
+        const std::size_t s = static_cast<std::size_t>(key >> 45);
+        const cell_address a{static_cast<std::uint32_t>((key >> 20) & 0x1FFFFFFULL),
+                             static_cast<std::uint32_t>(key & 0xFFFFF)};
+        std::vector<use_requirement> out;
+        std::vector<input_role> roles;
+        for (const std::uint32_t id : users) {
+            const formula_cell& f = formulas_[id];
+            if (f.lowered.formula == syntax::no_index)
+                continue;
+            roles.assign(lowered_.tree.references.size(), input_role::other);
+            for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i) {
+                const lowered_reference& r = lowered_.references[f.lowered.first_reference + i];
+                if (r.sheet != s || !r.area.contains(a))
+                    continue;
+                roles[r.reference] =
+                    r.area.single() ? input_role::the_input : input_role::range_with_it;
+            }
+            std::optional<syntax::reference_value> result;
+            if (const cell_unit* u = unit_of(f.sheet, f.source->at))
+                result = syntax::reference_value{
+                    u->unit.dim, u->unit.scale, u->unit.exact_scale, u->unit.offset, {}};
+            const syntax::formula& formula = lowered_.tree.formulas[f.lowered.formula];
+            for (const auto& need : requirements_of_input(
+                     lowered_.tree, lowered_.tree.sides[formula.first_side].root, roles, result))
+                out.push_back({id, need});
+        }
+        return out;
+    }
+
+    // The unit of a cell a user formula refers to that has this dimension and scale, to name
+    // the scale by example ("mm, as C4").
+    std::optional<std::string> unit_like(const formula_cell& f, const input_requirement& need) {
+        for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i) {
+            const lowered_reference& r = lowered_.references[f.lowered.first_reference + i];
+            if (!r.area.single())
+                continue;
+            const cell* c = book_.sheets[r.sheet].find(r.area.first);
+            if (c == nullptr || c->kind != cell_kind::number)
+                continue;
+            const cell_unit* u = unit_of(r.sheet, c->at);
+            if (u != nullptr && u->unit.dim == need.dim && u->unit.offset == nullptr &&
+                std::abs(u->unit.scale / *need.scale - 1.0) <= 1e-9)
+                return fmt::format("{}, as {} is", u->unit.text, a1_name(r.area));
+        }
+        return std::nullopt;
+    }
+
+    // "C36 uses it as [L] (length)", or where its uses disagree.
+    void say_what_uses_require(diagnostic& d, std::uint64_t key,
+                               const std::vector<std::uint32_t>& users) {
+        const std::vector<use_requirement> needs = requirements_for(key, users);
+        if (needs.empty())
+            return;
+        const auto differs = std::find_if(needs.begin(), needs.end(), [&](const auto& n) {
+            return !(n.need.dim == needs.front().need.dim);
+        });
+        if (differs != needs.end()) {
+            d.message += fmt::format("; its uses disagree about its unit: it is used as {} in {} "
+                                     "but as {} in {}",
+                                     kind_of(needs.front().need.dim), cell_name(needs.front().user),
+                                     kind_of(differs->need.dim), cell_name(differs->user));
+            return;
+        }
+        std::vector<std::string> names;
+        for (const auto& n : needs)
+            if (std::find(names.begin(), names.end(), cell_name(n.user)) == names.end())
+                names.push_back(cell_name(n.user));
+        d.message += fmt::format("; it is used as {} in {}", kind_of(needs.front().need.dim),
+                                 fmt::join(names, " and "));
+        // The scale, when every use fixes the same one.
+        const bool one_scale = std::all_of(needs.begin(), needs.end(), [&](const auto& n) {
+            return n.need.scale && needs.front().need.scale &&
+                   std::abs(*n.need.scale / *needs.front().need.scale - 1.0) <= 1e-9;
+        });
+        if (!one_scale)
+            return;
+        if (const auto like = unit_like(formulas_[needs.front().user], needs.front().need))
+            d.notes.push_back({fmt::format("for {} to give the unit written for it, the value "
+                                           "must be in {}",
+                                           cell_name(needs.front().user), *like),
+                               {}});
+        else if (std::abs(*needs.front().need.scale - 1.0) <= 1e-9)
+            d.notes.push_back({fmt::format("for {} to give the unit written for it, the value "
+                                           "must be in coherent SI units",
+                                           cell_name(needs.front().user)),
+                               {}});
+    }
+
     void report_unitless_inputs() {
         if (!unitless_.empty()) {
             std::string text;
@@ -766,6 +874,7 @@ class workbook_checker {
                                         "checked without it: {}",
                                         fmt::join(names, ", "));
                 d.where = {values, where};
+                say_what_uses_require(d, key, users);
                 d.notes.push_back({"write its unit in the cell to its right (as in m3/s, kPa, "
                                    "-), in the column's heading (as in 'Flow [m3/s]'), or in the "
                                    "workbook's sidecar",
