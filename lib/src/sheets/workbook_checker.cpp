@@ -15,6 +15,7 @@
 #include <cmath>
 #include <fmt/format.h>
 #include <map>
+#include <set>
 
 namespace plumb::sheets {
 
@@ -113,6 +114,7 @@ class workbook_checker {
     };
     std::map<std::tuple<std::size_t, std::uint64_t, std::uint64_t>, cell_value> range_cache_;
     std::uint32_t current_ = 0; // the formula being checked
+    std::set<std::pair<const void*, const void*>> reported_conflicts_;
 
     void collect_formulas() {
         text_rows_.resize(book_.sheets.size());
@@ -302,12 +304,20 @@ class workbook_checker {
         return it->second ? &*it->second : nullptr;
     }
 
-    std::optional<cell_unit> discover_unit(std::size_t s, cell_address a) const {
+    std::optional<cell_unit> discover_unit(std::size_t s, cell_address a) {
         const sheet& sh = book_.sheets[s];
-        // 1. The sidecar.
-        for (const auto& au : units_.areas)
-            if ((au.sheet.empty() || au.sheet == sh.name) && au.area.contains(a))
-                return cell_unit{au.unit.unit, fmt::format("from {}", au.unit.origin)};
+        // 1. The sidecar beside the workbook, then those given with --dict.
+        const outside_units::area_unit* chosen = nullptr;
+        for (const auto& au : units_.areas) {
+            if ((!au.sheet.empty() && au.sheet != sh.name) || !au.area.contains(a))
+                continue;
+            if (chosen == nullptr)
+                chosen = &au;
+            else if (au.unit.origin != chosen->unit.origin && differ(au.unit, chosen->unit))
+                report_sidecar_conflict(*chosen, au, s, a);
+        }
+        if (chosen != nullptr)
+            return cell_unit{chosen->unit.unit, fmt::format("from {}", chosen->unit.origin)};
         // 2. A defined name a dictionary declares.
         if (!units_.names.empty())
             for (const auto& n : book_.names) {
@@ -341,6 +351,37 @@ class workbook_checker {
             }
         }
         return std::nullopt;
+    }
+
+    static bool differ(const declared_unit& a, const declared_unit& b) {
+        return !(a.unit.dim == b.unit.dim) || a.unit.offset != b.unit.offset ||
+               std::abs(a.unit.scale / b.unit.scale - 1.0) > 1e-12;
+    }
+
+    // Two cells lines from different files give one cell different units: reported once per
+    // pair of lines, at the line whose unit is used.
+    void report_sidecar_conflict(const outside_units::area_unit& used,
+                                 const outside_units::area_unit& other, std::size_t s,
+                                 cell_address a) {
+        if (!reported_conflicts_.insert({&used, &other}).second)
+            return;
+        const std::string cell = cell_text({book_.sheets[s].name, a1_name(a)});
+        diagnostic d;
+        d.level = severity::error;
+        d.rule = std::string(rules::sidecar_problem);
+        d.message = fmt::format("{} gives {} the unit '{}', but {} gives it '{}'", used.unit.origin,
+                                cell, used.unit.unit.text, other.unit.origin, other.unit.unit.text);
+        d.where = used.where;
+        if (other.where.file != nullptr)
+            d.notes.push_back(
+                {fmt::format("{} says '{}' here", other.unit.origin, other.unit.unit.text),
+                 other.where});
+        d.notes.push_back({fmt::format("the cells are checked with '{}' from {}, which comes first "
+                                       "(the sidecar beside the workbook, then --dict files in "
+                                       "order); give each cell one unit",
+                                       used.unit.unit.text, used.unit.origin),
+                           {}});
+        out_.push_back(std::move(d));
     }
 
     static cell_value from_unit(const cell_unit& u) {
