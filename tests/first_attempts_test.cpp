@@ -1,6 +1,7 @@
 // Messages for what people type first: a product without '*', a quantity without braces,
 // log with one argument, e^x, a limit written as a bare number, and an unknown unit whose
 // note shows how to define that very unit. Each has a near miss that must stay quiet.
+#include "notation/described_kind.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
 
@@ -105,4 +106,42 @@ TEST_CASE("an unknown unit's note shows how to define that very unit") {
     REQUIRE(only(flow, plumb::rules::unknown_unit) != nullptr);
     CHECK(only(flow, plumb::rules::unknown_unit)->message.find("did you mean 'mgd'") !=
           std::string::npos);
+}
+
+TEST_CASE("suggestions for an unknown unit prefer units of the kind the description names") {
+    // mgd, million US gallons a day, is a volumetric flow; md, the millidarcy, a permeability
+    // (an area) (common practice in water works and in petroleum engineering respectively).
+    const auto first_suggestion = [](const std::string& text) {
+        const auto r = plumb::check_text("h.plumb", text);
+        const plumb::diagnostic* d = only(r, plumb::rules::unknown_unit);
+        REQUIRE(d != nullptr);
+        const auto at = d->message.find("did you mean '");
+        REQUIRE(at != std::string::npos);
+        const auto begin = at + 14;
+        return d->message.substr(begin, d->message.find('\'', begin) - begin);
+    };
+    // Without a description the nearest spelling wins: "mdg" is one letter from "md".
+    CHECK(first_suggestion("Q : mdg\n") == "md");
+    // A flow: the flow unit first, though it is further in spelling.
+    CHECK(first_suggestion("Q : mdg \"average daily flow\"\n") == "mgd");
+    CHECK(first_suggestion("Q : mGD \"influent flow\"\n") == "mgd");
+    // A permeability: the millidarcy first.
+    CHECK(first_suggestion("k : mGD \"rock permeability\"\n") == "mD");
+    // A mass flow is not a volume flow: "mass flow" names its own kind.
+    CHECK(first_suggestion("m : mdg \"mass flow of sludge\"\n") != "mgd");
+    // A symbol typed in another case is offered, however long ("MGD" for "mgd").
+    CHECK(first_suggestion("Q : MGD \"plant flow\"\n") == "mgd");
+}
+
+TEST_CASE("described_kind reads the kind of quantity a description names") {
+    using plumb::described_kind;
+    const auto flow = described_kind("Average daily FLOW");
+    REQUIRE(flow);
+    CHECK(flow->to_string() == "[L^3 T^-1]");
+    REQUIRE(described_kind("mass flow of sludge"));
+    CHECK(described_kind("mass flow of sludge")->to_string() == "[M T^-1]");
+    CHECK(described_kind("pipe diameters")->to_string() == "[L]");
+    CHECK_FALSE(described_kind("overflow weir")); // "flow" inside a word is not the word
+    CHECK_FALSE(described_kind("flow velocity")); // two kinds: no preference
+    CHECK_FALSE(described_kind("a coefficient"));
 }

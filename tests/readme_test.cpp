@@ -1,9 +1,13 @@
 // The README's two set-up commands are the project's promise to a newcomer; CI must run the
 // test command exactly as written there.
+#include "plumb/check.hpp"
+#include "plumb/render.hpp"
+
 #include <doctest/doctest.h>
 
 #include <filesystem>
 #include <fstream>
+#include <set>
 #include <string>
 
 namespace {
@@ -36,4 +40,35 @@ TEST_CASE("README: .ci/run runs the README's test command word for word") {
     CHECK(demo_command.find("check corpus/demo") != std::string::npos);
     const std::string ci = read(root / ".ci" / "run");
     CHECK(ci.find("\n" + test_command + "\n") != std::string::npos);
+}
+
+TEST_CASE("README: every field of the JSON output for a calc file and a workbook is documented") {
+    const std::filesystem::path root(PLUMB_SOURCE_DIR);
+    const std::string readme = read(root / "README.md");
+    const auto begin = readme.find("## JSON output");
+    const auto end = readme.find("\n## ", begin + 1);
+    REQUIRE(begin != std::string::npos);
+    const std::string section = readme.substr(begin, end - begin);
+    plumb::check_options options;
+    options.record_formulas = true;
+    const plumb::check_report report =
+        plumb::check_paths({root / "corpus" / "sheets" / "pump-sizing.xlsx",
+                            root / "corpus" / "practice" / "water.plumb"},
+                           options);
+    const std::string json = plumb::render_json(report);
+    // The workbook's findings and their terms carry sheet and cell.
+    CHECK(json.find("\"sheet\": \"Pump\", \"cell\": \"C12\"") != std::string::npos);
+    std::set<std::string> keys;
+    for (std::size_t at = json.find("\": "); at != std::string::npos;
+         at = json.find("\": ", at + 1)) {
+        const std::size_t open = json.rfind('"', at - 1);
+        keys.insert(json.substr(open + 1, at - open - 1));
+    }
+    CHECK(keys.count("sheet") == 1);
+    CHECK(keys.count("cell") == 1);
+    for (const std::string& key : keys) {
+        INFO("the JSON field '" << key << "' is not in the README's JSON section");
+        CHECK((section.find("\"" + key + "\"") != std::string::npos ||
+               section.find("`" + key + "`") != std::string::npos));
+    }
 }

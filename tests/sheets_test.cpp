@@ -397,3 +397,152 @@ TEST_CASE("sheets: standard gravity written as a number in a cell formula (9.81)
     CHECK(found == std::vector<std::string>{"Tank!B4 gravity-number", "Tank!B5 result-unit",
                                             "Tank!B6 gravity-number", "Tank!B6 unit-scale"});
 }
+
+namespace {
+
+// A one-sheet .ods built in memory: each row's entries are a number ("250"), a formula in
+// OpenFormula ("of:=[.B2]/[.B1]") or a text ("mm"); "" leaves the cell empty.
+std::string ods_of_rows(const std::vector<std::vector<std::string>>& rows) {
+    std::string xml = "<?xml version=\"1.0\"?><office:document-content><office:body>"
+                      "<office:spreadsheet><table:table table:name=\"Calc\">";
+    for (const auto& row : rows) {
+        xml += "<table:table-row>";
+        for (const auto& entry : row) {
+            if (entry.empty())
+                xml += "<table:table-cell/>";
+            else if (entry.rfind("of:=", 0) == 0)
+                xml += "<table:table-cell table:formula=\"" + entry +
+                       "\" office:value-type=\"float\" office:value=\"0\"/>";
+            else if (entry.find_first_not_of("0123456789.") == std::string::npos)
+                xml += "<table:table-cell office:value-type=\"float\" office:value=\"" + entry +
+                       "\"/>";
+            else
+                xml += "<table:table-cell office:value-type=\"string\"><text:p>" + entry +
+                       "</text:p></table:table-cell>";
+        }
+        xml += "</table:table-row>";
+    }
+    xml += "</table:table></office:spreadsheet></office:body></office:document-content>";
+    return ods_with_content(xml);
+}
+
+check_report check_ods_rows(const std::vector<std::vector<std::string>>& rows,
+                            const std::string& folder) {
+    const auto dir = std::filesystem::temp_directory_path() / folder;
+    std::filesystem::create_directories(dir);
+    {
+        std::ofstream out(dir / "calc.ods", std::ios::binary);
+        out << ods_of_rows(rows);
+    }
+    return check_paths({dir / "calc.ods"});
+}
+
+} // namespace
+
+TEST_CASE("sheets: an input without a unit is told the dimension and scale its uses require") {
+    // Relative roughness ε/D is dimensionless (Moody chart, common practice), so with D in mm
+    // ε must be a length in mm; distance = speed × time (a time in s beside m/s); x + D needs x
+    // as a length, √x = length needs x as an area: those two uses disagree.
+    const check_report r = check_ods_rows(
+        {
+            {"D", "250", "mm"},
+            {"eps", "0.05", ""},
+            {"eps/D", "of:=[.B2]/[.B1]", "-"},
+            {"t", "12", ""},
+            {"distance", "of:=[.B4]*[.B6]", "m"},
+            {"speed", "2", "m/s"},
+            {"x", "3", ""},
+            {"x+D", "of:=[.B7]+[.B1]", "mm"},
+            {"root x", "of:=SQRT([.B7])", "m"},
+        },
+        "plumb-input-requirement");
+    INFO(render_text(r));
+    CHECK(r.inputs_without_units == 3);
+    const diagnostic* eps = finding_at(r, "Calc!B2", rules::no_unit);
+    REQUIRE(eps != nullptr);
+    CHECK(eps->message.find("used as a length [L] in Calc!B3") != std::string::npos);
+    CHECK(std::any_of(eps->notes.begin(), eps->notes.end(), [](const note& n) {
+        return n.message.find("must be in mm, as B1 is") != std::string::npos;
+    }));
+    const diagnostic* t = finding_at(r, "Calc!B4", rules::no_unit);
+    REQUIRE(t != nullptr);
+    CHECK(t->message.find("used as a time [T] in Calc!B5") != std::string::npos);
+    CHECK(std::any_of(t->notes.begin(), t->notes.end(), [](const note& n) {
+        return n.message.find("coherent SI units") != std::string::npos;
+    }));
+    const diagnostic* x = finding_at(r, "Calc!B7", rules::no_unit);
+    REQUIRE(x != nullptr);
+    CHECK(x->message.find("its uses disagree") != std::string::npos);
+    CHECK(x->message.find("a length [L] in Calc!B8") != std::string::npos);
+    CHECK(x->message.find("an area [L^2] in Calc!B9") != std::string::npos);
+}
+
+TEST_CASE("sheets: the sidecar beside the workbook comes before --dict; a conflict is reported") {
+    const auto dir = std::filesystem::temp_directory_path() / "plumb-sidecar-and-dict";
+    std::filesystem::create_directories(dir);
+    {
+        std::ofstream out(dir / "well-test.xlsx", std::ios::binary);
+        out << read_corpus("well-test.xlsx");
+        std::ofstream side(dir / "well-test.cells.plumb", std::ios::binary);
+        side << "Rate : bbl/d\ncells Inputs!C6 : kPa \"re-read in kPa\"\n";
+        std::ofstream dict(dir / "site.plumb", std::ios::binary);
+        dict << "cells Inputs!C6 : psi \"the site's gauges\"\ncells Inputs!C7 : m\n";
+        std::ofstream same(dir / "same.plumb", std::ios::binary);
+        same << "cells Inputs!C6 : kPa\n";
+    }
+    check_options options;
+    options.dictionaries = {dir / "site.plumb"};
+    const check_report both = check_paths({dir / "well-test.xlsx"}, options);
+    INFO(render_text(both));
+    // The sidecar's kPa is used (Calc!C7 subtracts C6 from a kPa value without a finding) and
+    // the dictionary's psi for the same cell is reported, naming both files.
+    CHECK(finding_at(both, "Calc!C7", rules::unit_scale) == nullptr);
+    std::vector<const diagnostic*> conflicts;
+    for (const auto& d : both.diagnostics)
+        if (d.rule == rules::sidecar_problem)
+            conflicts.push_back(&d);
+    REQUIRE(conflicts.size() == 1);
+    CHECK(conflicts[0]->message.find("well-test.cells.plumb") != std::string::npos);
+    CHECK(conflicts[0]->message.find("site.plumb") != std::string::npos);
+    CHECK(conflicts[0]->message.find("Inputs!C6") != std::string::npos);
+    CHECK(conflicts[0]->where.file->path().find("well-test.cells.plumb") != std::string::npos);
+    // A dictionary that agrees with the sidecar is no conflict.
+    options.dictionaries = {dir / "same.plumb"};
+    const check_report agreeing = check_paths({dir / "well-test.xlsx"}, options);
+    CHECK(std::none_of(agreeing.diagnostics.begin(), agreeing.diagnostics.end(),
+                       [](const diagnostic& d) { return d.rule == rules::sidecar_problem; }));
+    // Without a sidecar, the --dict file's line gives the unit: psi, so Calc!C7 is off again.
+    std::filesystem::remove(dir / "well-test.cells.plumb");
+    options.dictionaries = {dir / "site.plumb"};
+    const check_report dict_only = check_paths({dir / "well-test.xlsx"}, options);
+    CHECK(finding_at(dict_only, "Calc!C7", rules::unit_scale) != nullptr);
+}
+
+TEST_CASE("sheets: a factor written into a formula agrees by the notation's exact rule") {
+    // 1 kg = 1/0.45359237 lb = 2.2046226 lb (NIST SP 811 (2008), B.8). 2.205 is that factor
+    // rounded (within 2.205 ± 0.0005); 2.204 is cut short, 0.00062 away: more than half a unit
+    // in its last digit, so it is not the factor (a relative 1e-3 would have taken it).
+    const check_report r = check_ods_rows(
+        {
+            {"mass", "12", "kg"},
+            {"rounded", "of:=[.B1]*2.205", "lb"},
+            {"cut short", "of:=[.B1]*2.204", "lb"},
+            {"inverted", "of:=[.B1]/2.205", "lb"},
+            {"exact", "of:=[.B1]/0.45359237", "lb"},
+        },
+        "plumb-sheet-factor-rule");
+    INFO(render_text(r));
+    CHECK(finding_at(r, "Calc!B2", rules::unit_scale) == nullptr);
+    const diagnostic* cut = finding_at(r, "Calc!B3", rules::unit_scale);
+    REQUIRE(cut != nullptr);
+    CHECK(cut->message.find("the factor 2.204 is near the conversion to lb but is not it") !=
+          std::string::npos);
+    CHECK(cut->message.find("reads 2.205") != std::string::npos);
+    const diagnostic* inverted = finding_at(r, "Calc!B4", rules::unit_scale);
+    REQUIRE(inverted != nullptr);
+    CHECK(inverted->message.find("wrong way round") != std::string::npos);
+    CHECK(finding_at(r, "Calc!B5", rules::unit_scale) == nullptr);
+    // Factors are printed as engineers read them, never in e-notation.
+    for (const auto& d : r.diagnostics)
+        CHECK(d.message.find("e+") == std::string::npos);
+}

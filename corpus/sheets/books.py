@@ -117,7 +117,8 @@ BOOKS = {
         "expect": [
             "Pump!C12 unit-scale", "Pump!C14 result-unit", "Pump!C19 unit-scale",
             "Pump!C22 unit-scale", "Pump!C26 unit-scale", "Pump!C30 offset-scale",
-            "Pump!C33 offset-scale", "Pump!C35 no-unit", "Pump!C39 unit-scale",
+            "Pump!C33 offset-scale", "Pump!C35 no-unit ~ used as a length [L] in Pump!C36",
+            "Pump!C35 no-unit ~ must be in mm, as C4 is", "Pump!C39 unit-scale",
             "Pump!C40 not-checked",
         ],
     },

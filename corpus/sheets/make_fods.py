@@ -95,6 +95,7 @@ def main(out_dir):
             f.write(folder)
         with open("%s/%s.expect" % (out_dir, name), "w", encoding="utf-8") as f:
             f.write("# sheet!cell rule: the findings plumb must report, and no others\n")
+            f.write("# (sheet!cell rule ~ words: that finding must also say these words)\n")
             for line in sorted(book["expect"]):
                 f.write(line + "\n")
         if book.get("sidecar"):

@@ -33,6 +33,7 @@ inline constexpr std::string_view inference_conflict = "inference-conflict";
 inline constexpr std::string_view acceptance_problem = "acceptance-problem";
 inline constexpr std::string_view stale_acceptance = "stale-acceptance";
 inline constexpr std::string_view coefficient_mismatch = "coefficient-mismatch";
+inline constexpr std::string_view trade_constant = "trade-constant";
 // Workbooks (.xlsx, .ods):
 inline constexpr std::string_view result_unit = "result-unit";
 inline constexpr std::string_view mixed_range = "mixed-range";

@@ -63,8 +63,9 @@ class unit_table {
     [[nodiscard]] std::optional<resolved_unit> resolve(std::string_view symbol) const;
 
     // Up to `limit` known symbols closest to `symbol` by edit distance, for "did you mean".
-    [[nodiscard]] std::vector<std::string_view> nearest(std::string_view symbol,
-                                                        std::size_t limit = 3) const;
+    // With `kind`, units of that dimension come first: a flow's "MD" is "mgd", not millidarcy.
+    [[nodiscard]] std::vector<std::string_view>
+    nearest(std::string_view symbol, std::size_t limit = 3, const dimension* kind = nullptr) const;
 
     [[nodiscard]] std::span<const unit_definition> units() const;
     [[nodiscard]] std::span<const unit_prefix> prefixes() const;

@@ -6,6 +6,7 @@
 #include "check/functions.hpp"
 #include "check/gravity_number.hpp"
 #include "check/scale_match.hpp"
+#include "check/trade_constants.hpp"
 #include "plumb/rules.hpp"
 #include "units/exact_factor.hpp"
 
@@ -45,6 +46,12 @@ struct typed {
     // "(T - 20)": a reading less a number that is not a scale's zero. Beside other readings
     // it is a reading; as a factor it is the difference from a reference reading.
     bool reading_or_difference = false;
+    // "p_abs - p_g": an absolute reading less a reading on an offset scale is that scale's
+    // zero, the atmosphere, as a reading on the absolute scale. Names the offset scale.
+    const unit_definition* zero_of = nullptr;
+    // "p_abs - p_atm": the difference of two absolute pressures, which a gauge reads when the
+    // one subtracted is the atmosphere.
+    bool absolute_pressure_difference = false;
     bool inferred = false; // unknown because a `?` coefficient stands in it, not an error
     // The numbers along its multiplicative path, on the checker's literal stack.
     std::uint32_t literal_begin = 0;
@@ -405,7 +412,7 @@ class checker {
         const typed t = eval(file_.sides[f.first_side].root);
         if (!t.known)
             return std::nullopt;
-        return value_type{t.dim, t.scale, t.offset, t.zero};
+        return value_type{t.dim, t.scale, t.offset, t.zero, t.exact_scale};
     }
 
   private:
@@ -539,6 +546,8 @@ class checker {
             // The number is g_n now, not a factor for the scale rules to weigh.
             number.value = 1.0;
             number.tolerance = 0.0;
+            number.low = rational(1);
+            number.high = rational(1);
             number.power_of_ten = false;
             number.factor_like = false;
             number.table_digits = false;
@@ -646,7 +655,7 @@ class checker {
         if (!t.zero) {
             const double v =
                 t.value ? t.value->to_double() : std::strtod(std::string(written).c_str(), nullptr);
-            literals_.push_back(read_literal(written, v, index));
+            literals_.push_back(read_literal(written, v, index, t.value));
         }
         return t;
     }
@@ -794,12 +803,12 @@ class checker {
             // A sum of numbers is one number: physics or a conversion as a whole.
             literals_.resize(literal_base);
             if (result.value && !result.value->is_zero())
-                literals_.push_back(
-                    read_literal(text(file_.nodes[index].range), result.value->to_double(), index));
+                literals_.push_back(read_literal(text(file_.nodes[index].range),
+                                                 result.value->to_double(), index, result.value));
             return result;
         }
         if (offset_term != nullptr)
-            return finish_offset_sum(terms, result, literal_base);
+            return finish_offset_sum(terms, result, literal_base, index);
         // After a unit-scale finding the scale is unknown (NaN), so it is not reported again
         // further up; the dimension stays known.
         double unit = 1.0;
@@ -910,8 +919,8 @@ class checker {
     // The scale and zero of a sum with a value on an offset scale. Values on one scale subtract
     // to an ordinary difference; a shift by the scale's zero converts it; an absolute pressure
     // added to a gauge one (+ p_atm) gives an absolute pressure.
-    typed finish_offset_sum(std::span<const operand> terms, typed result,
-                            std::size_t literal_base) {
+    typed finish_offset_sum(std::span<const operand> terms, typed result, std::size_t literal_base,
+                            std::uint32_t index) {
         // The terms with units (not the numbers that shift the zero).
         std::size_t unit_terms = 0;
         std::size_t only = 0;
@@ -1057,10 +1066,26 @@ class checker {
         const double slack = tolerance + 1e-9 * std::abs(final_origin) + 1e-9;
         if (points == 0) {
             if (std::abs(final_origin) > slack) {
+                const unit_definition* zero =
+                    has_shift || !is_whole_side(index)
+                        ? nullptr
+                        : subtracted_scale_zero(terms, final_origin, slack);
+                if (zero != nullptr) {
+                    result.point = true;
+                    result.origin = 0.0;
+                    result.origin_tolerance = tolerance;
+                    result.zero_of = zero;
+                    return result;
+                }
                 report_mixed_scales(terms, final_origin);
                 literals_.resize(literal_base);
                 return unknown_type();
             }
+            result.absolute_pressure_difference =
+                !has_shift && result.dim == pressure_dimension() &&
+                std::all_of(terms.begin(), terms.end(), [](const operand& t) {
+                    return !t.type.known || !t.type.point || t.type.offset == nullptr;
+                });
             return result; // an ordinary difference
         }
         result.point = true;
@@ -1077,6 +1102,45 @@ class checker {
                             ? scale_named(final_origin, slack, result.dim, terms)
                             : nullptr;
         return result;
+    }
+
+    // Whether the node is one whole side of a formula of two or more sides (in parentheses or
+    // not): there alone "p_abs - p_g" can stand for the atmosphere, set equal to a reading of
+    // it. Inside a product or a sum it is a slip (a bar value less a barg one).
+    bool is_whole_side(std::uint32_t node) const {
+        if (current_ == nullptr || current_->side_count < 2)
+            return false;
+        for (std::uint32_t i = 0; i < current_->side_count; ++i) {
+            std::uint32_t root = file_.sides[current_->first_side + i].root;
+            while (file_.nodes[root].kind == expr_kind::group)
+                root = file_.nodes[root].lhs;
+            if (root == node)
+                return true;
+        }
+        return false;
+    }
+
+    // "p_abs - p_g": one absolute reading less one reading on an offset scale leaves that
+    // scale's zero (the atmosphere for a gauge): the offset unit, or null when the terms are
+    // anything else.
+    const unit_definition* subtracted_scale_zero(std::span<const operand> terms,
+                                                 double final_origin, double slack) const {
+        const operand* added = nullptr;
+        const operand* subtracted = nullptr;
+        for (const auto& t : terms) {
+            if (!t.type.known || !t.type.point)
+                continue;
+            const operand*& slot = t.subtracted ? subtracted : added;
+            if (slot != nullptr)
+                return nullptr;
+            slot = &t;
+        }
+        if (added == nullptr || subtracted == nullptr || added->type.offset != nullptr ||
+            added->type.origin != 0.0 || subtracted->type.offset == nullptr)
+            return nullptr;
+        if (std::abs(subtracted->type.origin + final_origin) > slack)
+            return nullptr;
+        return subtracted->type.offset;
     }
 
     // "T_C - T_K", "p_bar - p_barg": readings on two scales with different zeros.
@@ -1112,6 +1176,13 @@ class checker {
             {fmt::format("as written the result is off by {} {}",
                          format_factor(std::abs(difference)), temperature ? "K" : "Pa"),
              {}});
+        if (other != nullptr && !on_offset->subtracted && other->subtracted &&
+            other->type.offset == nullptr)
+            d.notes.push_back(
+                {fmt::format("{} less {} would be the {} scale's zero as an absolute reading; "
+                             "this way round it is its negative",
+                             quote(other->node), quote(on_offset->node), unit.symbol),
+                 {}});
         d.notes.push_back(
             {temperature
                  ? fmt::format("convert first: a {} reading plus {:g} is in K", unit.symbol,
@@ -1133,10 +1204,12 @@ class checker {
 
     // A side or term's units and numbers, for reconcile().
     scaled_operand scaled(const typed& t, bool as_number) const {
+        static const rational one(1);
         if (as_number)
-            return {1.0, {}};
-        return {t.scale, std::span<const scale_literal>(literals_.data() + t.literal_begin,
-                                                        t.literal_count)};
+            return {1.0, &one, {}};
+        return {
+            t.scale, t.exact_scale ? &*t.exact_scale : nullptr,
+            std::span<const scale_literal>(literals_.data() + t.literal_begin, t.literal_count)};
     }
 
     // Terms of one dimension in different units give numbers off by a factor, unless numbers
@@ -1233,17 +1306,23 @@ class checker {
                 report_inverted_factor(ops[index[i]], parts[i].literals[k]);
                 return false;
             }
+        if (parts.size() <= max_operands_for_flips && accept_trade_constant(parts, unit))
+            return true;
         const operand& op = ops[index[r.odd]];
         const operand& reference = ops[index[r.reference]];
         // What the numbers as written give: the conversion-like ones taken as conversions.
         const double ratio = apparent_scale(parts[r.reference]) / apparent_scale(parts[r.odd]);
+        const std::optional<rational> exact_ratio = exact_product(
+            apparent_exact_scale(parts[r.reference]), apparent_exact_scale(parts[r.odd]), true);
+        const std::optional<rational> exact_inverse = exact_product(rational(1), exact_ratio, true);
         // A warning: in a unit-aware calc the units convert themselves; where numbers are
         // put in as declared (spreadsheets, code), the result is off by the ratio.
         diagnostic& d =
             report(rules::unit_scale,
                    fmt::format("as written, {} counts {} times as much as {}: the {} agree in "
                                "dimension but not in unit",
-                               quote(op.node), format_factor(ratio), quote(reference.node), what),
+                               quote(op.node), format_factor(exact_ratio, ratio),
+                               quote(reference.node), what),
                    file_.nodes[op.node].range);
         d.level = severity::warning;
         add_term(d, op);
@@ -1256,11 +1335,56 @@ class checker {
         d.notes.push_back(
             {ratio < 1 ? fmt::format("multiply {} by {} (declare the symbols in coherent units, or "
                                      "write the conversion factor into the formula)",
-                                     quote(op.node), format_factor(1.0 / ratio))
+                                     quote(op.node), format_factor(exact_inverse, 1.0 / ratio))
                        : fmt::format("divide {} by {} (declare the symbols in coherent units, or "
                                      "write the conversion factor into the formula)",
-                                     quote(op.node), format_factor(ratio)),
+                                     quote(op.node), format_factor(exact_ratio, ratio)),
              {}});
+        return false;
+    }
+
+    // "W = 8.34*Q*C" (lb/d from mgd and mg/L): not the conversion, 8.3454, but water's weight
+    // per gallon, which the trade writes there. Accepted where the number is a published value
+    // of the property and the exact conversion would reconcile the units; a note says so.
+    bool accept_trade_constant(std::span<const scaled_operand> parts, double& unit) {
+        for (std::size_t i = 0; i < parts.size(); ++i)
+            for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
+                const scale_literal& l = parts[i].literals[k];
+                const std::optional<rational> printed = printed_power(l, 1.0);
+                if (!printed || !l.factor_like)
+                    continue;
+                for (const trade_constant& c : trade_constants()) {
+                    if (*printed < c.least || c.greatest < *printed)
+                        continue;
+                    std::vector<scale_literal> literals(parts[i].literals.begin(),
+                                                        parts[i].literals.end());
+                    literals[k].low = c.exact_conversion;
+                    literals[k].high = c.exact_conversion;
+                    literals[k].value = c.exact_conversion.to_double();
+                    literals[k].tolerance = 0.0;
+                    std::vector<scaled_operand> changed(parts.begin(), parts.end());
+                    changed[i].literals = literals;
+                    const reconciliation r = reconcile(changed);
+                    if (!r.agree)
+                        continue;
+                    unit = r.unit;
+                    diagnostic& d = report(
+                        rules::trade_constant,
+                        fmt::format("{} is read as {}, not as a unit conversion: the units "
+                                    "need {}, {}",
+                                    text(file_.nodes[l.node].range), c.name,
+                                    format_factor(std::nullopt, c.exact_conversion.to_double()),
+                                    c.conversion),
+                        file_.nodes[l.node].range);
+                    d.level = severity::note;
+                    d.notes.push_back(
+                        {fmt::format("water weighs {}; source: {}", c.range_text, c.source), {}});
+                    d.notes.push_back({"the result holds for water; for another liquid write "
+                                       "its own density",
+                                       {}});
+                    return true;
+                }
+            }
         return false;
     }
 
@@ -1277,7 +1401,7 @@ class checker {
                     fmt::format("the factor {} is not needed: the units of {} already agree, so "
                                 "as written it is {} times its true value",
                                 text(file_.nodes[l.node].range), quote(ops[index[i]].node),
-                                format_factor(factor)),
+                                format_factor(printed_power(l, l.exponent), factor)),
                     file_.nodes[l.node].range);
                 add_term(d, ops[index[i]]);
                 const std::string units = units_in(ops[index[i]].node);
@@ -1307,13 +1431,16 @@ class checker {
         const std::string units = units_in(op.node);
         if (!units.empty())
             d.notes.push_back({units, {}});
-        d.notes.push_back({fmt::format("as written the result is {} times its true value",
-                                       format_factor(factor * factor)),
-                           {}});
+        d.notes.push_back(
+            {fmt::format("as written the result is {} times its true value",
+                         format_factor(printed_power(l, 2 * l.exponent), factor * factor)),
+             {}});
     }
 
     // "T_K = T_C": readings on scales with different zeros set equal or compared.
     void check_origins(std::span<const operand> sides, bool equation) {
+        if (report_scale_zero_beside_difference(sides))
+            return;
         if (std::all_of(sides.begin(), sides.end(),
                         [](const operand& side) { return side.type.origin == 0.0; }))
             return;
@@ -1330,6 +1457,13 @@ class checker {
                                  1e-9 * (std::abs(side.type.origin) + 1.0);
             const double difference = side.type.origin - reference->type.origin;
             if (std::abs(difference) <= slack)
+                continue;
+            // "p_g = p_abs - p_atm": a gauge reads the difference from the atmosphere.
+            const auto on_gauge = [](const operand& o) {
+                return o.type.offset != nullptr && o.type.offset->scale == unit_scale::gauge;
+            };
+            if ((side.type.absolute_pressure_difference && on_gauge(*reference)) ||
+                (reference->type.absolute_pressure_difference && on_gauge(side)))
                 continue;
             const operand& off = side.type.offset != nullptr ? side : *reference;
             const operand& other = &off == &side ? *reference : side;
@@ -1367,6 +1501,42 @@ class checker {
                      {}});
             return;
         }
+    }
+
+    // "dp = p_abs - p_g": the right side is the atmosphere, a reading, not a difference.
+    bool report_scale_zero_beside_difference(std::span<const operand> sides) {
+        for (const auto& zero : sides) {
+            if (!zero.type.known || zero.type.zero_of == nullptr)
+                continue;
+            for (const auto& other : sides) {
+                if (&other == &zero || !other.type.known || other.type.zero || other.type.numeric ||
+                    other.type.point)
+                    continue;
+                const unit_definition& scale = *zero.type.zero_of;
+                diagnostic& d =
+                    report(rules::offset_scale,
+                           fmt::format("{} is the zero of the {} scale ({} {}) as a reading on the "
+                                       "absolute scale, but {} is a difference",
+                                       quote(zero.node), scale.symbol, format_factor(scale.offset),
+                                       zero.type.dim == temperature_dimension() ? "K" : "Pa",
+                                       quote(other.node)),
+                           file_.nodes[zero.node].range);
+                add_term(d, zero);
+                add_term(d, other);
+                d.notes.push_back(
+                    {scale.scale == unit_scale::gauge
+                         ? std::string("an absolute pressure less a gauge reading of it is the "
+                                       "atmospheric pressure; a gauge reading is the absolute "
+                                       "pressure less the atmosphere's (p_abs - p_atm)")
+                         : fmt::format("a kelvin reading less a {} reading of it is the {} "
+                                       "scale's zero; a difference needs two readings on one "
+                                       "scale",
+                                       scale.symbol, scale.symbol),
+                     {}});
+                return true;
+            }
+        }
+        return false;
     }
 
     // "'D' is in mm, 'Q' in L/s": the symbols under a node declared in non-coherent units.
@@ -1813,7 +1983,7 @@ class checker {
         typed t;
         t.dim = *r.dim;
         t.scale = r.scale;
-        t.exact_scale.reset();
+        t.exact_scale = r.exact_scale;
         t.offset = r.offset;
         t.value = r.value;
         // A cell holds a reading, as a declared temperature or pressure does; a cell has no

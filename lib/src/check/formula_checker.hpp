@@ -21,7 +21,8 @@ struct value_type {
     dimension dim;
     double scale = 1.0;
     const unit_definition* offset = nullptr;
-    bool zero = false; // the literal 0
+    bool zero = false;                   // the literal 0
+    std::optional<rational> exact_scale; // scale exactly, where every unit in it is exact
 };
 
 // Checks the single side of a spreadsheet formula lowered into `file` (file.references typed)

@@ -1,8 +1,11 @@
 // Decides which numbers in a formula are conversion factors: the ones whose product reconciles
-// the units of the terms that meet, found by trying the subsets of each term's numbers.
+// the units of the terms that meet, found by trying the subsets of each term's numbers. The
+// decision is exact: a number stands for every value its printed digits may round from (half a
+// unit in its last digit), compared with the units' exact factors as fractions.
 #include "check/scale_match.hpp"
 
 #include "plumb/unit_table.hpp"
+#include "units/exact_factor.hpp"
 
 #include <algorithm>
 #include <array>
@@ -24,11 +27,42 @@ bool is_power_of_ten(double v, int* power = nullptr) {
     return true;
 }
 
+// Doubles decide when they are clearly apart; closer than this, the exact fractions decide.
+constexpr double double_doubt = 1e-9;
+
+// A value known as a double and, where every part of it is exact, as a fraction.
+struct exact_or_double {
+    double approx = 1.0;
+    std::optional<rational> exact = rational(1);
+};
+
+exact_or_double times(const exact_or_double& a, const exact_or_double& b, bool divide = false) {
+    return {divide ? a.approx / b.approx : a.approx * b.approx,
+            exact_product(a.exact, b.exact, divide)};
+}
+
+// a ≤ b: exactly where both are exact; else as doubles, within the rounding of a table value.
+bool at_most(const exact_or_double& a, const exact_or_double& b) {
+    if (a.approx < b.approx * (1.0 - double_doubt))
+        return true;
+    if (a.approx > b.approx * (1.0 + double_doubt))
+        return false;
+    if (a.exact && b.exact)
+        return !(*b.exact < *a.exact);
+    return true;
+}
+
+// A ratio of two table units of one dimension (or a length ratio squared or cubed).
+struct unit_ratio {
+    double approx;
+    std::optional<rational> exact;
+};
+
 // Ratios of two table units of one dimension (and of squares and cubes of lengths), sorted:
 // 0.3048, 3.28084, 144, 1728, 6894.76...
-const std::vector<double>& unit_ratios() {
-    static const std::vector<double> ratios = [] {
-        std::vector<double> out;
+const std::vector<unit_ratio>& unit_ratios() {
+    static const std::vector<unit_ratio> ratios = [] {
+        std::vector<unit_ratio> out;
         const auto units = unit_table::standard().units();
         const dimension length = unit_table::standard().resolve("m")->dim();
         for (const auto& a : units)
@@ -38,28 +72,64 @@ const std::vector<double>& unit_ratios() {
                 const double r = a.factor / b.factor;
                 if (std::abs(r - 1.0) < 1e-9 || is_power_of_ten(r))
                     continue;
-                out.push_back(r);
+                const auto exact = exact_product(exact_factor(a), exact_factor(b), true);
+                out.push_back({r, exact});
                 if (a.dim() == length) {
-                    out.push_back(r * r);
-                    out.push_back(r * r * r);
+                    out.push_back({r * r, exact_power(exact, rational(2))});
+                    out.push_back({r * r * r, exact_power(exact, rational(3))});
                 }
             }
-        std::sort(out.begin(), out.end());
+        std::sort(out.begin(), out.end(),
+                  [](const unit_ratio& x, const unit_ratio& y) { return x.approx < y.approx; });
         return out;
     }();
     return ratios;
 }
 
-bool is_unit_ratio(double v, double tolerance) {
-    const auto& ratios = unit_ratios();
-    const auto it = std::lower_bound(ratios.begin(), ratios.end(), v * (1.0 - tolerance - 1e-12));
-    return it != ratios.end() && *it <= v * (1.0 + tolerance + 1e-12);
+exact_or_double low_end(const scale_literal& l) {
+    return {l.value * (1.0 - l.tolerance), l.low};
+}
+exact_or_double high_end(const scale_literal& l) {
+    return {l.value * (1.0 + l.tolerance), l.high};
 }
 
+bool is_unit_ratio(const scale_literal& l) {
+    const auto& ratios = unit_ratios();
+    const exact_or_double low = low_end(l);
+    const exact_or_double high = high_end(l);
+    auto it = std::lower_bound(ratios.begin(), ratios.end(), low.approx * (1.0 - 2 * double_doubt),
+                               [](const unit_ratio& r, double v) { return r.approx < v; });
+    for (; it != ratios.end() && it->approx <= high.approx * (1.0 + 2 * double_doubt); ++it) {
+        const exact_or_double r{it->approx, it->exact};
+        if (at_most(low, r) && at_most(r, high))
+            return true;
+    }
+    return false;
+}
+
+// What a subset of an operand's numbers may stand for: the least and greatest products their
+// printed digits allow, and the product as written.
 struct subset_value {
+    exact_or_double low;
+    exact_or_double high;
     double product = 1.0;
-    double tolerance = 0.0;
 };
+
+// l^e for the interval of l: whole powers exactly, others as doubles.
+void multiply_in(subset_value& s, const scale_literal& l, double e) {
+    const exact_or_double lo = low_end(l);
+    const exact_or_double hi = high_end(l);
+    const bool whole = e == std::round(e) && std::abs(e) <= 6;
+    const auto power = [&](const exact_or_double& v) -> exact_or_double {
+        return {e == 1.0 ? v.approx : (e == -1.0 ? 1.0 / v.approx : std::pow(v.approx, e)),
+                whole ? exact_power(v.exact, rational(static_cast<std::int64_t>(e)))
+                      : std::nullopt};
+    };
+    // A positive power grows with its base, a negative one shrinks.
+    s.low = times(s.low, power(e > 0 ? lo : hi));
+    s.high = times(s.high, power(e > 0 ? hi : lo));
+    s.product *= e == 1.0 ? l.value : (e == -1.0 ? 1.0 / l.value : std::pow(l.value, e));
+}
 
 // The search tries every subset of each operand's numbers against every other operand's, so
 // its cost grows as (operands × 2^numbers)²: the numbers searched shrink as operands grow,
@@ -77,24 +147,35 @@ subset_value subset(const scaled_operand& op, std::size_t index, std::uint32_t m
     for (std::size_t k = 0; mask != 0; ++k, mask >>= 1) {
         if ((mask & 1U) == 0)
             continue;
-        const scale_literal& l = op.literals[k];
-        double e = l.exponent;
+        double e = op.literals[k].exponent;
         if (flip.operand == index && flip.literal == k)
             e = -e;
-        s.product *= e == 1.0 ? l.value : (e == -1.0 ? 1.0 / l.value : std::pow(l.value, e));
-        s.tolerance += std::abs(e) * l.tolerance;
+        multiply_in(s, op.literals[k], e);
     }
     return s;
 }
 
-// Whether some choice of the operand's numbers as conversions gives the unit u.
-bool reaches(const scaled_operand& op, std::size_t index, std::size_t count, double u,
-             double u_tolerance, flipped_literal flip, bool* without_literals) {
-    const std::size_t n = searched(op, count);
+exact_or_double scale_of(const scaled_operand& op) {
+    return {op.scale,
+            op.exact_scale != nullptr ? std::optional<rational>(*op.exact_scale) : std::nullopt};
+}
+
+// Whether a's unit, its numbers `sa` taken as conversions, can equal b's with `sb`: for some
+// values the digits allow, scale_a / P_a = scale_b / P_b, that is scale_a·P_b = scale_b·P_a.
+bool agree(const scaled_operand& a, const subset_value& sa, const scaled_operand& b,
+           const subset_value& sb) {
+    const exact_or_double scale_a = scale_of(a);
+    const exact_or_double scale_b = scale_of(b);
+    return at_most(times(scale_a, sb.low), times(scale_b, sa.high)) &&
+           at_most(times(scale_b, sa.low), times(scale_a, sb.high));
+}
+
+// Whether some choice of b's numbers as conversions meets a's unit with `sa`.
+bool reaches(const scaled_operand& b, std::size_t index, std::size_t count, const scaled_operand& a,
+             const subset_value& sa, flipped_literal flip, bool* without_literals) {
+    const std::size_t n = searched(b, count);
     for (std::uint32_t mask = 0; mask < (1U << n); ++mask) {
-        const subset_value s = subset(op, index, mask, flip);
-        const double unit = op.scale / s.product;
-        if (std::abs(unit / u - 1.0) <= s.tolerance + u_tolerance + 1e-9) {
+        if (agree(a, sa, b, subset(b, index, mask, flip))) {
             if (without_literals != nullptr)
                 *without_literals = mask == 0;
             return true;
@@ -116,7 +197,15 @@ double power_of_ten_value(int k) {
     return k >= -30 && k <= 30 ? table[static_cast<std::size_t>(k + 30)] : std::pow(10.0, k);
 }
 
-scale_literal read_literal(std::string_view text, double value, std::uint32_t node) {
+namespace {
+// 10^k exactly, where it fits.
+std::optional<rational> exact_power_of_ten(int k) {
+    return exact_power(rational(10), rational(k));
+}
+} // namespace
+
+scale_literal read_literal(std::string_view text, double value, std::uint32_t node,
+                           std::optional<rational> exact) {
     scale_literal l;
     l.value = std::abs(value);
     l.node = node;
@@ -162,9 +251,31 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
         for (std::size_t i = mantissa.size(); i > 0 && mantissa[i - 1] == '0' && significant > 1;
              --i)
             --significant;
-    // One unit in the last printed digit: published factors are rounded or cut short (8.34 for
-    // 8.3454 lb per US gallon and mg/L); no more than 1 % so that a 2 is never a 2.2.
-    l.tolerance = std::clamp(power_of_ten_value(exponent - decimals) / l.value, 1e-12, 0.01);
+    // Published factors are rounded (7758 for 7758.37, 3.281 for 3.28084): the digits stand
+    // for any value within half a unit in the last of them, and never for more than 1 % either
+    // way, so that a 2 is never a 2.2 nor an 8 an 8.35.
+    const int last_place = exponent - decimals;
+    const double half_unit = power_of_ten_value(last_place) / 2.0;
+    const bool half_unit_narrower = half_unit <= l.value / 100.0;
+    l.tolerance = std::clamp(half_unit / l.value, 1e-12, 0.01);
+    if (!exact)
+        exact = rational::parse(text);
+    if (exact && exact->num() < 0)
+        exact = -*exact;
+    if (exact && !exact->is_zero()) {
+        const auto width = half_unit_narrower
+                               ? exact_product(exact_power_of_ten(last_place), rational(2), true)
+                               : exact_product(exact, rational(100), true);
+        if (width) {
+            try {
+                l.low = *exact - *width;
+                l.high = *exact + *width;
+            } catch (const arithmetic_overflow&) {
+                l.low.reset();
+                l.high.reset();
+            }
+        }
+    }
     l.power_of_ten = significant >= 1 && only_a_one;
     l.power = static_cast<std::int8_t>(std::clamp(first_place + exponent, -100, 100));
     const bool whole = !has_point && e == std::string_view::npos;
@@ -178,7 +289,7 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
 bool looks_like_conversion(const scale_literal& l, bool allow_hundred) {
     if (l.power_of_ten)
         return std::abs(l.power * l.exponent) >= (allow_hundred ? 2 : 3);
-    return l.table_digits && is_unit_ratio(l.value, l.tolerance);
+    return l.table_digits && is_unit_ratio(l);
 }
 
 double apparent_scale(const scaled_operand& op) {
@@ -186,6 +297,34 @@ double apparent_scale(const scaled_operand& op) {
     for (const auto& l : op.literals)
         if (looks_like_conversion(l, true))
             s /= std::pow(l.value, l.exponent);
+    return s;
+}
+
+std::optional<rational> printed_value(const scale_literal& l) {
+    if (!l.low || !l.high)
+        return std::nullopt;
+    try {
+        return (*l.low + *l.high) / rational(2); // the digits' interval is centred on them
+    } catch (const arithmetic_overflow&) {
+        return std::nullopt;
+    }
+}
+
+std::optional<rational> printed_power(const scale_literal& l, double exponent) {
+    if (exponent != std::round(exponent) || std::abs(exponent) > 12)
+        return std::nullopt;
+    return exact_power(printed_value(l), rational(static_cast<std::int64_t>(exponent)));
+}
+
+std::optional<rational> apparent_exact_scale(const scaled_operand& op) {
+    if (op.exact_scale == nullptr)
+        return std::nullopt;
+    std::optional<rational> s = *op.exact_scale;
+    for (const auto& l : op.literals) {
+        if (!looks_like_conversion(l, true))
+            continue;
+        s = exact_product(s, printed_power(l, l.exponent), true);
+    }
     return s;
 }
 
@@ -199,15 +338,17 @@ reconciliation reconcile(std::span<const scaled_operand> ops, flipped_literal fl
     // Nearly every meeting point agrees as declared.
     if (flip.operand == static_cast<std::size_t>(-1) &&
         std::all_of(ops.begin(), ops.end(), [&](const scaled_operand& o) {
-            return std::abs(o.scale / ops[0].scale - 1.0) <= 1e-9;
+            const exact_or_double a = scale_of(o);
+            const exact_or_double b = scale_of(ops[0]);
+            return at_most(a, b) && at_most(b, a);
         })) {
         r.agree = true;
         r.unit = ops[0].scale;
         return r;
     }
     std::size_t best_count = 0;
-    double best_unit = ops[0].scale;
-    double best_tolerance = 0.0;
+    std::size_t best_operand = 0;
+    subset_value best_subset;
     // A long sum tries only a few distinct units, so the search stays linear in its length.
     constexpr std::size_t max_units_tried = 16;
     std::array<double, max_units_tried> tried{};
@@ -216,8 +357,8 @@ reconciliation reconcile(std::span<const scaled_operand> ops, flipped_literal fl
         const std::size_t n = searched(ops[i], count);
         for (std::uint32_t mask = 0; mask < (1U << n) && best_count < count; ++mask) {
             const subset_value s = subset(ops[i], i, mask, flip);
-            const double u = ops[i].scale / s.product;
             if (n == 0) {
+                const double u = ops[i].scale;
                 if (std::find(tried.begin(),
                               tried.begin() + static_cast<std::ptrdiff_t>(tried_count),
                               u) != tried.begin() + static_cast<std::ptrdiff_t>(tried_count))
@@ -228,22 +369,23 @@ reconciliation reconcile(std::span<const scaled_operand> ops, flipped_literal fl
             }
             std::size_t reached = 0;
             for (std::size_t j = 0; j < count; ++j)
-                if (j == i || reaches(ops[j], j, count, u, s.tolerance, flip, nullptr))
+                if (j == i || reaches(ops[j], j, count, ops[i], s, flip, nullptr))
                     ++reached;
             if (reached > best_count) {
                 best_count = reached;
-                best_unit = u;
-                best_tolerance = s.tolerance;
+                best_operand = i;
+                best_subset = s;
             }
         }
     }
-    r.unit = best_unit;
+    r.unit = ops[best_operand].scale / best_subset.product;
     r.agree = best_count == count;
     bool reference_found = false;
     bool odd_found = false;
     for (std::size_t j = 0; j < count; ++j) {
-        bool plain = false;
-        if (reaches(ops[j], j, count, best_unit, best_tolerance, flip, &plain)) {
+        bool plain = j == best_operand && best_subset.product == 1.0;
+        if (j == best_operand ||
+            reaches(ops[j], j, count, ops[best_operand], best_subset, flip, &plain)) {
             if (!reference_found) {
                 r.reference = j;
                 reference_found = true;
@@ -257,34 +399,105 @@ reconciliation reconcile(std::span<const scaled_operand> ops, flipped_literal fl
     return r;
 }
 
-std::string format_factor(double factor) {
+namespace {
+
+std::string power_text(int k) {
     static constexpr std::string_view superscripts[] = {"⁰", "¹", "²", "³", "⁴",
                                                         "⁵", "⁶", "⁷", "⁸", "⁹"};
-    const auto power_text = [](int k) {
-        std::string out = "10";
-        if (k < 0)
-            out += "⁻";
-        for (const char c : std::to_string(k < 0 ? -k : k))
-            out += superscripts[c - '0'];
-        return out;
-    };
+    std::string out = "10";
+    if (k < 0)
+        out += "⁻";
+    for (const char c : std::to_string(k < 0 ? -k : k))
+        out += superscripts[c - '0'];
+    return out;
+}
+
+std::string power_of_ten_text(int k) {
+    if (k >= 0 && k <= 4)
+        return "1" + std::string(static_cast<std::size_t>(k), '0');
+    if (k < 0 && k >= -3)
+        return "0." + std::string(static_cast<std::size_t>(-k - 1), '0') + "1";
+    return power_text(k);
+}
+
+// A whole number's power of ten, when it is one (1000 gives 3).
+std::optional<int> decades_of(std::int64_t n) {
+    int k = 0;
+    while (n > 1 && n % 10 == 0) {
+        n /= 10;
+        ++k;
+    }
+    return n == 1 ? std::optional<int>(k) : std::nullopt;
+}
+
+// Digits of a terminating fraction, when it has few of them ("0.3048"); empty otherwise.
+std::optional<std::string> short_decimal(const rational& f) {
+    std::int64_t rest = f.den();
+    int twos = 0;
+    int fives = 0;
+    for (; rest % 2 == 0; rest /= 2)
+        ++twos;
+    for (; rest % 5 == 0; rest /= 5)
+        ++fives;
+    const int places = std::max(twos, fives);
+    if (rest != 1 || places > 9)
+        return std::nullopt;
+    std::int64_t scale = 1;
+    for (int i = 0; i < places; ++i)
+        scale *= 10;
+    std::int64_t digits = 0;
+    if (__builtin_mul_overflow(f.num(), scale / f.den(), &digits))
+        return std::nullopt;
+    std::string text = std::to_string(digits);
+    if (text.size() > 10)
+        return std::nullopt;
+    if (places == 0)
+        return text;
+    if (text.size() <= static_cast<std::size_t>(places))
+        text.insert(0, static_cast<std::size_t>(places) + 1 - text.size(), '0');
+    text.insert(text.size() - static_cast<std::size_t>(places), ".");
+    return text;
+}
+
+} // namespace
+
+std::string format_factor(double factor) {
     if (!std::isfinite(factor) || factor <= 0)
         return fmt::format("{:g}", factor);
     int k = 0;
     if (is_power_of_ten(factor, &k) ||
-        std::abs(factor / std::pow(10.0, std::round(std::log10(factor))) - 1.0) < 1e-9) {
-        k = static_cast<int>(std::round(std::log10(factor)));
-        if (k >= 0 && k <= 4)
-            return "1" + std::string(static_cast<std::size_t>(k), '0');
-        if (k < 0 && k >= -3)
-            return "0." + std::string(static_cast<std::size_t>(-k - 1), '0') + "1";
-        return power_text(k);
-    }
+        std::abs(factor / std::pow(10.0, std::round(std::log10(factor))) - 1.0) < 1e-9)
+        return power_of_ten_text(static_cast<int>(std::round(std::log10(factor))));
     std::string text = fmt::format("{:.6g}", factor);
     const std::size_t e = text.find('e');
     if (e == std::string::npos)
         return text;
     return text.substr(0, e) + " × " + power_text(std::atoi(text.c_str() + e + 1));
+}
+
+std::string format_factor(const std::optional<rational>& exact, double approx) {
+    if (!exact || exact->num() <= 0)
+        return format_factor(approx);
+    const rational& f = *exact;
+    if (f.den() == 1) {
+        if (const auto k = decades_of(f.num()))
+            return power_of_ten_text(*k);
+        if (f.num() <= 1'000'000'000)
+            return std::to_string(f.num());
+    }
+    if (f.num() == 1) {
+        if (const auto k = decades_of(f.den()))
+            return power_of_ten_text(-*k);
+        return fmt::format("1/{}", f.den());
+    }
+    if (const auto digits = short_decimal(f))
+        return *digits;
+    // 1/0.3048 reads as the foot it is; 1250/381 does not.
+    if (const auto inverse_digits = short_decimal(rational(f.den(), f.num())))
+        return "1/" + *inverse_digits;
+    if (f.num() < 100 && f.den() < 100)
+        return fmt::format("{}/{}", f.num(), f.den());
+    return format_factor(f.to_double());
 }
 
 } // namespace plumb

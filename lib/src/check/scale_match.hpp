@@ -2,7 +2,10 @@
 // multiplicative path, and which of those numbers reconcile one term's units with another's.
 #pragma once
 
+#include "plumb/rational.hpp"
+
 #include <cstdint>
+#include <optional>
 #include <span>
 #include <string>
 #include <string_view>
@@ -13,7 +16,11 @@ namespace plumb {
 // conversion factor (1000, 3.281). Which it is is decided where terms meet.
 struct scale_literal {
     double value = 1.0;     // as written, without sign
-    double tolerance = 0.0; // relative: one unit in the last printed digit (7758 for 7758.37)
+    double tolerance = 0.0; // relative: half a unit in the last printed digit, at most 1 %
+    // The same exactly: the least and greatest values the printed digits may round from
+    // (7757.5 and 7758.5 for 7758). Empty where the number does not fit a 64-bit fraction.
+    std::optional<rational> low;
+    std::optional<rational> high;
     double exponent = 1.0;  // along the path: L/1000 gives -1, (L/1000)^2 gives -2
     std::uint32_t node = 0; // where it is written, to mark it
     std::int8_t power = 0;  // the power, when the value is a power of ten
@@ -25,11 +32,14 @@ struct scale_literal {
 // One operand where terms meet: the SI value of one written unit of it, and its numbers.
 struct scaled_operand {
     double scale = 1.0;
+    const rational* exact_scale = nullptr; // the same exactly, where every unit is exact
     std::span<const scale_literal> literals;
 };
 
-// The literal's relative tolerance and how it is written, from its text ("8.34", "1e6").
-scale_literal read_literal(std::string_view text, double value, std::uint32_t node);
+// The literal's interval and how it is written, from its text ("8.34", "1e6"). `exact` is its
+// value when the caller knows it (a sum of numbers); else the text is read.
+scale_literal read_literal(std::string_view text, double value, std::uint32_t node,
+                           std::optional<rational> exact = std::nullopt);
 
 // Whether the operands can agree: each one's value in a common unit, some of its numbers taken
 // as conversion factors. `flip` inverts one literal (operand index, literal index) first, to
@@ -54,8 +64,14 @@ bool looks_like_conversion(const scale_literal& l, bool allow_hundred);
 // The operand's value per SI unit once its conversion-like numbers are applied: what an
 // engineer reads the term as.
 double apparent_scale(const scaled_operand& op);
+std::optional<rational> apparent_exact_scale(const scaled_operand& op); // empty if not exact
+
+// The literal as printed, raised to a whole power, exactly; empty where that does not fit.
+std::optional<rational> printed_power(const scale_literal& l, double exponent);
 
 // 1000, 0.001, 10⁶, 10⁻⁶, 0.0438126, 2.5 × 10⁷: as an engineer reads a factor.
+// From the exact value where there is one: 1/3600, 0.3048, 5/9.
 std::string format_factor(double factor);
+std::string format_factor(const std::optional<rational>& exact, double approx);
 
 } // namespace plumb

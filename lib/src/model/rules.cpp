@@ -6,7 +6,7 @@
 namespace plumb::rules {
 
 std::span<const rule_info> all() {
-    static constexpr std::array<rule_info, 33> table = {{
+    static constexpr std::array<rule_info, 34> table = {{
         {syntax, "a line does not follow the notation"},
         {sum_mismatch, "the terms of a sum or difference differ in dimension"},
         {side_mismatch, "the sides of an equation or limit differ in dimension"},
@@ -38,6 +38,8 @@ std::span<const rule_info> all() {
          "a `# reviewed` mark or an accepted-findings entry that no longer accepts anything"},
         {coefficient_mismatch, "a coefficient marked ?[...] is not the dimension or SI value "
                                "stated for it"},
+        {trade_constant, "a number the trade writes for a physical property where a formula "
+                         "needs a unit conversion, such as 8.34 lb/gal of water (note)"},
         {result_unit, "a workbook formula computes a dimension other than its cell's unit"},
         {mixed_range, "a workbook range holds cells of different dimensions or units"},
         {no_unit, "a workbook cell feeds formulas but has no unit (warning)"},

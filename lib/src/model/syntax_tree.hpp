@@ -44,6 +44,7 @@ enum class expr_kind : std::uint8_t {
 struct reference_value {
     std::optional<dimension> dim; // empty: unknown (no unit, text, below an error): not checked
     double scale = 1.0;           // SI value of one written unit
+    std::optional<rational> exact_scale;     // the same exactly, where the unit is exact
     const unit_definition* offset = nullptr; // set for °C, gauge...
     std::optional<rational> value;           // a dimensionless constant cell's exact value
 };

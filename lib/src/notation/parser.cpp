@@ -4,6 +4,7 @@
 #include "notation/parser.hpp"
 
 #include "model/node_stack.hpp"
+#include "notation/described_kind.hpp"
 
 #include "plumb/constants.hpp"
 #include "plumb/notation.hpp"
@@ -115,6 +116,7 @@ struct parse_state {
     base_dimension pending_base = base_dimension::mass;
     std::optional<rational> pending_exponent;
     std::vector<unit_value> units;
+    std::vector<std::size_t> unknown_units; // this line's unknown-unit diagnostics
     span pending_use_path{};
     span pending_cells_sheet{}, pending_cells_area{};
     span pending_unit_name{};
@@ -150,6 +152,9 @@ struct parse_state {
     template <typename Input> [[nodiscard]] span range(const Input& in) const {
         return range(in.begin(), in.end());
     }
+    [[nodiscard]] std::string_view text(span r) const {
+        return {file_begin + r.begin, static_cast<std::size_t>(r.end - r.begin)};
+    }
 
     // The file's own units by name (views into the source), so each unit written is found in
     // constant time however many `measure` lines there are. An index may be stale after a
@@ -183,6 +188,7 @@ struct parse_state {
         bracket_dimension = {};
         pending_exponent.reset();
         units.clear();
+        unknown_units.clear();
         pending_study_name = pending_scale_text = {};
         pending_dependent_count = 0;
         pending_unit_size = 1.0;
@@ -574,9 +580,9 @@ std::optional<unit_value> lookup_digit_power(std::string_view text, const parse_
     return base;
 }
 
-std::string unknown_unit_message(std::string_view text) {
+std::string unknown_unit_message(std::string_view text, const dimension* kind = nullptr) {
     std::string message = fmt::format("unknown unit '{}'", text);
-    const auto near = unit_table::standard().nearest(text);
+    const auto near = unit_table::standard().nearest(text, 3, kind);
     if (!near.empty()) {
         message += "; did you mean ";
         for (std::size_t i = 0; i < near.size(); ++i)
@@ -615,6 +621,7 @@ template <> struct action<nt::unit_symbol> {
             s.report(rules::unknown_unit, why, s.range(in));
         } else {
             s.report(rules::unknown_unit, unknown_unit_message(text), s.range(in));
+            s.unknown_units.push_back(s.out.diagnostics.size() - 1);
             s.out.diagnostics.back().notes.push_back(
                 {fmt::format("define it on a line of its own: {}; or declare the symbol by "
                              "its dimension, as in [L T^-1]; `plumb catalogue` lists the "
@@ -761,8 +768,23 @@ template <> struct action<nt::description_text> {
         s.pending_description = s.range(in);
     }
 };
+// An unknown unit's suggestions, ranked again once the description says what kind of quantity
+// the symbol is.
+void rank_suggestions_by_description(parse_state& s) {
+    if (s.unknown_units.empty() || s.pending_description.begin == s.pending_description.end)
+        return;
+    const auto kind = described_kind(s.text(s.pending_description));
+    if (!kind)
+        return;
+    for (const std::size_t i : s.unknown_units) {
+        diagnostic& d = s.out.diagnostics[i];
+        d.message = unknown_unit_message(s.text(d.where.range), &*kind);
+    }
+}
+
 template <> struct action<nt::declaration> {
     template <typename In> static void apply(const In& in, parse_state& s) {
+        rank_suggestions_by_description(s);
         const auto count = static_cast<std::uint32_t>(s.out.names.size()) - s.pending_first_name;
         s.out.declarations.push_back({s.range(in), s.pending_spec, s.pending_description,
                                       s.pending_value, s.pending_kind, s.pending_first_name,
@@ -788,6 +810,7 @@ template <> struct action<nt::cells_spec> {
 };
 template <> struct action<nt::cells_statement> {
     template <typename In> static void apply(const In& in, parse_state& s) {
+        rank_suggestions_by_description(s);
         s.out.cells.push_back({s.range(in), s.pending_cells_sheet, s.pending_cells_area,
                                s.pending_spec, s.pending_description, s.pending_kind});
     }

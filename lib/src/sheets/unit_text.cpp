@@ -129,6 +129,7 @@ std::optional<written_unit> evaluate(std::string_view text) {
     written_unit u;
     u.dim = *q.dim;
     u.scale = q.si_factor;
+    u.exact_scale = q.si_exact;
     u.text = trim(text);
     if (q.single_unit != nullptr && q.single_unit->scale != unit_scale::absolute)
         u.offset = q.single_unit;

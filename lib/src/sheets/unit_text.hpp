@@ -14,6 +14,7 @@ namespace plumb::sheets {
 struct written_unit {
     dimension dim;
     double scale = 1.0;                      // SI value of one unit
+    std::optional<rational> exact_scale;     // the same exactly, where the unit is exact
     const unit_definition* offset = nullptr; // °C, °F or a gauge pressure
     std::string text;                        // as written in the cell
 };

@@ -5,13 +5,18 @@
 
 #include "check/formula_checker.hpp"
 #include "check/gravity_number.hpp"
+#include "check/scale_match.hpp"
 #include "plumb/rules.hpp"
 #include "sheets/a1_front_end.hpp"
+#include "sheets/input_requirement.hpp"
+#include "units/exact_factor.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 #include <fmt/format.h>
 #include <map>
+#include <set>
 
 namespace plumb::sheets {
 
@@ -24,6 +29,17 @@ std::string describe(const dimension& d) {
     return name.empty() ? d.to_string() : fmt::format("{} ({})", d.to_string(), name);
 }
 
+// "a length [L]", "a dimensionless number [1]": what a value must be, in words.
+std::string kind_of(const dimension& d) {
+    if (d.is_dimensionless())
+        return "a dimensionless number [1]";
+    const std::string_view name = quantity_name(d);
+    if (name.empty())
+        return d.to_string();
+    const bool vowel = std::string_view("aeiou").find(name.front()) != std::string_view::npos;
+    return fmt::format("{} {} {}", vowel ? "an" : "a", name, d.to_string());
+}
+
 // A cell's unit and where it came from, or none.
 struct cell_unit {
     written_unit unit;
@@ -34,6 +50,7 @@ struct cell_unit {
 struct cell_value {
     std::optional<dimension> dim; // empty: unknown, not checked
     double scale = 1.0;
+    std::optional<rational> exact_scale; // the same exactly, where its unit is exact
     const unit_definition* offset = nullptr;
     std::optional<rational> value;
     const cell_unit* unit = nullptr; // the unit written for it; null when computed
@@ -98,6 +115,7 @@ class workbook_checker {
     };
     std::map<std::tuple<std::size_t, std::uint64_t, std::uint64_t>, cell_value> range_cache_;
     std::uint32_t current_ = 0; // the formula being checked
+    std::set<std::pair<const void*, const void*>> reported_conflicts_;
 
     void collect_formulas() {
         text_rows_.resize(book_.sheets.size());
@@ -287,12 +305,20 @@ class workbook_checker {
         return it->second ? &*it->second : nullptr;
     }
 
-    std::optional<cell_unit> discover_unit(std::size_t s, cell_address a) const {
+    std::optional<cell_unit> discover_unit(std::size_t s, cell_address a) {
         const sheet& sh = book_.sheets[s];
-        // 1. The sidecar.
-        for (const auto& au : units_.areas)
-            if ((au.sheet.empty() || au.sheet == sh.name) && au.area.contains(a))
-                return cell_unit{au.unit.unit, fmt::format("from {}", au.unit.origin)};
+        // 1. The sidecar beside the workbook, then those given with --dict.
+        const outside_units::area_unit* chosen = nullptr;
+        for (const auto& au : units_.areas) {
+            if ((!au.sheet.empty() && au.sheet != sh.name) || !au.area.contains(a))
+                continue;
+            if (chosen == nullptr)
+                chosen = &au;
+            else if (au.unit.origin != chosen->unit.origin && differ(au.unit, chosen->unit))
+                report_sidecar_conflict(*chosen, au, s, a);
+        }
+        if (chosen != nullptr)
+            return cell_unit{chosen->unit.unit, fmt::format("from {}", chosen->unit.origin)};
         // 2. A defined name a dictionary declares.
         if (!units_.names.empty())
             for (const auto& n : book_.names) {
@@ -328,10 +354,42 @@ class workbook_checker {
         return std::nullopt;
     }
 
+    static bool differ(const declared_unit& a, const declared_unit& b) {
+        return !(a.unit.dim == b.unit.dim) || a.unit.offset != b.unit.offset ||
+               std::abs(a.unit.scale / b.unit.scale - 1.0) > 1e-12;
+    }
+
+    // Two cells lines from different files give one cell different units: reported once per
+    // pair of lines, at the line whose unit is used.
+    void report_sidecar_conflict(const outside_units::area_unit& used,
+                                 const outside_units::area_unit& other, std::size_t s,
+                                 cell_address a) {
+        if (!reported_conflicts_.insert({&used, &other}).second)
+            return;
+        const std::string cell = cell_text({book_.sheets[s].name, a1_name(a)});
+        diagnostic d;
+        d.level = severity::error;
+        d.rule = std::string(rules::sidecar_problem);
+        d.message = fmt::format("{} gives {} the unit '{}', but {} gives it '{}'", used.unit.origin,
+                                cell, used.unit.unit.text, other.unit.origin, other.unit.unit.text);
+        d.where = used.where;
+        if (other.where.file != nullptr)
+            d.notes.push_back(
+                {fmt::format("{} says '{}' here", other.unit.origin, other.unit.unit.text),
+                 other.where});
+        d.notes.push_back({fmt::format("the cells are checked with '{}' from {}, which comes first "
+                                       "(the sidecar beside the workbook, then --dict files in "
+                                       "order); give each cell one unit",
+                                       used.unit.unit.text, used.unit.origin),
+                           {}});
+        out_.push_back(std::move(d));
+    }
+
     static cell_value from_unit(const cell_unit& u) {
         cell_value v;
         v.dim = u.unit.dim;
         v.scale = u.unit.scale;
+        v.exact_scale = u.unit.exact_scale;
         v.offset = u.unit.offset;
         v.unit = &u;
         return v;
@@ -440,6 +498,7 @@ class workbook_checker {
             syntax::reference_value& target = lowered_.tree.references[r.reference];
             target.dim = v.dim;
             target.scale = v.scale;
+            target.exact_scale = v.exact_scale;
             target.offset = v.offset;
             target.value = v.value;
         }
@@ -465,6 +524,7 @@ class workbook_checker {
         if (!written) {
             f.result.dim = computed->dim;
             f.result.scale = computed->scale;
+            f.result.exact_scale = computed->exact_scale;
             f.result.offset = computed->offset;
             return;
         }
@@ -523,10 +583,11 @@ class workbook_checker {
         return it == range_cache_.end() ? cell_value{} : it->second;
     }
 
-    // The numbers multiplied into the formula's result, each raised to the power it enters
-    // with (a divisor to -1, (B4/1000)^2 to -2): the outermost product only, where a
-    // conversion factor written into a formula stands.
-    void top_factors(std::uint32_t root, double root_exponent, std::vector<double>& out) const {
+    // The numbers multiplied into the formula's result, each with the power it enters with (a
+    // divisor -1, (B4/1000)^2 -2): the outermost product only, where a conversion factor
+    // written into a formula stands. Each keeps the interval its printed digits stand for.
+    void top_factors(std::uint32_t root, double root_exponent,
+                     std::vector<scale_literal>& out) const {
         // Left to right over an explicit stack: a product of 100,000 cells must not recurse
         // once per factor.
         std::vector<std::pair<std::uint32_t, double>> pending{{root, root_exponent}};
@@ -551,9 +612,13 @@ class workbook_checker {
                         pending.emplace_back(n.lhs, exponent * e->to_double());
                 break;
             case syntax::expr_kind::number: {
-                const auto v = rational::parse(listing_->text(n.range));
-                if (v && !v->is_zero() && out.size() < 32)
-                    out.push_back(std::pow(v->to_double(), exponent));
+                const std::string_view text = listing_->text(n.range);
+                const auto v = rational::parse(text);
+                if (v && !v->is_zero() && out.size() < 32) {
+                    scale_literal l = read_literal(text, v->to_double(), node, v);
+                    l.exponent = exponent;
+                    out.push_back(l);
+                }
                 break;
             }
             default:
@@ -562,43 +627,13 @@ class workbook_checker {
         }
     }
 
-    // The numbers of the outermost product with the power each enters with, as top_factors
-    // finds them, and where each is written.
-    void top_numbers(std::uint32_t node, double exponent, std::vector<scale_literal>& out) const {
-        const auto& n = lowered_.tree.nodes[node];
-        switch (n.kind) {
-        case syntax::expr_kind::group:
-            top_numbers(n.lhs, exponent, out);
-            return;
-        case syntax::expr_kind::multiply:
-        case syntax::expr_kind::divide:
-            top_numbers(n.lhs, exponent, out);
-            top_numbers(n.rhs, n.kind == syntax::expr_kind::divide ? -exponent : exponent, out);
-            return;
-        case syntax::expr_kind::number: {
-            const auto v = rational::parse(listing_->text(n.range));
-            if (v && !v->is_zero() && out.size() < 32) {
-                scale_literal l;
-                l.value = std::abs(v->to_double());
-                l.exponent = exponent;
-                l.node = node;
-                out.push_back(l);
-            }
-            return;
-        }
-        default:
-            return;
-        }
-    }
-
     // =B4*9.81*B5 beside Pa: standard gravity written as a number, as in the notation (see
-    // check/gravity_number.hpp). On a reading, the formula's value takes the cell's dimension
-    // and the note is made; the scale is then compared as for any formula.
-    bool read_gravity_in_cell(const syntax::formula& formula, value_type& computed,
-                              const cell_unit& written, std::vector<double>& factors) {
-        std::vector<scale_literal> numbers;
-        top_numbers(lowered_.tree.sides[formula.first_side].root, 1.0, numbers);
-        if (numbers.empty() || numbers.size() > 8)
+    // check/gravity_number.hpp). On a reading, the formula's value takes the cell's dimension,
+    // the number leaves the factors, and the note is made; the scale is then compared as for
+    // any formula.
+    bool read_gravity_in_cell(value_type& computed, const cell_unit& written,
+                              std::vector<scale_literal>& factors) {
+        if (factors.empty() || factors.size() > 8)
             return false;
         dimension lacking;
         try {
@@ -611,38 +646,36 @@ class workbook_checker {
                                        dimension::base(base_dimension::time);
         std::array<std::string_view, 8> texts{};
         std::array<bool, 8> fits{};
-        for (std::size_t k = 0; k < numbers.size(); ++k) {
-            texts[k] = listing_->text(lowered_.tree.nodes[numbers[k].node].range);
+        for (std::size_t k = 0; k < factors.size(); ++k) {
+            texts[k] = listing_->text(lowered_.tree.nodes[factors[k].node].range);
             try {
-                fits[k] = numbers[k].exponent == 1.0 || numbers[k].exponent == -1.0
-                              ? acceleration.pow(rational(
-                                    static_cast<std::int64_t>(numbers[k].exponent))) == lacking
-                              : false;
+                fits[k] = (factors[k].exponent == 1.0 || factors[k].exponent == -1.0) &&
+                          acceleration.pow(
+                              rational(static_cast<std::int64_t>(factors[k].exponent))) == lacking;
             } catch (const std::exception&) {
                 fits[k] = false;
             }
         }
         const auto reading =
-            read_gravity_number(computed.scale, written.unit.scale, numbers,
-                                {texts.data(), numbers.size()}, {fits.data(), numbers.size()});
+            read_gravity_number(computed.scale, written.unit.scale, factors,
+                                {texts.data(), factors.size()}, {fits.data(), factors.size()});
         if (!reading)
             return false;
+        const std::uint32_t node = factors[reading->literal].node;
+        const std::string_view number = texts[reading->literal];
         computed.dim = written.unit.dim;
         computed.scale = reading->term_scale;
-        factors.clear();
-        for (std::size_t k = 0; k < numbers.size(); ++k)
-            if (k != reading->literal)
-                factors.push_back(std::pow(numbers[k].value, numbers[k].exponent));
+        computed.exact_scale.reset();
+        factors.erase(factors.begin() + static_cast<std::ptrdiff_t>(reading->literal));
         const double g = reading->stands_for;
         diagnostic& d = report(
             severity::note, rules::gravity_number,
             std::abs(g - 9.80665) < 1e-9
-                ? fmt::format("'{}' is read as standard gravity, g_n = 9.80665 m/s\u00B2",
-                              texts[reading->literal])
+                ? fmt::format("'{}' is read as standard gravity, g_n = 9.80665 m/s\u00B2", number)
                 : fmt::format("'{}' is read as standard gravity in the units around it: g_n = "
                               "9.80665 m/s\u00B2 comes to {:.5g} there",
-                              texts[reading->literal], g),
-            lowered_.tree.nodes[numbers[reading->literal].node].range);
+                              number, g),
+            lowered_.tree.nodes[node].range);
         d.notes.push_back({"write 9.80665 or a cell that holds g with its unit to say so", {}});
         return true;
     }
@@ -652,10 +685,10 @@ class workbook_checker {
         if (computed.zero)
             return;
         const std::string where_unit = fmt::format("'{}' ({})", written.unit.text, written.origin);
-        std::vector<double> factors;
-        bool factors_found = false;
+        std::vector<scale_literal> factors;
+        top_factors(lowered_.tree.sides[formula.first_side].root, 1.0, factors);
         if (!(computed.dim == written.unit.dim))
-            factors_found = read_gravity_in_cell(formula, computed, written, factors);
+            read_gravity_in_cell(computed, written, factors);
         if (!(computed.dim == written.unit.dim)) {
             diagnostic& d =
                 report(severity::error, rules::result_unit,
@@ -709,54 +742,94 @@ class workbook_checker {
             return;
         }
         const double needed = computed.scale / written.unit.scale;
-        if (!std::isfinite(needed) || std::abs(needed - 1.0) <= 1e-9)
+        if (!std::isfinite(needed))
             return;
-        if (!factors_found)
-            top_factors(lowered_.tree.sides[formula.first_side].root, 1.0, factors);
-        // Published factors are often rounded to four significant figures (3.281, 0.0283):
-        // common practice; a relative 1e-3 accepts those and nothing a unit slip gives.
-        const auto near = [](double a, double b) { return std::abs(a / b - 1.0) <= 1e-3; };
-        const auto supplies = [&](double r) {
-            for (std::size_t i = 0; i < factors.size(); ++i) {
-                if (near(factors[i], r))
-                    return true;
-                for (std::size_t j = i + 1; j < factors.size(); ++j)
-                    if (near(factors[i] * factors[j], r))
-                        return true;
-            }
-            return false;
-        };
-        if (supplies(needed))
+        // The numbers written into the formula reconcile its units with the cell's when some of
+        // them, each anywhere within half a unit of its last printed digit (3.281 for 3.28084),
+        // make up the ratio exactly: the rule of the notation's checker.
+        const std::array<scaled_operand, 2> parts{
+            scaled_operand{computed.scale, computed.exact_scale ? &*computed.exact_scale : nullptr,
+                           factors},
+            scaled_operand{written.unit.scale,
+                           written.unit.exact_scale ? &*written.unit.exact_scale : nullptr,
+                           {}}};
+        if (reconcile(parts).agree)
             return;
-        const bool reversed = supplies(1.0 / needed);
+        bool reversed = false;
+        for (std::size_t k = 0; k < factors.size() && k < 10 && !reversed; ++k)
+            reversed = reconcile(parts, {0, k}).agree;
+        if (!reversed && report_near_factor(f, factors, computed, written, needed))
+            return;
         // How far off the value shown is: after the factors already written, when what is
         // left is a clean power of ten (a missed "/1000"); otherwise the whole ratio.
         double written_product = 1.0;
-        for (const double x : factors)
-            written_product *= x;
+        for (const auto& x : factors)
+            written_product *= std::pow(x.value, x.exponent);
         const double left = needed / written_product;
         const double decades = std::log10(std::abs(left));
         const double off =
             std::abs(decades - std::round(decades)) < 1e-9 && std::round(decades) != 0 ? left
                                                                                        : needed;
+        const std::optional<rational> exact_needed =
+            exact_product(computed.exact_scale, written.unit.exact_scale, true);
+        const std::optional<rational> exact_inverse =
+            exact_product(rational(1), exact_needed, true);
+        const bool whole_ratio = off == needed;
+        const std::string off_text =
+            off >= 1 ? format_factor(whole_ratio ? exact_needed : std::nullopt, off)
+                     : format_factor(whole_ratio ? exact_inverse : std::nullopt, 1.0 / off);
         diagnostic& d = report(
             severity::error, rules::unit_scale,
-            reversed
-                ? fmt::format("the conversion factor in this formula is the wrong way round: "
-                              "to give {} it must multiply by {:.6g}, but it multiplies by "
-                              "{:.6g}",
-                              written.unit.text, needed, 1.0 / needed)
-                : fmt::format("as written, this formula does not give {}, the unit written "
-                              "for its cell: the value shown is {:.6g} times too {}",
-                              where_unit, off >= 1 ? off : 1.0 / off, off >= 1 ? "small" : "large"),
+            reversed ? fmt::format("the conversion factor in this formula is the wrong way round: "
+                                   "to give {} it must multiply by {}, but it multiplies by {}",
+                                   written.unit.text, format_factor(exact_needed, needed),
+                                   format_factor(exact_inverse, 1.0 / needed))
+                     : fmt::format("as written, this formula does not give {}, the unit written "
+                                   "for its cell: the value shown is {} times too {}",
+                                   where_unit, off_text, off >= 1 ? "small" : "large"),
             formula.range);
         if (!reversed)
-            d.notes.push_back({fmt::format("its inputs give numbers in units of {:.6g} {}; "
+            d.notes.push_back({fmt::format("its inputs give numbers in units of {} {}; "
                                            "convert them in the formula, or write the unit they "
                                            "give",
-                                           needed, written.unit.text),
+                                           format_factor(exact_needed, needed), written.unit.text),
                                {}});
         add_input_notes(d, f);
+    }
+
+    // "=B1*2.204" for kg to lb (2.20462): a number within 1 % of the conversion the units need,
+    // but not that conversion rounded. Says which factor, and what it should read.
+    bool report_near_factor(const formula_cell& f, std::span<const scale_literal> factors,
+                            const value_type& computed, const cell_unit& written, double needed) {
+        for (const scale_literal& l : factors) {
+            if (std::abs(l.exponent) != 1.0)
+                continue;
+            const double wanted = l.exponent > 0 ? needed : 1.0 / needed;
+            if (std::abs(l.value / wanted - 1.0) > 0.01)
+                continue;
+            const std::string_view text = listing_->text(lowered_.tree.nodes[l.node].range);
+            const std::size_t point = text.find('.');
+            const int decimals =
+                point == std::string_view::npos ? 0 : static_cast<int>(text.size() - point - 1);
+            const std::optional<rational> exact_needed =
+                exact_product(computed.exact_scale, written.unit.exact_scale, true);
+            const std::optional<rational> exact_wanted =
+                l.exponent > 0 ? exact_needed : exact_product(rational(1), exact_needed, true);
+            diagnostic& d = report(
+                severity::error, rules::unit_scale,
+                fmt::format("the factor {} is near the conversion to {} but is not it: the units "
+                            "need {} ({:.6g}), which to {} decimal{} reads {:.{}f}",
+                            text, written.unit.text, format_factor(exact_wanted, wanted), wanted,
+                            decimals, decimals == 1 ? "" : "s", wanted, decimals),
+                lowered_.tree.nodes[l.node].range);
+            d.notes.push_back({fmt::format("as written the value shown is off by a factor of "
+                                           "{:.6g}",
+                                           wanted / l.value),
+                               {}});
+            add_input_notes(d, f);
+            return true;
+        }
+        return false;
     }
 
     void add_input_notes(diagnostic& d, const formula_cell& f) {
@@ -777,6 +850,102 @@ class workbook_checker {
     }
 
     // ---- Inputs without units -------------------------------------------------------------
+
+    // What each formula that uses the input requires of it, solved from its uses.
+    struct use_requirement {
+        std::uint32_t user;
+        input_requirement need;
+    };
+
+    std::vector<use_requirement> requirements_for(std::uint64_t key,
+                                                  const std::vector<std::uint32_t>& users) {
+        const std::size_t s = static_cast<std::size_t>(key >> 45);
+        const cell_address a{static_cast<std::uint32_t>((key >> 20) & 0x1FFFFFFULL),
+                             static_cast<std::uint32_t>(key & 0xFFFFF)};
+        std::vector<use_requirement> out;
+        std::vector<input_role> roles;
+        for (const std::uint32_t id : users) {
+            const formula_cell& f = formulas_[id];
+            if (f.lowered.formula == syntax::no_index)
+                continue;
+            roles.assign(lowered_.tree.references.size(), input_role::other);
+            for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i) {
+                const lowered_reference& r = lowered_.references[f.lowered.first_reference + i];
+                if (r.sheet != s || !r.area.contains(a))
+                    continue;
+                roles[r.reference] =
+                    r.area.single() ? input_role::the_input : input_role::range_with_it;
+            }
+            std::optional<syntax::reference_value> result;
+            if (const cell_unit* u = unit_of(f.sheet, f.source->at))
+                result = syntax::reference_value{
+                    u->unit.dim, u->unit.scale, u->unit.exact_scale, u->unit.offset, {}};
+            const syntax::formula& formula = lowered_.tree.formulas[f.lowered.formula];
+            for (const auto& need : requirements_of_input(
+                     lowered_.tree, lowered_.tree.sides[formula.first_side].root, roles, result))
+                out.push_back({id, need});
+        }
+        return out;
+    }
+
+    // The unit of a cell a user formula refers to that has this dimension and scale, to name
+    // the scale by example ("mm, as C4").
+    std::optional<std::string> unit_like(const formula_cell& f, const input_requirement& need) {
+        for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i) {
+            const lowered_reference& r = lowered_.references[f.lowered.first_reference + i];
+            if (!r.area.single())
+                continue;
+            const cell* c = book_.sheets[r.sheet].find(r.area.first);
+            if (c == nullptr || c->kind != cell_kind::number)
+                continue;
+            const cell_unit* u = unit_of(r.sheet, c->at);
+            if (u != nullptr && u->unit.dim == need.dim && u->unit.offset == nullptr &&
+                std::abs(u->unit.scale / *need.scale - 1.0) <= 1e-9)
+                return fmt::format("{}, as {} is", u->unit.text, a1_name(r.area));
+        }
+        return std::nullopt;
+    }
+
+    // "C36 uses it as [L] (length)", or where its uses disagree.
+    void say_what_uses_require(diagnostic& d, std::uint64_t key,
+                               const std::vector<std::uint32_t>& users) {
+        const std::vector<use_requirement> needs = requirements_for(key, users);
+        if (needs.empty())
+            return;
+        const auto differs = std::find_if(needs.begin(), needs.end(), [&](const auto& n) {
+            return !(n.need.dim == needs.front().need.dim);
+        });
+        if (differs != needs.end()) {
+            d.message += fmt::format("; its uses disagree about its unit: it is used as {} in {} "
+                                     "but as {} in {}",
+                                     kind_of(needs.front().need.dim), cell_name(needs.front().user),
+                                     kind_of(differs->need.dim), cell_name(differs->user));
+            return;
+        }
+        std::vector<std::string> names;
+        for (const auto& n : needs)
+            if (std::find(names.begin(), names.end(), cell_name(n.user)) == names.end())
+                names.push_back(cell_name(n.user));
+        d.message += fmt::format("; it is used as {} in {}", kind_of(needs.front().need.dim),
+                                 fmt::join(names, " and "));
+        // The scale, when every use fixes the same one.
+        const bool one_scale = std::all_of(needs.begin(), needs.end(), [&](const auto& n) {
+            return n.need.scale && needs.front().need.scale &&
+                   std::abs(*n.need.scale / *needs.front().need.scale - 1.0) <= 1e-9;
+        });
+        if (!one_scale)
+            return;
+        if (const auto like = unit_like(formulas_[needs.front().user], needs.front().need))
+            d.notes.push_back({fmt::format("for {} to give the unit written for it, the value "
+                                           "must be in {}",
+                                           cell_name(needs.front().user), *like),
+                               {}});
+        else if (std::abs(*needs.front().need.scale - 1.0) <= 1e-9)
+            d.notes.push_back({fmt::format("for {} to give the unit written for it, the value "
+                                           "must be in coherent SI units",
+                                           cell_name(needs.front().user)),
+                               {}});
+    }
 
     void report_unitless_inputs() {
         if (!unitless_.empty()) {
@@ -811,6 +980,7 @@ class workbook_checker {
                                         "checked without it: {}",
                                         fmt::join(names, ", "));
                 d.where = {values, where};
+                say_what_uses_require(d, key, users);
                 d.notes.push_back({"write its unit in the cell to its right (as in m3/s, kPa, "
                                    "-), in the column's heading (as in 'Flow [m3/s]'), or in the "
                                    "workbook's sidecar",

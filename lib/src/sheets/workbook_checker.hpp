@@ -21,10 +21,13 @@ struct declared_unit {
 struct outside_units {
     std::unordered_map<std::string, declared_unit> names;
     // Cells, ranges or whole columns given a unit by a sidecar: sheet (empty: any) and area.
+    // The sidecar beside the workbook first, then those given with --dict: the first that
+    // holds a cell gives its unit, and another that gives it a different one is reported.
     struct area_unit {
         std::string sheet;
         cell_area area;
         declared_unit unit;
+        location where{}; // the cells line
     };
     std::vector<area_unit> areas;
 };

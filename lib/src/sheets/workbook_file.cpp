@@ -105,6 +105,7 @@ declared_unit unit_of(const syntax::declared_kind& kind, std::string text, std::
     declared_unit u;
     u.unit.dim = *kind.dim;
     u.unit.scale = kind.si_factor;
+    u.unit.exact_scale = kind.si_exact;
     if (kind.single_unit != nullptr && kind.single_unit->scale != unit_scale::absolute)
         u.unit.offset = kind.single_unit;
     u.unit.text = std::move(text);
@@ -140,8 +141,10 @@ void take_cells(const syntax::parsed_file& tree, const source_file& src, const w
                             {});
             continue;
         }
-        units.areas.push_back(
-            {sheet, *area, unit_of(line.kind, std::string(src.text(line.spec)), origin)});
+        units.areas.push_back({sheet,
+                               *area,
+                               unit_of(line.kind, std::string(src.text(line.spec)), origin),
+                               {&src, line.range}});
     }
 }
 
@@ -236,14 +239,15 @@ void check_workbook_file(const fs::path& path, const check_options& options, che
                                  path.string()));
         return;
     }
+    // The sidecar found beside the workbook comes first, then those given with --dict.
     outside_units units;
-    for (const auto& dict : options.dictionaries)
-        take_declarations(dict, fmt::format("the dictionary {}", dict.filename().string()), book,
-                          units, report);
     const fs::path sidecar = sidecar_for(path);
     std::error_code ec;
     if (fs::is_regular_file(sidecar, ec))
         take_declarations(sidecar, fmt::format("the sidecar {}", sidecar.filename().string()), book,
+                          units, report);
+    for (const auto& dict : options.dictionaries)
+        take_declarations(dict, fmt::format("the dictionary {}", dict.filename().string()), book,
                           units, report);
     check_workbook(book, path.string(), units, report);
 }

@@ -4,6 +4,7 @@
 #include "units/exact_factor.hpp"
 
 #include <algorithm>
+#include <cctype>
 #include <cstdlib>
 #include <functional>
 #include <tuple>
@@ -219,6 +220,14 @@ std::size_t name_distance(const std::vector<char32_t>& wanted, const unit_defini
     return best;
 }
 
+bool same_but_case(std::string_view a, std::string_view b) {
+    return a.size() == b.size() && a != b &&
+           std::equal(a.begin(), a.end(), b.begin(), [](char x, char y) {
+               return std::tolower(static_cast<unsigned char>(x)) ==
+                      std::tolower(static_cast<unsigned char>(y));
+           });
+}
+
 // Spellings of one unit (Ω and "ohm") share everything but the symbol; a suggestion list
 // should offer each unit once.
 bool same_unit(const unit_definition& a, const unit_definition& b) {
@@ -253,14 +262,15 @@ std::optional<resolved_unit> unit_table::resolve(std::string_view symbol) const 
     return std::nullopt;
 }
 
-std::vector<std::string_view> unit_table::nearest(std::string_view symbol,
-                                                  std::size_t limit) const {
+std::vector<std::string_view> unit_table::nearest(std::string_view symbol, std::size_t limit,
+                                                  const dimension* kind) const {
     const std::vector<char32_t> wanted = code_points(symbol);
     // Allow about one edit in two characters: enough for a typo or a plural, not so many that
     // every short symbol is "near" anything.
     const std::size_t allowed = 2 * std::max<std::size_t>(1, wanted.size() / 2);
 
     struct candidate {
+        bool other_kind;             // a unit of another dimension than the context's comes after
         std::size_t distance;        // to the symbol or the name, whichever is nearer
         std::size_t symbol_distance; // among spellings of one unit, the nearest is offered
         std::size_t symbol_length;
@@ -269,14 +279,19 @@ std::vector<std::string_view> unit_table::nearest(std::string_view symbol,
     std::vector<candidate> found;
     for (const unit_definition& row : index_->units) {
         const std::vector<char32_t> points = code_points(row.symbol);
-        const std::size_t symbol_distance = half_step_distance(wanted, points);
+        // "MGD" for "mgd": a symbol typed in another case is one step away however long it is.
+        const std::size_t symbol_distance =
+            same_but_case(symbol, row.symbol)
+                ? std::min<std::size_t>(1, half_step_distance(wanted, points))
+                : half_step_distance(wanted, points);
         const std::size_t distance = std::min(symbol_distance, name_distance(wanted, row));
         if (distance <= allowed)
-            found.push_back({distance, symbol_distance, points.size(), &row});
+            found.push_back({kind != nullptr && !(row.dim() == *kind), distance, symbol_distance,
+                             points.size(), &row});
     }
     std::stable_sort(found.begin(), found.end(), [](const candidate& a, const candidate& b) {
-        return std::tie(a.distance, a.symbol_distance, a.symbol_length) <
-               std::tie(b.distance, b.symbol_distance, b.symbol_length);
+        return std::tie(a.other_kind, a.distance, a.symbol_distance, a.symbol_length) <
+               std::tie(b.other_kind, b.distance, b.symbol_distance, b.symbol_length);
     });
     std::vector<std::string_view> out;
     std::vector<const unit_definition*> offered;

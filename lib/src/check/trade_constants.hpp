@@ -1,0 +1,28 @@
+// Numbers the trades write where a formula needs a unit conversion but that are in truth a
+// physical property: 8.34, the weight of a US gallon of water, stands where lb/d from mgd and
+// mg/L needs 8.3454, the weight of a gallon at exactly 1 kg/L. The exact rule for rounded
+// factors rejects 8.34; this table accepts it for what it is, and says so.
+#pragma once
+
+#include "plumb/rational.hpp"
+
+#include <span>
+#include <string_view>
+
+namespace plumb {
+
+struct trade_constant {
+    std::string_view name;       // "the weight of a US gallon of water"
+    std::string_view conversion; // the exact conversion it stands in for, in words
+    rational exact_conversion;   // that conversion's value
+    // The property's published range, in the units of the conversion: the printed number must
+    // lie inside it.
+    rational least;
+    rational greatest;
+    std::string_view range_text; // "8.31 to 8.35 lb per US gallon between 0 and 30 °C"
+    std::string_view source;
+};
+
+std::span<const trade_constant> trade_constants();
+
+} // namespace plumb
