@@ -2,6 +2,7 @@
 // hands them to the workbook checker. A bad file is one finding; the caller goes on.
 #include "sheets/workbook_file.hpp"
 
+#include "check/acceptance.hpp"
 #include "notation/parser.hpp"
 #include "plumb/rules.hpp"
 #include "sheets/workbook_checker.hpp"
@@ -232,6 +233,14 @@ void check_workbook_file(const fs::path& path, const check_options& options, che
         fail(report, fmt::format("cannot read '{}': {}", path.string(), why));
         return;
     }
+    const fs::path sidecar = sidecar_for(path);
+    std::error_code ec;
+    check_workbook_bytes(bytes, path, fs::is_regular_file(sidecar, ec) ? sidecar : fs::path(),
+                         options, report);
+}
+
+void check_workbook_bytes(std::string_view bytes, const fs::path& path, const fs::path& sidecar,
+                          const check_options& options, check_report& report) {
     workbook book;
     try {
         book = read_workbook(bytes, path.filename().string());
@@ -247,12 +256,22 @@ void check_workbook_file(const fs::path& path, const check_options& options, che
     for (const auto& dict : options.dictionaries)
         take_declarations(dict, fmt::format("the dictionary {}", dict.filename().string()), book,
                           units, report);
-    const fs::path sidecar = sidecar_for(path);
-    std::error_code ec;
-    if (fs::is_regular_file(sidecar, ec))
+    if (!sidecar.empty())
         take_declarations(sidecar, fmt::format("the sidecar {}", sidecar.filename().string()), book,
                           units, report);
     check_workbook(book, path.string(), units, report);
 }
 
 } // namespace plumb::sheets
+
+namespace plumb {
+
+check_report check_workbook_bytes(std::string name, std::string_view bytes,
+                                  const check_options& options) {
+    check_report report;
+    sheets::check_workbook_bytes(bytes, name, {}, options, report);
+    review_findings(report, options);
+    return report;
+}
+
+} // namespace plumb
