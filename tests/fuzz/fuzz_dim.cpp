@@ -2,6 +2,7 @@
 #include "fuzz_support.hpp"
 #include "plumb/render.hpp"
 #include "plumb/unit_table.hpp"
+#include "strict_json.hpp"
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
     using namespace plumb::fuzz;
@@ -13,7 +14,10 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
             sandboxed_options());
         check_ranges(result.report);
         check_json(plumb::render_json(result.report), "render_json");
-        check_utf8(plumb::render_text(result.report, {false}), "render_text");
+        // The expression is quoted as written: the text is valid UTF-8 when the input is.
+        const std::string expression = as_text(data, size);
+        if (valid_utf8(expression))
+            check_utf8(plumb::render_text(result.report, {false}), "render_text");
         if (result.dim) {
             require(!result.report.input_failed, "a dimension given for input that failed");
             check_utf8(result.dim->to_string(), "dimension::to_string");
