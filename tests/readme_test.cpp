@@ -72,3 +72,22 @@ TEST_CASE("README: every field of the JSON output for a calc file and a workbook
                section.find("`" + key + "`") != std::string::npos));
     }
 }
+
+TEST_CASE("README: .ci/run also runs the hardening command, after the tests") {
+    const std::filesystem::path root(PLUMB_SOURCE_DIR);
+    const std::string readme = read(root / "README.md");
+    const std::string test_command = command_after(readme, "<!-- test-command -->");
+    const std::string hardening = command_after(readme, "<!-- hardening-command -->");
+    REQUIRE(!hardening.empty());
+    CHECK(hardening.find("cmake --workflow --preset hardening") != std::string::npos);
+    // The sanitizer and fuzz build needs Clang 14 and its libFuzzer and sanitizer runtimes,
+    // which the test command installs.
+    CHECK(test_command.find(" clang-14 ") != std::string::npos);
+    CHECK(test_command.find(" libclang-rt-14-dev ") != std::string::npos);
+    const std::string ci = read(root / ".ci" / "run");
+    const auto tests_at = ci.find("\n" + test_command + "\n");
+    const auto hardening_at = ci.find("\n" + hardening + "\n");
+    REQUIRE(tests_at != std::string::npos);
+    REQUIRE(hardening_at != std::string::npos);
+    CHECK(tests_at < hardening_at);
+}

@@ -37,6 +37,9 @@ struct check_options {
     // Threads that check files at once; 0: one per core (at most 8). The report is the same
     // whatever the number.
     unsigned jobs = 0;
+    // When set, `use` lines resolve inside this folder and may not leave it (an absolute path,
+    // "..", or a link out is a finding); text checked by check_text counts as lying in it.
+    std::filesystem::path include_root;
 };
 
 // One formula as the sign-off report lists it.
@@ -103,8 +106,13 @@ check_report check_paths(const std::vector<std::filesystem::path>& paths,
                          const check_options& options = {});
 
 // Checks text held in memory as if it were the file `name` (`use` paths resolve against
-// the current directory).
+// the current directory, or inside options.include_root when set).
 check_report check_text(std::string name, std::string text, const check_options& options = {});
+
+// Checks a workbook (.xlsx, .ods) held in memory as if it were the file `name`, whose
+// extension must agree with its content; the options' dictionaries are read, no sidecar is.
+check_report check_workbook_bytes(std::string name, std::string_view bytes,
+                                  const check_options& options = {});
 
 // The dimension of `expression` against the symbols the context files declare. Diagnostics
 // about the expression land in report.diagnostics, pointing into a source named "<query>".

@@ -3,6 +3,7 @@
 #include "check/acceptance.hpp"
 #include "check/edit_distance.hpp"
 #include "check/formula_checker.hpp"
+#include "check/include_root.hpp"
 #include "check/inference.hpp"
 #include "check/parallel_check.hpp"
 #include "check/path_patterns.hpp"
@@ -221,7 +222,8 @@ class checking_reader : public dictionary_reader {
 class session {
   public:
     session(check_report& report, const check_options& options)
-        : report_(report), record_formulas_(options.record_formulas) {
+        : report_(report), record_formulas_(options.record_formulas),
+          include_root_(options.include_root) {
         read_restate_units(options.restate_in);
         for (const auto& path : options.dictionaries)
             if (loaded_file* f = load(path, {}))
@@ -492,6 +494,7 @@ class session {
     std::vector<diagnostic> general_;
     std::size_t general_from_dictionaries_ = 0; // of general_, those from reading --dict files
     std::vector<diagnostic> query_diagnostics_;
+    fs::path include_root_; // empty: `use` may name any file
 
     bool read_file(const fs::path& path, std::string& text, location requested_at) {
         user_file read = read_user_file(path);
@@ -536,7 +539,22 @@ class session {
     loaded_file* resolve_use(loaded_file* f, const syntax::use_line& use) {
         const location at{f->source, use.range};
         const fs::path base = fs::path(f->source->path()).parent_path();
-        loaded_file* used = load(base / std::string(f->source->text(use.path)), at);
+        fs::path target = base / std::string(f->source->text(use.path));
+        if (!include_root_.empty()) {
+            const auto inside = path_inside_root(include_root_, base, f->source->text(use.path));
+            if (!inside) {
+                f->diagnostics.push_back(make_diagnostic(
+                    severity::error, rules::unreadable,
+                    fmt::format("'{}' lies outside the include folder '{}', which `use` may "
+                                "not leave; nothing was read",
+                                f->source->text(use.path), include_root_.string()),
+                    at));
+                report_.input_failed = true;
+                return nullptr;
+            }
+            target = *inside;
+        }
+        loaded_file* used = load(target, at);
         if (used == nullptr)
             return nullptr;
         if (used->loading) {

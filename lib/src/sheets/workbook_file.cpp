@@ -2,6 +2,7 @@
 // hands them to the workbook checker. A bad file is one finding; the caller goes on.
 #include "sheets/workbook_file.hpp"
 
+#include "check/acceptance.hpp"
 #include "model/user_file.hpp"
 #include "model/utf8.hpp"
 #include "notation/parser.hpp"
@@ -228,6 +229,14 @@ void check_workbook_file(const fs::path& path, const check_options& options, che
         fail(report, fmt::format("cannot read '{}': {}", path.string(), why));
         return;
     }
+    const fs::path sidecar = sidecar_for(path);
+    std::error_code ec;
+    check_workbook_bytes(bytes, path, fs::is_regular_file(sidecar, ec) ? sidecar : fs::path(),
+                         options, report);
+}
+
+void check_workbook_bytes(std::string_view bytes, const fs::path& path, const fs::path& sidecar,
+                          const check_options& options, check_report& report) {
     workbook book;
     try {
         book = read_workbook(bytes, path.filename().string());
@@ -241,9 +250,7 @@ void check_workbook_file(const fs::path& path, const check_options& options, che
     }
     // The sidecar found beside the workbook comes first, then those given with --dict.
     outside_units units;
-    const fs::path sidecar = sidecar_for(path);
-    std::error_code ec;
-    if (fs::is_regular_file(sidecar, ec))
+    if (!sidecar.empty())
         take_declarations(sidecar, fmt::format("the sidecar {}", sidecar.filename().string()), book,
                           units, report);
     for (const auto& dict : options.dictionaries)
@@ -253,3 +260,15 @@ void check_workbook_file(const fs::path& path, const check_options& options, che
 }
 
 } // namespace plumb::sheets
+
+namespace plumb {
+
+check_report check_workbook_bytes(std::string name, std::string_view bytes,
+                                  const check_options& options) {
+    check_report report;
+    sheets::check_workbook_bytes(bytes, name, {}, options, report);
+    review_findings(report, options);
+    return report;
+}
+
+} // namespace plumb

@@ -23,4 +23,10 @@ void report_cells_outside_sidecar(const syntax::parsed_file& tree, std::vector<d
 void check_workbook_file(const std::filesystem::path& path, const check_options& options,
                          check_report& report);
 
+// The same for a workbook's bytes already in memory, named `path`; `sidecar` is read unless
+// empty.
+void check_workbook_bytes(std::string_view bytes, const std::filesystem::path& path,
+                          const std::filesystem::path& sidecar, const check_options& options,
+                          check_report& report);
+
 } // namespace plumb::sheets
