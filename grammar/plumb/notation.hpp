@@ -21,9 +21,11 @@ struct ws : star<sor<space, continuation>> {};
 // --- Names --------------------------------------------------------------------------------
 // Latin-1 and Latin Extended letters without × (U+00D7) and ÷ (U+00F7); the micro sign;
 // Greek and Greek Extended. Engineers write ρ, μ, Δp, φ'.
-struct utf8_letter
-    : utf8::ranges<0xB5, 0xB5, 0xC0, 0xD6, 0xD8, 0xF6, 0xF8, 0x24F, 0x370, 0x3FF, 0x1F00, 0x1FFF> {
-};
+// A byte of a multi-byte UTF-8 sequence: tested before decoding one, so that the ASCII byte
+// after every name and operand fails without a decode (issue 12: parse speed).
+struct non_ascii : at<ascii::range<'\x80', '\xFF'>> {};
+struct utf8_letter : seq<non_ascii, utf8::ranges<0xB5, 0xB5, 0xC0, 0xD6, 0xD8, 0xF6, 0xF8, 0x24F,
+                                                 0x370, 0x3FF, 0x1F00, 0x1FFF>> {};
 struct letter : sor<ranges<'a', 'z', 'A', 'Z'>, utf8_letter> {};
 struct name_char : sor<ranges<'a', 'z', 'A', 'Z', '0', '9', '_'>, utf8_letter> {};
 struct name : seq<letter, star<name_char>, star<one<'\''>>> {};
@@ -109,7 +111,7 @@ struct positive_operand : seq<unary> {};
 struct positive : seq<one<'+'>, ws, must<positive_operand>> {};
 struct unary : sor<negation, positive, power> {};
 
-struct multiply_sign : sor<one<'*'>, utf8::one<0xB7, 0xD7, 0x22C5>> {}; // * · × ⋅
+struct multiply_sign : sor<one<'*'>, seq<non_ascii, utf8::one<0xB7, 0xD7, 0x22C5>>> {}; // * · × ⋅
 struct factor : unary {};
 // "x**2" is another notation's power; point at it rather than at the second '*'.
 struct single_star : not_at<one<'*'>> {};
@@ -123,8 +125,8 @@ struct subtract_tail : seq<ws, one<'-'>, ws, must<term>> {};
 struct expression : seq<product, star<sor<add_tail, subtract_tail>>> {};
 
 // --- Formulas: equations and limits -------------------------------------------------------
-struct less_equal : sor<TAO_PEGTL_STRING("<="), utf8::one<0x2264>> {};
-struct greater_equal : sor<TAO_PEGTL_STRING(">="), utf8::one<0x2265>> {};
+struct less_equal : sor<TAO_PEGTL_STRING("<="), seq<non_ascii, utf8::one<0x2264>>> {};
+struct greater_equal : sor<TAO_PEGTL_STRING(">="), seq<non_ascii, utf8::one<0x2265>>> {};
 struct less : one<'<'> {};
 struct greater : one<'>'> {};
 struct equal : one<'='> {};

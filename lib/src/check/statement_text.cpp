@@ -1,6 +1,8 @@
 // Logical lines and statement keys, from the source text alone.
 #include "check/statement_text.hpp"
 
+#include <cstring>
+
 namespace plumb {
 namespace {
 
@@ -15,6 +17,9 @@ bool continues(std::string_view line) {
 } // namespace
 
 std::size_t comment_start(std::string_view line) {
+    // Most lines have no comment at all; one memchr settles them.
+    if (line.empty() || std::memchr(line.data(), '#', line.size()) == nullptr)
+        return std::string_view::npos;
     bool in_quotes = false;
     for (std::size_t i = 0; i < line.size(); ++i) {
         if (line[i] == '"')

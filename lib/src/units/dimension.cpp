@@ -31,7 +31,8 @@ bool dimension::is_dimensionless() const {
 dimension dimension::pow(rational p) const {
     dimension r;
     for (std::size_t i = 0; i < base_dimension_count; ++i)
-        r.exponents_[i] = exponents_[i] * p;
+        if (!exponents_[i].is_zero()) // most exponents are 0; 0 times anything stays 0
+            r.exponents_[i] = exponents_[i] * p;
     return r;
 }
 

@@ -71,6 +71,9 @@ rational rational::operator-() const {
 }
 
 rational rational::multiply_slow(rational a, rational b) {
+    // A zero exponent times a fraction (M^0 in sqrt's [L^(1/2)]) is the common case here.
+    if (a.num_ == 0 || b.num_ == 0)
+        return {};
     // std::gcd is undefined for INT64_MIN, and no product with it can be reduced safely.
     if (a.num_ == INT64_MIN || b.num_ == INT64_MIN)
         overflow();
