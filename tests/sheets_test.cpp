@@ -48,6 +48,19 @@ std::string make_zip(const std::vector<std::pair<std::string, std::string>>& par
     return out;
 }
 
+// A one-sheet .xlsx package built by hand: the least ECMA-376 parts a reader needs.
+std::string xlsx_of_one_sheet(const std::string& name, const std::string& sheet) {
+    return make_zip({{"[Content_Types].xml",
+                      "<Types><Override PartName=\"/xl/workbook.xml\" ContentType=\"application/"
+                      "vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml\"/></Types>"},
+                     {"xl/workbook.xml", "<workbook><sheets><sheet name=\"" + name +
+                                             "\" sheetId=\"1\" id=\"rId1\"/></sheets></workbook>"},
+                     {"xl/_rels/workbook.xml.rels",
+                      "<Relationships><Relationship Id=\"rId1\" Target=\"worksheets/sheet1.xml\"/>"
+                      "</Relationships>"},
+                     {"xl/worksheets/sheet1.xml", sheet}});
+}
+
 std::string refusal(const std::string& bytes, std::string_view name, read_limits limits = {}) {
     try {
         (void)read_workbook(bytes, name, limits);
@@ -342,16 +355,7 @@ TEST_CASE("sheets: shared formulas in an .xlsx are expanded to every cell of the
         "<c r=\"D4\"><f t=\"shared\" si=\"0\"/><v>4000</v></c>"
         "<c r=\"E4\" t=\"inlineStr\"><is><t>m3/s</t></is></c></row>"
         "</sheetData></worksheet>";
-    const std::string book = make_zip(
-        {{"[Content_Types].xml",
-          "<Types><Override PartName=\"/xl/workbook.xml\" ContentType=\"application/"
-          "vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml\"/></Types>"},
-         {"xl/workbook.xml",
-          "<workbook><sheets><sheet name=\"Flow\" sheetId=\"1\" id=\"rId1\"/></sheets></workbook>"},
-         {"xl/_rels/workbook.xml.rels",
-          "<Relationships><Relationship Id=\"rId1\" Target=\"worksheets/sheet1.xml\"/>"
-          "</Relationships>"},
-         {"xl/worksheets/sheet1.xml", sheet}});
+    const std::string book = xlsx_of_one_sheet("Flow", sheet);
     const workbook read = read_workbook(book, "flow.xlsx");
     REQUIRE(read.sheets.size() == 1);
     const cell* d3 = read.sheets[0].find({2, 3});
@@ -376,16 +380,7 @@ TEST_CASE("sheets: standard gravity written as a number in a cell formula (9.81)
                               row(3, "12", "m") + row(4, "=B2*9.81*B3/1000", "kPa") +
                               row(5, "=B2*B3", "Pa") + row(6, "=B2*9.81*B3", "kPa") +
                               "</sheetData></worksheet>";
-    const std::string book = make_zip(
-        {{"[Content_Types].xml",
-          "<Types><Override PartName=\"/xl/workbook.xml\" ContentType=\"application/"
-          "vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml\"/></Types>"},
-         {"xl/workbook.xml",
-          "<workbook><sheets><sheet name=\"Tank\" sheetId=\"1\" id=\"rId1\"/></sheets></workbook>"},
-         {"xl/_rels/workbook.xml.rels",
-          "<Relationships><Relationship Id=\"rId1\" Target=\"worksheets/sheet1.xml\"/>"
-          "</Relationships>"},
-         {"xl/worksheets/sheet1.xml", sheet}});
+    const std::string book = xlsx_of_one_sheet("Tank", sheet);
     plumb::test::temp_dir dir;
     const auto path = dir.write("tank.xlsx", book);
     const check_report report = check_paths({path});

@@ -69,12 +69,6 @@ const dimension& temperature_dimension() {
     static const dimension d = unit_table::standard().resolve("K")->dim();
     return d;
 }
-const dimension& acceleration_dimension() {
-    static const dimension d = dimension::base(base_dimension::length) /
-                               dimension::base(base_dimension::time) /
-                               dimension::base(base_dimension::time);
-    return d;
-}
 const dimension& pressure_dimension() {
     static const dimension d = unit_table::standard().resolve("Pa")->dim();
     return d;
@@ -462,23 +456,6 @@ class checker {
         return out_.back();
     }
 
-    // The dimension a term lacks is an acceleration to the power `exponent` (1, -1, 1/2...).
-    static bool lacks_gravity_to(const dimension& lacking, double exponent) {
-        for (std::int64_t denominator = 1; denominator <= 3; ++denominator) {
-            const double scaled = exponent * static_cast<double>(denominator);
-            const double whole = std::round(scaled);
-            if (std::abs(scaled - whole) > 1e-9 || whole == 0.0 || std::abs(whole) > 6)
-                continue;
-            try {
-                return acceleration_dimension().pow(
-                           rational(static_cast<std::int64_t>(whole), denominator)) == lacking;
-            } catch (const std::exception&) {
-                return false;
-            }
-        }
-        return false;
-    }
-
     // Where the odd operands lack exactly an acceleration (or have one too many) and each holds
     // g_n written as a number in its own units, the number is read as g_n: the operand takes the
     // reference's dimension and the scale g_n gives it, and a note says which number was read so.
@@ -552,15 +529,9 @@ class checker {
             number.factor_like = false;
             number.table_digits = false;
             const std::string written = display_text(file_.nodes[node].range);
-            const double g = readings[r].reading.stands_for;
-            diagnostic& d = report(
-                rules::gravity_number,
-                std::abs(g - 9.80665) < 1e-9
-                    ? fmt::format("'{}' is read as standard gravity, g_n = 9.80665 m/s²", written)
-                    : fmt::format("'{}' is read as standard gravity in the units around it: "
-                                  "g_n = 9.80665 m/s² comes to {:.5g} there",
-                                  written, g),
-                file_.nodes[node].range);
+            diagnostic& d = report(rules::gravity_number,
+                                   gravity_message(written, readings[r].reading.stands_for),
+                                   file_.nodes[node].range);
             d.level = severity::note;
             d.notes.push_back({"write {g_n} instead to say so, or declare local gravity with "
                                "its unit (g_site : m/s^2) where it differs",

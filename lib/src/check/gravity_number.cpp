@@ -2,6 +2,8 @@
 
 #include <cmath>
 #include <cstdlib>
+#include <exception>
+#include <fmt/format.h>
 
 namespace plumb {
 namespace {
@@ -13,7 +15,38 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
+const dimension& acceleration() {
+    static const dimension d = dimension::base(base_dimension::length) /
+                               dimension::base(base_dimension::time) /
+                               dimension::base(base_dimension::time);
+    return d;
+}
+
 } // namespace
+
+bool lacks_gravity_to(const dimension& lacking, double exponent) {
+    for (std::int64_t denominator = 1; denominator <= 3; ++denominator) {
+        const double scaled = exponent * static_cast<double>(denominator);
+        const double whole = std::round(scaled);
+        if (std::abs(scaled - whole) > 1e-9 || whole == 0.0 || std::abs(whole) > 6)
+            continue;
+        try {
+            return acceleration().pow(rational(static_cast<std::int64_t>(whole), denominator)) ==
+                   lacking;
+        } catch (const std::exception&) {
+            return false;
+        }
+    }
+    return false;
+}
+
+std::string gravity_message(std::string_view written, double stands_for) {
+    if (std::abs(stands_for - standard_gravity) < 1e-9)
+        return fmt::format("'{}' is read as standard gravity, g_n = 9.80665 m/s\u00B2", written);
+    return fmt::format("'{}' is read as standard gravity in the units around it: g_n = 9.80665 "
+                       "m/s\u00B2 comes to {:.5g} there",
+                       written, stands_for);
+}
 
 double half_unit_in_last_digit(std::string_view text) {
     int decimals = 0;

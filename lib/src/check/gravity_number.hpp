@@ -4,9 +4,11 @@
 #pragma once
 
 #include "check/scale_match.hpp"
+#include "plumb/dimension.hpp"
 
 #include <optional>
 #include <span>
+#include <string>
 #include <string_view>
 
 namespace plumb {
@@ -27,6 +29,13 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                                                    std::span<const scale_literal> literals,
                                                    std::span<const std::string_view> texts,
                                                    std::span<const bool> fits);
+
+// Whether a term lacking `lacking` lacks an acceleration to the power `exponent` (1, -1, 1/2...),
+// the power a number enters the term with.
+bool lacks_gravity_to(const dimension& lacking, double exponent);
+
+// The note's words for a number read as g_n, `stands_for` being g_n in the units around it.
+std::string gravity_message(std::string_view written, double stands_for);
 
 // Half a unit in the last printed digit of a number as written: 0.005 for "9.81", 0.5 for
 // "32", 0.0005 for "0.052", 50 for "9.8e3"'s... (mantissa digits times the exponent).

@@ -641,20 +641,11 @@ class workbook_checker {
         } catch (const std::exception&) {
             return false;
         }
-        const dimension acceleration = dimension::base(base_dimension::length) /
-                                       dimension::base(base_dimension::time) /
-                                       dimension::base(base_dimension::time);
         std::array<std::string_view, 8> texts{};
         std::array<bool, 8> fits{};
         for (std::size_t k = 0; k < factors.size(); ++k) {
             texts[k] = listing_->text(lowered_.tree.nodes[factors[k].node].range);
-            try {
-                fits[k] = (factors[k].exponent == 1.0 || factors[k].exponent == -1.0) &&
-                          acceleration.pow(
-                              rational(static_cast<std::int64_t>(factors[k].exponent))) == lacking;
-            } catch (const std::exception&) {
-                fits[k] = false;
-            }
+            fits[k] = lacks_gravity_to(lacking, factors[k].exponent);
         }
         const auto reading =
             read_gravity_number(computed.scale, written.unit.scale, factors,
@@ -667,15 +658,9 @@ class workbook_checker {
         computed.scale = reading->term_scale;
         computed.exact_scale.reset();
         factors.erase(factors.begin() + static_cast<std::ptrdiff_t>(reading->literal));
-        const double g = reading->stands_for;
-        diagnostic& d = report(
-            severity::note, rules::gravity_number,
-            std::abs(g - 9.80665) < 1e-9
-                ? fmt::format("'{}' is read as standard gravity, g_n = 9.80665 m/s\u00B2", number)
-                : fmt::format("'{}' is read as standard gravity in the units around it: g_n = "
-                              "9.80665 m/s\u00B2 comes to {:.5g} there",
-                              number, g),
-            lowered_.tree.nodes[node].range);
+        diagnostic& d =
+            report(severity::note, rules::gravity_number,
+                   gravity_message(number, reading->stands_for), lowered_.tree.nodes[node].range);
         d.notes.push_back({"write 9.80665 or a cell that holds g with its unit to say so", {}});
         return true;
     }
