@@ -36,6 +36,11 @@ TEST_CASE("half a unit in the last printed digit") {
     CHECK(plumb::half_unit_in_last_digit("32") == doctest::Approx(0.5));
     CHECK(plumb::half_unit_in_last_digit("0.052") == doctest::Approx(0.0005));
     CHECK(plumb::half_unit_in_last_digit("9.8e3") == doctest::Approx(50.0));
+    // Trailing zeros of a whole number place the point (common practice: 9810 N/m³ is the
+    // 9.81 kN/m³ of the same calc).
+    CHECK(plumb::half_unit_in_last_digit("9810") == doctest::Approx(5.0));
+    CHECK(plumb::half_unit_in_last_digit("1000") == doctest::Approx(500.0));
+    CHECK(plumb::half_unit_in_last_digit("0") == doctest::Approx(0.5));
 }
 
 // p = ρ g h with g_n = 9.80665 m/s² (3rd CGPM, 1901; SI Brochure 9th ed.); 9.81 and 9.8 are
@@ -101,4 +106,89 @@ TEST_CASE("gravity as a number: 32.2 in foot units") {
     CHECK(count(r, plumb::rules::gravity_number) == 1);
     // The metric 9.81 in a foot calc is not g there.
     CHECK(problems(run(feet + "h_f = p_f/(ρ_s*9.81)\n")) == 1);
+}
+
+// Water's specific weight written as a number, γ_w = ρ_w·g_n with ρ_w from 995.65 to 999.975
+// kg/m³ between 0 and 30 °C (CRC Handbook of Chemistry and Physics; from memory). Each printed
+// number is worked out here from NIST SP 811 (2008) App. B factors (ft = 0.3048 m, lbf =
+// 4.4482216152605 N, psi = 6894.757293168 Pa, US gal = 3.785411784e-3 m³, hp = 745.69987158 W)
+// and must lie within its rounding of that range; the trade prints 62.4, 0.433, 2.31, 3960 and
+// 367 (common practice).
+TEST_CASE("water's specific weight as a number: the trade's printed values are in range") {
+    const double least = 995.65 * 9.80665;
+    const double greatest = 999.975 * 9.80665;
+    const double lbf_per_ft3 = 4.4482216152605 / (0.3048 * 0.3048 * 0.3048);
+    const double psi_per_ft = 6894.757293168 / 0.3048;
+    CHECK(least / lbf_per_ft3 <= 62.45);
+    CHECK(greatest / lbf_per_ft3 >= 62.35);
+    CHECK(least / psi_per_ft <= 0.4335);
+    CHECK(greatest / psi_per_ft >= 0.4325);
+    CHECK(psi_per_ft / greatest <= 2.315);
+    // hp per (gpm·ft) over γ_w: water horsepower Q·H/3960.
+    const double gpm_ft = 3.785411784e-3 / 60.0 * 0.3048;
+    CHECK(745.69987158 / (greatest * gpm_ft) <= 3960.5);
+    CHECK(745.69987158 / (least * gpm_ft) >= 3959.5);
+    // kW per (m³/h·m) over γ_w: P = Q·H/367.
+    CHECK(3600.0 * 1000.0 / greatest <= 367.5);
+}
+
+TEST_CASE("water's specific weight as a number: pump power and pressure head pass with a note") {
+    const std::string pump = "Q_gpm : gal/min\nH_ft : ft\nSG : 1\nη : 1\nP_hp : hp\n"
+                             "p_psi : psi\nh_ft : ft\nQ_m3h : m^3/h\nH_m : m\nP_kW : kW\n"
+                             "p_kPa : kPa\nh_m : m\np_Pa : Pa\np_psf : lbf/ft^2\n";
+    for (const char* formula :
+         {"P_hp = Q_gpm*H_ft*SG/(3960*η)", "P_kW = Q_m3h*H_m*SG/(367*η)", "p_psi = 0.433*h_ft*SG",
+          "h_ft = 2.31*p_psi/SG", "p_kPa = 9.81*h_m*SG", "p_Pa = 9810*h_m", "p_psf = 62.4*h_ft",
+          "p_kPa = 9.79*h_m"}) {
+        CAPTURE(formula);
+        const auto r = run(pump + formula + "\n");
+        CHECK(problems(r) == 0);
+        CHECK(count(r, plumb::rules::gravity_number) == 1);
+    }
+    SUBCASE("the note names the water and the range") {
+        const auto r = run(pump + "h_ft = 2.31*p_psi/SG\n");
+        const auto note =
+            std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
+                         [](const auto& d) { return d.rule == plumb::rules::gravity_number; });
+        REQUIRE(note != r.diagnostics.end());
+        CHECK(note->message.find("one over the specific weight of water") != std::string::npos);
+        CHECK(note->message.find("2.307 to 2.317") != std::string::npos);
+    }
+    SUBCASE("the mistakes are still found") {
+        // A missing g: 1000 kg/m³ times a head is not a pressure.
+        CHECK(count(run(pump + "p_Pa = 1000*h_m\n"), plumb::rules::side_mismatch) == 1);
+        // The kN/m³ number beside Pa: read as γ_w, and the 1000 is named.
+        const auto pa = run(pump + "p_Pa = 9.81*h_m\n");
+        CHECK(count(pa, plumb::rules::unit_scale) == 1);
+        // The factors written the wrong way round.
+        CHECK(problems(run(pump + "P_hp = Q_gpm*H_ft*SG*3960/η\n")) == 1);
+        CHECK(problems(run(pump + "h_ft = p_psi/(2.31*SG)\n")) == 1);
+        CHECK(problems(run(pump + "P_kW = Q_m3h*H_m*SG*367/η\n")) == 1);
+        // Too far from any water: 0.45 psi/ft is 4 % off (a brine's gradient needs its SG).
+        CHECK(problems(run(pump + "p_psi = 0.45*h_ft\n")) == 1);
+        // 62.4 with the head in metres is not water in those units.
+        CHECK(problems(run(pump + "p_psf = 62.4*h_m\n")) == 1);
+    }
+}
+
+// A gauge pressure over a specific weight is a head above the level where the pressure is
+// atmospheric, and the pressure of a column, ρ g h, is what a gauge at its foot reads (common
+// practice; e.g. Çengel and Cimbala, Fluid Mechanics, Sec. 3-1, from memory). Gas laws and
+// ratios of gauge pressures stay errors.
+TEST_CASE("gauge pressures: heads and columns pass, gas laws and ratios do not") {
+    const std::string gauge = "p_g : kPag\np_psig : psig\nρ : kg/m^3\nh : m\nh_ft : ft\n"
+                              "R_a : J/(kg*K)\nT : K\nV_1, V_2 : m^3\np_2 : kPag\n";
+    for (const char* formula :
+         {"h = p_g*1000/(ρ*{g_n})", "h = 1000*p_g/(ρ*{g_n})", "p_g = ρ*{g_n}*h/1000",
+          "h_ft = 2.31*p_psig", "p_g = ρ*9.81*h/1000"}) {
+        CAPTURE(formula);
+        CHECK(problems(run(gauge + formula + "\n")) == 0);
+    }
+    for (const char* formula :
+         {"p_g = ρ*R_a*T/1000", "p_2 = p_g*V_1/V_2", "h = p_g*1000/ρ", "h = p_g/(ρ*{g_n})*V_1"}) {
+        CAPTURE(formula);
+        CHECK(count(run(gauge + formula + "\n"), plumb::rules::offset_scale) == 1);
+    }
+    // The kPa of the gauge still needs its 1000 once the head is read.
+    CHECK(count(run(gauge + "h = p_g/(ρ*{g_n})\n"), plumb::rules::unit_scale) == 1);
 }

@@ -35,10 +35,10 @@ std::vector<const plumb::diagnostic*> with_rule(const plumb::check_report& r,
     return out;
 }
 
-// Water horsepower in US units, P = Q H / 3960 (hp, gpm, ft; Karassik et al., Pump Handbook,
-// from memory): 3960 carries water's specific weight, so the sides differ in dimension, and a
-// team that uses it for water only accepts the finding.
-constexpr std::string_view reservoir_declarations = "P_w : hp\nQ : gpm\nH : ft\n";
+// Hazen-Williams in US units, V = 1.318 C R^0.63 S^0.54 (ft/s, ft; Mays, Water Resources
+// Engineering, from memory): an empirical fit whose sides differ in dimension, and a team that
+// uses it inside its range accepts the finding.
+constexpr std::string_view pipe_declarations = "V : ft/s\nR_h : ft\nS, C_hw : 1\n";
 
 plumb_test::process_result plumb_run(const std::vector<std::string>& args,
                                      const std::filesystem::path& folder) {
@@ -50,21 +50,20 @@ plumb_test::process_result plumb_run(const std::vector<std::string>& args,
 } // namespace
 
 TEST_CASE("inline mark: accepts the named rule on its statement, with its reason") {
-    const std::string text = std::string(reservoir_declarations) +
-                             "@whp P_w = Q*H/3960   # reviewed side-mismatch: 3960 "
-                             "holds the specific weight of water, from the pump handbook\n";
-    const auto report = plumb::check_text("ooip.plumb", text);
+    const std::string text = std::string(pipe_declarations) +
+                             "@hw V = 1.318*C_hw*R_h^0.63*S^0.54   # reviewed side-mismatch: "
+                             "empirical, US units, water at 40-75 °F\n";
+    const auto report = plumb::check_text("mains.plumb", text);
     const auto found = with_rule(report, plumb::rules::side_mismatch);
     REQUIRE(found.size() == 1);
     REQUIRE(found[0]->accepted.has_value());
-    CHECK(found[0]->accepted->reason ==
-          "3960 holds the specific weight of water, from the pump handbook");
+    CHECK(found[0]->accepted->reason == "empirical, US units, water at 40-75 °F");
     CHECK(found[0]->accepted->by_inline_mark);
     CHECK(report.count(severity::error) == 0);
     CHECK(report.count_accepted() == 1);
     // Without the mark the same formula is an error that counts.
-    const auto unmarked = plumb::check_text("ooip.plumb", std::string(reservoir_declarations) +
-                                                              "@whp P_w = Q*H/3960\n");
+    const auto unmarked = plumb::check_text(
+        "mains.plumb", std::string(pipe_declarations) + "@hw V = 1.318*C_hw*R_h^0.63*S^0.54\n");
     CHECK(unmarked.count(severity::error) == 1);
     CHECK(unmarked.count_accepted() == 0);
 }
@@ -332,8 +331,8 @@ TEST_CASE("git commit: read from HEAD, a loose ref or packed-refs, without git")
 }
 
 TEST_CASE("SARIF: rules, locations, related locations and suppressions") {
-    const std::string text = std::string(reservoir_declarations) +
-                             "@whp P_w = Q*H/3960   # reviewed side-mismatch: field "
+    const std::string text = std::string(pipe_declarations) +
+                             "@hw V = 1.318*C_hw*R_h^0.63*S^0.54   # reviewed side-mismatch: field "
                              "units\nx, y : m\nz : s\ny = x + z\n";
     const auto report = plumb::check_text("calc.plumb", text);
     const std::string sarif = plumb::render_sarif(report, ".");
@@ -350,9 +349,9 @@ TEST_CASE("SARIF: rules, locations, related locations and suppressions") {
 TEST_CASE("sign-off report: header, summary, formulas with side dimensions, caution") {
     scratch_folder dir("report");
     dir.write("plumb.toml", "");
-    dir.write("calcs/ooip.plumb",
-              std::string(reservoir_declarations) +
-                  "@whp P_w = Q*H/3960   # reviewed side-mismatch: field units\n"
+    dir.write("calcs/mains.plumb",
+              std::string(pipe_declarations) +
+                  "@hw V = 1.318*C_hw*R_h^0.63*S^0.54   # reviewed side-mismatch: field units\n"
                   "F_D : N\nρ : kg/m^3\nV : m/s\nD : m\nμ : Pa*s\nstudy sphere: F_D depends on ρ, "
                   "V, D, μ\n"
                   "x, y : m\nz : s\ny = x + z\ny <= 3*x\n");
@@ -369,7 +368,7 @@ TEST_CASE("sign-off report: header, summary, formulas with side dimensions, caut
     CHECK(contains(html, "reason"));
     CHECK(contains(html, "field units"));
     CHECK(contains(html, "@media print"));
-    std::ifstream calc(dir.path() / "calcs/ooip.plumb", std::ios::binary);
+    std::ifstream calc(dir.path() / "calcs/mains.plumb", std::ios::binary);
     const std::string bytes{std::istreambuf_iterator<char>(calc), std::istreambuf_iterator<char>()};
     CHECK(contains(html, plumb::sha256_hex(bytes)));
     CHECK(contains(html, "[L] (length) <b>&lt;=</b> [L] (length)"));

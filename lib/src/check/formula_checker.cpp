@@ -73,6 +73,16 @@ const dimension& pressure_dimension() {
     static const dimension d = unit_table::standard().resolve("Pa")->dim();
     return d;
 }
+const dimension& acceleration_dimension() {
+    static const dimension d = dimension::base(base_dimension::length) /
+                               dimension::base(base_dimension::time) /
+                               dimension::base(base_dimension::time);
+    return d;
+}
+const dimension& length_dimension() {
+    static const dimension d = dimension::base(base_dimension::length);
+    return d;
+}
 
 // The table's offset and gauge units with their dimensions, for naming a scale by its zero.
 struct offset_row {
@@ -486,8 +496,13 @@ class checker {
         std::array<std::string_view, 8> texts{};
         for (const std::size_t i : a.odd) {
             const typed& t = operands_[base + i].type;
-            if (found_count == readings.size() || !t.known || t.numeric || t.offset != nullptr ||
-                t.literal_count == 0 || t.literal_count > texts.size())
+            // 2.31*p_g beside a head: a gauge pressure in feet of water, as p_g/(ρ*g) is.
+            const bool gauge_to_head = t.offset != nullptr &&
+                                       t.offset->dim() == pressure_dimension() &&
+                                       *a.reference == length_dimension();
+            if (found_count == readings.size() || !t.known || t.numeric ||
+                (t.offset != nullptr && !gauge_to_head) || t.literal_count == 0 ||
+                t.literal_count > texts.size())
                 return false;
             dimension lacking;
             try {
@@ -497,18 +512,15 @@ class checker {
             }
             const std::span<const scale_literal> numbers(literals_.data() + t.literal_begin,
                                                          t.literal_count);
-            std::array<bool, 8> fits{};
             bool any_fits = false;
             for (std::size_t k = 0; k < numbers.size(); ++k) {
                 texts[k] = text(file_.nodes[numbers[k].node].range);
-                fits[k] = lacks_gravity_to(lacking, numbers[k].exponent);
-                any_fits = any_fits || fits[k];
+                any_fits = any_fits || lacks_gravity_number(lacking, numbers[k].exponent);
             }
             if (!any_fits)
                 return false;
-            const auto reading =
-                read_gravity_number(t.scale, reference_scale, numbers,
-                                    {texts.data(), numbers.size()}, {fits.data(), numbers.size()});
+            const auto reading = read_gravity_number(t.scale, reference_scale, numbers,
+                                                     {texts.data(), numbers.size()}, lacking);
             if (!reading)
                 return false;
             readings[found_count++] = {i, *reading};
@@ -519,6 +531,13 @@ class checker {
             t.dim = *a.reference;
             t.scale = readings[r].reading.term_scale;
             t.exact_scale.reset();
+            t.offset = nullptr;
+            t.point = false;
+            t.origin = 0.0;
+            t.origin_tolerance = 0.0;
+            // A column's pressure written with its number (0.433*h, ρ*9.81*h) is a difference
+            // a gauge may read, as ρ*g*h is.
+            t.absolute_pressure_difference = t.dim == pressure_dimension();
             const std::uint32_t node = number.node;
             // The number is g_n now, not a factor for the scale rules to weigh.
             number.value = 1.0;
@@ -529,13 +548,11 @@ class checker {
             number.factor_like = false;
             number.table_digits = false;
             const std::string written = display_text(file_.nodes[node].range);
-            diagnostic& d = report(rules::gravity_number,
-                                   gravity_message(written, readings[r].reading.stands_for),
-                                   file_.nodes[node].range);
+            diagnostic& d =
+                report(rules::gravity_number, gravity_message(written, readings[r].reading),
+                       file_.nodes[node].range);
             d.level = severity::note;
-            d.notes.push_back({"write {g_n} instead to say so, or declare local gravity with "
-                               "its unit (g_site : m/s^2) where it differs",
-                               {}});
+            d.notes.push_back({std::string(readings[r].reading.quantity->advice_in_notation), {}});
         }
         return true;
     }
@@ -1639,6 +1656,17 @@ class checker {
         std::uint32_t offset_node = n;
         if (result.reading_or_difference)
             result.offset = nullptr;
+        // A gauge pressure over a specific weight (p_g/(ρ*g)) is a head above the level where
+        // the pressure is atmospheric, an ordinary length; any other product of a gauge
+        // pressure is an error, known only once the whole product is.
+        struct deferred_offset {
+            std::uint32_t node;
+            const unit_definition* unit;
+            std::string_view where;
+        };
+        std::optional<deferred_offset> gauge_in_product;
+        // ρ*g*h: the pressure of a column, a difference a gauge may read (p_g = ρ*g*h).
+        bool has_gravity = result.known && result.dim == acceleration_dimension();
         // Spine nodes were pushed outermost first; the innermost applies first.
         for (std::size_t k = spine_.size(); k > spine_base; --k) {
             const syntax::expr_node& op = file_.nodes[spine_[k - 1]];
@@ -1659,7 +1687,15 @@ class checker {
             const bool left_off = scales_a_reading(result, t);
             const bool right_off =
                 scales_a_reading(t, result) && !(result.known && result.numeric && !divided);
-            if (left_off || right_off) {
+            const bool gauge_over_something =
+                (left_off || (right_off && !divided)) &&
+                (left_off ? result : t).offset->dim() == pressure_dimension();
+            if (gauge_over_something) {
+                if (!gauge_in_product)
+                    gauge_in_product = deferred_offset{
+                        left_off ? offset_node : op.rhs, left_off ? result.offset : t.offset,
+                        divided ? "used in a quotient" : "multiplied"};
+            } else if (left_off || right_off) {
                 report_offset(left_off ? offset_node : op.rhs,
                               left_off ? *result.offset : *t.offset,
                               divided ? "used in a quotient" : "multiplied",
@@ -1681,6 +1717,7 @@ class checker {
                 result.origin_tolerance = 0.0;
             }
             result.inferred = result.inferred || t.inferred;
+            has_gravity = has_gravity || (t.known && !divided && t.dim == acceleration_dimension());
             result.scale = divided ? result.scale / t.scale : result.scale * t.scale;
             result.exact_scale = exact_product(result.exact_scale, t.exact_scale, divided);
             result.known = result.known && t.known;
@@ -1698,8 +1735,22 @@ class checker {
             }
         }
         spine_.resize(spine_base);
+        if (gauge_in_product) {
+            if (result.known && result.dim == length_dimension()) {
+                result.offset = nullptr;
+                result.point = false;
+                result.origin = 0.0;
+                result.origin_tolerance = 0.0;
+            } else {
+                report_offset(gauge_in_product->node, *gauge_in_product->unit,
+                              gauge_in_product->where);
+                return unknown_type();
+            }
+        }
         if (!result.known)
             return unknown_type(result.inferred);
+        if (has_gravity && !result.point && result.dim == pressure_dimension())
+            result.absolute_pressure_difference = true;
         return result;
     }
 

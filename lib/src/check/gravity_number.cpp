@@ -1,38 +1,63 @@
 #include "check/gravity_number.hpp"
 
+#include "check/trade_constants.hpp"
+
+#include <algorithm>
+#include <array>
 #include <cmath>
 #include <cstdlib>
 #include <exception>
 #include <fmt/format.h>
+#include <tuple>
 
 namespace plumb {
 namespace {
 
-// 3rd CGPM (1901): g_n = 9.80665 m/s², exact by definition.
+// 3rd CGPM (1901): g_n = 9.80665 m/s², exact by definition (SI Brochure 9th ed.).
 constexpr double standard_gravity = 9.80665;
 constexpr double closest_reading = 0.005;
 // The other numbers of the term may convert units (a /1000 to kPa); every subset of them is
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const dimension& acceleration() {
-    static const dimension d = dimension::base(base_dimension::length) /
-                               dimension::base(base_dimension::time) /
-                               dimension::base(base_dimension::time);
-    return d;
+const std::array<gravity_quantity, 2>& quantities() {
+    static const std::array<gravity_quantity, 2> table = [] {
+        const dimension length = dimension::base(base_dimension::length);
+        const dimension time = dimension::base(base_dimension::time);
+        const dimension acceleration = length / time / time;
+        const dimension density =
+            dimension::base(base_dimension::mass) / (length * length * length);
+        // kg/L to kg/m³ times g_n: γ_w over water's densities from 0 to 30 °C.
+        const double least = water_density_least().to_double() * 1000.0 * standard_gravity;
+        const double greatest = water_density_greatest().to_double() * 1000.0 * standard_gravity;
+        return std::array<gravity_quantity, 2>{{
+            {"standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
+             "write {g_n} instead to say so, or declare local gravity with its unit "
+             "(g_site : m/s^2) where it differs",
+             "write 9.80665 or a cell that holds g with its unit to say so", acceleration,
+             standard_gravity, standard_gravity},
+            {"the specific weight of water", "\u03B3_w = \u03C1_w\u00B7g_n", "1/\u03B3_w",
+             " (water between 0 and 30 \u00B0C, \u03C1_w from 995.65 to 999.975 kg/m\u00B3)",
+             "write \u03C1_w*{g_n}, with \u03C1_w declared for the water's temperature, to say "
+             "so; for another liquid the specific gravity must multiply it",
+             "write the density and g in cells that hold their units to say so; for another "
+             "liquid the specific gravity must multiply it",
+             density * acceleration, least, greatest},
+        }};
+    }();
+    return table;
 }
 
-} // namespace
-
-bool lacks_gravity_to(const dimension& lacking, double exponent) {
+// Whether `lacking` is `q` to the power `exponent` (given as a double with a denominator of
+// at most 3, as written powers are).
+bool is_power_of(const dimension& lacking, const dimension& q, double exponent) {
     for (std::int64_t denominator = 1; denominator <= 3; ++denominator) {
         const double scaled = exponent * static_cast<double>(denominator);
         const double whole = std::round(scaled);
         if (std::abs(scaled - whole) > 1e-9 || whole == 0.0 || std::abs(whole) > 6)
             continue;
         try {
-            return acceleration().pow(rational(static_cast<std::int64_t>(whole), denominator)) ==
-                   lacking;
+            return q.pow(rational(static_cast<std::int64_t>(whole), denominator)) == lacking;
         } catch (const std::exception&) {
             return false;
         }
@@ -40,12 +65,30 @@ bool lacks_gravity_to(const dimension& lacking, double exponent) {
     return false;
 }
 
-std::string gravity_message(std::string_view written, double stands_for) {
-    if (std::abs(stands_for - standard_gravity) < 1e-9)
-        return fmt::format("'{}' is read as standard gravity, g_n = 9.80665 m/s\u00B2", written);
-    return fmt::format("'{}' is read as standard gravity in the units around it: g_n = 9.80665 "
-                       "m/s\u00B2 comes to {:.5g} there",
-                       written, stands_for);
+// Significant figures enough to show the range the number must round.
+std::string shown(double v) {
+    return fmt::format("{:.4g}", v);
+}
+
+} // namespace
+
+bool lacks_gravity_number(const dimension& lacking, double exponent) {
+    for (const gravity_quantity& q : quantities())
+        if (is_power_of(lacking, q.dim, exponent) || is_power_of(lacking, q.dim, -exponent))
+            return true;
+    return false;
+}
+
+std::string gravity_message(std::string_view written, const gravity_reading& r) {
+    const gravity_quantity& q = *r.quantity;
+    if (!r.reciprocal && q.least == q.greatest && std::abs(r.stands_for - q.least) < 1e-9)
+        return fmt::format("'{}' is read as {}, {}", written, q.what, q.symbol);
+    const std::string value = r.least == r.greatest
+                                  ? fmt::format("{:.5g}", r.stands_for)
+                                  : fmt::format("{} to {}", shown(r.least), shown(r.greatest));
+    return fmt::format("'{}' is read as {}{} in the units around it: {} comes to {} there{}",
+                       written, r.reciprocal ? "one over " : "", q.what,
+                       r.reciprocal ? q.reciprocal : q.symbol, value, q.range_note);
 }
 
 double half_unit_in_last_digit(std::string_view text) {
@@ -70,55 +113,85 @@ double half_unit_in_last_digit(std::string_view text) {
         if (exponent > 300 || exponent < -300)
             return 0.0;
     }
-    return 0.5 * std::pow(10.0, exponent - decimals);
+    // A whole number's trailing zeros may only place the point: 9810 N/m³ is 9.81 kN/m³.
+    int placing_zeros = 0;
+    if (!after_point)
+        for (std::size_t j = i; j > 1 && text[j - 1] == '0'; --j)
+            ++placing_zeros;
+    return 0.5 * std::pow(10.0, exponent - decimals + placing_zeros);
 }
 
 std::optional<gravity_reading> read_gravity_number(double term_scale, double reference_scale,
                                                    std::span<const scale_literal> literals,
                                                    std::span<const std::string_view> texts,
-                                                   std::span<const bool> fits) {
+                                                   const dimension& lacking) {
     if (literals.empty() || literals.size() > most_numbers || texts.size() != literals.size() ||
-        fits.size() != literals.size() || !(term_scale > 0) || !(reference_scale > 0) ||
-        !std::isfinite(term_scale) || !std::isfinite(reference_scale))
+        !(term_scale > 0) || !(reference_scale > 0) || !std::isfinite(term_scale) ||
+        !std::isfinite(reference_scale))
         return std::nullopt;
     std::optional<gravity_reading> best;
-    double best_rank = 0.0;
+    std::tuple<bool, double, bool> best_rank{};
     for (std::size_t k = 0; k < literals.size(); ++k) {
-        const scale_literal& g = literals[k];
-        const double x = g.exponent;
-        if (!fits[k] || !(g.value > 0) || x == 0.0)
+        const scale_literal& number = literals[k];
+        const double x = number.exponent;
+        if (!(number.value > 0) || x == 0.0)
             continue;
         const double half_unit = half_unit_in_last_digit(texts[k]);
-        const std::size_t others = literals.size() - 1;
-        for (std::uint32_t mask = 0; mask < (1U << others); ++mask) {
-            // The conversions C among the other numbers: written_R·s_R = written_E·s_E·(g_n/ℓ)^x/C
-            // gives ℓ = g_n·(s_E / (s_R·C))^(1/x).
-            double conversions = 1.0;
-            for (std::size_t j = 0, bit = 0; j < literals.size(); ++j) {
-                if (j == k)
+        for (const gravity_quantity& q : quantities()) {
+            for (const bool reciprocal : {false, true}) {
+                if (!is_power_of(lacking, q.dim, reciprocal ? -x : x))
                     continue;
-                if ((mask >> bit++) & 1U)
-                    conversions *= std::pow(literals[j].value, literals[j].exponent);
-            }
-            const double ratio = term_scale / (reference_scale * conversions);
-            double stands_for = standard_gravity * std::pow(ratio, 1.0 / x);
-            if (!(stands_for > 0) || !std::isfinite(stands_for))
-                continue;
-            // g in a unit a power of ten away (9.81 beside kPa where Pa was meant): read it as g
-            // all the same, so that the scale rule names the 1000 rather than a missing g.
-            const double shift = std::round(std::log10(stands_for / g.value));
-            const bool shifted = shift != 0.0 && std::abs(shift) <= 9.0;
-            if (shifted)
-                stands_for /= std::pow(10.0, shift);
-            const double distance = std::abs(g.value - stands_for);
-            if (distance > half_unit * (1.0 + 1e-9) ||
-                std::abs(g.value / stands_for - 1.0) > closest_reading)
-                continue;
-            const double rank = distance + (shifted ? 1e300 : 0.0);
-            if (!best || rank < best_rank) {
-                best_rank = rank;
-                best = gravity_reading{k, stands_for,
-                                       term_scale * std::pow(standard_gravity / stands_for, x)};
+                // What the number stands for, in SI: the quantity or one over it.
+                const double si_low = reciprocal ? 1.0 / q.greatest : q.least;
+                const double si_high = reciprocal ? 1.0 / q.least : q.greatest;
+                const std::size_t others = literals.size() - 1;
+                for (std::uint32_t mask = 0; mask < (1U << others); ++mask) {
+                    // The conversions C among the other numbers: written_R·s_R =
+                    // written_E·s_E·(Q/ℓ)^x/C gives ℓ = Q·(s_E / (s_R·C))^(1/x).
+                    double conversions = 1.0;
+                    for (std::size_t j = 0, bit = 0; j < literals.size(); ++j) {
+                        if (j == k)
+                            continue;
+                        if ((mask >> bit++) & 1U)
+                            conversions *= std::pow(literals[j].value, literals[j].exponent);
+                    }
+                    const double in_units =
+                        std::pow(term_scale / (reference_scale * conversions), 1.0 / x);
+                    double low = si_low * in_units;
+                    double high = si_high * in_units;
+                    if (!(low > 0) || !std::isfinite(high))
+                        continue;
+                    // The quantity in a unit a power of ten away (9.81 beside kPa where Pa was
+                    // meant): read it all the same, so that the scale rule names the 1000
+                    // rather than a missing g.
+                    const double shift =
+                        std::round(std::log10(std::sqrt(low * high) / number.value));
+                    const bool shifted = shift != 0.0 && std::abs(shift) <= 9.0;
+                    const double power_of_ten = shifted ? std::pow(10.0, shift) : 1.0;
+                    low /= power_of_ten;
+                    high /= power_of_ten;
+                    const double nearest = std::clamp(number.value, low, high);
+                    const double distance = std::abs(number.value - nearest);
+                    if (distance > half_unit * (1.0 + 1e-9) ||
+                        std::abs(number.value / nearest - 1.0) > closest_reading)
+                        continue;
+                    // An unshifted reading first, then the closest; on a tie the number that
+                    // is the quantity itself (62.4 in p*144/62.4, not 144 as one over it).
+                    const auto rank = std::make_tuple(shifted, distance, reciprocal);
+                    if (best && rank >= best_rank)
+                        continue;
+                    best_rank = rank;
+                    // Once the number stands for the quantity, the term agrees with the
+                    // reference up to the conversions and the power of ten.
+                    const double si_value = nearest * power_of_ten / in_units;
+                    best = gravity_reading{k,
+                                           &q,
+                                           reciprocal,
+                                           nearest,
+                                           low,
+                                           high,
+                                           term_scale * std::pow(si_value / nearest, x)};
+                }
             }
         }
     }

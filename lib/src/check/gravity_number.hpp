@@ -1,6 +1,7 @@
-// "ρ*9.81*h", "0.052*MW*TVD", "p/(ρ*32.2)": a number that stands for standard gravity in the
-// units around it. Engineers write g as a number far more often than as a symbol; a term that
-// lacks exactly an acceleration, and holds g_n expressed in its own units, is read that way.
+// "ρ*9.81*h", "0.052*MW*TVD", "p/(ρ*32.2)", "0.433*h_ft", "Q*H/(3960*η)": numbers that carry
+// gravity. Engineers write g, and water's specific weight γ_w = ρ_w·g, as numbers in their own
+// units far more often than as symbols; a term that lacks exactly such a quantity, and holds it
+// as a number in the units around it, is read that way.
 #pragma once
 
 #include "check/scale_match.hpp"
@@ -13,32 +14,52 @@
 
 namespace plumb {
 
-struct gravity_reading {
-    std::size_t literal = 0; // which of the term's numbers stands for g_n
-    double stands_for = 0.0; // g_n in the units around it: what that number rounds
-    double term_scale = 1.0; // the term's SI value per written value, once the number is g_n
+// A quantity the trades write as a bare number, with the range of SI values its printed
+// roundings stand for: g_n exactly, γ_w over water's densities between 0 and 30 °C.
+struct gravity_quantity {
+    std::string_view what;               // "standard gravity"
+    std::string_view symbol;             // "g_n = 9.80665 m/s²"
+    std::string_view reciprocal;         // "1/g_n"
+    std::string_view range_note;         // where its value comes from, when it is a range
+    std::string_view advice_in_notation; // how to say it outright in a .plumb file
+    std::string_view advice_in_cell;     // and in a workbook
+    dimension dim;
+    double least = 0.0;    // SI
+    double greatest = 0.0; // SI
 };
 
-// `fits[k]` says that the term lacks an acceleration to the power of number k's exponent on
-// its path: 1 in ρ*9.81*h beside a pressure, -1 in p/(ρ*9.81) beside a length, 1/2 in
-// sqrt(2*9.81*h) beside a speed. `texts` are the numbers as written, for how finely each is
-// rounded. The number must round g_n in those units to its last printed digit
-// and lie within 0.5 % of it, so that 10 is not read as g (2 % off) but 9.8, 9.81, 32.2 and
-// the oilfield's 0.052 are.
+struct gravity_reading {
+    std::size_t literal = 0; // which of the term's numbers carries the quantity
+    const gravity_quantity* quantity = nullptr;
+    bool reciprocal = false; // the number is one over the quantity (2.31 ft/psi, 3960)
+    double stands_for = 0.0; // the quantity in the units around it: the value it rounds
+    double least = 0.0;      // the range the quantity takes in those units
+    double greatest = 0.0;
+    double term_scale = 1.0; // the term's SI value per written value, once read
+};
+
+// Whether a term lacking `lacking` could hold one of the quantities through a number entering
+// it with `exponent` (1 in ρ*9.81*h, -1 in p/(ρ*9.81), 1/2 in sqrt(2*9.81*h)): a cheap test
+// before the search.
+bool lacks_gravity_number(const dimension& lacking, double exponent);
+
+// The number among `literals` that carries g_n or γ_w, or its reciprocal, in the term's own
+// units, where the term lacks exactly that quantity to the number's power. `texts` are the
+// numbers as written: a number must round a value of the quantity in those units to its last
+// printed digit and lie within 0.5 % of it, so that 10 is not read as g (2 % off) but 9.8,
+// 9.81, 32.2, the oilfield's 0.052, 62.4 lbf/ft³, 0.433 psi/ft and 2.31 ft/psi are. Other
+// numbers of the term may be unit conversions (a /1000 to kPa); every subset of them is tried.
 std::optional<gravity_reading> read_gravity_number(double term_scale, double reference_scale,
                                                    std::span<const scale_literal> literals,
                                                    std::span<const std::string_view> texts,
-                                                   std::span<const bool> fits);
+                                                   const dimension& lacking);
 
-// Whether a term lacking `lacking` lacks an acceleration to the power `exponent` (1, -1, 1/2...),
-// the power a number enters the term with.
-bool lacks_gravity_to(const dimension& lacking, double exponent);
-
-// The note's words for a number read as g_n, `stands_for` being g_n in the units around it.
-std::string gravity_message(std::string_view written, double stands_for);
+// The note's words for a reading of the number written `written`.
+std::string gravity_message(std::string_view written, const gravity_reading& reading);
 
 // Half a unit in the last printed digit of a number as written: 0.005 for "9.81", 0.5 for
-// "32", 0.0005 for "0.052", 50 for "9.8e3"'s... (mantissa digits times the exponent).
+// "32", 0.0005 for "0.052", 50 for "9.8e3"; a whole number's trailing zeros are taken as
+// placing the point, not as measured digits: 5 for "9810", 500 for "1000".
 double half_unit_in_last_digit(std::string_view text);
 
 } // namespace plumb

@@ -25,4 +25,9 @@ struct trade_constant {
 
 std::span<const trade_constant> trade_constants();
 
+// Water's density between 0 and 30 °C in kg/L, the range the trades' water numbers round:
+// 0.99565 at 30 °C up to 0.999975 at 4 °C (CRC Handbook of Chemistry and Physics; from memory).
+rational water_density_least();
+rational water_density_greatest();
+
 } // namespace plumb

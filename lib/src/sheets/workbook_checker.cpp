@@ -642,14 +642,10 @@ class workbook_checker {
             return false;
         }
         std::array<std::string_view, 8> texts{};
-        std::array<bool, 8> fits{};
-        for (std::size_t k = 0; k < factors.size(); ++k) {
+        for (std::size_t k = 0; k < factors.size(); ++k)
             texts[k] = listing_->text(lowered_.tree.nodes[factors[k].node].range);
-            fits[k] = lacks_gravity_to(lacking, factors[k].exponent);
-        }
-        const auto reading =
-            read_gravity_number(computed.scale, written.unit.scale, factors,
-                                {texts.data(), factors.size()}, {fits.data(), factors.size()});
+        const auto reading = read_gravity_number(computed.scale, written.unit.scale, factors,
+                                                 {texts.data(), factors.size()}, lacking);
         if (!reading)
             return false;
         const std::uint32_t node = factors[reading->literal].node;
@@ -658,10 +654,9 @@ class workbook_checker {
         computed.scale = reading->term_scale;
         computed.exact_scale.reset();
         factors.erase(factors.begin() + static_cast<std::ptrdiff_t>(reading->literal));
-        diagnostic& d =
-            report(severity::note, rules::gravity_number,
-                   gravity_message(number, reading->stands_for), lowered_.tree.nodes[node].range);
-        d.notes.push_back({"write 9.80665 or a cell that holds g with its unit to say so", {}});
+        diagnostic& d = report(severity::note, rules::gravity_number,
+                               gravity_message(number, *reading), lowered_.tree.nodes[node].range);
+        d.notes.push_back({std::string(reading->quantity->advice_in_cell), {}});
         return true;
     }
 
