@@ -172,20 +172,23 @@ TEST_CASE("water's specific weight as a number: pump power and pressure head pas
 }
 
 // A gauge pressure over a specific weight is a head above the level where the pressure is
-// atmospheric, and the pressure of a column, ρ g h, is what a gauge at its foot reads (common
-// practice; e.g. Çengel and Cimbala, Fluid Mechanics, Sec. 3-1, from memory). Gas laws and
-// ratios of gauge pressures stay errors.
-TEST_CASE("gauge pressures: heads and columns pass, gas laws and ratios do not") {
+// atmospheric, over an area the net force where the atmosphere acts on the other face, and the
+// pressure of a column, ρ g h, is what a gauge at its foot reads (common practice; e.g. Çengel
+// and Cimbala, Fluid Mechanics, Sec. 3-1, from memory). Gas laws, work and ratios of gauge
+// pressures stay errors.
+TEST_CASE("gauge pressures: heads, forces and columns pass; gas laws, work and ratios do not") {
     const std::string gauge = "p_g : kPag\np_psig : psig\nρ : kg/m^3\nh : m\nh_ft : ft\n"
-                              "R_a : J/(kg*K)\nT : K\nV_1, V_2 : m^3\np_2 : kPag\n";
+                              "R_a : J/(kg*K)\nT : K\nV_1, V_2 : m^3\np_2 : kPag\nA : m^2\nF : N\n"
+                              "A_in2 : in^2\nF_lbf : lbf\nW : J\n";
     for (const char* formula :
          {"h = p_g*1000/(ρ*{g_n})", "h = 1000*p_g/(ρ*{g_n})", "p_g = ρ*{g_n}*h/1000",
-          "h_ft = 2.31*p_psig", "p_g = ρ*9.81*h/1000"}) {
+          "h_ft = 2.31*p_psig", "p_g = ρ*9.81*h/1000", "F = p_g*1000*A", "F_lbf = p_psig*A_in2"}) {
         CAPTURE(formula);
         CHECK(problems(run(gauge + formula + "\n")) == 0);
     }
     for (const char* formula :
-         {"p_g = ρ*R_a*T/1000", "p_2 = p_g*V_1/V_2", "h = p_g*1000/ρ", "h = p_g/(ρ*{g_n})*V_1"}) {
+         {"p_g = ρ*R_a*T/1000", "p_2 = p_g*V_1/V_2", "h = p_g*1000/ρ", "h = p_g/(ρ*{g_n})*V_1",
+          "W = p_g*1000*V_1", "ρ = p_g*1000/(R_a*T)"}) {
         CAPTURE(formula);
         CHECK(count(run(gauge + formula + "\n"), plumb::rules::offset_scale) == 1);
     }

@@ -79,6 +79,10 @@ const dimension& acceleration_dimension() {
                                dimension::base(base_dimension::time);
     return d;
 }
+const dimension& force_dimension() {
+    static const dimension d = unit_table::standard().resolve("N")->dim();
+    return d;
+}
 const dimension& length_dimension() {
     static const dimension d = dimension::base(base_dimension::length);
     return d;
@@ -1657,8 +1661,10 @@ class checker {
         if (result.reading_or_difference)
             result.offset = nullptr;
         // A gauge pressure over a specific weight (p_g/(ρ*g)) is a head above the level where
-        // the pressure is atmospheric, an ordinary length; any other product of a gauge
-        // pressure is an error, known only once the whole product is.
+        // the pressure is atmospheric, an ordinary length, and over an area (p_g*A) the net
+        // force where the atmosphere acts on the other face; any other product of a gauge
+        // pressure (p_g*V, p_g*M/(R*T), p_g*V_1/V_2) is an error, known only once the whole
+        // product is.
         struct deferred_offset {
             std::uint32_t node;
             const unit_definition* unit;
@@ -1736,7 +1742,8 @@ class checker {
         }
         spine_.resize(spine_base);
         if (gauge_in_product) {
-            if (result.known && result.dim == length_dimension()) {
+            if (result.known &&
+                (result.dim == length_dimension() || result.dim == force_dimension())) {
                 result.offset = nullptr;
                 result.point = false;
                 result.origin = 0.0;

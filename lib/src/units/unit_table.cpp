@@ -7,6 +7,8 @@
 #include <cctype>
 #include <cstdlib>
 #include <functional>
+#include <memory>
+#include <mutex>
 #include <tuple>
 #include <unordered_map>
 
@@ -71,18 +73,22 @@ std::optional<rational> exact_power_product(std::optional<rational> start, ratio
 } // namespace
 
 std::optional<rational> exact_factor(const unit_definition& row) {
-    // A function-local static is initialised once, thread-safely (C++11 "magic statics").
-    static const std::vector<std::optional<rational>> cache = [] {
-        std::vector<std::optional<rational>> out;
-        for (const unit_definition& u : detail::builtin_units())
-            out.push_back(read_exact_factor(u));
-        return out;
-    }();
+    // Each row is read the first time it is asked for, once, whichever thread asks: a small
+    // check uses a handful of the table's units, and reading them all cost a quarter of the
+    // instructions of starting plumb.
+    struct lazy_factor {
+        std::once_flag read;
+        std::optional<rational> value;
+    };
     const auto rows = detail::builtin_units();
+    static const std::unique_ptr<lazy_factor[]> cache(new lazy_factor[rows.size()]);
     // std::less gives a total order even over pointers into different arrays.
     if (!rows.empty() && !std::less<>{}(&row, rows.data()) &&
-        std::less<>{}(&row, rows.data() + rows.size()))
-        return cache[static_cast<std::size_t>(&row - rows.data())];
+        std::less<>{}(&row, rows.data() + rows.size())) {
+        lazy_factor& entry = cache[static_cast<std::size_t>(&row - rows.data())];
+        std::call_once(entry.read, [&] { entry.value = read_exact_factor(row); });
+        return entry.value;
+    }
     return read_exact_factor(row);
 }
 
