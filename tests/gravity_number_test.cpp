@@ -195,3 +195,32 @@ TEST_CASE("gauge pressures: heads, forces and columns pass; gas laws, work and r
     // The kPa of the gauge still needs its 1000 once the head is read.
     CHECK(count(run(gauge + "h = p_g/(ρ*{g_n})\n"), plumb::rules::unit_scale) == 1);
 }
+
+// The HVAC trade's load numbers carry a volume's heat capacity, ρ·c_p. Worked out here from NIST
+// SP 811 (2008) App. B (Btu_IT/h = 0.29307107 W, ft³ = 0.028316846592 m³, US gal =
+// 3.785411784e-3 m³, Δ°F = 5/9 K): 1.08 Btu/h per cfm·°F is 1207 J/(m³·K), inside dry air's
+// 1133-1301 between 0 and 40 °C at 101.325 kPa; 500 Btu/h per gpm·°F is 4181 kJ/(m³·K),
+// inside water's 4162-4219 between 0 and 30 °C (the ranges: see check/gravity_number.cpp).
+TEST_CASE("heat capacity of a volume as a number: the trade's 1.08 and 500") {
+    const double btu_per_h = 0.29307107;
+    const double per_cfm_degree_f = 0.028316846592 / 60.0 * 5.0 / 9.0;
+    const double per_gpm_degree_f = 3.785411784e-3 / 60.0 * 5.0 / 9.0;
+    CHECK(1.08 * btu_per_h / per_cfm_degree_f == doctest::Approx(1207.4).epsilon(1e-3));
+    CHECK(500.0 * btu_per_h / per_gpm_degree_f == doctest::Approx(4180.7e3).epsilon(1e-3));
+    const std::string hvac = "Q : Btu/h\ncfm : ft^3/min\ngpm : gal/min\nq : L/s\n"
+                             "ΔT : Δ°F\nΔT_K : K\nP : W\nT_1, T_2 : °F\n";
+    for (const char* formula : {"Q = 1.08*cfm*ΔT", "Q = 500*gpm*ΔT", "P = 1.2*q*ΔT_K",
+                                "P = 4190*q*ΔT_K", "Q = 1.1*cfm*(T_1 - T_2)"}) {
+        CAPTURE(formula);
+        const auto r = run(hvac + formula + "\n");
+        CHECK(problems(r) == 0);
+        CHECK(count(r, plumb::rules::trade_constant) == 1);
+    }
+    // Air's number on water, water's on air, litres per second with the cfm number, and a
+    // number that is no heat capacity: each stays an error.
+    for (const char* formula : {"Q = 1.08*gpm*ΔT", "Q = 500*cfm*ΔT", "Q = 1.08*q*ΔT",
+                                "Q = 1.5*cfm*ΔT", "P = 1.2*q*ΔT_K*1000"}) {
+        CAPTURE(formula);
+        CHECK(problems(run(hvac + formula + "\n")) == 1);
+    }
+}

@@ -553,8 +553,8 @@ class checker {
             number.table_digits = false;
             const std::string written = display_text(file_.nodes[node].range);
             diagnostic& d =
-                report(rules::gravity_number, gravity_message(written, readings[r].reading),
-                       file_.nodes[node].range);
+                report(readings[r].reading.quantity->rule,
+                       gravity_message(written, readings[r].reading), file_.nodes[node].range);
             d.level = severity::note;
             d.notes.push_back({std::string(readings[r].reading.quantity->advice_in_notation), {}});
         }
@@ -1599,6 +1599,21 @@ class checker {
                                quote(node), unit.symbol, where),
                    file_.nodes[node].range);
         d.mark_label = fmt::format("on the {} scale, whose zero is arbitrary", unit.symbol);
+        // "ΔT : °F": a difference declared in the scale's unit; the Δ unit says what is meant.
+        if (file_.nodes[node].kind == expr_kind::symbol) {
+            const std::string_view name = text(file_.nodes[node].range);
+            const symbol_entry* entry = symbols_.find(name);
+            if (entry != nullptr && entry->offset_unit == &unit &&
+                names_a_difference(name, entry->description)) {
+                d.notes.push_back(
+                    {fmt::format("its name or description says it is a difference: declare it "
+                                 "as '{} : \u0394{}', a difference on the {} scale, which may be "
+                                 "multiplied and divided freely",
+                                 name, unit.symbol, unit.symbol),
+                     {}});
+                return;
+            }
+        }
         // A coefficient per degree (α in R_20*(1 + α*T)) multiplies a difference from its
         // reference temperature, not an absolute temperature.
         if (temperature && partner != nullptr && *partner == temperature_dimension().pow(-1)) {

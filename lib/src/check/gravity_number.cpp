@@ -1,6 +1,7 @@
 #include "check/gravity_number.hpp"
 
 #include "check/trade_constants.hpp"
+#include "plumb/rules.hpp"
 
 #include <algorithm>
 #include <array>
@@ -20,29 +21,61 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<gravity_quantity, 2>& quantities() {
-    static const std::array<gravity_quantity, 2> table = [] {
+const std::array<gravity_quantity, 4>& quantities() {
+    static const std::array<gravity_quantity, 4> table = [] {
+        const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
+        const dimension temperature = dimension::base(base_dimension::temperature);
         const dimension acceleration = length / time / time;
-        const dimension density =
-            dimension::base(base_dimension::mass) / (length * length * length);
+        const dimension density = mass / (length * length * length);
+        const dimension specific_heat = length * length / (time * time) / temperature;
         // kg/L to kg/m³ times g_n: γ_w over water's densities from 0 to 30 °C.
-        const double least = water_density_least().to_double() * 1000.0 * standard_gravity;
-        const double greatest = water_density_greatest().to_double() * 1000.0 * standard_gravity;
-        return std::array<gravity_quantity, 2>{{
-            {"standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
+        const double water_least = water_density_least().to_double() * 1000.0;
+        const double water_greatest = water_density_greatest().to_double() * 1000.0;
+        // Water's c_p falls from 4219.9 J/(kg·K) at 0 °C to 4180.1 at 30 °C (IAPWS-95 values as
+        // tabulated in the CRC Handbook; from memory): ρ·c_p from 995.65 × 4180.1 at 30 °C to
+        // 999.84 × 4219.9 at 0 °C.
+        const double water_heat_least = 995.65 * 4180.1;
+        const double water_heat_greatest = 999.84 * 4219.9;
+        // Dry air at 101.325 kPa between 0 and 40 °C: ρ = p·M/(R·T) with M = 28.9647 g/mol
+        // (common practice) and R = 8.314462618 J/(mol·K) (CODATA 2018), times c_p from 1.005
+        // to 1.007 kJ/(kg·K) (from memory).
+        const auto air_density = [](double celsius) {
+            return 101325.0 * 0.0289647 / (8.314462618 * (celsius + 273.15));
+        };
+        const double air_heat_least = air_density(40.0) * 1005.0;
+        const double air_heat_greatest = air_density(0.0) * 1007.0;
+        return std::array<gravity_quantity, 4>{{
+            {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
              "write 9.80665 or a cell that holds g with its unit to say so", acceleration,
              standard_gravity, standard_gravity},
-            {"the specific weight of water", "\u03B3_w = \u03C1_w\u00B7g_n", "1/\u03B3_w",
+            {rules::gravity_number, "the specific weight of water", "\u03B3_w = \u03C1_w\u00B7g_n",
+             "1/\u03B3_w",
              " (water between 0 and 30 \u00B0C, \u03C1_w from 995.65 to 999.975 kg/m\u00B3)",
              "write \u03C1_w*{g_n}, with \u03C1_w declared for the water's temperature, to say "
              "so; for another liquid the specific gravity must multiply it",
              "write the density and g in cells that hold their units to say so; for another "
              "liquid the specific gravity must multiply it",
-             density * acceleration, least, greatest},
+             density * acceleration, water_least * standard_gravity,
+             water_greatest * standard_gravity},
+            {rules::trade_constant, "the heat capacity of a volume of water", "\u03C1_w\u00B7c_p,w",
+             "1/(\u03C1_w\u00B7c_p,w)",
+             " (water between 0 and 30 \u00B0C: 4162 to 4219 kJ/(m\u00B3\u00B7K))",
+             "write \u03C1_w*c_p with both declared to say so; for a glycol mix the number "
+             "is smaller",
+             "write the density and specific heat in cells that hold their units to say so",
+             density * specific_heat, water_heat_least, water_heat_greatest},
+            {rules::trade_constant, "the heat capacity of a volume of air", "\u03C1_a\u00B7c_p,a",
+             "1/(\u03C1_a\u00B7c_p,a)",
+             " (dry air at 101.325 kPa between 0 and 40 \u00B0C: 1.13 to 1.30 kJ/(m\u00B3\u00B7K); "
+             "at altitude it is less)",
+             "write \u03C1_a*c_p with both declared to say so, with the density at the site's "
+             "altitude and temperature",
+             "write the density and specific heat in cells that hold their units to say so",
+             density * specific_heat, air_heat_least, air_heat_greatest},
         }};
     }();
     return table;

@@ -15,12 +15,14 @@
 namespace plumb {
 
 // A quantity the trades write as a bare number, with the range of SI values its printed
-// roundings stand for: g_n exactly, γ_w over water's densities between 0 and 30 °C.
+// roundings stand for: g_n exactly, γ_w over water's densities between 0 and 30 °C, and the
+// volumetric heat capacities ρ·c_p of water and air inside the HVAC trade's 500 and 1.08.
 struct gravity_quantity {
-    std::string_view what;               // "standard gravity"
-    std::string_view symbol;             // "g_n = 9.80665 m/s²"
-    std::string_view reciprocal;         // "1/g_n"
-    std::string_view range_note;         // where its value comes from, when it is a range
+    std::string_view rule;       // gravity-number, or trade-constant for the heat capacities
+    std::string_view what;       // "standard gravity"
+    std::string_view symbol;     // "g_n = 9.80665 m/s²"
+    std::string_view reciprocal; // "1/g_n"
+    std::string_view range_note; // where its value comes from, when it is a range
     std::string_view advice_in_notation; // how to say it outright in a .plumb file
     std::string_view advice_in_cell;     // and in a workbook
     dimension dim;

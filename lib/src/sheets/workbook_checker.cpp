@@ -654,7 +654,7 @@ class workbook_checker {
         computed.scale = reading->term_scale;
         computed.exact_scale.reset();
         factors.erase(factors.begin() + static_cast<std::ptrdiff_t>(reading->literal));
-        diagnostic& d = report(severity::note, rules::gravity_number,
+        diagnostic& d = report(severity::note, reading->quantity->rule,
                                gravity_message(number, *reading), lowered_.tree.nodes[node].range);
         d.notes.push_back({std::string(reading->quantity->advice_in_cell), {}});
         return true;
