@@ -138,6 +138,9 @@ TEST_CASE("lengths, areas and volumes (NIST SP 811 (2008), Appendix B.8/B.9)") {
     check_exact("ft2", area, 0.09290304); // 9.290304 E-02, exact
     check_exact("in2", area, 6.4516e-4);  // 6.4516 E-04, exact
     check_printed("acre", area, 4.046873e3, 1e-3);
+    // Circular mil: NIST SP 811 (2008), B.8 prints 5.067075E-10 m^2; kcmil is 1000 of them.
+    check_printed("cmil", area, 5.067075e-10, 1e-16);
+    check_printed("kcmil", area, 5.067075e-7, 1e-13);
     check_printed("ft3", volume, 2.831685e-2, 1e-8);
     check_printed("in3", volume, 1.638706e-5, 1e-11);
     check_printed("gal", volume, 3.785412e-3, 1e-9);
@@ -280,6 +283,11 @@ TEST_CASE("every exact_factor text agrees with its double") {
         CAPTURE(std::string(row.exact_factor));
         if (const auto exact = rational::parse(row.exact_factor)) {
             CHECK(row.factor == doctest::Approx(exact->to_double()).epsilon(1e-15));
+        } else if (row.exact_factor.starts_with("pi/4*")) {
+            // The circular mils: a circle's area, π/4 times the square of its diameter.
+            const auto square = rational::parse(row.exact_factor.substr(5));
+            REQUIRE(square.has_value());
+            CHECK(row.factor == doctest::Approx(pi / 4.0 * square->to_double()).epsilon(1e-15));
         } else if (row.exact_factor.starts_with("pi/")) {
             const auto divisor = rational::parse(row.exact_factor.substr(3));
             REQUIRE(divisor.has_value());
@@ -403,8 +411,10 @@ TEST_CASE("no prefixed spelling is ambiguous or silently shadowed") {
 }
 
 TEST_CASE("prefixes never attach to units that refuse them") {
-    for (std::string_view symbol : {"kpsi", "kft", "Mft", "kmin", "kh", "mpsi", "kkg", "kkm",
-                                    "m\u00B0C", "kdegC", "kbbl", "kcP", "mhp", "kcal_th", "MBtu",
+    // "kft" is a row of its own (ohms per 1000 ft), not k + ft.
+    CHECK(must_resolve("kft").unit->name == "thousand feet");
+    for (std::string_view symbol : {"kpsi", "Mft", "kmin", "kh", "mpsi", "kkg", "kkm", "m\u00B0C",
+                                    "kdegC", "kbbl", "kcP", "mhp", "kcal_th", "MBtu",
                                     // "M" on oilfield volumes is the trade's thousand, never
                                     // the SI mega: only the rows Mscf and MMscf read it.
                                     "Mbbl", "kscf", "MSTB", "krpm", "kmgd"}) {

@@ -246,11 +246,21 @@ constexpr unit_definition rows[] = {
     absolute("nmi", "nautical mile (international)", length, 1852.0, "1852", prefixes::refused,
              nist),
     absolute("mil", "mil (0.001 in)", length, 2.54e-5, "0.0000254", prefixes::refused, nist),
+    // Conductor tables give ohms per 1000 ft ("Ω/kft"); the foot takes no SI prefixes.
+    absolute("kft", "thousand feet", length, 304.8, "304.8", prefixes::refused,
+             "1000 ft, NIST SP 811 (2008), B.8; the spelling is common practice"),
 
     // Area. The digit suffix spells the power because a symbol row cannot hold "ft^2"; the
     // expression "ft^2" means the same and is resolved by the checker.
     absolute("ft2", "square foot", area, 0.09290304, "0.09290304", prefixes::refused, nist),
     absolute("in2", "square inch", area, 6.4516e-4, "0.00064516", prefixes::refused, nist),
+    // The area of a circle one mil across: conductor sizes (kcmil, the older MCM).
+    absolute("cmil", "circular mil", area, pi / 4.0 * 6.4516e-10, "pi/4*6.4516e-10",
+             prefixes::refused, "NIST SP 811 (2008), B.8 (5.067075E-10 m^2; pi/4 mil^2)"),
+    absolute("kcmil", "thousand circular mils", area, pi / 4.0 * 6.4516e-7, "pi/4*6.4516e-7",
+             prefixes::refused, "1000 cmil, NIST SP 811 (2008), B.8; common practice"),
+    absolute("MCM", "thousand circular mils (older spelling)", area, pi / 4.0 * 6.4516e-7,
+             "pi/4*6.4516e-7", prefixes::refused, "1000 cmil; common practice"),
     // Defined on the U.S. survey foot (1200/3937 m), so no short exact decimal exists.
     absolute("acre", "acre (U.S. survey foot)", area, 4046.873, "4046.873", prefixes::refused,
              "NIST SP 811 (2008), B.8 (rounded)"),
