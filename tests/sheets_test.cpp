@@ -393,6 +393,37 @@ TEST_CASE("sheets: standard gravity written as a number in a cell formula (9.81)
                                             "Tank!B6 gravity-number", "Tank!B6 unit-scale"});
 }
 
+TEST_CASE("sheets: the pump trade's water numbers in cell formulas (3960, 2.31, 1.08)") {
+    // Water horsepower Q·H/3960 (hp, gpm, ft), head 2.31 ft per psi, and the HVAC sensible load
+    // 1.08·cfm·ΔT: the numbers carry water's specific weight and air's heat capacity (see
+    // check/gravity_number.cpp; common practice). B5 has the factor the wrong way round and
+    // B7 uses the air number for a water flow: both stay errors.
+    const auto row = [](int r, const std::string& value, const std::string& unit) {
+        const std::string n = std::to_string(r);
+        const bool formula = value.front() == '=';
+        return "<row r=\"" + n + "\"><c r=\"B" + n + "\">" +
+               (formula ? "<f>" + value.substr(1) + "</f><v>0</v>" : "<v>" + value + "</v>") +
+               "</c><c r=\"C" + n + "\" t=\"inlineStr\"><is><t>" + unit + "</t></is></c></row>";
+    };
+    const std::string sheet =
+        "<worksheet><sheetData>" + row(2, "450", "gpm") + row(3, "120", "ft") +
+        row(4, "=B2*B3/3960", "hp") + row(5, "=B2*B3*3960", "hp") + row(6, "=2.31*B8", "ft") +
+        row(7, "=1.08*B2*B9", "Btu/h") + row(8, "35", "psi") + row(9, "20", "Δ°F") +
+        row(10, "=1.08*B11*B9", "Btu/h") + row(11, "2000", "cfm") + "</sheetData></worksheet>";
+    const std::string book = xlsx_of_one_sheet("Pumps", sheet);
+    plumb::test::temp_dir dir;
+    const auto path = dir.write("pumps.xlsx", book);
+    const check_report report = check_paths({path});
+    std::vector<std::string> found;
+    for (const auto& d : report.diagnostics)
+        if (const cell_place* c = d.where.file->cell_at(d.where.range.begin))
+            found.push_back(cell_text(*c) + " " + d.rule);
+    std::sort(found.begin(), found.end());
+    CHECK(found == std::vector<std::string>{"Pumps!B10 trade-constant", "Pumps!B4 gravity-number",
+                                            "Pumps!B5 result-unit", "Pumps!B6 gravity-number",
+                                            "Pumps!B7 result-unit"});
+}
+
 namespace {
 
 // A one-sheet .ods built in memory: each row's entries are a number ("250"), a formula in
