@@ -160,8 +160,14 @@ TEST_CASE("water's specific weight as a number: pump power and pressure head pas
         // The kN/m³ number beside Pa: read as γ_w, and the 1000 is named.
         const auto pa = run(pump + "p_Pa = 9.81*h_m\n");
         CHECK(count(pa, plumb::rules::unit_scale) == 1);
-        // The factors written the wrong way round.
-        CHECK(problems(run(pump + "P_hp = Q_gpm*H_ft*SG*3960/η\n")) == 1);
+        // The factors written the wrong way round: named as such.
+        const auto upside = run(pump + "P_hp = Q_gpm*H_ft*SG*3960/η\n");
+        CHECK(problems(upside) == 1);
+        REQUIRE(count(upside, plumb::rules::unit_scale) == 1);
+        const auto named =
+            std::find_if(upside.diagnostics.begin(), upside.diagnostics.end(),
+                         [](const auto& d) { return d.rule == plumb::rules::unit_scale; });
+        CHECK(named->message.find("3960 is the wrong way round") != std::string::npos);
         CHECK(problems(run(pump + "h_ft = p_psi/(2.31*SG)\n")) == 1);
         CHECK(problems(run(pump + "P_kW = Q_m3h*H_m*SG*367/η\n")) == 1);
         // Too far from any water: 0.45 psi/ft is 4 % off (a brine's gradient needs its SG).

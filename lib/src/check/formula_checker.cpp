@@ -524,7 +524,7 @@ class checker {
             if (!any_fits)
                 return false;
             const auto reading = read_gravity_number(t.scale, reference_scale, numbers,
-                                                     {texts.data(), numbers.size()}, lacking);
+                                                     {texts.data(), numbers.size()}, lacking, true);
             if (!reading)
                 return false;
             readings[found_count++] = {i, *reading};
@@ -552,11 +552,26 @@ class checker {
             number.factor_like = false;
             number.table_digits = false;
             const std::string written = display_text(file_.nodes[node].range);
-            diagnostic& d =
-                report(readings[r].reading.quantity->rule,
-                       gravity_message(written, readings[r].reading), file_.nodes[node].range);
+            const gravity_reading& reading = readings[r].reading;
+            if (reading.flipped) {
+                // "Q*H*3960": the number fits only as a divisor; as written the term is off by
+                // its square and differs in dimension, and the cure is to move the number.
+                const bool divides = number.exponent > 0;
+                diagnostic& d = report(
+                    rules::unit_scale,
+                    fmt::format("the factor {} is the wrong way round: it carries {} and needs {}",
+                                written, reading.quantity->what,
+                                divides ? "a division by it, not a multiplication"
+                                        : "a multiplication by it, not a division"),
+                    file_.nodes[node].range);
+                add_term(d, operands_[base + readings[r].operand]);
+                d.notes.push_back({gravity_message(written, reading), {}});
+                continue;
+            }
+            diagnostic& d = report(reading.quantity->rule, gravity_message(written, reading),
+                                   file_.nodes[node].range);
             d.level = severity::note;
-            d.notes.push_back({std::string(readings[r].reading.quantity->advice_in_notation), {}});
+            d.notes.push_back({std::string(reading.quantity->advice_in_notation), {}});
         }
         return true;
     }

@@ -157,19 +157,22 @@ double half_unit_in_last_digit(std::string_view text) {
 std::optional<gravity_reading> read_gravity_number(double term_scale, double reference_scale,
                                                    std::span<const scale_literal> literals,
                                                    std::span<const std::string_view> texts,
-                                                   const dimension& lacking) {
+                                                   const dimension& lacking, bool flipped_too) {
     if (literals.empty() || literals.size() > most_numbers || texts.size() != literals.size() ||
         !(term_scale > 0) || !(reference_scale > 0) || !std::isfinite(term_scale) ||
         !std::isfinite(reference_scale))
         return std::nullopt;
     std::optional<gravity_reading> best;
-    std::tuple<bool, double, bool> best_rank{};
-    for (std::size_t k = 0; k < literals.size(); ++k) {
-        const scale_literal& number = literals[k];
-        const double x = number.exponent;
+    std::tuple<bool, bool, double, bool> best_rank{};
+    for (std::size_t k = 0, tries = flipped_too ? 2 : 1; k < literals.size() * tries; ++k) {
+        // The second pass reads each number as if written the other way round (Q*H*3960).
+        const bool flipped = k >= literals.size();
+        const std::size_t at = k % literals.size();
+        const scale_literal& number = literals[at];
+        const double x = flipped ? -number.exponent : number.exponent;
         if (!(number.value > 0) || x == 0.0)
             continue;
-        const double half_unit = half_unit_in_last_digit(texts[k]);
+        const double half_unit = half_unit_in_last_digit(texts[at]);
         for (const gravity_quantity& q : quantities()) {
             for (const bool reciprocal : {false, true}) {
                 if (!is_power_of(lacking, q.dim, reciprocal ? -x : x))
@@ -183,7 +186,7 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // written_E·s_E·(Q/ℓ)^x/C gives ℓ = Q·(s_E / (s_R·C))^(1/x).
                     double conversions = 1.0;
                     for (std::size_t j = 0, bit = 0; j < literals.size(); ++j) {
-                        if (j == k)
+                        if (j == at)
                             continue;
                         if ((mask >> bit++) & 1U)
                             conversions *= std::pow(literals[j].value, literals[j].exponent);
@@ -210,20 +213,16 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                         continue;
                     // An unshifted reading first, then the closest; on a tie the number that
                     // is the quantity itself (62.4 in p*144/62.4, not 144 as one over it).
-                    const auto rank = std::make_tuple(shifted, distance, reciprocal);
+                    const auto rank = std::make_tuple(flipped, shifted, distance, reciprocal);
                     if (best && rank >= best_rank)
                         continue;
                     best_rank = rank;
                     // Once the number stands for the quantity, the term agrees with the
                     // reference up to the conversions and the power of ten.
                     const double si_value = nearest * power_of_ten / in_units;
-                    best = gravity_reading{k,
-                                           &q,
-                                           reciprocal,
-                                           nearest,
-                                           low,
-                                           high,
-                                           term_scale * std::pow(si_value / nearest, x)};
+                    best = gravity_reading{
+                        at,      &q,  reciprocal, flipped,
+                        nearest, low, high,       term_scale * std::pow(si_value / nearest, x)};
                 }
             }
         }

@@ -34,6 +34,7 @@ struct gravity_reading {
     std::size_t literal = 0; // which of the term's numbers carries the quantity
     const gravity_quantity* quantity = nullptr;
     bool reciprocal = false; // the number is one over the quantity (2.31 ft/psi, 3960)
+    bool flipped = false;    // read only as if written the other way round: an error
     double stands_for = 0.0; // the quantity in the units around it: the value it rounds
     double least = 0.0;      // the range the quantity takes in those units
     double greatest = 0.0;
@@ -51,10 +52,13 @@ bool lacks_gravity_number(const dimension& lacking, double exponent);
 // printed digit and lie within 0.5 % of it, so that 10 is not read as g (2 % off) but 9.8,
 // 9.81, 32.2, the oilfield's 0.052, 62.4 lbf/ft³, 0.433 psi/ft and 2.31 ft/psi are. Other
 // numbers of the term may be unit conversions (a /1000 to kPa); every subset of them is tried.
+// With `flipped_too`, a number that fits only the other way round (Q*H*3960 for Q*H/3960) is
+// read as well, marked `flipped`, for the caller to report.
 std::optional<gravity_reading> read_gravity_number(double term_scale, double reference_scale,
                                                    std::span<const scale_literal> literals,
                                                    std::span<const std::string_view> texts,
-                                                   const dimension& lacking);
+                                                   const dimension& lacking,
+                                                   bool flipped_too = false);
 
 // The note's words for a reading of the number written `written`.
 std::string gravity_message(std::string_view written, const gravity_reading& reading);
