@@ -230,3 +230,35 @@ TEST_CASE("heat capacity of a volume as a number: the trade's 1.08 and 500") {
         CHECK(problems(run(hvac + formula + "\n")) == 1);
     }
 }
+
+// ppm by volume to mass concentration: c = C·M/V_m, with V_m = R·T/p (R = 8.314462618 J/(mol·K),
+// CODATA 2018): 24.465 L/mol at 25 °C and 101.325 kPa, which the air trade prints as 24.45;
+// 385.3 scf/lbmol at 68 °F (ft³ = 0.028316846592 m³, lb = 0.45359237 kg: NIST SP 811 (2008)
+// App. B). The numbers are worked out here, then read in formulas.
+TEST_CASE("molar volume as a number: ppm conversions") {
+    const double at_25_c = 8.314462618 * 298.15 / 101325.0 * 1000.0; // L/mol
+    CHECK(at_25_c == doctest::Approx(24.465).epsilon(1e-4));
+    const double at_68_f = 8.314462618 * (20.0 + 273.15) / 101325.0; // m³/mol
+    CHECK(at_68_f / 0.028316846592 * 453.59237 == doctest::Approx(385.3).epsilon(5e-4));
+    const std::string air = "C : ppm\nM : g/mol\nc : mg/m^3\nQ_s : ft^3/min\nE : lb/h\n"
+                            "E_k : kg/h\nQ_n : m^3/h\n";
+    for (const char* formula :
+         {"c = C*M/24.45", "E = C*M*Q_s*60/385.3e6", "E_k = C*M*Q_n/22.4/1e6"}) {
+        CAPTURE(formula);
+        const auto r = run(air + formula + "\n");
+        CHECK(problems(r) == 0);
+        CHECK(count(r, plumb::rules::trade_constant) == 1);
+    }
+    // Upside down; the metric number with feet and pounds; an hour's 3600 the units do not
+    // need beside the 10⁶ they do.
+    CHECK(count(run(air + "c = C*M*24.45\n"), plumb::rules::unit_scale) == 1);
+    CHECK(problems(run(air + "E = C*M*Q_s*60/24.45e6\n")) == 1);
+    const auto extra = run(air + "E_k = C*M*Q_n/22.4/1e6*3600\n");
+    CHECK(count(extra, plumb::rules::unit_scale) == 1);
+    // The same with the molar volume declared: the rule is about the 3600, not the 22.4.
+    CHECK(count(run(air + "V_m : L/mol = 22.4\nE_k = C*M*Q_n/V_m/1e6*3600\n"),
+                plumb::rules::unit_scale) == 1);
+    CHECK(problems(run(air + "V_m : L/mol = 22.4\nE_k = C*M*Q_n/V_m/1e6\n")) == 0);
+    // Two conversions that are both needed stay clean: m³/h to L/s.
+    CHECK(problems(run("Q_h : m^3/h\nQ_l : L/s\nQ_l = Q_h*1000/3600\n")) == 0);
+}

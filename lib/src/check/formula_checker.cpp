@@ -1295,7 +1295,7 @@ class checker {
             unit = r.unit;
             if (!r.used_literals)
                 return !report_unneeded_factor(ops, index, parts, dimensionless);
-            return true;
+            return !report_extra_factor(ops, index, parts, dimensionless);
         }
         // A conversion factor written the wrong way round (asked of the short meeting points
         // that formulas have; a sum of thousands of terms is not searched term by term).
@@ -1395,31 +1395,64 @@ class checker {
         return false;
     }
 
+    // "E = C*M*Q/22.4/1e6*3600" with E in kg/h: the 1e6 converts, and the 3600 beside it is a
+    // conversion the units do not need. A conversion-like number that the others reconcile
+    // without is reported as not needed.
+    bool report_extra_factor(std::span<const operand> ops, std::span<const std::size_t> index,
+                             std::span<const scaled_operand> parts, bool dimensionless) {
+        constexpr std::size_t most_numbers = 8;
+        for (std::size_t i = 0; i < parts.size(); ++i) {
+            if (parts[i].literals.size() > most_numbers)
+                continue;
+            for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
+                const scale_literal& l = parts[i].literals[k];
+                if (!looks_like_conversion(l, !dimensionless))
+                    continue;
+                std::array<scale_literal, most_numbers> without{};
+                std::copy(parts[i].literals.begin(), parts[i].literals.end(), without.begin());
+                without[k].value = 1.0;
+                without[k].tolerance = 0.0;
+                without[k].low = rational(1);
+                without[k].high = rational(1);
+                without[k].power_of_ten = false;
+                without[k].power = 0;
+                without[k].factor_like = false;
+                without[k].table_digits = false;
+                std::vector<scaled_operand> changed(parts.begin(), parts.end());
+                changed[i].literals = {without.data(), parts[i].literals.size()};
+                if (reconcile(changed).agree)
+                    return report_unneeded(ops[index[i]], l);
+            }
+        }
+        return false;
+    }
+
     // "P = E*I/L^2/1000" with P already in kN: the units agree without the factor.
     bool report_unneeded_factor(std::span<const operand> ops, std::span<const std::size_t> index,
                                 std::span<const scaled_operand> parts, bool dimensionless) {
         for (std::size_t i = 0; i < parts.size(); ++i)
-            for (const auto& l : parts[i].literals) {
-                if (!looks_like_conversion(l, !dimensionless))
-                    continue;
-                const double factor = std::pow(l.value, l.exponent);
-                diagnostic& d = report(
-                    rules::unit_scale,
-                    fmt::format("the factor {} is not needed: the units of {} already agree, so "
-                                "as written it is {} times its true value",
-                                text(file_.nodes[l.node].range), quote(ops[index[i]].node),
-                                format_factor(printed_power(l, l.exponent), factor)),
-                    file_.nodes[l.node].range);
-                add_term(d, ops[index[i]]);
-                const std::string units = units_in(ops[index[i]].node);
-                if (!units.empty())
-                    d.notes.push_back({units, {}});
-                d.notes.push_back({"remove the factor, or declare the symbols in the units it "
-                                   "converts from",
-                                   {}});
-                return true;
-            }
+            for (const auto& l : parts[i].literals)
+                if (looks_like_conversion(l, !dimensionless))
+                    return report_unneeded(ops[index[i]], l);
         return false;
+    }
+
+    bool report_unneeded(const operand& op, const scale_literal& l) {
+        const double factor = std::pow(l.value, l.exponent);
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("the factor {} is not needed: the units of {} already agree, so "
+                               "as written it is {} times its true value",
+                               text(file_.nodes[l.node].range), quote(op.node),
+                               format_factor(printed_power(l, l.exponent), factor)),
+                   file_.nodes[l.node].range);
+        add_term(d, op);
+        const std::string units = units_in(op.node);
+        if (!units.empty())
+            d.notes.push_back({units, {}});
+        d.notes.push_back(
+            {"remove the factor, or declare the symbols in the units it converts from", {}});
+        return true;
     }
 
     // "M = w*L^2/8*1e6" with L in mm: the factor is needed, but the other way round.

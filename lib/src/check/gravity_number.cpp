@@ -21,8 +21,8 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<gravity_quantity, 4>& quantities() {
-    static const std::array<gravity_quantity, 4> table = [] {
+const std::array<gravity_quantity, 5>& quantities() {
+    static const std::array<gravity_quantity, 5> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -46,7 +46,13 @@ const std::array<gravity_quantity, 4>& quantities() {
         };
         const double air_heat_least = air_density(40.0) * 1005.0;
         const double air_heat_greatest = air_density(0.0) * 1007.0;
-        return std::array<gravity_quantity, 4>{{
+        // An ideal gas's molar volume V_m = R·T/p at 101.325 kPa from 0 to 25 °C (R = 8.314462618
+        // J/(mol·K), CODATA 2018): 22.414 to 24.465 L/mol, the trade's 22.4, 24.45, 379.5 and
+        // 385.3 scf/lbmol among them (common practice).
+        const double molar_volume_least = 8.314462618 * 273.15 / 101325.0;
+        const double molar_volume_greatest = 8.314462618 * 298.15 / 101325.0;
+        const dimension amount = dimension::base(base_dimension::amount);
+        return std::array<gravity_quantity, 5>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -76,6 +82,12 @@ const std::array<gravity_quantity, 4>& quantities() {
              "altitude and temperature",
              "write the density and specific heat in cells that hold their units to say so",
              density * specific_heat, air_heat_least, air_heat_greatest},
+            {rules::trade_constant, "the molar volume of an ideal gas", "V_m = R\u00B7T/p", "1/V_m",
+             " (at 101.325 kPa between 0 and 25 \u00B0C: 22.41 to 24.47 L/mol; the permit's "
+             "standard conditions decide which)",
+             "declare the standard molar volume with its unit (V_m : L/mol = 24.45) to say so",
+             "write the molar volume in a cell that holds its unit to say so",
+             length * length * length / amount, molar_volume_least, molar_volume_greatest},
         }};
     }();
     return table;
@@ -181,7 +193,10 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                 const double si_low = reciprocal ? 1.0 / q.greatest : q.least;
                 const double si_high = reciprocal ? 1.0 / q.least : q.greatest;
                 const std::size_t others = literals.size() - 1;
-                for (std::uint32_t mask = 0; mask < (1U << others); ++mask) {
+                // A number read the other way round is read alone: with the other numbers
+                // free to be conversions, some subset would explain almost any number.
+                const std::uint32_t masks = flipped ? 1U : (1U << others);
+                for (std::uint32_t mask = 0; mask < masks; ++mask) {
                     // The conversions C among the other numbers: written_R·s_R =
                     // written_E·s_E·(Q/ℓ)^x/C gives ℓ = Q·(s_E / (s_R·C))^(1/x).
                     double conversions = 1.0;
@@ -203,6 +218,8 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     const double shift =
                         std::round(std::log10(std::sqrt(low * high) / number.value));
                     const bool shifted = shift != 0.0 && std::abs(shift) <= 9.0;
+                    if (shifted && flipped)
+                        continue; // two slips at once is no reading, only a guess
                     const double power_of_ten = shifted ? std::pow(10.0, shift) : 1.0;
                     low /= power_of_ten;
                     high /= power_of_ten;

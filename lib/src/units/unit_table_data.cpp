@@ -432,6 +432,12 @@ constexpr unit_definition rows[] = {
     // Percent: 0.01 (SI Brochure 9th ed., 5.4.7).
     absolute("%", "percent", none, 0.01, "0.01", prefixes::refused,
              "SI Brochure 9th ed., 5.4.7 (% = 0.01)"),
+    // Parts per million and per billion: 10^-6 and 10^-9 (NIST SP 811 (2008), 7.10.3, which
+    // discourages them; air and water permits are written in them all the same).
+    absolute("ppm", "part per million", none, 1e-6, "0.000001", prefixes::refused,
+             "NIST SP 811 (2008), 7.10.3 (ppm = 10^-6)"),
+    absolute("ppb", "part per billion (10^-9)", none, 1e-9, "0.000000001", prefixes::refused,
+             "NIST SP 811 (2008), 7.10.3 (ppb = 10^-9)"),
 };
 
 // SI Brochure 9th ed., Table 7, plus ronna, quetta, ronto and quecto, which the 27th CGPM
