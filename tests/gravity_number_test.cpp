@@ -170,6 +170,13 @@ TEST_CASE("water's specific weight as a number: pump power and pressure head pas
         CHECK(named->message.find("3960 is the wrong way round") != std::string::npos);
         CHECK(problems(run(pump + "h_ft = p_psi/(2.31*SG)\n")) == 1);
         CHECK(problems(run(pump + "P_kW = Q_m3h*H_m*SG*367/η\n")) == 1);
+        // A bare number in a sum is read when it is the whole quantity: the buoyant unit weight
+        // (γ_sat - γ_w) with γ_w = 9.81 kN/m³ (common practice), but not a 10 % error.
+        const std::string soil = "γ_sat : kN/m^3\nz : m\nσ : kPa\n";
+        const auto buoyant = run(soil + "σ = (γ_sat - 9.81)*z\n");
+        CHECK(problems(buoyant) == 0);
+        CHECK(count(buoyant, plumb::rules::gravity_number) == 1);
+        CHECK(count(run(soil + "σ = (γ_sat - 9)*z\n"), plumb::rules::sum_mismatch) == 1);
         // Too far from any water: 0.45 psi/ft is 4 % off (a brine's gradient needs its SG).
         CHECK(problems(run(pump + "p_psi = 0.45*h_ft\n")) == 1);
         // 62.4 with the head in metres is not water in those units.

@@ -504,9 +504,11 @@ class checker {
             const bool gauge_to_head = t.offset != nullptr &&
                                        t.offset->dim() == pressure_dimension() &&
                                        *a.reference == length_dimension();
-            if (found_count == readings.size() || !t.known || t.numeric ||
-                (t.offset != nullptr && !gauge_to_head) || t.literal_count == 0 ||
-                t.literal_count > texts.size())
+            // A bare number is read too when it stands for the whole quantity: the 9.81 of
+            // (γ_sat - 9.81)*z is water's specific weight in kN/m³.
+            if (found_count == readings.size() || !t.known ||
+                (t.numeric && t.literal_count != 1) || (t.offset != nullptr && !gauge_to_head) ||
+                t.literal_count == 0 || t.literal_count > texts.size())
                 return false;
             dimension lacking;
             try {
