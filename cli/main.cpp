@@ -9,12 +9,14 @@
 #include "plumb/version.hpp"
 
 #include <algorithm>
+#include <cerrno>
 #include <charconv>
 #include <cstdio>
 #include <cstdlib>
 #include <cstring>
 #include <ctime>
 #include <exception>
+#include <filesystem>
 #include <fmt/format.h>
 #include <fstream>
 #include <optional>
@@ -596,7 +598,34 @@ int run(int argc, char** argv) {
 
 } // namespace
 
+#ifdef PLUMB_WORKBOOK_PROGRAM
+namespace {
+
+char** program_arguments = nullptr;
+
+// This program is linked statically (cli/CMakeLists.txt) and cannot load libzip: it runs its
+// dynamically linked sibling on the same arguments. Nothing has been printed yet; what the
+// streams hold is flushed so that nothing is lost either way.
+void hand_workbooks_over(std::string& why) {
+    std::fflush(stdout);
+    std::fflush(stderr);
+    std::error_code ec;
+    const std::filesystem::path self = std::filesystem::read_symlink("/proc/self/exe", ec);
+    const std::filesystem::path sibling =
+        (ec ? std::filesystem::path(".") : self.parent_path()) / PLUMB_WORKBOOK_PROGRAM;
+    execv(sibling.c_str(), program_arguments);
+    why = fmt::format("workbooks are read by {}, which could not be started: {}", sibling.string(),
+                      std::strerror(errno));
+}
+
+} // namespace
+#endif
+
 int main(int argc, char** argv) {
+#ifdef PLUMB_WORKBOOK_PROGRAM
+    program_arguments = argv;
+    plumb::set_workbook_handover(&hand_workbooks_over);
+#endif
     try {
         return run(argc, argv);
     } catch (const std::exception& e) {

@@ -1420,3 +1420,22 @@ TEST_CASE("groups: a study's groups, the --vars form, --study and JSON") {
 }
 
 TEST_SUITE_END();
+
+// The release `plumb` is linked statically and hands workbooks to plumb-workbooks, the same
+// program dynamically linked (cli/CMakeLists.txt); in other builds it reads them itself. Either
+// way the command line gives the findings the demo workbook records, beside a notation file's.
+TEST_CASE("the command line reads workbooks beside notation files") {
+    temp_folder dir;
+    const std::string calc = dir.write("sum.plumb", "x, y : m\nz : s\ny = x + z\n");
+    const std::string book =
+        std::string(PLUMB_SOURCE_DIR) + "/corpus/demo-workbook/corran-vale-station.xlsx";
+    const auto r = run_plumb({"check", "--format", "json", calc, book});
+    CHECK(r.status == 1);
+    for (const char* cell : {"\"cell\": \"C14\"", "\"cell\": \"C21\"", "\"cell\": \"D26\""}) {
+        CAPTURE(cell);
+        CHECK(r.out.find(cell) != std::string::npos);
+    }
+    CHECK(r.out.find("\"rule\": \"sum-mismatch\"") != std::string::npos);
+    // Printed once: the handover happens before anything is written.
+    CHECK(r.out.find("\"tool\"") == r.out.rfind("\"tool\""));
+}

@@ -124,4 +124,11 @@ query_result query_dimension(std::string expression,
                              const std::vector<std::filesystem::path>& context_files,
                              const check_options& options = {});
 
+// A program linked statically cannot load libzip safely (a static glibc may only load shared
+// libraries of its own version): such a program hands workbooks to another that can. The
+// handover runs once, when the first workbook must be unpacked, and does not return if it
+// succeeds; if it returns, the workbook is reported unreadable with `why` as the reason.
+using workbook_handover = void (*)(std::string& why);
+void set_workbook_handover(workbook_handover handover);
+
 } // namespace plumb

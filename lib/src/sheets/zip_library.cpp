@@ -1,6 +1,7 @@
 // Loads libzip by the soname the build was configured against, once per process.
 #include "sheets/zip_library.hpp"
 
+#include "plumb/check.hpp"
 #include "sheets/workbook.hpp"
 
 #include <dlfcn.h>
@@ -58,9 +59,20 @@ loaded_library load() {
     return result; // the library stays loaded for the life of the process
 }
 
+// Set by a statically linked plumb, which must not load libzip itself (plumb/check.hpp).
+workbook_handover& handover_hook() {
+    static workbook_handover hook = nullptr;
+    return hook;
+}
+
 } // namespace
 
 const zip_functions& zip_library() {
+    if (workbook_handover hook = handover_hook()) {
+        std::string why;
+        hook(why); // returns only when the handover failed
+        throw workbook_error(why);
+    }
     static const loaded_library library = load();
     if (!library.failure.empty())
         throw workbook_error(library.failure);
@@ -68,3 +80,11 @@ const zip_functions& zip_library() {
 }
 
 } // namespace plumb::sheets
+
+namespace plumb {
+
+void set_workbook_handover(workbook_handover handover) {
+    sheets::handover_hook() = handover;
+}
+
+} // namespace plumb
