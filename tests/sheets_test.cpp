@@ -366,31 +366,44 @@ TEST_CASE("sheets: shared formulas in an .xlsx are expanded to every cell of the
     CHECK(d4->text == "=B4*C4");
 }
 
-TEST_CASE("sheets: standard gravity written as a number in a cell formula (9.81)") {
-    // p = ρ g h (g_n = 9.80665 m/s², 3rd CGPM 1901); an invented tank sheet. B4 converts to kPa
-    // and is right; B5 lacks g; B6 has g but gives Pa in a kPa cell.
-    const auto row = [](int r, const std::string& value, const std::string& unit) {
-        const std::string n = std::to_string(r);
-        const bool formula = value.front() == '=';
-        return "<row r=\"" + n + "\"><c r=\"B" + n + "\">" +
-               (formula ? "<f>" + value.substr(1) + "</f><v>0</v>" : "<v>" + value + "</v>") +
-               "</c><c r=\"C" + n + "\" t=\"inlineStr\"><is><t>" + unit + "</t></is></c></row>";
-    };
-    const std::string sheet = "<worksheet><sheetData>" + row(2, "1000", "kg/m3") +
-                              row(3, "12", "m") + row(4, "=B2*9.81*B3/1000", "kPa") +
-                              row(5, "=B2*B3", "Pa") + row(6, "=B2*9.81*B3", "kPa") +
-                              "</sheetData></worksheet>";
-    const std::string book = xlsx_of_one_sheet("Tank", sheet);
+namespace {
+
+// The findings of a one-sheet workbook, each as "Sheet!B4 rule", sorted.
+std::vector<std::string> cell_findings_of_one_sheet(const std::string& name,
+                                                    const std::string& sheet) {
     plumb::test::temp_dir dir;
-    const auto path = dir.write("tank.xlsx", book);
+    const auto path = dir.write(name + ".xlsx", xlsx_of_one_sheet(name, sheet));
     const check_report report = check_paths({path});
     std::vector<std::string> found;
     for (const auto& d : report.diagnostics)
         if (const cell_place* c = d.where.file->cell_at(d.where.range.begin))
             found.push_back(cell_text(*c) + " " + d.rule);
     std::sort(found.begin(), found.end());
-    CHECK(found == std::vector<std::string>{"Tank!B4 gravity-number", "Tank!B5 result-unit",
-                                            "Tank!B6 gravity-number", "Tank!B6 unit-scale"});
+    return found;
+}
+
+// One worksheet row: the value or formula in column B, its unit text in column C.
+std::string value_and_unit_row(int r, const std::string& value, const std::string& unit) {
+    const std::string n = std::to_string(r);
+    const bool formula = value.front() == '=';
+    return "<row r=\"" + n + "\"><c r=\"B" + n + "\">" +
+           (formula ? "<f>" + value.substr(1) + "</f><v>0</v>" : "<v>" + value + "</v>") +
+           "</c><c r=\"C" + n + "\" t=\"inlineStr\"><is><t>" + unit + "</t></is></c></row>";
+}
+
+} // namespace
+
+TEST_CASE("sheets: standard gravity written as a number in a cell formula (9.81)") {
+    // p = ρ g h (g_n = 9.80665 m/s², 3rd CGPM 1901); an invented tank sheet. B4 converts to kPa
+    // and is right; B5 lacks g; B6 has g but gives Pa in a kPa cell.
+    const std::string sheet =
+        "<worksheet><sheetData>" + value_and_unit_row(2, "1000", "kg/m3") +
+        value_and_unit_row(3, "12", "m") + value_and_unit_row(4, "=B2*9.81*B3/1000", "kPa") +
+        value_and_unit_row(5, "=B2*B3", "Pa") + value_and_unit_row(6, "=B2*9.81*B3", "kPa") +
+        "</sheetData></worksheet>";
+    CHECK(cell_findings_of_one_sheet("Tank", sheet) ==
+          std::vector<std::string>{"Tank!B4 gravity-number", "Tank!B5 result-unit",
+                                   "Tank!B6 gravity-number", "Tank!B6 unit-scale"});
 }
 
 TEST_CASE("sheets: the pump trade's water numbers in cell formulas (3960, 2.31, 1.08)") {
@@ -398,30 +411,17 @@ TEST_CASE("sheets: the pump trade's water numbers in cell formulas (3960, 2.31, 
     // 1.08·cfm·ΔT: the numbers carry water's specific weight and air's heat capacity (see
     // check/gravity_number.cpp; common practice). B5 has the factor the wrong way round and
     // B7 uses the air number for a water flow: both stay errors.
-    const auto row = [](int r, const std::string& value, const std::string& unit) {
-        const std::string n = std::to_string(r);
-        const bool formula = value.front() == '=';
-        return "<row r=\"" + n + "\"><c r=\"B" + n + "\">" +
-               (formula ? "<f>" + value.substr(1) + "</f><v>0</v>" : "<v>" + value + "</v>") +
-               "</c><c r=\"C" + n + "\" t=\"inlineStr\"><is><t>" + unit + "</t></is></c></row>";
-    };
     const std::string sheet =
-        "<worksheet><sheetData>" + row(2, "450", "gpm") + row(3, "120", "ft") +
-        row(4, "=B2*B3/3960", "hp") + row(5, "=B2*B3*3960", "hp") + row(6, "=2.31*B8", "ft") +
-        row(7, "=1.08*B2*B9", "Btu/h") + row(8, "35", "psi") + row(9, "20", "Δ°F") +
-        row(10, "=1.08*B11*B9", "Btu/h") + row(11, "2000", "cfm") + "</sheetData></worksheet>";
-    const std::string book = xlsx_of_one_sheet("Pumps", sheet);
-    plumb::test::temp_dir dir;
-    const auto path = dir.write("pumps.xlsx", book);
-    const check_report report = check_paths({path});
-    std::vector<std::string> found;
-    for (const auto& d : report.diagnostics)
-        if (const cell_place* c = d.where.file->cell_at(d.where.range.begin))
-            found.push_back(cell_text(*c) + " " + d.rule);
-    std::sort(found.begin(), found.end());
-    CHECK(found == std::vector<std::string>{"Pumps!B10 trade-constant", "Pumps!B4 gravity-number",
-                                            "Pumps!B5 result-unit", "Pumps!B6 gravity-number",
-                                            "Pumps!B7 result-unit"});
+        "<worksheet><sheetData>" + value_and_unit_row(2, "450", "gpm") +
+        value_and_unit_row(3, "120", "ft") + value_and_unit_row(4, "=B2*B3/3960", "hp") +
+        value_and_unit_row(5, "=B2*B3*3960", "hp") + value_and_unit_row(6, "=2.31*B8", "ft") +
+        value_and_unit_row(7, "=1.08*B2*B9", "Btu/h") + value_and_unit_row(8, "35", "psi") +
+        value_and_unit_row(9, "20", "Δ°F") + value_and_unit_row(10, "=1.08*B11*B9", "Btu/h") +
+        value_and_unit_row(11, "2000", "cfm") + "</sheetData></worksheet>";
+    CHECK(cell_findings_of_one_sheet("Pumps", sheet) ==
+          std::vector<std::string>{"Pumps!B10 trade-constant", "Pumps!B4 gravity-number",
+                                   "Pumps!B5 result-unit", "Pumps!B6 gravity-number",
+                                   "Pumps!B7 result-unit"});
 }
 
 namespace {

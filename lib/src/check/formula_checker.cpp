@@ -506,9 +506,9 @@ class checker {
                                        *a.reference == length_dimension();
             // A bare number is read too when it stands for the whole quantity: the 9.81 of
             // (γ_sat - 9.81)*z is water's specific weight in kN/m³.
-            if (found_count == readings.size() || !t.known ||
-                (t.numeric && t.literal_count != 1) || (t.offset != nullptr && !gauge_to_head) ||
-                t.literal_count == 0 || t.literal_count > texts.size())
+            if (found_count == readings.size() || !t.known || (t.numeric && t.literal_count != 1) ||
+                (t.offset != nullptr && !gauge_to_head) || t.literal_count == 0 ||
+                t.literal_count > texts.size())
                 return false;
             dimension lacking;
             try {
@@ -576,6 +576,14 @@ class checker {
             d.notes.push_back({std::string(reading.quantity->advice_in_notation), {}});
         }
         return true;
+    }
+
+    // The term, and the units of the symbols in it, which say where a factor comes from.
+    void add_term_and_units(diagnostic& d, const operand& op) const {
+        add_term(d, op);
+        const std::string units = units_in(op.node);
+        if (!units.empty())
+            d.notes.push_back({units, {}});
     }
 
     void add_term(diagnostic& d, const operand& op, bool differs = false) const {
@@ -1448,10 +1456,7 @@ class checker {
                                text(file_.nodes[l.node].range), quote(op.node),
                                format_factor(printed_power(l, l.exponent), factor)),
                    file_.nodes[l.node].range);
-        add_term(d, op);
-        const std::string units = units_in(op.node);
-        if (!units.empty())
-            d.notes.push_back({units, {}});
+        add_term_and_units(d, op);
         d.notes.push_back(
             {"remove the factor, or declare the symbols in the units it converts from", {}});
         return true;
@@ -1469,10 +1474,7 @@ class checker {
                                written, quote(op.node), divides ? "a multiplication" : "a division",
                                divides ? "a division" : "a multiplication"),
                    file_.nodes[l.node].range);
-        add_term(d, op);
-        const std::string units = units_in(op.node);
-        if (!units.empty())
-            d.notes.push_back({units, {}});
+        add_term_and_units(d, op);
         d.notes.push_back(
             {fmt::format("as written the result is {} times its true value",
                          format_factor(printed_power(l, 2 * l.exponent), factor * factor)),
