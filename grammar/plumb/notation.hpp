@@ -118,14 +118,15 @@ struct multiply_sign : sor<one<'*'>, seq<non_ascii, utf8::one<0xB7, 0xD7, 0x22C5
 struct factor : unary {};
 // "x**2" is another notation's power; point at it rather than at the second '*'.
 struct single_star : not_at<one<'*'>> {};
-struct multiply_tail : seq<ws, multiply_sign, must<single_star>, ws, must<factor>> {};
-struct divide_tail : seq<ws, one<'/'>, ws, must<factor>> {};
-struct product : seq<unary, star<sor<multiply_tail, divide_tail>>> {};
+struct multiply_tail : seq<multiply_sign, must<single_star>, ws, must<factor>> {};
+struct divide_tail : seq<one<'/'>, ws, must<factor>> {};
+// The blanks before an operator are read once for both operators (issue 12: parse speed).
+struct product : seq<unary, star<ws, sor<multiply_tail, divide_tail>>> {};
 
 struct term : product {};
-struct add_tail : seq<ws, one<'+'>, ws, must<term>> {};
-struct subtract_tail : seq<ws, one<'-'>, ws, must<term>> {};
-struct expression : seq<product, star<sor<add_tail, subtract_tail>>> {};
+struct add_tail : seq<one<'+'>, ws, must<term>> {};
+struct subtract_tail : seq<one<'-'>, ws, must<term>> {};
+struct expression : seq<product, star<ws, sor<add_tail, subtract_tail>>> {};
 
 // --- Formulas: equations and limits -------------------------------------------------------
 struct less_equal : sor<TAO_PEGTL_STRING("<="), seq<non_ascii, utf8::one<0x2264>>> {};
