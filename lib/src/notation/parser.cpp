@@ -251,8 +251,10 @@ template <typename Rule> struct action : pg::nothing<Rule> {};
 // A number, a number with a unit in braces, or a number marked for inference.
 template <> struct action<nt::number_term> {
     template <typename In> static void apply(const In& in, parse_state& s) {
-        const std::string_view t = in.string_view();
-        if (t.find('?') != std::string_view::npos) {
+        // What ends the term tells its kind: a number ends in a digit or '.', a quantity in
+        // '}', an inferred coefficient in '?' or in the ']' of its statement.
+        const char last = in.string_view().back();
+        if (last == '?' || last == ']') {
             s.line_has_inferred = true;
             std::uint32_t statement = syntax::no_index;
             if (s.pending_statement) {
@@ -263,7 +265,7 @@ template <> struct action<nt::number_term> {
             s.push_node({expr_kind::inferred, s.range(in), statement});
             return;
         }
-        if (t.back() == '}') {
+        if (last == '}') {
             push_quantity(in, s);
             return;
         }
