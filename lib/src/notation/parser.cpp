@@ -115,6 +115,9 @@ struct parse_state {
     dimension bracket_dimension;
     base_dimension pending_base = base_dimension::mass;
     std::optional<rational> pending_exponent;
+    // Whether this line wrote pending_kind or bracket_dimension: most lines are formulas that
+    // never do, and clearing those two costs more than the rest of the line's reset.
+    bool kind_written = false;
     std::vector<unit_value> units;
     std::vector<std::size_t> unknown_units; // this line's unknown-unit diagnostics
     span pending_use_path{};
@@ -181,11 +184,14 @@ struct parse_state {
         argument_counts.clear();
         pending_relation = relation_kind::none;
         pending_label = {};
-        pending_kind = {};
+        if (kind_written) {
+            pending_kind = {};
+            bracket_dimension = {};
+            kind_written = false;
+        }
         pending_spec = pending_value = pending_description = {};
         pending_first_name = static_cast<std::uint32_t>(out.names.size());
         spec_in_brackets = false;
-        bracket_dimension = {};
         pending_exponent.reset();
         units.clear();
         unknown_units.clear();
@@ -506,6 +512,7 @@ template <> struct action<nt::dimension_exponent> {
 };
 template <> struct action<nt::dimension_factor> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.kind_written = true;
         s.bracket_dimension = s.bracket_dimension *
                               dimension::base(s.pending_base).pow(s.pending_exponent.value_or(1));
         s.pending_exponent.reset();
@@ -743,6 +750,7 @@ template <> struct action<nt::declaration_spec> {
     template <typename In> static void apply(const In& in, parse_state& s) { take_spec(in, s); }
     template <typename In> static void take_spec(const In& in, parse_state& s) {
         s.pending_spec = s.range(in);
+        s.kind_written = true;
         if (in.string_view() == "?") {
             s.pending_kind.to_infer = true;
             return;
