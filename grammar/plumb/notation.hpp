@@ -339,8 +339,12 @@ struct cells_statement : seq<at<cells_keyword, plus<space>, cells_sheet, one<'!'
                              must<cells_colon>, ws, must<cells_spec>, opt<ws, description>> {};
 
 // --- One logical line ---------------------------------------------------------------------
-struct statement : sor<use_statement, cells_statement, measure_statement, retired_unit_statement,
-                       study_statement, case_statement, declaration, formula> {};
+struct keyword_statement : sor<use_statement, cells_statement, measure_statement,
+                               retired_unit_statement, study_statement, case_statement> {};
+// Every keyword statement starts with its keyword ("use", "unit", "cells", "measure", "model",
+// "prototype", "study"): a line that starts with another byte tries none of them (issue 12).
+struct keyword_initial : one<'c', 'm', 'p', 's', 'u'> {};
+struct statement : sor<seq<at<keyword_initial>, keyword_statement>, declaration, formula> {};
 struct line_end : seq<ws, opt<comment>, eof> {};
 struct line : seq<ws, opt<statement>, must<line_end>> {};
 
