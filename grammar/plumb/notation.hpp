@@ -134,7 +134,8 @@ struct greater_equal : sor<TAO_PEGTL_STRING(">="), seq<non_ascii, utf8::one<0x22
 struct less : one<'<'> {};
 struct greater : one<'>'> {};
 struct equal : one<'='> {};
-struct relation_sign : sor<less_equal, greater_equal, less, greater, equal> {};
+// '=' starts no other sign, so trying the commonest sign first changes no parse (issue 12).
+struct relation_sign : sor<equal, less_equal, greater_equal, less, greater> {};
 
 struct side : expression {};
 struct first_side : expression {};
