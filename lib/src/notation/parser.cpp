@@ -1079,6 +1079,9 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin) {
         const void* nl = std::memchr(text.data() + pos, '\n', text.size() - pos);
         const std::size_t end =
             nl ? static_cast<std::size_t>(static_cast<const char*>(nl) - text.data()) : text.size();
+        // Only a line with a '\' in it can continue; most have none and need no further scan.
+        if (std::memchr(text.data() + pos, '\\', end - pos) == nullptr)
+            return end;
         std::size_t content_end = end;
         // Most lines have no comment; only those need the quote-aware scan.
         if (std::memchr(text.data() + pos, '#', end - pos) != nullptr) {
