@@ -223,8 +223,13 @@ struct description : if_must<one<'"'>, description_text, description_close> {};
 // The lookahead that tells a declaration from a formula; a missing name after a comma still
 // counts, so that name_list can say what is missing.
 struct declaration_head : seq<name, star<ws, one<','>, ws, opt<name>>, ws, one<':'>> {};
-struct declaration : seq<at<declaration_head>, name_list, ws, one<':'>, ws, must<declaration_spec>,
-                         opt<ws, constant_assignment>, opt<ws, description>> {};
+// A cheap first test: a declaration's ':' comes before any '=' (names, commas and blanks stand
+// before it; a '\\' may start a continuation whose comment holds anything, so it passes too).
+// Most lines are formulas, and this turns them away before their first name is read (issue 12).
+struct colon_before_equals : seq<star<not_one<':', '=', '\\'>>, one<':', '\\'>> {};
+struct declaration
+    : seq<at<colon_before_equals>, at<declaration_head>, name_list, ws, one<':'>, ws,
+          must<declaration_spec>, opt<ws, constant_assignment>, opt<ws, description>> {};
 
 // --- Units of one's own --------------------------------------------------------------------
 //   measure mgd = 1e6 gal/d "million US gallons per day"
