@@ -1138,8 +1138,9 @@ struct tree_mark {
     }
 };
 
-// Passes the statement a line added to the sink; drops a formula's tree once it is checked.
-void tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark) {
+// Passes the statement a line added to the sink; drops a formula's tree once it is checked,
+// and says whether it did.
+bool tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark) {
     if (out.uses.size() > mark.uses)
         sink.on_use(out, out.uses.back());
     if (out.declarations.size() > mark.declarations)
@@ -1150,7 +1151,9 @@ void tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark)
         out.quantities.resize(mark.quantities);
         out.sides.resize(mark.sides);
         out.formulas.resize(mark.formulas);
+        return true;
     }
+    return false;
 }
 
 bool is_word_byte(char c) {
@@ -1243,6 +1246,11 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
 
     std::size_t begin = 0;
     std::size_t syntax_errors = 0;
+    // Where the tree stood before the line being parsed. A line either succeeds with exactly
+    // its own statement added or fails and is rolled back: the grammar commits (must<>) before
+    // any action of a statement runs. So after a formula that was checked and dropped, only
+    // the diagnostics can have moved, and the mark need not be taken again in full (issue 12).
+    tree_mark mark(out);
     while (begin <= text.size()) {
         const std::size_t end = logical_line_end(text, begin);
         if (syntax_errors == max_syntax_errors) {
@@ -1253,13 +1261,14 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
             break;
         }
         state.reset_line();
-        const tree_mark mark(out);
         pg::memory_input<pg::tracking_mode::lazy, pg::eol::lf_crlf, const char*> in(
             text.data() + begin, text.data() + end, "");
         try {
             pg::parse<nt::line, action, control>(in, state);
-            if (sink != nullptr)
-                tell(*sink, out, mark);
+            if (sink != nullptr && tell(*sink, out, mark))
+                mark.diagnostics = out.diagnostics.size();
+            else
+                mark = tree_mark(out);
         } catch (const syntax_failure& failure) {
             mark.restore(out);
             const auto at = static_cast<std::uint32_t>(failure.at - text.data());
@@ -1279,12 +1288,14 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
                     message = hint;
             }
             state.report(rules::syntax, std::move(message), {at, stop});
+            mark.diagnostics = out.diagnostics.size();
             out.has_syntax_error = true;
             ++syntax_errors;
         } catch (const arithmetic_overflow&) {
             mark.restore(out);
             state.report(rules::overflow, "the exponents on this line exceed the exact range",
                          state.range(text.data() + begin, text.data() + end));
+            mark.diagnostics = out.diagnostics.size();
         }
         if (end >= text.size())
             break;
