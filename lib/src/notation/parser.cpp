@@ -1146,11 +1146,15 @@ bool tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark)
     if (out.declarations.size() > mark.declarations)
         sink.on_declaration(out, static_cast<std::uint32_t>(out.declarations.size() - 1));
     if (out.formulas.size() > mark.formulas && sink.on_formula(out, out.formulas.back())) {
-        out.nodes.resize(mark.nodes);
-        out.call_args.resize(mark.call_args);
-        out.quantities.resize(mark.quantities);
-        out.sides.resize(mark.sides);
-        out.formulas.resize(mark.formulas);
+        // Only ever shorter: erasing the tail skips resize's test for growing.
+        const auto cut = [](auto& v, std::size_t n) {
+            v.erase(v.begin() + static_cast<std::ptrdiff_t>(n), v.end());
+        };
+        cut(out.nodes, mark.nodes);
+        cut(out.call_args, mark.call_args);
+        cut(out.quantities, mark.quantities);
+        cut(out.sides, mark.sides);
+        cut(out.formulas, mark.formulas);
         return true;
     }
     return false;
