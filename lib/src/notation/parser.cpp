@@ -367,7 +367,8 @@ template <> struct action<nt::symbol> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         // pi is read as a name and told apart here: one rule fewer tried at every term.
         const std::string_view t = in.string_view();
-        s.push_node({t == "pi" || t == "\u03C0" ? expr_kind::pi : expr_kind::symbol, s.range(in)});
+        const bool is_pi = t.size() == 2 && (t == "pi" || t == "\u03C0");
+        s.push_node({is_pi ? expr_kind::pi : expr_kind::symbol, s.range(in)});
     }
 };
 template <> struct action<nt::call_open> {
