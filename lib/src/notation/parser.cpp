@@ -43,13 +43,22 @@ constexpr int max_nesting = 256;
 
 struct parse_state;
 int& nesting_depth(parse_state& s);
+void note_statement_fields(parse_state& s);
 
 template <typename Rule> struct control : pg::normal<Rule> {
     static constexpr bool nests =
         std::is_same_v<Rule, nt::unary> || std::is_same_v<Rule, nt::unit_primary>;
+    // The rule each statement other than a formula starts with once its kind is certain (after
+    // its lookahead), before any of its actions: only then are its pending fields written.
+    static constexpr bool opens_statement =
+        std::is_same_v<Rule, nt::name_list> || std::is_same_v<Rule, nt::cells_keyword> ||
+        std::is_same_v<Rule, nt::measure_keyword> || std::is_same_v<Rule, nt::study_name> ||
+        std::is_same_v<Rule, nt::case_kind>;
 
     template <typename Input, typename... States>
     static void start(const Input& in, States&... st) {
+        if constexpr (opens_statement)
+            note_statement_fields(st...);
         if constexpr (nests) {
             if (++nesting_depth(st...) > max_nesting)
                 throw syntax_failure{"this formula nests too deeply to check", in.current()};
@@ -118,6 +127,9 @@ struct parse_state {
     // Whether this line wrote pending_kind or bracket_dimension: most lines are formulas that
     // never do, and clearing those two costs more than the rest of the line's reset.
     bool kind_written = false;
+    // Whether this line started a statement other than a formula (see control): only such a
+    // line writes the fields below pending_spec, so only after one need they be cleared.
+    bool statement_fields_written = false;
     std::vector<unit_value> units;
     std::vector<std::size_t> unknown_units; // this line's unknown-unit diagnostics
     span pending_use_path{};
@@ -189,12 +201,19 @@ struct parse_state {
             bracket_dimension = {};
             kind_written = false;
         }
-        pending_spec = pending_value = pending_description = {};
-        pending_first_name = static_cast<std::uint32_t>(out.names.size());
-        spec_in_brackets = false;
         pending_exponent.reset();
         units.clear();
         unknown_units.clear();
+        if (statement_fields_written) {
+            clear_statement_fields();
+            statement_fields_written = false;
+        }
+    }
+    // Also where the lines' own parts of the tree start; only such statements add to those.
+    void clear_statement_fields() {
+        pending_spec = pending_value = pending_description = {};
+        pending_first_name = static_cast<std::uint32_t>(out.names.size());
+        spec_in_brackets = false;
         pending_study_name = pending_scale_text = {};
         pending_dependent_count = 0;
         pending_unit_size = 1.0;
@@ -224,6 +243,9 @@ struct parse_state {
 
 int& nesting_depth(parse_state& s) {
     return s.depth;
+}
+void note_statement_fields(parse_state& s) {
+    s.statement_fields_written = true;
 }
 
 // "(1/2)", "( -3 / 2 )", "-3", "0.5" to an exact rational.
