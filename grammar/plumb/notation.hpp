@@ -98,8 +98,10 @@ struct call_arguments
     : seq<call_open, ws, opt<argument, star<ws, next_argument>>, ws, must<call_close>> {};
 struct symbol_or_call : seq<symbol, opt<star<space>, call_arguments>> {};
 
-// `pi` and `π` are names to the grammar; the parser makes them the number.
-struct primary : sor<number_term, quantity_term, symbol_or_call, group> {};
+// `pi` and `π` are names to the grammar; the parser makes them the number. The alternatives
+// start with different bytes (a letter, a digit or '.', '(', '{'), so their order changes no
+// parse: the commonest come first (issue 12: parse speed).
+struct primary : sor<symbol_or_call, number_term, group, quantity_term> {};
 
 struct unary;
 struct power_operand : seq<unary> {};
@@ -109,20 +111,22 @@ struct negated_operand : seq<unary> {};
 struct negation : seq<one<'-'>, ws, must<negated_operand>> {};
 struct positive_operand : seq<unary> {};
 struct positive : seq<one<'+'>, ws, must<positive_operand>> {};
-struct unary : sor<negation, positive, power> {};
+// A power cannot start with '-' or '+', so trying it first changes no parse (issue 12).
+struct unary : sor<power, negation, positive> {};
 
 struct multiply_sign : sor<one<'*'>, seq<non_ascii, utf8::one<0xB7, 0xD7, 0x22C5>>> {}; // * · × ⋅
 struct factor : unary {};
 // "x**2" is another notation's power; point at it rather than at the second '*'.
 struct single_star : not_at<one<'*'>> {};
-struct multiply_tail : seq<ws, multiply_sign, must<single_star>, ws, must<factor>> {};
-struct divide_tail : seq<ws, one<'/'>, ws, must<factor>> {};
-struct product : seq<unary, star<sor<multiply_tail, divide_tail>>> {};
+struct multiply_tail : seq<multiply_sign, must<single_star>, ws, must<factor>> {};
+struct divide_tail : seq<one<'/'>, ws, must<factor>> {};
+// The blanks before an operator are read once for both operators (issue 12: parse speed).
+struct product : seq<unary, star<ws, sor<multiply_tail, divide_tail>>> {};
 
 struct term : product {};
-struct add_tail : seq<ws, one<'+'>, ws, must<term>> {};
-struct subtract_tail : seq<ws, one<'-'>, ws, must<term>> {};
-struct expression : seq<product, star<sor<add_tail, subtract_tail>>> {};
+struct add_tail : seq<one<'+'>, ws, must<term>> {};
+struct subtract_tail : seq<one<'-'>, ws, must<term>> {};
+struct expression : seq<product, star<ws, sor<add_tail, subtract_tail>>> {};
 
 // --- Formulas: equations and limits -------------------------------------------------------
 struct less_equal : sor<TAO_PEGTL_STRING("<="), seq<non_ascii, utf8::one<0x2264>>> {};
@@ -130,7 +134,8 @@ struct greater_equal : sor<TAO_PEGTL_STRING(">="), seq<non_ascii, utf8::one<0x22
 struct less : one<'<'> {};
 struct greater : one<'>'> {};
 struct equal : one<'='> {};
-struct relation_sign : sor<less_equal, greater_equal, less, greater, equal> {};
+// '=' starts no other sign, so trying the commonest sign first changes no parse (issue 12).
+struct relation_sign : sor<equal, less_equal, greater_equal, less, greater> {};
 
 struct side : expression {};
 struct first_side : expression {};
@@ -218,8 +223,13 @@ struct description : if_must<one<'"'>, description_text, description_close> {};
 // The lookahead that tells a declaration from a formula; a missing name after a comma still
 // counts, so that name_list can say what is missing.
 struct declaration_head : seq<name, star<ws, one<','>, ws, opt<name>>, ws, one<':'>> {};
-struct declaration : seq<at<declaration_head>, name_list, ws, one<':'>, ws, must<declaration_spec>,
-                         opt<ws, constant_assignment>, opt<ws, description>> {};
+// A cheap first test: a declaration's ':' comes before any '=' (names, commas and blanks stand
+// before it; a '\\' may start a continuation whose comment holds anything, so it passes too).
+// Most lines are formulas, and this turns them away before their first name is read (issue 12).
+struct colon_before_equals : seq<star<not_one<':', '=', '\\'>>, one<':', '\\'>> {};
+struct declaration
+    : seq<at<colon_before_equals>, at<declaration_head>, name_list, ws, one<':'>, ws,
+          must<declaration_spec>, opt<ws, constant_assignment>, opt<ws, description>> {};
 
 // --- Units of one's own --------------------------------------------------------------------
 //   measure mgd = 1e6 gal/d "million US gallons per day"
@@ -335,8 +345,12 @@ struct cells_statement : seq<at<cells_keyword, plus<space>, cells_sheet, one<'!'
                              must<cells_colon>, ws, must<cells_spec>, opt<ws, description>> {};
 
 // --- One logical line ---------------------------------------------------------------------
-struct statement : sor<use_statement, cells_statement, measure_statement, retired_unit_statement,
-                       study_statement, case_statement, declaration, formula> {};
+struct keyword_statement : sor<use_statement, cells_statement, measure_statement,
+                               retired_unit_statement, study_statement, case_statement> {};
+// Every keyword statement starts with its keyword ("use", "unit", "cells", "measure", "model",
+// "prototype", "study"): a line that starts with another byte tries none of them (issue 12).
+struct keyword_initial : one<'c', 'm', 'p', 's', 'u'> {};
+struct statement : sor<seq<at<keyword_initial>, keyword_statement>, declaration, formula> {};
 struct line_end : seq<ws, opt<comment>, eof> {};
 struct line : seq<ws, opt<statement>, must<line_end>> {};
 

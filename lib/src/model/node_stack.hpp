@@ -13,8 +13,19 @@ struct node_stack {
     std::vector<std::uint32_t> operands; // indices into the tree's nodes, innermost last
 
     std::uint32_t push(parsed_file& tree, expr_node n) {
+        // Growing is rare and kept out of line, so the common append saves no registers
+        // (issue 12: parse speed).
+        if (tree.nodes.size() == tree.nodes.capacity() || operands.size() == operands.capacity())
+            [[unlikely]]
+            return push_growing(tree, n);
+        const auto index = static_cast<std::uint32_t>(tree.nodes.size());
         tree.nodes.push_back(n);
-        const auto index = static_cast<std::uint32_t>(tree.nodes.size() - 1);
+        operands.push_back(index);
+        return index;
+    }
+    [[gnu::noinline]] std::uint32_t push_growing(parsed_file& tree, expr_node n) {
+        const auto index = static_cast<std::uint32_t>(tree.nodes.size());
+        tree.nodes.push_back(n);
         operands.push_back(index);
         return index;
     }

@@ -2,6 +2,10 @@
 
 #include <fmt/format.h>
 
+#include <bit>
+#include <cstdint>
+#include <cstring>
+
 namespace plumb {
 
 namespace {
@@ -45,8 +49,22 @@ std::size_t utf8_length_at(std::string_view text, std::size_t at) {
 }
 
 std::optional<std::size_t> first_invalid_utf8(std::string_view text) {
+    constexpr std::uint64_t high_bits = 0x8080808080808080U;
     for (std::size_t i = 0; i < text.size();) {
-        // ASCII runs are the common case: step over them a byte at a time without decoding.
+        // ASCII runs are the common case: step over them eight bytes at a time while no byte
+        // has its high bit set, then a byte at a time, without decoding (issue 12: speed).
+        if (text.size() - i >= sizeof(std::uint64_t)) {
+            std::uint64_t word = 0;
+            std::memcpy(&word, text.data() + i, sizeof word);
+            const std::uint64_t high = word & high_bits;
+            if (high == 0) {
+                i += sizeof word;
+                continue;
+            }
+            // On a little-endian machine the lowest set bit is in the first non-ASCII byte.
+            if constexpr (std::endian::native == std::endian::little)
+                i += static_cast<std::size_t>(std::countr_zero(high)) / 8;
+        }
         if (static_cast<unsigned char>(text[i]) < 0x80) {
             ++i;
             continue;

@@ -43,13 +43,22 @@ constexpr int max_nesting = 256;
 
 struct parse_state;
 int& nesting_depth(parse_state& s);
+void note_statement_fields(parse_state& s);
 
 template <typename Rule> struct control : pg::normal<Rule> {
     static constexpr bool nests =
         std::is_same_v<Rule, nt::unary> || std::is_same_v<Rule, nt::unit_primary>;
+    // The rule each statement other than a formula starts with once its kind is certain (after
+    // its lookahead), before any of its actions: only then are its pending fields written.
+    static constexpr bool opens_statement =
+        std::is_same_v<Rule, nt::name_list> || std::is_same_v<Rule, nt::cells_keyword> ||
+        std::is_same_v<Rule, nt::measure_keyword> || std::is_same_v<Rule, nt::study_name> ||
+        std::is_same_v<Rule, nt::case_kind>;
 
     template <typename Input, typename... States>
     static void start(const Input& in, States&... st) {
+        if constexpr (opens_statement)
+            note_statement_fields(st...);
         if constexpr (nests) {
             if (++nesting_depth(st...) > max_nesting)
                 throw syntax_failure{"this formula nests too deeply to check", in.current()};
@@ -115,6 +124,12 @@ struct parse_state {
     dimension bracket_dimension;
     base_dimension pending_base = base_dimension::mass;
     std::optional<rational> pending_exponent;
+    // Whether this line wrote pending_kind or bracket_dimension: most lines are formulas that
+    // never do, and clearing those two costs more than the rest of the line's reset.
+    bool kind_written = false;
+    // Whether this line started a statement other than a formula (see control): only such a
+    // line writes the fields below pending_spec, so only after one need they be cleared.
+    bool statement_fields_written = false;
     std::vector<unit_value> units;
     std::vector<std::size_t> unknown_units; // this line's unknown-unit diagnostics
     span pending_use_path{};
@@ -181,14 +196,24 @@ struct parse_state {
         argument_counts.clear();
         pending_relation = relation_kind::none;
         pending_label = {};
-        pending_kind = {};
-        pending_spec = pending_value = pending_description = {};
-        pending_first_name = static_cast<std::uint32_t>(out.names.size());
-        spec_in_brackets = false;
-        bracket_dimension = {};
+        if (kind_written) {
+            pending_kind = {};
+            bracket_dimension = {};
+            kind_written = false;
+        }
         pending_exponent.reset();
         units.clear();
         unknown_units.clear();
+        if (statement_fields_written) {
+            clear_statement_fields();
+            statement_fields_written = false;
+        }
+    }
+    // Also where the lines' own parts of the tree start; only such statements add to those.
+    void clear_statement_fields() {
+        pending_spec = pending_value = pending_description = {};
+        pending_first_name = static_cast<std::uint32_t>(out.names.size());
+        spec_in_brackets = false;
         pending_study_name = pending_scale_text = {};
         pending_dependent_count = 0;
         pending_unit_size = 1.0;
@@ -218,6 +243,9 @@ struct parse_state {
 
 int& nesting_depth(parse_state& s) {
     return s.depth;
+}
+void note_statement_fields(parse_state& s) {
+    s.statement_fields_written = true;
 }
 
 // "(1/2)", "( -3 / 2 )", "-3", "0.5" to an exact rational.
@@ -251,8 +279,10 @@ template <typename Rule> struct action : pg::nothing<Rule> {};
 // A number, a number with a unit in braces, or a number marked for inference.
 template <> struct action<nt::number_term> {
     template <typename In> static void apply(const In& in, parse_state& s) {
-        const std::string_view t = in.string_view();
-        if (t.find('?') != std::string_view::npos) {
+        // What ends the term tells its kind: a number ends in a digit or '.', a quantity in
+        // '}', an inferred coefficient in '?' or in the ']' of its statement.
+        const char last = in.string_view().back();
+        if (last == '?' || last == ']') {
             s.line_has_inferred = true;
             std::uint32_t statement = syntax::no_index;
             if (s.pending_statement) {
@@ -263,7 +293,7 @@ template <> struct action<nt::number_term> {
             s.push_node({expr_kind::inferred, s.range(in), statement});
             return;
         }
-        if (t.back() == '}') {
+        if (last == '}') {
             push_quantity(in, s);
             return;
         }
@@ -359,7 +389,8 @@ template <> struct action<nt::symbol> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         // pi is read as a name and told apart here: one rule fewer tried at every term.
         const std::string_view t = in.string_view();
-        s.push_node({t == "pi" || t == "\u03C0" ? expr_kind::pi : expr_kind::symbol, s.range(in)});
+        const bool is_pi = t.size() == 2 && (t == "pi" || t == "\u03C0");
+        s.push_node({is_pi ? expr_kind::pi : expr_kind::symbol, s.range(in)});
     }
 };
 template <> struct action<nt::call_open> {
@@ -504,6 +535,7 @@ template <> struct action<nt::dimension_exponent> {
 };
 template <> struct action<nt::dimension_factor> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.kind_written = true;
         s.bracket_dimension = s.bracket_dimension *
                               dimension::base(s.pending_base).pow(s.pending_exponent.value_or(1));
         s.pending_exponent.reset();
@@ -741,6 +773,7 @@ template <> struct action<nt::declaration_spec> {
     template <typename In> static void apply(const In& in, parse_state& s) { take_spec(in, s); }
     template <typename In> static void take_spec(const In& in, parse_state& s) {
         s.pending_spec = s.range(in);
+        s.kind_written = true;
         if (in.string_view() == "?") {
             s.pending_kind.to_infer = true;
             return;
@@ -1069,6 +1102,9 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin) {
         const void* nl = std::memchr(text.data() + pos, '\n', text.size() - pos);
         const std::size_t end =
             nl ? static_cast<std::size_t>(static_cast<const char*>(nl) - text.data()) : text.size();
+        // Only a line with a '\' in it can continue; most have none and need no further scan.
+        if (std::memchr(text.data() + pos, '\\', end - pos) == nullptr)
+            return end;
         std::size_t content_end = end;
         // Most lines have no comment; only those need the quote-aware scan.
         if (std::memchr(text.data() + pos, '#', end - pos) != nullptr) {
@@ -1125,19 +1161,26 @@ struct tree_mark {
     }
 };
 
-// Passes the statement a line added to the sink; drops a formula's tree once it is checked.
-void tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark) {
+// Passes the statement a line added to the sink; drops a formula's tree once it is checked,
+// and says whether it did.
+bool tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark) {
     if (out.uses.size() > mark.uses)
         sink.on_use(out, out.uses.back());
     if (out.declarations.size() > mark.declarations)
         sink.on_declaration(out, static_cast<std::uint32_t>(out.declarations.size() - 1));
     if (out.formulas.size() > mark.formulas && sink.on_formula(out, out.formulas.back())) {
-        out.nodes.resize(mark.nodes);
-        out.call_args.resize(mark.call_args);
-        out.quantities.resize(mark.quantities);
-        out.sides.resize(mark.sides);
-        out.formulas.resize(mark.formulas);
+        // Only ever shorter: erasing the tail skips resize's test for growing.
+        const auto cut = [](auto& v, std::size_t n) {
+            v.erase(v.begin() + static_cast<std::ptrdiff_t>(n), v.end());
+        };
+        cut(out.nodes, mark.nodes);
+        cut(out.call_args, mark.call_args);
+        cut(out.quantities, mark.quantities);
+        cut(out.sides, mark.sides);
+        cut(out.formulas, mark.formulas);
+        return true;
     }
+    return false;
 }
 
 bool is_word_byte(char c) {
@@ -1230,6 +1273,11 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
 
     std::size_t begin = 0;
     std::size_t syntax_errors = 0;
+    // Where the tree stood before the line being parsed. A line either succeeds with exactly
+    // its own statement added or fails and is rolled back: the grammar commits (must<>) before
+    // any action of a statement runs. So after a formula that was checked and dropped, only
+    // the diagnostics can have moved, and the mark need not be taken again in full (issue 12).
+    tree_mark mark(out);
     while (begin <= text.size()) {
         const std::size_t end = logical_line_end(text, begin);
         if (syntax_errors == max_syntax_errors) {
@@ -1240,13 +1288,14 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
             break;
         }
         state.reset_line();
-        const tree_mark mark(out);
         pg::memory_input<pg::tracking_mode::lazy, pg::eol::lf_crlf, const char*> in(
             text.data() + begin, text.data() + end, "");
         try {
             pg::parse<nt::line, action, control>(in, state);
-            if (sink != nullptr)
-                tell(*sink, out, mark);
+            if (sink != nullptr && tell(*sink, out, mark))
+                mark.diagnostics = out.diagnostics.size();
+            else
+                mark = tree_mark(out);
         } catch (const syntax_failure& failure) {
             mark.restore(out);
             const auto at = static_cast<std::uint32_t>(failure.at - text.data());
@@ -1266,12 +1315,14 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
                     message = hint;
             }
             state.report(rules::syntax, std::move(message), {at, stop});
+            mark.diagnostics = out.diagnostics.size();
             out.has_syntax_error = true;
             ++syntax_errors;
         } catch (const arithmetic_overflow&) {
             mark.restore(out);
             state.report(rules::overflow, "the exponents on this line exceed the exact range",
                          state.range(text.data() + begin, text.data() + end));
+            mark.diagnostics = out.diagnostics.size();
         }
         if (end >= text.size())
             break;
