@@ -826,3 +826,16 @@ TEST_CASE("inference: a statement on a coefficient left free is said to go unche
     CHECK(has_note(d, "what is stated for it, [L], cannot be checked until its dimension is "
                       "settled"));
 }
+
+// A line that fails after stating a coefficient leaves nothing behind: the statement is rolled
+// back with the rest of the line's tree (found while speeding up the parser).
+TEST_CASE("stated coefficients: a failed line leaves no statement behind") {
+    const plumb::source_file source("rollback.plumb",
+                                    "V : m/s\nR, S, n : 1\n"
+                                    "V = 1.486?[L^(1/3) T^-1]/n*R^(2/3)*S^(1/2) +\n"
+                                    "V = 1.49?[L^(1/3) T^-1]/n*R^(2/3)*S^(1/2)\n");
+    const plumb::syntax::parsed_file tree = plumb::parse_file(source);
+    CHECK(tree.has_syntax_error);
+    REQUIRE(tree.formulas.size() == 1);
+    CHECK(tree.coefficient_statements.size() == 1);
+}

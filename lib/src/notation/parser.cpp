@@ -1133,14 +1133,16 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin) {
 // Rolls back whatever a failed line added, so the tree holds only complete statements.
 struct tree_mark {
     std::size_t nodes, call_args, quantities, sides, formulas, declarations, names, uses, units,
-        studies, study_names, cases, case_values, case_matches, cells, diagnostics;
+        studies, study_names, cases, case_values, case_matches, cells, diagnostics,
+        coefficient_statements;
     explicit tree_mark(const syntax::parsed_file& f)
         : nodes(f.nodes.size()), call_args(f.call_args.size()), quantities(f.quantities.size()),
           sides(f.sides.size()), formulas(f.formulas.size()), declarations(f.declarations.size()),
           names(f.names.size()), uses(f.uses.size()), units(f.units.size()),
           studies(f.studies.size()), study_names(f.study_names.size()), cases(f.cases.size()),
           case_values(f.case_values.size()), case_matches(f.case_matches.size()),
-          cells(f.cells.size()), diagnostics(f.diagnostics.size()) {}
+          cells(f.cells.size()), diagnostics(f.diagnostics.size()),
+          coefficient_statements(f.coefficient_statements.size()) {}
     void restore(syntax::parsed_file& f) const {
         f.nodes.resize(nodes);
         f.call_args.resize(call_args);
@@ -1158,6 +1160,7 @@ struct tree_mark {
         f.case_matches.resize(case_matches);
         f.cells.resize(cells);
         f.diagnostics.resize(diagnostics);
+        f.coefficient_statements.resize(coefficient_statements);
     }
 };
 
@@ -1177,6 +1180,7 @@ bool tell(statement_sink& sink, syntax::parsed_file& out, const tree_mark& mark)
         cut(out.call_args, mark.call_args);
         cut(out.quantities, mark.quantities);
         cut(out.sides, mark.sides);
+        cut(out.coefficient_statements, mark.coefficient_statements);
         cut(out.formulas, mark.formulas);
         return true;
     }
