@@ -25,16 +25,16 @@ std::string read(const fs::path& p) {
     return {std::istreambuf_iterator<char>(in), std::istreambuf_iterator<char>()};
 }
 
-// A calc package of our own invention: a field formula accepted with a reason (water
-// horsepower, P = Q H / 3960 in hp, gpm, ft; Pump Handbook, from memory), a wrong one, a study
-// and a Markdown note.
+// A calc package of our own invention: a field formula accepted with a reason (Hazen-Williams
+// in US units, V = 1.318 C R^0.63 S^0.54 in ft/s and ft; Mays, Water Resources Engineering,
+// from memory), a wrong one, a study and a Markdown note.
 void write_package(const scratch_folder& dir) {
     dir.write("plumb.toml", "include = [\"calcs\", \"notes\"]\n");
     dir.write(
         "calcs/reserves.plumb",
-        "P_w : hp \"water horsepower\"\nQ : gpm\nH : ft\n"
-        "@whp P_w = Q*H/3960   # reviewed side-mismatch: 3960 holds the specific weight "
-        "of water, from the pump handbook\n"
+        "V : ft/s \"mean velocity in the main\"\nR_h : ft\nS, C_hw : 1\n"
+        "@hw V = 1.318*C_hw*R_h^0.63*S^0.54   # reviewed side-mismatch: an empirical fit in "
+        "US units, used inside its range\n"
         "x, y : m\nz : s\n@wrong y = x + z\n"
         "F_D : N\nρ : kg/m^3\nV : m/s\nD : m\nμ : Pa*s\nstudy sphere: F_D depends on ρ, V, D, μ\n");
     dir.write("notes/pump.md", "# Pump note\n\n```plumb\nQ : m^3/s\nA : m^2\nu : m/s\n"
@@ -106,7 +106,7 @@ TEST_CASE("browser: headless Chromium renders the sign-off report with its conte
     CHECK(contains(html, "<td id=\"formula-count\">4</td>"));
     CHECK(contains(html, "<td id=\"error-count\">1</td>"));
     CHECK(contains(html, "<td id=\"accepted-count\">1</td>"));
-    CHECK(contains(html, "3960 holds the specific weight of water, from the pump handbook"));
+    CHECK(contains(html, "an empirical fit in US units, used inside its range"));
     CHECK(contains(html, "mean-velocity"));
     CHECK(contains(html, "notes/pump.md"));
     CHECK(contains(html, "Reynolds number"));
