@@ -32,8 +32,8 @@ void write_package(const scratch_folder& dir) {
     dir.write("plumb.toml", "include = [\"calcs\", \"notes\"]\n");
     dir.write(
         "calcs/reserves.plumb",
-        "V : ft/s \"mean velocity in the main\"\nR_h : ft\nS, C_hw : 1\n"
-        "@hw V = 1.318*C_hw*R_h^0.63*S^0.54   # reviewed side-mismatch: an empirical fit in "
+        "V_hw : ft/s \"mean velocity in the main\"\nR_h : ft\nS, C_hw : 1\n"
+        "@hw V_hw = 1.318*C_hw*R_h^0.63*S^0.54   # reviewed side-mismatch: an empirical fit in "
         "US units, used inside its range\n"
         "x, y : m\nz : s\n@wrong y = x + z\n"
         "F_D : N\nρ : kg/m^3\nV : m/s\nD : m\nμ : Pa*s\nstudy sphere: F_D depends on ρ, V, D, μ\n");
