@@ -5,6 +5,7 @@
 #include "check/edit_distance.hpp"
 #include "check/functions.hpp"
 #include "check/gravity_number.hpp"
+#include "check/number_reading.hpp"
 #include "check/scale_match.hpp"
 #include "check/trade_constants.hpp"
 #include "plumb/rules.hpp"
@@ -620,13 +621,12 @@ class checker {
     typed eval_number(const syntax::expr_node& n, std::uint32_t index) {
         typed t;
         t.numeric = true;
-        const std::string_view written = text(n.range);
-        t.value = rational::parse(written);
-        t.zero = t.value && t.value->is_zero();
+        const number_reading& reading = read_number(text(n.range));
+        t.value = reading.value;
+        t.zero = reading.zero;
         if (!t.zero) {
-            const double v =
-                t.value ? t.value->to_double() : std::strtod(std::string(written).c_str(), nullptr);
-            literals_.push_back(read_literal(written, v, index, t.value));
+            literals_.push_back(reading.literal);
+            literals_.back().node = index;
         }
         return t;
     }
