@@ -9,6 +9,7 @@
 #include "check/scale_match.hpp"
 #include "check/trade_constants.hpp"
 #include "plumb/rules.hpp"
+#include "units/compact_dimension.hpp"
 #include "units/exact_factor.hpp"
 
 #include <algorithm>
@@ -27,7 +28,7 @@ using syntax::expr_kind;
 
 // A subexpression's type: its dimension, and what the rules need to know about its value.
 struct typed {
-    dimension dim;
+    compact_dimension dim;
     bool known = true;             // false below an error already reported: stops cascades
     bool zero = false;             // the literal 0, which agrees with any dimension
     bool numeric = false;          // built from numbers alone
@@ -66,26 +67,26 @@ typed unknown_type(bool inferred = false) {
     return t;
 }
 
-const dimension& temperature_dimension() {
-    static const dimension d = unit_table::standard().resolve("K")->dim();
+const compact_dimension& temperature_dimension() {
+    static const compact_dimension d(unit_table::standard().resolve("K")->dim());
     return d;
 }
-const dimension& pressure_dimension() {
-    static const dimension d = unit_table::standard().resolve("Pa")->dim();
+const compact_dimension& pressure_dimension() {
+    static const compact_dimension d(unit_table::standard().resolve("Pa")->dim());
     return d;
 }
 
 // The table's offset and gauge units with their dimensions, for naming a scale by its zero.
 struct offset_row {
     const unit_definition* unit;
-    dimension dim;
+    compact_dimension dim;
 };
 const std::vector<offset_row>& offset_rows() {
     static const std::vector<offset_row> rows = [] {
         std::vector<offset_row> out;
         for (const auto& u : unit_table::standard().units())
             if (u.scale != unit_scale::absolute)
-                out.push_back({&u, u.dim()});
+                out.push_back({&u, compact_dimension(u.dim())});
         return out;
     }();
     return rows;
@@ -115,6 +116,9 @@ std::string describe(const dimension& d) {
         return d.is_dimensionless() ? std::string("[1] (dimensionless)") : d.to_string();
     return fmt::format("{} ({})", d.to_string(), name);
 }
+std::string describe(const compact_dimension& d) {
+    return describe(d.expand());
+}
 
 // The operands of one meeting point (terms of a sum, arguments, sides of a formula).
 struct operand {
@@ -124,18 +128,12 @@ struct operand {
 };
 
 struct dimension_hash {
-    std::size_t operator()(const dimension& d) const noexcept {
-        std::size_t h = 0;
-        for (const rational& e : d.exponents())
-            h = h * 1'000'003 + std::hash<std::int64_t>{}(e.num()) * 31 +
-                std::hash<std::int64_t>{}(e.den());
-        return h;
-    }
+    std::size_t operator()(const compact_dimension& d) const noexcept { return d.hash(); }
 };
 
 struct agreement {
-    std::optional<dimension> reference; // the dimension most operands share
-    std::vector<std::size_t> odd;       // operands that differ from it
+    std::optional<compact_dimension> reference; // the dimension most operands share
+    std::vector<std::size_t> odd;               // operands that differ from it
 };
 
 // The reference is the dimension most operands share (the first such on a tie), so that one
@@ -151,7 +149,7 @@ agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless
         std::any_of(ops.begin(), ops.end(), [](const operand& op) {
             return op.type.known && !op.type.zero && !op.type.dim.is_dimensionless();
         })) {
-        result.reference = dimension{};
+        result.reference = compact_dimension{};
         for (std::size_t i = 0; i < ops.size(); ++i)
             if (ops[i].type.known && !ops[i].type.zero && !ops[i].type.dim.is_dimensionless())
                 result.odd.push_back(i);
@@ -177,8 +175,8 @@ agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless
     }
     // Counted in a hash map, since a sum may have thousands of terms of as many dimensions;
     // `counts` keeps the order of first appearance, which breaks ties.
-    std::vector<std::pair<dimension, std::size_t>> counts;
-    std::unordered_map<dimension, std::size_t, dimension_hash> index;
+    std::vector<std::pair<compact_dimension, std::size_t>> counts;
+    std::unordered_map<compact_dimension, std::size_t, dimension_hash> index;
     for (const auto& op : ops) {
         if (!op.type.known || op.type.zero)
             continue;
@@ -240,6 +238,8 @@ class checker {
         : file_(file), symbols_(symbols), out_(out), defer_unknown_(defer_unknown),
           spine_(scratch().spine), operands_(scratch().operands), literals_(scratch().literals),
           scaled_(scratch().scaled), scaled_index_(scratch().scaled_index) {
+        // No dimension of an earlier check is alive: their spilled exponents may go.
+        compact_dimension::reset_arena();
         // A check abandoned by an exception may have left its part behind.
         spine_.clear();
         operands_.clear();
@@ -407,7 +407,7 @@ class checker {
         const typed t = eval(file_.sides[f.first_side].root);
         if (!t.known)
             return std::nullopt;
-        return value_type{t.dim, t.scale, t.offset, t.zero, t.exact_scale};
+        return value_type{t.dim.expand(), t.scale, t.offset, t.zero, t.exact_scale};
     }
 
   private:
@@ -492,7 +492,7 @@ class checker {
                 return false;
             dimension lacking;
             try {
-                lacking = *a.reference / t.dim;
+                lacking = (*a.reference / t.dim).expand();
             } catch (const std::exception&) {
                 return false;
             }
@@ -544,7 +544,7 @@ class checker {
     void add_term(diagnostic& d, const operand& op, bool differs = false) const {
         d.terms.push_back({{file_.source, file_.nodes[op.node].range},
                            display_text(file_.nodes[op.node].range),
-                           op.type.dim,
+                           op.type.dim.expand(),
                            differs});
     }
 
@@ -606,7 +606,7 @@ class checker {
         if (!q.dim)
             return unknown_type();
         typed t;
-        t.dim = *q.dim;
+        t.dim = compact_dimension(*q.dim);
         // A constant stands for its SI value; a number in braces is in the unit written.
         t.scale = q.constant ? 1.0 : q.si_factor;
         t.exact_scale = q.constant ? std::optional<rational>(rational(1)) : q.si_exact;
@@ -672,7 +672,7 @@ class checker {
         if (!entry->dim)
             return unknown_type();
         typed t;
-        t.dim = *entry->dim;
+        t.dim = entry->compact_dim ? *entry->compact_dim : compact_dimension(*entry->dim);
         t.scale = entry->si_factor;
         t.exact_scale = entry->si_exact;
         t.offset = entry->offset_unit;
@@ -857,7 +857,7 @@ class checker {
     }
 
     // Where a scale of this dimension can have its zero: absolute, or an offset unit's zero.
-    bool recognised_origin(double origin, double tolerance, const dimension& dim,
+    bool recognised_origin(double origin, double tolerance, const compact_dimension& dim,
                            std::span<const operand> terms) const {
         const double slack = tolerance + 1e-9 * std::abs(origin) + 1e-9;
         if (std::abs(origin) <= slack)
@@ -872,7 +872,8 @@ class checker {
     }
 
     // The table's (or the formula's) offset unit whose zero is `origin`, to name the scale.
-    const unit_definition* scale_named(double origin, double tolerance, const dimension& dim,
+    const unit_definition* scale_named(double origin, double tolerance,
+                                       const compact_dimension& dim,
                                        std::span<const operand> terms) const {
         const double slack = tolerance + 1e-9 * std::abs(origin) + 1e-9;
         for (const auto& t : terms)
@@ -1569,7 +1570,7 @@ class checker {
 
     // A value on an offset scale used where only an absolute one makes sense.
     void report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where,
-                       const dimension* partner = nullptr) {
+                       const compact_dimension* partner = nullptr) {
         const bool temperature =
             unit.exponents[static_cast<std::size_t>(base_dimension::temperature)] != 0;
         diagnostic& d =
@@ -1923,7 +1924,7 @@ class checker {
             if (!std::all_of(args.begin(), args.end(),
                              [](const operand& o) { return o.type.known; }))
                 return unknown_type();
-            result.dim = a.reference.value_or(dimension{});
+            result.dim = a.reference.value_or(compact_dimension{});
             result.scale = scales_agree ? unit : std::numeric_limits<double>::quiet_NaN();
             result.offset = args[0].type.offset;
             result.origin = args[0].type.origin;
@@ -1952,7 +1953,7 @@ class checker {
         if (!r.dim)
             return unknown_type();
         typed t;
-        t.dim = *r.dim;
+        t.dim = compact_dimension(*r.dim);
         t.scale = r.scale;
         t.exact_scale = r.exact_scale;
         t.offset = r.offset;
@@ -2012,7 +2013,7 @@ class checker {
         if (!std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.known; }))
             return unknown_type();
         typed result;
-        result.dim = a.reference.value_or(dimension{});
+        result.dim = a.reference.value_or(compact_dimension{});
         result.zero =
             std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.zero; });
         result.numeric =
@@ -2243,7 +2244,7 @@ std::optional<dimension> expression_dimension(const syntax::parsed_file& file, s
                         [](const diagnostic& d) { return d.level == severity::error; });
         if (!t.known || erred)
             return std::nullopt;
-        return t.dim;
+        return t.dim.expand();
     } catch (const arithmetic_overflow&) {
         diagnostic d;
         d.rule = std::string(rules::overflow);

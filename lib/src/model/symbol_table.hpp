@@ -3,6 +3,7 @@
 
 #include "plumb/diagnostic.hpp"
 #include "plumb/dimension.hpp"
+#include "units/compact_dimension.hpp"
 
 #include <cstdint>
 #include <optional>
@@ -29,6 +30,9 @@ struct symbol_entry {
     // A temperature or pressure in an absolute unit: a reading (1) or a difference (0), worked
     // out from its name and description on first use; -1 until then.
     std::int8_t reading = -1;
+    // `dim` in the checker's form, worked out once on insert rather than at every use; empty
+    // when `dim` is or when it does not fit that form.
+    std::optional<compact_dimension> compact_dim;
 };
 
 // Names to entries. Look-up is the hottest operation of a check (every symbol of every
@@ -55,6 +59,8 @@ class symbol_table {
             grow();
         names_.push_back(name);
         entries_.push_back(entry);
+        entries_.back().compact_dim =
+            entry.dim ? compact_dimension::fitted(*entry.dim) : std::nullopt;
         place(static_cast<std::uint32_t>(names_.size() - 1));
         return {&entries_.back(), true};
     }

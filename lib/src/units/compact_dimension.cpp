@@ -1,0 +1,109 @@
+// Fitting dimensions into 16 bits per exponent, and the arena for those that do not fit.
+#include "units/compact_dimension.hpp"
+
+#include <numeric>
+#include <vector>
+
+namespace plumb {
+namespace {
+
+std::vector<dimension>& arena() {
+    thread_local std::vector<dimension> kept;
+    return kept;
+}
+
+} // namespace
+
+std::optional<compact_dimension> compact_dimension::fitted(const dimension& d) {
+    compact_dimension whole;
+    bool all_whole = true;
+    for (std::size_t i = 0; i < base_dimension_count && all_whole; ++i) {
+        const rational e = d.exponents()[i];
+        all_whole = e.den() == 1 && e.num() >= INT16_MIN && e.num() <= INT16_MAX;
+        whole.num_[i] = static_cast<std::int16_t>(e.num());
+    }
+    if (all_whole) // nearly every dimension: no common denominator to find
+        return whole;
+    std::int64_t common = 1;
+    for (const rational& e : d.exponents()) {
+        common = std::lcm(common, e.den());
+        if (common > INT16_MAX)
+            return std::nullopt;
+    }
+    compact_dimension r;
+    r.den_ = static_cast<std::int16_t>(common);
+    for (std::size_t i = 0; i < base_dimension_count; ++i) {
+        const rational e = d.exponents()[i];
+        std::int64_t n = 0;
+        if (__builtin_mul_overflow(e.num(), common / e.den(), &n) || n < INT16_MIN || n > INT16_MAX)
+            return std::nullopt;
+        r.num_[i] = static_cast<std::int16_t>(n);
+    }
+    return r;
+}
+
+compact_dimension::compact_dimension(const dimension& d) {
+    if (const auto f = fitted(d)) {
+        *this = *f;
+        return;
+    }
+    std::vector<dimension>& kept = arena();
+    const auto index = static_cast<std::uint32_t>(kept.size());
+    kept.push_back(d);
+    den_ = 0;
+    num_[0] = static_cast<std::int16_t>(index & 0xFFFFU);
+    num_[1] = static_cast<std::int16_t>(index >> 16);
+}
+
+void compact_dimension::reset_arena() {
+    std::vector<dimension>& kept = arena();
+    kept.clear();
+    // A hostile formula may have filled it; ordinary checks never use it.
+    if (kept.capacity() > 1024)
+        kept.shrink_to_fit();
+}
+
+dimension compact_dimension::expand() const {
+    if (den_ == 0) {
+        const std::uint32_t index =
+            static_cast<std::uint16_t>(num_[0]) |
+            (static_cast<std::uint32_t>(static_cast<std::uint16_t>(num_[1])) << 16);
+        return arena()[index];
+    }
+    std::array<rational, base_dimension_count> e{};
+    for (std::size_t i = 0; i < base_dimension_count; ++i)
+        e[i] = den_ == 1 ? rational(num_[i]) : rational(num_[i], den_);
+    return dimension::from_exponents(e);
+}
+
+compact_dimension compact_dimension::pow(rational p) const {
+    if (den_ == 1 && p.is_integer() && p.num() >= INT16_MIN && p.num() <= INT16_MAX) {
+        compact_dimension r;
+        bool fits = true;
+        for (std::size_t i = 0; i < base_dimension_count; ++i) {
+            const std::int64_t v = static_cast<std::int64_t>(num_[i]) * p.num();
+            fits = fits && v >= INT16_MIN && v <= INT16_MAX;
+            r.num_[i] = static_cast<std::int16_t>(v);
+        }
+        if (fits)
+            return r;
+    }
+    return compact_dimension(expand().pow(p));
+}
+
+std::size_t compact_dimension::hash() const {
+    if (den_ == 0) {
+        const dimension full = expand();
+        std::size_t h = 0;
+        for (const rational& e : full.exponents())
+            h = h * 1'000'003 + std::hash<std::int64_t>{}(e.num()) * 31 +
+                std::hash<std::int64_t>{}(e.den());
+        return h;
+    }
+    std::size_t h = static_cast<std::uint16_t>(den_);
+    for (const std::int16_t n : num_)
+        h = h * 1'000'003 + static_cast<std::uint16_t>(n);
+    return h;
+}
+
+} // namespace plumb
