@@ -27,11 +27,9 @@ namespace {
 using syntax::expr_kind;
 
 // A subexpression's type: its dimension, and what the rules need to know about its value.
+// Every node gets one, and sums keep one per term, so the flags are packed at the end.
 struct typed {
     compact_dimension dim;
-    bool known = true;             // false below an error already reported: stops cascades
-    bool zero = false;             // the literal 0, which agrees with any dimension
-    bool numeric = false;          // built from numbers alone
     std::optional<rational> value; // exact value, when numeric and exactly representable
     // SI value per written value: the product of the declared units' factors. Terms that agree
     // in dimension but not in scale give numbers off by that factor.
@@ -44,20 +42,23 @@ struct typed {
     const unit_definition* offset = nullptr;
     double origin = 0.0;           // SI value of the scale's zero: 273.15 K for °C, 0 absolute
     double origin_tolerance = 0.0; // from rounded numbers that moved it (14.7 psi)
-    bool point = false; // a reading on a scale (a temperature, a pressure), not a difference
-    // "(T - 20)": a reading less a number that is not a scale's zero. Beside other readings
-    // it is a reading; as a factor it is the difference from a reference reading.
-    bool reading_or_difference = false;
     // "p_abs - p_g": an absolute reading less a reading on an offset scale is that scale's
     // zero, the atmosphere, as a reading on the absolute scale. Names the offset scale.
     const unit_definition* zero_of = nullptr;
+    // The numbers along its multiplicative path, on the checker's literal stack.
+    std::uint32_t literal_begin = 0;
+    std::uint32_t literal_count = 0;
+    bool known = true;    // false below an error already reported: stops cascades
+    bool zero = false;    // the literal 0, which agrees with any dimension
+    bool numeric = false; // built from numbers alone
+    bool point = false;   // a reading on a scale (a temperature, a pressure), not a difference
+    // "(T - 20)": a reading less a number that is not a scale's zero. Beside other readings
+    // it is a reading; as a factor it is the difference from a reference reading.
+    bool reading_or_difference = false;
     // "p_abs - p_atm": the difference of two absolute pressures, which a gauge reads when the
     // one subtracted is the atmosphere.
     bool absolute_pressure_difference = false;
     bool inferred = false; // unknown because a `?` coefficient stands in it, not an error
-    // The numbers along its multiplicative path, on the checker's literal stack.
-    std::uint32_t literal_begin = 0;
-    std::uint32_t literal_count = 0;
 };
 
 typed unknown_type(bool inferred = false) {
@@ -331,8 +332,7 @@ class checker {
             if (s.relation_before != syntax::relation_kind::none &&
                 s.relation_before != syntax::relation_kind::equal)
                 equation = false;
-            typed t = eval(s.root);
-            operands_.push_back({s.root, std::move(t)});
+            operands_.push_back({s.root, eval(s.root)});
         }
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
@@ -668,10 +668,18 @@ class checker {
                                    {}});
             return unknown_type();
         }
+        return declared_type(*entry, name);
+    }
+
+    // One return object, so that it is built in place: this runs for every symbol.
+    static typed declared_type(symbol_entry& entry_ref, std::string_view name) {
+        symbol_entry* const entry = &entry_ref;
         entry->used = true;
-        if (!entry->dim)
-            return unknown_type();
         typed t;
+        if (!entry->dim) {
+            t.known = false;
+            return t;
+        }
         t.dim = entry->compact_dim ? *entry->compact_dim : compact_dimension(*entry->dim);
         t.scale = entry->si_factor;
         t.exact_scale = entry->si_exact;
@@ -1667,7 +1675,8 @@ class checker {
                               left_off ? (t.known ? &t.dim : nullptr)
                                        : (result.known ? &result.dim : nullptr));
                 spine_.resize(spine_base);
-                return unknown_type();
+                result = unknown_type();
+                return result; // the one return object, built in place
             }
             if (t.offset != nullptr) {
                 result.offset = t.offset;
@@ -1700,7 +1709,7 @@ class checker {
         }
         spine_.resize(spine_base);
         if (!result.known)
-            return unknown_type(result.inferred);
+            result = unknown_type(result.inferred);
         return result;
     }
 

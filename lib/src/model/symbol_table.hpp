@@ -47,7 +47,7 @@ class symbol_table {
             const std::uint32_t slot = slots_[i];
             if (slot == empty_slot)
                 return nullptr;
-            if (names_[slot] == name)
+            if (same_name(names_[slot], name))
                 return &entries_[slot];
         }
     }
@@ -95,6 +95,16 @@ class symbol_table {
     }
 
     [[nodiscard]] std::size_t mask() const { return slots_.size() - 1; }
+
+    // Names are a few bytes: compared in line, without a call to memcmp.
+    static bool same_name(std::string_view a, std::string_view b) {
+        if (a.size() != b.size())
+            return false;
+        for (std::size_t i = 0; i < a.size(); ++i)
+            if (a[i] != b[i])
+                return false;
+        return true;
+    }
 
     static std::size_t hash(std::string_view s) {
         std::uint64_t h = 1469598103934665603ULL; // FNV-1a: short names, few collisions

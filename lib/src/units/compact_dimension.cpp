@@ -88,6 +88,29 @@ compact_dimension compact_dimension::pow(rational p) const {
         if (fits)
             return r;
     }
+    // A fractional exponent or power (sqrt, ^(2/3)): (n/d)·(pn/pd) over the common
+    // denominator d·pd, reduced. Small operands cannot overflow 64 bits here, so this is the
+    // exact result that `dimension` would give; only what does not fit goes there.
+    if (den_ != 0 && p.num() >= INT16_MIN && p.num() <= INT16_MAX && p.den() <= INT16_MAX) {
+        std::array<std::int64_t, base_dimension_count> n{};
+        std::int64_t common = static_cast<std::int64_t>(den_) * p.den();
+        std::int64_t g = common;
+        for (std::size_t i = 0; i < base_dimension_count; ++i) {
+            n[i] = static_cast<std::int64_t>(num_[i]) * p.num();
+            g = std::gcd(g, n[i]);
+        }
+        common /= g;
+        compact_dimension r;
+        bool fits = common <= INT16_MAX;
+        r.den_ = static_cast<std::int16_t>(common);
+        for (std::size_t i = 0; i < base_dimension_count && fits; ++i) {
+            const std::int64_t v = n[i] / g;
+            fits = v >= INT16_MIN && v <= INT16_MAX;
+            r.num_[i] = static_cast<std::int16_t>(v);
+        }
+        if (fits)
+            return r;
+    }
     return compact_dimension(expand().pow(p));
 }
 
