@@ -1692,7 +1692,9 @@ class checker {
             }
             result.inferred = result.inferred || t.inferred;
             result.scale = divided ? result.scale / t.scale : result.scale * t.scale;
-            result.exact_scale = exact_product(result.exact_scale, t.exact_scale, divided);
+            // Most factors are in SI units: times or over exactly 1 leaves the scale as it is.
+            if (!(t.exact_scale && *t.exact_scale == rational(1)))
+                result.exact_scale = exact_product(result.exact_scale, t.exact_scale, divided);
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
             if (result.known)
