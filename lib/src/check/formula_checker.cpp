@@ -727,7 +727,8 @@ class checker {
             const std::uint32_t node = k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
-            typed t = eval(node);
+            operand term{node, eval(node), subtracted};
+            const typed& t = term.type;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
             result.zero = result.zero && t.zero;
@@ -741,7 +742,7 @@ class checker {
             } else {
                 result.value.reset();
             }
-            operands_.push_back({node, std::move(t), subtracted});
+            operands_.push_back(term);
         }
         const bool last_subtracted = file_.nodes[index].kind == expr_kind::subtract;
         spine_.resize(spine_base);
@@ -1812,15 +1813,18 @@ class checker {
         const bool wants_number = f != nullptr && (f->rule == function_rule::dimensionless ||
                                                    f->rule == function_rule::log_base);
         const std::size_t literal_start = literals_.size();
-        std::vector<operand> args;
+        // The arguments go on the scratch stack: no allocation per call.
+        const std::size_t args_base = operands_.size();
         for (std::uint32_t i = 0; i < n.rhs; ++i) {
             const std::uint32_t node = file_.call_args[n.lhs + i];
             const std::uint32_t saved = prefer_dimensionless_;
             if (wants_number)
                 prefer_dimensionless_ = node;
-            args.push_back({node, eval(node)});
+            operands_.push_back({node, eval(node)});
             prefer_dimensionless_ = saved;
         }
+        const scratch_region region(operands_, args_base);
+        const std::span<const operand> args = region.view();
         // Only a root or abs passes its argument's numbers on, as factors of the result.
         const auto keep_first_argument_numbers = [&](double power) {
             if (args.empty()) {
@@ -2037,7 +2041,7 @@ class checker {
         return result;
     }
 
-    typed eval_sheet_call(const builtin_function& f, const std::vector<operand>& args) {
+    typed eval_sheet_call(const builtin_function& f, std::span<const operand> args) {
         switch (f.rule) {
         case function_rule::choice:
             return agreeing(f, args, 1, "branches");
@@ -2139,7 +2143,7 @@ class checker {
         return false;
     }
 
-    typed derivative(const std::vector<operand>& args) {
+    typed derivative(std::span<const operand> args) {
         rational order = 1;
         if (args.size() == 3) {
             const typed& n = args[2].type;
@@ -2163,7 +2167,7 @@ class checker {
         return result;
     }
 
-    typed integral(const std::vector<operand>& args) {
+    typed integral(std::span<const operand> args) {
         // The limits answer to the variable of integration, however many of them there are.
         if (args.size() == 4 && args[1].type.known) {
             const operand* odd = nullptr;
