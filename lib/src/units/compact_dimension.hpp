@@ -9,6 +9,7 @@
 
 #include <array>
 #include <cstdint>
+#include <cstring>
 #include <optional>
 
 namespace plumb {
@@ -26,13 +27,11 @@ class compact_dimension {
     static void reset_arena();
 
     [[nodiscard]] dimension expand() const;
-    [[nodiscard]] bool is_dimensionless() const {
-        return den_ == 1 && num_ == std::array<std::int16_t, base_dimension_count>{};
-    }
+    [[nodiscard]] bool is_dimensionless() const { return same_bits(*this, compact_dimension{}); }
 
     friend bool operator==(const compact_dimension& a, const compact_dimension& b) {
         if (a.den_ != 0 && b.den_ != 0) // both fitted: the form is canonical
-            return a.den_ == b.den_ && a.num_ == b.num_;
+            return same_bits(a, b);
         // A dimension that fits is never in the arena, so only two arena ones can be equal.
         return a.den_ == 0 && b.den_ == 0 && a.expand() == b.expand();
     }
@@ -57,6 +56,15 @@ class compact_dimension {
     [[nodiscard]] std::size_t hash() const;
 
   private:
+    // Two 8-byte compares: these run for every term that meets another.
+    static bool same_bits(const compact_dimension& a, const compact_dimension& b) {
+        std::array<std::uint64_t, 2> x{};
+        std::array<std::uint64_t, 2> y{};
+        std::memcpy(x.data(), &a, sizeof a);
+        std::memcpy(y.data(), &b, sizeof b);
+        return x[0] == y[0] && x[1] == y[1];
+    }
+
     static bool whole_sum(const compact_dimension& a, const compact_dimension& b, int sign,
                           compact_dimension& r) {
         bool fits = true;
@@ -71,5 +79,6 @@ class compact_dimension {
     std::array<std::int16_t, base_dimension_count> num_{};
     std::int16_t den_ = 1; // 0: kept in the arena, at the index held in num_[0] and num_[1]
 };
+static_assert(sizeof(compact_dimension) == 16, "compared as two 8-byte words");
 
 } // namespace plumb
