@@ -8,6 +8,7 @@
 #include "check/number_reading.hpp"
 #include "check/scale_match.hpp"
 #include "check/trade_constants.hpp"
+#include "check/typed_term.hpp"
 #include "plumb/rules.hpp"
 #include "units/compact_dimension.hpp"
 #include "units/exact_factor.hpp"
@@ -26,43 +27,8 @@ namespace {
 
 using syntax::expr_kind;
 
-// A subexpression's type: its dimension, and what the rules need to know about its value.
-// Every node gets one, and sums keep one per term, so the flags are packed at the end.
-struct typed {
-    compact_dimension dim;
-    std::optional<rational> value; // exact value, when numeric and exactly representable
-    // SI value per written value: the product of the declared units' factors. Terms that agree
-    // in dimension but not in scale give numbers off by that factor.
-    double scale = 1.0;
-    // The same exactly, where every unit along the way is defined exactly and the powers are
-    // whole; empty otherwise, and the double decides.
-    std::optional<rational> exact_scale = rational(1);
-    // Set while the value is on an offset scale (°C, °F, gauge pressure): it may be compared
-    // and subtracted, but not multiplied, divided or raised to a power. Names the scale.
-    const unit_definition* offset = nullptr;
-    double origin = 0.0;           // SI value of the scale's zero: 273.15 K for °C, 0 absolute
-    double origin_tolerance = 0.0; // from rounded numbers that moved it (14.7 psi)
-    // "p_abs - p_g": an absolute reading less a reading on an offset scale is that scale's
-    // zero, the atmosphere, as a reading on the absolute scale. Names the offset scale.
-    const unit_definition* zero_of = nullptr;
-    // The numbers along its multiplicative path, on the checker's literal stack.
-    std::uint32_t literal_begin = 0;
-    std::uint32_t literal_count = 0;
-    bool known = true;    // false below an error already reported: stops cascades
-    bool zero = false;    // the literal 0, which agrees with any dimension
-    bool numeric = false; // built from numbers alone
-    bool point = false;   // a reading on a scale (a temperature, a pressure), not a difference
-    // "(T - 20)": a reading less a number that is not a scale's zero. Beside other readings
-    // it is a reading; as a factor it is the difference from a reference reading.
-    bool reading_or_difference = false;
-    // "p_abs - p_atm": the difference of two absolute pressures, which a gauge reads when the
-    // one subtracted is the atmosphere.
-    bool absolute_pressure_difference = false;
-    bool inferred = false; // unknown because a `?` coefficient stands in it, not an error
-};
-
-typed unknown_type(bool inferred = false) {
-    typed t;
+typed_term unknown_type(bool inferred = false) {
+    typed_term t;
     t.known = false;
     t.inferred = inferred;
     return t;
@@ -124,7 +90,7 @@ std::string describe(const compact_dimension& d) {
 // The operands of one meeting point (terms of a sum, arguments, sides of a formula).
 struct operand {
     std::uint32_t node;
-    typed type;
+    typed_term type;
     bool subtracted = false; // a term after '-'
 };
 
@@ -261,21 +227,21 @@ class checker {
 
     // A node's type, with the numbers along its multiplicative path left on the literal stack
     // from where it started.
-    typed eval(std::uint32_t index) {
+    typed_term eval(std::uint32_t index) {
         const auto start = static_cast<std::uint32_t>(literals_.size());
-        typed t = eval_node(index);
+        typed_term t = eval_node(index);
         t.literal_begin = start;
         t.literal_count = static_cast<std::uint32_t>(literals_.size()) - start;
         return t;
     }
 
-    typed eval_node(std::uint32_t index) {
+    typed_term eval_node(std::uint32_t index) {
         const syntax::expr_node& n = file_.nodes[index];
         switch (n.kind) {
         case expr_kind::number:
             return eval_number(n, index);
         case expr_kind::pi: {
-            typed t;
+            typed_term t;
             t.numeric = true;
             scale_literal l;
             l.value = 3.14159265358979323846;
@@ -287,7 +253,7 @@ class checker {
         case expr_kind::symbol:
             return eval_symbol(n);
         case expr_kind::negate: {
-            typed t = eval(n.lhs);
+            typed_term t = eval(n.lhs);
             if (t.value)
                 t.value = -*t.value;
             return t;
@@ -299,8 +265,8 @@ class checker {
         case expr_kind::divide:
             return eval_product(index);
         case expr_kind::power: {
-            const typed base = eval(n.lhs);
-            const typed exponent = eval(n.rhs);
+            const typed_term base = eval(n.lhs);
+            const typed_term exponent = eval(n.rhs);
             return apply_power(base, exponent, n.lhs, n.rhs);
         }
         case expr_kind::call:
@@ -404,7 +370,7 @@ class checker {
     // written beside its cell.
     std::optional<value_type> check_value(const syntax::formula& f) {
         current_ = &f;
-        const typed t = eval(file_.sides[f.first_side].root);
+        const typed_term t = eval(file_.sides[f.first_side].root);
         if (!t.known)
             return std::nullopt;
         return value_type{t.dim.expand(), t.scale, t.offset, t.zero, t.exact_scale};
@@ -469,7 +435,7 @@ class checker {
         };
         double reference_scale = std::numeric_limits<double>::quiet_NaN();
         for (std::size_t i = 0; i < count; ++i) {
-            const typed& t = operands_[base + i].type;
+            const typed_term& t = operands_[base + i].type;
             if (!is_odd(i) && t.known && !t.zero && !t.numeric && t.dim == *a.reference &&
                 t.literal_count == 0 && std::isfinite(t.scale)) {
                 reference_scale = t.scale;
@@ -486,7 +452,7 @@ class checker {
         std::size_t found_count = 0;
         std::array<std::string_view, 8> texts{};
         for (const std::size_t i : a.odd) {
-            const typed& t = operands_[base + i].type;
+            const typed_term& t = operands_[base + i].type;
             if (found_count == readings.size() || !t.known || t.numeric || t.offset != nullptr ||
                 t.literal_count == 0 || t.literal_count > texts.size())
                 return false;
@@ -515,7 +481,7 @@ class checker {
             readings[found_count++] = {i, *reading};
         }
         for (std::size_t r = 0; r < found_count; ++r) {
-            typed& t = operands_[base + readings[r].operand].type;
+            typed_term& t = operands_[base + readings[r].operand].type;
             scale_literal& number = literals_[t.literal_begin + readings[r].reading.literal];
             t.dim = *a.reference;
             t.scale = readings[r].reading.term_scale;
@@ -601,11 +567,11 @@ class checker {
                                restates});
     }
 
-    typed eval_quantity(const syntax::expr_node& n) const {
+    typed_term eval_quantity(const syntax::expr_node& n) const {
         const syntax::quantity_literal& q = file_.quantities[n.lhs];
         if (!q.dim)
             return unknown_type();
-        typed t;
+        typed_term t;
         t.dim = compact_dimension(*q.dim);
         // A constant stands for its SI value; a number in braces is in the unit written.
         t.scale = q.constant ? 1.0 : q.si_factor;
@@ -618,8 +584,8 @@ class checker {
         return t;
     }
 
-    typed eval_number(const syntax::expr_node& n, std::uint32_t index) {
-        typed t;
+    typed_term eval_number(const syntax::expr_node& n, std::uint32_t index) {
+        typed_term t;
         t.numeric = true;
         const number_reading& reading = read_number(text(n.range));
         t.value = reading.value;
@@ -631,7 +597,7 @@ class checker {
         return t;
     }
 
-    typed eval_symbol(const syntax::expr_node& n) {
+    typed_term eval_symbol(const syntax::expr_node& n) {
         const std::string_view name = text(n.range);
         symbol_entry* entry = symbols_.find(name);
         if (entry == nullptr) {
@@ -668,14 +634,19 @@ class checker {
                                    {}});
             return unknown_type();
         }
-        return declared_type(*entry, name);
+        if (entry->checked_type) {
+            entry->used = true;
+            return *entry->checked_type;
+        }
+        entry->checked_type = declared_type(*entry, name);
+        return *entry->checked_type;
     }
 
-    // One return object, so that it is built in place: this runs for every symbol.
-    static typed declared_type(symbol_entry& entry_ref, std::string_view name) {
+    // Worked out on a symbol's first use and kept in its entry.
+    static typed_term declared_type(symbol_entry& entry_ref, std::string_view name) {
         symbol_entry* const entry = &entry_ref;
         entry->used = true;
-        typed t;
+        typed_term t;
         if (!entry->dim) {
             t.known = false;
             return t;
@@ -699,7 +670,7 @@ class checker {
         return t;
     }
 
-    typed eval_sum(std::uint32_t index) {
+    typed_term eval_sum(std::uint32_t index) {
         const bool prefer_dimensionless = index == prefer_dimensionless_;
         // Walk the left spine iteratively: a long sum must not recurse once per term.
         const std::size_t spine_base = spine_.size();
@@ -716,7 +687,7 @@ class checker {
         // sum needs, and briefly three times while it moves.
         operands_.reserve(base + term_count);
         const std::size_t literal_base = literals_.size();
-        typed result;
+        typed_term result;
         result.numeric = true;
         result.zero = true;
         result.value = rational(0);
@@ -728,7 +699,7 @@ class checker {
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
             operand term{node, eval(node), subtracted};
-            const typed& t = term.type;
+            const typed_term& t = term.type;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
             result.zero = result.zero && t.zero;
@@ -747,7 +718,7 @@ class checker {
         const bool last_subtracted = file_.nodes[index].kind == expr_kind::subtract;
         spine_.resize(spine_base);
 
-        const typed* offset_term = adopt_numbers_on_offset_scale(base);
+        const typed_term* offset_term = adopt_numbers_on_offset_scale(base);
         const scratch_region region(operands_, base);
         const std::span<const operand> terms = region.view();
         agreement a = find_agreement(terms, prefer_dimensionless);
@@ -806,8 +777,8 @@ class checker {
 
     // In a sum with a value on an offset scale, a bare number is a value in that unit
     // ("T_F = 1.8*T_C + 32"). Returns the first such value, or null.
-    const typed* adopt_numbers_on_offset_scale(std::size_t base) {
-        const typed* offset_term = nullptr;
+    const typed_term* adopt_numbers_on_offset_scale(std::size_t base) {
+        const typed_term* offset_term = nullptr;
         for (std::size_t i = base; i < operands_.size() && offset_term == nullptr; ++i)
             if (operands_[i].type.known && operands_[i].type.offset != nullptr)
                 offset_term = &operands_[i].type;
@@ -819,7 +790,7 @@ class checker {
         if (offset_term == nullptr)
             return nullptr;
         for (std::size_t i = base; i < operands_.size(); ++i) {
-            typed& t = operands_[i].type;
+            typed_term& t = operands_[i].type;
             if (t.numeric && t.value && !t.zero && t.dim.is_dimensionless()) {
                 t.dim = offset_term->dim;
                 t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
@@ -900,8 +871,8 @@ class checker {
     // The scale and zero of a sum with a value on an offset scale. Values on one scale subtract
     // to an ordinary difference; a shift by the scale's zero converts it; an absolute pressure
     // added to a gauge one (+ p_atm) gives an absolute pressure.
-    typed finish_offset_sum(std::span<const operand> terms, typed result, std::size_t literal_base,
-                            std::uint32_t index) {
+    typed_term finish_offset_sum(std::span<const operand> terms, typed_term result,
+                                 std::size_t literal_base, std::uint32_t index) {
         // The terms with units (not the numbers that shift the zero).
         std::size_t unit_terms = 0;
         std::size_t only = 0;
@@ -1184,7 +1155,7 @@ class checker {
     }
 
     // A side or term's units and numbers, for reconcile().
-    scaled_operand scaled(const typed& t, bool as_number) const {
+    scaled_operand scaled(const typed_term& t, bool as_number) const {
         static const rational one(1);
         if (as_number)
             return {1.0, &one, {}};
@@ -1636,7 +1607,7 @@ class checker {
         return found.empty() ? std::string("T_ref") : found;
     }
 
-    typed eval_product(std::uint32_t index) {
+    typed_term eval_product(std::uint32_t index) {
         const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
         while (file_.nodes[n].kind == expr_kind::multiply ||
@@ -1644,7 +1615,7 @@ class checker {
             spine_.push_back(n);
             n = file_.nodes[n].lhs;
         }
-        typed result = eval(n);
+        typed_term result = eval(n);
         result.zero = false;
         std::uint32_t offset_node = n;
         if (result.reading_or_difference)
@@ -1653,7 +1624,7 @@ class checker {
         for (std::size_t k = spine_.size(); k > spine_base; --k) {
             const syntax::expr_node& op = file_.nodes[spine_[k - 1]];
             const bool divided = op.kind == expr_kind::divide;
-            typed t = eval(op.rhs);
+            typed_term t = eval(op.rhs);
             if (t.reading_or_difference)
                 t.offset = nullptr;
             if (divided)
@@ -1662,7 +1633,7 @@ class checker {
                         -literals_[t.literal_begin + i].exponent;
             // An offset value may be scaled by a pure number (the mean (T_1 + T_2)/2), not
             // multiplied by a quantity, nor by a `?` coefficient (which has a dimension).
-            const auto scales_a_reading = [](const typed& reading, const typed& other) {
+            const auto scales_a_reading = [](const typed_term& reading, const typed_term& other) {
                 return reading.known && reading.offset != nullptr &&
                        (other.known ? !other.numeric : other.inferred);
             };
@@ -1716,8 +1687,8 @@ class checker {
         return result;
     }
 
-    typed apply_power(const typed& base, const typed& exponent, std::uint32_t base_node,
-                      std::uint32_t exponent_node) {
+    typed_term apply_power(const typed_term& base, const typed_term& exponent,
+                           std::uint32_t base_node, std::uint32_t exponent_node) {
         if (exponent.known && !exponent.dim.is_dimensionless()) {
             diagnostic& d = report(rules::dimensioned_exponent,
                                    fmt::format("the exponent {} has a dimension; an exponent must "
@@ -1743,7 +1714,7 @@ class checker {
             report_offset(base_node, *base.offset, "raised to a power");
             return unknown_type();
         }
-        typed result;
+        typed_term result;
         result.numeric = base.numeric && exponent.numeric;
         result.exact_scale.reset();
         if (exponent.value) {
@@ -1805,7 +1776,7 @@ class checker {
                 n.range.begin + static_cast<std::uint32_t>(end)};
     }
 
-    typed eval_call(const syntax::expr_node& n) {
+    typed_term eval_call(const syntax::expr_node& n) {
         const span name_range = call_name_range(n);
         const std::string_view name = text(name_range);
         const bool sheet = file_.functions == syntax::function_names::spreadsheet;
@@ -1881,7 +1852,7 @@ class checker {
                      {}});
             return unknown_type();
         }
-        typed result;
+        typed_term result;
         result.numeric =
             std::all_of(args.begin(), args.end(), [](const operand& a) { return a.type.numeric; });
         switch (f->rule) {
@@ -1963,11 +1934,11 @@ class checker {
 
     // ---- Spreadsheet operands and functions ----------------------------------------------
 
-    typed eval_reference(const syntax::expr_node& n) const {
+    typed_term eval_reference(const syntax::expr_node& n) const {
         const syntax::reference_value& r = file_.references[n.lhs];
         if (!r.dim)
             return unknown_type();
-        typed t;
+        typed_term t;
         t.dim = compact_dimension(*r.dim);
         t.scale = r.scale;
         t.exact_scale = r.exact_scale;
@@ -1985,7 +1956,7 @@ class checker {
     }
 
     // A comparison inside a formula (IF's condition): its sides agree as a limit's do.
-    typed eval_compare(const syntax::expr_node& n) {
+    typed_term eval_compare(const syntax::expr_node& n) {
         const std::size_t base = operands_.size();
         operands_.push_back({n.lhs, eval(n.lhs)});
         operands_.push_back({n.rhs, eval(n.rhs)});
@@ -2008,12 +1979,12 @@ class checker {
         }
         double unit = 1.0;
         check_scales(sides, "sides of this comparison", unit);
-        return typed{}; // true or false: a dimensionless number
+        return typed_term{}; // true or false: a dimensionless number
     }
 
     // Arguments from `first` on must agree; their common type, or unknown after a finding.
-    typed agreeing(const builtin_function& f, std::span<const operand> args, std::size_t first,
-                   std::string_view others) {
+    typed_term agreeing(const builtin_function& f, std::span<const operand> args, std::size_t first,
+                        std::string_view others) {
         const std::span<const operand> tail = args.subspan(first);
         const agreement a = find_agreement(tail);
         if (!a.odd.empty()) {
@@ -2027,7 +1998,7 @@ class checker {
         const bool scales_agree = check_scales(tail, fmt::format("{} of {}", others, f.name), unit);
         if (!std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.known; }))
             return unknown_type();
-        typed result;
+        typed_term result;
         result.dim = a.reference.value_or(compact_dimension{});
         result.zero =
             std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.zero; });
@@ -2041,12 +2012,12 @@ class checker {
         return result;
     }
 
-    typed eval_sheet_call(const builtin_function& f, std::span<const operand> args) {
+    typed_term eval_sheet_call(const builtin_function& f, std::span<const operand> args) {
         switch (f.rule) {
         case function_rule::choice:
             return agreeing(f, args, 1, "branches");
         case function_rule::product: {
-            typed result;
+            typed_term result;
             for (const auto& a : args) {
                 if (!a.type.known)
                     return unknown_type();
@@ -2064,7 +2035,8 @@ class checker {
                 require_dimensionless(f, args[i]);
             return args[0].type.known ? args[0].type : unknown_type();
         case function_rule::lookup: {
-            typed key = agreeing(f, std::span<const operand>(args).first(2), 0, "key and column");
+            typed_term key =
+                agreeing(f, std::span<const operand>(args).first(2), 0, "key and column");
             (void)key;
             return args[2].type.known ? args[2].type : unknown_type();
         }
@@ -2074,17 +2046,17 @@ class checker {
             return args[0].type.known ? args[0].type : unknown_type();
         case function_rule::position:
             (void)agreeing(f, std::span<const operand>(args).first(2), 0, "key and range");
-            return typed{};
+            return typed_term{};
         case function_rule::count:
         case function_rule::logical:
-            return typed{};
+            return typed_term{};
         case function_rule::to_radians:
         case function_rule::to_degrees: {
             if (!args[0].type.known)
                 return unknown_type();
             if (!require_dimensionless(f, args[0]))
                 return unknown_type();
-            typed result;
+            typed_term result;
             // The value in degrees counts π/180 of the radian.
             result.scale = f.rule == function_rule::to_degrees ? std::numbers::pi / 180.0 : 1.0;
             if (f.rule == function_rule::to_degrees)
@@ -2143,10 +2115,10 @@ class checker {
         return false;
     }
 
-    typed derivative(std::span<const operand> args) {
+    typed_term derivative(std::span<const operand> args) {
         rational order = 1;
         if (args.size() == 3) {
-            const typed& n = args[2].type;
+            const typed_term& n = args[2].type;
             if (!n.value || !n.value->is_integer() || n.value->num() < 1) {
                 report(rules::variable_exponent,
                        fmt::format("the order of deriv must be a whole number such as 2, but {} is "
@@ -2159,7 +2131,7 @@ class checker {
         }
         if (!args[0].type.known || !args[1].type.known)
             return unknown_type();
-        typed result;
+        typed_term result;
         result.dim = args[0].type.dim / args[1].type.dim.pow(order);
         result.scale = args[0].type.scale / std::pow(args[1].type.scale, order.to_double());
         result.exact_scale = exact_product(
@@ -2167,7 +2139,7 @@ class checker {
         return result;
     }
 
-    typed integral(std::span<const operand> args) {
+    typed_term integral(std::span<const operand> args) {
         // The limits answer to the variable of integration, however many of them there are.
         if (args.size() == 4 && args[1].type.known) {
             const operand* odd = nullptr;
@@ -2195,7 +2167,7 @@ class checker {
         }
         if (!args[0].type.known || !args[1].type.known)
             return unknown_type();
-        typed result;
+        typed_term result;
         result.dim = args[0].type.dim * args[1].type.dim;
         result.scale = args[0].type.scale * args[1].type.scale;
         result.exact_scale =

@@ -1,6 +1,7 @@
 // The symbols one file can see: its dictionaries', its `use`d files' and its own.
 #pragma once
 
+#include "check/typed_term.hpp"
 #include "plumb/diagnostic.hpp"
 #include "plumb/dimension.hpp"
 #include "units/compact_dimension.hpp"
@@ -33,6 +34,9 @@ struct symbol_entry {
     // `dim` in the checker's form, worked out once on insert rather than at every use; empty
     // when `dim` is or when it does not fit that form.
     std::optional<compact_dimension> compact_dim;
+    // The checker's type of the symbol, built at its first use rather than at every use. It
+    // depends only on the fields above as declared (and `reading`, fixed at first use).
+    std::optional<typed_term> checked_type;
 };
 
 // Names to entries. Look-up is the hottest operation of a check (every symbol of every
