@@ -235,40 +235,28 @@ class checker {
         return t;
     }
 
+    // A plain dispatcher: every case is a call whose result is the return value, so this
+    // frame stays small (it is entered once per node). The cases kept out of line are the
+    // ones whose locals would otherwise make every node pay for them.
     typed_term eval_node(std::uint32_t index) {
         const syntax::expr_node& n = file_.nodes[index];
         switch (n.kind) {
         case expr_kind::number:
             return eval_number(n, index);
-        case expr_kind::pi: {
-            typed_term t;
-            t.numeric = true;
-            scale_literal l;
-            l.value = 3.14159265358979323846;
-            l.tolerance = 1e-12;
-            l.node = index;
-            literals_.push_back(l);
-            return t;
-        }
+        case expr_kind::pi:
+            return eval_pi(index);
         case expr_kind::symbol:
             return eval_symbol(n);
-        case expr_kind::negate: {
-            typed_term t = eval(n.lhs);
-            if (t.value)
-                t.value = -*t.value;
-            return t;
-        }
+        case expr_kind::negate:
+            return eval_negate(n);
         case expr_kind::add:
         case expr_kind::subtract:
             return eval_sum(index);
         case expr_kind::multiply:
         case expr_kind::divide:
             return eval_product(index);
-        case expr_kind::power: {
-            const typed_term base = eval(n.lhs);
-            const typed_term exponent = eval(n.rhs);
-            return apply_power(base, exponent, n.lhs, n.rhs);
-        }
+        case expr_kind::power:
+            return eval_power(n);
         case expr_kind::call:
             return eval_call(n);
         case expr_kind::group:
@@ -287,6 +275,30 @@ class checker {
             return eval_compare(n);
         }
         return unknown_type();
+    }
+
+    [[gnu::noinline]] typed_term eval_pi(std::uint32_t index) {
+        typed_term t;
+        t.numeric = true;
+        scale_literal l;
+        l.value = 3.14159265358979323846;
+        l.tolerance = 1e-12;
+        l.node = index;
+        literals_.push_back(l);
+        return t;
+    }
+
+    [[gnu::noinline]] typed_term eval_negate(const syntax::expr_node& n) {
+        typed_term t = eval(n.lhs);
+        if (t.value)
+            t.value = -*t.value;
+        return t;
+    }
+
+    [[gnu::noinline]] typed_term eval_power(const syntax::expr_node& n) {
+        const typed_term base = eval(n.lhs);
+        const typed_term exponent = eval(n.rhs);
+        return apply_power(base, exponent, n.lhs, n.rhs);
     }
 
     void check_formula(const syntax::formula& f) {
@@ -567,7 +579,7 @@ class checker {
                                restates});
     }
 
-    typed_term eval_quantity(const syntax::expr_node& n) const {
+    [[gnu::noinline]] typed_term eval_quantity(const syntax::expr_node& n) const {
         const syntax::quantity_literal& q = file_.quantities[n.lhs];
         if (!q.dim)
             return unknown_type();
@@ -584,7 +596,7 @@ class checker {
         return t;
     }
 
-    typed_term eval_number(const syntax::expr_node& n, std::uint32_t index) {
+    [[gnu::noinline]] typed_term eval_number(const syntax::expr_node& n, std::uint32_t index) {
         typed_term t;
         t.numeric = true;
         const number_reading& reading = read_number(text(n.range));
@@ -1934,7 +1946,7 @@ class checker {
 
     // ---- Spreadsheet operands and functions ----------------------------------------------
 
-    typed_term eval_reference(const syntax::expr_node& n) const {
+    [[gnu::noinline]] typed_term eval_reference(const syntax::expr_node& n) const {
         const syntax::reference_value& r = file_.references[n.lhs];
         if (!r.dim)
             return unknown_type();
@@ -1956,7 +1968,7 @@ class checker {
     }
 
     // A comparison inside a formula (IF's condition): its sides agree as a limit's do.
-    typed_term eval_compare(const syntax::expr_node& n) {
+    [[gnu::noinline]] typed_term eval_compare(const syntax::expr_node& n) {
         const std::size_t base = operands_.size();
         operands_.push_back({n.lhs, eval(n.lhs)});
         operands_.push_back({n.rhs, eval(n.rhs)});
