@@ -63,6 +63,15 @@ void compact_dimension::reset_arena() {
         kept.shrink_to_fit();
 }
 
+bool compact_dimension::equal_in_arena(const compact_dimension& a, const compact_dimension& b) {
+    return a.expand() == b.expand();
+}
+
+compact_dimension compact_dimension::product_in_full(const compact_dimension& a,
+                                                     const compact_dimension& b, bool divide) {
+    return compact_dimension(divide ? a.expand() / b.expand() : a.expand() * b.expand());
+}
+
 dimension compact_dimension::expand() const {
     if (den_ == 0) {
         const std::uint32_t index =

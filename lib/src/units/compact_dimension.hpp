@@ -33,7 +33,7 @@ class compact_dimension {
         if (a.den_ != 0 && b.den_ != 0) // both fitted: the form is canonical
             return same_bits(a, b);
         // A dimension that fits is never in the arena, so only two arena ones can be equal.
-        return a.den_ == 0 && b.den_ == 0 && a.expand() == b.expand();
+        return a.den_ == 0 && b.den_ == 0 && equal_in_arena(a, b);
     }
 
     // Whole exponents that stay in range are added here; anything else goes through
@@ -42,13 +42,13 @@ class compact_dimension {
         compact_dimension r;
         if (a.den_ == 1 && b.den_ == 1 && whole_sum(a, b, 1, r))
             return r;
-        return compact_dimension(a.expand() * b.expand());
+        return product_in_full(a, b, false);
     }
     friend compact_dimension operator/(const compact_dimension& a, const compact_dimension& b) {
         compact_dimension r;
         if (a.den_ == 1 && b.den_ == 1 && whole_sum(a, b, -1, r))
             return r;
-        return compact_dimension(a.expand() / b.expand());
+        return product_in_full(a, b, true);
     }
     [[nodiscard]] compact_dimension pow(rational p) const;
 
@@ -56,6 +56,11 @@ class compact_dimension {
     [[nodiscard]] std::size_t hash() const;
 
   private:
+    // The rare cases, out of line so that the common ones above stay small enough to inline.
+    static bool equal_in_arena(const compact_dimension& a, const compact_dimension& b);
+    static compact_dimension product_in_full(const compact_dimension& a, const compact_dimension& b,
+                                             bool divide);
+
     // Two 8-byte compares: these run for every term that meets another.
     static bool same_bits(const compact_dimension& a, const compact_dimension& b) {
         std::array<std::uint64_t, 2> x{};
