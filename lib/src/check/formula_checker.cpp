@@ -650,13 +650,16 @@ class checker {
             entry->used = true;
             return *entry->checked_type;
         }
-        entry->checked_type = declared_type(*entry, name);
-        return *entry->checked_type;
+        typed_term t = declared_type(entry, name);
+        // A dimension past the 16-bit form is held in this check's arena only, so a type
+        // that refers to it must not outlive the check.
+        if (!entry->dim || entry->compact_dim)
+            entry->checked_type = t;
+        return t;
     }
 
     // Worked out on a symbol's first use and kept in its entry.
-    static typed_term declared_type(symbol_entry& entry_ref, std::string_view name) {
-        symbol_entry* const entry = &entry_ref;
+    static typed_term declared_type(symbol_entry* entry, std::string_view name) {
         entry->used = true;
         typed_term t;
         if (!entry->dim) {
