@@ -1633,6 +1633,7 @@ class checker {
         typed_term result = eval(n);
         result.zero = false;
         std::uint32_t offset_node = n;
+        std::size_t arena_place = compact_dimension::no_place;
         if (result.reading_or_difference)
             result.offset = nullptr;
         // Spine nodes were pushed outermost first; the innermost applies first.
@@ -1684,8 +1685,13 @@ class checker {
                 result.exact_scale = exact_product(result.exact_scale, t.exact_scale, divided);
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
-            if (result.known)
+            if (result.known) {
                 result.dim = divided ? result.dim / t.dim : result.dim * t.dim;
+                // a*a*a*... past the 16-bit form: one arena entry for the chain, not one per
+                // factor (t, the only other holder of entries made here, is done with).
+                if (result.dim.in_arena())
+                    result.dim = compact_dimension::settle_in_arena(result.dim, arena_place);
+            }
             if (result.value && t.value && !(divided && t.value->is_zero())) {
                 try {
                     result.value = divided ? *result.value / *t.value : *result.value * *t.value;

@@ -63,6 +63,25 @@ void compact_dimension::reset_arena() {
         kept.shrink_to_fit();
 }
 
+compact_dimension compact_dimension::settle_in_arena(const compact_dimension& d,
+                                                     std::size_t& place) {
+    const std::size_t index =
+        static_cast<std::uint16_t>(d.num_[0]) |
+        (static_cast<std::size_t>(static_cast<std::uint16_t>(d.num_[1])) << 16);
+    if (place == no_place || index == place) {
+        place = index;
+        return d;
+    }
+    std::vector<dimension>& kept = arena();
+    kept[place] = kept[index];
+    kept.resize(place + 1);
+    compact_dimension r;
+    r.den_ = 0;
+    r.num_[0] = static_cast<std::int16_t>(place & 0xFFFFU);
+    r.num_[1] = static_cast<std::int16_t>(place >> 16);
+    return r;
+}
+
 bool compact_dimension::equal_in_arena(const compact_dimension& a, const compact_dimension& b) {
     return a.expand() == b.expand();
 }

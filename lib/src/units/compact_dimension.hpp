@@ -52,6 +52,14 @@ class compact_dimension {
     }
     [[nodiscard]] compact_dimension pow(rational p) const;
 
+    [[nodiscard]] bool in_arena() const { return den_ == 0; }
+    // For a caller that builds one dimension step by step (a long product) and alone holds
+    // every arena entry made since its first: the first call records where `d` is kept, later
+    // ones move `d` there and drop the entries after it, so the chain keeps one entry rather
+    // than one per step.
+    static compact_dimension settle_in_arena(const compact_dimension& d, std::size_t& place);
+    static constexpr std::size_t no_place = static_cast<std::size_t>(-1);
+
     // A hash of the exponents, for counting dimensions; equal dimensions hash alike.
     [[nodiscard]] std::size_t hash() const;
 
