@@ -88,9 +88,11 @@ std::string describe(const compact_dimension& d) {
 }
 
 // The operands of one meeting point (terms of a sum, arguments, sides of a formula).
+// The type first: the node and the flag then fill what would be padding after it (a long sum
+// keeps one of these per term).
 struct operand {
-    std::uint32_t node;
     typed_term type;
+    std::uint32_t node;
     bool subtracted = false; // a term after '-'
 };
 
@@ -310,7 +312,7 @@ class checker {
             if (s.relation_before != syntax::relation_kind::none &&
                 s.relation_before != syntax::relation_kind::equal)
                 equation = false;
-            operands_.push_back({s.root, eval(s.root)});
+            operands_.push_back({eval(s.root), s.root});
         }
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
@@ -713,7 +715,7 @@ class checker {
             const std::uint32_t node = k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
-            operand term{node, eval(node), subtracted};
+            operand term{eval(node), node, subtracted};
             const typed_term& t = term.type;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
@@ -1716,7 +1718,7 @@ class checker {
                                                "be dimensionless",
                                                quote(exponent_node)),
                                    file_.nodes[exponent_node].range);
-            add_term(d, {exponent_node, exponent});
+            add_term(d, {exponent, exponent_node});
             d.notes.push_back(
                 {fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}, true});
             return unknown_type();
@@ -1756,7 +1758,7 @@ class checker {
                     "{} has a dimension, so its exponent must be a constant number, but {} {}",
                     quote(base_node), quote(exponent_node), why),
                 file_.nodes[exponent_node].range);
-            add_term(d, {base_node, base});
+            add_term(d, {base, base_node});
             d.notes.push_back(
                 {fmt::format("{} is {}", quote(base_node), describe(base.dim)), {}, true});
             d.notes.push_back({"the dimension of the power would depend on the exponent's value; "
@@ -1812,7 +1814,7 @@ class checker {
             const std::uint32_t saved = prefer_dimensionless_;
             if (wants_number)
                 prefer_dimensionless_ = node;
-            operands_.push_back({node, eval(node)});
+            operands_.push_back({eval(node), node});
             prefer_dimensionless_ = saved;
         }
         const scratch_region region(operands_, args_base);
@@ -1979,8 +1981,8 @@ class checker {
     // A comparison inside a formula (IF's condition): its sides agree as a limit's do.
     [[gnu::noinline]] typed_term eval_compare(const syntax::expr_node& n) {
         const std::size_t base = operands_.size();
-        operands_.push_back({n.lhs, eval(n.lhs)});
-        operands_.push_back({n.rhs, eval(n.rhs)});
+        operands_.push_back({eval(n.lhs), n.lhs});
+        operands_.push_back({eval(n.rhs), n.rhs});
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
         agreement a = find_agreement(sides);
