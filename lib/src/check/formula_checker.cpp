@@ -5,9 +5,12 @@
 #include "check/edit_distance.hpp"
 #include "check/functions.hpp"
 #include "check/gravity_number.hpp"
+#include "check/number_reading.hpp"
 #include "check/scale_match.hpp"
 #include "check/trade_constants.hpp"
+#include "check/typed_term.hpp"
 #include "plumb/rules.hpp"
+#include "units/compact_dimension.hpp"
 #include "units/exact_factor.hpp"
 
 #include <algorithm>
@@ -24,81 +27,47 @@ namespace {
 
 using syntax::expr_kind;
 
-// A subexpression's type: its dimension, and what the rules need to know about its value.
-struct typed {
-    dimension dim;
-    bool known = true;             // false below an error already reported: stops cascades
-    bool zero = false;             // the literal 0, which agrees with any dimension
-    bool numeric = false;          // built from numbers alone
-    std::optional<rational> value; // exact value, when numeric and exactly representable
-    // SI value per written value: the product of the declared units' factors. Terms that agree
-    // in dimension but not in scale give numbers off by that factor.
-    double scale = 1.0;
-    // The same exactly, where every unit along the way is defined exactly and the powers are
-    // whole; empty otherwise, and the double decides.
-    std::optional<rational> exact_scale = rational(1);
-    // Set while the value is on an offset scale (°C, °F, gauge pressure): it may be compared
-    // and subtracted, but not multiplied, divided or raised to a power. Names the scale.
-    const unit_definition* offset = nullptr;
-    double origin = 0.0;           // SI value of the scale's zero: 273.15 K for °C, 0 absolute
-    double origin_tolerance = 0.0; // from rounded numbers that moved it (14.7 psi)
-    bool point = false; // a reading on a scale (a temperature, a pressure), not a difference
-    // "(T - 20)": a reading less a number that is not a scale's zero. Beside other readings
-    // it is a reading; as a factor it is the difference from a reference reading.
-    bool reading_or_difference = false;
-    // "p_abs - p_g": an absolute reading less a reading on an offset scale is that scale's
-    // zero, the atmosphere, as a reading on the absolute scale. Names the offset scale.
-    const unit_definition* zero_of = nullptr;
-    // "p_abs - p_atm": the difference of two absolute pressures, which a gauge reads when the
-    // one subtracted is the atmosphere.
-    bool absolute_pressure_difference = false;
-    bool inferred = false; // unknown because a `?` coefficient stands in it, not an error
-    // The numbers along its multiplicative path, on the checker's literal stack.
-    std::uint32_t literal_begin = 0;
-    std::uint32_t literal_count = 0;
-};
-
-typed unknown_type(bool inferred = false) {
-    typed t;
+typed_term unknown_type(bool inferred = false) {
+    typed_term t;
     t.known = false;
     t.inferred = inferred;
     return t;
 }
 
-const dimension& temperature_dimension() {
-    static const dimension d = unit_table::standard().resolve("K")->dim();
+const compact_dimension& temperature_dimension() {
+    static const compact_dimension d(unit_table::standard().resolve("K")->dim());
     return d;
 }
-const dimension& pressure_dimension() {
-    static const dimension d = unit_table::standard().resolve("Pa")->dim();
+const compact_dimension& pressure_dimension() {
+    static const compact_dimension d(unit_table::standard().resolve("Pa")->dim());
     return d;
 }
-const dimension& acceleration_dimension() {
-    static const dimension d = dimension::base(base_dimension::length) /
-                               dimension::base(base_dimension::time) /
-                               dimension::base(base_dimension::time);
+const compact_dimension& acceleration_dimension() {
+    static const compact_dimension d(dimension::base(base_dimension::length) /
+                                     dimension::base(base_dimension::time) /
+                                     dimension::base(base_dimension::time));
     return d;
 }
-const dimension& force_dimension() {
-    static const dimension d = unit_table::standard().resolve("N")->dim();
+const compact_dimension& force_dimension() {
+    static const compact_dimension d(unit_table::standard().resolve("N")->dim());
     return d;
 }
-const dimension& length_dimension() {
-    static const dimension d = dimension::base(base_dimension::length);
+const compact_dimension& length_dimension() {
+    static const compact_dimension d(dimension::base(base_dimension::length));
     return d;
 }
 
 // The table's offset and gauge units with their dimensions, for naming a scale by its zero.
 struct offset_row {
     const unit_definition* unit;
-    dimension dim;
+    compact_dimension dim;
 };
 const std::vector<offset_row>& offset_rows() {
     static const std::vector<offset_row> rows = [] {
         std::vector<offset_row> out;
         for (const auto& u : unit_table::standard().units())
             if (u.scale != unit_scale::absolute)
-                out.push_back({&u, u.dim()});
+                out.push_back({&u, compact_dimension(u.dim())});
         return out;
     }();
     return rows;
@@ -128,27 +97,26 @@ std::string describe(const dimension& d) {
         return d.is_dimensionless() ? std::string("[1] (dimensionless)") : d.to_string();
     return fmt::format("{} ({})", d.to_string(), name);
 }
+std::string describe(const compact_dimension& d) {
+    return describe(d.expand());
+}
 
 // The operands of one meeting point (terms of a sum, arguments, sides of a formula).
+// The type first: the node and the flag then fill what would be padding after it (a long sum
+// keeps one of these per term).
 struct operand {
+    typed_term type;
     std::uint32_t node;
-    typed type;
     bool subtracted = false; // a term after '-'
 };
 
 struct dimension_hash {
-    std::size_t operator()(const dimension& d) const noexcept {
-        std::size_t h = 0;
-        for (const rational& e : d.exponents())
-            h = h * 1'000'003 + std::hash<std::int64_t>{}(e.num()) * 31 +
-                std::hash<std::int64_t>{}(e.den());
-        return h;
-    }
+    std::size_t operator()(const compact_dimension& d) const noexcept { return d.hash(); }
 };
 
 struct agreement {
-    std::optional<dimension> reference; // the dimension most operands share
-    std::vector<std::size_t> odd;       // operands that differ from it
+    std::optional<compact_dimension> reference; // the dimension most operands share
+    std::vector<std::size_t> odd;               // operands that differ from it
 };
 
 // The reference is the dimension most operands share (the first such on a tie), so that one
@@ -164,7 +132,7 @@ agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless
         std::any_of(ops.begin(), ops.end(), [](const operand& op) {
             return op.type.known && !op.type.zero && !op.type.dim.is_dimensionless();
         })) {
-        result.reference = dimension{};
+        result.reference = compact_dimension{};
         for (std::size_t i = 0; i < ops.size(); ++i)
             if (ops[i].type.known && !ops[i].type.zero && !ops[i].type.dim.is_dimensionless())
                 result.odd.push_back(i);
@@ -190,8 +158,8 @@ agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless
     }
     // Counted in a hash map, since a sum may have thousands of terms of as many dimensions;
     // `counts` keeps the order of first appearance, which breaks ties.
-    std::vector<std::pair<dimension, std::size_t>> counts;
-    std::unordered_map<dimension, std::size_t, dimension_hash> index;
+    std::vector<std::pair<compact_dimension, std::size_t>> counts;
+    std::unordered_map<compact_dimension, std::size_t, dimension_hash> index;
     for (const auto& op : ops) {
         if (!op.type.known || op.type.zero)
             continue;
@@ -253,6 +221,8 @@ class checker {
         : file_(file), symbols_(symbols), out_(out), defer_unknown_(defer_unknown),
           spine_(scratch().spine), operands_(scratch().operands), literals_(scratch().literals),
           scaled_(scratch().scaled), scaled_index_(scratch().scaled_index) {
+        // No dimension of an earlier check is alive: their spilled exponents may go.
+        compact_dimension::reset_arena();
         // A check abandoned by an exception may have left its part behind.
         spine_.clear();
         operands_.clear();
@@ -273,48 +243,36 @@ class checker {
 
     // A node's type, with the numbers along its multiplicative path left on the literal stack
     // from where it started.
-    typed eval(std::uint32_t index) {
+    typed_term eval(std::uint32_t index) {
         const auto start = static_cast<std::uint32_t>(literals_.size());
-        typed t = eval_node(index);
+        typed_term t = eval_node(index);
         t.literal_begin = start;
         t.literal_count = static_cast<std::uint32_t>(literals_.size()) - start;
         return t;
     }
 
-    typed eval_node(std::uint32_t index) {
+    // A plain dispatcher: every case is a call whose result is the return value, so this
+    // frame stays small (it is entered once per node). The cases kept out of line are the
+    // ones whose locals would otherwise make every node pay for them.
+    typed_term eval_node(std::uint32_t index) {
         const syntax::expr_node& n = file_.nodes[index];
         switch (n.kind) {
         case expr_kind::number:
             return eval_number(n, index);
-        case expr_kind::pi: {
-            typed t;
-            t.numeric = true;
-            scale_literal l;
-            l.value = 3.14159265358979323846;
-            l.tolerance = 1e-12;
-            l.node = index;
-            literals_.push_back(l);
-            return t;
-        }
+        case expr_kind::pi:
+            return eval_pi(index);
         case expr_kind::symbol:
             return eval_symbol(n);
-        case expr_kind::negate: {
-            typed t = eval(n.lhs);
-            if (t.value)
-                t.value = -*t.value;
-            return t;
-        }
+        case expr_kind::negate:
+            return eval_negate(n);
         case expr_kind::add:
         case expr_kind::subtract:
             return eval_sum(index);
         case expr_kind::multiply:
         case expr_kind::divide:
             return eval_product(index);
-        case expr_kind::power: {
-            const typed base = eval(n.lhs);
-            const typed exponent = eval(n.rhs);
-            return apply_power(base, exponent, n.lhs, n.rhs);
-        }
+        case expr_kind::power:
+            return eval_power(n);
         case expr_kind::call:
             return eval_call(n);
         case expr_kind::group:
@@ -335,6 +293,30 @@ class checker {
         return unknown_type();
     }
 
+    [[gnu::noinline]] typed_term eval_pi(std::uint32_t index) {
+        typed_term t;
+        t.numeric = true;
+        scale_literal l;
+        l.value = 3.14159265358979323846;
+        l.tolerance = 1e-12;
+        l.node = index;
+        literals_.push_back(l);
+        return t;
+    }
+
+    [[gnu::noinline]] typed_term eval_negate(const syntax::expr_node& n) {
+        typed_term t = eval(n.lhs);
+        if (t.value)
+            t.value = -*t.value;
+        return t;
+    }
+
+    [[gnu::noinline]] typed_term eval_power(const syntax::expr_node& n) {
+        const typed_term base = eval(n.lhs);
+        const typed_term exponent = eval(n.rhs);
+        return apply_power(base, exponent, n.lhs, n.rhs);
+    }
+
     void check_formula(const syntax::formula& f) {
         current_ = &f;
         const std::size_t base = operands_.size();
@@ -344,8 +326,7 @@ class checker {
             if (s.relation_before != syntax::relation_kind::none &&
                 s.relation_before != syntax::relation_kind::equal)
                 equation = false;
-            typed t = eval(s.root);
-            operands_.push_back({s.root, std::move(t)});
+            operands_.push_back({eval(s.root), s.root});
         }
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
@@ -417,10 +398,10 @@ class checker {
     // written beside its cell.
     std::optional<value_type> check_value(const syntax::formula& f) {
         current_ = &f;
-        const typed t = eval(file_.sides[f.first_side].root);
+        const typed_term t = eval(file_.sides[f.first_side].root);
         if (!t.known)
             return std::nullopt;
-        return value_type{t.dim, t.scale, t.offset, t.zero, t.exact_scale};
+        return value_type{t.dim.expand(), t.scale, t.offset, t.zero, t.exact_scale};
     }
 
   private:
@@ -482,7 +463,7 @@ class checker {
         };
         double reference_scale = std::numeric_limits<double>::quiet_NaN();
         for (std::size_t i = 0; i < count; ++i) {
-            const typed& t = operands_[base + i].type;
+            const typed_term& t = operands_[base + i].type;
             if (!is_odd(i) && t.known && !t.zero && !t.numeric && t.dim == *a.reference &&
                 t.literal_count == 0 && std::isfinite(t.scale)) {
                 reference_scale = t.scale;
@@ -499,10 +480,10 @@ class checker {
         std::size_t found_count = 0;
         std::array<std::string_view, 8> texts{};
         for (const std::size_t i : a.odd) {
-            const typed& t = operands_[base + i].type;
+            const typed_term& t = operands_[base + i].type;
             // 2.31*p_g beside a head: a gauge pressure in feet of water, as p_g/(ρ*g) is.
             const bool gauge_to_head = t.offset != nullptr &&
-                                       t.offset->dim() == pressure_dimension() &&
+                                       compact_dimension(t.offset->dim()) == pressure_dimension() &&
                                        *a.reference == length_dimension();
             // A bare number is read too when it stands for the whole quantity: the 9.81 of
             // (γ_sat - 9.81)*z is water's specific weight in kN/m³.
@@ -512,7 +493,7 @@ class checker {
                 return false;
             dimension lacking;
             try {
-                lacking = *a.reference / t.dim;
+                lacking = (*a.reference / t.dim).expand();
             } catch (const std::exception&) {
                 return false;
             }
@@ -532,7 +513,7 @@ class checker {
             readings[found_count++] = {i, *reading};
         }
         for (std::size_t r = 0; r < found_count; ++r) {
-            typed& t = operands_[base + readings[r].operand].type;
+            typed_term& t = operands_[base + readings[r].operand].type;
             scale_literal& number = literals_[t.literal_begin + readings[r].reading.literal];
             t.dim = *a.reference;
             t.scale = readings[r].reading.term_scale;
@@ -589,7 +570,7 @@ class checker {
     void add_term(diagnostic& d, const operand& op, bool differs = false) const {
         d.terms.push_back({{file_.source, file_.nodes[op.node].range},
                            display_text(file_.nodes[op.node].range),
-                           op.type.dim,
+                           op.type.dim.expand(),
                            differs});
     }
 
@@ -646,12 +627,12 @@ class checker {
                                restates});
     }
 
-    typed eval_quantity(const syntax::expr_node& n) const {
+    [[gnu::noinline]] typed_term eval_quantity(const syntax::expr_node& n) const {
         const syntax::quantity_literal& q = file_.quantities[n.lhs];
         if (!q.dim)
             return unknown_type();
-        typed t;
-        t.dim = *q.dim;
+        typed_term t;
+        t.dim = compact_dimension(*q.dim);
         // A constant stands for its SI value; a number in braces is in the unit written.
         t.scale = q.constant ? 1.0 : q.si_factor;
         t.exact_scale = q.constant ? std::optional<rational>(rational(1)) : q.si_exact;
@@ -663,21 +644,20 @@ class checker {
         return t;
     }
 
-    typed eval_number(const syntax::expr_node& n, std::uint32_t index) {
-        typed t;
+    [[gnu::noinline]] typed_term eval_number(const syntax::expr_node& n, std::uint32_t index) {
+        typed_term t;
         t.numeric = true;
-        const std::string_view written = text(n.range);
-        t.value = rational::parse(written);
-        t.zero = t.value && t.value->is_zero();
+        const number_reading& reading = read_number(text(n.range));
+        t.value = reading.value;
+        t.zero = reading.zero;
         if (!t.zero) {
-            const double v =
-                t.value ? t.value->to_double() : std::strtod(std::string(written).c_str(), nullptr);
-            literals_.push_back(read_literal(written, v, index, t.value));
+            literals_.push_back(reading.literal);
+            literals_.back().node = index;
         }
         return t;
     }
 
-    typed eval_symbol(const syntax::expr_node& n) {
+    typed_term eval_symbol(const syntax::expr_node& n) {
         const std::string_view name = text(n.range);
         symbol_entry* entry = symbols_.find(name);
         if (entry == nullptr) {
@@ -714,11 +694,27 @@ class checker {
                                    {}});
             return unknown_type();
         }
+        if (entry->checked_type) {
+            entry->used = true;
+            return *entry->checked_type;
+        }
+        typed_term t = declared_type(entry, name);
+        // A dimension past the 16-bit form is held in this check's arena only, so a type
+        // that refers to it must not outlive the check.
+        if (!entry->dim || entry->compact_dim)
+            entry->checked_type = t;
+        return t;
+    }
+
+    // Worked out on a symbol's first use and kept in its entry.
+    static typed_term declared_type(symbol_entry* entry, std::string_view name) {
         entry->used = true;
-        if (!entry->dim)
-            return unknown_type();
-        typed t;
-        t.dim = *entry->dim;
+        typed_term t;
+        if (!entry->dim) {
+            t.known = false;
+            return t;
+        }
+        t.dim = entry->compact_dim ? *entry->compact_dim : compact_dimension(*entry->dim);
         t.scale = entry->si_factor;
         t.exact_scale = entry->si_exact;
         t.offset = entry->offset_unit;
@@ -737,7 +733,7 @@ class checker {
         return t;
     }
 
-    typed eval_sum(std::uint32_t index) {
+    typed_term eval_sum(std::uint32_t index) {
         const bool prefer_dimensionless = index == prefer_dimensionless_;
         // Walk the left spine iteratively: a long sum must not recurse once per term.
         const std::size_t spine_base = spine_.size();
@@ -754,7 +750,7 @@ class checker {
         // sum needs, and briefly three times while it moves.
         operands_.reserve(base + term_count);
         const std::size_t literal_base = literals_.size();
-        typed result;
+        typed_term result;
         result.numeric = true;
         result.zero = true;
         result.value = rational(0);
@@ -765,7 +761,8 @@ class checker {
             const std::uint32_t node = k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
-            typed t = eval(node);
+            operand term{eval(node), node, subtracted};
+            const typed_term& t = term.type;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
             result.zero = result.zero && t.zero;
@@ -779,12 +776,12 @@ class checker {
             } else {
                 result.value.reset();
             }
-            operands_.push_back({node, std::move(t), subtracted});
+            operands_.push_back(term);
         }
         const bool last_subtracted = file_.nodes[index].kind == expr_kind::subtract;
         spine_.resize(spine_base);
 
-        const typed* offset_term = adopt_numbers_on_offset_scale(base);
+        const typed_term* offset_term = adopt_numbers_on_offset_scale(base);
         const scratch_region region(operands_, base);
         const std::span<const operand> terms = region.view();
         agreement a = find_agreement(terms, prefer_dimensionless);
@@ -843,8 +840,8 @@ class checker {
 
     // In a sum with a value on an offset scale, a bare number is a value in that unit
     // ("T_F = 1.8*T_C + 32"). Returns the first such value, or null.
-    const typed* adopt_numbers_on_offset_scale(std::size_t base) {
-        const typed* offset_term = nullptr;
+    const typed_term* adopt_numbers_on_offset_scale(std::size_t base) {
+        const typed_term* offset_term = nullptr;
         for (std::size_t i = base; i < operands_.size() && offset_term == nullptr; ++i)
             if (operands_[i].type.known && operands_[i].type.offset != nullptr)
                 offset_term = &operands_[i].type;
@@ -856,7 +853,7 @@ class checker {
         if (offset_term == nullptr)
             return nullptr;
         for (std::size_t i = base; i < operands_.size(); ++i) {
-            typed& t = operands_[i].type;
+            typed_term& t = operands_[i].type;
             if (t.numeric && t.value && !t.zero && t.dim.is_dimensionless()) {
                 t.dim = offset_term->dim;
                 t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
@@ -903,7 +900,7 @@ class checker {
     }
 
     // Where a scale of this dimension can have its zero: absolute, or an offset unit's zero.
-    bool recognised_origin(double origin, double tolerance, const dimension& dim,
+    bool recognised_origin(double origin, double tolerance, const compact_dimension& dim,
                            std::span<const operand> terms) const {
         const double slack = tolerance + 1e-9 * std::abs(origin) + 1e-9;
         if (std::abs(origin) <= slack)
@@ -918,7 +915,8 @@ class checker {
     }
 
     // The table's (or the formula's) offset unit whose zero is `origin`, to name the scale.
-    const unit_definition* scale_named(double origin, double tolerance, const dimension& dim,
+    const unit_definition* scale_named(double origin, double tolerance,
+                                       const compact_dimension& dim,
                                        std::span<const operand> terms) const {
         const double slack = tolerance + 1e-9 * std::abs(origin) + 1e-9;
         for (const auto& t : terms)
@@ -936,8 +934,8 @@ class checker {
     // The scale and zero of a sum with a value on an offset scale. Values on one scale subtract
     // to an ordinary difference; a shift by the scale's zero converts it; an absolute pressure
     // added to a gauge one (+ p_atm) gives an absolute pressure.
-    typed finish_offset_sum(std::span<const operand> terms, typed result, std::size_t literal_base,
-                            std::uint32_t index) {
+    typed_term finish_offset_sum(std::span<const operand> terms, typed_term result,
+                                 std::size_t literal_base, std::uint32_t index) {
         // The terms with units (not the numbers that shift the zero).
         std::size_t unit_terms = 0;
         std::size_t only = 0;
@@ -1220,7 +1218,7 @@ class checker {
     }
 
     // A side or term's units and numbers, for reconcile().
-    scaled_operand scaled(const typed& t, bool as_number) const {
+    scaled_operand scaled(const typed_term& t, bool as_number) const {
         static const rational one(1);
         if (as_number)
             return {1.0, &one, {}};
@@ -1642,7 +1640,7 @@ class checker {
 
     // A value on an offset scale used where only an absolute one makes sense.
     void report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where,
-                       const dimension* partner = nullptr) {
+                       const compact_dimension* partner = nullptr) {
         const bool temperature =
             unit.exponents[static_cast<std::size_t>(base_dimension::temperature)] != 0;
         diagnostic& d =
@@ -1714,7 +1712,7 @@ class checker {
         return found.empty() ? std::string("T_ref") : found;
     }
 
-    typed eval_product(std::uint32_t index) {
+    typed_term eval_product(std::uint32_t index) {
         const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
         while (file_.nodes[n].kind == expr_kind::multiply ||
@@ -1722,9 +1720,10 @@ class checker {
             spine_.push_back(n);
             n = file_.nodes[n].lhs;
         }
-        typed result = eval(n);
+        typed_term result = eval(n);
         result.zero = false;
         std::uint32_t offset_node = n;
+        std::size_t arena_place = compact_dimension::no_place;
         if (result.reading_or_difference)
             result.offset = nullptr;
         // A gauge pressure over a specific weight (p_g/(ρ*g)) is a head above the level where
@@ -1744,7 +1743,7 @@ class checker {
         for (std::size_t k = spine_.size(); k > spine_base; --k) {
             const syntax::expr_node& op = file_.nodes[spine_[k - 1]];
             const bool divided = op.kind == expr_kind::divide;
-            typed t = eval(op.rhs);
+            typed_term t = eval(op.rhs);
             if (t.reading_or_difference)
                 t.offset = nullptr;
             if (divided)
@@ -1753,7 +1752,7 @@ class checker {
                         -literals_[t.literal_begin + i].exponent;
             // An offset value may be scaled by a pure number (the mean (T_1 + T_2)/2), not
             // multiplied by a quantity, nor by a `?` coefficient (which has a dimension).
-            const auto scales_a_reading = [](const typed& reading, const typed& other) {
+            const auto scales_a_reading = [](const typed_term& reading, const typed_term& other) {
                 return reading.known && reading.offset != nullptr &&
                        (other.known ? !other.numeric : other.inferred);
             };
@@ -1762,7 +1761,7 @@ class checker {
                 scales_a_reading(t, result) && !(result.known && result.numeric && !divided);
             const bool gauge_over_something =
                 (left_off || (right_off && !divided)) &&
-                (left_off ? result : t).offset->dim() == pressure_dimension();
+                compact_dimension((left_off ? result : t).offset->dim()) == pressure_dimension();
             if (gauge_over_something) {
                 if (!gauge_in_product)
                     gauge_in_product = deferred_offset{
@@ -1775,7 +1774,8 @@ class checker {
                               left_off ? (t.known ? &t.dim : nullptr)
                                        : (result.known ? &result.dim : nullptr));
                 spine_.resize(spine_base);
-                return unknown_type();
+                result = unknown_type();
+                return result; // the one return object, built in place
             }
             if (t.offset != nullptr) {
                 result.offset = t.offset;
@@ -1792,11 +1792,18 @@ class checker {
             result.inferred = result.inferred || t.inferred;
             has_gravity = has_gravity || (t.known && !divided && t.dim == acceleration_dimension());
             result.scale = divided ? result.scale / t.scale : result.scale * t.scale;
-            result.exact_scale = exact_product(result.exact_scale, t.exact_scale, divided);
+            // Most factors are in SI units: times or over exactly 1 leaves the scale as it is.
+            if (!(t.exact_scale && *t.exact_scale == rational(1)))
+                result.exact_scale = exact_product(result.exact_scale, t.exact_scale, divided);
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
-            if (result.known)
+            if (result.known) {
                 result.dim = divided ? result.dim / t.dim : result.dim * t.dim;
+                // a*a*a*... past the 16-bit form: one arena entry for the chain, not one per
+                // factor (t, the only other holder of entries made here, is done with).
+                if (result.dim.in_arena())
+                    result.dim = compact_dimension::settle_in_arena(result.dim, arena_place);
+            }
             if (result.value && t.value && !(divided && t.value->is_zero())) {
                 try {
                     result.value = divided ? *result.value / *t.value : *result.value * *t.value;
@@ -1822,21 +1829,21 @@ class checker {
             }
         }
         if (!result.known)
-            return unknown_type(result.inferred);
-        if (has_gravity && !result.point && result.dim == pressure_dimension())
+            result = unknown_type(result.inferred);
+        else if (has_gravity && !result.point && result.dim == pressure_dimension())
             result.absolute_pressure_difference = true;
         return result;
     }
 
-    typed apply_power(const typed& base, const typed& exponent, std::uint32_t base_node,
-                      std::uint32_t exponent_node) {
+    typed_term apply_power(const typed_term& base, const typed_term& exponent,
+                           std::uint32_t base_node, std::uint32_t exponent_node) {
         if (exponent.known && !exponent.dim.is_dimensionless()) {
             diagnostic& d = report(rules::dimensioned_exponent,
                                    fmt::format("the exponent {} has a dimension; an exponent must "
                                                "be dimensionless",
                                                quote(exponent_node)),
                                    file_.nodes[exponent_node].range);
-            add_term(d, {exponent_node, exponent});
+            add_term(d, {exponent, exponent_node});
             d.notes.push_back(
                 {fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}, true});
             return unknown_type();
@@ -1855,7 +1862,7 @@ class checker {
             report_offset(base_node, *base.offset, "raised to a power");
             return unknown_type();
         }
-        typed result;
+        typed_term result;
         result.numeric = base.numeric && exponent.numeric;
         result.exact_scale.reset();
         if (exponent.value) {
@@ -1876,7 +1883,7 @@ class checker {
                     "{} has a dimension, so its exponent must be a constant number, but {} {}",
                     quote(base_node), quote(exponent_node), why),
                 file_.nodes[exponent_node].range);
-            add_term(d, {base_node, base});
+            add_term(d, {base, base_node});
             d.notes.push_back(
                 {fmt::format("{} is {}", quote(base_node), describe(base.dim)), {}, true});
             d.notes.push_back({"the dimension of the power would depend on the exponent's value; "
@@ -1917,7 +1924,7 @@ class checker {
                 n.range.begin + static_cast<std::uint32_t>(end)};
     }
 
-    typed eval_call(const syntax::expr_node& n) {
+    typed_term eval_call(const syntax::expr_node& n) {
         const span name_range = call_name_range(n);
         const std::string_view name = text(name_range);
         const bool sheet = file_.functions == syntax::function_names::spreadsheet;
@@ -1925,15 +1932,18 @@ class checker {
         const bool wants_number = f != nullptr && (f->rule == function_rule::dimensionless ||
                                                    f->rule == function_rule::log_base);
         const std::size_t literal_start = literals_.size();
-        std::vector<operand> args;
+        // The arguments go on the scratch stack: no allocation per call.
+        const std::size_t args_base = operands_.size();
         for (std::uint32_t i = 0; i < n.rhs; ++i) {
             const std::uint32_t node = file_.call_args[n.lhs + i];
             const std::uint32_t saved = prefer_dimensionless_;
             if (wants_number)
                 prefer_dimensionless_ = node;
-            args.push_back({node, eval(node)});
+            operands_.push_back({eval(node), node});
             prefer_dimensionless_ = saved;
         }
+        const scratch_region region(operands_, args_base);
+        const std::span<const operand> args = region.view();
         // Only a root or abs passes its argument's numbers on, as factors of the result.
         const auto keep_first_argument_numbers = [&](double power) {
             if (args.empty()) {
@@ -1990,7 +2000,7 @@ class checker {
                      {}});
             return unknown_type();
         }
-        typed result;
+        typed_term result;
         result.numeric =
             std::all_of(args.begin(), args.end(), [](const operand& a) { return a.type.numeric; });
         switch (f->rule) {
@@ -2048,7 +2058,7 @@ class checker {
             if (!std::all_of(args.begin(), args.end(),
                              [](const operand& o) { return o.type.known; }))
                 return unknown_type();
-            result.dim = a.reference.value_or(dimension{});
+            result.dim = a.reference.value_or(compact_dimension{});
             result.scale = scales_agree ? unit : std::numeric_limits<double>::quiet_NaN();
             result.offset = args[0].type.offset;
             result.origin = args[0].type.origin;
@@ -2072,12 +2082,12 @@ class checker {
 
     // ---- Spreadsheet operands and functions ----------------------------------------------
 
-    typed eval_reference(const syntax::expr_node& n) const {
+    [[gnu::noinline]] typed_term eval_reference(const syntax::expr_node& n) const {
         const syntax::reference_value& r = file_.references[n.lhs];
         if (!r.dim)
             return unknown_type();
-        typed t;
-        t.dim = *r.dim;
+        typed_term t;
+        t.dim = compact_dimension(*r.dim);
         t.scale = r.scale;
         t.exact_scale = r.exact_scale;
         t.offset = r.offset;
@@ -2094,10 +2104,10 @@ class checker {
     }
 
     // A comparison inside a formula (IF's condition): its sides agree as a limit's do.
-    typed eval_compare(const syntax::expr_node& n) {
+    [[gnu::noinline]] typed_term eval_compare(const syntax::expr_node& n) {
         const std::size_t base = operands_.size();
-        operands_.push_back({n.lhs, eval(n.lhs)});
-        operands_.push_back({n.rhs, eval(n.rhs)});
+        operands_.push_back({eval(n.lhs), n.lhs});
+        operands_.push_back({eval(n.rhs), n.rhs});
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
         agreement a = find_agreement(sides);
@@ -2117,12 +2127,12 @@ class checker {
         }
         double unit = 1.0;
         check_scales(sides, "sides of this comparison", unit);
-        return typed{}; // true or false: a dimensionless number
+        return typed_term{}; // true or false: a dimensionless number
     }
 
     // Arguments from `first` on must agree; their common type, or unknown after a finding.
-    typed agreeing(const builtin_function& f, std::span<const operand> args, std::size_t first,
-                   std::string_view others) {
+    typed_term agreeing(const builtin_function& f, std::span<const operand> args, std::size_t first,
+                        std::string_view others) {
         const std::span<const operand> tail = args.subspan(first);
         const agreement a = find_agreement(tail);
         if (!a.odd.empty()) {
@@ -2136,8 +2146,8 @@ class checker {
         const bool scales_agree = check_scales(tail, fmt::format("{} of {}", others, f.name), unit);
         if (!std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.known; }))
             return unknown_type();
-        typed result;
-        result.dim = a.reference.value_or(dimension{});
+        typed_term result;
+        result.dim = a.reference.value_or(compact_dimension{});
         result.zero =
             std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.zero; });
         result.numeric =
@@ -2150,12 +2160,12 @@ class checker {
         return result;
     }
 
-    typed eval_sheet_call(const builtin_function& f, const std::vector<operand>& args) {
+    typed_term eval_sheet_call(const builtin_function& f, std::span<const operand> args) {
         switch (f.rule) {
         case function_rule::choice:
             return agreeing(f, args, 1, "branches");
         case function_rule::product: {
-            typed result;
+            typed_term result;
             for (const auto& a : args) {
                 if (!a.type.known)
                     return unknown_type();
@@ -2173,7 +2183,8 @@ class checker {
                 require_dimensionless(f, args[i]);
             return args[0].type.known ? args[0].type : unknown_type();
         case function_rule::lookup: {
-            typed key = agreeing(f, std::span<const operand>(args).first(2), 0, "key and column");
+            typed_term key =
+                agreeing(f, std::span<const operand>(args).first(2), 0, "key and column");
             (void)key;
             return args[2].type.known ? args[2].type : unknown_type();
         }
@@ -2183,17 +2194,17 @@ class checker {
             return args[0].type.known ? args[0].type : unknown_type();
         case function_rule::position:
             (void)agreeing(f, std::span<const operand>(args).first(2), 0, "key and range");
-            return typed{};
+            return typed_term{};
         case function_rule::count:
         case function_rule::logical:
-            return typed{};
+            return typed_term{};
         case function_rule::to_radians:
         case function_rule::to_degrees: {
             if (!args[0].type.known)
                 return unknown_type();
             if (!require_dimensionless(f, args[0]))
                 return unknown_type();
-            typed result;
+            typed_term result;
             // The value in degrees counts π/180 of the radian.
             result.scale = f.rule == function_rule::to_degrees ? std::numbers::pi / 180.0 : 1.0;
             if (f.rule == function_rule::to_degrees)
@@ -2252,10 +2263,10 @@ class checker {
         return false;
     }
 
-    typed derivative(const std::vector<operand>& args) {
+    typed_term derivative(std::span<const operand> args) {
         rational order = 1;
         if (args.size() == 3) {
-            const typed& n = args[2].type;
+            const typed_term& n = args[2].type;
             if (!n.value || !n.value->is_integer() || n.value->num() < 1) {
                 report(rules::variable_exponent,
                        fmt::format("the order of deriv must be a whole number such as 2, but {} is "
@@ -2268,7 +2279,7 @@ class checker {
         }
         if (!args[0].type.known || !args[1].type.known)
             return unknown_type();
-        typed result;
+        typed_term result;
         result.dim = args[0].type.dim / args[1].type.dim.pow(order);
         result.scale = args[0].type.scale / std::pow(args[1].type.scale, order.to_double());
         result.exact_scale = exact_product(
@@ -2276,7 +2287,7 @@ class checker {
         return result;
     }
 
-    typed integral(const std::vector<operand>& args) {
+    typed_term integral(std::span<const operand> args) {
         // The limits answer to the variable of integration, however many of them there are.
         if (args.size() == 4 && args[1].type.known) {
             const operand* odd = nullptr;
@@ -2304,7 +2315,7 @@ class checker {
         }
         if (!args[0].type.known || !args[1].type.known)
             return unknown_type();
-        typed result;
+        typed_term result;
         result.dim = args[0].type.dim * args[1].type.dim;
         result.scale = args[0].type.scale * args[1].type.scale;
         result.exact_scale =
@@ -2368,7 +2379,7 @@ std::optional<dimension> expression_dimension(const syntax::parsed_file& file, s
                         [](const diagnostic& d) { return d.level == severity::error; });
         if (!t.known || erred)
             return std::nullopt;
-        return t.dim;
+        return t.dim.expand();
     } catch (const arithmetic_overflow&) {
         diagnostic d;
         d.rule = std::string(rules::overflow);

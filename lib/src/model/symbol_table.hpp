@@ -1,8 +1,10 @@
 // The symbols one file can see: its dictionaries', its `use`d files' and its own.
 #pragma once
 
+#include "check/typed_term.hpp"
 #include "plumb/diagnostic.hpp"
 #include "plumb/dimension.hpp"
+#include "units/compact_dimension.hpp"
 
 #include <cstdint>
 #include <optional>
@@ -29,6 +31,12 @@ struct symbol_entry {
     // A temperature or pressure in an absolute unit: a reading (1) or a difference (0), worked
     // out from its name and description on first use; -1 until then.
     std::int8_t reading = -1;
+    // `dim` in the checker's form, worked out once on insert rather than at every use; empty
+    // when `dim` is or when it does not fit that form.
+    std::optional<compact_dimension> compact_dim;
+    // The checker's type of the symbol, built at its first use rather than at every use. It
+    // depends only on the fields above as declared (and `reading`, fixed at first use).
+    std::optional<typed_term> checked_type;
 };
 
 // Names to entries. Look-up is the hottest operation of a check (every symbol of every
@@ -43,7 +51,7 @@ class symbol_table {
             const std::uint32_t slot = slots_[i];
             if (slot == empty_slot)
                 return nullptr;
-            if (names_[slot] == name)
+            if (same_name(names_[slot], name))
                 return &entries_[slot];
         }
     }
@@ -55,6 +63,8 @@ class symbol_table {
             grow();
         names_.push_back(name);
         entries_.push_back(entry);
+        entries_.back().compact_dim =
+            entry.dim ? compact_dimension::fitted(*entry.dim) : std::nullopt;
         place(static_cast<std::uint32_t>(names_.size() - 1));
         return {&entries_.back(), true};
     }
@@ -90,12 +100,34 @@ class symbol_table {
 
     [[nodiscard]] std::size_t mask() const { return slots_.size() - 1; }
 
+    // Names are a few bytes: compared in line, without a call to memcmp.
+    static bool same_name(std::string_view a, std::string_view b) {
+        if (a.size() != b.size())
+            return false;
+        for (std::size_t i = 0; i < a.size(); ++i)
+            if (a[i] != b[i])
+                return false;
+        return true;
+    }
+
+    // Names are short: their bytes are gathered eight at a time and mixed once per word,
+    // rather than once per byte.
     static std::size_t hash(std::string_view s) {
-        std::uint64_t h = 1469598103934665603ULL; // FNV-1a: short names, few collisions
+        constexpr std::uint64_t mix = 0x9E3779B97F4A7C15ULL;
+        std::uint64_t h = s.size() * mix;
+        std::uint64_t word = 0;
+        std::size_t in_word = 0;
         for (const char c : s) {
-            h ^= static_cast<unsigned char>(c);
-            h *= 1099511628211ULL;
+            word = (word << 8) | static_cast<unsigned char>(c);
+            if (++in_word == 8) {
+                h = (h ^ word) * mix;
+                h ^= h >> 32;
+                word = 0;
+                in_word = 0;
+            }
         }
+        h = (h ^ word) * mix;
+        h = (h ^ (h >> 32)) * mix; // every byte reaches the low bits the table uses
         return static_cast<std::size_t>(h ^ (h >> 29));
     }
     void place(std::uint32_t index) {

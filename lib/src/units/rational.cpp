@@ -38,6 +38,11 @@ std::int64_t checked_neg(std::int64_t a) {
 } // namespace
 
 rational::rational(std::int64_t num, std::int64_t den) {
+    // A whole number is already reduced: no gcd (the common case).
+    if (den == 1 && num != INT64_MIN) {
+        num_ = num;
+        return;
+    }
     if (den == 0)
         throw std::domain_error("rational with zero denominator");
     if (den < 0) {
@@ -84,7 +89,13 @@ rational rational::multiply_slow(rational a, rational b) {
     const std::int64_t g2 = std::gcd(b.num_, a.den_);
     const std::int64_t n = checked_mul(a.num_ / (g1 ? g1 : 1), b.num_ / (g2 ? g2 : 1));
     const std::int64_t d = checked_mul(a.den_ / (g2 ? g2 : 1), b.den_ / (g1 ? g1 : 1));
-    return {n, d};
+    // Reduced operands cross-cancelled give a reduced product with d > 0: no gcd needed.
+    if (n == INT64_MIN)
+        overflow();
+    rational r;
+    r.num_ = n;
+    r.den_ = d;
+    return r;
 }
 
 rational operator/(rational a, rational b) {

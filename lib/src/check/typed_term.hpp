@@ -1,0 +1,50 @@
+// The checker's type of a subexpression, kept in a header of its own so that a symbol's entry
+// can keep the type worked out at its first use.
+#pragma once
+
+#include "plumb/rational.hpp"
+#include "units/compact_dimension.hpp"
+
+#include <cstdint>
+#include <optional>
+
+namespace plumb {
+
+struct unit_definition;
+
+// A subexpression's type: its dimension, and what the rules need to know about its value.
+// Every node gets one, and sums keep one per term, so the flags are packed at the end.
+struct typed_term {
+    compact_dimension dim;
+    std::optional<rational> value; // exact value, when numeric and exactly representable
+    // SI value per written value: the product of the declared units' factors. Terms that agree
+    // in dimension but not in scale give numbers off by that factor.
+    double scale = 1.0;
+    // The same exactly, where every unit along the way is defined exactly and the powers are
+    // whole; empty otherwise, and the double decides.
+    std::optional<rational> exact_scale = rational(1);
+    // Set while the value is on an offset scale (°C, °F, gauge pressure): it may be compared
+    // and subtracted, but not multiplied, divided or raised to a power. Names the scale.
+    const unit_definition* offset = nullptr;
+    double origin = 0.0;           // SI value of the scale's zero: 273.15 K for °C, 0 absolute
+    double origin_tolerance = 0.0; // from rounded numbers that moved it (14.7 psi)
+    // "p_abs - p_g": an absolute reading less a reading on an offset scale is that scale's
+    // zero, the atmosphere, as a reading on the absolute scale. Names the offset scale.
+    const unit_definition* zero_of = nullptr;
+    // The numbers along its multiplicative path, on the checker's literal stack.
+    std::uint32_t literal_begin = 0;
+    std::uint32_t literal_count = 0;
+    bool known = true;    // false below an error already reported: stops cascades
+    bool zero = false;    // the literal 0, which agrees with any dimension
+    bool numeric = false; // built from numbers alone
+    bool point = false;   // a reading on a scale (a temperature, a pressure), not a difference
+    // "(T - 20)": a reading less a number that is not a scale's zero. Beside other readings
+    // it is a reading; as a factor it is the difference from a reference reading.
+    bool reading_or_difference = false;
+    // "p_abs - p_atm": the difference of two absolute pressures, which a gauge reads when the
+    // one subtracted is the atmosphere.
+    bool absolute_pressure_difference = false;
+    bool inferred = false; // unknown because a `?` coefficient stands in it, not an error
+};
+
+} // namespace plumb

@@ -1,0 +1,97 @@
+// A dimension in 16 bytes, for the checker's hot path, where every subexpression carries one:
+// the seven exponents as 16-bit numerators over one common denominator (1 for the whole
+// exponents of nearly every quantity). A dimension whose exponents do not fit is kept in full
+// in a per-thread arena for the current check and referred to by index, so the exact range
+// and its overflow finding are those of `dimension` itself.
+#pragma once
+
+#include "plumb/dimension.hpp"
+
+#include <array>
+#include <cstdint>
+#include <cstring>
+#include <optional>
+
+namespace plumb {
+
+class compact_dimension {
+  public:
+    constexpr compact_dimension() = default; // dimensionless
+
+    // `d`, fitted, or else kept in the arena until the next reset_arena().
+    explicit compact_dimension(const dimension& d);
+    // `d` when it fits; never uses the arena, so the value may outlive a check.
+    static std::optional<compact_dimension> fitted(const dimension& d);
+    // Forgets the arena's dimensions: call where no compact_dimension that used it is alive
+    // (at the start of a check).
+    static void reset_arena();
+
+    [[nodiscard]] dimension expand() const;
+    [[nodiscard]] bool is_dimensionless() const { return same_bits(*this, compact_dimension{}); }
+
+    friend bool operator==(const compact_dimension& a, const compact_dimension& b) {
+        if (a.den_ != 0 && b.den_ != 0) // both fitted: the form is canonical
+            return same_bits(a, b);
+        // A dimension that fits is never in the arena, so only two arena ones can be equal.
+        return a.den_ == 0 && b.den_ == 0 && equal_in_arena(a, b);
+    }
+
+    // Whole exponents that stay in range are added here; anything else goes through
+    // `dimension`, which reports overflow by throwing arithmetic_overflow as always.
+    friend compact_dimension operator*(const compact_dimension& a, const compact_dimension& b) {
+        compact_dimension r;
+        if (a.den_ == 1 && b.den_ == 1 && whole_sum(a, b, 1, r))
+            return r;
+        return product_in_full(a, b, false);
+    }
+    friend compact_dimension operator/(const compact_dimension& a, const compact_dimension& b) {
+        compact_dimension r;
+        if (a.den_ == 1 && b.den_ == 1 && whole_sum(a, b, -1, r))
+            return r;
+        return product_in_full(a, b, true);
+    }
+    [[nodiscard]] compact_dimension pow(rational p) const;
+
+    [[nodiscard]] bool in_arena() const { return den_ == 0; }
+    // For a caller that builds one dimension step by step (a long product) and alone holds
+    // every arena entry made since its first: the first call records where `d` is kept, later
+    // ones move `d` there and drop the entries after it, so the chain keeps one entry rather
+    // than one per step.
+    static compact_dimension settle_in_arena(const compact_dimension& d, std::size_t& place);
+    static constexpr std::size_t no_place = static_cast<std::size_t>(-1);
+
+    // A hash of the exponents, for counting dimensions; equal dimensions hash alike.
+    [[nodiscard]] std::size_t hash() const;
+
+  private:
+    // The rare cases, out of line so that the common ones above stay small enough to inline.
+    static bool equal_in_arena(const compact_dimension& a, const compact_dimension& b);
+    static compact_dimension product_in_full(const compact_dimension& a, const compact_dimension& b,
+                                             bool divide);
+
+    // Two 8-byte compares: these run for every term that meets another.
+    static bool same_bits(const compact_dimension& a, const compact_dimension& b) {
+        std::array<std::uint64_t, 2> x{};
+        std::array<std::uint64_t, 2> y{};
+        std::memcpy(x.data(), &a, sizeof a);
+        std::memcpy(y.data(), &b, sizeof b);
+        return x[0] == y[0] && x[1] == y[1];
+    }
+
+    static bool whole_sum(const compact_dimension& a, const compact_dimension& b, int sign,
+                          compact_dimension& r) {
+        bool fits = true;
+        for (std::size_t i = 0; i < base_dimension_count; ++i) {
+            const int s = a.num_[i] + sign * b.num_[i];
+            fits = fits && s >= INT16_MIN && s <= INT16_MAX;
+            r.num_[i] = static_cast<std::int16_t>(s);
+        }
+        return fits;
+    }
+
+    std::array<std::int16_t, base_dimension_count> num_{};
+    std::int16_t den_ = 1; // 0: kept in the arena, at the index held in num_[0] and num_[1]
+};
+static_assert(sizeof(compact_dimension) == 16, "compared as two 8-byte words");
+
+} // namespace plumb
