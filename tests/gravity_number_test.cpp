@@ -269,3 +269,26 @@ TEST_CASE("molar volume as a number: ppm conversions") {
     // Two conversions that are both needed stay clean: m³/h to L/s.
     CHECK(problems(run("Q_h : m^3/h\nQ_l : L/s\nQ_l = Q_h*1000/3600\n")) == 0);
 }
+
+// Water's density written as a number: 8.34 lb/gal and 62.4 lb/ft³ (common practice) and 1000
+// kg/m³, inside 995.65-999.975 kg/m³ between 0 and 30 °C (CRC Handbook, from memory) once
+// converted with NIST SP 811 (2008) App. B factors (lb = 0.45359237 kg, gal = 3.785411784e-3
+// m³, ft³ = 0.028316846592 m³).
+TEST_CASE("water's density as a number: 8.34 lb/gal, 62.4 lb/ft³, 1000 kg/m³") {
+    CHECK(8.34 * 0.45359237 / 3.785411784e-3 == doctest::Approx(999.4).epsilon(1e-3));
+    CHECK(62.4 * 0.45359237 / 0.028316846592 == doctest::Approx(999.6).epsilon(1e-3));
+    const std::string water = "W : lb\nV_g : gal\nV_f : ft^3\nm : kg\nV : m^3\nSG : 1\n"
+                              "W_d : lb/d\nq : gal/d\n";
+    for (const char* formula :
+         {"V_g = W/8.34", "V_f = W/62.4", "m = 1000*V", "q = W_d/(8.34*SG)"}) {
+        CAPTURE(formula);
+        const auto r = run(water + formula + "\n");
+        CHECK(problems(r) == 0);
+        CHECK(count(r, plumb::rules::trade_constant) == 1);
+    }
+    // A missing density, the number upside down, and a density 10 % off stay errors.
+    for (const char* formula : {"m = V", "V_g = W*8.34", "m = 900*V"}) {
+        CAPTURE(formula);
+        CHECK(problems(run(water + formula + "\n")) == 1);
+    }
+}

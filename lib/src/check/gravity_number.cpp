@@ -21,8 +21,8 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<gravity_quantity, 5>& quantities() {
-    static const std::array<gravity_quantity, 5> table = [] {
+const std::array<gravity_quantity, 6>& quantities() {
+    static const std::array<gravity_quantity, 6> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -52,7 +52,7 @@ const std::array<gravity_quantity, 5>& quantities() {
         const double molar_volume_least = 8.314462618 * 273.15 / 101325.0;
         const double molar_volume_greatest = 8.314462618 * 298.15 / 101325.0;
         const dimension amount = dimension::base(base_dimension::amount);
-        return std::array<gravity_quantity, 5>{{
+        return std::array<gravity_quantity, 6>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -82,6 +82,12 @@ const std::array<gravity_quantity, 5>& quantities() {
              "altitude and temperature",
              "write the density and specific heat in cells that hold their units to say so",
              density * specific_heat, air_heat_least, air_heat_greatest},
+            {rules::trade_constant, "the density of water", "\u03C1_w", "1/\u03C1_w",
+             " (water between 0 and 30 \u00B0C: 995.65 to 999.975 kg/m\u00B3)",
+             "declare the water's density with its unit (\u03C1_w : kg/m^3 = 998) to say so; "
+             "for another liquid the specific gravity must multiply it",
+             "write the density in a cell that holds its unit to say so", density, water_least,
+             water_greatest},
             {rules::trade_constant, "the molar volume of an ideal gas", "V_m = R\u00B7T/p", "1/V_m",
              " (at 101.325 kPa between 0 and 25 \u00B0C: 22.41 to 24.47 L/mol; the permit's "
              "standard conditions decide which)",

@@ -15,7 +15,7 @@
 namespace plumb {
 
 // A quantity the trades write as a bare number, with the range of SI values its printed
-// roundings stand for: g_n exactly, γ_w over water's densities between 0 and 30 °C, the
+// roundings stand for: g_n exactly, ρ_w and γ_w over water's densities between 0 and 30 °C, the
 // volumetric heat capacities ρ·c_p of water and air inside the HVAC trade's 500 and 1.08, and
 // an ideal gas's molar volume in the air trade's ppm conversions (24.45, 385.3).
 struct gravity_quantity {
