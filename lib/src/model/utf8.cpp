@@ -69,6 +69,14 @@ std::optional<std::size_t> first_invalid_utf8(std::string_view text) {
             ++i;
             continue;
         }
+        // Two-byte characters (Greek letters, the degree and micro signs) are most of the
+        // non-ASCII text in a calculation: told apart here without the general decoder.
+        const auto lead = static_cast<unsigned char>(text[i]);
+        if (lead >= 0xC2 && lead <= 0xDF && text.size() - i >= 2 &&
+            (static_cast<unsigned char>(text[i + 1]) & 0xC0) == 0x80) {
+            i += 2;
+            continue;
+        }
         const std::size_t length = utf8_length_at(text, i);
         if (length == 0)
             return i;
