@@ -203,3 +203,30 @@ TEST_CASE("unit-bound coefficients restated for another consistent set of units"
     CHECK_FALSE(
         mentions(*findings(plain, plumb::rules::inferred_dimension)[0], "coherent units of"));
 }
+
+// A scale's zero added to a reading already absolute counts it twice: 1 atm = 14.696 psi =
+// 101.325 kPa and T/K = t/°C + 273.15, T/°R = t/°F + 459.67 (NIST SP 811 (2008), B.8); psia =
+// psig + 14.7 and °R = °F + 460 are the trade's roundings (common practice). Found by the
+// review set: these once passed without a word.
+TEST_CASE("offset scales: a scale's zero added to an absolute reading is counted twice") {
+    const std::string decl = "p_1, p_2 : psia\np_k, p_k2 : kPa\np_g : psig\nT_1, T_2 : °R\n"
+                             "T_K, T_K2 : K\nt_c : °C\nt_f : °F\nΔp : psi\n"
+                             "p_gl : psi \"discharge gauge pressure, read loosely in psi\"\n";
+    for (const char* formula : {"p_1 = p_2 + 14.7", "p_k = p_k2 + 101.325", "T_2 = T_1 + 460",
+                                "T_K = T_K2 + 273.15", "T_2 = T_1 + 459.67"}) {
+        CAPTURE(formula);
+        const auto r = plumb::check_text("twice.plumb", decl + formula + "\n");
+        const auto found = findings(r, plumb::rules::offset_scale);
+        REQUIRE(found.size() == 1);
+        CHECK(mentions(*found[0], "counts that zero twice"));
+    }
+    // The conversions themselves, a margin, and a gauge reading declared loosely in psi whose
+    // description says gauge stay clean.
+    for (const char* formula :
+         {"p_1 = p_g + 14.7", "T_K = t_c + 273.15", "T_2 = t_f + 459.67", "p_1 = p_2 + 3",
+          "p_1 = p_2 + Δp", "T_K = T_K2 + 5", "p_1 = p_gl + 14.7"}) {
+        CAPTURE(formula);
+        const auto r = plumb::check_text("twice.plumb", decl + formula + "\n");
+        CHECK(findings(r, plumb::rules::offset_scale).empty());
+    }
+}

@@ -1037,6 +1037,11 @@ class checker {
                 shifted_to_a_zero = true;
             }
         }
+        if (has_shift && !shifted_to_a_zero && points == 1 && std::abs(origin) <= 1e-9 &&
+            report_zero_added_twice(terms, unit, result.dim)) {
+            literals_.resize(literal_base);
+            return unknown_type();
+        }
         if (has_shift && !shifted_to_a_zero && points == 1) {
             for (const auto& t : terms) {
                 if (!is_shift_candidate(t) || !t.subtracted)
@@ -1117,6 +1122,71 @@ class checker {
                             ? scale_named(final_origin, slack, result.dim, terms)
                             : nullptr;
         return result;
+    }
+
+    // Whether a symbol's name or description calls it a gauge reading (p_g, "gauge pressure").
+    bool named_gauge(std::uint32_t node) const {
+        if (file_.nodes[node].kind != expr_kind::symbol)
+            return false;
+        const std::string_view name = text(file_.nodes[node].range);
+        const symbol_entry* entry = symbols_.find(name);
+        const std::string_view description = entry != nullptr ? entry->description : "";
+        return name.ends_with("_g") || name.find("gauge") != std::string_view::npos ||
+               name.find("_g_") != std::string_view::npos ||
+               description.find("gauge") != std::string_view::npos;
+    }
+
+    // "p_1 = p_2 + 14.7" with both in psia, "T_2 = T_1 + 460" in °R: a scale's zero added to a
+    // reading that is already absolute, so the atmosphere or the 459.67 is counted twice.
+    bool report_zero_added_twice(std::span<const operand> terms, double unit,
+                                 const compact_dimension& dim) {
+        for (const auto& t : terms) {
+            if (!is_shift_candidate(t) || t.subtracted)
+                continue;
+            const shift sh = shift_of(t);
+            const double si = std::abs(sh.si + sh.written * unit);
+            for (const auto& row : offset_rows()) {
+                const double zero = std::abs(row.unit->offset);
+                if (!(row.dim == dim) || zero == 0.0 ||
+                    std::abs(si - zero) > si * sh.tolerance + 1e-9 * zero)
+                    continue;
+                const operand* reading = nullptr;
+                for (const auto& r : terms)
+                    if (!is_shift_candidate(r) && r.type.known && r.type.point)
+                        reading = &r;
+                // "p_g : psi "gauge pressure"": declared loosely in an absolute unit, but named
+                // a gauge reading, which is what the atmosphere is added to.
+                if (reading != nullptr && row.unit->scale == unit_scale::gauge &&
+                    named_gauge(reading->node))
+                    return false;
+                const bool gauge = row.unit->scale == unit_scale::gauge;
+                const std::string zero_of =
+                    gauge ? std::string("the atmosphere, the zero of gauge pressures")
+                          : fmt::format("the zero of the {} scale", row.unit->symbol);
+                diagnostic& d = report(
+                    rules::offset_scale,
+                    fmt::format("{} is {}, added to {}, a reading already on an absolute scale: "
+                                "the sum counts that zero twice",
+                                display_text(file_.nodes[t.node].range), zero_of,
+                                reading != nullptr ? quote(reading->node) : "a reading"),
+                    file_.nodes[t.node].range);
+                add_term(d, t);
+                if (reading != nullptr)
+                    add_term(d, *reading);
+                d.notes.push_back(
+                    {gauge ? std::string("a gauge reading plus the atmosphere is absolute; a "
+                                         "reading declared absolute needs nothing added (declare "
+                                         "it in psig, barg or kPag if it is a gauge reading)")
+                           : fmt::format("a {} reading plus {:g} is absolute; a reading declared "
+                                         "absolute needs nothing added (declare it in {} if it "
+                                         "is a {} reading)",
+                                         row.unit->symbol, row.unit->offset / row.unit->factor,
+                                         row.unit->symbol, row.unit->symbol),
+                     {}});
+                return true;
+            }
+        }
+        return false;
     }
 
     // Whether the node is one whole side of a formula of two or more sides (in parentheses or
