@@ -230,3 +230,26 @@ TEST_CASE("offset scales: a scale's zero added to an absolute reading is counted
         CHECK(findings(r, plumb::rules::offset_scale).empty());
     }
 }
+
+// Gauge to absolute in one line, with a rounded factor: 1 psi = 6.894757 kPa and 1 bar =
+// 14.50377 psi (NIST SP 811 (2008), B.8); 6.895 and 14.5 are the trade's roundings (common
+// practice). The factor's printed digits carry into the zero, so the conversion passes; the
+// atmosphere in the wrong unit (14.7 psi added to kPa, 1.01325 bar added to psi) does not.
+TEST_CASE("offset scales: gauge to absolute with a rounded factor and the atmosphere") {
+    const std::string decl = "p_1g : psig\np_bg : barg\np_k : kPa\np_1 : psia\n"
+                             "T_1, T_2 : °C\nT_K : K\n";
+    for (const char* formula : {"p_k = 6.895*p_1g + 101.325", "p_1 = 14.5*p_bg + 14.7",
+                                "p_1 = 14.5038*p_bg + 14.696", "p_k = 6.894757*p_1g + 101.325",
+                                "p_1 = 14.5*(p_bg + 1.01325)", "T_K = (T_1 + T_2)/2 + 273.15"}) {
+        CAPTURE(formula);
+        const auto r = plumb::check_text("gauge.plumb", decl + formula + "\n");
+        CHECK(findings(r, plumb::rules::offset_scale).empty());
+        CHECK(findings(r, plumb::rules::unit_scale).empty());
+    }
+    for (const char* formula :
+         {"p_k = 6.895*p_1g + 14.7", "p_1 = 14.5*p_bg + 1.01325", "p_k = 6.895*p_1g"}) {
+        CAPTURE(formula);
+        const auto r = plumb::check_text("gauge.plumb", decl + formula + "\n");
+        CHECK(findings(r, plumb::rules::offset_scale).size() == 1);
+    }
+}

@@ -972,7 +972,9 @@ class checker {
             origin -= gauge_zero;
             --points;
         }
-        const auto shifted = [&](double unit, double* tolerance) {
+        // `unit_tolerance`: how far the unit may be off, relative, when rounded numbers
+        // converted it (6.895 for 6.894757 in "6.895*p_g + 101.325").
+        const auto shifted = [&](double unit, double unit_tolerance, double* tolerance) {
             double o = origin;
             double tol = origin_tolerance;
             for (const auto& t : terms)
@@ -980,11 +982,12 @@ class checker {
                     const shift s = shift_of(t);
                     const double si = s.si + s.written * unit;
                     o -= si;
-                    tol += std::abs(si) * s.tolerance;
+                    tol += std::abs(si) * s.tolerance + std::abs(s.written * unit) * unit_tolerance;
                 }
             *tolerance = tol;
             return o;
         };
+        double unit_tolerance = 0.0;
         bool has_shift = false;
         for (const auto& t : terms)
             has_shift = has_shift || is_shift_candidate(t);
@@ -1000,18 +1003,42 @@ class checker {
                 const std::span<const scale_literal> lits(
                     literals_.data() + term.type.literal_begin,
                     std::min<std::size_t>(term.type.literal_count, 8));
-                for (std::uint32_t mask = 0; mask < (1U << lits.size()); ++mask) {
+                // A number times one reading, with a number added ("6.895*p_g + 14.7"): the
+                // added number is in the product's unit, so the multiplier must be a
+                // conversion. Only a mean ((T_1 + T_2)/2 + 273.15) keeps the reading's unit.
+                const bool multiplied_reading =
+                    !lits.empty() && std::isfinite(term.type.origin_tolerance);
+                bool found = false;
+                for (std::uint32_t mask = multiplied_reading ? 1 : 0; mask < (1U << lits.size());
+                     ++mask) {
                     double product = 1.0;
+                    double product_tolerance = 0.0;
                     for (std::size_t k = 0; k < lits.size(); ++k)
-                        if ((mask >> k) & 1U)
+                        if ((mask >> k) & 1U) {
                             product *= std::pow(lits[k].value, lits[k].exponent);
+                            product_tolerance += lits[k].tolerance * std::abs(lits[k].exponent);
+                        }
                     double tol = 0.0;
-                    const double o = shifted(term.type.scale / product, &tol);
+                    const double o = shifted(term.type.scale / product, product_tolerance, &tol);
                     if (recognised_origin(o, tol, term.type.dim, terms)) {
                         unit = term.type.scale / product;
-                        keep_literals = mask == 0;
+                        unit_tolerance = product_tolerance;
+                        // The numbers stay with the term: where its sides meet, a rounded
+                        // factor (14.5 for 14.5038) is weighed with its printed digits.
+                        keep_literals = true;
+                        found = true;
                         break;
                     }
+                }
+                if (multiplied_reading && !found) {
+                    // No conversion lands the zero: read every number as one, so that the sum
+                    // is the reading moved by a difference and its zero is compared as such.
+                    double product = 1.0;
+                    for (const auto& l : lits) {
+                        product *= std::pow(l.value, l.exponent);
+                        unit_tolerance += l.tolerance * std::abs(l.exponent);
+                    }
+                    unit = term.type.scale / product;
                 }
             }
         } else {
@@ -1029,7 +1056,7 @@ class checker {
         bool shifted_to_a_zero = false;
         if (has_shift) {
             double tol = 0.0;
-            const double o = shifted(unit, &tol);
+            const double o = shifted(unit, unit_tolerance, &tol);
             // A number that does not land the zero on a scale is a difference (T + 5).
             if (recognised_origin(o, tol, result.dim, terms)) {
                 final_origin = o;
