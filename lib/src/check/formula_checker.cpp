@@ -109,6 +109,9 @@ struct operand {
     std::uint32_t node;
     bool subtracted = false; // a term after '-'
 };
+// A long sum keeps one operand per term: its size is most of the memory such a line takes.
+static_assert(sizeof(typed_term) <= 112 && sizeof(operand) <= 120,
+              "the flags are meant to fill the optional values' spare bytes");
 
 struct dimension_hash {
     std::size_t operator()(const compact_dimension& d) const noexcept { return d.hash(); }
@@ -1328,7 +1331,7 @@ class checker {
     // in the formula supply that conversion, the right way round. `unit` receives the SI value
     // of the unit they agree in. False when a finding was reported.
     bool check_scales(std::span<const operand> ops, std::string_view what, double& unit,
-                      std::optional<rational>* exact_unit = nullptr) {
+                      optional_rational* exact_unit = nullptr) {
         if (exact_unit != nullptr)
             exact_unit->reset();
         // Fast path: nearly every meeting point has one unit and no numbers to weigh. Where

@@ -5,6 +5,7 @@
 #pragma once
 
 #include "check/scale_match.hpp"
+#include "check/typed_term.hpp"
 #include "plumb/rational.hpp"
 
 #include <optional>
@@ -13,9 +14,9 @@
 namespace plumb {
 
 struct number_reading {
-    std::optional<rational> value; // exact, when it fits 64-bit fractions
-    bool zero = false;             // the literal 0, which has no reading as a factor
-    scale_literal literal;         // its node is 0: the caller sets where it stands
+    optional_rational value; // exact, when it fits 64-bit fractions; copied into a term as is
+    bool zero = false;       // the literal 0, which has no reading as a factor
+    scale_literal literal;   // its node is 0: the caller sets where it stands
 };
 
 // The reading of `written` (digits, point, exponent as the grammar accepts them). The

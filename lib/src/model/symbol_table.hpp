@@ -7,6 +7,7 @@
 #include "units/compact_dimension.hpp"
 
 #include <cstdint>
+#include <cstring>
 #include <optional>
 #include <string_view>
 #include <vector>
@@ -44,7 +45,7 @@ struct symbol_entry {
 // map; names are views into source files that outlive the table.
 class symbol_table {
   public:
-    [[nodiscard]] symbol_entry* find(std::string_view name) {
+    [[nodiscard, gnu::always_inline]] symbol_entry* find(std::string_view name) {
         if (slots_.empty())
             return nullptr;
         for (std::size_t i = hash(name) & mask();; i = (i + 1) & mask()) {
@@ -110,23 +111,35 @@ class symbol_table {
         return true;
     }
 
-    // Names are short: their bytes are gathered eight at a time and mixed once per word,
-    // rather than once per byte.
-    static std::size_t hash(std::string_view s) {
+    // Up to eight bytes of `p` as one word, without reading past them: names are views into
+    // source text, so a load may not run over their end.
+    [[gnu::always_inline]] static std::uint64_t load_up_to_8(const char* p, std::size_t n) {
+        if (n >= 4) { // two overlapping 4-byte loads cover 4 to 8 bytes without a loop
+            std::uint32_t lo = 0;
+            std::uint32_t hi = 0;
+            std::memcpy(&lo, p, 4);
+            std::memcpy(&hi, p + n - 4, 4);
+            return lo | (static_cast<std::uint64_t>(hi) << 32);
+        }
+        std::uint64_t w = 0;
+        for (std::size_t i = 0; i < n; ++i)
+            w = (w << 8) | static_cast<unsigned char>(p[i]);
+        return w;
+    }
+
+    // Names are short: their bytes are read eight at a time and mixed once per word, rather
+    // than gathered one by one. Only where a name sits in the table depends on it.
+    [[gnu::always_inline]] static std::size_t hash(std::string_view s) {
         constexpr std::uint64_t mix = 0x9E3779B97F4A7C15ULL;
         std::uint64_t h = s.size() * mix;
-        std::uint64_t word = 0;
-        std::size_t in_word = 0;
-        for (const char c : s) {
-            word = (word << 8) | static_cast<unsigned char>(c);
-            if (++in_word == 8) {
-                h = (h ^ word) * mix;
-                h ^= h >> 32;
-                word = 0;
-                in_word = 0;
-            }
+        std::size_t i = 0;
+        for (; i + 8 <= s.size(); i += 8) {
+            std::uint64_t word = 0;
+            std::memcpy(&word, s.data() + i, 8);
+            h = (h ^ word) * mix;
+            h ^= h >> 32;
         }
-        h = (h ^ word) * mix;
+        h = (h ^ load_up_to_8(s.data() + i, s.size() - i)) * mix;
         h = (h ^ (h >> 32)) * mix; // every byte reaches the low bits the table uses
         return static_cast<std::size_t>(h ^ (h >> 29));
     }
