@@ -6,7 +6,10 @@
 #include <cstdint>
 #include <cstdlib>
 #include <cstring>
+#include <memory>
+#include <new>
 #include <string>
+#include <type_traits>
 
 namespace plumb {
 namespace {
@@ -26,16 +29,24 @@ number_reading compute(std::string_view written) {
 constexpr std::size_t max_key_length = 30;
 constexpr std::size_t slot_count = 1024;
 
+// Zero bytes are an empty slot (no number is written with no digits), so the memo can come
+// from calloc: fresh pages the first touch maps, one at a time. With default member values it
+// would sit in every thread's TLS image (about 150 KB), copied page by page at each start.
 struct slot {
-    std::array<char, max_key_length> key{};
-    std::uint8_t length = 0xFF; // 0xFF: empty
-    number_reading reading;
+    std::array<char, max_key_length> key;
+    std::uint8_t length; // 0: empty
+    alignas(number_reading) unsigned char reading[sizeof(number_reading)];
+};
+static_assert(std::is_trivially_destructible_v<number_reading>,
+              "a slot's reading is overwritten in place, never destroyed");
+
+struct free_slots {
+    void operator()(slot* p) const { std::free(p); }
 };
 
-struct memo {
-    std::array<slot, slot_count> slots;
-    number_reading uncached; // for texts too long to key a slot
-};
+number_reading& reading_in(slot& s) {
+    return *std::launder(reinterpret_cast<number_reading*>(s.reading));
+}
 
 std::size_t slot_of(std::string_view s) {
     std::uint64_t h = 1469598103934665603ULL; // FNV-1a over a few bytes
@@ -49,19 +60,27 @@ std::size_t slot_of(std::string_view s) {
 } // namespace
 
 const number_reading& read_number(std::string_view written) {
-    thread_local memo m;
-    if (written.size() > max_key_length) {
-        m.uncached = compute(written);
-        return m.uncached;
+    thread_local std::unique_ptr<slot[], free_slots> slots;
+    thread_local number_reading uncached; // for texts too long to key a slot
+    if (written.empty() || written.size() > max_key_length) {
+        uncached = compute(written);
+        return uncached;
     }
-    slot& s = m.slots[slot_of(written)];
+    if (!slots) {
+        slots.reset(static_cast<slot*>(std::calloc(slot_count, sizeof(slot))));
+        if (!slots) {
+            uncached = compute(written);
+            return uncached;
+        }
+    }
+    slot& s = slots[slot_of(written)];
     if (s.length != written.size() ||
         std::memcmp(s.key.data(), written.data(), written.size()) != 0) {
-        s.reading = compute(written);
+        new (s.reading) number_reading(compute(written));
         std::memcpy(s.key.data(), written.data(), written.size());
         s.length = static_cast<std::uint8_t>(written.size());
     }
-    return s.reading;
+    return reading_in(s);
 }
 
 } // namespace plumb
