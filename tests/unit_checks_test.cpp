@@ -253,3 +253,23 @@ TEST_CASE("offset scales: gauge to absolute with a rounded factor and the atmosp
         CHECK(findings(r, plumb::rules::offset_scale).size() == 1);
     }
 }
+
+// The "counts N times" factor takes in the numbers already written where they are part of a
+// clean conversion, so that following it fixes the formula: f = M·12/S with M in kip·ft and S
+// in in³ is in ksi, 1000 psi (NIST SP 811 (2008), B.8: kip = 1000 lbf, ft = 12 in); 3.03 hp
+// per psia·MMscfd (common practice) with the flow in scf/d is 10⁶ too much. Found by the review
+// set, which saw 1/12000 and 330000.
+TEST_CASE("unit scale: the factor in the message counts the numbers already written") {
+    const std::string decl = "f : psi\nM : kip*ft\nS : in^3\nP : hp\np_b : psia\nq : scf/d\n"
+                             "s : mm\na : m/s^2\nt : s\n";
+    const auto factor_of = [&](const std::string& formula) {
+        const auto r = plumb::check_text("counts.plumb", decl + formula + "\n");
+        const auto found = findings(r, plumb::rules::unit_scale);
+        REQUIRE(found.size() == 1);
+        return found[0]->message;
+    };
+    CHECK(factor_of("f = M*12/S").find("counts 0.001 times") != std::string::npos);
+    CHECK(factor_of("P = 3.03*p_b*q").find("counts 10⁶ times") != std::string::npos);
+    // A coefficient of physics stays out of it.
+    CHECK(factor_of("s = 0.5*a*t^2").find("counts 0.001 times") != std::string::npos);
+}

@@ -15,6 +15,7 @@
 
 #include <algorithm>
 #include <array>
+#include <bit>
 #include <cmath>
 #include <fmt/format.h>
 #include <limits>
@@ -1426,9 +1427,17 @@ class checker {
         const operand& op = ops[index[r.odd]];
         const operand& reference = ops[index[r.reference]];
         // What the numbers as written give: the conversion-like ones taken as conversions.
-        const double ratio = apparent_scale(parts[r.reference]) / apparent_scale(parts[r.odd]);
-        const std::optional<rational> exact_ratio = exact_product(
+        double ratio = apparent_scale(parts[r.reference]) / apparent_scale(parts[r.odd]);
+        std::optional<rational> exact_ratio = exact_product(
             apparent_exact_scale(parts[r.reference]), apparent_exact_scale(parts[r.odd]), true);
+        // "f = M*12/S" with M in kip·ft, S in in³ and f in psi: the 12 is no conversion by
+        // itself but part of one, and the units are off by 1000, not 12000. Where taking some
+        // of the other numbers in makes the ratio a clean power of ten, that is the ratio as
+        // written, so that following the message fixes the formula.
+        if (const auto clean = ratio_with_numbers(parts[r.reference], parts[r.odd], ratio)) {
+            ratio = *clean;
+            exact_ratio.reset();
+        }
         const std::optional<rational> exact_inverse = exact_product(rational(1), exact_ratio, true);
         // A warning: in a unit-aware calc the units convert themselves; where numbers are
         // put in as declared (spreadsheets, code), the result is off by the ratio.
@@ -1456,6 +1465,52 @@ class checker {
                                      quote(op.node), format_factor(exact_ratio, ratio)),
              {}});
         return false;
+    }
+
+    static bool near_power_of_ten(double v, double tolerance) {
+        if (!(v > 0) || !std::isfinite(v))
+            return false;
+        const double k = std::round(std::log10(v));
+        return k != 0.0 && std::abs(v / std::pow(10.0, k) - 1.0) <= tolerance + 1e-9;
+    }
+
+    std::optional<double> ratio_with_numbers(const scaled_operand& reference,
+                                             const scaled_operand& odd, double ratio) const {
+        if (near_power_of_ten(ratio, 0.0) || !(ratio > 0) || !std::isfinite(ratio))
+            return std::nullopt;
+        struct candidate {
+            double factor;
+            double tolerance;
+        };
+        std::array<candidate, 8> numbers{};
+        std::size_t count = 0;
+        for (const auto* part : {&odd, &reference})
+            for (const auto& l : part->literals) {
+                if (count == numbers.size() || looks_like_conversion(l, true) || !(l.value > 0))
+                    continue;
+                const double e = part == &odd ? l.exponent : -l.exponent;
+                numbers[count++] = {std::pow(l.value, e), l.tolerance * std::abs(e)};
+            }
+        // The fewest numbers first: each is more likely physics than part of a conversion.
+        std::optional<double> best;
+        int best_size = 9;
+        for (std::uint32_t mask = 1; mask < (1U << count); ++mask) {
+            const int size = std::popcount(mask);
+            if (size >= best_size)
+                continue;
+            double v = ratio;
+            double tolerance = 0.0;
+            for (std::size_t k = 0; k < count; ++k)
+                if ((mask >> k) & 1U) {
+                    v *= numbers[k].factor;
+                    tolerance += numbers[k].tolerance;
+                }
+            if (near_power_of_ten(v, tolerance)) {
+                best = std::pow(10.0, std::round(std::log10(v)));
+                best_size = size;
+            }
+        }
+        return best;
     }
 
     // "W = 8.34*Q*C" (lb/d from mgd and mg/L): not the conversion, 8.3454, but water's weight
