@@ -7,6 +7,7 @@
 #include <doctest/doctest.h>
 
 #include <algorithm>
+#include <initializer_list>
 #include <string>
 
 namespace {
@@ -25,6 +26,26 @@ std::size_t problems(const plumb::check_report& r) {
 
 plumb::check_report run(const std::string& text) {
     return plumb::check_text("g.plumb", text);
+}
+
+// The message of the report's first finding under `rule`; fails the test when there is none.
+std::string message_of(const plumb::check_report& r, std::string_view rule) {
+    const auto found = std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
+                                    [&](const auto& d) { return d.rule == rule; });
+    REQUIRE(found != r.diagnostics.end());
+    return found->message;
+}
+
+// Each formula, after the declarations, passes with exactly one note under `rule`: the number
+// read for the quantity it carries.
+void passes_with_one_note(const std::string& declarations,
+                          std::initializer_list<const char*> formulas, std::string_view rule) {
+    for (const char* formula : formulas) {
+        CAPTURE(formula);
+        const auto r = run(declarations + formula + "\n");
+        CHECK(problems(r) == 0);
+        CHECK(count(r, rule) == 1);
+    }
 }
 
 const std::string hydrostatic = "ρ : kg/m^3\nh : m\np : Pa\np_k : kPa\nV : m/s\n";
@@ -46,14 +67,10 @@ TEST_CASE("half a unit in the last printed digit") {
 // p = ρ g h with g_n = 9.80665 m/s² (3rd CGPM, 1901; SI Brochure 9th ed.); 9.81 and 9.8 are
 // its usual roundings (common practice).
 TEST_CASE("gravity as a number: ρ*9.81*h is a pressure, with a note") {
-    for (const char* formula :
-         {"p = ρ*9.81*h", "p = ρ*9.8*h", "p = 9.807*ρ*h", "p_k = ρ*9.81*h/1000",
-          "h = p_k*1000/(ρ*9.81)", "h = p/(ρ*9.81)", "V = sqrt(2*9.81*h)"}) {
-        CAPTURE(formula);
-        const auto r = run(hydrostatic + formula + "\n");
-        CHECK(problems(r) == 0);
-        CHECK(count(r, plumb::rules::gravity_number) == 1);
-    }
+    passes_with_one_note(hydrostatic,
+                         {"p = ρ*9.81*h", "p = ρ*9.8*h", "p = 9.807*ρ*h", "p_k = ρ*9.81*h/1000",
+                          "h = p_k*1000/(ρ*9.81)", "h = p/(ρ*9.81)", "V = sqrt(2*9.81*h)"},
+                         plumb::rules::gravity_number);
 }
 
 TEST_CASE("gravity as a number: a missing g and the wrong numbers are still errors") {
@@ -86,10 +103,7 @@ TEST_CASE("gravity as a number: 0.052 psi/ft per ppg in a mud hydrostatic") {
     const auto right = run(well + "p_h = 0.052*MW*TVD\n");
     CHECK(problems(right) == 0);
     REQUIRE(count(right, plumb::rules::gravity_number) == 1);
-    const auto note =
-        std::find_if(right.diagnostics.begin(), right.diagnostics.end(),
-                     [](const auto& d) { return d.rule == plumb::rules::gravity_number; });
-    CHECK(note->message.find("0.051948") != std::string::npos);
+    CHECK(message_of(right, plumb::rules::gravity_number).find("0.051948") != std::string::npos);
     // Depth in metres with the feet factor: 0.052 is not g in those units.
     CHECK(problems(run(well + "p_h = 0.052*MW*TVD_m\n")) == 1);
     // Gauge wellhead plus the column plus the atmosphere is absolute; without it, it is not.
@@ -136,23 +150,16 @@ TEST_CASE("water's specific weight as a number: pump power and pressure head pas
     const std::string pump = "Q_gpm : gal/min\nH_ft : ft\nSG : 1\nη : 1\nP_hp : hp\n"
                              "p_psi : psi\nh_ft : ft\nQ_m3h : m^3/h\nH_m : m\nP_kW : kW\n"
                              "p_kPa : kPa\nh_m : m\np_Pa : Pa\np_psf : lbf/ft^2\n";
-    for (const char* formula :
-         {"P_hp = Q_gpm*H_ft*SG/(3960*η)", "P_kW = Q_m3h*H_m*SG/(367*η)", "p_psi = 0.433*h_ft*SG",
-          "h_ft = 2.31*p_psi/SG", "p_kPa = 9.81*h_m*SG", "p_Pa = 9810*h_m", "p_psf = 62.4*h_ft",
-          "p_kPa = 9.79*h_m"}) {
-        CAPTURE(formula);
-        const auto r = run(pump + formula + "\n");
-        CHECK(problems(r) == 0);
-        CHECK(count(r, plumb::rules::gravity_number) == 1);
-    }
+    passes_with_one_note(pump,
+                         {"P_hp = Q_gpm*H_ft*SG/(3960*η)", "P_kW = Q_m3h*H_m*SG/(367*η)",
+                          "p_psi = 0.433*h_ft*SG", "h_ft = 2.31*p_psi/SG", "p_kPa = 9.81*h_m*SG",
+                          "p_Pa = 9810*h_m", "p_psf = 62.4*h_ft", "p_kPa = 9.79*h_m"},
+                         plumb::rules::gravity_number);
     SUBCASE("the note names the water and the range") {
-        const auto r = run(pump + "h_ft = 2.31*p_psi/SG\n");
-        const auto note =
-            std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
-                         [](const auto& d) { return d.rule == plumb::rules::gravity_number; });
-        REQUIRE(note != r.diagnostics.end());
-        CHECK(note->message.find("one over the specific weight of water") != std::string::npos);
-        CHECK(note->message.find("2.307 to 2.317") != std::string::npos);
+        const std::string note =
+            message_of(run(pump + "h_ft = 2.31*p_psi/SG\n"), plumb::rules::gravity_number);
+        CHECK(note.find("one over the specific weight of water") != std::string::npos);
+        CHECK(note.find("2.307 to 2.317") != std::string::npos);
     }
     SUBCASE("the mistakes are still found") {
         // A missing g: 1000 kg/m³ times a head is not a pressure.
@@ -164,10 +171,8 @@ TEST_CASE("water's specific weight as a number: pump power and pressure head pas
         const auto upside = run(pump + "P_hp = Q_gpm*H_ft*SG*3960/η\n");
         CHECK(problems(upside) == 1);
         REQUIRE(count(upside, plumb::rules::unit_scale) == 1);
-        const auto named =
-            std::find_if(upside.diagnostics.begin(), upside.diagnostics.end(),
-                         [](const auto& d) { return d.rule == plumb::rules::unit_scale; });
-        CHECK(named->message.find("3960 is the wrong way round") != std::string::npos);
+        CHECK(message_of(upside, plumb::rules::unit_scale).find("3960 is the wrong way round") !=
+              std::string::npos);
         CHECK(problems(run(pump + "h_ft = p_psi/(2.31*SG)\n")) == 1);
         CHECK(problems(run(pump + "P_kW = Q_m3h*H_m*SG*367/η\n")) == 1);
         // A bare number in a sum is read when it is the whole quantity: the buoyant unit weight
@@ -222,13 +227,10 @@ TEST_CASE("heat capacity of a volume as a number: the trade's 1.08 and 500") {
     CHECK(500.0 * btu_per_h / per_gpm_degree_f == doctest::Approx(4180.7e3).epsilon(1e-3));
     const std::string hvac = "Q : Btu/h\ncfm : ft^3/min\ngpm : gal/min\nq : L/s\n"
                              "ΔT : Δ°F\nΔT_K : K\nP : W\nT_1, T_2 : °F\n";
-    for (const char* formula : {"Q = 1.08*cfm*ΔT", "Q = 500*gpm*ΔT", "P = 1.2*q*ΔT_K",
-                                "P = 4190*q*ΔT_K", "Q = 1.1*cfm*(T_1 - T_2)"}) {
-        CAPTURE(formula);
-        const auto r = run(hvac + formula + "\n");
-        CHECK(problems(r) == 0);
-        CHECK(count(r, plumb::rules::trade_constant) == 1);
-    }
+    passes_with_one_note(hvac,
+                         {"Q = 1.08*cfm*ΔT", "Q = 500*gpm*ΔT", "P = 1.2*q*ΔT_K", "P = 4190*q*ΔT_K",
+                          "Q = 1.1*cfm*(T_1 - T_2)"},
+                         plumb::rules::trade_constant);
     // Air's number on water, water's on air, litres per second with the cfm number, and a
     // number that is no heat capacity: each stays an error.
     for (const char* formula : {"Q = 1.08*gpm*ΔT", "Q = 500*cfm*ΔT", "Q = 1.08*q*ΔT",
@@ -249,13 +251,8 @@ TEST_CASE("molar volume as a number: ppm conversions") {
     CHECK(at_68_f / 0.028316846592 * 453.59237 == doctest::Approx(385.3).epsilon(5e-4));
     const std::string air = "C : ppm\nM : g/mol\nc : mg/m^3\nQ_s : ft^3/min\nE : lb/h\n"
                             "E_k : kg/h\nQ_n : m^3/h\n";
-    for (const char* formula :
-         {"c = C*M/24.45", "E = C*M*Q_s*60/385.3e6", "E_k = C*M*Q_n/22.4/1e6"}) {
-        CAPTURE(formula);
-        const auto r = run(air + formula + "\n");
-        CHECK(problems(r) == 0);
-        CHECK(count(r, plumb::rules::trade_constant) == 1);
-    }
+    passes_with_one_note(air, {"c = C*M/24.45", "E = C*M*Q_s*60/385.3e6", "E_k = C*M*Q_n/22.4/1e6"},
+                         plumb::rules::trade_constant);
     // Upside down; the metric number with feet and pounds; an hour's 3600 the units do not
     // need beside the 10⁶ they do.
     CHECK(count(run(air + "c = C*M*24.45\n"), plumb::rules::unit_scale) == 1);
@@ -279,13 +276,8 @@ TEST_CASE("water's density as a number: 8.34 lb/gal, 62.4 lb/ft³, 1000 kg/m³")
     CHECK(62.4 * 0.45359237 / 0.028316846592 == doctest::Approx(999.6).epsilon(1e-3));
     const std::string water = "W : lb\nV_g : gal\nV_f : ft^3\nm : kg\nV : m^3\nSG : 1\n"
                               "W_d : lb/d\nq : gal/d\n";
-    for (const char* formula :
-         {"V_g = W/8.34", "V_f = W/62.4", "m = 1000*V", "q = W_d/(8.34*SG)"}) {
-        CAPTURE(formula);
-        const auto r = run(water + formula + "\n");
-        CHECK(problems(r) == 0);
-        CHECK(count(r, plumb::rules::trade_constant) == 1);
-    }
+    passes_with_one_note(water, {"V_g = W/8.34", "V_f = W/62.4", "m = 1000*V", "q = W_d/(8.34*SG)"},
+                         plumb::rules::trade_constant);
     // A missing density, the number upside down, and a density 10 % off stay errors.
     for (const char* formula : {"m = V", "V_g = W*8.34", "m = 900*V"}) {
         CAPTURE(formula);
