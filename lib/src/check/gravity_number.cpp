@@ -21,8 +21,8 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<gravity_quantity, 6>& quantities() {
-    static const std::array<gravity_quantity, 6> table = [] {
+const std::array<carried_quantity, 6>& quantities() {
+    static const std::array<carried_quantity, 6> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -52,7 +52,7 @@ const std::array<gravity_quantity, 6>& quantities() {
         const double molar_volume_least = 8.314462618 * 273.15 / 101325.0;
         const double molar_volume_greatest = 8.314462618 * 298.15 / 101325.0;
         const dimension amount = dimension::base(base_dimension::amount);
-        return std::array<gravity_quantity, 6>{{
+        return std::array<carried_quantity, 6>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -124,14 +124,14 @@ std::string shown(double v) {
 } // namespace
 
 bool lacks_gravity_number(const dimension& lacking, double exponent) {
-    for (const gravity_quantity& q : quantities())
+    for (const carried_quantity& q : quantities())
         if (is_power_of(lacking, q.dim, exponent) || is_power_of(lacking, q.dim, -exponent))
             return true;
     return false;
 }
 
 std::string gravity_message(std::string_view written, const gravity_reading& r) {
-    const gravity_quantity& q = *r.quantity;
+    const carried_quantity& q = *r.quantity;
     if (!r.reciprocal && q.least == q.greatest && std::abs(r.stands_for - q.least) < 1e-9)
         return fmt::format("'{}' is read as {}, {}", written, q.what, q.symbol);
     const std::string value = r.least == r.greatest
@@ -191,7 +191,7 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
         if (!(number.value > 0) || x == 0.0)
             continue;
         const double half_unit = half_unit_in_last_digit(texts[at]);
-        for (const gravity_quantity& q : quantities()) {
+        for (const carried_quantity& q : quantities()) {
             for (const bool reciprocal : {false, true}) {
                 if (!is_power_of(lacking, q.dim, reciprocal ? -x : x))
                     continue;

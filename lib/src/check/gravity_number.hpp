@@ -1,7 +1,8 @@
-// "ρ*9.81*h", "0.052*MW*TVD", "p/(ρ*32.2)", "0.433*h_ft", "Q*H/(3960*η)": numbers that carry
-// gravity. Engineers write g, and water's specific weight γ_w = ρ_w·g, as numbers in their own
-// units far more often than as symbols; a term that lacks exactly such a quantity, and holds it
-// as a number in the units around it, is read that way.
+// "ρ*9.81*h", "0.052*MW*TVD", "0.433*h_ft", "Q*H/(3960*η)", "1.08*cfm*ΔT", "C*M/24.45":
+// numbers that carry a physical quantity, gravity most often. Engineers write g, water's
+// specific weight and density, a volume's heat capacity and a gas's molar volume as numbers in
+// their own units far more often than as symbols; a term that lacks exactly such a quantity,
+// and holds it as a number in the units around it, is read that way.
 #pragma once
 
 #include "check/scale_match.hpp"
@@ -18,7 +19,7 @@ namespace plumb {
 // roundings stand for: g_n exactly, ρ_w and γ_w over water's densities between 0 and 30 °C, the
 // volumetric heat capacities ρ·c_p of water and air inside the HVAC trade's 500 and 1.08, and
 // an ideal gas's molar volume in the air trade's ppm conversions (24.45, 385.3).
-struct gravity_quantity {
+struct carried_quantity {
     std::string_view rule;       // gravity-number, or trade-constant for the heat capacities
     std::string_view what;       // "standard gravity"
     std::string_view symbol;     // "g_n = 9.80665 m/s²"
@@ -33,7 +34,7 @@ struct gravity_quantity {
 
 struct gravity_reading {
     std::size_t literal = 0; // which of the term's numbers carries the quantity
-    const gravity_quantity* quantity = nullptr;
+    const carried_quantity* quantity = nullptr;
     bool reciprocal = false; // the number is one over the quantity (2.31 ft/psi, 3960)
     bool flipped = false;    // read only as if written the other way round: an error
     double stands_for = 0.0; // the quantity in the units around it: the value it rounds
