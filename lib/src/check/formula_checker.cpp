@@ -6,6 +6,7 @@
 #include "check/functions.hpp"
 #include "check/gravity_number.hpp"
 #include "check/number_reading.hpp"
+#include "check/reference_state.hpp"
 #include "check/scale_match.hpp"
 #include "check/trade_constants.hpp"
 #include "check/typed_term.hpp"
@@ -55,6 +56,11 @@ const compact_dimension& force_dimension() {
 }
 const compact_dimension& length_dimension() {
     static const compact_dimension d(dimension::base(base_dimension::length));
+    return d;
+}
+const compact_dimension& area_dimension() {
+    static const compact_dimension d(dimension::base(base_dimension::length) *
+                                     dimension::base(base_dimension::length));
     return d;
 }
 
@@ -116,6 +122,45 @@ static_assert(sizeof(typed_term) <= 112 && sizeof(operand) <= 120,
 
 struct dimension_hash {
     std::size_t operator()(const compact_dimension& d) const noexcept { return d.hash(); }
+};
+
+// The bare numbers and the absolute temperature and pressure readings among a product's
+// factors, each with the sign of its power (+1 multiplied, -1 divided), for
+// read_reference_states. A few of each are enough; a product is rarely longer.
+struct reference_state_pairs {
+    struct number {
+        std::uint32_t node;
+        int sign;
+        double value;
+    };
+    struct reading {
+        std::uint32_t node;
+        int sign;
+        compact_dimension dim;
+        double scale;
+        bool paired = false;
+    };
+    std::array<number, 2> numbers{};
+    std::array<reading, 2> readings{};
+    std::size_t number_count = 0;
+    std::size_t reading_count = 0;
+
+    void note(const typed_term& t, std::uint32_t node, int sign,
+              std::span<const scale_literal> literals) {
+        if (!t.known)
+            return;
+        if (t.numeric && t.literal_count == 1 && number_count < numbers.size()) {
+            const scale_literal& l = literals[t.literal_begin];
+            // 1 atm and 1 bar are no number to read: a ratio with 1 changes nothing.
+            if (l.value > 1.0 && l.exponent == sign)
+                numbers[number_count++] = {l.node, sign, l.value};
+        } else if (t.point && t.offset == nullptr && !t.numeric && t.zero_of == nullptr &&
+                   reading_count < readings.size() &&
+                   (t.dim == temperature_dimension() || t.dim == pressure_dimension())) {
+            readings[reading_count++] = {node, sign, t.dim, t.scale};
+        }
+    }
+    bool any() const { return number_count > 0 && reading_count > 0; }
 };
 
 struct agreement {
@@ -335,7 +380,7 @@ class checker {
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
         agreement a = find_agreement(sides);
-        if (!a.odd.empty() && read_gravity_numbers(base, a))
+        if (!a.odd.empty() && read_gravity_numbers_either_way(base, a))
             a = find_agreement(sides);
         const char* what = equation ? "equation" : "limit";
         if (a.odd.empty()) {
@@ -453,6 +498,31 @@ class checker {
         d.where = {file_.source, where};
         out_.push_back(std::move(d));
         return out_.back();
+    }
+
+    // As read_gravity_numbers, and where that fails because the number stands in the terms that
+    // make the majority ("0.433*h_s + p_t": one term each way, the first taken as reference),
+    // read them against the dimension of the first plain term that differs instead.
+    bool read_gravity_numbers_either_way(std::size_t base, const agreement& a) {
+        if (read_gravity_numbers(base, a))
+            return true;
+        const std::size_t count = operands_.size() - base;
+        agreement flipped;
+        for (const std::size_t i : a.odd) {
+            const typed_term& t = operands_[base + i].type;
+            if (t.known && !t.zero && !t.numeric && t.literal_count == 0) {
+                flipped.reference = t.dim;
+                break;
+            }
+        }
+        if (!flipped.reference)
+            return false;
+        for (std::size_t i = 0; i < count; ++i) {
+            const typed_term& t = operands_[base + i].type;
+            if (t.known && !t.zero && !(t.dim == *flipped.reference))
+                flipped.odd.push_back(i);
+        }
+        return read_gravity_numbers(base, flipped);
     }
 
     // Where the odd operands lack exactly an acceleration (or have one too many) and each holds
@@ -789,7 +859,7 @@ class checker {
         const scratch_region region(operands_, base);
         const std::span<const operand> terms = region.view();
         agreement a = find_agreement(terms, prefer_dimensionless);
-        if (!a.odd.empty() && !prefer_dimensionless && read_gravity_numbers(base, a))
+        if (!a.odd.empty() && !prefer_dimensionless && read_gravity_numbers_either_way(base, a))
             a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty()) {
             literals_.resize(literal_base);
@@ -1659,8 +1729,14 @@ class checker {
             const auto on_gauge = [](const operand& o) {
                 return o.type.offset != nullptr && o.type.offset->scale == unit_scale::gauge;
             };
-            if ((side.type.absolute_pressure_difference && on_gauge(*reference)) ||
-                (reference->type.absolute_pressure_difference && on_gauge(side)))
+            // "P_d = 2*S*t/D": a stress times the shape of a wall is a net pressure too.
+            const auto net_pressure = [&](const operand& o) {
+                return o.type.absolute_pressure_difference ||
+                       (!o.type.point && o.type.dim == pressure_dimension() &&
+                        pressure_scaled_by_shape(o.node, false));
+            };
+            if ((on_gauge(*reference) && net_pressure(side)) ||
+                (on_gauge(side) && net_pressure(*reference)))
                 continue;
             const operand& off = side.type.offset != nullptr ? side : *reference;
             const operand& other = &off == &side ? *reference : side;
@@ -1867,6 +1943,126 @@ class checker {
         return found.empty() ? std::string("T_ref") : found;
     }
 
+    // "V*273.15/T": each bare number of the product that stands for a standard reference
+    // temperature or pressure in the unit of an absolute reading it is in ratio with makes,
+    // with it, a pure ratio. The number is then a quantity, not a factor for the scale rules.
+    void read_reference_states(reference_state_pairs& pairs, typed_term& result) {
+        if (!result.known)
+            return;
+        for (std::size_t i = 0; i < pairs.number_count; ++i) {
+            const reference_state_pairs::number& number = pairs.numbers[i];
+            for (std::size_t k = 0; k < pairs.reading_count; ++k) {
+                reference_state_pairs::reading& reading = pairs.readings[k];
+                if (reading.paired || reading.sign == number.sign)
+                    continue;
+                const std::string_view written = text(file_.nodes[number.node].range);
+                const reference_state* state =
+                    read_reference_state(reading.dim, number.value, written, reading.scale);
+                if (state == nullptr)
+                    continue;
+                reading.paired = true;
+                try {
+                    result.dim = number.sign > 0 ? result.dim * reading.dim : result.dim / reading.dim;
+                } catch (const std::exception&) {
+                    result = unknown_type();
+                    return;
+                }
+                result.scale = number.sign > 0 ? result.scale * reading.scale
+                                                : result.scale / reading.scale;
+                result.exact_scale.reset();
+                result.value.reset();
+                result.numeric = false;
+                result.point = false;
+                result.origin = 0.0;
+                result.origin_tolerance = 0.0;
+                for (std::uint32_t l = result.literal_begin; l < literals_.size(); ++l) {
+                    scale_literal& literal = literals_[l];
+                    if (literal.node != number.node)
+                        continue;
+                    literal.value = 1.0;
+                    literal.tolerance = 0.0;
+                    literal.low = rational(1);
+                    literal.high = rational(1);
+                    literal.power_of_ten = false;
+                    literal.factor_like = false;
+                    literal.table_digits = false;
+                }
+                diagnostic& d = report(
+                    rules::trade_constant,
+                    fmt::format("'{}' is read as {} in the unit of {}, which it stands in ratio "
+                                "with",
+                                display_text(file_.nodes[number.node].range), state->what,
+                                quote(reading.node)),
+                    file_.nodes[number.node].range);
+                d.level = severity::note;
+                d.notes.push_back({fmt::format("the trades' choices: {}; the contract or permit "
+                                               "decides which",
+                                               state->choices),
+                                   {}});
+                d.notes.push_back({std::string(state->advice), {}});
+                break;
+            }
+        }
+    }
+
+    // Whether a product is a pressure scaled by the shape of a wall: every factor beside its
+    // pressures, looked at through parentheses, powers and sums, is a number, a pure ratio, a
+    // length or an area (p_g*D/(2*t), 2*S*t/D, p_g/SG), not the state of a gas (p_g*V_1/V_2,
+    // p_g*(T_2/T_1), ρ*R*T). Such a product is a net pressure across the wall, which a gauge
+    // reads. With a gauge pressure in it, any number of gauge pressures may stand; without,
+    // exactly one pressure of another kind (the allowable stress). Walked with a stack of its
+    // own, as a product may be nested a million deep.
+    bool pressure_scaled_by_shape(std::uint32_t product, bool with_gauge) const {
+        const syntax::expr_node& root = file_.nodes[product];
+        if (root.kind != expr_kind::multiply && root.kind != expr_kind::divide)
+            return false;
+        int other_pressures = 0;
+        bool shape = false;
+        std::vector<std::uint32_t> pending{product};
+        while (!pending.empty()) {
+            const syntax::expr_node& n = file_.nodes[pending.back()];
+            pending.pop_back();
+            switch (n.kind) {
+            case expr_kind::multiply:
+            case expr_kind::divide:
+            case expr_kind::add:
+            case expr_kind::subtract:
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+                break;
+            case expr_kind::group:
+            case expr_kind::negate:
+            case expr_kind::power: // (D/t)^2: the base decides
+                pending.push_back(n.lhs);
+                break;
+            case expr_kind::number:
+            case expr_kind::pi:
+                break;
+            case expr_kind::symbol: {
+                const symbol_entry* entry = symbols_.find(text(n.range));
+                if (entry == nullptr || !entry->checked_type || !entry->checked_type->known)
+                    return false;
+                const typed_term& t = *entry->checked_type;
+                if (t.dim == pressure_dimension()) {
+                    const bool gauge =
+                        t.offset != nullptr && t.offset->scale == unit_scale::gauge;
+                    if (gauge != with_gauge || (!gauge && ++other_pressures > 1))
+                        return false;
+                } else if (t.dim.is_dimensionless() || t.dim == length_dimension() ||
+                           t.dim == area_dimension()) {
+                    shape = true;
+                } else {
+                    return false;
+                }
+                break;
+            }
+            default:
+                return false;
+            }
+        }
+        return with_gauge || (other_pressures == 1 && shape);
+    }
+
     typed_term eval_product(std::uint32_t index) {
         const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
@@ -1883,9 +2079,11 @@ class checker {
             result.offset = nullptr;
         // A gauge pressure over a specific weight (p_g/(ρ*g)) is a head above the level where
         // the pressure is atmospheric, an ordinary length, and over an area (p_g*A) the net
-        // force where the atmosphere acts on the other face; any other product of a gauge
-        // pressure (p_g*V, p_g*M/(R*T), p_g*V_1/V_2) is an error, known only once the whole
-        // product is.
+        // force where the atmosphere acts on the other face. Scaled by lengths, areas and
+        // pure ratios (p_g*D/(2*t), p_g/SG, p_g*A_1/A_2) it is the net pressure carried by a
+        // wall, a stress. Any other product of a gauge pressure (p_g*V, p_g*M/(R*T),
+        // p_g*V_1/V_2, p_g*T_2/T_1) is a gas law or a pressure ratio, which needs absolute
+        // pressure: an error, known only once the whole product is.
         struct deferred_offset {
             std::uint32_t node;
             const unit_definition* unit;
@@ -1894,6 +2092,8 @@ class checker {
         std::optional<deferred_offset> gauge_in_product;
         // ρ*g*h: the pressure of a column, a difference a gauge may read (p_g = ρ*g*h).
         bool has_gravity = result.known && result.dim == acceleration_dimension();
+        reference_state_pairs pairs;
+        pairs.note(result, n, +1, literals_);
         // Spine nodes were pushed outermost first; the innermost applies first.
         for (std::size_t k = spine_.size(); k > spine_base; --k) {
             const syntax::expr_node& op = file_.nodes[spine_[k - 1]];
@@ -1946,6 +2146,7 @@ class checker {
             }
             result.inferred = result.inferred || t.inferred;
             has_gravity = has_gravity || (t.known && !divided && t.dim == acceleration_dimension());
+            pairs.note(t, op.rhs, divided ? -1 : +1, literals_);
             result.scale = divided ? result.scale / t.scale : result.scale * t.scale;
             // Most factors are in SI units: times or over exactly 1 leaves the scale as it is.
             if (!(t.exact_scale && *t.exact_scale == rational(1)))
@@ -1970,13 +2171,18 @@ class checker {
             }
         }
         spine_.resize(spine_base);
+        if (pairs.any())
+            read_reference_states(pairs, result);
         if (gauge_in_product) {
-            if (result.known &&
-                (result.dim == length_dimension() || result.dim == force_dimension())) {
+            const bool wall_stress = result.known && result.dim == pressure_dimension() &&
+                                     pressure_scaled_by_shape(index, true);
+            if (result.known && (result.dim == length_dimension() ||
+                                 result.dim == force_dimension() || wall_stress)) {
                 result.offset = nullptr;
                 result.point = false;
                 result.origin = 0.0;
                 result.origin_tolerance = 0.0;
+                result.absolute_pressure_difference = wall_stress;
             } else {
                 report_offset(gauge_in_product->node, *gauge_in_product->unit,
                               gauge_in_product->where);
@@ -2266,7 +2472,7 @@ class checker {
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
         agreement a = find_agreement(sides);
-        if (!a.odd.empty() && read_gravity_numbers(base, a))
+        if (!a.odd.empty() && read_gravity_numbers_either_way(base, a))
             a = find_agreement(sides);
         if (!a.odd.empty()) {
             diagnostic& d =

@@ -1,0 +1,30 @@
+// "V*273.15/T", "Q*(p/14.7)*(520/T)": a bare number in a ratio with an absolute temperature or
+// pressure, standing for the standard reference state the volume is corrected to. Gas
+// engineers write T_n and p_n as numbers in the reading's own unit far more often than as
+// symbols; such a pair is a pure ratio.
+#pragma once
+
+#include "units/compact_dimension.hpp"
+
+#include <string_view>
+
+namespace plumb {
+
+// A standard reference state quantity with the range of SI values the trades' choices span.
+struct reference_state {
+    std::string_view what;     // "a standard reference temperature"
+    std::string_view choices;  // "0 °C (273.15 K), 15 °C, 60 °F (519.67 °R), 20 °C or 25 °C"
+    std::string_view advice;   // how to say it outright in a .plumb file
+    compact_dimension dim;     // Θ or pressure
+    double least = 0.0;        // SI
+    double greatest = 0.0;     // SI
+};
+
+// The reference state that `written` (the number as printed, with value `value`) stands for
+// when it is in the same unit as a reading of dimension `dim` whose unit is `unit_scale` SI
+// per written unit; null when it stands for none. The number must round a value in the range
+// to its last printed digit, as the gravity readings must.
+const reference_state* read_reference_state(const compact_dimension& dim, double value,
+                                            std::string_view written, double unit_scale);
+
+} // namespace plumb

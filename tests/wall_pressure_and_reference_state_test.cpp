@@ -1,0 +1,155 @@
+// Gauge pressures scaled by the shape of a wall (Barlow, thin shells, p_g/SG), numbers that
+// stand for a standard reference temperature or pressure in a gas correction (V*273.15/T), and
+// a column's pressure written with its number first in a sum (0.433*h + p_top): the correct
+// forms pass, and the gas-law and missing-weight slips beside them are still errors.
+#include "plumb/check.hpp"
+#include "plumb/rules.hpp"
+
+#include <doctest/doctest.h>
+
+#include <algorithm>
+#include <initializer_list>
+#include <string>
+
+namespace {
+
+std::size_t count(const plumb::check_report& r, std::string_view rule) {
+    return static_cast<std::size_t>(std::count_if(r.diagnostics.begin(), r.diagnostics.end(),
+                                                  [&](const auto& d) { return d.rule == rule; }));
+}
+
+std::size_t problems(const plumb::check_report& r) {
+    return static_cast<std::size_t>(
+        std::count_if(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
+            return d.level != plumb::severity::note && d.rule != plumb::rules::unused;
+        }));
+}
+
+// The report's first finding under `rule`; fails the test when there is none.
+const plumb::diagnostic& first(const plumb::check_report& r, std::string_view rule) {
+    const auto found = std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
+                                    [&](const auto& d) { return d.rule == rule; });
+    REQUIRE(found != r.diagnostics.end());
+    return *found;
+}
+
+plumb::check_report run(const std::string& declarations, const char* formula) {
+    return plumb::check_text("w.plumb", declarations + formula + "\n");
+}
+
+void passes(const std::string& declarations, std::initializer_list<const char*> formulas,
+            std::size_t notes = 0) {
+    for (const char* formula : formulas) {
+        CAPTURE(formula);
+        const auto r = run(declarations, formula);
+        CHECK(problems(r) == 0);
+        CHECK(count(r, plumb::rules::trade_constant) + count(r, plumb::rules::gravity_number) ==
+              notes);
+    }
+}
+
+void fails_with(const std::string& declarations, std::initializer_list<const char*> formulas,
+                std::string_view rule) {
+    for (const char* formula : formulas) {
+        CAPTURE(formula);
+        const auto r = run(declarations, formula);
+        CHECK(count(r, rule) >= 1);
+    }
+}
+
+const std::string pipeline = "p_g, p_2g, P_d : psig\np_a, p_2a : psia\nS, σ : psi\nD, t, R : in\n"
+                         "A_1, A_2 : in^2\nV_1, V_2 : ft^3\nT_1, T_2 : °R\nE, SG : 1\n"
+                         "ρ_1, ρ_2 : lb/ft^3\nh : ft\n";
+
+} // namespace
+
+TEST_CASE("a gauge pressure scaled by the shape of a wall is a net pressure") {
+    // Barlow's formula σ = p·D/(2t) and its inverse P = 2·S·t/D take the internal gauge
+    // pressure, the difference across the wall (common practice; the design pressure of ASME
+    // B31.8, 841.1.1, is a gauge pressure, from memory); so does the thin-shell thickness
+    // t = P·R/(S·E − 0.6·P) (ASME BPVC VIII-1, UG-27, from memory), and a Lamé thick-wall
+    // stress with diameters squared (common practice).
+    passes(pipeline, {"@barlow σ = p_g*D/(2*t)", "@barlow-inverse P_d = 2*S*t/D",
+                  "@barlow-joint P_d = 2*S*t/D*E", "@shell t = P_d*R/(S*E - 0.6*P_d)",
+                  "@lame σ = p_g*(D^2 + t^2)/(D^2 - t^2)", "@intensifier p_2g = p_g*A_1/A_2"});
+    // 2.31 ft of water per psi, divided by the specific gravity (common practice).
+    passes(pipeline, {"@head h = 2.31*p_g/SG"}, 1);
+}
+
+TEST_CASE("a gauge pressure in a gas law or a pressure ratio is still an error") {
+    // Boyle's and Charles's laws and compression ratios need absolute pressure (common
+    // practice), with the ratio inside or outside parentheses and before or after the gauge.
+    fails_with(pipeline,
+               {"@boyle p_2g = p_g*V_1/V_2", "@boyle-paren p_2g = p_g*(V_1/V_2)",
+                "@boyle-first p_2g = V_1/V_2*p_g", "@charles p_2g = p_g*(T_2/T_1)",
+                "@density p_2g = p_g*ρ_2/ρ_1", "@ratio E = p_2g/p_g"},
+               plumb::rules::offset_scale);
+    // An absolute pressure, bare, scaled by a number or by a volume ratio, set equal to a gauge.
+    fails_with(pipeline,
+               {"@gauge-is-absolute p_g = p_a", "@gauge-is-scaled-absolute p_g = 0.9*p_a",
+                "@boyle-into-gauge p_2g = p_a*V_1/V_2"},
+               plumb::rules::offset_scale);
+    const auto r = run(pipeline, "@boyle p_2g = p_g*V_1/V_2");
+    REQUIRE(count(r, plumb::rules::offset_scale) == 1);
+    const std::string& message = first(r, plumb::rules::offset_scale).message;
+    CHECK(message.find("'p_g'") != std::string::npos);
+    CHECK(message.find("cannot be multiplied") != std::string::npos);
+}
+
+namespace {
+const std::string gas = "V_n, V : m^3\nT : K\np : kPa\nq_s, q_a : ft^3/min\np_f : psia\n"
+                        "p_fg : psig\nT_R : °R\nt_f : °F\nt_c : °C\nQ : W\nm : kg/s\n"
+                        "c_p : J/(kg*K)\n";
+} // namespace
+
+TEST_CASE("a number in ratio with an absolute reading is read as a standard reference state") {
+    // Normal volume at 0 °C = 273.15 K (SI Brochure 9th ed., 2.3.1) and 101.325 kPa (the
+    // standard atmosphere, 10th CGPM 1954); the US gas trade's 14.73 psia and 60 °F =
+    // 519.67 °R, or 14.7 and 520 rounded (common practice; °R = °F + 459.67, NIST SP 811
+    // (2008), 4.2.1.1).
+    passes(gas, {"@normal V_n = V*273.15/T", "@normal-first V_n = 273.15*V/T"}, 1);
+    passes(gas,
+           {"@normal-both V_n = V*(p/101.325)*(273.15/T)",
+            "@standard q_s = q_a*(p_f/14.73)*(519.67/T_R)",
+            "@standard-rounded q_s = q_a*(p_f/14.7)*(520/T_R)",
+            "@standard-fahrenheit q_s = q_a*(p_f/14.73)*(520/(t_f + 459.67))",
+            "@normal-celsius V_n = V*(p/101.325)*(273.15/(t_c + 273.15))"},
+           2);
+    const auto r = run(gas, "@normal V_n = V*273.15/T");
+    REQUIRE(count(r, plumb::rules::trade_constant) == 1);
+    const plumb::diagnostic& note = first(r, plumb::rules::trade_constant);
+    CHECK(note.message.find("'273.15' is read as a standard reference temperature") !=
+          std::string::npos);
+    CHECK(note.level == plumb::severity::note);
+}
+
+TEST_CASE("a reference number beside no absolute reading, or the wrong one, is not read") {
+    // 273.15 multiplying a heat capacity stands in ratio with no temperature reading.
+    fails_with(gas, {"@heat-with-273 Q = m*c_p*273.15"}, plumb::rules::side_mismatch);
+    // 460 °R is the offset between the scales, not a reference temperature (255.4 K).
+    fails_with(gas, {"@rankine-offset q_s = q_a*(p_f/14.7)*(460/T_R)"},
+               plumb::rules::side_mismatch);
+    // A reading on the °C or °F scale or a gauge pressure in the ratio: absolute ones needed.
+    fails_with(gas,
+               {"@celsius V_n = V*273.15/t_c", "@fahrenheit q_s = q_a*(p_f/14.73)*(520/t_f)",
+                "@gauge q_s = q_a*(p_fg/14.73)*(520/T_R)"},
+               plumb::rules::offset_scale);
+    // Multiplied where it should divide: the ratio then has a dimension.
+    fails_with(gas, {"@upside V_n = V*(p*101.325)*(273.15/T)"}, plumb::rules::side_mismatch);
+}
+
+namespace {
+const std::string column = "p_t, p_b : psig\nh, z : ft\np_k, p_kt : kPag\nh_m : m\n";
+} // namespace
+
+TEST_CASE("a column's pressure written with its number is read in either order of a sum") {
+    // p = p_top + γ_w·Δz with water's 0.433 psi/ft and 9.81 kN/m³ (common practice).
+    passes(column,
+           {"@column p_b = p_t + 0.433*h", "@column-first p_b = 0.433*h + p_t",
+            "@column-si p_k = 9.81*h_m + p_kt"},
+           1);
+    passes(column, {"@two-legs p_b = 0.433*h + 0.433*z + p_t"}, 2);
+    fails_with(column, {"@no-weight p_b = h + p_t", "@head-and-column p_b = 0.433*h + z + p_t"},
+               plumb::rules::sum_mismatch);
+    fails_with(column, {"@upside p_b = h/0.433 + p_t"}, plumb::rules::unit_scale);
+}
