@@ -58,8 +58,8 @@ void fails_with(const std::string& declarations, std::initializer_list<const cha
 }
 
 const std::string pipeline = "p_g, p_2g, P_d : psig\np_a, p_2a : psia\nS, σ : psi\nD, t, R : in\n"
-                         "A_1, A_2 : in^2\nV_1, V_2 : ft^3\nT_1, T_2 : °R\nE, SG : 1\n"
-                         "ρ_1, ρ_2 : lb/ft^3\nh : ft\n";
+                             "A_1, A_2 : in^2\nV_1, V_2 : ft^3\nT_1, T_2 : °R\nE, SG : 1\n"
+                             "ρ_1, ρ_2 : lb/ft^3\nh : ft\n";
 
 } // namespace
 
@@ -70,8 +70,8 @@ TEST_CASE("a gauge pressure scaled by the shape of a wall is a net pressure") {
     // t = P·R/(S·E − 0.6·P) (ASME BPVC VIII-1, UG-27, from memory), and a Lamé thick-wall
     // stress with diameters squared (common practice).
     passes(pipeline, {"@barlow σ = p_g*D/(2*t)", "@barlow-inverse P_d = 2*S*t/D",
-                  "@barlow-joint P_d = 2*S*t/D*E", "@shell t = P_d*R/(S*E - 0.6*P_d)",
-                  "@lame σ = p_g*(D^2 + t^2)/(D^2 - t^2)", "@intensifier p_2g = p_g*A_1/A_2"});
+                      "@barlow-joint P_d = 2*S*t/D*E", "@shell t = P_d*R/(S*E - 0.6*P_d)",
+                      "@lame σ = p_g*(D^2 + t^2)/(D^2 - t^2)", "@intensifier p_2g = p_g*A_1/A_2"});
     // 2.31 ft of water per psi, divided by the specific gravity (common practice).
     passes(pipeline, {"@head h = 2.31*p_g/SG"}, 1);
 }

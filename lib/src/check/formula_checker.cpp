@@ -1962,13 +1962,14 @@ class checker {
                     continue;
                 reading.paired = true;
                 try {
-                    result.dim = number.sign > 0 ? result.dim * reading.dim : result.dim / reading.dim;
+                    result.dim =
+                        number.sign > 0 ? result.dim * reading.dim : result.dim / reading.dim;
                 } catch (const std::exception&) {
                     result = unknown_type();
                     return;
                 }
-                result.scale = number.sign > 0 ? result.scale * reading.scale
-                                                : result.scale / reading.scale;
+                result.scale =
+                    number.sign > 0 ? result.scale * reading.scale : result.scale / reading.scale;
                 result.exact_scale.reset();
                 result.value.reset();
                 result.numeric = false;
@@ -2044,8 +2045,7 @@ class checker {
                     return false;
                 const typed_term& t = *entry->checked_type;
                 if (t.dim == pressure_dimension()) {
-                    const bool gauge =
-                        t.offset != nullptr && t.offset->scale == unit_scale::gauge;
+                    const bool gauge = t.offset != nullptr && t.offset->scale == unit_scale::gauge;
                     if (gauge != with_gauge || (!gauge && ++other_pressures > 1))
                         return false;
                 } else if (t.dim.is_dimensionless() || t.dim == length_dimension() ||

@@ -12,12 +12,12 @@ namespace plumb {
 
 // A standard reference state quantity with the range of SI values the trades' choices span.
 struct reference_state {
-    std::string_view what;     // "a standard reference temperature"
-    std::string_view choices;  // "0 °C (273.15 K), 15 °C, 60 °F (519.67 °R), 20 °C or 25 °C"
-    std::string_view advice;   // how to say it outright in a .plumb file
-    compact_dimension dim;     // Θ or pressure
-    double least = 0.0;        // SI
-    double greatest = 0.0;     // SI
+    std::string_view what;    // "a standard reference temperature"
+    std::string_view choices; // "0 °C (273.15 K), 15 °C, 60 °F (519.67 °R), 20 °C or 25 °C"
+    std::string_view advice;  // how to say it outright in a .plumb file
+    compact_dimension dim;    // Θ or pressure
+    double least = 0.0;       // SI
+    double greatest = 0.0;    // SI
 };
 
 // The reference state that `written` (the number as printed, with value `value`) stands for
