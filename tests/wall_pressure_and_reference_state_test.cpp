@@ -153,3 +153,39 @@ TEST_CASE("a column's pressure written with its number is read in either order o
                plumb::rules::sum_mismatch);
     fails_with(column, {"@upside p_b = h/0.433 + p_t"}, plumb::rules::unit_scale);
 }
+
+namespace {
+const std::string depth = "p_k : kPa\np_kg : kPag\np_a : psia\np_ag : psig\nρ : kg/m^3\n"
+                          "g : m/s^2\nh_m : m\nh_f : ft\n";
+} // namespace
+
+TEST_CASE("a column's pressure plus the atmosphere written as a number is absolute") {
+    // p_abs = p_atm + ρ·g·h, with the standard atmosphere 101.325 kPa (10th CGPM, 1954) or
+    // 14.7 psi, or 1 bar = 100 kPa, and water's 9.81 kN/m³ and 0.433 psi/ft (common practice).
+    passes(depth, {"@si p_k = ρ*g*h_m/1000 + 101.325", "@bar p_k = ρ*g*h_m/1000 + 100"}, 1);
+    passes(depth,
+           {"@metric p_k = 9.81*h_m + 101.325", "@metric-first p_k = 101.325 + 9.81*h_m",
+            "@us p_a = 0.433*h_f + 14.7"},
+           2);
+    const auto r = run(depth, "@metric p_k = 9.81*h_m + 101.325");
+    CHECK(first(r, plumb::rules::trade_constant)
+              .message.find("'101.325' is read as the "
+                            "atmospheric pressure") != std::string::npos);
+}
+
+TEST_CASE("the atmosphere added to a gauge reading, in the wrong unit or without a column") {
+    // A gauge reading does not include the atmosphere (common practice).
+    fails_with(depth, {"@gauge p_kg = 9.81*h_m + 101.325", "@gauge-us p_ag = 0.433*h_f + 14.7"},
+               plumb::rules::offset_scale);
+    fails_with(depth,
+               {"@pascals-beside-kilopascals p_k = ρ*g*h_m + 101.325",
+                "@feet-in-metric p_k = 9.81*h_f + 101.325",
+                "@kilopascals-in-psi p_a = 0.433*h_f + 101.325",
+                "@missing-weight p_k = h_m + 101.325", "@psi-in-kilopascals p_k = 9.81*h_m + 14.7",
+                "@subtracted p_a = 0.433*h_f - 14.7"},
+               plumb::rules::sum_mismatch);
+    // A failed reading leaves no note behind.
+    const auto r = run(depth, "@missing-weight p_k = h_m + 101.325");
+    CHECK(count(r, plumb::rules::trade_constant) == 0);
+    CHECK(count(r, plumb::rules::gravity_number) == 0);
+}

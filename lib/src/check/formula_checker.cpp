@@ -375,7 +375,14 @@ class checker {
             if (s.relation_before != syntax::relation_kind::none &&
                 s.relation_before != syntax::relation_kind::equal)
                 equation = false;
+            // A sum on the right of "p_abs = 9.81*h + 101.325" may need the left side's unit to
+            // read its numbers (read_column_and_atmosphere).
+            if (i > 0 && operands_[base].type.known && operands_[base].type.literal_count == 0) {
+                side_hint_ = operands_[base].type;
+                side_hint_node_ = s.root;
+            }
             operands_.push_back({eval(s.root), s.root});
+            side_hint_node_ = syntax::no_index;
         }
         const scratch_region region(operands_, base);
         const std::span<const operand> sides = region.view();
@@ -468,6 +475,9 @@ class checker {
     const syntax::formula* current_ = nullptr; // the formula being checked
     // The argument of ln, exp, sin...: in a sum there, the dimensionless terms are right.
     std::uint32_t prefer_dimensionless_ = syntax::no_index;
+    // The other side of the equation whose side is the sum at side_hint_node_.
+    typed_term side_hint_;
+    std::uint32_t side_hint_node_ = syntax::no_index;
 
     std::string_view text(span s) const { return file_.source->text(s); }
 
@@ -500,6 +510,117 @@ class checker {
         return out_.back();
     }
 
+    // "p_abs = 9.81*h + 101.325", "p_a = 0.433*h_ft + 14.7", "ρ*g*h/1000 + 101.325": a
+    // column's pressure plus the atmosphere written as a bare number, the absolute pressure at
+    // depth. The number is read as a standard reference pressure in the unit of the sum's
+    // pressure term, or of the equation's other side where no term of the sum is a pressure
+    // yet, and the column's number against that unit as the gravity readings are. Tried on
+    // short sums with one such number only, and undone unless every term then agrees.
+    bool read_column_and_atmosphere(std::size_t base, std::uint32_t sum_node) {
+        constexpr std::size_t most_terms = 16;
+        const std::size_t count = operands_.size() - base;
+        if (count > most_terms)
+            return false;
+        const compact_dimension& pressure = pressure_dimension();
+        double unit = std::numeric_limits<double>::quiet_NaN(); // SI per written value
+        for (std::size_t i = 0; i < count && !std::isfinite(unit); ++i) {
+            const typed_term& t = operands_[base + i].type;
+            if (!t.known || t.numeric || !(t.dim == pressure))
+                continue;
+            double u = t.scale;
+            for (std::uint32_t l = 0; l < t.literal_count; ++l)
+                u /= std::pow(literals_[t.literal_begin + l].value,
+                              literals_[t.literal_begin + l].exponent);
+            if (u > 0 && std::isfinite(u))
+                unit = u;
+        }
+        if (!std::isfinite(unit) && sum_node == side_hint_node_ && side_hint_.known &&
+            !side_hint_.numeric && side_hint_.dim == pressure)
+            unit = side_hint_.scale;
+        if (!(unit > 0) || !std::isfinite(unit))
+            return false;
+        std::size_t atmosphere = count;
+        for (std::size_t i = 0; i < count; ++i) {
+            const operand& op = operands_[base + i];
+            const typed_term& t = op.type;
+            if (op.subtracted || !t.known || !t.numeric || t.zero || t.literal_count != 1)
+                continue;
+            const scale_literal& l = literals_[t.literal_begin];
+            if (l.exponent != 1.0 ||
+                read_reference_state(pressure, l.value, text(file_.nodes[l.node].range), unit) ==
+                    nullptr)
+                continue;
+            if (atmosphere != count)
+                return false; // two atmospheres: no reading
+            atmosphere = i;
+        }
+        if (atmosphere == count)
+            return false;
+        // Kept to undo the readings.
+        std::array<operand, most_terms> saved_operands;
+        std::copy(operands_.begin() + static_cast<std::ptrdiff_t>(base), operands_.end(),
+                  saved_operands.begin());
+        std::uint32_t literal_from = static_cast<std::uint32_t>(literals_.size());
+        for (std::size_t i = 0; i < count; ++i)
+            literal_from = std::min(literal_from, operands_[base + i].type.literal_begin);
+        const std::vector<scale_literal> saved_literals(literals_.begin() + literal_from,
+                                                        literals_.end());
+        const std::size_t findings_before = out_.size();
+
+        typed_term& t = operands_[base + atmosphere].type;
+        scale_literal& number = literals_[t.literal_begin];
+        const std::uint32_t number_node = number.node;
+        const reference_state* state = read_reference_state(
+            pressure, number.value, text(file_.nodes[number_node].range), unit);
+        t.dim = pressure;
+        t.scale = unit;
+        t.exact_scale.reset();
+        t.numeric = false;
+        t.value.reset();
+        t.point = true; // the atmosphere is an absolute reading
+        t.origin = 0.0;
+        t.origin_tolerance = 0.0;
+        number.value = 1.0;
+        number.tolerance = 0.0;
+        number.low = rational(1);
+        number.high = rational(1);
+        number.power_of_ten = false;
+        number.factor_like = false;
+        number.table_digits = false;
+        const std::span<const operand> terms(operands_.data() + base, count);
+        agreement a = find_agreement(terms);
+        if (!a.odd.empty() || !a.reference || !(*a.reference == pressure)) {
+            agreement towards_pressure;
+            towards_pressure.reference = pressure;
+            for (std::size_t i = 0; i < count; ++i)
+                if (terms[i].type.known && !terms[i].type.zero && !(terms[i].type.dim == pressure))
+                    towards_pressure.odd.push_back(i);
+            read_gravity_numbers(base, towards_pressure, unit);
+            a = find_agreement(terms);
+        }
+        if (!a.odd.empty() || !a.reference || !(*a.reference == pressure)) {
+            std::copy(saved_operands.begin(), saved_operands.begin() + count,
+                      operands_.begin() + static_cast<std::ptrdiff_t>(base));
+            literals_.resize(literal_from);
+            literals_.insert(literals_.end(), saved_literals.begin(), saved_literals.end());
+            out_.erase(out_.begin() + static_cast<std::ptrdiff_t>(findings_before), out_.end());
+            return false;
+        }
+        diagnostic& d = report(
+            rules::trade_constant,
+            fmt::format("'{}' is read as the atmospheric pressure added to a column's pressure: "
+                        "{} in the units around it",
+                        display_text(file_.nodes[number_node].range), state->what),
+            file_.nodes[number_node].range);
+        d.level = severity::note;
+        d.notes.push_back(
+            {fmt::format("the trades' choices: {}; above sea level the atmosphere is less",
+                         state->choices),
+             {}});
+        d.notes.push_back({"declare it with its unit (p_atm : kPa = 101.325) to say so", {}});
+        return true;
+    }
+
     // As read_gravity_numbers, and where that fails because the number stands in the terms that
     // make the majority ("0.433*h_s + p_t": one term each way, the first taken as reference),
     // read them against the dimension of the first plain term that differs instead.
@@ -528,15 +649,15 @@ class checker {
     // Where the odd operands lack exactly an acceleration (or have one too many) and each holds
     // g_n written as a number in its own units, the number is read as g_n: the operand takes the
     // reference's dimension and the scale g_n gives it, and a note says which number was read so.
-    bool read_gravity_numbers(std::size_t base, const agreement& a) {
+    bool read_gravity_numbers(std::size_t base, const agreement& a,
+                              double reference_scale = std::numeric_limits<double>::quiet_NaN()) {
         if (!a.reference)
             return false;
         const std::size_t count = operands_.size() - base;
         const auto is_odd = [&](std::size_t i) {
             return std::find(a.odd.begin(), a.odd.end(), i) != a.odd.end();
         };
-        double reference_scale = std::numeric_limits<double>::quiet_NaN();
-        for (std::size_t i = 0; i < count; ++i) {
+        for (std::size_t i = 0; i < count && !std::isfinite(reference_scale); ++i) {
             const typed_term& t = operands_[base + i].type;
             if (!is_odd(i) && t.known && !t.zero && !t.numeric && t.dim == *a.reference &&
                 t.literal_count == 0 && std::isfinite(t.scale)) {
@@ -860,6 +981,8 @@ class checker {
         const std::span<const operand> terms = region.view();
         agreement a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty() && !prefer_dimensionless && read_gravity_numbers_either_way(base, a))
+            a = find_agreement(terms, prefer_dimensionless);
+        if (!a.odd.empty() && !prefer_dimensionless && read_column_and_atmosphere(base, index))
             a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty()) {
             literals_.resize(literal_base);
