@@ -58,6 +58,13 @@ const compact_dimension& length_dimension() {
     static const compact_dimension d(dimension::base(base_dimension::length));
     return d;
 }
+const compact_dimension& velocity_squared_dimension() {
+    static const compact_dimension d(dimension::base(base_dimension::length) *
+                                     dimension::base(base_dimension::length) /
+                                     dimension::base(base_dimension::time) /
+                                     dimension::base(base_dimension::time));
+    return d;
+}
 const compact_dimension& area_dimension() {
     static const compact_dimension d(dimension::base(base_dimension::length) *
                                      dimension::base(base_dimension::length));
@@ -475,6 +482,8 @@ class checker {
     const syntax::formula* current_ = nullptr; // the formula being checked
     // The argument of ln, exp, sin...: in a sum there, the dimensionless terms are right.
     std::uint32_t prefer_dimensionless_ = syntax::no_index;
+    // The argument of the square root being checked: sqrt(2*p_g/ρ) is a jet's velocity.
+    std::uint32_t square_root_argument_ = syntax::no_index;
     // The other side of the equation whose side is the sum at side_hint_node_.
     typed_term side_hint_;
     std::uint32_t side_hint_node_ = syntax::no_index;
@@ -1020,6 +1029,8 @@ class checker {
         }
         if (offset_term != nullptr)
             return finish_offset_sum(terms, result, literal_base, index);
+        if (result.dim.is_dimensionless())
+            adopt_numbers_in_scaled_unit(base);
         // After a unit-scale finding the scale is unknown (NaN), so it is not reported again
         // further up; the dimension stays known.
         double unit = 1.0;
@@ -1033,6 +1044,40 @@ class checker {
                 points += t.subtracted ? -1 : 1;
         result.point = points == 1;
         return result;
+    }
+
+    // "20.9 - O2" with O2 in %, "θ + 90" with θ in degrees: in a sum whose other terms are all
+    // in one scaled dimensionless unit, a bare number is a value in that unit, as engineers
+    // mean it. Where the terms are plain fractions ("1 - S/100") the number stays one too.
+    void adopt_numbers_in_scaled_unit(std::size_t base) {
+        double unit = std::numeric_limits<double>::quiet_NaN();
+        bool numbers = false;
+        for (std::size_t i = base; i < operands_.size(); ++i) {
+            const typed_term& t = operands_[i].type;
+            if (!t.known || t.zero)
+                continue;
+            if (t.numeric) {
+                numbers = true;
+                continue;
+            }
+            double u = t.scale;
+            for (std::uint32_t l = 0; l < t.literal_count; ++l)
+                u /= std::pow(literals_[t.literal_begin + l].value,
+                              literals_[t.literal_begin + l].exponent);
+            if (!(u > 0) || !std::isfinite(u))
+                return;
+            if (!std::isfinite(unit))
+                unit = u;
+            else if (std::abs(u / unit - 1.0) > 1e-9)
+                return; // terms in different units: the scale rule speaks
+        }
+        if (!numbers || !std::isfinite(unit) || std::abs(unit - 1.0) <= 1e-9)
+            return;
+        for (std::size_t i = base; i < operands_.size(); ++i) {
+            typed_term& t = operands_[i].type;
+            if (t.known && !t.zero && t.numeric)
+                t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
+        }
     }
 
     // In a sum with a value on an offset scale, a bare number is a value in that unit
@@ -2299,8 +2344,12 @@ class checker {
         if (gauge_in_product) {
             const bool wall_stress = result.known && result.dim == pressure_dimension() &&
                                      pressure_scaled_by_shape(index, true);
+            // sqrt(2*p_g/ρ): a gauge pressure over a density, under a square root, is the
+            // velocity of a jet into the atmosphere (Torricelli's and Bernoulli's).
+            const bool jet = result.known && index == square_root_argument_ &&
+                             result.dim == velocity_squared_dimension();
             if (result.known && (result.dim == length_dimension() ||
-                                 result.dim == force_dimension() || wall_stress)) {
+                                 result.dim == force_dimension() || wall_stress || jet)) {
                 result.offset = nullptr;
                 result.point = false;
                 result.origin = 0.0;
@@ -2418,13 +2467,19 @@ class checker {
         const std::size_t literal_start = literals_.size();
         // The arguments go on the scratch stack: no allocation per call.
         const std::size_t args_base = operands_.size();
+        const bool square_root = f != nullptr && f->rule == function_rule::root &&
+                                 f->power == rational(1, 2) && n.rhs == 1;
         for (std::uint32_t i = 0; i < n.rhs; ++i) {
             const std::uint32_t node = file_.call_args[n.lhs + i];
             const std::uint32_t saved = prefer_dimensionless_;
+            const std::uint32_t saved_root = square_root_argument_;
             if (wants_number)
                 prefer_dimensionless_ = node;
+            if (square_root)
+                square_root_argument_ = node;
             operands_.push_back({eval(node), node});
             prefer_dimensionless_ = saved;
+            square_root_argument_ = saved_root;
         }
         const scratch_region region(operands_, args_base);
         const std::span<const operand> args = region.view();
@@ -2492,7 +2547,10 @@ class checker {
             keep_first_argument_numbers(f->power.to_double());
             if (!args[0].type.known)
                 return unknown_type(args[0].type.inferred);
-            if (args[0].type.offset != nullptr && !args[0].type.reading_or_difference) {
+            // Q = K*sqrt(p_g): a gauge pressure under a square root is the difference that
+            // drives a discharge to the atmosphere, as in a sprinkler's or a nozzle's flow.
+            if (args[0].type.offset != nullptr && !args[0].type.reading_or_difference &&
+                !(square_root && args[0].type.offset->scale == unit_scale::gauge)) {
                 report_offset(args[0].node, *args[0].type.offset,
                               fmt::format("the argument of {}", f->name));
                 return unknown_type();

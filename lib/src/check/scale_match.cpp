@@ -77,6 +77,10 @@ const std::vector<unit_ratio>& unit_ratios() {
                 if (a.dim() == length) {
                     out.push_back({r * r, exact_power(exact, rational(2))});
                     out.push_back({r * r * r, exact_power(exact, rational(3))});
+                    // Manning's 1.486 = (m/ft)^(1/3): unit-bound formulas carry cube roots of
+                    // length ratios. Not square roots: √3 = 1.732 and √12 = 3.464 are
+                    // coefficients far more often than roots of yd/ft and ft/in.
+                    out.push_back({std::cbrt(r), std::nullopt});
                 }
             }
         std::sort(out.begin(), out.end(),
