@@ -59,10 +59,9 @@ const compact_dimension& length_dimension() {
     return d;
 }
 const compact_dimension& velocity_squared_dimension() {
-    static const compact_dimension d(dimension::base(base_dimension::length) *
-                                     dimension::base(base_dimension::length) /
-                                     dimension::base(base_dimension::time) /
-                                     dimension::base(base_dimension::time));
+    static const compact_dimension d(
+        dimension::base(base_dimension::length) * dimension::base(base_dimension::length) /
+        dimension::base(base_dimension::time) / dimension::base(base_dimension::time));
     return d;
 }
 const compact_dimension& area_dimension() {
@@ -1662,6 +1661,8 @@ class checker {
             }
         if (parts.size() <= max_operands_for_flips && accept_trade_constant(parts, unit))
             return true;
+        if (parts.size() <= max_operands_for_flips && accept_folded_coefficient(parts, unit))
+            return true;
         const operand& op = ops[index[r.odd]];
         const operand& reference = ops[index[r.reference]];
         // What the numbers as written give: the conversion-like ones taken as conversions.
@@ -1793,6 +1794,84 @@ class checker {
                     return true;
                 }
             }
+        return false;
+    }
+
+    // A conversion folded with a coefficient into one number: "π*D_mm^2/4e6" (4 × 10⁶ mm²/m²),
+    // "(D_mm/4000)" for R = D/4 in metres, "0.4085*Q/d^2" (4/π times gpm per in² in ft/s). A
+    // number that is one digit times a power of ten is tried as that power of ten, and any
+    // number as 4/π or π/4 times a conversion; where the units then reconcile, the rest is a
+    // dimensionless coefficient, as the formula means it.
+    bool accept_folded_coefficient(std::span<const scaled_operand> parts, double& unit) {
+        constexpr std::size_t most_numbers = 8;
+        std::array<scale_literal, most_numbers> changed_literals{};
+        std::vector<scaled_operand> changed;
+        // Whether the units reconcile with the k-th number of operand i replaced by `as`.
+        const auto reconciles_with = [&](std::size_t i, std::size_t k, const scale_literal& as) {
+            std::copy(parts[i].literals.begin(), parts[i].literals.end(), changed_literals.begin());
+            changed_literals[k] = as;
+            changed.assign(parts.begin(), parts.end());
+            changed[i].literals = {changed_literals.data(), parts[i].literals.size()};
+            const reconciliation r = reconcile(changed);
+            if (r.agree)
+                unit = r.unit;
+            return r.agree;
+        };
+        for (const bool circle_pass : {false, true}) {
+            for (std::size_t i = 0; i < parts.size(); ++i) {
+                if (parts[i].literals.size() > most_numbers)
+                    continue;
+                for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
+                    const scale_literal& l = parts[i].literals[k];
+                    if (!(l.value > 0) || !std::isfinite(l.value) || l.value == 1.0 ||
+                        file_.nodes[l.node].kind != expr_kind::number)
+                        continue;
+                    scale_literal as = l;
+                    if (!circle_pass) {
+                        const double power = std::floor(std::log10(l.value) + 1e-12);
+                        const double digit = l.value / std::pow(10.0, power);
+                        if (std::abs(power) < 2 || std::abs(power) > 18 ||
+                            std::abs(digit - std::round(digit)) > 1e-9 || digit < 2.0)
+                            continue;
+                        std::int64_t ten = 1;
+                        for (int p = 0; p < std::abs(static_cast<int>(power)); ++p)
+                            ten *= 10;
+                        as.value = std::pow(10.0, power);
+                        as.tolerance = 0.0;
+                        as.power_of_ten = true;
+                        as.power = static_cast<std::int8_t>(power);
+                        as.factor_like = true;
+                        as.table_digits = false;
+                        as.low = power > 0 ? rational(ten) : rational(1, ten);
+                        as.high = as.low;
+                        if (reconciles_with(i, k, as))
+                            return true;
+                        continue;
+                    }
+                    // Only numbers written to 3 or more digits, as folded factors are.
+                    if (!l.factor_like)
+                        continue;
+                    for (const double circle : {4.0 / std::numbers::pi, std::numbers::pi / 4.0}) {
+                        as.value = l.value / circle;
+                        as.low.reset();
+                        as.high.reset();
+                        as.power_of_ten = false;
+                        if (!reconciles_with(i, k, as))
+                            continue;
+                        diagnostic& d =
+                            report(rules::trade_constant,
+                                   fmt::format("{} is read as {} times the unit conversion {}: the "
+                                               "area of a circle folded into the factor",
+                                               text(file_.nodes[l.node].range),
+                                               circle > 1.0 ? "4/\u03C0" : "\u03C0/4",
+                                               format_factor(std::nullopt, as.value)),
+                                   file_.nodes[l.node].range);
+                        d.level = severity::note;
+                        return true;
+                    }
+                }
+            }
+        }
         return false;
     }
 

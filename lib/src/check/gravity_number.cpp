@@ -21,8 +21,8 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<carried_quantity, 6>& quantities() {
-    static const std::array<carried_quantity, 6> table = [] {
+const std::array<carried_quantity, 7>& quantities() {
+    static const std::array<carried_quantity, 7> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -52,7 +52,7 @@ const std::array<carried_quantity, 6>& quantities() {
         const double molar_volume_least = 8.314462618 * 273.15 / 101325.0;
         const double molar_volume_greatest = 8.314462618 * 298.15 / 101325.0;
         const dimension amount = dimension::base(base_dimension::amount);
-        return std::array<carried_quantity, 6>{{
+        return std::array<carried_quantity, 7>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -94,6 +94,16 @@ const std::array<carried_quantity, 6>& quantities() {
              "declare the standard molar volume with its unit (V_m : L/mol = 24.45) to say so",
              "write the molar volume in a cell that holds its unit to say so",
              length * length * length / amount, molar_volume_least, molar_volume_greatest},
+            // Water's latent heat of evaporation at 100 °C, 2256.4 kJ/kg (IAPWS-IF97 steam
+            // tables, from memory), and 970.3 Btu/lb "from and at 212 °F" (2256.9 kJ/kg, the
+            // boiler trade's, from memory): the 970, 2257 and 2260 of steam loads and the 34.5
+            // lb/h per boiler horsepower (33,475 Btu/h / 970.3 Btu/lb).
+            {rules::trade_constant, "the latent heat of evaporation of water at 100 \u00B0C",
+             "h_fg", "1/h_fg", " (2256 to 2257.5 kJ/kg at atmospheric pressure)",
+             "declare the latent heat with its unit (h_fg : kJ/kg = 2257) to say so; at a "
+             "steam pressure above atmospheric it is less",
+             "write the latent heat in a cell that holds its unit to say so",
+             length * length / (time * time), 2256.0e3, 2257.5e3},
         }};
     }();
     return table;

@@ -1,0 +1,126 @@
+// Numbers practitioners fold or write bare that an independent review set found misjudged: a
+// conversion folded with a coefficient (π*D_mm^2/4e6, 0.4085*Q/d^2), Manning's US constant in
+// an SI formula, a bare number beside % or degree terms, a gauge pressure under a square root,
+// and water's latent heat written as a number (970 Btu/lb, 34.5 lb/h per boiler horsepower).
+#include "plumb/check.hpp"
+#include "plumb/rules.hpp"
+
+#include <doctest/doctest.h>
+
+#include <algorithm>
+#include <initializer_list>
+#include <string>
+
+namespace {
+
+std::size_t count(const plumb::check_report& r, std::string_view rule) {
+    return static_cast<std::size_t>(std::count_if(r.diagnostics.begin(), r.diagnostics.end(),
+                                                  [&](const auto& d) { return d.rule == rule; }));
+}
+
+std::size_t problems(const plumb::check_report& r) {
+    return static_cast<std::size_t>(
+        std::count_if(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
+            return d.level != plumb::severity::note && d.rule != plumb::rules::unused;
+        }));
+}
+
+plumb::check_report run(const std::string& declarations, const char* formula) {
+    return plumb::check_text("f.plumb", declarations + formula + "\n");
+}
+
+const plumb::diagnostic& first(const plumb::check_report& r, std::string_view rule) {
+    const auto found = std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
+                                    [&](const auto& d) { return d.rule == rule; });
+    REQUIRE(found != r.diagnostics.end());
+    return *found;
+}
+
+void passes(const std::string& declarations, std::initializer_list<const char*> formulas) {
+    for (const char* formula : formulas) {
+        CAPTURE(formula);
+        CHECK(problems(run(declarations, formula)) == 0);
+    }
+}
+
+void fails_with(const std::string& declarations, std::initializer_list<const char*> formulas,
+                std::string_view rule) {
+    for (const char* formula : formulas) {
+        CAPTURE(formula);
+        CHECK(count(run(declarations, formula), rule) >= 1);
+    }
+}
+
+const std::string bores = "A_m : m^2\nD_mm : mm\nV_p : ft/s\nQ_g : gal/min\nd_in : in\n"
+                          "d_mm : mm\nV_m : m/s\nQ_l : L/min\nR_m : m\n";
+
+} // namespace
+
+TEST_CASE("a conversion folded with a coefficient into one number") {
+    // A = π·D²/4 with D in mm: 10⁶ mm² per m² (SI Brochure 9th ed., Table 7); V = Q/A with
+    // 1 US gal = 231 in³ (NIST SP 811 (2008), App. B), so 0.4085 = (4/π)·231/1728·144/60 ft/s
+    // per gpm/in², and 21.22 = (4/π)·10⁶/60000 m/s per (L/min)/mm² (common practice).
+    passes(bores, {"@bore A_m = π*D_mm^2/4e6", "@bore-split A_m = π*D_mm^2/4/1e6",
+                   "@radius R_m = D_mm/4000", "@velocity V_p = 0.4085*Q_g/d_in^2",
+                   "@velocity-si V_m = 21.22*Q_l/d_mm^2"});
+    const auto r = run(bores, "@velocity V_p = 0.4085*Q_g/d_in^2");
+    CHECK(first(r, plumb::rules::trade_constant).message.find("0.4085 is read as 4/\u03C0") !=
+          std::string::npos);
+    // The same numbers with the wrong unit beside them.
+    fails_with(bores,
+               {"@bore-thousand A_m = π*D_mm^2/4e3", "@velocity-mm V_p = 0.4085*Q_g/d_mm^2",
+                "@velocity-si-inches V_m = 21.22*Q_l/d_in^2", "@radius-inches R_m = d_in/4000"},
+               plumb::rules::unit_scale);
+}
+
+TEST_CASE("Manning's US constant is not needed in the SI form") {
+    // V = (k/n)·R^(2/3)·S^(1/2) with k = 1 in SI and 1.486 = (1 m / 0.3048 m)^(1/3) in US
+    // units (Chow, Open-Channel Hydraulics, 1959, 5-6, from memory; 1 ft = 0.3048 m, NIST SP
+    // 811 (2008), App. B).
+    const std::string manning = "V_m : m/s\nR_m : m\nV_f : ft/s\nR_f : ft\nn : s/m^(1/3)\nS : 1\n";
+    passes(manning, {"@si V_m = 1/n*R_m^(2/3)*S^(1/2)", "@us V_f = 1.486/n*R_f^(2/3)*S^(1/2)"});
+    const auto r = run(manning, "@si-with-us-constant V_m = 1.486/n*R_m^(2/3)*S^(1/2)");
+    CHECK(first(r, plumb::rules::unit_scale).message.find("the factor 1.486 is not needed") !=
+          std::string::npos);
+    // √3 and √12 stay coefficients: square roots of yd/ft and ft/in are not read as factors.
+    passes("P : W\nV : V\nI : A\nr : in\nd : in\n",
+           {"@three-phase P = 1.732*V*I", "@gyration r = d/3.464"});
+}
+
+TEST_CASE("a bare number beside terms in % or degrees is in their unit") {
+    // Excess air from dry flue-gas oxygen, EA = 100·O₂/(20.9 − O₂) in % (common practice).
+    const std::string percent = "O2, EA, S : %\nf : 1\nθ, φ : deg\n";
+    passes(percent, {"@excess-air EA = 100*O2/(20.9 - O2)", "@fraction f = (100 - S)/100",
+                     "@fraction-bare f = 1 - S/100", "@angle φ = θ + 90"});
+    fails_with(percent, {"@fraction-slip f = 1 - S", "@percent-of-fraction EA = 100 - f"},
+               plumb::rules::unit_scale);
+}
+
+TEST_CASE("a gauge pressure under a square root drives a discharge to the atmosphere") {
+    // Q = K·√p with p the gauge pressure at the sprinkler (NFPA 13, from memory); a jet's
+    // velocity √(2·p_g/ρ) (Bernoulli, common practice).
+    const std::string heads = "Q : gal/min\nK : gal/(min*psi^(1/2))\np_g : psig\np_k : kPag\n"
+                              "ρ : kg/m^3\nv : m/s\nT_c : °C\nu : m^2/s^2\n";
+    passes(heads, {"@k-factor Q = K*sqrt(p_g)", "@jet v = sqrt(2*p_k*1000/ρ)"});
+    fails_with(heads,
+               {"@celsius-root v = sqrt(T_c)", "@gauge-over-density u = 2*p_k*1000/ρ",
+                "@gauge-squared-root Q = K*sqrt(p_g^2)"},
+               plumb::rules::offset_scale);
+}
+
+TEST_CASE("water's latent heat written as a number") {
+    // h_fg of water at 100 °C: 2256.4 kJ/kg, 970.3 Btu/lb "from and at 212 °F" (steam tables,
+    // from memory); 1 boiler horsepower = 33,475 Btu/h (common practice), so 34.5 lb/h per bhp.
+    const std::string steam = "measure bhp = 33475 Btu/h \"boiler horsepower\"\nm : lb/h\n"
+                              "m_k : kg/s\nP_b : bhp\nQ : Btu/h\nQ_k : kW\n";
+    for (const char* formula : {"@from-and-at m = 34.5*P_b", "@condensing Q = 970*m",
+                                "@condensing-si Q_k = 2257*m_k", "@rounded Q_k = 2260*m_k"}) {
+        CAPTURE(formula);
+        const auto r = run(steam, formula);
+        CHECK(problems(r) == 0);
+        CHECK(first(r, plumb::rules::trade_constant).message.find("latent heat") !=
+              std::string::npos);
+    }
+    // 1000 Btu/lb is a rule of thumb 3 % off, not read; a missing latent heat is an error.
+    fails_with(steam, {"@thumb Q = 1000*m", "@missing Q = m"}, plumb::rules::side_mismatch);
+}
