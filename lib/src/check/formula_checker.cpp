@@ -8,6 +8,7 @@
 #include "check/number_reading.hpp"
 #include "check/scale_match.hpp"
 #include "check/trade_constants.hpp"
+#include "check/type_stack.hpp"
 #include "check/typed_term.hpp"
 #include "plumb/rules.hpp"
 #include "units/compact_dimension.hpp"
@@ -102,17 +103,15 @@ std::string describe(const compact_dimension& d) {
     return describe(d.expand());
 }
 
-// The operands of one meeting point (terms of a sum, arguments, sides of a formula).
-// The type first: the node and the flag then fill what would be padding after it (a long sum
-// keeps one of these per term).
+// The operands of one meeting point (terms of a sum, arguments, sides of a formula). The type
+// is held on the checker's type stack, shared among operands of one type: a long sum keeps
+// one of these per term, and its size is most of the memory such a line takes.
 struct operand {
-    typed_term type;
+    const typed_term& type;
     std::uint32_t node;
     bool subtracted = false; // a term after '-'
 };
-// A long sum keeps one operand per term: its size is most of the memory such a line takes.
-static_assert(sizeof(typed_term) <= 112 && sizeof(operand) <= 120,
-              "the flags are meant to fill the optional values' spare bytes");
+static_assert(sizeof(operand) <= 16, "a long sum keeps one operand per term");
 
 struct dimension_hash {
     std::size_t operator()(const compact_dimension& d) const noexcept { return d.hash(); }
@@ -189,6 +188,7 @@ agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless
 struct scratch_stacks {
     std::vector<std::uint32_t> spine;
     std::vector<operand> operands;
+    type_stack types; // of the operands
     std::vector<scale_literal> literals;
     std::vector<scaled_operand> scaled;
     std::vector<std::size_t> scaled_index; // which operand each scaled one stands for
@@ -199,13 +199,21 @@ scratch_stacks& scratch() {
     return stacks;
 }
 
-// The operands a caller pushed above `base` on a scratch stack, popped when it goes.
+// The operands a caller pushed above `base` on a scratch stack, and their types above
+// `types_base`, popped when it goes.
 class scratch_region {
   public:
-    scratch_region(std::vector<operand>& stack, std::size_t base) : stack_(stack), base_(base) {}
+    scratch_region(std::vector<operand>& stack, std::size_t base, type_stack& types,
+                   std::size_t types_base)
+        : stack_(stack), base_(base), types_(types), types_base_(types_base) {}
     scratch_region(const scratch_region&) = delete;
     scratch_region& operator=(const scratch_region&) = delete;
-    ~scratch_region() { stack_.resize(base_); }
+    ~scratch_region() {
+        // Not resize or erase: an operand holds a reference, so it cannot be assigned.
+        while (stack_.size() > base_)
+            stack_.pop_back();
+        types_.pop_to(types_base_);
+    }
     [[nodiscard]] std::span<const operand> view() const {
         return {stack_.data() + base_, stack_.size() - base_};
     }
@@ -213,6 +221,8 @@ class scratch_region {
   private:
     std::vector<operand>& stack_;
     std::size_t base_;
+    type_stack& types_;
+    std::size_t types_base_;
 };
 
 // Thrown out of a check that meets a name not declared yet, when the caller will retry.
@@ -223,13 +233,15 @@ class checker {
     checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out,
             bool defer_unknown = false)
         : file_(file), symbols_(symbols), out_(out), defer_unknown_(defer_unknown),
-          spine_(scratch().spine), operands_(scratch().operands), literals_(scratch().literals),
-          scaled_(scratch().scaled), scaled_index_(scratch().scaled_index) {
+          spine_(scratch().spine), operands_(scratch().operands), types_(scratch().types),
+          literals_(scratch().literals), scaled_(scratch().scaled),
+          scaled_index_(scratch().scaled_index) {
         // No dimension of an earlier check is alive: their spilled exponents may go.
         compact_dimension::reset_arena();
         // A check abandoned by an exception may have left its part behind.
         spine_.clear();
         operands_.clear();
+        types_.clear();
         literals_.clear();
         scaled_.clear();
         scaled_index_.clear();
@@ -324,15 +336,18 @@ class checker {
     void check_formula(const syntax::formula& f) {
         current_ = &f;
         const std::size_t base = operands_.size();
+        const std::size_t types_base = types_.size();
+        // Reserved once: a generated chain of many relations must not grow it by doubling.
+        operands_.reserve(base + f.side_count);
         bool equation = true;
         for (std::uint32_t i = 0; i < f.side_count; ++i) {
             const syntax::formula_side& s = file_.sides[f.first_side + i];
             if (s.relation_before != syntax::relation_kind::none &&
                 s.relation_before != syntax::relation_kind::equal)
                 equation = false;
-            operands_.push_back({eval(s.root), s.root});
+            operands_.push_back({push_type(eval(s.root), types_base, f.side_count), s.root});
         }
-        const scratch_region region(operands_, base);
+        const scratch_region region(operands_, base, types_, types_base);
         const std::span<const operand> sides = region.view();
         agreement a = find_agreement(sides);
         if (!a.odd.empty() && read_gravity_numbers(base, a))
@@ -417,6 +432,7 @@ class checker {
     // warm. Each user takes the part above the size it found and gives it back.
     std::vector<std::uint32_t>& spine_;
     std::vector<operand>& operands_;
+    type_stack& types_;
     std::vector<scale_literal>& literals_;
     std::vector<scaled_operand>& scaled_;
     std::vector<std::size_t>& scaled_index_;
@@ -425,6 +441,13 @@ class checker {
     std::uint32_t prefer_dimensionless_ = syntax::no_index;
 
     std::string_view text(span s) const { return file_.source->text(s); }
+
+    // An operand's type, on the type stack; shared with an equal one of the same meeting point
+    // where there are many, since looking for one costs more than a short one saves.
+    const typed_term& push_type(const typed_term& t, std::size_t region, std::size_t operands) {
+        constexpr std::size_t shared_from = 16;
+        return operands >= shared_from ? types_.push_shared(t, region) : types_.push(t);
+    }
 
     // 'text' for messages, shortened so one long term cannot swamp a line.
     std::string quote(std::uint32_t node) const {
@@ -517,7 +540,8 @@ class checker {
             readings[found_count++] = {i, *reading};
         }
         for (std::size_t r = 0; r < found_count; ++r) {
-            typed_term& t = operands_[base + readings[r].operand].type;
+            // Its own type: a term with numbers shares it with no other operand.
+            auto& t = const_cast<typed_term&>(operands_[base + readings[r].operand].type);
             scale_literal& number = literals_[t.literal_begin + readings[r].reading.literal];
             t.dim = *a.reference;
             t.scale = readings[r].reading.term_scale;
@@ -750,6 +774,7 @@ class checker {
         const std::size_t term_count = spine_.size() - spine_base + 1;
 
         const std::size_t base = operands_.size();
+        const std::size_t types_base = types_.size();
         // Reserved once: growing by doubling would leave the stack up to twice the size a long
         // sum needs, and briefly three times while it moves.
         operands_.reserve(base + term_count);
@@ -765,7 +790,7 @@ class checker {
             const std::uint32_t node = k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
-            operand term{eval(node), node, subtracted};
+            const operand term{push_type(eval(node), types_base, term_count), node, subtracted};
             const typed_term& t = term.type;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
@@ -786,7 +811,7 @@ class checker {
         spine_.resize(spine_base);
 
         const typed_term* offset_term = adopt_numbers_on_offset_scale(base);
-        const scratch_region region(operands_, base);
+        const scratch_region region(operands_, base, types_, types_base);
         const std::span<const operand> terms = region.view();
         agreement a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty() && !prefer_dimensionless && read_gravity_numbers(base, a))
@@ -857,7 +882,8 @@ class checker {
         if (offset_term == nullptr)
             return nullptr;
         for (std::size_t i = base; i < operands_.size(); ++i) {
-            typed_term& t = operands_[i].type;
+            // Shared only among operands of one type, which all change alike.
+            auto& t = const_cast<typed_term&>(operands_[i].type);
             if (t.numeric && t.value && !t.zero && t.dim.is_dimensionless()) {
                 t.dim = offset_term->dim;
                 t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
@@ -2089,15 +2115,16 @@ class checker {
         const std::size_t literal_start = literals_.size();
         // The arguments go on the scratch stack: no allocation per call.
         const std::size_t args_base = operands_.size();
+        const std::size_t types_base = types_.size();
         for (std::uint32_t i = 0; i < n.rhs; ++i) {
             const std::uint32_t node = file_.call_args[n.lhs + i];
             const std::uint32_t saved = prefer_dimensionless_;
             if (wants_number)
                 prefer_dimensionless_ = node;
-            operands_.push_back({eval(node), node});
+            operands_.push_back({types_.push(eval(node)), node});
             prefer_dimensionless_ = saved;
         }
-        const scratch_region region(operands_, args_base);
+        const scratch_region region(operands_, args_base, types_, types_base);
         const std::span<const operand> args = region.view();
         // Only a root or abs passes its argument's numbers on, as factors of the result.
         const auto keep_first_argument_numbers = [&](double power) {
@@ -2261,9 +2288,10 @@ class checker {
     // A comparison inside a formula (IF's condition): its sides agree as a limit's do.
     [[gnu::noinline]] typed_term eval_compare(const syntax::expr_node& n) {
         const std::size_t base = operands_.size();
-        operands_.push_back({eval(n.lhs), n.lhs});
-        operands_.push_back({eval(n.rhs), n.rhs});
-        const scratch_region region(operands_, base);
+        const std::size_t types_base = types_.size();
+        operands_.push_back({types_.push(eval(n.lhs)), n.lhs});
+        operands_.push_back({types_.push(eval(n.rhs)), n.rhs});
+        const scratch_region region(operands_, base, types_, types_base);
         const std::span<const operand> sides = region.view();
         agreement a = find_agreement(sides);
         if (!a.odd.empty() && read_gravity_numbers(base, a))
