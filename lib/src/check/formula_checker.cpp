@@ -44,11 +44,13 @@ const compact_dimension& pressure_dimension() {
     static const compact_dimension d(unit_table::standard().resolve("Pa")->dim());
     return d;
 }
+// Built at start-up, not on first use: every factor of every product is compared with it, and
+// a guarded local static cost a call each time.
+const compact_dimension acceleration = *compact_dimension::fitted(
+    dimension::base(base_dimension::length) / dimension::base(base_dimension::time) /
+    dimension::base(base_dimension::time));
 const compact_dimension& acceleration_dimension() {
-    static const compact_dimension d(dimension::base(base_dimension::length) /
-                                     dimension::base(base_dimension::time) /
-                                     dimension::base(base_dimension::time));
-    return d;
+    return acceleration;
 }
 const compact_dimension& force_dimension() {
     static const compact_dimension d(unit_table::standard().resolve("N")->dim());
