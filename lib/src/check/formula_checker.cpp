@@ -9,6 +9,7 @@
 #include "check/reference_state.hpp"
 #include "check/scale_match.hpp"
 #include "check/trade_constants.hpp"
+#include "check/type_stack.hpp"
 #include "check/typed_term.hpp"
 #include "plumb/rules.hpp"
 #include "units/compact_dimension.hpp"
@@ -44,11 +45,13 @@ const compact_dimension& pressure_dimension() {
     static const compact_dimension d(unit_table::standard().resolve("Pa")->dim());
     return d;
 }
+// Built at start-up, not on first use: every factor of every product is compared with it, and
+// a guarded local static cost a call each time.
+const compact_dimension acceleration = *compact_dimension::fitted(
+    dimension::base(base_dimension::length) / dimension::base(base_dimension::time) /
+    dimension::base(base_dimension::time));
 const compact_dimension& acceleration_dimension() {
-    static const compact_dimension d(dimension::base(base_dimension::length) /
-                                     dimension::base(base_dimension::time) /
-                                     dimension::base(base_dimension::time));
-    return d;
+    return acceleration;
 }
 const compact_dimension& force_dimension() {
     static const compact_dimension d(unit_table::standard().resolve("N")->dim());
@@ -114,17 +117,15 @@ std::string describe(const compact_dimension& d) {
     return describe(d.expand());
 }
 
-// The operands of one meeting point (terms of a sum, arguments, sides of a formula).
-// The type first: the node and the flag then fill what would be padding after it (a long sum
-// keeps one of these per term).
+// The operands of one meeting point (terms of a sum, arguments, sides of a formula). The type
+// is held on the checker's type stack, shared among operands of one type: a long sum keeps
+// one of these per term, and its size is most of the memory such a line takes.
 struct operand {
-    typed_term type;
+    const typed_term& type;
     std::uint32_t node;
     bool subtracted = false; // a term after '-'
 };
-// A long sum keeps one operand per term: its size is most of the memory such a line takes.
-static_assert(sizeof(typed_term) <= 112 && sizeof(operand) <= 120,
-              "the flags are meant to fill the optional values' spare bytes");
+static_assert(sizeof(operand) <= 16, "a long sum keeps one operand per term");
 
 struct dimension_hash {
     std::size_t operator()(const compact_dimension& d) const noexcept { return d.hash(); }
@@ -240,6 +241,7 @@ agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless
 struct scratch_stacks {
     std::vector<std::uint32_t> spine;
     std::vector<operand> operands;
+    type_stack types; // of the operands
     std::vector<scale_literal> literals;
     std::vector<scaled_operand> scaled;
     std::vector<std::size_t> scaled_index; // which operand each scaled one stands for
@@ -250,13 +252,21 @@ scratch_stacks& scratch() {
     return stacks;
 }
 
-// The operands a caller pushed above `base` on a scratch stack, popped when it goes.
+// The operands a caller pushed above `base` on a scratch stack, and their types above
+// `types_base`, popped when it goes.
 class scratch_region {
   public:
-    scratch_region(std::vector<operand>& stack, std::size_t base) : stack_(stack), base_(base) {}
+    scratch_region(std::vector<operand>& stack, std::size_t base, type_stack& types,
+                   std::size_t types_base)
+        : stack_(stack), base_(base), types_(types), types_base_(types_base) {}
     scratch_region(const scratch_region&) = delete;
     scratch_region& operator=(const scratch_region&) = delete;
-    ~scratch_region() { stack_.resize(base_); }
+    ~scratch_region() {
+        // Not resize or erase: an operand holds a reference, so it cannot be assigned.
+        while (stack_.size() > base_)
+            stack_.pop_back();
+        types_.pop_to(types_base_);
+    }
     [[nodiscard]] std::span<const operand> view() const {
         return {stack_.data() + base_, stack_.size() - base_};
     }
@@ -264,6 +274,8 @@ class scratch_region {
   private:
     std::vector<operand>& stack_;
     std::size_t base_;
+    type_stack& types_;
+    std::size_t types_base_;
 };
 
 // Thrown out of a check that meets a name not declared yet, when the caller will retry.
@@ -274,13 +286,15 @@ class checker {
     checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out,
             bool defer_unknown = false)
         : file_(file), symbols_(symbols), out_(out), defer_unknown_(defer_unknown),
-          spine_(scratch().spine), operands_(scratch().operands), literals_(scratch().literals),
-          scaled_(scratch().scaled), scaled_index_(scratch().scaled_index) {
+          spine_(scratch().spine), operands_(scratch().operands), types_(scratch().types),
+          literals_(scratch().literals), scaled_(scratch().scaled),
+          scaled_index_(scratch().scaled_index) {
         // No dimension of an earlier check is alive: their spilled exponents may go.
         compact_dimension::reset_arena();
         // A check abandoned by an exception may have left its part behind.
         spine_.clear();
         operands_.clear();
+        types_.clear();
         literals_.clear();
         scaled_.clear();
         scaled_index_.clear();
@@ -375,6 +389,9 @@ class checker {
     void check_formula(const syntax::formula& f) {
         current_ = &f;
         const std::size_t base = operands_.size();
+        const std::size_t types_base = types_.size();
+        // Reserved once: a generated chain of many relations must not grow it by doubling.
+        operands_.reserve(base + f.side_count);
         bool equation = true;
         for (std::uint32_t i = 0; i < f.side_count; ++i) {
             const syntax::formula_side& s = file_.sides[f.first_side + i];
@@ -387,10 +404,10 @@ class checker {
                 side_hint_ = operands_[base].type;
                 side_hint_node_ = s.root;
             }
-            operands_.push_back({eval(s.root), s.root});
+            operands_.push_back({push_type(eval(s.root), types_base, f.side_count), s.root});
             side_hint_node_ = syntax::no_index;
         }
-        const scratch_region region(operands_, base);
+        const scratch_region region(operands_, base, types_, types_base);
         const std::span<const operand> sides = region.view();
         agreement a = find_agreement(sides);
         if (!a.odd.empty() && read_gravity_numbers_either_way(base, a))
@@ -475,6 +492,7 @@ class checker {
     // warm. Each user takes the part above the size it found and gives it back.
     std::vector<std::uint32_t>& spine_;
     std::vector<operand>& operands_;
+    type_stack& types_;
     std::vector<scale_literal>& literals_;
     std::vector<scaled_operand>& scaled_;
     std::vector<std::size_t>& scaled_index_;
@@ -488,6 +506,13 @@ class checker {
     std::uint32_t side_hint_node_ = syntax::no_index;
 
     std::string_view text(span s) const { return file_.source->text(s); }
+
+    // An operand's type, on the type stack; shared with an equal one of the same meeting point
+    // where there are many, since looking for one costs more than a short one saves.
+    const typed_term& push_type(const typed_term& t, std::size_t region, std::size_t operands) {
+        constexpr std::size_t shared_from = 16;
+        return operands >= shared_from ? types_.push_shared(t, region) : types_.push(t);
+    }
 
     // 'text' for messages, shortened so one long term cannot swamp a line.
     std::string quote(std::uint32_t node) const {
@@ -525,7 +550,9 @@ class checker {
     // yet, and the column's number against that unit as the gravity readings are. Tried on
     // short sums with one such number only, and undone unless every term then agrees.
     bool read_column_and_atmosphere(std::size_t base, std::uint32_t sum_node) {
-        constexpr std::size_t most_terms = 16;
+        // Below the count where equal types are shared (push_type), so that each term's
+        // type is its own to change.
+        constexpr std::size_t most_terms = 15;
         const std::size_t count = operands_.size() - base;
         if (count > most_terms)
             return false;
@@ -565,9 +592,9 @@ class checker {
         if (atmosphere == count)
             return false;
         // Kept to undo the readings.
-        std::array<operand, most_terms> saved_operands;
-        std::copy(operands_.begin() + static_cast<std::ptrdiff_t>(base), operands_.end(),
-                  saved_operands.begin());
+        std::array<typed_term, most_terms> saved_types;
+        for (std::size_t i = 0; i < count; ++i)
+            saved_types[i] = operands_[base + i].type;
         std::uint32_t literal_from = static_cast<std::uint32_t>(literals_.size());
         for (std::size_t i = 0; i < count; ++i)
             literal_from = std::min(literal_from, operands_[base + i].type.literal_begin);
@@ -575,7 +602,7 @@ class checker {
                                                         literals_.end());
         const std::size_t findings_before = out_.size();
 
-        typed_term& t = operands_[base + atmosphere].type;
+        auto& t = const_cast<typed_term&>(operands_[base + atmosphere].type);
         scale_literal& number = literals_[t.literal_begin];
         const std::uint32_t number_node = number.node;
         const reference_state* state = read_reference_state(
@@ -607,8 +634,8 @@ class checker {
             a = find_agreement(terms);
         }
         if (!a.odd.empty() || !a.reference || !(*a.reference == pressure)) {
-            std::copy(saved_operands.begin(), saved_operands.begin() + count,
-                      operands_.begin() + static_cast<std::ptrdiff_t>(base));
+            for (std::size_t i = 0; i < count; ++i)
+                const_cast<typed_term&>(operands_[base + i].type) = saved_types[i];
             literals_.resize(literal_from);
             literals_.insert(literals_.end(), saved_literals.begin(), saved_literals.end());
             out_.erase(out_.begin() + static_cast<std::ptrdiff_t>(findings_before), out_.end());
@@ -716,7 +743,8 @@ class checker {
             readings[found_count++] = {i, *reading};
         }
         for (std::size_t r = 0; r < found_count; ++r) {
-            typed_term& t = operands_[base + readings[r].operand].type;
+            // Its own type: a term with numbers shares it with no other operand.
+            auto& t = const_cast<typed_term&>(operands_[base + readings[r].operand].type);
             scale_literal& number = literals_[t.literal_begin + readings[r].reading.literal];
             t.dim = *a.reference;
             t.scale = readings[r].reading.term_scale;
@@ -949,6 +977,7 @@ class checker {
         const std::size_t term_count = spine_.size() - spine_base + 1;
 
         const std::size_t base = operands_.size();
+        const std::size_t types_base = types_.size();
         // Reserved once: growing by doubling would leave the stack up to twice the size a long
         // sum needs, and briefly three times while it moves.
         operands_.reserve(base + term_count);
@@ -964,7 +993,7 @@ class checker {
             const std::uint32_t node = k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
-            operand term{eval(node), node, subtracted};
+            const operand term{push_type(eval(node), types_base, term_count), node, subtracted};
             const typed_term& t = term.type;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
@@ -985,7 +1014,7 @@ class checker {
         spine_.resize(spine_base);
 
         const typed_term* offset_term = adopt_numbers_on_offset_scale(base);
-        const scratch_region region(operands_, base);
+        const scratch_region region(operands_, base, types_, types_base);
         const std::span<const operand> terms = region.view();
         agreement a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty() && !prefer_dimensionless && read_gravity_numbers_either_way(base, a))
@@ -1072,8 +1101,9 @@ class checker {
         }
         if (!numbers || !std::isfinite(unit) || std::abs(unit - 1.0) <= 1e-9)
             return;
+        // A number's type is shared only with numbers equal to it, which change alike.
         for (std::size_t i = base; i < operands_.size(); ++i) {
-            typed_term& t = operands_[i].type;
+            auto& t = const_cast<typed_term&>(operands_[i].type);
             if (t.known && !t.zero && t.numeric)
                 t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
         }
@@ -1094,7 +1124,8 @@ class checker {
         if (offset_term == nullptr)
             return nullptr;
         for (std::size_t i = base; i < operands_.size(); ++i) {
-            typed_term& t = operands_[i].type;
+            // Shared only among operands of one type, which all change alike.
+            auto& t = const_cast<typed_term&>(operands_[i].type);
             if (t.numeric && t.value && !t.zero && t.dim.is_dimensionless()) {
                 t.dim = offset_term->dim;
                 t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
@@ -2546,6 +2577,7 @@ class checker {
         const std::size_t literal_start = literals_.size();
         // The arguments go on the scratch stack: no allocation per call.
         const std::size_t args_base = operands_.size();
+        const std::size_t types_base = types_.size();
         const bool square_root = f != nullptr && f->rule == function_rule::root &&
                                  f->power == rational(1, 2) && n.rhs == 1;
         for (std::uint32_t i = 0; i < n.rhs; ++i) {
@@ -2556,11 +2588,11 @@ class checker {
                 prefer_dimensionless_ = node;
             if (square_root)
                 square_root_argument_ = node;
-            operands_.push_back({eval(node), node});
+            operands_.push_back({types_.push(eval(node)), node});
             prefer_dimensionless_ = saved;
             square_root_argument_ = saved_root;
         }
-        const scratch_region region(operands_, args_base);
+        const scratch_region region(operands_, args_base, types_, types_base);
         const std::span<const operand> args = region.view();
         // Only a root or abs passes its argument's numbers on, as factors of the result.
         const auto keep_first_argument_numbers = [&](double power) {
@@ -2727,9 +2759,10 @@ class checker {
     // A comparison inside a formula (IF's condition): its sides agree as a limit's do.
     [[gnu::noinline]] typed_term eval_compare(const syntax::expr_node& n) {
         const std::size_t base = operands_.size();
-        operands_.push_back({eval(n.lhs), n.lhs});
-        operands_.push_back({eval(n.rhs), n.rhs});
-        const scratch_region region(operands_, base);
+        const std::size_t types_base = types_.size();
+        operands_.push_back({types_.push(eval(n.lhs)), n.lhs});
+        operands_.push_back({types_.push(eval(n.rhs)), n.rhs});
+        const scratch_region region(operands_, base, types_, types_base);
         const std::span<const operand> sides = region.view();
         agreement a = find_agreement(sides);
         if (!a.odd.empty() && read_gravity_numbers_either_way(base, a))
