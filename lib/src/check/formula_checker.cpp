@@ -147,8 +147,9 @@ struct reference_state_pairs {
         double scale;
         bool paired = false;
     };
-    std::array<number, 2> numbers{};
-    std::array<reading, 2> readings{};
+    // Left unset: the counts say how many are filled, and this is made for every product.
+    std::array<number, 2> numbers;
+    std::array<reading, 2> readings;
     std::size_t number_count = 0;
     std::size_t reading_count = 0;
 
@@ -401,7 +402,7 @@ class checker {
             // A sum on the right of "p_abs = 9.81*h + 101.325" may need the left side's unit to
             // read its numbers (read_column_and_atmosphere).
             if (i > 0 && operands_[base].type.known && operands_[base].type.literal_count == 0) {
-                side_hint_ = operands_[base].type;
+                side_hint_ = &operands_[base].type; // on the type stack, which never moves
                 side_hint_node_ = s.root;
             }
             operands_.push_back({push_type(eval(s.root), types_base, f.side_count), s.root});
@@ -502,7 +503,7 @@ class checker {
     // The argument of the square root being checked: sqrt(2*p_g/ρ) is a jet's velocity.
     std::uint32_t square_root_argument_ = syntax::no_index;
     // The other side of the equation whose side is the sum at side_hint_node_.
-    typed_term side_hint_;
+    const typed_term* side_hint_ = nullptr;
     std::uint32_t side_hint_node_ = syntax::no_index;
 
     std::string_view text(span s) const { return file_.source->text(s); }
@@ -569,9 +570,9 @@ class checker {
             if (u > 0 && std::isfinite(u))
                 unit = u;
         }
-        if (!std::isfinite(unit) && sum_node == side_hint_node_ && side_hint_.known &&
-            !side_hint_.numeric && side_hint_.dim == pressure)
-            unit = side_hint_.scale;
+        if (!std::isfinite(unit) && sum_node == side_hint_node_ && side_hint_ != nullptr &&
+            side_hint_->known && !side_hint_->numeric && side_hint_->dim == pressure)
+            unit = side_hint_->scale;
         if (!(unit > 0) || !std::isfinite(unit))
             return false;
         std::size_t atmosphere = count;
