@@ -124,3 +124,16 @@ TEST_CASE("water's latent heat written as a number") {
     // 1000 Btu/lb is a rule of thumb 3 % off, not read; a missing latent heat is an error.
     fails_with(steam, {"@thumb Q = 1000*m", "@missing Q = m"}, plumb::rules::side_mismatch);
 }
+
+TEST_CASE("a number counted as a coefficient where the units disagree is named") {
+    // 1 hp = 550 ft·lbf/s and the conventional inch of water 249.089 Pa (NIST SP 811 (2008),
+    // App. B): air power in hp from cfm and in. w.g. needs 1/6343.3; the fan trade's 6356 is
+    // the inch at about 68 °F (common practice), which plumb does not read.
+    const auto r = plumb::check_text("c.plumb", "Q : ft^3/min\ndp : inH2O\nP : hp\n"
+                                                "@air P = Q*dp/6356\n");
+    const plumb::diagnostic& d = first(r, plumb::rules::unit_scale);
+    const bool named = std::any_of(d.notes.begin(), d.notes.end(), [](const auto& n) {
+        return n.message.find("6356 counted as a coefficient") != std::string::npos;
+    });
+    CHECK(named);
+}

@@ -1705,7 +1705,8 @@ class checker {
         // itself but part of one, and the units are off by 1000, not 12000. Where taking some
         // of the other numbers in makes the ratio a clean power of ten, that is the ratio as
         // written, so that following the message fixes the formula.
-        if (const auto clean = ratio_with_numbers(parts[r.reference], parts[r.odd], ratio)) {
+        const auto clean = ratio_with_numbers(parts[r.reference], parts[r.odd], ratio);
+        if (clean) {
             ratio = *clean;
             exact_ratio.reset();
         }
@@ -1726,6 +1727,23 @@ class checker {
             const std::string units = units_in(side->node);
             if (!units.empty())
                 d.notes.push_back({fmt::format("in {}: {}", quote(side->node), units), {}});
+        }
+        // "Q*Δp/6356", "12/kWpt": a number that looks like no conversion is counted as a
+        // coefficient; say so, since it may be the conversion the engineer meant, wrongly.
+        if (!clean) {
+            std::string coefficients;
+            for (const std::size_t side : {r.odd, r.reference})
+                for (const scale_literal& l : parts[side].literals)
+                    if (l.value != 1.0 && !looks_like_conversion(l, true) &&
+                        file_.nodes[l.node].kind == expr_kind::number && coefficients.size() < 80)
+                        coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ",
+                                                    text(file_.nodes[l.node].range));
+            if (!coefficients.empty())
+                d.notes.push_back(
+                    {fmt::format("{} counted as a coefficient, not a unit conversion; if it was "
+                                 "meant to convert units, it is not the factor these units need",
+                                 coefficients),
+                     {}});
         }
         d.notes.push_back(
             {ratio < 1 ? fmt::format("multiply {} by {} (declare the symbols in coherent units, or "
