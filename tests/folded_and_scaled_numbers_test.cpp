@@ -125,15 +125,25 @@ TEST_CASE("water's latent heat written as a number") {
     fails_with(steam, {"@thumb Q = 1000*m", "@missing Q = m"}, plumb::rules::side_mismatch);
 }
 
-TEST_CASE("a number counted as a coefficient where the units disagree is named") {
+TEST_CASE("the fan trade's 6356, and a number counted as a coefficient named") {
     // 1 hp = 550 ft·lbf/s and the conventional inch of water 249.089 Pa (NIST SP 811 (2008),
     // App. B): air power in hp from cfm and in. w.g. needs 1/6343.3; the fan trade's 6356 is
-    // the inch at about 68 °F (common practice), which plumb does not read.
-    const auto r = plumb::check_text("c.plumb", "Q : ft^3/min\ndp : inH2O\nP : hp\n"
-                                                "@air P = Q*dp/6356\n");
+    // the inch of water at about 68 °F (common practice), read with a note.
+    const std::string fan = "Q : ft^3/min\ndp : inH2O\nP : hp\nP_k : kW\nη : 1\n";
+    for (const char* formula : {"@air P = Q*dp/6356", "@brake P = Q*dp/(6356*η)"}) {
+        CAPTURE(formula);
+        const auto r = run(fan, formula);
+        CHECK(problems(r) == 0);
+        CHECK(first(r, plumb::rules::trade_constant).message.find("6356 is read as the fan") !=
+              std::string::npos);
+    }
+    // In kW the same number is no conversion the units need: counted as a coefficient, and
+    // the warning says so, since it may be the conversion the engineer meant.
+    const auto r = run(fan, "@air-kw P_k = Q*dp/6356");
     const plumb::diagnostic& d = first(r, plumb::rules::unit_scale);
     const bool named = std::any_of(d.notes.begin(), d.notes.end(), [](const auto& n) {
         return n.message.find("6356 counted as a coefficient") != std::string::npos;
     });
     CHECK(named);
+    fails_with(fan, {"@thumb P = Q*dp/6000"}, plumb::rules::unit_scale);
 }

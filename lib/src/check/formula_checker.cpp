@@ -1818,7 +1818,7 @@ class checker {
                     std::vector<scale_literal> literals(parts[i].literals.begin(),
                                                         parts[i].literals.end());
                     literals[k].low = c.exact_conversion;
-                    literals[k].high = c.exact_conversion;
+                    literals[k].high = c.conversion_high;
                     literals[k].value = c.exact_conversion.to_double();
                     literals[k].tolerance = 0.0;
                     std::vector<scaled_operand> changed(parts.begin(), parts.end());
@@ -1836,11 +1836,8 @@ class checker {
                                     c.conversion),
                         file_.nodes[l.node].range);
                     d.level = severity::note;
-                    d.notes.push_back(
-                        {fmt::format("water weighs {}; source: {}", c.range_text, c.source), {}});
-                    d.notes.push_back({"the result holds for water; for another liquid write "
-                                       "its own density",
-                                       {}});
+                    d.notes.push_back({fmt::format("{}; source: {}", c.range_text, c.source), {}});
+                    d.notes.push_back({std::string(c.caveat), {}});
                     return true;
                 }
             }

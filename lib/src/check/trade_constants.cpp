@@ -23,24 +23,46 @@ rational water_density_greatest() {
 std::span<const trade_constant> trade_constants() {
     // US gallon 3.785411784 L, pound 0.45359237 kg, cubic foot 0.028316846592 m³ (NIST SP 811
     // (2008), Appendix B.8).
-    static const std::array<trade_constant, 2> table = [] {
+    static const std::array<trade_constant, 3> table = [] {
         const rational pound = parsed("0.45359237");
         const rational gallon_of_one_kg_per_litre = parsed("3.785411784") / pound;
         const rational cubic_foot_of_one_kg_per_litre = parsed("28.316846592") / pound;
-        return std::array<trade_constant, 2>{{
+        // hp / (cfm × in. w.g.) with 1 hp = 550 ft·lbf/s = 745.69987158227022 W, 1 cfm =
+        // 0.0004719474432 m³/s and the conventional inch of water 249.08891 Pa (NIST SP 811
+        // (2008), B.8): 6343.3114961 (its exact fraction does not fit 64 bits, so it is
+        // bracketed). A real inch of water at t °C is smaller by ρ_w(t)/1000 kg/L, so the
+        // conversion is larger: up to 6371.0 at 30 °C; the fan trade's 6356 is the inch at
+        // about 68 °F (common practice).
+        const rational fan_power_low = parsed("6343.3114960");
+        const rational fan_power_high = parsed("6343.3114962");
+        constexpr std::string_view for_water =
+            "the result holds for water; for another liquid write its own density";
+        return std::array<trade_constant, 3>{{
             {"the weight of a US gallon of water (lb/gal)",
              "a gallon at exactly 1 kg/L, which also turns mgd × mg/L into lb/d",
-             gallon_of_one_kg_per_litre, gallon_of_one_kg_per_litre * water_density_least(),
+             gallon_of_one_kg_per_litre, gallon_of_one_kg_per_litre,
+             gallon_of_one_kg_per_litre * water_density_least(),
              gallon_of_one_kg_per_litre * water_density_greatest(),
-             "8.31 to 8.35 lb per US gallon between 0 and 30 °C",
+             "water weighs 8.31 to 8.35 lb per US gallon between 0 and 30 °C",
              "the trade prints 8.34 (common practice); water's density from the CRC Handbook "
-             "of Chemistry and Physics (from memory)"},
+             "of Chemistry and Physics (from memory)",
+             for_water},
             {"the weight of a cubic foot of water (lb/ft³)", "a cubic foot at exactly 1 kg/L",
-             cubic_foot_of_one_kg_per_litre, cubic_foot_of_one_kg_per_litre * water_density_least(),
+             cubic_foot_of_one_kg_per_litre, cubic_foot_of_one_kg_per_litre,
+             cubic_foot_of_one_kg_per_litre * water_density_least(),
              cubic_foot_of_one_kg_per_litre * water_density_greatest(),
-             "62.16 to 62.43 lb per cubic foot between 0 and 30 °C",
+             "water weighs 62.16 to 62.43 lb per cubic foot between 0 and 30 °C",
              "the trade prints 62.4 (common practice); water's density from the CRC Handbook "
-             "of Chemistry and Physics (from memory)"},
+             "of Chemistry and Physics (from memory)",
+             for_water},
+            {"the fan trade's cfm × in. w.g. per horsepower, with the inch of water at the "
+             "water's temperature",
+             "hp from cfm and the conventional inch of water (249.089 Pa)", fan_power_low,
+             fan_power_high, fan_power_low, fan_power_low / water_density_least(),
+             "an inch of water between 0 and 30 °C makes it 6343.5 to 6371.0",
+             "the trade prints 6356 (common practice); water's density from the CRC Handbook "
+             "of Chemistry and Physics (from memory)",
+             "a gauge that reads inches of another liquid needs that liquid's density"},
         }};
     }();
     return table;

@@ -14,13 +14,16 @@ namespace plumb {
 struct trade_constant {
     std::string_view name;       // "the weight of a US gallon of water"
     std::string_view conversion; // the exact conversion it stands in for, in words
-    rational exact_conversion;   // that conversion's value
+    rational exact_conversion;   // that conversion's value, or its lower bound where it is
+                                 // not a 64-bit fraction
+    rational conversion_high;    // its upper bound (the same where it is exact)
     // The property's published range, in the units of the conversion: the printed number must
     // lie inside it.
     rational least;
     rational greatest;
-    std::string_view range_text; // "8.31 to 8.35 lb per US gallon between 0 and 30 °C"
+    std::string_view range_text; // "water weighs 8.31 to 8.35 lb per US gallon between 0 and 30 °C"
     std::string_view source;
+    std::string_view caveat; // "the result holds for water; for another liquid ..."
 };
 
 std::span<const trade_constant> trade_constants();
