@@ -189,3 +189,22 @@ TEST_CASE("the atmosphere added to a gauge reading, in the wrong unit or without
     CHECK(count(r, plumb::rules::trade_constant) == 0);
     CHECK(count(r, plumb::rules::gravity_number) == 0);
 }
+
+TEST_CASE("NPSH from a gauge reading: the atmosphere added in the converted unit") {
+    // NPSH_a = (p_s,abs − p_v)/(ρ·g) with the suction gauge reading plus the atmosphere,
+    // 101 325 Pa (standard atmosphere, 10th CGPM 1954) or 14.7 psi (common practice).
+    const std::string npsh = "NPSH : m\nN_ft : ft\np_k : kPag\np_vk : kPa\np_s : psig\n"
+                             "p_v : psia\nSG : 1\nρ : kg/m^3\ng : m/s^2\nT_m : K\n"
+                             "t_1, t_2 : °C\n";
+    passes(npsh, {"@pascals NPSH = (p_k*1000 + 101325 - p_vk*1000)/(ρ*g)",
+                  "@kilopascals NPSH = (p_k + 101.325 - p_vk)*1000/(ρ*g)",
+                  "@mean T_m = 0.5*t_1 + 0.5*t_2 + 273.15"});
+    passes(npsh, {"@us N_ft = 2.31*(p_s + 14.7 - p_v)/SG"}, 1);
+    fails_with(npsh,
+               {"@no-atmosphere NPSH = (p_k - p_vk)*1000/(ρ*g)",
+                "@no-atmosphere-us N_ft = 2.31*(p_s - p_v)/SG"},
+               plumb::rules::offset_scale);
+    // The atmosphere in kPa beside terms converted to Pa: flagged.
+    CHECK(problems(run(npsh, "@kilopascal-atmosphere NPSH = (p_k*1000 + 101.325 - "
+                             "p_vk*1000)/(ρ*g)")) >= 1);
+}

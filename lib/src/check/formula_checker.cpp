@@ -1207,6 +1207,44 @@ class checker {
     // The scale and zero of a sum with a value on an offset scale. Values on one scale subtract
     // to an ordinary difference; a shift by the scale's zero converts it; an absolute pressure
     // added to a gauge one (+ p_atm) gives an absolute pressure.
+    // "(p_k*1000 + 101325 - p_vk*1000)": every value with a unit converted by its numbers to
+    // one unit, and the numbers added in that unit. Where taking each term's numbers as its
+    // conversion gives all the terms the same unit and lands the zero where a scale has one,
+    // that is the sum's unit (`unit`); otherwise the scale rule weighs the terms as usual.
+    template <class Shifted>
+    bool converted_alike(std::span<const operand> terms, const Shifted& shifted,
+                         const compact_dimension& dim, double& unit) const {
+        double common = std::numeric_limits<double>::quiet_NaN();
+        for (const auto& t : terms) {
+            if (!t.type.known || t.type.zero || is_shift_candidate(t))
+                continue;
+            if (t.type.literal_count == 0)
+                return false;
+            double u = t.type.scale;
+            for (std::uint32_t l = 0; l < t.type.literal_count; ++l) {
+                const scale_literal& number = literals_[t.type.literal_begin + l];
+                // Only conversions: the 0.5 of "0.5*t_1 + 0.5*t_2 + 273.15" is a mean's.
+                if (!looks_like_conversion(number, true))
+                    return false;
+                u /= std::pow(number.value, number.exponent);
+            }
+            if (!(u > 0) || !std::isfinite(u))
+                return false;
+            if (!std::isfinite(common))
+                common = u;
+            else if (std::abs(u / common - 1.0) > 1e-9)
+                return false;
+        }
+        if (!std::isfinite(common))
+            return false;
+        double tolerance = 0.0;
+        const double origin = shifted(common, 0.0, &tolerance);
+        if (!recognised_origin(origin, tolerance, dim, terms))
+            return false;
+        unit = common;
+        return true;
+    }
+
     typed_term finish_offset_sum(std::span<const operand> terms, typed_term result,
                                  std::size_t literal_base, std::uint32_t index) {
         // The terms with units (not the numbers that shift the zero).
@@ -1314,7 +1352,7 @@ class checker {
                     unit = term.type.scale / product;
                 }
             }
-        } else {
+        } else if (!(has_shift && converted_alike(terms, shifted, result.dim, unit))) {
             std::vector<operand> unit_operands;
             for (const auto& t : terms)
                 if (t.type.known && !t.type.zero && !is_shift_candidate(t))
