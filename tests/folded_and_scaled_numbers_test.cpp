@@ -82,6 +82,11 @@ TEST_CASE("Manning's US constant is not needed in the SI form") {
     const auto r = run(manning, "@si-with-us-constant V_m = 1.486/n*R_m^(2/3)*S^(1/2)");
     CHECK(first(r, plumb::rules::unit_scale).message.find("the factor 1.486 is not needed") !=
           std::string::npos);
+    // Printed 1.49 as often (common practice).
+    const auto r3 = run(manning, "@si-with-us-constant V_m = 1.49/n*R_m^(2/3)*S^(1/2)");
+    CHECK(first(r3, plumb::rules::unit_scale).message.find("the factor 1.49 is not needed") !=
+          std::string::npos);
+    passes(manning, {"@us-three-digits V_f = 1.49/n*R_f^(2/3)*S^(1/2)"});
     // √3 and √12 stay coefficients: square roots of yd/ft and ft/in are not read as factors.
     passes("P : W\nV : V\nI : A\nr : in\nd : in\n",
            {"@three-phase P = 1.732*V*I", "@gyration r = d/3.464"});

@@ -293,6 +293,11 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
 bool looks_like_conversion(const scale_literal& l, bool allow_hundred) {
     if (l.power_of_ten)
         return std::abs(l.power * l.exponent) >= (allow_hundred ? 2 : 3);
+    // Manning's US constant (1 m / 0.3048 m)^(1/3) = 1.48592 is printed 1.49 as often as 1.486
+    // (common practice); three digits are enough for that one ratio.
+    static const double manning_us = std::cbrt(1.0 / 0.3048);
+    if (l.factor_like && std::abs(l.value - manning_us) <= l.value * l.tolerance + 1e-12)
+        return true;
     return l.table_digits && is_unit_ratio(l);
 }
 
