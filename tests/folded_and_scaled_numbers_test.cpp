@@ -97,7 +97,9 @@ TEST_CASE("a bare number beside terms in % or degrees is in their unit") {
     const std::string percent = "O2, EA, S : %\nf : 1\nθ, φ : deg\n";
     passes(percent, {"@excess-air EA = 100*O2/(20.9 - O2)", "@fraction f = (100 - S)/100",
                      "@fraction-bare f = 1 - S/100", "@angle φ = θ + 90"});
-    fails_with(percent, {"@fraction-slip f = 1 - S", "@percent-of-fraction EA = 100 - f"},
+    fails_with(percent,
+               {"@fraction-slip f = 1 - S", "@percent-of-fraction EA = 100 - f",
+                "@complement-of-percent EA = 1 - S"},
                plumb::rules::unit_scale);
 }
 
@@ -151,4 +153,34 @@ TEST_CASE("the fan trade's 6356, and a number counted as a coefficient named") {
     });
     CHECK(named);
     fails_with(fan, {"@thumb P = Q*dp/6000"}, plumb::rules::unit_scale);
+}
+
+TEST_CASE("readings added with weights that make neither a reading nor a difference") {
+    // A mean of readings on a scale with an arbitrary zero needs weights that sum to 1, a
+    // difference weights that sum to 0: 0 °C + 0 °C = 0 °C but 32 °F + 32 °F = 64 °F (common
+    // practice). The film temperature is (T_s + T_∞)/2 (Incropera and DeWitt, Fundamentals of
+    // Heat and Mass Transfer, 6th ed., 7.1, from memory).
+    const std::string readings = "T_s, T_a, T_f, T_1, T_2, T_3 : °C\nK_1, K_2, K_m : K\n"
+                                 "p_1, p_2, p_m : barg\nΔT : K\n";
+    passes(readings, {"@film T_f = (T_s + T_a)/2", "@split T_f = T_s/2 + T_a/2",
+                      "@three T_f = (T_1 + T_2 + T_3)/3", "@weighted T_f = 0.25*T_1 + 0.75*T_2",
+                      "@mixing T_f = (2*T_1 + 3*T_2)/5", "@bed p_m = (p_1 + p_2)/2",
+                      "@difference ΔT = T_1 - T_2", "@from-the-mean ΔT = (T_1 + T_2)/2 - T_3",
+                      "@absolute K_m = K_1 + K_2"});
+    fails_with(readings,
+               {"@film-precedence T_f = T_s + T_a/2", "@no-half T_f = T_1 + T_2",
+                "@bed-precedence p_m = p_1 + p_2/2", "@half-difference ΔT = T_1 - T_2/2",
+                "@weights-short T_f = 0.25*T_1 + 0.5*T_2"},
+               plumb::rules::offset_scale);
+    const auto r = run(readings, "@film-precedence T_f = T_s + T_a/2");
+    CHECK(first(r, plumb::rules::offset_scale).message.find("weights that sum to 3/2, not 1") !=
+          std::string::npos);
+}
+
+TEST_CASE("braces after a number hold a unit, alone a constant") {
+    // The hour (SI Brochure 9th ed., Table 8) and the farad beside the Planck and Faraday
+    // constants (CODATA 2018) that "{h}" and "{F}" alone name.
+    passes("CF : 1\nE : MW*h\nP : MW\nQ : C\nU : V\nn : mol\nW : J\n",
+           {"@capacity-factor CF = E/(P*8760 {h})", "@capacitor Q = 5 {F}*U", "@faraday Q = n*{F}",
+            "@photon W = {h}*3e14 {Hz}"});
 }

@@ -131,6 +131,35 @@ struct dimension_hash {
     std::size_t operator()(const compact_dimension& d) const noexcept { return d.hash(); }
 };
 
+// A reading's weight as a fraction, or nothing where it is not followed.
+std::optional<rational> weight_of(const typed_term& t) {
+    if (t.weight_denominator == 0)
+        return std::nullopt;
+    return rational(t.weight_numerator, t.weight_denominator);
+}
+
+void set_weight(typed_term& t, const std::optional<rational>& w) {
+    if (!w || w->num() < -127 || w->num() > 127 || w->den() > 255) {
+        t.weight_denominator = 0;
+        return;
+    }
+    t.weight_numerator = static_cast<std::int8_t>(w->num());
+    t.weight_denominator = static_cast<std::uint8_t>(w->den());
+    if (*w == rational(1))
+        t.weighted_sum = false; // (T_1 + T_2)/2: a reading again
+}
+
+void scale_weight(typed_term& t, const rational& by) {
+    const std::optional<rational> w = weight_of(t);
+    if (!w)
+        return;
+    try {
+        set_weight(t, *w * by);
+    } catch (const std::exception&) {
+        t.weight_denominator = 0;
+    }
+}
+
 // The bare numbers and the absolute temperature and pressure readings among a product's
 // factors, each with the sign of its power (+1 multiplied, -1 divided), for
 // read_reference_states. A few of each are enough; a product is rarely longer.
@@ -1103,9 +1132,11 @@ class checker {
         if (!numbers || !std::isfinite(unit) || std::abs(unit - 1.0) <= 1e-9)
             return;
         // A number's type is shared only with numbers equal to it, which change alike.
+        // But not 1: "1 - L" with L in % is the complement of a fraction written beside a
+        // percentage, the slip, far more often than 1 % less L.
         for (std::size_t i = base; i < operands_.size(); ++i) {
             auto& t = const_cast<typed_term&>(operands_[i].type);
-            if (t.known && !t.zero && t.numeric)
+            if (t.known && !t.zero && t.numeric && !(t.value && *t.value == rational(1)))
                 t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
         }
     }
@@ -1262,6 +1293,10 @@ class checker {
         int gauges = 0;
         int absolute_pressures_added = 0;
         double gauge_zero = 0.0;
+        // The same with each reading's weight (T_1/2 + T_2/2 is one reading, T_s + T_a/2 is
+        // not), where every weight is followed.
+        std::optional<rational> weight = rational(0);
+        double weighted_origin = 0.0;
         for (const auto& t : terms) {
             if (!t.type.known || t.type.zero || is_shift_candidate(t) || !t.type.point)
                 continue;
@@ -1269,6 +1304,17 @@ class checker {
             origin += sign * t.type.origin;
             origin_tolerance += t.type.origin_tolerance;
             points += t.subtracted ? -1 : 1;
+            const std::optional<rational> w = weight_of(t.type);
+            if (weight && w && std::isfinite(t.type.origin_tolerance)) {
+                try {
+                    weight = t.subtracted ? *weight - *w : *weight + *w;
+                    weighted_origin += sign * w->to_double() * t.type.origin;
+                } catch (const std::exception&) {
+                    weight.reset();
+                }
+            } else {
+                weight.reset();
+            }
             if (t.type.offset != nullptr && t.type.offset->scale == unit_scale::gauge &&
                 !t.subtracted) {
                 ++gauges;
@@ -1282,6 +1328,9 @@ class checker {
         if (gauges > 0 && absolute_pressures_added > 0) {
             origin -= gauge_zero;
             --points;
+            weighted_origin -= gauge_zero;
+            if (weight)
+                weight = *weight - rational(1);
         }
         // `unit_tolerance`: how far the unit may be off, relative, when rounded numbers
         // converted it (6.895 for 6.894757 in "6.895*p_g + 101.325").
@@ -1422,6 +1471,23 @@ class checker {
         result.scale = unit;
         result.exact_scale.reset();
         const double slack = tolerance + 1e-9 * std::abs(final_origin) + 1e-9;
+        // Readings whose weights make neither one reading nor a difference: "T_s + T_a/2",
+        // "T_hi + T_ho" before it is halved. Kept with their weight, for a factor to bring it
+        // to 1 ((T_1 + T_2)/2) or for the equation to report.
+        // Where every weight is 1 or -1 the count of readings below says the same.
+        if (!has_shift && unit_terms >= 2 && weight && !(*weight == rational(1)) &&
+            !weight->is_zero() && !(*weight == rational(points))) {
+            const double w = weight->to_double();
+            result.point = true;
+            result.origin = weighted_origin / w;
+            result.origin_tolerance = tolerance / std::abs(w);
+            result.offset = std::abs(result.origin) > slack
+                                ? scale_named(result.origin, slack, result.dim, terms)
+                                : nullptr;
+            set_weight(result, weight);
+            result.weighted_sum = result.weight_denominator != 0;
+            return result;
+        }
         if (points == 0) {
             if (std::abs(final_origin) > slack) {
                 const unit_definition* zero =
@@ -1452,6 +1518,11 @@ class checker {
             result.offset = scale_named(final_origin / points, slack, result.dim, terms);
             result.origin = final_origin / points;
             result.origin_tolerance = std::numeric_limits<double>::infinity();
+            // Until halved, the sum weighs 2: "T_m = T_hi + T_ho" is reported at the equation.
+            if (weight && !has_shift && !weight->is_zero()) {
+                set_weight(result, weight);
+                result.weighted_sum = result.weight_denominator != 0 && !(*weight == rational(1));
+            }
             return result;
         }
         result.origin = final_origin;
@@ -2040,6 +2111,14 @@ class checker {
     void check_origins(std::span<const operand> sides, bool equation) {
         if (report_scale_zero_beside_difference(sides))
             return;
+        for (const auto& side : sides)
+            if (side.type.known && side.type.point && side.type.weighted_sum &&
+                std::abs(side.type.origin) > 1e-9 + (std::isfinite(side.type.origin_tolerance)
+                                                         ? side.type.origin_tolerance
+                                                         : 0.0)) {
+                report_unbalanced_readings(side);
+                return;
+            }
         if (std::all_of(sides.begin(), sides.end(),
                         [](const operand& side) { return side.type.origin == 0.0; }))
             return;
@@ -2106,6 +2185,26 @@ class checker {
                      {}});
             return;
         }
+    }
+
+    // "T_m = T_hi + T_ho", "t_film = T_s + T_a/2": readings on a scale with an arbitrary zero
+    // added with weights that make neither one reading (they sum to 1) nor a difference (0).
+    void report_unbalanced_readings(const operand& side) {
+        const std::optional<rational> w = weight_of(side.type);
+        const unit_definition* scale = side.type.offset;
+        diagnostic& d = report(
+            rules::offset_scale,
+            fmt::format("{} adds readings on the {} scale with weights that sum to {}, not 1: "
+                        "its value depends on where the scale's zero is",
+                        quote(side.node), scale != nullptr ? scale->symbol : "offset",
+                        w ? (w->is_integer() ? fmt::format("{}", w->num())
+                                             : fmt::format("{}/{}", w->num(), w->den()))
+                          : std::string("another number")),
+            file_.nodes[side.node].range);
+        add_term(d, side);
+        d.notes.push_back({"a mean of two readings is (T_1 + T_2)/2, weights 1/2 and 1/2; a "
+                           "difference is T_1 - T_2, weights 1 and -1",
+                           {}});
     }
 
     // "dp = p_abs - p_g": the right side is the atmosphere, a reading, not a difference.
@@ -2469,6 +2568,16 @@ class checker {
                 result.origin = t.origin;
                 result.origin_tolerance = t.origin_tolerance;
                 offset_node = op.rhs;
+            }
+            // A reading's weight follows the numbers that scale it: (T_1 + T_2)/2 weighs 1.
+            if (result.point && t.numeric && t.value && !t.value->is_zero()) {
+                scale_weight(result, divided ? rational(1) / *t.value : *t.value);
+            } else if (t.point && result.numeric && result.value && !divided) {
+                const rational by = *result.value;
+                result.weight_numerator = t.weight_numerator;
+                result.weight_denominator = t.weight_denominator;
+                result.weighted_sum = t.weighted_sum;
+                scale_weight(result, by);
             }
             // A reading scaled by a number is still a reading; times a quantity it is not.
             result.point = (result.point && t.numeric) || (t.point && result.numeric);

@@ -60,6 +60,13 @@ struct typed_term {
     // The same exactly, where every unit along the way is defined exactly and the powers are
     // whole; empty otherwise, and the double decides. The count below fills its spare bytes.
     [[no_unique_address]] optional_rational exact_scale = rational(1);
+    // A reading's weight, in the spare bytes after exact_scale: 1/2 in T_1/2, 2 in T_1 + T_2
+    // before it is halved for the mean. A denominator of 0 means not followed (too large).
+    std::int8_t weight_numerator = 1;
+    std::uint8_t weight_denominator = 1;
+    // Set where the weight comes from adding readings (T_1 + T_2, T_s + T_a/2): such a sum is
+    // a reading only once scaled back to weight 1, or a difference at weight 0.
+    bool weighted_sum = false;
     // The numbers along its multiplicative path, on the checker's literal stack.
     std::uint32_t literal_count = 0;
     std::uint32_t literal_begin = 0;

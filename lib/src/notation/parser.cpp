@@ -106,6 +106,7 @@ struct parse_state {
     std::vector<std::uint32_t> argument_counts;
     int depth = 0;
     bool in_braces = false;
+    bool braces_after_number = false; // "8760 {h}": a unit, not the Planck constant
     bool line_has_inferred = false;
     // The statement "[L^(1/3) T^-1, SI 1 ± 0.1%]" of the coefficient being read, if any.
     std::optional<syntax::coefficient_statement> pending_statement;
@@ -376,8 +377,15 @@ template <> struct action<nt::quantity_term> {
     template <typename In> static void apply(const In& in, parse_state& s) { push_quantity(in, s); }
 };
 template <> struct action<nt::brace_open> {
-    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+    template <typename In> static void apply(const In& in, parse_state& s) {
         s.in_braces = true;
+        // "8760 {h}", "5 {kW*h}": after a number the braces hold a unit (the hour, the farad),
+        // not the constants that "{h}" and "{F}" alone name.
+        const char* before = in.begin();
+        while (before > s.file_begin && (before[-1] == ' ' || before[-1] == '\t'))
+            --before;
+        s.braces_after_number = before > s.file_begin &&
+                                ((before[-1] >= '0' && before[-1] <= '9') || before[-1] == '.');
     }
 };
 template <> struct action<nt::brace_close> {
@@ -550,7 +558,7 @@ template <> struct action<nt::dimension_brackets> {
 // --- Units ---
 // A unit symbol as written, from the file's own units, the constants (in braces) or the table.
 std::optional<unit_value> lookup_unit(std::string_view text, const parse_state& s) {
-    if (s.in_braces) {
+    if (s.in_braces && !s.braces_after_number) {
         if (const physical_constant* c = find_constant(text))
             return unit_value{c->dim(), c->value, nullptr, true, true, std::nullopt};
     }
