@@ -184,3 +184,18 @@ TEST_CASE("braces after a number hold a unit, alone a constant") {
            {"@capacity-factor CF = E/(P*8760 {h})", "@capacitor Q = 5 {F}*U", "@faraday Q = n*{F}",
             "@photon W = {h}*3e14 {Hz}"});
 }
+
+TEST_CASE("a scale's zero added to a difference of readings") {
+    // t_°C = (t_°F − 32)/1.8 converts a reading; a difference converts by /1.8 alone (NIST SP
+    // 811 (2008), B.9). 14.7 psi turns a gauge reading absolute, not a difference of two.
+    const std::string readings = "t_1, t_2 : °F\nΔT : K\np_1, p_2 : psig\nΔp : psi\nT_c : °C\n";
+    passes(readings, {"@difference ΔT = (t_1 - t_2)/1.8", "@reading T_c = (t_1 - 32)/1.8",
+                      "@difference-plus-five ΔT = (t_1 - t_2 + 5)/1.8"});
+    fails_with(readings,
+               {"@difference-minus-32 ΔT = (t_1 - t_2 - 32)/1.8",
+                "@gauge-difference-plus-atmosphere Δp = p_1 - p_2 + 14.7"},
+               plumb::rules::offset_scale);
+    const auto r = run(readings, "@difference-minus-32 ΔT = (t_1 - t_2 - 32)/1.8");
+    CHECK(first(r, plumb::rules::offset_scale).message.find("added to a difference of readings") !=
+          std::string::npos);
+}

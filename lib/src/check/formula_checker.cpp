@@ -1218,6 +1218,60 @@ class checker {
         return false;
     }
 
+    // "(T_ho - t_ci - 32)/1.8", "(p_1g - p_2g) + 14.7": a scale's zero, or the step between
+    // two scales' zeros, added to a difference of readings, which has no zero to move. The
+    // reading conversion applied to a difference; a difference converts by the factor alone.
+    bool report_zero_beside_difference_of_readings(std::span<const operand> terms, double unit,
+                                                   const compact_dimension& dim) {
+        bool readings = false;
+        for (const auto& t : terms)
+            readings = readings || (t.type.known && t.type.point && !is_shift_candidate(t));
+        if (!readings || !(unit > 0) || !std::isfinite(unit))
+            return false;
+        for (const auto& t : terms) {
+            if (!is_shift_candidate(t))
+                continue;
+            const shift sh = shift_of(t);
+            const double si = std::abs(sh.si + sh.written * unit);
+            const double slack = si * sh.tolerance + 1e-9 * si;
+            if (!(si > 0))
+                continue;
+            const auto& rows = offset_rows();
+            for (std::size_t a = 0; a < rows.size(); ++a) {
+                if (!(rows[a].dim == dim))
+                    continue;
+                for (std::size_t b = a; b < rows.size(); ++b) {
+                    if (!(rows[b].dim == dim))
+                        continue;
+                    // A zero itself (b == a), or the step between two zeros.
+                    const double step = b == a
+                                            ? rows[a].unit->offset
+                                            : std::abs(rows[a].unit->offset - rows[b].unit->offset);
+                    if (!(step > 0) || std::abs(si - step) > slack)
+                        continue;
+                    diagnostic& d = report(
+                        rules::offset_scale,
+                        fmt::format(
+                            "{} is {} but is added to a difference of readings, which "
+                            "has no zero to move",
+                            display_text(file_.nodes[t.node].range),
+                            b == a ? fmt::format("the zero of the {} scale", rows[a].unit->symbol)
+                                   : fmt::format("the step between the zeros of the {} "
+                                                 "and {} scales",
+                                                 rows[a].unit->symbol, rows[b].unit->symbol)),
+                        file_.nodes[t.node].range);
+                    add_term(d, t);
+                    d.notes.push_back({"a difference of two readings converts by the factor "
+                                       "between the units alone (a °F difference / 1.8 is a K "
+                                       "difference); only a single reading needs the zero",
+                                       {}});
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
     // The table's (or the formula's) offset unit whose zero is `origin`, to name the scale.
     const unit_definition* scale_named(double origin, double tolerance,
                                        const compact_dimension& dim,
@@ -1423,6 +1477,11 @@ class checker {
                 tolerance = tol;
                 shifted_to_a_zero = true;
             }
+        }
+        if (has_shift && !shifted_to_a_zero && points == 0 && unit_terms >= 2 &&
+            report_zero_beside_difference_of_readings(terms, unit, result.dim)) {
+            literals_.resize(literal_base);
+            return unknown_type();
         }
         if (has_shift && !shifted_to_a_zero && points == 1 && std::abs(origin) <= 1e-9 &&
             report_zero_added_twice(terms, unit, result.dim)) {
