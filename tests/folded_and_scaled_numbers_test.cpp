@@ -199,3 +199,21 @@ TEST_CASE("a scale's zero added to a difference of readings") {
     CHECK(first(r, plumb::rules::offset_scale).message.find("added to a difference of readings") !=
           std::string::npos);
 }
+
+TEST_CASE("a reading set equal to one on another scale: the zero is the finding, not the degree") {
+    // T/K = (t/°F + 459.67)/1.8 (NIST SP 811 (2008), B.9): dividing a °F reading by 1.8 alone
+    // would be a wrong fix, so the zeros are reported first, with the whole conversion.
+    const std::string scales = "T_K : K\nT_F : °F\nT_R : °R\nt_C : °C\n";
+    for (const char* formula : {"@fahrenheit-as-kelvin T_K = T_F", "@wrong-zero T_K = T_F + 273.15",
+                                "@celsius-zero-beside-rankine "
+                                "T_R = t_C + 459.67"}) {
+        CAPTURE(formula);
+        const auto r = run(scales, formula);
+        CHECK(count(r, plumb::rules::unit_scale) == 0);
+        CHECK(count(r, plumb::rules::offset_scale) == 1);
+    }
+    const auto r = run(scales, "@fahrenheit-as-kelvin T_K = T_F");
+    const plumb::diagnostic& d = first(r, plumb::rules::offset_scale);
+    REQUIRE(!d.notes.empty());
+    CHECK(d.notes.back().message.find("(T_F + 459.67)/1.8 beside K") != std::string::npos);
+}

@@ -445,9 +445,23 @@ class checker {
         const char* what = equation ? "equation" : "limit";
         if (a.odd.empty()) {
             double unit = 1.0;
-            if (check_scales(sides, equation ? "sides of this equation" : "sides of this limit",
-                             unit))
+            // "T_K = T_F": where a side is a reading on a scale whose zero differs from the
+            // other's, that is the finding; the degrees' size alone would advise a wrong fix.
+            const bool on_offset_scale =
+                std::any_of(sides.begin(), sides.end(), [](const operand& side) {
+                    return side.type.known && side.type.offset != nullptr;
+                });
+            if (on_offset_scale) {
+                const std::size_t findings_before = out_.size();
                 check_origins(sides, equation);
+                if (out_.size() == findings_before)
+                    check_scales(sides, equation ? "sides of this equation" : "sides of this limit",
+                                 unit);
+            } else if (check_scales(sides,
+                                    equation ? "sides of this equation" : "sides of this limit",
+                                    unit)) {
+                check_origins(sides, equation);
+            }
             return;
         }
         std::string message =
@@ -2215,8 +2229,10 @@ class checker {
             const std::string scale_of_other =
                 other.type.offset != nullptr
                     ? fmt::format("the {} scale", other.type.offset->symbol)
-                    : std::string(temperature ? "the absolute scale (K)"
-                                              : "the absolute scale (Pa, bar, psia)");
+                    : std::string(!temperature ? "the absolute scale (Pa, bar, psia)"
+                                  : std::abs(other.type.scale * 1.8 - 1.0) < 1e-9
+                                      ? "the absolute scale (°R)"
+                                      : "the absolute scale (K)");
             diagnostic& d = report(
                 rules::offset_scale,
                 fmt::format("{} is on the {} scale but {} is on {}: the {} of this {} differ by {} "
@@ -2228,20 +2244,37 @@ class checker {
                 file_.nodes[off.node].range);
             add_term(d, off);
             add_term(d, other);
-            if (unit != nullptr && other.type.offset == nullptr)
-                d.notes.push_back(
-                    {temperature
-                         ? fmt::format("a {} reading plus {:g} is in kelvins: write ({} + {:g})",
-                                       unit->symbol, unit->offset / unit->factor,
-                                       display_text(file_.nodes[off.node].range),
-                                       unit->offset / unit->factor)
-                         : fmt::format("a gauge reading plus the atmospheric pressure is "
-                                       "absolute: write ({} + p_atm), or ({} + {}) at sea level, "
-                                       "the standard atmosphere in {}",
-                                       display_text(file_.nodes[off.node].range),
-                                       display_text(file_.nodes[off.node].range),
-                                       format_factor(unit->offset / unit->factor), unit->symbol),
-                     {}});
+            if (unit != nullptr && other.type.offset == nullptr) {
+                // "T_K = T_F + 273.15": where a number is added already, it is the wrong one;
+                // the advice names the reading, not the whole side with that number in it.
+                const expr_kind kind = file_.nodes[off.node].kind;
+                const bool has_number = kind == expr_kind::add || kind == expr_kind::subtract;
+                const std::string reading = has_number ? std::string("the reading")
+                                                       : display_text(file_.nodes[off.node].range);
+                const std::string zero = format_factor(unit->offset / unit->factor);
+                // A degree the size of the kelvin reads in kelvins from its zero; the °F's in
+                // degrees Rankine, which are 1.8 to the kelvin.
+                const bool kelvin_sized = std::abs(unit->factor - 1.0) < 1e-12;
+                std::string advice =
+                    temperature
+                        ? (kelvin_sized
+                               ? fmt::format("a {} reading plus {} is in kelvins: write ({} + {}) "
+                                             "beside K, ({} + {})*1.8 beside °R",
+                                             unit->symbol, zero, reading, zero, reading, zero)
+                               : fmt::format("a {} reading plus {} is in degrees Rankine, and "
+                                             "that divided by 1.8 in kelvins: write ({} + {}) "
+                                             "beside °R, ({} + {})/1.8 beside K",
+                                             unit->symbol, zero, reading, zero, reading, zero))
+                        : fmt::format("a gauge reading plus the atmospheric pressure is "
+                                      "absolute: write ({} + p_atm), or ({} + {}) at sea level, "
+                                      "the standard atmosphere in {}",
+                                      reading, reading, zero, unit->symbol);
+                if (has_number)
+                    advice = fmt::format("the number added does not put the zero where the other "
+                                         "side has it; {}",
+                                         advice);
+                d.notes.push_back({std::move(advice), {}});
+            }
             return;
         }
     }
