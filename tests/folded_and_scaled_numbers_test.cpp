@@ -217,3 +217,26 @@ TEST_CASE("a reading set equal to one on another scale: the zero is the finding,
     REQUIRE(!d.notes.empty());
     CHECK(d.notes.back().message.find("(T_F + 459.67)/1.8 beside K") != std::string::npos);
 }
+
+TEST_CASE("words in a description that say a difference are whole words") {
+    // An absolute pressure described "headspace" or "wellhead" is a reading: the atmosphere
+    // added to it counts that zero twice (common practice: psia already includes it).
+    for (const char* declaration :
+         {"p : psia \"headspace pressure\"\n", "p : psia \"wellhead pressure\"\n",
+          "p : psia \"pressure at the sprinkler head\"\n"}) {
+        CAPTURE(declaration);
+        const auto r =
+            plumb::check_text("w.plumb", std::string(declaration) + "q : psia \"line pressure\"\n"
+                                                                    "@twice q = p + 14.7\n");
+        CHECK(count(r, plumb::rules::offset_scale) == 1);
+    }
+    // "pressure drops" and "temperature rise" still say a difference: no zero to count twice.
+    for (const char* declaration :
+         {"p : psia \"pressure drops across the strainer\"\n", "p : psia \"temperature rise\"\n"}) {
+        CAPTURE(declaration);
+        const auto r =
+            plumb::check_text("w.plumb", std::string(declaration) + "q : psia \"line pressure\"\n"
+                                                                    "@twice q = p + 14.7\n");
+        CHECK(count(r, plumb::rules::offset_scale) == 0);
+    }
+}
