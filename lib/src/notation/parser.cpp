@@ -55,6 +55,18 @@ template <typename Rule> struct control : pg::normal<Rule> {
         std::is_same_v<Rule, nt::measure_keyword> || std::is_same_v<Rule, nt::study_name> ||
         std::is_same_v<Rule, nt::case_kind>;
 
+    // A hand-written leaf without an action is called directly: through PEGTL's generic path
+    // it stayed a call of its own at every use, which cost more than the leaf (issue 12).
+    template <pg::apply_mode A, pg::rewind_mode M, template <typename...> class Action,
+              template <typename...> class Control, typename Input, typename... States>
+    [[nodiscard, gnu::always_inline]] static bool match(Input& in, States&&... st) {
+        if constexpr (std::is_base_of_v<nt::leaves::hand_written_rule, Rule> &&
+                      std::is_base_of_v<pg::nothing<Rule>, Action<Rule>>)
+            return Rule::match(in);
+        else
+            return pg::normal<Rule>::template match<A, M, Action, Control>(in, st...);
+    }
+
     template <typename Input, typename... States>
     static void start(const Input& in, States&... st) {
         if constexpr (opens_statement)
@@ -426,7 +438,7 @@ template <> struct action<nt::group> {
         s.push_node({expr_kind::group, s.range(in), inner});
     }
 };
-template <> struct action<nt::power_tail> {
+template <> struct action<nt::power_rest> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.push_binary(expr_kind::power);
     }
@@ -437,22 +449,22 @@ template <> struct action<nt::negation> {
         s.push_node({expr_kind::negate, s.range(in), operand});
     }
 };
-template <> struct action<nt::multiply_tail> {
+template <> struct action<nt::multiply_rest> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.push_binary(expr_kind::multiply);
     }
 };
-template <> struct action<nt::divide_tail> {
+template <> struct action<nt::divide_rest> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.push_binary(expr_kind::divide);
     }
 };
-template <> struct action<nt::add_tail> {
+template <> struct action<nt::add_rest> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.push_binary(expr_kind::add);
     }
 };
-template <> struct action<nt::subtract_tail> {
+template <> struct action<nt::subtract_rest> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.push_binary(expr_kind::subtract);
     }
