@@ -233,13 +233,13 @@ struct description : if_must<one<'"'>, description_text, description_close> {};
 // The lookahead that tells a declaration from a formula; a missing name after a comma still
 // counts, so that name_list can say what is missing.
 struct declaration_head : seq<name, star<ws, one<','>, ws, opt<name>>, ws, one<':'>> {};
-// A cheap first test: a declaration's ':' comes before any '=' (names, commas and blanks stand
-// before it; a '\\' may start a continuation whose comment holds anything, so it passes too).
-// Most lines are formulas, and this turns them away before their first name is read (issue 12).
-struct colon_before_equals : seq<star<not_one<':', '=', '\\'>>, one<':', '\\'>> {};
-struct declaration
-    : seq<at<colon_before_equals>, at<declaration_head>, name_list, ws, one<':'>, ws,
-          must<declaration_spec>, opt<ws, constant_assignment>, opt<ws, description>> {};
+// A cheap first test: a declaration starts with the bytes its names, commas and blanks are
+// made of, up to its ':'. Most lines are formulas, and this turns them away at their first
+// operator or '=', before any name is read (issue 12). declaration_head_bytes is hand-written
+// in notation_leaves.hpp; it stands before the declaration in statement, so that a formula
+// never enters the rule the parser's action is on.
+struct declaration : seq<at<declaration_head>, name_list, ws, one<':'>, ws, must<declaration_spec>,
+                         opt<ws, constant_assignment>, opt<ws, description>> {};
 
 // --- Units of one's own --------------------------------------------------------------------
 //   measure mgd = 1e6 gal/d "million US gallons per day"
@@ -360,7 +360,8 @@ struct keyword_statement : sor<use_statement, cells_statement, measure_statement
 // Every keyword statement starts with its keyword ("use", "unit", "cells", "measure", "model",
 // "prototype", "study"): a line that starts with another byte tries none of them (issue 12).
 struct keyword_initial : one<'c', 'm', 'p', 's', 'u'> {};
-struct statement : sor<seq<at<keyword_initial>, keyword_statement>, declaration, formula> {};
+struct statement : sor<seq<at<keyword_initial>, keyword_statement>,
+                       seq<at<declaration_head_bytes>, declaration>, formula> {};
 struct line_end : seq<ws, opt<comment>, eof> {};
 struct line : seq<ws, opt<statement>, must<line_end>> {};
 

@@ -1,8 +1,9 @@
 // Hand-written PEGTL rules for the leaves read at nearly every byte of a formula: a name, a
-// number and a run of blanks. Each reads its whole run in one loop where the combinator form
-// of the same rule went through a rule instantiation, a marker and a peek per byte (issue 12:
-// parse speed). Each matches exactly what the combinator form in its comment matches, and
-// none has a hard-error point, so no message or position depends on them.
+// number and a run of blanks, and the first test that tells a formula from a declaration. Each
+// reads its whole run in one loop where the combinator form of the same rule went through a rule
+// instantiation, a marker and a peek per byte (issue 12: parse speed). Each matches exactly what
+// the combinator form in its comment matches, and none has a hard-error point, so no message or
+// position depends on them.
 #pragma once
 
 #include <tao/pegtl.hpp>
@@ -195,6 +196,25 @@ struct ws : leaves::hand_written<ws> {
     }
 };
 
+// seq<star<head_byte>, one<':', '\\'>>, where a head_byte is one of the bytes a declaration's
+// names, commas and blanks are made of: an ASCII letter or digit, '_', '\'', a byte of a
+// multi-byte UTF-8 sequence, ' ', '\t', '\r' or ','. A '\\' may start a continuation, whose
+// comment holds anything, so it passes too.
+struct declaration_head_bytes : leaves::hand_written<declaration_head_bytes> {
+    template <typename Input> [[nodiscard]] static bool match(Input& in) noexcept {
+        const char* p = in.current();
+        const char* const end = in.end();
+        while (p != end && (leaves::is(*p, leaves::ascii_letter | leaves::decimal_digit |
+                                               leaves::underscore | leaves::high | leaves::blank) ||
+                            *p == '\'' || *p == ','))
+            ++p;
+        if (p == end || (*p != ':' && *p != '\\'))
+            return false;
+        in.bump(static_cast<std::size_t>(p + 1 - in.current()));
+        return true;
+    }
+};
+
 } // namespace plumb::notation
 
 namespace tao::pegtl {
@@ -203,4 +223,6 @@ struct analyze_traits<Name, plumb::notation::name> : analyze_any_traits<> {};
 template <typename Name>
 struct analyze_traits<Name, plumb::notation::number> : analyze_any_traits<> {};
 template <typename Name> struct analyze_traits<Name, plumb::notation::ws> : analyze_opt_traits<> {};
+template <typename Name>
+struct analyze_traits<Name, plumb::notation::declaration_head_bytes> : analyze_any_traits<> {};
 } // namespace tao::pegtl

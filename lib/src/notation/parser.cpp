@@ -196,9 +196,12 @@ struct parse_state {
         return sink != nullptr ? sink->imported_unit(name) : nullptr;
     }
 
-    std::uint32_t push_node(syntax::expr_node n) { return stack.push(out, n); }
-    std::uint32_t pop() { return stack.pop(); }
-    void push_binary(expr_kind kind) { stack.push_binary(out, kind); }
+    // Called from the actions of every operand and operator: inlined there (issue 12).
+    [[gnu::always_inline]] std::uint32_t push_node(syntax::expr_node n) {
+        return stack.push(out, n);
+    }
+    [[gnu::always_inline]] std::uint32_t pop() { return stack.pop(); }
+    [[gnu::always_inline]] void push_binary(expr_kind kind) { stack.push_binary(out, kind); }
     void reset_line() {
         depth = 0;
         in_braces = false;
@@ -1106,16 +1109,38 @@ template <> struct action<nt::tolerance_percent> {
     }
 };
 
+// Where the next '\' of a file stands: only a line with one can continue, and most have none.
+// Found once for all the lines before it rather than searched for on each line (issue 12).
+class backslash_finder {
+  public:
+    explicit backslash_finder(std::string_view text) : text_(text) {}
+    // Whether [from, to) holds a '\'; `from` never decreases from one call to the next.
+    bool any_in(std::size_t from, std::size_t to) {
+        if (!found_ || next_ < from) {
+            const void* at = std::memchr(text_.data() + from, '\\', text_.size() - from);
+            next_ = at ? static_cast<std::size_t>(static_cast<const char*>(at) - text_.data())
+                       : text_.size();
+            found_ = true;
+        }
+        return next_ < to;
+    }
+
+  private:
+    std::string_view text_;
+    std::size_t next_ = 0;
+    bool found_ = false;
+};
+
 // The end of the logical line starting at `begin`: physical lines whose last character
 // before any comment is '\' continue onto the next. Quotes shield '#' inside descriptions.
-std::size_t logical_line_end(std::string_view text, std::size_t begin) {
+std::size_t logical_line_end(std::string_view text, std::size_t begin,
+                             backslash_finder& backslashes) {
     std::size_t pos = begin;
     while (true) {
         const void* nl = std::memchr(text.data() + pos, '\n', text.size() - pos);
         const std::size_t end =
             nl ? static_cast<std::size_t>(static_cast<const char*>(nl) - text.data()) : text.size();
-        // Only a line with a '\' in it can continue; most have none and need no further scan.
-        if (std::memchr(text.data() + pos, '\\', end - pos) == nullptr)
+        if (!backslashes.any_in(pos, end))
             return end;
         std::size_t content_end = end;
         // Most lines have no comment; only those need the quote-aware scan.
@@ -1294,8 +1319,9 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
     // any action of a statement runs. So after a formula that was checked and dropped, only
     // the diagnostics can have moved, and the mark need not be taken again in full (issue 12).
     tree_mark mark(out);
+    backslash_finder backslashes(text);
     while (begin <= text.size()) {
-        const std::size_t end = logical_line_end(text, begin);
+        const std::size_t end = logical_line_end(text, begin, backslashes);
         if (syntax_errors == max_syntax_errors) {
             state.report(rules::syntax,
                          "too many syntax errors; the rest of this file is not checked (is it a "
