@@ -108,11 +108,14 @@ struct primary : sor<symbol_or_call, number_term, group, quantity_term> {};
 // Each operator's tail is tried after every operand and mostly fails at its first byte; the
 // parser's action is on the part after the operator ("_rest"), which once entered never
 // fails, so the failing attempt sets no mark for an action (issue 12: parse speed).
+// The blanks after an operand are read once, by power, right after its primary: every unary
+// ends with them read, so the operator tails that follow test their first byte at once. No
+// operand's own rule takes them in, so no node's range holds them.
 struct unary;
 struct power_operand : seq<unary> {};
 struct power_rest : seq<ws, must<power_operand>> {};
-struct power_tail : seq<ws, one<'^'>, power_rest> {};
-struct power : seq<primary, opt<power_tail>> {};
+struct power_tail : seq<one<'^'>, power_rest> {};
+struct power : seq<primary, ws, opt<power_tail>> {};
 struct negated_operand : seq<unary> {};
 struct negation : seq<one<'-'>, ws, must<negated_operand>> {};
 struct positive_operand : seq<unary> {};
@@ -128,15 +131,14 @@ struct multiply_rest : seq<must<single_star>, ws, must<factor>> {};
 struct multiply_tail : seq<multiply_sign, multiply_rest> {};
 struct divide_rest : seq<ws, must<factor>> {};
 struct divide_tail : seq<one<'/'>, divide_rest> {};
-// The blanks before an operator are read once for both operators (issue 12: parse speed).
-struct product : seq<unary, star<ws, sor<multiply_tail, divide_tail>>> {};
+struct product : seq<unary, star<sor<multiply_tail, divide_tail>>> {};
 
 struct term : product {};
 struct add_rest : seq<ws, must<term>> {};
 struct add_tail : seq<one<'+'>, add_rest> {};
 struct subtract_rest : seq<ws, must<term>> {};
 struct subtract_tail : seq<one<'-'>, subtract_rest> {};
-struct expression : seq<product, star<ws, sor<add_tail, subtract_tail>>> {};
+struct expression : seq<product, star<sor<add_tail, subtract_tail>>> {};
 
 // --- Formulas: equations and limits -------------------------------------------------------
 struct less_equal : sor<TAO_PEGTL_STRING("<="), seq<non_ascii, utf8::one<0x2264>>> {};

@@ -448,8 +448,10 @@ template <> struct action<nt::power_rest> {
 };
 template <> struct action<nt::negation> {
     template <typename In> static void apply(const In& in, parse_state& s) {
+        // Up to the operand's end: the blanks after it are read but belong to no node.
         const std::uint32_t operand = s.pop();
-        s.push_node({expr_kind::negate, s.range(in), operand});
+        const span range{s.range(in).begin, s.out.nodes[operand].range.end};
+        s.push_node({expr_kind::negate, range, operand});
     }
 };
 template <> struct action<nt::multiply_rest> {
@@ -504,8 +506,10 @@ template <> struct action<nt::side> {
 template <> struct action<nt::formula> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const auto count = static_cast<std::uint32_t>(s.out.sides.size()) - s.formula_first_side;
+        // Up to the last side's end: the blanks after it are read but belong to no formula.
+        const span range{s.range(in).begin, s.out.nodes[s.out.sides.back().root].range.end};
         s.out.formulas.push_back(
-            {s.range(in), s.pending_label, s.formula_first_side, count, s.line_has_inferred});
+            {range, s.pending_label, s.formula_first_side, count, s.line_has_inferred});
     }
 };
 
