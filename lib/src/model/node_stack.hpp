@@ -12,19 +12,9 @@ namespace plumb::syntax {
 struct node_stack {
     std::vector<std::uint32_t> operands; // indices into the tree's nodes, innermost last
 
+    // Inlined into every action, as a call cost more than the append itself; each push_back
+    // grows out of line (issue 12: parse speed).
     [[gnu::always_inline]] std::uint32_t push(parsed_file& tree, expr_node n) {
-        // Growing is rare and kept out of line, so the common append saves no registers; the
-        // append itself is inlined into every action, as a call cost more than it (issue 12:
-        // parse speed).
-        if (tree.nodes.size() == tree.nodes.capacity() || operands.size() == operands.capacity())
-            [[unlikely]]
-            return push_growing(tree, n);
-        const auto index = static_cast<std::uint32_t>(tree.nodes.size());
-        tree.nodes.push_back(n);
-        operands.push_back(index);
-        return index;
-    }
-    [[gnu::noinline]] std::uint32_t push_growing(parsed_file& tree, expr_node n) {
         const auto index = static_cast<std::uint32_t>(tree.nodes.size());
         tree.nodes.push_back(n);
         operands.push_back(index);
