@@ -6,6 +6,8 @@
 // Rules carry no error policy: notation_errors.hpp maps the hard-error points to messages.
 #pragma once
 
+#include "plumb/notation_leaves.hpp"
+
 #include <tao/pegtl.hpp>
 
 namespace plumb::notation {
@@ -16,7 +18,7 @@ using namespace tao::pegtl; // NOLINT: the grammar reads better with unqualified
 struct comment : seq<one<'#'>, star<not_one<'\n'>>> {};
 struct continuation : seq<one<'\\'>, star<one<' ', '\t', '\r'>>, opt<comment>, one<'\n'>> {};
 struct space : one<' ', '\t', '\r'> {};
-struct ws : star<sor<space, continuation>> {};
+// ws, star<sor<space, continuation>>, is hand-written in notation_leaves.hpp.
 
 // --- Names --------------------------------------------------------------------------------
 // Latin-1 and Latin Extended letters without × (U+00D7) and ÷ (U+00F7); the micro sign;
@@ -28,13 +30,13 @@ struct utf8_letter : seq<non_ascii, utf8::ranges<0xB5, 0xB5, 0xC0, 0xD6, 0xD8, 0
                                                  0x370, 0x3FF, 0x1F00, 0x1FFF>> {};
 struct letter : sor<ranges<'a', 'z', 'A', 'Z'>, utf8_letter> {};
 struct name_char : sor<ranges<'a', 'z', 'A', 'Z', '0', '9', '_'>, utf8_letter> {};
-struct name : seq<letter, star<name_char>, star<one<'\''>>> {};
+// name, seq<letter, star<name_char>, star<one<'\''>>>, is hand-written in notation_leaves.hpp.
 
 // --- Numbers ------------------------------------------------------------------------------
 struct digits : plus<digit> {};
 struct decimal_exponent : seq<one<'e', 'E'>, opt<one<'+', '-'>>, digits> {};
-struct number : seq<sor<seq<digits, opt<one<'.'>, star<digit>>>, seq<one<'.'>, digits>>,
-                    opt<decimal_exponent>> {};
+// number, seq<sor<seq<digits, opt<one<'.'>, star<digit>>>, seq<one<'.'>, digits>>,
+// opt<decimal_exponent>>, is hand-written in notation_leaves.hpp.
 // "2g" is a product written without its operator; say so instead of failing further on.
 struct number_end : not_at<name_char> {};
 
@@ -103,10 +105,17 @@ struct symbol_or_call : seq<symbol, opt<star<space>, call_arguments>> {};
 // parse: the commonest come first (issue 12: parse speed).
 struct primary : sor<symbol_or_call, number_term, group, quantity_term> {};
 
+// Each operator's tail is tried after every operand and mostly fails at its first byte; the
+// parser's action is on the part after the operator ("_rest"), which once entered never
+// fails, so the failing attempt sets no mark for an action (issue 12: parse speed).
+// The blanks after an operand are read once, by power, right after its primary: every unary
+// ends with them read, so the operator tails that follow test their first byte at once. No
+// operand's own rule takes them in, so no node's range holds them.
 struct unary;
 struct power_operand : seq<unary> {};
-struct power_tail : seq<ws, one<'^'>, ws, must<power_operand>> {};
-struct power : seq<primary, opt<power_tail>> {};
+struct power_rest : seq<ws, must<power_operand>> {};
+struct power_tail : seq<one<'^'>, power_rest> {};
+struct power : seq<primary, ws, opt<power_tail>> {};
 struct negated_operand : seq<unary> {};
 struct negation : seq<one<'-'>, ws, must<negated_operand>> {};
 struct positive_operand : seq<unary> {};
@@ -118,15 +127,18 @@ struct multiply_sign : sor<one<'*'>, seq<non_ascii, utf8::one<0xB7, 0xD7, 0x22C5
 struct factor : unary {};
 // "x**2" is another notation's power; point at it rather than at the second '*'.
 struct single_star : not_at<one<'*'>> {};
-struct multiply_tail : seq<multiply_sign, must<single_star>, ws, must<factor>> {};
-struct divide_tail : seq<one<'/'>, ws, must<factor>> {};
-// The blanks before an operator are read once for both operators (issue 12: parse speed).
-struct product : seq<unary, star<ws, sor<multiply_tail, divide_tail>>> {};
+struct multiply_rest : seq<must<single_star>, ws, must<factor>> {};
+struct multiply_tail : seq<multiply_sign, multiply_rest> {};
+struct divide_rest : seq<ws, must<factor>> {};
+struct divide_tail : seq<one<'/'>, divide_rest> {};
+struct product : seq<unary, star<sor<multiply_tail, divide_tail>>> {};
 
 struct term : product {};
-struct add_tail : seq<one<'+'>, ws, must<term>> {};
-struct subtract_tail : seq<one<'-'>, ws, must<term>> {};
-struct expression : seq<product, star<ws, sor<add_tail, subtract_tail>>> {};
+struct add_rest : seq<ws, must<term>> {};
+struct add_tail : seq<one<'+'>, add_rest> {};
+struct subtract_rest : seq<ws, must<term>> {};
+struct subtract_tail : seq<one<'-'>, subtract_rest> {};
+struct expression : seq<product, star<sor<add_tail, subtract_tail>>> {};
 
 // --- Formulas: equations and limits -------------------------------------------------------
 struct less_equal : sor<TAO_PEGTL_STRING("<="), seq<non_ascii, utf8::one<0x2264>>> {};
@@ -223,13 +235,13 @@ struct description : if_must<one<'"'>, description_text, description_close> {};
 // The lookahead that tells a declaration from a formula; a missing name after a comma still
 // counts, so that name_list can say what is missing.
 struct declaration_head : seq<name, star<ws, one<','>, ws, opt<name>>, ws, one<':'>> {};
-// A cheap first test: a declaration's ':' comes before any '=' (names, commas and blanks stand
-// before it; a '\\' may start a continuation whose comment holds anything, so it passes too).
-// Most lines are formulas, and this turns them away before their first name is read (issue 12).
-struct colon_before_equals : seq<star<not_one<':', '=', '\\'>>, one<':', '\\'>> {};
-struct declaration
-    : seq<at<colon_before_equals>, at<declaration_head>, name_list, ws, one<':'>, ws,
-          must<declaration_spec>, opt<ws, constant_assignment>, opt<ws, description>> {};
+// A cheap first test: a declaration starts with the bytes its names, commas and blanks are
+// made of, up to its ':'. Most lines are formulas, and this turns them away at their first
+// operator or '=', before any name is read (issue 12). declaration_head_bytes is hand-written
+// in notation_leaves.hpp; it stands before the declaration in statement, so that a formula
+// never enters the rule the parser's action is on.
+struct declaration : seq<at<declaration_head>, name_list, ws, one<':'>, ws, must<declaration_spec>,
+                         opt<ws, constant_assignment>, opt<ws, description>> {};
 
 // --- Units of one's own --------------------------------------------------------------------
 //   measure mgd = 1e6 gal/d "million US gallons per day"
@@ -350,7 +362,8 @@ struct keyword_statement : sor<use_statement, cells_statement, measure_statement
 // Every keyword statement starts with its keyword ("use", "unit", "cells", "measure", "model",
 // "prototype", "study"): a line that starts with another byte tries none of them (issue 12).
 struct keyword_initial : one<'c', 'm', 'p', 's', 'u'> {};
-struct statement : sor<seq<at<keyword_initial>, keyword_statement>, declaration, formula> {};
+struct statement : sor<seq<at<keyword_initial>, keyword_statement>,
+                       seq<at<declaration_head_bytes>, declaration>, formula> {};
 struct line_end : seq<ws, opt<comment>, eof> {};
 struct line : seq<ws, opt<statement>, must<line_end>> {};
 

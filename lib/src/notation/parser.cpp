@@ -55,6 +55,18 @@ template <typename Rule> struct control : pg::normal<Rule> {
         std::is_same_v<Rule, nt::measure_keyword> || std::is_same_v<Rule, nt::study_name> ||
         std::is_same_v<Rule, nt::case_kind>;
 
+    // A hand-written leaf without an action is called directly: through PEGTL's generic path
+    // it stayed a call of its own at every use, which cost more than the leaf (issue 12).
+    template <pg::apply_mode A, pg::rewind_mode M, template <typename...> class Action,
+              template <typename...> class Control, typename Input, typename... States>
+    [[nodiscard, gnu::always_inline]] static bool match(Input& in, States&&... st) {
+        if constexpr (std::is_base_of_v<nt::leaves::hand_written_rule, Rule> &&
+                      std::is_base_of_v<pg::nothing<Rule>, Action<Rule>>)
+            return Rule::match(in);
+        else
+            return pg::normal<Rule>::template match<A, M, Action, Control>(in, st...);
+    }
+
     template <typename Input, typename... States>
     static void start(const Input& in, States&... st) {
         if constexpr (opens_statement)
@@ -185,9 +197,12 @@ struct parse_state {
         return sink != nullptr ? sink->imported_unit(name) : nullptr;
     }
 
-    std::uint32_t push_node(syntax::expr_node n) { return stack.push(out, n); }
-    std::uint32_t pop() { return stack.pop(); }
-    void push_binary(expr_kind kind) { stack.push_binary(out, kind); }
+    // Called from the actions of every operand and operator: inlined there (issue 12).
+    [[gnu::always_inline]] std::uint32_t push_node(syntax::expr_node n) {
+        return stack.push(out, n);
+    }
+    [[gnu::always_inline]] std::uint32_t pop() { return stack.pop(); }
+    [[gnu::always_inline]] void push_binary(expr_kind kind) { stack.push_binary(out, kind); }
     void reset_line() {
         depth = 0;
         in_braces = false;
@@ -434,33 +449,35 @@ template <> struct action<nt::group> {
         s.push_node({expr_kind::group, s.range(in), inner});
     }
 };
-template <> struct action<nt::power_tail> {
+template <> struct action<nt::power_rest> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.push_binary(expr_kind::power);
     }
 };
 template <> struct action<nt::negation> {
     template <typename In> static void apply(const In& in, parse_state& s) {
+        // Up to the operand's end: the blanks after it are read but belong to no node.
         const std::uint32_t operand = s.pop();
-        s.push_node({expr_kind::negate, s.range(in), operand});
+        const span range{s.range(in).begin, s.out.nodes[operand].range.end};
+        s.push_node({expr_kind::negate, range, operand});
     }
 };
-template <> struct action<nt::multiply_tail> {
+template <> struct action<nt::multiply_rest> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.push_binary(expr_kind::multiply);
     }
 };
-template <> struct action<nt::divide_tail> {
+template <> struct action<nt::divide_rest> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.push_binary(expr_kind::divide);
     }
 };
-template <> struct action<nt::add_tail> {
+template <> struct action<nt::add_rest> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.push_binary(expr_kind::add);
     }
 };
-template <> struct action<nt::subtract_tail> {
+template <> struct action<nt::subtract_rest> {
     template <typename In> static void apply(const In& /*in*/, parse_state& s) {
         s.push_binary(expr_kind::subtract);
     }
@@ -497,8 +514,10 @@ template <> struct action<nt::side> {
 template <> struct action<nt::formula> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const auto count = static_cast<std::uint32_t>(s.out.sides.size()) - s.formula_first_side;
+        // Up to the last side's end: the blanks after it are read but belong to no formula.
+        const span range{s.range(in).begin, s.out.nodes[s.out.sides.back().root].range.end};
         s.out.formulas.push_back(
-            {s.range(in), s.pending_label, s.formula_first_side, count, s.line_has_inferred});
+            {range, s.pending_label, s.formula_first_side, count, s.line_has_inferred});
     }
 };
 
@@ -1102,16 +1121,38 @@ template <> struct action<nt::tolerance_percent> {
     }
 };
 
+// Where the next '\' of a file stands: only a line with one can continue, and most have none.
+// Found once for all the lines before it rather than searched for on each line (issue 12).
+class backslash_finder {
+  public:
+    explicit backslash_finder(std::string_view text) : text_(text) {}
+    // Whether [from, to) holds a '\'; `from` never decreases from one call to the next.
+    bool any_in(std::size_t from, std::size_t to) {
+        if (!found_ || next_ < from) {
+            const void* at = std::memchr(text_.data() + from, '\\', text_.size() - from);
+            next_ = at ? static_cast<std::size_t>(static_cast<const char*>(at) - text_.data())
+                       : text_.size();
+            found_ = true;
+        }
+        return next_ < to;
+    }
+
+  private:
+    std::string_view text_;
+    std::size_t next_ = 0;
+    bool found_ = false;
+};
+
 // The end of the logical line starting at `begin`: physical lines whose last character
 // before any comment is '\' continue onto the next. Quotes shield '#' inside descriptions.
-std::size_t logical_line_end(std::string_view text, std::size_t begin) {
+std::size_t logical_line_end(std::string_view text, std::size_t begin,
+                             backslash_finder& backslashes) {
     std::size_t pos = begin;
     while (true) {
         const void* nl = std::memchr(text.data() + pos, '\n', text.size() - pos);
         const std::size_t end =
             nl ? static_cast<std::size_t>(static_cast<const char*>(nl) - text.data()) : text.size();
-        // Only a line with a '\' in it can continue; most have none and need no further scan.
-        if (std::memchr(text.data() + pos, '\\', end - pos) == nullptr)
+        if (!backslashes.any_in(pos, end))
             return end;
         std::size_t content_end = end;
         // Most lines have no comment; only those need the quote-aware scan.
@@ -1290,8 +1331,9 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
     // any action of a statement runs. So after a formula that was checked and dropped, only
     // the diagnostics can have moved, and the mark need not be taken again in full (issue 12).
     tree_mark mark(out);
+    backslash_finder backslashes(text);
     while (begin <= text.size()) {
-        const std::size_t end = logical_line_end(text, begin);
+        const std::size_t end = logical_line_end(text, begin, backslashes);
         if (syntax_errors == max_syntax_errors) {
             state.report(rules::syntax,
                          "too many syntax errors; the rest of this file is not checked (is it a "
