@@ -1597,6 +1597,46 @@ class checker {
             std::span<const scale_literal>(literals_.data() + t.literal_begin, t.literal_count)};
     }
 
+    // The route below for "A = π*D^2/4": every operand in one unit (as reconcile() finds at
+    // its first step, without its search) and no number that looks like a conversion (which
+    // report_unneeded_factor() would name). True, with `unit` as that route sets it, exactly
+    // where that route would return true without a finding; false leaves it to that route.
+    bool units_agree_with_plain_numbers(std::span<const operand> ops, double& unit) const {
+        static const rational one(1);
+        const typed_term* first = nullptr;
+        bool dimensionless = false;
+        for (const auto& op : ops) {
+            if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale))
+                continue;
+            dimensionless = op.type.dim.is_dimensionless();
+            if (op.type.numeric && !dimensionless)
+                continue;
+            if (first == nullptr) {
+                first = &op.type;
+                continue;
+            }
+            const double s = op.type.numeric ? 1.0 : op.type.scale;
+            const double s0 = first->numeric ? 1.0 : first->scale;
+            if (s != s0)
+                return false;
+            const rational* exact =
+                op.type.numeric ? &one : (op.type.exact_scale ? &*op.type.exact_scale : nullptr);
+            const rational* exact0 =
+                first->numeric ? &one : (first->exact_scale ? &*first->exact_scale : nullptr);
+            if (exact != nullptr && exact0 != nullptr && !(*exact == *exact0))
+                return false;
+        }
+        for (const auto& op : ops) {
+            if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale) || op.type.numeric)
+                continue;
+            for (std::uint32_t l = 0; l < op.type.literal_count; ++l)
+                if (looks_like_conversion(literals_[op.type.literal_begin + l], !dimensionless))
+                    return false;
+        }
+        unit = first == nullptr ? 1.0 : (first->numeric ? 1.0 : first->scale);
+        return true;
+    }
+
     // Terms of one dimension in different units give numbers off by a factor, unless numbers
     // in the formula supply that conversion, the right way round. `unit` receives the SI value
     // of the unit they agree in. False when a finding was reported.
@@ -1611,6 +1651,7 @@ class checker {
             bool all_exact = true;
             double first = 0.0;
             bool plain = true;
+            bool with_numbers = false;
             for (const auto& op : ops) {
                 if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale))
                     continue;
@@ -1618,7 +1659,7 @@ class checker {
                 if (number && !op.type.dim.is_dimensionless())
                     continue; // a number in the others' unit
                 if (!number && op.type.literal_count != 0) {
-                    plain = false;
+                    with_numbers = true;
                     break;
                 }
                 const double s = number ? 1.0 : op.type.scale;
@@ -1634,12 +1675,14 @@ class checker {
                     break;
                 }
             }
-            if (plain) {
+            if (plain && !with_numbers) {
                 unit = first == 0.0 ? 1.0 : first;
                 if (exact_unit != nullptr && all_exact)
                     *exact_unit = exact_first != nullptr ? *exact_first : rational(1);
                 return true;
             }
+            if (with_numbers && units_agree_with_plain_numbers(ops, unit))
+                return true;
         }
         const std::size_t base = scaled_.size();
         bool dimensionless = false;
