@@ -889,10 +889,32 @@ class checker {
         return t;
     }
 
-    typed_term eval_symbol(const syntax::expr_node& n) {
+    // Every symbol of every formula comes here: the rare cases are kept out of line, so that
+    // the common one, a known symbol's kept type, needs no large frame.
+    [[gnu::noinline]] typed_term eval_symbol(const syntax::expr_node& n) {
         const std::string_view name = text(n.range);
         symbol_entry* entry = symbols_.find(name);
-        if (entry == nullptr) {
+        if (entry == nullptr) [[unlikely]]
+            return report_undeclared(n, name);
+        if (entry->checked_type) {
+            entry->used = true;
+            return *entry->checked_type;
+        }
+        return first_use_type(entry, name);
+    }
+
+    [[gnu::noinline]] typed_term first_use_type(symbol_entry* entry, std::string_view name) {
+        typed_term t = declared_type(entry, name);
+        // A dimension past the 16-bit form is held in this check's arena only, so a type
+        // that refers to it must not outlive the check.
+        if (!entry->dim || entry->compact_dim)
+            entry->checked_type = t;
+        return t;
+    }
+
+    [[gnu::noinline, gnu::cold]] typed_term report_undeclared(const syntax::expr_node& n,
+                                                              std::string_view name) {
+        {
             if (defer_unknown_)
                 throw symbol_not_yet_declared{};
             diagnostic& d =
@@ -926,16 +948,6 @@ class checker {
                                    {}});
             return unknown_type();
         }
-        if (entry->checked_type) {
-            entry->used = true;
-            return *entry->checked_type;
-        }
-        typed_term t = declared_type(entry, name);
-        // A dimension past the 16-bit form is held in this check's arena only, so a type
-        // that refers to it must not outlive the check.
-        if (!entry->dim || entry->compact_dim)
-            entry->checked_type = t;
-        return t;
     }
 
     // Worked out on a symbol's first use and kept in its entry.

@@ -76,15 +76,18 @@ class symbol_table {
     static constexpr std::uint32_t empty_slot = 0xFFFFFFFFU;
     // A name's first eight bytes (all of a short name's) as one word, and its length: a slot
     // keeps both, so a look-up compares two words rather than the bytes of each name it meets.
+    // The length is held in 32 bits, a longer one as the greatest: only names of up to eight
+    // bytes are told apart by the key alone, and any other is compared in full.
     struct name_key {
         std::uint64_t word = 0;
-        std::uint64_t size = 0;
-        friend bool operator==(const name_key&, const name_key&) = default;
+        std::uint32_t size = 0;
     };
     struct slot {
-        name_key key;
+        std::uint64_t word = 0;
+        std::uint32_t size = 0;
         std::uint32_t index = empty_slot;
     };
+    static_assert(sizeof(slot) == 16, "a slot's place in the table is a shift, not a multiply");
 
     std::vector<std::string_view> names_;
     std::vector<symbol_entry> entries_; // parallel to names_; never shrinks, so pointers into
@@ -107,7 +110,8 @@ class symbol_table {
             const slot& s = slots_[i];
             if (s.index == empty_slot)
                 return empty_slot;
-            if (s.key == key && (name.size() <= 8 || same_name(names_[s.index], name)))
+            if (s.word == key.word && s.size == key.size &&
+                (name.size() <= 8 || same_name(names_[s.index], name)))
                 return s.index;
         }
     }
@@ -145,7 +149,8 @@ class symbol_table {
                 (static_cast<std::uint64_t>(static_cast<unsigned char>(p[n / 2])) << 8) |
                 (static_cast<std::uint64_t>(static_cast<unsigned char>(p[n - 1])) << 16);
         }
-        return {w, n};
+        constexpr std::size_t longest = 0xFFFFFFFFU;
+        return {w, static_cast<std::uint32_t>(std::min(n, longest))};
     }
 
     // Names are short: the key is the whole of one up to eight bytes, mixed once; a longer
@@ -166,7 +171,7 @@ class symbol_table {
         std::size_t i = hash(names_[index], key) & mask();
         while (slots_[i].index != empty_slot)
             i = (i + 1) & mask();
-        slots_[i] = {key, index};
+        slots_[i] = {key.word, key.size, index};
     }
     void grow() {
         slots_.assign(slots_.empty() ? 64 : slots_.size() * 2, slot{});
