@@ -2552,6 +2552,12 @@ class checker {
         return result;
     }
 
+    // A scale raised to a power: most are SI units, whose scale 1 stays 1 (as std::pow gives
+    // for any exponent) without a call.
+    static double unit_power(double scale, double exponent) {
+        return scale == 1.0 ? 1.0 : std::pow(scale, exponent);
+    }
+
     typed_term apply_power(const typed_term& base, const typed_term& exponent,
                            std::uint32_t base_node, std::uint32_t exponent_node) {
         if (exponent.known && !exponent.dim.is_dimensionless()) {
@@ -2583,7 +2589,7 @@ class checker {
         result.numeric = base.numeric && exponent.numeric;
         result.exact_scale.reset();
         if (exponent.value) {
-            result.scale = std::pow(base.scale, exponent.value->to_double());
+            result.scale = unit_power(base.scale, exponent.value->to_double());
             // A whole power stays exact; a rational one falls back to the double.
             result.exact_scale = plumb::exact_power(base.exact_scale, *exponent.value);
         }
@@ -2741,7 +2747,7 @@ class checker {
                 return unknown_type();
             }
             result.dim = args[0].type.dim.pow(f->power);
-            result.scale = std::pow(args[0].type.scale, f->power.to_double());
+            result.scale = unit_power(args[0].type.scale, f->power.to_double());
             result.exact_scale = plumb::exact_power(args[0].type.exact_scale, f->power);
             return result;
         case function_rule::same:
