@@ -405,7 +405,8 @@ class checker {
                 side_hint_ = &operands_[base].type; // on the type stack, which never moves
                 side_hint_node_ = s.root;
             }
-            operands_.push_back({push_type(eval(s.root), types_base, f.side_count), s.root});
+            operands_.push_back(
+                {push_type([&] { return eval(s.root); }, types_base, f.side_count), s.root});
             side_hint_node_ = syntax::no_index;
         }
         const scratch_region region(operands_, base, types_, types_base);
@@ -510,9 +511,11 @@ class checker {
 
     // An operand's type, on the type stack; shared with an equal one of the same meeting point
     // where there are many, since looking for one costs more than a short one saves.
-    const typed_term& push_type(const typed_term& t, std::size_t region, std::size_t operands) {
+    template <class Make>
+    const typed_term& push_type(Make&& make, std::size_t region, std::size_t operands) {
         constexpr std::size_t shared_from = 16;
-        return operands >= shared_from ? types_.push_shared(t, region) : types_.push(t);
+        return operands >= shared_from ? types_.push_shared(make(), region)
+                                       : types_.push_made(make);
     }
 
     // 'text' for messages, shortened so one long term cannot swamp a line.
@@ -1006,7 +1009,8 @@ class checker {
             const std::uint32_t node = k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
-            const operand term{push_type(eval(node), types_base, term_count), node, subtracted};
+            const operand term{push_type([&] { return eval(node); }, types_base, term_count), node,
+                               subtracted};
             const typed_term& t = term.type;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
@@ -2668,7 +2672,7 @@ class checker {
                 prefer_dimensionless_ = node;
             if (square_root)
                 square_root_argument_ = node;
-            operands_.push_back({types_.push(eval(node)), node});
+            operands_.push_back({types_.push_made([&] { return eval(node); }), node});
             prefer_dimensionless_ = saved;
             square_root_argument_ = saved_root;
         }
