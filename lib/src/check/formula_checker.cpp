@@ -19,6 +19,7 @@
 #include <array>
 #include <bit>
 #include <cmath>
+#include <cstddef>
 #include <fmt/format.h>
 #include <limits>
 #include <numbers>
@@ -951,6 +952,20 @@ class checker {
                                    {}});
             return unknown_type();
         }
+    }
+
+    // A symbol's type as its entry keeps it, marked used as eval_symbol marks it; null where
+    // eval_symbol has more to do (not a symbol, undeclared, first use). Valid until the next
+    // symbol is declared, which no check does.
+    const typed_term* kept_symbol_type(std::uint32_t index) {
+        const syntax::expr_node& n = file_.nodes[index];
+        if (n.kind != expr_kind::symbol)
+            return nullptr;
+        symbol_entry* entry = symbols_.find(text(n.range));
+        if (entry == nullptr || !entry->checked_type || entry->checked_type->reading_or_difference)
+            return nullptr;
+        entry->used = true;
+        return &*entry->checked_type;
     }
 
     // Worked out on a symbol's first use and kept in its entry.
@@ -2427,7 +2442,10 @@ class checker {
             spine_.push_back(n);
             n = file_.nodes[n].lhs;
         }
-        typed_term result = eval(n);
+        const typed_term* kept = kept_symbol_type(n);
+        typed_term result = kept != nullptr ? *kept : eval(n);
+        if (kept != nullptr)
+            result.literal_begin = static_cast<std::uint32_t>(literals_.size());
         result.zero = false;
         std::uint32_t offset_node = n;
         std::size_t arena_place = compact_dimension::no_place;
@@ -2454,9 +2472,17 @@ class checker {
         for (std::size_t k = spine_.size(); k > spine_base; --k) {
             const syntax::expr_node& op = file_.nodes[spine_[k - 1]];
             const bool divided = op.kind == expr_kind::divide;
-            typed_term t = eval(op.rhs);
-            if (t.reading_or_difference)
-                t.offset = nullptr;
+            // Most factors are symbols, whose types are read where their entries keep them
+            // rather than copied; any other is made in `evaluated`.
+            alignas(typed_term) std::byte evaluated[sizeof(typed_term)];
+            const typed_term* factor = kept_symbol_type(op.rhs);
+            if (factor == nullptr) {
+                typed_term* made = ::new (static_cast<void*>(evaluated)) typed_term(eval(op.rhs));
+                if (made->reading_or_difference)
+                    made->offset = nullptr;
+                factor = made;
+            }
+            const typed_term& t = *factor;
             if (divided)
                 for (std::uint32_t i = 0; i < t.literal_count; ++i)
                     literals_[t.literal_begin + i].exponent =
