@@ -2572,7 +2572,8 @@ class checker {
             } else {
                 report_offset(gauge_in_product->node, *gauge_in_product->unit,
                               gauge_in_product->where);
-                return unknown_type();
+                result = unknown_type();
+                return result; // as above
             }
         }
         if (!result.known)
