@@ -29,7 +29,8 @@ class compact_dimension {
     [[nodiscard]] dimension expand() const;
     [[nodiscard]] bool is_dimensionless() const { return same_bits(*this, compact_dimension{}); }
 
-    friend bool operator==(const compact_dimension& a, const compact_dimension& b) {
+    [[gnu::always_inline]] friend bool operator==(const compact_dimension& a,
+                                                  const compact_dimension& b) {
         if (a.den_ != 0 && b.den_ != 0) // both fitted: the form is canonical
             return same_bits(a, b);
         // A dimension that fits is never in the arena, so only two arena ones can be equal.
