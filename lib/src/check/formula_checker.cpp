@@ -383,7 +383,10 @@ class checker {
     }
 
     [[gnu::noinline]] typed_term eval_power(const syntax::expr_node& n) {
-        const typed_term base = eval(n.lhs);
+        const typed_term* kept = kept_symbol_type(n.lhs); // V^2: most bases are symbols
+        typed_term base = kept != nullptr ? *kept : eval(n.lhs);
+        if (kept != nullptr)
+            base.literal_begin = static_cast<std::uint32_t>(literals_.size());
         const typed_term exponent = eval(n.rhs);
         return apply_power(base, exponent, n.lhs, n.rhs);
     }
