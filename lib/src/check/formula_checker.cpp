@@ -19,6 +19,7 @@
 #include <array>
 #include <bit>
 #include <cmath>
+#include <cstddef>
 #include <fmt/format.h>
 #include <limits>
 #include <numbers>
@@ -424,7 +425,10 @@ class checker {
     }
 
     [[gnu::noinline]] typed_term eval_power(const syntax::expr_node& n) {
-        const typed_term base = eval(n.lhs);
+        const typed_term* kept = kept_symbol_type(n.lhs); // V^2: most bases are symbols
+        typed_term base = kept != nullptr ? *kept : eval(n.lhs);
+        if (kept != nullptr)
+            base.literal_begin = static_cast<std::uint32_t>(literals_.size());
         const typed_term exponent = eval(n.rhs);
         return apply_power(base, exponent, n.lhs, n.rhs);
     }
@@ -447,7 +451,8 @@ class checker {
                 side_hint_ = &operands_[base].type; // on the type stack, which never moves
                 side_hint_node_ = s.root;
             }
-            operands_.push_back({push_type(eval(s.root), types_base, f.side_count), s.root});
+            operands_.push_back(
+                {push_type([&] { return eval(s.root); }, types_base, f.side_count), s.root});
             side_hint_node_ = syntax::no_index;
         }
         const scratch_region region(operands_, base, types_, types_base);
@@ -566,9 +571,11 @@ class checker {
 
     // An operand's type, on the type stack; shared with an equal one of the same meeting point
     // where there are many, since looking for one costs more than a short one saves.
-    const typed_term& push_type(const typed_term& t, std::size_t region, std::size_t operands) {
+    template <class Make>
+    const typed_term& push_type(Make&& make, std::size_t region, std::size_t operands) {
         constexpr std::size_t shared_from = 16;
-        return operands >= shared_from ? types_.push_shared(t, region) : types_.push(t);
+        return operands >= shared_from ? types_.push_shared(make(), region)
+                                       : types_.push_made(make);
     }
 
     // 'text' for messages, shortened so one long term cannot swamp a line.
@@ -945,10 +952,32 @@ class checker {
         return t;
     }
 
-    typed_term eval_symbol(const syntax::expr_node& n) {
+    // Every symbol of every formula comes here: the rare cases are kept out of line, so that
+    // the common one, a known symbol's kept type, needs no large frame.
+    [[gnu::noinline]] typed_term eval_symbol(const syntax::expr_node& n) {
         const std::string_view name = text(n.range);
         symbol_entry* entry = symbols_.find(name);
-        if (entry == nullptr) {
+        if (entry == nullptr) [[unlikely]]
+            return report_undeclared(n, name);
+        if (entry->checked_type) {
+            entry->used = true;
+            return *entry->checked_type;
+        }
+        return first_use_type(entry, name);
+    }
+
+    [[gnu::noinline]] typed_term first_use_type(symbol_entry* entry, std::string_view name) {
+        typed_term t = declared_type(entry, name);
+        // A dimension past the 16-bit form is held in this check's arena only, so a type
+        // that refers to it must not outlive the check.
+        if (!entry->dim || entry->compact_dim)
+            entry->checked_type = t;
+        return t;
+    }
+
+    [[gnu::noinline, gnu::cold]] typed_term report_undeclared(const syntax::expr_node& n,
+                                                              std::string_view name) {
+        {
             if (defer_unknown_)
                 throw symbol_not_yet_declared{};
             diagnostic& d =
@@ -982,16 +1011,20 @@ class checker {
                                    {}});
             return unknown_type();
         }
-        if (entry->checked_type) {
-            entry->used = true;
-            return *entry->checked_type;
-        }
-        typed_term t = declared_type(entry, name);
-        // A dimension past the 16-bit form is held in this check's arena only, so a type
-        // that refers to it must not outlive the check.
-        if (!entry->dim || entry->compact_dim)
-            entry->checked_type = t;
-        return t;
+    }
+
+    // A symbol's type as its entry keeps it, marked used as eval_symbol marks it; null where
+    // eval_symbol has more to do (not a symbol, undeclared, first use). Valid until the next
+    // symbol is declared, which no check does.
+    const typed_term* kept_symbol_type(std::uint32_t index) {
+        const syntax::expr_node& n = file_.nodes[index];
+        if (n.kind != expr_kind::symbol)
+            return nullptr;
+        symbol_entry* entry = symbols_.find(text(n.range));
+        if (entry == nullptr || !entry->checked_type || entry->checked_type->reading_or_difference)
+            return nullptr;
+        entry->used = true;
+        return &*entry->checked_type;
     }
 
     // Worked out on a symbol's first use and kept in its entry.
@@ -1050,7 +1083,8 @@ class checker {
             const std::uint32_t node = k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
-            const operand term{push_type(eval(node), types_base, term_count), node, subtracted};
+            const operand term{push_type([&] { return eval(node); }, types_base, term_count), node,
+                               subtracted};
             const typed_term& t = term.type;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
@@ -1792,6 +1826,46 @@ class checker {
             std::span<const scale_literal>(literals_.data() + t.literal_begin, t.literal_count)};
     }
 
+    // The route below for "A = π*D^2/4": every operand in one unit (as reconcile() finds at
+    // its first step, without its search) and no number that looks like a conversion (which
+    // report_unneeded_factor() would name). True, with `unit` as that route sets it, exactly
+    // where that route would return true without a finding; false leaves it to that route.
+    bool units_agree_with_plain_numbers(std::span<const operand> ops, double& unit) const {
+        static const rational one(1);
+        const typed_term* first = nullptr;
+        bool dimensionless = false;
+        for (const auto& op : ops) {
+            if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale))
+                continue;
+            dimensionless = op.type.dim.is_dimensionless();
+            if (op.type.numeric && !dimensionless)
+                continue;
+            if (first == nullptr) {
+                first = &op.type;
+                continue;
+            }
+            const double s = op.type.numeric ? 1.0 : op.type.scale;
+            const double s0 = first->numeric ? 1.0 : first->scale;
+            if (s != s0)
+                return false;
+            const rational* exact =
+                op.type.numeric ? &one : (op.type.exact_scale ? &*op.type.exact_scale : nullptr);
+            const rational* exact0 =
+                first->numeric ? &one : (first->exact_scale ? &*first->exact_scale : nullptr);
+            if (exact != nullptr && exact0 != nullptr && !(*exact == *exact0))
+                return false;
+        }
+        for (const auto& op : ops) {
+            if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale) || op.type.numeric)
+                continue;
+            for (std::uint32_t l = 0; l < op.type.literal_count; ++l)
+                if (looks_like_conversion(literals_[op.type.literal_begin + l], !dimensionless))
+                    return false;
+        }
+        unit = first == nullptr ? 1.0 : (first->numeric ? 1.0 : first->scale);
+        return true;
+    }
+
     // Terms of one dimension in different units give numbers off by a factor, unless numbers
     // in the formula supply that conversion, the right way round. `unit` receives the SI value
     // of the unit they agree in. False when a finding was reported.
@@ -1806,6 +1880,7 @@ class checker {
             bool all_exact = true;
             double first = 0.0;
             bool plain = true;
+            bool with_numbers = false;
             for (const auto& op : ops) {
                 if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale))
                     continue;
@@ -1813,7 +1888,7 @@ class checker {
                 if (number && !op.type.dim.is_dimensionless())
                     continue; // a number in the others' unit
                 if (!number && op.type.literal_count != 0) {
-                    plain = false;
+                    with_numbers = true;
                     break;
                 }
                 const double s = number ? 1.0 : op.type.scale;
@@ -1829,12 +1904,14 @@ class checker {
                     break;
                 }
             }
-            if (plain) {
+            if (plain && !with_numbers) {
                 unit = first == 0.0 ? 1.0 : first;
                 if (exact_unit != nullptr && all_exact)
                     *exact_unit = exact_first != nullptr ? *exact_first : rational(1);
                 return true;
             }
+            if (with_numbers && units_agree_with_plain_numbers(ops, unit))
+                return true;
         }
         const std::size_t base = scaled_.size();
         bool dimensionless = false;
@@ -2607,7 +2684,10 @@ class checker {
             spine_.push_back(n);
             n = file_.nodes[n].lhs;
         }
-        typed_term result = eval(n);
+        const typed_term* kept = kept_symbol_type(n);
+        typed_term result = kept != nullptr ? *kept : eval(n);
+        if (kept != nullptr)
+            result.literal_begin = static_cast<std::uint32_t>(literals_.size());
         result.zero = false;
         std::uint32_t offset_node = n;
         std::size_t arena_place = compact_dimension::no_place;
@@ -2634,9 +2714,17 @@ class checker {
         for (std::size_t k = spine_.size(); k > spine_base; --k) {
             const syntax::expr_node& op = file_.nodes[spine_[k - 1]];
             const bool divided = op.kind == expr_kind::divide;
-            typed_term t = eval(op.rhs);
-            if (t.reading_or_difference)
-                t.offset = nullptr;
+            // Most factors are symbols, whose types are read where their entries keep them
+            // rather than copied; any other is made in `evaluated`.
+            alignas(typed_term) std::byte evaluated[sizeof(typed_term)];
+            const typed_term* factor = kept_symbol_type(op.rhs);
+            if (factor == nullptr) {
+                typed_term* made = ::new (static_cast<void*>(evaluated)) typed_term(eval(op.rhs));
+                if (made->reading_or_difference)
+                    made->offset = nullptr;
+                factor = made;
+            }
+            const typed_term& t = *factor;
             if (divided)
                 for (std::uint32_t i = 0; i < t.literal_count; ++i)
                     literals_[t.literal_begin + i].exponent =
@@ -2736,7 +2824,8 @@ class checker {
             } else {
                 report_offset(gauge_in_product->node, *gauge_in_product->unit,
                               gauge_in_product->where);
-                return unknown_type();
+                result = unknown_type();
+                return result; // as above
             }
         }
         if (!result.known)
@@ -2744,6 +2833,12 @@ class checker {
         else if (has_gravity && !result.point && result.dim == pressure_dimension())
             result.absolute_pressure_difference = true;
         return result;
+    }
+
+    // A scale raised to a power: most are SI units, whose scale 1 stays 1 (as std::pow gives
+    // for any exponent) without a call.
+    static double unit_power(double scale, double exponent) {
+        return scale == 1.0 ? 1.0 : std::pow(scale, exponent);
     }
 
     typed_term apply_power(const typed_term& base, const typed_term& exponent,
@@ -2777,7 +2872,7 @@ class checker {
         result.numeric = base.numeric && exponent.numeric;
         result.exact_scale.reset();
         if (exponent.value) {
-            result.scale = std::pow(base.scale, exponent.value->to_double());
+            result.scale = unit_power(base.scale, exponent.value->to_double());
             // A whole power stays exact; a rational one falls back to the double.
             result.exact_scale = plumb::exact_power(base.exact_scale, *exponent.value);
         }
@@ -2856,7 +2951,7 @@ class checker {
                 prefer_dimensionless_ = node;
             if (square_root)
                 square_root_argument_ = node;
-            operands_.push_back({types_.push(eval(node)), node});
+            operands_.push_back({types_.push_made([&] { return eval(node); }), node});
             prefer_dimensionless_ = saved;
             square_root_argument_ = saved_root;
         }
@@ -2935,7 +3030,7 @@ class checker {
                 return unknown_type();
             }
             result.dim = args[0].type.dim.pow(f->power);
-            result.scale = std::pow(args[0].type.scale, f->power.to_double());
+            result.scale = unit_power(args[0].type.scale, f->power.to_double());
             result.exact_scale = plumb::exact_power(args[0].type.exact_scale, f->power);
             return result;
         case function_rule::same:

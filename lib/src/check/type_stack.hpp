@@ -11,6 +11,8 @@
 #include <cstddef>
 #include <cstdint>
 #include <memory>
+#include <new>
+#include <type_traits>
 #include <vector>
 
 namespace plumb {
@@ -46,6 +48,18 @@ class type_stack {
         slot = t;
         ++size_;
         return slot;
+    }
+
+    // As push, with the type that `make` returns made in its slot rather than copied there
+    // (a type is 112 bytes, and every operand is pushed). The slot is taken first, so that
+    // what `make` pushes while it works goes above it.
+    template <class Make> typed_term& push_made(Make&& make) {
+        if (size_ == chunks_.size() * chunk_size) [[unlikely]]
+            chunks_.push_back(std::make_unique<typed_term[]>(chunk_size));
+        typed_term* slot = &chunks_[size_ / chunk_size][size_ % chunk_size];
+        ++size_;
+        static_assert(std::is_trivially_destructible_v<typed_term>, "made over the old one");
+        return *::new (static_cast<void*>(slot)) typed_term(make());
     }
 
     // As push, but a type equal to one pushed since `region` (the stack's size when the

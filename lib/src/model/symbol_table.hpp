@@ -6,6 +6,7 @@
 #include "plumb/dimension.hpp"
 #include "units/compact_dimension.hpp"
 
+#include <algorithm>
 #include <cstdint>
 #include <cstring>
 #include <optional>
@@ -46,15 +47,8 @@ struct symbol_entry {
 class symbol_table {
   public:
     [[nodiscard, gnu::always_inline]] symbol_entry* find(std::string_view name) {
-        if (slots_.empty())
-            return nullptr;
-        for (std::size_t i = hash(name) & mask();; i = (i + 1) & mask()) {
-            const std::uint32_t slot = slots_[i];
-            if (slot == empty_slot)
-                return nullptr;
-            if (same_name(names_[slot], name))
-                return &entries_[slot];
-        }
+        const std::uint32_t found = find_slot(name);
+        return found == empty_slot ? nullptr : &entries_[found];
     }
     // Inserts, or returns the entry already there (second = false).
     std::pair<symbol_entry*, bool> insert(std::string_view name, const symbol_entry& entry) {
@@ -80,22 +74,45 @@ class symbol_table {
 
   private:
     static constexpr std::uint32_t empty_slot = 0xFFFFFFFFU;
+    // A name's first eight bytes (all of a short name's) as one word, and its length: a slot
+    // keeps both, so a look-up compares two words rather than the bytes of each name it meets.
+    // The length is held in 32 bits, a longer one as the greatest: only names of up to eight
+    // bytes are told apart by the key alone, and any other is compared in full.
+    struct name_key {
+        std::uint64_t word = 0;
+        std::uint32_t size = 0;
+    };
+    struct slot {
+        std::uint64_t word = 0;
+        std::uint32_t size = 0;
+        std::uint32_t index = empty_slot;
+    };
+    static_assert(sizeof(slot) == 16, "a slot's place in the table is a shift, not a multiply");
+
     std::vector<std::string_view> names_;
     std::vector<symbol_entry> entries_; // parallel to names_; never shrinks, so pointers into
                                         // it stay valid only until the next insert
-    std::vector<std::uint32_t> slots_;
+    std::vector<slot> slots_;
     mutable std::size_t suggestion_comparisons_ = 0;
     mutable bool suggestions_cut_short_ = false;
 
     // The declared name equal to `name` (a view into its file), or null.
     [[nodiscard]] const std::string_view* declared_name(std::string_view name) const {
+        const std::uint32_t found = find_slot(name);
+        return found == empty_slot ? nullptr : &names_[found];
+    }
+
+    [[nodiscard, gnu::always_inline]] std::uint32_t find_slot(std::string_view name) const {
         if (slots_.empty())
-            return nullptr;
-        for (std::size_t i = hash(name) & mask();; i = (i + 1) & mask()) {
-            if (slots_[i] == empty_slot)
-                return nullptr;
-            if (names_[slots_[i]] == name)
-                return &names_[slots_[i]];
+            return empty_slot;
+        const name_key key = key_of(name);
+        for (std::size_t i = hash(name, key) & mask();; i = (i + 1) & mask()) {
+            const slot& s = slots_[i];
+            if (s.index == empty_slot)
+                return empty_slot;
+            if (s.word == key.word && s.size == key.size &&
+                (name.size() <= 8 || same_name(names_[s.index], name)))
+                return s.index;
         }
     }
 
@@ -111,46 +128,53 @@ class symbol_table {
         return true;
     }
 
-    // Up to eight bytes of `p` as one word, without reading past them: names are views into
-    // source text, so a load may not run over their end.
-    [[gnu::always_inline]] static std::uint64_t load_up_to_8(const char* p, std::size_t n) {
-        if (n >= 4) { // two overlapping 4-byte loads cover 4 to 8 bytes without a loop
+    // Up to eight bytes of `p` as one word, without reading past them (names are views into
+    // source text, so a load may not run over their end), the same for equal bytes and
+    // different for different ones of one length: 1 to 3 bytes are gathered as first, middle
+    // and last, 4 to 8 as two overlapping 4-byte loads, without a loop either way.
+    [[gnu::always_inline]] static name_key key_of(std::string_view s) {
+        const char* p = s.data();
+        const std::size_t n = s.size();
+        std::uint64_t w = 0;
+        if (n >= 8) {
+            std::memcpy(&w, p, 8);
+        } else if (n >= 4) {
             std::uint32_t lo = 0;
             std::uint32_t hi = 0;
             std::memcpy(&lo, p, 4);
             std::memcpy(&hi, p + n - 4, 4);
-            return lo | (static_cast<std::uint64_t>(hi) << 32);
+            w = lo | (static_cast<std::uint64_t>(hi) << 32);
+        } else if (n > 0) {
+            w = static_cast<unsigned char>(p[0]) |
+                (static_cast<std::uint64_t>(static_cast<unsigned char>(p[n / 2])) << 8) |
+                (static_cast<std::uint64_t>(static_cast<unsigned char>(p[n - 1])) << 16);
         }
-        std::uint64_t w = 0;
-        for (std::size_t i = 0; i < n; ++i)
-            w = (w << 8) | static_cast<unsigned char>(p[i]);
-        return w;
+        constexpr std::size_t longest = 0xFFFFFFFFU;
+        return {w, static_cast<std::uint32_t>(std::min(n, longest))};
     }
 
-    // Names are short: their bytes are read eight at a time and mixed once per word, rather
-    // than gathered one by one. Only where a name sits in the table depends on it.
-    [[gnu::always_inline]] static std::size_t hash(std::string_view s) {
+    // Names are short: the key is the whole of one up to eight bytes, mixed once; a longer
+    // one's further bytes are mixed eight at a time. Only where a name sits depends on it.
+    [[gnu::always_inline]] static std::size_t hash(std::string_view s, const name_key& key) {
         constexpr std::uint64_t mix = 0x9E3779B97F4A7C15ULL;
-        std::uint64_t h = s.size() * mix;
-        std::size_t i = 0;
-        for (; i + 8 <= s.size(); i += 8) {
+        std::uint64_t h = (key.word ^ (key.size * mix)) * mix;
+        for (std::size_t i = 8; i < s.size(); i += 8) {
             std::uint64_t word = 0;
-            std::memcpy(&word, s.data() + i, 8);
+            std::memcpy(&word, s.data() + i, std::min<std::size_t>(8, s.size() - i));
             h = (h ^ word) * mix;
-            h ^= h >> 32;
         }
-        h = (h ^ load_up_to_8(s.data() + i, s.size() - i)) * mix;
-        h = (h ^ (h >> 32)) * mix; // every byte reaches the low bits the table uses
+        h ^= h >> 32;
         return static_cast<std::size_t>(h ^ (h >> 29));
     }
     void place(std::uint32_t index) {
-        std::size_t i = hash(names_[index]) & mask();
-        while (slots_[i] != empty_slot)
+        const name_key key = key_of(names_[index]);
+        std::size_t i = hash(names_[index], key) & mask();
+        while (slots_[i].index != empty_slot)
             i = (i + 1) & mask();
-        slots_[i] = index;
+        slots_[i] = {key.word, key.size, index};
     }
     void grow() {
-        slots_.assign(slots_.empty() ? 64 : slots_.size() * 2, empty_slot);
+        slots_.assign(slots_.empty() ? 64 : slots_.size() * 2, slot{});
         for (std::uint32_t k = 0; k < names_.size(); ++k)
             place(k);
     }

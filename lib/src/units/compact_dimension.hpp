@@ -29,7 +29,8 @@ class compact_dimension {
     [[nodiscard]] dimension expand() const;
     [[nodiscard]] bool is_dimensionless() const { return same_bits(*this, compact_dimension{}); }
 
-    friend bool operator==(const compact_dimension& a, const compact_dimension& b) {
+    [[gnu::always_inline]] friend bool operator==(const compact_dimension& a,
+                                                  const compact_dimension& b) {
         if (a.den_ != 0 && b.den_ != 0) // both fitted: the form is canonical
             return same_bits(a, b);
         // A dimension that fits is never in the arena, so only two arena ones can be equal.
@@ -78,15 +79,31 @@ class compact_dimension {
         return x[0] == y[0] && x[1] == y[1];
     }
 
+    // Every factor of every product comes here: the 16-bit exponents are added (or
+    // subtracted) four to a 64-bit word, the top bit of each kept out of the carry so that no
+    // lane spills into the next, and a lane has overflowed where its operands' signs say the
+    // result's cannot be. The denominators (1 and 1) go along and are set back to 1.
     static bool whole_sum(const compact_dimension& a, const compact_dimension& b, int sign,
                           compact_dimension& r) {
-        bool fits = true;
-        for (std::size_t i = 0; i < base_dimension_count; ++i) {
-            const int s = a.num_[i] + sign * b.num_[i];
-            fits = fits && s >= INT16_MIN && s <= INT16_MAX;
-            r.num_[i] = static_cast<std::int16_t>(s);
+        constexpr std::uint64_t tops = 0x8000800080008000ULL;
+        std::array<std::uint64_t, 2> x{};
+        std::array<std::uint64_t, 2> y{};
+        std::array<std::uint64_t, 2> z{};
+        std::memcpy(x.data(), &a, sizeof a);
+        std::memcpy(y.data(), &b, sizeof b);
+        std::uint64_t overflow = 0;
+        for (std::size_t w = 0; w < 2; ++w) {
+            if (sign > 0) {
+                z[w] = ((x[w] & ~tops) + (y[w] & ~tops)) ^ ((x[w] ^ y[w]) & tops);
+                overflow |= ~(x[w] ^ y[w]) & (x[w] ^ z[w]);
+            } else {
+                z[w] = ((x[w] | tops) - (y[w] & ~tops)) ^ ((x[w] ^ ~y[w]) & tops);
+                overflow |= (x[w] ^ y[w]) & (x[w] ^ z[w]);
+            }
         }
-        return fits;
+        std::memcpy(static_cast<void*>(&r), z.data(), sizeof r);
+        r.den_ = 1;
+        return (overflow & tops) == 0;
     }
 
     std::array<std::int16_t, base_dimension_count> num_{};

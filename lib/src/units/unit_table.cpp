@@ -113,6 +113,9 @@ std::optional<rational> exact_product(const std::optional<rational>& a,
 std::optional<rational> exact_power(const std::optional<rational>& a, const rational& power) {
     if (!a || !power.is_integer())
         return std::nullopt; // a rational power of a unit is left to the double
+    // An SI unit's 1, as the product below gives it for any power it takes, without its loop.
+    if (*a == rational(1) && power.num() >= -64 && power.num() <= 64)
+        return rational(1);
     return exact_power_product(rational(1), *a, power.num());
 }
 
