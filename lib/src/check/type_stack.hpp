@@ -34,6 +34,8 @@ inline bool same_type(const typed_term& a, const typed_term& b) {
            a.inferred == b.inferred && a.offset == b.offset && a.zero_of == b.zero_of &&
            same_double(a.scale, b.scale) && same_double(a.origin, b.origin) &&
            same_double(a.origin_tolerance, b.origin_tolerance) && a.dim == b.dim &&
+           a.weight_numerator == b.weight_numerator &&
+           a.weight_denominator == b.weight_denominator && a.weighted_sum == b.weighted_sum &&
            same_rational(a.value, b.value) && same_rational(a.exact_scale, b.exact_scale);
 }
 
@@ -43,11 +45,10 @@ class type_stack {
 
     typed_term& push(const typed_term& t) {
         if (size_ == chunks_.size() * chunk_size) [[unlikely]]
-            chunks_.push_back(std::make_unique<typed_term[]>(chunk_size));
-        typed_term& slot = chunks_[size_ / chunk_size][size_ % chunk_size];
-        slot = t;
+            chunks_.push_back(new_chunk());
+        typed_term* slot = &chunks_[size_ / chunk_size][size_ % chunk_size];
         ++size_;
-        return slot;
+        return *::new (static_cast<void*>(slot)) typed_term(t);
     }
 
     // As push, with the type that `make` returns made in its slot rather than copied there
@@ -55,10 +56,9 @@ class type_stack {
     // what `make` pushes while it works goes above it.
     template <class Make> typed_term& push_made(Make&& make) {
         if (size_ == chunks_.size() * chunk_size) [[unlikely]]
-            chunks_.push_back(std::make_unique<typed_term[]>(chunk_size));
+            chunks_.push_back(new_chunk());
         typed_term* slot = &chunks_[size_ / chunk_size][size_ % chunk_size];
         ++size_;
-        static_assert(std::is_trivially_destructible_v<typed_term>, "made over the old one");
         return *::new (static_cast<void*>(slot)) typed_term(make());
     }
 
@@ -87,9 +87,24 @@ class type_stack {
     }
 
   private:
-    // Chunks, so that growing never moves a type an operand refers to.
+    // Chunks, so that growing never moves a type an operand refers to. Raw storage: a type
+    // is made in its slot when pushed, so a new chunk's pages are touched only as it fills
+    // (constructing 256 types up front cost a small check seven page faults at start).
+    static_assert(std::is_trivially_destructible_v<typed_term> &&
+                      std::is_trivially_copyable_v<typed_term>,
+                  "types are made over old ones and never destroyed");
     static constexpr std::size_t chunk_size = 256;
-    std::vector<std::unique_ptr<typed_term[]>> chunks_;
+    struct chunk_deleter {
+        void operator()(typed_term* p) const {
+            ::operator delete (static_cast<void*>(p), std::align_val_t{alignof(typed_term)});
+        }
+    };
+    using chunk = std::unique_ptr<typed_term[], chunk_deleter>;
+    static chunk new_chunk() {
+        return chunk(static_cast<typed_term*>(::operator new (
+            sizeof(typed_term) * chunk_size, std::align_val_t{alignof(typed_term)})));
+    }
+    std::vector<chunk> chunks_;
     std::size_t size_ = 0;
     std::array<std::uint32_t, 64> recent_{};
 
