@@ -4,6 +4,7 @@
 // and water's latent heat written as a number (970 Btu/lb, 34.5 lb/h per boiler horsepower).
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
+#include "test_support.hpp"
 
 #include <doctest/doctest.h>
 
@@ -13,33 +14,18 @@
 
 namespace {
 
-std::size_t count(const plumb::check_report& r, std::string_view rule) {
-    return static_cast<std::size_t>(std::count_if(r.diagnostics.begin(), r.diagnostics.end(),
-                                                  [&](const auto& d) { return d.rule == rule; }));
-}
-
-std::size_t problems(const plumb::check_report& r) {
-    return static_cast<std::size_t>(
-        std::count_if(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
-            return d.level != plumb::severity::note && d.rule != plumb::rules::unused;
-        }));
-}
+using plumb::test::count_of;
+using plumb::test::first_under;
+using plumb::test::problems_in;
 
 plumb::check_report run(const std::string& declarations, const char* formula) {
     return plumb::check_text("f.plumb", declarations + formula + "\n");
 }
 
-const plumb::diagnostic& first(const plumb::check_report& r, std::string_view rule) {
-    const auto found = std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
-                                    [&](const auto& d) { return d.rule == rule; });
-    REQUIRE(found != r.diagnostics.end());
-    return *found;
-}
-
 void passes(const std::string& declarations, std::initializer_list<const char*> formulas) {
     for (const char* formula : formulas) {
         CAPTURE(formula);
-        CHECK(problems(run(declarations, formula)) == 0);
+        CHECK(problems_in(run(declarations, formula)) == 0);
     }
 }
 
@@ -47,7 +33,7 @@ void fails_with(const std::string& declarations, std::initializer_list<const cha
                 std::string_view rule) {
     for (const char* formula : formulas) {
         CAPTURE(formula);
-        CHECK(count(run(declarations, formula), rule) >= 1);
+        CHECK(count_of(run(declarations, formula), rule) >= 1);
     }
 }
 
@@ -64,7 +50,7 @@ TEST_CASE("a conversion folded with a coefficient into one number") {
                    "@radius R_m = D_mm/4000", "@velocity V_p = 0.4085*Q_g/d_in^2",
                    "@velocity-si V_m = 21.22*Q_l/d_mm^2"});
     const auto r = run(bores, "@velocity V_p = 0.4085*Q_g/d_in^2");
-    CHECK(first(r, plumb::rules::trade_constant).message.find("0.4085 is read as 4/\u03C0") !=
+    CHECK(first_under(r, plumb::rules::trade_constant).message.find("0.4085 is read as 4/\u03C0") !=
           std::string::npos);
     // The same numbers with the wrong unit beside them.
     fails_with(bores,
@@ -80,11 +66,11 @@ TEST_CASE("Manning's US constant is not needed in the SI form") {
     const std::string manning = "V_m : m/s\nR_m : m\nV_f : ft/s\nR_f : ft\nn : s/m^(1/3)\nS : 1\n";
     passes(manning, {"@si V_m = 1/n*R_m^(2/3)*S^(1/2)", "@us V_f = 1.486/n*R_f^(2/3)*S^(1/2)"});
     const auto r = run(manning, "@si-with-us-constant V_m = 1.486/n*R_m^(2/3)*S^(1/2)");
-    CHECK(first(r, plumb::rules::unit_scale).message.find("the factor 1.486 is not needed") !=
+    CHECK(first_under(r, plumb::rules::unit_scale).message.find("the factor 1.486 is not needed") !=
           std::string::npos);
     // Printed 1.49 as often (common practice).
     const auto r3 = run(manning, "@si-with-us-constant V_m = 1.49/n*R_m^(2/3)*S^(1/2)");
-    CHECK(first(r3, plumb::rules::unit_scale).message.find("the factor 1.49 is not needed") !=
+    CHECK(first_under(r3, plumb::rules::unit_scale).message.find("the factor 1.49 is not needed") !=
           std::string::npos);
     passes(manning, {"@us-three-digits V_f = 1.49/n*R_f^(2/3)*S^(1/2)"});
     // √3 and √12 stay coefficients: square roots of yd/ft and ft/in are not read as factors.
@@ -124,8 +110,8 @@ TEST_CASE("water's latent heat written as a number") {
                                 "@condensing-si Q_k = 2257*m_k", "@rounded Q_k = 2260*m_k"}) {
         CAPTURE(formula);
         const auto r = run(steam, formula);
-        CHECK(problems(r) == 0);
-        CHECK(first(r, plumb::rules::trade_constant).message.find("latent heat") !=
+        CHECK(problems_in(r) == 0);
+        CHECK(first_under(r, plumb::rules::trade_constant).message.find("latent heat") !=
               std::string::npos);
     }
     // 1000 Btu/lb is a rule of thumb 3 % off, not read; a missing latent heat is an error.
@@ -140,14 +126,15 @@ TEST_CASE("the fan trade's 6356, and a number counted as a coefficient named") {
     for (const char* formula : {"@air P = Q*dp/6356", "@brake P = Q*dp/(6356*η)"}) {
         CAPTURE(formula);
         const auto r = run(fan, formula);
-        CHECK(problems(r) == 0);
-        CHECK(first(r, plumb::rules::trade_constant).message.find("6356 is read as the fan") !=
-              std::string::npos);
+        CHECK(problems_in(r) == 0);
+        CHECK(
+            first_under(r, plumb::rules::trade_constant).message.find("6356 is read as the fan") !=
+            std::string::npos);
     }
     // In kW the same number is no conversion the units need: counted as a coefficient, and
     // the warning says so, since it may be the conversion the engineer meant.
     const auto r = run(fan, "@air-kw P_k = Q*dp/6356");
-    const plumb::diagnostic& d = first(r, plumb::rules::unit_scale);
+    const plumb::diagnostic& d = first_under(r, plumb::rules::unit_scale);
     const bool named = std::any_of(d.notes.begin(), d.notes.end(), [](const auto& n) {
         return n.message.find("6356 counted as a coefficient") != std::string::npos;
     });
@@ -173,8 +160,9 @@ TEST_CASE("readings added with weights that make neither a reading nor a differe
                 "@weights-short T_f = 0.25*T_1 + 0.5*T_2"},
                plumb::rules::offset_scale);
     const auto r = run(readings, "@film-precedence T_f = T_s + T_a/2");
-    CHECK(first(r, plumb::rules::offset_scale).message.find("weights that sum to 3/2, not 1") !=
-          std::string::npos);
+    CHECK(
+        first_under(r, plumb::rules::offset_scale).message.find("weights that sum to 3/2, not 1") !=
+        std::string::npos);
 }
 
 TEST_CASE("braces after a number hold a unit, alone a constant") {
@@ -196,8 +184,8 @@ TEST_CASE("a scale's zero added to a difference of readings") {
                 "@gauge-difference-plus-atmosphere Δp = p_1 - p_2 + 14.7"},
                plumb::rules::offset_scale);
     const auto r = run(readings, "@difference-minus-32 ΔT = (t_1 - t_2 - 32)/1.8");
-    CHECK(first(r, plumb::rules::offset_scale).message.find("added to a difference of readings") !=
-          std::string::npos);
+    CHECK(first_under(r, plumb::rules::offset_scale)
+              .message.find("added to a difference of readings") != std::string::npos);
 }
 
 TEST_CASE("a reading set equal to one on another scale: the zero is the finding, not the degree") {
@@ -209,11 +197,11 @@ TEST_CASE("a reading set equal to one on another scale: the zero is the finding,
                                 "T_R = t_C + 459.67"}) {
         CAPTURE(formula);
         const auto r = run(scales, formula);
-        CHECK(count(r, plumb::rules::unit_scale) == 0);
-        CHECK(count(r, plumb::rules::offset_scale) == 1);
+        CHECK(count_of(r, plumb::rules::unit_scale) == 0);
+        CHECK(count_of(r, plumb::rules::offset_scale) == 1);
     }
     const auto r = run(scales, "@fahrenheit-as-kelvin T_K = T_F");
-    const plumb::diagnostic& d = first(r, plumb::rules::offset_scale);
+    const plumb::diagnostic& d = first_under(r, plumb::rules::offset_scale);
     REQUIRE(!d.notes.empty());
     CHECK(d.notes.back().message.find("(T_F + 459.67)/1.8 beside K") != std::string::npos);
 }
@@ -228,7 +216,7 @@ TEST_CASE("words in a description that say a difference are whole words") {
         const auto r =
             plumb::check_text("w.plumb", std::string(declaration) + "q : psia \"line pressure\"\n"
                                                                     "@twice q = p + 14.7\n");
-        CHECK(count(r, plumb::rules::offset_scale) == 1);
+        CHECK(count_of(r, plumb::rules::offset_scale) == 1);
     }
     // "pressure drops" and "temperature rise" still say a difference: no zero to count twice.
     for (const char* declaration :
@@ -237,6 +225,6 @@ TEST_CASE("words in a description that say a difference are whole words") {
         const auto r =
             plumb::check_text("w.plumb", std::string(declaration) + "q : psia \"line pressure\"\n"
                                                                     "@twice q = p + 14.7\n");
-        CHECK(count(r, plumb::rules::offset_scale) == 0);
+        CHECK(count_of(r, plumb::rules::offset_scale) == 0);
     }
 }

@@ -3,6 +3,7 @@
 #include "check/gravity_number.hpp"
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
+#include "test_support.hpp"
 
 #include <doctest/doctest.h>
 
@@ -12,17 +13,8 @@
 
 namespace {
 
-std::size_t count(const plumb::check_report& r, std::string_view rule) {
-    return static_cast<std::size_t>(std::count_if(r.diagnostics.begin(), r.diagnostics.end(),
-                                                  [&](const auto& d) { return d.rule == rule; }));
-}
-
-std::size_t problems(const plumb::check_report& r) {
-    return static_cast<std::size_t>(
-        std::count_if(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
-            return d.level != plumb::severity::note && d.rule != plumb::rules::unused;
-        }));
-}
+using plumb::test::count_of;
+using plumb::test::problems_in;
 
 plumb::check_report run(const std::string& text) {
     return plumb::check_text("g.plumb", text);
@@ -43,8 +35,8 @@ void passes_with_one_note(const std::string& declarations,
     for (const char* formula : formulas) {
         CAPTURE(formula);
         const auto r = run(declarations + formula + "\n");
-        CHECK(problems(r) == 0);
-        CHECK(count(r, rule) == 1);
+        CHECK(problems_in(r) == 0);
+        CHECK(count_of(r, rule) == 1);
     }
 }
 
@@ -75,21 +67,21 @@ TEST_CASE("gravity as a number: ρ*9.81*h is a pressure, with a note") {
 
 TEST_CASE("gravity as a number: a missing g and the wrong numbers are still errors") {
     // No number at all: the classic missing g.
-    CHECK(count(run(hydrostatic + "p = ρ*h\n"), plumb::rules::side_mismatch) == 1);
+    CHECK(count_of(run(hydrostatic + "p = ρ*h\n"), plumb::rules::side_mismatch) == 1);
     // 10 is 2 % from g_n, more than a rounding: read as a plain number (common practice: some
     // rough hand calcs use g = 10, and a reviewer should see it).
-    CHECK(count(run(hydrostatic + "p = ρ*10*h\n"), plumb::rules::side_mismatch) == 1);
-    CHECK(count(run(hydrostatic + "p = ρ*2*h\n"), plumb::rules::side_mismatch) == 1);
+    CHECK(count_of(run(hydrostatic + "p = ρ*10*h\n"), plumb::rules::side_mismatch) == 1);
+    CHECK(count_of(run(hydrostatic + "p = ρ*2*h\n"), plumb::rules::side_mismatch) == 1);
     // g read, but the kPa beside Pa is still off by 1000.
     const auto kpa = run(hydrostatic + "p_k = ρ*9.81*h\n");
-    CHECK(count(kpa, plumb::rules::unit_scale) == 1);
-    CHECK(count(kpa, plumb::rules::gravity_number) == 1);
+    CHECK(count_of(kpa, plumb::rules::unit_scale) == 1);
+    CHECK(count_of(kpa, plumb::rules::gravity_number) == 1);
     // A factor not needed once g is read.
-    CHECK(count(run(hydrostatic + "p = ρ*9.81*h*1000\n"), plumb::rules::unit_scale) == 1);
+    CHECK(count_of(run(hydrostatic + "p = ρ*9.81*h*1000\n"), plumb::rules::unit_scale) == 1);
     // A term with g and a number 9.81 too: nothing is missing, so 9.81 is a plain number and
     // the sides differ by nothing; the product is simply 9.81 times too large.
     const auto both = run(hydrostatic + "p = ρ*{g_n}*h*9.81\n");
-    CHECK(count(both, plumb::rules::gravity_number) == 0);
+    CHECK(count_of(both, plumb::rules::gravity_number) == 0);
 }
 
 // The oilfield hydrostatic factor: 1 ppg over 1 ft gives 0.051948 psi (computed from NIST SP 811
@@ -101,14 +93,14 @@ TEST_CASE("gravity as a number: 0.052 psi/ft per ppg in a mud hydrostatic") {
     const std::string well = "MW : ppg\nTVD : ft\nTVD_m : m\np_h : psi\np_wh : psig\n"
                              "p_bh : psi\n";
     const auto right = run(well + "p_h = 0.052*MW*TVD\n");
-    CHECK(problems(right) == 0);
-    REQUIRE(count(right, plumb::rules::gravity_number) == 1);
+    CHECK(problems_in(right) == 0);
+    REQUIRE(count_of(right, plumb::rules::gravity_number) == 1);
     CHECK(message_of(right, plumb::rules::gravity_number).find("0.051948") != std::string::npos);
     // Depth in metres with the feet factor: 0.052 is not g in those units.
-    CHECK(problems(run(well + "p_h = 0.052*MW*TVD_m\n")) == 1);
+    CHECK(problems_in(run(well + "p_h = 0.052*MW*TVD_m\n")) == 1);
     // Gauge wellhead plus the column plus the atmosphere is absolute; without it, it is not.
-    CHECK(problems(run(well + "p_bh = p_wh + 14.696 + 0.052*MW*TVD\n")) == 0);
-    CHECK(count(run(well + "p_bh = p_wh + 0.052*MW*TVD\n"), plumb::rules::offset_scale) == 1);
+    CHECK(problems_in(run(well + "p_bh = p_wh + 14.696 + 0.052*MW*TVD\n")) == 0);
+    CHECK(count_of(run(well + "p_bh = p_wh + 0.052*MW*TVD\n"), plumb::rules::offset_scale) == 1);
 }
 
 // Feet and pounds: h = p/(ρ g) with ρ in lb/ft^3 and p in lbf/ft^2 needs g_c too; with p in psf
@@ -116,10 +108,10 @@ TEST_CASE("gravity as a number: 0.052 psi/ft per ppg in a mud hydrostatic") {
 TEST_CASE("gravity as a number: 32.2 in foot units") {
     const std::string feet = "ρ_s : slug/ft^3\np_f : lbf/ft^2\nh_f : ft\n";
     const auto r = run(feet + "h_f = p_f/(ρ_s*32.2)\n");
-    CHECK(problems(r) == 0);
-    CHECK(count(r, plumb::rules::gravity_number) == 1);
+    CHECK(problems_in(r) == 0);
+    CHECK(count_of(r, plumb::rules::gravity_number) == 1);
     // The metric 9.81 in a foot calc is not g there.
-    CHECK(problems(run(feet + "h_f = p_f/(ρ_s*9.81)\n")) == 1);
+    CHECK(problems_in(run(feet + "h_f = p_f/(ρ_s*9.81)\n")) == 1);
 }
 
 // Water's specific weight written as a number, γ_w = ρ_w·g_n with ρ_w from 995.65 to 999.975
@@ -163,29 +155,29 @@ TEST_CASE("water's specific weight as a number: pump power and pressure head pas
     }
     SUBCASE("the mistakes are still found") {
         // A missing g: 1000 kg/m³ times a head is not a pressure.
-        CHECK(count(run(pump + "p_Pa = 1000*h_m\n"), plumb::rules::side_mismatch) == 1);
+        CHECK(count_of(run(pump + "p_Pa = 1000*h_m\n"), plumb::rules::side_mismatch) == 1);
         // The kN/m³ number beside Pa: read as γ_w, and the 1000 is named.
         const auto pa = run(pump + "p_Pa = 9.81*h_m\n");
-        CHECK(count(pa, plumb::rules::unit_scale) == 1);
+        CHECK(count_of(pa, plumb::rules::unit_scale) == 1);
         // The factors written the wrong way round: named as such.
         const auto upside = run(pump + "P_hp = Q_gpm*H_ft*SG*3960/η\n");
-        CHECK(problems(upside) == 1);
-        REQUIRE(count(upside, plumb::rules::unit_scale) == 1);
+        CHECK(problems_in(upside) == 1);
+        REQUIRE(count_of(upside, plumb::rules::unit_scale) == 1);
         CHECK(message_of(upside, plumb::rules::unit_scale).find("3960 is the wrong way round") !=
               std::string::npos);
-        CHECK(problems(run(pump + "h_ft = p_psi/(2.31*SG)\n")) == 1);
-        CHECK(problems(run(pump + "P_kW = Q_m3h*H_m*SG*367/η\n")) == 1);
+        CHECK(problems_in(run(pump + "h_ft = p_psi/(2.31*SG)\n")) == 1);
+        CHECK(problems_in(run(pump + "P_kW = Q_m3h*H_m*SG*367/η\n")) == 1);
         // A bare number in a sum is read when it is the whole quantity: the buoyant unit weight
         // (γ_sat - γ_w) with γ_w = 9.81 kN/m³ (common practice), but not a 10 % error.
         const std::string soil = "γ_sat : kN/m^3\nz : m\nσ : kPa\n";
         const auto buoyant = run(soil + "σ = (γ_sat - 9.81)*z\n");
-        CHECK(problems(buoyant) == 0);
-        CHECK(count(buoyant, plumb::rules::gravity_number) == 1);
-        CHECK(count(run(soil + "σ = (γ_sat - 9)*z\n"), plumb::rules::sum_mismatch) == 1);
+        CHECK(problems_in(buoyant) == 0);
+        CHECK(count_of(buoyant, plumb::rules::gravity_number) == 1);
+        CHECK(count_of(run(soil + "σ = (γ_sat - 9)*z\n"), plumb::rules::sum_mismatch) == 1);
         // Too far from any water: 0.45 psi/ft is 4 % off (a brine's gradient needs its SG).
-        CHECK(problems(run(pump + "p_psi = 0.45*h_ft\n")) == 1);
+        CHECK(problems_in(run(pump + "p_psi = 0.45*h_ft\n")) == 1);
         // 62.4 with the head in metres is not water in those units.
-        CHECK(problems(run(pump + "p_psf = 62.4*h_m\n")) == 1);
+        CHECK(problems_in(run(pump + "p_psf = 62.4*h_m\n")) == 1);
     }
 }
 
@@ -202,16 +194,16 @@ TEST_CASE("gauge pressures: heads, forces and columns pass; gas laws, work and r
          {"h = p_g*1000/(ρ*{g_n})", "h = 1000*p_g/(ρ*{g_n})", "p_g = ρ*{g_n}*h/1000",
           "h_ft = 2.31*p_psig", "p_g = ρ*9.81*h/1000", "F = p_g*1000*A", "F_lbf = p_psig*A_in2"}) {
         CAPTURE(formula);
-        CHECK(problems(run(gauge + formula + "\n")) == 0);
+        CHECK(problems_in(run(gauge + formula + "\n")) == 0);
     }
     for (const char* formula :
          {"p_g = ρ*R_a*T/1000", "p_2 = p_g*V_1/V_2", "h = p_g*1000/ρ", "h = p_g/(ρ*{g_n})*V_1",
           "W = p_g*1000*V_1", "ρ = p_g*1000/(R_a*T)"}) {
         CAPTURE(formula);
-        CHECK(count(run(gauge + formula + "\n"), plumb::rules::offset_scale) == 1);
+        CHECK(count_of(run(gauge + formula + "\n"), plumb::rules::offset_scale) == 1);
     }
     // The kPa of the gauge still needs its 1000 once the head is read.
-    CHECK(count(run(gauge + "h = p_g/(ρ*{g_n})\n"), plumb::rules::unit_scale) == 1);
+    CHECK(count_of(run(gauge + "h = p_g/(ρ*{g_n})\n"), plumb::rules::unit_scale) == 1);
 }
 
 // The HVAC trade's load numbers carry a volume's heat capacity, ρ·c_p. Worked out here from NIST
@@ -236,7 +228,7 @@ TEST_CASE("heat capacity of a volume as a number: the trade's 1.08 and 500") {
     for (const char* formula : {"Q = 1.08*gpm*ΔT", "Q = 500*cfm*ΔT", "Q = 1.08*q*ΔT",
                                 "Q = 1.5*cfm*ΔT", "P = 1.2*q*ΔT_K*1000"}) {
         CAPTURE(formula);
-        CHECK(problems(run(hvac + formula + "\n")) == 1);
+        CHECK(problems_in(run(hvac + formula + "\n")) == 1);
     }
 }
 
@@ -255,16 +247,16 @@ TEST_CASE("molar volume as a number: ppm conversions") {
                          plumb::rules::trade_constant);
     // Upside down; the metric number with feet and pounds; an hour's 3600 the units do not
     // need beside the 10⁶ they do.
-    CHECK(count(run(air + "c = C*M*24.45\n"), plumb::rules::unit_scale) == 1);
-    CHECK(problems(run(air + "E = C*M*Q_s*60/24.45e6\n")) == 1);
+    CHECK(count_of(run(air + "c = C*M*24.45\n"), plumb::rules::unit_scale) == 1);
+    CHECK(problems_in(run(air + "E = C*M*Q_s*60/24.45e6\n")) == 1);
     const auto extra = run(air + "E_k = C*M*Q_n/22.4/1e6*3600\n");
-    CHECK(count(extra, plumb::rules::unit_scale) == 1);
+    CHECK(count_of(extra, plumb::rules::unit_scale) == 1);
     // The same with the molar volume declared: the rule is about the 3600, not the 22.4.
-    CHECK(count(run(air + "V_m : L/mol = 22.4\nE_k = C*M*Q_n/V_m/1e6*3600\n"),
-                plumb::rules::unit_scale) == 1);
-    CHECK(problems(run(air + "V_m : L/mol = 22.4\nE_k = C*M*Q_n/V_m/1e6\n")) == 0);
+    CHECK(count_of(run(air + "V_m : L/mol = 22.4\nE_k = C*M*Q_n/V_m/1e6*3600\n"),
+                   plumb::rules::unit_scale) == 1);
+    CHECK(problems_in(run(air + "V_m : L/mol = 22.4\nE_k = C*M*Q_n/V_m/1e6\n")) == 0);
     // Two conversions that are both needed stay clean: m³/h to L/s.
-    CHECK(problems(run("Q_h : m^3/h\nQ_l : L/s\nQ_l = Q_h*1000/3600\n")) == 0);
+    CHECK(problems_in(run("Q_h : m^3/h\nQ_l : L/s\nQ_l = Q_h*1000/3600\n")) == 0);
 }
 
 // Water's density written as a number: 8.34 lb/gal and 62.4 lb/ft³ (common practice) and 1000
@@ -281,6 +273,6 @@ TEST_CASE("water's density as a number: 8.34 lb/gal, 62.4 lb/ft³, 1000 kg/m³")
     // A missing density, the number upside down, and a density 10 % off stay errors.
     for (const char* formula : {"m = V", "V_g = W*8.34", "m = 900*V"}) {
         CAPTURE(formula);
-        CHECK(problems(run(water + formula + "\n")) == 1);
+        CHECK(problems_in(run(water + formula + "\n")) == 1);
     }
 }

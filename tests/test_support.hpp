@@ -1,7 +1,14 @@
 // Helpers shared by the test files: a scratch folder that cleans up after itself.
 #pragma once
 
+#include "plumb/check.hpp"
 #include "plumb/dimension.hpp"
+#include "plumb/rules.hpp"
+
+#include <doctest/doctest.h>
+
+#include <algorithm>
+#include <string_view>
 
 #include <chrono>
 #include <cstdint>
@@ -12,6 +19,29 @@
 #include <vector>
 
 namespace plumb::test {
+
+// How many findings of a report are under `rule`.
+inline std::size_t count_of(const check_report& r, std::string_view rule) {
+    return static_cast<std::size_t>(std::count_if(r.diagnostics.begin(), r.diagnostics.end(),
+                                                  [&](const auto& d) { return d.rule == rule; }));
+}
+
+// The errors and warnings of a report, less unused declarations: what a formula that should
+// pass must not have.
+inline std::size_t problems_in(const check_report& r) {
+    return static_cast<std::size_t>(
+        std::count_if(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
+            return d.level != severity::note && d.rule != rules::unused;
+        }));
+}
+
+// The report's first finding under `rule`; fails the test when there is none.
+inline const diagnostic& first_under(const check_report& r, std::string_view rule) {
+    const auto found = std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
+                                    [&](const auto& d) { return d.rule == rule; });
+    REQUIRE(found != r.diagnostics.end());
+    return *found;
+}
 
 // A dimension from whole exponents typed in the order M L T Θ N I J: the reference side of a
 // comparison, built without the algebra under test.

@@ -4,6 +4,7 @@
 // forms pass, and the gas-law and missing-weight slips beside them are still errors.
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
+#include "test_support.hpp"
 
 #include <doctest/doctest.h>
 
@@ -13,25 +14,9 @@
 
 namespace {
 
-std::size_t count(const plumb::check_report& r, std::string_view rule) {
-    return static_cast<std::size_t>(std::count_if(r.diagnostics.begin(), r.diagnostics.end(),
-                                                  [&](const auto& d) { return d.rule == rule; }));
-}
-
-std::size_t problems(const plumb::check_report& r) {
-    return static_cast<std::size_t>(
-        std::count_if(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
-            return d.level != plumb::severity::note && d.rule != plumb::rules::unused;
-        }));
-}
-
-// The report's first finding under `rule`; fails the test when there is none.
-const plumb::diagnostic& first(const plumb::check_report& r, std::string_view rule) {
-    const auto found = std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
-                                    [&](const auto& d) { return d.rule == rule; });
-    REQUIRE(found != r.diagnostics.end());
-    return *found;
-}
+using plumb::test::count_of;
+using plumb::test::first_under;
+using plumb::test::problems_in;
 
 plumb::check_report run(const std::string& declarations, const char* formula) {
     return plumb::check_text("w.plumb", declarations + formula + "\n");
@@ -42,8 +27,9 @@ void passes(const std::string& declarations, std::initializer_list<const char*> 
     for (const char* formula : formulas) {
         CAPTURE(formula);
         const auto r = run(declarations, formula);
-        CHECK(problems(r) == 0);
-        CHECK(count(r, plumb::rules::trade_constant) + count(r, plumb::rules::gravity_number) ==
+        CHECK(problems_in(r) == 0);
+        CHECK(count_of(r, plumb::rules::trade_constant) +
+                  count_of(r, plumb::rules::gravity_number) ==
               notes);
     }
 }
@@ -53,7 +39,7 @@ void fails_with(const std::string& declarations, std::initializer_list<const cha
     for (const char* formula : formulas) {
         CAPTURE(formula);
         const auto r = run(declarations, formula);
-        CHECK(count(r, rule) >= 1);
+        CHECK(count_of(r, rule) >= 1);
     }
 }
 
@@ -90,8 +76,8 @@ TEST_CASE("a gauge pressure in a gas law or a pressure ratio is still an error")
                 "@boyle-into-gauge p_2g = p_a*V_1/V_2"},
                plumb::rules::offset_scale);
     const auto r = run(pipeline, "@boyle p_2g = p_g*V_1/V_2");
-    REQUIRE(count(r, plumb::rules::offset_scale) == 1);
-    const std::string& message = first(r, plumb::rules::offset_scale).message;
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    const std::string& message = first_under(r, plumb::rules::offset_scale).message;
     CHECK(message.find("'p_g'") != std::string::npos);
     CHECK(message.find("cannot be multiplied") != std::string::npos);
 }
@@ -116,8 +102,8 @@ TEST_CASE("a number in ratio with an absolute reading is read as a standard refe
             "@normal-celsius V_n = V*(p/101.325)*(273.15/(t_c + 273.15))"},
            2);
     const auto r = run(gas, "@normal V_n = V*273.15/T");
-    REQUIRE(count(r, plumb::rules::trade_constant) == 1);
-    const plumb::diagnostic& note = first(r, plumb::rules::trade_constant);
+    REQUIRE(count_of(r, plumb::rules::trade_constant) == 1);
+    const plumb::diagnostic& note = first_under(r, plumb::rules::trade_constant);
     CHECK(note.message.find("'273.15' is read as a standard reference temperature") !=
           std::string::npos);
     CHECK(note.level == plumb::severity::note);
@@ -168,7 +154,7 @@ TEST_CASE("a column's pressure plus the atmosphere written as a number is absolu
             "@us p_a = 0.433*h_f + 14.7"},
            2);
     const auto r = run(depth, "@metric p_k = 9.81*h_m + 101.325");
-    CHECK(first(r, plumb::rules::trade_constant)
+    CHECK(first_under(r, plumb::rules::trade_constant)
               .message.find("'101.325' is read as the "
                             "atmospheric pressure") != std::string::npos);
 }
@@ -186,8 +172,8 @@ TEST_CASE("the atmosphere added to a gauge reading, in the wrong unit or without
                plumb::rules::sum_mismatch);
     // A failed reading leaves no note behind.
     const auto r = run(depth, "@missing-weight p_k = h_m + 101.325");
-    CHECK(count(r, plumb::rules::trade_constant) == 0);
-    CHECK(count(r, plumb::rules::gravity_number) == 0);
+    CHECK(count_of(r, plumb::rules::trade_constant) == 0);
+    CHECK(count_of(r, plumb::rules::gravity_number) == 0);
 }
 
 TEST_CASE("NPSH from a gauge reading: the atmosphere added in the converted unit") {
@@ -205,6 +191,6 @@ TEST_CASE("NPSH from a gauge reading: the atmosphere added in the converted unit
                 "@no-atmosphere-us N_ft = 2.31*(p_s - p_v)/SG"},
                plumb::rules::offset_scale);
     // The atmosphere in kPa beside terms converted to Pa: flagged.
-    CHECK(problems(run(npsh, "@kilopascal-atmosphere NPSH = (p_k*1000 + 101.325 - "
-                             "p_vk*1000)/(ρ*g)")) >= 1);
+    CHECK(problems_in(run(npsh, "@kilopascal-atmosphere NPSH = (p_k*1000 + 101.325 - "
+                                "p_vk*1000)/(ρ*g)")) >= 1);
 }

@@ -679,13 +679,7 @@ class checker {
         t.point = true; // the atmosphere is an absolute reading
         t.origin = 0.0;
         t.origin_tolerance = 0.0;
-        number.value = 1.0;
-        number.tolerance = 0.0;
-        number.low = rational(1);
-        number.high = rational(1);
-        number.power_of_ten = false;
-        number.factor_like = false;
-        number.table_digits = false;
+        read_as_quantity(number);
         const std::span<const operand> terms(operands_.data() + base, count);
         agreement a = find_agreement(terms);
         if (!a.odd.empty() || !a.reference || !(*a.reference == pressure)) {
@@ -822,13 +816,7 @@ class checker {
             t.absolute_pressure_difference = t.dim == pressure_dimension();
             const std::uint32_t node = number.node;
             // The number is g_n now, not a factor for the scale rules to weigh.
-            number.value = 1.0;
-            number.tolerance = 0.0;
-            number.low = rational(1);
-            number.high = rational(1);
-            number.power_of_ten = false;
-            number.factor_like = false;
-            number.table_digits = false;
+            read_as_quantity(number);
             const std::string written = display_text(file_.nodes[node].range);
             const gravity_reading& reading = readings[r].reading;
             if (reading.flipped) {
@@ -2593,13 +2581,7 @@ class checker {
                     scale_literal& literal = literals_[l];
                     if (literal.node != number.node)
                         continue;
-                    literal.value = 1.0;
-                    literal.tolerance = 0.0;
-                    literal.low = rational(1);
-                    literal.high = rational(1);
-                    literal.power_of_ten = false;
-                    literal.factor_like = false;
-                    literal.table_digits = false;
+                    read_as_quantity(literal);
                 }
                 diagnostic& d = report(
                     rules::trade_constant,

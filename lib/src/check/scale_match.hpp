@@ -29,6 +29,18 @@ struct scale_literal {
     bool table_digits = false; // to 4 or more (3.281, 0.3048): precise enough to name a unit ratio
 };
 
+// The number now stands for a quantity (g_n, the atmosphere, a reference temperature), not
+// a factor for the scale rules to weigh: its value becomes exactly 1.
+inline void read_as_quantity(scale_literal& l) {
+    l.value = 1.0;
+    l.tolerance = 0.0;
+    l.low = rational(1);
+    l.high = rational(1);
+    l.power_of_ten = false;
+    l.factor_like = false;
+    l.table_digits = false;
+}
+
 // One operand where terms meet: the SI value of one written unit of it, and its numbers.
 struct scaled_operand {
     double scale = 1.0;
