@@ -154,6 +154,9 @@ TEST_CASE("readings added with weights that make neither a reading nor a differe
                       "@mixing T_f = (2*T_1 + 3*T_2)/5", "@bed p_m = (p_1 + p_2)/2",
                       "@difference ΔT = T_1 - T_2", "@from-the-mean ΔT = (T_1 + T_2)/2 - T_3",
                       "@absolute K_m = K_1 + K_2"});
+    // A conversion beside a reading is no weight: the gauge zero is still off in NPSH.
+    fails_with("p_s : barg\np_v : kPa\nN : m\nρ : kg/m^3\ng : m/s^2\n",
+               {"@npsh-no-atmosphere N = (p_s*100 - p_v)*1000/(ρ*g)"}, plumb::rules::offset_scale);
     fails_with(readings,
                {"@film-precedence T_f = T_s + T_a/2", "@no-half T_f = T_1 + T_2",
                 "@bed-precedence p_m = p_1 + p_2/2", "@half-difference ΔT = T_1 - T_2/2",

@@ -1407,7 +1407,11 @@ class checker {
             origin += sign * t.type.origin;
             origin_tolerance += t.type.origin_tolerance;
             points += t.subtracted ? -1 : 1;
-            const std::optional<rational> w = weight_of(t.type);
+            // A mean's weights are small fractions (1/2, 1/3, 3/5); a larger number beside a
+            // reading (100*p_bar to kPa, 6.895*p_psig) converts it, and is no weight.
+            std::optional<rational> w = weight_of(t.type);
+            if (w && (std::abs(w->num()) > 12 || w->den() > 12))
+                w.reset();
             if (weight && w && std::isfinite(t.type.origin_tolerance)) {
                 try {
                     weight = t.subtracted ? *weight - *w : *weight + *w;
