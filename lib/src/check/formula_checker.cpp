@@ -607,6 +607,16 @@ class checker {
         return out_.back();
     }
 
+    // The SI value of one written unit of a term with its numbers taken as conversions:
+    // ρ*g*h/1000 is in kPa (1000 Pa). NaN where that is no finite positive number.
+    double unit_as_written(const typed_term& t) const {
+        double u = t.scale;
+        for (std::uint32_t l = 0; l < t.literal_count; ++l)
+            u /= std::pow(literals_[t.literal_begin + l].value,
+                          literals_[t.literal_begin + l].exponent);
+        return u > 0 && std::isfinite(u) ? u : std::numeric_limits<double>::quiet_NaN();
+    }
+
     // "p_abs = 9.81*h + 101.325", "p_a = 0.433*h_ft + 14.7", "ρ*g*h/1000 + 101.325": a
     // column's pressure plus the atmosphere written as a bare number, the absolute pressure at
     // depth. The number is read as a standard reference pressure in the unit of the sum's
@@ -624,14 +634,8 @@ class checker {
         double unit = std::numeric_limits<double>::quiet_NaN(); // SI per written value
         for (std::size_t i = 0; i < count && !std::isfinite(unit); ++i) {
             const typed_term& t = operands_[base + i].type;
-            if (!t.known || t.numeric || !(t.dim == pressure))
-                continue;
-            double u = t.scale;
-            for (std::uint32_t l = 0; l < t.literal_count; ++l)
-                u /= std::pow(literals_[t.literal_begin + l].value,
-                              literals_[t.literal_begin + l].exponent);
-            if (u > 0 && std::isfinite(u))
-                unit = u;
+            if (t.known && !t.numeric && t.dim == pressure)
+                unit = unit_as_written(t);
         }
         if (!std::isfinite(unit) && sum_node == side_hint_node_ && side_hint_ != nullptr &&
             side_hint_->known && !side_hint_->numeric && side_hint_->dim == pressure)
@@ -1167,11 +1171,8 @@ class checker {
                 numbers = true;
                 continue;
             }
-            double u = t.scale;
-            for (std::uint32_t l = 0; l < t.literal_count; ++l)
-                u /= std::pow(literals_[t.literal_begin + l].value,
-                              literals_[t.literal_begin + l].exponent);
-            if (!(u > 0) || !std::isfinite(u))
+            const double u = unit_as_written(t);
+            if (!std::isfinite(u))
                 return;
             if (!std::isfinite(unit))
                 unit = u;
@@ -1354,15 +1355,12 @@ class checker {
                 continue;
             if (t.type.literal_count == 0)
                 return false;
-            double u = t.type.scale;
-            for (std::uint32_t l = 0; l < t.type.literal_count; ++l) {
-                const scale_literal& number = literals_[t.type.literal_begin + l];
-                // Only conversions: the 0.5 of "0.5*t_1 + 0.5*t_2 + 273.15" is a mean's.
-                if (!looks_like_conversion(number, true))
+            // Only conversions: the 0.5 of "0.5*t_1 + 0.5*t_2 + 273.15" is a mean's.
+            for (std::uint32_t l = 0; l < t.type.literal_count; ++l)
+                if (!looks_like_conversion(literals_[t.type.literal_begin + l], true))
                     return false;
-                u /= std::pow(number.value, number.exponent);
-            }
-            if (!(u > 0) || !std::isfinite(u))
+            const double u = unit_as_written(t.type);
+            if (!std::isfinite(u))
                 return false;
             if (!std::isfinite(common))
                 common = u;
