@@ -17,23 +17,13 @@ namespace {
 using plumb::test::count_of;
 using plumb::test::first_under;
 using plumb::test::problems_in;
-
-plumb::check_report run(const std::string& declarations, const char* formula) {
-    return plumb::check_text("f.plumb", declarations + formula + "\n");
-}
+constexpr auto run = plumb::test::check_after;
+constexpr auto fails_with = plumb::test::each_fails_with;
 
 void passes(const std::string& declarations, std::initializer_list<const char*> formulas) {
     for (const char* formula : formulas) {
         CAPTURE(formula);
         CHECK(problems_in(run(declarations, formula)) == 0);
-    }
-}
-
-void fails_with(const std::string& declarations, std::initializer_list<const char*> formulas,
-                std::string_view rule) {
-    for (const char* formula : formulas) {
-        CAPTURE(formula);
-        CHECK(count_of(run(declarations, formula), rule) >= 1);
     }
 }
 

@@ -14,6 +14,7 @@
 #include <cstdint>
 #include <filesystem>
 #include <fstream>
+#include <initializer_list>
 #include <string>
 #include <system_error>
 #include <vector>
@@ -33,6 +34,20 @@ inline std::size_t problems_in(const check_report& r) {
         std::count_if(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
             return d.level != severity::note && d.rule != rules::unused;
         }));
+}
+
+// One formula checked after the declarations it needs.
+inline check_report check_after(const std::string& declarations, const char* formula) {
+    return check_text("t.plumb", declarations + formula + "\n");
+}
+
+// Each formula, after the declarations, has at least one finding under `rule`.
+inline void each_fails_with(const std::string& declarations,
+                            std::initializer_list<const char*> formulas, std::string_view rule) {
+    for (const char* formula : formulas) {
+        CAPTURE(formula);
+        CHECK(count_of(check_after(declarations, formula), rule) >= 1);
+    }
 }
 
 // The report's first finding under `rule`; fails the test when there is none.

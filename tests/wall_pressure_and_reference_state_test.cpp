@@ -17,10 +17,8 @@ namespace {
 using plumb::test::count_of;
 using plumb::test::first_under;
 using plumb::test::problems_in;
-
-plumb::check_report run(const std::string& declarations, const char* formula) {
-    return plumb::check_text("w.plumb", declarations + formula + "\n");
-}
+constexpr auto run = plumb::test::check_after;
+constexpr auto fails_with = plumb::test::each_fails_with;
 
 void passes(const std::string& declarations, std::initializer_list<const char*> formulas,
             std::size_t notes = 0) {
@@ -31,15 +29,6 @@ void passes(const std::string& declarations, std::initializer_list<const char*> 
         CHECK(count_of(r, plumb::rules::trade_constant) +
                   count_of(r, plumb::rules::gravity_number) ==
               notes);
-    }
-}
-
-void fails_with(const std::string& declarations, std::initializer_list<const char*> formulas,
-                std::string_view rule) {
-    for (const char* formula : formulas) {
-        CAPTURE(formula);
-        const auto r = run(declarations, formula);
-        CHECK(count_of(r, rule) >= 1);
     }
 }
 
