@@ -114,6 +114,43 @@ TEST_CASE("a reference number beside no absolute reading, or the wrong one, is n
 }
 
 namespace {
+const std::string receiver = "V_r, V_f, V_1, V_2 : L\np_1, p_2 : kPa\np_1g, p_2g : kPag\n"
+                             "Δp : kPa\nt_fill : s\nQ_f : L/s\nh : m\np_1p, p_2p : psia\n"
+                             "T_1, T_2 : K\nt_1, t_2 : °C\nρ : kg/m^3\nR : J/(kg*K)\n";
+} // namespace
+
+TEST_CASE("a reference pressure or temperature in ratio with a difference is read too") {
+    // Free air delivered while a receiver is pumped from p_1 to p_2: V_r*(p_2 - p_1)/p_atm
+    // (Boyle's law at constant temperature, from memory of compressor handbooks' receiver
+    // sizing); the difference is the same in gauge and absolute readings. A gas's expansion
+    // from 0 °C: ΔV = V_1*ΔT/273.15 (Charles's law, SI Brochure 9th ed., 2.3.1 for 273.15 K).
+    passes(receiver,
+           {"@free-air V_f = V_r*(p_2 - p_1)/101.325",
+            "@free-air-gauge V_f = V_r*(p_2g - p_1g)/101.325",
+            "@free-air-declared V_f = V_r*Δp/101.325",
+            "@free-air-rate Q_f = V_r*(p_2 - p_1)/(101.325*t_fill)",
+            "@free-air-psi V_f = V_r*(p_2p - p_1p)/14.7",
+            "@charles V_2 = V_1*(T_2 - T_1)/273.15",
+            "@charles-celsius V_2 = V_1*(t_2 - t_1)/273.15"},
+           1);
+}
+
+TEST_CASE("a reference number beside a difference stays an error where it does not divide it") {
+    // Multiplied, or in the other unit's atmosphere, or with a gauge reading in place of a
+    // difference (the gas law needs absolute pressure), or giving a length.
+    fails_with(receiver,
+               {"@upside V_f = V_r*(p_2 - p_1)*101.325",
+                "@wrong-unit V_f = V_r*(p_2 - p_1)/14.7",
+                "@wrong-unit-psi V_f = V_r*(p_2p - p_1p)/101.325",
+                "@head h = (p_2 - p_1)/101.325",
+                "@rate-upside Q_f = V_r*(p_2 - p_1)/101.325*t_fill",
+                "@nested-upside V_f = V_r*(p_2 - p_1)/(V_r/101.325)*V_r",
+                "@density ρ = (p_2 - p_1)/(R*273.15)"},
+               plumb::rules::side_mismatch);
+    fails_with(receiver, {"@gauge-reading V_f = V_r*p_2g/101.325"}, plumb::rules::offset_scale);
+}
+
+namespace {
 const std::string column = "p_t, p_b : psig\nh, z : ft\np_k, p_kt : kPag\nh_m : m\n";
 } // namespace
 

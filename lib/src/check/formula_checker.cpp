@@ -174,9 +174,11 @@ void scale_weight(typed_term& t, const rational& by) {
     }
 }
 
-// The bare numbers and the absolute temperature and pressure readings among a product's
-// factors, each with the sign of its power (+1 multiplied, -1 divided), for
-// read_reference_states. A few of each are enough; a product is rarely longer.
+// The bare numbers and the temperatures and pressures among a product's factors, each with the
+// sign of its power (+1 multiplied, -1 divided), for read_reference_states. A pressure is an
+// absolute reading or a difference (free air from a receiver, V_r*(p_2 - p_1)/101.325; gas
+// expansion from 0 °C, ΔT/273.15), never a reading on an offset scale: p_g/101.325 stays a
+// gas law in gauge pressure. A few of each are enough; a product is rarely longer.
 struct reference_state_pairs {
     struct number {
         std::uint32_t node;
@@ -205,10 +207,35 @@ struct reference_state_pairs {
             // 1 atm and 1 bar are no number to read: a ratio with 1 changes nothing.
             if (l.value > 1.0 && l.exponent == sign)
                 numbers[number_count++] = {l.node, sign, l.value};
-        } else if (t.point && t.offset == nullptr && !t.numeric && t.zero_of == nullptr &&
+        } else if (t.offset == nullptr && !t.numeric && t.zero_of == nullptr &&
                    reading_count < readings.size() &&
                    (t.dim == temperature_dimension() || t.dim == pressure_dimension())) {
             readings[reading_count++] = {node, sign, t.dim, t.scale};
+        }
+    }
+    // The numbers written directly in a grouped product among the factors, as in
+    // V_r*(p_2 - p_1)/(101.325*t_fill): each with its sign along the whole product, which
+    // its literal's exponent already holds.
+    void note_grouped_numbers(const syntax::parsed_file& file, std::uint32_t factor,
+                              const typed_term& t, std::span<const scale_literal> literals) {
+        const syntax::expr_node& group = file.nodes[factor];
+        if (group.kind != syntax::expr_kind::group || !t.known || t.numeric)
+            return;
+        for (std::uint32_t n = group.lhs;;) {
+            const syntax::expr_node& node = file.nodes[n];
+            const bool product =
+                node.kind == syntax::expr_kind::multiply || node.kind == syntax::expr_kind::divide;
+            const std::uint32_t written = product ? node.rhs : n;
+            if (file.nodes[written].kind == syntax::expr_kind::number)
+                for (std::uint32_t i = 0; i < t.literal_count; ++i) {
+                    const scale_literal& l = literals[t.literal_begin + i];
+                    if (l.node == written && l.value > 1.0 && std::abs(l.exponent) == 1.0 &&
+                        number_count < numbers.size())
+                        numbers[number_count++] = {l.node, static_cast<int>(l.exponent), l.value};
+                }
+            if (!product)
+                return;
+            n = node.lhs;
         }
     }
     bool any() const { return number_count > 0 && reading_count > 0; }
@@ -2765,6 +2792,7 @@ class checker {
             result.inferred = result.inferred || t.inferred;
             has_gravity = has_gravity || (t.known && !divided && t.dim == acceleration_dimension());
             pairs.note(t, op.rhs, divided ? -1 : +1, literals_);
+            pairs.note_grouped_numbers(file_, op.rhs, t, literals_);
             result.scale = divided ? result.scale / t.scale : result.scale * t.scale;
             // Most factors are in SI units: times or over exactly 1 leaves the scale as it is.
             if (!(t.exact_scale && *t.exact_scale == rational(1)))
