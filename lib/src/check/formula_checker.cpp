@@ -1147,6 +1147,7 @@ class checker {
             diagnostic& d = report(rules::sum_mismatch, std::move(message),
                                    file_.nodes[terms[first_odd].node].range);
             explain(d, terms, a, "terms");
+            note_atmosphere_in_another_unit(d, terms, a);
             return unknown_type();
         }
         if (!result.known) {
@@ -1182,6 +1183,70 @@ class checker {
                 points += t.subtracted ? -1 : 1;
         result.point = points == 1;
         return result;
+    }
+
+    // "ρ*g*h + 101.325" with the column in Pa: the atmosphere was written in kPa. The finding
+    // stands (a bare number has no unit), but the fix is the unit, not the physics.
+    void note_atmosphere_in_another_unit(diagnostic& d, std::span<const operand> terms,
+                                         const agreement& a) {
+        if (!a.reference || !(*a.reference == pressure_dimension()))
+            return;
+        double others = 0.0; // the scale the other pressures share
+        for (std::size_t i = 0; i < terms.size(); ++i) {
+            const typed_term& t = terms[i].type;
+            if (!t.known || t.zero || std::find(a.odd.begin(), a.odd.end(), i) != a.odd.end())
+                continue;
+            if (!(t.dim == pressure_dimension()) || t.offset != nullptr ||
+                !std::isfinite(t.scale) || (others != 0.0 && t.scale != others))
+                return;
+            others = t.scale;
+        }
+        struct pressure_unit {
+            const char* name;
+            double pascals; // NIST SP 811 (2008), B.8: psi and mmHg to 10 digits
+        };
+        static constexpr std::array<pressure_unit, 6> units{{{"Pa", 1.0},
+                                                             {"kPa", 1e3},
+                                                             {"MPa", 1e6},
+                                                             {"bar", 1e5},
+                                                             {"psi", 6894.757293},
+                                                             {"mmHg", 133.3224}}};
+        const auto named = [](double scale) -> const pressure_unit* {
+            for (const auto& u : units)
+                if (std::abs(scale / u.pascals - 1.0) < 1e-6)
+                    return &u;
+            return nullptr;
+        };
+        const pressure_unit* theirs = named(others);
+        if (theirs == nullptr)
+            return;
+        for (const std::size_t i : a.odd) {
+            const syntax::expr_node& n = file_.nodes[terms[i].node];
+            if (n.kind != expr_kind::number)
+                continue;
+            const std::string_view written = text(n.range);
+            const double value = read_number(written).literal.value;
+            for (const auto& u : units) {
+                if (&u == theirs || read_reference_state(pressure_dimension(), value, written,
+                                                         u.pascals) == nullptr)
+                    continue;
+                // The standard atmosphere where it is one, rather than 14.7 psi's 101.353 kPa.
+                constexpr double atmosphere = 101325.0; // SI Brochure 9th ed., Table 8
+                double pascals = value * u.pascals;
+                if (std::abs(pascals / atmosphere - 1.0) < 0.005)
+                    pascals = atmosphere;
+                const std::string others_named = terms.size() == 2
+                                                     ? quote(terms[1 - i].node) + " is"
+                                                     : std::string("the other terms are");
+                d.notes.push_back(
+                    {fmt::format("{} reads as the atmosphere in {}, but {} in {}: write it as "
+                                 "{:.6g} {}, or convert to {} first",
+                                 written, u.name, others_named, theirs->name, pascals / others,
+                                 theirs->name, u.name),
+                     {}});
+                return;
+            }
+        }
     }
 
     // "20.9 - O2" with O2 in %, "θ + 90" with θ in degrees: in a sum whose other terms are all
@@ -1731,6 +1796,77 @@ class checker {
                      {}});
                 return true;
             }
+            if (report_zero_in_another_unit_added(t, sh, unit, dim, terms))
+                return true;
+        }
+        return false;
+    }
+
+    // "p_k + 14.7" with p_k an absolute reading in kPa, "T_K + 459.67": a scale's zero as
+    // printed in another unit (the atmosphere in psi, the °F scale's zero in °R) is added to a
+    // reading already absolute. Read in the sum's own unit it would be a small shift (14.7
+    // kPa), but no engineer writes 14.7 or 459.67 for that.
+    bool report_zero_in_another_unit_added(const operand& t, const shift& sh, double unit,
+                                           const compact_dimension& dim,
+                                           std::span<const operand> terms) {
+        // Printed to three digits or more: "p + 0.1" is no atmosphere in MPa.
+        if (sh.si != 0.0 || sh.written <= 0.0 || sh.tolerance > 0.005)
+            return false;
+        struct printed_zero {
+            std::string_view unit;  // the unit it is printed in
+            std::string_view scale; // whose zero it is
+            double value;           // in that unit
+            double factor;          // SI value of that unit
+        };
+        // The standard atmosphere, 101325 Pa (SI Brochure 9th ed., Table 8), in the pressure
+        // units calcs use (NIST SP 811 (2008), B.8); the °C and °F zeros in K and °R
+        // (NIST SP 811 (2008), 4.2.1.1).
+        constexpr double atmosphere = 101325.0;
+        static constexpr std::array<std::pair<std::string_view, double>, 7> pressure_units{{
+            {"Pa", 1.0},
+            {"kPa", 1e3},
+            {"MPa", 1e6},
+            {"bar", 1e5},
+            {"psi", 6894.757293168361},
+            {"mmHg", 133.322387415},
+            {"inHg", 3386.388640341},
+        }};
+        std::array<printed_zero, 9> zeros{};
+        std::size_t count = 0;
+        for (const auto& [name, factor] : pressure_units)
+            zeros[count++] = {name, "", atmosphere / factor, factor};
+        zeros[count++] = {"K", "\u00B0C", 273.15, 1.0};
+        zeros[count++] = {"\u00B0R", "\u00B0F", 459.67, 5.0 / 9.0};
+        const bool pressure = dim == pressure_dimension();
+        if (!pressure && !(dim == temperature_dimension()))
+            return false;
+        for (const printed_zero& z : std::span(zeros.data(), count)) {
+            if (z.scale.empty() != pressure || std::abs(z.factor / unit - 1.0) < 1e-9 ||
+                std::abs(sh.written - z.value) > sh.written * sh.tolerance + 1e-9 * z.value)
+                continue;
+            const operand* reading = nullptr;
+            for (const auto& r : terms)
+                if (!is_shift_candidate(r) && r.type.known && r.type.point)
+                    reading = &r;
+            if (reading != nullptr && pressure && named_gauge(reading->node))
+                return false;
+            diagnostic& d =
+                report(rules::offset_scale,
+                       fmt::format("{} is {} in {}, added to {}, a reading already on an absolute "
+                                   "scale and in another unit: the sum counts that zero twice",
+                                   display_text(file_.nodes[t.node].range),
+                                   pressure ? std::string("the atmosphere")
+                                            : fmt::format("the zero of the {} scale", z.scale),
+                                   z.unit, reading != nullptr ? quote(reading->node) : "a reading"),
+                       file_.nodes[t.node].range);
+            add_term(d, t);
+            if (reading != nullptr)
+                add_term(d, *reading);
+            d.notes.push_back({"a reading declared absolute needs nothing added; where it is a "
+                               "gauge or a \u00B0C or \u00B0F reading, declare it so, and add "
+                               "the zero in its own unit",
+                               {}});
+            return true;
         }
         return false;
     }

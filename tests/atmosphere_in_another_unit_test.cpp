@@ -1,0 +1,64 @@
+// A scale's zero printed in another unit than the sum's (14.7 psi beside kPa, 459.67 °R beside
+// K) added to a reading already absolute is an offset-scale error, and a sum-mismatch where
+// the atmosphere is written in kPa beside a column in Pa says which unit it was written in.
+// The conversions beside them (the zero in the sum's own unit added to a gauge or °C reading,
+// a small margin) still pass.
+#include "plumb/check.hpp"
+#include "plumb/rules.hpp"
+#include "test_support.hpp"
+
+#include <doctest/doctest.h>
+
+#include <string>
+
+namespace {
+
+using plumb::test::count_of;
+using plumb::test::first_under;
+using plumb::test::problems_in;
+constexpr auto run = plumb::test::check_after;
+constexpr auto fails_with = plumb::test::each_fails_with;
+
+const std::string readings = "p_k, p_abs : kPa\np_kg : kPag\np_pa : Pa\np_b : bar\n"
+                             "T_K, T_2 : K\nT_R : °R\nt_c : °C\nt_f : °F\nρ : kg/m^3\n"
+                             "g : m/s^2\nh : m\n";
+
+} // namespace
+
+TEST_CASE("the atmosphere or a temperature zero in another unit, added to an absolute reading") {
+    // The standard atmosphere is 101325 Pa (SI Brochure 9th ed., Table 8): 14.696 psi,
+    // 1.01325 bar, 101325 Pa (NIST SP 811 (2008), B.8). T/K = t/°C + 273.15 and
+    // T/°R = t/°F + 459.67 (NIST SP 811 (2008), 4.2.1.1).
+    fails_with(readings,
+               {"@psi-atmosphere p_abs = p_k + 14.7", "@bar-atmosphere p_abs = p_k + 1.01325",
+                "@pa-atmosphere p_abs = p_k + 101325", "@rankine-zero T_2 = T_K + 459.67",
+                "@rankine-zero-rounded T_2 = T_K + 460", "@kelvin-zero T_R = T_R + 273.15"},
+               plumb::rules::offset_scale);
+    const auto r = run(readings, "@psi-atmosphere p_abs = p_k + 14.7");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(first_under(r, plumb::rules::offset_scale).message.find("the atmosphere in psi") !=
+          std::string::npos);
+}
+
+TEST_CASE("the zero in the sum's own unit, or a margin, is not read as another unit's zero") {
+    // Gauge plus the atmosphere in its unit, °C to K, °F to °R (sources as above), and a
+    // margin written as a bare number beside a reading (common practice: "T + 5").
+    for (const char* formula : {"@gauge p_abs = p_kg + 101.325", "@celsius T_2 = t_c + 273.15",
+                                "@fahrenheit T_R = t_f + 459.67", "@margin p_abs = p_k + 10",
+                                "@margin-t T_2 = T_K + 5", "@short-number p_abs = p_k + 0.1"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(readings, formula)) == 0);
+    }
+}
+
+TEST_CASE("the atmosphere in kPa beside a column in Pa: the finding names the unit") {
+    const auto r = run(readings, "@column p_pa = ρ*g*h + 101.325");
+    REQUIRE(count_of(r, plumb::rules::sum_mismatch) == 1);
+    const plumb::diagnostic& d = first_under(r, plumb::rules::sum_mismatch);
+    bool named = false;
+    for (const auto& note : d.notes)
+        named = named || note.message.find("the atmosphere in kPa") != std::string::npos;
+    CHECK(named);
+    // In its own unit it is the column plus the atmosphere and passes (with its note).
+    CHECK(problems_in(run(readings, "@column-kpa p_k = ρ*g*h/1000 + 101.325")) == 0);
+}
