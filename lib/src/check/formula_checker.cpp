@@ -131,6 +131,24 @@ std::string describe(const compact_dimension& d) {
     return describe(d.expand());
 }
 
+// The pressure units calcs write the atmosphere in, for naming the one a bare number was
+// written in (NIST SP 811 (2008), B.8), and the standard atmosphere itself, 101325 Pa (SI
+// Brochure 9th ed., Table 8).
+struct pressure_unit {
+    std::string_view name;
+    double pascals;
+};
+constexpr std::array<pressure_unit, 7> pressure_units{{
+    {"Pa", 1.0},
+    {"kPa", 1e3},
+    {"MPa", 1e6},
+    {"bar", 1e5},
+    {"psi", 6894.757293168361},
+    {"mmHg", 133.322387415},
+    {"inHg", 3386.388640341},
+}};
+constexpr double standard_atmosphere = 101325.0;
+
 // The operands of one meeting point (terms of a sum, arguments, sides of a formula). The type
 // is held on the checker's type stack, shared among operands of one type: a long sum keeps
 // one of these per term, and its size is most of the memory such a line takes.
@@ -1201,18 +1219,8 @@ class checker {
                 return;
             others = t.scale;
         }
-        struct pressure_unit {
-            const char* name;
-            double pascals; // NIST SP 811 (2008), B.8: psi and mmHg to 10 digits
-        };
-        static constexpr std::array<pressure_unit, 6> units{{{"Pa", 1.0},
-                                                             {"kPa", 1e3},
-                                                             {"MPa", 1e6},
-                                                             {"bar", 1e5},
-                                                             {"psi", 6894.757293},
-                                                             {"mmHg", 133.3224}}};
         const auto named = [](double scale) -> const pressure_unit* {
-            for (const auto& u : units)
+            for (const auto& u : pressure_units)
                 if (std::abs(scale / u.pascals - 1.0) < 1e-6)
                     return &u;
             return nullptr;
@@ -1226,15 +1234,14 @@ class checker {
                 continue;
             const std::string_view written = text(n.range);
             const double value = read_number(written).literal.value;
-            for (const auto& u : units) {
+            for (const auto& u : pressure_units) {
                 if (&u == theirs || read_reference_state(pressure_dimension(), value, written,
                                                          u.pascals) == nullptr)
                     continue;
                 // The standard atmosphere where it is one, rather than 14.7 psi's 101.353 kPa.
-                constexpr double atmosphere = 101325.0; // SI Brochure 9th ed., Table 8
                 double pascals = value * u.pascals;
-                if (std::abs(pascals / atmosphere - 1.0) < 0.005)
-                    pascals = atmosphere;
+                if (std::abs(pascals / standard_atmosphere - 1.0) < 0.005)
+                    pascals = standard_atmosphere;
                 const std::string others_named = terms.size() == 2
                                                      ? quote(terms[1 - i].node) + " is"
                                                      : std::string("the other terms are");
@@ -1818,23 +1825,11 @@ class checker {
             double value;           // in that unit
             double factor;          // SI value of that unit
         };
-        // The standard atmosphere, 101325 Pa (SI Brochure 9th ed., Table 8), in the pressure
-        // units calcs use (NIST SP 811 (2008), B.8); the °C and °F zeros in K and °R
-        // (NIST SP 811 (2008), 4.2.1.1).
-        constexpr double atmosphere = 101325.0;
-        static constexpr std::array<std::pair<std::string_view, double>, 7> pressure_units{{
-            {"Pa", 1.0},
-            {"kPa", 1e3},
-            {"MPa", 1e6},
-            {"bar", 1e5},
-            {"psi", 6894.757293168361},
-            {"mmHg", 133.322387415},
-            {"inHg", 3386.388640341},
-        }};
+        // The °C and °F zeros in K and °R (NIST SP 811 (2008), 4.2.1.1).
         std::array<printed_zero, 9> zeros{};
         std::size_t count = 0;
-        for (const auto& [name, factor] : pressure_units)
-            zeros[count++] = {name, "", atmosphere / factor, factor};
+        for (const auto& u : pressure_units)
+            zeros[count++] = {u.name, "", standard_atmosphere / u.pascals, u.pascals};
         zeros[count++] = {"K", "\u00B0C", 273.15, 1.0};
         zeros[count++] = {"\u00B0R", "\u00B0F", 459.67, 5.0 / 9.0};
         const bool pressure = dim == pressure_dimension();
