@@ -49,6 +49,17 @@ TEST_CASE("a gauge pressure scaled by the shape of a wall is a net pressure") {
                       "@lame σ = p_g*(D^2 + t^2)/(D^2 - t^2)", "@intensifier p_2g = p_g*A_1/A_2"});
     // 2.31 ft of water per psi, divided by the specific gravity (common practice).
     passes(pipeline, {"@head h = 2.31*p_g/SG"}, 1);
+    // The hoop tension per unit length of a pipe or tank wall, T = p·D/2 (thin-wall ring,
+    // common practice; the tank designer's T = γ·H·D/2 per unit height, from memory).
+    passes(pipeline + "T_r : lbf/in\n", {"@ring T_r = p_g*D/2", "@ring-radius T_r = p_g*R"});
+}
+
+TEST_CASE("a gauge pressure times a volume, or a volume over a length, is no wall load") {
+    // p·V is a gas's energy (needs absolute pressure), and p·V/D has the dimension of a line
+    // load but is no wall's: both stay errors.
+    fails_with(pipeline + "W : ft*lbf\nT_r : lbf/in\n",
+               {"@work W = p_g*V_1", "@volume-over-length T_r = p_g*V_1/D^2"},
+               plumb::rules::offset_scale);
 }
 
 TEST_CASE("a gauge pressure in a gas law or a pressure ratio is still an error") {
@@ -129,8 +140,7 @@ TEST_CASE("a reference pressure or temperature in ratio with a difference is rea
             "@free-air-gauge V_f = V_r*(p_2g - p_1g)/101.325",
             "@free-air-declared V_f = V_r*Δp/101.325",
             "@free-air-rate Q_f = V_r*(p_2 - p_1)/(101.325*t_fill)",
-            "@free-air-psi V_f = V_r*(p_2p - p_1p)/14.7",
-            "@charles V_2 = V_1*(T_2 - T_1)/273.15",
+            "@free-air-psi V_f = V_r*(p_2p - p_1p)/14.7", "@charles V_2 = V_1*(T_2 - T_1)/273.15",
             "@charles-celsius V_2 = V_1*(t_2 - t_1)/273.15"},
            1);
 }
@@ -139,10 +149,8 @@ TEST_CASE("a reference number beside a difference stays an error where it does n
     // Multiplied, or in the other unit's atmosphere, or with a gauge reading in place of a
     // difference (the gas law needs absolute pressure), or giving a length.
     fails_with(receiver,
-               {"@upside V_f = V_r*(p_2 - p_1)*101.325",
-                "@wrong-unit V_f = V_r*(p_2 - p_1)/14.7",
-                "@wrong-unit-psi V_f = V_r*(p_2p - p_1p)/101.325",
-                "@head h = (p_2 - p_1)/101.325",
+               {"@upside V_f = V_r*(p_2 - p_1)*101.325", "@wrong-unit V_f = V_r*(p_2 - p_1)/14.7",
+                "@wrong-unit-psi V_f = V_r*(p_2p - p_1p)/101.325", "@head h = (p_2 - p_1)/101.325",
                 "@rate-upside Q_f = V_r*(p_2 - p_1)/101.325*t_fill",
                 "@nested-upside V_f = V_r*(p_2 - p_1)/(V_r/101.325)*V_r",
                 "@density ρ = (p_2 - p_1)/(R*273.15)"},

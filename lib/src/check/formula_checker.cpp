@@ -58,6 +58,11 @@ const compact_dimension& force_dimension() {
     static const compact_dimension d(unit_table::standard().resolve("N")->dim());
     return d;
 }
+const compact_dimension& force_per_length_dimension() {
+    static const compact_dimension d(unit_table::standard().resolve("N")->dim() /
+                                     dimension::base(base_dimension::length));
+    return d;
+}
 const compact_dimension& length_dimension() {
     static const compact_dimension d(dimension::base(base_dimension::length));
     return d;
@@ -2953,12 +2958,17 @@ class checker {
         if (gauge_in_product) {
             const bool wall_stress = result.known && result.dim == pressure_dimension() &&
                                      pressure_scaled_by_shape(index, true);
+            // p_g*D/2: the hoop tension a gauge pressure puts in a pipe or tank wall per unit of
+            // its length, a net load as p_g*A is.
+            const bool ring_tension = result.known && result.dim == force_per_length_dimension() &&
+                                      pressure_scaled_by_shape(index, true);
             // sqrt(2*p_g/ρ): a gauge pressure over a density, under a square root, is the
             // velocity of a jet into the atmosphere (Torricelli's and Bernoulli's).
             const bool jet = result.known && index == square_root_argument_ &&
                              result.dim == velocity_squared_dimension();
-            if (result.known && (result.dim == length_dimension() ||
-                                 result.dim == force_dimension() || wall_stress || jet)) {
+            if (result.known &&
+                (result.dim == length_dimension() || result.dim == force_dimension() ||
+                 wall_stress || ring_tension || jet)) {
                 result.offset = nullptr;
                 result.point = false;
                 result.origin = 0.0;
