@@ -114,6 +114,38 @@ TEST_CASE("gravity as a number: 32.2 in foot units") {
     CHECK(problems_in(run(feet + "h_f = p_f/(ρ_s*9.81)\n")) == 1);
 }
 
+namespace {
+// The note of the report's first finding under `rule` that holds `words`, or "".
+std::string note_with(const plumb::check_report& r, std::string_view rule, std::string_view words) {
+    for (const auto& d : r.diagnostics)
+        if (d.rule == rule)
+            for (const auto& n : d.notes)
+                if (n.message.find(words) != std::string::npos)
+                    return n.message;
+    return "";
+}
+} // namespace
+
+TEST_CASE("gravity as a number beside the other system's units: the finding says so") {
+    // 1 ft = 0.3048 m exactly (NIST SP 811 (2008), B.8), so g_n written for metres beside a
+    // length in feet, or for feet beside metres, leaves the term off by 1/0.3048 = 3.28084.
+    const std::string mixed = "z_ft : ft\nz : m\nu : J/kg\nρ : kg/m^3\nh_ft : ft\np_1, p_2 : Pa\n";
+    const auto metric_g = run(mixed + "u = 9.81*z_ft\n");
+    REQUIRE(count_of(metric_g, plumb::rules::side_mismatch) == 1);
+    const std::string note = note_with(metric_g, plumb::rules::side_mismatch, "standard gravity");
+    CHECK(note.find("9.81 is standard gravity in m/s") != std::string::npos);
+    CHECK(note.find("3.28084 times") != std::string::npos);
+    const auto foot_g = run(mixed + "u = 32.2*z\n");
+    CHECK(
+        note_with(foot_g, plumb::rules::side_mismatch, "32.2 is standard gravity in ft/s").size() >
+        0);
+    const auto column = run(mixed + "p_2 = p_1 + ρ*9.81*h_ft\n");
+    CHECK(note_with(column, plumb::rules::sum_mismatch, "3.28084 times").size() > 0);
+    // Not said where the units are right and the slip is elsewhere (a missing density).
+    const auto no_density = run(mixed + "p_2 = p_1 + 9.81*z\n");
+    CHECK(note_with(no_density, plumb::rules::sum_mismatch, "standard gravity").empty());
+}
+
 // Water's specific weight written as a number, γ_w = ρ_w·g_n with ρ_w from 995.65 to 999.975
 // kg/m³ between 0 and 30 °C (CRC Handbook of Chemistry and Physics; from memory). Each printed
 // number is worked out here from NIST SP 811 (2008) App. B factors (ft = 0.3048 m, lbf =

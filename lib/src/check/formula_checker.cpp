@@ -558,6 +558,74 @@ class checker {
                                true});
         }
         note_bare_number_side(d, sides);
+        note_gravity_in_other_units(d, sides, a);
+    }
+
+    // "u = 9.81*z_ft": standard gravity written for metres and seconds in a term whose units are
+    // feet (or 32.2 beside metres). The dimensions show a missing acceleration, but the
+    // acceleration is there: the slip is the units around it, which this note names.
+    void note_gravity_in_other_units(diagnostic& d, std::span<const operand> ops,
+                                     const agreement& a) {
+        if (!a.reference)
+            return;
+        double reference_scale = std::numeric_limits<double>::quiet_NaN();
+        const operand* reference = nullptr;
+        for (std::size_t i = 0; i < ops.size() && reference == nullptr; ++i) {
+            const typed_term& t = ops[i].type;
+            if (std::find(a.odd.begin(), a.odd.end(), i) == a.odd.end() && t.known && !t.zero &&
+                !t.numeric && t.dim == *a.reference && t.literal_count == 0 &&
+                std::isfinite(t.scale)) {
+                reference_scale = t.scale;
+                reference = &ops[i];
+            }
+        }
+        if (reference == nullptr)
+            return;
+        struct gravity_unit {
+            const char* name;
+            const char* system;
+            double metres; // NIST SP 811 (2008), B.8: 1 ft = 0.3048 m exactly
+        };
+        static constexpr std::array<gravity_unit, 2> units{
+            {{"m/s\u00B2", "metres", 1.0}, {"ft/s\u00B2", "feet", 0.3048}}};
+        constexpr double standard_gravity = 9.80665; // SI Brochure 9th ed., Table 8 (g_n)
+        for (const std::size_t i : a.odd) {
+            const typed_term& t = ops[i].type;
+            if (!t.known || t.numeric || t.literal_count == 0 || !std::isfinite(t.scale))
+                continue;
+            try {
+                if (!(*a.reference / t.dim == acceleration_dimension()))
+                    continue;
+            } catch (const std::exception&) {
+                continue;
+            }
+            for (std::uint32_t k = 0; k < t.literal_count; ++k) {
+                const scale_literal& l = literals_[t.literal_begin + k];
+                if (l.exponent != 1.0)
+                    continue;
+                const std::string written = display_text(file_.nodes[l.node].range);
+                for (const gravity_unit& u : units) {
+                    const double g = standard_gravity / u.metres;
+                    if (std::abs(l.value - g) > half_unit_in_last_digit(written) * (1.0 + 1e-9) ||
+                        std::abs(l.value / g - 1.0) > 0.005)
+                        continue;
+                    // As the unit-scale findings count it: the value as written over the value
+                    // in the reference's unit.
+                    const double ratio = reference_scale / (u.metres * t.scale);
+                    if (std::abs(ratio - 1.0) < 0.01)
+                        continue;
+                    d.notes.push_back(
+                        {fmt::format("{} is standard gravity in {}, but the other units of {} are "
+                                     "not all {} and seconds: read so, it counts {:.6g} times as "
+                                     "much as {}; write gravity in the units around it, or "
+                                     "convert them first",
+                                     written, u.name, quote(ops[i].node), u.system, ratio,
+                                     quote(reference->node)),
+                         {}});
+                    return;
+                }
+            }
+        }
     }
 
     // "V <= 7.5": a limit typed as a bare number has no unit; say how to give it one, in the
@@ -1155,7 +1223,6 @@ class checker {
         if (!a.odd.empty() && !prefer_dimensionless && read_column_and_atmosphere(base, index))
             a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty()) {
-            literals_.resize(literal_base);
             const std::size_t first_odd = a.odd.front();
             std::string message;
             if (terms.size() == 2) {
@@ -1171,6 +1238,8 @@ class checker {
                                    file_.nodes[terms[first_odd].node].range);
             explain(d, terms, a, "terms");
             note_atmosphere_in_another_unit(d, terms, a);
+            note_gravity_in_other_units(d, terms, a);
+            literals_.resize(literal_base);
             return unknown_type();
         }
         if (!result.known) {
