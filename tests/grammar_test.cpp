@@ -179,6 +179,14 @@ TEST_CASE("names: UTF-8 letters, subscripts and primes") {
     parses("T_inf : K");
     parses("\u00E9t\u00E9, \u00F1, \u03A9_2, \u00B5x : 1"); // Latin-1 letters, Greek, micro sign
     parses("a'' : m");                                      // more than one prime
+    // The dotted rates of heat and mass transfer: ṁ (U+1E41, Latin Extended Additional) and
+    // Q̇, written as Q and the combining dot above (U+0307), which may follow a first letter
+    // but not start a name.
+    parses("\u1E41, Q\u0307, \u1E8B_1 : [M T^-1]");
+    parses("y = \u1E41 + Q\u0307 + \u1E8B_1");
+    const auto mark_first = check("\u0307Q : K");
+    INFO(listing(mark_first));
+    CHECK(of_rule(mark_first, plumb::rules::syntax).size() == 1);
     // The infinity sign is not a letter, so "T_\u221E" is not a name.
     const auto all = check("T_\u221E : K");
     INFO(listing(all));

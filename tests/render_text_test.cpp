@@ -68,6 +68,20 @@ TEST_CASE("a nested term's brace sits nearer the formula than the one around it"
                            "  ▶ c  [T]  time    ◀ does not match\n");
 }
 
+TEST_CASE("a combining mark takes no cell, so the marks under the line stay in place") {
+    // Q̇ is Q and U+0307, drawn as one character; the brace under 'Q̇*t' and the mark under 'L'
+    // must start where the characters do (The Unicode Standard, 3.6: combining marks).
+    const source_file file("dot.plumb", "E = Q\u0307*t + L\n");
+    diagnostic d = finding(at(file, "L"));
+    d.terms.push_back({at(file, "Q\u0307*t"), "Q\u0307*t", length});
+    d.terms.push_back({at(file, "L"), "L", duration, true});
+    CHECK(excerpt_of(d) == "    E = Q\u0307*t + L\n"
+                           "        \u2514a\u2518   \u2551\n"
+                           "              b\n"
+                           "    a  [L]  length\n"
+                           "  \u25B6 b  [T]  time    \u25C0 does not match\n");
+}
+
 TEST_CASE("overlapping terms take separate rows; keys never touch") {
     const source_file file("overlap.plumb", "x = ab + cd\n");
     diagnostic d = finding(at(file, "ab"));

@@ -22,14 +22,17 @@ struct space : one<' ', '\t', '\r'> {};
 
 // --- Names --------------------------------------------------------------------------------
 // Latin-1 and Latin Extended letters without × (U+00D7) and ÷ (U+00F7); the micro sign;
-// Greek and Greek Extended. Engineers write ρ, μ, Δp, φ'.
+// Greek, Latin Extended Additional (ṁ, ẋ) and Greek Extended. Engineers write ρ, μ, Δp, φ', ṁ.
+// After the first letter a name may also hold combining marks (U+0300-U+036F), for the dot of
+// Q̇ written as Q and U+0307.
 // A byte of a multi-byte UTF-8 sequence: tested before decoding one, so that the ASCII byte
 // after every name and operand fails without a decode (issue 12: parse speed).
 struct non_ascii : at<ascii::range<'\x80', '\xFF'>> {};
 struct utf8_letter : seq<non_ascii, utf8::ranges<0xB5, 0xB5, 0xC0, 0xD6, 0xD8, 0xF6, 0xF8, 0x24F,
-                                                 0x370, 0x3FF, 0x1F00, 0x1FFF>> {};
+                                                 0x370, 0x3FF, 0x1E00, 0x1EFF, 0x1F00, 0x1FFF>> {};
+struct combining_mark : seq<non_ascii, utf8::range<0x300, 0x36F>> {};
 struct letter : sor<ranges<'a', 'z', 'A', 'Z'>, utf8_letter> {};
-struct name_char : sor<ranges<'a', 'z', 'A', 'Z', '0', '9', '_'>, utf8_letter> {};
+struct name_char : sor<ranges<'a', 'z', 'A', 'Z', '0', '9', '_'>, utf8_letter, combining_mark> {};
 // name, seq<letter, star<name_char>, star<one<'\''>>>, is hand-written in notation_leaves.hpp.
 
 // --- Numbers ------------------------------------------------------------------------------

@@ -45,7 +45,8 @@ inline constexpr std::array<unsigned char, 256> byte_class_of = byte_classes();
 }
 
 // The length of the letter that starts at p (a byte of 0x80 or above), or 0: the Latin-1 and
-// Latin Extended letters without U+00D7 and U+00F7, the micro sign, Greek and Greek Extended.
+// Latin Extended letters without U+00D7 and U+00F7, the micro sign, Greek, Latin Extended
+// Additional and Greek Extended.
 // As PEGTL's utf8::ranges, it takes only well-formed, shortest sequences.
 [[nodiscard]] inline std::size_t utf8_letter_length(const char* p, const char* end) noexcept {
     const auto c0 = static_cast<unsigned char>(*p);
@@ -69,9 +70,20 @@ inline constexpr std::array<unsigned char, 256> byte_class_of = byte_classes();
         if ((c1 & 0xC0) != 0x80 || (c2 & 0xC0) != 0x80)
             return 0;
         const unsigned code = ((c0 & 0x0Fu) << 12) | ((c1 & 0x3Fu) << 6) | (c2 & 0x3Fu);
-        return code >= 0x1F00 && code <= 0x1FFF ? 3 : 0;
+        return code >= 0x1E00 && code <= 0x1FFF ? 3 : 0;
     }
     return 0; // a four-byte sequence is above every letter's range
+}
+
+// The length of the combining mark (U+0300-U+036F) that starts at p, or 0: it may follow a
+// name's first letter (Q̇, the dot written as a mark of its own).
+[[nodiscard]] inline std::size_t utf8_combining_length(const char* p, const char* end) noexcept {
+    if (end - p < 2)
+        return 0;
+    const auto c0 = static_cast<unsigned char>(p[0]);
+    const auto c1 = static_cast<unsigned char>(p[1]);
+    return (c0 == 0xCC && c1 >= 0x80 && c1 <= 0xBF) || (c0 == 0xCD && c1 >= 0x80 && c1 <= 0xAF) ? 2
+                                                                                                : 0;
 }
 
 // Marks a hand-written rule, which a parser's control class may call directly where no action
@@ -88,7 +100,7 @@ template <typename Rule> struct hand_written : hand_written_rule {
 namespace plumb::notation {
 
 // seq<letter, star<name_char>, star<one<'\''>>>, where a letter is an ASCII letter or one of
-// utf8_letter_length, and a name_char either of those, a digit or '_'.
+// utf8_letter_length, and a name_char either of those, a digit, '_' or a combining mark.
 struct name : leaves::hand_written<name> {
     template <typename Input> [[nodiscard]] static bool match(Input& in) noexcept {
         const char* p = in.current();
@@ -109,7 +121,9 @@ struct name : leaves::hand_written<name> {
             if (leaves::is(*p, leaves::ascii_letter | leaves::decimal_digit | leaves::underscore)) {
                 ++p;
             } else if (leaves::is(*p, leaves::high)) {
-                const std::size_t n = leaves::utf8_letter_length(p, end);
+                std::size_t n = leaves::utf8_letter_length(p, end);
+                if (n == 0)
+                    n = leaves::utf8_combining_length(p, end);
                 if (n == 0)
                     break;
                 p += n;

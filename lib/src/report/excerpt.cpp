@@ -101,7 +101,7 @@ const laid_out_line& laid_out(const source_file& file, std::uint32_t line) {
     cached.byte_of_cell.clear();
     const std::string& text = cached.shown.text;
     for (std::size_t i = 0; i < text.size(); ++i)
-        if ((static_cast<unsigned char>(text[i]) & 0xC0) != 0x80)
+        if (starts_a_cell(text, i))
             cached.byte_of_cell.push_back(static_cast<std::uint32_t>(i));
     cached.byte_of_cell.push_back(static_cast<std::uint32_t>(text.size()));
     return cached;
