@@ -130,6 +130,14 @@ TEST_CASE("the fan trade's 6356, and a number counted as a coefficient named") {
     });
     CHECK(named);
     fails_with(fan, {"@thumb P = Q*dp/6000"}, plumb::rules::unit_scale);
+    // Multiplied where it divides: the wrong way round, said with the constant's name.
+    const auto upside = run(fan, "@upside P = Q*dp*6356/η");
+    REQUIRE(count_of(upside, plumb::rules::unit_scale) == 1);
+    const plumb::diagnostic& flipped = first_under(upside, plumb::rules::unit_scale);
+    CHECK(flipped.level == plumb::severity::error);
+    CHECK(flipped.message.find("6356 is the wrong way round: it is the fan trade's") !=
+          std::string::npos);
+    CHECK(count_of(upside, plumb::rules::trade_constant) == 0);
 }
 
 TEST_CASE("readings added with weights that make neither a reading nor a difference") {

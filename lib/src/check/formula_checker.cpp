@@ -2187,6 +2187,9 @@ class checker {
             }
         if (parts.size() <= max_operands_for_flips && accept_trade_constant(parts, unit))
             return true;
+        if (parts.size() <= max_operands_for_flips &&
+            report_inverted_trade_constant(ops, index, parts))
+            return false;
         if (parts.size() <= max_operands_for_flips && accept_folded_coefficient(parts, unit))
             return true;
         const operand& op = ops[index[r.odd]];
@@ -2299,7 +2302,15 @@ class checker {
     // "W = 8.34*Q*C" (lb/d from mgd and mg/L): not the conversion, 8.3454, but water's weight
     // per gallon, which the trade writes there. Accepted where the number is a published value
     // of the property and the exact conversion would reconcile the units; a note says so.
-    bool accept_trade_constant(std::span<const scaled_operand> parts, double& unit) {
+    // A number among the parts that one of the trade constants stands for, where reading it so
+    // reconciles the units as written or, with `flipped`, only the other way round.
+    struct trade_constant_reading {
+        const scale_literal* literal;
+        const trade_constant* constant;
+        double unit;
+    };
+    static std::optional<trade_constant_reading>
+    read_trade_constant(std::span<const scaled_operand> parts, bool flipped) {
         for (std::size_t i = 0; i < parts.size(); ++i)
             for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
                 const scale_literal& l = parts[i].literals[k];
@@ -2317,25 +2328,58 @@ class checker {
                     literals[k].tolerance = 0.0;
                     std::vector<scaled_operand> changed(parts.begin(), parts.end());
                     changed[i].literals = literals;
-                    const reconciliation r = reconcile(changed);
-                    if (!r.agree)
-                        continue;
-                    unit = r.unit;
-                    diagnostic& d = report(
-                        rules::trade_constant,
-                        fmt::format("{} is read as {}, not as a unit conversion: the units "
-                                    "need {}, {}",
-                                    text(file_.nodes[l.node].range), c.name,
-                                    format_factor(std::nullopt, c.exact_conversion.to_double()),
-                                    c.conversion),
-                        file_.nodes[l.node].range);
-                    d.level = severity::note;
-                    d.notes.push_back({fmt::format("{}; source: {}", c.range_text, c.source), {}});
-                    d.notes.push_back({std::string(c.caveat), {}});
-                    return true;
+                    const reconciliation r =
+                        flipped ? reconcile(changed, {i, k}) : reconcile(changed);
+                    if (r.agree)
+                        return trade_constant_reading{&l, &c, r.unit};
                 }
             }
-        return false;
+        return std::nullopt;
+    }
+
+    bool accept_trade_constant(std::span<const scaled_operand> parts, double& unit) {
+        const auto reading = read_trade_constant(parts, false);
+        if (!reading)
+            return false;
+        const scale_literal& l = *reading->literal;
+        const trade_constant& c = *reading->constant;
+        unit = reading->unit;
+        diagnostic& d = report(
+            rules::trade_constant,
+            fmt::format("{} is read as {}, not as a unit conversion: the units "
+                        "need {}, {}",
+                        text(file_.nodes[l.node].range), c.name,
+                        format_factor(std::nullopt, c.exact_conversion.to_double()), c.conversion),
+            file_.nodes[l.node].range);
+        d.level = severity::note;
+        d.notes.push_back({fmt::format("{}; source: {}", c.range_text, c.source), {}});
+        d.notes.push_back({std::string(c.caveat), {}});
+        return true;
+    }
+
+    // "Q*Δp*6356/η": a trade constant that reconciles the units only written the other way
+    // round. Said as such, rather than as the ratio of about 6343 that it leaves.
+    bool report_inverted_trade_constant(std::span<const operand> ops,
+                                        std::span<const std::size_t> index,
+                                        std::span<const scaled_operand> parts) {
+        const auto reading = read_trade_constant(parts, true);
+        if (!reading)
+            return false;
+        const scale_literal& l = *reading->literal;
+        const bool divides = l.exponent < 0;
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("the factor {} is the wrong way round: it is {}, and the units "
+                               "need {} by it, not {}",
+                               text(file_.nodes[l.node].range), reading->constant->name,
+                               divides ? "a multiplication" : "a division",
+                               divides ? "a division" : "a multiplication"),
+                   file_.nodes[l.node].range);
+        for (std::size_t i = 0; i < parts.size(); ++i)
+            for (const scale_literal& mine : parts[i].literals)
+                if (&mine == &l)
+                    add_term_and_units(d, ops[index[i]]);
+        return true;
     }
 
     // A conversion folded with a coefficient into one number: "π*D_mm^2/4e6" (4 × 10⁶ mm²/m²),
