@@ -1668,6 +1668,25 @@ class checker {
                         break;
                     }
                 }
+                // "1.1*p_set + 14.7": a gauge reading scaled by an allowance (10 % over the set
+                // pressure) keeps its zero at the atmosphere, so the added number is in the
+                // reading's own unit. Tried only after every conversion, and only for numbers
+                // near 1 that look like no conversion.
+                const bool allowance_only =
+                    multiplied_reading && term.type.offset != nullptr &&
+                    term.type.offset->scale == unit_scale::gauge &&
+                    std::all_of(lits.begin(), lits.end(), [](const scale_literal& l) {
+                        return std::abs(l.exponent) == 1.0 && l.value >= 0.5 && l.value <= 2.0 &&
+                               !looks_like_conversion(l, true);
+                    });
+                if (!found && allowance_only) {
+                    double tol = 0.0;
+                    const double o = shifted(term.type.scale, 0.0, &tol);
+                    if (recognised_origin(o, tol, term.type.dim, terms)) {
+                        unit = term.type.scale;
+                        found = true;
+                    }
+                }
                 if (multiplied_reading && !found) {
                     // No conversion lands the zero: read every number as one, so that the sum
                     // is the reading moved by a difference and its zero is compared as such.
@@ -2886,12 +2905,15 @@ class checker {
     // reads. With a gauge pressure in it, any number of gauge pressures may stand; without,
     // exactly one pressure of another kind (the allowable stress). Walked with a stack of its
     // own, as a product may be nested a million deep.
-    bool pressure_scaled_by_shape(std::uint32_t product, bool with_gauge) const {
+    bool pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
+                                  bool* geometric = nullptr) const {
         const syntax::expr_node& root = file_.nodes[product];
         if (root.kind != expr_kind::multiply && root.kind != expr_kind::divide)
             return false;
         int other_pressures = 0;
         bool shape = false;
+        if (geometric != nullptr)
+            *geometric = false;
         std::vector<std::uint32_t> pending{product};
         while (!pending.empty()) {
             const syntax::expr_node& n = file_.nodes[pending.back()];
@@ -2924,6 +2946,8 @@ class checker {
                 } else if (t.dim.is_dimensionless() || t.dim == length_dimension() ||
                            t.dim == area_dimension()) {
                     shape = true;
+                    if (geometric != nullptr && !t.dim.is_dimensionless())
+                        *geometric = true;
                 } else {
                     return false;
                 }
@@ -3032,8 +3056,25 @@ class checker {
                 result.weighted_sum = t.weighted_sum;
                 scale_weight(result, by);
             }
-            // A reading scaled by a number is still a reading; times a quantity it is not.
-            result.point = (result.point && t.numeric) || (t.point && result.numeric);
+            // A reading scaled by a number is still a reading; times a quantity it is not. An
+            // absolute temperature times a pure ratio is one too (T_1*(p_2/p_1)^n, the
+            // temperature after compression), with a weight no longer followed. Not a pressure:
+            // an allowable stress declared in psi times a joint efficiency (S*E) is no reading.
+            const auto ratio_of = [](const typed_term& by) {
+                return by.known && !by.numeric && by.offset == nullptr && !by.point &&
+                       by.dim.is_dimensionless();
+            };
+            const auto absolute_temperature = [](const typed_term& reading) {
+                return reading.point && reading.offset == nullptr &&
+                       reading.dim == temperature_dimension();
+            };
+            const bool absolute_reading_by_ratio =
+                (absolute_temperature(result) && ratio_of(t) && !divided) ||
+                (absolute_temperature(t) && ratio_of(result));
+            if (absolute_reading_by_ratio)
+                result.weight_denominator = 0;
+            result.point = (result.point && t.numeric) || (t.point && result.numeric) ||
+                           absolute_reading_by_ratio;
             if (!result.point) {
                 result.origin = 0.0;
                 result.origin_tolerance = 0.0;
@@ -3069,8 +3110,22 @@ class checker {
         if (pairs.any())
             read_reference_states(pairs, result);
         if (gauge_in_product) {
-            const bool wall_stress = result.known && result.dim == pressure_dimension() &&
-                                     pressure_scaled_by_shape(index, true);
+            bool geometric = false;
+            const bool scaled_by_shape = result.known && result.dim == pressure_dimension() &&
+                                         pressure_scaled_by_shape(index, true, &geometric);
+            // p_set*(1 + OP/100), k_t*p_design: a gauge reading scaled by pure ratios alone is
+            // still a gauge reading (its zero, the atmosphere, stays where it was), so that
+            // setting it equal to an absolute pressure is reported, as 1.1*p_set is.
+            if (scaled_by_shape && !geometric) {
+                result.offset = gauge_in_product->unit;
+                result.point = true;
+                result.origin = gauge_in_product->unit->offset;
+                result.origin_tolerance = 0.0;
+                result.weight_denominator = 0; // scaled by symbols: not followed
+                result.weighted_sum = false;
+                return result;
+            }
+            const bool wall_stress = scaled_by_shape && geometric;
             // p_g*D/2: the hoop tension a gauge pressure puts in a pipe or tank wall per unit of
             // its length, a net load as p_g*A is.
             const bool ring_tension = result.known && result.dim == force_per_length_dimension() &&
@@ -3524,6 +3579,17 @@ class checker {
         const std::string units = units_in(a.node);
         if (!units.empty())
             d.notes.push_back({units, {}});
+        // sin(β) with β in degrees: the written number is taken as radians where the formula is
+        // evaluated with its numbers (a spreadsheet, a script), so say how to convert it.
+        const bool trig = f.name.find("sin") != std::string_view::npos ||
+                          f.name.find("cos") != std::string_view::npos ||
+                          f.name.find("tan") != std::string_view::npos;
+        const double ratio = 1.0 / apparent_scale(parts[0]);
+        if (trig && std::abs(ratio * std::numbers::pi / 180.0 - 1.0) < 1e-9)
+            d.notes.push_back({fmt::format("{} takes radians: write {}({}*\u03C0/180), or declare "
+                                           "the angle in rad",
+                                           f.name, f.name, display_text(file_.nodes[a.node].range)),
+                               {}});
     }
 
     // True when the argument is dimensionless (or unknown), false when a finding was made.

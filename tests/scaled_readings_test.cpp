@@ -1,0 +1,87 @@
+// Readings scaled by pure ratios and allowances: a gauge reading times a ratio is still a gauge
+// reading (so set equal to an absolute pressure it is reported), a gauge reading times an
+// allowance plus the atmosphere is absolute, and an absolute temperature times a ratio is still
+// a reading that the °C zero may be taken from. Angles in degrees inside sin, cos and tan get
+// the conversion written out.
+#include "plumb/check.hpp"
+#include "plumb/rules.hpp"
+#include "test_support.hpp"
+
+#include <doctest/doctest.h>
+
+#include <string>
+
+namespace {
+
+using plumb::test::count_of;
+using plumb::test::first_under;
+using plumb::test::problems_in;
+constexpr auto run = plumb::test::check_after;
+constexpr auto fails_with = plumb::test::each_fails_with;
+
+void passes(const std::string& declarations, std::initializer_list<const char*> formulas) {
+    for (const char* formula : formulas) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(declarations, formula)) == 0);
+    }
+}
+
+const std::string relief = "p_set, p_t : psig\np_1 : psia\np_k : kPa\np_kg : kPag\nOP : %\n"
+                           "k_t : 1\n";
+
+const std::string compressor = "T_1, T_2 : K\nt_1, t_2 : °C\np_1, p_2 : kPa\nn, x : 1\n";
+
+} // namespace
+
+TEST_CASE("a gauge reading times an allowance, plus the atmosphere, is absolute") {
+    // API 520 Part I: relieving pressure = set pressure + overpressure + atmospheric pressure
+    // (from memory); 10 % for a single valve, 21 % for fire (from memory); 14.7 psi and
+    // 101.325 kPa for the atmosphere (NIST SP 811 (2008), B.8, rounded).
+    passes(relief, {"@relieving p_1 = 1.1*p_set + 14.7", "@fire p_1 = 1.21*p_set + 14.7",
+                    "@relieving-ratio p_1 = p_set*(1 + OP/100) + 14.7",
+                    "@relieving-kpa p_k = 1.1*p_kg + 101.325", "@test p_t = k_t*p_set",
+                    "@test-number p_t = 1.5*p_set"});
+}
+
+TEST_CASE("a gauge reading times a ratio or an allowance, set equal to an absolute pressure") {
+    // Without the atmosphere, or with the atmosphere in another unit, or converted by a
+    // factor with the atmosphere of the other unit: each stays on the gauge scale.
+    fails_with(relief,
+               {"@no-atmosphere p_1 = p_set*(1 + OP/100)", "@no-atmosphere-symbol p_1 = k_t*p_set",
+                "@no-atmosphere-number p_1 = 1.1*p_set",
+                "@atmosphere-in-kpa p_1 = 1.1*p_set + 101.325",
+                "@atmosphere-in-psi p_k = 1.1*p_kg + 14.7",
+                "@converted-psi-atmosphere p_k = 6.895*p_set + 14.7"},
+               plumb::rules::offset_scale);
+    const auto r = run(relief, "@no-atmosphere p_1 = p_set*(1 + OP/100)");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(first_under(r, plumb::rules::offset_scale).message.find("psig scale") !=
+          std::string::npos);
+}
+
+TEST_CASE("an absolute temperature times a pressure ratio is still a reading") {
+    // T_2 = T_1·(p_2/p_1)^((k−1)/k) for isentropic compression (Cengel and Boles,
+    // Thermodynamics, 8th ed., 7-9, from memory); t/°C = T/K − 273.15 (SI Brochure 9th ed.,
+    // 2.3.1).
+    passes(compressor,
+           {"@isentropic T_2 = T_1*(p_2/p_1)^n",
+            "@isentropic-celsius t_2 = T_1*(p_2/p_1)^n - 273.15",
+            "@from-celsius T_2 = (t_1 + 273.15)*(p_2/p_1)^n", "@mixed T_2 = x*T_1 + (1 - x)*T_2"});
+    // Still errors: °C times a ratio, and a K result set equal to °C without the zero.
+    fails_with(compressor,
+               {"@celsius-ratio T_2 = t_1*(p_2/p_1)^n", "@kelvin-as-celsius t_2 = T_1*(p_2/p_1)^n"},
+               plumb::rules::offset_scale);
+}
+
+TEST_CASE("an angle in degrees inside sin, cos or tan: the conversion is written out") {
+    const std::string angles = "β : °\nθ : deg\nT, W : kN\nn : 1\n";
+    const auto r = run(angles, "@sling T = W/(n*sin(β))");
+    REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+    const plumb::diagnostic& d = first_under(r, plumb::rules::unit_scale);
+    bool advised = false;
+    for (const auto& note : d.notes)
+        advised = advised || note.message.find("sin(β*π/180)") != std::string::npos;
+    CHECK(advised);
+    // 1° = π/180 rad (SI Brochure 9th ed., Table 8): written so, it passes.
+    passes(angles, {"@sling-radians T = W/(n*sin(β*π/180))"});
+}
