@@ -95,6 +95,15 @@ const std::vector<offset_row>& offset_rows() {
     return rows;
 }
 
+// The absolute unit a gauge unit reads in (psi for psig, kPa for kPag); the symbol itself for
+// any other unit.
+std::string absolute_symbol(const unit_definition& unit) {
+    std::string symbol(unit.symbol);
+    if (unit.scale == unit_scale::gauge && symbol.size() > 1 && symbol.back() == 'g')
+        symbol.pop_back();
+    return symbol;
+}
+
 // A temperature or pressure declared in an absolute unit is a reading on the absolute scale,
 // unless its name or description says it is a difference (ΔT, dp, "temperature rise").
 bool names_a_difference(std::string_view name, std::string_view description) {
@@ -2261,14 +2270,18 @@ class checker {
                                  coefficients),
                      {}});
         }
-        d.notes.push_back(
-            {ratio < 1 ? fmt::format("multiply {} by {} (declare the symbols in coherent units, or "
-                                     "write the conversion factor into the formula)",
-                                     quote(op.node), format_factor(exact_inverse, 1.0 / ratio))
-                       : fmt::format("divide {} by {} (declare the symbols in coherent units, or "
-                                     "write the conversion factor into the formula)",
-                                     quote(op.node), format_factor(exact_ratio, ratio)),
-             {}});
+        // "divide by 1/0.3048" reads better as "multiply by 0.3048".
+        bool multiply = ratio < 1;
+        std::string factor = multiply ? format_factor(exact_inverse, 1.0 / ratio)
+                                      : format_factor(exact_ratio, ratio);
+        if (factor.starts_with("1/")) {
+            factor.erase(0, 2);
+            multiply = !multiply;
+        }
+        d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
+                                       "write the conversion factor into the formula)",
+                                       multiply ? "multiply" : "divide", quote(op.node), factor),
+                           {}});
         return false;
     }
 
@@ -2643,7 +2656,7 @@ class checker {
                         : fmt::format("a gauge reading plus the atmospheric pressure is "
                                       "absolute: write ({} + p_atm), or ({} + {}) at sea level, "
                                       "the standard atmosphere in {}",
-                                      reading, reading, zero, unit->symbol);
+                                      reading, reading, zero, absolute_symbol(*unit));
                 if (has_number)
                     advice = fmt::format("the number added does not put the zero where the other "
                                          "side has it; {}",
