@@ -3129,7 +3129,10 @@ class checker {
             // p_set*(1 + OP/100), k_t*p_design: a gauge reading scaled by pure ratios alone is
             // still a gauge reading (its zero, the atmosphere, stays where it was), so that
             // setting it equal to an absolute pressure is reported, as 1.1*p_set is.
-            if (scaled_by_shape && !geometric) {
+            // After a unit-scale finding inside it the scale is unknown: read on as before,
+            // with no second finding about the same product.
+            const bool scale_known = std::isfinite(result.scale);
+            if (scaled_by_shape && !geometric && scale_known) {
                 result.offset = gauge_in_product->unit;
                 result.point = true;
                 result.origin = gauge_in_product->unit->offset;
@@ -3138,7 +3141,7 @@ class checker {
                 result.weighted_sum = false;
                 return result;
             }
-            const bool wall_stress = scaled_by_shape && geometric;
+            const bool wall_stress = scaled_by_shape && (geometric || !scale_known);
             // p_g*D/2: the hoop tension a gauge pressure puts in a pipe or tank wall per unit of
             // its length, a net load as p_g*A is.
             const bool ring_tension = result.known && result.dim == force_per_length_dimension() &&
