@@ -62,3 +62,18 @@ TEST_CASE("the atmosphere in kPa beside a column in Pa: the finding names the un
     // In its own unit it is the column plus the atmosphere and passes (with its note).
     CHECK(problems_in(run(readings, "@column-kpa p_k = ρ*g*h/1000 + 101.325")) == 0);
 }
+
+TEST_CASE("a scale's offset beside a temperature difference: the finding says it takes none") {
+    // A range or rise in Δ°F converts to kelvins by the degree alone, ΔT/K = (ΔT/Δ°F)/1.8; the
+    // 32 of t/°F = 1.8 t/°C + 32 belongs to readings only (NIST SP 811 (2008), 4.2.1.1).
+    const std::string ranges = "R_F : Δ°F\nR_K : K\nR_C : Δ°C\n";
+    const auto r = run(ranges, "@range R_K = (R_F - 32)/1.8");
+    REQUIRE(count_of(r, plumb::rules::sum_mismatch) == 1);
+    bool named = false;
+    for (const auto& note : first_under(r, plumb::rules::sum_mismatch).notes)
+        named = named || note.message.find("32 is the offset between the °F and °C scales") !=
+                             std::string::npos;
+    CHECK(named);
+    CHECK(problems_in(run(ranges, "@range-right R_K = R_F/1.8")) == 0);
+    CHECK(problems_in(run(ranges, "@range-celsius R_K = R_C")) == 0);
+}

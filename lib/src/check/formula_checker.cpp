@@ -1164,9 +1164,11 @@ class checker {
         } else if (entry->reading == 1) {
             t.point = true;
         } else if (entry->reading == -1) {
+            // Declared in Δ°C or Δ°F, a temperature is a difference whatever its name.
+            const bool difference_unit = entry->unit_text.starts_with("\u0394");
             const bool reading =
                 (t.dim == temperature_dimension() || t.dim == pressure_dimension()) &&
-                !names_a_difference(name, entry->description);
+                !difference_unit && !names_a_difference(name, entry->description);
             entry->reading = reading ? 1 : 0;
             t.point = reading;
         }
@@ -1247,6 +1249,7 @@ class checker {
                                    file_.nodes[terms[first_odd].node].range);
             explain(d, terms, a, "terms");
             note_atmosphere_in_another_unit(d, terms, a);
+            note_scale_zero_beside_difference(d, terms, a);
             note_gravity_in_other_units(d, terms, a);
             literals_.resize(literal_base);
             return unknown_type();
@@ -1284,6 +1287,56 @@ class checker {
                 points += t.subtracted ? -1 : 1;
         result.point = points == 1;
         return result;
+    }
+
+    // "(R_F - 32)/1.8" with R_F a range in Δ°F: a scale's zero beside a temperature difference,
+    // which has no zero to move. The finding stands; the note names the slip.
+    void note_scale_zero_beside_difference(diagnostic& d, std::span<const operand> terms,
+                                           const agreement& a) {
+        if (!a.reference || !(*a.reference == temperature_dimension()))
+            return;
+        const operand* difference = nullptr;
+        for (std::size_t i = 0; i < terms.size(); ++i) {
+            const typed_term& t = terms[i].type;
+            if (std::find(a.odd.begin(), a.odd.end(), i) != a.odd.end() || !t.known || t.zero)
+                continue;
+            if (t.point || t.offset != nullptr || !std::isfinite(t.scale))
+                return;
+            difference = &terms[i];
+        }
+        if (difference == nullptr)
+            return;
+        struct scale_zero {
+            const char* scales;
+            double value;  // the zero as written, in the difference's degrees
+            double degree; // the degree's size in kelvins
+        };
+        // 32 °F and 273.15 K for 0 °C, 459.67 °R for 0 °F (NIST SP 811 (2008), 4.2.1.1).
+        static constexpr std::array<scale_zero, 3> zeros{
+            {{"\u00B0F and \u00B0C", 32.0, 5.0 / 9.0},
+             {"K and \u00B0C", 273.15, 1.0},
+             {"\u00B0R and \u00B0F", 459.67, 5.0 / 9.0}}};
+        for (const std::size_t i : a.odd) {
+            const syntax::expr_node& n = file_.nodes[terms[i].node];
+            if (n.kind != expr_kind::number)
+                continue;
+            const std::string_view written = text(n.range);
+            const double value = read_number(written).literal.value;
+            for (const scale_zero& z : zeros) {
+                if (std::abs(difference->type.scale / z.degree - 1.0) > 1e-9 ||
+                    std::abs(value - z.value) > half_unit_in_last_digit(written) * (1.0 + 1e-9))
+                    continue;
+                d.notes.push_back(
+                    {fmt::format("{} is the offset between the {} scales, but {} is a "
+                                 "temperature difference, which takes no offset: convert a "
+                                 "difference by the size of the degree alone ({})",
+                                 written, z.scales, quote(difference->node),
+                                 z.degree == 1.0 ? "a kelvin and a degree Celsius are the same"
+                                                 : "1 K = 1.8 \u0394\u00B0F"),
+                     {}});
+                return;
+            }
+        }
     }
 
     // "ρ*g*h + 101.325" with the column in Pa: the atmosphere was written in kPa. The finding
