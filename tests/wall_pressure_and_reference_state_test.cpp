@@ -143,6 +143,9 @@ TEST_CASE("a reference pressure or temperature in ratio with a difference is rea
             "@free-air-psi V_f = V_r*(p_2p - p_1p)/14.7", "@charles V_2 = V_1*(T_2 - T_1)/273.15",
             "@charles-celsius V_2 = V_1*(t_2 - t_1)/273.15"},
            1);
+    // Both reference numbers in one product beside a unit conversion: three numbers to read.
+    passes(receiver + "V_n : m^3\n",
+           {"@normal-free-air V_n = V_r/1000*(p_2 - p_1)/101.325*273.15/T_2"}, 2);
 }
 
 TEST_CASE("a reference number beside a difference stays an error where it does not divide it") {

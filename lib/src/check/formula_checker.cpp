@@ -210,7 +210,8 @@ void scale_weight(typed_term& t, const rational& by) {
 // sign of its power (+1 multiplied, -1 divided), for read_reference_states. A pressure is an
 // absolute reading or a difference (free air from a receiver, V_r*(p_2 - p_1)/101.325; gas
 // expansion from 0 °C, ΔT/273.15), never a reading on an offset scale: p_g/101.325 stays a
-// gas law in gauge pressure. A few of each are enough; a product is rarely longer.
+// gas law in gauge pressure. A few of each are enough (V_b/1000*Δp/1.01325*273.15/T
+// holds three numbers); a product is rarely longer.
 struct reference_state_pairs {
     struct number {
         std::uint32_t node;
@@ -225,8 +226,8 @@ struct reference_state_pairs {
         bool paired = false;
     };
     // Left unset: the counts say how many are filled, and this is made for every product.
-    std::array<number, 2> numbers;
-    std::array<reading, 2> readings;
+    std::array<number, 4> numbers;
+    std::array<reading, 4> readings;
     std::size_t number_count = 0;
     std::size_t reading_count = 0;
 
