@@ -254,18 +254,26 @@ struct reference_state_pairs {
         const syntax::expr_node& group = file.nodes[factor];
         if (group.kind != syntax::expr_kind::group || !t.known || t.numeric)
             return;
-        for (std::uint32_t n = group.lhs;;) {
+        // The walk goes right to left and the literals lie left to right, so one cursor moving
+        // back finds each number's literal: linear in the product's length however long it is,
+        // and it stops once the numbers are full.
+        std::uint32_t cursor = t.literal_count;
+        for (std::uint32_t n = group.lhs; number_count < numbers.size();) {
             const syntax::expr_node& node = file.nodes[n];
             const bool product =
                 node.kind == syntax::expr_kind::multiply || node.kind == syntax::expr_kind::divide;
             const std::uint32_t written = product ? node.rhs : n;
-            if (file.nodes[written].kind == syntax::expr_kind::number)
-                for (std::uint32_t i = 0; i < t.literal_count; ++i) {
-                    const scale_literal& l = literals[t.literal_begin + i];
-                    if (l.node == written && l.value > 1.0 && std::abs(l.exponent) == 1.0 &&
-                        number_count < numbers.size())
+            if (file.nodes[written].kind == syntax::expr_kind::number) {
+                std::uint32_t at = cursor;
+                while (at > 0 && literals[t.literal_begin + at - 1].node != written)
+                    --at;
+                if (at > 0) {
+                    cursor = at - 1;
+                    const scale_literal& l = literals[t.literal_begin + cursor];
+                    if (l.value > 1.0 && std::abs(l.exponent) == 1.0)
                         numbers[number_count++] = {l.node, static_cast<int>(l.exponent), l.value};
                 }
+            }
             if (!product)
                 return;
             n = node.lhs;
@@ -571,12 +579,16 @@ class checker {
         note_gravity_in_other_units(d, sides, a);
     }
 
+    // The notes that say what a mismatch's slip is look at sums of a formula's size only; a
+    // generated sum of 400,000 terms gets the finding without them, in linear time.
+    static constexpr std::size_t notes_for_terms_up_to = 16;
+
     // "u = 9.81*z_ft": standard gravity written for metres and seconds in a term whose units are
     // feet (or 32.2 beside metres). The dimensions show a missing acceleration, but the
     // acceleration is there: the slip is the units around it, which this note names.
     void note_gravity_in_other_units(diagnostic& d, std::span<const operand> ops,
                                      const agreement& a) {
-        if (!a.reference)
+        if (!a.reference || ops.size() > notes_for_terms_up_to)
             return;
         double reference_scale = std::numeric_limits<double>::quiet_NaN();
         const operand* reference = nullptr;
@@ -1294,7 +1306,8 @@ class checker {
     // which has no zero to move. The finding stands; the note names the slip.
     void note_scale_zero_beside_difference(diagnostic& d, std::span<const operand> terms,
                                            const agreement& a) {
-        if (!a.reference || !(*a.reference == temperature_dimension()))
+        if (!a.reference || !(*a.reference == temperature_dimension()) ||
+            terms.size() > notes_for_terms_up_to)
             return;
         const operand* difference = nullptr;
         for (std::size_t i = 0; i < terms.size(); ++i) {
@@ -1344,7 +1357,8 @@ class checker {
     // stands (a bare number has no unit), but the fix is the unit, not the physics.
     void note_atmosphere_in_another_unit(diagnostic& d, std::span<const operand> terms,
                                          const agreement& a) {
-        if (!a.reference || !(*a.reference == pressure_dimension()))
+        if (!a.reference || !(*a.reference == pressure_dimension()) ||
+            terms.size() > notes_for_terms_up_to)
             return;
         double others = 0.0; // the scale the other pressures share
         for (std::size_t i = 0; i < terms.size(); ++i) {
