@@ -7,6 +7,7 @@
 #include "plumb/check.hpp"
 #include "plumb/render.hpp"
 #include "plumb/rules.hpp"
+#include "plumb/source.hpp"
 #include "sheets/workbook_checker.hpp"
 
 #include <doctest/doctest.h>
@@ -360,6 +361,64 @@ TEST_CASE("hardening: the UTF-8 check accepts every well-formed form and nothing
         const std::string repaired = plumb::repaired_utf8(text);
         CHECK_FALSE(plumb::first_invalid_utf8(repaired).has_value());
         CHECK(contains(repaired, "\uFFFD"));
+    }
+}
+
+TEST_CASE("hardening: the UTF-8 check finds the same byte wherever a form stands in the text") {
+    // The check reads the text in blocks of bytes; a form may start at any byte of one, or run
+    // from one block into the next. Each is set at every offset in ASCII text longer than
+    // two blocks, after another character that may itself straddle a block's end.
+    const std::vector<std::string_view> well_formed{"\xC3\xA9", "\xE2\x82\xAC", "\xF0\x9D\x84\x9E"};
+    const std::vector<std::string_view> ill_formed{
+        "\x80", "\xC0\xAF", "\xED\xA0\x80", "\xF4\x90\x80\x80", "\xFF", "\xE2\x82"};
+    for (std::size_t at = 0; at < 80; ++at) {
+        for (const std::string_view good : well_formed) {
+            std::string text(100, 'x');
+            text.replace(at, good.size(), good);
+            CAPTURE(at);
+            CHECK_FALSE(plumb::first_invalid_utf8(text).has_value());
+            for (const std::string_view bad : ill_formed) {
+                if (at + good.size() + bad.size() > text.size())
+                    continue;
+                std::string spoiled = text;
+                spoiled.replace(at + good.size(), bad.size(), bad);
+                // "\xE2\x82" followed by 'x' is cut short all the same.
+                CHECK(plumb::first_invalid_utf8(spoiled) ==
+                      std::optional<std::size_t>(at + good.size()));
+            }
+        }
+    }
+    // Cut short at the very end, as the last bytes of a block or after them.
+    for (std::size_t length = 30; length < 70; ++length) {
+        CAPTURE(length);
+        std::string text(length, 'x');
+        text.back() = '\xC3';
+        CHECK(plumb::first_invalid_utf8(text) == std::optional<std::size_t>(length - 1));
+    }
+}
+
+TEST_CASE("hardening: the line index finds every line break wherever it stands") {
+    // The breaks are found a block of bytes at a time: lines of every length up to a few
+    // blocks, with and without a break at the end, against a plain count.
+    for (std::size_t length = 0; length < 70; ++length) {
+        for (const bool break_at_end : {false, true}) {
+            std::string text;
+            for (std::size_t line = 0; line < 5; ++line)
+                text += std::string(length + line, 'a') + "\n";
+            if (!break_at_end)
+                text += "end";
+            const plumb::source_file file("lines.plumb", text);
+            CAPTURE(length);
+            REQUIRE(file.line_count() == 6);
+            std::uint32_t start = 0;
+            for (std::uint32_t line = 1; line <= 5; ++line) {
+                CHECK(file.line_start(line) == start);
+                CHECK(file.line_text(line) == std::string(length + line - 1, 'a'));
+                start += static_cast<std::uint32_t>(length + line);
+            }
+            CHECK(file.line_start(6) == start);
+            CHECK(file.line_text(6) == (break_at_end ? "" : "end"));
+        }
     }
 }
 

@@ -103,6 +103,21 @@ TEST_CASE("inline mark: no reason, an unknown rule, and an ordinary comment") {
     REQUIRE(!problems[0]->notes.empty());
     CHECK(contains(problems[0]->notes[0].message, "sum-mismatch"));
 
+    // Every item of the list is read: an empty one is skipped, each unknown one is a finding
+    // of its own, and a missing reason is reported besides.
+    const auto listed = plumb::check_text(
+        "e.plumb", "x, y : m\nz : s\ny = x + z  # reviewed sum-mismatsh,, unusd, sum-mismatch\n");
+    const auto listed_problems = with_rule(listed, plumb::rules::acceptance_problem);
+    REQUIRE(listed_problems.size() == 3);
+    CHECK(contains(listed_problems[0]->message, "'sum-mismatsh'"));
+    CHECK(contains(listed_problems[1]->message, "'unusd'"));
+    CHECK(contains(listed_problems[2]->message, "needs a reason"));
+    CHECK(!with_rule(listed, plumb::rules::sum_mismatch)[0]->accepted);
+    const auto skipped = plumb::check_text(
+        "f.plumb", "x, y : m\nz : s\ny = x + z  # reviewed sum-mismatch,,: checked by hand\n");
+    CHECK(with_rule(skipped, plumb::rules::acceptance_problem).empty());
+    CHECK(with_rule(skipped, plumb::rules::sum_mismatch)[0]->accepted.has_value());
+
     // A remark that happens to start with the word is no mark.
     const auto remark = plumb::check_text(
         "c.plumb", "x, y : m\ny = x   # reviewed by the second checker, 3 March\n");

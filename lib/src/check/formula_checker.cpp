@@ -421,7 +421,6 @@ class checker {
             scaled_index_.shrink_to_fit();
         }
     }
-
     // A node's type, with the numbers along its multiplicative path left on the literal stack
     // from where it started.
     typed_term eval(std::uint32_t index) {
@@ -531,6 +530,10 @@ class checker {
         const char* what = equation ? "equation" : "limit";
         if (a.odd.empty()) {
             double unit = 1.0;
+            // Views of known length: from a const char* each formula paid for a strlen.
+            const std::string_view sides_what = equation
+                                                    ? std::string_view("sides of this equation")
+                                                    : std::string_view("sides of this limit");
             // "T_K = T_F": where a side is a reading on a scale whose zero differs from the
             // other's, that is the finding; the degrees' size alone would advise a wrong fix.
             const bool on_offset_scale =
@@ -541,11 +544,8 @@ class checker {
                 const std::size_t findings_before = out_.size();
                 check_origins(sides, equation);
                 if (out_.size() == findings_before)
-                    check_scales(sides, equation ? "sides of this equation" : "sides of this limit",
-                                 unit);
-            } else if (check_scales(sides,
-                                    equation ? "sides of this equation" : "sides of this limit",
-                                    unit)) {
+                    check_scales(sides, sides_what, unit);
+            } else if (check_scales(sides, sides_what, unit)) {
                 check_origins(sides, equation);
             }
             return;

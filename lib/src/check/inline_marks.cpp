@@ -66,76 +66,91 @@ std::string nearest_rule(std::string_view word) {
     return best;
 }
 
-// The marks of one file; malformed marks become findings in `out`.
-std::vector<mark> read_marks(const source_file& file, std::vector<diagnostic>& out) {
-    std::vector<mark> marks;
-    for (std::uint32_t line = 1; line <= file.line_count(); ++line) {
-        const std::string_view text = file.line_text(line);
-        const std::size_t hash = comment_start(text);
-        if (hash == std::string_view::npos)
+// The mark on one line, if it has one, into `marks`; a malformed mark becomes a finding in
+// `out`.
+void read_mark(const source_file& file, std::uint32_t line, std::vector<mark>& marks,
+               std::vector<diagnostic>& out) {
+    const std::string_view text = file.line_text(line);
+    const std::size_t hash = comment_start(text);
+    if (hash == std::string_view::npos)
+        return;
+    const std::string_view comment = trim(text.substr(hash + 1));
+    if (comment.substr(0, mark_word.size()) != mark_word || comment.size() == mark_word.size() ||
+        (comment[mark_word.size()] != ' ' && comment[mark_word.size()] != '\t'))
+        return;
+    const std::string_view body = trim(comment.substr(mark_word.size()));
+    const std::size_t colon = body.find(':');
+    const std::string_view list = body.substr(0, std::min(colon, body.size()));
+    // Only a comment whose first word is a rule id is a mark: "# reviewed by the checker"
+    // is an ordinary remark.
+    const std::string_view first_word = trim(list.substr(0, list.find_first_of(", \t")));
+    if (!is_rule_id(first_word) && !looks_like_rule_id(first_word))
+        return;
+    const std::uint32_t begin = file.line_start(line) + static_cast<std::uint32_t>(hash);
+    const location where{&file, {begin, begin + static_cast<std::uint32_t>(text.size() - hash)}};
+    mark m;
+    m.where = where;
+    m.lines = logical_line_around(file, line);
+    bool usable = true;
+    std::string_view rest = list;
+    while (!rest.empty()) {
+        const std::size_t comma = rest.find(',');
+        const std::string_view id = trim(rest.substr(0, comma));
+        rest = comma == std::string_view::npos ? std::string_view{} : rest.substr(comma + 1);
+        if (id.empty())
             continue;
-        const std::string_view comment = trim(text.substr(hash + 1));
-        if (comment.substr(0, mark_word.size()) != mark_word ||
-            comment.size() == mark_word.size() ||
-            (comment[mark_word.size()] != ' ' && comment[mark_word.size()] != '\t'))
-            continue;
-        const std::string_view body = trim(comment.substr(mark_word.size()));
-        const std::size_t colon = body.find(':');
-        const std::string_view list = body.substr(0, std::min(colon, body.size()));
-        // Only a comment whose first word is a rule id is a mark: "# reviewed by the checker"
-        // is an ordinary remark.
-        const std::string_view first_word = trim(list.substr(0, list.find_first_of(", \t")));
-        if (!is_rule_id(first_word) && !looks_like_rule_id(first_word))
-            continue;
-        const std::uint32_t begin = file.line_start(line) + static_cast<std::uint32_t>(hash);
-        const location where{&file,
-                             {begin, begin + static_cast<std::uint32_t>(text.size() - hash)}};
-        mark m;
-        m.where = where;
-        m.lines = logical_line_around(file, line);
-        bool usable = true;
-        std::string_view rest = list;
-        while (!rest.empty()) {
-            const std::size_t comma = rest.find(',');
-            const std::string_view id = trim(rest.substr(0, comma));
-            rest = comma == std::string_view::npos ? std::string_view{} : rest.substr(comma + 1);
-            if (id.empty())
-                continue;
-            if (id == rules::acceptance_problem || id == rules::stale_acceptance ||
-                !is_rule_id(id)) {
-                const std::string near = nearest_rule(id);
-                diagnostic d =
-                    problem(rules::acceptance_problem, severity::error,
-                            fmt::format("'{}' is not a rule that a mark can accept", id), where);
-                d.notes.push_back({near.empty() || near == id
-                                       ? std::string("'plumb rules' lists the rule ids")
-                                       : fmt::format("did you mean '{}'?", near),
-                                   {}});
-                out.push_back(std::move(d));
-                usable = false;
-                continue;
-            }
-            m.rules.emplace_back(id);
-        }
-        const std::string_view reason =
-            colon == std::string_view::npos ? std::string_view{} : trim(body.substr(colon + 1));
-        if (reason.empty()) {
-            diagnostic d = problem(rules::acceptance_problem, severity::error,
-                                   "a 'reviewed' mark needs a reason after a colon, so that "
-                                   "the checker can see why the finding is accepted",
-                                   where);
-            d.notes.push_back(
-                {"for example: # reviewed unit-scale: 7758 is bbl per acre-ft, from the "
-                 "field-units table",
-                 {}});
+        if (id == rules::acceptance_problem || id == rules::stale_acceptance || !is_rule_id(id)) {
+            const std::string near = nearest_rule(id);
+            diagnostic d =
+                problem(rules::acceptance_problem, severity::error,
+                        fmt::format("'{}' is not a rule that a mark can accept", id), where);
+            d.notes.push_back({near.empty() || near == id
+                                   ? std::string("'plumb rules' lists the rule ids")
+                                   : fmt::format("did you mean '{}'?", near),
+                               {}});
             out.push_back(std::move(d));
             usable = false;
+            continue;
         }
-        if (!usable)
-            continue; // nothing is accepted by a mark that is not complete
-        m.reason = std::string(reason);
-        m.used.assign(m.rules.size(), false);
-        marks.push_back(std::move(m));
+        m.rules.emplace_back(id);
+    }
+    const std::string_view reason =
+        colon == std::string_view::npos ? std::string_view{} : trim(body.substr(colon + 1));
+    if (reason.empty()) {
+        diagnostic d = problem(rules::acceptance_problem, severity::error,
+                               "a 'reviewed' mark needs a reason after a colon, so that "
+                               "the checker can see why the finding is accepted",
+                               where);
+        d.notes.push_back({"for example: # reviewed unit-scale: 7758 is bbl per acre-ft, from the "
+                           "field-units table",
+                           {}});
+        out.push_back(std::move(d));
+        usable = false;
+    }
+    if (!usable)
+        return; // nothing is accepted by a mark that is not complete
+    m.reason = std::string(reason);
+    m.used.assign(m.rules.size(), false);
+    marks.push_back(std::move(m));
+}
+
+// The marks of one file; malformed marks become findings in `out`. A mark is a comment, so
+// only the lines with a '#' are read: found by one search of the whole text rather than one
+// per line (issue 12).
+std::vector<mark> read_marks(const source_file& file, std::vector<diagnostic>& out) {
+    std::vector<mark> marks;
+    const std::string_view text = file.text();
+    std::uint32_t line = 1;
+    for (std::size_t from = 0;;) {
+        const std::size_t hash = text.find('#', from);
+        if (hash == std::string_view::npos)
+            break;
+        while (line < file.line_count() && file.line_start(line + 1) <= hash)
+            ++line;
+        read_mark(file, line, marks, out);
+        if (line == file.line_count())
+            break;
+        from = file.line_start(line + 1);
     }
     return marks;
 }

@@ -18,8 +18,14 @@ bool continues(std::string_view line) {
 
 std::size_t comment_start(std::string_view line) {
     // Most lines have no comment at all; one memchr settles them.
-    if (line.empty() || std::memchr(line.data(), '#', line.size()) == nullptr)
+    const void* hash = line.empty() ? nullptr : std::memchr(line.data(), '#', line.size());
+    if (hash == nullptr)
         return std::string_view::npos;
+    // And most comments have no quote before them: the first '#' starts it, found without
+    // the walk along the line that tells quoted text apart (issue 12).
+    const auto first_hash = static_cast<std::size_t>(static_cast<const char*>(hash) - line.data());
+    if (std::memchr(line.data(), '"', first_hash) == nullptr)
+        return first_hash;
     bool in_quotes = false;
     for (std::size_t i = 0; i < line.size(); ++i) {
         if (line[i] == '"')

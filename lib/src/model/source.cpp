@@ -1,8 +1,11 @@
 // Line index of a source file.
 #include "plumb/source.hpp"
 
+#include "model/byte_blocks.hpp"
+
 #include <algorithm>
 #include <atomic>
+#include <bit>
 #include <cstring>
 #include <iterator>
 
@@ -20,21 +23,32 @@ source_file::source_file(std::string path, std::string text)
         text_.erase(0, 3);
     line_starts_.push_back(0);
     const char* data = text_.data();
-    const char* end = data + text_.size();
-    for (const char* p = data; p < end;) {
-        const void* nl = std::memchr(p, '\n', static_cast<std::size_t>(end - p));
-        if (nl == nullptr)
-            break;
-        p = static_cast<const char*>(nl) + 1;
-        line_starts_.push_back(static_cast<std::uint32_t>(p - data));
-    }
+    const std::size_t size = text_.size();
+    // The longest line's length (with its break) as the breaks are found, so that the walk
+    // for column marks below is made only when some line needs them.
+    std::size_t longest = 0;
+    const auto add_line_start = [&](std::size_t start) {
+        longest = std::max<std::size_t>(longest, start - line_starts_.back());
+        line_starts_.push_back(static_cast<std::uint32_t>(start));
+    };
+    std::size_t at = 0;
+    for (; size - at >= byte_block_size; at += byte_block_size)
+        for (std::uint32_t breaks = bytes_equal_to(data + at, '\n'); breaks != 0;
+             breaks &= breaks - 1)
+            add_line_start(at + static_cast<std::size_t>(std::countr_zero(breaks)) + 1);
+    for (; at < size; ++at)
+        if (data[at] == '\n')
+            add_line_start(at + 1);
+    longest = std::max<std::size_t>(longest, size - line_starts_.back());
+    if (longest <= column_mark_stride)
+        return;
     // Columns count code points from the line's start, so a place far along a long line would
     // cost a walk along it for every finding, term and side placed there. Marks every
     // `column_mark_stride` bytes of such a line let the walk start nearby.
-    const auto size = static_cast<std::uint32_t>(text_.size());
     for (std::size_t line = 0; line < line_starts_.size(); ++line) {
         const std::uint32_t begin = line_starts_[line];
-        const std::uint32_t end = line + 1 < line_starts_.size() ? line_starts_[line + 1] : size;
+        const std::uint32_t end = line + 1 < line_starts_.size() ? line_starts_[line + 1]
+                                                                 : static_cast<std::uint32_t>(size);
         if (end - begin <= column_mark_stride)
             continue;
         std::uint32_t column = 1;

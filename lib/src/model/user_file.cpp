@@ -90,8 +90,10 @@ user_file read_user_file(const std::filesystem::path& path, std::uint64_t limit)
         return out;
     }
     // The size from stat is a hint only: a file can grow while it is read, and some (those
-    // under /proc) report 0. The limit is what stops the read.
-    out.text.resize(static_cast<std::size_t>(status.st_size));
+    // under /proc) report 0. The limit is what stops the read. One byte more than the size
+    // lets the read that finds the end happen without growing, and so zeroing, the buffer to
+    // twice the file's size (issue 12).
+    out.text.resize(static_cast<std::size_t>(status.st_size) + 1);
     std::uint64_t used = 0;
     for (;;) {
         if (used == out.text.size())

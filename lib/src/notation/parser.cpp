@@ -1143,15 +1143,19 @@ class backslash_finder {
     bool found_ = false;
 };
 
-// The end of the logical line starting at `begin`: physical lines whose last character
-// before any comment is '\' continue onto the next. Quotes shield '#' inside descriptions.
-std::size_t logical_line_end(std::string_view text, std::size_t begin,
+// The end of the logical line whose first physical line is `line` (1-based): physical lines
+// whose last character before any comment is '\' continue onto the next. Quotes shield '#'
+// inside descriptions. The ends of physical lines come from the file's line index, made when
+// it was read, rather than from a second search for each line break (issue 12). `line` is
+// left at the physical line after the logical one.
+std::size_t logical_line_end(const source_file& file, std::uint32_t& line,
                              backslash_finder& backslashes) {
-    std::size_t pos = begin;
+    const std::string_view text = file.text();
     while (true) {
-        const void* nl = std::memchr(text.data() + pos, '\n', text.size() - pos);
-        const std::size_t end =
-            nl ? static_cast<std::size_t>(static_cast<const char*>(nl) - text.data()) : text.size();
+        const std::size_t pos = file.line_start(line);
+        const bool last = line == file.line_count();
+        const std::size_t end = last ? text.size() : file.line_start(line + 1) - 1;
+        ++line;
         if (!backslashes.any_in(pos, end))
             return end;
         std::size_t content_end = end;
@@ -1172,10 +1176,9 @@ std::size_t logical_line_end(std::string_view text, std::size_t begin,
                (text[content_end - 1] == ' ' || text[content_end - 1] == '\t' ||
                 text[content_end - 1] == '\r'))
             --content_end;
-        const bool continues = content_end > pos && text[content_end - 1] == '\\' && nl != nullptr;
+        const bool continues = content_end > pos && text[content_end - 1] == '\\' && !last;
         if (!continues)
             return end;
-        pos = end + 1;
     }
 }
 
@@ -1332,8 +1335,9 @@ syntax::parsed_file parse_file(const source_file& file, statement_sink* sink) {
     // the diagnostics can have moved, and the mark need not be taken again in full (issue 12).
     tree_mark mark(out);
     backslash_finder backslashes(text);
+    std::uint32_t line = 1; // the physical line that starts at `begin`
     while (begin <= text.size()) {
-        const std::size_t end = logical_line_end(text, begin, backslashes);
+        const std::size_t end = logical_line_end(file, line, backslashes);
         if (syntax_errors == max_syntax_errors) {
             state.report(rules::syntax,
                          "too many syntax errors; the rest of this file is not checked (is it a "
