@@ -38,21 +38,24 @@ typed_term unknown_type(bool inferred = false) {
     return t;
 }
 
-const compact_dimension& temperature_dimension() {
-    static const compact_dimension d(unit_table::standard().resolve("K")->dim());
-    return d;
-}
-const compact_dimension& pressure_dimension() {
-    static const compact_dimension d(unit_table::standard().resolve("Pa")->dim());
-    return d;
-}
-// Built at start-up, not on first use: every factor of every product is compared with it, and
-// a guarded local static cost a call each time.
+// Built at start-up, not on first use: every factor of every product is compared with these,
+// and a guarded local static cost a call each time.
 const compact_dimension acceleration = *compact_dimension::fitted(
     dimension::base(base_dimension::length) / dimension::base(base_dimension::time) /
     dimension::base(base_dimension::time));
+const compact_dimension temperature = *compact_dimension::fitted(
+    dimension::base(base_dimension::temperature));
+const compact_dimension pressure = *compact_dimension::fitted(
+    dimension::base(base_dimension::mass) / dimension::base(base_dimension::length) /
+    dimension::base(base_dimension::time) / dimension::base(base_dimension::time));
 const compact_dimension& acceleration_dimension() {
     return acceleration;
+}
+const compact_dimension& temperature_dimension() {
+    return temperature;
+}
+const compact_dimension& pressure_dimension() {
+    return pressure;
 }
 const compact_dimension& force_dimension() {
     static const compact_dimension d(unit_table::standard().resolve("N")->dim());
@@ -227,7 +230,7 @@ struct reference_state_pairs {
     };
     // Left unset: the counts say how many are filled, and this is made for every product.
     std::array<number, 4> numbers;
-    std::array<reading, 4> readings;
+    std::array<reading, 2> readings;
     std::size_t number_count = 0;
     std::size_t reading_count = 0;
 
