@@ -1,5 +1,6 @@
 #include "check/trade_constants.hpp"
 
+#include <algorithm>
 #include <array>
 
 namespace plumb {
@@ -66,6 +67,13 @@ std::span<const trade_constant> trade_constants() {
         }};
     }();
     return table;
+}
+
+bool is_trade_constant_number(const rational& printed) {
+    const auto table = trade_constants();
+    return std::any_of(table.begin(), table.end(), [&](const trade_constant& c) {
+        return !(printed < c.least) && !(c.greatest < printed);
+    });
 }
 
 } // namespace plumb
