@@ -4,7 +4,9 @@
 
 #include "notation/parser.hpp"
 
+#include <algorithm>
 #include <deque>
+#include <memory>
 #include <mutex>
 #include <unordered_map>
 
@@ -78,7 +80,27 @@ std::string to_notation(std::string_view t) {
     return out;
 }
 
-std::optional<written_unit> evaluate(std::string_view text) {
+// Units a sidecar defines with a zero of their own are rows of the parsed sidecar text; a unit
+// read from them keeps its row, so the rows outlive the parse.
+void keep_rows(const syntax::parsed_file& tree) {
+    thread_local std::vector<std::shared_ptr<const syntax::defined_unit::scale_row>> kept;
+    for (const auto& u : tree.units)
+        if (u.origin != nullptr && std::find(kept.begin(), kept.end(), u.origin) == kept.end() &&
+            kept.size() < 4096)
+            kept.push_back(u.origin);
+}
+
+// The text as the notation reads a declaration: "x : <unit>", after the measure lines.
+std::string as_declaration(std::string_view notation, std::string_view measures) {
+    std::string source(measures);
+    if (!source.empty() && source.back() != '\n')
+        source += '\n';
+    source += "x : ";
+    source += notation;
+    return source;
+}
+
+std::optional<written_unit> evaluate(std::string_view text, std::string_view measures) {
     std::string t = trim(text);
     if (t.empty() || t.size() > 40)
         return std::nullopt;
@@ -119,10 +141,11 @@ std::optional<written_unit> evaluate(std::string_view text) {
     }
     const std::string notation = to_notation(t);
     // A declaration, not a quantity in braces: there "h" would be Planck's constant.
-    const source_file src("<unit>", "x : " + notation);
+    const source_file src("<unit>", as_declaration(notation, measures));
     const syntax::parsed_file tree = parse_file(src);
     if (tree.has_syntax_error || !tree.diagnostics.empty() || tree.declarations.size() != 1)
         return std::nullopt;
+    keep_rows(tree);
     const syntax::declared_kind& q = tree.declarations.front().kind;
     if (!q.dim || !q.by_unit)
         return std::nullopt;
@@ -147,19 +170,23 @@ std::optional<written_unit> evaluate(std::string_view text) {
 
 } // namespace
 
-std::optional<written_unit> read_unit_text(std::string_view text) {
+std::optional<written_unit> read_unit_text(std::string_view text, std::string_view measures) {
     // Reading a unit costs a parse; calcs repeat a handful of unit texts thousands of times.
     thread_local std::unordered_map<std::string, std::optional<written_unit>> cache;
-    const std::string key(text);
+    std::string key(text);
+    if (!measures.empty()) {
+        key += '\0';
+        key += measures;
+    }
     if (const auto it = cache.find(key); it != cache.end())
         return it->second;
-    auto u = cache.size() < 100000 ? evaluate(text) : std::nullopt;
+    auto u = cache.size() < 100000 ? evaluate(text, measures) : std::nullopt;
     if (cache.size() < 100000)
         cache.emplace(key, u);
     return u;
 }
 
-std::optional<written_unit> read_heading_unit(std::string_view text) {
+std::optional<written_unit> read_heading_unit(std::string_view text, std::string_view measures) {
     const std::string t = trim(text);
     if (t.size() < 3)
         return std::nullopt;
@@ -173,9 +200,23 @@ std::optional<written_unit> read_heading_unit(std::string_view text) {
         if (t[i] == close)
             ++depth;
         else if (t[i] == open && --depth == 0)
-            return read_unit_text(std::string_view(t).substr(i + 1, t.size() - i - 2));
+            return read_unit_text(std::string_view(t).substr(i + 1, t.size() - i - 2), measures);
     }
     return std::nullopt;
+}
+
+std::string unit_text_problem(std::string_view text, std::string_view measures) {
+    const std::string t = trim(text);
+    if (t.empty() || t.size() > 40)
+        return {};
+    const source_file src("<unit>", as_declaration(to_notation(t), measures));
+    const syntax::parsed_file tree = parse_file(src);
+    const std::uint32_t unit_begin =
+        static_cast<std::uint32_t>(src.text().size() - to_notation(t).size());
+    for (const auto& d : tree.diagnostics)
+        if (d.where.range.begin >= unit_begin)
+            return d.message;
+    return {};
 }
 
 } // namespace plumb::sheets
