@@ -147,6 +147,11 @@ TEST_CASE("workbook parity: a liquid column is what a gauge at its foot reads") 
     }
     CHECK(finding(r, "Tank!B7", rules::result_unit) != nullptr);
     CHECK(error_at(r, "Tank!B8"));
+    // The note says how to write the number outright in a workbook, not in the notation.
+    const diagnostic* water = finding(r, "Tank!B11", rules::gravity_number);
+    REQUIRE(water != nullptr);
+    CHECK(says(*water, "in cells that hold their units"));
+    CHECK_FALSE(says(*water, "declared"));
     CHECK(finding(r, "Tank!B13", rules::result_unit) != nullptr);
     CHECK(problems_in(r) == 3);
 }
@@ -170,6 +175,9 @@ TEST_CASE("workbook parity: conversions written as a sum, °C to °F and barg to
                                 }));
     CHECK(cell_findings(r).size() == 3);
     CHECK(error_at(r, "Conv!B5"));
+    // °F is a scale with a zero of its own, not an absolute temperature.
+    for (const auto& d : r.diagnostics)
+        CHECK(d.message.find("'°F' (beside it in C5), is an absolute") == std::string::npos);
     CHECK(error_at(r, "Conv!B10"));
     CHECK(finding(r, "Conv!B11", rules::offset_scale) != nullptr);
 }

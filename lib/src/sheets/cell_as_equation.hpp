@@ -41,4 +41,8 @@ class cell_equation {
 // formula at `formula_range`.
 void in_workbook_words(diagnostic& d, span formula_range);
 
+// The advice in a finding's notes to declare a number as a symbol with its unit, said for a
+// workbook: write it in a cell that holds its unit.
+void advice_in_workbook_words(diagnostic& d);
+
 } // namespace plumb::sheets

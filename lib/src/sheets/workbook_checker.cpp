@@ -523,6 +523,19 @@ class workbook_checker {
         // A copy: the tree's vectors stay put while cells are checked, but nothing here
         // should depend on that.
         const syntax::formula formula = lowered_.tree.formulas[f.lowered.formula];
+        // The verdict first: where the notation finds nothing wrong with "written unit =
+        // formula", its notes are all there is to say, and the formula is not read again.
+        std::optional<std::vector<diagnostic>> verdict;
+        if (written != nullptr && f.lowered.not_checked.empty()) {
+            verdict = equation_.check(lowered_.tree.sides[formula.first_side].root, f.written_text,
+                                      written->unit);
+            if (!has_fault(*verdict)) {
+                take_verdict(*verdict, f, formula);
+                ++report_.cells_checked;
+                ++report_.formulas_checked;
+                return;
+            }
+        }
         const std::optional<value_type> computed =
             check_sheet_formula(lowered_.tree, formula, no_symbols_, out_);
         bool not_checked = !f.lowered.not_checked.empty();
@@ -552,7 +565,12 @@ class workbook_checker {
         }
         if (computed && out_.size() == before && !range_reported)
             compare_with_written(f, formula, *computed, *written);
-        settle_with_verdict(f, formula, *written, before);
+        // The notation found a fault: the workbook's words for it stand where they find one
+        // too, and give way to the notation's where they do not.
+        if (verdict && !has_fault({out_.data() + before, out_.size() - before})) {
+            out_.resize(before);
+            take_verdict(*verdict, f, formula);
+        }
     }
 
     static bool has_fault(std::span<const diagnostic> found) {
@@ -560,17 +578,10 @@ class workbook_checker {
                            [](const diagnostic& d) { return d.level != severity::note; });
     }
 
-    // The verdict is the notation's, on the cell as the equation "written unit = formula":
-    // where the findings from `since` on agree with it, their words stand (they name the
-    // cell's unit and say how far off the value shown is); where they do not, the notation's
-    // findings take their place.
-    void settle_with_verdict(const formula_cell& f, const syntax::formula& formula,
-                             const cell_unit& written, std::size_t since) {
-        std::vector<diagnostic> verdict = equation_.check(
-            lowered_.tree.sides[formula.first_side].root, f.written_text, written.unit);
-        if (has_fault({out_.data() + since, out_.size() - since}) == has_fault(verdict))
-            return;
-        out_.resize(since);
+    // The notation's findings on the cell as the equation "written unit = formula", in a
+    // workbook's words.
+    void take_verdict(std::vector<diagnostic>& verdict, const formula_cell& f,
+                      const syntax::formula& formula) {
         for (auto& d : verdict) {
             in_workbook_words(d, formula.range);
             out_.push_back(std::move(d));
@@ -591,6 +602,7 @@ class workbook_checker {
         // Numbers in a workbook carry no units: terms in different units give a wrong result.
         if (d.rule == rules::unit_scale)
             d.level = severity::error;
+        advice_in_workbook_words(d);
         std::size_t noted = 0;
         for (auto& t : d.terms) {
             for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i) {
@@ -746,7 +758,12 @@ class workbook_checker {
                 on_scale->exponents[static_cast<std::size_t>(base_dimension::temperature)] != 0;
             diagnostic& d = report(
                 severity::error, rules::offset_scale,
-                computed.offset != nullptr
+                computed.offset != nullptr && written.unit.offset != nullptr
+                    ? fmt::format("this formula gives a value on the {} scale, but the unit "
+                                  "written for its cell, {}, is on the {} scale: the value is "
+                                  "off by the difference of the scales' zeros",
+                                  computed.offset->symbol, where_unit, written.unit.offset->symbol)
+                : computed.offset != nullptr
                     ? fmt::format("this formula gives a value on the {} scale, but the unit "
                                   "written for its cell, {}, is {}: the value is off by the "
                                   "scale's zero",
