@@ -236,6 +236,24 @@ TEST_CASE("workbook parity: unit text may use the units a sidecar defines with m
     CHECK_FALSE(says(*input, "write its unit in the cell to its right"));
 }
 
+TEST_CASE("workbook parity: a measure defined from another is read in unit text too") {
+    // 1 lbmol = 453.59237 mol (NIST SP 811 (2008), B.8); a thousand of them a day, beside
+    // others the sheet does not use, so only the lines a text names are read with it.
+    std::string sidecar;
+    for (int k = 0; k < 200; ++k)
+        sidecar += "measure unused" + std::to_string(k) + " = " + std::to_string(k + 2) + " m\n";
+    sidecar += "measure lbmol = 453.59237 mol\nmeasure klbmol = 1000 lbmol\n";
+    const check_report r = check_one_sheet("Flow",
+                                           sheet_of({
+                                               {"12", "klbmol/d"},       // B2
+                                               {"=B2*1000", "lbmol/d"},  // B3: right
+                                               {"=B2*1000", "klbmol/d"}, // B4: not needed
+                                           }),
+                                           sidecar);
+    CHECK(cell_findings(r) == std::vector<std::string>{"Flow!B4 unit-scale"});
+    CHECK(r.inputs_without_units == 0);
+}
+
 TEST_CASE("workbook parity: a formula cell beside a unit text that does not read is told so") {
     const check_report r = check_one_sheet("U", sheet_of({
                                                     {"28.97", "kg/kmol"},  // B2

@@ -9,6 +9,7 @@
 #include <memory>
 #include <mutex>
 #include <unordered_map>
+#include <vector>
 
 namespace plumb::sheets {
 
@@ -88,6 +89,56 @@ void keep_rows(const syntax::parsed_file& tree) {
         if (u.origin != nullptr && std::find(kept.begin(), kept.end(), u.origin) == kept.end() &&
             kept.size() < 4096)
             kept.push_back(u.origin);
+}
+
+// The measure lines a unit text may need: those that define a name the text holds, and the
+// lines those need in turn, a few levels deep. A sidecar of many measure lines is then not
+// parsed again for every unit text, and a text's cache entry does not hold them all.
+std::string measures_named_in(std::string_view text, std::string_view measures) {
+    if (measures.empty())
+        return {};
+    struct measure_line {
+        std::string_view name;
+        std::string_view whole;
+        bool taken = false;
+    };
+    std::vector<measure_line> lines;
+    for (std::size_t at = 0; at < measures.size();) {
+        const std::size_t end = std::min(measures.find('\n', at), measures.size());
+        const std::string_view whole = measures.substr(at, end - at);
+        std::string_view rest = whole;
+        while (!rest.empty() && (rest.front() == ' ' || rest.front() == '\t'))
+            rest.remove_prefix(1);
+        if (rest.rfind("measure", 0) == 0) {
+            rest.remove_prefix(7);
+            while (!rest.empty() && (rest.front() == ' ' || rest.front() == '\t'))
+                rest.remove_prefix(1);
+            const std::size_t stop = rest.find_first_of(" \t=");
+            lines.push_back({rest.substr(0, stop), whole});
+        }
+        at = end + 1;
+    }
+    std::string wanted(text);
+    constexpr int most_levels = 4;
+    for (int level = 0; level < most_levels; ++level) {
+        bool added = false;
+        for (auto& l : lines)
+            if (!l.taken && !l.name.empty() && wanted.find(l.name) != std::string::npos) {
+                l.taken = true;
+                wanted += ' ';
+                wanted += l.whole;
+                added = true;
+            }
+        if (!added)
+            break;
+    }
+    std::string out;
+    for (const auto& l : lines)
+        if (l.taken) {
+            out += l.whole;
+            out += '\n';
+        }
+    return out;
 }
 
 // The text as the notation reads a declaration: "x : <unit>", after the measure lines.
@@ -170,7 +221,8 @@ std::optional<written_unit> evaluate(std::string_view text, std::string_view mea
 
 } // namespace
 
-std::optional<written_unit> read_unit_text(std::string_view text, std::string_view measures) {
+std::optional<written_unit> read_unit_text(std::string_view text, std::string_view all_measures) {
+    const std::string measures = measures_named_in(text, all_measures);
     // Reading a unit costs a parse; calcs repeat a handful of unit texts thousands of times.
     thread_local std::unordered_map<std::string, std::optional<written_unit>> cache;
     std::string key(text);
@@ -205,18 +257,29 @@ std::optional<written_unit> read_heading_unit(std::string_view text, std::string
     return std::nullopt;
 }
 
-std::string unit_text_problem(std::string_view text, std::string_view measures) {
+std::string unit_text_problem(std::string_view text, std::string_view all_measures) {
     const std::string t = trim(text);
     if (t.empty() || t.size() > 40)
         return {};
-    const source_file src("<unit>", as_declaration(to_notation(t), measures));
+    const std::string measures = measures_named_in(t, all_measures);
+    // As read_unit_text: a column of cells beside one unreadable text asks once.
+    thread_local std::unordered_map<std::string, std::string> cache;
+    const std::string key = t + '\0' + measures;
+    if (const auto it = cache.find(key); it != cache.end())
+        return it->second;
+    const std::string notation = to_notation(t);
+    const source_file src("<unit>", as_declaration(notation, measures));
     const syntax::parsed_file tree = parse_file(src);
-    const std::uint32_t unit_begin =
-        static_cast<std::uint32_t>(src.text().size() - to_notation(t).size());
+    const auto unit_begin = static_cast<std::uint32_t>(src.text().size() - notation.size());
+    std::string problem;
     for (const auto& d : tree.diagnostics)
-        if (d.where.range.begin >= unit_begin)
-            return d.message;
-    return {};
+        if (d.where.range.begin >= unit_begin) {
+            problem = d.message;
+            break;
+        }
+    if (cache.size() < 100000)
+        cache.emplace(key, problem);
+    return problem;
 }
 
 } // namespace plumb::sheets
