@@ -108,6 +108,7 @@ TEST_CASE("workbook parity: the pounds formula's 8.34 is a note in lb/d and not 
     const diagnostic* pasted = finding(r, "Feed!B7", rules::unit_scale);
     REQUIRE(pasted != nullptr);
     CHECK(says(*pasted, "the factor 8.34 is not needed"));
+    CHECK(says(*pasted, "8.34 is the weight of a US gallon of water"));
 }
 
 TEST_CASE("workbook parity: the pounds formula in the notation, right and pasted into SI") {

@@ -158,7 +158,7 @@ bool stands_for_a_conversion(const scale_literal& l, bool allow_hundred) {
     if (!l.factor_like || std::abs(l.exponent) != 1.0)
         return false;
     const std::optional<rational> printed = printed_power(l, 1.0);
-    return printed && is_trade_constant_number(*printed);
+    return printed && trade_constant_for(*printed) != nullptr;
 }
 
 // The operands of one meeting point (terms of a sum, arguments, sides of a formula). The type
@@ -2406,6 +2406,15 @@ class checker {
                                format_factor(printed_power(l, l.exponent), factor)),
                    file_.nodes[l.node].range);
         add_term_and_units(d, op);
+        // 8.34 pasted from a US sheet into an SI one: say what the number is.
+        if (const std::optional<rational> printed = printed_power(l, 1.0);
+            printed && !looks_like_conversion(l, true))
+            if (const trade_constant* c = trade_constant_for(*printed))
+                d.notes.push_back(
+                    {fmt::format("{} is {}; it stands for {}, and these units need no such "
+                                 "conversion",
+                                 text(file_.nodes[l.node].range), c->name, c->conversion),
+                     {}});
         d.notes.push_back(
             {"remove the factor, or declare the symbols in the units it converts from", {}});
         return true;

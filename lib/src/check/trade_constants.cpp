@@ -69,11 +69,12 @@ std::span<const trade_constant> trade_constants() {
     return table;
 }
 
-bool is_trade_constant_number(const rational& printed) {
+const trade_constant* trade_constant_for(const rational& printed) {
     const auto table = trade_constants();
-    return std::any_of(table.begin(), table.end(), [&](const trade_constant& c) {
+    const auto found = std::find_if(table.begin(), table.end(), [&](const trade_constant& c) {
         return !(printed < c.least) && !(c.greatest < printed);
     });
+    return found == table.end() ? nullptr : &*found;
 }
 
 } // namespace plumb
