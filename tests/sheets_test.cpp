@@ -11,6 +11,7 @@
 #include "sheets/shared_formula.hpp"
 #include "sheets/unit_text.hpp"
 #include "test_support.hpp"
+#include "workbook_support.hpp"
 
 #include <doctest/doctest.h>
 #include <fstream>
@@ -19,47 +20,12 @@
 
 using namespace plumb;
 using namespace plumb::sheets;
+using plumb::test::cell_findings_of_one_sheet;
+using plumb::test::make_zip;
+using plumb::test::value_and_unit_row;
+using plumb::test::xlsx_of_one_sheet;
 
 namespace {
-
-// A zip package built in memory (libzip), for files no spreadsheet would save.
-std::string make_zip(const std::vector<std::pair<std::string, std::string>>& parts) {
-    zip_error_t error;
-    zip_error_init(&error);
-    zip_source_t* buffer = zip_source_buffer_create(nullptr, 0, 0, &error);
-    REQUIRE(buffer != nullptr);
-    zip_source_keep(buffer);
-    zip_t* z = zip_open_from_source(buffer, ZIP_TRUNCATE, &error);
-    REQUIRE(z != nullptr);
-    for (const auto& [name, data] : parts) {
-        zip_source_t* s = zip_source_buffer(z, data.data(), data.size(), 0);
-        REQUIRE(zip_file_add(z, name.c_str(), s, ZIP_FL_OVERWRITE) >= 0);
-    }
-    REQUIRE(zip_close(z) == 0);
-    REQUIRE(zip_source_open(buffer) == 0);
-    zip_source_seek(buffer, 0, SEEK_END);
-    const zip_int64_t size = zip_source_tell(buffer);
-    zip_source_seek(buffer, 0, SEEK_SET);
-    std::string out(static_cast<std::size_t>(size), '\0');
-    zip_source_read(buffer, out.data(), static_cast<zip_uint64_t>(size));
-    zip_source_close(buffer);
-    zip_source_free(buffer);
-    zip_error_fini(&error);
-    return out;
-}
-
-// A one-sheet .xlsx package built by hand: the least ECMA-376 parts a reader needs.
-std::string xlsx_of_one_sheet(const std::string& name, const std::string& sheet) {
-    return make_zip({{"[Content_Types].xml",
-                      "<Types><Override PartName=\"/xl/workbook.xml\" ContentType=\"application/"
-                      "vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml\"/></Types>"},
-                     {"xl/workbook.xml", "<workbook><sheets><sheet name=\"" + name +
-                                             "\" sheetId=\"1\" id=\"rId1\"/></sheets></workbook>"},
-                     {"xl/_rels/workbook.xml.rels",
-                      "<Relationships><Relationship Id=\"rId1\" Target=\"worksheets/sheet1.xml\"/>"
-                      "</Relationships>"},
-                     {"xl/worksheets/sheet1.xml", sheet}});
-}
 
 std::string refusal(const std::string& bytes, std::string_view name, read_limits limits = {}) {
     try {
@@ -365,33 +331,6 @@ TEST_CASE("sheets: shared formulas in an .xlsx are expanded to every cell of the
     REQUIRE(d4 != nullptr);
     CHECK(d4->text == "=B4*C4");
 }
-
-namespace {
-
-// The findings of a one-sheet workbook, each as "Sheet!B4 rule", sorted.
-std::vector<std::string> cell_findings_of_one_sheet(const std::string& name,
-                                                    const std::string& sheet) {
-    plumb::test::temp_dir dir;
-    const auto path = dir.write(name + ".xlsx", xlsx_of_one_sheet(name, sheet));
-    const check_report report = check_paths({path});
-    std::vector<std::string> found;
-    for (const auto& d : report.diagnostics)
-        if (const cell_place* c = d.where.file->cell_at(d.where.range.begin))
-            found.push_back(cell_text(*c) + " " + d.rule);
-    std::sort(found.begin(), found.end());
-    return found;
-}
-
-// One worksheet row: the value or formula in column B, its unit text in column C.
-std::string value_and_unit_row(int r, const std::string& value, const std::string& unit) {
-    const std::string n = std::to_string(r);
-    const bool formula = value.front() == '=';
-    return "<row r=\"" + n + "\"><c r=\"B" + n + "\">" +
-           (formula ? "<f>" + value.substr(1) + "</f><v>0</v>" : "<v>" + value + "</v>") +
-           "</c><c r=\"C" + n + "\" t=\"inlineStr\"><is><t>" + unit + "</t></is></c></row>";
-}
-
-} // namespace
 
 TEST_CASE("sheets: standard gravity written as a number in a cell formula (9.81)") {
     // p = ρ g h (g_n = 9.80665 m/s², 3rd CGPM 1901); an invented tank sheet. B4 converts to kPa

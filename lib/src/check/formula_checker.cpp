@@ -166,6 +166,18 @@ constexpr std::array<pressure_unit, 7> pressure_units{{
 }};
 constexpr double standard_atmosphere = 101325.0;
 
+// A number the trades write in place of a conversion (8.34, water's weight per gallon): where
+// the units agree without it, it is as much a factor not needed as a conversion would be
+// (the pounds formula pasted into a sheet whose ML/d × mg/L is already kg/d).
+bool stands_for_a_conversion(const scale_literal& l, bool allow_hundred) {
+    if (looks_like_conversion(l, allow_hundred))
+        return true;
+    if (!l.factor_like || std::abs(l.exponent) != 1.0)
+        return false;
+    const std::optional<rational> printed = printed_power(l, 1.0);
+    return printed && trade_constant_for(*printed) != nullptr;
+}
+
 // The operands of one meeting point (terms of a sum, arguments, sides of a formula). The type
 // is held on the checker's type stack, shared among operands of one type: a long sum keeps
 // one of these per term, and its size is most of the memory such a line takes.
@@ -2180,7 +2192,7 @@ class checker {
             if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale) || op.type.numeric)
                 continue;
             for (std::uint32_t l = 0; l < op.type.literal_count; ++l)
-                if (looks_like_conversion(literals_[op.type.literal_begin + l], !dimensionless))
+                if (stands_for_a_conversion(literals_[op.type.literal_begin + l], !dimensionless))
                     return false;
         }
         unit = first == nullptr ? 1.0 : (first->numeric ? 1.0 : first->scale);
@@ -2600,7 +2612,7 @@ class checker {
                                 std::span<const scaled_operand> parts, bool dimensionless) {
         for (std::size_t i = 0; i < parts.size(); ++i)
             for (const auto& l : parts[i].literals)
-                if (looks_like_conversion(l, !dimensionless))
+                if (stands_for_a_conversion(l, !dimensionless))
                     return report_unneeded(ops[index[i]], l);
         return false;
     }
@@ -2615,6 +2627,15 @@ class checker {
                                format_factor(printed_power(l, l.exponent), factor)),
                    file_.nodes[l.node].range);
         add_term_and_units(d, op);
+        // 8.34 pasted from a US sheet into an SI one: say what the number is.
+        if (const std::optional<rational> printed = printed_power(l, 1.0);
+            printed && !looks_like_conversion(l, true))
+            if (const trade_constant* c = trade_constant_for(*printed))
+                d.notes.push_back(
+                    {fmt::format("{} is {}; it stands for {}, and these units need no such "
+                                 "conversion",
+                                 text(file_.nodes[l.node].range), c->name, c->conversion),
+                     {}});
         d.notes.push_back(
             {"remove the factor, or declare the symbols in the units it converts from", {}});
         return true;
@@ -2851,6 +2872,13 @@ class checker {
         }
     }
 
+    // W/K or W/(m²·K) times a temperature: a heat flow or a heat flux. Not J/K, which n·R_u
+    // is as well as m·c_p: a gas law's p·V is an energy.
+    static bool is_heat_per_degree(const compact_dimension& partner) {
+        const std::string_view name = quantity_name((partner * temperature_dimension()).expand());
+        return name == "power" || name == "heat flux or irradiance";
+    }
+
     // A value on an offset scale used where only an absolute one makes sense.
     void report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where,
                        const compact_dimension* partner = nullptr) {
@@ -2888,6 +2916,21 @@ class checker {
                              display_text(file_.nodes[node].range), reference, reference,
                              unit.symbol),
                  {}});
+            return;
+        }
+        // U·A·T, ṁ·c_p·T: a heat flow per degree times a reading. What is meant is a
+        // difference of two temperatures; converting the reading to kelvins would pass the
+        // check and give a value many times too large.
+        if (temperature && partner != nullptr && is_heat_per_degree(*partner)) {
+            d.notes.push_back(
+                {fmt::format("a heat flow per degree (U·A, ṁ·c_p) multiplies a "
+                             "temperature difference: write ({} - T_2), the difference between "
+                             "the two temperatures, not the reading in kelvins",
+                             display_text(file_.nodes[node].range)),
+                 {}});
+            d.notes.push_back({"a difference of two values on the same scale, such as T_2 - T_1, "
+                               "is an ordinary quantity and may be used freely",
+                               {}});
             return;
         }
         d.notes.push_back(
@@ -3018,11 +3061,23 @@ class checker {
             case expr_kind::number:
             case expr_kind::pi:
                 break;
-            case expr_kind::symbol: {
-                const symbol_entry* entry = symbols_.find(text(n.range));
-                if (entry == nullptr || !entry->checked_type || !entry->checked_type->known)
-                    return false;
-                const typed_term& t = *entry->checked_type;
+            case expr_kind::symbol:
+            case expr_kind::reference: { // a workbook's cell, typed by the unit written for it
+                typed_term cell;
+                const typed_term* found = &cell;
+                if (n.kind == expr_kind::reference) {
+                    const syntax::reference_value& r = file_.references[n.lhs];
+                    if (!r.dim)
+                        return false;
+                    cell.dim = compact_dimension(*r.dim);
+                    cell.offset = r.offset;
+                } else {
+                    const symbol_entry* entry = symbols_.find(text(n.range));
+                    if (entry == nullptr || !entry->checked_type || !entry->checked_type->known)
+                        return false;
+                    found = &*entry->checked_type;
+                }
+                const typed_term& t = *found;
                 if (t.dim == pressure_dimension()) {
                     const bool gauge = t.offset != nullptr && t.offset->scale == unit_scale::gauge;
                     if (gauge != with_gauge || (!gauge && ++other_pressures > 1))

@@ -133,6 +133,13 @@ std::string shown(double v) {
 
 } // namespace
 
+std::string_view advice_in_cell_for(std::string_view advice_in_notation) {
+    for (const carried_quantity& q : quantities())
+        if (q.advice_in_notation == advice_in_notation)
+            return q.advice_in_cell;
+    return {};
+}
+
 bool lacks_gravity_number(const dimension& lacking, double exponent) {
     for (const carried_quantity& q : quantities())
         if (is_power_of(lacking, q.dim, exponent) || is_power_of(lacking, q.dim, -exponent))

@@ -48,6 +48,10 @@ struct gravity_reading {
 // before the search.
 bool lacks_gravity_number(const dimension& lacking, double exponent);
 
+// The advice for a workbook that goes with a quantity's advice for a .plumb file ("write the
+// density and g in cells that hold their units" for "write ρ_w*{g_n}"); empty for other text.
+std::string_view advice_in_cell_for(std::string_view advice_in_notation);
+
 // The number among `literals` that carries g_n or γ_w, or its reciprocal, in the term's own
 // units, where the term lacks exactly that quantity to the number's power. `texts` are the
 // numbers as written: a number must round a value of the quantity in those units to its last

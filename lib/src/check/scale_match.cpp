@@ -290,6 +290,10 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
     return l;
 }
 
+bool is_ratio_of_units(const scale_literal& l) {
+    return is_unit_ratio(l);
+}
+
 bool looks_like_conversion(const scale_literal& l, bool allow_hundred) {
     if (l.power_of_ten)
         return std::abs(l.power * l.exponent) >= (allow_hundred ? 2 : 3);

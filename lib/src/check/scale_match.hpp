@@ -73,6 +73,10 @@ reconciliation reconcile(std::span<const scaled_operand> ops, flipped_literal fl
 // two table units of one dimension written to 3 or more digits).
 bool looks_like_conversion(const scale_literal& l, bool allow_hundred);
 
+// The literal is, within its printed digits, the ratio of two table units of one dimension (24
+// for h/d, 5.615 for ft³/bbl), however few digits it is written to.
+bool is_ratio_of_units(const scale_literal& l);
+
 // The operand's value per SI unit once its conversion-like numbers are applied: what an
 // engineer reads the term as.
 double apparent_scale(const scaled_operand& op);

@@ -1,5 +1,6 @@
 #include "check/trade_constants.hpp"
 
+#include <algorithm>
 #include <array>
 
 namespace plumb {
@@ -66,6 +67,14 @@ std::span<const trade_constant> trade_constants() {
         }};
     }();
     return table;
+}
+
+const trade_constant* trade_constant_for(const rational& printed) {
+    const auto table = trade_constants();
+    const auto found = std::find_if(table.begin(), table.end(), [&](const trade_constant& c) {
+        return !(printed < c.least) && !(c.greatest < printed);
+    });
+    return found == table.end() ? nullptr : &*found;
 }
 
 } // namespace plumb

@@ -28,6 +28,10 @@ struct trade_constant {
 
 std::span<const trade_constant> trade_constants();
 
+// The trade constant whose published range holds a printed number (8.34 and 8.35 for water's
+// weight per gallon), or null.
+const trade_constant* trade_constant_for(const rational& printed);
+
 // Water's density between 0 and 30 °C in kg/L, the range the trades' water numbers round:
 // 0.99565 at 30 °C up to 0.999975 at 4 °C (CRC Handbook of Chemistry and Physics; from memory).
 rational water_density_least();

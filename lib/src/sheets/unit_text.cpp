@@ -4,9 +4,12 @@
 
 #include "notation/parser.hpp"
 
+#include <algorithm>
 #include <deque>
+#include <memory>
 #include <mutex>
 #include <unordered_map>
+#include <vector>
 
 namespace plumb::sheets {
 
@@ -78,7 +81,77 @@ std::string to_notation(std::string_view t) {
     return out;
 }
 
-std::optional<written_unit> evaluate(std::string_view text) {
+// Units a sidecar defines with a zero of their own are rows of the parsed sidecar text; a unit
+// read from them keeps its row, so the rows outlive the parse.
+void keep_rows(const syntax::parsed_file& tree) {
+    thread_local std::vector<std::shared_ptr<const syntax::defined_unit::scale_row>> kept;
+    for (const auto& u : tree.units)
+        if (u.origin != nullptr && std::find(kept.begin(), kept.end(), u.origin) == kept.end() &&
+            kept.size() < 4096)
+            kept.push_back(u.origin);
+}
+
+// The measure lines a unit text may need: those that define a name the text holds, and the
+// lines those need in turn, a few levels deep. A sidecar of many measure lines is then not
+// parsed again for every unit text, and a text's cache entry does not hold them all.
+std::string measures_named_in(std::string_view text, std::string_view measures) {
+    if (measures.empty())
+        return {};
+    struct measure_line {
+        std::string_view name;
+        std::string_view whole;
+        bool taken = false;
+    };
+    std::vector<measure_line> lines;
+    for (std::size_t at = 0; at < measures.size();) {
+        const std::size_t end = std::min(measures.find('\n', at), measures.size());
+        const std::string_view whole = measures.substr(at, end - at);
+        std::string_view rest = whole;
+        while (!rest.empty() && (rest.front() == ' ' || rest.front() == '\t'))
+            rest.remove_prefix(1);
+        if (rest.rfind("measure", 0) == 0) {
+            rest.remove_prefix(7);
+            while (!rest.empty() && (rest.front() == ' ' || rest.front() == '\t'))
+                rest.remove_prefix(1);
+            const std::size_t stop = rest.find_first_of(" \t=");
+            lines.push_back({rest.substr(0, stop), whole});
+        }
+        at = end + 1;
+    }
+    std::string wanted(text);
+    constexpr int most_levels = 4;
+    for (int level = 0; level < most_levels; ++level) {
+        bool added = false;
+        for (auto& l : lines)
+            if (!l.taken && !l.name.empty() && wanted.find(l.name) != std::string::npos) {
+                l.taken = true;
+                wanted += ' ';
+                wanted += l.whole;
+                added = true;
+            }
+        if (!added)
+            break;
+    }
+    std::string out;
+    for (const auto& l : lines)
+        if (l.taken) {
+            out += l.whole;
+            out += '\n';
+        }
+    return out;
+}
+
+// The text as the notation reads a declaration: "x : <unit>", after the measure lines.
+std::string as_declaration(std::string_view notation, std::string_view measures) {
+    std::string source(measures);
+    if (!source.empty() && source.back() != '\n')
+        source += '\n';
+    source += "x : ";
+    source += notation;
+    return source;
+}
+
+std::optional<written_unit> evaluate(std::string_view text, std::string_view measures) {
     std::string t = trim(text);
     if (t.empty() || t.size() > 40)
         return std::nullopt;
@@ -119,10 +192,11 @@ std::optional<written_unit> evaluate(std::string_view text) {
     }
     const std::string notation = to_notation(t);
     // A declaration, not a quantity in braces: there "h" would be Planck's constant.
-    const source_file src("<unit>", "x : " + notation);
+    const source_file src("<unit>", as_declaration(notation, measures));
     const syntax::parsed_file tree = parse_file(src);
     if (tree.has_syntax_error || !tree.diagnostics.empty() || tree.declarations.size() != 1)
         return std::nullopt;
+    keep_rows(tree);
     const syntax::declared_kind& q = tree.declarations.front().kind;
     if (!q.dim || !q.by_unit)
         return std::nullopt;
@@ -147,19 +221,24 @@ std::optional<written_unit> evaluate(std::string_view text) {
 
 } // namespace
 
-std::optional<written_unit> read_unit_text(std::string_view text) {
+std::optional<written_unit> read_unit_text(std::string_view text, std::string_view all_measures) {
+    const std::string measures = measures_named_in(text, all_measures);
     // Reading a unit costs a parse; calcs repeat a handful of unit texts thousands of times.
     thread_local std::unordered_map<std::string, std::optional<written_unit>> cache;
-    const std::string key(text);
+    std::string key(text);
+    if (!measures.empty()) {
+        key += '\0';
+        key += measures;
+    }
     if (const auto it = cache.find(key); it != cache.end())
         return it->second;
-    auto u = cache.size() < 100000 ? evaluate(text) : std::nullopt;
+    auto u = cache.size() < 100000 ? evaluate(text, measures) : std::nullopt;
     if (cache.size() < 100000)
         cache.emplace(key, u);
     return u;
 }
 
-std::optional<written_unit> read_heading_unit(std::string_view text) {
+std::optional<written_unit> read_heading_unit(std::string_view text, std::string_view measures) {
     const std::string t = trim(text);
     if (t.size() < 3)
         return std::nullopt;
@@ -173,9 +252,34 @@ std::optional<written_unit> read_heading_unit(std::string_view text) {
         if (t[i] == close)
             ++depth;
         else if (t[i] == open && --depth == 0)
-            return read_unit_text(std::string_view(t).substr(i + 1, t.size() - i - 2));
+            return read_unit_text(std::string_view(t).substr(i + 1, t.size() - i - 2), measures);
     }
     return std::nullopt;
+}
+
+std::string unit_text_problem(std::string_view text, std::string_view all_measures) {
+    const std::string t = trim(text);
+    if (t.empty() || t.size() > 40)
+        return {};
+    const std::string measures = measures_named_in(t, all_measures);
+    // As read_unit_text: a column of cells beside one unreadable text asks once.
+    thread_local std::unordered_map<std::string, std::string> cache;
+    const std::string key = t + '\0' + measures;
+    if (const auto it = cache.find(key); it != cache.end())
+        return it->second;
+    const std::string notation = to_notation(t);
+    const source_file src("<unit>", as_declaration(notation, measures));
+    const syntax::parsed_file tree = parse_file(src);
+    const auto unit_begin = static_cast<std::uint32_t>(src.text().size() - notation.size());
+    std::string problem;
+    for (const auto& d : tree.diagnostics)
+        if (d.where.range.begin >= unit_begin) {
+            problem = d.message;
+            break;
+        }
+    if (cache.size() < 100000)
+        cache.emplace(key, problem);
+    return problem;
 }
 
 } // namespace plumb::sheets

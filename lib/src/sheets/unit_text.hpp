@@ -19,10 +19,17 @@ struct written_unit {
     std::string text;                        // as written in the cell
 };
 
-// The unit the whole text reads as, or empty when it does not read as one.
-std::optional<written_unit> read_unit_text(std::string_view text);
+// The unit the whole text reads as, or empty when it does not read as one. `measures` holds the
+// `measure` lines of the workbook's sidecar and dictionaries, whose units the text may use
+// ("lb/lbmol" with `measure lbmol = 453.59237 mol`).
+std::optional<written_unit> read_unit_text(std::string_view text, std::string_view measures = {});
 
 // The unit in a column heading's last brackets or parentheses: "Flow [m3/s]", "D (mm)".
-std::optional<written_unit> read_heading_unit(std::string_view text);
+std::optional<written_unit> read_heading_unit(std::string_view text,
+                                              std::string_view measures = {});
+
+// Why a text does not read as a unit, in the words the notation uses for a declaration's
+// unit ("unknown unit 'lbmol'; did you mean 'mol' or 'lbm'?"); empty where it gives none.
+std::string unit_text_problem(std::string_view text, std::string_view measures = {});
 
 } // namespace plumb::sheets

@@ -8,6 +8,7 @@
 #include "check/scale_match.hpp"
 #include "plumb/rules.hpp"
 #include "sheets/a1_front_end.hpp"
+#include "sheets/cell_as_equation.hpp"
 #include "sheets/input_requirement.hpp"
 #include "units/exact_factor.hpp"
 
@@ -76,6 +77,7 @@ class workbook_checker {
         collect_formulas();
         build_listing();
         lower_all();
+        equation_.make_room();
         order_and_check();
         report_unitless_inputs();
         ++report_.workbooks_checked;
@@ -92,6 +94,7 @@ class workbook_checker {
         std::size_t sheet;
         const cell* source;
         span text;
+        span written_text; // the unit written for it, in the listing; empty when none
         lowered_formula lowered;
         std::vector<std::uint32_t> depends_on; // formula ids
         bool checked = false;
@@ -101,6 +104,7 @@ class workbook_checker {
     std::vector<formula_cell> formulas_;
     std::unordered_map<std::uint64_t, std::uint32_t> formula_at_;
     lowered_book lowered_;
+    cell_equation equation_{lowered_.tree};
     const source_file* listing_ = nullptr;
     span hundred_{};
     symbol_table no_symbols_;
@@ -110,6 +114,8 @@ class workbook_checker {
     std::vector<std::unordered_map<std::uint32_t, std::vector<std::uint32_t>>> text_rows_;
     // Inputs without units: the formula cells that use each, in order.
     std::map<std::uint64_t, std::vector<std::uint32_t>> unitless_;
+    // Cells whose unit text beside them does not read as a unit: that text, by cell.
+    std::unordered_map<std::uint64_t, const cell*> unread_;
     struct range_result {
         cell_value value;
     };
@@ -129,7 +135,7 @@ class workbook_checker {
             for (const auto& c : book_.sheets[s].cells) {
                 if (c.kind == cell_kind::formula) {
                     formula_at_[book_key(s, c.at)] = static_cast<std::uint32_t>(formulas_.size());
-                    formulas_.push_back({s, &c, {}, {}, {}, false, false, {}});
+                    formulas_.push_back({s, &c, {}, {}, {}, {}, false, false, {}});
                 } else if (c.kind == cell_kind::text) {
                     text_rows_[s][c.at.column].push_back(c.at.row);
                 }
@@ -158,6 +164,15 @@ class workbook_checker {
         hundred_ = {static_cast<std::uint32_t>(text.size()),
                     static_cast<std::uint32_t>(text.size() + 3)};
         text += "100\n";
+        // The units written for formula cells, for the equation each cell is checked as.
+        for (auto& f : formulas_)
+            if (const cell_unit* u = unit_of(f.sheet, f.source->at)) {
+                const auto begin = static_cast<std::uint32_t>(text.size());
+                for (const char c : u->unit.text)
+                    text += (c == '\n' || c == '\r') ? ' ' : c;
+                f.written_text = {begin, static_cast<std::uint32_t>(text.size())};
+                text += '\n';
+            }
         report_.sources.push_back(std::make_unique<source_file>(path_, std::move(text)));
         report_.sources.back()->set_cell_places(std::move(places));
         listing_ = report_.sources.back().get();
@@ -336,10 +351,12 @@ class workbook_checker {
         // 3. The cell beside it.
         if (a.column + 1 < max_columns)
             if (const cell* right = sh.find({a.row, a.column + 1});
-                right != nullptr && right->kind == cell_kind::text)
-                if (auto u = read_unit_text(right->text))
+                right != nullptr && right->kind == cell_kind::text) {
+                if (auto u = read_unit_text(right->text, units_.measures))
                     return cell_unit{*u, fmt::format("beside it in {}",
                                                      a1_name(cell_address{a.row, a.column + 1}))};
+                unread_.emplace(book_key(s, a), right);
+            }
         // 4. The column's heading: the nearest text cell above.
         const auto column = text_rows_[s].find(a.column);
         if (column != text_rows_[s].end()) {
@@ -347,7 +364,7 @@ class workbook_checker {
             const auto it = std::lower_bound(rows.begin(), rows.end(), a.row);
             if (it != rows.begin()) {
                 const cell_address heading{*(it - 1), a.column};
-                if (auto u = read_heading_unit(sh.find(heading)->text))
+                if (auto u = read_heading_unit(sh.find(heading)->text, units_.measures))
                     return cell_unit{*u, fmt::format("from the heading in {}", a1_name(heading))};
             }
         }
@@ -503,7 +520,22 @@ class workbook_checker {
             target.value = v.value;
         }
         const std::size_t before = out_.size();
-        const syntax::formula& formula = lowered_.tree.formulas[f.lowered.formula];
+        // A copy: the tree's vectors stay put while cells are checked, but nothing here
+        // should depend on that.
+        const syntax::formula formula = lowered_.tree.formulas[f.lowered.formula];
+        // The verdict first: where the notation finds nothing wrong with "written unit =
+        // formula", its notes are all there is to say, and the formula is not read again.
+        std::optional<std::vector<diagnostic>> verdict;
+        if (written != nullptr && f.lowered.not_checked.empty()) {
+            verdict = equation_.check(lowered_.tree.sides[formula.first_side].root, f.written_text,
+                                      written->unit);
+            if (!has_fault(*verdict)) {
+                take_verdict(*verdict, f, formula);
+                ++report_.cells_checked;
+                ++report_.formulas_checked;
+                return;
+            }
+        }
         const std::optional<value_type> computed =
             check_sheet_formula(lowered_.tree, formula, no_symbols_, out_);
         bool not_checked = !f.lowered.not_checked.empty();
@@ -519,17 +551,42 @@ class workbook_checker {
         }
         ++report_.cells_checked;
         ++report_.formulas_checked;
-        if (!computed)
-            return;
-        if (!written) {
+        if (computed && !written) {
             f.result.dim = computed->dim;
             f.result.scale = computed->scale;
             f.result.exact_scale = computed->exact_scale;
             f.result.offset = computed->offset;
+            report_unread_unit(f);
             return;
         }
-        if (out_.size() == before && !range_reported)
+        if (!written) {
+            report_unread_unit(f);
+            return;
+        }
+        if (computed && out_.size() == before && !range_reported)
             compare_with_written(f, formula, *computed, *written);
+        // The notation found a fault: the workbook's words for it stand where they find one
+        // too, and give way to the notation's where they do not.
+        if (verdict && !has_fault({out_.data() + before, out_.size() - before})) {
+            out_.resize(before);
+            take_verdict(*verdict, f, formula);
+        }
+    }
+
+    static bool has_fault(std::span<const diagnostic> found) {
+        return std::any_of(found.begin(), found.end(),
+                           [](const diagnostic& d) { return d.level != severity::note; });
+    }
+
+    // The notation's findings on the cell as the equation "written unit = formula", in a
+    // workbook's words.
+    void take_verdict(std::vector<diagnostic>& verdict, const formula_cell& f,
+                      const syntax::formula& formula) {
+        for (auto& d : verdict) {
+            in_workbook_words(d, formula.range);
+            out_.push_back(std::move(d));
+            adapt(out_.back(), f);
+        }
     }
 
     // Checker findings in a workbook's words; true when the cell cannot be checked.
@@ -545,6 +602,7 @@ class workbook_checker {
         // Numbers in a workbook carry no units: terms in different units give a wrong result.
         if (d.rule == rules::unit_scale)
             d.level = severity::error;
+        advice_in_workbook_words(d);
         std::size_t noted = 0;
         for (auto& t : d.terms) {
             for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i) {
@@ -700,7 +758,12 @@ class workbook_checker {
                 on_scale->exponents[static_cast<std::size_t>(base_dimension::temperature)] != 0;
             diagnostic& d = report(
                 severity::error, rules::offset_scale,
-                computed.offset != nullptr
+                computed.offset != nullptr && written.unit.offset != nullptr
+                    ? fmt::format("this formula gives a value on the {} scale, but the unit "
+                                  "written for its cell, {}, is on the {} scale: the value is "
+                                  "off by the difference of the scales' zeros",
+                                  computed.offset->symbol, where_unit, written.unit.offset->symbol)
+                : computed.offset != nullptr
                     ? fmt::format("this formula gives a value on the {} scale, but the unit "
                                   "written for its cell, {}, is {}: the value is off by the "
                                   "scale's zero",
@@ -740,16 +803,27 @@ class workbook_checker {
             reversed = reconcile(parts, {0, k}).agree;
         if (!reversed && report_near_factor(f, factors, computed, written, needed))
             return;
-        // How far off the value shown is: after the factors already written, when what is
-        // left is a clean power of ten (a missed "/1000"); otherwise the whole ratio.
+        // How far off the value shown is: after the numbers already written, when what is
+        // left is a clean power of ten (a missed "/1000"); otherwise after the numbers that
+        // are conversions (*1000, *5.615, /24, /3600), which the engineer meant as such, the
+        // others (0.87, 5/384, /4) being coefficients of the formula.
         double written_product = 1.0;
-        for (const auto& x : factors)
-            written_product *= std::pow(x.value, x.exponent);
+        double conversions = 1.0;
+        double doubt = 0.0; // the conversions' rounding, relative
+        for (const auto& x : factors) {
+            const double factor = std::pow(x.value, x.exponent);
+            written_product *= factor;
+            if (looks_like_conversion(x, true) || is_time_ratio(x)) {
+                conversions *= factor;
+                doubt += x.tolerance * std::abs(x.exponent);
+            }
+        }
         const double left = needed / written_product;
         const double decades = std::log10(std::abs(left));
         const double off =
-            std::abs(decades - std::round(decades)) < 1e-9 && std::round(decades) != 0 ? left
-                                                                                       : needed;
+            std::abs(decades - std::round(decades)) < 1e-9 && std::round(decades) != 0
+                ? left
+                : whole_within(needed / conversions, doubt).value_or(needed);
         const std::optional<rational> exact_needed =
             exact_product(computed.exact_scale, written.unit.exact_scale, true);
         const std::optional<rational> exact_inverse =
@@ -775,6 +849,26 @@ class workbook_checker {
                                            format_factor(exact_needed, needed), written.unit.text),
                                {}});
         add_input_notes(d, f);
+    }
+
+    // 24 h/d, 60 min/h and s/min, 1440 min/d, 3600 s/h, 86400 s/d: exact by definition, and
+    // written with too few digits to look like conversions by themselves (SI Brochure 9th
+    // ed., Table 8).
+    static bool is_time_ratio(const scale_literal& x) {
+        return x.value == 24 || x.value == 60 || x.value == 1440 || x.value == 3600 ||
+               x.value == 86400;
+    }
+
+    // The ratio as a whole number either way (60, 1/3600) where the rounding of the
+    // conversions written (5.615 for 5.6146) is all that keeps it from one; else as it is.
+    static std::optional<double> whole_within(double ratio, double doubt) {
+        if (!(ratio > 0) || !std::isfinite(ratio))
+            return std::nullopt;
+        const double big = ratio >= 1 ? ratio : 1.0 / ratio;
+        const double whole = std::round(big);
+        if (whole >= 1 && std::abs(big / whole - 1.0) <= doubt + 1e-9)
+            return ratio >= 1 ? whole : 1.0 / whole;
+        return ratio;
     }
 
     // "=B1*2.204" for kg to lb (2.20462): a number within 1 % of the conversion the units need,
@@ -927,6 +1021,50 @@ class workbook_checker {
                                {}});
     }
 
+    // "the text beside it in D14, 'lb/lbmol', does not read as a unit: unknown unit 'lbmol'":
+    // the engineer wrote a unit; say which word of it plumb does not know, and how to define it.
+    std::string why_not_a_unit(const cell& text) const {
+        const std::string problem = unit_text_problem(text.text, units_.measures);
+        std::string said = fmt::format("the text beside it in {}, '{}', does not read as a unit",
+                                       a1_name(text.at), text.text);
+        if (problem.empty())
+            return said + "; write its unit there (as in m3/s, kPa, -), in the column's heading "
+                          "(as in 'Flow [m3/s]'), or in the workbook's sidecar";
+        // "unknown unit 'lbmol'; did you mean 'mol'?" reads on as "... (did you mean 'mol'?)".
+        std::string reason = problem;
+        if (const std::size_t guess = reason.find("; did you mean "); guess != std::string::npos)
+            reason = reason.substr(0, guess) + " (" + reason.substr(guess + 2) + ")";
+        said += ": " + reason;
+        const std::size_t open = problem.find('\'');
+        const std::size_t close = open == std::string::npos ? open : problem.find('\'', open + 1);
+        if (problem.rfind("unknown unit", 0) == 0 && close != std::string::npos)
+            said += fmt::format("; define it in the workbook's sidecar with a line such as "
+                                "'measure {} = <size> <known unit>', or write a unit plumb knows",
+                                problem.substr(open + 1, close - open - 1));
+        return said;
+    }
+
+    // A formula cell with a unit beside it that does not read as one: its result is compared
+    // with nothing, so say so where the text looks like a unit (it has a unit's operators).
+    void report_unread_unit(const formula_cell& f) {
+        const auto text = unread_.find(book_key(f.sheet, f.source->at));
+        if (text == unread_.end())
+            return;
+        const std::string_view t = text->second->text;
+        const bool unit_like = t.size() <= 40 && t.find(' ') == std::string_view::npos &&
+                               (t.find_first_of("/*^") != std::string_view::npos ||
+                                t.find("\u00B7") != std::string_view::npos ||
+                                t.find("\u00B2") != std::string_view::npos ||
+                                t.find("\u00B3") != std::string_view::npos);
+        if (!unit_like || unit_text_problem(t, units_.measures).rfind("unknown unit", 0) != 0)
+            return;
+        diagnostic& d = report(severity::warning, rules::no_unit,
+                               "the unit written beside this cell does not read as a unit, so "
+                               "its result is not compared with one",
+                               f.text);
+        d.notes.push_back({why_not_a_unit(*text->second), {}});
+    }
+
     void report_unitless_inputs() {
         if (!unitless_.empty()) {
             std::string text;
@@ -961,10 +1099,13 @@ class workbook_checker {
                                         fmt::join(names, ", "));
                 d.where = {values, where};
                 say_what_uses_require(d, key, users);
-                d.notes.push_back({"write its unit in the cell to its right (as in m3/s, kPa, "
-                                   "-), in the column's heading (as in 'Flow [m3/s]'), or in the "
-                                   "workbook's sidecar",
-                                   {}});
+                if (const auto text = unread_.find(key); text != unread_.end())
+                    d.notes.push_back({why_not_a_unit(*text->second), {}});
+                else
+                    d.notes.push_back({"write its unit in the cell to its right (as in m3/s, "
+                                       "kPa, -), in the column's heading (as in 'Flow [m3/s]'), "
+                                       "or in the workbook's sidecar",
+                                       {}});
                 out_.push_back(std::move(d));
             }
             report_.inputs_without_units += unitless_.size();

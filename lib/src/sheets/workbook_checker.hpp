@@ -30,6 +30,9 @@ struct outside_units {
         location where{}; // the cells line
     };
     std::vector<area_unit> areas;
+    // The `measure` lines of the sidecar and dictionaries, one a line: the unit text beside a
+    // cell may use the units they define, as a cells line may.
+    std::string measures;
 };
 
 // Appends the findings to report.diagnostics and the listing to report.sources.

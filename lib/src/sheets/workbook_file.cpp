@@ -149,6 +149,18 @@ void take_cells(const syntax::parsed_file& tree, const source_file& src, const w
     }
 }
 
+// The whole line of each unit a sidecar or dictionary defines, for reading unit text.
+void take_measures(const syntax::parsed_file& tree, const source_file& src, outside_units& units) {
+    const std::string_view text = src.text();
+    for (const auto& u : tree.units) {
+        const std::size_t begin = text.rfind('\n', u.where.begin);
+        const std::size_t end = text.find('\n', u.where.end);
+        const std::size_t from = begin == std::string_view::npos ? 0 : begin + 1;
+        units.measures += text.substr(from, end == std::string_view::npos ? end : end - from);
+        units.measures += '\n';
+    }
+}
+
 // Declarations of a dictionary or sidecar that give defined names a unit, and its `cells`
 // lines.
 void take_declarations(const fs::path& path, const std::string& origin, const workbook& book,
@@ -186,6 +198,7 @@ void take_declarations(const fs::path& path, const std::string& origin, const wo
         units.names.emplace(std::move(name), std::move(u));
     }
     take_cells(tree, src, book, origin, units, report);
+    take_measures(tree, src, units);
 }
 
 } // namespace

@@ -1,0 +1,316 @@
+// A formula gets the same verdict in a workbook cell as in a .plumb file: the cell and the unit
+// written for it are checked as the notation checks an equation's two sides. Each case puts
+// the right forms beside the wrong ones that must stay errors.
+#include "plumb/check.hpp"
+#include "plumb/rules.hpp"
+#include "test_support.hpp"
+#include "workbook_support.hpp"
+
+#include <doctest/doctest.h>
+
+#include <algorithm>
+#include <initializer_list>
+#include <string>
+#include <utility>
+#include <vector>
+
+using namespace plumb;
+using plumb::test::cell_findings;
+using plumb::test::check_after;
+using plumb::test::check_one_sheet;
+using plumb::test::count_of;
+using plumb::test::each_fails_with;
+using plumb::test::problems_in;
+using plumb::test::value_and_unit_row;
+
+namespace {
+
+// A sheet of (value or formula, unit text) rows from row 2 on, value in B and unit in C.
+std::string sheet_of(std::initializer_list<std::pair<std::string, std::string>> rows) {
+    std::string xml = "<worksheet><sheetData>";
+    int r = 2;
+    for (const auto& [value, unit] : rows)
+        xml += value_and_unit_row(r++, value, unit);
+    return xml + "</sheetData></worksheet>";
+}
+
+// The first finding at `cell` under `rule`, or null.
+const diagnostic* finding(const check_report& report, std::string_view cell,
+                          std::string_view rule) {
+    for (const auto& d : report.diagnostics)
+        if (const cell_place* c = d.where.file->cell_at(d.where.range.begin))
+            if (cell_text(*c) == cell && d.rule == rule)
+                return &d;
+    return nullptr;
+}
+
+// Whether an error is reported at `cell`, under whichever rule.
+bool error_at(const check_report& report, std::string_view cell) {
+    return std::any_of(report.diagnostics.begin(), report.diagnostics.end(), [&](const auto& d) {
+        const cell_place* c = d.where.file->cell_at(d.where.range.begin);
+        return c != nullptr && cell_text(*c) == cell && d.level == severity::error;
+    });
+}
+
+bool says(const diagnostic& d, std::string_view words) {
+    if (d.message.find(words) != std::string::npos)
+        return true;
+    return std::any_of(d.notes.begin(), d.notes.end(),
+                       [&](const note& n) { return n.message.find(words) != std::string::npos; });
+}
+
+} // namespace
+
+TEST_CASE("workbook parity: a conversion factor the units do not need is reported") {
+    // ML/d × mg/L is exactly kg/d (10⁶ L × 10⁻⁶ kg/L); m³/h × kg/m³ is kg/h; a value already in
+    // m needs no *1000 (SI Brochure 9th ed., Table 8; common practice). A copied formula that
+    // converts twice passed without a word in a workbook, though the notation reported it.
+    const check_report r =
+        check_one_sheet("S", sheet_of({
+                                 {"17.28", "m"},               // B2
+                                 {"=B2*1000", "m"},            // B3: not needed
+                                 {"=B2*1000", "mm"},           // B4: right
+                                 {"5", "ML/d"},                // B5
+                                 {"2", "mg/L"},                // B6
+                                 {"=B5*B6", "kg/d"},           // B7: right
+                                 {"=B5*B6*1000", "kg/d"},      // B8: not needed
+                                 {"=B5/24*1000", "m3/h"},      // B9: right
+                                 {"=B5/24*1000*1000", "m3/h"}, // B10: one 1000 too many
+                                 {"2400", "m3/h"},             // B11
+                                 {"1.2", "kg/m3"},             // B12
+                                 {"=B11*B12*3600", "kg/h"},    // B13: not needed
+                                 {"=B11*B12/3600", "kg/s"},    // B14: right
+                             }));
+    CHECK(cell_findings(r) == std::vector<std::string>{"S!B10 unit-scale", "S!B13 unit-scale",
+                                                       "S!B3 unit-scale", "S!B8 unit-scale"});
+    const diagnostic* extra = finding(r, "S!B3", rules::unit_scale);
+    REQUIRE(extra != nullptr);
+    CHECK(extra->level == severity::error);
+    CHECK(says(*extra, "the factor 1000 is not needed"));
+    CHECK(says(*extra, "write for its input cells the units it converts from"));
+}
+
+TEST_CASE("workbook parity: the pounds formula's 8.34 is a note in lb/d and not needed in kg/d") {
+    // mgd × mg/L × 8.34 = lb/d, with 8.34 lb per US gallon of water (the units need 8.3454;
+    // common practice in US water treatment). In an SI sheet, ML/d × mg/L is already kg/d, so
+    // the 8.34 pasted there makes the feed 8.34 times too large. 8.43 is neither.
+    const check_report r = check_one_sheet("Feed", sheet_of({
+                                                       {"4.57", "mgd"},         // B2
+                                                       {"2.5", "mg/L"},         // B3
+                                                       {"=B2*B3*8.34", "lb/d"}, // B4: note
+                                                       {"=B2*B3*8.43", "lb/d"}, // B5: wrong
+                                                       {"17.3", "ML/d"},        // B6
+                                                       {"=B6*B3*8.34", "kg/d"}, // B7: wrong
+                                                       {"=B6*B3", "kg/d"},      // B8: right
+                                                   }));
+    CHECK(cell_findings(r) == std::vector<std::string>{"Feed!B4 trade-constant",
+                                                       "Feed!B5 unit-scale", "Feed!B7 unit-scale"});
+    const diagnostic* pasted = finding(r, "Feed!B7", rules::unit_scale);
+    REQUIRE(pasted != nullptr);
+    CHECK(says(*pasted, "the factor 8.34 is not needed"));
+    CHECK(says(*pasted, "8.34 is the weight of a US gallon of water"));
+}
+
+TEST_CASE("workbook parity: the pounds formula in the notation, right and pasted into SI") {
+    const std::string declarations = "Q : ML/d\nQ_US : mgd\nc : mg/L\nW : kg/d\nW_US : lb/d\n";
+    const check_report right = check_after(declarations, "W_US = Q_US*c*8.34");
+    CHECK(problems_in(right) == 0);
+    CHECK(count_of(right, rules::trade_constant) == 1);
+    each_fails_with(declarations, {"W = Q*c*8.34", "W = Q*c/8.34", "W = 8.34*Q*c"},
+                    rules::unit_scale);
+    CHECK(problems_in(check_after(declarations, "W = Q*c")) == 0);
+}
+
+TEST_CASE("workbook parity: a liquid column is what a gauge at its foot reads") {
+    // p = ρ·g·h, the pressure of a column above the atmosphere (any fluid mechanics text, e.g.
+    // White, Fluid Mechanics, ch. 2, from memory); 0.433 psi per ft of water and 62.4 lb/ft³
+    // over 144 in²/ft² (common practice). Without g, or without the /144, they stay errors.
+    const check_report r = check_one_sheet("Tank", sheet_of({
+                                                       {"999.8", "kg/m3"},           // B2
+                                                       {"9.81", "m/s2"},             // B3
+                                                       {"6.5", "m"},                 // B4
+                                                       {"=B2*B3*B4/1000", "kPa(g)"}, // B5: right
+                                                       {"=B2*B3*B4/1000", "kPa"}, // B6: as before
+                                                       {"=B2*B4/1000", "kPa(g)"}, // B7: no g
+                                                       {"=B2*B3*B4", "kPa(g)"},   // B8: no /1000
+                                                       {"0.83", "-"},             // B9
+                                                       {"22", "ft"},              // B10
+                                                       {"=0.433*B9*B10", "psig"}, // B11: right
+                                                       {"=62.4*B9*B10/144", "psig"}, // B12: right
+                                                       {"=62.4*B9*B10", "psig"},     // B13: no /144
+                                                   }));
+    // The right cells have at most a note that reads 9.81, 0.433 or 62.4.
+    for (const auto& f : cell_findings(r)) {
+        CAPTURE(f);
+        const bool wrong_cell = f.rfind("Tank!B7 ", 0) == 0 || f.rfind("Tank!B8 ", 0) == 0 ||
+                                f.rfind("Tank!B13 ", 0) == 0;
+        CHECK((wrong_cell || f.find("gravity-number") != std::string::npos));
+    }
+    CHECK(finding(r, "Tank!B7", rules::result_unit) != nullptr);
+    CHECK(error_at(r, "Tank!B8"));
+    // The note says how to write the number outright in a workbook, not in the notation.
+    const diagnostic* water = finding(r, "Tank!B11", rules::gravity_number);
+    REQUIRE(water != nullptr);
+    CHECK(says(*water, "in cells that hold their units"));
+    CHECK_FALSE(says(*water, "declared"));
+    CHECK(finding(r, "Tank!B13", rules::result_unit) != nullptr);
+    CHECK(problems_in(r) == 3);
+}
+
+TEST_CASE("workbook parity: conversions written as a sum, °C to °F and barg to kPa absolute") {
+    // °F = 1.8·°C + 32; kPa = 100·barg + 101.325, psia = 14.5·barg + 14.7 (NIST SP 811 (2008),
+    // B.8; the standard atmosphere, SI Brochure 9th ed., Table 8). The wrong factor, or the
+    // atmosphere left out of an absolute cell, stays an error.
+    const check_report r =
+        check_one_sheet("Conv", sheet_of({
+                                    {"46", "°C"},                // B2
+                                    {"=B2*1.8+32", "°F"},        // B3: right
+                                    {"=B2*9/5+32", "°F"},        // B4: right
+                                    {"=B2/1.8+32", "°F"},        // B5: wrong way round
+                                    {"7.5", "barg"},             // B6
+                                    {"=B6*100+101.325", "kPa"},  // B7: right
+                                    {"=B6*100", "kPa(g)"},       // B8: right
+                                    {"=B6*14.5+14.7", "psia"},   // B9: right
+                                    {"=B6*1000+101.325", "kPa"}, // B10: wrong factor
+                                    {"=B6*100", "kPa"},          // B11: no atmosphere
+                                }));
+    CHECK(cell_findings(r).size() == 3);
+    CHECK(error_at(r, "Conv!B5"));
+    // °F is a scale with a zero of its own, not an absolute temperature.
+    for (const auto& d : r.diagnostics)
+        CHECK(d.message.find("'°F' (beside it in C5), is an absolute") == std::string::npos);
+    CHECK(error_at(r, "Conv!B10"));
+    CHECK(finding(r, "Conv!B11", rules::offset_scale) != nullptr);
+}
+
+TEST_CASE("workbook parity: Barlow's wall stress from a gauge pressure") {
+    // σ = p·D/(2·t), the wall carries the pressure above the atmosphere outside it (Barlow's
+    // formula, ASME B31.3 304.1.2, from memory). kPa·m/mm is MPa with no factor; a *1000 there
+    // is not needed. A gauge reading in a gas law stays an error.
+    const check_report r =
+        check_one_sheet("Wall", sheet_of({
+                                    {"63.7", "kPa(g)"},                // B2
+                                    {"32", "m"},                       // B3
+                                    {"300", "mm"},                     // B4
+                                    {"=B2*B3/(2*B4)", "MPa"},          // B5: right
+                                    {"=B2*B3/(2*B4)*1000", "MPa"},     // B6: not needed
+                                    {"150", "psig"},                   // B7
+                                    {"24", "in"},                      // B8
+                                    {"0.375", "in"},                   // B9
+                                    {"=B7*B8/(2*B9)", "psi"},          // B10: right
+                                    {"2", "m3"},                       // B11
+                                    {"8.314", "J/(mol*K)"},            // B12
+                                    {"300", "K"},                      // B13
+                                    {"=B2*1000*B11/(B12*B13)", "mol"}, // B14: gauge in a gas law
+                                }));
+    CHECK(cell_findings(r) ==
+          std::vector<std::string>{"Wall!B14 offset-scale", "Wall!B6 unit-scale"});
+}
+
+TEST_CASE("workbook parity: unit text may use the units a sidecar defines with measure") {
+    // Gas density ρ = p·M/(Z·R·T) with R = 10.73 psia·ft³/(lbmol·°R) (common practice in gas
+    // engineering); the pound-mole is 453.59237 mol (NIST SP 811 (2008), B.8). With T in °F
+    // the density is wrong, reported once the units beside the cells are read; with °R it is
+    // right.
+    const std::string sheet = sheet_of({
+        {"114.7", "psia"},                // B2
+        {"18.9", "lb/lbmol"},             // B3
+        {"0.92", "-"},                    // B4
+        {"10.73", "psia·ft³/(lbmol·°R)"}, // B5
+        {"85", "°F"},                     // B6
+        {"=B6+459.67", "°R"},             // B7
+        {"=B2*B3/(B4*B5*B7)", "lb/ft³"},  // B8: right
+        {"=B2*B3/(B4*B5*B6)", "lb/ft³"},  // B9: °F in a gas law
+    });
+    const check_report with_measure =
+        check_one_sheet("Gas", sheet, "measure lbmol = 453.59237 mol \"pound-mole\"\n");
+    CHECK(cell_findings(with_measure) == std::vector<std::string>{"Gas!B9 offset-scale"});
+    CHECK(with_measure.inputs_without_units == 0);
+
+    // Without the measure line the text is not read; the warning names the text and the word.
+    const check_report without = check_one_sheet("Gas", sheet);
+    const diagnostic* input = finding(without, "Gas!B5", rules::no_unit);
+    REQUIRE(input != nullptr);
+    CHECK(says(*input, "the text beside it in C5, 'psia·ft³/(lbmol·°R)', does not read as a unit"));
+    CHECK(says(*input, "unknown unit 'lbmol'"));
+    CHECK(says(*input, "measure lbmol = <size> <known unit>"));
+    CHECK_FALSE(says(*input, "write its unit in the cell to its right"));
+}
+
+TEST_CASE("workbook parity: a measure defined from another is read in unit text too") {
+    // 1 lbmol = 453.59237 mol (NIST SP 811 (2008), B.8); a thousand of them a day, beside
+    // others the sheet does not use, so only the lines a text names are read with it.
+    std::string sidecar;
+    for (int k = 0; k < 200; ++k)
+        sidecar += "measure unused" + std::to_string(k) + " = " + std::to_string(k + 2) + " m\n";
+    sidecar += "measure lbmol = 453.59237 mol\nmeasure klbmol = 1000 lbmol\n";
+    const check_report r = check_one_sheet("Flow",
+                                           sheet_of({
+                                               {"12", "klbmol/d"},       // B2
+                                               {"=B2*1000", "lbmol/d"},  // B3: right
+                                               {"=B2*1000", "klbmol/d"}, // B4: not needed
+                                           }),
+                                           sidecar);
+    CHECK(cell_findings(r) == std::vector<std::string>{"Flow!B4 unit-scale"});
+    CHECK(r.inputs_without_units == 0);
+}
+
+TEST_CASE("workbook parity: a formula cell beside a unit text that does not read is told so") {
+    const check_report r = check_one_sheet("U", sheet_of({
+                                                    {"28.97", "kg/kmol"},  // B2
+                                                    {"=B2*2", "lb/lbmol"}, // B3: unknown word
+                                                    {"=B2*3", "kg/kmol"},  // B4: read
+                                                    {"=B2*4", "checked"},  // B5: a remark
+                                                }));
+    CHECK(cell_findings(r) == std::vector<std::string>{"U!B3 no-unit"});
+    const diagnostic* d = finding(r, "U!B3", rules::no_unit);
+    REQUIRE(d != nullptr);
+    CHECK(says(*d, "'lb/lbmol'"));
+    CHECK(says(*d, "unknown unit 'lbmol'"));
+}
+
+TEST_CASE("workbook parity: how far off the value shown is counts the conversions written") {
+    // The figure is the value shown over the value the formula means, with the numbers that
+    // are conversions (*1000, /24, *5.615) taken as such and the coefficients (0.87) not.
+    // 1 bbl = 5.614583 ft³ (NIST SP 811 (2008), B.8).
+    const check_report r = check_one_sheet(
+        "Off", sheet_of({
+                   {"1000", "m3/h"},                 // B2
+                   {"500", "mm"},                    // B3
+                   {"=B2/(B3*B3/1000000)", "m/s"},   // B4: /3600 missing: 3600 too large
+                   {"45", "kN*m"},                   // B5
+                   {"500", "N/mm2"},                 // B6
+                   {"=B5*1000/(0.87*B6*B3)", "mm2"}, // B7: *1000 for *10⁶: 1000 too small
+                   {"2400", "bbl/d"},                // B8
+                   {"5", "min"},                     // B9
+                   {"=B8*5.615/24*B9", "ft3"},       // B10: per hour: 60 too large
+               }));
+    const auto figure = [&](const char* cell, const char* words) {
+        const diagnostic* d = finding(r, cell, rules::unit_scale);
+        REQUIRE(d != nullptr);
+        CAPTURE(d->message);
+        CHECK(says(*d, words));
+    };
+    figure("Off!B4", "the value shown is 3600 times too large");
+    figure("Off!B7", "the value shown is 1000 times too small");
+    figure("Off!B10", "the value shown is 60 times too large");
+}
+
+TEST_CASE("workbook parity: a heat flow times a °C reading is told to take the difference") {
+    // Q = U·A·ΔT (any heat transfer text, e.g. CIBSE Guide A, ch. 3, from memory): adding 273.15
+    // to the inside temperature would pass the check and give a heat loss many times too large.
+    const check_report r = check_one_sheet("Heat", sheet_of({
+                                                       {"21", "°C"},            // B2
+                                                       {"-3", "°C"},            // B3
+                                                       {"1.6", "W/(m2*K)"},     // B4
+                                                       {"12", "m2"},            // B5
+                                                       {"=B4*B5*B2", "W"},      // B6: a reading
+                                                       {"=B4*B5*(B2-B3)", "W"}, // B7: right
+                                                   }));
+    CHECK(cell_findings(r) == std::vector<std::string>{"Heat!B6 offset-scale"});
+    const diagnostic* d = finding(r, "Heat!B6", rules::offset_scale);
+    REQUIRE(d != nullptr);
+    REQUIRE_FALSE(d->notes.empty());
+    CHECK(d->notes.front().message.find("multiplies a temperature difference") !=
+          std::string::npos);
+}
