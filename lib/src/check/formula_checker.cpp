@@ -2926,7 +2926,7 @@ class checker {
         const std::size_t args_base = operands_.size();
         const std::size_t types_base = types_.size();
         const bool square_root = f != nullptr && f->rule == function_rule::root &&
-                                 f->power == rational(1, 2) && n.rhs == 1;
+                                 f->power.num() == 1 && f->power.den() == 2 && n.rhs == 1;
         for (std::uint32_t i = 0; i < n.rhs; ++i) {
             const std::uint32_t node = file_.call_args[n.lhs + i];
             const std::uint32_t saved = prefer_dimensionless_;
