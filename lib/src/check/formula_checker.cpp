@@ -24,6 +24,7 @@
 #include <limits>
 #include <numbers>
 #include <span>
+#include <type_traits>
 #include <unordered_map>
 
 namespace plumb {
@@ -221,7 +222,8 @@ struct agreement {
 
 // The reference is the dimension most operands share (the first such on a tie), so that one
 // wrong term among several right ones is the one pointed at.
-agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless = false) {
+[[gnu::noinline]] agreement find_agreement_in_full(std::span<const operand> ops,
+                                                   bool prefer_dimensionless) {
     agreement result;
     // In the argument of ln, exp or sin the dimensionless terms are the right ones.
     if (prefer_dimensionless &&
@@ -279,6 +281,28 @@ agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless
     for (std::size_t i = 0; i < ops.size(); ++i)
         if (ops[i].type.known && !ops[i].type.zero && !(ops[i].type.dim == *result.reference))
             result.odd.push_back(i);
+    return result;
+}
+
+// Nearly every meeting point agrees, and outside the argument of ln, exp or sin that is found
+// here in one pass over the operands, as find_agreement_in_full's own first pass finds it,
+// without its frame; anything else is left to it.
+[[gnu::always_inline]] inline agreement find_agreement(std::span<const operand> ops,
+                                                       bool prefer_dimensionless = false) {
+    if (prefer_dimensionless)
+        return find_agreement_in_full(ops, prefer_dimensionless);
+    const operand* first_known = nullptr;
+    for (const auto& op : ops) {
+        if (!op.type.known || op.type.zero)
+            continue;
+        if (first_known == nullptr)
+            first_known = &op;
+        else if (!(op.type.dim == first_known->type.dim))
+            return find_agreement_in_full(ops, prefer_dimensionless);
+    }
+    agreement result;
+    if (first_known != nullptr)
+        result.reference = first_known->type.dim;
     return result;
 }
 
@@ -429,6 +453,14 @@ class checker {
         typed_term base = kept != nullptr ? *kept : eval(n.lhs);
         if (kept != nullptr)
             base.literal_begin = static_cast<std::uint32_t>(literals_.size());
+        const syntax::expr_node& e = file_.nodes[n.rhs];
+        if (e.kind == expr_kind::number) {
+            // V^2: the exponent's own number is no factor of the power, and apply_power would
+            // only drop it from the literal stack again, so it is read without going there.
+            typed_term exponent = number_type(read_number(text(e.range)));
+            exponent.literal_begin = static_cast<std::uint32_t>(literals_.size());
+            return apply_power(base, exponent, n.lhs, n.rhs);
+        }
         const typed_term exponent = eval(n.rhs);
         return apply_power(base, exponent, n.lhs, n.rhs);
     }
@@ -569,6 +601,17 @@ class checker {
 
     std::string_view text(span s) const { return file_.source->text(s); }
 
+    // The literal stack cut back to `count`, as resize would: the numbers are trivially
+    // destroyed, so a cut (nearly every one) is a store here rather than a call.
+    void cut_literals_to(std::size_t count) {
+        static_assert(std::is_trivially_destructible_v<scale_literal>);
+        if (count <= literals_.size())
+            literals_.erase(literals_.begin() + static_cast<std::ptrdiff_t>(count),
+                            literals_.end());
+        else
+            literals_.resize(count);
+    }
+
     // An operand's type, on the type stack; shared with an equal one of the same meeting point
     // where there are many, since looking for one costs more than a short one saves.
     template <class Make>
@@ -698,7 +741,7 @@ class checker {
         if (!a.odd.empty() || !a.reference || !(*a.reference == pressure)) {
             for (std::size_t i = 0; i < count; ++i)
                 const_cast<typed_term&>(operands_[base + i].type) = saved_types[i];
-            literals_.resize(literal_from);
+            cut_literals_to(literal_from);
             literals_.insert(literals_.end(), saved_literals.begin(), saved_literals.end());
             out_.erase(out_.begin() + static_cast<std::ptrdiff_t>(findings_before), out_.end());
             return false;
@@ -931,12 +974,17 @@ class checker {
         return t;
     }
 
-    [[gnu::noinline]] typed_term eval_number(const syntax::expr_node& n, std::uint32_t index) {
+    static typed_term number_type(const number_reading& reading) {
         typed_term t;
         t.numeric = true;
-        const number_reading& reading = read_number(text(n.range));
         t.value = reading.value;
         t.zero = reading.zero;
+        return t;
+    }
+
+    [[gnu::noinline]] typed_term eval_number(const syntax::expr_node& n, std::uint32_t index) {
+        const number_reading& reading = read_number(text(n.range));
+        typed_term t = number_type(reading);
         if (!t.zero) {
             literals_.push_back(reading.literal);
             literals_.back().node = index;
@@ -1008,7 +1056,7 @@ class checker {
     // A symbol's type as its entry keeps it, marked used as eval_symbol marks it; null where
     // eval_symbol has more to do (not a symbol, undeclared, first use). Valid until the next
     // symbol is declared, which no check does.
-    const typed_term* kept_symbol_type(std::uint32_t index) {
+    [[gnu::always_inline]] const typed_term* kept_symbol_type(std::uint32_t index) {
         const syntax::expr_node& n = file_.nodes[index];
         if (n.kind != expr_kind::symbol)
             return nullptr;
@@ -1105,7 +1153,7 @@ class checker {
         if (!a.odd.empty() && !prefer_dimensionless && read_column_and_atmosphere(base, index))
             a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty()) {
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
             const std::size_t first_odd = a.odd.front();
             std::string message;
             if (terms.size() == 2) {
@@ -1123,7 +1171,7 @@ class checker {
             return unknown_type();
         }
         if (!result.known) {
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
             return unknown_type(inferred);
         }
         if (a.reference)
@@ -1132,7 +1180,7 @@ class checker {
             result.value.reset();
         if (result.numeric) {
             // A sum of numbers is one number: physics or a conversion as a whole.
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
             if (result.value && !result.value->is_zero())
                 literals_.push_back(read_literal(text(file_.nodes[index].range),
                                                  result.value->to_double(), index, result.value));
@@ -1148,7 +1196,7 @@ class checker {
         result.scale = check_scales(terms, "terms of this sum", unit, &result.exact_scale)
                            ? unit
                            : std::numeric_limits<double>::quiet_NaN();
-        literals_.resize(literal_base);
+        cut_literals_to(literal_base);
         int points = 0;
         for (const auto& t : terms)
             if (t.type.point)
@@ -1512,7 +1560,7 @@ class checker {
                 if (t.type.known && !t.type.zero && !is_shift_candidate(t))
                     unit_operands.push_back(t);
             if (!check_scales(unit_operands, "terms of this sum", unit)) {
-                literals_.resize(literal_base);
+                cut_literals_to(literal_base);
                 return unknown_type();
             }
         }
@@ -1531,12 +1579,12 @@ class checker {
         }
         if (has_shift && !shifted_to_a_zero && points == 0 && unit_terms >= 2 &&
             report_zero_beside_difference_of_readings(terms, unit, result.dim)) {
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
             return unknown_type();
         }
         if (has_shift && !shifted_to_a_zero && points == 1 && std::abs(origin) <= 1e-9 &&
             report_zero_added_twice(terms, unit, result.dim)) {
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
             return unknown_type();
         }
         if (has_shift && !shifted_to_a_zero && points == 1) {
@@ -1560,7 +1608,7 @@ class checker {
                                                    "(... + {})",
                                                    display_text(file_.nodes[t.node].range)),
                                        {}});
-                    literals_.resize(literal_base);
+                    cut_literals_to(literal_base);
                     return unknown_type();
                 }
                 // "(T - 20)": the difference from a reference reading, where a factor.
@@ -1573,10 +1621,10 @@ class checker {
             std::copy(literals_.begin() + term.type.literal_begin,
                       literals_.begin() + term.type.literal_begin + term.type.literal_count,
                       literals_.begin() + static_cast<std::ptrdiff_t>(literal_base));
-            literals_.resize(literal_base + term.type.literal_count);
+            cut_literals_to(literal_base + term.type.literal_count);
             unit = terms[only].type.scale;
         } else {
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
         }
         result.scale = unit;
         result.exact_scale.reset();
@@ -1612,7 +1660,7 @@ class checker {
                     return result;
                 }
                 report_mixed_scales(terms, final_origin);
-                literals_.resize(literal_base);
+                cut_literals_to(literal_base);
                 return unknown_type();
             }
             result.absolute_pressure_difference =
@@ -1859,8 +1907,9 @@ class checker {
     // Terms of one dimension in different units give numbers off by a factor, unless numbers
     // in the formula supply that conversion, the right way round. `unit` receives the SI value
     // of the unit they agree in. False when a finding was reported.
-    bool check_scales(std::span<const operand> ops, std::string_view what, double& unit,
-                      optional_rational* exact_unit = nullptr) {
+    [[gnu::always_inline]] bool check_scales(std::span<const operand> ops, std::string_view what,
+                                             double& unit,
+                                             optional_rational* exact_unit = nullptr) {
         if (exact_unit != nullptr)
             exact_unit->reset();
         // Fast path: nearly every meeting point has one unit and no numbers to weigh. Where
@@ -1900,9 +1949,16 @@ class checker {
                     *exact_unit = exact_first != nullptr ? *exact_first : rational(1);
                 return true;
             }
-            if (with_numbers && units_agree_with_plain_numbers(ops, unit))
-                return true;
+            return reconcile_scales(ops, what, unit, with_numbers);
         }
+    }
+
+    // check_scales past its fast path, out of line so that the meeting points it settles do
+    // not pay for this one's frame.
+    [[gnu::noinline]] bool reconcile_scales(std::span<const operand> ops, std::string_view what,
+                                            double& unit, bool with_numbers) {
+        if (with_numbers && units_agree_with_plain_numbers(ops, unit))
+            return true;
         const std::size_t base = scaled_.size();
         bool dimensionless = false;
         for (std::size_t i = 0; i < ops.size(); ++i) {
@@ -2261,14 +2317,17 @@ class checker {
     }
 
     // "T_K = T_C": readings on scales with different zeros set equal or compared.
-    void check_origins(std::span<const operand> sides, bool equation) {
+    [[gnu::always_inline]] void check_origins(std::span<const operand> sides, bool equation) {
         // Nearly every formula: no scale's zero as a reading, no weighted readings and every
-        // origin absolute, where each step below does nothing. One pass says so.
-        if (std::all_of(sides.begin(), sides.end(), [](const operand& side) {
+        // origin absolute, where each step of compare_origins does nothing. One pass says so.
+        if (!std::all_of(sides.begin(), sides.end(), [](const operand& side) {
                 return side.type.zero_of == nullptr && !side.type.weighted_sum &&
                        side.type.origin == 0.0;
             }))
-            return;
+            compare_origins(sides, equation);
+    }
+
+    [[gnu::noinline]] void compare_origins(std::span<const operand> sides, bool equation) {
         if (report_scale_zero_beside_difference(sides))
             return;
         for (const auto& side : sides)
@@ -2846,12 +2905,12 @@ class checker {
             return unknown_type();
         }
         // The exponent's own numbers are not factors of the power; the base's are, raised.
-        literals_.resize(base.literal_begin + base.literal_count);
+        cut_literals_to(base.literal_begin + base.literal_count);
         if (exponent.value)
             for (std::uint32_t i = 0; i < base.literal_count; ++i)
                 literals_[base.literal_begin + i].exponent *= exponent.value->to_double();
         else
-            literals_.resize(base.literal_begin);
+            cut_literals_to(base.literal_begin);
         if (!base.known || !exponent.known)
             return unknown_type(base.inferred || exponent.inferred);
         if (base.offset != nullptr && !base.reading_or_difference &&
@@ -2951,10 +3010,10 @@ class checker {
         // Only a root or abs passes its argument's numbers on, as factors of the result.
         const auto keep_first_argument_numbers = [&](double power) {
             if (args.empty()) {
-                literals_.resize(literal_start);
+                cut_literals_to(literal_start);
                 return;
             }
-            literals_.resize(args[0].type.literal_begin + args[0].type.literal_count);
+            cut_literals_to(args[0].type.literal_begin + args[0].type.literal_count);
             for (std::uint32_t i = 0; i < args[0].type.literal_count; ++i)
                 literals_[args[0].type.literal_begin + i].exponent *= power;
         };
@@ -3042,13 +3101,13 @@ class checker {
                 else if (require_dimensionless(*f, a))
                     require_unit_free(*f, a);
             }
-            literals_.resize(literal_start);
+            cut_literals_to(literal_start);
             return result;
         case function_rule::angle_of:
         case function_rule::common: {
             const agreement a = find_agreement(args);
             if (!a.odd.empty()) {
-                literals_.resize(literal_start);
+                cut_literals_to(literal_start);
                 diagnostic& d =
                     report(rules::argument_mismatch,
                            fmt::format("the arguments of {} differ in dimension", f->name),
@@ -3059,7 +3118,7 @@ class checker {
             double unit = 1.0;
             const bool scales_agree = check_scales(args, fmt::format("arguments of {}", f->name),
                                                    unit, &result.exact_scale);
-            literals_.resize(literal_start);
+            cut_literals_to(literal_start);
             if (f->rule == function_rule::angle_of)
                 return result;
             if (!std::all_of(args.begin(), args.end(),
@@ -3076,10 +3135,10 @@ class checker {
         case function_rule::power:
             return apply_power(args[0].type, args[1].type, args[0].node, args[1].node);
         case function_rule::derivative:
-            literals_.resize(literal_start);
+            cut_literals_to(literal_start);
             return derivative(args);
         case function_rule::integral:
-            literals_.resize(literal_start);
+            cut_literals_to(literal_start);
             return integral(args);
         default:
             return eval_sheet_call(*f, args);
