@@ -150,6 +150,8 @@ struct dimension_hash {
 std::optional<rational> weight_of(const typed_term& t) {
     if (t.weight_denominator == 0)
         return std::nullopt;
+    if (t.weight_denominator == 1) // nearly every reading: whole, with no gcd to take
+        return rational(t.weight_numerator);
     return rational(t.weight_numerator, t.weight_denominator);
 }
 
@@ -1555,11 +1557,16 @@ class checker {
                 }
             }
         } else if (!(has_shift && converted_alike(terms, shifted, result.dim, unit))) {
+            // Where every term has a unit (p_2 + ρ*g*Δz, T_1 - T_2), they are the terms
+            // themselves, in order: no list to allocate.
             std::vector<operand> unit_operands;
-            for (const auto& t : terms)
-                if (t.type.known && !t.type.zero && !is_shift_candidate(t))
-                    unit_operands.push_back(t);
-            if (!check_scales(unit_operands, "terms of this sum", unit)) {
+            if (unit_terms != terms.size())
+                for (const auto& t : terms)
+                    if (t.type.known && !t.type.zero && !is_shift_candidate(t))
+                        unit_operands.push_back(t);
+            if (!check_scales(unit_terms == terms.size() ? terms
+                                                         : std::span<const operand>(unit_operands),
+                              "terms of this sum", unit)) {
                 cut_literals_to(literal_base);
                 return unknown_type();
             }
