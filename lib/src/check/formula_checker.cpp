@@ -384,6 +384,13 @@ class checker {
     // from where it started.
     typed_term eval(std::uint32_t index) {
         const auto start = static_cast<std::uint32_t>(literals_.size());
+        // (x) is x: its parentheses are stepped through here rather than evaluated as a node
+        // of their own, which would set the same literal range a second time.
+        while (file_.nodes[index].kind == expr_kind::group) {
+            if (index == prefer_dimensionless_)
+                prefer_dimensionless_ = file_.nodes[index].lhs;
+            index = file_.nodes[index].lhs;
+        }
         typed_term t = eval_node(index);
         t.literal_begin = start;
         t.literal_count = static_cast<std::uint32_t>(literals_.size()) - start;
@@ -604,14 +611,14 @@ class checker {
     std::string_view text(span s) const { return file_.source->text(s); }
 
     // The literal stack cut back to `count`, as resize would: the numbers are trivially
-    // destroyed, so a cut (nearly every one) is a store here rather than a call.
-    void cut_literals_to(std::size_t count) {
+    // destroyed, so a cut (nearly every one) is a few pointer decrements here, inline, where
+    // resize is a call.
+    [[gnu::always_inline]] void cut_literals_to(std::size_t count) {
         static_assert(std::is_trivially_destructible_v<scale_literal>);
-        if (count <= literals_.size())
-            literals_.erase(literals_.begin() + static_cast<std::ptrdiff_t>(count),
-                            literals_.end());
-        else
+        if (count > literals_.size()) [[unlikely]]
             literals_.resize(count);
+        while (literals_.size() > count)
+            literals_.pop_back();
     }
 
     // An operand's type, on the type stack; shared with an equal one of the same meeting point
