@@ -608,7 +608,9 @@ class checker {
     const typed_term* side_hint_ = nullptr;
     std::uint32_t side_hint_node_ = syntax::no_index;
 
-    std::string_view text(span s) const { return file_.source->text(s); }
+    // Inline: every symbol and call is looked up by its text, and a call here cost more than
+    // the view it makes.
+    [[gnu::always_inline]] std::string_view text(span s) const { return file_.source->text(s); }
 
     // The literal stack cut back to `count`, as resize would: the numbers are trivially
     // destroyed, so a cut (nearly every one) is a few pointer decrements here, inline, where
