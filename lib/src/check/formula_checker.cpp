@@ -2795,54 +2795,63 @@ class checker {
                 for (std::uint32_t i = 0; i < t.literal_count; ++i)
                     literals_[t.literal_begin + i].exponent =
                         -literals_[t.literal_begin + i].exponent;
-            // An offset value may be scaled by a pure number (the mean (T_1 + T_2)/2), not
-            // multiplied by a quantity, nor by a `?` coefficient (which has a dimension).
-            const auto scales_a_reading = [](const typed_term& reading, const typed_term& other) {
-                return reading.known && reading.offset != nullptr &&
-                       (other.known ? !other.numeric : other.inferred);
-            };
-            const bool left_off = scales_a_reading(result, t);
-            const bool right_off =
-                scales_a_reading(t, result) && !(result.known && result.numeric && !divided);
-            const bool gauge_over_something =
-                (left_off || (right_off && !divided)) &&
-                compact_dimension((left_off ? result : t).offset->dim()) == pressure_dimension();
-            if (gauge_over_something) {
-                if (!gauge_in_product)
-                    gauge_in_product = deferred_offset{
-                        left_off ? offset_node : op.rhs, left_off ? result.offset : t.offset,
-                        divided ? "used in a quotient" : "multiplied"};
-            } else if (left_off || right_off) {
-                report_offset(left_off ? offset_node : op.rhs,
-                              left_off ? *result.offset : *t.offset,
-                              divided ? "used in a quotient" : "multiplied",
-                              left_off ? (t.known ? &t.dim : nullptr)
-                                       : (result.known ? &result.dim : nullptr));
-                spine_.resize(spine_base);
-                result = unknown_type();
-                return result; // the one return object, built in place
-            }
-            if (t.offset != nullptr) {
-                result.offset = t.offset;
-                result.origin = t.origin;
-                result.origin_tolerance = t.origin_tolerance;
-                offset_node = op.rhs;
-            }
-            // A reading's weight follows the numbers that scale it: (T_1 + T_2)/2 weighs 1.
-            if (result.point && t.numeric && t.value && !t.value->is_zero()) {
-                scale_weight(result, divided ? rational(1) / *t.value : *t.value);
-            } else if (t.point && result.numeric && result.value && !divided) {
-                const rational by = *result.value;
-                result.weight_numerator = t.weight_numerator;
-                result.weight_denominator = t.weight_denominator;
-                result.weighted_sum = t.weighted_sum;
-                scale_weight(result, by);
-            }
-            // A reading scaled by a number is still a reading; times a quantity it is not.
-            result.point = (result.point && t.numeric) || (t.point && result.numeric);
-            if (!result.point) {
+            // Nearly every factor, and the product so far, is neither a reading nor on an
+            // offset scale, where the rules below have nothing to do but say so.
+            if (result.offset == nullptr && t.offset == nullptr && !result.point && !t.point) {
                 result.origin = 0.0;
                 result.origin_tolerance = 0.0;
+            } else {
+                // An offset value may be scaled by a pure number (the mean (T_1 + T_2)/2), not
+                // multiplied by a quantity, nor by a `?` coefficient (which has a dimension).
+                const auto scales_a_reading = [](const typed_term& reading,
+                                                 const typed_term& other) {
+                    return reading.known && reading.offset != nullptr &&
+                           (other.known ? !other.numeric : other.inferred);
+                };
+                const bool left_off = scales_a_reading(result, t);
+                const bool right_off =
+                    scales_a_reading(t, result) && !(result.known && result.numeric && !divided);
+                const bool gauge_over_something =
+                    (left_off || (right_off && !divided)) &&
+                    compact_dimension((left_off ? result : t).offset->dim()) ==
+                        pressure_dimension();
+                if (gauge_over_something) {
+                    if (!gauge_in_product)
+                        gauge_in_product = deferred_offset{
+                            left_off ? offset_node : op.rhs, left_off ? result.offset : t.offset,
+                            divided ? "used in a quotient" : "multiplied"};
+                } else if (left_off || right_off) {
+                    report_offset(left_off ? offset_node : op.rhs,
+                                  left_off ? *result.offset : *t.offset,
+                                  divided ? "used in a quotient" : "multiplied",
+                                  left_off ? (t.known ? &t.dim : nullptr)
+                                           : (result.known ? &result.dim : nullptr));
+                    spine_.resize(spine_base);
+                    result = unknown_type();
+                    return result; // the one return object, built in place
+                }
+                if (t.offset != nullptr) {
+                    result.offset = t.offset;
+                    result.origin = t.origin;
+                    result.origin_tolerance = t.origin_tolerance;
+                    offset_node = op.rhs;
+                }
+                // A reading's weight follows the numbers that scale it: (T_1 + T_2)/2 weighs 1.
+                if (result.point && t.numeric && t.value && !t.value->is_zero()) {
+                    scale_weight(result, divided ? rational(1) / *t.value : *t.value);
+                } else if (t.point && result.numeric && result.value && !divided) {
+                    const rational by = *result.value;
+                    result.weight_numerator = t.weight_numerator;
+                    result.weight_denominator = t.weight_denominator;
+                    result.weighted_sum = t.weighted_sum;
+                    scale_weight(result, by);
+                }
+                // A reading scaled by a number is still a reading; times a quantity it is not.
+                result.point = (result.point && t.numeric) || (t.point && result.numeric);
+                if (!result.point) {
+                    result.origin = 0.0;
+                    result.origin_tolerance = 0.0;
+                }
             }
             result.inferred = result.inferred || t.inferred;
             has_gravity = has_gravity || (t.known && !divided && t.dim == acceleration_dimension());
