@@ -2336,11 +2336,12 @@ class checker {
     [[gnu::always_inline]] void check_origins(std::span<const operand> sides, bool equation) {
         // Nearly every formula: no scale's zero as a reading, no weighted readings and every
         // origin absolute, where each step of compare_origins does nothing. One pass says so.
-        if (!std::all_of(sides.begin(), sides.end(), [](const operand& side) {
-                return side.type.zero_of == nullptr && !side.type.weighted_sum &&
-                       side.type.origin == 0.0;
-            }))
-            compare_origins(sides, equation);
+        // A loop of its own: std::all_of was left a call.
+        for (const operand& side : sides)
+            if (side.type.zero_of != nullptr || side.type.weighted_sum || side.type.origin != 0.0) {
+                compare_origins(sides, equation);
+                return;
+            }
     }
 
     [[gnu::noinline]] void compare_origins(std::span<const operand> sides, bool equation) {
