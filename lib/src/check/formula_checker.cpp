@@ -24,6 +24,7 @@
 #include <limits>
 #include <numbers>
 #include <span>
+#include <type_traits>
 #include <unordered_map>
 
 namespace plumb {
@@ -43,8 +44,8 @@ typed_term unknown_type(bool inferred = false) {
 const compact_dimension acceleration = *compact_dimension::fitted(
     dimension::base(base_dimension::length) / dimension::base(base_dimension::time) /
     dimension::base(base_dimension::time));
-const compact_dimension temperature = *compact_dimension::fitted(
-    dimension::base(base_dimension::temperature));
+const compact_dimension temperature =
+    *compact_dimension::fitted(dimension::base(base_dimension::temperature));
 const compact_dimension pressure = *compact_dimension::fitted(
     dimension::base(base_dimension::mass) / dimension::base(base_dimension::length) /
     dimension::base(base_dimension::time) / dimension::base(base_dimension::time));
@@ -196,6 +197,8 @@ struct dimension_hash {
 std::optional<rational> weight_of(const typed_term& t) {
     if (t.weight_denominator == 0)
         return std::nullopt;
+    if (t.weight_denominator == 1) // nearly every reading: whole, with no gcd to take
+        return rational(t.weight_numerator);
     return rational(t.weight_numerator, t.weight_denominator);
 }
 
@@ -304,7 +307,8 @@ struct agreement {
 
 // The reference is the dimension most operands share (the first such on a tie), so that one
 // wrong term among several right ones is the one pointed at.
-agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless = false) {
+[[gnu::noinline]] agreement find_agreement_in_full(std::span<const operand> ops,
+                                                   bool prefer_dimensionless) {
     agreement result;
     // In the argument of ln, exp or sin the dimensionless terms are the right ones.
     if (prefer_dimensionless &&
@@ -362,6 +366,28 @@ agreement find_agreement(std::span<const operand> ops, bool prefer_dimensionless
     for (std::size_t i = 0; i < ops.size(); ++i)
         if (ops[i].type.known && !ops[i].type.zero && !(ops[i].type.dim == *result.reference))
             result.odd.push_back(i);
+    return result;
+}
+
+// Nearly every meeting point agrees, and outside the argument of ln, exp or sin that is found
+// here in one pass over the operands, as find_agreement_in_full's own first pass finds it,
+// without its frame; anything else is left to it.
+[[gnu::always_inline]] inline agreement find_agreement(std::span<const operand> ops,
+                                                       bool prefer_dimensionless = false) {
+    if (prefer_dimensionless)
+        return find_agreement_in_full(ops, prefer_dimensionless);
+    const operand* first_known = nullptr;
+    for (const auto& op : ops) {
+        if (!op.type.known || op.type.zero)
+            continue;
+        if (first_known == nullptr)
+            first_known = &op;
+        else if (!(op.type.dim == first_known->type.dim))
+            return find_agreement_in_full(ops, prefer_dimensionless);
+    }
+    agreement result;
+    if (first_known != nullptr)
+        result.reference = first_known->type.dim;
     return result;
 }
 
@@ -440,6 +466,13 @@ class checker {
     // from where it started.
     typed_term eval(std::uint32_t index) {
         const auto start = static_cast<std::uint32_t>(literals_.size());
+        // (x) is x: its parentheses are stepped through here rather than evaluated as a node
+        // of their own, which would set the same literal range a second time.
+        while (file_.nodes[index].kind == expr_kind::group) {
+            if (index == prefer_dimensionless_)
+                prefer_dimensionless_ = file_.nodes[index].lhs;
+            index = file_.nodes[index].lhs;
+        }
         typed_term t = eval_node(index);
         t.literal_begin = start;
         t.literal_count = static_cast<std::uint32_t>(literals_.size()) - start;
@@ -511,6 +544,14 @@ class checker {
         typed_term base = kept != nullptr ? *kept : eval(n.lhs);
         if (kept != nullptr)
             base.literal_begin = static_cast<std::uint32_t>(literals_.size());
+        const syntax::expr_node& e = file_.nodes[n.rhs];
+        if (e.kind == expr_kind::number) {
+            // V^2: the exponent's own number is no factor of the power, and apply_power would
+            // only drop it from the literal stack again, so it is read without going there.
+            typed_term exponent = number_type(read_number(text(e.range)));
+            exponent.literal_begin = static_cast<std::uint32_t>(literals_.size());
+            return apply_power(base, exponent, n.lhs, n.rhs);
+        }
         const typed_term exponent = eval(n.rhs);
         return apply_power(base, exponent, n.lhs, n.rhs);
     }
@@ -722,7 +763,20 @@ class checker {
     const typed_term* side_hint_ = nullptr;
     std::uint32_t side_hint_node_ = syntax::no_index;
 
-    std::string_view text(span s) const { return file_.source->text(s); }
+    // Inline: every symbol and call is looked up by its text, and a call here cost more than
+    // the view it makes.
+    [[gnu::always_inline]] std::string_view text(span s) const { return file_.source->text(s); }
+
+    // The literal stack cut back to `count`, as resize would: the numbers are trivially
+    // destroyed, so a cut (nearly every one) is a few pointer decrements here, inline, where
+    // resize is a call.
+    [[gnu::always_inline]] void cut_literals_to(std::size_t count) {
+        static_assert(std::is_trivially_destructible_v<scale_literal>);
+        if (count > literals_.size()) [[unlikely]]
+            literals_.resize(count);
+        while (literals_.size() > count)
+            literals_.pop_back();
+    }
 
     // An operand's type, on the type stack; shared with an equal one of the same meeting point
     // where there are many, since looking for one costs more than a short one saves.
@@ -853,7 +907,7 @@ class checker {
         if (!a.odd.empty() || !a.reference || !(*a.reference == pressure)) {
             for (std::size_t i = 0; i < count; ++i)
                 const_cast<typed_term&>(operands_[base + i].type) = saved_types[i];
-            literals_.resize(literal_from);
+            cut_literals_to(literal_from);
             literals_.insert(literals_.end(), saved_literals.begin(), saved_literals.end());
             out_.erase(out_.begin() + static_cast<std::ptrdiff_t>(findings_before), out_.end());
             return false;
@@ -1086,12 +1140,17 @@ class checker {
         return t;
     }
 
-    [[gnu::noinline]] typed_term eval_number(const syntax::expr_node& n, std::uint32_t index) {
+    static typed_term number_type(const number_reading& reading) {
         typed_term t;
         t.numeric = true;
-        const number_reading& reading = read_number(text(n.range));
         t.value = reading.value;
         t.zero = reading.zero;
+        return t;
+    }
+
+    [[gnu::noinline]] typed_term eval_number(const syntax::expr_node& n, std::uint32_t index) {
+        const number_reading& reading = read_number(text(n.range));
+        typed_term t = number_type(reading);
         if (!t.zero) {
             literals_.push_back(reading.literal);
             literals_.back().node = index;
@@ -1163,7 +1222,7 @@ class checker {
     // A symbol's type as its entry keeps it, marked used as eval_symbol marks it; null where
     // eval_symbol has more to do (not a symbol, undeclared, first use). Valid until the next
     // symbol is declared, which no check does.
-    const typed_term* kept_symbol_type(std::uint32_t index) {
+    [[gnu::always_inline]] const typed_term* kept_symbol_type(std::uint32_t index) {
         const syntax::expr_node& n = file_.nodes[index];
         if (n.kind != expr_kind::symbol)
             return nullptr;
@@ -1279,11 +1338,11 @@ class checker {
             note_atmosphere_in_another_unit(d, terms, a);
             note_scale_zero_beside_difference(d, terms, a);
             note_gravity_in_other_units(d, terms, a);
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
             return unknown_type();
         }
         if (!result.known) {
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
             return unknown_type(inferred);
         }
         if (a.reference)
@@ -1292,7 +1351,7 @@ class checker {
             result.value.reset();
         if (result.numeric) {
             // A sum of numbers is one number: physics or a conversion as a whole.
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
             if (result.value && !result.value->is_zero())
                 literals_.push_back(read_literal(text(file_.nodes[index].range),
                                                  result.value->to_double(), index, result.value));
@@ -1308,7 +1367,7 @@ class checker {
         result.scale = check_scales(terms, "terms of this sum", unit, &result.exact_scale)
                            ? unit
                            : std::numeric_limits<double>::quiet_NaN();
-        literals_.resize(literal_base);
+        cut_literals_to(literal_base);
         int points = 0;
         for (const auto& t : terms)
             if (t.type.point)
@@ -1791,12 +1850,17 @@ class checker {
                 }
             }
         } else if (!(has_shift && converted_alike(terms, shifted, result.dim, unit))) {
+            // Where every term has a unit (p_2 + ρ*g*Δz, T_1 - T_2), they are the terms
+            // themselves, in order: no list to allocate.
             std::vector<operand> unit_operands;
-            for (const auto& t : terms)
-                if (t.type.known && !t.type.zero && !is_shift_candidate(t))
-                    unit_operands.push_back(t);
-            if (!check_scales(unit_operands, "terms of this sum", unit)) {
-                literals_.resize(literal_base);
+            if (unit_terms != terms.size())
+                for (const auto& t : terms)
+                    if (t.type.known && !t.type.zero && !is_shift_candidate(t))
+                        unit_operands.push_back(t);
+            if (!check_scales(unit_terms == terms.size() ? terms
+                                                         : std::span<const operand>(unit_operands),
+                              "terms of this sum", unit)) {
+                cut_literals_to(literal_base);
                 return unknown_type();
             }
         }
@@ -1815,12 +1879,12 @@ class checker {
         }
         if (has_shift && !shifted_to_a_zero && points == 0 && unit_terms >= 2 &&
             report_zero_beside_difference_of_readings(terms, unit, result.dim)) {
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
             return unknown_type();
         }
         if (has_shift && !shifted_to_a_zero && points == 1 && std::abs(origin) <= 1e-9 &&
             report_zero_added_twice(terms, unit, result.dim)) {
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
             return unknown_type();
         }
         if (has_shift && !shifted_to_a_zero && points == 1) {
@@ -1844,7 +1908,7 @@ class checker {
                                                    "(... + {})",
                                                    display_text(file_.nodes[t.node].range)),
                                        {}});
-                    literals_.resize(literal_base);
+                    cut_literals_to(literal_base);
                     return unknown_type();
                 }
                 // "(T - 20)": the difference from a reference reading, where a factor.
@@ -1857,10 +1921,10 @@ class checker {
             std::copy(literals_.begin() + term.type.literal_begin,
                       literals_.begin() + term.type.literal_begin + term.type.literal_count,
                       literals_.begin() + static_cast<std::ptrdiff_t>(literal_base));
-            literals_.resize(literal_base + term.type.literal_count);
+            cut_literals_to(literal_base + term.type.literal_count);
             unit = terms[only].type.scale;
         } else {
-            literals_.resize(literal_base);
+            cut_literals_to(literal_base);
         }
         result.scale = unit;
         result.exact_scale.reset();
@@ -1896,7 +1960,7 @@ class checker {
                     return result;
                 }
                 report_mixed_scales(terms, final_origin);
-                literals_.resize(literal_base);
+                cut_literals_to(literal_base);
                 return unknown_type();
             }
             result.absolute_pressure_difference =
@@ -2202,8 +2266,9 @@ class checker {
     // Terms of one dimension in different units give numbers off by a factor, unless numbers
     // in the formula supply that conversion, the right way round. `unit` receives the SI value
     // of the unit they agree in. False when a finding was reported.
-    bool check_scales(std::span<const operand> ops, std::string_view what, double& unit,
-                      optional_rational* exact_unit = nullptr) {
+    [[gnu::always_inline]] bool check_scales(std::span<const operand> ops, std::string_view what,
+                                             double& unit,
+                                             optional_rational* exact_unit = nullptr) {
         if (exact_unit != nullptr)
             exact_unit->reset();
         // Fast path: nearly every meeting point has one unit and no numbers to weigh. Where
@@ -2243,9 +2308,16 @@ class checker {
                     *exact_unit = exact_first != nullptr ? *exact_first : rational(1);
                 return true;
             }
-            if (with_numbers && units_agree_with_plain_numbers(ops, unit))
-                return true;
+            return reconcile_scales(ops, what, unit, with_numbers);
         }
+    }
+
+    // check_scales past its fast path, out of line so that the meeting points it settles do
+    // not pay for this one's frame.
+    [[gnu::noinline]] bool reconcile_scales(std::span<const operand> ops, std::string_view what,
+                                            double& unit, bool with_numbers) {
+        if (with_numbers && units_agree_with_plain_numbers(ops, unit))
+            return true;
         const std::size_t base = scaled_.size();
         bool dimensionless = false;
         for (std::size_t i = 0; i < ops.size(); ++i) {
@@ -2661,7 +2733,18 @@ class checker {
     }
 
     // "T_K = T_C": readings on scales with different zeros set equal or compared.
-    void check_origins(std::span<const operand> sides, bool equation) {
+    [[gnu::always_inline]] void check_origins(std::span<const operand> sides, bool equation) {
+        // Nearly every formula: no scale's zero as a reading, no weighted readings and every
+        // origin absolute, where each step of compare_origins does nothing. One pass says so.
+        // A loop of its own: std::all_of was left a call.
+        for (const operand& side : sides)
+            if (side.type.zero_of != nullptr || side.type.weighted_sum || side.type.origin != 0.0) {
+                compare_origins(sides, equation);
+                return;
+            }
+    }
+
+    [[gnu::noinline]] void compare_origins(std::span<const operand> sides, bool equation) {
         if (report_scale_zero_beside_difference(sides))
             return;
         for (const auto& side : sides)
@@ -3152,71 +3235,80 @@ class checker {
                 for (std::uint32_t i = 0; i < t.literal_count; ++i)
                     literals_[t.literal_begin + i].exponent =
                         -literals_[t.literal_begin + i].exponent;
-            // An offset value may be scaled by a pure number (the mean (T_1 + T_2)/2), not
-            // multiplied by a quantity, nor by a `?` coefficient (which has a dimension).
-            const auto scales_a_reading = [](const typed_term& reading, const typed_term& other) {
-                return reading.known && reading.offset != nullptr &&
-                       (other.known ? !other.numeric : other.inferred);
-            };
-            const bool left_off = scales_a_reading(result, t);
-            const bool right_off =
-                scales_a_reading(t, result) && !(result.known && result.numeric && !divided);
-            const bool gauge_over_something =
-                (left_off || (right_off && !divided)) &&
-                compact_dimension((left_off ? result : t).offset->dim()) == pressure_dimension();
-            if (gauge_over_something) {
-                if (!gauge_in_product)
-                    gauge_in_product = deferred_offset{
-                        left_off ? offset_node : op.rhs, left_off ? result.offset : t.offset,
-                        divided ? "used in a quotient" : "multiplied"};
-            } else if (left_off || right_off) {
-                report_offset(left_off ? offset_node : op.rhs,
-                              left_off ? *result.offset : *t.offset,
-                              divided ? "used in a quotient" : "multiplied",
-                              left_off ? (t.known ? &t.dim : nullptr)
-                                       : (result.known ? &result.dim : nullptr));
-                spine_.resize(spine_base);
-                result = unknown_type();
-                return result; // the one return object, built in place
-            }
-            if (t.offset != nullptr) {
-                result.offset = t.offset;
-                result.origin = t.origin;
-                result.origin_tolerance = t.origin_tolerance;
-                offset_node = op.rhs;
-            }
-            // A reading's weight follows the numbers that scale it: (T_1 + T_2)/2 weighs 1.
-            if (result.point && t.numeric && t.value && !t.value->is_zero()) {
-                scale_weight(result, divided ? rational(1) / *t.value : *t.value);
-            } else if (t.point && result.numeric && result.value && !divided) {
-                const rational by = *result.value;
-                result.weight_numerator = t.weight_numerator;
-                result.weight_denominator = t.weight_denominator;
-                result.weighted_sum = t.weighted_sum;
-                scale_weight(result, by);
-            }
-            // A reading scaled by a number is still a reading; times a quantity it is not. An
-            // absolute temperature times a pure ratio is one too (T_1*(p_2/p_1)^n, the
-            // temperature after compression), with a weight no longer followed. Not a pressure:
-            // an allowable stress declared in psi times a joint efficiency (S*E) is no reading.
-            const auto ratio_of = [](const typed_term& by) {
-                return by.known && !by.numeric && by.offset == nullptr && !by.point &&
-                       by.dim.is_dimensionless();
-            };
-            const auto absolute_temperature = [](const typed_term& reading) {
-                return reading.point && reading.offset == nullptr &&
-                       reading.dim == temperature_dimension();
-            };
-            const bool absolute_reading_by_ratio =
-                (absolute_temperature(result) && ratio_of(t) && !divided) ||
-                (absolute_temperature(t) && ratio_of(result));
-            if (absolute_reading_by_ratio)
-                result.weight_denominator = 0;
-            result.point = (result.point && t.numeric) || (t.point && result.numeric) ||
-                           absolute_reading_by_ratio;
-            if (!result.point) {
+            // Nearly every factor, and the product so far, is neither a reading nor on an
+            // offset scale, where the rules below have nothing to do but say so.
+            if (result.offset == nullptr && t.offset == nullptr && !result.point && !t.point) {
                 result.origin = 0.0;
                 result.origin_tolerance = 0.0;
+            } else {
+                // An offset value may be scaled by a pure number (the mean (T_1 + T_2)/2), not
+                // multiplied by a quantity, nor by a `?` coefficient (which has a dimension).
+                const auto scales_a_reading = [](const typed_term& reading,
+                                                 const typed_term& other) {
+                    return reading.known && reading.offset != nullptr &&
+                           (other.known ? !other.numeric : other.inferred);
+                };
+                const bool left_off = scales_a_reading(result, t);
+                const bool right_off =
+                    scales_a_reading(t, result) && !(result.known && result.numeric && !divided);
+                const bool gauge_over_something =
+                    (left_off || (right_off && !divided)) &&
+                    compact_dimension((left_off ? result : t).offset->dim()) ==
+                        pressure_dimension();
+                if (gauge_over_something) {
+                    if (!gauge_in_product)
+                        gauge_in_product = deferred_offset{
+                            left_off ? offset_node : op.rhs, left_off ? result.offset : t.offset,
+                            divided ? "used in a quotient" : "multiplied"};
+                } else if (left_off || right_off) {
+                    report_offset(left_off ? offset_node : op.rhs,
+                                  left_off ? *result.offset : *t.offset,
+                                  divided ? "used in a quotient" : "multiplied",
+                                  left_off ? (t.known ? &t.dim : nullptr)
+                                           : (result.known ? &result.dim : nullptr));
+                    spine_.resize(spine_base);
+                    result = unknown_type();
+                    return result; // the one return object, built in place
+                }
+                if (t.offset != nullptr) {
+                    result.offset = t.offset;
+                    result.origin = t.origin;
+                    result.origin_tolerance = t.origin_tolerance;
+                    offset_node = op.rhs;
+                }
+                // A reading's weight follows the numbers that scale it: (T_1 + T_2)/2 weighs 1.
+                if (result.point && t.numeric && t.value && !t.value->is_zero()) {
+                    scale_weight(result, divided ? rational(1) / *t.value : *t.value);
+                } else if (t.point && result.numeric && result.value && !divided) {
+                    const rational by = *result.value;
+                    result.weight_numerator = t.weight_numerator;
+                    result.weight_denominator = t.weight_denominator;
+                    result.weighted_sum = t.weighted_sum;
+                    scale_weight(result, by);
+                }
+                // A reading scaled by a number is still a reading; times a quantity it is not.
+                // An absolute temperature times a pure ratio is one too (T_1*(p_2/p_1)^n, the
+                // temperature after compression), with a weight no longer followed. Not a
+                // pressure: an allowable stress in psi times a joint efficiency (S*E) is none.
+                const auto ratio_of = [](const typed_term& by) {
+                    return by.known && !by.numeric && by.offset == nullptr && !by.point &&
+                           by.dim.is_dimensionless();
+                };
+                const auto absolute_temperature = [](const typed_term& reading) {
+                    return reading.point && reading.offset == nullptr &&
+                           reading.dim == temperature_dimension();
+                };
+                const bool absolute_reading_by_ratio =
+                    (absolute_temperature(result) && ratio_of(t) && !divided) ||
+                    (absolute_temperature(t) && ratio_of(result));
+                if (absolute_reading_by_ratio)
+                    result.weight_denominator = 0;
+                result.point = (result.point && t.numeric) || (t.point && result.numeric) ||
+                               absolute_reading_by_ratio;
+                if (!result.point) {
+                    result.origin = 0.0;
+                    result.origin_tolerance = 0.0;
+                }
             }
             result.inferred = result.inferred || t.inferred;
             has_gravity = has_gravity || (t.known && !divided && t.dim == acceleration_dimension());
@@ -3318,12 +3410,12 @@ class checker {
             return unknown_type();
         }
         // The exponent's own numbers are not factors of the power; the base's are, raised.
-        literals_.resize(base.literal_begin + base.literal_count);
+        cut_literals_to(base.literal_begin + base.literal_count);
         if (exponent.value)
             for (std::uint32_t i = 0; i < base.literal_count; ++i)
                 literals_[base.literal_begin + i].exponent *= exponent.value->to_double();
         else
-            literals_.resize(base.literal_begin);
+            cut_literals_to(base.literal_begin);
         if (!base.known || !exponent.known)
             return unknown_type(base.inferred || exponent.inferred);
         if (base.offset != nullptr && !base.reading_or_difference &&
@@ -3405,7 +3497,7 @@ class checker {
         const std::size_t args_base = operands_.size();
         const std::size_t types_base = types_.size();
         const bool square_root = f != nullptr && f->rule == function_rule::root &&
-                                 f->power == rational(1, 2) && n.rhs == 1;
+                                 f->power.num() == 1 && f->power.den() == 2 && n.rhs == 1;
         for (std::uint32_t i = 0; i < n.rhs; ++i) {
             const std::uint32_t node = file_.call_args[n.lhs + i];
             const std::uint32_t saved = prefer_dimensionless_;
@@ -3423,10 +3515,10 @@ class checker {
         // Only a root or abs passes its argument's numbers on, as factors of the result.
         const auto keep_first_argument_numbers = [&](double power) {
             if (args.empty()) {
-                literals_.resize(literal_start);
+                cut_literals_to(literal_start);
                 return;
             }
-            literals_.resize(args[0].type.literal_begin + args[0].type.literal_count);
+            cut_literals_to(args[0].type.literal_begin + args[0].type.literal_count);
             for (std::uint32_t i = 0; i < args[0].type.literal_count; ++i)
                 literals_[args[0].type.literal_begin + i].exponent *= power;
         };
@@ -3514,13 +3606,13 @@ class checker {
                 else if (require_dimensionless(*f, a))
                     require_unit_free(*f, a);
             }
-            literals_.resize(literal_start);
+            cut_literals_to(literal_start);
             return result;
         case function_rule::angle_of:
         case function_rule::common: {
             const agreement a = find_agreement(args);
             if (!a.odd.empty()) {
-                literals_.resize(literal_start);
+                cut_literals_to(literal_start);
                 diagnostic& d =
                     report(rules::argument_mismatch,
                            fmt::format("the arguments of {} differ in dimension", f->name),
@@ -3531,7 +3623,7 @@ class checker {
             double unit = 1.0;
             const bool scales_agree = check_scales(args, fmt::format("arguments of {}", f->name),
                                                    unit, &result.exact_scale);
-            literals_.resize(literal_start);
+            cut_literals_to(literal_start);
             if (f->rule == function_rule::angle_of)
                 return result;
             if (!std::all_of(args.begin(), args.end(),
@@ -3548,10 +3640,10 @@ class checker {
         case function_rule::power:
             return apply_power(args[0].type, args[1].type, args[0].node, args[1].node);
         case function_rule::derivative:
-            literals_.resize(literal_start);
+            cut_literals_to(literal_start);
             return derivative(args);
         case function_rule::integral:
-            literals_.resize(literal_start);
+            cut_literals_to(literal_start);
             return integral(args);
         default:
             return eval_sheet_call(*f, args);

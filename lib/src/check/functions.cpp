@@ -109,15 +109,48 @@ std::string_view without_prefix(std::string_view name) {
     return name;
 }
 
+// Every call of every formula looks its name up: an open-addressed table on the length and
+// the first, second and last bytes finds it with one compare rather than a search of the
+// list (these weights put each of today's names in a slot of its own; a name added later
+// that shares one is still found, a slot further on).
+constexpr std::size_t function_slot_count = 64;
+constexpr std::uint8_t no_function = 0xFF;
+
+std::size_t function_slot(std::string_view name) {
+    const auto byte = [&](std::size_t i) { return static_cast<unsigned char>(name[i]); };
+    const std::size_t second = name.size() > 1 ? 1 : 0;
+    return (name.size() + byte(0) + 2 * byte(second) + 17 * byte(name.size() - 1)) %
+           function_slot_count;
+}
+
+const std::array<std::uint8_t, function_slot_count>& function_slots() {
+    static const std::array<std::uint8_t, function_slot_count> slots = [] {
+        std::array<std::uint8_t, function_slot_count> s{};
+        s.fill(no_function);
+        for (std::size_t k = 0; k < table().size(); ++k) {
+            std::size_t i = function_slot(table()[k].name);
+            while (s[i] != no_function)
+                i = (i + 1) % function_slot_count;
+            s[i] = static_cast<std::uint8_t>(k);
+        }
+        return s;
+    }();
+    return slots;
+}
+
 } // namespace
 
 const builtin_function* find_function(std::string_view name) {
-    // The first byte tells most names of the same length apart without a call to compare the
-    // rest (issue 12: every call in a formula looks its name up).
-    for (const auto& f : table())
-        if (f.name.size() == name.size() && !name.empty() && f.name[0] == name[0] && f.name == name)
+    if (name.empty())
+        return nullptr;
+    const auto& slots = function_slots();
+    for (std::size_t i = function_slot(name);; i = (i + 1) % function_slot_count) {
+        if (slots[i] == no_function)
+            return nullptr;
+        const builtin_function& f = table()[slots[i]];
+        if (f.name == name)
             return &f;
-    return nullptr;
+    }
 }
 
 std::span<const builtin_function> builtin_functions() {

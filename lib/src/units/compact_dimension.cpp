@@ -88,6 +88,30 @@ bool compact_dimension::equal_in_arena(const compact_dimension& a, const compact
 
 compact_dimension compact_dimension::product_in_full(const compact_dimension& a,
                                                      const compact_dimension& b, bool divide) {
+    // Both fitted, one with a fractional exponent (sqrt(g*h)*V): over the common denominator
+    // and reduced, as `dimension` would add the exponents and fitted() put them back. 16-bit
+    // operands cannot overflow 64 bits here; only what does not fit goes the long way.
+    if (a.den_ != 0 && b.den_ != 0) {
+        const std::int64_t common = std::lcm<std::int64_t>(a.den_, b.den_);
+        const std::int64_t a_by = common / a.den_;
+        const std::int64_t b_by = (divide ? -1 : 1) * (common / b.den_);
+        std::array<std::int64_t, base_dimension_count> n{};
+        std::int64_t g = common;
+        for (std::size_t i = 0; i < base_dimension_count; ++i) {
+            n[i] = a.num_[i] * a_by + b.num_[i] * b_by;
+            g = std::gcd(g, n[i]);
+        }
+        compact_dimension r;
+        bool fits = common / g <= INT16_MAX;
+        r.den_ = static_cast<std::int16_t>(common / g);
+        for (std::size_t i = 0; i < base_dimension_count && fits; ++i) {
+            const std::int64_t v = n[i] / g;
+            fits = v >= INT16_MIN && v <= INT16_MAX;
+            r.num_[i] = static_cast<std::int16_t>(v);
+        }
+        if (fits)
+            return r;
+    }
     return compact_dimension(divide ? a.expand() / b.expand() : a.expand() * b.expand());
 }
 
@@ -114,6 +138,17 @@ compact_dimension compact_dimension::pow(rational p) const {
             r.num_[i] = static_cast<std::int16_t>(v);
         }
         if (fits)
+            return r;
+    }
+    // sqrt(g*h), cbrt(V): a root of whole exponents that it divides, without a gcd.
+    if (den_ == 1 && p.num() == 1 && p.den() <= INT16_MAX) {
+        compact_dimension r;
+        bool divides = true;
+        for (std::size_t i = 0; i < base_dimension_count; ++i) {
+            divides = divides && num_[i] % p.den() == 0;
+            r.num_[i] = static_cast<std::int16_t>(num_[i] / p.den());
+        }
+        if (divides)
             return r;
     }
     // A fractional exponent or power (sqrt, ^(2/3)): (n/d)·(pn/pd) over the common
