@@ -196,4 +196,20 @@ TEST_CASE("no caret or tilde runs, and the odd term differs from the rest withou
     CHECK(text.find("└──a──┘") != std::string::npos);
 }
 
+TEST_CASE("a workbook's finding is placed by its sheet and cell on one line too") {
+    // The one-line form is what a commit hook prints: it must name a place the engineer can
+    // open, Sheet!Cell, not a line of plumb's listing of the formulas.
+    source_file listing("pump.xlsx", "=C3/1000\n=C4*2\n");
+    listing.set_cell_places({{"Pump", "C8"}, {"Pump data", "D9"}});
+    diagnostic d = finding(at(listing, "C4*2"));
+    d.rule = "unit-scale";
+    d.level = plumb::severity::error;
+    CHECK(plumb::render_one_line(d) ==
+          "pump.xlsx:'Pump data'!D9: error: a test finding [unit-scale]");
+    CHECK(plumb::render_text(d).starts_with("pump.xlsx:'Pump data'!D9: error:"));
+    // A notation file keeps its line and column.
+    const source_file notation("pump.plumb", "H = a + t\n");
+    CHECK(plumb::render_one_line(finding(at(notation, "t"))).starts_with("pump.plumb:1:9: error:"));
+}
+
 TEST_SUITE_END();

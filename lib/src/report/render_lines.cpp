@@ -1,6 +1,8 @@
 // Short forms of findings: one line each, for hooks and for findings already reviewed.
 #include "plumb/render.hpp"
 
+#include "report/place.hpp"
+
 #include <fmt/format.h>
 
 namespace plumb {
@@ -10,26 +12,20 @@ std::string_view level_word(severity s) {
     return s == severity::error ? "error" : s == severity::warning ? "warning" : "note";
 }
 
-std::string place(const location& where) {
-    if (where.file == nullptr)
-        return "plumb";
-    const line_column p = where.file->position(where.range.begin);
-    return fmt::format("{}:{}:{}", where.file->path(), p.line, p.column);
-}
-
 } // namespace
 
 std::string render_one_line(const diagnostic& d) {
-    return fmt::format("{}: {}: {} [{}]", place(d.where), level_word(d.level), d.message, d.rule);
+    return fmt::format("{}: {}: {} [{}]", place_text(d.where), level_word(d.level), d.message,
+                       d.rule);
 }
 
 std::string render_accepted_line(const diagnostic& d) {
     if (!d.accepted)
         return render_one_line(d);
-    return fmt::format("{}: accepted {}: {} [{}]\n    reason ({} {}): {}", place(d.where),
+    return fmt::format("{}: accepted {}: {} [{}]\n    reason ({} {}): {}", place_text(d.where),
                        level_word(d.level), d.message, d.rule,
-                       d.accepted->by_inline_mark ? "mark at" : "entry at", place(d.accepted->mark),
-                       d.accepted->reason);
+                       d.accepted->by_inline_mark ? "mark at" : "entry at",
+                       place_text(d.accepted->mark), d.accepted->reason);
 }
 
 std::string render_quiet(const check_report& report, severity fail_on) {

@@ -3,6 +3,7 @@
 
 #include "report/excerpt.hpp"
 #include "report/palette.hpp"
+#include "report/place.hpp"
 
 #include <fmt/format.h>
 
@@ -17,15 +18,7 @@ std::string_view caution_text() {
 std::string render_text(const diagnostic& d, const text_style& style) {
     const palette::painter paint{style.colour};
     std::string out;
-    if (d.where.file != nullptr && d.where.file->cell_at(d.where.range.begin) != nullptr) {
-        out += fmt::format("{}:{}:", d.where.file->path(),
-                           cell_text(*d.where.file->cell_at(d.where.range.begin)));
-    } else if (d.where.file != nullptr) {
-        const line_column p = d.where.file->position(d.where.range.begin);
-        out += fmt::format("{}:{}:{}:", d.where.file->path(), p.line, p.column);
-    } else {
-        out += "plumb:";
-    }
+    out += place_text(d.where) + ":";
     const std::string_view level = d.level == severity::error     ? "error:"
                                    : d.level == severity::warning ? "warning:"
                                                                   : "note:";
