@@ -144,6 +144,20 @@ TEST_CASE("sarif: the SARIF Multitool finds no error in plumb's SARIF 2.1.0") {
     CHECK(contains(made.out, "\"suppressions\""));
     CHECK(contains(made.out, "\"relatedLocations\""));
 
+    // A workbook's findings: the workbook as the artifact, its sheet and cell as a logical
+    // location, and no line or column of plumb's own listing of its formulas.
+    const fs::path book =
+        fs::path(PLUMB_SOURCE_DIR) / "corpus" / "sheets" / "review" / "separator-tank.xlsx";
+    fs::copy_file(book, dir.path() / "separator-tank.xlsx");
+    fs::copy_file(book.parent_path() / "separator-tank.cells.plumb",
+                  dir.path() / "separator-tank.cells.plumb");
+    const auto sheet = run_process(
+        {PLUMB_CLI_PATH, "check", "--format", "sarif", "separator-tank.xlsx"}, dir.path());
+    REQUIRE(sheet.status == 1);
+    for (const auto& e : validation_errors(dir, dir.write("sheet.sarif", sheet.out)))
+        FAIL_CHECK(e);
+    CHECK(contains(sheet.out, "\"fullyQualifiedName\": \"Separator!C16\""));
+
     // The validator does find errors where there are some: this check can fail.
     const fs::path broken =
         dir.write("broken.sarif", "{\"version\": \"2.1.0\", \"runs\": [{\"results\": []}]}\n");

@@ -114,19 +114,29 @@ class sarif_writer {
         return 0;
     }
 
+    // "physicalLocation": the file and, in a text file, the region. A workbook's cell has no
+    // line and column a viewer could open (those are in plumb's listing of its formulas), so it
+    // is the workbook alone, with the sheet and cell as a logical location beside it.
     std::string physical(const location& where) const {
         const std::string relative = project_relative(where.file->path(), root_);
         const bool under_root = !relative.empty() && relative.front() != '/';
+        const std::string artifact =
+            fmt::format("{{\"uri\": {}{}}}",
+                        str(under_root ? uri_path(relative) : "file://" + uri_path(relative)),
+                        under_root ? fmt::format(", \"uriBaseId\": {}", str(root_base_id)) : "");
+        if (const cell_place* cell = where.file->cell_at(where.range.begin))
+            return fmt::format("\"physicalLocation\": {{\"artifactLocation\": {}}}, "
+                               "\"logicalLocations\": [{{\"name\": {}, "
+                               "\"fullyQualifiedName\": {}}}]",
+                               artifact, str(cell->cell), str(cell_text(*cell)));
         const line_column b = where.file->position(where.range.begin);
         const line_column e = where.file->position(where.range.end);
         // SARIF's endColumn is the column after the region, as ours is; an empty region ends
         // where it starts.
-        return fmt::format(
-            "{{\"artifactLocation\": {{\"uri\": {}{}}}, \"region\": {{\"startLine\": {}, "
-            "\"startColumn\": {}, \"endLine\": {}, \"endColumn\": {}}}}}",
-            str(under_root ? uri_path(relative) : "file://" + uri_path(relative)),
-            under_root ? fmt::format(", \"uriBaseId\": {}", str(root_base_id)) : "", b.line,
-            b.column, e.line, e.column);
+        return fmt::format("\"physicalLocation\": {{\"artifactLocation\": {}, \"region\": "
+                           "{{\"startLine\": {}, \"startColumn\": {}, \"endLine\": {}, "
+                           "\"endColumn\": {}}}}}",
+                           artifact, b.line, b.column, e.line, e.column);
     }
 
     void result(std::string& out, const diagnostic& d) const {
@@ -137,21 +147,17 @@ class sarif_writer {
                            "\"message\": {{\"text\": {}}}",
                            str(d.rule), rule_index(d.rule), level_of(d.level), str(text));
         if (d.where.file != nullptr)
-            out += fmt::format(",\n        \"locations\": [{{\"physicalLocation\": {}}}]",
-                               physical(d.where));
+            out += fmt::format(",\n        \"locations\": [{{{}}}]", physical(d.where));
         std::vector<std::string> related;
         for (const auto& t : d.terms)
             if (t.where.file != nullptr)
                 related.push_back(fmt::format(
-                    "{{\"id\": {}, \"physicalLocation\": {}, \"message\": {{\"text\": {}}}}}",
-                    related.size(), physical(t.where),
-                    str(fmt::format("'{}' is {}", t.text, t.dim.to_string()))));
+                    "{{\"id\": {}, {}, \"message\": {{\"text\": {}}}}}", related.size(),
+                    physical(t.where), str(fmt::format("'{}' is {}", t.text, t.dim.to_string()))));
         for (const auto& n : d.notes)
             if (n.where.file != nullptr)
-                related.push_back(
-                    fmt::format("{{\"id\": {}, \"physicalLocation\": {}, \"message\": {{\"text\": "
-                                "{}}}}}",
-                                related.size(), physical(n.where), str(n.message)));
+                related.push_back(fmt::format("{{\"id\": {}, {}, \"message\": {{\"text\": {}}}}}",
+                                              related.size(), physical(n.where), str(n.message)));
         if (!related.empty()) {
             out += ",\n        \"relatedLocations\": [";
             for (std::size_t i = 0; i < related.size(); ++i)
@@ -166,8 +172,7 @@ class sarif_writer {
                                d.accepted->by_inline_mark ? "inSource" : "external",
                                str(d.accepted->reason));
             if (d.accepted->mark.file != nullptr)
-                out += fmt::format(", \"location\": {{\"physicalLocation\": {}}}",
-                                   physical(d.accepted->mark));
+                out += fmt::format(", \"location\": {{{}}}", physical(d.accepted->mark));
             out += "}]";
         }
         out += "}";
