@@ -314,3 +314,25 @@ TEST_CASE("workbook parity: a heat flow times a °C reading is told to take the 
     CHECK(d->notes.front().message.find("multiplies a temperature difference") !=
           std::string::npos);
 }
+
+TEST_CASE("workbook cells checked are listed with their result when formulas are recorded") {
+    // The JSON lists every formula checked, the passing ones too, so a tool reading it can see
+    // which cells were looked at; a workbook's cells count as its formulas.
+    plumb::test::temp_dir dir;
+    const auto path = dir.write(
+        "S.xlsx", plumb::test::xlsx_of_one_sheet(
+                      "S", sheet_of({{"17.28", "m"}, {"=B2*1000", "mm"}, {"=B2*1000", "m"}})));
+    plumb::check_options options;
+    options.record_formulas = true;
+    const check_report r = plumb::check_paths({path}, options);
+    REQUIRE(r.formulas.size() == 2);
+    std::vector<std::string> graded;
+    for (const auto& f : r.formulas) {
+        const plumb::cell_place* c = f.where.file->cell_at(f.where.range.begin);
+        REQUIRE(c != nullptr);
+        graded.push_back(cell_text(*c) + " " +
+                         (f.worst ? std::string(f.worst == severity::error ? "error" : "other")
+                                  : std::string("passed")));
+    }
+    CHECK(graded == std::vector<std::string>{"S!B3 passed", "S!B4 error"});
+}

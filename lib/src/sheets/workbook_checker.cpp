@@ -70,8 +70,8 @@ constexpr std::uint64_t book_key(std::size_t sheet, cell_address a) {
 class workbook_checker {
   public:
     workbook_checker(const workbook& book, const std::string& path, const outside_units& units,
-                     check_report& report)
-        : book_(book), path_(path), units_(units), report_(report) {}
+                     check_report& report, bool record_cells)
+        : book_(book), path_(path), units_(units), report_(report), record_cells_(record_cells) {}
 
     void run() {
         collect_formulas();
@@ -79,16 +79,47 @@ class workbook_checker {
         lower_all();
         equation_.make_room();
         order_and_check();
+        const std::size_t first_finding = report_.diagnostics.size();
         report_unitless_inputs();
+        if (record_cells_)
+            record_checked_cells(first_finding);
         ++report_.workbooks_checked;
         report_.files_checked += 1;
     }
 
   private:
+    // Each formula cell checked, as the notation's formulas are recorded: its place and the
+    // most severe finding in it, so that the JSON lists the cells that passed too.
+    void record_checked_cells(std::size_t first_finding) {
+        std::vector<std::pair<std::uint32_t, severity>> starts;
+        for (std::size_t i = first_finding; i < report_.diagnostics.size(); ++i) {
+            const diagnostic& d = report_.diagnostics[i];
+            if (d.where.file == listing_)
+                starts.emplace_back(d.where.range.begin, d.level);
+        }
+        std::sort(starts.begin(), starts.end());
+        std::sort(checked_cells_.begin(), checked_cells_.end(),
+                  [&](std::uint32_t a, std::uint32_t b) {
+                      return formulas_[a].text.begin < formulas_[b].text.begin;
+                  });
+        for (const std::uint32_t id : checked_cells_) {
+            formula_record r;
+            r.where = {listing_, formulas_[id].text};
+            auto it = std::lower_bound(starts.begin(), starts.end(),
+                                       std::pair{r.where.range.begin, severity::note});
+            for (; it != starts.end() && it->first <= r.where.range.end; ++it)
+                if (!r.worst || *r.worst < it->second)
+                    r.worst = it->second;
+            report_.formulas.push_back(std::move(r));
+        }
+    }
+
     const workbook& book_;
     const std::string& path_;
     const outside_units& units_;
     check_report& report_;
+    bool record_cells_ = false;
+    std::vector<std::uint32_t> checked_cells_; // formula ids, with record_cells_
 
     struct formula_cell {
         std::size_t sheet;
@@ -533,6 +564,8 @@ class workbook_checker {
                 take_verdict(*verdict, f, formula);
                 ++report_.cells_checked;
                 ++report_.formulas_checked;
+                if (record_cells_)
+                    checked_cells_.push_back(id);
                 return;
             }
         }
@@ -551,6 +584,8 @@ class workbook_checker {
         }
         ++report_.cells_checked;
         ++report_.formulas_checked;
+        if (record_cells_)
+            checked_cells_.push_back(id);
         if (computed && !written) {
             f.result.dim = computed->dim;
             f.result.scale = computed->scale;
@@ -1124,8 +1159,8 @@ class workbook_checker {
 } // namespace
 
 void check_workbook(const workbook& book, const std::string& path, const outside_units& units,
-                    check_report& report) {
-    workbook_checker(book, path, units, report).run();
+                    check_report& report, bool record_cells) {
+    workbook_checker(book, path, units, report, record_cells).run();
 }
 
 } // namespace plumb::sheets

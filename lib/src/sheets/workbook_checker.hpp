@@ -35,8 +35,9 @@ struct outside_units {
     std::string measures;
 };
 
-// Appends the findings to report.diagnostics and the listing to report.sources.
+// Appends the findings to report.diagnostics and the listing to report.sources; with
+// `record_cells`, each formula cell checked to report.formulas as well.
 void check_workbook(const workbook& book, const std::string& path, const outside_units& units,
-                    check_report& report);
+                    check_report& report, bool record_cells = false);
 
 } // namespace plumb::sheets

@@ -269,7 +269,7 @@ void check_workbook_bytes(std::string_view bytes, const fs::path& path, const fs
     for (const auto& dict : options.dictionaries)
         take_declarations(dict, fmt::format("the dictionary {}", dict.filename().string()), book,
                           units, report);
-    check_workbook(book, path.string(), units, report);
+    check_workbook(book, path.string(), units, report, options.record_formulas);
 }
 
 } // namespace plumb::sheets
