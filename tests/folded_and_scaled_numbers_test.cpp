@@ -229,3 +229,42 @@ TEST_CASE("words in a description that say a difference are whole words") {
         CHECK(count_of(r, plumb::rules::offset_scale) == 0);
     }
 }
+
+TEST_CASE(
+    "a spare time ratio, cancelling conversions, an exponent's units, the 120 of n = 120f/p") {
+    // 1 d = 24 h (NIST SP 811 (2008), B.8): V/Q is already in days when Q is in m³/d.
+    const std::string digester = "V : m^3\nQ : m^3/d\nt_d : d\nt_h : h\nn_h, n_d : 1\n";
+    fails_with(digester, {"@retention-spare t_d = V/Q*24"}, plumb::rules::unit_scale);
+    const auto spare = run(digester, "@retention-spare t_d = V/Q*24");
+    CHECK(first_under(spare, plumb::rules::unit_scale).message.find("24 is not needed") !=
+          std::string::npos);
+    // Needed into hours; and a count per day from a count per hour holds no time unit.
+    for (const char* formula : {"@retention-hours t_h = V/Q*24", "@counts n_d = 24*n_h"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(digester, formula)) == 0);
+    }
+    // δ = F·L³/(3·E·I) with F in kN, E in GPa, L and I in mm: the two 1000s cancel (common
+    // practice); a third is not needed.
+    const std::string beam = "δ : mm\nF : kN\nL : mm\nE : GPa\nI : mm^4\n";
+    CHECK(problems_in(run(beam, "@deflection δ = F*1000*L^3/(3*E*1000*I)")) == 0);
+    fails_with(beam, {"@deflection-spare δ = F*1000*L^3/(3*E*1000*I)*1000"},
+               plumb::rules::unit_scale);
+    // An F-value, F = t·10^((T − T_ref)/z) (common practice): z in Δ°F beside °C readings
+    // makes the exponent 5/9 of its true value (1 Δ°F = 5/9 K, NIST SP 811 (2008), B.8).
+    const std::string lethality = "F_eq, t_h : s\nt_p, t_r : °C\nz_F : Δ°F\nz_C : Δ°C\n";
+    const auto mixed = run(lethality, "@lethality-mixed F_eq = t_h*10^((t_p - t_r)/z_F)");
+    REQUIRE(count_of(mixed, plumb::rules::unit_scale) == 1);
+    CHECK(first_under(mixed, plumb::rules::unit_scale).message.find("the exponent") !=
+          std::string::npos);
+    for (const char* formula : {"@lethality F_eq = t_h*10^((t_p - t_r)/z_C)",
+                                "@lethality-converted F_eq = t_h*10^((t_p - t_r)*1.8/z_F)"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(lethality, formula)) == 0);
+    }
+    // n = 120·f/p in rpm from Hz, p the number of poles (common practice): read, with a note.
+    const std::string machine = "n_s : rpm\nf : Hz\np : 1\n";
+    const auto speed = run(machine, "@synchronous n_s = 120*f/p");
+    CHECK(problems_in(speed) == 0);
+    CHECK(count_of(speed, plumb::rules::trade_constant) == 1);
+    fails_with(machine, {"@synchronous-100 n_s = 100*f/p"}, plumb::rules::unit_scale);
+}

@@ -2256,7 +2256,8 @@ class checker {
             if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale) || op.type.numeric)
                 continue;
             for (std::uint32_t l = 0; l < op.type.literal_count; ++l)
-                if (stands_for_a_conversion(literals_[op.type.literal_begin + l], !dimensionless))
+                if (stands_for_a_conversion(literals_[op.type.literal_begin + l], !dimensionless) ||
+                    spare_time_ratio(literals_[op.type.literal_begin + l], op.type))
                     return false;
         }
         unit = first == nullptr ? 1.0 : (first->numeric ? 1.0 : first->scale);
@@ -2502,10 +2503,13 @@ class checker {
             for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
                 const scale_literal& l = parts[i].literals[k];
                 const std::optional<rational> printed = printed_power(l, 1.0);
-                if (!printed || !l.factor_like)
+                if (!printed)
                     continue;
                 for (const trade_constant& c : trade_constants()) {
-                    if (*printed < c.least || c.greatest < *printed)
+                    // A property's range is read from a number printed to three digits or more;
+                    // an exact constant (the 120 of n = 120*f/p) from its value alone.
+                    if (*printed < c.least || c.greatest < *printed ||
+                        (!l.factor_like && c.least != c.greatest))
                         continue;
                     std::vector<scale_literal> literals(parts[i].literals.begin(),
                                                         parts[i].literals.end());
@@ -2682,11 +2686,40 @@ class checker {
     // "P = E*I/L^2/1000" with P already in kN: the units agree without the factor.
     bool report_unneeded_factor(std::span<const operand> ops, std::span<const std::size_t> index,
                                 std::span<const scaled_operand> parts, bool dimensionless) {
-        for (std::size_t i = 0; i < parts.size(); ++i)
+        for (std::size_t i = 0; i < parts.size(); ++i) {
+            // V*1000*L^3/(3*E*1000*I): conversions that cancel each other are none.
+            double net = 1.0;
+            const scale_literal* first = nullptr;
             for (const auto& l : parts[i].literals)
-                if (stands_for_a_conversion(l, !dimensionless))
-                    return report_unneeded(ops[index[i]], l);
+                if (stands_for_a_conversion(l, !dimensionless) ||
+                    spare_time_ratio(l, ops[index[i]].type)) {
+                    net *= std::pow(l.value, l.exponent);
+                    if (first == nullptr)
+                        first = &l;
+                }
+            if (first != nullptr && std::abs(net - 1.0) > 1e-9)
+                return report_unneeded(ops[index[i]], *first);
+        }
         return false;
+    }
+
+    // t = V/Q*24 with t in d and Q in m³/d: a ratio of time units (24 h/d, 60, 1440, 8760, 3.6)
+    // beside units that already agree, in a quantity that holds time. Without time in it (a
+    // count per day from a count per hour, both declared 1) the number may be the formula's.
+    static bool spare_time_ratio(const scale_literal& l, const typed_term& t) {
+        if (std::abs(l.exponent) != 1.0 || !t.known)
+            return false;
+        // NIST SP 811 (2008), B.8: 1 d = 24 h = 1440 min = 86 400 s; 1 h = 60 min = 3600 s;
+        // 3.6 for m³/h and L/s, km/h and m/s; 8760 h in a (365-day) year.
+        static constexpr std::array<double, 7> ratios{24.0,    60.0,   1440.0, 3600.0,
+                                                      86400.0, 8760.0, 3.6};
+        if (std::none_of(ratios.begin(), ratios.end(), [&](double r) { return l.value == r; }))
+            return false;
+        try {
+            return !t.dim.expand().exponent(base_dimension::time).is_zero();
+        } catch (const std::exception&) {
+            return false;
+        }
     }
 
     bool report_unneeded(const operand& op, const scale_literal& l) {
@@ -3409,6 +3442,11 @@ class checker {
                 {fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}, true});
             return unknown_type();
         }
+        // 10^((t - t_ref)/z) with z in Δ°F beside °C: the exponent's units must cancel, as a
+        // function's argument's must.
+        if (exponent.known && !exponent.numeric && exponent.dim.is_dimensionless())
+            report_units_not_cancelling({exponent, exponent_node},
+                                        fmt::format("the exponent {}", quote(exponent_node)));
         // The exponent's own numbers are not factors of the power; the base's are, raised.
         cut_literals_to(base.literal_begin + base.literal_count);
         if (exponent.value)
@@ -3788,31 +3826,42 @@ class checker {
         }
     }
 
-    // A dimensionless argument written in mixed units (ln(p/p_ref) with p in kPa and p_ref in
-    // Pa) is off by the factor between them.
-    void require_unit_free(const builtin_function& f, const operand& a) {
+    // A dimensionless argument or exponent written in mixed units (ln(p/p_ref) with p in kPa
+    // and p_ref in Pa; 10^(ΔT/z) with ΔT in K and z in Δ°F) is off by the factor between them.
+    // The finding, or null where the units cancel or a factor the wrong way round was reported.
+    diagnostic* report_units_not_cancelling(const operand& a, std::string_view what) {
         if (!a.type.known || !std::isfinite(a.type.scale) || a.type.numeric)
-            return;
+            return nullptr;
         const std::array<scaled_operand, 2> parts{scaled(a.type, false), scaled_operand{}};
         if (reconcile(parts).agree)
-            return;
+            return nullptr;
         for (std::size_t k = 0; k < parts[0].literals.size() && k < 10; ++k)
             if ((looks_like_conversion(parts[0].literals[k], true) ||
                  parts[0].literals[k].factor_like) &&
                 reconcile(parts, {0, k}).agree) {
                 report_inverted_factor(a, parts[0].literals[k]);
-                return;
+                return nullptr;
             }
         diagnostic& d = report(rules::unit_scale,
-                               fmt::format("as written, the argument of {} is {} times its true "
-                                           "value: its units do not cancel",
-                                           f.name, format_factor(1.0 / apparent_scale(parts[0]))),
+                               fmt::format("as written, {} is {} times its true value: its units "
+                                           "do not cancel",
+                                           what, format_factor(1.0 / apparent_scale(parts[0]))),
                                file_.nodes[a.node].range);
         d.level = severity::warning;
         add_term(d, a);
         const std::string units = units_in(a.node);
         if (!units.empty())
             d.notes.push_back({units, {}});
+        return &d;
+    }
+
+    void require_unit_free(const builtin_function& f, const operand& a) {
+        diagnostic* found =
+            report_units_not_cancelling(a, fmt::format("the argument of {}", f.name));
+        if (found == nullptr)
+            return;
+        diagnostic& d = *found;
+        const std::array<scaled_operand, 2> parts{scaled(a.type, false), scaled_operand{}};
         // sin(β) with β in degrees: the written number is taken as radians where the formula is
         // evaluated with its numbers (a spreadsheet, a script), so say how to convert it.
         const bool trig = f.name.find("sin") != std::string_view::npos ||

@@ -24,7 +24,7 @@ rational water_density_greatest() {
 std::span<const trade_constant> trade_constants() {
     // US gallon 3.785411784 L, pound 0.45359237 kg, cubic foot 0.028316846592 m³ (NIST SP 811
     // (2008), Appendix B.8).
-    static const std::array<trade_constant, 3> table = [] {
+    static const std::array<trade_constant, 4> table = [] {
         const rational pound = parsed("0.45359237");
         const rational gallon_of_one_kg_per_litre = parsed("3.785411784") / pound;
         const rational cubic_foot_of_one_kg_per_litre = parsed("28.316846592") / pound;
@@ -38,7 +38,7 @@ std::span<const trade_constant> trade_constants() {
         const rational fan_power_high = parsed("6343.3114962");
         constexpr std::string_view for_water =
             "the result holds for water; for another liquid write its own density";
-        return std::array<trade_constant, 3>{{
+        return std::array<trade_constant, 4>{{
             {"the weight of a US gallon of water (lb/gal)",
              "a gallon at exactly 1 kg/L, which also turns mgd × mg/L into lb/d",
              gallon_of_one_kg_per_litre, gallon_of_one_kg_per_litre,
@@ -64,6 +64,12 @@ std::span<const trade_constant> trade_constants() {
              "the trade prints 6356 (common practice); water's density from the CRC Handbook "
              "of Chemistry and Physics (from memory)",
              "a gauge that reads inches of another liquid needs that liquid's density"},
+            // n = 120·f/p: 60 s/min times the 2 poles of each pair, with p the number of poles
+            // (IEC 60034-1 rates machines by poles; the formula is common practice).
+            {"the synchronous speed's 120 in n = 120*f/p (60 s/min times 2 poles a pair)",
+             "rpm from Hz (60 s/min)", parsed("60"), parsed("60"), parsed("120"), parsed("120"),
+             "120 holds where p counts poles; where it counts pole pairs the constant is 60",
+             "common practice", "with p in pole pairs write 60*f/p"},
         }};
     }();
     return table;
