@@ -695,6 +695,8 @@ TEST_CASE("golden text: the two sides of an equation differ") {
         "                 a\n"
         "    a  [M L^-1 T^-2]  pressure or stress\n"
         "  ▶ b  [M L^-2]       areal density       ◀ does not match\n"
+        "   · 'ρ*h' differs from the rest by exactly an acceleration: times g it would match; is "
+        "a g missing from it (ρ*g*h)?\n"
         "\n" +
         tail("1 error, 0 warnings (1 formula in 1 file checked)");
     CHECK(r.out == expected);
@@ -885,6 +887,8 @@ TEST_CASE("colour: always, never, and auto on a pipe") {
             "                 \x1b[38;5;109ma\x1b[0m\n"
             "    a  \x1b[38;5;109m[M L^-1 T^-2]\x1b[0m  pressure or stress\n"
             "  \x1b[38;5;202m▶ b  [M L^-2]       areal density       ◀ does not match\x1b[0m\n"
+            "   \x1b[38;5;73m·\x1b[0m 'ρ*h' differs from the rest by exactly an acceleration: "
+            "times g it would match; is a g missing from it (ρ*g*h)?\n"
             "\n"
             "\x1b[1mplumb:\x1b[0m 1 error, 0 warnings (1 formula in 1 file checked)\n"
             "\x1b[1;38;5;178mcaution:\x1b[0m " +
@@ -968,10 +972,11 @@ TEST_CASE("json: the report is valid JSON with every field") {
     CHECK(terms[1]["exponents"]["length"].string() == "-2");
 
     const auto& notes = (*side)["notes"].array();
-    REQUIRE(notes.size() == 2);
+    REQUIRE(notes.size() == 3);
     CHECK(notes[0]["message"].string() ==
           "left side 'Δp' (pressure difference) is [M L^-1 T^-2] (pressure or stress)");
     CHECK(notes[1]["message"].string() == "right side 'ρ*h' is [M L^-2] (areal density)");
+    CHECK(notes[2]["message"].string().find("is a g missing") != std::string::npos);
 
     CHECK((*unused)["severity"].string() == "warning");
     CHECK((*unused)["line"].number() == 6);

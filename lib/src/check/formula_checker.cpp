@@ -632,7 +632,35 @@ class checker {
                                true});
         }
         note_bare_number_side(d, sides);
-        note_gravity_in_other_units(d, sides, a);
+        if (!note_gravity_in_other_units(d, sides, a))
+            note_acceleration_apart(d, sides, a);
+    }
+
+    // "p = ρ*h", "H = p/ρ": the odd term differs from the others by exactly an acceleration,
+    // the most common slip of all, a missing (or doubled) g. Said outright, since the two
+    // dimensions alone ("momentum", "areal density") do not point at it.
+    void note_acceleration_apart(diagnostic& d, std::span<const operand> ops,
+                                 const agreement& a) const {
+        if (!a.reference || ops.size() > notes_for_terms_up_to || a.odd.empty())
+            return;
+        const typed_term& odd = ops[a.odd.front()].type;
+        if (!odd.known)
+            return;
+        try {
+            const compact_dimension apart = *a.reference / odd.dim;
+            const bool lacks = apart == acceleration_dimension();
+            const bool extra = !lacks && odd.dim / *a.reference == acceleration_dimension();
+            if (!lacks && !extra)
+                return;
+            d.notes.push_back(
+                {fmt::format("{} differs from the rest by exactly an acceleration: {}",
+                             quote(ops[a.odd.front()].node),
+                             lacks ? "times g it would match; is a g missing from it (ρ*g*h)?"
+                                   : "divided by g it would match; is a g missing from its "
+                                     "denominator (p/(ρ*g)), or is one there too many?"),
+                 {}});
+        } catch (const std::exception&) {
+        }
     }
 
     // The notes that say what a mismatch's slip is look at sums of a formula's size only; a
@@ -642,10 +670,10 @@ class checker {
     // "u = 9.81*z_ft": standard gravity written for metres and seconds in a term whose units are
     // feet (or 32.2 beside metres). The dimensions show a missing acceleration, but the
     // acceleration is there: the slip is the units around it, which this note names.
-    void note_gravity_in_other_units(diagnostic& d, std::span<const operand> ops,
+    bool note_gravity_in_other_units(diagnostic& d, std::span<const operand> ops,
                                      const agreement& a) {
         if (!a.reference || ops.size() > notes_for_terms_up_to)
-            return;
+            return false;
         double reference_scale = std::numeric_limits<double>::quiet_NaN();
         const operand* reference = nullptr;
         for (std::size_t i = 0; i < ops.size() && reference == nullptr; ++i) {
@@ -658,7 +686,7 @@ class checker {
             }
         }
         if (reference == nullptr)
-            return;
+            return false;
         struct gravity_unit {
             const char* name;
             const char* system;
@@ -700,10 +728,11 @@ class checker {
                                      written, u.name, quote(ops[i].node), u.system, ratio,
                                      quote(reference->node)),
                          {}});
-                    return;
+                    return true;
                 }
             }
         }
+        return false;
     }
 
     // "V <= 7.5": a limit typed as a bare number has no unit; say how to give it one, in the
@@ -1337,7 +1366,8 @@ class checker {
             explain(d, terms, a, "terms");
             note_atmosphere_in_another_unit(d, terms, a);
             note_scale_zero_beside_difference(d, terms, a);
-            note_gravity_in_other_units(d, terms, a);
+            if (!note_gravity_in_other_units(d, terms, a))
+                note_acceleration_apart(d, terms, a);
             cut_literals_to(literal_base);
             return unknown_type();
         }
