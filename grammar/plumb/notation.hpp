@@ -15,7 +15,7 @@ namespace plumb::notation {
 using namespace tao::pegtl; // NOLINT: the grammar reads better with unqualified combinators
 
 // --- Whitespace, comments, continuation ---------------------------------------------------
-struct comment : seq<one<'#'>, star<not_one<'\n'>>> {};
+// comment, seq<one<'#'>, star<not_one<'\n'>>>, is hand-written in notation_leaves.hpp.
 struct continuation : seq<one<'\\'>, star<one<' ', '\t', '\r'>>, opt<comment>, one<'\n'>> {};
 struct space : one<' ', '\t', '\r'> {};
 // ws, star<sor<space, continuation>>, is hand-written in notation_leaves.hpp.
