@@ -101,7 +101,8 @@ struct argument : seq<expression> {};
 struct next_argument : if_must<one<','>, ws, argument> {};
 struct call_arguments
     : seq<call_open, ws, opt<argument, star<ws, next_argument>>, ws, must<call_close>> {};
-struct symbol_or_call : seq<symbol, opt<star<space>, call_arguments>> {};
+// call_ahead (notation_leaves.hpp) tells a call from a name before the call's rule is entered.
+struct symbol_or_call : seq<symbol, opt<call_ahead, star<space>, call_arguments>> {};
 
 // `pi` and `π` are names to the grammar; the parser makes them the number. The alternatives
 // start with different bytes (a letter, a digit or '.', '(', '{'), so their order changes no

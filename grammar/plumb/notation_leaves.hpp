@@ -227,6 +227,20 @@ struct comment : leaves::hand_written<comment> {
     }
 };
 
+// at<star<one<' ', '\t', '\r'>>, one<'('>>: whether a '(' follows, past blanks, read without
+// moving. It guards a call's arguments: their rule is recursive and so stays a function of its
+// own, entered after every name only to fail at its first byte but at a call (issue 12).
+struct call_ahead : leaves::hand_written<call_ahead> {
+    template <typename Input>
+    [[nodiscard, gnu::always_inline]] static bool match(Input& in) noexcept {
+        const char* p = in.current();
+        const char* const end = in.end();
+        while (p != end && leaves::is(*p, leaves::blank))
+            ++p;
+        return p != end && *p == '(';
+    }
+};
+
 // seq<star<head_byte>, one<':', '\\'>>, where a head_byte is one of the bytes a declaration's
 // names, commas and blanks are made of: an ASCII letter or digit, '_', '\'', a byte of a
 // multi-byte UTF-8 sequence, ' ', '\t', '\r' or ','. A '\\' may start a continuation, whose
@@ -255,6 +269,8 @@ template <typename Name>
 struct analyze_traits<Name, plumb::notation::number> : analyze_any_traits<> {};
 template <typename Name>
 struct analyze_traits<Name, plumb::notation::comment> : analyze_any_traits<> {};
+template <typename Name>
+struct analyze_traits<Name, plumb::notation::call_ahead> : analyze_opt_traits<> {};
 template <typename Name> struct analyze_traits<Name, plumb::notation::ws> : analyze_opt_traits<> {};
 template <typename Name>
 struct analyze_traits<Name, plumb::notation::declaration_head_bytes> : analyze_any_traits<> {};
