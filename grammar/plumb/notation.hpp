@@ -106,8 +106,11 @@ struct symbol_or_call : seq<symbol, opt<call_ahead, star<space>, call_arguments>
 
 // `pi` and `π` are names to the grammar; the parser makes them the number. The alternatives
 // start with different bytes (a letter, a digit or '.', '(', '{'), so their order changes no
-// parse: the commonest come first (issue 12: parse speed).
-struct primary : sor<symbol_or_call, number_term, group, quantity_term> {};
+// parse: the commonest come first (issue 12: parse speed). The number and the group are each
+// entered only at their first byte: both are recursive rules, so a call that fails otherwise.
+struct primary
+    : sor<symbol_or_call, seq<number_ahead, number_term>, seq<at<one<'('>>, group>, quantity_term> {
+};
 
 // Each operator's tail is tried after every operand and mostly fails at its first byte; the
 // parser's action is on the part after the operator ("_rest"), which once entered never

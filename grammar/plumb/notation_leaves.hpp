@@ -241,6 +241,17 @@ struct call_ahead : leaves::hand_written<call_ahead> {
     }
 };
 
+// at<sor<digit, one<'.'>>>: whether a number may start here, read without moving. It guards the
+// number term, whose rule holds a braced unit and so a recursive one: a function of its own,
+// which an operand that is no number entered only to fail at its first byte (issue 12).
+struct number_ahead : leaves::hand_written<number_ahead> {
+    template <typename Input>
+    [[nodiscard, gnu::always_inline]] static bool match(Input& in) noexcept {
+        const char* const p = in.current();
+        return p != in.end() && (leaves::is(*p, leaves::decimal_digit) || *p == '.');
+    }
+};
+
 // seq<star<head_byte>, one<':', '\\'>>, where a head_byte is one of the bytes a declaration's
 // names, commas and blanks are made of: an ASCII letter or digit, '_', '\'', a byte of a
 // multi-byte UTF-8 sequence, ' ', '\t', '\r' or ','. A '\\' may start a continuation, whose
@@ -271,6 +282,8 @@ template <typename Name>
 struct analyze_traits<Name, plumb::notation::comment> : analyze_any_traits<> {};
 template <typename Name>
 struct analyze_traits<Name, plumb::notation::call_ahead> : analyze_opt_traits<> {};
+template <typename Name>
+struct analyze_traits<Name, plumb::notation::number_ahead> : analyze_opt_traits<> {};
 template <typename Name> struct analyze_traits<Name, plumb::notation::ws> : analyze_opt_traits<> {};
 template <typename Name>
 struct analyze_traits<Name, plumb::notation::declaration_head_bytes> : analyze_any_traits<> {};
