@@ -23,6 +23,7 @@ enum byte_class : unsigned char {
     blank = 8,        // ' ', '\t', '\r'
     line_joiner = 16, // '\', which may start a continuation
     high = 32,        // 0x80 and above: a byte of a multi-byte UTF-8 sequence
+    list_mark = 64,   // '\'' and ',', which a declaration's head holds besides names and blanks
 };
 [[nodiscard]] constexpr std::array<unsigned char, 256> byte_classes() noexcept {
     std::array<unsigned char, 256> table{};
@@ -37,6 +38,7 @@ enum byte_class : unsigned char {
     table['\\'] = line_joiner;
     for (std::size_t c = 0x80; c < 256; ++c)
         table[c] = high;
+    table['\''] = table[','] = list_mark;
     return table;
 }
 inline constexpr std::array<unsigned char, 256> byte_class_of = byte_classes();
@@ -260,9 +262,10 @@ struct declaration_head_bytes : leaves::hand_written<declaration_head_bytes> {
     template <typename Input> [[nodiscard]] static bool match(Input& in) noexcept {
         const char* p = in.current();
         const char* const end = in.end();
-        while (p != end && (leaves::is(*p, leaves::ascii_letter | leaves::decimal_digit |
-                                               leaves::underscore | leaves::high | leaves::blank) ||
-                            *p == '\'' || *p == ','))
+        constexpr unsigned head_byte = leaves::ascii_letter | leaves::decimal_digit |
+                                       leaves::underscore | leaves::high | leaves::blank |
+                                       leaves::list_mark;
+        while (p != end && leaves::is(*p, head_byte))
             ++p;
         if (p == end || (*p != ':' && *p != '\\'))
             return false;
