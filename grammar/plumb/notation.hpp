@@ -15,7 +15,7 @@ namespace plumb::notation {
 using namespace tao::pegtl; // NOLINT: the grammar reads better with unqualified combinators
 
 // --- Whitespace, comments, continuation ---------------------------------------------------
-struct comment : seq<one<'#'>, star<not_one<'\n'>>> {};
+// comment, seq<one<'#'>, star<not_one<'\n'>>>, is hand-written in notation_leaves.hpp.
 struct continuation : seq<one<'\\'>, star<one<' ', '\t', '\r'>>, opt<comment>, one<'\n'>> {};
 struct space : one<' ', '\t', '\r'> {};
 // ws, star<sor<space, continuation>>, is hand-written in notation_leaves.hpp.
@@ -101,12 +101,16 @@ struct argument : seq<expression> {};
 struct next_argument : if_must<one<','>, ws, argument> {};
 struct call_arguments
     : seq<call_open, ws, opt<argument, star<ws, next_argument>>, ws, must<call_close>> {};
-struct symbol_or_call : seq<symbol, opt<star<space>, call_arguments>> {};
+// call_ahead (notation_leaves.hpp) tells a call from a name before the call's rule is entered.
+struct symbol_or_call : seq<symbol, opt<call_ahead, star<space>, call_arguments>> {};
 
 // `pi` and `π` are names to the grammar; the parser makes them the number. The alternatives
 // start with different bytes (a letter, a digit or '.', '(', '{'), so their order changes no
-// parse: the commonest come first (issue 12: parse speed).
-struct primary : sor<symbol_or_call, number_term, group, quantity_term> {};
+// parse: the commonest come first (issue 12: parse speed). The number and the group are each
+// entered only at their first byte: both are recursive rules, so a call that fails otherwise.
+struct primary
+    : sor<symbol_or_call, seq<number_ahead, number_term>, seq<at<one<'('>>, group>, quantity_term> {
+};
 
 // Each operator's tail is tried after every operand and mostly fails at its first byte; the
 // parser's action is on the part after the operator ("_rest"), which once entered never

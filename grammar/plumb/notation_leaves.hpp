@@ -1,9 +1,9 @@
 // Hand-written PEGTL rules for the leaves read at nearly every byte of a formula: a name, a
-// number and a run of blanks, and the first test that tells a formula from a declaration. Each
-// reads its whole run in one loop where the combinator form of the same rule went through a rule
-// instantiation, a marker and a peek per byte (issue 12: parse speed). Each matches exactly what
-// the combinator form in its comment matches, and none has a hard-error point, so no message or
-// position depends on them.
+// number, a run of blanks and a comment, and the first test that tells a formula from a
+// declaration. Each reads its whole run in one loop where the combinator form of the same rule
+// went through a rule instantiation, a marker and a peek per byte (issue 12: parse speed). Each
+// matches exactly what the combinator form in its comment matches, and none has a hard-error
+// point, so no message or position depends on them.
 #pragma once
 
 #include <tao/pegtl.hpp>
@@ -11,6 +11,7 @@
 
 #include <array>
 #include <cstddef>
+#include <cstring>
 
 namespace plumb::notation::leaves {
 
@@ -22,6 +23,7 @@ enum byte_class : unsigned char {
     blank = 8,        // ' ', '\t', '\r'
     line_joiner = 16, // '\', which may start a continuation
     high = 32,        // 0x80 and above: a byte of a multi-byte UTF-8 sequence
+    list_mark = 64,   // '\'' and ',', which a declaration's head holds besides names and blanks
 };
 [[nodiscard]] constexpr std::array<unsigned char, 256> byte_classes() noexcept {
     std::array<unsigned char, 256> table{};
@@ -36,6 +38,7 @@ enum byte_class : unsigned char {
     table['\\'] = line_joiner;
     for (std::size_t c = 0x80; c < 256; ++c)
         table[c] = high;
+    table['\''] = table[','] = list_mark;
     return table;
 }
 inline constexpr std::array<unsigned char, 256> byte_class_of = byte_classes();
@@ -210,6 +213,47 @@ struct ws : leaves::hand_written<ws> {
     }
 };
 
+// seq<one<'#'>, star<not_one<'\n'>>>: the rest of the line after '#', found with one search for
+// the line break rather than a rule tried at each byte (a ninth of the bytes of a typical calc
+// are comments).
+struct comment : leaves::hand_written<comment> {
+    template <typename Input> [[nodiscard]] static bool match(Input& in) noexcept {
+        const char* const p = in.current();
+        const char* const end = in.end();
+        if (p == end || *p != '#')
+            return false;
+        const void* const line_break = std::memchr(p, '\n', static_cast<std::size_t>(end - p));
+        const char* const stop = line_break != nullptr ? static_cast<const char*>(line_break) : end;
+        in.bump(static_cast<std::size_t>(stop - p));
+        return true;
+    }
+};
+
+// at<star<one<' ', '\t', '\r'>>, one<'('>>: whether a '(' follows, past blanks, read without
+// moving. It guards a call's arguments: their rule is recursive and so stays a function of its
+// own, entered after every name only to fail at its first byte but at a call (issue 12).
+struct call_ahead : leaves::hand_written<call_ahead> {
+    template <typename Input>
+    [[nodiscard, gnu::always_inline]] static bool match(Input& in) noexcept {
+        const char* p = in.current();
+        const char* const end = in.end();
+        while (p != end && leaves::is(*p, leaves::blank))
+            ++p;
+        return p != end && *p == '(';
+    }
+};
+
+// at<sor<digit, one<'.'>>>: whether a number may start here, read without moving. It guards the
+// number term, whose rule holds a braced unit and so a recursive one: a function of its own,
+// which an operand that is no number entered only to fail at its first byte (issue 12).
+struct number_ahead : leaves::hand_written<number_ahead> {
+    template <typename Input>
+    [[nodiscard, gnu::always_inline]] static bool match(Input& in) noexcept {
+        const char* const p = in.current();
+        return p != in.end() && (leaves::is(*p, leaves::decimal_digit) || *p == '.');
+    }
+};
+
 // seq<star<head_byte>, one<':', '\\'>>, where a head_byte is one of the bytes a declaration's
 // names, commas and blanks are made of: an ASCII letter or digit, '_', '\'', a byte of a
 // multi-byte UTF-8 sequence, ' ', '\t', '\r' or ','. A '\\' may start a continuation, whose
@@ -218,9 +262,10 @@ struct declaration_head_bytes : leaves::hand_written<declaration_head_bytes> {
     template <typename Input> [[nodiscard]] static bool match(Input& in) noexcept {
         const char* p = in.current();
         const char* const end = in.end();
-        while (p != end && (leaves::is(*p, leaves::ascii_letter | leaves::decimal_digit |
-                                               leaves::underscore | leaves::high | leaves::blank) ||
-                            *p == '\'' || *p == ','))
+        constexpr unsigned head_byte = leaves::ascii_letter | leaves::decimal_digit |
+                                       leaves::underscore | leaves::high | leaves::blank |
+                                       leaves::list_mark;
+        while (p != end && leaves::is(*p, head_byte))
             ++p;
         if (p == end || (*p != ':' && *p != '\\'))
             return false;
@@ -236,6 +281,12 @@ template <typename Name>
 struct analyze_traits<Name, plumb::notation::name> : analyze_any_traits<> {};
 template <typename Name>
 struct analyze_traits<Name, plumb::notation::number> : analyze_any_traits<> {};
+template <typename Name>
+struct analyze_traits<Name, plumb::notation::comment> : analyze_any_traits<> {};
+template <typename Name>
+struct analyze_traits<Name, plumb::notation::call_ahead> : analyze_opt_traits<> {};
+template <typename Name>
+struct analyze_traits<Name, plumb::notation::number_ahead> : analyze_opt_traits<> {};
 template <typename Name> struct analyze_traits<Name, plumb::notation::ws> : analyze_opt_traits<> {};
 template <typename Name>
 struct analyze_traits<Name, plumb::notation::declaration_head_bytes> : analyze_any_traits<> {};
