@@ -20,12 +20,7 @@ using plumb::test::problems_in;
 constexpr auto run = plumb::test::check_after;
 constexpr auto fails_with = plumb::test::each_fails_with;
 
-void passes(const std::string& declarations, std::initializer_list<const char*> formulas) {
-    for (const char* formula : formulas) {
-        CAPTURE(formula);
-        CHECK(problems_in(run(declarations, formula)) == 0);
-    }
-}
+constexpr auto passes = plumb::test::each_passes;
 
 const std::string bores = "A_m : m^2\nD_mm : mm\nV_p : ft/s\nQ_g : gal/min\nd_in : in\n"
                           "d_mm : mm\nV_m : m/s\nQ_l : L/min\nR_m : m\n";

@@ -50,6 +50,23 @@ inline void each_fails_with(const std::string& declarations,
     }
 }
 
+// Each formula, after the declarations, passes: no error and no warning.
+inline void each_passes(const std::string& declarations,
+                        std::initializer_list<const char*> formulas) {
+    for (const char* formula : formulas) {
+        CAPTURE(formula);
+        CHECK(problems_in(check_after(declarations, formula)) == 0);
+    }
+}
+
+// Whether the finding or one of its notes says `words`.
+inline bool says(const diagnostic& d, std::string_view words) {
+    if (d.message.find(words) != std::string::npos)
+        return true;
+    return std::any_of(d.notes.begin(), d.notes.end(),
+                       [&](const auto& n) { return n.message.find(words) != std::string::npos; });
+}
+
 // The report's first finding under `rule`; fails the test when there is none.
 inline const diagnostic& first_under(const check_report& r, std::string_view rule) {
     const auto found = std::find_if(r.diagnostics.begin(), r.diagnostics.end(),

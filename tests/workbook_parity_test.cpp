@@ -21,6 +21,7 @@ using plumb::test::check_one_sheet;
 using plumb::test::count_of;
 using plumb::test::each_fails_with;
 using plumb::test::problems_in;
+using plumb::test::says;
 using plumb::test::value_and_unit_row;
 
 namespace {
@@ -50,13 +51,6 @@ bool error_at(const check_report& report, std::string_view cell) {
         const cell_place* c = d.where.file->cell_at(d.where.range.begin);
         return c != nullptr && cell_text(*c) == cell && d.level == severity::error;
     });
-}
-
-bool says(const diagnostic& d, std::string_view words) {
-    if (d.message.find(words) != std::string::npos)
-        return true;
-    return std::any_of(d.notes.begin(), d.notes.end(),
-                       [&](const note& n) { return n.message.find(words) != std::string::npos; });
 }
 
 } // namespace

@@ -1434,12 +1434,7 @@ class checker {
             {{"\u00B0F and \u00B0C", 32.0, 5.0 / 9.0},
              {"K and \u00B0C", 273.15, 1.0},
              {"\u00B0R and \u00B0F", 459.67, 5.0 / 9.0}}};
-        for (const std::size_t i : a.odd) {
-            const syntax::expr_node& n = file_.nodes[terms[i].node];
-            if (n.kind != expr_kind::number)
-                continue;
-            const std::string_view written = text(n.range);
-            const double value = read_number(written).literal.value;
+        for_each_odd_number(terms, a, [&](std::string_view written, double value) {
             for (const scale_zero& z : zeros) {
                 if (std::abs(difference->type.scale / z.degree - 1.0) > 1e-9 ||
                     std::abs(value - z.value) > half_unit_in_last_digit(written) * (1.0 + 1e-9))
@@ -1452,8 +1447,24 @@ class checker {
                                  z.degree == 1.0 ? "a kelvin and a degree Celsius are the same"
                                                  : "1 K = 1.8 \u0394\u00B0F"),
                      {}});
-                return;
+                return true;
             }
+            return false;
+        });
+    }
+
+    // Calls `visit(written, value)` for each bare number among a mismatch's odd terms, until
+    // it returns true.
+    template <class Visit>
+    void for_each_odd_number(std::span<const operand> terms, const agreement& a,
+                             Visit&& visit) const {
+        for (const std::size_t i : a.odd) {
+            const syntax::expr_node& n = file_.nodes[terms[i].node];
+            if (n.kind != expr_kind::number)
+                continue;
+            const std::string_view written = text(n.range);
+            if (visit(written, read_number(written).literal.value))
+                return;
         }
     }
 
@@ -1483,12 +1494,7 @@ class checker {
         const pressure_unit* theirs = named(others);
         if (theirs == nullptr)
             return;
-        for (const std::size_t i : a.odd) {
-            const syntax::expr_node& n = file_.nodes[terms[i].node];
-            if (n.kind != expr_kind::number)
-                continue;
-            const std::string_view written = text(n.range);
-            const double value = read_number(written).literal.value;
+        for_each_odd_number(terms, a, [&](std::string_view written, double value) {
             for (const auto& u : pressure_units) {
                 if (&u == theirs || read_reference_state(pressure_dimension(), value, written,
                                                          u.pascals) == nullptr)
@@ -1497,18 +1503,19 @@ class checker {
                 double pascals = value * u.pascals;
                 if (std::abs(pascals / standard_atmosphere - 1.0) < 0.005)
                     pascals = standard_atmosphere;
-                const std::string others_named = terms.size() == 2
-                                                     ? quote(terms[1 - i].node) + " is"
-                                                     : std::string("the other terms are");
+                const std::string others_named =
+                    terms.size() == 2 ? quote(terms[a.odd.front() == 0 ? 1 : 0].node) + " is"
+                                      : std::string("the other terms are");
                 d.notes.push_back(
                     {fmt::format("{} reads as the atmosphere in {}, but {} in {}: write it as "
                                  "{:.6g} {}, or convert to {} first",
                                  written, u.name, others_named, theirs->name, pascals / others,
                                  theirs->name, u.name),
                      {}});
-                return;
+                return true;
             }
-        }
+            return false;
+        });
     }
 
     // "20.9 - O2" with O2 in %, "θ + 90" with θ in degrees: in a sum whose other terms are all
