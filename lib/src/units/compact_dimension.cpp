@@ -86,6 +86,22 @@ bool compact_dimension::equal_in_arena(const compact_dimension& a, const compact
     return a.expand() == b.expand();
 }
 
+std::optional<compact_dimension>
+compact_dimension::reduced(const std::array<std::int64_t, base_dimension_count>& numerators,
+                           std::int64_t common, std::int64_t g) {
+    if (common / g > INT16_MAX)
+        return std::nullopt;
+    compact_dimension r;
+    r.den_ = static_cast<std::int16_t>(common / g);
+    for (std::size_t i = 0; i < base_dimension_count; ++i) {
+        const std::int64_t v = numerators[i] / g;
+        if (v < INT16_MIN || v > INT16_MAX)
+            return std::nullopt;
+        r.num_[i] = static_cast<std::int16_t>(v);
+    }
+    return r;
+}
+
 compact_dimension compact_dimension::product_in_full(const compact_dimension& a,
                                                      const compact_dimension& b, bool divide) {
     // Both fitted, one with a fractional exponent (sqrt(g*h)*V): over the common denominator
@@ -101,16 +117,8 @@ compact_dimension compact_dimension::product_in_full(const compact_dimension& a,
             n[i] = a.num_[i] * a_by + b.num_[i] * b_by;
             g = std::gcd(g, n[i]);
         }
-        compact_dimension r;
-        bool fits = common / g <= INT16_MAX;
-        r.den_ = static_cast<std::int16_t>(common / g);
-        for (std::size_t i = 0; i < base_dimension_count && fits; ++i) {
-            const std::int64_t v = n[i] / g;
-            fits = v >= INT16_MIN && v <= INT16_MAX;
-            r.num_[i] = static_cast<std::int16_t>(v);
-        }
-        if (fits)
-            return r;
+        if (const auto r = reduced(n, common, g))
+            return *r;
     }
     return compact_dimension(divide ? a.expand() / b.expand() : a.expand() * b.expand());
 }
@@ -162,17 +170,8 @@ compact_dimension compact_dimension::pow(rational p) const {
             n[i] = static_cast<std::int64_t>(num_[i]) * p.num();
             g = std::gcd(g, n[i]);
         }
-        common /= g;
-        compact_dimension r;
-        bool fits = common <= INT16_MAX;
-        r.den_ = static_cast<std::int16_t>(common);
-        for (std::size_t i = 0; i < base_dimension_count && fits; ++i) {
-            const std::int64_t v = n[i] / g;
-            fits = v >= INT16_MIN && v <= INT16_MAX;
-            r.num_[i] = static_cast<std::int16_t>(v);
-        }
-        if (fits)
-            return r;
+        if (const auto r = reduced(n, common, g))
+            return *r;
     }
     return compact_dimension(expand().pow(p));
 }

@@ -69,6 +69,11 @@ class compact_dimension {
     static bool equal_in_arena(const compact_dimension& a, const compact_dimension& b);
     static compact_dimension product_in_full(const compact_dimension& a, const compact_dimension& b,
                                              bool divide);
+    // Exponents numerators[i]/common, reduced by g (which divides them all), in the 16-bit
+    // form; empty where one does not fit.
+    static std::optional<compact_dimension>
+    reduced(const std::array<std::int64_t, base_dimension_count>& numerators, std::int64_t common,
+            std::int64_t g);
 
     // Two 8-byte compares: these run for every term that meets another.
     static bool same_bits(const compact_dimension& a, const compact_dimension& b) {
