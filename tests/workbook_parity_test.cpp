@@ -39,7 +39,8 @@ std::string sheet_of(std::initializer_list<std::pair<std::string, std::string>> 
 const diagnostic* finding(const check_report& report, std::string_view cell,
                           std::string_view rule) {
     for (const auto& d : report.diagnostics)
-        if (const cell_place* c = d.where.file->cell_at(d.where.range.begin))
+        if (const cell_place* c =
+                d.where.file != nullptr ? d.where.file->cell_at(d.where.range.begin) : nullptr)
             if (cell_text(*c) == cell && d.rule == rule)
                 return &d;
     return nullptr;
@@ -48,7 +49,8 @@ const diagnostic* finding(const check_report& report, std::string_view cell,
 // Whether an error is reported at `cell`, under whichever rule.
 bool error_at(const check_report& report, std::string_view cell) {
     return std::any_of(report.diagnostics.begin(), report.diagnostics.end(), [&](const auto& d) {
-        const cell_place* c = d.where.file->cell_at(d.where.range.begin);
+        const cell_place* c =
+            d.where.file != nullptr ? d.where.file->cell_at(d.where.range.begin) : nullptr;
         return c != nullptr && cell_text(*c) == cell && d.level == severity::error;
     });
 }
@@ -329,4 +331,22 @@ TEST_CASE("workbook cells checked are listed with their result when formulas are
                                   : std::string("passed")));
     }
     CHECK(graded == std::vector<std::string>{"S!B3 passed", "S!B4 error"});
+}
+
+TEST_CASE("workbook parity: a threshold typed as a number in IF is in the compared cell's unit") {
+    // A spreadsheet's numbers carry no units: =IF(B2<25,...) compares a temperature difference
+    // with 25 of its own kelvins, as the engineer reads it (common practice). Two cells of
+    // different dimensions compared stay an error.
+    const check_report r =
+        check_one_sheet("S", sheet_of({
+                                 {"4.5", "K"},                // B2: a temperature difference
+                                 {"=IF(B2&lt;25,1,0)", "-"},  // B3: right (&lt; is < in XML)
+                                 {"12", "m"},                 // B4
+                                 {"=IF(B2&lt;B4,1,0)", "-"},  // B5: K against m
+                                 {"=IF(25&gt;B2,B2,0)", "K"}, // B6: right, the number first
+                             }));
+    REQUIRE(r.cells_checked == 3);
+    CHECK_FALSE(error_at(r, "S!B3"));
+    CHECK(error_at(r, "S!B5"));
+    CHECK_FALSE(error_at(r, "S!B6"));
 }

@@ -67,7 +67,8 @@ inline check_report check_one_sheet(const std::string& name, const std::string& 
 inline std::vector<std::string> cell_findings(const check_report& report) {
     std::vector<std::string> found;
     for (const auto& d : report.diagnostics)
-        if (const cell_place* c = d.where.file->cell_at(d.where.range.begin))
+        if (const cell_place* c =
+                d.where.file != nullptr ? d.where.file->cell_at(d.where.range.begin) : nullptr)
             found.push_back(cell_text(*c) + " " + d.rule);
     std::sort(found.begin(), found.end());
     return found;

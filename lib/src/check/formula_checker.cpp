@@ -3757,6 +3757,15 @@ class checker {
         operands_.push_back({types_.push(eval(n.rhs)), n.rhs});
         const scratch_region region(operands_, base, types_, types_base);
         const std::span<const operand> sides = region.view();
+        // =IF(E9<25, ...): a spreadsheet's numbers carry no units, so a threshold typed against
+        // a cell is in that cell's unit, as an engineer reads it. (In the notation a bare
+        // number beside a quantity stays a finding: there it can be given its unit.)
+        const auto bare_number = [](const typed_term& t) {
+            return t.known && t.numeric && !t.zero && t.dim.is_dimensionless();
+        };
+        if (file_.functions == syntax::function_names::spreadsheet &&
+            (bare_number(sides[0].type) || bare_number(sides[1].type)))
+            return typed_term{};
         agreement a = find_agreement(sides);
         if (!a.odd.empty() && read_gravity_numbers_either_way(base, a))
             a = find_agreement(sides);
