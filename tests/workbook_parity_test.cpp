@@ -350,3 +350,23 @@ TEST_CASE("workbook parity: a threshold typed as a number in IF is in the compar
     CHECK(error_at(r, "S!B5"));
     CHECK_FALSE(error_at(r, "S!B6"));
 }
+
+TEST_CASE("workbook parity: a conversion in IF's condition serves the condition alone") {
+    // =IF(B2*1000>B3, B2*1000-B3, 0) with B2 in MW and B3 in kW converts MW to kW twice, once
+    // for the comparison and once for the branch: both are right (1 MW = 1000 kW, SI Brochure
+    // 9th ed., Table 7). A conversion the wrong way round in the condition stays an error.
+    const check_report r = check_one_sheet(
+        "S", sheet_of({
+                 {"3.1", "MW"},                             // B2: peak demand
+                 {"2400", "kW"},                            // B3: heat pump output
+                 {"=IF(B2*1000&gt;B3,B2*1000-B3,0)", "kW"}, // B4: right
+                 {"=IF(B2/1000&gt;B3,B2*1000-B3,0)", "kW"}, // B5: condition the wrong way
+                 {"=IF(B2&gt;B3,B2*1000-B3,0)", "kW"},      // B6: condition not converted
+                 {"=IF(B2*1000&gt;B3,B2*1000-B3,0)", "MW"}, // B7: kW into an MW cell
+             }));
+    REQUIRE(r.cells_checked == 4);
+    CHECK_FALSE(error_at(r, "S!B4"));
+    CHECK(error_at(r, "S!B5"));
+    CHECK(error_at(r, "S!B6"));
+    CHECK(error_at(r, "S!B7"));
+}

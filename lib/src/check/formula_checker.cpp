@@ -3751,6 +3751,9 @@ class checker {
 
     // A comparison inside a formula (IF's condition): its sides agree as a limit's do.
     [[gnu::noinline]] typed_term eval_compare(const syntax::expr_node& n) {
+        // The condition's numbers are settled here: its truth value carries none of them out
+        // (=IF(C30*1000>C3, ...) converts MW to kW for the comparison alone).
+        const std::size_t literal_start = literals_.size();
         const std::size_t base = operands_.size();
         const std::size_t types_base = types_.size();
         operands_.push_back({types_.push(eval(n.lhs)), n.lhs});
@@ -3764,8 +3767,10 @@ class checker {
             return t.known && t.numeric && !t.zero && t.dim.is_dimensionless();
         };
         if (file_.functions == syntax::function_names::spreadsheet &&
-            (bare_number(sides[0].type) || bare_number(sides[1].type)))
+            (bare_number(sides[0].type) || bare_number(sides[1].type))) {
+            cut_literals_to(literal_start);
             return typed_term{};
+        }
         agreement a = find_agreement(sides);
         if (!a.odd.empty() && read_gravity_numbers_either_way(base, a))
             a = find_agreement(sides);
@@ -3783,6 +3788,7 @@ class checker {
         }
         double unit = 1.0;
         check_scales(sides, "sides of this comparison", unit);
+        cut_literals_to(literal_start);
         return typed_term{}; // true or false: a dimensionless number
     }
 
