@@ -370,3 +370,27 @@ TEST_CASE("workbook parity: a conversion in IF's condition serves the condition 
     CHECK(error_at(r, "S!B6"));
     CHECK(error_at(r, "S!B7"));
 }
+
+TEST_CASE("workbook parity: a bare number among MAX's, MIN's or IF's values is in their unit") {
+    // =MAX(B2, 0.3) with B2 in m: a floor of 0.3 m, as the engineer typed it, for a spreadsheet's
+    // numbers carry no units (common practice). A cell of another dimension stays an error, and
+    // so does a number where no argument has a unit to lend it.
+    const check_report r =
+        check_one_sheet("S", sheet_of({
+                                 {"0.45", "m"},                // B2: a cover depth
+                                 {"=MAX(B2,0.3)", "m"},        // B3: right, a floor
+                                 {"=MIN(1.2,B2)", "m"},        // B4: right, a cap
+                                 {"=IF(B2&gt;1,B2,0.6)", "m"}, // B5: right, a default
+                                 {"12", "kN"},                 // B6
+                                 {"=MAX(B2,B6)", "m"},         // B7: m against kN
+                                 {"=MAX(B2,0.3)*1000", "mm"},  // B8: right, converted
+                                 {"=MAX(B2,0.3)", "mm"},       // B9: m into mm
+                             }));
+    REQUIRE(r.cells_checked == 6);
+    CHECK_FALSE(error_at(r, "S!B3"));
+    CHECK_FALSE(error_at(r, "S!B4"));
+    CHECK_FALSE(error_at(r, "S!B5"));
+    CHECK(error_at(r, "S!B7"));
+    CHECK_FALSE(error_at(r, "S!B8"));
+    CHECK(error_at(r, "S!B9"));
+}

@@ -3685,18 +3685,20 @@ class checker {
             return result;
         case function_rule::angle_of:
         case function_rule::common: {
-            const agreement a = find_agreement(args);
+            std::vector<operand> kept;
+            const std::span<const operand> values = with_bare_numbers_in_their_unit(args, kept);
+            const agreement a = find_agreement(values);
             if (!a.odd.empty()) {
                 cut_literals_to(literal_start);
                 diagnostic& d =
                     report(rules::argument_mismatch,
                            fmt::format("the arguments of {} differ in dimension", f->name),
-                           file_.nodes[args[a.odd.front()].node].range);
-                explain(d, args, a, "arguments");
+                           file_.nodes[values[a.odd.front()].node].range);
+                explain(d, values, a, "arguments");
                 return unknown_type();
             }
             double unit = 1.0;
-            const bool scales_agree = check_scales(args, fmt::format("arguments of {}", f->name),
+            const bool scales_agree = check_scales(values, fmt::format("arguments of {}", f->name),
                                                    unit, &result.exact_scale);
             cut_literals_to(literal_start);
             if (f->rule == function_rule::angle_of)
@@ -3706,10 +3708,10 @@ class checker {
                 return unknown_type();
             result.dim = a.reference.value_or(compact_dimension{});
             result.scale = scales_agree ? unit : std::numeric_limits<double>::quiet_NaN();
-            result.offset = args[0].type.offset;
-            result.origin = args[0].type.origin;
-            result.origin_tolerance = args[0].type.origin_tolerance;
-            result.point = args[0].type.point;
+            result.offset = values[0].type.offset;
+            result.origin = values[0].type.origin;
+            result.origin_tolerance = values[0].type.origin_tolerance;
+            result.point = values[0].type.point;
             return result;
         }
         case function_rule::power:
@@ -3749,6 +3751,33 @@ class checker {
         return t;
     }
 
+    // A number typed into a formula, with no unit and not zero (zero is in every unit).
+    static bool is_bare_number(const typed_term& t) {
+        return t.known && t.numeric && !t.zero && t.dim.is_dimensionless();
+    }
+
+    // =MAX(B2, 0.3), =IF(B2>1, B2, 0.6): a spreadsheet's numbers carry no units, so a bare
+    // number among values that come from cells is in their unit, as the engineer typed it, and
+    // only those values must agree; they are copied to `kept`. Elsewhere, and in the notation
+    // (where a number can be given its unit, and a bare one beside a quantity stays a
+    // finding), the values themselves.
+    std::span<const operand> with_bare_numbers_in_their_unit(std::span<const operand> values,
+                                                             std::vector<operand>& kept) const {
+        if (file_.functions != syntax::function_names::spreadsheet)
+            return values;
+        const bool some_bare = std::any_of(values.begin(), values.end(),
+                                           [](const operand& o) { return is_bare_number(o.type); });
+        const bool some_from_cells =
+            std::any_of(values.begin(), values.end(),
+                        [](const operand& o) { return o.type.known && !o.type.numeric; });
+        if (!some_bare || !some_from_cells)
+            return values;
+        for (const operand& o : values)
+            if (!is_bare_number(o.type))
+                kept.push_back(o);
+        return kept;
+    }
+
     // A comparison inside a formula (IF's condition): its sides agree as a limit's do.
     [[gnu::noinline]] typed_term eval_compare(const syntax::expr_node& n) {
         // The condition's numbers are settled here: its truth value carries none of them out
@@ -3763,11 +3792,8 @@ class checker {
         // =IF(E9<25, ...): a spreadsheet's numbers carry no units, so a threshold typed against
         // a cell is in that cell's unit, as an engineer reads it. (In the notation a bare
         // number beside a quantity stays a finding: there it can be given its unit.)
-        const auto bare_number = [](const typed_term& t) {
-            return t.known && t.numeric && !t.zero && t.dim.is_dimensionless();
-        };
         if (file_.functions == syntax::function_names::spreadsheet &&
-            (bare_number(sides[0].type) || bare_number(sides[1].type))) {
+            (is_bare_number(sides[0].type) || is_bare_number(sides[1].type))) {
             cut_literals_to(literal_start);
             return typed_term{};
         }
@@ -3795,7 +3821,9 @@ class checker {
     // Arguments from `first` on must agree; their common type, or unknown after a finding.
     typed_term agreeing(const builtin_function& f, std::span<const operand> args, std::size_t first,
                         std::string_view others) {
-        const std::span<const operand> tail = args.subspan(first);
+        std::vector<operand> kept;
+        const std::span<const operand> tail =
+            with_bare_numbers_in_their_unit(args.subspan(first), kept);
         const agreement a = find_agreement(tail);
         if (!a.odd.empty()) {
             diagnostic& d = report(rules::argument_mismatch,
