@@ -2,6 +2,7 @@
 // written for it are checked as the notation checks an equation's two sides. Each case puts
 // the right forms beside the wrong ones that must stay errors.
 #include "plumb/check.hpp"
+#include "plumb/render.hpp"
 #include "plumb/rules.hpp"
 #include "test_support.hpp"
 #include "workbook_support.hpp"
@@ -393,4 +394,27 @@ TEST_CASE("workbook parity: a bare number among MAX's, MIN's or IF's values is i
     CHECK(error_at(r, "S!B7"));
     CHECK_FALSE(error_at(r, "S!B8"));
     CHECK(error_at(r, "S!B9"));
+}
+
+TEST_CASE("sign-off report: a workbook's formula cells are listed by cell, with their units") {
+    // A reviewer signs off cells, not plumb's listing of them: each formula cell appears with
+    // its formula, the unit written for it and its findings, placed as Sheet!Cell, and the
+    // workbook's own bytes are hashed once, as checked.
+    plumb::test::temp_dir dir;
+    const auto path = dir.write(
+        "S.xlsx", plumb::test::xlsx_of_one_sheet(
+                      "S", sheet_of({{"17.28", "m"}, {"=B2*1000", "mm"}, {"=B2*1000", "m"}})));
+    plumb::check_options options;
+    options.record_formulas = true;
+    const check_report r = plumb::check_paths({path}, options);
+    const std::string html = plumb::render_signoff_html(r, plumb::signoff_context{});
+    const auto has = [&](std::string_view text) { return html.find(text) != std::string::npos; };
+    CHECK(has("<td class=\"mono\">S!B3</td><td class=\"mono\">=B2*1000</td>"
+              "<td class=\"mono\">mm</td><td><div class=\"ok\">consistent</div>"));
+    CHECK(has("<td class=\"mono\">S!B4</td><td class=\"mono\">=B2*1000</td>"
+              "<td class=\"mono\">m</td><td><div class=\"finding error\">"));
+    CHECK(has(path.string() + ":S!B4</span>"));
+    CHECK(has("checked (workbook)"));
+    CHECK_FALSE(has("read (dictionary or accepted findings)"));
+    CHECK_FALSE(has("Findings in other files"));
 }

@@ -54,6 +54,8 @@ class source_file {
     void set_cell_places(std::vector<cell_place> places) { cell_places_ = std::move(places); }
     // The cell of the line holding `byte_offset`; null for an ordinary file.
     [[nodiscard]] const cell_place* cell_at(std::uint32_t byte_offset) const;
+    // Whether this is a workbook's listing (or its table of input values).
+    [[nodiscard]] bool holds_cells() const { return !cell_places_.empty(); }
 
   private:
     struct column_mark {

@@ -6,6 +6,7 @@
 #include "plumb/render.hpp"
 #include "plumb/version.hpp"
 #include "report/json_text.hpp"
+#include "report/place.hpp"
 
 #include <algorithm>
 #include <fmt/format.h>
@@ -81,11 +82,9 @@ std::string_view level_word(severity s) {
     return s == severity::error ? "error" : s == severity::warning ? "warning" : "note";
 }
 
+// "file:line:column", or "book.xlsx:Sheet!C4" for a workbook's cell; nothing for the run.
 std::string place(const location& where) {
-    if (where.file == nullptr)
-        return {};
-    const line_column p = where.file->position(where.range.begin);
-    return fmt::format("{}:{}:{}", where.file->path(), p.line, p.column);
+    return where.file == nullptr ? std::string() : place_text(where);
 }
 
 std::string dimension_text(const std::optional<dimension>& d) {
@@ -135,17 +134,26 @@ struct file_entry {
 };
 
 // Digests of the files as they are on disk now (a Markdown note's whole text, not only its
-// blocks).
+// blocks; a workbook's package, not plumb's listing of its cells), each file once.
 std::vector<file_entry> file_entries(const check_report& report) {
     std::vector<file_entry> out;
     for (const auto& s : report.sources) {
         if (s->path().empty() || s->path().front() == '<')
             continue;
-        file_entry e;
-        e.path = s->path();
         const bool checked = std::find(report.checked_files.begin(), report.checked_files.end(),
                                        s.get()) != report.checked_files.end();
-        e.role = checked ? "checked" : "read (dictionary or accepted findings)";
+        const std::string_view role = s->holds_cells() ? "checked (workbook)"
+                                      : checked        ? "checked"
+                                                       : "read (dictionary or accepted findings)";
+        const auto same_path = [&](const file_entry& e) { return e.path == s->path(); };
+        if (const auto seen = std::find_if(out.begin(), out.end(), same_path); seen != out.end()) {
+            if (role != seen->role && role != "read (dictionary or accepted findings)")
+                seen->role = role;
+            continue;
+        }
+        file_entry e;
+        e.path = s->path();
+        e.role = role;
         if (const user_file read = read_user_file(s->path(), max_workbook_file_bytes);
             read.problem.empty()) {
             e.bytes = read.text.size();
@@ -221,50 +229,87 @@ std::string render_signoff_html(const check_report& report, const signoff_contex
     }
 
     // Each file's formulas with the findings on them; findings elsewhere in the file after.
+    // A workbook is one section, whichever of plumb's listings of it a finding stands in.
     out += "<h2 id=\"formulas\">Formulas</h2>\n";
     std::map<const source_file*, std::vector<const formula_record*>> by_file;
     for (const auto& f : report.formulas)
         by_file[f.where.file].push_back(&f);
+    std::vector<std::vector<const source_file*>> sections;
+    for (const source_file* file : report.checked_files)
+        sections.push_back({file});
+    std::map<std::string, std::size_t> workbook_section;
+    for (const auto& source : report.sources)
+        if (source->holds_cells()) {
+            const auto [at, added] = workbook_section.emplace(source->path(), sections.size());
+            if (added)
+                sections.emplace_back();
+            sections[at->second].push_back(source.get());
+        }
     std::vector<bool> shown(report.diagnostics.size(), false);
-    for (const source_file* file : report.checked_files) {
-        out += fmt::format("<h3>{}</h3>\n", esc(file->path()));
-        const auto& formulas = by_file[file];
+    const auto findings_in = [&](const formula_record& f) {
+        std::string findings;
+        for (std::size_t i = 0; i < report.diagnostics.size(); ++i) {
+            const diagnostic& d = report.diagnostics[i];
+            if (d.where.file == f.where.file && d.where.range.begin >= f.where.range.begin &&
+                d.where.range.begin < std::max(f.where.range.end, f.where.range.begin + 1)) {
+                findings += finding_html(d);
+                shown[i] = true;
+            }
+        }
+        return findings.empty() ? std::string("<div class=\"ok\">consistent</div>") : findings;
+    };
+    for (const auto& section : sections) {
+        const bool workbook = section.front()->holds_cells();
+        out += fmt::format("<h3>{}</h3>\n", esc(section.front()->path()));
+        std::vector<const formula_record*> formulas;
+        for (const source_file* file : section)
+            formulas.insert(formulas.end(), by_file[file].begin(), by_file[file].end());
         if (formulas.empty())
-            out += "<p>No formulas in this file.</p>\n";
+            out += workbook ? "<p>No formula cells in this workbook.</p>\n"
+                            : "<p>No formulas in this file.</p>\n";
+        else if (workbook)
+            out += "<table class=\"formulas\">\n<thead><tr><th>cell</th><th>formula</th>"
+                   "<th>unit written for the cell</th><th>result</th></tr></thead>\n<tbody>\n";
         else
             out += "<table class=\"formulas\">\n<thead><tr><th>line</th><th>label</th>"
                    "<th>formula</th><th>dimension of each side</th></tr></thead>\n<tbody>\n";
         for (const formula_record* f : formulas) {
+            const source_file* file = f->where.file;
+            const std::string formula = esc(single_line(file->text(f->where.range)));
+            if (workbook) {
+                const cell_place* cell = file->cell_at(f->where.range.begin);
+                out += fmt::format("<tr><td class=\"mono\">{}</td><td class=\"mono\">{}</td>"
+                                   "<td class=\"mono\">{}</td><td>{}</td></tr>\n",
+                                   cell != nullptr ? esc(cell_text(*cell)) : std::string(), formula,
+                                   f->written_unit.empty() ? std::string("(none)")
+                                                           : esc(f->written_unit),
+                                   findings_in(*f));
+                continue;
+            }
             std::string sides;
             for (std::size_t i = 0; i < f->sides.size(); ++i)
                 sides += (i == 0 ? "" : fmt::format(" <b>{}</b> ", esc(f->relations[i - 1]))) +
                          esc(dimension_text(f->sides[i]));
-            std::string findings;
-            for (std::size_t i = 0; i < report.diagnostics.size(); ++i) {
-                const diagnostic& d = report.diagnostics[i];
-                if (d.where.file == file && d.where.range.begin >= f->where.range.begin &&
-                    d.where.range.begin < std::max(f->where.range.end, f->where.range.begin + 1)) {
-                    findings += finding_html(d);
-                    shown[i] = true;
-                }
-            }
+            const std::string findings = findings_in(*f);
             out += fmt::format(
                 "<tr><td>{}</td><td class=\"mono\">{}</td><td class=\"mono\">{}</td><td>{}{}</td>"
                 "</tr>\n",
-                file->position(f->where.range.begin).line, esc(f->label),
-                esc(single_line(file->text(f->where.range))), sides,
-                findings.empty() ? "<div class=\"ok\">consistent</div>" : findings);
+                file->position(f->where.range.begin).line, esc(f->label), formula, sides, findings);
         }
         if (!formulas.empty())
             out += "</tbody></table>\n";
         std::string rest;
         for (std::size_t i = 0; i < report.diagnostics.size(); ++i)
-            if (!shown[i] && report.diagnostics[i].where.file == file) {
+            if (!shown[i] && std::find(section.begin(), section.end(),
+                                       report.diagnostics[i].where.file) != section.end()) {
                 rest += finding_html(report.diagnostics[i]);
                 shown[i] = true;
             }
         if (!rest.empty())
-            out += "<p>Other findings in this file (declarations, studies):</p>\n" + rest;
+            out += (workbook ? "<p>Other findings in this workbook (inputs without units, "
+                               "cells not checked):</p>\n"
+                             : "<p>Other findings in this file (declarations, studies):</p>\n") +
+                   rest;
     }
     std::string elsewhere;
     for (std::size_t i = 0; i < report.diagnostics.size(); ++i)

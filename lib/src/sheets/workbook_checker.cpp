@@ -105,6 +105,7 @@ class workbook_checker {
         for (const std::uint32_t id : checked_cells_) {
             formula_record r;
             r.where = {listing_, formulas_[id].text};
+            r.written_unit = std::string(listing_->text(formulas_[id].written_text));
             auto it = std::lower_bound(starts.begin(), starts.end(),
                                        std::pair{r.where.range.begin, severity::note});
             for (; it != starts.end() && it->first <= r.where.range.end; ++it)
