@@ -263,3 +263,22 @@ TEST_CASE(
     CHECK(count_of(speed, plumb::rules::trade_constant) == 1);
     fails_with(machine, {"@synchronous-100 n_s = 100*f/p"}, plumb::rules::unit_scale);
 }
+
+// 1 kN = 1000 N, 1 kW = 1000 W, 1 m = 1000 mm (SI Brochure 9th ed., Table 7); a sum's terms
+// each divided by the same factor are the sum divided by it (common practice: a conveyor's
+// resistances, each converted from N to kN in its own term).
+TEST_CASE("a factor every term of a sum carries is the whole sum's") {
+    const std::string decl = "F_U : kN\nF_N : N\nm_1, m_2 : kg\nL_mm : mm\nL : m\nA : m^2\n"
+                             "F : N\nv : m/s\nP : kW\n";
+    passes(decl, {"F_U = m_1*{g_n}/1000 + m_2*{g_n}/1000", "P = F*v/1000 + F*v/1000",
+                  "L = L_mm/1000 + L_mm/1000 + 2*L_mm/1000", "A = L_mm/1000*L + L_mm/1000*L",
+                  "F_U = (m_1*{g_n} + m_2*{g_n})/1000"});
+    fails_with(decl,
+               {"F_N = m_1*{g_n}/1000 + m_2*{g_n}/1000", "F_U = m_1*{g_n}*1000 + m_2*{g_n}*1000",
+                "L = L_mm*1000 + L_mm*1000", "A = L_mm*L/1000 + L_mm*L",
+                "F_U = m_1*{g_n}/1000 + m_2*{g_n}", "P = F*v/1000 + F*v"},
+               plumb::rules::unit_scale);
+    const auto r = run(decl, "F_N = m_1*{g_n}/1000 + m_2*{g_n}/1000");
+    REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "not needed"));
+}

@@ -1391,6 +1391,8 @@ class checker {
             return finish_offset_sum(terms, result, literal_base, index);
         if (result.dim.is_dimensionless())
             adopt_numbers_in_scaled_unit(base);
+        common_numbers common;
+        factor_out_common_numbers(terms, common);
         // After a unit-scale finding the scale is unknown (NaN), so it is not reported again
         // further up; the dimension stays known.
         double unit = 1.0;
@@ -1398,12 +1400,59 @@ class checker {
                            ? unit
                            : std::numeric_limits<double>::quiet_NaN();
         cut_literals_to(literal_base);
+        for (std::size_t i = 0; i < common.count; ++i)
+            literals_.push_back(common.numbers[i]);
         int points = 0;
         for (const auto& t : terms)
             if (t.type.point)
                 points += t.subtracted ? -1 : 1;
         result.point = points == 1;
         return result;
+    }
+
+    struct common_numbers {
+        static constexpr std::size_t most = 4;
+        std::array<scale_literal, most> numbers{};
+        std::size_t count = 0;
+    };
+
+    // "F = m_1*g/1000 + m_2*g/1000" into kN is "(m_1*g + m_2*g)/1000": a number that every term
+    // carries, to the same power, is a factor of the whole sum. It is taken out of each term
+    // (left there as a 1) for the terms to be weighed against one another, and given to the sum,
+    // to be weighed where the sum meets the rest of the formula.
+    void factor_out_common_numbers(std::span<const operand> terms, common_numbers& common) {
+        constexpr std::size_t most_terms = 16;
+        if (terms.size() < 2 || terms.size() > most_terms)
+            return;
+        for (const auto& t : terms)
+            if (!t.type.known || t.type.zero || t.type.numeric || t.type.literal_count == 0)
+                return;
+        const typed_term& first = terms.front().type;
+        for (std::uint32_t k = 0; k < first.literal_count && common.count < common.most; ++k) {
+            const scale_literal& candidate = literals_[first.literal_begin + k];
+            if (candidate.value == 1.0)
+                continue;
+            std::array<std::uint32_t, most_terms> at{};
+            bool everywhere = true;
+            for (std::size_t i = 1; i < terms.size() && everywhere; ++i) {
+                const typed_term& t = terms[i].type;
+                everywhere = false;
+                for (std::uint32_t j = 0; j < t.literal_count; ++j) {
+                    const scale_literal& l = literals_[t.literal_begin + j];
+                    if (l.value == candidate.value && l.exponent == candidate.exponent) {
+                        at[i] = t.literal_begin + j;
+                        everywhere = true;
+                        break;
+                    }
+                }
+            }
+            if (!everywhere)
+                continue;
+            common.numbers[common.count++] = candidate;
+            read_as_quantity(literals_[first.literal_begin + k]);
+            for (std::size_t i = 1; i < terms.size(); ++i)
+                read_as_quantity(literals_[at[i]]);
+        }
     }
 
     // "(R_F - 32)/1.8" with R_F a range in Δ°F: a scale's zero beside a temperature difference,
