@@ -282,3 +282,18 @@ TEST_CASE("a factor every term of a sum carries is the whole sum's") {
     REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
     CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "not needed"));
 }
+
+// 1 ft = 0.3048 m exactly (NIST SP 811 (2008), B.8); the wind shear power law
+// v = v_ref*(h/h_ref)^α (common practice) with α a fitted number declared as a symbol.
+TEST_CASE("under an exponent that is not a constant number the base's units must cancel") {
+    const std::string decl = "v_hub, v_ref : m/s\nh_ft : ft\nh_ref, h_m : m\nα : 1\n";
+    passes(decl, {"v_hub = v_ref*(h_m/h_ref)^α", "v_hub = v_ref*(0.3048*h_ft/h_ref)^α",
+                  "v_hub = v_ref*pow(h_ft*0.3048/h_ref, α)", "v_hub = v_ref*(h_m/h_ref)^0.16"});
+    fails_with(decl,
+               {"v_hub = v_ref*(h_ft/h_ref)^α", "v_hub = v_ref*pow(h_ft/h_ref, α)",
+                "v_hub = v_ref*(h_ft/h_ref)^0.16", "v_hub = v_ref*(h_ft/0.3048/h_ref)^α"},
+               plumb::rules::unit_scale);
+    const auto r = run(decl, "v_hub = v_ref*(h_ft/h_ref)^α");
+    REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "do not cancel"));
+}

@@ -3533,6 +3533,15 @@ class checker {
         if (exponent.known && !exponent.numeric && exponent.dim.is_dimensionless())
             report_units_not_cancelling({exponent, exponent_node},
                                         fmt::format("the exponent {}", quote(exponent_node)));
+        // v_ref*(h_ft/h_ref)^α: under an exponent that is not a constant number the base's
+        // units must cancel, for the factor between them would be raised to a power no one
+        // can know.
+        bool base_units_cancel = true;
+        if (!exponent.value && exponent.known && base.known && !base.numeric &&
+            base.dim.is_dimensionless() && std::isfinite(base.scale))
+            base_units_cancel =
+                report_units_not_cancelling(
+                    {base, base_node}, fmt::format("the base {}", quote(base_node))) == nullptr;
         // The exponent's own numbers are not factors of the power; the base's are, raised.
         cut_literals_to(base.literal_begin + base.literal_count);
         if (exponent.value)
@@ -3557,6 +3566,8 @@ class checker {
         }
         if (base.dim.is_dimensionless()) {
             result.value = exact_power(base.value, exponent.value);
+            if (!base_units_cancel)
+                result.scale = std::numeric_limits<double>::quiet_NaN(); // reported once
             return result;
         }
         if (!exponent.value) {
