@@ -297,3 +297,20 @@ TEST_CASE("under an exponent that is not a constant number the base's units must
     REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
     CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "do not cancel"));
 }
+
+// The temperature correction k_T = k_20·θ^(T − 20), T in °C, θ ≈ 1.024-1.08 (common
+// practice in water and wastewater treatment; from memory for the range of θ);
+// 1 K = 1.8 Δ°F (NIST SP 811 (2008), B.9).
+TEST_CASE("a rate's temperature correction counts kelvins above a reference") {
+    const std::string decl = "k_20, k_T : 1/d\nθ : 1\nT_w, T_ref : °C\nT_K : K\nT_F : °F\n"
+                             "ΔT : Δ°C\n";
+    passes(decl, {"k_T = k_20*θ^(T_w - 20)", "k_T = k_20*1.024^(T_w - 20)",
+                  "k_T = k_20*θ^(T_w - T_ref)", "k_T = k_20*θ^ΔT", "k_T = k_20*θ^(T_K - 293.15)",
+                  "k_T = k_20*θ^((T_F - 32)/1.8 - 20)"});
+    fails_with(decl, {"k_T = k_20*θ^(T_F - 20)", "k_T = k_20*θ^(T_F - 68)"},
+               plumb::rules::unit_scale);
+    fails_with(decl, {"k_T = k_20*θ^T_w", "k_T = k_20*θ^T_K"}, plumb::rules::dimensioned_exponent);
+    fails_with(decl, {"k_T = k_20*(T_w - 20)^θ"}, plumb::rules::variable_exponent);
+    const auto r = run(decl, "k_T = k_20*θ^(T_w - 20)");
+    CHECK(count_of(r, plumb::rules::temperature_correction) == 1);
+}

@@ -42,6 +42,7 @@ inline constexpr std::string_view circular_reference = "circular-reference";
 inline constexpr std::string_view not_checked = "not-checked";
 inline constexpr std::string_view sidecar_problem = "sidecar-problem";
 inline constexpr std::string_view gravity_number = "gravity-number";
+inline constexpr std::string_view temperature_correction = "temperature-correction";
 
 struct rule_info {
     std::string_view id;

@@ -3517,6 +3517,8 @@ class checker {
 
     typed_term apply_power(const typed_term& base, const typed_term& exponent,
                            std::uint32_t base_node, std::uint32_t exponent_node) {
+        if (counts_degrees_above_a_reference(base, exponent))
+            return temperature_correction(base, exponent, exponent_node);
         if (exponent.known && !exponent.dim.is_dimensionless()) {
             diagnostic& d = report(rules::dimensioned_exponent,
                                    fmt::format("the exponent {} has a dimension; an exponent must "
@@ -3588,6 +3590,59 @@ class checker {
             return unknown_type();
         }
         result.dim = base.dim.pow(*exponent.value);
+        return result;
+    }
+
+    // k_T = k_20*θ^(T - 20): the trades' temperature correction of a rate (the van 't Hoff-
+    // Arrhenius form of water and wastewater treatment; common practice) raises a number θ to
+    // the kelvins, or degrees Celsius, above a reference temperature. θ is per kelvin, a unit
+    // the formula leaves unwritten, so the exponent must count kelvins: a difference of
+    // readings, or a reading less its reference.
+    static bool counts_degrees_above_a_reference(const typed_term& base,
+                                                 const typed_term& exponent) {
+        return base.known && exponent.known && base.dim.is_dimensionless() &&
+               base.offset == nullptr && !exponent.numeric &&
+               exponent.dim == temperature_dimension() &&
+               (exponent.reading_or_difference ||
+                (!exponent.point && exponent.offset == nullptr && exponent.zero_of == nullptr));
+    }
+
+    typed_term temperature_correction(const typed_term& base, const typed_term& exponent,
+                                      std::uint32_t exponent_node) {
+        cut_literals_to(base.literal_begin);
+        typed_term result;
+        // A reading converted to another scale ((T_F - 32)/1.8) counts that scale's degrees.
+        const double degree = exponent.offset != nullptr ? exponent.offset->factor : exponent.scale;
+        if (std::isfinite(degree) && std::abs(degree - 1.0) < 1e-9) {
+            diagnostic& d = report(
+                rules::temperature_correction,
+                fmt::format("the exponent {} is read as the kelvins (degrees Celsius) above a "
+                            "reference temperature, as in a rate's temperature correction",
+                            quote(exponent_node)),
+                file_.nodes[exponent_node].range);
+            d.level = severity::note;
+            d.notes.push_back({"the number raised to it is then per kelvin: the formula holds "
+                               "only for temperatures in °C or K, with the reference it was "
+                               "fitted at",
+                               {}});
+            return result;
+        }
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("the exponent {} counts degrees of another size than the kelvin; "
+                               "a temperature correction's number is per kelvin (degree Celsius)",
+                               quote(exponent_node)),
+                   file_.nodes[exponent_node].range);
+        add_term(d, {exponent, exponent_node});
+        if (std::isfinite(degree))
+            d.notes.push_back(
+                {fmt::format("as written the exponent is {} times the kelvins it stands for",
+                             format_factor(1.0 / degree)),
+                 {}});
+        d.notes.push_back({"convert the readings to °C first, and the reference with them "
+                           "(20 °C is 68 °F)",
+                           {}});
+        result.scale = std::numeric_limits<double>::quiet_NaN(); // reported once
         return result;
     }
 

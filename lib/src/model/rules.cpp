@@ -6,7 +6,7 @@
 namespace plumb::rules {
 
 std::span<const rule_info> all() {
-    static constexpr std::array<rule_info, 34> table = {{
+    static constexpr std::array<rule_info, 35> table = {{
         {syntax, "a line does not follow the notation"},
         {sum_mismatch, "the terms of a sum or difference differ in dimension"},
         {side_mismatch, "the sides of an equation or limit differ in dimension"},
@@ -47,6 +47,8 @@ std::span<const rule_info> all() {
         {not_checked, "a workbook formula plumb cannot check, named with its cell (warning)"},
         {gravity_number, "a number in a formula is read as standard gravity in the units around "
                          "it (9.81, 32.2, the oilfield's 0.052) (note)"},
+        {temperature_correction, "a rate's temperature correction θ^(T - 20) read as counting "
+                                 "kelvins above a reference temperature (note)"},
         {sidecar_problem, "a cells line that names no sheet of its workbook, or stands outside a "
                           "workbook's sidecar (error)"},
     }};
