@@ -314,3 +314,20 @@ TEST_CASE("a rate's temperature correction counts kelvins above a reference") {
     const auto r = run(decl, "k_T = k_20*θ^(T_w - 20)");
     CHECK(count_of(r, plumb::rules::temperature_correction) == 1);
 }
+
+// Thiem: T = Q·ln(r_2/r_1)/(2π·(s_1 − s_2)); Cooper-Jacob: T = 2.3·Q/(4π·Δs) (Freeze and
+// Cherry, Groundwater, 1979, ch. 8, from memory); 1 d = 1440 min (NIST SP 811 (2008), B.8), so
+// in gal/(d·ft) from gpm and ft the coefficients are 1440·ln 10/(2π) = 527.7 and
+// 1440·ln 10/(4π) = 263.9, printed 528 and 264 (common practice).
+TEST_CASE("the well-flow formulas' constants folded with minutes per day") {
+    const std::string decl = "T_gpd : gal/(d*ft)\nQ_gpm : gpm\nΔs, s_1, s_2, r_1, r_2 : ft\n";
+    passes(decl, {"T_gpd = 264*Q_gpm/Δs", "T_gpd = 528*Q_gpm*log10(r_2/r_1)/(s_1 - s_2)",
+                  "T_gpd = 1440*2.3*Q_gpm/(4*pi*Δs)"});
+    fails_with(decl,
+               {"T_gpd = Q_gpm/(264*Δs)", "T_gpd = Q_gpm*log10(r_2/r_1)/(528*(s_1 - s_2))",
+                "T_gpd = 35.2*Q_gpm/Δs", "T_gpd = 270*Q_gpm/Δs", "T_gpd = 1441*Q_gpm/Δs"},
+               plumb::rules::unit_scale);
+    const auto r = run(decl, "T_gpd = 264*Q_gpm/Δs");
+    REQUIRE(count_of(r, plumb::rules::trade_constant) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::trade_constant), "Cooper-Jacob"));
+}

@@ -2664,6 +2664,30 @@ class checker {
     // number that is one digit times a power of ten is tried as that power of ten, and any
     // number as 4/π or π/4 times a conversion; where the units then reconcile, the rest is a
     // dimensionless coefficient, as the formula means it.
+    // The constants of well-known formulas that the trades fold with a unit conversion into one
+    // printed number, written to 3 or more digits: 0.4085*Q_gpm/d_in^2 (4/π), the well-flow
+    // formulas' T = 528*Q*log10(r_2/r_1)/Δs and T = 264*Q/Δs in gal/(d·ft) from gpm and ft
+    // (1440 min/d times ln 10/(2π), Thiem, and ln 10/(4π), Cooper-Jacob; Freeze and Cherry,
+    // Groundwater, 1979, ch. 8, from memory). A number that needs one the wrong way round is
+    // not read so.
+    struct folded_constant {
+        double value;
+        const char* written;
+        const char* what;
+        bool whole_three_digits; // also read in a whole number of 3 digits (528, 264)
+    };
+    static std::span<const folded_constant> folded_constants() {
+        static const std::array<folded_constant, 4> constants{{
+            {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false},
+            {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false},
+            {std::numbers::ln10 / (2.0 * std::numbers::pi), "ln 10/(2\u03C0)",
+             "the steady well-flow (Thiem) formula's constant, with log10 for ln,", true},
+            {std::numbers::ln10 / (4.0 * std::numbers::pi), "ln 10/(4\u03C0)",
+             "the straight-line (Cooper-Jacob) well-test formula's constant", true},
+        }};
+        return constants;
+    }
+
     bool accept_folded_coefficient(std::span<const scaled_operand> parts, double& unit) {
         constexpr std::size_t most_numbers = 8;
         std::array<scale_literal, most_numbers> changed_literals{};
@@ -2710,11 +2734,14 @@ class checker {
                             return true;
                         continue;
                     }
-                    // Only numbers written to 3 or more digits, as folded factors are.
-                    if (!l.factor_like)
+                    // Only numbers written to 3 or more digits, as folded factors are (528
+                    // too, where whole numbers must otherwise reach 1000).
+                    if (!l.factor_like && !(l.value >= 100.0 && l.value < 1000.0))
                         continue;
-                    for (const double circle : {4.0 / std::numbers::pi, std::numbers::pi / 4.0}) {
-                        as.value = l.value / circle;
+                    for (const folded_constant& c : folded_constants()) {
+                        if (!l.factor_like && !c.whole_three_digits)
+                            continue;
+                        as.value = l.value / c.value;
                         as.low.reset();
                         as.high.reset();
                         as.power_of_ten = false;
@@ -2722,11 +2749,10 @@ class checker {
                             continue;
                         diagnostic& d =
                             report(rules::trade_constant,
-                                   fmt::format("{} is read as {} times the unit conversion {}: the "
-                                               "area of a circle folded into the factor",
-                                               text(file_.nodes[l.node].range),
-                                               circle > 1.0 ? "4/\u03C0" : "\u03C0/4",
-                                               format_factor(std::nullopt, as.value)),
+                                   fmt::format("{} is read as {} times the unit conversion {}: {} "
+                                               "folded into the factor",
+                                               text(file_.nodes[l.node].range), c.written,
+                                               format_factor(std::nullopt, as.value), c.what),
                                    file_.nodes[l.node].range);
                         d.level = severity::note;
                         return true;
