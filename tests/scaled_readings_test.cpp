@@ -77,3 +77,27 @@ TEST_CASE("an angle in degrees inside sin, cos or tan: the conversion is written
     // 1° = π/180 rad (SI Brochure 9th ed., Table 8): written so, it passes.
     passes(angles, {"@sling-radians T = W/(n*sin(β*π/180))"});
 }
+
+// A reading multiplied: the fix offered must suit the physics where the dimension can tell
+// (a coefficient per degree of a volume, β·V·ΔT; a heat flow per degree, ṁ·c_p·ΔT; common
+// practice) and give both fixes, each with the laws it suits, where it cannot (ρ·c_p·T has
+// the dimension of ρ·R_s·T, the gas law p = ρ·R_s·T).
+TEST_CASE("a reading multiplied: the fix offered suits what multiplies it") {
+    const std::string decl = "ΔV, V : m^3\nβ : 1/K\nT_F : °F\nT_o : °C\nQ_h : kW\nρ : kg/m^3\n"
+                             "c_p : kJ/(kg*K)\nV_a : m^3/s\nm_w : kg/s\n";
+    const auto expansion = run(decl, "ΔV = V*β*T_F");
+    REQUIRE(count_of(expansion, plumb::rules::offset_scale) == 1);
+    const auto& e = first_under(expansion, plumb::rules::offset_scale);
+    CHECK(says(e, "a coefficient per degree multiplies a temperature difference"));
+    CHECK_FALSE(says(e, "adding 459.67"));
+    const auto heat = run(decl, "Q_h = m_w*c_p*T_o");
+    REQUIRE(count_of(heat, plumb::rules::offset_scale) == 1);
+    const auto& h = first_under(heat, plumb::rules::offset_scale);
+    CHECK(says(h, "T_other"));
+    CHECK_FALSE(says(h, "adding 273.15"));
+    const auto either = run(decl, "V_a = Q_h/(ρ*c_p*T_o)");
+    REQUIRE(count_of(either, plumb::rules::offset_scale) == 1);
+    const auto& x = first_under(either, plumb::rules::offset_scale);
+    CHECK(says(x, "if the law needs absolute temperature"));
+    CHECK(says(x, "if it stands for a rise or a drop"));
+}

@@ -3107,6 +3107,31 @@ class checker {
         return name == "power" || name == "heat flux or irradiance";
     }
 
+    // α, β·V, R_20·α: a coefficient per degree of whatever it scales. Not where the product
+    // with a temperature could be a gas law's or a heat's: an energy (n·R·T, m·c_p·T), a
+    // pressure (ρ·R_s·T), an energy per mass (R_s·T) or per mole (R·T).
+    static bool is_per_degree_coefficient(const compact_dimension& partner) {
+        if (is_heat_per_degree(partner))
+            return false;
+        try {
+            const dimension d = partner.expand();
+            if (d.exponent(base_dimension::temperature) != rational(-1))
+                return false;
+            const dimension scaled = (partner * temperature_dimension()).expand();
+            const auto is = [&](int m, int l, int t, int n) {
+                return scaled.exponent(base_dimension::mass) == rational(m) &&
+                       scaled.exponent(base_dimension::length) == rational(l) &&
+                       scaled.exponent(base_dimension::time) == rational(t) &&
+                       scaled.exponent(base_dimension::amount) == rational(n) &&
+                       scaled.exponent(base_dimension::current).is_zero() &&
+                       scaled.exponent(base_dimension::luminous_intensity).is_zero();
+            };
+            return !(is(1, 2, -2, 0) || is(1, -1, -2, 0) || is(0, 2, -2, 0) || is(1, 2, -2, -1));
+        } catch (const std::exception&) {
+            return false;
+        }
+    }
+
     // A value on an offset scale used where only an absolute one makes sense.
     void report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where,
                        const compact_dimension* partner = nullptr) {
@@ -3133,9 +3158,9 @@ class checker {
                 return;
             }
         }
-        // A coefficient per degree (α in R_20*(1 + α*T)) multiplies a difference from its
-        // reference temperature, not an absolute temperature.
-        if (temperature && partner != nullptr && *partner == temperature_dimension().pow(-1)) {
+        // A coefficient per degree (α in R_20*(1 + α*T), β in V*β*T) multiplies a difference
+        // from its reference temperature, not an absolute temperature.
+        if (temperature && partner != nullptr && is_per_degree_coefficient(*partner)) {
             const std::string reference = reference_temperature();
             d.notes.push_back(
                 {fmt::format("a coefficient per degree multiplies a temperature difference: "
@@ -3152,8 +3177,9 @@ class checker {
         if (temperature && partner != nullptr && is_heat_per_degree(*partner)) {
             d.notes.push_back(
                 {fmt::format("a heat flow per degree (U·A, ṁ·c_p) multiplies a "
-                             "temperature difference: write ({} - T_2), the difference between "
-                             "the two temperatures, not the reading in kelvins",
+                             "temperature difference: write ({} - T_other), with T_other the "
+                             "other stream's or side's temperature; the reading converted to "
+                             "kelvins would pass this check and be many times too large",
                              display_text(file_.nodes[node].range)),
                  {}});
             d.notes.push_back({"a difference of two values on the same scale, such as T_2 - T_1, "
@@ -3161,19 +3187,25 @@ class checker {
                                {}});
             return;
         }
+        // The physics decides which fix is right, and a dimension cannot tell ρ·c_p·T from
+        // ρ·R·T: each fix is given with the formulas it suits.
         d.notes.push_back(
             {temperature
-                 ? fmt::format("gas laws, Arrhenius and radiation need absolute temperature: "
-                               "declare it in K (or °R), or convert the {} value first by adding "
-                               "{:g}",
+                 ? fmt::format("if the law needs absolute temperature (gas laws, Arrhenius, "
+                               "radiation): declare it in K (or °R), or convert the {} value "
+                               "first by adding {:g}",
                                unit.symbol, unit.offset / unit.factor)
                  : fmt::format("gas laws and pressure ratios need absolute pressure: add the "
                                "atmospheric pressure, or declare it as an absolute pressure "
                                "(Pa, bar, psia)"),
              {}});
         d.notes.push_back(
-            {"a difference of two values on the same scale, such as T_2 - T_1, is an ordinary "
-             "quantity and may be used freely",
+            {temperature
+                 ? std::string("if it stands for a rise or a drop (a heat balance, an "
+                               "expansion): write the difference of two readings, such as "
+                               "T_2 - T_1, an ordinary quantity that may be used freely")
+                 : std::string("a difference of two values on the same scale, such as p_2 - p_1, "
+                               "is an ordinary quantity and may be used freely"),
              {}});
     }
 
