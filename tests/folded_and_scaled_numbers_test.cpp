@@ -331,3 +331,16 @@ TEST_CASE("the well-flow formulas' constants folded with minutes per day") {
     REQUIRE(count_of(r, plumb::rules::trade_constant) == 1);
     CHECK(plumb::test::says(first_under(r, plumb::rules::trade_constant), "Cooper-Jacob"));
 }
+
+// P = ½·ρ·A·v³·C_p (wind power, common practice) with P in kW: the ½ is the formula's own,
+// and the finding names only the units; a number of more digits is named as a coefficient.
+TEST_CASE("a one-digit number is not named as a coefficient beside a unit finding") {
+    const std::string decl = "P : kW\nρ : kg/m^3\nA : m^2\nv : m/s\nC_p : 1\n";
+    const auto half = run(decl, "P = 0.5*ρ*A*v^3*C_p");
+    REQUIRE(count_of(half, plumb::rules::unit_scale) == 1);
+    CHECK_FALSE(plumb::test::says(first_under(half, plumb::rules::unit_scale), "coefficient"));
+    const auto fitted = run(decl, "P = 0.47*ρ*A*v^3");
+    REQUIRE(count_of(fitted, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(fitted, plumb::rules::unit_scale),
+                            "0.47 counted as a coefficient"));
+}

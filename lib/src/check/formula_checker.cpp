@@ -2502,7 +2502,9 @@ class checker {
             for (const std::size_t side : {r.odd, r.reference})
                 for (const scale_literal& l : parts[side].literals)
                     if (l.value != 1.0 && !looks_like_conversion(l, true) &&
-                        file_.nodes[l.node].kind == expr_kind::number && coefficients.size() < 80)
+                        file_.nodes[l.node].kind == expr_kind::number &&
+                        significant_digits(text(file_.nodes[l.node].range)) >= 2 &&
+                        coefficients.size() < 80)
                         coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ",
                                                     text(file_.nodes[l.node].range));
             if (!coefficients.empty())
@@ -2525,6 +2527,24 @@ class checker {
                                        multiply ? "multiply" : "divide", quote(op.node), factor),
                            {}});
         return false;
+    }
+
+    // "0.5", "2", "4e3": one digit, as a formula's own numbers (½ρv², 2πr) are written, and
+    // no conversion is; not worth a note beside a finding.
+    static int significant_digits(std::string_view written) {
+        int digits = 0;
+        bool leading = true;
+        for (const char c : written) {
+            if (c == 'e' || c == 'E')
+                break;
+            if (c < '0' || c > '9')
+                continue;
+            if (leading && c == '0')
+                continue;
+            leading = false;
+            ++digits;
+        }
+        return digits;
     }
 
     static bool near_power_of_ten(double v, double tolerance) {
