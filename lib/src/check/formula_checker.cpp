@@ -71,6 +71,10 @@ const compact_dimension& length_dimension() {
     static const compact_dimension d(dimension::base(base_dimension::length));
     return d;
 }
+const compact_dimension& time_dimension() {
+    static const compact_dimension d(dimension::base(base_dimension::time));
+    return d;
+}
 const compact_dimension& velocity_squared_dimension() {
     static const compact_dimension d(
         dimension::base(base_dimension::length) * dimension::base(base_dimension::length) /
@@ -634,6 +638,58 @@ class checker {
         note_bare_number_side(d, sides);
         if (!note_gravity_in_other_units(d, sides, a))
             note_acceleration_apart(d, sides, a);
+        note_time_count_apart(d, sides, a);
+    }
+
+    // "E_a = P*8760" with E_a in kWh: the sides differ by exactly a time, and a number in the
+    // formula counts hours in a year. It carries no unit, so the formula needs one given.
+    void note_time_count_apart(diagnostic& d, std::span<const operand> ops,
+                               const agreement& a) const {
+        if (!a.reference || ops.size() > notes_for_terms_up_to || a.odd.empty())
+            return;
+        const typed_term& odd = ops[a.odd.front()].type;
+        if (!odd.known)
+            return;
+        try {
+            const compact_dimension apart = *a.reference / odd.dim;
+            if (!(apart == time_dimension()) && !(apart == time_dimension().pow(-1)))
+                return;
+        } catch (const std::exception&) {
+            return;
+        }
+        struct time_count {
+            double value;
+            const char* unit;
+            const char* meaning;
+        };
+        // NIST SP 811 (2008), B.8: 1 d = 24 h = 1440 min = 86 400 s, 1 h = 3600 s; a year of
+        // 365 d is 8760 h, a week 168 h.
+        static constexpr std::array<time_count, 7> counts{{
+            {8760.0, "h", "the hours in a year"},
+            {365.0, "d", "the days in a year"},
+            {168.0, "h", "the hours in a week"},
+            {24.0, "h", "the hours in a day"},
+            {1440.0, "min", "the minutes in a day"},
+            {3600.0, "s", "the seconds in an hour"},
+            {86400.0, "s", "the seconds in a day"},
+        }};
+        for (const operand& op : ops)
+            for (std::uint32_t i = 0; i < op.type.literal_count; ++i) {
+                const scale_literal& l = literals_[op.type.literal_begin + i];
+                if (file_.nodes[l.node].kind != expr_kind::number)
+                    continue;
+                for (const time_count& c : counts)
+                    if (l.value == c.value) {
+                        const std::string_view written = text(file_.nodes[l.node].range);
+                        d.notes.push_back(
+                            {fmt::format("the sides differ by exactly a time, and {} reads as {}: "
+                                         "a number carries no unit, so write it with its own, "
+                                         "{} {{{}}}",
+                                         written, c.meaning, written, c.unit),
+                             {}});
+                        return;
+                    }
+            }
     }
 
     // "p = ρ*h", "H = p/ρ": the odd term differs from the others by exactly an acceleration,
