@@ -839,3 +839,19 @@ TEST_CASE("stated coefficients: a failed line leaves no statement behind") {
     REQUIRE(tree.formulas.size() == 1);
     CHECK(tree.coefficient_statements.size() == 1);
 }
+
+TEST_CASE("inference: a stated coefficient that cannot be restated names the term that fixed it") {
+    // API 650's one-foot method t_d = 2.6·D·(H − 1)·G/S_d + CA (in, ft, psi; from memory), with
+    // the corrosion allowance typed in mm beside a thickness in inches: the CA term fixes the
+    // coefficient's units, and the thickness then disagrees by 25.4 (1 in = 25.4 mm exactly,
+    // NIST SP 811 (2008), B.8).
+    const std::string declarations = "t_d, CA : in\nCA_mm : mm\nD, H : ft\nS_d : psi\nG : 1\n";
+    const run mm = infer(declarations + "t_d = 2.6?[M L^-2 T^-2, SI 4901 ± 0.5%]*D*(H - 1 {ft})*"
+                                        "G/S_d + CA_mm\n");
+    REQUIRE(mm.with_rule(plumb::rules::coefficient_mismatch).size() == 1);
+    const diagnostic& d = *mm.with_rule(plumb::rules::coefficient_mismatch)[0];
+    CHECK(has_note(d, "one counts 25.4 times the other), once 'CA_mm' has fixed"));
+    const run inches = infer(declarations + "t_d = 2.6?[M L^-2 T^-2, SI 4901 ± 0.5%]*D*(H - 1 "
+                                            "{ft})*G/S_d + CA\n");
+    CHECK(inches.with_rule(plumb::rules::coefficient_mismatch).empty());
+}

@@ -170,6 +170,7 @@ class tracer {
     symbol_table& symbols_;
     std::uint32_t coefficient_;
     std::optional<std::vector<scale_factor>> c_; // the coefficient's factor, once fixed
+    std::uint32_t fixed_by_ = syntax::no_index;  // the term it was fixed against
     std::string why_not_;
     std::vector<std::pair<std::uint32_t, std::string>> bound_; // position, "V in ft/s"
 
@@ -220,9 +221,13 @@ class tracer {
             const double ratio = value_of(x.factors) / value_of(y.factors);
             if (std::abs(ratio - 1.0) <= 1e-9)
                 return true;
-            why_not_ = fmt::format("{} and {} are not in the same units (as written, one counts "
-                                   "{:.6g} times the other)",
-                                   quote(node_a), quote(node_b), ratio);
+            why_not_ = fmt::format(
+                "{} and {} are not in the same units (as written, one counts "
+                "{:.6g} times the other){}",
+                quote(node_a), quote(node_b), ratio,
+                fixed_by_ == syntax::no_index
+                    ? std::string()
+                    : fmt::format(", once {} has fixed the coefficient's units", quote(fixed_by_)));
             return false;
         }
         // c^(px - py) = σ0_y / σ0_x.
@@ -231,6 +236,7 @@ class tracer {
         append(c, y.factors, e);
         append(c, x.factors, -e);
         c_ = std::move(c);
+        fixed_by_ = x.k_power.is_zero() ? node_a : node_b;
         return true;
     }
 
