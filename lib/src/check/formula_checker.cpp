@@ -304,6 +304,20 @@ struct reference_state_pairs {
     bool any() const { return number_count > 0 && reading_count > 0; }
 };
 
+// What a unit-scale finding calls the operands it compares: "terms of this sum", or
+// "arguments" of "max". Kept in two parts and joined only for a finding, so that a call of
+// max or atan2 formats no name of its own (issue 12).
+struct meeting_point {
+    meeting_point(const char* what) : what(what) {}                // NOLINT: as a string_view
+    meeting_point(std::string_view what, std::string_view of = {}) // NOLINT: as above
+        : what(what), of(of) {}
+    [[nodiscard]] std::string name() const {
+        return of.empty() ? std::string(what) : fmt::format("{} of {}", what, of);
+    }
+    std::string_view what;
+    std::string_view of; // the function whose arguments they are, or empty
+};
+
 struct agreement {
     std::optional<compact_dimension> reference; // the dimension most operands share
     std::vector<std::size_t> odd;               // operands that differ from it
@@ -2409,7 +2423,7 @@ class checker {
     // Terms of one dimension in different units give numbers off by a factor, unless numbers
     // in the formula supply that conversion, the right way round. `unit` receives the SI value
     // of the unit they agree in. False when a finding was reported.
-    [[gnu::always_inline]] bool check_scales(std::span<const operand> ops, std::string_view what,
+    [[gnu::always_inline]] bool check_scales(std::span<const operand> ops, meeting_point what,
                                              double& unit,
                                              optional_rational* exact_unit = nullptr) {
         if (exact_unit != nullptr)
@@ -2457,7 +2471,7 @@ class checker {
 
     // check_scales past its fast path, out of line so that the meeting points it settles do
     // not pay for this one's frame.
-    [[gnu::noinline]] bool reconcile_scales(std::span<const operand> ops, std::string_view what,
+    [[gnu::noinline]] bool reconcile_scales(std::span<const operand> ops, meeting_point what,
                                             double& unit, bool with_numbers) {
         if (with_numbers && units_agree_with_plain_numbers(ops, unit))
             return true;
@@ -2541,7 +2555,7 @@ class checker {
                    fmt::format("as written, {} counts {} times as much as {}: the {} agree in "
                                "dimension but not in unit",
                                quote(op.node), format_factor(exact_ratio, ratio),
-                               quote(reference.node), what),
+                               quote(reference.node), what.name()),
                    file_.nodes[op.node].range);
         d.level = severity::warning;
         add_term(d, op);
@@ -3947,8 +3961,8 @@ class checker {
                 return unknown_type();
             }
             double unit = 1.0;
-            const bool scales_agree = check_scales(values, fmt::format("arguments of {}", f->name),
-                                                   unit, &result.exact_scale);
+            const bool scales_agree =
+                check_scales(values, {"arguments", f->name}, unit, &result.exact_scale);
             cut_literals_to(literal_start);
             if (f->rule == function_rule::angle_of)
                 return result;
@@ -4082,7 +4096,7 @@ class checker {
             return unknown_type();
         }
         double unit = 1.0;
-        const bool scales_agree = check_scales(tail, fmt::format("{} of {}", others, f.name), unit);
+        const bool scales_agree = check_scales(tail, {others, f.name}, unit);
         if (!std::all_of(tail.begin(), tail.end(), [](const operand& o) { return o.type.known; }))
             return unknown_type();
         typed_term result;

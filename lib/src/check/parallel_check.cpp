@@ -52,9 +52,12 @@ bool same_finding(const diagnostic& a, const diagnostic& b) {
 // A file's findings sorted by position, with repeats dropped: a conflict between two
 // dictionaries seen from several files, or a dictionary's own findings found by two sessions.
 void append_in_order(std::vector<diagnostic>& out, std::vector<diagnostic>& found) {
-    std::stable_sort(found.begin(), found.end(), [](const diagnostic& a, const diagnostic& b) {
+    const auto before = [](const diagnostic& a, const diagnostic& b) {
         return a.where.range.begin < b.where.range.begin;
-    });
+    };
+    // Mostly they come in order, formula by formula: then a stable sort only costs.
+    if (!std::is_sorted(found.begin(), found.end(), before))
+        std::stable_sort(found.begin(), found.end(), before);
     const std::size_t first_of_file = out.size();
     for (auto& d : found) {
         // Repeats sit together once sorted: look back over the same position, and over the

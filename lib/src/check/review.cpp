@@ -33,14 +33,17 @@ void review_findings(check_report& report, const check_options& options) {
     std::map<const source_file*, std::size_t> order;
     for (std::size_t i = 0; i < report.sources.size(); ++i)
         order.emplace(report.sources[i].get(), i + 1);
-    std::stable_sort(report.diagnostics.begin(), report.diagnostics.end(),
-                     [&](const diagnostic& a, const diagnostic& b) {
-                         const std::size_t fa = a.where.file ? order[a.where.file] : 0;
-                         const std::size_t fb = b.where.file ? order[b.where.file] : 0;
-                         if (fa != fb)
-                             return fa < fb;
-                         return a.where.range.begin < b.where.range.begin;
-                     });
+    const auto before = [&](const diagnostic& a, const diagnostic& b) {
+        const std::size_t fa = a.where.file ? order[a.where.file] : 0;
+        const std::size_t fb = b.where.file ? order[b.where.file] : 0;
+        if (fa != fb)
+            return fa < fb;
+        return a.where.range.begin < b.where.range.begin;
+    };
+    // Where nothing was added they are in order already, and a stable sort would still
+    // compare and move each one some log n times (issue 12).
+    if (!std::is_sorted(report.diagnostics.begin(), report.diagnostics.end(), before))
+        std::stable_sort(report.diagnostics.begin(), report.diagnostics.end(), before);
 }
 
 } // namespace plumb

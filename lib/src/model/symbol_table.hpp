@@ -54,7 +54,9 @@ class symbol_table {
     std::pair<symbol_entry*, bool> insert(std::string_view name, const symbol_entry& entry) {
         if (symbol_entry* existing = find(name))
             return {existing, false};
-        if ((names_.size() + 1) * 2 > slots_.size())
+        // At most a quarter full: a look-up then probes 1.2 slots on average rather than 1.5
+        // at half, for 16 bytes a slot beside an entry of some 350.
+        if ((names_.size() + 1) * 4 > slots_.size())
             grow();
         names_.push_back(name);
         entries_.push_back(entry);

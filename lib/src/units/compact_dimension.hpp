@@ -29,12 +29,14 @@ class compact_dimension {
     [[nodiscard]] dimension expand() const;
     [[nodiscard]] bool is_dimensionless() const { return same_bits(*this, compact_dimension{}); }
 
+    // The same bits are the same dimension: fitted ones are canonical, and an arena one's
+    // bits are its index. Otherwise only two arena ones can still be equal, as a dimension
+    // that fits is never in the arena.
     [[gnu::always_inline]] friend bool operator==(const compact_dimension& a,
                                                   const compact_dimension& b) {
-        if (a.den_ != 0 && b.den_ != 0) // both fitted: the form is canonical
-            return same_bits(a, b);
-        // A dimension that fits is never in the arena, so only two arena ones can be equal.
-        return a.den_ == 0 && b.den_ == 0 && equal_in_arena(a, b);
+        if (same_bits(a, b))
+            return true;
+        return (a.den_ | b.den_) == 0 && equal_in_arena(a, b);
     }
 
     // Whole exponents that stay in range are added here; anything else goes through
