@@ -101,3 +101,21 @@ TEST_CASE("a reading multiplied: the fix offered suits what multiplies it") {
     CHECK(says(x, "if the law needs absolute temperature"));
     CHECK(says(x, "if it stands for a rise or a drop"));
 }
+
+// The mixed temperature of two streams of one liquid, T_mix = (ṁ_h·T_h + ṁ_c·T_c)/(ṁ_h + ṁ_c),
+// holds on any temperature scale, since the weights sum to one (common practice).
+TEST_CASE("readings times weights over the sum of the weights are their weighted mean") {
+    const std::string decl = "T_mix, T_h, T_c : °C\nT_K : K\nT_F : °F\nq_h, q_c, q_m : kg/s\n"
+                             "V_h : L/s\np_1, p_2, p_m : barg\nA_1, A_2 : m^2\n";
+    passes(decl,
+           {"T_mix = (q_h*T_h + q_c*T_c)/(q_h + q_c)", "T_mix = (T_h*q_h + T_c*q_c)/(q_c + q_h)",
+            "p_m = (A_1*p_1 + A_2*p_2)/(A_1 + A_2)"});
+    fails_with(
+        decl,
+        {"T_mix = (q_h*T_h + q_c*T_c)/q_m", "T_mix = (q_h*T_h + q_c*T_c)/(q_h + q_m)",
+         "T_mix = (q_h*T_h + q_c*T_F)/(q_h + q_c)", "T_mix = (q_h*T_h + V_h*T_c)/(q_h + V_h)",
+         "T_mix = (q_h*T_h + q_c*T_c)/(q_h - q_c)", "T_mix = (q_h*T_h - q_c*T_c)/(q_h + q_c)"},
+        plumb::rules::offset_scale);
+    // A mean in °C set equal to a reading in K is still an error of the zero.
+    fails_with(decl, {"T_K = (q_h*T_h + q_c*T_c)/(q_h + q_c)"}, plumb::rules::offset_scale);
+}

@@ -3449,7 +3449,84 @@ class checker {
         return with_gauge || (other_pressures == 1 && shape);
     }
 
+    // "(q_h*T_h + q_c*T_c)/(q_h + q_c)": readings on one offset scale, each times a weight,
+    // over the sum of the same weights, are their weighted mean, a reading on that scale
+    // whatever the scale's zero (mixing and blending; common practice). Only where each
+    // reading and weight is a declared symbol, so that nothing is reported twice.
+    std::optional<typed_term> weighted_mean(std::uint32_t index) {
+        const auto strip = [&](std::uint32_t i) {
+            while (file_.nodes[i].kind == expr_kind::group)
+                i = file_.nodes[i].lhs;
+            return i;
+        };
+        constexpr std::size_t most = 8;
+        const auto terms_of = [&](std::uint32_t i, std::array<std::uint32_t, most>& out) {
+            std::size_t count = 0;
+            i = strip(i);
+            while (file_.nodes[i].kind == expr_kind::add) {
+                if (count + 1 >= most)
+                    return std::size_t{0};
+                out[count++] = strip(file_.nodes[i].rhs);
+                i = strip(file_.nodes[i].lhs);
+            }
+            if (file_.nodes[i].kind == expr_kind::subtract || count == 0)
+                return std::size_t{0};
+            out[count++] = i;
+            return count;
+        };
+        const syntax::expr_node& n = file_.nodes[index];
+        std::array<std::uint32_t, most> products{};
+        std::array<std::uint32_t, most> weights{};
+        const std::size_t count = terms_of(n.lhs, products);
+        if (count < 2 || terms_of(n.rhs, weights) != count)
+            return std::nullopt;
+        const auto declared_symbol = [&](std::uint32_t i) {
+            return file_.nodes[i].kind == expr_kind::symbol &&
+                   symbols_.find(text(file_.nodes[i].range)) != nullptr;
+        };
+        std::array<std::uint32_t, most> readings{};
+        std::array<bool, most> weight_used{};
+        for (std::size_t k = 0; k < count; ++k) {
+            const syntax::expr_node& p = file_.nodes[products[k]];
+            if (p.kind != expr_kind::multiply)
+                return std::nullopt;
+            const std::uint32_t a = strip(p.lhs);
+            const std::uint32_t b = strip(p.rhs);
+            if (!declared_symbol(a) || !declared_symbol(b))
+                return std::nullopt;
+            bool matched = false;
+            for (std::size_t w = 0; w < count && !matched; ++w) {
+                if (weight_used[w] || !declared_symbol(weights[w]))
+                    continue;
+                const std::string_view weight = text(file_.nodes[weights[w]].range);
+                if (text(file_.nodes[a].range) == weight || text(file_.nodes[b].range) == weight) {
+                    readings[k] = text(file_.nodes[a].range) == weight ? b : a;
+                    weight_used[w] = matched = true;
+                }
+            }
+            if (!matched)
+                return std::nullopt;
+        }
+        const typed_term first = eval_symbol(file_.nodes[readings[0]]);
+        const typed_term weight = eval_symbol(file_.nodes[weights[0]]);
+        if (!first.known || first.offset == nullptr || !weight.known || weight.numeric ||
+            weight.offset != nullptr)
+            return std::nullopt;
+        for (std::size_t k = 1; k < count; ++k) {
+            const typed_term r = eval_symbol(file_.nodes[readings[k]]);
+            const typed_term w = eval_symbol(file_.nodes[weights[k]]);
+            if (!r.known || r.offset != first.offset || r.scale != first.scale ||
+                !(r.dim == first.dim) || !w.known || w.offset != nullptr ||
+                !(w.dim == weight.dim) || w.scale != weight.scale)
+                return std::nullopt;
+        }
+        return first;
+    }
+
     typed_term eval_product(std::uint32_t index) {
+        if (file_.nodes[index].kind == expr_kind::divide) [[unlikely]]
+            if (const auto mean = weighted_mean(index))
+                return *mean;
         const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
         while (file_.nodes[n].kind == expr_kind::multiply ||
