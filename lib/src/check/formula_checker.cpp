@@ -851,6 +851,7 @@ class checker {
     std::vector<operand>& operands_;
     type_stack& types_;
     std::vector<scale_literal>& literals_;
+    std::vector<scale_literal> common_numbers_; // a sum's common factors, while it is weighed
     std::vector<scaled_operand>& scaled_;
     std::vector<std::size_t>& scaled_index_;
     const syntax::formula* current_ = nullptr; // the formula being checked
@@ -1461,8 +1462,8 @@ class checker {
             return finish_offset_sum(terms, result, literal_base, index);
         if (result.dim.is_dimensionless())
             adopt_numbers_in_scaled_unit(base);
-        common_numbers common;
-        factor_out_common_numbers(terms, common);
+        const std::size_t common_base = common_numbers_.size();
+        factor_out_common_numbers(terms);
         // After a unit-scale finding the scale is unknown (NaN), so it is not reported again
         // further up; the dimension stays known.
         double unit = 1.0;
@@ -1470,8 +1471,11 @@ class checker {
                            ? unit
                            : std::numeric_limits<double>::quiet_NaN();
         cut_literals_to(literal_base);
-        for (std::size_t i = 0; i < common.count; ++i)
-            literals_.push_back(common.numbers[i]);
+        if (common_numbers_.size() > common_base) [[unlikely]] {
+            literals_.insert(literals_.end(), common_numbers_.begin() + common_base,
+                             common_numbers_.end());
+            common_numbers_.resize(common_base);
+        }
         int points = 0;
         for (const auto& t : terms)
             if (t.type.point)
@@ -1480,17 +1484,20 @@ class checker {
         return result;
     }
 
-    struct common_numbers {
-        static constexpr std::size_t most = 4;
-        std::array<scale_literal, most> numbers{};
-        std::size_t count = 0;
-    };
-
     // "F = m_1*g/1000 + m_2*g/1000" into kN is "(m_1*g + m_2*g)/1000": a number that every term
     // carries, to the same power, is a factor of the whole sum. It is taken out of each term
     // (left there as a 1) for the terms to be weighed against one another, and given to the sum,
     // to be weighed where the sum meets the rest of the formula.
-    void factor_out_common_numbers(std::span<const operand> terms, common_numbers& common) {
+    [[gnu::always_inline]] void factor_out_common_numbers(std::span<const operand> terms) {
+        if (terms.size() >= 2 && terms.front().type.literal_count != 0) [[unlikely]]
+            factor_out_common_numbers_of(terms);
+    }
+
+    // The numbers taken out go on common_numbers_, for the sum to put on the literal stack once
+    // its terms are weighed.
+    [[gnu::noinline]] void factor_out_common_numbers_of(std::span<const operand> terms) {
+        constexpr std::size_t most_common = 4;
+        const std::size_t base = common_numbers_.size();
         constexpr std::size_t most_terms = 16;
         if (terms.size() < 2 || terms.size() > most_terms)
             return;
@@ -1498,7 +1505,8 @@ class checker {
             if (!t.type.known || t.type.zero || t.type.numeric || t.type.literal_count == 0)
                 return;
         const typed_term& first = terms.front().type;
-        for (std::uint32_t k = 0; k < first.literal_count && common.count < common.most; ++k) {
+        for (std::uint32_t k = 0;
+             k < first.literal_count && common_numbers_.size() - base < most_common; ++k) {
             const scale_literal& candidate = literals_[first.literal_begin + k];
             if (candidate.value == 1.0)
                 continue;
@@ -1518,7 +1526,7 @@ class checker {
             }
             if (!everywhere)
                 continue;
-            common.numbers[common.count++] = candidate;
+            common_numbers_.push_back(candidate);
             read_as_quantity(literals_[first.literal_begin + k]);
             for (std::size_t i = 1; i < terms.size(); ++i)
                 read_as_quantity(literals_[at[i]]);
@@ -3453,7 +3461,7 @@ class checker {
     // over the sum of the same weights, are their weighted mean, a reading on that scale
     // whatever the scale's zero (mixing and blending; common practice). Only where each
     // reading and weight is a declared symbol, so that nothing is reported twice.
-    std::optional<typed_term> weighted_mean(std::uint32_t index) {
+    [[gnu::noinline]] std::optional<typed_term> weighted_mean(std::uint32_t index) {
         const auto strip = [&](std::uint32_t i) {
             while (file_.nodes[i].kind == expr_kind::group)
                 i = file_.nodes[i].lhs;
@@ -3524,7 +3532,8 @@ class checker {
     }
 
     typed_term eval_product(std::uint32_t index) {
-        if (file_.nodes[index].kind == expr_kind::divide) [[unlikely]]
+        if (file_.nodes[index].kind == expr_kind::divide &&
+            file_.nodes[file_.nodes[index].lhs].kind == expr_kind::group) [[unlikely]]
             if (const auto mean = weighted_mean(index))
                 return *mean;
         const std::size_t spine_base = spine_.size();
