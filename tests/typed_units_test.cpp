@@ -188,3 +188,20 @@ TEST_CASE("--restate-in accepts a set that takes force as a base: ft, lbf, s") {
     CHECK(plumb::restate_units_problem({"furlong"}).has_value());
     CHECK(plumb::restate_units_problem({"\u00B0C"}).has_value());
 }
+
+// Gas trades size by volume at reference conditions: the normal cubic metre at 0 °C and
+// 101.325 kPa (DIN 1343, from memory) and the standard one at 15 °C (ISO 13443, from memory),
+// each a volume, as the oilfield's scf is. "Nm" alone is no unit (N·m is written "N m").
+TEST_CASE("normal and standard cubic metres are units, and a file may say so again") {
+    const auto clean = plumb::check_text(
+        "g.plumb", "measure Nm3 = m^3 \"normal cubic metre\"\nV_n : Nm3\nQ_n : Nm3/h\n"
+                   "Q_s : Sm3/d\nt : h\n@a V_n = Q_n*t\n@b Q_s = Q_n*24\n");
+    CHECK(clean.diagnostics.empty());
+    const auto resized =
+        plumb::check_text("g.plumb", "measure Nm3 = 1.1 m^3\nV_n : Nm3\n@a V_n = V_n\n");
+    REQUIRE(resized.diagnostics.size() == 1);
+    CHECK(resized.diagnostics[0].rule == plumb::rules::conflicting_declaration);
+    const auto torque = plumb::check_text("g.plumb", "M : Nm\n@a M = M\n");
+    REQUIRE_FALSE(torque.diagnostics.empty());
+    CHECK(torque.diagnostics[0].rule == plumb::rules::unknown_unit);
+}

@@ -927,7 +927,17 @@ template <> struct action<nt::measure_statement> {
         const std::string_view name = s.file.text(s.pending_unit_name);
         if (!s.pending_unit_ok)
             return; // its unit was unknown, and said so
-        if (unit_table::standard().resolve(name) || s.find_defined_unit(name) != nullptr) {
+        const std::optional<unit_value> known = lookup_unit(name, s);
+        // "measure Nm3 = m^3" where the table has Nm3 already, of the same size: the file says
+        // what plumb already knows, which is no conflict.
+        if (known && !s.pending_origin &&
+            (s.pending_unit_base == nullptr ||
+             s.pending_unit_base->scale == unit_scale::absolute) &&
+            (known->single == nullptr || known->single->scale == unit_scale::absolute) &&
+            known->dim == s.pending_unit_dim &&
+            std::abs(known->factor / s.pending_unit_factor - 1.0) <= 1e-12)
+            return;
+        if (known || s.find_defined_unit(name) != nullptr) {
             s.report(rules::conflicting_declaration,
                      fmt::format("'{}' is already a unit; choose another name for this one", name),
                      s.pending_unit_name);

@@ -157,6 +157,15 @@ constexpr unit_definition stock_tank_barrel = absolute(
     "STB", "stock-tank barrel (42 U.S. gal)", volume, 0.158987294928, "0.158987294928",
     prefixes::refused,
     "NIST SP 811 (2008), B.8 (bbl); oilfield convention (SPE): a barrel at stock-tank conditions");
+// A gas's volume at reference conditions, as the gas trades size it: a volume, as the
+// oilfield's scf is; a volume at line conditions is a different quantity of gas.
+constexpr unit_definition normal_cubic_metre = absolute(
+    "Nm3", "normal cubic metre (gas at 0 \u00B0C and 101.325 kPa)", volume, 1.0, "1",
+    prefixes::refused, "DIN 1343 (from memory): a cubic metre of gas at 0 \u00B0C and 101.325 kPa");
+constexpr unit_definition standard_cubic_metre =
+    absolute("Sm3", "standard cubic metre (gas at 15 \u00B0C and 101.325 kPa)", volume, 1.0, "1",
+             prefixes::refused,
+             "ISO 13443 (from memory): a cubic metre of gas at 15 \u00B0C and 101.325 kPa");
 constexpr unit_definition ton_of_refrigeration =
     absolute("TR", "ton of refrigeration (12 000 Btu/h)", power, 52752792631.0 / 15000000.0,
              "52752792631/15000000", prefixes::refused,
@@ -422,6 +431,8 @@ constexpr unit_definition rows[] = {
              prefixes::refused, standard_volume_source),
     stock_tank_barrel,
     spelled("stb", stock_tank_barrel),
+    normal_cubic_metre,
+    standard_cubic_metre,
     // Mud weight in pounds per U.S. gallon.
     absolute("ppg", "pound per gallon (U.S.)", dims(1, -3, 0), 736351250.0 / 6145149.0,
              "736351250/6145149", prefixes::refused,
