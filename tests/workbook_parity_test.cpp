@@ -314,7 +314,10 @@ TEST_CASE("workbook parity: a heat flow times a °C reading is told to take the 
 
 TEST_CASE("workbook cells checked are listed with their result when formulas are recorded") {
     // The JSON lists every formula checked, the passing ones too, so a tool reading it can see
-    // which cells were looked at; a workbook's cells count as its formulas.
+    // which cells were looked at; a workbook's cells count as its formulas. A reviewer signs
+    // off cells, not plumb's listing of them: the sign-off report lists each formula cell with
+    // its formula, the unit written for it and its findings, placed as Sheet!Cell, and hashes
+    // the workbook's own bytes once, as checked.
     plumb::test::temp_dir dir;
     const auto path = dir.write(
         "S.xlsx", plumb::test::xlsx_of_one_sheet(
@@ -332,6 +335,16 @@ TEST_CASE("workbook cells checked are listed with their result when formulas are
                                   : std::string("passed")));
     }
     CHECK(graded == std::vector<std::string>{"S!B3 passed", "S!B4 error"});
+    const std::string html = plumb::render_signoff_html(r, plumb::signoff_context{});
+    const auto has = [&](std::string_view text) { return html.find(text) != std::string::npos; };
+    CHECK(has("<td class=\"mono\">S!B3</td><td class=\"mono\">=B2*1000</td>"
+              "<td class=\"mono\">mm</td><td><div class=\"ok\">consistent</div>"));
+    CHECK(has("<td class=\"mono\">S!B4</td><td class=\"mono\">=B2*1000</td>"
+              "<td class=\"mono\">m</td><td><div class=\"finding error\">"));
+    CHECK(has(path.string() + ":S!B4</span>"));
+    CHECK(has("checked (workbook)"));
+    CHECK_FALSE(has("read (dictionary or accepted findings)"));
+    CHECK_FALSE(has("Findings in other files"));
 }
 
 TEST_CASE("workbook parity: a threshold typed as a number in IF is in the compared cell's unit") {
@@ -394,27 +407,4 @@ TEST_CASE("workbook parity: a bare number among MAX's, MIN's or IF's values is i
     CHECK(error_at(r, "S!B7"));
     CHECK_FALSE(error_at(r, "S!B8"));
     CHECK(error_at(r, "S!B9"));
-}
-
-TEST_CASE("sign-off report: a workbook's formula cells are listed by cell, with their units") {
-    // A reviewer signs off cells, not plumb's listing of them: each formula cell appears with
-    // its formula, the unit written for it and its findings, placed as Sheet!Cell, and the
-    // workbook's own bytes are hashed once, as checked.
-    plumb::test::temp_dir dir;
-    const auto path = dir.write(
-        "S.xlsx", plumb::test::xlsx_of_one_sheet(
-                      "S", sheet_of({{"17.28", "m"}, {"=B2*1000", "mm"}, {"=B2*1000", "m"}})));
-    plumb::check_options options;
-    options.record_formulas = true;
-    const check_report r = plumb::check_paths({path}, options);
-    const std::string html = plumb::render_signoff_html(r, plumb::signoff_context{});
-    const auto has = [&](std::string_view text) { return html.find(text) != std::string::npos; };
-    CHECK(has("<td class=\"mono\">S!B3</td><td class=\"mono\">=B2*1000</td>"
-              "<td class=\"mono\">mm</td><td><div class=\"ok\">consistent</div>"));
-    CHECK(has("<td class=\"mono\">S!B4</td><td class=\"mono\">=B2*1000</td>"
-              "<td class=\"mono\">m</td><td><div class=\"finding error\">"));
-    CHECK(has(path.string() + ":S!B4</span>"));
-    CHECK(has("checked (workbook)"));
-    CHECK_FALSE(has("read (dictionary or accepted findings)"));
-    CHECK_FALSE(has("Findings in other files"));
 }

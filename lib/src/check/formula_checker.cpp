@@ -659,18 +659,9 @@ class checker {
     // formula counts hours in a year. It carries no unit, so the formula needs one given.
     void note_time_count_apart(diagnostic& d, std::span<const operand> ops,
                                const agreement& a) const {
-        if (!a.reference || ops.size() > notes_for_terms_up_to || a.odd.empty())
+        const std::optional<compact_dimension> apart = odd_one_apart(ops, a);
+        if (!apart || (!(*apart == time_dimension()) && !(*apart == time_dimension().pow(-1))))
             return;
-        const typed_term& odd = ops[a.odd.front()].type;
-        if (!odd.known)
-            return;
-        try {
-            const compact_dimension apart = *a.reference / odd.dim;
-            if (!(apart == time_dimension()) && !(apart == time_dimension().pow(-1)))
-                return;
-        } catch (const std::exception&) {
-            return;
-        }
         struct time_count {
             double value;
             const char* unit;
@@ -706,20 +697,31 @@ class checker {
             }
     }
 
+    // What the first odd operand lacks against the others' dimension (their quotient), in a
+    // mismatch of a formula's size; nothing where it is not known.
+    std::optional<compact_dimension> odd_one_apart(std::span<const operand> ops,
+                                                   const agreement& a) const {
+        if (!a.reference || ops.size() > notes_for_terms_up_to || a.odd.empty() ||
+            !ops[a.odd.front()].type.known)
+            return std::nullopt;
+        try {
+            return *a.reference / ops[a.odd.front()].type.dim;
+        } catch (const std::exception&) {
+            return std::nullopt;
+        }
+    }
+
     // "p = ρ*h", "H = p/ρ": the odd term differs from the others by exactly an acceleration,
     // the most common slip of all, a missing (or doubled) g. Said outright, since the two
     // dimensions alone ("momentum", "areal density") do not point at it.
     void note_acceleration_apart(diagnostic& d, std::span<const operand> ops,
                                  const agreement& a) const {
-        if (!a.reference || ops.size() > notes_for_terms_up_to || a.odd.empty())
-            return;
-        const typed_term& odd = ops[a.odd.front()].type;
-        if (!odd.known)
+        const std::optional<compact_dimension> apart = odd_one_apart(ops, a);
+        if (!apart)
             return;
         try {
-            const compact_dimension apart = *a.reference / odd.dim;
-            const bool lacks = apart == acceleration_dimension();
-            const bool extra = !lacks && odd.dim / *a.reference == acceleration_dimension();
+            const bool lacks = *apart == acceleration_dimension();
+            const bool extra = !lacks && *apart == acceleration_dimension().pow(-1);
             if (!lacks && !extra)
                 return;
             d.notes.push_back(
