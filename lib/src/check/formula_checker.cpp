@@ -4118,9 +4118,12 @@ class checker {
             return values;
         const bool some_bare = std::any_of(values.begin(), values.end(),
                                            [](const operand& o) { return is_bare_number(o.type); });
+        // Dimensionless values (a ratio, a count) meet a number as one: their scales are
+        // weighed with it, as in the notation.
         const bool some_from_cells =
-            std::any_of(values.begin(), values.end(),
-                        [](const operand& o) { return o.type.known && !o.type.numeric; });
+            std::any_of(values.begin(), values.end(), [](const operand& o) {
+                return o.type.known && !o.type.numeric && !o.type.dim.is_dimensionless();
+            });
         if (!some_bare || !some_from_cells)
             return values;
         for (const operand& o : values)
