@@ -399,12 +399,15 @@ TEST_CASE("workbook parity: a bare number among MAX's, MIN's or IF's values is i
                                  {"=MAX(B2,B6)", "m"},         // B7: m against kN
                                  {"=MAX(B2,0.3)*1000", "mm"},  // B8: right, converted
                                  {"=MAX(B2,0.3)", "mm"},       // B9: m into mm
+                                 {"250", "mm"},                // B10
+                                 {"=MIN(B10/1000/B2,2)", "-"}, // B11: right, a ratio capped
                              }));
-    REQUIRE(r.cells_checked == 6);
+    REQUIRE(r.cells_checked == 7);
     CHECK_FALSE(error_at(r, "S!B3"));
     CHECK_FALSE(error_at(r, "S!B4"));
     CHECK_FALSE(error_at(r, "S!B5"));
     CHECK(error_at(r, "S!B7"));
     CHECK_FALSE(error_at(r, "S!B8"));
     CHECK(error_at(r, "S!B9"));
+    CHECK_FALSE(error_at(r, "S!B11"));
 }
