@@ -411,3 +411,22 @@ TEST_CASE("workbook parity: a bare number among MAX's, MIN's or IF's values is i
     CHECK(error_at(r, "S!B9"));
     CHECK_FALSE(error_at(r, "S!B11"));
 }
+
+TEST_CASE("workbook parity: a lookup's key and its table column agree in their zeros") {
+    // Saturated steam tables are in absolute pressure (IAPWS-IF97; common practice): looked up
+    // with a gauge reading the row is one atmosphere off. 1 atm = 1.01325 bar (SI Brochure 9th
+    // ed., Table 8).
+    const check_report r =
+        check_one_sheet("S", sheet_of({
+                                 {"5", "bar"},                    // B2: table, absolute
+                                 {"6", "bar"},                    // B3
+                                 {"7", "bar"},                    // B4
+                                 {"5.2", "barg"},                 // B5: steam header gauge
+                                 {"=VLOOKUP(B5,B2:B4,1)", "bar"}, // B6: gauge key
+                                 {"=B5+1.01325", "bar"},          // B7: absolute
+                                 {"=VLOOKUP(B7,B2:B4,1)", "bar"}, // B8: right
+                             }));
+    CHECK(error_at(r, "S!B6"));
+    CHECK_FALSE(error_at(r, "S!B7"));
+    CHECK_FALSE(error_at(r, "S!B8"));
+}

@@ -616,11 +616,11 @@ class checker {
                 });
             if (on_offset_scale) {
                 const std::size_t findings_before = out_.size();
-                check_origins(sides, equation);
+                check_origins(sides, what);
                 if (out_.size() == findings_before)
                     check_scales(sides, sides_what, unit);
             } else if (check_scales(sides, sides_what, unit)) {
-                check_origins(sides, equation);
+                check_origins(sides, what);
             }
             return;
         }
@@ -1919,13 +1919,22 @@ class checker {
                 ++absolute_pressures_added;
             }
         }
-        // "p_g + p_atm": any absolute pressure added to a gauge reading supplies its zero.
+        // "p_g + p_atm": an absolute pressure added to a gauge reading supplies its zero, and
+        // any further ones ("p_g + p_atm + p_fric") are drops: one atmosphere at most. Where a
+        // number is added too ("p_g + p_fric + p_static + 14.7"), the number is the
+        // atmosphere and every absolute pressure added is a drop.
+        bool number_added = false;
+        for (const auto& t : terms)
+            number_added = number_added || (is_shift_candidate(t) && !t.subtracted);
         if (gauges > 0 && absolute_pressures_added > 0) {
-            origin -= gauge_zero;
-            --points;
-            weighted_origin -= gauge_zero;
+            if (!number_added) {
+                origin -= gauge_zero;
+                weighted_origin -= gauge_zero;
+            }
+            // The gauge reading and the atmosphere make one reading; drops are no readings.
+            points -= absolute_pressures_added;
             if (weight)
-                weight = *weight - rational(1);
+                weight = *weight - rational(absolute_pressures_added);
         }
         // `unit_tolerance`: how far the unit may be off, relative, when rounded numbers
         // converted it (6.895 for 6.894757 in "6.895*p_g + 101.325").
@@ -2978,18 +2987,21 @@ class checker {
     }
 
     // "T_K = T_C": readings on scales with different zeros set equal or compared.
-    [[gnu::always_inline]] void check_origins(std::span<const operand> sides, bool equation) {
+    // `relation`: "equation", "limit" or "lookup", as the finding names what it is in.
+    [[gnu::always_inline]] void check_origins(std::span<const operand> sides,
+                                              std::string_view relation) {
         // Nearly every formula: no scale's zero as a reading, no weighted readings and every
         // origin absolute, where each step of compare_origins does nothing. One pass says so.
         // A loop of its own: std::all_of was left a call.
         for (const operand& side : sides)
             if (side.type.zero_of != nullptr || side.type.weighted_sum || side.type.origin != 0.0) {
-                compare_origins(sides, equation);
+                compare_origins(sides, relation);
                 return;
             }
     }
 
-    [[gnu::noinline]] void compare_origins(std::span<const operand> sides, bool equation) {
+    [[gnu::noinline]] void compare_origins(std::span<const operand> sides,
+                                           std::string_view relation) {
         if (report_scale_zero_beside_difference(sides))
             return;
         for (const auto& side : sides)
@@ -3046,9 +3058,8 @@ class checker {
                 fmt::format("{} is on the {} scale but {} is on {}: the {} of this {} differ by {} "
                             "{}",
                             quote(off.node), unit != nullptr ? unit->symbol : "offset",
-                            quote(other.node), scale_of_other, "zeros",
-                            equation ? "equation" : "limit", format_factor(std::abs(difference)),
-                            temperature ? "K" : "Pa"),
+                            quote(other.node), scale_of_other, "zeros", relation,
+                            format_factor(std::abs(difference)), temperature ? "K" : "Pa"),
                 file_.nodes[off.node].range);
             add_term(d, off);
             add_term(d, other);
@@ -4227,9 +4238,11 @@ class checker {
                 require_dimensionless(f, args[i]);
             return args[0].type.known ? args[0].type : unknown_type();
         case function_rule::lookup: {
-            typed_term key =
-                agreeing(f, std::span<const operand>(args).first(2), 0, "key and column");
-            (void)key;
+            // A steam table in absolute pressure looked up with a gauge reading: the key and
+            // the column must agree in their zeros too.
+            const std::span<const operand> key_and_column = std::span<const operand>(args).first(2);
+            if (agreeing(f, key_and_column, 0, "key and column").known)
+                check_origins(key_and_column, "lookup");
             return args[2].type.known ? args[2].type : unknown_type();
         }
         case function_rule::pick:
