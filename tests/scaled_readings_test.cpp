@@ -119,3 +119,13 @@ TEST_CASE("readings times weights over the sum of the weights are their weighted
     // A mean in °C set equal to a reading in K is still an error of the zero.
     fails_with(decl, {"T_K = (q_h*T_h + q_c*T_c)/(q_h + q_c)"}, plumb::rules::offset_scale);
 }
+
+// A boiling-point elevation declared in K, added to a vapour temperature in °C: a difference
+// in K beside a reading in °C (SI Brochure 9th ed., 2.3.1: a difference may be given in K or
+// °C); an absolute temperature set equal to it, or 273.15 added, stays an error.
+TEST_CASE("a temperature in K added to a reading in °C is a difference") {
+    const std::string decl = "t_j, t_v : °C\nBPE : K\nT_K, T_K2 : K\n";
+    passes(decl, {"t_j = t_v + BPE", "t_j = BPE + t_v", "t_j - t_v = BPE", "T_K2 = T_K - t_v"});
+    fails_with(decl, {"T_K = t_v + BPE", "t_j = t_v + BPE + 273.15", "t_j = t_v + t_v + BPE"},
+               plumb::rules::offset_scale);
+}

@@ -1883,6 +1883,8 @@ class checker {
         int points = 0;
         int gauges = 0;
         int absolute_pressures_added = 0;
+        int offset_temperatures = 0;
+        int kelvins_added = 0;
         double gauge_zero = 0.0;
         // The same with each reading's weight (T_1/2 + T_2/2 is one reading, T_s + T_a/2 is
         // not), where every weight is followed.
@@ -1917,7 +1919,21 @@ class checker {
             } else if (t.type.offset == nullptr && t.type.dim == pressure_dimension() &&
                        !t.subtracted) {
                 ++absolute_pressures_added;
+            } else if (t.type.offset != nullptr && t.type.dim == temperature_dimension() &&
+                       !t.subtracted) {
+                ++offset_temperatures;
+            } else if (t.type.offset == nullptr && t.type.dim == temperature_dimension() &&
+                       !t.subtracted) {
+                ++kelvins_added;
             }
+        }
+        // "t_j = t_v + BPE" with BPE in K: a temperature on an absolute scale added to a °C
+        // reading is a difference (the SI Brochure, 2.3.1, gives differences in K); two
+        // readings added make no temperature. (T_K - T_C, the ice point, subtracts the °C one.)
+        if (offset_temperatures > 0 && kelvins_added > 0) {
+            points -= kelvins_added;
+            if (weight)
+                weight = *weight - rational(kelvins_added);
         }
         // "p_g + p_atm": an absolute pressure added to a gauge reading supplies its zero, and
         // any further ones ("p_g + p_atm + p_fric") are drops: one atmosphere at most. Where a
