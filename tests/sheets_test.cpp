@@ -97,6 +97,24 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     CHECK(read_heading_unit("D (mm)")->scale == doctest::Approx(1e-3));
     CHECK(read_heading_unit("cp [kJ/(kg\u00B7K)]")->dim == plumb::test::typed(0, 2, -2, -1));
     CHECK_FALSE(read_heading_unit("Flow rate (design)"));
+    // A column of temperature differences headed in the scale's unit holds differences (a
+    // Fahrenheit degree is 5/9 K, NIST SP 811 (2008), B.9); a heading that names a reading does
+    // not, nor one whose first word only begins with a d.
+    for (const char* heading : {"\u0394T [\u00B0F]", "dT (\u00B0F)", "Temperature rise [\u00B0F]",
+                                "Supply-return difference (\u00B0F)"}) {
+        CAPTURE(heading);
+        const auto u = read_heading_unit(heading);
+        REQUIRE(u);
+        CHECK(u->offset == nullptr);
+        CHECK(u->scale == doctest::Approx(5.0 / 9.0));
+    }
+    for (const char* heading :
+         {"Supply [\u00B0F]", "Design temperature (\u00B0C)", "dry bulb [\u00B0F]"}) {
+        CAPTURE(heading);
+        const auto u = read_heading_unit(heading);
+        REQUIRE(u);
+        CHECK(u->offset != nullptr);
+    }
 }
 
 TEST_CASE("sheets: unary minus binds tighter than ^, and % is a postfix operator") {

@@ -11,6 +11,7 @@
 #include "check/trade_constants.hpp"
 #include "check/type_stack.hpp"
 #include "check/typed_term.hpp"
+#include "model/difference_name.hpp"
 #include "plumb/rules.hpp"
 #include "units/compact_dimension.hpp"
 #include "units/exact_factor.hpp"
@@ -110,37 +111,6 @@ std::string absolute_symbol(const unit_definition& unit) {
     if (unit.scale == unit_scale::gauge && symbol.size() > 1 && symbol.back() == 'g')
         symbol.pop_back();
     return symbol;
-}
-
-// A temperature or pressure declared in an absolute unit is a reading on the absolute scale,
-// unless its name or description says it is a difference (ΔT, dp, "temperature rise").
-bool names_a_difference(std::string_view name, std::string_view description) {
-    const auto starts = [&](std::string_view p) { return name.substr(0, p.size()) == p; };
-    if (starts("Δ") || starts("δ") || starts("delta") || starts("Delta") || starts("d") ||
-        starts("LMTD") || starts("lmtd"))
-        return true;
-    for (const std::string_view word : {"rise", "drop", "diff", "loss", "lm", "approach"})
-        if (name.find(word) != std::string_view::npos)
-            return true;
-    // Whole words (a plural too), so that "wellhead", "headspace" and "droplet" are not
-    // read as differences; "head" not at all, as "sprinkler head pressure" is a reading.
-    const auto is_letter = [](char c) {
-        return (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || (c & 0x80) != 0;
-    };
-    for (const std::string_view word : {"difference", "rise", "drop", "loss", "change", "increase",
-                                        "decrease", "approach", "range", "gradient", "swing"})
-        for (std::size_t at = description.find(word); at != std::string_view::npos;
-             at = description.find(word, at + 1)) {
-            std::size_t end = at + word.size();
-            if (description.substr(end, 2) == "es")
-                end += 2;
-            else if (description.substr(end, 1) == "s")
-                end += 1;
-            if ((at == 0 || !is_letter(description[at - 1])) &&
-                (end >= description.size() || !is_letter(description[end])))
-                return true;
-        }
-    return false;
 }
 
 std::string describe(const dimension& d) {

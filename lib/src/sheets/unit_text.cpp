@@ -2,6 +2,8 @@
 // parser, so a cell's "kg/m³" means exactly what "kg/m^3" means in a .plumb file.
 #include "sheets/unit_text.hpp"
 
+#include "model/difference_name.hpp"
+
 #include "notation/parser.hpp"
 
 #include <algorithm>
@@ -238,6 +240,33 @@ std::optional<written_unit> read_unit_text(std::string_view text, std::string_vi
     return u;
 }
 
+namespace {
+
+// "ΔT [°F]", "Temperature rise (°C)": a column of temperature differences headed in the scale's
+// unit holds differences in its degrees, as the notation's "ΔT : Δ°F" does. The heading's
+// first word is read as a name only where it is written as one (ΔT, δt, dT), so that
+// "Design temperature" is no difference.
+std::optional<written_unit> heading_unit(std::string_view label, std::string_view unit,
+                                         std::string_view measures) {
+    std::optional<written_unit> u = read_unit_text(unit, measures);
+    if (!u || u->offset == nullptr || u->offset->scale != unit_scale::offset)
+        return u;
+    const std::string words = trim(label);
+    const std::string_view first = std::string_view(words).substr(0, words.find(' '));
+    const bool symbol =
+        first.starts_with("\u0394") || first.starts_with("\u03B4") ||
+        (first.size() >= 2 && first[0] == 'd' && first[1] >= 'A' && first[1] <= 'Z');
+    if (!symbol && !names_a_difference({}, words))
+        return u;
+    if (auto difference = read_unit_text("\u0394" + trim(unit), measures)) {
+        difference->text = u->text;
+        return difference;
+    }
+    return u;
+}
+
+} // namespace
+
 std::optional<written_unit> read_heading_unit(std::string_view text, std::string_view measures) {
     const std::string t = trim(text);
     if (t.size() < 3)
@@ -252,7 +281,8 @@ std::optional<written_unit> read_heading_unit(std::string_view text, std::string
         if (t[i] == close)
             ++depth;
         else if (t[i] == open && --depth == 0)
-            return read_unit_text(std::string_view(t).substr(i + 1, t.size() - i - 2), measures);
+            return heading_unit(std::string_view(t).substr(0, i),
+                                std::string_view(t).substr(i + 1, t.size() - i - 2), measures);
     }
     return std::nullopt;
 }

@@ -1,0 +1,13 @@
+// Whether a name or a description says its quantity is a difference ("ΔT", "dp", "temperature
+// rise"): the notation's declarations and a workbook's headings both read it so.
+#pragma once
+
+#include <string_view>
+
+namespace plumb {
+
+// A temperature or pressure declared in an absolute unit is a reading on the absolute scale,
+// unless its name or description says it is a difference.
+bool names_a_difference(std::string_view name, std::string_view description);
+
+} // namespace plumb
