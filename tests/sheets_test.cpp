@@ -97,6 +97,34 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     CHECK(read_heading_unit("D (mm)")->scale == doctest::Approx(1e-3));
     CHECK(read_heading_unit("cp [kJ/(kg\u00B7K)]")->dim == plumb::test::typed(0, 2, -2, -1));
     CHECK_FALSE(read_heading_unit("Flow rate (design)"));
+    // Units as the trades type them beside cells (common practice), read as the notation's.
+    const auto same = [](const std::string& typed, const char* unit) {
+        CAPTURE(typed);
+        const auto a = read_unit_text(typed);
+        const auto b = read_unit_text(unit);
+        REQUIRE(a);
+        REQUIRE(b);
+        CHECK(a->dim == b->dim);
+        CHECK(a->scale == doctest::Approx(b->scale));
+        CHECK((a->offset == nullptr) == (b->offset == nullptr));
+    };
+    same("inH2O", "inH2O");
+    same("in. w.g.", "inH2O");
+    same("in wg", "inH2O");
+    same("Btu/hr", "Btu/h");
+    same("lb/hr", "lb/h");
+    same("CFM", "cfm");
+    same("FPM", "fpm");
+    same("bara", "bar");
+    same("kNm", "kN*m");
+    same("kN-m", "kN*m");
+    same("bhp", "hp");
+    same("sq ft", "ft^2");
+    same("BPD", "bbl/d");
+    same("W/m\u00B2K", "W/(m^2*K)");
+    same("W/m2K", "W/(m^2*K)");
+    same("kJ/kg.K", "kJ/(kg*K)");
+    CHECK_FALSE(read_unit_text("hrs"));
     // A column of temperature differences headed in the scale's unit holds differences (a
     // Fahrenheit degree is 5/9 K, NIST SP 811 (2008), B.9); a heading that names a reading does
     // not, nor one whose first word only begins with a d.

@@ -7,6 +7,7 @@
 #include "notation/parser.hpp"
 
 #include <algorithm>
+#include <array>
 #include <deque>
 #include <memory>
 #include <mutex>
@@ -153,10 +154,61 @@ std::string as_declaration(std::string_view notation, std::string_view measures)
     return source;
 }
 
+// How the trades type units beside cells, as the notation spells them (common practice):
+// "in. w.g." for inches of water, "hr" for the hour, "CFM" in capitals, "kNm" for kN·m,
+// "sq ft", "bhp" (brake horsepower, a horsepower), "bara" (bar absolute).
+std::string trade_spelling(std::string t) {
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 40> whole{{
+        {"in. w.g.", "inH2O"}, {"in.w.g.", "inH2O"}, {"in w.g.", "inH2O"}, {"in wg", "inH2O"},
+        {"in. wg", "inH2O"},   {"in.wg", "inH2O"},   {"in WG", "inH2O"},   {"inWG", "inH2O"},
+        {"in. w.c.", "inH2O"}, {"in.w.c.", "inH2O"}, {"in wc", "inH2O"},   {"iwg", "inH2O"},
+        {"IWG", "inH2O"},      {"bara", "bar"},      {"BPD", "bbl/d"},     {"bpd", "bbl/d"},
+        {"bhp", "hp"},         {"BHP", "hp"},        {"kNm", "kN m"},      {"kN-m", "kN m"},
+        {"kN.m", "kN m"},      {"Nm", "N m"},        {"N-m", "N m"},       {"N.m", "N m"},
+        {"sq ft", "ft2"},      {"sq. ft", "ft2"},    {"sq.ft", "ft2"},     {"sq m", "m2"},
+        {"sq. m", "m2"},       {"sq in", "in2"},     {"sq. in", "in2"},    {"cu ft", "ft3"},
+        {"cu m", "m3"},        {"CFM", "cfm"},       {"FPM", "fpm"},       {"GPM", "gpm"},
+        {"RPM", "rpm"},        {"MGD", "mgd"},       {"SCFM", "scf/min"},  {"scfm", "scf/min"},
+    }};
+    for (const auto& [typed, unit] : whole)
+        if (t == typed)
+            return std::string(unit);
+    // "Btu/hr", "lb/hr", "m3/hr": the hour as a word of its own.
+    for (std::size_t at = t.find("hr"); at != std::string::npos; at = t.find("hr", at + 1)) {
+        const bool alone =
+            (at == 0 || !is_letter(t[at - 1])) && (at + 2 >= t.size() || !is_letter(t[at + 2]));
+        if (alone)
+            t.replace(at, 2, "h");
+    }
+    // "W/m2K", "W/m²K", "kJ/kg.K": everything after a single '/' is the denominator, its
+    // units multiplied by '.' or written one after another after a power.
+    const std::size_t slash = t.find('/');
+    if (slash != std::string::npos && t.find('/', slash + 1) == std::string::npos &&
+        t.find('(') == std::string::npos) {
+        std::string below = t.substr(slash + 1);
+        for (std::size_t i = 1; i + 1 < below.size(); ++i)
+            if (below[i] == '.' && is_letter(below[i - 1]) && is_letter(below[i + 1]))
+                below[i] = ' ';
+        std::string spaced;
+        for (std::size_t i = 0; i < below.size(); ++i) {
+            spaced += below[i];
+            const bool power_ends = (below[i] >= '2' && below[i] <= '4') ||
+                                    (i > 0 && below.compare(i - 1, 2, "\u00B2") == 0) ||
+                                    (i > 0 && below.compare(i - 1, 2, "\u00B3") == 0);
+            if (power_ends && i + 1 < below.size() && is_letter(below[i + 1]))
+                spaced += ' ';
+        }
+        if (spaced.find(' ') != std::string::npos)
+            t = t.substr(0, slash + 1) + "(" + spaced + ")";
+    }
+    return t;
+}
+
 std::optional<written_unit> evaluate(std::string_view text, std::string_view measures) {
     std::string t = trim(text);
     if (t.empty() || t.size() > 40)
         return std::nullopt;
+    t = trade_spelling(std::move(t));
     if (t == "\u00B0")
         t = "deg"; // the degree of angle, written alone
     if (t == "-" || t == "1" || t == "\u2014" || t == "\u2013") {
@@ -192,7 +244,8 @@ std::optional<written_unit> evaluate(std::string_view text, std::string_view mea
             t.pop_back();
         }
     }
-    const std::string notation = to_notation(t);
+    // A row whose symbol holds a digit ("inH2O") is read as written.
+    const std::string notation = unit_table::standard().resolve(t) ? t : to_notation(t);
     // A declaration, not a quantity in braces: there "h" would be Planck's constant.
     const source_file src("<unit>", as_declaration(notation, measures));
     const syntax::parsed_file tree = parse_file(src);
