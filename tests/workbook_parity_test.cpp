@@ -430,3 +430,24 @@ TEST_CASE("workbook parity: a lookup's key and its table column agree in their z
     CHECK_FALSE(error_at(r, "S!B7"));
     CHECK_FALSE(error_at(r, "S!B8"));
 }
+
+TEST_CASE("workbook parity: a number typed into a sum of cells of one unit is in that unit") {
+    // An anchor's embedment plus plate thickness plus grout and projection allowances typed
+    // as numbers, all in mm (common practice); 1 m = 1000 mm (SI Brochure 9th ed., Table 7).
+    // Cells of different units, or of pressures, keep their findings.
+    const check_report r =
+        check_one_sheet("S", sheet_of({
+                                 {"300", "mm"},                // B2: embedment
+                                 {"40", "mm"},                 // B3: plate
+                                 {"=(B2+B3+50+75)/1000", "m"}, // B4: right
+                                 {"=B2+B3+50+75", "m"},        // B5: mm into m
+                                 {"0.3", "m"},                 // B6
+                                 {"=B2+B6+50", "mm"},          // B7: mm beside m
+                                 {"250", "kPa"},               // B8: absolute
+                                 {"=B8+101.325", "kPa"},       // B9: the atmosphere twice
+                             }));
+    CHECK_FALSE(error_at(r, "S!B4"));
+    CHECK(error_at(r, "S!B5"));
+    CHECK(error_at(r, "S!B7"));
+    CHECK(error_at(r, "S!B9"));
+}

@@ -1384,6 +1384,8 @@ class checker {
         const bool last_subtracted = file_.nodes[index].kind == expr_kind::subtract;
         spine_.resize(spine_base);
 
+        if (file_.functions == syntax::function_names::spreadsheet) [[unlikely]]
+            adopt_numbers_beside_cells(base);
         const typed_term* offset_term = adopt_numbers_on_offset_scale(base);
         const scratch_region region(operands_, base, types_, types_base);
         const std::span<const operand> terms = region.view();
@@ -1648,6 +1650,39 @@ class checker {
             auto& t = const_cast<typed_term&>(operands_[i].type);
             if (t.known && !t.zero && t.numeric && !(t.value && *t.value == rational(1)))
                 t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
+        }
+    }
+
+    // "=(C22 + C37 + 50 + 75)/1000" with the cells in mm: a spreadsheet's numbers carry no
+    // units, so an allowance typed into a sum of cells of one unit is in that unit, as the
+    // engineer means it. Not beside pressures and temperatures, where a number is a zero or
+    // the atmosphere and the rules for those read it.
+    void adopt_numbers_beside_cells(std::size_t base) {
+        const typed_term* unit = nullptr;
+        bool numbers = false;
+        for (std::size_t i = base; i < operands_.size(); ++i) {
+            const typed_term& t = operands_[i].type;
+            if (!t.known || t.zero)
+                continue;
+            if (t.numeric) {
+                numbers = numbers || t.dim.is_dimensionless();
+                continue;
+            }
+            if (t.offset != nullptr || t.dim.is_dimensionless() || t.dim == pressure_dimension() ||
+                t.dim == temperature_dimension() ||
+                (unit != nullptr && !(t.dim == unit->dim && t.scale == unit->scale)))
+                return;
+            unit = &t;
+        }
+        if (!numbers || unit == nullptr)
+            return;
+        const compact_dimension dim = unit->dim;
+        for (std::size_t i = base; i < operands_.size(); ++i) {
+            auto& t = const_cast<typed_term&>(operands_[i].type);
+            if (t.known && !t.zero && t.numeric && t.dim.is_dimensionless()) {
+                t.dim = dim;
+                t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
+            }
         }
     }
 
