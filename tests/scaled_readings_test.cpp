@@ -76,6 +76,12 @@ TEST_CASE("an angle in degrees inside sin, cos or tan: the conversion is written
     CHECK(says(first_under(r, plumb::rules::unit_scale), "sin(β*π/180)"));
     // 1° = π/180 rad (SI Brochure 9th ed., Table 8): written so, it passes.
     passes(angles, {"@sling-radians T = W/(n*sin(β*π/180))"});
+    // Rankine's K_a = tan²(45° - φ/2) (common practice): the whole angle is converted, and the
+    // advice, followed, passes.
+    const auto rankine = run(angles + "K_a : 1\n", "K_a = tan(45 - θ/2)^2");
+    REQUIRE(count_of(rankine, plumb::rules::unit_scale) == 1);
+    CHECK(says(first_under(rankine, plumb::rules::unit_scale), "tan((45 - θ/2)*π/180)"));
+    passes(angles + "K_a : 1\n", {"K_a = tan((45 - θ/2)*π/180)^2"});
 }
 
 // A reading multiplied: the fix offered must suit the physics where the dimension can tell

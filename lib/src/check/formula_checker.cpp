@@ -4336,11 +4336,16 @@ class checker {
                           f.name.find("cos") != std::string_view::npos ||
                           f.name.find("tan") != std::string_view::npos;
         const double ratio = 1.0 / apparent_scale(parts[0]);
-        if (trig && std::abs(ratio * std::numbers::pi / 180.0 - 1.0) < 1e-9)
-            d.notes.push_back({fmt::format("{} takes radians: write {}({}*\u03C0/180), or declare "
-                                           "the angle in rad",
-                                           f.name, f.name, display_text(file_.nodes[a.node].range)),
+        if (trig && std::abs(ratio * std::numbers::pi / 180.0 - 1.0) < 1e-9) {
+            // tan(45 - φ/2): the whole sum is in degrees, so the whole sum is converted.
+            const expr_kind kind = file_.nodes[a.node].kind;
+            const std::string angle = display_text(file_.nodes[a.node].range);
+            const bool sum = kind == expr_kind::add || kind == expr_kind::subtract;
+            d.notes.push_back({fmt::format("{} takes radians: write {}({}{}{}*\u03C0/180), or "
+                                           "declare the angle in rad",
+                                           f.name, f.name, sum ? "(" : "", angle, sum ? ")" : ""),
                                {}});
+        }
     }
 
     // True when the argument is dimensionless (or unknown), false when a finding was made.
