@@ -61,7 +61,7 @@ constexpr named_dimension names[] = {
     {dims(1, -1, -2), "pressure or stress"},
     {dims(-1, 1, 2), "compressibility"},
     {dims(1, -2, -2), "specific weight or pressure gradient"},
-    {dims(1, 0, -2), "surface tension or spring stiffness"},
+    {dims(1, 0, -2), "surface tension, spring stiffness or line load"},
     {dims(1, 2, -2), "energy, work, heat or torque"},
     {dims(0, 2, -2), "specific energy or absorbed dose"},
     {dims(1, 2, -3), "power"},
