@@ -135,3 +135,18 @@ TEST_CASE("a temperature in K added to a reading in °C is a difference") {
     fails_with(decl, {"T_K = t_v + BPE", "t_j = t_v + BPE + 273.15", "t_j = t_v + t_v + BPE"},
                plumb::rules::offset_scale);
 }
+
+// The fresh-concrete temperature T = (0.22·(T_a·W_a + T_c·W_c) + T_w·W_w)/(0.22·(W_a + W_c) +
+// W_w) (ACI 305R, from memory), and two streams of different heat capacities mixed,
+// T = (m_1·c_1·T_1 + m_2·c_2·T_2)/(m_1·c_1 + m_2·c_2) (common practice): weighted means.
+TEST_CASE("weighted means with numbers and several factors in their weights") {
+    const std::string decl = "T_c, T_a, T_k, T_w : °F\nW_a, W_c, W_w : lb\nT_1, T_2, T_m : °C\n"
+                             "m_1, m_2 : kg/s\nc_1, c_2 : kJ/(kg*K)\n";
+    passes(decl, {"T_c = (0.22*(T_a*W_a + T_k*W_c) + T_w*W_w)/(0.22*(W_a + W_c) + W_w)",
+                  "T_m = (m_1*c_1*T_1 + m_2*c_2*T_2)/(m_1*c_1 + m_2*c_2)"});
+    fails_with(decl,
+               {"T_c = (0.22*(T_a*W_a + T_k*W_c) + T_w*W_w)/(0.25*(W_a + W_c) + W_w)",
+                "T_c = (0.22*(T_a*W_a + T_k*W_c) + T_w*W_w)/(W_a + W_c + W_w)",
+                "T_m = (m_1*c_1*T_1 + m_2*c_2*T_2)/(m_1 + m_2)"},
+               plumb::rules::offset_scale);
+}

@@ -3491,78 +3491,148 @@ class checker {
         return with_gauge || (other_pressures == 1 && shape);
     }
 
-    // "(q_h*T_h + q_c*T_c)/(q_h + q_c)": readings on one offset scale, each times a weight,
-    // over the sum of the same weights, are their weighted mean, a reading on that scale
-    // whatever the scale's zero (mixing and blending; common practice). Only where each
-    // reading and weight is a declared symbol, so that nothing is reported twice.
-    [[gnu::noinline]] std::optional<typed_term> weighted_mean(std::uint32_t index) {
-        const auto strip = [&](std::uint32_t i) {
-            while (file_.nodes[i].kind == expr_kind::group)
-                i = file_.nodes[i].lhs;
-            return i;
-        };
-        constexpr std::size_t most = 8;
-        const auto terms_of = [&](std::uint32_t i, std::array<std::uint32_t, most>& out) {
-            std::size_t count = 0;
-            i = strip(i);
-            while (file_.nodes[i].kind == expr_kind::add) {
-                if (count + 1 >= most)
-                    return std::size_t{0};
-                out[count++] = strip(file_.nodes[i].rhs);
-                i = strip(file_.nodes[i].lhs);
-            }
-            if (file_.nodes[i].kind == expr_kind::subtract || count == 0)
-                return std::size_t{0};
-            out[count++] = i;
-            return count;
-        };
-        const syntax::expr_node& n = file_.nodes[index];
-        std::array<std::uint32_t, most> products{};
-        std::array<std::uint32_t, most> weights{};
-        const std::size_t count = terms_of(n.lhs, products);
-        if (count < 2 || terms_of(n.rhs, weights) != count)
-            return std::nullopt;
-        const auto declared_symbol = [&](std::uint32_t i) {
-            return file_.nodes[i].kind == expr_kind::symbol &&
-                   symbols_.find(text(file_.nodes[i].range)) != nullptr;
-        };
-        std::array<std::uint32_t, most> readings{};
-        std::array<bool, most> weight_used{};
-        for (std::size_t k = 0; k < count; ++k) {
-            const syntax::expr_node& p = file_.nodes[products[k]];
-            if (p.kind != expr_kind::multiply)
-                return std::nullopt;
-            const std::uint32_t a = strip(p.lhs);
-            const std::uint32_t b = strip(p.rhs);
-            if (!declared_symbol(a) || !declared_symbol(b))
-                return std::nullopt;
-            bool matched = false;
-            for (std::size_t w = 0; w < count && !matched; ++w) {
-                if (weight_used[w] || !declared_symbol(weights[w]))
-                    continue;
-                const std::string_view weight = text(file_.nodes[weights[w]].range);
-                if (text(file_.nodes[a].range) == weight || text(file_.nodes[b].range) == weight) {
-                    readings[k] = text(file_.nodes[a].range) == weight ? b : a;
-                    weight_used[w] = matched = true;
+    // One term of a product expanded into a sum: a number times declared symbols.
+    struct expanded_term {
+        double coefficient = 1.0;
+        std::array<std::uint32_t, 6> symbols{};
+        std::size_t count = 0;
+    };
+    static constexpr std::size_t most_expanded_terms = 16;
+    using expansion = std::vector<expanded_term>;
+
+    // The node multiplied out into numbers times declared symbols, or nothing where it holds
+    // anything else (a call, a power, a difference) or grows past a formula's size.
+    bool expand(std::uint32_t i, expansion& out) const {
+        const syntax::expr_node& n = file_.nodes[i];
+        switch (n.kind) {
+        case expr_kind::group:
+            return expand(n.lhs, out);
+        case expr_kind::number: {
+            const std::optional<rational> v = rational::parse(text(n.range));
+            if (!v)
+                return false;
+            out.push_back({v->to_double(), {}, 0});
+            return true;
+        }
+        case expr_kind::symbol:
+            if (symbols_.find(text(n.range)) == nullptr)
+                return false;
+            out.push_back({1.0, {i}, 1});
+            return true;
+        case expr_kind::add: {
+            if (!expand(n.lhs, out) || !expand(n.rhs, out))
+                return false;
+            return out.size() <= most_expanded_terms;
+        }
+        case expr_kind::multiply: {
+            expansion left;
+            expansion right;
+            if (!expand(n.lhs, left) || !expand(n.rhs, right) ||
+                left.size() * right.size() > most_expanded_terms)
+                return false;
+            for (const auto& a : left)
+                for (const auto& b : right) {
+                    if (a.count + b.count > a.symbols.size())
+                        return false;
+                    expanded_term t = a;
+                    t.coefficient *= b.coefficient;
+                    for (std::size_t k = 0; k < b.count; ++k)
+                        t.symbols[t.count++] = b.symbols[k];
+                    out.push_back(t);
                 }
-            }
-            if (!matched)
-                return std::nullopt;
+            return out.size() <= most_expanded_terms;
         }
-        const typed_term first = eval_symbol(file_.nodes[readings[0]]);
-        const typed_term weight = eval_symbol(file_.nodes[weights[0]]);
-        if (!first.known || first.offset == nullptr || !weight.known || weight.numeric ||
-            weight.offset != nullptr)
+        default:
+            return false;
+        }
+    }
+
+    // "(q_h*T_h + q_c*T_c)/(q_h + q_c)", "(0.22*(T_a*W_a + T_c*W_c) + T_w*W_w)/(0.22*(W_a +
+    // W_c) + W_w)": readings on one offset scale, each times a weight, over the sum of the
+    // same weights, are their weighted mean, a reading on that scale whatever the scale's zero
+    // (mixing and blending; the fresh-concrete temperature; common practice). Only where
+    // every factor is a number or a declared symbol, so that nothing is reported twice.
+    [[gnu::noinline]] std::optional<typed_term> weighted_mean(std::uint32_t index) {
+        const syntax::expr_node& n = file_.nodes[index];
+        // The weights below are a sum: most quotients are not, and are not expanded.
+        std::uint32_t denominator = n.rhs;
+        while (file_.nodes[denominator].kind == expr_kind::group)
+            denominator = file_.nodes[denominator].lhs;
+        if (file_.nodes[denominator].kind != expr_kind::add)
             return std::nullopt;
-        for (std::size_t k = 1; k < count; ++k) {
-            const typed_term r = eval_symbol(file_.nodes[readings[k]]);
-            const typed_term w = eval_symbol(file_.nodes[weights[k]]);
-            if (!r.known || r.offset != first.offset || r.scale != first.scale ||
-                !(r.dim == first.dim) || !w.known || w.offset != nullptr ||
-                !(w.dim == weight.dim) || w.scale != weight.scale)
+        expansion top;
+        expansion below;
+        if (!expand(n.lhs, top) || !expand(n.rhs, below) || top.size() < 2 ||
+            top.size() != below.size())
+            return std::nullopt;
+        // Each numerator term: one reading on an offset scale and its weight, the rest.
+        std::optional<typed_term> reading;
+        std::optional<compact_dimension> weight_dim;
+        double weight_scale = 0.0;
+        std::array<bool, most_expanded_terms> matched{};
+        for (const auto& t : top) {
+            std::optional<std::size_t> at;
+            typed_term weight;
+            for (std::size_t k = 0; k < t.count; ++k) {
+                const typed_term s = eval_symbol(file_.nodes[t.symbols[k]]);
+                if (!s.known)
+                    return std::nullopt;
+                if (s.offset != nullptr) {
+                    if (at)
+                        return std::nullopt;
+                    at = k;
+                    if (!reading)
+                        reading = s;
+                    else if (s.offset != reading->offset || s.scale != reading->scale ||
+                             !(s.dim == reading->dim))
+                        return std::nullopt;
+                    continue;
+                }
+                weight.dim = weight.dim * s.dim;
+                weight.scale *= s.scale;
+            }
+            if (!at)
+                return std::nullopt;
+            if (!weight_dim) {
+                weight_dim = weight.dim;
+                weight_scale = weight.scale;
+            } else if (!(weight.dim == *weight_dim) || weight.scale != weight_scale) {
+                return std::nullopt;
+            }
+            // The same weight, with the same number, below.
+            const auto same_weight = [&](const expanded_term& b) {
+                if (b.count + 1 != t.count ||
+                    std::abs(b.coefficient - t.coefficient) > 1e-12 * std::abs(t.coefficient))
+                    return false;
+                std::array<std::string_view, 6> names_top{};
+                std::array<std::string_view, 6> names_below{};
+                std::size_t m = 0;
+                for (std::size_t k = 0; k < t.count; ++k)
+                    if (k != *at)
+                        names_top[m++] = text(file_.nodes[t.symbols[k]].range);
+                for (std::size_t k = 0; k < b.count; ++k)
+                    names_below[k] = text(file_.nodes[b.symbols[k]].range);
+                // A few names each: an insertion sort (std::sort's bounds puzzle GCC here).
+                const auto order = [](std::array<std::string_view, 6>& names, std::size_t size) {
+                    for (std::size_t a = 1; a < size && a < names.size(); ++a)
+                        for (std::size_t b = a; b > 0 && names[b] < names[b - 1]; --b)
+                            std::swap(names[b], names[b - 1]);
+                };
+                order(names_top, m);
+                order(names_below, b.count);
+                for (std::size_t k = 0; k < m && k < names_top.size(); ++k)
+                    if (names_top[k] != names_below[k])
+                        return false;
+                return true;
+            };
+            bool found = false;
+            for (std::size_t w = 0; w < below.size() && !found; ++w)
+                if (!matched[w] && same_weight(below[w]))
+                    matched[w] = found = true;
+            if (!found)
                 return std::nullopt;
         }
-        return first;
+        return reading;
     }
 
     typed_term eval_product(std::uint32_t index) {
