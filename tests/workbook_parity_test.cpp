@@ -451,3 +451,28 @@ TEST_CASE("workbook parity: a number typed into a sum of cells of one unit is in
     CHECK(error_at(r, "S!B7"));
     CHECK(error_at(r, "S!B9"));
 }
+
+TEST_CASE("workbook parity: a pressure whose row label says it is a drop is a difference") {
+    // A pump's discharge from its suction gauge plus drops typed in psi, labelled as losses in
+    // column A (common practice); 1 atm = 14.696 psi (NIST SP 811 (2008), B.8). An unlabelled
+    // psi cell added to a gauge reading stays the atmosphere, and the sum an absolute pressure.
+    const auto labelled = [](int r, const std::string& label, const std::string& value,
+                             const std::string& unit) {
+        const std::string n = std::to_string(r);
+        std::string row = plumb::test::value_and_unit_row(r, value, unit);
+        row.insert(row.find('>') + 1,
+                   "<c r=\"A" + n + "\" t=\"inlineStr\"><is><t>" + label + "</t></is></c>");
+        return row;
+    };
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled(2, "Suction pressure", "35", "psig") +
+        labelled(3, "Friction loss", "12", "psi") + labelled(4, "Static rise", "20", "psi") +
+        labelled(5, "Discharge pressure", "=B2+B3+B4", "psig") +
+        labelled(6, "Barometer", "14.2", "psi") +
+        labelled(7, "Discharge, absolute", "=B2+B6", "psig") +
+        labelled(8, "Discharge, absolute", "=B2+B6", "psia") + "</sheetData></worksheet>";
+    const check_report r = check_one_sheet("S", sheet);
+    CHECK_FALSE(error_at(r, "S!B5"));
+    CHECK(error_at(r, "S!B7"));
+    CHECK_FALSE(error_at(r, "S!B8"));
+}

@@ -4195,7 +4195,10 @@ class checker {
         t.value = r.value;
         // A cell holds a reading, as a declared temperature or pressure does; a cell has no
         // name to say it is a difference, so a gauge cell less an absolute one is reported.
-        if (t.offset != nullptr) {
+        if (r.difference && (t.dim == temperature_dimension() || t.dim == pressure_dimension())) {
+            // "Friction loss [psi]", "Temperature rise [°C]": a difference in the unit's size.
+            t.offset = nullptr;
+        } else if (t.offset != nullptr) {
             t.origin = t.offset->offset;
             t.point = true;
         } else {

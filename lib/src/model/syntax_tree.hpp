@@ -47,6 +47,9 @@ struct reference_value {
     std::optional<rational> exact_scale;     // the same exactly, where the unit is exact
     const unit_definition* offset = nullptr; // set for °C, gauge...
     std::optional<rational> value;           // a dimensionless constant cell's exact value
+    // A pressure or temperature cell whose row label says it is a difference ("Friction
+    // loss", "Δp"): no reading, whatever its unit.
+    bool difference = false;
 };
 
 // Which names a call may use: the notation's functions or a spreadsheet's.

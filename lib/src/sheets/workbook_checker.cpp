@@ -3,6 +3,8 @@
 // beside a formula against what it computes, ranges of one dimension, inputs without units.
 #include "sheets/workbook_checker.hpp"
 
+#include "model/difference_name.hpp"
+
 #include "check/formula_checker.hpp"
 #include "check/gravity_number.hpp"
 #include "check/scale_match.hpp"
@@ -522,6 +524,25 @@ class workbook_checker {
         return result;
     }
 
+    // "Friction loss | dp_f | 12 | psi": the text cells before a value on its row, read as the
+    // notation reads a symbol's name and description. The name is a text without blanks.
+    bool labelled_a_difference(std::size_t s, cell_address a) const {
+        constexpr std::uint32_t most_columns = 6;
+        std::string description;
+        std::string_view name;
+        for (std::uint32_t column = a.column > most_columns ? a.column - most_columns : 0;
+             column < a.column; ++column) {
+            const cell* c = book_.sheets[s].find({a.row, column});
+            if (c == nullptr || c->kind != cell_kind::text || c->text.size() > 80)
+                continue;
+            if (c->text.find(' ') == std::string::npos && c->text.size() <= 12)
+                name = c->text;
+            description += c->text;
+            description += ' ';
+        }
+        return !description.empty() && names_a_difference(name, description);
+    }
+
     // ---- Checking one formula cell --------------------------------------------------------
 
     void check_cell(std::uint32_t id) {
@@ -550,6 +571,8 @@ class workbook_checker {
             target.exact_scale = v.exact_scale;
             target.offset = v.offset;
             target.value = v.value;
+            target.difference =
+                r.area.single() && v.dim && labelled_a_difference(r.sheet, r.area.first);
         }
         const std::size_t before = out_.size();
         // A copy: the tree's vectors stay put while cells are checked, but nothing here
