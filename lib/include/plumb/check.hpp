@@ -49,7 +49,7 @@ struct formula_record {
     std::vector<std::optional<dimension>> sides; // empty optional where a side has an error
     std::vector<std::string> relations;          // "=", "<=", ... between the sides
     std::optional<severity> worst; // the most severe finding starting inside it; empty: passed
-    std::string written_unit; // a workbook cell's unit as written for it; empty when none
+    std::string written_unit;      // a workbook cell's unit as written for it; empty when none
 };
 
 // Why `restate_in` does not name a consistent set of units, or nothing when it does: each

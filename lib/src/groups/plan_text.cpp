@@ -132,8 +132,8 @@ std::string si_unit_text(const dimension& d) {
     return numerator + "/" + (below > 1 ? "(" + denominator + ")" : denominator);
 }
 
-// The first of the names quantity_name lists ("surface tension, spring stiffness or line load" names a
-// fluid property here, never a spring).
+// The first of the names quantity_name lists ("surface tension, spring stiffness or line load"
+// names a fluid property here, never a spring).
 std::string quantity_text(const dimension& d) {
     std::string name(quantity_name(d));
     if (name.empty())
