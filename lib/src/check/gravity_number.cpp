@@ -205,7 +205,9 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
         const std::size_t at = k % literals.size();
         const scale_literal& number = literals[at];
         const double x = flipped ? -number.exponent : number.exponent;
-        if (!(number.value > 0) || x == 0.0)
+        // 1e9 in V_mm3*7850/1e9 converts mm³ to m³: a power of ten past a thousand is a unit
+        // conversion, never a property of water or gravity written out.
+        if (!(number.value > 0) || x == 0.0 || (number.power_of_ten && std::abs(number.power) > 3))
             continue;
         const double half_unit = half_unit_in_last_digit(texts[at]);
         for (const carried_quantity& q : quantities()) {
