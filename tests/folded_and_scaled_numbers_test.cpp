@@ -347,7 +347,8 @@ TEST_CASE("a one-digit number is not named as a coefficient beside a unit findin
 
 // A year of 365 d is 8760 h, a day 24 h (NIST SP 811 (2008), B.8); a yearly energy from a
 // mean power is P·8760 h (common practice).
-TEST_CASE("sides apart by exactly a time, with a bare count of hours: the unit is named") {
+TEST_CASE("sides apart by exactly a time or a density, with a bare number the trades write for it: "
+          "the unit is named") {
     const std::string decl = "E_a : kWh\nP : kW\nV : m^3\nQ : m^3/h\n";
     passes(decl, {"E_a = P*8760 {h}", "V = Q*24 {h}"});
     const auto year = run(decl, "E_a = P*8760");
@@ -356,6 +357,11 @@ TEST_CASE("sides apart by exactly a time, with a bare count of hours: the unit i
     const auto day = run(decl, "V = Q*24");
     REQUIRE(count_of(day, plumb::rules::side_mismatch) == 1);
     CHECK(plumb::test::says(first_under(day, plumb::rules::side_mismatch), "24 {h}"));
+    // Steel's density typed as 7850 (kg/m³, common practice) into a mass from mm: named too.
+    const auto steel = run("m : kg\nL, B, t : mm\n", "m = L*B*t*7850/1e9");
+    REQUIRE(count_of(steel, plumb::rules::side_mismatch) == 1);
+    CHECK(plumb::test::says(first_under(steel, plumb::rules::side_mismatch), "7850 {kg/m^3}"));
+    passes("m : kg\nL, B, t : mm\n", {"m = L*B*t*7850 {kg/m^3}/1e9"});
     const auto other = run(decl, "V = Q*7");
     REQUIRE(count_of(other, plumb::rules::side_mismatch) == 1);
     CHECK_FALSE(plumb::test::says(first_under(other, plumb::rules::side_mismatch), "{h}"));

@@ -622,45 +622,65 @@ class checker {
         note_bare_number_side(d, sides);
         if (!note_gravity_in_other_units(d, sides, a))
             note_acceleration_apart(d, sides, a);
-        note_time_count_apart(d, sides, a);
+        note_bare_quantity_apart(d, sides, a);
     }
 
-    // "E_a = P*8760" with E_a in kWh: the sides differ by exactly a time, and a number in the
-    // formula counts hours in a year. It carries no unit, so the formula needs one given.
-    void note_time_count_apart(diagnostic& d, std::span<const operand> ops,
-                               const agreement& a) const {
+    // "E_a = P*8760" with E_a in kWh, "m = V*7850" with m in kg: the sides differ by exactly a
+    // time or a density, and a number in the formula is one the trades write for it. It
+    // carries no unit, so the formula needs one given.
+    void note_bare_quantity_apart(diagnostic& d, std::span<const operand> ops,
+                                  const agreement& a) const {
         const std::optional<compact_dimension> apart = odd_one_apart(ops, a);
-        if (!apart || (!(*apart == time_dimension()) && !(*apart == time_dimension().pow(-1))))
+        if (!apart)
             return;
-        struct time_count {
+        struct bare_quantity {
+            bool time; // else a density
             double value;
             const char* unit;
             const char* meaning;
         };
         // NIST SP 811 (2008), B.8: 1 d = 24 h = 1440 min = 86 400 s, 1 h = 3600 s; a year of
-        // 365 d is 8760 h, a week 168 h.
-        static constexpr std::array<time_count, 7> counts{{
-            {8760.0, "h", "the hours in a year"},
-            {365.0, "d", "the days in a year"},
-            {168.0, "h", "the hours in a week"},
-            {24.0, "h", "the hours in a day"},
-            {1440.0, "min", "the minutes in a day"},
-            {3600.0, "s", "the seconds in an hour"},
-            {86400.0, "s", "the seconds in a day"},
+        // 365 d is 8760 h, a week 168 h. Densities: carbon steel 7850 kg/m³ (490 lb/ft³),
+        // normal-weight concrete 2400 kg/m³ (150 lb/ft³), aluminium 2700 kg/m³ (common
+        // practice; from memory).
+        static constexpr std::array<bare_quantity, 12> quantities{{
+            {true, 8760.0, "h", "the hours in a year"},
+            {true, 365.0, "d", "the days in a year"},
+            {true, 168.0, "h", "the hours in a week"},
+            {true, 24.0, "h", "the hours in a day"},
+            {true, 1440.0, "min", "the minutes in a day"},
+            {true, 3600.0, "s", "the seconds in an hour"},
+            {true, 86400.0, "s", "the seconds in a day"},
+            {false, 7850.0, "kg/m^3", "steel's density"},
+            {false, 490.0, "lb/ft^3", "steel's density"},
+            {false, 2400.0, "kg/m^3", "concrete's density"},
+            {false, 150.0, "lb/ft^3", "concrete's density"},
+            {false, 2700.0, "kg/m^3", "aluminium's density"},
         }};
+        static const compact_dimension density(dimension::base(base_dimension::mass) /
+                                               dimension::base(base_dimension::length).pow(3));
+        bool time = false;
+        try {
+            time = *apart == time_dimension() || *apart == time_dimension().pow(-1);
+            if (!time && !(*apart == density) && !(*apart == density.pow(-1)))
+                return;
+        } catch (const std::exception&) {
+            return;
+        }
         for (const operand& op : ops)
             for (std::uint32_t i = 0; i < op.type.literal_count; ++i) {
                 const scale_literal& l = literals_[op.type.literal_begin + i];
                 if (file_.nodes[l.node].kind != expr_kind::number)
                     continue;
-                for (const time_count& c : counts)
-                    if (l.value == c.value) {
+                for (const bare_quantity& q : quantities)
+                    if (q.time == time && l.value == q.value) {
                         const std::string_view written = text(file_.nodes[l.node].range);
                         d.notes.push_back(
-                            {fmt::format("the sides differ by exactly a time, and {} reads as {}: "
+                            {fmt::format("the sides differ by exactly a {}, and {} reads as {}: "
                                          "a number carries no unit, so write it with its own, "
                                          "{} {{{}}}",
-                                         written, c.meaning, written, c.unit),
+                                         time ? "time" : "density", written, q.meaning, written,
+                                         q.unit),
                              {}});
                         return;
                     }
