@@ -150,3 +150,17 @@ TEST_CASE("weighted means with numbers and several factors in their weights") {
                 "T_m = (m_1*c_1*T_1 + m_2*c_2*T_2)/(m_1 + m_2)"},
                plumb::rules::offset_scale);
 }
+
+// Heat to cool water to freezing in US units, Q = 500·gpm·(t_w - 32) in Btu/h with t_w in °F
+// (common practice): t_w - 32 is the rise above 32 °F. Only 1.8 after it makes it a reading
+// on the °C scale (NIST SP 811 (2008), B.9); a reading declared in °C, multiplied, stays an
+// error.
+TEST_CASE("a °F reading less 32 times a quantity is the rise above freezing") {
+    const std::string decl = "Q_s : Btu/h\nQ_gpm : gpm\nt_w : °F\nT_C : °C\nm : kg/s\n"
+                             "c : kJ/(kg*K)\nP : kW\nq, q_a : m^3/s\n";
+    passes(decl, {"Q_s = 500*Q_gpm*(t_w - 32)", "Q_s = (t_w - 32)*500*Q_gpm",
+                  "T_C = (t_w - 32)/1.8", "T_C = (t_w - 32)*5/9", "P = m*c*(t_w - 32)/1.8"});
+    fails_with(decl, {"Q_s = 500*Q_gpm*t_w", "P = m*c*T_C", "q = q_a*(520/t_w)"},
+               plumb::rules::offset_scale);
+    fails_with(decl, {"T_C = t_w - 32"}, plumb::rules::unit_scale);
+}

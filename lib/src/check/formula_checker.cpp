@@ -3572,6 +3572,21 @@ class checker {
     // same weights, are their weighted mean, a reading on that scale whatever the scale's zero
     // (mixing and blending; the fresh-concrete temperature; common practice). Only where
     // every factor is a number or a declared symbol, so that nothing is reported twice.
+    // A reading moved to a scale's zero with its degrees not yet converted: T_F - 32 is on
+    // the °C scale only once divided by 1.8.
+    static bool half_converted(const typed_term& t) {
+        return t.known && t.offset != nullptr && t.offset->scale == unit_scale::offset &&
+               t.dim == temperature_dimension() && std::isfinite(t.scale) &&
+               std::abs(t.scale / t.offset->factor - 1.0) > 1e-6;
+    }
+
+    static void read_as_rise(typed_term& t) {
+        t.offset = nullptr;
+        t.point = false;
+        t.origin = 0.0;
+        t.origin_tolerance = 0.0;
+    }
+
     [[gnu::noinline]] std::optional<typed_term> weighted_mean(std::uint32_t index) {
         const syntax::expr_node& n = file_.nodes[index];
         // The weights below are a sum: most quotients are not, and are not expanded.
@@ -3707,6 +3722,13 @@ class checker {
                     made->offset = nullptr;
                 factor = made;
             }
+            // "500*Q*(t_w - 32)" with t_w in °F: 32 lands the °C zero only where 1.8 follows
+            // to convert the degrees; times a quantity the sum is the rise above 32 °F.
+            if (half_converted(result) && factor->known && !factor->numeric)
+                read_as_rise(result);
+            if (factor == reinterpret_cast<const typed_term*>(evaluated) &&
+                half_converted(*factor) && result.known && !result.numeric)
+                read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
             const typed_term& t = *factor;
             if (divided)
                 for (std::uint32_t i = 0; i < t.literal_count; ++i)
