@@ -3580,6 +3580,19 @@ class checker {
                std::abs(t.scale / t.offset->factor - 1.0) > 1e-6;
     }
 
+    // True where the factor, made in `evaluated`, was read as a rise (the product so far may
+    // have been instead).
+    [[gnu::noinline]] static bool
+    settle_half_conversion(typed_term& result, const typed_term* factor, std::byte* evaluated) {
+        if (half_converted(result) && factor->known && !factor->numeric)
+            read_as_rise(result);
+        if (factor != reinterpret_cast<const typed_term*>(evaluated) || !half_converted(*factor) ||
+            !result.known || result.numeric)
+            return false;
+        read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
+        return true;
+    }
+
     static void read_as_rise(typed_term& t) {
         t.offset = nullptr;
         t.point = false;
@@ -3724,11 +3737,9 @@ class checker {
             }
             // "500*Q*(t_w - 32)" with t_w in °F: 32 lands the °C zero only where 1.8 follows
             // to convert the degrees; times a quantity the sum is the rise above 32 °F.
-            if (half_converted(result) && factor->known && !factor->numeric)
-                read_as_rise(result);
-            if (factor == reinterpret_cast<const typed_term*>(evaluated) &&
-                half_converted(*factor) && result.known && !result.numeric)
-                read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
+            if ((result.offset != nullptr || factor->offset != nullptr) &&
+                settle_half_conversion(result, factor, evaluated))
+                factor = reinterpret_cast<const typed_term*>(evaluated);
             const typed_term& t = *factor;
             if (divided)
                 for (std::uint32_t i = 0; i < t.literal_count; ++i)
