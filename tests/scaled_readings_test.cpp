@@ -164,3 +164,16 @@ TEST_CASE("a °F reading less 32 times a quantity is the rise above freezing") {
                plumb::rules::offset_scale);
     fails_with(decl, {"T_C = t_w - 32"}, plumb::rules::unit_scale);
 }
+
+// The hydrant test's H_R = static less 20 psi residual (NFPA 291, from memory) and a rise above
+// a 20 °C reference temperature: a reading less a bare number, set equal to a quantity declared
+// a difference, reads the number on the reading's own scale. Set equal to an absolute reading,
+// or with a scale's zero subtracted, it stays an error.
+TEST_CASE("a reading less a bare number set equal to a difference") {
+    const std::string decl = "p_s : psig\nH_R : psi \"pressure drop to 20 psi residual\"\n"
+                             "p_a : psi\nt_op : °C\ndT : K\nT_K : K\nΔt : Δ°C\n";
+    passes(decl, {"H_R = p_s - 20", "dT = t_op - 20", "Δt = t_op - 20", "dT = 20 - t_op"});
+    fails_with(decl, {"p_a = p_s - 20", "T_K = t_op - 20", "H_R = p_s - 14.7",
+                      "T_K = t_op - 273.15"},
+               plumb::rules::offset_scale);
+}

@@ -3083,6 +3083,18 @@ class checker {
             if ((on_gauge(*reference) && net_pressure(side)) ||
                 (on_gauge(side) && net_pressure(*reference)))
                 continue;
+            // "H_R = p_s - 20" with H_R a drop, "dT = t_op - 20": a reading less a bare number
+            // set equal to a difference reads the number on the reading's own scale.
+            const auto reading_less_a_number = [](const operand& o) {
+                return o.type.point && o.type.reading_or_difference && o.type.offset != nullptr;
+            };
+            const auto a_difference = [](const operand& o) {
+                return !o.type.point && !o.type.numeric && o.type.offset == nullptr &&
+                       o.type.origin == 0.0;
+            };
+            if ((reading_less_a_number(*reference) && a_difference(side)) ||
+                (reading_less_a_number(side) && a_difference(*reference)))
+                continue;
             const operand& off = side.type.offset != nullptr ? side : *reference;
             const operand& other = &off == &side ? *reference : side;
             const unit_definition* unit = off.type.offset;
