@@ -177,3 +177,22 @@ TEST_CASE("a reading less a bare number set equal to a difference") {
                       "T_K = t_op - 273.15"},
                plumb::rules::offset_scale);
 }
+
+// Fits made on the °C scale: the Magnus saturation pressure p_ws = 0.61094 kPa·exp(17.625·t/
+// (t + 243.04)) (Alduchov and Eskridge 1996, from memory) and Antoine's equation for water,
+// log10(p/mmHg) = 8.07131 - 1730.63/(233.426 + t) (handbook constants, from memory). Their
+// constant is fitted to the °C zero; another reading in the denominator, 273.15 there, a
+// reading over itself or a reading in a gas law stays an error.
+TEST_CASE("empirical fits on the °C scale") {
+    const std::string decl = "p_ws : kPa\nt, t_db : °C\nT : K\np_v : mmHg\nρ : kg/m^3\n"
+                             "p : Pa\nR_s : J/(kg*K)\n";
+    passes(decl, {"p_ws = 0.61094 {kPa}*exp(17.625*t/(t + 243.04 {Δ°C}))",
+                  "p_ws = 0.61094 {kPa}*exp(17.625*t/(t + 243.04))",
+                  "p_ws = 0.61094 {kPa}*exp(t*17.625/(243.04 + t))",
+                  "log10(p_v/{mmHg}) = 8.07131 - 1730.63 {K}/(233.426 {K} + t)"});
+    fails_with(decl, {"p_ws = 0.61094 {kPa}*exp(17.625*t_db/(t + 243.04))",
+                      "p_ws = 0.61094 {kPa}*exp(17.625*t/(t + 273.15))",
+                      "p_ws = 0.61094 {kPa}*exp(17.625*t/t)",
+                      "p_ws = 0.61094 {kPa}*exp(17.625*t/(t + T))", "ρ = p/(R_s*(t + 237))"},
+               plumb::rules::offset_scale);
+}

@@ -3605,6 +3605,60 @@ class checker {
         return true;
     }
 
+    // "17.625*t/(t + 243.04 {Δ°C})" (the Magnus fit of saturation pressure) and
+    // "1730.63 {K}/(233.426 {K} + t)" (Antoine's) with t in °C: fits made on a temperature
+    // scale with an arbitrary zero, whose constant is fitted to that zero, so they hold on
+    // that scale alone. A constant that moves the zero to the absolute scale (t + 273.15) is
+    // a conversion instead, and read as one.
+    [[gnu::noinline]] bool fitted_on_scale(std::uint32_t numerator, std::uint32_t denominator,
+                                           const typed_term& top, const typed_term& below) const {
+        if (!below.known || !below.point || !(below.dim == temperature_dimension()) ||
+            std::abs(below.origin) <= 1.0)
+            return false;
+        const auto ungroup = [&](std::uint32_t k) {
+            while (file_.nodes[k].kind == expr_kind::group)
+                k = file_.nodes[k].lhs;
+            return k;
+        };
+        const auto constant = [&](std::uint32_t k) {
+            const expr_kind kind = file_.nodes[k].kind;
+            return kind == expr_kind::number || kind == expr_kind::quantity;
+        };
+        const syntax::expr_node& sum = file_.nodes[ungroup(denominator)];
+        if (sum.kind != expr_kind::add)
+            return false;
+        const std::uint32_t reading = file_.nodes[sum.lhs].kind == expr_kind::symbol ? sum.lhs
+                                                                                      : sum.rhs;
+        const std::uint32_t shift = reading == sum.lhs ? sum.rhs : sum.lhs;
+        if (file_.nodes[reading].kind != expr_kind::symbol || !constant(shift))
+            return false;
+        const std::uint32_t top_node = ungroup(numerator);
+        if (constant(top_node))
+            return top.known && top.offset == nullptr && !top.point &&
+                   top.dim == temperature_dimension();
+        if (top.offset == nullptr)
+            return false;
+        // The same reading times numbers: 17.625*t.
+        const std::string_view name = text(file_.nodes[reading].range);
+        std::size_t readings = 0;
+        std::uint32_t k = top_node;
+        for (;;) {
+            const syntax::expr_node& f = file_.nodes[k];
+            const std::uint32_t factor = f.kind == expr_kind::multiply ? ungroup(f.rhs) : k;
+            if (file_.nodes[factor].kind == expr_kind::symbol) {
+                if (text(file_.nodes[factor].range) != name)
+                    return false;
+                ++readings;
+            } else if (file_.nodes[factor].kind != expr_kind::number) {
+                return false;
+            }
+            if (f.kind != expr_kind::multiply)
+                break;
+            k = ungroup(f.lhs);
+        }
+        return readings == 1;
+    }
+
     static void read_as_rise(typed_term& t) {
         t.offset = nullptr;
         t.point = false;
@@ -3746,6 +3800,13 @@ class checker {
                 if (made->reading_or_difference)
                     made->offset = nullptr;
                 factor = made;
+            }
+            if (divided && factor->offset != nullptr &&
+                fitted_on_scale(op.lhs, op.rhs, result, *factor)) {
+                read_as_rise(result);
+                if (factor != reinterpret_cast<const typed_term*>(evaluated))
+                    factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
+                read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
             }
             // "500*Q*(t_w - 32)" with t_w in °F: 32 lands the °C zero only where 1.8 follows
             // to convert the degrees; times a quantity the sum is the rise above 32 °F.
