@@ -264,6 +264,31 @@ TEST_CASE("heat capacity of a volume as a number: the trade's 1.08 and 500") {
     }
 }
 
+// The air trade's moisture numbers (common practice), worked out here from NIST SP 811 (2008)
+// App. B (lb = 0.45359237 kg, ft³ = 0.028316846592 m³, grain = 64.79891 mg, Btu_IT/h =
+// 0.29307107 W): 4.5 lb/h per cfm is 1.201 kg/m³ of air, inside dry air's 1.13-1.29 between 0
+// and 40 °C at 101.325 kPa; 0.68 Btu/h per cfm per gr/lb is 2.956 MJ/m³, ρ_a·h_fg with h_fg
+// 2460 kJ/kg, inside 2.71-3.23. Read only in a term that is a volume flow times numbers.
+TEST_CASE("the air trade's moisture numbers: 4.5, 0.68 and 4840") {
+    const double cfm = 0.028316846592 / 60.0;
+    CHECK(4.5 * 0.45359237 / 3600.0 / cfm == doctest::Approx(1.2014).epsilon(1e-3));
+    CHECK(0.68 * 0.29307107 / (cfm / 7000.0) == doctest::Approx(2.956e6).epsilon(1e-3));
+    const std::string air = "measure gr = 64.79891 mg\nq_L : Btu/h\nQ_cfm : cfm\n"
+                            "W_1, W_2 : gr/lb\nw_1, w_2 : 1\nm_lb : lb/h\nm : kg\nV : m^3\n"
+                            "F : MN\nA : m^2\n";
+    passes_with_one_note(air,
+                         {"q_L = 0.68*Q_cfm*(W_2 - W_1)", "q_L = 4840*Q_cfm*(w_2 - w_1)",
+                          "m_lb = 4.5*Q_cfm*(W_2 - W_1)/7000", "m_lb = 4.5*Q_cfm*(w_2 - w_1)"},
+                         plumb::rules::trade_constant);
+    // The grains not converted, the density left out, grains' number on lb/lb, and the same
+    // numbers where no volume flows: each stays an error.
+    for (const char* formula : {"m_lb = 4.5*Q_cfm*(W_2 - W_1)", "m_lb = Q_cfm*(w_2 - w_1)",
+                                "q_L = 0.68*Q_cfm*(w_2 - w_1)", "m = 1.2*V", "F = 3*A"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(air + formula + "\n")) == 1);
+    }
+}
+
 // ppm by volume to mass concentration: c = C·M/V_m, with V_m = R·T/p (R = 8.314462618 J/(mol·K),
 // CODATA 2018): 24.465 L/mol at 25 °C and 101.325 kPa, which the air trade prints as 24.45;
 // 385.3 scf/lbmol at 68 °F (ft³ = 0.028316846592 m³, lb = 0.45359237 kg: NIST SP 811 (2008)

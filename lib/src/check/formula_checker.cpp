@@ -82,6 +82,11 @@ const compact_dimension& velocity_squared_dimension() {
         dimension::base(base_dimension::time) / dimension::base(base_dimension::time));
     return d;
 }
+const compact_dimension& volume_flow_dimension() {
+    static const compact_dimension d(dimension::base(base_dimension::length).pow(3) /
+                                     dimension::base(base_dimension::time));
+    return d;
+}
 const compact_dimension& area_dimension() {
     static const compact_dimension d(dimension::base(base_dimension::length) *
                                      dimension::base(base_dimension::length));
@@ -1099,8 +1104,10 @@ class checker {
             }
             if (!any_fits)
                 return false;
-            const auto reading = read_gravity_number(t.scale, reference_scale, numbers,
-                                                     {texts.data(), numbers.size()}, lacking, true);
+            const auto reading =
+                read_gravity_number(t.scale, reference_scale, numbers,
+                                    {texts.data(), numbers.size()}, lacking, true,
+                                    !t.numeric && t.dim == volume_flow_dimension());
             if (!reading)
                 return false;
             readings[found_count++] = {i, *reading};

@@ -21,8 +21,8 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<carried_quantity, 7>& quantities() {
-    static const std::array<carried_quantity, 7> table = [] {
+const std::array<carried_quantity, 9>& quantities() {
+    static const std::array<carried_quantity, 9> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -52,7 +52,12 @@ const std::array<carried_quantity, 7>& quantities() {
         const double molar_volume_least = 8.314462618 * 273.15 / 101325.0;
         const double molar_volume_greatest = 8.314462618 * 298.15 / 101325.0;
         const dimension amount = dimension::base(base_dimension::amount);
-        return std::array<carried_quantity, 7>{{
+        // The moisture a volume of air carries, as latent heat: ρ_a times water's latent heat
+        // from 2406 kJ/kg at 40 °C to 2501 at 0 °C (steam tables, from memory) and the air
+        // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
+        const double air_latent_least = air_density(40.0) * 2406.0e3;
+        const double air_latent_greatest = air_density(0.0) * 2503.0e3;
+        return std::array<carried_quantity, 9>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -104,6 +109,26 @@ const std::array<carried_quantity, 7>& quantities() {
              "steam pressure above atmospheric it is less",
              "write the latent heat in a cell that holds its unit to say so",
              length * length / (time * time), 2256.0e3, 2257.5e3},
+            // The air trade's 4.5 lb/h per cfm (0.075 lb/ft³ times 60 min/h) in moisture and
+            // steam loads, m = 4.5*cfm*ΔW (common practice).
+            {rules::trade_constant, "the density of air", "\u03C1_a", "1/\u03C1_a",
+             " (dry air at 101.325 kPa between 0 and 40 \u00B0C: 1.13 to 1.29 kg/m\u00B3; "
+             "at altitude it is less)",
+             "declare the air's density with its unit (\u03C1_a : kg/m^3 = 1.2), at the "
+             "site's altitude and temperature, to say so",
+             "write the air's density in a cell that holds its unit to say so", density,
+             air_density(40.0), air_density(0.0), true},
+            // The latent load q = 0.68*cfm*ΔW in Btu/h with ΔW in gr/lb, 4840 with ΔW in
+            // lb/lb (common practice).
+            {rules::trade_constant, "the latent heat of the moisture in a volume of air",
+             "\u03C1_a\u00B7h_fg", "1/(\u03C1_a\u00B7h_fg)",
+             " (dry air at 101.325 kPa between 0 and 40 \u00B0C, water's latent heat 2406 to "
+             "2503 kJ/kg: 2.71 to 3.23 MJ/m\u00B3; at altitude it is less)",
+             "write \u03C1_a*h_fg with both declared to say so, with the density at the "
+             "site's altitude and temperature",
+             "write the density and latent heat in cells that hold their units to say so",
+             density * length * length / (time * time), air_latent_least, air_latent_greatest,
+             true},
         }};
     }();
     return table;
@@ -192,7 +217,8 @@ double half_unit_in_last_digit(std::string_view text) {
 std::optional<gravity_reading> read_gravity_number(double term_scale, double reference_scale,
                                                    std::span<const scale_literal> literals,
                                                    std::span<const std::string_view> texts,
-                                                   const dimension& lacking, bool flipped_too) {
+                                                   const dimension& lacking, bool flipped_too,
+                                                   bool volume_flow_term) {
     if (literals.empty() || literals.size() > most_numbers || texts.size() != literals.size() ||
         !(term_scale > 0) || !(reference_scale > 0) || !std::isfinite(term_scale) ||
         !std::isfinite(reference_scale))
@@ -211,6 +237,8 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
             continue;
         const double half_unit = half_unit_in_last_digit(texts[at]);
         for (const carried_quantity& q : quantities()) {
+            if (q.per_volume_flow && !volume_flow_term)
+                continue;
             for (const bool reciprocal : {false, true}) {
                 if (!is_power_of(lacking, q.dim, reciprocal ? -x : x))
                     continue;

@@ -18,7 +18,8 @@ namespace plumb {
 // A quantity the trades write as a bare number, with the range of SI values its printed
 // roundings stand for: g_n exactly, ρ_w and γ_w over water's densities between 0 and 30 °C, the
 // volumetric heat capacities ρ·c_p of water and air inside the HVAC trade's 500 and 1.08, and
-// an ideal gas's molar volume in the air trade's ppm conversions (24.45, 385.3).
+// an ideal gas's molar volume in the air trade's ppm conversions (24.45, 385.3), and the air
+// trade's density and latent heat of a volume of air in its moisture loads (4.5, 0.68, 4840).
 struct carried_quantity {
     std::string_view rule;       // gravity-number, or trade-constant for the heat capacities
     std::string_view what;       // "standard gravity"
@@ -30,6 +31,9 @@ struct carried_quantity {
     dimension dim;
     double least = 0.0;    // SI
     double greatest = 0.0; // SI
+    // Read only in a term that is a volume flow times pure numbers (4.5*cfm*ΔW): the air
+    // trade's per-cfm constants, whose values would otherwise fit too many other numbers.
+    bool per_volume_flow = false;
 };
 
 struct gravity_reading {
@@ -64,7 +68,8 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                                                    std::span<const scale_literal> literals,
                                                    std::span<const std::string_view> texts,
                                                    const dimension& lacking,
-                                                   bool flipped_too = false);
+                                                   bool flipped_too = false,
+                                                   bool volume_flow_term = false);
 
 // The note's words for a reading of the number written `written`.
 std::string gravity_message(std::string_view written, const gravity_reading& reading);
