@@ -196,3 +196,17 @@ TEST_CASE("empirical fits on the °C scale") {
                       "p_ws = 0.61094 {kPa}*exp(17.625*t/(t + T))", "ρ = p/(R_s*(t + 237))"},
                plumb::rules::offset_scale);
 }
+
+// The infinite-slope factor of safety with the cohesion from an old report in psf:
+// FS = (c' + (γ·z·cos²β - u)·tan φ')/(γ·z·sin β·cos β) (common practice), with 1 lbf/ft² =
+// 47.88026 Pa (NIST SP 811 (2008), B.8) rounded to 0.04788 kPa. A sum that agrees through a
+// rounded factor takes the unit of its term with none (kPa), and a group that subtracts a
+// reading ((γ*z - u), u a pore pressure) counts as that reading subtracted, not as a mean.
+TEST_CASE("a sum converted by a rounded factor, beside a group that subtracts a reading") {
+    const std::string decl = "c_psf : lbf/ft^2\nc_e, p, q, u : kPa\na : kN/m^3\nz : m\nFS : 1\n";
+    passes(decl, {"c_e = 0.04788*c_psf + p", "FS = (0.04788*c_psf + p)/q",
+                  "FS = (0.04788*c_psf + (a*z - u))/q", "FS = (p + (a*z - u))/q",
+                  "FS = (0.0478803*c_psf + (a*z - u)*0.5)/q"});
+    fails_with(decl, {"c_e = c_psf + p", "FS = (c_psf + (a*z - u))/q", "c_e = 0.4788*c_psf + p"},
+               plumb::rules::unit_scale);
+}

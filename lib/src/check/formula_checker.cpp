@@ -1852,9 +1852,11 @@ class checker {
         for (const auto& t : terms)
             if (t.type.offset != nullptr && std::abs(t.type.offset->offset - origin) <= slack)
                 return t.type.offset;
-        for (const auto& row : offset_rows())
-            if (row.dim == dim && std::abs(row.unit->offset - origin) <= slack)
-                return row.unit;
+        // A zero known to no bound names no scale of the table: any would match.
+        if (std::isfinite(slack))
+            for (const auto& row : offset_rows())
+                if (row.dim == dim && std::abs(row.unit->offset - origin) <= slack)
+                    return row.unit;
         for (const auto& t : terms)
             if (t.type.offset != nullptr)
                 return t.type.offset;
@@ -1926,9 +1928,11 @@ class checker {
             if (!t.type.known || t.type.zero || is_shift_candidate(t) || !t.type.point)
                 continue;
             const double sign = t.subtracted ? -1.0 : 1.0;
-            origin += sign * t.type.origin;
+            // "c + (γ*z - u)": a group that subtracts a reading counts as one subtracted.
+            const bool negative = t.type.weight_denominator != 0 && t.type.weight_numerator < 0;
+            origin += (negative ? -sign : sign) * t.type.origin;
             origin_tolerance += t.type.origin_tolerance;
-            points += t.subtracted ? -1 : 1;
+            points += (t.subtracted != negative) ? -1 : 1;
             // A mean's weights are small fractions (1/2, 1/3, 3/5); a larger number beside a
             // reading (100*p_bar to kPa, 6.895*p_psig) converts it, and is no weight.
             std::optional<rational> w = weight_of(t.type);

@@ -395,6 +395,10 @@ reconciliation reconcile(std::span<const scaled_operand> ops, flipped_literal fl
     r.agree = best_count == count;
     bool reference_found = false;
     bool odd_found = false;
+    // "0.04788*c_psf + p" in kPa: where the operands agree only through rounded numbers, the
+    // common unit is that of an operand that needs none of its numbers, exact as declared,
+    // not the rounded number's 0.999995 kPa, which the rest of the formula would find off.
+    std::optional<double> plain_unit;
     for (std::size_t j = 0; j < count; ++j) {
         bool plain = j == best_operand && best_subset.product == 1.0;
         if (j == best_operand ||
@@ -403,12 +407,16 @@ reconciliation reconcile(std::span<const scaled_operand> ops, flipped_literal fl
                 r.reference = j;
                 reference_found = true;
             }
+            if (plain && !plain_unit)
+                plain_unit = ops[j].scale;
             r.used_literals = r.used_literals || !plain;
         } else if (!odd_found) {
             r.odd = j;
             odd_found = true;
         }
     }
+    if (r.agree && plain_unit)
+        r.unit = *plain_unit;
     return r;
 }
 
