@@ -333,3 +333,35 @@ TEST_CASE("water's density as a number: 8.34 lb/gal, 62.4 lb/ft³, 1000 kg/m³")
         CHECK(problems_in(run(water + formula + "\n")) == 1);
     }
 }
+
+// Power and torque meet through the 2π radians of a revolution, P = 2π·n·M (ISO 80000-4,
+// power as torque times angular velocity; from memory). The trades fold the 2π into their
+// constants: M = 9549·P/n in N·m from kW and rpm, T = 5252·hp/n in lbf·ft (common practice),
+// and ρ = 191.5·a·R in Ω·cm with the pin spacing a in ft (2π × 30.48, the Wenner array of ASTM
+// G57; from memory). Revolutions count as cycles, so the same formulas without the 2π agree
+// in units as written: that is reported where a torque, a power and a speed in revolutions
+// meet with no π.
+TEST_CASE("a revolution's 2π between power, torque and speed") {
+    const std::string decl = "M : N*m\nM_k : kN*m\nP : kW\nP_w : W\nn : rpm\nT_lb : lbf*ft\n"
+                             "hp : hp\nω : rad/s\nn_2 : rpm\nρ_cm : ohm*cm\na_ft : ft\nR_w : ohm\n";
+    for (const char* formula :
+         {"M = 9550*P/n", "M = 9549*P/n", "M_k = 9.55*P/n", "T_lb = 5252*hp/n",
+          "ρ_cm = 191.5*a_ft*R_w", "P_w = 0.10472*M*n"}) {
+        CAPTURE(formula);
+        const auto found = run(decl + formula + "\n");
+        CHECK(problems_in(found) == 0);
+        CHECK(count_of(found, plumb::rules::trade_constant) == 1);
+    }
+    for (const char* formula : {"M = 60*P_w/(2*pi*n)", "P_w = 2*pi*M*n/60", "M = P_w/ω",
+                                "M = M*n/n_2", "M = 60*P_w/(6.2832*n)"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 0);
+    }
+    for (const char* formula : {"M = 60000*P/n", "M = 60*P_w/n", "T_lb = 33000*hp/n",
+                                "P_w = M*n/60", "M = 9550*P_w/n"}) {
+        CAPTURE(formula);
+        const auto found = run(decl + formula + "\n");
+        CHECK(problems_in(found) == 1);
+        CHECK(count_of(found, plumb::rules::unit_scale) == 1);
+    }
+}

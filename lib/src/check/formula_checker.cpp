@@ -594,8 +594,12 @@ class checker {
                 check_origins(sides, what);
                 if (out_.size() == findings_before)
                     check_scales(sides, sides_what, unit);
-            } else if (check_scales(sides, sides_what, unit)) {
+            } else if (const std::size_t findings_before = out_.size();
+                       check_scales(sides, sides_what, unit)) {
                 check_origins(sides, what);
+                if (out_.size() == findings_before && equation && sides.size() == 2 &&
+                    sides[0].type.known && is_rotating_power_or_torque(sides[0].type.dim))
+                    report_revolution_without_two_pi(f);
             }
             return;
         }
@@ -628,6 +632,107 @@ class checker {
         if (!note_gravity_in_other_units(d, sides, a))
             note_acceleration_apart(d, sides, a);
         note_bare_quantity_apart(d, sides, a);
+    }
+
+    static bool is_rotating_power_or_torque(const compact_dimension& dim) {
+        static const compact_dimension energy(unit_table::standard().resolve("J")->dim());
+        static const compact_dimension power(unit_table::standard().resolve("W")->dim());
+        return dim == energy || dim == power;
+    }
+
+    // "M = 60000*P/n" with M in kN·m, P in kW and n in rpm: revolutions count as cycles, so
+    // the units agree without the 2π radians of a revolution that P = 2π·n·M needs (ω = 2π·n),
+    // and the torque comes out 2π times too large. Asked only of an equation that relates one
+    // torque, one power and one speed in revolutions, with no π or 2π written in it.
+    [[gnu::noinline]] void report_revolution_without_two_pi(const syntax::formula& f) {
+        static const compact_dimension energy(unit_table::standard().resolve("J")->dim());
+        static const compact_dimension power(unit_table::standard().resolve("W")->dim());
+        const symbol_entry* torque = nullptr;
+        const symbol_entry* speed = nullptr;
+        std::string_view torque_name;
+        std::string_view speed_name;
+        int torques = 0;
+        int speeds = 0;
+        int powers = 0;
+        std::vector<std::uint32_t> pending;
+        for (std::uint32_t i = 0; i < f.side_count; ++i)
+            pending.push_back(file_.sides[f.first_side + i].root);
+        while (!pending.empty()) {
+            const std::uint32_t k = pending.back();
+            pending.pop_back();
+            const syntax::expr_node& n = file_.nodes[k];
+            switch (n.kind) {
+            case expr_kind::pi:
+                return;
+            case expr_kind::number: {
+                // 2π, π or their inverses written as numbers (6.283, 3.1416, 0.159).
+                const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
+                for (const double c : {2.0 * std::numbers::pi, std::numbers::pi,
+                                       0.5 / std::numbers::pi, 1.0 / std::numbers::pi})
+                    if (std::abs(v / c - 1.0) < 0.003)
+                        return;
+                break;
+            }
+            case expr_kind::symbol: {
+                const std::string_view name = text(n.range);
+                const symbol_entry* e = symbols_.find(name);
+                if (e == nullptr || !e->compact_dim)
+                    return;
+                const std::string_view unit = e->unit_text;
+                if (unit.find("rpm") != std::string_view::npos ||
+                    unit.find("r/min") != std::string_view::npos ||
+                    unit.find("rev") != std::string_view::npos) {
+                    speed = e;
+                    speed_name = name;
+                    ++speeds;
+                } else if (*e->compact_dim == energy) {
+                    for (const std::string_view energy_unit :
+                         {"J", "Wh", "Btu", "BTU", "cal", "erg", "eV", "therm"})
+                        if (unit.find(energy_unit) != std::string_view::npos || unit.empty())
+                            return;
+                    torque = e;
+                    torque_name = name;
+                    ++torques;
+                } else if (*e->compact_dim == power) {
+                    ++powers;
+                }
+                break;
+            }
+            case expr_kind::call:
+                for (std::uint32_t a = 0; a < n.rhs; ++a)
+                    pending.push_back(file_.call_args[n.lhs + a]);
+                break;
+            case expr_kind::negate:
+            case expr_kind::group:
+                pending.push_back(n.lhs);
+                break;
+            case expr_kind::add:
+            case expr_kind::subtract:
+            case expr_kind::multiply:
+            case expr_kind::divide:
+            case expr_kind::power:
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+                break;
+            default:
+                return;
+            }
+        }
+        if (torques != 1 || speeds != 1 || powers != 1 || torque == nullptr || speed == nullptr)
+            return;
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("'{}' is a torque ({}) and '{}' a speed in revolutions ({}): power and "
+                        "torque meet through the 2\u03C0 radians of each revolution, P = "
+                        "2\u03C0\u00B7n\u00B7M, and this formula has no 2\u03C0, so it is "
+                        "off by 6.28319",
+                        torque_name, torque->unit_text, speed_name, speed->unit_text),
+            file_.nodes[file_.sides[f.first_side].root].range);
+        d.level = severity::warning;
+        d.notes.push_back({"revolutions count as cycles: write 2*pi*n for the angular speed "
+                           "(M = 60000*P/(2*pi*n) in kN·m from kW and rpm is M = 9549*P/n), or "
+                           "declare the speed in rad/s",
+                           {}});
     }
 
     // "E_a = P*8760" with E_a in kWh, "m = V*7850" with m in kg: the sides differ by exactly a
@@ -2838,9 +2943,14 @@ class checker {
         bool whole_three_digits; // also read in a whole number of 3 digits (528, 264)
     };
     static std::span<const folded_constant> folded_constants() {
-        static const std::array<folded_constant, 4> constants{{
+        static const std::array<folded_constant, 6> constants{{
             {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false},
             {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false},
+            // 9550 = 60000/(2π) in M = 9550*P/n (kW, rpm to N·m), 5252 = 33000/(2π) (hp, rpm
+            // to lbf·ft); 191.5 = 2π × 30.48 in the Wenner array's ρ = 2π·a·R (ft to Ω·cm).
+            {1.0 / (2.0 * std::numbers::pi), "1/(2\u03C0)",
+             "a revolution's 2\u03C0 radians (P = 2\u03C0\u00B7n\u00B7M)", false},
+            {2.0 * std::numbers::pi, "2\u03C0", "the formula's 2\u03C0 (radians per revolution; the Wenner array's \u03C1 = 2\u03C0\u00B7a\u00B7R)", false},
             {std::numbers::ln10 / (2.0 * std::numbers::pi), "ln 10/(2\u03C0)",
              "the steady well-flow (Thiem) formula's constant, with log10 for ln,", true},
             {std::numbers::ln10 / (4.0 * std::numbers::pi), "ln 10/(4\u03C0)",
@@ -2899,6 +3009,15 @@ class checker {
                     // too, where whole numbers must otherwise reach 1000).
                     if (!l.factor_like && !(l.value >= 100.0 && l.value < 1000.0))
                         continue;
+                    // 9550 for 9549.3: a whole number's trailing zeros may only place the
+                    // point, and a folded factor is rounded to its significant digits.
+                    // Three significant digits at least: 12000 is no rounded 15279.
+                    const std::string_view written = text(file_.nodes[l.node].range);
+                    const std::size_t digits = written.find_last_not_of('0') + 1;
+                    if (written.find_first_of(".eE") == std::string_view::npos &&
+                        digits >= 3 && digits < written.size())
+                        as.tolerance = std::max(
+                            as.tolerance, half_unit_in_last_digit(written) / l.value);
                     for (const folded_constant& c : folded_constants()) {
                         if (!l.factor_like && !c.whole_three_digits)
                             continue;
