@@ -231,3 +231,15 @@ TEST_CASE("NPSH from a gauge reading: the atmosphere added in the converted unit
     CHECK(problems_in(run(npsh, "@kilopascal-atmosphere NPSH = (p_k*1000 + 101.325 - "
                                 "p_vk*1000)/(ρ*g)")) >= 1);
 }
+
+// Fan shaft power P = V̇·Δp/η (common practice), with V̇ in m³/h, Δp in mbar (100 Pa) and P
+// in kW: 100/(3600*1000) converts, and 1000 is no reference pressure of 1000 mbar, since the
+// product already has the power the other side has. Free air from a receiver, V_r·Δp/p_n,
+// still reads its 101.325.
+TEST_CASE("a side that has the other side's dimension holds no reference state") {
+    const std::string fan = "V_a : m^3/h\nΔp_mbar : mbar\nη_f : 1\nP_f : kW\nV_r, V_fad : m^3\n"
+                            "p_1, p_2 : kPa\n";
+    passes(fan, {"P_f = 100*V_a*Δp_mbar/(3600*1000*η_f)"});
+    passes(fan, {"V_fad = V_r*(p_2 - p_1)/101.325"}, 1);
+    fails_with(fan, {"P_f = V_a*Δp_mbar/(3600*1000*η_f)"}, plumb::rules::unit_scale);
+}
