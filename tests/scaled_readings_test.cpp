@@ -210,3 +210,15 @@ TEST_CASE("a sum converted by a rounded factor, beside a group that subtracts a 
     fails_with(decl, {"c_e = c_psf + p", "FS = (c_psf + (a*z - u))/q", "c_e = 0.4788*c_psf + p"},
                plumb::rules::unit_scale);
 }
+
+// The excess-air ratio from the flue gas's oxygen, λ = 21/(21 - O2) with O2 in % by volume,
+// dry, and the excess air O2/(21 - O2) (common practice; 20.9 % is dry air's oxygen, from
+// memory): the 21 over the sum that reads it in % is in % too. A fraction's 0.21 over it, or
+// beside it, stays a factor of 100 off.
+TEST_CASE("a number over the sum that reads it in percent") {
+    const std::string decl = "O2, O2_ref : %\nλ, EA : 1\nc, c_ref : mg/m^3\n";
+    passes(decl, {"λ = 21/(21 - O2)", "λ = 20.9/(20.9 - O2)", "EA = O2/(21 - O2)",
+                  "c_ref = c*(21 - O2_ref)/(21 - O2)"});
+    fails_with(decl, {"λ = 0.21/(21 - O2)", "λ = 21/(0.21 - O2)", "λ = 21/(22 - O2)"},
+               plumb::rules::unit_scale);
+}

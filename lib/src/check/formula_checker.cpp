@@ -3735,6 +3735,27 @@ class checker {
         return true;
     }
 
+    // "21/(21 - O2)" with O2 in %, the excess-air ratio from the flue gas's oxygen (common
+    // practice): the number over the sum that reads it in the sum's unit is in that unit too.
+    [[gnu::noinline]] bool same_number_over_its_sum(std::uint32_t numerator,
+                                                    std::uint32_t denominator) const {
+        while (file_.nodes[numerator].kind == expr_kind::group)
+            numerator = file_.nodes[numerator].lhs;
+        while (file_.nodes[denominator].kind == expr_kind::group)
+            denominator = file_.nodes[denominator].lhs;
+        const syntax::expr_node& top = file_.nodes[numerator];
+        const syntax::expr_node& sum = file_.nodes[denominator];
+        if (top.kind != expr_kind::number ||
+            (sum.kind != expr_kind::add && sum.kind != expr_kind::subtract))
+            return false;
+        std::uint32_t first = sum.lhs;
+        while (file_.nodes[first].kind == expr_kind::add ||
+               file_.nodes[first].kind == expr_kind::subtract)
+            first = file_.nodes[first].lhs;
+        return file_.nodes[first].kind == expr_kind::number &&
+               text(file_.nodes[first].range) == text(top.range);
+    }
+
     // "17.625*t/(t + 243.04 {Δ°C})" (the Magnus fit of saturation pressure) and
     // "1730.63 {K}/(233.426 {K} + t)" (Antoine's) with t in °C: fits made on a temperature
     // scale with an arbitrary zero, whose constant is fitted to that zero, so they hold on
@@ -3930,6 +3951,12 @@ class checker {
                 if (made->reading_or_difference)
                     made->offset = nullptr;
                 factor = made;
+            }
+            if (divided && result.numeric && factor->scale != 1.0 && !factor->numeric &&
+                factor->known && factor->dim.is_dimensionless() &&
+                same_number_over_its_sum(op.lhs, op.rhs)) {
+                result.scale = factor->scale;
+                result.exact_scale = factor->exact_scale;
             }
             if (divided && factor->offset != nullptr &&
                 fitted_on_scale(op.lhs, op.rhs, result, *factor)) {
