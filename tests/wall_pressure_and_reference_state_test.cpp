@@ -243,3 +243,13 @@ TEST_CASE("a side that has the other side's dimension holds no reference state")
     passes(fan, {"V_fad = V_r*(p_2 - p_1)/101.325"}, 1);
     fails_with(fan, {"P_f = V_a*Δp_mbar/(3600*1000*η_f)"}, plumb::rules::unit_scale);
 }
+
+// A pipeline's pressure-drop budget as a share of its nominal gauge pressure, Δp = 0.05·p
+// (common practice for medical gas distribution, from memory): a gauge pressure is the rise
+// above the atmosphere, and a share of it set equal to a quantity declared a difference is a
+// difference. Set equal to an absolute pressure it stays an error.
+TEST_CASE("a share of a gauge pressure set equal to a difference") {
+    const std::string gases = "p_O2, p_lo : kPag\nΔp_max : kPa\np_abs : kPa\n";
+    passes(gases, {"Δp_max = 0.05*p_O2", "Δp_max = p_O2/20", "p_lo = 0.8*p_O2"});
+    fails_with(gases, {"p_abs = 0.05*p_O2", "p_abs = 0.8*p_O2"}, plumb::rules::offset_scale);
+}

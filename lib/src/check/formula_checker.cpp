@@ -3225,6 +3225,15 @@ class checker {
             if ((reading_less_a_number(*reference) && a_difference(side)) ||
                 (reading_less_a_number(side) && a_difference(*reference)))
                 continue;
+            // "Δp_max = 0.05*p_O2": a share of a gauge pressure, the rise above the atmosphere,
+            // set equal to a quantity declared a difference.
+            const auto share_of_gauge = [&](const operand& o) {
+                return on_gauge(o) && o.type.weight_denominator != 0 &&
+                       !(o.type.weight_numerator == 1 && o.type.weight_denominator == 1);
+            };
+            if ((share_of_gauge(*reference) && a_difference(side)) ||
+                (share_of_gauge(side) && a_difference(*reference)))
+                continue;
             const operand& off = side.type.offset != nullptr ? side : *reference;
             const operand& other = &off == &side ? *reference : side;
             const unit_definition* unit = off.type.offset;
