@@ -222,3 +222,14 @@ TEST_CASE("a number over the sum that reads it in percent") {
     fails_with(decl, {"λ = 0.21/(21 - O2)", "λ = 21/(0.21 - O2)", "λ = 21/(22 - O2)"},
                plumb::rules::unit_scale);
 }
+
+// max and min, and a limit, of readings on scales with different zeros (an absolute pressure
+// beside a gauge one, 101.325 kPa apart; a °C reading beside kelvins, 273.15 K apart: SI
+// Brochure 9th ed., 2.3.1): an error, as a sum of them is. On one scale they pass.
+TEST_CASE("max, min and limits of readings on scales with different zeros") {
+    const std::string decl = "p_a, x : bar\np_g, p_g2 : barg\nt_c : °C\nT_k : K\n";
+    passes(decl, {"p_g = max(p_g, p_g2)", "p_a = min(p_a, p_g + 1.01325 {bar})",
+                  "p_g <= p_g2"});
+    fails_with(decl, {"x = max(p_a, p_g)", "T_k = min(t_c, T_k)", "p_a <= p_g", "t_c >= T_k"},
+               plumb::rules::offset_scale);
+}

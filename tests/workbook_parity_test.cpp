@@ -491,3 +491,26 @@ TEST_CASE("workbook parity: a large power of ten is a conversion, not water's de
     REQUIRE(d != nullptr);
     CHECK(finding(r, "S!B5", rules::trade_constant) == nullptr);
 }
+
+TEST_CASE("workbook parity: readings on scales with different zeros are not compared") {
+    // A tube trailer's arrival pressure in bar a against its MAWP in bar g: 1.01325 bar apart
+    // (the standard atmosphere, 101.325 kPa: ISO 2533, from memory), and the IF reads OK when it
+    // should not. The same against a limit in bar a, or a gauge reading against a gauge limit,
+    // is right; MAX of the two scales is the same slip.
+    const check_report r =
+        check_one_sheet("S", sheet_of({
+                                 {"251", "bar a"},                       // B2
+                                 {"250", "bar g"},                       // B3: MAWP
+                                 {"=IF(B2&gt;B3,1,0)", "-"},             // B4: a against g
+                                 {"=IF(B2&gt;B3+1.01325,1,0)", "-"},     // B5: right
+                                 {"=IF(B2-1.01325&gt;B3,1,0)", "-"},     // B6: right
+                                 {"=MAX(B2,B3)", "bar"},                 // B7: a beside g
+                                 {"=MAX(B2-1.01325,B3)", "bar g"},       // B8: right
+                             }));
+    REQUIRE(r.cells_checked == 5);
+    CHECK(error_at(r, "S!B4"));
+    CHECK_FALSE(error_at(r, "S!B5"));
+    CHECK_FALSE(error_at(r, "S!B6"));
+    CHECK(error_at(r, "S!B7"));
+    CHECK_FALSE(error_at(r, "S!B8"));
+}

@@ -4452,6 +4452,13 @@ class checker {
             cut_literals_to(literal_start);
             if (f->rule == function_rule::angle_of)
                 return result;
+            // max(p_a, p_g): readings on scales with different zeros are not compared.
+            if (scales_agree && values.size() >= 2) {
+                const std::size_t findings_before = out_.size();
+                check_origins(values, fmt::format("call of {}", f->name));
+                if (out_.size() != findings_before)
+                    return unknown_type();
+            }
             if (!std::all_of(args.begin(), args.end(),
                              [](const operand& o) { return o.type.known; }))
                 return unknown_type();
@@ -4568,7 +4575,9 @@ class checker {
             return unknown_type();
         }
         double unit = 1.0;
-        check_scales(sides, "sides of this comparison", unit);
+        // =IF(C28>C27, ...) with a bar a reading against a bar g limit: 1 atm apart.
+        if (check_scales(sides, "sides of this comparison", unit))
+            check_origins(sides, "comparison");
         cut_literals_to(literal_start);
         return typed_term{}; // true or false: a dimensionless number
     }
