@@ -514,3 +514,25 @@ TEST_CASE("workbook parity: readings on scales with different zeros are not comp
     CHECK(error_at(r, "S!B7"));
     CHECK_FALSE(error_at(r, "S!B8"));
 }
+
+TEST_CASE("workbook parity: a number over or under one cell, raised to a fractional power") {
+    // A radiator's output at another mean temperature difference, Φ = Φ50·(ΔT/50)^n with n
+    // about 1.3 (EN 442-2, from memory): the 50 is 50 K, in the cell's unit, as radiator
+    // schedules type it. Squared, the ratio keeps its kelvins; into a kW cell the output is
+    // still 1000 times off.
+    const check_report r =
+        check_one_sheet("S", sheet_of({
+                                 {"1200", "W"},             // B2: output at ΔT 50 K
+                                 {"35", "K"},               // B3: mean temperature difference
+                                 {"1.3", "-"},              // B4: radiator exponent
+                                 {"=B2*(B3/50)^B4", "W"},   // B5: right
+                                 {"=B2/(50/B3)^B4", "W"},   // B6: right
+                                 {"=B2*(B3/50)^2", "W"},    // B7: K² left over
+                                 {"=B2*(B3/50)^B4", "kW"},  // B8: W into kW
+                             }));
+    REQUIRE(r.cells_checked == 4);
+    CHECK_FALSE(error_at(r, "S!B5"));
+    CHECK_FALSE(error_at(r, "S!B6"));
+    CHECK(error_at(r, "S!B7"));
+    CHECK(error_at(r, "S!B8"));
+}

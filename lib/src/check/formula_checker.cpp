@@ -3744,6 +3744,18 @@ class checker {
         return true;
     }
 
+    bool number_beside_one_cell(std::uint32_t node) const {
+        while (file_.nodes[node].kind == expr_kind::group)
+            node = file_.nodes[node].lhs;
+        const syntax::expr_node& n = file_.nodes[node];
+        if (n.kind != expr_kind::divide)
+            return false;
+        const expr_kind a = file_.nodes[n.lhs].kind;
+        const expr_kind b = file_.nodes[n.rhs].kind;
+        return (a == expr_kind::number && b == expr_kind::reference) ||
+               (a == expr_kind::reference && b == expr_kind::number);
+    }
+
     // "21/(21 - O2)" with O2 in %, the excess-air ratio from the flue gas's oxygen (common
     // practice): the number over the sum that reads it in the sum's unit is in that unit too.
     [[gnu::noinline]] bool same_number_over_its_sum(std::uint32_t numerator,
@@ -4153,6 +4165,23 @@ class checker {
                            std::uint32_t base_node, std::uint32_t exponent_node) {
         if (counts_degrees_above_a_reference(base, exponent))
             return temperature_correction(base, exponent, exponent_node);
+        // =B5*(50/H5)^$C$19, a radiator's output at another temperature difference (EN 442):
+        // a spreadsheet's number carries no unit, and over or under one cell, raised to a
+        // power that is no constant or no whole number or root (1.3, the radiator's
+        // exponent), it can only be a value in that cell's unit.
+        if (file_.functions == syntax::function_names::spreadsheet &&
+            (!exponent.value || exponent.value->den() > 3) &&
+            exponent.known && base.known && !base.numeric && base.offset == nullptr &&
+            !base.dim.is_dimensionless() && number_beside_one_cell(base_node)) {
+            typed_term ratio = base;
+            ratio.dim = compact_dimension{};
+            ratio.scale = 1.0;
+            ratio.exact_scale = rational(1);
+            ratio.point = false;
+            ratio.origin = 0.0;
+            ratio.origin_tolerance = 0.0;
+            return apply_power(ratio, exponent, base_node, exponent_node);
+        }
         if (exponent.known && !exponent.dim.is_dimensionless()) {
             diagnostic& d = report(rules::dimensioned_exponent,
                                    fmt::format("the exponent {} has a dimension; an exponent must "
