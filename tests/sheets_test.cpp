@@ -124,6 +124,13 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     same("W/m\u00B2K", "W/(m^2*K)");
     same("W/m2K", "W/(m^2*K)");
     same("kJ/kg.K", "kJ/(kg*K)");
+    // The gas trades' normal and standard cubic metres (DIN 1343, ISO 13443; from memory), one
+    // symbol each however the 3 is typed, never newton metres cubed.
+    same("Nm\u00B3", "Nm3");
+    same("kg/Nm\u00B3", "kg/m^3");
+    same("kg/Nm3", "kg/m^3");
+    same("Sm\u00B3/d", "m^3/d");
+    same("MJ/Nm3", "MJ/m^3");
     CHECK_FALSE(read_unit_text("hrs"));
     // A column of temperature differences headed in the scale's unit holds differences (a
     // Fahrenheit degree is 5/9 K, NIST SP 811 (2008), B.9); a heading that names a reading does

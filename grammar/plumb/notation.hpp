@@ -195,6 +195,9 @@ struct no_spaced_degree_scale : not_at<plus<space>, one<'C', 'F'>, not_at<name_c
 struct unit_symbol
     : sor<seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>, opt<gauge_mark>>,
           seq<utf8::one<0xB0>, must<no_spaced_degree_scale>>> {};
+// "Nm³", "Sm³": the gas trades' normal and standard cubic metres as sheets print them, one
+// symbol (not "Nm" cubed, which would read as newton metres).
+struct gas_volume_symbol : seq<one<'N', 'S'>, one<'m'>, utf8::one<0xB3>, not_at<name_char>> {};
 struct unit_percent : one<'%'> {};
 struct unit_one : seq<one<'1'>, not_at<digit>> {};
 struct unit_group_close : one<')'> {};
@@ -202,7 +205,8 @@ struct unit_group : if_must<one<'('>, star<space>, unit_expression, star<space>,
 };
 // "Δ°C": a difference on an offset scale, an ordinary quantity (1 Δ°C = 1 K).
 struct unit_difference : seq<utf8::one<0x394>, unit_symbol> {};
-struct unit_primary : sor<unit_group, unit_one, unit_percent, unit_difference, unit_symbol> {};
+struct unit_primary
+    : sor<unit_group, unit_one, unit_percent, unit_difference, gas_volume_symbol, unit_symbol> {};
 struct unit_exponent : literal_exponent {};
 // Exponents as documents print them: m², s⁻¹, m³/h.
 struct superscript_sign : utf8::one<0x207B, 0x207A> {};

@@ -691,6 +691,12 @@ template <> struct action<nt::unit_symbol> {
         s.units.push_back({{}, 1.0, nullptr, false, false, std::nullopt});
     }
 };
+template <> struct action<nt::gas_volume_symbol> {
+    template <typename In> static void apply(const In& in, parse_state& s) {
+        const auto found = lookup_unit(in.string_view(), s);
+        s.units.push_back(found ? *found : unit_value{{}, 1.0, nullptr, false, false, std::nullopt});
+    }
+};
 // m², s⁻¹: the exponent in superscript digits.
 template <> struct action<nt::superscript_exponent> {
     template <typename In> static void apply(const In& in, parse_state& s) {

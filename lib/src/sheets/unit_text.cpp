@@ -58,8 +58,19 @@ bool is_letter(char c) {
 // "m3/s" -> "m^3/s", "m²" -> "m^2", "m⁻¹" -> "m^-1".
 std::string to_notation(std::string_view t) {
     std::string out;
+    // "Nm³", "kg/Sm3": the gas trades' normal and standard cubic metres, one symbol each.
+    const auto after_gas_volume = [&] {
+        const std::size_t n = out.size();
+        return n >= 2 && (out[n - 2] == 'N' || out[n - 2] == 'S') && out[n - 1] == 'm' &&
+               (n == 2 || !is_letter(out[n - 3]));
+    };
     for (std::size_t i = 0; i < t.size(); ++i) {
         const std::string_view rest = t.substr(i);
+        if ((rest.substr(0, 2) == "\u00B3" || rest.substr(0, 1) == "3") && after_gas_volume()) {
+            out += '3';
+            i += rest[0] == '3' ? 0 : 1;
+            continue;
+        }
         if (rest.substr(0, 2) == "\u00B2" || rest.substr(0, 2) == "\u00B3" ||
             rest.substr(0, 2) == "\u00B9") {
             out += rest[1] == '\xB2' ? "^2" : rest[1] == '\xB3' ? "^3" : "^1";

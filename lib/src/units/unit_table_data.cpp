@@ -433,6 +433,9 @@ constexpr unit_definition rows[] = {
     spelled("stb", stock_tank_barrel),
     normal_cubic_metre,
     standard_cubic_metre,
+    // As gas sheets print them, with the superscript three.
+    spelled("Nm\u00B3", normal_cubic_metre),
+    spelled("Sm\u00B3", standard_cubic_metre),
     // Mud weight in pounds per U.S. gallon.
     absolute("ppg", "pound per gallon (U.S.)", dims(1, -3, 0), 736351250.0 / 6145149.0,
              "736351250/6145149", prefixes::refused,
