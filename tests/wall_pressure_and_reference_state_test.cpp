@@ -253,3 +253,14 @@ TEST_CASE("a share of a gauge pressure set equal to a difference") {
     passes(gases, {"Δp_max = 0.05*p_O2", "Δp_max = p_O2/20", "p_lo = 0.8*p_O2"});
     fails_with(gases, {"p_abs = 0.05*p_O2", "p_abs = 0.8*p_O2"}, plumb::rules::offset_scale);
 }
+
+// A normal cubic metre is gas at 0 °C and 101.325 kPa (DIN 1343, from memory), a standard one
+// at 15 °C (ISO 13443, from memory): an actual volume becomes one only times (p/p_n)·(T_n/T)
+// (the ideal gas law). Set equal to it directly, or with time conversions alone, the actual
+// volume is a warning; a correction, or a ratio such as LNG's 600, is not questioned.
+TEST_CASE("an actual gas volume set equal to one at reference conditions") {
+    const std::string gas = "Q_n : Nm3/h\nQ_act, Q_2 : m^3/h\nQ_s : m^3/s\nV_s : Sm³\nV : m^3\n"
+                            "p_1, p_n : kPa\nT_n, T_g : K\n";
+    passes(gas, {"Q_n = Q_act*(p_1/p_n)*(T_n/T_g)", "Q_act = Q_2", "V_s = 600*V"});
+    fails_with(gas, {"Q_n = Q_act", "Q_n = Q_s*3600", "V_s = V"}, plumb::rules::unit_scale);
+}

@@ -598,8 +598,12 @@ class checker {
                        check_scales(sides, sides_what, unit)) {
                 check_origins(sides, what);
                 if (out_.size() == findings_before && equation && sides.size() == 2 &&
-                    sides[0].type.known && is_rotating_power_or_torque(sides[0].type.dim))
-                    report_revolution_without_two_pi(f);
+                    sides[0].type.known) {
+                    if (is_rotating_power_or_torque(sides[0].type.dim))
+                        report_revolution_without_two_pi(f);
+                    else if (is_gas_volume_or_flow(sides[0].type.dim))
+                        report_actual_volume_as_normal(sides);
+                }
             }
             return;
         }
@@ -632,6 +636,93 @@ class checker {
         if (!note_gravity_in_other_units(d, sides, a))
             note_acceleration_apart(d, sides, a);
         note_bare_quantity_apart(d, sides, a);
+    }
+
+    static bool is_gas_volume_or_flow(const compact_dimension& dim) {
+        static const compact_dimension volume(dimension::base(base_dimension::length).pow(3));
+        return dim == volume || dim == volume_flow_dimension();
+    }
+
+    // Whether a unit as declared measures gas at reference conditions (Nm3/h, Sm³, MMscf/d).
+    static bool at_reference_conditions(std::string_view unit) {
+        for (const std::string_view mark : {"Nm3", "Sm3", "Nm\u00B3", "Sm\u00B3", "scf", "SCF"})
+            if (unit.find(mark) != std::string_view::npos)
+                return true;
+        return false;
+    }
+
+    // "Q_n = Q_act" with Q_n in Nm3/h and Q_act in m³/h: a normal or standard volume is the
+    // gas's volume at the reference pressure and temperature, and the actual one needs
+    // (p/p_n)·(T_n/T) to become it; the units alone cannot say so, as both are volumes.
+    // Asked only where one side is a symbol at reference conditions and the other an actual
+    // volume times numbers, with nothing that could correct it.
+    [[gnu::noinline]] void report_actual_volume_as_normal(std::span<const operand> sides) {
+        const auto symbol_of = [&](std::uint32_t k) -> const symbol_entry* {
+            while (file_.nodes[k].kind == expr_kind::group)
+                k = file_.nodes[k].lhs;
+            return file_.nodes[k].kind == expr_kind::symbol
+                       ? symbols_.find(text(file_.nodes[k].range))
+                       : nullptr;
+        };
+        // The one symbol of a product of it and numbers, else null.
+        const auto only_symbol = [&](std::uint32_t k) -> std::uint32_t {
+            std::uint32_t found = syntax::no_index;
+            std::vector<std::uint32_t> pending{k};
+            while (!pending.empty()) {
+                const std::uint32_t at = pending.back();
+                pending.pop_back();
+                const syntax::expr_node& n = file_.nodes[at];
+                if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
+                    pending.push_back(n.lhs);
+                    pending.push_back(n.rhs);
+                } else if (n.kind == expr_kind::group) {
+                    pending.push_back(n.lhs);
+                } else if (n.kind == expr_kind::symbol) {
+                    if (found != syntax::no_index)
+                        return syntax::no_index;
+                    found = at;
+                } else if (n.kind == expr_kind::number) {
+                    // Time and decimal conversions only: 600 (LNG's expansion) or 0.95 could
+                    // be the correction itself.
+                    const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
+                    const double decade = std::round(std::log10(v));
+                    const bool power_of_ten = v > 0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12;
+                    if (!power_of_ten && v != 60.0 && v != 3600.0 && v != 24.0 && v != 1440.0 &&
+                        v != 86400.0)
+                        return syntax::no_index;
+                } else {
+                    return syntax::no_index;
+                }
+            }
+            return found;
+        };
+        for (std::size_t i = 0; i < 2; ++i) {
+            const symbol_entry* normal = symbol_of(sides[i].node);
+            if (normal == nullptr || !at_reference_conditions(normal->unit_text))
+                continue;
+            const std::uint32_t actual_node = only_symbol(sides[1 - i].node);
+            if (actual_node == syntax::no_index)
+                return;
+            const std::string_view actual_name = text(file_.nodes[actual_node].range);
+            const symbol_entry* actual = symbols_.find(actual_name);
+            if (actual == nullptr || actual->unit_text.empty() ||
+                at_reference_conditions(actual->unit_text))
+                return;
+            diagnostic& d = report(
+                rules::unit_scale,
+                fmt::format("'{}' is a volume of gas at its actual pressure and temperature ({}) "
+                            "and {} one at reference conditions ({}): they differ by the gas's "
+                            "state, which this formula does not correct for",
+                            actual_name, actual->unit_text, quote(sides[i].node),
+                            normal->unit_text),
+                file_.nodes[sides[1 - i].node].range);
+            d.level = severity::warning;
+            d.notes.push_back({"an actual volume becomes a normal one times (p/p_n)*(T_n/T), "
+                               "with absolute pressures and temperatures (p_n = 101.325 kPa; T_n "
+                               "= 273.15 K for Nm³, 288.15 K for Sm³)",
+                               {}});
+            return;
+        }
     }
 
     static bool is_rotating_power_or_torque(const compact_dimension& dim) {
