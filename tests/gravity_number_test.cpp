@@ -365,3 +365,32 @@ TEST_CASE("a revolution's 2π between power, torque and speed") {
         CHECK(count_of(found, plumb::rules::unit_scale) == 1);
     }
 }
+
+// The US rational method Q = C·i·A gives cfs from in/h and acres, leaving out 1 acre·in/h =
+// 43560 ft² × (1/12 ft)/3600 s = 1.00833 cfs (NIST SP 811 (2008), B.8, acre and inch; the
+// convention is common practice): a note, not a warning. In mm/h the units are 100 times or
+// more apart and stay a warning.
+TEST_CASE("the rational method's acre-inch per hour as a cubic foot per second") {
+    CHECK(43560.0 / 12.0 / 3600.0 == doctest::Approx(1.00833).epsilon(1e-5));
+    const std::string decl = "Q_cfs : cfs\nC : 1\ni_in : in/h\ni_mm : mm/h\nA_ac : acre\n";
+    const auto right = run(decl + "Q_cfs = C*i_in*A_ac\n");
+    CHECK(problems_in(right) == 0);
+    CHECK(count_of(right, plumb::rules::trade_constant) == 1);
+    CHECK(count_of(run(decl + "Q_cfs = C*i_mm*A_ac\n"), plumb::rules::unit_scale) == 1);
+}
+
+// A battery's charge in ampere hours, 1 A·h = 3600 C (SI Brochure 9th ed., Table 8), and an
+// empirical factor with units of its own (TDS ≈ 0.7 ppm per µS/cm of conductivity, common
+// practice): the side-mismatch says how to mark it.
+TEST_CASE("ampere hours, and an empirical factor times one symbol") {
+    const std::string decl = "C_b : Ah\nC_m : mAh\nI : A\nt : h\nQ : C\nTDS : mg/L\nκ : uS/cm\n";
+    CHECK(problems_in(run(decl + "C_b = I*t\n")) == 0);
+    CHECK(problems_in(run(decl + "Q = C_b*3600\n")) == 0);
+    CHECK(problems_in(run(decl + "C_m = I*t*1000\n")) == 0);
+    CHECK(count_of(run(decl + "Q = C_b\n"), plumb::rules::unit_scale) == 1);
+    const auto r = run(decl + "TDS = 0.7*κ\n");
+    REQUIRE(count_of(r, plumb::rules::side_mismatch) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::side_mismatch),
+                            "write it as 0.7?"));
+    CHECK(problems_in(run(decl + "TDS = 0.7?*κ\n")) == 0);
+}

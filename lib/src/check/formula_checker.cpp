@@ -1019,6 +1019,29 @@ class checker {
                                {}});
             return;
         }
+        // "TDS = 0.7*κ": a number times one symbol, where the number is an empirical factor
+        // with units of its own (ppm per µS/cm).
+        for (std::size_t i = 0; i < 2; ++i) {
+            const syntax::expr_node& product = file_.nodes[sides[i].node];
+            if (product.kind != syntax::expr_kind::multiply &&
+                product.kind != syntax::expr_kind::divide)
+                continue;
+            const syntax::expr_node& left = file_.nodes[product.lhs];
+            const syntax::expr_node& right = file_.nodes[product.rhs];
+            const bool number_left = left.kind == syntax::expr_kind::number &&
+                                     right.kind == syntax::expr_kind::symbol;
+            const bool number_right = right.kind == syntax::expr_kind::number &&
+                                      left.kind == syntax::expr_kind::symbol;
+            if (!number_left && !number_right)
+                continue;
+            const std::string number = display_text((number_left ? left : right).range);
+            d.notes.push_back({fmt::format("if {} is an empirical factor that carries units of "
+                                           "its own, write it as {}? for plumb to work out its "
+                                           "dimension, and state it once reviewed ({}?[...])",
+                                           number, number, number),
+                               {}});
+            return;
+        }
     }
 
     std::string display_text(span s) const { return single_line(file_.source->text(s)); }
@@ -2813,6 +2836,23 @@ class checker {
         if (clean) {
             ratio = *clean;
             exact_ratio.reset();
+        }
+        // Q = C·i·A in cfs from in/h and acres, the US rational method: 1 acre·in/h is
+        // 43560/43200 = 1.0083 cfs, which the method leaves out by convention (common practice).
+        if (std::abs(ratio * 121.0 / 120.0 - 1.0) < 1e-5 ||
+            std::abs(ratio * 120.0 / 121.0 - 1.0) < 1e-5) {
+            diagnostic& d =
+                report(rules::trade_constant,
+                       fmt::format("{} and {} are 1.0083 apart, an acre-inch per hour against a "
+                                   "cubic foot per second, a factor that the rational method "
+                                   "(Q = C·i·A in cfs) and the irrigator's rule (1 cfs for an "
+                                   "hour is an acre-inch) leave out by convention",
+                                   quote(ops[index[r.odd]].node),
+                                   quote(ops[index[r.reference]].node)),
+                       file_.nodes[ops[index[r.odd]].node].range);
+            d.level = severity::note;
+            unit = parts[r.reference].scale;
+            return true;
         }
         const std::optional<rational> exact_inverse = exact_product(rational(1), exact_ratio, true);
         // A warning: in a unit-aware calc the units convert themselves; where numbers are

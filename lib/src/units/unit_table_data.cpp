@@ -186,6 +186,10 @@ constexpr unit_definition rows[] = {
              "SI Brochure 9th ed., Table 2 and section 3 (prefixes attach to the gram)"),
     absolute("s", "second", time, 1.0, "1", prefixes::accepted, si_base),
     absolute("A", "ampere", dims(0, 0, 0, 0, 0, 1), 1.0, "1", prefixes::accepted, si_base),
+    // A battery's charge: 1 A·h = 3600 C (SI Brochure 9th ed., Table 8, the hour; common
+    // practice for cells and packs, mAh and kAh too).
+    absolute("Ah", "ampere hour", dims(0, 0, 1, 0, 0, 1), 3600.0, "3600", prefixes::accepted,
+             "SI Brochure 9th ed., Table 8 (h = 3600 s): 1 A\u00B7h = 3600 C"),
     absolute("K", "kelvin", temperature, 1.0, "1", prefixes::accepted, si_base),
     absolute("mol", "mole", dims(0, 0, 0, 0, 1), 1.0, "1", prefixes::accepted, si_base),
     absolute("cd", "candela", dims(0, 0, 0, 0, 0, 0, 1), 1.0, "1", prefixes::accepted, si_base),
