@@ -40,52 +40,44 @@ typed_term unknown_type(bool inferred = false) {
     return t;
 }
 
-// Built at start-up, not on first use: every factor of every product is compared with these,
-// and a guarded local static cost a call each time.
-const compact_dimension acceleration = *compact_dimension::fitted(
-    dimension::base(base_dimension::length) / dimension::base(base_dimension::time) /
-    dimension::base(base_dimension::time));
-const compact_dimension temperature =
-    *compact_dimension::fitted(dimension::base(base_dimension::temperature));
-const compact_dimension pressure = *compact_dimension::fitted(
-    dimension::base(base_dimension::mass) / dimension::base(base_dimension::length) /
-    dimension::base(base_dimension::time) / dimension::base(base_dimension::time));
-const compact_dimension& acceleration_dimension() {
+// The dimensions the rules compare with, as compile-time constants in the exponents' order
+// M, L, T, Θ, N, I, J: every factor of every product is compared with some of them, and a
+// comparison with a constant is two compares with numbers the code holds.
+constexpr compact_dimension acceleration = compact_dimension::whole({0, 1, -2, 0, 0, 0, 0});
+constexpr compact_dimension temperature = compact_dimension::whole({0, 0, 0, 1, 0, 0, 0});
+constexpr compact_dimension pressure = compact_dimension::whole({1, -1, -2, 0, 0, 0, 0});
+constexpr compact_dimension force_dim = compact_dimension::whole({1, 1, -2, 0, 0, 0, 0});
+constexpr compact_dimension force_per_length_dim = compact_dimension::whole({1, 0, -2, 0, 0, 0, 0});
+constexpr compact_dimension length_dim = compact_dimension::whole({0, 1, 0, 0, 0, 0, 0});
+constexpr compact_dimension time_dim = compact_dimension::whole({0, 0, 1, 0, 0, 0, 0});
+constexpr compact_dimension velocity_squared_dim = compact_dimension::whole({0, 2, -2, 0, 0, 0, 0});
+constexpr compact_dimension area_dim = compact_dimension::whole({0, 2, 0, 0, 0, 0, 0});
+constexpr const compact_dimension& acceleration_dimension() {
     return acceleration;
 }
-const compact_dimension& temperature_dimension() {
+constexpr const compact_dimension& temperature_dimension() {
     return temperature;
 }
-const compact_dimension& pressure_dimension() {
+constexpr const compact_dimension& pressure_dimension() {
     return pressure;
 }
-const compact_dimension& force_dimension() {
-    static const compact_dimension d(unit_table::standard().resolve("N")->dim());
-    return d;
+constexpr const compact_dimension& force_dimension() {
+    return force_dim;
 }
-const compact_dimension& force_per_length_dimension() {
-    static const compact_dimension d(unit_table::standard().resolve("N")->dim() /
-                                     dimension::base(base_dimension::length));
-    return d;
+constexpr const compact_dimension& force_per_length_dimension() {
+    return force_per_length_dim;
 }
-const compact_dimension& length_dimension() {
-    static const compact_dimension d(dimension::base(base_dimension::length));
-    return d;
+constexpr const compact_dimension& length_dimension() {
+    return length_dim;
 }
-const compact_dimension& time_dimension() {
-    static const compact_dimension d(dimension::base(base_dimension::time));
-    return d;
+constexpr const compact_dimension& time_dimension() {
+    return time_dim;
 }
-const compact_dimension& velocity_squared_dimension() {
-    static const compact_dimension d(
-        dimension::base(base_dimension::length) * dimension::base(base_dimension::length) /
-        dimension::base(base_dimension::time) / dimension::base(base_dimension::time));
-    return d;
+constexpr const compact_dimension& velocity_squared_dimension() {
+    return velocity_squared_dim;
 }
-const compact_dimension& area_dimension() {
-    static const compact_dimension d(dimension::base(base_dimension::length) *
-                                     dimension::base(base_dimension::length));
-    return d;
+constexpr const compact_dimension& area_dimension() {
+    return area_dim;
 }
 
 // The table's offset and gauge units with their dimensions, for naming a scale by its zero.
