@@ -1426,11 +1426,13 @@ class checker {
             if (!note_gravity_in_other_units(d, terms, a))
                 note_acceleration_apart(d, terms, a);
             cut_literals_to(literal_base);
-            return unknown_type();
+            result = unknown_type();
+            return result; // every return is of `result`, built in the caller's return object
         }
         if (!result.known) {
             cut_literals_to(literal_base);
-            return unknown_type(inferred);
+            result = unknown_type(inferred);
+            return result; // as above
         }
         if (a.reference)
             result.dim = *a.reference;
@@ -1444,8 +1446,10 @@ class checker {
                                                  result.value->to_double(), index, result.value));
             return result;
         }
-        if (offset_term != nullptr)
-            return finish_offset_sum(terms, result, literal_base, index);
+        if (offset_term != nullptr) {
+            result = finish_offset_sum(terms, result, literal_base, index);
+            return result; // as above
+        }
         if (result.dim.is_dimensionless())
             adopt_numbers_in_scaled_unit(base);
         const std::size_t common_base = common_numbers_.size();
@@ -3675,11 +3679,18 @@ class checker {
         return reading;
     }
 
-    typed_term eval_product(std::uint32_t index) {
+    // Out of line, so that eval's frame, entered for every node, stays small.
+    [[gnu::noinline]] typed_term eval_product(std::uint32_t index) {
         if (file_.nodes[index].kind == expr_kind::divide &&
             file_.nodes[file_.nodes[index].lhs].kind == expr_kind::group) [[unlikely]]
             if (const auto mean = weighted_mean(index))
                 return *mean;
+        return eval_factors(index);
+    }
+
+    // A product's factors, multiplied out. Every return is of `result`, so that it is built
+    // in the caller's return object rather than copied there (a type is 112 bytes).
+    typed_term eval_factors(std::uint32_t index) {
         const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
         while (file_.nodes[n].kind == expr_kind::multiply ||
