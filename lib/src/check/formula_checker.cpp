@@ -3911,8 +3911,12 @@ class checker {
 
     typed_term apply_power(const typed_term& base, const typed_term& exponent,
                            std::uint32_t base_node, std::uint32_t exponent_node) {
-        if (counts_degrees_above_a_reference(base, exponent))
-            return temperature_correction(base, exponent, exponent_node);
+        // Every return is of `result`, so that it is built in the caller's return object.
+        typed_term result;
+        if (counts_degrees_above_a_reference(base, exponent)) {
+            result = temperature_correction(base, exponent, exponent_node);
+            return result;
+        }
         if (exponent.known && !exponent.dim.is_dimensionless()) {
             diagnostic& d = report(rules::dimensioned_exponent,
                                    fmt::format("the exponent {} has a dimension; an exponent must "
@@ -3922,7 +3926,8 @@ class checker {
             add_term(d, {exponent, exponent_node});
             d.notes.push_back(
                 {fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}, true});
-            return unknown_type();
+            result = unknown_type();
+            return result;
         }
         // 10^((t - t_ref)/z) with z in Δ°F beside °C: the exponent's units must cancel, as a
         // function's argument's must.
@@ -3945,14 +3950,16 @@ class checker {
                 literals_[base.literal_begin + i].exponent *= exponent.value->to_double();
         else
             cut_literals_to(base.literal_begin);
-        if (!base.known || !exponent.known)
-            return unknown_type(base.inferred || exponent.inferred);
+        if (!base.known || !exponent.known) {
+            result = unknown_type(base.inferred || exponent.inferred);
+            return result;
+        }
         if (base.offset != nullptr && !base.reading_or_difference &&
             !(exponent.value && *exponent.value == rational(1))) {
             report_offset(base_node, *base.offset, "raised to a power");
-            return unknown_type();
+            result = unknown_type();
+            return result;
         }
-        typed_term result;
         result.numeric = base.numeric && exponent.numeric;
         result.exact_scale.reset();
         if (exponent.value) {
@@ -3981,7 +3988,8 @@ class checker {
             d.notes.push_back({"the dimension of the power would depend on the exponent's value; "
                                "make the base dimensionless (divide by a reference value) first",
                                {}});
-            return unknown_type();
+            result = unknown_type();
+            return result;
         }
         result.dim = base.dim.pow(*exponent.value);
         return result;
