@@ -554,8 +554,7 @@ class checker {
                 side_hint_ = &operands_[base].type; // on the type stack, which never moves
                 side_hint_node_ = s.root;
             }
-            operands_.push_back(
-                {push_type([&] { return eval(s.root); }, types_base, f.side_count), s.root});
+            operands_.push_back({push_operand_type(s.root, types_base, f.side_count), s.root});
             side_hint_node_ = syntax::no_index;
         }
         const scratch_region region(operands_, base, types_, types_base);
@@ -863,12 +862,21 @@ class checker {
     }
 
     // An operand's type, on the type stack; shared with an equal one of the same meeting point
-    // where there are many, since looking for one costs more than a short one saves.
-    template <class Make>
-    const typed_term& push_type(Make&& make, std::size_t region, std::size_t operands) {
+    // where there are many, since looking for one costs more than a short one saves. Most
+    // sides, and many terms and arguments, are symbols: a symbol's type is copied from where
+    // its entry keeps it, as a product's factors are read, without the walk's dispatch. In
+    // line: out of line, with eval inlined into it, it cost more than it saved.
+    [[gnu::always_inline]] const typed_term&
+    push_operand_type(std::uint32_t node, std::size_t region, std::size_t operands) {
         constexpr std::size_t shared_from = 16;
-        return operands >= shared_from ? types_.push_shared(make(), region)
-                                       : types_.push_made(make);
+        if (operands >= shared_from)
+            return types_.push_shared(eval(node), region);
+        if (const typed_term* kept = kept_symbol_type(node)) {
+            typed_term& t = types_.push(*kept);
+            t.literal_begin = static_cast<std::uint32_t>(literals_.size()); // as eval sets it
+            return t;
+        }
+        return types_.push_made([&] { return eval(node); });
     }
 
     // 'text' for messages, shortened so one long term cannot swamp a line.
@@ -917,7 +925,7 @@ class checker {
     // yet, and the column's number against that unit as the gravity readings are. Tried on
     // short sums with one such number only, and undone unless every term then agrees.
     bool read_column_and_atmosphere(std::size_t base, std::uint32_t sum_node) {
-        // Below the count where equal types are shared (push_type), so that each term's
+        // Below the count where equal types are shared (push_operand_type), so that each term's
         // type is its own to change.
         constexpr std::size_t most_terms = 15;
         const std::size_t count = operands_.size() - base;
@@ -1375,8 +1383,7 @@ class checker {
             const std::uint32_t node = k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
-            const operand term{push_type([&] { return eval(node); }, types_base, term_count), node,
-                               subtracted};
+            const operand term{push_operand_type(node, types_base, term_count), node, subtracted};
             const typed_term& t = term.type;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
@@ -4098,7 +4105,7 @@ class checker {
                 prefer_dimensionless_ = node;
             if (square_root)
                 square_root_argument_ = node;
-            operands_.push_back({types_.push_made([&] { return eval(node); }), node});
+            operands_.push_back({push_operand_type(node, types_base, 0), node});
             prefer_dimensionless_ = saved;
             square_root_argument_ = saved_root;
         }
