@@ -76,3 +76,15 @@ TEST_CASE("a root of whole exponents it does not divide gives the fraction") {
     const compact_dimension c(with_exponents({1, 0, -2}));
     CHECK(c.pow(rational(1, 2)).expand() == with_exponents({rational(1, 2), 0, rational(-1)}));
 }
+
+TEST_CASE("a dimension made from whole exponents at compile time is the fitted one") {
+    // Pressure, M L^-1 T^-2, and a temperature, Θ: the bits must be those fitting gives, as
+    // equality compares bits first.
+    constexpr compact_dimension pressure = compact_dimension::whole({1, -1, -2, 0, 0, 0, 0});
+    constexpr compact_dimension temperature = compact_dimension::whole({0, 0, 0, 1, 0, 0, 0});
+    CHECK(pressure == compact_dimension(with_exponents({1, -1, -2})));
+    CHECK(pressure.expand() == with_exponents({1, -1, -2}));
+    CHECK(temperature == compact_dimension(with_exponents({0, 0, 0, 1})));
+    CHECK_FALSE(pressure == temperature);
+    CHECK(compact_dimension::whole({0, 0, 0, 0, 0, 0, 0}).is_dimensionless());
+}

@@ -40,57 +40,48 @@ typed_term unknown_type(bool inferred = false) {
     return t;
 }
 
-// Built at start-up, not on first use: every factor of every product is compared with these,
-// and a guarded local static cost a call each time.
-const compact_dimension acceleration = *compact_dimension::fitted(
-    dimension::base(base_dimension::length) / dimension::base(base_dimension::time) /
-    dimension::base(base_dimension::time));
-const compact_dimension temperature =
-    *compact_dimension::fitted(dimension::base(base_dimension::temperature));
-const compact_dimension pressure = *compact_dimension::fitted(
-    dimension::base(base_dimension::mass) / dimension::base(base_dimension::length) /
-    dimension::base(base_dimension::time) / dimension::base(base_dimension::time));
-const compact_dimension& acceleration_dimension() {
+// The dimensions the rules compare with, as compile-time constants in the exponents' order
+// M, L, T, Θ, N, I, J: every factor of every product is compared with some of them, and a
+// comparison with a constant is two compares with numbers the code holds.
+constexpr compact_dimension acceleration = compact_dimension::whole({0, 1, -2, 0, 0, 0, 0});
+constexpr compact_dimension temperature = compact_dimension::whole({0, 0, 0, 1, 0, 0, 0});
+constexpr compact_dimension pressure = compact_dimension::whole({1, -1, -2, 0, 0, 0, 0});
+constexpr compact_dimension force_dim = compact_dimension::whole({1, 1, -2, 0, 0, 0, 0});
+constexpr compact_dimension force_per_length_dim = compact_dimension::whole({1, 0, -2, 0, 0, 0, 0});
+constexpr compact_dimension length_dim = compact_dimension::whole({0, 1, 0, 0, 0, 0, 0});
+constexpr compact_dimension time_dim = compact_dimension::whole({0, 0, 1, 0, 0, 0, 0});
+constexpr compact_dimension velocity_squared_dim = compact_dimension::whole({0, 2, -2, 0, 0, 0, 0});
+constexpr compact_dimension area_dim = compact_dimension::whole({0, 2, 0, 0, 0, 0, 0});
+constexpr const compact_dimension& acceleration_dimension() {
     return acceleration;
 }
-const compact_dimension& temperature_dimension() {
+constexpr const compact_dimension& temperature_dimension() {
     return temperature;
 }
-const compact_dimension& pressure_dimension() {
+constexpr const compact_dimension& pressure_dimension() {
     return pressure;
 }
-const compact_dimension& force_dimension() {
-    static const compact_dimension d(unit_table::standard().resolve("N")->dim());
-    return d;
+constexpr const compact_dimension& force_dimension() {
+    return force_dim;
 }
-const compact_dimension& force_per_length_dimension() {
-    static const compact_dimension d(unit_table::standard().resolve("N")->dim() /
-                                     dimension::base(base_dimension::length));
-    return d;
+constexpr const compact_dimension& force_per_length_dimension() {
+    return force_per_length_dim;
 }
-const compact_dimension& length_dimension() {
-    static const compact_dimension d(dimension::base(base_dimension::length));
-    return d;
+constexpr const compact_dimension& length_dimension() {
+    return length_dim;
 }
-const compact_dimension& time_dimension() {
-    static const compact_dimension d(dimension::base(base_dimension::time));
-    return d;
+constexpr const compact_dimension& time_dimension() {
+    return time_dim;
 }
-const compact_dimension& velocity_squared_dimension() {
-    static const compact_dimension d(
-        dimension::base(base_dimension::length) * dimension::base(base_dimension::length) /
-        dimension::base(base_dimension::time) / dimension::base(base_dimension::time));
-    return d;
+constexpr const compact_dimension& velocity_squared_dimension() {
+    return velocity_squared_dim;
 }
-const compact_dimension& volume_flow_dimension() {
-    static const compact_dimension d(dimension::base(base_dimension::length).pow(3) /
-                                     dimension::base(base_dimension::time));
-    return d;
+constexpr compact_dimension volume_flow_dim = compact_dimension::whole({0, 3, -1, 0, 0, 0, 0});
+constexpr const compact_dimension& volume_flow_dimension() {
+    return volume_flow_dim;
 }
-const compact_dimension& area_dimension() {
-    static const compact_dimension d(dimension::base(base_dimension::length) *
-                                     dimension::base(base_dimension::length));
-    return d;
+constexpr const compact_dimension& area_dimension() {
+    return area_dim;
 }
 
 // The table's offset and gauge units with their dimensions, for naming a scale by its zero.
@@ -567,8 +558,7 @@ class checker {
                 side_hint_ = &operands_[base].type; // on the type stack, which never moves
                 side_hint_node_ = s.root;
             }
-            operands_.push_back(
-                {push_type([&] { return eval(s.root); }, types_base, f.side_count), s.root});
+            operands_.push_back({push_operand_type(s.root, types_base, f.side_count), s.root});
             side_hint_node_ = syntax::no_index;
         }
         const scratch_region region(operands_, base, types_, types_base);
@@ -1095,12 +1085,21 @@ class checker {
     }
 
     // An operand's type, on the type stack; shared with an equal one of the same meeting point
-    // where there are many, since looking for one costs more than a short one saves.
-    template <class Make>
-    const typed_term& push_type(Make&& make, std::size_t region, std::size_t operands) {
+    // where there are many, since looking for one costs more than a short one saves. Most
+    // sides, and many terms and arguments, are symbols: a symbol's type is copied from where
+    // its entry keeps it, as a product's factors are read, without the walk's dispatch. In
+    // line: out of line, with eval inlined into it, it cost more than it saved.
+    [[gnu::always_inline]] const typed_term&
+    push_operand_type(std::uint32_t node, std::size_t region, std::size_t operands) {
         constexpr std::size_t shared_from = 16;
-        return operands >= shared_from ? types_.push_shared(make(), region)
-                                       : types_.push_made(make);
+        if (operands >= shared_from)
+            return types_.push_shared(eval(node), region);
+        if (const typed_term* kept = kept_symbol_type(node)) {
+            typed_term& t = types_.push(*kept);
+            t.literal_begin = static_cast<std::uint32_t>(literals_.size()); // as eval sets it
+            return t;
+        }
+        return types_.push_made([&] { return eval(node); });
     }
 
     // 'text' for messages, shortened so one long term cannot swamp a line.
@@ -1149,7 +1148,7 @@ class checker {
     // yet, and the column's number against that unit as the gravity readings are. Tried on
     // short sums with one such number only, and undone unless every term then agrees.
     bool read_column_and_atmosphere(std::size_t base, std::uint32_t sum_node) {
-        // Below the count where equal types are shared (push_type), so that each term's
+        // Below the count where equal types are shared (push_operand_type), so that each term's
         // type is its own to change.
         constexpr std::size_t most_terms = 15;
         const std::size_t count = operands_.size() - base;
@@ -1609,8 +1608,7 @@ class checker {
             const std::uint32_t node = k == 0 ? n : file_.nodes[spine_[spine_.size() - k]].rhs;
             const bool subtracted =
                 k > 0 && file_.nodes[spine_[spine_.size() - k]].kind == expr_kind::subtract;
-            const operand term{push_type([&] { return eval(node); }, types_base, term_count), node,
-                               subtracted};
+            const operand term{push_operand_type(node, types_base, term_count), node, subtracted};
             const typed_term& t = term.type;
             result.known = result.known && t.known;
             result.numeric = result.numeric && t.numeric;
@@ -1660,11 +1658,13 @@ class checker {
             if (!note_gravity_in_other_units(d, terms, a))
                 note_acceleration_apart(d, terms, a);
             cut_literals_to(literal_base);
-            return unknown_type();
+            result = unknown_type();
+            return result; // every return is of `result`, built in the caller's return object
         }
         if (!result.known) {
             cut_literals_to(literal_base);
-            return unknown_type(inferred);
+            result = unknown_type(inferred);
+            return result; // as above
         }
         if (a.reference)
             result.dim = *a.reference;
@@ -1678,8 +1678,10 @@ class checker {
                                                  result.value->to_double(), index, result.value));
             return result;
         }
-        if (offset_term != nullptr)
-            return finish_offset_sum(terms, result, literal_base, index);
+        if (offset_term != nullptr) {
+            result = finish_offset_sum(terms, result, literal_base, index);
+            return result; // as above
+        }
         if (result.dim.is_dimensionless())
             adopt_numbers_in_scaled_unit(base);
         const std::size_t common_base = common_numbers_.size();
@@ -4052,11 +4054,18 @@ class checker {
         return reading;
     }
 
-    typed_term eval_product(std::uint32_t index) {
+    // Out of line, so that eval's frame, entered for every node, stays small.
+    [[gnu::noinline]] typed_term eval_product(std::uint32_t index) {
         if (file_.nodes[index].kind == expr_kind::divide &&
             file_.nodes[file_.nodes[index].lhs].kind == expr_kind::group) [[unlikely]]
             if (const auto mean = weighted_mean(index))
                 return *mean;
+        return eval_factors(index);
+    }
+
+    // A product's factors, multiplied out. Every return is of `result`, so that it is built
+    // in the caller's return object rather than copied there (a type is 112 bytes).
+    typed_term eval_factors(std::uint32_t index) {
         const std::size_t spine_base = spine_.size();
         std::uint32_t n = index;
         while (file_.nodes[n].kind == expr_kind::multiply ||
@@ -4294,16 +4303,20 @@ class checker {
 
     typed_term apply_power(const typed_term& base, const typed_term& exponent,
                            std::uint32_t base_node, std::uint32_t exponent_node) {
-        if (counts_degrees_above_a_reference(base, exponent))
-            return temperature_correction(base, exponent, exponent_node);
+        // Every return is of `result`, so that it is built in the caller's return object.
+        typed_term result;
+        if (counts_degrees_above_a_reference(base, exponent)) {
+            result = temperature_correction(base, exponent, exponent_node);
+            return result;
+        }
         // =B5*(50/H5)^$C$19, a radiator's output at another temperature difference (EN 442):
         // a spreadsheet's number carries no unit, and over or under one cell, raised to a
         // power that is no constant or no whole number or root (1.3, the radiator's
         // exponent), it can only be a value in that cell's unit.
         if (file_.functions == syntax::function_names::spreadsheet &&
-            (!exponent.value || exponent.value->den() > 3) &&
-            exponent.known && base.known && !base.numeric && base.offset == nullptr &&
-            !base.dim.is_dimensionless() && number_beside_one_cell(base_node)) {
+            (!exponent.value || exponent.value->den() > 3) && exponent.known && base.known &&
+            !base.numeric && base.offset == nullptr && !base.dim.is_dimensionless() &&
+            number_beside_one_cell(base_node)) [[unlikely]] {
             typed_term ratio = base;
             ratio.dim = compact_dimension{};
             ratio.scale = 1.0;
@@ -4311,7 +4324,8 @@ class checker {
             ratio.point = false;
             ratio.origin = 0.0;
             ratio.origin_tolerance = 0.0;
-            return apply_power(ratio, exponent, base_node, exponent_node);
+            result = apply_power(ratio, exponent, base_node, exponent_node);
+            return result;
         }
         if (exponent.known && !exponent.dim.is_dimensionless()) {
             diagnostic& d = report(rules::dimensioned_exponent,
@@ -4322,7 +4336,8 @@ class checker {
             add_term(d, {exponent, exponent_node});
             d.notes.push_back(
                 {fmt::format("{} is {}", quote(exponent_node), describe(exponent.dim)), {}, true});
-            return unknown_type();
+            result = unknown_type();
+            return result;
         }
         // 10^((t - t_ref)/z) with z in Δ°F beside °C: the exponent's units must cancel, as a
         // function's argument's must.
@@ -4345,14 +4360,16 @@ class checker {
                 literals_[base.literal_begin + i].exponent *= exponent.value->to_double();
         else
             cut_literals_to(base.literal_begin);
-        if (!base.known || !exponent.known)
-            return unknown_type(base.inferred || exponent.inferred);
+        if (!base.known || !exponent.known) {
+            result = unknown_type(base.inferred || exponent.inferred);
+            return result;
+        }
         if (base.offset != nullptr && !base.reading_or_difference &&
             !(exponent.value && *exponent.value == rational(1))) {
             report_offset(base_node, *base.offset, "raised to a power");
-            return unknown_type();
+            result = unknown_type();
+            return result;
         }
-        typed_term result;
         result.numeric = base.numeric && exponent.numeric;
         result.exact_scale.reset();
         if (exponent.value) {
@@ -4381,7 +4398,8 @@ class checker {
             d.notes.push_back({"the dimension of the power would depend on the exponent's value; "
                                "make the base dimensionless (divide by a reference value) first",
                                {}});
-            return unknown_type();
+            result = unknown_type();
+            return result;
         }
         result.dim = base.dim.pow(*exponent.value);
         return result;
@@ -4490,7 +4508,7 @@ class checker {
                 prefer_dimensionless_ = node;
             if (square_root)
                 square_root_argument_ = node;
-            operands_.push_back({types_.push_made([&] { return eval(node); }), node});
+            operands_.push_back({push_operand_type(node, types_base, 0), node});
             prefer_dimensionless_ = saved;
             square_root_argument_ = saved_root;
         }

@@ -20,6 +20,15 @@ class compact_dimension {
 
     // `d`, fitted, or else kept in the arena until the next reset_arena().
     explicit compact_dimension(const dimension& d);
+    // The dimension of these whole exponents (M, L, T, Θ, N, I, J), in the fitted form, made
+    // at compile time: the rules' own dimensions (a pressure, a temperature) are such
+    // constants, so comparing with one is two compares with numbers the code holds.
+    static constexpr compact_dimension
+    whole(const std::array<std::int16_t, base_dimension_count>& exponents) {
+        compact_dimension d;
+        d.num_ = exponents;
+        return d;
+    }
     // `d` when it fits; never uses the arena, so the value may outlive a check.
     static std::optional<compact_dimension> fitted(const dimension& d);
     // Forgets the arena's dimensions: call where no compact_dimension that used it is alive
