@@ -587,13 +587,8 @@ class checker {
             } else if (const std::size_t findings_before = out_.size();
                        check_scales(sides, sides_what, unit)) {
                 check_origins(sides, what);
-                if (out_.size() == findings_before && equation && sides.size() == 2 &&
-                    sides[0].type.known) {
-                    if (is_rotating_power_or_torque(sides[0].type.dim))
-                        report_revolution_without_two_pi(f);
-                    else if (is_gas_volume_or_flow(sides[0].type.dim))
-                        report_actual_volume_as_normal(sides);
-                }
+                if (symbols_.unit_marks() != 0 && out_.size() == findings_before && equation)
+                    ask_of_marked_units(f, sides);
             }
             return;
         }
@@ -628,17 +623,23 @@ class checker {
         note_bare_quantity_apart(d, sides, a);
     }
 
+    // Rules for units that the file declares (symbol_table::unit_marks), asked of an equation
+    // whose sides agree.
+    [[gnu::noinline]] void ask_of_marked_units(const syntax::formula& f,
+                                               std::span<const operand> sides) {
+        if (sides.size() != 2 || !sides[0].type.known)
+            return;
+        const std::uint8_t marks = symbols_.unit_marks();
+        if ((marks & counts_revolutions) != 0 && is_rotating_power_or_torque(sides[0].type.dim))
+            report_revolution_without_two_pi(f);
+        else if ((marks & at_reference_conditions) != 0 &&
+                 is_gas_volume_or_flow(sides[0].type.dim))
+            report_actual_volume_as_normal(sides);
+    }
+
     static bool is_gas_volume_or_flow(const compact_dimension& dim) {
         static const compact_dimension volume(dimension::base(base_dimension::length).pow(3));
         return dim == volume || dim == volume_flow_dimension();
-    }
-
-    // Whether a unit as declared measures gas at reference conditions (Nm3/h, Sm³, MMscf/d).
-    static bool at_reference_conditions(std::string_view unit) {
-        for (const std::string_view mark : {"Nm3", "Sm3", "Nm\u00B3", "Sm\u00B3", "scf", "SCF"})
-            if (unit.find(mark) != std::string_view::npos)
-                return true;
-        return false;
     }
 
     // "Q_n = Q_act" with Q_n in Nm3/h and Q_act in m³/h: a normal or standard volume is the
@@ -688,7 +689,7 @@ class checker {
         };
         for (std::size_t i = 0; i < 2; ++i) {
             const symbol_entry* normal = symbol_of(sides[i].node);
-            if (normal == nullptr || !at_reference_conditions(normal->unit_text))
+            if (normal == nullptr || (unit_marks_of(normal->unit_text) & at_reference_conditions) == 0)
                 continue;
             const std::uint32_t actual_node = only_symbol(sides[1 - i].node);
             if (actual_node == syntax::no_index)
@@ -696,7 +697,7 @@ class checker {
             const std::string_view actual_name = text(file_.nodes[actual_node].range);
             const symbol_entry* actual = symbols_.find(actual_name);
             if (actual == nullptr || actual->unit_text.empty() ||
-                at_reference_conditions(actual->unit_text))
+                (unit_marks_of(actual->unit_text) & at_reference_conditions) != 0)
                 return;
             diagnostic& d = report(
                 rules::unit_scale,
@@ -760,9 +761,7 @@ class checker {
                 if (e == nullptr || !e->compact_dim)
                     return;
                 const std::string_view unit = e->unit_text;
-                if (unit.find("rpm") != std::string_view::npos ||
-                    unit.find("r/min") != std::string_view::npos ||
-                    unit.find("rev") != std::string_view::npos) {
+                if ((unit_marks_of(unit) & counts_revolutions) != 0) {
                     speed = e;
                     speed_name = name;
                     ++speeds;
@@ -4631,9 +4630,13 @@ class checker {
             if (f->rule == function_rule::angle_of)
                 return result;
             // max(p_a, p_g): readings on scales with different zeros are not compared.
-            if (scales_agree && values.size() >= 2) {
+            if (scales_agree && values.size() >= 2 &&
+                std::any_of(values.begin(), values.end(), [](const operand& v) {
+                    return v.type.zero_of != nullptr || v.type.weighted_sum ||
+                           v.type.origin != 0.0;
+                })) {
                 const std::size_t findings_before = out_.size();
-                check_origins(values, fmt::format("call of {}", f->name));
+                compare_origins(values, fmt::format("call of {}", f->name));
                 if (out_.size() != findings_before)
                     return unknown_type();
             }

@@ -620,8 +620,11 @@ class session {
                     entry.offset_unit = decl.kind.single_unit;
             }
             auto [existing, inserted] = table.insert(name, entry);
-            if (inserted)
+            if (inserted) {
+                if (!entry.unit_text.empty())
+                    table.note_unit_marks(unit_marks_of(entry.unit_text));
                 continue;
+            }
             if (existing->declared_at.file == at.file &&
                 existing->declared_at.range.begin == at.range.begin)
                 continue;

@@ -17,6 +17,26 @@ namespace plumb {
 
 struct unit_definition;
 
+// Units as declared that some rules ask about, noted as the table is filled so that a file
+// declaring none skips those rules at no cost per formula.
+enum unit_mark : std::uint8_t {
+    counts_revolutions = 1,      // rpm, r/min, rev/s: a speed in cycles, not radians
+    at_reference_conditions = 2, // Nm3, Sm³, scf: gas at a reference pressure and temperature
+};
+
+[[nodiscard]] inline std::uint8_t unit_marks_of(std::string_view unit_text) {
+    const auto has = [&](std::string_view part) {
+        return unit_text.find(part) != std::string_view::npos;
+    };
+    std::uint8_t marks = 0;
+    if (has("rpm") || has("r/min") || has("rev"))
+        marks |= counts_revolutions;
+    if (has("Nm3") || has("Sm3") || has("Nm\u00B3") || has("Sm\u00B3") || has("scf") ||
+        has("SCF"))
+        marks |= at_reference_conditions;
+    return marks;
+}
+
 struct symbol_entry {
     std::optional<dimension> dim; // empty when its declaration had an error (already reported)
                                   // or when it is to be inferred
@@ -72,6 +92,9 @@ class symbol_table {
     [[nodiscard]] std::vector<std::string_view> nearest(std::string_view name,
                                                         std::size_t limit = 3) const;
     [[nodiscard]] bool suggestions_cut_short() const { return suggestions_cut_short_; }
+    // The unit_marks of every unit declared so far, or'ed.
+    [[nodiscard]] std::uint8_t unit_marks() const { return unit_marks_; }
+    void note_unit_marks(std::uint8_t marks) { unit_marks_ |= marks; }
     static constexpr std::size_t max_suggestion_comparisons = 5'000'000;
 
   private:
@@ -97,6 +120,7 @@ class symbol_table {
     std::vector<slot> slots_;
     mutable std::size_t suggestion_comparisons_ = 0;
     mutable bool suggestions_cut_short_ = false;
+    std::uint8_t unit_marks_ = 0;
 
     // The declared name equal to `name` (a view into its file), or null.
     [[nodiscard]] const std::string_view* declared_name(std::string_view name) const {
