@@ -344,9 +344,8 @@ TEST_CASE("water's density as a number: 8.34 lb/gal, 62.4 lb/ft³, 1000 kg/m³")
 TEST_CASE("a revolution's 2π between power, torque and speed") {
     const std::string decl = "M : N*m\nM_k : kN*m\nP : kW\nP_w : W\nn : rpm\nT_lb : lbf*ft\n"
                              "hp : hp\nω : rad/s\nn_2 : rpm\nρ_cm : ohm*cm\na_ft : ft\nR_w : ohm\n";
-    for (const char* formula :
-         {"M = 9550*P/n", "M = 9549*P/n", "M_k = 9.55*P/n", "T_lb = 5252*hp/n",
-          "ρ_cm = 191.5*a_ft*R_w", "P_w = 0.10472*M*n"}) {
+    for (const char* formula : {"M = 9550*P/n", "M = 9549*P/n", "M_k = 9.55*P/n",
+                                "T_lb = 5252*hp/n", "ρ_cm = 191.5*a_ft*R_w", "P_w = 0.10472*M*n"}) {
         CAPTURE(formula);
         const auto found = run(decl + formula + "\n");
         CHECK(problems_in(found) == 0);
@@ -357,8 +356,8 @@ TEST_CASE("a revolution's 2π between power, torque and speed") {
         CAPTURE(formula);
         CHECK(problems_in(run(decl + formula + "\n")) == 0);
     }
-    for (const char* formula : {"M = 60000*P/n", "M = 60*P_w/n", "T_lb = 33000*hp/n",
-                                "P_w = M*n/60", "M = 9550*P_w/n"}) {
+    for (const char* formula :
+         {"M = 60000*P/n", "M = 60*P_w/n", "T_lb = 33000*hp/n", "P_w = M*n/60", "M = 9550*P_w/n"}) {
         CAPTURE(formula);
         const auto found = run(decl + formula + "\n");
         CHECK(problems_in(found) == 1);

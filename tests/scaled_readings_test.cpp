@@ -173,8 +173,8 @@ TEST_CASE("a reading less a bare number set equal to a difference") {
     const std::string decl = "p_s : psig\nH_R : psi \"pressure drop to 20 psi residual\"\n"
                              "p_a : psi\nt_op : °C\ndT : K\nT_K : K\nΔt : Δ°C\n";
     passes(decl, {"H_R = p_s - 20", "dT = t_op - 20", "Δt = t_op - 20", "dT = 20 - t_op"});
-    fails_with(decl, {"p_a = p_s - 20", "T_K = t_op - 20", "H_R = p_s - 14.7",
-                      "T_K = t_op - 273.15"},
+    fails_with(decl,
+               {"p_a = p_s - 20", "T_K = t_op - 20", "H_R = p_s - 14.7", "T_K = t_op - 273.15"},
                plumb::rules::offset_scale);
 }
 
@@ -190,10 +190,11 @@ TEST_CASE("empirical fits on the °C scale") {
                   "p_ws = 0.61094 {kPa}*exp(17.625*t/(t + 243.04))",
                   "p_ws = 0.61094 {kPa}*exp(t*17.625/(243.04 + t))",
                   "log10(p_v/{mmHg}) = 8.07131 - 1730.63 {K}/(233.426 {K} + t)"});
-    fails_with(decl, {"p_ws = 0.61094 {kPa}*exp(17.625*t_db/(t + 243.04))",
-                      "p_ws = 0.61094 {kPa}*exp(17.625*t/(t + 273.15))",
-                      "p_ws = 0.61094 {kPa}*exp(17.625*t/t)",
-                      "p_ws = 0.61094 {kPa}*exp(17.625*t/(t + T))", "ρ = p/(R_s*(t + 237))"},
+    fails_with(decl,
+               {"p_ws = 0.61094 {kPa}*exp(17.625*t_db/(t + 243.04))",
+                "p_ws = 0.61094 {kPa}*exp(17.625*t/(t + 273.15))",
+                "p_ws = 0.61094 {kPa}*exp(17.625*t/t)",
+                "p_ws = 0.61094 {kPa}*exp(17.625*t/(t + T))", "ρ = p/(R_s*(t + 237))"},
                plumb::rules::offset_scale);
 }
 
@@ -228,8 +229,7 @@ TEST_CASE("a number over the sum that reads it in percent") {
 // Brochure 9th ed., 2.3.1): an error, as a sum of them is. On one scale they pass.
 TEST_CASE("max, min and limits of readings on scales with different zeros") {
     const std::string decl = "p_a, x : bar\np_g, p_g2 : barg\nt_c : °C\nT_k : K\n";
-    passes(decl, {"p_g = max(p_g, p_g2)", "p_a = min(p_a, p_g + 1.01325 {bar})",
-                  "p_g <= p_g2"});
+    passes(decl, {"p_g = max(p_g, p_g2)", "p_a = min(p_a, p_g + 1.01325 {bar})", "p_g <= p_g2"});
     fails_with(decl, {"x = max(p_a, p_g)", "T_k = min(t_c, T_k)", "p_a <= p_g", "t_c >= T_k"},
                plumb::rules::offset_scale);
 }

@@ -497,16 +497,15 @@ TEST_CASE("workbook parity: readings on scales with different zeros are not comp
     // (the standard atmosphere, 101.325 kPa: ISO 2533, from memory), and the IF reads OK when it
     // should not. The same against a limit in bar a, or a gauge reading against a gauge limit,
     // is right; MAX of the two scales is the same slip.
-    const check_report r =
-        check_one_sheet("S", sheet_of({
-                                 {"251", "bar a"},                       // B2
-                                 {"250", "bar g"},                       // B3: MAWP
-                                 {"=IF(B2&gt;B3,1,0)", "-"},             // B4: a against g
-                                 {"=IF(B2&gt;B3+1.01325,1,0)", "-"},     // B5: right
-                                 {"=IF(B2-1.01325&gt;B3,1,0)", "-"},     // B6: right
-                                 {"=MAX(B2,B3)", "bar"},                 // B7: a beside g
-                                 {"=MAX(B2-1.01325,B3)", "bar g"},       // B8: right
-                             }));
+    const check_report r = check_one_sheet("S", sheet_of({
+                                                    {"251", "bar a"},           // B2
+                                                    {"250", "bar g"},           // B3: MAWP
+                                                    {"=IF(B2&gt;B3,1,0)", "-"}, // B4: a against g
+                                                    {"=IF(B2&gt;B3+1.01325,1,0)", "-"}, // B5: right
+                                                    {"=IF(B2-1.01325&gt;B3,1,0)", "-"}, // B6: right
+                                                    {"=MAX(B2,B3)", "bar"}, // B7: a beside g
+                                                    {"=MAX(B2-1.01325,B3)", "bar g"}, // B8: right
+                                                }));
     REQUIRE(r.cells_checked == 5);
     CHECK(error_at(r, "S!B4"));
     CHECK_FALSE(error_at(r, "S!B5"));
@@ -520,16 +519,15 @@ TEST_CASE("workbook parity: a number over or under one cell, raised to a fractio
     // about 1.3 (EN 442-2, from memory): the 50 is 50 K, in the cell's unit, as radiator
     // schedules type it. Squared, the ratio keeps its kelvins; into a kW cell the output is
     // still 1000 times off.
-    const check_report r =
-        check_one_sheet("S", sheet_of({
-                                 {"1200", "W"},             // B2: output at ΔT 50 K
-                                 {"35", "K"},               // B3: mean temperature difference
-                                 {"1.3", "-"},              // B4: radiator exponent
-                                 {"=B2*(B3/50)^B4", "W"},   // B5: right
-                                 {"=B2/(50/B3)^B4", "W"},   // B6: right
-                                 {"=B2*(B3/50)^2", "W"},    // B7: K² left over
-                                 {"=B2*(B3/50)^B4", "kW"},  // B8: W into kW
-                             }));
+    const check_report r = check_one_sheet("S", sheet_of({
+                                                    {"1200", "W"}, // B2: output at ΔT 50 K
+                                                    {"35", "K"},  // B3: mean temperature difference
+                                                    {"1.3", "-"}, // B4: radiator exponent
+                                                    {"=B2*(B3/50)^B4", "W"},  // B5: right
+                                                    {"=B2/(50/B3)^B4", "W"},  // B6: right
+                                                    {"=B2*(B3/50)^2", "W"},   // B7: K² left over
+                                                    {"=B2*(B3/50)^B4", "kW"}, // B8: W into kW
+                                                }));
     REQUIRE(r.cells_checked == 4);
     CHECK_FALSE(error_at(r, "S!B5"));
     CHECK_FALSE(error_at(r, "S!B6"));

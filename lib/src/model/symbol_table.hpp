@@ -31,8 +31,7 @@ enum unit_mark : std::uint8_t {
     std::uint8_t marks = 0;
     if (has("rpm") || has("r/min") || has("rev"))
         marks |= counts_revolutions;
-    if (has("Nm3") || has("Sm3") || has("Nm\u00B3") || has("Sm\u00B3") || has("scf") ||
-        has("SCF"))
+    if (has("Nm3") || has("Sm3") || has("Nm\u00B3") || has("Sm\u00B3") || has("scf") || has("SCF"))
         marks |= at_reference_conditions;
     return marks;
 }

@@ -694,7 +694,8 @@ template <> struct action<nt::unit_symbol> {
 template <> struct action<nt::gas_volume_symbol> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         const auto found = lookup_unit(in.string_view(), s);
-        s.units.push_back(found ? *found : unit_value{{}, 1.0, nullptr, false, false, std::nullopt});
+        s.units.push_back(found ? *found
+                                : unit_value{{}, 1.0, nullptr, false, false, std::nullopt});
     }
 };
 // m², s⁻¹: the exponent in superscript digits.
