@@ -233,3 +233,23 @@ TEST_CASE("max, min and limits of readings on scales with different zeros") {
     fails_with(decl, {"x = max(p_a, p_g)", "T_k = min(t_c, T_k)", "p_a <= p_g", "t_c >= T_k"},
                plumb::rules::offset_scale);
 }
+
+// A rate's temperature correction k_T = k_20·θ^(T - 20) with T in °C (Metcalf & Eddy,
+// Wastewater Engineering, 4th ed., eq. 1-44, from memory): with T a kelvin reading, T - 20
+// counts from 20 K, some 273 kelvins off; less 293.15 it is right.
+TEST_CASE("a temperature correction's reference subtracted from a kelvin reading") {
+    const std::string decl = "k_T, k_20, θ : 1\nT_w : °C\nT_wK : K\ndT : K\n";
+    passes(decl, {"k_T = k_20*θ^(T_w - 20)", "k_T = k_20*θ^(T_wK - 293.15)", "k_T = k_20*θ^dT"});
+    fails_with(decl, {"k_T = k_20*θ^(T_wK - 20)", "k_T = k_20*θ^(T_wK - 15)"},
+               plumb::rules::offset_scale);
+}
+
+// The Arrhenius equivalent age t_e = exp(-Q·(1/T_a - 1/T_s))·Δt takes absolute temperatures
+// (ASTM C1074, from memory); with °C readings each reciprocal is an error, as Q/T_a is.
+TEST_CASE("the reciprocal of a reading on an offset scale") {
+    const std::string decl = "t_e, Δt : h\nQ_K : K\nT_a, T_s : °C\nT_aK, T_sK : K\nx : 1/K\n";
+    passes(decl, {"t_e = exp(-Q_K*(1/T_aK - 1/T_sK))*Δt",
+                  "t_e = exp(-Q_K*(1/(T_a + 273.15) - 1/(T_s + 273.15)))*Δt"});
+    fails_with(decl, {"t_e = exp(-Q_K*(1/T_a - 1/T_s))*Δt", "x = 1/T_a - 1/T_s", "x = 1/T_a"},
+               plumb::rules::offset_scale);
+}

@@ -4151,8 +4151,10 @@ class checker {
                            (other.known ? !other.numeric : other.inferred);
                 };
                 const bool left_off = scales_a_reading(result, t);
+                // A number over a reading (1/T_a in Arrhenius's 1/T_1 - 1/T_2) is no scaling.
                 const bool right_off =
-                    scales_a_reading(t, result) && !(result.known && result.numeric && !divided);
+                    (scales_a_reading(t, result) && !(result.known && result.numeric && !divided)) ||
+                    (divided && t.known && t.offset != nullptr && result.known && result.numeric);
                 const bool gauge_over_something =
                     (left_off || (right_off && !divided)) &&
                     compact_dimension((left_off ? result : t).offset->dim()) ==
@@ -4423,6 +4425,26 @@ class checker {
                                       std::uint32_t exponent_node) {
         cut_literals_to(base.literal_begin);
         typed_term result;
+        // θ^(T_K - 20): a kelvin reading less a reference in °C counts from 20 K, some 273
+        // kelvins below the reference the number was fitted at.
+        if (const double reference = reference_subtracted(exponent_node);
+            exponent.reading_or_difference && exponent.offset == nullptr && reference > 0.0 &&
+            reference < 200.0) {
+            diagnostic& d = report(
+                rules::offset_scale,
+                fmt::format("the exponent {} takes {} from a reading on the absolute scale: the "
+                            "reference of a temperature correction is a reading in °C (20 °C "
+                            "is 293.15 K), so this counts from {} K",
+                            quote(exponent_node), format_factor(reference),
+                            format_factor(reference)),
+                file_.nodes[exponent_node].range);
+            add_term(d, {exponent, exponent_node});
+            d.notes.push_back({"write the reading in °C, or subtract the reference in kelvins "
+                               "(T - 293.15 for 20 °C)",
+                               {}});
+            result = unknown_type();
+            return result;
+        }
         // A reading converted to another scale ((T_F - 32)/1.8) counts that scale's degrees.
         const double degree = exponent.offset != nullptr ? exponent.offset->factor : exponent.scale;
         if (std::isfinite(degree) && std::abs(degree - 1.0) < 1e-9) {
@@ -4434,8 +4456,8 @@ class checker {
                 file_.nodes[exponent_node].range);
             d.level = severity::note;
             d.notes.push_back({"the number raised to it is then per kelvin: the formula holds "
-                               "only for temperatures in °C or K, with the reference it was "
-                               "fitted at",
+                               "only with the reference on the scale it was fitted on, most "
+                               "often 20 °C",
                                {}});
             return result;
         }
@@ -4456,6 +4478,16 @@ class checker {
                            {}});
         result.scale = std::numeric_limits<double>::quiet_NaN(); // reported once
         return result;
+    }
+
+    // The number a reading less a number subtracts ("(T - 20)" gives 20), or 0.
+    double reference_subtracted(std::uint32_t node) const {
+        while (file_.nodes[node].kind == expr_kind::group)
+            node = file_.nodes[node].lhs;
+        const syntax::expr_node& n = file_.nodes[node];
+        if (n.kind != expr_kind::subtract || file_.nodes[n.rhs].kind != expr_kind::number)
+            return 0.0;
+        return std::strtod(std::string(text(file_.nodes[n.rhs].range)).c_str(), nullptr);
     }
 
     // b^e exactly, for the whole exponents that constant exponents such as 2^3 need.
