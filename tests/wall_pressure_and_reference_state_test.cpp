@@ -264,3 +264,21 @@ TEST_CASE("an actual gas volume set equal to one at reference conditions") {
     passes(gas, {"Q_n = Q_act*(p_1/p_n)*(T_n/T_g)", "Q_act = Q_2", "V_s = 600*V"});
     fails_with(gas, {"Q_n = Q_act", "Q_n = Q_s*3600", "V_s = V"}, plumb::rules::unit_scale);
 }
+
+// The hydrostatic test pressure P_T = 1.3·MAWP·S_amb/S (ASME BPVC VIII-1 UG-99(b), from
+// memory): a gauge pressure times a ratio of allowable stresses stays a gauge reading, as
+// 1.3*MAWP does; the stresses in two units are 6.895 apart (NIST SP 811 (2008), B.8). The
+// average pressure of a gas line, 2/3·(p_1 + p_2 - p_1·p_2/(p_1 + p_2)), integrates p² and
+// needs absolute pressures (common practice): gauge readings multiplied together are an error.
+TEST_CASE("a gauge pressure times a ratio of stresses, and gauge pressures multiplied") {
+    const std::string vessel =
+        "MAWP, P_T, p_1g, p_2g, p_avg_g : psig\nS, S_amb : MPa \"allowable stress\"\n"
+        "S_ksi : ksi \"allowable stress, US data sheet\"\np_1, p_2, p_avg : psia\n";
+    passes(vessel, {"P_T = 1.3*MAWP*S_amb/S", "P_T = 1.5*MAWP*S_amb/S",
+                    "p_avg = 2/3*(p_1 + p_2 - p_1*p_2/(p_1 + p_2))"});
+    fails_with(vessel, {"P_T = 1.3*MAWP*S_ksi/S"}, plumb::rules::unit_scale);
+    fails_with(vessel,
+               {"p_avg_g = 2/3*(p_1g + p_2g - p_1g*p_2g/(p_1g + p_2g))",
+                "p_avg_g = p_1g*p_2g/(p_1g + p_2g)", "P_T = 1.3*MAWP*p_1g/p_2g"},
+               plumb::rules::offset_scale);
+}

@@ -1570,7 +1570,8 @@ class checker {
             // Declared in Δ°C or Δ°F, a temperature is a difference whatever its name.
             const bool difference_unit = entry->unit_text.starts_with("\u0394");
             const bool reading =
-                (t.dim == temperature_dimension() || t.dim == pressure_dimension()) &&
+                (t.dim == temperature_dimension() ||
+                 (t.dim == pressure_dimension() && !names_a_stress(name, entry->description))) &&
                 !difference_unit && !names_a_difference(name, entry->description);
             entry->reading = reading ? 1 : 0;
             t.point = reading;
@@ -3735,6 +3736,7 @@ class checker {
         if (root.kind != expr_kind::multiply && root.kind != expr_kind::divide)
             return false;
         int other_pressures = 0;
+        int stresses = 0;
         bool shape = false;
         if (geometric != nullptr)
             *geometric = false;
@@ -3745,6 +3747,13 @@ class checker {
             switch (n.kind) {
             case expr_kind::multiply:
             case expr_kind::divide:
+                // p_1g*p_2g/(p_1g + p_2g): gauge pressures multiplied or divided by one
+                // another are a gas law's, not a gauge reading scaled.
+                if (with_gauge && holds_gauge(n.lhs) && holds_gauge(n.rhs))
+                    return false;
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+                break;
             case expr_kind::add:
             case expr_kind::subtract:
                 pending.push_back(n.lhs);
@@ -3777,6 +3786,11 @@ class checker {
                 const typed_term& t = *found;
                 if (t.dim == pressure_dimension()) {
                     const bool gauge = t.offset != nullptr && t.offset->scale == unit_scale::gauge;
+                    // 1.3*MAWP*S_amb/S, the hydrotest pressure: a ratio of stresses is pure.
+                    if (with_gauge && !gauge && !t.point) {
+                        ++stresses;
+                        break;
+                    }
                     if (gauge != with_gauge || (!gauge && ++other_pressures > 1))
                         return false;
                 } else if (t.dim.is_dimensionless() || t.dim == length_dimension() ||
@@ -3793,7 +3807,46 @@ class checker {
                 return false;
             }
         }
-        return with_gauge || (other_pressures == 1 && shape);
+        return with_gauge ? stresses % 2 == 0 : (other_pressures == 1 && shape);
+    }
+
+    // Whether a subtree holds a gauge pressure (a symbol or a workbook cell declared on one).
+    bool holds_gauge(std::uint32_t node) const {
+        std::vector<std::uint32_t> pending{node};
+        while (!pending.empty()) {
+            const syntax::expr_node& n = file_.nodes[pending.back()];
+            pending.pop_back();
+            switch (n.kind) {
+            case expr_kind::multiply:
+            case expr_kind::divide:
+            case expr_kind::add:
+            case expr_kind::subtract:
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+                break;
+            case expr_kind::group:
+            case expr_kind::negate:
+            case expr_kind::power:
+                pending.push_back(n.lhs);
+                break;
+            case expr_kind::symbol: {
+                const symbol_entry* entry = symbols_.find(text(n.range));
+                if (entry != nullptr && entry->offset_unit != nullptr &&
+                    entry->offset_unit->scale == unit_scale::gauge)
+                    return true;
+                break;
+            }
+            case expr_kind::reference: {
+                const syntax::reference_value& r = file_.references[n.lhs];
+                if (r.offset != nullptr && r.offset->scale == unit_scale::gauge)
+                    return true;
+                break;
+            }
+            default:
+                break;
+            }
+        }
+        return false;
     }
 
     // One term of a product expanded into a sum: a number times declared symbols.

@@ -31,4 +31,14 @@ bool names_a_difference(std::string_view name, std::string_view description) {
     return false;
 }
 
+bool names_a_stress(std::string_view name, std::string_view description) {
+    if (name.starts_with("\u03C3") || name.starts_with("\u03C4") || name.starts_with("sigma") ||
+        name.starts_with("tau"))
+        return true;
+    for (const std::string_view word : {"stress", "strength", "Stress", "Strength"})
+        if (description.find(word) != std::string_view::npos)
+            return true;
+    return false;
+}
+
 } // namespace plumb

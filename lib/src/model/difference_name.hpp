@@ -10,4 +10,8 @@ namespace plumb {
 // unless its name or description says it is a difference.
 bool names_a_difference(std::string_view name, std::string_view description);
 
+// Whether a name or a description says its quantity is a stress or a strength (σ, "allowable
+// stress"): a force over an area in a material, on no pressure scale, so no reading.
+bool names_a_stress(std::string_view name, std::string_view description);
+
 } // namespace plumb
