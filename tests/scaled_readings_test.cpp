@@ -253,3 +253,13 @@ TEST_CASE("the reciprocal of a reading on an offset scale") {
     fails_with(decl, {"t_e = exp(-Q_K*(1/T_a - 1/T_s))*Δt", "x = 1/T_a - 1/T_s", "x = 1/T_a"},
                plumb::rules::offset_scale);
 }
+
+// A chilled-water range from a return reading in °C and a supply reading in °F converted in
+// line, ΔT = t_r - (t_s - 32)/1.8 (NIST SP 811 (2008), B.9): the 1.8 converts degrees and
+// weighs nothing, so the two readings weigh 1 and -1. Unconverted, or added, it stays an error.
+TEST_CASE("a °F reading converted in line inside a difference of readings") {
+    const std::string decl = "ΔT_K : K\nt_r_C, t_s_C : °C\nt_s_F : °F\n";
+    passes(decl, {"ΔT_K = t_r_C - (t_s_F - 32)/1.8", "t_s_C = (t_s_F - 32)/1.8"});
+    fails_with(decl, {"ΔT_K = t_r_C - t_s_F/1.8", "ΔT_K = t_r_C + (t_s_F - 32)/1.8"},
+               plumb::rules::offset_scale);
+}

@@ -4234,7 +4234,18 @@ class checker {
                     offset_node = op.rhs;
                 }
                 // A reading's weight follows the numbers that scale it: (T_1 + T_2)/2 weighs 1.
-                if (result.point && t.numeric && t.value && !t.value->is_zero()) {
+                // (t_F - 32)/1.8: the 1.8 converts the degrees to the scale's, and weighs
+                // nothing.
+                const bool converts_degrees =
+                    result.point && t.numeric && t.value && !t.value->is_zero() &&
+                    result.offset != nullptr && half_converted(result) &&
+                    std::abs((divided ? t.value->to_double() * result.scale /
+                                            result.offset->factor
+                                      : t.value->to_double() * result.offset->factor /
+                                            result.scale) -
+                             1.0) < 1e-3;
+                if (converts_degrees) {
+                } else if (result.point && t.numeric && t.value && !t.value->is_zero()) {
                     scale_weight(result, divided ? rational(1) / *t.value : *t.value);
                 } else if (t.point && result.numeric && result.value && !divided) {
                     const rational by = *result.value;
