@@ -282,3 +282,16 @@ TEST_CASE("a gauge pressure times a ratio of stresses, and gauge pressures multi
                 "p_avg_g = p_1g*p_2g/(p_1g + p_2g)", "P_T = 1.3*MAWP*p_1g/p_2g"},
                plumb::rules::offset_scale);
 }
+
+// A psig reading converted to kPa or bar by its number (6.895 kPa and 0.06895 bar per psi,
+// NIST SP 811 (2008), B.8) and set equal to an absolute pressure: the advice adds the
+// atmosphere in the unit the expression gives (101.325 kPa, 1.01325 bar), not in psi.
+TEST_CASE("the atmosphere advised in the unit a converted gauge reading is in") {
+    const std::string decl = "p_1g : psig\np_1kPa : kPa\np_bar : bar\n";
+    const auto kpa = run(decl, "p_1kPa = 6.895*p_1g");
+    CHECK(plumb::test::says(first_under(kpa, plumb::rules::offset_scale),
+                            "(6.895*p_1g + 101.325) at sea level, the standard atmosphere in kPa"));
+    const auto bar = run(decl, "p_bar = 0.06895*p_1g");
+    CHECK(plumb::test::says(first_under(bar, plumb::rules::offset_scale), "+ 1.01325)"));
+    passes(decl, {"p_1kPa = 6.895*p_1g + 101.325", "p_bar = 0.06895*p_1g + 1.01325"});
+}

@@ -3397,7 +3397,23 @@ class checker {
                 const bool has_number = kind == expr_kind::add || kind == expr_kind::subtract;
                 const std::string reading = has_number ? std::string("the reading")
                                                        : display_text(file_.nodes[off.node].range);
-                const std::string zero = format_factor(unit->offset / unit->factor);
+                std::string zero = format_factor(unit->offset / unit->factor);
+                std::string absolute_unit = absolute_symbol(*unit);
+                // "p_kPa = 6.895*p_g": the expression's numbers are in kPa by then, and so
+                // must the atmosphere added to them be.
+                double written_unit = off.type.scale;
+                for (std::uint32_t l = 0; l < off.type.literal_count; ++l) {
+                    const scale_literal& number = literals_[off.type.literal_begin + l];
+                    if (looks_like_conversion(number, false))
+                        written_unit /= std::pow(number.value, number.exponent);
+                }
+                if (!temperature && std::isfinite(written_unit) &&
+                    std::abs(written_unit / unit->factor - 1.0) > 1e-3)
+                    for (const auto& u : pressure_units)
+                        if (std::abs(written_unit / u.pascals - 1.0) < 3e-3) {
+                            zero = format_factor(standard_atmosphere / u.pascals);
+                            absolute_unit = std::string(u.name);
+                        }
                 // A degree the size of the kelvin reads in kelvins from its zero; the °F's in
                 // degrees Rankine, which are 1.8 to the kelvin.
                 const bool kelvin_sized = std::abs(unit->factor - 1.0) < 1e-12;
@@ -3414,7 +3430,7 @@ class checker {
                         : fmt::format("a gauge reading plus the atmospheric pressure is "
                                       "absolute: write ({} + p_atm), or ({} + {}) at sea level, "
                                       "the standard atmosphere in {}",
-                                      reading, reading, zero, absolute_symbol(*unit));
+                                      reading, reading, zero, absolute_unit);
                 if (has_number)
                     advice = fmt::format("the number added does not put the zero where the other "
                                          "side has it; {}",
