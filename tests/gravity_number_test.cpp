@@ -9,6 +9,7 @@
 
 #include <algorithm>
 #include <initializer_list>
+#include <numbers>
 #include <string>
 
 namespace {
@@ -392,4 +393,22 @@ TEST_CASE("ampere hours, and an empirical factor times one symbol") {
     CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::side_mismatch),
                             "write it as 0.7?"));
     CHECK(problems_in(run(decl + "TDS = 0.7?*κ\n")) == 0);
+}
+
+// A rod pump's displacement PD = 0.1166·S·N·D² in bbl/d with the stroke S and plunger D in
+// inches and N in strokes per minute (common practice): 0.1166 is π/4 times the conversion
+// 0.14846 (in³/min to bbl/d: 1440/9702, NIST SP 811 (2008), B.8 for the barrel of 9702 in³).
+// Beside a declared area the π/4 would count twice: no reading, and the units stay a warning.
+TEST_CASE("a circle's π/4 folded into a factor is read only beside a square") {
+    CHECK(std::numbers::pi / 4.0 * 1440.0 / 9702.0 == doctest::Approx(0.1166).epsilon(1e-3));
+    const std::string decl = "PD : bbl/d\nS_p, D_p, d_in : in\nN : 1/min\nA_p : in^2\n"
+                             "Q_gpm : gpm\nV : ft/s\n";
+    for (const char* formula : {"PD = 0.1166*S_p*N*D_p^2", "V = 0.4085*Q_gpm/d_in^2",
+                                "V = 0.4085*Q_gpm/(d_in*d_in)"}) {
+        CAPTURE(formula);
+        const auto r = run(decl + formula + "\n");
+        CHECK(problems_in(r) == 0);
+        CHECK(count_of(r, plumb::rules::trade_constant) == 1);
+    }
+    CHECK(count_of(run(decl + "PD = 0.1166*S_p*N*A_p\n"), plumb::rules::unit_scale) == 1);
 }

@@ -2822,7 +2822,8 @@ class checker {
         if (parts.size() <= max_operands_for_flips &&
             report_inverted_trade_constant(ops, index, parts))
             return false;
-        if (parts.size() <= max_operands_for_flips && accept_folded_coefficient(parts, unit))
+        if (parts.size() <= max_operands_for_flips &&
+            accept_folded_coefficient(ops, index, parts, unit))
             return true;
         const operand& op = ops[index[r.odd]];
         const operand& reference = ops[index[r.reference]];
@@ -3073,11 +3074,12 @@ class checker {
         const char* written;
         const char* what;
         bool whole_three_digits; // also read in a whole number of 3 digits (528, 264)
+        bool circle = false;     // a circle's area: read only beside a square (D^2)
     };
     static std::span<const folded_constant> folded_constants() {
         static const std::array<folded_constant, 6> constants{{
-            {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false},
-            {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false},
+            {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false, true},
+            {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false, true},
             // 9550 = 60000/(2π) in M = 9550*P/n (kW, rpm to N·m), 5252 = 33000/(2π) (hp, rpm
             // to lbf·ft); 191.5 = 2π × 30.48 in the Wenner array's ρ = 2π·a·R (ft to Ω·cm).
             {1.0 / (2.0 * std::numbers::pi), "1/(2\u03C0)",
@@ -3094,7 +3096,49 @@ class checker {
         return constants;
     }
 
-    bool accept_folded_coefficient(std::span<const scaled_operand> parts, double& unit) {
+    // Whether a subtree squares something (D^2, d*d), as the area of a circle needs.
+    bool squares_something(std::uint32_t node) const {
+        std::vector<std::uint32_t> pending{node};
+        while (!pending.empty()) {
+            const syntax::expr_node& n = file_.nodes[pending.back()];
+            pending.pop_back();
+            switch (n.kind) {
+            case expr_kind::power:
+                if (file_.nodes[n.rhs].kind == expr_kind::number &&
+                    text(file_.nodes[n.rhs].range) == "2")
+                    return true;
+                pending.push_back(n.lhs);
+                break;
+            case expr_kind::multiply:
+                if (file_.nodes[n.rhs].kind == expr_kind::symbol &&
+                    file_.nodes[n.lhs].kind == expr_kind::symbol &&
+                    text(file_.nodes[n.lhs].range) == text(file_.nodes[n.rhs].range))
+                    return true;
+                [[fallthrough]];
+            case expr_kind::divide:
+            case expr_kind::add:
+            case expr_kind::subtract:
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+                break;
+            case expr_kind::group:
+            case expr_kind::negate:
+                pending.push_back(n.lhs);
+                break;
+            case expr_kind::call:
+                for (std::uint32_t a = 0; a < n.rhs; ++a)
+                    pending.push_back(file_.call_args[n.lhs + a]);
+                break;
+            default:
+                break;
+            }
+        }
+        return false;
+    }
+
+    bool accept_folded_coefficient(std::span<const operand> ops,
+                                   std::span<const std::size_t> index,
+                                   std::span<const scaled_operand> parts, double& unit) {
         constexpr std::size_t most_numbers = 8;
         std::array<scale_literal, most_numbers> changed_literals{};
         std::vector<scaled_operand> changed;
@@ -3155,6 +3199,10 @@ class checker {
                             std::max(as.tolerance, half_unit_in_last_digit(written) / l.value);
                     for (const folded_constant& c : folded_constants()) {
                         if (!l.factor_like && !c.whole_three_digits)
+                            continue;
+                        // 0.1166*S*N*A_p with the plunger's area declared: its π/4 would be
+                        // counted twice; a circle's area is read only beside a square.
+                        if (c.circle && !squares_something(ops[index[i]].node))
                             continue;
                         as.value = l.value / c.value;
                         as.low.reset();
