@@ -412,3 +412,24 @@ TEST_CASE("a circle's π/4 folded into a factor is read only beside a square") {
     }
     CHECK(count_of(run(decl + "PD = 0.1166*S_p*N*A_p\n"), plumb::rules::unit_scale) == 1);
 }
+
+// Wind's velocity pressure q_z = 0.00256·K_z·K_zt·K_d·V² in psf with V in mph (ASCE 7-16, eq.
+// 26.10-1, from memory) and 0.613·K_z·V² in Pa with V in m/s: half the density of air, 0.0765
+// lb/ft³ at 15 °C (from memory), worked out here with NIST SP 811 (2008), B.8 (mph = 0.44704
+// m/s, lbf/ft² = 47.880259 Pa). Read only in a term that is a velocity squared times numbers.
+TEST_CASE("the wind codes' velocity pressure: half the density of air") {
+    CHECK(0.00256 * 47.880259 / (0.44704 * 0.44704) == doctest::Approx(0.6133).epsilon(1e-3));
+    const std::string decl = "q_h : lbf/ft^2\nq_Pa : Pa\nK_z, K_zt, K_d : 1\nV : mph\nV_ms : m/s\n"
+                             "m : kg\nL : m\n";
+    for (const char* formula :
+         {"q_h = 0.00256*K_z*K_zt*K_d*V^2", "q_Pa = 0.613*K_z*V_ms^2"}) {
+        CAPTURE(formula);
+        const auto r = run(decl + formula + "\n");
+        CHECK(problems_in(r) == 0);
+        CHECK(count_of(r, plumb::rules::trade_constant) == 1);
+    }
+    for (const char* formula : {"q_h = K_z*V^2", "q_Pa = 0.613*K_z*V^2", "m = 0.613*L^3"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 1);
+    }
+}

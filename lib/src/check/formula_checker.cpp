@@ -1322,9 +1322,15 @@ class checker {
             }
             if (!any_fits)
                 return false;
-            const auto reading = read_gravity_number(
-                t.scale, reference_scale, numbers, {texts.data(), numbers.size()}, lacking, true,
-                !t.numeric && t.dim == volume_flow_dimension());
+            using term_kind = carried_quantity::term_kind;
+            const term_kind kind = t.numeric                          ? term_kind::any
+                                   : t.dim == volume_flow_dimension() ? term_kind::volume_flow
+                                   : t.dim == velocity_squared_dimension()
+                                       ? term_kind::velocity_squared
+                                       : term_kind::any;
+            const auto reading =
+                read_gravity_number(t.scale, reference_scale, numbers,
+                                    {texts.data(), numbers.size()}, lacking, true, kind);
             if (!reading)
                 return false;
             readings[found_count++] = {i, *reading};
@@ -3136,8 +3142,7 @@ class checker {
         return false;
     }
 
-    bool accept_folded_coefficient(std::span<const operand> ops,
-                                   std::span<const std::size_t> index,
+    bool accept_folded_coefficient(std::span<const operand> ops, std::span<const std::size_t> index,
                                    std::span<const scaled_operand> parts, double& unit) {
         constexpr std::size_t most_numbers = 8;
         std::array<scale_literal, most_numbers> changed_literals{};
@@ -4270,7 +4275,8 @@ class checker {
                 const bool left_off = scales_a_reading(result, t);
                 // A number over a reading (1/T_a in Arrhenius's 1/T_1 - 1/T_2) is no scaling.
                 const bool right_off =
-                    (scales_a_reading(t, result) && !(result.known && result.numeric && !divided)) ||
+                    (scales_a_reading(t, result) &&
+                     !(result.known && result.numeric && !divided)) ||
                     (divided && t.known && t.offset != nullptr && result.known && result.numeric);
                 const bool gauge_over_something =
                     (left_off || (right_off && !divided)) &&
@@ -4303,10 +4309,9 @@ class checker {
                 const bool converts_degrees =
                     result.point && t.numeric && t.value && !t.value->is_zero() &&
                     result.offset != nullptr && half_converted(result) &&
-                    std::abs((divided ? t.value->to_double() * result.scale /
-                                            result.offset->factor
-                                      : t.value->to_double() * result.offset->factor /
-                                            result.scale) -
+                    std::abs((divided
+                                  ? t.value->to_double() * result.scale / result.offset->factor
+                                  : t.value->to_double() * result.offset->factor / result.scale) -
                              1.0) < 1e-3;
                 if (converts_degrees) {
                 } else if (result.point && t.numeric && t.value && !t.value->is_zero()) {

@@ -21,8 +21,8 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<carried_quantity, 9>& quantities() {
-    static const std::array<carried_quantity, 9> table = [] {
+const std::array<carried_quantity, 10>& quantities() {
+    static const std::array<carried_quantity, 10> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -57,7 +57,7 @@ const std::array<carried_quantity, 9>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 9>{{
+        return std::array<carried_quantity, 10>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -117,7 +117,17 @@ const std::array<carried_quantity, 9>& quantities() {
              "declare the air's density with its unit (\u03C1_a : kg/m^3 = 1.2), at the "
              "site's altitude and temperature, to say so",
              "write the air's density in a cell that holds its unit to say so", density,
-             air_density(40.0), air_density(0.0), true},
+             air_density(40.0), air_density(0.0), carried_quantity::term_kind::volume_flow},
+            // Wind's velocity pressure q = 0.00256*K_z*K_zt*K_d*V^2 in psf from mph (ASCE 7-16,
+            // eq. 26.10-1, from memory) and 0.613*V^2 in Pa from m/s: half the density of air.
+            {rules::trade_constant, "half the density of air", "\u03C1_a/2", "2/\u03C1_a",
+             " (dry air at 101.325 kPa between 0 and 40 \u00B0C: 0.56 to 0.65 kg/m\u00B3; the "
+             "wind codes take 15 \u00B0C, 0.613)",
+             "declare the air's density with its unit (\u03C1_a : kg/m^3 = 1.225) and write "
+             "0.5*\u03C1_a*V^2 to say so",
+             "write the air's density in a cell that holds its unit to say so", density,
+             air_density(40.0) / 2.0, air_density(0.0) / 2.0,
+             carried_quantity::term_kind::velocity_squared},
             // The latent load q = 0.68*cfm*ΔW in Btu/h with ΔW in gr/lb, 4840 with ΔW in
             // lb/lb (common practice).
             {rules::trade_constant, "the latent heat of the moisture in a volume of air",
@@ -128,7 +138,7 @@ const std::array<carried_quantity, 9>& quantities() {
              "site's altitude and temperature",
              "write the density and latent heat in cells that hold their units to say so",
              density * length * length / (time * time), air_latent_least, air_latent_greatest,
-             true},
+             carried_quantity::term_kind::volume_flow},
         }};
     }();
     return table;
@@ -218,7 +228,7 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                                                    std::span<const scale_literal> literals,
                                                    std::span<const std::string_view> texts,
                                                    const dimension& lacking, bool flipped_too,
-                                                   bool volume_flow_term) {
+                                                   carried_quantity::term_kind term) {
     if (literals.empty() || literals.size() > most_numbers || texts.size() != literals.size() ||
         !(term_scale > 0) || !(reference_scale > 0) || !std::isfinite(term_scale) ||
         !std::isfinite(reference_scale))
@@ -237,7 +247,7 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
             continue;
         const double half_unit = half_unit_in_last_digit(texts[at]);
         for (const carried_quantity& q : quantities()) {
-            if (q.per_volume_flow && !volume_flow_term)
+            if (q.only_in != carried_quantity::term_kind::any && q.only_in != term)
                 continue;
             for (const bool reciprocal : {false, true}) {
                 if (!is_power_of(lacking, q.dim, reciprocal ? -x : x))

@@ -8,6 +8,7 @@
 #include "check/scale_match.hpp"
 #include "plumb/dimension.hpp"
 
+#include <cstdint>
 #include <optional>
 #include <span>
 #include <string>
@@ -31,9 +32,10 @@ struct carried_quantity {
     dimension dim;
     double least = 0.0;    // SI
     double greatest = 0.0; // SI
-    // Read only in a term that is a volume flow times pure numbers (4.5*cfm*ΔW): the air
-    // trade's per-cfm constants, whose values would otherwise fit too many other numbers.
-    bool per_volume_flow = false;
+    // Read only in a term of that kind (4.5*cfm*ΔW, 0.00256*K_z*V^2): the air trade's per-cfm
+    // and per-mph² constants, whose values would otherwise fit too many other numbers.
+    enum class term_kind : std::uint8_t { any, volume_flow, velocity_squared };
+    term_kind only_in = term_kind::any;
 };
 
 struct gravity_reading {
@@ -64,12 +66,10 @@ std::string_view advice_in_cell_for(std::string_view advice_in_notation);
 // numbers of the term may be unit conversions (a /1000 to kPa); every subset of them is tried.
 // With `flipped_too`, a number that fits only the other way round (Q*H*3960 for Q*H/3960) is
 // read as well, marked `flipped`, for the caller to report.
-std::optional<gravity_reading> read_gravity_number(double term_scale, double reference_scale,
-                                                   std::span<const scale_literal> literals,
-                                                   std::span<const std::string_view> texts,
-                                                   const dimension& lacking,
-                                                   bool flipped_too = false,
-                                                   bool volume_flow_term = false);
+std::optional<gravity_reading> read_gravity_number(
+    double term_scale, double reference_scale, std::span<const scale_literal> literals,
+    std::span<const std::string_view> texts, const dimension& lacking, bool flipped_too = false,
+    carried_quantity::term_kind term = carried_quantity::term_kind::any);
 
 // The note's words for a reading of the number written `written`.
 std::string gravity_message(std::string_view written, const gravity_reading& reading);
