@@ -131,6 +131,13 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     same("kg/Nm3", "kg/m^3");
     same("Sm\u00B3/d", "m^3/d");
     same("MJ/Nm3", "MJ/m^3");
+    // Moments as US drawings write them, the pound a pound-force and k the kip (common
+    // practice; AISC's tables head them kip-ft).
+    same("kip-ft", "kip*ft");
+    same("k-ft", "kip*ft");
+    same("lb-ft", "lbf*ft");
+    same("ft-lb", "lbf*ft");
+    same("in-lb", "lbf*in");
     CHECK_FALSE(read_unit_text("hrs"));
     // A column of temperature differences headed in the scale's unit holds differences (a
     // Fahrenheit degree is 5/9 K, NIST SP 811 (2008), B.9); a heading that names a reading does

@@ -534,3 +534,22 @@ TEST_CASE("workbook parity: a number over or under one cell, raised to a fractio
     CHECK(error_at(r, "S!B7"));
     CHECK(error_at(r, "S!B8"));
 }
+
+TEST_CASE("workbook parity: SUMPRODUCT keeps its arguments' units") {
+    // Energy from power and hours, Σ P·t (SI Brochure 9th ed., Table 8: 1 kW·h = 3.6 MJ): the
+    // product of a kW column and an h column is in kWh, and into an MWh cell it needs /1000.
+    const check_report r =
+        check_one_sheet("S", sheet_of({
+                                 {"120", "kW"},                          // B2
+                                 {"80", "kW"},                           // B3
+                                 {"6000", "h"},                          // B4
+                                 {"4000", "h"},                          // B5
+                                 {"=SUMPRODUCT(B2:B3,B4:B5)", "kWh"},    // B6: right
+                                 {"=SUMPRODUCT(B2:B3,B4:B5)/1000", "MWh"}, // B7: right
+                                 {"=SUMPRODUCT(B2:B3,B4:B5)", "MWh"},    // B8: 1000 off
+                             }));
+    REQUIRE(r.cells_checked == 3);
+    CHECK_FALSE(error_at(r, "S!B6"));
+    CHECK_FALSE(error_at(r, "S!B7"));
+    CHECK(error_at(r, "S!B8"));
+}

@@ -4975,6 +4975,8 @@ class checker {
                 }
                 result.dim = result.dim * a.type.dim;
                 result.scale *= a.type.scale;
+                // Both forms of the scale: the exact one is compared first where it is held.
+                result.exact_scale = exact_product(result.exact_scale, a.type.exact_scale, false);
             }
             return result;
         }

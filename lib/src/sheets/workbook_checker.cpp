@@ -1110,8 +1110,9 @@ class workbook_checker {
         if (text == unread_.end())
             return;
         const std::string_view t = text->second->text;
+        // "kip-ft", "kW(e)": a hyphen or a bracket joins a unit's parts as often as '*'.
         const bool unit_like = t.size() <= 40 && t.find(' ') == std::string_view::npos &&
-                               (t.find_first_of("/*^") != std::string_view::npos ||
+                               (t.find_first_of("/*^-(") != std::string_view::npos ||
                                 t.find("\u00B7") != std::string_view::npos ||
                                 t.find("\u00B2") != std::string_view::npos ||
                                 t.find("\u00B3") != std::string_view::npos);
