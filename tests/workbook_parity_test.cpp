@@ -553,3 +553,33 @@ TEST_CASE("workbook parity: SUMPRODUCT keeps its arguments' units") {
     CHECK_FALSE(error_at(r, "S!B7"));
     CHECK(error_at(r, "S!B8"));
 }
+
+TEST_CASE("workbook parity: a formula cell whose row label says it holds a difference") {
+    // A cooling tower's range (hot less cold water) and approach (cold water less wet-bulb),
+    // in °F as US sheets write them (common practice): differences of readings, in a cell
+    // whose unit is the scale's. A mean on a row labelled "Mean / range" is a reading; a reading
+    // in a cell labelled otherwise, or a sum of readings labelled a range, stays an error.
+    const auto labelled = [](int r, const std::string& label, const std::string& value,
+                             const std::string& unit) {
+        const std::string n = std::to_string(r);
+        std::string row = plumb::test::value_and_unit_row(r, value, unit);
+        row.insert(row.find('>') + 1,
+                   "<c r=\"A" + n + "\" t=\"inlineStr\"><is><t>" + label + "</t></is></c>");
+        return row;
+    };
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled(2, "Design wet-bulb", "78", "°F") +
+        labelled(3, "Hot water to tower", "95", "°F") +
+        labelled(4, "Cold water from tower", "85", "°F") +
+        labelled(5, "Range (hot - cold water)", "=B3-B4", "°F") +
+        labelled(6, "Approach (cold water - wet-bulb)", "=B4-B2", "°F") +
+        labelled(7, "Mean / range", "=(B3+B4)/2", "°F") +
+        labelled(8, "Leaving water", "=B3-B4", "°F") +
+        labelled(9, "Range", "=B3+B4", "°F") + "</sheetData></worksheet>";
+    const check_report r = check_one_sheet("S", sheet);
+    CHECK_FALSE(error_at(r, "S!B5"));
+    CHECK_FALSE(error_at(r, "S!B6"));
+    CHECK_FALSE(error_at(r, "S!B7"));
+    CHECK(error_at(r, "S!B8"));
+    CHECK(error_at(r, "S!B9"));
+}

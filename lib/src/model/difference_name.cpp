@@ -1,5 +1,7 @@
 #include "model/difference_name.hpp"
 
+#include <string>
+
 namespace plumb {
 
 bool names_a_difference(std::string_view name, std::string_view description) {
@@ -15,6 +17,12 @@ bool names_a_difference(std::string_view name, std::string_view description) {
     const auto is_letter = [](char c) {
         return (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || (c & 0x80) != 0;
     };
+    // "Range (hot - cold water)": a capital is the same word.
+    std::string lower(description);
+    for (char& c : lower)
+        if (c >= 'A' && c <= 'Z')
+            c = static_cast<char>(c - 'A' + 'a');
+    description = lower;
     for (const std::string_view word : {"difference", "rise", "drop", "loss", "change", "increase",
                                         "decrease", "approach", "range", "gradient", "swing"})
         for (std::size_t at = description.find(word); at != std::string_view::npos;

@@ -26,11 +26,12 @@ void cell_equation::make_room() {
 }
 
 std::vector<diagnostic> cell_equation::check(std::uint32_t formula_root, span written_text,
-                                             const written_unit& written) {
+                                             const written_unit& written, bool difference) {
     if (formula_ == syntax::no_index)
         return {}; // make_room() was not called: no equation to check
     tree_.references[written_reference_] = {
         written.dim, written.scale, written.exact_scale, written.offset, {}};
+    tree_.references[written_reference_].difference = difference;
     tree_.nodes[written_node_].range = written_text;
     syntax::formula& equation = tree_.formulas[formula_];
     equation.range = written_text;

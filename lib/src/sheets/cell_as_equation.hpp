@@ -23,8 +23,9 @@ class cell_equation {
 
     // The notation's findings on "written = the formula at formula_root". `written_text` is
     // the unit's text in the tree's source, where a finding that names that side points.
+    // `difference`: the cell's row label says it holds a difference ("Range", "Friction loss").
     std::vector<diagnostic> check(std::uint32_t formula_root, span written_text,
-                                  const written_unit& written);
+                                  const written_unit& written, bool difference = false);
 
   private:
     syntax::parsed_file& tree_;

@@ -582,8 +582,15 @@ class workbook_checker {
         // formula", its notes are all there is to say, and the formula is not read again.
         std::optional<std::vector<diagnostic>> verdict;
         if (written != nullptr && f.lowered.not_checked.empty()) {
-            verdict = equation_.check(lowered_.tree.sides[formula.first_side].root, f.written_text,
-                                      written->unit);
+            const std::uint32_t root = lowered_.tree.sides[formula.first_side].root;
+            verdict = equation_.check(root, f.written_text, written->unit);
+            // "Range | =C6-C7 | °F": a cell whose row label says it holds a difference, and
+            // whose formula computes one; a reading there ("Mean / range", =AVERAGE(...))
+            // was already right as a reading.
+            if (has_fault(*verdict) && labelled_a_difference(f.sheet, f.source->at))
+                if (auto as_difference = equation_.check(root, f.written_text, written->unit, true);
+                    !has_fault(as_difference))
+                    verdict = std::move(as_difference);
             if (!has_fault(*verdict)) {
                 take_verdict(*verdict, f, formula);
                 ++report_.cells_checked;
