@@ -169,7 +169,7 @@ std::string as_declaration(std::string_view notation, std::string_view measures)
 // "in. w.g." for inches of water, "hr" for the hour, "CFM" in capitals, "kNm" for kN·m,
 // "sq ft", "bhp" (brake horsepower, a horsepower), "bara" (bar absolute).
 std::string trade_spelling(std::string t) {
-    static constexpr std::array<std::pair<std::string_view, std::string_view>, 50> whole{{
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 53> whole{{
         {"in. w.g.", "inH2O"}, {"in.w.g.", "inH2O"}, {"in w.g.", "inH2O"}, {"in wg", "inH2O"},
         {"in. wg", "inH2O"},   {"in.wg", "inH2O"},   {"in WG", "inH2O"},   {"inWG", "inH2O"},
         {"in. w.c.", "inH2O"}, {"in.w.c.", "inH2O"}, {"in wc", "inH2O"},   {"iwg", "inH2O"},
@@ -185,6 +185,9 @@ std::string trade_spelling(std::string t) {
         {"lb-ft", "lbf ft"},   {"ft-lb", "ft lbf"},  {"lb-in", "lbf in"},  {"in-lb", "in lbf"},
         {"ft-lbs", "ft lbf"},  {"lb-ft/ft", "lbf"},  {"k-ft", "kip ft"},   {"k-in", "kip in"},
         {"kip-ft", "kip ft"},  {"kip-in", "kip in"},
+        // A chiller's efficiency and flows per ton are per ton of refrigeration, never per
+        // short ton of mass.
+        {"kW/ton", "kW/TR"},   {"gpm/ton", "gpm/TR"}, {"cfm/ton", "cfm/TR"},
     }};
     for (const auto& [typed, unit] : whole)
         if (t == typed)
