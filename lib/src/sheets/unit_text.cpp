@@ -324,10 +324,15 @@ std::optional<written_unit> heading_unit(std::string_view label, std::string_vie
     if (!u || u->offset == nullptr || u->offset->scale != unit_scale::offset)
         return u;
     const std::string words = trim(label);
-    const std::string_view first = std::string_view(words).substr(0, words.find(' '));
-    const bool symbol =
-        first.starts_with("\u0394") || first.starts_with("\u03B4") ||
-        (first.size() >= 2 && first[0] == 'd' && first[1] >= 'A' && first[1] <= 'Z');
+    // Any word of the heading may be the symbol: "CW ΔT [°F]".
+    bool symbol = false;
+    for (std::size_t at = 0; at < words.size() && !symbol;) {
+        const std::size_t end = std::min(words.find(' ', at), words.size());
+        const std::string_view word = std::string_view(words).substr(at, end - at);
+        symbol = word.starts_with("\u0394") || word.starts_with("\u03B4") ||
+                 (word.size() >= 2 && word[0] == 'd' && word[1] >= 'A' && word[1] <= 'Z');
+        at = end + 1;
+    }
     if (!symbol && !names_a_difference({}, words))
         return u;
     if (auto difference = read_unit_text("\u0394" + trim(unit), measures)) {
