@@ -295,3 +295,14 @@ TEST_CASE("the atmosphere advised in the unit a converted gauge reading is in") 
     CHECK(plumb::test::says(first_under(bar, plumb::rules::offset_scale), "+ 1.01325)"));
     passes(decl, {"p_1kPa = 6.895*p_1g + 101.325", "p_bar = 0.06895*p_1g + 1.01325"});
 }
+
+// A gauge reading plus the site's barometer: 92.1 kPa at 800 m in the standard atmosphere
+// (ISO 2533, the barometric formula, from memory), and "bar a = bar g + 1" with the
+// atmosphere rounded to 1 bar (common practice): notes. A number no atmosphere reaches, or
+// none, stays an error.
+TEST_CASE("a gauge reading plus the local atmosphere typed as a number") {
+    const std::string decl = "p_max : kPag\np_abs : kPa\np_bg : barg\np_ba : bar\n";
+    passes(decl, {"p_abs = p_max + 92.1", "p_ba = p_bg + 1"}, 1);
+    fails_with(decl, {"p_abs = p_max + 20", "p_abs = p_max", "p_abs = p_max + 60"},
+               plumb::rules::offset_scale);
+}

@@ -3426,6 +3426,10 @@ class checker {
             const operand& other = &off == &side ? *reference : side;
             const unit_definition* unit = off.type.offset;
             const bool temperature = off.type.dim == temperature_dimension();
+            if (!temperature && unit != nullptr && unit->scale == unit_scale::gauge &&
+                other.type.offset == nullptr && other.type.point &&
+                read_local_atmosphere(off))
+                return;
             const std::string scale_of_other =
                 other.type.offset != nullptr
                     ? fmt::format("the {} scale", other.type.offset->symbol)
@@ -3492,6 +3496,47 @@ class checker {
             }
             return;
         }
+    }
+
+    // "p_abs = p_max + 92.1" in kPa, "p_a = p_g + 1" in bar: a number added to a gauge reading
+    // that falls short of the standard atmosphere by no more than the air above 3000 m does
+    // (ISA, from memory: 70 kPa there) is the site's barometer, or a rounded one; a note says
+    // which height it stands for.
+    bool read_local_atmosphere(const operand& sum) {
+        std::uint32_t k = sum.node;
+        while (file_.nodes[k].kind == expr_kind::group)
+            k = file_.nodes[k].lhs;
+        const syntax::expr_node& n = file_.nodes[k];
+        if (n.kind != expr_kind::add || !std::isfinite(sum.type.scale))
+            return false;
+        const std::uint32_t number =
+            file_.nodes[n.rhs].kind == expr_kind::number   ? n.rhs
+            : file_.nodes[n.lhs].kind == expr_kind::number ? n.lhs
+                                                           : syntax::no_index;
+        // Beside the gauge symbol alone, so that the number is in the symbol's unit (in
+        // 6.895*p_g + 14.7 the sum is in kPa, and 14.7 kPa no atmosphere).
+        const std::uint32_t reading = number == n.rhs ? n.lhs : n.rhs;
+        if (number == syntax::no_index || file_.nodes[reading].kind != expr_kind::symbol)
+            return false;
+        const double pressure =
+            std::strtod(std::string(text(file_.nodes[number].range)).c_str(), nullptr) *
+            sum.type.scale;
+        if (!(pressure >= 0.69 * standard_atmosphere && pressure <= 1.005 * standard_atmosphere))
+            return false;
+        // The barometric formula of the standard atmosphere, h = 44330.8·(1 - (p/p0)^0.190263) m.
+        const double height = 44330.8 * (1.0 - std::pow(pressure / standard_atmosphere, 0.190263));
+        diagnostic& d = report(
+            rules::trade_constant,
+            fmt::format("{} is read as the atmospheric pressure where the gauge is, {} kPa, which "
+                        "the standard atmosphere has about {} m above sea level",
+                        display_text(file_.nodes[number].range), format_factor(pressure / 1000.0),
+                        static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10)),
+            file_.nodes[number].range);
+        d.level = severity::note;
+        d.notes.push_back({"a gauge reading plus the local atmosphere is absolute; at sea level "
+                           "the standard atmosphere is 101.325 kPa (14.696 psi, 1.01325 bar)",
+                           {}});
+        return true;
     }
 
     // "T_m = T_hi + T_ho", "t_film = T_s + T_a/2": readings on a scale with an arbitrary zero
