@@ -263,3 +263,18 @@ TEST_CASE("a °F reading converted in line inside a difference of readings") {
     fails_with(decl, {"ΔT_K = t_r_C - t_s_F/1.8", "ΔT_K = t_r_C + (t_s_F - 32)/1.8"},
                plumb::rules::offset_scale);
 }
+
+// °F and °C readings set equal with the conversion's zero left out or in the wrong place: the
+// finding gives the conversion both ways, t_C = (t_F - 32)/1.8 and t_F = 1.8·t_C + 32 (NIST
+// SP 811 (2008), B.9).
+TEST_CASE("a °C and °F reading set equal says how to convert") {
+    const std::string decl = "T_C : °C\nT_F : °F\n";
+    for (const char* formula : {"T_C = T_F/1.8 - 32", "T_F = 1.8*T_C"}) {
+        CAPTURE(formula);
+        const auto r = plumb::test::check_after(decl, formula);
+        REQUIRE(plumb::test::count_of(r, plumb::rules::offset_scale) == 1);
+        CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::offset_scale),
+                                "(T_F - 32)/1.8 on the \u00B0C scale"));
+    }
+    passes(decl, {"T_C = (T_F - 32)/1.8", "T_F = 1.8*T_C + 32"});
+}

@@ -3493,6 +3493,13 @@ class checker {
                                          "side has it; {}",
                                          advice);
                 d.notes.push_back({std::move(advice), {}});
+            } else if (unit != nullptr && other.type.offset != nullptr && temperature) {
+                // "T_C = T_F/1.8 - 32", "T_F = 1.8*T_C": the conversion between the two
+                // scales with its zero left out or put in the wrong place.
+                d.notes.push_back({"a \u00B0F reading is (T_F - 32)/1.8 on the \u00B0C scale, "
+                                   "32 subtracted before dividing; a \u00B0C reading is "
+                                   "1.8*T_C + 32 on the \u00B0F scale",
+                                   {}});
             }
             return;
         }
