@@ -2,6 +2,7 @@
 // round, like the long ones, so that following the message fixes the formula.
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
+#include "test_support.hpp"
 
 #include <doctest/doctest.h>
 
@@ -45,4 +46,13 @@ TEST_CASE("factor direction: short factors written the wrong way round") {
     const std::string physics = only_finding(decl + "V = Q*t/2\n");
     CHECK(physics.find("wrong way round") == std::string::npos);
     CHECK(physics.find("counts") != std::string::npos);
+}
+
+// hp to kW divided by 0.746 where it multiplies (1 hp = 745.7 W, NIST SP 811 (2008), B.8): the
+// result is 1/0.746² = 1.797 times its true value, said as a decimal.
+TEST_CASE("a wrong-way factor's error is said as a decimal") {
+    const auto r = plumb::check_text("f.plumb", "P_kW : kW\nP_hp : hp\nP_kW = P_hp/0.746\n");
+    REQUIRE(plumb::test::count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::unit_scale),
+                            "as written the result is 1.79689 times its true value"));
 }

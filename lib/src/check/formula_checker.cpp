@@ -3339,10 +3339,12 @@ class checker {
                                divides ? "a division" : "a multiplication"),
                    file_.nodes[l.node].range);
         add_term_and_units(d, op);
+        // The square of a factor reads best as a decimal: 0.556516, not 1/0.556516.
+        std::string times = format_factor(printed_power(l, 2 * l.exponent), factor * factor);
+        if (times.starts_with("1/") && times.find('.') != std::string::npos)
+            times = format_factor(factor * factor);
         d.notes.push_back(
-            {fmt::format("as written the result is {} times its true value",
-                         format_factor(printed_power(l, 2 * l.exponent), factor * factor)),
-             {}});
+            {fmt::format("as written the result is {} times its true value", times), {}});
     }
 
     // "T_K = T_C": readings on scales with different zeros set equal or compared.
