@@ -278,3 +278,17 @@ TEST_CASE("a °C and °F reading set equal says how to convert") {
     }
     passes(decl, {"T_C = (T_F - 32)/1.8", "T_F = 1.8*T_C + 32"});
 }
+
+// A winding's temperature rise by the resistance method, Δθ = (R_2 - R_1)/R_1·(235 + θ_1) +
+// θ_1 - θ_a for copper (IEC 60034-1, from memory; 234.5 in IEEE 112, 225 or 228 for
+// aluminium): 235 + θ_1 is the temperature above copper's inferred zero of resistance, a
+// difference, times a ratio of resistances. A reading alone times the ratio stays an error.
+TEST_CASE("a winding's temperature from its inferred zero of resistance") {
+    const std::string decl = "Δθ : K\nR_1, R_2 : ohm\nθ_1, θ_a : °C\n";
+    passes(decl, {"Δθ = (R_2 - R_1)/R_1*(235 + θ_1) + θ_1 - θ_a",
+                  "Δθ = (R_2 - R_1)/R_1*(234.5 + θ_1) + θ_1 - θ_a",
+                  "Δθ = (R_2 - R_1)/R_1*(225 + θ_1) + θ_1 - θ_a"});
+    fails_with(decl, {"Δθ = (R_2 - R_1)/R_1*θ_1 + θ_1 - θ_a",
+                      "Δθ = (R_2 - R_1)/R_1*(200 + θ_1) + θ_1 - θ_a"},
+               plumb::rules::offset_scale);
+}

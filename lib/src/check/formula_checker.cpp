@@ -4054,6 +4054,26 @@ class checker {
         return true;
     }
 
+    // "(235 + θ_1)": a °C reading plus a conductor's inferred zero of resistance, 234.5 or 235
+    // for copper and 225 or 228 for aluminium (IEC 60034-1 and IEEE 112, from memory).
+    bool from_inferred_zero_of_resistance(std::uint32_t node) const {
+        while (file_.nodes[node].kind == expr_kind::group)
+            node = file_.nodes[node].lhs;
+        const syntax::expr_node& n = file_.nodes[node];
+        if (n.kind != expr_kind::add)
+            return false;
+        const std::uint32_t number = file_.nodes[n.lhs].kind == expr_kind::number ? n.lhs : n.rhs;
+        const std::uint32_t reading = number == n.lhs ? n.rhs : n.lhs;
+        if (file_.nodes[number].kind != expr_kind::number ||
+            file_.nodes[reading].kind != expr_kind::symbol)
+            return false;
+        const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
+        if (e == nullptr || e->offset_unit == nullptr || e->offset_unit->symbol != "\u00B0C")
+            return false;
+        const std::string_view written = text(file_.nodes[number].range);
+        return written == "234.5" || written == "235" || written == "225" || written == "228";
+    }
+
     bool number_beside_one_cell(std::uint32_t node) const {
         while (file_.nodes[node].kind == expr_kind::group)
             node = file_.nodes[node].lhs;
@@ -4295,6 +4315,20 @@ class checker {
                 same_number_over_its_sum(op.lhs, op.rhs)) {
                 result.scale = factor->scale;
                 result.exact_scale = factor->exact_scale;
+            }
+            // (R_2 - R_1)/R_1*(235 + θ_1): a winding's temperature from its inferred zero of
+            // resistance, times a ratio, is a rise.
+            if (!divided && factor->offset != nullptr && result.known && !result.numeric &&
+                result.offset == nullptr && result.dim.is_dimensionless() &&
+                from_inferred_zero_of_resistance(op.rhs)) {
+                if (factor != reinterpret_cast<const typed_term*>(evaluated))
+                    factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
+                read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
+            } else if (!divided && result.offset != nullptr && factor->known &&
+                       !factor->numeric && factor->offset == nullptr &&
+                       factor->dim.is_dimensionless() && from_inferred_zero_of_resistance(n) &&
+                       k == spine_.size()) {
+                read_as_rise(result);
             }
             if (divided && factor->offset != nullptr &&
                 fitted_on_scale(op.lhs, op.rhs, result, *factor)) {

@@ -72,7 +72,7 @@ constexpr named_dimension names[] = {
     {dims(1, -2, -1), "mass flux"},
 
     // Heat.
-    {dims(0, 0, 0, -1), "thermal expansion coefficient"},
+    {dims(0, 0, 0, -1), "per kelvin (a temperature coefficient)"},
     {dims(0, -1, 0, 1), "temperature gradient"},
     {dims(1, 2, -2, -1), "heat capacity or entropy"},
     {dims(0, 2, -2, -1), "specific heat capacity or specific entropy"},
