@@ -3215,12 +3215,24 @@ class checker {
                         as.power_of_ten = false;
                         if (!reconciles_with(i, k, as))
                             continue;
+                        // The conversion to as many digits as the number has: 9550 is 1/(2π)
+                        // times 60000, not 60004.4.
+                        int significant = 0;
+                        for (const char ch : written.substr(0, written.find_first_of("eE")))
+                            if (ch >= '1' && ch <= '9')
+                                significant = significant + 1;
+                            else if (ch == '0' && significant > 0)
+                                significant = significant + 1;
+                        if (written.find('.') == std::string_view::npos)
+                            significant = static_cast<int>(written.find_last_not_of('0') + 1);
+                        const double place = std::pow(
+                            10.0, std::floor(std::log10(as.value)) - std::max(significant, 3) + 1);
+                        const double shown = std::round(as.value / place) * place;
                         diagnostic& d =
                             report(rules::trade_constant,
                                    fmt::format("{} is read as {} times the unit conversion {}: {} "
                                                "folded into the factor",
-                                               text(file_.nodes[l.node].range), c.written,
-                                               format_factor(std::nullopt, as.value), c.what),
+                                               written, c.written, format_factor(shown), c.what),
                                    file_.nodes[l.node].range);
                         d.level = severity::note;
                         return true;
