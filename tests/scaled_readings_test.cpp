@@ -292,3 +292,12 @@ TEST_CASE("a winding's temperature from its inferred zero of resistance") {
                       "Δθ = (R_2 - R_1)/R_1*(200 + θ_1) + θ_1 - θ_a"},
                plumb::rules::offset_scale);
 }
+
+// CT halves for each 10 °C warmer, CT = CT_ref·2^((10 - T)/10) (common practice for chlorine
+// contact, from memory): a reference less a reading is the difference the other way round,
+// read as a temperature correction as (T - 10) is.
+TEST_CASE("a reference less a reading in a temperature correction") {
+    const std::string decl = "CT_req, CT_ref : mg*min/L\nT_w : °C\nk_T, k_20, θ : 1\n";
+    passes(decl, {"CT_req = CT_ref*2^((10 - T_w)/10)", "k_T = k_20*θ^(20 - T_w)"});
+    fails_with(decl, {"CT_req = CT_ref*2^(T_w/10)"}, plumb::rules::dimensioned_exponent);
+}

@@ -306,3 +306,12 @@ TEST_CASE("a gauge reading plus the local atmosphere typed as a number") {
     fails_with(decl, {"p_abs = p_max + 20", "p_abs = p_max", "p_abs = p_max + 60"},
                plumb::rules::offset_scale);
 }
+
+// Free air in cfm into Nm³/min by the volume factor alone (1 m³ = 35.3147 ft³, NIST SP 811
+// (2008), B.8): still no correction for the air's state, a warning as Q_n = Q_act is.
+TEST_CASE("an actual gas volume converted between units but not to reference conditions") {
+    const std::string air = "Q_leakNm : Nm3/min\nQ_leak : cfm\nQ_s : scf/min\n";
+    fails_with(air, {"Q_leakNm = Q_leak/35.31", "Q_leakNm = Q_leak*0.02832"},
+               plumb::rules::unit_scale);
+    passes(air, {"Q_leakNm = Q_s/35.31"});
+}

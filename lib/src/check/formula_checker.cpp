@@ -672,14 +672,18 @@ class checker {
                         return syntax::no_index;
                     found = at;
                 } else if (n.kind == expr_kind::number) {
-                    // Time and decimal conversions only: 600 (LNG's expansion) or 0.95 could
-                    // be the correction itself.
+                    // Conversions only: 600 (LNG's expansion) or 0.95 could be the
+                    // correction itself.
                     const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
                     const double decade = std::round(std::log10(v));
                     const bool power_of_ten =
                         v > 0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12;
-                    if (!power_of_ten && v != 60.0 && v != 3600.0 && v != 24.0 && v != 1440.0 &&
-                        v != 86400.0)
+                    // Q_cfm/35.31: a conversion between volume units (ft³ to m³) is no
+                    // correction either.
+                    const bool unit_ratio =
+                        looks_like_conversion(read_literal(text(n.range), v, at), false);
+                    if (!power_of_ten && !unit_ratio && v != 60.0 && v != 3600.0 && v != 24.0 &&
+                        v != 1440.0 && v != 86400.0)
                         return syntax::no_index;
                 } else {
                     return syntax::no_index;
@@ -2341,6 +2345,11 @@ class checker {
             cut_literals_to(literal_base);
             return unknown_type();
         }
+        // "(10 - T_w)": a reference less a reading, the difference the other way round.
+        if (has_shift && !shifted_to_a_zero && points == -1 &&
+            std::any_of(terms.begin(), terms.end(),
+                        [&](const operand& t) { return is_shift_candidate(t) && !t.subtracted; }))
+            result.reading_or_difference = true;
         if (has_shift && !shifted_to_a_zero && points == 1) {
             for (const auto& t : terms) {
                 if (!is_shift_candidate(t) || !t.subtracted)
