@@ -301,3 +301,15 @@ TEST_CASE("a reference less a reading in a temperature correction") {
     passes(decl, {"CT_req = CT_ref*2^((10 - T_w)/10)", "k_T = k_20*θ^(20 - T_w)"});
     fails_with(decl, {"CT_req = CT_ref*2^(T_w/10)"}, plumb::rules::dimensioned_exponent);
 }
+
+// The temperature-humidity index THI = t - (0.55 - 0.55·RH)·(t - 58) with t in °F and RH a
+// fraction (NRC 1971, from memory): (t - 58) is a difference from a 58 °F reading, and a
+// ratio times it no absolute temperature. And 0.55 - 0.55*RH_pct/100 is a fraction: the 0.55
+// beside a percentage converted by /100 is no percentage.
+TEST_CASE("a ratio times a reading less a number, and a coefficient beside a converted percent") {
+    const std::string decl = "THI : °F\nRH, x : 1\nT_F : °F\nRH_pct : %\n";
+    passes(decl, {"THI = T_F - (0.55 - 0.55*RH)*(T_F - 58)", "x = 0.55 - 0.55*RH_pct/100",
+                  "x = 0.55*(1 - RH_pct/100)"});
+    fails_with(decl, {"x = 0.55 - 0.55*RH_pct"}, plumb::rules::unit_scale);
+    fails_with(decl, {"THI = T_F - (0.55 - 0.55*RH)*T_F"}, plumb::rules::offset_scale);
+}

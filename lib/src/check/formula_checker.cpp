@@ -1139,9 +1139,11 @@ class checker {
     // ρ*g*h/1000 is in kPa (1000 Pa). NaN where that is no finite positive number.
     double unit_as_written(const typed_term& t) const {
         double u = t.scale;
+        // Only the numbers that convert: the 0.55 of 0.55*RH_pct/100 is a coefficient.
         for (std::uint32_t l = 0; l < t.literal_count; ++l)
-            u /= std::pow(literals_[t.literal_begin + l].value,
-                          literals_[t.literal_begin + l].exponent);
+            if (const scale_literal& number = literals_[t.literal_begin + l];
+                looks_like_conversion(number, true))
+                u /= std::pow(number.value, number.exponent);
         return u > 0 && std::isfinite(u) ? u : std::numeric_limits<double>::quiet_NaN();
     }
 
@@ -4440,8 +4442,10 @@ class checker {
                     return by.known && !by.numeric && by.offset == nullptr && !by.point &&
                            by.dim.is_dimensionless();
                 };
+                // Not (T_F - 58), a reading less a number, which is a difference there.
                 const auto absolute_temperature = [](const typed_term& reading) {
                     return reading.point && reading.offset == nullptr &&
+                           !reading.reading_or_difference &&
                            reading.dim == temperature_dimension();
                 };
                 const bool absolute_reading_by_ratio =
