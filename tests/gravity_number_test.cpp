@@ -433,3 +433,24 @@ TEST_CASE("the wind codes' velocity pressure: half the density of air") {
         CHECK(problems_in(run(decl + formula + "\n")) == 1);
     }
 }
+
+// Braking and stopping distances as road and rail texts write them (AASHTO, from memory):
+// d = V²/(254·(f + G)) in m from km/h, 254 = 2·g·3.6², and V²/(30·(f + G)) in ft from mph,
+// 30 ≈ 2·g/1.467²; s = v²/(25.92·a), 25.92 = 2·3.6²; 1.075·V²/a in ft, 1.075 = 1.467²/2 (mph
+// = 22/15 ft/s, NIST SP 811 (2008), B.8). The 2 of v²/(2a) and 2g are read with a note.
+TEST_CASE("the 2 of v²/(2a) folded into a braking distance's number") {
+    const std::string decl = "s_b, d_b : m\nv_b, V_kmh : km/h\na_b : m/s^2\nV_mph : mph\n"
+                             "d_ft : ft\na_us : ft/s^2\nf, G : 1\n";
+    for (const char* formula : {"s_b = v_b^2/(25.92*a_b)", "d_b = V_kmh^2/(254*(f + G))",
+                                "d_ft = V_mph^2/(30*(f + G))", "d_ft = 1.075*V_mph^2/a_us"}) {
+        CAPTURE(formula);
+        const auto r = run(decl + formula + "\n");
+        CHECK(problems_in(r) == 0);
+        CHECK(count_of(r, plumb::rules::trade_constant) + count_of(r, plumb::rules::gravity_number) ==
+              1);
+    }
+    for (const char* formula : {"d_b = V_kmh^2/(f + G)", "s_b = v_b^2/(2*a_b)"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 1);
+    }
+}

@@ -2821,6 +2821,11 @@ class checker {
         // A conversion factor written the wrong way round (asked of the short meeting points
         // that formulas have; a sum of thousands of terms is not searched term by term).
         constexpr std::size_t max_operands_for_flips = 16;
+        // A coefficient folded into a conversion (1.075 = 1.467²/2 beside 1.47*V*t) reconciles
+        // the formula as written, which a flip of another number would only seem to.
+        if (parts.size() <= max_operands_for_flips &&
+            accept_folded_coefficient(ops, index, parts, unit))
+            return true;
         for (std::size_t i = 0; i < parts.size() && parts.size() <= max_operands_for_flips; ++i)
             for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
                 // Any number may be the conversion written upside down (/60 for *60, /3.6,
@@ -2839,9 +2844,6 @@ class checker {
         if (parts.size() <= max_operands_for_flips &&
             report_inverted_trade_constant(ops, index, parts))
             return false;
-        if (parts.size() <= max_operands_for_flips &&
-            accept_folded_coefficient(ops, index, parts, unit))
-            return true;
         const operand& op = ops[index[r.odd]];
         const operand& reference = ops[index[r.reference]];
         // What the numbers as written give: the conversion-like ones taken as conversions.
@@ -3094,13 +3096,17 @@ class checker {
         bool circle = false;     // a circle's area: read only beside a square (D^2)
     };
     static std::span<const folded_constant> folded_constants() {
-        static const std::array<folded_constant, 6> constants{{
+        static const std::array<folded_constant, 8> constants{{
             {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false, true},
             {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false, true},
             // 9550 = 60000/(2π) in M = 9550*P/n (kW, rpm to N·m), 5252 = 33000/(2π) (hp, rpm
             // to lbf·ft); 191.5 = 2π × 30.48 in the Wenner array's ρ = 2π·a·R (ft to Ω·cm).
             {1.0 / (2.0 * std::numbers::pi), "1/(2\u03C0)",
              "a revolution's 2\u03C0 radians (P = 2\u03C0\u00B7n\u00B7M)", false},
+            // 25.92 = 2 × 3.6² in s = v²/(25.92*a) (km/h to m/s), 1.075 = 1.467²/2 in
+            // AASHTO's 1.075*V²/a (mph to ft/s): the 2 of v²/(2a) folded in.
+            {0.5, "1/2", "the half of v\u00B2/(2a)", false},
+            {2.0, "2", "the 2 of v\u00B2/(2a)", false},
             {2.0 * std::numbers::pi, "2\u03C0",
              "the formula's 2\u03C0 (radians per revolution; the Wenner array's \u03C1 = "
              "2\u03C0\u00B7a\u00B7R)",
@@ -3169,7 +3175,11 @@ class checker {
                 unit = r.unit;
             return r.agree;
         };
-        for (const bool circle_pass : {false, true}) {
+        // Pass 0 reads a power of ten; each later pass one folded constant, in the table's
+        // order, over every number, so that the half of 1.075 is found before a 2 in 1.47.
+        const std::span<const folded_constant> constants = folded_constants();
+        for (std::size_t pass = 0; pass <= constants.size(); ++pass) {
+            const bool circle_pass = pass > 0;
             for (std::size_t i = 0; i < parts.size(); ++i) {
                 if (parts[i].literals.size() > most_numbers)
                     continue;
@@ -3204,6 +3214,10 @@ class checker {
                     // too, where whole numbers must otherwise reach 1000).
                     if (!l.factor_like && !(l.value >= 100.0 && l.value < 1000.0))
                         continue;
+                    // A folded factor is printed from a product worked out by hand, and its
+                    // last digit is often cut rather than rounded (AASHTO's 1.075 for
+                    // 1.0756): a thousandth either way.
+                    as.tolerance = std::max(as.tolerance, 1e-3);
                     // 9550 for 9549.3: a whole number's trailing zeros may only place the
                     // point, and a folded factor is rounded to its significant digits.
                     // Three significant digits at least: 12000 is no rounded 15279.
@@ -3213,7 +3227,8 @@ class checker {
                         digits < written.size())
                         as.tolerance =
                             std::max(as.tolerance, half_unit_in_last_digit(written) / l.value);
-                    for (const folded_constant& c : folded_constants()) {
+                    {
+                        const folded_constant& c = constants[pass - 1];
                         if (!l.factor_like && !c.whole_three_digits)
                             continue;
                         // 0.1166*S*N*A_p with the plunger's area declared: its π/4 would be

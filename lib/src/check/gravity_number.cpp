@@ -21,8 +21,8 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<carried_quantity, 10>& quantities() {
-    static const std::array<carried_quantity, 10> table = [] {
+const std::array<carried_quantity, 11>& quantities() {
+    static const std::array<carried_quantity, 11> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -57,12 +57,17 @@ const std::array<carried_quantity, 10>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 10>{{
+        return std::array<carried_quantity, 11>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
              "write 9.80665 or a cell that holds g with its unit to say so", acceleration,
              standard_gravity, standard_gravity},
+            // The braking distance d = V²/(254*(f + G)) in m from km/h (254 = 2·g·3.6²) and
+            // V²/(30*(f + G)) in ft from mph (AASHTO, from memory): twice g, the 2g of v²/(2g).
+            {rules::gravity_number, "twice standard gravity", "2\u00B7g_n", "1/(2\u00B7g_n)", "",
+             "write 2*{g_n} instead to say so", "write 2*9.80665 or a cell that holds g to say so",
+             acceleration, 2.0 * standard_gravity, 2.0 * standard_gravity},
             {rules::gravity_number, "the specific weight of water", "\u03B3_w = \u03C1_w\u00B7g_n",
              "1/\u03B3_w",
              " (water between 0 and 30 \u00B0C, \u03C1_w from 995.65 to 999.975 kg/m\u00B3)",
