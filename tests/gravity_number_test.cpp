@@ -454,3 +454,19 @@ TEST_CASE("the 2 of v²/(2a) folded into a braking distance's number") {
         CHECK(problems_in(run(decl + formula + "\n")) == 1);
     }
 }
+
+// Apparent power S in kVA is the real power over the power factor, P = S·pf (IEC 80000-6,
+// from memory): set equal with nothing between them, the real power comes out 1/pf too high.
+// A conversion between kVA and VA is still no power factor.
+TEST_CASE("an apparent power set equal to a real power") {
+    const std::string decl = "P_e, P_w : kW\nS : kVA\npf : 1\nS_va : VA\n";
+    for (const char* formula : {"P_e = S", "S = P_e", "P_e = S_va/1000"}) {
+        CAPTURE(formula);
+        const auto r = run(decl + formula + "\n");
+        CHECK(count_of(r, plumb::rules::unit_scale) == 1);
+    }
+    for (const char* formula : {"P_e = S*pf", "P_e = P_w", "S = S_va/1000"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 0);
+    }
+}

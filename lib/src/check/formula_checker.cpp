@@ -634,11 +634,90 @@ class checker {
             report_revolution_without_two_pi(f);
         else if ((marks & at_reference_conditions) != 0 && is_gas_volume_or_flow(sides[0].type.dim))
             report_actual_volume_as_normal(sides);
+        if ((marks & apparent_power) != 0 && sides[0].type.dim == watts())
+            report_apparent_as_real_power(sides);
+    }
+
+    static const compact_dimension& watts() {
+        static const compact_dimension power(unit_table::standard().resolve("W")->dim());
+        return power;
+    }
+
+    // "P_e = S" with S in kVA and P_e in kW: apparent power is the real power over the power
+    // factor; the units alone cannot say so, as both are watts to the dimension.
+    [[gnu::noinline]] void report_apparent_as_real_power(std::span<const operand> sides) {
+        const std::uint32_t left = sole_symbol_times_conversions(sides[0].node);
+        const std::uint32_t right = sole_symbol_times_conversions(sides[1].node);
+        if (left == syntax::no_index || right == syntax::no_index)
+            return;
+        const symbol_entry* a = symbols_.find(text(file_.nodes[left].range));
+        const symbol_entry* b = symbols_.find(text(file_.nodes[right].range));
+        if (a == nullptr || b == nullptr)
+            return;
+        const bool a_apparent = (unit_marks_of(a->unit_text) & apparent_power) != 0;
+        const bool b_apparent = (unit_marks_of(b->unit_text) & apparent_power) != 0;
+        if (a_apparent == b_apparent)
+            return;
+        const std::uint32_t apparent_node = a_apparent ? left : right;
+        const std::uint32_t real_node = a_apparent ? right : left;
+        const symbol_entry& apparent = a_apparent ? *a : *b;
+        const symbol_entry& real = a_apparent ? *b : *a;
+        if (real.unit_text.find('W') == std::string_view::npos)
+            return;
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("'{}' is an apparent power ({}) and '{}' a real power ({}): they differ by "
+                        "the power factor, which this formula leaves out",
+                        text(file_.nodes[apparent_node].range), apparent.unit_text,
+                        text(file_.nodes[real_node].range), real.unit_text),
+            file_.nodes[sides[1].node].range);
+        d.level = severity::warning;
+        d.notes.push_back({"real power is the apparent power times the power factor, P = S*pf "
+                           "(and S = sqrt(3)*V*I for three phases)",
+                           {}});
     }
 
     static bool is_gas_volume_or_flow(const compact_dimension& dim) {
         static const compact_dimension volume(dimension::base(base_dimension::length).pow(3));
         return dim == volume || dim == volume_flow_dimension();
+    }
+
+    // The one symbol of a product of it and numbers that only convert units, else no_index.
+    std::uint32_t sole_symbol_times_conversions(std::uint32_t k) const {
+        std::uint32_t found = syntax::no_index;
+        std::vector<std::uint32_t> pending{k};
+        while (!pending.empty()) {
+            const std::uint32_t at = pending.back();
+            pending.pop_back();
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+            } else if (n.kind == expr_kind::group) {
+                pending.push_back(n.lhs);
+            } else if (n.kind == expr_kind::symbol) {
+                if (found != syntax::no_index)
+                    return syntax::no_index;
+                found = at;
+            } else if (n.kind == expr_kind::number) {
+                // Conversions only: 600 (LNG's expansion) or 0.95 could be the
+                // correction itself.
+                const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
+                const double decade = std::round(std::log10(v));
+                const bool power_of_ten =
+                    v > 0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12;
+                // Q_cfm/35.31: a conversion between volume units (ft³ to m³) is no
+                // correction either.
+                const bool unit_ratio =
+                    looks_like_conversion(read_literal(text(n.range), v, at), false);
+                if (!power_of_ten && !unit_ratio && v != 60.0 && v != 3600.0 && v != 24.0 &&
+                    v != 1440.0 && v != 86400.0)
+                    return syntax::no_index;
+            } else {
+                return syntax::no_index;
+            }
+        }
+        return found;
     }
 
     // "Q_n = Q_act" with Q_n in Nm3/h and Q_act in m³/h: a normal or standard volume is the
@@ -654,49 +733,12 @@ class checker {
                        ? symbols_.find(text(file_.nodes[k].range))
                        : nullptr;
         };
-        // The one symbol of a product of it and numbers, else null.
-        const auto only_symbol = [&](std::uint32_t k) -> std::uint32_t {
-            std::uint32_t found = syntax::no_index;
-            std::vector<std::uint32_t> pending{k};
-            while (!pending.empty()) {
-                const std::uint32_t at = pending.back();
-                pending.pop_back();
-                const syntax::expr_node& n = file_.nodes[at];
-                if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
-                    pending.push_back(n.lhs);
-                    pending.push_back(n.rhs);
-                } else if (n.kind == expr_kind::group) {
-                    pending.push_back(n.lhs);
-                } else if (n.kind == expr_kind::symbol) {
-                    if (found != syntax::no_index)
-                        return syntax::no_index;
-                    found = at;
-                } else if (n.kind == expr_kind::number) {
-                    // Conversions only: 600 (LNG's expansion) or 0.95 could be the
-                    // correction itself.
-                    const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
-                    const double decade = std::round(std::log10(v));
-                    const bool power_of_ten =
-                        v > 0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12;
-                    // Q_cfm/35.31: a conversion between volume units (ft³ to m³) is no
-                    // correction either.
-                    const bool unit_ratio =
-                        looks_like_conversion(read_literal(text(n.range), v, at), false);
-                    if (!power_of_ten && !unit_ratio && v != 60.0 && v != 3600.0 && v != 24.0 &&
-                        v != 1440.0 && v != 86400.0)
-                        return syntax::no_index;
-                } else {
-                    return syntax::no_index;
-                }
-            }
-            return found;
-        };
         for (std::size_t i = 0; i < 2; ++i) {
             const symbol_entry* normal = symbol_of(sides[i].node);
             if (normal == nullptr ||
                 (unit_marks_of(normal->unit_text) & at_reference_conditions) == 0)
                 continue;
-            const std::uint32_t actual_node = only_symbol(sides[1 - i].node);
+            const std::uint32_t actual_node = sole_symbol_times_conversions(sides[1 - i].node);
             if (actual_node == syntax::no_index)
                 return;
             const std::string_view actual_name = text(file_.nodes[actual_node].range);

@@ -22,6 +22,7 @@ struct unit_definition;
 enum unit_mark : std::uint8_t {
     counts_revolutions = 1,      // rpm, r/min, rev/s: a speed in cycles, not radians
     at_reference_conditions = 2, // Nm3, Sm³, scf: gas at a reference pressure and temperature
+    apparent_power = 4,          // VA, kVA, MVA: a power factor away from the watts
 };
 
 [[nodiscard]] inline std::uint8_t unit_marks_of(std::string_view unit_text) {
@@ -33,6 +34,8 @@ enum unit_mark : std::uint8_t {
         marks |= counts_revolutions;
     if (has("Nm3") || has("Sm3") || has("Nm\u00B3") || has("Sm\u00B3") || has("scf") || has("SCF"))
         marks |= at_reference_conditions;
+    if (has("VA") && !has("VAr") && !has("VAR"))
+        marks |= apparent_power;
     return marks;
 }
 
