@@ -141,6 +141,8 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     // Per ton of refrigeration, 12 000 Btu/h (NIST SP 811 (2008), B.8), in chiller sheets.
     same("kW/ton", "kW/TR");
     same("gpm/ton", "gpm/TR");
+    same("acres", "acre");
+    same("days", "d");
     CHECK_FALSE(read_unit_text("hrs"));
     // A column of temperature differences headed in the scale's unit holds differences (a
     // Fahrenheit degree is 5/9 K, NIST SP 811 (2008), B.9); a heading that names a reading does

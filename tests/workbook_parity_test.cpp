@@ -583,3 +583,21 @@ TEST_CASE("workbook parity: a formula cell whose row label says it holds a diffe
     CHECK(error_at(r, "S!B8"));
     CHECK(error_at(r, "S!B9"));
 }
+
+TEST_CASE("workbook parity: a weighted mean of readings over the sum of its weights") {
+    // Feedwater mixed from condensate and make-up, t = (m_1·t_1 + m_2·t_2)/(m_1 + m_2) (a heat
+    // balance with one specific heat, common practice): a reading on the °C scale, as the
+    // notation reads the same formula. Over one of the weights alone it is no mean.
+    const check_report r =
+        check_one_sheet("S", sheet_of({
+                                 {"4200", "kg/h"},                  // B2: condensate
+                                 {"85", "°C"},                      // B3
+                                 {"1300", "kg/h"},                  // B4: make-up
+                                 {"12", "°C"},                      // B5
+                                 {"=(B2*B3+B4*B5)/(B2+B4)", "°C"}, // B6: right
+                                 {"=(B2*B3+B4*B5)/B2", "°C"},      // B7: weights sum to 1.3
+                             }));
+    REQUIRE(r.cells_checked == 2);
+    CHECK_FALSE(error_at(r, "S!B6"));
+    CHECK(error_at(r, "S!B7"));
+}

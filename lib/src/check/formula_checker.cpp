@@ -4080,6 +4080,11 @@ class checker {
                 return false;
             out.push_back({1.0, {i}, 1});
             return true;
+        case expr_kind::reference: // a workbook's cell, as a symbol is
+            if (!file_.references[n.lhs].dim)
+                return false;
+            out.push_back({1.0, {i}, 1});
+            return true;
         case expr_kind::add: {
             if (!expand(n.lhs, out) || !expand(n.rhs, out))
                 return false;
@@ -4270,7 +4275,9 @@ class checker {
             std::optional<std::size_t> at;
             typed_term weight;
             for (std::size_t k = 0; k < t.count; ++k) {
-                const typed_term s = eval_symbol(file_.nodes[t.symbols[k]]);
+                const syntax::expr_node& factor = file_.nodes[t.symbols[k]];
+                const typed_term s = factor.kind == expr_kind::reference ? eval_reference(factor)
+                                                                         : eval_symbol(factor);
                 if (!s.known)
                     return std::nullopt;
                 if (s.offset != nullptr) {

@@ -169,7 +169,7 @@ std::string as_declaration(std::string_view notation, std::string_view measures)
 // "in. w.g." for inches of water, "hr" for the hour, "CFM" in capitals, "kNm" for kN·m,
 // "sq ft", "bhp" (brake horsepower, a horsepower), "bara" (bar absolute).
 std::string trade_spelling(std::string t) {
-    static constexpr std::array<std::pair<std::string_view, std::string_view>, 53> whole{{
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 59> whole{{
         {"in. w.g.", "inH2O"}, {"in.w.g.", "inH2O"}, {"in w.g.", "inH2O"}, {"in wg", "inH2O"},
         {"in. wg", "inH2O"},   {"in.wg", "inH2O"},   {"in WG", "inH2O"},   {"inWG", "inH2O"},
         {"in. w.c.", "inH2O"}, {"in.w.c.", "inH2O"}, {"in wc", "inH2O"},   {"iwg", "inH2O"},
@@ -188,6 +188,9 @@ std::string trade_spelling(std::string t) {
         // A chiller's efficiency and flows per ton are per ton of refrigeration, never per
         // short ton of mass.
         {"kW/ton", "kW/TR"},   {"gpm/ton", "gpm/TR"}, {"cfm/ton", "cfm/TR"},
+        // Plurals as headings write them.
+        {"acres", "acre"},     {"feet", "ft"},       {"inches", "in"},     {"days", "d"},
+        {"hours", "h"},        {"minutes", "min"},
     }};
     for (const auto& [typed, unit] : whole)
         if (t == typed)
