@@ -632,8 +632,7 @@ class checker {
         const std::uint8_t marks = symbols_.unit_marks();
         if ((marks & counts_revolutions) != 0 && is_rotating_power_or_torque(sides[0].type.dim))
             report_revolution_without_two_pi(f);
-        else if ((marks & at_reference_conditions) != 0 &&
-                 is_gas_volume_or_flow(sides[0].type.dim))
+        else if ((marks & at_reference_conditions) != 0 && is_gas_volume_or_flow(sides[0].type.dim))
             report_actual_volume_as_normal(sides);
     }
 
@@ -677,7 +676,8 @@ class checker {
                     // be the correction itself.
                     const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
                     const double decade = std::round(std::log10(v));
-                    const bool power_of_ten = v > 0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12;
+                    const bool power_of_ten =
+                        v > 0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12;
                     if (!power_of_ten && v != 60.0 && v != 3600.0 && v != 24.0 && v != 1440.0 &&
                         v != 86400.0)
                         return syntax::no_index;
@@ -689,7 +689,8 @@ class checker {
         };
         for (std::size_t i = 0; i < 2; ++i) {
             const symbol_entry* normal = symbol_of(sides[i].node);
-            if (normal == nullptr || (unit_marks_of(normal->unit_text) & at_reference_conditions) == 0)
+            if (normal == nullptr ||
+                (unit_marks_of(normal->unit_text) & at_reference_conditions) == 0)
                 continue;
             const std::uint32_t actual_node = only_symbol(sides[1 - i].node);
             if (actual_node == syntax::no_index)
@@ -699,14 +700,14 @@ class checker {
             if (actual == nullptr || actual->unit_text.empty() ||
                 (unit_marks_of(actual->unit_text) & at_reference_conditions) != 0)
                 return;
-            diagnostic& d = report(
-                rules::unit_scale,
-                fmt::format("'{}' is a volume of gas at its actual pressure and temperature ({}) "
-                            "and {} one at reference conditions ({}): they differ by the gas's "
-                            "state, which this formula does not correct for",
-                            actual_name, actual->unit_text, quote(sides[i].node),
-                            normal->unit_text),
-                file_.nodes[sides[1 - i].node].range);
+            diagnostic& d =
+                report(rules::unit_scale,
+                       fmt::format(
+                           "'{}' is a volume of gas at its actual pressure and temperature ({}) "
+                           "and {} one at reference conditions ({}): they differ by the gas's "
+                           "state, which this formula does not correct for",
+                           actual_name, actual->unit_text, quote(sides[i].node), normal->unit_text),
+                       file_.nodes[sides[1 - i].node].range);
             d.level = severity::warning;
             d.notes.push_back({"an actual volume becomes a normal one times (p/p_n)*(T_n/T), "
                                "with absolute pressures and temperatures (p_n = 101.325 kPa; T_n "
@@ -1017,10 +1018,10 @@ class checker {
                 continue;
             const syntax::expr_node& left = file_.nodes[product.lhs];
             const syntax::expr_node& right = file_.nodes[product.rhs];
-            const bool number_left = left.kind == syntax::expr_kind::number &&
-                                     right.kind == syntax::expr_kind::symbol;
-            const bool number_right = right.kind == syntax::expr_kind::number &&
-                                      left.kind == syntax::expr_kind::symbol;
+            const bool number_left =
+                left.kind == syntax::expr_kind::number && right.kind == syntax::expr_kind::symbol;
+            const bool number_right =
+                right.kind == syntax::expr_kind::number && left.kind == syntax::expr_kind::symbol;
             if (!number_left && !number_right)
                 continue;
             const std::string number = display_text((number_left ? left : right).range);
@@ -1321,10 +1322,9 @@ class checker {
             }
             if (!any_fits)
                 return false;
-            const auto reading =
-                read_gravity_number(t.scale, reference_scale, numbers,
-                                    {texts.data(), numbers.size()}, lacking, true,
-                                    !t.numeric && t.dim == volume_flow_dimension());
+            const auto reading = read_gravity_number(
+                t.scale, reference_scale, numbers, {texts.data(), numbers.size()}, lacking, true,
+                !t.numeric && t.dim == volume_flow_dimension());
             if (!reading)
                 return false;
             readings[found_count++] = {i, *reading};
@@ -2842,15 +2842,14 @@ class checker {
         // 43560/43200 = 1.0083 cfs, which the method leaves out by convention (common practice).
         if (std::abs(ratio * 121.0 / 120.0 - 1.0) < 1e-5 ||
             std::abs(ratio * 120.0 / 121.0 - 1.0) < 1e-5) {
-            diagnostic& d =
-                report(rules::trade_constant,
-                       fmt::format("{} and {} are 1.0083 apart, an acre-inch per hour against a "
-                                   "cubic foot per second, a factor that the rational method "
-                                   "(Q = C·i·A in cfs) and the irrigator's rule (1 cfs for an "
-                                   "hour is an acre-inch) leave out by convention",
-                                   quote(ops[index[r.odd]].node),
-                                   quote(ops[index[r.reference]].node)),
-                       file_.nodes[ops[index[r.odd]].node].range);
+            diagnostic& d = report(
+                rules::trade_constant,
+                fmt::format("{} and {} are 1.0083 apart, an acre-inch per hour against a "
+                            "cubic foot per second, a factor that the rational method "
+                            "(Q = C·i·A in cfs) and the irrigator's rule (1 cfs for an "
+                            "hour is an acre-inch) leave out by convention",
+                            quote(ops[index[r.odd]].node), quote(ops[index[r.reference]].node)),
+                file_.nodes[ops[index[r.odd]].node].range);
             d.level = severity::note;
             unit = parts[r.reference].scale;
             return true;
@@ -3082,7 +3081,10 @@ class checker {
             // to lbf·ft); 191.5 = 2π × 30.48 in the Wenner array's ρ = 2π·a·R (ft to Ω·cm).
             {1.0 / (2.0 * std::numbers::pi), "1/(2\u03C0)",
              "a revolution's 2\u03C0 radians (P = 2\u03C0\u00B7n\u00B7M)", false},
-            {2.0 * std::numbers::pi, "2\u03C0", "the formula's 2\u03C0 (radians per revolution; the Wenner array's \u03C1 = 2\u03C0\u00B7a\u00B7R)", false},
+            {2.0 * std::numbers::pi, "2\u03C0",
+             "the formula's 2\u03C0 (radians per revolution; the Wenner array's \u03C1 = "
+             "2\u03C0\u00B7a\u00B7R)",
+             false},
             {std::numbers::ln10 / (2.0 * std::numbers::pi), "ln 10/(2\u03C0)",
              "the steady well-flow (Thiem) formula's constant, with log10 for ln,", true},
             {std::numbers::ln10 / (4.0 * std::numbers::pi), "ln 10/(4\u03C0)",
@@ -3146,10 +3148,10 @@ class checker {
                     // Three significant digits at least: 12000 is no rounded 15279.
                     const std::string_view written = text(file_.nodes[l.node].range);
                     const std::size_t digits = written.find_last_not_of('0') + 1;
-                    if (written.find_first_of(".eE") == std::string_view::npos &&
-                        digits >= 3 && digits < written.size())
-                        as.tolerance = std::max(
-                            as.tolerance, half_unit_in_last_digit(written) / l.value);
+                    if (written.find_first_of(".eE") == std::string_view::npos && digits >= 3 &&
+                        digits < written.size())
+                        as.tolerance =
+                            std::max(as.tolerance, half_unit_in_last_digit(written) / l.value);
                     for (const folded_constant& c : folded_constants()) {
                         if (!l.factor_like && !c.whole_three_digits)
                             continue;
@@ -3931,8 +3933,8 @@ class checker {
         const syntax::expr_node& sum = file_.nodes[ungroup(denominator)];
         if (sum.kind != expr_kind::add)
             return false;
-        const std::uint32_t reading = file_.nodes[sum.lhs].kind == expr_kind::symbol ? sum.lhs
-                                                                                      : sum.rhs;
+        const std::uint32_t reading =
+            file_.nodes[sum.lhs].kind == expr_kind::symbol ? sum.lhs : sum.rhs;
         const std::uint32_t shift = reading == sum.lhs ? sum.rhs : sum.lhs;
         if (file_.nodes[reading].kind != expr_kind::symbol || !constant(shift))
             return false;
@@ -4240,9 +4242,8 @@ class checker {
         spine_.resize(spine_base);
         // "P = V*Δp_mbar/(3600*1000*η)": a side that already has the other side's dimension
         // holds no reference state; its numbers are conversions.
-        if (pairs.any() &&
-            !(index == side_hint_node_ && side_hint_ != nullptr && side_hint_->known &&
-              result.known && side_hint_->dim == result.dim))
+        if (pairs.any() && !(index == side_hint_node_ && side_hint_ != nullptr &&
+                             side_hint_->known && result.known && side_hint_->dim == result.dim))
             read_reference_states(pairs, result);
         if (gauge_in_product) {
             bool geometric = false;
@@ -4632,8 +4633,7 @@ class checker {
             // max(p_a, p_g): readings on scales with different zeros are not compared.
             if (scales_agree && values.size() >= 2 &&
                 std::any_of(values.begin(), values.end(), [](const operand& v) {
-                    return v.type.zero_of != nullptr || v.type.weighted_sum ||
-                           v.type.origin != 0.0;
+                    return v.type.zero_of != nullptr || v.type.weighted_sum || v.type.origin != 0.0;
                 })) {
                 const std::size_t findings_before = out_.size();
                 compare_origins(values, fmt::format("call of {}", f->name));
