@@ -420,32 +420,52 @@ struct symbol_not_yet_declared {};
 
 class checker {
   public:
-    checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out,
-            bool defer_unknown = false)
-        : file_(file), symbols_(symbols), out_(out), defer_unknown_(defer_unknown),
-          spine_(scratch().spine), operands_(scratch().operands), types_(scratch().types),
-          literals_(scratch().literals), scaled_(scratch().scaled),
-          scaled_index_(scratch().scaled_index) {
+    checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out)
+        : file_(file), symbols_(symbols), out_(out), spine_(scratch().spine),
+          operands_(scratch().operands), types_(scratch().types), literals_(scratch().literals),
+          scaled_(scratch().scaled), scaled_index_(scratch().scaled_index) {
+        abandon(); // a check of an earlier checker on this thread may have been abandoned
+    }
+
+    // Made ready for the next check: one checker serves a file's formulas in turn. A check
+    // gives back what it pushed on the scratch stacks, except the literal stack's numbers;
+    // one abandoned by an exception has its stacks emptied by abandon.
+    void begin(bool defer_unknown = false) {
+        defer_unknown_ = defer_unknown;
+        current_ = nullptr;
+        prefer_dimensionless_ = syntax::no_index;
+        square_root_argument_ = syntax::no_index;
+        side_hint_ = nullptr;
+        side_hint_node_ = syntax::no_index;
         // No dimension of an earlier check is alive: their spilled exponents may go.
         compact_dimension::reset_arena();
-        // A check abandoned by an exception may have left its part behind.
-        spine_.clear();
-        operands_.clear();
-        types_.clear();
         literals_.clear();
-        scaled_.clear();
-        scaled_index_.clear();
         // One generated formula of millions of terms must not keep its stacks' memory for the
         // rest of the run; ordinary formulas never come near this.
         constexpr std::size_t kept_capacity = 1U << 16;
-        if (operands_.capacity() > kept_capacity) {
+        if (operands_.capacity() > kept_capacity) [[unlikely]] {
             operands_.shrink_to_fit();
             spine_.shrink_to_fit();
             literals_.shrink_to_fit();
             scaled_.shrink_to_fit();
             scaled_index_.shrink_to_fit();
+            common_numbers_.shrink_to_fit();
         }
     }
+
+    // Drops what a check abandoned by an exception left on the scratch stacks.
+    void abandon() {
+        spine_.clear();
+        operands_.clear();
+        types_.clear();
+        literals_.clear();
+        common_numbers_.clear();
+        scaled_.clear();
+        scaled_index_.clear();
+    }
+
+    [[nodiscard]] const syntax::parsed_file& file() const { return file_; }
+
     // A node's type, with the numbers along its multiplicative path left on the literal stack
     // from where it started.
     typed_term eval(std::uint32_t index) {
@@ -1050,7 +1070,7 @@ class checker {
     const syntax::parsed_file& file_;
     symbol_table& symbols_;
     std::vector<diagnostic>& out_;
-    bool defer_unknown_;
+    bool defer_unknown_ = false;
     // Scratch stacks shared by nested sums and products, so checking allocates nothing once
     // warm. Each user takes the part above the size it found and gives it back.
     std::vector<std::uint32_t>& spine_;
@@ -5002,25 +5022,58 @@ static void replace_with_overflow(const syntax::parsed_file& file, const syntax:
     out.push_back(std::move(d));
 }
 
-bool check_formula(const syntax::parsed_file& file, const syntax::formula& formula,
-                   symbol_table& symbols, std::vector<diagnostic>& out, bool defer_unknown) {
-    checker c(file, symbols, out, defer_unknown);
+static bool check_with(checker& c, const syntax::formula& formula, std::vector<diagnostic>& out,
+                       bool defer_unknown) {
+    c.begin(defer_unknown);
     const std::size_t before = out.size();
     try {
         c.check_formula(formula);
     } catch (const symbol_not_yet_declared&) {
+        c.abandon();
         out.resize(before);
         return false;
     } catch (const arithmetic_overflow&) {
-        replace_with_overflow(file, formula, out, before);
+        c.abandon();
+        replace_with_overflow(c.file(), formula, out, before);
+    } catch (...) {
+        c.abandon();
+        throw;
     }
     return true;
+}
+
+bool check_formula(const syntax::parsed_file& file, const syntax::formula& formula,
+                   symbol_table& symbols, std::vector<diagnostic>& out, bool defer_unknown) {
+    checker c(file, symbols, out);
+    return check_with(c, formula, out, defer_unknown);
+}
+
+struct formula_checker::state {
+    state(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out)
+        : c(file, symbols, out), out(out) {}
+    checker c;
+    std::vector<diagnostic>& out;
+};
+
+formula_checker::formula_checker(const syntax::parsed_file& file, symbol_table& symbols,
+                                 std::vector<diagnostic>& out)
+    : state_(std::make_unique<state>(file, symbols, out)) {}
+
+formula_checker::~formula_checker() = default;
+
+const syntax::parsed_file& formula_checker::file() const {
+    return state_->c.file();
+}
+
+bool formula_checker::check(const syntax::formula& formula, bool defer_unknown) {
+    return check_with(state_->c, formula, state_->out, defer_unknown);
 }
 
 std::optional<value_type> check_sheet_formula(const syntax::parsed_file& file,
                                               const syntax::formula& formula, symbol_table& symbols,
                                               std::vector<diagnostic>& out) {
     checker c(file, symbols, out);
+    c.begin();
     const std::size_t before = out.size();
     try {
         return c.check_value(formula);
@@ -5033,6 +5086,7 @@ std::optional<value_type> check_sheet_formula(const syntax::parsed_file& file,
 std::optional<dimension> expression_dimension(const syntax::parsed_file& file, std::uint32_t root,
                                               symbol_table& symbols, std::vector<diagnostic>& out) {
     checker c(file, symbols, out);
+    c.begin();
     const std::size_t before = out.size();
     try {
         const auto t = c.eval(root);

@@ -24,6 +24,7 @@
 #include <fstream>
 #include <limits>
 #include <map>
+#include <optional>
 #include <span>
 #include <system_error>
 #include <unordered_map>
@@ -217,6 +218,7 @@ class checking_reader : public dictionary_reader {
   private:
     symbol_table& table_;
     std::unordered_set<const loaded_file*>& visited_;
+    std::optional<formula_checker> checker_; // of the tree being read, made at its first formula
 };
 
 class session {
@@ -309,9 +311,10 @@ class session {
         syntax::parsed_file tree = parse_file(*f->source, &reader);
         f->loading = false;
         // Formulas that named a symbol declared further down are checked now, against all.
+        formula_checker checker(tree, table, f->diagnostics);
         for (std::size_t i = 0; i < tree.formulas.size(); ++i)
             if (i >= reader.checked_already.size() || !reader.checked_already[i]) {
-                check_formula(tree, tree.formulas[i], table, f->diagnostics, false);
+                checker.check(tree.formulas[i], false);
                 record(tree, tree.formulas[i], table);
             }
         if (reader.infers_symbols || reader.kept_for_inference > 0)
@@ -716,7 +719,9 @@ void checking_reader::on_declaration(const syntax::parsed_file& tree, std::uint3
 
 bool checking_reader::on_formula(const syntax::parsed_file& tree, const syntax::formula& f) {
     ++formulas;
-    const bool checked = check_formula(tree, f, table_, file_->diagnostics, true);
+    if (!checker_ || &checker_->file() != &tree)
+        checker_.emplace(tree, table_, file_->diagnostics);
+    const bool checked = checker_->check(f, true);
     if (checked)
         session_.record(tree, f, table_);
     // Formulas that inference needs stay in the tree until the end of the file, as do those
