@@ -443,14 +443,18 @@ class checker {
         // One generated formula of millions of terms must not keep its stacks' memory for the
         // rest of the run; ordinary formulas never come near this.
         constexpr std::size_t kept_capacity = 1U << 16;
-        if (operands_.capacity() > kept_capacity) [[unlikely]] {
-            operands_.shrink_to_fit();
-            spine_.shrink_to_fit();
-            literals_.shrink_to_fit();
-            scaled_.shrink_to_fit();
-            scaled_index_.shrink_to_fit();
-            common_numbers_.shrink_to_fit();
-        }
+        if (operands_.capacity() > kept_capacity) [[unlikely]]
+            give_back_memory();
+    }
+
+    // Out of line, so that every check does not save registers for these calls.
+    [[gnu::noinline, gnu::cold]] void give_back_memory() {
+        operands_.shrink_to_fit();
+        spine_.shrink_to_fit();
+        literals_.shrink_to_fit();
+        scaled_.shrink_to_fit();
+        scaled_index_.shrink_to_fit();
+        common_numbers_.shrink_to_fit();
     }
 
     // Drops what a check abandoned by an exception left on the scratch stacks.

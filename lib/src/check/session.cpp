@@ -219,6 +219,11 @@ class checking_reader : public dictionary_reader {
     symbol_table& table_;
     std::unordered_set<const loaded_file*>& visited_;
     std::optional<formula_checker> checker_; // of the tree being read, made at its first formula
+
+    // Out of line: once per file, and inlined it made every formula save registers for it.
+    [[gnu::noinline, gnu::cold]] void start_checker(const syntax::parsed_file& tree) {
+        checker_.emplace(tree, table_, file_->diagnostics);
+    }
 };
 
 class session {
@@ -719,8 +724,8 @@ void checking_reader::on_declaration(const syntax::parsed_file& tree, std::uint3
 
 bool checking_reader::on_formula(const syntax::parsed_file& tree, const syntax::formula& f) {
     ++formulas;
-    if (!checker_ || &checker_->file() != &tree)
-        checker_.emplace(tree, table_, file_->diagnostics);
+    if (!checker_ || &checker_->file() != &tree) [[unlikely]]
+        start_checker(tree);
     const bool checked = checker_->check(f, true);
     if (checked)
         session_.record(tree, f, table_);
