@@ -2790,6 +2790,13 @@ class checker {
                                             double& unit, bool with_numbers) {
         if (with_numbers && units_agree_with_plain_numbers(ops, unit))
             return true;
+        return reconcile_in_full(ops, what, unit);
+    }
+
+    // reconcile_scales past its test of plain numbers, which most meeting points with numbers
+    // pass: out of line, so that those do not pay for this one's frame.
+    [[gnu::noinline]] bool reconcile_in_full(std::span<const operand> ops, meeting_point what,
+                                             double& unit) {
         const std::size_t base = scaled_.size();
         bool dimensionless = false;
         for (std::size_t i = 0; i < ops.size(); ++i) {
