@@ -420,32 +420,56 @@ struct symbol_not_yet_declared {};
 
 class checker {
   public:
-    checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out,
-            bool defer_unknown = false)
-        : file_(file), symbols_(symbols), out_(out), defer_unknown_(defer_unknown),
-          spine_(scratch().spine), operands_(scratch().operands), types_(scratch().types),
-          literals_(scratch().literals), scaled_(scratch().scaled),
-          scaled_index_(scratch().scaled_index) {
+    checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out)
+        : file_(file), symbols_(symbols), out_(out), spine_(scratch().spine),
+          operands_(scratch().operands), types_(scratch().types), literals_(scratch().literals),
+          scaled_(scratch().scaled), scaled_index_(scratch().scaled_index) {
+        abandon(); // a check of an earlier checker on this thread may have been abandoned
+    }
+
+    // Made ready for the next check: one checker serves a file's formulas in turn. A check
+    // gives back what it pushed on the scratch stacks, except the literal stack's numbers;
+    // one abandoned by an exception has its stacks emptied by abandon.
+    void begin(bool defer_unknown = false) {
+        defer_unknown_ = defer_unknown;
+        current_ = nullptr;
+        prefer_dimensionless_ = syntax::no_index;
+        square_root_argument_ = syntax::no_index;
+        side_hint_ = nullptr;
+        side_hint_node_ = syntax::no_index;
         // No dimension of an earlier check is alive: their spilled exponents may go.
         compact_dimension::reset_arena();
-        // A check abandoned by an exception may have left its part behind.
+        literals_.clear();
+        // One generated formula of millions of terms must not keep its stacks' memory for the
+        // rest of the run; ordinary formulas never come near this.
+        constexpr std::size_t kept_capacity = 1U << 16;
+        if (operands_.capacity() > kept_capacity) [[unlikely]]
+            give_back_memory();
+    }
+
+    // Out of line, so that every check does not save registers for these calls.
+    [[gnu::noinline, gnu::cold]] void give_back_memory() {
+        operands_.shrink_to_fit();
+        spine_.shrink_to_fit();
+        literals_.shrink_to_fit();
+        scaled_.shrink_to_fit();
+        scaled_index_.shrink_to_fit();
+        common_numbers_.shrink_to_fit();
+    }
+
+    // Drops what a check abandoned by an exception left on the scratch stacks.
+    void abandon() {
         spine_.clear();
         operands_.clear();
         types_.clear();
         literals_.clear();
+        common_numbers_.clear();
         scaled_.clear();
         scaled_index_.clear();
-        // One generated formula of millions of terms must not keep its stacks' memory for the
-        // rest of the run; ordinary formulas never come near this.
-        constexpr std::size_t kept_capacity = 1U << 16;
-        if (operands_.capacity() > kept_capacity) {
-            operands_.shrink_to_fit();
-            spine_.shrink_to_fit();
-            literals_.shrink_to_fit();
-            scaled_.shrink_to_fit();
-            scaled_index_.shrink_to_fit();
-        }
     }
+
+    [[nodiscard]] const syntax::parsed_file& file() const { return file_; }
+
     // A node's type, with the numbers along its multiplicative path left on the literal stack
     // from where it started.
     typed_term eval(std::uint32_t index) {
@@ -1096,7 +1120,7 @@ class checker {
     const syntax::parsed_file& file_;
     symbol_table& symbols_;
     std::vector<diagnostic>& out_;
-    bool defer_unknown_;
+    bool defer_unknown_ = false;
     // Scratch stacks shared by nested sums and products, so checking allocates nothing once
     // warm. Each user takes the part above the size it found and gives it back.
     std::vector<std::uint32_t>& spine_;
@@ -2826,6 +2850,13 @@ class checker {
                                             double& unit, bool with_numbers) {
         if (with_numbers && units_agree_with_plain_numbers(ops, unit))
             return true;
+        return reconcile_in_full(ops, what, unit);
+    }
+
+    // reconcile_scales past its test of plain numbers, which most meeting points with numbers
+    // pass: out of line, so that those do not pay for this one's frame.
+    [[gnu::noinline]] bool reconcile_in_full(std::span<const operand> ops, meeting_point what,
+                                             double& unit) {
         const std::size_t base = scaled_.size();
         bool dimensionless = false;
         for (std::size_t i = 0; i < ops.size(); ++i) {
@@ -3293,8 +3324,8 @@ class checker {
                                 significant = significant + 1;
                         if (written.find('.') == std::string_view::npos)
                             significant = static_cast<int>(written.find_last_not_of('0') + 1);
-                        const double place = std::pow(
-                            10.0, std::floor(std::log10(as.value)) - std::max(significant, 3) + 1);
+                        const double place = std::pow(10.0, std::floor(std::log10(as.value)) -
+                                                                std::max(significant, 3) + 1);
                         const double shown = std::round(as.value / place) * place;
                         diagnostic& d =
                             report(rules::trade_constant,
@@ -3509,8 +3540,7 @@ class checker {
             const unit_definition* unit = off.type.offset;
             const bool temperature = off.type.dim == temperature_dimension();
             if (!temperature && unit != nullptr && unit->scale == unit_scale::gauge &&
-                other.type.offset == nullptr && other.type.point &&
-                read_local_atmosphere(off))
+                other.type.offset == nullptr && other.type.point && read_local_atmosphere(off))
                 return;
             const std::string scale_of_other =
                 other.type.offset != nullptr
@@ -3598,10 +3628,10 @@ class checker {
         const syntax::expr_node& n = file_.nodes[k];
         if (n.kind != expr_kind::add || !std::isfinite(sum.type.scale))
             return false;
-        const std::uint32_t number =
-            file_.nodes[n.rhs].kind == expr_kind::number   ? n.rhs
-            : file_.nodes[n.lhs].kind == expr_kind::number ? n.lhs
-                                                           : syntax::no_index;
+        const std::uint32_t number = file_.nodes[n.rhs].kind == expr_kind::number ? n.rhs
+                                     : file_.nodes[n.lhs].kind == expr_kind::number
+                                         ? n.lhs
+                                         : syntax::no_index;
         // Beside the gauge symbol alone, so that the number is in the symbol's unit (in
         // 6.895*p_g + 14.7 the sum is in kPa, and 14.7 kPa no atmosphere).
         const std::uint32_t reading = number == n.rhs ? n.lhs : n.rhs;
@@ -4411,10 +4441,9 @@ class checker {
                 if (factor != reinterpret_cast<const typed_term*>(evaluated))
                     factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
                 read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
-            } else if (!divided && result.offset != nullptr && factor->known &&
-                       !factor->numeric && factor->offset == nullptr &&
-                       factor->dim.is_dimensionless() && from_inferred_zero_of_resistance(n) &&
-                       k == spine_.size()) {
+            } else if (!divided && result.offset != nullptr && factor->known && !factor->numeric &&
+                       factor->offset == nullptr && factor->dim.is_dimensionless() &&
+                       from_inferred_zero_of_resistance(n) && k == spine_.size()) {
                 read_as_rise(result);
             }
             if (divided && factor->offset != nullptr &&
@@ -4509,8 +4538,7 @@ class checker {
                 // Not (T_F - 58), a reading less a number, which is a difference there.
                 const auto absolute_temperature = [](const typed_term& reading) {
                     return reading.point && reading.offset == nullptr &&
-                           !reading.reading_or_difference &&
-                           reading.dim == temperature_dimension();
+                           !reading.reading_or_difference && reading.dim == temperature_dimension();
                 };
                 const bool absolute_reading_by_ratio =
                     (absolute_temperature(result) && ratio_of(t) && !divided) ||
@@ -5346,25 +5374,58 @@ static void replace_with_overflow(const syntax::parsed_file& file, const syntax:
     out.push_back(std::move(d));
 }
 
-bool check_formula(const syntax::parsed_file& file, const syntax::formula& formula,
-                   symbol_table& symbols, std::vector<diagnostic>& out, bool defer_unknown) {
-    checker c(file, symbols, out, defer_unknown);
+static bool check_with(checker& c, const syntax::formula& formula, std::vector<diagnostic>& out,
+                       bool defer_unknown) {
+    c.begin(defer_unknown);
     const std::size_t before = out.size();
     try {
         c.check_formula(formula);
     } catch (const symbol_not_yet_declared&) {
+        c.abandon();
         out.resize(before);
         return false;
     } catch (const arithmetic_overflow&) {
-        replace_with_overflow(file, formula, out, before);
+        c.abandon();
+        replace_with_overflow(c.file(), formula, out, before);
+    } catch (...) {
+        c.abandon();
+        throw;
     }
     return true;
+}
+
+bool check_formula(const syntax::parsed_file& file, const syntax::formula& formula,
+                   symbol_table& symbols, std::vector<diagnostic>& out, bool defer_unknown) {
+    checker c(file, symbols, out);
+    return check_with(c, formula, out, defer_unknown);
+}
+
+struct formula_checker::state {
+    state(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out)
+        : c(file, symbols, out), out(out) {}
+    checker c;
+    std::vector<diagnostic>& out;
+};
+
+formula_checker::formula_checker(const syntax::parsed_file& file, symbol_table& symbols,
+                                 std::vector<diagnostic>& out)
+    : state_(std::make_unique<state>(file, symbols, out)) {}
+
+formula_checker::~formula_checker() = default;
+
+const syntax::parsed_file& formula_checker::file() const {
+    return state_->c.file();
+}
+
+bool formula_checker::check(const syntax::formula& formula, bool defer_unknown) {
+    return check_with(state_->c, formula, state_->out, defer_unknown);
 }
 
 std::optional<value_type> check_sheet_formula(const syntax::parsed_file& file,
                                               const syntax::formula& formula, symbol_table& symbols,
                                               std::vector<diagnostic>& out) {
     checker c(file, symbols, out);
+    c.begin();
     const std::size_t before = out.size();
     try {
         return c.check_value(formula);
@@ -5377,6 +5438,7 @@ std::optional<value_type> check_sheet_formula(const syntax::parsed_file& file,
 std::optional<dimension> expression_dimension(const syntax::parsed_file& file, std::uint32_t root,
                                               symbol_table& symbols, std::vector<diagnostic>& out) {
     checker c(file, symbols, out);
+    c.begin();
     const std::size_t before = out.size();
     try {
         const auto t = c.eval(root);

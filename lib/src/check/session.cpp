@@ -24,6 +24,7 @@
 #include <fstream>
 #include <limits>
 #include <map>
+#include <optional>
 #include <span>
 #include <system_error>
 #include <unordered_map>
@@ -217,6 +218,12 @@ class checking_reader : public dictionary_reader {
   private:
     symbol_table& table_;
     std::unordered_set<const loaded_file*>& visited_;
+    std::optional<formula_checker> checker_; // of the tree being read, made at its first formula
+
+    // Out of line: once per file, and inlined it made every formula save registers for it.
+    [[gnu::noinline, gnu::cold]] void start_checker(const syntax::parsed_file& tree) {
+        checker_.emplace(tree, table_, file_->diagnostics);
+    }
 };
 
 class session {
@@ -309,9 +316,10 @@ class session {
         syntax::parsed_file tree = parse_file(*f->source, &reader);
         f->loading = false;
         // Formulas that named a symbol declared further down are checked now, against all.
+        formula_checker checker(tree, table, f->diagnostics);
         for (std::size_t i = 0; i < tree.formulas.size(); ++i)
             if (i >= reader.checked_already.size() || !reader.checked_already[i]) {
-                check_formula(tree, tree.formulas[i], table, f->diagnostics, false);
+                checker.check(tree.formulas[i], false);
                 record(tree, tree.formulas[i], table);
             }
         if (reader.infers_symbols || reader.kept_for_inference > 0)
@@ -716,7 +724,9 @@ void checking_reader::on_declaration(const syntax::parsed_file& tree, std::uint3
 
 bool checking_reader::on_formula(const syntax::parsed_file& tree, const syntax::formula& f) {
     ++formulas;
-    const bool checked = check_formula(tree, f, table_, file_->diagnostics, true);
+    if (!checker_ || &checker_->file() != &tree) [[unlikely]]
+        start_checker(tree);
+    const bool checked = checker_->check(f, true);
     if (checked)
         session_.record(tree, f, table_);
     // Formulas that inference needs stay in the tree until the end of the file, as do those
