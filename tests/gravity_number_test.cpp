@@ -403,8 +403,8 @@ TEST_CASE("a circle's π/4 folded into a factor is read only beside a square") {
     CHECK(std::numbers::pi / 4.0 * 1440.0 / 9702.0 == doctest::Approx(0.1166).epsilon(1e-3));
     const std::string decl = "PD : bbl/d\nS_p, D_p, d_in : in\nN : 1/min\nA_p : in^2\n"
                              "Q_gpm : gpm\nV : ft/s\n";
-    for (const char* formula : {"PD = 0.1166*S_p*N*D_p^2", "V = 0.4085*Q_gpm/d_in^2",
-                                "V = 0.4085*Q_gpm/(d_in*d_in)"}) {
+    for (const char* formula :
+         {"PD = 0.1166*S_p*N*D_p^2", "V = 0.4085*Q_gpm/d_in^2", "V = 0.4085*Q_gpm/(d_in*d_in)"}) {
         CAPTURE(formula);
         const auto r = run(decl + formula + "\n");
         CHECK(problems_in(r) == 0);
@@ -421,8 +421,7 @@ TEST_CASE("the wind codes' velocity pressure: half the density of air") {
     CHECK(0.00256 * 47.880259 / (0.44704 * 0.44704) == doctest::Approx(0.6133).epsilon(1e-3));
     const std::string decl = "q_h : lbf/ft^2\nq_Pa : Pa\nK_z, K_zt, K_d : 1\nV : mph\nV_ms : m/s\n"
                              "m : kg\nL : m\n";
-    for (const char* formula :
-         {"q_h = 0.00256*K_z*K_zt*K_d*V^2", "q_Pa = 0.613*K_z*V_ms^2"}) {
+    for (const char* formula : {"q_h = 0.00256*K_z*K_zt*K_d*V^2", "q_Pa = 0.613*K_z*V_ms^2"}) {
         CAPTURE(formula);
         const auto r = run(decl + formula + "\n");
         CHECK(problems_in(r) == 0);
@@ -446,7 +445,8 @@ TEST_CASE("the 2 of v²/(2a) folded into a braking distance's number") {
         CAPTURE(formula);
         const auto r = run(decl + formula + "\n");
         CHECK(problems_in(r) == 0);
-        CHECK(count_of(r, plumb::rules::trade_constant) + count_of(r, plumb::rules::gravity_number) ==
+        CHECK(count_of(r, plumb::rules::trade_constant) +
+                  count_of(r, plumb::rules::gravity_number) ==
               1);
     }
     for (const char* formula : {"d_b = V_kmh^2/(f + G)", "s_b = v_b^2/(2*a_b)"}) {

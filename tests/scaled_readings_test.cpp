@@ -288,9 +288,10 @@ TEST_CASE("a winding's temperature from its inferred zero of resistance") {
     passes(decl, {"Δθ = (R_2 - R_1)/R_1*(235 + θ_1) + θ_1 - θ_a",
                   "Δθ = (R_2 - R_1)/R_1*(234.5 + θ_1) + θ_1 - θ_a",
                   "Δθ = (R_2 - R_1)/R_1*(225 + θ_1) + θ_1 - θ_a"});
-    fails_with(decl, {"Δθ = (R_2 - R_1)/R_1*θ_1 + θ_1 - θ_a",
-                      "Δθ = (R_2 - R_1)/R_1*(200 + θ_1) + θ_1 - θ_a"},
-               plumb::rules::offset_scale);
+    fails_with(
+        decl,
+        {"Δθ = (R_2 - R_1)/R_1*θ_1 + θ_1 - θ_a", "Δθ = (R_2 - R_1)/R_1*(200 + θ_1) + θ_1 - θ_a"},
+        plumb::rules::offset_scale);
 }
 
 // CT halves for each 10 °C warmer, CT = CT_ref·2^((10 - T)/10) (common practice for chlorine

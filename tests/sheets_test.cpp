@@ -147,9 +147,9 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     // A column of temperature differences headed in the scale's unit holds differences (a
     // Fahrenheit degree is 5/9 K, NIST SP 811 (2008), B.9); a heading that names a reading does
     // not, nor one whose first word only begins with a d.
-    for (const char* heading : {"\u0394T [\u00B0F]", "dT (\u00B0F)", "CW \u0394T [\u00B0F]",
-                                "Temperature rise [\u00B0F]",
-                                "Supply-return difference (\u00B0F)"}) {
+    for (const char* heading :
+         {"\u0394T [\u00B0F]", "dT (\u00B0F)", "CW \u0394T [\u00B0F]", "Temperature rise [\u00B0F]",
+          "Supply-return difference (\u00B0F)"}) {
         CAPTURE(heading);
         const auto u = read_heading_unit(heading);
         REQUIRE(u);

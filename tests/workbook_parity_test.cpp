@@ -540,13 +540,13 @@ TEST_CASE("workbook parity: SUMPRODUCT keeps its arguments' units") {
     // product of a kW column and an h column is in kWh, and into an MWh cell it needs /1000.
     const check_report r =
         check_one_sheet("S", sheet_of({
-                                 {"120", "kW"},                          // B2
-                                 {"80", "kW"},                           // B3
-                                 {"6000", "h"},                          // B4
-                                 {"4000", "h"},                          // B5
-                                 {"=SUMPRODUCT(B2:B3,B4:B5)", "kWh"},    // B6: right
+                                 {"120", "kW"},                            // B2
+                                 {"80", "kW"},                             // B3
+                                 {"6000", "h"},                            // B4
+                                 {"4000", "h"},                            // B5
+                                 {"=SUMPRODUCT(B2:B3,B4:B5)", "kWh"},      // B6: right
                                  {"=SUMPRODUCT(B2:B3,B4:B5)/1000", "MWh"}, // B7: right
-                                 {"=SUMPRODUCT(B2:B3,B4:B5)", "MWh"},    // B8: 1000 off
+                                 {"=SUMPRODUCT(B2:B3,B4:B5)", "MWh"},      // B8: 1000 off
                              }));
     REQUIRE(r.cells_checked == 3);
     CHECK_FALSE(error_at(r, "S!B6"));
@@ -567,15 +567,15 @@ TEST_CASE("workbook parity: a formula cell whose row label says it holds a diffe
                    "<c r=\"A" + n + "\" t=\"inlineStr\"><is><t>" + label + "</t></is></c>");
         return row;
     };
-    const std::string sheet =
-        "<worksheet><sheetData>" + labelled(2, "Design wet-bulb", "78", "°F") +
-        labelled(3, "Hot water to tower", "95", "°F") +
-        labelled(4, "Cold water from tower", "85", "°F") +
-        labelled(5, "Range (hot - cold water)", "=B3-B4", "°F") +
-        labelled(6, "Approach (cold water - wet-bulb)", "=B4-B2", "°F") +
-        labelled(7, "Mean / range", "=(B3+B4)/2", "°F") +
-        labelled(8, "Leaving water", "=B3-B4", "°F") +
-        labelled(9, "Range", "=B3+B4", "°F") + "</sheetData></worksheet>";
+    const std::string sheet = "<worksheet><sheetData>" +
+                              labelled(2, "Design wet-bulb", "78", "°F") +
+                              labelled(3, "Hot water to tower", "95", "°F") +
+                              labelled(4, "Cold water from tower", "85", "°F") +
+                              labelled(5, "Range (hot - cold water)", "=B3-B4", "°F") +
+                              labelled(6, "Approach (cold water - wet-bulb)", "=B4-B2", "°F") +
+                              labelled(7, "Mean / range", "=(B3+B4)/2", "°F") +
+                              labelled(8, "Leaving water", "=B3-B4", "°F") +
+                              labelled(9, "Range", "=B3+B4", "°F") + "</sheetData></worksheet>";
     const check_report r = check_one_sheet("S", sheet);
     CHECK_FALSE(error_at(r, "S!B5"));
     CHECK_FALSE(error_at(r, "S!B6"));
@@ -590,10 +590,10 @@ TEST_CASE("workbook parity: a weighted mean of readings over the sum of its weig
     // notation reads the same formula. Over one of the weights alone it is no mean.
     const check_report r =
         check_one_sheet("S", sheet_of({
-                                 {"4200", "kg/h"},                  // B2: condensate
-                                 {"85", "°C"},                      // B3
-                                 {"1300", "kg/h"},                  // B4: make-up
-                                 {"12", "°C"},                      // B5
+                                 {"4200", "kg/h"},                 // B2: condensate
+                                 {"85", "°C"},                     // B3
+                                 {"1300", "kg/h"},                 // B4: make-up
+                                 {"12", "°C"},                     // B5
                                  {"=(B2*B3+B4*B5)/(B2+B4)", "°C"}, // B6: right
                                  {"=(B2*B3+B4*B5)/B2", "°C"},      // B7: weights sum to 1.3
                              }));
