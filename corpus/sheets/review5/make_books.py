@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
 """Four review workbooks for plumb's workbook checking (review 21), written with the standard
-zipfile module (xlsx_writer.py, copied from corpus/sheets/review4).
+zipfile module (review4's xlsx_writer.py, shared).
 
 Trades and scenarios (all invented):
   1. bayside-chiller-cw: a medical office building's central plant, condenser water and cooling
@@ -30,10 +30,11 @@ correct cell, and the planted mistake it still misses, each with why, kept by ha
 import json
 import os
 import re
-
-from xlsx_writer import write_xlsx
+import sys
 
 HERE = os.path.dirname(os.path.abspath(__file__))
+sys.path.insert(0, os.path.join(HERE, "..", "review4"))
+from xlsx_writer import write_xlsx  # noqa: E402  (review4's writer, which this review shares)
 SYMBOLS = {}  # (sheet, symbol) -> "C<row>"
 
 
