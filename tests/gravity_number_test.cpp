@@ -470,3 +470,21 @@ TEST_CASE("an apparent power set equal to a real power") {
         CHECK(problems_in(run(decl + formula + "\n")) == 0);
     }
 }
+
+// AASHTO's stopping sight distance in US units, SSD = 1.47·V·t + 1.075·V²/a in ft with V in
+// mph (from memory; 1 mph = 1.4667 ft/s, NIST SP 811 (2008), B.8): both terms agree through
+// rounded factors, and the sum takes the unit they round, ft, not 1.47's 0.23 % off. The
+// second term without its conversion stays a finding.
+TEST_CASE("a side whose terms agree through rounded factors takes the unit they round") {
+    const std::string decl = "SSD_ft : ft\nV_mph : mph\nt_pr : s\na_us : ft/s^2\n";
+    for (const char* formula : {"SSD_ft = 1.47*V_mph*t_pr + 1.075*V_mph^2/a_us",
+                                "SSD_ft = 1.47*V_mph*t_pr + 1.47^2*V_mph^2/(2*a_us)"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 0);
+    }
+    for (const char* formula : {"SSD_ft = 1.47*V_mph*t_pr + V_mph^2/(2*a_us)",
+                                "SSD_ft = 1.5*V_mph*t_pr + 1.5^2*V_mph^2/(2*a_us)"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 1);
+    }
+}

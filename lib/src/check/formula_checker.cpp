@@ -1770,6 +1770,8 @@ class checker {
         result.scale = check_scales(terms, "terms of this sum", unit, &result.exact_scale)
                            ? unit
                            : std::numeric_limits<double>::quiet_NaN();
+        if (index == side_hint_node_) [[unlikely]]
+            settle_rounded_side(result, literal_base);
         cut_literals_to(literal_base);
         if (common_numbers_.size() > common_base) [[unlikely]] {
             literals_.insert(literals_.end(), common_numbers_.begin() + common_base,
@@ -3656,6 +3658,25 @@ class checker {
                            "the standard atmosphere is 101.325 kPa (14.696 psi, 1.01325 bar)",
                            {}});
         return true;
+    }
+
+    // "SSD_ft = 1.47*V_mph*t + 1.075*V_mph^2/a": a side whose terms agree only through
+    // rounded factors (1.47 for 1.4667) takes the unit those factors round, where the other
+    // side's unit lies within their rounding, rather than the first one's 0.2 % off.
+    void settle_rounded_side(typed_term& side, std::size_t literal_base) const {
+        if (side_hint_ == nullptr || !side_hint_->known || !side.known ||
+            !(side_hint_->dim == side.dim) || !std::isfinite(side.scale) ||
+            !std::isfinite(side_hint_->scale) || side_hint_->scale <= 0.0)
+            return;
+        double rounding = 0.0;
+        for (std::size_t l = literal_base; l < literals_.size(); ++l)
+            if (literals_[l].exponent != 0.0)
+                rounding =
+                    std::max(rounding, literals_[l].tolerance * std::abs(literals_[l].exponent));
+        if (rounding > 0.0 && std::abs(side.scale / side_hint_->scale - 1.0) <= rounding) {
+            side.scale = side_hint_->scale;
+            side.exact_scale = side_hint_->exact_scale;
+        }
     }
 
     // "T_m = T_hi + T_ho", "t_film = T_s + T_a/2": readings on a scale with an arbitrary zero
