@@ -77,6 +77,9 @@ constexpr const compact_dimension& velocity_squared_dimension() {
     return velocity_squared_dim;
 }
 constexpr compact_dimension volume_flow_dim = compact_dimension::whole({0, 3, -1, 0, 0, 0, 0});
+constexpr compact_dimension volume_dim = compact_dimension::whole({0, 3, 0, 0, 0, 0, 0});
+constexpr compact_dimension energy_dim = compact_dimension::whole({1, 2, -2, 0, 0, 0, 0});
+constexpr compact_dimension power_dim = compact_dimension::whole({1, 2, -3, 0, 0, 0, 0});
 constexpr const compact_dimension& volume_flow_dimension() {
     return volume_flow_dim;
 }
@@ -658,13 +661,8 @@ class checker {
             report_revolution_without_two_pi(f);
         else if ((marks & at_reference_conditions) != 0 && is_gas_volume_or_flow(sides[0].type.dim))
             report_actual_volume_as_normal(sides);
-        if ((marks & apparent_power) != 0 && sides[0].type.dim == watts())
+        if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
             report_apparent_as_real_power(sides);
-    }
-
-    static const compact_dimension& watts() {
-        static const compact_dimension power(unit_table::standard().resolve("W")->dim());
-        return power;
     }
 
     // "P_e = S" with S in kVA and P_e in kW: apparent power is the real power over the power
@@ -702,8 +700,7 @@ class checker {
     }
 
     static bool is_gas_volume_or_flow(const compact_dimension& dim) {
-        static const compact_dimension volume(dimension::base(base_dimension::length).pow(3));
-        return dim == volume || dim == volume_flow_dimension();
+        return dim == volume_dim || dim == volume_flow_dim;
     }
 
     // The one symbol of a product of it and numbers that only convert units, else no_index.
@@ -788,9 +785,7 @@ class checker {
     }
 
     static bool is_rotating_power_or_torque(const compact_dimension& dim) {
-        static const compact_dimension energy(unit_table::standard().resolve("J")->dim());
-        static const compact_dimension power(unit_table::standard().resolve("W")->dim());
-        return dim == energy || dim == power;
+        return dim == energy_dim || dim == power_dim;
     }
 
     // "M = 60000*P/n" with M in kN·m, P in kW and n in rpm: revolutions count as cycles, so
@@ -798,8 +793,6 @@ class checker {
     // and the torque comes out 2π times too large. Asked only of an equation that relates one
     // torque, one power and one speed in revolutions, with no π or 2π written in it.
     [[gnu::noinline]] void report_revolution_without_two_pi(const syntax::formula& f) {
-        static const compact_dimension energy(unit_table::standard().resolve("J")->dim());
-        static const compact_dimension power(unit_table::standard().resolve("W")->dim());
         const symbol_entry* torque = nullptr;
         const symbol_entry* speed = nullptr;
         std::string_view torque_name;
@@ -836,7 +829,7 @@ class checker {
                     speed = e;
                     speed_name = name;
                     ++speeds;
-                } else if (*e->compact_dim == energy) {
+                } else if (*e->compact_dim == energy_dim) {
                     for (const std::string_view energy_unit :
                          {"J", "Wh", "Btu", "BTU", "cal", "erg", "eV", "therm"})
                         if (unit.find(energy_unit) != std::string_view::npos || unit.empty())
@@ -844,7 +837,7 @@ class checker {
                     torque = e;
                     torque_name = name;
                     ++torques;
-                } else if (*e->compact_dim == power) {
+                } else if (*e->compact_dim == power_dim) {
                     ++powers;
                 }
                 break;
