@@ -307,6 +307,29 @@ TEST_CASE("a gauge reading plus the local atmosphere typed as a number") {
                plumb::rules::offset_scale);
 }
 
+// The sea-level atmosphere (101.325 kPa = 14.696 psi = 1.01325 bar, ISO 2533, from memory)
+// added to a gauge reading in a file that declares the site's barometer at 96.2 kPa, which
+// the standard atmosphere has about 440 m up (the barometric formula, from memory): the
+// absolute pressure is 5 kPa high, a warning that names the barometer. The barometer itself,
+// its value typed in, and a file whose declared atmosphere is the standard one, pass.
+TEST_CASE("the sea-level atmosphere where the file declares the site's barometer") {
+    const std::string site = "p_b : kPa \"site barometric pressure, 96.2 kPa\"\n"
+                             "p_g : kPag\np_abs : kPa\np_gpsi : psig\np_apsi : psia\n";
+    fails_with(site, {"p_abs = p_g + 101.325", "p_apsi = p_gpsi + 14.7"},
+               plumb::rules::offset_scale);
+    const auto r = run(site, "p_abs = p_g + 101.325");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale),
+                            "declares the site's barometer 'p_b' (96.2 kPa"));
+    passes(site, {"p_abs = p_g + p_b"});
+    passes(site, {"p_abs = p_g + 96.2"}, 1);
+    // Declared by its value after `=`, in psia: 13.2 psia is 91.0 kPa.
+    fails_with("p_atm : psia = 13.2\np_gpsi : psig\np_apsi : psia\n", {"p_apsi = p_gpsi + 14.7"},
+               plumb::rules::offset_scale);
+    passes("p_atm : kPa = 101.325\np_g : kPag\np_abs : kPa\n", {"p_abs = p_g + 101.325"});
+    passes("p_b : kPa \"barometric pressure\"\np_g : kPag\np_abs : kPa\n",
+           {"p_abs = p_g + 101.325"});
+}
+
 // Free air in cfm into Nm³/min by the volume factor alone (1 m³ = 35.3147 ft³, NIST SP 811
 // (2008), B.8): still no correction for the air's state, a warning as Q_n = Q_act is.
 TEST_CASE("an actual gas volume converted between units but not to reference conditions") {

@@ -19,6 +19,7 @@
 #include <algorithm>
 #include <array>
 #include <bit>
+#include <cctype>
 #include <cmath>
 #include <cstddef>
 #include <fmt/format.h>
@@ -1131,6 +1132,13 @@ class checker {
     // The other side of the equation whose side is the sum at side_hint_node_.
     const typed_term* side_hint_ = nullptr;
     std::uint32_t side_hint_node_ = syntax::no_index;
+    // The site's barometer where the file declares one: see declared_site_barometer.
+    struct site_barometer {
+        std::string_view name;
+        double pascals = 0.0;
+    };
+    site_barometer site_barometer_;
+    bool site_barometer_searched_ = false;
 
     // Inline: every symbol and call is looked up by its text, and a call here cost more than
     // the view it makes.
@@ -2398,6 +2406,8 @@ class checker {
                 shifted_to_a_zero = true;
             }
         }
+        if (shifted_to_a_zero && gauges > 0 && std::abs(final_origin) <= tolerance + 1e-9)
+            warn_sea_level_atmosphere_at_site(terms, unit);
         if (has_shift && !shifted_to_a_zero && points == 0 && unit_terms >= 2 &&
             report_zero_beside_difference_of_readings(terms, unit, result.dim)) {
             cut_literals_to(literal_base);
@@ -2515,6 +2525,108 @@ class checker {
                             ? scale_named(final_origin, slack, result.dim, terms)
                             : nullptr;
         return result;
+    }
+
+    // The site's barometer, where the file declares one that is not the standard atmosphere:
+    // "p_b : kPa "site barometric pressure, 96.2 kPa"" or "p_atm : psia = 12.2". Worked out at
+    // the first gauge reading made absolute with a number, once per file.
+    const site_barometer* declared_site_barometer() {
+        if (site_barometer_searched_)
+            return site_barometer_.name.empty() ? nullptr : &site_barometer_;
+        site_barometer_searched_ = true;
+        for (const syntax::declaration& decl : file_.declarations) {
+            if (!decl.kind.dim || decl.name_count == 0 ||
+                (decl.kind.single_unit != nullptr && decl.kind.single_unit->offset != 0.0))
+                continue;
+            const std::optional<compact_dimension> dim = compact_dimension::fitted(*decl.kind.dim);
+            if (!dim || !(*dim == pressure_dimension()))
+                continue;
+            const std::string_view name = text(file_.names[decl.first_name].name);
+            const std::string_view description = text(decl.description);
+            const auto says = [&](std::string_view word) {
+                return description.find(word) != std::string_view::npos;
+            };
+            const bool barometer = says("barometer") || says("barometric") ||
+                                   says("atmospheric pressure") || says("ambient pressure") ||
+                                   says("local atmosphere") || says("site atmosphere") ||
+                                   name.find("baro") != std::string_view::npos ||
+                                   name.find("atm") != std::string_view::npos;
+            if (!barometer || says("standard"))
+                continue;
+            const double written = declared_number(decl);
+            const double pascals = written * decl.kind.si_factor;
+            // A site below sea level by more than the Dead Sea is no site; above 3000 m the air
+            // is thinner than any plant is built in (ISA, from memory: 70 kPa there).
+            if (!(pascals >= 0.69 * standard_atmosphere && pascals <= 0.99 * standard_atmosphere))
+                continue;
+            site_barometer_ = {name, pascals};
+            return &site_barometer_;
+        }
+        return nullptr;
+    }
+
+    // The value a declaration gives, after its `=` or in its description beside its unit
+    // ("..., 96.2 kPa"); NaN where it gives none.
+    double declared_number(const syntax::declaration& decl) const {
+        constexpr double none = std::numeric_limits<double>::quiet_NaN();
+        if (decl.value.end > decl.value.begin)
+            return std::strtod(std::string(text(decl.value)).c_str(), nullptr);
+        const std::string_view description = text(decl.description);
+        const std::string_view unit = text(decl.spec);
+        if (unit.empty())
+            return none;
+        for (std::size_t at = description.find(unit); at != std::string_view::npos;
+             at = description.find(unit, at + 1)) {
+            std::size_t end = at;
+            while (end > 0 && description[end - 1] == ' ')
+                --end;
+            std::size_t begin = end;
+            while (begin > 0 && (std::isdigit(static_cast<unsigned char>(description[begin - 1])) ||
+                                 description[begin - 1] == '.'))
+                --begin;
+            const bool unit_ends =
+                at + unit.size() == description.size() ||
+                !std::isalnum(static_cast<unsigned char>(description[at + unit.size()]));
+            if (begin < end && unit_ends &&
+                std::isdigit(static_cast<unsigned char>(description[begin])))
+                return std::strtod(std::string(description.substr(begin, end - begin)).c_str(),
+                                   nullptr);
+        }
+        return none;
+    }
+
+    // "p_g + 101.325" in a file that declares the site's barometer at 96.2 kPa: the gauge
+    // reading is made absolute with the sea-level atmosphere, several kPa off at the site.
+    void warn_sea_level_atmosphere_at_site(std::span<const operand> terms, double unit) {
+        for (const auto& t : terms) {
+            if (!is_shift_candidate(t) || t.subtracted)
+                continue;
+            const shift sh = shift_of(t);
+            const double added = sh.si + sh.written * unit;
+            if (std::abs(added / standard_atmosphere - 1.0) > 0.015)
+                continue;
+            const site_barometer* site = declared_site_barometer();
+            if (site == nullptr || std::abs(added / site->pascals - 1.0) <= 0.02)
+                return;
+            const double height =
+                44330.8 * (1.0 - std::pow(site->pascals / standard_atmosphere, 0.190263));
+            diagnostic& d = report(
+                rules::offset_scale,
+                fmt::format("{} is the atmosphere at sea level, but this file declares the "
+                            "site's barometer '{}' ({} kPa, as the standard atmosphere has about "
+                            "{} m up): the absolute pressure comes out {} kPa high",
+                            display_text(file_.nodes[t.node].range), site->name,
+                            format_factor(site->pascals / 1000.0),
+                            static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10),
+                            format_factor(std::round((added - site->pascals) / 100.0) / 10.0)),
+                file_.nodes[t.node].range);
+            d.level = severity::warning;
+            d.notes.push_back({fmt::format("a gauge reading plus the local atmosphere is "
+                                           "absolute: write (... + {})",
+                                           site->name),
+                               {}});
+            return;
+        }
     }
 
     // Whether a symbol's name or description calls it a gauge reading (p_g, "gauge pressure").
