@@ -195,7 +195,7 @@ TEST_CASE("--restate-in accepts a set that takes force as a base: ft, lbf, s") {
 TEST_CASE("normal and standard cubic metres are units, and a file may say so again") {
     const auto clean = plumb::check_text(
         "g.plumb", "measure Nm3 = m^3 \"normal cubic metre\"\nV_n : Nm3\nQ_n : Nm3/h\n"
-                   "Q_s : Sm3/d\nt : h\n@a V_n = Q_n*t\n@b Q_s = Q_n*24\n");
+                   "Q_s : Nm3/d\nt : h\n@a V_n = Q_n*t\n@b Q_s = Q_n*24\n");
     CHECK(clean.diagnostics.empty());
     const auto resized =
         plumb::check_text("g.plumb", "measure Nm3 = 1.1 m^3\nV_n : Nm3\n@a V_n = V_n\n");

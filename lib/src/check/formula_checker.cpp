@@ -140,6 +140,9 @@ constexpr std::array<pressure_unit, 7> pressure_units{{
     {"inHg", 3386.388640341},
 }};
 constexpr double standard_atmosphere = 101325.0;
+// How far two reference temperatures may differ and still count as one: 15 °C against 60 °F,
+// and the gas trade's 14.73 psia beside 14.696, are 0.2 % apart (from memory).
+constexpr double reference_temperature_slack = 0.003;
 
 // A number the trades write in place of a conversion (8.34, water's weight per gallon): where
 // the units agree without it, it is as much a factor not needed as a conversion would be
@@ -660,8 +663,13 @@ class checker {
         const std::uint8_t marks = symbols_.unit_marks();
         if ((marks & counts_revolutions) != 0 && is_rotating_power_or_torque(sides[0].type.dim))
             report_revolution_without_two_pi(f);
-        else if ((marks & at_reference_conditions) != 0 && is_gas_volume_or_flow(sides[0].type.dim))
+        else if ((marks & at_reference_conditions) != 0 &&
+                 is_gas_volume_or_flow(sides[0].type.dim)) {
+            const std::size_t findings_before = out_.size();
             report_actual_volume_as_normal(sides);
+            if (out_.size() == findings_before)
+                report_reference_temperatures_left_out(sides);
+        }
         if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
             report_apparent_as_real_power(sides);
     }
@@ -740,6 +748,141 @@ class checker {
             }
         }
         return found;
+    }
+
+    // The reference temperature of a gas volume unit written in `unit` (Nm3: 0 °C, DIN 1343;
+    // Sm3: 15 °C, ISO 13443; scf: 60 °F, the US standard cubic foot; all at 101.325 kPa, from
+    // memory), with +1 where it stands above a slash and -1 below; empty where it names none,
+    // or two.
+    struct reference_volume {
+        double kelvins = 0.0;
+        int power = 0;
+        std::string_view name; // as the message prints the conditions
+        double numbers = 1.0;  // the product's numbers, multiplied out
+        double rounding = 0.0; // their relative rounding, summed
+    };
+    static std::optional<reference_volume> reference_volume_in(std::string_view unit) {
+        struct spelled_reference {
+            std::string_view spelling;
+            double kelvins;
+            std::string_view name;
+        };
+        static constexpr std::array<spelled_reference, 6> spellings{{
+            {"Nm3", 273.15, "0 \u00B0C"},
+            {"Nm\u00B3", 273.15, "0 \u00B0C"},
+            {"Sm3", 288.15, "15 \u00B0C"},
+            {"Sm\u00B3", 288.15, "15 \u00B0C"},
+            {"scf", 288.15 + 5.0 / 9.0 * (60.0 - 59.0), "60 \u00B0F"},
+            {"SCF", 288.15 + 5.0 / 9.0 * (60.0 - 59.0), "60 \u00B0F"},
+        }};
+        std::optional<reference_volume> found;
+        for (const auto& r : spellings) {
+            const std::size_t at = unit.find(r.spelling);
+            if (at == std::string_view::npos)
+                continue;
+            if (found && found->kelvins != r.kelvins)
+                return std::nullopt;
+            const std::size_t slash = unit.find('/');
+            found = reference_volume{
+                r.kelvins, slash != std::string_view::npos && slash < at ? -1 : 1, r.name};
+        }
+        return found;
+    }
+
+    // A product of symbols and numbers whose gas volumes at reference conditions all share one
+    // reference temperature: that temperature, and the net power the volumes stand in.
+    std::optional<reference_volume> reference_volume_of(std::uint32_t k) const {
+        std::optional<reference_volume> found;
+        double numbers = 1.0;
+        double rounding = 0.0;
+        std::vector<std::pair<std::uint32_t, int>> pending{{k, 1}};
+        while (!pending.empty()) {
+            const auto [at, sign] = pending.back();
+            pending.pop_back();
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
+                pending.emplace_back(n.lhs, sign);
+                pending.emplace_back(n.rhs, n.kind == expr_kind::divide ? -sign : sign);
+            } else if (n.kind == expr_kind::group) {
+                pending.emplace_back(n.lhs, sign);
+            } else if (n.kind == expr_kind::symbol) {
+                const symbol_entry* e = symbols_.find(text(n.range));
+                if (e == nullptr || (unit_marks_of(e->unit_text) & at_reference_conditions) == 0)
+                    continue;
+                const std::optional<reference_volume> r = reference_volume_in(e->unit_text);
+                if (!r || (found && found->kelvins != r->kelvins))
+                    return std::nullopt;
+                const int power = (found ? found->power : 0) + sign * r->power;
+                found = *r;
+                found->power = power;
+            } else if (n.kind == expr_kind::number) {
+                const scale_literal& l = read_number(text(n.range)).literal;
+                if (!(l.value > 0.0))
+                    return std::nullopt;
+                numbers *= sign > 0 ? l.value : 1.0 / l.value;
+                rounding += l.tolerance;
+            } else {
+                return std::nullopt;
+            }
+        }
+        if (!found || found->power == 0)
+            return std::nullopt;
+        found->numbers = numbers;
+        found->rounding = rounding;
+        return found;
+    }
+
+    // "V_scf = 35.31*V_Nm3": the two sides agree as volumes, but a normal cubic metre is gas
+    // at 0 °C and a standard cubic foot at 60 °F: the same gas fills 5.7 % more at 60 °F, which
+    // a volume factor alone leaves out (1 Nm³ = 37.33 scf). Where the reference temperatures
+    // differ by less than the base pressures' spread (15 °C and 60 °F: 0.2 %), nothing is said.
+    [[gnu::noinline]] void report_reference_temperatures_left_out(std::span<const operand> sides) {
+        const std::optional<reference_volume> a = reference_volume_of(sides[0].node);
+        const std::optional<reference_volume> b = reference_volume_of(sides[1].node);
+        if (!a || !b || a->power != b->power || std::abs(a->power) != 1 ||
+            std::abs(a->kelvins / b->kelvins - 1.0) <= reference_temperature_slack)
+            return;
+        // The sides' values in SI per number written, every number counted: equal as volumes
+        // is the slip; equal as amounts of gas (V_n = V_s*273.15/288.15) is the conversion.
+        const double as_volumes =
+            (sides[0].type.scale / a->numbers) / (sides[1].type.scale / b->numbers);
+        const double rounding = a->rounding + b->rounding + 1e-9;
+        if (!(std::abs(as_volumes - 1.0) <= rounding))
+            return;
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("the sides agree as volumes, but {} is gas at {} and {} at {}: a volume "
+                        "factor alone leaves out the reference temperatures, {} %",
+                        quote(sides[0].node), a->name, quote(sides[1].node), b->name,
+                        format_factor(std::round((std::max(a->kelvins, b->kelvins) /
+                                                      std::min(a->kelvins, b->kelvins) -
+                                                  1.0) *
+                                                 1000.0) /
+                                      10.0)),
+            file_.nodes[sides[1].node].range);
+        d.level = severity::warning;
+        d.notes.push_back({"at one pressure, a gas volume at reference conditions scales with its "
+                           "reference temperature: 1 Nm³ (0 °C) = 1.0549 Sm³ (15 °C) = 37.33 scf "
+                           "(60 °F), all at 101.325 kPa",
+                           {}});
+    }
+
+    // Whether two operands that disagree as volumes agree as amounts of gas, each volume at
+    // its reference temperature, within the rounding of their numbers.
+    bool reference_temperatures_reconcile(std::uint32_t odd_node, std::uint32_t reference_node,
+                                          const scaled_operand& odd,
+                                          const scaled_operand& reference) const {
+        const std::optional<reference_volume> a = reference_volume_of(odd_node);
+        const std::optional<reference_volume> b = reference_volume_of(reference_node);
+        if (!a || !b || a->power != b->power || a->kelvins == b->kelvins)
+            return false;
+        const double rounding = reference_temperature_slack + a->rounding + b->rounding;
+        // Each side's SI value per number written, every number counted. A volume at T_ref
+        // holds 1/T_ref of gas per unit: the sides agree as amounts where the ratio of their
+        // volume scales is the reference temperatures' ratio.
+        const double ratio = (reference.scale / b->numbers) / (odd.scale / a->numbers);
+        const double wanted = std::pow(b->kelvins / a->kelvins, a->power);
+        return std::abs(ratio / wanted - 1.0) <= rounding;
     }
 
     // "Q_n = Q_act" with Q_n in Nm3/h and Q_act in m³/h: a normal or standard volume is the
@@ -3038,6 +3181,14 @@ class checker {
         if (clean) {
             ratio = *clean;
             exact_ratio.reset();
+        }
+        // "V_scf = 37.3*V_Nm3": the factor holds the reference temperatures beside the volume
+        // factor (35.31 × 288.7/273.15), which is the conversion between the two.
+        if ((symbols_.unit_marks() & at_reference_conditions) != 0 &&
+            reference_temperatures_reconcile(ops[index[r.odd]].node, ops[index[r.reference]].node,
+                                             parts[r.odd], parts[r.reference])) {
+            unit = parts[r.reference].scale;
+            return true;
         }
         // Q = C·i·A in cfs from in/h and acres, the US rational method: 1 acre·in/h is
         // 43560/43200 = 1.0083 cfs, which the method leaves out by convention (common practice).
