@@ -366,6 +366,28 @@ TEST_CASE("a revolution's 2π between power, torque and speed") {
     }
 }
 
+// The same 2π where a speed in revolutions becomes an angular speed in rad/s, ω = 2π·n/60
+// from rpm, and in a flywheel's kinetic energy E = ½·I·ω² (Shigley's Mechanical Engineering
+// Design, 10th ed., 16-12; from memory): ω = n/60 is 2π low, the energy (2π)² low. The
+// folded 2π/60 = 0.1047 and 60/2π = 9.549 (common practice) pass.
+TEST_CASE("a revolution's 2π between revolutions and radians, and in a flywheel's energy") {
+    const std::string decl = "ω : rad/s\nn : rpm\nI : kg*m^2\nE : J\nE_k : kJ\nP : kW\n"
+                             "T : N*m\n";
+    for (const char* formula :
+         {"ω = 2*pi*n/60", "ω = 0.1047*n", "n = 9.549*ω", "n = 60*ω/(2*pi)",
+          "E = 0.5*I*(2*pi*n/60)^2", "E_k = 0.5*I*ω^2/1000", "P = T*ω/1000"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 0);
+    }
+    for (const char* formula : {"ω = n/60", "E = 0.5*I*(n/60)^2", "n = 60*ω"}) {
+        CAPTURE(formula);
+        const auto found = run(decl + formula + "\n");
+        CHECK(problems_in(found) == 1);
+        CHECK(plumb::test::says(plumb::test::first_under(found, plumb::rules::unit_scale),
+                                "has no 2π"));
+    }
+}
+
 // The US rational method Q = C·i·A gives cfs from in/h and acres, leaving out 1 acre·in/h =
 // 43560 ft² × (1/12 ft)/3600 s = 1.00833 cfs (NIST SP 811 (2008), B.8, acre and inch; the
 // convention is common practice): a note, not a warning. In mm/h the units are 100 times or

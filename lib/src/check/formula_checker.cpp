@@ -81,6 +81,8 @@ constexpr compact_dimension volume_flow_dim = compact_dimension::whole({0, 3, -1
 constexpr compact_dimension volume_dim = compact_dimension::whole({0, 3, 0, 0, 0, 0, 0});
 constexpr compact_dimension energy_dim = compact_dimension::whole({1, 2, -2, 0, 0, 0, 0});
 constexpr compact_dimension power_dim = compact_dimension::whole({1, 2, -3, 0, 0, 0, 0});
+constexpr compact_dimension frequency_dim = compact_dimension::whole({0, 0, -1, 0, 0, 0, 0});
+constexpr compact_dimension moment_of_inertia_dim = compact_dimension::whole({1, 2, 0, 0, 0, 0, 0});
 constexpr const compact_dimension& volume_flow_dimension() {
     return volume_flow_dim;
 }
@@ -661,8 +663,9 @@ class checker {
         if (sides.size() != 2 || !sides[0].type.known)
             return;
         const std::uint8_t marks = symbols_.unit_marks();
-        if ((marks & counts_revolutions) != 0 && is_rotating_power_or_torque(sides[0].type.dim))
-            report_revolution_without_two_pi(f);
+        if ((marks & counts_revolutions) != 0 &&
+            (is_rotating_power_or_torque(sides[0].type.dim) || sides[0].type.dim == frequency_dim))
+            report_revolution_without_two_pi(f, sides[0].type.dim);
         else if ((marks & at_reference_conditions) != 0 &&
                  is_gas_volume_or_flow(sides[0].type.dim)) {
             const std::size_t findings_before = out_.size();
@@ -936,14 +939,22 @@ class checker {
     // the units agree without the 2π radians of a revolution that P = 2π·n·M needs (ω = 2π·n),
     // and the torque comes out 2π times too large. Asked only of an equation that relates one
     // torque, one power and one speed in revolutions, with no π or 2π written in it.
-    [[gnu::noinline]] void report_revolution_without_two_pi(const syntax::formula& f) {
+    // The same holds where a speed in revolutions meets one in radians ("ω = n/60" with ω in
+    // rad/s) or a moment of inertia in a kinetic energy ("E = 0.5*I*(n/60)^2").
+    [[gnu::noinline]] void report_revolution_without_two_pi(const syntax::formula& f,
+                                                            const compact_dimension& sides_dim) {
         const symbol_entry* torque = nullptr;
         const symbol_entry* speed = nullptr;
+        const symbol_entry* partner = nullptr; // an angular speed in radians, or an inertia
         std::string_view torque_name;
         std::string_view speed_name;
+        std::string_view partner_name;
         int torques = 0;
         int speeds = 0;
         int powers = 0;
+        int energies = 0; // in an energy unit (J, kWh), which no torque is written in
+        int angular_speeds = 0;
+        int inertias = 0;
         std::vector<std::uint32_t> pending;
         for (std::uint32_t i = 0; i < f.side_count; ++i)
             pending.push_back(file_.sides[f.first_side + i].root);
@@ -955,10 +966,12 @@ class checker {
             case expr_kind::pi:
                 return;
             case expr_kind::number: {
-                // 2π, π or their inverses written as numbers (6.283, 3.1416, 0.159).
+                // 2π, π or their inverses written as numbers (6.283, 3.1416, 0.159), and with a
+                // minute folded in (2π/60 = 0.1047 rad/s per rpm, 60/2π = 9.549).
                 const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
-                for (const double c : {2.0 * std::numbers::pi, std::numbers::pi,
-                                       0.5 / std::numbers::pi, 1.0 / std::numbers::pi})
+                for (const double c :
+                     {2.0 * std::numbers::pi, std::numbers::pi, 0.5 / std::numbers::pi,
+                      1.0 / std::numbers::pi, std::numbers::pi / 30.0, 30.0 / std::numbers::pi})
                     if (std::abs(v / c - 1.0) < 0.003)
                         return;
                 break;
@@ -973,14 +986,30 @@ class checker {
                     speed = e;
                     speed_name = name;
                     ++speeds;
+                } else if (*e->compact_dim == frequency_dim &&
+                           unit.find("rad") != std::string_view::npos) {
+                    partner = e;
+                    partner_name = name;
+                    ++angular_speeds;
+                } else if (*e->compact_dim == moment_of_inertia_dim) {
+                    if (angular_speeds == 0) {
+                        partner = e;
+                        partner_name = name;
+                    }
+                    ++inertias;
                 } else if (*e->compact_dim == energy_dim) {
+                    bool energy_unit_named = unit.empty();
                     for (const std::string_view energy_unit :
                          {"J", "Wh", "Btu", "BTU", "cal", "erg", "eV", "therm"})
-                        if (unit.find(energy_unit) != std::string_view::npos || unit.empty())
-                            return;
-                    torque = e;
-                    torque_name = name;
-                    ++torques;
+                        energy_unit_named =
+                            energy_unit_named || unit.find(energy_unit) != std::string_view::npos;
+                    if (energy_unit_named) {
+                        ++energies;
+                    } else {
+                        torque = e;
+                        torque_name = name;
+                        ++torques;
+                    }
                 } else if (*e->compact_dim == power_dim) {
                     ++powers;
                 }
@@ -1006,7 +1035,14 @@ class checker {
                 return;
             }
         }
-        if (torques != 1 || speeds != 1 || powers != 1 || torque == nullptr || speed == nullptr)
+        if (speeds >= 1 && speed != nullptr && partner != nullptr &&
+            (angular_speeds >= 1 || (inertias >= 1 && is_rotating_power_or_torque(sides_dim)))) {
+            report_revolutions_beside_radians(f, *speed, speed_name, *partner, partner_name,
+                                              angular_speeds >= 1);
+            return;
+        }
+        if (torques != 1 || speeds != 1 || powers != 1 || energies != 0 || torque == nullptr ||
+            speed == nullptr)
             return;
         diagnostic& d = report(
             rules::unit_scale,
@@ -1020,6 +1056,28 @@ class checker {
         d.notes.push_back({"revolutions count as cycles: write 2*pi*n for the angular speed "
                            "(M = 60000*P/(2*pi*n) in kN·m from kW and rpm is M = 9549*P/n), or "
                            "declare the speed in rad/s",
+                           {}});
+    }
+
+    void report_revolutions_beside_radians(const syntax::formula& f, const symbol_entry& speed,
+                                           std::string_view speed_name, const symbol_entry& partner,
+                                           std::string_view partner_name, bool angular) {
+        const std::string partner_is =
+            angular ? fmt::format("'{}' an angular speed in radians ({})", partner_name,
+                                  partner.unit_text)
+                    : fmt::format("'{}' a moment of inertia ({}), whose kinetic energy "
+                                  "\u00BDI\u03C9\u00B2 takes the speed in radians",
+                                  partner_name, partner.unit_text);
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("'{}' is a speed in revolutions ({}) and {}: a revolution is 2\u03C0 "
+                        "radians, and this formula has no 2\u03C0, so it is off by {}",
+                        speed_name, speed.unit_text, partner_is,
+                        angular ? "6.28319" : "6.28319 for each power of the speed"),
+            file_.nodes[file_.sides[f.first_side].root].range);
+        d.level = severity::warning;
+        d.notes.push_back({"revolutions count as cycles: the angular speed is \u03C9 = 2*pi*n "
+                           "(2*pi*n/60 in rad/s from rpm), or declare the speed in rad/s",
                            {}});
     }
 
