@@ -198,6 +198,22 @@ TEST_CASE("empirical fits on the °C scale") {
                plumb::rules::offset_scale);
 }
 
+// ACI 347R-14's lateral pressure on wall formwork, p = C_w·C_c·(7.2 kPa + 785·R/(T + 17.8))
+// with T the concrete's °C reading, and in inch-pound units 150 psf + 9000·R/T with T in °F
+// (from memory; 17.8 is the °F scale's zero in °C). A coefficient marked `?` over the reading
+// declares the fit empirical, made on that reading's scale: it passes, with the coefficient's
+// note. Without the `?`, or with the reading multiplied, it stays an error.
+TEST_CASE("an empirical coefficient over a temperature reading") {
+    const std::string decl = "t_c : °C\nt_F : °F\nR_r : m/h\nR_ft : ft/h\np_max : kPa\n"
+                             "p_psf : psf\n";
+    passes(decl,
+           {"p_max = 7.2 {kPa} + 785?*R_r/(t_c + 17.8 {K})", "p_psf = 150 {psf} + 9000?*R_ft/t_F"});
+    fails_with(
+        decl,
+        {"p_psf = 150 {psf} + 9000 {psf*°F*h/ft}*R_ft/t_F", "p_psf = 150 {psf} + 9000?*R_ft*t_F"},
+        plumb::rules::offset_scale);
+}
+
 // The infinite-slope factor of safety with the cohesion from an old report in psf:
 // FS = (c' + (γ·z·cos²β - u)·tan φ')/(γ·z·sin β·cos β) (common practice), with 1 lbf/ft² =
 // 47.88026 Pa (NIST SP 811 (2008), B.8) rounded to 0.04788 kPa. A sum that agrees through a

@@ -424,7 +424,7 @@ TEST_CASE("prefixes never attach to units that refuse them") {
 }
 
 TEST_CASE("unknown symbols resolve to nothing and suggest near ones") {
-    for (std::string_view symbol : {"", "k", "Pas", "psf", "furlong", "u", "\u03BC", "da"}) {
+    for (std::string_view symbol : {"", "k", "Pas", "psq", "furlong", "u", "\u03BC", "da"}) {
         CAPTURE(std::string(symbol));
         CHECK_FALSE(table().resolve(symbol).has_value());
     }
@@ -432,8 +432,11 @@ TEST_CASE("unknown symbols resolve to nothing and suggest near ones") {
     REQUIRE_FALSE(pas.empty());
     CHECK(pas.front() == "Pa");
 
-    const auto psf = table().nearest("psf");
-    CHECK(std::find(psf.begin(), psf.end(), "psi") != psf.end());
+    const auto psq = table().nearest("psq");
+    CHECK(std::find(psq.begin(), psq.end(), "psi") != psq.end());
+    // US floor, wall and soil loads (NIST SP 811 (2008), B.8: 1 lbf/ft² = 47.88026 Pa).
+    CHECK(table().resolve("psf")->unit->factor == doctest::Approx(47.88026).epsilon(1e-7));
+    CHECK(table().resolve("ksf")->unit->factor == doctest::Approx(47880.26).epsilon(1e-7));
 
     // A change of case is the cheapest edit.
     const auto pa = table().nearest("pa");

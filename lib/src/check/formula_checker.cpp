@@ -4611,6 +4611,28 @@ class checker {
         return readings == 1;
     }
 
+    // "150 {psf} + 9000?*R/t_F" (ACI 347's wall pressure, T the concrete's °F reading): a
+    // coefficient marked `?` over a temperature reading is a fit made on that reading's scale,
+    // which the `?` declares empirical; its note says it holds only in the declared units.
+    bool empirical_over_reading(std::uint32_t numerator, const typed_term& below) const {
+        if (!below.known || !below.point || !(below.dim == temperature_dimension()))
+            return false;
+        std::vector<std::uint32_t> pending{numerator};
+        while (!pending.empty()) {
+            const syntax::expr_node& n = file_.nodes[pending.back()];
+            pending.pop_back();
+            if (n.kind == expr_kind::inferred)
+                return true;
+            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+            } else if (n.kind == expr_kind::group) {
+                pending.push_back(n.lhs);
+            }
+        }
+        return false;
+    }
+
     static void read_as_rise(typed_term& t) {
         t.offset = nullptr;
         t.point = false;
@@ -4782,7 +4804,8 @@ class checker {
                 read_as_rise(result);
             }
             if (divided && factor->offset != nullptr &&
-                fitted_on_scale(op.lhs, op.rhs, result, *factor)) {
+                (fitted_on_scale(op.lhs, op.rhs, result, *factor) ||
+                 empirical_over_reading(op.lhs, *factor))) {
                 read_as_rise(result);
                 if (factor != reinterpret_cast<const typed_term*>(evaluated))
                     factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);

@@ -323,6 +323,13 @@ constexpr unit_definition rows[] = {
     absolute("ksi", "kip per square inch", pressure, 8896443230521.0 / 1290320.0,
              "8896443230521/1290320", prefixes::refused,
              "NIST SP 811 (2008), B.8 prints 6.894757E+06; exact as 1000 lbf/in²"),
+    // Loads on floors, walls and soil in US practice: pounds and kips per square foot.
+    absolute("psf", "pound-force per square foot", pressure, 8896443230521.0 / 185806080000.0,
+             "8896443230521/185806080000", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 4.788026E+01; exact as lbf/ft²"),
+    absolute("ksf", "kip per square foot", pressure, 8896443230521.0 / 185806080.0,
+             "8896443230521/185806080", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 4.788026E+04; exact as 1000 lbf/ft²"),
     absolute("atm", "standard atmosphere", pressure, standard_atmosphere, "101325",
              prefixes::refused, nist),
     // The bar takes prefixes because the millibar is everyday meteorology.
