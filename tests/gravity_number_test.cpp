@@ -214,6 +214,20 @@ TEST_CASE("water's specific weight as a number: pump power and pressure head pas
     }
 }
 
+// A pump's total head in feet from a gauge reading in psi (2.31 ft of water per psi, common
+// practice) plus static heights surveyed in metres and converted (1 ft = 0.3048 m exactly,
+// NIST SP 811 (2008), B.8): no term of the sum is plainly in feet, so 2.31 is read against
+// the equation's other side. Unconverted metres, or a head in metres, stay errors.
+TEST_CASE("water's specific weight as a number beside heights converted from metres") {
+    const std::string decl = "H_ft : ft\nH_m : m\np : psi\nz_s, h_m : m\n";
+    passes_with_one_note(decl,
+                         {"H_ft = 2.31*p + (z_s + h_m)/0.3048", "H_ft = 2.31*p + 3.281*z_s",
+                          "H_ft = 2.31*p + z_s/0.3048", "H_m = 0.703*p + z_s"},
+                         plumb::rules::gravity_number);
+    CHECK(problems_in(run(decl + "H_ft = 2.31*p + z_s\n")) == 1);
+    CHECK(problems_in(run(decl + "H_m = 2.31*p + z_s\n")) == 1);
+}
+
 // A gauge pressure over a specific weight is a head above the level where the pressure is
 // atmospheric, over an area the net force where the atmosphere acts on the other face, and the
 // pressure of a column, ρ g h, is what a gauge at its foot reads (common practice; e.g. Çengel

@@ -1490,7 +1490,7 @@ class checker {
             for (std::size_t i = 0; i < count; ++i)
                 if (terms[i].type.known && !terms[i].type.zero && !(terms[i].type.dim == pressure))
                     towards_pressure.odd.push_back(i);
-            read_gravity_numbers(base, towards_pressure, unit);
+            read_gravity_numbers(base, towards_pressure, syntax::no_index, unit);
             a = find_agreement(terms);
         }
         if (!a.odd.empty() || !a.reference || !(*a.reference == pressure)) {
@@ -1519,8 +1519,9 @@ class checker {
     // As read_gravity_numbers, and where that fails because the number stands in the terms that
     // make the majority ("0.433*h_s + p_t": one term each way, the first taken as reference),
     // read them against the dimension of the first plain term that differs instead.
-    bool read_gravity_numbers_either_way(std::size_t base, const agreement& a) {
-        if (read_gravity_numbers(base, a))
+    bool read_gravity_numbers_either_way(std::size_t base, const agreement& a,
+                                         std::uint32_t sum_node = syntax::no_index) {
+        if (read_gravity_numbers(base, a, sum_node))
             return true;
         const std::size_t count = operands_.size() - base;
         agreement flipped;
@@ -1531,6 +1532,10 @@ class checker {
                 break;
             }
         }
+        // Or the dimension of the equation's other side, where the odd terms all convert.
+        if (!flipped.reference && sum_node != syntax::no_index && sum_node == side_hint_node_ &&
+            side_hint_ != nullptr && side_hint_->known && !(side_hint_->dim == *a.reference))
+            flipped.reference = side_hint_->dim;
         if (!flipped.reference)
             return false;
         for (std::size_t i = 0; i < count; ++i) {
@@ -1538,13 +1543,14 @@ class checker {
             if (t.known && !t.zero && !(t.dim == *flipped.reference))
                 flipped.odd.push_back(i);
         }
-        return read_gravity_numbers(base, flipped);
+        return read_gravity_numbers(base, flipped, sum_node);
     }
 
     // Where the odd operands lack exactly an acceleration (or have one too many) and each holds
     // g_n written as a number in its own units, the number is read as g_n: the operand takes the
     // reference's dimension and the scale g_n gives it, and a note says which number was read so.
     bool read_gravity_numbers(std::size_t base, const agreement& a,
+                              std::uint32_t sum_node = syntax::no_index,
                               double reference_scale = std::numeric_limits<double>::quiet_NaN()) {
         if (!a.reference)
             return false;
@@ -1560,6 +1566,12 @@ class checker {
                 break;
             }
         }
+        // "H_ft = 2.31*p + z_m/0.3048": no term of the sum is plainly in the head's unit, but
+        // the equation's other side is.
+        if (!std::isfinite(reference_scale) && sum_node != syntax::no_index &&
+            sum_node == side_hint_node_ && side_hint_ != nullptr && side_hint_->known &&
+            side_hint_->dim == *a.reference && side_hint_->literal_count == 0)
+            reference_scale = side_hint_->scale;
         if (!std::isfinite(reference_scale))
             return false;
         struct found {
@@ -1914,7 +1926,8 @@ class checker {
         const scratch_region region(operands_, base, types_, types_base);
         const std::span<const operand> terms = region.view();
         agreement a = find_agreement(terms, prefer_dimensionless);
-        if (!a.odd.empty() && !prefer_dimensionless && read_gravity_numbers_either_way(base, a))
+        if (!a.odd.empty() && !prefer_dimensionless &&
+            read_gravity_numbers_either_way(base, a, index))
             a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty() && !prefer_dimensionless && read_column_and_atmosphere(base, index))
             a = find_agreement(terms, prefer_dimensionless);
