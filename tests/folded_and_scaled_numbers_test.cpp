@@ -366,3 +366,15 @@ TEST_CASE("sides apart by exactly a time or a density, with a bare number the tr
     REQUIRE(count_of(other, plumb::rules::side_mismatch) == 1);
     CHECK_FALSE(plumb::test::says(first_under(other, plumb::rules::side_mismatch), "{h}"));
 }
+
+// ISO 281's basic rating life L_10 = (C/P)^p counts millions of revolutions, and engineers
+// declare it dimensionless with a description that says so (common practice): 1e6*L_10 is its
+// count of revolutions and passes, where the same factor beside a symbol described otherwise,
+// or dividing, is still not needed.
+TEST_CASE("a symbol described as counting millions, times 1e6") {
+    const std::string decl = "L_10 : 1 \"basic rating life, millions of revolutions\"\n"
+                             "L_x : 1 \"basic rating life\"\nL_rev : rev\nL_h : h\nn : rpm\n";
+    passes(decl, {"L_rev = 1e6*L_10", "L_h = 1e6*L_10/(60*n)", "L_h = L_10*1e6/n/60"});
+    fails_with(decl, {"L_rev = 1e6*L_x", "L_rev = L_10/1e6", "L_h = 1e6*L_x/(60*n)"},
+               plumb::rules::unit_scale);
+}

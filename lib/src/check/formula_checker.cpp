@@ -3682,7 +3682,8 @@ class checker {
                 continue;
             for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
                 const scale_literal& l = parts[i].literals[k];
-                if (!looks_like_conversion(l, !dimensionless))
+                if (!looks_like_conversion(l, !dimensionless) ||
+                    (l.exponent == 1.0 && l.value == counted_multiple(ops[index[i]].node)))
                     continue;
                 std::array<scale_literal, most_numbers> without{};
                 std::copy(parts[i].literals.begin(), parts[i].literals.end(), without.begin());
@@ -3717,10 +3718,41 @@ class checker {
                     if (first == nullptr)
                         first = &l;
                 }
-            if (first != nullptr && std::abs(net - 1.0) > 1e-9)
+            if (first != nullptr && std::abs(net - 1.0) > 1e-9 &&
+                std::abs(net / counted_multiple(ops[index[i]].node) - 1.0) > 1e-9)
                 return report_unneeded(ops[index[i]], *first);
         }
         return false;
+    }
+
+    // "L_10 : 1 "basic rating life, millions of revolutions"" (ISO 281): a symbol whose
+    // description says it counts in thousands, millions or billions, multiplied in the term,
+    // so that 1e6*L_10 is its count; 1 where none does.
+    double counted_multiple(std::uint32_t k) const {
+        std::vector<std::uint32_t> pending{k};
+        while (!pending.empty()) {
+            const syntax::expr_node& n = file_.nodes[pending.back()];
+            pending.pop_back();
+            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
+                pending.push_back(n.lhs);
+                if (n.kind == expr_kind::multiply)
+                    pending.push_back(n.rhs);
+            } else if (n.kind == expr_kind::group) {
+                pending.push_back(n.lhs);
+            } else if (n.kind == expr_kind::symbol) {
+                const symbol_entry* e = symbols_.find(text(n.range));
+                if (e == nullptr)
+                    continue;
+                const std::string_view d = e->description;
+                if (d.find("millions") != std::string_view::npos)
+                    return 1e6;
+                if (d.find("thousands") != std::string_view::npos)
+                    return 1e3;
+                if (d.find("billions") != std::string_view::npos)
+                    return 1e9;
+            }
+        }
+        return 1.0;
     }
 
     // t = V/Q*24 with t in d and Q in m³/d: a ratio of time units (24 h/d, 60, 1440, 8760, 3.6)
