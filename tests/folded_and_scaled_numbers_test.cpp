@@ -378,3 +378,41 @@ TEST_CASE("a symbol described as counting millions, times 1e6") {
     fails_with(decl, {"L_rev = 1e6*L_x", "L_rev = L_10/1e6", "L_h = 1e6*L_x/(60*n)"},
                plumb::rules::unit_scale);
 }
+
+// A conversion's power of ten folded with the formula's own coefficient into one number:
+// τ = 16·T/(π·d³) (a solid shaft's torsional stress, common practice) in MPa from kN·m and mm
+// needs 10⁶ (NIST SP 811 (2008), B.8: 1 kN·m/mm³ = 10¹² Pa), written 16e6, 1.6e7 or
+// 5.093e6 (16/π); a pump's torque T = V_g·Δp/(20π) in N·m from cm³ and bar (1 cm³·bar =
+// 0.1 J, from memory) folds 10 beside 2π. Each passes with a note saying how it was read; the
+// coefficient alone, or a number that holds no such power (16000), is still a warning, and
+// 0.5 or 1000 are never read as 50 × 0.01 or 10 × 100.
+TEST_CASE("a coefficient times a conversion's power of ten, in one number") {
+    const std::string decl = "τ : MPa\nQ : kN*m\nd : mm\nT : N*m\nV_g : cm^3\nΔp : bar\n"
+                             "P : kW\nρ : kg/m^3\nA : m^2\nv : m/s\nC_p : %\n";
+    for (const char* formula : {"τ = 16e6*Q/(pi*d^3)", "τ = 1.6e7*Q/(pi*d^3)", "τ = 5.093e6*Q/d^3",
+                                "T = V_g*Δp/(20*pi)"}) {
+        CAPTURE(formula);
+        const auto found = run(decl, formula);
+        CHECK(problems_in(found) == 0);
+        CHECK(count_of(found, plumb::rules::trade_constant) == 1);
+    }
+    fails_with(decl,
+               {"τ = 16*Q/(pi*d^3)", "τ = 16000*Q/(pi*d^3)", "T = V_g*Δp/(2*pi)",
+                "P = 0.5*ρ*A*v^3*C_p/1000"},
+               plumb::rules::unit_scale);
+}
+
+// A circumference's π folded with a unit conversion: the belt maker's V = 0.262·D·n in ft/min
+// from inches and rpm (π/12, common practice) and v = 0.05236·D·n in m/s from m and rpm
+// (π/60). Without the conversion (3.14·D·n in ft/min) it is still a warning.
+TEST_CASE("a circumference's π folded into a belt speed's number") {
+    const std::string decl = "V_fpm : ft/min\nD_in : in\nn : rpm\nv : m/s\nD : m\n";
+    for (const char* formula :
+         {"V_fpm = 0.262*D_in*n", "V_fpm = 0.2618*D_in*n", "v = 0.05236*D*n"}) {
+        CAPTURE(formula);
+        const auto found = run(decl, formula);
+        CHECK(problems_in(found) == 0);
+        CHECK(count_of(found, plumb::rules::trade_constant) == 1);
+    }
+    fails_with(decl, {"V_fpm = 3.14*D_in*n", "V_fpm = 0.262*D*n"}, plumb::rules::unit_scale);
+}

@@ -3498,7 +3498,7 @@ class checker {
         bool circle = false;     // a circle's area: read only beside a square (D^2)
     };
     static std::span<const folded_constant> folded_constants() {
-        static const std::array<folded_constant, 8> constants{{
+        static const std::array<folded_constant, 9> constants{{
             {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false, true},
             {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false, true},
             // 9550 = 60000/(2π) in M = 9550*P/n (kW, rpm to N·m), 5252 = 33000/(2π) (hp, rpm
@@ -3512,6 +3512,10 @@ class checker {
             {2.0 * std::numbers::pi, "2\u03C0",
              "the formula's 2\u03C0 (radians per revolution; the Wenner array's \u03C1 = "
              "2\u03C0\u00B7a\u00B7R)",
+             false},
+            // 0.262 = π/12 in the belt maker's V = 0.262*D*n (in and rpm to ft/min), 0.05236 =
+            // π/60 in v = π·D·n/60 (m and rpm to m/s): a circumference's π.
+            {std::numbers::pi, "\u03C0", "a circumference's \u03C0 (v = \u03C0\u00B7D\u00B7n)",
              false},
             {std::numbers::ln10 / (2.0 * std::numbers::pi), "ln 10/(2\u03C0)",
              "the steady well-flow (Thiem) formula's constant, with log10 for ln,", true},
@@ -3592,25 +3596,36 @@ class checker {
                         continue;
                     scale_literal as = l;
                     if (!circle_pass) {
-                        const double power = std::floor(std::log10(l.value) + 1e-12);
-                        const double digit = l.value / std::pow(10.0, power);
-                        if (std::abs(power) < 2 || std::abs(power) > 18 ||
-                            std::abs(digit - std::round(digit)) > 1e-9 || digit < 2.0)
+                        const std::optional<double> found =
+                            folded_power_of_ten(ops, index, i, l, false);
+                        if (!found)
                             continue;
-                        std::int64_t ten = 1;
-                        for (int p = 0; p < std::abs(static_cast<int>(power)); ++p)
-                            ten *= 10;
-                        as.value = std::pow(10.0, power);
-                        as.tolerance = 0.0;
-                        as.power_of_ten = true;
-                        as.power = static_cast<std::int8_t>(power);
-                        as.factor_like = true;
-                        as.table_digits = false;
-                        as.low = power > 0 ? rational(ten) : rational(1, ten);
-                        as.high = as.low;
-                        if (reconciles_with(i, k, as))
-                            return true;
-                        continue;
+                        double power = *found;
+                        // 1.6e7 is 16 × 10⁶ as well as 1.6 × 10⁷: the second reading where the
+                        // first does not reconcile.
+                        if (const std::optional<double> second =
+                                folded_power_of_ten(ops, index, i, l, true);
+                            second && !reconciles_with(i, k, power_of_ten_literal(l, power)))
+                            power = *second;
+                        as = power_of_ten_literal(l, power);
+                        if (!reconciles_with(i, k, as))
+                            continue;
+                        // "16e6*Q/(π*d^3)", "20*PI()": beyond one digit, a note says how the
+                        // number was read, as it may be a coefficient that only looks so.
+                        const std::string_view written = text(file_.nodes[l.node].range);
+                        const double digit = l.value / as.value;
+                        if (digit >= 10.0 || std::abs(power) < 2 ||
+                            std::abs(digit - std::round(digit)) > 1e-9) {
+                            diagnostic& d = report(
+                                rules::trade_constant,
+                                fmt::format("{} is read as {} \u00D7 {}, the {} converting the "
+                                            "units",
+                                            written, format_factor(digit), format_factor(as.value),
+                                            format_factor(as.value)),
+                                file_.nodes[l.node].range);
+                            d.level = severity::note;
+                        }
+                        return true;
                     }
                     // Only numbers written to 3 or more digits, as folded factors are (528
                     // too, where whole numbers must otherwise reach 1000).
@@ -3666,6 +3681,76 @@ class checker {
                         return true;
                     }
                 }
+            }
+        }
+        return false;
+    }
+
+    // The power of ten a number folds beside its coefficient, where it may: one digit times a
+    // power of ten (4e6, 0.004); a whole coefficient to 99 (16e6 in τ = 16e6*T/(π*d^3) from
+    // kN·m and mm to MPa); any coefficient written with that exponent (5.093e6); and ten
+    // beside π (20*PI() in T = V_g*Δp/(20π) from cm³ and bar to N·m, 1 cm³·bar = 0.1 J).
+    static scale_literal power_of_ten_literal(const scale_literal& l, double power) {
+        scale_literal as = l;
+        std::int64_t ten = 1;
+        for (int p = 0; p < std::abs(static_cast<int>(power)); ++p)
+            ten *= 10;
+        as.value = std::pow(10.0, power);
+        as.tolerance = 0.0;
+        as.power_of_ten = true;
+        as.power = static_cast<std::int8_t>(power);
+        as.factor_like = true;
+        as.table_digits = false;
+        as.low = power > 0 ? rational(ten) : rational(1, ten);
+        as.high = as.low;
+        return as;
+    }
+
+    // `second`: the reading one power lower, where the number has one (1.6e7 as 16 × 10⁶).
+    std::optional<double> folded_power_of_ten(std::span<const operand> ops,
+                                              std::span<const std::size_t> index, std::size_t i,
+                                              const scale_literal& l, bool second) const {
+        const std::string_view written = text(file_.nodes[l.node].range);
+        const std::size_t e = written.find_first_of("eE");
+        const double top = std::floor(std::log10(l.value) + 1e-12);
+        bool first_found = false;
+        for (const double power : {top, top - 1.0}) {
+            if (std::abs(power) > 18 || power == 0.0)
+                continue;
+            const double digit = l.value / std::pow(10.0, power);
+            const bool whole = std::abs(digit - std::round(digit)) <= 1e-9 * digit;
+            const bool folds =
+                // (1000 is no 10 × 100: a coefficient of ten would be a power of ten itself.)
+                // Two digits only before a large power (16e6), never in a fraction (0.5 is no
+                // 50 × 0.01).
+                (std::abs(power) >= 2 && whole && digit >= 2.0 &&
+                 (power == top ? digit < 10.0
+                               : power > 0 && digit < 100.0 && std::round(digit) != 10.0)) ||
+                (std::abs(power) >= 2 && power == top && e != std::string_view::npos &&
+                 std::strtol(std::string(written.substr(e + 1)).c_str(), nullptr, 10) == power) ||
+                (power == 1.0 && whole && digit >= 2.0 && digit < 10.0 && power == top &&
+                 holds_pi(ops[index[i]].node));
+            if (!folds)
+                continue;
+            if (!second || first_found)
+                return power;
+            first_found = true;
+        }
+        return std::nullopt;
+    }
+
+    bool holds_pi(std::uint32_t k) const {
+        std::vector<std::uint32_t> pending{k};
+        while (!pending.empty()) {
+            const syntax::expr_node& n = file_.nodes[pending.back()];
+            pending.pop_back();
+            if (n.kind == expr_kind::pi)
+                return true;
+            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+            } else if (n.kind == expr_kind::group || n.kind == expr_kind::negate) {
+                pending.push_back(n.lhs);
             }
         }
         return false;
