@@ -330,3 +330,26 @@ TEST_CASE("a ratio times a reading less a number, and a coefficient beside a con
     fails_with(decl, {"x = 0.55 - 0.55*RH_pct"}, plumb::rules::unit_scale);
     fails_with(decl, {"THI = T_F - (0.55 - 0.55*RH)*T_F"}, plumb::rules::offset_scale);
 }
+
+// Tables count liquid water's enthalpy from 0.01 °C (IAPWS-IF97, from memory) and moist air's
+// from 0 °C (ASHRAE Handbook, Fundamentals, ch. 1: h = 1.006·t + W·(2501 + 1.86·t) kJ/kg with
+// t in °C, from memory), so h = c·t with t the °C reading is how the trades write an enthalpy.
+// Set equal to a symbol named or described as an enthalpy it passes with a note; a heat per kg
+// that is no enthalpy, a °F reading (US tables count from 32 °F) and c·t added to another
+// enthalpy stay errors.
+TEST_CASE("an enthalpy from the 0 °C datum of the tables") {
+    const std::string decl = "h_feed : kJ/kg\nh_a : kJ/kg \"moist air enthalpy\"\nh_1 : kJ/kg\n"
+                             "c_w : kJ/(kg*K)\nt : °C\nt_F : °F\nq : kJ/kg\nW : 1\n"
+                             "c_us : Btu/(lb*°R)\nh_us : Btu/lb\n";
+    for (const char* formula :
+         {"h_feed = c_w*t", "h_feed = t*c_w",
+          "h_a = 1.006 {kJ/(kg*K)}*t + W*(2501 {kJ/kg} + 1.86 {kJ/(kg*K)}*t)"}) {
+        CAPTURE(formula);
+        const auto found = run(decl, formula);
+        CHECK(problems_in(found) == 0);
+        CHECK(count_of(found, plumb::rules::trade_constant) >= 1);
+    }
+    passes(decl, {"h_feed = h_1 + c_w*(t - 20)"});
+    fails_with(decl, {"q = c_w*t", "h_us = c_us*t_F", "h_feed = h_1 + c_w*t"},
+               plumb::rules::offset_scale);
+}

@@ -82,6 +82,7 @@ constexpr compact_dimension volume_dim = compact_dimension::whole({0, 3, 0, 0, 0
 constexpr compact_dimension energy_dim = compact_dimension::whole({1, 2, -2, 0, 0, 0, 0});
 constexpr compact_dimension power_dim = compact_dimension::whole({1, 2, -3, 0, 0, 0, 0});
 constexpr compact_dimension frequency_dim = compact_dimension::whole({0, 0, -1, 0, 0, 0, 0});
+constexpr compact_dimension specific_heat_dim = compact_dimension::whole({0, 2, -2, -1, 0, 0, 0});
 constexpr compact_dimension moment_of_inertia_dim = compact_dimension::whole({1, 2, 0, 0, 0, 0, 0});
 constexpr const compact_dimension& volume_flow_dimension() {
     return volume_flow_dim;
@@ -591,8 +592,12 @@ class checker {
                 side_hint_ = &operands_[base].type; // on the type stack, which never moves
                 side_hint_node_ = s.root;
             }
+            if (i > 0 && names_specific_enthalpy(operands_[base]) &&
+                !holds_specific_energy_symbol(s.root)) [[unlikely]]
+                enthalpy_side_ = s.root;
             operands_.push_back({push_operand_type(s.root, types_base, f.side_count), s.root});
             side_hint_node_ = syntax::no_index;
+            enthalpy_side_ = syntax::no_index;
         }
         const scratch_region region(operands_, base, types_, types_base);
         const std::span<const operand> sides = region.view();
@@ -1340,6 +1345,8 @@ class checker {
     };
     site_barometer site_barometer_;
     bool site_barometer_searched_ = false;
+    // The side set equal to a specific enthalpy (h_f, "enthalpy"): see enthalpy_above_ice_point.
+    std::uint32_t enthalpy_side_ = syntax::no_index;
 
     // Inline: every symbol and call is looked up by its text, and a call here cost more than
     // the view it makes.
@@ -4763,6 +4770,72 @@ class checker {
         return false;
     }
 
+    // "h_2 = h_1 + c_p*t_2": beside another enthalpy, c·t would be a change from it, which a
+    // reading is not; the datum is read only where the side builds the enthalpy from readings.
+    bool holds_specific_energy_symbol(std::uint32_t root) const {
+        std::vector<std::uint32_t> pending{root};
+        while (!pending.empty()) {
+            const syntax::expr_node& n = file_.nodes[pending.back()];
+            pending.pop_back();
+            switch (n.kind) {
+            case expr_kind::symbol:
+                if (const symbol_entry* e = symbols_.find(text(n.range));
+                    e != nullptr && e->compact_dim && *e->compact_dim == velocity_squared_dim)
+                    return true;
+                break;
+            case expr_kind::add:
+            case expr_kind::subtract:
+            case expr_kind::multiply:
+            case expr_kind::divide:
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+                break;
+            case expr_kind::group:
+            case expr_kind::negate:
+                pending.push_back(n.lhs);
+                break;
+            default:
+                break;
+            }
+        }
+        return false;
+    }
+
+    // A side that is one symbol of specific energy named or described as an enthalpy.
+    bool names_specific_enthalpy(const operand& side) const {
+        if (!side.type.known || !(side.type.dim == velocity_squared_dim) ||
+            file_.nodes[side.node].kind != expr_kind::symbol)
+            return false;
+        const std::string_view name = text(file_.nodes[side.node].range);
+        const symbol_entry* e = symbols_.find(name);
+        return (name.starts_with("h_") || name == "h") ||
+               (e != nullptr && e->description.find("enthalpy") != std::string_view::npos);
+    }
+
+    // "h_f = c_w*t" with t in °C, set equal to a specific enthalpy: the steam tables count
+    // liquid water's enthalpy from 0.01 °C (IAPWS-IF97, from memory) and the psychrometric
+    // tables dry air's from 0 °C (ASHRAE Fundamentals, ch. 1, h = 1.006·t), so c·t is the
+    // enthalpy above that datum, as the trades write it. A note says so; °F readings, whose
+    // US tables count from 32 °F, are no such thing.
+    bool enthalpy_above_ice_point(std::uint32_t reading_node, const typed_term& reading,
+                                  const typed_term& by) {
+        if (!reading.known || reading.offset == nullptr || !by.known || by.numeric ||
+            !(reading.dim == temperature_dimension()) ||
+            std::abs(reading.offset->offset - 273.15) > 1e-9 || !(by.dim == specific_heat_dim))
+            return false;
+        diagnostic& d = report(rules::trade_constant,
+                               fmt::format("{} is read as the rise above 0 \u00B0C, the datum of "
+                                           "the steam and psychrometric tables, as the enthalpy "
+                                           "on the other side counts it",
+                                           quote(reading_node)),
+                               file_.nodes[reading_node].range);
+        d.level = severity::note;
+        d.notes.push_back({"write (t - 0 {\u00B0C}) to say so; for a heat balance between two "
+                           "states, the difference of two readings",
+                           {}});
+        return true;
+    }
+
     static void read_as_rise(typed_term& t) {
         t.offset = nullptr;
         t.point = false;
@@ -4932,6 +5005,18 @@ class checker {
                        factor->offset == nullptr && factor->dim.is_dimensionless() &&
                        from_inferred_zero_of_resistance(n) && k == spine_.size()) {
                 read_as_rise(result);
+            }
+            if (!divided && enthalpy_side_ != syntax::no_index &&
+                (factor->offset != nullptr) != (result.offset != nullptr)) [[unlikely]] {
+                if (factor->offset != nullptr &&
+                    enthalpy_above_ice_point(op.rhs, *factor, result)) {
+                    if (factor != reinterpret_cast<const typed_term*>(evaluated))
+                        factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
+                    read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
+                } else if (result.offset != nullptr &&
+                           enthalpy_above_ice_point(offset_node, result, *factor)) {
+                    read_as_rise(result);
+                }
             }
             if (divided && factor->offset != nullptr &&
                 (fitted_on_scale(op.lhs, op.rhs, result, *factor) ||
