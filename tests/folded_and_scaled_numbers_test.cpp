@@ -416,3 +416,15 @@ TEST_CASE("a circumference's π folded into a belt speed's number") {
     }
     fails_with(decl, {"V_fpm = 3.14*D_in*n", "V_fpm = 0.262*D*n"}, plumb::rules::unit_scale);
 }
+
+// A vertical vessel's liquid volume V = (π/4)·D²·h in bbl from feet, written 0.1399·D²·h
+// (π/4 × 0.17811 bbl/ft³, NIST SP 811 (2008), B.8: 1 bbl = 5.6146 ft³), with the height
+// typed in inches: the advice names the missing 12, not 67.375 (12 × 5.6146), which would
+// take the barrel factor out a second time.
+TEST_CASE("advice for a folded factor beside a height in inches names the inches") {
+    const std::string decl = "V_L : bbl\nD_v : ft\nh_in : in\nh_ft : ft\n";
+    passes(decl, {"V_L = 0.1399*D_v^2*h_ft"});
+    const auto found = run(decl, "V_L = 0.1399*D_v^2*h_in");
+    REQUIRE(count_of(found, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(found, plumb::rules::unit_scale), "counts 12 times"));
+}

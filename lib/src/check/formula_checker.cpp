@@ -3397,7 +3397,37 @@ class checker {
                 best_size = size;
             }
         }
+        if (!best)
+            best = ratio_with_folded_constant(reference, odd, ratio);
         return best;
+    }
+
+    // "V_L = 0.1399*D^2*h_in" (bbl from ft and a height in inches): 0.1399 is π/4 times
+    // 0.1781 bbl/ft³, so what is missing is the 12 of the inches, not 67.375. Where one
+    // number read as a folded constant times a conversion leaves a common conversion as the
+    // ratio, that ratio is the one the message advises.
+    std::optional<double> ratio_with_folded_constant(const scaled_operand& reference,
+                                                     const scaled_operand& odd,
+                                                     double ratio) const {
+        // NIST SP 811 (2008), B.8: in/ft, in²/ft², in³/ft³, ft/m, mm/in, cm/in, min/h, s/h,
+        // h/d, gal/ft³, L/gal, lb/kg, psi/bar, kPa/psi, bbl/ft³, ft³/m³.
+        static constexpr std::array<double, 16> common{
+            12.0, 144.0,   1728.0,  3.28084, 25.4,    2.54,    60.0,    3600.0,
+            24.0, 7.48052, 3.78541, 2.20462, 14.5038, 6.89476, 5.61458, 35.3147};
+        for (const auto* part : {&odd, &reference})
+            for (const auto& l : part->literals) {
+                if (looks_like_conversion(l, true) || !(l.value > 0) || l.value == 1.0)
+                    continue;
+                const double e = part == &odd ? l.exponent : -l.exponent;
+                for (const folded_constant& c : folded_constants()) {
+                    const double v = ratio * std::pow(l.value / c.value, e);
+                    for (const double r : common)
+                        for (const double candidate : {r, 1.0 / r})
+                            if (std::abs(v / candidate - 1.0) <= 0.002 + l.tolerance)
+                                return candidate;
+                }
+            }
+        return std::nullopt;
     }
 
     // "W = 8.34*Q*C" (lb/d from mgd and mg/L): not the conversion, 8.3454, but water's weight
