@@ -228,6 +228,21 @@ TEST_CASE("water's specific weight as a number beside heights converted from met
     CHECK(problems_in(run(decl + "H_m = 2.31*p + z_s\n")) == 1);
 }
 
+// The gas law's constant as the gas trades type it: R = 8.314462618 J/(mol·K) (CODATA 2018)
+// is 10.732 psia·ft³/(lbmol·°R) with 1 lbmol = 453.59237 mol and the NIST SP 811 (2008), B.8
+// factors; a gas's molar mass as 28.97 times its specific gravity (dry air's 28.96 to 28.97
+// g/mol, common practice). Each passes with a note; R in the wrong units stays an error.
+TEST_CASE("the molar gas constant and air's molar mass typed as numbers") {
+    const std::string decl = "ρ : lb/ft^3\np : psia\nM : lb/lbmol\nT : °R\nz : 1\nSG : 1\n"
+                             "V : ft^3\nn : lbmol\nV_m : m^3\nn_m : mol\np_Pa : Pa\nT_K : K\n";
+    passes_with_one_note(
+        decl,
+        {"ρ = p*M/(z*10.73*T)", "M = 28.97*SG", "p*V = n*10.73*T", "p_Pa*V_m = n_m*8.314*T_K"},
+        plumb::rules::trade_constant);
+    CHECK(problems_in(run(decl + "ρ = p*M/(z*8.314*T)\n")) == 1);
+    CHECK(problems_in(run(decl + "M = 18.02*SG\n")) == 1);
+}
+
 // A gauge pressure over a specific weight is a head above the level where the pressure is
 // atmospheric, over an area the net force where the atmosphere acts on the other face, and the
 // pressure of a column, ρ g h, is what a gauge at its foot reads (common practice; e.g. Çengel

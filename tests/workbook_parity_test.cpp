@@ -205,22 +205,22 @@ TEST_CASE("workbook parity: Barlow's wall stress from a gauge pressure") {
 }
 
 TEST_CASE("workbook parity: unit text may use the units a sidecar defines with measure") {
-    // Gas density ρ = p·M/(Z·R·T) with R = 10.73 psia·ft³/(lbmol·°R) (common practice in gas
-    // engineering); the pound-mole is 453.59237 mol (NIST SP 811 (2008), B.8). With T in °F
-    // the density is wrong, reported once the units beside the cells are read; with °R it is
-    // right.
+    // Gas density ρ = p·M/(Z·R·T) with R = 10.73 psia·ft³/(lbmole·°R), the pound-mole spelled as a
+    // sheet may (common practice in gas engineering); here defined by a measure line, 453.59237 mol
+    // (NIST SP 811 (2008), B.8). With T in °F the density is wrong, reported once the units beside
+    // the cells are read; with °R it is right.
     const std::string sheet = sheet_of({
-        {"114.7", "psia"},                // B2
-        {"18.9", "lb/lbmol"},             // B3
-        {"0.92", "-"},                    // B4
-        {"10.73", "psia·ft³/(lbmol·°R)"}, // B5
-        {"85", "°F"},                     // B6
-        {"=B6+459.67", "°R"},             // B7
-        {"=B2*B3/(B4*B5*B7)", "lb/ft³"},  // B8: right
-        {"=B2*B3/(B4*B5*B6)", "lb/ft³"},  // B9: °F in a gas law
+        {"114.7", "psia"},                 // B2
+        {"18.9", "lb/lbmole"},             // B3
+        {"0.92", "-"},                     // B4
+        {"10.73", "psia·ft³/(lbmole·°R)"}, // B5
+        {"85", "°F"},                      // B6
+        {"=B6+459.67", "°R"},              // B7
+        {"=B2*B3/(B4*B5*B7)", "lb/ft³"},   // B8: right
+        {"=B2*B3/(B4*B5*B6)", "lb/ft³"},   // B9: °F in a gas law
     });
     const check_report with_measure =
-        check_one_sheet("Gas", sheet, "measure lbmol = 453.59237 mol \"pound-mole\"\n");
+        check_one_sheet("Gas", sheet, "measure lbmole = 453.59237 mol \"pound-mole\"\n");
     CHECK(cell_findings(with_measure) == std::vector<std::string>{"Gas!B9 offset-scale"});
     CHECK(with_measure.inputs_without_units == 0);
 
@@ -228,24 +228,25 @@ TEST_CASE("workbook parity: unit text may use the units a sidecar defines with m
     const check_report without = check_one_sheet("Gas", sheet);
     const diagnostic* input = finding(without, "Gas!B5", rules::no_unit);
     REQUIRE(input != nullptr);
-    CHECK(says(*input, "the text beside it in C5, 'psia·ft³/(lbmol·°R)', does not read as a unit"));
-    CHECK(says(*input, "unknown unit 'lbmol'"));
-    CHECK(says(*input, "measure lbmol = <size> <known unit>"));
+    CHECK(
+        says(*input, "the text beside it in C5, 'psia·ft³/(lbmole·°R)', does not read as a unit"));
+    CHECK(says(*input, "unknown unit 'lbmole'"));
+    CHECK(says(*input, "measure lbmole = <size> <known unit>"));
     CHECK_FALSE(says(*input, "write its unit in the cell to its right"));
 }
 
 TEST_CASE("workbook parity: a measure defined from another is read in unit text too") {
-    // 1 lbmol = 453.59237 mol (NIST SP 811 (2008), B.8); a thousand of them a day, beside
+    // 1 lbmole = 453.59237 mol (NIST SP 811 (2008), B.8); a thousand of them a day, beside
     // others the sheet does not use, so only the lines a text names are read with it.
     std::string sidecar;
     for (int k = 0; k < 200; ++k)
         sidecar += "measure unused" + std::to_string(k) + " = " + std::to_string(k + 2) + " m\n";
-    sidecar += "measure lbmol = 453.59237 mol\nmeasure klbmol = 1000 lbmol\n";
+    sidecar += "measure lbmole = 453.59237 mol\nmeasure klbmole = 1000 lbmole\n";
     const check_report r = check_one_sheet("Flow",
                                            sheet_of({
-                                               {"12", "klbmol/d"},       // B2
-                                               {"=B2*1000", "lbmol/d"},  // B3: right
-                                               {"=B2*1000", "klbmol/d"}, // B4: not needed
+                                               {"12", "klbmole/d"},       // B2
+                                               {"=B2*1000", "lbmole/d"},  // B3: right
+                                               {"=B2*1000", "klbmole/d"}, // B4: not needed
                                            }),
                                            sidecar);
     CHECK(cell_findings(r) == std::vector<std::string>{"Flow!B4 unit-scale"});
@@ -254,16 +255,16 @@ TEST_CASE("workbook parity: a measure defined from another is read in unit text 
 
 TEST_CASE("workbook parity: a formula cell beside a unit text that does not read is told so") {
     const check_report r = check_one_sheet("U", sheet_of({
-                                                    {"28.97", "kg/kmol"},  // B2
-                                                    {"=B2*2", "lb/lbmol"}, // B3: unknown word
-                                                    {"=B2*3", "kg/kmol"},  // B4: read
-                                                    {"=B2*4", "checked"},  // B5: a remark
+                                                    {"28.97", "kg/kmol"},   // B2
+                                                    {"=B2*2", "lb/lbmole"}, // B3: unknown word
+                                                    {"=B2*3", "kg/kmol"},   // B4: read
+                                                    {"=B2*4", "checked"},   // B5: a remark
                                                 }));
     CHECK(cell_findings(r) == std::vector<std::string>{"U!B3 no-unit"});
     const diagnostic* d = finding(r, "U!B3", rules::no_unit);
     REQUIRE(d != nullptr);
-    CHECK(says(*d, "'lb/lbmol'"));
-    CHECK(says(*d, "unknown unit 'lbmol'"));
+    CHECK(says(*d, "'lb/lbmole'"));
+    CHECK(says(*d, "unknown unit 'lbmole'"));
 }
 
 TEST_CASE("workbook parity: how far off the value shown is counts the conversions written") {

@@ -21,8 +21,8 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<carried_quantity, 11>& quantities() {
-    static const std::array<carried_quantity, 11> table = [] {
+const std::array<carried_quantity, 13>& quantities() {
+    static const std::array<carried_quantity, 13> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -57,7 +57,7 @@ const std::array<carried_quantity, 11>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 11>{{
+        return std::array<carried_quantity, 13>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -144,6 +144,22 @@ const std::array<carried_quantity, 11>& quantities() {
              "write the density and latent heat in cells that hold their units to say so",
              density * length * length / (time * time), air_latent_least, air_latent_greatest,
              carried_quantity::term_kind::volume_flow},
+            // The molar gas constant R = 8.314462618 J/(mol·K) (CODATA 2018), as the gas
+            // trades print it in their units: 10.73 psia·ft³/(lbmol·°R), 1545 ft·lbf/(lbmol·°R),
+            // 0.08206 L·atm/(mol·K), 0.08314 L·bar/(mol·K) (common practice).
+            {rules::trade_constant, "the molar gas constant", "R = 8.314462618 J/(mol\u00B7K)",
+             "1/R", "", "write {R} instead to say so",
+             "write R in a cell that holds its unit to say so",
+             mass * length * length / (time * time) / amount / temperature, 8.314462618,
+             8.314462618},
+            // Dry air's molar mass: 28.96442 g/mol in ISO 2533 (from memory), 28.9647 in
+            // common practice, 28.97 as most handbooks round it: a gas's molar mass as 28.97
+            // times its specific gravity.
+            {rules::trade_constant, "the molar mass of dry air", "M_a", "1/M_a",
+             " (28.964 to 28.97 g/mol as the handbooks print it)",
+             "declare it with its unit (M_a : g/mol = 28.97) to say so",
+             "write the molar mass in a cell that holds its unit to say so", mass / amount,
+             0.02896442, 0.02897},
         }};
     }();
     return table;

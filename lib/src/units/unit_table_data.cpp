@@ -297,6 +297,11 @@ constexpr unit_definition rows[] = {
     // Mass.
     pound_mass,
     spelled("lbm", pound_mass),
+    // The pound-mole of US gas and process calcs: as many particles as 1 lb of carbon-12 over
+    // 12 g (the mole of lb), 453.59237 mol exactly from the pound's definition (NIST SP 811
+    // (2008), B.8, pound; the unit is common practice).
+    absolute("lbmol", "pound-mole", dims(0, 0, 0, 0, 1), 453.59237, "453.59237", prefixes::refused,
+             "common practice: 1 lbmol = 453.59237 mol, as 1 lb = 0.45359237 kg"),
     absolute("slug", "slug", mass, 8896443230521.0 / 609600000000.0, "8896443230521/609600000000",
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 1.459390E+01; exact as lbf·s²/ft"),
     // "ton" alone is the U.S. short ton; the refrigeration ton is a power, "TR" below.
