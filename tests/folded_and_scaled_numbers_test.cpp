@@ -428,3 +428,25 @@ TEST_CASE("advice for a folded factor beside a height in inches names the inches
     REQUIRE(count_of(found, plumb::rules::unit_scale) == 1);
     CHECK(plumb::test::says(first_under(found, plumb::rules::unit_scale), "counts 12 times"));
 }
+
+// A trade's constant written for other units: the advice names the conversion that is really
+// missing, with the constant read as what it stands for, not a figure that also undoes it.
+// 1714 psi·gpm per hp, 550 ft·lbf/s per hp, 9550 = 60000/(2π) for N·m from kW and rpm,
+// 5252 = 33000/(2π) for lbf·ft from hp and rpm (common practice); 14.5038 psi per bar, 60 s
+// per minute, 1000 W per kW and 12 in per ft (NIST SP 811 (2008), B.8).
+TEST_CASE("advice beside a trade constant in the wrong units names the missing conversion") {
+    const std::string decl = "P_hp : hp\nΔp : bar\nQ : gal/min\nη : 1\nT_1 : N*m\nP_W : W\n"
+                             "n : rpm\nT_lbin : lbf*in\nT_a, T_b : lbf\nV : ft/min\n";
+    const std::pair<const char*, const char*> cases[] = {
+        {"P_hp = Δp*Q/(1714*η)", "multiply 'Δp*Q/(1714*η)' by 14.5038"},
+        {"T_1 = 9550*P_W/n", "divide '9550*P_W/n' by 1000"},
+        {"T_lbin = 5252*P_hp/n", "multiply '5252*P_hp/n' by 12"},
+        {"P_hp = (T_a - T_b)*V/550", "divide '(T_a - T_b)*V/550' by 60"},
+    };
+    for (const auto& [formula, advice] : cases) {
+        CAPTURE(formula);
+        const auto found = run(decl, formula);
+        REQUIRE(count_of(found, plumb::rules::unit_scale) == 1);
+        CHECK(plumb::test::says(first_under(found, plumb::rules::unit_scale), advice));
+    }
+}

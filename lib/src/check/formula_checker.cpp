@@ -3419,13 +3419,25 @@ class checker {
                 if (looks_like_conversion(l, true) || !(l.value > 0) || l.value == 1.0)
                     continue;
                 const double e = part == &odd ? l.exponent : -l.exponent;
-                for (const folded_constant& c : folded_constants()) {
-                    const double v = ratio * std::pow(l.value / c.value, e);
+                // The number as a conversion by itself first ((T_1 - T_2)*V_fpm/550 with V in
+                // ft/min: 550 ft·lbf/s per hp leaves the 60 of the minutes), then as each folded
+                // constant times one (9550*P_W/n: 60000/(2π) leaves the 1000 of the watts).
+                const auto leaves = [&](double constant) -> std::optional<double> {
+                    const double v = ratio * std::pow(l.value / constant, e);
+                    const double slack = 0.002 + l.tolerance;
+                    if (near_power_of_ten(v, slack) && std::abs(std::log10(v)) > 0.5)
+                        return std::pow(10.0, std::round(std::log10(v)));
                     for (const double r : common)
                         for (const double candidate : {r, 1.0 / r})
-                            if (std::abs(v / candidate - 1.0) <= 0.002 + l.tolerance)
+                            if (std::abs(v / candidate - 1.0) <= slack)
                                 return candidate;
-                }
+                    return std::nullopt;
+                };
+                if (const auto whole = leaves(1.0))
+                    return whole;
+                for (const folded_constant& c : folded_constants())
+                    if (const auto folded = leaves(c.value))
+                        return folded;
             }
         return std::nullopt;
     }
