@@ -450,3 +450,18 @@ TEST_CASE("advice beside a trade constant in the wrong units names the missing c
         CHECK(plumb::test::says(first_under(found, plumb::rules::unit_scale), advice));
     }
 }
+
+// A glycol mix's specific heat weighted by its mass fraction, c = x·c_g + (1 - x)·c_w (common
+// practice), with x typed in %: the slip is the 1 beside a percentage, reported once there;
+// the sides, off by the same 100, are not reported again with advice to divide the whole
+// side by 100, which would not mend it. Sides off by another factor still are.
+TEST_CASE("a percentage in a weighted mean is reported once, where it is") {
+    const std::string decl = "c_af, c_pg, c_pw : kJ/(kg*K)\nc_J : J/(kg*K)\nx_pct : %\n";
+    const auto once = run(decl, "c_af = x_pct*c_pg + (1 - x_pct)*c_pw");
+    CHECK(count_of(once, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(once, plumb::rules::unit_scale),
+                            "'x_pct' counts 100 times as much as '1'"));
+    passes(decl, {"c_af = x_pct/100*c_pg + (1 - x_pct/100)*c_pw"});
+    CHECK(count_of(run(decl, "c_J = x_pct*c_pg + (1 - x_pct)*c_pw"), plumb::rules::unit_scale) ==
+          2);
+}

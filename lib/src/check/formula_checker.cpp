@@ -576,6 +576,7 @@ class checker {
 
     void check_formula(const syntax::formula& f) {
         current_ = &f;
+        inner_scale_ratio_ = 0.0;
         const std::size_t base = operands_.size();
         const std::size_t types_base = types_.size();
         // Reserved once: a generated chain of many relations must not grow it by doubling.
@@ -1345,6 +1346,8 @@ class checker {
     };
     site_barometer site_barometer_;
     bool site_barometer_searched_ = false;
+    // The ratio of the last scale warning inside the formula being checked, 0 where none.
+    double inner_scale_ratio_ = 0.0;
     // The side set equal to a specific enthalpy (h_f, "enthalpy"): see enthalpy_above_ice_point.
     std::uint32_t enthalpy_side_ = syntax::no_index;
 
@@ -3284,6 +3287,15 @@ class checker {
             unit = parts[r.reference].scale;
             return true;
         }
+        // "c = x_pct*c_1 + (1 - x_pct)*c_2": the sides are off by the 100 already reported in
+        // the sum inside; a second warning would advise dividing the whole side by it.
+        const bool sides = what.what.starts_with("sides of");
+        if (sides && inner_scale_ratio_ != 0.0 &&
+            (std::abs(ratio / inner_scale_ratio_ - 1.0) < 1e-6 ||
+             std::abs(ratio * inner_scale_ratio_ - 1.0) < 1e-6))
+            return false;
+        if (!sides)
+            inner_scale_ratio_ = ratio;
         const std::optional<rational> exact_inverse = exact_product(rational(1), exact_ratio, true);
         // A warning: in a unit-aware calc the units convert themselves; where numbers are
         // put in as declared (spreadsheets, code), the result is off by the ratio.
