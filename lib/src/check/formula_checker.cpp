@@ -403,8 +403,10 @@ class scratch_region {
     scratch_region(const scratch_region&) = delete;
     scratch_region& operator=(const scratch_region&) = delete;
     ~scratch_region() {
-        // Not resize or erase: an operand holds a reference, so it cannot be assigned.
-        while (stack_.size() > base_)
+        // Not resize or erase: an operand holds a reference, so it cannot be assigned. Counted
+        // first, so that the pops fold into one step rather than a test of the size each.
+        const std::size_t size = stack_.size();
+        for (std::size_t n = size > base_ ? size - base_ : 0; n > 0; --n)
             stack_.pop_back();
         types_.pop_to(types_base_);
     }
