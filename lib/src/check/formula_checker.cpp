@@ -19,6 +19,7 @@
 #include <algorithm>
 #include <array>
 #include <bit>
+#include <cassert>
 #include <cctype>
 #include <cmath>
 #include <cstddef>
@@ -409,8 +410,10 @@ class scratch_region {
     scratch_region(const scratch_region&) = delete;
     scratch_region& operator=(const scratch_region&) = delete;
     ~scratch_region() {
-        // Not resize or erase: an operand holds a reference, so it cannot be assigned.
-        while (stack_.size() > base_)
+        // Not resize or erase: an operand holds a reference, so it cannot be assigned. Counted
+        // first, so that the pops fold into one step rather than a test of the size each.
+        const std::size_t size = stack_.size();
+        for (std::size_t n = size > base_ ? size - base_ : 0; n > 0; --n)
             stack_.pop_back();
         types_.pop_to(types_base_);
     }
@@ -431,9 +434,11 @@ struct symbol_not_yet_declared {};
 class checker {
   public:
     checker(const syntax::parsed_file& file, symbol_table& symbols, std::vector<diagnostic>& out)
-        : file_(file), symbols_(symbols), out_(out), spine_(scratch().spine),
-          operands_(scratch().operands), types_(scratch().types), literals_(scratch().literals),
-          scaled_(scratch().scaled), scaled_index_(scratch().scaled_index) {
+        : file_(file),
+          source_text_(file.source != nullptr ? file.source->text() : std::string_view()),
+          symbols_(symbols), out_(out), spine_(scratch().spine), operands_(scratch().operands),
+          types_(scratch().types), literals_(scratch().literals), scaled_(scratch().scaled),
+          scaled_index_(scratch().scaled_index) {
         abandon(); // a check of an earlier checker on this thread may have been abandoned
     }
 
@@ -1319,6 +1324,8 @@ class checker {
 
   private:
     const syntax::parsed_file& file_;
+    // The text its ranges index, held here: a range is read at every symbol and number.
+    std::string_view source_text_;
     symbol_table& symbols_;
     std::vector<diagnostic>& out_;
     bool defer_unknown_ = false;
@@ -1352,8 +1359,12 @@ class checker {
     std::uint32_t enthalpy_side_ = syntax::no_index;
 
     // Inline: every symbol and call is looked up by its text, and a call here cost more than
-    // the view it makes.
-    [[gnu::always_inline]] std::string_view text(span s) const { return file_.source->text(s); }
+    // the view it makes. The parser made every range from this text, so each lies within it
+    // and is read without substr's test (which source_file::text keeps for other callers).
+    [[gnu::always_inline]] std::string_view text(span s) const {
+        assert(s.begin <= s.end && s.end <= source_text_.size());
+        return {source_text_.data() + s.begin, static_cast<std::size_t>(s.end - s.begin)};
+    }
 
     // The literal stack cut back to `count`, as resize would: the numbers are trivially
     // destroyed, so a cut (nearly every one) is a few pointer decrements here, inline, where
