@@ -598,9 +598,8 @@ class checker {
                 side_hint_ = &operands_[base].type; // on the type stack, which never moves
                 side_hint_node_ = s.root;
             }
-            if (i > 0 && names_specific_enthalpy(operands_[base]) &&
-                !holds_specific_energy_symbol(s.root)) [[unlikely]]
-                enthalpy_side_ = s.root;
+            if (i > 0 && operands_[base].type.dim == velocity_squared_dim) [[unlikely]]
+                note_enthalpy_side(operands_[base], s.root);
             operands_.push_back({push_operand_type(s.root, types_base, f.side_count), s.root});
             side_hint_node_ = syntax::no_index;
             enthalpy_side_ = syntax::no_index;
@@ -3840,7 +3839,8 @@ class checker {
             for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
                 const scale_literal& l = parts[i].literals[k];
                 if (!looks_like_conversion(l, !dimensionless) ||
-                    (l.exponent == 1.0 && l.value == counted_multiple(ops[index[i]].node)))
+                    (l.exponent == 1.0 && (l.value == 1e3 || l.value == 1e6 || l.value == 1e9) &&
+                     l.value == counted_multiple(ops[index[i]].node)))
                     continue;
                 std::array<scale_literal, most_numbers> without{};
                 std::copy(parts[i].literals.begin(), parts[i].literals.end(), without.begin());
@@ -4864,6 +4864,11 @@ class checker {
             }
         }
         return false;
+    }
+
+    [[gnu::noinline]] void note_enthalpy_side(const operand& first, std::uint32_t root) {
+        if (names_specific_enthalpy(first) && !holds_specific_energy_symbol(root))
+            enthalpy_side_ = root;
     }
 
     // A side that is one symbol of specific energy named or described as an enthalpy.
