@@ -436,12 +436,16 @@ TEST_CASE("advice for a folded factor beside a height in inches names the inches
 // per minute, 1000 W per kW and 12 in per ft (NIST SP 811 (2008), B.8).
 TEST_CASE("advice beside a trade constant in the wrong units names the missing conversion") {
     const std::string decl = "P_hp : hp\nΔp : bar\nQ : gal/min\nη : 1\nT_1 : N*m\nP_W : W\n"
-                             "n : rpm\nT_lbin : lbf*in\nT_a, T_b : lbf\nV : ft/min\n";
+                             "n : rpm\nT_lbin : lbf*in\nT_a, T_b : lbf\nV : ft/min\n"
+                             "m_in, N_in : in\nd_mm : mm\n";
     const std::pair<const char*, const char*> cases[] = {
         {"P_hp = Δp*Q/(1714*η)", "multiply 'Δp*Q/(1714*η)' by 14.5038"},
         {"T_1 = 9550*P_W/n", "divide '9550*P_W/n' by 1000"},
         {"T_lbin = 5252*P_hp/n", "multiply '5252*P_hp/n' by 12"},
         {"P_hp = (T_a - T_b)*V/550", "divide '(T_a - T_b)*V/550' by 60"},
+        // A base plate's cantilever m = (N - 0.95·d)/2 (AISC Design Guide 1, from memory) with
+        // d in mm beside N in inches: 0.95 is the formula's, and the inches' 25.4 is missing.
+        {"m_in = (N_in - 0.95*d_mm)/2", "divide '0.95*d_mm' by 25.4"},
     };
     for (const auto& [formula, advice] : cases) {
         CAPTURE(formula);

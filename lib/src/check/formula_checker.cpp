@@ -3438,7 +3438,10 @@ class checker {
             24.0, 7.48052, 3.78541, 2.20462, 14.5038, 6.89476, 5.61458, 35.3147};
         for (const auto* part : {&odd, &reference})
             for (const auto& l : part->literals) {
-                if (looks_like_conversion(l, true) || !(l.value > 0) || l.value == 1.0)
+                // Written to three digits or more, as folded and trade constants are (0.1399,
+                // 1714, 550): a 2 or a 0.95 is the formula's own.
+                if (looks_like_conversion(l, true) || !(l.value > 0) || l.value == 1.0 ||
+                    significant_digits(text(file_.nodes[l.node].range)) < 3)
                     continue;
                 const double e = part == &odd ? l.exponent : -l.exponent;
                 // The number as a conversion by itself first ((T_1 - T_2)*V_fpm/550 with V in
@@ -3446,7 +3449,7 @@ class checker {
                 // constant times one (9550*P_W/n: 60000/(2π) leaves the 1000 of the watts).
                 const auto leaves = [&](double constant) -> std::optional<double> {
                     const double v = ratio * std::pow(l.value / constant, e);
-                    const double slack = 0.002 + l.tolerance;
+                    const double slack = 0.002;
                     if (near_power_of_ten(v, slack) && std::abs(std::log10(v)) > 0.5)
                         return std::pow(10.0, std::round(std::log10(v)));
                     for (const double r : common)
