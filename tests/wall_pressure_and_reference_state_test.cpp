@@ -339,6 +339,17 @@ TEST_CASE("an actual gas volume converted between units but not to reference con
     passes(air, {"Q_leakNm = Q_s/37.3"});
 }
 
+// A filter's air scour rate in Nm³/(m²·h) (common practice) times its area, set equal to the
+// blower's actual flow: the same slip as Q_act = Q_n, inside a product. With the state
+// correction (p_n/p)(T/T_n) it passes; a normal flow on the left is no slip.
+TEST_CASE("an actual gas flow set equal to a product holding a normal volume") {
+    const std::string air = "r_air : Nm3/(m^2*h)\nA_f : m^2\nQ_act : m^3/h\nQ_N : Nm3/h\n"
+                            "p : kPa\nT : K\n";
+    fails_with(air, {"Q_act = r_air*A_f"}, plumb::rules::unit_scale);
+    passes(air, {"Q_N = r_air*A_f"});
+    passes(air, {"Q_act = r_air*A_f*(101.325/p)*(T/273.15)"}, 2);
+}
+
 // Gas volumes at two reference states: 1 Nm³ (0 °C, 101.325 kPa, DIN 1343) = 1.0549 Sm³
 // (15 °C, ISO 13443) = 37.33 scf (60 °F, 14.696 psia), the volume factor 35.3147 ft³/m³
 // (NIST SP 811 (2008), B.8) times the reference temperatures' ratio (ideal gas; the

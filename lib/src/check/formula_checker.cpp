@@ -939,6 +939,80 @@ class checker {
                                {}});
             return;
         }
+        report_actual_product_as_normal(sides);
+    }
+
+    // "Q_act = r_air*A_f" with r_air in Nm³/(m²·h) and Q_act in m³/h: the same where a side
+    // is a product, as long as neither holds a pressure, a temperature or a number that could
+    // correct for the gas's state.
+    void report_actual_product_as_normal(std::span<const operand> sides) {
+        const std::optional<reference_volume> a = reference_volume_of(sides[0].node);
+        const std::optional<reference_volume> b = reference_volume_of(sides[1].node);
+        if (a.has_value() == b.has_value() || !(a ? a->power == 1 : b->power == 1))
+            return;
+        const std::size_t normal = a ? 0 : 1;
+        const std::size_t actual = 1 - normal;
+        if (!only_volumes_and_conversions(sides[actual].node, true) ||
+            !only_volumes_and_conversions(sides[normal].node, false))
+            return;
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("{} is a volume of gas at its actual pressure and temperature and {} one "
+                        "at reference conditions ({}): they differ by the gas's state, which this "
+                        "formula does not correct for",
+                        quote(sides[actual].node), quote(sides[normal].node), (a ? a : b)->name),
+            file_.nodes[sides[1].node].range);
+        d.level = severity::warning;
+        d.notes.push_back({"an actual volume becomes a normal one times (p/p_n)*(T_n/T), "
+                           "with absolute pressures and temperatures (p_n = 101.325 kPa; T_n "
+                           "= 273.15 K for Nm³, 288.15 K for Sm³)",
+                           {}});
+    }
+
+    // A product of symbols with no pressure or temperature in them, and numbers that convert
+    // units only; `volume`: one of the symbols is a volume or a flow declared in a unit.
+    bool only_volumes_and_conversions(std::uint32_t k, bool volume) const {
+        bool found_volume = !volume;
+        std::vector<std::uint32_t> pending{k};
+        while (!pending.empty()) {
+            const std::uint32_t at = pending.back();
+            pending.pop_back();
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+            } else if (n.kind == expr_kind::group) {
+                pending.push_back(n.lhs);
+            } else if (n.kind == expr_kind::symbol) {
+                const symbol_entry* e = symbols_.find(text(n.range));
+                if (e == nullptr || !e->compact_dim || e->unit_text.empty() ||
+                    *e->compact_dim == pressure_dimension() ||
+                    *e->compact_dim == temperature_dimension())
+                    return false;
+                found_volume = found_volume || is_gas_volume_or_flow(*e->compact_dim);
+            } else if (n.kind == expr_kind::number) {
+                if (sole_symbol_times_conversions(at) == syntax::no_index &&
+                    !plain_conversion_number(at))
+                    return false;
+            } else {
+                return false;
+            }
+        }
+        return found_volume;
+    }
+
+    // As sole_symbol_times_conversions reads its numbers: powers of ten, time ratios and unit
+    // ratios, never a number that could be a correction (0.95, 273.15).
+    bool plain_conversion_number(std::uint32_t at) const {
+        const double v = std::strtod(std::string(text(file_.nodes[at].range)).c_str(), nullptr);
+        if (!(v > 0))
+            return false;
+        const double decade = std::round(std::log10(v));
+        if (std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12)
+            return true;
+        if (v == 60.0 || v == 3600.0 || v == 24.0 || v == 1440.0 || v == 86400.0)
+            return true;
+        return looks_like_conversion(read_literal(text(file_.nodes[at].range), v, at), false);
     }
 
     static bool is_rotating_power_or_torque(const compact_dimension& dim) {
