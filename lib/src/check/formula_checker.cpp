@@ -4858,10 +4858,15 @@ class checker {
         const syntax::expr_node& sum = file_.nodes[ungroup(denominator)];
         if (sum.kind != expr_kind::add)
             return false;
-        const std::uint32_t reading =
-            file_.nodes[sum.lhs].kind == expr_kind::symbol ? sum.lhs : sum.rhs;
+        // The reading is a symbol, or a group that makes one ((T_K - 273.15), the °C reading of
+        // a kelvin one).
+        const auto reading_like = [&](std::uint32_t k) {
+            const expr_kind kind = file_.nodes[k].kind;
+            return kind == expr_kind::symbol || kind == expr_kind::group;
+        };
+        const std::uint32_t reading = reading_like(sum.lhs) ? sum.lhs : sum.rhs;
         const std::uint32_t shift = reading == sum.lhs ? sum.rhs : sum.lhs;
-        if (file_.nodes[reading].kind != expr_kind::symbol || !constant(shift))
+        if (!reading_like(reading) || !constant(shift))
             return false;
         const std::uint32_t top_node = ungroup(numerator);
         if (constant(top_node))
@@ -4870,13 +4875,15 @@ class checker {
         if (top.offset == nullptr)
             return false;
         // The same reading times numbers: 17.625*t.
-        const std::string_view name = text(file_.nodes[reading].range);
+        const std::string_view name = text(file_.nodes[ungroup(reading)].range);
         std::size_t readings = 0;
         std::uint32_t k = top_node;
         for (;;) {
             const syntax::expr_node& f = file_.nodes[k];
             const std::uint32_t factor = f.kind == expr_kind::multiply ? ungroup(f.rhs) : k;
-            if (file_.nodes[factor].kind == expr_kind::symbol) {
+            const expr_kind kind = file_.nodes[factor].kind;
+            if (kind == expr_kind::symbol || kind == expr_kind::add ||
+                kind == expr_kind::subtract) {
                 if (text(file_.nodes[factor].range) != name)
                     return false;
                 ++readings;
@@ -4888,6 +4895,40 @@ class checker {
             k = ungroup(f.lhs);
         }
         return readings == 1;
+    }
+
+    // "17.269*T/(237.3 + T)" with T in K: the Magnus fit of saturation pressure (and Antoine's,
+    // Tetens') is made on the °C reading, its constant 230 to 245 °C (Alduchov and Eskridge
+    // 1996; ISO 13788, from memory); beside a kelvin reading the sum is some 273 K off.
+    [[gnu::noinline]] void report_celsius_fit_beside_kelvins(std::uint32_t denominator) {
+        while (file_.nodes[denominator].kind == expr_kind::group)
+            denominator = file_.nodes[denominator].lhs;
+        const syntax::expr_node& sum = file_.nodes[denominator];
+        if (sum.kind != expr_kind::add)
+            return;
+        const std::uint32_t number =
+            file_.nodes[sum.lhs].kind == expr_kind::number ? sum.lhs : sum.rhs;
+        const std::uint32_t reading = number == sum.lhs ? sum.rhs : sum.lhs;
+        if (file_.nodes[number].kind != expr_kind::number ||
+            file_.nodes[reading].kind != expr_kind::symbol)
+            return;
+        const double constant =
+            std::strtod(std::string(text(file_.nodes[number].range)).c_str(), nullptr);
+        const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
+        if (!(constant >= 200.0 && constant <= 260.0) || e == nullptr ||
+            e->offset_unit != nullptr || e->unit_text != "K")
+            return;
+        diagnostic& d = report(
+            rules::offset_scale,
+            fmt::format("{} reads like a Magnus or Antoine fit's constant, made for a \u00B0C "
+                        "reading, but {} is in K: the sum is some 273 K off",
+                        display_text(file_.nodes[number].range), quote(reading)),
+            file_.nodes[denominator].range);
+        d.level = severity::warning;
+        d.notes.push_back({fmt::format("write the \u00B0C reading, ({} - 273.15), wherever the "
+                                       "fit takes the temperature",
+                                       text(file_.nodes[reading].range)),
+                           {}});
     }
 
     // "150 {psf} + 9000?*R/t_F" (ACI 347's wall pressure, T the concrete's °F reading): a
@@ -5165,6 +5206,9 @@ class checker {
                     read_as_rise(result);
                 }
             }
+            if (divided && factor->offset == nullptr && factor->point &&
+                factor->dim == temperature_dimension()) [[unlikely]]
+                report_celsius_fit_beside_kelvins(op.rhs);
             if (divided && factor->offset != nullptr &&
                 (fitted_on_scale(op.lhs, op.rhs, result, *factor) ||
                  empirical_over_reading(op.lhs, *factor))) {
