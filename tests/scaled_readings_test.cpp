@@ -353,3 +353,16 @@ TEST_CASE("an enthalpy from the 0 °C datum of the tables") {
     fails_with(decl, {"q = c_w*t", "h_us = c_us*t_F", "h_feed = h_1 + c_w*t"},
                plumb::rules::offset_scale);
 }
+
+// The Magnus fit p_sat = 610.5 Pa·exp(17.269·θ/(237.3 + θ)) with θ the °C reading (ISO 13788,
+// from memory) fed a kelvin temperature: a warning, since the sum is 273 K off. The °C
+// reading, or the kelvin one less 273.15, passes; a kelvin reading plus a small difference
+// is no fit.
+TEST_CASE("a Magnus fit's constant beside a kelvin reading") {
+    const std::string decl = "p_s : Pa\nT_c : K\nt : °C\nx : 1\n";
+    fails_with(decl, {"p_s = 610.5 {Pa}*exp(17.269*T_c/(237.3 + T_c))"},
+               plumb::rules::offset_scale);
+    passes(decl, {"p_s = 610.5 {Pa}*exp(17.269*t/(237.3 + t))",
+                  "p_s = 610.5 {Pa}*exp(17.269*(T_c - 273.15)/(237.3 + (T_c - 273.15)))",
+                  "x = T_c/(T_c + 5)"});
+}
