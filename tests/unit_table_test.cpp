@@ -437,6 +437,15 @@ TEST_CASE("unknown symbols resolve to nothing and suggest near ones") {
     // US floor, wall and soil loads (NIST SP 811 (2008), B.8: 1 lbf/ft² = 47.88026 Pa).
     CHECK(table().resolve("psf")->unit->factor == doctest::Approx(47.88026).epsilon(1e-7));
     CHECK(table().resolve("ksf")->unit->factor == doctest::Approx(47880.26).epsilon(1e-7));
+    // Gas bills and heating plant (NIST SP 811 (2008), B.8: therm (EC) 1.055056E+08 J; Btu_IT
+    // 1055.056 J; ft³/min 4.719474E-04 m³/s), and the gas trade's flows at reference
+    // conditions (common practice).
+    CHECK(table().resolve("therm")->unit->factor == doctest::Approx(1.055056e8).epsilon(1e-6));
+    CHECK(table().resolve("MMBtu")->unit->factor == doctest::Approx(1.055056e9).epsilon(1e-6));
+    CHECK(table().resolve("MBH")->unit->factor == doctest::Approx(293.0711).epsilon(1e-6));
+    CHECK(table().resolve("scfm")->unit->factor == doctest::Approx(4.719474e-4).epsilon(1e-6));
+    CHECK(table().resolve("scfh")->unit->factor == doctest::Approx(7.865791e-6).epsilon(1e-6));
+    CHECK(table().resolve("acfm")->unit->factor == doctest::Approx(4.719474e-4).epsilon(1e-6));
 
     // A change of case is the cheapest edit.
     const auto pa = table().nearest("pa");

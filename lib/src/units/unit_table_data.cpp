@@ -364,6 +364,17 @@ constexpr unit_definition rows[] = {
     btu_it,
     spelled("Btu_IT", btu_it),
     spelled("BTU", btu_it),
+    // Gas is billed in therms and traded in MMBtu; heating plant is rated in MBH (common
+    // practice): 100 000 Btu (the EC therm of NIST SP 811 (2008), B.8, 1.055056E+08 J), a
+    // million Btu ("MM" the trade's million, as in MMscf), a thousand Btu an hour.
+    absolute("therm", "therm (100 000 Btu_IT)", energy, 105505585.262, "105505585.262",
+             prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 1.055056E+08 (EC); exact as 100 000 Btu_IT"),
+    absolute("MMBtu", "million Btu_IT", energy, 1055055852.62, "1055055852.62", prefixes::refused,
+             "common practice (1e6 Btu_IT); NIST SP 811 (2008), B.8 Btu_IT, exact"),
+    absolute("MBH", "thousand Btu_IT per hour", power, 1055055.85262 / 3600.0,
+             "105505585262/360000000", prefixes::refused,
+             "common practice (1000 Btu_IT/h); NIST SP 811 (2008), B.8, exact"),
     calorie_it,
     spelled("cal_IT", calorie_it),
     absolute("cal_th", "calorie (thermochemical)", energy, 4.184, "4.184", prefixes::refused, nist),
@@ -409,6 +420,15 @@ constexpr unit_definition rows[] = {
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 4.719474E-04; exact as ft^3/min"),
     absolute("cfs", "cubic foot per second", volumetric_flow, 0.028316846592, "0.028316846592",
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 2.831685E-02; exact as ft^3/s"),
+    // Compressed air and gas: standard cubic feet a minute or an hour, and actual cubic feet a
+    // minute at the inlet (common practice; the standard ones at reference conditions, as scf).
+    absolute("scfm", "standard cubic foot per minute", volumetric_flow, 0.0004719474432,
+             "0.0004719474432", prefixes::refused, standard_volume_source),
+    absolute("scfh", "standard cubic foot per hour", volumetric_flow, 0.028316846592 / 3600.0,
+             "28316846592/3600000000000000", prefixes::refused, standard_volume_source),
+    absolute("acfm", "actual cubic foot per minute", volumetric_flow, 0.0004719474432,
+             "0.0004719474432", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 4.719474E-04; exact as ft^3/min at line conditions"),
     // Water and wastewater plants rate flow in million U.S. gallons a day (common practice).
     absolute("mgd", "million gallons (U.S.) per day", volumetric_flow, 157725491.0 / 3600000000.0,
              "157725491/3600000000", prefixes::refused,
