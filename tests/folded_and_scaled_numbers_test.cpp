@@ -469,3 +469,23 @@ TEST_CASE("a percentage in a weighted mean is reported once, where it is") {
     CHECK(count_of(run(decl, "c_J = x_pct*c_pg + (1 - x_pct)*c_pw"), plumb::rules::unit_scale) ==
           2);
 }
+
+// A function's argument whose numbers hold a unit conversion with the formula's own small
+// factor: a bend's thrust T = 2·p·A·sin(θ/2) (common practice) written sin(pi*θ/360) with θ
+// in degrees (π/180 × 1/2), and a ground rod's R = ρ/(2πL)·(ln(8L/d) - 1) (IEEE Std 80,
+// from memory) written ln(8000*L/d) with d in mm (8 × 1000 mm/m). Each passes with a note;
+// the coefficient alone, without the conversion, is still a warning.
+TEST_CASE("a function's argument with a conversion and a small factor in one number") {
+    const std::string decl = "T : kN\np : kPa\nA : m^2\nθ : °\nR : ohm\nρ : ohm*m\nL : m\n"
+                             "d : mm\n";
+    for (const char* formula : {"T = 2*p*A*sin(pi*θ/360)", "R = ρ/(2*pi*L)*(ln(8000*L/d) - 1)"}) {
+        CAPTURE(formula);
+        const auto found = run(decl, formula);
+        CHECK(problems_in(found) == 0);
+        CHECK(count_of(found, plumb::rules::trade_constant) == 1);
+    }
+    fails_with(decl,
+               {"T = 2*p*A*sin(θ/2)", "R = ρ/(2*pi*L)*(ln(8*L/d) - 1)",
+                "R = ρ/(2*pi*L)*(ln(L/(2*d)) - 1)"},
+               plumb::rules::unit_scale);
+}

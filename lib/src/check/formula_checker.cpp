@@ -6005,6 +6005,8 @@ class checker {
                 report_inverted_factor(a, parts[0].literals[k]);
                 return nullptr;
             }
+        if (conversion_folded_with_coefficient(a, parts[0]))
+            return nullptr;
         diagnostic& d = report(rules::unit_scale,
                                fmt::format("as written, {} is {} times its true value: its units "
                                            "do not cancel",
@@ -6016,6 +6018,36 @@ class checker {
         if (!units.empty())
             d.notes.push_back({units, {}});
         return &d;
+    }
+
+    // "sin(pi*θ/360)" with θ in degrees, "ln(8000*L/d)" with L in m and d in mm (a ground
+    // rod's 8L/d): the numbers hold the conversion (π/180, 1000) with the formula's own small
+    // coefficient (1/2, 8) folded in. Read so, with a note, where the numbers together are far
+    // from 1 and what is left is a small whole number or its inverse.
+    bool conversion_folded_with_coefficient(const operand& a, const scaled_operand& part) {
+        double numbers = 1.0;
+        for (const scale_literal& l : part.literals)
+            numbers *= std::pow(l.value, l.exponent);
+        if (!(numbers > 0) || !std::isfinite(part.scale) || std::abs(std::log10(numbers)) < 1.5)
+            return false;
+        const double left = part.scale / numbers;
+        for (const double k : {2.0, 3.0, 4.0, 8.0})
+            for (const double coefficient : {k, 1.0 / k})
+                if (std::abs(left / coefficient - 1.0) < 1e-9) {
+                    diagnostic& d = report(
+                        rules::trade_constant,
+                        fmt::format("the numbers in {} are read as the unit conversion {} with the "
+                                    "formula's own factor {} folded in",
+                                    quote(a.node),
+                                    std::abs(part.scale * 180.0 / std::numbers::pi - 1.0) < 1e-9
+                                        ? std::string("\u03C0/180 (degrees to radians)")
+                                        : format_factor(part.scale),
+                                    format_factor(1.0 / coefficient)),
+                        file_.nodes[a.node].range);
+                    d.level = severity::note;
+                    return true;
+                }
+        return false;
     }
 
     void require_unit_free(const builtin_function& f, const operand& a) {
