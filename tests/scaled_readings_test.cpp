@@ -366,3 +366,20 @@ TEST_CASE("a Magnus fit's constant beside a kelvin reading") {
                   "p_s = 610.5 {Pa}*exp(17.269*(T_c - 273.15)/(237.3 + (T_c - 273.15)))",
                   "x = T_c/(T_c + 5)"});
 }
+
+// Advice that must not lead to a wrong formula that passes. A transformer's hot-spot rise in
+// K set equal to the hot spot's °C reading (IEC 60076-7 counts the rise above ambient, from
+// memory): adding 273.15 would hide the slip, so the advice names the rise. And the top end
+// of a range of readings is a reading: declaring it a difference would hide α·V·θ_max.
+TEST_CASE("advice for a rise set equal to a reading, and for the end of a range") {
+    const std::string decl = "Δθ_h : K \"hot-spot rise above ambient\"\nθ_h : °C\nβ : 1/K\n"
+                             "V, ΔV : L\nθ_max, θ_min : °C \"oil temperature range\"\n";
+    const auto rise = run(decl, "Δθ_h = θ_h");
+    REQUIRE(count_of(rise, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(rise, plumb::rules::offset_scale), "is a rise"));
+    CHECK_FALSE(says(first_under(rise, plumb::rules::offset_scale), "(θ_h + 273.15)"));
+    const auto range = run(decl, "ΔV = β*V*θ_max");
+    REQUIRE(count_of(range, plumb::rules::offset_scale) == 1);
+    CHECK_FALSE(says(first_under(range, plumb::rules::offset_scale), "declare it as"));
+    passes(decl, {"ΔV = β*V*(θ_max - θ_min)"});
+}

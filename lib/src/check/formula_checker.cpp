@@ -4195,6 +4195,19 @@ class checker {
                                       "absolute: write ({} + p_atm), or ({} + {}) at sea level, "
                                       "the standard atmosphere in {}",
                                       reading, reading, zero, absolute_unit);
+                // "Δθ_h = θ_h" with Δθ_h in K "rise above ambient": the kelvins are a rise's,
+                // and a reading made absolute would only hide the slip.
+                if (temperature && file_.nodes[other.node].kind == expr_kind::symbol) {
+                    const std::string_view name = text(file_.nodes[other.node].range);
+                    const symbol_entry* e = symbols_.find(name);
+                    const std::string_view about = e != nullptr ? e->description : "";
+                    if (names_a_difference(name, about) ||
+                        about.find("rise") != std::string_view::npos)
+                        advice = fmt::format("'{}' is a rise, the difference of two readings: "
+                                             "write it as one, such as ({} - T_ref), not as the "
+                                             "reading made absolute",
+                                             name, reading);
+                }
                 if (has_number)
                     advice = fmt::format("the number added does not put the zero where the other "
                                          "side has it; {}",
@@ -4432,7 +4445,12 @@ class checker {
         if (file_.nodes[node].kind == expr_kind::symbol) {
             const std::string_view name = text(file_.nodes[node].range);
             const symbol_entry* entry = symbols_.find(name);
-            if (entry != nullptr && entry->offset_unit == &unit &&
+            // "θ_max : °C "oil temperature range, -20 to 105 °C"": an end of a range is a
+            // reading, whatever the description shared with the other end says.
+            const bool range_end = name.ends_with("max") || name.ends_with("min") ||
+                                   name.find("_max") != std::string_view::npos ||
+                                   name.find("_min") != std::string_view::npos;
+            if (entry != nullptr && entry->offset_unit == &unit && !range_end &&
                 names_a_difference(name, entry->description)) {
                 d.notes.push_back(
                     {fmt::format("its name or description says it is a difference: declare it "
