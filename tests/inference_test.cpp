@@ -855,3 +855,27 @@ TEST_CASE("inference: a stated coefficient that cannot be restated names the ter
                                             "{ft})*G/S_d + CA\n");
     CHECK(inches.with_rule(plumb::rules::coefficient_mismatch).empty());
 }
+
+// Manning's V = (k/n)·R^(2/3)·S^(1/2), k = 1 with metres and seconds and 1.486 with feet
+// (Chow, Open-Channel Hydraulics, 1959, 5-6, from memory): a k marked `?` whose value in SI
+// units is the other system's is a warning; each in its own units passes with its note.
+TEST_CASE("Manning's factor of one system with the symbols in the other's units") {
+    const std::string decl = "V : m/s\nn : 1\nR : m\nS : 1\nV_f : ft/s\nR_f : ft\n";
+    for (const char* formula : {"V = 1.49?/n*R^(2/3)*S^(1/2)", "V_f = 1?/n*R_f^(2/3)*S^(1/2)"}) {
+        CAPTURE(formula);
+        const auto r = plumb::check_text("m.plumb", decl + "@a " + formula + "\n");
+        CHECK(std::count_if(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
+                  return d.rule == plumb::rules::unit_scale &&
+                         d.message.find("Manning") != std::string::npos;
+              }) == 1);
+    }
+    for (const char* formula : {"V = 1?/n*R^(2/3)*S^(1/2)", "V_f = 1.49?/n*R_f^(2/3)*S^(1/2)",
+                                "V_f = 1.486?/n*R_f^(2/3)*S^(1/2)"}) {
+        CAPTURE(formula);
+        const auto r = plumb::check_text("m.plumb", decl + "@a " + formula + "\n");
+        CHECK(std::none_of(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
+            return d.rule != plumb::rules::unused &&
+                   (d.level == plumb::severity::warning || d.level == plumb::severity::error);
+        }));
+    }
+}

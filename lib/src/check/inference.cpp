@@ -835,6 +835,42 @@ class reporter {
         out_.push_back(std::move(d));
         if (x.statement != syntax::no_index)
             check_statement(x, dim, k_si, out_.back());
+        else if (x.coefficient && k_si)
+            check_manning_factor(x, dim, *k_si);
+    }
+
+    // Manning's V = (k/n)·R^(2/3)·S^(1/2): k is 1 in SI units and 1.486 (1/0.3048^(1/3)) with
+    // feet and seconds (Chow, Open-Channel Hydraulics, 1959, 5-6, from memory). A k marked `?`
+    // whose value in SI units comes to 1.486, or to 0.673 (the SI 1 with feet), is the other
+    // system's, a warning where no reviewed statement says otherwise.
+    void check_manning_factor(const unknown& x, const dimension& dim, double k_si) {
+        static const dimension manning =
+            dimension::base(base_dimension::length).pow(rational(1, 3)) /
+            dimension::base(base_dimension::time);
+        if (!(dim == manning))
+            return;
+        const double us = 1.0 / std::cbrt(0.3048);
+        const bool feet_in_si = std::abs(k_si / us - 1.0) < 0.006;
+        const bool si_in_feet = std::abs(k_si * us - 1.0) < 0.006;
+        if (!feet_in_si && !si_in_feet)
+            return;
+        diagnostic d = make(
+            severity::warning, rules::unit_scale,
+            feet_in_si ? fmt::format("the coefficient {} reads as Manning's factor for feet "
+                                     "and seconds, but the symbols' units make it {:.4g} in SI "
+                                     "units, where Manning's factor is 1: the flow comes out "
+                                     "{:.0f} % high",
+                                     x.name, k_si, (k_si - 1.0) * 100.0)
+                       : fmt::format("the coefficient {} reads as Manning's SI factor, but with "
+                                     "the symbols in feet it comes to {:.4g} in SI units, where "
+                                     "Manning's factor is 1: the flow comes out {:.0f} % low",
+                                     x.name, k_si, (1.0 - k_si) * 100.0),
+            x.where);
+        d.terms.push_back({x.where, x.name + "?", dim});
+        d.notes.push_back({"Manning's factor is 1 with metres and seconds and 1.486 (written "
+                           "1.49) with feet and seconds",
+                           {}});
+        out_.push_back(std::move(d));
     }
 
     // A coefficient written "k?[...]": what the formula makes it against what was stated.
