@@ -602,3 +602,15 @@ TEST_CASE("workbook parity: a weighted mean of readings over the sum of its weig
     CHECK_FALSE(error_at(r, "S!B6"));
     CHECK(error_at(r, "S!B7"));
 }
+
+TEST_CASE("workbook parity: gas volumes at two reference temperatures") {
+    // 1 Nm³ (0 °C) = 37.33 scf (60 °F), both at 101.325 kPa: the volume factor 35.3147 ft³/m³
+    // (NIST SP 811 (2008), B.8) times 288.71/273.15 (ideal gas; the reference states from
+    // memory). The volume factor alone is a warning, as in the notation; 37.33 passes.
+    const check_report r = check_one_sheet("Air", sheet_of({
+                                                      {"850", "scfm"},          // B2
+                                                      {"=B2/37.33", "Nm³/min"}, // B3: right
+                                                      {"=B2/35.31", "Nm³/min"}, // B4: 5.7 % off
+                                                  }));
+    CHECK(cell_findings(r) == std::vector<std::string>{"Air!B4 unit-scale"});
+}

@@ -632,6 +632,12 @@ class checker {
                 check_origins(sides, what);
                 if (symbols_.unit_marks() != 0 && out_.size() == findings_before && equation)
                     ask_of_marked_units(f, sides);
+                else if (file_.functions == syntax::function_names::spreadsheet &&
+                         out_.size() == findings_before && equation && sides.size() == 2 &&
+                         is_gas_volume_or_flow(sides[0].type.dim)) [[unlikely]]
+                    // Not the actual-against-normal rule: sheets write "m³/d" for standard
+                    // volumes as often as for actual ones.
+                    report_reference_temperatures_left_out(sides);
             }
             return;
         }
@@ -763,45 +769,6 @@ class checker {
         return found;
     }
 
-    // The reference temperature of a gas volume unit written in `unit` (Nm3: 0 °C, DIN 1343;
-    // Sm3: 15 °C, ISO 13443; scf: 60 °F, the US standard cubic foot; all at 101.325 kPa, from
-    // memory), with +1 where it stands above a slash and -1 below; empty where it names none,
-    // or two.
-    struct reference_volume {
-        double kelvins = 0.0;
-        int power = 0;
-        std::string_view name; // as the message prints the conditions
-        double numbers = 1.0;  // the product's numbers, multiplied out
-        double rounding = 0.0; // their relative rounding, summed
-    };
-    static std::optional<reference_volume> reference_volume_in(std::string_view unit) {
-        struct spelled_reference {
-            std::string_view spelling;
-            double kelvins;
-            std::string_view name;
-        };
-        static constexpr std::array<spelled_reference, 6> spellings{{
-            {"Nm3", 273.15, "0 \u00B0C"},
-            {"Nm\u00B3", 273.15, "0 \u00B0C"},
-            {"Sm3", 288.15, "15 \u00B0C"},
-            {"Sm\u00B3", 288.15, "15 \u00B0C"},
-            {"scf", 288.15 + 5.0 / 9.0 * (60.0 - 59.0), "60 \u00B0F"},
-            {"SCF", 288.15 + 5.0 / 9.0 * (60.0 - 59.0), "60 \u00B0F"},
-        }};
-        std::optional<reference_volume> found;
-        for (const auto& r : spellings) {
-            const std::size_t at = unit.find(r.spelling);
-            if (at == std::string_view::npos)
-                continue;
-            if (found && found->kelvins != r.kelvins)
-                return std::nullopt;
-            const std::size_t slash = unit.find('/');
-            found = reference_volume{
-                r.kelvins, slash != std::string_view::npos && slash < at ? -1 : 1, r.name};
-        }
-        return found;
-    }
-
     // A product of symbols and numbers whose gas volumes at reference conditions all share one
     // reference temperature: that temperature, and the net power the volumes stand in.
     std::optional<reference_volume> reference_volume_of(std::uint32_t k) const {
@@ -818,11 +785,22 @@ class checker {
                 pending.emplace_back(n.rhs, n.kind == expr_kind::divide ? -sign : sign);
             } else if (n.kind == expr_kind::group) {
                 pending.emplace_back(n.lhs, sign);
-            } else if (n.kind == expr_kind::symbol) {
-                const symbol_entry* e = symbols_.find(text(n.range));
-                if (e == nullptr || (unit_marks_of(e->unit_text) & at_reference_conditions) == 0)
-                    continue;
-                const std::optional<reference_volume> r = reference_volume_in(e->unit_text);
+            } else if (n.kind == expr_kind::symbol || n.kind == expr_kind::reference) {
+                // A workbook's cell carries the reference state its unit text names.
+                std::optional<reference_volume> r;
+                if (n.kind == expr_kind::reference) {
+                    const syntax::reference_value& cell = file_.references[n.lhs];
+                    if (cell.reference_power == 0)
+                        continue;
+                    r = reference_volume{cell.reference_kelvins, cell.reference_power,
+                                         cell.reference_name};
+                } else {
+                    const symbol_entry* e = symbols_.find(text(n.range));
+                    if (e == nullptr ||
+                        (unit_marks_of(e->unit_text) & at_reference_conditions) == 0)
+                        continue;
+                    r = reference_volume_in(e->unit_text);
+                }
                 if (!r || (found && found->kelvins != r->kelvins))
                     return std::nullopt;
                 const int power = (found ? found->power : 0) + sign * r->power;
@@ -3349,7 +3327,8 @@ class checker {
         }
         // "V_scf = 37.3*V_Nm3": the factor holds the reference temperatures beside the volume
         // factor (35.31 × 288.7/273.15), which is the conversion between the two.
-        if ((symbols_.unit_marks() & at_reference_conditions) != 0 &&
+        if (((symbols_.unit_marks() & at_reference_conditions) != 0 ||
+             file_.functions == syntax::function_names::spreadsheet) &&
             reference_temperatures_reconcile(ops[index[r.odd]].node, ops[index[r.reference]].node,
                                              parts[r.odd], parts[r.reference])) {
             unit = parts[r.reference].scale;

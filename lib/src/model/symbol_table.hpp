@@ -39,6 +39,45 @@ enum unit_mark : std::uint8_t {
     return marks;
 }
 
+// The reference temperature of a gas volume unit written in `unit` (Nm3: 0 °C, DIN 1343;
+// Sm3: 15 °C, ISO 13443; scf: 60 °F, the US standard cubic foot; all at 101.325 kPa, from
+// memory), with +1 where it stands above a slash and -1 below; empty where it names none,
+// or two.
+struct reference_volume {
+    double kelvins = 0.0;
+    int power = 0;
+    std::string_view name; // as a message prints the conditions
+    double numbers = 1.0;  // for a product: its numbers, multiplied out
+    double rounding = 0.0; // and their relative rounding, summed
+};
+[[nodiscard]] inline std::optional<reference_volume> reference_volume_in(std::string_view unit) {
+    struct spelled_reference {
+        std::string_view spelling;
+        double kelvins;
+        std::string_view name;
+    };
+    static constexpr spelled_reference spellings[] = {
+        {"Nm3", 273.15, "0 \u00B0C"},
+        {"Nm\u00B3", 273.15, "0 \u00B0C"},
+        {"Sm3", 288.15, "15 \u00B0C"},
+        {"Sm\u00B3", 288.15, "15 \u00B0C"},
+        {"scf", 288.15 + 5.0 / 9.0, "60 \u00B0F"},
+        {"SCF", 288.15 + 5.0 / 9.0, "60 \u00B0F"},
+    };
+    std::optional<reference_volume> found;
+    for (const auto& r : spellings) {
+        const std::size_t at = unit.find(r.spelling);
+        if (at == std::string_view::npos)
+            continue;
+        if (found && found->kelvins != r.kelvins)
+            return std::nullopt;
+        const std::size_t slash = unit.find('/');
+        found = reference_volume{r.kelvins, slash != std::string_view::npos && slash < at ? -1 : 1,
+                                 r.name};
+    }
+    return found;
+}
+
 struct symbol_entry {
     std::optional<dimension> dim; // empty when its declaration had an error (already reported)
                                   // or when it is to be inferred

@@ -12,6 +12,7 @@
 #include <memory>
 #include <optional>
 #include <string>
+#include <string_view>
 #include <vector>
 
 namespace plumb::syntax {
@@ -50,6 +51,11 @@ struct reference_value {
     // A pressure or temperature cell whose row label says it is a difference ("Friction
     // loss", "Δp"): no reading, whatever its unit.
     bool difference = false;
+    // A gas volume at reference conditions (Nm³, scf): its reference temperature and the power
+    // it stands in in the cell's unit; 0 where the unit names none.
+    std::int8_t reference_power = 0;
+    double reference_kelvins = 0.0;
+    std::string_view reference_name;
 };
 
 // Which names a call may use: the notation's functions or a spreadsheet's.

@@ -2,6 +2,7 @@
 
 #include "check/formula_checker.hpp"
 #include "check/gravity_number.hpp"
+#include "model/symbol_table.hpp"
 #include "plumb/rules.hpp"
 
 #include <algorithm>
@@ -10,6 +11,15 @@
 #include <utility>
 
 namespace plumb::sheets {
+
+void note_reference_state(syntax::reference_value& cell, std::string_view unit_text) {
+    const std::optional<reference_volume> r =
+        (unit_marks_of(unit_text) & at_reference_conditions) != 0 ? reference_volume_in(unit_text)
+                                                                  : std::nullopt;
+    cell.reference_power = r ? static_cast<std::int8_t>(r->power) : std::int8_t{0};
+    cell.reference_kelvins = r ? r->kelvins : 0.0;
+    cell.reference_name = r ? r->name : std::string_view();
+}
 
 void cell_equation::make_room() {
     if (formula_ != syntax::no_index)
@@ -29,9 +39,14 @@ std::vector<diagnostic> cell_equation::check(std::uint32_t formula_root, span wr
                                              const written_unit& written, bool difference) {
     if (formula_ == syntax::no_index)
         return {}; // make_room() was not called: no equation to check
-    tree_.references[written_reference_] = {
-        written.dim, written.scale, written.exact_scale, written.offset, {}};
-    tree_.references[written_reference_].difference = difference;
+    syntax::reference_value& cell = tree_.references[written_reference_];
+    cell = syntax::reference_value{};
+    cell.dim = written.dim;
+    cell.scale = written.scale;
+    cell.exact_scale = written.exact_scale;
+    cell.offset = written.offset;
+    cell.difference = difference;
+    note_reference_state(tree_.references[written_reference_], written.text);
     tree_.nodes[written_node_].range = written_text;
     syntax::formula& equation = tree_.formulas[formula_];
     equation.range = written_text;

@@ -42,6 +42,10 @@ class cell_equation {
 // formula at `formula_range`.
 void in_workbook_words(diagnostic& d, span formula_range);
 
+// Marks a cell that holds a gas volume at reference conditions (its unit text names Nm³, Sm³
+// or scf) with that reference state, for the rules that compare two such volumes.
+void note_reference_state(syntax::reference_value& cell, std::string_view unit_text);
+
 // The advice in a finding's notes to declare a number as a symbol with its unit, said for a
 // workbook: write it in a cell that holds its unit.
 void advice_in_workbook_words(diagnostic& d);

@@ -573,6 +573,8 @@ class workbook_checker {
             target.value = v.value;
             target.difference =
                 r.area.single() && v.dim && labelled_a_difference(r.sheet, r.area.first);
+            note_reference_state(target, v.unit != nullptr ? std::string_view(v.unit->unit.text)
+                                                           : std::string_view());
         }
         const std::size_t before = out_.size();
         // A copy: the tree's vectors stay put while cells are checked, but nothing here
@@ -1017,9 +1019,13 @@ class workbook_checker {
                     r.area.single() ? input_role::the_input : input_role::range_with_it;
             }
             std::optional<syntax::reference_value> result;
-            if (const cell_unit* u = unit_of(f.sheet, f.source->at))
-                result = syntax::reference_value{
-                    u->unit.dim, u->unit.scale, u->unit.exact_scale, u->unit.offset, {}};
+            if (const cell_unit* u = unit_of(f.sheet, f.source->at)) {
+                result = syntax::reference_value{};
+                result->dim = u->unit.dim;
+                result->scale = u->unit.scale;
+                result->exact_scale = u->unit.exact_scale;
+                result->offset = u->unit.offset;
+            }
             const syntax::formula& formula = lowered_.tree.formulas[f.lowered.formula];
             for (const auto& need : requirements_of_input(
                      lowered_.tree, lowered_.tree.sides[formula.first_side].root, roles, result))
