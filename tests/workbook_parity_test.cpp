@@ -259,8 +259,12 @@ TEST_CASE("workbook parity: a formula cell beside a unit text that does not read
                                                     {"=B2*2", "lb/lbmole"}, // B3: unknown word
                                                     {"=B2*3", "kg/kmol"},   // B4: read
                                                     {"=B2*4", "checked"},   // B5: a remark
+                                                    {"=B2*5", "tons"},      // B6: a plural unit
+                                                    {"=B2*6", "pcf"},       // B7: one letter off
+                                                    {"=B2*7", "OK"},        // B8: a remark
                                                 }));
-    CHECK(cell_findings(r) == std::vector<std::string>{"U!B3 no-unit"});
+    CHECK(cell_findings(r) ==
+          std::vector<std::string>{"U!B3 no-unit", "U!B6 no-unit", "U!B7 no-unit"});
     const diagnostic* d = finding(r, "U!B3", rules::no_unit);
     REQUIRE(d != nullptr);
     CHECK(says(*d, "'lb/lbmole'"));

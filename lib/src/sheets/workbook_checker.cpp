@@ -16,6 +16,7 @@
 
 #include <algorithm>
 #include <array>
+#include <cctype>
 #include <cmath>
 #include <fmt/format.h>
 #include <map>
@@ -1116,6 +1117,26 @@ class workbook_checker {
         return said;
     }
 
+    // "tons", "pcf": one short word a unit is one letter from ("ton", "psf"), or whose
+    // singular is one, rather than a remark ("OK", "checked", "total").
+    bool looks_like_a_unit_word(std::string_view t) const {
+        if (t.size() < 2 || t.size() > 6 || !std::all_of(t.begin(), t.end(), [](char c) {
+                return std::isalpha(static_cast<unsigned char>(c));
+            }))
+            return false;
+        std::string lower(t);
+        std::transform(lower.begin(), lower.end(), lower.begin(),
+                       [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+        for (const std::string_view remark :
+             {"ok",   "yes", "no",   "na",  "tbc", "tbd", "check", "see",  "note", "total", "input",
+              "calc", "ref", "each", "sum", "max", "min", "avg",   "mean", "pass", "fail"})
+            if (lower == remark)
+                return false;
+        if (t.back() == 's' && read_unit_text(t.substr(0, t.size() - 1), units_.measures))
+            return true;
+        return unit_text_problem(t, units_.measures).find("did you mean") != std::string::npos;
+    }
+
     // A formula cell with a unit beside it that does not read as one: its result is compared
     // with nothing, so say so where the text looks like a unit (it has a unit's operators).
     void report_unread_unit(const formula_cell& f) {
@@ -1124,11 +1145,12 @@ class workbook_checker {
             return;
         const std::string_view t = text->second->text;
         // "kip-ft", "kW(e)": a hyphen or a bracket joins a unit's parts as often as '*'.
-        const bool unit_like = t.size() <= 40 && t.find(' ') == std::string_view::npos &&
-                               (t.find_first_of("/*^-(") != std::string_view::npos ||
-                                t.find("\u00B7") != std::string_view::npos ||
-                                t.find("\u00B2") != std::string_view::npos ||
-                                t.find("\u00B3") != std::string_view::npos);
+        const bool unit_like =
+            t.size() <= 40 && t.find(' ') == std::string_view::npos &&
+            (t.find_first_of("/*^-(") != std::string_view::npos ||
+             t.find("\u00B7") != std::string_view::npos ||
+             t.find("\u00B2") != std::string_view::npos ||
+             t.find("\u00B3") != std::string_view::npos || looks_like_a_unit_word(t));
         if (!unit_like || unit_text_problem(t, units_.measures).rfind("unknown unit", 0) != 0)
             return;
         diagnostic& d = report(severity::warning, rules::no_unit,
