@@ -618,3 +618,22 @@ TEST_CASE("workbook parity: gas volumes at two reference temperatures") {
                                                   }));
     CHECK(cell_findings(r) == std::vector<std::string>{"Air!B4 unit-scale"});
 }
+
+TEST_CASE("workbook parity: the advice for a reading put on another temperature scale") {
+    // °F = 1.8·°C + 32, K = °C + 273.15 (NIST SP 811 (2008), 4.2.1.1 and B.8): the advice
+    // names the conversion the cell needs, the 32 with the 1.8 between °C and °F.
+    const check_report r = check_one_sheet("T", sheet_of({
+                                                    {"85", "°C"},         // B2
+                                                    {"=B2*1.8", "°F"},    // B3: no 32
+                                                    {"=B2", "K"},         // B4: no 273.15
+                                                    {"=B2*1.8+32", "°F"}, // B5: right
+                                                    {"=B2+273.15", "K"},  // B6: right
+                                                }));
+    CHECK(cell_findings(r) == std::vector<std::string>{"T!B3 offset-scale", "T!B4 offset-scale"});
+    const diagnostic* f = finding(r, "T!B3", rules::offset_scale);
+    REQUIRE(f != nullptr);
+    CHECK(says(*f, "=B4*1.8+32: the 32 and the 1.8 go together"));
+    const diagnostic* k = finding(r, "T!B4", rules::offset_scale);
+    REQUIRE(k != nullptr);
+    CHECK(says(*k, "=B4+273.15"));
+}

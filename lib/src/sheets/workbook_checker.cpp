@@ -844,11 +844,10 @@ class workbook_checker {
                                   where_unit, written.unit.offset->symbol),
                 formula.range);
             d.notes.push_back(
-                {temperature ? fmt::format("convert with the offset ({:g}), as in =B4-273.15, "
-                                           "or write the unit the formula gives",
-                                           on_scale->offset / on_scale->factor)
-                             : std::string("add or subtract the atmospheric pressure, or write "
-                                           "the unit the formula gives"),
+                {temperature ? temperature_conversion_advice(computed.offset, written.unit.offset)
+                             : std::string("add or subtract the atmospheric "
+                                           "pressure, or write the unit the "
+                                           "formula gives"),
                  {}});
             add_input_notes(d, f);
             return;
@@ -1115,6 +1114,28 @@ class workbook_checker {
                                 "'measure {} = <size> <known unit>', or write a unit plumb knows",
                                 problem.substr(open + 1, close - open - 1));
         return said;
+    }
+
+    // How a reading on one temperature scale becomes one on the other: °C and °F need both
+    // the 1.8 and the 32; an offset scale and its absolute one, the zero alone, with its sign.
+    static std::string temperature_conversion_advice(const unit_definition* computed,
+                                                     const unit_definition* written) {
+        if (computed != nullptr && written != nullptr)
+            return fmt::format("a {} reading on the {} scale is {}: the 32 and the 1.8 go "
+                               "together, or write the unit the formula gives",
+                               computed->symbol, written->symbol,
+                               std::abs(written->factor - 1.0) > 1e-9 ? "=B4*1.8+32"
+                                                                      : "=(B4-32)/1.8");
+        const unit_definition* scale = computed != nullptr ? computed : written;
+        const double zero = scale->offset / scale->factor;
+        const std::string absolute = std::abs(scale->factor - 1.0) < 1e-9 ? "K" : "\u00B0R";
+        return computed != nullptr
+                   ? fmt::format("a {} reading is in {} once {:g} is added, as in =B4+{:g}, or "
+                                 "write the unit the formula gives",
+                                 scale->symbol, absolute, zero, zero)
+                   : fmt::format("a reading in {} is on the {} scale once {:g} is subtracted, as "
+                                 "in =B4-{:g}, or write the unit the formula gives",
+                                 absolute, scale->symbol, zero, zero);
     }
 
     // "tons", "pcf": one short word a unit is one letter from ("ton", "psf"), or whose
