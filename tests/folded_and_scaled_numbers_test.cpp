@@ -489,3 +489,18 @@ TEST_CASE("a function's argument with a conversion and a small factor in one num
                 "R = ρ/(2*pi*L)*(ln(L/(2*d)) - 1)"},
                plumb::rules::unit_scale);
 }
+
+// A load schedule's diversified demand P·d + P_base with the diversity typed in % (common
+// practice): the term with the percentage is the one off by 100, whichever comes first, so
+// the advice does not multiply the base load by 100.
+TEST_CASE("in a sum of two, the term with a percentage is the one named") {
+    const std::string decl = "P, P_b, P_t : kW\nd : %\n";
+    for (const char* formula : {"P_t = P*d + P_b", "P_t = P_b + P*d"}) {
+        CAPTURE(formula);
+        const auto found = run(decl, formula);
+        REQUIRE(count_of(found, plumb::rules::unit_scale) == 1);
+        CHECK(
+            plumb::test::says(first_under(found, plumb::rules::unit_scale), "divide 'P*d' by 100"));
+    }
+    passes(decl, {"P_t = P*d/100 + P_b"});
+}

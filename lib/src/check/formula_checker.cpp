@@ -3277,7 +3277,7 @@ class checker {
         unit = parts.empty() ? 1.0 : parts.front().scale;
         if (parts.size() < 2)
             return true;
-        const reconciliation r = reconcile(parts);
+        reconciliation r = reconcile(parts);
         if (r.agree) {
             unit = r.unit;
             if (!r.used_literals)
@@ -3310,6 +3310,12 @@ class checker {
         if (parts.size() <= max_operands_for_flips &&
             report_inverted_trade_constant(ops, index, parts))
             return false;
+        // "P*d_pct + P_base" with d_pct in %: in a sum of two the term with the percentage is
+        // the one off, whichever came first.
+        if (what.what.starts_with("terms") && parts.size() == 2 &&
+            holds_percentage(ops[index[r.reference]].node) &&
+            !holds_percentage(ops[index[r.odd]].node))
+            std::swap(r.odd, r.reference);
         const operand& op = ops[index[r.odd]];
         const operand& reference = ops[index[r.reference]];
         // What the numbers as written give: the conversion-like ones taken as conversions.
@@ -6015,6 +6021,30 @@ class checker {
         if (!units.empty())
             d.notes.push_back({units, {}});
         return &d;
+    }
+
+    // Whether a product holds a symbol or a cell in percent, a dimensionless unit of 1/100.
+    bool holds_percentage(std::uint32_t k) const {
+        std::vector<std::uint32_t> pending{k};
+        while (!pending.empty()) {
+            const syntax::expr_node& n = file_.nodes[pending.back()];
+            pending.pop_back();
+            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+            } else if (n.kind == expr_kind::group) {
+                pending.push_back(n.lhs);
+            } else if (n.kind == expr_kind::symbol) {
+                const symbol_entry* e = symbols_.find(text(n.range));
+                if (e != nullptr && e->dim && e->dim->is_dimensionless() && e->si_factor == 0.01)
+                    return true;
+            } else if (n.kind == expr_kind::reference) {
+                const syntax::reference_value& cell = file_.references[n.lhs];
+                if (cell.dim && cell.dim->is_dimensionless() && cell.scale == 0.01)
+                    return true;
+            }
+        }
+        return false;
     }
 
     // "sin(pi*θ/360)" with θ in degrees, "ln(8000*L/d)" with L in m and d in mm (a ground
