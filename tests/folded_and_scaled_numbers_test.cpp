@@ -437,7 +437,8 @@ TEST_CASE("advice for a folded factor beside a height in inches names the inches
 TEST_CASE("advice beside a trade constant in the wrong units names the missing conversion") {
     const std::string decl = "P_hp : hp\nΔp : bar\nQ : gal/min\nη : 1\nT_1 : N*m\nP_W : W\n"
                              "n : rpm\nT_lbin : lbf*in\nT_a, T_b : lbf\nV : ft/min\n"
-                             "m_in, N_in : in\nd_mm : mm\n";
+                             "m_in, N_in : in\nd_mm : mm\nΦ_us : Btu/h\nm_lb : lb/d\n"
+                             "c_us : Btu/(lb*°F)\nT_d, T_s : °C\n";
     const std::pair<const char*, const char*> cases[] = {
         {"P_hp = Δp*Q/(1714*η)", "multiply 'Δp*Q/(1714*η)' by 14.5038"},
         {"T_1 = 9550*P_W/n", "divide '9550*P_W/n' by 1000"},
@@ -446,6 +447,9 @@ TEST_CASE("advice beside a trade constant in the wrong units names the missing c
         // A base plate's cantilever m = (N - 0.95·d)/2 (AISC Design Guide 1, from memory) with
         // d in mm beside N in inches: 0.95 is the formula's, and the inches' 25.4 is missing.
         {"m_in = (N_in - 0.95*d_mm)/2", "divide '0.95*d_mm' by 25.4"},
+        // A digester's heating Φ = m·c·ΔT/24 from lb/d, Btu/(lb·°F) and a °C rise into Btu/h:
+        // 24 h/d converts, and the 1.8 °F per K is what is missing (not 24/1.8 = 13.33).
+        {"Φ_us = m_lb*c_us*(T_d - T_s)/24", "by 1.8"},
     };
     for (const auto& [formula, advice] : cases) {
         CAPTURE(formula);

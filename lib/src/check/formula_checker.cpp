@@ -3478,9 +3478,32 @@ class checker {
                 best_size = size;
             }
         }
+        // "m_lb*c_us*(T_d - T_s)/24" (lb/d, Btu/(lb·°F), a °C rise, Btu/h): 24 h/d is a
+        // conversion too, and what is left is the 1.8 of the degrees.
+        for (std::uint32_t mask = 1; !best && mask < (1U << count); ++mask) {
+            double v = ratio;
+            for (std::size_t k = 0; k < count; ++k)
+                if ((mask >> k) & 1U)
+                    v *= numbers[k].factor;
+            best = common_conversion(v, 0.002);
+        }
         if (!best)
             best = ratio_with_folded_constant(reference, odd, ratio);
         return best;
+    }
+
+    // NIST SP 811 (2008), B.8: in/ft, in²/ft², in³/ft³, ft/m, mm/in, cm/in, min/h, s/h, h/d,
+    // gal/ft³, L/gal, lb/kg, psi/bar, kPa/psi, bbl/ft³, ft³/m³, °F/K: a ratio within `slack` of
+    // one of them, or of its inverse.
+    static std::optional<double> common_conversion(double v, double slack) {
+        static constexpr std::array<double, 17> common{
+            12.0,    144.0,   1728.0,  3.28084, 25.4,    2.54,    60.0,    3600.0, 24.0,
+            7.48052, 3.78541, 2.20462, 14.5038, 6.89476, 5.61458, 35.3147, 1.8};
+        for (const double r : common)
+            for (const double candidate : {r, 1.0 / r})
+                if (std::abs(v / candidate - 1.0) <= slack)
+                    return candidate;
+        return std::nullopt;
     }
 
     // "V_L = 0.1399*D^2*h_in" (bbl from ft and a height in inches): 0.1399 is π/4 times
@@ -3490,11 +3513,6 @@ class checker {
     std::optional<double> ratio_with_folded_constant(const scaled_operand& reference,
                                                      const scaled_operand& odd,
                                                      double ratio) const {
-        // NIST SP 811 (2008), B.8: in/ft, in²/ft², in³/ft³, ft/m, mm/in, cm/in, min/h, s/h,
-        // h/d, gal/ft³, L/gal, lb/kg, psi/bar, kPa/psi, bbl/ft³, ft³/m³.
-        static constexpr std::array<double, 16> common{
-            12.0, 144.0,   1728.0,  3.28084, 25.4,    2.54,    60.0,    3600.0,
-            24.0, 7.48052, 3.78541, 2.20462, 14.5038, 6.89476, 5.61458, 35.3147};
         for (const auto* part : {&odd, &reference})
             for (const auto& l : part->literals) {
                 // Written to three digits or more, as folded and trade constants are (0.1399,
@@ -3511,11 +3529,7 @@ class checker {
                     const double slack = 0.002;
                     if (near_power_of_ten(v, slack) && std::abs(std::log10(v)) > 0.5)
                         return std::pow(10.0, std::round(std::log10(v)));
-                    for (const double r : common)
-                        for (const double candidate : {r, 1.0 / r})
-                            if (std::abs(v / candidate - 1.0) <= slack)
-                                return candidate;
-                    return std::nullopt;
+                    return common_conversion(v, slack);
                 };
                 if (const auto whole = leaves(1.0))
                     return whole;
