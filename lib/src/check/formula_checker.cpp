@@ -769,12 +769,10 @@ class checker {
         return found;
     }
 
-    // A product of symbols and numbers whose gas volumes at reference conditions all share one
-    // reference temperature: that temperature, and the net power the volumes stand in.
-    std::optional<reference_volume> reference_volume_of(std::uint32_t k) const {
-        std::optional<reference_volume> found;
-        double numbers = 1.0;
-        double rounding = 0.0;
+    // Visits the factors of a product, through '*', '/' and groups, each with the power it
+    // stands in (+1, or -1 below a division); anything else is a factor. Stops where `visit`
+    // returns true, and says whether it did.
+    template <class Visit> bool for_each_factor(std::uint32_t k, Visit&& visit) const {
         std::vector<std::pair<std::uint32_t, int>> pending{{k, 1}};
         while (!pending.empty()) {
             const auto [at, sign] = pending.back();
@@ -785,38 +783,54 @@ class checker {
                 pending.emplace_back(n.rhs, n.kind == expr_kind::divide ? -sign : sign);
             } else if (n.kind == expr_kind::group) {
                 pending.emplace_back(n.lhs, sign);
-            } else if (n.kind == expr_kind::symbol || n.kind == expr_kind::reference) {
-                // A workbook's cell carries the reference state its unit text names.
-                std::optional<reference_volume> r;
-                if (n.kind == expr_kind::reference) {
-                    const syntax::reference_value& cell = file_.references[n.lhs];
-                    if (cell.reference_power == 0)
-                        continue;
-                    r = reference_volume{cell.reference_kelvins, cell.reference_power,
-                                         cell.reference_name};
-                } else {
-                    const symbol_entry* e = symbols_.find(text(n.range));
-                    if (e == nullptr ||
-                        (unit_marks_of(e->unit_text) & at_reference_conditions) == 0)
-                        continue;
-                    r = reference_volume_in(e->unit_text);
-                }
-                if (!r || (found && found->kelvins != r->kelvins))
-                    return std::nullopt;
-                const int power = (found ? found->power : 0) + sign * r->power;
-                found = *r;
-                found->power = power;
-            } else if (n.kind == expr_kind::number) {
-                const scale_literal& l = read_number(text(n.range)).literal;
-                if (!(l.value > 0.0))
-                    return std::nullopt;
-                numbers *= sign > 0 ? l.value : 1.0 / l.value;
-                rounding += l.tolerance;
-            } else {
-                return std::nullopt;
+            } else if (visit(at, sign)) {
+                return true;
             }
         }
-        if (!found || found->power == 0)
+        return false;
+    }
+
+    // A product of symbols and numbers whose gas volumes at reference conditions all share one
+    // reference temperature: that temperature, and the net power the volumes stand in.
+    std::optional<reference_volume> reference_volume_of(std::uint32_t k) const {
+        std::optional<reference_volume> found;
+        double numbers = 1.0;
+        double rounding = 0.0;
+        bool other = false;
+        for_each_factor(k, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            std::optional<reference_volume> r;
+            if (n.kind == expr_kind::number) {
+                const scale_literal& l = read_number(text(n.range)).literal;
+                if (!(l.value > 0.0))
+                    return other = true;
+                numbers *= sign > 0 ? l.value : 1.0 / l.value;
+                rounding += l.tolerance;
+                return false;
+            }
+            if (n.kind == expr_kind::reference) {
+                // A workbook's cell carries the reference state its unit text names.
+                const syntax::reference_value& cell = file_.references[n.lhs];
+                if (cell.reference_power == 0)
+                    return false;
+                r = reference_volume{cell.reference_kelvins, cell.reference_power,
+                                     cell.reference_name};
+            } else if (n.kind == expr_kind::symbol) {
+                const symbol_entry* e = symbols_.find(text(n.range));
+                if (e == nullptr || (unit_marks_of(e->unit_text) & at_reference_conditions) == 0)
+                    return false;
+                r = reference_volume_in(e->unit_text);
+            } else {
+                return other = true;
+            }
+            if (!r || (found && found->kelvins != r->kelvins))
+                return other = true;
+            const int power = (found ? found->power : 0) + sign * r->power;
+            found = *r;
+            found->power = power;
+            return false;
+        });
+        if (other || !found || found->power == 0)
             return std::nullopt;
         found->numbers = numbers;
         found->rounding = rounding;
@@ -951,32 +965,22 @@ class checker {
     // units only; `volume`: one of the symbols is a volume or a flow declared in a unit.
     bool only_volumes_and_conversions(std::uint32_t k, bool volume) const {
         bool found_volume = !volume;
-        std::vector<std::uint32_t> pending{k};
-        while (!pending.empty()) {
-            const std::uint32_t at = pending.back();
-            pending.pop_back();
+        const bool other = for_each_factor(k, [&](std::uint32_t at, int) {
             const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
-                pending.push_back(n.lhs);
-                pending.push_back(n.rhs);
-            } else if (n.kind == expr_kind::group) {
-                pending.push_back(n.lhs);
-            } else if (n.kind == expr_kind::symbol) {
-                const symbol_entry* e = symbols_.find(text(n.range));
-                if (e == nullptr || !e->compact_dim || e->unit_text.empty() ||
-                    *e->compact_dim == pressure_dimension() ||
-                    *e->compact_dim == temperature_dimension())
-                    return false;
-                found_volume = found_volume || is_gas_volume_or_flow(*e->compact_dim);
-            } else if (n.kind == expr_kind::number) {
-                if (sole_symbol_times_conversions(at) == syntax::no_index &&
-                    !plain_conversion_number(at))
-                    return false;
-            } else {
-                return false;
-            }
-        }
-        return found_volume;
+            if (n.kind == expr_kind::number)
+                return sole_symbol_times_conversions(at) == syntax::no_index &&
+                       !plain_conversion_number(at);
+            if (n.kind != expr_kind::symbol)
+                return true;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e == nullptr || !e->compact_dim || e->unit_text.empty() ||
+                *e->compact_dim == pressure_dimension() ||
+                *e->compact_dim == temperature_dimension())
+                return true;
+            found_volume = found_volume || is_gas_volume_or_flow(*e->compact_dim);
+            return false;
+        });
+        return !other && found_volume;
     }
 
     // As sole_symbol_times_conversions reads its numbers: powers of ten, time ratios and unit
@@ -3887,20 +3891,8 @@ class checker {
     }
 
     bool holds_pi(std::uint32_t k) const {
-        std::vector<std::uint32_t> pending{k};
-        while (!pending.empty()) {
-            const syntax::expr_node& n = file_.nodes[pending.back()];
-            pending.pop_back();
-            if (n.kind == expr_kind::pi)
-                return true;
-            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
-                pending.push_back(n.lhs);
-                pending.push_back(n.rhs);
-            } else if (n.kind == expr_kind::group || n.kind == expr_kind::negate) {
-                pending.push_back(n.lhs);
-            }
-        }
-        return false;
+        return for_each_factor(
+            k, [&](std::uint32_t at, int) { return file_.nodes[at].kind == expr_kind::pi; });
     }
 
     // "E = C*M*Q/22.4/1e6*3600" with E in kg/h: the 1e6 converts, and the 3600 beside it is a
@@ -3962,30 +3954,22 @@ class checker {
     // description says it counts in thousands, millions or billions, multiplied in the term,
     // so that 1e6*L_10 is its count; 1 where none does.
     double counted_multiple(std::uint32_t k) const {
-        std::vector<std::uint32_t> pending{k};
-        while (!pending.empty()) {
-            const syntax::expr_node& n = file_.nodes[pending.back()];
-            pending.pop_back();
-            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
-                pending.push_back(n.lhs);
-                if (n.kind == expr_kind::multiply)
-                    pending.push_back(n.rhs);
-            } else if (n.kind == expr_kind::group) {
-                pending.push_back(n.lhs);
-            } else if (n.kind == expr_kind::symbol) {
-                const symbol_entry* e = symbols_.find(text(n.range));
-                if (e == nullptr)
-                    continue;
-                const std::string_view d = e->description;
-                if (d.find("millions") != std::string_view::npos)
-                    return 1e6;
-                if (d.find("thousands") != std::string_view::npos)
-                    return 1e3;
-                if (d.find("billions") != std::string_view::npos)
-                    return 1e9;
-            }
-        }
-        return 1.0;
+        double multiple = 1.0;
+        for_each_factor(k, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (sign < 0 || n.kind != expr_kind::symbol)
+                return false;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e == nullptr)
+                return false;
+            const std::string_view d = e->description;
+            multiple = d.find("millions") != std::string_view::npos    ? 1e6
+                       : d.find("thousands") != std::string_view::npos ? 1e3
+                       : d.find("billions") != std::string_view::npos  ? 1e9
+                                                                       : 1.0;
+            return multiple != 1.0;
+        });
+        return multiple;
     }
 
     // t = V/Q*24 with t in d and Q in m³/d: a ratio of time units (24 h/d, 60, 1440, 8760, 3.6)
@@ -4954,20 +4938,9 @@ class checker {
     bool empirical_over_reading(std::uint32_t numerator, const typed_term& below) const {
         if (!below.known || !below.point || !(below.dim == temperature_dimension()))
             return false;
-        std::vector<std::uint32_t> pending{numerator};
-        while (!pending.empty()) {
-            const syntax::expr_node& n = file_.nodes[pending.back()];
-            pending.pop_back();
-            if (n.kind == expr_kind::inferred)
-                return true;
-            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
-                pending.push_back(n.lhs);
-                pending.push_back(n.rhs);
-            } else if (n.kind == expr_kind::group) {
-                pending.push_back(n.lhs);
-            }
-        }
-        return false;
+        return for_each_factor(numerator, [&](std::uint32_t at, int) {
+            return file_.nodes[at].kind == expr_kind::inferred;
+        });
     }
 
     // "h_2 = h_1 + c_p*t_2": beside another enthalpy, c·t would be a change from it, which a
@@ -6039,26 +6012,18 @@ class checker {
 
     // Whether a product holds a symbol or a cell in percent, a dimensionless unit of 1/100.
     bool holds_percentage(std::uint32_t k) const {
-        std::vector<std::uint32_t> pending{k};
-        while (!pending.empty()) {
-            const syntax::expr_node& n = file_.nodes[pending.back()];
-            pending.pop_back();
-            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
-                pending.push_back(n.lhs);
-                pending.push_back(n.rhs);
-            } else if (n.kind == expr_kind::group) {
-                pending.push_back(n.lhs);
-            } else if (n.kind == expr_kind::symbol) {
+        return for_each_factor(k, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::symbol) {
                 const symbol_entry* e = symbols_.find(text(n.range));
-                if (e != nullptr && e->dim && e->dim->is_dimensionless() && e->si_factor == 0.01)
-                    return true;
-            } else if (n.kind == expr_kind::reference) {
-                const syntax::reference_value& cell = file_.references[n.lhs];
-                if (cell.dim && cell.dim->is_dimensionless() && cell.scale == 0.01)
-                    return true;
+                return e != nullptr && e->dim && e->dim->is_dimensionless() && e->si_factor == 0.01;
             }
-        }
-        return false;
+            if (n.kind == expr_kind::reference) {
+                const syntax::reference_value& cell = file_.references[n.lhs];
+                return cell.dim && cell.dim->is_dimensionless() && cell.scale == 0.01;
+            }
+            return false;
+        });
     }
 
     // "sin(pi*θ/360)" with θ in degrees, "ln(8000*L/d)" with L in m and d in mm (a ground
