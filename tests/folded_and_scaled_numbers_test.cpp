@@ -508,3 +508,16 @@ TEST_CASE("in a sum of two, the term with a percentage is the one named") {
     }
     passes(decl, {"P_t = P*d/100 + P_b"});
 }
+
+// Kern's tube-side pressure drop Δp = N_p·(f·L/d + 4)·ρ·V²/2 (Kern, Process Heat Transfer,
+// 1950, 7.44, from memory), in kPa with /2000, and the bore typed in mm: the term with units
+// is the one off, not the formula's 4, and the 2000 is not reported as unneeded.
+TEST_CASE("a bare number in a sum beside a term off by a unit") {
+    const std::string decl = "Δp : kPa\nN_p, f : 1\nL : m\nd : mm\nd_m : m\nρ : kg/m^3\n"
+                             "V : m/s\n";
+    const auto found = run(decl, "Δp = N_p*(f*L/d + 4)*ρ*V^2/2000");
+    REQUIRE(count_of(found, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(found, plumb::rules::unit_scale),
+                            "multiply 'f*L/d' by 1000"));
+    passes(decl, {"Δp = N_p*(f*L/d_m + 4)*ρ*V^2/2000"});
+}

@@ -2262,6 +2262,13 @@ class checker {
         }
         if (!numbers || !std::isfinite(unit) || std::abs(unit - 1.0) <= 1e-9)
             return;
+        // Only where the scale is a unit numbers are written in (%, °, ppm): in "f*L/d_mm + 4"
+        // the 1000 of L in m over d in mm is no unit the 4 is in.
+        for (std::size_t i = base; i < operands_.size(); ++i) {
+            const typed_term& t = operands_[i].type;
+            if (t.known && !t.zero && !t.numeric && !holds_scaled_ratio_unit(operands_[i].node))
+                return;
+        }
         // A number's type is shared only with numbers equal to it, which change alike.
         // But not 1: "1 - L" with L in % is the complement of a fraction written beside a
         // percentage, the slip, far more often than 1 % less L.
@@ -3315,10 +3322,12 @@ class checker {
             report_inverted_trade_constant(ops, index, parts))
             return false;
         // "P*d_pct + P_base" with d_pct in %: in a sum of two the term with the percentage is
-        // the one off, whichever came first.
+        // the one off, whichever came first; and beside a bare number ("f*L/d_mm + 4") the
+        // term with units, since the number is the formula's own.
         if (what.what.starts_with("terms") && parts.size() == 2 &&
-            holds_percentage(ops[index[r.reference]].node) &&
-            !holds_percentage(ops[index[r.odd]].node))
+            ((holds_percentage(ops[index[r.reference]].node) &&
+              !holds_percentage(ops[index[r.odd]].node)) ||
+             (ops[index[r.odd]].type.numeric && !ops[index[r.reference]].type.numeric)))
             std::swap(r.odd, r.reference);
         const operand& op = ops[index[r.odd]];
         const operand& reference = ops[index[r.reference]];
@@ -6008,6 +6017,26 @@ class checker {
         if (!units.empty())
             d.notes.push_back({units, {}});
         return &d;
+    }
+
+    // Whether a product holds a symbol or a cell in a dimensionless unit with a size of its
+    // own (%, °, ppm), the unit a number beside it may be written in.
+    bool holds_scaled_ratio_unit(std::uint32_t k) const {
+        return for_each_factor(k, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::symbol) {
+                const symbol_entry* e = symbols_.find(text(n.range));
+                return e != nullptr && e->dim && e->dim->is_dimensionless() && e->si_factor != 1.0;
+            }
+            if (n.kind == expr_kind::reference) {
+                const syntax::reference_value& cell = file_.references[n.lhs];
+                return cell.dim && cell.dim->is_dimensionless() && cell.scale != 1.0;
+            }
+            // A group or a call that is itself in such a unit ((θ_1 + θ_2)/2) counts too.
+            return n.kind == expr_kind::call || n.kind == expr_kind::add ||
+                   n.kind == expr_kind::subtract || n.kind == expr_kind::power ||
+                   n.kind == expr_kind::negate;
+        });
     }
 
     // Whether a product holds a symbol or a cell in percent, a dimensionless unit of 1/100.
