@@ -879,3 +879,24 @@ TEST_CASE("Manning's factor of one system with the symbols in the other's units"
         }));
     }
 }
+
+// Hazen-Williams h_f = k·L·Q^1.852/(C^1.852·D^4.87), k = 10.67 with metres and m³/s and 10.44
+// for feet with gpm and inches (as the AWWA and ASCE manuals print it, from memory): a k marked
+// `?` whose value in SI units is far from 10.67 is a warning; the forms in their own units
+// pass, and a formula with conversions written into it is not judged by its restatement.
+TEST_CASE("Hazen-Williams' coefficient with a symbol in a unit its form does not take") {
+    const std::string decl = "hf_ft : ft\nL_ft : ft\nQ_p : gal/min\nC : 1\nD_in : in\n"
+                             "D_mm : mm\nh_m : m\nL : m\nQ : m^3/s\nD : m\nQ_Ls : L/s\n";
+    const auto warned = [&](const char* formula) {
+        const auto r = plumb::check_text("h.plumb", decl + "@a " + formula + "\n");
+        return std::count_if(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
+            return d.rule == plumb::rules::unit_scale &&
+                   d.message.find("Hazen-Williams") != std::string::npos;
+        });
+    };
+    CHECK(warned("hf_ft = 10.44?*L_ft*Q_p^1.85/(C^1.85*D_mm^4.8655)") == 1);
+    CHECK(warned("h_m = 10.67?*L*Q_Ls^1.852/(C^1.852*D_mm^4.87)") == 1);
+    CHECK(warned("hf_ft = 10.44?*L_ft*Q_p^1.85/(C^1.85*D_in^4.8655)") == 0);
+    CHECK(warned("h_m = 10.67?*L*Q^1.852/(C^1.852*D^4.87)") == 0);
+    CHECK(warned("h_m = 10.67?*L*(Q_Ls/1000)^1.852/(C^1.852*(D_mm/1000)^4.87)") == 0);
+}

@@ -835,8 +835,88 @@ class reporter {
         out_.push_back(std::move(d));
         if (x.statement != syntax::no_index)
             check_statement(x, dim, k_si, out_.back());
-        else if (x.coefficient && k_si)
+        else if (x.coefficient && k_si) {
             check_manning_factor(x, dim, *k_si);
+            check_hazen_williams_factor(x, dim, *k_si);
+        }
+    }
+
+    // Whether the coefficient's formula holds numbers other than it and the exponents.
+    bool holds_other_numbers(const unknown& x) const {
+        const syntax::formula& f = formulas_[x.formula];
+        std::vector<std::uint32_t> pending;
+        for (std::uint32_t i = 0; i < f.side_count; ++i)
+            pending.push_back(file_.sides[f.first_side + i].root);
+        while (!pending.empty()) {
+            const std::uint32_t k = pending.back();
+            pending.pop_back();
+            const syntax::expr_node& n = file_.nodes[k];
+            switch (n.kind) {
+            case syntax::expr_kind::number:
+            case syntax::expr_kind::quantity:
+                return true;
+            case syntax::expr_kind::power:
+                pending.push_back(n.lhs); // the exponent is the formula's
+                break;
+            case syntax::expr_kind::add:
+            case syntax::expr_kind::subtract:
+            case syntax::expr_kind::multiply:
+            case syntax::expr_kind::divide:
+                pending.push_back(n.lhs);
+                pending.push_back(n.rhs);
+                break;
+            case syntax::expr_kind::group:
+            case syntax::expr_kind::negate:
+                pending.push_back(n.lhs);
+                break;
+            default:
+                break;
+            }
+        }
+        return false;
+    }
+
+    // Hazen-Williams h_f = k·L·Q^1.852/(C^1.852·D^4.87): k is 10.67 in SI units (metres,
+    // m³/s), and the trade's other forms (4.52 with psi per ft, gpm and in; 10.44 with ft, gpm
+    // and in; 4.73 with ft, cfs and ft) come to the same once restated (Hazen-Williams as
+    // printed in the AWWA and ASCE manuals, from memory). A k marked `?` whose value in SI
+    // units is far from 10.67 has a symbol in a unit its form does not take, a warning where no
+    // reviewed statement says otherwise. Known by the coefficient's dimension: time to the
+    // flow's power (1.85 to 1.852) and length to about -0.69.
+    void check_hazen_williams_factor(const unknown& x, const dimension& dim, double k_si) {
+        double time = 0.0;
+        double length = 0.0;
+        try {
+            time = dim.exponent(base_dimension::time).to_double();
+            length = dim.exponent(base_dimension::length).to_double();
+        } catch (const std::exception&) {
+            return;
+        }
+        if (!(time >= 1.849 && time <= 1.853) || !(length >= -0.72 && length <= -0.66))
+            return;
+        for (const base_dimension other :
+             {base_dimension::mass, base_dimension::temperature, base_dimension::amount,
+              base_dimension::current, base_dimension::luminous_intensity})
+            if (!dim.exponent(other).is_zero())
+                return;
+        // Restated, the coefficient leaves out the formula's other numbers: where it has any
+        // ((Q_Ls/1000)^1.852, a conversion written in), the restated value says nothing.
+        if (std::abs(k_si / 10.67 - 1.0) <= 0.03 || holds_other_numbers(x))
+            return;
+        diagnostic d = make(severity::warning, rules::unit_scale,
+                            fmt::format("the coefficient {} reads as Hazen-Williams', but the "
+                                        "symbols' units make it {:.4g} in SI units, where the "
+                                        "formula's is 10.67: a symbol is in a unit this form "
+                                        "of the formula does not take",
+                                        x.name, k_si),
+                            x.where);
+        d.terms.push_back({x.where, x.name + "?", dim});
+        d.notes.push_back({"Hazen-Williams' coefficient is 10.67 "
+                           "with metres and m³/s, 4.52 for "
+                           "psi per ft with gpm and inches, 10.44 "
+                           "for feet with gpm and inches",
+                           {}});
+        out_.push_back(std::move(d));
     }
 
     // Manning's V = (k/n)·R^(2/3)·S^(1/2): k is 1 in SI units and 1.486 (1/0.3048^(1/3)) with
