@@ -637,3 +637,27 @@ TEST_CASE("workbook parity: the advice for a reading put on another temperature 
     REQUIRE(k != nullptr);
     CHECK(says(*k, "=B4+273.15"));
 }
+
+TEST_CASE("workbook parity: empirical fits typed with bare constants, and more unit words") {
+    // The Magnus fit p_ws = 0.61094 kPa·exp(17.625·t/(t + 243.04)) with t the °C reading
+    // (Alduchov and Eskridge 1996, from memory) and Kirpich's t_c = 0.0195·L^0.77·S^-0.385 in
+    // minutes from metres (from memory): a sheet cannot give the constant a unit, so it is read
+    // as carrying the cell's, with a note. The grain (1/7000 lb) and the acre-foot read as units
+    // (NIST SP 811 (2008), B.8), so a slip beside them is found.
+    const check_report r =
+        check_one_sheet("F", sheet_of({
+                                 {"24", "°C"},                                   // B2
+                                 {"=0.61094*EXP(17.625*B2/(B2+243.04))", "kPa"}, // B3
+                                 {"850", "m"},                                   // B4
+                                 {"0.012", "-"},                                 // B5
+                                 {"=0.0195*B4^0.77*B5^-0.385", "min"},           // B6
+                                 {"0.0142", "-"},                                // B7
+                                 {"=B7*7000", "gr/lb"},                          // B8
+                                 {"=B7*700", "gr/lb"},                           // B9: 10x
+                                 {"5000", "m³"},                                 // B10
+                                 {"=B10/1233.5", "acre-ft"},                     // B11
+                                 {"=B10/43560", "acre-ft"},                      // B12
+                             }));
+    CHECK(cell_findings(r) == std::vector<std::string>{"F!B12 unit-scale", "F!B3 trade-constant",
+                                                       "F!B6 trade-constant", "F!B9 unit-scale"});
+}

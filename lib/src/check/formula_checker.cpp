@@ -641,6 +641,9 @@ class checker {
             }
             return;
         }
+        if (file_.functions == syntax::function_names::spreadsheet && sides.size() == 2 &&
+            fit_constant_carries_cell_unit(sides)) [[unlikely]]
+            return;
         std::string message =
             sides.size() == 2 ? fmt::format("the two sides of this {} differ in dimension", what)
                               : fmt::format("the sides of this {} differ in dimension", what);
@@ -670,6 +673,64 @@ class checker {
         if (!note_gravity_in_other_units(d, sides, a))
             note_acceleration_apart(d, sides, a);
         note_bare_quantity_apart(d, sides, a);
+    }
+
+    // "=0.61094*EXP(17.625*C4/(C4+243.04))" beside kPa (the Magnus fit of saturation
+    // pressure): a workbook's numbers carry no units, so a number times a function of
+    // dimensionless arguments is an empirical fit whose constant is in the cell's unit. Read
+    // so, with a note; in the notation the constant is written with its unit.
+    [[gnu::noinline]] bool fit_constant_carries_cell_unit(std::span<const operand> sides) {
+        const operand& formula = sides[1];
+        if (!formula.type.known || !sides[0].type.known || sides[0].type.offset != nullptr ||
+            formula.type.offset != nullptr)
+            return false;
+        std::uint32_t constant = syntax::no_index;
+        bool function = false;
+        bool fractional_power = false;
+        const bool other = for_each_factor(formula.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number && sign > 0 && constant == syntax::no_index) {
+                constant = at;
+                return false;
+            }
+            if (n.kind == expr_kind::call) {
+                function = true;
+                return false;
+            }
+            // "=0.0195*C12^0.77*C13^-0.385" (Kirpich's time of concentration): a power law
+            // fitted to data, its exponents not whole.
+            if (n.kind == expr_kind::power) {
+                std::uint32_t e = n.rhs;
+                if (file_.nodes[e].kind == expr_kind::negate)
+                    e = file_.nodes[e].lhs;
+                if (file_.nodes[e].kind != expr_kind::number)
+                    return true;
+                const double v =
+                    std::strtod(std::string(text(file_.nodes[e].range)).c_str(), nullptr);
+                fractional_power = fractional_power || v != std::round(v);
+                return false;
+            }
+            return n.kind != expr_kind::reference;
+        });
+        // A function's fit gives a pure number scaled by its constant; a power law, any
+        // dimension, which its constant makes up.
+        if (other || constant == syntax::no_index ||
+            !(fractional_power || (function && formula.type.dim.is_dimensionless())))
+            return false;
+        std::string carries;
+        try {
+            carries = describe((sides[0].type.dim / formula.type.dim).expand());
+        } catch (const std::exception&) {
+            return false;
+        }
+        diagnostic& d = report(rules::trade_constant,
+                               fmt::format("{} is read as an empirical fit's constant, carrying "
+                                           "{} for the unit written for its cell",
+                                           display_text(file_.nodes[constant].range), carries),
+                               file_.nodes[constant].range);
+        d.level = severity::note;
+        d.notes.push_back({"the fit holds only with its inputs in the units it was made for", {}});
+        return true;
     }
 
     // Rules for units that the file declares (symbol_table::unit_marks), asked of an equation
@@ -4872,7 +4933,8 @@ class checker {
         // a kelvin one).
         const auto reading_like = [&](std::uint32_t k) {
             const expr_kind kind = file_.nodes[k].kind;
-            return kind == expr_kind::symbol || kind == expr_kind::group;
+            return kind == expr_kind::symbol || kind == expr_kind::group ||
+                   kind == expr_kind::reference;
         };
         const std::uint32_t reading = reading_like(sum.lhs) ? sum.lhs : sum.rhs;
         const std::uint32_t shift = reading == sum.lhs ? sum.rhs : sum.lhs;
@@ -4892,8 +4954,8 @@ class checker {
             const syntax::expr_node& f = file_.nodes[k];
             const std::uint32_t factor = f.kind == expr_kind::multiply ? ungroup(f.rhs) : k;
             const expr_kind kind = file_.nodes[factor].kind;
-            if (kind == expr_kind::symbol || kind == expr_kind::add ||
-                kind == expr_kind::subtract) {
+            if (kind == expr_kind::symbol || kind == expr_kind::reference ||
+                kind == expr_kind::add || kind == expr_kind::subtract) {
                 if (text(file_.nodes[factor].range) != name)
                     return false;
                 ++readings;

@@ -169,7 +169,7 @@ std::string as_declaration(std::string_view notation, std::string_view measures)
 // "in. w.g." for inches of water, "hr" for the hour, "CFM" in capitals, "kNm" for kN·m,
 // "sq ft", "bhp" (brake horsepower, a horsepower), "bara" (bar absolute).
 std::string trade_spelling(std::string t) {
-    static constexpr std::array<std::pair<std::string_view, std::string_view>, 59> whole{{
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 63> whole{{
         {"in. w.g.", "inH2O"},
         {"in.w.g.", "inH2O"},
         {"in w.g.", "inH2O"},
@@ -222,6 +222,11 @@ std::string trade_spelling(std::string t) {
         {"k-in", "kip in"},
         {"kip-ft", "kip ft"},
         {"kip-in", "kip in"},
+        // Storage volumes in US hydrology: the acre-foot and acre-inch.
+        {"acre-ft", "acre ft"},
+        {"ac-ft", "acre ft"},
+        {"acre-in", "acre in"},
+        {"ac-in", "acre in"},
         // A chiller's efficiency and flows per ton are per ton of refrigeration, never per
         // short ton of mass.
         {"kW/ton", "kW/TR"},

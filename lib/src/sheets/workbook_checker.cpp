@@ -1172,7 +1172,10 @@ class workbook_checker {
              t.find("\u00B7") != std::string_view::npos ||
              t.find("\u00B2") != std::string_view::npos ||
              t.find("\u00B3") != std::string_view::npos || looks_like_a_unit_word(t));
-        if (!unit_like || unit_text_problem(t, units_.measures).rfind("unknown unit", 0) != 0)
+        // A hyphen joins two units ("acre-ft") whatever the reader made of it.
+        const std::string problem = unit_like ? unit_text_problem(t, units_.measures) : "";
+        if (!unit_like ||
+            (problem.rfind("unknown unit", 0) != 0 && t.find('-') == std::string_view::npos))
             return;
         diagnostic& d = report(severity::warning, rules::no_unit,
                                "the unit written beside this cell does not read as a unit, so "
