@@ -521,3 +521,18 @@ TEST_CASE("a bare number in a sum beside a term off by a unit") {
                             "multiply 'f*L/d' by 1000"));
     passes(decl, {"Δp = N_p*(f*L/d_m + 4)*ρ*V^2/2000"});
 }
+
+// Swamee-Jain's f = 0.25/log10(ε/(3.7·D) + 5.74/Re^0.9)² (Swamee and Jain 1976, from memory)
+// with ε in mm and D in m, written with 3700 (3.7 × 1000 mm/m): passes with a note. With 3.7
+// alone the ε term is the one off, and the advice names it.
+TEST_CASE(
+    "a published two-digit constant beside a thousand, and the term whose units do not cancel") {
+    const std::string decl = "f, Re : 1\nε : mm\nD_m : m\n";
+    const auto folded = run(decl, "f = 0.25/(log10(ε/(3700*D_m) + 5.74/Re^0.9))^2");
+    CHECK(problems_in(folded) == 0);
+    CHECK(count_of(folded, plumb::rules::trade_constant) == 1);
+    const auto slip = run(decl, "f = 0.25/(log10(ε/(3.7*D_m) + 5.74/Re^0.9))^2");
+    REQUIRE(count_of(slip, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(slip, plumb::rules::unit_scale),
+                            "divide 'ε/(3.7*D_m)' by 1000"));
+}

@@ -3385,10 +3385,17 @@ class checker {
         // "P*d_pct + P_base" with d_pct in %: in a sum of two the term with the percentage is
         // the one off, whichever came first; and beside a bare number ("f*L/d_mm + 4") the
         // term with units, since the number is the formula's own.
+        // In a dimensionless sum ("ε/(3.7*D) + 5.74/Re^0.9" with ε in mm and D in m), the
+        // term whose units do not cancel is the one named, beside one whose units do.
+        const auto cancels = [&](std::size_t i) {
+            return std::abs(apparent_scale(parts[i]) - 1.0) < 1e-12;
+        };
         if (what.what.starts_with("terms") && parts.size() == 2 &&
             ((holds_percentage(ops[index[r.reference]].node) &&
               !holds_percentage(ops[index[r.odd]].node)) ||
-             (ops[index[r.odd]].type.numeric && !ops[index[r.reference]].type.numeric)))
+             (ops[index[r.odd]].type.numeric && !ops[index[r.reference]].type.numeric) ||
+             (dimensionless && cancels(r.odd) && !cancels(r.reference) &&
+              !holds_percentage(ops[index[r.reference]].node))))
             std::swap(r.odd, r.reference);
         const operand& op = ops[index[r.odd]];
         const operand& reference = ops[index[r.reference]];
@@ -3950,7 +3957,11 @@ class checker {
                 (std::abs(power) >= 2 && power == top && e != std::string_view::npos &&
                  std::strtol(std::string(written.substr(e + 1)).c_str(), nullptr, 10) == power) ||
                 (power == 1.0 && whole && digit >= 2.0 && digit < 10.0 && power == top &&
-                 holds_pi(ops[index[i]].node));
+                 holds_pi(ops[index[i]].node)) ||
+                // 3700 in Swamee-Jain's ε/(3700*D) with ε in mm and D in m: a published
+                // constant of two digits (3.7) beside a thousand.
+                (power >= 3.0 && power == top && digit > 1.0 &&
+                 std::abs(digit * 10.0 - std::round(digit * 10.0)) <= 1e-9 * digit);
             if (!folds)
                 continue;
             if (!second || first_found)
