@@ -451,11 +451,12 @@ TEST_CASE("advice beside a trade constant in the wrong units names the missing c
         // 24 h/d converts, and the 1.8 °F per K is what is missing (not 24/1.8 = 13.33).
         {"Φ_us = m_lb*c_us*(T_d - T_s)/24", "by 1.8"},
     };
-    for (const auto& [formula, advice] : cases) {
+    for (const auto& c : cases) {
+        const char* formula = c.first;
         CAPTURE(formula);
         const auto found = run(decl, formula);
         REQUIRE(count_of(found, plumb::rules::unit_scale) == 1);
-        CHECK(plumb::test::says(first_under(found, plumb::rules::unit_scale), advice));
+        CHECK(plumb::test::says(first_under(found, plumb::rules::unit_scale), c.second));
     }
 }
 
