@@ -383,3 +383,14 @@ TEST_CASE("advice for a rise set equal to a reading, and for the end of a range"
     CHECK_FALSE(says(first_under(range, plumb::rules::offset_scale), "declare it as"));
     passes(decl, {"ΔV = β*V*(θ_max - θ_min)"});
 }
+
+// A °F reading less a °C one (°F = 1.8·°C + 32, NIST SP 811 (2008), 4.2.1.1): the advice
+// converts the reading with its 32, not only its degrees with 1.8, which would leave the
+// difference 32 °F off.
+TEST_CASE("a °F reading less a °C reading: the advice converts the reading") {
+    const std::string decl = "q_w : gal/min\nQ_wB : Btu/h\nt_wo : °F\nT_2 : °C\n";
+    const auto found = run(decl, "q_w = Q_wB/(500*(t_wo - T_2))");
+    REQUIRE(count_of(found, plumb::rules::unit_scale) == 1);
+    CHECK(says(first_under(found, plumb::rules::unit_scale), "(1.8*T_2 + 32)"));
+    CHECK_FALSE(says(first_under(found, plumb::rules::unit_scale), "multiply"));
+}

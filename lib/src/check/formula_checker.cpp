@@ -3491,6 +3491,21 @@ class checker {
             factor.erase(0, 2);
             multiply = !multiply;
         }
+        // "t_wo - T_2" with a °F and a °C reading: the degrees' 1.8 alone leaves the scales'
+        // zeros 32 °F apart.
+        if (op.type.offset != nullptr && reference.type.offset != nullptr &&
+            op.type.offset != reference.type.offset && op.type.dim == temperature_dimension()) {
+            const bool op_celsius = std::abs(op.type.offset->factor - 1.0) < 1e-12;
+            d.notes.push_back(
+                {fmt::format(
+                     "convert the reading, not only its degrees: {} on the {} scale is {}",
+                     quote(op.node), reference.type.offset->symbol,
+                     op_celsius
+                         ? fmt::format("(1.8*{} + 32)", display_text(file_.nodes[op.node].range))
+                         : fmt::format("({} - 32)/1.8", display_text(file_.nodes[op.node].range))),
+                 {}});
+            return false;
+        }
         d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
                                        "write the conversion factor into the formula)",
                                        multiply ? "multiply" : "divide", quote(op.node), factor),
