@@ -394,3 +394,13 @@ TEST_CASE("a °F reading less a °C reading: the advice converts the reading") {
     CHECK(says(first_under(found, plumb::rules::unit_scale), "(1.8*T_2 + 32)"));
     CHECK_FALSE(says(first_under(found, plumb::rules::unit_scale), "multiply"));
 }
+
+// A percentage written out as its number over 100: the allowable drop is 10 % of the supply's
+// gauge pressure, p_g*10/100, as 0.1*p_g (a share of a gauge reading is a rise above the
+// atmosphere, common practice). The /100 is no unit conversion the units do not need.
+TEST_CASE("a percentage written as its number over 100") {
+    const std::string decl =
+        "measure mbarg = mbar zero at 1013.25 mbar\nΔp : mbar \"allowable pressure drop\"\n"
+        "p_g : mbarg\n";
+    passes(decl, {"Δp = p_g*10/100", "Δp = 0.1*p_g", "Δp = p_g/10"});
+}

@@ -4087,7 +4087,34 @@ class checker {
         }
     }
 
+    // "p_g*10/100": a percentage written as its number over 100 (10 % of the supply
+    // pressure), no unit conversion, where the number just before the /100 is a whole one up
+    // to 100.
+    bool percentage_written_out(const scale_literal& l) const {
+        if (l.exponent != -1.0 || l.value != 100.0)
+            return false;
+        const std::string_view all = file_.source->text(span{0, file_.nodes[l.node].range.begin});
+        std::size_t at = all.find_last_not_of(' ');
+        if (at == std::string_view::npos || all[at] != '/')
+            return false;
+        const std::size_t end = all.find_last_not_of(' ', at - 1);
+        if (end == std::string_view::npos || !std::isdigit(static_cast<unsigned char>(all[end])))
+            return false;
+        std::size_t begin = end;
+        while (begin > 0 && std::isdigit(static_cast<unsigned char>(all[begin - 1])))
+            --begin;
+        if (begin > 0 &&
+            (all[begin - 1] == '.' || std::isalpha(static_cast<unsigned char>(all[begin - 1])) ||
+             all[begin - 1] == '_'))
+            return false;
+        const long number =
+            std::strtol(std::string(all.substr(begin, end - begin + 1)).c_str(), nullptr, 10);
+        return number >= 1 && number <= 100;
+    }
+
     bool report_unneeded(const operand& op, const scale_literal& l) {
+        if (percentage_written_out(l))
+            return false;
         const double factor = std::pow(l.value, l.exponent);
         diagnostic& d =
             report(rules::unit_scale,
