@@ -147,6 +147,10 @@ constexpr double standard_atmosphere = 101325.0;
 // How far two reference temperatures may differ and still count as one: 15 °C against 60 °F,
 // and the gas trade's 14.73 psia beside 14.696, are 0.2 % apart (from memory).
 constexpr double reference_temperature_slack = 0.003;
+// How an actual gas volume becomes one at reference conditions (ideal gas, common practice).
+constexpr std::string_view state_correction_advice =
+    "an actual volume becomes a normal one times (p/p_n)*(T_n/T), with absolute pressures and "
+    "temperatures (p_n = 101.325 kPa; T_n = 273.15 K for Nm\u00B3, 288.15 K for Sm\u00B3)";
 
 // A number the trades write in place of a conversion (8.34, water's weight per gallon): where
 // the units agree without it, it is as much a factor not needed as a conversion would be
@@ -812,16 +816,7 @@ class checker {
             } else if (n.kind == expr_kind::number) {
                 // Conversions only: 600 (LNG's expansion) or 0.95 could be the
                 // correction itself.
-                const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
-                const double decade = std::round(std::log10(v));
-                const bool power_of_ten =
-                    v > 0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12;
-                // Q_cfm/35.31: a conversion between volume units (ft³ to m³) is no
-                // correction either.
-                const bool unit_ratio =
-                    looks_like_conversion(read_literal(text(n.range), v, at), false);
-                if (!power_of_ten && !unit_ratio && v != 60.0 && v != 3600.0 && v != 24.0 &&
-                    v != 1440.0 && v != 86400.0)
+                if (!plain_conversion_number(at))
                     return syntax::no_index;
             } else {
                 return syntax::no_index;
@@ -986,10 +981,7 @@ class checker {
                            actual_name, actual->unit_text, quote(sides[i].node), normal->unit_text),
                        file_.nodes[sides[1 - i].node].range);
             d.level = severity::warning;
-            d.notes.push_back({"an actual volume becomes a normal one times (p/p_n)*(T_n/T), "
-                               "with absolute pressures and temperatures (p_n = 101.325 kPa; T_n "
-                               "= 273.15 K for Nm³, 288.15 K for Sm³)",
-                               {}});
+            d.notes.push_back({std::string(state_correction_advice), {}});
             return;
         }
         report_actual_product_as_normal(sides);
@@ -1016,10 +1008,7 @@ class checker {
                         quote(sides[actual].node), quote(sides[normal].node), (a ? a : b)->name),
             file_.nodes[sides[1].node].range);
         d.level = severity::warning;
-        d.notes.push_back({"an actual volume becomes a normal one times (p/p_n)*(T_n/T), "
-                           "with absolute pressures and temperatures (p_n = 101.325 kPa; T_n "
-                           "= 273.15 K for Nm³, 288.15 K for Sm³)",
-                           {}});
+        d.notes.push_back({std::string(state_correction_advice), {}});
     }
 
     // A product of symbols with no pressure or temperature in them, and numbers that convert
@@ -1029,8 +1018,7 @@ class checker {
         const bool other = for_each_factor(k, [&](std::uint32_t at, int) {
             const syntax::expr_node& n = file_.nodes[at];
             if (n.kind == expr_kind::number)
-                return sole_symbol_times_conversions(at) == syntax::no_index &&
-                       !plain_conversion_number(at);
+                return !plain_conversion_number(at);
             if (n.kind != expr_kind::symbol)
                 return true;
             const symbol_entry* e = symbols_.find(text(n.range));
@@ -1044,8 +1032,9 @@ class checker {
         return !other && found_volume;
     }
 
-    // As sole_symbol_times_conversions reads its numbers: powers of ten, time ratios and unit
-    // ratios, never a number that could be a correction (0.95, 273.15).
+    // A number that only converts units: a power of ten, a time ratio, or a ratio of table
+    // units (Q_cfm/35.31, ft³ to m³); never one that could be a correction (0.95, 273.15,
+    // 600 for LNG's expansion).
     bool plain_conversion_number(std::uint32_t at) const {
         const double v = std::strtod(std::string(text(file_.nodes[at].range)).c_str(), nullptr);
         if (!(v > 0))
@@ -6138,36 +6127,37 @@ class checker {
     // own (%, °, ppm), the unit a number beside it may be written in.
     bool holds_scaled_ratio_unit(std::uint32_t k) const {
         return for_each_factor(k, [&](std::uint32_t at, int) {
-            const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind == expr_kind::symbol) {
-                const symbol_entry* e = symbols_.find(text(n.range));
-                return e != nullptr && e->dim && e->dim->is_dimensionless() && e->si_factor != 1.0;
-            }
-            if (n.kind == expr_kind::reference) {
-                const syntax::reference_value& cell = file_.references[n.lhs];
-                return cell.dim && cell.dim->is_dimensionless() && cell.scale != 1.0;
-            }
+            if (const std::optional<double> size = dimensionless_unit_size(at))
+                return *size != 1.0;
             // A group or a call that is itself in such a unit ((θ_1 + θ_2)/2) counts too.
-            return n.kind == expr_kind::call || n.kind == expr_kind::add ||
-                   n.kind == expr_kind::subtract || n.kind == expr_kind::power ||
-                   n.kind == expr_kind::negate;
+            const expr_kind kind = file_.nodes[at].kind;
+            return kind == expr_kind::call || kind == expr_kind::add ||
+                   kind == expr_kind::subtract || kind == expr_kind::power ||
+                   kind == expr_kind::negate;
         });
     }
 
     // Whether a product holds a symbol or a cell in percent, a dimensionless unit of 1/100.
     bool holds_percentage(std::uint32_t k) const {
         return for_each_factor(k, [&](std::uint32_t at, int) {
-            const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind == expr_kind::symbol) {
-                const symbol_entry* e = symbols_.find(text(n.range));
-                return e != nullptr && e->dim && e->dim->is_dimensionless() && e->si_factor == 0.01;
-            }
-            if (n.kind == expr_kind::reference) {
-                const syntax::reference_value& cell = file_.references[n.lhs];
-                return cell.dim && cell.dim->is_dimensionless() && cell.scale == 0.01;
-            }
-            return false;
+            return dimensionless_unit_size(at) == std::optional<double>(0.01);
         });
+    }
+
+    // The size of the dimensionless unit a symbol or a cell is declared in (0.01 for %, π/180
+    // for °); empty for anything else.
+    std::optional<double> dimensionless_unit_size(std::uint32_t at) const {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::symbol) {
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e != nullptr && e->dim && e->dim->is_dimensionless())
+                return e->si_factor;
+        } else if (n.kind == expr_kind::reference) {
+            const syntax::reference_value& cell = file_.references[n.lhs];
+            if (cell.dim && cell.dim->is_dimensionless())
+                return cell.scale;
+        }
+        return std::nullopt;
     }
 
     // "sin(pi*θ/360)" with θ in degrees, "ln(8000*L/d)" with L in m and d in mm (a ground
