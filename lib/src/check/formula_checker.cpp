@@ -12,6 +12,7 @@
 #include "check/type_stack.hpp"
 #include "check/typed_term.hpp"
 #include "model/difference_name.hpp"
+#include "model/subtree_search.hpp"
 #include "plumb/rules.hpp"
 #include "units/compact_dimension.hpp"
 #include "units/exact_factor.hpp"
@@ -34,6 +35,7 @@ namespace plumb {
 namespace {
 
 using syntax::expr_kind;
+using syntax::search_step;
 
 typed_term unknown_type(bool inferred = false) {
     typed_term t;
@@ -799,30 +801,17 @@ class checker {
     // The one symbol of a product of it and numbers that only convert units, else no_index.
     std::uint32_t sole_symbol_times_conversions(std::uint32_t k) const {
         std::uint32_t found = syntax::no_index;
-        std::vector<std::uint32_t> pending{k};
-        while (!pending.empty()) {
-            const std::uint32_t at = pending.back();
-            pending.pop_back();
+        const bool other = for_each_factor(k, [&](std::uint32_t at, int) {
             const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
-                pending.push_back(n.lhs);
-                pending.push_back(n.rhs);
-            } else if (n.kind == expr_kind::group) {
-                pending.push_back(n.lhs);
-            } else if (n.kind == expr_kind::symbol) {
-                if (found != syntax::no_index)
-                    return syntax::no_index;
+            if (n.kind == expr_kind::symbol) {
+                const bool second = found != syntax::no_index;
                 found = at;
-            } else if (n.kind == expr_kind::number) {
-                // Conversions only: 600 (LNG's expansion) or 0.95 could be the
-                // correction itself.
-                if (!plain_conversion_number(at))
-                    return syntax::no_index;
-            } else {
-                return syntax::no_index;
+                return second;
             }
-        }
-        return found;
+            // Conversions only: 600 (LNG's expansion) or 0.95 could be the correction itself.
+            return n.kind != expr_kind::number || !plain_conversion_number(at);
+        });
+        return other ? syntax::no_index : found;
     }
 
     // Visits the factors of a product, through '*', '/' and groups, each with the power it
@@ -953,8 +942,7 @@ class checker {
     // volume times numbers, with nothing that could correct it.
     [[gnu::noinline]] void report_actual_volume_as_normal(std::span<const operand> sides) {
         const auto symbol_of = [&](std::uint32_t k) -> const symbol_entry* {
-            while (file_.nodes[k].kind == expr_kind::group)
-                k = file_.nodes[k].lhs;
+            k = syntax::inside_brackets(file_, k);
             return file_.nodes[k].kind == expr_kind::symbol
                        ? symbols_.find(text(file_.nodes[k].range))
                        : nullptr;
@@ -1071,86 +1059,77 @@ class checker {
         int energies = 0; // in an energy unit (J, kWh), which no torque is written in
         int angular_speeds = 0;
         int inertias = 0;
-        std::vector<std::uint32_t> pending;
-        for (std::uint32_t i = 0; i < f.side_count; ++i)
-            pending.push_back(file_.sides[f.first_side + i].root);
-        while (!pending.empty()) {
-            const std::uint32_t k = pending.back();
-            pending.pop_back();
-            const syntax::expr_node& n = file_.nodes[k];
-            switch (n.kind) {
-            case expr_kind::pi:
-                return;
-            case expr_kind::number: {
-                // 2π, π or their inverses written as numbers (6.283, 3.1416, 0.159), and with a
-                // minute folded in (2π/60 = 0.1047 rad/s per rpm, 60/2π = 9.549).
-                const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
-                for (const double c :
-                     {2.0 * std::numbers::pi, std::numbers::pi, 0.5 / std::numbers::pi,
-                      1.0 / std::numbers::pi, std::numbers::pi / 30.0, 30.0 / std::numbers::pi})
-                    if (std::abs(v / c - 1.0) < 0.003)
-                        return;
-                break;
-            }
-            case expr_kind::symbol: {
-                const std::string_view name = text(n.range);
-                const symbol_entry* e = symbols_.find(name);
-                if (e == nullptr || !e->compact_dim)
-                    return;
-                const std::string_view unit = e->unit_text;
-                if ((unit_marks_of(unit) & counts_revolutions) != 0) {
-                    speed = e;
-                    speed_name = name;
-                    ++speeds;
-                } else if (*e->compact_dim == frequency_dim &&
-                           unit.find("rad") != std::string_view::npos) {
-                    partner = e;
-                    partner_name = name;
-                    ++angular_speeds;
-                } else if (*e->compact_dim == moment_of_inertia_dim) {
-                    if (angular_speeds == 0) {
+        // Found: a 2π written in the formula, or a term this rule cannot read.
+        const bool not_for_this_rule =
+            syntax::search_formula(file_, f, [&](std::uint32_t, const syntax::expr_node& n) {
+                switch (n.kind) {
+                case expr_kind::pi:
+                    return search_step::found;
+                case expr_kind::number: {
+                    // 2π, π or their inverses written as numbers (6.283, 3.1416, 0.159), and with a
+                    // minute folded in (2π/60 = 0.1047 rad/s per rpm, 60/2π = 9.549).
+                    const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
+                    for (const double c :
+                         {2.0 * std::numbers::pi, std::numbers::pi, 0.5 / std::numbers::pi,
+                          1.0 / std::numbers::pi, std::numbers::pi / 30.0, 30.0 / std::numbers::pi})
+                        if (std::abs(v / c - 1.0) < 0.003)
+                            return search_step::found;
+                    return search_step::skip;
+                }
+                case expr_kind::symbol: {
+                    const std::string_view name = text(n.range);
+                    const symbol_entry* e = symbols_.find(name);
+                    if (e == nullptr || !e->compact_dim)
+                        return search_step::found;
+                    const std::string_view unit = e->unit_text;
+                    if ((unit_marks_of(unit) & counts_revolutions) != 0) {
+                        speed = e;
+                        speed_name = name;
+                        ++speeds;
+                    } else if (*e->compact_dim == frequency_dim &&
+                               unit.find("rad") != std::string_view::npos) {
                         partner = e;
                         partner_name = name;
+                        ++angular_speeds;
+                    } else if (*e->compact_dim == moment_of_inertia_dim) {
+                        if (angular_speeds == 0) {
+                            partner = e;
+                            partner_name = name;
+                        }
+                        ++inertias;
+                    } else if (*e->compact_dim == energy_dim) {
+                        bool energy_unit_named = unit.empty();
+                        for (const std::string_view energy_unit :
+                             {"J", "Wh", "Btu", "BTU", "cal", "erg", "eV", "therm"})
+                            energy_unit_named = energy_unit_named ||
+                                                unit.find(energy_unit) != std::string_view::npos;
+                        if (energy_unit_named) {
+                            ++energies;
+                        } else {
+                            torque = e;
+                            torque_name = name;
+                            ++torques;
+                        }
+                    } else if (*e->compact_dim == power_dim) {
+                        ++powers;
                     }
-                    ++inertias;
-                } else if (*e->compact_dim == energy_dim) {
-                    bool energy_unit_named = unit.empty();
-                    for (const std::string_view energy_unit :
-                         {"J", "Wh", "Btu", "BTU", "cal", "erg", "eV", "therm"})
-                        energy_unit_named =
-                            energy_unit_named || unit.find(energy_unit) != std::string_view::npos;
-                    if (energy_unit_named) {
-                        ++energies;
-                    } else {
-                        torque = e;
-                        torque_name = name;
-                        ++torques;
-                    }
-                } else if (*e->compact_dim == power_dim) {
-                    ++powers;
+                    return search_step::skip;
                 }
-                break;
-            }
-            case expr_kind::call:
-                for (std::uint32_t a = 0; a < n.rhs; ++a)
-                    pending.push_back(file_.call_args[n.lhs + a]);
-                break;
-            case expr_kind::negate:
-            case expr_kind::group:
-                pending.push_back(n.lhs);
-                break;
-            case expr_kind::add:
-            case expr_kind::subtract:
-            case expr_kind::multiply:
-            case expr_kind::divide:
-            case expr_kind::power:
-                pending.push_back(n.lhs);
-                pending.push_back(n.rhs);
-                break;
-            default:
-                return;
-            }
-        }
+                case expr_kind::call:
+                case expr_kind::negate:
+                case expr_kind::group:
+                case expr_kind::add:
+                case expr_kind::subtract:
+                case expr_kind::multiply:
+                case expr_kind::divide:
+                case expr_kind::power:
+                    return search_step::descend;
+                default:
+                    return search_step::found;
+                }
+            });
+        if (not_for_this_rule)
+            return;
         if (speeds >= 1 && speed != nullptr && partner != nullptr &&
             (angular_speeds >= 1 || (inertias >= 1 && is_rotating_power_or_torque(sides_dim)))) {
             report_revolutions_beside_radians(f, *speed, speed_name, *partner, partner_name,
@@ -3108,8 +3087,7 @@ class checker {
             return false;
         for (std::uint32_t i = 0; i < current_->side_count; ++i) {
             std::uint32_t root = file_.sides[current_->first_side + i].root;
-            while (file_.nodes[root].kind == expr_kind::group)
-                root = file_.nodes[root].lhs;
+            root = syntax::inside_brackets(file_, root);
             if (root == node)
                 return true;
         }
@@ -3759,42 +3737,16 @@ class checker {
 
     // Whether a subtree squares something (D^2, d*d), as the area of a circle needs.
     bool squares_something(std::uint32_t node) const {
-        std::vector<std::uint32_t> pending{node};
-        while (!pending.empty()) {
-            const syntax::expr_node& n = file_.nodes[pending.back()];
-            pending.pop_back();
-            switch (n.kind) {
-            case expr_kind::power:
-                if (file_.nodes[n.rhs].kind == expr_kind::number &&
-                    text(file_.nodes[n.rhs].range) == "2")
-                    return true;
-                pending.push_back(n.lhs);
-                break;
-            case expr_kind::multiply:
-                if (file_.nodes[n.rhs].kind == expr_kind::symbol &&
-                    file_.nodes[n.lhs].kind == expr_kind::symbol &&
-                    text(file_.nodes[n.lhs].range) == text(file_.nodes[n.rhs].range))
-                    return true;
-                [[fallthrough]];
-            case expr_kind::divide:
-            case expr_kind::add:
-            case expr_kind::subtract:
-                pending.push_back(n.lhs);
-                pending.push_back(n.rhs);
-                break;
-            case expr_kind::group:
-            case expr_kind::negate:
-                pending.push_back(n.lhs);
-                break;
-            case expr_kind::call:
-                for (std::uint32_t a = 0; a < n.rhs; ++a)
-                    pending.push_back(file_.call_args[n.lhs + a]);
-                break;
-            default:
-                break;
-            }
-        }
-        return false;
+        return syntax::search_subtree(file_, node, [&](std::uint32_t, const syntax::expr_node& n) {
+            if (n.kind == expr_kind::power && file_.nodes[n.rhs].kind == expr_kind::number &&
+                text(file_.nodes[n.rhs].range) == "2")
+                return search_step::found;
+            if (n.kind == expr_kind::multiply && file_.nodes[n.rhs].kind == expr_kind::symbol &&
+                file_.nodes[n.lhs].kind == expr_kind::symbol &&
+                text(file_.nodes[n.lhs].range) == text(file_.nodes[n.rhs].range))
+                return search_step::found;
+            return search_step::descend;
+        });
     }
 
     bool accept_folded_coefficient(std::span<const operand> ops, std::span<const std::size_t> index,
@@ -4326,8 +4278,7 @@ class checker {
     // which height it stands for.
     bool read_local_atmosphere(const operand& sum) {
         std::uint32_t k = sum.node;
-        while (file_.nodes[k].kind == expr_kind::group)
-            k = file_.nodes[k].lhs;
+        k = syntax::inside_brackets(file_, k);
         const syntax::expr_node& n = file_.nodes[k];
         if (n.kind != expr_kind::add || !std::isfinite(sum.type.scale))
             return false;
@@ -4772,41 +4723,27 @@ class checker {
 
     // Whether a subtree holds a gauge pressure (a symbol or a workbook cell declared on one).
     bool holds_gauge(std::uint32_t node) const {
-        std::vector<std::uint32_t> pending{node};
-        while (!pending.empty()) {
-            const syntax::expr_node& n = file_.nodes[pending.back()];
-            pending.pop_back();
+        return syntax::search_subtree(file_, node, [&](std::uint32_t, const syntax::expr_node& n) {
             switch (n.kind) {
-            case expr_kind::multiply:
-            case expr_kind::divide:
-            case expr_kind::add:
-            case expr_kind::subtract:
-                pending.push_back(n.lhs);
-                pending.push_back(n.rhs);
-                break;
-            case expr_kind::group:
-            case expr_kind::negate:
-            case expr_kind::power:
-                pending.push_back(n.lhs);
-                break;
             case expr_kind::symbol: {
                 const symbol_entry* entry = symbols_.find(text(n.range));
-                if (entry != nullptr && entry->offset_unit != nullptr &&
-                    entry->offset_unit->scale == unit_scale::gauge)
-                    return true;
-                break;
+                return entry != nullptr && entry->offset_unit != nullptr &&
+                               entry->offset_unit->scale == unit_scale::gauge
+                           ? search_step::found
+                           : search_step::skip;
             }
             case expr_kind::reference: {
                 const syntax::reference_value& r = file_.references[n.lhs];
-                if (r.offset != nullptr && r.offset->scale == unit_scale::gauge)
-                    return true;
-                break;
+                return r.offset != nullptr && r.offset->scale == unit_scale::gauge
+                           ? search_step::found
+                           : search_step::skip;
             }
+            case expr_kind::call:
+                return search_step::skip;
             default:
-                break;
+                return search_step::descend;
             }
-        }
-        return false;
+        });
     }
 
     // One term of a product expanded into a sum: a number times declared symbols.
@@ -4899,8 +4836,7 @@ class checker {
     // "(235 + θ_1)": a °C reading plus a conductor's inferred zero of resistance, 234.5 or 235
     // for copper and 225 or 228 for aluminium (IEC 60034-1 and IEEE 112, from memory).
     bool from_inferred_zero_of_resistance(std::uint32_t node) const {
-        while (file_.nodes[node].kind == expr_kind::group)
-            node = file_.nodes[node].lhs;
+        node = syntax::inside_brackets(file_, node);
         const syntax::expr_node& n = file_.nodes[node];
         if (n.kind != expr_kind::add)
             return false;
@@ -4917,8 +4853,7 @@ class checker {
     }
 
     bool number_beside_one_cell(std::uint32_t node) const {
-        while (file_.nodes[node].kind == expr_kind::group)
-            node = file_.nodes[node].lhs;
+        node = syntax::inside_brackets(file_, node);
         const syntax::expr_node& n = file_.nodes[node];
         if (n.kind != expr_kind::divide)
             return false;
@@ -4932,10 +4867,8 @@ class checker {
     // practice): the number over the sum that reads it in the sum's unit is in that unit too.
     [[gnu::noinline]] bool same_number_over_its_sum(std::uint32_t numerator,
                                                     std::uint32_t denominator) const {
-        while (file_.nodes[numerator].kind == expr_kind::group)
-            numerator = file_.nodes[numerator].lhs;
-        while (file_.nodes[denominator].kind == expr_kind::group)
-            denominator = file_.nodes[denominator].lhs;
+        numerator = syntax::inside_brackets(file_, numerator);
+        denominator = syntax::inside_brackets(file_, denominator);
         const syntax::expr_node& top = file_.nodes[numerator];
         const syntax::expr_node& sum = file_.nodes[denominator];
         if (top.kind != expr_kind::number ||
@@ -4959,16 +4892,11 @@ class checker {
         if (!below.known || !below.point || !(below.dim == temperature_dimension()) ||
             std::abs(below.origin) <= 1.0)
             return false;
-        const auto ungroup = [&](std::uint32_t k) {
-            while (file_.nodes[k].kind == expr_kind::group)
-                k = file_.nodes[k].lhs;
-            return k;
-        };
         const auto constant = [&](std::uint32_t k) {
             const expr_kind kind = file_.nodes[k].kind;
             return kind == expr_kind::number || kind == expr_kind::quantity;
         };
-        const syntax::expr_node& sum = file_.nodes[ungroup(denominator)];
+        const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, denominator)];
         if (sum.kind != expr_kind::add)
             return false;
         // The reading is a symbol, or a group that makes one ((T_K - 273.15), the °C reading of
@@ -4982,19 +4910,21 @@ class checker {
         const std::uint32_t shift = reading == sum.lhs ? sum.rhs : sum.lhs;
         if (!reading_like(reading) || !constant(shift))
             return false;
-        const std::uint32_t top_node = ungroup(numerator);
+        const std::uint32_t top_node = syntax::inside_brackets(file_, numerator);
         if (constant(top_node))
             return top.known && top.offset == nullptr && !top.point &&
                    top.dim == temperature_dimension();
         if (top.offset == nullptr)
             return false;
         // The same reading times numbers: 17.625*t.
-        const std::string_view name = text(file_.nodes[ungroup(reading)].range);
+        const std::string_view name =
+            text(file_.nodes[syntax::inside_brackets(file_, reading)].range);
         std::size_t readings = 0;
         std::uint32_t k = top_node;
         for (;;) {
             const syntax::expr_node& f = file_.nodes[k];
-            const std::uint32_t factor = f.kind == expr_kind::multiply ? ungroup(f.rhs) : k;
+            const std::uint32_t factor =
+                f.kind == expr_kind::multiply ? syntax::inside_brackets(file_, f.rhs) : k;
             const expr_kind kind = file_.nodes[factor].kind;
             if (kind == expr_kind::symbol || kind == expr_kind::reference ||
                 kind == expr_kind::add || kind == expr_kind::subtract) {
@@ -5006,7 +4936,7 @@ class checker {
             }
             if (f.kind != expr_kind::multiply)
                 break;
-            k = ungroup(f.lhs);
+            k = syntax::inside_brackets(file_, f.lhs);
         }
         return readings == 1;
     }
@@ -5015,8 +4945,7 @@ class checker {
     // Tetens') is made on the °C reading, its constant 230 to 245 °C (Alduchov and Eskridge
     // 1996; ISO 13788, from memory); beside a kelvin reading the sum is some 273 K off.
     [[gnu::noinline]] void report_celsius_fit_beside_kelvins(std::uint32_t denominator) {
-        while (file_.nodes[denominator].kind == expr_kind::group)
-            denominator = file_.nodes[denominator].lhs;
+        denominator = syntax::inside_brackets(file_, denominator);
         const syntax::expr_node& sum = file_.nodes[denominator];
         if (sum.kind != expr_kind::add)
             return;
@@ -5059,32 +4988,21 @@ class checker {
     // "h_2 = h_1 + c_p*t_2": beside another enthalpy, c·t would be a change from it, which a
     // reading is not; the datum is read only where the side builds the enthalpy from readings.
     bool holds_specific_energy_symbol(std::uint32_t root) const {
-        std::vector<std::uint32_t> pending{root};
-        while (!pending.empty()) {
-            const syntax::expr_node& n = file_.nodes[pending.back()];
-            pending.pop_back();
+        return syntax::search_subtree(file_, root, [&](std::uint32_t, const syntax::expr_node& n) {
             switch (n.kind) {
-            case expr_kind::symbol:
-                if (const symbol_entry* e = symbols_.find(text(n.range));
-                    e != nullptr && e->compact_dim && *e->compact_dim == velocity_squared_dim)
-                    return true;
-                break;
-            case expr_kind::add:
-            case expr_kind::subtract:
-            case expr_kind::multiply:
-            case expr_kind::divide:
-                pending.push_back(n.lhs);
-                pending.push_back(n.rhs);
-                break;
-            case expr_kind::group:
-            case expr_kind::negate:
-                pending.push_back(n.lhs);
-                break;
-            default:
-                break;
+            case expr_kind::symbol: {
+                const symbol_entry* e = symbols_.find(text(n.range));
+                return e != nullptr && e->compact_dim && *e->compact_dim == velocity_squared_dim
+                           ? search_step::found
+                           : search_step::skip;
             }
-        }
-        return false;
+            case expr_kind::power:
+            case expr_kind::call:
+                return search_step::skip;
+            default:
+                return search_step::descend;
+            }
+        });
     }
 
     [[gnu::noinline]] void note_enthalpy_side(const operand& first, std::uint32_t root) {
@@ -5138,8 +5056,7 @@ class checker {
         const syntax::expr_node& n = file_.nodes[index];
         // The weights below are a sum: most quotients are not, and are not expanded.
         std::uint32_t denominator = n.rhs;
-        while (file_.nodes[denominator].kind == expr_kind::group)
-            denominator = file_.nodes[denominator].lhs;
+        denominator = syntax::inside_brackets(file_, denominator);
         if (file_.nodes[denominator].kind != expr_kind::add)
             return std::nullopt;
         expansion top;
@@ -5687,8 +5604,7 @@ class checker {
 
     // The number a reading less a number subtracts ("(T - 20)" gives 20), or 0.
     double reference_subtracted(std::uint32_t node) const {
-        while (file_.nodes[node].kind == expr_kind::group)
-            node = file_.nodes[node].lhs;
+        node = syntax::inside_brackets(file_, node);
         const syntax::expr_node& n = file_.nodes[node];
         if (n.kind != expr_kind::subtract || file_.nodes[n.rhs].kind != expr_kind::number)
             return 0.0;

@@ -8,6 +8,7 @@
 
 #include "check/functions.hpp"
 #include "check/restatement.hpp"
+#include "model/subtree_search.hpp"
 #include "plumb/check.hpp"
 #include "plumb/groups.hpp"
 #include "plumb/rules.hpp"
@@ -843,37 +844,18 @@ class reporter {
 
     // Whether the coefficient's formula holds numbers other than it and the exponents.
     bool holds_other_numbers(const unknown& x) const {
-        const syntax::formula& f = formulas_[x.formula];
-        std::vector<std::uint32_t> pending;
-        for (std::uint32_t i = 0; i < f.side_count; ++i)
-            pending.push_back(file_.sides[f.first_side + i].root);
-        while (!pending.empty()) {
-            const std::uint32_t k = pending.back();
-            pending.pop_back();
-            const syntax::expr_node& n = file_.nodes[k];
-            switch (n.kind) {
-            case syntax::expr_kind::number:
-            case syntax::expr_kind::quantity:
-                return true;
-            case syntax::expr_kind::power:
-                pending.push_back(n.lhs); // the exponent is the formula's
-                break;
-            case syntax::expr_kind::add:
-            case syntax::expr_kind::subtract:
-            case syntax::expr_kind::multiply:
-            case syntax::expr_kind::divide:
-                pending.push_back(n.lhs);
-                pending.push_back(n.rhs);
-                break;
-            case syntax::expr_kind::group:
-            case syntax::expr_kind::negate:
-                pending.push_back(n.lhs);
-                break;
-            default:
-                break;
-            }
-        }
-        return false;
+        return syntax::search_formula(
+            file_, formulas_[x.formula], [](std::uint32_t, const syntax::expr_node& n) {
+                switch (n.kind) {
+                case syntax::expr_kind::number:
+                case syntax::expr_kind::quantity:
+                    return syntax::search_step::found;
+                case syntax::expr_kind::call:
+                    return syntax::search_step::skip;
+                default: // a power's exponent, which is the formula's, is not searched
+                    return syntax::search_step::descend;
+                }
+            });
     }
 
     // Hazen-Williams h_f = k·L·Q^1.852/(C^1.852·D^4.87): k is 10.67 in SI units (metres,
