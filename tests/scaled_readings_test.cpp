@@ -39,6 +39,35 @@ TEST_CASE("a gauge reading times an allowance, plus the atmosphere, is absolute"
                     "@test-number p_t = 1.5*p_set"});
 }
 
+// A wellhead's gauge pressure from the bottom-hole pressure: p_wh = p_bh - 14.7 - p_hyd (the
+// hydrostatic column a drop, 14.7 psi the atmosphere, NIST SP 811 (2008), B.8, rounded;
+// common practice). An absolute reading less the atmosphere as a number is a gauge reading and
+// the pressures taken off besides are drops, in any order, as "p_g + p_fric + 14.7" reads the
+// pressures added as drops. Taking off an atmosphere named as such as well is an error, and so
+// is leaving the 14.7 out once the column is described as hydrostatic. Each once crashed or
+// passed.
+TEST_CASE("an absolute reading less the atmosphere and a drop is a gauge reading") {
+    const std::string decl = "p_wh : psig\np_bh : psia\nb : psi\np_atm : psia\n"
+                             "p_hyd : psi \"hydrostatic head of the water column\"\n"
+                             "Δp_t : psi \"tubing friction\"\n";
+    passes(decl,
+           {"p_wh = p_bh - 14.7 - b", "p_wh = p_bh - b - 14.7", "p_wh = p_bh - 101.325 {kPa} - b",
+            "p_wh = p_bh - 14.7 - p_hyd + Δp_t", "p_wh = p_bh - p_atm - p_hyd"});
+    fails_with(decl,
+               {"p_wh = p_bh - p_atm - 14.7", "p_wh = p_bh - p_atm - 14.7 - b",
+                "p_wh = p_bh - p_hyd + Δp_t"},
+               plumb::rules::offset_scale);
+}
+
+TEST_CASE("a number that moves the zero of a difference is reported, not a crash") {
+    // Two absolute readings added and two taken off cancel; the number then shifts a zero no
+    // term has. (With one reading added, the same sum once crashed: see the test above.)
+    const std::string decl = "x : psi\np_1, p_2, p_3, p_4 : psia\n";
+    const auto found = run(decl, "x = p_1 + p_2 - p_3 - p_4 - 14.7");
+    REQUIRE(count_of(found, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(found, plumb::rules::offset_scale), "no zero"));
+}
+
 TEST_CASE("a gauge reading times a ratio or an allowance, set equal to an absolute pressure") {
     // Without the atmosphere, or with the atmosphere in another unit, or converted by a
     // factor with the atmosphere of the other unit: each stays on the gauge scale.
@@ -351,6 +380,23 @@ TEST_CASE("an enthalpy from the 0 °C datum of the tables") {
     }
     passes(decl, {"h_feed = h_1 + c_w*(t - 20)"});
     fails_with(decl, {"q = c_w*t", "h_us = c_us*t_F", "h_feed = h_1 + c_w*t"},
+               plumb::rules::offset_scale);
+}
+
+// The same moist-air enthalpy with its constants declared as symbols (ASHRAE Handbook,
+// Fundamentals, ch. 1, from memory: c_pa 1.006, h_g0 2501 kJ/kg, c_pv 1.86): the vapour's
+// enthalpy at 0 °C stands inside the product with W, counted from the same datum, and is no
+// other enthalpy beside c·t. With W in g/kg the 1000 is reported, and a stand-alone enthalpy
+// term still makes c·t a change from it.
+TEST_CASE("moist air's enthalpy with its constants declared") {
+    const std::string decl = "h_1 : kJ/kg\nh_0 : kJ/kg\nt_1 : °C\nW_1 : kg/kg\nW_g : g/kg\n"
+                             "c_pa : kJ/(kg*K) = 1.006\nc_pv : kJ/(kg*K) = 1.86\n"
+                             "h_g0 : kJ/kg = 2501 \"enthalpy of saturated vapour at 0 °C\"\n";
+    const auto found = run(decl, "h_1 = c_pa*t_1 + W_1*(h_g0 + c_pv*t_1)");
+    CHECK(problems_in(found) == 0);
+    CHECK(count_of(found, plumb::rules::trade_constant) >= 1);
+    fails_with(decl, {"h_1 = c_pa*t_1 + W_g*(h_g0 + c_pv*t_1)"}, plumb::rules::unit_scale);
+    fails_with(decl, {"h_1 = h_0 + c_pa*t_1", "h_1 = c_pa*t_1 + h_0 + W_1*c_pv*t_1"},
                plumb::rules::offset_scale);
 }
 

@@ -2545,6 +2545,8 @@ class checker {
         int points = 0;
         int gauges = 0;
         int absolute_pressures_added = 0;
+        int absolute_pressures_subtracted = 0;
+        bool atmosphere_subtracted = false;
         int offset_temperatures = 0;
         int kelvins_added = 0;
         double gauge_zero = 0.0;
@@ -2583,6 +2585,10 @@ class checker {
             } else if (t.type.offset == nullptr && t.type.dim == pressure_dimension() &&
                        !t.subtracted) {
                 ++absolute_pressures_added;
+            } else if (t.type.offset == nullptr && t.type.dim == pressure_dimension() &&
+                       !negative) {
+                ++absolute_pressures_subtracted;
+                atmosphere_subtracted = atmosphere_subtracted || names_atmosphere(t.node);
             } else if (t.type.offset != nullptr && t.type.dim == temperature_dimension() &&
                        !t.subtracted) {
                 ++offset_temperatures;
@@ -2615,6 +2621,23 @@ class checker {
             points -= absolute_pressures_added;
             if (weight)
                 weight = *weight - rational(absolute_pressures_added);
+        }
+        // The mirror: "p_bh - 14.7 - p_hyd", an absolute reading less the atmosphere written as
+        // a number, is a gauge reading, and the further pressures subtracted are drops; unless
+        // one of them names the atmosphere, which would then be taken off twice.
+        bool number_subtracted = false;
+        for (const auto& t : terms)
+            number_subtracted = number_subtracted || (is_shift_candidate(t) && t.subtracted);
+        if (gauges == 0 && number_subtracted && !number_added && absolute_pressures_added == 1 &&
+            absolute_pressures_subtracted > 0 && !atmosphere_subtracted) {
+            points += absolute_pressures_subtracted;
+            if (weight)
+                weight = *weight + rational(absolute_pressures_subtracted);
+        }
+        if (gauges == 0 && number_subtracted && atmosphere_subtracted &&
+            absolute_pressures_added == 1 && report_atmosphere_taken_twice(terms, only)) {
+            cut_literals_to(literal_base);
+            return unknown_type();
         }
         // `unit_tolerance`: how far the unit may be off, relative, when rounded numbers
         // converted it (6.895 for 6.894757 in "6.895*p_g + 101.325").
@@ -3131,9 +3154,14 @@ class checker {
         }
         if (on_offset == nullptr)
             on_offset = &terms.front();
-        const unit_definition& unit =
-            *scale_named(on_offset->type.origin, 0.0, on_offset->type.dim, terms);
         const bool temperature = on_offset->type.dim == temperature_dimension();
+        const unit_definition* named =
+            scale_named(on_offset->type.origin, 0.0, on_offset->type.dim, terms);
+        if (named == nullptr) {
+            report_shifted_difference(terms, difference, temperature);
+            return;
+        }
+        const unit_definition& unit = *named;
         diagnostic& d = report(
             rules::offset_scale,
             other != nullptr
@@ -3164,6 +3192,85 @@ class checker {
                  : std::string("convert first: a gauge reading plus the atmospheric pressure is "
                                "absolute"),
              {}});
+    }
+
+    // "p_a - 14.7 - p_h" with every pressure absolute: the readings cancel to a difference,
+    // which has no zero for the number to move. Most often one of the pressures subtracted is
+    // a drop, not a reading, and only its name does not say so.
+    void report_shifted_difference(std::span<const operand> terms, double difference,
+                                   bool temperature) {
+        const operand* number = nullptr;
+        const operand* subtracted = nullptr;
+        for (const auto& t : terms) {
+            if (is_shift_candidate(t) && number == nullptr)
+                number = &t;
+            else if (t.subtracted && t.type.known && t.type.point && subtracted == nullptr)
+                subtracted = &t;
+        }
+        const operand& at = number != nullptr ? *number : terms.front();
+        diagnostic& d = report(
+            rules::offset_scale,
+            fmt::format("the readings in this sum cancel to a difference, which has no zero, "
+                        "yet {} moves the zero by {} {}",
+                        number != nullptr ? quote(number->node) : std::string("a number"),
+                        format_factor(std::abs(difference)), temperature ? "K" : "Pa"),
+            file_.nodes[at.node].range);
+        add_term(d, at);
+        if (subtracted != nullptr)
+            d.notes.push_back(
+                {fmt::format("{} is read as a reading on an absolute scale; if it is a drop or "
+                             "a rise (a loss, a column of liquid), say so in its name (\u0394{}) "
+                             "or its description (\"... drop\"), and the number is then the "
+                             "scale's zero",
+                             quote(subtracted->node), text(file_.nodes[subtracted->node].range)),
+                 {}});
+    }
+
+    // "p_bh - p_atm - 14.7": the atmosphere taken off as a symbol and again as a number.
+    bool report_atmosphere_taken_twice(std::span<const operand> terms, std::size_t only) {
+        double taken = 0.0;
+        const operand* number = nullptr;
+        const operand* atmosphere = nullptr;
+        for (const auto& t : terms) {
+            if (is_shift_candidate(t) && t.subtracted) {
+                const shift s = shift_of(t);
+                taken -= s.si + s.written * terms[only].type.scale;
+                number = &t;
+            } else if (t.subtracted && names_atmosphere(t.node)) {
+                atmosphere = &t;
+            }
+        }
+        if (number == nullptr || atmosphere == nullptr ||
+            !(std::abs(taken / standard_atmosphere - 1.0) < 0.05))
+            return false;
+        diagnostic& d = report(rules::offset_scale,
+                               fmt::format("{} and {} both take off the atmosphere: the result is "
+                                           "one atmosphere below the gauge reading",
+                                           quote(atmosphere->node), quote(number->node)),
+                               file_.nodes[number->node].range);
+        add_term(d, *atmosphere);
+        add_term(d, *number);
+        d.notes.push_back({"an absolute pressure less the atmosphere is the gauge reading; take "
+                           "it off once",
+                           {}});
+        return true;
+    }
+
+    // Whether a term is a symbol named or described as the atmosphere or a barometer.
+    bool names_atmosphere(std::uint32_t node) const {
+        node = syntax::inside_brackets(file_, node);
+        if (file_.nodes[node].kind != expr_kind::symbol)
+            return false;
+        const std::string_view name = text(file_.nodes[node].range);
+        const symbol_entry* e = symbols_.find(name);
+        const std::string_view description = e != nullptr ? e->description : std::string_view();
+        for (const std::string_view word : {"atm", "baro", "amb"})
+            if (name.find(word) != std::string_view::npos)
+                return true;
+        for (const std::string_view word : {"atmospher", "barometr", "barometer", "ambient"})
+            if (description.find(word) != std::string_view::npos)
+                return true;
+        return false;
     }
 
     // The SI value of "14.7 {psi}" or "{p_atm}".
@@ -4987,7 +5094,10 @@ class checker {
 
     // "h_2 = h_1 + c_p*t_2": beside another enthalpy, c·t would be a change from it, which a
     // reading is not; the datum is read only where the side builds the enthalpy from readings.
-    bool holds_specific_energy_symbol(std::uint32_t root) const {
+    // A specific energy inside a product is part of the same build, counted from the same
+    // datum: the latent heat in h = c_a*t + W*(h_g0 + c_v*t) (ASHRAE Fundamentals, ch. 1,
+    // moist air; from memory) or in h = c_w*t + x*h_fg.
+    bool holds_specific_energy_term(std::uint32_t root) const {
         return syntax::search_subtree(file_, root, [&](std::uint32_t, const syntax::expr_node& n) {
             switch (n.kind) {
             case expr_kind::symbol: {
@@ -4996,17 +5106,19 @@ class checker {
                            ? search_step::found
                            : search_step::skip;
             }
-            case expr_kind::power:
-            case expr_kind::call:
-                return search_step::skip;
-            default:
+            case expr_kind::add:
+            case expr_kind::subtract:
+            case expr_kind::group:
+            case expr_kind::negate:
                 return search_step::descend;
+            default:
+                return search_step::skip;
             }
         });
     }
 
     [[gnu::noinline]] void note_enthalpy_side(const operand& first, std::uint32_t root) {
-        if (names_specific_enthalpy(first) && !holds_specific_energy_symbol(root))
+        if (names_specific_enthalpy(first) && !holds_specific_energy_term(root))
             enthalpy_side_ = root;
     }
 

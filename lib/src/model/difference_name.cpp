@@ -23,8 +23,9 @@ bool names_a_difference(std::string_view name, std::string_view description) {
         if (c >= 'A' && c <= 'Z')
             c = static_cast<char>(c - 'A' + 'a');
     description = lower;
-    for (const std::string_view word : {"difference", "rise", "drop", "loss", "change", "increase",
-                                        "decrease", "approach", "range", "gradient", "swing"})
+    for (const std::string_view word :
+         {"difference", "rise", "drop", "loss", "change", "increase", "decrease", "approach",
+          "range", "gradient", "swing", "hydrostatic"})
         for (std::size_t at = description.find(word); at != std::string_view::npos;
              at = description.find(word, at + 1)) {
             std::size_t end = at + word.size();
