@@ -319,6 +319,24 @@ TEST_CASE("the air trade's moisture numbers: 4.5, 0.68 and 4840") {
     }
 }
 
+// Water's molar concentration: ρ_w/M_w, 998.2 kg/m³ at 20 °C (CRC Handbook, from memory) over
+// 18.015 g/mol (IUPAC standard atomic weights, from memory), 55.41 kmol/m³; a Henry constant
+// on the mole-fraction basis over 55.5 is the same on the concentration basis for dilute water
+// (common practice). The hours of a year: 8760 (365 d), in annual energies (common practice).
+TEST_CASE("water's molar concentration and the hours of a year as numbers") {
+    CHECK(998.2 / 18.015 == doctest::Approx(55.41).epsilon(1e-3));
+    const std::string decl = "H_x : bar\nH_c : bar*m^3/kmol\nE_MWh : MWh\nP_kW : kW\n"
+                             "E_kWh : kWh\nL_d : m\n";
+    passes_with_one_note(decl, {"H_c = H_x/55.5", "E_MWh = P_kW*8760/1000", "P_kW = E_kWh/8760"},
+                         plumb::rules::trade_constant);
+    // The 1000 left out, days for hours, and 55.5 where no amount is missing stay findings.
+    for (const char* formula :
+         {"E_MWh = P_kW*8760", "E_MWh = P_kW*365/1000", "H_c = H_x/56.5", "L_d = 55.5"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 1);
+    }
+}
+
 // ppm by volume to mass concentration: c = C·M/V_m, with V_m = R·T/p (R = 8.314462618 J/(mol·K),
 // CODATA 2018): 24.465 L/mol at 25 °C and 101.325 kPa, which the air trade prints as 24.45;
 // 385.3 scf/lbmol at 68 °F (ft³ = 0.028316846592 m³, lb = 0.45359237 kg: NIST SP 811 (2008)

@@ -199,6 +199,8 @@ TEST_CASE("energy, power and temperature (NIST SP 811 (2008), Appendix B.8/B.9)"
     check_exact("cal_th", energy, 4.184); // 4.184 E+00, exact
     check_exact("kcal", energy, 4186.8);  // kilocalorie_IT 4.1868 E+03, exact
     check_exact("kWh", energy, 3.6e6);    // 3.6 E+06, exact
+    check_exact("GWh", energy, 3.6e12);   // kW·h × 10⁶, generation reports (common practice)
+    check_exact("TWh", energy, 3.6e15);   // kW·h × 10⁹
     check_printed("hp", typed(1, 2, -3), 7.456999e2, 1e-4);
 
     const dimension temperature = typed(0, 0, 0, 1);

@@ -960,6 +960,24 @@ class checker {
             if (actual == nullptr || actual->unit_text.empty() ||
                 (unit_marks_of(actual->unit_text) & at_reference_conditions) != 0)
                 return;
+            // Free air is at the intake, some 15 to 35 °C: near a standard volume's 15 °C or
+            // 60 °F, but 5 to 13 % from a normal one's 0 °C.
+            const std::optional<reference_volume> reference = reference_volume_of(sides[i].node);
+            if (describes_free_air(*actual) && reference && reference->kelvins >= 288.0) {
+                diagnostic& d = report(
+                    rules::unit_scale,
+                    fmt::format("'{}' is free air, a volume at the compressor's intake, near the "
+                                "atmosphere, and is read as one at {}'s reference conditions",
+                                actual_name, normal->unit_text),
+                    file_.nodes[sides[1 - i].node].range);
+                d.level = severity::note;
+                d.notes.push_back({"free air delivered is stated at the intake's pressure and "
+                                   "temperature (ISO 1217, from memory), a few per cent from the "
+                                   "reference state; correct it by (p/p_n)*(T_n/T) where that "
+                                   "matters",
+                                   {}});
+                return;
+            }
             diagnostic& d =
                 report(rules::unit_scale,
                        fmt::format(
@@ -973,6 +991,17 @@ class checker {
             return;
         }
         report_actual_product_as_normal(sides);
+    }
+
+    // A volume described as free air ("l/min FAD", "free-air consumption"): the compressor
+    // trade's air at the intake, which it converts to standard volumes by the unit alone.
+    static bool describes_free_air(const symbol_entry& e) {
+        std::string lower(e.description);
+        for (char& c : lower)
+            c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+        return e.description.find("FAD") != std::string_view::npos ||
+               lower.find("free air") != std::string::npos ||
+               lower.find("free-air") != std::string::npos;
     }
 
     // "Q_act = r_air*A_f" with r_air in Nm³/(m²·h) and Q_act in m³/h: the same where a side

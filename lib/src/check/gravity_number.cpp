@@ -21,8 +21,8 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<carried_quantity, 13>& quantities() {
-    static const std::array<carried_quantity, 13> table = [] {
+const std::array<carried_quantity, 15>& quantities() {
+    static const std::array<carried_quantity, 15> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -57,7 +57,7 @@ const std::array<carried_quantity, 13>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 13>{{
+        return std::array<carried_quantity, 15>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -160,6 +160,22 @@ const std::array<carried_quantity, 13>& quantities() {
              "declare it with its unit (M_a : g/mol = 28.97) to say so",
              "write the molar mass in a cell that holds its unit to say so", mass / amount,
              0.02896442, 0.02897},
+            // Water's molar concentration ρ_w/M_w with M_w = 18.015 g/mol (IUPAC standard
+            // atomic weights, from memory) over water's densities from 0 to 30 °C: 55.27 to
+            // 55.51 kmol/m³, the 55.5 of a Henry constant turned from mole fraction to
+            // concentration in dilute water (common practice).
+            {rules::trade_constant, "the molar concentration of water", "c_w = \u03C1_w/M_w",
+             "1/c_w", " (water between 0 and 30 \u00B0C: 55.27 to 55.51 kmol/m\u00B3)",
+             "declare it with its unit (c_w : kmol/m^3 = 55.5) to say so",
+             "write the molar concentration in a cell that holds its unit to say so",
+             amount / (length * length * length), water_least / 0.018015,
+             water_greatest / 0.018015},
+            // The hours of a year: 8760 for 365 days, 8766 for 365.25, 8784 for a leap year
+            // (common practice), in annual energies and running costs.
+            {rules::trade_constant, "the length of a year", "1 a = 8760 h", "1/(1 a)",
+             " (365 to 366 days)", "declare the hours with their unit (t_a : h = 8760) to say so",
+             "write the hours in a cell marked h to say so", time, 365.0 * 86400.0,
+             366.0 * 86400.0},
         }};
     }();
     return table;

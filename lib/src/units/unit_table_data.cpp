@@ -387,6 +387,10 @@ constexpr unit_definition rows[] = {
     absolute("kWh", "kilowatt hour", energy, 3.6e6, "3600000", prefixes::refused, nist),
     absolute("MWh", "megawatt hour", energy, 3.6e9, "3600000000", prefixes::refused,
              "NIST SP 811 (2008), B.8 (kW·h) × 1000"),
+    absolute("GWh", "gigawatt hour", energy, 3.6e12, "3600000000000", prefixes::refused,
+             "NIST SP 811 (2008), B.8 (kW·h) × 10⁶"),
+    absolute("TWh", "terawatt hour", energy, 3.6e15, "3600000000000000", prefixes::refused,
+             "NIST SP 811 (2008), B.8 (kW·h) × 10⁹"),
 
     // Power: 550 ft·lbf/s.
     absolute("hp", "horsepower (550 ft·lbf/s)", power, 745.69987158227022, "745.69987158227022",
