@@ -113,6 +113,23 @@ TEST_CASE("an angle in degrees inside sin, cos or tan: the conversion is written
     passes(angles + "K_a : 1\n", {"K_a = tan((45 - θ/2)*π/180)^2"});
 }
 
+// A sprocket's pitch diameter D = p/sin(180°/N) (ANSI B29.1, from memory). With the degrees
+// written as a quantity the angle is plain and passes; typed bare, 180/N is taken in radians,
+// the commonest slip with it, and so are 360/N and 90 beside a count. A π written out, or a 180
+// that divides (sin(r/180)), is no such slip.
+TEST_CASE("degrees written out in a trig function's argument, with and without their unit") {
+    const std::string decl = "D, p : mm\nN, r : 1\n";
+    passes(decl,
+           {"D = p/sin(180 {deg}/N)", "D = p/sin(π/N)", "D = p/sin(3.1416/N)", "D = p*sin(r/180)"});
+    const auto bare = run(decl, "D = p/sin(180/N)");
+    REQUIRE(count_of(bare, plumb::rules::unit_scale) == 1);
+    CHECK(says(first_under(bare, plumb::rules::unit_scale), "reads as degrees"));
+    CHECK(says(first_under(bare, plumb::rules::unit_scale), "180 {deg}"));
+    fails_with(decl, {"D = p/tan(360/N)", "D = p*cos(90*r)"}, plumb::rules::unit_scale);
+    // The inverse functions take a ratio, not an angle.
+    passes("φ : rad\nr : 1\n", {"φ = asin(r/2)"});
+}
+
 // A reading multiplied: the fix offered must suit the physics where the dimension can tell
 // (a coefficient per degree of a volume, β·V·ΔT; a heat flow per degree, ṁ·c_p·ΔT; common
 // practice) and give both fixes, each with the laws it suits, where it cannot (ρ·c_p·T has

@@ -6247,11 +6247,101 @@ class checker {
         return false;
     }
 
+    // The functions that take an angle: sin, cos and tan, and the reciprocal ones, in either
+    // front end's spelling (not asin, whose argument is a ratio, nor sinh).
+    static bool takes_an_angle(std::string_view name) {
+        std::string lower(name);
+        for (char& c : lower)
+            c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+        for (const std::string_view angle : {"sin", "cos", "tan", "cot", "sec", "csc"})
+            if (lower == angle)
+                return true;
+        return false;
+    }
+
+    // "sin(180 {deg}/N)": an angle whose degrees the formula writes out as a quantity is an
+    // angle, whatever its unit, and sin of it is the sine of that angle. A symbol declared in
+    // degrees stays a number in degrees, which a spreadsheet or a script would take as radians.
+    bool angle_written_in_degrees(const operand& a) const {
+        if (!a.type.known || std::abs(a.type.scale * 180.0 / std::numbers::pi - 1.0) > 1e-9)
+            return false;
+        bool quantity_in_degrees = false;
+        const bool other = for_each_factor(a.node, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::quantity) {
+                const syntax::quantity_literal& q = file_.quantities[n.lhs];
+                if (q.dim && q.dim->is_dimensionless() &&
+                    std::abs(q.si_factor * 180.0 / std::numbers::pi - 1.0) < 1e-9)
+                    quantity_in_degrees = true;
+                return false;
+            }
+            const std::optional<double> size = dimensionless_unit_size(at);
+            return size && *size != 1.0;
+        });
+        return quantity_in_degrees && !other;
+    }
+
+    // "sin(180/N)": the handbook's sin(180°/N) typed without its degree sign, so the sine of
+    // 180/N radians. A whole 90, 180 or 360 multiplying the argument, with no π anywhere in it,
+    // reads as degrees.
+    void report_degrees_taken_as_radians(const builtin_function& f, const operand& a) {
+        if (!a.type.known || !a.type.dim.is_dimensionless())
+            return;
+        std::uint32_t degrees = syntax::no_index;
+        bool pi_written = false;
+        for_each_factor(a.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::pi || n.kind == expr_kind::quantity ||
+                (dimensionless_unit_size(at).value_or(1.0) != 1.0)) {
+                pi_written = true;
+                return true;
+            }
+            if (n.kind != expr_kind::number)
+                return false;
+            const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
+            for (const double c :
+                 {std::numbers::pi, 2.0 * std::numbers::pi, std::numbers::pi / 180.0,
+                  180.0 / std::numbers::pi, std::numbers::pi / 2.0})
+                if (std::abs(v / c - 1.0) < 0.003) {
+                    pi_written = true;
+                    return true;
+                }
+            if (sign > 0 && (v == 90.0 || v == 180.0 || v == 360.0))
+                degrees = at;
+            return false;
+        });
+        if (pi_written || degrees == syntax::no_index)
+            return;
+        const std::string_view number = text(file_.nodes[degrees].range);
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("{} in the argument of {} reads as degrees, but {} "
+                               "takes radians: as written it is {} radians",
+                               number, f.name, f.name, display_text(file_.nodes[a.node].range)),
+                   file_.nodes[degrees].range);
+        d.level = severity::warning;
+        d.notes.push_back(
+            {file_.functions == syntax::function_names::spreadsheet
+                 ? fmt::format("write PI() for 180 (or RADIANS() around the angle)")
+                 : fmt::format("write the angle in radians ({} for {}), or give the degrees "
+                               "their unit: {} {{deg}}",
+                               number == "90" ? "\u03C0/2"
+                                              : (number == "180" ? "\u03C0" : "2\u03C0"),
+                               number, number),
+             {}});
+    }
+
     void require_unit_free(const builtin_function& f, const operand& a) {
+        const bool angle = takes_an_angle(f.name);
+        if (angle && angle_written_in_degrees(a))
+            return;
         diagnostic* found =
             report_units_not_cancelling(a, fmt::format("the argument of {}", f.name));
-        if (found == nullptr)
+        if (found == nullptr) {
+            if (angle)
+                report_degrees_taken_as_radians(f, a);
             return;
+        }
         diagnostic& d = *found;
         const std::array<scaled_operand, 2> parts{scaled(a.type, false), scaled_operand{}};
         // sin(β) with β in degrees: the written number is taken as radians where the formula is
