@@ -430,6 +430,20 @@ TEST_CASE("a Magnus fit's constant beside a kelvin reading") {
                   "x = T_c/(T_c + 5)"});
 }
 
+// The same fit solved for the temperature: the dew point t_dp = b·γ/(a − γ) with γ = ln φ +
+// a·t/(b + t), a = 17.625 and b = 243.04 °C (Alduchov and Eskridge 1996, from memory), is a
+// reading on the °C scale the fit was made on. Without the fit's denominator, or with a
+// constant that is no Magnus b, the product is a difference set equal to a reading.
+TEST_CASE("the Magnus fit solved for the dew point gives a °C reading") {
+    const std::string decl = "γ_m, φ : 1\nt_dp, t_r : °C\n";
+    passes(decl, {"γ_m = ln(φ) + 17.625*t_r/(243.04 {Δ°C} + t_r)",
+                  "t_dp = 243.04 {Δ°C}*γ_m/(17.625 - γ_m)"});
+    fails_with(decl,
+               {"t_dp = 243.04 {Δ°C}*γ_m", "t_dp = 100 {Δ°C}*γ_m/(17.625 - γ_m)",
+                "t_dp = 243.04 {Δ°C}*γ_m/(2 - γ_m)"},
+               plumb::rules::offset_scale);
+}
+
 // Advice that must not lead to a wrong formula that passes. A transformer's hot-spot rise in
 // K set equal to the hot spot's °C reading (IEC 60076-7 counts the rise above ambient, from
 // memory): adding 273.15 would hide the slip, so the advice names the rise. And the top end

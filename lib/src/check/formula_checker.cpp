@@ -4236,6 +4236,42 @@ class checker {
             {fmt::format("as written the result is {} times its true value", times), {}});
     }
 
+    static bool celsius_reading(const operand& o) {
+        return o.type.known && o.type.point && o.type.offset != nullptr &&
+               o.type.dim == temperature_dimension() &&
+               std::abs(o.type.offset->offset - 273.15) < 1e-9;
+    }
+
+    // "t_dp = 243.04 {Δ°C}*γ/(17.625 - γ)": the Magnus fit solved for the temperature (the dew
+    // point from γ = ln φ + 17.625·t/(243.04 + t), Alduchov and Eskridge 1996, from memory)
+    // gives a reading on the °C scale the fit was made on, though its form is a difference
+    // times a ratio. Known by its constants: b from 235 to 260 °C and a from 17 to 18.
+    bool magnus_solved_for_reading(const operand& o) const {
+        if (!o.type.known || o.type.point || !(o.type.dim == temperature_dimension()))
+            return false;
+        bool b_constant = false;
+        bool a_over = false;
+        const bool other = for_each_factor(o.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::quantity && sign > 0) {
+                const double v = quantity_si_value(n);
+                b_constant = b_constant || (v >= 235.0 && v <= 260.0);
+                return false;
+            }
+            if ((n.kind == expr_kind::add || n.kind == expr_kind::subtract) && sign < 0) {
+                const std::uint32_t first = syntax::inside_brackets(file_, n.lhs);
+                if (n.kind == expr_kind::subtract && file_.nodes[first].kind == expr_kind::number) {
+                    const double a =
+                        std::strtod(std::string(text(file_.nodes[first].range)).c_str(), nullptr);
+                    a_over = a_over || (a >= 17.0 && a <= 18.0);
+                }
+                return false;
+            }
+            return n.kind != expr_kind::symbol && n.kind != expr_kind::number;
+        });
+        return !other && b_constant && a_over;
+    }
+
     // "T_K = T_C": readings on scales with different zeros set equal or compared.
     // `relation`: "equation", "limit" or "lookup", as the finding names what it is in.
     [[gnu::always_inline]] void check_origins(std::span<const operand> sides,
@@ -4312,6 +4348,9 @@ class checker {
             };
             if ((share_of_gauge(*reference) && a_difference(side)) ||
                 (share_of_gauge(side) && a_difference(*reference)))
+                continue;
+            if ((celsius_reading(*reference) && magnus_solved_for_reading(side)) ||
+                (celsius_reading(side) && magnus_solved_for_reading(*reference)))
                 continue;
             const operand& off = side.type.offset != nullptr ? side : *reference;
             const operand& other = &off == &side ? *reference : side;
