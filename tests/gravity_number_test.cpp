@@ -337,6 +337,22 @@ TEST_CASE("water's molar concentration and the hours of a year as numbers") {
     }
 }
 
+// The same density of air in a coil's total load from the enthalpy difference (ASHRAE
+// Fundamentals, ch. 1 and the air trade's q = 4.5·cfm·Δh in Btu/h with h in Btu/lb, 1.2·(L/s)·Δh
+// in W with h in kJ/kg; common practice): 1.2 kg/m³ × 0.001 m³/s × 1000 J/kg is 1.2 W.
+TEST_CASE("the density of air in a total load from an enthalpy difference") {
+    const std::string decl = "q_B : Btu/h\nQ_cfm : cfm\nh_1B, h_2B : Btu/lb\nq_W : W\nq_kW : kW\n"
+                             "Q_ls : L/s\nh_1, h_2 : kJ/kg\n";
+    passes_with_one_note(decl, {"q_B = 4.5*Q_cfm*(h_1B - h_2B)", "q_W = 1.20*Q_ls*(h_1 - h_2)"},
+                         plumb::rules::trade_constant);
+    // kW for W, kJ/kg in the I-P form, and the density left out stay findings.
+    for (const char* formula : {"q_kW = 1.20*Q_ls*(h_1 - h_2)", "q_B = 4.5*Q_cfm*(h_1 - h_2)",
+                                "q_W = Q_ls*(h_1 - h_2)"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) >= 1);
+    }
+}
+
 // ppm by volume to mass concentration: c = C·M/V_m, with V_m = R·T/p (R = 8.314462618 J/(mol·K),
 // CODATA 2018): 24.465 L/mol at 25 °C and 101.325 kPa, which the air trade prints as 24.45;
 // 385.3 scf/lbmol at 68 °F (ft³ = 0.028316846592 m³, lb = 0.45359237 kg: NIST SP 811 (2008)

@@ -87,6 +87,9 @@ constexpr compact_dimension power_dim = compact_dimension::whole({1, 2, -3, 0, 0
 constexpr compact_dimension frequency_dim = compact_dimension::whole({0, 0, -1, 0, 0, 0, 0});
 constexpr compact_dimension specific_heat_dim = compact_dimension::whole({0, 2, -2, -1, 0, 0, 0});
 constexpr compact_dimension moment_of_inertia_dim = compact_dimension::whole({1, 2, 0, 0, 0, 0, 0});
+// A volume flow times a specific energy: cfm·Δh in q = 4.5·cfm·Δh (common practice).
+constexpr compact_dimension volume_flow_enthalpy_dim =
+    compact_dimension::whole({0, 5, -3, 0, 0, 0, 0});
 constexpr const compact_dimension& volume_flow_dimension() {
     return volume_flow_dim;
 }
@@ -1743,11 +1746,13 @@ class checker {
             if (!any_fits)
                 return false;
             using term_kind = carried_quantity::term_kind;
-            const term_kind kind = t.numeric                          ? term_kind::any
-                                   : t.dim == volume_flow_dimension() ? term_kind::volume_flow
-                                   : t.dim == velocity_squared_dimension()
-                                       ? term_kind::velocity_squared
-                                       : term_kind::any;
+            // The air's density in a total load, 4.5·cfm·Δh or 1.2·(L/s)·Δh, as in its moisture.
+            const term_kind kind =
+                t.numeric ? term_kind::any
+                : t.dim == volume_flow_dimension() || t.dim == volume_flow_enthalpy_dim
+                    ? term_kind::volume_flow
+                : t.dim == velocity_squared_dimension() ? term_kind::velocity_squared
+                                                        : term_kind::any;
             const auto reading =
                 read_gravity_number(t.scale, reference_scale, numbers,
                                     {texts.data(), numbers.size()}, lacking, true, kind);
