@@ -44,6 +44,27 @@ TEST_CASE("a conversion folded with a coefficient into one number") {
                plumb::rules::unit_scale);
 }
 
+// A radius in ft from a diameter in inches, d/24 (2 × 12 in/ft, NIST SP 811 (2008), B.8;
+// common practice), and the unconfined well's Q = K·(H² − h²)/(1055·log10(R/r)) in gpm from
+// gpd/ft² and ft, 1055 = 1440 min/d × ln 10/π (Dupuit's Q = πK(H² − h²)/ln(R/r), from memory).
+// Each passes with a note saying how the number was read. Another number, or a length in
+// another unit, is still reported.
+TEST_CASE("a two-digit number holding a conversion and the formula's 2, and Dupuit's 1055") {
+    const std::string pond = "h_o, WSE, z : ft\nd_in : in\nd_m : m\n";
+    for (const char* formula : {"h_o = WSE - z - d_in/24", "h_o = d_in/24"}) {
+        CAPTURE(formula);
+        const auto found = run(pond, formula);
+        CHECK(plumb::test::problems_in(found) == 0);
+        CHECK(count_of(found, plumb::rules::trade_constant) == 1);
+    }
+    fails_with(pond, {"h_o = WSE - z - d_in/36", "h_o = WSE - d_m/24"}, plumb::rules::unit_scale);
+    const std::string well = "Q : gpm\nK : gal/(d*ft^2)\nH, h, R, r : ft\nH_m : m\n";
+    const auto dupuit = run(well, "Q = K*(H^2 - h^2)/(1055*log10(R/r))");
+    CHECK(plumb::test::problems_in(dupuit) == 0);
+    CHECK(count_of(dupuit, plumb::rules::trade_constant) == 1);
+    fails_with(well, {"Q = K*(H_m^2 - h^2)/(1055*log10(R/r))"}, plumb::rules::unit_scale);
+}
+
 TEST_CASE("Manning's US constant is not needed in the SI form") {
     // V = (k/n)·R^(2/3)·S^(1/2) with k = 1 in SI and 1.486 = (1 m / 0.3048 m)^(1/3) in US
     // units (Chow, Open-Channel Hydraulics, 1959, 5-6, from memory; 1 ft = 0.3048 m, NIST SP

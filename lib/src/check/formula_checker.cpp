@@ -3845,11 +3845,12 @@ class checker {
         double value;
         const char* written;
         const char* what;
-        bool whole_three_digits; // also read in a whole number of 3 digits (528, 264)
-        bool circle = false;     // a circle's area: read only beside a square (D^2)
+        bool whole_three_digits;       // also read in a whole number of 3 digits (528, 264)
+        bool circle = false;           // a circle's area: read only beside a square (D^2)
+        bool whole_two_digits = false; // also in a whole number of 2 digits (24 = 2 × 12)
     };
     static std::span<const folded_constant> folded_constants() {
-        static const std::array<folded_constant, 9> constants{{
+        static const std::array<folded_constant, 10> constants{{
             {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false, true},
             {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false, true},
             // 9550 = 60000/(2π) in M = 9550*P/n (kW, rpm to N·m), 5252 = 33000/(2π) (hp, rpm
@@ -3858,8 +3859,12 @@ class checker {
              "a revolution's 2\u03C0 radians (P = 2\u03C0\u00B7n\u00B7M)", false},
             // 25.92 = 2 × 3.6² in s = v²/(25.92*a) (km/h to m/s), 1.075 = 1.467²/2 in
             // AASHTO's 1.075*V²/a (mph to ft/s): the 2 of v²/(2a) folded in.
-            {0.5, "1/2", "the half of v\u00B2/(2a)", false},
-            {2.0, "2", "the 2 of v\u00B2/(2a)", false},
+            // 24 = 2 × 12 in r = d/24 (a radius in ft from a diameter in inches, common
+            // practice).
+            {0.5, "1/2", "the formula's own half (v\u00B2/(2a), a diameter from a radius)", false,
+             false, true},
+            {2.0, "2", "the formula's own 2 (v\u00B2/(2a), a radius from a diameter)", false, false,
+             true},
             {2.0 * std::numbers::pi, "2\u03C0",
              "the formula's 2\u03C0 (radians per revolution; the Wenner array's \u03C1 = "
              "2\u03C0\u00B7a\u00B7R)",
@@ -3872,6 +3877,10 @@ class checker {
              "the steady well-flow (Thiem) formula's constant, with log10 for ln,", true},
             {std::numbers::ln10 / (4.0 * std::numbers::pi), "ln 10/(4\u03C0)",
              "the straight-line (Cooper-Jacob) well-test formula's constant", true},
+            // 1055 = 1440 × ln 10/π in the unconfined (Dupuit) well's Q = K(H² - h²)/(1055
+            // log10(R/r)) in gpm from gpd/ft², ft (US field form, from memory).
+            {std::numbers::ln10 / std::numbers::pi, "ln 10/\u03C0",
+             "the unconfined well-flow (Dupuit) formula's constant, with log10 for ln,", true},
         }};
         return constants;
     }
@@ -3954,7 +3963,10 @@ class checker {
                     }
                     // Only numbers written to 3 or more digits, as folded factors are (528
                     // too, where whole numbers must otherwise reach 1000).
-                    if (!l.factor_like && !(l.value >= 100.0 && l.value < 1000.0))
+                    const bool whole_two_digits =
+                        l.value >= 10.0 && l.value < 100.0 && l.value == std::round(l.value);
+                    if (!l.factor_like && !(l.value >= 100.0 && l.value < 1000.0) &&
+                        !whole_two_digits)
                         continue;
                     // A folded factor is printed from a product worked out by hand, and its
                     // last digit is often cut rather than rounded (AASHTO's 1.075 for
@@ -3971,7 +3983,10 @@ class checker {
                             std::max(as.tolerance, half_unit_in_last_digit(written) / l.value);
                     {
                         const folded_constant& c = constants[pass - 1];
-                        if (!l.factor_like && !c.whole_three_digits)
+                        if (!l.factor_like && !c.whole_three_digits &&
+                            !(whole_two_digits && c.whole_two_digits))
+                            continue;
+                        if (whole_two_digits && !c.whole_two_digits)
                             continue;
                         // 0.1166*S*N*A_p with the plunger's area declared: its π/4 would be
                         // counted twice; a circle's area is read only beside a square.
