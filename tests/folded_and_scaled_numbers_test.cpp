@@ -65,6 +65,24 @@ TEST_CASE("a two-digit number holding a conversion and the formula's 2, and Dupu
     fails_with(well, {"Q = K*(H_m^2 - h^2)/(1055*log10(R/r))"}, plumb::rules::unit_scale);
 }
 
+// Advice beside the formula's own small coefficients: Darcy-Weisbach h = f·(L/d)·V²/(2g)
+// with L in ft and d in inches lacks 12 in/ft (NIST SP 811 (2008), B.8), not 24, since the 2 of
+// 2g is the formula's; a spring's τ = K·8·F·D/(π·d³) in MPa from lbf and mm lacks 4.448 N per
+// lbf, not 8/π of it (Shigley, Mechanical Engineering Design, ch. 10, from memory). Followed,
+// the advice passes.
+TEST_CASE("the factor advised leaves the formula's own 2, 8 and π alone") {
+    const std::string darcy = "h : ft\nf : 1\nL : ft\nd : in\nV : ft/s\ng : ft/s^2\n";
+    const auto head = run(darcy, "h = f*(L/d)*V^2/(2*g)");
+    REQUIRE(count_of(head, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(head, plumb::rules::unit_scale), "by 12 "));
+    passes(darcy, {"h = f*(12*L/d)*V^2/(2*g)"});
+    const std::string spring = "τ : MPa\nK_B : 1\nF_lbf : lbf\nD_m, d_w : mm\n";
+    const auto stress = run(spring, "τ = K_B*8*F_lbf*D_m/(pi*d_w^3)");
+    REQUIRE(count_of(stress, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(stress, plumb::rules::unit_scale), "4.44822"));
+    passes(spring, {"τ = K_B*8*F_lbf*4.44822*D_m/(pi*d_w^3)"});
+}
+
 TEST_CASE("Manning's US constant is not needed in the SI form") {
     // V = (k/n)·R^(2/3)·S^(1/2) with k = 1 in SI and 1.486 = (1 m / 0.3048 m)^(1/3) in US
     // units (Chow, Open-Channel Hydraulics, 1959, 5-6, from memory; 1 ft = 0.3048 m, NIST SP

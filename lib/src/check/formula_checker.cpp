@@ -3683,13 +3683,20 @@ class checker {
             }
         }
         // "m_lb*c_us*(T_d - T_s)/24" (lb/d, Btu/(lb·°F), a °C rise, Btu/h): 24 h/d is a
-        // conversion too, and what is left is the 1.8 of the degrees.
+        // conversion too, and what is left is the 1.8 of the degrees. Only numbers that are
+        // conversions themselves are taken in: the 2 of 2g in f*(L/d)*V^2/(2*g) with d in
+        // inches is the formula's own, and what is missing is 12, not 24.
         for (std::uint32_t mask = 1; !best && mask < (1U << count); ++mask) {
             double v = ratio;
+            bool conversions = true;
             for (std::size_t k = 0; k < count; ++k)
-                if ((mask >> k) & 1U)
+                if ((mask >> k) & 1U) {
                     v *= numbers[k].factor;
-            best = common_conversion(v, 0.002);
+                    conversions = conversions && (numbers[k].factor == 1.0 ||
+                                                  common_conversion(numbers[k].factor, 0.002));
+                }
+            if (conversions)
+                best = common_conversion(v, 0.002);
         }
         if (!best)
             best = ratio_with_folded_constant(reference, odd, ratio);
