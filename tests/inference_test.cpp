@@ -625,9 +625,14 @@ TEST_CASE("inference: a formula whose scales cannot be followed is not restated,
                             "d : ft\n"
                             "w : m\n"
                             "h = 0.5?*d + w\n");
-        REQUIRE(r.diagnostics.size() == 1);
+        // w fixes the coefficient's units (m), and h in ft then disagrees whatever it is: a
+        // warning of its own (1 ft = 0.3048 m, NIST SP 811 (2008), B.8).
+        REQUIRE(r.diagnostics.size() == 2);
         CHECK(r.diagnostics[0].restated.empty());
         CHECK(has_note(r.diagnostics[0], "are not in the same units"));
+        REQUIRE(r.with_rule(plumb::rules::unit_scale).size() == 1);
+        CHECK(r.with_rule(plumb::rules::unit_scale)[0]->message.find("whatever units") !=
+              std::string::npos);
     }
     SUBCASE("a °F value in a product") {
         const run r = infer("q : Btu/h\n"
@@ -838,6 +843,24 @@ TEST_CASE("stated coefficients: a failed line leaves no statement behind") {
     CHECK(tree.has_syntax_error);
     REQUIRE(tree.formulas.size() == 1);
     CHECK(tree.coefficient_statements.size() == 1);
+}
+
+// Briggs's rural dispersion σ_y = 0.08·x·(1 + 0.0001·x)^(-1/2), x and σ_y in m (Briggs 1973 as
+// tabulated in air-dispersion texts, from memory): with x typed in km the sum fixes the
+// coefficient's units and the sides stay 1000 apart whatever it is, a warning as the same
+// sides without a coefficient get. Where the formula's numbers hold the 1000 it is no finding.
+TEST_CASE("inference: sides apart by units the coefficient plays no part in") {
+    const std::string decl = "σ_y : m\nx : m\nx_km : km\n";
+    const run metres = infer(decl + "σ_y = 0.08*x*(1 + 0.0001?*x)^(-1/2)\n");
+    CHECK(metres.with_rule(plumb::rules::unit_scale).empty());
+    const run km = infer(decl + "σ_y = 0.08*x_km*(1 + 0.0001?*x_km)^(-1/2)\n");
+    REQUIRE(km.with_rule(plumb::rules::unit_scale).size() == 1);
+    const diagnostic& d = *km.with_rule(plumb::rules::unit_scale)[0];
+    CHECK(d.level == plumb::severity::warning);
+    CHECK(d.message.find("counts 0.001 times") != std::string::npos);
+    CHECK(has_note(d, "multiply"));
+    const run converted = infer(decl + "σ_y = 0.08*x_km*1000*(1 + 0.0001?*x_km*1000)^(-1/2)\n");
+    CHECK(converted.with_rule(plumb::rules::unit_scale).empty());
 }
 
 TEST_CASE("inference: a stated coefficient that cannot be restated names the term that fixed it") {

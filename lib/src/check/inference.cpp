@@ -683,8 +683,11 @@ double coherent_unit_value(const dimension& dim, const coherent_units& target) {
 std::optional<double> restate_coefficient(const syntax::parsed_file& file, const syntax::formula& f,
                                           const unknown& u, const dimension& dim,
                                           symbol_table& symbols, diagnostic& d,
-                                          const coherent_units* restate_in) {
+                                          const coherent_units* restate_in,
+                                          std::optional<sides_apart>* apart) {
     const coefficient_trace trace = trace_coefficient(file, f, u.node, symbols);
+    if (apart != nullptr)
+        *apart = trace.apart;
     if (!trace.traced) {
         d.notes.push_back({fmt::format("the coefficient is not restated for coherent SI units: "
                                        "{}; it holds only with the symbols in the units they are "
@@ -822,11 +825,12 @@ class reporter {
         diagnostic d = make(severity::note, rules::inferred_dimension, std::move(message), x.where);
         d.terms.push_back({x.where, x.coefficient ? x.name + "?" : x.name, dim});
         std::optional<double> k_si;
+        std::optional<sides_apart> apart;
         std::string why_not;
         if (x.coefficient) {
             try {
                 k_si = restate_coefficient(file_, formulas_[x.formula], x, dim, symbols_, d,
-                                           restate_in_);
+                                           restate_in_, &apart);
             } catch (const arithmetic_overflow&) {
                 d.notes.push_back({"the coefficient is not restated for coherent SI units: its "
                                    "exponents exceed the exact range",
@@ -840,6 +844,65 @@ class reporter {
             check_manning_factor(x, dim, *k_si);
             check_hazen_williams_factor(x, dim, *k_si);
         }
+        if (apart)
+            report_sides_apart(x, *apart);
+    }
+
+    // "σ_y = 0.08*x_km*(1 + 0.0001?*x_km)^(-1/2)" with σ_y in m (Briggs's rural σ_y, x in m;
+    // from memory): the sum fixes the coefficient's units, and the sides are still 1000 apart,
+    // whatever the coefficient is. A warning, as the same sides without a coefficient get,
+    // unless the formula's other numbers could be that very conversion.
+    void report_sides_apart(const unknown& x, const sides_apart& apart) {
+        if (!(apart.ratio > 0) || !std::isfinite(apart.ratio) ||
+            numbers_could_convert(formulas_[x.formula], apart.ratio))
+            return;
+        const auto where = [&](std::uint32_t node) {
+            return location{file_.source, file_.nodes[node].range};
+        };
+        const auto shown = [&](std::uint32_t node) {
+            return std::string(file_.source->text(file_.nodes[node].range));
+        };
+        diagnostic d = make(
+            severity::warning, rules::unit_scale,
+            fmt::format("as written, '{}' counts {:.6g} times as much as '{}', whatever units "
+                        "the coefficient {}? carries: the sides agree in dimension but not in unit",
+                        shown(apart.other), apart.ratio, shown(apart.first), x.name),
+            where(apart.other));
+        d.notes.push_back({fmt::format("{} '{}' by {:.6g} (declare the symbols in the units the "
+                                       "formula was fitted for, or write the conversion into it)",
+                                       apart.ratio < 1 ? "multiply" : "divide", shown(apart.other),
+                                       apart.ratio < 1 ? 1.0 / apart.ratio : apart.ratio),
+                           {}});
+        out_.push_back(std::move(d));
+    }
+
+    // Whether some of the formula's numbers, multiplied or divided, make `ratio` (or its
+    // inverse): they may be the conversion the trace, which reads units alone, does not see.
+    bool numbers_could_convert(const syntax::formula& f, double ratio) const {
+        std::vector<double> values;
+        syntax::search_formula(file_, f, [&](std::uint32_t, const syntax::expr_node& n) {
+            if (n.kind == syntax::expr_kind::number) {
+                const double v =
+                    std::strtod(std::string(file_.source->text(n.range)).c_str(), nullptr);
+                if (v > 0 && v != 1.0 && std::isfinite(v))
+                    values.push_back(v);
+            }
+            return values.size() > 8 ? syntax::search_step::found : syntax::search_step::descend;
+        });
+        if (values.size() > 8)
+            return true; // too many to try: say nothing rather than guess
+        std::size_t combinations = 1;
+        for (std::size_t k = 0; k < values.size(); ++k)
+            combinations *= 3;
+        for (std::size_t c = 1; c < combinations; ++c) {
+            double product = 1.0;
+            for (std::size_t k = 0, code = c; k < values.size(); ++k, code /= 3)
+                product *= code % 3 == 1 ? values[k] : (code % 3 == 2 ? 1.0 / values[k] : 1.0);
+            for (const double target : {ratio, 1.0 / ratio})
+                if (std::abs(product / target - 1.0) < 0.005)
+                    return true;
+        }
+        return false;
     }
 
     // Whether the coefficient's formula holds numbers other than it and the exponents.

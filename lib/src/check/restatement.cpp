@@ -148,8 +148,13 @@ class tracer {
                     quote(sides[0].offset != nullptr ? roots[0] : roots[i]),
                     (sides[0].offset != nullptr ? sides[0].offset : sides[i].offset)->symbol,
                     quote(sides[0].offset != nullptr ? roots[i] : roots[0])));
-            if (!agree(sides[0], sides[i], roots[0], roots[i]))
-                return failed();
+            apart_ratio_.reset();
+            if (!agree(sides[0], sides[i], roots[0], roots[i])) {
+                coefficient_trace t = failed();
+                if (apart_ratio_ && !sides[0].number && !sides[i].number)
+                    t.apart = sides_apart{roots[0], roots[i], *apart_ratio_};
+                return t;
+            }
         }
         if (!c_)
             return fail_with("no comparison in the formula fixes its scale (the coefficient "
@@ -173,6 +178,7 @@ class tracer {
     std::uint32_t fixed_by_ = syntax::no_index;  // the term it was fixed against
     std::string why_not_;
     std::vector<std::pair<std::uint32_t, std::string>> bound_; // position, "V in ft/s"
+    std::optional<double> apart_ratio_; // the last comparison's ratio where it failed alone
 
     coefficient_trace failed() {
         coefficient_trace t;
@@ -221,6 +227,7 @@ class tracer {
             const double ratio = value_of(x.factors) / value_of(y.factors);
             if (std::abs(ratio - 1.0) <= 1e-9)
                 return true;
+            apart_ratio_ = ratio;
             why_not_ = fmt::format(
                 "{} and {} are not in the same units (as written, one counts "
                 "{:.6g} times the other){}",

@@ -31,11 +31,20 @@ struct scale_factor {
     std::uint32_t at = 0; // where the symbol stands, to list factors in the order written
 };
 
+// Two sides of a formula whose units disagree by a ratio the coefficient plays no part in:
+// it cancels between them, or a sum has already fixed its units ("1 + k?*x").
+struct sides_apart {
+    std::uint32_t first = 0; // the sides' roots
+    std::uint32_t other = 0;
+    double ratio = 1.0; // as written, `first` counts this many times `other`
+};
+
 struct coefficient_trace {
     bool traced = false;
     std::string why_not;              // when not traced: what stops it, for a note
     std::vector<scale_factor> factor; // k_SI = k · Π si^power, in the order written
     std::vector<std::string> bound;   // "V in ft/s": the symbols in units other than SI's
+    std::optional<sides_apart> apart; // when not traced because of that
 };
 
 // The function's name in a call's range, which may start with the parentheses of a group.
