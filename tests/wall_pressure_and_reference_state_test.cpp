@@ -353,6 +353,19 @@ TEST_CASE("free air into standard volumes by the unit alone") {
                plumb::rules::unit_scale);
 }
 
+// A soil-vapour extraction well's removal rate ṁ = C·Q (common practice): a concentration per
+// standard m³ times the blower's actual flow (acfm, or a flow described as actual) counts the
+// gas as if at the standard state. With the standard flow, or with the state correction
+// (p/p_n)·(T_n/T) written in, it passes (1 ft³ = 0.028316846592 m³, 1 lb = 453592.37 mg,
+// NIST SP 811 (2008), B.8).
+TEST_CASE("a concentration per standard volume times an actual flow") {
+    const std::string decl = "C_mg : mg/Sm3\nQ_a : acfm\nQ_s : scfm\nQ_m : m^3/h \"actual flow\"\n"
+                             "m_lb : lb/d\nm_g : mg/h\np, p_n : kPa\nT, T_n : K\n";
+    fails_with(decl, {"m_lb = C_mg*Q_a*0.02832*1440/453592", "m_g = C_mg*Q_m"},
+               plumb::rules::unit_scale);
+    passes(decl, {"m_lb = C_mg*Q_s*0.02832*1440/453592", "m_g = C_mg*Q_m*(p/p_n)*(T_n/T)"});
+}
+
 // A filter's air scour rate in Nm³/(m²·h) (common practice) times its area, set equal to the
 // blower's actual flow: the same slip as Q_act = Q_n, inside a product. With the state
 // correction (p_n/p)(T/T_n) it passes; a normal flow on the left is no slip.

@@ -758,6 +758,10 @@ class checker {
             report_actual_volume_as_normal(sides);
             if (out_.size() == findings_before)
                 report_reference_temperatures_left_out(sides);
+        } else if ((marks & at_reference_conditions) != 0) {
+            for (const operand& side : sides)
+                if (report_normal_measure_times_actual_volume(side))
+                    break;
         }
         if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
             report_apparent_as_real_power(sides);
@@ -1005,6 +1009,65 @@ class checker {
         return e.description.find("FAD") != std::string_view::npos ||
                lower.find("free air") != std::string::npos ||
                lower.find("free-air") != std::string::npos;
+    }
+
+    // "ṁ = C_mg*Q_a*..." with C in mg/Sm³ and Q_a in acfm: a concentration per volume at
+    // reference conditions times a volume at the gas's actual state counts the gas as if it
+    // were at the reference state, some 5 to 15 % off at a blower's inlet. Asked where the
+    // product holds nothing that could correct it: no pressure, no temperature, no number
+    // but plain conversions.
+    bool report_normal_measure_times_actual_volume(const operand& side) {
+        const std::optional<reference_volume> normal = reference_volume_of(side.node);
+        if (!normal || normal->power != -1)
+            return false;
+        std::uint32_t actual_node = syntax::no_index;
+        std::uint32_t normal_node = syntax::no_index;
+        const bool other = for_each_factor(side.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number) {
+                // A state correction is a number near 1 (0.95, 1.07); 453592 mg/lb is none.
+                const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
+                return !plain_conversion_number(at) && !(v >= 10.0 || (v > 0 && v <= 0.1));
+            }
+            if (n.kind != expr_kind::symbol)
+                return true;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e == nullptr || !e->compact_dim || *e->compact_dim == pressure_dimension() ||
+                *e->compact_dim == temperature_dimension())
+                return true;
+            if ((unit_marks_of(e->unit_text) & at_reference_conditions) != 0) {
+                normal_node = at;
+                return false;
+            }
+            if (sign > 0 && is_gas_volume_or_flow(*e->compact_dim) && names_actual_volume(*e))
+                actual_node = at;
+            return false;
+        });
+        if (other || actual_node == syntax::no_index || normal_node == syntax::no_index)
+            return false;
+        const symbol_entry& actual = *symbols_.find(text(file_.nodes[actual_node].range));
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("{} counts per volume at reference conditions ({}) and {} is a volume of "
+                        "gas at its actual pressure and temperature ({}): their product takes "
+                        "the actual volume as if it were at the reference state, which this "
+                        "formula does not correct for",
+                        quote(normal_node),
+                        symbols_.find(text(file_.nodes[normal_node].range))->unit_text,
+                        quote(actual_node), actual.unit_text),
+            file_.nodes[side.node].range);
+        d.level = severity::warning;
+        d.notes.push_back({std::string(state_correction_advice), {}});
+        return true;
+    }
+
+    // A volume the file says is at the gas's actual state: acfm, Am³, or "actual" in its
+    // description.
+    static bool names_actual_volume(const symbol_entry& e) {
+        return e.unit_text.find("acf") != std::string_view::npos ||
+               e.unit_text.find("Am3") != std::string_view::npos ||
+               e.unit_text.find("Am\u00B3") != std::string_view::npos ||
+               e.description.find("actual") != std::string_view::npos;
     }
 
     // "Q_act = r_air*A_f" with r_air in Nm³/(m²·h) and Q_act in m³/h: the same where a side
