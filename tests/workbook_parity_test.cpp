@@ -661,3 +661,20 @@ TEST_CASE("workbook parity: empirical fits typed with bare constants, and more u
     CHECK(cell_findings(r) == std::vector<std::string>{"F!B12 unit-scale", "F!B3 trade-constant",
                                                        "F!B6 trade-constant", "F!B9 unit-scale"});
 }
+
+TEST_CASE("workbook parity: a formula of numbers alone is in the unit written beside it") {
+    // A motor size picked from the standard ratings, =IF(B2<=55,55,75) beside kW (IEC 60072-1
+    // frame ratings, from memory): the numbers carry no unit and are in the cell's, as a typed
+    // input is, and the cell then feeds others in that unit. A cell reference in its value
+    // keeps it checked (=IF(B2<=55,B2,75) is in B2's unit). The sheet's XML escapes the <.
+    const check_report r = check_one_sheet("S", sheet_of({
+                                                    {"48", "kW"},                   // B2
+                                                    {"=IF(B2&lt;=55,55,75)", "kW"}, // B3
+                                                    {"=55", "kW"},                  // B4
+                                                    {"=B3*1000", "W"},              // B5: right
+                                                    {"=B3*1000", "kW"}, // B6: not needed
+                                                    {"=IF(B2&lt;=55,B2,75)", "kN"}, // B7: wrong
+                                                }));
+    const auto found = cell_findings(r);
+    CHECK(found == std::vector<std::string>{"S!B6 unit-scale", "S!B7 result-unit"});
+}

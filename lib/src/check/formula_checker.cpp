@@ -1498,7 +1498,7 @@ class checker {
         const typed_term t = eval(file_.sides[f.first_side].root);
         if (!t.known)
             return std::nullopt;
-        return value_type{t.dim.expand(), t.scale, t.offset, t.zero, t.exact_scale};
+        return value_type{t.dim.expand(), t.scale, t.offset, t.zero, t.exact_scale, t.numeric};
     }
 
   private:

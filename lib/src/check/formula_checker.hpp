@@ -42,6 +42,7 @@ struct value_type {
     const unit_definition* offset = nullptr;
     bool zero = false;                   // the literal 0
     std::optional<rational> exact_scale; // scale exactly, where every unit in it is exact
+    bool numeric = false;                // built from numbers alone (=55, =IF(C2<=55,55,75))
 };
 
 // Checks the single side of a spreadsheet formula lowered into `file` (file.references typed)

@@ -636,7 +636,8 @@ class workbook_checker {
             compare_with_written(f, formula, *computed, *written);
         // The notation found a fault: the workbook's words for it stand where they find one
         // too, and give way to the notation's where they do not.
-        if (verdict && !has_fault({out_.data() + before, out_.size() - before})) {
+        if (verdict && !has_fault({out_.data() + before, out_.size() - before}) &&
+            !(computed && computed->numeric && computed->dim.is_dimensionless())) {
             out_.resize(before);
             take_verdict(*verdict, f, formula);
         }
@@ -789,7 +790,10 @@ class workbook_checker {
 
     void compare_with_written(const formula_cell& f, const syntax::formula& formula,
                               value_type computed, const cell_unit& written) {
-        if (computed.zero)
+        // "=55" or "=IF(C18<=55,55,75)" beside kW (a motor size picked from a list): numbers
+        // alone carry no unit, and are in the one written beside them, as a typed input is
+        // (the notation's verdict on the cell is set aside for it too).
+        if (computed.zero || (computed.numeric && computed.dim.is_dimensionless()))
             return;
         const std::string where_unit = fmt::format("'{}' ({})", written.unit.text, written.origin);
         std::vector<scale_literal> factors;
