@@ -348,7 +348,7 @@ TEST_CASE("free air into standard volumes by the unit alone") {
                             "Q_line : L/min \"flow in the line\"\nQ_scfm : scfm\nQ_n : Nm3/min\n";
     const auto note = run(air, "Q_scfm = Q_fad/28.32");
     CHECK(problems_in(note) == 0);
-    CHECK(count_of(note, plumb::rules::unit_scale) == 1);
+    CHECK(count_of(note, plumb::rules::trade_constant) == 1);
     fails_with(air, {"Q_scfm = Q_line/28.32", "Q_n = Q_fad/1000", "Q_scfm = Q_fad*28.32"},
                plumb::rules::unit_scale);
 }

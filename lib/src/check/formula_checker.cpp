@@ -972,7 +972,7 @@ class checker {
             const std::optional<reference_volume> reference = reference_volume_of(sides[i].node);
             if (describes_free_air(*actual) && reference && reference->kelvins >= 288.0) {
                 diagnostic& d = report(
-                    rules::unit_scale,
+                    rules::trade_constant,
                     fmt::format("'{}' is free air, a volume at the compressor's intake, near the "
                                 "atmosphere, and is read as one at {}'s reference conditions",
                                 actual_name, normal->unit_text),
