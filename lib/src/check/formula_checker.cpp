@@ -2643,7 +2643,6 @@ class checker {
         int gauges = 0;
         int absolute_pressures_added = 0;
         int absolute_pressures_subtracted = 0;
-        bool atmosphere_subtracted = false;
         int offset_temperatures = 0;
         int kelvins_added = 0;
         double gauge_zero = 0.0;
@@ -2685,7 +2684,6 @@ class checker {
             } else if (t.type.offset == nullptr && t.type.dim == pressure_dimension() &&
                        !negative) {
                 ++absolute_pressures_subtracted;
-                atmosphere_subtracted = atmosphere_subtracted || names_atmosphere(t.node);
             } else if (t.type.offset != nullptr && t.type.dim == temperature_dimension() &&
                        !t.subtracted) {
                 ++offset_temperatures;
@@ -2707,8 +2705,10 @@ class checker {
         // number is added too ("p_g + p_fric + p_static + 14.7"), the number is the
         // atmosphere and every absolute pressure added is a drop.
         bool number_added = false;
+        bool number_subtracted = false;
         for (const auto& t : terms)
-            number_added = number_added || (is_shift_candidate(t) && !t.subtracted);
+            if (is_shift_candidate(t))
+                (t.subtracted ? number_subtracted : number_added) = true;
         if (gauges > 0 && absolute_pressures_added > 0) {
             if (!number_added) {
                 origin -= gauge_zero;
@@ -2722,19 +2722,21 @@ class checker {
         // The mirror: "p_bh - 14.7 - p_hyd", an absolute reading less the atmosphere written as
         // a number, is a gauge reading, and the further pressures subtracted are drops; unless
         // one of them names the atmosphere, which would then be taken off twice.
-        bool number_subtracted = false;
-        for (const auto& t : terms)
-            number_subtracted = number_subtracted || (is_shift_candidate(t) && t.subtracted);
-        if (gauges == 0 && number_subtracted && !number_added && absolute_pressures_added == 1 &&
-            absolute_pressures_subtracted > 0 && !atmosphere_subtracted) {
-            points += absolute_pressures_subtracted;
-            if (weight)
-                weight = *weight + rational(absolute_pressures_subtracted);
-        }
-        if (gauges == 0 && number_subtracted && atmosphere_subtracted &&
-            absolute_pressures_added == 1 && report_atmosphere_taken_twice(terms, only)) {
-            cut_literals_to(literal_base);
-            return unknown_type();
+        if (gauges == 0 && number_subtracted && absolute_pressures_added == 1 &&
+            absolute_pressures_subtracted > 0) [[unlikely]] {
+            const bool atmosphere_subtracted =
+                std::any_of(terms.begin(), terms.end(), [&](const operand& t) {
+                    return t.subtracted && names_atmosphere(t.node);
+                });
+            if (atmosphere_subtracted && report_atmosphere_taken_twice(terms, only)) {
+                cut_literals_to(literal_base);
+                return unknown_type();
+            }
+            if (!number_added && !atmosphere_subtracted) {
+                points += absolute_pressures_subtracted;
+                if (weight)
+                    weight = *weight + rational(absolute_pressures_subtracted);
+            }
         }
         // `unit_tolerance`: how far the unit may be off, relative, when rounded numbers
         // converted it (6.895 for 6.894757 in "6.895*p_g + 101.325").
@@ -6379,11 +6381,12 @@ class checker {
     // The functions that take an angle: sin, cos and tan, and the reciprocal ones, in either
     // front end's spelling (not asin, whose argument is a ratio, nor sinh).
     static bool takes_an_angle(std::string_view name) {
-        std::string lower(name);
-        for (char& c : lower)
-            c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+        if (name.size() != 3)
+            return false;
         for (const std::string_view angle : {"sin", "cos", "tan", "cot", "sec", "csc"})
-            if (lower == angle)
+            if (std::equal(name.begin(), name.end(), angle.begin(), [](char a, char b) {
+                    return std::tolower(static_cast<unsigned char>(a)) == b;
+                }))
                 return true;
         return false;
     }
@@ -6415,6 +6418,11 @@ class checker {
     // reads as degrees.
     void report_degrees_taken_as_radians(const builtin_function& f, const operand& a) {
         if (!a.type.known || !a.type.dim.is_dimensionless())
+            return;
+        const std::string_view written = text(file_.nodes[a.node].range);
+        if (written.find("90") == std::string_view::npos &&
+            written.find("180") == std::string_view::npos &&
+            written.find("360") == std::string_view::npos)
             return;
         std::uint32_t degrees = syntax::no_index;
         bool pi_written = false;
