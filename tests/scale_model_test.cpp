@@ -316,6 +316,14 @@ TEST_CASE("offset values as factors: the fix fits the case") {
         CHECK(mentions(*f[0], "(T - 20)"));
         CHECK_FALSE(mentions(*f[0], "273.15"));
         CHECK(clean(check(d, "R = R_20*(1 + α*(T - 20))")));
+        // A battery's capacity at the ten-hour rate, C_10, and a fit's constant k_1 name no
+        // temperature: the advice says T_ref rather than 10 or 1 (IEEE 485's correction is
+        // from 25 °C, from memory).
+        const auto battery = check("C_t, C_10 : A*h\nλ : 1/K\nθ : °C\n", "C_t = C_10*(1 + λ*θ)");
+        const auto b = findings(battery, plumb::rules::offset_scale);
+        REQUIRE(b.size() == 1);
+        CHECK(mentions(*b[0], "(θ - T_ref)"));
+        CHECK_FALSE(mentions(*b[0], "(θ - 10)"));
     }
     SUBCASE("a `?` coefficient does not switch the °F check off") {
         const auto r = check("q : W\nA : m^2\nT_F : °F\n", "q = 1.3?*T_F*A");

@@ -4837,9 +4837,14 @@ class checker {
             if (underscore == std::string_view::npos || underscore + 1 >= name.size())
                 return;
             const std::string_view digits = name.substr(underscore + 1);
-            if (std::all_of(digits.begin(), digits.end(),
-                            [](char c) { return c >= '0' && c <= '9'; }))
-                found = std::string(digits);
+            // R_20, ρ_15, C_25: the temperatures tables are given at. k_1 or C_10 (the
+            // ten-hour rate) number something else.
+            if (digits.size() <= 3 && std::all_of(digits.begin(), digits.end(),
+                                                  [](char c) { return c >= '0' && c <= '9'; })) {
+                const int value = std::stoi(std::string(digits));
+                if (value >= 15 && value <= 100)
+                    found = std::string(digits);
+            }
         });
         return found.empty() ? std::string("T_ref") : found;
     }
