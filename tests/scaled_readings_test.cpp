@@ -430,6 +430,20 @@ TEST_CASE("a Magnus fit's constant beside a kelvin reading") {
                   "x = T_c/(T_c + 5)"});
 }
 
+// A transformer's load loss corrected to 75 °C, P_k = P_k,m·(235 + θ_ref)/(235 + θ_test) for
+// copper (IEC 60076-1, from memory): each bracket counts from the conductor's inferred zero of
+// resistance, -235 °C, and the ratio is a pure number. A °C reading alone in its place stays
+// an error; and a formula reported stops no later symbol from counting as used.
+TEST_CASE("a resistance correction's brackets from the conductor's zero") {
+    const std::string decl = "P_k, P_km : kW\nR_1, R_2 : ohm\nθ_ref, θ_test : °C\n";
+    passes(decl, {"P_k = P_km*(235 + θ_ref)/(235 + θ_test)",
+                  "R_2 = R_1*(234.5 + θ_ref)/(234.5 + θ_test)"});
+    const auto alone =
+        run("P_k, P_km : kW\nθ_ref, θ_test : °C\n", "P_k = P_km*θ_ref/(235 + θ_test)");
+    CHECK(count_of(alone, plumb::rules::offset_scale) == 1);
+    CHECK(count_of(alone, plumb::rules::unused) == 0);
+}
+
 // The same fit solved for the temperature: the dew point t_dp = b·γ/(a − γ) with γ = ln φ +
 // a·t/(b + t), a = 17.625 and b = 243.04 °C (Alduchov and Eskridge 1996, from memory), is a
 // reading on the °C scale the fit was made on. Without the fit's denominator, or with a

@@ -1493,6 +1493,15 @@ class checker {
 
     // A spreadsheet formula: one side, whose type the front end compares with the unit
     // written beside its cell.
+    void mark_symbols_used(const syntax::formula& f) {
+        syntax::search_formula(file_, f, [&](std::uint32_t, const syntax::expr_node& n) {
+            if (n.kind == expr_kind::symbol)
+                if (symbol_entry* e = symbols_.find(text(n.range)))
+                    e->used = true;
+            return search_step::descend;
+        });
+    }
+
     std::optional<value_type> check_value(const syntax::formula& f) {
         current_ = &f;
         const typed_term t = eval(file_.sides[f.first_side].root);
@@ -5479,10 +5488,11 @@ class checker {
                 result.exact_scale = factor->exact_scale;
             }
             // (R_2 - R_1)/R_1*(235 + θ_1): a winding's temperature from its inferred zero of
-            // resistance, times a ratio, is a rise.
-            if (!divided && factor->offset != nullptr && result.known && !result.numeric &&
-                result.offset == nullptr && result.dim.is_dimensionless() &&
-                from_inferred_zero_of_resistance(op.rhs)) {
+            // resistance, times a ratio, is a rise; and so is each bracket of the correction
+            // R_2 = R_1*(235 + θ_2)/(235 + θ_1) (IEC 60076-1's load loss at 75 °C, from memory),
+            // a temperature counted from the conductor's zero of resistance.
+            if (factor->offset != nullptr && result.known && !result.numeric &&
+                result.offset == nullptr && from_inferred_zero_of_resistance(op.rhs)) {
                 if (factor != reinterpret_cast<const typed_term*>(evaluated))
                     factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
                 read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
@@ -6616,6 +6626,10 @@ static bool check_with(checker& c, const syntax::formula& formula, std::vector<d
         c.abandon();
         throw;
     }
+    // A formula reported stops being read at its first fault; the symbols after it are still
+    // used by it, and no "never used" warning may follow.
+    if (out.size() != before) [[unlikely]]
+        c.mark_symbols_used(formula);
     return true;
 }
 
