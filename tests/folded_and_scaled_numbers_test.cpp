@@ -83,6 +83,20 @@ TEST_CASE("the factor advised leaves the formula's own 2, 8 and π alone") {
     passes(spring, {"τ = K_B*8*F_lbf*4.44822*D_m/(pi*d_w^3)"});
 }
 
+// The humidity ratio W = 0.622·p_w/(p − p_w) in kg/kg (ASHRAE Fundamentals, ch. 1, from
+// memory: 0.622 = 18.015/28.965) is written 622·p_w/(p − p_w) in g/kg, the 1000 folded in.
+TEST_CASE("the humidity ratio's 622 in g/kg") {
+    const std::string decl = "Y : g/kg\nW : 1\np_w, p : kPa\n";
+    const auto grams = run(decl, "Y = 622*p_w/(p - p_w)");
+    CHECK(plumb::test::problems_in(grams) == 0);
+    CHECK(count_of(grams, plumb::rules::trade_constant) == 1);
+    passes(decl, {"W = 0.622*p_w/(p - p_w)"});
+    fails_with(decl, {"Y = 0.622*p_w/(p - p_w)"}, plumb::rules::unit_scale);
+    // Read beside a power of ten only: 100 is no 0.622 times the 160.9 of km/h to mph·100.
+    const std::string truck = "P_hp : hp\nW_lbf : lbf\nv_kmh : km/h\nG_pct : %\n";
+    fails_with(truck, {"P_hp = W_lbf*v_kmh*G_pct/100/375"}, plumb::rules::unit_scale);
+}
+
 TEST_CASE("Manning's US constant is not needed in the SI form") {
     // V = (k/n)·R^(2/3)·S^(1/2) with k = 1 in SI and 1.486 = (1 m / 0.3048 m)^(1/3) in US
     // units (Chow, Open-Channel Hydraulics, 1959, 5-6, from memory; 1 ft = 0.3048 m, NIST SP

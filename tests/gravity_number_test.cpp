@@ -353,6 +353,16 @@ TEST_CASE("the density of air in a total load from an enthalpy difference") {
     }
 }
 
+// Alkalinity in mg/L as CaCO3 to meq/L: over 50, calcium carbonate's equivalent weight
+// (100.09 g/mol over 2, IUPAC standard atomic weights, from memory; common practice).
+TEST_CASE("calcium carbonate's equivalent weight as a number") {
+    CHECK(100.09 / 2.0 == doctest::Approx(50.04).epsilon(1e-4));
+    const std::string decl = "Alk_m : mmol/L\nAlk : mg/L\n";
+    passes_with_one_note(decl, {"Alk_m = Alk/50"}, plumb::rules::trade_constant);
+    CHECK(problems_in(run(decl + "Alk_m = Alk/61\n")) == 1);
+    CHECK(problems_in(run(decl + "Alk_m = Alk*50\n")) >= 1);
+}
+
 // ppm by volume to mass concentration: c = C·M/V_m, with V_m = R·T/p (R = 8.314462618 J/(mol·K),
 // CODATA 2018): 24.465 L/mol at 25 °C and 101.325 kPa, which the air trade prints as 24.45;
 // 385.3 scf/lbmol at 68 °F (ft³ = 0.028316846592 m³, lb = 0.45359237 kg: NIST SP 811 (2008)

@@ -678,3 +678,18 @@ TEST_CASE("workbook parity: a formula of numbers alone is in the unit written be
     const auto found = cell_findings(r);
     CHECK(found == std::vector<std::string>{"S!B6 unit-scale", "S!B7 result-unit"});
 }
+
+TEST_CASE("workbook parity: Manning's full-pipe 0.463 in US units") {
+    // Q = 0.463/n·D^(8/3)·S^(1/2) in cfs with D in ft (common practice): 1.486 ft^(1/3)/s
+    // (3.2808^(1/3), NIST SP 811 (2008), B.8) times a full circle's π/4·4^(-2/3) = 0.3117.
+    // With the diameter in inches the 12^(8/3) is missing.
+    const check_report r = check_one_sheet("S", sheet_of({
+                                                    {"0.013", "s/m^(1/3)"},               // B2
+                                                    {"2.5", "ft"},                        // B3
+                                                    {"30", "in"},                         // B4
+                                                    {"0.004", "ft/ft"},                   // B5
+                                                    {"=0.463/B2*B3^(8/3)*B5^0.5", "cfs"}, // B6
+                                                    {"=0.463/B2*B4^(8/3)*B5^0.5", "cfs"}, // B7
+                                                }));
+    CHECK(cell_findings(r) == std::vector<std::string>{"S!B6 trade-constant", "S!B7 unit-scale"});
+}

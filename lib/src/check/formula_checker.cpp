@@ -3926,12 +3926,13 @@ class checker {
         double value;
         const char* written;
         const char* what;
-        bool whole_three_digits;       // also read in a whole number of 3 digits (528, 264)
-        bool circle = false;           // a circle's area: read only beside a square (D^2)
-        bool whole_two_digits = false; // also in a whole number of 2 digits (24 = 2 × 12)
+        bool whole_three_digits;          // also read in a whole number of 3 digits (528, 264)
+        bool circle = false;              // a circle's area: read only beside a square (D^2)
+        bool whole_two_digits = false;    // also in a whole number of 2 digits (24 = 2 × 12)
+        bool beside_power_of_ten = false; // only with a power of ten (622 = 0.622 × 1000)
     };
     static std::span<const folded_constant> folded_constants() {
-        static const std::array<folded_constant, 10> constants{{
+        static const std::array<folded_constant, 12> constants{{
             {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false, true},
             {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false, true},
             // 9550 = 60000/(2π) in M = 9550*P/n (kW, rpm to N·m), 5252 = 33000/(2π) (hp, rpm
@@ -3962,6 +3963,14 @@ class checker {
             // log10(R/r)) in gpm from gpd/ft², ft (US field form, from memory).
             {std::numbers::ln10 / std::numbers::pi, "ln 10/\u03C0",
              "the unconfined well-flow (Dupuit) formula's constant, with log10 for ln,", true},
+            // 622 = 0.622 × 1000 in W = 622*p_w/(p - p_w) in g/kg: the molar masses of water
+            // and dry air, 18.015/28.965 (ASHRAE Fundamentals, ch. 1, from memory).
+            {18.015 / 28.965, "0.622", "the ratio of the molar masses of water and dry air", true,
+             false, false, true},
+            // 0.463 = 1.486 × 0.3117 in Manning's full-pipe Q = 0.463/n*D^(8/3)*S^(1/2) (cfs, ft):
+            // a full circle's area π/4·D² and hydraulic radius D/4 (common practice).
+            {std::numbers::pi / 4.0 * std::pow(4.0, -2.0 / 3.0), "(\u03C0/4)\u00B74^(-2/3)",
+             "a full pipe's area and hydraulic radius (Manning's full-bore form)", false},
         }};
         return constants;
     }
@@ -4074,6 +4083,8 @@ class checker {
                         if (c.circle && !squares_something(ops[index[i]].node))
                             continue;
                         as.value = l.value / c.value;
+                        if (c.beside_power_of_ten && !near_power_of_ten(as.value, 1e-3))
+                            continue;
                         as.low.reset();
                         as.high.reset();
                         as.power_of_ten = false;

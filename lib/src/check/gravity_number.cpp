@@ -21,8 +21,8 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
-const std::array<carried_quantity, 15>& quantities() {
-    static const std::array<carried_quantity, 15> table = [] {
+const std::array<carried_quantity, 16>& quantities() {
+    static const std::array<carried_quantity, 16> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -57,7 +57,7 @@ const std::array<carried_quantity, 15>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 15>{{
+        return std::array<carried_quantity, 16>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -170,6 +170,14 @@ const std::array<carried_quantity, 15>& quantities() {
              "write the molar concentration in a cell that holds its unit to say so",
              amount / (length * length * length), water_least / 0.018015,
              water_greatest / 0.018015},
+            // Calcium carbonate's equivalent weight, 100.09/2 = 50.04 g/eq (IUPAC standard
+            // atomic weights, from memory): the 50 of mg/L as CaCO3 to meq/L in water
+            // treatment (common practice).
+            {rules::trade_constant, "the equivalent weight of calcium carbonate", "50.04 g/eq",
+             "1/(50.04 g/eq)", " (CaCO\u2083, 100.09 g/mol over 2 equivalents)",
+             "declare it with its unit (EW : mg/mmol = 50) to say so",
+             "write the equivalent weight in a cell that holds its unit to say so", mass / amount,
+             0.05004, 0.05005},
             // The hours of a year: 8760 for 365 days, 8766 for 365.25, 8784 for a leap year
             // (common practice), in annual energies and running costs.
             {rules::trade_constant, "the length of a year", "1 a = 8760 h", "1/(1 a)",
