@@ -430,6 +430,21 @@ TEST_CASE("a Magnus fit's constant beside a kelvin reading") {
                   "x = T_c/(T_c + 5)"});
 }
 
+// The mixed-air temperature t_m = x·t_o + (1 − x)·t_r (ASHRAE Fundamentals, ch. 1, from
+// memory; common practice), with the outdoor share x a fraction or OA/100 with OA in %, and
+// a third stream's share 1 − x − y: weights that add up to 1 whatever x is make a weighted
+// mean, a reading whatever the scale's zero. Weights that do not (x and x, x and 1 + x), a
+// percentage used as the fraction beside its 1, and readings on two scales stay findings.
+TEST_CASE("a mix's readings weighted by shares that add up to 1") {
+    const std::string decl = "T_m, T_o, T_r, T_3 : °F\nx, y : 1\nOA : %\nt_c : °C\n";
+    passes(decl, {"T_m = x*T_o + (1 - x)*T_r", "T_m = (1 - x)*T_r + x*T_o",
+                  "T_m = OA/100*T_o + (1 - OA/100)*T_r", "T_m = x*T_o + y*T_r + (1 - x - y)*T_3"});
+    fails_with(decl,
+               {"T_m = x*T_o + x*T_r", "T_m = x*T_o + (1 + x)*T_r", "T_m = x*T_o + (1 - x)*t_c"},
+               plumb::rules::offset_scale);
+    fails_with(decl, {"T_m = OA*T_o + (1 - OA)*T_r"}, plumb::rules::unit_scale);
+}
+
 // A transformer's load loss corrected to 75 °C, P_k = P_k,m·(235 + θ_ref)/(235 + θ_test) for
 // copper (IEC 60076-1, from memory): each bracket counts from the conductor's inferred zero of
 // resistance, -235 °C, and the ratio is a pure number. A °C reading alone in its place stays

@@ -527,6 +527,9 @@ class checker {
             return eval_negate(n);
         case expr_kind::add:
         case expr_kind::subtract:
+            if (mixing_shape(n)) [[unlikely]]
+                if (const auto mean = mixing_mean(index))
+                    return *mean;
             return eval_sum(index);
         case expr_kind::multiply:
         case expr_kind::divide:
@@ -5076,6 +5079,31 @@ class checker {
                 return false;
             return out.size() <= most_expanded_terms;
         }
+        case expr_kind::subtract:
+        case expr_kind::negate: {
+            const std::size_t first = out.size();
+            if (n.kind == expr_kind::subtract && !expand(n.lhs, out))
+                return false;
+            const std::size_t negated = out.size();
+            if (!expand(n.kind == expr_kind::subtract ? n.rhs : n.lhs, out))
+                return false;
+            for (std::size_t k = n.kind == expr_kind::subtract ? negated : first; k < out.size();
+                 ++k)
+                out[k].coefficient = -out[k].coefficient;
+            return out.size() <= most_expanded_terms;
+        }
+        case expr_kind::divide: {
+            // By a number only (x/100): a weight written as a percentage.
+            const syntax::expr_node& d = file_.nodes[syntax::inside_brackets(file_, n.rhs)];
+            const std::optional<rational> v =
+                d.kind == expr_kind::number ? rational::parse(text(d.range)) : std::nullopt;
+            const std::size_t first = out.size();
+            if (!v || v->is_zero() || !expand(n.lhs, out))
+                return false;
+            for (std::size_t k = first; k < out.size(); ++k)
+                out[k].coefficient /= v->to_double();
+            return true;
+        }
         case expr_kind::multiply: {
             expansion left;
             expansion right;
@@ -5430,6 +5458,118 @@ class checker {
             if (!found)
                 return std::nullopt;
         }
+        return reading;
+    }
+
+    // "x*T_o + (1 - x)*T_r": a term of the sum is a product that holds (1 - w) or
+    // (100 - w), the shape of a mix's weights. Syntax only, so that other sums pay nothing.
+    bool mixing_shape(const syntax::expr_node& n) const {
+        if (n.kind != expr_kind::add)
+            return false;
+        for (std::uint32_t term : {n.lhs, n.rhs})
+            for (int depth = 0; depth < 8; ++depth) {
+                const syntax::expr_node& t = file_.nodes[term];
+                if (t.kind == expr_kind::group) {
+                    if (one_less_weights(t))
+                        return true;
+                    break;
+                }
+                if (t.kind != expr_kind::multiply && t.kind != expr_kind::divide)
+                    break;
+                if (file_.nodes[t.rhs].kind == expr_kind::group &&
+                    one_less_weights(file_.nodes[t.rhs]))
+                    return true;
+                term = t.lhs;
+            }
+        return false;
+    }
+
+    // "(1 - x)", "(1 - x - y)", "(100 - OA)": the rest of a whole after its other parts.
+    bool one_less_weights(const syntax::expr_node& group) const {
+        std::uint32_t inner = group.lhs;
+        for (int depth = 0; depth < 8 && file_.nodes[inner].kind == expr_kind::subtract; ++depth) {
+            const syntax::expr_node& first = file_.nodes[file_.nodes[inner].lhs];
+            if (first.kind == expr_kind::number) {
+                const std::string_view whole = text(first.range);
+                return whole == "1" || whole == "100";
+            }
+            inner = file_.nodes[inner].lhs;
+        }
+        return false;
+    }
+
+    // "T_m = x*T_o + (1 - x)*T_r", "=C5/100*C7 + (1 - C5/100)*C6": readings on one offset
+    // scale, each times a pure-number weight, whose weights add up to 1 whatever the symbols
+    // in them are, are a weighted mean, a reading on that scale (the mixed-air and blended-
+    // water temperatures; ASHRAE Fundamentals, ch. 1, from memory). The weights are
+    // multiplied out and summed as a polynomial in their symbols.
+    [[gnu::noinline]] std::optional<typed_term> mixing_mean(std::uint32_t index) {
+        expansion terms;
+        if (!expand(index, terms) || terms.size() < 2)
+            return std::nullopt;
+        std::optional<typed_term> reading;
+        // Each term's weight: its coefficient and its weight symbols' names, sorted.
+        struct weight {
+            double coefficient;
+            std::array<std::string_view, 6> names;
+            std::size_t count;
+            double per_fraction; // the coefficient on the weights' values as fractions
+        };
+        std::vector<weight> weights;
+        for (const auto& t : terms) {
+            bool has_reading = false;
+            weight w{t.coefficient, {}, 0, t.coefficient};
+            for (std::size_t k = 0; k < t.count; ++k) {
+                const syntax::expr_node& factor = file_.nodes[t.symbols[k]];
+                const typed_term s = factor.kind == expr_kind::reference ? eval_reference(factor)
+                                                                         : eval_symbol(factor);
+                if (!s.known)
+                    return std::nullopt;
+                if (s.offset != nullptr) {
+                    if (has_reading ||
+                        (reading && (s.offset != reading->offset || s.scale != reading->scale ||
+                                     !(s.dim == reading->dim))))
+                        return std::nullopt;
+                    if (!reading)
+                        reading = s;
+                    has_reading = true;
+                    continue;
+                }
+                // A weight is a pure number: a fraction, or a percentage in % over 100.
+                if (!s.dim.is_dimensionless() || !(s.scale > 0) || s.point)
+                    return std::nullopt;
+                w.per_fraction /= s.scale;
+                w.names[w.count++] = text(factor.range);
+            }
+            // Each weight a fraction itself, ±x or ±OA/100 with OA in %: OA alone beside the 1
+            // of (1 - OA) is a percentage used as a fraction, for the sum's rules to report.
+            if (!has_reading || (w.count > 0 && std::abs(std::abs(w.per_fraction) - 1.0) > 1e-9))
+                return std::nullopt;
+            // A few names: an insertion sort (std::sort's bounds puzzle GCC here too).
+            for (std::size_t a = 1; a < w.count && a < w.names.size(); ++a)
+                for (std::size_t b = a; b > 0 && w.names[b] < w.names[b - 1]; --b)
+                    std::swap(w.names[b], w.names[b - 1]);
+            weights.push_back(w);
+        }
+        // Like monomials gathered: the constant must come to 1 and every other to 0.
+        double constant = 0.0;
+        for (std::size_t i = 0; i < weights.size(); ++i) {
+            if (weights[i].count == 0) {
+                constant += weights[i].coefficient;
+                continue;
+            }
+            double sum = 0.0;
+            for (const auto& other : weights)
+                if (other.count == weights[i].count &&
+                    std::equal(other.names.begin(),
+                               other.names.begin() + static_cast<std::ptrdiff_t>(other.count),
+                               weights[i].names.begin()))
+                    sum += other.coefficient;
+            if (std::abs(sum) > 1e-9)
+                return std::nullopt;
+        }
+        if (std::abs(constant - 1.0) > 1e-9)
+            return std::nullopt;
         return reading;
     }
 
