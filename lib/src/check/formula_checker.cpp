@@ -527,9 +527,10 @@ class checker {
             return eval_negate(n);
         case expr_kind::add:
         case expr_kind::subtract:
-            if (mixing_shape(n)) [[unlikely]]
-                if (const auto mean = mixing_mean(index))
-                    return *mean;
+            // Only where the file has readings to mix: a workbook, or an offset unit declared.
+            if ((symbols_.unit_marks() & offset_scale_readings) != 0 ||
+                file_.functions == syntax::function_names::spreadsheet) [[unlikely]]
+                return eval_mix_or_sum(index);
             return eval_sum(index);
         case expr_kind::multiply:
         case expr_kind::divide:
@@ -642,7 +643,9 @@ class checker {
             } else if (const std::size_t findings_before = out_.size();
                        check_scales(sides, sides_what, unit)) {
                 check_origins(sides, what);
-                if (symbols_.unit_marks() != 0 && out_.size() == findings_before && equation)
+                if ((symbols_.unit_marks() &
+                     (counts_revolutions | at_reference_conditions | apparent_power)) != 0 &&
+                    out_.size() == findings_before && equation)
                     ask_of_marked_units(f, sides);
                 else if (file_.functions == syntax::function_names::spreadsheet &&
                          out_.size() == findings_before && equation && sides.size() == 2 &&
@@ -5463,6 +5466,14 @@ class checker {
 
     // "x*T_o + (1 - x)*T_r": a term of the sum is a product that holds (1 - w) or
     // (100 - w), the shape of a mix's weights. Syntax only, so that other sums pay nothing.
+    // Out of line, with its optional type, so that eval's frame stays small.
+    [[gnu::noinline]] typed_term eval_mix_or_sum(std::uint32_t index) {
+        if (mixing_shape(file_.nodes[index]))
+            if (const auto mean = mixing_mean(index))
+                return *mean;
+        return eval_sum(index);
+    }
+
     bool mixing_shape(const syntax::expr_node& n) const {
         if (n.kind != expr_kind::add)
             return false;

@@ -631,6 +631,8 @@ class session {
             if (inserted) {
                 if (!entry.unit_text.empty())
                     table.note_unit_marks(unit_marks_of(entry.unit_text));
+                if (entry.offset_unit != nullptr)
+                    table.note_unit_marks(offset_scale_readings);
                 continue;
             }
             if (existing->declared_at.file == at.file &&

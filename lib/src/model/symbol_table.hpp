@@ -23,6 +23,7 @@ enum unit_mark : std::uint8_t {
     counts_revolutions = 1,      // rpm, r/min, rev/s: a speed in cycles, not radians
     at_reference_conditions = 2, // Nm3, Sm³, scf: gas at a reference pressure and temperature
     apparent_power = 4,          // VA, kVA, MVA: a power factor away from the watts
+    offset_scale_readings = 8,   // °C, °F, psig, barg: readings whose scale's zero is arbitrary
 };
 
 [[nodiscard]] inline std::uint8_t unit_marks_of(std::string_view unit_text) {
