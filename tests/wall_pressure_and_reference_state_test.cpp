@@ -366,6 +366,16 @@ TEST_CASE("a concentration per standard volume times an actual flow") {
     passes(decl, {"m_lb = C_mg*Q_s*0.02832*1440/453592", "m_g = C_mg*Q_m*(p/p_n)*(T_n/T)"});
 }
 
+// A fan sized in acfm from a flow in Nm³/h by the volume factor alone, 0.5886 cfm per m³/h or
+// 1.699 m³/h per cfm (NIST SP 811 (2008), B.8, rounded): the gas at the fan's outlet is hot and
+// the fan comes out small. A factor near 1 that could be the state correction folded in, or
+// a flow its description calls normal, is left alone.
+TEST_CASE("a normal flow turned into acfm by the volume factor alone") {
+    const std::string decl = "V_N : Nm3/h\nV_acfm : acfm\nQ_cfm : cfm \"blower air, normal\"\n";
+    fails_with(decl, {"V_acfm = 0.5886*V_N", "V_acfm = V_N/1.699"}, plumb::rules::unit_scale);
+    passes(decl, {"Q_cfm = 0.5886*V_N", "V_acfm = 0.5886*V_N*1.33"});
+}
+
 // A filter's air scour rate in Nm³/(m²·h) (common practice) times its area, set equal to the
 // blower's actual flow: the same slip as Q_act = Q_n, inside a product. With the state
 // correction (p_n/p)(T/T_n) it passes; a normal flow on the left is no slip.

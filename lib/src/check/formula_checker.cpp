@@ -1006,6 +1006,21 @@ class checker {
         report_actual_product_as_normal(sides);
     }
 
+    // "Q_cfm : cfm "air flow for the blower vendor, normal"": a volume in a plain unit that
+    // its description puts at reference conditions.
+    bool describes_reference_state(std::uint32_t node) const {
+        node = syntax::inside_brackets(file_, node);
+        if (file_.nodes[node].kind != expr_kind::symbol)
+            return false;
+        const symbol_entry* e = symbols_.find(text(file_.nodes[node].range));
+        if (e == nullptr)
+            return false;
+        for (const std::string_view word : {"normal", "standard", "Normal", "Standard"})
+            if (e->description.find(word) != std::string_view::npos)
+                return true;
+        return false;
+    }
+
     // A volume described as free air ("l/min FAD", "free-air consumption"): the compressor
     // trade's air at the intake, which it converts to standard volumes by the unit alone.
     static bool describes_free_air(const symbol_entry& e) {
@@ -1087,7 +1102,8 @@ class checker {
         const std::size_t normal = a ? 0 : 1;
         const std::size_t actual = 1 - normal;
         if (!only_volumes_and_conversions(sides[actual].node, true) ||
-            !only_volumes_and_conversions(sides[normal].node, false))
+            !only_volumes_and_conversions(sides[normal].node, false) ||
+            describes_reference_state(sides[actual].node))
             return;
         diagnostic& d = report(
             rules::unit_scale,
@@ -1107,7 +1123,7 @@ class checker {
         const bool other = for_each_factor(k, [&](std::uint32_t at, int) {
             const syntax::expr_node& n = file_.nodes[at];
             if (n.kind == expr_kind::number)
-                return !plain_conversion_number(at);
+                return !plain_conversion_number(at) && could_correct_state(at);
             if (n.kind != expr_kind::symbol)
                 return true;
             const symbol_entry* e = symbols_.find(text(n.range));
@@ -1119,6 +1135,14 @@ class checker {
             return false;
         });
         return !other && found_volume;
+    }
+
+    // A number that could be a correction for a gas's state, (p/p_n)·(T_n/T) folded into one:
+    // between 0.7 and 1.43 (a plant from 3000 m up to a few bar, from -80 to 120 °C... taken
+    // as it comes). 0.5886 m³/h to cfm, or 1.699, can be no such thing.
+    bool could_correct_state(std::uint32_t at) const {
+        const double v = std::strtod(std::string(text(file_.nodes[at].range)).c_str(), nullptr);
+        return v >= 0.7 && v <= 1.43;
     }
 
     // A number that only converts units: a power of ten, a time ratio, or a ratio of table
