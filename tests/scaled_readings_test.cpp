@@ -445,6 +445,17 @@ TEST_CASE("a mix's readings weighted by shares that add up to 1") {
     fails_with(decl, {"T_m = OA*T_o + (1 - OA)*T_r"}, plumb::rules::unit_scale);
 }
 
+// A footbridge's first frequency from its modal stiffness and mass: √(k/m) is in rad/s and
+// f = √(k/m)/(2π) in Hz (Chopra, Dynamics of Structures, ch. 2, from memory). Set equal to a
+// symbol in Hz without the 2π it is 6.28 times too high; a geometric mean of two frequencies
+// in Hz is none of that.
+TEST_CASE("an angular frequency set equal to one in cycles") {
+    const std::string decl =
+        "f_1, f_a, f_b : Hz\nk_N : N/m\nM_s : kg\ng : m/s^2\nδ : m\nω : rad/s\n";
+    fails_with(decl, {"f_1 = sqrt(k_N/M_s)", "f_1 = sqrt(g/δ)"}, plumb::rules::unit_scale);
+    passes(decl, {"f_1 = sqrt(k_N/M_s)/(2*pi)", "ω = sqrt(k_N/M_s)", "f_1 = sqrt(f_a*f_b)"});
+}
+
 // A transformer's load loss corrected to 75 °C, P_k = P_k,m·(235 + θ_ref)/(235 + θ_test) for
 // copper (IEC 60076-1, from memory): each bracket counts from the conductor's inferred zero of
 // resistance, -235 °C, and the ratio is a pure number. A °C reading alone in its place stays

@@ -653,6 +653,9 @@ class checker {
                     // Not the actual-against-normal rule: sheets write "m³/d" for standard
                     // volumes as often as for actual ones.
                     report_reference_temperatures_left_out(sides);
+                if (equation && sides.size() == 2 && sides[0].type.dim == frequency_dim &&
+                    out_.size() == findings_before) [[unlikely]]
+                    report_angular_frequency_as_cycles(sides);
             }
             return;
         }
@@ -771,6 +774,50 @@ class checker {
         }
         if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
             report_apparent_as_real_power(sides);
+    }
+
+    // "f_1 = sqrt(k/M)" with f_1 in Hz: √(k/m) and √(g/δ) are angular frequencies, in rad/s,
+    // and a frequency in cycles is that over 2π (f = √(k/m)/(2π), Chopra, Dynamics of
+    // Structures, ch. 2, from memory). The units cannot say so, as a radian is 1. Asked where
+    // one side is a symbol in Hz and the other a square root with no number beside it.
+    [[gnu::noinline]] void report_angular_frequency_as_cycles(std::span<const operand> sides) {
+        for (std::size_t i = 0; i < 2; ++i) {
+            const std::uint32_t cycles = syntax::inside_brackets(file_, sides[i].node);
+            const std::uint32_t root = syntax::inside_brackets(file_, sides[1 - i].node);
+            const syntax::expr_node& c = file_.nodes[cycles];
+            const syntax::expr_node& r = file_.nodes[root];
+            if (c.kind != expr_kind::symbol || r.kind != expr_kind::call)
+                continue;
+            const symbol_entry* e = symbols_.find(text(c.range));
+            if (e == nullptr || e->unit_text.find("Hz") == std::string_view::npos ||
+                text(call_name_range(r)) != "sqrt")
+                continue;
+            // sqrt(f_1*f_2), a mean of two frequencies, is in cycles already.
+            const bool frequencies_inside =
+                syntax::search_subtree(file_, root, [&](std::uint32_t, const syntax::expr_node& n) {
+                    if (n.kind != expr_kind::symbol)
+                        return search_step::descend;
+                    const symbol_entry* inner = symbols_.find(text(n.range));
+                    return inner != nullptr && inner->compact_dim &&
+                                   *inner->compact_dim == frequency_dim
+                               ? search_step::found
+                               : search_step::skip;
+                });
+            if (frequencies_inside)
+                continue;
+            diagnostic& d = report(
+                rules::unit_scale,
+                fmt::format("{} is in cycles per second ({}), but {} is an angular frequency, "
+                            "in radians per second: a cycle is 2\u03C0 radians, so as written "
+                            "it is 6.28319 times too high",
+                            quote(cycles), e->unit_text, quote(root)),
+                file_.nodes[root].range);
+            d.level = severity::warning;
+            d.notes.push_back({fmt::format("write {}/(2*pi), or declare {} in rad/s as \u03C9",
+                                           display_text(r.range), text(c.range)),
+                               {}});
+            return;
+        }
     }
 
     // "P_e = S" with S in kVA and P_e in kW: apparent power is the real power over the power
