@@ -445,6 +445,17 @@ TEST_CASE("a mix's readings weighted by shares that add up to 1") {
     fails_with(decl, {"T_m = OA*T_o + (1 - OA)*T_r"}, plumb::rules::unit_scale);
 }
 
+// A tyre's contact area A = P/p_c with p_c the inflation pressure, gauge (FAA AC 150/5320-6,
+// from memory), as a cylinder's bore area from its load: a load over one gauge pressure is the
+// area it acts on, as p_g*A is the force. A ratio of two gauge pressures, or a gauge pressure
+// under a number, stays an error.
+TEST_CASE("a load over a gauge pressure is the area it acts on") {
+    const std::string decl = "A_in2 : in^2\nP_lb : lbf\np_c, p_2 : psig\nr : 1\n";
+    passes(decl, {"A_in2 = P_lb/p_c"});
+    fails_with(decl, {"r = p_c/p_2", "r = 14.7/p_c", "A_in2 = P_lb*p_2/p_c/p_2"},
+               plumb::rules::offset_scale);
+}
+
 // A footbridge's first frequency from its modal stiffness and mass: √(k/m) is in rad/s and
 // f = √(k/m)/(2π) in Hz (Chopra, Dynamics of Structures, ch. 2, from memory). Set equal to a
 // symbol in Hz without the 2π it is 6.28 times too high; a geometric mean of two frequencies

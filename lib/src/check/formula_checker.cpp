@@ -5694,6 +5694,7 @@ class checker {
             std::uint32_t node;
             const unit_definition* unit;
             std::string_view where;
+            bool divisor = false; // P/p_g: a load over a gauge pressure, the area it acts on
         };
         std::optional<deferred_offset> gauge_in_product;
         // ρ*g*h: the pressure of a column, a difference a gauge may read (p_g = ρ*g*h).
@@ -5790,11 +5791,16 @@ class checker {
                     (left_off || (right_off && !divided)) &&
                     compact_dimension((left_off ? result : t).offset->dim()) ==
                         pressure_dimension();
-                if (gauge_over_something) {
+                // A = F/p_g: a load over a gauge pressure (a tyre's contact area, a cylinder's
+                // bore), one gauge only; p_1g/p_2g stays a ratio of readings.
+                const bool gauge_divisor =
+                    !left_off && right_off && divided && !gauge_in_product &&
+                    compact_dimension(t.offset->dim()) == pressure_dimension();
+                if (gauge_over_something || gauge_divisor) {
                     if (!gauge_in_product)
                         gauge_in_product = deferred_offset{
                             left_off ? offset_node : op.rhs, left_off ? result.offset : t.offset,
-                            divided ? "used in a quotient" : "multiplied"};
+                            divided ? "used in a quotient" : "multiplied", gauge_divisor};
                 } else if (left_off || right_off) {
                     report_offset(left_off ? offset_node : op.rhs,
                                   left_off ? *result.offset : *t.offset,
@@ -5917,9 +5923,11 @@ class checker {
             // velocity of a jet into the atmosphere (Torricelli's and Bernoulli's).
             const bool jet = result.known && index == square_root_argument_ &&
                              result.dim == velocity_squared_dimension();
+            const bool bearing_area =
+                gauge_in_product->divisor && result.known && result.dim == area_dimension();
             if (result.known &&
                 (result.dim == length_dimension() || result.dim == force_dimension() ||
-                 wall_stress || ring_tension || jet)) {
+                 wall_stress || ring_tension || jet || bearing_area)) {
                 result.offset = nullptr;
                 result.point = false;
                 result.origin = 0.0;
