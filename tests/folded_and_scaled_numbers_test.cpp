@@ -97,6 +97,17 @@ TEST_CASE("the humidity ratio's 622 in g/kg") {
     fails_with(truck, {"P_hp = W_lbf*v_kmh*G_pct/100/375"}, plumb::rules::unit_scale);
 }
 
+// Konya's loading density d_e = 0.34·ρ_e·d² in lb/ft from g/cm³ and inches (Konya and Walter,
+// Surface Blast Design, from memory): 0.34 is π/4 × 0.4335, printed to two digits. Read so
+// beside the square alone; without it, or with the diameter in mm, it stays a finding.
+TEST_CASE("a circle's constant printed to two digits") {
+    const std::string decl = "d_e : lb/ft\nρ_e : g/cm^3\nd_in : in\nd_mm : mm\n";
+    const auto konya = run(decl, "d_e = 0.34*ρ_e*d_in^2");
+    CHECK(plumb::test::problems_in(konya) == 0);
+    CHECK(count_of(konya, plumb::rules::trade_constant) == 1);
+    fails_with(decl, {"d_e = 0.34*ρ_e*d_mm^2"}, plumb::rules::unit_scale);
+}
+
 TEST_CASE("Manning's US constant is not needed in the SI form") {
     // V = (k/n)·R^(2/3)·S^(1/2) with k = 1 in SI and 1.486 = (1 m / 0.3048 m)^(1/3) in US
     // units (Chow, Open-Channel Hydraulics, 1959, 5-6, from memory; 1 ft = 0.3048 m, NIST SP

@@ -4132,8 +4132,15 @@ class checker {
                     // too, where whole numbers must otherwise reach 1000).
                     const bool whole_two_digits =
                         l.value >= 10.0 && l.value < 100.0 && l.value == std::round(l.value);
+                    // Konya's 0.34*ρ*d^2 (π/4 × 0.4335, in² and g/cm³ to lb/ft; Konya and
+                    // Walter, Surface Blast Design, from memory): a circle's constant is printed
+                    // to two digits too, and read so beside a square alone, to those digits.
+                    const std::string_view printed = text(file_.nodes[l.node].range);
+                    const bool two_digit_decimal = printed.find('.') != std::string_view::npos &&
+                                                   significant_digits(printed) == 2 &&
+                                                   !l.factor_like;
                     if (!l.factor_like && !(l.value >= 100.0 && l.value < 1000.0) &&
-                        !whole_two_digits)
+                        !whole_two_digits && !two_digit_decimal)
                         continue;
                     // A folded factor is printed from a product worked out by hand, and its
                     // last digit is often cut rather than rounded (AASHTO's 1.075 for
@@ -4151,10 +4158,15 @@ class checker {
                     {
                         const folded_constant& c = constants[pass - 1];
                         if (!l.factor_like && !c.whole_three_digits &&
-                            !(whole_two_digits && c.whole_two_digits))
+                            !(whole_two_digits && c.whole_two_digits) && !two_digit_decimal)
                             continue;
                         if (whole_two_digits && !c.whole_two_digits)
                             continue;
+                        if (two_digit_decimal && !c.circle)
+                            continue;
+                        if (two_digit_decimal)
+                            as.tolerance =
+                                std::max(as.tolerance, half_unit_in_last_digit(printed) / l.value);
                         // 0.1166*S*N*A_p with the plunger's area declared: its π/4 would be
                         // counted twice; a circle's area is read only beside a square.
                         if (c.circle && !squares_something(ops[index[i]].node))
