@@ -566,6 +566,21 @@ TEST_CASE("an apparent power set equal to a real power") {
     }
 }
 
+// A UPS battery's autonomy t = E·DoD/P with P the real power the inverter draws (IEEE 1184,
+// from memory): divided by the UPS's kVA rating the autonomy is pf times too long. With a
+// power factor or an efficiency beside it, or the kW, it is not asked.
+TEST_CASE("an energy over an apparent power") {
+    const std::string decl = "t : min\nE : kWh\nS : kVA\nP : kW\npf, DoD : 1\n";
+    for (const char* formula : {"t = 60*E/S", "t = 60*DoD*E/S"}) {
+        CAPTURE(formula);
+        CHECK(count_of(run(decl + formula + "\n"), plumb::rules::unit_scale) == 1);
+    }
+    for (const char* formula : {"t = 60*E/(S*pf)", "t = 60*DoD*E/P"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 0);
+    }
+}
+
 // AASHTO's stopping sight distance in US units, SSD = 1.47·V·t + 1.075·V²/a in ft with V in
 // mph (from memory; 1 mph = 1.4667 ft/s, NIST SP 811 (2008), B.8): both terms agree through
 // rounded factors, and the sum takes the unit they round, ft, not 1.47's 0.23 % off. The

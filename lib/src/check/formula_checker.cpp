@@ -774,6 +774,10 @@ class checker {
         }
         if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
             report_apparent_as_real_power(sides);
+        else if ((marks & apparent_power) != 0)
+            for (const operand& side : sides)
+                if (report_energy_over_apparent_power(side))
+                    break;
     }
 
     // "f_1 = sqrt(k/M)" with f_1 in Hz: √(k/m) and √(g/δ) are angular frequencies, in rad/s,
@@ -818,6 +822,58 @@ class checker {
                                {}});
             return;
         }
+    }
+
+    // "t = 60*E_bat/S_ups" with E in kWh and S in kVA: a battery's or a tank's energy lasts
+    // as long as the real power drawn from it, the apparent power times the power factor
+    // (and over the inverter's efficiency; IEEE 1184, from memory). Asked of a product that
+    // divides an energy by an apparent power with no power factor beside it.
+    bool report_energy_over_apparent_power(const operand& side) {
+        std::uint32_t energy = syntax::no_index;
+        std::uint32_t apparent = syntax::no_index;
+        bool factor_beside = false;
+        for_each_factor(side.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind != expr_kind::symbol)
+                return false;
+            const std::string_view name = text(n.range);
+            const symbol_entry* e = symbols_.find(name);
+            if (e == nullptr || !e->compact_dim)
+                return false;
+            if ((unit_marks_of(e->unit_text) & apparent_power) != 0 && sign < 0)
+                apparent = at;
+            else if (*e->compact_dim == energy_dim && sign > 0 &&
+                     (e->unit_text.find("Wh") != std::string_view::npos ||
+                      e->unit_text.find('J') != std::string_view::npos))
+                energy = at;
+            else if (e->compact_dim->is_dimensionless() && names_power_factor(name, *e))
+                factor_beside = true;
+            return false;
+        });
+        if (energy == syntax::no_index || apparent == syntax::no_index || factor_beside)
+            return false;
+        const symbol_entry& s = *symbols_.find(text(file_.nodes[apparent].range));
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("{} is an apparent power ({}): {} lasts as long as the real power drawn "
+                        "from it, which is the apparent power times the power factor, and this "
+                        "formula leaves the power factor out",
+                        quote(apparent), s.unit_text, quote(energy)),
+            file_.nodes[side.node].range);
+        d.level = severity::warning;
+        d.notes.push_back({"divide by the real power, S*pf (and over the inverter's or the "
+                           "drive's efficiency where there is one)",
+                           {}});
+        return true;
+    }
+
+    // A power factor or an efficiency by its name or description: pf, cosφ, η.
+    static bool names_power_factor(std::string_view name, const symbol_entry& e) {
+        for (const std::string_view part : {"pf", "PF", "cos", "\u03B7", "eta", "eff"})
+            if (name.find(part) != std::string_view::npos)
+                return true;
+        return e.description.find("power factor") != std::string_view::npos ||
+               e.description.find("efficiency") != std::string_view::npos;
     }
 
     // "P_e = S" with S in kVA and P_e in kW: apparent power is the real power over the power
