@@ -693,3 +693,38 @@ TEST_CASE("workbook parity: Manning's full-pipe 0.463 in US units") {
                                                 }));
     CHECK(cell_findings(r) == std::vector<std::string>{"S!B6 trade-constant", "S!B7 unit-scale"});
 }
+
+TEST_CASE("workbook parity: Hazen-Williams' constant restated for the cell's units") {
+    // h_f = 10.67·L·Q^1.852/(C^1.852·D^4.87) in m from m³/s and m, and the fire trade's
+    // 4.52·Q^1.85/(C^1.85·D^4.87) in psi/ft from gpm and inches (NFPA 13, from memory): each
+    // restates to 10.67 for a head, or 10.67 times water's specific weight for a pressure.
+    // Typed bare they read as a fit's constant, and an input in another unit (the bore in mm,
+    // the flow in L/s) lands far from it: the cell is wrong, whatever the fit.
+    const check_report r =
+        check_one_sheet("S", sheet_of({
+                                 {"120", "m"},                                   // B2 pipe length
+                                 {"0.02", "m3/s"},                               // B3
+                                 {"20", "L/s"},                                  // B4
+                                 {"130", "-"},                                   // B5 C factor
+                                 {"0.15", "m"},                                  // B6 bore
+                                 {"150", "mm"},                                  // B7 bore
+                                 {"300", "gpm"},                                 // B8
+                                 {"6.065", "in"},                                // B9
+                                 {"=10.67*B2*B3^1.852/(B5^1.852*B6^4.87)", "m"}, // B10: right
+                                 {"=10.67*B2*B4^1.852/(B5^1.852*B7^4.87)", "m"}, // B11: L/s and mm
+                                 {"=4.52*B8^1.85/(B5^1.85*B9^4.87)", "psi/ft"},  // B12: right
+                                 {"=4.52*B8^1.85/(B5^1.85*B7^4.87)", "psi/ft"},  // B13: mm
+                             }));
+    const auto found = cell_findings(r);
+    CHECK(std::count(found.begin(), found.end(), "S!B10 trade-constant") == 1);
+    CHECK(std::count(found.begin(), found.end(), "S!B12 trade-constant") == 1);
+    const auto flagged = [&](const std::string& cell) {
+        return std::any_of(found.begin(), found.end(), [&](const std::string& f) {
+            return f.rfind(cell + " ", 0) == 0 && f.find("trade-constant") == std::string::npos;
+        });
+    };
+    CHECK_FALSE(flagged("S!B10"));
+    CHECK_FALSE(flagged("S!B12"));
+    CHECK(flagged("S!B11"));
+    CHECK(flagged("S!B13"));
+}

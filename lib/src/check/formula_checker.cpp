@@ -705,6 +705,8 @@ class checker {
         std::uint32_t constant = syntax::no_index;
         bool function = false;
         bool fractional_power = false;
+        bool flow_power = false;     // Hazen-Williams' 1.85 or 1.852 on the flow
+        bool diameter_power = false; // and its 4.87 on the bore
         const bool other = for_each_factor(formula.node, [&](std::uint32_t at, int sign) {
             const syntax::expr_node& n = file_.nodes[at];
             if (n.kind == expr_kind::number && sign > 0 && constant == syntax::no_index) {
@@ -726,6 +728,8 @@ class checker {
                 const double v =
                     std::strtod(std::string(text(file_.nodes[e].range)).c_str(), nullptr);
                 fractional_power = fractional_power || v != std::round(v);
+                flow_power = flow_power || (v >= 1.85 && v <= 1.852);
+                diameter_power = diameter_power || (v >= 4.86 && v <= 4.871);
                 return false;
             }
             return n.kind != expr_kind::reference;
@@ -741,6 +745,8 @@ class checker {
         } catch (const std::exception&) {
             return false;
         }
+        if (flow_power && diameter_power && report_hazen_williams_constant(sides, constant))
+            return true;
         diagnostic& d = report(rules::trade_constant,
                                fmt::format("{} is read as an empirical fit's constant, carrying "
                                            "{} for the unit written for its cell",
@@ -748,6 +754,47 @@ class checker {
                                file_.nodes[constant].range);
         d.level = severity::note;
         d.notes.push_back({"the fit holds only with its inputs in the units it was made for", {}});
+        return true;
+    }
+
+    // "=4.52*Q^1.85/(C^1.85*D^4.87)" in psi/ft with Q in gpm and D in inches (Hazen-Williams as
+    // the fire-protection and water trades print it, from memory): the constant is 10.67 in SI
+    // units for a head, and 10.67 times water's specific weight (9.79 to 9.81 kN/m³) for a
+    // pressure. Restated for the cell's units it must land on one of them; a bore in mm where
+    // the form takes inches lands far off, and the cell is then wrong, not a fit.
+    bool report_hazen_williams_constant(std::span<const operand> sides, std::uint32_t constant) {
+        // Every number of the formula counts: 6.05*10^5 and a 3.785 for gpm to L/min too.
+        double written = 1.0;
+        for (std::uint32_t k = 0; k < sides[1].type.literal_count; ++k) {
+            const scale_literal& l = literals_[sides[1].type.literal_begin + k];
+            written *= std::pow(l.value, l.exponent);
+        }
+        if (!(written > 0) || !std::isfinite(written) || !std::isfinite(sides[0].type.scale) ||
+            !std::isfinite(sides[1].type.scale) || !(sides[1].type.scale > 0))
+            return false;
+        const double si = written * sides[0].type.scale / sides[1].type.scale;
+        bool pressure = false;
+        try {
+            pressure = !sides[0].type.dim.expand().exponent(base_dimension::mass).is_zero();
+        } catch (const std::exception&) {
+            return false;
+        }
+        const double low = pressure ? 10.67 * 9790.0 : 10.67;
+        const double high = pressure ? 10.67 * 9810.0 : 10.67;
+        if (si >= low * 0.97 && si <= high * 1.03)
+            return false;
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("{} restated for the units of the cell and its inputs is {:.4g} in SI "
+                        "units, where Hazen-Williams' constant is 10.67 for a head{}: an input "
+                        "is in a unit its form does not take",
+                        display_text(file_.nodes[constant].range), si,
+                        pressure ? ", 104,600 for a pressure in water" : ""),
+            file_.nodes[sides[1].node].range);
+        d.level = severity::warning;
+        d.notes.push_back({"4.52 takes gpm and inches for psi/ft, 10.67 m³/s and metres for m/m, "
+                           "6.05e5 L/min and mm for bar/m (the form's source names its units)",
+                           {}});
         return true;
     }
 
