@@ -5316,6 +5316,21 @@ class checker {
         }
     }
 
+    // The type of a factor of an expanded term: a declared symbol or a workbook's cell.
+    typed_term expanded_factor_type(const syntax::expr_node& factor) {
+        return factor.kind == expr_kind::reference ? eval_reference(factor) : eval_symbol(factor);
+    }
+
+    // Whether a reading joins those of a mean so far, on the same scale and unit; the first
+    // one sets them.
+    static bool joins_readings(std::optional<typed_term>& readings, const typed_term& s) {
+        if (!readings) {
+            readings = s;
+            return true;
+        }
+        return s.offset == readings->offset && s.scale == readings->scale && s.dim == readings->dim;
+    }
+
     // "(q_h*T_h + q_c*T_c)/(q_h + q_c)", "(0.22*(T_a*W_a + T_c*W_c) + T_w*W_w)/(0.22*(W_a +
     // W_c) + W_w)": readings on one offset scale, each times a weight, over the sum of the
     // same weights, are their weighted mean, a reading on that scale whatever the scale's zero
@@ -5588,19 +5603,13 @@ class checker {
             typed_term weight;
             for (std::size_t k = 0; k < t.count; ++k) {
                 const syntax::expr_node& factor = file_.nodes[t.symbols[k]];
-                const typed_term s = factor.kind == expr_kind::reference ? eval_reference(factor)
-                                                                         : eval_symbol(factor);
+                const typed_term s = expanded_factor_type(factor);
                 if (!s.known)
                     return std::nullopt;
                 if (s.offset != nullptr) {
-                    if (at)
+                    if (at || !joins_readings(reading, s))
                         return std::nullopt;
                     at = k;
-                    if (!reading)
-                        reading = s;
-                    else if (s.offset != reading->offset || s.scale != reading->scale ||
-                             !(s.dim == reading->dim))
-                        return std::nullopt;
                     continue;
                 }
                 weight.dim = weight.dim * s.dim;
@@ -5718,17 +5727,12 @@ class checker {
             weight w{t.coefficient, {}, 0, t.coefficient};
             for (std::size_t k = 0; k < t.count; ++k) {
                 const syntax::expr_node& factor = file_.nodes[t.symbols[k]];
-                const typed_term s = factor.kind == expr_kind::reference ? eval_reference(factor)
-                                                                         : eval_symbol(factor);
+                const typed_term s = expanded_factor_type(factor);
                 if (!s.known)
                     return std::nullopt;
                 if (s.offset != nullptr) {
-                    if (has_reading ||
-                        (reading && (s.offset != reading->offset || s.scale != reading->scale ||
-                                     !(s.dim == reading->dim))))
+                    if (has_reading || !joins_readings(reading, s))
                         return std::nullopt;
-                    if (!reading)
-                        reading = s;
                     has_reading = true;
                     continue;
                 }
