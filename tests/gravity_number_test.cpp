@@ -570,7 +570,8 @@ TEST_CASE("an apparent power set equal to a real power") {
 // from memory): divided by the UPS's kVA rating the autonomy is pf times too long. With a
 // power factor or an efficiency beside it, or the kW, it is not asked.
 TEST_CASE("an energy over an apparent power") {
-    const std::string decl = "t : min\nE : kWh\nS : kVA\nP : kW\npf, DoD : 1\n";
+    const std::string decl =
+        "t : min\nE : kWh\nS : kVA\nP : kW\npf, DoD : 1 \"power factor, depth of discharge\"\n";
     for (const char* formula : {"t = 60*E/S", "t = 60*DoD*E/S"}) {
         CAPTURE(formula);
         CHECK(count_of(run(decl + formula + "\n"), plumb::rules::unit_scale) == 1);

@@ -893,7 +893,7 @@ class checker {
                      (e->unit_text.find("Wh") != std::string_view::npos ||
                       e->unit_text.find('J') != std::string_view::npos))
                 energy = at;
-            else if (e->compact_dim->is_dimensionless() && names_power_factor(name, *e))
+            else if (e->compact_dim->is_dimensionless() && names_power_factor(name))
                 factor_beside = true;
             return false;
         });
@@ -914,13 +914,13 @@ class checker {
         return true;
     }
 
-    // A power factor or an efficiency by its name or description: pf, cosφ, η.
-    static bool names_power_factor(std::string_view name, const symbol_entry& e) {
+    // A power factor or an efficiency by its name: pf, cosφ, η. Not by a description, which
+    // "pf, DoD : 1 "power factor, depth of discharge"" shares between two names.
+    static bool names_power_factor(std::string_view name) {
         for (const std::string_view part : {"pf", "PF", "cos", "\u03B7", "eta", "eff"})
             if (name.find(part) != std::string_view::npos)
                 return true;
-        return e.description.find("power factor") != std::string_view::npos ||
-               e.description.find("efficiency") != std::string_view::npos;
+        return false;
     }
 
     // "P_e = S" with S in kVA and P_e in kW: apparent power is the real power over the power
