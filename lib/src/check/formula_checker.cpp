@@ -725,8 +725,7 @@ class checker {
                     e = file_.nodes[e].lhs;
                 if (file_.nodes[e].kind != expr_kind::number)
                     return true;
-                const double v =
-                    std::strtod(std::string(text(file_.nodes[e].range)).c_str(), nullptr);
+                const double v = written_number(file_.nodes[e].range);
                 fractional_power = fractional_power || v != std::round(v);
                 flow_power = flow_power || (v >= 1.85 && v <= 1.852);
                 diameter_power = diameter_power || (v >= 4.86 && v <= 4.871);
@@ -759,7 +758,7 @@ class checker {
 
     // "=4.52*Q^1.85/(C^1.85*D^4.87)" in psi/ft with Q in gpm and D in inches (Hazen-Williams as
     // the fire-protection and water trades print it, from memory): the constant is 10.67 in SI
-    // units for a head, and 10.67 times water's specific weight (9.79 to 9.81 kN/m³) for a
+    // units for a head, and 10.67 times water's specific weight (9.76 to 9.81 kN/m³) for a
     // pressure. Restated for the cell's units it must land on one of them; a bore in mm where
     // the form takes inches lands far off, and the cell is then wrong, not a fit.
     bool report_hazen_williams_constant(std::span<const operand> sides, std::uint32_t constant) {
@@ -779,8 +778,11 @@ class checker {
         } catch (const std::exception&) {
             return false;
         }
-        const double low = pressure ? 10.67 * 9790.0 : 10.67;
-        const double high = pressure ? 10.67 * 9810.0 : 10.67;
+        // Water's specific weight between 0 and 30 °C, in N/m³ (kg/L × 1000 × g_n).
+        const double gamma_low = water_density_least().to_double() * 1000.0 * 9.80665;
+        const double gamma_high = water_density_greatest().to_double() * 1000.0 * 9.80665;
+        const double low = hazen_williams_si * (pressure ? gamma_low : 1.0);
+        const double high = hazen_williams_si * (pressure ? gamma_high : 1.0);
         if (si >= low * 0.97 && si <= high * 1.03)
             return false;
         diagnostic& d = report(
@@ -1198,7 +1200,7 @@ class checker {
             const syntax::expr_node& n = file_.nodes[at];
             if (n.kind == expr_kind::number) {
                 // A state correction is a number near 1 (0.95, 1.07); 453592 mg/lb is none.
-                const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
+                const double v = written_number(n.range);
                 return !plain_conversion_number(at) && !(v >= 10.0 || (v > 0 && v <= 0.1));
             }
             if (n.kind != expr_kind::symbol)
@@ -1343,7 +1345,7 @@ class checker {
     // between 0.7 and 1.43 (a plant from 3000 m up to a few bar, from -80 to 120 °C... taken
     // as it comes). 0.5886 m³/h to cfm, or 1.699, can be no such thing.
     bool could_correct_state(std::uint32_t at) const {
-        const double v = std::strtod(std::string(text(file_.nodes[at].range)).c_str(), nullptr);
+        const double v = written_number(file_.nodes[at].range);
         return v >= 0.7 && v <= 1.43;
     }
 
@@ -1351,7 +1353,7 @@ class checker {
     // units (Q_cfm/35.31, ft³ to m³); never one that could be a correction (0.95, 273.15,
     // 600 for LNG's expansion).
     bool plain_conversion_number(std::uint32_t at) const {
-        const double v = std::strtod(std::string(text(file_.nodes[at].range)).c_str(), nullptr);
+        const double v = written_number(file_.nodes[at].range);
         if (!(v > 0))
             return false;
         const double decade = std::round(std::log10(v));
@@ -1395,7 +1397,7 @@ class checker {
                 case expr_kind::number: {
                     // 2π, π or their inverses written as numbers (6.283, 3.1416, 0.159), and with a
                     // minute folded in (2π/60 = 0.1047 rad/s per rpm, 60/2π = 9.549).
-                    const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
+                    const double v = written_number(n.range);
                     for (const double c :
                          {2.0 * std::numbers::pi, std::numbers::pi, 0.5 / std::numbers::pi,
                           1.0 / std::numbers::pi, std::numbers::pi / 30.0, 30.0 / std::numbers::pi})
@@ -3235,12 +3237,7 @@ class checker {
             const auto says = [&](std::string_view word) {
                 return description.find(word) != std::string_view::npos;
             };
-            const bool barometer = says("barometer") || says("barometric") ||
-                                   says("atmospheric pressure") || says("ambient pressure") ||
-                                   says("local atmosphere") || says("site atmosphere") ||
-                                   name.find("baro") != std::string_view::npos ||
-                                   name.find("atm") != std::string_view::npos;
-            if (!barometer || says("standard"))
+            if (!names_the_atmosphere(name, description) || says("standard"))
                 continue;
             const double written = declared_number(decl);
             const double pascals = written * decl.kind.si_factor;
@@ -3259,7 +3256,7 @@ class checker {
     double declared_number(const syntax::declaration& decl) const {
         constexpr double none = std::numeric_limits<double>::quiet_NaN();
         if (decl.value.end > decl.value.begin)
-            return std::strtod(std::string(text(decl.value)).c_str(), nullptr);
+            return written_number(decl.value);
         const std::string_view description = text(decl.description);
         const std::string_view unit = text(decl.spec);
         if (unit.empty())
@@ -3603,14 +3600,12 @@ class checker {
             return false;
         const std::string_view name = text(file_.nodes[node].range);
         const symbol_entry* e = symbols_.find(name);
-        const std::string_view description = e != nullptr ? e->description : std::string_view();
-        for (const std::string_view word : {"atm", "baro", "amb"})
-            if (name.find(word) != std::string_view::npos)
-                return true;
-        for (const std::string_view word : {"atmospher", "barometr", "barometer", "ambient"})
-            if (description.find(word) != std::string_view::npos)
-                return true;
-        return false;
+        return names_the_atmosphere(name, e != nullptr ? e->description : std::string_view());
+    }
+
+    // A number as written, read as a double: "0.5886", "1055", "2.31".
+    double written_number(span range) const {
+        return std::strtod(std::string(text(range)).c_str(), nullptr);
     }
 
     // The SI value of "14.7 {psi}" or "{p_atm}".
@@ -4617,8 +4612,7 @@ class checker {
             if ((n.kind == expr_kind::add || n.kind == expr_kind::subtract) && sign < 0) {
                 const std::uint32_t first = syntax::inside_brackets(file_, n.lhs);
                 if (n.kind == expr_kind::subtract && file_.nodes[first].kind == expr_kind::number) {
-                    const double a =
-                        std::strtod(std::string(text(file_.nodes[first].range)).c_str(), nullptr);
+                    const double a = written_number(file_.nodes[first].range);
                     a_over = a_over || (a >= 17.0 && a <= 18.0);
                 }
                 return false;
@@ -4822,9 +4816,7 @@ class checker {
         const std::uint32_t reading = number == n.rhs ? n.lhs : n.rhs;
         if (number == syntax::no_index || file_.nodes[reading].kind != expr_kind::symbol)
             return false;
-        const double pressure =
-            std::strtod(std::string(text(file_.nodes[number].range)).c_str(), nullptr) *
-            sum.type.scale;
+        const double pressure = written_number(file_.nodes[number].range) * sum.type.scale;
         if (!(pressure >= 0.69 * standard_atmosphere && pressure <= 1.005 * standard_atmosphere))
             return false;
         // The barometric formula of the standard atmosphere, h = 44330.8·(1 - (p/p0)^0.190263) m.
@@ -5368,6 +5360,14 @@ class checker {
         }
     }
 
+    // An expanded term's few names in order: an insertion sort (std::sort's bounds puzzle GCC
+    // here).
+    static void sort_names(std::array<std::string_view, 6>& names, std::size_t size) {
+        for (std::size_t a = 1; a < size && a < names.size(); ++a)
+            for (std::size_t b = a; b > 0 && names[b] < names[b - 1]; --b)
+                std::swap(names[b], names[b - 1]);
+    }
+
     // The type of a factor of an expanded term: a declared symbol or a workbook's cell.
     typed_term expanded_factor_type(const syntax::expr_node& factor) {
         return factor.kind == expr_kind::reference ? eval_reference(factor) : eval_symbol(factor);
@@ -5531,8 +5531,7 @@ class checker {
         if (file_.nodes[number].kind != expr_kind::number ||
             file_.nodes[reading].kind != expr_kind::symbol)
             return;
-        const double constant =
-            std::strtod(std::string(text(file_.nodes[number].range)).c_str(), nullptr);
+        const double constant = written_number(file_.nodes[number].range);
         const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
         if (!(constant >= 200.0 && constant <= 260.0) || e == nullptr ||
             e->offset_unit != nullptr || e->unit_text != "K")
@@ -5688,14 +5687,8 @@ class checker {
                         names_top[m++] = text(file_.nodes[t.symbols[k]].range);
                 for (std::size_t k = 0; k < b.count; ++k)
                     names_below[k] = text(file_.nodes[b.symbols[k]].range);
-                // A few names each: an insertion sort (std::sort's bounds puzzle GCC here).
-                const auto order = [](std::array<std::string_view, 6>& names, std::size_t size) {
-                    for (std::size_t a = 1; a < size && a < names.size(); ++a)
-                        for (std::size_t b = a; b > 0 && names[b] < names[b - 1]; --b)
-                            std::swap(names[b], names[b - 1]);
-                };
-                order(names_top, m);
-                order(names_below, b.count);
+                sort_names(names_top, m);
+                sort_names(names_below, b.count);
                 for (std::size_t k = 0; k < m && k < names_top.size(); ++k)
                     if (names_top[k] != names_below[k])
                         return false;
@@ -5798,10 +5791,7 @@ class checker {
             // of (1 - OA) is a percentage used as a fraction, for the sum's rules to report.
             if (!has_reading || (w.count > 0 && std::abs(std::abs(w.per_fraction) - 1.0) > 1e-9))
                 return std::nullopt;
-            // A few names: an insertion sort (std::sort's bounds puzzle GCC here too).
-            for (std::size_t a = 1; a < w.count && a < w.names.size(); ++a)
-                for (std::size_t b = a; b > 0 && w.names[b] < w.names[b - 1]; --b)
-                    std::swap(w.names[b], w.names[b - 1]);
+            sort_names(w.names, w.count);
             weights.push_back(w);
         }
         // Like monomials gathered: the constant must come to 1 and every other to 0.
@@ -6307,7 +6297,7 @@ class checker {
         const syntax::expr_node& n = file_.nodes[node];
         if (n.kind != expr_kind::subtract || file_.nodes[n.rhs].kind != expr_kind::number)
             return 0.0;
-        return std::strtod(std::string(text(file_.nodes[n.rhs].range)).c_str(), nullptr);
+        return written_number(file_.nodes[n.rhs].range);
     }
 
     // b^e exactly, for the whole exponents that constant exponents such as 2^3 need.
@@ -6862,7 +6852,7 @@ class checker {
             }
             if (n.kind != expr_kind::number)
                 return false;
-            const double v = std::strtod(std::string(text(n.range)).c_str(), nullptr);
+            const double v = written_number(n.range);
             for (const double c :
                  {std::numbers::pi, 2.0 * std::numbers::pi, std::numbers::pi / 180.0,
                   180.0 / std::numbers::pi, std::numbers::pi / 2.0})

@@ -8,6 +8,7 @@
 
 #include "check/functions.hpp"
 #include "check/restatement.hpp"
+#include "check/trade_constants.hpp"
 #include "model/subtree_search.hpp"
 #include "plumb/check.hpp"
 #include "plumb/groups.hpp"
@@ -946,7 +947,7 @@ class reporter {
                 return;
         // Restated, the coefficient leaves out the formula's other numbers: where it has any
         // ((Q_Ls/1000)^1.852, a conversion written in), the restated value says nothing.
-        if (std::abs(k_si / 10.67 - 1.0) <= 0.03 || holds_other_numbers(x))
+        if (std::abs(k_si / hazen_williams_si - 1.0) <= 0.03 || holds_other_numbers(x))
             return;
         diagnostic d = make(severity::warning, rules::unit_scale,
                             fmt::format("the coefficient {} reads as Hazen-Williams', but the "

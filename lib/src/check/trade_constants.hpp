@@ -32,6 +32,11 @@ std::span<const trade_constant> trade_constants();
 // weight per gallon), or null.
 const trade_constant* trade_constant_for(const rational& printed);
 
+// Hazen-Williams' coefficient in coherent SI units, h_f = 10.67·L·Q^1.852/(C^1.852·D^4.87)
+// with metres and m³/s (the AWWA and ASCE manuals, from memory): the value every other form of
+// the formula (4.52, 10.44, 6.05e5) restates to.
+inline constexpr double hazen_williams_si = 10.67;
+
 // Water's density between 0 and 30 °C in kg/L, the range the trades' water numbers round:
 // 0.99565 at 30 °C up to 0.999975 at 4 °C (CRC Handbook of Chemistry and Physics; from memory).
 rational water_density_least();

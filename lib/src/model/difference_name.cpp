@@ -50,4 +50,14 @@ bool names_a_stress(std::string_view name, std::string_view description) {
     return false;
 }
 
+bool names_the_atmosphere(std::string_view name, std::string_view description) {
+    for (const std::string_view word : {"atm", "baro", "amb"})
+        if (name.find(word) != std::string_view::npos)
+            return true;
+    for (const std::string_view word : {"atmospher", "barometr", "barometer", "ambient"})
+        if (description.find(word) != std::string_view::npos)
+            return true;
+    return false;
+}
+
 } // namespace plumb

@@ -14,4 +14,8 @@ bool names_a_difference(std::string_view name, std::string_view description);
 // stress"): a force over an area in a material, on no pressure scale, so no reading.
 bool names_a_stress(std::string_view name, std::string_view description);
 
+// Whether a pressure's name or description says it is the atmosphere or the site's barometer
+// (p_atm, p_baro, "barometric pressure", "ambient"): read so where a sum adds or takes it off.
+bool names_the_atmosphere(std::string_view name, std::string_view description);
+
 } // namespace plumb
