@@ -85,6 +85,27 @@ TEST_CASE("gravity as a number: a missing g and the wrong numbers are still erro
     CHECK(count_of(both, plumb::rules::gravity_number) == 0);
 }
 
+TEST_CASE("gravity as a number: a head from a gauge reading with g left out says so") {
+    // H = p/(ρ*g) (common practice); a gauge reading may give a head, so the slip is the
+    // missing g, not the reading's zero.
+    const std::string pump = "H : m\np_g : kPag\nρ_w : kg/m^3\ng : m/s^2\n";
+    const auto missing = run(pump + "H = p_g*1000/ρ_w\n");
+    CHECK(count_of(missing, plumb::rules::side_mismatch) == 1);
+    CHECK(count_of(missing, plumb::rules::offset_scale) == 0);
+    std::string said;
+    for (const auto& d : missing.diagnostics)
+        for (const auto& note : d.notes)
+            said += note.message;
+    CHECK(said.find("is a g missing") != std::string::npos);
+    // With g it is a head, and a gauge reading's head is allowed.
+    CHECK(run(pump + "H = p_g*1000/(ρ_w*g)\n").diagnostics.empty());
+    // The same quotient as a specific energy, where no head is asked for, stays the gauge's
+    // finding.
+    const auto energy =
+        run("e : J/kg\np_g : kPag\nρ_w : kg/m^3\ne = p_g*1000/ρ_w\n");
+    CHECK(count_of(energy, plumb::rules::offset_scale) == 1);
+}
+
 // The oilfield hydrostatic factor: 1 ppg over 1 ft gives 0.051948 psi (computed from NIST SP 811
 // (2008) App. B: lb = 0.45359237 kg, gal = 3.785411784 L, ft = 0.3048 m, psi = 6894.757 Pa, and
 // g_n); drilling sheets write 0.052 (common practice).
@@ -259,11 +280,13 @@ TEST_CASE("gauge pressures: heads, forces and columns pass; gas laws, work and r
         CHECK(problems_in(run(gauge + formula + "\n")) == 0);
     }
     for (const char* formula :
-         {"p_g = ρ*R_a*T/1000", "p_2 = p_g*V_1/V_2", "h = p_g*1000/ρ", "h = p_g/(ρ*{g_n})*V_1",
+         {"p_g = ρ*R_a*T/1000", "p_2 = p_g*V_1/V_2", "h = p_g/(ρ*{g_n})*V_1",
           "W = p_g*1000*V_1", "ρ = p_g*1000/(R_a*T)"}) {
         CAPTURE(formula);
         CHECK(count_of(run(gauge + formula + "\n"), plumb::rules::offset_scale) == 1);
     }
+    // A head with g left out is reported as the missing g it is.
+    CHECK(count_of(run(gauge + "h = p_g*1000/ρ\n"), plumb::rules::side_mismatch) == 1);
     // The kPa of the gauge still needs its 1000 once the head is read.
     CHECK(count_of(run(gauge + "h = p_g/(ρ*{g_n})\n"), plumb::rules::unit_scale) == 1);
 }

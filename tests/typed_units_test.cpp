@@ -129,6 +129,41 @@ TEST_CASE("gauge and absolute marks: kPa(g), psi(g), kPa(a) (common practice)") 
     }
 }
 
+TEST_CASE("gauge and absolute marks after a space: kPa g, bar a, kPa abs (common practice)") {
+    // Nameplates and sheets print "7 bar g" and "101.3 kPa abs"; read as a product, "kPa g"
+    // would be kilopascal times gram.
+    same_unit("kPa g", "kPag");
+    same_unit("bar g", "barg");
+    same_unit("psi g", "psig");
+    same_unit("bar a", "bar");
+    same_unit("kPa abs", "kPa");
+    other_scale("bar g", "psig");
+    // Gauge set equal to absolute: the zeros differ.
+    const auto zeros = plumb::check_text("u.plumb", "a : bar g\nb : bar a\na = b\n");
+    CHECK(findings(zeros, plumb::rules::offset_scale).size() == 1);
+    // With a description, a constant or a comment after it, and inside a quantity's braces.
+    const auto described = plumb::check_text(
+        "u.plumb", "p : kPa g \"discharge\"\nq : kPa g = 300 # relief set\nr : kPag\n"
+                   "p = r + 50 {kPa g} - q\n");
+    INFO(listing(described));
+    CHECK(described.diagnostics.empty());
+    // A gas law on gauge readings declared so is the offset-scale error it is with psig.
+    const auto gas_law = plumb::check_text(
+        "u.plumb", "p_1, p_2 : bar g\nV_1, V_2 : m^3\np_1*V_1 = p_2*V_2\n");
+    const auto gas_law_psig =
+        plumb::check_text("u.plumb", "p_1, p_2 : psig\nV_1, V_2 : m^3\np_1*V_1 = p_2*V_2\n");
+    CHECK(findings(gas_law, plumb::rules::offset_scale).size() == 2); // one on each side
+    CHECK(findings(gas_law_psig, plumb::rules::offset_scale).size() == 2);
+    // A lone g that is no mark stays the gram: after a unit that is no pressure it is refused
+    // as a mark, and inside a product it is the gram as before.
+    const auto not_pressure = plumb::check_text("u.plumb", "x : kN g\n");
+    REQUIRE(findings(not_pressure, plumb::rules::unknown_unit).size() == 1);
+    CHECK(findings(not_pressure, plumb::rules::unknown_unit)[0]->message.find(
+              "not an absolute pressure") != std::string::npos);
+    same_unit("kg m", "kg*m");
+    same_unit("g m/s", "g*m/s");
+}
+
 TEST_CASE("the degree sign alone is the angle degree (SI Brochure 9th ed., Table 8)") {
     same_unit("\u00B0", "deg");
     same_unit("\u00B0/s", "deg/s");

@@ -6086,9 +6086,16 @@ class checker {
                              result.dim == velocity_squared_dimension();
             const bool bearing_area =
                 gauge_in_product->divisor && result.known && result.dim == area_dimension();
+            // H = p_g*1000/ρ_w: a gauge pressure over a density set equal to a head lacks g,
+            // and p_g/(ρ*g) would be a head a gauge may give. The sides' mismatch says so,
+            // which is the slip; its zero is no fault of it.
+            const bool head_without_g =
+                index == side_hint_node_ && side_hint_ != nullptr && side_hint_->known &&
+                side_hint_->dim == length_dimension() && result.known &&
+                result.dim == velocity_squared_dimension();
             if (result.known &&
                 (result.dim == length_dimension() || result.dim == force_dimension() ||
-                 wall_stress || ring_tension || jet || bearing_area)) {
+                 wall_stress || ring_tension || jet || bearing_area || head_without_g)) {
                 result.offset = nullptr;
                 result.point = false;
                 result.origin = 0.0;

@@ -614,12 +614,22 @@ bool is_pressure(const dimension& d) {
     return d == pascal;
 }
 
-// "psi(g)", "kPa(g)": the gauge row of that unit (psig, kPag); "kPa(a)": the absolute unit.
-// An empty result with a message when the mark does not fit the unit.
-std::optional<unit_value> lookup_marked_unit(std::string_view text, const parse_state& s,
-                                             std::string& why) {
-    const std::string_view base = text.substr(0, text.size() - 3);
-    const bool gauge = text[text.size() - 2] == 'g';
+// A unit symbol that ends in a gauge or absolute mark, "kPa(g)" or "kPa g", split into the
+// unit and whether the mark says gauge; nothing when it carries no mark.
+std::optional<std::pair<std::string_view, bool>> reading_mark(std::string_view text) {
+    if (text.ends_with("(g)") || text.ends_with("(a)"))
+        return std::pair{text.substr(0, text.size() - 3), text[text.size() - 2] == 'g'};
+    const std::size_t blank = text.find_first_of(" \t");
+    if (blank == std::string_view::npos)
+        return std::nullopt;
+    const std::size_t mark = text.find_last_of(" \t") + 1;
+    return std::pair{text.substr(0, blank), text.substr(mark) == "g"};
+}
+
+// "psi(g)", "kPa(g)", "kPa g": the gauge row of that unit (psig, kPag); "kPa(a)", "kPa abs":
+// the absolute unit. An empty result with a message when the mark does not fit the unit.
+std::optional<unit_value> lookup_marked_unit(std::string_view text, std::string_view base,
+                                             bool gauge, const parse_state& s, std::string& why) {
     const auto absolute = lookup_unit(base, s);
     if (!absolute || !is_pressure(absolute->dim) ||
         (absolute->single != nullptr && absolute->single->scale != unit_scale::absolute)) {
@@ -687,8 +697,8 @@ template <> struct action<nt::unit_symbol> {
         const std::string_view text = in.string_view();
         std::string why;
         std::optional<unit_value> found;
-        if (text.ends_with("(g)") || text.ends_with("(a)"))
-            found = lookup_marked_unit(text, s, why);
+        if (const auto marked = reading_mark(text))
+            found = lookup_marked_unit(text, marked->first, marked->second, s, why);
         else if (!(found = lookup_unit(text, s)))
             found = lookup_digit_power(text, s);
         if (found) {
