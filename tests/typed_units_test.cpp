@@ -164,6 +164,26 @@ TEST_CASE("gauge and absolute marks after a space: kPa g, bar a, kPa abs (common
     same_unit("g m/s", "g*m/s");
 }
 
+TEST_CASE("deg C and deg F are the temperature scales; C for a temperature is refused") {
+    // Typed where the keyboard lacks ° (common practice); as a product they would be an angle
+    // times a coulomb or a farad.
+    same_unit("deg C", "\u00B0C");
+    same_unit("deg F", "\u00B0F");
+    const auto multiplied =
+        plumb::check_text("u.plumb", "T : deg C\nm : kg\nc : J/(kg*K)\nQ : J\nQ = m*c*T\n");
+    CHECK(findings(multiplied, plumb::rules::offset_scale).size() == 1);
+    // SI Brochure 9th ed., Table 4: C is the coulomb, F the farad. A temperature declared in
+    // them would multiply unseen, so the description's word decides.
+    const auto as_charge = plumb::check_text(
+        "u.plumb", "T_s : C \"supply temperature\"\nc : J/(kg*C) \"specific heat\"\n");
+    CHECK(findings(as_charge, plumb::rules::unknown_unit).size() == 2);
+    const auto charge = plumb::check_text(
+        "u.plumb", "q : C \"charge through the cell\"\nC_b : F \"capacitance\"\n"
+                   "I : A\nt : s\nq = I*t\nV : V\nq = C_b*V\n");
+    INFO(listing(charge));
+    CHECK(charge.diagnostics.empty());
+}
+
 TEST_CASE("the degree sign alone is the angle degree (SI Brochure 9th ed., Table 8)") {
     same_unit("\u00B0", "deg");
     same_unit("\u00B0/s", "deg/s");

@@ -199,8 +199,12 @@ struct spaced_reading_mark
 // "°" alone is the angle degree; "°C", "°F" are symbols that start with it. "° C" with a
 // space would read as degree times coulomb, so it is refused with a message.
 struct no_spaced_degree_scale : not_at<plus<space>, one<'C', 'F'>, not_at<name_char>> {};
+// "deg C", "deg F": the temperature scales as typed where ° is not on the keyboard (read as
+// a product they would be an angle times a coulomb or a farad).
+struct spaced_degree_scale
+    : seq<TAO_PEGTL_STRING("deg"), plus<blank>, one<'C', 'F'>, not_at<name_char>> {};
 struct unit_symbol
-    : sor<seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>,
+    : sor<spaced_degree_scale, seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>,
               opt<sor<gauge_mark, spaced_reading_mark>>>,
           seq<utf8::one<0xB0>, must<no_spaced_degree_scale>>> {};
 // "Nm³", "Sm³": the gas trades' normal and standard cubic metres as sheets print them, one

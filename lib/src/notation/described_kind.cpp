@@ -68,4 +68,14 @@ std::optional<dimension> described_kind(std::string_view description) {
     return found;
 }
 
+bool describes_a_temperature(std::string_view description) {
+    std::string text(description);
+    std::transform(text.begin(), text.end(), text.begin(),
+                   [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+    for (const std::string_view words : {"temperature", "temp", "specific heat", "heat capacity"})
+        if (has_words(text, words))
+            return true;
+    return text.find("\u00B0c") != std::string::npos || text.find("\u00B0f") != std::string::npos;
+}
+
 } // namespace plumb

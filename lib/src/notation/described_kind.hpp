@@ -12,4 +12,8 @@ namespace plumb {
 // The dimension the description's words name, or nothing when none or several kinds do.
 std::optional<dimension> described_kind(std::string_view description);
 
+// Whether the description says the symbol is a temperature or carries one ("supply temp",
+// "specific heat", "°C"), for a unit that reads otherwise.
+bool describes_a_temperature(std::string_view description);
+
 } // namespace plumb

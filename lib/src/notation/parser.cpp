@@ -697,7 +697,9 @@ template <> struct action<nt::unit_symbol> {
         const std::string_view text = in.string_view();
         std::string why;
         std::optional<unit_value> found;
-        if (const auto marked = reading_mark(text))
+        if (text.starts_with("deg") && text.size() > 3 && (text[3] == ' ' || text[3] == '\t'))
+            found = lookup_unit(text.back() == 'C' ? "degC" : "degF", s);
+        else if (const auto marked = reading_mark(text))
             found = lookup_marked_unit(text, marked->first, marked->second, s, why);
         else if (!(found = lookup_unit(text, s)))
             found = lookup_digit_power(text, s);
@@ -878,9 +880,40 @@ void rank_suggestions_by_description(parse_state& s) {
     }
 }
 
+// "T_s : C "supply temperature"": C is the coulomb and F the farad. A temperature declared so
+// passes every formula that multiplies it, with no word about its zero.
+void refuse_charge_for_temperature(parse_state& s) {
+    if (!s.pending_kind.by_unit || !s.pending_kind.dim)
+        return;
+    const dimension& d = *s.pending_kind.dim;
+    if (d.exponent(base_dimension::current).is_zero() ||
+        !d.exponent(base_dimension::temperature).is_zero() ||
+        s.pending_description.begin == s.pending_description.end)
+        return;
+    const std::string_view spec = s.text(s.pending_spec);
+    const auto is_name_byte = [](char c) {
+        return std::isalnum(static_cast<unsigned char>(c)) != 0 || c == '_' ||
+               static_cast<unsigned char>(c) >= 0x80;
+    };
+    bool lone_scale_letter = false;
+    for (std::size_t i = 0; i < spec.size() && !lone_scale_letter; ++i)
+        lone_scale_letter = (spec[i] == 'C' || spec[i] == 'F') &&
+                            (i == 0 || !is_name_byte(spec[i - 1])) &&
+                            (i + 1 == spec.size() || !is_name_byte(spec[i + 1]));
+    if (!lone_scale_letter || !describes_a_temperature(s.text(s.pending_description)))
+        return;
+    s.report(rules::unknown_unit,
+             fmt::format("'{}' reads C as the coulomb and F as the farad, but the description "
+                         "says a temperature: write °C or °F (or degC, degF) for the scales, "
+                         "K or Δ°C for a difference",
+                         spec),
+             s.pending_spec);
+}
+
 template <> struct action<nt::declaration> {
     template <typename In> static void apply(const In& in, parse_state& s) {
         rank_suggestions_by_description(s);
+        refuse_charge_for_temperature(s);
         const auto count = static_cast<std::uint32_t>(s.out.names.size()) - s.pending_first_name;
         s.out.declarations.push_back({s.range(in), s.pending_spec, s.pending_description,
                                       s.pending_value, s.pending_kind, s.pending_first_name,
