@@ -83,6 +83,22 @@ TEST_CASE("the factor advised leaves the formula's own 2, 8 and π alone") {
     passes(spring, {"τ = K_B*8*F_lbf*4.44822*D_m/(pi*d_w^3)"});
 }
 
+TEST_CASE("a gas velocity in cfh and inches: 3600 is an hour, not 36 × 100") {
+    // V = Q/A: 1 ft³/h over 1 in² is 144/3600 = 1/25 ft/s (NIST SP 811 (2008), App. B: ft =
+    // 12 in, h = 3600 s). The /12 of the bore dropped leaves the result 144 times too small.
+    const std::string gas = "Q_a : ft^3/h\nD : in\nV_g : ft/s\n";
+    const auto dropped = run(gas, "V_g = Q_a/(3600*pi/4*D^2)");
+    REQUIRE(count_of(dropped, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(dropped, plumb::rules::unit_scale), "by 144"));
+    CHECK(count_of(dropped, plumb::rules::trade_constant) == 0);
+    // The circle's 4 is no part of the conversion the advice names: 25, not 100.
+    const auto bare = run(gas, "V_g = Q_a/(pi/4*D^2)");
+    REQUIRE(count_of(bare, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(bare, plumb::rules::unit_scale), "by 25 "));
+    passes(gas, {"V_g = Q_a*144/(3600*pi/4*D^2)", "V_g = Q_a/(25*pi/4*D^2)",
+                 "V_g = Q_a/(3600*pi/4*(D/12)^2)"});
+}
+
 // The humidity ratio W = 0.622·p_w/(p − p_w) in kg/kg (ASHRAE Fundamentals, ch. 1, from
 // memory: 0.622 = 18.015/28.965) is written 622·p_w/(p − p_w) in g/kg, the 1000 folded in.
 TEST_CASE("the humidity ratio's 622 in g/kg") {

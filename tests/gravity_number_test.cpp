@@ -101,8 +101,7 @@ TEST_CASE("gravity as a number: a head from a gauge reading with g left out says
     CHECK(run(pump + "H = p_g*1000/(ρ_w*g)\n").diagnostics.empty());
     // The same quotient as a specific energy, where no head is asked for, stays the gauge's
     // finding.
-    const auto energy =
-        run("e : J/kg\np_g : kPag\nρ_w : kg/m^3\ne = p_g*1000/ρ_w\n");
+    const auto energy = run("e : J/kg\np_g : kPag\nρ_w : kg/m^3\ne = p_g*1000/ρ_w\n");
     CHECK(count_of(energy, plumb::rules::offset_scale) == 1);
 }
 
@@ -279,9 +278,8 @@ TEST_CASE("gauge pressures: heads, forces and columns pass; gas laws, work and r
         CAPTURE(formula);
         CHECK(problems_in(run(gauge + formula + "\n")) == 0);
     }
-    for (const char* formula :
-         {"p_g = ρ*R_a*T/1000", "p_2 = p_g*V_1/V_2", "h = p_g/(ρ*{g_n})*V_1",
-          "W = p_g*1000*V_1", "ρ = p_g*1000/(R_a*T)"}) {
+    for (const char* formula : {"p_g = ρ*R_a*T/1000", "p_2 = p_g*V_1/V_2", "h = p_g/(ρ*{g_n})*V_1",
+                                "W = p_g*1000*V_1", "ρ = p_g*1000/(R_a*T)"}) {
         CAPTURE(formula);
         CHECK(count_of(run(gauge + formula + "\n"), plumb::rules::offset_scale) == 1);
     }

@@ -148,8 +148,8 @@ TEST_CASE("gauge and absolute marks after a space: kPa g, bar a, kPa abs (common
     INFO(listing(described));
     CHECK(described.diagnostics.empty());
     // A gas law on gauge readings declared so is the offset-scale error it is with psig.
-    const auto gas_law = plumb::check_text(
-        "u.plumb", "p_1, p_2 : bar g\nV_1, V_2 : m^3\np_1*V_1 = p_2*V_2\n");
+    const auto gas_law =
+        plumb::check_text("u.plumb", "p_1, p_2 : bar g\nV_1, V_2 : m^3\np_1*V_1 = p_2*V_2\n");
     const auto gas_law_psig =
         plumb::check_text("u.plumb", "p_1, p_2 : psig\nV_1, V_2 : m^3\np_1*V_1 = p_2*V_2\n");
     CHECK(findings(gas_law, plumb::rules::offset_scale).size() == 2); // one on each side
@@ -177,9 +177,9 @@ TEST_CASE("deg C and deg F are the temperature scales; C for a temperature is re
     const auto as_charge = plumb::check_text(
         "u.plumb", "T_s : C \"supply temperature\"\nc : J/(kg*C) \"specific heat\"\n");
     CHECK(findings(as_charge, plumb::rules::unknown_unit).size() == 2);
-    const auto charge = plumb::check_text(
-        "u.plumb", "q : C \"charge through the cell\"\nC_b : F \"capacitance\"\n"
-                   "I : A\nt : s\nq = I*t\nV : V\nq = C_b*V\n");
+    const auto charge =
+        plumb::check_text("u.plumb", "q : C \"charge through the cell\"\nC_b : F \"capacitance\"\n"
+                                     "I : A\nt : s\nq = I*t\nV : V\nq = C_b*V\n");
     INFO(listing(charge));
     CHECK(charge.diagnostics.empty());
 }

@@ -193,9 +193,8 @@ struct gauge_mark : seq<one<'('>, one<'g', 'a'>, one<')'>> {};
 // and last in the unit. Read as a product, "kPa g" would be kilopascal times gram, and a gas law
 // on gauge readings declared so would pass unseen.
 struct spaced_reading_mark_end : sor<eolf, one<'"', '=', '#', '}', ',', ')'>> {};
-struct spaced_reading_mark
-    : seq<plus<blank>, sor<TAO_PEGTL_STRING("abs"), one<'g', 'a'>>, not_at<name_char>,
-          at<star<blank>, spaced_reading_mark_end>> {};
+struct spaced_reading_mark : seq<plus<blank>, sor<TAO_PEGTL_STRING("abs"), one<'g', 'a'>>,
+                                 not_at<name_char>, at<star<blank>, spaced_reading_mark_end>> {};
 // "°" alone is the angle degree; "°C", "°F" are symbols that start with it. "° C" with a
 // space would read as degree times coulomb, so it is refused with a message.
 struct no_spaced_degree_scale : not_at<plus<space>, one<'C', 'F'>, not_at<name_char>> {};
@@ -203,10 +202,10 @@ struct no_spaced_degree_scale : not_at<plus<space>, one<'C', 'F'>, not_at<name_c
 // a product they would be an angle times a coulomb or a farad).
 struct spaced_degree_scale
     : seq<TAO_PEGTL_STRING("deg"), plus<blank>, one<'C', 'F'>, not_at<name_char>> {};
-struct unit_symbol
-    : sor<spaced_degree_scale, seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>,
-              opt<sor<gauge_mark, spaced_reading_mark>>>,
-          seq<utf8::one<0xB0>, must<no_spaced_degree_scale>>> {};
+struct unit_symbol : sor<spaced_degree_scale,
+                         seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>,
+                             opt<sor<gauge_mark, spaced_reading_mark>>>,
+                         seq<utf8::one<0xB0>, must<no_spaced_degree_scale>>> {};
 // "Nm³", "Sm³": the gas trades' normal and standard cubic metres as sheets print them, one
 // symbol (not "Nm" cubed, which would read as newton metres).
 struct gas_volume_symbol : seq<one<'N', 'S'>, one<'m'>, utf8::one<0xB3>, not_at<name_char>> {};

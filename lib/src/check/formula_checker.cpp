@@ -3816,7 +3816,8 @@ class checker {
         // itself but part of one, and the units are off by 1000, not 12000. Where taking some
         // of the other numbers in makes the ratio a clean power of ten, that is the ratio as
         // written, so that following the message fixes the formula.
-        const auto clean = ratio_with_numbers(parts[r.reference], parts[r.odd], ratio);
+        const auto clean = ratio_with_numbers(parts[r.reference], parts[r.odd], ratio,
+                                              holds_pi(reference.node), holds_pi(op.node));
         if (clean) {
             ratio = *clean;
             exact_ratio.reset();
@@ -3948,7 +3949,8 @@ class checker {
     }
 
     std::optional<double> ratio_with_numbers(const scaled_operand& reference,
-                                             const scaled_operand& odd, double ratio) const {
+                                             const scaled_operand& odd, double ratio,
+                                             bool reference_holds_pi, bool odd_holds_pi) const {
         if (near_power_of_ten(ratio, 0.0) || !(ratio > 0) || !std::isfinite(ratio))
             return std::nullopt;
         struct candidate {
@@ -3960,6 +3962,10 @@ class checker {
         for (const auto* part : {&odd, &reference})
             for (const auto& l : part->literals) {
                 if (count == numbers.size() || looks_like_conversion(l, true) || !(l.value > 0))
+                    continue;
+                // The 4 of π/4·D² and the 2 of 2π are the circle's, never part of a conversion.
+                if ((l.value == 4.0 || l.value == 2.0) &&
+                    (part == &odd ? odd_holds_pi : reference_holds_pi))
                     continue;
                 const double e = part == &odd ? l.exponent : -l.exponent;
                 numbers[count++] = {std::pow(l.value, e), l.tolerance * std::abs(e)};
@@ -4381,6 +4387,10 @@ class checker {
     std::optional<double> folded_power_of_ten(std::span<const operand> ops,
                                               std::span<const std::size_t> index, std::size_t i,
                                               const scale_literal& l, bool second) const {
+        // 3600 is the seconds of an hour, no 36 × 100: a number that is a conversion itself
+        // is read as one, and where the units need another, that is the finding.
+        if (l.value >= 10.0 && common_conversion(l.value, 0.0))
+            return std::nullopt;
         const std::string_view written = text(file_.nodes[l.node].range);
         const std::size_t e = written.find_first_of("eE");
         const double top = std::floor(std::log10(l.value) + 1e-12);
@@ -6089,10 +6099,10 @@ class checker {
             // H = p_g*1000/ρ_w: a gauge pressure over a density set equal to a head lacks g,
             // and p_g/(ρ*g) would be a head a gauge may give. The sides' mismatch says so,
             // which is the slip; its zero is no fault of it.
-            const bool head_without_g =
-                index == side_hint_node_ && side_hint_ != nullptr && side_hint_->known &&
-                side_hint_->dim == length_dimension() && result.known &&
-                result.dim == velocity_squared_dimension();
+            const bool head_without_g = index == side_hint_node_ && side_hint_ != nullptr &&
+                                        side_hint_->known &&
+                                        side_hint_->dim == length_dimension() && result.known &&
+                                        result.dim == velocity_squared_dimension();
             if (result.known &&
                 (result.dim == length_dimension() || result.dim == force_dimension() ||
                  wall_stress || ring_tension || jet || bearing_area || head_without_g)) {
