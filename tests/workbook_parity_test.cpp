@@ -235,6 +235,32 @@ TEST_CASE("workbook parity: unit text may use the units a sidecar defines with m
     CHECK_FALSE(says(*input, "write its unit in the cell to its right"));
 }
 
+TEST_CASE("workbook parity: a unit in a column's heading that does not read is said") {
+    // Illuminance in foot-candles from lux: 1 fc = 1 lm/ft² = 10.764 lx (NIST SP 811 (2008),
+    // App. B). A heading 'Target [fc]' plumb cannot read left the column's results unchecked,
+    // and a slip in them passed without a word.
+    const auto text = [](const std::string& at, const std::string& t) {
+        return "<c r=\"" + at + "\" t=\"inlineStr\"><is><t>" + t + "</t></is></c>";
+    };
+    const std::string sheet = "<worksheet><sheetData><row r=\"1\">" + text("A1", "Target [lx]") +
+                              text("B1", "Target [fc]") + text("C1", "Note (see A)") +
+                              "</row><row r=\"2\"><c r=\"A2\"><v>300</v></c>"
+                              "<c r=\"B2\"><f>A2*10.764</f><v>0</v></c>"
+                              "<c r=\"C2\"><f>A2/2</f><v>0</v></c></row></sheetData></worksheet>";
+    const check_report r = check_one_sheet("Rooms", sheet);
+    const diagnostic* unread = finding(r, "Rooms!B2", rules::no_unit);
+    REQUIRE(unread != nullptr);
+    CHECK(says(*unread, "does not read as a unit"));
+    CHECK(says(*unread, "the unit in its column's heading in B1, 'fc'"));
+    // Words in parentheses that are no unit are left alone.
+    CHECK(finding(r, "Rooms!C2", rules::no_unit) == nullptr);
+    // With fc defined in the sidecar, the slip (10.764 the wrong way round) is the finding.
+    const check_report defined =
+        check_one_sheet("Rooms", sheet, "measure fc = 10.7639 lx \"foot-candle\"\n");
+    CHECK(finding(defined, "Rooms!B2", rules::no_unit) == nullptr);
+    CHECK(error_at(defined, "Rooms!B2"));
+}
+
 TEST_CASE("workbook parity: a measure defined from another is read in unit text too") {
     // 1 lbmole = 453.59237 mol (NIST SP 811 (2008), B.8); a thousand of them a day, beside
     // others the sheet does not use, so only the lines a text names are read with it.

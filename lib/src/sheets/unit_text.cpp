@@ -395,7 +395,8 @@ std::optional<written_unit> heading_unit(std::string_view label, std::string_vie
 
 } // namespace
 
-std::optional<written_unit> read_heading_unit(std::string_view text, std::string_view measures) {
+// The heading's label and the text in its last brackets or parentheses.
+static std::optional<std::pair<std::string, std::string>> heading_parts(std::string_view text) {
     const std::string t = trim(text);
     if (t.size() < 3)
         return std::nullopt;
@@ -409,10 +410,23 @@ std::optional<written_unit> read_heading_unit(std::string_view text, std::string
         if (t[i] == close)
             ++depth;
         else if (t[i] == open && --depth == 0)
-            return heading_unit(std::string_view(t).substr(0, i),
-                                std::string_view(t).substr(i + 1, t.size() - i - 2), measures);
+            return std::pair{t.substr(0, i), t.substr(i + 1, t.size() - i - 2)};
     }
     return std::nullopt;
+}
+
+std::optional<written_unit> read_heading_unit(std::string_view text, std::string_view measures) {
+    const auto parts = heading_parts(text);
+    if (!parts)
+        return std::nullopt;
+    return heading_unit(parts->first, parts->second, measures);
+}
+
+std::optional<std::string> heading_unit_text(std::string_view text) {
+    const auto parts = heading_parts(text);
+    if (!parts || trim(parts->second).empty())
+        return std::nullopt;
+    return trim(parts->second);
 }
 
 std::string unit_text_problem(std::string_view text, std::string_view all_measures) {

@@ -28,6 +28,10 @@ std::optional<written_unit> read_unit_text(std::string_view text, std::string_vi
 std::optional<written_unit> read_heading_unit(std::string_view text,
                                               std::string_view measures = {});
 
+// The text in a column heading's last brackets or parentheses, whether or not it reads as a
+// unit ("fc" in "Target [fc]"); empty where there are none.
+std::optional<std::string> heading_unit_text(std::string_view text);
+
 // Why a text does not read as a unit, in the words the notation uses for a declaration's
 // unit ("unknown unit 'lbmol'; did you mean 'mol' or 'lbm'?"); empty where it gives none.
 std::string unit_text_problem(std::string_view text, std::string_view measures = {});

@@ -149,8 +149,14 @@ class workbook_checker {
     std::vector<std::unordered_map<std::uint32_t, std::vector<std::uint32_t>>> text_rows_;
     // Inputs without units: the formula cells that use each, in order.
     std::map<std::uint64_t, std::vector<std::uint32_t>> unitless_;
-    // Cells whose unit text beside them does not read as a unit: that text, by cell.
-    std::unordered_map<std::uint64_t, const cell*> unread_;
+    // Cells whose unit text beside them or in their column's heading does not read as a unit:
+    // that text and where it is written, by cell.
+    struct unread_unit {
+        const cell* written_in;
+        std::string text;
+        bool heading;
+    };
+    std::unordered_map<std::uint64_t, unread_unit> unread_;
     struct range_result {
         cell_value value;
     };
@@ -390,7 +396,7 @@ class workbook_checker {
                 if (auto u = read_unit_text(right->text, units_.measures))
                     return cell_unit{*u, fmt::format("beside it in {}",
                                                      a1_name(cell_address{a.row, a.column + 1}))};
-                unread_.emplace(book_key(s, a), right);
+                unread_.emplace(book_key(s, a), unread_unit{right, right->text, false});
             }
         // 4. The column's heading: the nearest text cell above.
         const auto column = text_rows_[s].find(a.column);
@@ -399,8 +405,13 @@ class workbook_checker {
             const auto it = std::lower_bound(rows.begin(), rows.end(), a.row);
             if (it != rows.begin()) {
                 const cell_address heading{*(it - 1), a.column};
-                if (auto u = read_heading_unit(sh.find(heading)->text, units_.measures))
+                const cell* above = sh.find(heading);
+                if (auto u = read_heading_unit(above->text, units_.measures))
                     return cell_unit{*u, fmt::format("from the heading in {}", a1_name(heading))};
+                // "Target [fc]": a unit written in the heading that plumb cannot read leaves the
+                // column unchecked, which must be said as for the text beside a cell.
+                if (auto written = heading_unit_text(above->text))
+                    unread_.emplace(book_key(s, a), unread_unit{above, std::move(*written), true});
             }
         }
         return std::nullopt;
@@ -1099,10 +1110,12 @@ class workbook_checker {
 
     // "the text beside it in D14, 'lb/lbmol', does not read as a unit: unknown unit 'lbmol'":
     // the engineer wrote a unit; say which word of it plumb does not know, and how to define it.
-    std::string why_not_a_unit(const cell& text) const {
-        const std::string problem = unit_text_problem(text.text, units_.measures);
-        std::string said = fmt::format("the text beside it in {}, '{}', does not read as a unit",
-                                       a1_name(text.at), text.text);
+    std::string why_not_a_unit(const unread_unit& unread) const {
+        const std::string problem = unit_text_problem(unread.text, units_.measures);
+        std::string said =
+            fmt::format("the {} in {}, '{}', does not read as a unit",
+                        unread.heading ? "unit in its column's heading" : "text beside it",
+                        a1_name(unread.written_in->at), unread.text);
         if (problem.empty())
             return said + "; write its unit there (as in m3/s, kPa, -), in the column's heading "
                           "(as in 'Flow [m3/s]'), or in the workbook's sidecar";
@@ -1168,7 +1181,7 @@ class workbook_checker {
         const auto text = unread_.find(book_key(f.sheet, f.source->at));
         if (text == unread_.end())
             return;
-        const std::string_view t = text->second->text;
+        const std::string_view t = text->second.text;
         // "kip-ft", "kW(e)": a hyphen or a bracket joins a unit's parts as often as '*'.
         const bool unit_like =
             t.size() <= 40 && t.find(' ') == std::string_view::npos &&
@@ -1182,10 +1195,11 @@ class workbook_checker {
             (problem.rfind("unknown unit", 0) != 0 && t.find('-') == std::string_view::npos))
             return;
         diagnostic& d = report(severity::warning, rules::no_unit,
-                               "the unit written beside this cell does not read as a unit, so "
-                               "its result is not compared with one",
+                               fmt::format("the unit written {} this cell does not read as "
+                                           "a unit, so its result is not compared with one",
+                                           text->second.heading ? "over" : "beside"),
                                f.text);
-        d.notes.push_back({why_not_a_unit(*text->second), {}});
+        d.notes.push_back({why_not_a_unit(text->second), {}});
     }
 
     void report_unitless_inputs() {
@@ -1223,7 +1237,7 @@ class workbook_checker {
                 d.where = {values, where};
                 say_what_uses_require(d, key, users);
                 if (const auto text = unread_.find(key); text != unread_.end())
-                    d.notes.push_back({why_not_a_unit(*text->second), {}});
+                    d.notes.push_back({why_not_a_unit(text->second), {}});
                 else
                     d.notes.push_back({"write its unit in the cell to its right (as in m3/s, "
                                        "kPa, -), in the column's heading (as in 'Flow [m3/s]'), "
