@@ -388,6 +388,32 @@ TEST_CASE("calcium carbonate's equivalent weight as a number") {
 // CODATA 2018): 24.465 L/mol at 25 °C and 101.325 kPa, which the air trade prints as 24.45;
 // 385.3 scf/lbmol at 68 °F (ft³ = 0.028316846592 m³, lb = 0.45359237 kg: NIST SP 811 (2008)
 // App. B). The numbers are worked out here, then read in formulas.
+TEST_CASE("molar volume as a number: it follows the gas volumes' reference state") {
+    // V_m = R·T/p at 101.325 kPa (CODATA 2018): 22.414 L/mol at 0 °C, the normal cubic metre's
+    // (DIN 1343), 23.645 at 15 °C, the standard cubic metre's (ISO 13443), 24.465 at 25 °C.
+    CHECK(8.314462618 * 273.15 / 101325.0 * 1000.0 == doctest::Approx(22.414).epsilon(1e-4));
+    CHECK(8.314462618 * 288.15 / 101325.0 * 1000.0 == doctest::Approx(23.645).epsilon(1e-4));
+    const std::string stack = "C : ppm\nM : g/mol\nc_n : mg/Nm3\nc_s : mg/Sm3\nE : lb/h\n"
+                              "Q_s : scf/min\n";
+    passes_with_one_note(stack,
+                         {"c_n = C*M/22.41", "c_n = C*M/22.4", "c_s = C*M/23.64", "C = c_n*22.4/M",
+                          "E = C*M*Q_s*60/379.5e6",
+                          // 385.3 scf/lbmol at 68 °F, the US air trade's, beside a
+                          // 60 °F standard cubic foot: within 2 %, its convention.
+                          "E = C*M*Q_s*60/385.3e6"},
+                         plumb::rules::trade_constant);
+    // 24.45 (25 °C) into mg/Nm³ (0 °C): 9 % low; and the other way, 9 % high.
+    const auto low = run(stack + "c_n = C*M/24.45\n");
+    REQUIRE(count_of(low, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(low, plumb::rules::unit_scale),
+                            "9.1 % too small"));
+    CHECK(plumb::test::says(plumb::test::first_under(low, plumb::rules::unit_scale), "22.41"));
+    const auto high = run(stack + "C = c_n*24.45/M\n");
+    CHECK(plumb::test::says(plumb::test::first_under(high, plumb::rules::unit_scale),
+                            "9.1 % too large"));
+    CHECK(count_of(run(stack + "c_s = C*M/24.45\n"), plumb::rules::unit_scale) == 1);
+}
+
 TEST_CASE("molar volume as a number: ppm conversions") {
     const double at_25_c = 8.314462618 * 298.15 / 101325.0 * 1000.0; // L/mol
     CHECK(at_25_c == doctest::Approx(24.465).epsilon(1e-4));

@@ -220,6 +220,10 @@ std::string_view advice_in_cell_for(std::string_view advice_in_notation) {
     return {};
 }
 
+bool is_molar_volume(const carried_quantity& q) {
+    return &q == &quantities()[6];
+}
+
 bool lacks_gravity_number(const dimension& lacking, double exponent) {
     for (const carried_quantity& q : quantities())
         if (is_power_of(lacking, q.dim, exponent) || is_power_of(lacking, q.dim, -exponent))

@@ -58,6 +58,10 @@ bool lacks_gravity_number(const dimension& lacking, double exponent);
 // density and g in cells that hold their units" for "write ρ_w*{g_n}"); empty for other text.
 std::string_view advice_in_cell_for(std::string_view advice_in_notation);
 
+// Whether the quantity read is an ideal gas's molar volume (24.45, 22.4, 379.5), whose
+// temperature a gas volume at reference conditions beside it must share.
+bool is_molar_volume(const carried_quantity& q);
+
 // The number among `literals` that carries g_n or γ_w, or its reciprocal, in the term's own
 // units, where the term lacks exactly that quantity to the number's power. `texts` are the
 // numbers as written: a number must round a value of the quantity in those units to its last

@@ -902,12 +902,13 @@ void refuse_charge_for_temperature(parse_state& s) {
                             (i + 1 == spec.size() || !is_name_byte(spec[i + 1]));
     if (!lone_scale_letter || !describes_a_temperature(s.text(s.pending_description)))
         return;
-    s.report(rules::unknown_unit,
-             fmt::format("'{}' reads C as the coulomb and F as the farad, but the description "
-                         "says a temperature: write °C or °F (or degC, degF) for the scales, "
-                         "K or Δ°C for a difference",
-                         spec),
-             s.pending_spec);
+    s.report(
+        rules::unknown_unit,
+        fmt::format("'{}' reads C as the coulomb and F as the farad, but the description "
+                    "says a temperature: write \u00B0C or \u00B0F (or degC, degF) for the scales, "
+                    "K or \u0394\u00B0C for a difference",
+                    spec),
+        s.pending_spec);
 }
 
 template <> struct action<nt::declaration> {
