@@ -303,7 +303,12 @@ TEST_CASE("the atmosphere advised in the unit a converted gauge reading is in") 
 TEST_CASE("a gauge reading plus the local atmosphere typed as a number") {
     const std::string decl = "p_max : kPag\np_abs : kPa\np_bg : barg\np_ba : bar\n";
     passes(decl, {"p_abs = p_max + 92.1", "p_ba = p_bg + 1"}, 1);
-    fails_with(decl, {"p_abs = p_max + 20", "p_abs = p_max", "p_abs = p_max + 60"},
+    // 62.9 kPa, a heap leach pad at 3850 m (the standard atmosphere, from memory): the highest
+    // sites plants stand on, to about 5200 m (52.7 kPa), are read too.
+    passes(decl, {"p_abs = p_max + 62.9"}, 1);
+    const auto high = run(decl, "p_abs = p_max + 62.9");
+    CHECK(plumb::test::says(first_under(high, plumb::rules::trade_constant), "about 3840 m"));
+    fails_with(decl, {"p_abs = p_max + 20", "p_abs = p_max", "p_abs = p_max + 45"},
                plumb::rules::offset_scale);
 }
 
@@ -322,6 +327,17 @@ TEST_CASE("the sea-level atmosphere where the file declares the site's barometer
                             "declares the site's barometer 'p_b' (96.2 kPa"));
     passes(site, {"p_abs = p_g + p_b"});
     passes(site, {"p_abs = p_g + 96.2"}, 1);
+    // A site at 3850 m (62.9 kPa, the standard atmosphere, from memory) is held to its
+    // barometer too: the sea level's there is 38 kPa high.
+    const std::string andes = "p_b : kPa = 62.9 \"site barometer\"\np_g : kPag\np_abs : kPa\n";
+    fails_with(andes, {"p_abs = p_g + 101.325"}, plumb::rules::offset_scale);
+    passes(andes, {"p_abs = p_g + p_b"});
+    // A pressure "below atmosphere" is no barometer, and a declared sea-level atmosphere means
+    // the file's sums with 101.325 are right.
+    passes("p_atm : kPa \"atmospheric pressure, 101.3 kPa\"\n"
+           "p_vac : kPa \"suction vacuum gauge, 62 kPa below atmosphere\"\n"
+           "p_g : kPag\np_abs : kPa\n",
+           {"p_abs = p_g + 101.325"});
     // Declared by its value after `=`, in psia: 13.2 psia is 91.0 kPa.
     fails_with("p_atm : psia = 13.2\np_gpsi : psig\np_apsi : psia\n", {"p_apsi = p_gpsi + 14.7"},
                plumb::rules::offset_scale);

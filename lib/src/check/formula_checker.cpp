@@ -152,6 +152,10 @@ constexpr double standard_atmosphere = 101325.0;
 // How far two reference temperatures may differ and still count as one: 15 °C against 60 °F,
 // and the gas trade's 14.73 psia beside 14.696, are 0.2 % apart (from memory).
 constexpr double reference_temperature_slack = 0.003;
+// The atmosphere at the highest sites plants are built on, about 5200 m (mines in the Andes,
+// observatories), as a share of the standard atmosphere: h = 44330.8·(1 - 0.52^0.190263) m in
+// the standard atmosphere's barometric formula (from memory).
+constexpr double highest_site_atmosphere = 0.52;
 // How an actual gas volume becomes one at reference conditions (ideal gas, common practice).
 constexpr std::string_view state_correction_advice =
     "an actual volume becomes a normal one times (p/p_n)*(T_n/T), with absolute pressures and "
@@ -3295,13 +3299,20 @@ class checker {
             const auto says = [&](std::string_view word) {
                 return description.find(word) != std::string_view::npos;
             };
-            if (!names_the_atmosphere(name, description) || says("standard"))
+            // "suction vacuum gauge, 62 kPa below atmosphere" names the atmosphere but is none.
+            if (!names_the_atmosphere(name, description) || says("standard") || says("vacuum") ||
+                says("below") || says("gauge"))
                 continue;
             const double written = declared_number(decl);
             const double pascals = written * decl.kind.si_factor;
-            // A site below sea level by more than the Dead Sea is no site; above 3000 m the air
-            // is thinner than any plant is built in (ISA, from memory: 70 kPa there).
-            if (!(pascals >= 0.69 * standard_atmosphere && pascals <= 0.99 * standard_atmosphere))
+            // The file's atmosphere is the sea level's: no site barometer to hold sums to.
+            if (pascals > 0.99 * standard_atmosphere && pascals <= 1.005 * standard_atmosphere)
+                return nullptr;
+            // A site below sea level by more than the Dead Sea is no site; above 5200 m the air
+            // is thinner than any plant is built in (the highest mines and observatories; the
+            // standard atmosphere, from memory, has 52.7 kPa there).
+            if (!(pascals >= highest_site_atmosphere * standard_atmosphere &&
+                  pascals <= 0.99 * standard_atmosphere))
                 continue;
             site_barometer_ = {name, pascals};
             return &site_barometer_;
@@ -4866,9 +4877,9 @@ class checker {
     }
 
     // "p_abs = p_max + 92.1" in kPa, "p_a = p_g + 1" in bar: a number added to a gauge reading
-    // that falls short of the standard atmosphere by no more than the air above 3000 m does
-    // (ISA, from memory: 70 kPa there) is the site's barometer, or a rounded one; a note says
-    // which height it stands for.
+    // that falls short of the standard atmosphere by no more than the air above the highest
+    // sites does (5200 m, see declared_site_barometer) is the site's barometer, or a rounded
+    // one; a note says which height it stands for.
     bool read_local_atmosphere(const operand& sum) {
         std::uint32_t k = sum.node;
         k = syntax::inside_brackets(file_, k);
@@ -4885,7 +4896,8 @@ class checker {
         if (number == syntax::no_index || file_.nodes[reading].kind != expr_kind::symbol)
             return false;
         const double pressure = written_number(file_.nodes[number].range) * sum.type.scale;
-        if (!(pressure >= 0.69 * standard_atmosphere && pressure <= 1.005 * standard_atmosphere))
+        if (!(pressure >= highest_site_atmosphere * standard_atmosphere &&
+              pressure <= 1.005 * standard_atmosphere))
             return false;
         // The barometric formula of the standard atmosphere, h = 44330.8·(1 - (p/p0)^0.190263) m.
         const double height = 44330.8 * (1.0 - std::pow(pressure / standard_atmosphere, 0.190263));
