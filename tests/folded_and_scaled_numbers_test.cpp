@@ -154,6 +154,20 @@ TEST_CASE("a bare number beside terms in % or degrees is in their unit") {
                plumb::rules::unit_scale);
 }
 
+TEST_CASE("an emission corrected to a reference oxygen: the 21 above is in % too") {
+    // E_ref = E·(21 - O_ref)/(21 - O_meas) (Directive 2010/75/EU, Annex VI, from memory), the
+    // air-free form E·21/(21 - O2), US EPA Method 19's E = C·F·20.9/(20.9 - %O2) (from
+    // memory), and CO2 = CO2_max·(1 - O2/21) (common practice); 20.95 % O2 in dry air.
+    const std::string stack = "C, C_ref : mg/Nm3\nO2 : %\nF : 1\nCO2, CO2_max : %\n";
+    passes(stack, {"C_ref = C*(21 - 3)/(21 - O2)", "C_ref = C*(20.9 - 3)/(20.9 - O2)",
+                   "C_ref = C*21/(21 - O2)", "C_ref = C*F*20.9/(20.9 - O2)",
+                   "C_ref = C*(21/(21 - O2))", "CO2 = CO2_max*(1 - O2/21)"});
+    // A number that is not the one leading the sum below stays a coefficient.
+    fails_with(stack,
+               {"C_ref = C*20/(21 - O2)", "C_ref = C*0.21/(21 - O2)", "CO2 = CO2_max*(1 - O2/20)"},
+               plumb::rules::unit_scale);
+}
+
 TEST_CASE("a gauge pressure under a square root drives a discharge to the atmosphere") {
     // Q = K·√p with p the gauge pressure at the sprinkler (NFPA 13, from memory); a jet's
     // velocity √(2·p_g/ρ) (Bernoulli, common practice).

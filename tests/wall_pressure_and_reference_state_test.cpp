@@ -101,6 +101,10 @@ TEST_CASE("a number in ratio with an absolute reading is read as a standard refe
             "@standard-fahrenheit q_s = q_a*(p_f/14.73)*(520/(t_f + 459.67))",
             "@normal-celsius V_n = V*(p/101.325)*(273.15/(t_c + 273.15))"},
            2);
+    // Q = Q_n·(T/T_n)·(p_n/p) (DIN 1343's normal state, from memory) with the normal
+    // temperature declared and the pressure's typed: three readings in one product.
+    passes(gas + "T_n : K = 273.15 \"normal temperature\"\n",
+           {"@actual V = V_n*T/T_n*101.325/p", "@actual-grouped V = V_n*(T/T_n)*(101.325/p)"}, 1);
     const auto r = run(gas, "@normal V_n = V*273.15/T");
     REQUIRE(count_of(r, plumb::rules::trade_constant) == 1);
     const plumb::diagnostic& note = first_under(r, plumb::rules::trade_constant);

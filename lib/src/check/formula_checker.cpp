@@ -239,7 +239,8 @@ struct reference_state_pairs {
     };
     // Left unset: the counts say how many are filled, and this is made for every product.
     std::array<number, 4> numbers;
-    std::array<reading, 2> readings;
+    // Four: Q_n*T/T_n*101.325/p holds three readings, the last the one 101.325 pairs with.
+    std::array<reading, 4> readings;
     std::size_t number_count = 0;
     std::size_t reading_count = 0;
 
@@ -5521,6 +5522,48 @@ class checker {
 
     // "21/(21 - O2)" with O2 in %, the excess-air ratio from the flue gas's oxygen (common
     // practice): the number over the sum that reads it in the sum's unit is in that unit too.
+    // 20.9 % or 21 % (20.95 % by volume, the US Standard Atmosphere's dry air, from memory).
+    [[gnu::noinline]] bool oxygen_share_of_air(std::uint32_t k) const {
+        k = syntax::inside_brackets(file_, k);
+        if (file_.nodes[k].kind != expr_kind::number)
+            return false;
+        const std::string_view written = text(file_.nodes[k].range);
+        return written == "21" || written == "20.9" || written == "20.95" || written == "20.946";
+    }
+
+    // "C*21/(21 - O2)", "C*(21 - 3)/(21 - O2)", "C*F*20.9/(20.9 - O2)" with O2 in %: the
+    // correction to a reference oxygen (Directive 2010/75/EU, Annex VI; US EPA Method 19, from
+    // memory) writes above the number that leads the % sum below, alone or less the reference
+    // O2, and there it is in % too.
+    [[gnu::noinline]] bool carries_number_of_sum(std::uint32_t numerator,
+                                                 std::uint32_t denominator) const {
+        // The number a sum starts with; with `numbers_only`, only where all its terms are.
+        const auto leading_number = [&](std::uint32_t k, bool numbers_only) {
+            k = syntax::inside_brackets(file_, k);
+            if (file_.nodes[k].kind != expr_kind::add && file_.nodes[k].kind != expr_kind::subtract)
+                return syntax::no_index;
+            while (file_.nodes[k].kind == expr_kind::add ||
+                   file_.nodes[k].kind == expr_kind::subtract) {
+                if (numbers_only && file_.nodes[file_.nodes[k].rhs].kind != expr_kind::number)
+                    return syntax::no_index;
+                k = file_.nodes[k].lhs;
+            }
+            return file_.nodes[k].kind == expr_kind::number ? k : syntax::no_index;
+        };
+        const std::uint32_t below = leading_number(denominator, false);
+        if (below == syntax::no_index)
+            return false;
+        const std::string_view written = text(file_.nodes[below].range);
+        return for_each_factor(numerator, [&](std::uint32_t at, int sign) {
+            if (sign < 0)
+                return false;
+            if (file_.nodes[at].kind == expr_kind::number)
+                return text(file_.nodes[at].range) == written;
+            const std::uint32_t above = leading_number(at, true);
+            return above != syntax::no_index && text(file_.nodes[above].range) == written;
+        });
+    }
+
     [[gnu::noinline]] bool same_number_over_its_sum(std::uint32_t numerator,
                                                     std::uint32_t denominator) const {
         numerator = syntax::inside_brackets(file_, numerator);
@@ -5956,11 +5999,24 @@ class checker {
                     made->offset = nullptr;
                 factor = made;
             }
-            if (divided && result.numeric && factor->scale != 1.0 && !factor->numeric &&
-                factor->known && factor->dim.is_dimensionless() &&
-                same_number_over_its_sum(op.lhs, op.rhs)) {
-                result.scale = factor->scale;
-                result.exact_scale = factor->exact_scale;
+            // "1 - O2/21" with O2 in % (CO2 = CO2_max·(1 - O2/21), common practice): 21 is
+            // oxygen's share of dry air in %, so the quotient is a ratio of two percentages.
+            if (divided && factor->numeric && result.known && !result.numeric &&
+                result.scale == 0.01 && result.dim.is_dimensionless() &&
+                oxygen_share_of_air(op.rhs)) [[unlikely]] {
+                result.scale = 1.0;
+                result.exact_scale = rational(1);
+            }
+            if (divided && factor->scale != 1.0 && !factor->numeric && factor->known &&
+                factor->dim.is_dimensionless()) [[unlikely]] {
+                if (result.numeric && same_number_over_its_sum(op.lhs, op.rhs)) {
+                    result.scale = factor->scale;
+                    result.exact_scale = factor->exact_scale;
+                } else if (carries_number_of_sum(op.lhs, op.rhs)) {
+                    result.scale *= factor->scale;
+                    result.exact_scale =
+                        exact_product(result.exact_scale, factor->exact_scale, false);
+                }
             }
             // (R_2 - R_1)/R_1*(235 + θ_1): a winding's temperature from its inferred zero of
             // resistance, times a ratio, is a rise; and so is each bracket of the correction
