@@ -210,13 +210,19 @@ TEST_CASE("factors are printed from their exact values") {
         CHECK(text.find('e') == std::string::npos);
 }
 
-TEST_CASE("a literal's interval is exact: half a unit in its last printed digit, at most 1 %") {
-    // 7758 stands for 7757.5 to 7758.5; 0.0631 for 0.06305 to 0.06315; 2 for 1.98 to 2.02 (the
-    // 1 % cap: a 2 is never a 2.2).
+TEST_CASE("a literal's interval is exact: half a unit in its last printed digit (a unit above from "
+          "four digits), at most 1 %") {
+    // 7758 stands for 7757.5 to 7759, a table's four digits cut as often as rounded (5.614
+    // ft³/bbl in US EPA AP-42 for 5.6146); 0.0631 for 0.06305 to 0.06315; 2 for 1.98 to 2.02
+    // (the 1 % cap: a 2 is never a 2.2).
     const auto oil = plumb::read_literal("7758", 7758.0, 0);
     REQUIRE(oil.low);
     CHECK(*oil.low == plumb::rational(15515, 2));
-    CHECK(*oil.high == plumb::rational(15517, 2));
+    CHECK(*oil.high == plumb::rational(7759));
+    const auto barrel = plumb::read_literal("5.614", 5.614, 0);
+    REQUIRE(barrel.low);
+    CHECK(*barrel.low == plumb::rational(11227, 2000));
+    CHECK(*barrel.high == plumb::rational(5615, 1000));
     const auto gpm = plumb::read_literal("0.0631", 0.0631, 0);
     REQUIRE(gpm.low);
     CHECK(*gpm.low == plumb::rational(6305, 100000));

@@ -94,7 +94,9 @@ exact_or_double low_end(const scale_literal& l) {
     return {l.value * (1.0 - l.tolerance), l.low};
 }
 exact_or_double high_end(const scale_literal& l) {
-    return {l.value * (1.0 + l.tolerance), l.high};
+    return {l.high ? std::max(l.high->to_double(), l.value * (1.0 + l.tolerance))
+                   : l.value * (1.0 + l.tolerance),
+            l.high};
 }
 
 bool is_unit_ratio(const scale_literal& l) {
@@ -270,10 +272,14 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
         const auto width = half_unit_narrower
                                ? exact_product(exact_power_of_ten(last_place), rational(2), true)
                                : exact_product(exact, rational(100), true);
+        // Tables and codes print some factors cut rather than rounded (US EPA AP-42's 5.614
+        // ft³/bbl for 5.6146, 2.204 lb/kg for 2.20462): from four digits on, the value may
+        // lie up to a whole unit above the digits, never more below them than half of one.
+        const bool table_printed = has_point ? significant >= 4 : l.value >= 1000;
         if (width) {
             try {
                 l.low = *exact - *width;
-                l.high = *exact + *width;
+                l.high = *exact + (table_printed && half_unit_narrower ? *width + *width : *width);
             } catch (const arithmetic_overflow&) {
                 l.low.reset();
                 l.high.reset();
