@@ -518,9 +518,13 @@ TEST_CASE("advice for a rise set equal to a reading, and for the end of a range"
 TEST_CASE("a °F reading less a °C reading: the advice converts the reading") {
     const std::string decl = "q_w : gal/min\nQ_wB : Btu/h\nt_wo : °F\nT_2 : °C\n";
     const auto found = run(decl, "q_w = Q_wB/(500*(t_wo - T_2))");
-    REQUIRE(count_of(found, plumb::rules::unit_scale) == 1);
-    CHECK(says(first_under(found, plumb::rules::unit_scale), "(1.8*T_2 + 32)"));
-    CHECK_FALSE(says(first_under(found, plumb::rules::unit_scale), "multiply"));
+    // Readings on scales with different zeros subtracted: the offset-scale error, as when
+    // they are set equal.
+    REQUIRE(count_of(found, plumb::rules::offset_scale) == 1);
+    CHECK(count_of(found, plumb::rules::unit_scale) == 0);
+    CHECK(first_under(found, plumb::rules::offset_scale).level == plumb::severity::error);
+    CHECK(says(first_under(found, plumb::rules::offset_scale), "(1.8*T_2 + 32)"));
+    CHECK_FALSE(says(first_under(found, plumb::rules::offset_scale), "multiply"));
 }
 
 // A percentage written out as its number over 100: the allowable drop is 10 % of the supply's

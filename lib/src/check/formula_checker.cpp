@@ -3976,6 +3976,14 @@ class checker {
         if (op.type.offset != nullptr && reference.type.offset != nullptr &&
             op.type.offset != reference.type.offset && op.type.dim == temperature_dimension()) {
             const bool op_celsius = std::abs(op.type.offset->factor - 1.0) < 1e-12;
+            // Readings on scales with different zeros: the offset-scale error it is where
+            // they are set equal, not a warning about the size of their degrees alone.
+            d.rule = std::string(rules::offset_scale);
+            d.level = severity::error;
+            d.message = fmt::format("{} is on the {} scale but {} is on the {} scale: their "
+                                    "degrees differ in size and their zeros lie 32 \u00B0F apart",
+                                    quote(op.node), op.type.offset->symbol, quote(reference.node),
+                                    reference.type.offset->symbol);
             d.notes.push_back(
                 {fmt::format(
                      "convert the reading, not only its degrees: {} on the {} scale is {}",
