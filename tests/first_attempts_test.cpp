@@ -96,10 +96,10 @@ TEST_CASE("an unknown unit's note shows how to define that very unit") {
     REQUIRE(d != nullptr);
     CHECK(any_note(*d, "measure Mgald = <size> <known unit>"));
     // A pressure with a trailing g is offered the gauge form.
-    const auto gauge = plumb::check_text("h.plumb", "p : MPag\n");
+    const auto gauge = plumb::check_text("h.plumb", "p : GPag\n");
     REQUIRE(only(gauge, plumb::rules::unknown_unit) != nullptr);
     CHECK(any_note(*only(gauge, plumb::rules::unknown_unit),
-                   "measure MPag = MPa zero at 101.325 kPa"));
+                   "measure GPag = GPa zero at 101.325 kPa"));
     // The nearest spelling is offered first: "MGD" is a change of case from "mgd" (common
     // practice: million gallons a day), not the millidarcy.
     const auto flow = plumb::check_text("h.plumb", "Q : mgdd\n");

@@ -122,10 +122,25 @@ TEST_CASE("gauge and absolute marks: kPa(g), psi(g), kPa(a) (common practice)") 
         REQUIRE(findings(m, plumb::rules::unknown_unit).size() == 1);
         CHECK(findings(m, plumb::rules::unknown_unit)[0]->message.find(
                   "not an absolute pressure") != std::string::npos);
-        const auto mpa = plumb::check_text("u.plumb", "x : MPa(g)\n");
-        REQUIRE(findings(mpa, plumb::rules::unknown_unit).size() == 1);
-        CHECK(findings(mpa, plumb::rules::unknown_unit)[0]->message.find(
-                  "measure MPag = MPa zero at 101.325 kPa") != std::string::npos);
+        const auto gpa = plumb::check_text("u.plumb", "x : GPa(g)\n");
+        REQUIRE(findings(gpa, plumb::rules::unknown_unit).size() == 1);
+        CHECK(findings(gpa, plumb::rules::unknown_unit)[0]->message.find(
+                  "measure GPag = GPa zero at 101.325 kPa") != std::string::npos);
+    }
+    SUBCASE("the gas and vessel trades' gauge units are built in (common practice)") {
+        same_unit("MPa(g)", "MPag");
+        same_unit("mbar g", "mbarg");
+        same_unit("inH2O(g)", "inH2Og");
+        // A file that defined them itself, as before they were built in, still reads.
+        const auto own = plumb::check_text(
+            "u.plumb",
+            "measure mbarg = mbar zero at 101.325 kPa\n"
+            "measure inH2Og = inH2O zero at 1013.25 mbar\np : mbarg\nq : mbar g\np = q\n");
+        INFO(listing(own));
+        CHECK(own.diagnostics.empty());
+        // One with another zero is a conflict, as before.
+        const auto other = plumb::check_text("u.plumb", "measure mbarg = mbar zero at 95 kPa\n");
+        CHECK(findings(other, plumb::rules::conflicting_declaration).size() == 1);
     }
 }
 

@@ -1000,12 +1000,25 @@ template <> struct action<nt::measure_statement> {
         const std::optional<unit_value> known = lookup_unit(name, s);
         // "measure Nm3 = m^3" where the table has Nm3 already, of the same size: the file says
         // what plumb already knows, which is no conflict.
-        if (known && !s.pending_origin &&
-            (s.pending_unit_base == nullptr ||
-             s.pending_unit_base->scale == unit_scale::absolute) &&
-            (known->single == nullptr || known->single->scale == unit_scale::absolute) &&
-            known->dim == s.pending_unit_dim &&
-            std::abs(known->factor / s.pending_unit_factor - 1.0) <= 1e-12)
+        // So is "measure mbarg = mbar zero at 101.325 kPa", written before the table had it:
+        // the same size, scale and zero.
+        const auto zero_of = [](const unit_definition* row) {
+            return row != nullptr && row->scale != unit_scale::absolute ? row->offset : 0.0;
+        };
+        const auto scale_of = [](const unit_definition* row) {
+            return row != nullptr ? row->scale : unit_scale::absolute;
+        };
+        const double pending_zero =
+            s.pending_origin ? *s.pending_origin : zero_of(s.pending_unit_base);
+        const unit_scale pending_scale =
+            s.pending_origin
+                ? (is_pressure(s.pending_unit_dim) ? unit_scale::gauge : unit_scale::offset)
+                : scale_of(s.pending_unit_base);
+        if (known && known->dim == s.pending_unit_dim &&
+            std::abs(known->factor / s.pending_unit_factor - 1.0) <= 1e-12 &&
+            scale_of(known->single) == pending_scale &&
+            std::abs(zero_of(known->single) - pending_zero) <=
+                1e-9 * std::max(1.0, std::abs(pending_zero)))
             return;
         if (known || s.find_defined_unit(name) != nullptr) {
             s.report(rules::conflicting_declaration,

@@ -350,6 +350,16 @@ constexpr unit_definition rows[] = {
           "SI Brochure 9th ed., Table 4 (Pa) and Table 7 (k)"
           "; common practice: standard atmosphere as the reference; local atmospheric "
           "pressure differs"),
+    // Vessels are rated in MPa(g); gas supplies to burners and meters in mbar g, and in the
+    // US in inches of water column, always gauge (common practice).
+    gauge("MPag", "megapascal, gauge", 1e6, "1000000",
+          "SI Brochure 9th ed., Table 4 (Pa) and Table 7 (M)"
+          "; common practice: standard atmosphere as the reference; local atmospheric "
+          "pressure differs"),
+    gauge("mbarg", "millibar, gauge", 100.0, "100",
+          "NIST SP 811 (2008), B.8 (bar); SI Brochure 9th ed., Table 7 (m)"
+          "; common practice: standard atmosphere as the reference; local atmospheric "
+          "pressure differs"),
     torr,
     spelled("torr", torr),
     // Conventional mercury (13595.1 kg/m³) and water (1000 kg/m³) columns under standard
@@ -362,6 +372,10 @@ constexpr unit_definition rows[] = {
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 2.490889E+02; exact by convention"),
     absolute("ftH2O", "foot of water (conventional)", pressure, 2989.06692, "2989.06692",
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 2.989067E+03; exact by convention"),
+    gauge("inH2Og", "inch of water (conventional), gauge", 249.08891, "249.08891",
+          "NIST SP 811 (2008), B.8 prints 2.490889E+02; exact by convention"
+          "; common practice: gas piping's inches of water column are gauge, against the "
+          "standard atmosphere; local atmospheric pressure differs"),
 
     // Energy. Steam tables use the IT calorie (common practice), so the bare "cal" means it.
     btu_it,
