@@ -261,6 +261,43 @@ TEST_CASE("workbook parity: a unit in a column's heading that does not read is s
     CHECK(error_at(defined, "Rooms!B2"));
 }
 
+TEST_CASE("workbook parity: a note names the sheet of a cell on another sheet") {
+    // A sling's share of a lifted load: the percentage used as a fraction (common practice:
+    // share = load · percent / 100). Lift!C8 and Slings!C8 are different cells, and the notes
+    // must say which is which.
+    const auto cell = [](const std::string& at, const std::string& inner) {
+        return "<c r=\"" + at + "\"" + inner + "</c>";
+    };
+    const auto text = [&](const std::string& at, const std::string& t) {
+        return cell(at, " t=\"inlineStr\"><is><t>" + t + "</t></is>");
+    };
+    const std::string lift = "<worksheet><sheetData><row r=\"8\">" + cell("C8", "><v>12</v>") +
+                             text("D8", "t") + "</row></sheetData></worksheet>";
+    const std::string slings = "<worksheet><sheetData><row r=\"8\">" + cell("C8", "><v>50</v>") +
+                               text("D8", "%") + "</row><row r=\"9\">" +
+                               cell("C9", "><f>Lift!C8*C8</f><v>0</v>") + text("D9", "t") +
+                               "</row></sheetData></worksheet>";
+    const std::string book = plumb::test::make_zip(
+        {{"[Content_Types].xml",
+          "<Types><Override PartName=\"/xl/workbook.xml\" ContentType=\"application/"
+          "vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml\"/></Types>"},
+         {"xl/workbook.xml", "<workbook><sheets><sheet name=\"Lift\" sheetId=\"1\" id=\"rId1\"/>"
+                             "<sheet name=\"Slings\" sheetId=\"2\" id=\"rId2\"/></sheets>"
+                             "</workbook>"},
+         {"xl/_rels/workbook.xml.rels",
+          "<Relationships><Relationship Id=\"rId1\" Target=\"worksheets/sheet1.xml\"/>"
+          "<Relationship Id=\"rId2\" Target=\"worksheets/sheet2.xml\"/></Relationships>"},
+         {"xl/worksheets/sheet1.xml", lift},
+         {"xl/worksheets/sheet2.xml", slings}});
+    plumb::test::temp_dir dir;
+    const check_report r = check_paths({dir.write("lift-plan.xlsx", book)});
+    INFO(render_text(r));
+    const diagnostic* share = finding(r, "Slings!C9", rules::unit_scale);
+    REQUIRE(share != nullptr);
+    CHECK(says(*share, "Lift!C8 is in t"));
+    CHECK_FALSE(says(*share, "  C8 is in t"));
+}
+
 TEST_CASE("workbook parity: a measure defined from another is read in unit text too") {
     // 1 lbmole = 453.59237 mol (NIST SP 811 (2008), B.8); a thousand of them a day, beside
     // others the sheet does not use, so only the lines a text names are read with it.

@@ -698,8 +698,7 @@ class workbook_checker {
                 if (!v.dim || noted >= 6)
                     continue;
                 ++noted;
-                const std::string name = a1_name(r.area);
-                const std::string remark = v.describe_for(name);
+                const std::string remark = v.describe_for(reference_name(r, f.sheet));
                 if (std::none_of(d.notes.begin(), d.notes.end(),
                                  [&](const note& n) { return n.message == remark; }))
                     d.notes.push_back({remark, {}});
@@ -989,12 +988,20 @@ class workbook_checker {
         return false;
     }
 
+    // "C8", or "Lift!C8" where the cell is on another sheet than the formula's, which has a C8
+    // of its own.
+    std::string reference_name(const lowered_reference& r, std::size_t formula_sheet) const {
+        if (r.sheet == formula_sheet)
+            return a1_name(r.area);
+        return fmt::format("{}!{}", book_.sheets[r.sheet].name, a1_name(r.area));
+    }
+
     void add_input_notes(diagnostic& d, const formula_cell& f) {
         std::size_t listed = 0;
         std::vector<std::string> seen;
         for (std::uint32_t i = 0; i < f.lowered.reference_count && listed < 6; ++i) {
             const lowered_reference& r = lowered_.references[f.lowered.first_reference + i];
-            const std::string name = a1_name(r.area);
+            const std::string name = reference_name(r, f.sheet);
             if (std::find(seen.begin(), seen.end(), name) != seen.end())
                 continue;
             seen.push_back(name);
