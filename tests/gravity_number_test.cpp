@@ -99,6 +99,12 @@ TEST_CASE("gravity as a number: a head from a gauge reading with g left out says
     CHECK(said.find("is a g missing") != std::string::npos);
     // With g it is a head, and a gauge reading's head is allowed.
     CHECK(run(pump + "H = p_g*1000/(ρ_w*g)\n").diagnostics.empty());
+    // In a sum of heads the gauge's finding stands, and says what is missing first.
+    const auto in_sum = run(pump + "z : m\nH = z + p_g*1000/ρ_w\n");
+    REQUIRE(count_of(in_sum, plumb::rules::offset_scale) == 1);
+    const auto& gauge_finding = plumb::test::first_under(in_sum, plumb::rules::offset_scale);
+    REQUIRE_FALSE(gauge_finding.notes.empty());
+    CHECK(gauge_finding.notes.front().message.find("g is missing") != std::string::npos);
     // The same quotient as a specific energy, where no head is asked for, stays the gauge's
     // finding.
     const auto energy = run("e : J/kg\np_g : kPag\nρ_w : kg/m^3\ne = p_g*1000/ρ_w\n");

@@ -6248,6 +6248,14 @@ class checker {
             } else {
                 report_offset(gauge_in_product->node, *gauge_in_product->unit,
                               gauge_in_product->where);
+                // z + h_f + p_g*1000/ρ: over a density alone a gauge reading gives an energy per
+                // mass; where a head was meant, the slip is the missing g, not the zero.
+                if (result.known && result.dim == velocity_squared_dimension())
+                    out_.back().notes.insert(
+                        out_.back().notes.begin(),
+                        {"if a head was meant, g is missing: p/(\u03C1*g) is a head, which a "
+                         "gauge reading may give as it is",
+                         {}});
                 result = unknown_type();
                 return result; // as above
             }
