@@ -261,6 +261,22 @@ TEST_CASE("workbook parity: a unit in a column's heading that does not read is s
     CHECK(error_at(defined, "Rooms!B2"));
 }
 
+TEST_CASE("workbook parity: ft per ton beside a load in TR says which ton 'ton' is") {
+    // Bore length per ton of refrigeration, 1 TR = 12 000 Btu/h (NIST SP 811 (2008), B.8); a
+    // 'ton' in a unit text is the short ton of 2000 lb, a mass (common practice: the US trades'
+    // ft/ton is per TR).
+    const check_report r = check_one_sheet("Design", sheet_of({
+                                                         {"1800", "ft"},       // B2
+                                                         {"12", "TR"},         // B3
+                                                         {"=B2/B3", "ft/ton"}, // B4
+                                                         {"=B2/B3", "ft/TR"},  // B5
+                                                     }));
+    const diagnostic* ton = finding(r, "Design!B4", rules::result_unit);
+    REQUIRE(ton != nullptr);
+    CHECK(says(*ton, "for a ton of refrigeration (12 000 Btu/h) write TR"));
+    CHECK(finding(r, "Design!B5", rules::result_unit) == nullptr);
+}
+
 TEST_CASE("workbook parity: a note names the sheet of a cell on another sheet") {
     // A sling's share of a lifted load: the percentage used as a fraction (common practice:
     // share = load · percent / 100). Lift!C8 and Slings!C8 are different cells, and the notes
