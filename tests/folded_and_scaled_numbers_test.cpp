@@ -154,6 +154,17 @@ TEST_CASE("a bare number beside terms in % or degrees is in their unit") {
                plumb::rules::unit_scale);
 }
 
+TEST_CASE("kW beside W: the advice names the W term, not the one with a converted %") {
+    // Input power from a shaft power and an efficiency in %, plus an auxiliary load in W (common
+    // practice: P_in = P_s/(η/100) + P_aux): the % over 100 is a fraction, and the term off by
+    // 1000 is the one in W.
+    const std::string drive = "P, P_s : kW\nP_a : W\nη : %\n";
+    const auto r = run(drive, "P = P_s/(η/100) + P_a");
+    REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "divide 'P_a' by 1000"));
+    passes(drive, {"P = P_s/(η/100) + P_a/1000"});
+}
+
 TEST_CASE("an emission corrected to a reference oxygen: the 21 above is in % too") {
     // E_ref = E·(21 - O_ref)/(21 - O_meas) (Directive 2010/75/EU, Annex VI, from memory), the
     // air-free form E·21/(21 - O2), US EPA Method 19's E = C·F·20.9/(20.9 - %O2) (from

@@ -6902,10 +6902,18 @@ class checker {
     }
 
     // Whether a product holds a symbol or a cell in percent, a dimensionless unit of 1/100.
+    // A percentage among a product's factors, not converted by a 100 beside it (P/(η/100)
+    // holds its η as a fraction).
     bool holds_percentage(std::uint32_t k) const {
-        return for_each_factor(k, [&](std::uint32_t at, int) {
-            return dimensionless_unit_size(at) == std::optional<double>(0.01);
+        bool percentage = false;
+        bool hundred = false;
+        for_each_factor(k, [&](std::uint32_t at, int) {
+            percentage = percentage || dimensionless_unit_size(at) == std::optional<double>(0.01);
+            hundred = hundred || (file_.nodes[at].kind == expr_kind::number &&
+                                  written_number(file_.nodes[at].range) == 100.0);
+            return false;
         });
+        return percentage && !hundred;
     }
 
     // The size of the dimensionless unit a symbol or a cell is declared in (0.01 for %, π/180
