@@ -239,8 +239,7 @@ struct reference_state_pairs {
     };
     // Left unset: the counts say how many are filled, and this is made for every product.
     std::array<number, 4> numbers;
-    // Four: Q_n*T/T_n*101.325/p holds three readings, the last the one 101.325 pairs with.
-    std::array<reading, 4> readings;
+    std::array<reading, 2> readings;
     std::size_t number_count = 0;
     std::size_t reading_count = 0;
 
@@ -254,9 +253,13 @@ struct reference_state_pairs {
             if (l.value > 1.0 && l.exponent == sign)
                 numbers[number_count++] = {l.node, sign, l.value};
         } else if (t.offset == nullptr && !t.numeric && t.zero_of == nullptr &&
-                   reading_count < readings.size() &&
                    (t.dim == temperature_dimension() || t.dim == pressure_dimension())) {
-            readings[reading_count++] = {node, sign, t.dim, t.scale};
+            if (reading_count < readings.size())
+                readings[reading_count++] = {node, sign, t.dim, t.scale};
+            // Q_n*T/T_n*101.325/p: two temperatures and then the pressure 101.325 pairs with,
+            // which takes the second temperature's place.
+            else if (readings[0].dim == readings[1].dim && !(t.dim == readings[0].dim))
+                readings[1] = {node, sign, t.dim, t.scale};
         }
     }
     // The numbers written directly in a grouped product among the factors, as in
@@ -5530,6 +5533,30 @@ class checker {
 
     // "21/(21 - O2)" with O2 in %, the excess-air ratio from the flue gas's oxygen (common
     // practice): the number over the sum that reads it in the sum's unit is in that unit too.
+    // "1 - O2/21" with O2 in % (CO2 = CO2_max·(1 - O2/21), common practice): 21 is oxygen's
+    // share of dry air in %, so the quotient is a ratio of two percentages. And a number over
+    // a sum in % that the sum starts with ("21/(21 - O2)") is in % too, as is one among the
+    // product's factors (see carries_number_of_sum).
+    [[gnu::noinline]] void settle_percent_divisor(typed_term& result, const typed_term& factor,
+                                                  const syntax::expr_node& op) const {
+        if (factor.numeric && result.known && !result.numeric && result.scale == 0.01 &&
+            result.dim.is_dimensionless() && oxygen_share_of_air(op.rhs)) {
+            result.scale = 1.0;
+            result.exact_scale = rational(1);
+            return;
+        }
+        if (factor.scale == 1.0 || factor.numeric || !factor.known ||
+            !factor.dim.is_dimensionless())
+            return;
+        if (result.numeric && same_number_over_its_sum(op.lhs, op.rhs)) {
+            result.scale = factor.scale;
+            result.exact_scale = factor.exact_scale;
+        } else if (carries_number_of_sum(op.lhs, op.rhs)) {
+            result.scale *= factor.scale;
+            result.exact_scale = exact_product(result.exact_scale, factor.exact_scale, false);
+        }
+    }
+
     // 20.9 % or 21 % (20.95 % by volume, the US Standard Atmosphere's dry air, from memory).
     [[gnu::noinline]] bool oxygen_share_of_air(std::uint32_t k) const {
         k = syntax::inside_brackets(file_, k);
@@ -6007,25 +6034,9 @@ class checker {
                     made->offset = nullptr;
                 factor = made;
             }
-            // "1 - O2/21" with O2 in % (CO2 = CO2_max·(1 - O2/21), common practice): 21 is
-            // oxygen's share of dry air in %, so the quotient is a ratio of two percentages.
-            if (divided && factor->numeric && result.known && !result.numeric &&
-                result.scale == 0.01 && result.dim.is_dimensionless() &&
-                oxygen_share_of_air(op.rhs)) [[unlikely]] {
-                result.scale = 1.0;
-                result.exact_scale = rational(1);
-            }
-            if (divided && factor->scale != 1.0 && !factor->numeric && factor->known &&
-                factor->dim.is_dimensionless()) [[unlikely]] {
-                if (result.numeric && same_number_over_its_sum(op.lhs, op.rhs)) {
-                    result.scale = factor->scale;
-                    result.exact_scale = factor->exact_scale;
-                } else if (carries_number_of_sum(op.lhs, op.rhs)) {
-                    result.scale *= factor->scale;
-                    result.exact_scale =
-                        exact_product(result.exact_scale, factor->exact_scale, false);
-                }
-            }
+            // A divisor or a product so far in %: see settle_percent_divisor.
+            if (divided && (result.scale == 0.01 || (factor->scale != 1.0 && !factor->numeric)))
+                [[unlikely]] settle_percent_divisor(result, *factor, op);
             // (R_2 - R_1)/R_1*(235 + θ_1): a winding's temperature from its inferred zero of
             // resistance, times a ratio, is a rise; and so is each bracket of the correction
             // R_2 = R_1*(235 + θ_2)/(235 + θ_1) (IEC 60076-1's load loss at 75 °C, from memory),
