@@ -154,6 +154,14 @@ TEST_CASE("a bare number beside terms in % or degrees is in their unit") {
                plumb::rules::unit_scale);
 }
 
+TEST_CASE("the factor advised beside a whole number of four digits is exact") {
+    // 1 km = 1000 m (SI Brochure 9th ed., Table 7): 3600*y with y in km into metres counts 3.6
+    // times, not 3.60025.
+    const auto r = run("x : m\ny : km\n", "x = 3600*y");
+    REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "counts 3.6 times"));
+}
+
 TEST_CASE("kW beside W: the advice names the W term, not the one with a converted %") {
     // Input power from a shaft power and an efficiency in %, plus an auxiliary load in W (common
     // practice: P_in = P_s/(η/100) + P_aux): the % over 100 is a fraction, and the term off by

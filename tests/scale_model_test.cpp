@@ -223,6 +223,9 @@ TEST_CASE("a literal's interval is exact: half a unit in its last printed digit 
     REQUIRE(barrel.low);
     CHECK(*barrel.low == plumb::rational(11227, 2000));
     CHECK(*barrel.high == plumb::rational(5615, 1000));
+    // The value as printed is still the digits themselves, as the advised factors show it.
+    CHECK(plumb::printed_power(barrel, 1.0) == plumb::rational(5614, 1000));
+    CHECK(plumb::printed_power(oil, 1.0) == plumb::rational(7758));
     const auto gpm = plumb::read_literal("0.0631", 0.0631, 0);
     REQUIRE(gpm.low);
     CHECK(*gpm.low == plumb::rational(6305, 100000));

@@ -279,7 +279,8 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
         if (width) {
             try {
                 l.low = *exact - *width;
-                l.high = *exact + (table_printed && half_unit_narrower ? *width + *width : *width);
+                l.may_be_cut = table_printed && half_unit_narrower;
+                l.high = *exact + (l.may_be_cut ? *width + *width : *width);
             } catch (const arithmetic_overflow&) {
                 l.low.reset();
                 l.high.reset();
@@ -323,7 +324,10 @@ std::optional<rational> printed_value(const scale_literal& l) {
     if (!l.low || !l.high)
         return std::nullopt;
     try {
-        return (*l.low + *l.high) / rational(2); // the digits' interval is centred on them
+        // The digits' interval is centred on them, or, where the value may be cut, spans half
+        // a unit below them and a whole one above.
+        return l.may_be_cut ? *l.low + (*l.high - *l.low) / rational(3)
+                            : (*l.low + *l.high) / rational(2);
     } catch (const arithmetic_overflow&) {
         return std::nullopt;
     }

@@ -27,6 +27,7 @@ struct scale_literal {
     bool power_of_ten = false;
     bool factor_like = false;  // written to 3 or more digits (3.28, 5.615, 43560), as factors are
     bool table_digits = false; // to 4 or more (3.281, 0.3048): precise enough to name a unit ratio
+    bool may_be_cut = false;   // high lies a whole unit above the digits, low half a unit below
 };
 
 // The number now stands for a quantity (g_n, the atmosphere, a reference temperature), not
