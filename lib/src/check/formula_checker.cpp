@@ -2155,14 +2155,16 @@ class checker {
         const double off = written / wanted - 1.0;
         if (std::abs(off) <= 0.02)
             return false;
+        // What the result is off by: the number's ratio, or its inverse where it divides.
+        const double result_off = (multiplies ? written / wanted : wanted / written) - 1.0;
         diagnostic& d = report(
             rules::unit_scale,
             fmt::format("{} is {}the molar volume of an ideal gas at {:.0f} \u00B0C, but the gas "
                         "volumes of {} are at {}, where it is {:.4g}: as written the result is "
                         "{:.1f} % too {}",
                         quote(node), reading.reciprocal ? "one over " : "", implied - ice_point,
-                        quote(volume_node), volume->name, wanted, std::abs(off) * 100.0,
-                        (off > 0) == multiplies ? "large" : "small"),
+                        quote(volume_node), volume->name, wanted, std::abs(result_off) * 100.0,
+                        result_off > 0 ? "large" : "small"),
             file_.nodes[node].range);
         d.level = severity::warning;
         add_term(d, operands_[base + odd]);
