@@ -132,6 +132,21 @@ TEST_CASE("gravity as a number: 0.052 psi/ft per ppg in a mud hydrostatic") {
 
 // Feet and pounds: h = p/(ρ g) with ρ in lb/ft^3 and p in lbf/ft^2 needs g_c too; with p in psf
 // and ρ in slug/ft^3 the number is 32.2 ft/s² (g_n = 32.174 ft/s², NIST SP 811 App. B).
+TEST_CASE("gravity as a number: twice a rounded g in a velocity head") {
+    // h_v = V²/(2g) (common practice): 19.62 = 2 × 9.81 and 64.4 = 2 × 32.2, twice g rounded
+    // as sheets round it, though 2·g_n is 19.613 and 64.348 (g_n = 9.80665 m/s², 3rd CGPM).
+    const std::string head = "h_v : m\nV : m/s\nh_f : ft\nV_f : ft/s\n";
+    for (const char* formula : {"h_v = V^2/19.62", "h_f = V_f^2/64.4", "h_v = V^2/19.6"}) {
+        CAPTURE(formula);
+        const auto r = run(head + formula + "\n");
+        CHECK(problems_in(r) == 0);
+        CHECK(count_of(r, plumb::rules::gravity_number) == 1);
+    }
+    // 19.7 is no twice of any rounded g (its half, 9.85, rounds none), nor is 20.
+    CHECK(count_of(run(head + "h_v = V^2/19.7\n"), plumb::rules::side_mismatch) == 1);
+    CHECK(count_of(run(head + "h_v = V^2/20\n"), plumb::rules::side_mismatch) == 1);
+}
+
 TEST_CASE("gravity as a number: 32.2 in foot units") {
     const std::string feet = "ρ_s : slug/ft^3\np_f : lbf/ft^2\nh_f : ft\n";
     const auto r = run(feet + "h_f = p_f/(ρ_s*32.2)\n");

@@ -6038,7 +6038,8 @@ class checker {
             }
             // A divisor or a product so far in %: see settle_percent_divisor.
             if (divided && (result.scale == 0.01 || (factor->scale != 1.0 && !factor->numeric)))
-                [[unlikely]] settle_percent_divisor(result, *factor, op);
+                [[unlikely]]
+                settle_percent_divisor(result, *factor, op);
             // (R_2 - R_1)/R_1*(235 + θ_1): a winding's temperature from its inferred zero of
             // resistance, times a ratio, is a rise; and so is each bracket of the correction
             // R_2 = R_1*(235 + θ_2)/(235 + θ_1) (IEC 60076-1's load loss at 75 °C, from memory),

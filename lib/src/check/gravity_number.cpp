@@ -206,6 +206,14 @@ bool is_power_of(const dimension& lacking, const dimension& q, double exponent) 
     return false;
 }
 
+// Whether the last digit of a number as written (before any exponent) is even.
+bool even_last_digit(std::string_view text) {
+    const std::size_t end = text.find_first_of("eE");
+    const std::string_view digits = text.substr(0, end);
+    const std::size_t last = digits.find_last_of("0123456789");
+    return last != std::string_view::npos && (digits[last] - '0') % 2 == 0;
+}
+
 // Significant figures enough to show the range the number must round.
 std::string shown(double v) {
     return fmt::format("{:.4g}", v);
@@ -337,7 +345,13 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     high /= power_of_ten;
                     const double nearest = std::clamp(number.value, low, high);
                     const double distance = std::abs(number.value - nearest);
-                    if (distance > half_unit * (1.0 + 1e-9) ||
+                    // 19.62 and 64.4 are twice a rounded g (9.81, 32.2; common practice in
+                    // V²/(2g)): where the last digit is even, half the number has the same
+                    // digits, and rounds g to them. (19.7's half, 9.85, rounds no g.)
+                    const double rounding = &q == &quantities()[1] && even_last_digit(texts[at])
+                                                ? 2.0 * half_unit
+                                                : half_unit;
+                    if (distance > rounding * (1.0 + 1e-9) ||
                         std::abs(number.value / nearest - 1.0) > closest_reading)
                         continue;
                     // An unshifted reading first, then the closest; on a tie the number that
