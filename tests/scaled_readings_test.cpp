@@ -536,3 +536,19 @@ TEST_CASE("a percentage written as its number over 100") {
         "p_g : mbarg\n";
     passes(decl, {"Δp = p_g*10/100", "Δp = 0.1*p_g", "Δp = p_g/10"});
 }
+
+// Antoine's equation for water, log10(p/mmHg) = 8.07131 - 1730.63/(233.426 + t) with t in °C
+// (Lange's Handbook of Chemistry, from memory): typed with bare constants it is still a finding
+// (the constants' units are unsaid), but the words say to write them as temperatures, not to
+// add 273.15, which would break the fit.
+TEST_CASE("a fit on the °C scale typed with bare constants: the advice keeps the scale") {
+    const std::string decl = "p_v : mmHg\nt_w : \u00B0C\n";
+    const auto r = run(decl, "p_v = 1 {mmHg}*10^(8.07131 - 1730.63/(233.426 + t_w))");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    const auto& finding = first_under(r, plumb::rules::offset_scale);
+    REQUIRE_FALSE(finding.notes.empty());
+    CHECK(finding.notes.front().message.find("1730.63 {K}/(233.426 {K} + t_w)") !=
+          std::string::npos);
+    passes(decl, {"p_v = 1 {mmHg}*10^(8.07131 - 1730.63 {K}/(233.426 {K} + t_w))"});
+}
+
