@@ -551,4 +551,3 @@ TEST_CASE("a fit on the °C scale typed with bare constants: the advice keeps th
           std::string::npos);
     passes(decl, {"p_v = 1 {mmHg}*10^(8.07131 - 1730.63 {K}/(233.426 {K} + t_w))"});
 }
-

@@ -113,6 +113,15 @@ TEST_CASE("a number in ratio with an absolute reading is read as a standard refe
     CHECK(note.level == plumb::severity::note);
 }
 
+TEST_CASE("a barometer in mbar over 1000 added to a bar g reading is a conversion") {
+    // p_abs = p_g + p_b/1000 in bar with the barometer in mbar (EN 12405-1's volume conversion,
+    // from memory; 1 bar = 1000 mbar, SI Brochure 9th ed., Table 8): the 1000 converts, and is
+    // no reference pressure of 1000 mbar.
+    const std::string meter = "p_g : barg\np_b : mbar \"site barometer\"\np_a : bar\n";
+    passes(meter, {"p_a = p_g + p_b/1000", "p_a = p_g + 0.001*p_b"});
+    fails_with(meter, {"p_a = p_g + p_b"}, plumb::rules::unit_scale);
+}
+
 TEST_CASE("a reference number beside no absolute reading, or the wrong one, is not read") {
     // 273.15 multiplying a heat capacity stands in ratio with no temperature reading.
     fails_with(gas, {"@heat-with-273 Q = m*c_p*273.15"}, plumb::rules::side_mismatch);
