@@ -179,6 +179,17 @@ TEST_CASE("gauge and absolute marks after a space: kPa g, bar a, kPa abs (common
     same_unit("g m/s", "g*m/s");
 }
 
+TEST_CASE("the year of annual energy and emissions: yr and a, 365 days (NIST SP 811 (2008), B.8)") {
+    same_unit("kWh/yr", "kWh/(365*d)");
+    same_unit("t/a", "t/(8760*h)");
+    other_scale("kWh/yr", "kWh/d");
+    // A file that defined it itself, at 365 days, still reads.
+    const auto own =
+        plumb::check_text("u.plumb", "measure yr = 365 d\nE : MWh/yr\nF : MWh/a\nE = F\n");
+    INFO(listing(own));
+    CHECK(own.diagnostics.empty());
+}
+
 TEST_CASE("deg C and deg F are the temperature scales; C for a temperature is refused") {
     // Typed where the keyboard lacks ° (common practice); as a product they would be an angle
     // times a coulomb or a farad.

@@ -148,6 +148,8 @@ constexpr unit_definition centipoise =
     absolute("cP", "centipoise", dynamic_viscosity, 1e-3, "0.001", prefixes::refused, nist);
 constexpr unit_definition day =
     absolute("d", "day", time, 86400.0, "86400", prefixes::refused, si_accepted);
+constexpr unit_definition year = absolute("yr", "year (365 days)", time, 31536000.0, "31536000",
+                                          prefixes::refused, "NIST SP 811 (2008), B.8");
 // A standard cubic foot is a cubic foot of gas at the reference conditions; as a volume it is
 // the cubic foot. Which reference conditions apply is for the calc to say (common practice).
 constexpr std::string_view standard_volume_source =
@@ -231,6 +233,10 @@ constexpr unit_definition rows[] = {
     absolute("h", "hour", time, 3600.0, "3600", prefixes::refused, si_accepted),
     day,
     spelled("day", day),
+    // Annual energy, emissions and running hours: the year of 365 days (NIST SP 811 (2008),
+    // B.8, 3.1536E+07 s), the 8760 h of the trades; "a" (annum) as ISO 80000-3 writes it.
+    year,
+    spelled("a", year),
     absolute("au", "astronomical unit", length, 149597870700.0, "149597870700", prefixes::refused,
              si_accepted),
     angle_degree,
