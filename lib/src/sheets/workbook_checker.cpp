@@ -1206,6 +1206,28 @@ class workbook_checker {
 
     // A formula cell with a unit beside it that does not read as one: its result is compared
     // with nothing, so say so where the text looks like a unit (it has a unit's operators).
+    // At most three words, split at blanks and at '/' and '*', one of which reads as a unit of
+    // two letters or more.
+    bool spaced_words_hold_a_unit(std::string_view t) const {
+        if (t.find(' ') == std::string_view::npos)
+            return false;
+        std::size_t words = 0;
+        bool unit = false;
+        for (std::size_t at = 0; at < t.size();) {
+            const std::size_t end = std::min(t.find_first_of(" /*", at), t.size());
+            const std::string_view word = t.substr(at, end - at);
+            if (!word.empty()) {
+                ++words;
+                // Two letters at least: "see A" is a remark, not amperes.
+                unit = unit || (word.size() >= 2 &&
+                                std::isalpha(static_cast<unsigned char>(word.front())) != 0 &&
+                                read_unit_text(word, units_.measures).has_value());
+            }
+            at = end + 1;
+        }
+        return words <= 3 && unit;
+    }
+
     void report_unread_unit(const formula_cell& f) {
         const auto text = unread_.find(book_key(f.sheet, f.source->at));
         if (text == unread_.end())
@@ -1218,10 +1240,13 @@ class workbook_checker {
              t.find("\u00B7") != std::string_view::npos ||
              t.find("\u00B2") != std::string_view::npos ||
              t.find("\u00B3") != std::string_view::npos || looks_like_a_unit_word(t));
+        // "US gal", "t CO2/yr", "L/100 km": a few words, one of which is a unit, are a unit
+        // written in words plumb does not read, not a remark beside the cell.
+        const bool spaced_unit = !unit_like && t.size() <= 40 && spaced_words_hold_a_unit(t);
         // A hyphen joins two units ("acre-ft") whatever the reader made of it.
         const std::string problem = unit_like ? unit_text_problem(t, units_.measures) : "";
-        if (!unit_like ||
-            (problem.rfind("unknown unit", 0) != 0 && t.find('-') == std::string_view::npos))
+        if (!spaced_unit && (!unit_like || (problem.rfind("unknown unit", 0) != 0 &&
+                                            t.find('-') == std::string_view::npos)))
             return;
         diagnostic& d = report(severity::warning, rules::no_unit,
                                fmt::format("the unit written {} this cell does not read as "
