@@ -271,6 +271,23 @@ TEST_CASE("workbook parity: a unit in a column's heading that does not read is s
     CHECK(error_at(defined, "Rooms!B2"));
 }
 
+TEST_CASE("workbook parity: the molar volume follows the cell's reference state") {
+    // c = C·M/V_m, V_m = R·T/p = 22.414 L/mol at 0 °C and 101.325 kPa (CODATA 2018's R), the
+    // normal cubic metre's state (DIN 1343); 24.45 is 25 °C's, 8.3 % off.
+    const check_report r = check_one_sheet("Report", sheet_of({
+                                                         {"120", "ppm"},             // B2
+                                                         {"46.01", "g/mol"},         // B3
+                                                         {"=B2*B3/24.45", "mg/Nm3"}, // B4
+                                                         {"=B2*B3/22.41", "mg/Nm3"}, // B5
+                                                         {"=B2*B3/24.45", "mg/m3"},  // B6
+                                                     }));
+    const diagnostic* off = finding(r, "Report!B4", rules::unit_scale);
+    REQUIRE(off != nullptr);
+    CHECK(says(*off, "8.3 % too small"));
+    CHECK(finding(r, "Report!B5", rules::unit_scale) == nullptr);
+    CHECK(finding(r, "Report!B6", rules::unit_scale) == nullptr);
+}
+
 TEST_CASE("workbook parity: ft per ton beside a load in TR says which ton 'ton' is") {
     // Bore length per ton of refrigeration, 1 TR = 12 000 Btu/h (NIST SP 811 (2008), B.8); a
     // 'ton' in a unit text is the short ton of 2000 lb, a mass (common practice: the US trades'

@@ -2110,7 +2110,8 @@ class checker {
                 d.notes.push_back({gravity_message(written, reading), {}});
                 continue;
             }
-            if ((symbols_.unit_marks() & at_reference_conditions) != 0 &&
+            if (((symbols_.unit_marks() & at_reference_conditions) != 0 ||
+                 file_.functions == syntax::function_names::spreadsheet) &&
                 is_molar_volume(*reading.quantity) &&
                 report_molar_volume_off_reference(base, count, readings[r].operand, written_value,
                                                   multiplies, reading, node)) [[unlikely]]
@@ -2146,33 +2147,18 @@ class checker {
         }
         if (!volume)
             return false;
-        constexpr double ice_point = 273.15;
-        // least and greatest are the molar volume (or one over it) at 0 and 25 °C.
-        const double implied = reading.reciprocal ? ice_point * reading.greatest / written
-                                                  : ice_point * written / reading.least;
-        const double wanted = reading.reciprocal ? reading.greatest * ice_point / volume->kelvins
-                                                 : reading.least * volume->kelvins / ice_point;
-        const double off = written / wanted - 1.0;
-        if (std::abs(off) <= 0.02)
+        const std::optional<molar_volume_mismatch> off =
+            molar_volume_off_reference(reading, written, multiplies, volume->kelvins);
+        if (!off)
             return false;
-        // What the result is off by: the number's ratio, or its inverse where it divides.
-        const double result_off = (multiplies ? written / wanted : wanted / written) - 1.0;
-        diagnostic& d = report(
-            rules::unit_scale,
-            fmt::format("{} is {}the molar volume of an ideal gas at {:.0f} \u00B0C, but the gas "
-                        "volumes of {} are at {}, where it is {:.4g}: as written the result is "
-                        "{:.1f} % too {}",
-                        quote(node), reading.reciprocal ? "one over " : "", implied - ice_point,
-                        quote(volume_node), volume->name, wanted, std::abs(result_off) * 100.0,
-                        result_off > 0 ? "large" : "small"),
-            file_.nodes[node].range);
+        diagnostic& d =
+            report(rules::unit_scale,
+                   molar_volume_message(quote(node), reading, *off,
+                                        fmt::format("of {}", quote(volume_node)), volume->name),
+                   file_.nodes[node].range);
         d.level = severity::warning;
         add_term(d, operands_[base + odd]);
-        d.notes.push_back({fmt::format("the molar volume follows the reference state of the gas "
-                                       "volumes (Nm3 at 0 \u00B0C, Sm3 at 15 \u00B0C, scf at "
-                                       "60 \u00B0F, all at 101.325 kPa): write {:.4g} there",
-                                       wanted),
-                           {}});
+        d.notes.push_back({molar_volume_advice(*off), {}});
         return true;
     }
 

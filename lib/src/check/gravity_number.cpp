@@ -232,6 +232,40 @@ bool is_molar_volume(const carried_quantity& q) {
     return &q == &quantities()[6];
 }
 
+std::optional<molar_volume_mismatch> molar_volume_off_reference(const gravity_reading& reading,
+                                                                double written, bool multiplies,
+                                                                double kelvins) {
+    constexpr double ice_point = 273.15;
+    // least and greatest are the molar volume (or one over it) at 0 and 25 °C.
+    const double implied = reading.reciprocal ? ice_point * reading.greatest / written
+                                              : ice_point * written / reading.least;
+    const double wanted = reading.reciprocal ? reading.greatest * ice_point / kelvins
+                                             : reading.least * kelvins / ice_point;
+    if (!(wanted > 0) || std::abs(written / wanted - 1.0) <= 0.02)
+        return std::nullopt;
+    // What the result is off by: the number's ratio, or its inverse where it divides.
+    return molar_volume_mismatch{implied - ice_point, wanted,
+                                 (multiplies ? written / wanted : wanted / written) - 1.0};
+}
+
+std::string molar_volume_message(std::string_view number, const gravity_reading& reading,
+                                 const molar_volume_mismatch& off, std::string_view of_what,
+                                 std::string_view state) {
+    return fmt::format("{} is {}the molar volume of an ideal gas at {:.0f} \u00B0C, but the gas "
+                       "volumes {} are at {}, where it is {:.4g}: as written the result is "
+                       "{:.1f} % too {}",
+                       number, reading.reciprocal ? "one over " : "", off.implied_celsius, of_what,
+                       state, off.wanted, std::abs(off.result_off) * 100.0,
+                       off.result_off > 0 ? "large" : "small");
+}
+
+std::string molar_volume_advice(const molar_volume_mismatch& off) {
+    return fmt::format("the molar volume follows the reference state of the gas volumes (Nm3 at "
+                       "0 \u00B0C, Sm3 at 15 \u00B0C, scf at 60 \u00B0F, all at 101.325 kPa): "
+                       "write {:.4g} there",
+                       off.wanted);
+}
+
 bool lacks_gravity_number(const dimension& lacking, double exponent) {
     for (const carried_quantity& q : quantities())
         if (is_power_of(lacking, q.dim, exponent) || is_power_of(lacking, q.dim, -exponent))

@@ -62,6 +62,26 @@ std::string_view advice_in_cell_for(std::string_view advice_in_notation);
 // temperature a gas volume at reference conditions beside it must share.
 bool is_molar_volume(const carried_quantity& q);
 
+// A molar volume read beside gas volumes at reference conditions of another temperature
+// ("C_mg = C_ppm*M/24.45" in mg/Nm³): the temperature the number stands for, the number the
+// volumes' state wants, and how far the result is off. Empty within 2 %: the US trades'
+// 385.3 scf/lbmol at 68 °F beside a standard cubic foot at 60 °F is their convention.
+struct molar_volume_mismatch {
+    double implied_celsius = 0.0;
+    double wanted = 0.0;
+    double result_off = 0.0; // relative, + too large
+};
+std::optional<molar_volume_mismatch> molar_volume_off_reference(const gravity_reading& reading,
+                                                                double written, bool multiplies,
+                                                                double kelvins);
+// "'24.45' is the molar volume of an ideal gas at 25 °C, but the gas volumes of 'C_mg' are at
+// 0 °C, where it is 22.41: as written the result is 8.3 % too small"; `of_what` follows
+// "the gas volumes".
+std::string molar_volume_message(std::string_view number, const gravity_reading& reading,
+                                 const molar_volume_mismatch& off, std::string_view of_what,
+                                 std::string_view state);
+std::string molar_volume_advice(const molar_volume_mismatch& off);
+
 // The number among `literals` that carries g_n or γ_w, or its reciprocal, in the term's own
 // units, where the term lacks exactly that quantity to the number's power. `texts` are the
 // numbers as written: a number must round a value of the quantity in those units to its last
