@@ -361,10 +361,24 @@ TEST_CASE("the sea-level atmosphere where the file declares the site's barometer
 
 // Free air in cfm into Nm³/min by the volume factor alone (1 m³ = 35.3147 ft³, NIST SP 811
 // (2008), B.8): still no correction for the air's state, a warning as Q_n = Q_act is.
+TEST_CASE("a gas's velocity from a flow at reference conditions") {
+    // v = Q/A with Q the actual volume flow (common practice); Q_n in Nm³/h (0 °C, 101.325 kPa,
+    // DIN 1343) is some 2.3 times smaller than the actual flow of a 350 °C off-gas.
+    const std::string duct = "Q_n : Nm3/h\nQ_a : m^3/h\nA_d : m^2\nD : m\nV_d : m/s\n"
+                             "T : K\nT_n : K = 273.15\np_n, p : kPa\n";
+    fails_with(duct, {"V_d = Q_n/(3600*A_d)", "V_d = 4*Q_n/(3600*pi*D^2)"},
+               plumb::rules::unit_scale);
+    passes(duct, {"V_d = Q_a/(3600*A_d)", "V_d = Q_n*T/T_n/(3600*A_d)",
+                  "V_d = Q_n*(p_n/p)*(T/T_n)/(3600*A_d)", "V_d = 4*Q_a/(3600*pi*D^2)"});
+}
+
 TEST_CASE("an actual gas volume converted between units but not to reference conditions") {
     const std::string air = "Q_leakNm : Nm3/min\nQ_leak : cfm\nQ_s : scf/min\n";
     fails_with(air, {"Q_leakNm = Q_leak/35.31", "Q_leakNm = Q_leak*0.02832"},
                plumb::rules::unit_scale);
+    // L/min into Nm³/h by 0.06 (60 min/h over 1000 L/m³ folded) is the same slip as by 60/1000.
+    const std::string ward = "q_w : L/min \"oxygen at the wards\"\nQ_N : Nm3/h\n";
+    fails_with(ward, {"Q_N = 0.06*q_w", "Q_N = q_w*60/1000"}, plumb::rules::unit_scale);
     passes(air, {"Q_leakNm = Q_s/37.3"});
 }
 

@@ -85,6 +85,7 @@ constexpr compact_dimension volume_dim = compact_dimension::whole({0, 3, 0, 0, 0
 constexpr compact_dimension energy_dim = compact_dimension::whole({1, 2, -2, 0, 0, 0, 0});
 constexpr compact_dimension power_dim = compact_dimension::whole({1, 2, -3, 0, 0, 0, 0});
 constexpr compact_dimension frequency_dim = compact_dimension::whole({0, 0, -1, 0, 0, 0, 0});
+constexpr compact_dimension velocity_dim = compact_dimension::whole({0, 1, -1, 0, 0, 0, 0});
 constexpr compact_dimension specific_heat_dim = compact_dimension::whole({0, 2, -2, -1, 0, 0, 0});
 constexpr compact_dimension moment_of_inertia_dim = compact_dimension::whole({1, 2, 0, 0, 0, 0, 0});
 // A volume flow times a specific energy: cfm·Δh in q = 4.5·cfm·Δh (common practice).
@@ -827,7 +828,8 @@ class checker {
         } else if ((marks & at_reference_conditions) != 0) {
             for (const operand& side : sides)
                 if (report_normal_measure_times_actual_volume(side) ||
-                    (sides[0].type.dim == power_dim && report_power_from_normal_flow(side)))
+                    (sides[0].type.dim == power_dim && report_power_from_normal_flow(side)) ||
+                    (sides[0].type.dim == velocity_dim && report_velocity_from_normal_flow(side)))
                     break;
         }
         if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
@@ -1367,9 +1369,71 @@ class checker {
         const double decade = std::round(std::log10(v));
         if (std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12)
             return true;
-        if (v == 60.0 || v == 3600.0 || v == 24.0 || v == 1440.0 || v == 86400.0)
-            return true;
+        // A time ratio, also with a power of ten folded in: 0.06 is 60 min/h over 1000 L/m³,
+        // 3.6 is 3600 s/h over 1000.
+        for (const double time : {60.0, 3600.0, 24.0, 1440.0, 86400.0}) {
+            // (Over a power of ten only: LNG's 600, 60 × 10, is a ratio of volumes.)
+            const double tens = std::round(std::log10(v / time));
+            if ((tens == 0.0 || tens <= -2.0) &&
+                std::abs(v / (time * std::pow(10.0, tens)) - 1.0) < 1e-9)
+                return true;
+        }
         return looks_like_conversion(read_literal(text(file_.nodes[at].range), v, at), false);
+    }
+
+    // "V_d = Q_n/(3600*A_d)" with Q_n in Nm³/h: a gas's velocity in a duct is its actual
+    // volume flow over the area; the normal flow leaves out its state (2.3 times at a smelter's
+    // 350 °C off-gas). Asked of a product of one flow at reference conditions over an area,
+    // with no temperature or pressure beside them that could correct it.
+    bool report_velocity_from_normal_flow(const operand& side) {
+        std::optional<reference_volume> normal;
+        std::uint32_t flow = syntax::no_index;
+        bool correction = false;
+        const bool circle = holds_pi(side.node);
+        for_each_factor(side.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number) {
+                // The 4 of 4·Q/(π·D²) is the circle's.
+                const double v = written_number(n.range);
+                correction = correction ||
+                             !(plain_conversion_number(at) || (circle && (v == 4.0 || v == 2.0)));
+                return false;
+            }
+            // D^2: a power of a symbol is read as the symbol.
+            const std::uint32_t base =
+                n.kind == expr_kind::power && file_.nodes[n.lhs].kind == expr_kind::symbol ? n.lhs
+                                                                                           : at;
+            if (file_.nodes[base].kind != expr_kind::symbol) {
+                correction = correction || n.kind != expr_kind::pi;
+                return false;
+            }
+            const symbol_entry* e = symbols_.find(text(file_.nodes[base].range));
+            if (e == nullptr || !e->compact_dim)
+                return false;
+            if ((unit_marks_of(e->unit_text) & at_reference_conditions) != 0) {
+                const std::optional<reference_volume> v = reference_volume_in(e->unit_text);
+                if (flow != syntax::no_index || base != at || !v || v->power * sign != 1)
+                    correction = true; // two, or a volume at reference conditions below
+                flow = at;
+                normal = v;
+            } else if (*e->compact_dim == pressure_dimension() ||
+                       *e->compact_dim == temperature_dimension() ||
+                       e->compact_dim->is_dimensionless())
+                correction = true;
+            return false;
+        });
+        if (correction || flow == syntax::no_index || !normal)
+            return false;
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("{} is a flow at reference conditions ({}), but a gas's velocity is its "
+                        "actual volume flow over the area: this formula does not correct for the "
+                        "gas's state",
+                        quote(flow), normal->name),
+            file_.nodes[side.node].range);
+        d.level = severity::warning;
+        d.notes.push_back({std::string(state_correction_advice), {}});
+        return true;
     }
 
     static bool is_rotating_power_or_torque(const compact_dimension& dim) {
