@@ -361,6 +361,16 @@ TEST_CASE("the sea-level atmosphere where the file declares the site's barometer
 
 // Free air in cfm into Nm³/min by the volume factor alone (1 m³ = 35.3147 ft³, NIST SP 811
 // (2008), B.8): still no correction for the air's state, a warning as Q_n = Q_act is.
+TEST_CASE("a concentration at reference conditions times a flow described at its actual state") {
+    // E = c·Q with c per normal m³ needs Q in normal m³ (DIN 1343's normal state, from memory);
+    // a stack's actual flow at 185 °C is some 1.7 times the normal one.
+    const std::string stack = "C_mg : mg/Nm3\nE : kg/h\n"
+                              "Q_act : m3/h \"wet flue gas at stack temperature and pressure\"\n"
+                              "Q_n : Nm3/h\n";
+    fails_with(stack, {"E = C_mg*Q_act/1e6"}, plumb::rules::unit_scale);
+    passes(stack, {"E = C_mg*Q_n/1e6"});
+}
+
 TEST_CASE("a gas's velocity from a flow at reference conditions") {
     // v = Q/A with Q the actual volume flow (common practice); Q_n in Nm³/h (0 °C, 101.325 kPa,
     // DIN 1343) is some 2.3 times smaller than the actual flow of a 350 °C off-gas.

@@ -1299,10 +1299,17 @@ class checker {
     // A volume the file says is at the gas's actual state: acfm, Am³, or "actual" in its
     // description.
     static bool names_actual_volume(const symbol_entry& e) {
-        return e.unit_text.find("acf") != std::string_view::npos ||
-               e.unit_text.find("Am3") != std::string_view::npos ||
-               e.unit_text.find("Am\u00B3") != std::string_view::npos ||
-               e.description.find("actual") != std::string_view::npos;
+        if (e.unit_text.find("acf") != std::string_view::npos ||
+            e.unit_text.find("Am3") != std::string_view::npos ||
+            e.unit_text.find("Am\u00B3") != std::string_view::npos)
+            return true;
+        // "wet flue gas at stack temperature and pressure", "at line conditions".
+        for (const std::string_view words :
+             {"actual", "temperature and pressure", "line conditions", "operating conditions",
+              "flowing conditions", "stack conditions", "inlet conditions"})
+            if (e.description.find(words) != std::string_view::npos)
+                return true;
+        return false;
     }
 
     // "Q_act = r_air*A_f" with r_air in Nm³/(m²·h) and Q_act in m³/h: the same where a side
