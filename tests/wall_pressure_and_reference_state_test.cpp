@@ -371,6 +371,14 @@ TEST_CASE("a concentration at reference conditions times a flow described at its
     passes(stack, {"E = C_mg*Q_n/1e6"});
 }
 
+TEST_CASE("gas volumes at two reference states in a ratio") {
+    // 1 Nm³ (0 °C) = 1.0549 Sm³ (15 °C) at 101.325 kPa (ISO 13443, from memory): a fill time
+    // from a volume in Sm³ over a capacity in Nm³/h is 5.5 % short.
+    const std::string cng = "V_u : Sm3\nQ_cn : Nm3/h\nQ_cs : Sm3/h\nt_fill : min\n";
+    fails_with(cng, {"t_fill = V_u/Q_cn*60"}, plumb::rules::unit_scale);
+    passes(cng, {"t_fill = V_u/Q_cs*60", "t_fill = V_u/(1.0549*Q_cn)*60"});
+}
+
 TEST_CASE("a gas's velocity from a flow at reference conditions") {
     // v = Q/A with Q the actual volume flow (common practice); Q_n in Nm³/h (0 °C, 101.325 kPa,
     // DIN 1343) is some 2.3 times smaller than the actual flow of a 350 °C off-gas.

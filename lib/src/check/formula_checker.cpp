@@ -829,7 +829,8 @@ class checker {
             for (const operand& side : sides)
                 if (report_normal_measure_times_actual_volume(side) ||
                     (sides[0].type.dim == power_dim && report_power_from_normal_flow(side)) ||
-                    (sides[0].type.dim == velocity_dim && report_velocity_from_normal_flow(side)))
+                    (sides[0].type.dim == velocity_dim && report_velocity_from_normal_flow(side)) ||
+                    report_reference_states_in_ratio(side))
                     break;
         }
         if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
@@ -1386,6 +1387,59 @@ class checker {
                 return true;
         }
         return looks_like_conversion(read_literal(text(file_.nodes[at].range), v, at), false);
+    }
+
+    // "t_fill = V_u/Q_cn*60" with V_u in Sm³ and Q_cn in Nm³/h: gas volumes at two reference
+    // states in a ratio count a standard cubic metre as a normal one, 5.5 % apart (1 Nm³ =
+    // 1.0549 Sm³, ISO 13443, from memory). Asked where the product holds one of each, above
+    // and below, and no number but plain conversions.
+    bool report_reference_states_in_ratio(const operand& side) {
+        std::uint32_t above = syntax::no_index;
+        std::uint32_t below = syntax::no_index;
+        std::optional<reference_volume> top;
+        std::optional<reference_volume> bottom;
+        bool other = false;
+        for_each_factor(side.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number) {
+                other = other || !plain_conversion_number(at);
+                return false;
+            }
+            if (n.kind != expr_kind::symbol)
+                return false;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e == nullptr || (unit_marks_of(e->unit_text) & at_reference_conditions) == 0) {
+                other = other || (e != nullptr && e->compact_dim &&
+                                  (*e->compact_dim == pressure_dimension() ||
+                                   *e->compact_dim == temperature_dimension()));
+                return false;
+            }
+            const std::optional<reference_volume> v = reference_volume_in(e->unit_text);
+            if (!v || std::abs(v->power) != 1)
+                return other = true;
+            const bool up = v->power * sign > 0;
+            if ((up ? above : below) != syntax::no_index)
+                return other = true;
+            (up ? above : below) = at;
+            (up ? top : bottom) = v;
+            return false;
+        });
+        if (other || above == syntax::no_index || below == syntax::no_index ||
+            std::abs(top->kelvins / bottom->kelvins - 1.0) <= reference_temperature_slack)
+            return false;
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("{} is gas at {} and {} gas at {}: their ratio counts the one as the "
+                        "other, {:.1f} % apart, which this formula does not correct for",
+                        quote(above), top->name, quote(below), bottom->name,
+                        std::abs(top->kelvins / bottom->kelvins - 1.0) * 100.0),
+            file_.nodes[side.node].range);
+        d.level = severity::warning;
+        d.notes.push_back({"at one pressure a gas's volume follows its absolute temperature: 1 "
+                           "Nm\u00B3 (0 \u00B0C) = 1.0549 Sm\u00B3 (15 \u00B0C) = 37.33 scf "
+                           "(60 \u00B0F), all at 101.325 kPa",
+                           {}});
+        return true;
     }
 
     // "V_d = Q_n/(3600*A_d)" with Q_n in Nm³/h: a gas's velocity in a duct is its actual
