@@ -529,6 +529,22 @@ TEST_CASE("a revolution's 2π between revolutions and radians, and in a flywheel
     }
 }
 
+// ω = 2π·f (ISO 80000-3, from memory): a frequency in Hz counts cycles as rpm counts
+// revolutions; the synchronous speed n = 120·f/p, a reactance 2π·f·L and f = 1/T need no 2π.
+TEST_CASE("a frequency in Hz beside an angular speed in radians") {
+    const std::string decl = "ω : rad/s\nf : Hz\nn_s : rpm\nN_p : 1\nX_L : ohm\nL : H\n"
+                             "T_p : s\nM : N*m\nP : W\n";
+    for (const char* formula :
+         {"ω = 2*pi*f", "n_s = 120*f/N_p", "X_L = 2*pi*f*L", "f = 1/T_p", "P = 2*pi*f*M"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 0);
+    }
+    for (const char* formula : {"ω = f", "f = ω", "P = f*M"}) {
+        CAPTURE(formula);
+        CHECK(count_of(run(decl + formula + "\n"), plumb::rules::unit_scale) == 1);
+    }
+}
+
 // The US rational method Q = C·i·A gives cfs from in/h and acres, leaving out 1 acre·in/h =
 // 43560 ft² × (1/12 ft)/3600 s = 1.00833 cfs (NIST SP 811 (2008), B.8, acre and inch; the
 // convention is common practice): a note, not a warning. In mm/h the units are 100 times or

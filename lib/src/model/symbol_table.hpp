@@ -31,7 +31,8 @@ enum unit_mark : std::uint8_t {
         return unit_text.find(part) != std::string_view::npos;
     };
     std::uint8_t marks = 0;
-    if (has("rpm") || has("r/min") || has("rev"))
+    // Hz counts cycles too: ω = 2π·f (ISO 80000-3).
+    if (has("rpm") || has("r/min") || has("rev") || has("Hz"))
         marks |= counts_revolutions;
     if (has("Nm3") || has("Sm3") || has("Nm\u00B3") || has("Sm\u00B3") || has("scf") || has("SCF"))
         marks |= at_reference_conditions;
