@@ -154,6 +154,14 @@ TEST_CASE("a bare number beside terms in % or degrees is in their unit") {
                plumb::rules::unit_scale);
 }
 
+TEST_CASE("a wire's area in circular mils is its diameter in mils squared") {
+    // 1 cmil = π/4 mil² (NIST SP 811 (2008), B.8): A[cmil] = d[mil]², the circle's π/4 being
+    // the unit's; A[kcmil] = 1000·d[in]².
+    const std::string wire = "A_cmil : cmil\nA_k : kcmil\nd_mil : mil\nd_in : in\nA_mm : mm^2\n";
+    passes(wire, {"A_cmil = d_mil^2", "A_k = 1000*d_in^2"});
+    fails_with(wire, {"A_cmil = pi/4*d_mil^2", "A_mm = d_mil^2"}, plumb::rules::unit_scale);
+}
+
 TEST_CASE("the factor advised beside a whole number of four digits is exact") {
     // 1 km = 1000 m (SI Brochure 9th ed., Table 7): 3600*y with y in km into metres counts 3.6
     // times, not 3.60025.

@@ -4017,6 +4017,18 @@ class checker {
             unit = parts[r.reference].scale;
             return true;
         }
+        // A_cmil = d_mil^2: the circular mil is π/4 mil², so that a round wire's area in cmil is
+        // its diameter in mils squared (NIST SP 811 (2008), B.8): the circle's π/4 is the unit's,
+        // and a π written beside it counts the circle twice.
+        if ((std::abs(ratio / (std::numbers::pi / 4.0) - 1.0) < 1e-9 ||
+             std::abs(ratio * std::numbers::pi / 4.0 - 1.0) < 1e-9) &&
+            (in_circular_mils(ops[index[r.odd]].node) ||
+             in_circular_mils(ops[index[r.reference]].node)) &&
+            !holds_pi(ops[index[r.odd]].node) && !holds_pi(ops[index[r.reference]].node))
+            [[unlikely]] {
+            unit = parts[r.reference].scale;
+            return true;
+        }
         // Q = C·i·A in cfs from in/h and acres, the US rational method: 1 acre·in/h is
         // 43560/43200 = 1.0083 cfs, which the method leaves out by convention (common practice).
         if (std::abs(ratio * 121.0 / 120.0 - 1.0) < 1e-5 ||
@@ -5710,6 +5722,19 @@ class checker {
                          "constants are temperatures: write {} to say so, and do not add 273.15",
                          fit),
              {}});
+    }
+
+    // Whether a symbol under `node` is declared in circular mils (cmil, kcmil, MCM).
+    bool in_circular_mils(std::uint32_t node) const {
+        return syntax::search_subtree(file_, node, [&](std::uint32_t, const syntax::expr_node& n) {
+            if (n.kind != expr_kind::symbol)
+                return search_step::descend;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            return e != nullptr && (e->unit_text.find("cmil") != std::string_view::npos ||
+                                    e->unit_text.find("MCM") != std::string_view::npos)
+                       ? search_step::found
+                       : search_step::skip;
+        });
     }
 
     // 20.9 % or 21 % (20.95 % by volume, the US Standard Atmosphere's dry air, from memory).
