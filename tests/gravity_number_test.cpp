@@ -132,6 +132,14 @@ TEST_CASE("gravity as a number: 0.052 psi/ft per ppg in a mud hydrostatic") {
 
 // Feet and pounds: h = p/(ρ g) with ρ in lb/ft^3 and p in lbf/ft^2 needs g_c too; with p in psf
 // and ρ in slug/ft^3 the number is 32.2 ft/s² (g_n = 32.174 ft/s², NIST SP 811 App. B).
+TEST_CASE("gravity as a number: in 2*9.81 the 9.81 is g, not the 2 twice it") {
+    // h_v = V²/(2g) (common practice): the note marks the number that is g.
+    const auto r = run("h : m\nv : m/s\nh = v^2/(2*9.81)\n");
+    REQUIRE(count_of(r, plumb::rules::gravity_number) == 1);
+    CHECK(plumb::test::first_under(r, plumb::rules::gravity_number).message.find("'9.81'") !=
+          std::string::npos);
+}
+
 TEST_CASE("gravity as a number: twice a rounded g in a velocity head") {
     // h_v = V²/(2g) (common practice): 19.62 = 2 × 9.81 and 64.4 = 2 × 32.2, twice g rounded
     // as sheets round it, though 2·g_n is 19.613 and 64.348 (g_n = 9.80665 m/s², 3rd CGPM).

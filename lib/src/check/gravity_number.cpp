@@ -325,7 +325,7 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
         !std::isfinite(reference_scale))
         return std::nullopt;
     std::optional<gravity_reading> best;
-    std::tuple<bool, bool, double, bool> best_rank{};
+    std::tuple<bool, bool, bool, double, bool> best_rank{};
     for (std::size_t k = 0, tries = flipped_too ? 2 : 1; k < literals.size() * tries; ++k) {
         // The second pass reads each number as if written the other way round (Q*H*3960).
         const bool flipped = k >= literals.size();
@@ -388,9 +388,12 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     if (distance > rounding * (1.0 + 1e-9) ||
                         std::abs(number.value / nearest - 1.0) > closest_reading)
                         continue;
-                    // An unshifted reading first, then the closest; on a tie the number that
-                    // is the quantity itself (62.4 in p*144/62.4, not 144 as one over it).
-                    const auto rank = std::make_tuple(flipped, shifted, distance, reciprocal);
+                    // An unshifted reading first, then one that needs no other number taken as
+                    // a conversion (9.81 in v²/(2*9.81), not the 2 as twice g beside a 9.81
+                    // conversion), then the closest; on a tie the number that is the quantity
+                    // itself (62.4 in p*144/62.4, not 144 as one over it).
+                    const auto rank = std::make_tuple(flipped, shifted, mask != 0,
+                                                      distance / nearest, reciprocal);
                     if (best && rank >= best_rank)
                         continue;
                     best_rank = rank;
