@@ -170,6 +170,19 @@ TEST_CASE("the factor advised beside a whole number of four digits is exact") {
     CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "counts 3.6 times"));
 }
 
+TEST_CASE("a sum that is a side: the advice names the term not in the other side's unit") {
+    // A joist's line load w = q·s + g_sw (common practice) with q in Pa and w, g_sw in kN/m:
+    // the pressure term is 1000 times off whichever comes first.
+    const std::string joist = "w, g_sw : kN/m\nq : Pa\ns : m\n";
+    for (const char* formula : {"w = q*s + g_sw", "w = g_sw + q*s"}) {
+        CAPTURE(formula);
+        const auto r = run(joist, formula);
+        REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+        CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "divide 'q*s' by 1000"));
+    }
+    passes(joist, {"w = q*s/1000 + g_sw"});
+}
+
 TEST_CASE("kW beside W: the advice names the W term, not the one with a converted %") {
     // Input power from a shaft power and an efficiency in %, plus an auxiliary load in W (common
     // practice: P_in = P_s/(η/100) + P_aux): the % over 100 is a fraction, and the term off by

@@ -1901,6 +1901,7 @@ class checker {
     // The other side of the equation whose side is the sum at side_hint_node_.
     const typed_term* side_hint_ = nullptr;
     std::uint32_t side_hint_node_ = syntax::no_index;
+    const typed_term* sum_side_hint_ = nullptr; // while a side's sum is checked, the other side
     // The site's barometer where the file declares one: see declared_site_barometer.
     struct site_barometer {
         std::string_view name;
@@ -2606,9 +2607,12 @@ class checker {
         // After a unit-scale finding the scale is unknown (NaN), so it is not reported again
         // further up; the dimension stays known.
         double unit = 1.0;
+        // A sum that is a side of an equation: the other side says which term is off.
+        sum_side_hint_ = index == side_hint_node_ ? side_hint_ : nullptr;
         result.scale = check_scales(terms, "terms of this sum", unit, &result.exact_scale)
                            ? unit
                            : std::numeric_limits<double>::quiet_NaN();
+        sum_side_hint_ = nullptr;
         if (index == side_hint_node_) [[unlikely]]
             settle_rounded_side(result, literal_base);
         cut_literals_to(literal_base);
@@ -3992,6 +3996,17 @@ class checker {
              (dimensionless && cancels(r.odd) && !cancels(r.reference) &&
               !holds_percentage(ops[index[r.reference]].node))))
             std::swap(r.odd, r.reference);
+        // "w = q*s + g_sw" with w and g_sw in kN/m and q in Pa: the term in the other side's
+        // unit is right, whichever came first.
+        if (what.what.starts_with("terms") && parts.size() == 2 && sum_side_hint_ != nullptr &&
+            sum_side_hint_->known && sum_side_hint_->literal_count == 0 &&
+            std::isfinite(sum_side_hint_->scale) && sum_side_hint_->scale > 0) [[unlikely]] {
+            const auto in_side_unit = [&](std::size_t i) {
+                return std::abs(apparent_scale(parts[i]) / sum_side_hint_->scale - 1.0) < 1e-9;
+            };
+            if (in_side_unit(r.odd) && !in_side_unit(r.reference))
+                std::swap(r.odd, r.reference);
+        }
         const operand& op = ops[index[r.odd]];
         const operand& reference = ops[index[r.reference]];
         // What the numbers as written give: the conversion-like ones taken as conversions.
