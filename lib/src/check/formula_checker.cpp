@@ -5242,6 +5242,8 @@ class checker {
                                quote(node), unit.symbol, where),
                    file_.nodes[node].range);
         d.mark_label = fmt::format("on the {} scale, whose zero is arbitrary", unit.symbol);
+        if (where == "used in a quotient" && file_.nodes[node].kind != expr_kind::symbol)
+            note_bare_fit_on_scale(node);
         // "ΔT : °F": a difference declared in the scale's unit; the Δ unit says what is meant.
         if (file_.nodes[node].kind == expr_kind::symbol) {
             const std::string_view name = text(file_.nodes[node].range);
@@ -5706,9 +5708,7 @@ class checker {
     // "1730.63/(233.426 + t)" with t in °C: Antoine's fit (and Magnus's) typed with bare
     // constants, which are temperatures on the °C scale. Adding 273.15, as the gauge advice
     // says, would break the fit; saying the constants' units is the cure.
-    [[gnu::noinline]] void note_bare_fit_on_scale(std::uint32_t numerator,
-                                                  std::uint32_t denominator) {
-        const std::uint32_t top = syntax::inside_brackets(file_, numerator);
+    [[gnu::noinline]] void note_bare_fit_on_scale(std::uint32_t denominator) {
         const std::uint32_t below = syntax::inside_brackets(file_, denominator);
         const syntax::expr_node& sum = file_.nodes[below];
         if (sum.kind != expr_kind::add)
@@ -5720,21 +5720,17 @@ class checker {
         const std::uint32_t reading = shift == sum.lhs ? sum.rhs : sum.lhs;
         if (shift == syntax::no_index || file_.nodes[reading].kind != expr_kind::symbol)
             return;
-        const bool constant_on_top = file_.nodes[top].kind == expr_kind::number;
         const std::string fit =
             shift == sum.lhs
-                ? fmt::format("{}{{K}}/({} {{K}} + {})",
-                              constant_on_top ? display_text(file_.nodes[top].range) + " " : "B ",
-                              display_text(file_.nodes[shift].range),
+                ? fmt::format("B {{K}}/({} {{K}} + {})", display_text(file_.nodes[shift].range),
                               display_text(file_.nodes[reading].range))
-                : fmt::format("{}{{K}}/({} + {} {{K}})",
-                              constant_on_top ? display_text(file_.nodes[top].range) + " " : "B ",
-                              display_text(file_.nodes[reading].range),
+                : fmt::format("B {{K}}/({} + {} {{K}})", display_text(file_.nodes[reading].range),
                               display_text(file_.nodes[shift].range));
         out_.back().notes.insert(
             out_.back().notes.begin(),
             {fmt::format("if this is a fit made on the \u00B0C scale (Antoine's, Magnus's), its "
-                         "constants are temperatures: write {} to say so, and do not add 273.15",
+                         "constants are temperatures: write {}, B the fit's constant over it, to "
+                         "say so, and do not add 273.15",
                          fit),
              {}});
     }
@@ -6319,8 +6315,6 @@ class checker {
                                   divided ? "used in a quotient" : "multiplied",
                                   left_off ? (t.known ? &t.dim : nullptr)
                                            : (result.known ? &result.dim : nullptr));
-                    if (divided && !left_off) [[unlikely]]
-                        note_bare_fit_on_scale(op.lhs, op.rhs);
                     spine_.resize(spine_base);
                     result = unknown_type();
                     return result; // the one return object, built in place
