@@ -271,6 +271,25 @@ TEST_CASE("workbook parity: a unit in a column's heading that does not read is s
     CHECK(error_at(defined, "Rooms!B2"));
 }
 
+TEST_CASE("workbook parity: Hazen-Williams in SI with /1000 inside its powers") {
+    // h_f = 10.67·L·Q^1.852/(C^1.852·D^4.87) with Q in m³/s and D in m (common practice): typed
+    // with Q in L/s and D in mm, each over 1000 inside its power, the 1000s convert; they are
+    // no reference values, and no factor "not needed".
+    const check_report r = check_one_sheet(
+        "Main", sheet_of({
+                    {"30", "L/s"},                                                // B2
+                    {"150", "mm"},                                                // B3
+                    {"120", "-"},                                                 // B4
+                    {"500", "m"},                                                 // B5
+                    {"=10.67*B5*(B2/1000)^1.852/(B4^1.852*(B3/1000)^4.87)", "m"}, // B6
+                    {"=10.67*B5*(B2/1000)^1.852/(B4^1.852*B3^4.87)", "m"},        // B7
+                }));
+    CHECK(finding(r, "Main!B6", rules::unit_scale) == nullptr);
+    CHECK_FALSE(error_at(r, "Main!B6"));
+    // The bore left in mm is still an error.
+    CHECK(error_at(r, "Main!B7"));
+}
+
 TEST_CASE("workbook parity: the molar volume follows the cell's reference state") {
     // c = C·M/V_m, V_m = R·T/p = 22.414 L/mol at 0 °C and 101.325 kPa (CODATA 2018's R), the
     // normal cubic metre's state (DIN 1343); 24.45 is 25 °C's, 8.3 % off.

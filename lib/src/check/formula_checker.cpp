@@ -5675,8 +5675,15 @@ class checker {
             return false;
         const expr_kind a = file_.nodes[n.lhs].kind;
         const expr_kind b = file_.nodes[n.rhs].kind;
-        return (a == expr_kind::number && b == expr_kind::reference) ||
-               (a == expr_kind::reference && b == expr_kind::number);
+        const std::uint32_t number = a == expr_kind::number ? n.lhs : n.rhs;
+        if (!((a == expr_kind::number && b == expr_kind::reference) ||
+              (a == expr_kind::reference && b == expr_kind::number)))
+            return false;
+        // (Q/1000)^1.852 in Hazen-Williams with Q in L/s: a power of ten from a hundred up
+        // converts the cell's unit; it is no reference value (a wind profile's 10 m is).
+        const double v = written_number(file_.nodes[number].range);
+        const double decade = std::round(std::log10(v));
+        return !(v >= 100.0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12);
     }
 
     // "21/(21 - O2)" with O2 in %, the excess-air ratio from the flue gas's oxygen (common
