@@ -488,7 +488,9 @@ TEST_CASE("a resistance correction's brackets from the conductor's zero") {
 TEST_CASE("the Magnus fit solved for the dew point gives a °C reading") {
     const std::string decl = "γ_m, φ : 1\nt_dp, t_r : °C\n";
     passes(decl, {"γ_m = ln(φ) + 17.625*t_r/(243.04 {Δ°C} + t_r)",
-                  "t_dp = 243.04 {Δ°C}*γ_m/(17.625 - γ_m)"});
+                  "t_dp = 243.04 {Δ°C}*γ_m/(17.625 - γ_m)",
+                  // Over ice, a = 22.46 and b = 272.62 °C (WMO-No. 8, 2008, from memory).
+                  "t_dp = 272.62 {Δ°C}*γ_m/(22.46 - γ_m)"});
     fails_with(decl,
                {"t_dp = 243.04 {Δ°C}*γ_m", "t_dp = 100 {Δ°C}*γ_m/(17.625 - γ_m)",
                 "t_dp = 243.04 {Δ°C}*γ_m/(2 - γ_m)"},

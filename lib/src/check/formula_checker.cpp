@@ -4827,7 +4827,8 @@ class checker {
     // "t_dp = 243.04 {Δ°C}*γ/(17.625 - γ)": the Magnus fit solved for the temperature (the dew
     // point from γ = ln φ + 17.625·t/(243.04 + t), Alduchov and Eskridge 1996, from memory)
     // gives a reading on the °C scale the fit was made on, though its form is a difference
-    // times a ratio. Known by its constants: b from 235 to 260 °C and a from 17 to 18.
+    // times a ratio. Known by its constants: b from 235 to 260 °C and a from 17 to 18 over
+    // water, and over ice b = 272.62 °C with a = 22.46 (WMO-No. 8, 2008, Annex 4.B, from memory).
     bool magnus_solved_for_reading(const operand& o) const {
         if (!o.type.known || o.type.point || !(o.type.dim == temperature_dimension()))
             return false;
@@ -4837,14 +4838,14 @@ class checker {
             const syntax::expr_node& n = file_.nodes[at];
             if (n.kind == expr_kind::quantity && sign > 0) {
                 const double v = quantity_si_value(n);
-                b_constant = b_constant || (v >= 235.0 && v <= 260.0);
+                b_constant = b_constant || (v >= 235.0 && v <= 260.0) || (v >= 270.0 && v <= 275.0);
                 return false;
             }
             if ((n.kind == expr_kind::add || n.kind == expr_kind::subtract) && sign < 0) {
                 const std::uint32_t first = syntax::inside_brackets(file_, n.lhs);
                 if (n.kind == expr_kind::subtract && file_.nodes[first].kind == expr_kind::number) {
                     const double a = written_number(file_.nodes[first].range);
-                    a_over = a_over || (a >= 17.0 && a <= 18.0);
+                    a_over = a_over || (a >= 17.0 && a <= 18.0) || (a >= 22.0 && a <= 23.0);
                 }
                 return false;
             }
