@@ -113,6 +113,15 @@ TEST_CASE("a number in ratio with an absolute reading is read as a standard refe
     CHECK(note.level == plumb::severity::note);
 }
 
+TEST_CASE("the atmosphere added to an absolute reading converted by a factor") {
+    // psia = kPa/6.895 (NIST SP 811 (2008), B.8, rounded) for an absolute reading: adding 14.7
+    // counts the atmosphere twice, as p_kPa + 101.325 would; a column plus 14.7 is absolute.
+    const std::string blower = "p_2 : kPa \"discharge, absolute\"\np_x : psia\nh_f : ft\n";
+    CHECK(problems_in(run(blower, "p_x = p_2/6.895 + 14.7")) == 1);
+    passes(blower, {"p_x = p_2/6.895"});
+    passes(blower, {"p_x = 0.433*h_f + 14.7"}, 2);
+}
+
 TEST_CASE("a barometer in mbar over 1000 added to a bar g reading is a conversion") {
     // p_abs = p_g + p_b/1000 in bar with the barometer in mbar (EN 12405-1's volume conversion,
     // from memory; 1 bar = 1000 mbar, SI Brochure 9th ed., Table 8): the 1000 converts, and is

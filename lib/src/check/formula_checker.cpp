@@ -2034,6 +2034,14 @@ class checker {
         }
         if (atmosphere == count)
             return false;
+        // p_2/6.895 + 14.7 with p_2 an absolute reading in kPa: its atmosphere is in it already,
+        // and no column's pressure is there for the number to be added to.
+        for (std::size_t i = 0; i < count; ++i) {
+            const typed_term& t = operands_[base + i].type;
+            if (i != atmosphere && t.known && t.point && t.offset == nullptr &&
+                !t.absolute_pressure_difference && t.dim == pressure)
+                return false;
+        }
         // Kept to undo the readings.
         std::array<typed_term, most_terms> saved_types;
         for (std::size_t i = 0; i < count; ++i)
