@@ -5044,18 +5044,12 @@ class checker {
     bool read_local_atmosphere(const operand& sum) {
         std::uint32_t k = sum.node;
         k = syntax::inside_brackets(file_, k);
-        const syntax::expr_node& n = file_.nodes[k];
-        if (n.kind != expr_kind::add || !std::isfinite(sum.type.scale))
-            return false;
-        const std::uint32_t number = file_.nodes[n.rhs].kind == expr_kind::number ? n.rhs
-                                     : file_.nodes[n.lhs].kind == expr_kind::number
-                                         ? n.lhs
-                                         : syntax::no_index;
         // Beside the gauge symbol alone, so that the number is in the symbol's unit (in
         // 6.895*p_g + 14.7 the sum is in kPa, and 14.7 kPa no atmosphere).
-        const std::uint32_t reading = number == n.rhs ? n.lhs : n.rhs;
-        if (number == syntax::no_index || file_.nodes[reading].kind != expr_kind::symbol)
+        const auto parts = number_beside_symbol(k);
+        if (!parts || !std::isfinite(sum.type.scale))
             return false;
+        const std::uint32_t number = parts->first;
         const double pressure = written_number(file_.nodes[number].range) * sum.type.scale;
         if (!(pressure >= highest_site_atmosphere * standard_atmosphere &&
               pressure <= 1.005 * standard_atmosphere))
@@ -5721,23 +5715,33 @@ class checker {
         }
     }
 
+    // "233.426 + t", "p_g + 92.1": a sum of a number and a symbol, in either order, as the
+    // number's node and the symbol's; empty for any other node.
+    std::optional<std::pair<std::uint32_t, std::uint32_t>>
+    number_beside_symbol(std::uint32_t k) const {
+        const syntax::expr_node& n = file_.nodes[k];
+        if (n.kind != expr_kind::add)
+            return std::nullopt;
+        if (file_.nodes[n.lhs].kind == expr_kind::number &&
+            file_.nodes[n.rhs].kind == expr_kind::symbol)
+            return std::pair{n.lhs, n.rhs};
+        if (file_.nodes[n.rhs].kind == expr_kind::number &&
+            file_.nodes[n.lhs].kind == expr_kind::symbol)
+            return std::pair{n.rhs, n.lhs};
+        return std::nullopt;
+    }
+
     // "1730.63/(233.426 + t)" with t in °C: Antoine's fit (and Magnus's) typed with bare
     // constants, which are temperatures on the °C scale. Adding 273.15, as the gauge advice
     // says, would break the fit; saying the constants' units is the cure.
     [[gnu::noinline]] void note_bare_fit_on_scale(std::uint32_t denominator) {
         const std::uint32_t below = syntax::inside_brackets(file_, denominator);
-        const syntax::expr_node& sum = file_.nodes[below];
-        if (sum.kind != expr_kind::add)
+        const auto parts = number_beside_symbol(below);
+        if (!parts)
             return;
-        const std::uint32_t shift = file_.nodes[sum.lhs].kind == expr_kind::number ? sum.lhs
-                                    : file_.nodes[sum.rhs].kind == expr_kind::number
-                                        ? sum.rhs
-                                        : syntax::no_index;
-        const std::uint32_t reading = shift == sum.lhs ? sum.rhs : sum.lhs;
-        if (shift == syntax::no_index || file_.nodes[reading].kind != expr_kind::symbol)
-            return;
+        const auto [shift, reading] = *parts;
         const std::string fit =
-            shift == sum.lhs
+            shift == file_.nodes[below].lhs
                 ? fmt::format("B {{K}}/({} {{K}} + {})", display_text(file_.nodes[shift].range),
                               display_text(file_.nodes[reading].range))
                 : fmt::format("B {{K}}/({} + {} {{K}})", display_text(file_.nodes[reading].range),
