@@ -393,7 +393,9 @@ TEST_CASE("a gas's velocity from a flow at reference conditions") {
     // DIN 1343) is some 2.3 times smaller than the actual flow of a 350 °C off-gas.
     const std::string duct = "Q_n : Nm3/h\nQ_a : m^3/h\nA_d : m^2\nD : m\nV_d : m/s\n"
                              "T : K\nT_n : K = 273.15\np_n, p : kPa\n";
-    fails_with(duct, {"V_d = Q_n/(3600*A_d)", "V_d = 4*Q_n/(3600*pi*D^2)"},
+    fails_with(duct + "D_mm : mm\n",
+               {"V_d = Q_n/(3600*A_d)", "V_d = 4*Q_n/(3600*pi*D^2)",
+                "V_d = Q_n/(3600*pi/4*(D_mm/1000)^2)"},
                plumb::rules::unit_scale);
     passes(duct, {"V_d = Q_a/(3600*A_d)", "V_d = Q_n*T/T_n/(3600*A_d)",
                   "V_d = Q_n*(p_n/p)*(T/T_n)/(3600*A_d)", "V_d = 4*Q_a/(3600*pi*D^2)"});

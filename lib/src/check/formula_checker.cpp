@@ -1460,10 +1460,20 @@ class checker {
                              !(plain_conversion_number(at) || (circle && (v == 4.0 || v == 2.0)));
                 return false;
             }
-            // D^2: a power of a symbol is read as the symbol.
-            const std::uint32_t base =
-                n.kind == expr_kind::power && file_.nodes[n.lhs].kind == expr_kind::symbol ? n.lhs
-                                                                                           : at;
+            // D^2, (D_mm/1000)^2: a power of a symbol, or of a symbol over a conversion, is
+            // read as the symbol.
+            std::uint32_t base = at;
+            if (n.kind == expr_kind::power) {
+                const std::uint32_t inner = syntax::inside_brackets(file_, n.lhs);
+                const syntax::expr_node& in = file_.nodes[inner];
+                if (in.kind == expr_kind::symbol)
+                    base = inner;
+                else if ((in.kind == expr_kind::divide || in.kind == expr_kind::multiply) &&
+                         file_.nodes[in.lhs].kind == expr_kind::symbol &&
+                         file_.nodes[in.rhs].kind == expr_kind::number &&
+                         plain_conversion_number(in.rhs))
+                    base = in.lhs;
+            }
             if (file_.nodes[base].kind != expr_kind::symbol) {
                 correction = correction || n.kind != expr_kind::pi;
                 return false;
