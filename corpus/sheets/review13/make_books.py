@@ -1,7 +1,6 @@
 #!/usr/bin/env python3
 """Four independent review workbooks for plumb's workbook checking (review52), written with the
-standard zipfile module (xlsx_writer.py, copied from corpus/sheets/review2 and extended with
-ROUND, ROUNDUP and VLOOKUP).
+standard zipfile module (corpus/sheets/xlsx_writer.py, shared by the review books).
 
 Trades: a chill-room refrigeration load; a hot water boiler plant; a fire sprinkler hydraulic
 calculation; a crude oil tank farm inventory. All scenarios, sites and catalogue data are
@@ -17,7 +16,9 @@ import json
 import os
 import re
 
-from xlsx_writer import write_xlsx
+import sys
+sys.path.insert(0, os.path.dirname(os.path.dirname(os.path.abspath(__file__))))
+from xlsx_writer import write_xlsx  # noqa: E402 (the shared writer in corpus/sheets)
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 

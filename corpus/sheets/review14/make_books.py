@@ -1,7 +1,6 @@
 #!/usr/bin/env python3
 """Four independent review workbooks for plumb's workbook checking (review57), written with the
-standard zipfile module (xlsx_writer.py, copied from corpus/sheets/review13 and extended with
-LOG10, SIN and VLOOKUP's approximate match).
+standard zipfile module (corpus/sheets/xlsx_writer.py, shared by the review books).
 
 Trades: a warehouse's rainwater harvesting and reuse; a boiler's flue-gas analysis and
 efficiency by the Siegert formula; a pump's system curve; a mobile crane's lift plan. All
@@ -22,7 +21,9 @@ import json
 import os
 import re
 
-from xlsx_writer import write_xlsx
+import sys
+sys.path.insert(0, os.path.dirname(os.path.dirname(os.path.abspath(__file__))))
+from xlsx_writer import write_xlsx  # noqa: E402 (the shared writer in corpus/sheets)
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 

@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
 """Four independent review workbooks for plumb's workbook checking (review58), written with the
-standard zipfile module (xlsx_writer.py, copied unchanged from corpus/sheets/review13).
+standard zipfile module (corpus/sheets/xlsx_writer.py, shared by the review books).
 
 Trades: a farm's irrigation schedule; an LED lighting retrofit; a ground-source heat pump's
 borehole field; a bolted steel beam splice schedule. All scenarios, sites, catalogue data and
@@ -21,7 +21,9 @@ import json
 import os
 import re
 
-from xlsx_writer import write_xlsx
+import sys
+sys.path.insert(0, os.path.dirname(os.path.dirname(os.path.abspath(__file__))))
+from xlsx_writer import write_xlsx  # noqa: E402 (the shared writer in corpus/sheets)
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 

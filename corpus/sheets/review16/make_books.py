@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
 """Four review workbooks for plumb's workbook checking (review63), written with the standard
-zipfile module (xlsx_writer.py, copied from corpus/sheets/review13 and extended with AND/OR).
+zipfile module (corpus/sheets/xlsx_writer.py, shared by the review books).
 
 Trades: a boiler's stack emissions report; a gas pressure-reducing and metering station's flow
 correction to reference conditions; a shell-and-tube heat exchanger rating sheet; an elevator
@@ -21,7 +21,9 @@ import json
 import os
 import re
 
-from xlsx_writer import write_xlsx
+import sys
+sys.path.insert(0, os.path.dirname(os.path.dirname(os.path.abspath(__file__))))
+from xlsx_writer import write_xlsx  # noqa: E402 (the shared writer in corpus/sheets)
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 

@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
 """Four independent review workbooks for plumb's workbook checking (review64), written with the
-standard zipfile module (xlsx_writer.py, copied from corpus/sheets/review13 and given LOG10).
+standard zipfile module (corpus/sheets/xlsx_writer.py, shared by the review books).
 Adapted from review13's make_books.py: same ItemSheet helper, new trades and new books.
 
 Trades: a district heating network's pipe schedule; a fire water tank and diesel fire pump
@@ -22,7 +22,9 @@ import json
 import os
 import re
 
-from xlsx_writer import write_xlsx
+import sys
+sys.path.insert(0, os.path.dirname(os.path.dirname(os.path.abspath(__file__))))
+from xlsx_writer import write_xlsx  # noqa: E402 (the shared writer in corpus/sheets)
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 

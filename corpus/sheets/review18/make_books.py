@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
 """Four independent review workbooks for plumb's workbook checking (review69), written with the
-standard zipfile module (xlsx_writer.py, copied from corpus/sheets/review13).
+standard zipfile module (corpus/sheets/xlsx_writer.py, shared by the review books).
 
 Trades: a pharmaceutical HVAC room schedule (m³/h and cfm, Pa and in. w.c.); a cooling tower
 make-up and blowdown sheet (m³/h and gpm, µS/cm, mg/L, drift %); a biogas plant's gas yield
@@ -22,7 +22,9 @@ import json
 import os
 import re
 
-from xlsx_writer import write_xlsx
+import sys
+sys.path.insert(0, os.path.dirname(os.path.dirname(os.path.abspath(__file__))))
+from xlsx_writer import write_xlsx  # noqa: E402 (the shared writer in corpus/sheets)
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 

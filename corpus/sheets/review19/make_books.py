@@ -1,7 +1,6 @@
 #!/usr/bin/env python3
 """Four independent review workbooks for plumb's workbook checking (review70), written with the
-standard zipfile module (xlsx_writer.py, copied from corpus/sheets/review13 and extended with
-SUMPRODUCT).
+standard zipfile module (corpus/sheets/xlsx_writer.py, shared by the review books).
 
 Trades: a run-of-river hydropower plant's energy sheet; a steel floor beam schedule with a US
 check; a natural gas transmission line's line pack and pressure sheet; a wastewater lift
@@ -23,7 +22,9 @@ import json
 import os
 import re
 
-from xlsx_writer import write_xlsx
+import sys
+sys.path.insert(0, os.path.dirname(os.path.dirname(os.path.abspath(__file__))))
+from xlsx_writer import write_xlsx  # noqa: E402 (the shared writer in corpus/sheets)
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 CAUTION = ("Invented scenario, data for demonstration only. A dimensionally consistent formula can "

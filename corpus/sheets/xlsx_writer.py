@@ -1,8 +1,10 @@
-"""A minimal .xlsx writer (standard zipfile) with a small formula evaluator for cached values.
+"""A minimal .xlsx writer (standard zipfile) with a small formula evaluator for cached values,
+shared by the review books' make_books.py scripts (review13 on; earlier folders keep their own
+copies).
 
-Adapted from the first review's make_books.py: adds defined names, AVERAGE, IF, MIN/MAX over
-ranges and string results. This copy (review52) adds ROUND, ROUNDUP and VLOOKUP over a
-two-dimensional range, and TRUE/FALSE. This copy (review64) adds LOG10.
+Defined names, AVERAGE, IF, MIN/MAX/SUM over ranges, string results, ROUND, ROUNDUP, VLOOKUP
+over a two-dimensional range with Excel's approximate match by default (the last row whose key
+is not greater than the value), TRUE/FALSE, LOG10, SIN, AND, OR and SUMPRODUCT.
 """
 import math
 import re
@@ -87,6 +89,14 @@ class Evaluator:
             return out
 
         def vlookup(key, table, col, approx=True):
+            if approx:
+                hit = None
+                for row in table.rows:
+                    if row[0] <= key:
+                        hit = row
+                if hit is None:
+                    raise ValueError(f"VLOOKUP: {key!r} below the table")
+                return hit[col - 1]
             for row in table.rows:
                 if row[0] == key:
                     return row[col - 1]
@@ -102,8 +112,10 @@ class Evaluator:
 
         env = {
             "_v": self.value, "_r": rng, "VLOOKUP": vlookup, "ROUND": round_half_away,
-            "ROUNDUP": round_up, "TRUE": True, "FALSE": False, "PI": lambda: math.pi, "SQRT": math.sqrt, "LN": math.log, "LOG10": math.log10,
+            "ROUNDUP": round_up, "TRUE": True, "FALSE": False, "PI": lambda: math.pi, "SQRT": math.sqrt, "LN": math.log,
             "EXP": math.exp, "ABS": abs, "RADIANS": math.radians, "COS": math.cos,
+            "SIN": math.sin, "LOG10": math.log10, "AND": lambda *a: all(a), "OR": lambda *a: any(a),
+            "SUMPRODUCT": lambda a, b: sum(x * y for x, y in zip(a, b)),
             "MIN": lambda *a: min(flatten(a)), "MAX": lambda *a: max(flatten(a)),
             "SUM": lambda *a: sum(flatten(a)),
             "AVERAGE": lambda *a: sum(flatten(a)) / len(flatten(a)),
