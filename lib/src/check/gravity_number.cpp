@@ -21,6 +21,10 @@ constexpr double closest_reading = 0.005;
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
 
+// Rows of the table below that rules ask for by name.
+constexpr std::size_t twice_gravity_row = 1;
+constexpr std::size_t molar_volume_row = 6;
+
 const std::array<carried_quantity, 16>& quantities() {
     static const std::array<carried_quantity, 16> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
@@ -229,7 +233,7 @@ std::string_view advice_in_cell_for(std::string_view advice_in_notation) {
 }
 
 bool is_molar_volume(const carried_quantity& q) {
-    return &q == &quantities()[6];
+    return &q == &quantities()[molar_volume_row];
 }
 
 std::optional<molar_volume_mismatch> molar_volume_off_reference(const gravity_reading& reading,
@@ -382,9 +386,10 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // 19.62 and 64.4 are twice a rounded g (9.81, 32.2; common practice in
                     // V²/(2g)): where the last digit is even, half the number has the same
                     // digits, and rounds g to them. (19.7's half, 9.85, rounds no g.)
-                    const double rounding = &q == &quantities()[1] && even_last_digit(texts[at])
-                                                ? 2.0 * half_unit
-                                                : half_unit;
+                    const double rounding =
+                        &q == &quantities()[twice_gravity_row] && even_last_digit(texts[at])
+                            ? 2.0 * half_unit
+                            : half_unit;
                     if (distance > rounding * (1.0 + 1e-9) ||
                         std::abs(number.value / nearest - 1.0) > closest_reading)
                         continue;
