@@ -788,25 +788,6 @@ class workbook_checker {
             return false;
         const std::uint32_t node = factors[reading->literal].node;
         const std::string_view number = texts[reading->literal];
-        // =C11*C15/24.45 under mg/Nm³: the molar volume at 25 °C on a 0 °C basis.
-        if (is_molar_volume(*reading->quantity))
-            if (const auto state = reference_volume_in(written.unit.text))
-                if (const auto off = molar_volume_off_reference(
-                        *reading, factors[reading->literal].value,
-                        factors[reading->literal].exponent > 0, state->kelvins)) {
-                    diagnostic& d = report(
-                        severity::error, rules::unit_scale,
-                        molar_volume_message(
-                            fmt::format("'{}'", number), *reading, *off,
-                            fmt::format("of the cell's unit, {},", written.unit.text), state->name),
-                        lowered_.tree.nodes[node].range);
-                    d.notes.push_back({molar_volume_advice(*off), {}});
-                    computed.dim = written.unit.dim;
-                    computed.scale = reading->term_scale;
-                    computed.exact_scale.reset();
-                    factors.erase(factors.begin() + static_cast<std::ptrdiff_t>(reading->literal));
-                    return true;
-                }
         computed.dim = written.unit.dim;
         computed.scale = reading->term_scale;
         computed.exact_scale.reset();
