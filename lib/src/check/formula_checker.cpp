@@ -2,6 +2,7 @@
 // terms of a sum, the sides of a formula, function arguments and exponents.
 #include "check/formula_checker.hpp"
 
+#include "check/constant_in_other_units.hpp"
 #include "check/edit_distance.hpp"
 #include "check/functions.hpp"
 #include "check/gravity_number.hpp"
@@ -697,7 +698,8 @@ class checker {
                                true});
         }
         note_bare_number_side(d, sides);
-        if (!note_gravity_in_other_units(d, sides, a))
+        if (!note_gravity_in_other_units(d, sides, a) &&
+            !note_constant_for_other_units(d, sides, a))
             note_acceleration_apart(d, sides, a);
         note_bare_quantity_apart(d, sides, a);
     }
@@ -1752,26 +1754,149 @@ class checker {
     // generated sum of 400,000 terms gets the finding without them, in linear time.
     static constexpr std::size_t notes_for_terms_up_to = 16;
 
+    // The first term of the reference's dimension that is plainly in its unit: no numbers.
+    const operand* plain_reference_term(std::span<const operand> ops, const agreement& a) const {
+        if (!a.reference || ops.size() > notes_for_terms_up_to)
+            return nullptr;
+        for (std::size_t i = 0; i < ops.size(); ++i) {
+            const typed_term& t = ops[i].type;
+            if (std::find(a.odd.begin(), a.odd.end(), i) == a.odd.end() && t.known && !t.zero &&
+                !t.numeric && t.dim == *a.reference && t.literal_count == 0 &&
+                std::isfinite(t.scale) && t.scale > 0)
+                return &ops[i];
+        }
+        return nullptr;
+    }
+
+    // A symbol, a cell, or a sum or difference of two symbols in one unit ("(h_o + z_b)" in ft,
+    // "(t_s - t_o)" in °C, a difference of kelvin size), with the unit it is declared in. Asked
+    // only of a term with no offset, where every reading in it is a difference.
+    std::optional<declared_factor> declared_factor_of(std::uint32_t k, double exponent) const {
+        const syntax::expr_node& n = file_.nodes[k];
+        if (n.kind == expr_kind::subtract || n.kind == expr_kind::add) {
+            const syntax::expr_node& l = file_.nodes[syntax::inside_brackets(file_, n.lhs)];
+            const syntax::expr_node& r = file_.nodes[syntax::inside_brackets(file_, n.rhs)];
+            if (l.kind != expr_kind::symbol || r.kind != expr_kind::symbol)
+                return std::nullopt;
+            const symbol_entry* a = symbols_.find(text(l.range));
+            const symbol_entry* b = symbols_.find(text(r.range));
+            if (a == nullptr || b == nullptr || !a->compact_dim || a->unit_text != b->unit_text)
+                return std::nullopt;
+            return declared_factor{*a->compact_dim, a->si_factor, exponent, a->unit_text};
+        }
+        if (n.kind == expr_kind::symbol) {
+            const symbol_entry* e = symbols_.find(text(n.range));
+            // In a term with no offset a symbol in °C is a difference, of kelvin size.
+            if (e == nullptr || !e->compact_dim)
+                return std::nullopt;
+            return declared_factor{*e->compact_dim, e->si_factor, exponent, e->unit_text};
+        }
+        if (n.kind == expr_kind::reference) {
+            const syntax::reference_value& cell = file_.references[n.lhs];
+            if (!cell.dim || cell.offset != nullptr)
+                return std::nullopt;
+            const auto dim = compact_dimension::fitted(*cell.dim);
+            if (!dim)
+                return std::nullopt;
+            return declared_factor{*dim, cell.scale, exponent, {}};
+        }
+        return std::nullopt;
+    }
+
+    // A trade's constant typed for one unit system beside a symbol declared in the other's
+    // (check/constant_in_other_units.hpp). In "0.433*h_m + p_psi" the term with the number is
+    // the majority's, so every term with numbers is tried against the first plain term of
+    // another dimension.
+    [[gnu::noinline]] bool
+    note_constant_for_other_units(diagnostic& d, std::span<const operand> ops, const agreement& a) {
+        if (!a.reference || ops.size() > notes_for_terms_up_to)
+            return false;
+        for (std::size_t i = 0; i < ops.size(); ++i) {
+            const typed_term& t = ops[i].type;
+            std::array<std::string_view, 8> texts{};
+            if (!t.known || t.numeric || t.offset != nullptr || t.literal_count == 0 ||
+                t.literal_count > texts.size() || !std::isfinite(t.scale) || !(t.scale > 0))
+                continue;
+            const auto plain = std::find_if(ops.begin(), ops.end(), [&](const operand& o) {
+                return o.type.known && !o.type.zero && !o.type.numeric &&
+                       o.type.literal_count == 0 && o.type.offset == nullptr &&
+                       std::isfinite(o.type.scale) && o.type.scale > 0 && !(o.type.dim == t.dim);
+            });
+            if (plain == ops.end())
+                continue;
+            const operand* reference = &*plain;
+            dimension lacking;
+            try {
+                lacking = (reference->type.dim / t.dim).expand();
+            } catch (const std::exception&) {
+                continue;
+            }
+            const std::span<const scale_literal> numbers(literals_.data() + t.literal_begin,
+                                                         t.literal_count);
+            for (std::size_t k = 0; k < numbers.size(); ++k)
+                texts[k] = text(file_.nodes[numbers[k].node].range);
+            std::array<declared_factor, 8> factors{};
+            std::array<std::uint32_t, 8> factor_nodes{};
+            std::size_t factor_count = 0;
+            // Every factor but the numbers must be one the search can weigh: a factor it
+            // cannot (a function's value, a sum) might hold the unit that is off, and a
+            // reading that passed it by would name the wrong symbol.
+            bool unweighed = false;
+            for_each_factor(ops[i].node, [&](std::uint32_t at, int sign) {
+                const syntax::expr_node& n = file_.nodes[at];
+                if (n.kind == expr_kind::number || n.kind == expr_kind::pi)
+                    return false;
+                std::uint32_t base = at;
+                double exponent = sign;
+                if (n.kind == expr_kind::power) {
+                    base = syntax::inside_brackets(file_, n.lhs);
+                    if (file_.nodes[n.rhs].kind != expr_kind::number)
+                        return unweighed = true;
+                    exponent = sign * written_number(file_.nodes[n.rhs].range);
+                }
+                const std::optional<declared_factor> factor = declared_factor_of(base, exponent);
+                if (!factor)
+                    return unweighed = true;
+                factor_nodes[factor_count] = base;
+                factors[factor_count++] = *factor;
+                return unweighed = factor_count == factors.size();
+            });
+            if (unweighed)
+                continue;
+            // "u_psi = 62.4*h_ft": the number fits where the result's unit is the other one.
+            if (factor_count < factors.size()) {
+                const std::uint32_t plain_node = syntax::inside_brackets(file_, reference->node);
+                if (const auto factor = declared_factor_of(plain_node, -1.0)) {
+                    factor_nodes[factor_count] = plain_node;
+                    factors[factor_count++] = *factor;
+                }
+            }
+            const auto found = read_constant_in_other_units(
+                t.scale, reference->type.scale, numbers, {texts.data(), numbers.size()}, lacking,
+                kind_of(t), {factors.data(), factor_count});
+            if (!found)
+                continue;
+            d.notes.push_back(
+                {constant_in_other_units_message(
+                     quote(numbers[found->reading.literal].node),
+                     fmt::format("'{}'",
+                                 display_text(file_.nodes[factor_nodes[found->factor]].range)),
+                     *found),
+                 {}});
+            return true;
+        }
+        return false;
+    }
+
     // "u = 9.81*z_ft": standard gravity written for metres and seconds in a term whose units are
     // feet (or 32.2 beside metres). The dimensions show a missing acceleration, but the
     // acceleration is there: the slip is the units around it, which this note names.
     bool note_gravity_in_other_units(diagnostic& d, std::span<const operand> ops,
                                      const agreement& a) {
-        if (!a.reference || ops.size() > notes_for_terms_up_to)
-            return false;
-        double reference_scale = std::numeric_limits<double>::quiet_NaN();
-        const operand* reference = nullptr;
-        for (std::size_t i = 0; i < ops.size() && reference == nullptr; ++i) {
-            const typed_term& t = ops[i].type;
-            if (std::find(a.odd.begin(), a.odd.end(), i) == a.odd.end() && t.known && !t.zero &&
-                !t.numeric && t.dim == *a.reference && t.literal_count == 0 &&
-                std::isfinite(t.scale)) {
-                reference_scale = t.scale;
-                reference = &ops[i];
-            }
-        }
+        const operand* reference = plain_reference_term(ops, a);
         if (reference == nullptr)
             return false;
+        const double reference_scale = reference->type.scale;
         struct gravity_unit {
             const char* name;
             const char* system;
@@ -2111,6 +2236,16 @@ class checker {
         return true;
     }
 
+    // The air's density in a total load, 4.5·cfm·Δh or 1.2·(L/s)·Δh, as in its moisture.
+    static carried_quantity::term_kind kind_of(const typed_term& t) {
+        using term_kind = carried_quantity::term_kind;
+        return t.numeric ? term_kind::any
+               : t.dim == volume_flow_dimension() || t.dim == volume_flow_enthalpy_dim
+                   ? term_kind::volume_flow
+               : t.dim == velocity_squared_dimension() ? term_kind::velocity_squared
+                                                       : term_kind::any;
+    }
+
     // As read_gravity_numbers, and where that fails because the number stands in the terms that
     // make the majority ("0.433*h_s + p_t": one term each way, the first taken as reference),
     // read them against the dimension of the first plain term that differs instead.
@@ -2203,17 +2338,9 @@ class checker {
             }
             if (!any_fits)
                 return false;
-            using term_kind = carried_quantity::term_kind;
-            // The air's density in a total load, 4.5·cfm·Δh or 1.2·(L/s)·Δh, as in its moisture.
-            const term_kind kind =
-                t.numeric ? term_kind::any
-                : t.dim == volume_flow_dimension() || t.dim == volume_flow_enthalpy_dim
-                    ? term_kind::volume_flow
-                : t.dim == velocity_squared_dimension() ? term_kind::velocity_squared
-                                                        : term_kind::any;
             const auto reading =
                 read_gravity_number(t.scale, reference_scale, numbers,
-                                    {texts.data(), numbers.size()}, lacking, true, kind);
+                                    {texts.data(), numbers.size()}, lacking, true, kind_of(t));
             if (!reading)
                 return false;
             readings[found_count++] = {i, *reading};
@@ -2591,7 +2718,8 @@ class checker {
             explain(d, terms, a, "terms");
             note_atmosphere_in_another_unit(d, terms, a);
             note_scale_zero_beside_difference(d, terms, a);
-            if (!note_gravity_in_other_units(d, terms, a))
+            if (!note_gravity_in_other_units(d, terms, a) &&
+                !note_constant_for_other_units(d, terms, a))
                 note_acceleration_apart(d, terms, a);
             cut_literals_to(literal_base);
             result = unknown_type();

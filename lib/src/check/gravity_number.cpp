@@ -406,8 +406,9 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // reference up to the conversions and the power of ten.
                     const double si_value = nearest * power_of_ten / in_units;
                     best = gravity_reading{
-                        at,      &q,  reciprocal, flipped,
-                        nearest, low, high,       term_scale * std::pow(si_value / nearest, x)};
+                        at,      &q,      reciprocal,
+                        flipped, shifted, nearest,
+                        low,     high,    term_scale * std::pow(si_value / nearest, x)};
                 }
             }
         }

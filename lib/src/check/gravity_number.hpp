@@ -43,6 +43,7 @@ struct gravity_reading {
     const carried_quantity* quantity = nullptr;
     bool reciprocal = false; // the number is one over the quantity (2.31 ft/psi, 3960)
     bool flipped = false;    // read only as if written the other way round: an error
+    bool shifted = false;    // read only in a unit a power of ten away (9.81 beside kPa)
     double stands_for = 0.0; // the quantity in the units around it: the value it rounds
     double least = 0.0;      // the range the quantity takes in those units
     double greatest = 0.0;

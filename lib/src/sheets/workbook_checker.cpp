@@ -5,6 +5,7 @@
 
 #include "model/difference_name.hpp"
 
+#include "check/constant_in_other_units.hpp"
 #include "check/formula_checker.hpp"
 #include "check/gravity_number.hpp"
 #include "check/scale_match.hpp"
@@ -798,6 +799,81 @@ class workbook_checker {
         return true;
     }
 
+    // =B2*B3/3960 with B3 in m (check/constant_in_other_units.hpp): once the number is no
+    // quantity in the units around it, say which unit it was written for. Every factor of the
+    // outermost product must be a cell or a number, the cell's own unit weighed with them.
+    void note_constant_in_other_units(diagnostic& d, const value_type& computed,
+                                      const cell_unit& written,
+                                      const std::vector<scale_literal>& factors,
+                                      std::uint32_t root) const {
+        if (factors.empty() || factors.size() > 8 || computed.offset != nullptr ||
+            written.unit.offset != nullptr || !(computed.scale > 0) ||
+            !std::isfinite(computed.scale))
+            return;
+        dimension lacking;
+        std::optional<compact_dimension> written_dim;
+        try {
+            lacking = written.unit.dim / computed.dim;
+            written_dim = compact_dimension::fitted(written.unit.dim);
+        } catch (const std::exception&) {
+            return;
+        }
+        if (!written_dim)
+            return;
+        std::array<std::string_view, 8> texts{};
+        for (std::size_t k = 0; k < factors.size(); ++k)
+            texts[k] = listing_->text(lowered_.tree.nodes[factors[k].node].range);
+        std::array<declared_factor, 8> cells{};
+        std::array<std::string, 8> names{};
+        std::size_t count = 0;
+        std::vector<std::pair<std::uint32_t, double>> pending{{root, 1.0}};
+        while (!pending.empty()) {
+            const auto [node, exponent] = pending.back();
+            pending.pop_back();
+            const auto& n = lowered_.tree.nodes[node];
+            switch (n.kind) {
+            case syntax::expr_kind::group:
+                pending.emplace_back(n.lhs, exponent);
+                break;
+            case syntax::expr_kind::multiply:
+            case syntax::expr_kind::divide:
+                pending.emplace_back(n.rhs,
+                                     n.kind == syntax::expr_kind::divide ? -exponent : exponent);
+                pending.emplace_back(n.lhs, exponent);
+                break;
+            case syntax::expr_kind::number:
+                break;
+            case syntax::expr_kind::reference: {
+                const syntax::reference_value& cell = lowered_.tree.references[n.lhs];
+                // With the result on no scale, a cell in °C or °F here is a difference.
+                if (!cell.dim || count + 1 == cells.size())
+                    return;
+                const auto dim = compact_dimension::fitted(*cell.dim);
+                if (!dim)
+                    return;
+                names[count] = fmt::format("'{}'", listing_->text(n.range));
+                cells[count++] = {*dim, cell.scale, exponent,
+                                  cell.offset != nullptr ? cell.offset->symbol
+                                                         : std::string_view{}};
+                break;
+            }
+            default:
+                return; // a function's value or a sum might hold the unit that is off
+            }
+        }
+        names[count] = "the result";
+        cells[count++] = {*written_dim, written.unit.scale, -1.0, written.unit.text};
+        const auto found = read_constant_in_other_units(
+            computed.scale, written.unit.scale, factors, {texts.data(), factors.size()}, lacking,
+            carried_quantity::term_kind::any, {cells.data(), count});
+        if (!found)
+            return;
+        d.notes.push_back(
+            {constant_in_other_units_message(fmt::format("'{}'", texts[found->reading.literal]),
+                                             names[found->factor], *found),
+             {}});
+    }
+
     void compare_with_written(const formula_cell& f, const syntax::formula& formula,
                               value_type computed, const cell_unit& written) {
         // "=55" or "=IF(C18<=55,55,75)" beside kW (a motor size picked from a list): numbers
@@ -824,6 +900,8 @@ class workbook_checker {
                                {}});
             add_input_notes(d, f);
             note_ton_of_refrigeration(d, computed.dim, written);
+            note_constant_in_other_units(d, computed, written, factors,
+                                         lowered_.tree.sides[formula.first_side].root);
             return;
         }
         const bool uses_offset_values = [&] {
