@@ -65,6 +65,20 @@ TEST_CASE("a two-digit number holding a conversion and the formula's 2, and Dupu
     fails_with(well, {"Q = K*(H_m^2 - h^2)/(1055*log10(R/r))"}, plumb::rules::unit_scale);
 }
 
+// A half or a 2 folds into a conversion only where the formula can hold one: the hoop stress
+// σ = p·D/(2t) in MPa from bar (20 = 2 × 10; Roark's Formulas for Stress and Strain, 7th ed.,
+// table 13.1) passes with its note. A flow has no half: 0.8494 is half of 1.699 m³/h per cfm
+// (60 min/h × 0.028317 m³/ft³, NIST SP 811 (2008), B.8), a slip that must stay a finding.
+TEST_CASE("a formula's own half folds into a conversion only where the formula holds one") {
+    const std::string vessel = "p : bar\nD, t : mm\nσ : MPa\n";
+    const auto hoop = run(vessel, "σ = p*D/(20*t)");
+    CHECK(plumb::test::problems_in(hoop) == 0);
+    CHECK(count_of(hoop, plumb::rules::trade_constant) == 1);
+    const std::string pump = "S_cfm : cfm\nS_m : m^3/h\n";
+    CHECK(plumb::test::problems_in(run(pump, "S_m = 1.699*S_cfm")) == 0);
+    fails_with(pump, {"S_m = 0.8494*S_cfm", "S_m = 3.398*S_cfm"}, plumb::rules::unit_scale);
+}
+
 // Advice beside the formula's own small coefficients: Darcy-Weisbach h = f·(L/d)·V²/(2g)
 // with L in ft and d in inches lacks 12 in/ft (NIST SP 811 (2008), B.8), not 24, since the 2 of
 // 2g is the formula's; a spring's τ = K·8·F·D/(π·d³) in MPa from lbf and mm lacks 4.448 N per

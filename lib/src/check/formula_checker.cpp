@@ -4530,6 +4530,9 @@ class checker {
         bool circle = false;              // a circle's area: read only beside a square (D^2)
         bool whole_two_digits = false;    // also in a whole number of 2 digits (24 = 2 × 12)
         bool beside_power_of_ten = false; // only with a power of ten (622 = 0.622 × 1000)
+        // Only where the formula can hold a half or a 2 (may_hold_a_half). "Q_m = 0.8494*Q_cfm"
+        // is half of 1.699 m³/h per cfm, a conversion with no half in it: a slip, not a fold.
+        bool half_of_a_square_or_radius = false;
     };
     static std::span<const folded_constant> folded_constants() {
         static const std::array<folded_constant, 12> constants{{
@@ -4544,9 +4547,9 @@ class checker {
             // 24 = 2 × 12 in r = d/24 (a radius in ft from a diameter in inches, common
             // practice).
             {0.5, "1/2", "the formula's own half (v\u00B2/(2a), a diameter from a radius)", false,
-             false, true},
+             false, true, false, true},
             {2.0, "2", "the formula's own 2 (v\u00B2/(2a), a radius from a diameter)", false, false,
-             true},
+             true, false, true},
             {2.0 * std::numbers::pi, "2\u03C0",
              "the formula's 2\u03C0 (radians per revolution; the Wenner array's \u03C1 = "
              "2\u03C0\u00B7a\u00B7R)",
@@ -4573,6 +4576,23 @@ class checker {
              "a full pipe's area and hydraulic radius (Manning's full-bore form)", false},
         }};
         return constants;
+    }
+
+    // Where a formula's own half or 2 may stand: a square (v²/(2a)), a length from a length
+    // (a radius from a diameter), or two lengths in one product (the hoop stress p·D/(2t)).
+    bool may_hold_a_half(const operand& term) const {
+        if (term.type.dim == length_dimension() || squares_something(term.node))
+            return true;
+        int lengths = 0;
+        for_each_factor(term.node, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::symbol)
+                if (const symbol_entry* e = symbols_.find(text(n.range));
+                    e != nullptr && e->compact_dim && *e->compact_dim == length_dimension())
+                    ++lengths;
+            return lengths >= 2;
+        });
+        return lengths >= 2;
     }
 
     // Whether a subtree squares something (D^2, d*d), as the area of a circle needs.
@@ -4693,6 +4713,8 @@ class checker {
                         // 0.1166*S*N*A_p with the plunger's area declared: its π/4 would be
                         // counted twice; a circle's area is read only beside a square.
                         if (c.circle && !squares_something(ops[index[i]].node))
+                            continue;
+                        if (c.half_of_a_square_or_radius && !may_hold_a_half(ops[index[i]]))
                             continue;
                         as.value = l.value / c.value;
                         if (c.beside_power_of_ten && !near_power_of_ten(as.value, 1e-3))
