@@ -691,3 +691,28 @@ TEST_CASE("a side whose terms agree through rounded factors takes the unit they 
         CHECK(problems_in(run(decl + formula + "\n")) == 1);
     }
 }
+
+// A liquid's specific weight is its specific gravity times water's (common practice: head
+// H = 2.31·p/SG in ft from psi, p = 0.433·SG·h in psi from ft, P = Q·H·SG/3960 in hp from gpm
+// and ft; Hydraulic Institute, from memory). The SG is a pure number, so the units cannot place
+// it; the number read as water's says where it belongs.
+TEST_CASE("a specific gravity on the wrong side of water's specific weight") {
+    const std::string liquid = "p : psi\nH : ft\nSG : 1 \"specific gravity of the crude\"\nh : "
+                               "ft\nQ : gpm\nP : hp\nη : 1\nS_m : 1 \"slurry relative density\"\n";
+    for (const char* right :
+         {"H = p*2.31/SG", "p = 0.433*SG*h", "P = Q*H*SG/(3960*η)", "P = Q*H*S_m/(3960*η)"}) {
+        CAPTURE(right);
+        const auto r = run(liquid + right + "\n");
+        CHECK(problems_in(r) == 0);
+    }
+    for (const char* wrong :
+         {"H = p*2.31*SG", "p = 0.433*h/SG", "P = Q*H/(3960*η*SG)", "P = Q*H/(S_m*3960*η)"}) {
+        CAPTURE(wrong);
+        const auto r = run(liquid + wrong + "\n");
+        CHECK(problems_in(r) == 1);
+        CHECK(std::any_of(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& d) {
+            return d.rule == plumb::rules::gravity_number && d.level == plumb::severity::warning &&
+                   d.message.find("off by SG squared") != std::string::npos;
+        }));
+    }
+}

@@ -2391,8 +2391,68 @@ class checker {
                                    file_.nodes[node].range);
             d.level = severity::note;
             d.notes.push_back({std::string(reading.quantity->advice_in_notation), {}});
+            if (is_water_density_or_weight(*reading.quantity)) [[unlikely]]
+                report_specific_gravity_against_water(operands_[base + readings[r].operand],
+                                                      reading, multiplies, written);
         }
         return true;
+    }
+
+    // "H = p*2.31*SG": a liquid's specific weight is its specific gravity times water's, so
+    // the SG goes wherever γ_w goes: above with 0.433 psi/ft, below with 2.31 ft/psi and 3960.
+    // The units cannot see an SG on the wrong side (it is a pure number), but the number read
+    // as water's says which side that is. A symbol is taken for an SG by its description
+    // ("specific gravity", "relative density") or its name (SG, SG_m).
+    [[gnu::noinline]] void report_specific_gravity_against_water(const operand& term,
+                                                                 const gravity_reading& reading,
+                                                                 bool multiplies,
+                                                                 const std::string& written) {
+        const int water_power = (reading.reciprocal ? -1 : 1) * (multiplies ? 1 : -1);
+        std::uint32_t against = syntax::no_index;
+        for_each_factor(term.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind != expr_kind::symbol)
+                return false;
+            const std::string_view name = text(n.range);
+            const symbol_entry* e = symbols_.find(name);
+            if (e == nullptr || !e->compact_dim || !e->compact_dim->is_dimensionless() ||
+                !names_specific_gravity(name, e->description))
+                return false;
+            if (sign != water_power)
+                against = at;
+            return against != syntax::no_index;
+        });
+        if (against == syntax::no_index)
+            return;
+        const char* water_at = water_power > 0 ? "numerator" : "denominator";
+        const char* sg_at = water_power > 0 ? "denominator" : "numerator";
+        diagnostic& d =
+            report(rules::gravity_number,
+                   fmt::format("{} is a specific gravity, but it stands in the {} while the "
+                               "specific weight of water that {} carries stands in the {}: a "
+                               "liquid's specific weight is its specific gravity times water's, "
+                               "so as written the result is off by SG squared",
+                               quote(against), sg_at, written, water_at),
+                   file_.nodes[against].range);
+        d.level = severity::warning;
+        add_term(d, term);
+        d.notes.push_back({fmt::format("move {} to the {}, beside water's specific weight, as in "
+                                       "p*2.31/SG, 0.433*SG*h and Q*H*SG/3960",
+                                       quote(against), water_at),
+                           {}});
+    }
+
+    static bool is_water_density_or_weight(const carried_quantity& q) {
+        return q.what == "the specific weight of water" || q.what == "the density of water";
+    }
+
+    static bool names_specific_gravity(std::string_view name, std::string_view description) {
+        std::string lower(description);
+        for (char& c : lower)
+            c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+        return name == "SG" || name.starts_with("SG_") || name == "sg" ||
+               lower.find("specific gravity") != std::string::npos ||
+               lower.find("relative density") != std::string::npos;
     }
 
     // "C_mg = C_ppm*M/24.45" in mg/Nm³: 24.45 L/mol is a gas at 25 °C, and a normal cubic metre

@@ -76,9 +76,9 @@ const std::array<carried_quantity, 16>& quantities() {
              "1/\u03B3_w",
              " (water between 0 and 30 \u00B0C, \u03C1_w from 995.65 to 999.975 kg/m\u00B3)",
              "write \u03C1_w*{g_n}, with \u03C1_w declared for the water's temperature, to say "
-             "so; for another liquid the specific gravity must multiply it",
+             "so; for another liquid the specific gravity must multiply \u03C1_w",
              "write the density and g in cells that hold their units to say so; for another "
-             "liquid the specific gravity must multiply it",
+             "liquid the specific gravity must multiply the density",
              density * acceleration, water_least * standard_gravity,
              water_greatest * standard_gravity},
             {rules::trade_constant, "the heat capacity of a volume of water", "\u03C1_w\u00B7c_p,w",
@@ -99,7 +99,7 @@ const std::array<carried_quantity, 16>& quantities() {
             {rules::trade_constant, "the density of water", "\u03C1_w", "1/\u03C1_w",
              " (water between 0 and 30 \u00B0C: 995.65 to 999.975 kg/m\u00B3)",
              "declare the water's density with its unit (\u03C1_w : kg/m^3 = 998) to say so; "
-             "for another liquid the specific gravity must multiply it",
+             "for another liquid the specific gravity must multiply \u03C1_w",
              "write the density in a cell that holds its unit to say so", density, water_least,
              water_greatest},
             {rules::trade_constant, "the molar volume of an ideal gas", "V_m = R\u00B7T/p", "1/V_m",
