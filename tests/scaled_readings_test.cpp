@@ -258,6 +258,12 @@ TEST_CASE("an empirical coefficient over a temperature reading") {
         decl,
         {"p_psf = 150 {psf} + 9000 {psf*°F*h/ft}*R_ft/t_F", "p_psf = 150 {psf} + 9000?*R_ft*t_F"},
         plumb::rules::offset_scale);
+    // A pressure above the reading makes it a gas law's density, whatever constant is folded
+    // in: AP-42's loading loss L = 12.46·S·P·M/T in lb/10³ gal, P in psia and T in °R (EPA
+    // AP-42, 5th ed., section 5.2, from memory). With the rack's °F reading it is an error.
+    const std::string rack = "t_F : °F\nT_R : °R\nS : 1\np : psia\nM : lb/lbmol\nL : lb/gal\n";
+    passes(rack, {"L = 12.46?*S*p*M/T_R"});
+    fails_with(rack, {"L = 12.46?*S*p*M/t_F"}, plumb::rules::offset_scale);
 }
 
 // The infinite-slope factor of safety with the cohesion from an old report in psf:

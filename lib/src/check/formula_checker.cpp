@@ -6141,12 +6141,24 @@ class checker {
     // "150 {psf} + 9000?*R/t_F" (ACI 347's wall pressure, T the concrete's °F reading): a
     // coefficient marked `?` over a temperature reading is a fit made on that reading's scale,
     // which the `?` declares empirical; its note says it holds only in the declared units.
+    // Not where a pressure stands above the reading: p·M/(R·T) is a gas law's density, whose
+    // T is absolute whatever constant is folded in (AP-42's loading loss 12.46·S·P·M/T in
+    // lb/10³ gal wants °R; EPA AP-42, 5th ed., section 5.2, from memory).
     bool empirical_over_reading(std::uint32_t numerator, const typed_term& below) const {
         if (!below.known || !below.point || !(below.dim == temperature_dimension()))
             return false;
-        return for_each_factor(numerator, [&](std::uint32_t at, int) {
-            return file_.nodes[at].kind == expr_kind::inferred;
+        bool inferred = false;
+        bool pressure = false;
+        for_each_factor(numerator, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            inferred = inferred || n.kind == expr_kind::inferred;
+            if (n.kind == expr_kind::symbol && sign > 0)
+                if (const symbol_entry* e = symbols_.find(text(n.range));
+                    e != nullptr && e->compact_dim && *e->compact_dim == pressure_dimension())
+                    pressure = true;
+            return false;
         });
+        return inferred && !pressure;
     }
 
     // "h_2 = h_1 + c_p*t_2": beside another enthalpy, c·t would be a change from it, which a
