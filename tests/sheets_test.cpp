@@ -124,6 +124,14 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     same("W/m\u00B2K", "W/(m^2*K)");
     same("W/m2K", "W/(m^2*K)");
     same("kJ/kg.K", "kJ/(kg*K)");
+    // The I-P handbooks' U-value, Btu/(h·ft²·°F), printed without brackets (ASHRAE Handbook,
+    // Fundamentals, I-P edition, from memory); 5.678 W/(m²·K) each (NIST SP 811 (2008), B.8).
+    same("Btu/h\u00B7ft\u00B2\u00B7\u00B0F", "Btu/(h*ft^2*degR)");
+    same("W/m\u00B2\u00B7K", "W/(m^2*K)");
+    // The US gallon named as such (NIST SP 811 (2008), B.8, "gallon (U.S.)").
+    same("US gal", "gal");
+    same("gal (US)", "gal");
+    same("gallons", "gal");
     // The gas trades' normal and standard cubic metres (DIN 1343, ISO 13443; from memory), one
     // symbol each however the 3 is typed, never newton metres cubed.
     same("Nm\u00B3", "Nm3");

@@ -254,16 +254,22 @@ TEST_CASE("workbook parity: a unit in a column's heading that does not read is s
     CHECK(says(*unread, "the unit in its column's heading in B1, 'fc'"));
     // Words in parentheses that are no unit are left alone.
     CHECK(finding(r, "Rooms!C2", rules::no_unit) == nullptr);
-    // A unit in words, beside a cell: "US gal" (a formula's result unchecked had passed).
+    // A unit in words, beside a cell: "imp gal", which the table does not hold (a formula's
+    // result unchecked had passed). "US gal" reads as the US gallon: 264.2 gal per m³ (NIST
+    // SP 811 (2008), B.8: 3.785412 L) is right.
     const check_report words = check_one_sheet("Tank", sheet_of({
                                                            {"50", "m3"},            // B2
-                                                           {"=B2*264.2", "US gal"}, // B3
+                                                           {"=B2*220", "imp gal"},  // B3
                                                            {"=B2*2", "see note"},   // B4
+                                                           {"=B2*264.2", "US gal"}, // B5
+                                                           {"=B2/264.2", "US gal"}, // B6
                                                        }));
     const diagnostic* gallons = finding(words, "Tank!B3", rules::no_unit);
     REQUIRE(gallons != nullptr);
-    CHECK(says(*gallons, "'US gal', does not read as a unit"));
+    CHECK(says(*gallons, "'imp gal', does not read as a unit"));
     CHECK(finding(words, "Tank!B4", rules::no_unit) == nullptr);
+    CHECK_FALSE(error_at(words, "Tank!B5"));
+    CHECK(error_at(words, "Tank!B6"));
     // With fc defined in the sidecar, the slip (10.764 the wrong way round) is the finding.
     const check_report defined =
         check_one_sheet("Rooms", sheet, "measure fc = 10.7639 lx \"foot-candle\"\n");

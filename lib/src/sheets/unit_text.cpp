@@ -169,7 +169,7 @@ std::string as_declaration(std::string_view notation, std::string_view measures)
 // "in. w.g." for inches of water, "hr" for the hour, "CFM" in capitals, "kNm" for kN·m,
 // "sq ft", "bhp" (brake horsepower, a horsepower), "bara" (bar absolute).
 std::string trade_spelling(std::string t) {
-    static constexpr std::array<std::pair<std::string_view, std::string_view>, 63> whole{{
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 70> whole{{
         {"in. w.g.", "inH2O"},
         {"in.w.g.", "inH2O"},
         {"in w.g.", "inH2O"},
@@ -232,7 +232,16 @@ std::string trade_spelling(std::string t) {
         {"kW/ton", "kW/TR"},
         {"gpm/ton", "gpm/TR"},
         {"cfm/ton", "cfm/TR"},
+        // The US gallon named as such (NIST SP 811 (2008), B.8: "gallon (U.S.)"), the only
+        // gallon the table holds.
+        {"US gal", "gal"},
+        {"U.S. gal", "gal"},
+        {"USgal", "gal"},
+        {"US gallon", "gal"},
+        {"gal (US)", "gal"},
+        {"US gal/min", "gpm"},
         // Plurals as headings write them.
+        {"gallons", "gal"},
         {"acres", "acre"},
         {"feet", "ft"},
         {"inches", "in"},
@@ -250,12 +259,17 @@ std::string trade_spelling(std::string t) {
         if (alone)
             t.replace(at, 2, "h");
     }
-    // "W/m2K", "W/m²K", "kJ/kg.K": everything after a single '/' is the denominator, its
-    // units multiplied by '.' or written one after another after a power.
+    // "W/m2K", "W/m²K", "kJ/kg.K", "Btu/h·ft²·°F": everything after a single '/' is the
+    // denominator, its units multiplied by '.' or '·' or written one after another after a
+    // power (common practice; ISO 80000-1 would bracket them).
     const std::size_t slash = t.find('/');
     if (slash != std::string::npos && t.find('/', slash + 1) == std::string::npos &&
         t.find('(') == std::string::npos) {
         std::string below = t.substr(slash + 1);
+        // "Btu/h·ft²·°F", the I-P handbooks' U-value: the middle dot multiplies below the line.
+        for (const std::string_view dot : {"\u00B7", "\u22C5"})
+            for (std::size_t at = below.find(dot); at != std::string::npos; at = below.find(dot))
+                below.replace(at, dot.size(), " ");
         for (std::size_t i = 1; i + 1 < below.size(); ++i)
             if (below[i] == '.' && is_letter(below[i - 1]) && is_letter(below[i + 1]))
                 below[i] = ' ';
