@@ -586,3 +586,21 @@ TEST_CASE("sheets: a factor written into a formula agrees by the notation's exac
     for (const auto& d : r.diagnostics)
         CHECK(d.message.find("e+") == std::string::npos);
 }
+
+TEST_CASE("sheets: a column headed as a difference holds differences, which take no zero") {
+    // A chilled-water range in Δ°F to K: divide by 1.8 alone (NIST SP 811 (2008), B.8; a
+    // difference has no zero to move). "ΔT [°F]" heads the column; (F − 32)/1.8 converts a
+    // reading, a slip on a difference (12.5 Δ°F would come out at −10.8 K).
+    const auto text = [](const std::string& at, const std::string& t) {
+        return "<c r=\"" + at + "\" t=\"inlineStr\"><is><t>" + t + "</t></is></c>";
+    };
+    const std::string sheet =
+        "<worksheet><sheetData><row r=\"1\">" + text("A1", "\u0394T [\u00B0F]") +
+        text("B1", "\u0394T [K]") + text("C1", "Return [\u00B0F]") + text("D1", "Return [K]") +
+        "</row><row r=\"2\"><c r=\"A2\"><v>12.5</v></c><c r=\"B2\"><f>A2/1.8</f><v>0</v></c>"
+        "<c r=\"C2\"><v>56</v></c><c r=\"D2\"><f>(C2-32)/1.8+273.15</f><v>0</v></c></row>"
+        "<row r=\"3\"><c r=\"A3\"><v>12.5</v></c><c r=\"B3\"><f>(A3-32)/1.8</f><v>0</v></c>"
+        "</row></sheetData></worksheet>";
+    CHECK(cell_findings_of_one_sheet("Chillers", sheet) ==
+          std::vector<std::string>{"Chillers!B3 sum-mismatch"});
+}

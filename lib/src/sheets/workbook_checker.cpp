@@ -553,7 +553,26 @@ class workbook_checker {
             description += c->text;
             description += ' ';
         }
-        return !description.empty() && names_a_difference(name, description);
+        if (!description.empty() && names_a_difference(name, description))
+            return true;
+        // "ΔT [°F]", "Rise [K]": the column's heading, the nearest text above, names it one.
+        const auto column = text_rows_[s].find(a.column);
+        if (column == text_rows_[s].end())
+            return false;
+        const auto it = std::lower_bound(column->second.begin(), column->second.end(), a.row);
+        if (it == column->second.begin())
+            return false;
+        const cell* above = book_.sheets[s].find({*(it - 1), a.column});
+        if (above == nullptr || above->kind != cell_kind::text || above->text.size() > 80)
+            return false;
+        std::string_view words = above->text;
+        words = words.substr(0, std::min(words.find('['), words.find('(')));
+        while (!words.empty() && words.back() == ' ')
+            words.remove_suffix(1);
+        const std::string_view heading_name =
+            words.find(' ') == std::string_view::npos && words.size() <= 12 ? words
+                                                                            : std::string_view{};
+        return !words.empty() && names_a_difference(heading_name, words);
     }
 
     // ---- Checking one formula cell --------------------------------------------------------
