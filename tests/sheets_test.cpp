@@ -604,3 +604,23 @@ TEST_CASE("sheets: a column headed as a difference holds differences, which take
     CHECK(cell_findings_of_one_sheet("Chillers", sheet) ==
           std::vector<std::string>{"Chillers!B3 sum-mismatch"});
 }
+
+TEST_CASE("sheets: a lookup not checked does not report its table as a mixed range") {
+    // A correction table keyed by °F with factors beside it (the layout of the petroleum
+    // measurement tables' volume correction factors, from memory): a column picked by IF
+    // leaves the cell not checked, and the table is no range of one unit.
+    const auto text = [](const std::string& at, const std::string& t) {
+        return "<c r=\"" + at + "\" t=\"inlineStr\"><is><t>" + t + "</t></is></c>";
+    };
+    const std::string sheet =
+        "<worksheet><sheetData><row r=\"1\">" + text("A1", "Temperature [\u00B0F]") +
+        text("B1", "VCF light [-]") + text("C1", "VCF heavy [-]") + text("E1", "API [-]") +
+        text("F1", "t [\u00B0F]") + text("G1", "VCF [-]") +
+        "</row><row r=\"2\"><c r=\"A2\"><v>60</v></c><c r=\"B2\"><v>1</v></c>"
+        "<c r=\"C2\"><v>1</v></c><c r=\"E2\"><v>30</v></c><c r=\"F2\"><v>70</v></c>"
+        "<c r=\"G2\"><f>VLOOKUP(F2,A2:C3,IF(E2&lt;34,2,3))</f><v>0</v></c></row>"
+        "<row r=\"3\"><c r=\"A3\"><v>80</v></c><c r=\"B3\"><v>0.99</v></c>"
+        "<c r=\"C3\"><v>0.992</v></c></row></sheetData></worksheet>";
+    CHECK(cell_findings_of_one_sheet("Ticket", sheet) ==
+          std::vector<std::string>{"Ticket!G2 not-checked"});
+}

@@ -537,6 +537,13 @@ class workbook_checker {
         return result;
     }
 
+    static bool looks_up(std::string_view formula) {
+        for (const std::string_view name : {"LOOKUP(", "INDEX(", "MATCH(", "CHOOSE("})
+            if (formula.find(name) != std::string_view::npos)
+                return true;
+        return false;
+    }
+
     // "Friction loss | dp_f | 12 | psi": the text cells before a value on its row, read as the
     // notation reads a symbol's name and description. The name is a text without blanks.
     bool labelled_a_difference(std::size_t s, cell_address a) const {
@@ -594,9 +601,11 @@ class workbook_checker {
             if (r.area.single()) {
                 if (const cell* c = book_.sheets[r.sheet].find(r.area.first))
                     v = value_of(r.sheet, *c);
-            } else {
+            } else if (f.lowered.not_checked.empty() || !looks_up(f.source->text)) {
                 v = value_of_range(r, range_reported);
             }
+            // A lookup's table in a cell not checked (its column computed) is no range of one
+            // unit: a lookup table's key and value columns differ by design.
             syntax::reference_value& target = lowered_.tree.references[r.reference];
             target.dim = v.dim;
             target.scale = v.scale;
