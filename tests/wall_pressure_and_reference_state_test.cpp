@@ -490,3 +490,15 @@ TEST_CASE("gas volumes at two reference temperatures converted by the volume fac
                  "V_s = 1.055*V_n", "V_m = V_n*24*37.3/1000", "V_n = V_us/37.3"});
     passes(gas, {"V_n = V_s*273.15/288.15"});
 }
+
+// A leak's flow at line pressure from a table at 100 psig, scaled by absolute pressure:
+// Q = Q_100·(p_g + 14.7)/(100 + 14.7) (US DOE Compressed Air Sourcebook, from memory; common
+// practice). The added numbers are a gauge reading and the atmosphere in the unit of the
+// absolute pressure above them; read so, the ratio is pure. Without the atmosphere, or
+// multiplied, it stays a finding.
+TEST_CASE("a gauge reading plus the atmosphere, typed as numbers, in ratio with a pressure") {
+    const std::string leaks = "Q_100, Q : cfm\np_g : psig\np_a : psia\n";
+    passes(leaks, {"Q = Q_100*(p_g + 14.7)/(100 + 14.7)", "Q = Q_100*p_a/(100 + 14.7)"}, 1);
+    fails_with(leaks, {"Q = Q_100*(p_g + 14.7)/(100 + 20)", "Q = Q_100*(p_g + 14.7)*(100 + 14.7)"},
+               plumb::rules::side_mismatch);
+}

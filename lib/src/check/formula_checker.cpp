@@ -5562,6 +5562,66 @@ class checker {
         return found.empty() ? std::string("T_ref") : found;
     }
 
+    // "F*(p_g + 14.7)/(100 + 14.7)" in a sheet (a leak's flow scaled from the table's 100 psig
+    // by absolute pressure; common practice): the added numbers are a gauge reading and the
+    // atmosphere in the unit of the absolute pressure they stand in ratio with, which the
+    // notation would write 100 {psig}; read so, the ratio is pure, with a note.
+    [[gnu::noinline]] bool read_gauge_plus_atmosphere(const reference_state_pairs::number& number,
+                                                      reference_state_pairs::reading& reading,
+                                                      typed_term& result) {
+        const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, number.node)];
+        if (sum.kind != expr_kind::add || !(reading.dim == pressure_dimension()) ||
+            file_.nodes[sum.lhs].kind != expr_kind::number ||
+            file_.nodes[sum.rhs].kind != expr_kind::number)
+            return false;
+        std::uint32_t atmosphere = syntax::no_index;
+        const reference_state* state = nullptr;
+        for (const std::uint32_t side : {sum.rhs, sum.lhs}) {
+            const std::string_view written = text(file_.nodes[side].range);
+            state = read_reference_state(reading.dim, written_number(file_.nodes[side].range),
+                                         written, reading.scale);
+            if (state != nullptr) {
+                atmosphere = side;
+                break;
+            }
+        }
+        if (atmosphere == syntax::no_index)
+            return false;
+        reading.paired = true;
+        try {
+            result.dim = number.sign > 0 ? result.dim * reading.dim : result.dim / reading.dim;
+        } catch (const std::exception&) {
+            result = unknown_type();
+            return true;
+        }
+        result.scale =
+            number.sign > 0 ? result.scale * reading.scale : result.scale / reading.scale;
+        result.exact_scale.reset();
+        result.value.reset();
+        result.numeric = false;
+        result.point = false;
+        result.origin = 0.0;
+        result.origin_tolerance = 0.0;
+        for (std::uint32_t l = result.literal_begin; l < literals_.size(); ++l)
+            if (literals_[l].node == number.node || literals_[l].node == sum.lhs ||
+                literals_[l].node == sum.rhs)
+                read_as_quantity(literals_[l]);
+        const std::uint32_t gauge = atmosphere == sum.rhs ? sum.lhs : sum.rhs;
+        diagnostic& d = report(
+            rules::trade_constant,
+            fmt::format("'{}' is read as a gauge reading, {}, plus the atmosphere, {}, in the unit "
+                        "of {}: an absolute pressure, which it stands in ratio with",
+                        display_text(file_.nodes[number.node].range),
+                        display_text(file_.nodes[gauge].range),
+                        display_text(file_.nodes[atmosphere].range), quote(reading.node)),
+            file_.nodes[number.node].range);
+        d.level = severity::note;
+        d.notes.push_back(
+            {fmt::format("the trades' atmospheres: {}; above sea level it is less", state->choices),
+             {}});
+        return true;
+    }
+
     // "V*273.15/T": each bare number of the product that stands for a standard reference
     // temperature or pressure in the unit of an absolute reading it is in ratio with makes,
     // with it, a pure ratio. The number is then a quantity, not a factor for the scale rules.
@@ -5574,6 +5634,12 @@ class checker {
                 reference_state_pairs::reading& reading = pairs.readings[k];
                 if (reading.paired || reading.sign == number.sign)
                     continue;
+                // "(100 + 14.7)": one number to the product, a sum in the text; (68 + 459.67)
+                // is one too, a reference temperature in °R, read below.
+                if (file_.nodes[syntax::inside_brackets(file_, number.node)].kind ==
+                        expr_kind::add &&
+                    read_gauge_plus_atmosphere(number, reading, result)) [[unlikely]]
+                    break;
                 const std::string_view written = text(file_.nodes[number.node].range);
                 // p_b/1000 with p_b in mbar: a power of ten beside a pressure converts its unit
                 // (a barometer in mbar added in bar) far more often than it is 1000 mbar.
