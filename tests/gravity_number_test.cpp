@@ -716,3 +716,21 @@ TEST_CASE("a specific gravity on the wrong side of water's specific weight") {
         }));
     }
 }
+
+// A bare number standing for the whole quantity in a sum is read only in the units around it:
+// the pulp-density form of solids by mass, C_w = 100·S·(ρ_p − ρ_w)/(ρ_p·(S − 1)) (Wills'
+// Mineral Processing Technology, 8th ed., ch. 3, from memory), takes 1 beside t/m³ and 1000
+// beside kg/m³; the other way round it is three orders of magnitude off.
+TEST_CASE("water's density typed as a bare number in a sum, in the units around it only") {
+    const std::string pulp = "ρ_p : kg/m^3\nρ_t : t/m^3\nS : 1\nC_w : %\n";
+    for (const char* right :
+         {"C_w = 100*S*(ρ_t - 1)/(ρ_t*(S - 1))", "C_w = 100*S*(ρ_p - 1000)/(ρ_p*(S - 1))"}) {
+        CAPTURE(right);
+        CHECK(problems_in(run(pulp + right + "\n")) == 0);
+    }
+    for (const char* wrong :
+         {"C_w = 100*S*(ρ_p - 1)/(ρ_p*(S - 1))", "C_w = 100*S*(ρ_t - 1000)/(ρ_t*(S - 1))"}) {
+        CAPTURE(wrong);
+        CHECK(count_of(run(pulp + wrong + "\n"), plumb::rules::sum_mismatch) == 1);
+    }
+}

@@ -2341,7 +2341,9 @@ class checker {
             const auto reading =
                 read_gravity_number(t.scale, reference_scale, numbers,
                                     {texts.data(), numbers.size()}, lacking, true, kind_of(t));
-            if (!reading)
+            // A bare number standing for the whole quantity is that quantity in the others'
+            // unit or nothing: "ρ_p - 1" beside kg/m³ is no water density a thousand apart.
+            if (!reading || (t.numeric && reading->shifted))
                 return false;
             readings[found_count++] = {i, *reading};
         }
