@@ -502,3 +502,13 @@ TEST_CASE("a gauge reading plus the atmosphere, typed as numbers, in ratio with 
     fails_with(leaks, {"Q = Q_100*(p_g + 14.7)/(100 + 20)", "Q = Q_100*(p_g + 14.7)*(100 + 14.7)"},
                plumb::rules::side_mismatch);
 }
+
+// Partial pressures add to one absolute pressure (Dalton's law; a steam-air chamber's
+// p = p_sat + p_air, PDA Technical Report 1, from memory): set equal to a gauge reading the
+// zeros differ. Equal to an absolute one it passes, and a difference of two stays a difference.
+TEST_CASE("absolute pressures added are one absolute reading, not a gauge one") {
+    const std::string chamber = "p_g : barg\np_a, p_sat, p_air : bar\n";
+    passes(chamber, {"p_a = p_sat + p_air", "p_g = p_sat - p_air"});
+    fails_with(chamber, {"p_g = p_sat + p_air", "p_g <= p_sat + p_air"},
+               plumb::rules::offset_scale);
+}

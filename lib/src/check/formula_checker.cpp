@@ -3353,6 +3353,15 @@ class checker {
             if (weight)
                 weight = *weight - rational(absolute_pressures_added);
         }
+        // "p_sat + p_air": absolute pressures added are partial pressures making one absolute
+        // reading (Dalton's law), not a reading weighing two; set equal to a gauge reading its
+        // zero is the finding.
+        if (!number_added && !number_subtracted && gauges == 0 && points >= 2 &&
+            absolute_pressures_added == points && absolute_pressures_subtracted == 0 &&
+            result.dim == pressure_dimension()) {
+            points = 1;
+            weight = rational(1);
+        }
         // The mirror: "p_bh - 14.7 - p_hyd", an absolute reading less the atmosphere written as
         // a number, is a gauge reading, and the further pressures subtracted are drops; unless
         // one of them names the atmosphere, which would then be taken off twice.
