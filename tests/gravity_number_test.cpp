@@ -734,3 +734,18 @@ TEST_CASE("water's density typed as a bare number in a sum, in the units around 
         CHECK(count_of(run(pulp + wrong + "\n"), plumb::rules::sum_mismatch) == 1);
     }
 }
+
+// Beside a number that is a unit conversion itself (1000 Pa per kPa or N per kN, 86400 s per
+// day; NIST SP 811 (2008), B.8), the number read as gravity or water is the other one: the
+// note names 9.81, not the conversion.
+TEST_CASE("a conversion beside 9.81 is not the number read as gravity or water") {
+    const std::string d = "Δp : kPa\nρ : kg/m^3\nH : m\nm : kg\nF : kN\nSG : 1\nq : m^3/d\n"
+                          "P : kW\n";
+    for (const char* formula :
+         {"H = Δp*1000/(ρ*9.81)", "F = m*9.81/1000", "P = 9.81*SG*q*H/86400"}) {
+        CAPTURE(formula);
+        const auto r = run(d + formula + "\n");
+        CHECK(problems_in(r) == 0);
+        CHECK(message_of(r, plumb::rules::gravity_number).rfind("'9.81' is read as", 0) == 0);
+    }
+}

@@ -329,7 +329,7 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
         !std::isfinite(reference_scale))
         return std::nullopt;
     std::optional<gravity_reading> best;
-    std::tuple<bool, bool, bool, double, bool> best_rank{};
+    std::tuple<bool, bool, bool, bool, double, bool> best_rank{};
     for (std::size_t k = 0, tries = flipped_too ? 2 : 1; k < literals.size() * tries; ++k) {
         // The second pass reads each number as if written the other way round (Q*H*3960).
         const bool flipped = k >= literals.size();
@@ -397,8 +397,11 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // a conversion (9.81 in v²/(2*9.81), not the 2 as twice g beside a 9.81
                     // conversion), then the closest; on a tie the number that is the quantity
                     // itself (62.4 in p*144/62.4, not 144 as one over it).
-                    const auto rank = std::make_tuple(flipped, shifted, mask != 0,
-                                                      distance / nearest, reciprocal);
+                    // A number that is itself a unit conversion (1000, 86400, 3.281) is read
+                    // last: in Δp_kPa*1000/(ρ*9.81) the 9.81 is g and the 1000 converts kPa.
+                    const auto rank =
+                        std::make_tuple(flipped, shifted, looks_like_conversion(number, true),
+                                        mask != 0, distance / nearest, reciprocal);
                     if (best && rank >= best_rank)
                         continue;
                     best_rank = rank;
