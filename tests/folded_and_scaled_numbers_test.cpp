@@ -686,3 +686,17 @@ TEST_CASE(
     CHECK(plumb::test::says(first_under(slip, plumb::rules::unit_scale),
                             "divide 'ε/(3.7*D_m)' by 1000"));
 }
+
+// Conversions to the kilo and compound units the trades write (NIST SP 811 (2008), B.8:
+// 1 hp = 0.7457 kW, 1 ton of refrigeration = 3.517 kW, 1 L/s = 15.85 gpm) applied where the
+// units already agree are as much a slip as the table's own ratios (3.785 L/gal). Where the
+// units differ, the same numbers convert.
+TEST_CASE("a kilo or compound unit's conversion applied where the units already agree") {
+    const std::string d = "Q_1, Q_2 : gpm\nQ_L : L/s\nP_1, P_2 : kW\nP_hp : hp\nC_tr : TR\n";
+    fails_with(d, {"Q_2 = Q_1*15.85", "P_2 = P_1*0.7457", "P_2 = P_1*3.517"},
+               plumb::rules::unit_scale);
+    for (const char* right : {"Q_2 = Q_L*15.85", "P_1 = P_hp*0.7457", "P_1 = C_tr*3.517"}) {
+        CAPTURE(right);
+        CHECK(plumb::test::problems_in(run(d, right)) == 0);
+    }
+}

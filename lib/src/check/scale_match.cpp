@@ -83,6 +83,39 @@ const std::vector<unit_ratio>& unit_ratios() {
                     out.push_back({std::cbrt(r), std::nullopt});
                 }
             }
+        // The prefixed and compound units the trades write beside the table's own: kW beside
+        // hp and TR (0.7457, 3.517), kPa beside psi, L/s and m³/h beside gpm and cfm (0.0631,
+        // 15.85). Not every prefix: each would add as many chance matches as it adds ratios
+        // (kJ per Btu, 1.055, is also the Sm³ per Nm³ of two reference states).
+        for (const char* symbol : {"kW", "kPa", "MPa", "kN"}) {
+            const auto a = unit_table::standard().resolve(symbol);
+            if (!a)
+                continue;
+            for (const auto& b : units) {
+                if (b.exponents != a->unit->exponents || !(b.factor > 0) || &b == a->unit)
+                    continue;
+                const double r = a->factor() / b.factor;
+                if (std::abs(r - 1.0) < 1e-9 || is_power_of_ten(r))
+                    continue;
+                const auto exact = exact_product(exact_factor(*a), exact_factor(b), true);
+                out.push_back({r, exact});
+                out.push_back({1.0 / r, exact_product(rational(1), exact, true)});
+            }
+        }
+        const auto* gpm = unit_table::standard().resolve("gpm")->unit;
+        const std::array<std::pair<double, rational>, 2> flows{
+            {{1e-3, rational(1, 1000)}, {1.0 / 3600.0, rational(1, 3600)}}}; // L/s, m³/h
+        for (const auto& [factor, exact_si] : flows)
+            for (const auto& b : units) {
+                if (b.exponents != gpm->exponents || !(b.factor > 0))
+                    continue;
+                const double r = factor / b.factor;
+                if (std::abs(r - 1.0) < 1e-9 || is_power_of_ten(r))
+                    continue;
+                const auto exact = exact_product(exact_si, exact_factor(b), true);
+                out.push_back({r, exact});
+                out.push_back({1.0 / r, exact_product(rational(1), exact, true)});
+            }
         std::sort(out.begin(), out.end(),
                   [](const unit_ratio& x, const unit_ratio& y) { return x.approx < y.approx; });
         return out;
