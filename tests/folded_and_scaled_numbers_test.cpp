@@ -700,3 +700,19 @@ TEST_CASE("a kilo or compound unit's conversion applied where the units already 
         CHECK(plumb::test::problems_in(run(d, right)) == 0);
     }
 }
+
+// The advised factor is a common conversion only within the printed digits of the number
+// read beside it: the NEC K-method V = 1.732·K·I·L/(1000·A) in V from ft and kcmil (NFPA 70,
+// ch. 9, from memory) with L in metres lacks 3.28084 ft/m (NIST SP 811 (2008), B.8); √3
+// printed 1.732 had left the US gallon, 3.78541, as the advice.
+TEST_CASE("the advice beside √3 printed 1.732 names the foot, not the gallon") {
+    const std::string feeder = "K : ohm*cmil/ft\nI : A\nL_m : m\nA : kcmil\nVD : V\n";
+    const auto r = run(feeder, "VD = 1.732*K*I*L_m/(1000*A)");
+    CHECK(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "multiply"));
+    bool feet = false;
+    for (const auto& d : r.diagnostics)
+        for (const auto& n : d.notes)
+            feet = feet || n.message.find("by 3.28084") != std::string::npos;
+    CHECK(feet);
+}

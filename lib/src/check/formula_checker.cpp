@@ -4480,9 +4480,12 @@ class checker {
                 // The number as a conversion by itself first ((T_1 - T_2)*V_fpm/550 with V in
                 // ft/min: 550 ft·lbf/s per hp leaves the 60 of the minutes), then as each folded
                 // constant times one (9550*P_W/n: 60000/(2π) leaves the 1000 of the watts).
+                // Within the number's own printed digits: 0.2 % would let some common
+                // conversion fit one time in six, and advise it (√3 as 1.732 had left the
+                // US gallon).
+                const double slack = std::min(0.002, 2.0 * l.tolerance + 1e-4);
                 const auto leaves = [&](double constant) -> std::optional<double> {
                     const double v = ratio * std::pow(l.value / constant, e);
-                    const double slack = 0.002;
                     if (near_power_of_ten(v, slack) && std::abs(std::log10(v)) > 0.5)
                         return std::pow(10.0, std::round(std::log10(v)));
                     return common_conversion(v, slack);
