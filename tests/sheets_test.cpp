@@ -624,3 +624,15 @@ TEST_CASE("sheets: a lookup not checked does not report its table as a mixed ran
     CHECK(cell_findings_of_one_sheet("Ticket", sheet) ==
           std::vector<std::string>{"Ticket!G2 not-checked"});
 }
+
+TEST_CASE("sheets: a sidecar's measure comes before the trade's spelling of the same name") {
+    // A boiler horsepower is 33,475 Btu/h (ABMA, common practice); "BHP" alone the trades read
+    // as brake horsepower, 2544.43 Btu/h (NIST SP 811 (2008), B.8). The sidecar decides.
+    const std::string sheet =
+        "<worksheet><sheetData>" + plumb::test::value_and_unit_row(2, "6700000", "Btu/h") +
+        plumb::test::value_and_unit_row(3, "=B2/33475", "BHP") +
+        plumb::test::value_and_unit_row(4, "=B2/2544", "BHP") + "</sheetData></worksheet>";
+    const auto r = plumb::test::check_one_sheet(
+        "Plant", sheet, "measure BHP = 33475 Btu/h \"boiler horsepower\"\n");
+    CHECK(plumb::test::cell_findings(r) == std::vector<std::string>{"Plant!B4 unit-scale"});
+}

@@ -155,6 +155,23 @@ std::string measures_named_in(std::string_view text, std::string_view measures) 
     return out;
 }
 
+// Whether a `measure` line among `measures` defines `name` itself.
+bool defines(std::string_view measures, std::string_view name) {
+    for (std::size_t at = measures.find(name); at != std::string_view::npos;
+         at = measures.find(name, at + 1)) {
+        const std::size_t end = at + name.size();
+        if (end < measures.size() && measures[end] != ' ' && measures[end] != '=' &&
+            measures[end] != '\t')
+            continue;
+        std::size_t before = at;
+        while (before > 0 && (measures[before - 1] == ' ' || measures[before - 1] == '\t'))
+            --before;
+        if (before >= 7 && measures.substr(before - 7, 7) == "measure" && before < at)
+            return true;
+    }
+    return false;
+}
+
 // The text as the notation reads a declaration: "x : <unit>", after the measure lines.
 std::string as_declaration(std::string_view notation, std::string_view measures) {
     std::string source(measures);
@@ -292,7 +309,10 @@ std::optional<written_unit> evaluate(std::string_view text, std::string_view mea
     std::string t = trim(text);
     if (t.empty() || t.size() > 40)
         return std::nullopt;
-    t = trade_spelling(std::move(t));
+    // A sidecar's own measure comes before the trade's spelling: "BHP" is mechanical
+    // horsepower as the trades spell it, unless the sidecar says the boiler's.
+    if (!defines(measures, t))
+        t = trade_spelling(std::move(t));
     if (t == "\u00B0")
         t = "deg"; // the degree of angle, written alone
     if (t == "-" || t == "1" || t == "\u2014" || t == "\u2013") {
