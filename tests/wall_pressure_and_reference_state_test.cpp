@@ -120,6 +120,18 @@ TEST_CASE("the atmosphere added to an absolute reading converted by a factor") {
     CHECK(problems_in(run(blower, "p_x = p_2/6.895 + 14.7")) == 1);
     passes(blower, {"p_x = p_2/6.895"});
     passes(blower, {"p_x = 0.433*h_f + 14.7"}, 2);
+    // 14.5 psi per bar and 100 kPa per bar (NIST SP 811 (2008), B.8): the same slip, named by
+    // its zero; a gauge reading converted so takes the atmosphere rightly.
+    const std::string boiler = "p_abs : bar \"boiler pressure, absolute\"\np_g : barg\n"
+                               "p_psia : psia\np_kabs : kPa\n";
+    fails_with(
+        boiler,
+        {"p_psia = 14.5*p_abs + 14.7", "p_kabs = 100*p_abs + 101.3", "p_psia = p_abs*14.5 + 14.7"},
+        plumb::rules::offset_scale);
+    const auto twice = run(boiler, "p_psia = 14.5*p_abs + 14.7");
+    CHECK(plumb::test::says(first_under(twice, plumb::rules::offset_scale),
+                            "counts that zero twice"));
+    passes(boiler, {"p_psia = 14.5*p_g + 14.7", "p_kabs = 100*p_g + 101.3"});
 }
 
 TEST_CASE("a barometer in mbar over 1000 added to a bar g reading is a conversion") {

@@ -2950,12 +2950,26 @@ class checker {
 
     // "ρ*g*h + 101.325" with the column in Pa: the atmosphere was written in kPa. The finding
     // stands (a bare number has no unit), but the fix is the unit, not the physics.
+    // A product with an absolute pressure reading among its factors ("14.5*p_abs").
+    bool holds_absolute_pressure(std::uint32_t term) const {
+        return for_each_factor(term, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind != expr_kind::symbol || sign < 0)
+                return false;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            return e != nullptr && e->compact_dim && *e->compact_dim == pressure_dimension() &&
+                   e->offset_unit == nullptr && e->reading == 1;
+        });
+    }
+
     void note_atmosphere_in_another_unit(diagnostic& d, std::span<const operand> terms,
                                          const agreement& a) {
         if (!a.reference || !(*a.reference == pressure_dimension()) ||
             terms.size() > notes_for_terms_up_to)
             return;
-        double others = 0.0; // the scale the other pressures share
+        double others = 0.0;    // the scale the other pressures share
+        double converted = 0.0; // and as their conversion factors make it
+        bool readings = true;   // each other term holds an absolute reading
         for (std::size_t i = 0; i < terms.size(); ++i) {
             const typed_term& t = terms[i].type;
             if (!t.known || t.zero || std::find(a.odd.begin(), a.odd.end(), i) != a.odd.end())
@@ -2964,17 +2978,45 @@ class checker {
                 !std::isfinite(t.scale) || (others != 0.0 && t.scale != others))
                 return;
             others = t.scale;
+            double scale = t.scale;
+            for (std::uint32_t k = 0; k < t.literal_count; ++k) {
+                const scale_literal& l = literals_[t.literal_begin + k];
+                scale /= std::pow(l.value, l.exponent);
+            }
+            converted = scale;
+            readings = readings && t.literal_count > 0 && holds_absolute_pressure(terms[i].node);
         }
-        const auto named = [](double scale) -> const pressure_unit* {
+        const auto named = [](double scale, double within = 1e-6) -> const pressure_unit* {
             for (const auto& u : pressure_units)
-                if (std::abs(scale / u.pascals - 1.0) < 1e-6)
+                if (std::abs(scale / u.pascals - 1.0) < within)
                     return &u;
             return nullptr;
         };
         const pressure_unit* theirs = named(others);
         if (theirs == nullptr)
             return;
+        // "14.5*p_abs + 14.7", "p_2/6.895 + 14.7": the reading converted by its factor is in
+        // the atmosphere's unit already, and absolute; the atmosphere is the slip, not its unit.
+        // Its numbers as rounded conversions (14.5 psi per bar is 14.5038).
+        const pressure_unit* as_converted = readings ? named(converted, 0.005) : nullptr;
         for_each_odd_number(terms, a, [&](std::string_view written, double value) {
+            if (as_converted != nullptr && as_converted != theirs &&
+                read_reference_state(pressure_dimension(), value, written, as_converted->pascals) !=
+                    nullptr) {
+                const std::string other = terms.size() == 2
+                                              ? quote(terms[a.odd.front() == 0 ? 1 : 0].node)
+                                              : std::string("the other term");
+                // The zero, not the dimension, is the finding, as for "p_psia + 14.7".
+                d.rule = std::string(rules::offset_scale);
+                d.message = fmt::format("{} is the atmosphere in {}, added to {}, an absolute "
+                                        "pressure already: the sum counts that zero twice",
+                                        written, as_converted->name, other);
+                d.notes.push_back({fmt::format("{} is an absolute pressure converted to {} by its "
+                                               "factor; drop the {}, or convert a gauge reading",
+                                               other, as_converted->name, written),
+                                   {}});
+                return true;
+            }
             for (const auto& u : pressure_units) {
                 if (&u == theirs || read_reference_state(pressure_dimension(), value, written,
                                                          u.pascals) == nullptr)
