@@ -162,6 +162,9 @@ TEST_CASE("a bare number beside terms in % or degrees is in their unit") {
     const std::string percent = "O2, EA, S : %\nf : 1\nθ, φ : deg\n";
     passes(percent, {"@excess-air EA = 100*O2/(20.9 - O2)", "@fraction f = (100 - S)/100",
                      "@fraction-bare f = 1 - S/100", "@angle φ = θ + 90"});
+    // Arterburn's hydrocyclone solids correction C_1 = ((53 - V)/53)^-1.43, V in % solids by
+    // volume (Arterburn, 1982, from memory): a sum in % over the number it starts with.
+    passes(percent, {"@arterburn f = ((53 - S)/53)^-1.43"});
     fails_with(percent,
                {"@fraction-slip f = 1 - S", "@percent-of-fraction EA = 100 - f",
                 "@complement-of-percent EA = 1 - S"},

@@ -6039,8 +6039,11 @@ class checker {
     // product's factors (see carries_number_of_sum).
     [[gnu::noinline]] void settle_percent_divisor(typed_term& result, const typed_term& factor,
                                                   const syntax::expr_node& op) const {
+        // "(53 - C_v)/53" with C_v in % (Arterburn's solids correction, from memory): a sum
+        // in % over the number it starts with is a ratio of two percentages too.
         if (factor.numeric && result.known && !result.numeric && result.scale == 0.01 &&
-            result.dim.is_dimensionless() && oxygen_share_of_air(op.rhs)) {
+            result.dim.is_dimensionless() &&
+            (oxygen_share_of_air(op.rhs) || same_number_over_its_sum(op.rhs, op.lhs))) {
             result.scale = 1.0;
             result.exact_scale = rational(1);
             return;
