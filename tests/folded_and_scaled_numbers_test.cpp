@@ -165,6 +165,10 @@ TEST_CASE("a bare number beside terms in % or degrees is in their unit") {
     // Arterburn's hydrocyclone solids correction C_1 = ((53 - V)/53)^-1.43, V in % solids by
     // volume (Arterburn, 1982, from memory): a sum in % over the number it starts with.
     passes(percent, {"@arterburn f = ((53 - S)/53)^-1.43"});
+    // A term converted out of degrees by π/180 (SI Brochure 9th ed., Table 8) is in radians,
+    // and so is the number beside it: a bearing's design rotation plus AASHTO's 0.005 rad
+    // allowance (from memory).
+    passes("θ : deg\nθ_s : rad\n", {"@rotation θ_s = θ*pi/180 + 0.005"});
     fails_with(percent,
                {"@fraction-slip f = 1 - S", "@percent-of-fraction EA = 100 - f",
                 "@complement-of-percent EA = 1 - S"},

@@ -3066,9 +3066,12 @@ class checker {
             return;
         // Only where the scale is a unit numbers are written in (%, °, ppm): in "f*L/d_mm + 4"
         // the 1000 of L in m over d in mm is no unit the 4 is in.
+        // Nor where the term converts out of it: "θ_deg*pi/180 + 0.005" is in radians.
         for (std::size_t i = base; i < operands_.size(); ++i) {
             const typed_term& t = operands_[i].type;
-            if (t.known && !t.zero && !t.numeric && !holds_scaled_ratio_unit(operands_[i].node))
+            if (t.known && !t.zero && !t.numeric &&
+                (!holds_scaled_ratio_unit(operands_[i].node) ||
+                 (t.literal_count > 0 && holds_pi(operands_[i].node))))
                 return;
         }
         // A number's type is shared only with numbers equal to it, which change alike.
