@@ -501,6 +501,14 @@ TEST_CASE("gas volumes at two reference temperatures converted by the volume fac
     passes(gas, {"V_us = 37.3*V_n", "V_us = 37.33*V_n", "V_us = 35.31*V_s", "V_us = 35.38*V_s",
                  "V_s = 1.055*V_n", "V_m = V_n*24*37.3/1000", "V_n = V_us/37.3"});
     passes(gas, {"V_n = V_s*273.15/288.15"});
+    // A standard cubic foot the description puts at 68 °F (the US EPA's, 40 CFR 60.2, from
+    // memory): 1 scfm = 60 × 0.0283168 × 273.15/293.15 = 1.583 Nm³/h, and the volume factor
+    // 1.699 alone is 7.3 % off; the warning names the stated temperature.
+    const std::string epa = "Q_s : scfm \"exhaust, dry standard at 68 °F\"\nQ_n : Nm3/h\n";
+    passes(epa, {"Q_n = 1.583*Q_s"});
+    const auto off = run(epa, "Q_n = 1.699*Q_s");
+    CHECK(count_of(off, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(off, plumb::rules::unit_scale), "at 68 °F"));
 }
 
 // A leak's flow at line pressure from a table at 100 psig, scaled by absolute pressure:

@@ -25,6 +25,7 @@
 #include <cctype>
 #include <cmath>
 #include <cstddef>
+#include <cstdlib>
 #include <fmt/format.h>
 #include <limits>
 #include <numbers>
@@ -1014,6 +1015,47 @@ class checker {
         return false;
     }
 
+    // "Q_s : scfm "exhaust, standard at 68 °F"": a gas volume whose description states a
+    // reference temperature other than its unit's usual one (the US EPA's standard cubic foot
+    // at 68 °F, 40 CFR 60.2, from memory, beside the gas trade's 60 °F): the stated one rules.
+    // Read from the first temperature written in °C or °F between -10 and 40 °C.
+    static std::optional<reference_volume> stated_reference_volume(const symbol_entry& e) {
+        std::optional<reference_volume> v = reference_volume_in(e.unit_text);
+        const std::string_view d = e.description;
+        if (!v || d.empty())
+            return v;
+        const auto digit = [](char c) { return c >= '0' && c <= '9'; };
+        for (std::size_t at = 0; at < d.size(); ++at) {
+            if (!digit(d[at]) || (at > 0 && (digit(d[at - 1]) || d[at - 1] == '.')))
+                continue;
+            std::size_t end = at;
+            while (end < d.size() && (digit(d[end]) || d[end] == '.'))
+                ++end;
+            std::size_t unit = end;
+            while (unit < d.size() && d[unit] == ' ')
+                ++unit;
+            std::string_view rest = d.substr(unit);
+            std::size_t mark = 0;
+            if (rest.starts_with("\u00B0"))
+                mark = 2;
+            else if (rest.starts_with("deg "))
+                mark = 4;
+            if (rest.size() <= mark || (rest[mark] != 'C' && rest[mark] != 'F') ||
+                (rest.size() > mark + 1 &&
+                 std::isalpha(static_cast<unsigned char>(rest[mark + 1])) != 0))
+                continue;
+            const double value = std::strtod(std::string(d.substr(at, end - at)).c_str(), nullptr);
+            const double kelvins =
+                rest[mark] == 'C' ? value + 273.15 : (value + 459.67) * 5.0 / 9.0;
+            if (kelvins < 263.15 || kelvins > 313.15)
+                continue;
+            v->kelvins = kelvins;
+            v->name = d.substr(at, unit + mark + 1 - at);
+            return v;
+        }
+        return v;
+    }
+
     // A product of symbols and numbers whose gas volumes at reference conditions all share one
     // reference temperature: that temperature, and the net power the volumes stand in.
     std::optional<reference_volume> reference_volume_of(std::uint32_t k) const {
@@ -1043,7 +1085,7 @@ class checker {
                 const symbol_entry* e = symbols_.find(text(n.range));
                 if (e == nullptr || (unit_marks_of(e->unit_text) & at_reference_conditions) == 0)
                     return false;
-                r = reference_volume_in(e->unit_text);
+                r = stated_reference_volume(*e);
             } else {
                 return other = true;
             }
@@ -1416,7 +1458,7 @@ class checker {
                                    *e->compact_dim == temperature_dimension()));
                 return false;
             }
-            const std::optional<reference_volume> v = reference_volume_in(e->unit_text);
+            const std::optional<reference_volume> v = stated_reference_volume(*e);
             if (!v || std::abs(v->power) != 1)
                 return other = true;
             const bool up = v->power * sign > 0;
@@ -1484,7 +1526,7 @@ class checker {
             if (e == nullptr || !e->compact_dim)
                 return false;
             if ((unit_marks_of(e->unit_text) & at_reference_conditions) != 0) {
-                const std::optional<reference_volume> v = reference_volume_in(e->unit_text);
+                const std::optional<reference_volume> v = stated_reference_volume(*e);
                 if (flow != syntax::no_index || base != at || !v || v->power * sign != 1)
                     correction = true; // two, or a volume at reference conditions below
                 flow = at;
