@@ -749,3 +749,20 @@ TEST_CASE("a conversion beside 9.81 is not the number read as gravity or water")
         CHECK(message_of(r, plumb::rules::gravity_number).rfind("'9.81' is read as", 0) == 0);
     }
 }
+
+// The sensible load q = 1.08·cfm·ΔT in Btu/h (ASHRAE Fundamentals, ch. 18, from memory) holds
+// the density of standard air: on a flow in actual cubic feet (a hot exhaust) it is a warning.
+TEST_CASE("the air trade's 1.08 on a flow at actual conditions") {
+    const std::string d = "q : Btu/h\nQ_s : cfm \"supply air\"\nQ_a : acfm \"dryer exhaust\"\n"
+                          "Q_x : cfm \"exhaust, actual at 300 °F\"\nΔT : °R\n";
+    const auto standard = run(d + "q = 1.08*Q_s*ΔT\n");
+    CHECK(problems_in(standard) == 0);
+    for (const char* actual : {"q = 1.08*Q_a*ΔT", "q = 1.08*Q_x*ΔT"}) {
+        CAPTURE(actual);
+        const auto r = run(d + actual + "\n");
+        CHECK(problems_in(r) == 1);
+        CHECK(std::any_of(r.diagnostics.begin(), r.diagnostics.end(), [](const auto& x) {
+            return x.rule == plumb::rules::trade_constant && x.level == plumb::severity::warning;
+        }));
+    }
+}

@@ -2438,6 +2438,10 @@ class checker {
             if (is_water_density_or_weight(*reading.quantity)) [[unlikely]]
                 report_specific_gravity_against_water(operands_[base + readings[r].operand],
                                                       reading, multiplies, written);
+            else if (reading.quantity->only_in == carried_quantity::term_kind::volume_flow ||
+                     reading.quantity->what == "the heat capacity of a volume of air") [[unlikely]]
+                report_standard_air_number_on_actual_flow(operands_[base + readings[r].operand],
+                                                          reading, written, node);
         }
         return true;
     }
@@ -2483,6 +2487,47 @@ class checker {
         d.notes.push_back({fmt::format("move {} to the {}, beside water's specific weight, as in "
                                        "p*2.31/SG, 0.433*SG*h and Q*H*SG/3960",
                                        quote(against), water_at),
+                           {}});
+    }
+
+    // "1.08*Q_acfm*ΔT" on a dryer's exhaust: the air trade's numbers hold the density of
+    // standard air (0.075 lb/ft³, ASHRAE Fundamentals, ch. 1, from memory), so they want a flow
+    // at standard conditions; a flow in actual cubic feet at 300 °F is some 30 % less dense.
+    // Said where a flow in the term is declared in acfm or described as actual.
+    [[gnu::noinline]] void report_standard_air_number_on_actual_flow(const operand& term,
+                                                                     const gravity_reading& reading,
+                                                                     const std::string& written,
+                                                                     std::uint32_t node) {
+        std::uint32_t actual = syntax::no_index;
+        for_each_factor(term.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind != expr_kind::symbol || sign < 0)
+                return false;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e == nullptr || !e->compact_dim || !(*e->compact_dim == volume_flow_dim))
+                return false;
+            std::string lower(e->description);
+            for (char& c : lower)
+                c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+            if (e->unit_text.find("acfm") != std::string_view::npos ||
+                lower.find("actual") != std::string::npos ||
+                lower.find("line conditions") != std::string::npos)
+                actual = at;
+            return actual != syntax::no_index;
+        });
+        if (actual == syntax::no_index)
+            return;
+        diagnostic& d = report(
+            rules::trade_constant,
+            fmt::format("{} carries {} for standard air, but {} is a flow at actual conditions: "
+                        "at another temperature or pressure the air's density, and the number, "
+                        "differ",
+                        written, reading.quantity->what, quote(actual)),
+            file_.nodes[node].range);
+        d.level = severity::warning;
+        add_term(d, term);
+        d.notes.push_back({"correct the flow to standard conditions first, or write the air's "
+                           "density at its temperature and pressure with c_p",
                            {}});
     }
 
