@@ -2,7 +2,7 @@
 shared by the review books' make_books.py scripts (review13 on; earlier folders keep their own
 copies).
 
-Defined names, AVERAGE, IF, MIN/MAX/SUM over ranges, string results, ROUND, ROUNDUP, VLOOKUP
+Defined names, AVERAGE, IF, MIN/MAX/SUM over ranges, string results, ROUND, ROUNDUP, ROUNDDOWN, VLOOKUP
 over a two-dimensional range with Excel's approximate match by default (the last row whose key
 is not greater than the value), TRUE/FALSE, LOG10, SIN, AND, OR and SUMPRODUCT.
 """
@@ -110,9 +110,13 @@ class Evaluator:
             f = 10.0 ** n
             return math.ceil(abs(x) * f - 1e-12) / f * (1 if x >= 0 else -1)
 
+        def round_down(x, n=0):
+            f = 10.0 ** n
+            return math.floor(abs(x) * f + 1e-12) / f * (1 if x >= 0 else -1)
+
         env = {
             "_v": self.value, "_r": rng, "VLOOKUP": vlookup, "ROUND": round_half_away,
-            "ROUNDUP": round_up, "TRUE": True, "FALSE": False, "PI": lambda: math.pi, "SQRT": math.sqrt, "LN": math.log,
+            "ROUNDUP": round_up, "ROUNDDOWN": round_down, "TRUE": True, "FALSE": False, "PI": lambda: math.pi, "SQRT": math.sqrt, "LN": math.log,
             "EXP": math.exp, "ABS": abs, "RADIANS": math.radians, "COS": math.cos,
             "SIN": math.sin, "LOG10": math.log10, "AND": lambda *a: all(a), "OR": lambda *a: any(a),
             "SUMPRODUCT": lambda a, b: sum(x * y for x, y in zip(a, b)),
