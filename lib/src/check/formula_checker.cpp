@@ -1875,8 +1875,14 @@ class checker {
             }
             const std::span<const scale_literal> numbers(literals_.data() + t.literal_begin,
                                                          t.literal_count);
-            for (std::size_t k = 0; k < numbers.size(); ++k)
+            // The cheap test first: most mismatches hold no number a quantity could be.
+            bool any_fits = false;
+            for (std::size_t k = 0; k < numbers.size(); ++k) {
                 texts[k] = text(file_.nodes[numbers[k].node].range);
+                any_fits = any_fits || lacks_gravity_number(lacking, numbers[k].exponent);
+            }
+            if (!any_fits)
+                continue;
             std::array<declared_factor, 8> factors{};
             std::array<std::uint32_t, 8> factor_nodes{};
             std::size_t factor_count = 0;
