@@ -1876,12 +1876,7 @@ class checker {
             const std::span<const scale_literal> numbers(literals_.data() + t.literal_begin,
                                                          t.literal_count);
             // The cheap test first: most mismatches hold no number a quantity could be.
-            bool any_fits = false;
-            for (std::size_t k = 0; k < numbers.size(); ++k) {
-                texts[k] = text(file_.nodes[numbers[k].node].range);
-                any_fits = any_fits || lacks_gravity_number(lacking, numbers[k].exponent);
-            }
-            if (!any_fits)
+            if (!numbers_could_carry(numbers, lacking, texts))
                 continue;
             std::array<declared_factor, 8> factors{};
             std::array<std::uint32_t, 8> factor_nodes{};
@@ -2284,6 +2279,18 @@ class checker {
         return true;
     }
 
+    // Whether any of a term's numbers could carry a quantity the term lacks (the cheap test
+    // before a reading); their texts go to `texts`, as the reading wants them.
+    bool numbers_could_carry(std::span<const scale_literal> numbers, const dimension& lacking,
+                             std::span<std::string_view> texts) const {
+        bool any = false;
+        for (std::size_t k = 0; k < numbers.size() && k < texts.size(); ++k) {
+            texts[k] = text(file_.nodes[numbers[k].node].range);
+            any = any || lacks_gravity_number(lacking, numbers[k].exponent);
+        }
+        return any;
+    }
+
     // The air's density in a total load, 4.5·cfm·Δh or 1.2·(L/s)·Δh, as in its moisture.
     static carried_quantity::term_kind kind_of(const typed_term& t) {
         using term_kind = carried_quantity::term_kind;
@@ -2379,12 +2386,7 @@ class checker {
             }
             const std::span<const scale_literal> numbers(literals_.data() + t.literal_begin,
                                                          t.literal_count);
-            bool any_fits = false;
-            for (std::size_t k = 0; k < numbers.size(); ++k) {
-                texts[k] = text(file_.nodes[numbers[k].node].range);
-                any_fits = any_fits || lacks_gravity_number(lacking, numbers[k].exponent);
-            }
-            if (!any_fits)
+            if (!numbers_could_carry(numbers, lacking, texts))
                 return false;
             const auto reading =
                 read_gravity_number(t.scale, reference_scale, numbers,

@@ -750,13 +750,12 @@ class workbook_checker {
         return it == range_cache_.end() ? cell_value{} : it->second;
     }
 
-    // The numbers multiplied into the formula's result, each with the power it enters with (a
-    // divisor -1, (B4/1000)^2 -2): the outermost product only, where a conversion factor
-    // written into a formula stands. Each keeps the interval its printed digits stand for.
-    void top_factors(std::uint32_t root, double root_exponent,
-                     std::vector<scale_literal>& out) const {
-        // Left to right over an explicit stack: a product of 100,000 cells must not recurse
-        // once per factor.
+    // Calls `visit(node, exponent)` for each factor of the outermost product under `root`,
+    // with the power it enters with (a divisor -1, (B4/1000)^2 -2), left to right, until it
+    // returns false; returns whether every factor was visited.
+    template <class Visit>
+    bool for_each_top_factor(std::uint32_t root, double root_exponent, Visit&& visit) const {
+        // Over an explicit stack: a product of 100,000 cells must not recurse once per factor.
         std::vector<std::pair<std::uint32_t, double>> pending{{root, root_exponent}};
         while (!pending.empty()) {
             const auto [node, exponent] = pending.back();
@@ -775,23 +774,40 @@ class workbook_checker {
             case syntax::expr_kind::power:
                 if (lowered_.tree.nodes[n.rhs].kind == syntax::expr_kind::number)
                     if (const auto e =
-                            rational::parse(listing_->text(lowered_.tree.nodes[n.rhs].range)))
+                            rational::parse(listing_->text(lowered_.tree.nodes[n.rhs].range))) {
                         pending.emplace_back(n.lhs, exponent * e->to_double());
+                        break;
+                    }
+                if (!visit(node, exponent))
+                    return false;
                 break;
-            case syntax::expr_kind::number: {
-                const std::string_view text = listing_->text(n.range);
-                const auto v = rational::parse(text);
-                if (v && !v->is_zero() && out.size() < 32) {
-                    scale_literal l = read_literal(text, v->to_double(), node, v);
-                    l.exponent = exponent;
-                    out.push_back(l);
-                }
-                break;
-            }
             default:
+                if (!visit(node, exponent))
+                    return false;
                 break;
             }
         }
+        return true;
+    }
+
+    // The numbers multiplied into the formula's result, each with its power: the outermost
+    // product only, where a conversion factor written into a formula stands. Each keeps the
+    // interval its printed digits stand for.
+    void top_factors(std::uint32_t root, double root_exponent,
+                     std::vector<scale_literal>& out) const {
+        for_each_top_factor(root, root_exponent, [&](std::uint32_t node, double exponent) {
+            const auto& n = lowered_.tree.nodes[node];
+            if (n.kind != syntax::expr_kind::number)
+                return true;
+            const std::string_view text = listing_->text(n.range);
+            const auto v = rational::parse(text);
+            if (v && !v->is_zero() && out.size() < 32) {
+                scale_literal l = read_literal(text, v->to_double(), node, v);
+                l.exponent = exponent;
+                out.push_back(l);
+            }
+            return true;
+        });
     }
 
     // =B4*9.81*B5 beside Pa: standard gravity written as a number, as in the notation (see
@@ -854,41 +870,27 @@ class workbook_checker {
         std::array<declared_factor, 8> cells{};
         std::array<std::string, 8> names{};
         std::size_t count = 0;
-        std::vector<std::pair<std::uint32_t, double>> pending{{root, 1.0}};
-        while (!pending.empty()) {
-            const auto [node, exponent] = pending.back();
-            pending.pop_back();
-            const auto& n = lowered_.tree.nodes[node];
-            switch (n.kind) {
-            case syntax::expr_kind::group:
-                pending.emplace_back(n.lhs, exponent);
-                break;
-            case syntax::expr_kind::multiply:
-            case syntax::expr_kind::divide:
-                pending.emplace_back(n.rhs,
-                                     n.kind == syntax::expr_kind::divide ? -exponent : exponent);
-                pending.emplace_back(n.lhs, exponent);
-                break;
-            case syntax::expr_kind::number:
-                break;
-            case syntax::expr_kind::reference: {
+        // A function's value or a sum might hold the unit that is off: no note then.
+        const bool weighed =
+            for_each_top_factor(root, 1.0, [&](std::uint32_t node, double exponent) {
+                const auto& n = lowered_.tree.nodes[node];
+                if (n.kind == syntax::expr_kind::number)
+                    return true;
+                if (n.kind != syntax::expr_kind::reference)
+                    return false;
                 const syntax::reference_value& cell = lowered_.tree.references[n.lhs];
                 // With the result on no scale, a cell in °C or °F here is a difference.
-                if (!cell.dim || count + 1 == cells.size())
-                    return;
-                const auto dim = compact_dimension::fitted(*cell.dim);
-                if (!dim)
-                    return;
+                const auto dim = cell.dim ? compact_dimension::fitted(*cell.dim) : std::nullopt;
+                if (!dim || count + 1 == cells.size())
+                    return false;
                 names[count] = fmt::format("'{}'", listing_->text(n.range));
                 cells[count++] = {*dim, cell.scale, exponent,
                                   cell.offset != nullptr ? cell.offset->symbol
                                                          : std::string_view{}};
-                break;
-            }
-            default:
-                return; // a function's value or a sum might hold the unit that is off
-            }
-        }
+                return true;
+            });
+        if (!weighed)
+            return;
         names[count] = "the result";
         cells[count++] = {*written_dim, written.unit.scale, -1.0, written.unit.text};
         const auto found = read_constant_in_other_units(
