@@ -15,7 +15,7 @@ must stay clean. The findings plumb makes beyond the planted ones, and the plant
 misses, are recorded with their reasons in review_notes.py (EXTRA, MISSED, RENAMED), after
 running the frozen binary (see the review report).
 
-Run: python3 make_books.py  ->  *.xlsx, *.cells.plumb, *.expect, expect.json in this folder
+Run: python3 make_books.py  ->  *.xlsx, *.cells.plumb, *.expect (where absent; --expect rewrites them) in this folder
 """
 import json
 import math
@@ -26,65 +26,16 @@ import sys
 HERE = os.path.dirname(os.path.abspath(__file__))
 sys.path.insert(0, HERE)
 sys.path.insert(0, os.path.dirname(HERE))
-from xlsx_writer import write_xlsx  # noqa: E402 (the shared writer in corpus/sheets)
+from item_sheet import ItemSheet, write_books  # noqa: E402 (shared in corpus/sheets)
 
 CAUTION = ("Invented scenario, data for demonstration only. A dimensionally consistent formula can "
            "still be wrong; this check does not replace independent review under local codes and "
            "licensed practice.")
+ItemSheet.caution = CAUTION
 SIDECAR_HEAD = ("# Invented scenario; demonstration only. A dimensionally consistent formula can\n"
                 "# still be wrong; this check does not replace independent review under local\n"
                 "# codes and licensed practice.\n")
 
-
-class ItemSheet:
-    """An 'Item | Symbol | Value | Unit' sheet. Formulas name other rows as {key} and rows of
-    other item sheets as {Sheet.key}; planted rows carry (rule, what)."""
-
-    def __init__(self, name, title, sources, first_row=6):
-        self.name = name
-        self.cells = {"A1": title, "A2": sources, "A3": CAUTION,
-                      f"A{first_row - 1}": "Item", f"B{first_row - 1}": "Symbol",
-                      f"C{first_row - 1}": "Value", f"D{first_row - 1}": "Unit"}
-        self.row = first_row
-        self.keys = {}
-        self.pending = []
-        self.planted = {}
-
-    def add(self, key, label, symbol, value, unit=None, planted=None):
-        r = self.row
-        self.row += 1
-        self.keys[key] = r
-        self.cells[f"A{r}"] = label
-        self.cells[f"B{r}"] = symbol
-        self.pending.append((r, value))
-        if unit is not None:
-            self.cells[f"D{r}"] = unit
-        if planted:
-            self.planted[f"{self.name}!C{r}"] = planted
-        return r
-
-    def ref(self, key):
-        """An absolute reference from another sheet."""
-        return f"{self.name}!$C${self.keys[key]}"
-
-    def cell(self, key):
-        return f"C{self.keys[key]}"
-
-    def finish(self, others=()):
-        others = {o.name: o for o in others}
-
-        def sub(m):
-            k = m.group(1)
-            if "." in k:
-                sheet, key = k.split(".")
-                return others[sheet].ref(key)
-            return f"C{self.keys[k]}"
-
-        for r, value in self.pending:
-            if isinstance(value, str) and value.startswith("="):
-                value = re.sub(r"\{([A-Za-z0-9_.]+)\}", sub, value)
-            self.cells[f"C{r}"] = value
-        return self.cells
 
 
 # --------------------------------------------------------------------------------------------
@@ -663,61 +614,8 @@ except ImportError:
     pass
 
 
-def formula_cells(book):
-    return [f"{name}!{cell}" for name, cells in book["sheets"] for cell, raw in cells.items()
-            if isinstance(raw, str) and raw.startswith("=")]
-
-
-def book_formula(book, ref):
-    sheet, cell = ref.split("!")
-    return dict(book["sheets"])[sheet][cell]
-
-
 def main():
-    summary = {"_caution": CAUTION}
-    for stem, book in BOOKS.items():
-        write_xlsx(os.path.join(HERE, stem + ".xlsx"), book["sheets"], book.get("names"))
-        if book.get("sidecar"):
-            with open(os.path.join(HERE, stem + ".cells.plumb"), "w", encoding="utf-8") as f:
-                f.write(book["sidecar"])
-        formulas = formula_cells(book)
-        for cell in book["planted"]:
-            assert cell in formulas, f"{stem}: {cell} is not a formula cell"
-        correct = [c for c in formulas if c not in book["planted"]]
-        missed = MISSED.get(stem, {})
-        with open(os.path.join(HERE, stem + ".expect"), "w", encoding="utf-8") as f:
-            f.write("# sheet!cell rule: the planted mistakes plumb must report; every other\n"
-                    "# formula cell must stay clean (written by make_books.py, review20).\n"
-                    "# Invented scenario. A dimensionally consistent formula can still be wrong;\n"
-                    "# this check does not replace independent review under local codes and\n"
-                    "# licensed practice.\n")
-            for cell, (rule, what) in book["planted"].items():
-                f.write(f"# planted: {what}\n")
-                if cell in missed:
-                    f.write(f"# a slip plumb still misses: {cell} {book_formula(book, cell)} "
-                            f"{missed[cell]}\n")
-                elif cell in RENAMED.get(stem, {}):
-                    f.write(f"# planted as {rule}; plumb names it {RENAMED[stem][cell]}\n"
-                            f"{cell} {RENAMED[stem][cell]}\n")
-                else:
-                    f.write(f"{cell} {rule}\n")
-            extra = EXTRA.get(stem, [])
-            if extra:
-                f.write("\n# found beyond the planted mistakes (kept so that any change shows):\n")
-                for comment, line in extra:
-                    f.write(f"# {comment}\n{line}\n")
-        summary[stem] = {
-            "trade": book["trade"],
-            "planted": {c: {"rule": r, "what": w} for c, (r, w) in book["planted"].items()},
-            "correct": correct,
-            "formulas": {c: book_formula(book, c) for c in formulas},
-        }
-    with open(os.path.join(HERE, "expect.json"), "w", encoding="utf-8") as f:
-        json.dump(summary, f, indent=1, ensure_ascii=False)
-    for stem, s in summary.items():
-        if stem.startswith("_"):
-            continue
-        print(f"{stem}: {len(s['planted'])} planted, {len(s['correct'])} correct formula cells")
+    write_books(HERE, BOOKS, {"EXTRA": EXTRA, "MISSED": MISSED, "RENAMED": RENAMED})
 
 
 if __name__ == "__main__":
