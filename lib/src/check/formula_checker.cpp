@@ -1665,7 +1665,7 @@ class checker {
             file_.nodes[file_.sides[f.first_side].root].range);
         d.level = severity::warning;
         d.notes.push_back({"revolutions count as cycles: write 2*pi*n for the angular speed "
-                           "(M = 60000*P/(2*pi*n) in kN·m from kW and rpm is M = 9549*P/n), or "
+                           "(M = 60000*P/(2*pi*n) in N·m from kW and rpm is M = 9549*P/n), or "
                            "declare the speed in rad/s",
                            {}});
     }
@@ -5351,16 +5351,16 @@ class checker {
                 std::string absolute_unit = absolute_symbol(*unit);
                 // "p_kPa = 6.895*p_g": the expression's numbers are in kPa by then, and so
                 // must the atmosphere added to them be.
+                // Its numbers as rounded conversions too (14.5 psi per bar is 14.5038).
                 double written_unit = off.type.scale;
                 for (std::uint32_t l = 0; l < off.type.literal_count; ++l) {
                     const scale_literal& number = literals_[off.type.literal_begin + l];
-                    if (looks_like_conversion(number, false))
-                        written_unit /= std::pow(number.value, number.exponent);
+                    written_unit /= std::pow(number.value, number.exponent);
                 }
                 if (!temperature && std::isfinite(written_unit) &&
                     std::abs(written_unit / unit->factor - 1.0) > 1e-3)
                     for (const auto& u : pressure_units)
-                        if (std::abs(written_unit / u.pascals - 1.0) < 3e-3) {
+                        if (std::abs(written_unit / u.pascals - 1.0) < 5e-3) {
                             zero = format_factor(standard_atmosphere / u.pascals);
                             absolute_unit = std::string(u.name);
                         }
