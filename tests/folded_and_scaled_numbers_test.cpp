@@ -468,6 +468,11 @@ TEST_CASE("a rate's temperature correction counts kelvins above a reference") {
     fails_with(decl, {"k_T = k_20*(T_w - 20)^θ"}, plumb::rules::variable_exponent);
     const auto r = run(decl, "k_T = k_20*θ^(T_w - 20)");
     CHECK(count_of(r, plumb::rules::temperature_correction) == 1);
+    // Either way round (a flux normalised to 20 °C as viscosity corrections write it, θ^(20 -
+    // T)): a kelvin reading counted from 20 counts from 20 K.
+    passes(decl, {"k_T = k_20*θ^(20 - T_w)"});
+    fails_with(decl, {"k_T = k_20*θ^(T_K - 20)", "k_T = k_20*θ^(20 - T_K)"},
+               plumb::rules::offset_scale);
 }
 
 // Thiem: T = Q·ln(r_2/r_1)/(2π·(s_1 − s_2)); Cooper-Jacob: T = 2.3·Q/(4π·Δs) (Freeze and

@@ -4632,8 +4632,13 @@ class checker {
                 };
                 if (const auto whole = leaves(1.0))
                     return whole;
+                // Folded with a constant, a number of three digits leaves a power of ten only:
+                // with a dozen constants and as many conversions some pairing fits almost any
+                // number (25.4 as ln 10/(4π) times 139 had left the 1.8 of the degrees).
+                const bool digits_enough = significant_digits(text(file_.nodes[l.node].range)) >= 4;
                 for (const folded_constant& c : folded_constants())
-                    if (const auto folded = leaves(c.value))
+                    if (const auto folded = leaves(c.value);
+                        folded && (digits_enough || near_power_of_ten(*folded, 0.0)))
                         return folded;
             }
         return std::nullopt;
@@ -7080,7 +7085,7 @@ class checker {
             reference < 200.0) {
             diagnostic& d = report(
                 rules::offset_scale,
-                fmt::format("the exponent {} takes {} from a reading on the absolute scale: the "
+                fmt::format("the exponent {} counts a reading on the absolute scale from {}: the "
                             "reference of a temperature correction is a reading in °C (20 °C "
                             "is 293.15 K), so this counts from {} K",
                             quote(exponent_node), format_factor(reference),
@@ -7129,12 +7134,18 @@ class checker {
     }
 
     // The number a reading less a number subtracts ("(T - 20)" gives 20), or 0.
+    // The number a temperature correction's exponent counts from, either way round: the 20
+    // of (T - 20), or of (20 - T), as viscosity corrections write it.
     double reference_subtracted(std::uint32_t node) const {
         node = syntax::inside_brackets(file_, node);
         const syntax::expr_node& n = file_.nodes[node];
-        if (n.kind != expr_kind::subtract || file_.nodes[n.rhs].kind != expr_kind::number)
+        if (n.kind != expr_kind::subtract)
             return 0.0;
-        return written_number(file_.nodes[n.rhs].range);
+        if (file_.nodes[n.rhs].kind == expr_kind::number)
+            return written_number(file_.nodes[n.rhs].range);
+        if (file_.nodes[n.lhs].kind == expr_kind::number)
+            return written_number(file_.nodes[n.lhs].range);
+        return 0.0;
     }
 
     // b^e exactly, for the whole exponents that constant exponents such as 2^3 need.
