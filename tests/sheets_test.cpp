@@ -636,3 +636,16 @@ TEST_CASE("sheets: a sidecar's measure comes before the trade's spelling of the 
         "Plant", sheet, "measure BHP = 33475 Btu/h \"boiler horsepower\"\n");
     CHECK(plumb::test::cell_findings(r) == std::vector<std::string>{"Plant!B4 unit-scale"});
 }
+
+TEST_CASE("sheets: CEILING's significance is in its number's unit, as written") {
+    // A wet well's depth rounded up to 50 mm: =CEILING(B2*1000,50) with B2 in m (ECMA-376
+    // Part 1, 18.17.7: CEILING(number, significance)); the 1000 converts the number, and the
+    // significance is in mm too. Without the 1000 the cell is 1000 times too small.
+    const std::string sheet =
+        "<worksheet><sheetData>" + plumb::test::value_and_unit_row(2, "1.234", "m") +
+        plumb::test::value_and_unit_row(3, "=CEILING(B2*1000,50)", "mm") +
+        plumb::test::value_and_unit_row(4, "=CEILING(B2,0.05)", "m") +
+        plumb::test::value_and_unit_row(5, "=CEILING(B2,50)", "mm") + "</sheetData></worksheet>";
+    CHECK(cell_findings_of_one_sheet("Well", sheet) ==
+          std::vector<std::string>{"Well!B5 unit-scale"});
+}

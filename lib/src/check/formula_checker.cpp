@@ -7304,6 +7304,20 @@ class checker {
         case function_rule::common: {
             std::vector<operand> kept;
             const std::span<const operand> values = with_bare_numbers_in_their_unit(args, kept);
+            // =CEILING(C23*1000, 50) in mm: the significance is in the number's unit, as
+            // written, and the number keeps its own conversion, as ABS's argument does.
+            if (values.size() == 1 && args.size() > 1 && values[0].node == args[0].node &&
+                args[0].type.known) [[unlikely]] {
+                keep_first_argument_numbers(1.0);
+                result.dim = args[0].type.dim;
+                result.scale = args[0].type.scale;
+                result.exact_scale = args[0].type.exact_scale;
+                result.offset = args[0].type.offset;
+                result.origin = args[0].type.origin;
+                result.origin_tolerance = args[0].type.origin_tolerance;
+                result.point = args[0].type.point;
+                return result;
+            }
             const agreement a = find_agreement(values);
             if (!a.odd.empty()) {
                 cut_literals_to(literal_start);
