@@ -532,3 +532,13 @@ TEST_CASE("absolute pressures added are one absolute reading, not a gauge one") 
     fails_with(chamber, {"p_g = p_sat + p_air", "p_g <= p_sat + p_air"},
                plumb::rules::offset_scale);
 }
+
+// The saturator pressure of dissolved air flotation in atmospheres, P = (p + 101.35)/101.35
+// with p in kPa gauge (Metcalf & Eddy, 4th ed., ch. 14, from memory, printing 101.35 for
+// 101.325): the atmosphere read within its handbook rounding, both to make the gauge reading
+// absolute and to find it added twice to an absolute one.
+TEST_CASE("the atmosphere printed 101.35 kPa is the atmosphere") {
+    const std::string daf = "p_g : kPag\np_abs : kPa \"absolute transmitter\"\nP : 1\n";
+    passes(daf, {"P = (p_g + 101.35)/101.35"}, 1);
+    fails_with(daf, {"P = (p_abs + 101.35)/101.35"}, plumb::rules::offset_scale);
+}
