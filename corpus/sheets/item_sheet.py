@@ -104,7 +104,10 @@ def write_expect(path, stem, book, folder, notes):
                 got = renamed[cell]
                 got, why = got if isinstance(got, tuple) else (got, None)
                 f.write(f"# planted as {rule}; plumb names it {got}" +
-                        (f": {why}" if why else "") + f"\n{cell} {got}\n")
+                        (f": {why}" if why else "") + "\n")
+                if cell in notes.get("RENOTE", {}):
+                    f.write(f"# planted: {notes['RENOTE'][cell]}\n")
+                f.write(f"{cell} {got}\n")
             else:
                 f.write(f"{cell} {rule}\n")
             if cell in messages:

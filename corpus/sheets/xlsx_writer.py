@@ -2,7 +2,7 @@
 shared by the review books' make_books.py scripts (review13 on; earlier folders keep their own
 copies).
 
-Defined names, AVERAGE, IF, MIN/MAX/SUM over ranges, string results, ROUND, ROUNDUP, ROUNDDOWN, VLOOKUP
+Defined names, AVERAGE, IF, MIN/MAX/SUM over ranges, string results, ROUND, ROUNDUP, ROUNDDOWN, CEILING, VLOOKUP
 over a two-dimensional range with Excel's approximate match by default (the last row whose key
 is not greater than the value), TRUE/FALSE, LOG10, SIN, AND, OR and SUMPRODUCT.
 """
@@ -116,7 +116,7 @@ class Evaluator:
 
         env = {
             "_v": self.value, "_r": rng, "VLOOKUP": vlookup, "ROUND": round_half_away,
-            "ROUNDUP": round_up, "ROUNDDOWN": round_down, "TRUE": True, "FALSE": False, "PI": lambda: math.pi, "SQRT": math.sqrt, "LN": math.log,
+            "ROUNDUP": round_up, "ROUNDDOWN": round_down, "CEILING": lambda x, m=1: math.ceil(x / m) * m, "TRUE": True, "FALSE": False, "PI": lambda: math.pi, "SQRT": math.sqrt, "LN": math.log,
             "EXP": math.exp, "ABS": abs, "RADIANS": math.radians, "COS": math.cos,
             "SIN": math.sin, "LOG10": math.log10, "AND": lambda *a: all(a), "OR": lambda *a: any(a),
             "SUMPRODUCT": lambda a, b: sum(x * y for x, y in zip(a, b)),
