@@ -649,3 +649,22 @@ TEST_CASE("sheets: CEILING's significance is in its number's unit, as written") 
     CHECK(cell_findings_of_one_sheet("Well", sheet) ==
           std::vector<std::string>{"Well!B5 unit-scale"});
 }
+
+TEST_CASE("sheets: a column's pressure typed with its number, plus the atmosphere") {
+    // p = 9.81·h + 101.325 in kPa from a depth in m (γ_w = 9.81 kN/m³; the standard atmosphere,
+    // 101.325 kPa, 3rd CGPM): absolute. Written as gauge it is the atmosphere added twice.
+    const std::string sheet =
+        "<worksheet><sheetData>" + plumb::test::value_and_unit_row(2, "12", "m") +
+        plumb::test::value_and_unit_row(3, "=9.81*B2+101.325", "kPa") +
+        plumb::test::value_and_unit_row(4, "=9.81*B2+101.325", "kPa(g)") +
+        plumb::test::value_and_unit_row(5, "=9.81*B2", "kPa(g)") + "</sheetData></worksheet>";
+    const auto found = plumb::test::cell_findings(plumb::test::check_one_sheet("Tank", sheet));
+    CHECK(std::count_if(found.begin(), found.end(), [](const std::string& f) {
+              return f.rfind("Tank!B3 ", 0) == 0 && f != "Tank!B3 gravity-number" &&
+                     f != "Tank!B3 trade-constant";
+          }) == 0);
+    CHECK(std::find(found.begin(), found.end(), "Tank!B4 sum-mismatch") != found.end());
+    CHECK(std::count_if(found.begin(), found.end(), [](const std::string& f) {
+              return f.rfind("Tank!B5 ", 0) == 0 && f != "Tank!B5 gravity-number";
+          }) == 0);
+}

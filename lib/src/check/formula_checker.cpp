@@ -3202,6 +3202,10 @@ class checker {
         }
         if (!numbers || unit == nullptr)
             return;
+        // "=9.81*C21 + 101.325": a term with a number that may be a quantity's (a column's
+        // pressure), beside the atmosphere, is for the sum's rules to read.
+        if (unit->literal_count > 0 && atmosphere_among_numbers(base)) [[unlikely]]
+            return;
         const compact_dimension dim = unit->dim;
         for (std::size_t i = base; i < operands_.size(); ++i) {
             auto& t = const_cast<typed_term&>(operands_[i].type);
@@ -3210,6 +3214,23 @@ class checker {
                 t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
             }
         }
+    }
+
+    // Whether a bare number among the sum's terms is the standard atmosphere in one of the
+    // trades' pressure units (101.325, 14.7, 1.01325).
+    bool atmosphere_among_numbers(std::size_t base) const {
+        for (std::size_t i = base; i < operands_.size(); ++i) {
+            const typed_term& t = operands_[i].type;
+            if (!t.known || !t.numeric || t.literal_count != 1)
+                continue;
+            const scale_literal& l = literals_[t.literal_begin];
+            const std::string_view written = text(file_.nodes[l.node].range);
+            for (const auto& u : pressure_units)
+                if (read_reference_state(pressure_dimension(), l.value, written, u.pascals) !=
+                    nullptr)
+                    return true;
+        }
+        return false;
     }
 
     // In a sum with a value on an offset scale, a bare number is a value in that unit
