@@ -13,6 +13,7 @@
 #include "test_support.hpp"
 #include "workbook_support.hpp"
 
+#include <algorithm>
 #include <doctest/doctest.h>
 #include <fstream>
 #include <tao/pegtl/contrib/analyze.hpp>
