@@ -427,6 +427,17 @@ TEST_CASE("workbook parity: how far off the value shown is counts the conversion
     figure("Off!B4", "the value shown is 3600 times too large");
     figure("Off!B7", "the value shown is 1000 times too small");
     figure("Off!B10", "the value shown is 60 times too large");
+    // A number of four digits that converts nothing here (0.5933 lb/yd³ per kg/m³ on a density
+    // already in lb/ft³; NIST SP 811 (2008), B.8: 1 lb/ft³ = 16.0185 kg/m³) is no formula's
+    // own coefficient: the figure is the units' alone, and the number is named.
+    const check_report density = check_one_sheet("Mix", sheet_of({
+                                                            {"150", "lb/ft3"},       // B2
+                                                            {"=B2*0.5933", "kg/m3"}, // B3
+                                                        }));
+    const diagnostic* d = finding(density, "Mix!B3", rules::unit_scale);
+    REQUIRE(d != nullptr);
+    CHECK(says(*d, "its units are 16.0185 times too small for it, its coefficient 0.5933 aside"));
+    CHECK(says(*d, "0.5933 counted as a coefficient"));
 }
 
 TEST_CASE("workbook parity: a heat flow times a °C reading is told to take the difference") {

@@ -1023,22 +1023,46 @@ class workbook_checker {
         const std::string off_text =
             off >= 1 ? format_factor(whole_ratio ? exact_needed : std::nullopt, off)
                      : format_factor(whole_ratio ? exact_inverse : std::nullopt, 1.0 / off);
+        // "=C34*0.5933": the factor stated leaves out a number that converts nothing here;
+        // say so, since it may be the conversion the engineer meant, wrongly (as the notation's
+        // checker says it), and do not call the units' ratio the value's.
+        std::string coefficients;
+        for (const auto& x : factors) {
+            const std::string_view text = listing_->text(lowered_.tree.nodes[x.node].range);
+            // Written to four digits or more, as conversions are (0.5933, 3.517); a 0.87 or a
+            // 384 is the formula's own, and the value shown is off by the units alone.
+            if (x.value != 1.0 && x.table_digits && !looks_like_conversion(x, true) &&
+                !is_time_ratio(x) && coefficients.size() < 80 && off != left)
+                coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ", text);
+        }
         diagnostic& d = report(
             severity::error, rules::unit_scale,
             reversed ? fmt::format("the conversion factor in this formula is the wrong way round: "
                                    "to give {} it must multiply by {}, but it multiplies by {}",
                                    written.unit.text, format_factor(exact_needed, needed),
                                    format_factor(exact_inverse, 1.0 / needed))
-                     : fmt::format("as written, this formula does not give {}, the unit written "
-                                   "for its cell: the value shown is {} times too {}",
-                                   where_unit, off_text, off >= 1 ? "small" : "large"),
+            : coefficients.empty()
+                ? fmt::format("as written, this formula does not give {}, the unit written "
+                              "for its cell: the value shown is {} times too {}",
+                              where_unit, off_text, off >= 1 ? "small" : "large")
+                : fmt::format("as written, this formula does not give {}, the unit written "
+                              "for its cell: its units are {} times too {} for it, its "
+                              "coefficient {} aside",
+                              where_unit, off_text, off >= 1 ? "small" : "large", coefficients),
             formula.range);
-        if (!reversed)
+        if (!reversed) {
             d.notes.push_back({fmt::format("its inputs give numbers in units of {} {}; "
                                            "convert them in the formula, or write the unit they "
                                            "give",
                                            format_factor(exact_needed, needed), written.unit.text),
                                {}});
+            if (!coefficients.empty())
+                d.notes.push_back(
+                    {fmt::format("{} counted as a coefficient, not a unit conversion; if it was "
+                                 "meant to convert units, it is not the factor these units need",
+                                 coefficients),
+                     {}});
+        }
         add_input_notes(d, f);
     }
 
