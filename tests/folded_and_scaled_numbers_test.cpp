@@ -728,3 +728,18 @@ TEST_CASE("the advice beside √3 printed 1.732 names the foot, not the gallon")
             feet = feet || n.message.find("by 3.28084") != std::string::npos;
     CHECK(feet);
 }
+
+// The heat trades' compound conversions (NIST SP 811 (2008), B.8: 1 Btu/lb = 2.326 kJ/kg
+// exactly; 1 Btu/(h·ft²·°F) = 5.678263 W/(m²·K)) are conversions, not coefficients: applied
+// where the units already agree they are not needed, and applied the wrong way round they are
+// named so.
+TEST_CASE("the heat trades' compound conversions count as conversions") {
+    const std::string d = "h_1, h_2 : kJ/kg\nh_b : Btu/lb\nU_1, U_2 : W/(m^2*K)\n"
+                          "U_b : Btu/(h*ft^2*degR)\n";
+    for (const char* right : {"h_1 = h_b*2.326", "U_1 = U_b*5.678"}) {
+        CAPTURE(right);
+        CHECK(plumb::test::problems_in(run(d, right)) == 0);
+    }
+    fails_with(d, {"h_2 = h_1*2.326", "U_2 = U_1*5.678", "h_b = h_1*2.326"},
+               plumb::rules::unit_scale);
+}

@@ -116,6 +116,22 @@ const std::vector<unit_ratio>& unit_ratios() {
                 out.push_back({r, exact});
                 out.push_back({1.0 / r, exact_product(rational(1), exact, true)});
             }
+        // Compound units of the heat trades that the table holds no row for (NIST SP 811
+        // (2008), B.8 and B.9): a specific energy's 2.326 kJ/kg per Btu/lb and specific heat's
+        // 4.1868 kJ/(kg·K) per Btu/(lb·°F), both exact; a U-value's 5.678263 W/(m²·K) per
+        // Btu/(h·ft²·°F), a conductivity's 1.730735 W/(m·K) per Btu/(h·ft·°F) and a density's
+        // 16.01846 kg/m³ per lb/ft³.
+        const std::array<std::pair<double, std::optional<rational>>, 5> compound{{
+            {2.326, rational(2326, 1000)},
+            {4.1868, rational(41868, 10000)},
+            {5.678263, std::nullopt},
+            {1.730735, std::nullopt},
+            {16.01846, std::nullopt},
+        }};
+        for (const auto& [r, exact] : compound) {
+            out.push_back({r, exact});
+            out.push_back({1.0 / r, exact ? exact_product(rational(1), exact, true) : exact});
+        }
         std::sort(out.begin(), out.end(),
                   [](const unit_ratio& x, const unit_ratio& y) { return x.approx < y.approx; });
         return out;
