@@ -273,3 +273,19 @@ TEST_CASE("unit scale: the factor in the message counts the numbers already writ
     // A coefficient of physics stays out of it.
     CHECK(factor_of("s = 0.5*a*t^2").find("counts 0.001 times") != std::string::npos);
 }
+
+// ppm by mass set equal to mg/L: the trades take them as equal in dilute water (common
+// practice), water's 1 kg/L between them. The finding stands (the dimensions differ), and a
+// note says what is between them and how to write it.
+TEST_CASE("ppm set equal to mg/L is told the water's density stands between them") {
+    const auto r = plumb::check_text(
+        "c.plumb", "Cl_ppm : ppm \"chloride\"\nCl_CW : mg/L \"chloride in the water\"\n"
+                   "Cl_ppm = Cl_CW\n");
+    REQUIRE(r.diagnostics.size() == 1);
+    CHECK(r.diagnostics[0].rule == plumb::rules::side_mismatch);
+    bool told = false;
+    for (const auto& n : r.diagnostics[0].notes)
+        told = told ||
+               n.message.find("the water's density (1 kg/L) between them") != std::string::npos;
+    CHECK(told);
+}

@@ -703,6 +703,8 @@ class checker {
             !note_constant_for_other_units(d, sides, a))
             note_acceleration_apart(d, sides, a);
         note_bare_quantity_apart(d, sides, a);
+        if ((symbols_.unit_marks() & mass_fractions) != 0) [[unlikely]]
+            note_fraction_beside_concentration(d, sides);
     }
 
     // "=0.61094*EXP(17.625*C4/(C4+243.04))" beside kPa (the Magnus fit of saturation
@@ -1986,6 +1988,41 @@ class checker {
             }
         }
         return false;
+    }
+
+    // "Cl_ppm = Cl_mgL": ppm by mass is a fraction, mg/L a mass per volume; in dilute water the
+    // trades take them as equal (common practice), the water's density, 1 kg/L, between them.
+    // The sides differ in dimension by exactly a density: say so, and how to write it.
+    void note_fraction_beside_concentration(diagnostic& d, std::span<const operand> sides) {
+        constexpr compact_dimension density = compact_dimension::whole({1, -3, 0, 0, 0, 0, 0});
+        if (sides.size() != 2 || !sides[0].type.known || !sides[1].type.known)
+            return;
+        try {
+            const dimension apart = (sides[0].type.dim / sides[1].type.dim).expand();
+            const auto fitted = compact_dimension::fitted(apart);
+            if (!fitted || !(*fitted == density || *fitted == compact_dimension{} / density))
+                return;
+        } catch (const std::exception&) {
+            return;
+        }
+        const auto in_fraction = [&](std::uint32_t node) {
+            return syntax::search_subtree(
+                file_, node, [&](std::uint32_t, const syntax::expr_node& n) {
+                    if (n.kind != expr_kind::symbol)
+                        return search_step::descend;
+                    const symbol_entry* e = symbols_.find(text(n.range));
+                    return e != nullptr && (e->unit_text.find("ppm") != std::string_view::npos ||
+                                            e->unit_text.find("ppb") != std::string_view::npos)
+                               ? search_step::found
+                               : search_step::skip;
+                });
+        };
+        if (!in_fraction(sides[0].node) && !in_fraction(sides[1].node))
+            return;
+        d.notes.push_back({"ppm and ppb by mass are fractions, mg/L a mass per volume: in dilute "
+                           "water 1 mg/L is taken as 1 ppm, the water's density (1 kg/L) between "
+                           "them; write it (ρ_w : kg/L = 1) on the side in mg/L to say so",
+                           {}});
     }
 
     // "V <= 7.5": a limit typed as a bare number has no unit; say how to give it one, in the

@@ -24,6 +24,7 @@ enum unit_mark : std::uint8_t {
     at_reference_conditions = 2, // Nm3, Sm³, scf: gas at a reference pressure and temperature
     apparent_power = 4,          // VA, kVA, MVA: a power factor away from the watts
     offset_scale_readings = 8,   // °C, °F, psig, barg: readings whose scale's zero is arbitrary
+    mass_fractions = 16,         // ppm, ppb: fractions the trades set beside mg/L in water
 };
 
 [[nodiscard]] inline std::uint8_t unit_marks_of(std::string_view unit_text) {
@@ -38,6 +39,8 @@ enum unit_mark : std::uint8_t {
         marks |= at_reference_conditions;
     if (has("VA") && !has("VAr") && !has("VAR"))
         marks |= apparent_power;
+    if (has("ppm") || has("ppb"))
+        marks |= mass_fractions;
     return marks;
 }
 
