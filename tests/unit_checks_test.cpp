@@ -289,3 +289,17 @@ TEST_CASE("ppm set equal to mg/L is told the water's density stands between them
                n.message.find("the water's density (1 kg/L) between them") != std::string::npos;
     CHECK(told);
 }
+
+// A ton declared where a ton of refrigeration was meant (1 TR = 12 000 Btu/h = 3.517 kW, NIST
+// SP 811 (2008), B.8): the table's ton is the short ton, a mass, and the note says so.
+TEST_CASE("a ton beside a power is told it is the short ton") {
+    const auto r = plumb::check_text("c.plumb", "E_c : ton*h \"stored cooling\"\nE_k : kWh\n"
+                                                "E_c = E_k/3.517\n");
+    REQUIRE(r.diagnostics.size() == 1);
+    CHECK(r.diagnostics[0].rule == plumb::rules::side_mismatch);
+    bool told = false;
+    for (const auto& n : r.diagnostics[0].notes)
+        told = told || n.message.find("for a ton of refrigeration (12 000 Btu/h) write TR") !=
+                           std::string::npos;
+    CHECK(told);
+}

@@ -705,6 +705,36 @@ class checker {
         note_bare_quantity_apart(d, sides, a);
         if ((symbols_.unit_marks() & mass_fractions) != 0) [[unlikely]]
             note_fraction_beside_concentration(d, sides);
+        if (sides.size() == 2 && sides[0].type.known && sides[1].type.known) [[unlikely]]
+            note_ton_beside_power(d, sides);
+    }
+
+    // "E_c : ton*h" beside kWh: the short ton where a ton of refrigeration was meant.
+    [[gnu::noinline]] void note_ton_beside_power(diagnostic& d, std::span<const operand> sides) {
+        dimension apart;
+        try {
+            apart = (sides[0].type.dim / sides[1].type.dim).expand();
+        } catch (const std::exception&) {
+            return;
+        }
+        for (const operand& side : sides) {
+            bool noted = false;
+            for_each_factor(side.node, [&](std::uint32_t at, int) {
+                const syntax::expr_node& n = file_.nodes[at];
+                if (n.kind != expr_kind::symbol)
+                    return false;
+                const symbol_entry* e = symbols_.find(text(n.range));
+                if (e == nullptr)
+                    return false;
+                if (auto note = ton_of_refrigeration_note(e->unit_text, apart)) {
+                    d.notes.push_back({std::move(*note), {}});
+                    noted = true;
+                }
+                return noted;
+            });
+            if (noted)
+                return;
+        }
     }
 
     // "=0.61094*EXP(17.625*C4/(C4+243.04))" beside kPa (the Magnus fit of saturation

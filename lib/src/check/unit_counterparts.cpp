@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <array>
+#include <cctype>
 #include <cmath>
 
 namespace plumb {
@@ -85,6 +86,23 @@ counterparts_of_unit unit_counterparts(const compact_dimension& dim, double si_s
         return {row.unit.name, {row.others.begin(), end}};
     }
     return {};
+}
+
+std::optional<std::string> ton_of_refrigeration_note(std::string_view unit_text,
+                                                     const dimension& apart) {
+    const std::size_t at = unit_text.find("ton");
+    if (at == std::string_view::npos ||
+        (at > 0 && std::isalpha(static_cast<unsigned char>(unit_text[at - 1])) != 0) ||
+        (at + 3 < unit_text.size() &&
+         std::isalpha(static_cast<unsigned char>(unit_text[at + 3])) != 0 &&
+         unit_text[at + 3] != 's'))
+        return std::nullopt;
+    const dimension power_per_mass =
+        dimension::from_exponents({rational(0), rational(2), rational(-3)});
+    if (!(apart == power_per_mass) && !(apart == power_per_mass.pow(rational(-1))))
+        return std::nullopt;
+    return std::string("'ton' is read as the short ton, 2000 lb, a mass; for a ton of "
+                       "refrigeration (12 000 Btu/h) write TR");
 }
 
 } // namespace plumb

@@ -5,6 +5,9 @@
 
 #include "units/compact_dimension.hpp"
 
+#include <optional>
+#include <string>
+
 #include <span>
 #include <string_view>
 
@@ -24,5 +27,11 @@ struct counterparts_of_unit {
 // `si_scale`; none where that unit is not one of the table's (a unit of neither system, or
 // one no trade constant is written beside).
 counterparts_of_unit unit_counterparts(const compact_dimension& dim, double si_scale);
+
+// "E : ton*h" beside kWh, "q : ton" beside kW: the table's ton is the short ton, a mass, where
+// the cooling trades mean a ton of refrigeration (TR). The note to add where a unit text holds
+// the word "ton" and the two sides are exactly a power per mass apart; empty otherwise.
+std::optional<std::string> ton_of_refrigeration_note(std::string_view unit_text,
+                                                     const dimension& apart);
 
 } // namespace plumb

@@ -1125,21 +1125,8 @@ class workbook_checker {
     // differs from it by exactly a power per mass; the refrigeration trade's ton is TR.
     static void note_ton_of_refrigeration(diagnostic& d, const dimension& computed,
                                           const cell_unit& written) {
-        const std::string_view text = written.unit.text;
-        const std::size_t at = text.find("ton");
-        if (at == std::string_view::npos ||
-            (at > 0 && std::isalpha(static_cast<unsigned char>(text[at - 1]))) ||
-            (at + 3 < text.size() && std::isalpha(static_cast<unsigned char>(text[at + 3])) &&
-             text[at + 3] != 's'))
-            return;
-        const dimension power_per_mass =
-            dimension::from_exponents({rational(0), rational(2), rational(-3)});
-        const dimension apart = computed / written.unit.dim;
-        if (!(apart == power_per_mass) && !(apart == power_per_mass.pow(rational(-1))))
-            return;
-        d.notes.push_back({"'ton' is read as the short ton, 2000 lb, a mass; for a ton of "
-                           "refrigeration (12 000 Btu/h) write TR",
-                           {}});
+        if (auto note = ton_of_refrigeration_note(written.unit.text, computed / written.unit.dim))
+            d.notes.push_back({std::move(*note), {}});
     }
 
     // "C8", or "Lift!C8" where the cell is on another sheet than the formula's, which has a C8
