@@ -558,3 +558,14 @@ TEST_CASE("a fit on the °C scale typed with bare constants: the advice keeps th
     CHECK(finding.notes.front().message.find("B {K}/(233.426 {K} + t_w)") != std::string::npos);
     passes(decl, {"p_v = 1 {mmHg}*10^(8.07131 - 1730.63 {K}/(233.426 {K} + t_w))"});
 }
+
+// An absolute temperature converted to the other absolute scale by its factor, and that
+// scale's offset zero added too (T_R = 1.8·T_K, T_K = T_R/1.8; NIST SP 811 (2008), 4.2.1.1):
+// the zero counted twice, as "T_K + 459.67" is. From a °C reading the same zero is right.
+TEST_CASE("an absolute temperature converted and given the other scale's zero as well") {
+    const std::string d = "T_K, T_K2 : K \"overhead temperature, absolute\"\n"
+                          "T_R : °R \"the same, absolute\"\nt_C : °C \"the same\"\n";
+    passes(d, {"T_R = 1.8*T_K", "T_R = 1.8*t_C + 491.67", "T_K2 = T_R/1.8"});
+    fails_with(d, {"T_R = 1.8*T_K + 459.67", "T_K2 = T_R/1.8 + 273.15"},
+               plumb::rules::offset_scale);
+}

@@ -2941,6 +2941,8 @@ class checker {
                                    file_.nodes[terms[first_odd].node].range);
             explain(d, terms, a, "terms");
             note_atmosphere_in_another_unit(d, terms, a);
+            if (a.reference && *a.reference == temperature_dimension()) [[unlikely]]
+                note_zero_added_to_converted_temperature(d, terms, a);
             note_scale_zero_beside_difference(d, terms, a);
             if (!note_gravity_in_other_units(d, terms, a) &&
                 !note_constant_for_other_units(d, terms, a))
@@ -3112,6 +3114,67 @@ class checker {
 
     // "ρ*g*h + 101.325" with the column in Pa: the atmosphere was written in kPa. The finding
     // stands (a bare number has no unit), but the fix is the unit, not the physics.
+    // "1.8*T_K + 459.67", "T_R/1.8 + 273.15": an absolute temperature converted by its factor
+    // to the other absolute scale, with that scale's offset zero added as well; as
+    // "14.5*p_abs + 14.7" is for pressures, the zero counted twice.
+    [[gnu::noinline]] void note_zero_added_to_converted_temperature(diagnostic& d,
+                                                                    std::span<const operand> terms,
+                                                                    const agreement& a) {
+        if (terms.size() != 2 || a.odd.size() != 1)
+            return;
+        const operand& number = terms[a.odd.front()];
+        const operand& reading = terms[1 - a.odd.front()];
+        const typed_term& t = reading.type;
+        if (!number.type.known || !number.type.numeric || number.type.literal_count != 1 ||
+            number.subtracted || !t.known || t.offset != nullptr || t.literal_count == 0 ||
+            !std::isfinite(t.scale))
+            return;
+        bool absolute_reading = false;
+        for_each_factor(reading.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind != expr_kind::symbol || sign < 0)
+                return false;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            absolute_reading = e != nullptr && e->compact_dim &&
+                               *e->compact_dim == temperature_dimension() &&
+                               e->offset_unit == nullptr && e->reading == 1;
+            return absolute_reading;
+        });
+        if (!absolute_reading)
+            return;
+        double converted = t.scale;
+        for (std::uint32_t k = 0; k < t.literal_count; ++k) {
+            const scale_literal& l = literals_[t.literal_begin + k];
+            converted /= std::pow(l.value, l.exponent);
+        }
+        // Each absolute scale with the offset scale whose zero is a number in it (NIST SP 811
+        // (2008), 4.2.1.1: 0 °C = 273.15 K, 0 °F = 459.67 °R).
+        struct absolute_scale {
+            const char* name;
+            double kelvins;
+            double other_zero;
+            const char* other;
+        };
+        static constexpr std::array<absolute_scale, 2> scales{
+            {{"K", 1.0, 273.15, "\u00B0C"}, {"\u00B0R", 5.0 / 9.0, 459.67, "\u00B0F"}}};
+        const double value = literals_[number.type.literal_begin].value;
+        for (const absolute_scale& sc : scales) {
+            if (std::abs(converted / sc.kelvins - 1.0) > 0.005 ||
+                std::abs(value / sc.other_zero - 1.0) > 3e-4)
+                continue;
+            d.rule = std::string(rules::offset_scale);
+            d.message =
+                fmt::format("{} is the zero of the {} scale in {}, added to {}, an "
+                            "absolute temperature converted to {} already: the sum "
+                            "counts that zero twice",
+                            quote(number.node), sc.other, sc.name, quote(reading.node), sc.name);
+            d.notes.push_back({fmt::format("drop the {}; it belongs only to a reading in {}",
+                                           display_text(file_.nodes[number.node].range), sc.other),
+                               {}});
+            return;
+        }
+    }
+
     // A product with an absolute pressure reading among its factors ("14.5*p_abs").
     bool holds_absolute_pressure(std::uint32_t term) const {
         return for_each_factor(term, [&](std::uint32_t at, int sign) {
