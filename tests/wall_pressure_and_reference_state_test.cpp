@@ -542,3 +542,14 @@ TEST_CASE("the atmosphere printed 101.35 kPa is the atmosphere") {
     passes(daf, {"P = (p_g + 101.35)/101.35"}, 1);
     fails_with(daf, {"P = (p_abs + 101.35)/101.35"}, plumb::rules::offset_scale);
 }
+
+// 14.5 psi per bar (NIST SP 811 (2008), B.8: 1 bar = 14.5038 psi) dividing a drop in psi is
+// the bar's conversion, not a reference pressure: the US bases in psi are 14.696, 14.7 and
+// 14.73 psia (common practice), which stay read as such.
+TEST_CASE("14.5 over a pressure in psi is the bar, not a reference state") {
+    const std::string drops = "Δp_a, Δp_b, Δp_t : bar \"pressure drop\"\nΔp_f : psi "
+                              "\"filter pressure drop\"\n";
+    passes(drops, {"Δp_t = Δp_a + Δp_b + Δp_f/14.5"});
+    const std::string gas = "q_s, q_a : cfm\np_f : psia\nT_R : °R\n";
+    passes(gas, {"q_s = q_a*(p_f/14.7)*(520/T_R)"}, 2);
+}

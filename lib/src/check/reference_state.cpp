@@ -39,8 +39,14 @@ const reference_state* read_reference_state(const compact_dimension& dim, double
                                             std::string_view written, double unit_scale) {
     if (!(value > 0) || !(unit_scale > 0) || !std::isfinite(value) || !std::isfinite(unit_scale))
         return nullptr;
+    // In psi the US trades' bases are 14.696, 14.7 and 14.73 psia: 14.5 there is the bar's
+    // 14.5038 psi, a conversion ("C30/14.5" from psi to bar), not IUPAC's 100 kPa.
+    constexpr double psi = 6894.757293168;
+    const bool in_psi = std::abs(unit_scale / psi - 1.0) < 1e-6;
     for (const reference_state& s : states()) {
         if (!(dim == s.dim))
+            continue;
+        if (in_psi && s.greatest > 1e4 && value < 14.6)
             continue;
         const double low = s.least / unit_scale;
         const double high = s.greatest / unit_scale;
