@@ -553,3 +553,15 @@ TEST_CASE("14.5 over a pressure in psi is the bar, not a reference state") {
     const std::string gas = "q_s, q_a : cfm\np_f : psia\nT_R : °R\n";
     passes(gas, {"q_s = q_a*(p_f/14.7)*(520/T_R)"}, 2);
 }
+
+// A stack's absolute pressure from the test day's barometer and the static gauge reading in
+// mbar: p_s = p_b + p_g/10 in kPa (EPA Method 2, from memory; 10 mbar = 1 kPa, SI Brochure 9th
+// ed.). The 10 takes the reading into the barometer's unit and weighs nothing; with both in
+// kPa the same 10 weighs a tenth of the reading, and the sum is no reading.
+TEST_CASE("a gauge reading divided into the barometer's unit is added whole") {
+    const std::string stack = "p_b : kPa \"barometric pressure, test day\"\np_sup : mbarg "
+                              "\"stack static\"\np_g : kPag\np_s : kPa \"stack absolute\"\n";
+    passes(stack, {"p_s = p_b + p_sup/10"});
+    fails_with(stack, {"p_s = p_b + p_g/10"}, plumb::rules::offset_scale);
+    fails_with(stack, {"p_s = p_b + p_sup"}, plumb::rules::unit_scale);
+}

@@ -3555,6 +3555,16 @@ class checker {
         return true;
     }
 
+    // Whether an absolute pressure among the sum's plain terms is in the unit `scale` (SI per
+    // written value), the unit a gauge term's divisor takes it into.
+    static bool gauge_divided_into_absolute_unit(std::span<const operand> terms, double scale) {
+        return std::any_of(terms.begin(), terms.end(), [&](const operand& o) {
+            return o.type.known && o.type.point && o.type.offset == nullptr &&
+                   o.type.dim == pressure_dimension() && o.type.literal_count == 0 &&
+                   std::abs(o.type.scale / scale - 1.0) < 1e-9;
+        });
+    }
+
     typed_term finish_offset_sum(std::span<const operand> terms, typed_term result,
                                  std::size_t literal_base, std::uint32_t index) {
         // The terms with units (not the numbers that shift the zero).
@@ -3593,6 +3603,13 @@ class checker {
             std::optional<rational> w = weight_of(t.type);
             if (w && (std::abs(w->num()) > 12 || w->den() > 12))
                 w.reset();
+            // "p_b + p_sup/10" with p_sup in mbar g and p_b in kPa: the 10 takes the gauge
+            // reading into the barometer's unit, and weighs nothing; "p_b + p_g/10" with both
+            // in kPa weighs a tenth of the reading.
+            if (w && w->num() == 1 && w->den() > 1 && t.type.offset != nullptr &&
+                t.type.offset->scale == unit_scale::gauge &&
+                gauge_divided_into_absolute_unit(terms, t.type.scale * w->den())) [[unlikely]]
+                w = rational(1);
             if (weight && w && std::isfinite(t.type.origin_tolerance)) {
                 try {
                     weight = t.subtracted ? *weight - *w : *weight + *w;
