@@ -4,7 +4,7 @@ copies).
 
 Defined names, AVERAGE, IF, MIN/MAX/SUM over ranges, string results, ROUND, ROUNDUP, ROUNDDOWN, CEILING, VLOOKUP
 over a two-dimensional range with Excel's approximate match by default (the last row whose key
-is not greater than the value), TRUE/FALSE, LOG10, SIN, AND, OR and SUMPRODUCT.
+is not greater than the value), TRUE/FALSE, LOG10, SIN, AND, OR, PRODUCT and SUMPRODUCT.
 """
 import math
 import re
@@ -119,6 +119,7 @@ class Evaluator:
             "ROUNDUP": round_up, "ROUNDDOWN": round_down, "CEILING": lambda x, m=1: math.ceil(x / m) * m, "TRUE": True, "FALSE": False, "PI": lambda: math.pi, "SQRT": math.sqrt, "LN": math.log,
             "EXP": math.exp, "ABS": abs, "RADIANS": math.radians, "COS": math.cos,
             "SIN": math.sin, "LOG10": math.log10, "AND": lambda *a: all(a), "OR": lambda *a: any(a),
+            "PRODUCT": lambda *a: math.prod(flatten(a)),
             "SUMPRODUCT": lambda a, b: sum(x * y for x, y in zip(a, b)),
             "MIN": lambda *a: min(flatten(a)), "MAX": lambda *a: max(flatten(a)),
             "SUM": lambda *a: sum(flatten(a)),
