@@ -5893,6 +5893,31 @@ class checker {
         return found.empty() ? std::string("T_ref") : found;
     }
 
+    // A number read as a reference state, or a gauge reading with its atmosphere, in ratio
+    // with an absolute reading: the product takes the reading's dimension and unit in its
+    // place, a pure ratio, and is no reading. False where the dimension overflowed (the
+    // product is then unknown).
+    static bool pair_number_with_reading(const reference_state_pairs::number& number,
+                                         reference_state_pairs::reading& reading,
+                                         typed_term& result) {
+        reading.paired = true;
+        try {
+            result.dim = number.sign > 0 ? result.dim * reading.dim : result.dim / reading.dim;
+        } catch (const std::exception&) {
+            result = unknown_type();
+            return false;
+        }
+        result.scale =
+            number.sign > 0 ? result.scale * reading.scale : result.scale / reading.scale;
+        result.exact_scale.reset();
+        result.value.reset();
+        result.numeric = false;
+        result.point = false;
+        result.origin = 0.0;
+        result.origin_tolerance = 0.0;
+        return true;
+    }
+
     // "F*(p_g + 14.7)/(100 + 14.7)" in a sheet (a leak's flow scaled from the table's 100 psig
     // by absolute pressure; common practice): the added numbers are a gauge reading and the
     // atmosphere in the unit of the absolute pressure they stand in ratio with, which the
@@ -5918,21 +5943,8 @@ class checker {
         }
         if (atmosphere == syntax::no_index)
             return false;
-        reading.paired = true;
-        try {
-            result.dim = number.sign > 0 ? result.dim * reading.dim : result.dim / reading.dim;
-        } catch (const std::exception&) {
-            result = unknown_type();
+        if (!pair_number_with_reading(number, reading, result))
             return true;
-        }
-        result.scale =
-            number.sign > 0 ? result.scale * reading.scale : result.scale / reading.scale;
-        result.exact_scale.reset();
-        result.value.reset();
-        result.numeric = false;
-        result.point = false;
-        result.origin = 0.0;
-        result.origin_tolerance = 0.0;
         for (std::uint32_t l = result.literal_begin; l < literals_.size(); ++l)
             if (literals_[l].node == number.node || literals_[l].node == sum.lhs ||
                 literals_[l].node == sum.rhs)
@@ -5982,22 +5994,8 @@ class checker {
                     read_reference_state(reading.dim, number.value, written, reading.scale);
                 if (state == nullptr)
                     continue;
-                reading.paired = true;
-                try {
-                    result.dim =
-                        number.sign > 0 ? result.dim * reading.dim : result.dim / reading.dim;
-                } catch (const std::exception&) {
-                    result = unknown_type();
+                if (!pair_number_with_reading(number, reading, result))
                     return;
-                }
-                result.scale =
-                    number.sign > 0 ? result.scale * reading.scale : result.scale / reading.scale;
-                result.exact_scale.reset();
-                result.value.reset();
-                result.numeric = false;
-                result.point = false;
-                result.origin = 0.0;
-                result.origin_tolerance = 0.0;
                 for (std::uint32_t l = result.literal_begin; l < literals_.size(); ++l) {
                     scale_literal& literal = literals_[l];
                     if (literal.node != number.node)
