@@ -705,7 +705,8 @@ class checker {
         note_bare_quantity_apart(d, sides, a);
         if ((symbols_.unit_marks() & mass_fractions) != 0) [[unlikely]]
             note_fraction_beside_concentration(d, sides);
-        if (sides.size() == 2 && sides[0].type.known && sides[1].type.known) [[unlikely]]
+        if ((symbols_.unit_marks() & tons) != 0 && sides.size() == 2 && sides[0].type.known &&
+            sides[1].type.known) [[unlikely]]
             note_ton_beside_power(d, sides);
     }
 

@@ -43,7 +43,7 @@ class type_stack {
   public:
     [[nodiscard]] std::size_t size() const { return size_; }
 
-    typed_term& push(const typed_term& t) {
+    [[gnu::always_inline]] typed_term& push(const typed_term& t) {
         if (size_ == chunks_.size() * chunk_size) [[unlikely]]
             grow();
         typed_term* slot = &chunks_[size_ / chunk_size][size_ % chunk_size];

@@ -25,6 +25,7 @@ enum unit_mark : std::uint8_t {
     apparent_power = 4,          // VA, kVA, MVA: a power factor away from the watts
     offset_scale_readings = 8,   // °C, °F, psig, barg: readings whose scale's zero is arbitrary
     mass_fractions = 16,         // ppm, ppb: fractions the trades set beside mg/L in water
+    tons = 32,                   // ton: the short ton, where cooling means a ton of refrigeration
 };
 
 [[nodiscard]] inline std::uint8_t unit_marks_of(std::string_view unit_text) {
@@ -41,6 +42,8 @@ enum unit_mark : std::uint8_t {
         marks |= apparent_power;
     if (has("ppm") || has("ppb"))
         marks |= mass_fractions;
+    if (has("ton"))
+        marks |= tons;
     return marks;
 }
 
