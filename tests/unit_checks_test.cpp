@@ -303,3 +303,15 @@ TEST_CASE("a ton beside a power is told it is the short ton") {
                            std::string::npos;
     CHECK(told);
 }
+
+// A number past a double's range (the largest is about 1.8e308, IEEE 754) would weigh as
+// infinity, where a scale rule sees nothing wrong: "x = y*1e400" had passed. It is an overflow
+// finding; a number in range beside it is weighed as before.
+TEST_CASE("a number past a double's range is an overflow finding, not a factor of one") {
+    const std::string d = "x, y : m\n";
+    const auto big = plumb::check_text("c.plumb", d + "x = y*1e400\n");
+    REQUIRE(big.diagnostics.size() == 1);
+    CHECK(big.diagnostics[0].rule == plumb::rules::overflow);
+    CHECK(plumb::check_text("c.plumb", d + "x = y*1e300\n").diagnostics.size() == 1);
+    CHECK(plumb::check_text("c.plumb", d + "x = y*1.0\n").diagnostics.empty());
+}

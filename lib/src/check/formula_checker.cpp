@@ -2753,6 +2753,18 @@ class checker {
 
     [[gnu::noinline]] typed_term eval_number(const syntax::expr_node& n, std::uint32_t index) {
         const number_reading& reading = read_number(text(n.range));
+        // "y*1e400": a number past a double's range would weigh as infinity, and a scale
+        // rule weighing infinity sees nothing wrong; it is a finding, and the formula's
+        // scale is not weighed.
+        if (!reading.value && !reading.zero &&
+            !std::isfinite(std::strtod(std::string(text(n.range)).c_str(), nullptr))) [[unlikely]] {
+            report(rules::overflow,
+                   fmt::format("the number {} is beyond the range plumb can weigh (about "
+                               "1.8e308), so the formula's units cannot be compared",
+                               display_text(n.range)),
+                   n.range);
+            return unknown_type();
+        }
         typed_term t = number_type(reading);
         if (!t.zero) {
             literals_.push_back(reading.literal);
