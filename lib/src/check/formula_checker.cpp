@@ -27,6 +27,7 @@
 #include <cstddef>
 #include <cstdlib>
 #include <fmt/format.h>
+#include <initializer_list>
 #include <limits>
 #include <numbers>
 #include <span>
@@ -2036,19 +2037,8 @@ class checker {
         } catch (const std::exception&) {
             return;
         }
-        const auto in_fraction = [&](std::uint32_t node) {
-            return syntax::search_subtree(
-                file_, node, [&](std::uint32_t, const syntax::expr_node& n) {
-                    if (n.kind != expr_kind::symbol)
-                        return search_step::descend;
-                    const symbol_entry* e = symbols_.find(text(n.range));
-                    return e != nullptr && (e->unit_text.find("ppm") != std::string_view::npos ||
-                                            e->unit_text.find("ppb") != std::string_view::npos)
-                               ? search_step::found
-                               : search_step::skip;
-                });
-        };
-        if (!in_fraction(sides[0].node) && !in_fraction(sides[1].node))
+        if (!holds_symbol_in_unit(sides[0].node, {"ppm", "ppb"}) &&
+            !holds_symbol_in_unit(sides[1].node, {"ppm", "ppb"}))
             return;
         d.notes.push_back({"ppm and ppb by mass are fractions, mg/L a mass per volume: in dilute "
                            "water 1 mg/L is taken as 1 ppm, the water's density (1 kg/L) between "
@@ -6386,17 +6376,23 @@ class checker {
              {}});
     }
 
-    // Whether a symbol under `node` is declared in circular mils (cmil, kcmil, MCM).
-    bool in_circular_mils(std::uint32_t node) const {
+    // Whether a symbol under `node` is declared in a unit whose text holds one of `parts`.
+    bool holds_symbol_in_unit(std::uint32_t node,
+                              std::initializer_list<std::string_view> parts) const {
         return syntax::search_subtree(file_, node, [&](std::uint32_t, const syntax::expr_node& n) {
             if (n.kind != expr_kind::symbol)
                 return search_step::descend;
             const symbol_entry* e = symbols_.find(text(n.range));
-            return e != nullptr && (e->unit_text.find("cmil") != std::string_view::npos ||
-                                    e->unit_text.find("MCM") != std::string_view::npos)
-                       ? search_step::found
-                       : search_step::skip;
+            const bool in = e != nullptr && std::any_of(parts.begin(), parts.end(), [&](auto p) {
+                                return e->unit_text.find(p) != std::string_view::npos;
+                            });
+            return in ? search_step::found : search_step::skip;
         });
+    }
+
+    // Whether a symbol under `node` is declared in circular mils (cmil, kcmil, MCM).
+    bool in_circular_mils(std::uint32_t node) const {
+        return holds_symbol_in_unit(node, {"cmil", "MCM"});
     }
 
     // 20.9 % or 21 % (20.95 % by volume, the US Standard Atmosphere's dry air, from memory).
