@@ -71,3 +71,28 @@ TEST_CASE("a scale's offset beside a temperature difference: the finding says it
     CHECK(problems_in(run(ranges, "@range-right R_K = R_F/1.8")) == 0);
     CHECK(problems_in(run(ranges, "@range-celsius R_K = R_C")) == 0);
 }
+
+// A gauge reading converted (14.5 psi per bar, NIST SP 811 (2008), B.8 rounded) with the
+// atmosphere added is absolute: set equal to a gauge reading, the advice is to drop the
+// atmosphere, and the step between the zeros is named as one atmosphere, not 14.7 psi seen
+// through the rounded 14.5. The conversion alone still passes.
+TEST_CASE("a converted gauge reading plus the atmosphere, set equal to a gauge reading") {
+    const std::string d = "p_set : bar g\np_psig : psig\np_0g : bar g\np_0a : bar\n";
+    CHECK(problems_in(run(d, "p_psig = 14.5*p_set")) == 0);
+    const auto r = run(d, "p_psig = 14.5*p_set + 14.7");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    const auto& finding = first_under(r, plumb::rules::offset_scale);
+    CHECK(says(finding, "one atmosphere (101325 Pa)"));
+    bool drop = false;
+    for (const auto& n : finding.notes)
+        drop = drop || n.message.find("drop the 14.7") != std::string::npos;
+    CHECK(drop);
+    // 14.7 added to a reading in bar g: the advice says it is the atmosphere in psi.
+    const auto bar = run(d, "p_0a = p_0g + 14.7");
+    REQUIRE(count_of(bar, plumb::rules::offset_scale) == 1);
+    bool psi = false;
+    for (const auto& n : first_under(bar, plumb::rules::offset_scale).notes)
+        psi = psi || n.message.find("14.7 is the atmosphere in psi") != std::string::npos;
+    CHECK(psi);
+    CHECK(problems_in(run(d, "p_0a = p_0g + 1.013")) == 0);
+}

@@ -743,3 +743,41 @@ TEST_CASE("the heat trades' compound conversions count as conversions") {
     fails_with(d, {"h_2 = h_1*2.326", "U_2 = U_1*5.678", "h_b = h_1*2.326"},
                plumb::rules::unit_scale);
 }
+
+// 1 cfm = 1.699 m³/h (NIST SP 811 (2008), B.8: 4.719474E-04 m³/s × 3600): the 60 minutes of
+// an hour are in the 1.699 already, and a 60 beside it counts them twice. A 60 the units need
+// (gpm to m³/h from the gallon's 0.003785 m³) still passes.
+TEST_CASE("a time ratio beside a conversion that holds it already") {
+    const std::string d = "Q : cfm\nQ_m : m^3/h\nQ_l : L/s\nQ_g : gpm\n";
+    fails_with(
+        d, {"Q_m = Q*1.699*60", "Q_m = Q*1.699/60", "Q_m = Q*0.02832*60*60", "Q_l = Q*0.4719*60"},
+        plumb::rules::unit_scale);
+    for (const char* right :
+         {"Q_m = Q*1.699", "Q_m = Q*0.02832*60", "Q_l = Q*0.4719", "Q_m = Q_g*0.003785*60"}) {
+        CAPTURE(right);
+        CHECK(plumb::test::problems_in(run(d, right)) == 0);
+    }
+}
+
+// 3.82 = 12/π in the machine shop's spindle speed n = 3.82·V/D, rpm from sfm and inches
+// (Machinery's Handbook, speeds and feeds, from memory): the circumference's π folded with
+// 12 in/ft. The same number without a π to stand for is still a wrong factor.
+TEST_CASE("a conversion folded with one over π") {
+    const std::string d = "n_t : rpm\nV_sfm : ft/min\nD_in : in\n";
+    CHECK(plumb::test::problems_in(run(d, "n_t = 3.82*V_sfm/D_in")) == 0);
+    CHECK(plumb::test::problems_in(run(d, "n_t = 12*V_sfm/(pi*D_in)")) == 0);
+    CHECK(plumb::test::problems_in(run(d, "n_t = 2.5*V_sfm/D_in")) > 0);
+}
+
+// Kinetics tables print energies in the thermochemical kilocalorie, 4.184 kJ exactly (NIST
+// SP 811 (2008), B.8), where a kcal row is the IT one, 4.1868 kJ: 4.184 reads as either, and
+// still the wrong way round when multiplied.
+TEST_CASE("the thermochemical calorie's 4.184 as a kcal conversion") {
+    const std::string d = "E_a : kJ/mol\nE_kcal : kcal/mol\nE_th : kcal_th/mol\n";
+    CHECK(plumb::test::problems_in(run(d, "E_kcal = E_a/4.184")) == 0);
+    CHECK(plumb::test::problems_in(run(d, "E_th = E_a/4.184")) == 0);
+    CHECK(plumb::test::problems_in(run(d, "E_kcal = E_a/4.1868")) == 0);
+    const auto r = run(d, "E_kcal = 4.184*E_a");
+    CHECK(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "wrong way round"));
+}

@@ -415,8 +415,10 @@ TEST_CASE("no prefixed spelling is ambiguous or silently shadowed") {
 TEST_CASE("prefixes never attach to units that refuse them") {
     // "kft" is a row of its own (ohms per 1000 ft), not k + ft.
     CHECK(must_resolve("kft").unit->name == "thousand feet");
+    // "kcal_th" is a row too (kinetics tables' kilocalorie), never k + cal_th.
+    CHECK(must_resolve("kcal_th").unit->name == "kilocalorie (thermochemical)");
     for (std::string_view symbol : {"kpsi", "Mft", "kmin", "kh", "mpsi", "kkg", "kkm", "m\u00B0C",
-                                    "kdegC", "kbbl", "kcP", "mhp", "kcal_th", "MBtu",
+                                    "kdegC", "kbbl", "kcP", "mhp", "MBtu",
                                     // "M" on oilfield volumes is the trade's thousand, never
                                     // the SI mega: only the rows Mscf and MMscf read it.
                                     "Mbbl", "kscf", "MSTB", "krpm", "kmgd"}) {

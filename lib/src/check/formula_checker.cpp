@@ -4929,7 +4929,7 @@ class checker {
         bool half_of_a_square_or_radius = false;
     };
     static std::span<const folded_constant> folded_constants() {
-        static const std::array<folded_constant, 12> constants{{
+        static const std::array<folded_constant, 13> constants{{
             {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false, true},
             {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false, true},
             // 9550 = 60000/(2π) in M = 9550*P/n (kW, rpm to N·m), 5252 = 33000/(2π) (hp, rpm
@@ -4951,6 +4951,10 @@ class checker {
             // 0.262 = π/12 in the belt maker's V = 0.262*D*n (in and rpm to ft/min), 0.05236 =
             // π/60 in v = π·D·n/60 (m and rpm to m/s): a circumference's π.
             {std::numbers::pi, "\u03C0", "a circumference's \u03C0 (v = \u03C0\u00B7D\u00B7n)",
+             false},
+            // 3.82 = 12/π in the machine shop's n = 3.82*V/D (sfm and inches to rpm; Machinery's
+            // Handbook, speeds and feeds, from memory): the same π, dividing.
+            {1.0 / std::numbers::pi, "1/\u03C0", "a circumference's \u03C0 (n = V/(\u03C0\u00B7D))",
              false},
             {std::numbers::ln10 / (2.0 * std::numbers::pi), "ln 10/(2\u03C0)",
              "the steady well-flow (Thiem) formula's constant, with log10 for ln,", true},
@@ -5223,7 +5227,10 @@ class checker {
                 continue;
             for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
                 const scale_literal& l = parts[i].literals[k];
-                if (!looks_like_conversion(l, !dimensionless) ||
+                // "Q_m3h = Q_cfm*1.699*60": 1.699 is m³/h per cfm already, and the minutes
+                // in an hour beside it are counted twice.
+                if (!(looks_like_conversion(l, !dimensionless) ||
+                      spare_time_ratio(l, ops[index[i]].type)) ||
                     (l.exponent == 1.0 && (l.value == 1e3 || l.value == 1e6 || l.value == 1e9) &&
                      l.value == counted_multiple(ops[index[i]].node)))
                     continue;
@@ -5510,13 +5517,20 @@ class checker {
                                   : std::abs(other.type.scale * 1.8 - 1.0) < 1e-9
                                       ? "the absolute scale (°R)"
                                       : "the absolute scale (K)");
+            // "14.5*p_g + 14.7" moves the zero by 14.7 psi seen through the rounded 14.5: the
+            // step is the atmosphere, and the stray digits would only puzzle.
+            const bool one_atmosphere =
+                !temperature && std::abs(std::abs(difference) / standard_atmosphere - 1.0) < 5e-3;
             diagnostic& d = report(
                 rules::offset_scale,
-                fmt::format("{} is on the {} scale but {} is on {}: the {} of this {} differ by {} "
-                            "{}",
-                            quote(off.node), unit != nullptr ? unit->symbol : "offset",
-                            quote(other.node), scale_of_other, "zeros", relation,
-                            format_factor(std::abs(difference)), temperature ? "K" : "Pa"),
+                fmt::format(
+                    "{} is on the {} scale but {} is on {}: the {} of this {} differ by {}",
+                    quote(off.node), unit != nullptr ? unit->symbol : "offset", quote(other.node),
+                    scale_of_other, "zeros", relation,
+                    one_atmosphere
+                        ? fmt::format("one atmosphere ({} Pa)", format_factor(standard_atmosphere))
+                        : fmt::format("{} {}", format_factor(std::abs(difference)),
+                                      temperature ? "K" : "Pa")),
                 file_.nodes[off.node].range);
             add_term(d, off);
             add_term(d, other);
@@ -5576,8 +5590,11 @@ class checker {
                 }
                 if (has_number)
                     advice = fmt::format("the number added does not put the zero where the other "
-                                         "side has it; {}",
-                                         advice);
+                                         "side has it; {}{}",
+                                         atmosphere_in_other_unit(off, written_unit), advice);
+                if (const std::optional<std::string> added =
+                        atmosphere_added_to_gauge(other, off, temperature))
+                    advice = *added;
                 d.notes.push_back({std::move(advice), {}});
             } else if (unit != nullptr && other.type.offset != nullptr && temperature) {
                 // "T_C = T_F/1.8 - 32", "T_F = 1.8*T_C": the conversion between the two
@@ -5589,6 +5606,54 @@ class checker {
             }
             return;
         }
+    }
+
+    std::uint32_t skip_groups(std::uint32_t node) const {
+        while (file_.nodes[node].kind == expr_kind::group)
+            node = file_.nodes[node].lhs;
+        return node;
+    }
+
+    // The number added to a side "reading + number", groups stripped; no_index otherwise.
+    std::uint32_t number_added(std::uint32_t node) const {
+        node = skip_groups(node);
+        if (file_.nodes[node].kind != expr_kind::add)
+            return syntax::no_index;
+        const std::uint32_t rhs = skip_groups(file_.nodes[node].rhs);
+        return file_.nodes[rhs].kind == expr_kind::number ? rhs : syntax::no_index;
+    }
+
+    // "p_0a = p_0g + 14.7" on a sheet in bar: the number is the atmosphere, in another unit.
+    std::string atmosphere_in_other_unit(const operand& side, double reading_unit) const {
+        const std::uint32_t number = number_added(side.node);
+        if (number == syntax::no_index || !std::isfinite(reading_unit))
+            return {};
+        const std::string_view written = text(file_.nodes[number].range);
+        const double value = read_number(written).literal.value;
+        for (const auto& u : pressure_units)
+            if (std::abs(reading_unit / u.pascals - 1.0) > 5e-3 &&
+                read_reference_state(pressure_dimension(), value, written, u.pascals) != nullptr)
+                return fmt::format("{} is the atmosphere in {}, not in the reading's unit; ",
+                                   written, u.name);
+        return {};
+    }
+
+    // "p_psig = 14.5*p_barg + 14.7": a gauge reading, converted, with the atmosphere added is
+    // absolute; the side it is set equal to is gauge, so the atmosphere is the slip.
+    std::optional<std::string> atmosphere_added_to_gauge(const operand& absolute,
+                                                         const operand& gauge,
+                                                         bool temperature) const {
+        const std::uint32_t number = number_added(absolute.node);
+        if (temperature || number == syntax::no_index ||
+            file_.nodes[skip_groups(gauge.node)].kind != expr_kind::symbol ||
+            !holds_gauge(file_.nodes[skip_groups(absolute.node)].lhs))
+            return std::nullopt;
+        const std::string written = display_text(file_.nodes[number].range);
+        return fmt::format("{} adds {}, the atmosphere, to a gauge reading, which makes it "
+                           "absolute, while {} is gauge: drop the {}, or declare {} absolute",
+                           quote(absolute.node), written,
+                           display_text(file_.nodes[gauge.node].range), written,
+                           display_text(file_.nodes[gauge.node].range));
     }
 
     // "p_abs = p_max + 92.1" in kPa, "p_a = p_g + 1" in bar: a number added to a gauge reading

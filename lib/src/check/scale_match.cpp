@@ -338,6 +338,17 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
     }
     l.power_of_ten = significant >= 1 && only_a_one;
     l.power = static_cast<std::int8_t>(std::clamp(first_place + exponent, -100, 100));
+    // Kinetics and thermochemistry tables work in the thermochemical calorie, 4.184 J exactly
+    // (NIST SP 811 (2008), B.8), where a kcal row is the IT one, 4.1868 J: 4.184 typed as a
+    // conversion stands for either calorie.
+    if (significant == 4 && l.high &&
+        std::abs(l.value / power_of_ten_value(l.power) - 4.184) < 1e-12) {
+        try {
+            l.high = std::max(*l.high, *exact * rational(41868, 41840));
+        } catch (const arithmetic_overflow&) {
+            l.high.reset();
+        }
+    }
     const bool whole = !has_point && e == std::string_view::npos;
     l.factor_like = !l.power_of_ten && (whole ? l.value >= 1000 : significant >= 3);
     // Safety and load factors (1.15, 1.35) have 3 digits and may lie near some unit ratio

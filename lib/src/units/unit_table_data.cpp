@@ -403,6 +403,11 @@ constexpr unit_definition rows[] = {
     absolute("cal_th", "calorie (thermochemical)", energy, 4.184, "4.184", prefixes::refused, nist),
     // Calories take no prefixes, yet the kilocalorie is everywhere, so it is a row.
     absolute("kcal", "kilocalorie (IT)", energy, 4186.8, "4186.8", prefixes::refused, nist),
+    absolute("kcal_th", "kilocalorie (thermochemical)", energy, 4184.0, "4184", prefixes::refused,
+             "NIST SP 811 (2008), B.8 calorie (thermochemical) 4.184, exact, × 1000"),
+    // A dust load's grains per actual cubic foot (common practice in baghouse sizing).
+    absolute("acf", "actual cubic foot", volume, 0.028316846592, "0.028316846592",
+             prefixes::refused, "NIST SP 811 (2008), B.8 cubic foot, exact, at line conditions"),
     absolute("Wh", "watt hour", energy, 3600.0, "3600", prefixes::refused, nist),
     absolute("kWh", "kilowatt hour", energy, 3.6e6, "3600000", prefixes::refused, nist),
     absolute("MWh", "megawatt hour", energy, 3.6e9, "3600000000", prefixes::refused,
