@@ -781,3 +781,14 @@ TEST_CASE("the thermochemical calorie's 4.184 as a kcal conversion") {
     CHECK(count_of(r, plumb::rules::unit_scale) == 1);
     CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "wrong way round"));
 }
+
+// A percentage times 100 set equal to a percentage is 100 times too large; a fraction times
+// 100 is the percentage. A drift loss of 0.005 % of the circulation written Q*0.005/100 (a
+// cooling tower's drift eliminators, common practice) is a percentage written out, decimals
+// and all.
+TEST_CASE("a hundred beside a percentage, and a percentage with decimals over 100") {
+    const std::string d = "f_e, E : %\nx : 1\nQ, Q_d : gpm\n";
+    fails_with(d, {"E = f_e*100", "E = 100*f_e*x"}, plumb::rules::unit_scale);
+    passes(d, {"E = x*100", "E = f_e", "Q_d = Q*0.005/100", "Q_d = Q*0.5/100", "Q_d = Q*2/100",
+               "Q_d = Q*f_e/100"});
+}

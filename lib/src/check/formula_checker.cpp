@@ -4382,10 +4382,17 @@ class checker {
         for (const auto& op : ops) {
             if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale) || op.type.numeric)
                 continue;
-            for (std::uint32_t l = 0; l < op.type.literal_count; ++l)
-                if (stands_for_a_conversion(literals_[op.type.literal_begin + l], !dimensionless) ||
-                    spare_time_ratio(literals_[op.type.literal_begin + l], op.type))
+            for (std::uint32_t l = 0; l < op.type.literal_count; ++l) {
+                const scale_literal& number = literals_[op.type.literal_begin + l];
+                if (stands_for_a_conversion(number, !dimensionless) ||
+                    spare_time_ratio(number, op.type))
                     return false;
+                // A 100 in a term in percent: see report_unneeded_factor.
+                if (dimensionless && number.power_of_ten &&
+                    std::abs(number.power * number.exponent) == 2 &&
+                    std::abs(op.type.scale - 0.01) < 1e-12)
+                    return false;
+            }
         }
         unit = first == nullptr ? 1.0 : (first->numeric ? 1.0 : first->scale);
         return true;
@@ -5257,11 +5264,18 @@ class checker {
     bool report_unneeded_factor(std::span<const operand> ops, std::span<const std::size_t> index,
                                 std::span<const scaled_operand> parts, bool dimensionless) {
         for (std::size_t i = 0; i < parts.size(); ++i) {
+            // "E_pct = f_pct*100": a percentage made a percentage again, where the term holds
+            // one and the units agree in percent without the 100.
+            const bool in_percent =
+                dimensionless && std::abs(parts[i].scale - 0.01) < 1e-12 &&
+                for_each_factor(ops[index[i]].node, [&](std::uint32_t at, int) {
+                    return dimensionless_unit_size(at) == std::optional<double>(0.01);
+                });
             // V*1000*L^3/(3*E*1000*I): conversions that cancel each other are none.
             double net = 1.0;
             const scale_literal* first = nullptr;
             for (const auto& l : parts[i].literals)
-                if (stands_for_a_conversion(l, !dimensionless) ||
+                if (stands_for_a_conversion(l, !dimensionless || in_percent) ||
                     spare_time_ratio(l, ops[index[i]].type)) {
                     net *= std::pow(l.value, l.exponent);
                     if (first == nullptr)
@@ -5318,6 +5332,8 @@ class checker {
     // "p_g*10/100": a percentage written as its number over 100 (10 % of the supply
     // pressure), no unit conversion, where the number just before the /100 is a whole one up
     // to 100.
+    // "Q*0.005/100", a drift of 0.005 % of the circulation, too: a decimal number up to 100
+    // that does not look like a conversion itself.
     bool percentage_written_out(const scale_literal& l) const {
         if (l.exponent != -1.0 || l.value != 100.0)
             return false;
@@ -5329,15 +5345,22 @@ class checker {
         if (end == std::string_view::npos || !std::isdigit(static_cast<unsigned char>(all[end])))
             return false;
         std::size_t begin = end;
-        while (begin > 0 && std::isdigit(static_cast<unsigned char>(all[begin - 1])))
+        bool point = false;
+        while (begin > 0 && (std::isdigit(static_cast<unsigned char>(all[begin - 1])) ||
+                             (all[begin - 1] == '.' && !point))) {
+            point = point || all[begin - 1] == '.';
             --begin;
+        }
         if (begin > 0 &&
             (all[begin - 1] == '.' || std::isalpha(static_cast<unsigned char>(all[begin - 1])) ||
              all[begin - 1] == '_'))
             return false;
-        const long number =
-            std::strtol(std::string(all.substr(begin, end - begin + 1)).c_str(), nullptr, 10);
-        return number >= 1 && number <= 100;
+        const std::string_view written = all.substr(begin, end - begin + 1);
+        const number_reading& number = read_number(written);
+        const double value = number.literal.value;
+        if (point && looks_like_conversion(number.literal, true))
+            return false;
+        return value > 0 && value <= 100 && (point || value >= 1);
     }
 
     bool report_unneeded(const operand& op, const scale_literal& l) {
