@@ -12,6 +12,7 @@
 #include <algorithm>
 #include <initializer_list>
 #include <string>
+#include <tuple>
 #include <utility>
 #include <vector>
 
@@ -869,4 +870,47 @@ TEST_CASE("workbook parity: Hazen-Williams' constant restated for the cell's uni
     CHECK_FALSE(flagged("S!B12"));
     CHECK(flagged("S!B11"));
     CHECK(flagged("S!B13"));
+}
+
+namespace {
+
+// A sheet of (label, value or formula, unit text) rows from row 2 on: label in A, value in B,
+// unit in C.
+std::string
+labelled_sheet(std::initializer_list<std::tuple<std::string, std::string, std::string>> rows) {
+    std::string xml = "<worksheet><sheetData>";
+    int r = 2;
+    for (const auto& [label, value, unit] : rows) {
+        std::string row = value_and_unit_row(r, value, unit);
+        const std::string n = std::to_string(r++);
+        row.insert(row.find('>') + 1,
+                   "<c r=\"A" + n + "\" t=\"inlineStr\"><is><t>" + label + "</t></is></c>");
+        xml += row;
+    }
+    return xml + "</sheetData></worksheet>";
+}
+
+} // namespace
+
+TEST_CASE("workbook parity: a specific gravity on the wrong side of water's 0.433") {
+    // p = 0.433·SG·h psi from ft of a liquid (common practice; γ_w = 62.4 lb/ft³ over 144
+    // in²/ft²): the SG multiplies, as in the notation, where 0.433*h/SG is off by SG squared.
+    // The cell's label says it holds a specific gravity.
+    const check_report r =
+        check_one_sheet("Pump", labelled_sheet({
+                                    {"Slurry specific gravity", "1.15", "-"},       // B2
+                                    {"Static head", "120", "ft"},                   // B3
+                                    {"Discharge pressure", "=0.433*B2*B3", "psig"}, // B4: right
+                                    {"Discharge pressure", "=0.433*B3/B2", "psig"}, // B5: slip
+                                }));
+    const diagnostic* sg = nullptr;
+    for (const auto& d : r.diagnostics)
+        if (const cell_place* c =
+                d.where.file != nullptr ? d.where.file->cell_at(d.where.range.begin) : nullptr)
+            if (cell_text(*c) == "Pump!B5" && d.rule == rules::gravity_number &&
+                d.level == severity::warning)
+                sg = &d;
+    REQUIRE(sg != nullptr);
+    CHECK(says(*sg, "is a specific gravity"));
+    CHECK(problems_in(r) == 1);
 }

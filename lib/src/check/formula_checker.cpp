@@ -2525,13 +2525,19 @@ class checker {
         std::uint32_t against = syntax::no_index;
         for_each_factor(term.node, [&](std::uint32_t at, int sign) {
             const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind != expr_kind::symbol)
-                return false;
-            const std::string_view name = text(n.range);
-            const symbol_entry* e = symbols_.find(name);
-            if (e == nullptr || !e->compact_dim || !e->compact_dim->is_dimensionless() ||
-                !names_specific_gravity(name, e->description))
-                return false;
+            if (n.kind == expr_kind::reference) {
+                // A workbook's cell whose row label says so (the front end reads it).
+                if (!file_.references[n.lhs].specific_gravity)
+                    return false;
+            } else {
+                if (n.kind != expr_kind::symbol)
+                    return false;
+                const std::string_view name = text(n.range);
+                const symbol_entry* e = symbols_.find(name);
+                if (e == nullptr || !e->compact_dim || !e->compact_dim->is_dimensionless() ||
+                    !names_specific_gravity(name, e->description))
+                    return false;
+            }
             if (sign != water_power)
                 against = at;
             return against != syntax::no_index;
@@ -2599,15 +2605,6 @@ class checker {
 
     static bool is_water_density_or_weight(const carried_quantity& q) {
         return q.what == "the specific weight of water" || q.what == "the density of water";
-    }
-
-    static bool names_specific_gravity(std::string_view name, std::string_view description) {
-        std::string lower(description);
-        for (char& c : lower)
-            c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
-        return name == "SG" || name.starts_with("SG_") || name == "sg" ||
-               lower.find("specific gravity") != std::string::npos ||
-               lower.find("relative density") != std::string::npos;
     }
 
     // "C_mg = C_ppm*M/24.45" in mg/Nm³: 24.45 L/mol is a gas at 25 °C, and a normal cubic metre

@@ -60,4 +60,14 @@ bool names_the_atmosphere(std::string_view name, std::string_view description) {
     return false;
 }
 
+bool names_specific_gravity(std::string_view name, std::string_view description) {
+    std::string lower(description);
+    for (char& c : lower)
+        if (c >= 'A' && c <= 'Z')
+            c = static_cast<char>(c - 'A' + 'a');
+    return name == "SG" || name.starts_with("SG_") || name == "sg" ||
+           lower.find("specific gravity") != std::string::npos ||
+           lower.find("relative density") != std::string::npos;
+}
+
 } // namespace plumb

@@ -51,6 +51,8 @@ struct reference_value {
     // A pressure or temperature cell whose row label says it is a difference ("Friction
     // loss", "Δp"): no reading, whatever its unit.
     bool difference = false;
+    // A pure number whose row label says it is a liquid's specific gravity.
+    bool specific_gravity = false;
     // A gas volume at reference conditions (Nm³, scf): its reference temperature and the power
     // it stands in in the cell's unit; 0 where the unit names none.
     std::int8_t reference_power = 0;

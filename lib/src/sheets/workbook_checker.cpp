@@ -546,21 +546,36 @@ class workbook_checker {
 
     // "Friction loss | dp_f | 12 | psi": the text cells before a value on its row, read as the
     // notation reads a symbol's name and description. The name is a text without blanks.
-    bool labelled_a_difference(std::size_t s, cell_address a) const {
-        constexpr std::uint32_t most_columns = 6;
+    // The text to the left of a cell on its row: its label, and a short one without spaces
+    // taken for its symbol ("SG", "ΔT").
+    struct row_label {
         std::string description;
         std::string_view name;
+    };
+    row_label label_of(std::size_t s, cell_address a) const {
+        constexpr std::uint32_t most_columns = 6;
+        row_label label;
         for (std::uint32_t column = a.column > most_columns ? a.column - most_columns : 0;
              column < a.column; ++column) {
             const cell* c = book_.sheets[s].find({a.row, column});
             if (c == nullptr || c->kind != cell_kind::text || c->text.size() > 80)
                 continue;
             if (c->text.find(' ') == std::string::npos && c->text.size() <= 12)
-                name = c->text;
-            description += c->text;
-            description += ' ';
+                label.name = c->text;
+            label.description += c->text;
+            label.description += ' ';
         }
-        if (!description.empty() && names_a_difference(name, description))
+        return label;
+    }
+
+    bool labelled_a_specific_gravity(std::size_t s, cell_address a) const {
+        const row_label label = label_of(s, a);
+        return !label.description.empty() && names_specific_gravity(label.name, label.description);
+    }
+
+    bool labelled_a_difference(std::size_t s, cell_address a) const {
+        const row_label label = label_of(s, a);
+        if (!label.description.empty() && names_a_difference(label.name, label.description))
             return true;
         // "ΔT [°F]", "Rise [K]": the column's heading, the nearest text above, names it one.
         const auto column = text_rows_[s].find(a.column);
@@ -614,6 +629,8 @@ class workbook_checker {
             target.value = v.value;
             target.difference =
                 r.area.single() && v.dim && labelled_a_difference(r.sheet, r.area.first);
+            target.specific_gravity = r.area.single() && v.dim && v.dim->is_dimensionless() &&
+                                      labelled_a_specific_gravity(r.sheet, r.area.first);
             note_reference_state(target, v.unit != nullptr ? std::string_view(v.unit->unit.text)
                                                            : std::string_view());
         }
@@ -634,7 +651,7 @@ class workbook_checker {
                 if (auto as_difference = equation_.check(root, f.written_text, written->unit, true);
                     !has_fault(as_difference))
                     verdict = std::move(as_difference);
-            if (!has_fault(*verdict)) {
+            if (!has_unit_fault(*verdict)) {
                 take_verdict(*verdict, f, formula);
                 ++report_.cells_checked;
                 ++report_.formulas_checked;
@@ -686,6 +703,16 @@ class workbook_checker {
     static bool has_fault(std::span<const diagnostic> found) {
         return std::any_of(found.begin(), found.end(),
                            [](const diagnostic& d) { return d.level != severity::note; });
+    }
+
+    // A fault of the units, as against a warning about a number the units agree with (an SG
+    // on the wrong side of water's 0.433, standard air's 1.08 on an actual flow): the cell's
+    // own check would only restate the units without the number's reading.
+    static bool has_unit_fault(std::span<const diagnostic> found) {
+        return std::any_of(found.begin(), found.end(), [](const diagnostic& d) {
+            return d.level != severity::note && d.rule != rules::gravity_number &&
+                   d.rule != rules::trade_constant;
+        });
     }
 
     // The notation's findings on the cell as the equation "written unit = formula", in a
