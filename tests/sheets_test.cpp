@@ -98,6 +98,18 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     CHECK(read_heading_unit("D (mm)")->scale == doctest::Approx(1e-3));
     CHECK(read_heading_unit("cp [kJ/(kg\u00B7K)]")->dim == plumb::test::typed(0, 2, -2, -1));
     CHECK_FALSE(read_heading_unit("Flow rate (design)"));
+    // Tables print a loss per a round length: NEC ch. 9, Table 9, "ohms to neutral per 1000
+    // feet"; friction loss in psi per 100 ft (from memory). 1 ft = 0.3048 m (NIST SP 811
+    // (2008), B.8).
+    const auto ohms = read_heading_unit("Z [\u03A9/1000 ft]");
+    REQUIRE(ohms);
+    CHECK(ohms->scale == doctest::Approx(1.0 / 304.8));
+    const auto friction = read_unit_text("psi/100 ft");
+    REQUIRE(friction);
+    CHECK(friction->dim == plumb::test::typed(1, -2, -2));
+    CHECK(friction->scale == doctest::Approx(6894.757 / 30.48));
+    CHECK(read_unit_text("m/100 m")->dim.is_dimensionless());
+    CHECK_FALSE(read_unit_text("psi/250 ft"));
     // Units as the trades type them beside cells (common practice), read as the notation's.
     const auto same = [](const std::string& typed, const char* unit) {
         CAPTURE(typed);

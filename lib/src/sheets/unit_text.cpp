@@ -305,6 +305,40 @@ std::string trade_spelling(std::string t) {
     return t;
 }
 
+// "psi/100 ft" as "psi/per_100_ft" with the measure line that defines it, which is returned;
+// the text is left alone, and nothing returned, where it holds no such length.
+std::string per_round_count(std::string& t) {
+    const std::size_t slash = t.find('/');
+    if (slash == std::string::npos || t.find('/', slash + 1) != std::string::npos)
+        return {};
+    std::size_t at = slash + 1;
+    while (at < t.size() && t[at] == ' ')
+        ++at;
+    // The trades' spelling brackets a spaced denominator: "psi/(100 ft)".
+    const bool bracketed = at < t.size() && t[at] == '(' && t.back() == ')';
+    if (bracketed)
+        ++at;
+    const std::size_t digits = at;
+    while (at < t.size() && t[at] >= '0' && t[at] <= '9')
+        ++at;
+    const std::string count = t.substr(digits, at - digits);
+    if (count != "10" && count != "100" && count != "1000")
+        return {};
+    while (at < t.size() && t[at] == ' ')
+        ++at;
+    const std::string length = t.substr(at, t.size() - at - (bracketed ? 1 : 0));
+    if (length.empty() || !is_letter(length.front()) ||
+        length.find_first_of(" ()*/^") != std::string::npos ||
+        !unit_table::standard().resolve(length))
+        return {};
+    const std::string name = "per_" + count + "_" + length;
+    if (name.find_first_not_of("abcdefghijklmnopqrstuvwxyzABCDEFGHIJKLMNOPQRSTUVWXYZ0123456789_") !=
+        std::string::npos)
+        return {};
+    t = t.substr(0, slash + 1) + name;
+    return "measure " + name + " = " + count + " " + length + "\n";
+}
+
 std::optional<written_unit> evaluate(std::string_view text, std::string_view measures) {
     std::string t = trim(text);
     if (t.empty() || t.size() > 40)
@@ -349,9 +383,12 @@ std::optional<written_unit> evaluate(std::string_view text, std::string_view mea
         }
     }
     // A row whose symbol holds a digit ("inH2O") is read as written.
-    const std::string notation = unit_table::standard().resolve(t) ? t : to_notation(t);
+    std::string notation = unit_table::standard().resolve(t) ? t : to_notation(t);
+    // "Ω/1000 ft", "psi/100 ft", "kW/100 scfm": tables print a loss per a round count of a
+    // unit, which is read as a measure of its own.
+    const std::string per_length = per_round_count(notation);
     // A declaration, not a quantity in braces: there "h" would be Planck's constant.
-    const source_file src("<unit>", as_declaration(notation, measures));
+    const source_file src("<unit>", as_declaration(notation, per_length + std::string(measures)));
     const syntax::parsed_file tree = parse_file(src);
     if (tree.has_syntax_error || !tree.diagnostics.empty() || tree.declarations.size() != 1)
         return std::nullopt;
