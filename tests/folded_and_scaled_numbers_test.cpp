@@ -204,6 +204,34 @@ TEST_CASE("a sum that is a side: the advice names the term not in the other side
     passes(joist, {"w = q*s/1000 + g_sw"});
 }
 
+TEST_CASE("a sum inside a side's product, and terms of different dimensions in a side") {
+    // A trapezoidal channel's area A = (b + z·y)·y (Chow, Open-Channel Hydraulics, 1959,
+    // Table 2-1, from memory) with b in ft and y in m: the ft term is off, wherever it stands.
+    const std::string channel = "A : m^2\nb : ft\nz : 1\ny : m\n";
+    for (const char* formula : {"A = (b + z*y)*y", "A = (z*y + b)*y"}) {
+        CAPTURE(formula);
+        const auto r = run(channel, formula);
+        REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+        CHECK(
+            plumb::test::says(first_under(r, plumb::rules::unit_scale), "multiply 'b' by 0.3048"));
+    }
+    passes(channel, {"A = (0.3048*b + z*y)*y"});
+    // A crane maker's moment in t·m beside kN·m: the term without g is the one named, and its
+    // hint says g multiplies it (1 tf = 9.80665 kN, NIST SP 811 (2008), B.8).
+    const std::string crane = "M, M_cr : kN*m\nM_tm : t*m\nH : kN\nt_b : m\n";
+    for (const char* formula : {"M = M_tm + H*t_b", "M = H*t_b + M_tm"}) {
+        CAPTURE(formula);
+        const auto r = run(crane, formula);
+        REQUIRE(count_of(r, plumb::rules::sum_mismatch) == 1);
+        const auto& d = first_under(r, plumb::rules::sum_mismatch);
+        bool named = false;
+        for (const auto& n : d.notes)
+            named = named || n.message.find("'M_tm'") == 0;
+        CHECK(named);
+    }
+    passes(crane, {"M = M_cr + H*t_b"});
+}
+
 TEST_CASE("kW beside W: the advice names the W term, not the one with a converted %") {
     // Input power from a shaft power and an efficiency in %, plus an auxiliary load in W (common
     // practice: P_in = P_s/(η/100) + P_aux): the % over 100 is a fraction, and the term off by

@@ -914,3 +914,22 @@ TEST_CASE("workbook parity: a specific gravity on the wrong side of water's 0.43
     CHECK(says(*sg, "is a specific gravity"));
     CHECK(problems_in(r) == 1);
 }
+
+TEST_CASE("workbook parity: the unit written for a cell says which term of a sum is off") {
+    // A heat leak in W/m times a length beside a pump's kW, in a kW cell: the W term is off by
+    // 1000 (SI Brochure 9th ed., Table 7: kilo = 10³), not the kW one.
+    const check_report r = check_one_sheet("Tank", sheet_of({
+                                                       {"25", "W/m"},            // B2
+                                                       {"180", "m"},             // B3
+                                                       {"45", "kW"},             // B4
+                                                       {"=B2*B3+B4", "kW"},      // B5: slip
+                                                       {"=B2*B3/1000+B4", "kW"}, // B6: right
+                                                   }));
+    const diagnostic* d = finding(r, "Tank!B5", rules::unit_scale);
+    REQUIRE(d != nullptr);
+    bool divide = false;
+    for (const auto& n : d->notes)
+        divide = divide || n.message.find("divide 'B2*B3' by 1000") != std::string::npos;
+    CHECK(divide);
+    CHECK(problems_in(r) == 1);
+}

@@ -604,6 +604,48 @@ class checker {
         return apply_power(base, exponent, n.lhs, n.rhs);
     }
 
+    // A side that is a product of one bracketed sum and symbols or cells: the sum's unit is
+    // the other side's over theirs, which says which of its terms is off.
+    void find_sum_among_factors(std::uint32_t root, const typed_term& other) {
+        if (!std::isfinite(other.scale) || !(other.scale > 0))
+            return;
+        const expr_kind kind = file_.nodes[root].kind;
+        if (kind != expr_kind::multiply && kind != expr_kind::divide)
+            return;
+        std::uint32_t sum = syntax::no_index;
+        double scale = other.scale;
+        bool plain = true;
+        for_each_factor(root, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            double factor = 0.0;
+            if ((n.kind == expr_kind::add || n.kind == expr_kind::subtract) && sign > 0 &&
+                sum == syntax::no_index) {
+                sum = at;
+                return false;
+            }
+            if (n.kind == expr_kind::symbol) {
+                if (const symbol_entry* e = symbols_.find(text(n.range));
+                    e != nullptr && e->dim && e->offset_unit == nullptr)
+                    factor = e->si_factor;
+            } else if (n.kind == expr_kind::reference) {
+                const syntax::reference_value& r = file_.references[n.lhs];
+                if (r.dim && r.offset == nullptr)
+                    factor = r.scale;
+            }
+            if (!(factor > 0) || !std::isfinite(factor)) {
+                plain = false;
+                return true;
+            }
+            scale = sign > 0 ? scale / factor : scale * factor;
+            return false;
+        });
+        if (!plain || sum == syntax::no_index || !std::isfinite(scale) || !(scale > 0))
+            return;
+        factor_sum_node_ = sum;
+        factor_sum_hint_ = typed_term{};
+        factor_sum_hint_.scale = scale;
+    }
+
     void check_formula(const syntax::formula& f) {
         current_ = &f;
         inner_scale_ratio_ = 0.0;
@@ -622,11 +664,14 @@ class checker {
             if (i > 0 && operands_[base].type.known && operands_[base].type.literal_count == 0) {
                 side_hint_ = &operands_[base].type; // on the type stack, which never moves
                 side_hint_node_ = s.root;
+                if (f.side_count == 2) [[unlikely]]
+                    find_sum_among_factors(s.root, operands_[base].type);
             }
             if (i > 0 && operands_[base].type.dim == velocity_squared_dim) [[unlikely]]
                 note_enthalpy_side(operands_[base], s.root);
             operands_.push_back({push_operand_type(s.root, types_base, f.side_count), s.root});
             side_hint_node_ = syntax::no_index;
+            factor_sum_node_ = syntax::no_index;
             enthalpy_side_ = syntax::no_index;
         }
         const scratch_region region(operands_, base, types_, types_base);
@@ -2137,6 +2182,10 @@ class checker {
     // The other side of the equation whose side is the sum at side_hint_node_.
     const typed_term* side_hint_ = nullptr;
     std::uint32_t side_hint_node_ = syntax::no_index;
+    // "(B_ft + z*y)*y" = A in m²: a sum that is a factor of a side, beside factors that are
+    // symbols or cells, and the scale the other side leaves for it.
+    std::uint32_t factor_sum_node_ = syntax::no_index;
+    typed_term factor_sum_hint_;
     const typed_term* sum_side_hint_ = nullptr; // while a side's sum is checked, the other side
     // The site's barometer where the file declares one: see declared_site_barometer.
     struct site_barometer {
@@ -2925,6 +2974,19 @@ class checker {
             a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty() && !prefer_dimensionless && read_column_and_atmosphere(base, index))
             a = find_agreement(terms, prefer_dimensionless);
+        // "M = M_tm + H*t" with M in kN·m: of two terms, the one with the other side's
+        // dimension is right, whichever came first.
+        if (a.odd.size() == 1 && terms.size() == 2 && index == side_hint_node_ &&
+            side_hint_ != nullptr && side_hint_->known) [[unlikely]] {
+            const std::size_t odd = a.odd.front();
+            const std::size_t other = 1 - odd;
+            if (terms[odd].type.known && terms[other].type.known && !terms[other].type.zero &&
+                side_hint_->dim == terms[odd].type.dim &&
+                !(side_hint_->dim == terms[other].type.dim)) {
+                a.reference = terms[odd].type.dim;
+                a.odd = {other};
+            }
+        }
         if (!a.odd.empty()) {
             const std::size_t first_odd = a.odd.front();
             std::string message;
@@ -2980,7 +3042,9 @@ class checker {
         // further up; the dimension stays known.
         double unit = 1.0;
         // A sum that is a side of an equation: the other side says which term is off.
-        sum_side_hint_ = index == side_hint_node_ ? side_hint_ : nullptr;
+        sum_side_hint_ = index == side_hint_node_    ? side_hint_
+                         : index == factor_sum_node_ ? &factor_sum_hint_
+                                                     : nullptr;
         result.scale = check_scales(terms, "terms of this sum", unit, &result.exact_scale)
                            ? unit
                            : std::numeric_limits<double>::quiet_NaN();

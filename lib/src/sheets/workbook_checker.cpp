@@ -22,6 +22,7 @@
 #include <fmt/format.h>
 #include <map>
 #include <set>
+#include <tuple>
 
 namespace plumb::sheets {
 
@@ -697,7 +698,44 @@ class workbook_checker {
             !(computed && computed->numeric && computed->dim.is_dimensionless())) {
             out_.resize(before);
             take_verdict(*verdict, f, formula);
+        } else if (verdict &&
+                   faults_moved(
+                       {out_.data() + before, out_.size() - before}, *verdict,
+                       lowered_.tree.nodes[lowered_.tree.sides[formula.first_side].root].range)) {
+            // The same faults, in other places: the notation's, which knew the unit written
+            // for the cell, say which term of a sum is off ("=C22*C23 + C24" in kW, C24 in kW).
+            out_.resize(before);
+            take_verdict(*verdict, f, formula);
         }
+    }
+
+    // Whether two checks of a cell found faults under the same rules, but not all in the same
+    // places, each inside the formula (terms of a sum), none on the whole of it.
+    static bool faults_moved(std::span<const diagnostic> a, std::span<const diagnostic> b,
+                             span whole) {
+        using fault = std::tuple<std::string_view, std::uint32_t, std::uint32_t>;
+        const auto faults = [&](std::span<const diagnostic> found) {
+            std::vector<fault> out;
+            for (const auto& d : found)
+                if (d.level != severity::note)
+                    out.emplace_back(d.rule,
+                                     d.where.range.begin == whole.begin &&
+                                             d.where.range.end == whole.end
+                                         ? 0U
+                                         : d.where.range.begin,
+                                     d.where.range.end);
+            std::sort(out.begin(), out.end());
+            return out;
+        };
+        const std::vector<fault> x = faults(a);
+        const std::vector<fault> y = faults(b);
+        if (x.empty() || x.size() != y.size() || x == y)
+            return false;
+        for (std::size_t i = 0; i < x.size(); ++i)
+            if (std::get<0>(x[i]) != std::get<0>(y[i]) || std::get<1>(x[i]) == 0 ||
+                std::get<1>(y[i]) == 0)
+                return false;
+        return true;
     }
 
     static bool has_fault(std::span<const diagnostic> found) {
