@@ -933,3 +933,21 @@ TEST_CASE("workbook parity: the unit written for a cell says which term of a sum
     CHECK(divide);
     CHECK(problems_in(r) == 1);
 }
+
+TEST_CASE("workbook parity: a formula that gives a word needs no unit") {
+    // A lining picked from a list by name ("Grass, short (mown)", Chow, Open-Channel
+    // Hydraulics, 1959, Table 5-6, from memory) stands above the verdicts, and its brackets
+    // hold no unit: a cell whose every value is text is not asked for one. A cell that can
+    // give a number under it still is.
+    std::string xml = "<worksheet><sheetData>"
+                      "<row r=\"2\"><c r=\"B2\" t=\"inlineStr\"><is><t>Grass, short (mown)</t>"
+                      "</is></c></row>";
+    xml += value_and_unit_row(3, "0.8", "-");
+    xml += "<row r=\"4\"><c r=\"B4\"><f>IF(B3&lt;1,\"subcritical\",\"SUPERCRITICAL\")</f>"
+           "<v>0</v></c></row>"
+           "<row r=\"5\"><c r=\"B5\"><f>IF(B3&lt;1,\"OK\",B3)</f><v>0</v></c></row>"
+           "</sheetData></worksheet>";
+    const check_report r = check_one_sheet("Channel", xml);
+    CHECK(finding(r, "Channel!B4", rules::no_unit) == nullptr);
+    CHECK(finding(r, "Channel!B5", rules::no_unit) != nullptr);
+}

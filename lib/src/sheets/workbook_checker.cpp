@@ -1414,7 +1414,7 @@ class workbook_checker {
 
     void report_unread_unit(const formula_cell& f) {
         const auto text = unread_.find(book_key(f.sheet, f.source->at));
-        if (text == unread_.end())
+        if (text == unread_.end() || yields_text(f.source->text))
             return;
         const std::string_view t = text->second.text;
         // "kip-ft", "kW(e)": a hyphen or a bracket joins a unit's parts as often as '*'.
@@ -1438,6 +1438,56 @@ class workbook_checker {
                                            text->second.heading ? "over" : "beside"),
                                f.text);
         d.notes.push_back({why_not_a_unit(text->second), {}});
+    }
+
+    // "=IF(C32<1,\"subcritical\",\"SUPERCRITICAL\")", "=\"OK\"", "=A1&\" m\"": a formula
+    // whose every value is text gives a word, which has no unit to be compared with.
+    static bool yields_text(std::string_view formula) {
+        if (formula.starts_with('='))
+            formula.remove_prefix(1);
+        while (!formula.empty() && formula.front() == ' ')
+            formula.remove_prefix(1);
+        while (!formula.empty() && formula.back() == ' ')
+            formula.remove_suffix(1);
+        if (formula.empty())
+            return false;
+        // The top level's arguments and whether a '&' joins texts there.
+        std::vector<std::string_view> arguments;
+        bool joined = false;
+        int depth = 0;
+        bool quoted = false;
+        std::size_t start = 0;
+        const std::size_t open = formula.find('(');
+        for (std::size_t i = 0; i < formula.size(); ++i) {
+            const char c = formula[i];
+            if (c == '"') {
+                quoted = !quoted;
+            } else if (quoted) {
+                continue;
+            } else if (c == '(') {
+                if (++depth == 1)
+                    start = i + 1;
+            } else if (c == ')') {
+                if (--depth == 0)
+                    arguments.push_back(formula.substr(start, i - start));
+            } else if (c == ',' && depth == 1) {
+                arguments.push_back(formula.substr(start, i - start));
+                start = i + 1;
+            } else if (c == '&' && depth == 0) {
+                joined = true;
+            }
+        }
+        if (joined)
+            return true;
+        if (formula.front() == '"')
+            return formula.size() >= 2 && formula.back() == '"' &&
+                   formula.find('"', 1) == formula.size() - 1;
+        std::string name(formula.substr(0, open == std::string_view::npos ? 0 : open));
+        for (char& c : name)
+            c = static_cast<char>(std::toupper(static_cast<unsigned char>(c)));
+        if (name != "IF" || arguments.size() != 3 || formula.back() != ')')
+            return false;
+        return yields_text(arguments[1]) && yields_text(arguments[2]);
     }
 
     void report_unitless_inputs() {
