@@ -569,3 +569,15 @@ TEST_CASE("an absolute temperature converted and given the other scale's zero as
     fails_with(d, {"T_R = 1.8*T_K + 459.67", "T_K2 = T_R/1.8 + 273.15"},
                plumb::rules::offset_scale);
 }
+
+// The kill mud weight KMW = MW + SIDPP/(0.052·TVD) (Bourgoyne et al., Applied Drilling
+// Engineering, SPE 1986, ch. 4, from memory): the shut-in drill pipe pressure is a gauge
+// reading at the top of a mud column open to the atmosphere, and over 0.052 psi/ft per ppg
+// times the depth it is the density that balances it. A gauge reading in a gas law's density
+// (ρ = p·M/(R·T)) still needs absolute pressure.
+TEST_CASE("a gauge reading over a column's depth is its gradient") {
+    const std::string decl = "MW, KMW : ppg\nSIDPP : psig\nTVD : ft\nG : psi/ft\n"
+                             "ρ : lb/ft^3\nM : g/mol\nR : J/(mol*K)\nT : K\n";
+    passes(decl, {"KMW = MW + SIDPP/(0.052*TVD)", "G = SIDPP/TVD"});
+    fails_with(decl, {"ρ = SIDPP*M/(R*T)"}, plumb::rules::offset_scale);
+}

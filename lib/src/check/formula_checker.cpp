@@ -59,6 +59,9 @@ constexpr compact_dimension length_dim = compact_dimension::whole({0, 1, 0, 0, 0
 constexpr compact_dimension time_dim = compact_dimension::whole({0, 0, 1, 0, 0, 0, 0});
 constexpr compact_dimension velocity_squared_dim = compact_dimension::whole({0, 2, -2, 0, 0, 0, 0});
 constexpr compact_dimension area_dim = compact_dimension::whole({0, 2, 0, 0, 0, 0, 0});
+// A pressure over a length: a column's gradient (psi/ft, kPa/m), or a specific weight.
+constexpr compact_dimension pressure_gradient_dim =
+    compact_dimension::whole({1, -2, -2, 0, 0, 0, 0});
 constexpr const compact_dimension& acceleration_dimension() {
     return acceleration;
 }
@@ -602,6 +605,24 @@ class checker {
         }
         const typed_term exponent = eval(n.rhs);
         return apply_power(base, exponent, n.lhs, n.rhs);
+    }
+
+    // Whether a product divides by a symbol or a cell declared a length (a depth).
+    bool divides_by_length(std::uint32_t k) const {
+        return for_each_factor(k, [&](std::uint32_t at, int sign) {
+            if (sign > 0)
+                return false;
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::symbol) {
+                const symbol_entry* e = symbols_.find(text(n.range));
+                return e != nullptr && e->compact_dim && *e->compact_dim == length_dimension();
+            }
+            if (n.kind == expr_kind::reference) {
+                const syntax::reference_value& r = file_.references[n.lhs];
+                return r.dim && *r.dim == dimension::base(base_dimension::length);
+            }
+            return false;
+        });
     }
 
     // A side that is a product of one bracketed sum and symbols or cells: the sum's unit is
@@ -7248,9 +7269,15 @@ class checker {
                                         side_hint_->known &&
                                         side_hint_->dim == length_dimension() && result.known &&
                                         result.dim == velocity_squared_dimension();
-            if (result.known &&
-                (result.dim == length_dimension() || result.dim == force_dimension() ||
-                 wall_stress || ring_tension || jet || bearing_area || head_without_g)) {
+            // SIDPP/(0.052*TVD), p_LOT/TVD: a gauge reading at the top of a column open to the
+            // atmosphere over its depth is the column's gradient, or the mud weight that
+            // balances it (Bourgoyne et al., Applied Drilling Engineering, 1986, ch. 4, from
+            // memory).
+            const bool column_gradient =
+                result.known && result.dim == pressure_gradient_dim && divides_by_length(index);
+            if (result.known && (result.dim == length_dimension() ||
+                                 result.dim == force_dimension() || wall_stress || ring_tension ||
+                                 jet || bearing_area || head_without_g || column_gradient)) {
                 result.offset = nullptr;
                 result.point = false;
                 result.origin = 0.0;
