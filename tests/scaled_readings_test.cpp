@@ -581,3 +581,14 @@ TEST_CASE("a gauge reading over a column's depth is its gradient") {
     passes(decl, {"KMW = MW + SIDPP/(0.052*TVD)", "G = SIDPP/TVD"});
     fails_with(decl, {"ρ = SIDPP*M/(R*T)"}, plumb::rules::offset_scale);
 }
+
+// US EPA Method 20 prints the correction to 15 % oxygen as C·5.9/(20.9 - O2), 20.9 - 15
+// folded (from memory): the folded number is in % as the sum below it is. Typed as the
+// fraction 0.059, it is 100 times too small.
+TEST_CASE("a reference oxygen folded into the number above the oxygen sum") {
+    const std::string decl = "O2 : %\nc, c_ref : mg/m^3\n";
+    passes(decl, {"c_ref = c*5.9/(20.9 - O2)", "c_ref = c*18/(21 - O2)",
+                  "c_ref = c*(20.9 - 15)/(20.9 - O2)"});
+    fails_with(decl, {"c_ref = c*0.059/(20.9 - O2)", "c_ref = c*0.18/(21 - O2)"},
+               plumb::rules::unit_scale);
+}

@@ -6597,11 +6597,25 @@ class checker {
         if (below == syntax::no_index)
             return false;
         const std::string_view written = text(file_.nodes[below].range);
+        // "C*5.9/(20.9 - O2)": the reference oxygen taken off already, as US EPA Method 20
+        // prints it (20.9 - 15 = 5.9; from memory); the references the codes use are 3, 6, 7,
+        // 8, 11 and 15 % (boilers, solid fuels, waste incinerators, turbines).
+        const bool oxygen = oxygen_share_of_air(below);
+        const double share = oxygen ? read_number(written).literal.value : 0.0;
+        const auto folded_reference = [&](std::uint32_t at) {
+            if (!oxygen)
+                return false;
+            const double value = read_number(text(file_.nodes[at].range)).literal.value;
+            for (const double reference : {3.0, 6.0, 7.0, 8.0, 11.0, 15.0})
+                if (std::abs(value - (share - reference)) < 0.051)
+                    return true;
+            return false;
+        };
         return for_each_factor(numerator, [&](std::uint32_t at, int sign) {
             if (sign < 0)
                 return false;
             if (file_.nodes[at].kind == expr_kind::number)
-                return text(file_.nodes[at].range) == written;
+                return text(file_.nodes[at].range) == written || folded_reference(at);
             const std::uint32_t above = leading_number(at, true);
             return above != syntax::no_index && text(file_.nodes[above].range) == written;
         });
