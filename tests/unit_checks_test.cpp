@@ -290,6 +290,18 @@ TEST_CASE("ppm set equal to mg/L is told the water's density stands between them
     CHECK(told);
 }
 
+// A flue gas's NO2 in mg/Nm³ from ppm by volume (2.05 = 46.01/22.41, common practice): the
+// note about water's density between ppm and mg/L has nothing to say there.
+TEST_CASE("ppm beside mg/Nm³ of a gas gets no note about water") {
+    const auto r =
+        plumb::check_text("c.plumb", "C_ppm : ppm \"NOx as NO2, dry\"\n"
+                                     "C_mg : mg/Nm3 \"NOx as NO2\"\nC_mg = 2.05*C_ppm\n");
+    REQUIRE(r.diagnostics.size() == 1);
+    CHECK(r.diagnostics[0].rule == plumb::rules::side_mismatch);
+    for (const auto& n : r.diagnostics[0].notes)
+        CHECK(n.message.find("water") == std::string::npos);
+}
+
 // A ton declared where a ton of refrigeration was meant (1 TR = 12 000 Btu/h = 3.517 kW, NIST
 // SP 811 (2008), B.8): the table's ton is the short ton, a mass, and the note says so.
 TEST_CASE("a ton beside a power is told it is the short ton") {

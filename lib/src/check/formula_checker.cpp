@@ -2106,6 +2106,10 @@ class checker {
         if (!holds_symbol_in_unit(sides[0].node, {"ppm", "ppb"}) &&
             !holds_symbol_in_unit(sides[1].node, {"ppm", "ppb"}))
             return;
+        // Per litre of water, not mg/Nm³ of a flue gas (where ppm is by volume).
+        if (!holds_symbol_in_unit(sides[0].node, {"/L", "/l"}) &&
+            !holds_symbol_in_unit(sides[1].node, {"/L", "/l"}))
+            return;
         d.notes.push_back({"ppm and ppb by mass are fractions, mg/L a mass per volume: in dilute "
                            "water 1 mg/L is taken as 1 ppm, the water's density (1 kg/L) between "
                            "them; write it (ρ_w : kg/L = 1) on the side in mg/L to say so",
