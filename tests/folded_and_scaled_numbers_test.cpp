@@ -820,3 +820,15 @@ TEST_CASE("a hundred beside a percentage, and a percentage with decimals over 10
     passes(d, {"E = x*100", "E = f_e", "Q_d = Q*0.005/100", "Q_d = Q*0.5/100", "Q_d = Q*2/100",
                "Q_d = Q*f_e/100"});
 }
+
+// 0.0631 is L/s per gpm (NIST SP 811 (2008), B.8: 6.309020E-05 m³/s), printed to three
+// digits: written into a flow in m³/h it leaves the 3.6 of m³/h per L/s, which the advice
+// names, rather than calling 0.0631 a coefficient and the units 4.4 apart.
+TEST_CASE("a flow conversion to the wrong flow unit leaves the one between them") {
+    const std::string d = "Q : gpm\nQ_m : m^3/h\nQ_l : L/s\n";
+    const auto r = run(d, "Q_m = Q*0.0631");
+    REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "by 3.6"));
+    CHECK(problems_in(run(d, "Q_l = Q*0.0631")) == 0);
+    CHECK(problems_in(run(d, "Q_m = Q*0.0631*3.6")) == 0);
+}

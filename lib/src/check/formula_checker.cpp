@@ -4857,12 +4857,14 @@ class checker {
     }
 
     // NIST SP 811 (2008), B.8: in/ft, in²/ft², in³/ft³, ft/m, mm/in, cm/in, min/h, s/h, h/d,
-    // gal/ft³, L/gal, lb/kg, psi/bar, kPa/psi, bbl/ft³, ft³/m³, °F/K: a ratio within `slack` of
+    // gal/ft³, L/gal, lb/kg, psi/bar, kPa/psi, bbl/ft³, ft³/m³, °F/K; and the flows' m³/h per
+    // L/s, gpm per L/s and per m³/h, cfm per L/s and m³/h per cfm: a ratio within `slack` of
     // one of them, or of its inverse.
     static std::optional<double> common_conversion(double v, double slack) {
-        static constexpr std::array<double, 17> common{
-            12.0,    144.0,   1728.0,  3.28084, 25.4,    2.54,    60.0,    3600.0, 24.0,
-            7.48052, 3.78541, 2.20462, 14.5038, 6.89476, 5.61458, 35.3147, 1.8};
+        static constexpr std::array<double, 22> common{
+            12.0, 144.0,   1728.0,  3.28084, 25.4,    2.54,    60.0,    3600.0,
+            24.0, 7.48052, 3.78541, 2.20462, 14.5038, 6.89476, 5.61458, 35.3147,
+            1.8,  3.6,     15.8503, 4.40287, 2.11888, 1.69901};
         for (const double r : common)
             for (const double candidate : {r, 1.0 / r})
                 if (std::abs(v / candidate - 1.0) <= slack)
