@@ -766,3 +766,21 @@ TEST_CASE("the air trade's 1.08 on a flow at actual conditions") {
         }));
     }
 }
+
+// Ground engineers round water's unit weight to 10 kN/m³ (EN 1997-1 worked examples, common
+// practice): γ' = γ_sat - 10 and u = 10·h_w in kPa read it so, with a note. A 10 in pcf, a 10
+// for g beside a density, and a 1 for water stay findings.
+TEST_CASE("the ground engineer's round 10 kN/m³ for water") {
+    const std::string decl = "g_s, g_b : kN/m^3\ng_p, g_bp : lbf/ft^3\nρ : kg/m^3\nh : m\n"
+                             "p, u : kPa\n";
+    for (const char* right : {"g_b = g_s - 10", "u = 10*h"}) {
+        CAPTURE(right);
+        const auto r = plumb::test::check_after(decl, right);
+        CHECK(plumb::test::problems_in(r) == 0);
+        CHECK(plumb::test::count_of(r, plumb::rules::gravity_number) == 1);
+    }
+    for (const char* wrong : {"g_bp = g_p - 10", "p = ρ*10*h/1000", "g_b = g_s - 1"}) {
+        CAPTURE(wrong);
+        CHECK(plumb::test::problems_in(plumb::test::check_after(decl, wrong)) > 0);
+    }
+}

@@ -592,3 +592,27 @@ TEST_CASE("a reference oxygen folded into the number above the oxygen sum") {
     fails_with(decl, {"c_ref = c*0.059/(20.9 - O2)", "c_ref = c*0.18/(21 - O2)"},
                plumb::rules::unit_scale);
 }
+
+// Hazen's correction of a permeability to the water's temperature, k·(0.7 + 0.03·t) with t
+// in °C (Terzaghi, Peck and Mesri, 3rd ed., 1996, from memory), is a fit made on the °C scale:
+// the finding stands (plumb cannot know the fit), and its advice says not to add 273.15 but
+// to accept it with a reviewed mark. "1 + α·t" keeps the advice about a coefficient's
+// reference temperature.
+TEST_CASE("a linear fit on the °C scale multiplied: the advice keeps the reading") {
+    const std::string decl = "k, k_t : m/d\nt : °C\nR, R_20 : ohm\nα : 1/K\n";
+    const auto r = run(decl, "k_t = k*(0.7 + 0.03*t)");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    const auto& d = first_under(r, plumb::rules::offset_scale);
+    bool fit = false;
+    bool kelvin = false;
+    for (const auto& n : d.notes) {
+        fit = fit || n.message.find("empirical fit made on the °C scale") != std::string::npos;
+        kelvin = kelvin || n.message.find("declare it in K") != std::string::npos;
+    }
+    CHECK(fit);
+    CHECK_FALSE(kelvin);
+    const auto alpha = run(decl, "R = R_20*(1 + α*t)");
+    REQUIRE(count_of(alpha, plumb::rules::offset_scale) == 1);
+    for (const auto& n : first_under(alpha, plumb::rules::offset_scale).notes)
+        CHECK(n.message.find("empirical fit") == std::string::npos);
+}

@@ -5964,6 +5964,32 @@ class checker {
         }
     }
 
+    // "(0.7 + 0.03*t)": a number other than 1 plus a number times a symbol, in either order;
+    // "1 + α*t" is a coefficient per degree, whose reference the reading should be taken from.
+    bool linear_fit_on_reading(std::uint32_t node) const {
+        node = skip_groups(node);
+        const syntax::expr_node& sum = file_.nodes[node];
+        if (sum.kind != expr_kind::add)
+            return false;
+        const auto number_times_symbol = [&](std::uint32_t k) {
+            const syntax::expr_node& n = file_.nodes[skip_groups(k)];
+            if (n.kind != expr_kind::multiply)
+                return false;
+            const expr_kind a = file_.nodes[n.lhs].kind;
+            const expr_kind b = file_.nodes[n.rhs].kind;
+            return (a == expr_kind::number && b == expr_kind::symbol) ||
+                   (a == expr_kind::symbol && b == expr_kind::number);
+        };
+        for (const auto& [constant, slope] :
+             {std::pair{sum.lhs, sum.rhs}, std::pair{sum.rhs, sum.lhs}}) {
+            const syntax::expr_node& c = file_.nodes[skip_groups(constant)];
+            if (c.kind == expr_kind::number && number_times_symbol(slope) &&
+                read_number(text(c.range)).literal.value != 1.0)
+                return true;
+        }
+        return false;
+    }
+
     // A value on an offset scale used where only an absolute one makes sense.
     void report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where,
                        const compact_dimension* partner = nullptr) {
@@ -5996,6 +6022,19 @@ class checker {
                      {}});
                 return;
             }
+        }
+        // "k*(0.7 + 0.03*t)", Hazen's correction of a permeability to the water's temperature
+        // (Terzaghi, Peck and Mesri, 1996, from memory): an empirical fit made on the °C scale
+        // holds with the reading as it is, and kelvins would break it.
+        if (temperature && linear_fit_on_reading(node)) {
+            d.notes.push_back(
+                {fmt::format("{} reads as an empirical fit made on the {} scale: it holds only "
+                             "with the reading in {}, so adding 273.15 would break it; where the "
+                             "fit is the published one, accept this finding with a '# reviewed "
+                             "offset-scale: ...' mark naming its source",
+                             quote(node), unit.symbol, unit.symbol),
+                 {}});
+            return;
         }
         // A coefficient per degree (α in R_20*(1 + α*T), β in V*β*T) multiplies a difference
         // from its reference temperature, not an absolute temperature.

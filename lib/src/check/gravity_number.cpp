@@ -23,10 +23,11 @@ constexpr std::size_t most_numbers = 8;
 
 // Rows of the table below that rules ask for by name.
 constexpr std::size_t twice_gravity_row = 1;
-constexpr std::size_t molar_volume_row = 6;
+constexpr std::size_t round_water_row = 3; // the ground engineer's 10 kN/m³
+constexpr std::size_t molar_volume_row = 7;
 
-const std::array<carried_quantity, 16>& quantities() {
-    static const std::array<carried_quantity, 16> table = [] {
+const std::array<carried_quantity, 17>& quantities() {
+    static const std::array<carried_quantity, 17> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -61,7 +62,7 @@ const std::array<carried_quantity, 16>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 16>{{
+        return std::array<carried_quantity, 17>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -81,6 +82,15 @@ const std::array<carried_quantity, 16>& quantities() {
              "liquid the specific gravity must multiply the density",
              density * acceleration, water_least * standard_gravity,
              water_greatest * standard_gravity},
+            // Ground engineers round water's unit weight to 10 kN/m³ (EN 1997-1 worked
+            // examples, common practice): γ' = γ_sat - 10. Only that round 10, in kN/m³, 2 %
+            // above ρ_w·g_n; never a 10 for g.
+            {rules::gravity_number, "the unit weight of water rounded to 10 kN/m\u00B3",
+             "\u03B3_w \u2248 10 kN/m\u00B3", "1/\u03B3_w",
+             " (geotechnical practice; \u03C1_w\u00B7g_n is 9.81 kN/m\u00B3, 2 % less)",
+             "write \u03B3_w : kN/m^3 = 10 as a declared constant to say so",
+             "write the unit weight of water in a cell that holds its unit to say so",
+             density * acceleration, 10.0e3, 10.0e3},
             {rules::trade_constant, "the heat capacity of a volume of water", "\u03C1_w\u00B7c_p,w",
              "1/(\u03C1_w\u00B7c_p,w)",
              " (water between 0 and 30 \u00B0C: 4162 to 4219 kJ/(m\u00B3\u00B7K))",
@@ -378,6 +388,11 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     const bool shifted = shift != 0.0 && std::abs(shift) <= 9.0;
                     if (shifted && flipped)
                         continue; // two slips at once is no reading, only a guess
+                    // The round 10 kN/m³ only as typed, alone and as it is: never a 1000 or a
+                    // 10 taken with other numbers as conversions, nor one over it.
+                    if (&q == &quantities()[round_water_row] &&
+                        (shifted || flipped || reciprocal || mask != 0 || texts[at] != "10"))
+                        continue;
                     const double power_of_ten = shifted ? std::pow(10.0, shift) : 1.0;
                     low /= power_of_ten;
                     high /= power_of_ten;
