@@ -201,7 +201,7 @@ TEST_CASE("factors are printed from their exact values") {
     CHECK(plumb::format_factor(plumb::rational(381, 1250), 0.3048) == "0.3048");
     CHECK(plumb::format_factor(plumb::rational(5, 9), 5.0 / 9) == "1/1.8");
     CHECK(plumb::format_factor(plumb::rational(7, 9), 7.0 / 9) == "7/9");
-    CHECK(plumb::format_factor(plumb::rational(1250, 381), 1250.0 / 381) == "1/0.3048");
+    CHECK(plumb::format_factor(plumb::rational(1250, 381), 1250.0 / 381) == "3.28084 (1/0.3048)");
     CHECK(plumb::format_factor(plumb::rational(1000), 1e3) == "1000");
     CHECK(plumb::format_factor(plumb::rational(1, 1000000), 1e-6) == "10⁻⁶");
     CHECK(plumb::format_factor(std::nullopt, 2.5e7) == "2.5 × 10⁷");

@@ -4731,11 +4731,15 @@ class checker {
                                  coefficients),
                      {}});
         }
-        // "divide by 1/0.3048" reads better as "multiply by 0.3048".
+        // "divide by 3.28084 (1/0.3048)" reads better as "multiply by 0.3048".
         bool multiply = ratio < 1;
         std::string factor = multiply ? format_factor(exact_inverse, 1.0 / ratio)
                                       : format_factor(exact_ratio, ratio);
-        if (factor.starts_with("1/")) {
+        if (const std::size_t inverse = factor.find(" (1/");
+            inverse != std::string::npos && factor.ends_with(")")) {
+            factor = factor.substr(inverse + 4, factor.size() - inverse - 5);
+            multiply = !multiply;
+        } else if (factor.starts_with("1/")) {
             factor.erase(0, 2);
             multiply = !multiply;
         }
@@ -5492,7 +5496,8 @@ class checker {
         add_term_and_units(d, op);
         // The square of a factor reads best as a decimal: 0.556516, not 1/0.556516.
         std::string times = format_factor(printed_power(l, 2 * l.exponent), factor * factor);
-        if (times.starts_with("1/") && times.find('.') != std::string::npos)
+        if ((times.starts_with("1/") && times.find('.') != std::string::npos) ||
+            times.find(" (1/") != std::string::npos)
             times = format_factor(factor * factor);
         d.notes.push_back(
             {fmt::format("as written the result is {} times its true value", times), {}});

@@ -583,9 +583,11 @@ std::string format_factor(const std::optional<rational>& exact, double approx) {
     }
     if (const auto digits = short_decimal(f))
         return *digits;
-    // 1/0.3048 reads as the foot it is; 1250/381 does not.
+    // 3.28084 (1/0.3048) reads as the foot it is; 1250/381 does not, and 1/0.3048 alone is
+    // a sum to do. Below 1, 1/1.8 is as plain as 0.555556.
     if (const auto inverse_digits = short_decimal(rational(f.den(), f.num())))
-        return "1/" + *inverse_digits;
+        return f.num() > f.den() ? format_factor(f.to_double()) + " (1/" + *inverse_digits + ")"
+                                 : "1/" + *inverse_digits;
     if (f.num() < 100 && f.den() < 100)
         return fmt::format("{}/{}", f.num(), f.den());
     return format_factor(f.to_double());
