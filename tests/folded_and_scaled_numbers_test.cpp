@@ -232,6 +232,28 @@ TEST_CASE("a sum inside a side's product, and terms of different dimensions in a
     passes(crane, {"M = M_cr + H*t_b"});
 }
 
+TEST_CASE("terms with the other side's dimension are right, however few") {
+    // A pipe's submerged weight per metre, W_s = (ρ_s·A_s + ρ_c·A_c + m_c)·g - B_w (DNV-RP-F109,
+    // from memory), with the g left out of three mass terms: those three are named, not the
+    // buoyancy, whose dimension the left side shares.
+    const std::string pipe = "W_s, B_w : N/m\nρ_s, ρ_c : kg/m^3\nA_s, A_c : m^2\nm_c : kg/m\n";
+    const auto r = run(pipe, "W_s = ρ_s*A_s + ρ_c*A_c + m_c - B_w");
+    REQUIRE(count_of(r, plumb::rules::sum_mismatch) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::sum_mismatch), "'ρ_s*A_s'"));
+    passes(pipe, {"W_s = (ρ_s*A_s + ρ_c*A_c + m_c)*{g_n} - B_w"});
+}
+
+// 1 Nm³ (0 °C) is 37.33 scf (60 °F) at 101.325 kPa: 35.3147 ft³/m³ (NIST SP 811 (2008), B.8)
+// times 288.71/273.15 (common practice). Added together, the advice gives the factor with the
+// temperatures in it.
+TEST_CASE("gas volumes at two reference temperatures in a sum: the advice holds both") {
+    const std::string d = "V_N, V_T : Nm3/h\nQ_s : scfh\n";
+    const auto r = run(d, "V_N = Q_s + V_T");
+    REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "37.3"));
+    CHECK_FALSE(plumb::test::says(first_under(r, plumb::rules::unit_scale), "35.3147"));
+}
+
 TEST_CASE("kW beside W: the advice names the W term, not the one with a converted %") {
     // Input power from a shaft power and an efficiency in %, plus an auxiliary load in W (common
     // practice: P_in = P_s/(η/100) + P_aux): the % over 100 is a fraction, and the term off by

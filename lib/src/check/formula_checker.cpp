@@ -2999,17 +2999,22 @@ class checker {
             a = find_agreement(terms, prefer_dimensionless);
         if (!a.odd.empty() && !prefer_dimensionless && read_column_and_atmosphere(base, index))
             a = find_agreement(terms, prefer_dimensionless);
-        // "M = M_tm + H*t" with M in kN·m: of two terms, the one with the other side's
-        // dimension is right, whichever came first.
-        if (a.odd.size() == 1 && terms.size() == 2 && index == side_hint_node_ &&
-            side_hint_ != nullptr && side_hint_->known) [[unlikely]] {
-            const std::size_t odd = a.odd.front();
-            const std::size_t other = 1 - odd;
-            if (terms[odd].type.known && terms[other].type.known && !terms[other].type.zero &&
-                side_hint_->dim == terms[odd].type.dim &&
-                !(side_hint_->dim == terms[other].type.dim)) {
-                a.reference = terms[odd].type.dim;
-                a.odd = {other};
+        // "M = M_tm + H*t" with M in kN·m, "W_s = ρ_s*A_s + ρ_c*A_c + m_c - B_w" in N/m: the
+        // terms with the other side's dimension are right, however few and wherever they are.
+        if (!a.odd.empty() && a.reference && index == side_hint_node_ && side_hint_ != nullptr &&
+            side_hint_->known && !(side_hint_->dim == *a.reference)) [[unlikely]] {
+            const bool odd_share_the_side =
+                std::all_of(a.odd.begin(), a.odd.end(), [&](std::size_t i) {
+                    return terms[i].type.known && side_hint_->dim == terms[i].type.dim;
+                });
+            if (odd_share_the_side) {
+                std::vector<std::size_t> others;
+                for (std::size_t i = 0; i < terms.size(); ++i)
+                    if (terms[i].type.known && !terms[i].type.zero &&
+                        !(terms[i].type.dim == side_hint_->dim))
+                        others.push_back(i);
+                a.reference = side_hint_->dim;
+                a.odd = std::move(others);
             }
         }
         if (!a.odd.empty()) {
@@ -4657,6 +4662,21 @@ class checker {
             unit = parts[r.reference].scale;
             return true;
         }
+        // "V_N = Q_scfh + V_Nm3": gas volumes at 60 °F and at 0 °C; the factor between them
+        // holds the reference temperatures' ratio as well as the units' (37.33 scf per Nm³,
+        // not 35.31), which the advice must give.
+        std::string state_note;
+        if (const auto a = reference_volume_of(ops[index[r.odd]].node),
+            b = reference_volume_of(ops[index[r.reference]].node);
+            a && b && a->power == b->power && a->kelvins != b->kelvins) [[unlikely]] {
+            ratio /= std::pow(b->kelvins / a->kelvins, a->power);
+            exact_ratio.reset();
+            state_note = fmt::format("{} is gas at {} and {} at {}: the factor between them "
+                                     "holds the ratio of those temperatures as well as the "
+                                     "units'",
+                                     quote(ops[index[r.odd]].node), a->name,
+                                     quote(ops[index[r.reference]].node), b->name);
+        }
         // A_cmil = d_mil^2: the circular mil is π/4 mil², so that a round wire's area in cmil is
         // its diameter in mils squared (NIST SP 811 (2008), B.8): the circle's π/4 is the unit's,
         // and a π written beside it counts the circle twice.
@@ -4766,6 +4786,8 @@ class checker {
                  {}});
             return false;
         }
+        if (!state_note.empty())
+            d.notes.push_back({std::move(state_note), {}});
         d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
                                        "write the conversion factor into the formula)",
                                        multiply ? "multiply" : "divide", quote(op.node), factor),
