@@ -854,3 +854,22 @@ TEST_CASE("a flow conversion to the wrong flow unit leaves the one between them"
     CHECK(problems_in(run(d, "Q_l = Q*0.0631")) == 0);
     CHECK(problems_in(run(d, "Q_m = Q*0.0631*3.6")) == 0);
 }
+
+// A speed conversion printed to three digits (0.278 = 1/3.6 for km/h to m/s, 1.467 for mph to
+// ft/s; NIST SP 811 (2008), B.8) beside a speed already in coherent units converts it twice:
+// AASHTO's reaction distance 0.278·V·t is for V in km/h only.
+TEST_CASE("a speed conversion beside a speed that needs none") {
+    const std::string d = "v : m/s\nV_k : km/h\nt_r : s\nd_r : m\nV_m : mph\nV_f : ft/s\n";
+    fails_with(d, {"d_r = 0.278*v*t_r", "V_f = 1.467*V_f"}, plumb::rules::unit_scale);
+    passes(d, {"d_r = 0.278*V_k*t_r", "V_f = 1.467*V_m", "d_r = 0.447*V_m*t_r"});
+}
+
+// A solids or solubility balance written with the 100 of the % sum below it above the line,
+// F·100/(100 + S) (Mullin, Crystallization, 4th ed., ch. 11, from memory): the same as
+// F/(1 + S/100), wherever the 100 stands. A 100 with no such sum is still not needed.
+TEST_CASE("the leading 100 of a percentage sum, written above it") {
+    const std::string d = "measure g100 = 0.01 g/g\nF, W : kg/h\nS : g100\nw : %\n";
+    passes(d, {"W = F*100/(100 + S)", "W = 100*F/(100 - w)", "W = F/(100 - w)*100",
+               "W = F/(1 - w/100)"});
+    fails_with(d, {"W = F*100"}, plumb::rules::unit_scale);
+}

@@ -4476,7 +4476,7 @@ class checker {
             for (std::uint32_t l = 0; l < op.type.literal_count; ++l) {
                 const scale_literal& number = literals_[op.type.literal_begin + l];
                 if (stands_for_a_conversion(number, !dimensionless) ||
-                    spare_time_ratio(number, op.type))
+                    spare_time_ratio(number, op.type) || spare_speed_ratio(number, op.node))
                     return false;
                 // A 100 in a term in percent: see report_unneeded_factor.
                 if (dimensionless && number.power_of_ten &&
@@ -5390,7 +5390,8 @@ class checker {
             const scale_literal* first = nullptr;
             for (const auto& l : parts[i].literals)
                 if (stands_for_a_conversion(l, !dimensionless || in_percent) ||
-                    spare_time_ratio(l, ops[index[i]].type)) {
+                    spare_time_ratio(l, ops[index[i]].type) ||
+                    spare_speed_ratio(l, ops[index[i]].node)) {
                     net *= std::pow(l.value, l.exponent);
                     if (first == nullptr)
                         first = &l;
@@ -5443,6 +5444,27 @@ class checker {
         }
     }
 
+    // "d_r = 0.278*v*t_r" with v in m/s: km/h to m/s (1/3.6), mph to ft/s (1.467) or m/s
+    // (0.447), km to miles, written to three digits beside a speed whose units agree without
+    // it (NIST SP 811 (2008), B.8).
+    bool spare_speed_ratio(const scale_literal& l, std::uint32_t term) const {
+        if (std::abs(l.exponent) != 1.0 || !l.factor_like)
+            return false;
+        static constexpr std::array<double, 8> ratios{3.6,      1.0 / 3.6, 1.466667, 0.44704,
+                                                      0.681818, 2.236936,  1.609344, 0.621371};
+        if (std::none_of(ratios.begin(), ratios.end(), [&](double r) {
+                return std::abs(l.value / r - 1.0) <= l.tolerance + 1e-9;
+            }))
+            return false;
+        return for_each_factor(term, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind != expr_kind::symbol)
+                return false;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            return e != nullptr && e->compact_dim && *e->compact_dim == velocity_dim;
+        });
+    }
+
     // "p_g*10/100": a percentage written as its number over 100 (10 % of the supply
     // pressure), no unit conversion, where the number just before the /100 is a whole one up
     // to 100.
@@ -5477,8 +5499,29 @@ class checker {
         return value > 0 && value <= 100 && (point || value >= 1);
     }
 
+    // "F*100/(100 + S)", "100*S/(100 - w)" with S in % or per 100 g: the 100 above is the
+    // leading 100 of the sum below, in its unit, as the solids and solubility balances write
+    // it (Mullin, Crystallization, 4th ed., ch. 11, from memory).
+    bool hundred_over_percent_sum(std::uint32_t term, const scale_literal& l) const {
+        if (l.value != 100.0 || l.exponent != 1.0)
+            return false;
+        return for_each_factor(term, [&](std::uint32_t at, int sign) {
+            if (sign > 0)
+                return false;
+            std::uint32_t k = at;
+            const expr_kind kind = file_.nodes[k].kind;
+            if (kind != expr_kind::add && kind != expr_kind::subtract)
+                return false;
+            while (file_.nodes[k].kind == expr_kind::add ||
+                   file_.nodes[k].kind == expr_kind::subtract)
+                k = file_.nodes[k].lhs;
+            return file_.nodes[k].kind == expr_kind::number &&
+                   written_number(file_.nodes[k].range) == 100.0;
+        });
+    }
+
     bool report_unneeded(const operand& op, const scale_literal& l) {
-        if (percentage_written_out(l))
+        if (percentage_written_out(l) || hundred_over_percent_sum(op.node, l))
             return false;
         const double factor = std::pow(l.value, l.exponent);
         diagnostic& d =
