@@ -873,3 +873,12 @@ TEST_CASE("the leading 100 of a percentage sum, written above it") {
                "W = F/(1 - w/100)"});
     fails_with(d, {"W = F*100"}, plumb::rules::unit_scale);
 }
+
+// A battery charger's current I = 1.1·C/H + I_L (IEEE 946, from memory) with C in A·h and the
+// recharge time H in hours: the time cancels among the symbols, and a 60 beside them counts
+// minutes that are not there. A 7 is still a coefficient, as the 1.1 is.
+TEST_CASE("a time ratio beside symbols whose time cancels") {
+    const std::string d = "I, I_L : A\nC : A*h\nH : h\nV : L\nq : L/min\nt : min\n";
+    fails_with(d, {"I = 1.1*C/(H*60) + I_L", "V = q*t*60"}, plumb::rules::unit_scale);
+    passes(d, {"I = 1.1*C/H + I_L", "I = C/H*7", "V = q*t"});
+}

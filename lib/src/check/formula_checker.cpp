@@ -4476,7 +4476,8 @@ class checker {
             for (std::uint32_t l = 0; l < op.type.literal_count; ++l) {
                 const scale_literal& number = literals_[op.type.literal_begin + l];
                 if (stands_for_a_conversion(number, !dimensionless) ||
-                    spare_time_ratio(number, op.type) || spare_speed_ratio(number, op.node))
+                    spare_time_ratio(number, op.type, op.node) ||
+                    spare_speed_ratio(number, op.node))
                     return false;
                 // A 100 in a term in percent: see report_unneeded_factor.
                 if (dimensionless && number.power_of_ten &&
@@ -5351,7 +5352,7 @@ class checker {
                 // "Q_m3h = Q_cfm*1.699*60": 1.699 is m³/h per cfm already, and the minutes
                 // in an hour beside it are counted twice.
                 if (!(looks_like_conversion(l, !dimensionless) ||
-                      spare_time_ratio(l, ops[index[i]].type)) ||
+                      spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node)) ||
                     (l.exponent == 1.0 && (l.value == 1e3 || l.value == 1e6 || l.value == 1e9) &&
                      l.value == counted_multiple(ops[index[i]].node)))
                     continue;
@@ -5390,7 +5391,7 @@ class checker {
             const scale_literal* first = nullptr;
             for (const auto& l : parts[i].literals)
                 if (stands_for_a_conversion(l, !dimensionless || in_percent) ||
-                    spare_time_ratio(l, ops[index[i]].type) ||
+                    spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node) ||
                     spare_speed_ratio(l, ops[index[i]].node)) {
                     net *= std::pow(l.value, l.exponent);
                     if (first == nullptr)
@@ -5428,20 +5429,39 @@ class checker {
     // t = V/Q*24 with t in d and Q in m³/d: a ratio of time units (24 h/d, 60, 1440, 8760, 3.6)
     // beside units that already agree, in a quantity that holds time. Without time in it (a
     // count per day from a count per hour, both declared 1) the number may be the formula's.
-    static bool spare_time_ratio(const scale_literal& l, const typed_term& t) {
-        if (std::abs(l.exponent) != 1.0 || !t.known)
+    // "I = 1.1*C_Ah/(H_h*60)": a term whose time cancels among its symbols (Ah over h) holds
+    // time too, in its units.
+    bool spare_time_ratio(const scale_literal& l, const typed_term& t, std::uint32_t term) const {
+        if (!t.known || !time_ratio_number(l))
+            return false;
+        try {
+            if (!t.dim.expand().exponent(base_dimension::time).is_zero())
+                return true;
+        } catch (const std::exception&) {
+            return false;
+        }
+        return for_each_factor(term, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            std::optional<dimension> dim;
+            if (n.kind == expr_kind::symbol) {
+                if (const symbol_entry* e = symbols_.find(text(n.range)); e != nullptr)
+                    dim = e->dim;
+            } else if (n.kind == expr_kind::reference) {
+                dim = file_.references[n.lhs].dim;
+            }
+            return dim && !dim->exponent(base_dimension::time).is_zero();
+        });
+    }
+
+    // Whether `l` is a ratio of time units, multiplying or dividing.
+    static bool time_ratio_number(const scale_literal& l) {
+        if (std::abs(l.exponent) != 1.0)
             return false;
         // NIST SP 811 (2008), B.8: 1 d = 24 h = 1440 min = 86 400 s; 1 h = 60 min = 3600 s;
         // 3.6 for m³/h and L/s, km/h and m/s; 8760 h in a (365-day) year.
         static constexpr std::array<double, 7> ratios{24.0,    60.0,   1440.0, 3600.0,
                                                       86400.0, 8760.0, 3.6};
-        if (std::none_of(ratios.begin(), ratios.end(), [&](double r) { return l.value == r; }))
-            return false;
-        try {
-            return !t.dim.expand().exponent(base_dimension::time).is_zero();
-        } catch (const std::exception&) {
-            return false;
-        }
+        return std::any_of(ratios.begin(), ratios.end(), [&](double r) { return l.value == r; });
     }
 
     // "d_r = 0.278*v*t_r" with v in m/s: km/h to m/s (1/3.6), mph to ft/s (1.467) or m/s
