@@ -565,3 +565,14 @@ TEST_CASE("a gauge reading divided into the barometer's unit is added whole") {
     fails_with(stack, {"p_s = p_b + p_g/10"}, plumb::rules::offset_scale);
     fails_with(stack, {"p_s = p_b + p_sup"}, plumb::rules::unit_scale);
 }
+
+// Air and fuel gas in Nm³/h added are still gas at 0 °C, not the flue gas at its temperature:
+// over the flue's area they give no velocity without the state's correction (ideal gas,
+// common practice). Corrected by the absolute temperature ratio, they pass.
+TEST_CASE("a sum of normal flows over an area is no velocity either") {
+    const std::string d = "V_a, V_n : Nm3/h\nA : m^2\nv : m/s\nT : K\n";
+    const auto r = plumb::test::check_after(d, "v = (V_a + V_n)/(3600*A)");
+    CHECK(plumb::test::count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::problems_in(
+              plumb::test::check_after(d, "v = (V_a + V_n)/(3600*A)*T/273.15")) == 0);
+}

@@ -1158,6 +1158,30 @@ class checker {
 
     // A product of symbols and numbers whose gas volumes at reference conditions all share one
     // reference temperature: that temperature, and the net power the volumes stand in.
+    // The reference state every term of a short sum shares, as a term's power 1; empty where
+    // one has none or another.
+    std::optional<reference_volume> reference_volume_of_sum(std::uint32_t k) const {
+        constexpr int most_terms = 8;
+        std::optional<reference_volume> shared;
+        int terms = 0;
+        while (file_.nodes[k].kind == expr_kind::add ||
+               file_.nodes[k].kind == expr_kind::subtract) {
+            const std::optional<reference_volume> r = reference_volume_of(file_.nodes[k].rhs);
+            if (!r || r->power != 1 || ++terms > most_terms ||
+                (shared && shared->kelvins != r->kelvins))
+                return std::nullopt;
+            shared = r;
+            k = file_.nodes[k].lhs;
+        }
+        const std::optional<reference_volume> first = reference_volume_of(k);
+        if (!first || first->power != 1 || (shared && shared->kelvins != first->kelvins))
+            return std::nullopt;
+        reference_volume sum = *first;
+        sum.numbers = 1.0;
+        sum.rounding = 0.0;
+        return sum;
+    }
+
     std::optional<reference_volume> reference_volume_of(std::uint32_t k) const {
         std::optional<reference_volume> found;
         double numbers = 1.0;
@@ -1174,7 +1198,12 @@ class checker {
                 rounding += l.tolerance;
                 return false;
             }
-            if (n.kind == expr_kind::reference) {
+            if (n.kind == expr_kind::add || n.kind == expr_kind::subtract) {
+                // "(V_a + V_n)/A": a sum of gas volumes at one reference state is at it too.
+                r = reference_volume_of_sum(at);
+                if (!r)
+                    return other = true;
+            } else if (n.kind == expr_kind::reference) {
                 // A workbook's cell carries the reference state its unit text names.
                 const syntax::reference_value& cell = file_.references[n.lhs];
                 if (cell.reference_power == 0)
@@ -1617,6 +1646,16 @@ class checker {
                          file_.nodes[in.rhs].kind == expr_kind::number &&
                          plain_conversion_number(in.rhs))
                     base = in.lhs;
+            }
+            // "(V_a + V_n)/(3600*A)": air and fuel gas in Nm³/h added, as if they were the
+            // flue gas at its temperature.
+            if (n.kind == expr_kind::add || n.kind == expr_kind::subtract) {
+                const std::optional<reference_volume> v = reference_volume_of_sum(at);
+                if (!v || sign != 1 || flow != syntax::no_index)
+                    correction = true;
+                flow = at;
+                normal = v;
+                return false;
             }
             if (file_.nodes[base].kind != expr_kind::symbol) {
                 correction = correction || n.kind != expr_kind::pi;
