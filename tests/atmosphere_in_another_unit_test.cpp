@@ -96,3 +96,13 @@ TEST_CASE("a converted gauge reading plus the atmosphere, set equal to a gauge r
     CHECK(psi);
     CHECK(problems_in(run(d, "p_0a = p_0g + 1.013")) == 0);
 }
+
+// A downhole memory gauge records absolute pressure (common practice): declared in psia and
+// described so, the atmosphere added to it is counted twice, whatever the instrument is
+// called. A loose "p_g : psi "gauge pressure"" is still read as the gauge reading it names.
+TEST_CASE("a gauge by name that records absolute pressure") {
+    const std::string d = "p_mg : psia \"memory gauge, which records absolute\"\n"
+                          "p_g : psi \"gauge pressure\"\np_wf, p_a : psia\n";
+    fails_with(d, {"p_wf = p_mg + 14.7"}, plumb::rules::offset_scale);
+    CHECK(problems_in(run(d, "p_a = p_g + 14.7")) == 0);
+}

@@ -4174,6 +4174,14 @@ class checker {
         const std::string_view name = text(file_.nodes[node].range);
         const symbol_entry* entry = symbols_.find(name);
         const std::string_view description = entry != nullptr ? entry->description : "";
+        // "p_mg : psia "memory gauge, which records absolute"": a unit or a description that
+        // says absolute outright wins over the instrument's name.
+        const std::string_view unit = entry != nullptr ? entry->unit_text : "";
+        if (unit.find("psia") != std::string_view::npos ||
+            unit.find("bara") != std::string_view::npos ||
+            unit.find("abs") != std::string_view::npos ||
+            description.find("absolute") != std::string_view::npos)
+            return false;
         return name.ends_with("_g") || name.find("gauge") != std::string_view::npos ||
                name.find("_g_") != std::string_view::npos ||
                description.find("gauge") != std::string_view::npos;
