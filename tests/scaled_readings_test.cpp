@@ -616,3 +616,16 @@ TEST_CASE("a linear fit on the °C scale multiplied: the advice keeps the readin
     for (const auto& n : first_under(alpha, plumb::rules::offset_scale).notes)
         CHECK(n.message.find("empirical fit") == std::string::npos);
 }
+
+// A press cylinder's working pressure p = F/A with the rod side at tank, and a pump's
+// hydraulic power p·Q from a vented tank (Parker, Industrial Hydraulic Technology, 2nd ed.,
+// ch. 2, from memory): a gauge reading is what both mean. Gauge readings in a gas law stay
+// errors, and a load over an area set equal to an absolute pressure is no gas law either.
+TEST_CASE("a load over its area is a gauge reading, and gauge times flow a hydraulic power") {
+    const std::string decl = "p_w : barg\np_psig : psig\nF : kN\nA_p : cm^2\nQ : L/min\n"
+                             "Q_gpm : gpm\nP_h : kW\nP_hp : hp\nη : 1\nV_1, V_2 : L\n"
+                             "p_2 : barg\n";
+    passes(decl, {"p_w = 100*F/A_p", "P_h = p_w*Q/600", "P_hp = p_psig*Q_gpm/(1714*η)"});
+    fails_with(decl, {"p_2 = p_w*V_1/V_2"}, plumb::rules::offset_scale);
+    fails_with(decl, {"P_h = p_w*Q/60", "p_w = F/(100*A_p)"}, plumb::rules::unit_scale);
+}

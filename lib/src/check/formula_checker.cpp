@@ -607,6 +607,52 @@ class checker {
         return apply_power(base, exponent, n.lhs, n.rhs);
     }
 
+    // A product of one force above the line and lengths or areas below it, with numbers:
+    // a load over the area it acts on (F/A), no reading.
+    bool force_over_area(std::uint32_t k) const {
+        int forces = 0;
+        bool other = false;
+        for_each_factor(k, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number || n.kind == expr_kind::pi)
+                return false;
+            std::optional<compact_dimension> dim;
+            if (n.kind == expr_kind::symbol) {
+                if (const symbol_entry* e = symbols_.find(text(n.range)); e != nullptr)
+                    dim = e->compact_dim;
+            } else if (n.kind == expr_kind::power && file_.nodes[n.lhs].kind == expr_kind::symbol &&
+                       sign < 0) {
+                if (const symbol_entry* e = symbols_.find(text(file_.nodes[n.lhs].range));
+                    e != nullptr && e->compact_dim && *e->compact_dim == length_dimension())
+                    return false; // D^2 below
+            }
+            if (dim && *dim == force_dimension() && sign > 0)
+                ++forces;
+            else if (!(dim && sign < 0 && (*dim == length_dimension() || *dim == area_dimension())))
+                other = true;
+            return other;
+        });
+        return !other && forces == 1;
+    }
+
+    // Whether a product has a symbol or a cell of the given dimension above the line.
+    bool holds_factor_of_dimension(std::uint32_t k, const compact_dimension& wanted) const {
+        return for_each_factor(k, [&](std::uint32_t at, int sign) {
+            if (sign < 0)
+                return false;
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::symbol) {
+                const symbol_entry* e = symbols_.find(text(n.range));
+                return e != nullptr && e->compact_dim && *e->compact_dim == wanted;
+            }
+            if (n.kind == expr_kind::reference) {
+                const syntax::reference_value& r = file_.references[n.lhs];
+                return r.dim && compact_dimension::fitted(*r.dim) == std::optional(wanted);
+            }
+            return false;
+        });
+    }
+
     // Whether a product divides by a symbol or a cell declared a length (a depth).
     bool divides_by_length(std::uint32_t k) const {
         return for_each_factor(k, [&](std::uint32_t at, int sign) {
@@ -5718,11 +5764,13 @@ class checker {
             const auto on_gauge = [](const operand& o) {
                 return o.type.offset != nullptr && o.type.offset->scale == unit_scale::gauge;
             };
-            // "P_d = 2*S*t/D": a stress times the shape of a wall is a net pressure too.
+            // "P_d = 2*S*t/D": a stress times the shape of a wall is a net pressure too; and
+            // "p_w = 100*F/A_p", a cylinder's load over its bore, the gauge reading that holds
+            // it with the other side at the atmosphere.
             const auto net_pressure = [&](const operand& o) {
                 return o.type.absolute_pressure_difference ||
                        (!o.type.point && o.type.dim == pressure_dimension() &&
-                        pressure_scaled_by_shape(o.node, false));
+                        (pressure_scaled_by_shape(o.node, false) || force_over_area(o.node)));
             };
             if ((on_gauge(*reference) && net_pressure(side)) ||
                 (on_gauge(side) && net_pressure(*reference)))
@@ -7471,9 +7519,18 @@ class checker {
             // memory).
             const bool column_gradient =
                 result.known && result.dim == pressure_gradient_dim && divides_by_length(index);
-            if (result.known && (result.dim == length_dimension() ||
-                                 result.dim == force_dimension() || wall_stress || ring_tension ||
-                                 jet || bearing_area || head_without_g || column_gradient)) {
+            // P = p_g*Q/600, p_psig*Q_gpm/1714: a pump's hydraulic power is the pressure it
+            // adds times the flow, and from a vented tank that is the outlet's gauge reading
+            // (common practice).
+            // Only set equal to a power: "F*p_g/100" into scfm is a pressure ratio.
+            const bool hydraulic_power = result.known && result.dim == power_dim &&
+                                         index == side_hint_node_ && side_hint_ != nullptr &&
+                                         side_hint_->known && side_hint_->dim == power_dim &&
+                                         holds_factor_of_dimension(index, volume_flow_dim);
+            if (result.known &&
+                (result.dim == length_dimension() || result.dim == force_dimension() ||
+                 wall_stress || ring_tension || jet || bearing_area || head_without_g ||
+                 column_gradient || hydraulic_power)) {
                 result.offset = nullptr;
                 result.point = false;
                 result.origin = 0.0;
