@@ -415,6 +415,10 @@ TEST_CASE("no prefixed spelling is ambiguous or silently shadowed") {
 TEST_CASE("prefixes never attach to units that refuse them") {
     // "kft" is a row of its own (ohms per 1000 ft), not k + ft.
     CHECK(must_resolve("kft").unit->name == "thousand feet");
+    // The plumbing trade's fps and gph are rows, no prefix on anything (NIST SP 811 (2008),
+    // B.8: 1 ft = 0.3048 m, 1 gal = 3.785412 L).
+    CHECK(must_resolve("fps").factor() == doctest::Approx(0.3048));
+    CHECK(must_resolve("gph").factor() == doctest::Approx(3.785411784e-3 / 3600.0));
     // "kcal_th" is a row too (kinetics tables' kilocalorie), never k + cal_th.
     CHECK(must_resolve("kcal_th").unit->name == "kilocalorie (thermochemical)");
     for (std::string_view symbol : {"kpsi", "Mft", "kmin", "kh", "mpsi", "kkg", "kkm", "m\u00B0C",

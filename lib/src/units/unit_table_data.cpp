@@ -510,6 +510,12 @@ constexpr unit_definition rows[] = {
              "NIST SP 811 (2008), B.8 prints 1.198264E+02; exact as lb/gal"),
     absolute("fpm", "foot per minute", velocity, 0.00508, "0.00508", prefixes::refused,
              "NIST SP 811 (2008), B.8 prints 5.08E-03; exact as ft/min"),
+    // The plumbing and fire trades' feet per second and gallons an hour (common practice).
+    absolute("fps", "foot per second", velocity, 0.3048, "0.3048", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 3.048E-01; exact as ft/s"),
+    absolute("gph", "gallon (U.S.) per hour", volumetric_flow, 0.003785411784 / 3600.0,
+             "3785411784/3600000000000000", prefixes::refused,
+             "NIST SP 811 (2008), B.8 gallon (U.S.) 3.785412E-03 per hour; exact"),
 
     // Percent: 0.01 (SI Brochure 9th ed., 5.4.7).
     absolute("%", "percent", none, 0.01, "0.01", prefixes::refused,
