@@ -629,3 +629,20 @@ TEST_CASE("a load over its area is a gauge reading, and gauge times flow a hydra
     fails_with(decl, {"p_2 = p_w*V_1/V_2"}, plumb::rules::offset_scale);
     fails_with(decl, {"P_h = p_w*Q/60", "p_w = F/(100*A_p)"}, plumb::rules::unit_scale);
 }
+
+// Faraday's hydrogen from a charging current, V = I·R·T/(2·F·p) (ideal gas; the 2 electrons
+// per H2, common practice), with the room's °C reading for T: a gas law, whose advice is the
+// absolute temperature, not a difference from a coefficient's reference.
+TEST_CASE("a °C reading beside the gas constant and a current: gas-law advice") {
+    const std::string decl = "Q : m^3/h\nn : 1\nI : A\nt : °C\np : Pa\n";
+    const auto r = run(decl, "Q = 3600*n*I*{R}*t/(2*{F}*p)");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    bool gas = false;
+    bool per_degree = false;
+    for (const auto& n : first_under(r, plumb::rules::offset_scale).notes) {
+        gas = gas || n.message.find("adding 273.15") != std::string::npos;
+        per_degree = per_degree || n.message.find("coefficient per degree") != std::string::npos;
+    }
+    CHECK(gas);
+    CHECK_FALSE(per_degree);
+}

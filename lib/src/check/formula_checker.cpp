@@ -6134,6 +6134,10 @@ class checker {
             const dimension d = partner.expand();
             if (d.exponent(base_dimension::temperature) != rational(-1))
                 return false;
+            // Per mole as well (R·T with a current beside it, Faraday's gas volume): a gas law,
+            // which wants the absolute temperature, not a difference.
+            if (d.exponent(base_dimension::amount) < rational(0))
+                return false;
             const dimension scaled = (partner * temperature_dimension()).expand();
             const auto is = [&](int m, int l, int t, int n) {
                 return scaled.exponent(base_dimension::mass) == rational(m) &&
