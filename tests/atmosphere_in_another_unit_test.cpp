@@ -106,3 +106,14 @@ TEST_CASE("a gauge by name that records absolute pressure") {
     fails_with(d, {"p_wf = p_mg + 14.7"}, plumb::rules::offset_scale);
     CHECK(problems_in(run(d, "p_a = p_g + 14.7")) == 0);
 }
+
+// A bar g reading with 14.7 added, set equal to psia: the atmosphere is in the other side's
+// psi, and the reading must be converted too (14.5038 psi per bar, NIST SP 811 (2008), B.8),
+// not only given the atmosphere in bar.
+TEST_CASE("the atmosphere typed in the other side's unit: the reading is converted as well") {
+    const std::string d = "p_wh : psia\np_whb : bar g\n";
+    const auto r = run(d, "p_wh = p_whb + 14.7");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(r, plumb::rules::offset_scale), "(14.5038*p_whb + 14.7)"));
+    CHECK(problems_in(run(d, "p_wh = 14.5*p_whb + 14.7")) == 0);
+}

@@ -5884,10 +5884,14 @@ class checker {
                                              "reading made absolute",
                                              name, reading);
                 }
-                if (has_number)
+                if (has_number) {
                     advice = fmt::format("the number added does not put the zero where the other "
                                          "side has it; {}{}",
                                          atmosphere_in_other_unit(off, written_unit), advice);
+                    if (std::optional<std::string> in_unit_of_other =
+                            atmosphere_in_unit_of_other(off, other, written_unit))
+                        advice = std::move(*in_unit_of_other);
+                }
                 if (const std::optional<std::string> added =
                         atmosphere_added_to_gauge(other, off, temperature))
                     advice = *added;
@@ -5932,6 +5936,32 @@ class checker {
                 return fmt::format("{} is the atmosphere in {}, not in the reading's unit; ",
                                    written, u.name);
         return {};
+    }
+
+    // "p_wh = p_whb + 14.7" with p_wh in psia and p_whb in bar g: the atmosphere is typed in
+    // the other side's unit, and the reading needs that unit too, not only the zero.
+    std::optional<std::string> atmosphere_in_unit_of_other(const operand& side,
+                                                           const operand& other,
+                                                           double reading_unit) const {
+        const std::uint32_t number = number_added(side.node);
+        if (number == syntax::no_index || !std::isfinite(reading_unit) ||
+            !std::isfinite(other.type.scale) || other.type.literal_count != 0 ||
+            std::abs(other.type.scale / reading_unit - 1.0) < 5e-3)
+            return std::nullopt;
+        const std::string_view written = text(file_.nodes[number].range);
+        const double value = read_number(written).literal.value;
+        for (const auto& u : pressure_units) {
+            if (std::abs(other.type.scale / u.pascals - 1.0) > 5e-3 ||
+                read_reference_state(pressure_dimension(), value, written, u.pascals) == nullptr)
+                continue;
+            const syntax::expr_node& sum = file_.nodes[skip_groups(side.node)];
+            return fmt::format("{} is the atmosphere in {}, the unit of {}, but the reading is "
+                               "not in {}: convert it as well, ({}*{} + {})",
+                               written, u.name, quote(other.node), u.name,
+                               format_factor(reading_unit / u.pascals),
+                               display_text(file_.nodes[sum.lhs].range), written);
+        }
+        return std::nullopt;
     }
 
     // "p_psig = 14.5*p_barg + 14.7": a gauge reading, converted, with the atmosphere added is
