@@ -4,7 +4,12 @@ copies).
 
 Defined names, AVERAGE, IF, MIN/MAX/SUM over ranges, string results, ROUND, ROUNDUP, ROUNDDOWN, CEILING, VLOOKUP
 over a two-dimensional range with Excel's approximate match by default (the last row whose key
-is not greater than the value), TRUE/FALSE, LOG10, SIN, AND, OR, PRODUCT and SUMPRODUCT.
+is not greater than the value), INDEX and MATCH (match types 1, 0 and -1) over one row or
+column, TRUE/FALSE, LOG10, SIN, AND, OR, PRODUCT and SUMPRODUCT.
+
+The books are reproducible: every part of the zip carries one timestamp, by default the one the
+book being replaced already has (so rewriting an unchanged book leaves its bytes as they were),
+else 1980-01-01 00:00:00, so that a new book's bytes depend on its cells alone.
 """
 import math
 import re
@@ -102,6 +107,41 @@ class Evaluator:
                     return row[col - 1]
             raise ValueError(f"VLOOKUP: {key!r} not found")
 
+        def match(key, array, kind=1):
+            """The 1-based place of key in one row or column: kind 0 the first equal value (text
+            without regard to case), 1 the last value not greater than key (ascending data),
+            -1 the last value not less than key (descending data)."""
+            if len(array.rows) > 1 and any(len(row) > 1 for row in array.rows):
+                raise ValueError("MATCH: the range must be one row or one column")
+            fold = (lambda v: v.lower()) if isinstance(key, str) else (lambda v: v)
+            hit = None
+            for i, v in enumerate(array, 1):
+                if isinstance(v, str) != isinstance(key, str):
+                    continue
+                if kind == 0:
+                    if fold(v) == fold(key):
+                        return i
+                elif (fold(v) <= fold(key)) if kind > 0 else (fold(v) >= fold(key)):
+                    hit = i
+            if hit is None:
+                raise ValueError(f"MATCH: {key!r} not found")
+            return hit
+
+        def index(array, r, c=None):
+            """INDEX(range, row, column); over one row or one column a single place will do."""
+            rows = array.rows
+            if c is None:
+                if len(rows) == 1:
+                    r, c = 1, r
+                elif all(len(row) == 1 for row in rows):
+                    c = 1
+                else:
+                    raise ValueError("INDEX: a two-dimensional range needs a column")
+            r, c = int(r), int(c)
+            if r < 1 or c < 1:
+                raise ValueError("INDEX: row and column start at 1")
+            return rows[r - 1][c - 1]
+
         def round_half_away(x, n=0):
             f = 10.0 ** n
             return math.floor(abs(x) * f + 0.5) / f * (1 if x >= 0 else -1)
@@ -125,6 +165,7 @@ class Evaluator:
             "SUM": lambda *a: sum(flatten(a)),
             "AVERAGE": lambda *a: sum(flatten(a)) / len(flatten(a)),
             "IF": lambda c, a, b=0: a if c else b,
+            "INDEX": index, "MATCH": match,
         }
         return eval(expr, {"__builtins__": {}}, env)
 
@@ -166,8 +207,23 @@ def sheet_xml(name, cells, evaluator):
     return "".join(out)
 
 
-def write_xlsx(path, sheets, names=None):
+ZIP_EPOCH = (1980, 1, 1, 0, 0, 0)
+
+
+def book_date_time(path):
+    """The timestamp the parts of the book at path carry, if it is one of these books."""
+    try:
+        with zipfile.ZipFile(path) as z:
+            stamps = {info.date_time for info in z.infolist()}
+    except (OSError, zipfile.BadZipFile):
+        return None
+    return stamps.pop() if len(stamps) == 1 else None
+
+
+def write_xlsx(path, sheets, names=None, date_time=None):
+    """Write the book; date_time (a zip timestamp) defaults to the book's own, else ZIP_EPOCH."""
     names = names or {}
+    date_time = date_time or book_date_time(path) or ZIP_EPOCH
     evaluator = Evaluator(sheets, names)
     n = len(sheets)
     content_types = (
@@ -202,10 +258,13 @@ def write_xlsx(path, sheets, names=None):
         + "".join(f'<Relationship Id="rId{i}" Type="http://schemas.openxmlformats.org/officeDocument/2006/relationships/worksheet" Target="worksheets/sheet{i}.xml"/>'
                   for i in range(1, n + 1))
         + "</Relationships>")
+    parts = [("[Content_Types].xml", content_types), ("_rels/.rels", root_rels),
+             ("xl/workbook.xml", workbook), ("xl/_rels/workbook.xml.rels", workbook_rels)]
+    parts += [(f"xl/worksheets/sheet{i}.xml", sheet_xml(name, cells, evaluator))
+              for i, (name, cells) in enumerate(sheets, 1)]
     with zipfile.ZipFile(path, "w", zipfile.ZIP_DEFLATED) as z:
-        z.writestr("[Content_Types].xml", content_types)
-        z.writestr("_rels/.rels", root_rels)
-        z.writestr("xl/workbook.xml", workbook)
-        z.writestr("xl/_rels/workbook.xml.rels", workbook_rels)
-        for i, (name, cells) in enumerate(sheets, 1):
-            z.writestr(f"xl/worksheets/sheet{i}.xml", sheet_xml(name, cells, evaluator))
+        for part, text in parts:
+            info = zipfile.ZipInfo(part, date_time=date_time)
+            info.compress_type = zipfile.ZIP_DEFLATED
+            info.external_attr = 0o600 << 16     # as ZipFile.writestr sets for a name
+            z.writestr(info, text)
