@@ -881,4 +881,8 @@ TEST_CASE("a time ratio beside symbols whose time cancels") {
     const std::string d = "I, I_L : A\nC : A*h\nH : h\nV : L\nq : L/min\nt : min\n";
     fails_with(d, {"I = 1.1*C/(H*60) + I_L", "V = q*t*60"}, plumb::rules::unit_scale);
     passes(d, {"I = 1.1*C/H + I_L", "I = C/H*7", "V = q*t"});
+    // A beam's end rotation θ = w·L³/(24·E·I) (Roark's Formulas for Stress and Strain, 7th
+    // ed., Table 8.1, from memory): time is in its newtons and pascals, not in a unit of
+    // hours, and the 24 is the formula's.
+    passes("θ : 1\nw : N/m\nL_b : m\nE : Pa\nI_z : m^4\n", {"θ = w*L_b^3/(24*E*I_z)"});
 }

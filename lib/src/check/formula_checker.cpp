@@ -674,6 +674,7 @@ class checker {
     // A side that is a product of one bracketed sum and symbols or cells: the sum's unit is
     // the other side's over theirs, which says which of its terms is off.
     void find_sum_among_factors(std::uint32_t root, const typed_term& other) {
+        factor_sum_node_ = syntax::no_index;
         if (!std::isfinite(other.scale) || !(other.scale > 0))
             return;
         const expr_kind kind = file_.nodes[root].kind;
@@ -731,14 +732,17 @@ class checker {
             if (i > 0 && operands_[base].type.known && operands_[base].type.literal_count == 0) {
                 side_hint_ = &operands_[base].type; // on the type stack, which never moves
                 side_hint_node_ = s.root;
-                if (f.side_count == 2) [[unlikely]]
-                    find_sum_among_factors(s.root, operands_[base].type);
+                if (f.side_count == 2) {
+                    formula_root_ = s.root;
+                    other_side_ = side_hint_;
+                }
             }
             if (i > 0 && operands_[base].type.dim == velocity_squared_dim) [[unlikely]]
                 note_enthalpy_side(operands_[base], s.root);
             operands_.push_back({push_operand_type(s.root, types_base, f.side_count), s.root});
             side_hint_node_ = syntax::no_index;
-            factor_sum_node_ = syntax::no_index;
+            formula_root_ = syntax::no_index;
+            other_side_ = nullptr;
             enthalpy_side_ = syntax::no_index;
         }
         const scratch_region region(operands_, base, types_, types_base);
@@ -2296,6 +2300,10 @@ class checker {
     // symbols or cells, and the scale the other side leaves for it.
     std::uint32_t factor_sum_node_ = syntax::no_index;
     typed_term factor_sum_hint_;
+    std::uint32_t sum_checked_ = syntax::no_index; // the sum whose terms check_scales weighs
+    // While the second side of an equation of two is checked: its root and the first side.
+    std::uint32_t formula_root_ = syntax::no_index;
+    const typed_term* other_side_ = nullptr;
     const typed_term* sum_side_hint_ = nullptr; // while a side's sum is checked, the other side
     // The site's barometer where the file declares one: see declared_site_barometer.
     struct site_barometer {
@@ -3157,13 +3165,13 @@ class checker {
         // further up; the dimension stays known.
         double unit = 1.0;
         // A sum that is a side of an equation: the other side says which term is off.
-        sum_side_hint_ = index == side_hint_node_    ? side_hint_
-                         : index == factor_sum_node_ ? &factor_sum_hint_
-                                                     : nullptr;
+        sum_side_hint_ = index == side_hint_node_ ? side_hint_ : nullptr;
+        sum_checked_ = index;
         result.scale = check_scales(terms, "terms of this sum", unit, &result.exact_scale)
                            ? unit
                            : std::numeric_limits<double>::quiet_NaN();
         sum_side_hint_ = nullptr;
+        sum_checked_ = syntax::no_index;
         if (index == side_hint_node_) [[unlikely]]
             settle_rounded_side(result, literal_base);
         cut_literals_to(literal_base);
@@ -4720,6 +4728,16 @@ class checker {
              (dimensionless && cancels(r.odd) && !cancels(r.reference) &&
               !holds_percentage(ops[index[r.reference]].node))))
             std::swap(r.odd, r.reference);
+        // A sum among a side's factors, "(b + z*y)*y" = A: asked only here, once the terms
+        // are known to disagree.
+        if (what.what.starts_with("terms") && parts.size() == 2 && sum_side_hint_ == nullptr &&
+            sum_checked_ != syntax::no_index && formula_root_ != syntax::no_index &&
+            other_side_ != nullptr && other_side_->known && other_side_->literal_count == 0)
+            [[unlikely]] {
+            find_sum_among_factors(formula_root_, *other_side_);
+            if (factor_sum_node_ == sum_checked_)
+                sum_side_hint_ = &factor_sum_hint_;
+        }
         // "w = q*s + g_sw" with w and g_sw in kN/m and q in Pa: the term in the other side's
         // unit is right, whichever came first.
         if (what.what.starts_with("terms") && parts.size() == 2 && sum_side_hint_ != nullptr &&
@@ -5533,17 +5551,42 @@ class checker {
         } catch (const std::exception&) {
             return false;
         }
+        // Only a unit that names minutes, hours or days: a beam's w·L³/(24·E·I) has time in
+        // its newtons and pascals, and its 24 is the formula's.
         return for_each_factor(term, [&](std::uint32_t at, int) {
             const syntax::expr_node& n = file_.nodes[at];
-            std::optional<dimension> dim;
             if (n.kind == expr_kind::symbol) {
-                if (const symbol_entry* e = symbols_.find(text(n.range)); e != nullptr)
-                    dim = e->dim;
-            } else if (n.kind == expr_kind::reference) {
-                dim = file_.references[n.lhs].dim;
+                const symbol_entry* e = symbols_.find(text(n.range));
+                return e != nullptr && names_a_time_unit(e->unit_text);
             }
-            return dim && !dim->exponent(base_dimension::time).is_zero();
+            return n.kind == expr_kind::reference &&
+                   names_a_time_unit(file_.references[n.lhs].unit_text);
         });
+    }
+
+    // Whether a unit's text names a time unit longer than the second, alone or inside a row
+    // (A*h, L/min, kWh, gpm).
+    static bool names_a_time_unit(std::string_view unit) {
+        static constexpr std::array<std::string_view, 22> words{
+            "min", "h",   "hr",  "d",   "day", "yr",  "Ah",   "kWh",  "Wh",   "MWh", "gpm",
+            "cfm", "gph", "mgd", "rpm", "mph", "fpm", "scfm", "acfm", "scfh", "cfh", "tph"};
+        std::size_t at = 0;
+        while (at < unit.size()) {
+            const auto letter = [&](std::size_t i) {
+                const char c = unit[i];
+                return (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || c == '_';
+            };
+            while (at < unit.size() && !letter(at))
+                ++at;
+            std::size_t end = at;
+            while (end < unit.size() && letter(end))
+                ++end;
+            const std::string_view word = unit.substr(at, end - at);
+            if (!word.empty() && std::find(words.begin(), words.end(), word) != words.end())
+                return true;
+            at = end;
+        }
+        return false;
     }
 
     // Whether `l` is a ratio of time units, multiplying or dividing.

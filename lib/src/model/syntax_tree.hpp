@@ -53,6 +53,8 @@ struct reference_value {
     bool difference = false;
     // A pure number whose row label says it is a liquid's specific gravity.
     bool specific_gravity = false;
+    // The unit as written for the cell ("Ah", "L/min"), where one is.
+    std::string_view unit_text;
     // A gas volume at reference conditions (Nm³, scf): its reference temperature and the power
     // it stands in in the cell's unit; 0 where the unit names none.
     std::int8_t reference_power = 0;

@@ -632,6 +632,8 @@ class workbook_checker {
                 r.area.single() && v.dim && labelled_a_difference(r.sheet, r.area.first);
             target.specific_gravity = r.area.single() && v.dim && v.dim->is_dimensionless() &&
                                       labelled_a_specific_gravity(r.sheet, r.area.first);
+            target.unit_text =
+                v.unit != nullptr ? std::string_view(v.unit->unit.text) : std::string_view();
             note_reference_state(target, v.unit != nullptr ? std::string_view(v.unit->unit.text)
                                                            : std::string_view());
         }
