@@ -886,3 +886,15 @@ TEST_CASE("a time ratio beside symbols whose time cancels") {
     // hours, and the 24 is the formula's.
     passes("θ : 1\nw : N/m\nL_b : m\nE : Pa\nI_z : m^4\n", {"θ = w*L_b^3/(24*E*I_z)"});
 }
+
+// Printed factors that other tables round another way: 2545 Btu/h per hp (the 59 °F Btu's
+// figure; the IT Btu gives 2544.43, NIST SP 811 (2008), B.8) and 2.22, Manning's 1.49
+// squared, in US manuals' friction slope n²·V²·L/(2.22·R^(4/3)) (FHWA HEC-22, 3rd ed., from
+// memory). A 2600 or a 2.5 is still no such factor.
+TEST_CASE("factors printed from other definitions or roundings") {
+    const std::string d = "Q_b : Btu/h\nP : hp\nh : ft\nn : s/m^(1/3)\nV : ft/s\nL : ft\n"
+                          "R : ft\n";
+    passes(d, {"Q_b = 2545*P", "Q_b = 2544*P", "h = n^2*V^2*L/(2.22*R^(4/3))",
+               "h = n^2*V^2*L/(2.208*R^(4/3))"});
+    fails_with(d, {"Q_b = 2600*P", "h = n^2*V^2*L/(2.5*R^(4/3))"}, plumb::rules::unit_scale);
+}

@@ -784,3 +784,17 @@ TEST_CASE("the ground engineer's round 10 kN/m³ for water") {
         CHECK(plumb::test::problems_in(plumb::test::check_after(decl, wrong)) > 0);
     }
 }
+
+// A cooling water flow from a duty, V = 3.6·Q/(c_p·ΔT) in m³/h from kW (water's density
+// 1000 kg/m³ folded into 3.6, common practice): written with 3600, the density is missing, and
+// the seconds of an hour are not read as one over it. The chiller rule's 24 (12 000/500) still
+// reads as water's heat capacity per gpm.
+TEST_CASE("the clock's 3600 is no property of water") {
+    const std::string decl = "V : m^3/h\nQ : kW\nc_p : kJ/(kg*K)\nΔT : K\nTR : TR\nq : gpm\n"
+                             "ΔT_F : Δ°F\n";
+    const auto r = plumb::test::check_after(decl, "V = 3600*Q/(c_p*ΔT)");
+    CHECK(plumb::test::problems_in(r) > 0);
+    CHECK(plumb::test::count_of(r, plumb::rules::gravity_number) == 0);
+    CHECK(plumb::test::count_of(r, plumb::rules::trade_constant) == 0);
+    CHECK(plumb::test::problems_in(plumb::test::check_after(decl, "TR = q*ΔT_F/24")) == 0);
+}

@@ -350,6 +350,13 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
         // conversion, never a property of water or gravity written out.
         if (!(number.value > 0) || x == 0.0 || (number.power_of_ten && std::abs(number.power) > 3))
             continue;
+        // The clock's ratios (60, 1440, 3600, 86400; SI Brochure 9th ed., Table 8) convert
+        // time, and are no property of water or gravity: 3600*Q/(c_p*ΔT) into m³/h lacks a
+        // density, which a 3600 read as one would hide. (24 stays: the chiller rule's
+        // TR = gpm·ΔT/24 is 12000/500, water's heat capacity per gpm.)
+        if (number.value == 60.0 || number.value == 1440.0 || number.value == 3600.0 ||
+            number.value == 86400.0)
+            continue;
         const double half_unit = half_unit_in_last_digit(texts[at]);
         for (const carried_quantity& q : quantities()) {
             if (q.only_in != carried_quantity::term_kind::any && q.only_in != term)

@@ -140,7 +140,9 @@ const std::vector<unit_ratio>& unit_ratios() {
 }
 
 exact_or_double low_end(const scale_literal& l) {
-    return {l.value * (1.0 - l.tolerance), l.low};
+    return {l.low ? std::min(l.low->to_double(), l.value * (1.0 - l.tolerance))
+                  : l.value * (1.0 - l.tolerance),
+            l.low};
 }
 exact_or_double high_end(const scale_literal& l) {
     return {l.high ? std::max(l.high->to_double(), l.value * (1.0 + l.tolerance))
@@ -349,6 +351,21 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
             l.high.reset();
         }
     }
+    // Motor and gear heat tables print 2545 Btu/h per hp, the 59 °F Btu's figure (NIST SP 811
+    // (2008), B.8: 1 hp = 745.6999 W, 1 Btu_59°F = 1054.804 J); the IT Btu gives 2544.43.
+    // And Manning's (1/0.3048)^(2/3) = 2.20795 printed 2.22, from 1.49² (see
+    // looks_like_conversion).
+    const std::optional<rational> printed_low =
+        significant == 4 && l.value == 2545.0 ? std::optional(rational(254443, 100))
+        : significant == 3 && l.value == 2.22 ? std::optional(rational(220795, 100000))
+                                              : std::nullopt;
+    if (printed_low && l.low) {
+        try {
+            l.low = std::min(*l.low, *printed_low);
+        } catch (const arithmetic_overflow&) {
+            l.low.reset();
+        }
+    }
     const bool whole = !has_point && e == std::string_view::npos;
     l.factor_like = !l.power_of_ten && (whole ? l.value >= 1000 : significant >= 3);
     // Safety and load factors (1.15, 1.35) have 3 digits and may lie near some unit ratio
@@ -368,6 +385,12 @@ bool looks_like_conversion(const scale_literal& l, bool allow_hundred) {
     // (common practice); three digits are enough for that one ratio.
     static const double manning_us = std::cbrt(1.0 / 0.3048);
     if (l.factor_like && std::abs(l.value - manning_us) <= l.value * l.tolerance + 1e-12)
+        return true;
+    // Its square printed from 1.49, 2.22 (1.49² = 2.2201), in the friction slope
+    // n²·V²/(2.22·R^(4/3)) of US manuals (FHWA HEC-22, 3rd ed., from memory).
+    if (l.factor_like && l.value >= 2.2 && l.value <= 2.225 &&
+        (std::abs(l.value - manning_us * manning_us) <= l.value * l.tolerance + 1e-12 ||
+         l.value == 2.22))
         return true;
     return l.table_digits && is_unit_ratio(l);
 }
