@@ -898,3 +898,11 @@ TEST_CASE("factors printed from other definitions or roundings") {
                "h = n^2*V^2*L/(2.208*R^(4/3))"});
     fails_with(d, {"Q_b = 2600*P", "h = n^2*V^2*L/(2.5*R^(4/3))"}, plumb::rules::unit_scale);
 }
+
+// The inch's exact 25.4 mm (NIST SP 811 (2008), B.8) and 86.4 m³/d per L/s, beside units that
+// already agree, convert twice; where the units need them they pass.
+TEST_CASE("25.4 and 86.4 where the units already agree") {
+    const std::string d = "a, b : in\nc : mm\nq, r : L/s\nQ : m^3/d\n";
+    fails_with(d, {"a = b/25.4", "q = r*86.4"}, plumb::rules::unit_scale);
+    passes(d, {"a = c/25.4", "Q = r*86.4"});
+}

@@ -419,6 +419,11 @@ TEST_CASE("prefixes never attach to units that refuse them") {
     // B.8: 1 ft = 0.3048 m, 1 gal = 3.785412 L).
     CHECK(must_resolve("fps").factor() == doctest::Approx(0.3048));
     CHECK(must_resolve("gph").factor() == doctest::Approx(3.785411784e-3 / 3600.0));
+    // Line loads per linear foot, gallons a day, thousands of pounds (NIST SP 811 (2008), B.8).
+    CHECK(must_resolve("plf").factor() == doctest::Approx(4.4482216152605 / 0.3048));
+    CHECK(must_resolve("klf").factor() == doctest::Approx(4448.2216152605 / 0.3048));
+    CHECK(must_resolve("gpd").factor() == doctest::Approx(3.785411784e-3 / 86400.0));
+    CHECK(must_resolve("klb").factor() == doctest::Approx(453.59237));
     // "kcal_th" is a row too (kinetics tables' kilocalorie), never k + cal_th.
     CHECK(must_resolve("kcal_th").unit->name == "kilocalorie (thermochemical)");
     for (std::string_view symbol : {"kpsi", "Mft", "kmin", "kh", "mpsi", "kkg", "kkm", "m\u00B0C",

@@ -174,6 +174,11 @@ constexpr std::string_view state_correction_advice =
 bool stands_for_a_conversion(const scale_literal& l, bool allow_hundred) {
     if (looks_like_conversion(l, allow_hundred))
         return true;
+    // The inch's 25.4 mm, 2.54 cm and 0.0254 m, exact (NIST SP 811 (2008), B.8), and 86.4
+    // m³/d per L/s: too few digits to look like conversions, yet nothing else.
+    if (std::abs(l.exponent) == 1.0 &&
+        (l.value == 25.4 || l.value == 2.54 || l.value == 0.0254 || l.value == 86.4))
+        return true;
     if (!l.factor_like || std::abs(l.exponent) != 1.0)
         return false;
     const std::optional<rational> printed = printed_power(l, 1.0);

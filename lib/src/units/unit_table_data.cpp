@@ -302,6 +302,9 @@ constexpr unit_definition rows[] = {
 
     // Mass.
     pound_mass,
+    // Steam and boiler sheets: thousands of pounds (klb/h), common practice.
+    absolute("klb", "thousand pounds (avoirdupois)", mass, 453.59237, "453.59237",
+             prefixes::refused, "NIST SP 811 (2008), B.8 pound 0.45359237 kg, exact, × 1000"),
     spelled("lbm", pound_mass),
     // The grain, 1/7000 lb, in which psychrometric charts give moisture (gr/lb).
     absolute("gr", "grain", mass, 0.00006479891, "0.00006479891", prefixes::refused,
@@ -322,6 +325,14 @@ constexpr unit_definition rows[] = {
              "NIST SP 811 (2008), B.8 prints 4.448222E+00; exact as lb × 9.80665 m/s²"),
     absolute("kip", "kip (1000 lbf)", force, 4448.2216152605, "4448.2216152605", prefixes::refused,
              "NIST SP 811 (2008), B.8 prints 4.448222E+03; exact as 1000 lbf"),
+    // Line loads on US framing drawings: pounds-force and kips per linear foot (common
+    // practice; NIST SP 811 (2008), B.8: 1 lbf = 4.448222 N, 1 ft = 0.3048 m, exact).
+    absolute("plf", "pound-force per linear foot", dims(1, 0, -2), 4.4482216152605 / 0.3048,
+             "44482216152605/3048000000000", prefixes::refused,
+             "NIST SP 811 (2008), B.8, lbf/ft, exact"),
+    absolute("klf", "kip per linear foot", dims(1, 0, -2), 4448.2216152605 / 0.3048,
+             "44482216152605/3048000000", prefixes::refused,
+             "NIST SP 811 (2008), B.8, 1000 lbf/ft, exact"),
     absolute("kgf", "kilogram-force", force, 9.80665, "9.80665", prefixes::refused, nist),
 
     // Pressure.
@@ -513,6 +524,10 @@ constexpr unit_definition rows[] = {
     // The plumbing and fire trades' feet per second and gallons an hour (common practice).
     absolute("fps", "foot per second", velocity, 0.3048, "0.3048", prefixes::refused,
              "NIST SP 811 (2008), B.8 prints 3.048E-01; exact as ft/s"),
+    // Water wells and treatment: gallons a day (transmissivity in gpd/ft, common practice).
+    absolute("gpd", "gallon (U.S.) per day", volumetric_flow, 0.003785411784 / 86400.0,
+             "3785411784/86400000000000000", prefixes::refused,
+             "NIST SP 811 (2008), B.8 gallon (U.S.) 3.785412E-03 per day; exact"),
     absolute("gph", "gallon (U.S.) per hour", volumetric_flow, 0.003785411784 / 3600.0,
              "3785411784/3600000000000000", prefixes::refused,
              "NIST SP 811 (2008), B.8 gallon (U.S.) 3.785412E-03 per hour; exact"),
