@@ -578,7 +578,8 @@ TEST_CASE("an absolute temperature converted and given the other scale's zero as
 TEST_CASE("a gauge reading over a column's depth is its gradient") {
     const std::string decl = "MW, KMW : ppg\nSIDPP : psig\nTVD : ft\nG : psi/ft\n"
                              "ρ : lb/ft^3\nM : g/mol\nR : J/(mol*K)\nT : K\n";
-    passes(decl, {"KMW = MW + SIDPP/(0.052*TVD)", "G = SIDPP/TVD"});
+    passes(decl,
+           {"KMW = MW + SIDPP/(0.052*TVD)", "G = SIDPP/TVD", "SIDPP <= G*TVD", "SIDPP = G*TVD"});
     fails_with(decl, {"ρ = SIDPP*M/(R*T)"}, plumb::rules::offset_scale);
 }
 

@@ -640,6 +640,29 @@ class checker {
         return !other && forces == 1;
     }
 
+    // A product of one pressure gradient (psi/ft, kPa/m) and one length, with numbers.
+    bool gradient_times_depth(std::uint32_t k) const {
+        int gradients = 0;
+        int lengths = 0;
+        const bool other = for_each_factor(k, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number)
+                return false;
+            const symbol_entry* e =
+                n.kind == expr_kind::symbol ? symbols_.find(text(n.range)) : nullptr;
+            if (sign < 0 || e == nullptr || !e->compact_dim)
+                return true;
+            if (*e->compact_dim == pressure_gradient_dim)
+                ++gradients;
+            else if (*e->compact_dim == length_dimension())
+                ++lengths;
+            else
+                return true;
+            return false;
+        });
+        return !other && gradients == 1 && lengths == 1;
+    }
+
     // Whether a product has a symbol or a cell of the given dimension above the line.
     bool holds_factor_of_dimension(std::uint32_t k, const compact_dimension& wanted) const {
         return for_each_factor(k, [&](std::uint32_t at, int sign) {
@@ -5815,10 +5838,14 @@ class checker {
             // "P_d = 2*S*t/D": a stress times the shape of a wall is a net pressure too; and
             // "p_w = 100*F/A_p", a cylinder's load over its bore, the gauge reading that holds
             // it with the other side at the atmosphere.
+            // And "FG*TVD", a gradient times a depth: the column's pressure, as 0.052*MW*TVD
+            // is (a fracture gradient from a leak-off test is gauge-based; Bourgoyne et al.,
+            // Applied Drilling Engineering, 1986, ch. 6, from memory).
             const auto net_pressure = [&](const operand& o) {
                 return o.type.absolute_pressure_difference ||
                        (!o.type.point && o.type.dim == pressure_dimension() &&
-                        (pressure_scaled_by_shape(o.node, false) || force_over_area(o.node)));
+                        (pressure_scaled_by_shape(o.node, false) || force_over_area(o.node) ||
+                         gradient_times_depth(o.node)));
             };
             if ((on_gauge(*reference) && net_pressure(side)) ||
                 (on_gauge(side) && net_pressure(*reference)))
