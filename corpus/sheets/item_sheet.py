@@ -85,7 +85,8 @@ def book_formula(book, ref):
 
 
 def write_expect(path, stem, book, folder, notes):
-    """The planted mistakes and every other finding, as the reviewer recorded them."""
+    """The planted mistakes and every other finding, as the reviewer recorded them; a book's
+    HEADNOTE lines (notes["HEADNOTE"][stem]), where it has any, go below the caution."""
     missed = notes.get("MISSED", {}).get(stem, {})
     renamed = notes.get("RENAMED", {}).get(stem, {})
     messages = notes.get("MESSAGES", {}).get(stem, {})
@@ -95,6 +96,8 @@ def write_expect(path, stem, book, folder, notes):
                 "# Invented scenario. A dimensionally consistent formula can still be wrong;\n"
                 "# this check does not replace independent review under local codes and\n"
                 "# licensed practice.\n")
+        for line in notes.get("HEADNOTE", {}).get(stem, []):
+            f.write(f"# {line}\n")
         for cell, (rule, what) in book["planted"].items():
             f.write(f"# planted: {what}\n")
             if cell in missed:

@@ -5,7 +5,8 @@ copies).
 Defined names, AVERAGE, IF, MIN/MAX/SUM over ranges, string results, ROUND, ROUNDUP, ROUNDDOWN, CEILING, VLOOKUP
 over a two-dimensional range with Excel's approximate match by default (the last row whose key
 is not greater than the value), INDEX and MATCH (match types 1, 0 and -1) over one row or
-column, TRUE/FALSE, LOG10, SIN, AND, OR, PRODUCT and SUMPRODUCT.
+column, TRUE/FALSE, LOG10, SIN, COS, TAN and their inverses ASIN, ACOS, ATAN (radians, with
+RADIANS and DEGREES), AND, OR, PRODUCT and SUMPRODUCT.
 
 The books are reproducible: every part of the zip carries one timestamp, by default the one the
 book being replaced already has (so rewriting an unchanged book leaves its bytes as they were),
@@ -158,7 +159,9 @@ class Evaluator:
             "_v": self.value, "_r": rng, "VLOOKUP": vlookup, "ROUND": round_half_away,
             "ROUNDUP": round_up, "ROUNDDOWN": round_down, "CEILING": lambda x, m=1: math.ceil(x / m) * m, "TRUE": True, "FALSE": False, "PI": lambda: math.pi, "SQRT": math.sqrt, "LN": math.log,
             "EXP": math.exp, "ABS": abs, "RADIANS": math.radians, "COS": math.cos,
-            "SIN": math.sin, "LOG10": math.log10, "AND": lambda *a: all(a), "OR": lambda *a: any(a),
+            "SIN": math.sin, "TAN": math.tan, "ASIN": math.asin, "ACOS": math.acos,
+            "ATAN": math.atan, "DEGREES": math.degrees,
+            "LOG10": math.log10, "AND": lambda *a: all(a), "OR": lambda *a: any(a),
             "PRODUCT": lambda *a: math.prod(flatten(a)),
             "SUMPRODUCT": lambda a, b: sum(x * y for x, y in zip(a, b)),
             "MIN": lambda *a: min(flatten(a)), "MAX": lambda *a: max(flatten(a)),
