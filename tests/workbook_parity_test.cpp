@@ -951,3 +951,19 @@ TEST_CASE("workbook parity: a formula that gives a word needs no unit") {
     CHECK(finding(r, "Channel!B4", rules::no_unit) == nullptr);
     CHECK(finding(r, "Channel!B5", rules::no_unit) != nullptr);
 }
+
+TEST_CASE("workbook parity: an apparent power written under a real power's unit") {
+    // Real power is the apparent power times the power factor, P = S·pf (IEC 80000-6, from
+    // memory): a kVA cell copied into a kW cell leaves the power factor out, as the notation's
+    // P = S does. Times a power factor cell it passes.
+    const check_report r = check_one_sheet("MCC", labelled_sheet({
+                                                      {"Apparent power", "250", "kVA"}, // B2
+                                                      {"Power factor", "0.85", "-"},    // B3
+                                                      {"Real power", "=B2", "kW"},      // B4
+                                                      {"Real power", "=B2*B3", "kW"},   // B5
+                                                  }));
+    const diagnostic* d = finding(r, "MCC!B4", rules::unit_scale);
+    REQUIRE(d != nullptr);
+    CHECK(says(*d, "apparent power"));
+    CHECK(problems_in(r) == 1);
+}

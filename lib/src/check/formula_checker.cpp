@@ -805,6 +805,10 @@ class checker {
                     ask_of_marked_units(f, sides);
                 else if (file_.functions == syntax::function_names::spreadsheet &&
                          out_.size() == findings_before && equation && sides.size() == 2 &&
+                         sides[0].type.known && sides[0].type.dim == power_dim) [[unlikely]]
+                    report_apparent_as_real_power(sides);
+                else if (file_.functions == syntax::function_names::spreadsheet &&
+                         out_.size() == findings_before && equation && sides.size() == 2 &&
                          is_gas_volume_or_flow(sides[0].type.dim)) [[unlikely]]
                     // Not the actual-against-normal rule: sheets write "m³/d" for standard
                     // volumes as often as for actual ones.
@@ -1120,31 +1124,32 @@ class checker {
 
     // "P_e = S" with S in kVA and P_e in kW: apparent power is the real power over the power
     // factor; the units alone cannot say so, as both are watts to the dimension.
+    // A workbook's cells count as symbols here: "=C11" under kW with C11 in kVA.
     [[gnu::noinline]] void report_apparent_as_real_power(std::span<const operand> sides) {
-        const std::uint32_t left = sole_symbol_times_conversions(sides[0].node);
-        const std::uint32_t right = sole_symbol_times_conversions(sides[1].node);
+        const std::uint32_t left = sole_operand_times_conversions(sides[0].node);
+        const std::uint32_t right = sole_operand_times_conversions(sides[1].node);
         if (left == syntax::no_index || right == syntax::no_index)
             return;
-        const symbol_entry* a = symbols_.find(text(file_.nodes[left].range));
-        const symbol_entry* b = symbols_.find(text(file_.nodes[right].range));
-        if (a == nullptr || b == nullptr)
+        const std::optional<std::string_view> a = declared_unit_text(left);
+        const std::optional<std::string_view> b = declared_unit_text(right);
+        if (!a || !b)
             return;
-        const bool a_apparent = (unit_marks_of(a->unit_text) & apparent_power) != 0;
-        const bool b_apparent = (unit_marks_of(b->unit_text) & apparent_power) != 0;
+        const bool a_apparent = (unit_marks_of(*a) & apparent_power) != 0;
+        const bool b_apparent = (unit_marks_of(*b) & apparent_power) != 0;
         if (a_apparent == b_apparent)
             return;
         const std::uint32_t apparent_node = a_apparent ? left : right;
         const std::uint32_t real_node = a_apparent ? right : left;
-        const symbol_entry& apparent = a_apparent ? *a : *b;
-        const symbol_entry& real = a_apparent ? *b : *a;
-        if (real.unit_text.find('W') == std::string_view::npos)
+        const std::string_view apparent = a_apparent ? *a : *b;
+        const std::string_view real = a_apparent ? *b : *a;
+        if (real.find('W') == std::string_view::npos)
             return;
         diagnostic& d = report(
             rules::unit_scale,
             fmt::format("'{}' is an apparent power ({}) and '{}' a real power ({}): they differ by "
                         "the power factor, which this formula leaves out",
-                        text(file_.nodes[apparent_node].range), apparent.unit_text,
-                        text(file_.nodes[real_node].range), real.unit_text),
+                        text(file_.nodes[apparent_node].range), apparent,
+                        text(file_.nodes[real_node].range), real),
             file_.nodes[sides[1].node].range);
         d.level = severity::warning;
         d.notes.push_back({"real power is the apparent power times the power factor, P = S*pf "
@@ -1154,6 +1159,33 @@ class checker {
 
     static bool is_gas_volume_or_flow(const compact_dimension& dim) {
         return dim == volume_dim || dim == volume_flow_dim;
+    }
+
+    // The unit a symbol is declared in, or a workbook cell's written unit.
+    std::optional<std::string_view> declared_unit_text(std::uint32_t at) const {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::symbol) {
+            const symbol_entry* e = symbols_.find(text(n.range));
+            return e != nullptr ? std::optional(e->unit_text) : std::nullopt;
+        }
+        if (n.kind == expr_kind::reference && !file_.references[n.lhs].unit_text.empty())
+            return file_.references[n.lhs].unit_text;
+        return std::nullopt;
+    }
+
+    // The one symbol or cell of a product of it and numbers that only convert units.
+    std::uint32_t sole_operand_times_conversions(std::uint32_t k) const {
+        std::uint32_t found = syntax::no_index;
+        const bool other = for_each_factor(k, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::symbol || n.kind == expr_kind::reference) {
+                const bool second = found != syntax::no_index;
+                found = at;
+                return second;
+            }
+            return n.kind != expr_kind::number || !plain_conversion_number(at);
+        });
+        return other ? syntax::no_index : found;
     }
 
     // The one symbol of a product of it and numbers that only convert units, else no_index.

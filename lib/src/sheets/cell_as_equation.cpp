@@ -46,6 +46,7 @@ std::vector<diagnostic> cell_equation::check(std::uint32_t formula_root, span wr
     cell.exact_scale = written.exact_scale;
     cell.offset = written.offset;
     cell.difference = difference;
+    cell.unit_text = written.text;
     note_reference_state(tree_.references[written_reference_], written.text);
     tree_.nodes[written_node_].range = written_text;
     syntax::formula& equation = tree_.formulas[formula_];
