@@ -663,10 +663,11 @@ class checker {
         return !other && gradients == 1 && lengths == 1;
     }
 
-    // Whether a product has a symbol or a cell of the given dimension above the line.
-    bool holds_factor_of_dimension(std::uint32_t k, const compact_dimension& wanted) const {
-        return for_each_factor(k, [&](std::uint32_t at, int sign) {
-            if (sign < 0)
+    // Whether a product has a symbol or a cell of the given dimension standing with `sign`
+    // (+1 above the line, -1 below it, 0 either).
+    bool has_factor_of_dimension(std::uint32_t k, const compact_dimension& wanted, int sign) const {
+        return for_each_factor(k, [&](std::uint32_t at, int stands) {
+            if (sign != 0 && stands != sign)
                 return false;
             const syntax::expr_node& n = file_.nodes[at];
             if (n.kind == expr_kind::symbol) {
@@ -681,44 +682,24 @@ class checker {
         });
     }
 
-    // Whether a product divides by a symbol or a cell declared a length (a depth).
-    bool divides_by_length(std::uint32_t k) const {
-        return for_each_factor(k, [&](std::uint32_t at, int sign) {
-            if (sign > 0)
-                return false;
-            const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind == expr_kind::symbol) {
-                const symbol_entry* e = symbols_.find(text(n.range));
-                return e != nullptr && e->compact_dim && *e->compact_dim == length_dimension();
-            }
-            if (n.kind == expr_kind::reference) {
-                const syntax::reference_value& r = file_.references[n.lhs];
-                return r.dim && *r.dim == dimension::base(base_dimension::length);
-            }
-            return false;
-        });
-    }
-
     // A side that is a product of one bracketed sum and symbols or cells: the sum's unit is
-    // the other side's over theirs, which says which of its terms is off.
-    void find_sum_among_factors(std::uint32_t root, const typed_term& other) {
-        factor_sum_node_ = syntax::no_index;
-        if (!std::isfinite(other.scale) || !(other.scale > 0))
-            return;
+    // the other side's over theirs, which says which of its terms is off. The scale that
+    // leaves for the sum at `sum`, if `root` is such a product.
+    std::optional<double> scale_left_for_sum(std::uint32_t root, const typed_term& other,
+                                             std::uint32_t sum) const {
         const expr_kind kind = file_.nodes[root].kind;
-        if (kind != expr_kind::multiply && kind != expr_kind::divide)
-            return;
-        std::uint32_t sum = syntax::no_index;
+        if (!std::isfinite(other.scale) || !(other.scale > 0) ||
+            (kind != expr_kind::multiply && kind != expr_kind::divide))
+            return std::nullopt;
+        bool found = false;
         double scale = other.scale;
-        bool plain = true;
-        for_each_factor(root, [&](std::uint32_t at, int sign) {
+        const bool other_factor = for_each_factor(root, [&](std::uint32_t at, int sign) {
             const syntax::expr_node& n = file_.nodes[at];
-            double factor = 0.0;
-            if ((n.kind == expr_kind::add || n.kind == expr_kind::subtract) && sign > 0 &&
-                sum == syntax::no_index) {
-                sum = at;
+            if (at == sum && sign > 0) {
+                found = true;
                 return false;
             }
+            double factor = 0.0;
             if (n.kind == expr_kind::symbol) {
                 if (const symbol_entry* e = symbols_.find(text(n.range));
                     e != nullptr && e->dim && e->offset_unit == nullptr)
@@ -728,18 +709,14 @@ class checker {
                 if (r.dim && r.offset == nullptr)
                     factor = r.scale;
             }
-            if (!(factor > 0) || !std::isfinite(factor)) {
-                plain = false;
+            if (!(factor > 0) || !std::isfinite(factor))
                 return true;
-            }
             scale = sign > 0 ? scale / factor : scale * factor;
             return false;
         });
-        if (!plain || sum == syntax::no_index || !std::isfinite(scale) || !(scale > 0))
-            return;
-        factor_sum_node_ = sum;
-        factor_sum_hint_ = typed_term{};
-        factor_sum_hint_.scale = scale;
+        if (other_factor || !found || !std::isfinite(scale) || !(scale > 0))
+            return std::nullopt;
+        return scale;
     }
 
     void check_formula(const syntax::formula& f) {
@@ -760,17 +737,11 @@ class checker {
             if (i > 0 && operands_[base].type.known && operands_[base].type.literal_count == 0) {
                 side_hint_ = &operands_[base].type; // on the type stack, which never moves
                 side_hint_node_ = s.root;
-                if (f.side_count == 2) {
-                    formula_root_ = s.root;
-                    other_side_ = side_hint_;
-                }
             }
             if (i > 0 && operands_[base].type.dim == velocity_squared_dim) [[unlikely]]
                 note_enthalpy_side(operands_[base], s.root);
             operands_.push_back({push_operand_type(s.root, types_base, f.side_count), s.root});
             side_hint_node_ = syntax::no_index;
-            formula_root_ = syntax::no_index;
-            other_side_ = nullptr;
             enthalpy_side_ = syntax::no_index;
         }
         const scratch_region region(operands_, base, types_, types_base);
@@ -1126,8 +1097,8 @@ class checker {
     // factor; the units alone cannot say so, as both are watts to the dimension.
     // A workbook's cells count as symbols here: "=C11" under kW with C11 in kVA.
     [[gnu::noinline]] void report_apparent_as_real_power(std::span<const operand> sides) {
-        const std::uint32_t left = sole_operand_times_conversions(sides[0].node);
-        const std::uint32_t right = sole_operand_times_conversions(sides[1].node);
+        const std::uint32_t left = sole_symbol_times_conversions(sides[0].node, true);
+        const std::uint32_t right = sole_symbol_times_conversions(sides[1].node, true);
         if (left == syntax::no_index || right == syntax::no_index)
             return;
         const std::optional<std::string_view> a = declared_unit_text(left);
@@ -1173,27 +1144,13 @@ class checker {
         return std::nullopt;
     }
 
-    // The one symbol or cell of a product of it and numbers that only convert units.
-    std::uint32_t sole_operand_times_conversions(std::uint32_t k) const {
+    // The one symbol of a product of it and numbers that only convert units, else no_index;
+    // with `cells_too`, a workbook's cell counts as a symbol.
+    std::uint32_t sole_symbol_times_conversions(std::uint32_t k, bool cells_too = false) const {
         std::uint32_t found = syntax::no_index;
         const bool other = for_each_factor(k, [&](std::uint32_t at, int) {
             const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind == expr_kind::symbol || n.kind == expr_kind::reference) {
-                const bool second = found != syntax::no_index;
-                found = at;
-                return second;
-            }
-            return n.kind != expr_kind::number || !plain_conversion_number(at);
-        });
-        return other ? syntax::no_index : found;
-    }
-
-    // The one symbol of a product of it and numbers that only convert units, else no_index.
-    std::uint32_t sole_symbol_times_conversions(std::uint32_t k) const {
-        std::uint32_t found = syntax::no_index;
-        const bool other = for_each_factor(k, [&](std::uint32_t at, int) {
-            const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind == expr_kind::symbol) {
+            if (n.kind == expr_kind::symbol || (cells_too && n.kind == expr_kind::reference)) {
                 const bool second = found != syntax::no_index;
                 found = at;
                 return second;
@@ -1266,8 +1223,6 @@ class checker {
         return v;
     }
 
-    // A product of symbols and numbers whose gas volumes at reference conditions all share one
-    // reference temperature: that temperature, and the net power the volumes stand in.
     // The reference state every term of a short sum shares, as a term's power 1; empty where
     // one has none or another.
     std::optional<reference_volume> reference_volume_of_sum(std::uint32_t k) const {
@@ -1292,6 +1247,8 @@ class checker {
         return sum;
     }
 
+    // A product of symbols and numbers whose gas volumes at reference conditions all share one
+    // reference temperature: that temperature, and the net power the volumes stand in.
     std::optional<reference_volume> reference_volume_of(std::uint32_t k) const {
         std::optional<reference_volume> found;
         double numbers = 1.0;
@@ -2356,15 +2313,8 @@ class checker {
     // The other side of the equation whose side is the sum at side_hint_node_.
     const typed_term* side_hint_ = nullptr;
     std::uint32_t side_hint_node_ = syntax::no_index;
-    // "(B_ft + z*y)*y" = A in m²: a sum that is a factor of a side, beside factors that are
-    // symbols or cells, and the scale the other side leaves for it.
-    std::uint32_t factor_sum_node_ = syntax::no_index;
-    typed_term factor_sum_hint_;
     std::uint32_t sum_checked_ = syntax::no_index; // the sum whose terms check_scales weighs
-    // While the second side of an equation of two is checked: its root and the first side.
-    std::uint32_t formula_root_ = syntax::no_index;
-    const typed_term* other_side_ = nullptr;
-    const typed_term* sum_side_hint_ = nullptr; // while a side's sum is checked, the other side
+    const typed_term* sum_side_hint_ = nullptr;    // while a side's sum is checked, the other side
     // The site's barometer where the file declares one: see declared_site_barometer.
     struct site_barometer {
         std::string_view name;
@@ -4788,23 +4738,25 @@ class checker {
              (dimensionless && cancels(r.odd) && !cancels(r.reference) &&
               !holds_percentage(ops[index[r.reference]].node))))
             std::swap(r.odd, r.reference);
-        // A sum among a side's factors, "(b + z*y)*y" = A: asked only here, once the terms
-        // are known to disagree.
-        if (what.what.starts_with("terms") && parts.size() == 2 && sum_side_hint_ == nullptr &&
-            sum_checked_ != syntax::no_index && formula_root_ != syntax::no_index &&
-            other_side_ != nullptr && other_side_->known && other_side_->literal_count == 0)
-            [[unlikely]] {
-            find_sum_among_factors(formula_root_, *other_side_);
-            if (factor_sum_node_ == sum_checked_)
-                sum_side_hint_ = &factor_sum_hint_;
-        }
+        // A sum among a side's factors, "(b + z*y)*y" = A in m²: asked only here, once the
+        // terms are known to disagree, of an equation of two sides.
+        const typed_term* hint = sum_side_hint_;
+        typed_term factor_hint;
+        if (what.what.starts_with("terms") && parts.size() == 2 && hint == nullptr &&
+            sum_checked_ != syntax::no_index && side_hint_ != nullptr &&
+            side_hint_node_ != syntax::no_index && current_->side_count == 2) [[unlikely]]
+            if (const std::optional<double> scale =
+                    scale_left_for_sum(side_hint_node_, *side_hint_, sum_checked_)) {
+                factor_hint.scale = *scale;
+                hint = &factor_hint;
+            }
         // "w = q*s + g_sw" with w and g_sw in kN/m and q in Pa: the term in the other side's
         // unit is right, whichever came first.
-        if (what.what.starts_with("terms") && parts.size() == 2 && sum_side_hint_ != nullptr &&
-            sum_side_hint_->known && sum_side_hint_->literal_count == 0 &&
-            std::isfinite(sum_side_hint_->scale) && sum_side_hint_->scale > 0) [[unlikely]] {
+        if (what.what.starts_with("terms") && parts.size() == 2 && hint != nullptr && hint->known &&
+            hint->literal_count == 0 && std::isfinite(hint->scale) && hint->scale > 0)
+            [[unlikely]] {
             const auto in_side_unit = [&](std::size_t i) {
-                return std::abs(apparent_scale(parts[i]) / sum_side_hint_->scale - 1.0) < 1e-9;
+                return std::abs(apparent_scale(parts[i]) / hint->scale - 1.0) < 1e-9;
             };
             if (in_side_unit(r.odd) && !in_side_unit(r.reference))
                 std::swap(r.odd, r.reference);
@@ -5672,13 +5624,7 @@ class checker {
                 return std::abs(l.value / r - 1.0) <= l.tolerance + 1e-9;
             }))
             return false;
-        return for_each_factor(term, [&](std::uint32_t at, int) {
-            const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind != expr_kind::symbol)
-                return false;
-            const symbol_entry* e = symbols_.find(text(n.range));
-            return e != nullptr && e->compact_dim && *e->compact_dim == velocity_dim;
-        });
+        return has_factor_of_dimension(term, velocity_dim, 0);
     }
 
     // "p_g*10/100": a percentage written as its number over 100 (10 % of the supply
@@ -5722,17 +5668,10 @@ class checker {
         if (l.value != 100.0 || l.exponent != 1.0)
             return false;
         return for_each_factor(term, [&](std::uint32_t at, int sign) {
-            if (sign > 0)
-                return false;
-            std::uint32_t k = at;
-            const expr_kind kind = file_.nodes[k].kind;
-            if (kind != expr_kind::add && kind != expr_kind::subtract)
-                return false;
-            while (file_.nodes[k].kind == expr_kind::add ||
-                   file_.nodes[k].kind == expr_kind::subtract)
-                k = file_.nodes[k].lhs;
-            return file_.nodes[k].kind == expr_kind::number &&
-                   written_number(file_.nodes[k].range) == 100.0;
+            const std::uint32_t leading =
+                sign < 0 ? number_leading_sum(at, false) : syntax::no_index;
+            return leading != syntax::no_index &&
+                   written_number(file_.nodes[leading].range) == 100.0;
         });
     }
 
@@ -6015,18 +5954,12 @@ class checker {
         }
     }
 
-    std::uint32_t skip_groups(std::uint32_t node) const {
-        while (file_.nodes[node].kind == expr_kind::group)
-            node = file_.nodes[node].lhs;
-        return node;
-    }
-
     // The number added to a side "reading + number", groups stripped; no_index otherwise.
     std::uint32_t number_added(std::uint32_t node) const {
-        node = skip_groups(node);
+        node = syntax::inside_brackets(file_, node);
         if (file_.nodes[node].kind != expr_kind::add)
             return syntax::no_index;
-        const std::uint32_t rhs = skip_groups(file_.nodes[node].rhs);
+        const std::uint32_t rhs = syntax::inside_brackets(file_, file_.nodes[node].rhs);
         return file_.nodes[rhs].kind == expr_kind::number ? rhs : syntax::no_index;
     }
 
@@ -6061,7 +5994,7 @@ class checker {
             if (std::abs(other.type.scale / u.pascals - 1.0) > 5e-3 ||
                 read_reference_state(pressure_dimension(), value, written, u.pascals) == nullptr)
                 continue;
-            const syntax::expr_node& sum = file_.nodes[skip_groups(side.node)];
+            const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, side.node)];
             return fmt::format("{} is the atmosphere in {}, the unit of {}, but the reading is "
                                "not in {}: convert it as well, ({}*{} + {})",
                                written, u.name, quote(other.node), u.name,
@@ -6078,8 +6011,8 @@ class checker {
                                                          bool temperature) const {
         const std::uint32_t number = number_added(absolute.node);
         if (temperature || number == syntax::no_index ||
-            file_.nodes[skip_groups(gauge.node)].kind != expr_kind::symbol ||
-            !holds_gauge(file_.nodes[skip_groups(absolute.node)].lhs))
+            file_.nodes[syntax::inside_brackets(file_, gauge.node)].kind != expr_kind::symbol ||
+            !holds_gauge(file_.nodes[syntax::inside_brackets(file_, absolute.node)].lhs))
             return std::nullopt;
         const std::string written = display_text(file_.nodes[number].range);
         return fmt::format("{} adds {}, the atmosphere, to a gauge reading, which makes it "
@@ -6293,12 +6226,12 @@ class checker {
     // "(0.7 + 0.03*t)": a number other than 1 plus a number times a symbol, in either order;
     // "1 + α*t" is a coefficient per degree, whose reference the reading should be taken from.
     bool linear_fit_on_reading(std::uint32_t node) const {
-        node = skip_groups(node);
+        node = syntax::inside_brackets(file_, node);
         const syntax::expr_node& sum = file_.nodes[node];
         if (sum.kind != expr_kind::add)
             return false;
         const auto number_times_symbol = [&](std::uint32_t k) {
-            const syntax::expr_node& n = file_.nodes[skip_groups(k)];
+            const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, k)];
             if (n.kind != expr_kind::multiply)
                 return false;
             const expr_kind a = file_.nodes[n.lhs].kind;
@@ -6308,7 +6241,7 @@ class checker {
         };
         for (const auto& [constant, slope] :
              {std::pair{sum.lhs, sum.rhs}, std::pair{sum.rhs, sum.lhs}}) {
-            const syntax::expr_node& c = file_.nodes[skip_groups(constant)];
+            const syntax::expr_node& c = file_.nodes[syntax::inside_brackets(file_, constant)];
             if (c.kind == expr_kind::number && number_times_symbol(slope) &&
                 read_number(text(c.range)).literal.value != 1.0)
                 return true;
@@ -6945,26 +6878,28 @@ class checker {
         return written == "21" || written == "20.9" || written == "20.95" || written == "20.946";
     }
 
+    // The number a sum starts with ("21" of 21 - O2), brackets aside; with `numbers_only`,
+    // only where all its terms are numbers. no_index for anything else.
+    std::uint32_t number_leading_sum(std::uint32_t k, bool numbers_only) const {
+        k = syntax::inside_brackets(file_, k);
+        if (file_.nodes[k].kind != expr_kind::add && file_.nodes[k].kind != expr_kind::subtract)
+            return syntax::no_index;
+        while (file_.nodes[k].kind == expr_kind::add ||
+               file_.nodes[k].kind == expr_kind::subtract) {
+            if (numbers_only && file_.nodes[file_.nodes[k].rhs].kind != expr_kind::number)
+                return syntax::no_index;
+            k = file_.nodes[k].lhs;
+        }
+        return file_.nodes[k].kind == expr_kind::number ? k : syntax::no_index;
+    }
+
     // "C*21/(21 - O2)", "C*(21 - 3)/(21 - O2)", "C*F*20.9/(20.9 - O2)" with O2 in %: the
     // correction to a reference oxygen (Directive 2010/75/EU, Annex VI; US EPA Method 19, from
     // memory) writes above the number that leads the % sum below, alone or less the reference
     // O2, and there it is in % too.
     [[gnu::noinline]] bool carries_number_of_sum(std::uint32_t numerator,
                                                  std::uint32_t denominator) const {
-        // The number a sum starts with; with `numbers_only`, only where all its terms are.
-        const auto leading_number = [&](std::uint32_t k, bool numbers_only) {
-            k = syntax::inside_brackets(file_, k);
-            if (file_.nodes[k].kind != expr_kind::add && file_.nodes[k].kind != expr_kind::subtract)
-                return syntax::no_index;
-            while (file_.nodes[k].kind == expr_kind::add ||
-                   file_.nodes[k].kind == expr_kind::subtract) {
-                if (numbers_only && file_.nodes[file_.nodes[k].rhs].kind != expr_kind::number)
-                    return syntax::no_index;
-                k = file_.nodes[k].lhs;
-            }
-            return file_.nodes[k].kind == expr_kind::number ? k : syntax::no_index;
-        };
-        const std::uint32_t below = leading_number(denominator, false);
+        const std::uint32_t below = number_leading_sum(denominator, false);
         if (below == syntax::no_index)
             return false;
         const std::string_view written = text(file_.nodes[below].range);
@@ -6987,7 +6922,7 @@ class checker {
                 return false;
             if (file_.nodes[at].kind == expr_kind::number)
                 return text(file_.nodes[at].range) == written || folded_reference(at);
-            const std::uint32_t above = leading_number(at, true);
+            const std::uint32_t above = number_leading_sum(at, true);
             return above != syntax::no_index && text(file_.nodes[above].range) == written;
         });
     }
@@ -7658,8 +7593,8 @@ class checker {
             // atmosphere over its depth is the column's gradient, or the mud weight that
             // balances it (Bourgoyne et al., Applied Drilling Engineering, 1986, ch. 4, from
             // memory).
-            const bool column_gradient =
-                result.known && result.dim == pressure_gradient_dim && divides_by_length(index);
+            const bool column_gradient = result.known && result.dim == pressure_gradient_dim &&
+                                         has_factor_of_dimension(index, length_dimension(), -1);
             // P = p_g*Q/600, p_psig*Q_gpm/1714: a pump's hydraulic power is the pressure it
             // adds times the flow, and from a vented tank that is the outlet's gauge reading
             // (common practice).
@@ -7667,7 +7602,7 @@ class checker {
             const bool hydraulic_power = result.known && result.dim == power_dim &&
                                          index == side_hint_node_ && side_hint_ != nullptr &&
                                          side_hint_->known && side_hint_->dim == power_dim &&
-                                         holds_factor_of_dimension(index, volume_flow_dim);
+                                         has_factor_of_dimension(index, volume_flow_dim, 1);
             if (result.known &&
                 (result.dim == length_dimension() || result.dim == force_dimension() ||
                  wall_stress || ring_tension || jet || bearing_area || head_without_g ||

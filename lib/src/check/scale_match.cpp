@@ -340,30 +340,36 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
     }
     l.power_of_ten = significant >= 1 && only_a_one;
     l.power = static_cast<std::int8_t>(std::clamp(first_place + exponent, -100, 100));
-    // Kinetics and thermochemistry tables work in the thermochemical calorie, 4.184 J exactly
-    // (NIST SP 811 (2008), B.8), where a kcal row is the IT one, 4.1868 J: 4.184 typed as a
-    // conversion stands for either calorie.
-    if (significant == 4 && l.high &&
-        std::abs(l.value / power_of_ten_value(l.power) - 4.184) < 1e-12) {
+    // Printed factors that stand for a second definition or rounding besides the one the units
+    // give: the range they cover reaches that one too.
+    struct second_reading {
+        double written;  // as printed; with `any_decade`, its digits in the first decade
+        bool any_decade; // 4.184 kJ or 4184 J alike
+        rational ratio;  // the other value over the written one
+    };
+    static const std::array<second_reading, 3> second_readings{{
+        // Kinetics and thermochemistry tables work in the thermochemical calorie, 4.184 J
+        // exactly (NIST SP 811 (2008), B.8), where a kcal row is the IT one, 4.1868 J.
+        {4.184, true, rational(41868, 41840)},
+        // Motor and gear heat tables print 2545 Btu/h per hp, the 59 °F Btu's figure (NIST SP
+        // 811 (2008), B.8: 1 hp = 745.6999 W, 1 Btu_59°F = 1054.804 J); the IT Btu gives
+        // 2544.43.
+        {2545.0, false, rational(254443, 254500)},
+        // Manning's (1/0.3048)^(2/3) = 2.20795 printed 2.22, from 1.49² (see
+        // looks_like_conversion).
+        {2.22, false, rational(220795, 222000)},
+    }};
+    for (const second_reading& r : second_readings) {
+        const double compared = r.any_decade ? l.value / power_of_ten_value(l.power) : l.value;
+        if (!exact || !l.low || !l.high || std::abs(compared - r.written) > 1e-12 * r.written)
+            continue;
         try {
-            l.high = std::max(*l.high, *exact * rational(41868, 41840));
-        } catch (const arithmetic_overflow&) {
-            l.high.reset();
-        }
-    }
-    // Motor and gear heat tables print 2545 Btu/h per hp, the 59 °F Btu's figure (NIST SP 811
-    // (2008), B.8: 1 hp = 745.6999 W, 1 Btu_59°F = 1054.804 J); the IT Btu gives 2544.43.
-    // And Manning's (1/0.3048)^(2/3) = 2.20795 printed 2.22, from 1.49² (see
-    // looks_like_conversion).
-    const std::optional<rational> printed_low =
-        significant == 4 && l.value == 2545.0 ? std::optional(rational(254443, 100))
-        : significant == 3 && l.value == 2.22 ? std::optional(rational(220795, 100000))
-                                              : std::nullopt;
-    if (printed_low && l.low) {
-        try {
-            l.low = std::min(*l.low, *printed_low);
+            const rational other = *exact * r.ratio;
+            l.low = std::min(*l.low, other);
+            l.high = std::max(*l.high, other);
         } catch (const arithmetic_overflow&) {
             l.low.reset();
+            l.high.reset();
         }
     }
     const bool whole = !has_point && e == std::string_view::npos;
@@ -383,14 +389,14 @@ bool looks_like_conversion(const scale_literal& l, bool allow_hundred) {
         return std::abs(l.power * l.exponent) >= (allow_hundred ? 2 : 3);
     // Manning's US constant (1 m / 0.3048 m)^(1/3) = 1.48592 is printed 1.49 as often as 1.486
     // (common practice); three digits are enough for that one ratio.
+    // Its square printed from 1.49, 2.22 (1.49² = 2.2201; see read_literal's second
+    // readings), in the friction slope n²·V²/(2.22·R^(4/3)) of US manuals (FHWA HEC-22, 3rd
+    // ed., from memory).
     static const double manning_us = std::cbrt(1.0 / 0.3048);
-    if (l.factor_like && std::abs(l.value - manning_us) <= l.value * l.tolerance + 1e-12)
-        return true;
-    // Its square printed from 1.49, 2.22 (1.49² = 2.2201), in the friction slope
-    // n²·V²/(2.22·R^(4/3)) of US manuals (FHWA HEC-22, 3rd ed., from memory).
-    if (l.factor_like && l.value >= 2.2 && l.value <= 2.225 &&
-        (std::abs(l.value - manning_us * manning_us) <= l.value * l.tolerance + 1e-12 ||
-         l.value == 2.22))
+    const auto covers = [&](double v) {
+        return low_end(l).approx <= v * (1.0 + 1e-12) && v <= high_end(l).approx * (1.0 + 1e-12);
+    };
+    if (l.factor_like && (covers(manning_us) || covers(manning_us * manning_us)))
         return true;
     return l.table_digits && is_unit_ratio(l);
 }
