@@ -386,9 +386,9 @@ std::optional<written_unit> evaluate(std::string_view text, std::string_view mea
     std::string notation = unit_table::standard().resolve(t) ? t : to_notation(t);
     // "Ω/1000 ft", "psi/100 ft", "kW/100 scfm": tables print a loss per a round count of a
     // unit, which is read as a measure of its own.
-    const std::string per_length = per_round_count(notation);
+    const std::string per_count = per_round_count(notation);
     // A declaration, not a quantity in braces: there "h" would be Planck's constant.
-    const source_file src("<unit>", as_declaration(notation, per_length + std::string(measures)));
+    const source_file src("<unit>", as_declaration(notation, per_count + std::string(measures)));
     const syntax::parsed_file tree = parse_file(src);
     if (tree.has_syntax_error || !tree.diagnostics.empty() || tree.declarations.size() != 1)
         return std::nullopt;
