@@ -431,24 +431,30 @@ int run(const options& opt) {
 
     if (opt.spawns > 0) {
         const fs::path small = dir / "small" / "pump-check.plumb";
+        const fs::path typo = dir / "small" / "pump-check-typo.plumb";
         fs::create_directories(small.parent_path());
         plumb_bench::write_small_file(small);
+        plumb_bench::write_small_file(typo, plumb_bench::small_file_variant::with_typo);
         // plumb and /bin/true take turns, so that a change in the machine's load while they
         // run weighs on both alike. /bin/true is the floor any program pays here for fork,
-        // exec and the dynamic loader.
+        // exec and the dynamic loader. The file with a typo times the error path, where the
+        // checker throws: the first exception of a process once cost more than the whole check.
         const bool with_floor = access("/bin/true", X_OK) == 0;
         spawn_result s;
+        spawn_result with_error;
         spawn_result floor;
-        for (std::size_t i = 0; i < opt.spawns && s.failures.empty(); ++i) {
-            const spawn_result one = time_cli(opt.cli, small, 1);
-            s.ms.insert(s.ms.end(), one.ms.begin(), one.ms.end());
-            s.exit0 += one.exit0;
-            s.exit1 += one.exit1;
-            s.failures.insert(s.failures.end(), one.failures.begin(), one.failures.end());
-            if (with_floor) {
-                const spawn_result base = time_cli("/bin/true", small, 1);
-                floor.ms.insert(floor.ms.end(), base.ms.begin(), base.ms.end());
-            }
+        const auto take = [](spawn_result& into, const spawn_result& one) {
+            into.ms.insert(into.ms.end(), one.ms.begin(), one.ms.end());
+            into.exit0 += one.exit0;
+            into.exit1 += one.exit1;
+            into.failures.insert(into.failures.end(), one.failures.begin(), one.failures.end());
+        };
+        for (std::size_t i = 0; i < opt.spawns && s.failures.empty() && with_error.failures.empty();
+             ++i) {
+            take(s, time_cli(opt.cli, small, 1));
+            take(with_error, time_cli(opt.cli, typo, 1));
+            if (with_floor)
+                take(floor, time_cli("/bin/true", small, 1));
         }
         if (s.ms.empty()) {
             fmt::print("start-up: no run completed\n");
@@ -462,9 +468,20 @@ int run(const options& opt) {
                            median(floor.ms), percentile(floor.ms, 0.9),
                            median(s.ms) / median(floor.ms));
         }
-        for (const auto& f : s.failures)
-            fmt::print("FAILED:   {}\n", f);
-        failed = failed || !s.failures.empty();
+        if (!with_error.ms.empty()) {
+            fmt::print("          the same file with a typo (an undeclared name; exit 1 in {} of "
+                       "{} runs): median {:.2f} ms",
+                       with_error.exit1, with_error.ms.size(), median(with_error.ms));
+            if (!floor.ms.empty())
+                fmt::print("; plumb / true = {:.2f}x", median(with_error.ms) / median(floor.ms));
+            fmt::print("\n");
+            if (with_error.exit1 != with_error.ms.size())
+                with_error.failures.push_back("the file with a typo did not always exit 1");
+        }
+        for (const auto* r : {&s, &with_error})
+            for (const auto& f : r->failures)
+                fmt::print("FAILED:   {}\n", f);
+        failed = failed || !s.failures.empty() || !with_error.failures.empty();
     }
 
     if (opt.keep)

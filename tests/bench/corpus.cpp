@@ -572,7 +572,7 @@ corpus_summary write_corpus(const std::filesystem::path& dir, std::size_t equati
     return summary;
 }
 
-void write_small_file(const std::filesystem::path& file) {
+void write_small_file(const std::filesystem::path& file, small_file_variant variant) {
     file_writer out(file);
     for (std::string_view line : {
              "# pump sizing, quick check",
@@ -592,11 +592,12 @@ void write_small_file(const std::filesystem::path& file) {
              "h_f = f*(L/D)*V^2/(2*g)",
              "1/sqrt(f) = -1.8*log10(6.9/Re)",
              "h_p = h_f + V^2/(2*g)",
-             "P = ρ*g*Q*h_p/η",
              "V <= V_max",
              "0 < η <= 1",
          })
         out.line(line);
+    // The typo names a head never declared: the checker's error path, which throws and unwinds.
+    out.line(variant == small_file_variant::with_typo ? "P = ρ*g*Q*H_p/η" : "P = ρ*g*Q*h_p/η");
     out.close();
 }
 

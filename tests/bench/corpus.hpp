@@ -35,7 +35,10 @@ inline constexpr std::uint64_t rng_seed = 0x706c756d62'2024ULL;
 corpus_summary write_corpus(const std::filesystem::path& dir, std::size_t equations,
                             std::uint64_t seed = rng_seed);
 
-// A self-contained file of ten consistent formulas, for timing one small check from process start.
-void write_small_file(const std::filesystem::path& file);
+// A self-contained file of ten consistent formulas, for timing one small check from process start;
+// with_typo misspells a name in the last one, so that the check reports an undeclared name.
+enum class small_file_variant { clean, with_typo };
+void write_small_file(const std::filesystem::path& file,
+                      small_file_variant variant = small_file_variant::clean);
 
 } // namespace plumb_bench
