@@ -175,6 +175,8 @@ template <typename Task> void run_tasks(std::size_t count, unsigned workers, Tas
 
 unsigned worker_count(std::size_t tasks, unsigned requested) {
     unsigned workers = requested;
+    if (tasks <= 1)
+        return 1; // without asking the system how many cores it has: a file read and a close
     if (workers == 0)
         workers = std::min(std::max(std::thread::hardware_concurrency(), 1U), most_workers);
     return static_cast<unsigned>(std::max<std::size_t>(1, std::min<std::size_t>(workers, tasks)));

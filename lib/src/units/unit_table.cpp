@@ -4,11 +4,12 @@
 #include "units/exact_factor.hpp"
 
 #include <algorithm>
+#include <atomic>
 #include <cctype>
+#include <cstdint>
 #include <cstdlib>
 #include <functional>
 #include <memory>
-#include <mutex>
 #include <tuple>
 #include <unordered_map>
 
@@ -73,11 +74,13 @@ std::optional<rational> exact_power_product(std::optional<rational> start, ratio
 } // namespace
 
 std::optional<rational> exact_factor(const unit_definition& row) {
-    // Each row is read the first time it is asked for, once, whichever thread asks: a small
-    // check uses a handful of the table's units, and reading them all cost a quarter of the
-    // instructions of starting plumb.
+    // Each row is read the first time it is asked for: a small check uses a handful of the
+    // table's units, and reading them all cost a quarter of the instructions of starting plumb.
+    // Two threads asking at once may both read a row (the reading is pure); the first to finish
+    // keeps its value. Not std::call_once, whose static glibc build makes a system call per row.
+    enum : std::uint8_t { unread, storing, stored };
     struct lazy_factor {
-        std::once_flag read;
+        std::atomic<std::uint8_t> state{unread};
         std::optional<rational> value;
     };
     const auto rows = detail::builtin_units();
@@ -86,8 +89,15 @@ std::optional<rational> exact_factor(const unit_definition& row) {
     if (!rows.empty() && !std::less<>{}(&row, rows.data()) &&
         std::less<>{}(&row, rows.data() + rows.size())) {
         lazy_factor& entry = cache[static_cast<std::size_t>(&row - rows.data())];
-        std::call_once(entry.read, [&] { entry.value = read_exact_factor(row); });
-        return entry.value;
+        if (entry.state.load(std::memory_order_acquire) == stored)
+            return entry.value;
+        std::optional<rational> value = read_exact_factor(row);
+        std::uint8_t expected = unread;
+        if (entry.state.compare_exchange_strong(expected, storing, std::memory_order_acq_rel)) {
+            entry.value = value;
+            entry.state.store(stored, std::memory_order_release);
+        }
+        return value;
     }
     return read_exact_factor(row);
 }
