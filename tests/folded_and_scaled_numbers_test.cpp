@@ -906,3 +906,14 @@ TEST_CASE("25.4 and 86.4 where the units already agree") {
     fails_with(d, {"a = b/25.4", "q = r*86.4"}, plumb::rules::unit_scale);
     passes(d, {"a = c/25.4", "Q = r*86.4"});
 }
+
+// Per mille, ‰ = 0.001, as railway and drainage standards print gradients (common practice):
+// a gradient in ‰ beside one in % is ten times apart; a fall in metres is the gradient's number
+// times the length in km (1 ‰ = 1 m/km), or a thousandth of it times the length in metres.
+TEST_CASE("gradients in per mille beside percent and metres") {
+    const std::string d = "S_pm : ‰\nS_pc : %\nL, dz : m\nL_km : km\n";
+    fails_with(d,
+               {"S_pc = S_pm", "S_pm = S_pc", "dz = S_pm*L", "S_pm = dz/L", "dz = S_pm*L_km*1000"},
+               plumb::rules::unit_scale);
+    passes(d, {"S_pc = S_pm/10", "dz = S_pm*L/1000", "S_pm = 1000*dz/L", "dz = S_pm*L_km"});
+}

@@ -535,6 +535,9 @@ constexpr unit_definition rows[] = {
     // Percent: 0.01 (SI Brochure 9th ed., 5.4.7).
     absolute("%", "percent", none, 0.01, "0.01", prefixes::refused,
              "SI Brochure 9th ed., 5.4.7 (% = 0.01)"),
+    // Per mille: 0.001, common practice (gradients in railway and drainage work, 1 ‰ = 1 m/km).
+    absolute("‰", "per mille", none, 0.001, "0.001", prefixes::refused,
+             "common practice (‰ = 0.001)"),
     // Parts per million and per billion: 10^-6 and 10^-9 (NIST SP 811 (2008), 7.10.3, which
     // discourages them; air and water permits are written in them all the same).
     absolute("ppm", "part per million", none, 1e-6, "0.000001", prefixes::refused,
