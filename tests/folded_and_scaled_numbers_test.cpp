@@ -917,3 +917,12 @@ TEST_CASE("gradients in per mille beside percent and metres") {
                plumb::rules::unit_scale);
     passes(d, {"S_pc = S_pm/10", "dz = S_pm*L/1000", "S_pm = 1000*dz/L", "dz = S_pm*L_km"});
 }
+
+// A limit on a percentage typed as bare numbers, "40 <= OB <= 50" (a lift's counterweight at
+// 40 to 50 % of rated load, common practice): its bounds are percentages, as a bare number in a
+// sum of percentages is. A bound of 1 beside a percentage is a fraction's bound, the slip.
+TEST_CASE("bare bounds of a limit on a percentage") {
+    const std::string d = "OB, η : %\nθ : deg\nx : 1\n";
+    passes(d, {"40 <= OB <= 50", "0 < η <= 100", "OB >= 2", "θ <= 90", "x <= 1"});
+    fails_with(d, {"η <= 1", "0 < η <= 1"}, plumb::rules::unit_scale);
+}

@@ -751,6 +751,10 @@ class checker {
             a = find_agreement(sides);
         const char* what = equation ? "equation" : "limit";
         if (a.odd.empty()) {
+            // "40 <= OB <= 50" with OB in %: the bounds are percentages, as in a sum (but not
+            // "η <= 1", a fraction's bound beside a percentage).
+            if (!equation && sides[0].type.known && sides[0].type.dim.is_dimensionless())
+                adopt_numbers_in_scaled_unit(base);
             double unit = 1.0;
             // Views of known length: from a const char* each formula paid for a strlen.
             const std::string_view sides_what = equation
