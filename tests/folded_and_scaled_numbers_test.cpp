@@ -926,3 +926,30 @@ TEST_CASE("bare bounds of a limit on a percentage") {
     passes(d, {"40 <= OB <= 50", "0 < η <= 100", "OB >= 2", "θ <= 90", "x <= 1"});
     fails_with(d, {"η <= 1", "0 < η <= 1"}, plumb::rules::unit_scale);
 }
+
+// A rule of thumb near a conversion, "1 m/s is about 200 fpm" against 196.85 (0.00508 m/s per
+// fpm, NIST SP 811 (2008), B.8): the note says how far off it is and which factor the units
+// need, so that the advice to scale the whole term is not taken as the fix for a conversion.
+// And the advice multiplies where it can: 3.281 ft/m without the 60 of s/min leaves the term
+// 59.997 times short ("multiply by 59.9971", not "divide by 0.01666748"); mA/ft² read as mA/m²
+// needs 10.7639 (1/0.3048²) and ft² as m² needs 0.09290304.
+TEST_CASE("a rough conversion named against the factor, and advice in the plainer direction") {
+    const std::string d = "u_f : fpm\nu : m/s\na_ft : ft^2\na : m^2\nq : mA/m^2\nq_f : mA/ft^2\n";
+    const auto rough = run(d, "u_f = 200*u");
+    REQUIRE(count_of(rough, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(rough, plumb::rules::unit_scale),
+                            "200 is 1.6 % above 196.85, the factor these units need"));
+    CHECK(problems_in(run(d, "u_f = 197*u")) == 0);
+    const auto short_60 = run(d, "u_f = 3.281*u");
+    REQUIRE(count_of(short_60, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(short_60, plumb::rules::unit_scale),
+                            "multiply '3.281*u' by 59.9971"));
+    const auto area = run(d, "a = a_ft");
+    REQUIRE(count_of(area, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(area, plumb::rules::unit_scale),
+                            "multiply 'a_ft' by 0.09290304"));
+    const auto per_area = run(d, "q = q_f");
+    REQUIRE(count_of(per_area, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(per_area, plumb::rules::unit_scale),
+                            "multiply 'q_f' by 10.7639"));
+}

@@ -4864,15 +4864,33 @@ class checker {
         // coefficient; say so, since it may be the conversion the engineer meant, wrongly.
         if (!clean) {
             std::string coefficients;
+            std::size_t coefficient_count = 0;
+            // The factor the one coefficient would have to be, were it the conversion.
+            double needed = 0.0;
+            double written = 0.0;
             for (const std::size_t side : {r.odd, r.reference})
                 for (const scale_literal& l : parts[side].literals)
                     if (l.value != 1.0 && !looks_like_conversion(l, true) &&
                         file_.nodes[l.node].kind == expr_kind::number &&
                         significant_digits(text(file_.nodes[l.node].range)) >= 2 &&
-                        coefficients.size() < 80)
+                        coefficients.size() < 80) {
                         coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ",
                                                     text(file_.nodes[l.node].range));
-            if (!coefficients.empty())
+                        ++coefficient_count;
+                        written = l.value;
+                        needed = side == r.odd ? 1.0 / ratio : ratio;
+                    }
+            // "u_fpm = 200*u" (m/s): a rule of thumb for 196.85. Taken as a coefficient, the
+            // advice would multiply it by the conversion; say how far it is from the factor.
+            if (const double off = written / needed - 1.0;
+                coefficient_count == 1 && std::isfinite(off) && std::abs(off) <= 0.05)
+                d.notes.push_back(
+                    {fmt::format("{} is {:.2g} % {} {}, the factor these units need; if it was "
+                                 "meant to convert them, write that factor",
+                                 coefficients, std::abs(off) * 100.0,
+                                 off > 0 ? "above" : "below", format_factor(needed)),
+                     {}});
+            else if (!coefficients.empty())
                 d.notes.push_back(
                     {fmt::format("{} counted as a coefficient, not a unit conversion; if it was "
                                  "meant to convert units, it is not the factor these units need",
@@ -4883,10 +4901,16 @@ class checker {
         bool multiply = ratio < 1;
         std::string factor = multiply ? format_factor(exact_inverse, 1.0 / ratio)
                                       : format_factor(exact_ratio, ratio);
+        // Where the advice is to multiply already, it stays so: "multiply by 10.7639", not
+        // "divide by 0.09290304"; "multiply by 59.9971", not "divide by 0.01666748".
         if (const std::size_t inverse = factor.find(" (1/");
             inverse != std::string::npos && factor.ends_with(")")) {
-            factor = factor.substr(inverse + 4, factor.size() - inverse - 5);
-            multiply = !multiply;
+            if (multiply) {
+                factor.erase(inverse);
+            } else {
+                factor = factor.substr(inverse + 4, factor.size() - inverse - 5);
+                multiply = true;
+            }
         } else if (factor.starts_with("1/")) {
             factor.erase(0, 2);
             multiply = !multiply;
