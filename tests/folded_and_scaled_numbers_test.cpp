@@ -953,3 +953,16 @@ TEST_CASE("a rough conversion named against the factor, and advice in the plaine
     CHECK(plumb::test::says(first_under(per_area, plumb::rules::unit_scale),
                             "multiply 'q_f' by 10.7639"));
 }
+
+// A conversion printed to three digits applied to a quantity already in the target unit:
+// 0.0631 L/s per gpm (NIST SP 811 (2008), B.8: 6.309020E-05 m³/s) on a flow in L/s, 14.5 psi
+// per bar on psi. Three digits are too few to call every number a conversion (1.25 is one
+// of some ratio of pressure units by chance), but not for the trade's own conversion of the
+// term's quantity. A coefficient that is no such conversion stays one.
+TEST_CASE("a three-digit conversion of a quantity already converted") {
+    const std::string d = "Q, Q_2 : L/s\nQ_g : gpm\np, p_2 : psi\np_b : bar\nL, L_2 : m\n";
+    fails_with(d, {"Q = Q_2*0.0631", "p = p_2*14.5", "p = 6.89*p_2", "L = 3.28*L_2"},
+               plumb::rules::unit_scale);
+    passes(d, {"Q = Q_g*0.0631", "p = 14.5*p_b", "Q = 0.632*Q_2", "p = 1.25*p_2", "L = 3.29*L_2",
+               "p = 14.6*p_2"});
+}

@@ -27,11 +27,8 @@ EXTRA = {
          "trade writes it", "Yield!C38 sum-mismatch"),
     ],
 }
-MISSED = {
-    "air-dryer": {
-        "Filters!E7": ("a drop already in psi (C7) multiplied by 14.5 again into a psi column: "
-                       "a factor the units do not need; expected unit-scale"),
-    },
-}
+# Filters!E7 (a drop already in psi multiplied by 14.5 again) was missed when this book was
+# written; plumb reports it since a later round.
+MISSED = {}
 RENAMED = {}
 MESSAGES = {}

@@ -185,6 +185,48 @@ bool stands_for_a_conversion(const scale_literal& l, bool allow_hundred) {
     return printed && trade_constant_for(*printed) != nullptr;
 }
 
+// The trades' conversions printed to three digits (NIST SP 811 (2008), B.8 and B.9): too
+// short to look like conversions among all the table's ratios, where three digits match some
+// ratio by chance, but unmistakable as a conversion of the term's own quantity where its units
+// already agree: "Q_ls = Q*0.0631" with Q in L/s converts gallons that are not there.
+bool is_three_digit_conversion_of(double value, const compact_dimension& d) {
+    static const compact_dimension flow = compact_dimension::whole({0, 3, -1, 0, 0, 0, 0});
+    static const compact_dimension volume = compact_dimension::whole({0, 3, 0, 0, 0, 0, 0});
+    static const compact_dimension power = compact_dimension::whole({1, 2, -3, 0, 0, 0, 0});
+    static const compact_dimension mass = compact_dimension::whole({1, 0, 0, 0, 0, 0, 0});
+    static const struct {
+        double ratio;
+        const compact_dimension& dim;
+    } conversions[] = {
+        {0.0630901964, flow},         // L/s per gpm
+        {0.2271247, flow},            // m³/h per gpm
+        {0.0689475729, pressure},     // bar per psi
+        {6.89475729, pressure},       // kPa per psi
+        {0.3048, length_dim},         // m per ft
+        {2.54, length_dim},           // cm per in
+        {1.609344, length_dim},       // km per mi
+        {0.09290304, area_dim},       // m² per ft²
+        {3.785411784, volume},        // L per US gal
+        {0.028316846592, volume},     // m³ per ft³
+        {0.745699872, power},         // kW per hp
+        {3.516852842, power},         // kW per ton of refrigeration
+        {0.29307107, power},          // W per Btu/h
+        {0.45359237, mass},           // kg per lb
+        {4.4482216152605, force_dim}, // N per lbf
+        {1.0 / 1.8, temperature},     // K per °F of difference
+    };
+    if (!(value > 0))
+        return false;
+    const auto three_digits = [](double v) {
+        const double step = std::pow(10.0, std::floor(std::log10(v)) - 2.0);
+        return std::round(v / step) * step;
+    };
+    const auto printed = [&](double v) { return std::abs(three_digits(v) / value - 1.0) < 1e-9; };
+    return std::any_of(std::begin(conversions), std::end(conversions), [&](const auto& c) {
+        return c.dim == d && (printed(c.ratio) || printed(1.0 / c.ratio));
+    });
+}
+
 // The operands of one meeting point (terms of a sum, arguments, sides of a formula). The type
 // is held on the checker's type stack, shared among operands of one type: a long sum keeps
 // one of these per term, and its size is most of the memory such a line takes.
@@ -4560,6 +4602,16 @@ class checker {
     // its first step, without its search) and no number that looks like a conversion (which
     // report_unneeded_factor() would name). True, with `unit` as that route sets it, exactly
     // where that route would return true without a finding; false leaves it to that route.
+    // A number that stands for a conversion, or a trade's conversion to three digits of the
+    // term's own quantity (is_three_digit_conversion_of).
+    bool converts_in_term(const scale_literal& l, const typed_term& term,
+                          bool allow_hundred) const {
+        return stands_for_a_conversion(l, allow_hundred) ||
+               (std::abs(l.exponent) == 1.0 && file_.nodes[l.node].kind == expr_kind::number &&
+                significant_digits(text(file_.nodes[l.node].range)) == 3 &&
+                is_three_digit_conversion_of(l.value, term.dim));
+    }
+
     bool units_agree_with_plain_numbers(std::span<const operand> ops, double& unit) const {
         static const rational one(1);
         const typed_term* first = nullptr;
@@ -4590,7 +4642,7 @@ class checker {
                 continue;
             for (std::uint32_t l = 0; l < op.type.literal_count; ++l) {
                 const scale_literal& number = literals_[op.type.literal_begin + l];
-                if (stands_for_a_conversion(number, !dimensionless) ||
+                if (converts_in_term(number, op.type, !dimensionless) ||
                     spare_time_ratio(number, op.type, op.node) ||
                     spare_speed_ratio(number, op.node))
                     return false;
@@ -4887,8 +4939,8 @@ class checker {
                 d.notes.push_back(
                     {fmt::format("{} is {:.2g} % {} {}, the factor these units need; if it was "
                                  "meant to convert them, write that factor",
-                                 coefficients, std::abs(off) * 100.0,
-                                 off > 0 ? "above" : "below", format_factor(needed)),
+                                 coefficients, std::abs(off) * 100.0, off > 0 ? "above" : "below",
+                                 format_factor(needed)),
                      {}});
             else if (!coefficients.empty())
                 d.notes.push_back(
@@ -5541,7 +5593,7 @@ class checker {
             double net = 1.0;
             const scale_literal* first = nullptr;
             for (const auto& l : parts[i].literals)
-                if (stands_for_a_conversion(l, !dimensionless || in_percent) ||
+                if (converts_in_term(l, ops[index[i]].type, !dimensionless || in_percent) ||
                     spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node) ||
                     spare_speed_ratio(l, ops[index[i]].node)) {
                     net *= std::pow(l.value, l.exponent);
