@@ -798,3 +798,22 @@ TEST_CASE("the clock's 3600 is no property of water") {
     CHECK(plumb::test::count_of(r, plumb::rules::trade_constant) == 0);
     CHECK(plumb::test::problems_in(plumb::test::check_after(decl, "TR = q*ΔT_F/24")) == 0);
 }
+
+// A solution's dosing pump: kg/d of product over the mass fraction into L/h needs the 24 h/d
+// and the solution's density (sodium bisulphite 38 % is about 1.34 kg/L, from memory). The 24
+// alone is no density of water in disguise; the density missing is named, as a g is.
+TEST_CASE("a 24 is never read as water's density, and a missing density is named") {
+    const std::string d = "W : kg/d\nw : 1\nV : L/h\nρ : kg/L\nC : kg/m^3\nSG : 1\nV_c : m^3\n"
+                          "m : kg\n";
+    const auto missing = run(d + "V = W/(24*w)\n");
+    REQUIRE(count_of(missing, plumb::rules::side_mismatch) == 1);
+    CHECK(count_of(missing, plumb::rules::trade_constant) == 0);
+    std::string said;
+    for (const auto& diag : missing.diagnostics)
+        for (const auto& note : diag.notes)
+            said += note.message;
+    CHECK(said.find("exactly a density") != std::string::npos);
+    CHECK(said.find("(V = m/ρ)") != std::string::npos);
+    CHECK(problems_in(run(d + "V = W/(24*w*ρ)\n")) == 0);
+    CHECK(message_of(run(d + "V_c = m/SG\n"), plumb::rules::side_mismatch).size() > 0);
+}

@@ -867,7 +867,7 @@ class checker {
         note_bare_number_side(d, sides);
         if (!note_gravity_in_other_units(d, sides, a) &&
             !note_constant_for_other_units(d, sides, a))
-            note_acceleration_apart(d, sides, a);
+            note_acceleration_or_density_apart(d, sides, a);
         note_bare_quantity_apart(d, sides, a);
         if ((symbols_.unit_marks() & mass_fractions) != 0) [[unlikely]]
             note_fraction_beside_concentration(d, sides);
@@ -2023,23 +2023,40 @@ class checker {
     // "p = ρ*h", "H = p/ρ": the odd term differs from the others by exactly an acceleration,
     // the most common slip of all, a missing (or doubled) g. Said outright, since the two
     // dimensions alone ("momentum", "areal density") do not point at it.
-    void note_acceleration_apart(diagnostic& d, std::span<const operand> ops,
-                                 const agreement& a) const {
+    // "is a g missing?", "is a density missing?": the two factors engineers leave out most, and
+    // the only ones a side can differ by exactly and be named for.
+    void note_acceleration_or_density_apart(diagnostic& d, std::span<const operand> ops,
+                                            const agreement& a) const {
         const std::optional<compact_dimension> apart = odd_one_apart(ops, a);
         if (!apart)
             return;
+        static const compact_dimension density = compact_dimension::whole({1, -3, 0, 0, 0, 0, 0});
         try {
-            const bool lacks = *apart == acceleration_dimension();
-            const bool extra = !lacks && *apart == acceleration_dimension().pow(-1);
-            if (!lacks && !extra)
-                return;
-            d.notes.push_back(
-                {fmt::format("{} differs from the rest by exactly an acceleration: {}",
-                             quote(ops[a.odd.front()].node),
-                             lacks ? "times g it would match; is a g missing from it (ρ*g*h)?"
-                                   : "divided by g it would match; is a g missing from its "
-                                     "denominator (p/(ρ*g)), or is one there too many?"),
-                 {}});
+            const std::string odd = quote(ops[a.odd.front()].node);
+            if (*apart == acceleration_dimension() || *apart == acceleration_dimension().pow(-1))
+                d.notes.push_back(
+                    {fmt::format("{} differs from the rest by exactly an acceleration: {}", odd,
+                                 *apart == acceleration_dimension()
+                                     ? "times g it would match; is a g missing from it (ρ*g*h)?"
+                                     : "divided by g it would match; is a g missing from its "
+                                       "denominator (p/(ρ*g)), or is one there too many?"),
+                     {}});
+            // Not a fraction against a concentration (ppm against mg/L or mg/Nm³), which has
+            // notes of its own.
+            else if ((*apart == density || *apart == density.pow(-1)) &&
+                     std::none_of(ops.begin(), ops.end(), [](const operand& op) {
+                         return op.type.known && op.type.dim.is_dimensionless();
+                     }))
+                d.notes.push_back(
+                    {fmt::format("{} differs from the rest by exactly a density (a mass "
+                                 "against a volume): {} From a specific gravity, the density is "
+                                 "SG times water's",
+                                 odd,
+                                 *apart == density
+                                     ? "times a density it would match; is one missing (m = ρ*V)?"
+                                     : "divided by a density it would match; is one missing "
+                                       "from its denominator (V = m/ρ)?"),
+                     {}});
         } catch (const std::exception&) {
         }
     }
@@ -3187,7 +3204,7 @@ class checker {
             note_scale_zero_beside_difference(d, terms, a);
             if (!note_gravity_in_other_units(d, terms, a) &&
                 !note_constant_for_other_units(d, terms, a))
-                note_acceleration_apart(d, terms, a);
+                note_acceleration_or_density_apart(d, terms, a);
             cut_literals_to(literal_base);
             result = unknown_type();
             return result; // every return is of `result`, built in the caller's return object

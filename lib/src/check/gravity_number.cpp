@@ -26,6 +26,12 @@ constexpr std::size_t twice_gravity_row = 1;
 constexpr std::size_t round_water_row = 3; // the ground engineer's 10 kN/m³
 constexpr std::size_t molar_volume_row = 7;
 
+const dimension& density_dimension() {
+    static const dimension density = dimension::base(base_dimension::mass) /
+                                     dimension::base(base_dimension::length).pow(rational(3));
+    return density;
+}
+
 const std::array<carried_quantity, 17>& quantities() {
     static const std::array<carried_quantity, 17> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
@@ -360,6 +366,10 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
         const double half_unit = half_unit_in_last_digit(texts[at]);
         for (const carried_quantity& q : quantities()) {
             if (q.only_in != carried_quantity::term_kind::any && q.only_in != term)
+                continue;
+            // But a 24 is no density: W/(24*w) from kg/d into L/h lacks the solution's density
+            // (1 kg/L only for water), which a 24 read as one would hide.
+            if (number.value == 24.0 && q.dim == density_dimension())
                 continue;
             for (const bool reciprocal : {false, true}) {
                 if (!is_power_of(lacking, q.dim, reciprocal ? -x : x))
