@@ -19,6 +19,7 @@ using plumb::test::problems_in;
 using plumb::test::says;
 constexpr auto run = plumb::test::check_after;
 constexpr auto fails_with = plumb::test::each_fails_with;
+constexpr auto passes = plumb::test::each_passes;
 
 const std::string readings = "p_k, p_abs : kPa\np_kg : kPag\np_pa : Pa\np_b : bar\n"
                              "T_K, T_2 : K\nT_R : °R\nt_c : °C\nt_f : °F\nρ : kg/m^3\n"
@@ -116,4 +117,17 @@ TEST_CASE("the atmosphere typed in the other side's unit: the reading is convert
     REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
     CHECK(says(first_under(r, plumb::rules::offset_scale), "(14.5038*p_whb + 14.7)"));
     CHECK(problems_in(run(d, "p_wh = 14.5*p_whb + 14.7")) == 0);
+}
+
+// Reverse osmosis's net driving pressure, NDP = p_f - Δp_fc/2 - p_p - (π_fc - π_p) (common
+// practice; membrane makers' design guides, from memory): a difference, so an absolute feed
+// pressure less a gauge permeate pressure overstates it by one atmosphere. "net" and
+// "differential" in a description name a difference as "difference" does.
+TEST_CASE("a net driving pressure is a difference, not a reading") {
+    const std::string d = "p_fa : bar \"feed pressure, absolute\"\np_f, p_p : barg\n"
+                          "Δp_fc, π_fc, π_p : bar\nNDP : bar \"net driving pressure\"\n"
+                          "DP : bar \"differential pressure across the filter\"\n";
+    fails_with(d, {"NDP = p_fa - Δp_fc/2 - p_p - (π_fc - π_p)", "DP = p_fa - p_p"},
+               plumb::rules::offset_scale);
+    passes(d, {"NDP = p_f - Δp_fc/2 - p_p - (π_fc - π_p)", "DP = p_f - p_p"});
 }

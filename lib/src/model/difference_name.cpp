@@ -17,15 +17,16 @@ bool names_a_difference(std::string_view name, std::string_view description) {
     const auto is_letter = [](char c) {
         return (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || (c & 0x80) != 0;
     };
-    // "Range (hot - cold water)": a capital is the same word.
+    // "Range (hot - cold water)": a capital is the same word. "net driving pressure" (reverse
+    // osmosis, feed less permeate less osmotic), "differential pressure": differences too.
     std::string lower(description);
     for (char& c : lower)
         if (c >= 'A' && c <= 'Z')
             c = static_cast<char>(c - 'A' + 'a');
     description = lower;
     for (const std::string_view word :
-         {"difference", "rise", "drop", "loss", "change", "increase", "decrease", "approach",
-          "range", "gradient", "swing", "hydrostatic"})
+         {"difference", "differential", "rise", "drop", "loss", "change", "increase", "decrease",
+          "approach", "range", "gradient", "swing", "hydrostatic", "net", "driving"})
         for (std::size_t at = description.find(word); at != std::string_view::npos;
              at = description.find(word, at + 1)) {
             std::size_t end = at + word.size();
