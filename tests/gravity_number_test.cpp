@@ -16,6 +16,8 @@ namespace {
 
 using plumb::test::count_of;
 using plumb::test::problems_in;
+constexpr auto fails_with = plumb::test::each_fails_with;
+constexpr auto passes = plumb::test::each_passes;
 
 plumb::check_report run(const std::string& text) {
     return plumb::check_text("g.plumb", text);
@@ -816,4 +818,18 @@ TEST_CASE("a 24 is never read as water's density, and a missing density is named
     CHECK(said.find("(V = m/ρ)") != std::string::npos);
     CHECK(problems_in(run(d + "V = W/(24*w*ρ)\n")) == 0);
     CHECK(message_of(run(d + "V_c = m/SG\n"), plumb::rules::side_mismatch).size() > 0);
+}
+
+// A drum's, a wheel's or a workpiece's speed from the speed along its rim: v = π·D·n, or
+// n = 1000·v_c/(π·D) in rpm from m/min and mm (Machinery's Handbook, 30th ed., cutting speed;
+// from memory). Without the π the units still agree, as a revolution counts one cycle. Not
+// where the length is a screw's or a chain's pitch or a stroke (v = p·n), nor where π is
+// folded into a number (0.262 = π/12 for sfm from inches).
+TEST_CASE("a speed along a rim and a speed in revolutions meet through π") {
+    const std::string d = "n : rpm\nv : m/min\nD : m \"drum diameter\"\nr_w : m \"wheel radius\"\n"
+                          "p : m \"screw pitch\"\nv_c : m/min\nD_w : mm\nV_s : ft/min\nD_in : in\n";
+    fails_with(d, {"n = v/D", "v = D*n", "v = r_w*n", "n = 1000*v_c/D_w"},
+               plumb::rules::unit_scale);
+    passes(d, {"n = v/(pi*D)", "v = pi*D*n", "v = 2*pi*r_w*n", "v = p*n", "n = 1000*v_c/(pi*D_w)",
+               "V_s = 0.262*D_in*n"});
 }

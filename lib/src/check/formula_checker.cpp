@@ -1019,7 +1019,8 @@ class checker {
             return;
         const std::uint8_t marks = symbols_.unit_marks();
         if ((marks & counts_revolutions) != 0 &&
-            (is_rotating_power_or_torque(sides[0].type.dim) || sides[0].type.dim == frequency_dim))
+            (is_rotating_power_or_torque(sides[0].type.dim) || sides[0].type.dim == frequency_dim ||
+             sides[0].type.dim == velocity_dim))
             report_revolution_without_two_pi(f, sides[0].type.dim);
         else if ((marks & at_reference_conditions) != 0 &&
                  is_gas_volume_or_flow(sides[0].type.dim)) {
@@ -1827,6 +1828,13 @@ class checker {
         int energies = 0; // in an energy unit (J, kWh), which no torque is written in
         int angular_speeds = 0;
         int inertias = 0;
+        int rim_speeds = 0; // speeds along a path (m/s, fpm)
+        const symbol_entry* rim = nullptr;
+        std::string_view rim_name;
+        int lengths = 0;
+        std::string_view length_name;
+        const symbol_entry* length = nullptr;
+        int other_numbers = 0; // not powers of ten or 60: π/12, a screw's 2 strokes
         // Found: a 2π written in the formula, or a term this rule cannot read.
         const bool not_for_this_rule =
             syntax::search_formula(file_, f, [&](std::uint32_t, const syntax::expr_node& n) {
@@ -1842,6 +1850,9 @@ class checker {
                           1.0 / std::numbers::pi, std::numbers::pi / 30.0, 30.0 / std::numbers::pi})
                         if (std::abs(v / c - 1.0) < 0.003)
                             return search_step::found;
+                    if (!near_power_of_ten(v, 1e-12) && !near_power_of_ten(v / 60.0, 1e-12) &&
+                        v != 60.0)
+                        ++other_numbers;
                     return search_step::skip;
                 }
                 case expr_kind::symbol: {
@@ -1880,6 +1891,14 @@ class checker {
                         }
                     } else if (*e->compact_dim == power_dim) {
                         ++powers;
+                    } else if (*e->compact_dim == velocity_dim) {
+                        rim = e;
+                        rim_name = name;
+                        ++rim_speeds;
+                    } else if (*e->compact_dim == length_dim) {
+                        length = e;
+                        length_name = name;
+                        ++lengths;
                     }
                     return search_step::skip;
                 }
@@ -1904,6 +1923,12 @@ class checker {
                                               angular_speeds >= 1);
             return;
         }
+        if (speeds == 1 && rim_speeds == 1 && lengths == 1 && torques == 0 && powers == 0 &&
+            energies == 0 && angular_speeds == 0 && inertias == 0 && other_numbers == 0 &&
+            speed != nullptr && rim != nullptr && length != nullptr) {
+            report_rim_speed_without_pi(f, *speed, speed_name, rim_name, *length, length_name);
+            return;
+        }
         if (torques != 1 || speeds != 1 || powers != 1 || energies != 0 || torque == nullptr ||
             speed == nullptr)
             return;
@@ -1920,6 +1945,38 @@ class checker {
                            "(M = 60000*P/(2*pi*n) in N·m from kW and rpm is M = 9549*P/n), or "
                            "declare the speed in rad/s",
                            {}});
+    }
+
+    // "n_d = v/D" in rpm from a rope speed and a drum's diameter: a point on the rim travels
+    // π·D per revolution, v = π·D·n (2π·r·n with a radius), which the units cannot say. Only
+    // for a length named as a diameter or a radius: a screw's pitch, a chain's or a stroke
+    // travel without π (v = p·n).
+    void report_rim_speed_without_pi(const syntax::formula& f, const symbol_entry& speed,
+                                     std::string_view speed_name, std::string_view rim_name,
+                                     const symbol_entry& length, std::string_view length_name) {
+        const auto described = [&](std::string_view word) {
+            return length.description.find(word) != std::string_view::npos;
+        };
+        const bool radius =
+            length_name.starts_with("r") || length_name.starts_with("R") || described("radius");
+        const bool diameter =
+            length_name.starts_with("D") || length_name.starts_with("d") || described("diameter");
+        if (radius == diameter)
+            return;
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("'{}' is a speed in revolutions ({}) and '{}' a speed along the rim of "
+                        "'{}': a point on the rim travels {} per revolution, and this formula "
+                        "has no π, so it is off by {}",
+                        speed_name, speed.unit_text, rim_name, length_name, radius ? "2π·r" : "π·D",
+                        radius ? "6.28319" : "3.14159"),
+            file_.nodes[file_.sides[f.first_side].root].range);
+        d.level = severity::warning;
+        d.notes.push_back(
+            {fmt::format("write {} = {}*{}*{} (a speed in revolutions counts cycles), or declare "
+                         "the speed in rad/s",
+                         rim_name, radius ? "2*pi" : "pi", length_name, speed_name),
+             {}});
     }
 
     void report_revolutions_beside_radians(const syntax::formula& f, const symbol_entry& speed,
