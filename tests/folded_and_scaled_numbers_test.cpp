@@ -966,3 +966,22 @@ TEST_CASE("a three-digit conversion of a quantity already converted") {
     passes(d, {"Q = Q_g*0.0631", "p = 14.5*p_b", "Q = 0.632*Q_2", "p = 1.25*p_2", "L = 3.29*L_2",
                "p = 14.6*p_2"});
 }
+
+// Which term the advice converts, where the rest of the formula decides it: a jet fan's thrust
+// ρ·A·(u_v - u_t)² in N with one speed in km/h (the squared sum must be in m/s); a batch's wet
+// mass FA·(1 + MC - abs) with the moistures in % (the sum must be a fraction); a rope's
+// D/d >= 18 with the drum in m and the rope in mm (18 is the code's limit, common practice).
+TEST_CASE("the term to convert, named by the other side through a power, a product or a limit") {
+    const std::string d = "u_v : km/h\nu_t : m/s\nF : N\nA : m^2\nρ_a : kg/m^3\nFA, M : kg\n"
+                          "MC, ab : %\nD : m\nd_r : mm\n";
+    const auto fan = run(d, "F = ρ_a*A*(u_v - u_t)^2");
+    REQUIRE(count_of(fan, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(fan, plumb::rules::unit_scale), "divide 'u_v' by 3.6"));
+    const auto batch = run(d, "M = FA*(1 + MC - ab)");
+    REQUIRE(count_of(batch, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(batch, plumb::rules::unit_scale), "divide 'MC' by 100"));
+    const auto rope = run(d, "D/d_r >= 18");
+    REQUIRE(count_of(rope, plumb::rules::unit_scale) == 1);
+    CHECK(
+        plumb::test::says(first_under(rope, plumb::rules::unit_scale), "multiply 'D/d_r' by 1000"));
+}

@@ -735,11 +735,19 @@ class checker {
             return std::nullopt;
         bool found = false;
         double scale = other.scale;
+        double sum_power = 1.0; // "ρ*A*(u_v - u_t)^2": the sum squared
         const bool other_factor = for_each_factor(root, [&](std::uint32_t at, int sign) {
             const syntax::expr_node& n = file_.nodes[at];
             if (at == sum && sign > 0) {
                 found = true;
                 return false;
+            }
+            if (n.kind == expr_kind::power && sign > 0 &&
+                syntax::inside_brackets(file_, n.lhs) == sum &&
+                file_.nodes[n.rhs].kind == expr_kind::number) {
+                sum_power = written_number(file_.nodes[n.rhs].range);
+                found = sum_power > 0 && std::isfinite(sum_power);
+                return !found;
             }
             double factor = 0.0;
             if (n.kind == expr_kind::symbol) {
@@ -758,7 +766,7 @@ class checker {
         });
         if (other_factor || !found || !std::isfinite(scale) || !(scale > 0))
             return std::nullopt;
-        return scale;
+        return sum_power == 1.0 ? scale : std::pow(scale, 1.0 / sum_power);
     }
 
     void check_formula(const syntax::formula& f) {
@@ -4868,11 +4876,16 @@ class checker {
              (dimensionless && cancels(r.odd) && !cancels(r.reference) &&
               !holds_percentage(ops[index[r.reference]].node))))
             std::swap(r.odd, r.reference);
+        // "D_drum/d_r >= 18" with the drum in m and the rope in mm: the bare number is the
+        // code's limit, and the ratio beside it is what to convert.
+        if (what.what == "sides of this limit" && parts.size() == 2 &&
+            ops[index[r.odd]].type.numeric && !ops[index[r.reference]].type.numeric)
+            std::swap(r.odd, r.reference);
         // A sum among a side's factors, "(b + z*y)*y" = A in m²: asked only here, once the
         // terms are known to disagree, of an equation of two sides.
         const typed_term* hint = sum_side_hint_;
         typed_term factor_hint;
-        if (what.what.starts_with("terms") && parts.size() == 2 && hint == nullptr &&
+        if (what.what.starts_with("terms") && parts.size() >= 2 && hint == nullptr &&
             sum_checked_ != syntax::no_index && side_hint_ != nullptr &&
             side_hint_node_ != syntax::no_index && current_->side_count == 2) [[unlikely]]
             if (const std::optional<double> scale =
@@ -4882,7 +4895,7 @@ class checker {
             }
         // "w = q*s + g_sw" with w and g_sw in kN/m and q in Pa: the term in the other side's
         // unit is right, whichever came first.
-        if (what.what.starts_with("terms") && parts.size() == 2 && hint != nullptr && hint->known &&
+        if (what.what.starts_with("terms") && parts.size() >= 2 && hint != nullptr && hint->known &&
             hint->literal_count == 0 && std::isfinite(hint->scale) && hint->scale > 0)
             [[unlikely]] {
             const auto in_side_unit = [&](std::size_t i) {
