@@ -833,3 +833,16 @@ TEST_CASE("a speed along a rim and a speed in revolutions meet through π") {
     passes(d, {"n = v/(pi*D)", "v = pi*D*n", "v = 2*pi*r_w*n", "v = p*n", "n = 1000*v_c/(pi*D_w)",
                "V_s = 0.262*D_in*n"});
 }
+
+// Water's specific heat typed bare on a mass flow, Φ = m·4.19·ΔT/3600 in kW from kg/h (4.180
+// to 4.220 kJ/(kg·K) between 0 and 30 °C; IAPWS-95 values as tabulated in the CRC Handbook,
+// from memory): a note, as the 4.19 on a volume flow is. Left out, or without the 3600, the
+// sides still disagree.
+TEST_CASE("water's specific heat typed as a number on a mass flow") {
+    const std::string d = "m : kg/h\nm_s : kg/s\nΦ : kW\nT_1, T_2 : degC\n";
+    passes_with_one_note(d, {"Φ = m*4.19*(T_1 - T_2)/3600", "Φ = m_s*4.186*(T_1 - T_2)"},
+                         plumb::rules::trade_constant);
+    CHECK(count_of(run(d + "Φ = m*4.19*(T_1 - T_2)\n"), plumb::rules::side_mismatch) == 1);
+    CHECK(count_of(run(d + "Φ = m*(T_1 - T_2)/3600\n"), plumb::rules::side_mismatch) == 1);
+    CHECK(count_of(run(d + "Φ = m*2.1*(T_1 - T_2)/3600\n"), plumb::rules::side_mismatch) == 1);
+}

@@ -32,8 +32,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 17>& quantities() {
-    static const std::array<carried_quantity, 17> table = [] {
+const std::array<carried_quantity, 18>& quantities() {
+    static const std::array<carried_quantity, 18> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -68,7 +68,7 @@ const std::array<carried_quantity, 17>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 17>{{
+        return std::array<carried_quantity, 18>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -204,6 +204,14 @@ const std::array<carried_quantity, 17>& quantities() {
              " (365 to 366 days)", "declare the hours with their unit (t_a : h = 8760) to say so",
              "write the hours in a cell marked h to say so", time, 365.0 * 86400.0,
              366.0 * 86400.0},
+            // Water's c_p, 4219.9 to 4180.1 J/(kg·K) from 0 to 30 °C (as above): the 4.19 and
+            // 4.186 of a heat balance on a mass flow, m·4.19·ΔT/3600 in kW from kg/h.
+            {rules::trade_constant, "the specific heat of water", "c_p,w", "1/c_p,w",
+             " (water between 0 and 30 \u00B0C: 4.180 to 4.220 kJ/(kg\u00B7K))",
+             "declare the specific heat with its unit (c_p : kJ/(kg*K) = 4.19) to say so; for a "
+             "glycol mix or another liquid it is less",
+             "write the specific heat in a cell that holds its unit to say so", specific_heat,
+             4180.1, 4219.9},
         }};
     }();
     return table;

@@ -1015,6 +1015,27 @@ class workbook_checker {
                 computed.offset != nullptr ? computed.offset : written.unit.offset;
             const bool temperature =
                 on_scale->exponents[static_cast<std::size_t>(base_dimension::temperature)] != 0;
+            // "=4.19*C19" with C19 in °C under kJ/kg: a reading times a property, reckoned from
+            // the scale's zero, in a unit that is neither a temperature nor a pressure.
+            if (computed.offset != nullptr && written.unit.offset == nullptr &&
+                !(computed.dim == on_scale->dim())) {
+                diagnostic& d = report(
+                    severity::error, rules::offset_scale,
+                    fmt::format("this formula gives a value reckoned from the zero of the {} "
+                                "scale, but the unit written for its cell, {}, has no such zero: "
+                                "the value depends on where that zero is",
+                                computed.offset->symbol, where_unit),
+                    formula.range);
+                d.notes.push_back({fmt::format("a {} reading times a quantity counts from 0 {}: "
+                                               "write a difference of readings (t - t_ref) for "
+                                               "a change; an enthalpy from a datum (water's "
+                                               "from 0 °C in steam tables) is a convention to "
+                                               "accept with a reviewed note",
+                                               computed.offset->symbol, computed.offset->symbol),
+                                   {}});
+                add_input_notes(d, f);
+                return;
+            }
             diagnostic& d = report(
                 severity::error, rules::offset_scale,
                 computed.offset != nullptr && written.unit.offset != nullptr
