@@ -985,3 +985,11 @@ TEST_CASE("the term to convert, named by the other side through a power, a produ
     CHECK(
         plumb::test::says(first_under(rope, plumb::rules::unit_scale), "multiply 'D/d_r' by 1000"));
 }
+
+// Money as a pure number ($, €, £, ¥; common practice in cost sheets): a price per MWh against
+// one per kWh is still 1000 apart, so an energy cost in $/t from kWh/kg keeps its check.
+TEST_CASE("a price per MWh beside one per kWh, with money counted as a pure number") {
+    const std::string d = "E : kWh/kg\nc : $/MWh\nc_k : €/kWh\nC_t : $/t\nP : kW\nC_a : £/a\n";
+    fails_with(d, {"C_t = E*c/1000", "C_t = E*c_k"}, plumb::rules::unit_scale);
+    passes(d, {"C_t = E*c", "C_t = E*c_k*1000", "C_a = P*8760*c_k"});
+}

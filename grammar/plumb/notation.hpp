@@ -212,14 +212,17 @@ struct gas_volume_symbol : seq<one<'N', 'S'>, one<'m'>, utf8::one<0xB3>, not_at<
 struct unit_percent : one<'%'> {};
 // "‰", per mille: railway and drainage gradients (1 ‰ = 1 m/km), salinity.
 struct unit_per_mille : utf8::one<0x2030> {};
+// "$", "€", "£", "¥": money, counted as a pure number (a price per kWh against one per MWh is
+// then still a factor of 1000 apart).
+struct unit_currency : utf8::one<'$', 0x20AC, 0xA3, 0xA5> {};
 struct unit_one : seq<one<'1'>, not_at<digit>> {};
 struct unit_group_close : one<')'> {};
 struct unit_group : if_must<one<'('>, star<space>, unit_expression, star<space>, unit_group_close> {
 };
 // "Δ°C": a difference on an offset scale, an ordinary quantity (1 Δ°C = 1 K).
 struct unit_difference : seq<utf8::one<0x394>, unit_symbol> {};
-struct unit_primary : sor<unit_group, unit_one, unit_percent, unit_per_mille, unit_difference,
-                          gas_volume_symbol, unit_symbol> {};
+struct unit_primary : sor<unit_group, unit_one, unit_percent, unit_per_mille, unit_currency,
+                          unit_difference, gas_volume_symbol, unit_symbol> {};
 struct unit_exponent : literal_exponent {};
 // Exponents as documents print them: m², s⁻¹, m³/h.
 struct superscript_sign : utf8::one<0x207B, 0x207A> {};

@@ -780,6 +780,11 @@ template <> struct action<nt::unit_per_mille> {
         s.units.push_back({{}, 0.001, nullptr, true, false, rational(1, 1000)});
     }
 };
+template <> struct action<nt::unit_currency> {
+    template <typename In> static void apply(const In& /*in*/, parse_state& s) {
+        s.units.push_back({{}, 1.0, nullptr, true, false, rational(1)});
+    }
+};
 template <> struct action<nt::unit_exponent> {
     template <typename In> static void apply(const In& in, parse_state& s) { read_exponent(in, s); }
 };
