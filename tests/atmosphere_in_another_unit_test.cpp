@@ -131,3 +131,17 @@ TEST_CASE("a net driving pressure is a difference, not a reading") {
                plumb::rules::offset_scale);
     passes(d, {"NDP = p_f - Δp_fc/2 - p_p - (π_fc - π_p)", "DP = p_f - p_p"});
 }
+
+// t_F = 1.8·t_C + 32 and t_C = (t_F - 32)/1.8 (NIST SP 811 (2008), 4.2.1.1 and B.9): each
+// applied to a reading already on the scale it converts to is the conversion run backwards,
+// and the finding says which form the line needs.
+TEST_CASE("a Fahrenheit conversion run the wrong way names the right form") {
+    const std::string d = "T_3 : degC\nT_F : degF\n";
+    const auto backwards = run(d, "T_F = (T_3 - 32)/1.8");
+    REQUIRE(count_of(backwards, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(backwards, plumb::rules::offset_scale), "T_F = 1.8*T_3 + 32"));
+    const auto other_way = run(d, "T_3 = 1.8*T_F + 32");
+    REQUIRE(count_of(other_way, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(other_way, plumb::rules::offset_scale), "T_3 = (T_F - 32)/1.8"));
+    passes(d, {"T_F = 1.8*T_3 + 32", "T_3 = (T_F - 32)/1.8"});
+}

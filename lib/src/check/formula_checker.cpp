@@ -5928,6 +5928,64 @@ class checker {
 
     // "T_K = T_C": readings on scales with different zeros set equal or compared.
     // `relation`: "equation", "limit" or "lookup", as the finding names what it is in.
+    // "T_F = (T_C - 32)/1.8": the °F-to-°C conversion applied to a °C reading to give one in °F,
+    // the conversion run the wrong way (and "T_C = 1.8*T_F + 32" the other way round). Read
+    // where one side is a reading and the other holds one reading and the number 32.
+    bool explain_reversed_fahrenheit(diagnostic& d, const operand& a, const operand& b) {
+        const auto scale_of = [&](std::string_view name) -> int {
+            const symbol_entry* e = symbols_.find(name);
+            if (e == nullptr || e->offset_unit == nullptr || !e->compact_dim ||
+                !(*e->compact_dim == temperature_dimension()))
+                return 0;
+            if (std::abs(e->offset_unit->factor - 1.0) < 1e-12)
+                return 1;                                                       // the Celsius scale
+            return std::abs(e->offset_unit->factor * 1.8 - 1.0) < 1e-9 ? 2 : 0; // Fahrenheit
+        };
+        for (const auto& [target, conversion] : {std::pair{&a, &b}, std::pair{&b, &a}}) {
+            const syntax::expr_node& t = file_.nodes[syntax::inside_brackets(file_, target->node)];
+            if (t.kind != expr_kind::symbol)
+                continue;
+            const int target_scale = scale_of(text(t.range));
+            std::string_view reading;
+            int symbols = 0;
+            bool less_32 = false;
+            bool plus_32 = false;
+            syntax::search_subtree(
+                file_, conversion->node, [&](std::uint32_t, const syntax::expr_node& n) {
+                    if (n.kind == expr_kind::symbol) {
+                        reading = text(n.range);
+                        ++symbols;
+                    } else if ((n.kind == expr_kind::subtract || n.kind == expr_kind::add) &&
+                               file_.nodes[n.rhs].kind == expr_kind::number &&
+                               written_number(file_.nodes[n.rhs].range) == 32.0) {
+                        (n.kind == expr_kind::subtract ? less_32 : plus_32) = true;
+                    }
+                    return search_step::descend;
+                });
+            if (symbols != 1 || target_scale == 0)
+                continue;
+            const int reading_scale = scale_of(reading);
+            const std::string_view target_name = text(t.range);
+            if (less_32 && reading_scale == 1 && target_scale == 2) {
+                d.notes.push_back({fmt::format("({} - 32)/1.8 turns a °F reading into °C, but "
+                                               "'{}' is in °C already and '{}' wants °F: the "
+                                               "conversion runs the other way, {} = 1.8*{} + 32",
+                                               reading, reading, target_name, target_name, reading),
+                                   {}});
+                return true;
+            }
+            if (plus_32 && reading_scale == 2 && target_scale == 1) {
+                d.notes.push_back({fmt::format("1.8*{} + 32 turns a °C reading into °F, but '{}' "
+                                               "is in °F already and '{}' wants °C: the "
+                                               "conversion runs the other way, {} = ({} - 32)/1.8",
+                                               reading, reading, target_name, target_name, reading),
+                                   {}});
+                return true;
+            }
+        }
+        return false;
+    }
+
     [[gnu::always_inline]] void check_origins(std::span<const operand> sides,
                                               std::string_view relation) {
         // Nearly every formula: no scale's zero as a reading, no weighted readings and every
@@ -6043,6 +6101,8 @@ class checker {
                 file_.nodes[off.node].range);
             add_term(d, off);
             add_term(d, other);
+            if (temperature && explain_reversed_fahrenheit(d, side, *reference))
+                return;
             if (unit != nullptr && other.type.offset == nullptr) {
                 // "T_K = T_F + 273.15": where a number is added already, it is the wrong one;
                 // the advice names the reading, not the whole side with that number in it.
