@@ -846,3 +846,14 @@ TEST_CASE("water's specific heat typed as a number on a mass flow") {
     CHECK(count_of(run(d + "Φ = m*(T_1 - T_2)/3600\n"), plumb::rules::side_mismatch) == 1);
     CHECK(count_of(run(d + "Φ = m*2.1*(T_1 - T_2)/3600\n"), plumb::rules::side_mismatch) == 1);
 }
+
+// A crane's hook load in kip from tonnes, W = 2.2046·m (1 t·g_n = 9.80665 kN = 2.2046 kip; NIST
+// SP 811 (2008), B.8: 1 kip = 4.448222 kN): g and the kip in one number, so the advice to name
+// g keeps the conversion beside it, and the form it gives passes.
+TEST_CASE("a number holding g and a conversion keeps the conversion in the advice") {
+    const std::string d = "W_kip : kip\nm : t\n";
+    const auto r = run(d + "W_kip = 2.2046*m\n");
+    REQUIRE(count_of(r, plumb::rules::gravity_number) == 1);
+    CHECK(note_with(r, plumb::rules::gravity_number, "write {g_n}*0.224809 instead").size() > 0);
+    CHECK(problems_in(run(d + "W_kip = {g_n}*0.224809*m\n")) == 0);
+}

@@ -2805,7 +2805,26 @@ class checker {
             diagnostic& d = report(reading.quantity->rule, gravity_message(written, reading),
                                    file_.nodes[node].range);
             d.level = severity::note;
-            d.notes.push_back({std::string(reading.quantity->advice_in_notation), {}});
+            // "W_kip = 2.2046*m_t": g and kN per kip in one number; {g_n} alone would drop
+            // the conversion, which the advice keeps.
+            const carried_quantity& q = *reading.quantity;
+            const std::string_view advice = q.advice_in_notation;
+            const std::size_t named_at = advice.find("write ");
+            const std::size_t named_end = advice.find(" instead");
+            if (!reading.reciprocal && q.least == q.greatest && q.least > 0 &&
+                std::abs(reading.stands_for / q.least - 1.0) > 1e-3 && named_at == 0 &&
+                named_end != std::string_view::npos) [[unlikely]]
+                d.notes.push_back(
+                    {fmt::format("{} holds a conversion between the units around it as well "
+                                 "({} times {}): write {}*{} instead to say so, or declare the "
+                                 "symbols in coherent units",
+                                 written, advice.substr(6, named_end - 6),
+                                 format_factor(reading.stands_for / q.least),
+                                 advice.substr(6, named_end - 6),
+                                 format_factor(reading.stands_for / q.least)),
+                     {}});
+            else
+                d.notes.push_back({std::string(advice), {}});
             if (is_water_density_or_weight(*reading.quantity)) [[unlikely]]
                 report_specific_gravity_against_water(operands_[base + readings[r].operand],
                                                       reading, multiplies, written);
