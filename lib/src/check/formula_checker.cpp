@@ -189,7 +189,7 @@ bool stands_for_a_conversion(const scale_literal& l, bool allow_hundred) {
 // short to look like conversions among all the table's ratios, where three digits match some
 // ratio by chance, but unmistakable as a conversion of the term's own quantity where its units
 // already agree: "Q_ls = Q*0.0631" with Q in L/s converts gallons that are not there.
-bool is_three_digit_conversion_of(double value, const compact_dimension& d) {
+bool is_three_digit_conversion_of(double value, double tolerance, const compact_dimension& d) {
     static const compact_dimension flow = compact_dimension::whole({0, 3, -1, 0, 0, 0, 0});
     static const compact_dimension volume = compact_dimension::whole({0, 3, 0, 0, 0, 0, 0});
     static const compact_dimension power = compact_dimension::whole({1, 2, -3, 0, 0, 0, 0});
@@ -215,16 +215,14 @@ bool is_three_digit_conversion_of(double value, const compact_dimension& d) {
         {4.4482216152605, force_dim}, // N per lbf
         {1.0 / 1.8, temperature},     // K per °F of difference
     };
-    if (!(value > 0))
-        return false;
-    const auto three_digits = [](double v) {
-        const double step = std::pow(10.0, std::floor(std::log10(v)) - 2.0);
-        return std::round(v / step) * step;
+    // Printed to its digits: within half a unit of the last of them (the literal's tolerance).
+    const auto printed = [&](double v) {
+        return std::abs(v / value - 1.0) <= tolerance * (1.0 + 1e-9);
     };
-    const auto printed = [&](double v) { return std::abs(three_digits(v) / value - 1.0) < 1e-9; };
-    return std::any_of(std::begin(conversions), std::end(conversions), [&](const auto& c) {
-        return c.dim == d && (printed(c.ratio) || printed(1.0 / c.ratio));
-    });
+    return value > 0 &&
+           std::any_of(std::begin(conversions), std::end(conversions), [&](const auto& c) {
+               return c.dim == d && (printed(c.ratio) || printed(1.0 / c.ratio));
+           });
 }
 
 // The operands of one meeting point (terms of a sum, arguments, sides of a formula). The type
@@ -803,7 +801,9 @@ class checker {
         if (a.odd.empty()) {
             // "40 <= OB <= 50" with OB in %: the bounds are percentages, as in a sum (but not
             // "η <= 1", a fraction's bound beside a percentage).
-            if (!equation && sides[0].type.known && sides[0].type.dim.is_dimensionless())
+            if (!equation && sides[0].type.known && sides[0].type.dim.is_dimensionless() &&
+                std::any_of(sides.begin(), sides.end(),
+                            [](const operand& side) { return side.type.numeric; }))
                 adopt_numbers_in_scaled_unit(base);
             double unit = 1.0;
             // Views of known length: from a const char* each formula paid for a strlen.
@@ -4710,7 +4710,7 @@ class checker {
         return stands_for_a_conversion(l, allow_hundred) ||
                (std::abs(l.exponent) == 1.0 && file_.nodes[l.node].kind == expr_kind::number &&
                 significant_digits(text(file_.nodes[l.node].range)) == 3 &&
-                is_three_digit_conversion_of(l.value, term.dim));
+                is_three_digit_conversion_of(l.value, l.tolerance, term.dim));
     }
 
     bool units_agree_with_plain_numbers(std::span<const operand> ops, double& unit) const {
