@@ -45,7 +45,9 @@ bool names_a_stress(std::string_view name, std::string_view description) {
     if (name.starts_with("\u03C3") || name.starts_with("\u03C4") || name.starts_with("sigma") ||
         name.starts_with("tau"))
         return true;
-    for (const std::string_view word : {"stress", "strength", "Stress", "Strength"})
+    // A soil's cohesion and a modulus are stresses too, never pressure readings.
+    for (const std::string_view word : {"stress", "strength", "Stress", "Strength", "cohesion",
+                                        "Cohesion", "shear", "Shear", "modulus", "Modulus"})
         if (description.find(word) != std::string_view::npos)
             return true;
     return false;
