@@ -576,3 +576,17 @@ TEST_CASE("a sum of normal flows over an area is no velocity either") {
     CHECK(plumb::test::problems_in(
               plumb::test::check_after(d, "v = (V_a + V_n)/(3600*A)*T/273.15")) == 0);
 }
+
+// EN 12828's expansion vessel, V_n = V_e·(p_e + 1)/(p_e - p_0) with the pressures in bar g (EN
+// 12828:2012, Annex D, from memory): the 1 is the atmosphere rounded to 1 bar, 1.3 % under the
+// standard one, and with it the numerator is an absolute pressure. 100 in kPa alike; not 0.95,
+// and not 14.5 psi (the bar's conversion).
+TEST_CASE("the atmosphere rounded to 1 bar inside an expansion vessel's ratio") {
+    const std::string decl = "p_e, p_0 : barg\np_k, p_k0 : kPag\np_s, p_s0 : psig\nV_n, V_e : L\n";
+    passes(decl, {"V_n = V_e*(p_e + 1)/(p_e - p_0)", "V_n = V_e*(p_k + 100)/(p_k - p_k0)",
+                  "V_n = V_e*(p_e + 1.013)/(p_e - p_0)"});
+    fails_with(decl,
+               {"V_n = V_e*(p_e + 0.95)/(p_e - p_0)", "V_n = V_e*(p_s + 14.5)/(p_s - p_s0)",
+                "V_n = V_e*p_e/(p_e - p_0)"},
+               plumb::rules::offset_scale);
+}

@@ -4059,6 +4059,7 @@ class checker {
 
         double unit = terms[only].type.scale;
         bool keep_literals = false;
+        bool one_bar_atmosphere = false;
         if (unit_terms == 1) {
             // "1.8*T_C + 32": the numbers that multiply the one value with a unit may convert
             // it; the choice that puts the zero where some scale has one is the conversion.
@@ -4114,6 +4115,24 @@ class checker {
                         found = true;
                     }
                 }
+                // "(p_e + 1)/(p_e - p_0)" in bar g: EN 12828's expansion vessel takes the
+                // atmosphere as 1 bar (100 kPa), 1.3 % under the standard one; only that round
+                // figure, added to a gauge reading in bar or kPa inside a side (a whole side
+                // set equal to an absolute pressure is read as the site's barometer instead).
+                if (!found && lits.empty() && !is_whole_side(index) &&
+                    term.type.offset != nullptr && term.type.offset->scale == unit_scale::gauge &&
+                    (term.type.scale == 1e5 || term.type.scale == 1e3)) {
+                    bool round_atmosphere = true;
+                    for (const auto& t : terms)
+                        if (is_shift_candidate(t))
+                            round_atmosphere = round_atmosphere && t.type.numeric &&
+                                               !t.subtracted &&
+                                               shift_of(t).written * term.type.scale == 1e5;
+                    double tol = 0.0;
+                    one_bar_atmosphere =
+                        round_atmosphere && std::abs(shifted(term.type.scale, 0.0, &tol)) <=
+                                                0.014 * standard_atmosphere;
+                }
                 if (multiplied_reading && !found) {
                     // No conversion lands the zero: read every number as one, so that the sum
                     // is the reading moved by a difference and its zero is compared as such.
@@ -4150,6 +4169,10 @@ class checker {
             if (recognised_origin(o, tol, result.dim, terms)) {
                 final_origin = o;
                 tolerance = tol;
+                shifted_to_a_zero = true;
+            } else if (one_bar_atmosphere) {
+                final_origin = 0.0;
+                tolerance = std::abs(o);
                 shifted_to_a_zero = true;
             }
         }
@@ -6379,6 +6402,10 @@ class checker {
     // "'D' is in mm, 'Q' in L/s": the symbols under a node declared in non-coherent units.
     std::string units_in(std::uint32_t root) const {
         std::string out;
+        // "OB/100*Q_r" with OB in % and Q_r in kg: were only the percentage named, the kilograms
+        // that make the term's unit would be missing; coherent units are named then too.
+        std::string coherent;
+        bool only_pure_numbers = true;
         std::vector<std::uint32_t> stack{root};
         std::size_t listed = 0;
         while (!stack.empty() && listed < 6) {
@@ -6390,7 +6417,12 @@ class checker {
                     out.find(fmt::format("'{}'", text(n.range))) == std::string::npos) {
                     out += fmt::format("{}'{}' is in {}", out.empty() ? "" : ", ", text(n.range),
                                        e->unit_text);
+                    only_pure_numbers = only_pure_numbers && e->dim && e->dim->is_dimensionless();
                     ++listed;
+                } else if (e != nullptr && !e->unit_text.empty() && e->dim &&
+                           !e->dim->is_dimensionless() && coherent.size() < 120 &&
+                           coherent.find(fmt::format("'{}'", text(n.range))) == std::string::npos) {
+                    coherent += fmt::format(", '{}' is in {}", text(n.range), e->unit_text);
                 }
             } else if (n.kind == expr_kind::call) {
                 for (std::uint32_t i = 0; i < n.rhs; ++i)
@@ -6404,6 +6436,8 @@ class checker {
                     stack.push_back(n.lhs);
             }
         }
+        if (!out.empty() && only_pure_numbers)
+            out += coherent;
         return out;
     }
 
