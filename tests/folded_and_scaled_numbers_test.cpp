@@ -924,7 +924,12 @@ TEST_CASE("gradients in per mille beside percent and metres") {
 TEST_CASE("bare bounds of a limit on a percentage") {
     const std::string d = "OB, η : %\nθ : deg\nx : 1\n";
     passes(d, {"40 <= OB <= 50", "0 < η <= 100", "OB >= 2", "θ <= 90", "x <= 1"});
-    fails_with(d, {"η <= 1", "0 < η <= 1"}, plumb::rules::unit_scale);
+    fails_with(d, {"η <= 1", "0 < η <= 1", "η <= 0.6", "OB >= 0.55"}, plumb::rules::unit_scale);
+    // A bound below 1 may be a fraction (the slip) or a small percentage: the finding asks.
+    const auto fraction = run(d, "η <= 0.6");
+    CHECK(plumb::test::says(first_under(fraction, plumb::rules::unit_scale),
+                            "write 60 for 0.6 as a fraction, or 0.6 {%} if 0.6 % is meant"));
+    CHECK(problems_in(run(d, "η <= 0.6 {%}")) == 0);
 }
 
 // A rule of thumb near a conversion, "1 m/s is about 200 fpm" against 196.85 (0.00508 m/s per
@@ -963,6 +968,15 @@ TEST_CASE("a three-digit conversion of a quantity already converted") {
     const std::string d = "Q, Q_2 : L/s\nQ_g : gpm\np, p_2 : psi\np_b : bar\nL, L_2 : m\n";
     fails_with(d, {"Q = Q_2*0.0631", "p = p_2*14.5", "p = 6.89*p_2", "L = 3.28*L_2"},
                plumb::rules::unit_scale);
+    // On flows and speeds too, and beside the power of ten that the units do need (Btu/h to
+    // MBH is /1000 alone; 3.41 Btu/h per W is a conversion too many).
+    const std::string more = "m, m_2 : kg/h\nv, v_2 : ft/s\nQ_g : gpm\nV_d : in^3\nn : rpm\n"
+                             "η : 1\nQ_M : MBH\nQ_B : Btu/h\n";
+    fails_with(
+        more,
+        {"m = 0.454*m_2", "v = 0.305*v_2", "Q_g = 0.264*V_d*n/(231*η)", "Q_M = 3.41*Q_B/1000"},
+        plumb::rules::unit_scale);
+    passes(more, {"Q_g = V_d*n/(231*η)", "Q_M = Q_B/1000"});
     passes(d, {"Q = Q_g*0.0631", "p = 14.5*p_b", "Q = 0.632*Q_2", "p = 1.25*p_2", "L = 3.29*L_2",
                "p = 14.6*p_2"});
 }

@@ -857,3 +857,13 @@ TEST_CASE("a number holding g and a conversion keeps the conversion in the advic
     CHECK(note_with(r, plumb::rules::gravity_number, "write {g_n}*0.224809 instead").size() > 0);
     CHECK(problems_in(run(d + "W_kip = {g_n}*0.224809*m\n")) == 0);
 }
+
+// A circumference's π folded with a conversion into a whole number of three digits: the
+// machinist's n = 318·v_c/D (1000/π, m/min and mm to rpm) and the pump maker's u = D·n/229
+// (720/π, inches and rpm to ft/s); common practice. A note says how each was read.
+TEST_CASE("one over pi folded into whole numbers of three digits") {
+    const std::string d = "n : rpm\nv_c : m/min\nD_mm : mm\nu : ft/s\nD_in : in\n";
+    passes_with_one_note(d, {"n = 318*v_c/D_mm", "u = D_in*n/229"}, plumb::rules::trade_constant);
+    CHECK(count_of(run(d + "n = 1000*v_c/D_mm\n"), plumb::rules::unit_scale) == 1);
+    CHECK(count_of(run(d + "u = D_in*n/720\n"), plumb::rules::unit_scale) == 1);
+}

@@ -194,6 +194,7 @@ bool is_three_digit_conversion_of(double value, double tolerance, const compact_
     static const compact_dimension volume = compact_dimension::whole({0, 3, 0, 0, 0, 0, 0});
     static const compact_dimension power = compact_dimension::whole({1, 2, -3, 0, 0, 0, 0});
     static const compact_dimension mass = compact_dimension::whole({1, 0, 0, 0, 0, 0, 0});
+    static const compact_dimension mass_flow = compact_dimension::whole({1, 0, -1, 0, 0, 0, 0});
     static const struct {
         double ratio;
         const compact_dimension& dim;
@@ -212,6 +213,9 @@ bool is_three_digit_conversion_of(double value, double tolerance, const compact_
         {3.516852842, power},         // kW per ton of refrigeration
         {0.29307107, power},          // W per Btu/h
         {0.45359237, mass},           // kg per lb
+        {0.45359237, mass_flow},      // kg/h per lb/h
+        {3.785411784, flow},          // L/min per gpm
+        {0.3048, velocity_dim},       // m/s per ft/s
         {4.4482216152605, force_dim}, // N per lbf
         {1.0 / 1.8, temperature},     // K per °F of difference
     };
@@ -804,7 +808,7 @@ class checker {
             if (!equation && sides[0].type.known && sides[0].type.dim.is_dimensionless() &&
                 std::any_of(sides.begin(), sides.end(),
                             [](const operand& side) { return side.type.numeric; }))
-                adopt_numbers_in_scaled_unit(base);
+                adopt_numbers_in_scaled_unit(base, true);
             double unit = 1.0;
             // Views of known length: from a const char* each formula paid for a strlen.
             const std::string_view sides_what = equation
@@ -1858,8 +1862,16 @@ class checker {
                           1.0 / std::numbers::pi, std::numbers::pi / 30.0, 30.0 / std::numbers::pi})
                         if (std::abs(v / c - 1.0) < 0.003)
                             return search_step::found;
-                    if (!near_power_of_ten(v, 1e-12) && !near_power_of_ten(v / 60.0, 1e-12) &&
-                        v != 60.0)
+                    // Unit conversions of length and time (10^k, 12 in/ft, 60 s/min, and
+                    // their products: 720, 60000) are no pitch count or stroke factor.
+                    bool conversion = false;
+                    for (const double clock : {1.0, 60.0, 1.0 / 60.0})
+                        for (const double inches : {1.0, 12.0, 1.0 / 12.0}) {
+                            const double rest = v / (clock * inches);
+                            conversion = conversion || near_power_of_ten(rest, 1e-12) ||
+                                         std::abs(rest - 1.0) < 1e-12;
+                        }
+                    if (!conversion)
                         ++other_numbers;
                     return search_step::skip;
                 }
@@ -1981,9 +1993,10 @@ class checker {
             file_.nodes[file_.sides[f.first_side].root].range);
         d.level = severity::warning;
         d.notes.push_back(
-            {fmt::format("write {} = {}*{}*{} (a speed in revolutions counts cycles), or declare "
-                         "the speed in rad/s",
-                         rim_name, radius ? "2*pi" : "pi", length_name, speed_name),
+            {fmt::format("put the {} in: {} = {}*{}*{}, with this formula's unit conversions "
+                         "kept beside it (a speed in revolutions counts cycles)",
+                         radius ? "2\u03C0" : "\u03C0", rim_name, radius ? "2*pi" : "pi",
+                         length_name, speed_name),
              {}});
     }
 
@@ -3612,7 +3625,9 @@ class checker {
     // "20.9 - O2" with O2 in %, "θ + 90" with θ in degrees: in a sum whose other terms are all
     // in one scaled dimensionless unit, a bare number is a value in that unit, as engineers
     // mean it. Where the terms are plain fractions ("1 - S/100") the number stays one too.
-    void adopt_numbers_in_scaled_unit(std::size_t base) {
+    // In a limit (`bounds`), no number up to 1: "RH <= 0.6" beside RH in % is a fraction's bound
+    // as often as a percentage's, and the finding asks which.
+    void adopt_numbers_in_scaled_unit(std::size_t base, bool bounds = false) {
         double unit = std::numeric_limits<double>::quiet_NaN();
         bool numbers = false;
         for (std::size_t i = base; i < operands_.size(); ++i) {
@@ -3648,7 +3663,8 @@ class checker {
         // percentage, the slip, far more often than 1 % less L.
         for (std::size_t i = base; i < operands_.size(); ++i) {
             auto& t = const_cast<typed_term&>(operands_[i].type);
-            if (t.known && !t.zero && t.numeric && !(t.value && *t.value == rational(1)))
+            if (t.known && !t.zero && t.numeric && !(t.value && *t.value == rational(1)) &&
+                !(bounds && t.value && !(rational(1) < *t.value)))
                 t.scale = std::numeric_limits<double>::quiet_NaN(); // the others' unit
         }
     }
@@ -5121,6 +5137,21 @@ class checker {
         }
         if (!state_note.empty())
             d.notes.push_back({std::move(state_note), {}});
+        // "RH <= 0.6" with RH in %: a fraction's bound beside a percentage, or a bound of 0.6 %.
+        if (what.what == "sides of this limit" && reference.type.numeric &&
+            holds_percentage(op.node)) {
+            const std::string bound = display_text(file_.nodes[reference.node].range);
+            d.notes.push_back(
+                {fmt::format("a bound up to 1 beside a percentage reads as a "
+                             "fraction: write {} for {} as a fraction, or {} {{%}} "
+                             "if {} % is meant",
+                             format_factor(reference.type.value
+                                               ? reference.type.value->to_double() * 100.0
+                                               : 100.0),
+                             bound, bound, bound),
+                 {}});
+            return false;
+        }
         d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
                                        "write the conversion factor into the formula)",
                                        multiply ? "multiply" : "divide", quote(op.node), factor),
@@ -5407,9 +5438,11 @@ class checker {
             {std::numbers::pi, "\u03C0", "a circumference's \u03C0 (v = \u03C0\u00B7D\u00B7n)",
              false},
             // 3.82 = 12/π in the machine shop's n = 3.82*V/D (sfm and inches to rpm; Machinery's
-            // Handbook, speeds and feeds, from memory): the same π, dividing.
+            // Handbook, speeds and feeds, from memory): the same π, dividing. Whole numbers of
+            // three digits too: 318 = 1000/π (m/min and mm to rpm), 229 = 720/π (a pump's tip
+            // speed in ft/s from inches and rpm; common practice).
             {1.0 / std::numbers::pi, "1/\u03C0", "a circumference's \u03C0 (n = V/(\u03C0\u00B7D))",
-             false},
+             true},
             {std::numbers::ln10 / (2.0 * std::numbers::pi), "ln 10/(2\u03C0)",
              "the steady well-flow (Thiem) formula's constant, with log10 for ln,", true},
             {std::numbers::ln10 / (4.0 * std::numbers::pi), "ln 10/(4\u03C0)",
@@ -5684,6 +5717,7 @@ class checker {
                 // "Q_m3h = Q_cfm*1.699*60": 1.699 is m³/h per cfm already, and the minutes
                 // in an hour beside it are counted twice.
                 if (!(looks_like_conversion(l, !dimensionless) ||
+                      converts_in_term(l, ops[index[i]].type, !dimensionless) ||
                       spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node)) ||
                     (l.exponent == 1.0 && (l.value == 1e3 || l.value == 1e6 || l.value == 1e9) &&
                      l.value == counted_multiple(ops[index[i]].node)))
