@@ -6042,20 +6042,22 @@ class checker {
                 continue;
             const int reading_scale = scale_of(reading);
             const std::string_view target_name = text(t.range);
-            if (less_32 && reading_scale == 1 && target_scale == 2) {
-                d.notes.push_back({fmt::format("({} - 32)/1.8 turns a °F reading into °C, but "
-                                               "'{}' is in °C already and '{}' wants °F: the "
-                                               "conversion runs the other way, {} = 1.8*{} + 32",
-                                               reading, reading, target_name, target_name, reading),
-                                   {}});
-                return true;
-            }
-            if (plus_32 && reading_scale == 2 && target_scale == 1) {
-                d.notes.push_back({fmt::format("1.8*{} + 32 turns a °C reading into °F, but '{}' "
-                                               "is in °F already and '{}' wants °C: the "
-                                               "conversion runs the other way, {} = ({} - 32)/1.8",
-                                               reading, reading, target_name, target_name, reading),
-                                   {}});
+            // Wanting °F from a °C reading with (t - 32)/1.8, or °C from a °F one with 1.8*t + 32.
+            const bool wants_fahrenheit = less_32 && reading_scale == 1 && target_scale == 2;
+            if (wants_fahrenheit || (plus_32 && reading_scale == 2 && target_scale == 1)) {
+                const auto form = [&](bool to_fahrenheit) {
+                    return to_fahrenheit ? fmt::format("1.8*{} + 32", reading)
+                                         : fmt::format("({} - 32)/1.8", reading);
+                };
+                const char* has = wants_fahrenheit ? "°C" : "°F";
+                const char* wants = wants_fahrenheit ? "°F" : "°C";
+                d.notes.push_back(
+                    {fmt::format("{} turns a {} reading into {}, but '{}' is in {} "
+                                 "already and '{}' wants {}: the conversion runs "
+                                 "the other way, {} = {}",
+                                 form(!wants_fahrenheit), wants, has, reading, has, target_name,
+                                 wants, target_name, form(wants_fahrenheit)),
+                     {}});
                 return true;
             }
         }
