@@ -538,6 +538,17 @@ constexpr unit_definition rows[] = {
     // Per mille: 0.001, common practice (gradients in railway and drainage work, 1 ‰ = 1 m/km).
     absolute("‰", "per mille", none, 0.001, "0.001", prefixes::refused,
              "common practice (‰ = 0.001)"),
+    // Money, counted as a pure number (the grammar reads the signs; these rows name them in
+    // the catalogue): a price per MWh beside one per kWh is still 1000 apart. Currencies are
+    // not converted into one another (common practice: the rate is the calc's own input).
+    absolute("$", "money (dollar), counted as a pure number", none, 1.0, "1", prefixes::refused,
+             "common practice (no exchange rate is assumed)"),
+    absolute("€", "money (euro), counted as a pure number", none, 1.0, "1", prefixes::refused,
+             "common practice (no exchange rate is assumed)"),
+    absolute("£", "money (pound sterling), counted as a pure number", none, 1.0, "1",
+             prefixes::refused, "common practice (no exchange rate is assumed)"),
+    absolute("¥", "money (yen or yuan), counted as a pure number", none, 1.0, "1",
+             prefixes::refused, "common practice (no exchange rate is assumed)"),
     // Parts per million and per billion: 10^-6 and 10^-9 (NIST SP 811 (2008), 7.10.3, which
     // discourages them; air and water permits are written in them all the same).
     absolute("ppm", "part per million", none, 1e-6, "0.000001", prefixes::refused,
