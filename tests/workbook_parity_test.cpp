@@ -967,3 +967,31 @@ TEST_CASE("workbook parity: an apparent power written under a real power's unit"
     CHECK(says(*d, "apparent power"));
     CHECK(problems_in(r) == 1);
 }
+
+TEST_CASE("workbook parity: a rim speed without π and a torque without 2π, read from cells") {
+    // v = π·D·n (common practice) and M = 60 000·P/(2π·n) in N·m from kW and rpm (9549·P/n):
+    // a workbook's cells declare their units only beside them, so the rules that need a speed
+    // in revolutions read the cells' units, and a length's row label or heading for its
+    // diameter. A row named for a pulley ("Drive") says nothing of what its cell measures.
+    const auto row = [](int r, const std::string& label, const std::string& value,
+                        const std::string& unit) {
+        const std::string n = std::to_string(r);
+        return "<row r=\"" + n + "\"><c r=\"A" + n + "\" t=\"inlineStr\"><is><t>" + label +
+               "</t></is></c>" + value_and_unit_row(r, value, unit).substr(9 + n.size());
+    };
+    const std::string xml =
+        "<worksheet><sheetData>" + row(2, "Pulley diameter", "800", "mm") +
+        row(3, "Pulley speed", "40", "rpm") + row(4, "Belt speed", "=PI()*B2/1000*B3/60", "m/s") +
+        row(5, "Belt speed, slip", "=B2/1000*B3/60", "m/s") + row(6, "Drive power", "75", "kW") +
+        row(7, "Torque", "=9549*B6/B3", "N·m") + row(8, "Torque, slip", "=B6*60000/B3", "N·m") +
+        row(9, "Screw pitch", "0.5", "m") + row(10, "Screw travel", "=B9*B3/60", "m/s") +
+        "</sheetData></worksheet>";
+    const check_report r = check_one_sheet("S", xml);
+    // 9549 = 60 000/(2π) gets its note, as in the notation.
+    CHECK(cell_findings(r) ==
+          std::vector<std::string>{"S!B5 unit-scale", "S!B7 trade-constant", "S!B8 unit-scale"});
+    const diagnostic* rim = finding(r, "S!B5", rules::unit_scale);
+    REQUIRE(rim != nullptr);
+    CHECK(says(*rim, "off by 3.14159"));
+    CHECK(says(*rim, "multiply by PI()"));
+}

@@ -842,6 +842,14 @@ class checker {
                     // Not the actual-against-normal rule: sheets write "m³/d" for standard
                     // volumes as often as for actual ones.
                     report_reference_temperatures_left_out(sides);
+                // A workbook's cells declare no units up front: the rotation rules are asked
+                // of the formulas whose sides could hold them.
+                if (file_.functions == syntax::function_names::spreadsheet && equation &&
+                    sides.size() == 2 && sides[0].type.known && out_.size() == findings_before &&
+                    (is_rotating_power_or_torque(sides[0].type.dim) ||
+                     sides[0].type.dim == frequency_dim || sides[0].type.dim == velocity_dim))
+                    [[unlikely]]
+                    report_revolution_without_two_pi(f, sides[0].type.dim);
                 if (equation && sides.size() == 2 && sides[0].type.dim == frequency_dim &&
                     out_.size() == findings_before) [[unlikely]]
                     report_angular_frequency_as_cycles(sides);
@@ -1826,30 +1834,68 @@ class checker {
     // torque, one power and one speed in revolutions, with no π or 2π written in it.
     // The same holds where a speed in revolutions meets one in radians ("ω = n/60" with ω in
     // rad/s) or a moment of inertia in a kinetic energy ("E = 0.5*I*(n/60)^2").
+    // A symbol or a cell as this rule reads it: its name (or address) and its unit as written.
+    struct rotating_part {
+        std::string name; // quoted ('n_p', 'C12'), or "the cell" for the cell written to
+        std::string_view unit;
+    };
+
     [[gnu::noinline]] void report_revolution_without_two_pi(const syntax::formula& f,
                                                             const compact_dimension& sides_dim) {
-        const symbol_entry* torque = nullptr;
-        const symbol_entry* speed = nullptr;
-        const symbol_entry* partner = nullptr; // an angular speed in radians, or an inertia
-        std::string_view torque_name;
-        std::string_view speed_name;
-        std::string_view partner_name;
+        rotating_part torque;
+        rotating_part speed;
+        rotating_part partner; // an angular speed in radians, or an inertia
+        rotating_part rim;     // a speed along a path (m/s, fpm)
+        rotating_part length;
+        round_length length_round = round_length::none;
         int torques = 0;
         int speeds = 0;
         int powers = 0;
         int energies = 0; // in an energy unit (J, kWh), which no torque is written in
         int angular_speeds = 0;
         int inertias = 0;
-        int rim_speeds = 0; // speeds along a path (m/s, fpm)
-        const symbol_entry* rim = nullptr;
-        std::string_view rim_name;
+        int rim_speeds = 0;
         int lengths = 0;
-        std::string_view length_name;
-        const symbol_entry* length = nullptr;
         int other_numbers = 0; // not powers of ten or 60: π/12, a screw's 2 strokes
+        const auto classify = [&](rotating_part&& part, const compact_dimension& dim,
+                                  round_length round) {
+            if ((unit_marks_of(part.unit) & counts_revolutions) != 0) {
+                speed = part;
+                ++speeds;
+            } else if (dim == frequency_dim && part.unit.find("rad") != std::string_view::npos) {
+                partner = part;
+                ++angular_speeds;
+            } else if (dim == moment_of_inertia_dim) {
+                if (angular_speeds == 0)
+                    partner = part;
+                ++inertias;
+            } else if (dim == energy_dim) {
+                bool energy_unit_named = part.unit.empty();
+                for (const std::string_view energy_unit :
+                     {"J", "Wh", "Btu", "BTU", "cal", "erg", "eV", "therm"})
+                    energy_unit_named =
+                        energy_unit_named || part.unit.find(energy_unit) != std::string_view::npos;
+                if (energy_unit_named) {
+                    ++energies;
+                } else {
+                    torque = part;
+                    ++torques;
+                }
+            } else if (dim == power_dim) {
+                ++powers;
+            } else if (dim == velocity_dim) {
+                rim = part;
+                ++rim_speeds;
+            } else if (dim == length_dim) {
+                length = part;
+                length_round = round;
+                ++lengths;
+            }
+        };
         // Found: a 2π written in the formula, or a term this rule cannot read.
+        const std::uint32_t first_root = file_.sides[f.first_side].root;
         const bool not_for_this_rule =
-            syntax::search_formula(file_, f, [&](std::uint32_t, const syntax::expr_node& n) {
+            syntax::search_formula(file_, f, [&](std::uint32_t at, const syntax::expr_node& n) {
                 switch (n.kind) {
                 case expr_kind::pi:
                     return search_step::found;
@@ -1880,46 +1926,24 @@ class checker {
                     const symbol_entry* e = symbols_.find(name);
                     if (e == nullptr || !e->compact_dim)
                         return search_step::found;
-                    const std::string_view unit = e->unit_text;
-                    if ((unit_marks_of(unit) & counts_revolutions) != 0) {
-                        speed = e;
-                        speed_name = name;
-                        ++speeds;
-                    } else if (*e->compact_dim == frequency_dim &&
-                               unit.find("rad") != std::string_view::npos) {
-                        partner = e;
-                        partner_name = name;
-                        ++angular_speeds;
-                    } else if (*e->compact_dim == moment_of_inertia_dim) {
-                        if (angular_speeds == 0) {
-                            partner = e;
-                            partner_name = name;
-                        }
-                        ++inertias;
-                    } else if (*e->compact_dim == energy_dim) {
-                        bool energy_unit_named = unit.empty();
-                        for (const std::string_view energy_unit :
-                             {"J", "Wh", "Btu", "BTU", "cal", "erg", "eV", "therm"})
-                            energy_unit_named = energy_unit_named ||
-                                                unit.find(energy_unit) != std::string_view::npos;
-                        if (energy_unit_named) {
-                            ++energies;
-                        } else {
-                            torque = e;
-                            torque_name = name;
-                            ++torques;
-                        }
-                    } else if (*e->compact_dim == power_dim) {
-                        ++powers;
-                    } else if (*e->compact_dim == velocity_dim) {
-                        rim = e;
-                        rim_name = name;
-                        ++rim_speeds;
-                    } else if (*e->compact_dim == length_dim) {
-                        length = e;
-                        length_name = name;
-                        ++lengths;
-                    }
+                    classify({fmt::format("'{}'", name), e->unit_text}, *e->compact_dim,
+                             names_a_diameter_or_radius(name, e->description));
+                    return search_step::skip;
+                }
+                case expr_kind::reference: {
+                    // A workbook's cell: its unit as written, and a length's row label.
+                    const syntax::reference_value& r = file_.references[n.lhs];
+                    const std::optional<compact_dimension> dim =
+                        r.dim ? compact_dimension::fitted(*r.dim) : std::nullopt;
+                    if (!dim)
+                        return search_step::found;
+                    // The cell written to stands first, named by its unit in the tree.
+                    const bool written =
+                        file_.functions == syntax::function_names::spreadsheet && at == first_root;
+                    classify(
+                        {written ? std::string("the cell") : fmt::format("'{}'", text(n.range)),
+                         r.unit_text},
+                        *dim, r.round);
                     return search_step::skip;
                 }
                 case expr_kind::call:
@@ -1937,29 +1961,28 @@ class checker {
             });
         if (not_for_this_rule)
             return;
-        if (speeds >= 1 && speed != nullptr && partner != nullptr &&
+        if (speeds >= 1 && !partner.name.empty() &&
             (angular_speeds >= 1 || (inertias >= 1 && is_rotating_power_or_torque(sides_dim)))) {
-            report_revolutions_beside_radians(f, *speed, speed_name, *partner, partner_name,
-                                              angular_speeds >= 1);
+            report_revolutions_beside_radians(f, speed, partner, angular_speeds >= 1);
             return;
         }
         if (speeds == 1 && rim_speeds == 1 && lengths == 1 && torques == 0 && powers == 0 &&
             energies == 0 && angular_speeds == 0 && inertias == 0 && other_numbers == 0 &&
-            speed != nullptr && rim != nullptr && length != nullptr) {
-            report_rim_speed_without_pi(f, *speed, speed_name, rim_name, *length, length_name);
+            length_round != round_length::none) {
+            report_rim_speed_without_pi(f, speed, rim, length,
+                                        length_round == round_length::radius);
             return;
         }
-        if (torques != 1 || speeds != 1 || powers != 1 || energies != 0 || torque == nullptr ||
-            speed == nullptr)
+        if (torques != 1 || speeds != 1 || powers != 1 || energies != 0)
             return;
-        diagnostic& d = report(
-            rules::unit_scale,
-            fmt::format("'{}' is a torque ({}) and '{}' a speed in revolutions ({}): power and "
-                        "torque meet through the 2\u03C0 radians of each revolution, P = "
-                        "2\u03C0\u00B7n\u00B7M, and this formula has no 2\u03C0, so it is "
-                        "off by 6.28319",
-                        torque_name, torque->unit_text, speed_name, speed->unit_text),
-            file_.nodes[file_.sides[f.first_side].root].range);
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("{} is a torque ({}) and {} a speed in revolutions ({}): power and "
+                               "torque meet through the 2\u03C0 radians of each revolution, P = "
+                               "2\u03C0\u00B7n\u00B7M, and this formula has no 2\u03C0, so it is "
+                               "off by 6.28319",
+                               torque.name, torque.unit, speed.name, speed.unit),
+                   file_.nodes[file_.sides[f.first_side].root].range);
         d.level = severity::warning;
         d.notes.push_back({"revolutions count as cycles: write 2*pi*n for the angular speed "
                            "(M = 60000*P/(2*pi*n) in N·m from kW and rpm is M = 9549*P/n), or "
@@ -1969,53 +1992,50 @@ class checker {
 
     // "n_d = v/D" in rpm from a rope speed and a drum's diameter: a point on the rim travels
     // π·D per revolution, v = π·D·n (2π·r·n with a radius), which the units cannot say. Only
-    // for a length named as a diameter or a radius: a screw's pitch, a chain's or a stroke
-    // travel without π (v = p·n).
-    void report_rim_speed_without_pi(const syntax::formula& f, const symbol_entry& speed,
-                                     std::string_view speed_name, std::string_view rim_name,
-                                     const symbol_entry& length, std::string_view length_name) {
-        const auto described = [&](std::string_view word) {
-            return length.description.find(word) != std::string_view::npos;
-        };
-        const bool radius =
-            length_name.starts_with("r") || length_name.starts_with("R") || described("radius");
-        const bool diameter =
-            length_name.starts_with("D") || length_name.starts_with("d") || described("diameter");
-        if (radius == diameter)
-            return;
-        diagnostic& d = report(
-            rules::unit_scale,
-            fmt::format("'{}' is a speed in revolutions ({}) and '{}' a speed along the rim of "
-                        "'{}': a point on the rim travels {} per revolution, and this formula "
-                        "has no π, so it is off by {}",
-                        speed_name, speed.unit_text, rim_name, length_name, radius ? "2π·r" : "π·D",
-                        radius ? "6.28319" : "3.14159"),
-            file_.nodes[file_.sides[f.first_side].root].range);
+    // for a length named as a diameter or a radius (names_a_diameter_or_radius): a screw's
+    // pitch, a chain's or a stroke travel without π (v = p·n).
+    void report_rim_speed_without_pi(const syntax::formula& f, const rotating_part& speed,
+                                     const rotating_part& rim, const rotating_part& length,
+                                     bool radius) {
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("{} is a speed in revolutions ({}) and {} a speed along the rim of "
+                               "{}: a point on the rim travels {} per revolution, and this formula "
+                               "has no π, so it is off by {}",
+                               speed.name, speed.unit, rim.name, length.name,
+                               radius ? "2π·r" : "π·D", radius ? "6.28319" : "3.14159"),
+                   file_.nodes[file_.sides[f.first_side].root].range);
         d.level = severity::warning;
+        const auto bare = [](const std::string& quoted) {
+            return quoted.size() > 2 && quoted.front() == '\'' ? quoted.substr(1, quoted.size() - 2)
+                                                               : quoted;
+        };
         d.notes.push_back(
-            {fmt::format("put the {} in: {} = {}*{}*{}, with this formula's unit conversions "
-                         "kept beside it (a speed in revolutions counts cycles)",
-                         radius ? "2\u03C0" : "\u03C0", rim_name, radius ? "2*pi" : "pi",
-                         length_name, speed_name),
+            {file_.functions == syntax::function_names::spreadsheet
+                 ? fmt::format("put the {} in: multiply by {}PI(), with this formula's unit "
+                               "conversions kept beside it (a speed in revolutions counts cycles)",
+                               radius ? "2\u03C0" : "\u03C0", radius ? "2*" : "")
+                 : fmt::format("put the {} in: {} = {}*{}*{}, with this formula's unit "
+                               "conversions kept beside it (a speed in revolutions counts cycles)",
+                               radius ? "2\u03C0" : "\u03C0", bare(rim.name),
+                               radius ? "2*pi" : "pi", bare(length.name), bare(speed.name)),
              {}});
     }
 
-    void report_revolutions_beside_radians(const syntax::formula& f, const symbol_entry& speed,
-                                           std::string_view speed_name, const symbol_entry& partner,
-                                           std::string_view partner_name, bool angular) {
+    void report_revolutions_beside_radians(const syntax::formula& f, const rotating_part& speed,
+                                           const rotating_part& partner, bool angular) {
         const std::string partner_is =
-            angular ? fmt::format("'{}' an angular speed in radians ({})", partner_name,
-                                  partner.unit_text)
-                    : fmt::format("'{}' a moment of inertia ({}), whose kinetic energy "
+            angular ? fmt::format("{} an angular speed in radians ({})", partner.name, partner.unit)
+                    : fmt::format("{} a moment of inertia ({}), whose kinetic energy "
                                   "\u00BDI\u03C9\u00B2 takes the speed in radians",
-                                  partner_name, partner.unit_text);
-        diagnostic& d = report(
-            rules::unit_scale,
-            fmt::format("'{}' is a speed in revolutions ({}) and {}: a revolution is 2\u03C0 "
-                        "radians, and this formula has no 2\u03C0, so it is off by {}",
-                        speed_name, speed.unit_text, partner_is,
-                        angular ? "6.28319" : "6.28319 for each power of the speed"),
-            file_.nodes[file_.sides[f.first_side].root].range);
+                                  partner.name, partner.unit);
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("{} is a speed in revolutions ({}) and {}: a revolution is 2\u03C0 "
+                               "radians, and this formula has no 2\u03C0, so it is off by {}",
+                               speed.name, speed.unit, partner_is,
+                               angular ? "6.28319" : "6.28319 for each power of the speed"),
+                   file_.nodes[file_.sides[f.first_side].root].range);
         d.level = severity::warning;
         d.notes.push_back({"revolutions count as cycles: the angular speed is \u03C9 = 2*pi*n "
                            "(2*pi*n/60 in rad/s from rpm), or declare the speed in rad/s",

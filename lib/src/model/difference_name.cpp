@@ -73,4 +73,17 @@ bool names_specific_gravity(std::string_view name, std::string_view description)
            lower.find("relative density") != std::string::npos;
 }
 
+round_length names_a_diameter_or_radius(std::string_view name, std::string_view description) {
+    std::string lower(description);
+    for (char& c : lower)
+        if (c >= 'A' && c <= 'Z')
+            c = static_cast<char>(c - 'A' + 'a');
+    const auto says = [&](std::string_view word) { return lower.find(word) != std::string::npos; };
+    const bool radius = name.starts_with("r") || name.starts_with("R") || says("radius");
+    const bool diameter = name.starts_with("D") || name.starts_with("d") || says("diameter");
+    if (radius == diameter)
+        return round_length::none;
+    return radius ? round_length::radius : round_length::diameter;
+}
+
 } // namespace plumb

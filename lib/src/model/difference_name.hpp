@@ -22,4 +22,10 @@ bool names_the_atmosphere(std::string_view name, std::string_view description);
 // SG_m, "specific gravity", "relative density"), which goes wherever water's density goes.
 bool names_specific_gravity(std::string_view name, std::string_view description);
 
+// Whether a length's name or description says it is a circle's diameter (D, d_p, "pulley
+// diameter") or radius (r, "wheel radius"), whose rim travels π·D per revolution; none for a
+// length named as neither, or as both.
+enum class round_length : unsigned char { none, diameter, radius };
+round_length names_a_diameter_or_radius(std::string_view name, std::string_view description);
+
 } // namespace plumb

@@ -2,6 +2,8 @@
 // file of a million formulas is a handful of allocations, not millions.
 #pragma once
 
+#include "model/difference_name.hpp"
+
 #include "plumb/diagnostic.hpp"
 #include "plumb/dimension.hpp"
 #include "plumb/source.hpp"
@@ -53,6 +55,8 @@ struct reference_value {
     bool difference = false;
     // A pure number whose row label says it is a liquid's specific gravity.
     bool specific_gravity = false;
+    // A length whose row label names a circle's diameter or radius (a pulley's, a drum's).
+    round_length round = round_length::none;
     // The unit as written for the cell ("Ah", "L/min"), where one is.
     std::string_view unit_text;
     // A gas volume at reference conditions (Nm³, scf): its reference temperature and the power

@@ -574,28 +574,48 @@ class workbook_checker {
         return !label.description.empty() && names_specific_gravity(label.name, label.description);
     }
 
-    bool labelled_a_difference(std::size_t s, cell_address a) const {
-        const row_label label = label_of(s, a);
-        if (!label.description.empty() && names_a_difference(label.name, label.description))
-            return true;
-        // "ΔT [°F]", "Rise [K]": the column's heading, the nearest text above, names it one.
+    // The column's heading, the nearest text above a cell, without its unit: "ΔT [°F]" gives
+    // "ΔT", as name (one short word) and words.
+    row_label heading_of(std::size_t s, cell_address a) const {
+        row_label heading;
         const auto column = text_rows_[s].find(a.column);
         if (column == text_rows_[s].end())
-            return false;
+            return heading;
         const auto it = std::lower_bound(column->second.begin(), column->second.end(), a.row);
         if (it == column->second.begin())
-            return false;
+            return heading;
         const cell* above = book_.sheets[s].find({*(it - 1), a.column});
         if (above == nullptr || above->kind != cell_kind::text || above->text.size() > 80)
-            return false;
+            return heading;
         std::string_view words = above->text;
         words = words.substr(0, std::min(words.find('['), words.find('(')));
         while (!words.empty() && words.back() == ' ')
             words.remove_suffix(1);
-        const std::string_view heading_name =
-            words.find(' ') == std::string_view::npos && words.size() <= 12 ? words
-                                                                            : std::string_view{};
-        return !words.empty() && names_a_difference(heading_name, words);
+        if (words.find(' ') == std::string_view::npos && words.size() <= 12)
+            heading.name = words;
+        heading.description = std::string(words);
+        return heading;
+    }
+
+    bool labelled_a_difference(std::size_t s, cell_address a) const {
+        const row_label label = label_of(s, a);
+        if (!label.description.empty() && names_a_difference(label.name, label.description))
+            return true;
+        // "ΔT [°F]", "Rise [K]": the column's heading names it one.
+        const row_label heading = heading_of(s, a);
+        return !heading.description.empty() &&
+               names_a_difference(heading.name, heading.description);
+    }
+
+    // A length whose row label, or else its column's heading, names a diameter or a radius.
+    round_length labelled_round(std::size_t s, cell_address a) const {
+        // By the label's words only: a row named "Drive" or "Rope" is no diameter or radius.
+        const row_label label = label_of(s, a);
+        if (const round_length r = names_a_diameter_or_radius({}, label.description);
+            r != round_length::none)
+            return r;
+        const row_label heading = heading_of(s, a);
+        return names_a_diameter_or_radius(heading.name, heading.description);
     }
 
     // ---- Checking one formula cell --------------------------------------------------------
@@ -632,6 +652,10 @@ class workbook_checker {
                 r.area.single() && v.dim && labelled_a_difference(r.sheet, r.area.first);
             target.specific_gravity = r.area.single() && v.dim && v.dim->is_dimensionless() &&
                                       labelled_a_specific_gravity(r.sheet, r.area.first);
+            target.round =
+                r.area.single() && v.dim && *v.dim == dimension::base(base_dimension::length)
+                    ? labelled_round(r.sheet, r.area.first)
+                    : round_length::none;
             target.unit_text =
                 v.unit != nullptr ? std::string_view(v.unit->unit.text) : std::string_view();
             note_reference_state(target, v.unit != nullptr ? std::string_view(v.unit->unit.text)
