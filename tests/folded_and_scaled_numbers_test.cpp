@@ -1007,3 +1007,16 @@ TEST_CASE("a price per MWh beside one per kWh, with money counted as a pure numb
     fails_with(d, {"C_t = E*c/1000", "C_t = E*c_k"}, plumb::rules::unit_scale);
     passes(d, {"C_t = E*c", "C_t = E*c_k*1000", "C_a = P*8760*c_k"});
 }
+
+// A product after a slash reads left to right, W/m·K as (W/m)·K (NIST SP 811 (2008), 6.1.6,
+// asks for parentheses): where a formula with such a symbol does not balance, the finding says
+// how the unit was read and how to write what handbooks mean by it.
+TEST_CASE("a unit with a product after its slash is named where its formula fails") {
+    const std::string d = "k : W/m·K\nk_2 : W/(m·K)\nq : W/m^2\nΔT : K\nL : m\n";
+    const auto r = run(d, "q = k*ΔT/L");
+    REQUIRE(count_of(r, plumb::rules::side_mismatch) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::side_mismatch),
+                            "reads left to right as (W/m)·K"));
+    CHECK(plumb::test::says(first_under(r, plumb::rules::side_mismatch), "write W/(m·K)"));
+    CHECK(problems_in(run(d, "q = k_2*ΔT/L")) == 0);
+}

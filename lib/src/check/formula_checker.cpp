@@ -889,11 +889,42 @@ class checker {
             !note_constant_for_other_units(d, sides, a))
             note_acceleration_or_density_apart(d, sides, a);
         note_bare_quantity_apart(d, sides, a);
+        note_unit_read_past_a_slash(d);
         if ((symbols_.unit_marks() & mass_fractions) != 0) [[unlikely]]
             note_fraction_beside_concentration(d, sides);
         if ((symbols_.unit_marks() & tons) != 0 && sides.size() == 2 && sides[0].type.known &&
             sides[1].type.known) [[unlikely]]
             note_ton_beside_power(d, sides);
+    }
+
+    // "c_c : $/TR·h", "k : W/m·K": a product after a slash, which reads left to right as
+    // ($/TR)·h (NIST SP 811 (2008), 6.1.6, asks for parentheses); a mismatch in a formula that
+    // uses such a symbol says how it was read.
+    [[gnu::noinline]] void note_unit_read_past_a_slash(diagnostic& d) const {
+        std::string named;
+        visit_nodes([&](const syntax::expr_node& n) {
+            if (n.kind != expr_kind::symbol || !named.empty())
+                return;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e == nullptr)
+                return;
+            const std::string_view unit = e->unit_text;
+            const std::size_t slash = unit.find('/');
+            if (slash == std::string_view::npos || unit.find('(', slash) != std::string_view::npos)
+                return;
+            const std::size_t product = unit.find_first_of("*\xC2 ", slash);
+            if (product == std::string_view::npos ||
+                (unit[product] == '\xC2' && unit.substr(product, 2) != "\u00B7"))
+                return;
+            named =
+                fmt::format("'{}' is declared in {}, which reads left to right as ({})\u00B7{}: "
+                            "if all of it after the slash is below the line, write {}({})",
+                            text(n.range), unit, unit.substr(0, product),
+                            unit.substr(product + (unit[product] == '\xC2' ? 2 : 1)),
+                            unit.substr(0, slash + 1), unit.substr(slash + 1));
+        });
+        if (!named.empty())
+            d.notes.push_back({std::move(named), {}});
     }
 
     // "E_c : ton*h" beside kWh: the short ton where a ton of refrigeration was meant.
@@ -3322,6 +3353,7 @@ class checker {
             if (!note_gravity_in_other_units(d, terms, a) &&
                 !note_constant_for_other_units(d, terms, a))
                 note_acceleration_or_density_apart(d, terms, a);
+            note_unit_read_past_a_slash(d);
             cut_literals_to(literal_base);
             result = unknown_type();
             return result; // every return is of `result`, built in the caller's return object
