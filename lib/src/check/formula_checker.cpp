@@ -94,6 +94,9 @@ constexpr compact_dimension frequency_dim = compact_dimension::whole({0, 0, -1, 
 constexpr compact_dimension velocity_dim = compact_dimension::whole({0, 1, -1, 0, 0, 0, 0});
 constexpr compact_dimension specific_heat_dim = compact_dimension::whole({0, 2, -2, -1, 0, 0, 0});
 constexpr compact_dimension moment_of_inertia_dim = compact_dimension::whole({1, 2, 0, 0, 0, 0, 0});
+constexpr compact_dimension mass_dim = compact_dimension::whole({1, 0, 0, 0, 0, 0, 0});
+constexpr compact_dimension mass_flow_dim = compact_dimension::whole({1, 0, -1, 0, 0, 0, 0});
+constexpr compact_dimension density_dim = compact_dimension::whole({1, -3, 0, 0, 0, 0, 0});
 // A volume flow times a specific energy: cfm·Δh in q = 4.5·cfm·Δh (common practice).
 constexpr compact_dimension volume_flow_enthalpy_dim =
     compact_dimension::whole({0, 5, -3, 0, 0, 0, 0});
@@ -190,34 +193,29 @@ bool stands_for_a_conversion(const scale_literal& l, bool allow_hundred) {
 // ratio by chance, but unmistakable as a conversion of the term's own quantity where its units
 // already agree: "Q_ls = Q*0.0631" with Q in L/s converts gallons that are not there.
 bool is_three_digit_conversion_of(double value, double tolerance, const compact_dimension& d) {
-    static const compact_dimension flow = compact_dimension::whole({0, 3, -1, 0, 0, 0, 0});
-    static const compact_dimension volume = compact_dimension::whole({0, 3, 0, 0, 0, 0, 0});
-    static const compact_dimension power = compact_dimension::whole({1, 2, -3, 0, 0, 0, 0});
-    static const compact_dimension mass = compact_dimension::whole({1, 0, 0, 0, 0, 0, 0});
-    static const compact_dimension mass_flow = compact_dimension::whole({1, 0, -1, 0, 0, 0, 0});
     static const struct {
         double ratio;
         const compact_dimension& dim;
     } conversions[] = {
-        {0.0630901964, flow},         // L/s per gpm
-        {0.2271247, flow},            // m³/h per gpm
-        {0.0689475729, pressure},     // bar per psi
-        {6.89475729, pressure},       // kPa per psi
-        {0.3048, length_dim},         // m per ft
-        {2.54, length_dim},           // cm per in
-        {1.609344, length_dim},       // km per mi
-        {0.09290304, area_dim},       // m² per ft²
-        {3.785411784, volume},        // L per US gal
-        {0.028316846592, volume},     // m³ per ft³
-        {0.745699872, power},         // kW per hp
-        {3.516852842, power},         // kW per ton of refrigeration
-        {0.29307107, power},          // W per Btu/h
-        {0.45359237, mass},           // kg per lb
-        {0.45359237, mass_flow},      // kg/h per lb/h
-        {3.785411784, flow},          // L/min per gpm
-        {0.3048, velocity_dim},       // m/s per ft/s
-        {4.4482216152605, force_dim}, // N per lbf
-        {1.0 / 1.8, temperature},     // K per °F of difference
+        {0.0630901964, volume_flow_dim}, // L/s per gpm
+        {0.2271247, volume_flow_dim},    // m³/h per gpm
+        {0.0689475729, pressure},        // bar per psi
+        {6.89475729, pressure},          // kPa per psi
+        {0.3048, length_dim},            // m per ft
+        {2.54, length_dim},              // cm per in
+        {1.609344, length_dim},          // km per mi
+        {0.09290304, area_dim},          // m² per ft²
+        {3.785411784, volume_dim},       // L per US gal
+        {0.028316846592, volume_dim},    // m³ per ft³
+        {0.745699872, power_dim},        // kW per hp
+        {3.516852842, power_dim},        // kW per ton of refrigeration
+        {0.29307107, power_dim},         // W per Btu/h
+        {0.45359237, mass_dim},          // kg per lb
+        {0.45359237, mass_flow_dim},     // kg/h per lb/h
+        {3.785411784, volume_flow_dim},  // L/min per gpm
+        {0.3048, velocity_dim},          // m/s per ft/s
+        {4.4482216152605, force_dim},    // N per lbf
+        {1.0 / 1.8, temperature},        // K per °F of difference
     };
     // Printed to its digits: within half a unit of the last of them (the literal's tolerance).
     const auto printed = [&](double v) {
@@ -912,16 +910,21 @@ class checker {
             const std::size_t slash = unit.find('/');
             if (slash == std::string_view::npos || unit.find('(', slash) != std::string_view::npos)
                 return;
-            const std::size_t product = unit.find_first_of("*\xC2 ", slash);
-            if (product == std::string_view::npos ||
-                (unit[product] == '\xC2' && unit.substr(product, 2) != "\u00B7"))
+            // The first multiplication after the slash: "*", a space or "·".
+            std::size_t product = std::string_view::npos;
+            std::size_t mark_size = 1;
+            for (const std::string_view mark : {"*", " ", "\u00B7"})
+                if (const std::size_t at = unit.find(mark, slash); at < product) {
+                    product = at;
+                    mark_size = mark.size();
+                }
+            if (product == std::string_view::npos)
                 return;
-            named =
-                fmt::format("'{}' is declared in {}, which reads left to right as ({})\u00B7{}: "
-                            "if all of it after the slash is below the line, write {}({})",
-                            text(n.range), unit, unit.substr(0, product),
-                            unit.substr(product + (unit[product] == '\xC2' ? 2 : 1)),
-                            unit.substr(0, slash + 1), unit.substr(slash + 1));
+            named = fmt::format(
+                "'{}' is declared in {}, which reads left to right as ({})\u00B7{}: "
+                "if all of it after the slash is below the line, write {}({})",
+                text(n.range), unit, unit.substr(0, product), unit.substr(product + mark_size),
+                unit.substr(0, slash + 1), unit.substr(slash + 1));
         });
         if (!named.empty())
             d.notes.push_back({std::move(named), {}});
@@ -1859,18 +1862,24 @@ class checker {
         return dim == energy_dim || dim == power_dim;
     }
 
+    // A symbol or a cell as the rotation rules read it: its name (a cell's address), or none for
+    // the workbook cell written to, and its unit as written.
+    struct rotating_part {
+        std::string_view name;
+        std::string_view unit;
+        // 'n_p', 'C12', or "the cell"
+        [[nodiscard]] std::string shown() const {
+            return name.empty() ? std::string("the cell") : fmt::format("'{}'", name);
+        }
+    };
+
     // "M = 60000*P/n" with M in kN·m, P in kW and n in rpm: revolutions count as cycles, so
     // the units agree without the 2π radians of a revolution that P = 2π·n·M needs (ω = 2π·n),
     // and the torque comes out 2π times too large. Asked only of an equation that relates one
     // torque, one power and one speed in revolutions, with no π or 2π written in it.
     // The same holds where a speed in revolutions meets one in radians ("ω = n/60" with ω in
-    // rad/s) or a moment of inertia in a kinetic energy ("E = 0.5*I*(n/60)^2").
-    // A symbol or a cell as this rule reads it: its name (or address) and its unit as written.
-    struct rotating_part {
-        std::string name; // quoted ('n_p', 'C12'), or "the cell" for the cell written to
-        std::string_view unit;
-    };
-
+    // rad/s) or a moment of inertia in a kinetic energy ("E = 0.5*I*(n/60)^2"), and a speed
+    // along a rim meets one in revolutions and a diameter (v = π·D·n).
     [[gnu::noinline]] void report_revolution_without_two_pi(const syntax::formula& f,
                                                             const compact_dimension& sides_dim) {
         rotating_part torque;
@@ -1888,7 +1897,7 @@ class checker {
         int rim_speeds = 0;
         int lengths = 0;
         int other_numbers = 0; // not powers of ten or 60: π/12, a screw's 2 strokes
-        const auto classify = [&](rotating_part&& part, const compact_dimension& dim,
+        const auto classify = [&](rotating_part part, const compact_dimension& dim,
                                   round_length round) {
             if ((unit_marks_of(part.unit) & counts_revolutions) != 0) {
                 speed = part;
@@ -1957,7 +1966,7 @@ class checker {
                     const symbol_entry* e = symbols_.find(name);
                     if (e == nullptr || !e->compact_dim)
                         return search_step::found;
-                    classify({fmt::format("'{}'", name), e->unit_text}, *e->compact_dim,
+                    classify({name, e->unit_text}, *e->compact_dim,
                              names_a_diameter_or_radius(name, e->description));
                     return search_step::skip;
                 }
@@ -1971,10 +1980,8 @@ class checker {
                     // The cell written to stands first, named by its unit in the tree.
                     const bool written =
                         file_.functions == syntax::function_names::spreadsheet && at == first_root;
-                    classify(
-                        {written ? std::string("the cell") : fmt::format("'{}'", text(n.range)),
-                         r.unit_text},
-                        *dim, r.round);
+                    classify({written ? std::string_view() : text(n.range), r.unit_text}, *dim,
+                             r.round);
                     return search_step::skip;
                 }
                 case expr_kind::call:
@@ -1992,7 +1999,7 @@ class checker {
             });
         if (not_for_this_rule)
             return;
-        if (speeds >= 1 && !partner.name.empty() &&
+        if (speeds >= 1 &&
             (angular_speeds >= 1 || (inertias >= 1 && is_rotating_power_or_torque(sides_dim)))) {
             report_revolutions_beside_radians(f, speed, partner, angular_speeds >= 1);
             return;
@@ -2012,7 +2019,7 @@ class checker {
                                "torque meet through the 2\u03C0 radians of each revolution, P = "
                                "2\u03C0\u00B7n\u00B7M, and this formula has no 2\u03C0, so it is "
                                "off by 6.28319",
-                               torque.name, torque.unit, speed.name, speed.unit),
+                               torque.shown(), torque.unit, speed.shown(), speed.unit),
                    file_.nodes[file_.sides[f.first_side].root].range);
         d.level = severity::warning;
         d.notes.push_back({"revolutions count as cycles: write 2*pi*n for the angular speed "
@@ -2033,14 +2040,10 @@ class checker {
                    fmt::format("{} is a speed in revolutions ({}) and {} a speed along the rim of "
                                "{}: a point on the rim travels {} per revolution, and this formula "
                                "has no π, so it is off by {}",
-                               speed.name, speed.unit, rim.name, length.name,
+                               speed.shown(), speed.unit, rim.shown(), length.shown(),
                                radius ? "2π·r" : "π·D", radius ? "6.28319" : "3.14159"),
                    file_.nodes[file_.sides[f.first_side].root].range);
         d.level = severity::warning;
-        const auto bare = [](const std::string& quoted) {
-            return quoted.size() > 2 && quoted.front() == '\'' ? quoted.substr(1, quoted.size() - 2)
-                                                               : quoted;
-        };
         d.notes.push_back(
             {file_.functions == syntax::function_names::spreadsheet
                  ? fmt::format("put the {} in: multiply by {}PI(), with this formula's unit "
@@ -2048,23 +2051,24 @@ class checker {
                                radius ? "2\u03C0" : "\u03C0", radius ? "2*" : "")
                  : fmt::format("put the {} in: {} = {}*{}*{}, with this formula's unit "
                                "conversions kept beside it (a speed in revolutions counts cycles)",
-                               radius ? "2\u03C0" : "\u03C0", bare(rim.name),
-                               radius ? "2*pi" : "pi", bare(length.name), bare(speed.name)),
+                               radius ? "2\u03C0" : "\u03C0", rim.name, radius ? "2*pi" : "pi",
+                               length.name, speed.name),
              {}});
     }
 
     void report_revolutions_beside_radians(const syntax::formula& f, const rotating_part& speed,
                                            const rotating_part& partner, bool angular) {
         const std::string partner_is =
-            angular ? fmt::format("{} an angular speed in radians ({})", partner.name, partner.unit)
-                    : fmt::format("{} a moment of inertia ({}), whose kinetic energy "
-                                  "\u00BDI\u03C9\u00B2 takes the speed in radians",
-                                  partner.name, partner.unit);
+            angular
+                ? fmt::format("{} an angular speed in radians ({})", partner.shown(), partner.unit)
+                : fmt::format("{} a moment of inertia ({}), whose kinetic energy "
+                              "\u00BDI\u03C9\u00B2 takes the speed in radians",
+                              partner.shown(), partner.unit);
         diagnostic& d =
             report(rules::unit_scale,
                    fmt::format("{} is a speed in revolutions ({}) and {}: a revolution is 2\u03C0 "
                                "radians, and this formula has no 2\u03C0, so it is off by {}",
-                               speed.name, speed.unit, partner_is,
+                               speed.shown(), speed.unit, partner_is,
                                angular ? "6.28319" : "6.28319 for each power of the speed"),
                    file_.nodes[file_.sides[f.first_side].root].range);
         d.level = severity::warning;
@@ -2105,12 +2109,10 @@ class checker {
             {false, 150.0, "lb/ft^3", "concrete's density"},
             {false, 2700.0, "kg/m^3", "aluminium's density"},
         }};
-        static const compact_dimension density(dimension::base(base_dimension::mass) /
-                                               dimension::base(base_dimension::length).pow(3));
         bool time = false;
         try {
             time = *apart == time_dimension() || *apart == time_dimension().pow(-1);
-            if (!time && !(*apart == density) && !(*apart == density.pow(-1)))
+            if (!time && !(*apart == density_dim) && !(*apart == density_dim.pow(-1)))
                 return;
         } catch (const std::exception&) {
             return;
@@ -2159,7 +2161,6 @@ class checker {
         const std::optional<compact_dimension> apart = odd_one_apart(ops, a);
         if (!apart)
             return;
-        static const compact_dimension density = compact_dimension::whole({1, -3, 0, 0, 0, 0, 0});
         try {
             const std::string odd = quote(ops[a.odd.front()].node);
             if (*apart == acceleration_dimension() || *apart == acceleration_dimension().pow(-1))
@@ -2172,7 +2173,7 @@ class checker {
                      {}});
             // Not a fraction against a concentration (ppm against mg/L or mg/Nm³), which has
             // notes of its own.
-            else if ((*apart == density || *apart == density.pow(-1)) &&
+            else if ((*apart == density_dim || *apart == density_dim.pow(-1)) &&
                      std::none_of(ops.begin(), ops.end(), [](const operand& op) {
                          return op.type.known && op.type.dim.is_dimensionless();
                      }))
@@ -2181,7 +2182,7 @@ class checker {
                                  "against a volume): {} From a specific gravity, the density is "
                                  "SG times water's",
                                  odd,
-                                 *apart == density
+                                 *apart == density_dim
                                      ? "times a density it would match; is one missing (m = ρ*V)?"
                                      : "divided by a density it would match; is one missing "
                                        "from its denominator (V = m/ρ)?"),
@@ -2872,23 +2873,18 @@ class checker {
             // "W_kip = 2.2046*m_t": g and kN per kip in one number; {g_n} alone would drop
             // the conversion, which the advice keeps.
             const carried_quantity& q = *reading.quantity;
-            const std::string_view advice = q.advice_in_notation;
-            const std::size_t named_at = advice.find("write ");
-            const std::size_t named_end = advice.find(" instead");
-            if (!reading.reciprocal && q.least == q.greatest && q.least > 0 &&
-                std::abs(reading.stands_for / q.least - 1.0) > 1e-3 && named_at == 0 &&
-                named_end != std::string_view::npos) [[unlikely]]
+            if (!reading.reciprocal && !q.named.empty() && q.least > 0 &&
+                std::abs(reading.stands_for / q.least - 1.0) > 1e-3) [[unlikely]] {
+                const std::string conversion = format_factor(reading.stands_for / q.least);
                 d.notes.push_back(
                     {fmt::format("{} holds a conversion between the units around it as well "
                                  "({} times {}): write {}*{} instead to say so, or declare the "
                                  "symbols in coherent units",
-                                 written, advice.substr(6, named_end - 6),
-                                 format_factor(reading.stands_for / q.least),
-                                 advice.substr(6, named_end - 6),
-                                 format_factor(reading.stands_for / q.least)),
+                                 written, q.named, conversion, q.named, conversion),
                      {}});
-            else
-                d.notes.push_back({std::string(advice), {}});
+            } else {
+                d.notes.push_back({std::string(q.advice_in_notation), {}});
+            }
             if (is_water_density_or_weight(*reading.quantity)) [[unlikely]]
                 report_specific_gravity_against_water(operands_[base + readings[r].operand],
                                                       reading, multiplies, written);
@@ -4790,10 +4786,6 @@ class checker {
             std::span<const scale_literal>(literals_.data() + t.literal_begin, t.literal_count)};
     }
 
-    // The route below for "A = π*D^2/4": every operand in one unit (as reconcile() finds at
-    // its first step, without its search) and no number that looks like a conversion (which
-    // report_unneeded_factor() would name). True, with `unit` as that route sets it, exactly
-    // where that route would return true without a finding; false leaves it to that route.
     // A number that stands for a conversion, or a trade's conversion to three digits of the
     // term's own quantity (is_three_digit_conversion_of).
     bool converts_in_term(const scale_literal& l, const typed_term& term,
@@ -4804,6 +4796,10 @@ class checker {
                 is_three_digit_conversion_of(l.value, l.tolerance, term.dim));
     }
 
+    // The route below for "A = π*D^2/4": every operand in one unit (as reconcile() finds at
+    // its first step, without its search) and no number that looks like a conversion (which
+    // report_unneeded_factor() would name). True, with `unit` as that route sets it, exactly
+    // where that route would return true without a finding; false leaves it to that route.
     bool units_agree_with_plain_numbers(std::span<const operand> ops, double& unit) const {
         static const rational one(1);
         const typed_term* first = nullptr;

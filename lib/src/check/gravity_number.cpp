@@ -73,12 +73,13 @@ const std::array<carried_quantity, 18>& quantities() {
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
              "write 9.80665 or a cell that holds g with its unit to say so", acceleration,
-             standard_gravity, standard_gravity},
+             standard_gravity, standard_gravity, carried_quantity::term_kind::any, "{g_n}"},
             // The braking distance d = V²/(254*(f + G)) in m from km/h (254 = 2·g·3.6²) and
             // V²/(30*(f + G)) in ft from mph (AASHTO, from memory): twice g, the 2g of v²/(2g).
             {rules::gravity_number, "twice standard gravity", "2\u00B7g_n", "1/(2\u00B7g_n)", "",
              "write 2*{g_n} instead to say so", "write 2*9.80665 or a cell that holds g to say so",
-             acceleration, 2.0 * standard_gravity, 2.0 * standard_gravity},
+             acceleration, 2.0 * standard_gravity, 2.0 * standard_gravity,
+             carried_quantity::term_kind::any, "2*{g_n}"},
             {rules::gravity_number, "the specific weight of water", "\u03B3_w = \u03C1_w\u00B7g_n",
              "1/\u03B3_w",
              " (water between 0 and 30 \u00B0C, \u03C1_w from 995.65 to 999.975 kg/m\u00B3)",
@@ -171,7 +172,7 @@ const std::array<carried_quantity, 18>& quantities() {
              "1/R", "", "write {R} instead to say so",
              "write R in a cell that holds its unit to say so",
              mass * length * length / (time * time) / amount / temperature, 8.314462618,
-             8.314462618},
+             8.314462618, carried_quantity::term_kind::any, "{R}"},
             // Dry air's molar mass: 28.96442 g/mol in ISO 2533 (from memory), 28.9647 in
             // common practice, 28.97 as most handbooks round it: a gas's molar mass as 28.97
             // times its specific gravity.

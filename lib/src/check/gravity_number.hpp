@@ -36,6 +36,9 @@ struct carried_quantity {
     // and per-mph² constants, whose values would otherwise fit too many other numbers.
     enum class term_kind : std::uint8_t { any, volume_flow, velocity_squared };
     term_kind only_in = term_kind::any;
+    // The named constant that writes it in the notation ("{g_n}", "2*{g_n}", "{R}"), where one
+    // does: a number that holds it and a conversion is advised as this times the conversion.
+    std::string_view named = {};
 };
 
 struct gravity_reading {
