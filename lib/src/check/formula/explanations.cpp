@@ -1,0 +1,455 @@
+// The notes that explain a mismatch: the term that is apart, and what it lacks (a g, a
+// density, a fraction's 100, an atmosphere in other units).
+#include "check/formula/checker.hpp"
+
+namespace plumb::formula_check {
+
+// "E_a = P*8760" with E_a in kWh, "m = V*7850" with m in kg: the sides differ by exactly a
+// time or a density, and a number in the formula is one the trades write for it. It
+// carries no unit, so the formula needs one given.
+void checker::note_bare_quantity_apart(diagnostic& d, std::span<const operand> ops,
+                                       const agreement& a) const {
+    const std::optional<compact_dimension> apart = odd_one_apart(ops, a);
+    if (!apart)
+        return;
+    struct bare_quantity {
+        bool time; // else a density
+        double value;
+        const char* unit;
+        const char* meaning;
+    };
+    // NIST SP 811 (2008), B.8: 1 d = 24 h = 1440 min = 86 400 s, 1 h = 3600 s; a year of
+    // 365 d is 8760 h, a week 168 h. Densities: carbon steel 7850 kg/m³ (490 lb/ft³),
+    // normal-weight concrete 2400 kg/m³ (150 lb/ft³), aluminium 2700 kg/m³ (common
+    // practice; from memory).
+    static constexpr std::array<bare_quantity, 12> quantities{{
+        {true, 8760.0, "h", "the hours in a year"},
+        {true, 365.0, "d", "the days in a year"},
+        {true, 168.0, "h", "the hours in a week"},
+        {true, 24.0, "h", "the hours in a day"},
+        {true, 1440.0, "min", "the minutes in a day"},
+        {true, 3600.0, "s", "the seconds in an hour"},
+        {true, 86400.0, "s", "the seconds in a day"},
+        {false, 7850.0, "kg/m^3", "steel's density"},
+        {false, 490.0, "lb/ft^3", "steel's density"},
+        {false, 2400.0, "kg/m^3", "concrete's density"},
+        {false, 150.0, "lb/ft^3", "concrete's density"},
+        {false, 2700.0, "kg/m^3", "aluminium's density"},
+    }};
+    bool time = false;
+    try {
+        time = *apart == time_dimension() || *apart == time_dimension().pow(-1);
+        if (!time && !(*apart == density_dim) && !(*apart == density_dim.pow(-1)))
+            return;
+    } catch (const std::exception&) {
+        return;
+    }
+    for (const operand& op : ops)
+        for (std::uint32_t i = 0; i < op.type.literal_count; ++i) {
+            const scale_literal& l = literals_[op.type.literal_begin + i];
+            if (file_.nodes[l.node].kind != expr_kind::number)
+                continue;
+            for (const bare_quantity& q : quantities)
+                if (q.time == time && l.value == q.value) {
+                    const std::string_view written = text(file_.nodes[l.node].range);
+                    d.notes.push_back(
+                        {fmt::format("the sides differ by exactly a {}, and {} reads as {}: "
+                                     "a number carries no unit, so write it with its own, "
+                                     "{} {{{}}}",
+                                     time ? "time" : "density", written, q.meaning, written,
+                                     q.unit),
+                         {}});
+                    return;
+                }
+        }
+}
+
+// What the first odd operand lacks against the others' dimension (their quotient), in a
+// mismatch of a formula's size; nothing where it is not known.
+std::optional<compact_dimension> checker::odd_one_apart(std::span<const operand> ops,
+                                                        const agreement& a) const {
+    if (!a.reference || ops.size() > notes_for_terms_up_to || a.odd.empty() ||
+        !ops[a.odd.front()].type.known)
+        return std::nullopt;
+    try {
+        return *a.reference / ops[a.odd.front()].type.dim;
+    } catch (const std::exception&) {
+        return std::nullopt;
+    }
+}
+
+// "p = ρ*h", "H = p/ρ": the odd term differs from the others by exactly an acceleration,
+// the most common slip of all, a missing (or doubled) g. Said outright, since the two
+// dimensions alone ("momentum", "areal density") do not point at it.
+// "is a g missing?", "is a density missing?": the two factors engineers leave out most, and
+// the only ones a side can differ by exactly and be named for.
+void checker::note_acceleration_or_density_apart(diagnostic& d, std::span<const operand> ops,
+                                                 const agreement& a) const {
+    const std::optional<compact_dimension> apart = odd_one_apart(ops, a);
+    if (!apart)
+        return;
+    try {
+        const std::string odd = quote(ops[a.odd.front()].node);
+        if (*apart == acceleration_dimension() || *apart == acceleration_dimension().pow(-1))
+            d.notes.push_back(
+                {fmt::format("{} differs from the rest by exactly an acceleration: {}", odd,
+                             *apart == acceleration_dimension()
+                                 ? "times g it would match; is a g missing from it (ρ*g*h)?"
+                                 : "divided by g it would match; is a g missing from its "
+                                   "denominator (p/(ρ*g)), or is one there too many?"),
+                 {}});
+        // Not a fraction against a concentration (ppm against mg/L or mg/Nm³), which has
+        // notes of its own.
+        else if ((*apart == density_dim || *apart == density_dim.pow(-1)) &&
+                 std::none_of(ops.begin(), ops.end(), [](const operand& op) {
+                     return op.type.known && op.type.dim.is_dimensionless();
+                 }))
+            d.notes.push_back(
+                {fmt::format("{} differs from the rest by exactly a density (a mass "
+                             "against a volume): {} From a specific gravity, the density is "
+                             "SG times water's",
+                             odd,
+                             *apart == density_dim
+                                 ? "times a density it would match; is one missing (m = ρ*V)?"
+                                 : "divided by a density it would match; is one missing "
+                                   "from its denominator (V = m/ρ)?"),
+                 {}});
+    } catch (const std::exception&) {
+    }
+}
+
+// The first term of the reference's dimension that is plainly in its unit: no numbers.
+const operand* checker::plain_reference_term(std::span<const operand> ops,
+                                             const agreement& a) const {
+    if (!a.reference || ops.size() > notes_for_terms_up_to)
+        return nullptr;
+    for (std::size_t i = 0; i < ops.size(); ++i) {
+        const typed_term& t = ops[i].type;
+        if (std::find(a.odd.begin(), a.odd.end(), i) == a.odd.end() && t.known && !t.zero &&
+            !t.numeric && t.dim == *a.reference && t.literal_count == 0 && std::isfinite(t.scale) &&
+            t.scale > 0)
+            return &ops[i];
+    }
+    return nullptr;
+}
+
+// A symbol, a cell, or a sum or difference of two symbols in one unit ("(h_o + z_b)" in ft,
+// "(t_s - t_o)" in °C, a difference of kelvin size), with the unit it is declared in. Asked
+// only of a term with no offset, where every reading in it is a difference.
+std::optional<declared_factor> checker::declared_factor_of(std::uint32_t k, double exponent) const {
+    const syntax::expr_node& n = file_.nodes[k];
+    if (n.kind == expr_kind::subtract || n.kind == expr_kind::add) {
+        const syntax::expr_node& l = file_.nodes[syntax::inside_brackets(file_, n.lhs)];
+        const syntax::expr_node& r = file_.nodes[syntax::inside_brackets(file_, n.rhs)];
+        if (l.kind != expr_kind::symbol || r.kind != expr_kind::symbol)
+            return std::nullopt;
+        const symbol_entry* a = symbols_.find(text(l.range));
+        const symbol_entry* b = symbols_.find(text(r.range));
+        if (a == nullptr || b == nullptr || !a->compact_dim || a->unit_text != b->unit_text)
+            return std::nullopt;
+        return declared_factor{*a->compact_dim, a->si_factor, exponent, a->unit_text};
+    }
+    if (n.kind == expr_kind::symbol) {
+        const symbol_entry* e = symbols_.find(text(n.range));
+        // In a term with no offset a symbol in °C is a difference, of kelvin size.
+        if (e == nullptr || !e->compact_dim)
+            return std::nullopt;
+        return declared_factor{*e->compact_dim, e->si_factor, exponent, e->unit_text};
+    }
+    if (n.kind == expr_kind::reference) {
+        const syntax::reference_value& cell = file_.references[n.lhs];
+        if (!cell.dim || cell.offset != nullptr)
+            return std::nullopt;
+        const auto dim = compact_dimension::fitted(*cell.dim);
+        if (!dim)
+            return std::nullopt;
+        return declared_factor{*dim, cell.scale, exponent, {}};
+    }
+    return std::nullopt;
+}
+
+// A trade's constant typed for one unit system beside a symbol declared in the other's
+// (check/constant_in_other_units.hpp). In "0.433*h_m + p_psi" the term with the number is
+// the majority's, so every term with numbers is tried against the first plain term of
+// another dimension.
+bool checker::note_constant_for_other_units(diagnostic& d, std::span<const operand> ops,
+                                            const agreement& a) {
+    if (!a.reference || ops.size() > notes_for_terms_up_to)
+        return false;
+    for (std::size_t i = 0; i < ops.size(); ++i) {
+        const typed_term& t = ops[i].type;
+        std::array<std::string_view, 8> texts{};
+        if (!t.known || t.numeric || t.offset != nullptr || t.literal_count == 0 ||
+            t.literal_count > texts.size() || !std::isfinite(t.scale) || !(t.scale > 0))
+            continue;
+        const auto plain = std::find_if(ops.begin(), ops.end(), [&](const operand& o) {
+            return o.type.known && !o.type.zero && !o.type.numeric && o.type.literal_count == 0 &&
+                   o.type.offset == nullptr && std::isfinite(o.type.scale) && o.type.scale > 0 &&
+                   !(o.type.dim == t.dim);
+        });
+        if (plain == ops.end())
+            continue;
+        const operand* reference = &*plain;
+        dimension lacking;
+        try {
+            lacking = (reference->type.dim / t.dim).expand();
+        } catch (const std::exception&) {
+            continue;
+        }
+        const std::span<const scale_literal> numbers(literals_.data() + t.literal_begin,
+                                                     t.literal_count);
+        // The cheap test first: most mismatches hold no number a quantity could be.
+        if (!numbers_could_carry(numbers, lacking, texts))
+            continue;
+        std::array<declared_factor, 8> factors{};
+        std::array<std::uint32_t, 8> factor_nodes{};
+        std::size_t factor_count = 0;
+        // Every factor but the numbers must be one the search can weigh: a factor it
+        // cannot (a function's value, a sum) might hold the unit that is off, and a
+        // reading that passed it by would name the wrong symbol.
+        bool unweighed = false;
+        for_each_factor(ops[i].node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number || n.kind == expr_kind::pi)
+                return false;
+            std::uint32_t base = at;
+            double exponent = sign;
+            if (n.kind == expr_kind::power) {
+                base = syntax::inside_brackets(file_, n.lhs);
+                if (file_.nodes[n.rhs].kind != expr_kind::number)
+                    return unweighed = true;
+                exponent = sign * written_number(file_.nodes[n.rhs].range);
+            }
+            const std::optional<declared_factor> factor = declared_factor_of(base, exponent);
+            if (!factor)
+                return unweighed = true;
+            factor_nodes[factor_count] = base;
+            factors[factor_count++] = *factor;
+            return unweighed = factor_count == factors.size();
+        });
+        if (unweighed)
+            continue;
+        // "u_psi = 62.4*h_ft": the number fits where the result's unit is the other one.
+        if (factor_count < factors.size()) {
+            const std::uint32_t plain_node = syntax::inside_brackets(file_, reference->node);
+            if (const auto factor = declared_factor_of(plain_node, -1.0)) {
+                factor_nodes[factor_count] = plain_node;
+                factors[factor_count++] = *factor;
+            }
+        }
+        const auto found = read_constant_in_other_units(t.scale, reference->type.scale, numbers,
+                                                        {texts.data(), numbers.size()}, lacking,
+                                                        kind_of(t), {factors.data(), factor_count});
+        if (!found)
+            continue;
+        d.notes.push_back(
+            {constant_in_other_units_message(
+                 quote(numbers[found->reading.literal].node),
+                 fmt::format("'{}'", display_text(file_.nodes[factor_nodes[found->factor]].range)),
+                 *found),
+             {}});
+        return true;
+    }
+    return false;
+}
+
+// "u = 9.81*z_ft": standard gravity written for metres and seconds in a term whose units are
+// feet (or 32.2 beside metres). The dimensions show a missing acceleration, but the
+// acceleration is there: the slip is the units around it, which this note names.
+bool checker::note_gravity_in_other_units(diagnostic& d, std::span<const operand> ops,
+                                          const agreement& a) {
+    const operand* reference = plain_reference_term(ops, a);
+    if (reference == nullptr)
+        return false;
+    const double reference_scale = reference->type.scale;
+    struct gravity_unit {
+        const char* name;
+        const char* system;
+        double metres; // NIST SP 811 (2008), B.8: 1 ft = 0.3048 m exactly
+    };
+    static constexpr std::array<gravity_unit, 2> units{
+        {{"m/s\u00B2", "metres", 1.0}, {"ft/s\u00B2", "feet", 0.3048}}};
+    constexpr double standard_gravity = 9.80665; // SI Brochure 9th ed., Table 8 (g_n)
+    for (const std::size_t i : a.odd) {
+        const typed_term& t = ops[i].type;
+        if (!t.known || t.numeric || t.literal_count == 0 || !std::isfinite(t.scale))
+            continue;
+        try {
+            if (!(*a.reference / t.dim == acceleration_dimension()))
+                continue;
+        } catch (const std::exception&) {
+            continue;
+        }
+        for (std::uint32_t k = 0; k < t.literal_count; ++k) {
+            const scale_literal& l = literals_[t.literal_begin + k];
+            if (l.exponent != 1.0)
+                continue;
+            const std::string written = display_text(file_.nodes[l.node].range);
+            for (const gravity_unit& u : units) {
+                const double g = standard_gravity / u.metres;
+                if (std::abs(l.value - g) > half_unit_in_last_digit(written) * (1.0 + 1e-9) ||
+                    std::abs(l.value / g - 1.0) > 0.005)
+                    continue;
+                // As the unit-scale findings count it: the value as written over the value
+                // in the reference's unit.
+                const double ratio = reference_scale / (u.metres * t.scale);
+                if (std::abs(ratio - 1.0) < 0.01)
+                    continue;
+                d.notes.push_back(
+                    {fmt::format("{} is standard gravity in {}, but the other units of {} are "
+                                 "not all {} and seconds: read so, it counts {:.6g} times as "
+                                 "much as {}; write gravity in the units around it, or "
+                                 "convert them first",
+                                 written, u.name, quote(ops[i].node), u.system, ratio,
+                                 quote(reference->node)),
+                     {}});
+                return true;
+            }
+        }
+    }
+    return false;
+}
+
+// "Cl_ppm = Cl_mgL": ppm by mass is a fraction, mg/L a mass per volume; in dilute water the
+// trades take them as equal (common practice), the water's density, 1 kg/L, between them.
+// The sides differ in dimension by exactly a density: say so, and how to write it.
+void checker::note_fraction_beside_concentration(diagnostic& d, std::span<const operand> sides) {
+    constexpr compact_dimension density = compact_dimension::whole({1, -3, 0, 0, 0, 0, 0});
+    if (sides.size() != 2 || !sides[0].type.known || !sides[1].type.known)
+        return;
+    try {
+        const dimension apart = (sides[0].type.dim / sides[1].type.dim).expand();
+        const auto fitted = compact_dimension::fitted(apart);
+        if (!fitted || !(*fitted == density || *fitted == compact_dimension{} / density))
+            return;
+    } catch (const std::exception&) {
+        return;
+    }
+    if (!holds_symbol_in_unit(sides[0].node, {"ppm", "ppb"}) &&
+        !holds_symbol_in_unit(sides[1].node, {"ppm", "ppb"}))
+        return;
+    // Per litre of water, not mg/Nm³ of a flue gas (where ppm is by volume).
+    if (!holds_symbol_in_unit(sides[0].node, {"/L", "/l"}) &&
+        !holds_symbol_in_unit(sides[1].node, {"/L", "/l"}))
+        return;
+    d.notes.push_back({"ppm and ppb by mass are fractions, mg/L a mass per volume: in dilute "
+                       "water 1 mg/L is taken as 1 ppm, the water's density (1 kg/L) between "
+                       "them; write it (ρ_w : kg/L = 1) on the side in mg/L to say so",
+                       {}});
+}
+
+// "V <= 7.5": a limit typed as a bare number has no unit; say how to give it one, in the
+// unit of the other side when that side is one symbol declared by unit.
+void checker::note_bare_number_side(diagnostic& d, std::span<const operand> sides) const {
+    if (sides.size() != 2)
+        return;
+    for (std::size_t i = 0; i < 2; ++i) {
+        const syntax::expr_node& bare = file_.nodes[sides[i].node];
+        const syntax::expr_node& other = file_.nodes[sides[1 - i].node];
+        if (bare.kind != syntax::expr_kind::number || !sides[1 - i].type.known)
+            continue;
+        std::string unit = "<unit>";
+        if (other.kind == syntax::expr_kind::symbol)
+            if (const symbol_entry* e = symbols_.find(text(other.range));
+                e != nullptr && !e->unit_text.empty())
+                unit = std::string(e->unit_text);
+        d.notes.push_back({fmt::format("a bare number has no unit; give it the other side's, "
+                                       "as in {} {{{}}}",
+                                       display_text(bare.range), unit),
+                           {}});
+        return;
+    }
+    // "TDS = 0.7*κ": a number times one symbol, where the number is an empirical factor
+    // with units of its own (ppm per µS/cm).
+    for (std::size_t i = 0; i < 2; ++i) {
+        const syntax::expr_node& product = file_.nodes[sides[i].node];
+        if (product.kind != syntax::expr_kind::multiply &&
+            product.kind != syntax::expr_kind::divide)
+            continue;
+        const syntax::expr_node& left = file_.nodes[product.lhs];
+        const syntax::expr_node& right = file_.nodes[product.rhs];
+        const bool number_left =
+            left.kind == syntax::expr_kind::number && right.kind == syntax::expr_kind::symbol;
+        const bool number_right =
+            right.kind == syntax::expr_kind::number && left.kind == syntax::expr_kind::symbol;
+        if (!number_left && !number_right)
+            continue;
+        const std::string number = display_text((number_left ? left : right).range);
+        d.notes.push_back({fmt::format("if {} is an empirical factor that carries units of "
+                                       "its own, write it as {}? for plumb to work out its "
+                                       "dimension, and state it once reviewed ({}?[...])",
+                                       number, number, number),
+                           {}});
+        return;
+    }
+}
+
+// The term, and the units of the symbols in it, which say where a factor comes from.
+void checker::add_term_and_units(diagnostic& d, const operand& op) const {
+    add_term(d, op);
+    const std::string units = units_in(op.node);
+    if (!units.empty())
+        d.notes.push_back({units, {}});
+}
+
+void checker::add_term(diagnostic& d, const operand& op, bool differs) const {
+    d.terms.push_back({{file_.source, file_.nodes[op.node].range},
+                       display_text(file_.nodes[op.node].range),
+                       op.type.dim.expand(),
+                       differs});
+}
+
+// Notes for operands that disagree: each odd one with its dimension, then the rest.
+void checker::explain(diagnostic& d, std::span<const operand> ops, const agreement& a,
+                      std::string_view others) const {
+    // A sum of thousands of terms must not bury the finding (or slow the renderers):
+    // the odd ones are all named, the agreeing ones up to a handful.
+    constexpr std::size_t max_listed = 8;
+    constexpr std::size_t max_odd = 32;
+    for (std::size_t k = 0; k < a.odd.size() && k < max_odd; ++k) {
+        add_term(d, ops[a.odd[k]], true);
+        d.notes.push_back(
+            {fmt::format("{} is {}", quote(ops[a.odd[k]].node), describe(ops[a.odd[k]].type.dim)),
+             {},
+             true});
+    }
+    if (a.odd.size() > max_odd)
+        d.notes.push_back({fmt::format("and {} more that differ", a.odd.size() - max_odd), {}});
+    std::vector<bool> is_odd(ops.size(), false);
+    for (const std::size_t k : a.odd)
+        is_odd[k] = true;
+    std::vector<std::size_t> agreeing_index;
+    for (std::size_t i = 0; i < ops.size(); ++i)
+        if (ops[i].type.known && !ops[i].type.zero && !is_odd[i])
+            agreeing_index.push_back(i);
+    const std::size_t agreeing_count = agreeing_index.size();
+    if (agreeing_count > max_listed) {
+        // Keep the ones nearest the first odd term: they are what the reader sees beside it.
+        const std::size_t odd = a.odd.front();
+        std::stable_sort(agreeing_index.begin(), agreeing_index.end(),
+                         [odd](std::size_t x, std::size_t y) {
+                             return (x > odd ? x - odd : odd - x) < (y > odd ? y - odd : odd - y);
+                         });
+        agreeing_index.resize(max_listed);
+        std::sort(agreeing_index.begin(), agreeing_index.end());
+    }
+    std::vector<std::string> agreeing;
+    for (std::size_t i : agreeing_index) {
+        add_term(d, ops[i]);
+        agreeing.push_back(quote(ops[i].node));
+    }
+    if (agreeing_count > max_listed)
+        agreeing.push_back(fmt::format("and {} more", agreeing_count - max_listed));
+    // With more than are listed, the note's count is news the terms do not carry.
+    const bool restates = agreeing_count <= max_listed;
+    if (agreeing_count == 1)
+        d.notes.push_back(
+            {fmt::format("{} is {}", agreeing.front(), describe(*a.reference)), {}, restates});
+    else if (agreeing_count > 1)
+        d.notes.push_back({fmt::format("the other {} are {}: {}", others, describe(*a.reference),
+                                       fmt::join(agreeing, ", ")),
+                           {},
+                           restates});
+}
+
+} // namespace plumb::formula_check

@@ -1,0 +1,513 @@
+// Products that hold readings: a product multiplied out to name its readings, a percentage
+// divided by 100, empirical fits written on a scale (a number over a sum of readings, a
+// winding's inferred zero of resistance) and specific enthalpies reckoned from 0 °C.
+#include "check/formula/checker.hpp"
+
+namespace plumb::formula_check {
+
+// The node multiplied out into numbers times declared symbols, or nothing where it holds
+// anything else (a call, a power, a difference) or grows past a formula's size.
+bool checker::expand(std::uint32_t i, expansion& out) const {
+    const syntax::expr_node& n = file_.nodes[i];
+    switch (n.kind) {
+    case expr_kind::group:
+        return expand(n.lhs, out);
+    case expr_kind::number: {
+        const std::optional<rational> v = rational::parse(text(n.range));
+        if (!v)
+            return false;
+        out.push_back({v->to_double(), {}, 0});
+        return true;
+    }
+    case expr_kind::symbol:
+        if (symbols_.find(text(n.range)) == nullptr)
+            return false;
+        out.push_back({1.0, {i}, 1});
+        return true;
+    case expr_kind::reference: // a workbook's cell, as a symbol is
+        if (!file_.references[n.lhs].dim)
+            return false;
+        out.push_back({1.0, {i}, 1});
+        return true;
+    case expr_kind::add: {
+        if (!expand(n.lhs, out) || !expand(n.rhs, out))
+            return false;
+        return out.size() <= most_expanded_terms;
+    }
+    case expr_kind::subtract:
+    case expr_kind::negate: {
+        const std::size_t first = out.size();
+        if (n.kind == expr_kind::subtract && !expand(n.lhs, out))
+            return false;
+        const std::size_t negated = out.size();
+        if (!expand(n.kind == expr_kind::subtract ? n.rhs : n.lhs, out))
+            return false;
+        for (std::size_t k = n.kind == expr_kind::subtract ? negated : first; k < out.size(); ++k)
+            out[k].coefficient = -out[k].coefficient;
+        return out.size() <= most_expanded_terms;
+    }
+    case expr_kind::divide: {
+        // By a number only (x/100): a weight written as a percentage.
+        const syntax::expr_node& d = file_.nodes[syntax::inside_brackets(file_, n.rhs)];
+        const std::optional<rational> v =
+            d.kind == expr_kind::number ? rational::parse(text(d.range)) : std::nullopt;
+        const std::size_t first = out.size();
+        if (!v || v->is_zero() || !expand(n.lhs, out))
+            return false;
+        for (std::size_t k = first; k < out.size(); ++k)
+            out[k].coefficient /= v->to_double();
+        return true;
+    }
+    case expr_kind::multiply: {
+        expansion left;
+        expansion right;
+        if (!expand(n.lhs, left) || !expand(n.rhs, right) ||
+            left.size() * right.size() > most_expanded_terms)
+            return false;
+        for (const auto& a : left)
+            for (const auto& b : right) {
+                if (a.count + b.count > a.symbols.size())
+                    return false;
+                expanded_term t = a;
+                t.coefficient *= b.coefficient;
+                for (std::size_t k = 0; k < b.count; ++k)
+                    t.symbols[t.count++] = b.symbols[k];
+                out.push_back(t);
+            }
+        return out.size() <= most_expanded_terms;
+    }
+    default:
+        return false;
+    }
+}
+
+// An expanded term's few names in order: an insertion sort (std::sort's bounds puzzle GCC
+// here).
+void checker::sort_names(std::array<std::string_view, 6>& names, std::size_t size) {
+    for (std::size_t a = 1; a < size && a < names.size(); ++a)
+        for (std::size_t b = a; b > 0 && names[b] < names[b - 1]; --b)
+            std::swap(names[b], names[b - 1]);
+}
+
+// The type of a factor of an expanded term: a declared symbol or a workbook's cell.
+typed_term checker::expanded_factor_type(const syntax::expr_node& factor) {
+    return factor.kind == expr_kind::reference ? eval_reference(factor) : eval_symbol(factor);
+}
+
+// Whether a reading joins those of a mean so far, on the same scale and unit; the first
+// one sets them.
+bool checker::joins_readings(std::optional<typed_term>& readings, const typed_term& s) {
+    if (!readings) {
+        readings = s;
+        return true;
+    }
+    return s.offset == readings->offset && s.scale == readings->scale && s.dim == readings->dim;
+}
+
+// "(q_h*T_h + q_c*T_c)/(q_h + q_c)", "(0.22*(T_a*W_a + T_c*W_c) + T_w*W_w)/(0.22*(W_a +
+// W_c) + W_w)": readings on one offset scale, each times a weight, over the sum of the
+// same weights, are their weighted mean, a reading on that scale whatever the scale's zero
+// (mixing and blending; the fresh-concrete temperature; common practice). Only where
+// every factor is a number or a declared symbol, so that nothing is reported twice.
+// A reading moved to a scale's zero with its degrees not yet converted: T_F - 32 is on
+// the °C scale only once divided by 1.8.
+bool checker::half_converted(const typed_term& t) {
+    return t.known && t.offset != nullptr && t.offset->scale == unit_scale::offset &&
+           t.dim == temperature_dimension() && std::isfinite(t.scale) &&
+           std::abs(t.scale / t.offset->factor - 1.0) > 1e-6;
+}
+
+// True where the factor, made in `evaluated`, was read as a rise (the product so far may
+// have been instead).
+bool checker::settle_half_conversion(typed_term& result, const typed_term* factor,
+                                     std::byte* evaluated) {
+    if (half_converted(result) && factor->known && !factor->numeric)
+        read_as_rise(result);
+    if (factor != reinterpret_cast<const typed_term*>(evaluated) || !half_converted(*factor) ||
+        !result.known || result.numeric)
+        return false;
+    read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
+    return true;
+}
+
+// "(235 + θ_1)": a °C reading plus a conductor's inferred zero of resistance, 234.5 or 235
+// for copper and 225 or 228 for aluminium (IEC 60034-1 and IEEE 112, from memory).
+bool checker::from_inferred_zero_of_resistance(std::uint32_t node) const {
+    node = syntax::inside_brackets(file_, node);
+    const syntax::expr_node& n = file_.nodes[node];
+    if (n.kind != expr_kind::add)
+        return false;
+    const std::uint32_t number = file_.nodes[n.lhs].kind == expr_kind::number ? n.lhs : n.rhs;
+    const std::uint32_t reading = number == n.lhs ? n.rhs : n.lhs;
+    if (file_.nodes[number].kind != expr_kind::number ||
+        file_.nodes[reading].kind != expr_kind::symbol)
+        return false;
+    const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
+    if (e == nullptr || e->offset_unit == nullptr || e->offset_unit->symbol != "\u00B0C")
+        return false;
+    const std::string_view written = text(file_.nodes[number].range);
+    return written == "234.5" || written == "235" || written == "225" || written == "228";
+}
+
+bool checker::number_beside_one_cell(std::uint32_t node) const {
+    node = syntax::inside_brackets(file_, node);
+    const syntax::expr_node& n = file_.nodes[node];
+    if (n.kind != expr_kind::divide)
+        return false;
+    const expr_kind a = file_.nodes[n.lhs].kind;
+    const expr_kind b = file_.nodes[n.rhs].kind;
+    const std::uint32_t number = a == expr_kind::number ? n.lhs : n.rhs;
+    if (!((a == expr_kind::number && b == expr_kind::reference) ||
+          (a == expr_kind::reference && b == expr_kind::number)))
+        return false;
+    // (Q/1000)^1.852 in Hazen-Williams with Q in L/s: a power of ten from a hundred up
+    // converts the cell's unit; it is no reference value (a wind profile's 10 m is).
+    const double v = written_number(file_.nodes[number].range);
+    const double decade = std::round(std::log10(v));
+    return !(v >= 100.0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12);
+}
+
+// "21/(21 - O2)" with O2 in %, the excess-air ratio from the flue gas's oxygen (common
+// practice): the number over the sum that reads it in the sum's unit is in that unit too.
+// "1 - O2/21" with O2 in % (CO2 = CO2_max·(1 - O2/21), common practice): 21 is oxygen's
+// share of dry air in %, so the quotient is a ratio of two percentages. And a number over
+// a sum in % that the sum starts with ("21/(21 - O2)") is in % too, as is one among the
+// product's factors (see carries_number_of_sum).
+void checker::settle_percent_divisor(typed_term& result, const typed_term& factor,
+                                     const syntax::expr_node& op) const {
+    // "(53 - C_v)/53" with C_v in % (Arterburn's solids correction, from memory): a sum
+    // in % over the number it starts with is a ratio of two percentages too.
+    if (factor.numeric && result.known && !result.numeric && result.scale == 0.01 &&
+        result.dim.is_dimensionless() &&
+        (oxygen_share_of_air(op.rhs) || same_number_over_its_sum(op.rhs, op.lhs))) {
+        result.scale = 1.0;
+        result.exact_scale = rational(1);
+        return;
+    }
+    if (factor.scale == 1.0 || factor.numeric || !factor.known || !factor.dim.is_dimensionless())
+        return;
+    if (result.numeric && same_number_over_its_sum(op.lhs, op.rhs)) {
+        result.scale = factor.scale;
+        result.exact_scale = factor.exact_scale;
+    } else if (carries_number_of_sum(op.lhs, op.rhs)) {
+        result.scale *= factor.scale;
+        result.exact_scale = exact_product(result.exact_scale, factor.exact_scale, false);
+    }
+}
+
+// "233.426 + t", "p_g + 92.1": a sum of a number and a symbol, in either order, as the
+// number's node and the symbol's; empty for any other node.
+std::optional<std::pair<std::uint32_t, std::uint32_t>>
+checker::number_beside_symbol(std::uint32_t k) const {
+    const syntax::expr_node& n = file_.nodes[k];
+    if (n.kind != expr_kind::add)
+        return std::nullopt;
+    if (file_.nodes[n.lhs].kind == expr_kind::number &&
+        file_.nodes[n.rhs].kind == expr_kind::symbol)
+        return std::pair{n.lhs, n.rhs};
+    if (file_.nodes[n.rhs].kind == expr_kind::number &&
+        file_.nodes[n.lhs].kind == expr_kind::symbol)
+        return std::pair{n.rhs, n.lhs};
+    return std::nullopt;
+}
+
+// "1730.63/(233.426 + t)" with t in °C: Antoine's fit (and Magnus's) typed with bare
+// constants, which are temperatures on the °C scale. Adding 273.15, as the gauge advice
+// says, would break the fit; saying the constants' units is the cure.
+void checker::note_bare_fit_on_scale(std::uint32_t denominator) {
+    const std::uint32_t below = syntax::inside_brackets(file_, denominator);
+    const auto parts = number_beside_symbol(below);
+    if (!parts)
+        return;
+    const auto [shift, reading] = *parts;
+    const std::string fit =
+        shift == file_.nodes[below].lhs
+            ? fmt::format("B {{K}}/({} {{K}} + {})", display_text(file_.nodes[shift].range),
+                          display_text(file_.nodes[reading].range))
+            : fmt::format("B {{K}}/({} + {} {{K}})", display_text(file_.nodes[reading].range),
+                          display_text(file_.nodes[shift].range));
+    out_.back().notes.insert(
+        out_.back().notes.begin(),
+        {fmt::format("if this is a fit made on the \u00B0C scale (Antoine's, Magnus's), its "
+                     "constants are temperatures: write {}, B the fit's constant over it, to "
+                     "say so, and do not add 273.15",
+                     fit),
+         {}});
+}
+
+// Whether a symbol under `node` is declared in a unit whose text holds one of `parts`.
+bool checker::holds_symbol_in_unit(std::uint32_t node,
+                                   std::initializer_list<std::string_view> parts) const {
+    return syntax::search_subtree(file_, node, [&](std::uint32_t, const syntax::expr_node& n) {
+        if (n.kind != expr_kind::symbol)
+            return search_step::descend;
+        const symbol_entry* e = symbols_.find(text(n.range));
+        const bool in = e != nullptr && std::any_of(parts.begin(), parts.end(), [&](auto p) {
+                            return e->unit_text.find(p) != std::string_view::npos;
+                        });
+        return in ? search_step::found : search_step::skip;
+    });
+}
+
+// Whether a symbol under `node` is declared in circular mils (cmil, kcmil, MCM).
+bool checker::in_circular_mils(std::uint32_t node) const {
+    return holds_symbol_in_unit(node, {"cmil", "MCM"});
+}
+
+// 20.9 % or 21 % (20.95 % by volume, the US Standard Atmosphere's dry air, from memory).
+bool checker::oxygen_share_of_air(std::uint32_t k) const {
+    k = syntax::inside_brackets(file_, k);
+    if (file_.nodes[k].kind != expr_kind::number)
+        return false;
+    const std::string_view written = text(file_.nodes[k].range);
+    return written == "21" || written == "20.9" || written == "20.95" || written == "20.946";
+}
+
+// The number a sum starts with ("21" of 21 - O2), brackets aside; with `numbers_only`,
+// only where all its terms are numbers. no_index for anything else.
+std::uint32_t checker::number_leading_sum(std::uint32_t k, bool numbers_only) const {
+    k = syntax::inside_brackets(file_, k);
+    if (file_.nodes[k].kind != expr_kind::add && file_.nodes[k].kind != expr_kind::subtract)
+        return syntax::no_index;
+    while (file_.nodes[k].kind == expr_kind::add || file_.nodes[k].kind == expr_kind::subtract) {
+        if (numbers_only && file_.nodes[file_.nodes[k].rhs].kind != expr_kind::number)
+            return syntax::no_index;
+        k = file_.nodes[k].lhs;
+    }
+    return file_.nodes[k].kind == expr_kind::number ? k : syntax::no_index;
+}
+
+// "C*21/(21 - O2)", "C*(21 - 3)/(21 - O2)", "C*F*20.9/(20.9 - O2)" with O2 in %: the
+// correction to a reference oxygen (Directive 2010/75/EU, Annex VI; US EPA Method 19, from
+// memory) writes above the number that leads the % sum below, alone or less the reference
+// O2, and there it is in % too.
+bool checker::carries_number_of_sum(std::uint32_t numerator, std::uint32_t denominator) const {
+    const std::uint32_t below = number_leading_sum(denominator, false);
+    if (below == syntax::no_index)
+        return false;
+    const std::string_view written = text(file_.nodes[below].range);
+    // "C*5.9/(20.9 - O2)": the reference oxygen taken off already, as US EPA Method 20
+    // prints it (20.9 - 15 = 5.9; from memory); the references the codes use are 3, 6, 7,
+    // 8, 11 and 15 % (boilers, solid fuels, waste incinerators, turbines).
+    const bool oxygen = oxygen_share_of_air(below);
+    const double share = oxygen ? read_number(written).literal.value : 0.0;
+    const auto folded_reference = [&](std::uint32_t at) {
+        if (!oxygen)
+            return false;
+        const double value = read_number(text(file_.nodes[at].range)).literal.value;
+        for (const double reference : {3.0, 6.0, 7.0, 8.0, 11.0, 15.0})
+            if (std::abs(value - (share - reference)) < 0.051)
+                return true;
+        return false;
+    };
+    return for_each_factor(numerator, [&](std::uint32_t at, int sign) {
+        if (sign < 0)
+            return false;
+        if (file_.nodes[at].kind == expr_kind::number)
+            return text(file_.nodes[at].range) == written || folded_reference(at);
+        const std::uint32_t above = number_leading_sum(at, true);
+        return above != syntax::no_index && text(file_.nodes[above].range) == written;
+    });
+}
+
+bool checker::same_number_over_its_sum(std::uint32_t numerator, std::uint32_t denominator) const {
+    numerator = syntax::inside_brackets(file_, numerator);
+    denominator = syntax::inside_brackets(file_, denominator);
+    const syntax::expr_node& top = file_.nodes[numerator];
+    const syntax::expr_node& sum = file_.nodes[denominator];
+    if (top.kind != expr_kind::number ||
+        (sum.kind != expr_kind::add && sum.kind != expr_kind::subtract))
+        return false;
+    std::uint32_t first = sum.lhs;
+    while (file_.nodes[first].kind == expr_kind::add ||
+           file_.nodes[first].kind == expr_kind::subtract)
+        first = file_.nodes[first].lhs;
+    return file_.nodes[first].kind == expr_kind::number &&
+           text(file_.nodes[first].range) == text(top.range);
+}
+
+// "17.625*t/(t + 243.04 {Δ°C})" (the Magnus fit of saturation pressure) and
+// "1730.63 {K}/(233.426 {K} + t)" (Antoine's) with t in °C: fits made on a temperature
+// scale with an arbitrary zero, whose constant is fitted to that zero, so they hold on
+// that scale alone. A constant that moves the zero to the absolute scale (t + 273.15) is
+// a conversion instead, and read as one.
+bool checker::fitted_on_scale(std::uint32_t numerator, std::uint32_t denominator,
+                              const typed_term& top, const typed_term& below) const {
+    if (!below.known || !below.point || !(below.dim == temperature_dimension()) ||
+        std::abs(below.origin) <= 1.0)
+        return false;
+    const auto constant = [&](std::uint32_t k) {
+        const expr_kind kind = file_.nodes[k].kind;
+        return kind == expr_kind::number || kind == expr_kind::quantity;
+    };
+    const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, denominator)];
+    if (sum.kind != expr_kind::add)
+        return false;
+    // The reading is a symbol, or a group that makes one ((T_K - 273.15), the °C reading of
+    // a kelvin one).
+    const auto reading_like = [&](std::uint32_t k) {
+        const expr_kind kind = file_.nodes[k].kind;
+        return kind == expr_kind::symbol || kind == expr_kind::group ||
+               kind == expr_kind::reference;
+    };
+    const std::uint32_t reading = reading_like(sum.lhs) ? sum.lhs : sum.rhs;
+    const std::uint32_t shift = reading == sum.lhs ? sum.rhs : sum.lhs;
+    if (!reading_like(reading) || !constant(shift))
+        return false;
+    const std::uint32_t top_node = syntax::inside_brackets(file_, numerator);
+    if (constant(top_node))
+        return top.known && top.offset == nullptr && !top.point &&
+               top.dim == temperature_dimension();
+    if (top.offset == nullptr)
+        return false;
+    // The same reading times numbers: 17.625*t.
+    const std::string_view name = text(file_.nodes[syntax::inside_brackets(file_, reading)].range);
+    std::size_t readings = 0;
+    std::uint32_t k = top_node;
+    for (;;) {
+        const syntax::expr_node& f = file_.nodes[k];
+        const std::uint32_t factor =
+            f.kind == expr_kind::multiply ? syntax::inside_brackets(file_, f.rhs) : k;
+        const expr_kind kind = file_.nodes[factor].kind;
+        if (kind == expr_kind::symbol || kind == expr_kind::reference || kind == expr_kind::add ||
+            kind == expr_kind::subtract) {
+            if (text(file_.nodes[factor].range) != name)
+                return false;
+            ++readings;
+        } else if (file_.nodes[factor].kind != expr_kind::number) {
+            return false;
+        }
+        if (f.kind != expr_kind::multiply)
+            break;
+        k = syntax::inside_brackets(file_, f.lhs);
+    }
+    return readings == 1;
+}
+
+// "17.269*T/(237.3 + T)" with T in K: the Magnus fit of saturation pressure (and Antoine's,
+// Tetens') is made on the °C reading, its constant 230 to 245 °C (Alduchov and Eskridge
+// 1996; ISO 13788, from memory); beside a kelvin reading the sum is some 273 K off.
+void checker::report_celsius_fit_beside_kelvins(std::uint32_t denominator) {
+    denominator = syntax::inside_brackets(file_, denominator);
+    const syntax::expr_node& sum = file_.nodes[denominator];
+    if (sum.kind != expr_kind::add)
+        return;
+    const std::uint32_t number = file_.nodes[sum.lhs].kind == expr_kind::number ? sum.lhs : sum.rhs;
+    const std::uint32_t reading = number == sum.lhs ? sum.rhs : sum.lhs;
+    if (file_.nodes[number].kind != expr_kind::number ||
+        file_.nodes[reading].kind != expr_kind::symbol)
+        return;
+    const double constant = written_number(file_.nodes[number].range);
+    const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
+    if (!(constant >= 200.0 && constant <= 260.0) || e == nullptr || e->offset_unit != nullptr ||
+        e->unit_text != "K")
+        return;
+    diagnostic& d =
+        report(rules::offset_scale,
+               fmt::format("{} reads like a Magnus or Antoine fit's constant, made for a \u00B0C "
+                           "reading, but {} is in K: the sum is some 273 K off",
+                           display_text(file_.nodes[number].range), quote(reading)),
+               file_.nodes[denominator].range);
+    d.level = severity::warning;
+    d.notes.push_back({fmt::format("write the \u00B0C reading, ({} - 273.15), wherever the "
+                                   "fit takes the temperature",
+                                   text(file_.nodes[reading].range)),
+                       {}});
+}
+
+// "150 {psf} + 9000?*R/t_F" (ACI 347's wall pressure, T the concrete's °F reading): a
+// coefficient marked `?` over a temperature reading is a fit made on that reading's scale,
+// which the `?` declares empirical; its note says it holds only in the declared units.
+// Not where a pressure stands above the reading: p·M/(R·T) is a gas law's density, whose
+// T is absolute whatever constant is folded in (AP-42's loading loss 12.46·S·P·M/T in
+// lb/10³ gal wants °R; EPA AP-42, 5th ed., section 5.2, from memory).
+bool checker::empirical_over_reading(std::uint32_t numerator, const typed_term& below) const {
+    if (!below.known || !below.point || !(below.dim == temperature_dimension()))
+        return false;
+    bool inferred = false;
+    bool pressure = false;
+    for_each_factor(numerator, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        inferred = inferred || n.kind == expr_kind::inferred;
+        if (n.kind == expr_kind::symbol && sign > 0)
+            if (const symbol_entry* e = symbols_.find(text(n.range));
+                e != nullptr && e->compact_dim && *e->compact_dim == pressure_dimension())
+                pressure = true;
+        return false;
+    });
+    return inferred && !pressure;
+}
+
+// "h_2 = h_1 + c_p*t_2": beside another enthalpy, c·t would be a change from it, which a
+// reading is not; the datum is read only where the side builds the enthalpy from readings.
+// A specific energy inside a product is part of the same build, counted from the same
+// datum: the latent heat in h = c_a*t + W*(h_g0 + c_v*t) (ASHRAE Fundamentals, ch. 1,
+// moist air; from memory) or in h = c_w*t + x*h_fg.
+bool checker::holds_specific_energy_term(std::uint32_t root) const {
+    return syntax::search_subtree(file_, root, [&](std::uint32_t, const syntax::expr_node& n) {
+        switch (n.kind) {
+        case expr_kind::symbol: {
+            const symbol_entry* e = symbols_.find(text(n.range));
+            return e != nullptr && e->compact_dim && *e->compact_dim == velocity_squared_dim
+                       ? search_step::found
+                       : search_step::skip;
+        }
+        case expr_kind::add:
+        case expr_kind::subtract:
+        case expr_kind::group:
+        case expr_kind::negate:
+            return search_step::descend;
+        default:
+            return search_step::skip;
+        }
+    });
+}
+
+void checker::note_enthalpy_side(const operand& first, std::uint32_t root) {
+    if (names_specific_enthalpy(first) && !holds_specific_energy_term(root))
+        enthalpy_side_ = root;
+}
+
+// A side that is one symbol of specific energy named or described as an enthalpy.
+bool checker::names_specific_enthalpy(const operand& side) const {
+    if (!side.type.known || !(side.type.dim == velocity_squared_dim) ||
+        file_.nodes[side.node].kind != expr_kind::symbol)
+        return false;
+    const std::string_view name = text(file_.nodes[side.node].range);
+    const symbol_entry* e = symbols_.find(name);
+    return (name.starts_with("h_") || name == "h") ||
+           (e != nullptr && e->description.find("enthalpy") != std::string_view::npos);
+}
+
+// "h_f = c_w*t" with t in °C, set equal to a specific enthalpy: the steam tables count
+// liquid water's enthalpy from 0.01 °C (IAPWS-IF97, from memory) and the psychrometric
+// tables dry air's from 0 °C (ASHRAE Fundamentals, ch. 1, h = 1.006·t), so c·t is the
+// enthalpy above that datum, as the trades write it. A note says so; °F readings, whose
+// US tables count from 32 °F, are no such thing.
+bool checker::enthalpy_above_ice_point(std::uint32_t reading_node, const typed_term& reading,
+                                       const typed_term& by) {
+    if (!reading.known || reading.offset == nullptr || !by.known || by.numeric ||
+        !(reading.dim == temperature_dimension()) ||
+        std::abs(reading.offset->offset - 273.15) > 1e-9 || !(by.dim == specific_heat_dim))
+        return false;
+    diagnostic& d = report(rules::trade_constant,
+                           fmt::format("{} is read as the rise above 0 \u00B0C, the datum of "
+                                       "the steam and psychrometric tables, as the enthalpy "
+                                       "on the other side counts it",
+                                       quote(reading_node)),
+                           file_.nodes[reading_node].range);
+    d.level = severity::note;
+    d.notes.push_back({"write (t - 0 {\u00B0C}) to say so; for a heat balance between two "
+                       "states, the difference of two readings",
+                       {}});
+    return true;
+}
+
+void checker::read_as_rise(typed_term& t) {
+    t.offset = nullptr;
+    t.point = false;
+    t.origin = 0.0;
+    t.origin_tolerance = 0.0;
+}
+
+} // namespace plumb::formula_check

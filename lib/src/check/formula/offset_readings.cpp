@@ -1,0 +1,424 @@
+// Readings on offset scales inside products: where a °C or gauge value needs its absolute
+// counterpart, and the reference states that make a ratio one.
+#include "check/formula/checker.hpp"
+
+namespace plumb::formula_check {
+
+// W/K or W/(m²·K) times a temperature: a heat flow or a heat flux. Not J/K, which n·R_u
+// is as well as m·c_p: a gas law's p·V is an energy.
+bool checker::is_heat_per_degree(const compact_dimension& partner) {
+    const std::string_view name = quantity_name((partner * temperature_dimension()).expand());
+    return name == "power" || name == "heat flux or irradiance";
+}
+
+// α, β·V, R_20·α: a coefficient per degree of whatever it scales. Not where the product
+// with a temperature could be a gas law's or a heat's: an energy (n·R·T, m·c_p·T), a
+// pressure (ρ·R_s·T), an energy per mass (R_s·T) or per mole (R·T).
+bool checker::is_per_degree_coefficient(const compact_dimension& partner) {
+    if (is_heat_per_degree(partner))
+        return false;
+    try {
+        const dimension d = partner.expand();
+        if (d.exponent(base_dimension::temperature) != rational(-1))
+            return false;
+        // Per mole as well (R·T with a current beside it, Faraday's gas volume): a gas law,
+        // which wants the absolute temperature, not a difference.
+        if (d.exponent(base_dimension::amount) < rational(0))
+            return false;
+        const dimension scaled = (partner * temperature_dimension()).expand();
+        const auto is = [&](int m, int l, int t, int n) {
+            return scaled.exponent(base_dimension::mass) == rational(m) &&
+                   scaled.exponent(base_dimension::length) == rational(l) &&
+                   scaled.exponent(base_dimension::time) == rational(t) &&
+                   scaled.exponent(base_dimension::amount) == rational(n) &&
+                   scaled.exponent(base_dimension::current).is_zero() &&
+                   scaled.exponent(base_dimension::luminous_intensity).is_zero();
+        };
+        return !(is(1, 2, -2, 0) || is(1, -1, -2, 0) || is(0, 2, -2, 0) || is(1, 2, -2, -1));
+    } catch (const std::exception&) {
+        return false;
+    }
+}
+
+// "(0.7 + 0.03*t)": a number other than 1 plus a number times a symbol, in either order;
+// "1 + α*t" is a coefficient per degree, whose reference the reading should be taken from.
+bool checker::linear_fit_on_reading(std::uint32_t node) const {
+    node = syntax::inside_brackets(file_, node);
+    const syntax::expr_node& sum = file_.nodes[node];
+    if (sum.kind != expr_kind::add)
+        return false;
+    const auto number_times_symbol = [&](std::uint32_t k) {
+        const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, k)];
+        if (n.kind != expr_kind::multiply)
+            return false;
+        const expr_kind a = file_.nodes[n.lhs].kind;
+        const expr_kind b = file_.nodes[n.rhs].kind;
+        return (a == expr_kind::number && b == expr_kind::symbol) ||
+               (a == expr_kind::symbol && b == expr_kind::number);
+    };
+    for (const auto& [constant, slope] :
+         {std::pair{sum.lhs, sum.rhs}, std::pair{sum.rhs, sum.lhs}}) {
+        const syntax::expr_node& c = file_.nodes[syntax::inside_brackets(file_, constant)];
+        if (c.kind == expr_kind::number && number_times_symbol(slope) &&
+            read_number(text(c.range)).literal.value != 1.0)
+            return true;
+    }
+    return false;
+}
+
+// A value on an offset scale used where only an absolute one makes sense.
+void checker::report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where,
+                            const compact_dimension* partner) {
+    const bool temperature =
+        unit.exponents[static_cast<std::size_t>(base_dimension::temperature)] != 0;
+    diagnostic& d =
+        report(rules::offset_scale,
+               fmt::format("{} is on the {} scale, whose zero is arbitrary, so it cannot be {}",
+                           quote(node), unit.symbol, where),
+               file_.nodes[node].range);
+    d.mark_label = fmt::format("on the {} scale, whose zero is arbitrary", unit.symbol);
+    if (where == "used in a quotient" && file_.nodes[node].kind != expr_kind::symbol)
+        note_bare_fit_on_scale(node);
+    // "ΔT : °F": a difference declared in the scale's unit; the Δ unit says what is meant.
+    if (file_.nodes[node].kind == expr_kind::symbol) {
+        const std::string_view name = text(file_.nodes[node].range);
+        const symbol_entry* entry = symbols_.find(name);
+        // "θ_max : °C "oil temperature range, -20 to 105 °C"": an end of a range is a
+        // reading, whatever the description shared with the other end says.
+        const bool range_end = name.ends_with("max") || name.ends_with("min") ||
+                               name.find("_max") != std::string_view::npos ||
+                               name.find("_min") != std::string_view::npos;
+        if (entry != nullptr && entry->offset_unit == &unit && !range_end &&
+            names_a_difference(name, entry->description)) {
+            d.notes.push_back(
+                {fmt::format("its name or description says it is a difference: declare it "
+                             "as '{} : \u0394{}', a difference on the {} scale, which may be "
+                             "multiplied and divided freely",
+                             name, unit.symbol, unit.symbol),
+                 {}});
+            return;
+        }
+    }
+    // "k*(0.7 + 0.03*t)", Hazen's correction of a permeability to the water's temperature
+    // (Terzaghi, Peck and Mesri, 1996, from memory): an empirical fit made on the °C scale
+    // holds with the reading as it is, and kelvins would break it.
+    if (temperature && linear_fit_on_reading(node)) {
+        d.notes.push_back(
+            {fmt::format("{} reads as an empirical fit made on the {} scale: it holds only "
+                         "with the reading in {}, so adding 273.15 would break it; where the "
+                         "fit is the published one, accept this finding with a '# reviewed "
+                         "offset-scale: ...' mark naming its source",
+                         quote(node), unit.symbol, unit.symbol),
+             {}});
+        return;
+    }
+    // A coefficient per degree (α in R_20*(1 + α*T), β in V*β*T) multiplies a difference
+    // from its reference temperature, not an absolute temperature.
+    if (temperature && partner != nullptr && is_per_degree_coefficient(*partner)) {
+        const std::string reference = reference_temperature();
+        d.notes.push_back(
+            {fmt::format("a coefficient per degree multiplies a temperature difference: "
+                         "write ({} - {}) with {} the coefficient's reference temperature "
+                         "in {}",
+                         display_text(file_.nodes[node].range), reference, reference, unit.symbol),
+             {}});
+        return;
+    }
+    // U·A·T, ṁ·c_p·T: a heat flow per degree times a reading. What is meant is a
+    // difference of two temperatures; converting the reading to kelvins would pass the
+    // check and give a value many times too large.
+    if (temperature && partner != nullptr && is_heat_per_degree(*partner)) {
+        d.notes.push_back(
+            {fmt::format("a heat flow per degree (U·A, ṁ·c_p) multiplies a "
+                         "temperature difference: write ({} - T_other), with T_other the "
+                         "other stream's or side's temperature; the reading converted to "
+                         "kelvins would pass this check and be many times too large",
+                         display_text(file_.nodes[node].range)),
+             {}});
+        d.notes.push_back({"a difference of two values on the same scale, such as T_2 - T_1, "
+                           "is an ordinary quantity and may be used freely",
+                           {}});
+        return;
+    }
+    // The physics decides which fix is right, and a dimension cannot tell ρ·c_p·T from
+    // ρ·R·T: each fix is given with the formulas it suits.
+    d.notes.push_back(
+        {temperature ? fmt::format("if the law needs absolute temperature (gas laws, Arrhenius, "
+                                   "radiation): declare it in K (or °R), or convert the {} value "
+                                   "first by adding {:g}",
+                                   unit.symbol, unit.offset / unit.factor)
+                     : fmt::format("gas laws and pressure ratios need absolute pressure: add the "
+                                   "atmospheric pressure, or declare it as an absolute pressure "
+                                   "(Pa, bar, psia)"),
+         {}});
+    d.notes.push_back(
+        {temperature
+             ? std::string("if it stands for a rise or a drop (a heat balance, an "
+                           "expansion): write the difference of two readings, such as "
+                           "T_2 - T_1, an ordinary quantity that may be used freely")
+             : std::string("a difference of two values on the same scale, such as p_2 - p_1, "
+                           "is an ordinary quantity and may be used freely"),
+         {}});
+}
+
+// "20" from R_20 or T_20 in the formula: the reference temperature a coefficient per
+// degree is tabulated at; "T_ref" when the formula names none.
+std::string checker::reference_temperature() const {
+    std::string found;
+    visit_nodes([&](const syntax::expr_node& n) {
+        if (n.kind != expr_kind::symbol || !found.empty())
+            return;
+        const std::string_view name = text(n.range);
+        const std::size_t underscore = name.rfind('_');
+        if (underscore == std::string_view::npos || underscore + 1 >= name.size())
+            return;
+        const std::string_view digits = name.substr(underscore + 1);
+        // R_20, ρ_15, C_25: the temperatures tables are given at. k_1 or C_10 (the
+        // ten-hour rate) number something else.
+        if (digits.size() <= 3 && std::all_of(digits.begin(), digits.end(),
+                                              [](char c) { return c >= '0' && c <= '9'; })) {
+            const int value = std::stoi(std::string(digits));
+            if (value >= 15 && value <= 100)
+                found = std::string(digits);
+        }
+    });
+    return found.empty() ? std::string("T_ref") : found;
+}
+
+// A number read as a reference state, or a gauge reading with its atmosphere, in ratio
+// with an absolute reading: the product takes the reading's dimension and unit in its
+// place, a pure ratio, and is no reading. False where the dimension overflowed (the
+// product is then unknown).
+bool checker::pair_number_with_reading(const reference_state_pairs::number& number,
+                                       reference_state_pairs::reading& reading,
+                                       typed_term& result) {
+    reading.paired = true;
+    try {
+        result.dim = number.sign > 0 ? result.dim * reading.dim : result.dim / reading.dim;
+    } catch (const std::exception&) {
+        result = unknown_type();
+        return false;
+    }
+    result.scale = number.sign > 0 ? result.scale * reading.scale : result.scale / reading.scale;
+    result.exact_scale.reset();
+    result.value.reset();
+    result.numeric = false;
+    result.point = false;
+    result.origin = 0.0;
+    result.origin_tolerance = 0.0;
+    return true;
+}
+
+// "F*(p_g + 14.7)/(100 + 14.7)" in a sheet (a leak's flow scaled from the table's 100 psig
+// by absolute pressure; common practice): the added numbers are a gauge reading and the
+// atmosphere in the unit of the absolute pressure they stand in ratio with, which the
+// notation would write 100 {psig}; read so, the ratio is pure, with a note.
+bool checker::read_gauge_plus_atmosphere(const reference_state_pairs::number& number,
+                                         reference_state_pairs::reading& reading,
+                                         typed_term& result) {
+    const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, number.node)];
+    if (sum.kind != expr_kind::add || !(reading.dim == pressure_dimension()) ||
+        file_.nodes[sum.lhs].kind != expr_kind::number ||
+        file_.nodes[sum.rhs].kind != expr_kind::number)
+        return false;
+    std::uint32_t atmosphere = syntax::no_index;
+    const reference_state* state = nullptr;
+    for (const std::uint32_t side : {sum.rhs, sum.lhs}) {
+        const std::string_view written = text(file_.nodes[side].range);
+        state = read_reference_state(reading.dim, written_number(file_.nodes[side].range), written,
+                                     reading.scale);
+        if (state != nullptr) {
+            atmosphere = side;
+            break;
+        }
+    }
+    if (atmosphere == syntax::no_index)
+        return false;
+    if (!pair_number_with_reading(number, reading, result))
+        return true;
+    for (std::uint32_t l = result.literal_begin; l < literals_.size(); ++l)
+        if (literals_[l].node == number.node || literals_[l].node == sum.lhs ||
+            literals_[l].node == sum.rhs)
+            read_as_quantity(literals_[l]);
+    const std::uint32_t gauge = atmosphere == sum.rhs ? sum.lhs : sum.rhs;
+    diagnostic& d = report(
+        rules::trade_constant,
+        fmt::format("'{}' is read as a gauge reading, {}, plus the atmosphere, {}, in the unit "
+                    "of {}: an absolute pressure, which it stands in ratio with",
+                    display_text(file_.nodes[number.node].range),
+                    display_text(file_.nodes[gauge].range),
+                    display_text(file_.nodes[atmosphere].range), quote(reading.node)),
+        file_.nodes[number.node].range);
+    d.level = severity::note;
+    d.notes.push_back(
+        {fmt::format("the trades' atmospheres: {}; above sea level it is less", state->choices),
+         {}});
+    return true;
+}
+
+// "V*273.15/T": each bare number of the product that stands for a standard reference
+// temperature or pressure in the unit of an absolute reading it is in ratio with makes,
+// with it, a pure ratio. The number is then a quantity, not a factor for the scale rules.
+void checker::read_reference_states(reference_state_pairs& pairs, typed_term& result) {
+    if (!result.known)
+        return;
+    for (std::size_t i = 0; i < pairs.number_count; ++i) {
+        const reference_state_pairs::number& number = pairs.numbers[i];
+        for (std::size_t k = 0; k < pairs.reading_count; ++k) {
+            reference_state_pairs::reading& reading = pairs.readings[k];
+            if (reading.paired || reading.sign == number.sign)
+                continue;
+            // "(100 + 14.7)": one number to the product, a sum in the text; (68 + 459.67)
+            // is one too, a reference temperature in °R, read below.
+            if (file_.nodes[syntax::inside_brackets(file_, number.node)].kind == expr_kind::add &&
+                read_gauge_plus_atmosphere(number, reading, result)) [[unlikely]]
+                break;
+            const std::string_view written = text(file_.nodes[number.node].range);
+            // p_b/1000 with p_b in mbar: a power of ten beside a pressure converts its unit
+            // (a barometer in mbar added in bar) far more often than it is 1000 mbar.
+            const double power = std::round(std::log10(number.value));
+            if (power != 0.0 && reading.dim == pressure_dimension() &&
+                std::abs(number.value / std::pow(10.0, power) - 1.0) < 1e-12)
+                continue;
+            const reference_state* state =
+                read_reference_state(reading.dim, number.value, written, reading.scale);
+            if (state == nullptr)
+                continue;
+            if (!pair_number_with_reading(number, reading, result))
+                return;
+            for (std::uint32_t l = result.literal_begin; l < literals_.size(); ++l) {
+                scale_literal& literal = literals_[l];
+                if (literal.node != number.node)
+                    continue;
+                read_as_quantity(literal);
+            }
+            diagnostic& d =
+                report(rules::trade_constant,
+                       fmt::format("'{}' is read as {} in the unit of {}, which it stands in ratio "
+                                   "with",
+                                   display_text(file_.nodes[number.node].range), state->what,
+                                   quote(reading.node)),
+                       file_.nodes[number.node].range);
+            d.level = severity::note;
+            d.notes.push_back({fmt::format("the trades' choices: {}; the contract or permit "
+                                           "decides which",
+                                           state->choices),
+                               {}});
+            d.notes.push_back({std::string(state->advice), {}});
+            break;
+        }
+    }
+}
+
+// Whether a product is a pressure scaled by the shape of a wall: every factor beside its
+// pressures, looked at through parentheses, powers and sums, is a number, a pure ratio, a
+// length or an area (p_g*D/(2*t), 2*S*t/D, p_g/SG), not the state of a gas (p_g*V_1/V_2,
+// p_g*(T_2/T_1), ρ*R*T). Such a product is a net pressure across the wall, which a gauge
+// reads. With a gauge pressure in it, any number of gauge pressures may stand; without,
+// exactly one pressure of another kind (the allowable stress). Walked with a stack of its
+// own, as a product may be nested a million deep.
+bool checker::pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
+                                       bool* geometric) const {
+    const syntax::expr_node& root = file_.nodes[product];
+    if (root.kind != expr_kind::multiply && root.kind != expr_kind::divide)
+        return false;
+    int other_pressures = 0;
+    int stresses = 0;
+    bool shape = false;
+    if (geometric != nullptr)
+        *geometric = false;
+    std::vector<std::uint32_t> pending{product};
+    while (!pending.empty()) {
+        const syntax::expr_node& n = file_.nodes[pending.back()];
+        pending.pop_back();
+        switch (n.kind) {
+        case expr_kind::multiply:
+        case expr_kind::divide:
+            // p_1g*p_2g/(p_1g + p_2g): gauge pressures multiplied or divided by one
+            // another are a gas law's, not a gauge reading scaled.
+            if (with_gauge && holds_gauge(n.lhs) && holds_gauge(n.rhs))
+                return false;
+            pending.push_back(n.lhs);
+            pending.push_back(n.rhs);
+            break;
+        case expr_kind::add:
+        case expr_kind::subtract:
+            pending.push_back(n.lhs);
+            pending.push_back(n.rhs);
+            break;
+        case expr_kind::group:
+        case expr_kind::negate:
+        case expr_kind::power: // (D/t)^2: the base decides
+            pending.push_back(n.lhs);
+            break;
+        case expr_kind::number:
+        case expr_kind::pi:
+            break;
+        case expr_kind::symbol:
+        case expr_kind::reference: { // a workbook's cell, typed by the unit written for it
+            typed_term cell;
+            const typed_term* found = &cell;
+            if (n.kind == expr_kind::reference) {
+                const syntax::reference_value& r = file_.references[n.lhs];
+                if (!r.dim)
+                    return false;
+                cell.dim = compact_dimension(*r.dim);
+                cell.offset = r.offset;
+            } else {
+                const symbol_entry* entry = symbols_.find(text(n.range));
+                if (entry == nullptr || !entry->checked_type || !entry->checked_type->known)
+                    return false;
+                found = &*entry->checked_type;
+            }
+            const typed_term& t = *found;
+            if (t.dim == pressure_dimension()) {
+                const bool gauge = t.offset != nullptr && t.offset->scale == unit_scale::gauge;
+                // 1.3*MAWP*S_amb/S, the hydrotest pressure: a ratio of stresses is pure.
+                if (with_gauge && !gauge && !t.point) {
+                    ++stresses;
+                    break;
+                }
+                if (gauge != with_gauge || (!gauge && ++other_pressures > 1))
+                    return false;
+            } else if (t.dim.is_dimensionless() || t.dim == length_dimension() ||
+                       t.dim == area_dimension()) {
+                shape = true;
+                if (geometric != nullptr && !t.dim.is_dimensionless())
+                    *geometric = true;
+            } else {
+                return false;
+            }
+            break;
+        }
+        default:
+            return false;
+        }
+    }
+    return with_gauge ? stresses % 2 == 0 : (other_pressures == 1 && shape);
+}
+
+// Whether a subtree holds a gauge pressure (a symbol or a workbook cell declared on one).
+bool checker::holds_gauge(std::uint32_t node) const {
+    return syntax::search_subtree(file_, node, [&](std::uint32_t, const syntax::expr_node& n) {
+        switch (n.kind) {
+        case expr_kind::symbol: {
+            const symbol_entry* entry = symbols_.find(text(n.range));
+            return entry != nullptr && entry->offset_unit != nullptr &&
+                           entry->offset_unit->scale == unit_scale::gauge
+                       ? search_step::found
+                       : search_step::skip;
+        }
+        case expr_kind::reference: {
+            const syntax::reference_value& r = file_.references[n.lhs];
+            return r.offset != nullptr && r.offset->scale == unit_scale::gauge ? search_step::found
+                                                                               : search_step::skip;
+        }
+        case expr_kind::call:
+            return search_step::skip;
+        default:
+            return search_step::descend;
+        }
+    });
+}
+
+} // namespace plumb::formula_check

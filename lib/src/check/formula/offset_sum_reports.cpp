@@ -1,0 +1,405 @@
+// The findings of sums of readings: an atmosphere taken twice or at sea level for a site, a
+// scale's zero added twice or in another unit, scales mixed in one sum.
+#include "check/formula/checker.hpp"
+
+namespace plumb::formula_check {
+
+// The site's barometer, where the file declares one that is not the standard atmosphere:
+// "p_b : kPa "site barometric pressure, 96.2 kPa"" or "p_atm : psia = 12.2". Worked out at
+// the first gauge reading made absolute with a number, once per file.
+const checker::site_barometer* checker::declared_site_barometer() {
+    if (site_barometer_searched_)
+        return site_barometer_.name.empty() ? nullptr : &site_barometer_;
+    site_barometer_searched_ = true;
+    for (const syntax::declaration& decl : file_.declarations) {
+        if (!decl.kind.dim || decl.name_count == 0 ||
+            (decl.kind.single_unit != nullptr && decl.kind.single_unit->offset != 0.0))
+            continue;
+        const std::optional<compact_dimension> dim = compact_dimension::fitted(*decl.kind.dim);
+        if (!dim || !(*dim == pressure_dimension()))
+            continue;
+        const std::string_view name = text(file_.names[decl.first_name].name);
+        const std::string_view description = text(decl.description);
+        const auto says = [&](std::string_view word) {
+            return description.find(word) != std::string_view::npos;
+        };
+        // "suction vacuum gauge, 62 kPa below atmosphere" names the atmosphere but is none.
+        if (!names_the_atmosphere(name, description) || says("standard") || says("vacuum") ||
+            says("below") || says("gauge"))
+            continue;
+        const double written = declared_number(decl);
+        const double pascals = written * decl.kind.si_factor;
+        // The file's atmosphere is the sea level's: no site barometer to hold sums to.
+        if (pascals > 0.99 * standard_atmosphere && pascals <= 1.005 * standard_atmosphere)
+            return nullptr;
+        // A site below sea level by more than the Dead Sea is no site; above 5200 m the air
+        // is thinner than any plant is built in (the highest mines and observatories; the
+        // standard atmosphere, from memory, has 52.7 kPa there).
+        if (!(pascals >= highest_site_atmosphere * standard_atmosphere &&
+              pascals <= 0.99 * standard_atmosphere))
+            continue;
+        site_barometer_ = {name, pascals};
+        return &site_barometer_;
+    }
+    return nullptr;
+}
+
+// The value a declaration gives, after its `=` or in its description beside its unit
+// ("..., 96.2 kPa"); NaN where it gives none.
+double checker::declared_number(const syntax::declaration& decl) const {
+    constexpr double none = std::numeric_limits<double>::quiet_NaN();
+    if (decl.value.end > decl.value.begin)
+        return written_number(decl.value);
+    const std::string_view description = text(decl.description);
+    const std::string_view unit = text(decl.spec);
+    if (unit.empty())
+        return none;
+    for (std::size_t at = description.find(unit); at != std::string_view::npos;
+         at = description.find(unit, at + 1)) {
+        std::size_t end = at;
+        while (end > 0 && description[end - 1] == ' ')
+            --end;
+        std::size_t begin = end;
+        while (begin > 0 && (std::isdigit(static_cast<unsigned char>(description[begin - 1])) ||
+                             description[begin - 1] == '.'))
+            --begin;
+        const bool unit_ends =
+            at + unit.size() == description.size() ||
+            !std::isalnum(static_cast<unsigned char>(description[at + unit.size()]));
+        if (begin < end && unit_ends &&
+            std::isdigit(static_cast<unsigned char>(description[begin])))
+            return std::strtod(std::string(description.substr(begin, end - begin)).c_str(),
+                               nullptr);
+    }
+    return none;
+}
+
+// "p_g + 101.325" in a file that declares the site's barometer at 96.2 kPa: the gauge
+// reading is made absolute with the sea-level atmosphere, several kPa off at the site.
+void checker::warn_sea_level_atmosphere_at_site(std::span<const operand> terms, double unit) {
+    for (const auto& t : terms) {
+        if (!is_shift_candidate(t) || t.subtracted)
+            continue;
+        const shift sh = shift_of(t);
+        const double added = sh.si + sh.written * unit;
+        if (std::abs(added / standard_atmosphere - 1.0) > 0.015)
+            continue;
+        const site_barometer* site = declared_site_barometer();
+        if (site == nullptr || std::abs(added / site->pascals - 1.0) <= 0.02)
+            return;
+        const double height =
+            44330.8 * (1.0 - std::pow(site->pascals / standard_atmosphere, 0.190263));
+        diagnostic& d = report(
+            rules::offset_scale,
+            fmt::format("{} is the atmosphere at sea level, but this file declares the "
+                        "site's barometer '{}' ({} kPa, as the standard atmosphere has about "
+                        "{} m up): the absolute pressure comes out {} kPa high",
+                        display_text(file_.nodes[t.node].range), site->name,
+                        format_factor(site->pascals / 1000.0),
+                        static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10),
+                        format_factor(std::round((added - site->pascals) / 100.0) / 10.0)),
+            file_.nodes[t.node].range);
+        d.level = severity::warning;
+        d.notes.push_back({fmt::format("a gauge reading plus the local atmosphere is "
+                                       "absolute: write (... + {})",
+                                       site->name),
+                           {}});
+        return;
+    }
+}
+
+// Whether a symbol's name or description calls it a gauge reading (p_g, "gauge pressure").
+bool checker::named_gauge(std::uint32_t node) const {
+    if (file_.nodes[node].kind != expr_kind::symbol)
+        return false;
+    const std::string_view name = text(file_.nodes[node].range);
+    const symbol_entry* entry = symbols_.find(name);
+    const std::string_view description = entry != nullptr ? entry->description : "";
+    // "p_mg : psia "memory gauge, which records absolute"": a unit or a description that
+    // says absolute outright wins over the instrument's name.
+    const std::string_view unit = entry != nullptr ? entry->unit_text : "";
+    if (unit.find("psia") != std::string_view::npos ||
+        unit.find("bara") != std::string_view::npos || unit.find("abs") != std::string_view::npos ||
+        description.find("absolute") != std::string_view::npos)
+        return false;
+    return name.ends_with("_g") || name.find("gauge") != std::string_view::npos ||
+           name.find("_g_") != std::string_view::npos ||
+           description.find("gauge") != std::string_view::npos;
+}
+
+// "p_1 = p_2 + 14.7" with both in psia, "T_2 = T_1 + 460" in °R: a scale's zero added to a
+// reading that is already absolute, so the atmosphere or the 459.67 is counted twice.
+bool checker::report_zero_added_twice(std::span<const operand> terms, double unit,
+                                      const compact_dimension& dim) {
+    for (const auto& t : terms) {
+        if (!is_shift_candidate(t) || t.subtracted)
+            continue;
+        const shift sh = shift_of(t);
+        const double si = std::abs(sh.si + sh.written * unit);
+        for (const auto& row : offset_rows()) {
+            const double zero = std::abs(row.unit->offset);
+            if (!(row.dim == dim) || zero == 0.0 ||
+                std::abs(si - zero) > si * sh.tolerance + 1e-9 * zero)
+                continue;
+            const operand* reading = nullptr;
+            for (const auto& r : terms)
+                if (!is_shift_candidate(r) && r.type.known && r.type.point)
+                    reading = &r;
+            // "p_g : psi "gauge pressure"": declared loosely in an absolute unit, but named
+            // a gauge reading, which is what the atmosphere is added to.
+            if (reading != nullptr && row.unit->scale == unit_scale::gauge &&
+                named_gauge(reading->node))
+                return false;
+            const bool gauge = row.unit->scale == unit_scale::gauge;
+            const std::string zero_of =
+                gauge ? std::string("the atmosphere, the zero of gauge pressures")
+                      : fmt::format("the zero of the {} scale", row.unit->symbol);
+            diagnostic& d =
+                report(rules::offset_scale,
+                       fmt::format("{} is {}, added to {}, a reading already on an absolute scale: "
+                                   "the sum counts that zero twice",
+                                   display_text(file_.nodes[t.node].range), zero_of,
+                                   reading != nullptr ? quote(reading->node) : "a reading"),
+                       file_.nodes[t.node].range);
+            add_term(d, t);
+            if (reading != nullptr)
+                add_term(d, *reading);
+            d.notes.push_back(
+                {gauge ? std::string("a gauge reading plus the atmosphere is absolute; a "
+                                     "reading declared absolute needs nothing added (declare "
+                                     "it in psig, barg or kPag if it is a gauge reading)")
+                       : fmt::format("a {} reading plus {:g} is absolute; a reading declared "
+                                     "absolute needs nothing added (declare it in {} if it "
+                                     "is a {} reading)",
+                                     row.unit->symbol, row.unit->offset / row.unit->factor,
+                                     row.unit->symbol, row.unit->symbol),
+                 {}});
+            return true;
+        }
+        if (report_zero_in_another_unit_added(t, sh, unit, dim, terms))
+            return true;
+    }
+    return false;
+}
+
+// "p_k + 14.7" with p_k an absolute reading in kPa, "T_K + 459.67": a scale's zero as
+// printed in another unit (the atmosphere in psi, the °F scale's zero in °R) is added to a
+// reading already absolute. Read in the sum's own unit it would be a small shift (14.7
+// kPa), but no engineer writes 14.7 or 459.67 for that.
+bool checker::report_zero_in_another_unit_added(const operand& t, const shift& sh, double unit,
+                                                const compact_dimension& dim,
+                                                std::span<const operand> terms) {
+    // Printed to three digits or more: "p + 0.1" is no atmosphere in MPa.
+    if (sh.si != 0.0 || sh.written <= 0.0 || sh.tolerance > 0.005)
+        return false;
+    struct printed_zero {
+        std::string_view unit;  // the unit it is printed in
+        std::string_view scale; // whose zero it is
+        double value;           // in that unit
+        double factor;          // SI value of that unit
+    };
+    // The °C and °F zeros in K and °R (NIST SP 811 (2008), 4.2.1.1).
+    std::array<printed_zero, 9> zeros{};
+    std::size_t count = 0;
+    for (const auto& u : pressure_units)
+        zeros[count++] = {u.name, "", standard_atmosphere / u.pascals, u.pascals};
+    zeros[count++] = {"K", "\u00B0C", 273.15, 1.0};
+    zeros[count++] = {"\u00B0R", "\u00B0F", 459.67, 5.0 / 9.0};
+    const bool pressure = dim == pressure_dimension();
+    if (!pressure && !(dim == temperature_dimension()))
+        return false;
+    for (const printed_zero& z : std::span(zeros.data(), count)) {
+        if (z.scale.empty() != pressure || std::abs(z.factor / unit - 1.0) < 1e-9 ||
+            std::abs(sh.written - z.value) > sh.written * sh.tolerance + 1e-9 * z.value)
+            continue;
+        const operand* reading = nullptr;
+        for (const auto& r : terms)
+            if (!is_shift_candidate(r) && r.type.known && r.type.point)
+                reading = &r;
+        if (reading != nullptr && pressure && named_gauge(reading->node))
+            return false;
+        diagnostic& d =
+            report(rules::offset_scale,
+                   fmt::format("{} is {} in {}, added to {}, a reading already on an absolute "
+                               "scale and in another unit: the sum counts that zero twice",
+                               display_text(file_.nodes[t.node].range),
+                               pressure ? std::string("the atmosphere")
+                                        : fmt::format("the zero of the {} scale", z.scale),
+                               z.unit, reading != nullptr ? quote(reading->node) : "a reading"),
+                   file_.nodes[t.node].range);
+        add_term(d, t);
+        if (reading != nullptr)
+            add_term(d, *reading);
+        d.notes.push_back({"a reading declared absolute needs nothing added; where it is a "
+                           "gauge or a \u00B0C or \u00B0F reading, declare it so, and add "
+                           "the zero in its own unit",
+                           {}});
+        return true;
+    }
+    return false;
+}
+
+// Whether the node is one whole side of a formula of two or more sides (in parentheses or
+// not): there alone "p_abs - p_g" can stand for the atmosphere, set equal to a reading of
+// it. Inside a product or a sum it is a slip (a bar value less a barg one).
+bool checker::is_whole_side(std::uint32_t node) const {
+    if (current_ == nullptr || current_->side_count < 2)
+        return false;
+    for (std::uint32_t i = 0; i < current_->side_count; ++i) {
+        std::uint32_t root = file_.sides[current_->first_side + i].root;
+        root = syntax::inside_brackets(file_, root);
+        if (root == node)
+            return true;
+    }
+    return false;
+}
+
+// "p_abs - p_g": one absolute reading less one reading on an offset scale leaves that
+// scale's zero (the atmosphere for a gauge): the offset unit, or null when the terms are
+// anything else.
+const unit_definition* checker::subtracted_scale_zero(std::span<const operand> terms,
+                                                      double final_origin, double slack) const {
+    const operand* added = nullptr;
+    const operand* subtracted = nullptr;
+    for (const auto& t : terms) {
+        if (!t.type.known || !t.type.point)
+            continue;
+        const operand*& slot = t.subtracted ? subtracted : added;
+        if (slot != nullptr)
+            return nullptr;
+        slot = &t;
+    }
+    if (added == nullptr || subtracted == nullptr || added->type.offset != nullptr ||
+        added->type.origin != 0.0 || subtracted->type.offset == nullptr)
+        return nullptr;
+    if (std::abs(subtracted->type.origin + final_origin) > slack)
+        return nullptr;
+    return subtracted->type.offset;
+}
+
+// "T_C - T_K", "p_bar - p_barg": readings on two scales with different zeros.
+void checker::report_mixed_scales(std::span<const operand> terms, double difference) {
+    const operand* on_offset = nullptr;
+    const operand* other = nullptr;
+    for (const auto& t : terms) {
+        if (!t.type.known || !t.type.point)
+            continue;
+        if (t.type.offset != nullptr && on_offset == nullptr)
+            on_offset = &t;
+        else if (other == nullptr)
+            other = &t;
+    }
+    if (on_offset == nullptr)
+        on_offset = &terms.front();
+    const bool temperature = on_offset->type.dim == temperature_dimension();
+    const unit_definition* named =
+        scale_named(on_offset->type.origin, 0.0, on_offset->type.dim, terms);
+    if (named == nullptr) {
+        report_shifted_difference(terms, difference, temperature);
+        return;
+    }
+    const unit_definition& unit = *named;
+    diagnostic& d = report(
+        rules::offset_scale,
+        other != nullptr
+            ? fmt::format("{} is on the {} scale and {} on an absolute one, so their "
+                          "difference is off by the {} scale's zero",
+                          quote(on_offset->node), unit.symbol, quote(other->node), unit.symbol)
+            : fmt::format("{} is on the {} scale, and the other terms do not cancel its zero",
+                          quote(on_offset->node), unit.symbol),
+        file_.nodes[on_offset->node].range);
+    add_term(d, *on_offset);
+    if (other != nullptr)
+        add_term(d, *other);
+    d.notes.push_back({fmt::format("as written the result is off by {} {}",
+                                   format_factor(std::abs(difference)), temperature ? "K" : "Pa"),
+                       {}});
+    if (other != nullptr && !on_offset->subtracted && other->subtracted &&
+        other->type.offset == nullptr)
+        d.notes.push_back(
+            {fmt::format("{} less {} would be the {} scale's zero as an absolute reading; "
+                         "this way round it is its negative",
+                         quote(other->node), quote(on_offset->node), unit.symbol),
+             {}});
+    d.notes.push_back(
+        {temperature
+             ? fmt::format("convert first: a {} reading plus {:g} is in K", unit.symbol,
+                           unit.offset / unit.factor)
+             : std::string("convert first: a gauge reading plus the atmospheric pressure is "
+                           "absolute"),
+         {}});
+}
+
+// "p_a - 14.7 - p_h" with every pressure absolute: the readings cancel to a difference,
+// which has no zero for the number to move. Most often one of the pressures subtracted is
+// a drop, not a reading, and only its name does not say so.
+void checker::report_shifted_difference(std::span<const operand> terms, double difference,
+                                        bool temperature) {
+    const operand* number = nullptr;
+    const operand* subtracted = nullptr;
+    for (const auto& t : terms) {
+        if (is_shift_candidate(t) && number == nullptr)
+            number = &t;
+        else if (t.subtracted && t.type.known && t.type.point && subtracted == nullptr)
+            subtracted = &t;
+    }
+    const operand& at = number != nullptr ? *number : terms.front();
+    diagnostic& d =
+        report(rules::offset_scale,
+               fmt::format("the readings in this sum cancel to a difference, which has no zero, "
+                           "yet {} moves the zero by {} {}",
+                           number != nullptr ? quote(number->node) : std::string("a number"),
+                           format_factor(std::abs(difference)), temperature ? "K" : "Pa"),
+               file_.nodes[at.node].range);
+    add_term(d, at);
+    if (subtracted != nullptr)
+        d.notes.push_back(
+            {fmt::format("{} is read as a reading on an absolute scale; if it is a drop or "
+                         "a rise (a loss, a column of liquid), say so in its name (\u0394{}) "
+                         "or its description (\"... drop\"), and the number is then the "
+                         "scale's zero",
+                         quote(subtracted->node), text(file_.nodes[subtracted->node].range)),
+             {}});
+}
+
+// "p_bh - p_atm - 14.7": the atmosphere taken off as a symbol and again as a number.
+bool checker::report_atmosphere_taken_twice(std::span<const operand> terms, std::size_t only) {
+    double taken = 0.0;
+    const operand* number = nullptr;
+    const operand* atmosphere = nullptr;
+    for (const auto& t : terms) {
+        if (is_shift_candidate(t) && t.subtracted) {
+            const shift s = shift_of(t);
+            taken -= s.si + s.written * terms[only].type.scale;
+            number = &t;
+        } else if (t.subtracted && names_atmosphere(t.node)) {
+            atmosphere = &t;
+        }
+    }
+    if (number == nullptr || atmosphere == nullptr ||
+        !(std::abs(taken / standard_atmosphere - 1.0) < 0.05))
+        return false;
+    diagnostic& d = report(rules::offset_scale,
+                           fmt::format("{} and {} both take off the atmosphere: the result is "
+                                       "one atmosphere below the gauge reading",
+                                       quote(atmosphere->node), quote(number->node)),
+                           file_.nodes[number->node].range);
+    add_term(d, *atmosphere);
+    add_term(d, *number);
+    d.notes.push_back({"an absolute pressure less the atmosphere is the gauge reading; take "
+                       "it off once",
+                       {}});
+    return true;
+}
+
+// Whether a term is a symbol named or described as the atmosphere or a barometer.
+bool checker::names_atmosphere(std::uint32_t node) const {
+    node = syntax::inside_brackets(file_, node);
+    if (file_.nodes[node].kind != expr_kind::symbol)
+        return false;
+    const std::string_view name = text(file_.nodes[node].range);
+    const symbol_entry* e = symbols_.find(name);
+    return names_the_atmosphere(name, e != nullptr ? e->description : std::string_view());
+}
+
+} // namespace plumb::formula_check

@@ -1,0 +1,499 @@
+// The origins of a formula's sides: a reading on one scale set equal to another's (°C to
+// K, gauge to absolute), an atmosphere added in another unit.
+#include "check/formula/checker.hpp"
+
+namespace plumb::formula_check {
+
+bool checker::celsius_reading(const operand& o) {
+    return o.type.known && o.type.point && o.type.offset != nullptr &&
+           o.type.dim == temperature_dimension() && std::abs(o.type.offset->offset - 273.15) < 1e-9;
+}
+
+// "t_dp = 243.04 {Δ°C}*γ/(17.625 - γ)": the Magnus fit solved for the temperature (the dew
+// point from γ = ln φ + 17.625·t/(243.04 + t), Alduchov and Eskridge 1996, from memory)
+// gives a reading on the °C scale the fit was made on, though its form is a difference
+// times a ratio. Known by its constants: b from 235 to 260 °C and a from 17 to 18 over
+// water, and over ice b = 272.62 °C with a = 22.46 (WMO-No. 8, 2008, Annex 4.B, from memory).
+bool checker::magnus_solved_for_reading(const operand& o) const {
+    if (!o.type.known || o.type.point || !(o.type.dim == temperature_dimension()))
+        return false;
+    bool b_constant = false;
+    bool a_over = false;
+    const bool other = for_each_factor(o.node, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::quantity && sign > 0) {
+            const double v = quantity_si_value(n);
+            b_constant = b_constant || (v >= 235.0 && v <= 260.0) || (v >= 270.0 && v <= 275.0);
+            return false;
+        }
+        if ((n.kind == expr_kind::add || n.kind == expr_kind::subtract) && sign < 0) {
+            const std::uint32_t first = syntax::inside_brackets(file_, n.lhs);
+            if (n.kind == expr_kind::subtract && file_.nodes[first].kind == expr_kind::number) {
+                const double a = written_number(file_.nodes[first].range);
+                a_over = a_over || (a >= 17.0 && a <= 18.0) || (a >= 22.0 && a <= 23.0);
+            }
+            return false;
+        }
+        return n.kind != expr_kind::symbol && n.kind != expr_kind::number;
+    });
+    return !other && b_constant && a_over;
+}
+
+// "T_K = T_C": readings on scales with different zeros set equal or compared.
+// `relation`: "equation", "limit" or "lookup", as the finding names what it is in.
+// "T_F = (T_C - 32)/1.8": the °F-to-°C conversion applied to a °C reading to give one in °F,
+// the conversion run the wrong way (and "T_C = 1.8*T_F + 32" the other way round). Read
+// where one side is a reading and the other holds one reading and the number 32.
+bool checker::explain_reversed_fahrenheit(diagnostic& d, const operand& a, const operand& b) {
+    const auto scale_of = [&](std::string_view name) -> int {
+        const symbol_entry* e = symbols_.find(name);
+        if (e == nullptr || e->offset_unit == nullptr || !e->compact_dim ||
+            !(*e->compact_dim == temperature_dimension()))
+            return 0;
+        if (std::abs(e->offset_unit->factor - 1.0) < 1e-12)
+            return 1;                                                       // the Celsius scale
+        return std::abs(e->offset_unit->factor * 1.8 - 1.0) < 1e-9 ? 2 : 0; // Fahrenheit
+    };
+    for (const auto& [target, conversion] : {std::pair{&a, &b}, std::pair{&b, &a}}) {
+        const syntax::expr_node& t = file_.nodes[syntax::inside_brackets(file_, target->node)];
+        if (t.kind != expr_kind::symbol)
+            continue;
+        const int target_scale = scale_of(text(t.range));
+        std::string_view reading;
+        int symbols = 0;
+        bool less_32 = false;
+        bool plus_32 = false;
+        syntax::search_subtree(
+            file_, conversion->node, [&](std::uint32_t, const syntax::expr_node& n) {
+                if (n.kind == expr_kind::symbol) {
+                    reading = text(n.range);
+                    ++symbols;
+                } else if ((n.kind == expr_kind::subtract || n.kind == expr_kind::add) &&
+                           file_.nodes[n.rhs].kind == expr_kind::number &&
+                           written_number(file_.nodes[n.rhs].range) == 32.0) {
+                    (n.kind == expr_kind::subtract ? less_32 : plus_32) = true;
+                }
+                return search_step::descend;
+            });
+        if (symbols != 1 || target_scale == 0)
+            continue;
+        const int reading_scale = scale_of(reading);
+        const std::string_view target_name = text(t.range);
+        // Wanting °F from a °C reading with (t - 32)/1.8, or °C from a °F one with 1.8*t + 32.
+        const bool wants_fahrenheit = less_32 && reading_scale == 1 && target_scale == 2;
+        if (wants_fahrenheit || (plus_32 && reading_scale == 2 && target_scale == 1)) {
+            const auto form = [&](bool to_fahrenheit) {
+                return to_fahrenheit ? fmt::format("1.8*{} + 32", reading)
+                                     : fmt::format("({} - 32)/1.8", reading);
+            };
+            const char* has = wants_fahrenheit ? "°C" : "°F";
+            const char* wants = wants_fahrenheit ? "°F" : "°C";
+            d.notes.push_back({fmt::format("{} turns a {} reading into {}, but '{}' is in {} "
+                                           "already and '{}' wants {}: the conversion runs "
+                                           "the other way, {} = {}",
+                                           form(!wants_fahrenheit), wants, has, reading, has,
+                                           target_name, wants, target_name, form(wants_fahrenheit)),
+                               {}});
+            return true;
+        }
+    }
+    return false;
+}
+
+void checker::compare_origins(std::span<const operand> sides, std::string_view relation) {
+    if (report_scale_zero_beside_difference(sides))
+        return;
+    for (const auto& side : sides)
+        if (side.type.known && side.type.point && side.type.weighted_sum &&
+            std::abs(side.type.origin) > 1e-9 + (std::isfinite(side.type.origin_tolerance)
+                                                     ? side.type.origin_tolerance
+                                                     : 0.0)) {
+            report_unbalanced_readings(side);
+            return;
+        }
+    if (std::all_of(sides.begin(), sides.end(),
+                    [](const operand& side) { return side.type.origin == 0.0; }))
+        return;
+    const operand* reference = nullptr;
+    for (const auto& side : sides) {
+        if (!side.type.known || side.type.zero || side.type.numeric ||
+            !std::isfinite(side.type.origin_tolerance))
+            continue;
+        if (reference == nullptr) {
+            reference = &side;
+            continue;
+        }
+        const double slack = side.type.origin_tolerance + reference->type.origin_tolerance +
+                             1e-9 * (std::abs(side.type.origin) + 1.0);
+        const double difference = side.type.origin - reference->type.origin;
+        if (std::abs(difference) <= slack)
+            continue;
+        // "p_g = p_abs - p_atm": a gauge reads the difference from the atmosphere.
+        const auto on_gauge = [](const operand& o) {
+            return o.type.offset != nullptr && o.type.offset->scale == unit_scale::gauge;
+        };
+        // "P_d = 2*S*t/D": a stress times the shape of a wall is a net pressure too; and
+        // "p_w = 100*F/A_p", a cylinder's load over its bore, the gauge reading that holds
+        // it with the other side at the atmosphere.
+        // And "FG*TVD", a gradient times a depth: the column's pressure, as 0.052*MW*TVD
+        // is (a fracture gradient from a leak-off test is gauge-based; Bourgoyne et al.,
+        // Applied Drilling Engineering, 1986, ch. 6, from memory).
+        const auto net_pressure = [&](const operand& o) {
+            return o.type.absolute_pressure_difference ||
+                   (!o.type.point && o.type.dim == pressure_dimension() &&
+                    (pressure_scaled_by_shape(o.node, false) || force_over_area(o.node) ||
+                     gradient_times_depth(o.node)));
+        };
+        if ((on_gauge(*reference) && net_pressure(side)) ||
+            (on_gauge(side) && net_pressure(*reference)))
+            continue;
+        // "H_R = p_s - 20" with H_R a drop, "dT = t_op - 20": a reading less a bare number
+        // set equal to a difference reads the number on the reading's own scale.
+        const auto reading_less_a_number = [](const operand& o) {
+            return o.type.point && o.type.reading_or_difference && o.type.offset != nullptr;
+        };
+        const auto a_difference = [](const operand& o) {
+            return !o.type.point && !o.type.numeric && o.type.offset == nullptr &&
+                   o.type.origin == 0.0;
+        };
+        if ((reading_less_a_number(*reference) && a_difference(side)) ||
+            (reading_less_a_number(side) && a_difference(*reference)))
+            continue;
+        // "Δp_max = 0.05*p_O2": a share of a gauge pressure, the rise above the atmosphere,
+        // set equal to a quantity declared a difference.
+        const auto share_of_gauge = [&](const operand& o) {
+            return on_gauge(o) && o.type.weight_denominator != 0 &&
+                   !(o.type.weight_numerator == 1 && o.type.weight_denominator == 1);
+        };
+        if ((share_of_gauge(*reference) && a_difference(side)) ||
+            (share_of_gauge(side) && a_difference(*reference)))
+            continue;
+        if ((celsius_reading(*reference) && magnus_solved_for_reading(side)) ||
+            (celsius_reading(side) && magnus_solved_for_reading(*reference)))
+            continue;
+        const operand& off = side.type.offset != nullptr ? side : *reference;
+        const operand& other = &off == &side ? *reference : side;
+        const unit_definition* unit = off.type.offset;
+        const bool temperature = off.type.dim == temperature_dimension();
+        if (!temperature && unit != nullptr && unit->scale == unit_scale::gauge &&
+            other.type.offset == nullptr && other.type.point && read_local_atmosphere(off))
+            return;
+        const std::string scale_of_other =
+            other.type.offset != nullptr
+                ? fmt::format("the {} scale", other.type.offset->symbol)
+                : std::string(!temperature ? "the absolute scale (Pa, bar, psia)"
+                              : std::abs(other.type.scale * 1.8 - 1.0) < 1e-9
+                                  ? "the absolute scale (°R)"
+                                  : "the absolute scale (K)");
+        // "14.5*p_g + 14.7" moves the zero by 14.7 psi seen through the rounded 14.5: the
+        // step is the atmosphere, and the stray digits would only puzzle.
+        const bool one_atmosphere =
+            !temperature && std::abs(std::abs(difference) / standard_atmosphere - 1.0) < 5e-3;
+        diagnostic& d = report(
+            rules::offset_scale,
+            fmt::format("{} is on the {} scale but {} is on {}: the {} of this {} differ by {}",
+                        quote(off.node), unit != nullptr ? unit->symbol : "offset",
+                        quote(other.node), scale_of_other, "zeros", relation,
+                        one_atmosphere ? fmt::format("one atmosphere ({} Pa)",
+                                                     format_factor(standard_atmosphere))
+                                       : fmt::format("{} {}", format_factor(std::abs(difference)),
+                                                     temperature ? "K" : "Pa")),
+            file_.nodes[off.node].range);
+        add_term(d, off);
+        add_term(d, other);
+        if (temperature && explain_reversed_fahrenheit(d, side, *reference))
+            return;
+        if (unit != nullptr && other.type.offset == nullptr) {
+            // "T_K = T_F + 273.15": where a number is added already, it is the wrong one;
+            // the advice names the reading, not the whole side with that number in it.
+            const expr_kind kind = file_.nodes[off.node].kind;
+            const bool has_number = kind == expr_kind::add || kind == expr_kind::subtract;
+            const std::string reading =
+                has_number ? std::string("the reading") : display_text(file_.nodes[off.node].range);
+            std::string zero = format_factor(unit->offset / unit->factor);
+            std::string absolute_unit = absolute_symbol(*unit);
+            // "p_kPa = 6.895*p_g": the expression's numbers are in kPa by then, and so
+            // must the atmosphere added to them be.
+            // Its numbers as rounded conversions too (14.5 psi per bar is 14.5038).
+            double written_unit = off.type.scale;
+            for (std::uint32_t l = 0; l < off.type.literal_count; ++l) {
+                const scale_literal& number = literals_[off.type.literal_begin + l];
+                written_unit /= std::pow(number.value, number.exponent);
+            }
+            if (!temperature && std::isfinite(written_unit) &&
+                std::abs(written_unit / unit->factor - 1.0) > 1e-3)
+                for (const auto& u : pressure_units)
+                    if (std::abs(written_unit / u.pascals - 1.0) < 5e-3) {
+                        zero = format_factor(standard_atmosphere / u.pascals);
+                        absolute_unit = std::string(u.name);
+                    }
+            // A degree the size of the kelvin reads in kelvins from its zero; the °F's in
+            // degrees Rankine, which are 1.8 to the kelvin.
+            const bool kelvin_sized = std::abs(unit->factor - 1.0) < 1e-12;
+            std::string advice =
+                temperature
+                    ? (kelvin_sized
+                           ? fmt::format("a {} reading plus {} is in kelvins: write ({} + {}) "
+                                         "beside K, ({} + {})*1.8 beside °R",
+                                         unit->symbol, zero, reading, zero, reading, zero)
+                           : fmt::format("a {} reading plus {} is in degrees Rankine, and "
+                                         "that divided by 1.8 in kelvins: write ({} + {}) "
+                                         "beside °R, ({} + {})/1.8 beside K",
+                                         unit->symbol, zero, reading, zero, reading, zero))
+                    : fmt::format("a gauge reading plus the atmospheric pressure is "
+                                  "absolute: write ({} + p_atm), or ({} + {}) at sea level, "
+                                  "the standard atmosphere in {}",
+                                  reading, reading, zero, absolute_unit);
+            // "Δθ_h = θ_h" with Δθ_h in K "rise above ambient": the kelvins are a rise's,
+            // and a reading made absolute would only hide the slip.
+            if (temperature && file_.nodes[other.node].kind == expr_kind::symbol) {
+                const std::string_view name = text(file_.nodes[other.node].range);
+                const symbol_entry* e = symbols_.find(name);
+                const std::string_view about = e != nullptr ? e->description : "";
+                if (names_a_difference(name, about) || about.find("rise") != std::string_view::npos)
+                    advice = fmt::format("'{}' is a rise, the difference of two readings: "
+                                         "write it as one, such as ({} - T_ref), not as the "
+                                         "reading made absolute",
+                                         name, reading);
+            }
+            if (has_number) {
+                advice = fmt::format("the number added does not put the zero where the other "
+                                     "side has it; {}{}",
+                                     atmosphere_in_other_unit(off, written_unit), advice);
+                if (std::optional<std::string> in_unit_of_other =
+                        atmosphere_in_unit_of_other(off, other, written_unit))
+                    advice = std::move(*in_unit_of_other);
+            }
+            if (const std::optional<std::string> added =
+                    atmosphere_added_to_gauge(other, off, temperature))
+                advice = *added;
+            d.notes.push_back({std::move(advice), {}});
+        } else if (unit != nullptr && other.type.offset != nullptr && temperature) {
+            // "T_C = T_F/1.8 - 32", "T_F = 1.8*T_C": the conversion between the two
+            // scales with its zero left out or put in the wrong place.
+            d.notes.push_back({"a \u00B0F reading is (T_F - 32)/1.8 on the \u00B0C scale, "
+                               "32 subtracted before dividing; a \u00B0C reading is "
+                               "1.8*T_C + 32 on the \u00B0F scale",
+                               {}});
+        }
+        return;
+    }
+}
+
+// The number added to a side "reading + number", groups stripped; no_index otherwise.
+std::uint32_t checker::number_added(std::uint32_t node) const {
+    node = syntax::inside_brackets(file_, node);
+    if (file_.nodes[node].kind != expr_kind::add)
+        return syntax::no_index;
+    const std::uint32_t rhs = syntax::inside_brackets(file_, file_.nodes[node].rhs);
+    return file_.nodes[rhs].kind == expr_kind::number ? rhs : syntax::no_index;
+}
+
+// "p_0a = p_0g + 14.7" on a sheet in bar: the number is the atmosphere, in another unit.
+std::string checker::atmosphere_in_other_unit(const operand& side, double reading_unit) const {
+    const std::uint32_t number = number_added(side.node);
+    if (number == syntax::no_index || !std::isfinite(reading_unit))
+        return {};
+    const std::string_view written = text(file_.nodes[number].range);
+    const double value = read_number(written).literal.value;
+    for (const auto& u : pressure_units)
+        if (std::abs(reading_unit / u.pascals - 1.0) > 5e-3 &&
+            read_reference_state(pressure_dimension(), value, written, u.pascals) != nullptr)
+            return fmt::format("{} is the atmosphere in {}, not in the reading's unit; ", written,
+                               u.name);
+    return {};
+}
+
+// "p_wh = p_whb + 14.7" with p_wh in psia and p_whb in bar g: the atmosphere is typed in
+// the other side's unit, and the reading needs that unit too, not only the zero.
+std::optional<std::string> checker::atmosphere_in_unit_of_other(const operand& side,
+                                                                const operand& other,
+                                                                double reading_unit) const {
+    const std::uint32_t number = number_added(side.node);
+    if (number == syntax::no_index || !std::isfinite(reading_unit) ||
+        !std::isfinite(other.type.scale) || other.type.literal_count != 0 ||
+        std::abs(other.type.scale / reading_unit - 1.0) < 5e-3)
+        return std::nullopt;
+    const std::string_view written = text(file_.nodes[number].range);
+    const double value = read_number(written).literal.value;
+    for (const auto& u : pressure_units) {
+        if (std::abs(other.type.scale / u.pascals - 1.0) > 5e-3 ||
+            read_reference_state(pressure_dimension(), value, written, u.pascals) == nullptr)
+            continue;
+        const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, side.node)];
+        return fmt::format("{} is the atmosphere in {}, the unit of {}, but the reading is "
+                           "not in {}: convert it as well, ({}*{} + {})",
+                           written, u.name, quote(other.node), u.name,
+                           format_factor(reading_unit / u.pascals),
+                           display_text(file_.nodes[sum.lhs].range), written);
+    }
+    return std::nullopt;
+}
+
+// "p_psig = 14.5*p_barg + 14.7": a gauge reading, converted, with the atmosphere added is
+// absolute; the side it is set equal to is gauge, so the atmosphere is the slip.
+std::optional<std::string> checker::atmosphere_added_to_gauge(const operand& absolute,
+                                                              const operand& gauge,
+                                                              bool temperature) const {
+    const std::uint32_t number = number_added(absolute.node);
+    if (temperature || number == syntax::no_index ||
+        file_.nodes[syntax::inside_brackets(file_, gauge.node)].kind != expr_kind::symbol ||
+        !holds_gauge(file_.nodes[syntax::inside_brackets(file_, absolute.node)].lhs))
+        return std::nullopt;
+    const std::string written = display_text(file_.nodes[number].range);
+    return fmt::format("{} adds {}, the atmosphere, to a gauge reading, which makes it "
+                       "absolute, while {} is gauge: drop the {}, or declare {} absolute",
+                       quote(absolute.node), written, display_text(file_.nodes[gauge.node].range),
+                       written, display_text(file_.nodes[gauge.node].range));
+}
+
+// "p_abs = p_max + 92.1" in kPa, "p_a = p_g + 1" in bar: a number added to a gauge reading
+// that falls short of the standard atmosphere by no more than the air above the highest
+// sites does (5200 m, see declared_site_barometer) is the site's barometer, or a rounded
+// one; a note says which height it stands for.
+bool checker::read_local_atmosphere(const operand& sum) {
+    std::uint32_t k = sum.node;
+    k = syntax::inside_brackets(file_, k);
+    // Beside the gauge symbol alone, so that the number is in the symbol's unit (in
+    // 6.895*p_g + 14.7 the sum is in kPa, and 14.7 kPa no atmosphere).
+    const auto parts = number_beside_symbol(k);
+    if (!parts || !std::isfinite(sum.type.scale))
+        return false;
+    const std::uint32_t number = parts->first;
+    const double pressure = written_number(file_.nodes[number].range) * sum.type.scale;
+    if (!(pressure >= highest_site_atmosphere * standard_atmosphere &&
+          pressure <= 1.005 * standard_atmosphere))
+        return false;
+    // The barometric formula of the standard atmosphere, h = 44330.8·(1 - (p/p0)^0.190263) m.
+    const double height = 44330.8 * (1.0 - std::pow(pressure / standard_atmosphere, 0.190263));
+    diagnostic& d = report(
+        rules::trade_constant,
+        fmt::format("{} is read as the atmospheric pressure where the gauge is, {} kPa, which "
+                    "the standard atmosphere has about {} m above sea level",
+                    display_text(file_.nodes[number].range), format_factor(pressure / 1000.0),
+                    static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10)),
+        file_.nodes[number].range);
+    d.level = severity::note;
+    d.notes.push_back({"a gauge reading plus the local atmosphere is absolute; at sea level "
+                       "the standard atmosphere is 101.325 kPa (14.696 psi, 1.01325 bar)",
+                       {}});
+    return true;
+}
+
+// "SSD_ft = 1.47*V_mph*t + 1.075*V_mph^2/a": a side whose terms agree only through
+// rounded factors (1.47 for 1.4667) takes the unit those factors round, where the other
+// side's unit lies within their rounding, rather than the first one's 0.2 % off.
+void checker::settle_rounded_side(typed_term& side, std::size_t literal_base) const {
+    if (side_hint_ == nullptr || !side_hint_->known || !side.known ||
+        !(side_hint_->dim == side.dim) || !std::isfinite(side.scale) ||
+        !std::isfinite(side_hint_->scale) || side_hint_->scale <= 0.0)
+        return;
+    double rounding = 0.0;
+    for (std::size_t l = literal_base; l < literals_.size(); ++l)
+        if (literals_[l].exponent != 0.0)
+            rounding = std::max(rounding, literals_[l].tolerance * std::abs(literals_[l].exponent));
+    if (rounding > 0.0 && std::abs(side.scale / side_hint_->scale - 1.0) <= rounding) {
+        side.scale = side_hint_->scale;
+        side.exact_scale = side_hint_->exact_scale;
+    }
+}
+
+// "T_m = T_hi + T_ho", "t_film = T_s + T_a/2": readings on a scale with an arbitrary zero
+// added with weights that make neither one reading (they sum to 1) nor a difference (0).
+void checker::report_unbalanced_readings(const operand& side) {
+    const std::optional<rational> w = weight_of(side.type);
+    const unit_definition* scale = side.type.offset;
+    diagnostic& d =
+        report(rules::offset_scale,
+               fmt::format("{} adds readings on the {} scale with weights that sum to {}, not 1: "
+                           "its value depends on where the scale's zero is",
+                           quote(side.node), scale != nullptr ? scale->symbol : "offset",
+                           w ? (w->is_integer() ? fmt::format("{}", w->num())
+                                                : fmt::format("{}/{}", w->num(), w->den()))
+                             : std::string("another number")),
+               file_.nodes[side.node].range);
+    add_term(d, side);
+    d.notes.push_back({"a mean of two readings is (T_1 + T_2)/2, weights 1/2 and 1/2; a "
+                       "difference is T_1 - T_2, weights 1 and -1",
+                       {}});
+}
+
+// "dp = p_abs - p_g": the right side is the atmosphere, a reading, not a difference.
+bool checker::report_scale_zero_beside_difference(std::span<const operand> sides) {
+    for (const auto& zero : sides) {
+        if (!zero.type.known || zero.type.zero_of == nullptr)
+            continue;
+        for (const auto& other : sides) {
+            if (&other == &zero || !other.type.known || other.type.zero || other.type.numeric ||
+                other.type.point)
+                continue;
+            const unit_definition& scale = *zero.type.zero_of;
+            diagnostic& d =
+                report(rules::offset_scale,
+                       fmt::format("{} is the zero of the {} scale ({} {}) as a reading on the "
+                                   "absolute scale, but {} is a difference",
+                                   quote(zero.node), scale.symbol, format_factor(scale.offset),
+                                   zero.type.dim == temperature_dimension() ? "K" : "Pa",
+                                   quote(other.node)),
+                       file_.nodes[zero.node].range);
+            add_term(d, zero);
+            add_term(d, other);
+            d.notes.push_back(
+                {scale.scale == unit_scale::gauge
+                     ? std::string("an absolute pressure less a gauge reading of it is the "
+                                   "atmospheric pressure; a gauge reading is the absolute "
+                                   "pressure less the atmosphere's (p_abs - p_atm)")
+                     : fmt::format("a kelvin reading less a {} reading of it is the {} "
+                                   "scale's zero; a difference needs two readings on one "
+                                   "scale",
+                                   scale.symbol, scale.symbol),
+                 {}});
+            return true;
+        }
+    }
+    return false;
+}
+
+// "'D' is in mm, 'Q' in L/s": the symbols under a node declared in non-coherent units.
+std::string checker::units_in(std::uint32_t root) const {
+    std::string out;
+    // "OB/100*Q_r" with OB in % and Q_r in kg: were only the percentage named, the kilograms
+    // that make the term's unit would be missing; coherent units are named then too.
+    std::string coherent;
+    bool only_pure_numbers = true;
+    std::vector<std::uint32_t> stack{root};
+    std::size_t listed = 0;
+    while (!stack.empty() && listed < 6) {
+        const syntax::expr_node& n = file_.nodes[stack.back()];
+        stack.pop_back();
+        if (n.kind == expr_kind::symbol) {
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e != nullptr && !e->unit_text.empty() && std::abs(e->si_factor - 1.0) > 1e-12 &&
+                out.find(fmt::format("'{}'", text(n.range))) == std::string::npos) {
+                out += fmt::format("{}'{}' is in {}", out.empty() ? "" : ", ", text(n.range),
+                                   e->unit_text);
+                only_pure_numbers = only_pure_numbers && e->dim && e->dim->is_dimensionless();
+                ++listed;
+            } else if (e != nullptr && !e->unit_text.empty() && e->dim &&
+                       !e->dim->is_dimensionless() && coherent.size() < 120 &&
+                       coherent.find(fmt::format("'{}'", text(n.range))) == std::string::npos) {
+                coherent += fmt::format(", '{}' is in {}", text(n.range), e->unit_text);
+            }
+        } else if (n.kind == expr_kind::call) {
+            for (std::uint32_t i = 0; i < n.rhs; ++i)
+                stack.push_back(file_.call_args[n.lhs + i]);
+        } else if (n.kind != expr_kind::number && n.kind != expr_kind::pi &&
+                   n.kind != expr_kind::quantity && n.kind != expr_kind::inferred &&
+                   n.kind != expr_kind::reference) {
+            if (n.rhs != syntax::no_index)
+                stack.push_back(n.rhs);
+            if (n.lhs != syntax::no_index)
+                stack.push_back(n.lhs);
+        }
+    }
+    if (!out.empty() && only_pure_numbers)
+        out += coherent;
+    return out;
+}
+
+} // namespace plumb::formula_check

@@ -1,0 +1,213 @@
+// Rotation: a speed in revolutions set against radians or a rim speed without its 2π or π.
+#include "check/formula/checker.hpp"
+
+namespace plumb::formula_check {
+
+bool checker::is_rotating_power_or_torque(const compact_dimension& dim) {
+    return dim == energy_dim || dim == power_dim;
+}
+
+// "M = 60000*P/n" with M in kN·m, P in kW and n in rpm: revolutions count as cycles, so
+// the units agree without the 2π radians of a revolution that P = 2π·n·M needs (ω = 2π·n),
+// and the torque comes out 2π times too large. Asked only of an equation that relates one
+// torque, one power and one speed in revolutions, with no π or 2π written in it.
+// The same holds where a speed in revolutions meets one in radians ("ω = n/60" with ω in
+// rad/s) or a moment of inertia in a kinetic energy ("E = 0.5*I*(n/60)^2"), and a speed
+// along a rim meets one in revolutions and a diameter (v = π·D·n).
+void checker::report_revolution_without_two_pi(const syntax::formula& f,
+                                               const compact_dimension& sides_dim) {
+    rotating_part torque;
+    rotating_part speed;
+    rotating_part partner; // an angular speed in radians, or an inertia
+    rotating_part rim;     // a speed along a path (m/s, fpm)
+    rotating_part length;
+    round_length length_round = round_length::none;
+    int torques = 0;
+    int speeds = 0;
+    int powers = 0;
+    int energies = 0; // in an energy unit (J, kWh), which no torque is written in
+    int angular_speeds = 0;
+    int inertias = 0;
+    int rim_speeds = 0;
+    int lengths = 0;
+    int other_numbers = 0; // not powers of ten or 60: π/12, a screw's 2 strokes
+    const auto classify = [&](rotating_part part, const compact_dimension& dim,
+                              round_length round) {
+        if ((unit_marks_of(part.unit) & counts_revolutions) != 0) {
+            speed = part;
+            ++speeds;
+        } else if (dim == frequency_dim && part.unit.find("rad") != std::string_view::npos) {
+            partner = part;
+            ++angular_speeds;
+        } else if (dim == moment_of_inertia_dim) {
+            if (angular_speeds == 0)
+                partner = part;
+            ++inertias;
+        } else if (dim == energy_dim) {
+            bool energy_unit_named = part.unit.empty();
+            for (const std::string_view energy_unit :
+                 {"J", "Wh", "Btu", "BTU", "cal", "erg", "eV", "therm"})
+                energy_unit_named =
+                    energy_unit_named || part.unit.find(energy_unit) != std::string_view::npos;
+            if (energy_unit_named) {
+                ++energies;
+            } else {
+                torque = part;
+                ++torques;
+            }
+        } else if (dim == power_dim) {
+            ++powers;
+        } else if (dim == velocity_dim) {
+            rim = part;
+            ++rim_speeds;
+        } else if (dim == length_dim) {
+            length = part;
+            length_round = round;
+            ++lengths;
+        }
+    };
+    // Found: a 2π written in the formula, or a term this rule cannot read.
+    const std::uint32_t first_root = file_.sides[f.first_side].root;
+    const bool not_for_this_rule =
+        syntax::search_formula(file_, f, [&](std::uint32_t at, const syntax::expr_node& n) {
+            switch (n.kind) {
+            case expr_kind::pi:
+                return search_step::found;
+            case expr_kind::number: {
+                // 2π, π or their inverses written as numbers (6.283, 3.1416, 0.159), and with a
+                // minute folded in (2π/60 = 0.1047 rad/s per rpm, 60/2π = 9.549).
+                const double v = written_number(n.range);
+                for (const double c :
+                     {2.0 * std::numbers::pi, std::numbers::pi, 0.5 / std::numbers::pi,
+                      1.0 / std::numbers::pi, std::numbers::pi / 30.0, 30.0 / std::numbers::pi})
+                    if (std::abs(v / c - 1.0) < 0.003)
+                        return search_step::found;
+                // Unit conversions of length and time (10^k, 12 in/ft, 60 s/min, and
+                // their products: 720, 60000) are no pitch count or stroke factor.
+                bool conversion = false;
+                for (const double clock : {1.0, 60.0, 1.0 / 60.0})
+                    for (const double inches : {1.0, 12.0, 1.0 / 12.0}) {
+                        const double rest = v / (clock * inches);
+                        conversion = conversion || near_power_of_ten(rest, 1e-12) ||
+                                     std::abs(rest - 1.0) < 1e-12;
+                    }
+                if (!conversion)
+                    ++other_numbers;
+                return search_step::skip;
+            }
+            case expr_kind::symbol: {
+                const std::string_view name = text(n.range);
+                const symbol_entry* e = symbols_.find(name);
+                if (e == nullptr || !e->compact_dim)
+                    return search_step::found;
+                classify({name, e->unit_text}, *e->compact_dim,
+                         names_a_diameter_or_radius(name, e->description));
+                return search_step::skip;
+            }
+            case expr_kind::reference: {
+                // A workbook's cell: its unit as written, and a length's row label.
+                const syntax::reference_value& r = file_.references[n.lhs];
+                const std::optional<compact_dimension> dim =
+                    r.dim ? compact_dimension::fitted(*r.dim) : std::nullopt;
+                if (!dim)
+                    return search_step::found;
+                // The cell written to stands first, named by its unit in the tree.
+                const bool written =
+                    file_.functions == syntax::function_names::spreadsheet && at == first_root;
+                classify({written ? std::string_view() : text(n.range), r.unit_text}, *dim,
+                         r.round);
+                return search_step::skip;
+            }
+            case expr_kind::call:
+            case expr_kind::negate:
+            case expr_kind::group:
+            case expr_kind::add:
+            case expr_kind::subtract:
+            case expr_kind::multiply:
+            case expr_kind::divide:
+            case expr_kind::power:
+                return search_step::descend;
+            default:
+                return search_step::found;
+            }
+        });
+    if (not_for_this_rule)
+        return;
+    if (speeds >= 1 &&
+        (angular_speeds >= 1 || (inertias >= 1 && is_rotating_power_or_torque(sides_dim)))) {
+        report_revolutions_beside_radians(f, speed, partner, angular_speeds >= 1);
+        return;
+    }
+    if (speeds == 1 && rim_speeds == 1 && lengths == 1 && torques == 0 && powers == 0 &&
+        energies == 0 && angular_speeds == 0 && inertias == 0 && other_numbers == 0 &&
+        length_round != round_length::none) {
+        report_rim_speed_without_pi(f, speed, rim, length, length_round == round_length::radius);
+        return;
+    }
+    if (torques != 1 || speeds != 1 || powers != 1 || energies != 0)
+        return;
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("{} is a torque ({}) and {} a speed in revolutions ({}): power and "
+                           "torque meet through the 2\u03C0 radians of each revolution, P = "
+                           "2\u03C0\u00B7n\u00B7M, and this formula has no 2\u03C0, so it is "
+                           "off by 6.28319",
+                           torque.shown(), torque.unit, speed.shown(), speed.unit),
+               file_.nodes[file_.sides[f.first_side].root].range);
+    d.level = severity::warning;
+    d.notes.push_back({"revolutions count as cycles: write 2*pi*n for the angular speed "
+                       "(M = 60000*P/(2*pi*n) in N·m from kW and rpm is M = 9549*P/n), or "
+                       "declare the speed in rad/s",
+                       {}});
+}
+
+// "n_d = v/D" in rpm from a rope speed and a drum's diameter: a point on the rim travels
+// π·D per revolution, v = π·D·n (2π·r·n with a radius), which the units cannot say. Only
+// for a length named as a diameter or a radius (names_a_diameter_or_radius): a screw's
+// pitch, a chain's or a stroke travel without π (v = p·n).
+void checker::report_rim_speed_without_pi(const syntax::formula& f, const rotating_part& speed,
+                                          const rotating_part& rim, const rotating_part& length,
+                                          bool radius) {
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("{} is a speed in revolutions ({}) and {} a speed along the rim of "
+                           "{}: a point on the rim travels {} per revolution, and this formula "
+                           "has no π, so it is off by {}",
+                           speed.shown(), speed.unit, rim.shown(), length.shown(),
+                           radius ? "2π·r" : "π·D", radius ? "6.28319" : "3.14159"),
+               file_.nodes[file_.sides[f.first_side].root].range);
+    d.level = severity::warning;
+    d.notes.push_back(
+        {file_.functions == syntax::function_names::spreadsheet
+             ? fmt::format("put the {} in: multiply by {}PI(), with this formula's unit "
+                           "conversions kept beside it (a speed in revolutions counts cycles)",
+                           radius ? "2\u03C0" : "\u03C0", radius ? "2*" : "")
+             : fmt::format("put the {} in: {} = {}*{}*{}, with this formula's unit "
+                           "conversions kept beside it (a speed in revolutions counts cycles)",
+                           radius ? "2\u03C0" : "\u03C0", rim.name, radius ? "2*pi" : "pi",
+                           length.name, speed.name),
+         {}});
+}
+
+void checker::report_revolutions_beside_radians(const syntax::formula& f,
+                                                const rotating_part& speed,
+                                                const rotating_part& partner, bool angular) {
+    const std::string partner_is =
+        angular ? fmt::format("{} an angular speed in radians ({})", partner.shown(), partner.unit)
+                : fmt::format("{} a moment of inertia ({}), whose kinetic energy "
+                              "\u00BDI\u03C9\u00B2 takes the speed in radians",
+                              partner.shown(), partner.unit);
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("{} is a speed in revolutions ({}) and {}: a revolution is 2\u03C0 "
+                           "radians, and this formula has no 2\u03C0, so it is off by {}",
+                           speed.shown(), speed.unit, partner_is,
+                           angular ? "6.28319" : "6.28319 for each power of the speed"),
+               file_.nodes[file_.sides[f.first_side].root].range);
+    d.level = severity::warning;
+    d.notes.push_back({"revolutions count as cycles: the angular speed is \u03C9 = 2*pi*n "
+                       "(2*pi*n/60 in rad/s from rpm), or declare the speed in rad/s",
+                       {}});
+}
+
+} // namespace plumb::formula_check

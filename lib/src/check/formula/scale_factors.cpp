@@ -1,0 +1,555 @@
+// Factors written into a formula: trade constants, conversions folded with coefficients,
+// factors not needed, applied twice or the wrong way round.
+#include "check/formula/checker.hpp"
+
+namespace plumb::formula_check {
+
+std::optional<checker::trade_constant_reading>
+checker::read_trade_constant(std::span<const scaled_operand> parts, bool flipped) {
+    for (std::size_t i = 0; i < parts.size(); ++i)
+        for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
+            const scale_literal& l = parts[i].literals[k];
+            const std::optional<rational> printed = printed_power(l, 1.0);
+            if (!printed)
+                continue;
+            for (const trade_constant& c : trade_constants()) {
+                // A property's range is read from a number printed to three digits or more;
+                // an exact constant (the 120 of n = 120*f/p) from its value alone.
+                if (*printed < c.least || c.greatest < *printed ||
+                    (!l.factor_like && c.least != c.greatest))
+                    continue;
+                std::vector<scale_literal> literals(parts[i].literals.begin(),
+                                                    parts[i].literals.end());
+                literals[k].low = c.exact_conversion;
+                literals[k].high = c.conversion_high;
+                literals[k].value = c.exact_conversion.to_double();
+                literals[k].tolerance = 0.0;
+                std::vector<scaled_operand> changed(parts.begin(), parts.end());
+                changed[i].literals = literals;
+                const reconciliation r = flipped ? reconcile(changed, {i, k}) : reconcile(changed);
+                if (r.agree)
+                    return trade_constant_reading{&l, &c, r.unit};
+            }
+        }
+    return std::nullopt;
+}
+
+bool checker::accept_trade_constant(std::span<const scaled_operand> parts, double& unit) {
+    const auto reading = read_trade_constant(parts, false);
+    if (!reading)
+        return false;
+    const scale_literal& l = *reading->literal;
+    const trade_constant& c = *reading->constant;
+    unit = reading->unit;
+    diagnostic& d = report(rules::trade_constant,
+                           fmt::format("{} is read as {}, not as a unit conversion: the units "
+                                       "need {}, {}",
+                                       text(file_.nodes[l.node].range), c.name,
+                                       format_factor(std::nullopt, c.exact_conversion.to_double()),
+                                       c.conversion),
+                           file_.nodes[l.node].range);
+    d.level = severity::note;
+    d.notes.push_back({fmt::format("{}; source: {}", c.range_text, c.source), {}});
+    d.notes.push_back({std::string(c.caveat), {}});
+    return true;
+}
+
+// "Q*Δp*6356/η": a trade constant that reconciles the units only written the other way
+// round. Said as such, rather than as the ratio of about 6343 that it leaves.
+bool checker::report_inverted_trade_constant(std::span<const operand> ops,
+                                             std::span<const std::size_t> index,
+                                             std::span<const scaled_operand> parts) {
+    const auto reading = read_trade_constant(parts, true);
+    if (!reading)
+        return false;
+    const scale_literal& l = *reading->literal;
+    const bool divides = l.exponent < 0;
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("the factor {} is the wrong way round: it is {}, and the units "
+                           "need {} by it, not {}",
+                           text(file_.nodes[l.node].range), reading->constant->name,
+                           divides ? "a multiplication" : "a division",
+                           divides ? "a division" : "a multiplication"),
+               file_.nodes[l.node].range);
+    for (std::size_t i = 0; i < parts.size(); ++i)
+        for (const scale_literal& mine : parts[i].literals)
+            if (&mine == &l)
+                add_term_and_units(d, ops[index[i]]);
+    return true;
+}
+
+std::span<const checker::folded_constant> checker::folded_constants() {
+    static const std::array<folded_constant, 13> constants{{
+        {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false, true},
+        {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false, true},
+        // 9550 = 60000/(2π) in M = 9550*P/n (kW, rpm to N·m), 5252 = 33000/(2π) (hp, rpm
+        // to lbf·ft); 191.5 = 2π × 30.48 in the Wenner array's ρ = 2π·a·R (ft to Ω·cm).
+        {1.0 / (2.0 * std::numbers::pi), "1/(2\u03C0)",
+         "a revolution's 2\u03C0 radians (P = 2\u03C0\u00B7n\u00B7M)", false},
+        // 25.92 = 2 × 3.6² in s = v²/(25.92*a) (km/h to m/s), 1.075 = 1.467²/2 in
+        // AASHTO's 1.075*V²/a (mph to ft/s): the 2 of v²/(2a) folded in.
+        // 24 = 2 × 12 in r = d/24 (a radius in ft from a diameter in inches, common
+        // practice).
+        {0.5, "1/2", "the formula's own half (v\u00B2/(2a), a diameter from a radius)", false,
+         false, true, false, true},
+        {2.0, "2", "the formula's own 2 (v\u00B2/(2a), a radius from a diameter)", false, false,
+         true, false, true},
+        {2.0 * std::numbers::pi, "2\u03C0",
+         "the formula's 2\u03C0 (radians per revolution; the Wenner array's \u03C1 = "
+         "2\u03C0\u00B7a\u00B7R)",
+         false},
+        // 0.262 = π/12 in the belt maker's V = 0.262*D*n (in and rpm to ft/min), 0.05236 =
+        // π/60 in v = π·D·n/60 (m and rpm to m/s): a circumference's π.
+        {std::numbers::pi, "\u03C0", "a circumference's \u03C0 (v = \u03C0\u00B7D\u00B7n)", false},
+        // 3.82 = 12/π in the machine shop's n = 3.82*V/D (sfm and inches to rpm; Machinery's
+        // Handbook, speeds and feeds, from memory): the same π, dividing. Whole numbers of
+        // three digits too: 318 = 1000/π (m/min and mm to rpm), 229 = 720/π (a pump's tip
+        // speed in ft/s from inches and rpm; common practice).
+        {1.0 / std::numbers::pi, "1/\u03C0", "a circumference's \u03C0 (n = V/(\u03C0\u00B7D))",
+         true},
+        {std::numbers::ln10 / (2.0 * std::numbers::pi), "ln 10/(2\u03C0)",
+         "the steady well-flow (Thiem) formula's constant, with log10 for ln,", true},
+        {std::numbers::ln10 / (4.0 * std::numbers::pi), "ln 10/(4\u03C0)",
+         "the straight-line (Cooper-Jacob) well-test formula's constant", true},
+        // 1055 = 1440 × ln 10/π in the unconfined (Dupuit) well's Q = K(H² - h²)/(1055
+        // log10(R/r)) in gpm from gpd/ft², ft (US field form, from memory).
+        {std::numbers::ln10 / std::numbers::pi, "ln 10/\u03C0",
+         "the unconfined well-flow (Dupuit) formula's constant, with log10 for ln,", true},
+        // 622 = 0.622 × 1000 in W = 622*p_w/(p - p_w) in g/kg: the molar masses of water
+        // and dry air, 18.015/28.965 (ASHRAE Fundamentals, ch. 1, from memory).
+        {18.015 / 28.965, "0.622", "the ratio of the molar masses of water and dry air", true,
+         false, false, true},
+        // 0.463 = 1.486 × 0.3117 in Manning's full-pipe Q = 0.463/n*D^(8/3)*S^(1/2) (cfs, ft):
+        // a full circle's area π/4·D² and hydraulic radius D/4 (common practice).
+        {std::numbers::pi / 4.0 * std::pow(4.0, -2.0 / 3.0), "(\u03C0/4)\u00B74^(-2/3)",
+         "a full pipe's area and hydraulic radius (Manning's full-bore form)", false},
+    }};
+    return constants;
+}
+
+// Where a formula's own half or 2 may stand: a square (v²/(2a)), a length from a length
+// (a radius from a diameter), or two lengths in one product (the hoop stress p·D/(2t)).
+bool checker::may_hold_a_half(const operand& term) const {
+    if (term.type.dim == length_dimension() || squares_something(term.node))
+        return true;
+    int lengths = 0;
+    for_each_factor(term.node, [&](std::uint32_t at, int) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::symbol)
+            if (const symbol_entry* e = symbols_.find(text(n.range));
+                e != nullptr && e->compact_dim && *e->compact_dim == length_dimension())
+                ++lengths;
+        return lengths >= 2;
+    });
+    return lengths >= 2;
+}
+
+// Whether a subtree squares something (D^2, d*d), as the area of a circle needs.
+bool checker::squares_something(std::uint32_t node) const {
+    return syntax::search_subtree(file_, node, [&](std::uint32_t, const syntax::expr_node& n) {
+        if (n.kind == expr_kind::power && file_.nodes[n.rhs].kind == expr_kind::number &&
+            text(file_.nodes[n.rhs].range) == "2")
+            return search_step::found;
+        if (n.kind == expr_kind::multiply && file_.nodes[n.rhs].kind == expr_kind::symbol &&
+            file_.nodes[n.lhs].kind == expr_kind::symbol &&
+            text(file_.nodes[n.lhs].range) == text(file_.nodes[n.rhs].range))
+            return search_step::found;
+        return search_step::descend;
+    });
+}
+
+bool checker::accept_folded_coefficient(std::span<const operand> ops,
+                                        std::span<const std::size_t> index,
+                                        std::span<const scaled_operand> parts, double& unit) {
+    constexpr std::size_t most_numbers = 8;
+    std::array<scale_literal, most_numbers> changed_literals{};
+    std::vector<scaled_operand> changed;
+    // Whether the units reconcile with the k-th number of operand i replaced by `as`.
+    const auto reconciles_with = [&](std::size_t i, std::size_t k, const scale_literal& as) {
+        std::copy(parts[i].literals.begin(), parts[i].literals.end(), changed_literals.begin());
+        changed_literals[k] = as;
+        changed.assign(parts.begin(), parts.end());
+        changed[i].literals = {changed_literals.data(), parts[i].literals.size()};
+        const reconciliation r = reconcile(changed);
+        if (r.agree)
+            unit = r.unit;
+        return r.agree;
+    };
+    // Pass 0 reads a power of ten; each later pass one folded constant, in the table's
+    // order, over every number, so that the half of 1.075 is found before a 2 in 1.47.
+    const std::span<const folded_constant> constants = folded_constants();
+    for (std::size_t pass = 0; pass <= constants.size(); ++pass) {
+        const bool circle_pass = pass > 0;
+        for (std::size_t i = 0; i < parts.size(); ++i) {
+            if (parts[i].literals.size() > most_numbers)
+                continue;
+            for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
+                const scale_literal& l = parts[i].literals[k];
+                if (!(l.value > 0) || !std::isfinite(l.value) || l.value == 1.0 ||
+                    file_.nodes[l.node].kind != expr_kind::number)
+                    continue;
+                scale_literal as = l;
+                if (!circle_pass) {
+                    const std::optional<double> found =
+                        folded_power_of_ten(ops, index, i, l, false);
+                    if (!found)
+                        continue;
+                    double power = *found;
+                    // 1.6e7 is 16 × 10⁶ as well as 1.6 × 10⁷: the second reading where the
+                    // first does not reconcile.
+                    if (const std::optional<double> second =
+                            folded_power_of_ten(ops, index, i, l, true);
+                        second && !reconciles_with(i, k, power_of_ten_literal(l, power)))
+                        power = *second;
+                    as = power_of_ten_literal(l, power);
+                    if (!reconciles_with(i, k, as))
+                        continue;
+                    // "16e6*Q/(π*d^3)", "20*PI()": beyond one digit, a note says how the
+                    // number was read, as it may be a coefficient that only looks so.
+                    const std::string_view written = text(file_.nodes[l.node].range);
+                    const double digit = l.value / as.value;
+                    if (digit >= 10.0 || std::abs(power) < 2 ||
+                        std::abs(digit - std::round(digit)) > 1e-9) {
+                        diagnostic& d =
+                            report(rules::trade_constant,
+                                   fmt::format("{} is read as {} \u00D7 {}, the {} converting the "
+                                               "units",
+                                               written, format_factor(digit),
+                                               format_factor(as.value), format_factor(as.value)),
+                                   file_.nodes[l.node].range);
+                        d.level = severity::note;
+                    }
+                    return true;
+                }
+                // Only numbers written to 3 or more digits, as folded factors are (528
+                // too, where whole numbers must otherwise reach 1000).
+                const bool whole_two_digits =
+                    l.value >= 10.0 && l.value < 100.0 && l.value == std::round(l.value);
+                // Konya's 0.34*ρ*d^2 (π/4 × 0.4335, in² and g/cm³ to lb/ft; Konya and
+                // Walter, Surface Blast Design, from memory): a circle's constant is printed
+                // to two digits too, and read so beside a square alone, to those digits.
+                const std::string_view printed = text(file_.nodes[l.node].range);
+                const bool two_digit_decimal = printed.find('.') != std::string_view::npos &&
+                                               significant_digits(printed) == 2 && !l.factor_like;
+                if (!l.factor_like && !(l.value >= 100.0 && l.value < 1000.0) &&
+                    !whole_two_digits && !two_digit_decimal)
+                    continue;
+                // A folded factor is printed from a product worked out by hand, and its
+                // last digit is often cut rather than rounded (AASHTO's 1.075 for
+                // 1.0756): a thousandth either way.
+                as.tolerance = std::max(as.tolerance, 1e-3);
+                // 9550 for 9549.3: a whole number's trailing zeros may only place the
+                // point, and a folded factor is rounded to its significant digits.
+                // Three significant digits at least: 12000 is no rounded 15279.
+                const std::string_view written = text(file_.nodes[l.node].range);
+                const std::size_t digits = written.find_last_not_of('0') + 1;
+                if (written.find_first_of(".eE") == std::string_view::npos && digits >= 3 &&
+                    digits < written.size())
+                    as.tolerance =
+                        std::max(as.tolerance, half_unit_in_last_digit(written) / l.value);
+                {
+                    const folded_constant& c = constants[pass - 1];
+                    if (!l.factor_like && !c.whole_three_digits &&
+                        !(whole_two_digits && c.whole_two_digits) && !two_digit_decimal)
+                        continue;
+                    if (whole_two_digits && !c.whole_two_digits)
+                        continue;
+                    if (two_digit_decimal && !c.circle)
+                        continue;
+                    if (two_digit_decimal)
+                        as.tolerance =
+                            std::max(as.tolerance, half_unit_in_last_digit(printed) / l.value);
+                    // 0.1166*S*N*A_p with the plunger's area declared: its π/4 would be
+                    // counted twice; a circle's area is read only beside a square.
+                    if (c.circle && !squares_something(ops[index[i]].node))
+                        continue;
+                    if (c.half_of_a_square_or_radius && !may_hold_a_half(ops[index[i]]))
+                        continue;
+                    as.value = l.value / c.value;
+                    if (c.beside_power_of_ten && !near_power_of_ten(as.value, 1e-3))
+                        continue;
+                    as.low.reset();
+                    as.high.reset();
+                    as.power_of_ten = false;
+                    if (!reconciles_with(i, k, as))
+                        continue;
+                    // The conversion to as many digits as the number has: 9550 is 1/(2π)
+                    // times 60000, not 60004.4.
+                    int significant = 0;
+                    for (const char ch : written.substr(0, written.find_first_of("eE")))
+                        if (ch >= '1' && ch <= '9')
+                            significant = significant + 1;
+                        else if (ch == '0' && significant > 0)
+                            significant = significant + 1;
+                    if (written.find('.') == std::string_view::npos)
+                        significant = static_cast<int>(written.find_last_not_of('0') + 1);
+                    const double place = std::pow(10.0, std::floor(std::log10(as.value)) -
+                                                            std::max(significant, 3) + 1);
+                    const double shown = std::round(as.value / place) * place;
+                    diagnostic& d =
+                        report(rules::trade_constant,
+                               fmt::format("{} is read as {} times the unit conversion {}: {} "
+                                           "folded into the factor",
+                                           written, c.written, format_factor(shown), c.what),
+                               file_.nodes[l.node].range);
+                    d.level = severity::note;
+                    return true;
+                }
+            }
+        }
+    }
+    return false;
+}
+
+// The power of ten a number folds beside its coefficient, where it may: one digit times a
+// power of ten (4e6, 0.004); a whole coefficient to 99 (16e6 in τ = 16e6*T/(π*d^3) from
+// kN·m and mm to MPa); any coefficient written with that exponent (5.093e6); and ten
+// beside π (20*PI() in T = V_g*Δp/(20π) from cm³ and bar to N·m, 1 cm³·bar = 0.1 J).
+scale_literal checker::power_of_ten_literal(const scale_literal& l, double power) {
+    scale_literal as = l;
+    std::int64_t ten = 1;
+    for (int p = 0; p < std::abs(static_cast<int>(power)); ++p)
+        ten *= 10;
+    as.value = std::pow(10.0, power);
+    as.tolerance = 0.0;
+    as.power_of_ten = true;
+    as.power = static_cast<std::int8_t>(power);
+    as.factor_like = true;
+    as.table_digits = false;
+    as.low = power > 0 ? rational(ten) : rational(1, ten);
+    as.high = as.low;
+    return as;
+}
+
+// `second`: the reading one power lower, where the number has one (1.6e7 as 16 × 10⁶).
+std::optional<double> checker::folded_power_of_ten(std::span<const operand> ops,
+                                                   std::span<const std::size_t> index,
+                                                   std::size_t i, const scale_literal& l,
+                                                   bool second) const {
+    // 3600 is the seconds of an hour, no 36 × 100: a number that is a conversion itself
+    // is read as one, and where the units need another, that is the finding.
+    if (l.value >= 10.0 && common_conversion(l.value, 0.0))
+        return std::nullopt;
+    const std::string_view written = text(file_.nodes[l.node].range);
+    const std::size_t e = written.find_first_of("eE");
+    const double top = std::floor(std::log10(l.value) + 1e-12);
+    bool first_found = false;
+    for (const double power : {top, top - 1.0}) {
+        if (std::abs(power) > 18 || power == 0.0)
+            continue;
+        const double digit = l.value / std::pow(10.0, power);
+        const bool whole = std::abs(digit - std::round(digit)) <= 1e-9 * digit;
+        const bool folds =
+            // (1000 is no 10 × 100: a coefficient of ten would be a power of ten itself.)
+            // Two digits only before a large power (16e6), never in a fraction (0.5 is no
+            // 50 × 0.01).
+            (std::abs(power) >= 2 && whole && digit >= 2.0 &&
+             (power == top ? digit < 10.0
+                           : power > 0 && digit < 100.0 && std::round(digit) != 10.0)) ||
+            (std::abs(power) >= 2 && power == top && e != std::string_view::npos &&
+             std::strtol(std::string(written.substr(e + 1)).c_str(), nullptr, 10) == power) ||
+            (power == 1.0 && whole && digit >= 2.0 && digit < 10.0 && power == top &&
+             holds_pi(ops[index[i]].node)) ||
+            // 3700 in Swamee-Jain's ε/(3700*D) with ε in mm and D in m: a published
+            // constant of two digits (3.7) beside a thousand.
+            (power >= 3.0 && power == top && digit > 1.0 &&
+             std::abs(digit * 10.0 - std::round(digit * 10.0)) <= 1e-9 * digit);
+        if (!folds)
+            continue;
+        if (!second || first_found)
+            return power;
+        first_found = true;
+    }
+    return std::nullopt;
+}
+
+bool checker::holds_pi(std::uint32_t k) const {
+    return for_each_factor(
+        k, [&](std::uint32_t at, int) { return file_.nodes[at].kind == expr_kind::pi; });
+}
+
+// "E = C*M*Q/22.4/1e6*3600" with E in kg/h: the 1e6 converts, and the 3600 beside it is a
+// conversion the units do not need. A conversion-like number that the others reconcile
+// without is reported as not needed.
+bool checker::report_extra_factor(std::span<const operand> ops, std::span<const std::size_t> index,
+                                  std::span<const scaled_operand> parts, bool dimensionless) {
+    constexpr std::size_t most_numbers = 8;
+    for (std::size_t i = 0; i < parts.size(); ++i) {
+        if (parts[i].literals.size() > most_numbers)
+            continue;
+        for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
+            const scale_literal& l = parts[i].literals[k];
+            // "Q_m3h = Q_cfm*1.699*60": 1.699 is m³/h per cfm already, and the minutes
+            // in an hour beside it are counted twice.
+            if (!(looks_like_conversion(l, !dimensionless) ||
+                  converts_in_term(l, ops[index[i]].type, !dimensionless) ||
+                  spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node)) ||
+                (l.exponent == 1.0 && (l.value == 1e3 || l.value == 1e6 || l.value == 1e9) &&
+                 l.value == counted_multiple(ops[index[i]].node)))
+                continue;
+            std::array<scale_literal, most_numbers> without{};
+            std::copy(parts[i].literals.begin(), parts[i].literals.end(), without.begin());
+            without[k].value = 1.0;
+            without[k].tolerance = 0.0;
+            without[k].low = rational(1);
+            without[k].high = rational(1);
+            without[k].power_of_ten = false;
+            without[k].power = 0;
+            without[k].factor_like = false;
+            without[k].table_digits = false;
+            std::vector<scaled_operand> changed(parts.begin(), parts.end());
+            changed[i].literals = {without.data(), parts[i].literals.size()};
+            if (reconcile(changed).agree)
+                return report_unneeded(ops[index[i]], l);
+        }
+    }
+    return false;
+}
+
+// "P = E*I/L^2/1000" with P already in kN: the units agree without the factor.
+bool checker::report_unneeded_factor(std::span<const operand> ops,
+                                     std::span<const std::size_t> index,
+                                     std::span<const scaled_operand> parts, bool dimensionless) {
+    for (std::size_t i = 0; i < parts.size(); ++i) {
+        // "E_pct = f_pct*100": a percentage made a percentage again, where the term holds
+        // one and the units agree in percent without the 100.
+        const bool in_percent =
+            dimensionless && std::abs(parts[i].scale - 0.01) < 1e-12 &&
+            for_each_factor(ops[index[i]].node, [&](std::uint32_t at, int) {
+                return dimensionless_unit_size(at) == std::optional<double>(0.01);
+            });
+        // V*1000*L^3/(3*E*1000*I): conversions that cancel each other are none.
+        double net = 1.0;
+        const scale_literal* first = nullptr;
+        for (const auto& l : parts[i].literals)
+            if (converts_in_term(l, ops[index[i]].type, !dimensionless || in_percent) ||
+                spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node) ||
+                spare_speed_ratio(l, ops[index[i]].node)) {
+                net *= std::pow(l.value, l.exponent);
+                if (first == nullptr)
+                    first = &l;
+            }
+        if (first != nullptr && std::abs(net - 1.0) > 1e-9 &&
+            std::abs(net / counted_multiple(ops[index[i]].node) - 1.0) > 1e-9)
+            return report_unneeded(ops[index[i]], *first);
+    }
+    return false;
+}
+
+// "L_10 : 1 "basic rating life, millions of revolutions"" (ISO 281): a symbol whose
+// description says it counts in thousands, millions or billions, multiplied in the term,
+// so that 1e6*L_10 is its count; 1 where none does.
+double checker::counted_multiple(std::uint32_t k) const {
+    double multiple = 1.0;
+    for_each_factor(k, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (sign < 0 || n.kind != expr_kind::symbol)
+            return false;
+        const symbol_entry* e = symbols_.find(text(n.range));
+        if (e == nullptr)
+            return false;
+        const std::string_view d = e->description;
+        multiple = d.find("millions") != std::string_view::npos    ? 1e6
+                   : d.find("thousands") != std::string_view::npos ? 1e3
+                   : d.find("billions") != std::string_view::npos  ? 1e9
+                                                                   : 1.0;
+        return multiple != 1.0;
+    });
+    return multiple;
+}
+
+// "p_g*10/100": a percentage written as its number over 100 (10 % of the supply
+// pressure), no unit conversion, where the number just before the /100 is a whole one up
+// to 100.
+// "Q*0.005/100", a drift of 0.005 % of the circulation, too: a decimal number up to 100
+// that does not look like a conversion itself.
+bool checker::percentage_written_out(const scale_literal& l) const {
+    if (l.exponent != -1.0 || l.value != 100.0)
+        return false;
+    const std::string_view all = file_.source->text(span{0, file_.nodes[l.node].range.begin});
+    std::size_t at = all.find_last_not_of(' ');
+    if (at == std::string_view::npos || all[at] != '/')
+        return false;
+    const std::size_t end = all.find_last_not_of(' ', at - 1);
+    if (end == std::string_view::npos || !std::isdigit(static_cast<unsigned char>(all[end])))
+        return false;
+    std::size_t begin = end;
+    bool point = false;
+    while (begin > 0 && (std::isdigit(static_cast<unsigned char>(all[begin - 1])) ||
+                         (all[begin - 1] == '.' && !point))) {
+        point = point || all[begin - 1] == '.';
+        --begin;
+    }
+    if (begin > 0 &&
+        (all[begin - 1] == '.' || std::isalpha(static_cast<unsigned char>(all[begin - 1])) ||
+         all[begin - 1] == '_'))
+        return false;
+    const std::string_view written = all.substr(begin, end - begin + 1);
+    const number_reading& number = read_number(written);
+    const double value = number.literal.value;
+    if (point && looks_like_conversion(number.literal, true))
+        return false;
+    return value > 0 && value <= 100 && (point || value >= 1);
+}
+
+// "F*100/(100 + S)", "100*S/(100 - w)" with S in % or per 100 g: the 100 above is the
+// leading 100 of the sum below, in its unit, as the solids and solubility balances write
+// it (Mullin, Crystallization, 4th ed., ch. 11, from memory).
+bool checker::hundred_over_percent_sum(std::uint32_t term, const scale_literal& l) const {
+    if (l.value != 100.0 || l.exponent != 1.0)
+        return false;
+    return for_each_factor(term, [&](std::uint32_t at, int sign) {
+        const std::uint32_t leading = sign < 0 ? number_leading_sum(at, false) : syntax::no_index;
+        return leading != syntax::no_index && written_number(file_.nodes[leading].range) == 100.0;
+    });
+}
+
+bool checker::report_unneeded(const operand& op, const scale_literal& l) {
+    if (percentage_written_out(l) || hundred_over_percent_sum(op.node, l))
+        return false;
+    const double factor = std::pow(l.value, l.exponent);
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("the factor {} is not needed: the units of {} already agree, so "
+                           "as written it is {} times its true value",
+                           text(file_.nodes[l.node].range), quote(op.node),
+                           format_factor(printed_power(l, l.exponent), factor)),
+               file_.nodes[l.node].range);
+    add_term_and_units(d, op);
+    // 8.34 pasted from a US sheet into an SI one: say what the number is.
+    if (const std::optional<rational> printed = printed_power(l, 1.0);
+        printed && !looks_like_conversion(l, true))
+        if (const trade_constant* c = trade_constant_for(*printed))
+            d.notes.push_back(
+                {fmt::format("{} is {}; it stands for {}, and these units need no such "
+                             "conversion",
+                             text(file_.nodes[l.node].range), c->name, c->conversion),
+                 {}});
+    d.notes.push_back(
+        {"remove the factor, or declare the symbols in the units it converts from", {}});
+    return true;
+}
+
+// "M = w*L^2/8*1e6" with L in mm: the factor is needed, but the other way round.
+void checker::report_inverted_factor(const operand& op, const scale_literal& l) {
+    const double factor = std::pow(l.value, l.exponent);
+    const std::string_view written = text(file_.nodes[l.node].range);
+    const bool divides = l.exponent < 0;
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("the factor {} is the wrong way round: the units of {} "
+                           "need {} by it, not {}",
+                           written, quote(op.node), divides ? "a multiplication" : "a division",
+                           divides ? "a division" : "a multiplication"),
+               file_.nodes[l.node].range);
+    add_term_and_units(d, op);
+    // The square of a factor reads best as a decimal: 0.556516, not 1/0.556516.
+    std::string times = format_factor(printed_power(l, 2 * l.exponent), factor * factor);
+    if ((times.starts_with("1/") && times.find('.') != std::string::npos) ||
+        times.find(" (1/") != std::string::npos)
+        times = format_factor(factor * factor);
+    d.notes.push_back({fmt::format("as written the result is {} times its true value", times), {}});
+}
+
+} // namespace plumb::formula_check

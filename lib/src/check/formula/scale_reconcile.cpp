@@ -1,0 +1,619 @@
+// Whether the terms of a meeting point agree in scale (mm beside m, kW beside W) once the
+// numbers written into them are read as conversions.
+#include "check/formula/checker.hpp"
+
+namespace plumb::formula_check {
+
+// A number as written, read as a double: "0.5886", "1055", "2.31".
+double checker::written_number(span range) const {
+    return std::strtod(std::string(text(range)).c_str(), nullptr);
+}
+
+// The SI value of "14.7 {psi}" or "{p_atm}".
+double checker::quantity_si_value(const syntax::expr_node& n) const {
+    const syntax::quantity_literal& q = file_.quantities[n.lhs];
+    if (q.constant)
+        return q.si_factor;
+    const std::string_view t = text(n.range);
+    const auto number = rational::parse(t.substr(0, t.find_first_of(" \t{")));
+    return number ? number->to_double() * q.si_factor : 0.0;
+}
+
+// A side or term's units and numbers, for reconcile().
+scaled_operand checker::scaled(const typed_term& t, bool as_number) const {
+    static const rational one(1);
+    if (as_number)
+        return {1.0, &one, {}};
+    return {t.scale, t.exact_scale ? &*t.exact_scale : nullptr,
+            std::span<const scale_literal>(literals_.data() + t.literal_begin, t.literal_count)};
+}
+
+// A number that stands for a conversion, or a trade's conversion to three digits of the
+// term's own quantity (is_three_digit_conversion_of).
+bool checker::converts_in_term(const scale_literal& l, const typed_term& term,
+                               bool allow_hundred) const {
+    return stands_for_a_conversion(l, allow_hundred) ||
+           (std::abs(l.exponent) == 1.0 && file_.nodes[l.node].kind == expr_kind::number &&
+            significant_digits(text(file_.nodes[l.node].range)) == 3 &&
+            is_three_digit_conversion_of(l.value, l.tolerance, term.dim));
+}
+
+// The route below for "A = π*D^2/4": every operand in one unit (as reconcile() finds at
+// its first step, without its search) and no number that looks like a conversion (which
+// report_unneeded_factor() would name). True, with `unit` as that route sets it, exactly
+// where that route would return true without a finding; false leaves it to that route.
+bool checker::units_agree_with_plain_numbers(std::span<const operand> ops, double& unit) const {
+    static const rational one(1);
+    const typed_term* first = nullptr;
+    bool dimensionless = false;
+    for (const auto& op : ops) {
+        if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale))
+            continue;
+        dimensionless = op.type.dim.is_dimensionless();
+        if (op.type.numeric && !dimensionless)
+            continue;
+        if (first == nullptr) {
+            first = &op.type;
+            continue;
+        }
+        const double s = op.type.numeric ? 1.0 : op.type.scale;
+        const double s0 = first->numeric ? 1.0 : first->scale;
+        if (s != s0)
+            return false;
+        const rational* exact =
+            op.type.numeric ? &one : (op.type.exact_scale ? &*op.type.exact_scale : nullptr);
+        const rational* exact0 =
+            first->numeric ? &one : (first->exact_scale ? &*first->exact_scale : nullptr);
+        if (exact != nullptr && exact0 != nullptr && !(*exact == *exact0))
+            return false;
+    }
+    for (const auto& op : ops) {
+        if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale) || op.type.numeric)
+            continue;
+        for (std::uint32_t l = 0; l < op.type.literal_count; ++l) {
+            const scale_literal& number = literals_[op.type.literal_begin + l];
+            if (converts_in_term(number, op.type, !dimensionless) ||
+                spare_time_ratio(number, op.type, op.node) || spare_speed_ratio(number, op.node))
+                return false;
+            // A 100 in a term in percent: see report_unneeded_factor.
+            if (dimensionless && number.power_of_ten &&
+                std::abs(number.power * number.exponent) == 2 &&
+                std::abs(op.type.scale - 0.01) < 1e-12)
+                return false;
+        }
+    }
+    unit = first == nullptr ? 1.0 : (first->numeric ? 1.0 : first->scale);
+    return true;
+}
+
+// check_scales past its fast path, out of line so that the meeting points it settles do
+// not pay for this one's frame.
+bool checker::reconcile_scales(std::span<const operand> ops, meeting_point what, double& unit,
+                               bool with_numbers) {
+    if (with_numbers && units_agree_with_plain_numbers(ops, unit))
+        return true;
+    return reconcile_in_full(ops, what, unit);
+}
+
+// reconcile_scales past its test of plain numbers, which most meeting points with numbers
+// pass: out of line, so that those do not pay for this one's frame.
+bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what, double& unit) {
+    const std::size_t base = scaled_.size();
+    bool dimensionless = false;
+    for (std::size_t i = 0; i < ops.size(); ++i) {
+        const operand& op = ops[i];
+        if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale))
+            continue;
+        dimensionless = op.type.dim.is_dimensionless();
+        const bool number = op.type.numeric;
+        if (number && !dimensionless)
+            continue;
+        scaled_.push_back(scaled(op.type, number));
+        scaled_index_.push_back(i);
+    }
+    struct release {
+        std::vector<scaled_operand>& v;
+        std::vector<std::size_t>& w;
+        std::size_t base;
+        ~release() {
+            v.resize(base);
+            w.resize(base);
+        }
+    } const keep{scaled_, scaled_index_, base};
+    const std::span<const scaled_operand> parts(scaled_.data() + base, scaled_.size() - base);
+    const std::span<const std::size_t> index(scaled_index_.data() + base, parts.size());
+    unit = parts.empty() ? 1.0 : parts.front().scale;
+    if (parts.size() < 2)
+        return true;
+    reconciliation r = reconcile(parts);
+    if (r.agree) {
+        unit = r.unit;
+        if (!r.used_literals)
+            return !report_unneeded_factor(ops, index, parts, dimensionless);
+        return !report_extra_factor(ops, index, parts, dimensionless);
+    }
+    // A conversion factor written the wrong way round (asked of the short meeting points
+    // that formulas have; a sum of thousands of terms is not searched term by term).
+    constexpr std::size_t max_operands_for_flips = 16;
+    // A coefficient folded into a conversion (1.075 = 1.467²/2 beside 1.47*V*t) reconciles
+    // the formula as written, which a flip of another number would only seem to.
+    if (parts.size() <= max_operands_for_flips &&
+        accept_folded_coefficient(ops, index, parts, unit))
+        return true;
+    for (std::size_t i = 0; i < parts.size() && parts.size() <= max_operands_for_flips; ++i)
+        for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
+            // Any number may be the conversion written upside down (/60 for *60, /3.6,
+            // *360): only a flip that reconciles every operand counts, and the formula is
+            // reported either way; this only chooses the clearer message.
+            if (parts[i].literals[k].value == 1.0)
+                continue;
+            const reconciliation flipped = reconcile(parts, {i, k});
+            if (!flipped.agree)
+                continue;
+            report_inverted_factor(ops[index[i]], parts[i].literals[k]);
+            return false;
+        }
+    if (parts.size() <= max_operands_for_flips && accept_trade_constant(parts, unit))
+        return true;
+    if (parts.size() <= max_operands_for_flips && report_inverted_trade_constant(ops, index, parts))
+        return false;
+    // "P*d_pct + P_base" with d_pct in %: in a sum of two the term with the percentage is
+    // the one off, whichever came first; and beside a bare number ("f*L/d_mm + 4") the
+    // term with units, since the number is the formula's own.
+    // In a dimensionless sum ("ε/(3.7*D) + 5.74/Re^0.9" with ε in mm and D in m), the
+    // term whose units do not cancel is the one named, beside one whose units do.
+    const auto cancels = [&](std::size_t i) {
+        return std::abs(apparent_scale(parts[i]) - 1.0) < 1e-12;
+    };
+    if (what.what.starts_with("terms") && parts.size() == 2 &&
+        ((holds_percentage(ops[index[r.reference]].node) &&
+          !holds_percentage(ops[index[r.odd]].node)) ||
+         (ops[index[r.odd]].type.numeric && !ops[index[r.reference]].type.numeric) ||
+         (dimensionless && cancels(r.odd) && !cancels(r.reference) &&
+          !holds_percentage(ops[index[r.reference]].node))))
+        std::swap(r.odd, r.reference);
+    // "D_drum/d_r >= 18" with the drum in m and the rope in mm: the bare number is the
+    // code's limit, and the ratio beside it is what to convert.
+    if (what.what == "sides of this limit" && parts.size() == 2 && ops[index[r.odd]].type.numeric &&
+        !ops[index[r.reference]].type.numeric)
+        std::swap(r.odd, r.reference);
+    // A sum among a side's factors, "(b + z*y)*y" = A in m²: asked only here, once the
+    // terms are known to disagree, of an equation of two sides.
+    const typed_term* hint = sum_side_hint_;
+    typed_term factor_hint;
+    if (what.what.starts_with("terms") && parts.size() >= 2 && hint == nullptr &&
+        sum_checked_ != syntax::no_index && side_hint_ != nullptr &&
+        side_hint_node_ != syntax::no_index && current_->side_count == 2) [[unlikely]]
+        if (const std::optional<double> scale =
+                scale_left_for_sum(side_hint_node_, *side_hint_, sum_checked_)) {
+            factor_hint.scale = *scale;
+            hint = &factor_hint;
+        }
+    // "w = q*s + g_sw" with w and g_sw in kN/m and q in Pa: the term in the other side's
+    // unit is right, whichever came first.
+    if (what.what.starts_with("terms") && parts.size() >= 2 && hint != nullptr && hint->known &&
+        hint->literal_count == 0 && std::isfinite(hint->scale) && hint->scale > 0) [[unlikely]] {
+        const auto in_side_unit = [&](std::size_t i) {
+            return std::abs(apparent_scale(parts[i]) / hint->scale - 1.0) < 1e-9;
+        };
+        if (in_side_unit(r.odd) && !in_side_unit(r.reference))
+            std::swap(r.odd, r.reference);
+    }
+    const operand& op = ops[index[r.odd]];
+    const operand& reference = ops[index[r.reference]];
+    // What the numbers as written give: the conversion-like ones taken as conversions.
+    double ratio = apparent_scale(parts[r.reference]) / apparent_scale(parts[r.odd]);
+    std::optional<rational> exact_ratio = exact_product(apparent_exact_scale(parts[r.reference]),
+                                                        apparent_exact_scale(parts[r.odd]), true);
+    // "f = M*12/S" with M in kip·ft, S in in³ and f in psi: the 12 is no conversion by
+    // itself but part of one, and the units are off by 1000, not 12000. Where taking some
+    // of the other numbers in makes the ratio a clean power of ten, that is the ratio as
+    // written, so that following the message fixes the formula.
+    const auto clean = ratio_with_numbers(parts[r.reference], parts[r.odd], ratio,
+                                          holds_pi(reference.node), holds_pi(op.node));
+    if (clean) {
+        ratio = *clean;
+        exact_ratio.reset();
+    }
+    // "V_scf = 37.3*V_Nm3": the factor holds the reference temperatures beside the volume
+    // factor (35.31 × 288.7/273.15), which is the conversion between the two.
+    if (((symbols_.unit_marks() & at_reference_conditions) != 0 ||
+         file_.functions == syntax::function_names::spreadsheet) &&
+        reference_temperatures_reconcile(ops[index[r.odd]].node, ops[index[r.reference]].node,
+                                         parts[r.odd], parts[r.reference])) {
+        unit = parts[r.reference].scale;
+        return true;
+    }
+    // "V_N = Q_scfh + V_Nm3": gas volumes at 60 °F and at 0 °C; the factor between them
+    // holds the reference temperatures' ratio as well as the units' (37.33 scf per Nm³,
+    // not 35.31), which the advice must give.
+    std::string state_note;
+    if (const auto a = reference_volume_of(ops[index[r.odd]].node),
+        b = reference_volume_of(ops[index[r.reference]].node);
+        a && b && a->power == b->power && a->kelvins != b->kelvins) [[unlikely]] {
+        ratio /= std::pow(b->kelvins / a->kelvins, a->power);
+        exact_ratio.reset();
+        state_note = fmt::format("{} is gas at {} and {} at {}: the factor between them "
+                                 "holds the ratio of those temperatures as well as the "
+                                 "units'",
+                                 quote(ops[index[r.odd]].node), a->name,
+                                 quote(ops[index[r.reference]].node), b->name);
+    }
+    // A_cmil = d_mil^2: the circular mil is π/4 mil², so that a round wire's area in cmil is
+    // its diameter in mils squared (NIST SP 811 (2008), B.8): the circle's π/4 is the unit's,
+    // and a π written beside it counts the circle twice.
+    if ((std::abs(ratio / (std::numbers::pi / 4.0) - 1.0) < 1e-9 ||
+         std::abs(ratio * std::numbers::pi / 4.0 - 1.0) < 1e-9) &&
+        (in_circular_mils(ops[index[r.odd]].node) ||
+         in_circular_mils(ops[index[r.reference]].node)) &&
+        !holds_pi(ops[index[r.odd]].node) && !holds_pi(ops[index[r.reference]].node)) [[unlikely]] {
+        unit = parts[r.reference].scale;
+        return true;
+    }
+    // Q = C·i·A in cfs from in/h and acres, the US rational method: 1 acre·in/h is
+    // 43560/43200 = 1.0083 cfs, which the method leaves out by convention (common practice).
+    if (std::abs(ratio * 121.0 / 120.0 - 1.0) < 1e-5 ||
+        std::abs(ratio * 120.0 / 121.0 - 1.0) < 1e-5) {
+        diagnostic& d =
+            report(rules::trade_constant,
+                   fmt::format("{} and {} are 1.0083 apart, an acre-inch per hour against a "
+                               "cubic foot per second, a factor that the rational method "
+                               "(Q = C·i·A in cfs) and the irrigator's rule (1 cfs for an "
+                               "hour is an acre-inch) leave out by convention",
+                               quote(ops[index[r.odd]].node), quote(ops[index[r.reference]].node)),
+                   file_.nodes[ops[index[r.odd]].node].range);
+        d.level = severity::note;
+        unit = parts[r.reference].scale;
+        return true;
+    }
+    // "c = x_pct*c_1 + (1 - x_pct)*c_2": the sides are off by the 100 already reported in
+    // the sum inside; a second warning would advise dividing the whole side by it.
+    const bool sides = what.what.starts_with("sides of");
+    if (sides && inner_scale_ratio_ != 0.0 &&
+        (std::abs(ratio / inner_scale_ratio_ - 1.0) < 1e-6 ||
+         std::abs(ratio * inner_scale_ratio_ - 1.0) < 1e-6))
+        return false;
+    if (!sides)
+        inner_scale_ratio_ = ratio;
+    const std::optional<rational> exact_inverse = exact_product(rational(1), exact_ratio, true);
+    // A warning: in a unit-aware calc the units convert themselves; where numbers are
+    // put in as declared (spreadsheets, code), the result is off by the ratio.
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("as written, {} counts {} times as much as {}: the {} agree in "
+                           "dimension but not in unit",
+                           quote(op.node), format_factor(exact_ratio, ratio), quote(reference.node),
+                           what.name()),
+               file_.nodes[op.node].range);
+    d.level = severity::warning;
+    add_term(d, op);
+    add_term(d, reference);
+    for (const operand* side : {&op, &reference}) {
+        const std::string units = units_in(side->node);
+        if (!units.empty())
+            d.notes.push_back({fmt::format("in {}: {}", quote(side->node), units), {}});
+    }
+    // "Q*Δp/6356", "12/kWpt": a number that looks like no conversion is counted as a
+    // coefficient; say so, since it may be the conversion the engineer meant, wrongly.
+    if (!clean) {
+        std::string coefficients;
+        std::size_t coefficient_count = 0;
+        // The factor the one coefficient would have to be, were it the conversion.
+        double needed = 0.0;
+        double written = 0.0;
+        for (const std::size_t side : {r.odd, r.reference})
+            for (const scale_literal& l : parts[side].literals)
+                if (l.value != 1.0 && !looks_like_conversion(l, true) &&
+                    file_.nodes[l.node].kind == expr_kind::number &&
+                    significant_digits(text(file_.nodes[l.node].range)) >= 2 &&
+                    coefficients.size() < 80) {
+                    coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ",
+                                                text(file_.nodes[l.node].range));
+                    ++coefficient_count;
+                    written = l.value;
+                    needed = side == r.odd ? 1.0 / ratio : ratio;
+                }
+        // "u_fpm = 200*u" (m/s): a rule of thumb for 196.85. Taken as a coefficient, the
+        // advice would multiply it by the conversion; say how far it is from the factor.
+        if (const double off = written / needed - 1.0;
+            coefficient_count == 1 && std::isfinite(off) && std::abs(off) <= 0.05)
+            d.notes.push_back(
+                {fmt::format("{} is {:.2g} % {} {}, the factor these units need; if it was "
+                             "meant to convert them, write that factor",
+                             coefficients, std::abs(off) * 100.0, off > 0 ? "above" : "below",
+                             format_factor(needed)),
+                 {}});
+        else if (!coefficients.empty())
+            d.notes.push_back(
+                {fmt::format("{} counted as a coefficient, not a unit conversion; if it was "
+                             "meant to convert units, it is not the factor these units need",
+                             coefficients),
+                 {}});
+    }
+    // "divide by 3.28084 (1/0.3048)" reads better as "multiply by 0.3048".
+    bool multiply = ratio < 1;
+    std::string factor =
+        multiply ? format_factor(exact_inverse, 1.0 / ratio) : format_factor(exact_ratio, ratio);
+    // Where the advice is to multiply already, it stays so: "multiply by 10.7639", not
+    // "divide by 0.09290304"; "multiply by 59.9971", not "divide by 0.01666748".
+    if (const std::size_t inverse = factor.find(" (1/");
+        inverse != std::string::npos && factor.ends_with(")")) {
+        if (multiply) {
+            factor.erase(inverse);
+        } else {
+            factor = factor.substr(inverse + 4, factor.size() - inverse - 5);
+            multiply = true;
+        }
+    } else if (factor.starts_with("1/")) {
+        factor.erase(0, 2);
+        multiply = !multiply;
+    }
+    // "t_wo - T_2" with a °F and a °C reading: the degrees' 1.8 alone leaves the scales'
+    // zeros 32 °F apart.
+    if (op.type.offset != nullptr && reference.type.offset != nullptr &&
+        op.type.offset != reference.type.offset && op.type.dim == temperature_dimension()) {
+        const bool op_celsius = std::abs(op.type.offset->factor - 1.0) < 1e-12;
+        // Readings on scales with different zeros: the offset-scale error it is where
+        // they are set equal, not a warning about the size of their degrees alone.
+        d.rule = std::string(rules::offset_scale);
+        d.level = severity::error;
+        d.message = fmt::format("{} is on the {} scale but {} is on the {} scale: their "
+                                "degrees differ in size and their zeros lie 32 \u00B0F apart",
+                                quote(op.node), op.type.offset->symbol, quote(reference.node),
+                                reference.type.offset->symbol);
+        d.notes.push_back(
+            {fmt::format(
+                 "convert the reading, not only its degrees: {} on the {} scale is {}",
+                 quote(op.node), reference.type.offset->symbol,
+                 op_celsius
+                     ? fmt::format("(1.8*{} + 32)", display_text(file_.nodes[op.node].range))
+                     : fmt::format("({} - 32)/1.8", display_text(file_.nodes[op.node].range))),
+             {}});
+        return false;
+    }
+    if (!state_note.empty())
+        d.notes.push_back({std::move(state_note), {}});
+    // "RH <= 0.6" with RH in %: a fraction's bound beside a percentage, or a bound of 0.6 %.
+    if (what.what == "sides of this limit" && reference.type.numeric && holds_percentage(op.node)) {
+        const std::string bound = display_text(file_.nodes[reference.node].range);
+        d.notes.push_back({fmt::format("a bound up to 1 beside a percentage reads as a "
+                                       "fraction: write {} for {} as a fraction, or {} {{%}} "
+                                       "if {} % is meant",
+                                       format_factor(reference.type.value
+                                                         ? reference.type.value->to_double() * 100.0
+                                                         : 100.0),
+                                       bound, bound, bound),
+                           {}});
+        return false;
+    }
+    d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
+                                   "write the conversion factor into the formula)",
+                                   multiply ? "multiply" : "divide", quote(op.node), factor),
+                       {}});
+    return false;
+}
+
+// "0.5", "2", "4e3": one digit, as a formula's own numbers (½ρv², 2πr) are written, and
+// no conversion is; not worth a note beside a finding.
+int checker::significant_digits(std::string_view written) {
+    int digits = 0;
+    bool leading = true;
+    for (const char c : written) {
+        if (c == 'e' || c == 'E')
+            break;
+        if (c < '0' || c > '9')
+            continue;
+        if (leading && c == '0')
+            continue;
+        leading = false;
+        ++digits;
+    }
+    return digits;
+}
+
+bool checker::near_power_of_ten(double v, double tolerance) {
+    if (!(v > 0) || !std::isfinite(v))
+        return false;
+    const double k = std::round(std::log10(v));
+    return k != 0.0 && std::abs(v / std::pow(10.0, k) - 1.0) <= tolerance + 1e-9;
+}
+
+std::optional<double> checker::ratio_with_numbers(const scaled_operand& reference,
+                                                  const scaled_operand& odd, double ratio,
+                                                  bool reference_holds_pi,
+                                                  bool odd_holds_pi) const {
+    if (near_power_of_ten(ratio, 0.0) || !(ratio > 0) || !std::isfinite(ratio))
+        return std::nullopt;
+    struct candidate {
+        double factor;
+        double tolerance;
+    };
+    std::array<candidate, 8> numbers{};
+    std::size_t count = 0;
+    for (const auto* part : {&odd, &reference})
+        for (const auto& l : part->literals) {
+            if (count == numbers.size() || looks_like_conversion(l, true) || !(l.value > 0))
+                continue;
+            // The 4 of π/4·D² and the 2 of 2π are the circle's, never part of a conversion.
+            if ((l.value == 4.0 || l.value == 2.0) &&
+                (part == &odd ? odd_holds_pi : reference_holds_pi))
+                continue;
+            const double e = part == &odd ? l.exponent : -l.exponent;
+            numbers[count++] = {std::pow(l.value, e), l.tolerance * std::abs(e)};
+        }
+    // The fewest numbers first: each is more likely physics than part of a conversion.
+    std::optional<double> best;
+    int best_size = 9;
+    for (std::uint32_t mask = 1; mask < (1U << count); ++mask) {
+        const int size = std::popcount(mask);
+        if (size >= best_size)
+            continue;
+        double v = ratio;
+        double tolerance = 0.0;
+        for (std::size_t k = 0; k < count; ++k)
+            if ((mask >> k) & 1U) {
+                v *= numbers[k].factor;
+                tolerance += numbers[k].tolerance;
+            }
+        if (near_power_of_ten(v, tolerance)) {
+            best = std::pow(10.0, std::round(std::log10(v)));
+            best_size = size;
+        }
+    }
+    // "m_lb*c_us*(T_d - T_s)/24" (lb/d, Btu/(lb·°F), a °C rise, Btu/h): 24 h/d is a
+    // conversion too, and what is left is the 1.8 of the degrees. Only numbers that are
+    // conversions themselves are taken in: the 2 of 2g in f*(L/d)*V^2/(2*g) with d in
+    // inches is the formula's own, and what is missing is 12, not 24.
+    for (std::uint32_t mask = 1; !best && mask < (1U << count); ++mask) {
+        double v = ratio;
+        bool conversions = true;
+        for (std::size_t k = 0; k < count; ++k)
+            if ((mask >> k) & 1U) {
+                v *= numbers[k].factor;
+                conversions = conversions && (numbers[k].factor == 1.0 ||
+                                              common_conversion(numbers[k].factor, 0.002));
+            }
+        if (conversions)
+            best = common_conversion(v, 0.002);
+    }
+    if (!best)
+        best = ratio_with_folded_constant(reference, odd, ratio);
+    return best;
+}
+
+// NIST SP 811 (2008), B.8: in/ft, in²/ft², in³/ft³, ft/m, mm/in, cm/in, min/h, s/h, h/d,
+// gal/ft³, L/gal, lb/kg, psi/bar, kPa/psi, bbl/ft³, ft³/m³, °F/K; and the flows' m³/h per
+// L/s, gpm per L/s and per m³/h, cfm per L/s and m³/h per cfm: a ratio within `slack` of
+// one of them, or of its inverse.
+std::optional<double> checker::common_conversion(double v, double slack) {
+    static constexpr std::array<double, 22> common{
+        12.0, 144.0,   1728.0,  3.28084, 25.4,    2.54,    60.0,    3600.0,
+        24.0, 7.48052, 3.78541, 2.20462, 14.5038, 6.89476, 5.61458, 35.3147,
+        1.8,  3.6,     15.8503, 4.40287, 2.11888, 1.69901};
+    for (const double r : common)
+        for (const double candidate : {r, 1.0 / r})
+            if (std::abs(v / candidate - 1.0) <= slack)
+                return candidate;
+    return std::nullopt;
+}
+
+// "V_L = 0.1399*D^2*h_in" (bbl from ft and a height in inches): 0.1399 is π/4 times
+// 0.1781 bbl/ft³, so what is missing is the 12 of the inches, not 67.375. Where one
+// number read as a folded constant times a conversion leaves a common conversion as the
+// ratio, that ratio is the one the message advises.
+std::optional<double> checker::ratio_with_folded_constant(const scaled_operand& reference,
+                                                          const scaled_operand& odd,
+                                                          double ratio) const {
+    for (const auto* part : {&odd, &reference})
+        for (const auto& l : part->literals) {
+            // Written to three digits or more, as folded and trade constants are (0.1399,
+            // 1714, 550): a 2 or a 0.95 is the formula's own.
+            if (looks_like_conversion(l, true) || !(l.value > 0) || l.value == 1.0 ||
+                significant_digits(text(file_.nodes[l.node].range)) < 3)
+                continue;
+            const double e = part == &odd ? l.exponent : -l.exponent;
+            // The number as a conversion by itself first ((T_1 - T_2)*V_fpm/550 with V in
+            // ft/min: 550 ft·lbf/s per hp leaves the 60 of the minutes), then as each folded
+            // constant times one (9550*P_W/n: 60000/(2π) leaves the 1000 of the watts).
+            // Within the number's own printed digits: 0.2 % would let some common
+            // conversion fit one time in six, and advise it (√3 as 1.732 had left the
+            // US gallon).
+            const double slack = std::min(0.002, 2.0 * l.tolerance + 1e-4);
+            const auto leaves = [&](double constant) -> std::optional<double> {
+                const double v = ratio * std::pow(l.value / constant, e);
+                if (near_power_of_ten(v, slack) && std::abs(std::log10(v)) > 0.5)
+                    return std::pow(10.0, std::round(std::log10(v)));
+                return common_conversion(v, slack);
+            };
+            if (const auto whole = leaves(1.0))
+                return whole;
+            // Folded with a constant, a number of three digits leaves a power of ten only:
+            // with a dozen constants and as many conversions some pairing fits almost any
+            // number (25.4 as ln 10/(4π) times 139 had left the 1.8 of the degrees).
+            const bool digits_enough = significant_digits(text(file_.nodes[l.node].range)) >= 4;
+            for (const folded_constant& c : folded_constants())
+                if (const auto folded = leaves(c.value);
+                    folded && (digits_enough || near_power_of_ten(*folded, 0.0)))
+                    return folded;
+        }
+    return std::nullopt;
+}
+
+// t = V/Q*24 with t in d and Q in m³/d: a ratio of time units (24 h/d, 60, 1440, 8760, 3.6)
+// beside units that already agree, in a quantity that holds time. Without time in it (a
+// count per day from a count per hour, both declared 1) the number may be the formula's.
+// "I = 1.1*C_Ah/(H_h*60)": a term whose time cancels among its symbols (Ah over h) holds
+// time too, in its units.
+bool checker::spare_time_ratio(const scale_literal& l, const typed_term& t,
+                               std::uint32_t term) const {
+    if (!t.known || !time_ratio_number(l))
+        return false;
+    try {
+        if (!t.dim.expand().exponent(base_dimension::time).is_zero())
+            return true;
+    } catch (const std::exception&) {
+        return false;
+    }
+    // Only a unit that names minutes, hours or days: a beam's w·L³/(24·E·I) has time in
+    // its newtons and pascals, and its 24 is the formula's.
+    return for_each_factor(term, [&](std::uint32_t at, int) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::symbol) {
+            const symbol_entry* e = symbols_.find(text(n.range));
+            return e != nullptr && names_a_time_unit(e->unit_text);
+        }
+        return n.kind == expr_kind::reference &&
+               names_a_time_unit(file_.references[n.lhs].unit_text);
+    });
+}
+
+// Whether a unit's text names a time unit longer than the second, alone or inside a row
+// (A*h, L/min, kWh, gpm).
+bool checker::names_a_time_unit(std::string_view unit) {
+    static constexpr std::array<std::string_view, 22> words{
+        "min", "h",   "hr",  "d",   "day", "yr",  "Ah",   "kWh",  "Wh",   "MWh", "gpm",
+        "cfm", "gph", "mgd", "rpm", "mph", "fpm", "scfm", "acfm", "scfh", "cfh", "tph"};
+    std::size_t at = 0;
+    while (at < unit.size()) {
+        const auto letter = [&](std::size_t i) {
+            const char c = unit[i];
+            return (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || c == '_';
+        };
+        while (at < unit.size() && !letter(at))
+            ++at;
+        std::size_t end = at;
+        while (end < unit.size() && letter(end))
+            ++end;
+        const std::string_view word = unit.substr(at, end - at);
+        if (!word.empty() && std::find(words.begin(), words.end(), word) != words.end())
+            return true;
+        at = end;
+    }
+    return false;
+}
+
+// Whether `l` is a ratio of time units, multiplying or dividing.
+bool checker::time_ratio_number(const scale_literal& l) {
+    if (std::abs(l.exponent) != 1.0)
+        return false;
+    // NIST SP 811 (2008), B.8: 1 d = 24 h = 1440 min = 86 400 s; 1 h = 60 min = 3600 s;
+    // 3.6 for m³/h and L/s, km/h and m/s; 8760 h in a (365-day) year.
+    static constexpr std::array<double, 7> ratios{24.0, 60.0, 1440.0, 3600.0, 86400.0, 8760.0, 3.6};
+    return std::any_of(ratios.begin(), ratios.end(), [&](double r) { return l.value == r; });
+}
+
+// "d_r = 0.278*v*t_r" with v in m/s: km/h to m/s (1/3.6), mph to ft/s (1.467) or m/s
+// (0.447), km to miles, written to three digits beside a speed whose units agree without
+// it (NIST SP 811 (2008), B.8).
+bool checker::spare_speed_ratio(const scale_literal& l, std::uint32_t term) const {
+    if (std::abs(l.exponent) != 1.0 || !l.factor_like)
+        return false;
+    static constexpr std::array<double, 8> ratios{3.6,      1.0 / 3.6, 1.466667, 0.44704,
+                                                  0.681818, 2.236936,  1.609344, 0.621371};
+    if (std::none_of(ratios.begin(), ratios.end(),
+                     [&](double r) { return std::abs(l.value / r - 1.0) <= l.tolerance + 1e-9; }))
+        return false;
+    return has_factor_of_dimension(term, velocity_dim, 0);
+}
+
+} // namespace plumb::formula_check

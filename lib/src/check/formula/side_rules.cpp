@@ -1,0 +1,346 @@
+// Rules read from a formula's two sides as wholes: power against apparent power and energy,
+// cycles against radians, a fit constant carrying a cell's unit, Hazen-Williams' constant;
+// and the notes on how a side's units were read (a product after a slash, a ton beside a
+// power).
+#include "check/formula/checker.hpp"
+
+namespace plumb::formula_check {
+
+// "c_c : $/TR·h", "k : W/m·K": a product after a slash, which reads left to right as
+// ($/TR)·h (NIST SP 811 (2008), 6.1.6, asks for parentheses); a mismatch in a formula that
+// uses such a symbol says how it was read.
+void checker::note_unit_read_past_a_slash(diagnostic& d) const {
+    std::string named;
+    visit_nodes([&](const syntax::expr_node& n) {
+        if (n.kind != expr_kind::symbol || !named.empty())
+            return;
+        const symbol_entry* e = symbols_.find(text(n.range));
+        if (e == nullptr)
+            return;
+        const std::string_view unit = e->unit_text;
+        const std::size_t slash = unit.find('/');
+        if (slash == std::string_view::npos || unit.find('(', slash) != std::string_view::npos)
+            return;
+        // The first multiplication after the slash: "*", a space or "·".
+        std::size_t product = std::string_view::npos;
+        std::size_t mark_size = 1;
+        for (const std::string_view mark : {"*", " ", "\u00B7"})
+            if (const std::size_t at = unit.find(mark, slash); at < product) {
+                product = at;
+                mark_size = mark.size();
+            }
+        if (product == std::string_view::npos)
+            return;
+        named = fmt::format("'{}' is declared in {}, which reads left to right as ({})\u00B7{}: "
+                            "if all of it after the slash is below the line, write {}({})",
+                            text(n.range), unit, unit.substr(0, product),
+                            unit.substr(product + mark_size), unit.substr(0, slash + 1),
+                            unit.substr(slash + 1));
+    });
+    if (!named.empty())
+        d.notes.push_back({std::move(named), {}});
+}
+
+// "E_c : ton*h" beside kWh: the short ton where a ton of refrigeration was meant.
+void checker::note_ton_beside_power(diagnostic& d, std::span<const operand> sides) {
+    dimension apart;
+    try {
+        apart = (sides[0].type.dim / sides[1].type.dim).expand();
+    } catch (const std::exception&) {
+        return;
+    }
+    for (const operand& side : sides) {
+        bool noted = false;
+        for_each_factor(side.node, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind != expr_kind::symbol)
+                return false;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e == nullptr)
+                return false;
+            if (auto note = ton_of_refrigeration_note(e->unit_text, apart)) {
+                d.notes.push_back({std::move(*note), {}});
+                noted = true;
+            }
+            return noted;
+        });
+        if (noted)
+            return;
+    }
+}
+
+// "=0.61094*EXP(17.625*C4/(C4+243.04))" beside kPa (the Magnus fit of saturation
+// pressure): a workbook's numbers carry no units, so a number times a function of
+// dimensionless arguments is an empirical fit whose constant is in the cell's unit. Read
+// so, with a note; in the notation the constant is written with its unit.
+bool checker::fit_constant_carries_cell_unit(std::span<const operand> sides) {
+    const operand& formula = sides[1];
+    if (!formula.type.known || !sides[0].type.known || sides[0].type.offset != nullptr ||
+        formula.type.offset != nullptr)
+        return false;
+    std::uint32_t constant = syntax::no_index;
+    bool function = false;
+    bool fractional_power = false;
+    bool flow_power = false;     // Hazen-Williams' 1.85 or 1.852 on the flow
+    bool diameter_power = false; // and its 4.87 on the bore
+    const bool other = for_each_factor(formula.node, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::number && sign > 0 && constant == syntax::no_index) {
+            constant = at;
+            return false;
+        }
+        if (n.kind == expr_kind::call) {
+            function = true;
+            return false;
+        }
+        // "=0.0195*C12^0.77*C13^-0.385" (Kirpich's time of concentration): a power law
+        // fitted to data, its exponents not whole.
+        if (n.kind == expr_kind::power) {
+            std::uint32_t e = n.rhs;
+            if (file_.nodes[e].kind == expr_kind::negate)
+                e = file_.nodes[e].lhs;
+            if (file_.nodes[e].kind != expr_kind::number)
+                return true;
+            const double v = written_number(file_.nodes[e].range);
+            fractional_power = fractional_power || v != std::round(v);
+            flow_power = flow_power || (v >= 1.85 && v <= 1.852);
+            diameter_power = diameter_power || (v >= 4.86 && v <= 4.871);
+            return false;
+        }
+        return n.kind != expr_kind::reference;
+    });
+    // A function's fit gives a pure number scaled by its constant; a power law, any
+    // dimension, which its constant makes up.
+    if (other || constant == syntax::no_index ||
+        !(fractional_power || (function && formula.type.dim.is_dimensionless())))
+        return false;
+    std::string carries;
+    try {
+        carries = describe((sides[0].type.dim / formula.type.dim).expand());
+    } catch (const std::exception&) {
+        return false;
+    }
+    if (flow_power && diameter_power && report_hazen_williams_constant(sides, constant))
+        return true;
+    diagnostic& d = report(rules::trade_constant,
+                           fmt::format("{} is read as an empirical fit's constant, carrying "
+                                       "{} for the unit written for its cell",
+                                       display_text(file_.nodes[constant].range), carries),
+                           file_.nodes[constant].range);
+    d.level = severity::note;
+    d.notes.push_back({"the fit holds only with its inputs in the units it was made for", {}});
+    return true;
+}
+
+// "=4.52*Q^1.85/(C^1.85*D^4.87)" in psi/ft with Q in gpm and D in inches (Hazen-Williams as
+// the fire-protection and water trades print it, from memory): the constant is 10.67 in SI
+// units for a head, and 10.67 times water's specific weight (9.76 to 9.81 kN/m³) for a
+// pressure. Restated for the cell's units it must land on one of them; a bore in mm where
+// the form takes inches lands far off, and the cell is then wrong, not a fit.
+bool checker::report_hazen_williams_constant(std::span<const operand> sides,
+                                             std::uint32_t constant) {
+    // Every number of the formula counts: 6.05*10^5 and a 3.785 for gpm to L/min too.
+    double written = 1.0;
+    for (std::uint32_t k = 0; k < sides[1].type.literal_count; ++k) {
+        const scale_literal& l = literals_[sides[1].type.literal_begin + k];
+        written *= std::pow(l.value, l.exponent);
+    }
+    if (!(written > 0) || !std::isfinite(written) || !std::isfinite(sides[0].type.scale) ||
+        !std::isfinite(sides[1].type.scale) || !(sides[1].type.scale > 0))
+        return false;
+    const double si = written * sides[0].type.scale / sides[1].type.scale;
+    bool pressure = false;
+    try {
+        pressure = !sides[0].type.dim.expand().exponent(base_dimension::mass).is_zero();
+    } catch (const std::exception&) {
+        return false;
+    }
+    // Water's specific weight between 0 and 30 °C, in N/m³ (kg/L × 1000 × g_n).
+    const double gamma_low = water_density_least().to_double() * 1000.0 * 9.80665;
+    const double gamma_high = water_density_greatest().to_double() * 1000.0 * 9.80665;
+    const double low = hazen_williams_si * (pressure ? gamma_low : 1.0);
+    const double high = hazen_williams_si * (pressure ? gamma_high : 1.0);
+    if (si >= low * 0.97 && si <= high * 1.03)
+        return false;
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("{} restated for the units of the cell and its inputs is {:.4g} in SI "
+                           "units, where Hazen-Williams' constant is 10.67 for a head{}: an input "
+                           "is in a unit its form does not take",
+                           display_text(file_.nodes[constant].range), si,
+                           pressure ? ", 104,600 for a pressure in water" : ""),
+               file_.nodes[sides[1].node].range);
+    d.level = severity::warning;
+    d.notes.push_back({"4.52 takes gpm and inches for psi/ft, 10.67 m³/s and metres for m/m, "
+                       "6.05e5 L/min and mm for bar/m (the form's source names its units)",
+                       {}});
+    return true;
+}
+
+// Rules for units that the file declares (symbol_table::unit_marks), asked of an equation
+// whose sides agree.
+void checker::ask_of_marked_units(const syntax::formula& f, std::span<const operand> sides) {
+    if (sides.size() != 2 || !sides[0].type.known)
+        return;
+    const std::uint8_t marks = symbols_.unit_marks();
+    if ((marks & counts_revolutions) != 0 &&
+        (is_rotating_power_or_torque(sides[0].type.dim) || sides[0].type.dim == frequency_dim ||
+         sides[0].type.dim == velocity_dim))
+        report_revolution_without_two_pi(f, sides[0].type.dim);
+    else if ((marks & at_reference_conditions) != 0 && is_gas_volume_or_flow(sides[0].type.dim)) {
+        const std::size_t findings_before = out_.size();
+        report_actual_volume_as_normal(sides);
+        if (out_.size() == findings_before)
+            report_reference_temperatures_left_out(sides);
+    } else if ((marks & at_reference_conditions) != 0) {
+        for (const operand& side : sides)
+            if (report_normal_measure_times_actual_volume(side) ||
+                (sides[0].type.dim == power_dim && report_power_from_normal_flow(side)) ||
+                (sides[0].type.dim == velocity_dim && report_velocity_from_normal_flow(side)) ||
+                report_reference_states_in_ratio(side))
+                break;
+    }
+    if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
+        report_apparent_as_real_power(sides);
+    else if ((marks & apparent_power) != 0)
+        for (const operand& side : sides)
+            if (report_energy_over_apparent_power(side))
+                break;
+}
+
+// "f_1 = sqrt(k/M)" with f_1 in Hz: √(k/m) and √(g/δ) are angular frequencies, in rad/s,
+// and a frequency in cycles is that over 2π (f = √(k/m)/(2π), Chopra, Dynamics of
+// Structures, ch. 2, from memory). The units cannot say so, as a radian is 1. Asked where
+// one side is a symbol in Hz and the other a square root with no number beside it.
+void checker::report_angular_frequency_as_cycles(std::span<const operand> sides) {
+    for (std::size_t i = 0; i < 2; ++i) {
+        const std::uint32_t cycles = syntax::inside_brackets(file_, sides[i].node);
+        const std::uint32_t root = syntax::inside_brackets(file_, sides[1 - i].node);
+        const syntax::expr_node& c = file_.nodes[cycles];
+        const syntax::expr_node& r = file_.nodes[root];
+        if (c.kind != expr_kind::symbol || r.kind != expr_kind::call)
+            continue;
+        const symbol_entry* e = symbols_.find(text(c.range));
+        if (e == nullptr || e->unit_text.find("Hz") == std::string_view::npos ||
+            text(call_name_range(r)) != "sqrt")
+            continue;
+        // sqrt(f_1*f_2), a mean of two frequencies, is in cycles already.
+        const bool frequencies_inside =
+            syntax::search_subtree(file_, root, [&](std::uint32_t, const syntax::expr_node& n) {
+                if (n.kind != expr_kind::symbol)
+                    return search_step::descend;
+                const symbol_entry* inner = symbols_.find(text(n.range));
+                return inner != nullptr && inner->compact_dim &&
+                               *inner->compact_dim == frequency_dim
+                           ? search_step::found
+                           : search_step::skip;
+            });
+        if (frequencies_inside)
+            continue;
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("{} is in cycles per second ({}), but {} is an angular frequency, "
+                               "in radians per second: a cycle is 2\u03C0 radians, so as written "
+                               "it is 6.28319 times too high",
+                               quote(cycles), e->unit_text, quote(root)),
+                   file_.nodes[root].range);
+        d.level = severity::warning;
+        d.notes.push_back({fmt::format("write {}/(2*pi), or declare {} in rad/s as \u03C9",
+                                       display_text(r.range), text(c.range)),
+                           {}});
+        return;
+    }
+}
+
+// "t = 60*E_bat/S_ups" with E in kWh and S in kVA: a battery's or a tank's energy lasts
+// as long as the real power drawn from it, the apparent power times the power factor
+// (and over the inverter's efficiency; IEEE 1184, from memory). Asked of a product that
+// divides an energy by an apparent power with no power factor beside it.
+bool checker::report_energy_over_apparent_power(const operand& side) {
+    std::uint32_t energy = syntax::no_index;
+    std::uint32_t apparent = syntax::no_index;
+    bool factor_beside = false;
+    for_each_factor(side.node, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind != expr_kind::symbol)
+            return false;
+        const std::string_view name = text(n.range);
+        const symbol_entry* e = symbols_.find(name);
+        if (e == nullptr || !e->compact_dim)
+            return false;
+        if ((unit_marks_of(e->unit_text) & apparent_power) != 0 && sign < 0)
+            apparent = at;
+        else if (*e->compact_dim == energy_dim && sign > 0 &&
+                 (e->unit_text.find("Wh") != std::string_view::npos ||
+                  e->unit_text.find('J') != std::string_view::npos))
+            energy = at;
+        else if (e->compact_dim->is_dimensionless() && names_power_factor(name))
+            factor_beside = true;
+        return false;
+    });
+    if (energy == syntax::no_index || apparent == syntax::no_index || factor_beside)
+        return false;
+    const symbol_entry& s = *symbols_.find(text(file_.nodes[apparent].range));
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("{} is an apparent power ({}): {} lasts as long as the real power drawn "
+                           "from it, which is the apparent power times the power factor, and this "
+                           "formula leaves the power factor out",
+                           quote(apparent), s.unit_text, quote(energy)),
+               file_.nodes[side.node].range);
+    d.level = severity::warning;
+    d.notes.push_back({"divide by the real power, S*pf (and over the inverter's or the "
+                       "drive's efficiency where there is one)",
+                       {}});
+    return true;
+}
+
+// A power factor or an efficiency by its name: pf, cosφ, η. Not by a description, which
+// "pf, DoD : 1 "power factor, depth of discharge"" shares between two names.
+bool checker::names_power_factor(std::string_view name) {
+    for (const std::string_view part : {"pf", "PF", "cos", "\u03B7", "eta", "eff"})
+        if (name.find(part) != std::string_view::npos)
+            return true;
+    return false;
+}
+
+// "P_e = S" with S in kVA and P_e in kW: apparent power is the real power over the power
+// factor; the units alone cannot say so, as both are watts to the dimension.
+// A workbook's cells count as symbols here: "=C11" under kW with C11 in kVA.
+void checker::report_apparent_as_real_power(std::span<const operand> sides) {
+    const std::uint32_t left = sole_symbol_times_conversions(sides[0].node, true);
+    const std::uint32_t right = sole_symbol_times_conversions(sides[1].node, true);
+    if (left == syntax::no_index || right == syntax::no_index)
+        return;
+    const std::optional<std::string_view> a = declared_unit_text(left);
+    const std::optional<std::string_view> b = declared_unit_text(right);
+    if (!a || !b)
+        return;
+    const bool a_apparent = (unit_marks_of(*a) & apparent_power) != 0;
+    const bool b_apparent = (unit_marks_of(*b) & apparent_power) != 0;
+    if (a_apparent == b_apparent)
+        return;
+    const std::uint32_t apparent_node = a_apparent ? left : right;
+    const std::uint32_t real_node = a_apparent ? right : left;
+    const std::string_view apparent = a_apparent ? *a : *b;
+    const std::string_view real = a_apparent ? *b : *a;
+    if (real.find('W') == std::string_view::npos)
+        return;
+    diagnostic& d = report(
+        rules::unit_scale,
+        fmt::format("'{}' is an apparent power ({}) and '{}' a real power ({}): they differ by "
+                    "the power factor, which this formula leaves out",
+                    text(file_.nodes[apparent_node].range), apparent,
+                    text(file_.nodes[real_node].range), real),
+        file_.nodes[sides[1].node].range);
+    d.level = severity::warning;
+    d.notes.push_back({"real power is the apparent power times the power factor, P = S*pf "
+                       "(and S = sqrt(3)*V*I for three phases)",
+                       {}});
+}
+
+bool checker::is_gas_volume_or_flow(const compact_dimension& dim) {
+    return dim == volume_dim || dim == volume_flow_dim;
+}
+
+} // namespace plumb::formula_check
