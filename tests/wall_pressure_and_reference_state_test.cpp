@@ -411,6 +411,10 @@ TEST_CASE("a gas's velocity from a flow at reference conditions") {
                plumb::rules::unit_scale);
     passes(duct, {"V_d = Q_a/(3600*A_d)", "V_d = Q_n*T/T_n/(3600*A_d)",
                   "V_d = Q_n*(p_n/p)*(T/T_n)/(3600*A_d)", "V_d = 4*Q_a/(3600*pi*D^2)"});
+    // A fan's speed in rpm or a supply's frequency in Hz declared beside them, as a fan or
+    // baghouse calc does, once hid the finding (the rotation rules took the velocity first).
+    fails_with(duct + "n_f : rpm \"fan speed\"\nf : Hz\n", {"V_d = Q_n/(3600*A_d)"},
+               plumb::rules::unit_scale);
 }
 
 TEST_CASE("an actual gas volume converted between units but not to reference conditions") {

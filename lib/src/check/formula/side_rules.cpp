@@ -183,22 +183,27 @@ void checker::ask_of_marked_units(const syntax::formula& f, std::span<const oper
     if (sides.size() != 2 || !sides[0].type.known)
         return;
     const std::uint8_t marks = symbols_.unit_marks();
+    const std::size_t findings_before_rotation = out_.size();
     if ((marks & counts_revolutions) != 0 &&
         (is_rotating_power_or_torque(sides[0].type.dim) || sides[0].type.dim == frequency_dim ||
          sides[0].type.dim == velocity_dim))
         report_revolution_without_two_pi(f, sides[0].type.dim);
-    else if ((marks & at_reference_conditions) != 0 && is_gas_volume_or_flow(sides[0].type.dim)) {
-        const std::size_t findings_before = out_.size();
-        report_actual_volume_as_normal(sides);
-        if (out_.size() == findings_before)
-            report_reference_temperatures_left_out(sides);
-    } else if ((marks & at_reference_conditions) != 0) {
-        for (const operand& side : sides)
-            if (report_normal_measure_times_actual_volume(side) ||
-                (sides[0].type.dim == power_dim && report_power_from_normal_flow(side)) ||
-                (sides[0].type.dim == velocity_dim && report_velocity_from_normal_flow(side)) ||
-                report_reference_states_in_ratio(side))
-                break;
+    // A speed in rpm declared anywhere in the file must not hide a gas velocity taken from a
+    // flow at reference conditions: where the rotation rules found nothing, these still ask.
+    if (out_.size() == findings_before_rotation && (marks & at_reference_conditions) != 0) {
+        if (is_gas_volume_or_flow(sides[0].type.dim)) {
+            const std::size_t findings_before = out_.size();
+            report_actual_volume_as_normal(sides);
+            if (out_.size() == findings_before)
+                report_reference_temperatures_left_out(sides);
+        } else {
+            for (const operand& side : sides)
+                if (report_normal_measure_times_actual_volume(side) ||
+                    (sides[0].type.dim == power_dim && report_power_from_normal_flow(side)) ||
+                    (sides[0].type.dim == velocity_dim && report_velocity_from_normal_flow(side)) ||
+                    report_reference_states_in_ratio(side))
+                    break;
+        }
     }
     if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
         report_apparent_as_real_power(sides);
