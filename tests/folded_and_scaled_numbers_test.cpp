@@ -1020,3 +1020,17 @@ TEST_CASE("a unit with a product after its slash is named where its formula fail
     CHECK(plumb::test::says(first_under(r, plumb::rules::side_mismatch), "write W/(m·K)"));
     CHECK(problems_in(run(d, "q = k_2*ΔT/L")) == 0);
 }
+
+// A weir or orifice sized from millimetres, each length over 1000 into metres and the m³/s
+// times 1000 into L/s (1 L = 10⁻³ m³, SI Brochure 9th ed., Table 8): every number converts,
+// and none is extra. One left out, or one more, is still reported.
+TEST_CASE("a length per symbol converted, then the volume into litres") {
+    const std::string weir = "D_o, h_o : mm\nV_L : L\nA_L : L/m\nQ_o : L/s\nC_d : 1\n";
+    passes(weir, {"V_L = 1000*(D_o/1000)*(h_o/1000)^2", "A_L = 1000*(D_o/1000)*(h_o/1000)",
+                  "V_L = (D_o/1000)*(h_o/1000)^2*1000",
+                  "Q_o = 1000*(2/3)*C_d*sqrt(2*{g_n})*pi*(D_o/1000)*(h_o/1000)^1.5"});
+    fails_with(weir,
+               {"V_L = (D_o/1000)*(h_o/1000)^2", "V_L = 1000*D_o*(h_o/1000)^2",
+                "V_L = 1000*1000*(D_o/1000)*(h_o/1000)^2"},
+               plumb::rules::unit_scale);
+}

@@ -1093,6 +1093,8 @@ class checker {
                                               std::span<const std::size_t> index, std::size_t i,
                                               const scale_literal& l, bool second) const;
     bool holds_pi(std::uint32_t k) const;
+    bool conversions_all_needed(std::span<const operand> ops, std::span<const std::size_t> index,
+                                std::span<const scaled_operand> parts, bool dimensionless) const;
     bool report_extra_factor(std::span<const operand> ops, std::span<const std::size_t> index,
                              std::span<const scaled_operand> parts, bool dimensionless);
     bool report_unneeded_factor(std::span<const operand> ops, std::span<const std::size_t> index,

@@ -369,11 +369,42 @@ bool checker::holds_pi(std::uint32_t k) const {
         k, [&](std::uint32_t at, int) { return file_.nodes[at].kind == expr_kind::pi; });
 }
 
+// "V_L = 1000*(D/1000)*(h/1000)^2" with D and h in mm: every conversion-like number, each
+// taken as a conversion, brings the units to agree (mm to m twice, m³ to L), so none is
+// extra; leaving one out would agree only by reading another one as a coefficient.
+bool checker::conversions_all_needed(std::span<const operand> ops,
+                                     std::span<const std::size_t> index,
+                                     std::span<const scaled_operand> parts,
+                                     bool dimensionless) const {
+    double common = 0.0;
+    double slack = 1e-9;
+    bool converts = false;
+    for (std::size_t i = 0; i < parts.size(); ++i) {
+        double by = 1.0;
+        for (const scale_literal& l : parts[i].literals)
+            if (looks_like_conversion(l, !dimensionless) ||
+                converts_in_term(l, ops[index[i]].type, !dimensionless) ||
+                spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node)) {
+                by *= std::pow(l.value, l.exponent);
+                slack += std::abs(l.exponent) * l.tolerance;
+                converts = true;
+            }
+        const double unit = parts[i].scale / by;
+        if (i == 0)
+            common = unit;
+        else if (!(std::abs(unit / common - 1.0) <= slack))
+            return false;
+    }
+    return converts;
+}
+
 // "E = C*M*Q/22.4/1e6*3600" with E in kg/h: the 1e6 converts, and the 3600 beside it is a
 // conversion the units do not need. A conversion-like number that the others reconcile
 // without is reported as not needed.
 bool checker::report_extra_factor(std::span<const operand> ops, std::span<const std::size_t> index,
                                   std::span<const scaled_operand> parts, bool dimensionless) {
+    if (conversions_all_needed(ops, index, parts, dimensionless))
+        return false;
     constexpr std::size_t most_numbers = 8;
     for (std::size_t i = 0; i < parts.size(); ++i) {
         if (parts[i].literals.size() > most_numbers)
