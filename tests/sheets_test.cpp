@@ -94,6 +94,12 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     CHECK(read_unit_text("\u0394\u00B0C")->offset == nullptr);
     CHECK_FALSE(read_unit_text("Flow rate"));
     CHECK_FALSE(read_unit_text("OK"));
+    // A pipe's nominal size typed right of its flow, as hydraulic calc forms print it, is a
+    // size, not the flow's unit (common practice); a reciprocal unit still reads.
+    for (const char* size : {"1 in", "2 in", "1.5 in", "25 mm"})
+        CHECK_FALSE_MESSAGE(read_unit_text(size), size);
+    CHECK(read_unit_text("1/s")->dim == plumb::test::typed(0, 0, -1));
+    CHECK(read_unit_text("1/min")->scale == doctest::Approx(1.0 / 60.0));
     CHECK(read_heading_unit("Flow [m3/s]")->dim == plumb::test::typed(0, 3, -1));
     CHECK(read_heading_unit("D (mm)")->scale == doctest::Approx(1e-3));
     CHECK(read_heading_unit("cp [kJ/(kg\u00B7K)]")->dim == plumb::test::typed(0, 2, -2, -1));

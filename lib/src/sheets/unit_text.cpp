@@ -343,6 +343,11 @@ std::optional<written_unit> evaluate(std::string_view text, std::string_view mea
     std::string t = trim(text);
     if (t.empty() || t.size() > 40)
         return std::nullopt;
+    // "1 in", "3 ft": a size typed in a cell (a pipe's nominal size right of its flow, as
+    // hydraulic calc forms print it), not a unit; "1/s" is one.
+    if (const std::size_t number_end = t.find_first_not_of("0123456789.");
+        number_end != 0 && number_end != std::string::npos && t[number_end] == ' ')
+        return std::nullopt;
     // A sidecar's own measure comes before the trade's spelling: "BHP" is mechanical
     // horsepower as the trades spell it, unless the sidecar says the boiler's.
     if (!defines(measures, t))
