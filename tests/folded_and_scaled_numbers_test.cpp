@@ -525,6 +525,22 @@ TEST_CASE("a rate's temperature correction counts kelvins above a reference") {
                plumb::rules::offset_scale);
 }
 
+// A conductor's resistance at θ, R = R_20·(1 + α_20·(θ - 20)) with θ in °C and α_20 = 0.00393
+// per K for copper (IEC 60287-1-1, Table 1, from memory): the reference is on the reading's
+// scale. A kelvin reading less 20 counts from 20 K; a °C reading less 293 from 293 °C.
+TEST_CASE("a linear temperature correction's reference on the other scale") {
+    const std::string decl = "R_20, R_t : ohm\nα_R : 1/K\nT_K : K\nθ_c : °C\nθ : 1\nk : 1\n";
+    passes(decl, {"R_t = R_20*(1 + α_R*(θ_c - 20))", "R_t = R_20*(1 + α_R*(T_K - 293.15))",
+                  "R_t = R_20*(1 + α_R*(T_K - 20 - 273.15))", "R_t = R_20*(1 + (θ_c - 20)*α_R)"});
+    fails_with(decl,
+               {"R_t = R_20*(1 + α_R*(T_K - 20))", "R_t = R_20*(1 + α_R*(θ_c - 293))",
+                "R_t = R_20*(1 + (T_K - 20)*α_R)", "k = θ^(θ_c - 293)"},
+               plumb::rules::offset_scale);
+    const auto r = run(decl, "R_t = R_20*(1 + α_R*(T_K - 20))");
+    CHECK(first_under(r, plumb::rules::offset_scale).message.find("counts from 20 K") !=
+          std::string::npos);
+}
+
 // Thiem: T = Q·ln(r_2/r_1)/(2π·(s_1 − s_2)); Cooper-Jacob: T = 2.3·Q/(4π·Δs) (Freeze and
 // Cherry, Groundwater, 1979, ch. 8, from memory); 1 d = 1440 min (NIST SP 811 (2008), B.8), so
 // in gal/(d·ft) from gpm and ft the coefficients are 1440·ln 10/(2π) = 527.7 and

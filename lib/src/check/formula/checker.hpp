@@ -99,6 +99,7 @@ constexpr compact_dimension moment_of_inertia_dim = compact_dimension::whole({1,
 constexpr compact_dimension mass_dim = compact_dimension::whole({1, 0, 0, 0, 0, 0, 0});
 constexpr compact_dimension mass_flow_dim = compact_dimension::whole({1, 0, -1, 0, 0, 0, 0});
 constexpr compact_dimension density_dim = compact_dimension::whole({1, -3, 0, 0, 0, 0, 0});
+constexpr compact_dimension per_kelvin = compact_dimension::whole({0, 0, 0, -1, 0, 0, 0});
 // A volume flow times a specific energy: cfm·Δh in q = 4.5·cfm·Δh (common practice).
 constexpr compact_dimension volume_flow_enthalpy_dim =
     compact_dimension::whole({0, 5, -3, 0, 0, 0, 0});
@@ -1215,6 +1216,7 @@ class checker {
     [[gnu::noinline]] bool fitted_on_scale(std::uint32_t numerator, std::uint32_t denominator,
                                            const typed_term& top, const typed_term& below) const;
     [[gnu::noinline]] void report_celsius_fit_beside_kelvins(std::uint32_t denominator);
+    [[gnu::noinline]] void report_reference_on_other_scale(std::uint32_t difference);
     bool empirical_over_reading(std::uint32_t numerator, const typed_term& below) const;
     bool holds_specific_energy_term(std::uint32_t root) const;
     [[gnu::noinline]] void note_enthalpy_side(const operand& first, std::uint32_t root);

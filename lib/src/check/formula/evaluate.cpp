@@ -765,6 +765,11 @@ typed_term checker::eval_factors(std::uint32_t index) {
             settle_half_conversion(result, factor, evaluated))
             factor = reinterpret_cast<const typed_term*>(evaluated);
         const typed_term& t = *factor;
+        // α*(T - 20): a coefficient per kelvin times a reading less its reference.
+        if (!divided && ((t.reading_or_difference && result.known && result.dim == per_kelvin) ||
+                         (k == spine_.size() && result.reading_or_difference && t.known &&
+                          t.dim == per_kelvin))) [[unlikely]]
+            report_reference_on_other_scale(t.reading_or_difference ? op.rhs : n);
         if (divided)
             for (std::uint32_t i = 0; i < t.literal_count; ++i)
                 literals_[t.literal_begin + i].exponent = -literals_[t.literal_begin + i].exponent;
@@ -1119,6 +1124,13 @@ typed_term checker::temperature_correction(const typed_term& base, const typed_t
         d.notes.push_back({"write the reading in °C, or subtract the reference in kelvins "
                            "(T - 293.15 for 20 °C)",
                            {}});
+        result = unknown_type();
+        return result;
+    }
+    // θ^(θ_c - 293): a °C reading less a reference in kelvins.
+    const std::size_t findings_before = out_.size();
+    report_reference_on_other_scale(exponent_node);
+    if (out_.size() != findings_before) {
         result = unknown_type();
         return result;
     }

@@ -384,6 +384,55 @@ bool checker::fitted_on_scale(std::uint32_t numerator, std::uint32_t denominator
     return readings == 1;
 }
 
+// "R_20*(1 + α_R*(T_K - 20))": a coefficient per kelvin times a reading less the reference
+// the coefficient was fitted at, as in a conductor's resistance R = R_20·(1 + α_20·(θ - 20))
+// with θ in °C (IEC 60287-1-1, from memory). The reference is on the reading's scale: 20
+// beside a kelvin reading counts from 20 K, and 293 beside a °C reading from 293 °C.
+void checker::report_reference_on_other_scale(std::uint32_t difference) {
+    difference = syntax::inside_brackets(file_, difference);
+    const syntax::expr_node& n = file_.nodes[difference];
+    if (n.kind != expr_kind::subtract || file_.nodes[n.lhs].kind != expr_kind::symbol ||
+        file_.nodes[n.rhs].kind != expr_kind::number)
+        return;
+    const symbol_entry* e = symbols_.find(text(file_.nodes[n.lhs].range));
+    if (e == nullptr)
+        return;
+    const double reference = written_number(file_.nodes[n.rhs].range);
+    const unit_definition* scale = e->offset_unit;
+    const bool kelvin = scale == nullptr && e->unit_text == "K";
+    const bool celsius = scale != nullptr && scale->scale == unit_scale::offset &&
+                         std::abs(scale->factor - 1.0) < 1e-12 &&
+                         std::abs(scale->offset - 273.15) < 1e-9;
+    const std::string reading = quote(n.lhs);
+    const std::string number = display_text(file_.nodes[n.rhs].range);
+    if (kelvin && reference > 0.0 && reference < 200.0) {
+        diagnostic& d = report(
+            rules::offset_scale,
+            fmt::format("{} is subtracted from {}, a reading in K, as a reference in °C: "
+                        "the reference of a temperature correction is on the reading's scale, "
+                        "so this counts from {} K ({} °C is {} K)",
+                        number, reading, number, number, format_factor(reference + 273.15)),
+            file_.nodes[difference].range);
+        d.notes.push_back(
+            {fmt::format("write the reading in °C, or subtract the reference "
+                         "in kelvins ({} - {})",
+                         text(file_.nodes[n.lhs].range), format_factor(reference + 273.15)),
+             {}});
+    } else if (celsius && reference >= 200.0 && reference <= 400.0) {
+        diagnostic& d = report(
+            rules::offset_scale,
+            fmt::format("{} is subtracted from {}, a reading in °C, as a reference in K: "
+                        "the reference of a temperature correction is on the reading's scale, "
+                        "so this counts from {} °C ({} K is {} °C)",
+                        number, reading, number, number, format_factor(reference - 273.15)),
+            file_.nodes[difference].range);
+        d.notes.push_back(
+            {fmt::format("subtract the reference in °C ({} - {})", text(file_.nodes[n.lhs].range),
+                         format_factor(reference - 273.15)),
+             {}});
+    }
+}
+
 // "17.269*T/(237.3 + T)" with T in K: the Magnus fit of saturation pressure (and Antoine's,
 // Tetens') is made on the °C reading, its constant 230 to 245 °C (Alduchov and Eskridge
 // 1996; ISO 13788, from memory); beside a kelvin reading the sum is some 273 K off.
