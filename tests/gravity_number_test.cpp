@@ -555,6 +555,42 @@ TEST_CASE("a frequency in Hz beside an angular speed in radians") {
     }
 }
 
+// A capacitor bank's reactive power Q = 3·2π·f·C·V_ph² in delta, X_C = 1/(2π·f·C) and
+// X_L = 2π·f·L (IEEE Std 18-2012, 3, from memory): the same ω = 2π·f, which a formula with a
+// reactance or a reactive power and no π leaves out. A switching loss ½·C·V²·f in W is energy
+// per cycle times cycles, and needs none.
+TEST_CASE("a capacitor's or reactor's reactance takes 2π times the frequency") {
+    const std::string decl = "Q_c : kvar\nf : Hz\nV_LL : V\nC_d : µF\nL_r : mH\n"
+                             "X_C, X_L : ohm\nP_sw : W\n";
+    passes(decl,
+           {"C_d = 1e9*Q_c/(3*2*pi*f*V_LL^2)", "X_C = 1e6/(2*pi*f*C_d)", "X_L = 2*pi*f*L_r/1000",
+            "X_C = 1e6/(6.2832*f*C_d)", "P_sw = 0.5*C_d/1e6*V_LL^2*f"});
+    for (const char* formula :
+         {"C_d = 1e9*Q_c/(3*f*V_LL^2)", "X_C = 1e6/(f*C_d)", "X_L = f*L_r/1000"}) {
+        CAPTURE(formula);
+        const auto found = run(decl + formula + "\n");
+        CHECK(count_of(found, plumb::rules::unit_scale) == 1);
+        CHECK(plumb::test::says(plumb::test::first_under(found, plumb::rules::unit_scale),
+                                "has no 2π"));
+    }
+}
+
+// A hydraulic motor's torque T = Δp·V_g/(2π) from its displacement per revolution
+// (ISO 4391; in N·m from bar and cm³/rev, T = Δp·V_g/(20π); from memory): without the 2π it is
+// the work per revolution. A pump's flow V_g·n has a speed beside it and needs no 2π.
+TEST_CASE("a hydraulic motor's torque from its displacement per revolution") {
+    const std::string decl = "T_in : lbf*in\nΔp : psi\nD_m : in^3/rev\nη_m : 1\nQ_g : gpm\n"
+                             "n : rpm\nT_Nm : N*m\nΔp_b : bar\nV_g : cm^3/rev\n";
+    passes(decl, {"T_in = η_m*Δp*D_m/(2*pi)", "Q_g = D_m*n/231", "T_Nm = Δp_b*V_g/(20*pi)"});
+    for (const char* formula : {"T_in = η_m*Δp*D_m", "T_Nm = Δp_b*V_g/10"}) {
+        CAPTURE(formula);
+        const auto found = run(decl + formula + "\n");
+        CHECK(count_of(found, plumb::rules::unit_scale) == 1);
+        CHECK(plumb::test::says(plumb::test::first_under(found, plumb::rules::unit_scale),
+                                "has no 2π"));
+    }
+}
+
 // The US rational method Q = C·i·A gives cfs from in/h and acres, leaving out 1 acre·in/h =
 // 43560 ft² × (1/12 ft)/3600 s = 1.00833 cfs (NIST SP 811 (2008), B.8, acre and inch; the
 // convention is common practice): a note, not a warning. In mm/h the units are 100 times or

@@ -100,6 +100,9 @@ constexpr compact_dimension mass_dim = compact_dimension::whole({1, 0, 0, 0, 0, 
 constexpr compact_dimension mass_flow_dim = compact_dimension::whole({1, 0, -1, 0, 0, 0, 0});
 constexpr compact_dimension density_dim = compact_dimension::whole({1, -3, 0, 0, 0, 0, 0});
 constexpr compact_dimension per_kelvin = compact_dimension::whole({0, 0, 0, -1, 0, 0, 0});
+constexpr compact_dimension capacitance_dim = compact_dimension::whole({-1, -2, 4, 0, 0, 2, 0});
+constexpr compact_dimension inductance_dim = compact_dimension::whole({1, 2, -2, 0, 0, -2, 0});
+constexpr compact_dimension resistance_dim = compact_dimension::whole({1, 2, -3, 0, 0, -2, 0});
 // A volume flow times a specific energy: cfm·Δh in q = 4.5·cfm·Δh (common practice).
 constexpr compact_dimension volume_flow_enthalpy_dim =
     compact_dimension::whole({0, 5, -3, 0, 0, 0, 0});
@@ -693,6 +696,7 @@ class checker {
 
     // check/formula/rotation.cpp
     static bool is_rotating_power_or_torque(const compact_dimension& dim);
+    static bool asks_for_two_pi(const compact_dimension& dim);
     [[gnu::noinline]] void report_revolution_without_two_pi(const syntax::formula& f,
                                                             const compact_dimension& sides_dim);
     void report_rim_speed_without_pi(const syntax::formula& f, const rotating_part& speed,

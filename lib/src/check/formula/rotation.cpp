@@ -7,6 +7,15 @@ bool checker::is_rotating_power_or_torque(const compact_dimension& dim) {
     return dim == energy_dim || dim == power_dim;
 }
 
+// The sides the rotation rules ask about: a rotating power or torque, a speed, a frequency,
+// and what a frequency in Hz meets in a capacitor or reactor (capacitance, inductance, a
+// reactance in Ω), or a hydraulic motor's pressure from its torque.
+bool checker::asks_for_two_pi(const compact_dimension& dim) {
+    return is_rotating_power_or_torque(dim) || dim == frequency_dim || dim == velocity_dim ||
+           dim == capacitance_dim || dim == inductance_dim || dim == resistance_dim ||
+           dim == pressure_dimension();
+}
+
 // "M = 60000*P/n" with M in kN·m, P in kW and n in rpm: revolutions count as cycles, so
 // the units agree without the 2π radians of a revolution that P = 2π·n·M needs (ω = 2π·n),
 // and the torque comes out 2π times too large. Asked only of an equation that relates one
@@ -31,9 +40,24 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
     int rim_speeds = 0;
     int lengths = 0;
     int other_numbers = 0; // not powers of ten or 60: π/12, a screw's 2 strokes
+    int displacements = 0; // a volume per revolution (cm³/rev): a pump's or motor's
+    int pressures = 0;
+    int capacitors = 0; // a capacitance or an inductance
+    int reactives = 0;  // a reactive power (var, kvar)
     const auto classify = [&](rotating_part part, const compact_dimension& dim,
                               round_length round) {
-        if ((unit_marks_of(part.unit) & counts_revolutions) != 0) {
+        const bool reactive = part.unit.find("var") != std::string_view::npos ||
+                              part.unit.find("VAr") != std::string_view::npos ||
+                              part.unit.find("VAR") != std::string_view::npos;
+        if (dim == volume_dim && (unit_marks_of(part.unit) & counts_revolutions) != 0) {
+            ++displacements;
+        } else if (dim == pressure_dimension()) {
+            ++pressures;
+        } else if (dim == capacitance_dim || dim == inductance_dim) {
+            ++capacitors;
+        } else if (dim == power_dim && reactive) {
+            ++reactives;
+        } else if ((unit_marks_of(part.unit) & counts_revolutions) != 0) {
             speed = part;
             ++speeds;
         } else if (dim == frequency_dim && part.unit.find("rad") != std::string_view::npos) {
@@ -142,6 +166,38 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
         energies == 0 && angular_speeds == 0 && inertias == 0 && other_numbers == 0 &&
         length_round != round_length::none) {
         report_rim_speed_without_pi(f, speed, rim, length, length_round == round_length::radius);
+        return;
+    }
+    // X_C = 1/(2π·f·C), Q_c = 2π·f·C·V²: a capacitor's or reactor's reactance takes the
+    // angular frequency ω = 2π·f (IEC 60050-131, from memory). Only with a reactance or a
+    // reactive power in the formula: a switching loss C·V²·f in W needs no 2π.
+    if (speeds == 1 && capacitors == 1 && angular_speeds == 0 &&
+        (reactives >= 1 || sides_dim == resistance_dim) && torques == 0 && rim_speeds == 0) {
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("{} is a frequency in cycles ({}), and a capacitor's or reactor's "
+                               "reactance takes the angular frequency ω = 2π·f "
+                               "(X_C = 1/(2π·f·C), Q = 2π·f·C·V²); "
+                               "this formula has no 2π, so it is off by 6.28319",
+                               speed.shown(), speed.unit),
+                   file_.nodes[file_.sides[f.first_side].root].range);
+        d.level = severity::warning;
+        d.notes.push_back({"write 2*pi*f, or declare the angular frequency in rad/s", {}});
+        return;
+    }
+    // T = Δp·V_g/(2π): a hydraulic motor's displacement is per revolution, 2π radians
+    // (ISO 4391, from memory); a pump's flow V_g·n needs no 2π, and has a speed beside it.
+    if (displacements == 1 && torques == 1 && pressures >= 1 && speeds == 0 && powers == 0 &&
+        energies == 0 && angular_speeds == 0) {
+        diagnostic& d =
+            report(rules::unit_scale,
+                   fmt::format("{} is a torque ({}) from a displacement per revolution: a motor's "
+                               "torque is Δp·V_g/(2π), the 2π radians of each "
+                               "revolution, and this formula has no 2π, so it is off by 6.28319",
+                               torque.shown(), torque.unit),
+                   file_.nodes[file_.sides[f.first_side].root].range);
+        d.level = severity::warning;
+        d.notes.push_back({"revolutions count as cycles: divide by 2*pi (T = Δp*V_g/(2*pi))", {}});
         return;
     }
     if (torques != 1 || speeds != 1 || powers != 1 || energies != 0)

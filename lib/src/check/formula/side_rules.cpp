@@ -184,9 +184,7 @@ void checker::ask_of_marked_units(const syntax::formula& f, std::span<const oper
         return;
     const std::uint8_t marks = symbols_.unit_marks();
     const std::size_t findings_before_rotation = out_.size();
-    if ((marks & counts_revolutions) != 0 &&
-        (is_rotating_power_or_torque(sides[0].type.dim) || sides[0].type.dim == frequency_dim ||
-         sides[0].type.dim == velocity_dim))
+    if ((marks & counts_revolutions) != 0 && asks_for_two_pi(sides[0].type.dim))
         report_revolution_without_two_pi(f, sides[0].type.dim);
     // A speed in rpm declared anywhere in the file must not hide a gas velocity taken from a
     // flow at reference conditions: where the rotation rules found nothing, these still ask.
