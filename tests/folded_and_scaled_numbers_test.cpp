@@ -572,18 +572,22 @@ TEST_CASE("a one-digit number is not named as a coefficient beside a unit findin
 }
 
 // A year of 365 d is 8760 h, a day 24 h (NIST SP 811 (2008), B.8); a yearly energy from a
-// mean power is P·8760 h (common practice). The year's 8760 is read as the hours it is, with
-// a note (gravity_number_test.cpp); a bare 24 could be any count, and the unit is named.
+// mean power is P·8760 h, a day's P·24 h, and a day's volume from a flow in m³/h Q·24
+// (common practice). Both are read as the hours they are, with a note; a week's 168 h is not,
+// and its unit is named.
 TEST_CASE("sides apart by exactly a time or a density, with a bare number the trades write for it: "
           "the unit is named") {
-    const std::string decl = "E_a : kWh\nP : kW\nV : m^3\nQ : m^3/h\n";
+    const std::string decl = "E_a : kWh\nP : kW\nV : m^3\nQ : m^3/h\nE_d : kWh\n";
     passes(decl, {"E_a = P*8760 {h}", "V = Q*24 {h}"});
-    const auto year = run(decl, "E_a = P*8760");
-    CHECK(problems_in(year) == 0);
-    CHECK(count_of(year, plumb::rules::trade_constant) == 1);
-    const auto day = run(decl, "V = Q*24");
-    REQUIRE(count_of(day, plumb::rules::side_mismatch) == 1);
-    CHECK(plumb::test::says(first_under(day, plumb::rules::side_mismatch), "24 {h}"));
+    for (const char* formula : {"E_a = P*8760", "V = Q*24", "E_d = P*24", "P = E_d/24"}) {
+        CAPTURE(formula);
+        const auto hours = run(decl, formula);
+        CHECK(problems_in(hours) == 0);
+        CHECK(count_of(hours, plumb::rules::trade_constant) == 1);
+    }
+    const auto week = run(decl, "V = Q*168");
+    REQUIRE(count_of(week, plumb::rules::side_mismatch) == 1);
+    CHECK(plumb::test::says(first_under(week, plumb::rules::side_mismatch), "168 {h}"));
     // Steel's density typed as 7850 (kg/m³, common practice) into a mass from mm: named too.
     const auto steel = run("m : kg\nL, B, t : mm\n", "m = L*B*t*7850/1e9");
     REQUIRE(count_of(steel, plumb::rules::side_mismatch) == 1);

@@ -32,8 +32,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 18>& quantities() {
-    static const std::array<carried_quantity, 18> table = [] {
+const std::array<carried_quantity, 19>& quantities() {
+    static const std::array<carried_quantity, 19> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -68,7 +68,7 @@ const std::array<carried_quantity, 18>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 18>{{
+        return std::array<carried_quantity, 19>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -213,6 +213,11 @@ const std::array<carried_quantity, 18>& quantities() {
              "glycol mix or another liquid it is less",
              "write the specific heat in a cell that holds its unit to say so", specific_heat,
              4180.1, 4219.9},
+            // The hours of a day, 24 (NIST SP 811 (2008), B.8): a day's energy from a mean
+            // load, P·24 in kWh or TR·h, as the hours of a year give a year's.
+            {rules::trade_constant, "the length of a day", "1 d = 24 h", "1/(1 d)", "",
+             "declare the hours with their unit (t_d : h = 24) to say so",
+             "write the hours in a cell marked h to say so", time, 86400.0, 86400.0},
         }};
     }();
     return table;
