@@ -24,6 +24,11 @@ bool names_a_difference(std::string_view name, std::string_view description) {
         if (c >= 'A' && c <= 'Z')
             c = static_cast<char>(c - 'A' + 'a');
     description = lower;
+    // "conductor temperature, absolute, as the loss workbook carries it": a description that
+    // calls the quantity absolute names a reading, whatever else its words qualify.
+    if (description.find("absolute") != std::string_view::npos &&
+        description.find("absolute difference") == std::string_view::npos)
+        return false;
     for (const std::string_view word :
          {"difference", "differential", "rise", "drop", "loss", "change", "increase", "decrease",
           "approach", "range", "gradient", "swing", "hydrostatic", "net", "driving"})
