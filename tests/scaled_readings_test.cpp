@@ -362,6 +362,30 @@ TEST_CASE("a winding's temperature from its inferred zero of resistance") {
         plumb::rules::offset_scale);
 }
 
+// A copper conductor's resistance at θ from its value at 20 °C, R_θ = R_20·(234.5 + θ)/(234.5 +
+// 20) (IEC 60228, Annex B, from memory): the denominator is the reference's rise above the
+// same inferred zero, typed in numbers, and the ratio has no dimension. Not with the reference
+// in kelvins (234.5 + 293).
+TEST_CASE("a conductor's resistance from the inferred zero, with the reference typed in numbers") {
+    const std::string decl = "R_20, R_90 : ohm\nθ_c : °C\n";
+    passes(decl, {"R_90 = R_20*(234.5 + θ_c)/(234.5 + 20)", "R_90 = R_20*(235 + θ_c)/(235 + 20)"});
+    fails_with(decl, {"R_90 = R_20*(234.5 + θ_c)/(234.5 + 293)"}, plumb::rules::side_mismatch);
+    fails_with(decl, {"R_90 = R_20*θ_c/(234.5 + 20)"}, plumb::rules::offset_scale);
+}
+
+// "T_c : K \"conductor temperature, absolute, as the loss workbook carries it\"": a
+// description that calls the quantity absolute names a reading, though "loss" is among its
+// words; a °C reference taken off it is then reported as such (IEC 60287-1-1, from memory).
+TEST_CASE("a description that says absolute names a reading") {
+    const std::string decl = "R_20, R_t : ohm\nα_20 : 1/K\n"
+                             "T_c : K \"conductor temperature, absolute, as the loss workbook "
+                             "carries it\"\nθ_a : °C\nΔθ : K \"rise above ambient\"\n";
+    passes(decl, {"R_t = R_20*(1 + α_20*(T_c - 293.15))", "Δθ = T_c - 273.15 - θ_a"});
+    const auto r = plumb::test::check_after(decl, "R_t = R_20*(1 + α_20*(T_c - 20))");
+    CHECK(plumb::test::count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(plumb::test::count_of(r, plumb::rules::sum_mismatch) == 0);
+}
+
 // CT halves for each 10 °C warmer, CT = CT_ref·2^((10 - T)/10) (common practice for chlorine
 // contact, from memory): a reference less a reading is the difference the other way round,
 // read as a temperature correction as (T - 10) is.

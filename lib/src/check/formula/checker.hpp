@@ -1201,7 +1201,9 @@ class checker {
     static bool half_converted(const typed_term& t);
     [[gnu::noinline]] static bool
     settle_half_conversion(typed_term& result, const typed_term* factor, std::byte* evaluated);
-    bool from_inferred_zero_of_resistance(std::uint32_t node) const;
+    bool from_inferred_zero_of_resistance(std::uint32_t node, bool numbers_only = false) const;
+    bool reference_rise_from_inferred_zero(std::uint32_t numerator,
+                                           std::uint32_t denominator) const;
     bool number_beside_one_cell(std::uint32_t node) const;
     [[gnu::noinline]] void settle_percent_divisor(typed_term& result, const typed_term& factor,
                                                   const syntax::expr_node& op) const;

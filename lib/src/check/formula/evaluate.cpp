@@ -732,6 +732,15 @@ typed_term checker::eval_factors(std::uint32_t index) {
             if (factor != reinterpret_cast<const typed_term*>(evaluated))
                 factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
             read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
+        } else if (divided && factor->numeric && result.known && !result.numeric &&
+                   reference_rise_from_inferred_zero(op.lhs, op.rhs)) [[unlikely]] {
+            if (factor != reinterpret_cast<const typed_term*>(evaluated))
+                factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
+            typed_term& rise = *reinterpret_cast<typed_term*>(evaluated);
+            rise.numeric = false;
+            rise.value.reset();
+            rise.dim = temperature_dimension();
+            factor = &rise;
         } else if (!divided && result.offset != nullptr && factor->known && !factor->numeric &&
                    factor->offset == nullptr && factor->dim.is_dimensionless() &&
                    from_inferred_zero_of_resistance(n) && k == spine_.size()) {

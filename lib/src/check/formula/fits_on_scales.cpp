@@ -132,21 +132,37 @@ bool checker::settle_half_conversion(typed_term& result, const typed_term* facto
 
 // "(235 + θ_1)": a °C reading plus a conductor's inferred zero of resistance, 234.5 or 235
 // for copper and 225 or 228 for aluminium (IEC 60034-1 and IEEE 112, from memory).
-bool checker::from_inferred_zero_of_resistance(std::uint32_t node) const {
+bool checker::from_inferred_zero_of_resistance(std::uint32_t node, bool numbers_only) const {
     node = syntax::inside_brackets(file_, node);
     const syntax::expr_node& n = file_.nodes[node];
     if (n.kind != expr_kind::add)
         return false;
     const std::uint32_t number = file_.nodes[n.lhs].kind == expr_kind::number ? n.lhs : n.rhs;
     const std::uint32_t reading = number == n.lhs ? n.rhs : n.lhs;
-    if (file_.nodes[number].kind != expr_kind::number ||
-        file_.nodes[reading].kind != expr_kind::symbol)
-        return false;
-    const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
-    if (e == nullptr || e->offset_unit == nullptr || e->offset_unit->symbol != "\u00B0C")
+    if (file_.nodes[number].kind != expr_kind::number)
         return false;
     const std::string_view written = text(file_.nodes[number].range);
-    return written == "234.5" || written == "235" || written == "225" || written == "228";
+    if (!(written == "234.5" || written == "235" || written == "225" || written == "228"))
+        return false;
+    // The reference as a °C reading (20, 75), not one in kelvins (293).
+    if (numbers_only)
+        return file_.nodes[reading].kind == expr_kind::number &&
+               written_number(file_.nodes[reading].range) <= 200.0;
+    if (file_.nodes[reading].kind != expr_kind::symbol)
+        return false;
+    const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
+    return e != nullptr && e->offset_unit != nullptr && e->offset_unit->symbol == "\u00B0C";
+}
+
+// "R_20*(234.5 + θ_c)/(234.5 + 20)": the reference's rise above the inferred zero typed in
+// numbers, under a product that holds a reading's rise above it (IEC 60228, Annex B, from
+// memory): the numbers are degrees as the reading's bracket is, and the ratio has none.
+bool checker::reference_rise_from_inferred_zero(std::uint32_t numerator,
+                                                std::uint32_t denominator) const {
+    return from_inferred_zero_of_resistance(denominator, true) &&
+           for_each_factor(numerator, [&](std::uint32_t at, int sign) {
+               return sign > 0 && from_inferred_zero_of_resistance(at);
+           });
 }
 
 bool checker::number_beside_one_cell(std::uint32_t node) const {
