@@ -417,6 +417,27 @@ TEST_CASE("a gas's velocity from a flow at reference conditions") {
                plumb::rules::unit_scale);
 }
 
+// The trades fold the conversions into one number: v = 353.7·Q/D² in m/s from m³/h and mm
+// (4/π × 10⁶/3600, common practice), a fan's bhp = Q·Δp/(6356·η) from cfm and in. w.g.
+// (AMCA 201, from memory), a filter's cloth area A = Q/(air-to-cloth ratio) (EPA Air
+// Pollution Control Cost Manual, 6th ed., 5.1, from memory). Each wants the actual flow; a
+// flow at reference conditions there is the same slip as in Q/A, though a note reads the
+// number.
+TEST_CASE("a flow at reference conditions in formulas with the trade's folded numbers") {
+    const std::string decl = "Q_n : Nm3/h\nQ_a : m^3/h\nv : m/s\nD_mm : mm\nQ_s : scfm\n"
+                             "Q_ac : acfm\nΔp : inH2O\nη : 1\nP_bhp : hp\nA_cl : ft^2\n"
+                             "AC : fpm\nT : K\n";
+    fails_with(decl,
+               {"v = 353.7*Q_n/D_mm^2", "v = 4e6*Q_n/(3600*pi*D_mm^2)", "P_bhp = Q_s*Δp/(6356*η)",
+                "A_cl = Q_s/AC"},
+               plumb::rules::unit_scale);
+    for (const char* formula : {"v = 353.7*Q_a/D_mm^2", "P_bhp = Q_ac*Δp/(6356*η)",
+                                "A_cl = Q_ac/AC", "v = 353.7*Q_n*T/(273.15 {K})/D_mm^2"}) {
+        CAPTURE(formula);
+        CHECK(count_of(run(decl, formula), plumb::rules::unit_scale) == 0);
+    }
+}
+
 TEST_CASE("an actual gas volume converted between units but not to reference conditions") {
     const std::string air = "Q_leakNm : Nm3/min\nQ_leak : cfm\nQ_s : scf/min\n";
     fails_with(air, {"Q_leakNm = Q_leak/35.31", "Q_leakNm = Q_leak*0.02832"},

@@ -632,7 +632,7 @@ class checker {
     [[gnu::noinline]] bool fit_constant_carries_cell_unit(std::span<const operand> sides);
     bool report_hazen_williams_constant(std::span<const operand> sides, std::uint32_t constant);
     [[gnu::noinline]] void ask_of_marked_units(const syntax::formula& f,
-                                               std::span<const operand> sides);
+                                               std::span<const operand> sides, bool noted);
     [[gnu::noinline]] void report_angular_frequency_as_cycles(std::span<const operand> sides);
     bool report_energy_over_apparent_power(const operand& side);
     static bool names_power_factor(std::string_view name);
@@ -680,6 +680,8 @@ class checker {
     bool only_volumes_and_conversions(std::uint32_t k, bool volume) const;
     bool could_correct_state(std::uint32_t at) const;
     bool plain_conversion_number(std::uint32_t at) const;
+    bool circle_folded_with_conversion(std::uint32_t at, bool pi_written) const;
+    bool report_area_from_normal_flow(const operand& side);
     bool report_reference_states_in_ratio(const operand& side);
     bool report_velocity_from_normal_flow(const operand& side);
 

@@ -211,10 +211,15 @@ void checker::check_formula(const syntax::formula& f) {
         } else if (const std::size_t findings_before = out_.size();
                    check_scales(sides, sides_what, unit)) {
             check_origins(sides, what);
+            // A note (6356 read as the fan trade's constant) is no finding that settles the
+            // formula: the rules for declared units still ask.
+            const bool only_notes =
+                std::all_of(out_.begin() + static_cast<std::ptrdiff_t>(findings_before), out_.end(),
+                            [](const diagnostic& d) { return d.level == severity::note; });
             if ((symbols_.unit_marks() &
                  (counts_revolutions | at_reference_conditions | apparent_power)) != 0 &&
-                out_.size() == findings_before && equation)
-                ask_of_marked_units(f, sides);
+                only_notes && equation)
+                ask_of_marked_units(f, sides, out_.size() != findings_before);
             else if (file_.functions == syntax::function_names::spreadsheet &&
                      out_.size() == findings_before && equation && sides.size() == 2 &&
                      sides[0].type.known && sides[0].type.dim == power_dim) [[unlikely]]

@@ -472,6 +472,69 @@ bool checker::plain_conversion_number(std::uint32_t at) const {
     return looks_like_conversion(read_literal(text(file_.nodes[at].range), v, at), false);
 }
 
+// "A_cl = Q_s/AC": a filter's cloth area or a duct's section from a flow at reference
+// conditions over a face velocity (an air-to-cloth ratio), where the velocity is the actual
+// flow's over the area (EPA Air Pollution Control Cost Manual, 6th ed., ch. 5.1, from
+// memory); v = Q/A the other way round is report_velocity_from_normal_flow's.
+bool checker::report_area_from_normal_flow(const operand& side) {
+    std::uint32_t flow = syntax::no_index;
+    std::optional<reference_volume> normal;
+    int velocities = 0;
+    bool other = false;
+    for_each_factor(side.node, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::number) {
+            other = other || !plain_conversion_number(at);
+            return false;
+        }
+        const symbol_entry* e =
+            n.kind == expr_kind::symbol ? symbols_.find(text(n.range)) : nullptr;
+        if (e == nullptr || !e->compact_dim) {
+            other = true;
+            return false;
+        }
+        if ((unit_marks_of(e->unit_text) & at_reference_conditions) != 0 && sign > 0 &&
+            flow == syntax::no_index) {
+            flow = at;
+            normal = stated_reference_volume(*e);
+        } else if (*e->compact_dim == velocity_dim && sign < 0) {
+            ++velocities;
+        } else {
+            other = true; // a pressure or temperature ratio, or anything else
+        }
+        return false;
+    });
+    if (other || velocities != 1 || flow == syntax::no_index || !normal || normal->power != 1)
+        return false;
+    diagnostic& d = report(
+        rules::unit_scale,
+        fmt::format("{} is a flow at reference conditions ({}), but the area a gas passes at "
+                    "a velocity is its actual volume flow over that velocity: this formula "
+                    "does not correct for the gas's state",
+                    quote(flow), normal->name),
+        file_.nodes[side.node].range);
+    d.level = severity::warning;
+    d.notes.push_back({std::string(state_correction_advice), {}});
+    return true;
+}
+
+// "v = 353.7*Q/D_mm^2" in m/s from m³/h: 4/π × 10⁶/3600, a circle's area folded with the
+// conversions (common practice); beside a π written out, 4e6 is 4 × 10⁶.
+bool checker::circle_folded_with_conversion(std::uint32_t at, bool pi_written) const {
+    const scale_literal l = read_number(text(file_.nodes[at].range)).literal;
+    if (!(l.value > 0.0))
+        return false;
+    const double slack = std::max(l.tolerance, 1e-9);
+    const double folded = pi_written ? l.value / 4.0 : l.value * std::numbers::pi / 4.0;
+    for (const double time : {1.0, 60.0, 3600.0, 86400.0})
+        for (const double ratio : {folded * time, folded / time}) {
+            const double decade = std::pow(10.0, std::round(std::log10(ratio)));
+            if (std::abs(ratio / decade - 1.0) <= slack)
+                return true;
+        }
+    return false;
+}
+
 // "t_fill = V_u/Q_cn*60" with V_u in Sm³ and Q_cn in Nm³/h: gas volumes at two reference
 // states in a ratio count a standard cubic metre as a normal one, 5.5 % apart (1 Nm³ =
 // 1.0549 Sm³, ISO 13443, from memory). Asked where the product holds one of each, above
@@ -540,7 +603,8 @@ bool checker::report_velocity_from_normal_flow(const operand& side) {
             // The 4 of 4·Q/(π·D²) is the circle's.
             const double v = written_number(n.range);
             correction =
-                correction || !(plain_conversion_number(at) || (circle && (v == 4.0 || v == 2.0)));
+                correction || !(plain_conversion_number(at) || (circle && (v == 4.0 || v == 2.0)) ||
+                                circle_folded_with_conversion(at, circle));
             return false;
         }
         // D^2, (D_mm/1000)^2: a power of a symbol, or of a symbol over a conversion, is

@@ -178,13 +178,15 @@ bool checker::report_hazen_williams_constant(std::span<const operand> sides,
 }
 
 // Rules for units that the file declares (symbol_table::unit_marks), asked of an equation
-// whose sides agree.
-void checker::ask_of_marked_units(const syntax::formula& f, std::span<const operand> sides) {
+// whose sides agree. Where a note read a number in it (`noted`: 9549 holds the 2π, 6356 is
+// the fan trade's), only the gas-state rules ask, which no number the notes read answers.
+void checker::ask_of_marked_units(const syntax::formula& f, std::span<const operand> sides,
+                                  bool noted) {
     if (sides.size() != 2 || !sides[0].type.known)
         return;
     const std::uint8_t marks = symbols_.unit_marks();
     const std::size_t findings_before_rotation = out_.size();
-    if ((marks & counts_revolutions) != 0 && asks_for_two_pi(sides[0].type.dim))
+    if (!noted && (marks & counts_revolutions) != 0 && asks_for_two_pi(sides[0].type.dim))
         report_revolution_without_two_pi(f, sides[0].type.dim);
     // A speed in rpm declared anywhere in the file must not hide a gas velocity taken from a
     // flow at reference conditions: where the rotation rules found nothing, these still ask.
@@ -199,10 +201,13 @@ void checker::ask_of_marked_units(const syntax::formula& f, std::span<const oper
                 if (report_normal_measure_times_actual_volume(side) ||
                     (sides[0].type.dim == power_dim && report_power_from_normal_flow(side)) ||
                     (sides[0].type.dim == velocity_dim && report_velocity_from_normal_flow(side)) ||
+                    (sides[0].type.dim == area_dimension() && report_area_from_normal_flow(side)) ||
                     report_reference_states_in_ratio(side))
                     break;
         }
     }
+    if (noted)
+        return;
     if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
         report_apparent_as_real_power(sides);
     else if ((marks & apparent_power) != 0)
