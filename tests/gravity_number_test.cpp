@@ -581,7 +581,12 @@ TEST_CASE("a capacitor's or reactor's reactance takes 2π times the frequency") 
 TEST_CASE("a hydraulic motor's torque from its displacement per revolution") {
     const std::string decl = "T_in : lbf*in\nΔp : psi\nD_m : in^3/rev\nη_m : 1\nQ_g : gpm\n"
                              "n : rpm\nT_Nm : N*m\nΔp_b : bar\nV_g : cm^3/rev\n";
-    passes(decl, {"T_in = η_m*Δp*D_m/(2*pi)", "Q_g = D_m*n/231", "T_Nm = Δp_b*V_g/(20*pi)"});
+    // In lbf·ft from psi and in³/rev the divisor is 2π × 12 in/ft, typed 24·π or 75.4.
+    passes(decl + "T_ft : lbf*ft\n",
+           {"T_in = η_m*Δp*D_m/(2*pi)", "Q_g = D_m*n/231", "T_Nm = Δp_b*V_g/(20*pi)",
+            "T_ft = Δp*D_m/(24*pi)", "T_ft = Δp*D_m/75.4"});
+    CHECK(count_of(run(decl + "T_ft : lbf*ft\nT_ft = Δp*D_m/(2*pi)\n"), plumb::rules::unit_scale) ==
+          1);
     for (const char* formula : {"T_in = η_m*Δp*D_m", "T_Nm = Δp_b*V_g/10"}) {
         CAPTURE(formula);
         const auto found = run(decl + formula + "\n");

@@ -1096,6 +1096,7 @@ class checker {
     bool accept_folded_coefficient(std::span<const operand> ops, std::span<const std::size_t> index,
                                    std::span<const scaled_operand> parts, double& unit);
     static scale_literal power_of_ten_literal(const scale_literal& l, double power);
+    static std::optional<scale_literal> twice_a_conversion(const scale_literal& l);
     std::optional<double> folded_power_of_ten(std::span<const operand> ops,
                                               std::span<const std::size_t> index, std::size_t i,
                                               const scale_literal& l, bool second) const;

@@ -96,8 +96,8 @@ std::span<const checker::folded_constant> checker::folded_constants() {
         {2.0, "2", "the formula's own 2 (v\u00B2/(2a), a radius from a diameter)", false, false,
          true, false, true},
         {2.0 * std::numbers::pi, "2\u03C0",
-         "the formula's 2\u03C0 (radians per revolution; the Wenner array's \u03C1 = "
-         "2\u03C0\u00B7a\u00B7R)",
+         "the formula's 2\u03C0 (radians per revolution or per cycle, \u03C9 = "
+         "2\u03C0\u00B7f)",
          false},
         // 0.262 = π/12 in the belt maker's V = 0.262*D*n (in and rpm to ft/min), 0.05236 =
         // π/60 in v = π·D·n/60 (m and rpm to m/s): a circumference's π.
@@ -191,6 +191,19 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
                     continue;
                 scale_literal as = l;
                 if (!circle_pass) {
+                    // "Δp*V/(24*π)" in lbf·ft from psi and in³: a revolution's 2 beside π,
+                    // and 12 in per ft (2 × 60 likewise, from a minute), as 20·π is 2 × 10.
+                    if (const std::optional<scale_literal> twice = twice_a_conversion(l);
+                        twice && holds_pi(ops[index[i]].node) && reconciles_with(i, k, *twice)) {
+                        diagnostic& d = report(
+                            rules::trade_constant,
+                            fmt::format("{} is read as 2 × {}, the {} converting the units",
+                                        text(file_.nodes[l.node].range),
+                                        format_factor(twice->value), format_factor(twice->value)),
+                            file_.nodes[l.node].range);
+                        d.level = severity::note;
+                        return true;
+                    }
                     const std::optional<double> found =
                         folded_power_of_ten(ops, index, i, l, false);
                     if (!found)
@@ -320,6 +333,24 @@ scale_literal checker::power_of_ten_literal(const scale_literal& l, double power
     as.low = power > 0 ? rational(ten) : rational(1, ten);
     as.high = as.low;
     return as;
+}
+
+// 24 as 2 × 12 (in per ft) and 120 as 2 × 60 (s per min): the conversion alone, exact.
+std::optional<scale_literal> checker::twice_a_conversion(const scale_literal& l) {
+    for (const std::int64_t conversion : {12, 60})
+        if (l.value == 2.0 * static_cast<double>(conversion)) {
+            scale_literal as = l;
+            as.value = static_cast<double>(conversion);
+            as.tolerance = 0.0;
+            as.low = rational(conversion);
+            as.high = as.low;
+            as.power_of_ten = false;
+            as.power = 0;
+            as.factor_like = true;
+            as.table_digits = false;
+            return as;
+        }
+    return std::nullopt;
 }
 
 // `second`: the reading one power lower, where the number has one (1.6e7 as 16 × 10⁶).
