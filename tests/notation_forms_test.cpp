@@ -76,6 +76,16 @@ TEST_CASE("measure lines define units of one's own, with a zero where the scale 
         CHECK(findings(r, plumb::rules::syntax).empty());
         CHECK(findings(r, plumb::rules::unknown_unit).empty());
     }
+    SUBCASE("a reciprocal unit, written as a declaration writes it (1/min)") {
+        // A metering pump's strokes per minute; 1 min = 60 s (NIST SP 811, B.8).
+        const auto r = plumb::check_text("u.plumb", "measure spm = 1/min \"strokes per minute\"\n"
+                                                    "n : spm\nf : Hz\nf = n/60\nf = n\n");
+        CHECK(findings(r, plumb::rules::syntax).empty());
+        CHECK(findings(r, plumb::rules::unknown_unit).empty());
+        const auto scale = findings(r, plumb::rules::unit_scale);
+        REQUIRE(scale.size() == 1);
+        CHECK(line_of(*scale[0]) == 5);
+    }
     SUBCASE("a gauge unit of one's own is gauge: absolute = gauge is reported") {
         // One standard atmosphere is 101.325 kPa exactly (SI Brochure 9th ed., Table 8 note;
         // NIST SP 811, B.8).

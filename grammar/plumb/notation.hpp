@@ -275,7 +275,8 @@ struct declaration : seq<at<declaration_head>, name_list, ws, one<':'>, ws, must
 //   measure kPag = kPa zero at 101.325 kPa      (a gauge or offset scale: reads zero there)
 struct measure_keyword : TAO_PEGTL_STRING("measure") {};
 struct new_unit_name : seq<opt<utf8::one<0xB0>>, letter, star<sor<name_char, one<'%'>>>> {};
-struct new_unit_size : seq<number, must<number_end>, star<space>> {};
+// "measure spm = 1/min": a 1 before a slash begins the unit, as in a declaration.
+struct new_unit_size : seq<number, must<number_end>, star<space>, not_at<one<'/'>>> {};
 struct origin_number : seq<opt<one<'-'>>, number, must<number_end>> {};
 struct origin_value : seq<origin_number, star<space>, must<unit_expression>> {};
 struct origin_clause
