@@ -6,6 +6,7 @@
 #include "plumb/rules.hpp"
 
 #include <doctest/doctest.h>
+#include <fmt/format.h>
 
 #include <string>
 #include <vector>
@@ -106,6 +107,21 @@ TEST_CASE("an unknown unit's note shows how to define that very unit") {
     REQUIRE(only(flow, plumb::rules::unknown_unit) != nullptr);
     CHECK(only(flow, plumb::rules::unknown_unit)->message.find("did you mean 'mgd'") !=
           std::string::npos);
+}
+
+// Normal and standard cubic metres are units of their own (DIN 1343's 0 °C and 101.325 kPa,
+// ISO 13443's 15 °C, from memory), spelled whole: "Nm^3" powers an unknown "Nm".
+TEST_CASE("a gas volume at reference conditions written with a power is offered whole") {
+    for (const char* unit : {"Nm", "Sm"}) {
+        CAPTURE(unit);
+        const auto r = plumb::check_text("h.plumb", fmt::format("c : g/{}^3\n", unit));
+        REQUIRE(only(r, plumb::rules::unknown_unit) != nullptr);
+        CHECK(only(r, plumb::rules::unknown_unit)
+                  ->message.find(fmt::format("did you mean '{}3'? It is written whole", unit)) !=
+              std::string::npos);
+    }
+    CHECK(only(plumb::check_text("h.plumb", "c : g/Nm3\nd : g/Nm\u00B3\n"),
+               plumb::rules::unknown_unit) == nullptr);
 }
 
 TEST_CASE("suggestions for an unknown unit prefer units of the kind the description names") {

@@ -670,6 +670,12 @@ std::optional<unit_value> lookup_digit_power(std::string_view text, const parse_
 
 std::string unknown_unit_message(std::string_view text, const dimension* kind = nullptr) {
     std::string message = fmt::format("unknown unit '{}'", text);
+    // "g/Nm^3": the gas volumes at reference conditions are rows of their own, Nm3 and Sm3,
+    // which a power after a bare "Nm" does not reach.
+    if (const std::string whole = std::string(text) + "3";
+        text.size() >= 2 && unit_table::standard().resolve(whole))
+        return message + fmt::format("; did you mean '{}'? It is written whole, as {} or {}\u00B3",
+                                     whole, whole, text);
     const auto near = unit_table::standard().nearest(text, 3, kind);
     if (!near.empty()) {
         message += "; did you mean ";
