@@ -1054,3 +1054,13 @@ TEST_CASE("a length per symbol converted, then the volume into litres") {
                 "V_L = 1000*1000*(D_o/1000)*(h_o/1000)^2"},
                plumb::rules::unit_scale);
 }
+
+// A roof drain's flow, Q = A·i/96.25 in gpm from ft² and in/h (231 in³/gal, NIST SP 811
+// (2008), B.8, × 60 min/h / 144 in²/ft²), printed 96.23 on roof drainage sheets (common
+// practice): a published rounding read as the conversion it stands for.
+TEST_CASE("a roof drain's 96.23 is the conversion 96.25") {
+    const std::string roof = "Q_gpm : gpm\nC : 1\ni_in : in/h\nA_ft2 : ft^2\n";
+    passes(roof, {"Q_gpm = C*i_in*A_ft2/96.23", "Q_gpm = C*i_in*A_ft2/96.25"});
+    fails_with(roof, {"Q_gpm = C*i_in*A_ft2/9.623", "Q_gpm = C*i_in*A_ft2*96.23"},
+               plumb::rules::unit_scale);
+}

@@ -347,7 +347,7 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
         bool any_decade; // 4.184 kJ or 4184 J alike
         rational ratio;  // the other value over the written one
     };
-    static const std::array<second_reading, 3> second_readings{{
+    static const std::array<second_reading, 4> second_readings{{
         // Kinetics and thermochemistry tables work in the thermochemical calorie, 4.184 J
         // exactly (NIST SP 811 (2008), B.8), where a kcal row is the IT one, 4.1868 J.
         {4.184, true, rational(41868, 41840)},
@@ -358,6 +358,9 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
         // Manning's (1/0.3048)^(2/3) = 2.20795 printed 2.22, from 1.49² (see
         // looks_like_conversion).
         {2.22, false, rational(220795, 222000)},
+        // Roof drainage sheets print Q = A·i/96.23 in gpm from ft² and in/h (common
+        // practice), where 231 in³/gal × 60 min/h / 144 in²/ft² is 96.25 exactly.
+        {96.23, false, rational(9625, 9623)},
     }};
     for (const second_reading& r : second_readings) {
         const double compared = r.any_decade ? l.value / power_of_ten_value(l.power) : l.value;
