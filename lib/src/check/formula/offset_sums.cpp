@@ -22,6 +22,13 @@ void checker::note_scale_zero_beside_difference(diagnostic& d, std::span<const o
     }
     if (difference == nullptr)
         return;
+    // "1.8*ΔT + 32": the 1.8 turns the kelvins into °F degrees.
+    double degree = difference->type.scale;
+    for (std::uint32_t l = 0; l < difference->type.literal_count; ++l) {
+        const scale_literal& n = literals_[difference->type.literal_begin + l];
+        if (std::abs(n.value - 1.8) < 1e-12 && std::abs(n.exponent) == 1.0)
+            degree = n.exponent > 0 ? degree / 1.8 : degree * 1.8;
+    }
     struct scale_zero {
         const char* scales;
         double value;  // the zero as written, in the difference's degrees
@@ -33,7 +40,7 @@ void checker::note_scale_zero_beside_difference(diagnostic& d, std::span<const o
                                                       {"\u00B0R and \u00B0F", 459.67, 5.0 / 9.0}}};
     for_each_odd_number(terms, a, [&](std::string_view written, double value) {
         for (const scale_zero& z : zeros) {
-            if (std::abs(difference->type.scale / z.degree - 1.0) > 1e-9 ||
+            if (std::abs(degree / z.degree - 1.0) > 1e-9 ||
                 std::abs(value - z.value) > half_unit_in_last_digit(written) * (1.0 + 1e-9))
                 continue;
             d.notes.push_back(
