@@ -71,12 +71,12 @@ TEST_CASE("a scale's offset beside a temperature difference: the finding says it
                "32 is the offset between the °F and °C scales"));
     CHECK(problems_in(run(ranges, "@range-right R_K = R_F/1.8")) == 0);
     CHECK(problems_in(run(ranges, "@range-celsius R_K = R_C")) == 0);
-    // The other way, a kelvin difference times 1.8 into Δ°F, with the 32 added.
-    const auto back = run(ranges, "@range-back R_F = 1.8*R_K + 32");
+    // The other way, a Celsius difference times 1.8 into Δ°F, with the 32 added.
+    const auto back = run(ranges, "@range-back R_F = 1.8*R_C + 32");
     REQUIRE(count_of(back, plumb::rules::sum_mismatch) == 1);
     CHECK(says(first_under(back, plumb::rules::sum_mismatch),
                "32 is the offset between the °F and °C scales"));
-    CHECK(problems_in(run(ranges, "@range-back-right R_F = 1.8*R_K")) == 0);
+    CHECK(problems_in(run(ranges, "@range-back-right R_F = 1.8*R_C")) == 0);
 }
 
 // A gauge reading converted (14.5 psi per bar, NIST SP 811 (2008), B.8 rounded) with the
