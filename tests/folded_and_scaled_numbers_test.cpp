@@ -1020,6 +1020,22 @@ TEST_CASE("the term to convert, named by the other side through a power, a produ
         plumb::test::says(first_under(rope, plumb::rules::unit_scale), "multiply 'D/d_r' by 1000"));
 }
 
+// The same where a conversion is written beside the sum: a vaporiser's duty m·(h_fg + c_p·ΔT)
+// in kW from kg/h over 3600 puts the sum in kJ/kg, so the latent heat copied in Btu/lb is the
+// term to convert (1 Btu/lb = 2.326 kJ/kg, NIST SP 811 (2008), B.8); a hoist rope's end load
+// (m_s + m_r·H)·g/1000 in kN puts the masses in kg, so the skip's tonnes are.
+TEST_CASE("the term to convert, named through a conversion written beside the sum") {
+    const std::string d = "h_fg : Btu/lb\nc_p : kJ/(kg*K)\nΔT : K\nm_v : kg/h\nQ_v : kW\n"
+                          "m_s : t\nm_r : kg/m\nH : m\nT_st : kN\ng : m/s^2\n";
+    const auto duty = run(d, "Q_v = m_v*(h_fg + c_p*ΔT)/3600");
+    REQUIRE(count_of(duty, plumb::rules::unit_scale) == 1);
+    CHECK(
+        plumb::test::says(first_under(duty, plumb::rules::unit_scale), "multiply 'h_fg' by 2.326"));
+    const auto rope = run(d, "T_st = (m_s + m_r*H)*g/1000");
+    REQUIRE(count_of(rope, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(rope, plumb::rules::unit_scale), "multiply 'm_s' by 1000"));
+}
+
 // Money as a pure number ($, €, £, ¥; common practice in cost sheets): a price per MWh against
 // one per kWh is still 1000 apart, so an energy cost in $/t from kWh/kg keeps its check.
 TEST_CASE("a price per MWh beside one per kWh, with money counted as a pure number") {

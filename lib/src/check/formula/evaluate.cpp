@@ -135,6 +135,13 @@ std::optional<double> checker::scale_left_for_sum(std::uint32_t root, const type
             found = sum_power > 0 && std::isfinite(sum_power);
             return !found;
         }
+        // "m*(h_fg + c_p*ΔT)/3600" in kW from kg/h: a conversion written beside the sum
+        // scales the unit it must be in the other way from a symbol's.
+        if (n.kind == expr_kind::number && plain_conversion_number(at)) {
+            const double value = written_number(n.range);
+            scale = sign > 0 ? scale * value : scale / value;
+            return false;
+        }
         double factor = 0.0;
         if (n.kind == expr_kind::symbol) {
             if (const symbol_entry* e = symbols_.find(text(n.range));
