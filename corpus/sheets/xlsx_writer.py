@@ -155,9 +155,14 @@ class Evaluator:
             f = 10.0 ** n
             return math.floor(abs(x) * f + 1e-12) / f * (1 if x >= 0 else -1)
 
+        def sqrt(x):
+            """Excel evaluates only the branch IF takes; Python evaluates both, so a root of a
+            negative number in the branch not taken gives NaN here instead of raising."""
+            return math.sqrt(x) if x >= 0 else math.nan
+
         env = {
             "_v": self.value, "_r": rng, "VLOOKUP": vlookup, "ROUND": round_half_away,
-            "ROUNDUP": round_up, "ROUNDDOWN": round_down, "CEILING": lambda x, m=1: math.ceil(x / m) * m, "TRUE": True, "FALSE": False, "PI": lambda: math.pi, "SQRT": math.sqrt, "LN": math.log,
+            "ROUNDUP": round_up, "ROUNDDOWN": round_down, "CEILING": lambda x, m=1: math.ceil(x / m) * m, "TRUE": True, "FALSE": False, "PI": lambda: math.pi, "SQRT": sqrt, "LN": math.log,
             "EXP": math.exp, "ABS": abs, "RADIANS": math.radians, "COS": math.cos,
             "SIN": math.sin, "TAN": math.tan, "ASIN": math.asin, "ACOS": math.acos,
             "ATAN": math.atan, "DEGREES": math.degrees,
