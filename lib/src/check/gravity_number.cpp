@@ -32,8 +32,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 19>& quantities() {
-    static const std::array<carried_quantity, 19> table = [] {
+const std::array<carried_quantity, 20>& quantities() {
+    static const std::array<carried_quantity, 20> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -68,7 +68,7 @@ const std::array<carried_quantity, 19>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 19>{{
+        return std::array<carried_quantity, 20>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -213,6 +213,14 @@ const std::array<carried_quantity, 19>& quantities() {
              "glycol mix or another liquid it is less",
              "write the specific heat in a cell that holds its unit to say so", specific_heat,
              4180.1, 4219.9},
+            // Dry air's specific gas constant, R/M = 8.314462618/0.0289647 = 287.05 J/(kg·K)
+            // (CODATA 2018's R, ISO 2533's molar mass, from memory): the 287 and 0.287 of
+            // ρ = p/(R·T) in kg/m³ from Pa or kPa, and the US 53.35 ft·lbf/(lb·°R).
+            {rules::trade_constant, "the gas constant of dry air", "R_a = R/M_a", "1/R_a",
+             " (287.05 J/(kg\u00B7K); for humid air or another gas it differs)",
+             "declare the gas constant with its unit (R_a : J/(kg*K) = 287.05) to say so",
+             "write the gas constant in a cell that holds its unit to say so", specific_heat, 287.0,
+             287.1},
             // The hours of a day, 24 (NIST SP 811 (2008), B.8): a day's energy from a mean
             // load, P·24 in kWh or TR·h, as the hours of a year give a year's.
             {rules::trade_constant, "the length of a day", "1 d = 24 h", "1/(1 d)", "",
