@@ -294,6 +294,20 @@ TEST_CASE("the molar gas constant and air's molar mass typed as numbers") {
     CHECK(problems_in(run(decl + "M = 18.02*SG\n")) == 1);
 }
 
+// Dry air's specific gas constant R/M_a = 8.314462618/0.0289647 = 287.05 J/(kg·K) (CODATA
+// 2018; ISO 2533's molar mass, from memory), typed 0.287 beside kPa, 287 beside Pa and 53.35
+// in ft·lbf/(lb·°R): ρ = p/(R·T), with a note. 287 beside kPa is 1000 off; a °C reading in
+// place of the absolute temperature is still an error.
+TEST_CASE("dry air's gas constant typed as a number") {
+    const std::string decl = "ρ : kg/m^3\np_b : kPa\nt_a : °C\nT : K\np : Pa\n"
+                             "ρ_lb : lb/ft^3\np_psf : lbf/ft^2\nT_R : °R\n";
+    passes_with_one_note(
+        decl, {"ρ = p_b/(0.287*(t_a + 273.15))", "ρ = p/(287*T)", "ρ_lb = p_psf/(53.35*T_R)"},
+        plumb::rules::trade_constant);
+    CHECK(count_of(run(decl + "ρ = p_b/(287*T)\n"), plumb::rules::unit_scale) == 1);
+    CHECK(count_of(run(decl + "ρ = p_b/(0.287*t_a)\n"), plumb::rules::offset_scale) == 1);
+}
+
 // A gauge pressure over a specific weight is a head above the level where the pressure is
 // atmospheric, over an area the net force where the atmosphere acts on the other face, and the
 // pressure of a column, ρ g h, is what a gauge at its foot reads (common practice; e.g. Çengel
@@ -873,6 +887,15 @@ TEST_CASE("a speed along a rim and a speed in revolutions meet through π") {
                plumb::rules::unit_scale);
     passes(d, {"n = v/(pi*D)", "v = pi*D*n", "v = 2*pi*r_w*n", "v = p*n", "n = 1000*v_c/(pi*D_w)",
                "V_s = 0.262*D_in*n"});
+}
+
+// A frequency in Hz over a diameter is no rim speed: vortex shedding f = St·V/d (the Strouhal
+// number, ISO 80000-11) and a duct's acoustic mode f = c/(2·W) (Blevins, Flow-Induced
+// Vibration, 2nd ed., ch. 3 and 10, from memory) have no π.
+TEST_CASE("a frequency in Hz over a diameter is no rim speed") {
+    const std::string d = "f_vs, f_a : Hz\nSt : 1\nV_g : m/s\nd_o : mm \"tube outside diameter\"\n"
+                          "c_g : m/s\nW_sh : m \"shell inside diameter\"\n";
+    passes(d, {"f_vs = 1000*St*V_g/d_o", "f_a = c_g/(2*W_sh)"});
 }
 
 // Water's specific heat typed bare on a mass flow, Φ = m·4.19·ΔT/3600 in kW from kg/h (4.180

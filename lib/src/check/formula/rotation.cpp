@@ -162,9 +162,12 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
         report_revolutions_beside_radians(f, speed, partner, angular_speeds >= 1);
         return;
     }
+    // Only a speed in revolutions (rpm, rev/s): a frequency in Hz over a diameter is a
+    // vortex shedding or an acoustic mode, f = St·V/d (Blevins, Flow-Induced Vibration, 2nd
+    // ed., ch. 3, from memory), with no π in it.
     if (speeds == 1 && rim_speeds == 1 && lengths == 1 && torques == 0 && powers == 0 &&
         energies == 0 && angular_speeds == 0 && inertias == 0 && other_numbers == 0 &&
-        length_round != round_length::none) {
+        length_round != round_length::none && speed.unit.find("Hz") == std::string_view::npos) {
         report_rim_speed_without_pi(f, speed, rim, length, length_round == round_length::radius);
         return;
     }
