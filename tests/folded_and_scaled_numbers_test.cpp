@@ -1080,3 +1080,16 @@ TEST_CASE("a roof drain's 96.23 is the conversion 96.25") {
     fails_with(roof, {"Q_gpm = C*i_in*A_ft2/9.623", "Q_gpm = C*i_in*A_ft2*96.23"},
                plumb::rules::unit_scale);
 }
+
+// A water level in ft from an invert in m converted by 3.281 (NIST SP 811 (2008), B.8: 1 ft =
+// 0.3048 m) plus a headwater left in m: the two terms agree without the 3.281, but the sum is
+// set equal to a side in ft, so the conversion is needed and the headwater lacks it. The
+// advice names the headwater; both converted, or neither with the side in m, pass.
+TEST_CASE("a sum whose converted term is in the other side's unit: the plain term is named") {
+    const std::string d = "z_ft : ft\nz_m, h_m : m\n";
+    const auto level = run(d, "z_ft = z_m*3.281 + h_m");
+    REQUIRE(count_of(level, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(level, plumb::rules::unit_scale),
+                            "multiply 'h_m' by 3.28084"));
+    passes(d, {"z_ft = z_m*3.281 + h_m*3.281", "z_ft = 3.281*(z_m + h_m)", "z_m = z_m + h_m"});
+}

@@ -95,6 +95,56 @@ bool checker::reconcile_scales(std::span<const operand> ops, meeting_point what,
     return reconcile_in_full(ops, what, unit);
 }
 
+// "z_ft = z_m*3.281 + h_m": the terms agree without the 3.281 (both in m), but the sum is set
+// equal to a side in ft, which the converted term is in: the conversion is needed, and the
+// other term lacks it. Said so, rather than that the factor is not needed, whose advice
+// would leave a length in m under ft.
+bool checker::report_term_left_unconverted(std::span<const operand> ops,
+                                           std::span<const std::size_t> index,
+                                           std::span<const scaled_operand> parts) {
+    if (sum_checked_ == syntax::no_index || side_hint_ == nullptr ||
+        side_hint_node_ == syntax::no_index || current_ == nullptr || current_->side_count != 2)
+        return false;
+    std::optional<double> side;
+    if (sum_side_hint_ != nullptr && sum_side_hint_->known && sum_side_hint_->literal_count == 0)
+        side = sum_side_hint_->scale;
+    else if (sum_side_hint_ == nullptr)
+        side = scale_left_for_sum(side_hint_node_, *side_hint_, sum_checked_);
+    if (!side || !std::isfinite(*side) || !(*side > 0))
+        return false;
+    // Rounded conversions (3.281 for 3.28084) land within a few parts in ten thousand.
+    const auto in_side_unit = [&](std::size_t i) {
+        return std::abs(apparent_scale(parts[i]) / *side - 1.0) < 1e-3;
+    };
+    const auto converts = [&](std::size_t i) {
+        return std::abs(apparent_scale(parts[i]) / parts[i].scale - 1.0) > 1e-9;
+    };
+    std::size_t converted = 0;
+    if (in_side_unit(1) && !in_side_unit(0))
+        converted = 1;
+    else if (!(in_side_unit(0) && !in_side_unit(1)))
+        return false;
+    const std::size_t plain = 1 - converted;
+    if (!converts(converted) || converts(plain))
+        return false;
+    const operand& odd = ops[index[plain]];
+    const operand& reference = ops[index[converted]];
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("{} converts to the unit of the other side, but {} beside it does not: "
+                           "as written, {} counts {} times as much as it should in this sum",
+                           quote(reference.node), quote(odd.node), quote(odd.node),
+                           format_factor(*side / parts[plain].scale)),
+               file_.nodes[odd.node].range);
+    d.level = severity::warning;
+    add_term(d, odd, true);
+    add_term(d, reference);
+    d.notes.push_back({fmt::format("multiply {} by {}, as the term beside it is", quote(odd.node),
+                                   format_factor(parts[plain].scale / *side)),
+                       {}});
+    return true;
+}
+
 // reconcile_scales past its test of plain numbers, which most meeting points with numbers
 // pass: out of line, so that those do not pay for this one's frame.
 bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what, double& unit) {
@@ -126,6 +176,9 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     if (parts.size() < 2)
         return true;
     reconciliation r = reconcile(parts);
+    if (r.agree && what.what.starts_with("terms") && parts.size() == 2 &&
+        report_term_left_unconverted(ops, index, parts)) [[unlikely]]
+        return false;
     if (r.agree) {
         unit = r.unit;
         if (!r.used_literals)
