@@ -615,3 +615,17 @@ TEST_CASE("the atmosphere rounded to 1 bar inside an expansion vessel's ratio") 
                 "V_n = V_e*p_e/(p_e - p_0)"},
                plumb::rules::offset_scale);
 }
+
+// NPSH available from an absolute suction pressure takes no barometer; from a gauge one it
+// does (NPSH_a = (p_g + p_b - p_v)/(ρ·g), Hydraulic Institute 9.6.1, from memory): a pressure
+// the file calls absolute, with the barometer added again, counts the atmosphere twice.
+TEST_CASE("the barometer added to a pressure already absolute") {
+    const std::string decl = "p_b : kPa \"site barometric pressure\"\n"
+                             "p_abs : kPa \"absolute pressure at the suction\"\n"
+                             "p_a : psia\np_bp : psi \"barometer\"\np_v, p_vp : kPa\n"
+                             "p_g : kPag\nH : m\nρ : kg/m^3\ng : m/s^2\nH_ft : ft\n"
+                             "γ : lbf/ft^3\np_vap : psi\n";
+    fails_with(decl, {"H = (p_abs + p_b - p_v)*1000/(ρ*g)", "H_ft = (p_a + p_bp - p_vap)*144/γ"},
+               plumb::rules::offset_scale);
+    passes(decl, {"H = (p_abs - p_v)*1000/(ρ*g)", "H_ft = (p_a - p_vap)*144/γ"});
+}

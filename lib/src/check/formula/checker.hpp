@@ -1066,6 +1066,7 @@ class checker {
     bool converts_in_term(const scale_literal& l, const typed_term& term, bool allow_hundred) const;
     [[gnu::always_inline]] inline bool units_agree_with_plain_numbers(std::span<const operand> ops,
                                                                       double& unit) const;
+    [[gnu::noinline]] void report_barometer_added_to_absolute(std::span<const operand> terms);
     bool report_term_left_unconverted(std::span<const operand> ops,
                                       std::span<const std::size_t> index,
                                       std::span<const scaled_operand> parts);

@@ -606,6 +606,8 @@ typed_term checker::eval_sum(std::uint32_t index) {
                                              result.value->to_double(), index, result.value));
         return result;
     }
+    if (result.dim == pressure_dimension() && terms.size() <= 4) [[unlikely]]
+        report_barometer_added_to_absolute(terms);
     if (offset_term != nullptr) {
         result = finish_offset_sum(terms, result, literal_base, index);
         return result; // as above

@@ -402,4 +402,42 @@ bool checker::names_atmosphere(std::uint32_t node) const {
     return names_the_atmosphere(name, e != nullptr ? e->description : std::string_view());
 }
 
+// "(p_abs + p_b - p_vap)" in an NPSH: a pressure the file calls absolute (psia, bar a, or
+// "absolute" in its description) with the barometer added again counts the atmosphere twice,
+// some 100 kPa over (common practice: NPSH_a from an absolute suction pressure takes no
+// barometer, from a gauge one it does).
+void checker::report_barometer_added_to_absolute(std::span<const operand> terms) {
+    const operand* absolute = nullptr;
+    const operand* barometer = nullptr;
+    for (const operand& t : terms) {
+        const syntax::expr_node& n = file_.nodes[t.node];
+        if (t.subtracted || n.kind != expr_kind::symbol)
+            continue;
+        const std::string_view name = text(n.range);
+        const symbol_entry* e = symbols_.find(name);
+        if (e == nullptr || e->offset_unit != nullptr)
+            continue;
+        const std::string_view unit = e->unit_text;
+        if (names_the_atmosphere(name, e->description))
+            barometer = &t;
+        else if (e->description.find("absolute") != std::string_view::npos || unit == "psia" ||
+                 unit.ends_with(" a") || unit.ends_with("(a)") || unit.ends_with("abs"))
+            absolute = &t;
+    }
+    if (absolute == nullptr || barometer == nullptr)
+        return;
+    diagnostic& d =
+        report(rules::offset_scale,
+               fmt::format("{} is already an absolute pressure, and {} adds the atmosphere to it "
+                           "again: the sum counts the atmosphere twice",
+                           quote(absolute->node), quote(barometer->node)),
+               file_.nodes[barometer->node].range);
+    d.level = severity::warning;
+    add_term(d, *absolute);
+    add_term(d, *barometer, true);
+    d.notes.push_back({"add the barometer to a gauge reading only; an absolute reading "
+                       "already holds it",
+                       {}});
+}
+
 } // namespace plumb::formula_check
