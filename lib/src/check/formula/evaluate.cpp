@@ -220,12 +220,14 @@ void checker::check_formula(const syntax::formula& f) {
             check_origins(sides, what);
             // A note (6356 read as the fan trade's constant) is no finding that settles the
             // formula: the rules for declared units still ask.
-            const bool only_notes =
-                std::all_of(out_.begin() + static_cast<std::ptrdiff_t>(findings_before), out_.end(),
-                            [](const diagnostic& d) { return d.level == severity::note; });
+            const auto only_notes = [&] {
+                return std::all_of(out_.begin() + static_cast<std::ptrdiff_t>(findings_before),
+                                   out_.end(),
+                                   [](const diagnostic& d) { return d.level == severity::note; });
+            };
             if ((symbols_.unit_marks() &
                  (counts_revolutions | at_reference_conditions | apparent_power)) != 0 &&
-                only_notes && equation)
+                equation && only_notes())
                 ask_of_marked_units(f, sides, out_.size() != findings_before);
             else if (file_.functions == syntax::function_names::spreadsheet &&
                      out_.size() == findings_before && equation && sides.size() == 2 &&
@@ -747,6 +749,7 @@ typed_term checker::eval_factors(std::uint32_t index) {
                 factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
             read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
         } else if (divided && factor->numeric && result.known && !result.numeric &&
+                   file_.nodes[syntax::inside_brackets(file_, op.rhs)].kind == expr_kind::add &&
                    reference_rise_from_inferred_zero(op.lhs, op.rhs)) [[unlikely]] {
             if (factor != reinterpret_cast<const typed_term*>(evaluated))
                 factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);

@@ -407,24 +407,36 @@ bool checker::names_atmosphere(std::uint32_t node) const {
 // some 100 kPa over (common practice: NPSH_a from an absolute suction pressure takes no
 // barometer, from a gauge one it does).
 void checker::report_barometer_added_to_absolute(std::span<const operand> terms) {
+    // Most pressure sums hold no reading called absolute: that is looked for first, and the
+    // barometer's words only beside one.
+    const auto said_absolute = [](const symbol_entry& e) {
+        const std::string_view unit = e.unit_text;
+        return unit == "psia" || unit.ends_with(" a") || unit.ends_with("(a)") ||
+               unit.ends_with("abs") || e.description.find("absolute") != std::string_view::npos;
+    };
     const operand* absolute = nullptr;
-    const operand* barometer = nullptr;
     for (const operand& t : terms) {
         const syntax::expr_node& n = file_.nodes[t.node];
         if (t.subtracted || n.kind != expr_kind::symbol)
             continue;
-        const std::string_view name = text(n.range);
-        const symbol_entry* e = symbols_.find(name);
-        if (e == nullptr || e->offset_unit != nullptr)
-            continue;
-        const std::string_view unit = e->unit_text;
-        if (names_the_atmosphere(name, e->description))
-            barometer = &t;
-        else if (e->description.find("absolute") != std::string_view::npos || unit == "psia" ||
-                 unit.ends_with(" a") || unit.ends_with("(a)") || unit.ends_with("abs"))
+        const symbol_entry* e = symbols_.find(text(n.range));
+        if (e != nullptr && e->offset_unit == nullptr && said_absolute(*e) &&
+            !names_the_atmosphere(text(n.range), e->description))
             absolute = &t;
     }
-    if (absolute == nullptr || barometer == nullptr)
+    if (absolute == nullptr)
+        return;
+    const operand* barometer = nullptr;
+    for (const operand& t : terms) {
+        const syntax::expr_node& n = file_.nodes[t.node];
+        if (&t == absolute || t.subtracted || n.kind != expr_kind::symbol)
+            continue;
+        const symbol_entry* e = symbols_.find(text(n.range));
+        if (e != nullptr && e->offset_unit == nullptr &&
+            names_the_atmosphere(text(n.range), e->description))
+            barometer = &t;
+    }
+    if (barometer == nullptr)
         return;
     diagnostic& d =
         report(rules::offset_scale,
