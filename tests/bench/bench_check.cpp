@@ -361,9 +361,10 @@ int run(const options& opt) {
             list << p.file << ':' << p.first_line << ' ' << p.rule << '\n';
     }
     fmt::print("corpus:   {} in {} files (dictionary of {} symbols), {} equations, {} bytes, "
-               "{} planted inconsistencies; rng_seed {:#x}; written in {:.2f} s\n",
+               "{} planted inconsistencies; generator start {:#x}; written in {:.2f} s\n",
                dir.string(), corpus.files, corpus.dictionary_symbols, grouped(corpus.equations),
-               grouped(corpus.bytes), grouped(corpus.planted.size()), plumb_bench::rng_seed, gen_s);
+               grouped(corpus.bytes), grouped(corpus.planted.size()), plumb_bench::rng_start,
+               gen_s);
 
     // The warm-up pulls the files into the page cache; its report is the one judged.
     const auto warm_start = clock_type::now();

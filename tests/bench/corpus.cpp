@@ -18,7 +18,7 @@ namespace {
 // distributions, which may differ between implementations.
 class rng {
   public:
-    explicit rng(std::uint64_t seed) : state_(seed) {}
+    explicit rng(std::uint64_t start) : state_(start) {}
 
     std::uint64_t next() {
         std::uint64_t z = (state_ += 0x9e3779b97f4a7c15ULL);
@@ -477,9 +477,9 @@ constexpr std::array<std::array<std::string_view, 4>, 3> local_symbols = {{
 } // namespace
 
 corpus_summary write_corpus(const std::filesystem::path& dir, std::size_t equations,
-                            std::uint64_t seed) {
+                            std::uint64_t start) {
     corpus_summary summary;
-    rng r(seed);
+    rng r(start);
 
     {
         file_writer dict(dir / "dictionary.plumb");

@@ -28,12 +28,12 @@ struct corpus_summary {
 };
 
 // Fixed so that two runs, or two machines, time the same text.
-inline constexpr std::uint64_t rng_seed = 0x706c756d62'2024ULL;
+inline constexpr std::uint64_t rng_start = 0x706c756d62'2024ULL;
 
 // Writes dictionary.plumb and about a hundred formula files under `dir` (which must exist)
 // holding `equations` formulas in total. Throws std::runtime_error when a file cannot be written.
 corpus_summary write_corpus(const std::filesystem::path& dir, std::size_t equations,
-                            std::uint64_t seed = rng_seed);
+                            std::uint64_t start = rng_start);
 
 // A self-contained file of ten consistent formulas, for timing one small check from process start;
 // with_typo misspells a name in the last one, so that the check reports an undeclared name.

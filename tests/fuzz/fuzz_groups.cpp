@@ -1,4 +1,4 @@
-// Studies and model plans: the input is a .plumb file (seeded with studies, prototype and
+// Studies and model plans: the input is a .plumb file (starting from studies, prototype and
 // model lines); the groups and plans are worked out and rendered as text and JSON. The first
 // line is also given as `groups --vars` gives its argument, as a study of its own.
 #include "fuzz_support.hpp"
