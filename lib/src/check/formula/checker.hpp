@@ -681,6 +681,8 @@ class checker {
     bool could_correct_state(std::uint32_t at) const;
     bool plain_conversion_number(std::uint32_t at) const;
     bool circle_folded_with_conversion(std::uint32_t at, bool pi_written) const;
+    void report_flow_at_reference(std::uint32_t flow, const reference_volume& normal,
+                                  std::string_view wanted, std::uint32_t side);
     bool report_area_from_normal_flow(const operand& side);
     bool report_reference_states_in_ratio(const operand& side);
     bool report_velocity_from_normal_flow(const operand& side);

@@ -369,15 +369,11 @@ bool checker::report_power_from_normal_flow(const operand& side) {
     });
     if (pressures != 1 || pressure == syntax::no_index || correction || flow == syntax::no_index)
         return false;
-    diagnostic& d = report(
-        rules::unit_scale,
-        fmt::format("{} is a flow at reference conditions ({}), but a fan's or a compressor's "
-                    "power is the actual volume flow through it times {}: this formula does "
-                    "not correct for the gas's state",
-                    quote(flow), normal->name, quote(pressure)),
-        file_.nodes[side.node].range);
-    d.level = severity::warning;
-    d.notes.push_back({std::string(state_correction_advice), {}});
+    report_flow_at_reference(flow, *normal,
+                             fmt::format("a fan's or a compressor's power is the actual volume "
+                                         "flow through it times {}",
+                                         quote(pressure)),
+                             side.node);
     return true;
 }
 
@@ -472,6 +468,20 @@ bool checker::plain_conversion_number(std::uint32_t at) const {
     return looks_like_conversion(read_literal(text(file_.nodes[at].range), v, at), false);
 }
 
+// A flow at reference conditions where the formula wants the actual one (`wanted` says why):
+// the finding of the power, area and velocity rules.
+void checker::report_flow_at_reference(std::uint32_t flow, const reference_volume& normal,
+                                       std::string_view wanted, std::uint32_t side) {
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("{} is a flow at reference conditions ({}), but {}: this formula "
+                           "does not correct for the gas's state",
+                           quote(flow), normal.name, wanted),
+               file_.nodes[side].range);
+    d.level = severity::warning;
+    d.notes.push_back({std::string(state_correction_advice), {}});
+}
+
 // "A_cl = Q_s/AC": a filter's cloth area or a duct's section from a flow at reference
 // conditions over a face velocity (an air-to-cloth ratio), where the velocity is the actual
 // flow's over the area (EPA Air Pollution Control Cost Manual, 6th ed., ch. 5.1, from
@@ -506,15 +516,10 @@ bool checker::report_area_from_normal_flow(const operand& side) {
     });
     if (other || velocities != 1 || flow == syntax::no_index || !normal || normal->power != 1)
         return false;
-    diagnostic& d = report(
-        rules::unit_scale,
-        fmt::format("{} is a flow at reference conditions ({}), but the area a gas passes at "
-                    "a velocity is its actual volume flow over that velocity: this formula "
-                    "does not correct for the gas's state",
-                    quote(flow), normal->name),
-        file_.nodes[side.node].range);
-    d.level = severity::warning;
-    d.notes.push_back({std::string(state_correction_advice), {}});
+    report_flow_at_reference(flow, *normal,
+                             "the area a gas passes at a velocity is its actual volume flow "
+                             "over that velocity",
+                             side.node);
     return true;
 }
 
@@ -651,15 +656,8 @@ bool checker::report_velocity_from_normal_flow(const operand& side) {
     });
     if (correction || flow == syntax::no_index || !normal)
         return false;
-    diagnostic& d = report(
-        rules::unit_scale,
-        fmt::format("{} is a flow at reference conditions ({}), but a gas's velocity is its "
-                    "actual volume flow over the area: this formula does not correct for the "
-                    "gas's state",
-                    quote(flow), normal->name),
-        file_.nodes[side.node].range);
-    d.level = severity::warning;
-    d.notes.push_back({std::string(state_correction_advice), {}});
+    report_flow_at_reference(flow, *normal,
+                             "a gas's velocity is its actual volume flow over the area", side.node);
     return true;
 }
 
