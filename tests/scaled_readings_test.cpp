@@ -345,6 +345,13 @@ TEST_CASE("a °C and °F reading set equal says how to convert") {
                                 "(T_F - 32)/1.8 on the \u00B0C scale"));
     }
     passes(decl, {"T_C = (T_F - 32)/1.8", "T_F = 1.8*T_C + 32"});
+    // Run backwards, the finding's headline says so, not how far apart the zeros land.
+    const auto backwards = plumb::test::check_after(decl, "T_F = (T_C - 32)/1.8");
+    REQUIRE(plumb::test::count_of(backwards, plumb::rules::offset_scale) == 1);
+    const auto& reversed = plumb::test::first_under(backwards, plumb::rules::offset_scale);
+    CHECK(reversed.message.find("the conversion runs the other way, T_F = 1.8*T_C + 32") !=
+          std::string::npos);
+    CHECK(reversed.message.find("absolute scale") == std::string::npos);
 }
 
 // A winding's temperature rise by the resistance method, Δθ = (R_2 - R_1)/R_1·(235 + θ_1) +

@@ -201,8 +201,13 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             file_.nodes[off.node].range);
         add_term(d, off);
         add_term(d, other);
-        if (temperature && explain_reversed_fahrenheit(d, side, *reference))
+        // The zeros' difference seen through a conversion run backwards would only puzzle:
+        // what went wrong becomes the finding's headline.
+        if (temperature && explain_reversed_fahrenheit(d, side, *reference)) {
+            d.message = std::move(d.notes.back().message);
+            d.notes.pop_back();
             return;
+        }
         if (unit != nullptr && other.type.offset == nullptr) {
             // "T_K = T_F + 273.15": where a number is added already, it is the wrong one;
             // the advice names the reading, not the whole side with that number in it.
