@@ -198,6 +198,23 @@ TEST_CASE("gravity as a number beside the other system's units: the finding says
     CHECK(note_with(no_density, plumb::rules::sum_mismatch, "standard gravity").empty());
 }
 
+// A velocity head V²/(2g) in ft with g typed for metres, 2*9.81 or 19.62 (the velocity head
+// of any hydraulics text; g_n = 9.80665 m/s² = 32.174 ft/s², NIST SP 811 (2008), B.8): the
+// finding names the metric g, where it once asked whether a g was missing.
+TEST_CASE("gravity typed for the other system under a velocity head") {
+    const std::string d = "h_ft : ft\nV : ft/s\nh_m : m\nV_m : m/s\n";
+    for (const char* formula : {"h_ft = V^2/(2*9.81)", "h_ft = V^2/19.62"}) {
+        CAPTURE(formula);
+        const auto r = run(d + formula + "\n");
+        REQUIRE(count_of(r, plumb::rules::side_mismatch) == 1);
+        CHECK(note_with(r, plumb::rules::side_mismatch, "standard gravity in m/s").size() > 0);
+        CHECK(note_with(r, plumb::rules::side_mismatch, "3.28084 times").size() > 0);
+    }
+    const auto foot_g = run(d + "h_m = V_m^2/(2*32.2)\n");
+    CHECK(note_with(foot_g, plumb::rules::side_mismatch, "standard gravity in ft/s").size() > 0);
+    CHECK(problems_in(run(d + "h_m = V_m^2/(2*9.81)\n")) == 0);
+}
+
 // Water's specific weight written as a number, γ_w = ρ_w·g_n with ρ_w from 995.65 to 999.975
 // kg/m³ between 0 and 30 °C (CRC Handbook of Chemistry and Physics; from memory). Each printed
 // number is worked out here from NIST SP 811 (2008) App. B factors (ft = 0.3048 m, lbf =

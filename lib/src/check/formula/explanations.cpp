@@ -274,34 +274,43 @@ bool checker::note_gravity_in_other_units(diagnostic& d, std::span<const operand
         const typed_term& t = ops[i].type;
         if (!t.known || t.numeric || t.literal_count == 0 || !std::isfinite(t.scale))
             continue;
+        // g multiplying (ρ·9.81·h) or dividing (V²/(2·9.81)), and 2g as one number (19.62).
+        int power = 0;
         try {
-            if (!(*a.reference / t.dim == acceleration_dimension()))
-                continue;
+            if (*a.reference / t.dim == acceleration_dimension())
+                power = 1;
+            else if (t.dim / *a.reference == acceleration_dimension())
+                power = -1;
         } catch (const std::exception&) {
             continue;
         }
+        if (power == 0)
+            continue;
         for (std::uint32_t k = 0; k < t.literal_count; ++k) {
             const scale_literal& l = literals_[t.literal_begin + k];
-            if (l.exponent != 1.0)
+            if (l.exponent != power)
                 continue;
             const std::string written = display_text(file_.nodes[l.node].range);
             for (const gravity_unit& u : units) {
                 const double g = standard_gravity / u.metres;
-                if (std::abs(l.value - g) > half_unit_in_last_digit(written) * (1.0 + 1e-9) ||
-                    std::abs(l.value / g - 1.0) > 0.005)
+                const double times = std::abs(l.value / (2.0 * g) - 1.0) <= 0.005 ? 2.0 : 1.0;
+                // 19.62 is twice a rounded 9.81: twice the rounding too.
+                if (std::abs(l.value - times * g) >
+                        times * half_unit_in_last_digit(written) * (1.0 + 1e-9) ||
+                    std::abs(l.value / (times * g) - 1.0) > 0.005)
                     continue;
                 // As the unit-scale findings count it: the value as written over the value
                 // in the reference's unit.
-                const double ratio = reference_scale / (u.metres * t.scale);
+                const double ratio = reference_scale / (std::pow(u.metres, power) * t.scale);
                 if (std::abs(ratio - 1.0) < 0.01)
                     continue;
                 d.notes.push_back(
-                    {fmt::format("{} is standard gravity in {}, but the other units of {} are "
+                    {fmt::format("{} is {}standard gravity in {}, but the other units of {} are "
                                  "not all {} and seconds: read so, it counts {:.6g} times as "
                                  "much as {}; write gravity in the units around it, or "
                                  "convert them first",
-                                 written, u.name, quote(ops[i].node), u.system, ratio,
-                                 quote(reference->node)),
+                                 written, times == 2.0 ? "twice " : "", u.name, quote(ops[i].node),
+                                 u.system, ratio, quote(reference->node)),
                      {}});
                 return true;
             }
