@@ -215,6 +215,16 @@ TEST_CASE("gravity typed for the other system under a velocity head") {
     CHECK(problems_in(run(d + "h_m = V_m^2/(2*9.81)\n")) == 0);
 }
 
+// A pore pressure u = γ_w·z_w in kPa from m with water's 62.4 lbf/ft³ typed in (ρ_w·g_n =
+// 9.807 kN/m³ at 1000 kg/m³; NIST SP 811 (2008), B.8): the sides differ by exactly a specific
+// weight, and the finding gives water's in the units written, 9.81.
+TEST_CASE("a specific weight typed for the other system names water's in the units written") {
+    const auto r = run("u_b : kPa\nz_w : m\nu_b = 62.4*z_w\n");
+    REQUIRE(count_of(r, plumb::rules::side_mismatch) == 1);
+    CHECK(note_with(r, plumb::rules::side_mismatch, "is about 9.81 in the units written here")
+              .size() > 0);
+}
+
 // Water's specific weight written as a number, γ_w = ρ_w·g_n with ρ_w from 995.65 to 999.975
 // kg/m³ between 0 and 30 °C (CRC Handbook of Chemistry and Physics; from memory). Each printed
 // number is worked out here from NIST SP 811 (2008) App. B factors (ft = 0.3048 m, lbf =

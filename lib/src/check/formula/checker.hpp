@@ -720,6 +720,8 @@ class checker {
                                                    const agreement& a) const;
     void note_acceleration_or_density_apart(diagnostic& d, std::span<const operand> ops,
                                             const agreement& a) const;
+    void note_specific_weight_apart(diagnostic& d, std::span<const operand> ops,
+                                    const agreement& a) const;
     const operand* plain_reference_term(std::span<const operand> ops, const agreement& a) const;
     std::optional<declared_factor> declared_factor_of(std::uint32_t k, double exponent) const;
     [[gnu::noinline]] bool

@@ -114,8 +114,31 @@ void checker::note_acceleration_or_density_apart(diagnostic& d, std::span<const 
                                  : "divided by a density it would match; is one missing "
                                    "from its denominator (V = m/ρ)?"),
                  {}});
+        // "u = 62.4*z_w" in kPa from m: water's specific weight typed for feet and pounds.
+        else if (*apart == density_dim * acceleration_dimension())
+            note_specific_weight_apart(d, ops, a);
     } catch (const std::exception&) {
     }
+}
+
+// The sides differ by exactly a specific weight: water's, ρ_w·g_n, about 9.81 kN/m³ (62.4
+// lbf/ft³; ρ_w from 995.65 to 999.975 kg/m³ between 0 and 30 °C, CRC Handbook, from memory),
+// in the units the term and the rest are written in, which is the number the formula needs.
+void checker::note_specific_weight_apart(diagnostic& d, std::span<const operand> ops,
+                                         const agreement& a) const {
+    const operand* reference = plain_reference_term(ops, a);
+    const typed_term& odd = ops[a.odd.front()].type;
+    if (reference == nullptr || !std::isfinite(odd.scale) || !(odd.scale > 0))
+        return;
+    // 1000 kg/m³ times g_n, per the unit the rest is in over the term's.
+    constexpr double water = 1000.0 * 9.80665;
+    const double here = water * odd.scale / reference->type.scale;
+    d.notes.push_back(
+        {fmt::format("{} differs from the rest by exactly a specific weight (\u03C1*g): for "
+                     "water, \u03C1_w*{{g_n}} is about {:.3g} in the units written here (62.4 "
+                     "in lbf/ft\u00B3, 9.81 in kN/m\u00B3)",
+                     quote(ops[a.odd.front()].node), here),
+         {}});
 }
 
 // The first term of the reference's dimension that is plainly in its unit: no numbers.
