@@ -1070,7 +1070,9 @@ class checker {
     bool converts_in_term(const scale_literal& l, const typed_term& term, bool allow_hundred) const;
     [[gnu::always_inline]] inline bool units_agree_with_plain_numbers(std::span<const operand> ops,
                                                                       double& unit) const;
+    static bool said_absolute(const symbol_entry& e);
     [[gnu::noinline]] void report_barometer_added_to_absolute(std::span<const operand> terms);
+    std::optional<double> unit_the_sum_needs() const;
     bool report_term_left_unconverted(std::span<const operand> ops,
                                       std::span<const std::size_t> index,
                                       std::span<const scaled_operand> parts);

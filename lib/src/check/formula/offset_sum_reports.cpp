@@ -108,6 +108,16 @@ void checker::warn_sea_level_atmosphere_at_site(std::span<const operand> terms, 
     }
 }
 
+// Whether a symbol's unit or description says outright that it is absolute: psia, bara,
+// "bar a", "kPa(a)", "abs", or "absolute" in its words.
+bool checker::said_absolute(const symbol_entry& e) {
+    const std::string_view unit = e.unit_text;
+    return unit.find("psia") != std::string_view::npos ||
+           unit.find("bara") != std::string_view::npos ||
+           unit.find("abs") != std::string_view::npos || unit.ends_with(" a") ||
+           unit.ends_with("(a)") || e.description.find("absolute") != std::string_view::npos;
+}
+
 // Whether a symbol's name or description calls it a gauge reading (p_g, "gauge pressure").
 bool checker::named_gauge(std::uint32_t node) const {
     if (file_.nodes[node].kind != expr_kind::symbol)
@@ -117,10 +127,7 @@ bool checker::named_gauge(std::uint32_t node) const {
     const std::string_view description = entry != nullptr ? entry->description : "";
     // "p_mg : psia "memory gauge, which records absolute"": a unit or a description that
     // says absolute outright wins over the instrument's name.
-    const std::string_view unit = entry != nullptr ? entry->unit_text : "";
-    if (unit.find("psia") != std::string_view::npos ||
-        unit.find("bara") != std::string_view::npos || unit.find("abs") != std::string_view::npos ||
-        description.find("absolute") != std::string_view::npos)
+    if (entry != nullptr && said_absolute(*entry))
         return false;
     return name.ends_with("_g") || name.find("gauge") != std::string_view::npos ||
            name.find("_g_") != std::string_view::npos ||
@@ -409,11 +416,6 @@ bool checker::names_atmosphere(std::uint32_t node) const {
 void checker::report_barometer_added_to_absolute(std::span<const operand> terms) {
     // Most pressure sums hold no reading called absolute: that is looked for first, and the
     // barometer's words only beside one.
-    const auto said_absolute = [](const symbol_entry& e) {
-        const std::string_view unit = e.unit_text;
-        return unit == "psia" || unit.ends_with(" a") || unit.ends_with("(a)") ||
-               unit.ends_with("abs") || e.description.find("absolute") != std::string_view::npos;
-    };
     const operand* absolute = nullptr;
     for (const operand& t : terms) {
         const syntax::expr_node& n = file_.nodes[t.node];

@@ -95,6 +95,24 @@ bool checker::reconcile_scales(std::span<const operand> ops, meeting_point what,
     return reconcile_in_full(ops, what, unit);
 }
 
+// The unit the sum being weighed must be in: the other side's, where the sum is a side, or
+// what the other side leaves it once the side's other factors are taken out ("(b + z*y)*y" =
+// A in m², asked only of an equation of two sides). Empty where neither is known.
+std::optional<double> checker::unit_the_sum_needs() const {
+    std::optional<double> scale;
+    if (sum_side_hint_ != nullptr) {
+        if (sum_side_hint_->known && sum_side_hint_->literal_count == 0)
+            scale = sum_side_hint_->scale;
+    } else if (sum_checked_ != syntax::no_index && side_hint_ != nullptr &&
+               side_hint_node_ != syntax::no_index && current_ != nullptr &&
+               current_->side_count == 2) {
+        scale = scale_left_for_sum(side_hint_node_, *side_hint_, sum_checked_);
+    }
+    if (!scale || !std::isfinite(*scale) || !(*scale > 0))
+        return std::nullopt;
+    return scale;
+}
+
 // "z_ft = z_m*3.281 + h_m": the terms agree without the 3.281 (both in m), but the sum is set
 // equal to a side in ft, which the converted term is in: the conversion is needed, and the
 // other term lacks it. Said so, rather than that the factor is not needed, whose advice
@@ -102,15 +120,8 @@ bool checker::reconcile_scales(std::span<const operand> ops, meeting_point what,
 bool checker::report_term_left_unconverted(std::span<const operand> ops,
                                            std::span<const std::size_t> index,
                                            std::span<const scaled_operand> parts) {
-    if (sum_checked_ == syntax::no_index || side_hint_ == nullptr ||
-        side_hint_node_ == syntax::no_index || current_ == nullptr || current_->side_count != 2)
-        return false;
-    std::optional<double> side;
-    if (sum_side_hint_ != nullptr && sum_side_hint_->known && sum_side_hint_->literal_count == 0)
-        side = sum_side_hint_->scale;
-    else if (sum_side_hint_ == nullptr)
-        side = scale_left_for_sum(side_hint_node_, *side_hint_, sum_checked_);
-    if (!side || !std::isfinite(*side) || !(*side > 0))
+    const std::optional<double> side = unit_the_sum_needs();
+    if (!side)
         return false;
     // Rounded conversions (3.281 for 3.28084) land within a few parts in ten thousand.
     const auto in_side_unit = [&](std::size_t i) {
@@ -230,28 +241,16 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     if (what.what == "sides of this limit" && parts.size() == 2 && ops[index[r.odd]].type.numeric &&
         !ops[index[r.reference]].type.numeric)
         std::swap(r.odd, r.reference);
-    // A sum among a side's factors, "(b + z*y)*y" = A in m²: asked only here, once the
-    // terms are known to disagree, of an equation of two sides.
-    const typed_term* hint = sum_side_hint_;
-    typed_term factor_hint;
-    if (what.what.starts_with("terms") && parts.size() >= 2 && hint == nullptr &&
-        sum_checked_ != syntax::no_index && side_hint_ != nullptr &&
-        side_hint_node_ != syntax::no_index && current_->side_count == 2) [[unlikely]]
-        if (const std::optional<double> scale =
-                scale_left_for_sum(side_hint_node_, *side_hint_, sum_checked_)) {
-            factor_hint.scale = *scale;
-            hint = &factor_hint;
-        }
     // "w = q*s + g_sw" with w and g_sw in kN/m and q in Pa: the term in the other side's
     // unit is right, whichever came first.
-    if (what.what.starts_with("terms") && parts.size() >= 2 && hint != nullptr && hint->known &&
-        hint->literal_count == 0 && std::isfinite(hint->scale) && hint->scale > 0) [[unlikely]] {
-        const auto in_side_unit = [&](std::size_t i) {
-            return std::abs(apparent_scale(parts[i]) / hint->scale - 1.0) < 1e-9;
-        };
-        if (in_side_unit(r.odd) && !in_side_unit(r.reference))
-            std::swap(r.odd, r.reference);
-    }
+    if (what.what.starts_with("terms") && parts.size() >= 2) [[unlikely]]
+        if (const std::optional<double> side = unit_the_sum_needs()) {
+            const auto in_side_unit = [&](std::size_t i) {
+                return std::abs(apparent_scale(parts[i]) / *side - 1.0) < 1e-9;
+            };
+            if (in_side_unit(r.odd) && !in_side_unit(r.reference))
+                std::swap(r.odd, r.reference);
+        }
     const operand& op = ops[index[r.odd]];
     const operand& reference = ops[index[r.reference]];
     // What the numbers as written give: the conversion-like ones taken as conversions.
