@@ -699,6 +699,7 @@ class checker {
     };
 
     // check/formula/rotation.cpp
+    void warn_of_missing_pi(const syntax::formula& f, std::string message, std::string fix);
     static bool is_rotating_power_or_torque(const compact_dimension& dim);
     static bool asks_for_two_pi(const compact_dimension& dim);
     [[gnu::noinline]] void report_revolution_without_two_pi(const syntax::formula& f,
@@ -1105,6 +1106,7 @@ class checker {
     bool squares_something(std::uint32_t node) const;
     bool accept_folded_coefficient(std::span<const operand> ops, std::span<const std::size_t> index,
                                    std::span<const scaled_operand> parts, double& unit);
+    static scale_literal exact_conversion_literal(const scale_literal& l, const rational& value);
     static scale_literal power_of_ten_literal(const scale_literal& l, double power);
     static std::optional<scale_literal> twice_a_conversion(const scale_literal& l);
     std::optional<double> folded_power_of_ten(std::span<const operand> ops,

@@ -3,6 +3,14 @@
 
 namespace plumb::formula_check {
 
+// The rotation rules' finding: a warning on the whole formula, with the fix beside it.
+void checker::warn_of_missing_pi(const syntax::formula& f, std::string message, std::string fix) {
+    diagnostic& d = report(rules::unit_scale, std::move(message),
+                           file_.nodes[file_.sides[f.first_side].root].range);
+    d.level = severity::warning;
+    d.notes.push_back({std::move(fix), {}});
+}
+
 bool checker::is_rotating_power_or_torque(const compact_dimension& dim) {
     return dim == energy_dim || dim == power_dim;
 }
@@ -176,48 +184,41 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
     // reactive power in the formula: a switching loss C·V²·f in W needs no 2π.
     if (speeds == 1 && capacitors == 1 && angular_speeds == 0 &&
         (reactives >= 1 || sides_dim == resistance_dim) && torques == 0 && rim_speeds == 0) {
-        diagnostic& d =
-            report(rules::unit_scale,
-                   fmt::format("{} is a frequency in cycles ({}), and a capacitor's or reactor's "
-                               "reactance takes the angular frequency ω = 2π·f "
-                               "(X_C = 1/(2π·f·C), Q = 2π·f·C·V²); "
-                               "this formula has no 2π, so it is off by 6.28319",
-                               speed.shown(), speed.unit),
-                   file_.nodes[file_.sides[f.first_side].root].range);
-        d.level = severity::warning;
-        d.notes.push_back({"write 2*pi*f, or declare the angular frequency in rad/s", {}});
+        warn_of_missing_pi(
+            f,
+            fmt::format("{} is a frequency in cycles ({}), and a capacitor's or reactor's "
+                        "reactance takes the angular frequency ω = 2π·f "
+                        "(X_C = 1/(2π·f·C), Q = 2π·f·C·V²); "
+                        "this formula has no 2π, so it is off by 6.28319",
+                        speed.shown(), speed.unit),
+            "write 2*pi*f, or declare the angular frequency in rad/s");
         return;
     }
     // T = Δp·V_g/(2π): a hydraulic motor's displacement is per revolution, 2π radians
     // (ISO 4391, from memory); a pump's flow V_g·n needs no 2π, and has a speed beside it.
     if (displacements == 1 && torques == 1 && pressures >= 1 && speeds == 0 && powers == 0 &&
         energies == 0 && angular_speeds == 0) {
-        diagnostic& d =
-            report(rules::unit_scale,
-                   fmt::format("{} is a torque ({}) from a displacement per revolution: a motor's "
-                               "torque is Δp·V_g/(2π), the 2π radians of each "
-                               "revolution, and this formula has no 2π, so it is off by 6.28319",
-                               torque.shown(), torque.unit),
-                   file_.nodes[file_.sides[f.first_side].root].range);
-        d.level = severity::warning;
-        d.notes.push_back({"revolutions count as cycles: divide by 2*pi (T = Δp*V_g/(2*pi))", {}});
+        warn_of_missing_pi(
+            f,
+            fmt::format("{} is a torque ({}) from a displacement per revolution: a motor's "
+                        "torque is Δp·V_g/(2π), the 2π radians of each "
+                        "revolution, and this formula has no 2π, so it is off by 6.28319",
+                        torque.shown(), torque.unit),
+            "revolutions count as cycles: divide by 2*pi (T = Δp*V_g/(2*pi))");
         return;
     }
     if (torques != 1 || speeds != 1 || powers != 1 || energies != 0)
         return;
-    diagnostic& d =
-        report(rules::unit_scale,
-               fmt::format("{} is a torque ({}) and {} a speed in revolutions ({}): power and "
-                           "torque meet through the 2\u03C0 radians of each revolution, P = "
-                           "2\u03C0\u00B7n\u00B7M, and this formula has no 2\u03C0, so it is "
-                           "off by 6.28319",
-                           torque.shown(), torque.unit, speed.shown(), speed.unit),
-               file_.nodes[file_.sides[f.first_side].root].range);
-    d.level = severity::warning;
-    d.notes.push_back({"revolutions count as cycles: write 2*pi*n for the angular speed "
-                       "(M = 60000*P/(2*pi*n) in N·m from kW and rpm is M = 9549*P/n), or "
-                       "declare the speed in rad/s",
-                       {}});
+    warn_of_missing_pi(
+        f,
+        fmt::format("{} is a torque ({}) and {} a speed in revolutions ({}): power and "
+                    "torque meet through the 2\u03C0 radians of each revolution, P = "
+                    "2\u03C0\u00B7n\u00B7M, and this formula has no 2\u03C0, so it is "
+                    "off by 6.28319",
+                    torque.shown(), torque.unit, speed.shown(), speed.unit),
+        "revolutions count as cycles: write 2*pi*n for the angular speed "
+        "(M = 60000*P/(2*pi*n) in N·m from kW and rpm is M = 9549*P/n), or "
+        "declare the speed in rad/s");
 }
 
 // "n_d = v/D" in rpm from a rope speed and a drum's diameter: a point on the rim travels
@@ -227,25 +228,21 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
 void checker::report_rim_speed_without_pi(const syntax::formula& f, const rotating_part& speed,
                                           const rotating_part& rim, const rotating_part& length,
                                           bool radius) {
-    diagnostic& d =
-        report(rules::unit_scale,
-               fmt::format("{} is a speed in revolutions ({}) and {} a speed along the rim of "
-                           "{}: a point on the rim travels {} per revolution, and this formula "
-                           "has no π, so it is off by {}",
-                           speed.shown(), speed.unit, rim.shown(), length.shown(),
-                           radius ? "2π·r" : "π·D", radius ? "6.28319" : "3.14159"),
-               file_.nodes[file_.sides[f.first_side].root].range);
-    d.level = severity::warning;
-    d.notes.push_back(
-        {file_.functions == syntax::function_names::spreadsheet
-             ? fmt::format("put the {} in: multiply by {}PI(), with this formula's unit "
-                           "conversions kept beside it (a speed in revolutions counts cycles)",
-                           radius ? "2\u03C0" : "\u03C0", radius ? "2*" : "")
-             : fmt::format("put the {} in: {} = {}*{}*{}, with this formula's unit "
-                           "conversions kept beside it (a speed in revolutions counts cycles)",
-                           radius ? "2\u03C0" : "\u03C0", rim.name, radius ? "2*pi" : "pi",
-                           length.name, speed.name),
-         {}});
+    warn_of_missing_pi(
+        f,
+        fmt::format("{} is a speed in revolutions ({}) and {} a speed along the rim of "
+                    "{}: a point on the rim travels {} per revolution, and this formula "
+                    "has no π, so it is off by {}",
+                    speed.shown(), speed.unit, rim.shown(), length.shown(), radius ? "2π·r" : "π·D",
+                    radius ? "6.28319" : "3.14159"),
+        file_.functions == syntax::function_names::spreadsheet
+            ? fmt::format("put the {} in: multiply by {}PI(), with this formula's unit "
+                          "conversions kept beside it (a speed in revolutions counts cycles)",
+                          radius ? "2\u03C0" : "\u03C0", radius ? "2*" : "")
+            : fmt::format("put the {} in: {} = {}*{}*{}, with this formula's unit "
+                          "conversions kept beside it (a speed in revolutions counts cycles)",
+                          radius ? "2\u03C0" : "\u03C0", rim.name, radius ? "2*pi" : "pi",
+                          length.name, speed.name));
 }
 
 void checker::report_revolutions_beside_radians(const syntax::formula& f,
@@ -256,17 +253,14 @@ void checker::report_revolutions_beside_radians(const syntax::formula& f,
                 : fmt::format("{} a moment of inertia ({}), whose kinetic energy "
                               "\u00BDI\u03C9\u00B2 takes the speed in radians",
                               partner.shown(), partner.unit);
-    diagnostic& d =
-        report(rules::unit_scale,
-               fmt::format("{} is a speed in revolutions ({}) and {}: a revolution is 2\u03C0 "
-                           "radians, and this formula has no 2\u03C0, so it is off by {}",
-                           speed.shown(), speed.unit, partner_is,
-                           angular ? "6.28319" : "6.28319 for each power of the speed"),
-               file_.nodes[file_.sides[f.first_side].root].range);
-    d.level = severity::warning;
-    d.notes.push_back({"revolutions count as cycles: the angular speed is \u03C9 = 2*pi*n "
-                       "(2*pi*n/60 in rad/s from rpm), or declare the speed in rad/s",
-                       {}});
+    warn_of_missing_pi(
+        f,
+        fmt::format("{} is a speed in revolutions ({}) and {}: a revolution is 2\u03C0 "
+                    "radians, and this formula has no 2\u03C0, so it is off by {}",
+                    speed.shown(), speed.unit, partner_is,
+                    angular ? "6.28319" : "6.28319 for each power of the speed"),
+        "revolutions count as cycles: the angular speed is \u03C9 = 2*pi*n "
+        "(2*pi*n/60 in rad/s from rpm), or declare the speed in rad/s");
 }
 
 } // namespace plumb::formula_check

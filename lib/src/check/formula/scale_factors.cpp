@@ -319,37 +319,36 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
 // power of ten (4e6, 0.004); a whole coefficient to 99 (16e6 in τ = 16e6*T/(π*d^3) from
 // kN·m and mm to MPa); any coefficient written with that exponent (5.093e6); and ten
 // beside π (20*PI() in T = V_g*Δp/(20π) from cm³ and bar to N·m, 1 cm³·bar = 0.1 J).
-scale_literal checker::power_of_ten_literal(const scale_literal& l, double power) {
+// The number read as an exact conversion `value` in place of what was written.
+scale_literal checker::exact_conversion_literal(const scale_literal& l, const rational& value) {
     scale_literal as = l;
+    as.value = value.to_double();
+    as.tolerance = 0.0;
+    as.low = value;
+    as.high = value;
+    as.power_of_ten = false;
+    as.power = 0;
+    as.factor_like = true;
+    as.table_digits = false;
+    return as;
+}
+
+scale_literal checker::power_of_ten_literal(const scale_literal& l, double power) {
     std::int64_t ten = 1;
     for (int p = 0; p < std::abs(static_cast<int>(power)); ++p)
         ten *= 10;
+    scale_literal as = exact_conversion_literal(l, power > 0 ? rational(ten) : rational(1, ten));
     as.value = std::pow(10.0, power);
-    as.tolerance = 0.0;
     as.power_of_ten = true;
     as.power = static_cast<std::int8_t>(power);
-    as.factor_like = true;
-    as.table_digits = false;
-    as.low = power > 0 ? rational(ten) : rational(1, ten);
-    as.high = as.low;
     return as;
 }
 
 // 24 as 2 × 12 (in per ft) and 120 as 2 × 60 (s per min): the conversion alone, exact.
 std::optional<scale_literal> checker::twice_a_conversion(const scale_literal& l) {
     for (const std::int64_t conversion : {12, 60})
-        if (l.value == 2.0 * static_cast<double>(conversion)) {
-            scale_literal as = l;
-            as.value = static_cast<double>(conversion);
-            as.tolerance = 0.0;
-            as.low = rational(conversion);
-            as.high = as.low;
-            as.power_of_ten = false;
-            as.power = 0;
-            as.factor_like = true;
-            as.table_digits = false;
-            return as;
-        }
+        if (l.value == 2.0 * static_cast<double>(conversion))
+            return exact_conversion_literal(l, rational(conversion));
     return std::nullopt;
 }
 
