@@ -536,6 +536,8 @@ TEST_CASE("a linear temperature correction's reference on the other scale") {
                {"R_t = R_20*(1 + α_R*(T_K - 20))", "R_t = R_20*(1 + α_R*(θ_c - 293))",
                 "R_t = R_20*(1 + (T_K - 20)*α_R)", "k = θ^(θ_c - 293)"},
                plumb::rules::offset_scale);
+    fails_with(decl + "θ_d : degC\n", {"R_t = R_20*(1 + α_R*(θ_d - 293))"},
+               plumb::rules::offset_scale);
     const auto r = run(decl, "R_t = R_20*(1 + α_R*(T_K - 20))");
     CHECK(first_under(r, plumb::rules::offset_scale).message.find("counts from 20 K") !=
           std::string::npos);

@@ -377,6 +377,8 @@ TEST_CASE("a conductor's resistance from the inferred zero, with the reference t
     const std::string decl = "R_20, R_90 : ohm\nθ_c : °C\n";
     passes(decl, {"R_90 = R_20*(234.5 + θ_c)/(234.5 + 20)", "R_90 = R_20*(235 + θ_c)/(235 + 20)"});
     fails_with(decl, {"R_90 = R_20*(234.5 + θ_c)/(234.5 + 293)"}, plumb::rules::side_mismatch);
+    // The Celsius scale spelled degC reads the same.
+    passes("R_20, R_90 : ohm\nθ_d : degC\n", {"R_90 = R_20*(234.5 + θ_d)/(234.5 + 20)"});
     fails_with(decl, {"R_90 = R_20*θ_c/(234.5 + 20)"}, plumb::rules::offset_scale);
 }
 

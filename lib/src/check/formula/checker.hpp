@@ -129,6 +129,12 @@ inline const std::vector<offset_row>& offset_rows() {
     return rows;
 }
 
+// The Celsius scale however it is spelled (°C, degC): degrees of a kelvin, zero at 273.15 K.
+inline bool is_celsius(const unit_definition* unit) {
+    return unit != nullptr && unit->scale == unit_scale::offset &&
+           std::abs(unit->factor - 1.0) < 1e-12 && std::abs(unit->offset - 273.15) < 1e-9;
+}
+
 // The absolute unit a gauge unit reads in (psi for psig, kPa for kPag); the symbol itself for
 // any other unit.
 inline std::string absolute_symbol(const unit_definition& unit) {

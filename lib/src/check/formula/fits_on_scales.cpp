@@ -151,7 +151,7 @@ bool checker::from_inferred_zero_of_resistance(std::uint32_t node, bool numbers_
     if (file_.nodes[reading].kind != expr_kind::symbol)
         return false;
     const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
-    return e != nullptr && e->offset_unit != nullptr && e->offset_unit->symbol == "\u00B0C";
+    return e != nullptr && is_celsius(e->offset_unit);
 }
 
 // "R_20*(234.5 + θ_c)/(234.5 + 20)": the reference's rise above the inferred zero typed in
@@ -416,9 +416,7 @@ void checker::report_reference_on_other_scale(std::uint32_t difference) {
     const double reference = written_number(file_.nodes[n.rhs].range);
     const unit_definition* scale = e->offset_unit;
     const bool kelvin = scale == nullptr && e->unit_text == "K";
-    const bool celsius = scale != nullptr && scale->scale == unit_scale::offset &&
-                         std::abs(scale->factor - 1.0) < 1e-12 &&
-                         std::abs(scale->offset - 273.15) < 1e-9;
+    const bool celsius = is_celsius(scale);
     const std::string reading = quote(n.lhs);
     const std::string number = display_text(file_.nodes[n.rhs].range);
     if (kelvin && reference > 0.0 && reference < 200.0) {
