@@ -291,6 +291,36 @@ TEST_CASE("a gauge pressure under a square root drives a discharge to the atmosp
                plumb::rules::offset_scale);
 }
 
+TEST_CASE("a trade's number beside a symbol in the other system's unit names that symbol") {
+    // 1 hp = 550 ft·lbf/s = 33 000 ft·lbf/min and 1 ft/min = 0.00508 m/s (NIST SP 811 (2008),
+    // B.8): a belt's power P = T·v/33000 in hp from lbf and ft/min (common practice). With v
+    // in m/s the 33000 is the conversion the units need were v in ft/min; the finding says
+    // so, and its factor keeps the 33000 (as written the power is 0.00508 times the truth).
+    const std::string belt = "T_e : lbf\nv : m/s\nv_f : ft/min\nP_hp : hp\nP_k : kW\n";
+    passes(belt, {"@belt P_hp = T_e*v_f/33000"});
+    const auto metric = run(belt, "@metric-speed P_hp = T_e*v/33000");
+    const plumb::diagnostic& d = first_under(metric, plumb::rules::unit_scale);
+    CHECK(plumb::test::says(d, "33000 fits these units with 'v' in fpm, but it is in m/s"));
+    CHECK(plumb::test::says(d, "multiply 'T_e*v/33000' by 196.85"));
+    CHECK_FALSE(plumb::test::says(d, "counted as a coefficient"));
+    // The symbol may stand on the other side: a power in kW where the number gives hp
+    // (1 hp = 0.7457 kW).
+    const auto kilowatts = run(belt, "@kilowatts P_k = T_e*v_f/33000");
+    CHECK(plumb::test::says(first_under(kilowatts, plumb::rules::unit_scale),
+                            "33000 fits these units with 'P_k' in hp, but it is in kW"));
+    // The fan trade's 6356 (cfm × in. w.g. per hp, 1 in. w.g. = 249.089 Pa; NIST SP 811
+    // (2008), B.8) beside a pressure in Pa: off by the inch of water, not by 1.58 × 10⁶.
+    const std::string fan = "Q : ft^3/min\ndp : Pa\nP : hp\nη : 1\n";
+    const auto pascals = run(fan, "@pascals P = Q*dp/(6356*η)");
+    const plumb::diagnostic& f = first_under(pascals, plumb::rules::unit_scale);
+    CHECK(plumb::test::says(f, "6356 fits these units with 'dp' in in. w.g., but it is in Pa"));
+    CHECK(plumb::test::says(f, "divide 'Q*dp/(6356*η)' by 248.59"));
+    // A number that fits no single symbol's other unit stays a counted coefficient.
+    const auto neither = run(fan, "@neither P = Q*dp/(4321*η)");
+    CHECK(plumb::test::says(first_under(neither, plumb::rules::unit_scale),
+                            "4321 counted as a coefficient"));
+}
+
 TEST_CASE("water's latent heat written as a number") {
     // h_fg of water at 100 °C: 2256.4 kJ/kg, 970.3 Btu/lb "from and at 212 °F" (steam tables,
     // from memory); 1 boiler horsepower = 33,475 Btu/h (common practice), so 34.5 lb/h per bhp.
@@ -321,14 +351,11 @@ TEST_CASE("the fan trade's 6356, and a number counted as a coefficient named") {
             first_under(r, plumb::rules::trade_constant).message.find("6356 is read as the fan") !=
             std::string::npos);
     }
-    // In kW the same number is no conversion the units need: counted as a coefficient, and
-    // the warning says so, since it may be the conversion the engineer meant.
+    // In kW the same number is no conversion the units need; it is the one they need with
+    // the power in hp, and the warning says so.
     const auto r = run(fan, "@air-kw P_k = Q*dp/6356");
-    const plumb::diagnostic& d = first_under(r, plumb::rules::unit_scale);
-    const bool named = std::any_of(d.notes.begin(), d.notes.end(), [](const auto& n) {
-        return n.message.find("6356 counted as a coefficient") != std::string::npos;
-    });
-    CHECK(named);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale),
+                            "6356 fits these units with 'P_k' in hp, but it is in kW"));
     fails_with(fan, {"@thumb P = Q*dp/6000"}, plumb::rules::unit_scale);
     // Multiplied where it divides: the wrong way round, said with the constant's name.
     const auto upside = run(fan, "@upside P = Q*dp*6356/η");

@@ -19,6 +19,7 @@ constexpr double standard_gravity = 9.80665; // SI Brochure 9th ed., the pound-f
 constexpr double psi = pound * standard_gravity / (inch * inch);
 constexpr double psf = pound * standard_gravity / (foot * foot);
 constexpr double us_gallon = 3.785411784e-3;
+constexpr double inch_of_water = 249.08891;
 constexpr double cubic_foot = foot * foot * foot;
 constexpr double horsepower = 550.0 * foot * pound * standard_gravity;
 constexpr double btu_per_hour = 1055.05585262 / 3600.0;
@@ -32,6 +33,7 @@ struct counterpart_row {
 constexpr compact_dimension length = compact_dimension::whole({0, 1, 0, 0, 0, 0, 0});
 constexpr compact_dimension degrees = compact_dimension::whole({0, 0, 0, 1, 0, 0, 0});
 constexpr compact_dimension pressure = compact_dimension::whole({1, -1, -2, 0, 0, 0, 0});
+constexpr compact_dimension velocity = compact_dimension::whole({0, 1, -1, 0, 0, 0, 0});
 constexpr compact_dimension flow = compact_dimension::whole({0, 3, -1, 0, 0, 0, 0});
 constexpr compact_dimension power = compact_dimension::whole({1, 2, -3, 0, 0, 0, 0});
 constexpr compact_dimension mass = compact_dimension::whole({1, 0, 0, 0, 0, 0, 0});
@@ -50,6 +52,10 @@ const auto rows = std::to_array<counterpart_row>({
     {length, {"mi", mile}, {{{"km", 1e3}, {}}}},
     {degrees, {"K", 1.0}, {{{"\u00B0F", 5.0 / 9.0}, {}}}},
     {degrees, {"\u00B0R", 5.0 / 9.0}, {{{"K", 1.0}, {}}}},
+    // The fan and duct trades' inch of water (conventional, 249.08891 Pa; NIST SP 811 (2008),
+    // B.8) beside the pascal.
+    {pressure, {"Pa", 1.0}, {{{"in. w.g.", inch_of_water}, {}}}},
+    {pressure, {"in. w.g.", inch_of_water}, {{{"Pa", 1.0}, {}}}},
     {pressure, {"kPa", 1e3}, {{{"psi", psi}, {}}}},
     {pressure, {"bar", 1e5}, {{{"psi", psi}, {}}}},
     // Beside psi, the psf of a density in lb/ft³ times a height in ft (62.4·h): 144 apart.
@@ -59,6 +65,11 @@ const auto rows = std::to_array<counterpart_row>({
     {flow, {"L/s", 1e-3}, {{{"gpm", us_gallon / 60.0}, {"cfm", cubic_foot / 60.0}}}},
     {flow, {"gpm", us_gallon / 60.0}, {{{"m\u00B3/h", 1.0 / 3600.0}, {"L/s", 1e-3}}}},
     {flow, {"cfm", cubic_foot / 60.0}, {{{"m\u00B3/h", 1.0 / 3600.0}, {"L/s", 1e-3}}}},
+    {velocity, {"m/s", 1.0}, {{{"fpm", foot / 60.0}, {"ft/s", foot}}}},
+    {velocity, {"fpm", foot / 60.0}, {{{"m/s", 1.0}, {}}}},
+    {velocity, {"ft/s", foot}, {{{"m/s", 1.0}, {}}}},
+    {velocity, {"km/h", 1.0 / 3.6}, {{{"mph", mile / 3600.0}, {}}}},
+    {velocity, {"mph", mile / 3600.0}, {{{"km/h", 1.0 / 3.6}, {}}}},
     {power, {"kW", 1e3}, {{{"hp", horsepower}, {"Btu/h", btu_per_hour}}}},
     {power, {"W", 1.0}, {{{"Btu/h", btu_per_hour}, {}}}},
     {power, {"hp", horsepower}, {{{"kW", 1e3}, {}}}},

@@ -730,6 +730,10 @@ class checker {
     void note_specific_weight_apart(diagnostic& d, std::span<const operand> ops,
                                     const agreement& a) const;
     const operand* plain_reference_term(std::span<const operand> ops, const agreement& a) const;
+    std::optional<std::string> coefficient_for_other_unit(const operand& term,
+                                                          const operand& other_term,
+                                                          const scale_literal& number,
+                                                          double needed) const;
     std::optional<declared_factor> declared_factor_of(std::uint32_t k, double exponent) const;
     [[gnu::noinline]] bool
     note_constant_for_other_units(diagnostic& d, std::span<const operand> ops, const agreement& a);

@@ -191,6 +191,69 @@ std::optional<declared_factor> checker::declared_factor_of(std::uint32_t k, doub
     return std::nullopt;
 }
 
+// "P_hp = Q_cfm*Δp_Pa/(6356*η)": a number that is the conversion the units need once one
+// symbol is read in the other system's unit (6356 is for inches of water). Said so, where
+// the advice alone would divide by 1.58 × 10⁶ and leave the symbol in the unit it was not
+// written for.
+std::optional<std::string> checker::coefficient_for_other_unit(const operand& term,
+                                                               const operand& other_term,
+                                                               const scale_literal& number,
+                                                               double needed) const {
+    const double written = std::pow(number.value, number.exponent);
+    if (!(written > 0) || !std::isfinite(written) || !(needed > 0) || !std::isfinite(needed))
+        return std::nullopt;
+    // Rounded trade numbers (6356 for 6343) lie within a per cent of the conversion.
+    constexpr double within = 0.01;
+    std::uint32_t found_node = syntax::no_index;
+    std::string_view found_declared;
+    const unit_counterpart* found_other = nullptr;
+    double other_in_declared = 0.0;
+    bool ambiguous = false;
+    // A factor of the number's own term changes what the number must be by the factor's
+    // change of unit; one of the term it is set against, by the inverse.
+    const auto try_factors_of = [&](const operand& where, double direction) {
+        for_each_factor(where.node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            std::uint32_t base = at;
+            double exponent = sign;
+            if (n.kind == expr_kind::power) {
+                base = syntax::inside_brackets(file_, n.lhs);
+                if (file_.nodes[n.rhs].kind != expr_kind::number)
+                    return false;
+                exponent = sign * written_number(file_.nodes[n.rhs].range);
+            }
+            const std::optional<declared_factor> factor = declared_factor_of(base, exponent);
+            if (!factor || !(factor->si_scale > 0))
+                return false;
+            const counterparts_of_unit units = unit_counterparts(factor->dim, factor->si_scale);
+            for (const unit_counterpart& other : units.others) {
+                const double swapped = needed * std::pow(other.si_scale / factor->si_scale,
+                                                         direction * factor->exponent);
+                if (std::abs(written / swapped - 1.0) > within)
+                    continue;
+                ambiguous = found_other != nullptr;
+                found_node = base;
+                found_declared = factor->unit_text.empty() ? units.declared : factor->unit_text;
+                found_other = &other;
+                other_in_declared = other.si_scale / factor->si_scale;
+            }
+            return ambiguous;
+        });
+    };
+    try_factors_of(term, 1.0);
+    if (!ambiguous)
+        try_factors_of(other_term, -1.0);
+    if (found_other == nullptr || ambiguous)
+        return std::nullopt;
+    const std::string_view symbol = text(file_.nodes[found_node].range);
+    return fmt::format("{} fits these units with {} in {}, but it is in {}: convert '{}' to {} "
+                       "first (1 {} = {} {}), or write the factor for {}",
+                       text(file_.nodes[number.node].range), quote(found_node), found_other->name,
+                       found_declared, symbol, found_other->name, found_other->name,
+                       format_factor(std::nullopt, other_in_declared), found_declared,
+                       found_declared);
+}
+
 // A trade's constant typed for one unit system beside a symbol declared in the other's
 // (check/constant_in_other_units.hpp). In "0.433*h_m + p_psi" the term with the number is
 // the majority's, so every term with numbers is tried against the first plain term of

@@ -320,6 +320,44 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     }
     // "c = x_pct*c_1 + (1 - x_pct)*c_2": the sides are off by the 100 already reported in
     // the sum inside; a second warning would advise dividing the whole side by it.
+    // "Q*Δp/6356", "12/kWpt": a number that looks like no conversion is counted as a
+    // coefficient; the finding says so, since it may be the conversion the engineer meant.
+    std::string coefficients;
+    std::size_t coefficient_count = 0;
+    // The factor the one coefficient would have to be, were it the conversion.
+    double needed = 0.0;
+    double written = 0.0;
+    std::optional<std::string> other_unit_note;
+    if (!clean) {
+        const scale_literal* coefficient = nullptr;
+        bool on_odd_side = false;
+        for (const std::size_t side : {r.odd, r.reference})
+            for (const scale_literal& l : parts[side].literals)
+                if (l.value != 1.0 && !looks_like_conversion(l, true) &&
+                    file_.nodes[l.node].kind == expr_kind::number &&
+                    significant_digits(text(file_.nodes[l.node].range)) >= 2 &&
+                    coefficients.size() < 80) {
+                    coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ",
+                                                text(file_.nodes[l.node].range));
+                    ++coefficient_count;
+                    written = l.value;
+                    needed = side == r.odd ? 1.0 / ratio : ratio;
+                    coefficient = &l;
+                    on_odd_side = side == r.odd;
+                }
+        // "P_hp = T_e*v/33000" with v in m/s: the number is the conversion these units
+        // need with one symbol in the other system's unit. It is counted as the conversion
+        // it is, so that the factor advised keeps it.
+        if (coefficient_count == 1 && std::abs(written / needed - 1.0) > 0.05) {
+            other_unit_note = coefficient_for_other_unit(
+                on_odd_side ? op : reference, on_odd_side ? reference : op, *coefficient, needed);
+            if (other_unit_note) {
+                const double as_factor = std::pow(coefficient->value, coefficient->exponent);
+                ratio = on_odd_side ? ratio * as_factor : ratio / as_factor;
+                exact_ratio.reset();
+            }
+        }
+    }
     const bool sides = what.what.starts_with("sides of");
     if (sides && inner_scale_ratio_ != 0.0 &&
         (std::abs(ratio / inner_scale_ratio_ - 1.0) < 1e-6 ||
@@ -345,43 +383,23 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         if (!units.empty())
             d.notes.push_back({fmt::format("in {}: {}", quote(side->node), units), {}});
     }
-    // "Q*Δp/6356", "12/kWpt": a number that looks like no conversion is counted as a
-    // coefficient; say so, since it may be the conversion the engineer meant, wrongly.
-    if (!clean) {
-        std::string coefficients;
-        std::size_t coefficient_count = 0;
-        // The factor the one coefficient would have to be, were it the conversion.
-        double needed = 0.0;
-        double written = 0.0;
-        for (const std::size_t side : {r.odd, r.reference})
-            for (const scale_literal& l : parts[side].literals)
-                if (l.value != 1.0 && !looks_like_conversion(l, true) &&
-                    file_.nodes[l.node].kind == expr_kind::number &&
-                    significant_digits(text(file_.nodes[l.node].range)) >= 2 &&
-                    coefficients.size() < 80) {
-                    coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ",
-                                                text(file_.nodes[l.node].range));
-                    ++coefficient_count;
-                    written = l.value;
-                    needed = side == r.odd ? 1.0 / ratio : ratio;
-                }
-        // "u_fpm = 200*u" (m/s): a rule of thumb for 196.85. Taken as a coefficient, the
-        // advice would multiply it by the conversion; say how far it is from the factor.
-        if (const double off = written / needed - 1.0;
-            coefficient_count == 1 && std::isfinite(off) && std::abs(off) <= 0.05)
-            d.notes.push_back(
-                {fmt::format("{} is {:.2g} % {} {}, the factor these units need; if it was "
-                             "meant to convert them, write that factor",
-                             coefficients, std::abs(off) * 100.0, off > 0 ? "above" : "below",
-                             format_factor(needed)),
-                 {}});
-        else if (!coefficients.empty())
-            d.notes.push_back(
-                {fmt::format("{} counted as a coefficient, not a unit conversion; if it was "
-                             "meant to convert units, it is not the factor these units need",
-                             coefficients),
-                 {}});
-    }
+    // "u_fpm = 200*u" (m/s): a rule of thumb for 196.85. Taken as a coefficient, the
+    // advice would multiply it by the conversion; say how far it is from the factor.
+    if (const double off = written / needed - 1.0;
+        coefficient_count == 1 && std::isfinite(off) && std::abs(off) <= 0.05)
+        d.notes.push_back({fmt::format("{} is {:.2g} % {} {}, the factor these units need; if "
+                                       "it was meant to convert them, write that factor",
+                                       coefficients, std::abs(off) * 100.0,
+                                       off > 0 ? "above" : "below", format_factor(needed)),
+                           {}});
+    else if (other_unit_note)
+        d.notes.push_back({std::move(*other_unit_note), {}});
+    else if (!coefficients.empty())
+        d.notes.push_back({fmt::format("{} counted as a coefficient, not a unit conversion; if "
+                                       "it was meant to convert units, it is not the factor "
+                                       "these units need",
+                                       coefficients),
+                           {}});
     // "divide by 3.28084 (1/0.3048)" reads better as "multiply by 0.3048".
     bool multiply = ratio < 1;
     std::string factor =
