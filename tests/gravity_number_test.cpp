@@ -958,3 +958,21 @@ TEST_CASE("one over pi folded into whole numbers of three digits") {
     CHECK(count_of(run(d + "n = 1000*v_c/D_mm\n"), plumb::rules::unit_scale) == 1);
     CHECK(count_of(run(d + "u = D_in*n/720\n"), plumb::rules::unit_scale) == 1);
 }
+
+// A density corrected to a site from a standard state, ρ = ρ_0·(p/p_0)·(T_0/T), with ρ_0 =
+// 1.225 kg/m³ at 15 °C and 101.325 kPa (ISO 2533:1975, the standard atmosphere at sea level,
+// from memory), and a wind rotor's power ½·ρ·A·v³ with that density typed: 1.225 is read as
+// air's density, and the reference pressure and temperature beside it as theirs. A factor's
+// 1.25 or 1.2 is printed too coarsely to be one: a density left out stays an error.
+TEST_CASE("a gas's density at a standard state typed as a number") {
+    const std::string decl =
+        "ρ : kg/m^3\np : kPa\nT : K\nP : W\nA : m^2\nv : m/s\nm : kg\nV : m^3\n";
+    const auto site = run(decl + "ρ = 1.225*(p/101.325)*(288.15/T)\n");
+    CHECK(problems_in(site) == 0);
+    CHECK(message_of(site, plumb::rules::trade_constant)
+              .find("'1.225' is read as the density "
+                    "of air") != std::string::npos);
+    passes_with_one_note(decl, {"P = 0.5*1.225*A*v^3", "m = 1.204*V"},
+                         plumb::rules::trade_constant);
+    fails_with(decl, {"m = 1.25*V", "m = 1.2*V"}, plumb::rules::side_mismatch);
+}

@@ -32,8 +32,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 20>& quantities() {
-    static const std::array<carried_quantity, 20> table = [] {
+const std::array<carried_quantity, 21>& quantities() {
+    static const std::array<carried_quantity, 21> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -68,7 +68,7 @@ const std::array<carried_quantity, 20>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 20>{{
+        return std::array<carried_quantity, 21>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -226,6 +226,26 @@ const std::array<carried_quantity, 20>& quantities() {
             {rules::trade_constant, "the length of a day", "1 d = 24 h", "1/(1 d)", "",
              "declare the hours with their unit (t_d : h = 24) to say so",
              "write the hours in a cell marked h to say so", time, 86400.0, 86400.0},
+            // Dry air at a standard state: 1.225 kg/m³ at 15 °C and 101.325 kPa (ISO 2533:1975,
+            // the standard atmosphere at sea level, from memory), 1.204 at 20 °C, 1.293 at 0 °C,
+            // the US 0.0765 lb/ft³ at 60 °F (common practice): the ρ_0 of a density corrected
+            // to a site, ρ = 1.225*(p/101.325)*(288.15/T). Printed to four figures (three
+            // for 0.0765), never a factor's 1.2 or 1.25. Nitrogen's 1.2506 kg/Nm³ at 0 °C (CRC
+            // Handbook of Chemistry and Physics, from memory) lies inside.
+            {rules::trade_constant,
+             "the density of air, or nitrogen, at a standard state",
+             "\u03C1_0",
+             "1/\u03C1_0",
+             " (dry air at 101.325 kPa between 0 and 20 \u00B0C: 1.204 to 1.293 kg/m\u00B3; "
+             "nitrogen at 0 \u00B0C: 1.2506)",
+             "declare the reference density with its unit (\u03C1_0 : kg/m^3 = 1.225) to say so",
+             "write the density in a cell that holds its unit to say so",
+             density,
+             air_density(20.0),
+             air_density(0.0),
+             carried_quantity::term_kind::any,
+             {},
+             0.001},
         }};
     }();
     return table;
@@ -387,7 +407,8 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
             continue;
         const double half_unit = half_unit_in_last_digit(texts[at]);
         for (const carried_quantity& q : quantities()) {
-            if (q.only_in != carried_quantity::term_kind::any && q.only_in != term)
+            if ((q.only_in != carried_quantity::term_kind::any && q.only_in != term) ||
+                (q.finest_rounding > 0.0 && half_unit > q.finest_rounding * number.value))
                 continue;
             // But a 24 is no density: W/(24*w) from kg/d into L/h lacks the solution's density
             // (1 kg/L only for water), which a 24 read as one would hide.

@@ -39,6 +39,10 @@ struct carried_quantity {
     // The named constant that writes it in the notation ("{g_n}", "2*{g_n}", "{R}"), where one
     // does: a number that holds it and a conversion is advised as this times the conversion.
     std::string_view named = {};
+    // Read only from a number printed finely enough: half a unit in its last digit at most
+    // this share of its value (1.225 and 0.0765 for air's density, not a factor's 1.25).
+    // 0 reads any number.
+    double finest_rounding = 0.0;
 };
 
 struct gravity_reading {
