@@ -321,6 +321,21 @@ TEST_CASE("a trade's number beside a symbol in the other system's unit names tha
                             "4321 counted as a coefficient"));
 }
 
+// X_L = 2π·f·L (IEC 60050-151, from memory): a reactance at 60 Hz is the 50 Hz one times
+// 60/50, and a cold room's compressor sized for 16 running hours of a day's load takes 24/16
+// (common practice). Two whole numbers one over the other, within a factor of two, are that
+// ratio, not a 60 for minutes or a 24 for hours.
+TEST_CASE("a ratio of two whole numbers typed one over the other is a coefficient") {
+    const std::string decl = "X_50, X_60 : mΩ\nQ_sum, Q_des, P_kW : kW\np_bar : bar\n"
+                             "Q_m : m^3/min\nΔT_K : K\nΔT_F : °R\n";
+    passes(decl, {"X_60 = X_50*60/50", "X_50 = X_60*50/60", "X_60 = X_50*(60/50)",
+                  "Q_des = 1.1*Q_sum*24/16"});
+    // Conversions beside each other stay conversions: 100 kPa per bar and 60 s per minute
+    // (1 bar·m³/min = 1.667 kW), 9/5 for the Fahrenheit degree (NIST SP 811 (2008), B.8).
+    passes(decl, {"P_kW = 100*p_bar*Q_m/60", "ΔT_F = ΔT_K*9/5"});
+    fails_with(decl, {"P_kW = p_bar*Q_m/60", "ΔT_F = ΔT_K*5/9"}, plumb::rules::unit_scale);
+}
+
 TEST_CASE("water's latent heat written as a number") {
     // h_fg of water at 100 °C: 2256.4 kJ/kg, 970.3 Btu/lb "from and at 212 °F" (steam tables,
     // from memory); 1 boiler horsepower = 33,475 Btu/h (common practice), so 34.5 lb/h per bhp.

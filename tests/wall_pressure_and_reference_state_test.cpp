@@ -380,6 +380,38 @@ TEST_CASE("the sea-level atmosphere where the file declares the site's barometer
            {"p_abs = p_g + 101.325"});
 }
 
+// 14.73 psia, the US gas contract's base pressure (AGA Report No. 3's base conditions, 14.73
+// psia and 60 °F, from memory), is 101.56 kPa: added to a gauge reading at a site whose
+// barometer the file declares at 28.6 inHg (96.85 kPa, NIST SP 811 (2008), B.8: 1 inHg =
+// 3386.389 Pa), it takes the contract's base for the site's atmosphere, 4.7 kPa high. The
+// advice names the barometer declared in the sum's unit.
+TEST_CASE("an atmosphere typed as a number that is not the site's declared barometer") {
+    const std::string meter = "p_bar : inHg \"site barometric pressure, 28.6 inHg\"\n"
+                              "p_g : psig\np_f : psia\np_b : psia \"site barometer, psia\"\n";
+    fails_with(meter, {"p_f = p_g + 14.73"}, plumb::rules::offset_scale);
+    const auto r = run(meter, "p_f = p_g + 14.73");
+    const plumb::diagnostic& d = first_under(r, plumb::rules::offset_scale);
+    CHECK(plumb::test::says(d, "14.73 is an atmosphere of 101.56 kPa, but this file declares "
+                               "the site's barometer 'p_bar'"));
+    CHECK(plumb::test::says(d, "4.7 kPa high"));
+    CHECK(plumb::test::says(d, "write (... + p_b)"));
+    // The site's own barometer typed in (28.6 inHg is 14.05 psi) is read with a note.
+    passes(meter, {"p_f = p_g + 14.05"}, 1);
+    passes(meter, {"p_f = p_g + p_b"});
+}
+
+// A gauge reading plus the barometer is absolute (common practice); the atmosphere added
+// again as a number counts it twice, 101 kPa high. This passed without a word.
+TEST_CASE("a gauge reading plus the barometer and the atmosphere again") {
+    const std::string decl = "p_g : psig\np_b : psia \"barometer\"\np_f : psia\n"
+                             "p_gk : kPag\np_atm : kPa \"atmospheric pressure\"\np_k : kPa\n";
+    fails_with(decl, {"p_f = p_g + p_b + 14.7", "p_k = p_gk + p_atm + 101.325"},
+               plumb::rules::offset_scale);
+    const auto r = run(decl, "p_f = p_g + p_b + 14.7");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale), "both add the atmosphere"));
+    passes(decl, {"p_f = p_g + p_b", "p_k = p_gk + p_atm"});
+}
+
 // Free air in cfm into Nm³/min by the volume factor alone (1 m³ = 35.3147 ft³, NIST SP 811
 // (2008), B.8): still no correction for the air's state, a warning as Q_n = Q_act is.
 TEST_CASE("a concentration at reference conditions times a flow described at its actual state") {

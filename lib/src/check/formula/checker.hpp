@@ -973,6 +973,9 @@ class checker {
                                  std::size_t literal_base, std::uint32_t index);
 
     // check/formula/offset_sum_reports.cpp
+    void report_atmosphere_not_the_site(std::uint32_t number, std::string_view what, double pascals,
+                                        const site_barometer& site, double unit);
+    std::optional<std::string_view> barometer_in_unit(double unit) const;
     const site_barometer* declared_site_barometer();
     double declared_number(const syntax::declaration& decl) const;
     void warn_sea_level_atmosphere_at_site(std::span<const operand> terms, double unit);
@@ -1292,6 +1295,7 @@ class checker {
     typed_term eval_sum(std::uint32_t index);
     [[gnu::noinline]] void factor_out_common_numbers_of(std::span<const operand> terms);
     [[gnu::noinline]] typed_term eval_product(std::uint32_t index);
+    void read_ratio_of_whole_numbers(std::uint32_t literals_begin);
     // In line in eval_product, its one caller, as it was before the rules left its file.
     [[gnu::always_inline]] inline typed_term eval_factors(std::uint32_t index);
     static double unit_power(double scale, double exponent);

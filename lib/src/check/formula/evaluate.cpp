@@ -1006,7 +1006,41 @@ typed_term checker::eval_product(std::uint32_t index) {
         file_.nodes[file_.nodes[index].lhs].kind == expr_kind::group) [[unlikely]]
         if (const auto mean = weighted_mean(index))
             return *mean;
-    return eval_factors(index);
+    const auto literals_before = static_cast<std::uint32_t>(literals_.size());
+    typed_term t = eval_factors(index);
+    if (literals_.size() >= literals_before + 2) [[unlikely]]
+        read_ratio_of_whole_numbers(literals_before);
+    return t;
+}
+
+// "X_60 = X_50*60/50", "n*75/60": two whole numbers, one over the other, within a factor of
+// two of each other are a ratio the formula scales by (two mains frequencies, two speeds),
+// not conversions: the 60 is no minutes beside the 50. Each is read as a plain coefficient.
+// 9/5 and 5/9 are the degrees' conversion; powers of ten (100*p_bar*(Q/60)) and numbers of
+// four digits (1000/1233 for m³ per acre-foot) are left to the conversion rules.
+void checker::read_ratio_of_whole_numbers(std::uint32_t literals_begin) {
+    const auto whole = [&](const scale_literal& l) {
+        const std::string_view written = text(file_.nodes[l.node].range);
+        return !l.power_of_ten && !l.table_digits && !written.empty() &&
+               std::all_of(written.begin(), written.end(),
+                           [](char c) { return c >= '0' && c <= '9'; });
+    };
+    for (std::size_t i = literals_begin; i < literals_.size(); ++i) {
+        scale_literal& over = literals_[i];
+        if (over.exponent != 1.0 || over.value == 1.0 || !whole(over))
+            continue;
+        for (std::size_t k = literals_begin; k < literals_.size(); ++k) {
+            scale_literal& under = literals_[k];
+            const double ratio = over.value / under.value;
+            if (under.exponent != -1.0 || under.value == 1.0 || !(ratio > 0.5 && ratio < 2.0) ||
+                ratio == 1.0 || std::abs(ratio - 1.8) < 1e-12 ||
+                std::abs(ratio * 1.8 - 1.0) < 1e-12 || !whole(under))
+                continue;
+            read_as_quantity(over);
+            read_as_quantity(under);
+            break;
+        }
+    }
 }
 
 // A scale raised to a power: most are SI units, whose scale 1 stays 1 (as std::pow gives

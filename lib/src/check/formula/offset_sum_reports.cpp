@@ -84,28 +84,72 @@ void checker::warn_sea_level_atmosphere_at_site(std::span<const operand> terms, 
         const double added = sh.si + sh.written * unit;
         if (std::abs(added / standard_atmosphere - 1.0) > 0.015)
             continue;
+        // "p_g + p_b + 14.7": the barometer is there already.
+        const auto barometer = std::find_if(terms.begin(), terms.end(), [&](const operand& o) {
+            return !o.subtracted && !is_shift_candidate(o) && names_atmosphere(o.node);
+        });
+        if (barometer != terms.end()) {
+            diagnostic& d = report(rules::offset_scale,
+                                   fmt::format("{} and {} both add the atmosphere: the result is "
+                                               "one atmosphere above the absolute pressure",
+                                               quote(barometer->node), quote(t.node)),
+                                   file_.nodes[t.node].range);
+            add_term(d, *barometer);
+            add_term(d, t);
+            d.notes.push_back({"a gauge reading plus the atmosphere is absolute; add it once", {}});
+            return;
+        }
         const site_barometer* site = declared_site_barometer();
         if (site == nullptr || std::abs(added / site->pascals - 1.0) <= 0.02)
             return;
-        const double height =
-            44330.8 * (1.0 - std::pow(site->pascals / standard_atmosphere, 0.190263));
-        diagnostic& d = report(
-            rules::offset_scale,
-            fmt::format("{} is the atmosphere at sea level, but this file declares the "
-                        "site's barometer '{}' ({} kPa, as the standard atmosphere has about "
-                        "{} m up): the absolute pressure comes out {} kPa high",
-                        display_text(file_.nodes[t.node].range), site->name,
-                        format_factor(site->pascals / 1000.0),
-                        static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10),
-                        format_factor(std::round((added - site->pascals) / 100.0) / 10.0)),
-            file_.nodes[t.node].range);
-        d.level = severity::warning;
-        d.notes.push_back({fmt::format("a gauge reading plus the local atmosphere is "
-                                       "absolute: write (... + {})",
-                                       site->name),
-                           {}});
+        report_atmosphere_not_the_site(t.node, "the atmosphere at sea level", added, *site, unit);
         return;
     }
+}
+
+// "p_g + 101.325", "p_g + 14.73" in a file that declares the site's barometer: an
+// atmosphere added to a gauge reading that is not the site's, by more than a barometer
+// moves with the weather.
+void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_view what,
+                                             double pascals, const site_barometer& site,
+                                             double unit) {
+    const double height = 44330.8 * (1.0 - std::pow(site.pascals / standard_atmosphere, 0.190263));
+    const double off = pascals - site.pascals;
+    diagnostic& d =
+        report(rules::offset_scale,
+               fmt::format("{} is {}, but this file declares the site's barometer '{}' ({} kPa, "
+                           "as the standard atmosphere has about {} m up): the absolute pressure "
+                           "comes out {} kPa {}",
+                           display_text(file_.nodes[number].range), what, site.name,
+                           format_factor(site.pascals / 1000.0),
+                           static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10),
+                           format_factor(std::round(std::abs(off) / 100.0) / 10.0),
+                           off > 0 ? "high" : "low"),
+               file_.nodes[number].range);
+    d.level = severity::warning;
+    d.notes.push_back({fmt::format("a gauge reading plus the local atmosphere is absolute: "
+                                   "write (... + {})",
+                                   barometer_in_unit(unit).value_or(site.name)),
+                       {}});
+}
+
+// "p_bk : kPa "site barometric pressure"" beside "p_bar : inHg ...": the barometer the
+// advice names is the one declared in the sum's unit, where the file declares one.
+std::optional<std::string_view> checker::barometer_in_unit(double unit) const {
+    for (const syntax::declaration& decl : file_.declarations) {
+        if (!decl.kind.dim || decl.name_count != 1 ||
+            std::abs(decl.kind.si_factor / unit - 1.0) > 1e-9 ||
+            (decl.kind.single_unit != nullptr && decl.kind.single_unit->offset != 0.0))
+            continue;
+        const std::optional<compact_dimension> dim = compact_dimension::fitted(*decl.kind.dim);
+        const std::string_view name = text(file_.names[decl.first_name].name);
+        const std::string_view description = text(decl.description);
+        if (dim && *dim == pressure_dimension() && names_the_atmosphere(name, description) &&
+            description.find("standard") == std::string_view::npos &&
+            description.find("gauge") == std::string_view::npos)
+            return name;
+    }
+    return std::nullopt;
 }
 
 // Whether a symbol's unit or description says outright that it is absolute: psia, bara,

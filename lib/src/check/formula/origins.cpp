@@ -369,6 +369,15 @@ bool checker::read_local_atmosphere(const operand& sum) {
     if (!(pressure >= highest_site_atmosphere * standard_atmosphere &&
           pressure <= 1.005 * standard_atmosphere))
         return false;
+    // "p_g + 14.73" where the file declares a barometer of 96.9 kPa: 14.73 psia, the US gas
+    // contract's base pressure, taken for the site's atmosphere.
+    if (const site_barometer* site = declared_site_barometer();
+        site != nullptr && std::abs(pressure / site->pascals - 1.0) > 0.02) {
+        report_atmosphere_not_the_site(
+            number, fmt::format("an atmosphere of {} kPa", format_factor(pressure / 1000.0)),
+            pressure, *site, sum.type.scale);
+        return true;
+    }
     // The barometric formula of the standard atmosphere, h = 44330.8·(1 - (p/p0)^0.190263) m.
     const double height = 44330.8 * (1.0 - std::pow(pressure / standard_atmosphere, 0.190263));
     diagnostic& d = report(
