@@ -181,6 +181,27 @@ TEST_CASE("workbook parity: conversions written as a sum, °C to °F and barg to
     CHECK(finding(r, "Conv!B11", rules::offset_scale) != nullptr);
 }
 
+TEST_CASE("workbook parity: a Fahrenheit conversion run the wrong way is named as such") {
+    // t_F = 1.8·t_C + 32 and t_C = (t_F − 32)/1.8 (NIST SP 811 (2008), B.8). The second applied
+    // to a °C reading is no factor turned over: =(B2-32)*1.8 would still be wrong, so the
+    // finding gives the other conversion.
+    const check_report r =
+        check_one_sheet("Conv", sheet_of({
+                                    {"46", "°C"},           // B2
+                                    {"=(B2-32)/1.8", "°F"}, // B3: the °F-to-°C conversion
+                                    {"115", "°F"},          // B4
+                                    {"=1.8*B4+32", "°C"},   // B5: the °C-to-°F conversion
+                                    {"=(B4-32)/1.8", "°C"}, // B6: right
+                                }));
+    const diagnostic* to_f = finding(r, "Conv!B3", rules::unit_scale);
+    REQUIRE(to_f != nullptr);
+    CHECK(says(*to_f, "runs the wrong way for °F"));
+    CHECK(says(*to_f, "the conversion runs the other way, =B2*1.8+32"));
+    // The other way, a °C-to-°F conversion under °C, gives a reading on the °F scale.
+    CHECK(finding(r, "Conv!B5", rules::offset_scale) != nullptr);
+    CHECK(cell_findings(r).size() == 2);
+}
+
 TEST_CASE("workbook parity: Barlow's wall stress from a gauge pressure") {
     // σ = p·D/(2·t), the wall carries the pressure above the atmosphere outside it (Barlow's
     // formula, ASME B31.3 304.1.2, from memory). kPa·m/mm is MPa with no factor; a *1000 there

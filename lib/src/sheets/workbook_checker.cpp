@@ -4,6 +4,7 @@
 #include "sheets/workbook_checker.hpp"
 
 #include "model/difference_name.hpp"
+#include "model/subtree_search.hpp"
 
 #include "check/constant_in_other_units.hpp"
 #include "check/formula_checker.hpp"
@@ -1147,6 +1148,8 @@ class workbook_checker {
                 !is_time_ratio(x) && coefficients.size() < 80 && off != left)
                 coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ", text);
         }
+        std::optional<std::string> backwards =
+            reversed ? fahrenheit_run_backwards(f, formula, written) : std::nullopt;
         diagnostic& d = report(
             severity::error, rules::unit_scale,
             reversed ? fmt::format("the conversion factor in this formula is the wrong way round: "
@@ -1162,6 +1165,12 @@ class workbook_checker {
                               "coefficient {} aside",
                               where_unit, off_text, off >= 1 ? "small" : "large", coefficients),
             formula.range);
+        if (backwards) {
+            d.message = fmt::format("the temperature conversion in this formula runs the wrong "
+                                    "way for {}",
+                                    written.unit.text);
+            d.notes.push_back({std::move(*backwards), {}});
+        }
         if (!reversed) {
             d.notes.push_back({fmt::format("its inputs give numbers in units of {} {}; "
                                            "convert them in the formula, or write the unit they "
@@ -1176,6 +1185,57 @@ class workbook_checker {
                      {}});
         }
         add_input_notes(d, f);
+    }
+
+    // "=(B8-32)/1.8" under °F with B8 in °C: the °F-to-°C conversion applied to a °C reading,
+    // whose fix is the other conversion, not the 1.8 turned over (=(B8-32)*1.8 is still no
+    // °F reading); and "=1.8*B8+32" under °C with B8 in °F.
+    std::optional<std::string> fahrenheit_run_backwards(const formula_cell& f,
+                                                        const syntax::formula& formula,
+                                                        const cell_unit& written) const {
+        const auto scale_of = [](const unit_definition* u) {
+            if (u == nullptr ||
+                u->exponents[static_cast<std::size_t>(base_dimension::temperature)] != 1)
+                return 0;
+            if (std::abs(u->factor - 1.0) < 1e-12)
+                return 1; // the Celsius scale
+            return std::abs(u->factor * 1.8 - 1.0) < 1e-9 ? 2 : 0;
+        };
+        if (f.lowered.reference_count != 1)
+            return std::nullopt;
+        const int wanted = scale_of(written.unit.offset);
+        const int read = scale_of(
+            lowered_.tree.references[lowered_.references[f.lowered.first_reference].reference]
+                .offset);
+        const syntax::parsed_file& tree = lowered_.tree;
+        std::string_view cell;
+        bool less_32 = false;
+        bool plus_32 = false;
+        syntax::search_subtree(tree, tree.sides[formula.first_side].root,
+                               [&](std::uint32_t, const syntax::expr_node& n) {
+                                   if (n.kind == syntax::expr_kind::reference)
+                                       cell = listing_->text(n.range);
+                                   else if ((n.kind == syntax::expr_kind::subtract ||
+                                             n.kind == syntax::expr_kind::add) &&
+                                            tree.nodes[n.rhs].kind == syntax::expr_kind::number &&
+                                            listing_->text(tree.nodes[n.rhs].range) == "32")
+                                       (n.kind == syntax::expr_kind::subtract ? less_32 : plus_32) =
+                                           true;
+                                   return syntax::search_step::descend;
+                               });
+        if (cell.empty())
+            return std::nullopt;
+        if (less_32 && read == 1 && wanted == 2)
+            return fmt::format("(t - 32)/1.8 turns a \u00B0F reading into \u00B0C, but {} is in "
+                               "\u00B0C already and the cell wants \u00B0F: the conversion runs "
+                               "the other way, ={}*1.8+32",
+                               cell, cell);
+        if (plus_32 && read == 2 && wanted == 1)
+            return fmt::format("1.8*t + 32 turns a \u00B0C reading into \u00B0F, but {} is in "
+                               "\u00B0F already and the cell wants \u00B0C: the conversion runs "
+                               "the other way, =({}-32)/1.8",
+                               cell, cell);
+        return std::nullopt;
     }
 
     // 24 h/d, 60 min/h and s/min, 1440 min/d, 3600 s/h, 86400 s/d: exact by definition, and
