@@ -1137,3 +1137,18 @@ TEST_CASE("a sum whose converted term is in the other side's unit: the plain ter
                             "multiply 'h_m' by 3.28084"));
     passes(d, {"z_ft = z_m*3.281 + h_m*3.281", "z_ft = 3.281*(z_m + h_m)", "z_m = z_m + h_m"});
 }
+
+// A wet well's cycle time in min, fill plus draw-down, from a volume in m³ and flows in L/s
+// (1 m³ = 1000 L, 1 min = 60 s; NIST SP 811 (2008), B.8): both terms carry the /60, which is
+// the sum's, so the terms must be in seconds. The draw-down converts its L/s by 1000; the
+// fill does not, and is the term named, not the draw-down's 1000 called not needed.
+TEST_CASE("a sum whose terms all carry a number: the side's unit less that number decides") {
+    const std::string d = "V : m^3\nQ_in, Q_p : L/s\nt_c : min\n";
+    const auto cycle = run(d, "t_c = V/Q_in/60 + V/((Q_p - Q_in)/1000)/60");
+    REQUIRE(count_of(cycle, plumb::rules::unit_scale) == 1);
+    const plumb::diagnostic& finding = first_under(cycle, plumb::rules::unit_scale);
+    CHECK(plumb::test::says(finding, "multiply 'V/Q_in/60' by 1000"));
+    CHECK_FALSE(plumb::test::says(finding, "not needed"));
+    passes(d, {"t_c = V/(Q_in/1000)/60 + V/((Q_p - Q_in)/1000)/60",
+               "t_c = 1000*V/Q_in/60 + 1000*V/(Q_p - Q_in)/60"});
+}

@@ -781,7 +781,9 @@ class checker {
     const typed_term* side_hint_ = nullptr;
     std::uint32_t side_hint_node_ = syntax::no_index;
     std::uint32_t sum_checked_ = syntax::no_index; // the sum whose terms check_scales weighs
-    const typed_term* sum_side_hint_ = nullptr;    // while a side's sum is checked, the other side
+    // While a sum is weighed, where the numbers all its terms carry lie on common_numbers_.
+    std::pair<std::size_t, std::size_t> sum_common_numbers_{};
+    const typed_term* sum_side_hint_ = nullptr; // while a side's sum is checked, the other side
     // The site's barometer where the file declares one: see declared_site_barometer.
     struct site_barometer {
         std::string_view name;

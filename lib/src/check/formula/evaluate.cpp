@@ -624,11 +624,13 @@ typed_term checker::eval_sum(std::uint32_t index) {
     // A sum that is a side of an equation: the other side says which term is off.
     sum_side_hint_ = index == side_hint_node_ ? side_hint_ : nullptr;
     sum_checked_ = index;
+    sum_common_numbers_ = {common_base, common_numbers_.size()};
     result.scale = check_scales(terms, "terms of this sum", unit, &result.exact_scale)
                        ? unit
                        : std::numeric_limits<double>::quiet_NaN();
     sum_side_hint_ = nullptr;
     sum_checked_ = syntax::no_index;
+    sum_common_numbers_ = {};
     if (index == side_hint_node_) [[unlikely]]
         settle_rounded_side(result, literal_base);
     cut_literals_to(literal_base);

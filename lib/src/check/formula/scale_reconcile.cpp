@@ -110,6 +110,10 @@ std::optional<double> checker::unit_the_sum_needs() const {
     }
     if (!scale || !std::isfinite(*scale) || !(*scale > 0))
         return std::nullopt;
+    // "t = V/Q/60 + V/(ΔQ/1000)/60" in min: the 60 both terms carry is the sum's, taken out
+    // of them, so the terms must be in the side's unit times it (here seconds).
+    for (std::size_t k = sum_common_numbers_.first; k < sum_common_numbers_.second; ++k)
+        *scale *= std::pow(common_numbers_[k].value, common_numbers_[k].exponent);
     return scale;
 }
 
@@ -140,13 +144,15 @@ bool checker::report_term_left_unconverted(std::span<const operand> ops,
         return false;
     const operand& odd = ops[index[plain]];
     const operand& reference = ops[index[converted]];
-    diagnostic& d =
-        report(rules::unit_scale,
-               fmt::format("{} converts to the unit of the other side, but {} beside it does not: "
-                           "as written, {} counts {} times as much as it should in this sum",
-                           quote(reference.node), quote(odd.node), quote(odd.node),
-                           format_factor(*side / parts[plain].scale)),
-               file_.nodes[odd.node].range);
+    diagnostic& d = report(
+        rules::unit_scale,
+        fmt::format("{} converts to the unit of {}, but {} beside it does not: as "
+                    "written, {} counts {} times as much as it should in this sum",
+                    quote(reference.node),
+                    file_.functions == syntax::function_names::spreadsheet ? "its cell"
+                                                                           : "the other side",
+                    quote(odd.node), quote(odd.node), format_factor(*side / parts[plain].scale)),
+        file_.nodes[odd.node].range);
     d.level = severity::warning;
     add_term(d, odd, true);
     add_term(d, reference);
