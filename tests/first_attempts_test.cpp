@@ -110,6 +110,20 @@ TEST_CASE("an unknown unit's note shows how to define that very unit") {
           std::string::npos);
 }
 
+// The fan and duct trades write inches of water gauge or column ("in. w.g.", "in. w.c.");
+// the table's inch of water is inH2O (conventional, 249.08891 Pa; NIST SP 811 (2008), B.8).
+// The nearest spelling, inHg, is the inch of mercury, 13.6 times larger: offered no longer.
+TEST_CASE("inches of water gauge typed the trade's way are offered inH2O") {
+    for (const char* unit : {"in_wg", "inWG", "inwc", "in_WC"}) {
+        CAPTURE(unit);
+        const auto r = plumb::check_text("h.plumb", fmt::format("Δp : {}\n", unit));
+        REQUIRE(only(r, plumb::rules::unknown_unit) != nullptr);
+        const std::string& message = only(r, plumb::rules::unknown_unit)->message;
+        CHECK(message.find("the inch of water is written inH2O") != std::string::npos);
+        CHECK(message.find("inHg") == std::string::npos);
+    }
+}
+
 // Normal and standard cubic metres are units of their own (DIN 1343's 0 °C and 101.325 kPa,
 // ISO 13443's 15 °C, from memory), spelled whole: "Nm^3" powers an unknown "Nm".
 TEST_CASE("a gas volume at reference conditions written with a power is offered whole") {

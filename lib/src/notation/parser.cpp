@@ -676,6 +676,15 @@ std::string unknown_unit_message(std::string_view text, const dimension* kind = 
         text.size() >= 2 && unit_table::standard().resolve(whole))
         return message + fmt::format("; did you mean '{}'? It is written whole, as {} or {}\u00B3",
                                      whole, whole, text);
+    // "in_wg", "inWC", "in.wg": the trades' inches of water gauge or column, which the
+    // table spells inH2O; the nearest spelling alone would offer the inch of mercury.
+    std::string letters;
+    for (const char c : text)
+        if (std::isalpha(static_cast<unsigned char>(c)) != 0)
+            letters += static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+    if (letters == "inwg" || letters == "inwc" || letters == "inchwg" || letters == "inchwc" ||
+        letters == "inchesofwater")
+        return message + "; the inch of water is written inH2O (a gauge reading inH2Og)";
     const auto near = unit_table::standard().nearest(text, 3, kind);
     if (!near.empty()) {
         message += "; did you mean ";
