@@ -861,6 +861,8 @@ class checker {
     // check/formula/explanations.cpp
     void add_term_and_units(diagnostic& d, const operand& op) const;
     void add_term(diagnostic& d, const operand& op, bool differs = false) const;
+    void add_number_term(diagnostic& d, const operand& number,
+                         const compact_dimension& read_as) const;
     void explain(diagnostic& d, std::span<const operand> ops, const agreement& a,
                  std::string_view others) const;
 

@@ -494,6 +494,16 @@ void checker::add_term(diagnostic& d, const operand& op, bool differs) const {
                        differs});
 }
 
+// "p_a/14.5 + 1.013": a number in a sum of readings is read in the sum's unit, so it is shown
+// with the sum's dimension, not as a dimensionless term that does not match.
+void checker::add_number_term(diagnostic& d, const operand& number,
+                              const compact_dimension& read_as) const {
+    typed_term type = number.type;
+    if (type.numeric && type.dim.is_dimensionless())
+        type.dim = read_as;
+    add_term(d, {type, number.node, number.subtracted});
+}
+
 // Notes for operands that disagree: each odd one with its dimension, then the rest.
 void checker::explain(diagnostic& d, std::span<const operand> ops, const agreement& a,
                       std::string_view others) const {

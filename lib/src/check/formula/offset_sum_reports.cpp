@@ -95,7 +95,7 @@ void checker::warn_sea_level_atmosphere_at_site(std::span<const operand> terms, 
                                                quote(barometer->node), quote(t.node)),
                                    file_.nodes[t.node].range);
             add_term(d, *barometer);
-            add_term(d, t);
+            add_number_term(d, t, barometer->type.dim);
             d.notes.push_back({"a gauge reading plus the atmosphere is absolute; add it once", {}});
             return;
         }
@@ -212,7 +212,7 @@ bool checker::report_zero_added_twice(std::span<const operand> terms, double uni
                                    display_text(file_.nodes[t.node].range), zero_of,
                                    reading != nullptr ? quote(reading->node) : "a reading"),
                        file_.nodes[t.node].range);
-            add_term(d, t);
+            add_number_term(d, t, reading != nullptr ? reading->type.dim : t.type.dim);
             if (reading != nullptr)
                 add_term(d, *reading);
             d.notes.push_back(
@@ -278,7 +278,7 @@ bool checker::report_zero_in_another_unit_added(const operand& t, const shift& s
                                         : fmt::format("the zero of the {} scale", z.scale),
                                z.unit, reading != nullptr ? quote(reading->node) : "a reading"),
                    file_.nodes[t.node].range);
-        add_term(d, t);
+        add_number_term(d, t, reading != nullptr ? reading->type.dim : t.type.dim);
         if (reading != nullptr)
             add_term(d, *reading);
         d.notes.push_back({"a reading declared absolute needs nothing added; where it is a "
@@ -436,7 +436,7 @@ bool checker::report_atmosphere_taken_twice(std::span<const operand> terms, std:
                                        quote(atmosphere->node), quote(number->node)),
                            file_.nodes[number->node].range);
     add_term(d, *atmosphere);
-    add_term(d, *number);
+    add_number_term(d, *number, atmosphere->type.dim);
     d.notes.push_back({"an absolute pressure less the atmosphere is the gauge reading; take "
                        "it off once",
                        {}});

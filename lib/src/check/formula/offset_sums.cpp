@@ -181,6 +181,12 @@ void checker::note_atmosphere_in_another_unit(diagnostic& d, std::span<const ope
             d.message = fmt::format("{} is the atmosphere in {}, added to {}, an absolute "
                                     "pressure already: the sum counts that zero twice",
                                     written, as_converted->name, other);
+            // The number is read as a pressure, not as a dimensionless term that differs.
+            for (term& t : d.terms)
+                if (t.differs && t.text == written && t.dim.is_dimensionless()) {
+                    t.dim = pressure_dimension().expand();
+                    t.differs = false;
+                }
             d.notes.push_back({fmt::format("{} is an absolute pressure converted to {} by its "
                                            "factor; drop the {}, or convert a gauge reading",
                                            other, as_converted->name, written),
