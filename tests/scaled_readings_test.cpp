@@ -680,3 +680,18 @@ TEST_CASE("a °C reading beside the gas constant and a current: gas-law advice")
     CHECK(gas);
     CHECK_FALSE(per_degree);
 }
+
+// T/K = t/°C + 273.15 (SI Brochure 9th ed., 2.3.1): the mean of two °C readings is a °C
+// reading, however it is written, and set equal to a kelvin reading or taken from one it
+// is off by 273.15 K, as a single °C reading is. These passed without a word. A mean of
+// readings on one scale, and a kelvin reading less a mean converted to kelvins, pass.
+TEST_CASE("the mean of two readings on an offset scale is held to that scale's zero") {
+    const std::string decl = "T_b, T_m : K\nt_b, t_1, t_2 : °C\nΔT : K\n";
+    fails_with(decl,
+               {"T_m = (t_1 + t_2)/2", "T_m = 0.5*(t_1 + t_2)", "T_m = t_1/2 + t_2/2",
+                "ΔT = T_b - (t_1 + t_2)/2", "ΔT = T_b - 0.5*(t_1 + t_2)",
+                "ΔT = (t_b + 273.15) - (t_1 + t_2)/2"},
+               plumb::rules::offset_scale);
+    passes(decl, {"ΔT = t_b - (t_1 + t_2)/2", "ΔT = T_b - ((t_1 + t_2)/2 + 273.15)",
+                  "T_m = (t_1 + t_2)/2 + 273.15", "ΔT = T_b - 273.15 - 0.5*(t_1 + t_2)"});
+}

@@ -274,6 +274,16 @@ inline void set_weight(typed_term& t, const std::optional<rational>& w) {
         t.weighted_sum = false; // (T_1 + T_2)/2: a reading again
 }
 
+// How far a reading's zero may lie from its origin. A sum of readings on one scale leaves it
+// open (infinite) until weighed: its mean, (t_1 + t_2)/2, 0.5*(t_1 + t_2) or t_1/2 + t_2/2,
+// weighs 1 and is a reading on that scale, held to its zero like one (T_K = (t_1 + t_2)/2
+// with °C readings is the finding T_K = t_1 is).
+inline double reading_tolerance(const typed_term& t) {
+    if (std::isinf(t.origin_tolerance) && t.weight_numerator == 1 && t.weight_denominator == 1)
+        return 0.0;
+    return t.origin_tolerance;
+}
+
 inline void scale_weight(typed_term& t, const rational& by) {
     const std::optional<rational> w = weight_of(t);
     if (!w)

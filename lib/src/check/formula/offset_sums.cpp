@@ -501,7 +501,7 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
         // "c + (γ*z - u)": a group that subtracts a reading counts as one subtracted.
         const bool negative = t.type.weight_denominator != 0 && t.type.weight_numerator < 0;
         origin += (negative ? -sign : sign) * t.type.origin;
-        origin_tolerance += t.type.origin_tolerance;
+        origin_tolerance += reading_tolerance(t.type);
         points += (t.subtracted != negative) ? -1 : 1;
         // A mean's weights are small fractions (1/2, 1/3, 3/5); a larger number beside a
         // reading (100*p_bar to kPa, 6.895*p_psig) converts it, and is no weight.
@@ -843,6 +843,10 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
         if (weight && !has_shift && !weight->is_zero()) {
             set_weight(result, weight);
             result.weighted_sum = result.weight_denominator != 0 && !(*weight == rational(1));
+        } else {
+            // Its zero, shifted by a number among weighed readings, is not followed: no
+            // weight of 1 may make it a reading held to it (see reading_tolerance).
+            result.weight_denominator = 0;
         }
         return result;
     }

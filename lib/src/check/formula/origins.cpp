@@ -117,13 +117,13 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
     const operand* reference = nullptr;
     for (const auto& side : sides) {
         if (!side.type.known || side.type.zero || side.type.numeric ||
-            !std::isfinite(side.type.origin_tolerance))
+            !std::isfinite(reading_tolerance(side.type)))
             continue;
         if (reference == nullptr) {
             reference = &side;
             continue;
         }
-        const double slack = side.type.origin_tolerance + reference->type.origin_tolerance +
+        const double slack = reading_tolerance(side.type) + reading_tolerance(reference->type) +
                              1e-9 * (std::abs(side.type.origin) + 1.0);
         const double difference = side.type.origin - reference->type.origin;
         if (std::abs(difference) <= slack)
