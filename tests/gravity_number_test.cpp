@@ -976,3 +976,27 @@ TEST_CASE("a gas's density at a standard state typed as a number") {
                          plumb::rules::trade_constant);
     fails_with(decl, {"m = 1.25*V", "m = 1.2*V"}, plumb::rules::side_mismatch);
 }
+
+// A radiant loss q = σ·ε·A·(T_1⁴ - T_2⁴) with σ = 5.670374419e-8 W/(m²·K⁴) (CODATA 2018)
+// typed as 5.67e-8, and a vapour density ρ_v = e/(R_w·T) with water vapour's R_w = 461.52
+// J/(kg·K) (CODATA 2018's R over 18.015 g/mol, from memory) as 216.7 in g/m³ from hPa and K:
+// each read as the constant with a note. Left out, they stay errors.
+TEST_CASE("the Stefan-Boltzmann constant and water vapour's gas constant typed as numbers") {
+    const std::string decl = "q : W\nε : 1\nA : m^2\nT_1, T_2 : K\nρ_v : g/m^3\ne : hPa\n"
+                             "T : K\nρ_s : kg/m^3\np : kPa\n";
+    passes_with_one_note(
+        decl, {"q = 5.67e-8*ε*A*(T_1^4 - T_2^4)", "ρ_v = 216.7*e/T", "ρ_s = p/(0.4615*T)"},
+        plumb::rules::trade_constant);
+    fails_with(decl, {"q = ε*A*(T_1^4 - T_2^4)", "ρ_v = e/T"}, plumb::rules::side_mismatch);
+}
+
+// The hours of a year, 8760 (NIST SP 811 (2008), B.8: 1 a = 365 d), are a time and nothing
+// else: methane destroyed in t/yr from Nm³/h holds methane's density, and 8760 is not read as
+// water's.
+TEST_CASE("the hours of a year are not read as a density") {
+    const auto r = run("Q_n : m^3/h\nm_yr : t/yr\nm_yr = Q_n*0.717*8760/1000\n");
+    // Methane's 0.717 kg/Nm³ is no quantity plumb knows: the line is still reported.
+    REQUIRE(problems_in(r) >= 1);
+    for (const auto& d : r.diagnostics)
+        CHECK(d.message.find("'8760' is read as the density") == std::string::npos);
+}

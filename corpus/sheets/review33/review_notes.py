@@ -7,12 +7,12 @@ practice."""
 # stem -> list of (comment, "Sheet!Cell rule"): every finding beyond the planted ones
 EXTRA = {
     "steam-balance": [
-        ("a correct cell plumb still flags: HP steam density ρ = p/(R·T) by the ideal gas law, "
+        ("a note on a correct cell: HP steam density ρ = p/(R·T) by the ideal gas law, "
          "p in bar a × 100 = kPa, T = t + 273.15 K, with steam's gas constant R = 0.4615 "
          "kJ/(kg·K) (CODATA 2018 R = 8.314 J/(mol·K) over M = 18.015 g/mol) typed into the "
-         "formula; plumb reads 0.4615 as a bare number and says the formula computes "
-         "[M L^-1 T^-2 Θ^-1], without suggesting the typed constant",
-         "Balance!C42 result-unit"),
+         "formula, read as water vapour's gas constant (flagged as computing "
+         "[M L^-1 T^-2 Θ^-1] until a later round)",
+         "Balance!C42 trade-constant"),
     ],
     "oxygen-vie": [],
     "motor-list": [

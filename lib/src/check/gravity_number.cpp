@@ -25,6 +25,7 @@ constexpr std::size_t most_numbers = 8;
 constexpr std::size_t twice_gravity_row = 1;
 constexpr std::size_t round_water_row = 3; // the ground engineer's 10 kN/m³
 constexpr std::size_t molar_volume_row = 7;
+constexpr std::size_t year_row = 16; // the hours of a year
 
 const dimension& density_dimension() {
     static const dimension density = dimension::base(base_dimension::mass) /
@@ -32,8 +33,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 21>& quantities() {
-    static const std::array<carried_quantity, 21> table = [] {
+const std::array<carried_quantity, 23>& quantities() {
+    static const std::array<carried_quantity, 23> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -68,7 +69,7 @@ const std::array<carried_quantity, 21>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 21>{{
+        return std::array<carried_quantity, 23>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -246,6 +247,23 @@ const std::array<carried_quantity, 21>& quantities() {
              carried_quantity::term_kind::any,
              {},
              0.001},
+            // The Stefan–Boltzmann constant, σ = 5.670374419e-8 W/(m²·K⁴) (CODATA 2018): the
+            // 5.67E-8 of a radiant loss σ·ε·A·(T_1⁴ - T_2⁴), and the US 0.1714E-8
+            // Btu/(h·ft²·°R⁴).
+            {rules::trade_constant, "the Stefan-Boltzmann constant",
+             "\u03C3 = 5.670374419e-8 W/(m\u00B2\u00B7K\u2074)", "1/\u03C3", "",
+             "declare it with its unit (\u03C3 : W/(m^2*K^4) = 5.670374419e-8) to say so",
+             "write it in a cell that holds its unit to say so",
+             mass / (time * time * time) / (temperature * temperature * temperature * temperature),
+             5.670374419e-8, 5.670374419e-8},
+            // Water vapour's specific gas constant, R/M_w = 8.314462618/0.01801528 = 461.52
+            // J/(kg·K) (CODATA 2018's R, IUPAC's molar mass, from memory): the 216.7 of a
+            // vapour density ρ_v = 216.7*e/T in g/m³ from hPa and K, one over it.
+            {rules::trade_constant, "the gas constant of water vapour", "R_w = R/M_w", "1/R_w",
+             " (461.5 J/(kg\u00B7K))",
+             "declare the gas constant with its unit (R_w : J/(kg*K) = 461.5) to say so",
+             "write the gas constant in a cell that holds its unit to say so", specific_heat, 461.5,
+             461.55},
         }};
     }();
     return table;
@@ -411,8 +429,12 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                 (q.finest_rounding > 0.0 && half_unit > q.finest_rounding * number.value))
                 continue;
             // But a 24 is no density: W/(24*w) from kg/d into L/h lacks the solution's density
-            // (1 kg/L only for water), which a 24 read as one would hide.
-            if (number.value == 24.0 && q.dim == density_dimension())
+            // (1 kg/L only for water), which a 24 read as one would hide. Nor are the hours of
+            // a year anything but a time: Q*0.717*8760/1000 into t/yr holds methane's density,
+            // not water's in 8760.
+            if ((number.value == 24.0 && q.dim == density_dimension()) ||
+                ((number.value == 8760.0 || number.value == 8766.0 || number.value == 8784.0) &&
+                 &q != &quantities()[year_row]))
                 continue;
             for (const bool reciprocal : {false, true}) {
                 if (!is_power_of(lacking, q.dim, reciprocal ? -x : x))
