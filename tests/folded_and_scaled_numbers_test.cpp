@@ -1152,3 +1152,23 @@ TEST_CASE("a sum whose terms all carry a number: the side's unit less that numbe
     passes(d, {"t_c = V/(Q_in/1000)/60 + V/((Q_p - Q_in)/1000)/60",
                "t_c = 1000*V/Q_in/60 + 1000*V/(Q_p - Q_in)/60"});
 }
+
+// A steam main's warm-up condensate in lb/h, 60·W·L·c·ΔT/(h_fg·t) with t in min (common
+// practice), with the latent heat pasted in kJ/kg (1 Btu/lb = 2.326 kJ/kg, NIST SP 811
+// (2008), B.8): the 60 is the minutes the engineer meant, so the factor advised is 2.326,
+// not 60 × 2.326. A metering pump's rate π/4·d²·L·n·60/231 in gph (231 in³ per US gallon)
+// with the plunger in mm: 231 is the factor these units need with the plunger in inches.
+TEST_CASE("the clock's 60 beside a slip counts as the conversion it was written as") {
+    const std::string steam = "m : lb/h\nW : lb/ft\nL : ft\nc : Btu/(lb*°F)\nΔT : °R\n"
+                              "h_us : Btu/lb\nh_si : kJ/kg\nt : min\n";
+    const auto r = run(steam, "m = 60*W*L*c*ΔT/(h_si*t)");
+    const plumb::diagnostic& d = first_under(r, plumb::rules::unit_scale);
+    CHECK(plumb::test::says(d, "by 2.326"));
+    CHECK_FALSE(plumb::test::says(d, "60 counted as a coefficient"));
+    passes(steam, {"m = 60*W*L*c*ΔT/(h_us*t)"});
+    const std::string pump = "Q_gph : gal/h\nd_mm : mm\nd_in, L_in : in\nn_s : 1/min\nη_v : 1\n";
+    passes(pump, {"Q_gph = pi/4*d_in^2*L_in*n_s*60*η_v/231"});
+    const auto plunger = run(pump, "Q_gph = pi/4*d_mm^2*L_in*n_s*60*η_v/231");
+    CHECK(plumb::test::says(first_under(plunger, plumb::rules::unit_scale),
+                            "231 fits these units with 'd_mm' in in, but it is in mm"));
+}

@@ -334,12 +334,27 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     double needed = 0.0;
     double written = 0.0;
     std::optional<std::string> other_unit_note;
+    // "60*W*L*c*ΔT/(h_fg*t)" into lb/h with t in min and h_fg in kJ/kg: the clock's 60 is
+    // the conversion it was written as, and the factor advised (2.326) leaves it in, as the
+    // workbook's checker does.
+    const auto clock_ratio = [&](const scale_literal& l) {
+        return (l.value == 60.0 || l.value == 24.0) && !looks_like_conversion(l, true) &&
+               file_.nodes[l.node].kind == expr_kind::number;
+    };
+    if (!clean)
+        for (const std::size_t side : {r.odd, r.reference})
+            for (const scale_literal& l : parts[side].literals)
+                if (clock_ratio(l)) {
+                    const double f = std::pow(l.value, l.exponent);
+                    ratio = side == r.odd ? ratio * f : ratio / f;
+                    exact_ratio.reset();
+                }
     if (!clean) {
         const scale_literal* coefficient = nullptr;
         bool on_odd_side = false;
         for (const std::size_t side : {r.odd, r.reference})
             for (const scale_literal& l : parts[side].literals)
-                if (l.value != 1.0 && !looks_like_conversion(l, true) &&
+                if (l.value != 1.0 && !looks_like_conversion(l, true) && !clock_ratio(l) &&
                     file_.nodes[l.node].kind == expr_kind::number &&
                     significant_digits(text(file_.nodes[l.node].range)) >= 2 &&
                     coefficients.size() < 80) {
