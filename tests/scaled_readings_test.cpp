@@ -695,3 +695,15 @@ TEST_CASE("the mean of two readings on an offset scale is held to that scale's z
     passes(decl, {"ΔT = t_b - (t_1 + t_2)/2", "ΔT = T_b - ((t_1 + t_2)/2 + 273.15)",
                   "T_m = (t_1 + t_2)/2 + 273.15", "ΔT = T_b - 273.15 - 0.5*(t_1 + t_2)"});
 }
+
+// Converse-Labarre's pile group efficiency E_g = 1 − θ·((n − 1)·m + (m − 1)·n)/(90·m·n),
+// θ = arctan(D/s) in degrees (Das, Principles of Foundation Engineering, 7th ed., ch. 11, from
+// memory): θ over the 90 of a right angle is a ratio of angles, the 90 being in degrees too.
+// An arc 2π·r·θ/360 passes as before; an angle in degrees standing for radians, or an arc
+// with its π left out, is still reported.
+TEST_CASE("an angle in degrees over a right angle or a turn typed as a number is a ratio") {
+    const std::string decl = "θ : °\nn_r, n_c, E_g : 1\nr, L : m\n";
+    passes(decl, {"E_g = 1 - θ*((n_r - 1)*n_c + (n_c - 1)*n_r)/(90*n_r*n_c)", "E_g = 1 - θ/90",
+                  "E_g = θ/360", "L = 2*pi*r*θ/360", "L = r*θ*pi/180"});
+    fails_with(decl, {"L = r*θ", "L = 2*r*θ/360", "E_g = 1 - θ"}, plumb::rules::unit_scale);
+}

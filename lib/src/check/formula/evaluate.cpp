@@ -1012,7 +1012,32 @@ typed_term checker::eval_product(std::uint32_t index) {
     typed_term t = eval_factors(index);
     if (literals_.size() >= literals_before + 2) [[unlikely]]
         read_ratio_of_whole_numbers(literals_before);
+    if (literals_.size() > literals_before && t.known && t.dim.is_dimensionless() &&
+        std::abs(t.scale * 180.0 / std::numbers::pi - 1.0) < 1e-12) [[unlikely]]
+        read_angle_over_right_angles(t, literals_before);
     return t;
+}
+
+// "θ*(...)/(90*n_r*n_c)" with θ in degrees (Converse-Labarre's pile group efficiency),
+// "2*π*r*θ/360" (an arc): an angle in degrees over a right angle, a half or a whole turn typed as
+// 90, 180 or 360 is a ratio of angles, the number being in degrees too. Not beside π, where 180
+// converts degrees to radians (θ*π/180).
+void checker::read_angle_over_right_angles(typed_term& t, std::uint32_t literals_begin) {
+    scale_literal* turn = nullptr;
+    for (std::size_t i = literals_begin; i < literals_.size(); ++i) {
+        scale_literal& l = literals_[i];
+        if (file_.nodes[l.node].kind == expr_kind::pi ||
+            std::abs(l.value / std::numbers::pi - 1.0) < 1e-3)
+            return;
+        const std::string_view written = text(file_.nodes[l.node].range);
+        if (l.exponent == -1.0 && (written == "90" || written == "180" || written == "360"))
+            turn = &l;
+    }
+    if (turn == nullptr)
+        return;
+    read_as_quantity(*turn);
+    t.scale = 1.0;
+    t.exact_scale = rational(1);
 }
 
 // "X_60 = X_50*60/50", "n*75/60": two whole numbers, one over the other, within a factor of
