@@ -272,6 +272,11 @@ const std::array<carried_quantity, 23>& quantities() {
 // Whether `lacking` is `q` to the power `exponent` (given as a double with a denominator of
 // at most 3, as written powers are).
 bool is_power_of(const dimension& lacking, const dimension& q, double exponent) {
+    // A power keeps which base dimensions are present: most quantities fail here, before any
+    // power is formed.
+    for (std::size_t i = 0; i < base_dimension_count; ++i)
+        if (lacking.exponents()[i].is_zero() != q.exponents()[i].is_zero())
+            return false;
     for (std::int64_t denominator = 1; denominator <= 3; ++denominator) {
         const double scaled = exponent * static_cast<double>(denominator);
         const double whole = std::round(scaled);

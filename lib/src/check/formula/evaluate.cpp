@@ -1046,22 +1046,27 @@ void checker::read_angle_over_right_angles(typed_term& t, std::uint32_t literals
 // 9/5 and 5/9 are the degrees' conversion; powers of ten (100*p_bar*(Q/60)) and numbers of
 // four digits (1000/1233 for m³ per acre-foot) are left to the conversion rules.
 void checker::read_ratio_of_whole_numbers(std::uint32_t literals_begin) {
-    const auto whole = [&](const scale_literal& l) {
+    // The numbers' values first, their text only for a pair that fits.
+    const auto small_whole = [](const scale_literal& l) {
+        return !l.power_of_ten && !l.table_digits && l.value != 1.0 && l.value < 1000.0 &&
+               l.value == std::floor(l.value);
+    };
+    const auto written_whole = [&](const scale_literal& l) {
         const std::string_view written = text(file_.nodes[l.node].range);
-        return !l.power_of_ten && !l.table_digits && !written.empty() &&
-               std::all_of(written.begin(), written.end(),
-                           [](char c) { return c >= '0' && c <= '9'; });
+        return !written.empty() && std::all_of(written.begin(), written.end(),
+                                               [](char c) { return c >= '0' && c <= '9'; });
     };
     for (std::size_t i = literals_begin; i < literals_.size(); ++i) {
         scale_literal& over = literals_[i];
-        if (over.exponent != 1.0 || over.value == 1.0 || !whole(over))
+        if (over.exponent != 1.0 || !small_whole(over))
             continue;
         for (std::size_t k = literals_begin; k < literals_.size(); ++k) {
             scale_literal& under = literals_[k];
             const double ratio = over.value / under.value;
-            if (under.exponent != -1.0 || under.value == 1.0 || !(ratio > 0.5 && ratio < 2.0) ||
+            if (under.exponent != -1.0 || !small_whole(under) || !(ratio > 0.5 && ratio < 2.0) ||
                 ratio == 1.0 || std::abs(ratio - 1.8) < 1e-12 ||
-                std::abs(ratio * 1.8 - 1.0) < 1e-12 || !whole(under))
+                std::abs(ratio * 1.8 - 1.0) < 1e-12 || !written_whole(over) ||
+                !written_whole(under))
                 continue;
             read_as_quantity(over);
             read_as_quantity(under);
