@@ -661,3 +661,20 @@ TEST_CASE("the barometer added to a pressure already absolute") {
                plumb::rules::offset_scale);
     passes(decl, {"H = (p_abs - p_v)*1000/(ρ*g)", "H_ft = (p_a - p_vap)*144/γ"});
 }
+
+// A gauge reading set equal to an absolute pressure is told what to add: the barometer the
+// file declares in the reading's unit, or the words for it, never a symbol in another unit
+// (1 bar = 14.5038 psi; NIST SP 811 (2008), B.8). A reference temperature beside °R readings
+// is declared in °R (60 °F = 519.67 °R, NIST SP 811, 4.2.1.1).
+TEST_CASE("the advice names an atmosphere in the reading's unit, and a reference in its system") {
+    const std::string bar_only = "p_atm : bar \"atmospheric pressure\"\np_pu : psia\np_g : psig\n";
+    const auto words = run(bar_only, "p_pu = p_g");
+    CHECK(plumb::test::says(first_under(words, plumb::rules::offset_scale),
+                            "write (p_g + the atmospheric pressure in psi)"));
+    const std::string psi_too = bar_only + "p_b : psia \"site barometric pressure\"\n";
+    const auto named = run(psi_too, "p_pu = p_g");
+    CHECK(plumb::test::says(first_under(named, plumb::rules::offset_scale), "write (p_g + p_b)"));
+    const auto rankine = run("V_a, V_b : ft^3\nT_f : °R\n", "V_b = V_a*(519.67/T_f)");
+    CHECK(plumb::test::says(first_under(rankine, plumb::rules::trade_constant),
+                            "T_n : \u00B0R = 519.67"));
+}

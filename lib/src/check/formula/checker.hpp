@@ -990,6 +990,7 @@ class checker {
     void report_atmosphere_not_the_site(std::uint32_t number, std::string_view what, double pascals,
                                         const site_barometer& site, double unit);
     std::optional<std::string_view> barometer_in_unit(double unit) const;
+    std::string atmosphere_in(double unit, std::string_view unit_name) const;
     const site_barometer* declared_site_barometer();
     double declared_number(const syntax::declaration& decl) const;
     void warn_sea_level_atmosphere_at_site(std::span<const operand> terms, double unit);

@@ -304,7 +304,18 @@ void checker::read_reference_states(reference_state_pairs& pairs, typed_term& re
                                            "decides which",
                                            state->choices),
                                {}});
-            d.notes.push_back({std::string(state->advice), {}});
+            // In the reading's own system: "(60 + 460)" beside °R readings is declared in °R,
+            // "/14.7" beside psia in psia.
+            constexpr double psi = 6894.757293168;
+            if (reading.dim == temperature_dimension() &&
+                std::abs(reading.scale * 1.8 - 1.0) < 1e-9)
+                d.notes.push_back(
+                    {"declare it with its unit (T_n : \u00B0R = 519.67) to say so", {}});
+            else if (reading.dim == pressure_dimension() &&
+                     std::abs(reading.scale / psi - 1.0) < 1e-6)
+                d.notes.push_back({"declare it with its unit (p_n : psia = 14.696) to say so", {}});
+            else
+                d.notes.push_back({std::string(state->advice), {}});
             break;
         }
     }

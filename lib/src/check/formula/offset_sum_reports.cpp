@@ -133,6 +133,15 @@ void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_v
                        {}});
 }
 
+// What to add to a gauge reading in `unit` to make it absolute: the barometer declared in
+// that unit, or the words for it (a symbol in another unit would be the next slip).
+std::string checker::atmosphere_in(double unit, std::string_view unit_name) const {
+    if (std::isfinite(unit))
+        if (const auto name = barometer_in_unit(unit))
+            return std::string(*name);
+    return fmt::format("the atmospheric pressure in {}", unit_name);
+}
+
 // "p_bk : kPa "site barometric pressure"" beside "p_bar : inHg ...": the barometer the
 // advice names is the one declared in the sum's unit, where the file declares one.
 std::optional<std::string_view> checker::barometer_in_unit(double unit) const {
@@ -144,9 +153,22 @@ std::optional<std::string_view> checker::barometer_in_unit(double unit) const {
         const std::optional<compact_dimension> dim = compact_dimension::fitted(*decl.kind.dim);
         const std::string_view name = text(file_.names[decl.first_name].name);
         const std::string_view description = text(decl.description);
-        if (dim && *dim == pressure_dimension() && names_the_atmosphere(name, description) &&
+        // A differential "vented to atmosphere" names it but is none.
+        const bool differential = name.starts_with("\u0394") || name.starts_with("d") ||
+                                  description.find("differential") != std::string_view::npos ||
+                                  description.find("drop") != std::string_view::npos;
+        // Named for it, or described as the barometer or the atmospheric pressure; not a
+        // pressure described as some reading "plus the atmosphere".
+        const bool barometer = names_the_atmosphere(name, {}) ||
+                               description.find("barometr") != std::string_view::npos ||
+                               description.find("barometer") != std::string_view::npos ||
+                               description.find("atmospheric pressure") != std::string_view::npos ||
+                               description.find("ambient pressure") != std::string_view::npos;
+        if (dim && *dim == pressure_dimension() && barometer && !differential &&
             description.find("standard") == std::string_view::npos &&
-            description.find("gauge") == std::string_view::npos)
+            description.find("gauge") == std::string_view::npos &&
+            description.find("below") == std::string_view::npos &&
+            description.find("vacuum") == std::string_view::npos)
             return name;
     }
     return std::nullopt;

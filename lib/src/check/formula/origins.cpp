@@ -246,9 +246,10 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
                                          "beside °R, ({} + {})/1.8 beside K",
                                          unit->symbol, zero, reading, zero, reading, zero))
                     : fmt::format("a gauge reading plus the atmospheric pressure is "
-                                  "absolute: write ({} + p_atm), or ({} + {}) at sea level, "
+                                  "absolute: write ({} + {}), or ({} + {}) at sea level, "
                                   "the standard atmosphere in {}",
-                                  reading, reading, zero, absolute_unit);
+                                  reading, atmosphere_in(written_unit, absolute_unit), reading,
+                                  zero, absolute_unit);
             // "Δθ_h = θ_h" with Δθ_h in K "rise above ambient": the kelvins are a rise's,
             // and a reading made absolute would only hide the slip.
             if (temperature && file_.nodes[other.node].kind == expr_kind::symbol) {
