@@ -74,6 +74,13 @@ reconciliation reconcile(std::span<const scaled_operand> ops, flipped_literal fl
 // two table units of one dimension written to 3 or more digits).
 bool looks_like_conversion(const scale_literal& l, bool allow_hundred);
 
+// 24 h/d, 60 min/h and s/min, 1440 min/d, 3600 s/h, 86400 s/d: exact by definition, and
+// written with too few digits to look like conversions by themselves (SI Brochure 9th ed.,
+// Table 8).
+inline bool is_time_ratio(const scale_literal& l) {
+    return l.value == 24 || l.value == 60 || l.value == 1440 || l.value == 3600 || l.value == 86400;
+}
+
 // The literal is, within its printed digits, the ratio of two table units of one dimension (24
 // for h/d, 5.615 for ft³/bbl), however few digits it is written to.
 bool is_ratio_of_units(const scale_literal& l);

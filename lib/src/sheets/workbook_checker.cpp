@@ -1238,14 +1238,6 @@ class workbook_checker {
         return std::nullopt;
     }
 
-    // 24 h/d, 60 min/h and s/min, 1440 min/d, 3600 s/h, 86400 s/d: exact by definition, and
-    // written with too few digits to look like conversions by themselves (SI Brochure 9th
-    // ed., Table 8).
-    static bool is_time_ratio(const scale_literal& x) {
-        return x.value == 24 || x.value == 60 || x.value == 1440 || x.value == 3600 ||
-               x.value == 86400;
-    }
-
     // The ratio as a whole number either way (60, 1/3600) where the rounding of the
     // conversions written (5.615 for 5.6146) is all that keeps it from one; else as it is.
     static std::optional<double> whole_within(double ratio, double doubt) {

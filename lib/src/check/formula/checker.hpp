@@ -745,6 +745,8 @@ class checker {
                                                           const scale_literal& number,
                                                           double needed) const;
     std::optional<declared_factor> declared_factor_of(std::uint32_t k, double exponent) const;
+    std::optional<std::pair<std::uint32_t, declared_factor>> declared_factor_at(std::uint32_t at,
+                                                                                int sign) const;
     [[gnu::noinline]] bool
     note_constant_for_other_units(diagnostic& d, std::span<const operand> ops, const agreement& a);
     bool note_gravity_in_other_units(diagnostic& d, std::span<const operand> ops,

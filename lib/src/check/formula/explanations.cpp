@@ -159,6 +159,26 @@ const operand* checker::plain_reference_term(std::span<const operand> ops,
 // A symbol, a cell, or a sum or difference of two symbols in one unit ("(h_o + z_b)" in ft,
 // "(t_s - t_o)" in °C, a difference of kelvin size), with the unit it is declared in. Asked
 // only of a term with no offset, where every reading in it is a difference.
+// A factor of a product and its declared unit, through a written power ("D^2" gives D with
+// exponent 2, -2 below a division); empty where the power is not a number or the factor has
+// no declared unit.
+std::optional<std::pair<std::uint32_t, declared_factor>>
+checker::declared_factor_at(std::uint32_t at, int sign) const {
+    const syntax::expr_node& n = file_.nodes[at];
+    std::uint32_t base = at;
+    double exponent = sign;
+    if (n.kind == expr_kind::power) {
+        base = syntax::inside_brackets(file_, n.lhs);
+        if (file_.nodes[n.rhs].kind != expr_kind::number)
+            return std::nullopt;
+        exponent = sign * written_number(file_.nodes[n.rhs].range);
+    }
+    const std::optional<declared_factor> factor = declared_factor_of(base, exponent);
+    if (!factor)
+        return std::nullopt;
+    return std::pair{base, *factor};
+}
+
 std::optional<declared_factor> checker::declared_factor_of(std::uint32_t k, double exponent) const {
     const syntax::expr_node& n = file_.nodes[k];
     if (n.kind == expr_kind::subtract || n.kind == expr_kind::add) {
@@ -213,29 +233,21 @@ std::optional<std::string> checker::coefficient_for_other_unit(const operand& te
     // change of unit; one of the term it is set against, by the inverse.
     const auto try_factors_of = [&](const operand& where, double direction) {
         for_each_factor(where.node, [&](std::uint32_t at, int sign) {
-            const syntax::expr_node& n = file_.nodes[at];
-            std::uint32_t base = at;
-            double exponent = sign;
-            if (n.kind == expr_kind::power) {
-                base = syntax::inside_brackets(file_, n.lhs);
-                if (file_.nodes[n.rhs].kind != expr_kind::number)
-                    return false;
-                exponent = sign * written_number(file_.nodes[n.rhs].range);
-            }
-            const std::optional<declared_factor> factor = declared_factor_of(base, exponent);
-            if (!factor || !(factor->si_scale > 0))
+            const auto declared = declared_factor_at(at, sign);
+            if (!declared || !(declared->second.si_scale > 0))
                 return false;
-            const counterparts_of_unit units = unit_counterparts(factor->dim, factor->si_scale);
+            const auto& [base, factor] = *declared;
+            const counterparts_of_unit units = unit_counterparts(factor.dim, factor.si_scale);
             for (const unit_counterpart& other : units.others) {
-                const double swapped = needed * std::pow(other.si_scale / factor->si_scale,
-                                                         direction * factor->exponent);
+                const double swapped = needed * std::pow(other.si_scale / factor.si_scale,
+                                                         direction * factor.exponent);
                 if (std::abs(written / swapped - 1.0) > within)
                     continue;
                 ambiguous = found_other != nullptr;
                 found_node = base;
-                found_declared = factor->unit_text.empty() ? units.declared : factor->unit_text;
+                found_declared = factor.unit_text.empty() ? units.declared : factor.unit_text;
                 found_other = &other;
-                other_in_declared = other.si_scale / factor->si_scale;
+                other_in_declared = other.si_scale / factor.si_scale;
             }
             return ambiguous;
         });
@@ -298,19 +310,11 @@ bool checker::note_constant_for_other_units(diagnostic& d, std::span<const opera
             const syntax::expr_node& n = file_.nodes[at];
             if (n.kind == expr_kind::number || n.kind == expr_kind::pi)
                 return false;
-            std::uint32_t base = at;
-            double exponent = sign;
-            if (n.kind == expr_kind::power) {
-                base = syntax::inside_brackets(file_, n.lhs);
-                if (file_.nodes[n.rhs].kind != expr_kind::number)
-                    return unweighed = true;
-                exponent = sign * written_number(file_.nodes[n.rhs].range);
-            }
-            const std::optional<declared_factor> factor = declared_factor_of(base, exponent);
-            if (!factor)
+            const auto declared = declared_factor_at(at, sign);
+            if (!declared)
                 return unweighed = true;
-            factor_nodes[factor_count] = base;
-            factors[factor_count++] = *factor;
+            factor_nodes[factor_count] = declared->first;
+            factors[factor_count++] = declared->second;
             return unweighed = factor_count == factors.size();
         });
         if (unweighed)

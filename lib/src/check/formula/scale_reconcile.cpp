@@ -338,7 +338,7 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     // the conversion it was written as, and the factor advised (2.326) leaves it in, as the
     // workbook's checker does.
     const auto clock_ratio = [&](const scale_literal& l) {
-        return (l.value == 60.0 || l.value == 24.0) && !looks_like_conversion(l, true) &&
+        return is_time_ratio(l) && !looks_like_conversion(l, true) &&
                file_.nodes[l.node].kind == expr_kind::number;
     };
     if (!clean)
