@@ -178,6 +178,11 @@ constexpr double reference_temperature_slack = 0.003;
 // observatories), as a share of the standard atmosphere: h = 44330.8·(1 - 0.52^0.190263) m in
 // the standard atmosphere's barometric formula (from memory).
 constexpr double highest_site_atmosphere = 0.52;
+// How far an atmosphere added to a gauge reading may stand from the barometer the file
+// declares for its site: 1.5 %, about 125 m of height in the standard atmosphere and about
+// what the weather moves a barometer from day to day (from memory). Beyond it the calc's own
+// figure is the one its sums must take: 1.8 kPa is 0.18 m of a deaerator pump's NPSH.
+constexpr double site_barometer_slack = 0.015;
 // How an actual gas volume becomes one at reference conditions (ideal gas, common practice).
 constexpr std::string_view state_correction_advice =
     "an actual volume becomes a normal one times (p/p_n)*(T_n/T), with absolute pressures and "

@@ -100,7 +100,7 @@ void checker::warn_sea_level_atmosphere_at_site(std::span<const operand> terms, 
             return;
         }
         const site_barometer* site = declared_site_barometer();
-        if (site == nullptr || std::abs(added / site->pascals - 1.0) <= 0.02)
+        if (site == nullptr || std::abs(added / site->pascals - 1.0) <= site_barometer_slack)
             return;
         report_atmosphere_not_the_site(t.node, "the atmosphere at sea level", added, *site, unit);
         return;
@@ -108,8 +108,7 @@ void checker::warn_sea_level_atmosphere_at_site(std::span<const operand> terms, 
 }
 
 // "p_g + 101.325", "p_g + 14.73" in a file that declares the site's barometer: an
-// atmosphere added to a gauge reading that is not the site's, by more than a barometer
-// moves with the weather.
+// atmosphere added to a gauge reading that is not the site's (see site_barometer_slack).
 void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_view what,
                                              double pascals, const site_barometer& site,
                                              double unit) {

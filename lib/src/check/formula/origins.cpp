@@ -373,7 +373,7 @@ bool checker::read_local_atmosphere(const operand& sum) {
     // "p_g + 14.73" where the file declares a barometer of 96.9 kPa: 14.73 psia, the US gas
     // contract's base pressure, taken for the site's atmosphere.
     if (const site_barometer* site = declared_site_barometer();
-        site != nullptr && std::abs(pressure / site->pascals - 1.0) > 0.02) {
+        site != nullptr && std::abs(pressure / site->pascals - 1.0) > site_barometer_slack) {
         report_atmosphere_not_the_site(
             number, fmt::format("an atmosphere of {} kPa", format_factor(pressure / 1000.0)),
             pressure, *site, sum.type.scale);
