@@ -990,6 +990,24 @@ TEST_CASE("the Stefan-Boltzmann constant and water vapour's gas constant typed a
     fails_with(decl, {"q = ε*A*(T_1^4 - T_2^4)", "ρ_v = e/T"}, plumb::rules::side_mismatch);
 }
 
+// The specific gas constants R/M of the gases plants store (CODATA 2018's R = 8.314462618
+// J/(mol·K) over IUPAC molar masses, from memory): nitrogen 296.80 J/(kg·K) in a buffer tank's
+// stored mass m = p·V/(R·T), bar to Pa by 10⁵ (NIST SP 811 (2008), B.8); oxygen 259.84, carbon
+// dioxide 188.92 in kJ/(kg·K) beside kPa, methane 518.28, hydrogen 4124.2. Each was flagged as
+// a side-mismatch in a workbook; now a note. A gauge reading in the gas law stays an error, and
+// the constant left out or 1000 off is still reported.
+TEST_CASE("the gas constants of nitrogen, oxygen, carbon dioxide, methane and hydrogen") {
+    const std::string decl = "m : kg\nV : m^3\np_a : bar\np_g : barg\nT : K\np : kPa\n"
+                             "ρ : kg/m^3\n";
+    passes_with_one_note(decl,
+                         {"m = p_a*V*100000/(296.8*T)", "ρ = p/(0.2598*T)", "ρ = p/(0.1889*T)",
+                          "ρ = p/(0.5183*T)", "ρ = p*1000/(4124*T)"},
+                         plumb::rules::trade_constant);
+    CHECK(count_of(run(decl + "m = p_g*V*100000/(296.8*T)\n"), plumb::rules::offset_scale) == 1);
+    fails_with(decl, {"m = p_a*V*100000/T"}, plumb::rules::side_mismatch);
+    CHECK(count_of(run(decl + "ρ = p/(296.8*T)\n"), plumb::rules::unit_scale) == 1);
+}
+
 // The hours of a year, 8760 (NIST SP 811 (2008), B.8: 1 a = 365 d), are a time and nothing
 // else: methane destroyed in t/yr from Nm³/h holds methane's density, and 8760 is not read as
 // water's.

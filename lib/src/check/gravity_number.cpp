@@ -33,8 +33,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 23>& quantities() {
-    static const std::array<carried_quantity, 23> table = [] {
+const std::array<carried_quantity, 28>& quantities() {
+    static const std::array<carried_quantity, 28> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -56,6 +56,14 @@ const std::array<carried_quantity, 23>& quantities() {
         const auto air_density = [](double celsius) {
             return 101325.0 * 0.0289647 / (8.314462618 * (celsius + 273.15));
         };
+        // A gas's specific gas constant typed as a number, in J/(kg·K).
+        const auto gas_constant = [&](std::string_view what, std::string_view symbol,
+                                      std::string_view reciprocal, std::string_view advice,
+                                      double least, double greatest) {
+            return carried_quantity{rules::trade_constant, what, symbol, reciprocal, "", advice,
+                                    "write the gas constant in a cell that holds its unit to say so",
+                                    specific_heat, least, greatest};
+        };
         const double air_heat_least = air_density(40.0) * 1005.0;
         const double air_heat_greatest = air_density(0.0) * 1007.0;
         // An ideal gas's molar volume V_m = R·T/p at 101.325 kPa from 0 to 25 °C (R = 8.314462618
@@ -69,7 +77,7 @@ const std::array<carried_quantity, 23>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 23>{{
+        return std::array<carried_quantity, 28>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -264,6 +272,30 @@ const std::array<carried_quantity, 23>& quantities() {
              "declare the gas constant with its unit (R_w : J/(kg*K) = 461.5) to say so",
              "write the gas constant in a cell that holds its unit to say so", specific_heat, 461.5,
              461.55},
+            // The specific gas constants of the other gases plants store and burn, R/M with
+            // CODATA 2018's R and IUPAC's molar masses (from memory): nitrogen 296.80, oxygen
+            // 259.84, carbon dioxide 188.92, methane 518.28, hydrogen 4124.2 J/(kg·K), the 296.8
+            // of a buffer tank's stored mass m = p·V/(296.8·T).
+            gas_constant("the gas constant of nitrogen", "R_N2 = R/M_N2", "1/R_N2",
+                         "declare the gas constant with its unit (R_N2 : J/(kg*K) = 296.8) to "
+                         "say so",
+                         296.8, 296.85),
+            gas_constant("the gas constant of oxygen", "R_O2 = R/M_O2", "1/R_O2",
+                         "declare the gas constant with its unit (R_O2 : J/(kg*K) = 259.8) to "
+                         "say so",
+                         259.8, 259.85),
+            gas_constant("the gas constant of carbon dioxide", "R_CO2 = R/M_CO2", "1/R_CO2",
+                         "declare the gas constant with its unit (R_CO2 : J/(kg*K) = 188.9) to "
+                         "say so",
+                         188.9, 188.95),
+            gas_constant("the gas constant of methane", "R_CH4 = R/M_CH4", "1/R_CH4",
+                         "declare the gas constant with its unit (R_CH4 : J/(kg*K) = 518.3) to "
+                         "say so",
+                         518.2, 518.35),
+            gas_constant("the gas constant of hydrogen", "R_H2 = R/M_H2", "1/R_H2",
+                         "declare the gas constant with its unit (R_H2 : J/(kg*K) = 4124) to "
+                         "say so",
+                         4124.0, 4125.0),
         }};
     }();
     return table;
