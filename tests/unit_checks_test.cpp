@@ -103,6 +103,24 @@ TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6")
     CHECK(findings(fixed, plumb::rules::unit_scale).empty());
 }
 
+// A hydrotest's pressure-temperature correction (API RP 1110, from memory): the pipe's share
+// D(1 - ν²)/(E·t) beside the water's compressibility C_w. With the OD in mm and the wall in in
+// the pipe's term is the one 25.4 too large (1 in = 25.4 mm, NIST SP 811 (2008), B.8); the
+// finding used to name C_w and advise multiplying it by 25.4, which leaves Δp wrong.
+TEST_CASE("mixed units: of two terms, the one mixing mm and in is named") {
+    const std::string decl = "D_omm : mm\nD_o, t_w : in\nE_s : psi\nν : 1\nC_w : 1/psi\n"
+                             "Δp : psi\nk : 1/psi\n";
+    const auto r = plumb::check_text("h.plumb",
+                                     decl + "k = D_omm*(1 - ν^2)/(E_s*t_w) + C_w\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(mentions(*scales[0], "divide 'D_omm*(1 - ν^2)/(E_s*t_w)' by 25.4"));
+    CHECK(!mentions(*scales[0], "multiply 'C_w'"));
+    const auto right = plumb::check_text("h.plumb", decl + "k = D_o*(1 - ν^2)/(E_s*t_w) + C_w\n");
+    CHECK(findings(right, plumb::rules::unit_scale).empty());
+    CHECK(findings(right, plumb::rules::sum_mismatch).empty());
+}
+
 TEST_CASE("mixed units: a pressure in kPa beside ρ g h in Pa is off by 1000") {
     // Put in as declared, ρ*g*h gives pascals while p_0 is in kilopascals: ρ*g*h counts 1000
     // times too much against it.

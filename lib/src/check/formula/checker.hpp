@@ -1190,6 +1190,7 @@ class checker {
     void report_unbalanced_readings(const operand& side);
     bool report_scale_zero_beside_difference(std::span<const operand> sides);
     std::string units_in(std::uint32_t root) const;
+    bool mixes_units_of_one_kind(std::uint32_t root) const;
     template <typename F> void visit_nodes(F&& f) const {
         // An expression on its own (expression_dimension: a query, or a side's dimension for
         // the list of formulas) belongs to no formula.

@@ -511,4 +511,35 @@ std::string checker::units_in(std::uint32_t root) const {
     return out;
 }
 
+// "D_omm*(1 - ν^2)/(E_s*t_w)" with the diameter in mm and the wall in in: symbols of one
+// dimension declared in units of different sizes meet in one product, so a term that holds
+// them is more likely the one left unconverted than a term of one symbol beside it.
+bool checker::mixes_units_of_one_kind(std::uint32_t root) const {
+    std::array<const symbol_entry*, 8> seen{};
+    std::size_t count = 0;
+    std::vector<std::uint32_t> stack{root};
+    while (!stack.empty() && count < seen.size()) {
+        const syntax::expr_node& n = file_.nodes[stack.back()];
+        stack.pop_back();
+        if (n.kind == expr_kind::symbol) {
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e == nullptr || !e->compact_dim || e->compact_dim->is_dimensionless() ||
+                e->offset_unit != nullptr)
+                continue;
+            for (std::size_t i = 0; i < count; ++i)
+                if (*seen[i]->compact_dim == *e->compact_dim &&
+                    std::abs(seen[i]->si_factor / e->si_factor - 1.0) > 1e-9)
+                    return true;
+            seen[count++] = e;
+        } else if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide ||
+                   n.kind == expr_kind::group || n.kind == expr_kind::power ||
+                   n.kind == expr_kind::negate) {
+            stack.push_back(n.lhs);
+            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide)
+                stack.push_back(n.rhs);
+        }
+    }
+    return false;
+}
+
 } // namespace plumb::formula_check

@@ -231,7 +231,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     // the one off, whichever came first; and beside a bare number ("f*L/d_mm + 4") the
     // term with units, since the number is the formula's own.
     // In a dimensionless sum ("ε/(3.7*D) + 5.74/Re^0.9" with ε in mm and D in m), the
-    // term whose units do not cancel is the one named, beside one whose units do.
+    // term whose units do not cancel is the one named, beside one whose units do; in any
+    // sum of two, the term that mixes units of one kind (mm over in) beside one that does not.
     const auto cancels = [&](std::size_t i) {
         return std::abs(apparent_scale(parts[i]) - 1.0) < 1e-12;
     };
@@ -240,7 +241,9 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
           !holds_percentage(ops[index[r.odd]].node)) ||
          (ops[index[r.odd]].type.numeric && !ops[index[r.reference]].type.numeric) ||
          (dimensionless && cancels(r.odd) && !cancels(r.reference) &&
-          !holds_percentage(ops[index[r.reference]].node))))
+          !holds_percentage(ops[index[r.reference]].node)) ||
+         (!mixes_units_of_one_kind(ops[index[r.odd]].node) &&
+          mixes_units_of_one_kind(ops[index[r.reference]].node))))
         std::swap(r.odd, r.reference);
     // "D_drum/d_r >= 18" with the drum in m and the rope in mm: the bare number is the
     // code's limit, and the ratio beside it is what to convert.
