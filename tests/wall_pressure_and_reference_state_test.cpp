@@ -417,6 +417,26 @@ TEST_CASE("an atmosphere typed as a number that is not the site's declared barom
     passes(meter, {"p_f = p_g + p_b"});
 }
 
+// A scrubber at a site whose barometer the file declares at 13.5 psia (about 700 m in the
+// standard atmosphere, from memory): a gauge reading in barg set equal to an absolute one is
+// told to add that barometer in bar, 13.5 × 0.0689476 = 0.930792 (NIST SP 811 (2008), B.8:
+// 1 psi = 6894.757 Pa), not the sea level's 1.01325. A deaerator's 100*p_da, in kPa from barg,
+// beside an absolute vapour pressure is told the site's 0.995 bar as 99.5 kPa.
+TEST_CASE("a gauge reading's advice names the site's declared barometer in the reading's unit") {
+    const std::string scrubber = "p_b : psia = 13.5 \"site barometric pressure\"\n"
+                                 "p_a : psia\np_barg : barg\n";
+    const auto r = run(scrubber, "p_barg = p_a/14.504");
+    const plumb::diagnostic& d = first_under(r, plumb::rules::offset_scale);
+    CHECK(plumb::test::says(d, "write (p_barg + 0.930792), 'p_b' in bar"));
+    CHECK(!plumb::test::says(d, "1.01325"));
+    const std::string deaerator = "p_b : bar \"site barometric pressure, 0.995 bar\"\n"
+                                  "p_da : barg\np_v : kPa\nΔp : kPa\n";
+    const auto n = run(deaerator, "Δp = 100*p_da - p_v");
+    CHECK(plumb::test::says(first_under(n, plumb::rules::offset_scale),
+                            "write (100*p_da + 99.5), 'p_b' in kPa"));
+    passes(deaerator, {"Δp = 100*(p_da + p_b) - p_v"});
+}
+
 // A gauge reading plus the barometer is absolute (common practice); the atmosphere added
 // again as a number counts it twice, 101 kPa high. This passed without a word.
 TEST_CASE("a gauge reading plus the barometer and the atmosphere again") {

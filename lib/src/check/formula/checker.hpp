@@ -805,6 +805,7 @@ class checker {
     struct site_barometer {
         std::string_view name;
         double pascals = 0.0;
+        double unit = 1.0; // SI value of its declared unit
     };
     site_barometer site_barometer_;
     bool site_barometer_searched_ = false;
@@ -998,6 +999,8 @@ class checker {
                                         const site_barometer& site, double unit);
     std::optional<std::string_view> barometer_in_unit(double unit) const;
     std::string atmosphere_in(double unit, std::string_view unit_name) const;
+    std::optional<std::string> site_atmosphere_advice(std::string_view reading, double unit,
+                                                      std::string_view unit_name);
     const site_barometer* declared_site_barometer();
     double declared_number(const syntax::declaration& decl) const;
     void warn_sea_level_atmosphere_at_site(std::span<const operand> terms, double unit);
@@ -1190,6 +1193,8 @@ class checker {
     void report_unbalanced_readings(const operand& side);
     bool report_scale_zero_beside_difference(std::span<const operand> sides);
     std::string units_in(std::uint32_t root) const;
+    std::pair<double, std::string> unit_of_numbers(const typed_term& t,
+                                                   const unit_definition& scale) const;
     bool mixes_units_of_one_kind(std::uint32_t root) const;
     template <typename F> void visit_nodes(F&& f) const {
         // An expression on its own (expression_dimension: a query, or a side's dimension for

@@ -38,7 +38,7 @@ const checker::site_barometer* checker::declared_site_barometer() {
         if (!(pascals >= highest_site_atmosphere * standard_atmosphere &&
               pascals <= 0.99 * standard_atmosphere))
             continue;
-        site_barometer_ = {name, pascals};
+        site_barometer_ = {name, pascals, decl.kind.si_factor};
         return &site_barometer_;
     }
     return nullptr;
@@ -139,6 +139,31 @@ std::string checker::atmosphere_in(double unit, std::string_view unit_name) cons
         if (const auto name = barometer_in_unit(unit))
             return std::string(*name);
     return fmt::format("the atmospheric pressure in {}", unit_name);
+}
+
+// "p_barg = p_a/14.504" where the file declares its site's barometer, 13.5 psia: what makes
+// the reading absolute is that barometer, in the reading's unit, never the sea level's 1.01325.
+// Empty where the file declares no site barometer.
+std::optional<std::string> checker::site_atmosphere_advice(std::string_view reading, double unit,
+                                                           std::string_view unit_name) {
+    const site_barometer* site = declared_site_barometer();
+    if (site == nullptr)
+        return std::nullopt;
+    if (std::isfinite(unit)) {
+        std::optional<std::string_view> name = barometer_in_unit(unit);
+        if (!name && std::abs(site->unit / unit - 1.0) < 1e-9)
+            name = site->name;
+        if (name)
+            return fmt::format("a gauge reading plus the site's barometer is absolute: write "
+                               "({} + {})",
+                               reading, *name);
+    }
+    if (!std::isfinite(unit) || unit <= 0.0)
+        return fmt::format("a gauge reading plus the site's barometer '{}' is absolute",
+                           site->name);
+    return fmt::format("a gauge reading plus the site's barometer is absolute: write ({} + {}), "
+                       "'{}' in {}",
+                       reading, format_factor(site->pascals / unit), site->name, unit_name);
 }
 
 // "p_bk : kPa "site barometric pressure"" beside "p_bar : inHg ...": the barometer the
@@ -393,12 +418,15 @@ void checker::report_mixed_scales(std::span<const operand> terms, double differe
                          "this way round it is its negative",
                          quote(other->node), quote(on_offset->node), unit.symbol),
              {}});
+    const auto [numbers_unit, numbers_unit_name] = unit_of_numbers(on_offset->type, unit);
     d.notes.push_back(
         {temperature
              ? fmt::format("convert first: a {} reading plus {:g} is in K", unit.symbol,
                            unit.offset / unit.factor)
-             : std::string("convert first: a gauge reading plus the atmospheric pressure is "
-                           "absolute"),
+             : site_atmosphere_advice(display_text(file_.nodes[on_offset->node].range),
+                                      numbers_unit, numbers_unit_name)
+                   .value_or("convert first: a gauge reading plus the atmospheric pressure is "
+                             "absolute"),
          {}});
 }
 

@@ -216,22 +216,9 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             const std::string reading =
                 has_number ? std::string("the reading") : display_text(file_.nodes[off.node].range);
             std::string zero = format_factor(unit->offset / unit->factor);
-            std::string absolute_unit = absolute_symbol(*unit);
-            // "p_kPa = 6.895*p_g": the expression's numbers are in kPa by then, and so
-            // must the atmosphere added to them be.
-            // Its numbers as rounded conversions too (14.5 psi per bar is 14.5038).
-            double written_unit = off.type.scale;
-            for (std::uint32_t l = 0; l < off.type.literal_count; ++l) {
-                const scale_literal& number = literals_[off.type.literal_begin + l];
-                written_unit /= std::pow(number.value, number.exponent);
-            }
-            if (!temperature && std::isfinite(written_unit) &&
-                std::abs(written_unit / unit->factor - 1.0) > 1e-3)
-                for (const auto& u : pressure_units)
-                    if (std::abs(written_unit / u.pascals - 1.0) < 5e-3) {
-                        zero = format_factor(standard_atmosphere / u.pascals);
-                        absolute_unit = std::string(u.name);
-                    }
+            const auto [written_unit, absolute_unit] = unit_of_numbers(off.type, *unit);
+            if (!temperature && absolute_unit != absolute_symbol(*unit))
+                zero = format_factor(standard_atmosphere / written_unit);
             // A degree the size of the kelvin reads in kelvins from its zero; the °F's in
             // degrees Rankine, which are 1.8 to the kelvin.
             const bool kelvin_sized = std::abs(unit->factor - 1.0) < 1e-12;
@@ -245,11 +232,13 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
                                          "that divided by 1.8 in kelvins: write ({} + {}) "
                                          "beside °R, ({} + {})/1.8 beside K",
                                          unit->symbol, zero, reading, zero, reading, zero))
-                    : fmt::format("a gauge reading plus the atmospheric pressure is "
-                                  "absolute: write ({} + {}), or ({} + {}) at sea level, "
-                                  "the standard atmosphere in {}",
-                                  reading, atmosphere_in(written_unit, absolute_unit), reading,
-                                  zero, absolute_unit);
+                    : site_atmosphere_advice(reading, written_unit, absolute_unit)
+                          .value_or(fmt::format(
+                              "a gauge reading plus the atmospheric pressure is absolute: "
+                              "write ({} + {}), or ({} + {}) at sea level, the standard "
+                              "atmosphere in {}",
+                              reading, atmosphere_in(written_unit, absolute_unit), reading, zero,
+                              absolute_unit));
             // "Δθ_h = θ_h" with Δθ_h in K "rise above ambient": the kelvins are a rise's,
             // and a reading made absolute would only hide the slip.
             if (temperature && file_.nodes[other.node].kind == expr_kind::symbol) {
@@ -467,6 +456,25 @@ bool checker::report_scale_zero_beside_difference(std::span<const operand> sides
         }
     }
     return false;
+}
+
+// "p_kPa = 6.895*p_g": the unit the numbers of a gauge reading's expression are in by then
+// (kPa), which an atmosphere added to them must be in too, with its name; its numbers are
+// taken as rounded conversions (14.5 psi per bar is 14.5038). The scale's own unit where they
+// convert to none of the pressure units calcs write.
+std::pair<double, std::string> checker::unit_of_numbers(const typed_term& t,
+                                                        const unit_definition& scale) const {
+    double written_unit = t.scale;
+    for (std::uint32_t l = 0; l < t.literal_count; ++l) {
+        const scale_literal& number = literals_[t.literal_begin + l];
+        written_unit /= std::pow(number.value, number.exponent);
+    }
+    if (std::isfinite(written_unit) && std::abs(written_unit / scale.factor - 1.0) > 1e-3 &&
+        scale.dim() == pressure_dimension().expand())
+        for (const auto& u : pressure_units)
+            if (std::abs(written_unit / u.pascals - 1.0) < 5e-3)
+                return {u.pascals, std::string(u.name)};
+    return {written_unit, absolute_symbol(scale)};
 }
 
 // "'D' is in mm, 'Q' in L/s": the symbols under a node declared in non-coherent units.
