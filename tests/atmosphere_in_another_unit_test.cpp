@@ -6,10 +6,12 @@
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
 #include "test_support.hpp"
+#include "workbook_support.hpp"
 
 #include <doctest/doctest.h>
 
 #include <string>
+#include <vector>
 
 namespace {
 
@@ -150,4 +152,21 @@ TEST_CASE("a Fahrenheit conversion run the wrong way names the right form") {
     REQUIRE(count_of(other_way, plumb::rules::offset_scale) == 1);
     CHECK(says(first_under(other_way, plumb::rules::offset_scale), "T_3 = (T_F - 32)/1.8"));
     passes(d, {"T_F = 1.8*T_3 + 32", "T_3 = (T_F - 32)/1.8"});
+}
+
+// A nitrogen buffer tank's sheet: the header pressure in psig under psia, with bar's 1.01325
+// added (1 atm = 1.01325 bar = 14.6959 psi, NIST SP 811 (2008), B.8). The cell is an
+// offset-scale error, as before, and now says which unit its number is the atmosphere in;
+// the right cell, 14.696 added, passes.
+TEST_CASE("sheets: the atmosphere added in bar to a psig cell under psia") {
+    const std::string sheet =
+        "<worksheet><sheetData>" + plumb::test::value_and_unit_row(2, "95", "psig") +
+        plumb::test::value_and_unit_row(3, "=B2+1.01325", "psia") +
+        plumb::test::value_and_unit_row(4, "=B2+14.696", "psia") + "</sheetData></worksheet>";
+    const auto r = plumb::test::check_one_sheet("N2", sheet);
+    CHECK(plumb::test::cell_findings(r) == std::vector<std::string>{"N2!B3 offset-scale"});
+    REQUIRE(!r.diagnostics.empty());
+    CHECK(says(r.diagnostics.front(),
+               "1.01325 is the atmosphere in bar, not in psia, the cell's unit: in psia it is "
+               "14.6959"));
 }

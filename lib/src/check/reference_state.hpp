@@ -6,6 +6,7 @@
 
 #include "units/compact_dimension.hpp"
 
+#include <array>
 #include <string_view>
 
 namespace plumb {
@@ -19,6 +20,22 @@ struct reference_state {
     double least = 0.0;       // SI
     double greatest = 0.0;    // SI
 };
+
+// The pressure units calcs write the atmosphere in, for naming the one a bare number was
+// written in (NIST SP 811 (2008), B.8).
+struct pressure_unit {
+    std::string_view name;
+    double pascals;
+};
+constexpr std::array<pressure_unit, 7> pressure_units{{
+    {"Pa", 1.0},
+    {"kPa", 1e3},
+    {"MPa", 1e6},
+    {"bar", 1e5},
+    {"psi", 6894.757293168361},
+    {"mmHg", 133.322387415},
+    {"inHg", 3386.388640341},
+}};
 
 // The reference state that `written` (the number as printed, with value `value`) stands for
 // when it is in the same unit as a reading of dimension `dim` whose unit is `unit_scale` SI

@@ -9,6 +9,8 @@
 #include "check/constant_in_other_units.hpp"
 #include "check/formula_checker.hpp"
 #include "check/gravity_number.hpp"
+#include "check/number_reading.hpp"
+#include "check/reference_state.hpp"
 #include "check/scale_match.hpp"
 #include "plumb/rules.hpp"
 #include "sheets/a1_front_end.hpp"
@@ -996,6 +998,37 @@ class workbook_checker {
              {}});
     }
 
+    // "=C37+1.01325" under psia with C37 in psig: the atmosphere was added, but in bar; in the
+    // cell's unit it is another number (14.696 psi).
+    void note_atmosphere_in_other_unit(diagnostic& d, const syntax::formula& formula,
+                                       const written_unit& cell_unit) const {
+        const std::uint32_t root =
+            syntax::inside_brackets(lowered_.tree, lowered_.tree.sides[formula.first_side].root);
+        const syntax::expr_node& sum = lowered_.tree.nodes[root];
+        if (sum.kind != syntax::expr_kind::add)
+            return;
+        std::uint32_t number = syntax::no_index;
+        for (const std::uint32_t side : {sum.lhs, sum.rhs})
+            if (lowered_.tree.nodes[side].kind == syntax::expr_kind::number)
+                number = side;
+        if (number == syntax::no_index)
+            return;
+        const std::string_view written = listing_->text(lowered_.tree.nodes[number].range);
+        const double value = read_number(written).literal.value;
+        const compact_dimension pressure(cell_unit.dim);
+        for (const auto& u : pressure_units)
+            if (std::abs(cell_unit.scale / u.pascals - 1.0) > 5e-3 &&
+                read_reference_state(pressure, value, written, u.pascals) != nullptr) {
+                d.notes.push_back(
+                    {fmt::format("{} is the atmosphere in {}, not in {}, the cell's unit: in {} "
+                                 "it is {}",
+                                 written, u.name, cell_unit.text, cell_unit.text,
+                                 format_factor(101325.0 / cell_unit.scale)),
+                     {}});
+                return;
+            }
+    }
+
     void compare_with_written(const formula_cell& f, const syntax::formula& formula,
                               value_type computed, const cell_unit& written) {
         // "=55" or "=IF(C18<=55,55,75)" beside kW (a motor size picked from a list): numbers
@@ -1085,6 +1118,8 @@ class workbook_checker {
                                            "pressure, or write the unit the "
                                            "formula gives"),
                  {}});
+            if (!temperature)
+                note_atmosphere_in_other_unit(d, formula, written.unit);
             add_input_notes(d, f);
             return;
         }

@@ -154,22 +154,8 @@ inline std::string describe(const compact_dimension& d) {
     return describe(d.expand());
 }
 
-// The pressure units calcs write the atmosphere in, for naming the one a bare number was
-// written in (NIST SP 811 (2008), B.8), and the standard atmosphere itself, 101325 Pa (SI
-// Brochure 9th ed., Table 8).
-struct pressure_unit {
-    std::string_view name;
-    double pascals;
-};
-constexpr std::array<pressure_unit, 7> pressure_units{{
-    {"Pa", 1.0},
-    {"kPa", 1e3},
-    {"MPa", 1e6},
-    {"bar", 1e5},
-    {"psi", 6894.757293168361},
-    {"mmHg", 133.322387415},
-    {"inHg", 3386.388640341},
-}};
+// The standard atmosphere, 101325 Pa (SI Brochure 9th ed., Table 8); the units calcs write
+// it in are pressure_units (reference_state.hpp).
 constexpr double standard_atmosphere = 101325.0;
 // How far two reference temperatures may differ and still count as one: 15 °C against 60 °F,
 // and the gas trade's 14.73 psia beside 14.696, are 0.2 % apart (from memory).
