@@ -272,6 +272,25 @@ TEST_CASE("offset scales: gauge to absolute with a rounded factor and the atmosp
     }
 }
 
+// A consolidation coefficient from the lab in cm²/s turned into m²/yr with 3.154e7 s/yr
+// (365.25 d × 86400 s, rounded; NIST SP 811 (2008), B.8) but without the 10⁻⁴ of cm² to m²:
+// the advice names the 10⁴ left out, with the 10001.3 the rounded number makes of it beside
+// it, rather than 10001.3 alone. A power of ten the numbers give exactly stays as it was.
+TEST_CASE("unit scale: a factor within the rounding of the numbers written is named as its power of ten") {
+    const std::string decl = "c_v : m^2/yr\nc_lab : cm^2/s\nQ_kW : kW\nQ_btu : Btu/h\n";
+    const auto r = plumb::check_text("cv.plumb", decl + "c_v = 3.154e7*c_lab\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(mentions(*scales[0], "by 10000 (10001.3 with the rounded numbers as written)"));
+    const auto right = plumb::check_text("cv.plumb", decl + "c_v = 3.154e7*c_lab/1e4\n");
+    CHECK(findings(right, plumb::rules::unit_scale).empty());
+    // 3.412 Btu/h per W (NIST SP 811 (2008), B.8: 1 Btu_IT/h = 0.2930711 W) applied to kW.
+    const auto btu = plumb::check_text("cv.plumb", decl + "Q_btu = 3.412*Q_kW\n");
+    REQUIRE(findings(btu, plumb::rules::unit_scale).size() == 1);
+    CHECK(mentions(*findings(btu, plumb::rules::unit_scale)[0],
+                   "by 1000 (1000.04 with the rounded numbers as written)"));
+}
+
 // The "counts N times" factor takes in the numbers already written where they are part of a
 // clean conversion, so that following it fixes the formula: f = M·12/S with M in kip·ft and S
 // in in³ is in ksi, 1000 psi (NIST SP 811 (2008), B.8: kip = 1000 lbf, ft = 12 in); 3.03 hp

@@ -480,6 +480,17 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                            {}});
         return false;
     }
+    // "c_v = 3.154e7*c_v_lab" (cm²/s into m²/yr): 10001.3 is the 10⁴ of cm² to m² seen
+    // through the rounded 3.154e7 s/yr; the power of ten is what the engineer left out.
+    double rounding = 0.0;
+    for (const std::size_t side : {r.odd, r.reference})
+        for (const scale_literal& l : parts[side].literals)
+            rounding += l.tolerance * std::abs(l.exponent);
+    const double advised = multiply ? 1.0 / ratio : ratio;
+    if (rounding > 0.0 && near_power_of_ten(advised, rounding))
+        if (std::string power = format_factor(std::pow(10.0, std::round(std::log10(advised))));
+            power != factor)
+            factor = fmt::format("{} ({} with the rounded numbers as written)", power, factor);
     d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
                                    "write the conversion factor into the formula)",
                                    multiply ? "multiply" : "divide", quote(op.node), factor),
