@@ -927,13 +927,15 @@ TEST_CASE("a frequency in Hz over a diameter is no rim speed") {
 
 // Water's specific heat typed bare on a mass flow, Φ = m·4.19·ΔT/3600 in kW from kg/h (4.180
 // to 4.220 kJ/(kg·K) between 0 and 30 °C; IAPWS-95 values as tabulated in the CRC Handbook,
-// from memory): a note, as the 4.19 on a volume flow is. Left out, or without the 3600, the
-// sides still disagree.
+// from memory): a note, as the 4.19 on a volume flow is. Left out, the sides still disagree;
+// without the 3600 the 4.19 is still read, and the warning names the hour left out.
 TEST_CASE("water's specific heat typed as a number on a mass flow") {
     const std::string d = "m : kg/h\nm_s : kg/s\nΦ : kW\nT_1, T_2 : degC\n";
     passes_with_one_note(d, {"Φ = m*4.19*(T_1 - T_2)/3600", "Φ = m_s*4.186*(T_1 - T_2)"},
                          plumb::rules::trade_constant);
-    CHECK(count_of(run(d + "Φ = m*4.19*(T_1 - T_2)\n"), plumb::rules::side_mismatch) == 1);
+    const auto hour = run(d + "Φ = m*4.19*(T_1 - T_2)\n");
+    CHECK(count_of(hour, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(hour, plumb::rules::unit_scale), "counts 3600 times"));
     CHECK(count_of(run(d + "Φ = m*(T_1 - T_2)/3600\n"), plumb::rules::side_mismatch) == 1);
     CHECK(count_of(run(d + "Φ = m*2.1*(T_1 - T_2)/3600\n"), plumb::rules::side_mismatch) == 1);
 }
@@ -1006,6 +1008,29 @@ TEST_CASE("the gas constants of nitrogen, oxygen, carbon dioxide, methane and hy
     CHECK(count_of(run(decl + "m = p_g*V*100000/(296.8*T)\n"), plumb::rules::offset_scale) == 1);
     fails_with(decl, {"m = p_a*V*100000/T"}, plumb::rules::side_mismatch);
     CHECK(count_of(run(decl + "ρ = p/(296.8*T)\n"), plumb::rules::unit_scale) == 1);
+}
+
+// A property typed as a number beside a formula that leaves out the clock's or the grain's
+// factor: a pump's ρ·9.81·Q·H/1000 in kW with Q in m³/h (3600 s/h, SI Brochure 9th ed.,
+// Table 8), a humidifier's 4.5·cfm·ΔW in lb/h with ΔW in gr/lb (7000 gr/lb, NIST SP 811
+// (2008), B.8; 4.5 = 0.075 lb/ft³ × 60 min/h, common practice). The number is read, and the
+// warning names the factor; the slip was reported as a dimension (momentum, a missing density).
+// A kW put in the 1.08 formula, which wants Btu/h (3412 missing), is no hour left out: no unit
+// of the formula counts hours, and the sides still differ in dimension.
+TEST_CASE("a number read as a property where the formula leaves out 3600 or 7000") {
+    const std::string pump = "ρ : kg/m^3\nQ : m^3/h\nH : m\nP : kW\n";
+    const auto r = run(pump + "P = ρ*9.81*Q*H/1000\n");
+    CHECK(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::unit_scale), "3600"));
+    CHECK(count_of(r, plumb::rules::side_mismatch) == 0);
+    passes_with_one_note(pump, {"P = ρ*9.81*Q*H/3.6e6"}, plumb::rules::gravity_number);
+    const std::string air = "Q_cfm : cfm\nW_1, W_2 : gr/lb\nm_lb : lb/h\nq : kW\nΔT : Δ°F\n";
+    const auto g = run(air + "m_lb = 4.5*Q_cfm*(W_1 - W_2)\n");
+    CHECK(count_of(g, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(g, plumb::rules::unit_scale), "divide"));
+    CHECK(plumb::test::says(plumb::test::first_under(g, plumb::rules::unit_scale), "by 7000"));
+    passes_with_one_note(air, {"m_lb = 4.5*Q_cfm*(W_1 - W_2)/7000"}, plumb::rules::trade_constant);
+    fails_with(air, {"Q_cfm = q/(1.08*ΔT)"}, plumb::rules::side_mismatch);
 }
 
 // The hours of a year, 8760 (NIST SP 811 (2008), B.8: 1 a = 365 d), are a time and nothing

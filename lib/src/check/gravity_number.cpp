@@ -5,6 +5,7 @@
 
 #include <algorithm>
 #include <array>
+#include <cctype>
 #include <cmath>
 #include <cstdlib>
 #include <exception>
@@ -17,6 +18,17 @@ namespace {
 // 3rd CGPM (1901): g_n = 9.80665 m/s², exact by definition (SI Brochure 9th ed.).
 constexpr double standard_gravity = 9.80665;
 constexpr double closest_reading = 0.005;
+// The factors a calc leaves out beside a property it types as a number, besides the powers of
+// ten: the minute, the hour and the day in seconds (SI Brochure 9th ed., Table 8), and the
+// 7000 grains of a pound (NIST SP 811 (2008), B.8) of the air trade's humidity ratios.
+struct factor_left_out {
+    double factor;
+    unsigned units; // the clock_unit bits, any of which allows it
+};
+constexpr std::array<factor_left_out, 4> unit_factors_left_out{{{60.0, clock_minute | clock_hour},
+                                                                {3600.0, clock_hour},
+                                                                {86400.0, clock_day},
+                                                                {7000.0, clock_grain}}};
 // The other numbers of the term may convert units (a /1000 to kPa); every subset of them is
 // tried, so the count is kept small.
 constexpr std::size_t most_numbers = 8;
@@ -436,7 +448,8 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                                                    std::span<const scale_literal> literals,
                                                    std::span<const std::string_view> texts,
                                                    const dimension& lacking, bool flipped_too,
-                                                   carried_quantity::term_kind term) {
+                                                   carried_quantity::term_kind term,
+                                                   unsigned clock_units) {
     if (literals.empty() || literals.size() > most_numbers || texts.size() != literals.size() ||
         !(term_scale > 0) || !(reference_scale > 0) || !std::isfinite(term_scale) ||
         !std::isfinite(reference_scale))
@@ -487,11 +500,14 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // The conversions C among the other numbers: written_R·s_R =
                     // written_E·s_E·(Q/ℓ)^x/C gives ℓ = Q·(s_E / (s_R·C))^(1/x).
                     double conversions = 1.0;
+                    bool powers_of_ten_only = true;
                     for (std::size_t j = 0, bit = 0; j < literals.size(); ++j) {
                         if (j == at)
                             continue;
-                        if ((mask >> bit++) & 1U)
+                        if ((mask >> bit++) & 1U) {
                             conversions *= std::pow(literals[j].value, literals[j].exponent);
+                            powers_of_ten_only = powers_of_ten_only && literals[j].power_of_ten;
+                        }
                     }
                     const double in_units =
                         std::pow(term_scale / (reference_scale * conversions), 1.0 / x);
@@ -502,9 +518,27 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // The quantity in a unit a power of ten away (9.81 beside kPa where Pa was
                     // meant): read it all the same, so that the scale rule names the 1000
                     // rather than a missing g.
-                    const double shift =
-                        std::round(std::log10(std::sqrt(low * high) / number.value));
-                    const bool shifted = shift != 0.0 && std::abs(shift) <= 9.0;
+                    const double apart = std::sqrt(low * high) / number.value;
+                    const double shift = std::round(std::log10(apart));
+                    // Or with a factor of the clock or the grain left out (9.81 in
+                    // ρ*9.81*Q*H/1000 with Q in m³/h, 4.5 in 4.5*cfm*ΔW with ΔW in gr/lb):
+                    // the scale rule then names the 3600 or the 7000. Only where the formula
+                    // counts in that unit (a cfm with 3600 is some other slip), with no other
+                    // numbers than powers of ten taken as conversions, and from a number
+                    // printed to 2 % or finer: a 1 or a 2 fits some quantity with almost any
+                    // factor, and so do numbers taken with a 3600 or a 1.8.
+                    double left_out = std::abs(shift) <= 9.0 ? std::pow(10.0, shift) : 1.0;
+                    if (clock_units != 0 && powers_of_ten_only && !flipped &&
+                        half_unit <= 0.02 * number.value)
+                        for (const factor_left_out& factor : unit_factors_left_out) {
+                            if ((factor.units & clock_units) == 0)
+                                continue;
+                            for (const double f : {factor.factor, 1.0 / factor.factor})
+                                if (std::abs(std::log(apart / f)) <
+                                    std::abs(std::log(apart / left_out)))
+                                    left_out = f;
+                        }
+                    const bool shifted = left_out != 1.0;
                     if (shifted && flipped)
                         continue; // two slips at once is no reading, only a guess
                     // The round 10 kN/m³ only as typed, alone and as it is: never a 1000 or a
@@ -512,7 +546,7 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     if (&q == &quantities()[round_water_row] &&
                         (shifted || flipped || reciprocal || mask != 0 || texts[at] != "10"))
                         continue;
-                    const double power_of_ten = shifted ? std::pow(10.0, shift) : 1.0;
+                    const double power_of_ten = left_out;
                     low /= power_of_ten;
                     high /= power_of_ten;
                     const double nearest = std::clamp(number.value, low, high);
@@ -551,6 +585,41 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
         }
     }
     return best;
+}
+
+unsigned clock_units_in(std::string_view unit_text) {
+    static constexpr std::array<std::string_view, 13> minute{
+        "min", "cfm", "scfm", "acfm", "icfm", "CFM", "SCFM", "gpm", "GPM", "fpm", "sfpm", "rpm",
+        "lpm"};
+    static constexpr std::array<std::string_view, 12> hour{
+        "h", "hr", "hrs", "gph", "mph", "kph", "scfh", "cfh", "tph", "MBH", "Btuh", "BTUH"};
+    static constexpr std::array<std::string_view, 16> day{
+        "d",    "day",  "days", "MGD",  "mgd",    "gpd",    "GPD",   "bpd",
+        "BPD",  "BOPD", "BWPD", "scfd", "MMscfd", "MMSCFD", "Mscfd", "MLD"};
+    const auto in = [](const auto& list, std::string_view token) {
+        return std::find(list.begin(), list.end(), token) != list.end();
+    };
+    unsigned found = 0;
+    std::size_t i = 0;
+    while (i < unit_text.size()) {
+        if (!std::isalpha(static_cast<unsigned char>(unit_text[i]))) {
+            ++i;
+            continue;
+        }
+        const std::size_t begin = i;
+        while (i < unit_text.size() && std::isalpha(static_cast<unsigned char>(unit_text[i])))
+            ++i;
+        const std::string_view token = unit_text.substr(begin, i - begin);
+        if (in(minute, token))
+            found |= clock_minute;
+        if (in(hour, token) || token.ends_with("Wh") || token.ends_with("VAh"))
+            found |= clock_hour;
+        if (in(day, token))
+            found |= clock_day;
+        if (token == "gr")
+            found |= clock_grain;
+    }
+    return found;
 }
 
 } // namespace plumb

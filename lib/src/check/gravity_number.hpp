@@ -98,10 +98,22 @@ std::string molar_volume_advice(const molar_volume_mismatch& off);
 // numbers of the term may be unit conversions (a /1000 to kPa); every subset of them is tried.
 // With `flipped_too`, a number that fits only the other way round (Q*H*3960 for Q*H/3960) is
 // read as well, marked `flipped`, for the caller to report.
+//
+// `clock_units` (from clock_units_in) names the units of time and the grain the formula's
+// symbols or cells are written in: where one of their factors (60, 3600, 86400, 7000) stands
+// between the number and the quantity, the number is read all the same, and the scale rule
+// names the factor left out (9.81 in ρ*9.81*Q*H/1000 with Q in m³/h).
 std::optional<gravity_reading> read_gravity_number(
     double term_scale, double reference_scale, std::span<const scale_literal> literals,
     std::span<const std::string_view> texts, const dimension& lacking, bool flipped_too = false,
-    carried_quantity::term_kind term = carried_quantity::term_kind::any);
+    carried_quantity::term_kind term = carried_quantity::term_kind::any,
+    unsigned clock_units = 0);
+
+// The units of time and the grain a unit as written counts in, as bits: clock_minute ("min",
+// "cfm", "gpm"), clock_hour ("h", "kWh", "gph"), clock_day ("d", "MGD", "bpd"), clock_grain
+// ("gr").
+enum clock_unit : unsigned { clock_minute = 1, clock_hour = 2, clock_day = 4, clock_grain = 8 };
+unsigned clock_units_in(std::string_view unit_text);
 
 // The note's words for a reading of the number written `written`.
 std::string gravity_message(std::string_view written, const gravity_reading& reading);

@@ -908,8 +908,8 @@ class workbook_checker {
     // check/gravity_number.hpp). On a reading, the formula's value takes the cell's dimension,
     // the number leaves the factors, and the note is made; the scale is then compared as for
     // any formula.
-    bool read_gravity_in_cell(value_type& computed, const cell_unit& written,
-                              std::vector<scale_literal>& factors) {
+    bool read_gravity_in_cell(const formula_cell& f, value_type& computed,
+                              const cell_unit& written, std::vector<scale_literal>& factors) {
         if (factors.empty() || factors.size() > 8)
             return false;
         dimension lacking;
@@ -921,8 +921,15 @@ class workbook_checker {
         std::array<std::string_view, 8> texts{};
         for (std::size_t k = 0; k < factors.size(); ++k)
             texts[k] = listing_->text(lowered_.tree.nodes[factors[k].node].range);
-        const auto reading = read_gravity_number(computed.scale, written.unit.scale, factors,
-                                                 {texts.data(), factors.size()}, lacking);
+        unsigned clock_units = clock_units_in(written.unit.text);
+        for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i)
+            clock_units |= clock_units_in(
+                lowered_.tree
+                    .references[lowered_.references[f.lowered.first_reference + i].reference]
+                    .unit_text);
+        const auto reading = read_gravity_number(
+            computed.scale, written.unit.scale, factors, {texts.data(), factors.size()}, lacking,
+            false, carried_quantity::term_kind::any, clock_units);
         if (!reading)
             return false;
         const std::uint32_t node = factors[reading->literal].node;
@@ -1040,7 +1047,7 @@ class workbook_checker {
         std::vector<scale_literal> factors;
         top_factors(lowered_.tree.sides[formula.first_side].root, 1.0, factors);
         if (!(computed.dim == written.unit.dim))
-            read_gravity_in_cell(computed, written, factors);
+            read_gravity_in_cell(f, computed, written, factors);
         if (!(computed.dim == written.unit.dim)) {
             diagnostic& d =
                 report(severity::error, rules::result_unit,

@@ -1179,6 +1179,7 @@ class checker {
     void report_unbalanced_readings(const operand& side);
     bool report_scale_zero_beside_difference(std::span<const operand> sides);
     std::string units_in(std::uint32_t root) const;
+    unsigned clock_units_of_formula() const;
     std::pair<double, std::string> unit_of_numbers(const typed_term& t,
                                                    const unit_definition& scale) const;
     bool mixes_units_of_one_kind(std::uint32_t root) const;

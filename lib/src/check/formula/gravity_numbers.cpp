@@ -223,7 +223,7 @@ bool checker::read_gravity_numbers(std::size_t base, const agreement& a, std::ui
             return false;
         const auto reading =
             read_gravity_number(t.scale, reference_scale, numbers, {texts.data(), numbers.size()},
-                                lacking, true, kind_of(t));
+                                lacking, true, kind_of(t), clock_units_of_formula());
         // A bare number standing for the whole quantity is that quantity in the others'
         // unit or nothing: "ρ_p - 1" beside kg/m³ is no water density a thousand apart.
         if (!reading || (t.numeric && reading->shifted))
@@ -299,6 +299,21 @@ bool checker::read_gravity_numbers(std::size_t base, const agreement& a, std::ui
                                                       reading, written, node);
     }
     return true;
+}
+
+// The units of time and the grain the symbols of the formula being checked are declared in
+// (see clock_units_in).
+unsigned checker::clock_units_of_formula() const {
+    unsigned found = 0;
+    if (current_ == nullptr)
+        return found;
+    syntax::search_formula(file_, *current_, [&](std::uint32_t, const syntax::expr_node& n) {
+        if (n.kind == expr_kind::symbol)
+            if (const symbol_entry* e = symbols_.find(text(n.range)); e != nullptr)
+                found |= clock_units_in(e->unit_text);
+        return search_step::descend;
+    });
+    return found;
 }
 
 // "H = p*2.31*SG": a liquid's specific weight is its specific gravity times water's, so
