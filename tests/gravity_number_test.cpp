@@ -1033,6 +1033,19 @@ TEST_CASE("a number read as a property where the formula leaves out 3600 or 7000
     fails_with(air, {"Q_cfm = q/(1.08*ΔT)"}, plumb::rules::side_mismatch);
 }
 
+// A pump's head from its discharge gauge, H = p_d·1000/(ρ·9.81) + z_g (kPa to Pa, NIST SP 811
+// (2008), B.8; g as 9.81, common practice): a gauge pressure over ρ·g is a head, in a sum as
+// on its own. Inside the sum the 9.81 was read as g only after the product had reported the
+// gauge reading in a quotient, an error on a correct line. Without the 1000 the sum's terms
+// disagree by it; a gauge over a density alone, with no g, stays an error.
+TEST_CASE("a gauge pressure over a density and a typed g, in a sum with a height") {
+    const std::string d = "p_d : kPag\nρ_l : kg/m^3\nz_g, H_p : m\n";
+    passes_with_one_note(d, {"H_p = p_d*1000/(ρ_l*9.81) + z_g", "H_p = z_g + p_d*1000/(ρ_l*9.81)"},
+                         plumb::rules::gravity_number);
+    CHECK(count_of(run(d + "H_p = p_d/(ρ_l*9.81) + z_g\n"), plumb::rules::unit_scale) == 1);
+    CHECK(problems_in(run(d + "H_p = p_d*1000/ρ_l + z_g\n")) >= 1);
+}
+
 // The hours of a year, 8760 (NIST SP 811 (2008), B.8: 1 a = 365 d), are a time and nothing
 // else: methane destroyed in t/yr from Nm³/h holds methane's density, and 8760 is not read as
 // water's.
