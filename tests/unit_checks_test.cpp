@@ -291,6 +291,22 @@ TEST_CASE("unit scale: a factor within the rounding of the numbers written is na
                    "by 1000 (1000.04 with the rounded numbers as written)"));
 }
 
+// A purlin's midspan deflection δ = 5wL⁴/(384EI) (Roark's Formulas for Stress and Strain,
+// simple span under uniform load, from memory) with w in kN/m, L in mm, E in N/mm² and I in cm⁴
+// needs 10⁴ for cm⁴ to mm⁴ (NIST SP 811 (2008), B.8). Written with 10^3 it is 10 times too
+// large; it passed with a note that read the 10 as 2 × 5, the formula's own 5 taken for a
+// conversion. A power of ten is read as written.
+TEST_CASE("unit scale: a power of ten written out is never read as a folded coefficient") {
+    const std::string decl = "w_s : kN/m\nL_mm : mm\nE : N/mm^2\nI : cm^4\nδ : mm\n";
+    for (const char* slip : {"δ = 5*w_s*L_mm^4/(384*E*I*10^3)", "δ = 5*w_s*L_mm^4/(384*E*I*1000)"}) {
+        CAPTURE(slip);
+        const auto r = plumb::check_text("d.plumb", decl + slip + "\n");
+        CHECK(findings(r, plumb::rules::unit_scale).size() == 1);
+    }
+    const auto right = plumb::check_text("d.plumb", decl + "δ = 5*w_s*L_mm^4/(384*E*I*10^4)\n");
+    CHECK(right.diagnostics.empty());
+}
+
 // The "counts N times" factor takes in the numbers already written where they are part of a
 // clean conversion, so that following it fixes the formula: f = M·12/S with M in kip·ft and S
 // in in³ is in ksi, 1000 psi (NIST SP 811 (2008), B.8: kip = 1000 lbf, ft = 12 in); 3.03 hp

@@ -235,6 +235,11 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
                     }
                     return true;
                 }
+                // A power of ten (10^3, 1000) is a conversion as written, never a folded
+                // constant: δ = 5*w*L^4/(384*E*I*10^3) with 10^4 due read its 10 as 2 × 5,
+                // the deflection's own 5 taken for a conversion, and passed.
+                if (l.power_of_ten)
+                    continue;
                 // Only numbers written to 3 or more digits, as folded factors are (528
                 // too, where whole numbers must otherwise reach 1000).
                 const bool whole_two_digits =
