@@ -397,6 +397,32 @@ TEST_CASE("the sea-level atmosphere 1.8 % above the site's declared barometer") 
            {"p_msk = 100*p_msg + 101.325"});
 }
 
+// The sea-level atmosphere taken off an absolute piezometer, h = (p_pz - 101.325)/γ_w, and an
+// NPSH from an open sump, (101.325 - p_v)/(ρ·g), where the file declares the site's barometer
+// at 100.4 kPa and 97.8 kPa (about 80 m and 300 m up, the barometric formula, from memory):
+// the difference carries the whole error, 0.09 m and 0.36 m of head. Both passed without a
+// word; the warning names the barometer. The site's barometer in its place passes, and so
+// does a gauge reading made absolute with 101.325 at a site 0.5 % below it, a small share of
+// a larger pressure.
+TEST_CASE("the sea-level atmosphere beside absolute readings where the file declares the site's") {
+    const std::string piezometer = "p_pz : kPa \"piezometer reading, absolute\"\n"
+                                   "p_b : kPa = 100.4 \"site barometric pressure\"\n"
+                                   "γ_w : kN/m^3\nh_pz : m\n";
+    fails_with(piezometer, {"h_pz = (p_pz - 101.325)/γ_w"}, plumb::rules::offset_scale);
+    passes(piezometer, {"h_pz = (p_pz - p_b)/γ_w"});
+    const std::string sump = "p_b : kPa = 97.8 \"site barometric pressure\"\np_v : kPa\n"
+                             "ρ : kg/m^3\nNPSH : m\n";
+    const auto r = run(sump, "NPSH = (101.325 - p_v)*1000/(ρ*{g_n})");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale),
+                            "write p_b in place of 101.325"));
+    passes(sump, {"NPSH = (p_b - p_v)*1000/(ρ*{g_n})"});
+    passes("p_b : kPa \"site barometer, 100.8 kPa\"\np_g : kPag\np_a : kPa\n",
+           {"p_a = p_g + 101.325"});
+    // A barometer described in psia beside a unit declared psi (14.3 psia is 98.6 kPa).
+    fails_with("p_b : psi \"site barometric pressure, 14.3 psia\"\np_g : psig\np_a : psia\n",
+               {"p_a = p_g + 14.696"}, plumb::rules::offset_scale);
+}
+
 // 14.73 psia, the US gas contract's base pressure (AGA Report No. 3's base conditions, 14.73
 // psia and 60 °F, from memory), is 101.56 kPa: added to a gauge reading at a site whose
 // barometer the file declares at 28.6 inHg (96.85 kPa, NIST SP 811 (2008), B.8: 1 inHg =

@@ -164,11 +164,15 @@ constexpr double reference_temperature_slack = 0.003;
 // observatories), as a share of the standard atmosphere: h = 44330.8·(1 - 0.52^0.190263) m in
 // the standard atmosphere's barometric formula (from memory).
 constexpr double highest_site_atmosphere = 0.52;
-// How far an atmosphere added to a gauge reading may stand from the barometer the file
-// declares for its site: 1.5 %, about 125 m of height in the standard atmosphere and about
-// what the weather moves a barometer from day to day (from memory). Beyond it the calc's own
-// figure is the one its sums must take: 1.8 kPa is 0.18 m of a deaerator pump's NPSH.
+// How far the sea-level atmosphere written into a sum of pressures may stand from the
+// barometer the file declares for its site. Added to a gauge reading, 1.5 % (about 125 m of
+// height in the standard atmosphere, from memory): the error is a small share of the absolute
+// pressure, but 1.8 kPa is still 0.18 m of a deaerator pump's NPSH. Beside an absolute reading
+// taken off it or from it (an NPSH from an open sump, an absolute piezometer made gauge), the
+// result is a small difference that carries the whole error: 0.5 %, about 40 m, or a
+// barometer rounded to 101 kPa; 0.9 kPa is 0.09 m of a piezometer's head.
 constexpr double site_barometer_slack = 0.015;
+constexpr double site_barometer_slack_in_difference = 0.005;
 // How an actual gas volume becomes one at reference conditions (ideal gas, common practice).
 constexpr std::string_view state_correction_advice =
     "an actual volume becomes a normal one times (p/p_n)*(T_n/T), with absolute pressures and "
@@ -982,7 +986,8 @@ class checker {
 
     // check/formula/offset_sum_reports.cpp
     void report_atmosphere_not_the_site(std::uint32_t number, std::string_view what, double pascals,
-                                        const site_barometer& site, double unit);
+                                        const site_barometer& site, double unit,
+                                        bool added_to_gauge = true);
     std::optional<std::string_view> barometer_in_unit(double unit) const;
     std::string atmosphere_in(double unit, std::string_view unit_name) const;
     std::optional<std::string> site_atmosphere_advice(std::string_view reading, double unit,
@@ -990,6 +995,7 @@ class checker {
     const site_barometer* declared_site_barometer();
     double declared_number(const syntax::declaration& decl) const;
     void warn_sea_level_atmosphere_at_site(std::span<const operand> terms, double unit);
+    void warn_atmosphere_number_at_site(std::span<const operand> terms, double unit);
     bool named_gauge(std::uint32_t node) const;
     bool report_zero_added_twice(std::span<const operand> terms, double unit,
                                  const compact_dimension& dim);

@@ -30,13 +30,14 @@ const checker::site_barometer* checker::declared_site_barometer() {
         const double written = declared_number(decl);
         const double pascals = written * decl.kind.si_factor;
         // The file's atmosphere is the sea level's: no site barometer to hold sums to.
-        if (pascals > 0.99 * standard_atmosphere && pascals <= 1.005 * standard_atmosphere)
+        if (pascals > (1.0 - site_barometer_slack_in_difference) * standard_atmosphere &&
+            pascals <= 1.005 * standard_atmosphere)
             return nullptr;
         // A site below sea level by more than the Dead Sea is no site; above 5200 m the air
         // is thinner than any plant is built in (the highest mines and observatories; the
         // standard atmosphere, from memory, has 52.7 kPa there).
         if (!(pascals >= highest_site_atmosphere * standard_atmosphere &&
-              pascals <= 0.99 * standard_atmosphere))
+              pascals <= (1.0 - site_barometer_slack_in_difference) * standard_atmosphere))
             continue;
         site_barometer_ = {name, pascals, decl.kind.si_factor};
         return &site_barometer_;
@@ -63,9 +64,12 @@ double checker::declared_number(const syntax::declaration& decl) const {
         while (begin > 0 && (std::isdigit(static_cast<unsigned char>(description[begin - 1])) ||
                              description[begin - 1] == '.'))
             --begin;
-        const bool unit_ends =
-            at + unit.size() == description.size() ||
-            !std::isalnum(static_cast<unsigned char>(description[at + unit.size()]));
+        // "14.3 psia" beside a unit declared psi: the a marks the reading absolute.
+        std::size_t after = at + unit.size();
+        if (after < description.size() && description[after] == 'a')
+            ++after;
+        const bool unit_ends = after == description.size() ||
+                               !std::isalnum(static_cast<unsigned char>(description[after]));
         if (begin < end && unit_ends &&
             std::isdigit(static_cast<unsigned char>(description[begin])))
             return std::strtod(std::string(description.substr(begin, end - begin)).c_str(),
@@ -111,7 +115,7 @@ void checker::warn_sea_level_atmosphere_at_site(std::span<const operand> terms, 
 // atmosphere added to a gauge reading that is not the site's (see site_barometer_slack).
 void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_view what,
                                              double pascals, const site_barometer& site,
-                                             double unit) {
+                                             double unit, bool added_to_gauge) {
     const double height = 44330.8 * (1.0 - std::pow(site.pascals / standard_atmosphere, 0.190263));
     const double off = pascals - site.pascals;
     diagnostic& d =
@@ -126,10 +130,46 @@ void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_v
                            off > 0 ? "high" : "low"),
                file_.nodes[number].range);
     d.level = severity::warning;
-    d.notes.push_back({fmt::format("a gauge reading plus the local atmosphere is absolute: "
-                                   "write (... + {})",
-                                   barometer_in_unit(unit).value_or(site.name)),
-                       {}});
+    d.notes.push_back(
+        {added_to_gauge
+             ? fmt::format("a gauge reading plus the local atmosphere is absolute: write (... + "
+                           "{})",
+                           barometer_in_unit(unit).value_or(site.name))
+             : fmt::format("the atmosphere where the reading is taken is the site's: write {} "
+                           "in place of {}",
+                           barometer_in_unit(unit).value_or(site.name),
+                           display_text(file_.nodes[number].range)),
+         {}});
+}
+
+// "(101.325 - p_v)*1000/(ρ*g)", an NPSH from an open sump, and "p_pz - 101.325", an absolute
+// piezometer made gauge: the sea-level atmosphere written as a number beside absolute
+// readings, in a file that declares its site's barometer.
+void checker::warn_atmosphere_number_at_site(std::span<const operand> terms, double unit) {
+    // The number and an absolute reading on opposite sides of the sum: "p_abs + 101.325" is
+    // the atmosphere added twice, another rule's finding.
+    const auto absolute_reading = [&](bool subtracted) {
+        return std::any_of(terms.begin(), terms.end(), [&](const operand& t) {
+            return !is_shift_candidate(t) && t.subtracted == subtracted && t.type.known &&
+                   !t.type.numeric && t.type.offset == nullptr &&
+                   t.type.dim == pressure_dimension();
+        });
+    };
+    for (const auto& t : terms) {
+        if (!is_shift_candidate(t) || !absolute_reading(!t.subtracted))
+            continue;
+        const shift sh = shift_of(t);
+        const double written = std::abs(sh.si + sh.written * unit);
+        if (std::abs(written / standard_atmosphere - 1.0) > 0.015)
+            continue;
+        const site_barometer* site = declared_site_barometer();
+        if (site == nullptr ||
+            std::abs(written / site->pascals - 1.0) <= site_barometer_slack_in_difference)
+            return;
+        report_atmosphere_not_the_site(t.node, "the atmosphere at sea level", written, *site, unit,
+                                       false);
+        return;
+    }
 }
 
 // What to add to a gauge reading in `unit` to make it absolute: the barometer declared in
