@@ -307,6 +307,26 @@ TEST_CASE("unit scale: a power of ten written out is never read as a folded coef
     CHECK(right.diagnostics.empty());
 }
 
+// A hydraulic pump's shaft power P = p·Q/(1714·η) in hp from psi and gpm, or /(600·η) in kW
+// from bar and L/min (common practice: 1 hp = 745.7 W, 1 psi = 6894.76 Pa, 1 gpm = 6.309e-5
+// m³/s, NIST SP 811 (2008), B.8). The 1714 kept in a metric sheet: the advice to divide by 600
+// alone would leave it and give a power 1714 times too small, so the finding says what the
+// number would be were it the conversion. A formula's own 384 is not offered a replacement.
+TEST_CASE("unit scale: a trade's constant for other units is offered its counterpart") {
+    const std::string decl = "p_sys : bar\nQ_lpm : L/min\nη_t : 1\nP_kW : kW\n";
+    const auto r = plumb::check_text("p.plumb", decl + "P_kW = p_sys*Q_lpm/(1714*η_t)\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(mentions(*scales[0], "these units need 600 in its place"));
+    CHECK(findings(plumb::check_text("p.plumb", decl + "P_kW = p_sys*Q_lpm/(600*η_t)\n"),
+                   plumb::rules::unit_scale)
+              .empty());
+    const std::string beam = "w : kN/m\nL : mm\nE : N/mm^2\nI : mm^4\nδ : mm\n";
+    const auto d = plumb::check_text("d.plumb", beam + "δ = 5*w*L^4/(384*E*I*1000)\n");
+    REQUIRE(findings(d, plumb::rules::unit_scale).size() == 1);
+    CHECK(!mentions(*findings(d, plumb::rules::unit_scale)[0], "in its place"));
+}
+
 // The "counts N times" factor takes in the numbers already written where they are part of a
 // clean conversion, so that following it fixes the formula: f = M·12/S with M in kip·ft and S
 // in in³ is in ksi, 1000 psi (NIST SP 811 (2008), B.8: kip = 1000 lbf, ft = 12 in); 3.03 hp

@@ -336,6 +336,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     // The factor the one coefficient would have to be, were it the conversion.
     double needed = 0.0;
     double written = 0.0;
+    double coefficient_exponent = 0.0;
+    int coefficient_digits = 0;
     std::optional<std::string> other_unit_note;
     // "60*W*L*c*ΔT/(h_fg*t)" into lb/h with t in min and h_fg in kJ/kg: the clock's 60 is
     // the conversion it was written as, and the factor advised (2.326) leaves it in, as the
@@ -366,6 +368,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                     ++coefficient_count;
                     written = l.value;
                     needed = side == r.odd ? 1.0 / ratio : ratio;
+                    coefficient_exponent = l.exponent;
+                    coefficient_digits = significant_digits(text(file_.nodes[l.node].range));
                     coefficient = &l;
                     on_odd_side = side == r.odd;
                 }
@@ -418,6 +422,22 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                            {}});
     else if (other_unit_note)
         d.notes.push_back({std::move(*other_unit_note), {}});
+    else if (const double in_place = std::pow(needed, coefficient_exponent);
+             coefficient_count == 1 && std::isfinite(in_place) && in_place > 0 &&
+             std::abs(coefficient_exponent) == 1.0 &&
+             std::abs(std::log10(in_place / written)) <= std::log10(5.0) &&
+             (written >= 10.0 || coefficient_digits >= 3))
+        // "P_kW = p_bar*Q_lpm/(1714*η)": 1714 is the conversion for psi, gpm and hp; the
+        // advice to divide by 600 alone would keep it, and the result would pass 1714 times
+        // too small. Both readings are offered where the number needed is within a factor of
+        // five of the written one, as a trade's constants for two systems of units are (1714
+        // and 600, 3960 and 1714), and the number is printed as a conversion is; a formula's
+        // own 384 beside a 10, or its 0.75, is left a coefficient.
+        d.notes.push_back(
+            {fmt::format("{} counted as a coefficient, not a unit conversion; if it was meant "
+                         "to convert units, these units need {} in its place",
+                         coefficients, format_factor(in_place)),
+             {}});
     else if (!coefficients.empty())
         d.notes.push_back({fmt::format("{} counted as a coefficient, not a unit conversion; if "
                                        "it was meant to convert units, it is not the factor "
