@@ -327,6 +327,22 @@ TEST_CASE("unit scale: a trade's constant for other units is offered its counter
     CHECK(!mentions(*findings(d, plumb::rules::unit_scale)[0], "in its place"));
 }
 
+// A pump set's energy a year, E = N·P/(η/100)·8760·u/100 in kWh/yr with η and u in % (8760 h
+// in a year of 365 days, NIST SP 811 (2008), B.8), with a /1000 for MWh left in: the finding
+// named one of the two 100s, which cancel, and called the value 100 times too large; following
+// it made the cell 10⁵ times too small. The 1000 is named now.
+TEST_CASE("unit scale: of the factors not needed, one that cancels another is named last") {
+    const std::string decl = "N_p : 1\nP_w : kW\nη_m, u : %\nE : kWh/yr\n";
+    const auto r =
+        plumb::check_text("e.plumb", decl + "E = N_p*P_w/(η_m/100)*8760*u/100/1000\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(mentions(*scales[0], "the factor 1000 is not needed"));
+    CHECK(findings(plumb::check_text("e.plumb", decl + "E = N_p*P_w/(η_m/100)*8760*u/100\n"),
+                   plumb::rules::unit_scale)
+              .empty());
+}
+
 // The "counts N times" factor takes in the numbers already written where they are part of a
 // clean conversion, so that following it fixes the formula: f = M·12/S with M in kip·ft and S
 // in in³ is in ksi, 1000 psi (NIST SP 811 (2008), B.8: kip = 1000 lbf, ft = 12 in); 3.03 hp

@@ -441,11 +441,23 @@ bool checker::report_extra_factor(std::span<const operand> ops, std::span<const 
     if (conversions_all_needed(ops, index, parts, dimensionless))
         return false;
     constexpr std::size_t most_numbers = 8;
+    // "P/(η_pct/100)*8760*u_pct/100/1000" into kWh/yr: the two 100s cancel, and either
+    // one's removal reconciles as well as the 1000's; the numbers that cancel are tried
+    // last, so that the 1000 is named.
+    const auto cancelled = [](std::span<const scale_literal> literals, std::size_t k) {
+        return std::any_of(literals.begin(), literals.end(), [&](const scale_literal& o) {
+            return &o != &literals[k] && o.value == literals[k].value &&
+                   o.exponent == -literals[k].exponent;
+        });
+    };
+    for (const bool cancelling : {false, true})
     for (std::size_t i = 0; i < parts.size(); ++i) {
         if (parts[i].literals.size() > most_numbers)
             continue;
         for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
             const scale_literal& l = parts[i].literals[k];
+            if (cancelled(parts[i].literals, k) != cancelling)
+                continue;
             // "Q_m3h = Q_cfm*1.699*60": 1.699 is m³/h per cfm already, and the minutes
             // in an hour beside it are counted twice.
             if (!(looks_like_conversion(l, !dimensionless) ||
