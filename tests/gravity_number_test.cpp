@@ -935,7 +935,8 @@ TEST_CASE("water's specific heat typed as a number on a mass flow") {
                          plumb::rules::trade_constant);
     const auto hour = run(d + "Φ = m*4.19*(T_1 - T_2)\n");
     CHECK(count_of(hour, plumb::rules::unit_scale) == 1);
-    CHECK(plumb::test::says(plumb::test::first_under(hour, plumb::rules::unit_scale), "counts 3600 times"));
+    CHECK(plumb::test::says(plumb::test::first_under(hour, plumb::rules::unit_scale),
+                            "counts 3600 times"));
     CHECK(count_of(run(d + "Φ = m*(T_1 - T_2)/3600\n"), plumb::rules::side_mismatch) == 1);
     CHECK(count_of(run(d + "Φ = m*2.1*(T_1 - T_2)/3600\n"), plumb::rules::side_mismatch) == 1);
 }

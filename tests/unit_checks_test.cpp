@@ -110,8 +110,7 @@ TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6")
 TEST_CASE("mixed units: of two terms, the one mixing mm and in is named") {
     const std::string decl = "D_omm : mm\nD_o, t_w : in\nE_s : psi\nν : 1\nC_w : 1/psi\n"
                              "Δp : psi\nk : 1/psi\n";
-    const auto r = plumb::check_text("h.plumb",
-                                     decl + "k = D_omm*(1 - ν^2)/(E_s*t_w) + C_w\n");
+    const auto r = plumb::check_text("h.plumb", decl + "k = D_omm*(1 - ν^2)/(E_s*t_w) + C_w\n");
     const auto scales = findings(r, plumb::rules::unit_scale);
     REQUIRE(scales.size() == 1);
     CHECK(mentions(*scales[0], "divide 'D_omm*(1 - ν^2)/(E_s*t_w)' by 25.4"));
@@ -276,7 +275,8 @@ TEST_CASE("offset scales: gauge to absolute with a rounded factor and the atmosp
 // (365.25 d × 86400 s, rounded; NIST SP 811 (2008), B.8) but without the 10⁻⁴ of cm² to m²:
 // the advice names the 10⁴ left out, with the 10001.3 the rounded number makes of it beside
 // it, rather than 10001.3 alone. A power of ten the numbers give exactly stays as it was.
-TEST_CASE("unit scale: a factor within the rounding of the numbers written is named as its power of ten") {
+TEST_CASE("unit scale: a factor within the rounding of the numbers written is named as its power "
+          "of ten") {
     const std::string decl = "c_v : m^2/yr\nc_lab : cm^2/s\nQ_kW : kW\nQ_btu : Btu/h\n";
     const auto r = plumb::check_text("cv.plumb", decl + "c_v = 3.154e7*c_lab\n");
     const auto scales = findings(r, plumb::rules::unit_scale);
@@ -298,7 +298,8 @@ TEST_CASE("unit scale: a factor within the rounding of the numbers written is na
 // conversion. A power of ten is read as written.
 TEST_CASE("unit scale: a power of ten written out is never read as a folded coefficient") {
     const std::string decl = "w_s : kN/m\nL_mm : mm\nE : N/mm^2\nI : cm^4\nδ : mm\n";
-    for (const char* slip : {"δ = 5*w_s*L_mm^4/(384*E*I*10^3)", "δ = 5*w_s*L_mm^4/(384*E*I*1000)"}) {
+    for (const char* slip :
+         {"δ = 5*w_s*L_mm^4/(384*E*I*10^3)", "δ = 5*w_s*L_mm^4/(384*E*I*1000)"}) {
         CAPTURE(slip);
         const auto r = plumb::check_text("d.plumb", decl + slip + "\n");
         CHECK(findings(r, plumb::rules::unit_scale).size() == 1);
@@ -333,8 +334,7 @@ TEST_CASE("unit scale: a trade's constant for other units is offered its counter
 // it made the cell 10⁵ times too small. The 1000 is named now.
 TEST_CASE("unit scale: of the factors not needed, one that cancels another is named last") {
     const std::string decl = "N_p : 1\nP_w : kW\nη_m, u : %\nE : kWh/yr\n";
-    const auto r =
-        plumb::check_text("e.plumb", decl + "E = N_p*P_w/(η_m/100)*8760*u/100/1000\n");
+    const auto r = plumb::check_text("e.plumb", decl + "E = N_p*P_w/(η_m/100)*8760*u/100/1000\n");
     const auto scales = findings(r, plumb::rules::unit_scale);
     REQUIRE(scales.size() == 1);
     CHECK(mentions(*scales[0], "the factor 1000 is not needed"));

@@ -72,9 +72,17 @@ const std::array<carried_quantity, 28>& quantities() {
         const auto gas_constant = [&](std::string_view what, std::string_view symbol,
                                       std::string_view reciprocal, std::string_view advice,
                                       double least, double greatest) {
-            return carried_quantity{rules::trade_constant, what, symbol, reciprocal, "", advice,
-                                    "write the gas constant in a cell that holds its unit to say so",
-                                    specific_heat, least, greatest};
+            return carried_quantity{
+                rules::trade_constant,
+                what,
+                symbol,
+                reciprocal,
+                "",
+                advice,
+                "write the gas constant in a cell that holds its unit to say so",
+                specific_heat,
+                least,
+                greatest};
         };
         const double air_heat_least = air_density(40.0) * 1005.0;
         const double air_heat_greatest = air_density(0.0) * 1007.0;
@@ -588,14 +596,14 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
 }
 
 unsigned clock_units_in(std::string_view unit_text) {
-    static constexpr std::array<std::string_view, 13> minute{
-        "min", "cfm", "scfm", "acfm", "icfm", "CFM", "SCFM", "gpm", "GPM", "fpm", "sfpm", "rpm",
-        "lpm"};
+    static constexpr std::array<std::string_view, 13> minute{"min",  "cfm",  "scfm", "acfm", "icfm",
+                                                             "CFM",  "SCFM", "gpm",  "GPM",  "fpm",
+                                                             "sfpm", "rpm",  "lpm"};
     static constexpr std::array<std::string_view, 12> hour{
         "h", "hr", "hrs", "gph", "mph", "kph", "scfh", "cfh", "tph", "MBH", "Btuh", "BTUH"};
     static constexpr std::array<std::string_view, 16> day{
-        "d",    "day",  "days", "MGD",  "mgd",    "gpd",    "GPD",   "bpd",
-        "BPD",  "BOPD", "BWPD", "scfd", "MMscfd", "MMSCFD", "Mscfd", "MLD"};
+        "d",   "day",  "days", "MGD",  "mgd",    "gpd",    "GPD",   "bpd",
+        "BPD", "BOPD", "BWPD", "scfd", "MMscfd", "MMSCFD", "Mscfd", "MLD"};
     const auto in = [](const auto& list, std::string_view token) {
         return std::find(list.begin(), list.end(), token) != list.end();
     };

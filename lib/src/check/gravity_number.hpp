@@ -106,8 +106,7 @@ std::string molar_volume_advice(const molar_volume_mismatch& off);
 std::optional<gravity_reading> read_gravity_number(
     double term_scale, double reference_scale, std::span<const scale_literal> literals,
     std::span<const std::string_view> texts, const dimension& lacking, bool flipped_too = false,
-    carried_quantity::term_kind term = carried_quantity::term_kind::any,
-    unsigned clock_units = 0);
+    carried_quantity::term_kind term = carried_quantity::term_kind::any, unsigned clock_units = 0);
 
 // The units of time and the grain a unit as written counts in, as bits: clock_minute ("min",
 // "cfm", "gpm"), clock_hour ("h", "kWh", "gph"), clock_day ("d", "MGD", "bpd"), clock_grain

@@ -908,8 +908,8 @@ class workbook_checker {
     // check/gravity_number.hpp). On a reading, the formula's value takes the cell's dimension,
     // the number leaves the factors, and the note is made; the scale is then compared as for
     // any formula.
-    bool read_gravity_in_cell(const formula_cell& f, value_type& computed,
-                              const cell_unit& written, std::vector<scale_literal>& factors) {
+    bool read_gravity_in_cell(const formula_cell& f, value_type& computed, const cell_unit& written,
+                              std::vector<scale_literal>& factors) {
         if (factors.empty() || factors.size() > 8)
             return false;
         dimension lacking;
@@ -927,9 +927,9 @@ class workbook_checker {
                 lowered_.tree
                     .references[lowered_.references[f.lowered.first_reference + i].reference]
                     .unit_text);
-        const auto reading = read_gravity_number(
-            computed.scale, written.unit.scale, factors, {texts.data(), factors.size()}, lacking,
-            false, carried_quantity::term_kind::any, clock_units);
+        const auto reading = read_gravity_number(computed.scale, written.unit.scale, factors,
+                                                 {texts.data(), factors.size()}, lacking, false,
+                                                 carried_quantity::term_kind::any, clock_units);
         if (!reading)
             return false;
         const std::uint32_t node = factors[reading->literal].node;

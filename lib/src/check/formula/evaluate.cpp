@@ -957,11 +957,10 @@ typed_term checker::eval_factors(std::uint32_t index) {
         // and p_g/(ρ*g) would be a head a gauge may give. The sides' mismatch says so,
         // which is the slip; its zero is no fault of it.
         // So is "p_d*1000/(ρ*9.81) + z_g" before the sum reads its 9.81 as g.
-        const bool head_without_g =
-            result.known && result.dim == velocity_squared_dimension() &&
-            ((index == side_hint_node_ && side_hint_ != nullptr && side_hint_->known &&
-              side_hint_->dim == length_dimension()) ||
-             divides_by_gravity_number(result.literal_begin));
+        const bool head_without_g = result.known && result.dim == velocity_squared_dimension() &&
+                                    ((index == side_hint_node_ && side_hint_ != nullptr &&
+                                      side_hint_->known && side_hint_->dim == length_dimension()) ||
+                                     divides_by_gravity_number(result.literal_begin));
         // SIDPP/(0.052*TVD), p_LOT/TVD: a gauge reading at the top of a column open to the
         // atmosphere over its depth is the column's gradient, or the mud weight that
         // balances it (Bourgoyne et al., Applied Drilling Engineering, 1986, ch. 4, from
@@ -1013,8 +1012,8 @@ typed_term checker::eval_factors(std::uint32_t index) {
 bool checker::divides_by_gravity_number(std::uint32_t literals_begin) const {
     for (std::size_t i = literals_begin; i < literals_.size(); ++i) {
         const scale_literal& l = literals_[i];
-        if (l.exponent == -1.0 && (std::abs(l.value / 9.80665 - 1.0) < 2e-3 ||
-                                   std::abs(l.value / 32.174 - 1.0) < 2e-3))
+        if (l.exponent == -1.0 &&
+            (std::abs(l.value / 9.80665 - 1.0) < 2e-3 || std::abs(l.value / 32.174 - 1.0) < 2e-3))
             return true;
     }
     return false;

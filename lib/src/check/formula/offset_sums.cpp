@@ -737,7 +737,8 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
     if (shifted_to_a_zero && gauges > 0 && std::abs(final_origin) <= tolerance + 1e-9)
         warn_sea_level_atmosphere_at_site(terms, unit);
     else if (has_shift && gauges == 0 && result.known && result.dim == pressure_dimension())
-        [[unlikely]] warn_atmosphere_number_at_site(terms, unit);
+        [[unlikely]]
+        warn_atmosphere_number_at_site(terms, unit);
     if (has_shift && !shifted_to_a_zero && points == 0 && unit_terms >= 2 &&
         report_zero_beside_difference_of_readings(terms, unit, result.dim)) {
         cut_literals_to(literal_base);

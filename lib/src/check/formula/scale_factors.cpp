@@ -451,37 +451,37 @@ bool checker::report_extra_factor(std::span<const operand> ops, std::span<const 
         });
     };
     for (const bool cancelling : {false, true})
-    for (std::size_t i = 0; i < parts.size(); ++i) {
-        if (parts[i].literals.size() > most_numbers)
-            continue;
-        for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
-            const scale_literal& l = parts[i].literals[k];
-            if (cancelled(parts[i].literals, k) != cancelling)
+        for (std::size_t i = 0; i < parts.size(); ++i) {
+            if (parts[i].literals.size() > most_numbers)
                 continue;
-            // "Q_m3h = Q_cfm*1.699*60": 1.699 is m³/h per cfm already, and the minutes
-            // in an hour beside it are counted twice.
-            if (!(looks_like_conversion(l, !dimensionless) ||
-                  converts_in_term(l, ops[index[i]].type, !dimensionless) ||
-                  spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node)) ||
-                (l.exponent == 1.0 && (l.value == 1e3 || l.value == 1e6 || l.value == 1e9) &&
-                 l.value == counted_multiple(ops[index[i]].node)))
-                continue;
-            std::array<scale_literal, most_numbers> without{};
-            std::copy(parts[i].literals.begin(), parts[i].literals.end(), without.begin());
-            without[k].value = 1.0;
-            without[k].tolerance = 0.0;
-            without[k].low = rational(1);
-            without[k].high = rational(1);
-            without[k].power_of_ten = false;
-            without[k].power = 0;
-            without[k].factor_like = false;
-            without[k].table_digits = false;
-            std::vector<scaled_operand> changed(parts.begin(), parts.end());
-            changed[i].literals = {without.data(), parts[i].literals.size()};
-            if (reconcile(changed).agree)
-                return report_unneeded(ops[index[i]], l);
+            for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
+                const scale_literal& l = parts[i].literals[k];
+                if (cancelled(parts[i].literals, k) != cancelling)
+                    continue;
+                // "Q_m3h = Q_cfm*1.699*60": 1.699 is m³/h per cfm already, and the minutes
+                // in an hour beside it are counted twice.
+                if (!(looks_like_conversion(l, !dimensionless) ||
+                      converts_in_term(l, ops[index[i]].type, !dimensionless) ||
+                      spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node)) ||
+                    (l.exponent == 1.0 && (l.value == 1e3 || l.value == 1e6 || l.value == 1e9) &&
+                     l.value == counted_multiple(ops[index[i]].node)))
+                    continue;
+                std::array<scale_literal, most_numbers> without{};
+                std::copy(parts[i].literals.begin(), parts[i].literals.end(), without.begin());
+                without[k].value = 1.0;
+                without[k].tolerance = 0.0;
+                without[k].low = rational(1);
+                without[k].high = rational(1);
+                without[k].power_of_ten = false;
+                without[k].power = 0;
+                without[k].factor_like = false;
+                without[k].table_digits = false;
+                std::vector<scaled_operand> changed(parts.begin(), parts.end());
+                changed[i].literals = {without.data(), parts[i].literals.size()};
+                if (reconcile(changed).agree)
+                    return report_unneeded(ops[index[i]], l);
+            }
         }
-    }
     return false;
 }
 
