@@ -450,6 +450,16 @@ TEST_CASE("unknown symbols resolve to nothing and suggest near ones") {
     // US floor, wall and soil loads (NIST SP 811 (2008), B.8: 1 lbf/ft² = 47.88026 Pa).
     CHECK(table().resolve("psf")->unit->factor == doctest::Approx(47.88026).epsilon(1e-7));
     CHECK(table().resolve("ksf")->unit->factor == doctest::Approx(47880.26).epsilon(1e-7));
+    // Unit weights in pcf (NIST SP 811 (2008), B.8: 1 lbf/ft³ = 1.570875E+02 N/m³), and the gas
+    // trade's daily rates in one word: 1 MMscfd = 28316.85 m³ over 86400 s (ft³ 2.831685E-02
+    // m³, B.8; the day, SI Brochure 9th ed., Table 8).
+    CHECK(table().resolve("pcf")->unit->factor == doctest::Approx(157.0875).epsilon(1e-6));
+    CHECK(table().resolve("MMscfd")->unit->factor ==
+          doctest::Approx(28316.846592 / 86400.0).epsilon(1e-12));
+    CHECK(table().resolve("Mscfd")->unit->factor ==
+          doctest::Approx(28.316846592 / 86400.0).epsilon(1e-12));
+    CHECK(table().resolve("scfd")->unit->factor ==
+          doctest::Approx(0.028316846592 / 86400.0).epsilon(1e-12));
     // Gas bills and heating plant (NIST SP 811 (2008), B.8: therm (EC) 1.055056E+08 J; Btu_IT
     // 1055.056 J; ft³/min 4.719474E-04 m³/s), and the gas trade's flows at reference
     // conditions (common practice).

@@ -413,7 +413,7 @@ TEST_CASE("workbook parity: a formula cell beside a unit text that does not read
                                                     {"=B2*3", "kg/kmol"},   // B4: read
                                                     {"=B2*4", "checked"},   // B5: a remark
                                                     {"=B2*5", "tons"},      // B6: a plural unit
-                                                    {"=B2*6", "pcf"},       // B7: one letter off
+                                                    {"=B2*6", "plg"},       // B7: one letter off
                                                     {"=B2*7", "OK"},        // B8: a remark
                                                 }));
     CHECK(cell_findings(r) ==

@@ -508,6 +508,16 @@ constexpr unit_definition rows[] = {
              prefixes::refused, standard_volume_source),
     absolute("MMscf", "million standard cubic feet", volume, 28316.846592, "28316.846592",
              prefixes::refused, standard_volume_source),
+    // Gas rates a day as the gas trade writes them, one word (common practice; the day
+    // 86400 s, SI Brochure 9th ed., Table 8).
+    absolute("scfd", "standard cubic foot per day", volumetric_flow, 0.028316846592 / 86400.0,
+             "28316846592/86400000000000000", prefixes::refused, standard_volume_source),
+    absolute("Mscfd", "thousand standard cubic feet per day", volumetric_flow,
+             28.316846592 / 86400.0, "28316846592/86400000000000", prefixes::refused,
+             standard_volume_source),
+    absolute("MMscfd", "million standard cubic feet per day", volumetric_flow,
+             28316.846592 / 86400.0, "28316846592/86400000000", prefixes::refused,
+             standard_volume_source),
     stock_tank_barrel,
     spelled("stb", stock_tank_barrel),
     normal_cubic_metre,
@@ -515,6 +525,12 @@ constexpr unit_definition rows[] = {
     // As gas sheets print them, with the superscript three.
     spelled("Nm\u00B3", normal_cubic_metre),
     spelled("Sm\u00B3", standard_cubic_metre),
+    // Unit weights on US drawings, soil, concrete, water and snow, in pounds-force per cubic
+    // foot (common practice: 62.4 pcf for water, ASCE 7's snow at 0.13·p_g + 14 pcf); NIST SP
+    // 811 (2008), B.8: lbf = 4.448222 N, ft³ = 0.02831685 m³, exact as their quotient.
+    absolute("pcf", "pound-force per cubic foot (unit weight)", dims(1, -2, -2),
+             4.4482216152605 / 0.028316846592, "44482216152605/283168465920", prefixes::refused,
+             "NIST SP 811 (2008), B.8, lbf/ft^3, exact"),
     // Mud weight in pounds per U.S. gallon.
     absolute("ppg", "pound per gallon (U.S.)", dims(1, -3, 0), 736351250.0 / 6145149.0,
              "736351250/6145149", prefixes::refused,
