@@ -289,6 +289,12 @@ TEST_CASE("unit scale: a factor within the rounding of the numbers written is na
     REQUIRE(findings(btu, plumb::rules::unit_scale).size() == 1);
     CHECK(mentions(*findings(btu, plumb::rules::unit_scale)[0],
                    "by 1000 (1000.04 with the rounded numbers as written)"));
+    // A belt speed in fpm from m/s with 3.281 ft/m (B.8) and the minute's 60 left out: the
+    // advice names the 60, not 59.9971.
+    const auto fpm = plumb::check_text("cv.plumb", "v : m/s\nv_fpm : ft/min\nv_fpm = 3.281*v\n");
+    REQUIRE(findings(fpm, plumb::rules::unit_scale).size() == 1);
+    CHECK(mentions(*findings(fpm, plumb::rules::unit_scale)[0],
+                   "by 60 (59.9971 with the rounded numbers as written)"));
 }
 
 // A purlin's midspan deflection δ = 5wL⁴/(384EI) (Roark's Formulas for Stress and Strain,

@@ -506,10 +506,16 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     for (const std::size_t side : {r.odd, r.reference})
         for (const scale_literal& l : parts[side].literals)
             rounding += l.tolerance * std::abs(l.exponent);
+    // So is the 59.9971 of "v_fpm = 3.281*v" the minute's 60.
     const double advised = multiply ? 1.0 / ratio : ratio;
+    std::optional<double> round_factor;
     if (rounding > 0.0 && near_power_of_ten(advised, rounding))
-        if (std::string power = format_factor(std::pow(10.0, std::round(std::log10(advised))));
-            power != factor)
+        round_factor = std::pow(10.0, std::round(std::log10(advised)));
+    for (const double clock : {60.0, 3600.0, 86400.0, 24.0, 1440.0})
+        if (rounding > 0.0 && std::abs(advised / clock - 1.0) <= rounding + 1e-9)
+            round_factor = clock;
+    if (round_factor)
+        if (std::string power = format_factor(*round_factor); power != factor)
             factor = fmt::format("{} ({} with the rounded numbers as written)", power, factor);
     d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
                                    "write the conversion factor into the formula)",
