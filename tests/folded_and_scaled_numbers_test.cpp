@@ -1012,7 +1012,7 @@ TEST_CASE("a rough conversion named against the factor, and advice in the plaine
     const auto short_60 = run(d, "u_f = 3.281*u");
     REQUIRE(count_of(short_60, plumb::rules::unit_scale) == 1);
     CHECK(plumb::test::says(first_under(short_60, plumb::rules::unit_scale),
-                            "multiply '3.281*u' by 59.9971"));
+                            "multiply '3.281*u' by 60 (59.9971"));
     const auto area = run(d, "a = a_ft");
     REQUIRE(count_of(area, plumb::rules::unit_scale) == 1);
     CHECK(plumb::test::says(first_under(area, plumb::rules::unit_scale),
