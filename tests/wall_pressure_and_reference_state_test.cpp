@@ -423,6 +423,21 @@ TEST_CASE("the sea-level atmosphere beside absolute readings where the file decl
                {"p_a = p_g + 14.696"}, plumb::rules::offset_scale);
 }
 
+// An accumulator's precharge at 0.9 of the lowest working pressure, a ratio of absolute
+// pressures from Boyle's law (bladder makers' sizing notes, from memory), written on a bar g
+// reading and set equal to an absolute precharge: the advice offers the atmosphere inside the
+// product, beside the relief valve's form (1.1 × p_set + the atmosphere, API 520, from
+// memory), which the advice's first half gives. A 1.1 gets no such note.
+TEST_CASE("a ratio times a gauge reading is told where the atmosphere goes for each reading") {
+    const std::string d = "p_1 : barg\np_0a : bar\n";
+    const auto r = run(d, "p_0a = 0.9*p_1");
+    const plumb::diagnostic& f = first_under(r, plumb::rules::offset_scale);
+    CHECK(plumb::test::says(f, "(0.9*p_1 + 1.01325) at sea level"));
+    CHECK(plumb::test::says(f, "write 0.9*(p_1 + the atmospheric pressure) instead"));
+    const auto relief = run(d, "p_0a = 1.1*p_1");
+    CHECK(!plumb::test::says(first_under(relief, plumb::rules::offset_scale), "instead"));
+}
+
 // 14.73 psia, the US gas contract's base pressure (AGA Report No. 3's base conditions, 14.73
 // psia and 60 °F, from memory), is 101.56 kPa: added to a gauge reading at a site whose
 // barometer the file declares at 28.6 inHg (96.85 kPa, NIST SP 811 (2008), B.8: 1 inHg =

@@ -215,6 +215,23 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             const bool has_number = kind == expr_kind::add || kind == expr_kind::subtract;
             const std::string reading =
                 has_number ? std::string("the reading") : display_text(file_.nodes[off.node].range);
+            // "p_0 = 0.9*p_1": a ratio times a gauge reading. An allowance on a set pressure
+            // (1.1 × p_set, API 520) is taken of the gauge reading, and the atmosphere added
+            // after it; a ratio of absolute pressures (an accumulator's precharge at 0.9 of
+            // the lowest working pressure, from the gas law) takes the atmosphere inside.
+            std::string ratio_of_reading;
+            if (const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, off.node)];
+                !temperature && n.kind == expr_kind::multiply &&
+                file_.nodes[n.lhs].kind == expr_kind::number &&
+                file_.nodes[n.rhs].kind == expr_kind::symbol) {
+                const double factor = written_number(file_.nodes[n.lhs].range);
+                if (factor >= 0.5 && factor < 1.0)
+                    ratio_of_reading = fmt::format(
+                        "; where {} is a ratio of absolute pressures (a gas's precharge), write "
+                        "{}*({} + the atmospheric pressure) instead",
+                        text(file_.nodes[n.lhs].range), text(file_.nodes[n.lhs].range),
+                        text(file_.nodes[n.rhs].range));
+            }
             std::string zero = format_factor(unit->offset / unit->factor);
             const auto [written_unit, absolute_unit] = unit_of_numbers(off.type, *unit);
             if (!temperature && absolute_unit != absolute_symbol(*unit))
@@ -239,6 +256,7 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
                               "atmosphere in {}",
                               reading, atmosphere_in(written_unit, absolute_unit), reading, zero,
                               absolute_unit));
+            advice += ratio_of_reading;
             // "Δθ_h = θ_h" with Δθ_h in K "rise above ambient": the kelvins are a rise's,
             // and a reading made absolute would only hide the slip.
             if (temperature && file_.nodes[other.node].kind == expr_kind::symbol) {
