@@ -349,6 +349,23 @@ TEST_CASE("unit scale: of the factors not needed, one that cancels another is na
               .empty());
 }
 
+// A CNG cascade's absolute pressure in kPa from a bar g reading and the site's barometer in
+// kPa (1 bar = 100 kPa, SI Brochure 9th ed., Table 8) with the 100 left out: the barometer,
+// in the side's unit, is right, and the bar g reading is the term named. The finding named
+// the barometer and advised dividing it by 100; a sum with a gauge reading in it was weighed
+// without the other side's unit.
+TEST_CASE("mixed units: in a sum with a gauge reading, the term in the side's unit is kept") {
+    const std::string decl = "p_s_bar : barg\np_b_kPa : kPa \"site barometric pressure\"\n"
+                             "p_s_kPa : kPa\n";
+    const auto r = plumb::check_text("c.plumb", decl + "p_s_kPa = p_s_bar + p_b_kPa\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(mentions(*scales[0], "multiply 'p_s_bar'"));
+    CHECK(!mentions(*scales[0], "divide 'p_b_kPa'"));
+    CHECK(plumb::check_text("c.plumb", decl + "p_s_kPa = 100*p_s_bar + p_b_kPa\n")
+              .diagnostics.empty());
+}
+
 // The "counts N times" factor takes in the numbers already written where they are part of a
 // clean conversion, so that following it fixes the formula: f = M·12/S with M in kip·ft and S
 // in in³ is in ksi, 1000 psi (NIST SP 811 (2008), B.8: kip = 1000 lbf, ft = 12 in); 3.03 hp

@@ -611,7 +611,12 @@ typed_term checker::eval_sum(std::uint32_t index) {
     if (result.dim == pressure_dimension() && terms.size() <= 4) [[unlikely]]
         report_barometer_added_to_absolute(terms);
     if (offset_term != nullptr) {
+        // "p_kPa = p_bar_g + p_b_kPa": the other side says which term is off here too.
+        sum_side_hint_ = index == side_hint_node_ ? side_hint_ : nullptr;
+        sum_checked_ = index;
         result = finish_offset_sum(terms, result, literal_base, index);
+        sum_side_hint_ = nullptr;
+        sum_checked_ = syntax::no_index;
         return result; // as above
     }
     if (result.dim.is_dimensionless())
