@@ -366,6 +366,19 @@ TEST_CASE("mixed units: in a sum with a gauge reading, the term in the side's un
               .diagnostics.empty());
 }
 
+// A charging site's energy a year from its energy a day (kWh/d into MWh/yr, 1000 kWh per MWh,
+// NIST SP 811 (2008), B.8) with the days left out: 365 is advised, and where the file declares
+// the working days a year (d_w : d/yr) the finding names them too, since a rate kept on 250
+// days would be overstated by 46 % with 365.
+TEST_CASE("unit scale: a year's 365 advised beside the days a year the file declares") {
+    const std::string decl = "E_d : kWh/d\nd_w : d/yr \"working days a year\"\nE_yr : MWh/yr\n";
+    const auto r = plumb::check_text("e.plumb", decl + "E_yr = E_d*d_w/1000\nE_yr = E_d/1000\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(mentions(*scales[0], "by 365"));
+    CHECK(mentions(*scales[0], "a rate that runs on fewer days takes their number, 'd_w'"));
+}
+
 // The "counts N times" factor takes in the numbers already written where they are part of a
 // clean conversion, so that following it fixes the formula: f = M·12/S with M in kip·ft and S
 // in in³ is in ksi, 1000 psi (NIST SP 811 (2008), B.8: kip = 1000 lbf, ft = 12 in); 3.03 hp

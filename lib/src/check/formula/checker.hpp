@@ -1186,6 +1186,7 @@ class checker {
     bool report_scale_zero_beside_difference(std::span<const operand> sides);
     std::string units_in(std::uint32_t root) const;
     unsigned clock_units_of_formula() const;
+    std::string days_a_year_note() const;
     bool divides_by_gravity_number(std::uint32_t literals_begin) const;
     std::pair<double, std::string> unit_of_numbers(const typed_term& t,
                                                    const unit_definition& scale) const;

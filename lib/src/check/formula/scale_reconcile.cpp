@@ -521,7 +521,25 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                                    "write the conversion factor into the formula)",
                                    multiply ? "multiply" : "divide", quote(op.node), factor),
                        {}});
+    // "E_yr = E_d/1000" beside "d_w : d/yr": 365 counts every day of a year, but a rate kept
+    // on working days counts those.
+    if (std::abs(advised / 365.0 - 1.0) < 1e-3 || std::abs(advised / 365.25 - 1.0) < 1e-6)
+        d.notes.push_back({days_a_year_note(), {}});
     return false;
+}
+
+// The days a year a rate runs: 365 for a calendar year, or the symbol the file declares in
+// days a year, where it declares one.
+std::string checker::days_a_year_note() const {
+    for (const syntax::declaration& decl : file_.declarations) {
+        const std::string_view unit = text(decl.spec);
+        if (decl.name_count == 1 && (unit == "d/yr" || unit == "d/a" || unit == "day/yr" ||
+                                     unit == "days/yr" || unit == "d/y"))
+            return fmt::format("365 counts every day of the year; a rate that runs on fewer days "
+                               "takes their number, '{}'",
+                               text(file_.names[decl.first_name].name));
+    }
+    return "365 counts every day of the year; a rate that runs on fewer days takes their number";
 }
 
 // "0.5", "2", "4e3": one digit, as a formula's own numbers (½ρv², 2πr) are written, and
