@@ -438,6 +438,20 @@ TEST_CASE("a ratio times a gauge reading is told where the atmosphere goes for e
     CHECK(!plumb::test::says(first_under(relief, plumb::rules::offset_scale), "instead"));
 }
 
+// An embankment's excess pore pressure, u_e = u - γ_w·h_w (Craig's Soil Mechanics, 8th ed.,
+// ch. 7, from memory), from a kPag piezometer and the hydrostatic column: plumb takes γ_w·h_w
+// for a difference, so the sum stays a gauge reading beside a kPa symbol, still an error. The
+// finding said "the number added" where none is; it now says how the column was taken, and
+// declaring the hydrostatic pressure as a gauge reading passes.
+TEST_CASE("a gauge reading less a column's pressure is told how the column was taken") {
+    const std::string d = "u_g, u_0 : kPag\nγ_w : kN/m^3\nh_w : m\nu_e : kPa\n";
+    const auto r = run(d, "u_e = u_g - γ_w*h_w");
+    const plumb::diagnostic& f = first_under(r, plumb::rules::offset_scale);
+    CHECK(plumb::test::says(f, "'γ_w*h_w' is taken as a pressure difference"));
+    CHECK(!plumb::test::says(f, "the number added"));
+    passes(d, {"u_0 = γ_w*h_w", "u_e = u_g - u_0"});
+}
+
 // 14.73 psia, the US gas contract's base pressure (AGA Report No. 3's base conditions, 14.73
 // psia and 60 °F, from memory), is 101.56 kPa: added to a gauge reading at a site whose
 // barometer the file declares at 28.6 inHg (96.85 kPa, NIST SP 811 (2008), B.8: 1 inHg =

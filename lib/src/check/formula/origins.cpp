@@ -212,7 +212,12 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             // "T_K = T_F + 273.15": where a number is added already, it is the wrong one;
             // the advice names the reading, not the whole side with that number in it.
             const expr_kind kind = file_.nodes[off.node].kind;
-            const bool has_number = kind == expr_kind::add || kind == expr_kind::subtract;
+            const syntax::expr_node& whole = file_.nodes[syntax::inside_brackets(file_, off.node)];
+            const bool has_number =
+                (kind == expr_kind::add || kind == expr_kind::subtract) &&
+                (file_.nodes[syntax::inside_brackets(file_, whole.lhs)].kind ==
+                     expr_kind::number ||
+                 file_.nodes[syntax::inside_brackets(file_, whole.rhs)].kind == expr_kind::number);
             const std::string reading =
                 has_number ? std::string("the reading") : display_text(file_.nodes[off.node].range);
             // "p_0 = 0.9*p_1": a ratio times a gauge reading. An allowance on a set pressure
@@ -268,6 +273,26 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
                                          "write it as one, such as ({} - T_ref), not as the "
                                          "reading made absolute",
                                          name, reading);
+            }
+            // "u_e = u_g - γ_w*h_w": a gauge reading less a column's pressure is a gauge
+            // reading; where the column stands for a second reading (the hydrostatic pore
+            // pressure), the difference of the two is on no scale.
+            const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, off.node)];
+            const std::uint32_t taken = sum.kind == expr_kind::subtract
+                                            ? syntax::inside_brackets(file_, sum.rhs)
+                                            : syntax::no_index;
+            if (!temperature && taken != syntax::no_index &&
+                file_.nodes[taken].kind != expr_kind::number &&
+                file_.nodes[taken].kind != expr_kind::symbol &&
+                file_.nodes[taken].kind != expr_kind::quantity) {
+                d.notes.push_back(
+                    {fmt::format("{} is taken as a pressure difference, a column's, so the sum "
+                                 "is still a gauge reading; where it stands for a second gauge "
+                                 "reading (a hydrostatic pressure), declare that reading in {} "
+                                 "and subtract it: two gauge readings differ by an ordinary "
+                                 "pressure",
+                                 quote(taken), unit->symbol),
+                     {}});
             }
             if (has_number) {
                 advice = fmt::format("the number added does not put the zero where the other "
