@@ -215,8 +215,7 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             const syntax::expr_node& whole = file_.nodes[syntax::inside_brackets(file_, off.node)];
             const bool has_number =
                 (kind == expr_kind::add || kind == expr_kind::subtract) &&
-                (file_.nodes[syntax::inside_brackets(file_, whole.lhs)].kind ==
-                     expr_kind::number ||
+                (file_.nodes[syntax::inside_brackets(file_, whole.lhs)].kind == expr_kind::number ||
                  file_.nodes[syntax::inside_brackets(file_, whole.rhs)].kind == expr_kind::number);
             const std::string reading =
                 has_number ? std::string("the reading") : display_text(file_.nodes[off.node].range);
