@@ -452,6 +452,17 @@ TEST_CASE("a gauge reading less a column's pressure is told how the column was t
     passes(d, {"u_0 = γ_w*h_w", "u_e = u_g - u_0"});
 }
 
+// A bearing's setting temperature for a US supplier written 1.8*(t + 273.15), which is degrees
+// Rankine (1 °R = 5/9 K, NIST SP 811 (2008), B.9), set equal to a °F reading: still an
+// error, and the other side is named on the Rankine scale, not the kelvin's.
+TEST_CASE("kelvins times 1.8 are named degrees Rankine") {
+    const std::string d = "t_set : °C\nt_setF : °F\n";
+    const auto r = run(d, "t_setF = 1.8*(t_set + 273.15)");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale),
+                            "is on the absolute scale (°R)"));
+    passes(d, {"t_setF = 1.8*t_set + 32"});
+}
+
 // 14.73 psia, the US gas contract's base pressure (AGA Report No. 3's base conditions, 14.73
 // psia and 60 °F, from memory), is 101.56 kPa: added to a gauge reading at a site whose
 // barometer the file declares at 28.6 inHg (96.85 kPa, NIST SP 811 (2008), B.8: 1 inHg =

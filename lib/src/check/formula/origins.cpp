@@ -178,11 +178,18 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
         if (!temperature && unit != nullptr && unit->scale == unit_scale::gauge &&
             other.type.offset == nullptr && other.type.point && read_local_atmosphere(off))
             return;
+        // "1.8*(t + 273.15)": kelvins times 1.8 are degrees Rankine, its numbers taken in.
+        double other_degree = other.type.scale;
+        for (std::uint32_t l = 0; l < other.type.literal_count; ++l) {
+            const scale_literal& number = literals_[other.type.literal_begin + l];
+            other_degree /= std::pow(number.value, number.exponent);
+        }
         const std::string scale_of_other =
             other.type.offset != nullptr
                 ? fmt::format("the {} scale", other.type.offset->symbol)
                 : std::string(!temperature ? "the absolute scale (Pa, bar, psia)"
-                              : std::abs(other.type.scale * 1.8 - 1.0) < 1e-9
+                              : std::abs(other.type.scale * 1.8 - 1.0) < 1e-9 ||
+                                      std::abs(other_degree * 1.8 - 1.0) < 1e-3
                                   ? "the absolute scale (°R)"
                                   : "the absolute scale (K)");
         // "14.5*p_g + 14.7" moves the zero by 14.7 psi seen through the rounded 14.5: the
