@@ -1047,6 +1047,20 @@ TEST_CASE("a gauge pressure over a density and a typed g, in a sum with a height
     CHECK(problems_in(run(d + "H_p = p_d*1000/ρ_l + z_g\n")) >= 1);
 }
 
+// A bar screen's loss as an orifice, h = (V_b² - v²)/(2·g·C²) (common practice), with one
+// velocity in ft/s beside one in m/s: the sum inside is a unit-scale warning, and its scale is
+// then unknown, so the 9.81 could not be weighed as g; a second finding, "is a g missing", was
+// made. The g is read by its value there, and the slip is reported once.
+TEST_CASE("a typed g beside a sum already found in two units is still read as g") {
+    const std::string d = "V_b, v_a : m/s\nv_fps : ft/s\nh_L : m\n";
+    const auto r = run(d + "h_L = (V_b^2 - v_fps^2)/(2*9.81*0.7)\n");
+    CHECK(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(count_of(r, plumb::rules::side_mismatch) == 0);
+    passes_with_one_note(d, {"h_L = (V_b^2 - v_a^2)/(2*9.81*0.7)"}, plumb::rules::gravity_number);
+    // Without a g the sides still differ, beside the warning.
+    CHECK(count_of(run(d + "h_L = (V_b^2 - v_fps^2)/(2*0.7)\n"), plumb::rules::side_mismatch) == 1);
+}
+
 // The hours of a year, 8760 (NIST SP 811 (2008), B.8: 1 a = 365 d), are a time and nothing
 // else: methane destroyed in t/yr from Nm³/h holds methane's density, and 8760 is not read as
 // water's.

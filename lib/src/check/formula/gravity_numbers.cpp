@@ -198,6 +198,9 @@ bool checker::read_gravity_numbers(std::size_t base, const agreement& a, std::ui
     };
     std::array<found, 4> readings{};
     std::size_t found_count = 0;
+    // Terms whose g is read by its value alone: (operand, number among its literals).
+    std::array<std::pair<std::size_t, std::size_t>, 4> by_value{};
+    std::size_t by_value_count = 0;
     std::array<std::string_view, 8> texts{};
     for (const std::size_t i : a.odd) {
         const typed_term& t = operands_[base + i].type;
@@ -219,6 +222,25 @@ bool checker::read_gravity_numbers(std::size_t base, const agreement& a, std::ui
         }
         const std::span<const scale_literal> numbers(literals_.data() + t.literal_begin,
                                                      t.literal_count);
+        // "(V_b^2 - v_fps^2)/(2*9.81*0.7)": the sum inside was found in two units, so the
+        // term's scale is unknown and no range can be weighed; its g is read by its value
+        // alone, so that the slip is reported once, as the unit-scale warning it is.
+        if (!std::isfinite(t.scale)) {
+            const auto g =
+                std::find_if(numbers.begin(), numbers.end(), [&](const scale_literal& l) {
+                    return (std::abs(l.value / 9.80665 - 1.0) < 2e-3 ||
+                            std::abs(l.value / 32.174 - 1.0) < 2e-3) &&
+                           std::abs(l.exponent * 2.0 - std::round(l.exponent * 2.0)) < 1e-9 &&
+                           std::abs(l.exponent) <= 2.0 && l.exponent != 0.0 &&
+                           acceleration_dimension().expand().pow(rational(
+                               static_cast<std::int64_t>(std::round(l.exponent * 2.0)), 2)) ==
+                               lacking;
+                });
+            if (g == numbers.end() || by_value_count == by_value.size())
+                return false;
+            by_value[by_value_count++] = {i, static_cast<std::size_t>(g - numbers.begin())};
+            continue;
+        }
         if (!numbers_could_carry(numbers, lacking, texts))
             return false;
         const auto reading =
@@ -229,6 +251,11 @@ bool checker::read_gravity_numbers(std::size_t base, const agreement& a, std::ui
         if (!reading || (t.numeric && reading->shifted))
             return false;
         readings[found_count++] = {i, *reading};
+    }
+    for (std::size_t r = 0; r < by_value_count; ++r) {
+        auto& t = const_cast<typed_term&>(operands_[base + by_value[r].first].type);
+        t.dim = *a.reference;
+        read_as_quantity(literals_[t.literal_begin + by_value[r].second]);
     }
     for (std::size_t r = 0; r < found_count; ++r) {
         // Its own type: a term with numbers shares it with no other operand.
