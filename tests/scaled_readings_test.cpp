@@ -707,3 +707,14 @@ TEST_CASE("an angle in degrees over a right angle or a turn typed as a number is
                   "E_g = θ/360", "L = 2*pi*r*θ/360", "L = r*θ*pi/180"});
     fails_with(decl, {"L = r*θ", "L = 2*r*θ/360", "E_g = 1 - θ"}, plumb::rules::unit_scale);
 }
+
+// EN 1991-1-3:2003 Table 5.2 (from memory): a roof's snow shape coefficient μ1 = 0.8 up to
+// 30° and 0.8·(60 − α)/30 from 30° to 60°, a range of angles over another, every number in
+// degrees. It was a unit-scale warning asking to divide by 57.2958, in notation and in a
+// workbook; a range typed beside the reading reads its divisor as an angle too. An angle in
+// degrees standing for radians alone is still reported.
+TEST_CASE("a range of angles over a number of degrees is a ratio") {
+    const std::string decl = "α : °\nμ_1 : 1\n";
+    passes(decl, {"μ_1 = 0.8*(60 - α)/30", "μ_1 = 0.8*(α - 30)/30"});
+    fails_with(decl, {"μ_1 = 0.8*α"}, plumb::rules::unit_scale);
+}

@@ -53,11 +53,6 @@ EXTRA = {
          "to be read). A trade constant plumb does not know, not a slip", "Station!C30 result-unit"),
     ],
     "roof-purlin": [
-        ("a correct cell plumb flags wrongly: μ1 = 0.8·(60 - α)/30 for 30° < α < 60°, EN "
-         "1991-1-3:2003 Table 5.2, with α, 60 and 30 all in degrees (a ratio of angles); plumb "
-         "reads the 60 as degrees beside C7 but the 30 as a bare number, so it wants the "
-         "degrees turned to radians and advises dividing by 57.2958, which would be wrong",
-         "Purlin!C8 unit-scale"),
         ("a note on a correct cell: 9.81 read as standard gravity, which it is (kN/m² × 1000 / "
          "9.81 gives kg/m²)", "Purlin!C17 gravity-number"),
         ("a note on a correct cell: 9.81 read as standard gravity, which it is (kg/m × 9.81 / "
@@ -85,10 +80,6 @@ MESSAGES = {
         "Kettle!C44": "\"to give lb/h it must multiply by 2.20462 (1/0.45359237), but it "
                       "multiplies by 0.45359237\": right cell and rule, but the formula divides "
                       "by 2.205; 'divides by 2.205 where it should multiply' would be plainer",
-    },
-    "roof-purlin": {
-        "Purlin!C8": "\"divide '0.8*(60-C7)/30' by 57.2958\": wrong advice on a correct cell "
-                     "(EN 1991-1-3 Table 5.2)",
     },
 }
 

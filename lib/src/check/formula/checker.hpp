@@ -1319,7 +1319,8 @@ class checker {
     [[gnu::noinline]] void factor_out_common_numbers_of(std::span<const operand> terms);
     [[gnu::noinline]] typed_term eval_product(std::uint32_t index);
     void read_ratio_of_whole_numbers(std::uint32_t literals_begin);
-    void read_angle_over_right_angles(typed_term& t, std::uint32_t literals_begin);
+    void read_angle_over_right_angles(typed_term& t, std::uint32_t literals_begin,
+                                      std::uint32_t index);
     // In line in eval_product, its one caller, as it was before the rules left its file.
     [[gnu::always_inline]] inline typed_term eval_factors(std::uint32_t index);
     static double unit_power(double scale, double exponent);

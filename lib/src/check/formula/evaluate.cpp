@@ -1035,7 +1035,7 @@ typed_term checker::eval_product(std::uint32_t index) {
         read_ratio_of_whole_numbers(literals_before);
     if (literals_.size() > literals_before && t.known && t.dim.is_dimensionless() &&
         std::abs(t.scale * 180.0 / std::numbers::pi - 1.0) < 1e-12) [[unlikely]]
-        read_angle_over_right_angles(t, literals_before);
+        read_angle_over_right_angles(t, literals_before, index);
     return t;
 }
 
@@ -1043,7 +1043,16 @@ typed_term checker::eval_product(std::uint32_t index) {
 // "2*π*r*θ/360" (an arc): an angle in degrees over a right angle, a half or a whole turn typed as
 // 90, 180 or 360 is a ratio of angles, the number being in degrees too. Not beside π, where 180
 // converts degrees to radians (θ*π/180).
-void checker::read_angle_over_right_angles(typed_term& t, std::uint32_t literals_begin) {
+void checker::read_angle_over_right_angles(typed_term& t, std::uint32_t literals_begin,
+                                           std::uint32_t index) {
+    // "0.8*(60 - α)/30", EN 1991-1-3's snow shape coefficient for a roof between 30° and 60°:
+    // a range of angles over another, the numbers in degrees as the reading beside them is.
+    const bool angle_range = for_each_factor(index, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        return sign > 0 && (n.kind == expr_kind::add || n.kind == expr_kind::subtract) &&
+               (file_.nodes[syntax::inside_brackets(file_, n.lhs)].kind == expr_kind::number ||
+                file_.nodes[syntax::inside_brackets(file_, n.rhs)].kind == expr_kind::number);
+    });
     scale_literal* turn = nullptr;
     for (std::size_t i = literals_begin; i < literals_.size(); ++i) {
         scale_literal& l = literals_[i];
@@ -1051,7 +1060,11 @@ void checker::read_angle_over_right_angles(typed_term& t, std::uint32_t literals
             std::abs(l.value / std::numbers::pi - 1.0) < 1e-3)
             return;
         const std::string_view written = text(file_.nodes[l.node].range);
-        if (l.exponent == -1.0 && (written == "90" || written == "180" || written == "360"))
+        const bool whole =
+            !written.empty() && std::all_of(written.begin(), written.end(),
+                                            [](char c) { return c >= '0' && c <= '9'; });
+        if (l.exponent == -1.0 &&
+            (written == "90" || written == "180" || written == "360" || (angle_range && whole)))
             turn = &l;
     }
     if (turn == nullptr)
