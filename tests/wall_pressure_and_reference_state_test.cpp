@@ -474,8 +474,9 @@ TEST_CASE("an atmosphere typed as a number that is not the site's declared barom
     fails_with(meter, {"p_f = p_g + 14.73"}, plumb::rules::offset_scale);
     const auto r = run(meter, "p_f = p_g + 14.73");
     const plumb::diagnostic& d = first_under(r, plumb::rules::offset_scale);
+    // The barometer named is the one declared in the sum's unit, psi, as the advice's is.
     CHECK(plumb::test::says(d, "14.73 is an atmosphere of 101.56 kPa, but this file declares "
-                               "the site's barometer 'p_bar'"));
+                               "the site's barometer 'p_b'"));
     CHECK(plumb::test::says(d, "4.7 kPa high"));
     CHECK(plumb::test::says(d, "write (... + p_b)"));
     // The site's own barometer typed in (28.6 inHg is 14.05 psi) is read with a note.

@@ -123,7 +123,8 @@ void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_v
                fmt::format("{} is {}, but this file declares the site's barometer '{}' ({} kPa, "
                            "as the standard atmosphere has about {} m up): the absolute pressure "
                            "comes out {} kPa {}",
-                           display_text(file_.nodes[number].range), what, site.name,
+                           display_text(file_.nodes[number].range), what,
+                           barometer_in_unit(unit).value_or(site.name),
                            format_factor(site.pascals / 1000.0),
                            static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10),
                            format_factor(std::round(std::abs(off) / 100.0) / 10.0),
