@@ -1188,6 +1188,9 @@ class checker {
     unsigned clock_units_of_formula() const;
     std::string days_a_year_note() const;
     bool divides_by_gravity_number(std::uint32_t literals_begin) const;
+    static bool is_typed_gravity(const scale_literal& l);
+    static bool written_whole(std::string_view written);
+    double unit_of_written_numbers(const typed_term& t) const;
     std::pair<double, std::string> unit_of_numbers(const typed_term& t,
                                                    const unit_definition& scale) const;
     bool mixes_units_of_one_kind(std::uint32_t root) const;

@@ -1015,13 +1015,21 @@ typed_term checker::eval_factors(std::uint32_t index) {
 // 9.807, 32.2, 32.17; g_n = 9.80665 m/s² = 32.174 ft/s², SI Brochure 9th ed., NIST SP 811
 // (2008), B.8), which the sum around it will read as g.
 bool checker::divides_by_gravity_number(std::uint32_t literals_begin) const {
-    for (std::size_t i = literals_begin; i < literals_.size(); ++i) {
-        const scale_literal& l = literals_[i];
-        if (l.exponent == -1.0 &&
-            (std::abs(l.value / 9.80665 - 1.0) < 2e-3 || std::abs(l.value / 32.174 - 1.0) < 2e-3))
+    for (std::size_t i = literals_begin; i < literals_.size(); ++i)
+        if (literals_[i].exponent == -1.0 && is_typed_gravity(literals_[i]))
             return true;
-    }
     return false;
+}
+
+// 9.81, 9.807, 32.2, 32.17: standard gravity as calcs round it, in m/s² or ft/s².
+bool checker::is_typed_gravity(const scale_literal& l) {
+    return std::abs(l.value / 9.80665 - 1.0) < 2e-3 || std::abs(l.value / 32.174 - 1.0) < 2e-3;
+}
+
+// "30", "360": a number written as a whole number, digits alone.
+bool checker::written_whole(std::string_view written) {
+    return !written.empty() &&
+           std::all_of(written.begin(), written.end(), [](char c) { return c >= '0' && c <= '9'; });
 }
 
 typed_term checker::eval_product(std::uint32_t index) {
@@ -1060,11 +1068,8 @@ void checker::read_angle_over_right_angles(typed_term& t, std::uint32_t literals
             std::abs(l.value / std::numbers::pi - 1.0) < 1e-3)
             return;
         const std::string_view written = text(file_.nodes[l.node].range);
-        const bool whole =
-            !written.empty() && std::all_of(written.begin(), written.end(),
-                                            [](char c) { return c >= '0' && c <= '9'; });
-        if (l.exponent == -1.0 &&
-            (written == "90" || written == "180" || written == "360" || (angle_range && whole)))
+        if (l.exponent == -1.0 && (written == "90" || written == "180" || written == "360" ||
+                                   (angle_range && written_whole(written))))
             turn = &l;
     }
     if (turn == nullptr)
@@ -1085,10 +1090,8 @@ void checker::read_ratio_of_whole_numbers(std::uint32_t literals_begin) {
         return !l.power_of_ten && !l.table_digits && l.value != 1.0 && l.value < 1000.0 &&
                l.value == std::floor(l.value);
     };
-    const auto written_whole = [&](const scale_literal& l) {
-        const std::string_view written = text(file_.nodes[l.node].range);
-        return !written.empty() && std::all_of(written.begin(), written.end(),
-                                               [](char c) { return c >= '0' && c <= '9'; });
+    const auto whole_as_written = [&](const scale_literal& l) {
+        return written_whole(text(file_.nodes[l.node].range));
     };
     for (std::size_t i = literals_begin; i < literals_.size(); ++i) {
         scale_literal& over = literals_[i];
@@ -1099,8 +1102,8 @@ void checker::read_ratio_of_whole_numbers(std::uint32_t literals_begin) {
             const double ratio = over.value / under.value;
             if (under.exponent != -1.0 || !small_whole(under) || !(ratio > 0.5 && ratio < 2.0) ||
                 ratio == 1.0 || std::abs(ratio - 1.8) < 1e-12 ||
-                std::abs(ratio * 1.8 - 1.0) < 1e-12 || !written_whole(over) ||
-                !written_whole(under))
+                std::abs(ratio * 1.8 - 1.0) < 1e-12 || !whole_as_written(over) ||
+                !whole_as_written(under))
                 continue;
             read_as_quantity(over);
             read_as_quantity(under);

@@ -228,8 +228,7 @@ bool checker::read_gravity_numbers(std::size_t base, const agreement& a, std::ui
         if (!std::isfinite(t.scale)) {
             const auto g =
                 std::find_if(numbers.begin(), numbers.end(), [&](const scale_literal& l) {
-                    return (std::abs(l.value / 9.80665 - 1.0) < 2e-3 ||
-                            std::abs(l.value / 32.174 - 1.0) < 2e-3) &&
+                    return is_typed_gravity(l) &&
                            std::abs(l.exponent * 2.0 - std::round(l.exponent * 2.0)) < 1e-9 &&
                            std::abs(l.exponent) <= 2.0 && l.exponent != 0.0 &&
                            acceleration_dimension().expand().pow(rational(

@@ -179,11 +179,7 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             other.type.offset == nullptr && other.type.point && read_local_atmosphere(off))
             return;
         // "1.8*(t + 273.15)": kelvins times 1.8 are degrees Rankine, its numbers taken in.
-        double other_degree = other.type.scale;
-        for (std::uint32_t l = 0; l < other.type.literal_count; ++l) {
-            const scale_literal& number = literals_[other.type.literal_begin + l];
-            other_degree /= std::pow(number.value, number.exponent);
-        }
+        const double other_degree = unit_of_written_numbers(other.type);
         const std::string scale_of_other =
             other.type.offset != nullptr
                 ? fmt::format("the {} scale", other.type.offset->symbol)
@@ -219,6 +215,7 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             // "T_K = T_F + 273.15": where a number is added already, it is the wrong one;
             // the advice names the reading, not the whole side with that number in it.
             const expr_kind kind = file_.nodes[off.node].kind;
+            // The side as written, brackets stripped: a sum or a number times a reading.
             const syntax::expr_node& whole = file_.nodes[syntax::inside_brackets(file_, off.node)];
             const bool has_number =
                 (kind == expr_kind::add || kind == expr_kind::subtract) &&
@@ -231,17 +228,16 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             // after it; a ratio of absolute pressures (an accumulator's precharge at 0.9 of
             // the lowest working pressure, from the gas law) takes the atmosphere inside.
             std::string ratio_of_reading;
-            if (const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, off.node)];
-                !temperature && n.kind == expr_kind::multiply &&
-                file_.nodes[n.lhs].kind == expr_kind::number &&
-                file_.nodes[n.rhs].kind == expr_kind::symbol) {
-                const double factor = written_number(file_.nodes[n.lhs].range);
+            if (!temperature && whole.kind == expr_kind::multiply &&
+                file_.nodes[whole.lhs].kind == expr_kind::number &&
+                file_.nodes[whole.rhs].kind == expr_kind::symbol) {
+                const double factor = written_number(file_.nodes[whole.lhs].range);
                 if (factor >= 0.5 && factor < 1.0)
                     ratio_of_reading = fmt::format(
                         "; where {} is a ratio of absolute pressures (a gas's precharge), write "
                         "{}*({} + the atmospheric pressure) instead",
-                        text(file_.nodes[n.lhs].range), text(file_.nodes[n.lhs].range),
-                        text(file_.nodes[n.rhs].range));
+                        text(file_.nodes[whole.lhs].range), text(file_.nodes[whole.lhs].range),
+                        text(file_.nodes[whole.rhs].range));
             }
             std::string zero = format_factor(unit->offset / unit->factor);
             const auto [written_unit, absolute_unit] = unit_of_numbers(off.type, *unit);
@@ -283,9 +279,8 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             // "u_e = u_g - γ_w*h_w": a gauge reading less a column's pressure is a gauge
             // reading; where the column stands for a second reading (the hydrostatic pore
             // pressure), the difference of the two is on no scale.
-            const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, off.node)];
-            const std::uint32_t taken = sum.kind == expr_kind::subtract
-                                            ? syntax::inside_brackets(file_, sum.rhs)
+            const std::uint32_t taken = whole.kind == expr_kind::subtract
+                                            ? syntax::inside_brackets(file_, whole.rhs)
                                             : syntax::no_index;
             if (!temperature && taken != syntax::no_index &&
                 file_.nodes[taken].kind != expr_kind::number &&
@@ -507,17 +502,24 @@ bool checker::report_scale_zero_beside_difference(std::span<const operand> sides
     return false;
 }
 
+// The SI value of the unit a term's numbers are in once its own numbers are taken as
+// conversions: kPa for 6.895*p_g with p_g in psig, °R for 1.8*(t + 273.15).
+double checker::unit_of_written_numbers(const typed_term& t) const {
+    double unit = t.scale;
+    for (std::uint32_t l = 0; l < t.literal_count; ++l) {
+        const scale_literal& number = literals_[t.literal_begin + l];
+        unit /= std::pow(number.value, number.exponent);
+    }
+    return unit;
+}
+
 // "p_kPa = 6.895*p_g": the unit the numbers of a gauge reading's expression are in by then
 // (kPa), which an atmosphere added to them must be in too, with its name; its numbers are
 // taken as rounded conversions (14.5 psi per bar is 14.5038). The scale's own unit where they
 // convert to none of the pressure units calcs write.
 std::pair<double, std::string> checker::unit_of_numbers(const typed_term& t,
                                                         const unit_definition& scale) const {
-    double written_unit = t.scale;
-    for (std::uint32_t l = 0; l < t.literal_count; ++l) {
-        const scale_literal& number = literals_[t.literal_begin + l];
-        written_unit /= std::pow(number.value, number.exponent);
-    }
+    const double written_unit = unit_of_written_numbers(t);
     if (std::isfinite(written_unit) && std::abs(written_unit / scale.factor - 1.0) > 1e-3 &&
         scale.dim() == pressure_dimension().expand())
         for (const auto& u : pressure_units)
