@@ -822,11 +822,15 @@ TEST_CASE("water's density typed as a bare number in a sum, in the units around 
 // Beside a number that is a unit conversion itself (1000 Pa per kPa or N per kN, 86400 s per
 // day; NIST SP 811 (2008), B.8), the number read as gravity or water is the other one: the
 // note names 9.81, not the conversion.
+// The 3.6e6 of ρ·g·Q·H/(3.6e6·η) with Q in m³/h is 3600 s/h × 1000 W/kW (1 kWh = 3.6 MJ,
+// SI Brochure 9th ed., Table 8), though as one over g it fits a little closer than the 9.81
+// does as g.
 TEST_CASE("a conversion beside 9.81 is not the number read as gravity or water") {
     const std::string d = "Δp : kPa\nρ : kg/m^3\nH : m\nm : kg\nF : kN\nSG : 1\nq : m^3/d\n"
-                          "P : kW\n";
-    for (const char* formula :
-         {"H = Δp*1000/(ρ*9.81)", "F = m*9.81/1000", "P = 9.81*SG*q*H/86400"}) {
+                          "P : kW\nQ_h : m^3/h\nη : 1\n";
+    for (const char* formula : {"H = Δp*1000/(ρ*9.81)", "F = m*9.81/1000", "P = 9.81*SG*q*H/86400",
+                                "P = ρ*9.81*Q_h*H/(3.6e6*η)", "P = ρ*9.81*Q_h*H/(3600*1000*η)",
+                                "P = ρ*9.81*Q_h*H/3.6e6"}) {
         CAPTURE(formula);
         const auto r = run(d + formula + "\n");
         CHECK(problems_in(r) == 0);

@@ -452,6 +452,26 @@ double half_unit_in_last_digit(std::string_view text) {
     return 0.5 * std::pow(10.0, exponent - decimals + placing_zeros);
 }
 
+namespace {
+
+// 3.6e6 in ρ·g·Q·H/(3.6e6·η) is 3600 s/h times 1000 W/kW (1 kWh = 3.6 MJ, SI Brochure 9th
+// ed., Table 8), 6e4 the L/min in a m³/s: the clock's ratios times a power of ten, exactly as
+// written. (A 6 or a 60 alone is not counted: the first is a coefficient as often as not, and
+// the second is set aside already.)
+bool is_clock_ratio_times_power_of_ten(double value) {
+    for (const double ratio : {3600.0, 86400.0, 60.0}) {
+        const double decades = std::round(std::log10(value / ratio));
+        const int least = ratio == 60.0 ? 1 : -3;
+        if (decades < least || decades > 6 || decades == 0.0)
+            continue;
+        if (std::abs(value / (ratio * std::pow(10.0, decades)) - 1.0) < 1e-12)
+            return true;
+    }
+    return false;
+}
+
+} // namespace
+
 std::optional<gravity_reading> read_gravity_number(double term_scale, double reference_scale,
                                                    std::span<const scale_literal> literals,
                                                    std::span<const std::string_view> texts,
@@ -576,7 +596,9 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // A number that is itself a unit conversion (1000, 86400, 3.281) is read
                     // last: in Δp_kPa*1000/(ρ*9.81) the 9.81 is g and the 1000 converts kPa.
                     const auto rank =
-                        std::make_tuple(flipped, shifted, looks_like_conversion(number, true),
+                        std::make_tuple(flipped, shifted,
+                                        looks_like_conversion(number, true) ||
+                                            is_clock_ratio_times_power_of_ten(number.value),
                                         mask != 0, distance / nearest, reciprocal);
                     if (best && rank >= best_rank)
                         continue;
