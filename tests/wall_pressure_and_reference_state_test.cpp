@@ -288,6 +288,22 @@ TEST_CASE("a share of a gauge pressure set equal to a difference") {
     fails_with(gases, {"p_abs = 0.05*p_O2", "p_abs = 0.8*p_O2"}, plumb::rules::offset_scale);
 }
 
+// A blower's discharge gauge reads the liquid over its diffusers plus the losses in the pipes
+// and diffusers (Metcalf & Eddy, Wastewater Engineering, aeration blowers, from memory); a
+// drop to an outlet open to the air is what the gauge before it reads (common practice). A
+// pressure declared as a difference or a loss is read so; a plain absolute reading is not.
+TEST_CASE("a gauge reading set equal to declared drops and a column's pressure") {
+    const std::string blower = "p_dg : kPag\nh_w : m\nρ_w : kg/m^3\nΔp_d : kPa\n"
+                               "h_L : kPa \"diffuser and pipe losses\"\np_d : kPa\n"
+                               "σ_w : kPa \"wall stress\"\n";
+    passes(blower, {"p_dg = Δp_d", "Δp_d = p_dg", "p_dg = h_L", "p_dg = ρ_w*{g_n}*h_w/1000 + Δp_d",
+                    "p_dg = Δp_d + ρ_w*{g_n}*h_w/1000 + h_L", "p_dg = (Δp_d)"});
+    fails_with(blower,
+               {"p_dg = p_d", "p_dg = ρ_w*{g_n}*h_w/1000 + p_d", "p_dg = σ_w",
+                "p_dg = p_d - ρ_w*{g_n}*h_w/1000"},
+               plumb::rules::offset_scale);
+}
+
 // A normal cubic metre is gas at 0 °C and 101.325 kPa (DIN 1343, from memory), a standard one
 // at 15 °C (ISO 13443, from memory): an actual volume becomes one only times (p/p_n)·(T_n/T)
 // (the ideal gas law). Set equal to it directly, or with time conversions alone, the actual

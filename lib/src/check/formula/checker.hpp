@@ -756,6 +756,7 @@ class checker {
     [[gnu::noinline]] typed_term eval_power(const syntax::expr_node& n);
     bool force_over_area(std::uint32_t k) const;
     bool gradient_times_depth(std::uint32_t k) const;
+    bool declared_pressure_difference(const operand& o) const;
     bool has_factor_of_dimension(std::uint32_t k, const compact_dimension& wanted, int sign) const;
     std::optional<double> scale_left_for_sum(std::uint32_t root, const typed_term& other,
                                              std::uint32_t sum) const;

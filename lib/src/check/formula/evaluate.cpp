@@ -90,6 +90,20 @@ bool checker::gradient_times_depth(std::uint32_t k) const {
     return !other && gradients == 1 && lengths == 1;
 }
 
+// "Δp_f : kPa "friction loss"": a pressure its name or description declares a difference,
+// which a gauge reads where the far end is open to the atmosphere.
+bool checker::declared_pressure_difference(const operand& o) const {
+    if (!o.type.known || o.type.point || o.type.offset != nullptr ||
+        !(o.type.dim == pressure_dimension()))
+        return false;
+    const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, o.node)];
+    if (n.kind != expr_kind::symbol)
+        return false;
+    const std::string_view name = text(n.range);
+    const symbol_entry* e = symbols_.find(name);
+    return e != nullptr && e->reading == 0 && !names_a_stress(name, e->description);
+}
+
 // Whether a product has a symbol or a cell of the given dimension standing with `sign`
 // (+1 above the line, -1 below it, 0 either).
 bool checker::has_factor_of_dimension(std::uint32_t k, const compact_dimension& wanted,
@@ -649,6 +663,14 @@ typed_term checker::eval_sum(std::uint32_t index) {
         if (t.type.point)
             points += t.subtracted ? -1 : 1;
     result.point = points == 1;
+    // "p_d = ρ*g*h_s + Δp_f": the columns and the declared drops a blower or a pump
+    // works against add up to what its discharge gauge reads.
+    if (points == 0 && result.dim == pressure_dimension()) [[unlikely]]
+        result.absolute_pressure_difference =
+            std::all_of(terms.begin(), terms.end(), [&](const operand& t) {
+                return !t.type.point &&
+                       (t.type.absolute_pressure_difference || declared_pressure_difference(t));
+            });
     return result;
 }
 

@@ -139,7 +139,7 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
         // is (a fracture gradient from a leak-off test is gauge-based; Bourgoyne et al.,
         // Applied Drilling Engineering, 1986, ch. 6, from memory).
         const auto net_pressure = [&](const operand& o) {
-            return o.type.absolute_pressure_difference ||
+            return o.type.absolute_pressure_difference || declared_pressure_difference(o) ||
                    (!o.type.point && o.type.dim == pressure_dimension() &&
                     (pressure_scaled_by_shape(o.node, false) || force_over_area(o.node) ||
                      gradient_times_depth(o.node)));
