@@ -56,3 +56,24 @@ TEST_CASE("a wrong-way factor's error is said as a decimal") {
     CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::unit_scale),
                             "as written the result is 1.79689 times its true value"));
 }
+
+// 1 Btu/(lb·°F) = 4.1868 kJ/(kg·K) (NIST SP 811 (2008), B.8), the degree's 1.8 inside it:
+// a 1.8 or 0.5556 beside it converts the degree twice. A 1.8 beside units without a
+// temperature stays a coefficient (a load factor on a pressure, common practice).
+TEST_CASE("a degree's 1.8 beside a conversion that holds it already") {
+    const std::string decl = "cp : kJ/(kg*K)\ncp_us : Btu/(lb*°F)\nk : W/(m*K)\n"
+                             "k_us : Btu/(h*ft*°F)\np : kPa\np_psi : psi\nT_R : °R\nT_K : K\n";
+    for (const char* wrong :
+         {"cp = 4.187*1.8*cp_us", "cp = 1.8*cp_us*4.1868", "cp = 4.187*cp_us/1.8",
+          "cp = 4.187*0.5556*cp_us", "k = 1.731*1.8*k_us"}) {
+        CAPTURE(wrong);
+        const std::string found = only_finding(decl + wrong + "\n");
+        CHECK(found.find("the factor ") == 0);
+        CHECK(found.find(" is not needed") != std::string::npos);
+    }
+    for (const char* right : {"cp = 4.187*cp_us", "k = 1.731*k_us", "p = 1.8*6.895*p_psi",
+                              "T_R = 1.8*T_K", "T_K = T_R/1.8"}) {
+        CAPTURE(right);
+        CHECK(only_finding(decl + right + "\n").empty());
+    }
+}

@@ -1124,6 +1124,7 @@ class checker {
     static bool names_a_time_unit(std::string_view unit);
     static bool time_ratio_number(const scale_literal& l);
     bool spare_speed_ratio(const scale_literal& l, std::uint32_t term) const;
+    bool spare_degree_ratio(const scale_literal& l, std::uint32_t term) const;
 
     // check/formula/scale_factors.cpp
     static std::optional<trade_constant_reading>

@@ -419,7 +419,8 @@ bool checker::conversions_all_needed(std::span<const operand> ops,
         for (const scale_literal& l : parts[i].literals)
             if (looks_like_conversion(l, !dimensionless) ||
                 converts_in_term(l, ops[index[i]].type, !dimensionless) ||
-                spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node)) {
+                spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node) ||
+                spare_degree_ratio(l, ops[index[i]].node)) {
                 by *= std::pow(l.value, l.exponent);
                 slack += std::abs(l.exponent) * l.tolerance;
                 converts = true;
@@ -462,7 +463,8 @@ bool checker::report_extra_factor(std::span<const operand> ops, std::span<const 
                 // in an hour beside it are counted twice.
                 if (!(looks_like_conversion(l, !dimensionless) ||
                       converts_in_term(l, ops[index[i]].type, !dimensionless) ||
-                      spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node)) ||
+                      spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node) ||
+                      spare_degree_ratio(l, ops[index[i]].node)) ||
                     (l.exponent == 1.0 && (l.value == 1e3 || l.value == 1e6 || l.value == 1e9) &&
                      l.value == counted_multiple(ops[index[i]].node)))
                     continue;
@@ -503,7 +505,8 @@ bool checker::report_unneeded_factor(std::span<const operand> ops,
         for (const auto& l : parts[i].literals)
             if (converts_in_term(l, ops[index[i]].type, !dimensionless || in_percent) ||
                 spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node) ||
-                spare_speed_ratio(l, ops[index[i]].node)) {
+                spare_speed_ratio(l, ops[index[i]].node) ||
+                spare_degree_ratio(l, ops[index[i]].node)) {
                 net *= std::pow(l.value, l.exponent);
                 if (first == nullptr)
                     first = &l;

@@ -73,7 +73,8 @@ bool checker::units_agree_with_plain_numbers(std::span<const operand> ops, doubl
         for (std::uint32_t l = 0; l < op.type.literal_count; ++l) {
             const scale_literal& number = literals_[op.type.literal_begin + l];
             if (converts_in_term(number, op.type, !dimensionless) ||
-                spare_time_ratio(number, op.type, op.node) || spare_speed_ratio(number, op.node))
+                spare_time_ratio(number, op.type, op.node) || spare_speed_ratio(number, op.node) ||
+                spare_degree_ratio(number, op.node))
                 return false;
             // A 100 in a term in percent: see report_unneeded_factor.
             if (dimensionless && number.power_of_ten &&
@@ -763,6 +764,27 @@ bool checker::spare_speed_ratio(const scale_literal& l, std::uint32_t term) cons
                      [&](double r) { return std::abs(l.value / r - 1.0) <= l.tolerance + 1e-9; }))
         return false;
     return has_factor_of_dimension(term, velocity_dim, 0);
+}
+
+// "c_p = 4.187*1.8*c_p_us" from Btu/(lb·°F): 4.1868 kJ/(kg·K) holds the degree's 1.8
+// already (NIST SP 811 (2008), B.8), and a 1.8 or a 5/9 beside it, where the units agree
+// without it, converts the degree twice. Only beside a symbol or cell that carries a
+// temperature: elsewhere 1.8 is as likely a coefficient.
+bool checker::spare_degree_ratio(const scale_literal& l, std::uint32_t term) const {
+    if (std::abs(l.exponent) != 1.0 ||
+        (l.value != 1.8 && std::abs(l.value * 1.8 - 1.0) > l.tolerance * 1.8 + 1e-9))
+        return false;
+    const auto carries_temperature = [](const std::optional<dimension>& d) {
+        return d && !d->exponent(base_dimension::temperature).is_zero();
+    };
+    return for_each_factor(term, [&](std::uint32_t at, int) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::symbol) {
+            const symbol_entry* e = symbols_.find(text(n.range));
+            return e != nullptr && carries_temperature(e->dim);
+        }
+        return n.kind == expr_kind::reference && carries_temperature(file_.references[n.lhs].dim);
+    });
 }
 
 } // namespace plumb::formula_check
