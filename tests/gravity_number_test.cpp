@@ -1075,3 +1075,15 @@ TEST_CASE("the hours of a year are not read as a density") {
     for (const auto& d : r.diagnostics)
         CHECK(d.message.find("'8760' is read as the density") == std::string::npos);
 }
+
+// Dry air at 0 °C and 101.325 kPa is 1.293 kg/m³ as the tables print it (DIN 1343's normal
+// state, from memory), the ideal gas's 1.2922 rounded up by the real gas's compressibility: a
+// compressor's free air delivery in normal cubic metres times 1.293 is its mass flow.
+TEST_CASE("air's density at the normal state typed as a number") {
+    const std::string d = "m : kg/s\nm_h : kg/h\nQ_N : Nm3/min\nQ_Nh : Nm3/h\n";
+    passes_with_one_note(d, {"m = Q_N*1.293/60", "m_h = Q_Nh*1.293", "m_h = 1.2929*Q_Nh"},
+                         plumb::rules::trade_constant);
+    // 1.30 is past it, and a missing /60 stays a finding.
+    CHECK(problems_in(run(d + "m = Q_N*1.31/60\n")) > 0);
+    CHECK(problems_in(run(d + "m = Q_N*1.293\n")) > 0);
+}

@@ -84,6 +84,7 @@ const std::array<carried_quantity, 28>& quantities() {
                 least,
                 greatest};
         };
+        const double air_at_normal_state = 1.2930;
         const double air_heat_least = air_density(40.0) * 1005.0;
         const double air_heat_greatest = air_density(0.0) * 1007.0;
         // An ideal gas's molar volume V_m = R·T/p at 101.325 kPa from 0 to 25 °C (R = 8.314462618
@@ -165,14 +166,16 @@ const std::array<carried_quantity, 28>& quantities() {
              "write the latent heat in a cell that holds its unit to say so",
              length * length / (time * time), 2256.0e3, 2257.5e3},
             // The air trade's 4.5 lb/h per cfm (0.075 lb/ft³ times 60 min/h) in moisture and
-            // steam loads, m = 4.5*cfm*ΔW (common practice).
+            // steam loads, m = 4.5*cfm*ΔW (common practice). At 0 °C the tables print the real
+            // gas's 1.293 kg/m³ (DIN 1343's normal state, from memory), 0.06 % above the ideal
+            // gas's 1.2922: a normal cubic metre's mass.
             {rules::trade_constant, "the density of air", "\u03C1_a", "1/\u03C1_a",
-             " (dry air at 101.325 kPa between 0 and 40 \u00B0C: 1.13 to 1.29 kg/m\u00B3; "
+             " (dry air at 101.325 kPa between 0 and 40 \u00B0C: 1.13 to 1.293 kg/m\u00B3; "
              "at altitude it is less)",
              "declare the air's density with its unit (\u03C1_a : kg/m^3 = 1.2), at the "
              "site's altitude and temperature, to say so",
              "write the air's density in a cell that holds its unit to say so", density,
-             air_density(40.0), air_density(0.0), carried_quantity::term_kind::volume_flow},
+             air_density(40.0), air_at_normal_state, carried_quantity::term_kind::volume_flow},
             // Wind's velocity pressure q = 0.00256*K_z*K_zt*K_d*V^2 in psf from mph (ASCE 7-16,
             // eq. 26.10-1, from memory) and 0.613*V^2 in Pa from m/s: half the density of air.
             {rules::trade_constant, "half the density of air", "\u03C1_a/2", "2/\u03C1_a",
