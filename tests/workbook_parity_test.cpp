@@ -826,6 +826,27 @@ TEST_CASE("workbook parity: empirical fits typed with bare constants, and more u
                                                        "F!B6 trade-constant", "F!B9 unit-scale"});
 }
 
+TEST_CASE("workbook parity: the Magnus fit solved for the dew point, its constants typed") {
+    // t_d = b·ln(p_w/c)/(a - ln(p_w/c)) with a = 17.625, b = 243.04 °C and c = 6.1094 hPa
+    // (Alduchov and Eskridge 1996, from memory): the sheet cannot give 6.1094 a unit, so a
+    // cell over a number inside LN is read as over a reference value in the cell's unit, and
+    // the result is a reading on the °C scale, each with a note. A vapour pressure under LN
+    // with no number, and the fit into a cell in K, stay findings.
+    const check_report r = check_one_sheet(
+        "D", sheet_of({
+                 {"12.4", "hPa"},                                        // B2
+                 {"=243.04*LN(B2/6.1094)/(17.625-LN(B2/6.1094))", "°C"}, // B3
+                 {"=243.04*LN(B2)/(17.625-LN(B2))", "°C"},               // B4: no reference
+                 {"=243.04*LN(B2/6.1094)/(17.625-LN(B2/6.1094))", "K"},  // B5: not °C
+                 {"=0.61094*EXP(17.625*B3/(B3+243.04))", "kPa"},         // B6
+             }));
+    CHECK(cell_findings(r) ==
+          std::vector<std::string>{
+              "D!B3 trade-constant", "D!B3 trade-constant", "D!B3 trade-constant",
+              "D!B4 dimensioned-argument", "D!B4 dimensioned-argument", "D!B5 result-unit",
+              "D!B5 trade-constant", "D!B5 trade-constant", "D!B6 trade-constant"});
+}
+
 TEST_CASE("workbook parity: a formula of numbers alone is in the unit written beside it") {
     // A motor size picked from the standard ratings, =IF(B2<=55,55,75) beside kW (IEC 60072-1
     // frame ratings, from memory): the numbers carry no unit and are in the cell's, as a typed

@@ -1171,6 +1171,7 @@ class checker {
     // check/formula/origins.cpp
     static bool celsius_reading(const operand& o);
     bool magnus_solved_for_reading(const operand& o) const;
+    std::uint32_t magnus_constant_typed(std::uint32_t node) const;
     bool explain_reversed_fahrenheit(diagnostic& d, const operand& a, const operand& b);
     [[gnu::noinline]] void compare_origins(std::span<const operand> sides,
                                            std::string_view relation);
@@ -1307,6 +1308,7 @@ class checker {
     void report_degrees_taken_as_radians(const builtin_function& f, const operand& a);
     void require_unit_free(const builtin_function& f, const operand& a);
     bool require_dimensionless(const builtin_function& f, const operand& a);
+    bool reference_value_typed_in_cell_unit(const builtin_function& f, const operand& a);
 
     // check/formula/evaluate.cpp
     std::string quote(std::uint32_t node) const;

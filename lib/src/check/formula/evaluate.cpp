@@ -1480,6 +1480,8 @@ typed_term checker::eval_call(const syntax::expr_node& n) {
         for (const auto& a : args) {
             if (a.type.known && a.type.offset != nullptr && !a.type.reading_or_difference)
                 report_offset(a.node, *a.type.offset, fmt::format("the argument of {}", f->name));
+            else if (reference_value_typed_in_cell_unit(*f, a)) [[unlikely]]
+                continue;
             else if (require_dimensionless(*f, a))
                 require_unit_free(*f, a);
         }

@@ -196,6 +196,36 @@ void checker::report_degrees_taken_as_radians(const builtin_function& f, const o
          {}});
 }
 
+// "=243.04*LN(C53/6.1094)/(17.625-LN(C53/6.1094))", the Magnus fit solved for the dew
+// point (Alduchov and Eskridge 1996, from memory): a workbook's numbers carry no units, so a
+// cell over a number inside a logarithm is the cell over a reference value in its own unit,
+// as the fit's 6.1094 hPa is. Read so, with a note, as the fit's forward form is.
+bool checker::reference_value_typed_in_cell_unit(const builtin_function& f, const operand& a) {
+    if (file_.functions != syntax::function_names::spreadsheet || !a.type.known ||
+        a.type.dim.is_dimensionless() || (f.name != "LN" && f.name != "LOG" && f.name != "LOG10"))
+        return false;
+    const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, a.node)];
+    if (n.kind != expr_kind::divide)
+        return false;
+    const syntax::expr_node& cell = file_.nodes[syntax::inside_brackets(file_, n.lhs)];
+    const syntax::expr_node& number = file_.nodes[syntax::inside_brackets(file_, n.rhs)];
+    if (cell.kind != expr_kind::reference || number.kind != expr_kind::number ||
+        !(written_number(number.range) > 0))
+        return false;
+    const syntax::reference_value& r = file_.references[cell.lhs];
+    if (!r.dim || r.offset != nullptr || r.unit_text.empty())
+        return false;
+    diagnostic& d = report(
+        rules::trade_constant,
+        fmt::format("{} is read as a reference value in {}'s unit, {}: the argument of "
+                    "{} is then a ratio",
+                    display_text(number.range), display_text(cell.range), r.unit_text, f.name),
+        number.range);
+    d.level = severity::note;
+    d.notes.push_back({"the fit holds only with its inputs in the units it was made for", {}});
+    return true;
+}
+
 void checker::require_unit_free(const builtin_function& f, const operand& a) {
     const bool angle = takes_an_angle(f.name);
     if (angle && angle_written_in_degrees(a))
