@@ -324,7 +324,8 @@ TEST_CASE("unit scale: a trade's constant for other units is offered its counter
     const auto r = plumb::check_text("p.plumb", decl + "P_kW = p_sys*Q_lpm/(1714*η_t)\n");
     const auto scales = findings(r, plumb::rules::unit_scale);
     REQUIRE(scales.size() == 1);
-    CHECK(mentions(*scales[0], "these units need 600 in its place"));
+    CHECK(mentions(*scales[0], "if 1714 was meant as the conversion, write 600 in its place"));
+    CHECK(scales[0]->message.find("if 1714 was meant as the conversion") != std::string::npos);
     CHECK(findings(plumb::check_text("p.plumb", decl + "P_kW = p_sys*Q_lpm/(600*η_t)\n"),
                    plumb::rules::unit_scale)
               .empty());
@@ -332,6 +333,25 @@ TEST_CASE("unit scale: a trade's constant for other units is offered its counter
     const auto d = plumb::check_text("d.plumb", beam + "δ = 5*w*L^4/(384*E*I*1000)\n");
     REQUIRE(findings(d, plumb::rules::unit_scale).size() == 1);
     CHECK(!mentions(*findings(d, plumb::rules::unit_scale)[0], "in its place"));
+}
+
+// Air power in hp is cfm × in. w.g./6356 (AMCA 201, from memory; 6343.3 from NIST SP 811
+// (2008), B.8 factors), water horsepower gpm × ft/3960 (Hydraulic Institute, from memory): the
+// pump's 3960 on a fan is 1.6 times too large. Read as a coefficient it would be 6343 times,
+// and the advice to divide by that alone would leave a power 3960 times too small, so the
+// finding counts both readings.
+TEST_CASE("unit scale: a trade's constant for other units is counted both ways") {
+    const std::string decl = "Q : cfm\nΔp : inH2O\nP : hp\n";
+    const auto r = plumb::check_text("f.plumb", decl + "P = Q*Δp/3960\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(scales[0]->message.find("counts 1.60185 times as much as 'P' if 3960 was meant as the "
+                                  "conversion, 6343.31 times as much if it is a coefficient") !=
+          std::string::npos);
+    CHECK(mentions(*scales[0], "if 3960 was meant as the conversion, write 6343.31 in its place; "
+                               "if it is a coefficient of the formula, divide 'Q*Δp/3960' by "
+                               "6343.31"));
+    CHECK(plumb::check_text("f.plumb", decl + "P = Q*Δp/6356\n").diagnostics.size() <= 1);
 }
 
 // A pump set's energy a year, E = N·P/(η/100)·8760·u/100 in kWh/yr with η and u in % (8760 h

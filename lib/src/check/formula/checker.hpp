@@ -1125,6 +1125,7 @@ class checker {
     static bool time_ratio_number(const scale_literal& l);
     bool spare_speed_ratio(const scale_literal& l, std::uint32_t term) const;
     bool spare_degree_ratio(const scale_literal& l, std::uint32_t term) const;
+    static bool is_power_trade_constant(double written);
 
     // check/formula/scale_factors.cpp
     static std::optional<trade_constant_reading>

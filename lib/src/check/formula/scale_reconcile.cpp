@@ -339,6 +339,7 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     double written = 0.0;
     double coefficient_exponent = 0.0;
     int coefficient_digits = 0;
+    bool coefficient_on_odd_side = false;
     std::optional<std::string> other_unit_note;
     // "60*W*L*c*ΔT/(h_fg*t)" into lb/h with t in min and h_fg in kJ/kg: the clock's 60 is
     // the conversion it was written as, and the factor advised (2.326) leaves it in, as the
@@ -373,6 +374,7 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                     coefficient_digits = significant_digits(text(file_.nodes[l.node].range));
                     coefficient = &l;
                     on_odd_side = side == r.odd;
+                    coefficient_on_odd_side = on_odd_side;
                 }
         // "P_hp = T_e*v/33000" with v in m/s: the number is the conversion these units
         // need with one symbol in the other system's unit. It is counted as the conversion
@@ -395,15 +397,34 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     if (!sides)
         inner_scale_ratio_ = ratio;
     const std::optional<rational> exact_inverse = exact_product(rational(1), exact_ratio, true);
+    // "P_ahp = Q_cfm*Δp_wg/3960": the pump trade's 3960 where a fan's 6356 belongs. Where
+    // the one number printed as a conversion is within a factor of five of the one these
+    // units need in its place (1714 and 600, 3960 and 6343), it may be either a coefficient
+    // or the conversion meant; the finding is counted both ways, so that neither advice,
+    // followed alone, leaves the other reading's slip.
+    const double in_place = std::pow(needed, coefficient_exponent);
+    const bool in_place_offered =
+        !other_unit_note && coefficient_count == 1 && std::isfinite(in_place) && in_place > 0 &&
+        std::abs(written / needed - 1.0) > 0.05 && std::abs(coefficient_exponent) == 1.0 &&
+        std::abs(std::log10(in_place / written)) <= std::log10(5.0) &&
+        (written >= 10.0 || coefficient_digits >= 3);
+    const bool counted_both_ways = in_place_offered && is_power_trade_constant(written);
+    std::string counted = fmt::format("{} times as much as {}", format_factor(exact_ratio, ratio),
+                                      quote(reference.node));
+    if (counted_both_ways)
+        counted = fmt::format(
+            "{} times as much as {} if {} was meant as the conversion, {} times as much if it is "
+            "a coefficient",
+            format_factor(
+                std::pow(coefficient_on_odd_side ? written / in_place : in_place / written,
+                         coefficient_exponent)),
+            quote(reference.node), coefficients, format_factor(exact_ratio, ratio));
+    std::string headline =
+        fmt::format("as written, {} counts {}: the {} agree in dimension but not in unit",
+                    quote(op.node), counted, what.name());
     // A warning: in a unit-aware calc the units convert themselves; where numbers are
     // put in as declared (spreadsheets, code), the result is off by the ratio.
-    diagnostic& d =
-        report(rules::unit_scale,
-               fmt::format("as written, {} counts {} times as much as {}: the {} agree in "
-                           "dimension but not in unit",
-                           quote(op.node), format_factor(exact_ratio, ratio), quote(reference.node),
-                           what.name()),
-               file_.nodes[op.node].range);
+    diagnostic& d = report(rules::unit_scale, std::move(headline), file_.nodes[op.node].range);
     d.level = severity::warning;
     add_term(d, op);
     add_term(d, reference);
@@ -423,17 +444,12 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                            {}});
     else if (other_unit_note)
         d.notes.push_back({std::move(*other_unit_note), {}});
-    else if (const double in_place = std::pow(needed, coefficient_exponent);
-             coefficient_count == 1 && std::isfinite(in_place) && in_place > 0 &&
-             std::abs(coefficient_exponent) == 1.0 &&
-             std::abs(std::log10(in_place / written)) <= std::log10(5.0) &&
-             (written >= 10.0 || coefficient_digits >= 3))
-        // "P_kW = p_bar*Q_lpm/(1714*η)": 1714 is the conversion for psi, gpm and hp; the
-        // advice to divide by 600 alone would keep it, and the result would pass 1714 times
-        // too small. Both readings are offered where the number needed is within a factor of
-        // five of the written one, as a trade's constants for two systems of units are (1714
-        // and 600, 3960 and 1714), and the number is printed as a conversion is; a formula's
-        // own 384 beside a 10, or its 0.75, is left a coefficient.
+    else if (counted_both_ways) {
+        // The advice below gives both readings.
+    } else if (in_place_offered)
+        // "V_hL = 1.59*V_bb": a number within a factor of five of the one these units need,
+        // printed as a conversion is, may be either; a formula's own 384 beside a 10, or its
+        // 0.75, is left a coefficient.
         d.notes.push_back(
             {fmt::format("{} counted as a coefficient, not a unit conversion; if it was meant "
                          "to convert units, these units need {} in its place",
@@ -518,15 +534,37 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     if (round_factor)
         if (std::string power = format_factor(*round_factor); power != factor)
             factor = fmt::format("{} ({} with the rounded numbers as written)", power, factor);
-    d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
-                                   "write the conversion factor into the formula)",
-                                   multiply ? "multiply" : "divide", quote(op.node), factor),
-                       {}});
+    if (counted_both_ways)
+        d.notes.push_back({fmt::format("if {} was meant as the conversion, write {} in its "
+                                       "place; if it is a coefficient of the formula, {} {} by {}",
+                                       coefficients, format_factor(in_place),
+                                       multiply ? "multiply" : "divide", quote(op.node), factor),
+                           {}});
+    else
+        d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
+                                       "write the conversion factor into the formula)",
+                                       multiply ? "multiply" : "divide", quote(op.node), factor),
+                           {}});
     // "E_yr = E_d/1000" beside "d_w : d/yr": 365 counts every day of a year, but a rate kept
     // on working days counts those.
     if (std::abs(advised / 365.0 - 1.0) < 1e-3 || std::abs(advised / 365.25 - 1.0) < 1e-6)
         d.notes.push_back({days_a_year_note(), {}});
     return false;
+}
+
+// The numbers the pump, fan, drive and refrigeration trades print to turn their units of flow,
+// pressure, torque and speed into horsepower, kilowatts or tons (Hydraulic Institute, AMCA,
+// ASHRAE; common practice): gpm·ft/3960, gpm·psi/1714, cfm·in. w.g./6356, L/min·bar/600,
+// m³/h·m/367, L/s·m/102, ft·lbf/min/33000, ft·lbf/s/550, lbf·ft·rpm/5252, lbf·in·rpm/63025,
+// N·m·rpm/9549, Btu/h per hp 2545 and per kW 3412, 12000 Btu/h per ton, gpm per ft³/s 448.8.
+// Each is a conversion for one set of units, and put beside another set it is the wrong
+// conversion, not a coefficient of the formula.
+bool checker::is_power_trade_constant(double written) {
+    static constexpr std::array<double, 18> constants{
+        3960.0, 1714.0,  6356.0, 6350.0, 600.0,  367.0,  102.0,  33000.0, 550.0,
+        5252.0, 63025.0, 9549.0, 9550.0, 2545.0, 3412.0, 3413.0, 12000.0, 448.8};
+    return std::any_of(constants.begin(), constants.end(),
+                       [&](double c) { return std::abs(written / c - 1.0) < 1e-9; });
 }
 
 // The days a year a rate runs: 365 for a calendar year, or the symbol the file declares in
