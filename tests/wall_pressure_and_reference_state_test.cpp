@@ -377,6 +377,11 @@ TEST_CASE("the sea-level atmosphere where the file declares the site's barometer
                             "declares the site's barometer 'p_b' (96.2 kPa"));
     passes(site, {"p_abs = p_g + p_b"});
     passes(site, {"p_abs = p_g + 96.2"}, 1);
+    // In a psi sum the barometer declared in kPa is given in psi (96.2 kPa is 13.9526 psi,
+    // 1 psi = 6.894757 kPa, NIST SP 811 (2008), B.8): its name alone would add kPa to psi.
+    const auto psi = run(site, "p_apsi = p_gpsi + 14.7");
+    CHECK(plumb::test::says(first_under(psi, plumb::rules::offset_scale),
+                            "write (... + 13.9526), 'p_b' in the sum's unit"));
     // A site at 3850 m (62.9 kPa, the standard atmosphere, from memory) is held to its
     // barometer too: the sea level's there is 38 kPa high.
     const std::string andes = "p_b : kPa = 62.9 \"site barometer\"\np_g : kPag\np_abs : kPa\n";

@@ -131,15 +131,26 @@ void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_v
                            off > 0 ? "high" : "low"),
                file_.nodes[number].range);
     d.level = severity::warning;
+    // "p_psia = p_psig + 14.696" with the barometer declared in kPa: the name alone would add
+    // kilopascals to psi; the barometer's value in the sum's unit is given with it.
+    std::string barometer;
+    std::string converted;
+    if (const auto name = barometer_in_unit(unit)) {
+        barometer = std::string(*name);
+    } else if (!(unit > 0.0) || !std::isfinite(unit) || std::abs(site.unit / unit - 1.0) < 1e-9) {
+        barometer = std::string(site.name);
+    } else {
+        barometer = format_factor(site.pascals / unit);
+        converted = fmt::format(", '{}' in the sum's unit", site.name);
+    }
     d.notes.push_back(
         {added_to_gauge
              ? fmt::format("a gauge reading plus the local atmosphere is absolute: write (... + "
-                           "{})",
-                           barometer_in_unit(unit).value_or(site.name))
+                           "{}){}",
+                           barometer, converted)
              : fmt::format("the atmosphere where the reading is taken is the site's: write {} "
-                           "in place of {}",
-                           barometer_in_unit(unit).value_or(site.name),
-                           display_text(file_.nodes[number].range)),
+                           "in place of {}{}",
+                           barometer, display_text(file_.nodes[number].range), converted),
          {}});
 }
 
