@@ -382,6 +382,10 @@ TEST_CASE("the sea-level atmosphere where the file declares the site's barometer
     const auto psi = run(site, "p_apsi = p_gpsi + 14.7");
     CHECK(plumb::test::says(first_under(psi, plumb::rules::offset_scale),
                             "write (... + 13.9526), 'p_b' in the sum's unit"));
+    // Set equal to a gauge reading, the atmosphere added is the one slip, reported once.
+    const auto onto_gauge = run(site, "p_gpsi = p_g/6.895 + 14.7");
+    CHECK(problems_in(onto_gauge) == 1);
+    CHECK(plumb::test::says(first_under(onto_gauge, plumb::rules::offset_scale), "drop the 14.7"));
     // A site at 3850 m (62.9 kPa, the standard atmosphere, from memory) is held to its
     // barometer too: the sea level's there is 38 kPa high.
     const std::string andes = "p_b : kPa = 62.9 \"site barometer\"\np_g : kPag\np_abs : kPa\n";

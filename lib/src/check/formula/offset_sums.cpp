@@ -734,7 +734,13 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
             shifted_to_a_zero = true;
         }
     }
-    if (shifted_to_a_zero && gauges > 0 && std::abs(final_origin) <= tolerance + 1e-9)
+    // "p_psig = p_d/6.895 + 14.696": set equal to a gauge reading, the atmosphere added is
+    // the slip, which the sides' finding names; which atmosphere it was is beside the point.
+    const bool side_on_gauge = sum_side_hint_ != nullptr && sum_side_hint_->known &&
+                               sum_side_hint_->offset != nullptr &&
+                               sum_side_hint_->offset->scale == unit_scale::gauge;
+    if (shifted_to_a_zero && gauges > 0 && std::abs(final_origin) <= tolerance + 1e-9 &&
+        !side_on_gauge)
         warn_sea_level_atmosphere_at_site(terms, unit);
     else if (has_shift && gauges == 0 && result.known && result.dim == pressure_dimension())
         [[unlikely]]
