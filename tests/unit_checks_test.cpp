@@ -2,6 +2,7 @@
 // dimension, and quantities and constants written inside formulas.
 #include "plumb/check.hpp"
 #include "plumb/rules.hpp"
+#include "test_support.hpp"
 
 #include <doctest/doctest.h>
 
@@ -471,4 +472,28 @@ TEST_CASE("a number past a double's range is an overflow finding, not a factor o
     CHECK(big.diagnostics[0].rule == plumb::rules::overflow);
     CHECK(plumb::check_text("c.plumb", d + "x = y*1e300\n").diagnostics.size() == 1);
     CHECK(plumb::check_text("c.plumb", d + "x = y*1.0\n").diagnostics.empty());
+}
+
+// The log-mean temperature difference written as (ΔT_1 - ΔT_2)/(ln ΔT_1 - ln ΔT_2) (Kern,
+// Process Heat Transfer, ch. 5, from memory): ln a - ln b = ln(a/b) for two quantities in one
+// unit. Of two dimensions, or of °C readings, it stays an error; in two units, a warning.
+TEST_CASE("a difference of the logarithms of two quantities in one unit") {
+    const std::string decl = "ΔT_1, ΔT_2, ΔT_lm : K\nΔx : mm\nT_1, T_2 : °C\np_1 : kPa\n"
+                             "p_2 : bar\np_3 : kPa\nn : 1\n";
+    for (const char* right : {"ΔT_lm = (ΔT_1 - ΔT_2)/(ln(ΔT_1) - ln(ΔT_2))",
+                              "n = log10(p_1) - log10(p_3)", "n = (ln(p_1) - ln(p_3))/ln(2)"}) {
+        CAPTURE(right);
+        CHECK(plumb::test::problems_in(plumb::check_text("l.plumb", decl + right + "\n")) == 0);
+    }
+    const auto two_dims =
+        plumb::check_text("l.plumb", decl + "ΔT_lm = (ΔT_1 - ΔT_2)/(ln(ΔT_1) - ln(Δx))\n");
+    CHECK(findings(two_dims, plumb::rules::dimensioned_argument).size() == 2);
+    const auto celsius =
+        plumb::check_text("l.plumb", decl + "ΔT_lm = (T_1 - T_2)/(ln(T_1) - ln(T_2))\n");
+    CHECK(findings(celsius, plumb::rules::offset_scale).size() == 2);
+    const auto units = plumb::check_text("l.plumb", decl + "n = log10(p_1) - log10(p_2)\n");
+    CHECK(findings(units, plumb::rules::unit_scale).size() == 1);
+    // A sum, not a difference, is the logarithm of a product of dimensioned quantities.
+    const auto sum = plumb::check_text("l.plumb", decl + "n = ln(p_1) + ln(p_3)\n");
+    CHECK(findings(sum, plumb::rules::dimensioned_argument).size() == 2);
 }

@@ -826,6 +826,20 @@ TEST_CASE("workbook parity: empirical fits typed with bare constants, and more u
                                                        "F!B6 trade-constant", "F!B9 unit-scale"});
 }
 
+TEST_CASE("workbook parity: the log-mean temperature difference as a difference of LNs") {
+    // LMTD = (ΔT_1 - ΔT_2)/(LN(ΔT_1) - LN(ΔT_2)) (Kern, Process Heat Transfer, ch. 5, from
+    // memory): the difference of two logarithms of one unit is the logarithm of a ratio.
+    const check_report r = check_one_sheet("H", sheet_of({
+                                                    {"42", "K"},                       // B2
+                                                    {"18", "K"},                       // B3
+                                                    {"=(B2-B3)/(LN(B2)-LN(B3))", "K"}, // B4
+                                                    {"0.5", "m"},                      // B5
+                                                    {"=(B2-B3)/(LN(B2)-LN(B5))", "K"}, // B6
+                                                }));
+    CHECK(cell_findings(r) ==
+          std::vector<std::string>{"H!B6 dimensioned-argument", "H!B6 dimensioned-argument"});
+}
+
 TEST_CASE("workbook parity: the Magnus fit solved for the dew point, its constants typed") {
     // t_d = b·ln(p_w/c)/(a - ln(p_w/c)) with a = 17.625, b = 243.04 °C and c = 6.1094 hPa
     // (Alduchov and Eskridge 1996, from memory): the sheet cannot give 6.1094 a unit, so a

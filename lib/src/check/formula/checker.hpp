@@ -754,6 +754,7 @@ class checker {
     [[gnu::noinline]] typed_term eval_pi(std::uint32_t index);
     [[gnu::noinline]] typed_term eval_negate(const syntax::expr_node& n);
     [[gnu::noinline]] typed_term eval_power(const syntax::expr_node& n);
+    [[gnu::noinline]] std::optional<typed_term> eval_log_difference(std::uint32_t index);
     bool force_over_area(std::uint32_t k) const;
     bool gradient_times_depth(std::uint32_t k) const;
     bool declared_pressure_difference(const operand& o) const;

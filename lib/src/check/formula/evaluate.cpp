@@ -504,7 +504,69 @@ typed_term checker::declared_type(symbol_entry* entry, std::string_view name) {
     return t;
 }
 
+// "ΔT_lm = (ΔT_1 - ΔT_2)/(ln(ΔT_1) - ln(ΔT_2))", "=LN(C5)-LN(C6)": a difference of the
+// logarithms of two quantities of one dimension is the logarithm of their ratio, whatever
+// their unit, so long as it is the same one (Kern, Process Heat Transfer, ch. 5, from memory).
+// Read so where each argument is a declared symbol or a cell, neither on an offset scale; empty
+// otherwise, and the sum is checked as any other.
+std::optional<typed_term> checker::eval_log_difference(std::uint32_t index) {
+    const syntax::expr_node& n = file_.nodes[index];
+    const bool sheet = file_.functions == syntax::function_names::spreadsheet;
+    std::array<std::uint32_t, 2> arguments{};
+    std::array<std::optional<dimension>, 2> dims;
+    std::string_view function;
+    for (std::size_t k = 0; k < 2; ++k) {
+        const syntax::expr_node& call =
+            file_.nodes[syntax::inside_brackets(file_, k == 0 ? n.lhs : n.rhs)];
+        if (call.kind != expr_kind::call || call.rhs != 1)
+            return std::nullopt;
+        const std::string_view name = text(call_name_range(call));
+        if ((!function.empty() && name != function) ||
+            (name != "ln" && name != "log10" && name != "LN" && name != "LOG10" &&
+             !(sheet && name == "LOG")))
+            return std::nullopt;
+        function = name;
+        arguments[k] = syntax::inside_brackets(file_, file_.call_args[call.lhs]);
+        const syntax::expr_node& a = file_.nodes[arguments[k]];
+        if (a.kind == expr_kind::symbol) {
+            const symbol_entry* e = symbols_.find(text(a.range));
+            if (e == nullptr || e->offset_unit != nullptr)
+                return std::nullopt;
+            dims[k] = e->dim;
+        } else if (a.kind == expr_kind::reference) {
+            const syntax::reference_value& r = file_.references[a.lhs];
+            if (r.offset != nullptr && !r.difference)
+                return std::nullopt;
+            dims[k] = r.dim;
+        } else {
+            return std::nullopt;
+        }
+        if (!dims[k] || dims[k]->is_dimensionless())
+            return std::nullopt;
+    }
+    if (!(*dims[0] == *dims[1]))
+        return std::nullopt;
+    const std::size_t base = operands_.size();
+    const std::size_t types_base = types_.size();
+    const std::size_t literal_base = literals_.size();
+    for (const std::uint32_t a : arguments)
+        operands_.push_back({push_operand_type(a, types_base, 0), a});
+    const scratch_region region(operands_, base, types_, types_base);
+    typed_term result;
+    result.value.reset();
+    double unit = 1.0;
+    const std::string of = fmt::format("{} in a difference of logarithms", function);
+    if (!check_scales(region.view(), {"arguments", of}, unit))
+        result.scale = std::numeric_limits<double>::quiet_NaN();
+    cut_literals_to(literal_base);
+    return result;
+}
+
 typed_term checker::eval_sum(std::uint32_t index) {
+    if (file_.nodes[index].kind == expr_kind::subtract &&
+        file_.nodes[file_.nodes[index].rhs].kind == expr_kind::call) [[unlikely]]
+        if (std::optional<typed_term> logs = eval_log_difference(index))
+            return *logs;
     const bool prefer_dimensionless = index == prefer_dimensionless_;
     // Walk the left spine iteratively: a long sum must not recurse once per term.
     const std::size_t spine_base = spine_.size();
