@@ -708,6 +708,26 @@ TEST_CASE("inference: a reviewed coefficient fails when the formula is edited la
     CHECK(unit_edit.with_rule(plumb::rules::coefficient_mismatch).size() == 1);
 }
 
+TEST_CASE("inference: a statement's SI value counts the numbers beside the coefficient") {
+    // HDS-5's submerged inlet HW/D = c·(K_u·Q/(A·D^0.5))² + Y - 0.5·S with c = 0.0398 s²/ft
+    // (0.1306 s²/m) and K_u = 1.811 in SI, 1.0 in US units (FHWA HDS-5, 3rd ed., 2012, from
+    // memory): in the SI form c·K_u² is the SI coefficient the statement gives. Without the
+    // 1.811 the statement fails, and says what the numbers beside it would have made it.
+    const std::string declarations = "HW, D : m\nQ : m^3/s\nA : m^2\nS : 1\n";
+    const std::string head = "HW/D = 0.0398?[T^2 L^-1, SI 0.1306 ± 1%]*";
+    const run si = infer(declarations + head + "(1.811*Q/(A*D^0.5))^2 + 0.67 - 0.5*S\n");
+    CHECK(si.with_rule(plumb::rules::coefficient_mismatch).empty());
+    const run no_ku = infer(declarations + head + "(Q/(A*D^0.5))^2 + 0.67 - 0.5*S\n");
+    CHECK(no_ku.with_rule(plumb::rules::coefficient_mismatch).size() == 1);
+    const run wrong_ku = infer(declarations + head + "(3.281*Q/(A*D^0.5))^2 + 0.67 - 0.5*S\n");
+    REQUIRE(wrong_ku.with_rule(plumb::rules::coefficient_mismatch).size() == 1);
+    const diagnostic& d = *wrong_ku.with_rule(plumb::rules::coefficient_mismatch)[0];
+    CHECK(std::any_of(d.notes.begin(), d.notes.end(), [](const auto& n) {
+        return n.message.find("with the numbers beside it in its term folded in, it is 0.428") !=
+               std::string::npos;
+    }));
+}
+
 TEST_CASE("inference: a stated dimension that the formula no longer gives is an error") {
     // Manning reviewed with its dimension; then R^(2/3) is edited to R^(1/2).
     const run r = infer("V : ft/s\n"

@@ -999,6 +999,89 @@ class reporter {
         out_.push_back(std::move(d));
     }
 
+    // The product of the plain numbers written beside a coefficient in its term, with their
+    // powers: the 1.811² of "0.0398?*(1.811*Q/(A*D^0.5))^2", HDS-5's K_u (FHWA HDS-5, 3rd ed.,
+    // from memory), which holds a conversion the statement's SI value may count. Empty where
+    // the term has none.
+    std::optional<double> numbers_beside(const unknown& x) const {
+        using syntax::expr_kind;
+        const syntax::formula& f = formulas_[x.formula];
+        // The top of the product the coefficient stands in.
+        std::uint32_t top = syntax::no_index;
+        std::vector<std::pair<std::uint32_t, std::uint32_t>> stack; // node, its product's top
+        for (std::uint32_t i = 0; i < f.side_count && top == syntax::no_index; ++i) {
+            const std::uint32_t root = file_.sides[f.first_side + i].root;
+            stack.assign(1, {root, root});
+            while (!stack.empty() && top == syntax::no_index) {
+                const auto [k, product] = stack.back();
+                stack.pop_back();
+                if (k == x.node) {
+                    top = product;
+                    break;
+                }
+                const syntax::expr_node& n = file_.nodes[k];
+                switch (n.kind) {
+                case expr_kind::multiply:
+                case expr_kind::divide:
+                    stack.push_back({n.lhs, product});
+                    stack.push_back({n.rhs, product});
+                    break;
+                case expr_kind::group:
+                case expr_kind::negate:
+                    stack.push_back({n.lhs, product});
+                    break;
+                case expr_kind::power:
+                    stack.push_back({n.lhs, product});
+                    stack.push_back({n.rhs, n.rhs});
+                    break;
+                case expr_kind::add:
+                case expr_kind::subtract:
+                case expr_kind::compare:
+                    stack.push_back({n.lhs, n.lhs});
+                    stack.push_back({n.rhs, n.rhs});
+                    break;
+                case expr_kind::call:
+                    for (std::uint32_t a = 0; a < n.rhs; ++a)
+                        stack.push_back({file_.call_args[n.lhs + a], file_.call_args[n.lhs + a]});
+                    break;
+                default:
+                    break;
+                }
+            }
+        }
+        if (top == syntax::no_index)
+            return std::nullopt;
+        double product = 1.0;
+        bool found = false;
+        std::vector<std::pair<std::uint32_t, double>> walk{{top, 1.0}}; // node, its power
+        while (!walk.empty()) {
+            const auto [k, power] = walk.back();
+            walk.pop_back();
+            const syntax::expr_node& n = file_.nodes[k];
+            if (n.kind == expr_kind::number && k != x.node) {
+                const double v =
+                    std::strtod(std::string(file_.source->text(n.range)).c_str(), nullptr);
+                if (v > 0 && std::isfinite(v) && v != 1.0) {
+                    product *= std::pow(v, power);
+                    found = true;
+                }
+            } else if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
+                walk.push_back({n.lhs, power});
+                walk.push_back({n.rhs, n.kind == expr_kind::divide ? -power : power});
+            } else if (n.kind == expr_kind::group || n.kind == expr_kind::negate) {
+                walk.push_back({n.lhs, power});
+            } else if (n.kind == expr_kind::power && file_.nodes[n.rhs].kind == expr_kind::number) {
+                const double e = std::strtod(
+                    std::string(file_.source->text(file_.nodes[n.rhs].range)).c_str(), nullptr);
+                if (std::isfinite(e) && std::abs(e) <= 8)
+                    walk.push_back({n.lhs, power * e});
+            }
+        }
+        if (!found || !(product > 0) || !std::isfinite(product))
+            return std::nullopt;
+        return product;
+    }
+
     // A coefficient written "k?[...]": what the formula makes it against what was stated.
     void check_statement(const unknown& x, const dimension& dim, std::optional<double> k_si,
                          diagnostic& inferred) {
@@ -1045,11 +1128,25 @@ class reporter {
         const double low = *st.si_value - st.tolerance;
         const double high = *st.si_value + st.tolerance;
         // A relative 1e-12 keeps a value printed at its full precision from failing on rounding.
-        const double slack = 1e-12 * std::max(std::abs(*st.si_value), std::abs(*k_si));
-        if (*k_si >= low - slack && *k_si <= high + slack) {
+        const auto within = [&](double k) {
+            const double slack = 1e-12 * std::max(std::abs(*st.si_value), std::abs(k));
+            return k >= low - slack && k <= high + slack;
+        };
+        if (within(*k_si)) {
             inferred.notes.push_back(
                 {fmt::format("{:.6g} lies within the stated {} ({:.6g} to {:.6g})", *k_si,
                              value_text, low, high),
+                 {}});
+            return;
+        }
+        // "0.0398?[..., SI 0.1306 ± 1%]*(1.811*Q/(A*D^0.5))^2": the statement counts the
+        // term's own numbers with the coefficient, as the source prints its SI value.
+        const std::optional<double> beside = numbers_beside(x);
+        if (beside && within(*k_si * *beside)) {
+            inferred.notes.push_back(
+                {fmt::format("with the numbers beside it in its term folded in, {:.6g} lies "
+                             "within the stated {} ({:.6g} to {:.6g})",
+                             *k_si * *beside, value_text, low, high),
                  {}});
             return;
         }
@@ -1065,6 +1162,11 @@ class reporter {
             if (n.message.starts_with("in coherent SI units") ||
                 n.message.find(" holds only with ") != std::string::npos)
                 d.notes.push_back(n);
+        if (beside)
+            d.notes.push_back({fmt::format("with the numbers beside it in its term folded in, it "
+                                           "is {:.6g}, outside the statement too",
+                                           *k_si * *beside),
+                               {}});
         d.notes.push_back({"the coefficient, a unit of a symbol or the formula has changed since "
                            "it was reviewed, or the statement is wrong",
                            {}});
