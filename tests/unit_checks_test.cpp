@@ -353,6 +353,15 @@ TEST_CASE("unit scale: a trade's constant for other units is counted both ways")
                                "if it is a coefficient of the formula, divide 'Q*Δp/3960' by "
                                "6343.31"));
     CHECK(plumb::check_text("f.plumb", decl + "P = Q*Δp/6356\n").diagnostics.size() <= 1);
+    // A length's ratio where the units need its fourth power: cm⁴ to in⁴ is 2.54⁴ (NIST SP 811
+    // (2008), B.8); as the conversion meant, /2.54 leaves the result 16.39 times too large.
+    const auto inertia = plumb::check_text("i.plumb", "I_cm4 : cm^4\nI_in4 : in^4\n"
+                                                      "I_in4 = I_cm4/2.54\n");
+    const auto power = findings(inertia, plumb::rules::unit_scale);
+    REQUIRE(power.size() == 1);
+    CHECK(power[0]->message.find("counts 16.3871 times as much as 'I_in4' if 2.54 was meant as "
+                                 "the conversion") != std::string::npos);
+    CHECK(mentions(*power[0], "write 2.54^4 (41.6231) in its place"));
 }
 
 // A pump set's energy a year, E = N·P/(η/100)·8760·u/100 in kWh/yr with η and u in % (8760 h

@@ -408,7 +408,20 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         std::abs(written / needed - 1.0) > 0.05 && std::abs(coefficient_exponent) == 1.0 &&
         std::abs(std::log10(in_place / written)) <= std::log10(5.0) &&
         (written >= 10.0 || coefficient_digits >= 3);
-    const bool counted_both_ways = in_place_offered && is_power_trade_constant(written);
+    // "I_in4 = I_cm4/2.54": a length's ratio where these units need its fourth power (cm⁴ to
+    // in⁴ is 2.54⁴ = 41.6231, NIST SP 811 (2008), B.8). The power, or 0 where none fits.
+    int power_of_ratio = 0;
+    if (!other_unit_note && coefficient_count == 1 && std::isfinite(in_place) && in_place > 0 &&
+        std::abs(coefficient_exponent) == 1.0 && coefficient_digits >= 3 && written > 1.0)
+        for (const int k : {2, 3, 4})
+            if (std::abs(in_place / std::pow(written, k) - 1.0) < 2e-3 * k)
+                power_of_ratio = k;
+    const bool counted_both_ways =
+        (in_place_offered && is_power_trade_constant(written)) || power_of_ratio != 0;
+    const std::string in_place_text =
+        power_of_ratio != 0
+            ? fmt::format("{}^{} ({})", coefficients, power_of_ratio, format_factor(in_place))
+            : format_factor(in_place);
     std::string counted = fmt::format("{} times as much as {}", format_factor(exact_ratio, ratio),
                                       quote(reference.node));
     if (counted_both_ways)
@@ -446,16 +459,11 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         d.notes.push_back({std::move(*other_unit_note), {}});
     else if (counted_both_ways) {
         // The advice below gives both readings.
-    } else if (in_place_offered)
-        // "V_hL = 1.59*V_bb": a number within a factor of five of the one these units need,
-        // printed as a conversion is, may be either; a formula's own 384 beside a 10, or its
-        // 0.75, is left a coefficient.
-        d.notes.push_back(
-            {fmt::format("{} counted as a coefficient, not a unit conversion; if it was meant "
-                         "to convert units, these units need {} in its place",
-                         coefficients, format_factor(in_place)),
-             {}});
-    else if (!coefficients.empty())
+    } else if (in_place_offered) {
+        // "V_hL = 1.59*V_bb", "COP = 12/kWpt": a number within a factor of five of the one
+        // these units need, printed as a conversion is, may be either, and the advice below
+        // gives both; a formula's own 384 beside a 10, or its 0.75, is left a coefficient.
+    } else if (!coefficients.empty())
         d.notes.push_back({fmt::format("{} counted as a coefficient, not a unit conversion; if "
                                        "it was meant to convert units, it is not the factor "
                                        "these units need",
@@ -534,10 +542,10 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     if (round_factor)
         if (std::string power = format_factor(*round_factor); power != factor)
             factor = fmt::format("{} ({} with the rounded numbers as written)", power, factor);
-    if (counted_both_ways)
+    if (counted_both_ways || in_place_offered)
         d.notes.push_back({fmt::format("if {} was meant as the conversion, write {} in its "
                                        "place; if it is a coefficient of the formula, {} {} by {}",
-                                       coefficients, format_factor(in_place),
+                                       coefficients, in_place_text,
                                        multiply ? "multiply" : "divide", quote(op.node), factor),
                            {}});
     else
