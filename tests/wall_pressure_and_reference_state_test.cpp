@@ -807,3 +807,20 @@ TEST_CASE("the advice names an atmosphere in the reading's unit, and a reference
     CHECK(plumb::test::says(first_under(rankine, plumb::rules::trade_constant),
                             "T_n : \u00B0R = 519.67"));
 }
+
+// NPSH_a = (p_s,abs - p_v)/(ρ·g) + v²/(2g) (Karassik, Pump Handbook, 4th ed., ch. 2, from
+// memory): a suction gauge reading less the vapour pressure is short by the atmosphere the
+// gauge reads from, which at a site whose barometer the file declares is that barometer.
+TEST_CASE("a gauge reading less an absolute one names the site's barometer") {
+    const std::string site = "p_b : kPa \"site barometric pressure, 97.8 kPa\"\n"
+                             "p_sg : kPag\np_v : kPa\nρ : kg/m^3\nH : m\n";
+    const auto r = run(site, "H = (p_sg - p_v)*1000/(ρ*{g_n})");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale),
+                            "off by the atmosphere the gauge reads from: the site's barometer "
+                            "'p_b' (97.8 kPa)"));
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale), "write (p_sg + p_b)"));
+    const auto sea =
+        run("p_sg : kPag\np_v : kPa\nρ : kg/m^3\nH : m\n", "H = (p_sg - p_v)*1000/(ρ*{g_n})");
+    CHECK(plumb::test::says(first_under(sea, plumb::rules::offset_scale),
+                            "off by 101325 Pa, the atmosphere the gauge reads from"));
+}

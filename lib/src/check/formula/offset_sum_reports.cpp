@@ -460,11 +460,24 @@ void checker::report_mixed_scales(std::span<const operand> terms, double differe
     add_term(d, *on_offset);
     if (other != nullptr)
         add_term(d, *other);
-    d.notes.push_back({fmt::format("as written the result is off by {} {}",
-                                   format_factor(std::abs(difference)), temperature ? "K" : "Pa"),
-                       {}});
+    // "(p_sg - p_v)*1000/(ρ*g)" at a site whose barometer the file declares: the gauge
+    // reading lacks that barometer, not the sea level's atmosphere.
+    const site_barometer* site =
+        !temperature && unit.scale == unit_scale::gauge ? declared_site_barometer() : nullptr;
+    d.notes.push_back(
+        {site != nullptr
+             ? fmt::format("as written the result is off by the atmosphere the gauge reads "
+                           "from: the site's barometer '{}' ({} kPa)",
+                           site->name, format_factor(site->pascals / 1000.0))
+             : fmt::format("as written the result is off by {} {}{}",
+                           format_factor(std::abs(difference)), temperature ? "K" : "Pa",
+                           temperature ? "" : ", the atmosphere the gauge reads from"),
+         {}});
+    // "p_atm = p_g - p_a": set equal to an absolute reading, the difference was meant as the
+    // scale's zero, and is its negative.
     if (other != nullptr && !on_offset->subtracted && other->subtracted &&
-        other->type.offset == nullptr)
+        other->type.offset == nullptr && sum_side_hint_ != nullptr && sum_side_hint_->known &&
+        sum_side_hint_->point && sum_side_hint_->offset == nullptr)
         d.notes.push_back(
             {fmt::format("{} less {} would be the {} scale's zero as an absolute reading; "
                          "this way round it is its negative",
