@@ -506,3 +506,18 @@ TEST_CASE("a difference of the logarithms of two quantities in one unit") {
     const auto sum = plumb::check_text("l.plumb", decl + "n = ln(p_1) + ln(p_3)\n");
     CHECK(findings(sum, plumb::rules::dimensioned_argument).size() == 2);
 }
+
+// A centrifuge fed 20 h a day takes a day's sludge in those hours (common practice): where the
+// file declares its running hours, the advice to divide by 24 names them as well.
+TEST_CASE("unit scale: the hours of a day name the running hours declared") {
+    const std::string decl = "M : kg/d\nρ : kg/m^3\nQ : m^3/h\n";
+    const auto r = plumb::check_text("h.plumb", decl + "t_run : h/d\nQ = M/ρ\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(mentions(*scales[0], "divide 'M/ρ' by 24"));
+    CHECK(mentions(*scales[0], "a plant that runs fewer hours a day takes their number, 't_run'"));
+    const auto plain_report = plumb::check_text("h.plumb", decl + "Q = M/ρ\n");
+    const auto plain = findings(plain_report, plumb::rules::unit_scale);
+    REQUIRE(plain.size() == 1);
+    CHECK(!mentions(*plain[0], "fewer hours"));
+}

@@ -1192,6 +1192,8 @@ class checker {
     std::string units_in(std::uint32_t root) const;
     unsigned clock_units_of_formula() const;
     std::string days_a_year_note() const;
+    std::optional<std::string_view>
+    declared_in_units(std::initializer_list<std::string_view> units) const;
     bool divides_by_gravity_number(std::uint32_t literals_begin) const;
     static bool is_typed_gravity(const scale_literal& l);
     static bool written_whole(std::string_view written);

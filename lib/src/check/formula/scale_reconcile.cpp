@@ -557,6 +557,15 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     // on working days counts those.
     if (std::abs(advised / 365.0 - 1.0) < 1e-3 || std::abs(advised / 365.25 - 1.0) < 1e-6)
         d.notes.push_back({days_a_year_note(), {}});
+    // "Q_cf = M/(ρ*c/100)" from m³/d into m³/h beside "t_cf : h/d": a centrifuge that runs
+    // 20 h a day takes its feed in those hours, not in 24.
+    if (std::abs(advised / 24.0 - 1.0) < 1e-3)
+        if (const std::optional<std::string_view> hours =
+                declared_in_units({"h/d", "h/day", "hr/d", "hr/day"}))
+            d.notes.push_back({fmt::format("24 counts every hour of the day; a plant that runs "
+                                           "fewer hours a day takes their number, '{}'",
+                                           *hours),
+                               {}});
     return false;
 }
 
@@ -575,17 +584,24 @@ bool checker::is_power_trade_constant(double written) {
                        [&](double c) { return std::abs(written / c - 1.0) < 1e-9; });
 }
 
+// The one symbol the file declares in one of `units` as written, where there is one.
+std::optional<std::string_view>
+checker::declared_in_units(std::initializer_list<std::string_view> units) const {
+    for (const syntax::declaration& decl : file_.declarations) {
+        const std::string_view unit = text(decl.spec);
+        if (decl.name_count == 1 && std::find(units.begin(), units.end(), unit) != units.end())
+            return text(file_.names[decl.first_name].name);
+    }
+    return std::nullopt;
+}
+
 // The days a year a rate runs: 365 for a calendar year, or the symbol the file declares in
 // days a year, where it declares one.
 std::string checker::days_a_year_note() const {
-    for (const syntax::declaration& decl : file_.declarations) {
-        const std::string_view unit = text(decl.spec);
-        if (decl.name_count == 1 && (unit == "d/yr" || unit == "d/a" || unit == "day/yr" ||
-                                     unit == "days/yr" || unit == "d/y"))
-            return fmt::format("365 counts every day of the year; a rate that runs on fewer days "
-                               "takes their number, '{}'",
-                               text(file_.names[decl.first_name].name));
-    }
+    if (const auto days = declared_in_units({"d/yr", "d/a", "day/yr", "days/yr", "d/y"}))
+        return fmt::format("365 counts every day of the year; a rate that runs on fewer days "
+                           "takes their number, '{}'",
+                           *days);
     return "365 counts every day of the year; a rate that runs on fewer days takes their number";
 }
 
