@@ -718,3 +718,21 @@ TEST_CASE("a range of angles over a number of degrees is a ratio") {
     passes(decl, {"μ_1 = 0.8*(60 - α)/30", "μ_1 = 0.8*(α - 30)/30"});
     fails_with(decl, {"μ_1 = 0.8*α"}, plumb::rules::unit_scale);
 }
+
+// Water's viscosity by Vogel's fit μ = 2.414e-5 Pa·s × 10^(247.8 K/(T - 140 K)) (Al-Shemmeri,
+// Engineering Fluid Mechanics, 2012, from memory) takes T in kelvins: typed in K, the 140 is an
+// absolute temperature, and a °C reading beside it is an error, with the conversion advised. A
+// reference typed on the reading's scale, or a bare one, is the difference from it as before.
+TEST_CASE("a number typed in kelvins beside a °C reading in a fit") {
+    const std::string decl = "μ : Pa*s\nT_w : °C\nT_K : K\nR, R_20 : ohm\nα : 1/K\n";
+    const auto wrong =
+        plumb::test::check_after(decl, "μ = 2.414e-5{Pa*s}*10^(247.8{K}/(T_w - 140{K}))");
+    CHECK(plumb::test::count_of(wrong, plumb::rules::offset_scale) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(wrong, plumb::rules::offset_scale),
+                            "(T_w + 273.15 - 140{K})"));
+    for (const char* right : {"μ = 2.414e-5{Pa*s}*10^(247.8{K}/(T_K - 140{K}))",
+                              "R = R_20*(1 + α*(T_w - 20))", "R = R_20*(1 + α*(T_w - 20{°C}))"}) {
+        CAPTURE(right);
+        CHECK(plumb::test::problems_in(plumb::test::check_after(decl, right)) == 0);
+    }
+}

@@ -77,6 +77,33 @@ void checker::report_offset(std::uint32_t node, const unit_definition& unit, std
                            quote(node), unit.symbol, where),
                file_.nodes[node].range);
     d.mark_label = fmt::format("on the {} scale, whose zero is arbitrary", unit.symbol);
+    // "(T_w - 140 {K})": a number typed in kelvins is an absolute temperature, which a fit
+    // written in kelvins (Vogel's viscosity) sets beside an absolute reading.
+    if (temperature) {
+        const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, node)];
+        const syntax::expr_node* typed =
+            sum.kind == expr_kind::subtract || sum.kind == expr_kind::add
+                ? &file_.nodes[syntax::inside_brackets(file_, sum.rhs)]
+                : nullptr;
+        if (typed != nullptr && typed->kind == expr_kind::quantity) {
+            const syntax::quantity_literal& q = file_.quantities[typed->lhs];
+            if (q.single_unit != nullptr && q.single_unit->offset == 0.0 &&
+                std::abs(q.single_unit->factor / unit.factor - 1.0) < 1e-9) {
+                const std::string reading =
+                    display_text(file_.nodes[syntax::inside_brackets(file_, sum.lhs)].range);
+                d.notes.push_back(
+                    {fmt::format("{} is typed in {}, an absolute temperature: a fit written in "
+                                 "{} takes the reading in {} too, ({} + {:g} {} {}); a "
+                                 "reference on the reading's scale is typed in its unit, {{{}}}",
+                                 display_text(typed->range), q.single_unit->symbol,
+                                 q.single_unit->symbol, q.single_unit->symbol, reading,
+                                 unit.offset / unit.factor, sum.kind == expr_kind::add ? "+" : "-",
+                                 display_text(typed->range), unit.symbol),
+                     {}});
+                return;
+            }
+        }
+    }
     if (where == "used in a quotient" && file_.nodes[node].kind != expr_kind::symbol)
         note_bare_fit_on_scale(node);
     // "ΔT : °F": a difference declared in the scale's unit; the Δ unit says what is meant.

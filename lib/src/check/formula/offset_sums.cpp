@@ -784,6 +784,22 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
                 cut_literals_to(literal_base);
                 return unknown_type();
             }
+            // "(T_w - 140 {K})" with T_w in °C, the Vogel fit of water's viscosity: a number
+            // typed in kelvins, not on the reading's scale, is an absolute temperature, and the
+            // fit takes the reading in kelvins too. It stays a reading, which a factor may not
+            // be; "(T - 20)" and "(T - 20 {°C})" are the difference from a reference reading.
+            const syntax::expr_node& number = file_.nodes[syntax::inside_brackets(file_, t.node)];
+            const bool on_offset_scale =
+                std::any_of(terms.begin(), terms.end(), [](const operand& o) {
+                    return o.type.known && o.type.point && o.type.offset != nullptr;
+                });
+            if (number.kind == expr_kind::quantity && on_offset_scale &&
+                result.dim == temperature_dimension()) {
+                const syntax::quantity_literal& q = file_.quantities[number.lhs];
+                if (q.single_unit != nullptr && q.single_unit->offset == 0.0 &&
+                    !q.single_unit->symbol.starts_with("\u0394"))
+                    continue;
+            }
             // "(T - 20)": the difference from a reference reading, where a factor.
             result.reading_or_difference = true;
         }
