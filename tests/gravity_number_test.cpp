@@ -1087,3 +1087,15 @@ TEST_CASE("air's density at the normal state typed as a number") {
     CHECK(problems_in(run(d + "m = Q_N*1.31/60\n")) > 0);
     CHECK(problems_in(run(d + "m = Q_N*1.293\n")) > 0);
 }
+
+// A separator's efficiency η = 1 - C_out/C_in (common practice) with the outlet in mg/L and the
+// inlet in ppm: the sum is set equal to a pure number, so its 1 is unity, not water's density
+// in kg/L, and the term in two units is the one named, with the ppm against mg/L note.
+TEST_CASE("a bare 1 in a sum set equal to a pure number is unity") {
+    const std::string d = "η : 1\nC_out : mg/L\nC_in, C_o : ppm\n";
+    const auto r = run(d + "η = 1 - C_out/C_in\n");
+    CHECK(count_of(r, plumb::rules::trade_constant) == 0);
+    CHECK(count_of(r, plumb::rules::sum_mismatch) == 1);
+    CHECK(message_of(r, plumb::rules::sum_mismatch).find("'C_out/C_in'") != std::string::npos);
+    CHECK(problems_in(run(d + "η = 1 - C_o/C_in\n")) == 0);
+}

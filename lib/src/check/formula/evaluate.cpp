@@ -659,6 +659,9 @@ typed_term checker::eval_sum(std::uint32_t index) {
         if (a.reference && *a.reference == temperature_dimension()) [[unlikely]]
             note_zero_added_to_converted_temperature(d, terms, a);
         note_scale_zero_beside_difference(d, terms, a);
+        // "η = 1 - C_out/C_in", mg/L over ppm: the term is a density where a fraction belongs.
+        if (terms.size() == 2) [[unlikely]]
+            note_fraction_beside_concentration(d, terms);
         if (!note_gravity_in_other_units(d, terms, a) &&
             !note_constant_for_other_units(d, terms, a))
             note_acceleration_or_density_apart(d, terms, a);

@@ -214,6 +214,11 @@ bool checker::read_gravity_numbers(std::size_t base, const agreement& a, std::ui
             (t.offset != nullptr && !gauge_to_head) || t.literal_count == 0 ||
             t.literal_count > texts.size())
             return false;
+        // "η = 1 - C_out/C_in" with mg/L over ppm: set equal to a pure number, the sum is one,
+        // and its bare number is the unity it looks, not water's density in kg/L.
+        if (t.numeric && sum_node != syntax::no_index && sum_node == side_hint_node_ &&
+            side_hint_ != nullptr && side_hint_->known && side_hint_->dim.is_dimensionless())
+            return false;
         dimension lacking;
         try {
             lacking = (*a.reference / t.dim).expand();
