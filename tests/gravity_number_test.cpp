@@ -1099,3 +1099,18 @@ TEST_CASE("a bare 1 in a sum set equal to a pure number is unity") {
     CHECK(message_of(r, plumb::rules::sum_mismatch).find("'C_out/C_in'") != std::string::npos);
     CHECK(problems_in(run(d + "η = 1 - C_o/C_in\n")) == 0);
 }
+
+// A cooling tower's liquid-to-gas ratio L/G = 8.34·gpm/(0.075·cfm) (common practice; water's
+// 8.34 lb/gal and 62.4 lb/ft³, standard air's 0.075 lb/ft³, the densities inside the air
+// trade's 500 and 1.08, ASHRAE Fundamentals ch. 18, from memory): the two densities make the
+// volumes' ratio a ratio of masses. Without them, or with water's per-gallon density on a flow
+// in cubic feet, the units stay a finding.
+TEST_CASE("water's and air's densities typed as numbers in a mass ratio") {
+    const std::string d = "LG : 1\nQ : gpm\nV : cfm\nQ_ft : ft^3/min\n";
+    passes_with_one_note(d, {"LG = 8.34*Q/(0.075*V)", "LG = 62.4*Q_ft/(0.075*V)"},
+                         plumb::rules::trade_constant);
+    for (const char* wrong : {"LG = Q/V", "LG = 8.34*Q/V", "LG = 8.34*Q_ft/(0.075*V)"}) {
+        CAPTURE(wrong);
+        CHECK(problems_in(run(d + wrong + "\n")) > 0);
+    }
+}

@@ -1127,6 +1127,8 @@ class checker {
     bool spare_speed_ratio(const scale_literal& l, std::uint32_t term) const;
     bool spare_degree_ratio(const scale_literal& l, std::uint32_t term) const;
     static bool is_power_trade_constant(double written);
+    bool densities_of_water_and_air(const scaled_operand& odd, const scaled_operand& reference,
+                                    double ratio);
 
     // check/formula/scale_factors.cpp
     static std::optional<trade_constant_reading>

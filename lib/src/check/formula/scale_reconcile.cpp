@@ -271,6 +271,10 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     // itself but part of one, and the units are off by 1000, not 12000. Where taking some
     // of the other numbers in makes the ratio a clean power of ten, that is the ratio as
     // written, so that following the message fixes the formula.
+    if (densities_of_water_and_air(parts[r.odd], parts[r.reference], ratio)) [[unlikely]] {
+        unit = parts[r.reference].scale;
+        return true;
+    }
     const auto clean = ratio_with_numbers(parts[r.reference], parts[r.odd], ratio,
                                           holds_pi(reference.node), holds_pi(op.node));
     if (clean) {
@@ -567,6 +571,64 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                                            *hours),
                                {}});
     return false;
+}
+
+// "LG = 8.34*Q_gpm/(0.075*V_cfm)", a cooling tower's liquid-to-gas ratio: water's 8.34 lb/gal
+// (or 62.4 lb/ft³) over standard air's 0.075 lb/ft³ (ASHRAE Fundamentals, ch. 18, the
+// densities inside 500 and 1.08; common practice) turn a gallon against a cubic foot into
+// pounds against pounds. Read as those densities in those units, where that is what the
+// units lack, with a note.
+bool checker::densities_of_water_and_air(const scaled_operand& odd, const scaled_operand& reference,
+                                         double ratio) {
+    struct typed_density {
+        double least;
+        double greatest;
+        double si; // kg/m³ per unit (NIST SP 811 (2008), B.8)
+        bool water;
+    };
+    static constexpr std::array<typed_density, 3> densities{{{8.33, 8.35, 119.8264, true},
+                                                             {62.2, 62.5, 16.01846, true},
+                                                             {0.0735, 0.0765, 16.01846, false}}};
+    const auto read = [&](const scaled_operand& part, double& factor, int& waters, int& airs,
+                          const scale_literal*& first) {
+        for (const scale_literal& l : part.literals)
+            for (const typed_density& t : densities)
+                if (std::abs(l.exponent) == 1.0 && l.value >= t.least && l.value <= t.greatest) {
+                    factor *= std::pow(t.si, l.exponent);
+                    (t.water ? waters : airs) += l.exponent > 0 ? 1 : -1;
+                    if (first == nullptr)
+                        first = &l;
+                }
+    };
+    double on_odd = 1.0;
+    double on_reference = 1.0;
+    int waters = 0;
+    int airs = 0;
+    const scale_literal* first = nullptr;
+    read(odd, on_odd, waters, airs, first);
+    int reference_waters = 0;
+    int reference_airs = 0;
+    read(reference, on_reference, reference_waters, reference_airs, first);
+    // One density of each, one above the line and one below, on the same side.
+    const bool on_odd_side =
+        std::abs(waters) == 1 && waters == -airs && reference_waters == 0 && reference_airs == 0;
+    const bool on_reference_side = std::abs(reference_waters) == 1 &&
+                                   reference_waters == -reference_airs && waters == 0 && airs == 0;
+    if (first == nullptr || !(on_odd_side || on_reference_side))
+        return false;
+    const double left = on_odd_side ? ratio / on_odd : ratio * on_reference;
+    if (!(std::abs(left - 1.0) < 2e-3))
+        return false;
+    diagnostic& d = report(rules::trade_constant,
+                           "the numbers are read as the densities of water and of standard air in "
+                           "the units around them (8.34 lb/gal or 62.4 lb/ft\u00B3, 0.075 "
+                           "lb/ft\u00B3): their ratio makes a ratio of volumes one of masses",
+                           file_.nodes[first->node].range);
+    d.level = severity::note;
+    d.notes.push_back({"declare the two densities with their units to say so, the air's at the "
+                       "site's altitude and temperature",
+                       {}});
+    return true;
 }
 
 // The numbers the pump, fan, drive and refrigeration trades print to turn their units of flow,
