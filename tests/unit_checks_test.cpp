@@ -521,3 +521,12 @@ TEST_CASE("unit scale: the hours of a day name the running hours declared") {
     REQUIRE(plain.size() == 1);
     CHECK(!mentions(*plain[0], "fewer hours"));
 }
+
+// 1 ft/min = 0.00508 m/s (NIST SP 811 (2008), B.8): v_fpm/3.281 into m/s lacks the minute's 60,
+// seen through the rounded 3.281 as 59.9971; the advice names the 60 the engineer left out.
+TEST_CASE("unit scale: a rounded factor's advice names the clock's 60 either way round") {
+    const auto r = plumb::check_text("v.plumb", "v_fpm : fpm\nv_ms : m/s\nv_ms = v_fpm/3.281\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(mentions(*scales[0], "divide 'v_fpm/3.281' by 60 (59.9971 with the rounded numbers"));
+}

@@ -537,15 +537,21 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
             rounding += l.tolerance * std::abs(l.exponent);
     // So is the 59.9971 of "v_fpm = 3.281*v" the minute's 60.
     const double advised = multiply ? 1.0 / ratio : ratio;
+    // Weighed as the whole number it may round, whichever way the advice went: "v_fpm/3.281"
+    // into m/s is "divide by 60", not "multiply by 0.01666748".
+    const double whole = ratio >= 1.0 ? ratio : 1.0 / ratio;
     std::optional<double> round_factor;
-    if (rounding > 0.0 && near_power_of_ten(advised, rounding))
-        round_factor = std::pow(10.0, std::round(std::log10(advised)));
+    if (rounding > 0.0 && near_power_of_ten(whole, rounding))
+        round_factor = std::pow(10.0, std::round(std::log10(whole)));
     for (const double clock : {60.0, 3600.0, 86400.0, 24.0, 1440.0})
-        if (rounding > 0.0 && std::abs(advised / clock - 1.0) <= rounding + 1e-9)
+        if (rounding > 0.0 && std::abs(whole / clock - 1.0) <= rounding + 1e-9)
             round_factor = clock;
     if (round_factor)
-        if (std::string power = format_factor(*round_factor); power != factor)
-            factor = fmt::format("{} ({} with the rounded numbers as written)", power, factor);
+        if (std::string power = format_factor(*round_factor); power != format_factor(whole)) {
+            factor = fmt::format("{} ({} with the rounded numbers as written)", power,
+                                 format_factor(whole));
+            multiply = ratio < 1.0;
+        }
     if (counted_both_ways || in_place_offered)
         d.notes.push_back({fmt::format("if {} was meant as the conversion, write {} in its "
                                        "place; if it is a coefficient of the formula, {} {} by {}",
