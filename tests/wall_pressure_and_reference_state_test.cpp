@@ -382,6 +382,12 @@ TEST_CASE("the sea-level atmosphere where the file declares the site's barometer
     const auto psi = run(site, "p_apsi = p_gpsi + 14.7");
     CHECK(plumb::test::says(first_under(psi, plumb::rules::offset_scale),
                             "write (... + 13.9526), 'p_b' in the sum's unit"));
+    // A sum in psi through a rounded factor (27.7 in. w.c. per psi, NIST SP 811 (2008), B.8
+    // gives 27.68) names the barometer declared in psi itself.
+    const auto rounded = run("p_b : psi \"site barometric pressure, 12.1 psi\"\n"
+                             "p_w : inH2Og\np_a : psia\n",
+                             "p_a = 14.696 + p_w/27.7");
+    CHECK(plumb::test::says(first_under(rounded, plumb::rules::offset_scale), "write (... + p_b)"));
     // Set equal to a gauge reading, the atmosphere added is the one slip, reported once.
     const auto onto_gauge = run(site, "p_gpsi = p_g/6.895 + 14.7");
     CHECK(problems_in(onto_gauge) == 1);

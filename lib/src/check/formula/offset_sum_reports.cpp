@@ -137,7 +137,8 @@ void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_v
     std::string converted;
     if (const auto name = barometer_in_unit(unit)) {
         barometer = std::string(*name);
-    } else if (!(unit > 0.0) || !std::isfinite(unit) || std::abs(site.unit / unit - 1.0) < 1e-9) {
+    } else if (!(unit > 0.0) || !std::isfinite(unit) || std::abs(site.unit / unit - 1.0) < 5e-3) {
+        // "14.696 + p_gas/27.7": the sum is in psi through a rounded 27.7 in. w.c. per psi.
         barometer = std::string(site.name);
     } else {
         barometer = format_factor(site.pascals / unit);
