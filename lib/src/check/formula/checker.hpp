@@ -1175,7 +1175,7 @@ class checker {
     // check/formula/origins.cpp
     static bool celsius_reading(const operand& o);
     bool magnus_solved_for_reading(const operand& o) const;
-    std::uint32_t magnus_constant_typed(std::uint32_t node) const;
+    std::uint32_t magnus_solved_constant(std::uint32_t node) const;
     bool explain_reversed_fahrenheit(diagnostic& d, const operand& a, const operand& b);
     [[gnu::noinline]] void compare_origins(std::span<const operand> sides,
                                            std::string_view relation);

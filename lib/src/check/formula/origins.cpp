@@ -15,15 +15,23 @@ bool checker::celsius_reading(const operand& o) {
 // times a ratio. Known by its constants: b from 235 to 260 °C and a from 17 to 18 over
 // water, and over ice b = 272.62 °C with a = 22.46 (WMO-No. 8, 2008, Annex 4.B, from memory).
 bool checker::magnus_solved_for_reading(const operand& o) const {
-    if (!o.type.known || o.type.point || !(o.type.dim == temperature_dimension()))
-        return false;
-    bool b_constant = false;
+    return o.type.known && !o.type.point && o.type.dim == temperature_dimension() &&
+           magnus_solved_constant(o.node) != syntax::no_index;
+}
+
+// The constant b of the Magnus fit solved for the temperature, b·γ/(a - γ): a quantity (in the
+// notation) or a number (in a workbook, "=243.04*LN(C5/6.1094)/(17.625-LN(C5/6.1094))") in
+// the ranges above, over a difference led by a. Its node, or none.
+std::uint32_t checker::magnus_solved_constant(std::uint32_t node) const {
+    std::uint32_t b = syntax::no_index;
     bool a_over = false;
-    const bool other = for_each_factor(o.node, [&](std::uint32_t at, int sign) {
+    const bool other = for_each_factor(node, [&](std::uint32_t at, int sign) {
         const syntax::expr_node& n = file_.nodes[at];
-        if (n.kind == expr_kind::quantity && sign > 0) {
-            const double v = quantity_si_value(n);
-            b_constant = b_constant || (v >= 235.0 && v <= 260.0) || (v >= 270.0 && v <= 275.0);
+        if ((n.kind == expr_kind::quantity || n.kind == expr_kind::number) && sign > 0) {
+            const double v =
+                n.kind == expr_kind::quantity ? quantity_si_value(n) : written_number(n.range);
+            if ((v >= 235.0 && v <= 260.0) || (v >= 270.0 && v <= 275.0))
+                b = at;
             return false;
         }
         if ((n.kind == expr_kind::add || n.kind == expr_kind::subtract) && sign < 0) {
@@ -34,9 +42,10 @@ bool checker::magnus_solved_for_reading(const operand& o) const {
             }
             return false;
         }
-        return n.kind != expr_kind::symbol && n.kind != expr_kind::number;
+        return n.kind != expr_kind::symbol && n.kind != expr_kind::number &&
+               n.kind != expr_kind::call && n.kind != expr_kind::reference;
     });
-    return !other && b_constant && a_over;
+    return !other && a_over ? b : syntax::no_index;
 }
 
 // "T_K = T_C": readings on scales with different zeros set equal or compared.

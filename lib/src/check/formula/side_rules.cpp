@@ -77,7 +77,7 @@ bool checker::fit_constant_carries_cell_unit(std::span<const operand> sides) {
     const operand& formula = sides[1];
     if (celsius_reading(sides[0]) && formula.type.known && formula.type.offset == nullptr &&
         formula.type.dim.is_dimensionless()) [[unlikely]] {
-        const std::uint32_t b = magnus_constant_typed(formula.node);
+        const std::uint32_t b = magnus_solved_constant(formula.node);
         if (b == syntax::no_index)
             return false;
         diagnostic& d = report(rules::trade_constant,
@@ -145,34 +145,6 @@ bool checker::fit_constant_carries_cell_unit(std::span<const operand> sides) {
     d.level = severity::note;
     d.notes.push_back({"the fit holds only with its inputs in the units it was made for", {}});
     return true;
-}
-
-// "=243.04*LN(C53/6.1094)/(17.625-LN(C53/6.1094))": the Magnus fit solved for the dew point
-// with its constants typed as numbers (see magnus_solved_for_reading for their ranges). The
-// number b, or none.
-std::uint32_t checker::magnus_constant_typed(std::uint32_t node) const {
-    std::uint32_t b = syntax::no_index;
-    bool a_over = false;
-    const bool other = for_each_factor(node, [&](std::uint32_t at, int sign) {
-        const syntax::expr_node& n = file_.nodes[at];
-        if (n.kind == expr_kind::number && sign > 0) {
-            const double v = written_number(n.range);
-            if ((v >= 235.0 && v <= 260.0) || (v >= 270.0 && v <= 275.0))
-                b = at;
-            return false;
-        }
-        if ((n.kind == expr_kind::add || n.kind == expr_kind::subtract) && sign < 0) {
-            const std::uint32_t first = syntax::inside_brackets(file_, n.lhs);
-            if (n.kind == expr_kind::subtract && file_.nodes[first].kind == expr_kind::number) {
-                const double a = written_number(file_.nodes[first].range);
-                a_over = a_over || (a >= 17.0 && a <= 18.0) || (a >= 22.0 && a <= 23.0);
-            }
-            return false;
-        }
-        return n.kind != expr_kind::call && n.kind != expr_kind::reference &&
-               n.kind != expr_kind::symbol;
-    });
-    return !other && a_over ? b : syntax::no_index;
 }
 
 // "=4.52*Q^1.85/(C^1.85*D^4.87)" in psi/ft with Q in gpm and D in inches (Hazen-Williams as
