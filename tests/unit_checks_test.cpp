@@ -530,3 +530,17 @@ TEST_CASE("unit scale: a rounded factor's advice names the clock's 60 either way
     REQUIRE(scales.size() == 1);
     CHECK(mentions(*scales[0], "divide 'v_fpm/3.281' by 60 (59.9971 with the rounded numbers"));
 }
+
+// A load equivalence factor (P/P_std)^4 (AASHTO's fourth-power law, from memory) with the axle
+// in kN and the standard in kip (1 kip = 4.44822 kN, NIST SP 811 (2008), B.8): the units differ
+// inside the power, where the conversion belongs; the factor outside is its fourth power.
+TEST_CASE("unit scale: a mismatch inside a power is advised inside it") {
+    const auto r = plumb::check_text("p.plumb", "x : 1\nP : kN\nP_k : kip\nx = (P/P_k)^4\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(mentions(*scales[0], "(P/P_k) counts 4.44822 times as much as it should; convert there "
+                               "(divide it by 4.44822)"));
+    const auto plain = plumb::check_text("p.plumb", "x : 1\nP : kN\nP_k : kip\nx = P/P_k\n");
+    REQUIRE(findings(plain, plumb::rules::unit_scale).size() == 1);
+    CHECK(!mentions(*findings(plain, plumb::rules::unit_scale)[0], "inside the power"));
+}

@@ -563,6 +563,24 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                                        "write the conversion factor into the formula)",
                                        multiply ? "multiply" : "divide", quote(op.node), factor),
                            {}});
+    // "(P_ax/P_std_kip)^4", "(v_bw/v_t)^0.22": the units differ inside the power, where the
+    // conversion belongs (4.44822 kN per kip, 3600 s per h); the factor outside is its power.
+    if (const syntax::expr_node& power = file_.nodes[syntax::inside_brackets(file_, op.node)];
+        power.kind == expr_kind::power && file_.nodes[power.rhs].kind == expr_kind::number) {
+        const double exponent = written_number(file_.nodes[power.rhs].range);
+        const double inside = std::pow(whole, 1.0 / std::abs(exponent));
+        const bool divides = (ratio >= 1.0) == (exponent > 0);
+        if (std::isfinite(inside) && std::abs(exponent) != 1.0 && exponent != 0.0 &&
+            inside > 1.0 + 1e-6)
+            d.notes.push_back(
+                {fmt::format("the units differ inside the power: as written, {} counts {} times "
+                             "as much as it should; convert there ({} it by {}), and the power "
+                             "follows",
+                             display_text(file_.nodes[power.lhs].range),
+                             format_factor(divides ? inside : 1.0 / inside),
+                             divides ? "divide" : "multiply", format_factor(inside)),
+                 {}});
+    }
     // "E_yr = E_d/1000" beside "d_w : d/yr": 365 counts every day of a year, but a rate kept
     // on working days counts those.
     if (std::abs(advised / 365.0 - 1.0) < 1e-3 || std::abs(advised / 365.25 - 1.0) < 1e-6)
