@@ -177,6 +177,9 @@ constexpr double site_barometer_slack_in_difference = 0.005;
 constexpr std::string_view state_correction_advice =
     "an actual volume becomes a normal one times (p/p_n)*(T_n/T), with absolute pressures and "
     "temperatures (p_n = 101.325 kPa; T_n = 273.15 K for Nm\u00B3, 288.15 K for Sm\u00B3)";
+// Beside every empirical fit read with its constants typed bare in a workbook.
+constexpr std::string_view fit_units_note =
+    "the fit holds only with its inputs in the units it was made for";
 
 // A number the trades write in place of a conversion (8.34, water's weight per gallon): where
 // the units agree without it, it is as much a factor not needed as a conversion would be

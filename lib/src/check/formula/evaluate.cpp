@@ -553,7 +553,6 @@ std::optional<typed_term> checker::eval_log_difference(std::uint32_t index) {
         operands_.push_back({push_operand_type(a, types_base, 0), a});
     const scratch_region region(operands_, base, types_, types_base);
     typed_term result;
-    result.value.reset();
     double unit = 1.0;
     const std::string of = fmt::format("{} in a difference of logarithms", function);
     if (!check_scales(region.view(), {"arguments", of}, unit))

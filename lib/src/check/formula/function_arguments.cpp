@@ -222,7 +222,7 @@ bool checker::reference_value_typed_in_cell_unit(const builtin_function& f, cons
                     display_text(number.range), display_text(cell.range), r.unit_text, f.name),
         number.range);
     d.level = severity::note;
-    d.notes.push_back({"the fit holds only with its inputs in the units it was made for", {}});
+    d.notes.push_back({std::string(fit_units_note), {}});
     return true;
 }
 

@@ -441,11 +441,6 @@ bool checker::report_extra_factor(std::span<const operand> ops, std::span<const 
                                   std::span<const scaled_operand> parts, bool dimensionless) {
     if (conversions_all_needed(ops, index, parts, dimensionless))
         return false;
-    // "LG = 62.4*Q/(0.075*V)" with both flows in ft³/min: the densities' ratio, no conversion.
-    if (parts.size() == 2 && dimensionless &&
-        (densities_of_water_and_air(parts[0], parts[1], 1.0) ||
-         densities_of_water_and_air(parts[1], parts[0], 1.0))) [[unlikely]]
-        return false;
     constexpr std::size_t most_numbers = 8;
     // "P/(η_pct/100)*8760*u_pct/100/1000" into kWh/yr: the two 100s cancel, and either
     // one's removal reconciles as well as the 1000's; the numbers that cancel are tried
@@ -496,11 +491,6 @@ bool checker::report_extra_factor(std::span<const operand> ops, std::span<const 
 bool checker::report_unneeded_factor(std::span<const operand> ops,
                                      std::span<const std::size_t> index,
                                      std::span<const scaled_operand> parts, bool dimensionless) {
-    // "LG = 62.4*Q/(0.075*V)" with both flows in ft³/min: the densities' ratio, no conversion.
-    if (parts.size() == 2 && dimensionless &&
-        (densities_of_water_and_air(parts[0], parts[1], 1.0) ||
-         densities_of_water_and_air(parts[1], parts[0], 1.0))) [[unlikely]]
-        return false;
     for (std::size_t i = 0; i < parts.size(); ++i) {
         // "E_pct = f_pct*100": a percentage made a percentage again, where the term holds
         // one and the units agree in percent without the 100.

@@ -199,6 +199,12 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         return false;
     if (r.agree) {
         unit = r.unit;
+        // "LG = 62.4*Q/(0.075*V)" with both flows in ft³/min: the densities' ratio, no
+        // conversion to weigh.
+        if (parts.size() == 2 && dimensionless &&
+            (densities_of_water_and_air(parts[0], parts[1], 1.0) ||
+             densities_of_water_and_air(parts[1], parts[0], 1.0))) [[unlikely]]
+            return true;
         if (!r.used_literals)
             return !report_unneeded_factor(ops, index, parts, dimensionless);
         return !report_extra_factor(ops, index, parts, dimensionless);
@@ -343,7 +349,7 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     double written = 0.0;
     double coefficient_exponent = 0.0;
     int coefficient_digits = 0;
-    bool coefficient_on_odd_side = false;
+    bool on_odd_side = false; // the one coefficient's
     std::optional<std::string> other_unit_note;
     // "60*W*L*c*ΔT/(h_fg*t)" into lb/h with t in min and h_fg in kJ/kg: the clock's 60 is
     // the conversion it was written as, and the factor advised (2.326) leaves it in, as the
@@ -362,7 +368,6 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                 }
     if (!clean) {
         const scale_literal* coefficient = nullptr;
-        bool on_odd_side = false;
         for (const std::size_t side : {r.odd, r.reference})
             for (const scale_literal& l : parts[side].literals)
                 if (l.value != 1.0 && !looks_like_conversion(l, true) && !clock_ratio(l) &&
@@ -378,7 +383,6 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                     coefficient_digits = significant_digits(text(file_.nodes[l.node].range));
                     coefficient = &l;
                     on_odd_side = side == r.odd;
-                    coefficient_on_odd_side = on_odd_side;
                 }
         // "P_hp = T_e*v/33000" with v in m/s: the number is the conversion these units
         // need with one symbol in the other system's unit. It is counted as the conversion
@@ -407,16 +411,16 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     // or the conversion meant; the finding is counted both ways, so that neither advice,
     // followed alone, leaves the other reading's slip.
     const double in_place = std::pow(needed, coefficient_exponent);
-    const bool in_place_offered =
-        !other_unit_note && coefficient_count == 1 && std::isfinite(in_place) && in_place > 0 &&
-        std::abs(written / needed - 1.0) > 0.05 && std::abs(coefficient_exponent) == 1.0 &&
-        std::abs(std::log10(in_place / written)) <= std::log10(5.0) &&
-        (written >= 10.0 || coefficient_digits >= 3);
+    const bool one_coefficient = !other_unit_note && coefficient_count == 1 &&
+                                 std::isfinite(in_place) && in_place > 0 &&
+                                 std::abs(coefficient_exponent) == 1.0;
+    const bool in_place_offered = one_coefficient && std::abs(written / needed - 1.0) > 0.05 &&
+                                  std::abs(std::log10(in_place / written)) <= std::log10(5.0) &&
+                                  (written >= 10.0 || coefficient_digits >= 3);
     // "I_in4 = I_cm4/2.54": a length's ratio where these units need its fourth power (cm⁴ to
     // in⁴ is 2.54⁴ = 41.6231, NIST SP 811 (2008), B.8). The power, or 0 where none fits.
     int power_of_ratio = 0;
-    if (!other_unit_note && coefficient_count == 1 && std::isfinite(in_place) && in_place > 0 &&
-        std::abs(coefficient_exponent) == 1.0 && coefficient_digits >= 3 && written > 1.0)
+    if (one_coefficient && coefficient_digits >= 3 && written > 1.0)
         for (const int k : {2, 3, 4})
             if (std::abs(in_place / std::pow(written, k) - 1.0) < 2e-3 * k)
                 power_of_ratio = k;
@@ -432,9 +436,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         counted = fmt::format(
             "{} times as much as {} if {} was meant as the conversion, {} times as much if it is "
             "a coefficient",
-            format_factor(
-                std::pow(coefficient_on_odd_side ? written / in_place : in_place / written,
-                         coefficient_exponent)),
+            format_factor(std::pow(on_odd_side ? written / in_place : in_place / written,
+                                   coefficient_exponent)),
             quote(reference.node), coefficients, format_factor(exact_ratio, ratio));
     std::string headline =
         fmt::format("as written, {} counts {}: the {} agree in dimension but not in unit",
@@ -461,13 +464,10 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                            {}});
     else if (other_unit_note)
         d.notes.push_back({std::move(*other_unit_note), {}});
-    else if (counted_both_ways) {
-        // The advice below gives both readings.
-    } else if (in_place_offered) {
-        // "V_hL = 1.59*V_bb", "COP = 12/kWpt": a number within a factor of five of the one
-        // these units need, printed as a conversion is, may be either, and the advice below
-        // gives both; a formula's own 384 beside a 10, or its 0.75, is left a coefficient.
-    } else if (!coefficients.empty())
+    // "V_hL = 1.59*V_bb", "COP = 12/kWpt": a number within a factor of five of the one these
+    // units need, printed as a conversion is, may be either, and the advice below gives both;
+    // a formula's own 384 beside a 10, or its 0.75, is left a coefficient.
+    else if (!coefficients.empty() && !counted_both_ways && !in_place_offered)
         d.notes.push_back({fmt::format("{} counted as a coefficient, not a unit conversion; if "
                                        "it was meant to convert units, it is not the factor "
                                        "these units need",

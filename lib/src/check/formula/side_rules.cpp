@@ -87,7 +87,7 @@ bool checker::fit_constant_carries_cell_unit(std::span<const operand> sides) {
                                            display_text(file_.nodes[b].range)),
                                file_.nodes[b].range);
         d.level = severity::note;
-        d.notes.push_back({"the fit holds only with its inputs in the units it was made for", {}});
+        d.notes.push_back({std::string(fit_units_note), {}});
         return true;
     }
     if (!formula.type.known || !sides[0].type.known || sides[0].type.offset != nullptr ||
@@ -143,7 +143,7 @@ bool checker::fit_constant_carries_cell_unit(std::span<const operand> sides) {
                                        display_text(file_.nodes[constant].range), carries),
                            file_.nodes[constant].range);
     d.level = severity::note;
-    d.notes.push_back({"the fit holds only with its inputs in the units it was made for", {}});
+    d.notes.push_back({std::string(fit_units_note), {}});
     return true;
 }
 
