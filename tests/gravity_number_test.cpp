@@ -1114,3 +1114,29 @@ TEST_CASE("water's and air's densities typed as numbers in a mass ratio") {
         CHECK(problems_in(run(d + wrong + "\n")) > 0);
     }
 }
+
+// A day is 24 h, 1440 min or 86400 s (NIST SP 811 (2008), B.8), never a power of ten: where a
+// formula counts hours per day (h/d), a season's energy from a day's leaves out the number of
+// days, and the /1000 from kW·h to MWh must not be read as the day that is missing.
+TEST_CASE("a power of ten is never read as the length of a day or a year") {
+    const std::string decl = "P_d : kW\nf_L : %\nh_d : h/d\nN_d : d\nE_s : MWh\nE_d : kWh\n"
+                             "E_a : MWh\nP_kW : kW\n";
+    for (const char* formula : {"E_s = f_L/100*P_d*h_d/1000", "E_s = P_d*h_d/1000",
+                                "E_s = 0.6*P_d*h_d/1000", "E_a = P_kW/1000"}) {
+        CAPTURE(formula);
+        const auto r = run(decl + formula + "\n");
+        CHECK(count_of(r, plumb::rules::side_mismatch) == 1);
+        CHECK(count_of(r, plumb::rules::trade_constant) == 0);
+    }
+    // The note names the rate counted per day, and the count the total needs.
+    CHECK(message_of(run(decl + "E_s = P_d*h_d/1000\n"), plumb::rules::side_mismatch).size() > 0);
+    const auto r = run(decl + "E_s = P_d*h_d/1000\n");
+    bool named = false;
+    for (const auto& d : r.diagnostics)
+        for (const auto& n : d.notes)
+            named = named || n.message.find("'h_d' is counted per day (h/d)") != std::string::npos;
+    CHECK(named);
+    // With the days written in, and a day's hours typed as 24, the lines pass.
+    CHECK(problems_in(run(decl + "E_s = f_L/100*P_d*h_d*N_d/1000\n")) == 0);
+    passes_with_one_note(decl, {"E_d = P_kW*24"}, plumb::rules::trade_constant);
+}

@@ -38,6 +38,7 @@ constexpr std::size_t twice_gravity_row = 1;
 constexpr std::size_t round_water_row = 3; // the ground engineer's 10 kN/m³
 constexpr std::size_t molar_volume_row = 7;
 constexpr std::size_t year_row = 16; // the hours of a year
+constexpr std::size_t day_row = 19;  // the hours of a day
 
 const dimension& density_dimension() {
     static const dimension density = dimension::base(base_dimension::mass) /
@@ -516,6 +517,14 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
             if ((number.value == 24.0 && q.dim == density_dimension()) ||
                 ((number.value == 8760.0 || number.value == 8766.0 || number.value == 8784.0) &&
                  &q != &quantities()[year_row]))
+                continue;
+            // A day or a year is 24, 1440, 86400 or 8760 in some clock unit, never a power of
+            // ten. Where a formula's units count per day (h/d) a term lacking the number of
+            // days has the day's length exactly 1 in those units, and its /1000 from kW to MW
+            // would be read as the day: E_s = P*h_d/1000 in MWh is a day's energy set equal
+            // to a season's, an error.
+            if (number.power_of_ten &&
+                (&q == &quantities()[day_row] || &q == &quantities()[year_row]))
                 continue;
             for (const bool reciprocal : {false, true}) {
                 if (!is_power_of(lacking, q.dim, reciprocal ? -x : x))

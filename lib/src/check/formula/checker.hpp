@@ -729,6 +729,8 @@ class checker {
     static constexpr std::size_t notes_for_terms_up_to = 16;
 
     // check/formula/explanations.cpp
+    void note_count_of_periods_left_out(diagnostic& d, std::span<const operand> ops,
+                                        const agreement& a) const;
     void note_bare_quantity_apart(diagnostic& d, std::span<const operand> ops,
                                   const agreement& a) const;
     std::optional<compact_dimension> odd_one_apart(std::span<const operand> ops,

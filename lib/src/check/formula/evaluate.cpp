@@ -299,6 +299,7 @@ void checker::check_formula(const syntax::formula& f) {
     if (!note_gravity_in_other_units(d, sides, a) && !note_constant_for_other_units(d, sides, a))
         note_acceleration_or_density_apart(d, sides, a);
     note_bare_quantity_apart(d, sides, a);
+    note_count_of_periods_left_out(d, sides, a);
     note_unit_read_past_a_slash(d);
     if ((symbols_.unit_marks() & mass_fractions) != 0) [[unlikely]]
         note_fraction_beside_concentration(d, sides);

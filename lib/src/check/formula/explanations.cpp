@@ -64,6 +64,44 @@ void checker::note_bare_quantity_apart(diagnostic& d, std::span<const operand> o
         }
 }
 
+// "E_s = P_d*h_d/1000" with h_d in h/d and E_s in MWh: a rate per day times a power is a
+// power still, and a total over a season takes the number of days too. Named where the odd
+// term lacks exactly a time and holds a symbol counted per day, week or year.
+void checker::note_count_of_periods_left_out(diagnostic& d, std::span<const operand> ops,
+                                             const agreement& a) const {
+    const std::optional<compact_dimension> apart = odd_one_apart(ops, a);
+    if (!apart || !(*apart == time_dimension()))
+        return;
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 8> periods{{
+        {"/d", "day"},
+        {"/day", "day"},
+        {"/wk", "week"},
+        {"/week", "week"},
+        {"/yr", "year"},
+        {"/a", "year"},
+        {"/y", "year"},
+        {"/year", "year"},
+    }};
+    for_each_factor(ops[a.odd.front()].node, [&](std::uint32_t at, int sign) {
+        if (sign < 0 || file_.nodes[at].kind != expr_kind::symbol)
+            return false;
+        const std::string_view name = text(file_.nodes[at].range);
+        const symbol_entry* e = symbols_.find(name);
+        if (e == nullptr)
+            return false;
+        for (const auto& [suffix, period] : periods)
+            if (e->unit_text.size() > suffix.size() && e->unit_text.ends_with(suffix)) {
+                d.notes.push_back(
+                    {fmt::format("'{}' is counted per {} ({}): a total over a longer time takes "
+                                 "the number of {}s as a factor too",
+                                 name, period, e->unit_text, period),
+                     {}});
+                return true;
+            }
+        return false;
+    });
+}
+
 // What the first odd operand lacks against the others' dimension (their quotient), in a
 // mismatch of a formula's size; nothing where it is not known.
 std::optional<compact_dimension> checker::odd_one_apart(std::span<const operand> ops,
