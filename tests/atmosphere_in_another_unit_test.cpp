@@ -170,3 +170,49 @@ TEST_CASE("sheets: the atmosphere added in bar to a psig cell under psia") {
                "1.01325 is the atmosphere in bar, not in psia, the cell's unit: in psia it is "
                "14.6959"));
 }
+
+// 1 inch of water = 249.089 Pa (NIST SP 811 (2008), B.8; the trade rounds it to 249.1): a
+// pressure declared a rise over outdoor air, converted by a number, is a difference still, and
+// a manometer reading in in. w.g. reads it. The factor the wrong way round is then a scale
+// finding that names the factor, not a zero an atmosphere away.
+TEST_CASE("a declared pressure difference converted by a number is a gauge reading") {
+    const std::string d = "Δp_i : Pa \"inflation pressure, the rise over outdoor air\"\n"
+                          "p_wg : inH2Og\np_kg : kPag\n";
+    passes(d, {"p_wg = Δp_i/249.1", "p_kg = Δp_i/1000", "p_kg = 0.001*Δp_i"});
+    for (const char* formula : {"p_wg = 249.1*Δp_i", "p_kg = 1000*Δp_i"}) {
+        CAPTURE(formula);
+        const auto r = run(d, formula);
+        CHECK(count_of(r, plumb::rules::offset_scale) == 0);
+        REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+        CHECK(says(first_under(r, plumb::rules::unit_scale), "wrong way round"));
+    }
+    // A reading declared absolute is no difference, converted or not.
+    fails_with("p_a : Pa \"absolute pressure in the dome\"\np_wg : inH2Og\n", {"p_wg = p_a/249.1"},
+               plumb::rules::offset_scale);
+}
+
+// Dalton's law, p_i = y_i·p with p absolute (any thermodynamics text, e.g. Çengel & Boles,
+// ch. 13, from memory): a mole fraction of a gauge reading is no partial pressure, and the
+// advice puts the atmosphere inside the bracket the fraction scales.
+TEST_CASE("a fraction of a gauge reading is advised the atmosphere inside") {
+    const std::string d = "y_H2 : %\np_rg : psig\np_H2 : psia\n";
+    const auto r = run(d, "p_H2 = y_H2/100*p_rg");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(r, plumb::rules::offset_scale), "y_H2/100*(p_rg + 14.6959)"));
+    passes(d, {"p_H2 = y_H2/100*(p_rg + 14.696)"});
+}
+
+// t_C = (t_F - 32)/1.8 (NIST SP 811 (2008), B.9): with the 32 taken after dividing, a reading
+// comes out 32 - 32/1.8 = 14.2222 K low at every temperature, which the finding says instead
+// of how far the two scales' zeros lie apart.
+TEST_CASE("32 taken after the division by 1.8 is said with the error it makes") {
+    const std::string d = "t_F : degF\nt_C : degC\n";
+    for (const char* formula : {"t_C = t_F/1.8 - 32", "t_C = 0.5556*t_F - 32"}) {
+        CAPTURE(formula);
+        const auto r = run(d, formula);
+        REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+        CHECK(says(first_under(r, plumb::rules::offset_scale), "14.2222 K too low"));
+    }
+    CHECK(32.0 - 32.0 / 1.8 == doctest::Approx(14.2222).epsilon(1e-5));
+    passes(d, {"t_C = (t_F - 32)/1.8"});
+}

@@ -1184,6 +1184,8 @@ class checker {
     bool explain_reversed_fahrenheit(diagnostic& d, const operand& a, const operand& b);
     [[gnu::noinline]] void compare_origins(std::span<const operand> sides,
                                            std::string_view relation);
+    std::optional<double> number_taken_after_division_by_1_8(const operand& o) const;
+    std::uint32_t fraction_of_a_reading(const syntax::expr_node& product) const;
     std::uint32_t number_added(std::uint32_t node) const;
     std::string atmosphere_in_other_unit(const operand& side, double reading_unit) const;
     std::optional<std::string> atmosphere_in_unit_of_other(const operand& side,

@@ -96,10 +96,20 @@ bool checker::declared_pressure_difference(const operand& o) const {
     if (!o.type.known || o.type.point || o.type.offset != nullptr ||
         !(o.type.dim == pressure_dimension()))
         return false;
-    const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, o.node)];
-    if (n.kind != expr_kind::symbol)
+    // "Δp_i/249.1", "1000*Δp_f": a difference times numbers (conversions, or a factor the
+    // wrong way round, which the scale rule then names) is a difference still.
+    std::uint32_t symbol = syntax::no_index;
+    const bool other = for_each_factor(o.node, [&](std::uint32_t at, int sign) {
+        const expr_kind kind = file_.nodes[at].kind;
+        if (kind == expr_kind::symbol && sign > 0 && symbol == syntax::no_index) {
+            symbol = at;
+            return false;
+        }
+        return kind != expr_kind::number;
+    });
+    if (other || symbol == syntax::no_index)
         return false;
-    const std::string_view name = text(n.range);
+    const std::string_view name = text(file_.nodes[symbol].range);
     const symbol_entry* e = symbols_.find(name);
     return e != nullptr && e->reading == 0 && !names_a_stress(name, e->description);
 }

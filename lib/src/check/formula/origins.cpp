@@ -273,6 +273,21 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
                               reading, atmosphere_in(written_unit, absolute_unit), reading, zero,
                               absolute_unit));
             advice += ratio_of_reading;
+            // "p_H2 = y_H2/100*p_rg": a fraction of a gauge reading, a partial pressure, is
+            // that fraction of the absolute pressure (Dalton's law); the atmosphere goes
+            // inside, not after the fraction has scaled the reading.
+            if (const std::uint32_t share = fraction_of_a_reading(whole);
+                !temperature && share != syntax::no_index) {
+                const std::string fraction = display_text(file_.nodes[share].range);
+                const std::string gauge =
+                    display_text(file_.nodes[share == whole.lhs ? whole.rhs : whole.lhs].range);
+                advice = fmt::format(
+                    "a partial pressure (Dalton's law) is a share of the absolute pressure: "
+                    "write {}*({} + {}), or {}*({} + {}) at sea level, the standard atmosphere "
+                    "in {}",
+                    fraction, gauge, atmosphere_in(written_unit, absolute_unit), fraction, gauge,
+                    zero, absolute_unit);
+            }
             // "Δθ_h = θ_h" with Δθ_h in K "rise above ambient": the kelvins are a rise's,
             // and a reading made absolute would only hide the slip.
             if (temperature && file_.nodes[other.node].kind == expr_kind::symbol) {
@@ -317,6 +332,18 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
                 advice = *added;
             d.notes.push_back({std::move(advice), {}});
         } else if (unit != nullptr && other.type.offset != nullptr && temperature) {
+            // "T_C = T_F/1.8 - 32": the 32 taken after the division lands 32 - 32/1.8 K
+            // from the reading, which is what the engineer needs to hear, not how far the
+            // scales' zeros lie apart.
+            for (const operand* o : {&off, &other})
+                if (const std::optional<double> n = number_taken_after_division_by_1_8(*o)) {
+                    const double off_by = 32.0 / 1.8 - *n;
+                    d.message = fmt::format(
+                        "{} takes {} away after dividing by 1.8: beside {} it is {} K too {}",
+                        quote(o->node), format_factor(*n), quote((o == &off ? other : off).node),
+                        format_factor(std::abs(off_by)), off_by < 0 ? "low" : "high");
+                    break;
+                }
             // "T_C = T_F/1.8 - 32", "T_F = 1.8*T_C": the conversion between the two
             // scales with its zero left out or put in the wrong place.
             d.notes.push_back({"a \u00B0F reading is (T_F - 32)/1.8 on the \u00B0C scale, "
@@ -326,6 +353,62 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
         }
         return;
     }
+}
+
+// "t_F/1.8 - 32", "0.5556*t_F - 32" on the °F scale: the number taken after the degrees
+// are divided to kelvin size; empty for any other side.
+std::optional<double> checker::number_taken_after_division_by_1_8(const operand& o) const {
+    if (o.type.offset == nullptr || std::abs(o.type.offset->factor * 1.8 - 1.0) > 1e-9)
+        return std::nullopt;
+    const syntax::expr_node& whole = file_.nodes[syntax::inside_brackets(file_, o.node)];
+    if (whole.kind != expr_kind::subtract)
+        return std::nullopt;
+    const syntax::expr_node& taken = file_.nodes[syntax::inside_brackets(file_, whole.rhs)];
+    const syntax::expr_node& scaled = file_.nodes[syntax::inside_brackets(file_, whole.lhs)];
+    if (taken.kind != expr_kind::number ||
+        (scaled.kind != expr_kind::divide && scaled.kind != expr_kind::multiply))
+        return std::nullopt;
+    const auto number_of = [&](std::uint32_t at) {
+        const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, at)];
+        return n.kind == expr_kind::number ? written_number(n.range) : 0.0;
+    };
+    const bool by_1_8 = scaled.kind == expr_kind::divide
+                            ? std::abs(number_of(scaled.rhs) / 1.8 - 1.0) < 1e-3
+                            : std::abs(number_of(scaled.lhs) * 1.8 - 1.0) < 1e-3 ||
+                                  std::abs(number_of(scaled.rhs) * 1.8 - 1.0) < 1e-3;
+    if (!by_1_8)
+        return std::nullopt;
+    return written_number(taken.range);
+}
+
+// "y_H2/100*p_rg", "x_CO2*p_g": the factor of a product of two that is a fraction (built of
+// numbers and dimensionless symbols, one symbol at least) beside a symbol; no_index otherwise.
+std::uint32_t checker::fraction_of_a_reading(const syntax::expr_node& product) const {
+    if (product.kind != expr_kind::multiply)
+        return syntax::no_index;
+    const auto fraction = [&](std::uint32_t k) {
+        bool symbol = false;
+        const bool other = for_each_factor(k, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number)
+                return false;
+            const symbol_entry* e =
+                n.kind == expr_kind::symbol ? symbols_.find(text(n.range)) : nullptr;
+            if (e == nullptr || !e->compact_dim || !e->compact_dim->is_dimensionless())
+                return true;
+            symbol = true;
+            return false;
+        });
+        return symbol && !other;
+    };
+    const auto symbol = [&](std::uint32_t k) {
+        return file_.nodes[syntax::inside_brackets(file_, k)].kind == expr_kind::symbol;
+    };
+    if (symbol(product.rhs) && fraction(product.lhs))
+        return product.lhs;
+    if (symbol(product.lhs) && fraction(product.rhs))
+        return product.rhs;
+    return syntax::no_index;
 }
 
 // The number added to a side "reading + number", groups stripped; no_index otherwise.
