@@ -1140,3 +1140,23 @@ TEST_CASE("a power of ten is never read as the length of a day or a year") {
     CHECK(problems_in(run(decl + "E_s = f_L/100*P_d*h_d*N_d/1000\n")) == 0);
     passes_with_one_note(decl, {"E_d = P_kW*24"}, plumb::rules::trade_constant);
 }
+
+// Pipeline natural gas carries about 1000 to 1050 Btu/ft³, 37 to 39 MJ/m³ (GPSA Engineering
+// Data Book, sec. 23, from memory); the fuel gas codes size a burner's gas at 1000 Btu per
+// cubic foot (common practice), and meters bill at about 10.5 kWh/m³. 1000 Btu/ft³ is
+// 1000 × 1055.056 J / 0.0283168 m³ = 37.26 MJ/m³ (NIST SP 811 (2008), B.8).
+TEST_CASE("a natural gas heating value typed as a number in a burner's gas flow") {
+    CHECK(1000.0 * 1055.05585262 / 0.028316846592 == doctest::Approx(37.26e6).epsilon(1e-3));
+    const std::string decl = "V_scfh : scfh\nQ_Btuh : Btu/h\nE_kWh : kWh\nV_m3 : m^3\n"
+                             "Q_kW : kW\nV_m3h : m^3/h\nP_kPa : kPa\n";
+    passes_with_one_note(decl,
+                         {"V_scfh = Q_Btuh/1000", "Q_Btuh = 1030*V_scfh", "E_kWh = 10.5*V_m3",
+                          "V_m3h = Q_kW*3.6/38"},
+                         plumb::rules::trade_constant);
+    // The heat set equal to the gas flow, a number that is no heating value, and a pressure
+    // lacking from a pressure's formula stay findings.
+    for (const char* formula : {"V_scfh = Q_Btuh", "V_scfh = Q_Btuh/600", "P_kPa = 1000*Q_kW"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) >= 1);
+    }
+}

@@ -46,8 +46,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 28>& quantities() {
-    static const std::array<carried_quantity, 28> table = [] {
+const std::array<carried_quantity, 29>& quantities() {
+    static const std::array<carried_quantity, 29> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -99,7 +99,7 @@ const std::array<carried_quantity, 28>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 28>{{
+        return std::array<carried_quantity, 29>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -300,6 +300,17 @@ const std::array<carried_quantity, 28>& quantities() {
             // CODATA 2018's R and IUPAC's molar masses (from memory): nitrogen 296.80, oxygen
             // 259.84, carbon dioxide 188.92, methane 518.28, hydrogen 4124.2 J/(kg·K), the 296.8
             // of a buffer tank's stored mass m = p·V/(296.8·T).
+            // Pipeline natural gas: a higher heating value of about 1000 to 1050 Btu/ft³, 37
+            // to 39 MJ/m³ (GPSA Engineering Data Book, sec. 23; from memory), and the US fuel
+            // gas codes' 1000 Btu per cubic foot where the supplier gives none (common
+            // practice): the 1000 of a burner's gas flow V = Q_Btuh/1000 in cfh, the 10.5
+            // kWh/m³ of a meter's energy. Read only in a heat or a fuel's amount.
+            {rules::trade_constant, "the heating value of natural gas", "HV", "1/HV",
+             " (pipeline natural gas: 35 to 42 MJ/m\u00B3, 940 to 1130 Btu/ft\u00B3; the "
+             "supplier's analysis decides)",
+             "declare the heating value with its unit (HV : Btu/ft^3 = 1000) to say so",
+             "write the heating value in a cell that holds its unit to say so",
+             mass / (length * time * time), 35.0e6, 42.0e6, carried_quantity::term_kind::fuel_gas},
             gas_constant("the gas constant of nitrogen", "R_N2 = R/M_N2", "1/R_N2",
                          "declare the gas constant with its unit (R_N2 : J/(kg*K) = 296.8) to "
                          "say so",
@@ -507,7 +518,9 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
             continue;
         const double half_unit = half_unit_in_last_digit(texts[at]);
         for (const carried_quantity& q : quantities()) {
-            if ((q.only_in != carried_quantity::term_kind::any && q.only_in != term) ||
+            if ((q.only_in != carried_quantity::term_kind::any && q.only_in != term &&
+                 !(q.only_in == carried_quantity::term_kind::fuel_gas &&
+                   term == carried_quantity::term_kind::volume_flow)) ||
                 (q.finest_rounding > 0.0 && half_unit > q.finest_rounding * number.value))
                 continue;
             // But a 24 is no density: W/(24*w) from kg/d into L/h lacks the solution's density

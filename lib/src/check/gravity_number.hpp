@@ -34,7 +34,9 @@ struct carried_quantity {
     double greatest = 0.0; // SI
     // Read only in a term of that kind (4.5*cfm*ΔW, 0.00256*K_z*V^2): the air trade's per-cfm
     // and per-mph² constants, whose values would otherwise fit too many other numbers.
-    enum class term_kind : std::uint8_t { any, volume_flow, velocity_squared };
+    // A fuel's heating value stands in a heat or a fuel's amount (power, energy, volume, a
+    // volume flow): fuel_gas, which a volume flow also takes.
+    enum class term_kind : std::uint8_t { any, volume_flow, velocity_squared, fuel_gas };
     term_kind only_in = term_kind::any;
     // The named constant that writes it in the notation ("{g_n}", "2*{g_n}", "{R}"), where one
     // does: a number that holds it and a conversion is advised as this times the conversion.

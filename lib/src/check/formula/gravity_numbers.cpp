@@ -132,7 +132,8 @@ carried_quantity::term_kind checker::kind_of(const typed_term& t) {
            : t.dim == volume_flow_dimension() || t.dim == volume_flow_enthalpy_dim
                ? term_kind::volume_flow
            : t.dim == velocity_squared_dimension() ? term_kind::velocity_squared
-                                                   : term_kind::any;
+           : t.dim == power_dim || t.dim == energy_dim || t.dim == volume_dim ? term_kind::fuel_gas
+                                                                              : term_kind::any;
 }
 
 // As read_gravity_numbers, and where that fails because the number stands in the terms that

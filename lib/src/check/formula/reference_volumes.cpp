@@ -220,8 +220,10 @@ void checker::report_actual_volume_as_normal(std::span<const operand> sides) {
             return;
         const std::string_view actual_name = text(file_.nodes[actual_node].range);
         const symbol_entry* actual = symbols_.find(actual_name);
+        // "V_scfh = Q_Btuh/1000": a heat over the gas's heating value is no actual volume.
         if (actual == nullptr || actual->unit_text.empty() ||
-            (unit_marks_of(actual->unit_text) & at_reference_conditions) != 0)
+            (unit_marks_of(actual->unit_text) & at_reference_conditions) != 0 ||
+            !actual->compact_dim || !is_gas_volume_or_flow(*actual->compact_dim))
             return;
         // Free air is at the intake, some 15 to 35 °C: near a standard volume's 15 °C or
         // 60 °F, but 5 to 13 % from a normal one's 0 °C.
