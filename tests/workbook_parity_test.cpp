@@ -1051,3 +1051,39 @@ TEST_CASE("workbook parity: a rim speed without π and a torque without 2π, rea
     CHECK(says(*rim, "off by 3.14159"));
     CHECK(says(*rim, "multiply by PI()"));
 }
+
+namespace {
+
+// A row with its label in A, its value or formula in B and its unit in C.
+std::string labelled_row(int r, const std::string& label, const std::string& value,
+                         const std::string& unit) {
+    const std::string n = std::to_string(r);
+    std::string row = value_and_unit_row(r, value, unit);
+    const std::string cell_a =
+        "<c r=\"A" + n + "\" t=\"inlineStr\"><is><t>" + label + "</t></is></c>";
+    return row.insert(row.find('>') + 1, cell_a);
+}
+
+} // namespace
+
+TEST_CASE("workbook parity: a moist-air enthalpy cell counts its °C reading from 0 °C") {
+    // h = 1.006·t + W·(2501 + 1.86·t) in kJ/kg dry air with t in °C (ASHRAE Handbook,
+    // Fundamentals (2017), ch. 1, eq. 32, from memory): the psychrometric tables count dry air's
+    // enthalpy from 0 °C, so t is the rise above that datum where the row names an enthalpy,
+    // as an enthalpy symbol's side is in a .plumb file. Without the label it stays an error.
+    const auto sheet = [](const std::string& label) {
+        return "<worksheet><sheetData>" + labelled_row(2, "Outdoor air", "30", "°C") +
+               labelled_row(3, "Humidity ratio", "12", "g/kg") +
+               labelled_row(4, "c_p of dry air", "1.006", "kJ/(kg*K)") +
+               labelled_row(5, "c_p of water vapour", "1.86", "kJ/(kg*K)") +
+               labelled_row(6, "Latent heat at 0 °C", "2501", "kJ/kg") +
+               labelled_row(7, label, "=B4*B2+B3/1000*(B6+B5*B2)", "kJ/kg") +
+               "</sheetData></worksheet>";
+    };
+    const check_report named = check_one_sheet("AHU", sheet("Outdoor air enthalpy"));
+    CHECK(problems_in(named) == 0);
+    CHECK(cell_findings(named) ==
+          std::vector<std::string>{"AHU!B7 trade-constant", "AHU!B7 trade-constant"});
+    const check_report unnamed = check_one_sheet("AHU", sheet("Outdoor air heat"));
+    CHECK(count_of(unnamed, rules::offset_scale) >= 1);
+}

@@ -53,6 +53,9 @@ struct reference_value {
     // A pressure or temperature cell whose row label says it is a difference ("Friction
     // loss", "Δp"): no reading, whatever its unit.
     bool difference = false;
+    // A cell of specific energy whose row label names an enthalpy ("Outdoor air enthalpy"),
+    // counted from the tables' datum as an enthalpy symbol is.
+    bool enthalpy = false;
     // A pure number whose row label says it is a liquid's specific gravity.
     bool specific_gravity = false;
     // A length whose row label names a circle's diameter or radius (a pulley's, a drum's).

@@ -36,7 +36,8 @@ void cell_equation::make_room() {
 }
 
 std::vector<diagnostic> cell_equation::check(std::uint32_t formula_root, span written_text,
-                                             const written_unit& written, bool difference) {
+                                             const written_unit& written, bool difference,
+                                             bool enthalpy) {
     if (formula_ == syntax::no_index)
         return {}; // make_room() was not called: no equation to check
     syntax::reference_value& cell = tree_.references[written_reference_];
@@ -46,6 +47,7 @@ std::vector<diagnostic> cell_equation::check(std::uint32_t formula_root, span wr
     cell.exact_scale = written.exact_scale;
     cell.offset = written.offset;
     cell.difference = difference;
+    cell.enthalpy = enthalpy;
     cell.unit_text = written.text;
     note_reference_state(tree_.references[written_reference_], written.text);
     tree_.nodes[written_node_].range = written_text;

@@ -24,8 +24,10 @@ class cell_equation {
     // The notation's findings on "written = the formula at formula_root". `written_text` is
     // the unit's text in the tree's source, where a finding that names that side points.
     // `difference`: the cell's row label says it holds a difference ("Range", "Friction loss").
+    // `enthalpy`: its row label names an enthalpy ("Outdoor air enthalpy").
     std::vector<diagnostic> check(std::uint32_t formula_root, span written_text,
-                                  const written_unit& written, bool difference = false);
+                                  const written_unit& written, bool difference = false,
+                                  bool enthalpy = false);
 
   private:
     syntax::parsed_file& tree_;

@@ -600,6 +600,16 @@ class workbook_checker {
         return heading;
     }
 
+    // "Outdoor air enthalpy", "h_sa [kJ/kg]" with a heading "Enthalpy": the row label or the
+    // column's heading names an enthalpy.
+    bool labelled_an_enthalpy(std::size_t s, cell_address a) const {
+        const auto names = [](const std::string& words) {
+            return words.find("enthalpy") != std::string::npos ||
+                   words.find("Enthalpy") != std::string::npos;
+        };
+        return names(label_of(s, a).description) || names(heading_of(s, a).description);
+    }
+
     bool labelled_a_difference(std::size_t s, cell_address a) const {
         const row_label label = label_of(s, a);
         if (!label.description.empty() && names_a_difference(label.name, label.description))
@@ -673,12 +683,15 @@ class workbook_checker {
         std::optional<std::vector<diagnostic>> verdict;
         if (written != nullptr && f.lowered.not_checked.empty()) {
             const std::uint32_t root = lowered_.tree.sides[formula.first_side].root;
-            verdict = equation_.check(root, f.written_text, written->unit);
+            // Asked of a specific energy only (names_specific_enthalpy).
+            const bool enthalpy = labelled_an_enthalpy(f.sheet, f.source->at);
+            verdict = equation_.check(root, f.written_text, written->unit, false, enthalpy);
             // "Range | =C6-C7 | °F": a cell whose row label says it holds a difference, and
             // whose formula computes one; a reading there ("Mean / range", =AVERAGE(...))
             // was already right as a reading.
             if (has_fault(*verdict) && labelled_a_difference(f.sheet, f.source->at))
-                if (auto as_difference = equation_.check(root, f.written_text, written->unit, true);
+                if (auto as_difference =
+                        equation_.check(root, f.written_text, written->unit, true, enthalpy);
                     !has_fault(as_difference))
                     verdict = std::move(as_difference);
             if (!has_unit_fault(*verdict)) {

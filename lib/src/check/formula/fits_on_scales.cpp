@@ -533,8 +533,11 @@ void checker::note_enthalpy_side(const operand& first, std::uint32_t root) {
 
 // A side that is one symbol of specific energy named or described as an enthalpy.
 bool checker::names_specific_enthalpy(const operand& side) const {
-    if (!side.type.known || !(side.type.dim == velocity_squared_dim) ||
-        file_.nodes[side.node].kind != expr_kind::symbol)
+    if (!side.type.known || !(side.type.dim == velocity_squared_dim))
+        return false;
+    if (file_.nodes[side.node].kind == expr_kind::reference)
+        return file_.references[file_.nodes[side.node].lhs].enthalpy;
+    if (file_.nodes[side.node].kind != expr_kind::symbol)
         return false;
     const std::string_view name = text(file_.nodes[side.node].range);
     const symbol_entry* e = symbols_.find(name);
