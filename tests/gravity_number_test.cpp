@@ -1160,3 +1160,14 @@ TEST_CASE("a natural gas heating value typed as a number in a burner's gas flow"
         CHECK(problems_in(run(decl + formula + "\n")) >= 1);
     }
 }
+
+// h = c·(t_F - 32) counts liquid water's enthalpy from 32 °F as the US tables do (common
+// practice): the rise above the ice point written out needs no note, while c·t with t in °C
+// beside an enthalpy is read as that rise with one.
+TEST_CASE("an enthalpy from a reading less its ice point written out passes without a note") {
+    const std::string decl = "h_f : Btu/lb \"feedwater enthalpy\"\nc : Btu/(lb*degF)\n"
+                             "t_F : degF\nh_c : kJ/kg \"enthalpy\"\nc_w : kJ/(kg*K)\nt_c : degC\n";
+    const std::string us = "h_f : Btu/lb \"feedwater enthalpy\"\nc : Btu/(lb*degF)\nt_F : degF\n";
+    CHECK(run(us + "h_f = c*(t_F - 32)\n").diagnostics.empty());
+    passes_with_one_note(decl, {"h_c = c_w*t_c"}, plumb::rules::trade_constant);
+}

@@ -556,6 +556,12 @@ bool checker::enthalpy_above_ice_point(std::uint32_t reading_node, const typed_t
         !(reading.dim == temperature_dimension()) ||
         std::abs(reading.offset->offset - 273.15) > 1e-9 || !(by.dim == specific_heat_dim))
         return false;
+    // "c*(t_F - 32)": the rise above the ice point written out (a reading less any other
+    // number is a difference already, and comes nowhere near here) needs no note.
+    const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, reading_node)];
+    if (n.kind == expr_kind::subtract &&
+        file_.nodes[syntax::inside_brackets(file_, n.rhs)].kind == expr_kind::number)
+        return true;
     diagnostic& d = report(rules::trade_constant,
                            fmt::format("{} is read as the rise above 0 \u00B0C, the datum of "
                                        "the steam and psychrometric tables, as the enthalpy "
