@@ -334,6 +334,11 @@ TEST_CASE("a ratio of two whole numbers typed one over the other is a coefficien
     // (1 bar·m³/min = 1.667 kW), 9/5 for the Fahrenheit degree (NIST SP 811 (2008), B.8).
     passes(decl, {"P_kW = 100*p_bar*Q_m/60", "ΔT_F = ΔT_K*9/5"});
     fails_with(decl, {"P_kW = p_bar*Q_m/60", "ΔT_F = ΔT_K*5/9"}, plumb::rules::unit_scale);
+    // So are the foot's and the yard's counts: 1 yd²·in is 9 ft² × 1/12 ft = 0.75 ft³ (NIST
+    // SP 811 (2008), B.8), an asphalt mat's spread rate in lb/(yd²·in) from lb/ft³.
+    const std::string mat = "ρ_b : lb/ft^3\nw_s : lb/(yd^2*in)\n";
+    passes(mat, {"w_s = ρ_b*9/12", "w_s = ρ_b*0.75"});
+    fails_with(mat, {"w_s = ρ_b*12/9", "w_s = ρ_b"}, plumb::rules::unit_scale);
 }
 
 TEST_CASE("water's latent heat written as a number") {

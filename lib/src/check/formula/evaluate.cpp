@@ -1190,6 +1190,13 @@ void checker::read_ratio_of_whole_numbers(std::uint32_t literals_begin) {
     const auto whole_as_written = [&](const scale_literal& l) {
         return written_whole(text(file_.nodes[l.node].range));
     };
+    // The yard's and the foot's counts (3 ft, 12 in and 36 in a yard, 9 and 144 square, 27
+    // and 1728 cubic; NIST SP 811 (2008), B.8): "*9/12" turns lb/ft³ into lb/(yd²·in), two
+    // conversions, not a ratio of speeds.
+    const auto customary_count = [](double v) {
+        return v == 3.0 || v == 9.0 || v == 12.0 || v == 27.0 || v == 36.0 || v == 144.0 ||
+               v == 1728.0;
+    };
     for (std::size_t i = literals_begin; i < literals_.size(); ++i) {
         scale_literal& over = literals_[i];
         if (over.exponent != 1.0 || !small_whole(over))
@@ -1199,6 +1206,7 @@ void checker::read_ratio_of_whole_numbers(std::uint32_t literals_begin) {
             const double ratio = over.value / under.value;
             if (under.exponent != -1.0 || !small_whole(under) || !(ratio > 0.5 && ratio < 2.0) ||
                 ratio == 1.0 || std::abs(ratio - 1.8) < 1e-12 ||
+                (customary_count(over.value) && customary_count(under.value)) ||
                 std::abs(ratio * 1.8 - 1.0) < 1e-12 || !whole_as_written(over) ||
                 !whole_as_written(under))
                 continue;
