@@ -1171,3 +1171,29 @@ TEST_CASE("an enthalpy from a reading less its ice point written out passes with
     CHECK(run(us + "h_f = c*(t_F - 32)\n").diagnostics.empty());
     passes_with_one_note(decl, {"h_c = c_w*t_c"}, plumb::rules::trade_constant);
 }
+
+// ρ = p·M/(Z·R·T) with R = 8314.46 J/(kmol·K) (CODATA 2018's 8.314462618 J/(mol·K) × 1000),
+// p in psia turned to Pa by the rounded 6895 (6894.757 Pa per psi, NIST SP 811 (2008), B.8):
+// the conversion's own rounding moves R in the units around it by 3.5e-5, and 8314 is read as
+// R all the same. The 8314 left out, or 6895 the wrong way round, stay findings.
+TEST_CASE("the molar gas constant per kmol beside a rounded conversion") {
+    CHECK(6895.0 / 6894.757293168 - 1.0 == doctest::Approx(3.52e-5).epsilon(1e-2));
+    const std::string decl = "p : psia\nM : kg/kmol\nZ : [1]\nT : K\nρ : kg/m^3\n";
+    passes_with_one_note(decl, {"ρ = p*6895*M/(Z*8314*T)", "ρ = p*6894.76*M/(Z*8314.46*T)"},
+                         plumb::rules::trade_constant);
+    for (const char* formula : {"ρ = p*6895*M/(Z*T)", "ρ = p/6895*M/(Z*8314*T)"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) >= 1);
+    }
+}
+
+// An inch of water at 60 °F is 248.84 Pa (NIST SP 811 (2008), B.8), the gas-measurement
+// standards' inch, against the conventional 249.089: 27.707 inches per psi. Read as the inch
+// at the water's temperature, with a note; 248.84 the wrong way round stays a finding.
+TEST_CASE("the inch of water at 60 °F in a meter's differential") {
+    CHECK(6894.757293168 / 248.84 == doctest::Approx(27.707).epsilon(1e-4));
+    const std::string decl = "h_w : inH2O\nΔp_Pa : Pa\nΔp_psi : psi\n";
+    passes_with_one_note(decl, {"Δp_Pa = 248.84*h_w", "Δp_psi = h_w/27.707"},
+                         plumb::rules::trade_constant);
+    CHECK(problems_in(run(decl + "Δp_Pa = h_w/248.84\n")) >= 1);
+}

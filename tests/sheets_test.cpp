@@ -687,3 +687,15 @@ TEST_CASE("sheets: a column's pressure typed with its number, plus the atmospher
               return f.rfind("Tank!B5 ", 0) == 0 && f != "Tank!B5 gravity-number";
           }) == 0);
 }
+
+// The inch of water as gas meter sheets type it beside a differential (common practice):
+// each reads as the conventional inch, 249.08891 Pa (NIST SP 811 (2008), B.8).
+TEST_CASE("sheets: inches of water spelled the meter trade's ways read as inH2O") {
+    for (const char* text : {"in H2O", "in. H2O", "in.H2O", "in H\u2082O", "inches H2O", "in WC",
+                             "in. WC", "\" H2O", "\" w.c."}) {
+        CAPTURE(text);
+        const auto unit = read_unit_text(text);
+        REQUIRE(unit.has_value());
+        CHECK(unit->scale == doctest::Approx(249.08891).epsilon(1e-9));
+    }
+}

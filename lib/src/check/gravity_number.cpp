@@ -554,12 +554,19 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // written_E·s_E·(Q/ℓ)^x/C gives ℓ = Q·(s_E / (s_R·C))^(1/x).
                     double conversions = 1.0;
                     bool powers_of_ten_only = true;
+                    // The conversions' own rounding (6895 for 6894.757 Pa per psi) moves the
+                    // quantity in the units around it by as much, relatively.
+                    double conversions_rounding = 0.0;
                     for (std::size_t j = 0, bit = 0; j < literals.size(); ++j) {
                         if (j == at)
                             continue;
                         if ((mask >> bit++) & 1U) {
                             conversions *= std::pow(literals[j].value, literals[j].exponent);
                             powers_of_ten_only = powers_of_ten_only && literals[j].power_of_ten;
+                            if (!literals[j].power_of_ten && literals[j].value > 0)
+                                conversions_rounding += std::abs(literals[j].exponent) *
+                                                        half_unit_in_last_digit(texts[j]) /
+                                                        literals[j].value;
                         }
                     }
                     const double in_units =
@@ -611,7 +618,8 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                         &q == &quantities()[twice_gravity_row] && even_last_digit(texts[at])
                             ? 2.0 * half_unit
                             : half_unit;
-                    if (distance > rounding * (1.0 + 1e-9) ||
+                    if (distance > (rounding + nearest * conversions_rounding / std::abs(x)) *
+                                       (1.0 + 1e-9) ||
                         std::abs(number.value / nearest - 1.0) > closest_reading)
                         continue;
                     // An unshifted reading first, then one that needs no other number taken as

@@ -24,7 +24,7 @@ rational water_density_greatest() {
 std::span<const trade_constant> trade_constants() {
     // US gallon 3.785411784 L, pound 0.45359237 kg, cubic foot 0.028316846592 m³ (NIST SP 811
     // (2008), Appendix B.8).
-    static const std::array<trade_constant, 4> table = [] {
+    static const std::array<trade_constant, 7> table = [] {
         const rational pound = parsed("0.45359237");
         const rational gallon_of_one_kg_per_litre = parsed("3.785411784") / pound;
         const rational cubic_foot_of_one_kg_per_litre = parsed("28.316846592") / pound;
@@ -38,7 +38,26 @@ std::span<const trade_constant> trade_constants() {
         const rational fan_power_high = parsed("6343.3114962");
         constexpr std::string_view for_water =
             "the result holds for water; for another liquid write its own density";
-        return std::array<trade_constant, 4>{{
+        // A real inch of water at t °C is the conventional one (249.08891 Pa, NIST SP 811
+        // (2008), B.8) times ρ_w(t)/(1000 kg/m³): 248.84 Pa at 60 °F, as NIST prints it and
+        // the gas-measurement standards take it (AGA Report No. 3, from memory), with 27.707
+        // inches per psi (1 psi = 6894.757 Pa) and 0.03609 psi per inch.
+        const rational inch_of_water = parsed("249.08891");
+        // psi / inch and its inverse, 27.67990471020167 and 0.03612729200008558, bracketed as
+        // the fan constant is: the double path reconciles against the bracket.
+        const rational inches_per_psi_low = parsed("27.679904710");
+        const rational inches_per_psi_high = parsed("27.679904711");
+        const rational psi_per_inch_low = parsed("0.036127292000");
+        const rational psi_per_inch_high = parsed("0.036127292001");
+        constexpr std::string_view inch_range =
+            "an inch of water between 0 and 30 \u00B0C is 248.0 to 249.08 Pa; at 60 \u00B0F, the "
+            "gas-measurement standards' inch, 248.84 Pa";
+        constexpr std::string_view inch_source =
+            "NIST SP 811 (2008), B.8 (inch of water, 60 \u00B0F); water's density from the CRC "
+            "Handbook of Chemistry and Physics (from memory)";
+        constexpr std::string_view other_liquid =
+            "a gauge that reads inches of another liquid needs that liquid's density";
+        return std::array<trade_constant, 7>{{
             {"the weight of a US gallon of water (lb/gal)",
              "a gallon at exactly 1 kg/L, which also turns mgd × mg/L into lb/d",
              gallon_of_one_kg_per_litre, gallon_of_one_kg_per_litre,
@@ -64,6 +83,18 @@ std::span<const trade_constant> trade_constants() {
              "the trade prints 6356 (common practice); water's density from the CRC Handbook "
              "of Chemistry and Physics (from memory)",
              "a gauge that reads inches of another liquid needs that liquid's density"},
+            {"an inch of water at the water's temperature (Pa per inch)",
+             "the conventional inch of water, 249.089 Pa", inch_of_water, inch_of_water,
+             inch_of_water * water_density_least(), inch_of_water * water_density_greatest(),
+             inch_range, inch_source, other_liquid},
+            {"inches of water at the water's temperature per psi",
+             "the conventional inch of water, 27.680 inches per psi", inches_per_psi_low,
+             inches_per_psi_high, inches_per_psi_low / water_density_greatest(),
+             inches_per_psi_high / water_density_least(), inch_range, inch_source, other_liquid},
+            {"psi per inch of water at the water's temperature",
+             "the conventional inch of water, 0.036127 psi per inch", psi_per_inch_low,
+             psi_per_inch_high, psi_per_inch_low * water_density_least(),
+             psi_per_inch_high * water_density_greatest(), inch_range, inch_source, other_liquid},
             // n = 120·f/p: 60 s/min times the 2 poles of each pair, with p the number of poles
             // (IEC 60034-1 rates machines by poles; the formula is common practice).
             {"the synchronous speed's 120 in n = 120*f/p (60 s/min times 2 poles a pair)",

@@ -186,7 +186,7 @@ std::string as_declaration(std::string_view notation, std::string_view measures)
 // "in. w.g." for inches of water, "hr" for the hour, "CFM" in capitals, "kNm" for kN·m,
 // "sq ft", "bhp" (brake horsepower, a horsepower), "bara" (bar absolute).
 std::string trade_spelling(std::string t) {
-    static constexpr std::array<std::pair<std::string_view, std::string_view>, 70> whole{{
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 83> whole{{
         {"in. w.g.", "inH2O"},
         {"in.w.g.", "inH2O"},
         {"in w.g.", "inH2O"},
@@ -200,6 +200,19 @@ std::string trade_spelling(std::string t) {
         {"in wc", "inH2O"},
         {"iwg", "inH2O"},
         {"IWG", "inH2O"},
+        {"in WC", "inH2O"},
+        {"in. WC", "inH2O"},
+        {"in H2O", "inH2O"},
+        {"in. H2O", "inH2O"},
+        {"in.H2O", "inH2O"},
+        {"in H\u2082O", "inH2O"},
+        {"in. H\u2082O", "inH2O"},
+        {"inches H2O", "inH2O"},
+        {"inches of water", "inH2O"},
+        {"\"H2O", "inH2O"},
+        {"\" H2O", "inH2O"},
+        {"\" w.c.", "inH2O"},
+        {"\" w.g.", "inH2O"},
         {"bara", "bar"},
         {"BPD", "bbl/d"},
         {"bpd", "bbl/d"},

@@ -312,7 +312,13 @@ bool checker::read_gravity_numbers(std::size_t base, const agreement& a, std::ui
         const carried_quantity& q = *reading.quantity;
         if (!reading.reciprocal && !q.named.empty() && q.least > 0 &&
             std::abs(reading.stands_for / q.least - 1.0) > 1e-3) [[unlikely]] {
-            const std::string conversion = format_factor(reading.stands_for / q.least);
+            // A power of ten that the rounding of the numbers around it (6895 Pa per psi)
+            // moved off its digits is said as the power of ten.
+            double ratio = reading.stands_for / q.least;
+            if (const double decade = std::pow(10.0, std::round(std::log10(ratio)));
+                std::abs(ratio / decade - 1.0) < 1e-3)
+                ratio = decade;
+            const std::string conversion = format_factor(ratio);
             d.notes.push_back(
                 {fmt::format("{} holds a conversion between the units around it as well "
                              "({} times {}): write {}*{} instead to say so, or declare the "
