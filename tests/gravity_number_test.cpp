@@ -1197,3 +1197,27 @@ TEST_CASE("the inch of water at 60 °F in a meter's differential") {
                          plumb::rules::trade_constant);
     CHECK(problems_in(run(decl + "Δp_Pa = h_w/248.84\n")) >= 1);
 }
+
+// P = ρ·g·Q·H (any hydraulics text): in W with every input in SI, a /10^6 is not needed, and
+// the finding names the power 10^6 rather than its base 10.
+TEST_CASE("a power of ten not needed is named as the power written") {
+    const auto r = run("P : W\nm : kg/s\nh : m\nP = m*9.81*h/10^6\n");
+    CHECK(message_of(r, plumb::rules::unit_scale).find("the factor 10^6 is not needed") !=
+          std::string::npos);
+}
+
+// A pump's hydraulic power is the pressure it adds times the flow (common practice): a
+// discharge gauge reading stands for it only from a vented tank, and the finding on ṁ/ρ times
+// a gauge reading says to take the rise, not to add the atmosphere.
+TEST_CASE("a gauge reading in a pump's power is told to take the rise") {
+    const auto r = run("m : kg/h\nρ : kg/m^3\np_d, p_s : barg\nP : kW\n"
+                       "P = m/(3600*ρ)*p_d*100\n");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    bool told = false;
+    for (const auto& d : r.diagnostics)
+        for (const auto& n : d.notes)
+            told = told || n.message.find("the discharge less the suction") != std::string::npos;
+    CHECK(told);
+    CHECK(problems_in(run("m : kg/h\nρ : kg/m^3\np_d, p_s : barg\nP : kW\n"
+                          "P = m/(3600*ρ)*(p_d - p_s)*100\n")) == 0);
+}

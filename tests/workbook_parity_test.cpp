@@ -1087,3 +1087,20 @@ TEST_CASE("workbook parity: a moist-air enthalpy cell counts its °C reading fro
     const check_report unnamed = check_one_sheet("AHU", sheet("Outdoor air heat"));
     CHECK(count_of(unnamed, rules::offset_scale) >= 1);
 }
+
+TEST_CASE("workbook parity: a conversion factor turned over is named, whatever scales beside it") {
+    // 1 MWh = 3.6 GJ (SI Brochure 9th ed., Table 8): =B2/(B3/100)/3.6 divides by the factor
+    // it must multiply by, and the value shown is 3.6² = 12.96 times too small; the % over
+    // 100 beside it is no part of the factor named.
+    const check_report r = check_one_sheet("Fuel", sheet_of({
+                                                       {"120", "MWh"},             // B2
+                                                       {"85", "%"},                // B3
+                                                       {"=B2/(B3/100)/3.6", "GJ"}, // B4
+                                                       {"=B2/(B3/100)*3.6", "GJ"}, // B5: right
+                                                   }));
+    CHECK(cell_findings(r) == std::vector<std::string>{"Fuel!B4 unit-scale"});
+    REQUIRE(!r.diagnostics.empty());
+    CHECK(says(r.diagnostics.front(), "the conversion factor 3.6 in this formula is the wrong way "
+                                      "round: to give GJ it must multiply by it"));
+    CHECK(says(r.diagnostics.front(), "12.96 times too small"));
+}

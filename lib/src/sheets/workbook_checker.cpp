@@ -1158,8 +1158,12 @@ class workbook_checker {
         if (reconcile(parts).agree)
             return;
         bool reversed = false;
+        std::size_t reversed_at = 0;
         for (std::size_t k = 0; k < factors.size() && k < 10 && !reversed; ++k)
-            reversed = reconcile(parts, {0, k}).agree;
+            if (reconcile(parts, {0, k}).agree) {
+                reversed = true;
+                reversed_at = k;
+            }
         if (!reversed && report_near_factor(f, factors, computed, written, needed))
             return;
         // How far off the value shown is: after the numbers already written, when what is
@@ -1225,6 +1229,22 @@ class workbook_checker {
                                     "way for {}",
                                     written.unit.text);
             d.notes.push_back({std::move(*backwards), {}});
+        } else if (reversed && std::abs(factors[reversed_at].exponent) == 1.0 &&
+                   factors[reversed_at].value > 0) {
+            // "=C67/(C68/100)/3.6" into GJ from MWh: the factor turned is the 3.6, whatever
+            // else the formula scales by (a % over 100 beside it), and the message names it.
+            const scale_literal& x = factors[reversed_at];
+            const bool divides = x.exponent < 0;
+            const double apart = x.value * x.value;
+            d.message = fmt::format("the conversion factor {} in this formula is the wrong way "
+                                    "round: to give {} it must {} it, not {} it",
+                                    listing_->text(lowered_.tree.nodes[x.node].range),
+                                    written.unit.text, divides ? "multiply by" : "divide by",
+                                    divides ? "divide by" : "multiply by");
+            d.notes.push_back({fmt::format("as written the value shown is {} times too {}",
+                                           format_factor(apart >= 1 ? apart : 1.0 / apart),
+                                           (apart >= 1) == divides ? "small" : "large"),
+                               {}});
         }
         if (!reversed) {
             d.notes.push_back({fmt::format("its inputs give numbers in units of {} {}; "

@@ -1163,6 +1163,7 @@ class checker {
     double counted_multiple(std::uint32_t k) const;
     bool percentage_written_out(const scale_literal& l) const;
     bool hundred_over_percent_sum(std::uint32_t term, const scale_literal& l) const;
+    std::uint32_t raised_number(std::uint32_t root, std::uint32_t number) const;
     bool report_unneeded(const operand& op, const scale_literal& l);
     void report_inverted_factor(const operand& op, const scale_literal& l);
     [[gnu::always_inline]] void check_origins(std::span<const operand> sides,

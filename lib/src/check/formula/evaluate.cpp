@@ -1095,6 +1095,14 @@ typed_term checker::eval_factors(std::uint32_t index) {
                     {"if a head was meant, g is missing: p/(\u03C1*g) is a head, which a "
                      "gauge reading may give as it is",
                      {}});
+            // ṁ/ρ*p_g into a power: a pump's power takes the pressure it adds, which a gauge
+            // gives alone only where the suction is open to the atmosphere.
+            else if (result.known && result.dim == power_dim)
+                out_.back().notes.insert(
+                    out_.back().notes.begin(),
+                    {"if a pump's or a fan's power was meant, it takes the pressure it adds, "
+                     "the discharge less the suction (p_d - p_s), not the atmosphere added",
+                     {}});
             result = unknown_type();
             return result; // as above
         }

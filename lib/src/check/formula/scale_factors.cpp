@@ -586,17 +586,33 @@ bool checker::hundred_over_percent_sum(std::uint32_t term, const scale_literal& 
     });
 }
 
+// The node a number stands for as a factor: "10^6" where it is raised, else the number.
+std::uint32_t checker::raised_number(std::uint32_t root, std::uint32_t number) const {
+    std::uint32_t found = number;
+    syntax::search_subtree(file_, root, [&](std::uint32_t at, const syntax::expr_node& n) {
+        if (n.kind == expr_kind::power && syntax::inside_brackets(file_, n.lhs) == number) {
+            found = at;
+            return search_step::found;
+        }
+        return search_step::descend;
+    });
+    return found;
+}
+
 bool checker::report_unneeded(const operand& op, const scale_literal& l) {
     if (percentage_written_out(l) || hundred_over_percent_sum(op.node, l))
         return false;
     const double factor = std::pow(l.value, l.exponent);
+    // "/10^6": the factor is the power, not its base.
+    const std::uint32_t shown =
+        std::abs(l.exponent) != 1.0 ? raised_number(op.node, l.node) : l.node;
     diagnostic& d =
         report(rules::unit_scale,
                fmt::format("the factor {} is not needed: the units of {} already agree, so "
                            "as written it is {} times its true value",
-                           text(file_.nodes[l.node].range), quote(op.node),
+                           text(file_.nodes[shown].range), quote(op.node),
                            format_factor(printed_power(l, l.exponent), factor)),
-               file_.nodes[l.node].range);
+               file_.nodes[shown].range);
     add_term_and_units(d, op);
     // 8.34 pasted from a US sheet into an SI one: say what the number is.
     if (const std::optional<rational> printed = printed_power(l, 1.0);
