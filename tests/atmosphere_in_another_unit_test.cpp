@@ -216,3 +216,13 @@ TEST_CASE("32 taken after the division by 1.8 is said with the error it makes") 
     CHECK(32.0 - 32.0 / 1.8 == doctest::Approx(14.2222).epsilon(1e-5));
     passes(d, {"t_C = (t_F - 32)/1.8"});
 }
+
+// A kill sheet's final circulating pressure, FCP = p_scr·MW_kill/MW_orig (API RP 59, from
+// memory): a slow-rate pressure declared a friction loss, times a ratio of mud weights, is a
+// difference still, which the drill pipe gauge reads; an absolute pressure there is not.
+TEST_CASE("a declared pressure difference times a ratio of symbols is a gauge reading") {
+    const std::string d = "p_scr : psi \"slow-rate circulating pressure, the friction loss\"\n"
+                          "FCP : psig\nMW_k, MW_o : lb/gal\np_a : psia \"absolute pressure\"\n";
+    passes(d, {"FCP = p_scr*MW_k/MW_o"});
+    fails_with(d, {"FCP = p_a*MW_k/MW_o"}, plumb::rules::offset_scale);
+}

@@ -1221,3 +1221,32 @@ TEST_CASE("a gauge reading in a pump's power is told to take the rise") {
     CHECK(problems_in(run("m : kg/h\nρ : kg/m^3\np_d, p_s : barg\nP : kW\n"
                           "P = m/(3600*ρ)*(p_d - p_s)*100\n")) == 0);
 }
+
+// API 650's one-foot method, t = 4.9·D·(H - 0.3)·G/S in mm from m and MPa, and its US form
+// 2.6·D·(H - 1)·G/S in inches from ft and psi (API 650, 5.6.3.2, from memory): 4.9 and 2.6 are
+// half water's specific weight in the units around them (9.80665 kN/m³ / 2 = 4.903e-3 MPa/m,
+// times 1000 mm/m; 62.4 lb/ft³ / 2 / 144 × 12 = 2.6).
+TEST_CASE("half the specific weight of water in a tank shell's one-foot method") {
+    CHECK(62.4 / 2.0 / 144.0 * 12.0 == doctest::Approx(2.6));
+    const std::string decl = "t_mm : mm\nD : m\nH : m\nG : [1]\nS : MPa\n"
+                             "t_in : in\nD_ft, H_ft : ft\nS_psi : psi\n";
+    passes_with_one_note(
+        decl, {"t_mm = 4.9*D*(H - 0.3 {m})*G/S", "t_in = 2.6*D_ft*(H_ft - 1 {ft})*G/S_psi"},
+        plumb::rules::gravity_number);
+    // The number left out, or a mm result from the US form, stay findings.
+    for (const char* formula :
+         {"t_mm = D*(H - 0.3 {m})*G/S", "t_mm = 2.6*D_ft*(H_ft - 1 {ft})*G/S_psi"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) >= 1);
+    }
+}
+
+// A total per year from a rate per hour and a count per year lacks the hours of each count,
+// not a count of years: the per-period note is kept for a side that is no rate itself.
+TEST_CASE("the count of periods is not named where the other side is counted per period too") {
+    const auto r = run("F_yr : L/yr\nFC : L/h\nn_sh : 1/yr\nF_yr = FC*n_sh/1000\n");
+    REQUIRE(count_of(r, plumb::rules::side_mismatch) == 1);
+    for (const auto& d : r.diagnostics)
+        for (const auto& n : d.notes)
+            CHECK(n.message.find("is counted per") == std::string::npos);
+}

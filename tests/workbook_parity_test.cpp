@@ -1104,3 +1104,22 @@ TEST_CASE("workbook parity: a conversion factor turned over is named, whatever s
                                       "round: to give GJ it must multiply by it"));
     CHECK(says(r.diagnostics.front(), "12.96 times too small"));
 }
+
+TEST_CASE("workbook parity: a row that types the site's barometer is the declared barometer") {
+    // 1 atm = 14.696 psi (NIST SP 811 (2008), B.8); a site at about 730 m reads some 13.46 psia
+    // (the standard atmosphere, from memory). psig + 14.7 there is 1.24 psi high, as a .plumb
+    // file with the barometer declared is told; + the barometer's cell passes.
+    const auto sheet = [](const std::string& label) {
+        return "<worksheet><sheetData>" + labelled_row(2, "Pump discharge", "38", "psig") +
+               labelled_row(3, label, "13.46", "psia") +
+               labelled_row(4, "Discharge, absolute", "=B2+14.7", "psia") +
+               labelled_row(5, "Discharge, absolute (site)", "=B2+B3", "psia") +
+               "</sheetData></worksheet>";
+    };
+    const check_report site = check_one_sheet("Plant", sheet("Site barometric pressure"));
+    CHECK(cell_findings(site) == std::vector<std::string>{"Plant!B4 offset-scale"});
+    REQUIRE(!site.diagnostics.empty());
+    CHECK(says(site.diagnostics.front(), "declares the site's barometer 'B3'"));
+    // A row that is no barometer (a vessel's pressure) declares none.
+    CHECK(cell_findings(check_one_sheet("Plant", sheet("Vessel pressure"))).empty());
+}

@@ -46,8 +46,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 29>& quantities() {
-    static const std::array<carried_quantity, 29> table = [] {
+const std::array<carried_quantity, 30>& quantities() {
+    static const std::array<carried_quantity, 30> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -99,7 +99,7 @@ const std::array<carried_quantity, 29>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 29>{{
+        return std::array<carried_quantity, 30>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -331,6 +331,17 @@ const std::array<carried_quantity, 29>& quantities() {
                          "declare the gas constant with its unit (R_H2 : J/(kg*K) = 4124) to "
                          "say so",
                          4124.0, 4125.0),
+            // A tank shell's hoop tension per unit height over a wall of two faces: API 650's
+            // one-foot method, t = 4.9*D*(H - 0.3)*G/S in mm from m and MPa, and its US
+            // 2.6*D*(H - 1)*G/S in inches from ft and psi (API 650, 5.6.3.2, from memory):
+            // half water's specific weight in the units around it.
+            {rules::gravity_number, "half the specific weight of water", "\u03B3_w/2", "2/\u03B3_w",
+             " (water between 0 and 30 \u00B0C; the 4.9 and 2.6 of a tank shell's one-foot "
+             "method)",
+             "write \u03C1_w*{g_n}/2, with \u03C1_w declared, to say so",
+             "write the density and g in cells that hold their units to say so",
+             density * acceleration, water_least * standard_gravity / 2.0,
+             water_greatest * standard_gravity / 2.0},
         }};
     }();
     return table;

@@ -229,6 +229,14 @@ struct parsed_file {
     bool has_syntax_error = false;
     std::vector<reference_value> references; // spreadsheet front ends only
     function_names functions = function_names::notation;
+    // A workbook's site barometer: a number cell whose row label names the atmosphere
+    // ("Site barometric pressure | 13.46 | psia"), as a declaration's description does.
+    struct sheet_barometer {
+        std::string cell; // "C47", or "Inputs!C47" on another sheet
+        double pascals = 0.0;
+        double unit = 1.0; // SI value of its unit
+    };
+    std::optional<sheet_barometer> barometer; // spreadsheet front ends only
 };
 
 } // namespace plumb::syntax

@@ -85,6 +85,7 @@ class workbook_checker {
         collect_formulas();
         build_listing();
         lower_all();
+        find_site_barometer();
         equation_.make_room();
         order_and_check();
         const std::size_t first_finding = report_.diagnostics.size();
@@ -629,6 +630,39 @@ class workbook_checker {
             return r;
         const row_label heading = heading_of(s, a);
         return names_a_diameter_or_radius(heading.name, heading.description);
+    }
+
+    // "Site barometric pressure | 13.46 | psia": the first number cell of an absolute
+    // pressure whose row label names the atmosphere, and not a standard, a vacuum or a gauge.
+    // The rules that hold a typed atmosphere to the site's read it as a declared barometer.
+    void find_site_barometer() {
+        const dimension pressure = dimension::base(base_dimension::mass) /
+                                   dimension::base(base_dimension::length) /
+                                   dimension::base(base_dimension::time).pow(rational(2));
+        for (std::size_t s = 0; s < book_.sheets.size(); ++s)
+            for (const auto& c : book_.sheets[s].cells) {
+                if (c.kind != cell_kind::number)
+                    continue;
+                const cell_unit* u = unit_of(s, c.at);
+                if (u == nullptr || u->unit.offset != nullptr || !(u->unit.dim == pressure))
+                    continue;
+                const row_label label = label_of(s, c.at);
+                const std::string& words = label.description;
+                const auto says = [&](std::string_view w) {
+                    return words.find(w) != std::string::npos;
+                };
+                if (words.empty() || !names_the_atmosphere(label.name, words) || says("tandard") ||
+                    says("acuum") || says("below") || says("gauge"))
+                    continue;
+                const double value = std::strtod(c.text.c_str(), nullptr);
+                if (!(value > 0) || !std::isfinite(value))
+                    continue;
+                lowered_.tree.barometer = syntax::parsed_file::sheet_barometer{
+                    book_.sheets.size() == 1 ? a1_name(c.at)
+                                             : book_.sheets[s].name + "!" + a1_name(c.at),
+                    value * u->unit.scale, u->unit.scale};
+                return;
+            }
     }
 
     // ---- Checking one formula cell --------------------------------------------------------

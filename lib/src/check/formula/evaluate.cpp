@@ -96,22 +96,30 @@ bool checker::declared_pressure_difference(const operand& o) const {
     if (!o.type.known || o.type.point || o.type.offset != nullptr ||
         !(o.type.dim == pressure_dimension()))
         return false;
-    // "Δp_i/249.1", "1000*Δp_f": a difference times numbers (conversions, or a factor the
-    // wrong way round, which the scale rule then names) is a difference still.
-    std::uint32_t symbol = syntax::no_index;
+    // "Δp_i/249.1", "1000*Δp_f", "p_scr*MW_k/MW_o" (a kill sheet's final circulating
+    // pressure): a declared difference times numbers and ratios (conversions, or a factor the
+    // wrong way round, which the scale rule then names) is a difference still. The side is a
+    // pressure, so the other factors of a declared pressure multiply to a pure number.
+    std::uint32_t difference = syntax::no_index;
     const bool other = for_each_factor(o.node, [&](std::uint32_t at, int sign) {
-        const expr_kind kind = file_.nodes[at].kind;
-        if (kind == expr_kind::symbol && sign > 0 && symbol == syntax::no_index) {
-            symbol = at;
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::number)
+            return false;
+        if (n.kind != expr_kind::symbol)
+            return true;
+        const std::string_view name = text(n.range);
+        const symbol_entry* e = symbols_.find(name);
+        if (e == nullptr || e->offset_unit != nullptr || e->reading != 0)
+            return true;
+        if (sign > 0 && difference == syntax::no_index && e->compact_dim &&
+            *e->compact_dim == pressure_dimension() && !names_a_stress(name, e->description)) {
+            difference = at;
             return false;
         }
-        return kind != expr_kind::number;
+        // Beside the difference, only what its ratio can be made of: no second pressure.
+        return e->compact_dim && *e->compact_dim == pressure_dimension();
     });
-    if (other || symbol == syntax::no_index)
-        return false;
-    const std::string_view name = text(file_.nodes[symbol].range);
-    const symbol_entry* e = symbols_.find(name);
-    return e != nullptr && e->reading == 0 && !names_a_stress(name, e->description);
+    return !other && difference != syntax::no_index;
 }
 
 // Whether a product has a symbol or a cell of the given dimension standing with `sign`

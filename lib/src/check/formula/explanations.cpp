@@ -72,6 +72,28 @@ void checker::note_count_of_periods_left_out(diagnostic& d, std::span<const oper
     const std::optional<compact_dimension> apart = odd_one_apart(ops, a);
     if (!apart || !(*apart == time_dimension()))
         return;
+    // "F_yr = FC*n_sh/1000" in L/yr with n_sh in shifts/yr: where the side set against it is
+    // counted per period too, no count of periods is missing (here the hours of a shift are).
+    const auto per_period = [&](std::string_view unit) {
+        for (const std::string_view suffix :
+             {"/d", "/day", "/wk", "/week", "/yr", "/a", "/y", "/year", "/month", "/mo"})
+            if (unit.size() > suffix.size() && unit.ends_with(suffix))
+                return true;
+        return false;
+    };
+    for (std::size_t i = 0; i < ops.size(); ++i) {
+        if (std::find(a.odd.begin(), a.odd.end(), i) != a.odd.end())
+            continue;
+        bool counted = false;
+        for_each_factor(ops[i].node, [&](std::uint32_t at, int) {
+            if (file_.nodes[at].kind == expr_kind::symbol)
+                if (const symbol_entry* e = symbols_.find(text(file_.nodes[at].range)))
+                    counted = counted || per_period(e->unit_text);
+            return counted;
+        });
+        if (counted)
+            return;
+    }
     static constexpr std::array<std::pair<std::string_view, std::string_view>, 8> periods{{
         {"/d", "day"},
         {"/day", "day"},

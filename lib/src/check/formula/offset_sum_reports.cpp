@@ -11,6 +11,14 @@ const checker::site_barometer* checker::declared_site_barometer() {
     if (site_barometer_searched_)
         return site_barometer_.name.empty() ? nullptr : &site_barometer_;
     site_barometer_searched_ = true;
+    if (file_.barometer) {
+        const double pascals = file_.barometer->pascals;
+        if (!(pascals >= highest_site_atmosphere * standard_atmosphere &&
+              pascals <= (1.0 - site_barometer_slack_in_difference) * standard_atmosphere))
+            return nullptr;
+        site_barometer_ = {file_.barometer->cell, pascals, file_.barometer->unit};
+        return &site_barometer_;
+    }
     for (const syntax::declaration& decl : file_.declarations) {
         if (!decl.kind.dim || decl.name_count == 0 ||
             (decl.kind.single_unit != nullptr && decl.kind.single_unit->offset != 0.0))
