@@ -157,6 +157,12 @@ std::string build_type() {
 #else
     type += ", not optimised";
 #endif
+#if defined(PLUMB_PROFILE_STAGE)
+    if (const std::string_view stage = PLUMB_PROFILE_STAGE; stage == "use")
+        type += ", profile-guided";
+    else if (stage == "generate")
+        type += ", instrumented for a profile (not for timing)";
+#endif
 #if defined(NDEBUG)
     type += ", NDEBUG";
 #else
