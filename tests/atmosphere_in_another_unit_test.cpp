@@ -226,3 +226,18 @@ TEST_CASE("a declared pressure difference times a ratio of symbols is a gauge re
     passes(d, {"FCP = p_scr*MW_k/MW_o"});
     fails_with(d, {"FCP = p_a*MW_k/MW_o"}, plumb::rules::offset_scale);
 }
+
+// A sealed piezometer reads absolute; less the site's barometer it is the pore pressure above
+// the atmosphere (common practice in geotechnical instrumentation). A description that says
+// "above atmospheric" declares that difference, and the sea-level 101.325 taken instead of a
+// declared 94.2 kPa barometer leaves it 7.1 kPa low, as the warning says.
+TEST_CASE("the sea-level atmosphere taken from an absolute reading leaves the rest too low") {
+    const std::string d = "u : kPa \"pore water pressure on the slip surface, above atmospheric\"\n"
+                          "p_pz : kPa \"piezometer reading, absolute\"\n"
+                          "p_bar : kPa \"site barometric pressure, 94.2 kPa\"\n";
+    passes(d, {"u = p_pz - p_bar"});
+    const auto r = run(d, "u = p_pz - 101.325");
+    CHECK(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(r, plumb::rules::offset_scale),
+               "the pressure above the atmosphere comes out 7.1 kPa low"));
+}

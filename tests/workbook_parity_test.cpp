@@ -796,10 +796,10 @@ TEST_CASE("workbook parity: the advice for a reading put on another temperature 
     CHECK(cell_findings(r) == std::vector<std::string>{"T!B3 offset-scale", "T!B4 offset-scale"});
     const diagnostic* f = finding(r, "T!B3", rules::offset_scale);
     REQUIRE(f != nullptr);
-    CHECK(says(*f, "=B4*1.8+32: the 32 and the 1.8 go together"));
+    CHECK(says(*f, "(the reading)*1.8 + 32: the 32 and the 1.8 go together"));
     const diagnostic* k = finding(r, "T!B4", rules::offset_scale);
     REQUIRE(k != nullptr);
-    CHECK(says(*k, "=B4+273.15"));
+    CHECK(says(*k, "(the reading) + 273.15"));
 }
 
 TEST_CASE("workbook parity: empirical fits typed with bare constants, and more unit words") {

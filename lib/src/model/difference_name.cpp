@@ -29,6 +29,11 @@ bool names_a_difference(std::string_view name, std::string_view description) {
     if (description.find("absolute") != std::string_view::npos &&
         description.find("absolute difference") == std::string_view::npos)
         return false;
+    // "pore water pressure, above atmospheric": a pressure counted from the atmosphere is its
+    // difference from it, as a gauge reads.
+    if (description.find("above atmospher") != std::string_view::npos ||
+        description.find("above the atmospher") != std::string_view::npos)
+        return true;
     for (const std::string_view word :
          {"difference", "differential", "rise", "drop", "loss", "change", "increase", "decrease",
           "approach", "range", "gradient", "swing", "hydrostatic", "net", "driving"})

@@ -1562,17 +1562,18 @@ class workbook_checker {
             return fmt::format("a {} reading on the {} scale is {}: the 32 and the 1.8 go "
                                "together, or write the unit the formula gives",
                                computed->symbol, written->symbol,
-                               std::abs(written->factor - 1.0) > 1e-9 ? "=B4*1.8+32"
-                                                                      : "=(B4-32)/1.8");
+                               std::abs(written->factor - 1.0) > 1e-9 ? "(the reading)*1.8 + 32"
+                                                                      : "((the reading) - 32)/1.8");
         const unit_definition* scale = computed != nullptr ? computed : written;
         const double zero = scale->offset / scale->factor;
         const std::string absolute = std::abs(scale->factor - 1.0) < 1e-9 ? "K" : "\u00B0R";
         return computed != nullptr
-                   ? fmt::format("a {} reading is in {} once {:g} is added, as in =B4+{:g}, or "
+                   ? fmt::format("a {} reading is in {} once {:g} is added, as in (the "
+                                 "reading) + {:g}, or "
                                  "write the unit the formula gives",
                                  scale->symbol, absolute, zero, zero)
                    : fmt::format("a reading in {} is on the {} scale once {:g} is subtracted, as "
-                                 "in =B4-{:g}, or write the unit the formula gives",
+                                 "in (the reading) - {:g}, or write the unit the formula gives",
                                  absolute, scale->symbol, zero, zero);
     }
 

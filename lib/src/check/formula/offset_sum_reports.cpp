@@ -123,18 +123,23 @@ void checker::warn_sea_level_atmosphere_at_site(std::span<const operand> terms, 
 // atmosphere added to a gauge reading that is not the site's (see site_barometer_slack).
 void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_view what,
                                              double pascals, const site_barometer& site,
-                                             double unit, bool added_to_gauge) {
+                                             double unit, bool added_to_gauge,
+                                             bool number_subtracted) {
     const double height = 44330.8 * (1.0 - std::pow(site.pascals / standard_atmosphere, 0.190263));
-    const double off = pascals - site.pascals;
+    // "p_pz - 101.325": taken from an absolute reading, too large an atmosphere leaves the
+    // pressure above it too small; added to a gauge reading, the absolute one too large.
+    const double off = (pascals - site.pascals) * (number_subtracted ? -1.0 : 1.0);
     diagnostic& d =
         report(rules::offset_scale,
                fmt::format("{} is {}, but this file declares the site's barometer '{}' ({} kPa, "
-                           "as the standard atmosphere has about {} m up): the absolute pressure "
-                           "comes out {} kPa {}",
+                           "as the standard atmosphere has about {} m up): {} comes out {} kPa {}",
                            display_text(file_.nodes[number].range), what,
                            barometer_in_unit(unit).value_or(site.name),
                            format_factor(site.pascals / 1000.0),
                            static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10),
+                           added_to_gauge      ? "the absolute pressure"
+                           : number_subtracted ? "the pressure above the atmosphere"
+                                               : "the result",
                            format_factor(std::round(std::abs(off) / 100.0) / 10.0),
                            off > 0 ? "high" : "low"),
                file_.nodes[number].range);
@@ -188,7 +193,7 @@ void checker::warn_atmosphere_number_at_site(std::span<const operand> terms, dou
             std::abs(written / site->pascals - 1.0) <= site_barometer_slack_in_difference)
             return;
         report_atmosphere_not_the_site(t.node, "the atmosphere at sea level", written, *site, unit,
-                                       false);
+                                       false, t.subtracted);
         return;
     }
 }
