@@ -6,6 +6,7 @@ The .expect files, once in the corpus, are kept by hand as plumb's findings chan
 limit with its reason), so the writer leaves an existing one alone unless asked to rewrite it:
 `python3 make_books.py --expect`.
 """
+import importlib.util
 import os
 import re
 import sys
@@ -139,3 +140,23 @@ def write_books(here, books, notes):
             write_expect(expect, stem, book, folder, notes)
         correct = [c for c in formulas if c not in book["planted"]]
         print(f"{stem}: {len(book['planted'])} planted, {len(correct)} correct formula cells")
+
+
+NOTE_KEYS = ("EXTRA", "MISSED", "RENAMED", "MESSAGES", "HEADNOTE")
+
+
+def notes_beside(here):
+    """The review_notes.py beside a folder's make_books.py, as write_books takes them; each
+    table empty where the file or the table is absent."""
+    path = os.path.join(here, "review_notes.py")
+    if not os.path.exists(path):
+        return {key: {} for key in NOTE_KEYS}
+    spec = importlib.util.spec_from_file_location("review_notes", path)
+    module = importlib.util.module_from_spec(spec)
+    spec.loader.exec_module(module)
+    return {key: getattr(module, key, {}) for key in NOTE_KEYS}
+
+
+def write_books_with_notes(here, books):
+    """write_books with the folder's own review_notes.py."""
+    write_books(here, books, notes_beside(here))

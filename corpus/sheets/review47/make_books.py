@@ -28,7 +28,7 @@ sys.dont_write_bytecode = True   # write nothing beside the shared modules
 HERE = os.path.dirname(os.path.abspath(__file__))
 sys.path.insert(0, HERE)
 sys.path.insert(0, os.path.dirname(HERE))
-from item_sheet import ItemSheet, write_books  # noqa: E402 (shared, not copied)
+from item_sheet import ItemSheet, write_books_with_notes  # noqa: E402 (shared, not copied)
 
 CAUTION = ("Invented scenario, data for demonstration only. A dimensionally consistent formula can "
            "still be wrong; this check does not replace independent review under local codes and "
@@ -525,20 +525,9 @@ DCB = {
 BOOKS = {"kitchen-gas-ventilation": KITB, "irrigation-pumping-plant": IRRB,
          "tank-hydrotest-settlement": TNKB, "datacentre-ups-battery": DCB}
 
-EXTRA = {}
-MISSED = {}
-RENAMED = {}
-MESSAGES = {}
-HEADNOTE = {}
-try:
-    from review_notes import EXTRA, MISSED, RENAMED, MESSAGES, HEADNOTE  # noqa: F401,F811
-except ImportError:
-    pass
-
 
 def main():
-    write_books(HERE, BOOKS, {"EXTRA": EXTRA, "MISSED": MISSED, "RENAMED": RENAMED,
-                              "MESSAGES": MESSAGES, "HEADNOTE": HEADNOTE})
+    write_books_with_notes(HERE, BOOKS)
 
 
 if __name__ == "__main__":
