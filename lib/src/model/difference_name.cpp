@@ -51,6 +51,16 @@ bool names_a_difference(std::string_view name, std::string_view description) {
     return false;
 }
 
+bool names_a_site_barometer(std::string_view name, std::string_view description) {
+    if (!names_the_atmosphere(name, description))
+        return false;
+    for (const std::string_view word :
+         {"standard", "Standard", "vacuum", "Vacuum", "below", "gauge"})
+        if (description.find(word) != std::string_view::npos)
+            return false;
+    return true;
+}
+
 bool names_a_stress(std::string_view name, std::string_view description) {
     if (name.starts_with("\u03C3") || name.starts_with("\u03C4") || name.starts_with("sigma") ||
         name.starts_with("tau"))

@@ -18,6 +18,11 @@ bool names_a_stress(std::string_view name, std::string_view description);
 // (p_atm, p_baro, "barometric pressure", "ambient"): read so where a sum adds or takes it off.
 bool names_the_atmosphere(std::string_view name, std::string_view description);
 
+// A pressure named or described as the site's barometer: the atmosphere, but not a standard
+// one, a vacuum, a pressure below it or a gauge ("suction vacuum gauge, 62 kPa below
+// atmosphere" names the atmosphere but is none).
+bool names_a_site_barometer(std::string_view name, std::string_view description);
+
 // Whether a pure number's name or description says it is a liquid's specific gravity (SG,
 // SG_m, "specific gravity", "relative density"), which goes wherever water's density goes.
 bool names_specific_gravity(std::string_view name, std::string_view description);

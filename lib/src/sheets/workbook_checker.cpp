@@ -647,12 +647,8 @@ class workbook_checker {
                 if (u == nullptr || u->unit.offset != nullptr || !(u->unit.dim == pressure))
                     continue;
                 const row_label label = label_of(s, c.at);
-                const std::string& words = label.description;
-                const auto says = [&](std::string_view w) {
-                    return words.find(w) != std::string::npos;
-                };
-                if (words.empty() || !names_the_atmosphere(label.name, words) || says("tandard") ||
-                    says("acuum") || says("below") || says("gauge"))
+                if (label.description.empty() ||
+                    !names_a_site_barometer(label.name, label.description))
                     continue;
                 const double value = std::strtod(c.text.c_str(), nullptr);
                 if (!(value > 0) || !std::isfinite(value))

@@ -72,29 +72,7 @@ void checker::note_count_of_periods_left_out(diagnostic& d, std::span<const oper
     const std::optional<compact_dimension> apart = odd_one_apart(ops, a);
     if (!apart || !(*apart == time_dimension()))
         return;
-    // "F_yr = FC*n_sh/1000" in L/yr with n_sh in shifts/yr: where the side set against it is
-    // counted per period too, no count of periods is missing (here the hours of a shift are).
-    const auto per_period = [&](std::string_view unit) {
-        for (const std::string_view suffix :
-             {"/d", "/day", "/wk", "/week", "/yr", "/a", "/y", "/year", "/month", "/mo"})
-            if (unit.size() > suffix.size() && unit.ends_with(suffix))
-                return true;
-        return false;
-    };
-    for (std::size_t i = 0; i < ops.size(); ++i) {
-        if (std::find(a.odd.begin(), a.odd.end(), i) != a.odd.end())
-            continue;
-        bool counted = false;
-        for_each_factor(ops[i].node, [&](std::uint32_t at, int) {
-            if (file_.nodes[at].kind == expr_kind::symbol)
-                if (const symbol_entry* e = symbols_.find(text(file_.nodes[at].range)))
-                    counted = counted || per_period(e->unit_text);
-            return counted;
-        });
-        if (counted)
-            return;
-    }
-    static constexpr std::array<std::pair<std::string_view, std::string_view>, 8> periods{{
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 10> periods{{
         {"/d", "day"},
         {"/day", "day"},
         {"/wk", "week"},
@@ -103,24 +81,44 @@ void checker::note_count_of_periods_left_out(diagnostic& d, std::span<const oper
         {"/a", "year"},
         {"/y", "year"},
         {"/year", "year"},
+        {"/month", "month"},
+        {"/mo", "month"},
     }};
+    // The period a unit is counted per ("h/d": day), empty for none.
+    const auto period_of = [&](std::string_view unit) -> std::string_view {
+        for (const auto& [suffix, period] : periods)
+            if (unit.size() > suffix.size() && unit.ends_with(suffix))
+                return period;
+        return {};
+    };
+    // "F_yr = FC*n_sh/1000" in L/yr with n_sh in shifts/yr: where the side set against it is
+    // counted per period too, no count of periods is missing (here the hours of a shift are).
+    for (std::size_t i = 0; i < ops.size(); ++i) {
+        if (std::find(a.odd.begin(), a.odd.end(), i) != a.odd.end())
+            continue;
+        const bool counted = for_each_factor(ops[i].node, [&](std::uint32_t at, int) {
+            if (file_.nodes[at].kind != expr_kind::symbol)
+                return false;
+            const symbol_entry* e = symbols_.find(text(file_.nodes[at].range));
+            return e != nullptr && !period_of(e->unit_text).empty();
+        });
+        if (counted)
+            return;
+    }
     for_each_factor(ops[a.odd.front()].node, [&](std::uint32_t at, int sign) {
         if (sign < 0 || file_.nodes[at].kind != expr_kind::symbol)
             return false;
         const std::string_view name = text(file_.nodes[at].range);
         const symbol_entry* e = symbols_.find(name);
-        if (e == nullptr)
+        const std::string_view period = e != nullptr ? period_of(e->unit_text) : "";
+        // A month is no count the note names: a month's days vary.
+        if (period.empty() || period == "month")
             return false;
-        for (const auto& [suffix, period] : periods)
-            if (e->unit_text.size() > suffix.size() && e->unit_text.ends_with(suffix)) {
-                d.notes.push_back(
-                    {fmt::format("'{}' is counted per {} ({}): a total over a longer time takes "
-                                 "the number of {}s as a factor too",
-                                 name, period, e->unit_text, period),
-                     {}});
-                return true;
-            }
-        return false;
+        d.notes.push_back({fmt::format("'{}' is counted per {} ({}): a total over a longer time "
+                                       "takes the number of {}s as a factor too",
+                                       name, period, e->unit_text, period),
+                           {}});
+        return true;
     });
 }
 

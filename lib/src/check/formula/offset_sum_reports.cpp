@@ -26,15 +26,10 @@ const checker::site_barometer* checker::declared_site_barometer() {
         const std::optional<compact_dimension> dim = compact_dimension::fitted(*decl.kind.dim);
         if (!dim || !(*dim == pressure_dimension()))
             continue;
-        const std::string_view name = text(file_.names[decl.first_name].name);
-        const std::string_view description = text(decl.description);
-        const auto says = [&](std::string_view word) {
-            return description.find(word) != std::string_view::npos;
-        };
-        // "suction vacuum gauge, 62 kPa below atmosphere" names the atmosphere but is none.
-        if (!names_the_atmosphere(name, description) || says("standard") || says("vacuum") ||
-            says("below") || says("gauge"))
+        if (!names_a_site_barometer(text(file_.names[decl.first_name].name),
+                                    text(decl.description)))
             continue;
+        const std::string_view name = text(file_.names[decl.first_name].name);
         const double written = declared_number(decl);
         const double pascals = written * decl.kind.si_factor;
         // The file's atmosphere is the sea level's: no site barometer to hold sums to.
