@@ -398,6 +398,7 @@ int run_report(const std::vector<std::string>& args) {
     if (auto error = prepare_project(opts, run, "report"))
         return usage_error(*error);
     opts.check.record_formulas = true;
+    opts.check.record_side_dimensions = true;
     const plumb::check_report report = plumb::check_paths(run.paths, opts.check);
     plumb::signoff_context context;
     for (const auto& p : run.paths)

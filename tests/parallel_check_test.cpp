@@ -25,6 +25,7 @@ rendered check_with_jobs(const std::vector<fs::path>& paths, unsigned jobs,
     plumb::check_options options;
     options.jobs = jobs;
     options.record_formulas = true;
+    options.record_side_dimensions = true;
     options.dictionaries = std::move(dictionaries);
     const plumb::check_report report = plumb::check_paths(paths, options);
     plumb::signoff_context context;

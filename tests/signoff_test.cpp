@@ -393,3 +393,27 @@ TEST_CASE("sign-off report: header, summary, formulas with side dimensions, caut
     auto missing = plumb_run({"report", "calcs"}, dir.path());
     CHECK(missing.status == 2);
 }
+
+TEST_CASE("formula list: the sides' dimensions are worked out only for the sign-off report") {
+    // The JSON list gives each formula's place, label and result; the second walk that finds
+    // each side's dimension is the report's alone (issue 12), and must not change the list.
+    const std::string text = "x, y : m\nz : s\n@sum y = x + z\n@bound y <= 3*x\n";
+    plumb::check_options listing;
+    listing.record_formulas = true;
+    plumb::check_options with_sides = listing;
+    with_sides.record_side_dimensions = true;
+    const auto lean = plumb::check_text("bounds.plumb", text, listing);
+    const auto full = plumb::check_text("bounds.plumb", text, with_sides);
+    REQUIRE(lean.formulas.size() == 2);
+    REQUIRE(full.formulas.size() == 2);
+    CHECK(lean.formulas[0].sides.empty());
+    CHECK(lean.formulas[0].relations.empty());
+    REQUIRE(full.formulas[1].sides.size() == 2);
+    REQUIRE(full.formulas[1].sides[0].has_value());
+    CHECK(full.formulas[1].sides[0]->to_string() == "[L]");
+    CHECK(full.formulas[1].relations == std::vector<std::string>{"<="});
+    CHECK(!full.formulas[0].sides[1].has_value()); // x + z is in error
+    CHECK(lean.formulas[0].worst == severity::error);
+    CHECK(!lean.formulas[1].worst.has_value());
+    CHECK(plumb::render_json(lean) == plumb::render_json(full));
+}

@@ -72,6 +72,7 @@ check_options sandboxed_options() {
     check_options options;
     options.include_root = sandbox();
     options.record_formulas = true;
+    options.record_side_dimensions = true;
     options.jobs = 1;
     return options;
 }

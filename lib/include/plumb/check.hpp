@@ -34,6 +34,10 @@ struct check_options {
     // Keep every formula's label, side dimensions and result, for the sign-off report and
     // the JSON list of formulas; off by default so that memory stays flat on large checks.
     bool record_formulas = false;
+    // With record_formulas, also each side's dimension and the relations between the sides,
+    // which the sign-off report prints and the JSON list does not: working the dimensions out
+    // walks every formula a second time.
+    bool record_side_dimensions = false;
     // Threads that check files at once; 0: one per core (at most 8). The report is the same
     // whatever the number.
     unsigned jobs = 0;
@@ -46,6 +50,7 @@ struct check_options {
 struct formula_record {
     location where;
     std::string label;                           // without '@'; empty when none
+    // Only with check_options::record_side_dimensions:
     std::vector<std::optional<dimension>> sides; // empty optional where a side has an error
     std::vector<std::string> relations;          // "=", "<=", ... between the sides
     std::optional<severity> worst; // the most severe finding starting inside it; empty: passed

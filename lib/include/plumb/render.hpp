@@ -40,7 +40,8 @@ struct signoff_context {
 
 // One self-contained HTML page (no network resources) for the independent checker: header
 // with file hashes, summary, every formula with its sides' dimensions and findings, the
-// studies, and the caution. `report` must come from a check with record_formulas.
+// studies, and the caution. `report` must come from a check with record_formulas and
+// record_side_dimensions.
 std::string render_signoff_html(const check_report& report, const signoff_context& context);
 
 // Said with every report: a consistent formula can still be wrong.

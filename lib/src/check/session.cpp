@@ -230,6 +230,7 @@ class session {
   public:
     session(check_report& report, const check_options& options)
         : report_(report), record_formulas_(options.record_formulas),
+          record_side_dimensions_(options.record_formulas && options.record_side_dimensions),
           include_root_(options.include_root) {
         read_restate_units(options.restate_in);
         for (const auto& path : options.dictionaries)
@@ -432,19 +433,21 @@ class session {
     // apart from the work so that it is inlined where every formula passes (issue 12).
     void record(const syntax::parsed_file& tree, const syntax::formula& f, symbol_table& table) {
         if (record_formulas_)
-            record_sides(tree, f, table);
+            record_formula(tree, f, table);
     }
-    [[gnu::noinline]] void record_sides(const syntax::parsed_file& tree, const syntax::formula& f,
-                                        symbol_table& table) {
+    [[gnu::noinline]] void record_formula(const syntax::parsed_file& tree, const syntax::formula& f,
+                                          symbol_table& table) {
         formula_record r;
         r.where = {tree.source, f.range};
         r.label = std::string(tree.source->text(f.label));
-        std::vector<diagnostic> already_reported;
-        for (std::uint32_t i = 0; i < f.side_count; ++i) {
-            const syntax::formula_side& side = tree.sides[f.first_side + i];
-            if (i > 0)
-                r.relations.emplace_back(relation_text(side.relation_before));
-            r.sides.push_back(expression_dimension(tree, side.root, table, already_reported));
+        if (record_side_dimensions_) {
+            std::vector<diagnostic> already_reported;
+            for (std::uint32_t i = 0; i < f.side_count; ++i) {
+                const syntax::formula_side& side = tree.sides[f.first_side + i];
+                if (i > 0)
+                    r.relations.emplace_back(relation_text(side.relation_before));
+                r.sides.push_back(expression_dimension(tree, side.root, table, already_reported));
+            }
         }
         auto& all = report_.formulas;
         // Formulas checked at the end of their file go back into file order.
@@ -458,6 +461,7 @@ class session {
   private:
     check_report& report_;
     bool record_formulas_ = false;
+    bool record_side_dimensions_ = false;
     std::optional<coherent_units> restate_in_;
 
     static std::string_view relation_text(syntax::relation_kind k) {
