@@ -149,6 +149,12 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     same("W/m\u00B2\u00B7K", "W/(m^2*K)");
     // The US gallon named as such (NIST SP 811 (2008), B.8, "gallon (U.S.)").
     same("US gal", "gal");
+    // ... and inside a longer unit, as recovery and fuel rows write it.
+    same("US gal/h", "gal/h");
+    same("Btu/US gal", "Btu/gal");
+    same("US gallon/h", "gal/h");
+    same("US gallons", "gal");
+    same("US gpm", "gpm");
     same("gal (US)", "gal");
     same("gallons", "gal");
     // The gas trades' normal and standard cubic metres (DIN 1343, ISO 13443; from memory), one

@@ -282,6 +282,24 @@ std::string trade_spelling(std::string t) {
     for (const auto& [typed, unit] : whole)
         if (t == typed)
             return std::string(unit);
+    // "US gal/h", "Btu/US gal", "US gpm": the US gallon named as such inside a longer unit.
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 8> us_gallon{{
+        {"U.S. gallons", "gal"},
+        {"U.S. gallon", "gal"},
+        {"US gallons", "gal"},
+        {"US gallon", "gal"},
+        {"U.S. gal", "gal"},
+        {"US gal", "gal"},
+        {"USgal", "gal"},
+        {"US gpm", "gpm"},
+    }};
+    for (const auto& [typed, unit] : us_gallon)
+        for (std::size_t at = t.find(typed); at != std::string::npos;
+             at = t.find(typed, at + unit.size())) {
+            const std::size_t end = at + typed.size();
+            if ((at == 0 || !is_letter(t[at - 1])) && (end == t.size() || !is_letter(t[end])))
+                t.replace(at, typed.size(), unit);
+        }
     // "Btu/hr", "lb/hr", "m3/hr": the hour as a word of its own.
     for (std::size_t at = t.find("hr"); at != std::string::npos; at = t.find("hr", at + 1)) {
         const bool alone =
