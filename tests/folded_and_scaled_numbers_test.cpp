@@ -254,6 +254,20 @@ TEST_CASE("gas volumes at two reference temperatures in a sum: the advice holds 
     CHECK_FALSE(plumb::test::says(first_under(r, plumb::rules::unit_scale), "35.3147"));
 }
 
+// A water content per volume of gas: 1 lb/MMscf is 453.59237 g over 28 316.85 m³ (NIST SP
+// 811 (2008), B.8), 16.018 mg/m³; per normal m³ (0 °C) against per scf (60 °F) it is that
+// times 288.71/273.15, 16.93 (GPSA Engineering Data Book, ch. 20, from memory). The volume
+// factor alone, 16.02, into mg/Nm³ leaves the reference temperatures out, 5.7 %, as it does
+// for a flow; into mg/Sm³ (15 °C, 0.2 % from 60 °F) it is the conversion.
+TEST_CASE("a concentration per volume of gas at two reference temperatures") {
+    const std::string d = "W : lb/MMscf\nw_N : mg/Nm3\nw_S : mg/Sm3\n";
+    const auto r = run(d, "w_N = 16.02*W");
+    REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "per volume"));
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "5.7 %"));
+    passes(d, {"w_N = 16.93*W", "w_S = 16.02*W"});
+}
+
 TEST_CASE("kW beside W: the advice names the W term, not the one with a converted %") {
     // Input power from a shaft power and an efficiency in %, plus an auxiliary load in W (common
     // practice: P_in = P_s/(η/100) + P_aux): the % over 100 is a fraction, and the term off by
@@ -277,6 +291,23 @@ TEST_CASE("an emission corrected to a reference oxygen: the 21 above is in % too
     fails_with(stack,
                {"C_ref = C*20/(21 - O2)", "C_ref = C*0.21/(21 - O2)", "CO2 = CO2_max*(1 - O2/20)"},
                plumb::rules::unit_scale);
+}
+
+TEST_CASE("an emission's correction to a reference oxygen written upside down") {
+    // E_ref = E·(21 - O_ref)/(21 - O_meas) (Directive 2010/75/EU, Annex VI, from memory): with
+    // the measured oxygen above and the reference below, the correction runs the wrong way.
+    // The finding says so, and its advice is to turn it over, never to divide by 100, which
+    // would leave it upside down and 100 times small as well.
+    const std::string stack = "C, C_ref : mg/Nm3\nO2 : %\n";
+    const auto turned = run(stack, "C_ref = C*(21 - O2)/(21 - 6)");
+    REQUIRE(count_of(turned, plumb::rules::unit_scale) == 1);
+    const plumb::diagnostic& finding = first_under(turned, plumb::rules::unit_scale);
+    CHECK(plumb::test::says(finding, "upside down"));
+    CHECK(plumb::test::says(finding, "write (21 - 6) above and (21 - O2) below"));
+    CHECK_FALSE(plumb::test::says(finding, "by 100"));
+    fails_with(stack, {"C_ref = C*(20.9 - O2)/(20.9 - 3)", "C_ref = C*(21 - O2)/(21 - 6)/100"},
+               plumb::rules::unit_scale);
+    passes(stack, {"C_ref = C*(21 - 6)/(21 - O2)"});
 }
 
 TEST_CASE("a gauge pressure under a square root drives a discharge to the atmosphere") {
@@ -1141,6 +1172,16 @@ TEST_CASE("a sum whose converted term is in the other side's unit: the plain ter
     CHECK(plumb::test::says(first_under(level, plumb::rules::unit_scale),
                             "multiply 'h_m' by 3.28084"));
     passes(d, {"z_ft = z_m*3.281 + h_m*3.281", "z_ft = 3.281*(z_m + h_m)", "z_m = z_m + h_m"});
+}
+
+// A deck's mass per metre from its dead load in kN/m, ×1000/g_n (SI Brochure 9th ed.: 1 kN =
+// 1000 N; g_n = 9.80665 m/s²), plus steelwork weighed in lb/ft ×1.488 (1 lb/ft = 1.48816
+// kg/m, NIST SP 811 (2008), B.8): 1.488 is a ratio of compound units, and it lands its term
+// in the side's kg/m as the 1000 does the other's. The steelwork without it stays a finding.
+TEST_CASE("a sum whose terms are converted by a compound unit's ratio and a power of ten") {
+    const std::string d = "m : kg/m\nw_d : kN/m\nm_lb : lb/ft\n";
+    passes(d, {"m = w_d*1000/{g_n} + 1.488*m_lb", "m = 1.488*m_lb + w_d*1000/9.81"});
+    fails_with(d, {"m = w_d*1000/{g_n} + m_lb"}, plumb::rules::unit_scale);
 }
 
 // A wet well's cycle time in min, fill plus draw-down, from a volume in m³ and flows in L/s

@@ -412,6 +412,20 @@ TEST_CASE("the air trade's moisture numbers: 4.5, 0.68 and 4840") {
     }
 }
 
+// The moisture load solved for the outdoor air that carries it away, Q = m/(4.5·ΔW) in cfm
+// from lb/h (common practice; 4.5 = 0.075 lb/ft³ × 60 min/h): the flow is the other side,
+// and the 4.5 below is air's density as it is above. Without the 4.5 the density is missing;
+// with grains and no 7000 the unit is off.
+TEST_CASE("the air trade's 4.5 below the line, the load solved for the flow") {
+    const std::string air = "measure gr = 64.79891 mg\nQ_cfm : cfm\nW_1, W_2 : gr/lb\n"
+                            "w_1, w_2 : 1\nm_lb : lb/h\n";
+    passes_with_one_note(air,
+                         {"Q_cfm = m_lb/(4.5*(w_1 - w_2))", "Q_cfm = 7000*m_lb/(4.5*(W_1 - W_2))"},
+                         plumb::rules::trade_constant);
+    fails_with(air, {"Q_cfm = m_lb/(w_1 - w_2)"}, plumb::rules::side_mismatch);
+    fails_with(air, {"Q_cfm = m_lb/(4.5*(W_1 - W_2))"}, plumb::rules::unit_scale);
+}
+
 // Water's molar concentration: ρ_w/M_w, 998.2 kg/m³ at 20 °C (CRC Handbook, from memory) over
 // 18.015 g/mol (IUPAC standard atomic weights, from memory), 55.41 kmol/m³; a Henry constant
 // on the mole-fraction basis over 55.5 is the same on the concentration basis for dilute water

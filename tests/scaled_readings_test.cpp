@@ -469,6 +469,19 @@ TEST_CASE("a Magnus fit's constant beside a kelvin reading") {
                   "x = T_c/(T_c + 5)"});
 }
 
+// The same fit fed a °F reading: its 237.3 to 243.04 are °C (Alduchov and Eskridge 1996, from
+// memory), so 17.625·t_F/(t_F + 243.04) is far off (at 80 °F it gives exp(4.36) where 26.7 °C
+// gives exp(1.74)). A warning, with the °C reading advised; a fit whose shift is near 400,
+// the same fit restated for °F, is left alone, as is the °C reading.
+TEST_CASE("a Magnus fit's constant beside a Fahrenheit reading") {
+    const std::string decl = "p_s : kPa\nt_F : °F\nt : °C\nx : 1\n";
+    const auto r = run(decl, "p_s = 0.61094 {kPa}*exp(17.625*t_F/(t_F + 243.04))");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale), "(t_F - 32)/1.8"));
+    passes(decl,
+           {"p_s = 0.61094 {kPa}*exp(17.625*t/(t + 243.04))", "x = 17.625*t_F/(t_F + 395.5)"});
+}
+
 // The mixed-air temperature t_m = x·t_o + (1 − x)·t_r (ASHRAE Fundamentals, ch. 1, from
 // memory; common practice), with the outdoor share x a fraction or OA/100 with OA in %, and
 // a third stream's share 1 − x − y: weights that add up to 1 whatever x is make a weighted

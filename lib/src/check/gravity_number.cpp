@@ -153,7 +153,8 @@ const std::array<carried_quantity, 30>& quantities() {
             {rules::trade_constant, "the molar volume of an ideal gas", "V_m = R\u00B7T/p", "1/V_m",
              " (at 101.325 kPa between 0 and 25 \u00B0C: 22.41 to 24.47 L/mol; the permit's "
              "standard conditions decide which)",
-             "declare the standard molar volume with its unit (V_m : L/mol = 24.45) to say so",
+             "declare the standard molar volume with its unit to say so: V_m : L/mol = "
+             "22.414 at 0 \u00B0C (per Nm\u00B3), 24.45 at 25 \u00B0C",
              "write the molar volume in a cell that holds its unit to say so",
              length * length * length / amount, molar_volume_least, molar_volume_greatest},
             // Water's latent heat of evaporation at 100 °C, 2256.4 kJ/kg (IAPWS-IF97 steam

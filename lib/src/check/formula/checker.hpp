@@ -853,6 +853,8 @@ class checker {
     bool numbers_could_carry(std::span<const scale_literal> numbers, const dimension& lacking,
                              std::span<std::string_view> texts) const;
     static carried_quantity::term_kind kind_of(const typed_term& t);
+    static carried_quantity::term_kind kind_of(const typed_term& t,
+                                               const compact_dimension& reference);
     bool read_gravity_numbers_either_way(std::size_t base, const agreement& a,
                                          std::uint32_t sum_node = syntax::no_index);
     bool read_gravity_numbers(std::size_t base, const agreement& a,
@@ -1286,6 +1288,8 @@ class checker {
     bool in_circular_mils(std::uint32_t node) const;
     [[gnu::noinline]] bool oxygen_share_of_air(std::uint32_t k) const;
     std::uint32_t number_leading_sum(std::uint32_t k, bool numbers_only) const;
+    [[gnu::noinline]] bool report_oxygen_correction_upside_down(std::uint32_t numerator,
+                                                                std::uint32_t denominator);
     [[gnu::noinline]] bool carries_number_of_sum(std::uint32_t numerator,
                                                  std::uint32_t denominator) const;
     [[gnu::noinline]] bool same_number_over_its_sum(std::uint32_t numerator,
@@ -1293,6 +1297,8 @@ class checker {
     [[gnu::noinline]] bool fitted_on_scale(std::uint32_t numerator, std::uint32_t denominator,
                                            const typed_term& top, const typed_term& below) const;
     [[gnu::noinline]] void report_celsius_fit_beside_kelvins(std::uint32_t denominator);
+    [[gnu::noinline]] void report_celsius_fit_on_other_scale(std::uint32_t denominator,
+                                                             const unit_definition& scale);
     [[gnu::noinline]] void report_reference_on_other_scale(std::uint32_t difference);
     bool empirical_over_reading(std::uint32_t numerator, const typed_term& below) const;
     bool holds_specific_energy_term(std::uint32_t root) const;

@@ -851,6 +851,12 @@ typed_term checker::eval_factors(std::uint32_t index) {
         if (divided && (result.scale == 0.01 || (factor->scale != 1.0 && !factor->numeric)))
             [[unlikely]]
             settle_percent_divisor(result, *factor, op);
+        else if (divided && factor->numeric && result.known && !result.numeric &&
+                 file_.nodes[syntax::inside_brackets(file_, op.rhs)].kind == expr_kind::subtract &&
+                 report_oxygen_correction_upside_down(op.lhs, op.rhs)) [[unlikely]] {
+            result.scale /= 0.01;
+            result.exact_scale = exact_product(result.exact_scale, rational(100), false);
+        }
         // (R_2 - R_1)/R_1*(235 + θ_1): a winding's temperature from its inferred zero of
         // resistance, times a ratio, is a rise; and so is each bracket of the correction
         // R_2 = R_1*(235 + θ_2)/(235 + θ_1) (IEC 60076-1's load loss at 75 °C, from memory),
@@ -892,6 +898,8 @@ typed_term checker::eval_factors(std::uint32_t index) {
         if (divided && factor->offset != nullptr &&
             (fitted_on_scale(op.lhs, op.rhs, result, *factor) ||
              empirical_over_reading(op.lhs, *factor))) {
+            if (!is_celsius(factor->offset)) [[unlikely]]
+                report_celsius_fit_on_other_scale(op.rhs, *factor->offset);
             read_as_rise(result);
             if (factor != reinterpret_cast<const typed_term*>(evaluated))
                 factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);

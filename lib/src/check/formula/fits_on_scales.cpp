@@ -326,6 +326,52 @@ bool checker::carries_number_of_sum(std::uint32_t numerator, std::uint32_t denom
     });
 }
 
+// "C*(21 - O2)/(21 - 6)" with O2 in %: the correction to a reference oxygen upside down,
+// the measured oxygen above and the reference below, where the codes write
+// C·(21 - O2_ref)/(21 - O2_meas) (Directive 2010/75/EU, Annex VI; US EPA Method 19, from
+// memory). Said as such, and the % settled as the right form settles it, so that no advice
+// on the unit follows that would leave the correction upside down.
+bool checker::report_oxygen_correction_upside_down(std::uint32_t numerator,
+                                                   std::uint32_t denominator) {
+    const std::uint32_t below = number_leading_sum(denominator, true);
+    if (below == syntax::no_index || !oxygen_share_of_air(below))
+        return false;
+    const std::string_view share = text(file_.nodes[below].range);
+    std::uint32_t measured = syntax::no_index;
+    for_each_factor(numerator, [&](std::uint32_t at, int sign) {
+        const std::uint32_t above = number_leading_sum(at, false);
+        if (sign < 0 || above == syntax::no_index || text(file_.nodes[above].range) != share)
+            return false;
+        const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, at)];
+        if (sum.kind != expr_kind::subtract ||
+            dimensionless_unit_size(sum.rhs) != std::optional<double>(0.01))
+            return false;
+        measured = at;
+        return true;
+    });
+    if (measured == syntax::no_index)
+        return false;
+    const auto bracketed = [&](std::uint32_t k) {
+        const std::string written = display_text(file_.nodes[k].range);
+        return written.starts_with('(') ? written : "(" + written + ")";
+    };
+    const std::string above_text = bracketed(measured);
+    const std::string below_text = bracketed(denominator);
+    diagnostic& d = report(
+        rules::unit_scale,
+        fmt::format("the correction to a reference oxygen is upside down: {} holds the measured "
+                    "oxygen and stands above, {} the reference and stands below",
+                    above_text, below_text),
+        file_.nodes[measured].range);
+    d.level = severity::warning;
+    d.notes.push_back({fmt::format("the codes correct to the reference oxygen by "
+                                   "C*(21 - O2_ref)/(21 - O2_measured): write {} above and {} "
+                                   "below",
+                                   below_text, above_text),
+                       {}});
+    return true;
+}
+
 bool checker::same_number_over_its_sum(std::uint32_t numerator, std::uint32_t denominator) const {
     numerator = syntax::inside_brackets(file_, numerator);
     denominator = syntax::inside_brackets(file_, denominator);
@@ -476,6 +522,41 @@ void checker::report_celsius_fit_beside_kelvins(std::uint32_t denominator) {
                                    "fit takes the temperature",
                                    text(file_.nodes[reading].range)),
                        {}});
+}
+
+// "17.625*t_F/(t_F + 243.04)" with t_F in °F: the Magnus fit's constants (230 to 260) are
+// fitted to the °C reading; on the °F scale its shift is some 400 (237.3·1.8 + 32 = 459.1
+// less the 32 carried above), so the fit holds on the scale it was written for alone.
+void checker::report_celsius_fit_on_other_scale(std::uint32_t denominator,
+                                                const unit_definition& scale) {
+    denominator = syntax::inside_brackets(file_, denominator);
+    const syntax::expr_node& sum = file_.nodes[denominator];
+    if (sum.kind != expr_kind::add)
+        return;
+    const std::uint32_t number = file_.nodes[sum.lhs].kind == expr_kind::number ? sum.lhs : sum.rhs;
+    const std::uint32_t reading = number == sum.lhs ? sum.rhs : sum.lhs;
+    if (file_.nodes[number].kind != expr_kind::number ||
+        file_.nodes[reading].kind != expr_kind::symbol)
+        return;
+    const double constant = written_number(file_.nodes[number].range);
+    if (!(constant >= 230.0 && constant <= 260.0))
+        return;
+    diagnostic& d = report(
+        rules::offset_scale,
+        fmt::format("{} reads like a Magnus fit's constant, made for a \u00B0C reading, but {} "
+                    "is in {}: the fit holds on the scale it was made on alone",
+                    display_text(file_.nodes[number].range), quote(reading), scale.symbol),
+        file_.nodes[denominator].range);
+    d.level = severity::warning;
+    const std::string_view name = text(file_.nodes[reading].range);
+    const bool fahrenheit = std::abs(scale.factor * 1.8 - 1.0) < 1e-9;
+    d.notes.push_back(
+        {fahrenheit ? fmt::format("write the \u00B0C reading, ({} - 32)/1.8, wherever the fit "
+                                  "takes the temperature",
+                                  name)
+                    : std::string("write the \u00B0C reading wherever the fit takes the "
+                                  "temperature"),
+         {}});
 }
 
 // "150 {psf} + 9000?*R/t_F" (ACI 347's wall pressure, T the concrete's °F reading): a

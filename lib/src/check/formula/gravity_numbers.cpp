@@ -113,6 +113,17 @@ bool checker::read_column_and_atmosphere(std::size_t base, std::uint32_t sum_nod
     return true;
 }
 
+// "Q_oa = w_lbh/(4.5*ΔW)": the moisture load solved for the air's flow, which is then the
+// quantity the term is weighed against rather than one of its factors.
+carried_quantity::term_kind checker::kind_of(const typed_term& t,
+                                             const compact_dimension& reference) {
+    const carried_quantity::term_kind kind = kind_of(t);
+    if (kind == carried_quantity::term_kind::any && !t.numeric &&
+        (reference == volume_flow_dimension() || reference == volume_flow_enthalpy_dim))
+        return carried_quantity::term_kind::volume_flow;
+    return kind;
+}
+
 // Whether any of a term's numbers could carry a quantity the term lacks (the cheap test
 // before a reading); their texts go to `texts`, as the reading wants them.
 bool checker::numbers_could_carry(std::span<const scale_literal> numbers, const dimension& lacking,
@@ -250,7 +261,7 @@ bool checker::read_gravity_numbers(std::size_t base, const agreement& a, std::ui
             return false;
         const auto reading =
             read_gravity_number(t.scale, reference_scale, numbers, {texts.data(), numbers.size()},
-                                lacking, true, kind_of(t), clock_units_of_formula());
+                                lacking, true, kind_of(t, *a.reference), clock_units_of_formula());
         // A bare number standing for the whole quantity is that quantity in the others'
         // unit or nothing: "ρ_p - 1" beside kg/m³ is no water density a thousand apart.
         if (!reading || (t.numeric && reading->shifted))

@@ -166,9 +166,10 @@ void checker::report_reference_temperatures_left_out(std::span<const operand> si
         return;
     diagnostic& d =
         report(rules::unit_scale,
-               fmt::format("the sides agree as volumes, but {} is gas at {} and {} at {}: a volume "
+               fmt::format("the sides agree {}, but {} is gas at {} and {} at {}: a volume "
                            "factor alone leaves out the reference temperatures, {} %",
-                           quote(sides[0].node), a->name, quote(sides[1].node), b->name,
+                           a->power > 0 ? "as volumes" : "per volume", quote(sides[0].node),
+                           a->name, quote(sides[1].node), b->name,
                            format_factor(std::round((std::max(a->kelvins, b->kelvins) /
                                                          std::min(a->kelvins, b->kelvins) -
                                                      1.0) *

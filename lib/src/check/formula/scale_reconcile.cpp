@@ -143,6 +143,12 @@ bool checker::report_term_left_unconverted(std::span<const operand> ops,
     const std::size_t plain = 1 - converted;
     if (!converts(converted) || converts(plain))
         return false;
+    // "w_d*1000/{g_n} + 1.488*m_lb" in kg/m: 1.488 is lb/ft to kg/m, a ratio of compound
+    // units the table of conversions does not hold, but it lands its term in the side's unit
+    // all the same, so that term is converted too.
+    for (const scale_literal& l : parts[plain].literals)
+        if (std::abs(parts[plain].scale / std::pow(l.value, l.exponent) / *side - 1.0) < 1e-3)
+            return false;
     const operand& odd = ops[index[plain]];
     const operand& reference = ops[index[converted]];
     diagnostic& d = report(

@@ -212,13 +212,21 @@ void checker::ask_of_marked_units(const syntax::formula& f, std::span<const oper
             if (out_.size() == findings_before)
                 report_reference_temperatures_left_out(sides);
         } else {
-            for (const operand& side : sides)
+            // "w_N = 16.02*W" with w_N in mg/Nm3 and W in lb/MMscf: a concentration per
+            // reference volume takes the reference temperatures' ratio as a volume does
+            // (16.93 into mg/Nm³, 16.02 into mg/Sm³; GPSA Engineering Data Book, from memory).
+            const std::size_t findings_before = out_.size();
+            report_reference_temperatures_left_out(sides);
+            for (const operand& side : sides) {
+                if (out_.size() != findings_before)
+                    break;
                 if (report_normal_measure_times_actual_volume(side) ||
                     (sides[0].type.dim == power_dim && report_power_from_normal_flow(side)) ||
                     (sides[0].type.dim == velocity_dim && report_velocity_from_normal_flow(side)) ||
                     (sides[0].type.dim == area_dimension() && report_area_from_normal_flow(side)) ||
                     report_reference_states_in_ratio(side))
                     break;
+            }
         }
     }
     if (noted)
