@@ -1218,3 +1218,45 @@ TEST_CASE("the clock's 60 beside a slip counts as the conversion it was written 
     CHECK(plumb::test::says(first_under(plunger, plumb::rules::unit_scale),
                             "231 fits these units with 'd_mm' in in, but it is in mm"));
 }
+
+// Carbon usage in g/m³ (= mg/L) restated per thousand US gallons: 1 mg/L is 8.3454 lb per
+// million gallons (NIST SP 811 (2008), B.8: lb = 0.45359237 kg, gal = 3.785411784 L), which
+// the trade prints 8.34 (common practice), and 0.00834 per thousand gallons. Both read as
+// that number, a thousand apart; the note says the liquid does not matter where the units
+// already agree. A number that is no such decade (0.0834) stays a finding.
+TEST_CASE("water's 8.34 printed a thousand apart, per thousand gallons") {
+    const std::string d = "measure kgal = 1000 gal\nmeasure Mgal = 1000000 gal\nCUR : g/m^3\n"
+                          "CUR_k : lb/kgal\nCUR_M : lb/Mgal\n";
+    passes(d, {"CUR_k = 0.00834*CUR", "CUR_M = 8.34*CUR"});
+    const auto r = run(d, "CUR_k = 0.00834*CUR");
+    REQUIRE(count_of(r, plumb::rules::trade_constant) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::trade_constant), "0.0083454"));
+    CHECK(plumb::test::says(first_under(r, plumb::rules::trade_constant), "any liquid"));
+    fails_with(d, {"CUR_k = 0.0834*CUR", "CUR_k = 8.34*CUR"}, plumb::rules::unit_scale);
+}
+
+// The pound-force is the weight of a pound at standard gravity (NIST SP 811 (2008), B.8:
+// 1 lbf = 0.45359237 kg × 9.80665 m/s²): a mass in lb weighs the same number of lbf, so
+// m_lb*{g_n} written into lbf is 9.80665 times the truth, and the finding says why; {g_n}
+// times a mass in kg is in N.
+TEST_CASE("a mass in pounds times g written as pounds-force") {
+    const std::string d = "w_lbf : lbf\nm_lb : lb\nW_N : N\nm_kg : kg\n";
+    const auto r = run(d, "w_lbf = m_lb*{g_n}");
+    REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale),
+                            "a mass in lb weighs the same number of lbf"));
+    passes(d, {"W_N = m_kg*{g_n}", "W_N = m_lb*{g_n}*0.4536", "w_lbf = m_kg*{g_n}*0.2248"});
+}
+
+// A vendor's heat capacity against the °C reading, c = c_0 + a·t (common practice): the
+// reading multiplied by a slope per degree is flagged, and the advice names the fit's zero.
+// 1 ft³/h is 0.028316846592/3600 m³/s (NIST SP 811 (2008), B.8), the gas trade's cfh.
+TEST_CASE("a property's linear fit in a °C reading, and the cubic foot an hour") {
+    const std::string d = "c_po, c_p0 : kJ/(kg*K)\na_c : kJ/(kg*K^2)\nt_m : °C\n"
+                          "Q_cfh : cfh\nQ_m3h : m^3/h\n";
+    const auto r = run(d, "c_po = c_p0 + a_c*t_m");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale), "t_0 : °C = 0"));
+    passes(d, {"Q_cfh = 35.31*Q_m3h"});
+    fails_with(d, {"Q_cfh = Q_m3h/35.31"}, plumb::rules::unit_scale);
+}

@@ -155,6 +155,18 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     same("US gallon/h", "gal/h");
     same("US gallons", "gal");
     same("US gpm", "gpm");
+    // A share by mass or volume, as the chemical trades head it (common practice).
+    same("% w/w", "%");
+    same("wt%", "%");
+    same("% by weight", "%");
+    same("% v/v", "%");
+    // The inch of water column as gas and fan sheets type it; "g" or "gauge" beside it says
+    // the gauge reading (NIST SP 811 (2008), B.8: 249.08891 Pa).
+    same("\"w.c.", "inH2O");
+    same("\"WC", "inH2O");
+    same("in w.c.", "inH2O");
+    same("in. w.c. (g)", "inH2Og");
+    same("in. w.c. gauge", "inH2Og");
     same("gal (US)", "gal");
     same("gallons", "gal");
     // The gas trades' normal and standard cubic metres (DIN 1343, ISO 13443; from memory), one

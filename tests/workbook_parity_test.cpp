@@ -1123,3 +1123,38 @@ TEST_CASE("workbook parity: a row that types the site's barometer is the declare
     // A row that is no barometer (a vessel's pressure) declares none.
     CHECK(cell_findings(check_one_sheet("Plant", sheet("Vessel pressure"))).empty());
 }
+
+TEST_CASE("workbook parity: a gas pressure in inches of water column beside gauge units") {
+    // 1 inH2O = 249.08891 Pa, 1 mbar = 100 Pa (NIST SP 811 (2008), B.8): 20 mbar(g) × 0.4015 is
+    // 8.03 inches of water column, the gauge reading a gas supply is given in (common
+    // practice). The inch of water keeps the atmosphere's zero there, and mbar(g) and the
+    // gauge inch share it: a factor turned over is named as such, not the scales' zeros.
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Supply pressure", "20", "mbar(g)") +
+        labelled_row(3, "Supply pressure, US", "=B2*0.4015", "in. w.c.") +
+        labelled_row(4, "Supply pressure, US (turned)", "=B2*2.491", "in. w.c.") +
+        labelled_row(5, "Meter outlet", "7", "in. w.c.") +
+        labelled_row(6, "Meter outlet, metric", "=B5*2.491", "mbar(g)") +
+        labelled_row(7, "Supply pressure, gauge inch", "=B2*2.491", "in. w.c. (g)") +
+        "</sheetData></worksheet>";
+    const check_report r = check_one_sheet("Gas", sheet);
+    CHECK(cell_findings(r) == std::vector<std::string>{"Gas!B4 unit-scale", "Gas!B7 unit-scale"});
+    for (const auto& d : r.diagnostics)
+        CHECK_FALSE(says(d, "zeros"));
+}
+
+TEST_CASE("workbook parity: a share by mass, the gallon in a longer unit, and cfh") {
+    // A coagulant at 48.5 % w/w (common practice) is a fraction once over 100; a dose over it
+    // without the 100 is 100 times small. 1 ft³/h = 0.028316846592/3600 m³/s (NIST SP 811
+    // (2008), B.8): m³/h × 35.31 is cfh.
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Alum dose", "30", "kg/h") +
+        labelled_row(3, "Alum strength", "48.5", "% w/w") +
+        labelled_row(4, "Solution feed", "=B2/(B3/100)", "kg/h") +
+        labelled_row(5, "Solution feed (planted)", "=B2/B3", "kg/h") +
+        labelled_row(6, "Gas flow", "12", "m³/h") +
+        labelled_row(7, "Gas flow, US", "=B6*35.31", "cfh") +
+        labelled_row(8, "Recovery", "=B6*264.2", "US gal/h") + "</sheetData></worksheet>";
+    CHECK(cell_findings(check_one_sheet("Dosing", sheet)) ==
+          std::vector<std::string>{"Dosing!B5 unit-scale"});
+}

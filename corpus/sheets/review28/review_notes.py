@@ -16,11 +16,6 @@ EXTRA = {
     "gas-piping": [
         (N + ": 14.7 psia, the standard atmosphere, in the line-pressure correction",
          "Design!C21 trade-constant"),
-        ("a correct cell plumb still flags: =C10/27.68 turns 7 in. w.c. at the meter outlet into "
-         "psig (1 psi = 27.68 in. w.c., NIST SP 811 (2008) App. B.8); fuel gas pressures in "
-         "in. w.c. are gauge (NFPA 54 (2021), common practice), but plumb reads 'in. w.c.' as the "
-         "absolute inH2O and calls the psig result off by the atmosphere (its own catalogue "
-         "says gas piping's inches of water are gauge, inH2Og)", "Design!C13 offset-scale"),
         ("a correct cell plumb still flags: IFGC 2021 Eq. 4-1, D = Q^0.381/(19.17·(ΔH/(Cr·L))"
          "^0.206) with D in in., Q in cfh, ΔH in in. w.c., L in ft (from memory); a unit-bound "
          "empirical fit whose 19.17 carries the units, which a workbook cannot mark as plumb's "

@@ -54,14 +54,7 @@ MISSED = {
 }
 
 # stem -> {"Sheet!Cell": (rule plumb names, why)}
-RENAMED = {
-    "oxygen-vie": {
-        "VIE!C40": ("offset-scale", "right cell, misleading words: plumb says the kPa(g) and "
-                    "psig scales' zeros differ, but both are gauge scales with the atmosphere as "
-                    "zero; the value is 100 times too large (14.5 is psi per bar, kPa needs "
-                    "0.145, as C39 has it)"),
-    },
-}
+RENAMED = {}
 
 MESSAGES = {}
 

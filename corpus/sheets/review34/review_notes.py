@@ -38,9 +38,6 @@ MISSED = {
 
 RENAMED = {
     "crude-pump-station": {
-        "Station!C38": ("offset-scale", "it reads bar g / 14.5 as a value left on the bar(g) "
-                        "scale and speaks of the scales' zeros, though bar g and psig share the "
-                        "same zero; the mistake is the factor the wrong way round"),
         "Station!C45": ("result-unit", "it reads 2.31 as 1/γ_w for a result in ft and says so "
                         "in a note (0.7041 in m)"),
     },
@@ -55,9 +52,6 @@ RENAMED = {
 
 MESSAGES = {
     "crude-pump-station": {
-        "Station!C38": "'gives a value on the bar(g) scale ... off by the difference of the "
-                       "scales' zeros; add or subtract the atmospheric pressure' - misleading: "
-                       "the fix is ×14.5, not an atmosphere",
         "Station!C50": "'its units are 24.4898 times too large for it, its coefficient 2449 "
                        "aside' - misleading: the value shown is 100 times too small (η in % "
                        "used as a fraction); the correct cell C49 shows 2449 is the exact "

@@ -13,12 +13,6 @@ W231 = ("a note on a correct cell: 2.31 ft of water per psi read as one over the
         "of water, which it is (common practice)")
 EXTRA = {
     "kitchen-gas-ventilation": [
-        ("a correct cell plumb still flags: 7 in. w.c. × 0.2491 = 1.744 kPa(g). A gas supply pressure in "
-         "inches of water column is a gauge reading (plumb's own catalogue says so of inH2Og: "
-         "'gas piping's inches of water column are gauge'); 1 in. of water = 249.1 Pa, NIST SP "
-         "811 (2008) B.8. plumb reads the typed 'in. w.c.' as absolute and advises adding or "
-         "subtracting the atmosphere, which would put a 101 kPa error in the cell",
-         "Kitchen!C20 offset-scale"),
         ("a note on a correct cell: 1.08 read as ρ_a·c_p,a of standard air in Btu/(h·cfm·°F), "
          "which it is (common practice)", "Kitchen!C52 trade-constant"),
     ],

@@ -36,8 +36,12 @@ std::span<const trade_constant> trade_constants() {
         // about 68 °F (common practice).
         const rational fan_power_low = parsed("6343.3114960");
         const rational fan_power_high = parsed("6343.3114962");
+        // Read where the sides agree in dimension, so that the number only converts units
+        // (mgd × mg/L into lb/d: a concentration in mg/L is a mass per volume already): the
+        // liquid's own density does not enter.
         constexpr std::string_view for_water =
-            "the result holds for water; for another liquid write its own density";
+            "here it only converts units, so it holds for any liquid, within the 0.3 % that "
+            "water's density spans";
         // A real inch of water at t °C is the conventional one (249.08891 Pa, NIST SP 811
         // (2008), B.8) times ρ_w(t)/(1000 kg/m³): 248.84 Pa at 60 °F, as NIST prints it and
         // the gas-measurement standards take it (AGA Report No. 3, from memory), with 27.707

@@ -186,7 +186,7 @@ std::string as_declaration(std::string_view notation, std::string_view measures)
 // "in. w.g." for inches of water, "hr" for the hour, "CFM" in capitals, "kNm" for kN·m,
 // "sq ft", "bhp" (brake horsepower, a horsepower), "bara" (bar absolute).
 std::string trade_spelling(std::string t) {
-    static constexpr std::array<std::pair<std::string_view, std::string_view>, 83> whole{{
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 111> whole{{
         {"in. w.g.", "inH2O"},
         {"in.w.g.", "inH2O"},
         {"in w.g.", "inH2O"},
@@ -213,6 +213,37 @@ std::string trade_spelling(std::string t) {
         {"\" H2O", "inH2O"},
         {"\" w.c.", "inH2O"},
         {"\" w.g.", "inH2O"},
+        {"\"w.c.", "inH2O"},
+        {"\"w.g.", "inH2O"},
+        {"\"WC", "inH2O"},
+        {"\"wc", "inH2O"},
+        {"\"WG", "inH2O"},
+        {"in w.c.", "inH2O"},
+        // A gauge reading of the inch of water said in words beside the unit.
+        {"in. w.c. g", "inH2Og"},
+        {"in. w.c.(g)", "inH2Og"},
+        {"in. w.c. (g)", "inH2Og"},
+        {"in. w.c. gauge", "inH2Og"},
+        {"in w.c. g", "inH2Og"},
+        {"in. w.g. (g)", "inH2Og"},
+        {"in. w.g. gauge", "inH2Og"},
+        // A share by mass or volume as the chemical trades write it (common practice): the
+        // words say what the percentage is of, and the unit is the percent.
+        {"% w/w", "%"},
+        {"% (w/w)", "%"},
+        {"%w/w", "%"},
+        {"w/w %", "%"},
+        {"% wt", "%"},
+        {"wt%", "%"},
+        {"wt %", "%"},
+        {"wt.%", "%"},
+        {"% by weight", "%"},
+        {"% by mass", "%"},
+        {"% m/m", "%"},
+        {"% v/v", "%"},
+        {"% (v/v)", "%"},
+        {"vol%", "%"},
+        {"vol %", "%"},
         {"bara", "bar"},
         {"BPD", "bbl/d"},
         {"bpd", "bbl/d"},

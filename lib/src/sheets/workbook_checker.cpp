@@ -1117,7 +1117,25 @@ class workbook_checker {
                     return true;
             return false;
         }();
-        if (written.unit.offset != computed.offset &&
+        // Two gauge units count from one zero, the atmosphere (mbar(g) and inH2Og): between
+        // them only the size of the unit differs, which the scale check below weighs.
+        const bool one_zero = written.unit.offset != nullptr && computed.offset != nullptr &&
+                              std::abs(written.unit.offset->offset - computed.offset->offset) <=
+                                  1e-9 * std::abs(computed.offset->offset);
+        // A column of water ("in. w.c.", ftH2O) is read on a gauge, or is a drop: a gauge
+        // reading converted into it, or it into a gauge unit, keeps the atmosphere's zero
+        // (common practice: gas supply and fan pressures in inches of water are gauge).
+        const auto water_column = [](const unit_definition* offset, double scale) {
+            return offset == nullptr && (std::abs(scale / 249.08891 - 1.0) < 1e-9 ||
+                                         std::abs(scale / 2989.06692 - 1.0) < 1e-9);
+        };
+        const auto on_gauge = [](const unit_definition* offset) {
+            return offset != nullptr && offset->scale == unit_scale::gauge;
+        };
+        const bool column_on_gauge =
+            (on_gauge(computed.offset) && water_column(written.unit.offset, written.unit.scale)) ||
+            (on_gauge(written.unit.offset) && water_column(computed.offset, computed.scale));
+        if (written.unit.offset != computed.offset && !one_zero && !column_on_gauge &&
             (computed.offset != nullptr || !uses_offset_values)) {
             const unit_definition* on_scale =
                 computed.offset != nullptr ? computed.offset : written.unit.offset;
@@ -1202,21 +1220,27 @@ class workbook_checker {
         // others (0.87, 5/384, /4) being coefficients of the formula.
         double written_product = 1.0;
         double conversions = 1.0;
-        double doubt = 0.0; // the conversions' rounding, relative
+        double doubt = 0.0;   // the conversions' rounding, relative
+        double printed = 0.0; // every written number's rounding, relative
         for (const auto& x : factors) {
             const double factor = std::pow(x.value, x.exponent);
             written_product *= factor;
+            printed += x.tolerance * std::abs(x.exponent);
             if (looks_like_conversion(x, true) || is_time_ratio(x)) {
                 conversions *= factor;
                 doubt += x.tolerance * std::abs(x.exponent);
             }
         }
+        // "=C37*14.5" from kPa(g) into psig: 14.5 is the psi per bar, rounded (14.5038), and
+        // what is left is the 100 of bar to kPa, within that rounding.
         const double left = needed / written_product;
         const double decades = std::log10(std::abs(left));
-        const double off =
-            std::abs(decades - std::round(decades)) < 1e-9 && std::round(decades) != 0
-                ? left
-                : whole_within(needed / conversions, doubt).value_or(needed);
+        const bool clean_decade =
+            std::round(decades) != 0 &&
+            std::abs(decades - std::round(decades)) <= std::log10(1.0 + printed) + 1e-9;
+        const double off = clean_decade
+                               ? std::copysign(std::pow(10.0, std::round(decades)), left)
+                               : whole_within(needed / conversions, doubt).value_or(needed);
         const std::optional<rational> exact_needed =
             exact_product(computed.exact_scale, written.unit.exact_scale, true);
         const std::optional<rational> exact_inverse =

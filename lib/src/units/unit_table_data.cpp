@@ -463,6 +463,10 @@ constexpr unit_definition rows[] = {
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 4.719474E-04; exact as ft^3/min"),
     absolute("cfs", "cubic foot per second", volumetric_flow, 0.028316846592, "0.028316846592",
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 2.831685E-02; exact as ft^3/s"),
+    // The US gas trade's meter and appliance rate (pipe sizing tables in cubic feet an hour).
+    absolute("cfh", "cubic foot per hour", volumetric_flow, 0.028316846592 / 3600.0,
+             "28316846592/3600000000000000", prefixes::refused,
+             "NIST SP 811 (2008), B.8 cubic foot and hour; exact as ft^3/h"),
     // Compressed air and gas: standard cubic feet a minute or an hour, and actual cubic feet a
     // minute at the inlet (common practice; the standard ones at reference conditions, as scf).
     absolute("scfm", "standard cubic foot per minute", volumetric_flow, 0.0004719474432,

@@ -761,6 +761,7 @@ class checker {
     [[gnu::noinline]] typed_term eval_power(const syntax::expr_node& n);
     [[gnu::noinline]] std::optional<typed_term> eval_log_difference(std::uint32_t index);
     bool force_over_area(std::uint32_t k) const;
+    bool names_a_stress_symbol(std::uint32_t k) const;
     bool gradient_times_depth(std::uint32_t k) const;
     bool declared_pressure_difference(const operand& o) const;
     bool has_factor_of_dimension(std::uint32_t k, const compact_dimension& wanted, int sign) const;
@@ -1078,6 +1079,7 @@ class checker {
         const scale_literal* literal;
         const trade_constant* constant;
         double unit;
+        rational decade; // the power of ten the number is printed apart from the property
     };
     // A conversion folded with a coefficient into one number: "π*D_mm^2/4e6" (4 × 10⁶ mm²/m²),
     // "(D_mm/4000)" for R = D/4 in metres, "0.4085*Q/d^2" (4/π times gpm per in² in ft/s). A
@@ -1156,6 +1158,7 @@ class checker {
                                               std::span<const std::size_t> index, std::size_t i,
                                               const scale_literal& l, bool second) const;
     bool holds_pi(std::uint32_t k) const;
+    bool holds_standard_gravity(std::uint32_t k) const;
     bool conversions_all_needed(std::span<const operand> ops, std::span<const std::size_t> index,
                                 std::span<const scaled_operand> parts, bool dimensionless) const;
     bool report_extra_factor(std::span<const operand> ops, std::span<const std::size_t> index,
@@ -1242,6 +1245,7 @@ class checker {
     // check/formula/offset_readings.cpp
     static bool is_heat_per_degree(const compact_dimension& partner);
     static bool is_per_degree_coefficient(const compact_dimension& partner);
+    static bool is_slope_of_property(const compact_dimension& partner);
     bool linear_fit_on_reading(std::uint32_t node) const;
     void report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where,
                        const compact_dimension* partner = nullptr);

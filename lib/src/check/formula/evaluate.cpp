@@ -39,6 +39,16 @@ typed_term checker::eval_power(const syntax::expr_node& n) {
     return apply_power(base, exponent, n.lhs, n.rhs);
 }
 
+// A symbol declared as a stress ("σ_v", or "overburden stress" in its description).
+bool checker::names_a_stress_symbol(std::uint32_t k) const {
+    const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, k)];
+    if (n.kind != expr_kind::symbol)
+        return false;
+    const std::string_view name = text(n.range);
+    const symbol_entry* e = symbols_.find(name);
+    return e != nullptr && e->offset_unit == nullptr && names_a_stress(name, e->description);
+}
+
 // A product of one force above the line and lengths or areas below it, with numbers:
 // a load over the area it acts on (F/A), no reading.
 bool checker::force_over_area(std::uint32_t k) const {

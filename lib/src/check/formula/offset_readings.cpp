@@ -11,6 +11,15 @@ bool checker::is_heat_per_degree(const compact_dimension& partner) {
     return name == "power" || name == "heat flux or irradiance";
 }
 
+// a in c_p = c_0 + a·t (kJ/(kg·K²)): the slope of a property that is itself per degree.
+bool checker::is_slope_of_property(const compact_dimension& partner) {
+    try {
+        return partner.expand().exponent(base_dimension::temperature) < rational(-1);
+    } catch (const std::exception&) {
+        return false;
+    }
+}
+
 // α, β·V, R_20·α: a coefficient per degree of whatever it scales. Not where the product
 // with a temperature could be a gas law's or a heat's: an energy (n·R·T, m·c_p·T), a
 // pressure (ρ·R_s·T), an energy per mass (R_s·T) or per mole (R·T).
@@ -165,6 +174,19 @@ void checker::report_offset(std::uint32_t node, const unit_definition& unit, std
         d.notes.push_back({"a difference of two values on the same scale, such as T_2 - T_1, "
                            "is an ordinary quantity and may be used freely",
                            {}});
+        return;
+    }
+    // "c_p0 + a_c*t_m" with a_c in kJ/(kg·K²): a property's slope per degree in a fit linear
+    // in the reading (a vendor's c_p or a density against the °C reading, common practice),
+    // whose constant is the property at the fit's zero. Saying that zero makes the product a
+    // difference.
+    if (temperature && partner != nullptr && is_slope_of_property(*partner)) {
+        d.notes.push_back(
+            {fmt::format("if this is a fit linear in the reading (c = c_0 + a·t, c_0 the value "
+                         "at the fit's zero): write a*({} - t_0) with t_0 : {} = 0 declared, "
+                         "or the fit's own reference reading, to say so",
+                         display_text(file_.nodes[node].range), unit.symbol),
+             {}});
         return;
     }
     // The physics decides which fix is right, and a dimension cannot tell ρ·c_p·T from

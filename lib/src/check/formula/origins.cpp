@@ -147,11 +147,33 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
         // And "FG*TVD", a gradient times a depth: the column's pressure, as 0.052*MW*TVD
         // is (a fracture gradient from a leak-off test is gauge-based; Bourgoyne et al.,
         // Applied Drilling Engineering, 1986, ch. 6, from memory).
+        // And "p_gr <= σ_v", a grout pressure against the overburden: a stress is counted
+        // from the atmosphere, as soil mechanics counts it (σ_v = γ·z is zero at the ground).
+        // And a column of water, a symbol or a cell in inH2O or ftH2O, which gauges and drops
+        // are read in and an absolute pressure never is (common practice).
+        // Converted by numbers ("=C21*2.491" into mbar(g)) it is one still.
+        const auto water_column = [&](const operand& o) {
+            if (o.type.offset != nullptr || !(o.type.dim == pressure_dimension()))
+                return false;
+            const std::uint32_t sole = sole_symbol_times_conversions(o.node, true);
+            if (sole == syntax::no_index)
+                return false;
+            const syntax::expr_node& n = file_.nodes[sole];
+            double scale = 0.0;
+            if (n.kind == expr_kind::reference) {
+                scale = file_.references[n.lhs].scale;
+            } else if (const symbol_entry* e = symbols_.find(text(n.range)); e != nullptr) {
+                scale = e->si_factor;
+            }
+            return std::abs(scale / 249.08891 - 1.0) < 1e-9 ||
+                   std::abs(scale / 2989.06692 - 1.0) < 1e-9;
+        };
         const auto net_pressure = [&](const operand& o) {
             return o.type.absolute_pressure_difference || declared_pressure_difference(o) ||
+                   water_column(o) ||
                    (!o.type.point && o.type.dim == pressure_dimension() &&
                     (pressure_scaled_by_shape(o.node, false) || force_over_area(o.node) ||
-                     gradient_times_depth(o.node)));
+                     gradient_times_depth(o.node) || names_a_stress_symbol(o.node)));
         };
         if ((on_gauge(*reference) && net_pressure(side)) ||
             (on_gauge(side) && net_pressure(*reference)))

@@ -4,6 +4,27 @@
 
 namespace plumb::formula_check {
 
+// The power of ten that brings a printed number into a trade constant's range (1 where it
+// lies there as printed; a thousand or a million apart only for a property's range), or none.
+static std::optional<rational> decade_of_property(const rational& printed,
+                                                  const trade_constant& c) {
+    try {
+        for (const std::int64_t shift : {1, 1000, 1000000})
+            for (const bool up : {false, true}) {
+                if (shift == 1 && up)
+                    continue;
+                if (shift != 1 && c.least == c.greatest)
+                    return std::nullopt;
+                const rational scaled = up ? printed / rational(shift) : printed * rational(shift);
+                if (!(scaled < c.least) && !(c.greatest < scaled))
+                    return up ? rational(shift) : rational(1) / rational(shift);
+            }
+    } catch (const std::exception&) {
+        // A printed number too large or too fine for 64-bit fractions is no property.
+    }
+    return std::nullopt;
+}
+
 std::optional<checker::trade_constant_reading>
 checker::read_trade_constant(std::span<const scaled_operand> parts, bool flipped) {
     for (std::size_t i = 0; i < parts.size(); ++i)
@@ -14,21 +35,25 @@ checker::read_trade_constant(std::span<const scaled_operand> parts, bool flipped
                 continue;
             for (const trade_constant& c : trade_constants()) {
                 // A property's range is read from a number printed to three digits or more;
-                // an exact constant (the 120 of n = 120*f/p) from its value alone.
-                if (*printed < c.least || c.greatest < *printed ||
-                    (!l.factor_like && c.least != c.greatest))
+                // an exact constant (the 120 of n = 120*f/p) from its value alone. The
+                // property's number may be printed a thousand or a million apart: 0.00834 lb
+                // per thousand gallons for each mg/L.
+                if (!l.factor_like && c.least != c.greatest)
+                    continue;
+                const std::optional<rational> decade = decade_of_property(*printed, c);
+                if (!decade)
                     continue;
                 std::vector<scale_literal> literals(parts[i].literals.begin(),
                                                     parts[i].literals.end());
-                literals[k].low = c.exact_conversion;
-                literals[k].high = c.conversion_high;
-                literals[k].value = c.exact_conversion.to_double();
+                literals[k].low = c.exact_conversion * *decade;
+                literals[k].high = c.conversion_high * *decade;
+                literals[k].value = (c.exact_conversion * *decade).to_double();
                 literals[k].tolerance = 0.0;
                 std::vector<scaled_operand> changed(parts.begin(), parts.end());
                 changed[i].literals = literals;
                 const reconciliation r = flipped ? reconcile(changed, {i, k}) : reconcile(changed);
                 if (r.agree)
-                    return trade_constant_reading{&l, &c, r.unit};
+                    return trade_constant_reading{&l, &c, r.unit, *decade};
             }
         }
     return std::nullopt;
@@ -41,13 +66,14 @@ bool checker::accept_trade_constant(std::span<const scaled_operand> parts, doubl
     const scale_literal& l = *reading->literal;
     const trade_constant& c = *reading->constant;
     unit = reading->unit;
-    diagnostic& d = report(rules::trade_constant,
-                           fmt::format("{} is read as {}, not as a unit conversion: the units "
-                                       "need {}, {}",
-                                       text(file_.nodes[l.node].range), c.name,
-                                       format_factor(std::nullopt, c.exact_conversion.to_double()),
-                                       c.conversion),
-                           file_.nodes[l.node].range);
+    diagnostic& d = report(
+        rules::trade_constant,
+        fmt::format("{} is read as {}, not as a unit conversion: the units "
+                    "need {}, {}",
+                    text(file_.nodes[l.node].range), c.name,
+                    format_factor(std::nullopt, (c.exact_conversion * reading->decade).to_double()),
+                    c.conversion),
+        file_.nodes[l.node].range);
     d.level = severity::note;
     d.notes.push_back({fmt::format("{}; source: {}", c.range_text, c.source), {}});
     d.notes.push_back({std::string(c.caveat), {}});
@@ -397,6 +423,15 @@ std::optional<double> checker::folded_power_of_ten(std::span<const operand> ops,
         first_found = true;
     }
     return std::nullopt;
+}
+
+// {g_n} among a product's factors.
+bool checker::holds_standard_gravity(std::uint32_t k) const {
+    return for_each_factor(k, [&](std::uint32_t at, int) {
+        const syntax::expr_node& n = file_.nodes[at];
+        return n.kind == expr_kind::quantity && file_.quantities[n.lhs].constant &&
+               std::abs(file_.quantities[n.lhs].si_factor - 9.80665) < 1e-12;
+    });
 }
 
 bool checker::holds_pi(std::uint32_t k) const {

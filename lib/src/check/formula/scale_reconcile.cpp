@@ -558,6 +558,15 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                                  format_factor(whole));
             multiply = ratio < 1.0;
         }
+    // "W_lbf = m_lb*{g_n}": the pound-force is a pound's weight at standard gravity (NIST SP
+    // 811 (2008), B.8), so a mass in lb weighs the same number of lbf, and so a kg in kgf.
+    if (std::abs(whole / 9.80665 - 1.0) < 1e-9 &&
+        (holds_standard_gravity(op.node) || holds_standard_gravity(reference.node))) [[unlikely]]
+        d.notes.push_back({"a pound-force is the weight of a pound at standard gravity (and a "
+                           "kilogram-force a kilogram's): a mass in lb weighs the same number "
+                           "of lbf, with g in the unit already; {g_n} turns a mass into a "
+                           "force in N where the mass is in kg",
+                           {}});
     if (counted_both_ways || in_place_offered)
         d.notes.push_back({fmt::format("if {} was meant as the conversion, write {} in its "
                                        "place; if it is a coefficient of the formula, {} {} by {}",
