@@ -111,6 +111,12 @@ TEST_CASE("an angle in degrees inside sin, cos or tan: the conversion is written
     REQUIRE(count_of(rankine, plumb::rules::unit_scale) == 1);
     CHECK(says(first_under(rankine, plumb::rules::unit_scale), "tan((45 - θ/2)*π/180)"));
     passes(angles + "K_a : 1\n", {"K_a = tan((45 - θ/2)*π/180)^2"});
+    // The same in radians, tan²(π/4 - φ/2), with φ left in degrees: π/4 is in radians already,
+    // so only the angle is converted, and the advice, followed, passes.
+    const auto radians = run(angles + "K_a : 1\n", "K_a = tan(pi/4 - θ/2)^2");
+    REQUIRE(count_of(radians, plumb::rules::unit_scale) == 1);
+    CHECK(says(first_under(radians, plumb::rules::unit_scale), "tan(pi/4 - θ/2*π/180)"));
+    passes(angles + "K_a : 1\n", {"K_a = tan(pi/4 - θ/2*π/180)^2"});
 }
 
 // A sprocket's pitch diameter D = p/sin(180°/N) (ANSI B29.1, from memory). With the degrees
@@ -133,10 +139,11 @@ TEST_CASE("degrees written out in a trig function's argument, with and without t
 // A reading multiplied: the fix offered must suit the physics where the dimension can tell
 // (a coefficient per degree of a volume, β·V·ΔT; a heat flow per degree, ṁ·c_p·ΔT; common
 // practice) and give both fixes, each with the laws it suits, where it cannot (ρ·c_p·T has
-// the dimension of ρ·R_s·T, the gas law p = ρ·R_s·T).
+// the dimension of ρ·R_s·T, the gas law p = ρ·R_s·T), unless a symbol's name or description
+// says it is a specific heat (c_p), which makes it a heat balance.
 TEST_CASE("a reading multiplied: the fix offered suits what multiplies it") {
     const std::string decl = "ΔV, V : m^3\nβ : 1/K\nT_F : °F\nT_o : °C\nQ_h : kW\nρ : kg/m^3\n"
-                             "c_p : kJ/(kg*K)\nV_a : m^3/s\nm_w : kg/s\n";
+                             "c_p : kJ/(kg*K)\nV_a : m^3/s\nm_w : kg/s\nk_x : kJ/(kg*K)\n";
     const auto expansion = run(decl, "ΔV = V*β*T_F");
     REQUIRE(count_of(expansion, plumb::rules::offset_scale) == 1);
     const auto& e = first_under(expansion, plumb::rules::offset_scale);
@@ -147,11 +154,16 @@ TEST_CASE("a reading multiplied: the fix offered suits what multiplies it") {
     const auto& h = first_under(heat, plumb::rules::offset_scale);
     CHECK(says(h, "T_other"));
     CHECK_FALSE(says(h, "adding 273.15"));
-    const auto either = run(decl, "V_a = Q_h/(ρ*c_p*T_o)");
+    const auto either = run(decl, "V_a = Q_h/(ρ*k_x*T_o)");
     REQUIRE(count_of(either, plumb::rules::offset_scale) == 1);
     const auto& x = first_under(either, plumb::rules::offset_scale);
     CHECK(says(x, "if the law needs absolute temperature"));
     CHECK(says(x, "if it stands for a rise or a drop"));
+    const auto balance = run(decl, "V_a = Q_h/(ρ*c_p*T_o)");
+    REQUIRE(count_of(balance, plumb::rules::offset_scale) == 1);
+    const auto& b = first_under(balance, plumb::rules::offset_scale);
+    CHECK(says(b, "T_other"));
+    CHECK_FALSE(says(b, "adding 273.15"));
 }
 
 // The mixed temperature of two streams of one liquid, T_mix = (ṁ_h·T_h + ṁ_c·T_c)/(ṁ_h + ṁ_c),

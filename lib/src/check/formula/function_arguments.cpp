@@ -249,6 +249,32 @@ void checker::require_unit_free(const builtin_function& f, const operand& a) {
         const expr_kind kind = file_.nodes[a.node].kind;
         const std::string angle = display_text(file_.nodes[a.node].range);
         const bool sum = kind == expr_kind::add || kind == expr_kind::subtract;
+        // tan(pi/4 - φ/2): a term with π in it is in radians already; the angle alone is
+        // converted, or π/4 would be divided by 57.3 too.
+        if (sum) {
+            const syntax::expr_node& n = file_.nodes[a.node];
+            const bool left_pi = holds_pi(n.lhs);
+            const bool right_pi = holds_pi(n.rhs);
+            if (left_pi != right_pi) {
+                const std::string left = display_text(file_.nodes[n.lhs].range);
+                const std::string right = display_text(file_.nodes[n.rhs].range);
+                const char* op = kind == expr_kind::add ? " + " : " - ";
+                const std::string converted =
+                    left_pi ? fmt::format("{}{}{}*\u03C0/180", left, op,
+                                          file_.nodes[n.rhs].kind == expr_kind::add ||
+                                                  file_.nodes[n.rhs].kind == expr_kind::subtract
+                                              ? "(" + right + ")"
+                                              : right)
+                            : fmt::format("({})*\u03C0/180{}{}", left, op, right);
+                d.notes.push_back(
+                    {fmt::format("{} takes radians, and {} is in radians already: "
+                                 "convert the angle alone, {}({}), or declare it "
+                                 "in rad",
+                                 f.name, quote(left_pi ? n.lhs : n.rhs), f.name, converted),
+                     {}});
+                return;
+            }
+        }
         d.notes.push_back({fmt::format("{} takes radians: write {}({}{}{}*\u03C0/180), or "
                                        "declare the angle in rad",
                                        f.name, f.name, sum ? "(" : "", angle, sum ? ")" : ""),

@@ -11,6 +11,30 @@ bool checker::is_heat_per_degree(const compact_dimension& partner) {
     return name == "power" || name == "heat flux or irradiance";
 }
 
+// ρ·c·t, m·c·t in "V = 3600*Q/(ρ*c*t_out)": a heat capacity per volume or per mass beside the
+// reading, where the formula holds a specific heat by its name or description (c_p, c_w,
+// "specific heat"): a heat balance, whose reading should be a rise. By dimension alone ρ·c_p
+// is ρ·R_s, a gas law's, so the name decides.
+bool checker::heat_capacity_in_formula(const compact_dimension& partner) const {
+    const compact_dimension heat = partner * temperature;
+    if (!(heat == pressure) && !(heat == velocity_squared_dim) && !(heat == energy_dim))
+        return false;
+    bool found = false;
+    visit_nodes([&](const syntax::expr_node& n) {
+        if (found || n.kind != expr_kind::symbol)
+            return;
+        const std::string_view name = text(n.range);
+        const symbol_entry* e = symbols_.find(name);
+        if (e == nullptr || name.starts_with("R"))
+            return;
+        const bool named = name.starts_with("c_") || name.starts_with("cp") ||
+                           e->description.find("specific heat") != std::string_view::npos ||
+                           e->description.find("heat capacity") != std::string_view::npos;
+        found = named && e->compact_dim && *e->compact_dim == specific_heat_dim;
+    });
+    return found;
+}
+
 // a in c_p = c_0 + a·t (kJ/(kg·K²)): the slope of a property that is itself per degree.
 bool checker::is_slope_of_property(const compact_dimension& partner) {
     try {
@@ -163,7 +187,8 @@ void checker::report_offset(std::uint32_t node, const unit_definition& unit, std
     // U·A·T, ṁ·c_p·T: a heat flow per degree times a reading. What is meant is a
     // difference of two temperatures; converting the reading to kelvins would pass the
     // check and give a value many times too large.
-    if (temperature && partner != nullptr && is_heat_per_degree(*partner)) {
+    if (temperature && partner != nullptr &&
+        (is_heat_per_degree(*partner) || heat_capacity_in_formula(*partner))) {
         d.notes.push_back(
             {fmt::format("a heat flow per degree (U·A, ṁ·c_p) multiplies a "
                          "temperature difference: write ({} - T_other), with T_other the "

@@ -134,7 +134,7 @@ void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_v
                            static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10),
                            added_to_gauge      ? "the absolute pressure"
                            : number_subtracted ? "the pressure above the atmosphere"
-                                               : "the result",
+                                               : "the sum it stands in",
                            format_factor(std::round(std::abs(off) / 100.0) / 10.0),
                            off > 0 ? "high" : "low"),
                file_.nodes[number].range);
