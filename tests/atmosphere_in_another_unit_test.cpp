@@ -241,3 +241,32 @@ TEST_CASE("the sea-level atmosphere taken from an absolute reading leaves the re
     CHECK(says(first_under(r, plumb::rules::offset_scale),
                "the pressure above the atmosphere comes out 7.1 kPa low"));
 }
+
+// A steam generator at a site whose barometer is declared 97.5 kPa (some 320 m up, by the
+// standard atmosphere's barometric formula, from memory): its gauge reading converted into
+// kPa or psi (1 bar = 100 kPa = 14.5038 psi, NIST SP 811 (2008), B.8) plus that barometer in
+// the same unit is absolute, as the unconverted p_g + 0.975 is; the barometer added to a
+// reading already absolute counts the atmosphere twice, as 14.7 does.
+TEST_CASE("a converted gauge reading plus the site's barometer typed as a number") {
+    const std::string d = "p_b : kPa = 97.5 \"site barometer\"\np_g : barg\np_kpa : kPa\n"
+                          "p_psia, p_x : psia\n";
+    passes(d, {"p_kpa = 100*p_g + 97.5", "p_psia = 14.5*p_g + 14.14", "p_psia = 14.5*(p_g + 0.975)",
+               "p_kpa = 100*p_g + p_b"});
+    // Not a barometer in the sum's unit: 97.5 psi, 14.14 kPa.
+    fails_with(d, {"p_psia = 14.5*p_g + 97.5", "p_kpa = 100*p_g + 14.14"},
+               plumb::rules::offset_scale);
+    const auto twice = run(d, "p_x = p_psia + 14.14");
+    REQUIRE(count_of(twice, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(twice, plumb::rules::offset_scale), "counts the atmosphere twice"));
+}
+
+// A flare tip's velocity from a flow at reference conditions (15 °C, ISO 13443, from memory)
+// over the tip's area with its diameter converted from inches (1 in = 0.0254 m exactly, NIST
+// SP 811 (2008), B.8): the conversion written first is a length's, not a state's correction.
+TEST_CASE("a velocity from a standard flow over an area whose diameter is converted first") {
+    const std::string d = "Q_S : Sm3/d\nd_in : in\nD_mm : mm\nv : m/s\n";
+    fails_with(d,
+               {"v = Q_S/(86400*pi*(0.0254*d_in)^2/4)", "v = Q_S/(86400*pi*(D_mm/1000)^2/4)",
+                "v = Q_S/(86400*pi*(0.001*D_mm)^2/4)"},
+               plumb::rules::unit_scale);
+}

@@ -1200,7 +1200,7 @@ class checker {
     std::optional<std::string> atmosphere_added_to_gauge(const operand& absolute,
                                                          const operand& gauge,
                                                          bool temperature) const;
-    bool read_local_atmosphere(const operand& sum);
+    bool read_local_atmosphere(const operand& sum, double other_scale);
     void settle_rounded_side(typed_term& side, std::size_t literal_base) const;
     void report_unbalanced_readings(const operand& side);
     bool report_scale_zero_beside_difference(std::span<const operand> sides);

@@ -336,6 +336,31 @@ bool checker::report_zero_added_twice(std::span<const operand> terms, double uni
         }
         if (report_zero_in_another_unit_added(t, sh, unit, dim, terms))
             return true;
+        // "p_x = p_psia + 14.14" where the file declares the site's barometer, 97.5 kPa:
+        // the atmosphere at the site, added to a reading already absolute.
+        const site_barometer* site = dim == pressure ? declared_site_barometer() : nullptr;
+        if (site == nullptr || std::abs(si / site->pascals - 1.0) > site_barometer_slack)
+            continue;
+        const auto reading = std::find_if(terms.begin(), terms.end(), [&](const operand& r) {
+            return !is_shift_candidate(r) && r.type.known && r.type.point &&
+                   r.type.offset == nullptr && r.type.dim == pressure;
+        });
+        if (reading == terms.end() || named_gauge(reading->node))
+            continue;
+        diagnostic& d = report(rules::offset_scale,
+                               fmt::format("{} is the site's barometer '{}', added to {}, a "
+                                           "reading already on an absolute scale: the sum "
+                                           "counts the atmosphere twice",
+                                           display_text(file_.nodes[t.node].range), site->name,
+                                           quote(reading->node)),
+                               file_.nodes[t.node].range);
+        add_number_term(d, t, reading->type.dim);
+        add_term(d, *reading);
+        d.notes.push_back({"a gauge reading plus the barometer is absolute; a reading declared "
+                           "absolute needs nothing added (declare it in psig, barg or kPag if "
+                           "it is a gauge reading)",
+                           {}});
+        return true;
     }
     return false;
 }

@@ -207,7 +207,8 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
         const unit_definition* unit = off.type.offset;
         const bool temperature = off.type.dim == temperature_dimension();
         if (!temperature && unit != nullptr && unit->scale == unit_scale::gauge &&
-            other.type.offset == nullptr && other.type.point && read_local_atmosphere(off))
+            other.type.offset == nullptr && other.type.point &&
+            read_local_atmosphere(off, other.type.scale))
             return;
         // "1.8*(t + 273.15)": kelvins times 1.8 are degrees Rankine, its numbers taken in.
         const double other_degree = unit_of_written_numbers(other.type);
@@ -504,16 +505,76 @@ std::optional<std::string> checker::atmosphere_added_to_gauge(const operand& abs
 // that falls short of the standard atmosphere by no more than the air above the highest
 // sites does (5200 m, see declared_site_barometer) is the site's barometer, or a rounded
 // one; a note says which height it stands for.
-bool checker::read_local_atmosphere(const operand& sum) {
+bool checker::read_local_atmosphere(const operand& sum, double other_scale) {
     std::uint32_t k = sum.node;
     k = syntax::inside_brackets(file_, k);
-    // Beside the gauge symbol alone, so that the number is in the symbol's unit (in
-    // 6.895*p_g + 14.7 the sum is in kPa, and 14.7 kPa no atmosphere).
-    const auto parts = number_beside_symbol(k);
-    if (!parts || !std::isfinite(sum.type.scale))
+    if (!std::isfinite(sum.type.scale))
         return false;
-    const std::uint32_t number = parts->first;
-    const double pressure = written_number(file_.nodes[number].range) * sum.type.scale;
+    // Beside the gauge symbol alone, the number is in the symbol's unit; "14.5*(p_g + 0.975)"
+    // converts the sum, number and all. Beside the reading converted by numbers into the
+    // other side's unit ("100*p_g + 97.5" with p_g in barg and the side in kPa), it is in
+    // that unit: in 6.895*p_g + 14.7 into kPa, 14.7 kPa is no atmosphere.
+    std::uint32_t number = syntax::no_index;
+    double unit = sum.type.scale;
+    // The gauge symbol among a product's factors and the numbers beside it, which must take
+    // the reading into the other side's unit within their rounding (14.5 psi per bar is
+    // 14.5038); `inner` is a bracketed sum of the symbol and a number, where one is.
+    const auto converted_reading = [&](std::uint32_t product, std::uint32_t& inner) {
+        const symbol_entry* reading = nullptr;
+        double numbers = 1.0;
+        double rounding = 1e-9;
+        const bool other = for_each_factor(product, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number) {
+                const double v = written_number(n.range);
+                if (!(v > 0.0))
+                    return true;
+                numbers *= sign > 0 ? v : 1.0 / v;
+                rounding += read_literal(text(n.range), v, at).tolerance;
+                return false;
+            }
+            if (sign < 0 || reading != nullptr)
+                return true;
+            std::uint32_t symbol = at;
+            if (n.kind != expr_kind::symbol) {
+                const auto parts = number_beside_symbol(at);
+                if (!parts)
+                    return true;
+                inner = at;
+                symbol = parts->second;
+            }
+            reading = symbols_.find(text(file_.nodes[symbol].range));
+            return reading == nullptr || reading->offset_unit == nullptr;
+        });
+        return !other && reading != nullptr && std::isfinite(other_scale) && other_scale > 0.0 &&
+                       std::abs(reading->si_factor / numbers / other_scale - 1.0) <= rounding
+                   ? reading
+                   : nullptr;
+    };
+    if (const auto parts = number_beside_symbol(k)) {
+        number = parts->first;
+    } else if (file_.nodes[k].kind == expr_kind::multiply) {
+        std::uint32_t inner = syntax::no_index;
+        const symbol_entry* reading = converted_reading(k, inner);
+        if (reading == nullptr || inner == syntax::no_index)
+            return false;
+        number = number_beside_symbol(inner)->first;
+        unit = reading->si_factor;
+    } else if (file_.nodes[k].kind == expr_kind::add) {
+        const syntax::expr_node& n = file_.nodes[k];
+        const bool left_number = file_.nodes[n.lhs].kind == expr_kind::number;
+        const std::uint32_t written = left_number ? n.lhs : n.rhs;
+        std::uint32_t inner = syntax::no_index;
+        if (file_.nodes[written].kind != expr_kind::number ||
+            converted_reading(left_number ? n.rhs : n.lhs, inner) == nullptr ||
+            inner != syntax::no_index)
+            return false;
+        number = written;
+        unit = other_scale;
+    } else {
+        return false;
+    }
+    const double pressure = written_number(file_.nodes[number].range) * unit;
     if (!(pressure >= highest_site_atmosphere * standard_atmosphere &&
           pressure <= 1.005 * standard_atmosphere))
         return false;
@@ -523,7 +584,7 @@ bool checker::read_local_atmosphere(const operand& sum) {
         site != nullptr && std::abs(pressure / site->pascals - 1.0) > site_barometer_slack) {
         report_atmosphere_not_the_site(
             number, fmt::format("an atmosphere of {} kPa", format_factor(pressure / 1000.0)),
-            pressure, *site, sum.type.scale);
+            pressure, *site, unit);
         return true;
     }
     // The barometric formula of the standard atmosphere, h = 44330.8·(1 - (p/p0)^0.190263) m.

@@ -468,6 +468,13 @@ bool checker::plain_conversion_number(std::uint32_t at) const {
             std::abs(v / (time * std::pow(10.0, tens)) - 1.0) < 1e-9)
             return true;
     }
+    // The inch, foot and yard in metres, exact and printed short (0.0254, 25.4, 0.3048;
+    // NIST SP 811 (2008), B.8): lengths, never a state's correction.
+    for (const double length : {2.54, 3.048, 9.144}) {
+        const double tens = std::round(std::log10(v / length));
+        if (std::abs(v / (length * std::pow(10.0, tens)) - 1.0) < 1e-12)
+            return true;
+    }
     return looks_like_conversion(read_literal(text(file_.nodes[at].range), v, at), false);
 }
 
@@ -628,6 +635,12 @@ bool checker::report_velocity_from_normal_flow(const operand& side) {
                      file_.nodes[in.rhs].kind == expr_kind::number &&
                      plain_conversion_number(in.rhs))
                 base = in.lhs;
+            // (0.0254*d_in)^2: the conversion written first.
+            else if (in.kind == expr_kind::multiply &&
+                     file_.nodes[in.rhs].kind == expr_kind::symbol &&
+                     file_.nodes[in.lhs].kind == expr_kind::number &&
+                     plain_conversion_number(in.lhs))
+                base = in.rhs;
         }
         // "(V_a + V_n)/(3600*A)": air and fuel gas in Nm³/h added, as if they were the
         // flue gas at its temperature.
