@@ -167,6 +167,10 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     same("in w.c.", "inH2O");
     same("in. w.c. (g)", "inH2Og");
     same("in. w.c. gauge", "inH2Og");
+    // A duct's friction rate per a round length (ASHRAE Fundamentals, duct design, from
+    // memory), with the inch of water spelled as the trades spell it.
+    same("in. w.g./100 ft", "inH2O/100 ft");
+    same("in. w.g. per 100 ft", "inH2O/100 ft");
     same("gal (US)", "gal");
     same("gallons", "gal");
     // The gas trades' normal and standard cubic metres (DIN 1343, ISO 13443; from memory), one

@@ -1158,3 +1158,45 @@ TEST_CASE("workbook parity: a share by mass, the gallon in a longer unit, and cf
     CHECK(cell_findings(check_one_sheet("Dosing", sheet)) ==
           std::vector<std::string>{"Dosing!B5 unit-scale"});
 }
+
+TEST_CASE("workbook parity: a drop across regulators computed from bar a and bar(g)") {
+    // An absolute reading less a gauge one is the atmosphere (1 atm = 1.01325 bar, NIST SP 811
+    // (2008), B.8), not the drop between two pressures the row names; the drop from two
+    // readings on one scale passes.
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Tank pressure", "11.2", "bar a") +
+        labelled_row(3, "Line pressure", "9.5", "bar(g)") +
+        labelled_row(4, "Tank pressure, gauge", "10.2", "bar(g)") +
+        labelled_row(5, "Pressure drop across the regulators", "=B2-B3", "bar") +
+        labelled_row(6, "Pressure drop across the regulators", "=B4-B3", "bar") +
+        "</sheetData></worksheet>";
+    CHECK(cell_findings(check_one_sheet("VIE", sheet)) ==
+          std::vector<std::string>{"VIE!B5 offset-scale"});
+}
+
+TEST_CASE("workbook parity: a duct's velocity pressure and friction rate in inches of water") {
+    // p_v = (V/4005)² in in. w.g. from fpm for standard air (ASHRAE Fundamentals, duct design,
+    // from memory); a friction rate in in. w.g. per 100 ft times a length in ft needs the 100.
+    // A fan's hp = cfm × in. w.g./(6356 × η) with η a fraction (common practice): with η in %
+    // the value is 100 times small, which is what is said.
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Duct velocity", "1500", "fpm") +
+        labelled_row(3, "Velocity pressure", "=(B2/4005)^2", "in. w.g.") +
+        labelled_row(4, "Friction rate", "0.15", "in. w.g./100 ft") +
+        labelled_row(5, "Duct length", "80", "ft") +
+        labelled_row(6, "Friction loss", "=B4*B5/100", "in. w.g.") +
+        labelled_row(7, "Friction loss (planted)", "=B4*B5", "in. w.g.") +
+        labelled_row(8, "Exhaust", "4000", "cfm") + labelled_row(9, "Fan efficiency", "60", "%") +
+        labelled_row(10, "Fan power", "=B8*B6/(6356*B9/100)", "hp") +
+        labelled_row(11, "Fan power (planted)", "=B8*B6/(6356*B9)", "hp") +
+        "</sheetData></worksheet>";
+    const check_report r = check_one_sheet("Hood", sheet);
+    CHECK(cell_findings(r) == std::vector<std::string>{"Hood!B11 unit-scale",
+                                                       "Hood!B3 trade-constant",
+                                                       "Hood!B7 unit-scale"});
+    for (const auto& d : r.diagnostics)
+        if (d.rule == plumb::rules::unit_scale && says(d, "hp")) {
+            CHECK(says(d, "100 times too small"));
+            CHECK_FALSE(says(d, "coefficient"));
+        }
+}

@@ -46,8 +46,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 30>& quantities() {
-    static const std::array<carried_quantity, 30> table = [] {
+const std::array<carried_quantity, 31>& quantities() {
+    static const std::array<carried_quantity, 31> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -99,7 +99,7 @@ const std::array<carried_quantity, 30>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 30>{{
+        return std::array<carried_quantity, 31>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -343,6 +343,17 @@ const std::array<carried_quantity, 30>& quantities() {
              "write the density and g in cells that hold their units to say so",
              density * acceleration, water_least * standard_gravity / 2.0,
              water_greatest * standard_gravity / 2.0},
+            // The fan trade's velocity pressure p_v = (V/4005)² in in. w.g. from fpm, and
+            // V = 4005·√p_v (ASHRAE Fundamentals, duct design, from memory): 4005 is √(2/ρ)
+            // of standard air, 0.075 lb/ft³, in those units (V = √(2·p_v/ρ)).
+            {rules::trade_constant, "the square root of two over the density of air",
+             "\u221A(2/\u03C1_a)", "\u221A(\u03C1_a/2)",
+             " (dry air at 101.325 kPa between 0 and 40 \u00B0C; the fan trade's 4005 takes "
+             "standard air, 0.075 lb/ft\u00B3)",
+             "declare the air's density with its unit and write sqrt(2*p_v/\u03C1_a) to say so",
+             "write the air's density in a cell that holds its unit to say so",
+             density.pow(rational(-1, 2)), std::sqrt(2.0 / air_density(0.0)),
+             std::sqrt(2.0 / air_density(40.0))},
         }};
     }();
     return table;

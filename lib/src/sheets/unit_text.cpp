@@ -87,6 +87,12 @@ std::string to_notation(std::string_view t) {
             }
             continue;
         }
+        // "inH2O/100 ft", "ftH2O": water's formula inside a unit's symbol is no power.
+        if (rest.starts_with("H2O")) {
+            out += "H2O";
+            i += 2;
+            continue;
+        }
         const char c = t[i];
         if (c >= '0' && c <= '9' && i > 0 && is_letter(t[i - 1]))
             out += '^';
@@ -313,6 +319,23 @@ std::string trade_spelling(std::string t) {
     for (const auto& [typed, unit] : whole)
         if (t == typed)
             return std::string(unit);
+    // "in. w.g./100 ft", "in. w.c. per 100 ft": a friction rate whose numerator is spelled
+    // as the trades spell it, read as that spelling over the rest.
+    for (const std::string_view over : {std::string_view("/"), std::string_view(" per ")}) {
+        const std::size_t at = t.find(over);
+        if (at == std::string::npos || at == 0)
+            continue;
+        std::string_view above(t.data(), at);
+        while (!above.empty() && above.back() == ' ')
+            above.remove_suffix(1);
+        for (const auto& [typed, unit] : whole)
+            if (above == typed && unit.find(' ') == std::string_view::npos) {
+                std::string rest = t.substr(at + over.size());
+                while (!rest.empty() && rest.front() == ' ')
+                    rest.erase(0, 1);
+                return trade_spelling(std::string(unit) + "/" + rest);
+            }
+    }
     // "US gal/h", "Btu/US gal", "US gpm": the US gallon named as such inside a longer unit.
     static constexpr std::array<std::pair<std::string_view, std::string_view>, 8> us_gallon{{
         {"U.S. gallons", "gal"},

@@ -12,6 +12,7 @@
 #include "check/number_reading.hpp"
 #include "check/reference_state.hpp"
 #include "check/scale_match.hpp"
+#include "check/trade_constants.hpp"
 #include "plumb/rules.hpp"
 #include "sheets/a1_front_end.hpp"
 #include "sheets/cell_as_equation.hpp"
@@ -611,6 +612,27 @@ class workbook_checker {
         return names(label_of(s, a).description) || names(heading_of(s, a).description);
     }
 
+    // "=C50-C54": an absolute pressure's cell less a gauge pressure's.
+    bool absolute_less_gauge(std::uint32_t root) const {
+        const syntax::expr_node& n =
+            lowered_.tree.nodes[syntax::inside_brackets(lowered_.tree, root)];
+        if (n.kind != syntax::expr_kind::subtract)
+            return false;
+        const auto cell = [&](std::uint32_t k) -> const syntax::reference_value* {
+            const syntax::expr_node& c = lowered_.tree.nodes[k];
+            return c.kind == syntax::expr_kind::reference ? &lowered_.tree.references[c.lhs]
+                                                          : nullptr;
+        };
+        const syntax::reference_value* a = cell(n.lhs);
+        const syntax::reference_value* b = cell(n.rhs);
+        const dimension pressure = dimension::base(base_dimension::mass) /
+                                   dimension::base(base_dimension::length) /
+                                   dimension::base(base_dimension::time).pow(rational(2));
+        return a != nullptr && b != nullptr && a->dim && *a->dim == pressure &&
+               a->offset == nullptr && !a->difference && b->offset != nullptr &&
+               b->offset->scale == unit_scale::gauge;
+    }
+
     bool labelled_a_difference(std::size_t s, cell_address a) const {
         const row_label label = label_of(s, a);
         if (!label.description.empty() && names_a_difference(label.name, label.description))
@@ -723,6 +745,15 @@ class workbook_checker {
                 if (auto as_difference =
                         equation_.check(root, f.written_text, written->unit, true, enthalpy);
                     !has_fault(as_difference))
+                    verdict = std::move(as_difference);
+            // "Pressure drop across the regulators | =C50-C54 | bar" with C50 in bar a and C54
+            // in bar(g): an absolute reading less a gauge one is the atmosphere, a reading,
+            // where the row says a drop between two pressures; checked as the drop it says.
+            if (!has_fault(*verdict) && absolute_less_gauge(root) &&
+                labelled_a_difference(f.sheet, f.source->at))
+                if (auto as_difference =
+                        equation_.check(root, f.written_text, written->unit, true, enthalpy);
+                    has_fault(as_difference))
                     verdict = std::move(as_difference);
             if (!has_unit_fault(*verdict)) {
                 take_verdict(*verdict, f, formula);
@@ -1222,10 +1253,21 @@ class workbook_checker {
         double conversions = 1.0;
         double doubt = 0.0;   // the conversions' rounding, relative
         double printed = 0.0; // every written number's rounding, relative
+        double trade_conversions = 1.0;
         for (const auto& x : factors) {
             const double factor = std::pow(x.value, x.exponent);
             written_product *= factor;
             printed += x.tolerance * std::abs(x.exponent);
+            // The fan trade's 6356 stands for 6343.3 with a real inch of water (see
+            // check/trade_constants.hpp): the value is off by the decade within that too.
+            // It converts as it stands, so the value shown is off by what the units leave
+            // over it ("=cfm*in.w.g./(6356*η)" typed under kW: the 1.341 of hp to kW).
+            if (const std::optional<rational> p = printed_power(x, 1.0))
+                if (const trade_constant* c = trade_constant_for(*p)) {
+                    const double apart = std::abs(x.value / c->exact_conversion.to_double() - 1.0);
+                    printed += apart * std::abs(x.exponent);
+                    trade_conversions *= factor;
+                }
             if (looks_like_conversion(x, true) || is_time_ratio(x)) {
                 conversions *= factor;
                 doubt += x.tolerance * std::abs(x.exponent);
@@ -1238,9 +1280,10 @@ class workbook_checker {
         const bool clean_decade =
             std::round(decades) != 0 &&
             std::abs(decades - std::round(decades)) <= std::log10(1.0 + printed) + 1e-9;
-        const double off = clean_decade
-                               ? std::copysign(std::pow(10.0, std::round(decades)), left)
-                               : whole_within(needed / conversions, doubt).value_or(needed);
+        const double off =
+            clean_decade
+                ? std::copysign(std::pow(10.0, std::round(decades)), left)
+                : whole_within(needed / (conversions * trade_conversions), doubt).value_or(needed);
         const std::optional<rational> exact_needed =
             exact_product(computed.exact_scale, written.unit.exact_scale, true);
         const std::optional<rational> exact_inverse =
@@ -1257,8 +1300,11 @@ class workbook_checker {
             const std::string_view text = listing_->text(lowered_.tree.nodes[x.node].range);
             // Written to four digits or more, as conversions are (0.5933, 3.517); a 0.87 or a
             // 384 is the formula's own, and the value shown is off by the units alone.
+            // Nor a trade's constant (the fan's 6356), which is right where it stands.
+            const std::optional<rational> p = printed_power(x, 1.0);
             if (x.value != 1.0 && x.table_digits && !looks_like_conversion(x, true) &&
-                !is_time_ratio(x) && coefficients.size() < 80 && off != left)
+                !is_time_ratio(x) && coefficients.size() < 80 && off != left &&
+                !(p && trade_constant_for(*p) != nullptr))
                 coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ", text);
         }
         std::optional<std::string> backwards =
