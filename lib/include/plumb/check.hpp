@@ -46,11 +46,11 @@ struct check_options {
     std::filesystem::path include_root;
 };
 
-// One formula as the sign-off report lists it.
+// One formula as the sign-off report lists it; its sides and relations only with
+// check_options::record_side_dimensions.
 struct formula_record {
     location where;
     std::string label;                           // without '@'; empty when none
-    // Only with check_options::record_side_dimensions:
     std::vector<std::optional<dimension>> sides; // empty optional where a side has an error
     std::vector<std::string> relations;          // "=", "<=", ... between the sides
     std::optional<severity> worst; // the most severe finding starting inside it; empty: passed

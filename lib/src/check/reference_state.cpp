@@ -8,6 +8,17 @@
 #include <cmath>
 
 namespace plumb {
+
+bool is_water_column(double si_scale) {
+    static const std::array<double, 2> columns = [] {
+        const unit_table& table = unit_table::standard();
+        return std::array<double, 2>{table.resolve("inH2O")->factor(),
+                                     table.resolve("ftH2O")->factor()};
+    }();
+    return std::any_of(columns.begin(), columns.end(),
+                       [&](double c) { return std::abs(si_scale / c - 1.0) < 1e-9; });
+}
+
 namespace {
 
 const std::array<reference_state, 2>& states() {

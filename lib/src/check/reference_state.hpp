@@ -44,4 +44,8 @@ constexpr std::array<pressure_unit, 7> pressure_units{{
 const reference_state* read_reference_state(const compact_dimension& dim, double value,
                                             std::string_view written, double unit_scale);
 
+// Whether a pressure unit of `si_scale` Pa is a column of water (inH2O, ftH2O): gauges and
+// drops are read in it, and an absolute pressure never is (common practice).
+bool is_water_column(double si_scale);
+
 } // namespace plumb

@@ -625,12 +625,9 @@ class workbook_checker {
         };
         const syntax::reference_value* a = cell(n.lhs);
         const syntax::reference_value* b = cell(n.rhs);
-        const dimension pressure = dimension::base(base_dimension::mass) /
-                                   dimension::base(base_dimension::length) /
-                                   dimension::base(base_dimension::time).pow(rational(2));
-        return a != nullptr && b != nullptr && a->dim && *a->dim == pressure &&
-               a->offset == nullptr && !a->difference && b->offset != nullptr &&
-               b->offset->scale == unit_scale::gauge;
+        return a != nullptr && b != nullptr && b->offset != nullptr &&
+               b->offset->scale == unit_scale::gauge && a->offset == nullptr && !a->difference &&
+               a->dim && *a->dim == b->offset->dim();
     }
 
     bool labelled_a_difference(std::size_t s, cell_address a) const {
@@ -1157,8 +1154,7 @@ class workbook_checker {
         // reading converted into it, or it into a gauge unit, keeps the atmosphere's zero
         // (common practice: gas supply and fan pressures in inches of water are gauge).
         const auto water_column = [](const unit_definition* offset, double scale) {
-            return offset == nullptr && (std::abs(scale / 249.08891 - 1.0) < 1e-9 ||
-                                         std::abs(scale / 2989.06692 - 1.0) < 1e-9);
+            return offset == nullptr && is_water_column(scale);
         };
         const auto on_gauge = [](const unit_definition* offset) {
             return offset != nullptr && offset->scale == unit_scale::gauge;
@@ -1262,12 +1258,11 @@ class workbook_checker {
             // check/trade_constants.hpp): the value is off by the decade within that too.
             // It converts as it stands, so the value shown is off by what the units leave
             // over it ("=cfm*in.w.g./(6356*η)" typed under kW: the 1.341 of hp to kW).
-            if (const std::optional<rational> p = printed_power(x, 1.0))
-                if (const trade_constant* c = trade_constant_for(*p)) {
-                    const double apart = std::abs(x.value / c->exact_conversion.to_double() - 1.0);
-                    printed += apart * std::abs(x.exponent);
-                    trade_conversions *= factor;
-                }
+            if (const trade_constant* c = trade_constant_of(x)) {
+                const double apart = std::abs(x.value / c->exact_conversion.to_double() - 1.0);
+                printed += apart * std::abs(x.exponent);
+                trade_conversions *= factor;
+            }
             if (looks_like_conversion(x, true) || is_time_ratio(x)) {
                 conversions *= factor;
                 doubt += x.tolerance * std::abs(x.exponent);
@@ -1301,10 +1296,9 @@ class workbook_checker {
             // Written to four digits or more, as conversions are (0.5933, 3.517); a 0.87 or a
             // 384 is the formula's own, and the value shown is off by the units alone.
             // Nor a trade's constant (the fan's 6356), which is right where it stands.
-            const std::optional<rational> p = printed_power(x, 1.0);
             if (x.value != 1.0 && x.table_digits && !looks_like_conversion(x, true) &&
                 !is_time_ratio(x) && coefficients.size() < 80 && off != left &&
-                !(p && trade_constant_for(*p) != nullptr))
+                trade_constant_of(x) == nullptr)
                 coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ", text);
         }
         std::optional<std::string> backwards =
@@ -1415,6 +1409,12 @@ class workbook_checker {
 
     // The ratio as a whole number either way (60, 1/3600) where the rounding of the
     // conversions written (5.615 for 5.6146) is all that keeps it from one; else as it is.
+    // The trade's constant a number is printed as (the fan's 6356, water's 8.34), or null.
+    static const trade_constant* trade_constant_of(const scale_literal& x) {
+        const std::optional<rational> printed = printed_power(x, 1.0);
+        return printed ? trade_constant_for(*printed) : nullptr;
+    }
+
     static std::optional<double> whole_within(double ratio, double doubt) {
         if (!(ratio > 0) || !std::isfinite(ratio))
             return std::nullopt;

@@ -498,14 +498,10 @@ void checker::report_reference_on_other_scale(std::uint32_t difference) {
 // 1996; ISO 13788, from memory); beside a kelvin reading the sum is some 273 K off.
 void checker::report_celsius_fit_beside_kelvins(std::uint32_t denominator) {
     denominator = syntax::inside_brackets(file_, denominator);
-    const syntax::expr_node& sum = file_.nodes[denominator];
-    if (sum.kind != expr_kind::add)
+    const auto parts = number_beside_symbol(denominator);
+    if (!parts)
         return;
-    const std::uint32_t number = file_.nodes[sum.lhs].kind == expr_kind::number ? sum.lhs : sum.rhs;
-    const std::uint32_t reading = number == sum.lhs ? sum.rhs : sum.lhs;
-    if (file_.nodes[number].kind != expr_kind::number ||
-        file_.nodes[reading].kind != expr_kind::symbol)
-        return;
+    const auto [number, reading] = *parts;
     const double constant = written_number(file_.nodes[number].range);
     const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
     if (!(constant >= 200.0 && constant <= 260.0) || e == nullptr || e->offset_unit != nullptr ||
@@ -530,14 +526,10 @@ void checker::report_celsius_fit_beside_kelvins(std::uint32_t denominator) {
 void checker::report_celsius_fit_on_other_scale(std::uint32_t denominator,
                                                 const unit_definition& scale) {
     denominator = syntax::inside_brackets(file_, denominator);
-    const syntax::expr_node& sum = file_.nodes[denominator];
-    if (sum.kind != expr_kind::add)
+    const auto parts = number_beside_symbol(denominator);
+    if (!parts)
         return;
-    const std::uint32_t number = file_.nodes[sum.lhs].kind == expr_kind::number ? sum.lhs : sum.rhs;
-    const std::uint32_t reading = number == sum.lhs ? sum.rhs : sum.lhs;
-    if (file_.nodes[number].kind != expr_kind::number ||
-        file_.nodes[reading].kind != expr_kind::symbol)
-        return;
+    const auto [number, reading] = *parts;
     const double constant = written_number(file_.nodes[number].range);
     if (!(constant >= 230.0 && constant <= 260.0))
         return;

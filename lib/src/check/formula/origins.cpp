@@ -165,8 +165,7 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             } else if (const symbol_entry* e = symbols_.find(text(n.range)); e != nullptr) {
                 scale = e->si_factor;
             }
-            return std::abs(scale / 249.08891 - 1.0) < 1e-9 ||
-                   std::abs(scale / 2989.06692 - 1.0) < 1e-9;
+            return is_water_column(scale);
         };
         const auto net_pressure = [&](const operand& o) {
             return o.type.absolute_pressure_difference || declared_pressure_difference(o) ||

@@ -628,19 +628,18 @@ bool checker::report_velocity_from_normal_flow(const operand& side) {
         if (n.kind == expr_kind::power) {
             const std::uint32_t inner = syntax::inside_brackets(file_, n.lhs);
             const syntax::expr_node& in = file_.nodes[inner];
+            // (0.0254*d_in)^2: the conversion written first, as a factor.
+            const bool number_first =
+                in.kind == expr_kind::multiply && file_.nodes[in.lhs].kind == expr_kind::number;
+            const std::uint32_t symbol = number_first ? in.rhs : in.lhs;
+            const std::uint32_t number = number_first ? in.lhs : in.rhs;
             if (in.kind == expr_kind::symbol)
                 base = inner;
             else if ((in.kind == expr_kind::divide || in.kind == expr_kind::multiply) &&
-                     file_.nodes[in.lhs].kind == expr_kind::symbol &&
-                     file_.nodes[in.rhs].kind == expr_kind::number &&
-                     plain_conversion_number(in.rhs))
-                base = in.lhs;
-            // (0.0254*d_in)^2: the conversion written first.
-            else if (in.kind == expr_kind::multiply &&
-                     file_.nodes[in.rhs].kind == expr_kind::symbol &&
-                     file_.nodes[in.lhs].kind == expr_kind::number &&
-                     plain_conversion_number(in.lhs))
-                base = in.rhs;
+                     file_.nodes[symbol].kind == expr_kind::symbol &&
+                     file_.nodes[number].kind == expr_kind::number &&
+                     plain_conversion_number(number))
+                base = symbol;
         }
         // "(V_a + V_n)/(3600*A)": air and fuel gas in Nm³/h added, as if they were the
         // flue gas at its temperature.

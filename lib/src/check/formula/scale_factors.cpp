@@ -9,15 +9,13 @@ namespace plumb::formula_check {
 static std::optional<rational> decade_of_property(const rational& printed,
                                                   const trade_constant& c) {
     try {
-        for (const std::int64_t shift : {1, 1000, 1000000})
-            for (const bool up : {false, true}) {
-                if (shift == 1 && up)
-                    continue;
-                if (shift != 1 && c.least == c.greatest)
+        for (const std::int64_t decade : {1, 1000, 1000000})
+            for (const rational d : {rational(decade), rational(1, decade)}) {
+                if (decade != 1 && c.least == c.greatest)
                     return std::nullopt;
-                const rational scaled = up ? printed / rational(shift) : printed * rational(shift);
-                if (!(scaled < c.least) && !(c.greatest < scaled))
-                    return up ? rational(shift) : rational(1) / rational(shift);
+                if (const rational scaled = printed / d;
+                    !(scaled < c.least) && !(c.greatest < scaled))
+                    return d;
             }
     } catch (const std::exception&) {
         // A printed number too large or too fine for 64-bit fractions is no property.

@@ -128,9 +128,17 @@ bool checker::report_term_left_unconverted(std::span<const operand> ops,
     const std::optional<double> side = unit_the_sum_needs();
     if (!side)
         return false;
-    // Rounded conversions (3.281 for 3.28084) land within a few parts in ten thousand.
+    // Rounded conversions (3.281 for 3.28084) land within a few parts in ten thousand. So does
+    // "1.488*m_lb" in kg/m beside "w_d*1000/{g_n}": 1.488 is lb/ft to kg/m, a ratio of
+    // compound units the table of conversions does not hold, but it lands its term all the
+    // same.
+    const auto lands = [&](double scale) { return std::abs(scale / *side - 1.0) < 1e-3; };
     const auto in_side_unit = [&](std::size_t i) {
-        return std::abs(apparent_scale(parts[i]) / *side - 1.0) < 1e-3;
+        return lands(apparent_scale(parts[i])) ||
+               std::any_of(parts[i].literals.begin(), parts[i].literals.end(),
+                           [&](const scale_literal& l) {
+                               return lands(parts[i].scale / std::pow(l.value, l.exponent));
+                           });
     };
     const auto converts = [&](std::size_t i) {
         return std::abs(apparent_scale(parts[i]) / parts[i].scale - 1.0) > 1e-9;
@@ -143,12 +151,6 @@ bool checker::report_term_left_unconverted(std::span<const operand> ops,
     const std::size_t plain = 1 - converted;
     if (!converts(converted) || converts(plain))
         return false;
-    // "w_d*1000/{g_n} + 1.488*m_lb" in kg/m: 1.488 is lb/ft to kg/m, a ratio of compound
-    // units the table of conversions does not hold, but it lands its term in the side's unit
-    // all the same, so that term is converted too.
-    for (const scale_literal& l : parts[plain].literals)
-        if (std::abs(parts[plain].scale / std::pow(l.value, l.exponent) / *side - 1.0) < 1e-3)
-            return false;
     const operand& odd = ops[index[plain]];
     const operand& reference = ops[index[converted]];
     diagnostic& d = report(
