@@ -1260,3 +1260,78 @@ TEST_CASE("a property's linear fit in a °C reading, and the cubic foot an hour"
     passes(d, {"Q_cfh = 35.31*Q_m3h"});
     fails_with(d, {"Q_cfh = Q_m3h/35.31"}, plumb::rules::unit_scale);
 }
+
+namespace {
+
+// Every note of the first finding under `rule`, joined, for tests that read the advice.
+std::string notes_under(const plumb::check_report& r, std::string_view rule) {
+    std::string all;
+    for (const auto& n : first_under(r, rule).notes)
+        all += n.message + "\n";
+    return all;
+}
+
+} // namespace
+
+// A jack's gauge from a load in kN over a ram in cm²: 1 kN/cm² = 10 MPa = 100 bar (NIST SP 811
+// (2008), B.8: 1 bar = 10⁵ Pa). Written with 10, the number is most likely the conversion
+// mistaken (MPa's habit), though it may be a coefficient: the finding counts both readings
+// and offers both cures.
+TEST_CASE("a power of ten where the units need another one is counted both ways") {
+    const std::string jack = "F_kN : kN\nA_cm2 : cm^2\np_bar : bar\n";
+    passes(jack, {"p_bar = 100*F_kN/A_cm2"});
+    const auto r = run(jack, "p_bar = 10*F_kN/A_cm2");
+    const auto& d = first_under(r, plumb::rules::unit_scale);
+    CHECK(d.message.find("counts 0.1 times as much as 'p_bar' if 10 was meant as the conversion, "
+                         "0.01 times as much if it is a coefficient") != std::string::npos);
+    CHECK(notes_under(r, plumb::rules::unit_scale)
+              .find("if 10 was meant as the conversion, write 100 in its place") !=
+          std::string::npos);
+}
+
+// 0.4085 = (4/π)·0.3208, the velocity in ft/s of a flow in gpm through a bore in inches
+// (common practice; 1 US gal = 231 in³, NIST SP 811 (2008), B.8). With the bore in mm the
+// term is off by 645.16 (25.4² mm² per in²), not by the whole conversion from gpm/mm².
+TEST_CASE("a trade's number with a circle's 4/pi beside a bore in the other system's unit") {
+    const auto r = run(bores, "@velocity-mm V_p = 0.4085*Q_g/d_mm^2");
+    const auto& d = first_under(r, plumb::rules::unit_scale);
+    CHECK(d.message.find("counts 0.00155001 times as much") != std::string::npos);
+    const std::string notes = notes_under(r, plumb::rules::unit_scale);
+    CHECK(notes.find("0.4085 fits these units with 'd_mm' in in") != std::string::npos);
+    CHECK(notes.find("by 645.156") != std::string::npos);
+}
+
+// A wet well's least volume V = Q·T/4 with T = 3600/Z s (common practice): in m³ from L/s and
+// starts per hour it is 0.9·Q/Z, the 3.6 of L/s·h to m³ (SI Brochure 9th ed., Table 8) with the
+// quarter folded in. The warning stands, since 0.9 may be a coefficient, and says both.
+TEST_CASE("a number that holds the conversion with a half or a quarter is said to") {
+    const std::string well = "Q_p : L/s\nZ_s : 1/h\nV_min : m^3\n";
+    const auto r = run(well, "V_min = 0.9*Q_p/Z_s");
+    CHECK(notes_under(r, plumb::rules::unit_scale)
+              .find("0.9 is 0.25 times 3.6, the factor these units need") != std::string::npos);
+    // Q_p/(4*Z_s) has no number that could hold the 3.6: no such note.
+    const auto quarter = run(well, "V_min = Q_p/(4*Z_s)");
+    CHECK(notes_under(quarter, plumb::rules::unit_scale).find("the factor these units need") ==
+          std::string::npos);
+}
+
+// v = ṁ·v_g/(3600·π·D²/4·10⁻⁶) with ṁ in kg/h and D in mm; with v_g from a US table in ft³/lb
+// the term counts 1/0.062428 = 16.0185 times as much (1 ft³/lb = 0.062428 m³/kg, NIST SP 811
+// (2008), B.8). The 4e6 holds the 10⁶ of mm² whether or not the rest agrees.
+TEST_CASE("a folded power of ten is kept in the factor advised when another unit is off") {
+    const std::string feed = "m_c : kg/h\nv_g : m^3/kg\nv_ft : ft^3/lb\nD_p : mm\nv_p : m/s\n";
+    passes(feed, {"v_p = m_c*v_g/(3600*pi*D_p^2/4e6)"});
+    const auto r = run(feed, "v_p = m_c*v_ft/(3600*pi*D_p^2/4e6)");
+    CHECK(first_under(r, plumb::rules::unit_scale).message.find("counts 16.0185 times as much") !=
+          std::string::npos);
+}
+
+// The complement of a percentage over 100, (100 − y)/100, is a fraction as y/100 is (SI
+// Brochure 9th ed., 5.4.7: % = 0.01); its 100 below is not a second conversion.
+TEST_CASE("the complement of a percentage over 100 is a fraction") {
+    const std::string gas = "x, y : %\nQ_N, Q_p, Q_c : m^3/h\n";
+    passes(gas, {"Q_c = (100 - y)/100*Q_p", "Q_c = x/100*Q_N - (100 - y)/100*Q_p",
+                 "Q_c = x/100*Q_N - (1 - y/100)*Q_p"});
+    fails_with(gas, {"Q_c = (100 - y)*Q_p", "Q_c = x*Q_N - (100 - y)/100*Q_p"},
+               plumb::rules::unit_scale);
+}

@@ -761,3 +761,12 @@ TEST_CASE("a number typed in kelvins beside a °C reading in a fit") {
         CHECK(plumb::test::problems_in(plumb::test::check_after(decl, right)) == 0);
     }
 }
+
+// A vacuum pump's isothermal power p·V̇·ln(p_b/p): the gas law's pressure is absolute (Perry's,
+// 8th ed., sec. 10, isothermal compression, from memory). A gauge reading there is the slip,
+// though p_g·Q alone into a power reads as a pump's hydraulic power (common practice).
+TEST_CASE("a gauge reading in an isothermal compression's power is reported") {
+    const std::string vacuum = "p_g : kPag\np_b, p_abs : kPa\nS_p : m^3/h\nP : kW\nQ : m^3/s\n";
+    passes(vacuum, {"P = (p_g + p_b)*S_p/3600*ln(p_b/(p_g + p_b))", "P = p_g*Q"});
+    fails_with(vacuum, {"P = p_g*S_p/3600*ln(p_b/p_abs)"}, plumb::rules::offset_scale);
+}

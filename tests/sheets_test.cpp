@@ -721,3 +721,22 @@ TEST_CASE("sheets: inches of water spelled the meter trade's ways read as inH2O"
         CHECK(unit->scale == doctest::Approx(249.08891).epsilon(1e-9));
     }
 }
+
+// A mean of readings weighted by tonnage, =SUMPRODUCT(w,T)/SUM(w): the weights sum to one, so
+// the °C scale's zero cancels as in (q_h·T_h + q_c·T_c)/(q_h + q_c) (common practice). The
+// mean is a reading on the °C scale; set under K it is the zero's slip, and SUMPRODUCT alone
+// multiplies readings.
+TEST_CASE("sheets: a weighted mean of readings by SUMPRODUCT over SUM") {
+    const std::string sheet = "<worksheet><sheetData>" + value_and_unit_row(2, "40", "t") +
+                              value_and_unit_row(3, "60", "t") + value_and_unit_row(4, "18", "°C") +
+                              value_and_unit_row(5, "24", "°C") +
+                              value_and_unit_row(6, "=SUMPRODUCT(B2:B3,B4:B5)/SUM(B2:B3)", "°C") +
+                              value_and_unit_row(7, "=SUMPRODUCT(B4:B5,B2:B3)/SUM(B2:B3)", "K") +
+                              value_and_unit_row(8, "=SUMPRODUCT(B2:B3,B4:B5)/SUM(B4:B5)", "°C") +
+                              "</sheetData></worksheet>";
+    const auto found = cell_findings_of_one_sheet("Crush", sheet);
+    CHECK(std::none_of(found.begin(), found.end(),
+                       [](const std::string& f) { return f.rfind("Crush!B6 ", 0) == 0; }));
+    CHECK(std::find(found.begin(), found.end(), "Crush!B7 offset-scale") != found.end());
+    CHECK(std::find(found.begin(), found.end(), "Crush!B8 offset-scale") != found.end());
+}

@@ -743,7 +743,7 @@ class checker {
     std::optional<std::string> coefficient_for_other_unit(const operand& term,
                                                           const operand& other_term,
                                                           const scale_literal& number,
-                                                          double needed) const;
+                                                          double needed, double& folded) const;
     std::optional<declared_factor> declared_factor_of(std::uint32_t k, double exponent) const;
     std::optional<std::pair<std::uint32_t, declared_factor>> declared_factor_at(std::uint32_t at,
                                                                                 int sign) const;
@@ -1136,6 +1136,8 @@ class checker {
     bool spare_speed_ratio(const scale_literal& l, std::uint32_t term) const;
     bool spare_degree_ratio(const scale_literal& l, std::uint32_t term) const;
     static bool is_power_trade_constant(double written);
+    std::optional<std::string> folded_conversion_note(const scaled_operand& odd,
+                                                      double ratio) const;
     bool densities_of_water_and_air(const scaled_operand& odd, const scaled_operand& reference,
                                     double ratio);
 
@@ -1284,7 +1286,7 @@ class checker {
                                            std::uint32_t denominator) const;
     bool number_beside_one_cell(std::uint32_t node) const;
     [[gnu::noinline]] void settle_percent_divisor(typed_term& result, const typed_term& factor,
-                                                  const syntax::expr_node& op) const;
+                                                  const syntax::expr_node& op);
     std::optional<std::pair<std::uint32_t, std::uint32_t>>
     number_beside_symbol(std::uint32_t k) const;
     [[gnu::noinline]] void note_bare_fit_on_scale(std::uint32_t denominator);
@@ -1315,6 +1317,7 @@ class checker {
 
     // check/formula/means.cpp
     [[gnu::noinline]] std::optional<typed_term> weighted_mean(std::uint32_t index);
+    [[gnu::noinline]] std::optional<typed_term> sheet_weighted_mean(std::uint32_t index);
     [[gnu::noinline]] typed_term eval_mix_or_sum(std::uint32_t index);
     bool mixing_shape(const syntax::expr_node& n) const;
     bool one_less_weights(const syntax::expr_node& group) const;

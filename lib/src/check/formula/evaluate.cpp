@@ -1099,7 +1099,18 @@ typed_term checker::eval_factors(std::uint32_t index) {
         // adds times the flow, and from a vented tank that is the outlet's gauge reading
         // (common practice).
         // Only set equal to a power: "F*p_g/100" into scfm is a pressure ratio.
-        const bool hydraulic_power = result.known && result.dim == power_dim &&
+        // Not beside a logarithm: p*V̇*ln(p_2/p_1) is a gas's isothermal compression,
+        // which takes the absolute pressure.
+        const bool gas_compression =
+            result.known && result.dim == power_dim &&
+            for_each_factor(index, [&](std::uint32_t at, int) {
+                const syntax::expr_node& f = file_.nodes[at];
+                if (f.kind != expr_kind::call)
+                    return false;
+                const std::string_view name = text(call_name_range(f));
+                return name == "ln" || name == "LN" || name == "log" || name == "LOG";
+            });
+        const bool hydraulic_power = result.known && result.dim == power_dim && !gas_compression &&
                                      index == side_hint_node_ && side_hint_ != nullptr &&
                                      side_hint_->known && side_hint_->dim == power_dim &&
                                      has_factor_of_dimension(index, volume_flow_dim, 1);
@@ -1123,7 +1134,7 @@ typed_term checker::eval_factors(std::uint32_t index) {
                      {}});
             // ṁ/ρ*p_g into a power: a pump's power takes the pressure it adds, which a gauge
             // gives alone only where the suction is open to the atmosphere.
-            else if (result.known && result.dim == power_dim)
+            else if (result.known && result.dim == power_dim && !gas_compression)
                 out_.back().notes.insert(
                     out_.back().notes.begin(),
                     {"if a pump's or a fan's power was meant, it takes the pressure it adds, "
@@ -1167,6 +1178,11 @@ typed_term checker::eval_product(std::uint32_t index) {
     if (file_.nodes[index].kind == expr_kind::divide &&
         file_.nodes[file_.nodes[index].lhs].kind == expr_kind::group) [[unlikely]]
         if (const auto mean = weighted_mean(index))
+            return *mean;
+    if (file_.functions == syntax::function_names::spreadsheet &&
+        file_.nodes[index].kind == expr_kind::divide &&
+        file_.nodes[file_.nodes[index].lhs].kind == expr_kind::call) [[unlikely]]
+        if (const auto mean = sheet_weighted_mean(index))
             return *mean;
     const auto literals_before = static_cast<std::uint32_t>(literals_.size());
     typed_term t = eval_factors(index);

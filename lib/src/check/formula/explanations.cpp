@@ -273,10 +273,15 @@ std::optional<declared_factor> checker::declared_factor_of(std::uint32_t k, doub
 // symbol is read in the other system's unit (6356 is for inches of water). Said so, where
 // the advice alone would divide by 1.58 × 10⁶ and leave the symbol in the unit it was not
 // written for.
+// "V_fps = 0.4085*Q_gpm/D_mm^2": the trade's number may fold a circle's 4/π into the
+// conversion (0.4085 = 4/π × 0.3208 for gpm over in² to ft/s; common practice); `folded` is then
+// 4/π (or π/4), the part of the number that is the formula's own.
 std::optional<std::string> checker::coefficient_for_other_unit(const operand& term,
                                                                const operand& other_term,
                                                                const scale_literal& number,
-                                                               double needed) const {
+                                                               double needed,
+                                                               double& folded) const {
+    folded = 1.0;
     const double written = std::pow(number.value, number.exponent);
     if (!(written > 0) || !std::isfinite(written) || !(needed > 0) || !std::isfinite(needed))
         return std::nullopt;
@@ -299,8 +304,13 @@ std::optional<std::string> checker::coefficient_for_other_unit(const operand& te
             for (const unit_counterpart& other : units.others) {
                 const double swapped = needed * std::pow(other.si_scale / factor.si_scale,
                                                          direction * factor.exponent);
-                if (std::abs(written / swapped - 1.0) > within)
+                double fold = 1.0;
+                for (const double circle : {1.0, 4.0 / std::numbers::pi, std::numbers::pi / 4.0})
+                    if (std::abs(written / (swapped * circle) - 1.0) <= within)
+                        fold = circle;
+                if (std::abs(written / (swapped * fold) - 1.0) > within)
                     continue;
+                folded = fold;
                 ambiguous = found_other != nullptr;
                 found_node = base;
                 found_declared = factor.unit_text.empty() ? units.declared : factor.unit_text;

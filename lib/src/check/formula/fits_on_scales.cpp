@@ -190,7 +190,7 @@ bool checker::number_beside_one_cell(std::uint32_t node) const {
 // a sum in % that the sum starts with ("21/(21 - O2)") is in % too, as is one among the
 // product's factors (see carries_number_of_sum).
 void checker::settle_percent_divisor(typed_term& result, const typed_term& factor,
-                                     const syntax::expr_node& op) const {
+                                     const syntax::expr_node& op) {
     // "(53 - C_v)/53" with C_v in % (Arterburn's solids correction, from memory): a sum
     // in % over the number it starts with is a ratio of two percentages too.
     if (factor.numeric && result.known && !result.numeric && result.scale == 0.01 &&
@@ -198,6 +198,14 @@ void checker::settle_percent_divisor(typed_term& result, const typed_term& facto
         (oxygen_share_of_air(op.rhs) || same_number_over_its_sum(op.rhs, op.lhs))) {
         result.scale = 1.0;
         result.exact_scale = rational(1);
+        // "(100 - y_CH4)/100*Q_p": the 100 below is a percentage too, not the conversion
+        // from % that "x/100" holds, and no rule may count it as one a second time.
+        const std::uint32_t divisor = syntax::inside_brackets(file_, op.rhs);
+        for (std::size_t i = literals_.size(); i > 0; --i)
+            if (literals_[i - 1].node == divisor) {
+                read_as_quantity(literals_[i - 1]);
+                break;
+            }
         return;
     }
     if (factor.scale == 1.0 || factor.numeric || !factor.known || !factor.dim.is_dimensionless())

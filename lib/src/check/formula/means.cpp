@@ -186,4 +186,33 @@ std::optional<typed_term> checker::mixing_mean(std::uint32_t index) {
     return reading;
 }
 
+// "=SUMPRODUCT(C6:C9,D6:D9)/SUM(C6:C9)": a workbook's mean of readings (°C cells) weighted by
+// another range, over the sum of those weights. Its weights sum to one, so the scale's zero
+// cancels as in (q_h*T_h + q_c*T_c)/(q_h + q_c): the result is a reading on the same scale.
+std::optional<typed_term> checker::sheet_weighted_mean(std::uint32_t index) {
+    const syntax::expr_node& n = file_.nodes[index];
+    const syntax::expr_node& top = file_.nodes[n.lhs];
+    const syntax::expr_node& below = file_.nodes[syntax::inside_brackets(file_, n.rhs)];
+    if (top.kind != expr_kind::call || top.rhs != 2 || below.kind != expr_kind::call ||
+        below.rhs != 1 || text(call_name_range(top)) != "SUMPRODUCT" ||
+        text(call_name_range(below)) != "SUM")
+        return std::nullopt;
+    const std::uint32_t weights = syntax::inside_brackets(file_, file_.call_args[below.lhs]);
+    for (std::uint32_t i = 0; i < 2; ++i) {
+        const std::uint32_t reading = syntax::inside_brackets(file_, file_.call_args[top.lhs + i]);
+        const std::uint32_t weight =
+            syntax::inside_brackets(file_, file_.call_args[top.lhs + 1 - i]);
+        if (file_.nodes[reading].kind != expr_kind::reference ||
+            file_.nodes[weight].kind != expr_kind::reference ||
+            text(file_.nodes[weight].range) != text(file_.nodes[weights].range))
+            continue;
+        const syntax::reference_value& r = file_.references[file_.nodes[reading].lhs];
+        const syntax::reference_value& w = file_.references[file_.nodes[weight].lhs];
+        if (r.offset == nullptr || !r.dim || !w.dim || w.offset != nullptr)
+            continue;
+        return eval(reading);
+    }
+    return std::nullopt;
+}
+
 } // namespace plumb::formula_check

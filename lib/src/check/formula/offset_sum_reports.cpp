@@ -244,11 +244,15 @@ std::optional<std::string_view> checker::barometer_in_unit(double unit) const {
                                   description.find("drop") != std::string_view::npos;
         // Named for it, or described as the barometer or the atmospheric pressure; not a
         // pressure described as some reading "plus the atmosphere".
-        const bool barometer = names_the_atmosphere(name, {}) ||
-                               description.find("barometr") != std::string_view::npos ||
+        // Not a name alone where the words call it some other pressure ("P_atm : atm
+        // "saturator pressure, absolute, in atmospheres"").
+        const bool described = description.find("barometr") != std::string_view::npos ||
                                description.find("barometer") != std::string_view::npos ||
                                description.find("atmospheric pressure") != std::string_view::npos ||
                                description.find("ambient pressure") != std::string_view::npos;
+        const bool barometer =
+            described || (names_the_atmosphere(name, {}) &&
+                          description.find("pressure") == std::string_view::npos);
         if (dim && *dim == pressure_dimension() && barometer && !differential &&
             description.find("standard") == std::string_view::npos &&
             description.find("gauge") == std::string_view::npos &&

@@ -2,6 +2,8 @@
 // numbers written into them are read as conversions.
 #include "check/formula/checker.hpp"
 
+#include <charconv>
+
 namespace plumb::formula_check {
 
 // A number as written, read as a double: "0.5886", "1055", "2.31".
@@ -366,14 +368,36 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         return is_time_ratio(l) && !looks_like_conversion(l, true) &&
                file_.nodes[l.node].kind == expr_kind::number;
     };
+    // "m*v/(3600*pi*D_mm^2/4e6)": a circle's 4 folded into the 10⁶ of mm² to m², as the
+    // scales' search reads it where the units agree; the factor advised keeps the 10⁶.
+    const auto folded_power = [&](const scale_literal& l) {
+        if (file_.nodes[l.node].kind != expr_kind::number || l.power_of_ten)
+            return 0;
+        const std::string_view written = text(file_.nodes[l.node].range);
+        const std::size_t e = written.find_first_of("eE");
+        if (e != 1 || written[0] < '2' || written[0] > '9')
+            return 0;
+        int power = 0;
+        const auto [end, error] =
+            std::from_chars(written.data() + e + 1, written.data() + written.size(), power);
+        return error == std::errc() && end == written.data() + written.size() &&
+                       std::abs(power) >= 2 && std::abs(power) <= 12
+                   ? power
+                   : 0;
+    };
     if (!clean)
         for (const std::size_t side : {r.odd, r.reference})
-            for (const scale_literal& l : parts[side].literals)
-                if (clock_ratio(l)) {
-                    const double f = std::pow(l.value, l.exponent);
+            for (const scale_literal& l : parts[side].literals) {
+                double f = 1.0;
+                if (clock_ratio(l))
+                    f = std::pow(l.value, l.exponent);
+                else if (const int power = folded_power(l); power != 0)
+                    f = std::pow(10.0, power * l.exponent);
+                if (f != 1.0) {
                     ratio = side == r.odd ? ratio * f : ratio / f;
                     exact_ratio.reset();
                 }
+            }
     if (!clean) {
         const scale_literal* coefficient = nullptr;
         for (const std::size_t side : {r.odd, r.reference})
@@ -396,10 +420,14 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         // need with one symbol in the other system's unit. It is counted as the conversion
         // it is, so that the factor advised keeps it.
         if (coefficient_count == 1 && std::abs(written / needed - 1.0) > 0.05) {
-            other_unit_note = coefficient_for_other_unit(
-                on_odd_side ? op : reference, on_odd_side ? reference : op, *coefficient, needed);
+            double folded = 1.0;
+            other_unit_note = coefficient_for_other_unit(on_odd_side ? op : reference,
+                                                         on_odd_side ? reference : op, *coefficient,
+                                                         needed, folded);
             if (other_unit_note) {
-                const double as_factor = std::pow(coefficient->value, coefficient->exponent);
+                // The conversion in the number, without the circle's 4/π it may fold in.
+                const double as_factor =
+                    std::pow(coefficient->value, coefficient->exponent) / folded;
                 ratio = on_odd_side ? ratio * as_factor : ratio / as_factor;
                 exact_ratio.reset();
             }
@@ -432,8 +460,14 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         for (const int k : {2, 3, 4})
             if (std::abs(in_place / std::pow(written, k) - 1.0) < 2e-3 * k)
                 power_of_ratio = k;
-    const bool counted_both_ways =
-        (in_place_offered && is_power_trade_constant(written)) || power_of_ratio != 0;
+    // "p_bar = 10*F_kN/A_cm2": a power of ten where these units need another one (1 kN/cm²
+    // is 100 bar) is most likely the conversion mistaken, but may be a coefficient; the finding
+    // is counted both ways, as for a trade's constant.
+    const bool power_for_power =
+        one_coefficient && written != in_place && near_power_of_ten(written, 1e-12) &&
+        near_power_of_ten(in_place, 1e-9) && std::abs(std::log10(in_place / written)) > 0.5;
+    const bool counted_both_ways = (in_place_offered && is_power_trade_constant(written)) ||
+                                   power_of_ratio != 0 || power_for_power;
     const std::string in_place_text =
         power_of_ratio != 0
             ? fmt::format("{}^{} ({})", coefficients, power_of_ratio, format_factor(in_place))
@@ -481,6 +515,11 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                                        "these units need",
                                        coefficients),
                            {}});
+    // "V_min = 0.9*Q_p/Z_s" (m³ from L/s over starts per hour): 0.9 is the 3.6 these units
+    // need with a wet well's quarter cycle folded in (Q·T/4; common practice). Either reading
+    // may be meant, so the warning stands and says both.
+    if (std::optional<std::string> folded = folded_conversion_note(parts[r.odd], ratio))
+        d.notes.push_back({std::move(*folded), {}});
     // "divide by 3.28084 (1/0.3048)" reads better as "multiply by 0.3048".
     bool multiply = ratio < 1;
     std::string factor =
@@ -612,6 +651,34 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                                            *hours),
                                {}});
     return false;
+}
+
+// "V_min = 0.9*Q_p/Z_s": the one plain number of a term that is off by `ratio` may be the
+// conversion these units need (1/ratio) with a half, a quarter, a double or a quadruple of
+// the formula's own folded in (m·v²/2, Q·T/4, π·D²/4). The note that says so, if it is.
+std::optional<std::string> checker::folded_conversion_note(const scaled_operand& odd,
+                                                           double ratio) const {
+    static constexpr std::array<double, 4> folded_parts{0.5, 0.25, 2.0, 4.0};
+    const scale_literal* number = nullptr;
+    for (const scale_literal& l : odd.literals) {
+        if (file_.nodes[l.node].kind != expr_kind::number || looks_like_conversion(l, true))
+            continue;
+        if (number != nullptr || std::abs(l.exponent) != 1.0)
+            return std::nullopt;
+        number = &l;
+    }
+    if (number == nullptr)
+        return std::nullopt;
+    const double conversion = 1.0 / ratio;
+    const double part = std::pow(number->value, number->exponent) / conversion;
+    if (!std::isfinite(part) || !(part > 0) || near_power_of_ten(conversion, 1e-9) ||
+        std::none_of(folded_parts.begin(), folded_parts.end(),
+                     [&](double k) { return std::abs(part / k - 1.0) < 2e-3; }))
+        return std::nullopt;
+    return fmt::format("{} is {} times {}, the factor these units need: if it holds that "
+                       "conversion with the formula's own {}, no factor is missing",
+                       text(file_.nodes[number->node].range), format_factor(part),
+                       format_factor(conversion), format_factor(part));
 }
 
 // "LG = 8.34*Q_gpm/(0.075*V_cfm)", a cooling tower's liquid-to-gas ratio: water's 8.34 lb/gal
