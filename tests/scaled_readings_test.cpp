@@ -770,3 +770,18 @@ TEST_CASE("a gauge reading in an isothermal compression's power is reported") {
     passes(vacuum, {"P = (p_g + p_b)*S_p/3600*ln(p_b/(p_g + p_b))", "P = p_g*Q"});
     fails_with(vacuum, {"P = p_g*S_p/3600*ln(p_b/p_abs)"}, plumb::rules::offset_scale);
 }
+
+// A membrane's driving force, the difference of CO2 partial pressures x·p_feed − y·p_permeate:
+// partial pressures are shares of absolute pressures (Dalton's law; Perry's, 8th ed., sec. 2,
+// from memory). A share of a gauge reading beside a share of an absolute one leaves the
+// atmosphere's share out; the same share of the gauge reading plus the barometer does not.
+TEST_CASE("a share of a gauge reading beside a share of an absolute pressure") {
+    const std::string membrane = "p_g : bar(g)\np_a, p_b : bar\n\u0394p : bar\nf, y : 1\nx : %\n";
+    fails_with(membrane, {"\u0394p = x/100*p_g - y*p_a", "\u0394p = f*p_g - f*p_a"},
+               plumb::rules::offset_scale);
+    passes(membrane, {"\u0394p = x/100*(p_g + p_b) - y*p_a", "\u0394p = f*p_g - \u0394p"});
+    const auto r = run(membrane, "\u0394p = x/100*p_g - y*p_a");
+    CHECK(first_under(r, plumb::rules::offset_scale)
+              .message.find("partial pressures count from "
+                            "vacuum") != std::string::npos);
+}

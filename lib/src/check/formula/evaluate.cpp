@@ -717,6 +717,12 @@ typed_term checker::eval_sum(std::uint32_t index) {
     }
     if (result.dim == pressure_dimension() && terms.size() <= 4) [[unlikely]]
         report_barometer_added_to_absolute(terms);
+    if (offset_term != nullptr && result.dim == pressure_dimension() && terms.size() <= 4 &&
+        report_share_of_gauge_beside_absolute(terms)) [[unlikely]] {
+        cut_literals_to(literal_base);
+        result = unknown_type();
+        return result; // as above
+    }
     if (offset_term != nullptr) {
         // "p_kPa = p_bar_g + p_b_kPa": the other side says which term is off here too.
         sum_side_hint_ = index == side_hint_node_ ? side_hint_ : nullptr;

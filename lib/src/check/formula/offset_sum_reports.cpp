@@ -650,4 +650,67 @@ void checker::report_barometer_added_to_absolute(std::span<const operand> terms)
                        {}});
 }
 
+// "Δp_CO2 = x_CO2/100*p_2g - y_CO2/100*p_pa": shares of two pressures, one a gauge reading and
+// one absolute, are partial pressures (Dalton's law), which count from vacuum: the gauge's
+// share leaves out the atmosphere's. Reported where each term is a share (a dimensionless
+// symbol, a percentage) of one pressure reading; a gauge reading scaled alone, less a drop, is
+// left to the sum's rules.
+bool checker::report_share_of_gauge_beside_absolute(std::span<const operand> terms) {
+    const operand* gauge_share = nullptr;
+    const operand* absolute_share = nullptr;
+    const symbol_entry* gauge = nullptr;
+    for (const operand& t : terms) {
+        const std::uint32_t node = syntax::inside_brackets(file_, t.node);
+        const expr_kind kind = file_.nodes[node].kind;
+        if (kind != expr_kind::multiply && kind != expr_kind::divide)
+            continue;
+        bool share = false;
+        const symbol_entry* reading = nullptr;
+        const bool other = for_each_factor(node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number)
+                return false;
+            const symbol_entry* e =
+                n.kind == expr_kind::symbol ? symbols_.find(text(n.range)) : nullptr;
+            if (e == nullptr || !e->compact_dim)
+                return true;
+            if (sign > 0 && e->compact_dim->is_dimensionless() && e->offset_unit == nullptr) {
+                share = true;
+                return false;
+            }
+            if (sign > 0 && reading == nullptr && *e->compact_dim == pressure_dimension() &&
+                (e->offset_unit != nullptr || e->reading == 1)) {
+                reading = e;
+                return false;
+            }
+            return true;
+        });
+        if (other || !share || reading == nullptr)
+            continue;
+        if (reading->offset_unit != nullptr) {
+            gauge_share = &t;
+            gauge = reading;
+        } else {
+            absolute_share = &t;
+        }
+    }
+    if (gauge_share == nullptr || absolute_share == nullptr)
+        return false;
+    diagnostic& d = report(
+        rules::offset_scale,
+        fmt::format("{} is a share of a reading on the {} scale beside {}, a share of an absolute "
+                    "pressure: partial pressures count from vacuum, and the gauge's share leaves "
+                    "the atmosphere's out",
+                    quote(gauge_share->node), gauge->offset_unit->symbol,
+                    quote(absolute_share->node)),
+        file_.nodes[gauge_share->node].range);
+    add_term(d, *gauge_share, true);
+    add_term(d, *absolute_share);
+    d.notes.push_back(
+        {"a partial pressure is a share of the absolute pressure (Dalton's law): take the share "
+         "of the gauge reading plus the site's barometer",
+         {}});
+    return true;
+}
+
 } // namespace plumb::formula_check
