@@ -270,3 +270,35 @@ TEST_CASE("a velocity from a standard flow over an area whose diameter is conver
                 "v = Q_S/(86400*pi*(0.001*D_mm)^2/4)"},
                plumb::rules::unit_scale);
 }
+
+// 14.5 psi per bar (14.5038, NIST SP 811 (2008), B.8) turns an absolute reading in bar into psia
+// already; the site's barometer typed in psi (0.950 bar = 13.78 psi) added to it counts the
+// atmosphere twice, as 14.7 did.
+TEST_CASE("the site's barometer in psi added to a converted absolute reading") {
+    const std::string header = "p_bb : bar \"site barometric pressure, 0.950 bar\"\n"
+                               "p_a : bar a \"header pressure, absolute\"\n"
+                               "p_g : bar(g) \"header pressure on the gauge\"\n"
+                               "p_psia : psia \"header pressure, absolute\"\n";
+    const auto r = plumb::test::check_after(header, "p_psia = 14.5*p_a + 13.78");
+    CHECK(plumb::test::first_under(r, plumb::rules::offset_scale)
+              .message.find("13.78 is the site's barometer 'p_bb' in psi") != std::string::npos);
+    plumb::test::each_passes(header, {"p_psia = 14.5*p_g + 13.78"});
+}
+
+// A vacuum counts down from the atmosphere: p_abs = p_atm − vacuum (3.386 kPa per inHg, NIST SP
+// 811 (2008), B.8). With the standard atmosphere and no site barometer declared the line holds;
+// where the file declares the site's barometer, the sea level's 101.325 is the slip.
+TEST_CASE("the atmosphere a vacuum counts down from") {
+    const std::string vacuum = "v_op : inHg \"plant operating vacuum below the barometer\"\n"
+                               "p_abs : kPa \"plant pressure, absolute\"\n";
+    const auto plain = plumb::test::check_after(vacuum, "p_abs = 101.325 - 3.386*v_op");
+    CHECK(plumb::test::problems_in(plain) == 0);
+    CHECK(plumb::test::count_of(plain, plumb::rules::trade_constant) == 1);
+    const std::string site = vacuum + "p_b : kPa \"site barometric pressure, 97.5 kPa\"\n";
+    plumb::test::each_passes(site, {"p_abs = p_b - 3.386*v_op", "p_abs = 97.5 - 3.386*v_op"});
+    plumb::test::each_fails_with(site, {"p_abs = 101.325 - 3.386*v_op"},
+                                 plumb::rules::offset_scale);
+    // An absolute reading converted, with the atmosphere added: still the atmosphere twice.
+    plumb::test::each_fails_with(vacuum + "p_x : inHg \"absolute pressure\"\n",
+                                 {"p_abs = 101.325 + 3.386*p_x"}, plumb::rules::offset_scale);
+}

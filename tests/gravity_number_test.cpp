@@ -1264,3 +1264,34 @@ TEST_CASE("the count of periods is not named where the other side is counted per
         for (const auto& n : d.notes)
             CHECK(n.message.find("is counted per") == std::string::npos);
 }
+
+// The water rule's 500 is Btu/h per gpm·°F (8.33 lb/gal × 60 min/h × 1 Btu/(lb·°F); ASHRAE
+// Fundamentals, common practice). Beside a flow in gal/h it is still water's heat capacity, 60
+// times too much: the scale rule names the 60 rather than a dimension that differs.
+TEST_CASE("the water rule's 500 beside a flow per hour") {
+    const std::string booster =
+        "Q_gph : gal/h\nQ_gpm : gpm\n\u0394T_F : \u0394\u00B0F\nq : Btu/h\n";
+    passes(booster, {"q = 500*Q_gpm*\u0394T_F", "q = 8.33*Q_gph*\u0394T_F"});
+    const auto r = plumb::test::check_after(booster, "q = 500*Q_gph*\u0394T_F");
+    CHECK(count_of(r, plumb::rules::trade_constant) == 1);
+    CHECK(plumb::test::first_under(r, plumb::rules::unit_scale)
+              .message.find("counts 60 times as much") != std::string::npos);
+}
+
+// 0.433 psi/ft is water's weight per foot of column (62.4 lbf/ft³ over 144 in²/ft²; common
+// practice): g is in it. Beside a density the slip is the density, and the note says so rather
+// than asking for a g.
+TEST_CASE("water's gradient beside a density is no missing g") {
+    const std::string column = "\u0394p : psi\n\u03C1_w : lb/ft^3\nL : ft\nSG : 1\n";
+    passes(column, {"\u0394p = 0.433*SG*L"});
+    const auto r = plumb::test::check_after(column, "\u0394p = 0.433*\u03C1_w*L");
+    const auto& d = plumb::test::first_under(r, plumb::rules::side_mismatch);
+    const bool density_named = std::any_of(d.notes.begin(), d.notes.end(), [](const auto& n) {
+        return n.message.find("water's weight per unit depth") != std::string::npos;
+    });
+    const bool g_asked = std::any_of(d.notes.begin(), d.notes.end(), [](const auto& n) {
+        return n.message.find("is a g missing") != std::string::npos;
+    });
+    CHECK(density_named);
+    CHECK_FALSE(g_asked);
+}

@@ -13,6 +13,8 @@ W1422 = ("a note on a correct cell: 1.422 psi per m of water read as the specifi
          "water, which it is (9.80665 kPa/m / 6.894757 kPa/psi, NIST SP 811 (2008) App. B.8)")
 EXTRA = {
     "hotel-dhw-recovery": [
+        ("a note on a planted cell, beside its error: 500 read as water's heat capacity per "
+         "gpm, which it is; beside gal/h the scale rule names the 60", "DHW!C34 trade-constant"),
         ("a note on a correct cell: 8.33 read as ρ_w·c_p,w in Btu/(h·(US gal/h)·°F), which it "
          "is (8.33 lb/US gal × 1 Btu/(lb·°F), common practice)", "DHW!C35 trade-constant"),
         ("a note on a correct cell: 500 read as ρ_w·c_p,w in Btu/(h·gpm·°F), which it is "
@@ -51,9 +53,6 @@ MISSED = {}
 
 RENAMED = {
     "hotel-dhw-recovery": {
-        "DHW!C34": ("result-unit", "the 500 is water's heat capacity per gpm, not per gal/h, "
-                                   "so the cell's side differs in dimension; a hint that in "
-                                   "gal/h the number is 8.33 would say it better"),
     },
     "rice-column-dryer": {
         "Dryer!C52": ("sum-mismatch", "with a good message: 32 is the scales' offset and a "

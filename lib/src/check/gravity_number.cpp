@@ -611,8 +611,11 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // printed to 2 % or finer: a 1 or a 2 fits some quantity with almost any
                     // factor, and so do numbers taken with a 3600 or a 1.8.
                     double left_out = std::abs(shift) <= 9.0 ? std::pow(10.0, shift) : 1.0;
+                    // The water rule's 500 (Btu/h per gpm·°F; ASHRAE Fundamentals, common
+                    // practice) is printed so by the trade, not rounded to its hundreds.
+                    const bool printed_rule = number.value == 500.0 && texts[at] == "500";
                     if (clock_units != 0 && powers_of_ten_only && !flipped &&
-                        half_unit <= 0.02 * number.value)
+                        (half_unit <= 0.02 * number.value || printed_rule))
                         for (const factor_left_out& factor : unit_factors_left_out) {
                             if ((factor.units & clock_units) == 0)
                                 continue;

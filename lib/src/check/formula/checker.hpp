@@ -1114,6 +1114,7 @@ class checker {
                                                                       double& unit) const;
     static bool said_absolute(const symbol_entry& e);
     [[gnu::noinline]] void report_barometer_added_to_absolute(std::span<const operand> terms);
+    bool names_a_vacuum(std::uint32_t node) const;
     [[gnu::noinline]] bool report_share_of_gauge_beside_absolute(std::span<const operand> terms);
     std::optional<double> unit_the_sum_needs() const;
     bool report_term_left_unconverted(std::span<const operand> ops,

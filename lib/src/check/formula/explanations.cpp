@@ -148,7 +148,24 @@ void checker::note_acceleration_or_density_apart(diagnostic& d, std::span<const 
         return;
     try {
         const std::string odd = quote(ops[a.odd.front()].node);
-        if (*apart == acceleration_dimension() || *apart == acceleration_dimension().pow(-1))
+        // "Δp = 0.433*ρ_w*L" in psi: 0.433 psi/ft is water's weight per foot of column, g and
+        // all (62.4 lbf/ft³ over 144 in²/ft²; 9.81 kPa/m; common practice), so the slip beside
+        // a density is the density, not a g.
+        const typed_term& odd_type = ops[a.odd.front()].type;
+        const scale_literal* gradient = nullptr;
+        for (std::uint32_t k = 0; k < odd_type.literal_count; ++k)
+            if (const scale_literal& l = literals_[odd_type.literal_begin + k];
+                l.exponent == 1.0 && (l.value == 0.433 || l.value == 0.4335 || l.value == 9.81 ||
+                                      l.value == 0.0981 || l.value == 62.4))
+                gradient = &l;
+        if (*apart == acceleration_dimension() && gradient != nullptr)
+            d.notes.push_back(
+                {fmt::format("{} holds {}, water's weight per unit depth (0.433 psi/ft, 9.81 "
+                             "kPa/m), g included: beside a density the density is the slip, "
+                             "not a missing g; write it times a specific gravity",
+                             odd, text(file_.nodes[gradient->node].range)),
+                 {}});
+        else if (*apart == acceleration_dimension() || *apart == acceleration_dimension().pow(-1))
             d.notes.push_back(
                 {fmt::format("{} differs from the rest by exactly an acceleration: {}", odd,
                              *apart == acceleration_dimension()

@@ -132,6 +132,20 @@ bool checker::holds_absolute_pressure(std::uint32_t term) const {
     });
 }
 
+// Whether a term is a vacuum reading (a factor whose name or description says "vacuum"),
+// which counts down from the atmosphere rather than up from vacuum.
+bool checker::names_a_vacuum(std::uint32_t node) const {
+    return for_each_factor(syntax::inside_brackets(file_, node), [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (sign < 0 || n.kind != expr_kind::symbol)
+            return false;
+        const std::string_view name = text(n.range);
+        const symbol_entry* e = symbols_.find(name);
+        return e != nullptr && (name.find("vac") != std::string_view::npos ||
+                                e->description.find("vacuum") != std::string_view::npos);
+    });
+}
+
 void checker::note_atmosphere_in_another_unit(diagnostic& d, std::span<const operand> terms,
                                               const agreement& a) {
     if (!a.reference || !(*a.reference == pressure_dimension()) ||
@@ -169,18 +183,59 @@ void checker::note_atmosphere_in_another_unit(diagnostic& d, std::span<const ope
     // the atmosphere's unit already, and absolute; the atmosphere is the slip, not its unit.
     // Its numbers as rounded conversions (14.5 psi per bar is 14.5038).
     const pressure_unit* as_converted = readings ? named(converted, 0.005) : nullptr;
+    // "14.5*p_a + 13.78" beside a barometer of 0.950 bar: the site's atmosphere in psi.
+    const site_barometer* site = as_converted != nullptr ? declared_site_barometer() : nullptr;
     for_each_odd_number(terms, a, [&](std::string_view written, double value) {
+        const bool site_atmosphere =
+            site != nullptr && as_converted != theirs &&
+            std::abs(value * as_converted->pascals / site->pascals - 1.0) <= site_barometer_slack;
         if (as_converted != nullptr && as_converted != theirs &&
-            read_reference_state(pressure_dimension(), value, written, as_converted->pascals) !=
-                nullptr) {
+            (site_atmosphere || read_reference_state(pressure_dimension(), value, written,
+                                                     as_converted->pascals) != nullptr)) {
             const std::string other = terms.size() == 2
                                           ? quote(terms[a.odd.front() == 0 ? 1 : 0].node)
                                           : std::string("the other term");
+            // "p_abs = 101.325 - 3.386*v_op", v_op a vacuum in inHg: a vacuum counts down from
+            // the atmosphere, so the number is the atmosphere it counts from (common practice).
+            // Wrong only where the file declares another one for the site.
+            if (const operand* vacuum =
+                    terms.size() == 2 ? &terms[a.odd.front() == 0 ? 1 : 0] : nullptr;
+                vacuum != nullptr && vacuum->subtracted && !terms[a.odd.front()].subtracted &&
+                names_a_vacuum(vacuum->node)) {
+                for (term& t : d.terms)
+                    if (t.differs && t.text == written && t.dim.is_dimensionless()) {
+                        t.dim = pressure_dimension().expand();
+                        t.differs = false;
+                    }
+                d.rule = std::string(rules::offset_scale);
+                if (site_atmosphere || site == nullptr) {
+                    d.level = severity::note;
+                    d.rule = std::string(rules::trade_constant);
+                    d.message = fmt::format("{} is read as the atmosphere in {} that the vacuum "
+                                            "{} counts down from: their difference is absolute",
+                                            written, as_converted->name, other);
+                    return true;
+                }
+                d.message = fmt::format("{} is the atmosphere at sea level in {}, but the file "
+                                        "declares the site's barometer '{}': the vacuum {} "
+                                        "counts down from the site's atmosphere",
+                                        written, as_converted->name, site->name, other);
+                d.notes.push_back({fmt::format("write '{}' in place of {}, in {}", site->name,
+                                               written, as_converted->name),
+                                   {}});
+                return true;
+            }
             // The zero, not the dimension, is the finding, as for "p_psia + 14.7".
             d.rule = std::string(rules::offset_scale);
-            d.message = fmt::format("{} is the atmosphere in {}, added to {}, an absolute "
-                                    "pressure already: the sum counts that zero twice",
-                                    written, as_converted->name, other);
+            d.message =
+                site_atmosphere
+                    ? fmt::format("{} is the site's barometer '{}' in {}, added to {}, an "
+                                  "absolute pressure already: the sum counts the atmosphere "
+                                  "twice",
+                                  written, site->name, as_converted->name, other)
+                    : fmt::format("{} is the atmosphere in {}, added to {}, an absolute "
+                                  "pressure already: the sum counts that zero twice",
+                                  written, as_converted->name, other);
             // The number is read as a pressure, not as a dimensionless term that differs.
             for (term& t : d.terms)
                 if (t.differs && t.text == written && t.dim.is_dimensionless()) {
