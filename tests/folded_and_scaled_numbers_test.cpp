@@ -1335,3 +1335,24 @@ TEST_CASE("the complement of a percentage over 100 is a fraction") {
     fails_with(gas, {"Q_c = (100 - y)*Q_p", "Q_c = x*Q_N - (100 - y)/100*Q_p"},
                plumb::rules::unit_scale);
 }
+
+// A degree is π/180 rad (SI Brochure 9th ed., Table 8): π over 180 is that conversion and no
+// coefficient. Turned over it makes an angle 57.2958² = 3282.81 times too large; written twice,
+// or beside 57.2958 that converts already, it converts the angle twice. Each passed or was told
+// as a needless 57.2958 whose removal left the slip.
+TEST_CASE("the angle's conversion turned over or written twice") {
+    const std::string angle = "\u03B2 : \u00B0\n\u03B2_r : rad\n";
+    passes(angle,
+           {"\u03B2_r = \u03B2*pi/180", "\u03B2_r = \u03B2/57.2958", "\u03B2 = \u03B2_r*180/pi"});
+    fails_with(angle,
+               {"\u03B2_r = \u03B2*180/pi", "\u03B2_r = \u03B2*180/pi/57.2958",
+                "\u03B2_r = \u03B2*pi/180*pi/180", "\u03B2 = \u03B2_r*pi/180"},
+               plumb::rules::unit_scale);
+    const auto turned = run(angle, "\u03B2_r = \u03B2*180/pi");
+    CHECK(first_under(turned, plumb::rules::unit_scale)
+              .message.find("the angle's conversion 180/\u03C0 is the wrong way round") !=
+          std::string::npos);
+    const auto twice = run(angle, "\u03B2_r = \u03B2*pi/180*pi/180");
+    CHECK(first_under(twice, plumb::rules::unit_scale).message.find("converted twice") !=
+          std::string::npos);
+}

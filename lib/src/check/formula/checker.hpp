@@ -1175,6 +1175,10 @@ class checker {
     std::uint32_t raised_number(std::uint32_t root, std::uint32_t number) const;
     bool report_unneeded(const operand& op, const scale_literal& l);
     void report_inverted_factor(const operand& op, const scale_literal& l);
+    [[gnu::noinline]] bool report_angle_conversion(std::span<const operand> ops,
+                                                   std::span<const std::size_t> index,
+                                                   std::span<const scaled_operand> parts,
+                                                   bool turned);
     [[gnu::always_inline]] void check_origins(std::span<const operand> sides,
                                               std::string_view relation) {
         // Nearly every formula: no scale's zero as a reading, no weighted readings and every

@@ -217,6 +217,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
             return true;
         if (!r.used_literals)
             return !report_unneeded_factor(ops, index, parts, dimensionless);
+        if (parts.size() <= 16 && report_angle_conversion(ops, index, parts, false)) [[unlikely]]
+            return false;
         return !report_extra_factor(ops, index, parts, dimensionless);
     }
     // A conversion factor written the wrong way round (asked of the short meeting points
@@ -227,6 +229,9 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     if (parts.size() <= max_operands_for_flips &&
         accept_folded_coefficient(ops, index, parts, unit))
         return true;
+    if (parts.size() <= max_operands_for_flips && report_angle_conversion(ops, index, parts, true))
+        [[unlikely]]
+        return false;
     for (std::size_t i = 0; i < parts.size() && parts.size() <= max_operands_for_flips; ++i)
         for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
             // Any number may be the conversion written upside down (/60 for *60, /3.6,
@@ -679,6 +684,68 @@ std::optional<std::string> checker::folded_conversion_note(const scaled_operand&
                        "conversion with the formula's own {}, no factor is missing",
                        text(file_.nodes[number->node].range), format_factor(part),
                        format_factor(conversion), format_factor(part));
+}
+
+// "β_r = β*180/pi" with β in °, "β_r = β*pi/180*pi/180": π over 180 is the degree in radians
+// (SI Brochure 9th ed., Table 8) and never a coefficient of a formula. A pair of them that the
+// others reconcile without is the angle converted twice; one that reconciles only turned over
+// is the conversion the wrong way round. Asked with `turned` where the scales disagree, and
+// without it where they agree.
+bool checker::report_angle_conversion(std::span<const operand> ops,
+                                      std::span<const std::size_t> index,
+                                      std::span<const scaled_operand> parts, bool turned) {
+    constexpr std::size_t most_numbers = 8;
+    for (std::size_t i = 0; i < parts.size(); ++i) {
+        const std::span<const scale_literal> literals = parts[i].literals;
+        if (literals.size() < 2 || literals.size() > most_numbers)
+            continue;
+        for (std::size_t p = 0; p < literals.size(); ++p) {
+            if (file_.nodes[literals[p].node].kind != expr_kind::pi ||
+                std::abs(literals[p].exponent) != 1.0)
+                continue;
+            for (std::size_t k = 0; k < literals.size(); ++k) {
+                if (literals[k].value != 180.0 || literals[k].exponent != -literals[p].exponent ||
+                    text(file_.nodes[literals[k].node].range) != "180")
+                    continue;
+                std::array<scale_literal, most_numbers> changed{};
+                std::copy(literals.begin(), literals.end(), changed.begin());
+                for (const std::size_t at : {p, k}) {
+                    if (turned) {
+                        changed[at].exponent = -changed[at].exponent;
+                    } else {
+                        read_as_quantity(changed[at]);
+                        changed[at].power = 0;
+                    }
+                }
+                std::vector<scaled_operand> trial(parts.begin(), parts.end());
+                trial[i].literals = {changed.data(), literals.size()};
+                if (!reconcile(trial).agree)
+                    continue;
+                const bool to_degrees = literals[p].exponent < 0;
+                const std::string_view written = to_degrees ? "180/π" : "π/180";
+                const operand& op = ops[index[i]];
+                diagnostic& d = report(
+                    rules::unit_scale,
+                    turned ? fmt::format("the angle's conversion {} is the wrong way round: the "
+                                         "units of {} need {}",
+                                         written, quote(op.node), to_degrees ? "π/180" : "180/π")
+                           : fmt::format("the angle's conversion {} is not needed: the units of {} "
+                                         "already agree without it, so the angle is converted "
+                                         "twice",
+                                         written, quote(op.node)),
+                    file_.nodes[literals[to_degrees ? k : p].node].range);
+                add_term_and_units(d, op);
+                d.notes.push_back(
+                    {turned ? fmt::format("as written the result is {} times its true value",
+                                          format_factor(std::pow(180.0 / std::numbers::pi,
+                                                                 to_degrees ? 2.0 : -2.0)))
+                            : std::string("a degree is π/180 rad: convert the angle once"),
+                     {}});
+                return true;
+            }
+        }
+    }
+    return false;
 }
 
 // "LG = 8.34*Q_gpm/(0.075*V_cfm)", a cooling tower's liquid-to-gas ratio: water's 8.34 lb/gal
