@@ -302,3 +302,18 @@ TEST_CASE("the atmosphere a vacuum counts down from") {
     plumb::test::each_fails_with(vacuum + "p_x : inHg \"absolute pressure\"\n",
                                  {"p_abs = 101.325 + 3.386*p_x"}, plumb::rules::offset_scale);
 }
+
+// An expansion vessel's fill pressure: at least the static column above it plus a margin, 0.3
+// bar (common practice). The margin typed with its unit is a difference beside the column, as
+// the column is; an atmosphere typed so (101.325 kPa) is not, and added to a gauge reading it is
+// still reported.
+TEST_CASE("a margin typed with its unit beside a column is a difference") {
+    const std::string vessel = "p_f : bar g \"fill pressure at the vessel\"\nH : m\n"
+                               "\u03C1_w : kg/m3 = 999.7 \"water\"\n"
+                               "p_g : kPa(g) \"pressure at the bottom, gauge\"\n";
+    plumb::test::each_passes(vessel, {"p_f >= \u03C1_w*{g_n}*H/1e5 + 0.3 {bar}",
+                                      "p_g = \u03C1_w*{g_n}*H/1000 + 20 {kPa}"});
+    plumb::test::each_fails_with(
+        vessel, {"p_g = \u03C1_w*{g_n}*H/1000 + 101.325 {kPa}", "p_f >= 0.3 {bar}"},
+        plumb::rules::offset_scale);
+}

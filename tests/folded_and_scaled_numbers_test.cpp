@@ -1356,3 +1356,36 @@ TEST_CASE("the angle's conversion turned over or written twice") {
     CHECK(first_under(twice, plumb::rules::unit_scale).message.find("converted twice") !=
           std::string::npos);
 }
+
+// A fire pump's weekly runs, 52 a year, at a fuel rate in L/h for a run in minutes: the 60 is
+// the minutes in an hour (SI Brochure 9th ed., Table 8) and 52 a count, not two speeds in a
+// ratio. The ratio reading stays where the formula counts in one unit of the clock.
+TEST_CASE("a clock's 60 between two units of the clock is no ratio of whole numbers") {
+    const std::string fuel = "V_yr : L\nV_f : L/h\nt_test : min\nn_1, n_2 : rpm\nX_50, X_60 : W\n";
+    passes(fuel, {"V_yr = 52*V_f*t_test/60", "n_2 = n_1*75/60", "X_60 = X_50*60/50"});
+    fails_with(fuel, {"V_yr = 52*V_f*t_test"}, plumb::rules::unit_scale);
+}
+
+// 42 US gallons a barrel (NIST SP 811 (2008), B.8) from bbl/d into gpm beside a 24 with the
+// 1440 minutes a day meant: the 60 is what is left out, and the factor advised says so.
+TEST_CASE("the gallons of a barrel are a conversion in the factor advised") {
+    const std::string well = "q_L : bbl/d\nq_gpm : gpm\n";
+    passes(well, {"q_gpm = q_L*42/1440"});
+    const auto r = run(well, "q_gpm = q_L*42/24");
+    CHECK(first_under(r, plumb::rules::unit_scale).message.find("counts 60 times as much") !=
+          std::string::npos);
+}
+
+// 37.33 scf per Nm³ (0 °C and 101.325 kPa against 60 °F and 14.696 psia; NIST SP 811 (2008),
+// B.8, with the ideal gas law): divided where it multiplies it is the wrong way round, 37.33²
+// off, not a factor 0.011 % from the one these units need.
+TEST_CASE("a reference-state factor turned over is the wrong way round") {
+    const std::string air = "Q_n : Nm3/min\nQ_s : scfm\n";
+    passes(air, {"Q_s = Q_n*37.33", "Q_n = Q_s/37.33"});
+    for (const char* formula : {"Q_s = Q_n/37.33", "Q_n = Q_s*37.33"}) {
+        CAPTURE(formula);
+        const auto r = run(air, formula);
+        CHECK(first_under(r, plumb::rules::unit_scale)
+                  .message.find("the factor 37.33 is the wrong way round") != std::string::npos);
+    }
+}

@@ -764,12 +764,26 @@ typed_term checker::eval_sum(std::uint32_t index) {
     result.point = points == 1;
     // "p_d = ρ*g*h_s + Δp_f": the columns and the declared drops a blower or a pump
     // works against add up to what its discharge gauge reads.
-    if (points == 0 && result.dim == pressure_dimension()) [[unlikely]]
+    // So does a margin typed with its unit beside them, "ρ_w*{g_n}*H/1e5 + 0.3 {bar}" (common
+    // practice for an expansion vessel's fill pressure): a difference as they are.
+    if (points == 0 && result.dim == pressure_dimension()) [[unlikely]] {
+        // Well below any atmosphere (40 kPa, some 7000 m up): "+ 101.325 {kPa}" is none.
+        const auto typed_margin = [&](const operand& t) {
+            const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, t.node)];
+            if (n.kind != expr_kind::quantity || file_.quantities[n.lhs].constant)
+                return false;
+            const double value = quantity_si_value(n);
+            return std::isfinite(value) && std::abs(value) < 40e3;
+        };
         result.absolute_pressure_difference =
-            std::all_of(terms.begin(), terms.end(), [&](const operand& t) {
-                return !t.type.point &&
-                       (t.type.absolute_pressure_difference || declared_pressure_difference(t));
-            });
+            std::all_of(terms.begin(), terms.end(),
+                        [&](const operand& t) {
+                            return !t.type.point &&
+                                   (t.type.absolute_pressure_difference ||
+                                    declared_pressure_difference(t) || typed_margin(t));
+                        }) &&
+            !std::all_of(terms.begin(), terms.end(), typed_margin);
+    }
     return result;
 }
 
@@ -1253,6 +1267,20 @@ void checker::read_ratio_of_whole_numbers(std::uint32_t literals_begin) {
         return v == 3.0 || v == 9.0 || v == 12.0 || v == 27.0 || v == 36.0 || v == 144.0 ||
                v == 1728.0;
     };
+    // "V_yr = 52*V_f*t_test/60" with V_f in L/h and t_test in min: where the formula counts
+    // in two units of the clock, 60 (or 24) is the conversion between them, and 52 tests a
+    // year a count beside it, not one of a ratio of speeds.
+    unsigned clocks = 0;
+    const auto converts_clock = [&](const scale_literal& l) {
+        if (l.value != 60.0 && l.value != 24.0)
+            return false;
+        if (clocks == 0)
+            clocks = clock_units_of_formula() | 0x100; // asked once; the bit marks it asked
+        const bool minute = (clocks & clock_minute) != 0;
+        const bool hour = (clocks & clock_hour) != 0;
+        const bool day = (clocks & clock_day) != 0;
+        return l.value == 60.0 ? minute && (hour || day) : day && (hour || minute);
+    };
     for (std::size_t i = literals_begin; i < literals_.size(); ++i) {
         scale_literal& over = literals_[i];
         if (over.exponent != 1.0 || !small_whole(over))
@@ -1263,6 +1291,7 @@ void checker::read_ratio_of_whole_numbers(std::uint32_t literals_begin) {
             if (under.exponent != -1.0 || !small_whole(under) || !(ratio > 0.5 && ratio < 2.0) ||
                 ratio == 1.0 || std::abs(ratio - 1.8) < 1e-12 ||
                 (customary_count(over.value) && customary_count(under.value)) ||
+                converts_clock(over) || converts_clock(under) ||
                 std::abs(ratio * 1.8 - 1.0) < 1e-12 || !whole_as_written(over) ||
                 !whole_as_written(under))
                 continue;

@@ -373,6 +373,28 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         return is_time_ratio(l) && !looks_like_conversion(l, true) &&
                file_.nodes[l.node].kind == expr_kind::number;
     };
+    // "q_gpm = q_L*42/1440" from bbl/d: 42 US gallons a barrel (NIST SP 811 (2008), B.8),
+    // the conversion it is where the formula counts in both, whatever else is off.
+    const auto gallons_a_barrel = [&](const scale_literal& l) {
+        if (l.value != 42.0 || file_.nodes[l.node].kind != expr_kind::number)
+            return false;
+        bool barrels = false;
+        bool gallons = false;
+        syntax::search_formula(file_, *current_, [&](std::uint32_t, const syntax::expr_node& n) {
+            if (n.kind == expr_kind::symbol)
+                if (const symbol_entry* e = symbols_.find(text(n.range)); e != nullptr) {
+                    barrels = barrels || e->unit_text.find("bbl") != std::string_view::npos ||
+                              e->unit_text.find("bpd") != std::string_view::npos ||
+                              e->unit_text.find("BPD") != std::string_view::npos;
+                    gallons = gallons || e->unit_text.find("gal") != std::string_view::npos ||
+                              e->unit_text.find("gpm") != std::string_view::npos ||
+                              e->unit_text.find("gph") != std::string_view::npos ||
+                              e->unit_text.find("gpd") != std::string_view::npos;
+                }
+            return search_step::descend;
+        });
+        return barrels && gallons;
+    };
     // "m*v/(3600*pi*D_mm^2/4e6)": a circle's 4 folded into the 10⁶ of mm² to m², as the
     // scales' search reads it where the units agree; the factor advised keeps the 10⁶.
     const auto folded_power = [&](const scale_literal& l) {
@@ -394,7 +416,7 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         for (const std::size_t side : {r.odd, r.reference})
             for (const scale_literal& l : parts[side].literals) {
                 double f = 1.0;
-                if (clock_ratio(l))
+                if (clock_ratio(l) || gallons_a_barrel(l))
                     f = std::pow(l.value, l.exponent);
                 else if (const int power = folded_power(l); power != 0)
                     f = std::pow(10.0, power * l.exponent);
@@ -408,7 +430,7 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         for (const std::size_t side : {r.odd, r.reference})
             for (const scale_literal& l : parts[side].literals)
                 if (l.value != 1.0 && !looks_like_conversion(l, true) && !clock_ratio(l) &&
-                    file_.nodes[l.node].kind == expr_kind::number &&
+                    !gallons_a_barrel(l) && file_.nodes[l.node].kind == expr_kind::number &&
                     significant_digits(text(file_.nodes[l.node].range)) >= 2 &&
                     coefficients.size() < 80) {
                     coefficients += fmt::format("{}{}", coefficients.empty() ? "" : ", ",
@@ -436,6 +458,16 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                 ratio = on_odd_side ? ratio * as_factor : ratio / as_factor;
                 exact_ratio.reset();
             }
+        }
+        // "Q_s = Q_n/37.33" (Nm³/min into scfm): the number is the factor these units need,
+        // within its rounding, applied the other way. 37.33 scf per Nm³ holds the two
+        // reference temperatures as well as the units, so it is no ratio of table units, and
+        // only here is it seen turned over.
+        if (coefficient_count == 1 && std::abs(coefficient_exponent) == 1.0 &&
+            std::abs(written * std::pow(needed, coefficient_exponent) - 1.0) <=
+                std::max(2.0 * coefficient->tolerance, 1e-3)) {
+            report_inverted_factor(on_odd_side ? op : reference, *coefficient);
+            return false;
         }
     }
     const bool sides = what.what.starts_with("sides of");
@@ -502,12 +534,12 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     }
     // "u_fpm = 200*u" (m/s): a rule of thumb for 196.85. Taken as a coefficient, the
     // advice would multiply it by the conversion; say how far it is from the factor.
-    if (const double off = written / needed - 1.0;
+    if (const double off = written / in_place - 1.0;
         coefficient_count == 1 && std::isfinite(off) && std::abs(off) <= 0.05)
         d.notes.push_back({fmt::format("{} is {:.2g} % {} {}, the factor these units need; if "
                                        "it was meant to convert them, write that factor",
                                        coefficients, std::abs(off) * 100.0,
-                                       off > 0 ? "above" : "below", format_factor(needed)),
+                                       off > 0 ? "above" : "below", format_factor(in_place)),
                            {}});
     else if (other_unit_note)
         d.notes.push_back({std::move(*other_unit_note), {}});
