@@ -740,3 +740,21 @@ TEST_CASE("sheets: a weighted mean of readings by SUMPRODUCT over SUM") {
     CHECK(std::find(found.begin(), found.end(), "Crush!B7 offset-scale") != found.end());
     CHECK(std::find(found.begin(), found.end(), "Crush!B8 offset-scale") != found.end());
 }
+
+// A quarry's short tons an hour (2000 lb = 907.18474 kg, NIST SP 811 (2008), B.8), a specific
+// gravity's column and a brewer's degrees Plato (grams of extract per 100 g, a share by mass;
+// common practice), as sheets type them beside their cells.
+TEST_CASE("sheets: stph, SG and degrees Plato beside a cell") {
+    const auto stph = read_unit_text("stph");
+    REQUIRE(stph.has_value());
+    CHECK(stph->scale == doctest::Approx(907.18474 / 3600.0).epsilon(1e-12));
+    for (const char* text : {"SG", "S.G."}) {
+        CAPTURE(text);
+        const auto unit = read_unit_text(text);
+        REQUIRE(unit.has_value());
+        CHECK(unit->scale == 1.0);
+    }
+    const auto plato = read_unit_text("\u00B0P");
+    REQUIRE(plato.has_value());
+    CHECK(plato->scale == doctest::Approx(0.01));
+}

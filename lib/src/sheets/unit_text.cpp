@@ -192,7 +192,7 @@ std::string as_declaration(std::string_view notation, std::string_view measures)
 // "in. w.g." for inches of water, "hr" for the hour, "CFM" in capitals, "kNm" for kN·m,
 // "sq ft", "bhp" (brake horsepower, a horsepower), "bara" (bar absolute).
 std::string trade_spelling(std::string t) {
-    static constexpr std::array<std::pair<std::string_view, std::string_view>, 111> whole{{
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 118> whole{{
         {"in. w.g.", "inH2O"},
         {"in.w.g.", "inH2O"},
         {"in w.g.", "inH2O"},
@@ -307,6 +307,16 @@ std::string trade_spelling(std::string t) {
         {"US gallon", "gal"},
         {"gal (US)", "gal"},
         {"US gal/min", "gpm"},
+        // A quarry's and a haulier's short tons an hour (2000 lb; NIST SP 811 (2008), B.8).
+        {"stph", "ton/h"},
+        {"STPH", "ton/h"},
+        {"short ton/h", "ton/h"},
+        // A specific gravity's column, a ratio to water's density; a brewer's degrees Plato,
+        // grams of extract per 100 g of wort, a share by mass (ASBC, common practice).
+        {"SG", "1"},
+        {"S.G.", "1"},
+        {"\u00B0P", "%"},
+        {"\u00B0Plato", "%"},
         // Plurals as headings write them.
         {"gallons", "gal"},
         {"acres", "acre"},

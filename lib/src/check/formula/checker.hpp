@@ -137,9 +137,18 @@ inline bool is_celsius(const unit_definition* unit) {
 
 // The absolute unit a gauge unit reads in (psi for psig, kPa for kPag); the symbol itself for
 // any other unit.
+// "bar(g)" and "bar g" read in bar, as "barg" does.
 inline std::string absolute_symbol(const unit_definition& unit) {
     std::string symbol(unit.symbol);
-    if (unit.scale == unit_scale::gauge && symbol.size() > 1 && symbol.back() == 'g')
+    if (unit.scale != unit_scale::gauge || symbol.size() < 2)
+        return symbol;
+    if (symbol.ends_with("(g)"))
+        symbol.resize(symbol.size() - 3);
+    else if (symbol.ends_with(" g"))
+        symbol.resize(symbol.size() - 2);
+    else if (symbol.back() == 'g')
+        symbol.pop_back();
+    while (!symbol.empty() && symbol.back() == ' ')
         symbol.pop_back();
     return symbol;
 }
