@@ -317,3 +317,16 @@ TEST_CASE("a margin typed with its unit beside a column is a difference") {
         vessel, {"p_g = \u03C1_w*{g_n}*H/1000 + 101.325 {kPa}", "p_f >= 0.3 {bar}"},
         plumb::rules::offset_scale);
 }
+
+// A line pack in normal cubic metres from a pressure in psia: p·6.895/101.325 is the ratio to
+// the normal state, 101.325 kPa (DIN 1343, from memory; 6.895 kPa per psi, NIST SP 811 (2008),
+// B.8). Read so, as 14.696 is beside psia alone; 14.696 beside the converted kPa leaves the
+// 6.895 needless.
+TEST_CASE("a reference pressure in the unit a conversion beside the reading gives") {
+    const std::string pack = "V : m^3\np_avg : psia \"average pressure, absolute\"\nT : K\n"
+                             "Z : 1\nLP : m^3\n";
+    plumb::test::each_passes(
+        pack, {"LP = V*(p_avg*6.895/101.325)*(273.15/T)/Z", "LP = V*(p_avg/14.696)*(273.15/T)/Z"});
+    plumb::test::each_fails_with(pack, {"LP = V*(p_avg*6.895/14.696)*(273.15/T)/Z"},
+                                 plumb::rules::unit_scale);
+}

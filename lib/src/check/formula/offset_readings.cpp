@@ -356,9 +356,32 @@ void checker::read_reference_states(reference_state_pairs& pairs, typed_term& re
                 continue;
             const reference_state* state =
                 read_reference_state(reading.dim, number.value, written, reading.scale);
+            // "p_avg*6.895/101.325" with p_avg in psia: the reading converted to kPa by a
+            // number beside it (6.895 kPa per psi, NIST SP 811 (2008), B.8) stands in ratio
+            // with the normal state in kPa.
+            double converted_scale = reading.scale;
+            for (std::size_t c = 0; c < pairs.number_count && state == nullptr; ++c) {
+                const reference_state_pairs::number& conversion = pairs.numbers[c];
+                if (c == i || conversion.sign != reading.sign)
+                    continue;
+                const std::string_view digits = text(file_.nodes[conversion.node].range);
+                if (significant_digits(digits) < 4 ||
+                    !is_ratio_of_units(read_literal(digits, conversion.value, conversion.node)))
+                    continue;
+                state = read_reference_state(reading.dim, number.value, written,
+                                             reading.scale / conversion.value);
+                if (state != nullptr)
+                    converted_scale = reading.scale / conversion.value;
+            }
             if (state == nullptr)
                 continue;
-            if (!pair_number_with_reading(number, reading, result))
+            // The number stands in the unit it is written in, the converted one where a
+            // conversion led to it; the conversion stays a factor of the product.
+            const double reading_scale = reading.scale;
+            reading.scale = converted_scale;
+            const bool paired = pair_number_with_reading(number, reading, result);
+            reading.scale = reading_scale;
+            if (!paired)
                 return;
             for (std::uint32_t l = result.literal_begin; l < literals_.size(); ++l) {
                 scale_literal& literal = literals_[l];
