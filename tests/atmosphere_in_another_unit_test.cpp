@@ -330,3 +330,16 @@ TEST_CASE("a reference pressure in the unit a conversion beside the reading give
     plumb::test::each_fails_with(pack, {"LP = V*(p_avg*6.895/14.696)*(273.15/T)/Z"},
                                  plumb::rules::unit_scale);
 }
+
+// A psi calc beside a barometer declared in psi (12.7 psi, about 1210 m up by the standard
+// atmosphere's barometric formula, from memory): the warning says the barometer and how far off
+// the sea level's 14.696 leaves the sum in psi, the sum's unit.
+TEST_CASE("the site's barometer said in the sum's unit") {
+    const std::string plant = "p_b : psi \"site barometric pressure, 12.7 psi\"\n"
+                              "p_cg : psig \"condensing pressure on the gauge\"\n"
+                              "p_ca : psia \"condensing pressure, absolute\"\n";
+    const auto r = plumb::test::check_after(plant, "p_ca = p_cg + 14.696");
+    const auto& d = plumb::test::first_under(r, plumb::rules::offset_scale);
+    CHECK(d.message.find("'p_b' (12.7 psi") != std::string::npos);
+    CHECK(d.message.find("comes out 2 psi high") != std::string::npos);
+}

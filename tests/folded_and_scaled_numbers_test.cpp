@@ -1389,3 +1389,15 @@ TEST_CASE("a reference-state factor turned over is the wrong way round") {
                   .message.find("the factor 37.33 is the wrong way round") != std::string::npos);
     }
 }
+
+// Re = 4Q/(π·D·ν) from a flow: the pipeline trade's 92.24 = (4/π) × 72.45 for bbl/d, inches
+// and cSt (Menon, Liquid Pipeline Hydraulics, 2004, from memory; the units' 72.45 from NIST SP
+// 811 (2008), B.8). The circle's 4/π is read beside a flow over a length as beside a square.
+TEST_CASE("a circle's 4/pi folded into the Reynolds number from a flow") {
+    const std::string line = "Re : 1\nQ_bpd : bbl/d\nd_in : in\n\u03BD_cSt : cSt\n";
+    const auto r = run(line, "Re = 92.24*Q_bpd/(d_in*\u03BD_cSt)");
+    CHECK(problems_in(r) == 0);
+    CHECK(first_under(r, plumb::rules::trade_constant).message.find("4/\u03C0") !=
+          std::string::npos);
+    fails_with(line, {"Re = 9.224*Q_bpd/(d_in*\u03BD_cSt)"}, plumb::rules::unit_scale);
+}

@@ -433,7 +433,8 @@ TEST_CASE("the sea-level atmosphere 1.8 % above the site's declared barometer") 
                                   "p_da : barg\np_daA : bar\n";
     fails_with(deaerator, {"p_daA = p_da + 1.01325"}, plumb::rules::offset_scale);
     const auto r = run(deaerator, "p_daA = p_da + 1.01325");
-    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale), "1.8 kPa high"));
+    // Said in the sum's unit, bar: 1.8 kPa is 0.018 bar.
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale), "0.018 bar high"));
     passes(deaerator, {"p_daA = p_da + p_b"});
     passes("p_baro : inHg \"local barometer, 29.6 inHg\"\np_msg : barg\np_msk : kPa\n",
            {"p_msk = 100*p_msg + 101.325"});
@@ -519,7 +520,8 @@ TEST_CASE("an atmosphere typed as a number that is not the site's declared barom
     // The barometer named is the one declared in the sum's unit, psi, as the advice's is.
     CHECK(plumb::test::says(d, "14.73 is an atmosphere of 101.56 kPa, but this file declares "
                                "the site's barometer 'p_b'"));
-    CHECK(plumb::test::says(d, "4.7 kPa high"));
+    // Said in the sum's unit, psi: 4.7 kPa is 0.68 psi.
+    CHECK(plumb::test::says(d, "0.68 psi high"));
     CHECK(plumb::test::says(d, "write (... + p_b)"));
     // The site's own barometer typed in (28.6 inHg is 14.05 psi) is read with a note.
     passes(meter, {"p_f = p_g + 14.05"}, 1);

@@ -124,19 +124,35 @@ void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_v
     // "p_pz - 101.325": taken from an absolute reading, too large an atmosphere leaves the
     // pressure above it too small; added to a gauge reading, the absolute one too large.
     const double off = (pascals - site.pascals) * (number_subtracted ? -1.0 : 1.0);
+    // In the sum's unit where it is one the trades name (12.7 psi, 2.0 psi high in a psi
+    // calc), else in kPa.
+    std::string_view shown = "kPa";
+    double shown_pascals = 1000.0;
+    for (const pressure_unit& u : pressure_units)
+        if (std::isfinite(unit) && unit > 0.0 && std::abs(unit / u.pascals - 1.0) < 5e-3 &&
+            u.name != "Pa" && u.name != "MPa") {
+            shown = u.name;
+            shown_pascals = u.pascals;
+        }
+    const auto in_shown = [&](double p, int digits) {
+        const double v = p / shown_pascals;
+        const double step =
+            std::pow(10.0, std::floor(std::log10(std::max(std::abs(v), 1e-9))) - digits + 1);
+        return format_factor(std::round(v / step) * step);
+    };
     diagnostic& d =
         report(rules::offset_scale,
-               fmt::format("{} is {}, but this file declares the site's barometer '{}' ({} kPa, "
-                           "as the standard atmosphere has about {} m up): {} comes out {} kPa {}",
+               fmt::format("{} is {}, but this file declares the site's barometer '{}' ({} {}, "
+                           "as the standard atmosphere has about {} m up): {} comes out {} {} {}",
                            display_text(file_.nodes[number].range), what,
-                           barometer_in_unit(unit).value_or(site.name),
-                           format_factor(site.pascals / 1000.0),
-                           static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10),
+                           barometer_in_unit(unit).value_or(site.name), in_shown(site.pascals, 4),
+                           shown, static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10),
                            added_to_gauge      ? "the absolute pressure"
                            : number_subtracted ? "the pressure above the atmosphere"
                                                : "the sum it stands in",
-                           format_factor(std::round(std::abs(off) / 100.0) / 10.0),
-                           off > 0 ? "high" : "low"),
+                           shown == "kPa" ? format_factor(std::round(std::abs(off) / 100.0) / 10.0)
+                                          : in_shown(std::abs(off), 2),
+                           shown, off > 0 ? "high" : "low"),
                file_.nodes[number].range);
     d.level = severity::warning;
     // "p_psia = p_psig + 14.696" with the barometer declared in kPa: the name alone would add

@@ -304,7 +304,12 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
                             std::max(as.tolerance, half_unit_in_last_digit(printed) / l.value);
                     // 0.1166*S*N*A_p with the plunger's area declared: its π/4 would be
                     // counted twice; a circle's area is read only beside a square.
-                    if (c.circle && !squares_something(ops[index[i]].node))
+                    // Or beside a flow over a length: the Reynolds number from a flow,
+                    // Re = 4Q/(π·D·ν) (V·D with V = Q/(π·D²/4)), as the pipeline trade's
+                    // 92.24 in Re = 92.24*Q_bpd/(d_in*ν_cSt) folds it (common practice).
+                    if (c.circle && !squares_something(ops[index[i]].node) &&
+                        !(has_factor_of_dimension(ops[index[i]].node, volume_flow_dim, 1) &&
+                          has_factor_of_dimension(ops[index[i]].node, length_dimension(), -1)))
                         continue;
                     if (c.half_of_a_square_or_radius && !may_hold_a_half(ops[index[i]]))
                         continue;
