@@ -785,3 +785,23 @@ TEST_CASE("a share of a gauge reading beside a share of an absolute pressure") {
               .message.find("partial pressures count from "
                             "vacuum") != std::string::npos);
 }
+
+// The mean of two °C readings taken to °F, (t_1 + t_2)/2·1.8 + 32 (NIST SP 811 (2008), B.8):
+// the 1.8 converts the one reading the mean is; the mean left in °C beside +32, or the sum of
+// two readings taken to °F, is still reported.
+TEST_CASE("a mean of readings converted to another scale in one line") {
+    const std::string tank = "t_1, t_2 : \u00B0C\nt_F : \u00B0F\nt_K : K\n";
+    passes(tank, {"t_F = (t_1 + t_2)/2*1.8 + 32", "t_F = 1.8*(t_1 + t_2)/2 + 32",
+                  "t_F = 1.8*(t_1/2 + t_2/2) + 32"});
+    fails_with(tank,
+               {"t_F = (t_1 + t_2)/2 + 32", "t_F = (t_1 + t_2)*1.8 + 32",
+                "t_K = (t_1 + t_2)/2*1.8 + 32", "t_F = (t_1 + t_2)/2*1.8"},
+               plumb::rules::offset_scale);
+}
+
+// A sprinkler's pressure from its flow, p = (q/K)² (EN 12845; NFPA 13, from memory): the drop
+// across the orifice, which the gauge at the head reads.
+TEST_CASE("a pressure made by squaring a flow over its K-factor is a difference") {
+    const std::string head = "q : L/min\nK : L/(min*bar^0.5)\np_g : bar(g)\n";
+    passes(head, {"p_g = (q/K)^2", "q = K*sqrt(p_g)"});
+}

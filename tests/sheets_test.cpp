@@ -758,3 +758,43 @@ TEST_CASE("sheets: stph, SG and degrees Plato beside a cell") {
     REQUIRE(plato.has_value());
     CHECK(plato->scale == doctest::Approx(0.01));
 }
+
+namespace {
+
+// A row with its label in A, its value or formula in B and its unit in C.
+std::string labelled_row(int r, const std::string& label, const std::string& value,
+                         const std::string& unit) {
+    const std::string n = std::to_string(r);
+    return "<row r=\"" + n + "\"><c r=\"A" + n + "\" t=\"inlineStr\"><is><t>" + label +
+           "</t></is></c>" +
+           value_and_unit_row(r, value, unit).substr(("<row r=\"" + n + "\">").size());
+}
+
+} // namespace
+
+// A transfer pump's discharge gauge pressure: the line's friction loss plus the column up to a
+// vented tank, ρ·g·h with g typed as 9.81 (common practice). Both are differences a gauge reads.
+// A mean of two °C readings taken to °F in one cell, (t_1 + t_2)/2·1.8 + 32 (NIST SP 811 (2008),
+// B.8), and a sprinkler's pressure from its flow and K-factor, p = (q/K)² (EN 12845; NFPA 13,
+// from memory), a drop across the orifice a gauge reads, are correct cells too.
+TEST_CASE("sheets: a friction loss and a column into a gauge cell, a mean into °F, (q/K)^2") {
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Friction loss", "35", "kPa") +
+        labelled_row(3, "Density", "870", "kg/m³") + labelled_row(4, "Height", "12", "m") +
+        labelled_row(5, "Discharge pressure", "=B2+B3*9.81*B4/1000", "kPa(g)") +
+        labelled_row(6, "Inlet temperature", "40", "°C") +
+        labelled_row(7, "Outlet temperature", "50", "°C") +
+        labelled_row(8, "Mean temperature", "=(B6+B7)/2*1.8+32", "°F") +
+        labelled_row(9, "Mean temperature, slip", "=(B6+B7)/2+32", "°F") +
+        labelled_row(10, "Flow", "80", "L/min") +
+        labelled_row(11, "K-factor", "80", "L/min/bar^0.5") +
+        labelled_row(12, "Pressure at head", "=(B10/B11)^2", "bar(g)") + "</sheetData></worksheet>";
+    const auto found = cell_findings_of_one_sheet("Tank", sheet);
+    for (const char* clean : {"Tank!B5 ", "Tank!B8 ", "Tank!B12 "}) {
+        CAPTURE(clean);
+        CHECK(std::none_of(found.begin(), found.end(), [&](const std::string& f) {
+            return f.rfind(clean, 0) == 0 && f.find("gravity-number") == std::string::npos;
+        }));
+    }
+    CHECK(std::find(found.begin(), found.end(), "Tank!B9 offset-scale") != found.end());
+}

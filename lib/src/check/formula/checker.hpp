@@ -285,8 +285,13 @@ inline void set_weight(typed_term& t, const std::optional<rational>& w) {
 // open (infinite) until weighed: its mean, (t_1 + t_2)/2, 0.5*(t_1 + t_2) or t_1/2 + t_2/2,
 // weighs 1 and is a reading on that scale, held to its zero like one (T_K = (t_1 + t_2)/2
 // with °C readings is the finding T_K = t_1 is).
+// A mean taken to °F or from it ((t_1 + t_2)/2*1.8) weighs the degree's 9/5 or 5/9, which
+// converts it and leaves it one reading.
 inline double reading_tolerance(const typed_term& t) {
-    if (std::isinf(t.origin_tolerance) && t.weight_numerator == 1 && t.weight_denominator == 1)
+    const bool one = t.weight_numerator == 1 && t.weight_denominator == 1;
+    const bool degree_ratio = (std::abs(t.weight_numerator) == 9 && t.weight_denominator == 5) ||
+                              (std::abs(t.weight_numerator) == 5 && t.weight_denominator == 9);
+    if (std::isinf(t.origin_tolerance) && (one || degree_ratio))
         return 0.0;
     return t.origin_tolerance;
 }
@@ -1226,6 +1231,7 @@ class checker {
     std::string days_a_year_note() const;
     std::optional<std::string_view>
     declared_in_units(std::initializer_list<std::string_view> units) const;
+    bool multiplies_by_gravity_number(std::uint32_t literals_begin) const;
     bool divides_by_gravity_number(std::uint32_t literals_begin) const;
     static bool is_typed_gravity(const scale_literal& l);
     static bool written_whole(std::string_view written);

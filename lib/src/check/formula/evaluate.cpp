@@ -115,6 +115,17 @@ bool checker::declared_pressure_difference(const operand& o) const {
         const syntax::expr_node& n = file_.nodes[at];
         if (n.kind == expr_kind::number)
             return false;
+        // A cell whose row label says it is a difference ("Friction loss"), as a symbol's
+        // name or words do.
+        if (n.kind == expr_kind::reference) {
+            const syntax::reference_value& r = file_.references[n.lhs];
+            if (sign > 0 && difference == syntax::no_index && r.difference && r.dim &&
+                compact_dimension::fitted(*r.dim) == std::optional(pressure_dimension())) {
+                difference = at;
+                return false;
+            }
+            return true;
+        }
         if (n.kind != expr_kind::symbol)
             return true;
         const std::string_view name = text(n.range);
@@ -1164,9 +1175,11 @@ typed_term checker::eval_factors(std::uint32_t index) {
             return result; // as above
         }
     }
+    // A column's ρ*9.81*h (a sheet's, where g is typed as a number) is one as ρ*g*h is.
     if (!result.known)
         result = unknown_type(result.inferred);
-    else if (has_gravity && !result.point && result.dim == pressure_dimension())
+    else if (!result.point && result.dim == pressure_dimension() &&
+             (has_gravity || multiplies_by_gravity_number(result.literal_begin)))
         result.absolute_pressure_difference = true;
     return result;
 }
@@ -1179,6 +1192,14 @@ typed_term checker::eval_factors(std::uint32_t index) {
 bool checker::divides_by_gravity_number(std::uint32_t literals_begin) const {
     for (std::size_t i = literals_begin; i < literals_.size(); ++i)
         if (literals_[i].exponent == -1.0 && is_typed_gravity(literals_[i]))
+            return true;
+    return false;
+}
+
+// The same for a product that multiplies by such a number (ρ*9.81*h).
+bool checker::multiplies_by_gravity_number(std::uint32_t literals_begin) const {
+    for (std::size_t i = literals_begin; i < literals_.size(); ++i)
+        if (literals_[i].exponent == 1.0 && is_typed_gravity(literals_[i]))
             return true;
     return false;
 }
@@ -1408,6 +1429,11 @@ typed_term checker::apply_power(const typed_term& base, const typed_term& expone
         return result;
     }
     result.dim = base.dim.pow(*exponent.value);
+    // p = (q/K)^2, a sprinkler's or a valve's flow over its K-factor (EN 12845, NFPA 13; common
+    // practice): a pressure made by raising something else is the drop across the orifice, a
+    // difference, which a gauge reading may equal.
+    if (result.dim == pressure_dimension() && !(base.dim == pressure_dimension()) && !base.point)
+        result.absolute_pressure_difference = true;
     return result;
 }
 
