@@ -798,3 +798,24 @@ TEST_CASE("sheets: a friction loss and a column into a gauge cell, a mean into �
     }
     CHECK(std::find(found.begin(), found.end(), "Tank!B9 offset-scale") != found.end());
 }
+
+// Hazen-Williams as NFPA 13 prints it, p = 4.52·Q^1.85/(C^1.85·d^4.87) in psi/ft from gpm and
+// inches (from memory), fed from cells in L/min and mm through 3.785 L/gal and 25.4 mm/in (NIST
+// SP 811 (2008), B.8): the numbers convert the cells inside the powers and are no reference
+// values in the cells' own units. The bore left in mm is still reported.
+TEST_CASE("sheets: the US Hazen-Williams form fed from SI cells through conversions") {
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Flow", "950", "L/min") +
+        labelled_row(3, "C factor", "120", "-") + labelled_row(4, "Bore", "53.1", "mm") +
+        labelled_row(5, "Friction", "=4.52*(B2/3.785)^1.85/(B3^1.85*(B4/25.4)^4.87)", "psi/ft") +
+        labelled_row(6, "Friction, bore in mm", "=4.52*(B2/3.785)^1.85/(B3^1.85*B4^4.87)",
+                     "psi/ft") +
+        "</sheetData></worksheet>";
+    const auto found = cell_findings_of_one_sheet("Lines", sheet);
+    CHECK(std::none_of(found.begin(), found.end(), [](const std::string& f) {
+        return f.rfind("Lines!B5 ", 0) == 0 && f != "Lines!B5 trade-constant";
+    }));
+    CHECK(std::any_of(found.begin(), found.end(), [](const std::string& f) {
+        return f.rfind("Lines!B6 ", 0) == 0 && f != "Lines!B6 trade-constant";
+    }));
+}

@@ -2,6 +2,7 @@
 // divided by 100, empirical fits written on a scale (a number over a sum of readings, a
 // winding's inferred zero of resistance) and specific enthalpies reckoned from 0 °C.
 #include "check/formula/checker.hpp"
+#include "check/unit_counterparts.hpp"
 
 namespace plumb::formula_check {
 
@@ -180,7 +181,24 @@ bool checker::number_beside_one_cell(std::uint32_t node) const {
     // converts the cell's unit; it is no reference value (a wind profile's 10 m is).
     const double v = written_number(file_.nodes[number].range);
     const double decade = std::round(std::log10(v));
-    return !(v >= 100.0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12);
+    if (v >= 100.0 && std::abs(v / std::pow(10.0, decade) - 1.0) < 1e-12)
+        return false;
+    // (B6/3.785)^1.85 with B6 in L/min, (C6/25.4)^4.87 with C6 in mm (Hazen-Williams's US form
+    // fed from SI cells): the number takes the cell into the other system's unit (gpm, in;
+    // NIST SP 811 (2008), B.8), which is no reference value in the cell's own unit either.
+    const syntax::reference_value& cell =
+        file_.references[file_.nodes[a == expr_kind::reference ? n.lhs : n.rhs].lhs];
+    if (!cell.dim || cell.offset != nullptr || !(cell.scale > 0))
+        return true;
+    const std::optional<compact_dimension> dim = compact_dimension::fitted(*cell.dim);
+    if (!dim)
+        return true;
+    // Over the number the cell counts in a unit v times its own; under it, 1/v times.
+    const double other = a == expr_kind::reference ? cell.scale * v : cell.scale / v;
+    for (const unit_counterpart& u : unit_counterparts(*dim, cell.scale).others)
+        if (std::abs(other / u.si_scale - 1.0) < 2e-3)
+            return false;
+    return true;
 }
 
 // "21/(21 - O2)" with O2 in %, the excess-air ratio from the flue gas's oxygen (common
