@@ -565,8 +565,8 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
             w.reset();
         // "(t_1 + t_2)/2*1.8 + 32": a mean of °C readings taken to °F weighs 9/5, the degree's
         // ratio (NIST SP 811 (2008), B.8), which converts one reading and weighs nothing.
-        if (w && (*w == rational(9, 5) || *w == rational(5, 9) || *w == rational(-9, 5) ||
-                  *w == rational(-5, 9)))
+        if (w && ((std::abs(w->num()) == 9 && w->den() == 5) ||
+                  (std::abs(w->num()) == 5 && w->den() == 9)))
             w = rational(w->num() < 0 ? -1 : 1);
         // "p_b + p_sup/10" with p_sup in mbar g and p_b in kPa: the 10 takes the gauge
         // reading into the barometer's unit, and weighs nothing; "p_b + p_g/10" with both
