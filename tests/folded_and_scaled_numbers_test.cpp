@@ -1401,3 +1401,15 @@ TEST_CASE("a circle's 4/pi folded into the Reynolds number from a flow") {
           std::string::npos);
     fails_with(line, {"Re = 9.224*Q_bpd/(d_in*\u03BD_cSt)"}, plumb::rules::unit_scale);
 }
+
+// A bound typed with its unit beside a stress in another: 1.25 ksi is 8.618 MPa (NIST SP 811
+// (2008), B.8: 1 ksi = 6.894757 MPa). The advice says the bound in the other side's unit, not a
+// factor to multiply the typed value by, which would make it 8.62 ksi.
+TEST_CASE("a typed bound in another unit is advised in the other side's unit") {
+    const std::string bearing = "\u03C3_s : MPa\n";
+    const auto r = run(bearing, "\u03C3_s <= 1.25 {ksi}");
+    const auto& d = first_under(r, plumb::rules::unit_scale);
+    CHECK(std::any_of(d.notes.begin(), d.notes.end(), [](const auto& n) {
+        return n.message.find("8.618 {MPa}") != std::string::npos;
+    }));
+}

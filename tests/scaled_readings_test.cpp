@@ -805,3 +805,36 @@ TEST_CASE("a pressure made by squaring a flow over its K-factor is a difference"
     const std::string head = "q : L/min\nK : L/(min*bar^0.5)\np_g : bar(g)\n";
     passes(head, {"p_g = (q/K)^2", "q = K*sqrt(p_g)"});
 }
+
+// Barlow's hoop stress on a gauge pressure with a surge's rise added, σ = (p + Δp)·D/(2t)
+// (common practice): the sum is the gauge reading the wall sees. And API 520's percent back
+// pressure, 100·p_b/p_set in %, a gauge reading over a gauge reading by its definition (API 520
+// Part I, from memory); the same ratio as a pure number stays a gas law's slip.
+TEST_CASE("a gauge reading with a rise added over a wall, and a percentage of set pressure") {
+    const std::string penstock = "p_st : kPag\n\u0394p_J : kPa \"surge rise\"\nD_mm, t_w : mm\n"
+                                 "\u03C3_h : MPa\np_bk, p_set : barg\nBP : %\nr_c : 1\n";
+    passes(penstock, {"\u03C3_h = (p_st + \u0394p_J)*D_mm/(2*t_w*1000)", "BP = 100*p_bk/p_set"});
+    fails_with(penstock, {"\u03C3_h = (p_st + \u0394p_J)*D_mm/(2*t_w)"}, plumb::rules::unit_scale);
+    fails_with(penstock, {"r_c = p_bk/p_set"}, plumb::rules::offset_scale);
+}
+
+// A pressure described as a water column, ρ·g·h, is a difference, as "hydrostatic" is (White,
+// Fluid Mechanics, 8th ed., ch. 2, from memory): a gauge set point less it is a gauge reading.
+TEST_CASE("a pressure described as a water column is a difference") {
+    const std::string network = "p_set, p_top : kPag\np_z : kPa \"water column over the top\"\n"
+                                "p_c : kPa \"distillation column top pressure\"\n";
+    passes(network, {"p_top = p_set - p_z"});
+    fails_with(network, {"p_top = p_set - p_c"}, plumb::rules::offset_scale);
+}
+
+// The rate's temperature correction θ^(T − 20) (van 't Hoff-Arrhenius as the water trades write
+// it; common practice): the exponent turned round is said to count the degrees below.
+TEST_CASE("a temperature correction's exponent turned round is said so") {
+    const std::string lagoon = "k_20, k_T : 1/d\n\u03B8 : 1\nT_w : \u00B0C\n";
+    const auto r = run(lagoon, "k_T = k_20*\u03B8^(20 - T_w)");
+    CHECK(first_under(r, plumb::rules::temperature_correction).message.find("below a reference") !=
+          std::string::npos);
+    const auto right = run(lagoon, "k_T = k_20*\u03B8^(T_w - 20)");
+    CHECK(first_under(right, plumb::rules::temperature_correction)
+              .message.find("above a reference") != std::string::npos);
+}

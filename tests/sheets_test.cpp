@@ -819,3 +819,21 @@ TEST_CASE("sheets: the US Hazen-Williams form fed from SI cells through conversi
         return f.rfind("Lines!B6 ", 0) == 0 && f != "Lines!B6 trade-constant";
     }));
 }
+
+// The treatment trades name what a mass is of beside its unit (Metcalf & Eddy, from memory):
+// kg O2/d, lb BOD/d, kg N/d read as kg/d and lb/d; kN stays a force.
+TEST_CASE("sheets: a mass named for what it is of") {
+    for (const auto& [text, scale] :
+         std::initializer_list<std::pair<const char*, double>>{{"kg O2/d", 1.0 / 86400.0},
+                                                               {"kg O2/h", 1.0 / 3600.0},
+                                                               {"lb BOD/d", 0.45359237 / 86400.0},
+                                                               {"kg N/d", 1.0 / 86400.0}}) {
+        CAPTURE(text);
+        const auto unit = read_unit_text(text);
+        REQUIRE(unit.has_value());
+        CHECK(unit->scale == doctest::Approx(scale).epsilon(1e-9));
+    }
+    const auto force = read_unit_text("kN");
+    REQUIRE(force.has_value());
+    CHECK(force->scale == 1000.0);
+}

@@ -602,12 +602,9 @@ DN_KEY = ("an input plumb flags (not a formula cell): the nominal size DN is a d
           "has one")
 EXTRA = {
     "dh-network": [
-        ("Network!C39", "offset-scale",
-         "a correct cell plumb still flags: p_top = p_set - ρ·g·h, a gauge set point less the "
-         "water column's pressure (hydrostatics, White, Fluid Mechanics 8th ed. ch. 2); the "
-         "column's cell C36 is written kPa under a label that does not say 'difference', so "
-         "plumb reads it as an absolute reading")]
-        + [(f"Pipes!C{r}", "no-unit", DN_KEY) for r in range(5, 10)]
+        # Network!C39, p_top = p_set - ρ·g·h, was flagged until a row labelled a water column
+        # read as the difference it is.
+    ] + [(f"Pipes!C{r}", "no-unit", DN_KEY) for r in range(5, 10)]
         + [(f"DN!A{r}", "no-unit", DN_KEY) for r in range(5, 12)],
     "fire-water": [
         ("Demand!C27", "trade-constant", NOTE + " (8.34 lb per US gal of water)"),

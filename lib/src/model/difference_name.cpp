@@ -34,6 +34,13 @@ bool names_a_difference(std::string_view name, std::string_view description) {
     if (description.find("above atmospher") != std::string_view::npos ||
         description.find("above the atmospher") != std::string_view::npos)
         return true;
+    // "Water column over the diffusers": a liquid column's pressure, ρ·g·h, is its weight
+    // per area above the surface's, a difference as "hydrostatic" is (a distillation
+    // column's top pressure, a reading, says no "water column").
+    for (const std::string_view phrase :
+         {"water column", "liquid column", "column of water", "column of liquid"})
+        if (description.find(phrase) != std::string_view::npos)
+            return true;
     for (const std::string_view word :
          {"difference", "differential", "rise", "drop", "loss", "change", "increase", "decrease",
           "approach", "range", "gradient", "swing", "hydrostatic", "net", "driving"})

@@ -191,7 +191,31 @@ std::string as_declaration(std::string_view notation, std::string_view measures)
 // How the trades type units beside cells, as the notation spells them (common practice):
 // "in. w.g." for inches of water, "hr" for the hour, "CFM" in capitals, "kNm" for kN·m,
 // "sq ft", "bhp" (brake horsepower, a horsepower), "bara" (bar absolute).
+// "kg O2/d", "lb BOD/d", "mg/L as CaCO3"'s cousin "kg CaCO3/d": a mass named for what it is
+// of, as the treatment trades write it (Metcalf & Eddy, from memory); the unit is the mass's.
+std::string without_species(std::string t) {
+    static constexpr std::array<std::string_view, 6> masses{"kg", "g", "mg", "lb", "t", "tonne"};
+    static constexpr std::array<std::string_view, 14> species{
+        "O2",  "O\u2082", "CO2", "CO\u2082", "BOD", "BOD5",  "COD",
+        "TSS", "VSS",     "DS",  "N",        "P",   "NH3-N", "CaCO3"};
+    for (const std::string_view what : species)
+        for (std::size_t at = t.find(what); at != std::string::npos; at = t.find(what, at + 1)) {
+            const std::size_t end = at + what.size();
+            if (at < 2 || t[at - 1] != ' ' || (end < t.size() && t[end] != '/' && t[end] != ' '))
+                continue;
+            const std::size_t start = t.rfind(' ', at - 2);
+            const std::size_t begin = start == std::string::npos ? 0 : start + 1;
+            const std::string_view mass(t.data() + begin, at - 1 - begin);
+            if (std::find(masses.begin(), masses.end(), mass) == masses.end())
+                continue;
+            t.erase(at - 1, what.size() + 1);
+            break;
+        }
+    return t;
+}
+
 std::string trade_spelling(std::string t) {
+    t = without_species(std::move(t));
     static constexpr std::array<std::pair<std::string_view, std::string_view>, 118> whole{{
         {"in. w.g.", "inH2O"},
         {"in.w.g.", "inH2O"},

@@ -1145,9 +1145,17 @@ typed_term checker::eval_factors(std::uint32_t index) {
                                      index == side_hint_node_ && side_hint_ != nullptr &&
                                      side_hint_->known && side_hint_->dim == power_dim &&
                                      has_factor_of_dimension(index, volume_flow_dim, 1);
+        // BP = 100*p_bk/p_set in %: API 520's back pressure, overpressure and accumulation
+        // are percentages of the set pressure, a gauge reading over a gauge reading by
+        // definition (API 520 Part I, from memory); a ratio in a pure number stays a gas law's.
+        const bool percent_of_gauge =
+            result.known && result.dim.is_dimensionless() && index == side_hint_node_ &&
+            side_hint_ != nullptr && side_hint_->known && side_hint_->dim.is_dimensionless() &&
+            side_hint_->scale == 0.01 && file_.nodes[index].kind == expr_kind::divide &&
+            holds_gauge(file_.nodes[index].lhs) && holds_gauge(file_.nodes[index].rhs);
         if (result.known && (result.dim == length_dimension() || result.dim == force_dimension() ||
                              wall_stress || ring_tension || jet || bearing_area || head_without_g ||
-                             column_gradient || hydraulic_power)) {
+                             column_gradient || hydraulic_power || percent_of_gauge)) {
             result.offset = nullptr;
             result.point = false;
             result.origin = 0.0;
@@ -1482,17 +1490,27 @@ typed_term checker::temperature_correction(const typed_term& base, const typed_t
     // A reading converted to another scale ((T_F - 32)/1.8) counts that scale's degrees.
     const double degree = exponent.offset != nullptr ? exponent.offset->factor : exponent.scale;
     if (std::isfinite(degree) && std::abs(degree - 1.0) < 1e-9) {
+        // "θ^(20 - T_w)": the reference less the reading counts the degrees below it; a rate
+        // that rises with temperature takes θ^(T - 20) (common practice).
+        const syntax::expr_node& e = file_.nodes[syntax::inside_brackets(file_, exponent_node)];
+        const bool below =
+            e.kind == expr_kind::subtract &&
+            file_.nodes[syntax::inside_brackets(file_, e.lhs)].kind == expr_kind::number;
         diagnostic& d =
             report(rules::temperature_correction,
-                   fmt::format("the exponent {} is read as the kelvins (degrees Celsius) above a "
+                   fmt::format("the exponent {} is read as the kelvins (degrees Celsius) {} a "
                                "reference temperature, as in a rate's temperature correction",
-                               quote(exponent_node)),
+                               quote(exponent_node), below ? "below" : "above"),
                    file_.nodes[exponent_node].range);
         d.level = severity::note;
         d.notes.push_back({"the number raised to it is then per kelvin: the formula holds "
                            "only with the reference on the scale it was fitted on, most "
                            "often 20 °C",
                            {}});
+        if (below)
+            d.notes.push_back({"a rate that rises with temperature takes the reading less the "
+                               "reference, θ^(T - 20)",
+                               {}});
         return result;
     }
     diagnostic& d =

@@ -451,6 +451,11 @@ bool checker::pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
             break;
         case expr_kind::add:
         case expr_kind::subtract:
+            // "(p_st + Δp_J)*D/(2*t)": a gauge reading plus a surge's rise is the gauge
+            // reading the wall sees (Barlow's hoop stress; common practice), one factor, whose
+            // sum has been checked as such.
+            if (with_gauge && holds_gauge(n.lhs) != holds_gauge(n.rhs))
+                break;
             pending.push_back(n.lhs);
             pending.push_back(n.rhs);
             break;

@@ -645,6 +645,24 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                            "of lbf, with g in the unit already; {g_n} turns a mass into a "
                            "force in N where the mass is in kg",
                            {}});
+    // "σ_s <= 1.25 {ksi}" beside σ_s in MPa: a value typed with its unit reads right to a
+    // person, but its number is not in the other side's; the cure is to type it in that unit.
+    const syntax::expr_node& typed = file_.nodes[syntax::inside_brackets(file_, op.node)];
+    const syntax::expr_node& plain = file_.nodes[syntax::inside_brackets(file_, reference.node)];
+    const symbol_entry* plain_entry =
+        plain.kind == expr_kind::symbol ? symbols_.find(text(plain.range)) : nullptr;
+    if (typed.kind == expr_kind::quantity && !file_.quantities[typed.lhs].constant &&
+        plain_entry != nullptr && !plain_entry->unit_text.empty() &&
+        plain_entry->offset_unit == nullptr && plain_entry->si_factor > 0 &&
+        std::isfinite(quantity_si_value(typed))) {
+        const double value = quantity_si_value(typed) / plain_entry->si_factor;
+        const double step = std::pow(10.0, std::floor(std::log10(std::abs(value))) - 3);
+        d.notes.push_back(
+            {fmt::format("type it in the unit of {}: {} {{{}}}", quote(reference.node),
+                         format_factor(std::round(value / step) * step), plain_entry->unit_text),
+             {}});
+        return false;
+    }
     if (counted_both_ways || in_place_offered)
         d.notes.push_back({fmt::format("if {} was meant as the conversion, write {} in its "
                                        "place; if it is a coefficient of the formula, {} {} by {}",
