@@ -1295,3 +1295,24 @@ TEST_CASE("water's gradient beside a density is no missing g") {
     CHECK(density_named);
     CHECK_FALSE(g_asked);
 }
+
+// A half-life from a first-order rate, t½ = ln 2/k (0.693; common practice): written
+// 0.693*k the sides are reciprocals, and the note says the rate belongs below the line rather
+// than offering 0.693 as a fit's constant with units. A dead load in kN/m² from kg/m² over
+// 1000 lacks a g, which its own note names; 1000 is offered as no fit's constant.
+TEST_CASE("reciprocal sides and a power of ten are no fit's constant") {
+    const std::string decay = "t_half : d\nk_tot : 1/d\ng_k : kN/m^2\nm_dead : kg/m^2\n";
+    const auto r = plumb::test::check_after(decay, "t_half = 0.693*k_tot");
+    const auto& d = plumb::test::first_under(r, plumb::rules::side_mismatch);
+    CHECK(std::any_of(d.notes.begin(), d.notes.end(), [](const auto& n) {
+        return n.message.find("reciprocals of each other: 'k_tot' may belong below the line, "
+                              "as in 0.693/k_tot") != std::string::npos;
+    }));
+    const auto g = plumb::test::check_after(decay, "g_k = m_dead/1000");
+    const auto& dg = plumb::test::first_under(g, plumb::rules::side_mismatch);
+    CHECK(std::none_of(dg.notes.begin(), dg.notes.end(),
+                       [](const auto& n) { return n.message.find("1000?") != std::string::npos; }));
+    CHECK(std::any_of(dg.notes.begin(), dg.notes.end(), [](const auto& n) {
+        return n.message.find("is a g missing") != std::string::npos;
+    }));
+}

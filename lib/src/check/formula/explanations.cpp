@@ -559,6 +559,25 @@ void checker::note_bare_number_side(diagnostic& d, std::span<const operand> side
         if (!number_left && !number_right)
             continue;
         const std::string number = display_text((number_left ? left : right).range);
+        // "t_half = 0.693*k": a side the reciprocal of the other (a time against a rate)
+        // is a symbol on the wrong side of the line, ln 2 over the rate; no factor of units
+        // makes a time of a rate.
+        const typed_term& here = sides[i].type;
+        const typed_term& there = sides[1 - i].type;
+        if (here.known && there.known && !here.dim.is_dimensionless() &&
+            (here.dim * there.dim).is_dimensionless()) {
+            const syntax::expr_node& symbol = number_left ? right : left;
+            d.notes.push_back(
+                {fmt::format("the two sides are reciprocals of each other: '{}' may belong "
+                             "below the line, as in {}/{}",
+                             display_text(symbol.range), number, display_text(symbol.range)),
+                 {}});
+            return;
+        }
+        // "g_k = m/1000" (kN/m² from kg/m²): a power of ten converts; the note below names
+        // what is missing (a g), and no unit of a fit's constant is in it.
+        if (near_power_of_ten(written_number((number_left ? left : right).range), 1e-12))
+            return;
         d.notes.push_back({fmt::format("if {} is an empirical factor that carries units of "
                                        "its own, write it as {}? for plumb to work out its "
                                        "dimension, and state it once reviewed ({}?[...])",
