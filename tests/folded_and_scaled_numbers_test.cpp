@@ -1413,3 +1413,15 @@ TEST_CASE("a typed bound in another unit is advised in the other side's unit") {
         return n.message.find("8.618 {MPa}") != std::string::npos;
     }));
 }
+
+// A tank's volume, a cylinder with hemispherical ends, π·D²·L/4 + π·D³/6 (common practice), with
+// D in mm and L in m: each term folds its digit into its own power of ten (4e6, 6e9; 10⁶ mm² and
+// 10⁹ mm³ a cubic metre, SI Brochure 9th ed.), and read together they reconcile; one power
+// short in either term is still reported.
+TEST_CASE("two terms of a sum, each with its own folded power of ten") {
+    const std::string tank = "V_w : m^3\nD_t : mm\nL_t : m\n";
+    passes(tank, {"V_w = pi*D_t^2*L_t/4e6 + pi*D_t^3/6e9"});
+    fails_with(tank,
+               {"V_w = pi*D_t^2*L_t/4e6 + pi*D_t^3/6e6", "V_w = pi*D_t^2*L_t/4e3 + pi*D_t^3/6e9"},
+               plumb::rules::unit_scale);
+}

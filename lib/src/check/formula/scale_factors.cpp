@@ -346,6 +346,37 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
             }
         }
     }
+    // "π*D^2*L/4e6 + π*D^3/6e9" (a tank's barrel and its two hemispherical ends, D in mm): each
+    // term folds its own digit into its own power of ten, which only read together reconcile.
+    if (parts.size() > 1 && parts.size() <= 4) {
+        std::array<std::array<scale_literal, most_numbers>, 4> all{};
+        std::vector<scaled_operand> together(parts.begin(), parts.end());
+        int folded = 0;
+        for (std::size_t i = 0; i < parts.size(); ++i) {
+            if (parts[i].literals.size() > most_numbers)
+                return false;
+            std::copy(parts[i].literals.begin(), parts[i].literals.end(), all[i].begin());
+            for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
+                const scale_literal& l = parts[i].literals[k];
+                if (!(l.value > 0) || !std::isfinite(l.value) || l.power_of_ten ||
+                    file_.nodes[l.node].kind != expr_kind::number)
+                    continue;
+                if (const std::optional<double> power =
+                        folded_power_of_ten(ops, index, i, l, false)) {
+                    all[i][k] = power_of_ten_literal(l, *power);
+                    ++folded;
+                }
+            }
+            together[i].literals = {all[i].data(), parts[i].literals.size()};
+        }
+        if (folded >= 2) {
+            const reconciliation r = reconcile(together);
+            if (r.agree) {
+                unit = r.unit;
+                return true;
+            }
+        }
+    }
     return false;
 }
 
