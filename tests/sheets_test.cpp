@@ -837,3 +837,21 @@ TEST_CASE("sheets: a mass named for what it is of") {
     REQUIRE(force.has_value());
     CHECK(force->scale == 1000.0);
 }
+
+// A gauge reading in bar(g) taken to psi by 14.5 (14.5038 psi per bar, NIST SP 811 (2008), B.8)
+// with the atmosphere, 14.7 psi, added: absolute, set under psig. The finding is the zero the
+// 14.7 moves, as the notation says it, not a factor of 14.5 the formula already holds.
+TEST_CASE("sheets: a converted gauge reading plus the atmosphere into a gauge cell") {
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Supply pressure", "3", "bar(g)") +
+        labelled_row(3, "Supply pressure, US gauge", "=B2*14.5", "psig") +
+        labelled_row(4, "Supply pressure, US, slip", "=B2*14.5+14.7", "psig") +
+        labelled_row(5, "Supply pressure, US absolute", "=B2*14.5+14.7", "psia") +
+        "</sheetData></worksheet>";
+    const auto found = cell_findings_of_one_sheet("Skid", sheet);
+    CHECK(std::find(found.begin(), found.end(), "Skid!B4 offset-scale") != found.end());
+    CHECK(std::none_of(found.begin(), found.end(), [](const std::string& f) {
+        return f == "Skid!B4 unit-scale" || (f.rfind("Skid!B3 ", 0) == 0) ||
+               (f.rfind("Skid!B5 ", 0) == 0 && f != "Skid!B5 trade-constant");
+    }));
+}

@@ -40,6 +40,8 @@ EXTRA = {
          "limit", "Roof!C46 result-unit"),
     ],
     "kitchen-hot-water": [
+        ("a note on a planted cell, beside its error: 500 read as water's heat capacity per "
+         "gpm; beside gal/h the scale rule names the 60", "Heater!C40 trade-constant"),
         (_NOTE + "8.34 lb/gal × 1 Btu/(lb·°F) in gal/h × 8.34 × ΔT, water's heat capacity per "
          "volume", "Heater!C20 trade-constant"),
         (_NOTE + "4.19 kJ/(kg·K) × 1 kg/L in L/h × 4.19 × ΔT / 3600",
@@ -66,7 +68,6 @@ RENAMED = {
     "plumbing-sizing": {
         "Sizing!C28": ("result-unit", "0.433 not read as γ_w beside metres, so the product is "
                        "a length; the message says so and gives 1.421 psi/m"),
-        "Sizing!C42": ("unit-scale", "in misleading words (below)"),
     },
     "roof-drainage": {
         "Roof!C41": ("result-unit", _MANNING),
@@ -76,7 +77,6 @@ RENAMED = {
         "Heater!C16": ("sum-mismatch", "its message names the −32 as an offset that a "
                        "difference does not take, and 1 K = 1.8 Δ°F"),
         "Heater!C24": ("result-unit", "8.34 not read as water's heat capacity beside L/h"),
-        "Heater!C40": ("result-unit", "500 not read as water's heat capacity beside gal/h"),
     },
     "steam-condensate": {
         "Condensate!C49": ("result-unit", "500 not read as water's heat capacity beside an "
@@ -86,9 +86,6 @@ RENAMED = {
 
 MESSAGES = {
     "plumbing-sizing": {
-        "Sizing!C42": ("'the value shown is 6.89476 times too small ... convert them in the "
-                       "formula': wrong; the ×6.895 psi to kPa is there and right, the slip is "
-                       "the +101.325 kPa atmosphere under a kPa g label"),
         "Branches!H7": ("'3280.84 times too small ... its coefficient 0.4085 aside': the "
                         "factor treats the /25.4 (mm to in) as absent; the slip is L/s where "
                         "gpm is wanted, 15.85 too small"),

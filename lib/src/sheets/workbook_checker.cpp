@@ -806,7 +806,35 @@ class workbook_checker {
             // for the cell, say which term of a sum is off ("=C22*C23 + C24" in kW, C24 in kW).
             out_.resize(before);
             take_verdict(*verdict, f, formula);
+        } else if (verdict &&
+                   zero_against_scale({out_.data() + before, out_.size() - before}, *verdict)) {
+            // "=C47*14.5+14.7" into psig from bar(g): the notation, which knew the cell's unit,
+            // read the 14.5 as the conversion and the 14.7 as the atmosphere added; the formula
+            // alone leaves the 14.5 a coefficient and reports a scale that is none.
+            out_.resize(before);
+            take_verdict(*verdict, f, formula);
         }
+    }
+
+    // Whether the notation found the atmosphere, a gauge scale's zero, where the workbook's own
+    // words found only a factor of scale. (A temperature conversion run the wrong way is
+    // better told in the workbook's words.)
+    static bool zero_against_scale(std::span<const diagnostic> workbook,
+                                   std::span<const diagnostic> notation) {
+        const auto faults_under = [](std::span<const diagnostic> found, std::string_view rule) {
+            return std::any_of(found.begin(), found.end(), [&](const diagnostic& d) {
+                return d.level != severity::note && d.rule == rule;
+            });
+        };
+        const bool atmosphere =
+            std::any_of(notation.begin(), notation.end(), [](const diagnostic& d) {
+                return d.level != severity::note && d.rule == rules::offset_scale &&
+                       d.message.find("atmosphere") != std::string::npos;
+            });
+        return atmosphere && !faults_under(workbook, rules::offset_scale) &&
+               std::all_of(workbook.begin(), workbook.end(), [](const diagnostic& d) {
+                   return d.level == severity::note || d.rule == rules::unit_scale;
+               });
     }
 
     // Whether two checks of a cell found faults under the same rules, but not all in the same
