@@ -823,15 +823,16 @@ TEST_CASE("sheets: the US Hazen-Williams form fed from SI cells through conversi
 // The treatment trades name what a mass is of beside its unit (Metcalf & Eddy, from memory):
 // kg O2/d, lb BOD/d, kg N/d read as kg/d and lb/d; kN stays a force.
 TEST_CASE("sheets: a mass named for what it is of") {
-    for (const auto& [text, scale] :
+    for (const auto& spelled :
          std::initializer_list<std::pair<const char*, double>>{{"kg O2/d", 1.0 / 86400.0},
                                                                {"kg O2/h", 1.0 / 3600.0},
                                                                {"lb BOD/d", 0.45359237 / 86400.0},
                                                                {"kg N/d", 1.0 / 86400.0}}) {
+        const char* text = spelled.first;
         CAPTURE(text);
         const auto unit = read_unit_text(text);
         REQUIRE(unit.has_value());
-        CHECK(unit->scale == doctest::Approx(scale).epsilon(1e-9));
+        CHECK(unit->scale == doctest::Approx(spelled.second).epsilon(1e-9));
     }
     const auto force = read_unit_text("kN");
     REQUIRE(force.has_value());
