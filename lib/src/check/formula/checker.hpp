@@ -153,6 +153,14 @@ inline std::string absolute_symbol(const unit_definition& unit) {
     return symbol;
 }
 
+// A value rounded to `digits` significant digits, as a message quotes a measure (8.618 MPa,
+// 12.7 psi).
+inline double rounded_to_digits(double v, int digits) {
+    const double step =
+        std::pow(10.0, std::floor(std::log10(std::max(std::abs(v), 1e-9))) - digits + 1);
+    return std::round(v / step) * step;
+}
+
 inline std::string describe(const dimension& d) {
     const std::string_view name = quantity_name(d);
     if (name.empty() || d.is_dimensionless())

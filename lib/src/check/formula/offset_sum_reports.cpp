@@ -135,10 +135,7 @@ void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_v
             shown_pascals = u.pascals;
         }
     const auto in_shown = [&](double p, int digits) {
-        const double v = p / shown_pascals;
-        const double step =
-            std::pow(10.0, std::floor(std::log10(std::max(std::abs(v), 1e-9))) - digits + 1);
-        return format_factor(std::round(v / step) * step);
+        return format_factor(rounded_to_digits(p / shown_pascals, digits));
     };
     diagnostic& d =
         report(rules::offset_scale,

@@ -375,9 +375,13 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     };
     // "q_gpm = q_L*42/1440" from bbl/d: 42 US gallons a barrel (NIST SP 811 (2008), B.8),
     // the conversion it is where the formula counts in both, whatever else is off.
+    // The formula is searched once, at the first 42 met.
+    std::optional<bool> counts_barrels_and_gallons;
     const auto gallons_a_barrel = [&](const scale_literal& l) {
         if (l.value != 42.0 || file_.nodes[l.node].kind != expr_kind::number)
             return false;
+        if (counts_barrels_and_gallons)
+            return *counts_barrels_and_gallons;
         bool barrels = false;
         bool gallons = false;
         syntax::search_formula(file_, *current_, [&](std::uint32_t, const syntax::expr_node& n) {
@@ -393,7 +397,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                 }
             return search_step::descend;
         });
-        return barrels && gallons;
+        counts_barrels_and_gallons = barrels && gallons;
+        return *counts_barrels_and_gallons;
     };
     // "m*v/(3600*pi*D_mm^2/4e6)": a circle's 4 folded into the 10⁶ of mm² to m², as the
     // scales' search reads it where the units agree; the factor advised keeps the 10⁶.
@@ -655,11 +660,11 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         plain_entry != nullptr && !plain_entry->unit_text.empty() &&
         plain_entry->offset_unit == nullptr && plain_entry->si_factor > 0 &&
         std::isfinite(quantity_si_value(typed))) {
-        const double value = quantity_si_value(typed) / plain_entry->si_factor;
-        const double step = std::pow(10.0, std::floor(std::log10(std::abs(value))) - 3);
         d.notes.push_back(
             {fmt::format("type it in the unit of {}: {} {{{}}}", quote(reference.node),
-                         format_factor(std::round(value / step) * step), plain_entry->unit_text),
+                         format_factor(rounded_to_digits(
+                             quantity_si_value(typed) / plain_entry->si_factor, 4)),
+                         plain_entry->unit_text),
              {}});
         return false;
     }
