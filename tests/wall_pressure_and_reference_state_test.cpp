@@ -843,3 +843,30 @@ TEST_CASE("a gauge reading less an absolute one names the site's barometer") {
     CHECK(plumb::test::says(first_under(sea, plumb::rules::offset_scale),
                             "off by 101325 Pa, the atmosphere the gauge reads from"));
 }
+
+// A sprinkler's p = (q/K)² (EN 12845 and NFPA 13, from memory) and a column's ρ·g·h are the
+// pressure above what lies at their far end: the atmosphere, for a head discharging into a
+// room or an open tank. Set alone equal to a pressure the file calls absolute, the barometer
+// is missing (common practice); a barometer's own column (p_b = ρ_Hg·g·h, its top a vacuum)
+// is absolute, and so is the column plus the barometer.
+TEST_CASE("an absolute pressure set equal to a drop or a column alone") {
+    const std::string decl =
+        "p_fa : kPa \"vessel pressure, absolute\"\np_ha : bar(a)\n"
+        "p_b : kPa \"site barometer\"\np_h : bar(g)\nΔp : kPa \"drop across the valve\"\n"
+        "p_bot : psia\nq : L/min\nK : L/(min*bar^0.5)\nρ, ρ_Hg : kg/m^3\nh, h_Hg : m\nh_ft : "
+        "ft\nSG : 1\n";
+    const auto r = run(decl, "p_fa = (q/K)^2*100");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    const plumb::diagnostic& d = first_under(r, plumb::rules::offset_scale);
+    CHECK(d.level == plumb::severity::warning);
+    CHECK(plumb::test::says(d, "'p_fa' (vessel pressure, absolute) is an absolute pressure, but "
+                               "'(q/K)^2*100' is a pressure difference alone"));
+    CHECK(plumb::test::says(d, "add the site's barometer"));
+    fails_with(decl,
+               {"p_ha = (q/K)^2", "p_bot = 0.433*SG*h_ft", "p_fa = ρ*{g_n}*h/1000",
+                "p_fa = ρ*9.81*h/1000"},
+               plumb::rules::offset_scale);
+    passes(decl, {"p_h = (q/K)^2", "p_fa = (q/K)^2*100 + p_b", "p_fa = p_b + ρ*{g_n}*h/1000",
+                  "Δp = (q/K)^2*100", "p_b = ρ_Hg*{g_n}*h_Hg/1000"});
+    passes(decl, {"p_fa = p_b + ρ*9.81*h/1000"}, 1);
+}

@@ -1136,6 +1136,7 @@ class checker {
                                                                       double& unit) const;
     static bool said_absolute(const symbol_entry& e);
     [[gnu::noinline]] void report_barometer_added_to_absolute(std::span<const operand> terms);
+    [[gnu::noinline]] void report_absolute_set_to_difference(std::span<const operand> sides);
     bool names_a_vacuum(std::uint32_t node) const;
     [[gnu::noinline]] bool report_share_of_gauge_beside_absolute(std::span<const operand> terms);
     std::optional<double> unit_the_sum_needs() const;

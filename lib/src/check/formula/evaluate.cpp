@@ -303,6 +303,10 @@ void checker::check_formula(const syntax::formula& f) {
             if (equation && sides.size() == 2 && sides[0].type.dim == frequency_dim &&
                 out_.size() == findings_before) [[unlikely]]
                 report_angular_frequency_as_cycles(sides);
+            if (equation && sides.size() == 2 && out_.size() == findings_before &&
+                (sides[0].type.absolute_pressure_difference ||
+                 sides[1].type.absolute_pressure_difference)) [[unlikely]]
+                report_absolute_set_to_difference(sides);
         }
         return;
     }

@@ -726,4 +726,56 @@ bool checker::report_share_of_gauge_beside_absolute(std::span<const operand> ter
     return true;
 }
 
+// "p_abs = (q/K)^2", "p_bot = ρ*g*h" with p_abs called absolute (psia, bar a, or "absolute" in
+// its words): a drop across an orifice or a column of liquid is the pressure above what lies
+// at its far end, the atmosphere for a sprinkler head or an open tank, so alone it gives a
+// gauge reading (common practice). Not a barometer's column (p_b = ρ_Hg*g*h), whose top is
+// a vacuum; a warning, since a column under a sealed vacuum reads absolute too.
+void checker::report_absolute_set_to_difference(std::span<const operand> sides) {
+    for (std::size_t k = 0; k < 2; ++k) {
+        const operand& absolute = sides[k];
+        const operand& difference = sides[1 - k];
+        if (!difference.type.absolute_pressure_difference || !absolute.type.known ||
+            absolute.type.offset != nullptr || !(absolute.type.dim == pressure_dimension()))
+            continue;
+        const std::uint32_t at = syntax::inside_brackets(file_, absolute.node);
+        if (file_.nodes[at].kind != expr_kind::symbol)
+            continue;
+        const std::string_view name = text(file_.nodes[at].range);
+        const symbol_entry* e = symbols_.find(name);
+        if (e == nullptr || e->offset_unit != nullptr || !said_absolute(*e) ||
+            names_the_atmosphere(name, e->description))
+            continue;
+        // Nothing on the other side may be absolute already: "p_abs = p_top*ρ*g*h/p_ref"
+        // scales an absolute reading.
+        const bool holds_absolute = syntax::search_subtree(
+            file_, difference.node, [&](std::uint32_t, const syntax::expr_node& n) {
+                if (n.kind != expr_kind::symbol)
+                    return search_step::descend;
+                const std::string_view s = text(n.range);
+                const symbol_entry* o = symbols_.find(s);
+                return o != nullptr &&
+                               (said_absolute(*o) || names_the_atmosphere(s, o->description))
+                           ? search_step::found
+                           : search_step::descend;
+            });
+        if (holds_absolute)
+            continue;
+        diagnostic& d =
+            report(rules::offset_scale,
+                   fmt::format("{} is an absolute pressure, but {} is a pressure difference alone: "
+                               "it counts from the pressure at its far end, the atmosphere for a "
+                               "column or an orifice open to it",
+                               quote(absolute.node), quote(difference.node)),
+                   file_.nodes[difference.node].range);
+        d.level = severity::warning;
+        add_term(d, absolute);
+        add_term(d, difference, true);
+        d.notes.push_back({"add the site's barometer (or the pressure at the column's top) to "
+                           "give an absolute pressure, or declare the side a gauge reading",
+                           {}});
+        return;
+    }
+}
+
 } // namespace plumb::formula_check
