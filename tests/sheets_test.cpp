@@ -856,3 +856,39 @@ TEST_CASE("sheets: a converted gauge reading plus the atmosphere into a gauge ce
                (f.rfind("Skid!B5 ", 0) == 0 && f != "Skid!B5 trade-constant");
     }));
 }
+
+// "tons" over a chiller's rows is the ton of refrigeration, 12 000 Btu/h = 3.517 kW (NIST SP
+// 811 (2008), B.8: 3.516853 kW); over a haul road's it is the short ton, 2000 lb = 907.18 kg.
+// The plural is read as what the cell computes: a power, or a mass. A stray 1000 in a row of
+// tons of refrigeration is then named, and a result that is neither stays unread.
+TEST_CASE("sheets: 'tons' read as refrigeration or as mass by what the cell computes") {
+    const std::string sheet = "<worksheet><sheetData>" + labelled_row(2, "Row load", "120", "kW") +
+                              labelled_row(3, "Row load", "=B2/3.517", "tons") +
+                              labelled_row(4, "Row load, slip", "=B2*1000/3.517", "tons") +
+                              labelled_row(5, "Truck payload", "18000", "kg") +
+                              labelled_row(6, "Truck payload", "=B5/907.2", "tons") +
+                              labelled_row(7, "Truck payload, slip", "=B5/1000/907.2", "tons") +
+                              labelled_row(8, "Haul distance", "=B2/B2*3", "tons") +
+                              "</sheetData></worksheet>";
+    const auto found = cell_findings_of_one_sheet("Plant", sheet);
+    CHECK(std::none_of(found.begin(), found.end(), [](const std::string& f) {
+        return f.rfind("Plant!B3 ", 0) == 0 || f.rfind("Plant!B6 ", 0) == 0;
+    }));
+    CHECK(std::find(found.begin(), found.end(), "Plant!B4 unit-scale") != found.end());
+    CHECK(std::find(found.begin(), found.end(), "Plant!B7 unit-scale") != found.end());
+}
+
+// A cooling tower's ton, 15 000 Btu/h (CTI, from memory): =C15/15000 under "tons" reads so,
+// where a refrigeration ton would make the cell 1.25 times off.
+TEST_CASE("sheets: 'tons' of a cooling tower") {
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Heat rejected", "4.2e6", "Btu/h") +
+        labelled_row(3, "Heat rejected, cooling tower tons", "=B2/15000", "tons") +
+        labelled_row(4, "Heat rejected, cooling tower tons, slip", "=B2/12000", "tons") +
+        "</sheetData></worksheet>";
+    const auto found = cell_findings_of_one_sheet("Tower", sheet);
+    CHECK(std::none_of(found.begin(), found.end(),
+                       [](const std::string& f) { return f.rfind("Tower!B3 ", 0) == 0; }));
+    CHECK(std::any_of(found.begin(), found.end(),
+                      [](const std::string& f) { return f.rfind("Tower!B4 ", 0) == 0; }));
+}

@@ -558,11 +558,6 @@ EXTRA = {
     "cooling-tower": [
         ("Tower!C14", "trade-constant", NOTE + " (4.19 kW per L/s per K, ρ·c_p of water)"),
         ("Tower!C15", "trade-constant", NOTE + " (500 Btu/h per gpm per °F, ρ·c_p of water)"),
-        ("Tower!C17", "no-unit",
-         "a correct cell plumb still flags: =C15/15000, heat rejected in cooling tower tons of "
-         "15 000 Btu/h (CTI, from memory); 'tons' is not in plumb's table, and its suggestions "
-         "'ton' (a mass) and 'tonR' (the refrigeration ton, 12 000 Btu/h) are both wrong here. "
-         "A sidecar line 'measure tons = 15000 Btu/h' clears it (tried in a scratch copy)"),
         ("Tower!C27", "result-unit",
          "a correct cell plumb still flags: =C25*0.65, TDS ≈ 0.65 × conductivity (common "
          "practice, 0.55 to 0.70 by water); the 0.65 carries (mg/L)/(µS/cm), an empirical "

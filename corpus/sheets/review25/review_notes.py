@@ -24,10 +24,6 @@ EXTRA = {
         (TC + ": 500 lb/h per gpm", "Feed!C38 trade-constant"),
     ],
     "datacentre-pue": [
-        ("a correct cell plumb still flags: 'tons' (of refrigeration, the US trade's word) is not "
-         "read; it suggests 'ton', which plumb reads as the short ton (a mass)", "Load!C12 no-unit"),
-        ("a correct cell plumb still flags: chiller power tons × kW/ton; C12's unit was not read, so "
-         "it is taken as kW and a 3.517 scale is blamed on this cell", "Load!C15 unit-scale"),
         (TC + ": 1.08 as ρ·c_p of standard air", "Load!C26 trade-constant"),
         ("a correct cell plumb still flags: ρ = p/(R·T) with 101325 Pa and 287 J/(kg·K) typed in "
          "(coherent SI; common practice)", "Load!C33 result-unit"),
@@ -37,18 +33,11 @@ EXTRA = {
         (TC, "Racks!F7 trade-constant"), (TC, "Racks!F8 trade-constant"),
         (TC, "Racks!F10 trade-constant"),
     ],
-    "wetwell-cycle": [
-        ("a correct cell plumb still flags: =CEILING(h*1000,50) in mm is read as 1000 too small "
-         "(CEILING(h,0.05) in m and ROUNDUP(h*1000,-1) in mm pass; probes/probe1.xlsx)",
-         "WetWell!C24 unit-scale"),
-    ],
 }
 MISSED = {}
 RENAMED = {
     "fertigation": {"Mix!C18": "result-unit"},
-    "datacentre-pue": {"Load!C13": "no-unit", "Load!C27": "result-unit",
+    "datacentre-pue": {"Load!C27": "result-unit",
                        "Racks!F9": "result-unit"},
 }
-RENOTE = {"Load!C13": ("reported only because 'tons' does not read as a unit; the wrong-way "
-                       "3.517 itself is not found (with the sidecar line 'measure tons = 1 TR' "
-                       "it is: probes/dc)")}
+RENOTE = {}

@@ -727,6 +727,9 @@ class workbook_checker {
         // A copy: the tree's vectors stay put while cells are checked, but nothing here
         // should depend on that.
         const syntax::formula formula = lowered_.tree.formulas[f.lowered.formula];
+        if (written == nullptr) [[unlikely]]
+            if ((written = ton_by_what_is_computed(f, formula)) != nullptr)
+                f.result = from_unit(*written);
         // The verdict first: where the notation finds nothing wrong with "written unit =
         // formula", its notes are all there is to say, and the formula is not read again.
         std::optional<std::vector<diagnostic>> verdict;
@@ -1713,6 +1716,68 @@ class workbook_checker {
             at = end + 1;
         }
         return words <= 3 && unit;
+    }
+
+    // "Row load [tons]" over =D6/3.517: sheets write "tons" for the ton of refrigeration
+    // (12 000 Btu/h, NIST SP 811 (2008), B.8) as often as for the short ton, the ton the
+    // unit table holds. The plural is read as the one the formula computes, a power or a
+    // mass; any other result, or a sum of cells without a unit, leaves it unread.
+    const cell_unit* ton_by_what_is_computed(const formula_cell& f,
+                                             const syntax::formula& formula) {
+        const std::uint64_t key = book_key(f.sheet, f.source->at);
+        const auto unread = unread_.find(key);
+        if (unread == unread_.end())
+            return nullptr;
+        std::string word = unread->second.text;
+        std::transform(word.begin(), word.end(), word.begin(),
+                       [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+        if (word != "tons")
+            return nullptr;
+        std::vector<diagnostic> scratch;
+        const std::optional<value_type> computed =
+            check_sheet_formula(lowered_.tree, formula, no_symbols_, scratch);
+        if (!computed || computed->numeric)
+            return nullptr;
+        const dimension power = dimension::base(base_dimension::mass) *
+                                dimension::base(base_dimension::length).pow(rational(2)) /
+                                dimension::base(base_dimension::time).pow(rational(3));
+        const bool refrigeration = computed->dim == power;
+        if (!refrigeration && !(computed->dim == dimension::base(base_dimension::mass)))
+            return nullptr;
+        auto unit = read_unit_text(refrigeration ? "TR" : "ton", units_.measures);
+        if (!unit)
+            return nullptr;
+        // A cooling tower's ton is 15 000 Btu/h, the heat it rejects for a refrigeration ton
+        // with the compressor's work (CTI, from memory): read so where the row or the formula
+        // says it ("Heat rejected, tower tons", =C15/15000).
+        const auto mentions_tower = [](std::string_view text) {
+            std::string lower(text);
+            std::transform(lower.begin(), lower.end(), lower.begin(),
+                           [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+            return lower.find("tower") != std::string::npos;
+        };
+        const row_label label = label_of(f.sheet, f.source->at);
+        const bool tower =
+            refrigeration && (f.source->text.find("15000") != std::string::npos ||
+                              mentions_tower(label.description) || mentions_tower(label.name));
+        if (tower) {
+            unit->scale *= 1.25;
+            if (unit->exact_scale)
+                unit->exact_scale = *unit->exact_scale * rational(5, 4);
+            unit->text = "tower tons";
+        }
+        const std::string origin =
+            fmt::format("'{}' {} {}, read as {} since the cell computes {}", unread->second.text,
+                        unread->second.heading ? "from the heading in" : "beside it in",
+                        a1_name(unread->second.written_in->at),
+                        tower           ? "a cooling tower's tons (15 000 Btu/h)"
+                        : refrigeration ? "tons of refrigeration (TR)"
+                                        : "short tons",
+                        refrigeration ? "a power" : "a mass");
+        unread_.erase(unread);
+        auto& slot = unit_cache_[key];
+        slot = cell_unit{*unit, origin};
+        return &*slot;
     }
 
     void report_unread_unit(const formula_cell& f) {
