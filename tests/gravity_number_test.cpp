@@ -1316,3 +1316,21 @@ TEST_CASE("reciprocal sides and a power of ten are no fit's constant") {
         return n.message.find("is a g missing") != std::string::npos;
     }));
 }
+
+// A static gas column, p_2 = p_1·exp(0.01875·γ_g·D/(z·T)) in psia from ft and °R (GPSA
+// Engineering Data Book, from memory): 0.01875 °R/ft is g·M_air/R (g_n and R from CODATA 2018,
+// M_air 28.96 g/mol: 0.018743 °R/ft, 0.03416 K/m). Inside exp it makes the argument a pure
+// number, as a number carrying g does in a sum; the same number beside metres and kelvins, or
+// with the temperature left out, still fails.
+TEST_CASE("the gas column's constant inside exp is read as g·M_air/R") {
+    const std::string column = "p_1, p_2 : psia\nγ_g, z : 1\nD : ft\nT : °R\nD_m : m\nT_K : K\n";
+    for (const char* formula :
+         {"p_2 = p_1*exp(0.01875*γ_g*D/(z*T))", "p_2 = p_1*exp(0.0342*γ_g*D_m/(z*T_K))"}) {
+        CAPTURE(formula);
+        const auto r = plumb::test::check_after(column, formula);
+        CHECK(problems_in(r) == 0);
+        CHECK(count_of(r, plumb::rules::gravity_number) == 1);
+    }
+    fails_with(column, {"p_2 = p_1*exp(0.01875*γ_g*D_m/(z*T_K))", "p_2 = p_1*exp(0.01875*γ_g*D/z)"},
+               plumb::rules::dimensioned_argument);
+}

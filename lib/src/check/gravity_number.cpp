@@ -46,8 +46,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 31>& quantities() {
-    static const std::array<carried_quantity, 31> table = [] {
+const std::array<carried_quantity, 32>& quantities() {
+    static const std::array<carried_quantity, 32> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -99,7 +99,7 @@ const std::array<carried_quantity, 31>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 31>{{
+        return std::array<carried_quantity, 32>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -354,6 +354,16 @@ const std::array<carried_quantity, 31>& quantities() {
              "write the air's density in a cell that holds its unit to say so",
              density.pow(rational(-1, 2)), std::sqrt(2.0 / air_density(0.0)),
              std::sqrt(2.0 / air_density(40.0))},
+            // A static gas column, p_2 = p_1·exp(0.01875·γ_g·D/(z·T)) in psia from ft and °R
+            // (GPSA Engineering Data Book; Katz's static column, from memory): 0.01875 °R/ft is
+            // g·M_air/R, air's molar mass 28.96 to 28.97 g/mol (common practice) with g_n and
+            // CODATA 2018's R, 0.03416 K/m in SI.
+            {rules::gravity_number, "g·M_air/R, the gas column's constant", "g_n·M_air/R",
+             "R/(g_n·M_air)",
+             " (air's molar mass 28.96 to 28.97 g/mol; 0.01875 °R/ft, 0.03416 K/m)",
+             "declare it with its unit (k_gc : K/m = 0.03416) to say so",
+             "write it in a cell that holds its unit (°R/ft) to say so", temperature / length,
+             standard_gravity * 0.02896 / 8.314462618, standard_gravity * 0.02897 / 8.314462618},
         }};
     }();
     return table;

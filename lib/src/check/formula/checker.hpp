@@ -878,6 +878,7 @@ class checker {
     static carried_quantity::term_kind kind_of(const typed_term& t);
     static carried_quantity::term_kind kind_of(const typed_term& t,
                                                const compact_dimension& reference);
+    [[gnu::noinline]] void read_gravity_number_in_argument(std::size_t base, std::size_t k);
     bool read_gravity_numbers_either_way(std::size_t base, const agreement& a,
                                          std::uint32_t sum_node = syntax::no_index);
     bool read_gravity_numbers(std::size_t base, const agreement& a,

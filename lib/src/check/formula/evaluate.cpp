@@ -1694,6 +1694,12 @@ typed_term checker::eval_call(const syntax::expr_node& n) {
     case function_rule::dimensionless:
     case function_rule::log_base:
         for (const auto& a : args) {
+            // exp(0.01875*γ_g*D/(z*T)): a number that carries the quantity the argument
+            // lacks, in the units around it, makes it a pure number, as in a sum.
+            if (a.type.known && a.type.literal_count != 0 && a.type.offset == nullptr &&
+                !a.type.dim.is_dimensionless()) [[unlikely]]
+                read_gravity_number_in_argument(args_base,
+                                                static_cast<std::size_t>(&a - args.data()));
             if (a.type.known && a.type.offset != nullptr && !a.type.reading_or_difference)
                 report_offset(a.node, *a.type.offset, fmt::format("the argument of {}", f->name));
             else if (reference_value_typed_in_cell_unit(*f, a)) [[unlikely]]

@@ -177,6 +177,16 @@ bool checker::read_gravity_numbers_either_way(std::size_t base, const agreement&
     return read_gravity_numbers(base, flipped, sum_node);
 }
 
+// The argument of exp, ln or a sine at `k` among the operands from `base`, read against a pure
+// number of scale 1: where one of its numbers carries the quantity it lacks, as the static gas
+// column's 0.01875 °R/ft does, that number is read so and the argument is a pure number.
+void checker::read_gravity_number_in_argument(std::size_t base, std::size_t k) {
+    agreement a;
+    a.reference = compact_dimension{};
+    a.odd.push_back(k);
+    read_gravity_numbers(base, a, syntax::no_index, 1.0);
+}
+
 // Where the odd operands lack exactly an acceleration (or have one too many) and each holds
 // g_n written as a number in its own units, the number is read as g_n: the operand takes the
 // reference's dimension and the scale g_n gives it, and a note says which number was read so.
