@@ -343,3 +343,33 @@ TEST_CASE("the site's barometer said in the sum's unit") {
     CHECK(d.message.find("'p_b' (12.7 psi") != std::string::npos);
     CHECK(d.message.find("comes out 2 psi high") != std::string::npos);
 }
+
+// psia = kPa/6.895 (NIST SP 811 (2008), B.8, rounded), less the atmosphere, 14.696 psi at sea
+// level or the site's barometer typed, is the gauge reading; so are K·1.8 − 459.67 in °F and
+// °R/1.8 − 273.15 in °C (NIST SP 811 (2008), 4.2.1.1). The same sums into an absolute unit, or
+// with the other scale's zero, still fail, and a number added to a converted absolute reading
+// still counts the atmosphere twice.
+TEST_CASE("a converted absolute reading less the atmosphere is a gauge reading") {
+    const std::string decl = "p_k : kPa \"suction pressure, absolute\"\np_sa : psia\n"
+                             "p_psig : psig\np_psia : psia\nT_K, T_K2 : K\nT_R : °R\n"
+                             "t_F : °F\nt_C : °C\n";
+    plumb::test::each_passes(decl, {"p_psig = p_k/6.895 - 14.696", "p_psig = 0.145*p_k - 14.7",
+                                    "t_F = T_K*1.8 - 459.67", "t_C = T_R/1.8 - 273.15"});
+    plumb::test::each_fails_with(decl,
+                                 {"p_psia = p_k/6.895 - 14.7", "T_K2 = T_R/1.8 - 273.15",
+                                  "t_F = T_K*1.8 - 273.15", "t_C = T_K*1.8 - 459.67",
+                                  "t_F = T_K*1.8", "p_psig = p_sa - 20",
+                                  "p_psia = p_k/6.895 + 14.7"},
+                                 plumb::rules::offset_scale);
+    // The site's barometer typed, 14.2 psia about 290 m up (the standard atmosphere's
+    // barometric formula): a note, not a finding; another number beside it is the slip.
+    const std::string site = decl + "p_b : psia \"site barometer, 14.2 psia\"\n";
+    for (const char* formula : {"p_psig = p_sa - 14.2", "p_psig = p_k/6.895 - 14.2"}) {
+        CAPTURE(formula);
+        const auto r = plumb::test::check_after(site, formula);
+        CHECK(plumb::test::problems_in(r) == 0);
+        CHECK(plumb::test::count_of(r, plumb::rules::trade_constant) == 1);
+    }
+    plumb::test::each_fails_with(site, {"p_psig = p_sa - 13.0", "p_psig = p_k/6.895 - 14.696"},
+                                 plumb::rules::offset_scale);
+}

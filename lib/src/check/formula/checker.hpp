@@ -1004,6 +1004,7 @@ class checker {
     void adopt_numbers_beside_cells(std::size_t base);
     bool atmosphere_among_numbers(std::size_t base) const;
     const typed_term* adopt_numbers_on_offset_scale(std::size_t base);
+    bool converts_to_a_named_unit(const typed_term& t) const;
     bool is_shift_candidate(const operand& op) const;
     shift shift_of(const operand& op) const;
     bool recognised_origin(double origin, double tolerance, const compact_dimension& dim,
@@ -1232,6 +1233,8 @@ class checker {
     std::optional<std::string> atmosphere_added_to_gauge(const operand& absolute,
                                                          const operand& gauge,
                                                          bool temperature) const;
+    bool read_local_atmosphere_taken_off(const operand& difference);
+    bool read_number_as_local_atmosphere(std::uint32_t number, double unit);
     bool read_local_atmosphere(const operand& sum, double other_scale);
     void settle_rounded_side(typed_term& side, std::size_t literal_base) const;
     void report_unbalanced_readings(const operand& side);

@@ -383,6 +383,19 @@ const typed_term* checker::adopt_numbers_on_offset_scale(std::size_t base) {
         if (operands_[i].type.known && operands_[i].type.point &&
             operands_[i].type.literal_count == 0)
             offset_term = &operands_[i].type;
+    // "p_s/6.895 - 14.696" into psig, "T_K*1.8 - 459.67" into °F: an absolute reading
+    // converted by its factor, less a number, is shifted onto an offset scale in the unit the
+    // factor gives, as p_psia - 14.696 is. Only a number taken off: one added to a converted
+    // absolute reading counts the zero twice, which the sum's own finding says.
+    if (offset_term == nullptr && operands_.size() - base == 2) {
+        const operand& reading = operands_[base];
+        const operand& number = operands_[base + 1];
+        if (reading.type.known && reading.type.point && !reading.subtracted &&
+            reading.type.literal_count != 0 && number.subtracted && number.type.numeric &&
+            number.type.value && number.type.literal_count == 1 &&
+            converts_to_a_named_unit(reading.type))
+            offset_term = &reading.type;
+    }
     if (offset_term == nullptr)
         return nullptr;
     for (std::size_t i = base; i < operands_.size(); ++i) {
@@ -395,6 +408,26 @@ const typed_term* checker::adopt_numbers_on_offset_scale(std::size_t base) {
         }
     }
     return offset_term;
+}
+
+// Whether a reading's numbers, taken as conversions, give a pressure unit the trades read
+// gauges in (psi, kPa, bar, ...) or an absolute temperature scale (K, °R): "6.895*p_kPa" gives
+// none, for the factor runs the wrong way.
+bool checker::converts_to_a_named_unit(const typed_term& t) const {
+    if (!std::isfinite(t.scale))
+        return false;
+    double converted = t.scale;
+    for (std::uint32_t k = 0; k < t.literal_count; ++k) {
+        const scale_literal& l = literals_[t.literal_begin + k];
+        converted /= std::pow(l.value, l.exponent);
+    }
+    if (t.dim == temperature_dimension())
+        return std::abs(converted - 1.0) < 0.005 || std::abs(converted * 1.8 - 1.0) < 0.005;
+    if (!(t.dim == pressure_dimension()))
+        return false;
+    return std::any_of(pressure_units.begin(), pressure_units.end(), [&](const pressure_unit& u) {
+        return std::abs(converted / u.pascals - 1.0) < 0.005;
+    });
 }
 
 bool checker::is_shift_candidate(const operand& op) const {

@@ -207,7 +207,8 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
         const bool temperature = off.type.dim == temperature_dimension();
         if (!temperature && unit != nullptr && unit->scale == unit_scale::gauge &&
             other.type.offset == nullptr && other.type.point &&
-            read_local_atmosphere(off, other.type.scale))
+            (read_local_atmosphere(off, other.type.scale) ||
+             read_local_atmosphere_taken_off(other)))
             return;
         // "1.8*(t + 273.15)": kelvins times 1.8 are degrees Rankine, its numbers taken in.
         const double other_degree = unit_of_written_numbers(other.type);
@@ -573,6 +574,48 @@ bool checker::read_local_atmosphere(const operand& sum, double other_scale) {
     } else {
         return false;
     }
+    return read_number_as_local_atmosphere(number, unit);
+}
+
+// "p_psig = p_sa - 14.2", "p_k/6.895 - 14.2" into psig: an absolute reading, or one converted
+// by its factor into a unit of pressure, less the site's atmosphere is a gauge reading there,
+// as a gauge reading plus it is absolute.
+bool checker::read_local_atmosphere_taken_off(const operand& difference) {
+    const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, difference.node)];
+    if (n.kind != expr_kind::subtract || file_.nodes[n.rhs].kind != expr_kind::number)
+        return false;
+    const symbol_entry* reading = nullptr;
+    double numbers = 1.0;
+    const bool other = for_each_factor(n.lhs, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& f = file_.nodes[at];
+        if (f.kind == expr_kind::number) {
+            const double v = written_number(f.range);
+            if (!(v > 0.0))
+                return true;
+            numbers *= sign > 0 ? v : 1.0 / v;
+            return false;
+        }
+        if (f.kind != expr_kind::symbol || sign < 0 || reading != nullptr)
+            return true;
+        reading = symbols_.find(text(f.range));
+        return reading == nullptr || reading->offset_unit != nullptr || !reading->compact_dim ||
+               !(*reading->compact_dim == pressure_dimension());
+    });
+    if (other || reading == nullptr)
+        return false;
+    const double converted = reading->si_factor / numbers;
+    const auto named =
+        std::find_if(pressure_units.begin(), pressure_units.end(), [&](const pressure_unit& u) {
+            return std::abs(converted / u.pascals - 1.0) < 0.005;
+        });
+    if (named == pressure_units.end())
+        return false;
+    return read_number_as_local_atmosphere(n.rhs, named->pascals);
+}
+
+// A number, in `unit`, read as the atmosphere where a gauge is: a note where it is an
+// atmosphere some way above sea level, a finding where the file declares another barometer.
+bool checker::read_number_as_local_atmosphere(std::uint32_t number, double unit) {
     const double pressure = written_number(file_.nodes[number].range) * unit;
     if (!(pressure >= highest_site_atmosphere * standard_atmosphere &&
           pressure <= 1.005 * standard_atmosphere))
