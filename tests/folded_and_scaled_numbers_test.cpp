@@ -1425,3 +1425,26 @@ TEST_CASE("two terms of a sum, each with its own folded power of ten") {
                {"V_w = pi*D_t^2*L_t/4e6 + pi*D_t^3/6e6", "V_w = pi*D_t^2*L_t/4e3 + pi*D_t^3/6e9"},
                plumb::rules::unit_scale);
 }
+
+// Darcy-Weisbach per 100 m, Δp = f·(L/d)·ρV²/2 (Crane TP-410, from memory), into kPa with the
+// bore in mm: d/1000 takes the bore to metres, and 2000 folds ρV²/2's own 2 with the Pa to kPa
+// 1000; the two thousands cancel only as conversions, and the line is right. With the bore's
+// /1000 left out the units already agree, and the 1000 folded into the 2000 is the slip, not
+// the 2. A circle's area in ft² from inches, π·D²/576 (576 = 4 × 144 in² per ft², NIST SP 811
+// (2008), B.8), is read beside the π written out; without it the 4 would hide a missing π.
+TEST_CASE("a formula's 2 or a circle's 4 folded into a conversion beside another") {
+    const std::string decl = "f_D : 1\nd_i : mm\nρ : kg/m^3\nV : m/s\nΔp : kPa\nD_in : in\n"
+                             "A_ft2 : ft^2\nF_k : kN\nT_s : N*m\nd_s : mm\n";
+    plumb::test::each_passes(decl, {"Δp = f_D*(100 {m}/(d_i/1000))*ρ*V^2/2000",
+                                    "Δp = f_D*(100 {m}/(d_i/1000))*ρ*V^2/2/1000"});
+    const auto r = plumb::test::check_after(decl, "Δp = f_D*(100 {m}/d_i)*ρ*V^2/2000");
+    REQUIRE(plumb::test::count_of(r, plumb::rules::unit_scale) == 1);
+    const auto& d = plumb::test::first_under(r, plumb::rules::unit_scale);
+    CHECK(plumb::test::says(d, "the 1000 folded into 2000 (2 \u00D7 1000) is not needed"));
+    CHECK(plumb::test::says(d, "write 2 in place of 2000"));
+    plumb::test::each_fails_with(decl, {"F_k = 2000*T_s/d_s", "A_ft2 = D_in^2/576"},
+                                 plumb::rules::unit_scale);
+    const auto circle = plumb::test::check_after(decl, "A_ft2 = pi*D_in^2/576");
+    CHECK(plumb::test::problems_in(circle) == 0);
+    CHECK(plumb::test::count_of(circle, plumb::rules::trade_constant) == 1);
+}

@@ -1127,6 +1127,7 @@ class checker {
         // Only where the formula can hold a half or a 2 (may_hold_a_half). "Q_m = 0.8494*Q_cfm"
         // is half of 1.699 m³/h per cfm, a conversion with no half in it: a slip, not a fold.
         bool half_of_a_square_or_radius = false;
+        bool beside_pi = false; // only where π is written beside it (π*D^2/576)
     };
 
     // check/formula/scale_reconcile.cpp
@@ -1198,7 +1199,8 @@ class checker {
     bool percentage_written_out(const scale_literal& l) const;
     bool hundred_over_percent_sum(std::uint32_t term, const scale_literal& l) const;
     std::uint32_t raised_number(std::uint32_t root, std::uint32_t number) const;
-    bool report_unneeded(const operand& op, const scale_literal& l);
+    bool report_unneeded(const operand& op, const scale_literal& l,
+                         std::optional<double> folded_power = std::nullopt);
     void report_inverted_factor(const operand& op, const scale_literal& l);
     [[gnu::noinline]] bool report_angle_conversion(std::span<const operand> ops,
                                                    std::span<const std::size_t> index,

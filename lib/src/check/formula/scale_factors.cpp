@@ -104,7 +104,7 @@ bool checker::report_inverted_trade_constant(std::span<const operand> ops,
 }
 
 std::span<const checker::folded_constant> checker::folded_constants() {
-    static const std::array<folded_constant, 13> constants{{
+    static const std::array<folded_constant, 14> constants{{
         {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false, true},
         {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false, true},
         // 9550 = 60000/(2π) in M = 9550*P/n (kW, rpm to N·m), 5252 = 33000/(2π) (hp, rpm
@@ -148,6 +148,10 @@ std::span<const checker::folded_constant> checker::folded_constants() {
         // a full circle's area π/4·D² and hydraulic radius D/4 (common practice).
         {std::numbers::pi / 4.0 * std::pow(4.0, -2.0 / 3.0), "(\u03C0/4)\u00B74^(-2/3)",
          "a full pipe's area and hydraulic radius (Manning's full-bore form)", false},
+        // 576 = 4 × 144 in A = π*D^2/576 (in² to ft², NIST SP 811 (2008), B.8): a circle's 4
+        // beside the π written out and a square; without the π it would hide a missing one.
+        {4.0, "4", "the area of a circle (\u03C0\u00B7D\u00B2/4)", true, true, false, false,
+         false, true},
     }};
     return constants;
 }
@@ -312,6 +316,8 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
                           has_factor_of_dimension(ops[index[i]].node, length_dimension(), -1)))
                         continue;
                     if (c.half_of_a_square_or_radius && !may_hold_a_half(ops[index[i]]))
+                        continue;
+                    if (c.beside_pi && !holds_pi(ops[index[i]].node))
                         continue;
                     as.value = l.value / c.value;
                     if (c.beside_power_of_ten && !near_power_of_ten(as.value, 1e-3))
@@ -568,21 +574,30 @@ bool checker::report_unneeded_factor(std::span<const operand> ops,
             for_each_factor(ops[index[i]].node, [&](std::uint32_t at, int) {
                 return dimensionless_unit_size(at) == std::optional<double>(0.01);
             });
-        // V*1000*L^3/(3*E*1000*I): conversions that cancel each other are none.
+        // V*1000*L^3/(3*E*1000*I): conversions that cancel each other are none. So are
+        // "(d_mm/1000)*ρ*V^2/2000" into kPa, the 2 of ρV²/2 folded into the second 1000.
         double net = 1.0;
         const scale_literal* first = nullptr;
+        std::optional<double> first_folded;
         for (const auto& l : parts[i].literals)
             if (converts_in_term(l, ops[index[i]].type, !dimensionless || in_percent) ||
                 spare_time_ratio(l, ops[index[i]].type, ops[index[i]].node) ||
                 spare_speed_ratio(l, ops[index[i]].node) ||
                 spare_degree_ratio(l, ops[index[i]].node)) {
-                net *= std::pow(l.value, l.exponent);
-                if (first == nullptr)
+                const std::optional<double> folded =
+                    l.power_of_ten || file_.nodes[l.node].kind != expr_kind::number
+                        ? std::nullopt
+                        : folded_power_of_ten(ops, index, i, l, false);
+                net *=
+                    folded ? std::pow(10.0, *folded * l.exponent) : std::pow(l.value, l.exponent);
+                if (first == nullptr) {
                     first = &l;
+                    first_folded = folded;
+                }
             }
         if (first != nullptr && std::abs(net - 1.0) > 1e-9 &&
             std::abs(net / counted_multiple(ops[index[i]].node) - 1.0) > 1e-9)
-            return report_unneeded(ops[index[i]], *first);
+            return report_unneeded(ops[index[i]], *first, first_folded);
     }
     return false;
 }
@@ -668,13 +683,33 @@ std::uint32_t checker::raised_number(std::uint32_t root, std::uint32_t number) c
     return found;
 }
 
-bool checker::report_unneeded(const operand& op, const scale_literal& l) {
+bool checker::report_unneeded(const operand& op, const scale_literal& l,
+                              std::optional<double> folded_power) {
     if (percentage_written_out(l) || hundred_over_percent_sum(op.node, l))
         return false;
     const double factor = std::pow(l.value, l.exponent);
     // "/10^6": the factor is the power, not its base.
     const std::uint32_t shown =
         std::abs(l.exponent) != 1.0 ? raised_number(op.node, l.node) : l.node;
+    // "ρ*V^2/2000" where the units agree already: the 1000 folded beside the formula's own
+    // 2 is the slip; removing the whole number would take the 2 with it.
+    if (folded_power && std::abs(l.exponent) == 1.0) {
+        const double power = std::pow(10.0, *folded_power);
+        const double digit = l.value / power;
+        const std::string written(text(file_.nodes[shown].range));
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("the {} folded into {} ({} × {}) is not needed: the units of {} "
+                        "already agree, so as written it is {} times its true value",
+                        format_factor(power), written, format_factor(digit), format_factor(power),
+                        quote(op.node), format_factor(std::pow(power, l.exponent))),
+            file_.nodes[shown].range);
+        add_term_and_units(d, op);
+        d.notes.push_back({fmt::format("write {} in place of {}, keeping the formula's own {}",
+                                       format_factor(digit), written, format_factor(digit)),
+                           {}});
+        return true;
+    }
     diagnostic& d =
         report(rules::unit_scale,
                fmt::format("the factor {} is not needed: the units of {} already agree, so "

@@ -1036,7 +1036,7 @@ std::optional<double> checker::ratio_with_folded_constant(const scaled_operand& 
             // number (25.4 as ln 10/(4π) times 139 had left the 1.8 of the degrees).
             const bool digits_enough = significant_digits(text(file_.nodes[l.node].range)) >= 4;
             for (const folded_constant& c : folded_constants())
-                if (const auto folded = leaves(c.value);
+                if (const auto folded = c.beside_pi ? std::nullopt : leaves(c.value);
                     folded && (digits_enough || near_power_of_ten(*folded, 0.0)))
                     return folded;
         }
