@@ -870,3 +870,15 @@ TEST_CASE("an absolute pressure set equal to a drop or a column alone") {
                   "Δp = (q/K)^2*100", "p_b = ρ_Hg*{g_n}*h_Hg/1000"});
     passes(decl, {"p_fa = p_b + ρ*9.81*h/1000"}, 1);
 }
+
+// The normal litre, NL, a thousandth of a normal cubic metre at 0 °C and 101.325 kPa (DIN 1343,
+// as gas suppliers write ward and process flows; common practice): 1 NL/min = 0.06 Nm³/h. A
+// flow in NL/min is at reference conditions as Nm³/h is, and set equal to an actual flow in
+// L/min it still differs by the gas's state.
+TEST_CASE("a flow in normal litres is at reference conditions") {
+    const std::string decl = "measure NL = 0.001 Nm3 \"normal litre\"\nQ_NLmin : NL/min\n"
+                             "Q_N : Nm3/h\nQ_act : L/min \"actual flow at the outlet\"\n"
+                             "V_free : NL\nt : h\n";
+    passes(decl, {"Q_N = 0.06*Q_NLmin", "Q_N = 0.001*V_free/t"});
+    fails_with(decl, {"Q_act = Q_NLmin"}, plumb::rules::unit_scale);
+}

@@ -7,6 +7,7 @@
 #include "units/compact_dimension.hpp"
 
 #include <algorithm>
+#include <cctype>
 #include <cstdint>
 #include <cstring>
 #include <optional>
@@ -28,6 +29,24 @@ enum unit_mark : std::uint8_t {
     tons = 32,                   // ton: the short ton, where cooling means a ton of refrigeration
 };
 
+// "NL/min", "Nl": the normal litre, a thousandth of a normal cubic metre (DIN 1343's state,
+// as gas suppliers and medical gas sheets write it; common practice), as a unit of its own
+// word: not the letters inside another.
+[[nodiscard]] inline std::size_t normal_litre_at(std::string_view unit_text) {
+    for (const std::string_view spelling : {std::string_view("NL"), std::string_view("Nl")})
+        for (std::size_t at = unit_text.find(spelling); at != std::string_view::npos;
+             at = unit_text.find(spelling, at + 1)) {
+            const bool starts =
+                at == 0 || !std::isalpha(static_cast<unsigned char>(unit_text[at - 1]));
+            const std::size_t end = at + spelling.size();
+            const bool ends = end == unit_text.size() ||
+                              !std::isalpha(static_cast<unsigned char>(unit_text[end]));
+            if (starts && ends)
+                return at;
+        }
+    return std::string_view::npos;
+}
+
 [[nodiscard]] inline std::uint8_t unit_marks_of(std::string_view unit_text) {
     const auto has = [&](std::string_view part) {
         return unit_text.find(part) != std::string_view::npos;
@@ -36,7 +55,8 @@ enum unit_mark : std::uint8_t {
     // Hz counts cycles too: ω = 2π·f (ISO 80000-3).
     if (has("rpm") || has("r/min") || has("rev") || has("Hz"))
         marks |= counts_revolutions;
-    if (has("Nm3") || has("Sm3") || has("Nm\u00B3") || has("Sm\u00B3") || has("scf") || has("SCF"))
+    if (has("Nm3") || has("Sm3") || has("Nm\u00B3") || has("Sm\u00B3") || has("scf") ||
+        has("SCF") || normal_litre_at(unit_text) != std::string_view::npos)
         marks |= at_reference_conditions;
     if (has("VA") && !has("VAr") && !has("VAR"))
         marks |= apparent_power;
@@ -73,6 +93,11 @@ struct reference_volume {
         {"SCF", 288.15 + 5.0 / 9.0, "60 \u00B0F"},
     };
     std::optional<reference_volume> found;
+    if (const std::size_t at = normal_litre_at(unit); at != std::string_view::npos) {
+        const std::size_t slash = unit.find('/');
+        found = reference_volume{273.15, slash != std::string_view::npos && slash < at ? -1 : 1,
+                                 "0 \u00B0C"};
+    }
     for (const auto& r : spellings) {
         const std::size_t at = unit.find(r.spelling);
         if (at == std::string_view::npos)
