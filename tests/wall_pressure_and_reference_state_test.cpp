@@ -882,3 +882,14 @@ TEST_CASE("a flow in normal litres is at reference conditions") {
     passes(decl, {"Q_N = 0.06*Q_NLmin", "Q_N = 0.001*V_free/t"});
     fails_with(decl, {"Q_act = Q_NLmin"}, plumb::rules::unit_scale);
 }
+
+// A name that starts with a d is a difference only where the d stands before the quantity's
+// letter (dT, dp_f, dPe, d_T, dh): a discharge or dew-point temperature in kelvins set equal to
+// a °C reading is still the zero slip (0 °C = 273.15 K, NIST SP 811 (2008), 4.2.1.1).
+TEST_CASE("a name beginning with d is no difference unless the d marks one") {
+    const std::string decl = "t_C : °C\ndisch_T, dew_t, d3, dT, d_T : K\n";
+    fails_with(decl, {"t_C = disch_T", "t_C = dew_t", "t_C = d3"}, plumb::rules::offset_scale);
+    passes(decl, {"dT = t_C - t_C", "d_T = 1*dT"});
+    const std::string drops = "p_2 : kPag\np_1 : kPag\ndp_f, dPe, dh : kPa\n";
+    passes(drops, {"p_2 = p_1 - dp_f - dPe - dh"});
+}

@@ -6,9 +6,24 @@ namespace plumb {
 
 bool names_a_difference(std::string_view name, std::string_view description) {
     const auto starts = [&](std::string_view p) { return name.substr(0, p.size()) == p; };
-    if (starts("Δ") || starts("δ") || starts("delta") || starts("Delta") || starts("d") ||
-        starts("LMTD") || starts("lmtd"))
+    if (starts("Δ") || starts("δ") || starts("delta") || starts("Delta") || starts("LMTD") ||
+        starts("lmtd"))
         return true;
+    // "dT", "dp_f", "dPe", "d_T": a d before the quantity's letter. Not any name that starts
+    // with a d: "disch_T", "dew_t", "dhw_t" and "d3" are readings, which set beside another
+    // scale's must still be reported.
+    if (starts("d")) {
+        std::size_t at = 1;
+        if (at < name.size() && name[at] == '_')
+            ++at;
+        if (at < name.size() && std::string_view("TtPp").find(name[at]) != std::string_view::npos)
+            return true;
+        if (at < name.size() && name[at] == 'h' &&
+            (at + 1 == name.size() || !(name[at + 1] >= 'a' && name[at + 1] <= 'z')))
+            return true;
+        if (name.substr(at).starts_with("θ"))
+            return true;
+    }
     for (const std::string_view word : {"rise", "drop", "diff", "loss", "lm", "approach"})
         if (name.find(word) != std::string_view::npos)
             return true;
