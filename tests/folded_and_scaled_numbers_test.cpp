@@ -1448,3 +1448,22 @@ TEST_CASE("a formula's 2 or a circle's 4 folded into a conversion beside another
     CHECK(plumb::test::problems_in(circle) == 0);
     CHECK(plumb::test::count_of(circle, plumb::rules::trade_constant) == 1);
 }
+
+// A number that is a conversion of its own (25.4 mm per in, NIST SP 811 (2008), B.8) or a
+// trade's constant (8.34 lb per US gallon of water, common practice), where the units still
+// need another common factor: 365 days a year for mm/d into in/yr, and 3785.41 m³ per million
+// US gallons (NIST SP 811 (2008), B.8) where 8.34 takes the flow in MGD and it is in m³/d.
+// The advice names that factor; taken as a coefficient, the number's own advice stays beside.
+TEST_CASE("a conversion of its own where the units need another factor too") {
+    const std::string decl = "E_l : mm/d\nE_in : in/yr\nW_lb : lb/d\nQ_d : m3/d\nD_cl : mg/L\n";
+    const auto evaporation = run(decl, "E_in = E_l/25.4");
+    REQUIRE(count_of(evaporation, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(evaporation, plumb::rules::unit_scale),
+                            "taken as one, the units need 365.25 as well: multiply"));
+    const auto dose = run(decl, "W_lb = 8.34*Q_d*D_cl");
+    REQUIRE(count_of(dose, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(dose, plumb::rules::unit_scale),
+                            "taken as one, the units need 3785.41 as well: divide"));
+    CHECK(plumb::test::says(first_under(dose, plumb::rules::unit_scale),
+                            "3782.96 times as much as 'W_lb' if 8.34 was meant as the conversion"));
+}

@@ -1,6 +1,7 @@
 // Whether the terms of a meeting point agree in scale (mm beside m, kW beside W) once the
 // numbers written into them are read as conversions.
 #include "check/formula/checker.hpp"
+#include "check/trade_constants.hpp"
 
 #include <charconv>
 
@@ -430,8 +431,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                     exact_ratio.reset();
                 }
             }
+    const scale_literal* coefficient = nullptr;
     if (!clean) {
-        const scale_literal* coefficient = nullptr;
         for (const std::size_t side : {r.odd, r.reference})
             for (const scale_literal& l : parts[side].literals)
                 if (l.value != 1.0 && !looks_like_conversion(l, true) && !clock_ratio(l) &&
@@ -508,8 +509,34 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     const bool power_for_power =
         one_coefficient && written != in_place && near_power_of_ten(written, 1e-12) &&
         near_power_of_ten(in_place, 1e-9) && std::abs(std::log10(in_place / written)) > 0.5;
+    // "E_in = E_l/25.4" (mm/d into in/yr), "W_lb = 8.34*Q*C" with Q in m³/d: the one number
+    // is a conversion, or a trade's constant, of its own; taken as one, the units still need
+    // another common factor (365 days a year; 3785.41 m³ per million US gallons, NIST SP 811
+    // (2008), B.8). The finding is counted both ways, and the advice names that factor.
+    std::optional<double> also_needed;
+    if (one_coefficient && coefficient != nullptr && !in_place_offered && power_of_ratio == 0 &&
+        !power_for_power && coefficient_digits >= 3) {
+        const std::optional<rational> printed = printed_power(*coefficient, 1.0);
+        const bool conversion_itself =
+            common_conversion(written, std::max(2.0 * coefficient->tolerance, 1e-4)) ||
+            (printed && trade_constant_for(*printed) != nullptr);
+        const double left = std::pow(written / in_place, coefficient_exponent);
+        const double whole_left = left >= 1.0 ? left : 1.0 / left;
+        const double slack = std::max(3.0 * coefficient->tolerance, 2e-3);
+        if (conversion_itself && std::isfinite(whole_left)) {
+            for (const double known :
+                 {365.0, 365.25, 8760.0, 1000.0, 100.0, 1.0e6, 3785.41, 1440.0, 86400.0})
+                if (std::abs(whole_left / known - 1.0) <= slack)
+                    also_needed = known;
+            if (!also_needed)
+                if (const auto c = common_conversion(whole_left, slack); c && *c > 1.0)
+                    also_needed = *c;
+            if (also_needed && left < 1.0)
+                also_needed = -*also_needed; // negative: multiply by it
+        }
+    }
     const bool counted_both_ways = (in_place_offered && is_power_trade_constant(written)) ||
-                                   power_of_ratio != 0 || power_for_power;
+                                   power_of_ratio != 0 || power_for_power || also_needed;
     const std::string in_place_text =
         power_of_ratio != 0
             ? fmt::format("{}^{} ({})", coefficients, power_of_ratio, format_factor(in_place))
@@ -668,7 +695,16 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
              {}});
         return false;
     }
-    if (counted_both_ways || in_place_offered)
+    if (also_needed)
+        d.notes.push_back(
+            {fmt::format("{} is a conversion of its own; taken as one, the units need {} as well: "
+                         "{} {} by {}; if it is a coefficient of the formula, {} it by {}",
+                         coefficients, format_factor(std::abs(*also_needed)),
+                         *also_needed < 0 ? "multiply" : "divide", quote(op.node),
+                         format_factor(std::abs(*also_needed)), multiply ? "multiply" : "divide",
+                         factor),
+             {}});
+    else if (counted_both_ways || in_place_offered)
         d.notes.push_back({fmt::format("if {} was meant as the conversion, write {} in its "
                                        "place; if it is a coefficient of the formula, {} {} by {}",
                                        coefficients, in_place_text,
