@@ -373,3 +373,22 @@ TEST_CASE("a converted absolute reading less the atmosphere is a gauge reading")
     plumb::test::each_fails_with(site, {"p_psig = p_sa - 13.0", "p_psig = p_k/6.895 - 14.696"},
                                  plumb::rules::offset_scale);
 }
+
+// Air's density at the site by the gas law, ρ = p·M/(R·T) (R from CODATA 2018, M of dry air
+// 28.96 kg/kmol, common practice), takes the site's barometer where the file declares one; the
+// standard atmosphere typed there is 2.5 % high at 98.9 kPa. The barometric formula that gives
+// the site's barometer from the sea level's (the standard atmosphere's, from memory), and a
+// normal volume's correction p/101.325 kPa, keep the standard atmosphere as they should.
+TEST_CASE("the sea-level atmosphere typed into a product at a site with a barometer") {
+    const std::string decl = "p_b : kPa \"site barometer, 98.9 kPa\"\nρ_a : kg/m^3\n"
+                             "M_a : kg/kmol = 28.96\nT_a : K \"air temperature\"\nV, V_n : m^3\n"
+                             "p : kPa \"absolute\"\nz : m\n";
+    const auto r = plumb::test::check_after(decl, "ρ_a = 101.325 {kPa}*M_a/({R}*T_a)");
+    REQUIRE(plumb::test::count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::offset_scale),
+                            "the product it stands in comes out 2.5 % high"));
+    plumb::test::each_passes(
+        decl, {"ρ_a = p_b*M_a/({R}*T_a)", "p_b = 101.325 {kPa}*(1 - 2.25577e-5 {1/m}*z)^5.2559"});
+    const auto normal = plumb::test::check_after(decl, "V_n = V*p/(101.325 {kPa})*273.15/T_a");
+    CHECK(plumb::test::problems_in(normal) == 0);
+}

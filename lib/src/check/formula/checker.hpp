@@ -828,7 +828,8 @@ class checker {
         double unit = 1.0; // SI value of its declared unit
     };
     site_barometer site_barometer_;
-    bool site_barometer_searched_ = false;
+    bool site_barometer_settled_ = false;         // none, and none to come
+    std::size_t site_barometer_declarations_ = 0; // declarations searched so far
     // The ratio of the last scale warning inside the formula being checked, 0 where none.
     double inner_scale_ratio_ = 0.0;
     // The side set equal to a specific enthalpy (h_f, "enthalpy"): see enthalpy_above_ice_point.
@@ -1140,6 +1141,7 @@ class checker {
     static bool said_absolute(const symbol_entry& e);
     [[gnu::noinline]] void report_barometer_added_to_absolute(std::span<const operand> terms);
     [[gnu::noinline]] void report_absolute_set_to_difference(std::span<const operand> sides);
+    [[gnu::noinline]] void report_sea_level_atmosphere_in_products(const syntax::formula& f);
     bool names_a_vacuum(std::uint32_t node) const;
     [[gnu::noinline]] bool report_share_of_gauge_beside_absolute(std::span<const operand> terms);
     std::optional<double> unit_the_sum_needs() const;

@@ -8,10 +8,14 @@ namespace plumb::formula_check {
 // "p_b : kPa "site barometric pressure, 96.2 kPa"" or "p_atm : psia = 12.2". Worked out at
 // the first gauge reading made absolute with a number, once per file.
 const checker::site_barometer* checker::declared_site_barometer() {
-    if (site_barometer_searched_)
-        return site_barometer_.name.empty() ? nullptr : &site_barometer_;
-    site_barometer_searched_ = true;
+    // A file is checked as it is read: the declarations that came since the last search are
+    // searched too, each once, so that a barometer declared after an early formula counts.
+    if (!site_barometer_.name.empty())
+        return &site_barometer_;
+    if (site_barometer_settled_)
+        return nullptr;
     if (file_.barometer) {
+        site_barometer_settled_ = true;
         const double pascals = file_.barometer->pascals;
         if (!(pascals >= highest_site_atmosphere * standard_atmosphere &&
               pascals <= (1.0 - site_barometer_slack_in_difference) * standard_atmosphere))
@@ -19,7 +23,9 @@ const checker::site_barometer* checker::declared_site_barometer() {
         site_barometer_ = {file_.barometer->cell, pascals, file_.barometer->unit};
         return &site_barometer_;
     }
-    for (const syntax::declaration& decl : file_.declarations) {
+    for (; site_barometer_declarations_ < file_.declarations.size();
+         ++site_barometer_declarations_) {
+        const syntax::declaration& decl = file_.declarations[site_barometer_declarations_];
         if (!decl.kind.dim || decl.name_count == 0 ||
             (decl.kind.single_unit != nullptr && decl.kind.single_unit->offset != 0.0))
             continue;
@@ -34,8 +40,10 @@ const checker::site_barometer* checker::declared_site_barometer() {
         const double pascals = written * decl.kind.si_factor;
         // The file's atmosphere is the sea level's: no site barometer to hold sums to.
         if (pascals > (1.0 - site_barometer_slack_in_difference) * standard_atmosphere &&
-            pascals <= 1.005 * standard_atmosphere)
+            pascals <= 1.005 * standard_atmosphere) {
+            site_barometer_settled_ = true;
             return nullptr;
+        }
         // A site below sea level by more than the Dead Sea is no site; above 5200 m the air
         // is thinner than any plant is built in (the highest mines and observatories; the
         // standard atmosphere, from memory, has 52.7 kPa there).
@@ -776,6 +784,75 @@ void checker::report_absolute_set_to_difference(std::span<const operand> sides) 
                            {}});
         return;
     }
+}
+
+// "ρ_a = 101.325 {kPa}*M_a/({R}*T_a)": the air's density at the site from the gas law takes the
+// pressure there, the site's barometer where the file declares one, not the standard
+// atmosphere typed as a quantity. Only where the atmosphere multiplies and is the product's one
+// pressure: over another pressure ("p/101.325 {kPa}") it is a reference state's, as a normal
+// volume's correction takes it.
+void checker::report_sea_level_atmosphere_in_products(const syntax::formula& f) {
+    const site_barometer* site = declared_site_barometer();
+    // "p_b = 101.325 {kPa}*(1 - 2.25577e-5 {1/m}*z)^5.2559": the standard atmosphere's own
+    // barometric formula gives the site's barometer from the sea level's.
+    const bool names_the_barometer =
+        syntax::search_formula(file_, f, [&](std::uint32_t, const syntax::expr_node& n) {
+            return n.kind == expr_kind::symbol && text(n.range) == site->name
+                       ? search_step::found
+                       : search_step::descend;
+        });
+    if (names_the_barometer)
+        return;
+    bool reported = false;
+    syntax::search_formula(file_, f, [&](std::uint32_t at, const syntax::expr_node& n) {
+        if (reported)
+            return search_step::found;
+        if (n.kind != expr_kind::multiply && n.kind != expr_kind::divide)
+            return search_step::descend;
+        std::uint32_t atmosphere = syntax::no_index;
+        int pressures = 0;
+        for_each_factor(at, [&](std::uint32_t k, int sign) {
+            const syntax::expr_node& factor = file_.nodes[k];
+            std::optional<compact_dimension> dim;
+            if (factor.kind == expr_kind::quantity) {
+                const syntax::quantity_literal& q = file_.quantities[factor.lhs];
+                if (q.dim)
+                    dim = compact_dimension::fitted(*q.dim);
+                if (dim && *dim == pressure_dimension() && !q.constant && sign > 0 &&
+                    std::abs(quantity_si_value(factor) / standard_atmosphere - 1.0) < 2e-3)
+                    atmosphere = k;
+            } else if (factor.kind == expr_kind::power &&
+                       file_.nodes[factor.rhs].kind == expr_kind::number &&
+                       !written_whole(text(file_.nodes[factor.rhs].range))) {
+                ++pressures; // a ratio raised to a fitted power: the atmosphere's own law
+            } else if (factor.kind == expr_kind::symbol) {
+                if (const symbol_entry* e = symbols_.find(text(factor.range));
+                    e != nullptr && e->compact_dim)
+                    dim = *e->compact_dim;
+            }
+            if (dim && *dim == pressure_dimension())
+                ++pressures;
+            return false;
+        });
+        if (atmosphere == syntax::no_index || pressures != 1)
+            return search_step::descend;
+        const double off = standard_atmosphere / site->pascals - 1.0;
+        diagnostic& d = report(
+            rules::offset_scale,
+            fmt::format("{} is the atmosphere at sea level, but this file declares the site's "
+                        "barometer '{}' ({} kPa): the product it stands in comes out {} % high",
+                        display_text(file_.nodes[atmosphere].range), site->name,
+                        format_factor(rounded_to_digits(site->pascals / 1000.0, 4)),
+                        format_factor(rounded_to_digits(off * 100.0, 2))),
+            file_.nodes[atmosphere].range);
+        d.level = severity::warning;
+        d.notes.push_back({fmt::format("the gas's state where it is is the site's: write '{}' in "
+                                       "place of {}",
+                                       site->name, display_text(file_.nodes[atmosphere].range)),
+                           {}});
+        reported = true;
+        return search_step::found;
+    });
 }
 
 } // namespace plumb::formula_check
