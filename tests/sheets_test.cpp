@@ -892,3 +892,25 @@ TEST_CASE("sheets: 'tons' of a cooling tower") {
     CHECK(std::any_of(found.begin(), found.end(),
                       [](const std::string& f) { return f.rfind("Tower!B4 ", 0) == 0; }));
 }
+
+// The US water trade's million gallons (MG, 3785.411784 m³: 10⁶ × 3.785411784 L, NIST SP 811
+// (2008), B.8) in an energy per volume, and a boiler's horsepower written BHP beside a row that
+// names the boiler (33 475 Btu/h, ABMA; common practice), not a shaft's brake horsepower.
+TEST_CASE("sheets: kWh/MG and a boiler's BHP") {
+    const auto energy = read_unit_text("kWh/MG");
+    REQUIRE(energy.has_value());
+    CHECK(energy->scale == doctest::Approx(3.6e6 / 3785.411784).epsilon(1e-9));
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Steam output", "4.0e6", "Btu/h") +
+        labelled_row(3, "Boiler output, boiler horsepower", "=B2/33475", "BHP") +
+        labelled_row(4, "Boiler output, slip", "=B2/2545", "BHP") +
+        labelled_row(5, "Fan motor", "15", "kW") +
+        labelled_row(6, "Fan motor, brake horsepower", "=B5/0.7457", "BHP") +
+        "</sheetData></worksheet>";
+    const auto found = cell_findings_of_one_sheet("Boiler", sheet);
+    CHECK(std::none_of(found.begin(), found.end(), [](const std::string& f) {
+        return f.rfind("Boiler!B3 ", 0) == 0 || f.rfind("Boiler!B6 ", 0) == 0;
+    }));
+    CHECK(std::any_of(found.begin(), found.end(),
+                      [](const std::string& f) { return f.rfind("Boiler!B4 ", 0) == 0; }));
+}

@@ -893,3 +893,11 @@ TEST_CASE("a name beginning with d is no difference unless the d marks one") {
     const std::string drops = "p_2 : kPag\np_1 : kPag\ndp_f, dPe, dh : kPa\n";
     passes(drops, {"p_2 = p_1 - dp_f - dPe - dh"});
 }
+
+// A grouting pressure on the packer's gauge held below the overburden, σ_v = γ·z, zero at the
+// ground and so counted from the atmosphere (common practice), through a symbol in kPa taken
+// to bar by 100 (NIST SP 811 (2008), B.8): a stress converted by numbers is a stress still.
+TEST_CASE("a stress converted by a number beside a gauge reading") {
+    const std::string decl = "σ_v : kPa \"overburden at the packer\"\np_gr : barg\n";
+    passes(decl, {"p_gr <= σ_v/100"});
+}

@@ -39,11 +39,6 @@ EXTRA = {
         (CORRECT + "feedwater enthalpy h = c·t above 0 °C, the steam tables' datum (common "
          "practice; 4.19 × 105 = 440 kJ/kg against 440.2 in IAPWS-IF97 tables); plumb refuses "
          "any °C reading in a product and wants (t - 0)", "Balance!C40 offset-scale"),
-        (CORRECT + "1 boiler horsepower = 33 475 Btu/h = 9.81 kW (common practice); plumb reads "
-         "'BHP' as brake horsepower (745.7 W) and says '1.34102 times too small', which is "
-         "not even right for that reading (kW/9.81 against hp would be 13.2). A sidecar line "
-         "'measure BHP = 33475 Btu/h' clears it (checked on a scratch copy)",
-         "Balance!C44 unit-scale"),
         (CORRECT + "blowdown heat loss m·(h_f - c·t_mu)/3600, make-up enthalpy c·t above 0 °C "
          "(common practice; Spirax Sarco (2007) 'Boiler blowdown', from memory); same "
          "°C-in-a-product rule as C40", "Balance!C47 offset-scale"),

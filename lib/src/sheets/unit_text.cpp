@@ -388,6 +388,14 @@ std::string trade_spelling(std::string t) {
             if ((at == 0 || !is_letter(t[at - 1])) && (end == t.size() || !is_letter(t[end])))
                 t.replace(at, typed.size(), unit);
         }
+    // "kWh/MG", "lb/MG": the US water trade's million gallons as a word of its own (not the
+    // megagram, Mg).
+    for (std::size_t at = t.find("MG"); at != std::string::npos; at = t.find("MG", at + 1)) {
+        const bool alone =
+            (at == 0 || !is_letter(t[at - 1])) && (at + 2 >= t.size() || !is_letter(t[at + 2]));
+        if (alone)
+            t.replace(at, 2, "Mgal");
+    }
     // "Btu/hr", "lb/hr", "m3/hr": the hour as a word of its own.
     for (std::size_t at = t.find("hr"); at != std::string::npos; at = t.find("hr", at + 1)) {
         const bool alone =

@@ -400,9 +400,11 @@ class workbook_checker {
         if (a.column + 1 < max_columns)
             if (const cell* right = sh.find({a.row, a.column + 1});
                 right != nullptr && right->kind == cell_kind::text) {
-                if (auto u = read_unit_text(right->text, units_.measures))
+                if (auto u = read_unit_text(right->text, units_.measures)) {
+                    boiler_horsepower_by_label(s, a, right->text, *u);
                     return cell_unit{*u, fmt::format("beside it in {}",
                                                      a1_name(cell_address{a.row, a.column + 1}))};
+                }
                 unread_.emplace(book_key(s, a), unread_unit{right, right->text, false});
             }
         // 4. The column's heading: the nearest text cell above.
@@ -413,8 +415,10 @@ class workbook_checker {
             if (it != rows.begin()) {
                 const cell_address heading{*(it - 1), a.column};
                 const cell* above = sh.find(heading);
-                if (auto u = read_heading_unit(above->text, units_.measures))
+                if (auto u = read_heading_unit(above->text, units_.measures)) {
+                    boiler_horsepower_by_label(s, a, u->text, *u);
                     return cell_unit{*u, fmt::format("from the heading in {}", a1_name(heading))};
+                }
                 // "Target [fc]": a unit written in the heading that plumb cannot read leaves the
                 // column unchecked, which must be said as for the text beside a cell.
                 if (auto written = heading_unit_text(above->text))
@@ -422,6 +426,24 @@ class workbook_checker {
             }
         }
         return std::nullopt;
+    }
+
+    // "Boiler output | =C26/33475 | BHP": boiler makers write BHP for the boiler horsepower,
+    // 33 475 Btu/h (ABMA; common practice), which the unit table keeps as BoHP; a shaft's
+    // brake horsepower is the hp. Read so where the row's label names a boiler.
+    void boiler_horsepower_by_label(std::size_t s, cell_address a, std::string_view text,
+                                    written_unit& u) const {
+        if (text != "BHP" && text != "bhp")
+            return;
+        std::string label = label_of(s, a).description;
+        std::transform(label.begin(), label.end(), label.begin(),
+                       [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+        if (label.find("boiler") == std::string::npos)
+            return;
+        if (auto boiler = read_unit_text("BoHP", units_.measures)) {
+            boiler->text = std::string(text);
+            u = std::move(*boiler);
+        }
     }
 
     static bool differ(const declared_unit& a, const declared_unit& b) {

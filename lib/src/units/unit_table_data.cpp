@@ -432,6 +432,11 @@ constexpr unit_definition rows[] = {
     absolute("hp", "horsepower (550 ft·lbf/s)", power, 745.69987158227022, "745.69987158227022",
              prefixes::refused,
              "NIST SP 811 (2008), B.8 prints 7.456999E+02; exact as 550 ft·lbf/s"),
+    // A boiler's rating: 34.5 lb/h of water evaporated from and at 212 °F, 33 475 Btu/h as the
+    // boiler makers round it (ABMA; common practice), not the brake horsepower of a shaft.
+    absolute("BoHP", "boiler horsepower (33 475 Btu/h)", power, 70635989332909.0 / 7200000000.0,
+             "70635989332909/7200000000", prefixes::refused,
+             "common practice (ABMA, 33 475 Btu/h); Btu (IT) from NIST SP 811 (2008), B.8, exact"),
 
     // Temperature.
     degree_fahrenheit,
@@ -480,6 +485,10 @@ constexpr unit_definition rows[] = {
     absolute("mgd", "million gallons (U.S.) per day", volumetric_flow, 157725491.0 / 3600000000.0,
              "157725491/3600000000", prefixes::refused,
              "common practice (1e6 gal/d); NIST SP 811 (2008), B.8 gallon (U.S.) and day, exact"),
+    // And keep their energy and chemical use per million gallons (kWh/MG; common practice).
+    absolute("Mgal", "million gallons (U.S.)", volume, 3785.411784, "3785.411784",
+             prefixes::refused,
+             "common practice (1e6 gal); NIST SP 811 (2008), B.8 gallon (U.S.), exact"),
     absolute("gal_imp", "gallon (Imperial)", volume, 0.00454609, "0.00454609", prefixes::refused,
              "NIST SP 811 (2008), B.8 gallon [Canadian and U.K. (Imperial)] 4.54609E-03, exact"),
     absolute("igpm", "gallon (Imperial) per minute", volumetric_flow, 454609.0 / 6000000000.0,

@@ -167,12 +167,18 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             }
             return is_water_column(scale);
         };
+        // "σ_v/100" beside bar(g): a stress converted by numbers is a stress still.
+        const auto stress_converted = [&](std::uint32_t node) {
+            const std::uint32_t sole = sole_symbol_times_conversions(node, true);
+            return sole != syntax::no_index && sole != node && names_a_stress_symbol(sole);
+        };
         const auto net_pressure = [&](const operand& o) {
             return o.type.absolute_pressure_difference || declared_pressure_difference(o) ||
                    water_column(o) ||
                    (!o.type.point && o.type.dim == pressure_dimension() &&
                     (pressure_scaled_by_shape(o.node, false) || force_over_area(o.node) ||
-                     gradient_times_depth(o.node) || names_a_stress_symbol(o.node)));
+                     gradient_times_depth(o.node) || names_a_stress_symbol(o.node) ||
+                     stress_converted(o.node)));
         };
         if ((on_gauge(*reference) && net_pressure(side)) ||
             (on_gauge(side) && net_pressure(*reference)))
