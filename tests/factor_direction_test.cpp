@@ -77,3 +77,31 @@ TEST_CASE("a degree's 1.8 beside a conversion that holds it already") {
         CHECK(only_finding(decl + right + "\n").empty());
     }
 }
+
+// Messages that follow the slip, not a number taken for what it is not:
+// - t½ = 0.693·V/Q (ln 2; common practice) with V in US gallons and Q in m³/h is off by the
+//   gallons in a cubic metre, 264.172 (NIST SP 811 (2008), B.8), not by a power of ten;
+// - 1/(C_w/S_s + 1 − C_w) with C_w in %: beside unity the share in % is the term off;
+// - (t_F − 32)/1.8 + 273.15 into °C: the 273.15 of the kelvins is the slip (NIST SP 811 (2008),
+//   4.2.1.1), and the scale named is the kelvins';
+// - 0.10·p_set,g beside psia at a declared site: the barometer to add is in psi, not a tenth.
+TEST_CASE("messages name the slip a formula holds") {
+    const auto half = plumb::test::check_after("t_half : h\nV_gal : gal\nB_m3h : m3/h\n",
+                                               "t_half = 0.693*V_gal/B_m3h");
+    CHECK(plumb::test::says(plumb::test::first_under(half, plumb::rules::unit_scale),
+                            "counts 264.172 times"));
+    const auto share =
+        plumb::test::check_after("C_w : %\nS_s, S_m : 1\n", "S_m = 1/(C_w/S_s + 1 - C_w)");
+    CHECK(plumb::test::says(plumb::test::first_under(share, plumb::rules::unit_scale),
+                            "divide 'C_w/S_s' by 100"));
+    const auto kelvins =
+        plumb::test::check_after("t_C : °C\nt_F : °F\n", "t_C = (t_F - 32)/1.8 + 273.15");
+    const auto& k = plumb::test::first_under(kelvins, plumb::rules::offset_scale);
+    CHECK(plumb::test::says(k, "the absolute scale (K)"));
+    CHECK(plumb::test::says(k, "drop the 273.15"));
+    const auto share_of_gauge = plumb::test::check_after(
+        "p_baro : kPa \"site barometric pressure, 94.6 kPa\"\np_a : psia\np_set : psig\n",
+        "p_a <= 0.10*p_set");
+    CHECK(plumb::test::says(plumb::test::first_under(share_of_gauge, plumb::rules::offset_scale),
+                            "write (0.10*p_set + 13.7206), 'p_baro' in psi"));
+}

@@ -851,10 +851,15 @@ class workbook_checker {
                 return d.level != severity::note && d.rule == rule;
             });
         };
+        // Or "=(C20-32)/1.8+273.15" into °C: the kelvins' 273.15 added, which the notation
+        // names, where the formula alone finds the 1.8 a coefficient.
         const bool atmosphere =
             std::any_of(notation.begin(), notation.end(), [](const diagnostic& d) {
                 return d.level != severity::note && d.rule == rules::offset_scale &&
-                       d.message.find("atmosphere") != std::string::npos;
+                       (d.message.find("atmosphere") != std::string::npos ||
+                        std::any_of(d.notes.begin(), d.notes.end(), [](const auto& n) {
+                            return n.message.find("takes a reading to") != std::string::npos;
+                        }));
             });
         return atmosphere && !faults_under(workbook, rules::offset_scale) &&
                std::all_of(workbook.begin(), workbook.end(), [](const diagnostic& d) {

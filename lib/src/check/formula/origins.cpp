@@ -222,8 +222,11 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
             other.type.offset != nullptr
                 ? fmt::format("the {} scale", other.type.offset->symbol)
                 : std::string(!temperature ? "the absolute scale (Pa, bar, psia)"
-                              : std::abs(other.type.scale * 1.8 - 1.0) < 1e-9 ||
-                                      std::abs(other_degree * 1.8 - 1.0) < 1e-3
+                              // "(t_F - 32)/1.8 + 273.15": the numbers' degree, where they give
+                              // one, is the kelvin; the °F reading's own only otherwise.
+                              : (std::isfinite(other_degree)
+                                     ? std::abs(other_degree * 1.8 - 1.0) < 1e-3
+                                     : std::abs(other.type.scale * 1.8 - 1.0) < 1e-9)
                                   ? "the absolute scale (°R)"
                                   : "the absolute scale (K)");
         // "14.5*p_g + 14.7" moves the zero by 14.7 psi seen through the rounded 14.5: the
@@ -316,6 +319,22 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
                     "in {}",
                     fraction, gauge, atmosphere_in(written_unit, absolute_unit), fraction, gauge,
                     zero, absolute_unit);
+            }
+            // "t_C = (t_F - 32)/1.8 + 273.15": the kelvins' 273.15 added where the side is
+            // on the °C scale (or °R's 459.67 beside °F) is the slip; the rest converts.
+            if (temperature && unit != nullptr) {
+                const syntax::expr_node& sum =
+                    file_.nodes[syntax::inside_brackets(file_, other.node)];
+                const bool celsius = std::abs(unit->factor - 1.0) < 1e-12;
+                if (sum.kind == expr_kind::add && file_.nodes[sum.rhs].kind == expr_kind::number &&
+                    std::abs(written_number(file_.nodes[sum.rhs].range) -
+                             (celsius ? 273.15 : 459.67)) < 0.02)
+                    advice = fmt::format("{} takes a reading to {}, but '{}' is on the {} scale: "
+                                         "drop the {}",
+                                         display_text(file_.nodes[sum.rhs].range),
+                                         celsius ? "kelvins" : "degrees Rankine",
+                                         display_text(file_.nodes[off.node].range), unit->symbol,
+                                         display_text(file_.nodes[sum.rhs].range));
             }
             // "Δθ_h = θ_h" with Δθ_h in K "rise above ambient": the kelvins are a rise's,
             // and a reading made absolute would only hide the slip.
@@ -744,10 +763,15 @@ std::pair<double, std::string> checker::unit_of_numbers(const typed_term& t,
                                                         const unit_definition& scale) const {
     const double written_unit = unit_of_written_numbers(t);
     if (std::isfinite(written_unit) && std::abs(written_unit / scale.factor - 1.0) > 1e-3 &&
-        scale.dim() == pressure_dimension().expand())
+        scale.dim() == pressure_dimension().expand()) {
         for (const auto& u : pressure_units)
             if (std::abs(written_unit / u.pascals - 1.0) < 5e-3)
                 return {u.pascals, std::string(u.name)};
+        // "0.10*p_set_psig": a share of the reading, no conversion into a unit of pressure;
+        // the atmosphere to add is in the reading's own unit, not a tenth of it.
+        if (std::isfinite(t.scale) && t.scale > 0.0)
+            return {t.scale, absolute_symbol(scale)};
+    }
     return {written_unit, absolute_symbol(scale)};
 }
 

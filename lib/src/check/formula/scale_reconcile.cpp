@@ -268,6 +268,12 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
          (!mixes_units_of_one_kind(ops[index[r.odd]].node) &&
           mixes_units_of_one_kind(ops[index[r.reference]].node))))
         std::swap(r.odd, r.reference);
+    // "1/(C_w/S_s + 1 - C_w)" with C_w in %: beside unity the shares in % are the terms off,
+    // however many of them there are; the 1 is the whole, not a percent.
+    if (what.what.starts_with("terms") && ops[index[r.odd]].type.numeric &&
+        ops[index[r.odd]].type.value && *ops[index[r.odd]].type.value == rational(1) &&
+        holds_percentage(ops[index[r.reference]].node))
+        std::swap(r.odd, r.reference);
     // "D_drum/d_r >= 18" with the drum in m and the rope in mm: the bare number is the
     // code's limit, and the ratio beside it is what to convert.
     if (what.what == "sides of this limit" && parts.size() == 2 && ops[index[r.odd]].type.numeric &&
@@ -1050,6 +1056,10 @@ std::optional<double> checker::ratio_with_folded_constant(const scaled_operand& 
             // 1714, 550): a 2 or a 0.95 is the formula's own.
             if (looks_like_conversion(l, true) || !(l.value > 0) || l.value == 1.0 ||
                 significant_digits(text(file_.nodes[l.node].range)) < 3)
+                continue;
+            // 0.693 in t½ = 0.693·V/Q is ln 2, a half-life's own (common practice), never a
+            // folded constant that would leave a power of ten for the gallons' 264.17.
+            if (std::abs(l.value / std::numbers::ln2 - 1.0) < 1e-3)
                 continue;
             const double e = part == &odd ? l.exponent : -l.exponent;
             // The number as a conversion by itself first ((T_1 - T_2)*V_fpm/550 with V in
