@@ -105,3 +105,13 @@ TEST_CASE("messages name the slip a formula holds") {
     CHECK(plumb::test::says(plumb::test::first_under(share_of_gauge, plumb::rules::offset_scale),
                             "write (0.10*p_set + 13.7206), 'p_baro' in psi"));
 }
+
+// A °F reading less a °F reading converted to °C, t_1 − (t_2 − 32)/1.8: the two scales' zeros
+// (0 °F = 255.372 K, 0 °C = 273.15 K; NIST SP 811 (2008), 4.2.1.1) are the finding, not an
+// absolute scale's.
+TEST_CASE("a difference of readings on two offset scales names both") {
+    const auto r = plumb::test::check_after("t_1, t_2 : °F\nΔT : K\n", "ΔT = t_1 - (t_2 - 32)/1.8");
+    const auto& d = plumb::test::first_under(r, plumb::rules::offset_scale);
+    CHECK(plumb::test::says(d, "on the °F scale and '(t_2 - 32)/1.8' on the °C scale"));
+    CHECK(plumb::test::says(d, "take both readings to one scale"));
+}

@@ -507,9 +507,20 @@ void checker::report_mixed_scales(std::span<const operand> terms, double differe
         return;
     }
     const unit_definition& unit = *named;
+    // "C48 - (C49 - 32)/1.8": the other reading converted onto another offset scale, whose
+    // zero is not the absolute one.
+    const unit_definition* other_scale =
+        other != nullptr && std::abs(other->type.origin) > 1e-9
+            ? scale_named(other->type.origin, 0.0, other->type.dim, terms)
+            : nullptr;
     diagnostic& d = report(
         rules::offset_scale,
-        other != nullptr
+        other_scale != nullptr && other_scale != &unit
+            ? fmt::format("{} is on the {} scale and {} on the {} scale, so their difference "
+                          "is off by the difference of the scales' zeros",
+                          quote(on_offset->node), unit.symbol, quote(other->node),
+                          other_scale->symbol)
+        : other != nullptr
             ? fmt::format("{} is on the {} scale and {} on an absolute one, so their "
                           "difference is off by the {} scale's zero",
                           quote(on_offset->node), unit.symbol, quote(other->node), unit.symbol)
@@ -544,9 +555,13 @@ void checker::report_mixed_scales(std::span<const operand> terms, double differe
              {}});
     const auto [numbers_unit, numbers_unit_name] = unit_of_numbers(on_offset->type, unit);
     d.notes.push_back(
-        {temperature
-             ? fmt::format("convert first: a {} reading plus {:g} is in K", unit.symbol,
-                           unit.offset / unit.factor)
+        {temperature && other_scale != nullptr && other_scale != &unit
+             ? fmt::format("convert first: take both readings to one scale, {} or {}", unit.symbol,
+                           other_scale->symbol)
+         : temperature
+             ? fmt::format("convert first: a {} reading plus {:g} is in {}", unit.symbol,
+                           unit.offset / unit.factor,
+                           std::abs(unit.factor - 1.0) < 1e-12 ? "K" : "degrees Rankine")
              : site_atmosphere_advice(display_text(file_.nodes[on_offset->node].range),
                                       numbers_unit, numbers_unit_name)
                    .value_or("convert first: a gauge reading plus the atmospheric pressure is "
