@@ -463,8 +463,8 @@ TEST_CASE("sheets: standard gravity written as a number in a cell formula (9.81)
 TEST_CASE("sheets: the pump trade's water numbers in cell formulas (3960, 2.31, 1.08)") {
     // Water horsepower Q·H/3960 (hp, gpm, ft), head 2.31 ft per psi, and the HVAC sensible load
     // 1.08·cfm·ΔT: the numbers carry water's specific weight and air's heat capacity (see
-    // check/gravity_number.cpp; common practice). B5 has the factor the wrong way round and
-    // B7 uses the air number for a water flow: both stay errors.
+    // check/gravity_number.cpp; common practice). B5 has the factor the wrong way round, and
+    // says so; B7 uses the air number for a water flow: both stay errors.
     const std::string sheet =
         "<worksheet><sheetData>" + value_and_unit_row(2, "450", "gpm") +
         value_and_unit_row(3, "120", "ft") + value_and_unit_row(4, "=B2*B3/3960", "hp") +
@@ -474,7 +474,7 @@ TEST_CASE("sheets: the pump trade's water numbers in cell formulas (3960, 2.31, 
         value_and_unit_row(11, "2000", "cfm") + "</sheetData></worksheet>";
     CHECK(cell_findings_of_one_sheet("Pumps", sheet) ==
           std::vector<std::string>{"Pumps!B10 trade-constant", "Pumps!B4 gravity-number",
-                                   "Pumps!B5 result-unit", "Pumps!B6 gravity-number",
+                                   "Pumps!B5 unit-scale", "Pumps!B6 gravity-number",
                                    "Pumps!B7 result-unit"});
 }
 

@@ -89,8 +89,6 @@ MESSAGES = {
     "sprinkler-hydraulics": {
         "Calc!C14": "\"multiplies by 0.0245424\": the formula multiplies by 3.785/10.76 = 0.352; "
                     "only the 10.76 is the wrong way round",
-        "Calc!C31": "result-unit '[L] length' on h/0.433: right cell, but it does not say that "
-                    "0.433 psi/ft divides where it should multiply (it reads 0.433 as γ_w in C30)",
         "Branch!H7": "result-unit with a dimension [L^(17/25) T^(-37/20)] no engineer can use; "
                      "nothing points at the 25.4 that turned inches into mm",
     },
@@ -107,8 +105,6 @@ MESSAGES = {
 
 RENAMED = {
     "sprinkler-hydraulics": {
-        "Calc!C31": ("result-unit", "with 0.433 dividing, plumb does not read it as γ_w, so the "
-                     "formula is length where psi is written"),
         "Branch!H7": ("result-unit", "with d in mm the 4.52 is no longer read as the fit's "
                       "constant, so the dimension is left as it falls"),
     },

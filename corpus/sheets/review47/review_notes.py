@@ -62,8 +62,6 @@ RENAMED = {
                                        "UPS!C71, gets the 1.8 named"),
     },
     "irrigation-pumping-plant": {
-        "Plant!C33": ("result-unit", "ft × 2.31 flagged as 'computes [L]'; it does not say the "
-                                     "2.31 belongs below the line"),
     },
     "tank-hydrotest-settlement": {
         "Hydrotest!C43": ("result-unit", "flagged only for the 2.6 constant, the same finding as "

@@ -831,6 +831,13 @@ class workbook_checker {
             // for the cell, say which term of a sum is off ("=C22*C23 + C24" in kW, C24 in kW).
             out_.resize(before);
             take_verdict(*verdict, f, formula);
+        } else if (verdict && number_read_as_quantity({out_.data() + before, out_.size() - before},
+                                                      *verdict)) {
+            // "=C16/2.31" into ft from psi: the notation, which knew the cell's unit, read the
+            // 2.31 as water's feet per psi and found it turned over; the formula alone leaves
+            // it a plain number and reports the dimension.
+            out_.resize(before);
+            take_verdict(*verdict, f, formula);
         } else if (verdict &&
                    zero_against_scale({out_.data() + before, out_.size() - before}, *verdict)) {
             // "=C47*14.5+14.7" into psig from bar(g): the notation, which knew the cell's unit,
@@ -839,6 +846,29 @@ class workbook_checker {
             out_.resize(before);
             take_verdict(*verdict, f, formula);
         }
+    }
+
+    // Whether the workbook's own words found only a dimension where the notation, reading a
+    // number as the quantity it carries, found the sides to agree in dimension and named a
+    // factor turned over.
+    static bool number_read_as_quantity(std::span<const diagnostic> workbook,
+                                        std::span<const diagnostic> notation) {
+        const bool dimension_only =
+            !workbook.empty() &&
+            std::all_of(workbook.begin(), workbook.end(), [](const diagnostic& d) {
+                return d.level == severity::note || d.rule == rules::result_unit ||
+                       d.rule == rules::side_mismatch;
+            });
+        const bool turned_over =
+            std::any_of(notation.begin(), notation.end(), [](const diagnostic& d) {
+                return d.level != severity::note && d.rule == rules::unit_scale &&
+                       d.message.find("wrong way round") != std::string::npos;
+            });
+        const bool notation_dimension =
+            std::any_of(notation.begin(), notation.end(), [](const diagnostic& d) {
+                return d.level != severity::note && d.rule == rules::side_mismatch;
+            });
+        return dimension_only && turned_over && !notation_dimension;
     }
 
     // Whether the notation found the atmosphere, a gauge scale's zero, where the workbook's own
@@ -1155,12 +1185,25 @@ class workbook_checker {
         for (const auto& u : pressure_units)
             if (std::abs(cell_unit.scale / u.pascals - 1.0) > 5e-3 &&
                 read_reference_state(pressure, value, written, u.pascals) != nullptr) {
-                d.notes.push_back(
-                    {fmt::format("{} is the atmosphere in {}, not in {}, the cell's unit: in {} "
-                                 "it is {}",
-                                 written, u.name, cell_unit.text, cell_unit.text,
-                                 format_factor(101325.0 / cell_unit.scale)),
-                     {}});
+                // "Site barometric pressure | 14.2 | psia" in C13: the atmosphere to add is
+                // that row's, in the cell's unit, not the sea level's.
+                if (const auto& site = lowered_.tree.barometer; site && site->pascals > 0.0)
+                    d.notes.push_back(
+                        {fmt::format(
+                             "{} is the atmosphere at sea level in {}, not in {}, the "
+                             "cell's unit; the sheet's barometer {} is {} {}",
+                             written, u.name, cell_unit.text, site->cell,
+                             format_factor(std::round(site->pascals / cell_unit.scale * 1000.0) /
+                                           1000.0),
+                             cell_unit.text),
+                         {}});
+                else
+                    d.notes.push_back(
+                        {fmt::format("{} is the atmosphere in {}, not in {}, the cell's unit: in "
+                                     "{} it is {}",
+                                     written, u.name, cell_unit.text, cell_unit.text,
+                                     format_factor(101325.0 / cell_unit.scale)),
+                         {}});
                 return;
             }
     }
