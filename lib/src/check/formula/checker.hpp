@@ -181,6 +181,10 @@ constexpr double reference_temperature_slack = 0.003;
 // observatories), as a share of the standard atmosphere: h = 44330.8·(1 - 0.52^0.190263) m in
 // the standard atmosphere's barometric formula (from memory).
 constexpr double highest_site_atmosphere = 0.52;
+// And at the deepest levels a barometer is read at, some 4 km down a mine (the standard
+// atmosphere's formula carried below sea level gives about 1.6 times its pressure there, from
+// memory): a mine's or a site's below sea level, above the standard atmosphere.
+constexpr double deepest_site_atmosphere = 1.6;
 // How far the sea-level atmosphere written into a sum of pressures may stand from the
 // barometer the file declares for its site. Added to a gauge reading, 1.5 % (about 125 m of
 // height in the standard atmosphere, from memory): the error is a small share of the absolute

@@ -7,6 +7,15 @@ namespace plumb::formula_check {
 // The site's barometer, where the file declares one that is not the standard atmosphere:
 // "p_b : kPa "site barometric pressure, 96.2 kPa"" or "p_atm : psia = 12.2". Worked out at
 // the first gauge reading made absolute with a number, once per file.
+// A barometer read at a site, up a mountain or down a mine, and not the sea level's within its
+// rounding.
+static bool a_site_barometer(double pascals) {
+    return (pascals >= highest_site_atmosphere * standard_atmosphere &&
+            pascals <= (1.0 - site_barometer_slack_in_difference) * standard_atmosphere) ||
+           (pascals >= 1.005 * standard_atmosphere &&
+            pascals <= deepest_site_atmosphere * standard_atmosphere);
+}
+
 const checker::site_barometer* checker::declared_site_barometer() {
     // A file is checked as it is read: the declarations that came since the last search are
     // searched too, each once, so that a barometer declared after an early formula counts.
@@ -17,8 +26,7 @@ const checker::site_barometer* checker::declared_site_barometer() {
     if (file_.barometer) {
         site_barometer_settled_ = true;
         const double pascals = file_.barometer->pascals;
-        if (!(pascals >= highest_site_atmosphere * standard_atmosphere &&
-              pascals <= (1.0 - site_barometer_slack_in_difference) * standard_atmosphere))
+        if (!a_site_barometer(pascals))
             return nullptr;
         site_barometer_ = {file_.barometer->cell, pascals, file_.barometer->unit};
         return &site_barometer_;
@@ -47,8 +55,7 @@ const checker::site_barometer* checker::declared_site_barometer() {
         // A site below sea level by more than the Dead Sea is no site; above 5200 m the air
         // is thinner than any plant is built in (the highest mines and observatories; the
         // standard atmosphere, from memory, has 52.7 kPa there).
-        if (!(pascals >= highest_site_atmosphere * standard_atmosphere &&
-              pascals <= (1.0 - site_barometer_slack_in_difference) * standard_atmosphere))
+        if (!a_site_barometer(pascals))
             continue;
         site_barometer_ = {name, pascals, decl.kind.si_factor};
         return &site_barometer_;
@@ -148,10 +155,11 @@ void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_v
     diagnostic& d =
         report(rules::offset_scale,
                fmt::format("{} is {}, but this file declares the site's barometer '{}' ({} {}, "
-                           "as the standard atmosphere has about {} m up): {} comes out {} {} {}",
+                           "as the standard atmosphere has about {} m {}): {} comes out {} {} {}",
                            display_text(file_.nodes[number].range), what,
                            barometer_in_unit(unit).value_or(site.name), in_shown(site.pascals, 4),
-                           shown, static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10),
+                           shown, static_cast<long>(std::round(std::abs(height) / 10.0) * 10),
+                           height >= 0.0 ? "up" : "below sea level",
                            added_to_gauge      ? "the absolute pressure"
                            : number_subtracted ? "the pressure above the atmosphere"
                                                : "the sum it stands in",

@@ -643,12 +643,16 @@ bool checker::read_local_atmosphere_taken_off(const operand& difference) {
 bool checker::read_number_as_local_atmosphere(std::uint32_t number, double unit) {
     const double pressure = written_number(file_.nodes[number].range) * unit;
     if (!(pressure >= highest_site_atmosphere * standard_atmosphere &&
-          pressure <= 1.005 * standard_atmosphere))
+          pressure <= deepest_site_atmosphere * standard_atmosphere))
+        return false;
+    const site_barometer* site = declared_site_barometer();
+    // Above the sea level's, only as the barometer a file declares down its mine.
+    if (pressure > 1.005 * standard_atmosphere &&
+        (site == nullptr || std::abs(pressure / site->pascals - 1.0) > site_barometer_slack))
         return false;
     // "p_g + 14.73" where the file declares a barometer of 96.9 kPa: 14.73 psia, the US gas
     // contract's base pressure, taken for the site's atmosphere.
-    if (const site_barometer* site = declared_site_barometer();
-        site != nullptr && std::abs(pressure / site->pascals - 1.0) > site_barometer_slack) {
+    if (site != nullptr && std::abs(pressure / site->pascals - 1.0) > site_barometer_slack) {
         report_atmosphere_not_the_site(
             number, fmt::format("an atmosphere of {} kPa", format_factor(pressure / 1000.0)),
             pressure, *site, unit);
@@ -659,9 +663,10 @@ bool checker::read_number_as_local_atmosphere(std::uint32_t number, double unit)
     diagnostic& d = report(
         rules::trade_constant,
         fmt::format("{} is read as the atmospheric pressure where the gauge is, {} kPa, which "
-                    "the standard atmosphere has about {} m above sea level",
+                    "the standard atmosphere has about {} m {} sea level",
                     display_text(file_.nodes[number].range), format_factor(pressure / 1000.0),
-                    static_cast<long>(std::round(std::max(0.0, height) / 10.0) * 10)),
+                    static_cast<long>(std::round(std::abs(height) / 10.0) * 10),
+                    height >= 0.0 ? "above" : "below"),
         file_.nodes[number].range);
     d.level = severity::note;
     d.notes.push_back({"a gauge reading plus the local atmosphere is absolute; at sea level "
