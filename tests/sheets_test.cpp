@@ -704,7 +704,7 @@ TEST_CASE("sheets: a column's pressure typed with its number, plus the atmospher
               return f.rfind("Tank!B3 ", 0) == 0 && f != "Tank!B3 gravity-number" &&
                      f != "Tank!B3 trade-constant";
           }) == 0);
-    CHECK(std::find(found.begin(), found.end(), "Tank!B4 sum-mismatch") != found.end());
+    CHECK(std::find(found.begin(), found.end(), "Tank!B4 offset-scale") != found.end());
     CHECK(std::count_if(found.begin(), found.end(), [](const std::string& f) {
               return f.rfind("Tank!B5 ", 0) == 0 && f != "Tank!B5 gravity-number";
           }) == 0);
@@ -913,4 +913,21 @@ TEST_CASE("sheets: kWh/MG and a boiler's BHP") {
     }));
     CHECK(std::any_of(found.begin(), found.end(),
                       [](const std::string& f) { return f.rfind("Boiler!B4 ", 0) == 0; }));
+}
+
+// A vacuum in inHg counts down from the atmosphere (3.386 kPa per inHg, NIST SP 811 (2008),
+// B.8): beside a row that types the site's barometer, the sea level's 101.325 less it is the
+// slip, named as the atmosphere the vacuum counts from. And a moment in lb·ft, as US drawings
+// write the pound-force, reads as lbf·ft like lb-ft does.
+TEST_CASE("sheets: a vacuum row counts down from the site's barometer; lb·ft is a moment") {
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Site barometer", "98.2", "kPa") +
+        labelled_row(3, "Operating vacuum at the receiver", "19", "inHg") +
+        labelled_row(4, "Absolute pressure at the receiver", "=101.325-3.386*B3", "kPa") +
+        labelled_row(5, "Line load", "30.4", "plf") + labelled_row(6, "Span", "14", "ft") +
+        labelled_row(7, "Moment", "=B5*B6^2/8", "lb\u00B7ft") + "</sheetData></worksheet>";
+    const auto found = cell_findings_of_one_sheet("Plant", sheet);
+    CHECK(std::find(found.begin(), found.end(), "Plant!B4 offset-scale") != found.end());
+    CHECK(std::none_of(found.begin(), found.end(),
+                       [](const std::string& f) { return f.rfind("Plant!B7 ", 0) == 0; }));
 }

@@ -86,7 +86,6 @@ RENAMED = {
                                       "differ' less so"),
     },
     "compressor-brackwater": {
-        "Station!C24": ("sum-mismatch", "flagged, but for the wrong reason: see the message"),
     },
     "aeration-millbrook": {
         "Aeration!C41": ("unit-scale", "flagged, rightly: the exponent counts °F degrees"),
@@ -103,11 +102,6 @@ RENAMED = {
 
 MESSAGES = {
     "compressor-brackwater": {
-        "Station!C24": "\"cannot add '1.013' to 'C20/14.5': their dimensions differ\" and "
-                       "\"'C20/14.5' is in psi: write it as 14.6959 psi, or convert to bar "
-                       "first\": C20/14.5 is already in bar (plumb passes the same /14.5 in "
-                       "C23); the slip is the atmosphere added to an absolute reading, and the "
-                       "advice, followed, gives p_psia/14.5 + 14.6959, still wrong",
         "Station!C9": "\"its inputs give numbers in units of 1179.868608 Nm³/h\": that is the "
                       "cubic foot alone, 5.7 % high for Nm³ from scf (plumb itself accepts "
                       "1116.3 in C8 and flags the volume factor alone in the aeration book); "

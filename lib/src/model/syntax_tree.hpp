@@ -58,6 +58,8 @@ struct reference_value {
     bool enthalpy = false;
     // A pure number whose row label says it is a liquid's specific gravity.
     bool specific_gravity = false;
+    // A pressure whose row label says it is a vacuum, counted down from the atmosphere.
+    bool vacuum = false;
     // A length whose row label names a circle's diameter or radius (a pulley's, a drum's).
     round_length round = round_length::none;
     // The unit as written for the cell ("Ah", "L/min"), where one is.

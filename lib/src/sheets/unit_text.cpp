@@ -216,7 +216,7 @@ std::string without_species(std::string t) {
 
 std::string trade_spelling(std::string t) {
     t = without_species(std::move(t));
-    static constexpr std::array<std::pair<std::string_view, std::string_view>, 118> whole{{
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 122> whole{{
         {"in. w.g.", "inH2O"},
         {"in.w.g.", "inH2O"},
         {"in w.g.", "inH2O"},
@@ -308,6 +308,10 @@ std::string trade_spelling(std::string t) {
         {"lb-in", "lbf in"},
         {"in-lb", "in lbf"},
         {"ft-lbs", "ft lbf"},
+        {"lb\u00B7ft", "lbf ft"},
+        {"ft\u00B7lb", "ft lbf"},
+        {"lb\u00B7in", "lbf in"},
+        {"in\u00B7lb", "in lbf"},
         {"lb-ft/ft", "lbf"},
         {"k-ft", "kip ft"},
         {"k-in", "kip in"},

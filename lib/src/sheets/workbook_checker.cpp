@@ -596,6 +596,14 @@ class workbook_checker {
         return label;
     }
 
+    // "Operating vacuum | 19 | inHg": a reading counted down from the atmosphere.
+    bool labelled_a_vacuum(std::size_t s, cell_address a) const {
+        std::string words = label_of(s, a).description;
+        std::transform(words.begin(), words.end(), words.begin(),
+                       [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+        return words.find("vacuum") != std::string::npos;
+    }
+
     bool labelled_a_specific_gravity(std::size_t s, cell_address a) const {
         const row_label label = label_of(s, a);
         return !label.description.empty() && names_specific_gravity(label.name, label.description);
@@ -736,6 +744,8 @@ class workbook_checker {
                 r.area.single() && v.dim && labelled_a_difference(r.sheet, r.area.first);
             target.specific_gravity = r.area.single() && v.dim && v.dim->is_dimensionless() &&
                                       labelled_a_specific_gravity(r.sheet, r.area.first);
+            target.vacuum = r.area.single() && v.dim && v.offset == nullptr &&
+                            labelled_a_vacuum(r.sheet, r.area.first);
             target.round =
                 r.area.single() && v.dim && *v.dim == dimension::base(base_dimension::length)
                     ? labelled_round(r.sheet, r.area.first)
@@ -891,9 +901,13 @@ class workbook_checker {
                             return n.message.find("takes a reading to") != std::string::npos;
                         }));
             });
+        // "=101.325-3.386*C12" with C12 a vacuum: the formula alone cannot tell which term
+        // is the sum's, and finds the number dimensionless; beside the cell's unit the
+        // notation reads the atmosphere the vacuum counts down from.
         return atmosphere && !faults_under(workbook, rules::offset_scale) &&
                std::all_of(workbook.begin(), workbook.end(), [](const diagnostic& d) {
-                   return d.level == severity::note || d.rule == rules::unit_scale;
+                   return d.level == severity::note || d.rule == rules::unit_scale ||
+                          d.rule == rules::sum_mismatch;
                });
     }
 

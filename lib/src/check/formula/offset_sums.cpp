@@ -124,6 +124,12 @@ void checker::note_zero_added_to_converted_temperature(diagnostic& d,
 bool checker::holds_absolute_pressure(std::uint32_t term) const {
     return for_each_factor(term, [&](std::uint32_t at, int sign) {
         const syntax::expr_node& n = file_.nodes[at];
+        // A cell in an absolute unit holds a reading unless its row says otherwise.
+        if (n.kind == expr_kind::reference && sign > 0) {
+            const syntax::reference_value& r = file_.references[n.lhs];
+            return r.dim && r.offset == nullptr && !r.difference &&
+                   compact_dimension::fitted(*r.dim) == std::optional(pressure_dimension());
+        }
         if (n.kind != expr_kind::symbol || sign < 0)
             return false;
         const symbol_entry* e = symbols_.find(text(n.range));
@@ -137,6 +143,8 @@ bool checker::holds_absolute_pressure(std::uint32_t term) const {
 bool checker::names_a_vacuum(std::uint32_t node) const {
     return for_each_factor(syntax::inside_brackets(file_, node), [&](std::uint32_t at, int sign) {
         const syntax::expr_node& n = file_.nodes[at];
+        if (sign > 0 && n.kind == expr_kind::reference)
+            return file_.references[n.lhs].vacuum;
         if (sign < 0 || n.kind != expr_kind::symbol)
             return false;
         const std::string_view name = text(n.range);
