@@ -115,3 +115,21 @@ TEST_CASE("a difference of readings on two offset scales names both") {
     CHECK(plumb::test::says(d, "on the °F scale and '(t_2 - 32)/1.8' on the °C scale"));
     CHECK(plumb::test::says(d, "take both readings to one scale"));
 }
+
+// Inside a sine or a tangent the angle is taken in radians; one in degrees is converted by
+// π/180 once (SI Brochure 9th ed., table 8: 1° = π/180 rad). Turned over, the argument is
+// 57.2958² = 3282.81 times too large; written twice, 57.2958 times too small; 180/π beside
+// an angle in rad gives degrees the function does not take. Each was passed or misnamed.
+TEST_CASE("the degree's conversion inside a trigonometric function") {
+    const std::string decl = "α : deg\nθ : rad\nr_t, L : m\n";
+    plumb::test::each_passes(decl, {"r_t = L/2*tan(α*pi/180)", "r_t = L/2*tan(θ)"});
+    const auto turned = plumb::test::check_after(decl, "r_t = L/2*tan(α*180/pi)");
+    CHECK(plumb::test::says(plumb::test::first_under(turned, plumb::rules::unit_scale),
+                            "3282.81 times its true value"));
+    const auto twice = plumb::test::check_after(decl, "r_t = L/2*tan(α*pi/180*pi/180)");
+    CHECK(plumb::test::says(plumb::test::first_under(twice, plumb::rules::unit_scale),
+                            "written twice"));
+    const auto radians = plumb::test::check_after(decl, "r_t = L/2*tan(θ*180/pi)");
+    CHECK(plumb::test::says(plumb::test::first_under(radians, plumb::rules::unit_scale),
+                            "in radians already"));
+}

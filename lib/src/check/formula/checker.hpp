@@ -1374,6 +1374,7 @@ class checker {
     std::optional<double> dimensionless_unit_size(std::uint32_t at) const;
     bool conversion_folded_with_coefficient(const operand& a, const scaled_operand& part);
     static bool takes_an_angle(std::string_view name);
+    bool report_angle_conversion_in_argument(const builtin_function& f, const operand& a);
     bool angle_written_in_degrees(const operand& a) const;
     void report_degrees_taken_as_radians(const builtin_function& f, const operand& a);
     void require_unit_free(const builtin_function& f, const operand& a);

@@ -226,8 +226,68 @@ bool checker::reference_value_typed_in_cell_unit(const builtin_function& f, cons
     return true;
 }
 
+// "tan(α*180/pi)" with α in degrees, "tan(θ*180/pi)" with θ in rad, "sin(α*pi/180*pi/180)":
+// the degree's conversion π/180 written the wrong way round, where none is due, or twice. The
+// argument's own angle unit says how many are due: one for degrees, none for radians (SI
+// Brochure 9th ed., table 8: 1° = π/180 rad). True where a finding was made.
+bool checker::report_angle_conversion_in_argument(const builtin_function& f, const operand& a) {
+    if (!a.type.known || !a.type.dim.is_dimensionless() || a.type.literal_count < 2 ||
+        !std::isfinite(a.type.scale))
+        return false;
+    const bool degrees = std::abs(a.type.scale * 180.0 / std::numbers::pi - 1.0) < 1e-9;
+    const bool radians = std::abs(a.type.scale - 1.0) < 1e-12 && !a.type.numeric;
+    if (!degrees && !radians)
+        return false;
+    // π/180 pairs among the argument's numbers: +1 for each that multiplies by π/180, -1 for
+    // each 180/π.
+    std::array<bool, 16> used{};
+    const std::span<const scale_literal> numbers(literals_.data() + a.type.literal_begin,
+                                                 std::min<std::size_t>(a.type.literal_count, 16));
+    int pairs = 0;
+    for (std::size_t p = 0; p < numbers.size(); ++p) {
+        if (file_.nodes[numbers[p].node].kind != expr_kind::pi ||
+            std::abs(numbers[p].exponent) != 1.0)
+            continue;
+        for (std::size_t k = 0; k < numbers.size(); ++k)
+            if (!used[k] && numbers[k].value == 180.0 &&
+                numbers[k].exponent == -numbers[p].exponent &&
+                text(file_.nodes[numbers[k].node].range) == "180") {
+                used[k] = true;
+                pairs += numbers[p].exponent > 0 ? 1 : -1;
+                break;
+            }
+    }
+    const int due = degrees ? 1 : 0;
+    if (pairs == due || (pairs == 0 && degrees))
+        return false;
+    const double per_pair = 180.0 / std::numbers::pi;
+    const double off = std::pow(per_pair, due - pairs);
+    const std::string angle = display_text(file_.nodes[a.node].range);
+    const std::string what =
+        pairs > due ? (degrees ? "the angle's conversion to radians, π/180, is written twice"
+                               : "the angle is in radians already, and π/180 converts it again")
+        : degrees   ? "the conversion 180/π is the wrong way round: an angle in degrees times "
+                      "π/180 is in radians"
+                    : "the angle is in radians already, and 180/π turns it into degrees, which "
+                      "the function does not take";
+    diagnostic& d =
+        report(rules::unit_scale,
+               fmt::format("{}: as written, the argument of {} is {} times its true value", what,
+                           f.name, format_factor(rounded_to_digits(off, 6))),
+               file_.nodes[a.node].range);
+    d.level = severity::warning;
+    add_term(d, a, true);
+    d.notes.push_back({fmt::format("{} takes radians: an angle in degrees times π/180, one in "
+                                   "radians as it is",
+                                   f.name),
+                       {}});
+    return true;
+}
+
 void checker::require_unit_free(const builtin_function& f, const operand& a) {
     const bool angle = takes_an_angle(f.name);
+    if (angle && report_angle_conversion_in_argument(f, a)) [[unlikely]]
+        return;
     if (angle && angle_written_in_degrees(a))
         return;
     diagnostic* found = report_units_not_cancelling(a, fmt::format("the argument of {}", f.name));
