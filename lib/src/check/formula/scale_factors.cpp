@@ -150,8 +150,8 @@ std::span<const checker::folded_constant> checker::folded_constants() {
          "a full pipe's area and hydraulic radius (Manning's full-bore form)", false},
         // 576 = 4 × 144 in A = π*D^2/576 (in² to ft², NIST SP 811 (2008), B.8): a circle's 4
         // beside the π written out and a square; without the π it would hide a missing one.
-        {4.0, "4", "the area of a circle (\u03C0\u00B7D\u00B2/4)", true, true, false, false,
-         false, true},
+        {4.0, "4", "the area of a circle (\u03C0\u00B7D\u00B2/4)", true, true, false, false, false,
+         true},
     }};
     return constants;
 }
