@@ -218,8 +218,13 @@ std::optional<double> checker::scale_left_for_sum(std::uint32_t root, const type
 void checker::check_formula(const syntax::formula& f) {
     current_ = &f;
     inner_scale_ratio_ = 0.0;
-    if (!file_.quantities.empty() && declared_site_barometer() != nullptr) [[unlikely]]
-        report_sea_level_atmosphere_in_products(f);
+    // Asked only once a new declaration may have named a barometer, or where one was found.
+    if (!file_.quantities.empty() &&
+        (!site_barometer_.name.empty() ||
+         (!site_barometer_settled_ && site_barometer_declarations_ != file_.declarations.size())))
+        [[unlikely]]
+        if (declared_site_barometer() != nullptr)
+            report_sea_level_atmosphere_in_products(f);
     const std::size_t base = operands_.size();
     const std::size_t types_base = types_.size();
     // Reserved once: a generated chain of many relations must not grow it by doubling.
