@@ -1143,10 +1143,25 @@ typed_term checker::eval_factors(std::uint32_t index) {
         // Only set equal to a power: "F*p_g/100" into scfm is a pressure ratio.
         // Not beside a logarithm: p*V̇*ln(p_2/p_1) is a gas's isothermal compression,
         // which takes the absolute pressure.
+        // Nor beside a pressure ratio raised to a power that is no whole number,
+        // k/(k - 1)*p_1*V̇*(r^((k - 1)/k) - 1): a gas's adiabatic compression, which takes the
+        // absolute suction pressure too (common practice; GPSA, compressors, from memory).
+        const auto ratio_raised = [&](std::uint32_t at) {
+            return syntax::search_subtree(
+                file_, at, [&](std::uint32_t, const syntax::expr_node& n) {
+                    return n.kind == expr_kind::power &&
+                                   (file_.nodes[n.rhs].kind != expr_kind::number ||
+                                    !written_whole(text(file_.nodes[n.rhs].range)))
+                               ? search_step::found
+                               : search_step::descend;
+                });
+        };
         const bool gas_compression =
             result.known && result.dim == power_dim &&
             for_each_factor(index, [&](std::uint32_t at, int) {
                 const syntax::expr_node& f = file_.nodes[at];
+                if (file_.nodes[syntax::inside_brackets(file_, at)].kind == expr_kind::subtract)
+                    return ratio_raised(at);
                 if (f.kind != expr_kind::call)
                     return false;
                 const std::string_view name = text(call_name_range(f));
