@@ -392,3 +392,15 @@ TEST_CASE("the sea-level atmosphere typed into a product at a site with a barome
     const auto normal = plumb::test::check_after(decl, "V_n = V*p/(101.325 {kPa})*273.15/T_a");
     CHECK(plumb::test::problems_in(normal) == 0);
 }
+
+// A pressure "above the barometer" in the barometer's unit is no barometer: the advice names
+// the site's barometer itself, 'p_b', whichever is declared first.
+TEST_CASE("the advice names the site's barometer, not a pressure above it") {
+    const std::string decl = "p_dis : kPa \"blower discharge pressure above the barometer\"\n"
+                             "p_b : kPa \"site barometric pressure, 99.2 kPa\"\n"
+                             "vac_kPa : kPa \"inlet vacuum\"\np_1 : kPa \"inlet, absolute\"\n";
+    const auto r = plumb::test::check_after(decl, "p_1 = 101.325 - vac_kPa");
+    const auto& d = plumb::test::first_under(r, plumb::rules::offset_scale);
+    CHECK(plumb::test::says(d, "declares the site's barometer 'p_b'"));
+    CHECK(plumb::test::says(d, "write p_b in place of 101.325"));
+}

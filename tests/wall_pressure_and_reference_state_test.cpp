@@ -901,3 +901,14 @@ TEST_CASE("a stress converted by a number beside a gauge reading") {
     const std::string decl = "σ_v : kPa \"overburden at the packer\"\np_gr : barg\n";
     passes(decl, {"p_gr <= σ_v/100"});
 }
+
+// A compressor's adiabatic work, k/(k − 1)·p_1·V̇·((p_2/p_1)^((k−1)/k) − 1) (GPSA, compressors,
+// from memory), takes the absolute suction pressure; a gauge reading there is the zero slip, as
+// in the isothermal p·V̇·ln(p_2/p_1). A pump's p_g·Q from a vented tank stays a hydraulic power.
+TEST_CASE("a gauge reading in a gas's adiabatic compression") {
+    const std::string decl = "k, r_c, η_c : 1\np_g : kPag \"suction pressure\"\n"
+                             "p_a : kPa \"suction pressure, absolute\"\nV_s : m^3/s\nP_kW : kW\n";
+    fails_with(decl, {"P_kW = k/(k - 1)*p_g*V_s*(r_c^((k - 1)/k) - 1)/η_c"},
+               plumb::rules::offset_scale);
+    passes(decl, {"P_kW = k/(k - 1)*p_a*V_s*(r_c^((k - 1)/k) - 1)/η_c", "P_kW = p_g*V_s/η_c"});
+}

@@ -259,6 +259,10 @@ std::optional<std::string> checker::site_atmosphere_advice(std::string_view read
 // "p_bk : kPa "site barometric pressure"" beside "p_bar : inHg ...": the barometer the
 // advice names is the one declared in the sum's unit, where the file declares one.
 std::optional<std::string_view> checker::barometer_in_unit(double unit) const {
+    // The site's barometer itself, where it was found and is in that unit.
+    if (!site_barometer_.name.empty() && std::isfinite(unit) && unit > 0.0 &&
+        std::abs(site_barometer_.unit / unit - 1.0) < 1e-9 && !file_.barometer)
+        return site_barometer_.name;
     for (const syntax::declaration& decl : file_.declarations) {
         if (!decl.kind.dim || decl.name_count != 1 ||
             std::abs(decl.kind.si_factor / unit - 1.0) > 1e-9 ||
@@ -286,6 +290,7 @@ std::optional<std::string_view> checker::barometer_in_unit(double unit) const {
             description.find("standard") == std::string_view::npos &&
             description.find("gauge") == std::string_view::npos &&
             description.find("below") == std::string_view::npos &&
+            description.find("above") == std::string_view::npos &&
             description.find("vacuum") == std::string_view::npos)
             return name;
     }
