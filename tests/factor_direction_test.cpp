@@ -94,6 +94,8 @@ TEST_CASE("messages name the slip a formula holds") {
         plumb::test::check_after("C_w : %\nS_s, S_m : 1\n", "S_m = 1/(C_w/S_s + 1 - C_w)");
     CHECK(plumb::test::says(plumb::test::first_under(share, plumb::rules::unit_scale),
                             "divide 'C_w/S_s' by 100"));
+    CHECK(plumb::test::says(plumb::test::first_under(share, plumb::rules::unit_scale),
+                            "divide it by 100 in each term it stands in"));
     const auto kelvins =
         plumb::test::check_after("t_C : °C\nt_F : °F\n", "t_C = (t_F - 32)/1.8 + 273.15");
     const auto& k = plumb::test::first_under(kelvins, plumb::rules::offset_scale);

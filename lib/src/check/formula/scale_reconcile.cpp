@@ -270,10 +270,13 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         std::swap(r.odd, r.reference);
     // "1/(C_w/S_s + 1 - C_w)" with C_w in %: beside unity the shares in % are the terms off,
     // however many of them there are; the 1 is the whole, not a percent.
+    bool unity_beside_percent = false;
     if (what.what.starts_with("terms") && ops[index[r.odd]].type.numeric &&
         ops[index[r.odd]].type.value && *ops[index[r.odd]].type.value == rational(1) &&
-        holds_percentage(ops[index[r.reference]].node))
+        holds_percentage(ops[index[r.reference]].node)) {
         std::swap(r.odd, r.reference);
+        unity_beside_percent = parts.size() > 2;
+    }
     // "D_drum/d_r >= 18" with the drum in m and the rope in mm: the bare number is the
     // code's limit, and the ratio beside it is what to convert.
     if (what.what == "sides of this limit" && parts.size() == 2 && ops[index[r.odd]].type.numeric &&
@@ -636,6 +639,11 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
              {}});
         return false;
     }
+    // "1/(C_w/S_s + 1 - C_w)": the share stands in more than one term; each takes the 100.
+    if (unity_beside_percent)
+        d.notes.push_back({"beside the 1, every share in % in this sum is off by 100: divide it "
+                           "by 100 in each term it stands in",
+                           {}});
     if (!state_note.empty())
         d.notes.push_back({std::move(state_note), {}});
     // "RH <= 0.6" with RH in %: a fraction's bound beside a percentage, or a bound of 0.6 %.
