@@ -1334,3 +1334,14 @@ TEST_CASE("the gas column's constant inside exp is read as g·M_air/R") {
     fails_with(column, {"p_2 = p_1*exp(0.01875*γ_g*D_m/(z*T_K))", "p_2 = p_1*exp(0.01875*γ_g*D/z)"},
                plumb::rules::dimensioned_argument);
 }
+
+// The pump trade's P = Q·H/367 takes the flow in m³/h (kW, m; 367 = 3600/(ρ_w·g_n) in those
+// units, common practice); in L/s the number is about 101.9, in L/min about 6117. The message
+// names the flow's unit, not a specific weight the 367 already holds.
+TEST_CASE("a pump's 367 beside a flow in L/s names the m³/h it takes") {
+    const std::string decl = "P_p : kW\nQ_Ls : L/s\nH_p : m\nη : 1\n";
+    const auto r = plumb::test::check_after(decl, "P_p = Q_Ls*H_p/(367*η)");
+    REQUIRE(count_of(r, plumb::rules::side_mismatch) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::side_mismatch),
+                            "'367' is one over the specific weight of water for 'Q_Ls' in m³/h"));
+}

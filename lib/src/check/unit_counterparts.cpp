@@ -61,11 +61,17 @@ const auto rows = std::to_array<counterpart_row>({
     // Beside psi, the psf of a density in lb/ft³ times a height in ft (62.4·h): 144 apart.
     {pressure, {"psi", psi}, {{{"kPa", 1e3}, {"bar", 1e5}, {"lbf/ft\u00B2", psf}}}},
     {pressure, {"lbf/ft\u00B2", psf}, {{{"psi", psi}, {"kPa", 1e3}}}},
-    {flow, {"m\u00B3/h", 1.0 / 3600.0}, {{{"gpm", us_gallon / 60.0}, {"cfm", cubic_foot / 60.0}}}},
-    {flow, {"L/s", 1e-3}, {{{"gpm", us_gallon / 60.0}, {"cfm", cubic_foot / 60.0}}}},
+    // And the metric flows beside each other: the pump trade's 367 takes m³/h (P = Q·H/367 in
+    // kW from m³/h and m, common practice), which a flow in L/s or L/min is not.
+    {flow,
+     {"m\u00B3/h", 1.0 / 3600.0},
+     {{{"gpm", us_gallon / 60.0}, {"cfm", cubic_foot / 60.0}, {"L/s", 1e-3}}}},
+    {flow,
+     {"L/s", 1e-3},
+     {{{"gpm", us_gallon / 60.0}, {"cfm", cubic_foot / 60.0}, {"m\u00B3/h", 1.0 / 3600.0}}}},
     // The fire and water trades' litre a minute beside the US gallon a minute (EN 12845 beside
     // NFPA 13).
-    {flow, {"L/min", 1e-3 / 60.0}, {{{"gpm", us_gallon / 60.0}, {}}}},
+    {flow, {"L/min", 1e-3 / 60.0}, {{{"gpm", us_gallon / 60.0}, {"m\u00B3/h", 1.0 / 3600.0}, {}}}},
     {flow, {"gpm", us_gallon / 60.0}, {{{"m\u00B3/h", 1.0 / 3600.0}, {"L/s", 1e-3}}}},
     {flow, {"cfm", cubic_foot / 60.0}, {{{"m\u00B3/h", 1.0 / 3600.0}, {"L/s", 1e-3}}}},
     {velocity, {"m/s", 1.0}, {{{"fpm", foot / 60.0}, {"ft/s", foot}}}},
