@@ -155,7 +155,7 @@ void checker::report_atmosphere_not_the_site(std::uint32_t number, std::string_v
     diagnostic& d =
         report(rules::offset_scale,
                fmt::format("{} is {}, but this file declares the site's barometer '{}' ({} {}, "
-                           "as the standard atmosphere has about {} m {}): {} comes out {} {} {}",
+                           "the standard atmosphere's about {} m {}): {} comes out {} {} {}",
                            display_text(file_.nodes[number].range), what,
                            barometer_in_unit(unit).value_or(site.name), in_shown(site.pascals, 4),
                            shown, static_cast<long>(std::round(std::abs(height) / 10.0) * 10),
