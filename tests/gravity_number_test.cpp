@@ -1345,3 +1345,14 @@ TEST_CASE("a pump's 367 beside a flow in L/s names the m³/h it takes") {
     CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::side_mismatch),
                             "'367' is one over the specific weight of water for 'Q_Ls' in m³/h"));
 }
+
+// Q = C_d·b·a·√(2·g·H) with the opening in mm over 1000 (common practice): the 9.81 is g, the
+// 2 the formula's own, never "twice g" beside a 9.81 taken for a conversion.
+TEST_CASE("a typed g is read as g, not as a conversion beside a twice-g 2") {
+    const auto r = plumb::test::check_after("Q : m^3/s\nC_d : 1\nb : m\na_mm : mm\nH : m\n",
+                                            "Q = C_d*b*a_mm/1000*sqrt(2*9.81*H)");
+    CHECK(problems_in(r) == 0);
+    REQUIRE(count_of(r, plumb::rules::gravity_number) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::gravity_number),
+                            "'9.81' is read as standard gravity"));
+}

@@ -531,7 +531,7 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
         !std::isfinite(reference_scale))
         return std::nullopt;
     std::optional<gravity_reading> best;
-    std::tuple<bool, bool, bool, bool, double, bool> best_rank{};
+    std::tuple<bool, bool, bool, bool, bool, double, bool> best_rank{};
     for (std::size_t k = 0, tries = flipped_too ? 2 : 1; k < literals.size() * tries; ++k) {
         // The second pass reads each number as if written the other way round (Q*H*3960).
         const bool flipped = k >= literals.size();
@@ -590,10 +590,16 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // The conversions' own rounding (6895 for 6894.757 Pa per psi) moves the
                     // quantity in the units around it by as much, relatively.
                     double conversions_rounding = 0.0;
+                    // A typed g taken for a conversion ("2 is twice g beside 9.81 ×
+                    // 0.101937"): a reading that needs it so comes after one that reads it.
+                    bool gravity_as_conversion = false;
                     for (std::size_t j = 0, bit = 0; j < literals.size(); ++j) {
                         if (j == at)
                             continue;
                         if ((mask >> bit++) & 1U) {
+                            gravity_as_conversion =
+                                gravity_as_conversion ||
+                                std::abs(literals[j].value / standard_gravity - 1.0) < 2e-3;
                             conversions *= std::pow(literals[j].value, literals[j].exponent);
                             powers_of_ten_only = powers_of_ten_only && literals[j].power_of_ten;
                             if (!literals[j].power_of_ten && literals[j].value > 0)
@@ -668,7 +674,8 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                         std::make_tuple(flipped, shifted,
                                         looks_like_conversion(number, true) ||
                                             is_clock_ratio_times_power_of_ten(number.value),
-                                        mask != 0, distance / nearest, reciprocal);
+                                        gravity_as_conversion, mask != 0, distance / nearest,
+                                        reciprocal);
                     if (best && rank >= best_rank)
                         continue;
                     best_rank = rank;
