@@ -1467,3 +1467,19 @@ TEST_CASE("a conversion of its own where the units need another factor too") {
     CHECK(plumb::test::says(first_under(dose, plumb::rules::unit_scale),
                             "3782.96 times as much as 'W_lb' if 8.34 was meant as the conversion"));
 }
+
+// A circle's area is π·d²/4; the trade's 0.4085 ft/s per gpm/in² and 576 in² per ft² fold the
+// 4/π in (common practice; NIST SP 811 (2008), B.8 for the units). The bare conversions 0.3208
+// and 144 over or beside a diameter squared leave it out, 1.27324 off. A square duct's side
+// squared, a Reynolds number's ρ·N·D²/μ and a drain's c_v·t/d² hold no area.
+TEST_CASE("a diameter squared where a circle's area belongs") {
+    const std::string decl =
+        "v_fps : ft/s\nQ_gpm : gpm\nd_in : in \"pipe bore\"\nA_ft2 : ft^2\n"
+        "D_in : in \"duct diameter\"\nb_in : in \"square duct side\"\nRe : 1\nρ : kg/m^3\n"
+        "N : 1/min\nD_i : mm \"impeller diameter\"\nμ : mPa*s\n";
+    plumb::test::each_fails_with(decl, {"v_fps = 0.3208*Q_gpm/d_in^2", "A_ft2 = D_in^2/144"},
+                                 plumb::rules::unit_scale);
+    passes(decl, {"A_ft2 = b_in^2/144", "A_ft2 = pi*D_in^2/4/144", "Re = ρ*N*D_i^2/(60*μ)/1000"});
+    const auto folded = run(decl, "v_fps = 0.4085*Q_gpm/d_in^2");
+    CHECK(problems_in(folded) == 0);
+}

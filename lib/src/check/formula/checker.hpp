@@ -1168,7 +1168,15 @@ class checker {
     static bool names_a_time_unit(std::string_view unit);
     static bool time_ratio_number(const scale_literal& l);
     bool spare_speed_ratio(const scale_literal& l, std::uint32_t term) const;
-    bool spare_degree_ratio(const scale_literal& l, std::uint32_t term) const;
+    // Nearly every number is no 1.8 or 5/9: that is asked here, in line at every call.
+    [[gnu::always_inline]] bool spare_degree_ratio(const scale_literal& l,
+                                                   std::uint32_t term) const {
+        if (std::abs(l.exponent) != 1.0 ||
+            (l.value != 1.8 && std::abs(l.value * 1.8 - 1.0) > l.tolerance * 1.8 + 1e-9))
+            return false;
+        return degree_ratio_beside_temperature(term);
+    }
+    [[gnu::noinline]] bool degree_ratio_beside_temperature(std::uint32_t term) const;
     static bool is_power_trade_constant(double written);
     std::optional<std::string> folded_conversion_note(const scaled_operand& odd,
                                                       double ratio) const;
@@ -1208,6 +1216,9 @@ class checker {
     bool report_unneeded(const operand& op, const scale_literal& l,
                          std::optional<double> folded_power = std::nullopt);
     void report_inverted_factor(const operand& op, const scale_literal& l);
+    [[gnu::noinline]] bool report_circle_left_out(std::span<const operand> ops,
+                                                  std::span<const std::size_t> index,
+                                                  std::span<const scaled_operand> parts);
     [[gnu::noinline]] bool report_angle_conversion(std::span<const operand> ops,
                                                    std::span<const std::size_t> index,
                                                    std::span<const scaled_operand> parts,

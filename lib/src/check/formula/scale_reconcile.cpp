@@ -220,6 +220,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
             return !report_unneeded_factor(ops, index, parts, dimensionless);
         if (parts.size() <= 16 && report_angle_conversion(ops, index, parts, false)) [[unlikely]]
             return false;
+        if (parts.size() <= 4 && report_circle_left_out(ops, index, parts)) [[unlikely]]
+            return false;
         return !report_extra_factor(ops, index, parts, dimensionless);
     }
     // A conversion factor written the wrong way round (asked of the short meeting points
@@ -1178,10 +1180,7 @@ bool checker::spare_speed_ratio(const scale_literal& l, std::uint32_t term) cons
 // already (NIST SP 811 (2008), B.8), and a 1.8 or a 5/9 beside it, where the units agree
 // without it, converts the degree twice. Only beside a symbol or cell that carries a
 // temperature: elsewhere 1.8 is as likely a coefficient.
-bool checker::spare_degree_ratio(const scale_literal& l, std::uint32_t term) const {
-    if (std::abs(l.exponent) != 1.0 ||
-        (l.value != 1.8 && std::abs(l.value * 1.8 - 1.0) > l.tolerance * 1.8 + 1e-9))
-        return false;
+bool checker::degree_ratio_beside_temperature(std::uint32_t term) const {
     const auto carries_temperature = [](const std::optional<dimension>& d) {
         return d && !d->exponent(base_dimension::temperature).is_zero();
     };
@@ -1193,6 +1192,85 @@ bool checker::spare_degree_ratio(const scale_literal& l, std::uint32_t term) con
         }
         return n.kind == expr_kind::reference && carries_temperature(file_.references[n.lhs].dim);
     });
+}
+
+// "v_fps = 0.3208*Q_gpm/d_in^2", "A_ft2 = D_in^2/144": a diameter squared where an area belongs,
+// with a number that is only the units' conversion (0.3208 ft/s per gpm/in², 144 in² per ft²),
+// leaves the circle's π/4 out: the area of a circle is π·d²/4, and the trade's 0.4085 and 576
+// fold it in (common practice). Asked only where the units reconciled through the number and
+// no π stands in the term; a warning, as a square's side squared is an area too.
+bool checker::report_circle_left_out(std::span<const operand> ops,
+                                     std::span<const std::size_t> index,
+                                     std::span<const scaled_operand> parts) {
+    for (std::size_t i = 0; i < parts.size(); ++i) {
+        if (parts[i].literals.empty() || parts[i].literals.size() > 2)
+            continue;
+        std::uint32_t diameter = syntax::no_index;
+        for_each_factor(ops[index[i]].node, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind != expr_kind::power || file_.nodes[n.rhs].kind != expr_kind::number ||
+                text(file_.nodes[n.rhs].range) != "2")
+                return false;
+            const syntax::expr_node& base = file_.nodes[syntax::inside_brackets(file_, n.lhs)];
+            if (base.kind != expr_kind::symbol)
+                return false;
+            const std::string_view name = text(base.range);
+            const symbol_entry* e = symbols_.find(name);
+            if (e == nullptr || !e->compact_dim || !(*e->compact_dim == length_dimension()))
+                return false;
+            const bool named = (name.starts_with("d") || name.starts_with("D")) &&
+                               (name.size() == 1 || name[1] == '_' || name == "ID" || name == "OD");
+            const bool described = e->description.find("diameter") != std::string_view::npos ||
+                                   e->description.find("bore") != std::string_view::npos;
+            if ((named || described) && e->description.find("side") == std::string_view::npos) {
+                diameter = at;
+                return true;
+            }
+            return false;
+        });
+        if (diameter == syntax::no_index || holds_pi(ops[index[i]].node))
+            continue;
+        // The diameter squared is the term's area: alone with its numbers (an area), or under
+        // a flow (a velocity); beside any other quantity (ρ·N·D²/μ, c_v·t/d², a rope's K·d²·R)
+        // the square is no area.
+        int flows = 0;
+        const bool other = for_each_factor(ops[index[i]].node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (at == diameter || n.kind == expr_kind::number)
+                return false;
+            if (n.kind != expr_kind::symbol || sign < 0)
+                return true;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e == nullptr || !e->compact_dim || !(*e->compact_dim == volume_flow_dim))
+                return true;
+            ++flows;
+            return false;
+        });
+        if (other || flows > 1)
+            continue;
+        // Every number the term holds is a conversion of the units' (none a coefficient
+        // the circle could hide in).
+        const bool only_conversions = std::all_of(
+            parts[i].literals.begin(), parts[i].literals.end(),
+            [&](const scale_literal& l) { return file_.nodes[l.node].kind == expr_kind::number; });
+        if (!only_conversions)
+            continue;
+        diagnostic& d = report(
+            rules::unit_scale,
+            fmt::format("{} stands where a circle's area belongs, and the numbers of {} only "
+                        "convert its units: the area of a circle is \u03C0\u00B7d\u00B2/4, so "
+                        "the result is off by 4/\u03C0 (1.27324)",
+                        quote(diameter), quote(ops[index[i]].node)),
+            file_.nodes[diameter].range);
+        d.level = severity::warning;
+        add_term(d, ops[index[i]], true);
+        d.notes.push_back({"write pi*d^2/4 for the area, or fold 4/\u03C0 into the number (the "
+                           "trade's 0.4085 for 0.3208, 576 for 144); a square's side squared is "
+                           "an area as it is",
+                           {}});
+        return true;
+    }
+    return false;
 }
 
 } // namespace plumb::formula_check
