@@ -670,12 +670,11 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                     // itself (62.4 in p*144/62.4, not 144 as one over it).
                     // A number that is itself a unit conversion (1000, 86400, 3.281) is read
                     // last: in Δp_kPa*1000/(ρ*9.81) the 9.81 is g and the 1000 converts kPa.
-                    const auto rank =
-                        std::make_tuple(flipped, shifted,
-                                        looks_like_conversion(number, true) ||
-                                            is_clock_ratio_times_power_of_ten(number.value),
-                                        gravity_as_conversion, mask != 0, distance / nearest,
-                                        reciprocal);
+                    const auto rank = std::make_tuple(
+                        flipped, shifted,
+                        looks_like_conversion(number, true) ||
+                            is_clock_ratio_times_power_of_ten(number.value),
+                        gravity_as_conversion, mask != 0, distance / nearest, reciprocal);
                     if (best && rank >= best_rank)
                         continue;
                     best_rank = rank;
