@@ -2,6 +2,7 @@
 // that the input now finishes with the right finding, through the library and the binary.
 #include "process_support.hpp"
 
+#include "model/ascii_case.hpp"
 #include "model/user_file.hpp"
 #include "model/utf8.hpp"
 #include "plumb/check.hpp"
@@ -395,6 +396,22 @@ TEST_CASE("hardening: the UTF-8 check finds the same byte wherever a form stands
         text.back() = '\xC3';
         CHECK(plumb::first_invalid_utf8(text) == std::optional<std::size_t>(length - 1));
     }
+}
+
+TEST_CASE("hardening: letter case folds A-Z only and leaves every UTF-8 byte as it is") {
+    // Labels are matched by words in lower case ("boiler", "vacuum", "tower"); a byte of °, µ or
+    // Δ must come through unchanged, as it would not under a Latin-1 locale's tables.
+    CHECK(plumb::lower_ascii("\u0394P Boiler Feed \u00B0C (VACUUM)") ==
+          "\u0394p boiler feed \u00B0c (vacuum)");
+    CHECK(plumb::upper_ascii("sum(\u00B5m) if") == "SUM(\u00B5M) IF");
+    for (int byte = 0x80; byte <= 0xFF; ++byte) {
+        const std::string one(1, static_cast<char>(byte));
+        CAPTURE(byte);
+        CHECK(plumb::lower_ascii(one) == one);
+        CHECK(plumb::upper_ascii(one) == one);
+    }
+    CHECK(plumb::lower_ascii("@[`{") == "@[`{");
+    CHECK(plumb::upper_ascii("@[`{") == "@[`{");
 }
 
 TEST_CASE("hardening: the line index finds every line break wherever it stands") {

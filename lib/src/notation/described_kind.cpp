@@ -1,5 +1,7 @@
 #include "notation/described_kind.hpp"
 
+#include "model/ascii_case.hpp"
+
 #include <algorithm>
 #include <array>
 #include <cctype>
@@ -48,9 +50,7 @@ bool has_words(const std::string& text, std::string_view phrase) {
 } // namespace
 
 std::optional<dimension> described_kind(std::string_view description) {
-    std::string text(description);
-    std::transform(text.begin(), text.end(), text.begin(),
-                   [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+    std::string text = lower_ascii(description);
     std::optional<dimension> found;
     for (const kind_word& k : kind_words) {
         if (!has_words(text, k.words))
@@ -69,9 +69,7 @@ std::optional<dimension> described_kind(std::string_view description) {
 }
 
 bool describes_a_temperature(std::string_view description) {
-    std::string text(description);
-    std::transform(text.begin(), text.end(), text.begin(),
-                   [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+    const std::string text = lower_ascii(description);
     for (const std::string_view words : {"temperature", "temp", "specific heat", "heat capacity"})
         if (has_words(text, words))
             return true;

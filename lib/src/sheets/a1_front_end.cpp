@@ -3,6 +3,7 @@
 // commits (must<>) or fails before an action ran, so the operand stack stays consistent.
 #include "sheets/a1_front_end.hpp"
 
+#include "model/ascii_case.hpp"
 #include "model/node_stack.hpp"
 
 #include "plumb/a1_formula.hpp"
@@ -85,13 +86,6 @@ template <typename Rule> struct control : pg::normal<Rule> {
     }
 };
 
-std::string upper(std::string_view s) {
-    std::string out(s);
-    std::transform(out.begin(), out.end(), out.begin(),
-                   [](unsigned char c) { return static_cast<char>(std::toupper(c)); });
-    return out;
-}
-
 std::optional<cell_area> parse_area(std::string_view t) {
     const std::size_t colon = t.find(':');
     if (colon == std::string_view::npos) {
@@ -149,10 +143,10 @@ template <> struct action<g::reference> {
 };
 template <> struct action<g::defined_name> {
     template <typename In> static void apply(const In& in, lowering& s) {
-        const std::string name = upper(in.string_view());
+        const std::string name = upper_ascii(in.string_view());
         const defined_name* found = nullptr;
         for (const auto& d : s.wb.names)
-            if (upper(d.name) == name && (found == nullptr || d.sheet == s.sheet))
+            if (upper_ascii(d.name) == name && (found == nullptr || d.sheet == s.sheet))
                 if (!d.sheet || *d.sheet == s.sheet)
                     found = &d;
         if (found != nullptr)
@@ -206,7 +200,7 @@ template <> struct action<g::call_arguments> {
         s.stack.operands.resize(s.stack.operands.size() - count);
         const std::uint32_t call_index = s.stack.operands.back();
         auto& out = s.out();
-        const std::string name = upper(
+        const std::string name = upper_ascii(
             std::string_view(s.text_begin + out.nodes[call_index].range.begin,
                              out.nodes[call_index].range.end - out.nodes[call_index].range.begin));
         out.nodes[call_index].range.end = s.range(in).end;
@@ -351,10 +345,10 @@ resolve_reference(const workbook& wb, std::size_t home, std::string_view text) {
         } else {
             unquoted = std::string(name);
         }
-        const std::string wanted = upper(unquoted);
+        const std::string wanted = upper_ascii(unquoted);
         bool found = false;
         for (std::size_t i = 0; i < wb.sheets.size() && !found; ++i)
-            if (upper(wb.sheets[i].name) == wanted) {
+            if (upper_ascii(wb.sheets[i].name) == wanted) {
                 sheet = i;
                 found = true;
             }

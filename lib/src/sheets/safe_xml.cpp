@@ -2,6 +2,7 @@
 // workbook part, so it is refused outright rather than skipped.
 #include "sheets/safe_xml.hpp"
 
+#include "model/ascii_case.hpp"
 #include "model/utf8.hpp"
 
 #include <algorithm>
@@ -17,9 +18,7 @@ bool has_doctype(std::string_view text) {
     for (std::size_t at = text.find("<!"); at != std::string_view::npos;
          at = text.find("<!", at + 2)) {
         const std::string_view rest = text.substr(at + 2, 7);
-        std::string upper(rest);
-        std::transform(upper.begin(), upper.end(), upper.begin(),
-                       [](unsigned char c) { return static_cast<char>(std::toupper(c)); });
+        const std::string upper = upper_ascii(rest);
         if (upper == "DOCTYPE")
             return true;
     }

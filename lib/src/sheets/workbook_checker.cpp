@@ -3,6 +3,7 @@
 // beside a formula against what it computes, ranges of one dimension, inputs without units.
 #include "sheets/workbook_checker.hpp"
 
+#include "model/ascii_case.hpp"
 #include "model/difference_name.hpp"
 #include "model/subtree_search.hpp"
 
@@ -385,9 +386,7 @@ class workbook_checker {
         // 2. A defined name a dictionary declares.
         if (!units_.names.empty())
             for (const auto& n : book_.names) {
-                std::string upper_name = n.name;
-                std::transform(upper_name.begin(), upper_name.end(), upper_name.begin(),
-                               [](unsigned char c) { return static_cast<char>(std::toupper(c)); });
+                const std::string upper_name = upper_ascii(n.name);
                 const auto it = units_.names.find(upper_name);
                 if (it == units_.names.end())
                     continue;
@@ -435,9 +434,7 @@ class workbook_checker {
                                     written_unit& u) const {
         if (text != "BHP" && text != "bhp")
             return;
-        std::string label = label_of(s, a).description;
-        std::transform(label.begin(), label.end(), label.begin(),
-                       [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+        const std::string label = lower_ascii(label_of(s, a).description);
         if (label.find("boiler") == std::string::npos)
             return;
         if (auto boiler = read_unit_text("BoHP", units_.measures)) {
@@ -598,9 +595,7 @@ class workbook_checker {
 
     // "Operating vacuum | 19 | inHg": a reading counted down from the atmosphere.
     bool labelled_a_vacuum(std::size_t s, cell_address a) const {
-        std::string words = label_of(s, a).description;
-        std::transform(words.begin(), words.end(), words.begin(),
-                       [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+        const std::string words = lower_ascii(label_of(s, a).description);
         return words.find("vacuum") != std::string::npos;
     }
 
@@ -1765,9 +1760,7 @@ class workbook_checker {
                 return std::isalpha(static_cast<unsigned char>(c));
             }))
             return false;
-        std::string lower(t);
-        std::transform(lower.begin(), lower.end(), lower.begin(),
-                       [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+        const std::string lower = lower_ascii(t);
         for (const std::string_view remark :
              {"ok",   "yes", "no",   "na",  "tbc", "tbd", "check", "see",  "note", "total", "input",
               "calc", "ref", "each", "sum", "max", "min", "avg",   "mean", "pass", "fail"})
@@ -1812,9 +1805,7 @@ class workbook_checker {
         const auto unread = unread_.find(key);
         if (unread == unread_.end())
             return nullptr;
-        std::string word = unread->second.text;
-        std::transform(word.begin(), word.end(), word.begin(),
-                       [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+        const std::string word = lower_ascii(unread->second.text);
         if (word != "tons")
             return nullptr;
         std::vector<diagnostic> scratch;
@@ -1835,9 +1826,7 @@ class workbook_checker {
         // with the compressor's work (CTI, from memory): read so where the row or the formula
         // says it ("Heat rejected, tower tons", =C15/15000).
         const auto mentions_tower = [](std::string_view text) {
-            std::string lower(text);
-            std::transform(lower.begin(), lower.end(), lower.begin(),
-                           [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+            const std::string lower = lower_ascii(text);
             return lower.find("tower") != std::string::npos;
         };
         const row_label label = label_of(f.sheet, f.source->at);
@@ -1934,9 +1923,8 @@ class workbook_checker {
         if (formula.front() == '"')
             return formula.size() >= 2 && formula.back() == '"' &&
                    formula.find('"', 1) == formula.size() - 1;
-        std::string name(formula.substr(0, open == std::string_view::npos ? 0 : open));
-        for (char& c : name)
-            c = static_cast<char>(std::toupper(static_cast<unsigned char>(c)));
+        const std::string name =
+            upper_ascii(formula.substr(0, open == std::string_view::npos ? 0 : open));
         if (name != "IF" || arguments.size() != 3 || formula.back() != ')')
             return false;
         return yields_text(arguments[1]) && yields_text(arguments[2]);

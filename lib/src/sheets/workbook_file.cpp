@@ -3,6 +3,7 @@
 #include "sheets/workbook_file.hpp"
 
 #include "check/acceptance.hpp"
+#include "model/ascii_case.hpp"
 #include "model/user_file.hpp"
 #include "model/utf8.hpp"
 #include "notation/parser.hpp"
@@ -192,9 +193,7 @@ void take_declarations(const fs::path& path, const std::string& origin, const wo
         if (!decl.kind.dim || decl.kind.to_infer)
             continue;
         declared_unit u = unit_of(decl.kind, std::string(src.text(decl.spec)), origin);
-        std::string name(src.text(n.name));
-        std::transform(name.begin(), name.end(), name.begin(),
-                       [](unsigned char c) { return static_cast<char>(std::toupper(c)); });
+        const std::string name = upper_ascii(src.text(n.name));
         units.names.emplace(std::move(name), std::move(u));
     }
     take_cells(tree, src, book, origin, units, report);

@@ -2,6 +2,8 @@
 // formula, read where a term's dimension is short by exactly that quantity.
 #include "check/formula/checker.hpp"
 
+#include "model/ascii_case.hpp"
+
 namespace plumb::formula_check {
 
 // "p_abs = 9.81*h + 101.325", "p_a = 0.433*h_ft + 14.7", "ρ*g*h/1000 + 101.325": a
@@ -440,9 +442,7 @@ void checker::report_standard_air_number_on_actual_flow(const operand& term,
         const symbol_entry* e = symbols_.find(text(n.range));
         if (e == nullptr || !e->compact_dim || !(*e->compact_dim == volume_flow_dim))
             return false;
-        std::string lower(e->description);
-        for (char& c : lower)
-            c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+        const std::string lower = lower_ascii(e->description);
         if (e->unit_text.find("acfm") != std::string_view::npos ||
             lower.find("actual") != std::string::npos ||
             lower.find("line conditions") != std::string::npos)

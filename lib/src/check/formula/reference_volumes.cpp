@@ -2,6 +2,8 @@
 // the reference temperatures that reconcile them.
 #include "check/formula/checker.hpp"
 
+#include "model/ascii_case.hpp"
+
 namespace plumb::formula_check {
 
 // The unit a symbol is declared in, or a workbook cell's written unit.
@@ -276,9 +278,7 @@ bool checker::describes_reference_state(std::uint32_t node) const {
 // A volume described as free air ("l/min FAD", "free-air consumption"): the compressor
 // trade's air at the intake, which it converts to standard volumes by the unit alone.
 bool checker::describes_free_air(const symbol_entry& e) {
-    std::string lower(e.description);
-    for (char& c : lower)
-        c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+    const std::string lower = lower_ascii(e.description);
     return e.description.find("FAD") != std::string_view::npos ||
            lower.find("free air") != std::string::npos ||
            lower.find("free-air") != std::string::npos;
