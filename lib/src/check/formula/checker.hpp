@@ -1316,6 +1316,7 @@ class checker {
     bool pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
                                   bool* geometric = nullptr) const;
     bool holds_gauge(std::uint32_t node) const;
+    bool gauge_over_modulus(std::uint32_t product) const;
 
     // One term of a product expanded into a sum: a number times declared symbols.
     struct expanded_term {

@@ -1181,7 +1181,8 @@ typed_term checker::eval_factors(std::uint32_t index) {
             holds_gauge(file_.nodes[index].lhs) && holds_gauge(file_.nodes[index].rhs);
         if (result.known && (result.dim == length_dimension() || result.dim == force_dimension() ||
                              wall_stress || ring_tension || jet || bearing_area || head_without_g ||
-                             column_gradient || hydraulic_power || percent_of_gauge)) {
+                             column_gradient || hydraulic_power || percent_of_gauge ||
+                             gauge_over_modulus(index))) {
             result.offset = nullptr;
             result.point = false;
             result.origin = 0.0;

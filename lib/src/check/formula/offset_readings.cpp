@@ -510,6 +510,46 @@ bool checker::pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
     return with_gauge ? stresses % 2 == 0 : (other_pressures == 1 && shape);
 }
 
+// P·ID/(E·WT), p_g*V/K_w: a gauge reading over an elastic modulus, scaled by lengths, areas,
+// volumes and pure numbers, is the strain (or the volume change) the net pressure across a
+// wall or in a liquid causes, which a gauge reads: a prover's CPS (API MPMS ch. 12.2, from
+// memory) and a hydrotest's added volume (common practice). The modulus is a symbol named E
+// or described as one.
+bool checker::gauge_over_modulus(std::uint32_t product) const {
+    int gauges = 0;
+    int moduli = 0;
+    const bool other = for_each_factor(product, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::number || n.kind == expr_kind::pi)
+            return false;
+        if (n.kind != expr_kind::symbol)
+            return true;
+        const std::string_view name = text(n.range);
+        const symbol_entry* e = symbols_.find(name);
+        if (e == nullptr || !e->checked_type || !e->checked_type->known)
+            return true;
+        const typed_term& t = *e->checked_type;
+        if (t.dim == pressure_dimension()) {
+            if (t.offset != nullptr && t.offset->scale == unit_scale::gauge && sign > 0) {
+                ++gauges;
+                return false;
+            }
+            const bool modulus =
+                name == "E" || name.starts_with("E_") ||
+                e->description.find("modulus") != std::string_view::npos ||
+                e->description.find("Modulus") != std::string_view::npos ||
+                e->description.find("elastic") != std::string_view::npos;
+            if (!modulus || t.offset != nullptr || sign > 0)
+                return true;
+            ++moduli;
+            return false;
+        }
+        return !(t.dim.is_dimensionless() || t.dim == length_dimension() ||
+                 t.dim == area_dimension() || t.dim == volume_dim);
+    });
+    return !other && gauges == 1 && moduli == 1;
+}
+
 // Whether a subtree holds a gauge pressure (a symbol or a workbook cell declared on one).
 bool checker::holds_gauge(std::uint32_t node) const {
     return syntax::search_subtree(file_, node, [&](std::uint32_t, const syntax::expr_node& n) {
