@@ -121,6 +121,24 @@ TEST_CASE("mixed units: of two terms, the one mixing mm and in is named") {
     CHECK(findings(right, plumb::rules::sum_mismatch).empty());
 }
 
+// The torr is 101 325/760 Pa = 133.322 368 Pa and the conventional millimetre of mercury
+// 133.322 387 Pa (NIST SP 811 (2008), B.8): 1.4e-7 apart, one unit to any gauge. The % beside
+// a bare 1, and a millibar beside a hectopascal's tenth, are still far apart.
+TEST_CASE("mixed units: units a part in ten million apart are one, as torr and mmHg are") {
+    const std::string decl = "p_torr, p_1 : torr\np_mmHg : mmHg\nx : %\ny : 1\np_mb : mbar\n"
+                             "p_kPa : kPa\n";
+    const auto same = plumb::check_text(
+        "v.plumb", decl + "p_torr = p_mmHg\np_torr <= p_mmHg\np_1 = p_torr + p_mmHg\n");
+    CHECK(findings(same, plumb::rules::unit_scale).empty());
+    CHECK(findings(same, plumb::rules::sum_mismatch).empty());
+    CHECK(findings(same, plumb::rules::side_mismatch).empty());
+    const auto apart = plumb::check_text("v.plumb", decl + "y = x + 1\np_mb = p_kPa\n");
+    const auto scales = findings(apart, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 2);
+    CHECK(line_of(*scales[0]) == 7);
+    CHECK(line_of(*scales[1]) == 8);
+}
+
 TEST_CASE("mixed units: a pressure in kPa beside ρ g h in Pa is off by 1000") {
     // Put in as declared, ρ*g*h gives pascals while p_0 is in kilopascals: ρ*g*h counts 1000
     // times too much against it.

@@ -1152,6 +1152,7 @@ class checker {
     bool report_term_left_unconverted(std::span<const operand> ops,
                                       std::span<const std::size_t> index,
                                       std::span<const scaled_operand> parts);
+    static bool units_agree_within_a_millionth(std::span<const operand> ops, double& unit);
     [[gnu::noinline]] bool reconcile_scales(std::span<const operand> ops, meeting_point what,
                                             double& unit, bool with_numbers);
     [[gnu::noinline]] bool reconcile_in_full(std::span<const operand> ops, meeting_point what,

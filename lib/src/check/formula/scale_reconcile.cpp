@@ -90,11 +90,35 @@ bool checker::units_agree_with_plain_numbers(std::span<const operand> ops, doubl
     return true;
 }
 
+// p_torr = p_mmHg: units defined apart that agree to within a part in a million (the torr,
+// 101 325/760 Pa, and the mmHg, 133.322 387 Pa, 1.4e-7 apart; NIST SP 811 (2008), B.8) are one
+// unit to any reading a calc holds. The US survey foot, 2e-6 from the foot, is not.
+bool checker::units_agree_within_a_millionth(std::span<const operand> ops, double& unit) {
+    double first = 0.0;
+    for (const auto& op : ops) {
+        if (!op.type.known || op.type.zero || !std::isfinite(op.type.scale))
+            continue;
+        if (op.type.numeric && !op.type.dim.is_dimensionless())
+            continue; // a number in the others' unit
+        const double s = op.type.numeric ? 1.0 : op.type.scale;
+        if (first == 0.0)
+            first = s;
+        else if (std::abs(s / first - 1.0) > 1e-6)
+            return false;
+    }
+    if (first == 0.0)
+        return false;
+    unit = first;
+    return true;
+}
+
 // check_scales past its fast path, out of line so that the meeting points it settles do
 // not pay for this one's frame.
 bool checker::reconcile_scales(std::span<const operand> ops, meeting_point what, double& unit,
                                bool with_numbers) {
     if (with_numbers && units_agree_with_plain_numbers(ops, unit))
+        return true;
+    if (!with_numbers && units_agree_within_a_millionth(ops, unit))
         return true;
     return reconcile_in_full(ops, what, unit);
 }
