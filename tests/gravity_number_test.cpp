@@ -335,6 +335,18 @@ TEST_CASE("dry air's gas constant typed as a number") {
     CHECK(count_of(run(decl + "ρ = p_b/(0.287*t_a)\n"), plumb::rules::offset_scale) == 1);
 }
 
+// A hot gas's density at ambient pressure, ρ = 353/T from kelvins (smoke control, CIBSE Guide E,
+// from memory): 353 = p_0/R_a = 101325/287.05 kg·K/m³ (as above). A °C reading in its place is
+// still an error, and 353 beside a temperature that multiplies is no density.
+TEST_CASE("one atmosphere over air's gas constant, the 353 of a smoke layer's density") {
+    const std::string decl = "ρ_s : kg/m^3\nT_s : K\nt_s : °C\n";
+    passes_with_one_note(decl, {"ρ_s = 353/T_s", "ρ_s = 353/(t_s + 273.15)"},
+                         plumb::rules::trade_constant);
+    CHECK(count_of(run(decl + "ρ_s = 353/t_s\n"), plumb::rules::offset_scale) == 1);
+    CHECK(problems_in(run(decl + "ρ_s = 353*T_s\n")) == 1);
+    CHECK(problems_in(run(decl + "ρ_s = 35.3/T_s\n")) == 1);
+}
+
 // A gauge pressure over a specific weight is a head above the level where the pressure is
 // atmospheric, over an area the net force where the atmosphere acts on the other face, and the
 // pressure of a column, ρ g h, is what a gauge at its foot reads (common practice; e.g. Çengel

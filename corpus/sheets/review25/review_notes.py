@@ -25,8 +25,9 @@ EXTRA = {
     ],
     "datacentre-pue": [
         (TC + ": 1.08 as ρ·c_p of standard air", "Load!C26 trade-constant"),
-        ("a correct cell plumb still flags: ρ = p/(R·T) with 101325 Pa and 287 J/(kg·K) typed in "
-         "(coherent SI; common practice)", "Load!C33 result-unit"),
+        (TC + ": ρ = p/(R·T) with 101325 Pa and 287 J/(kg·K) typed in (coherent SI; common "
+         "practice), read together as one atmosphere over air's gas constant (once flagged "
+         "result-unit)", "Load!C33 trade-constant"),
         ("a correct cell plumb still flags: V = Q/(ρ·c_p·ΔT) with c_p = 1.006 kJ/(kg·K) typed in "
          "(coherent with kW; common practice)", "Load!C35 result-unit"),
         (TC, "Racks!F5 trade-constant"), (TC, "Racks!F6 trade-constant"),

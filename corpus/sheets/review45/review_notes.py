@@ -64,7 +64,9 @@ EXTRA = {
     "belt-dryer": [
         ("a note on a correct cell: 4.19 read as the specific heat of water in kJ/(kg·K), which "
          "it is (common practice)", "Dryer!C27 trade-constant"),
-        (RAIR, "Dryer!C39 result-unit"),
+        ("a note on a correct cell, once flagged result-unit: ρ = p/(R·T) with 101.325 kPa × "
+         "1000 and 287 J/(kg·K) typed in, read together as one atmosphere over air's gas "
+         "constant", "Dryer!C39 trade-constant"),
         (RAIR + "; the note beside it reads 287 as a reference temperature, which it is not",
          "Zones!D5 result-unit"),
         ("a note that misleads: '287' read as a standard reference temperature in the unit of "

@@ -46,8 +46,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 32>& quantities() {
-    static const std::array<carried_quantity, 32> table = [] {
+const std::array<carried_quantity, 33>& quantities() {
+    static const std::array<carried_quantity, 33> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -99,7 +99,7 @@ const std::array<carried_quantity, 32>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 32>{{
+        return std::array<carried_quantity, 33>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -364,6 +364,17 @@ const std::array<carried_quantity, 32>& quantities() {
              "declare it with its unit (k_gc : K/m = 0.03416) to say so",
              "write it in a cell that holds its unit (°R/ft) to say so", temperature / length,
              standard_gravity * 0.02896 / 8.314462618, standard_gravity * 0.02897 / 8.314462618},
+            // One atmosphere over dry air's gas constant, p_0/R_a = 101325/287.05 = 352.99
+            // kg·K/m³: the 353 of a hot gas's density ρ = 353/T from kelvins at ambient
+            // pressure (smoke control, CIBSE Guide E, from memory; 1.293·273.15 = 353.2, the
+            // normal state's); in US units 39.7 lb·°R/ft³.
+            {rules::trade_constant, "dry air's \u03C1\u00B7T at one atmosphere (p_0/R_a)",
+             "p_0/R_a", "R_a/p_0",
+             " (dry air at 101.325 kPa: 353.0 kg\u00B7K/m\u00B3; at altitude, or for another gas, "
+             "it is less)",
+             "write p_0/(R_a*T) with both declared to say so (R_a : J/(kg*K) = 287.05)",
+             "write the atmosphere and the gas constant in cells that hold their units to say so",
+             density * temperature, 352.9, 353.3},
         }};
     }();
     return table;
