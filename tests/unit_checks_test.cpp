@@ -90,6 +90,38 @@ TEST_CASE("offset scales: powers, functions, quotients and gauge pressure") {
     }
 }
 
+// A platinum thermometer's resistance, R = R_0·(1 + A·t + B·t²) with t in °C, A = 3.9083e-3
+// /°C and B = -5.775e-7 /°C² (Callendar-Van Dusen, IEC 60751, from memory), counts t from the
+// 0 °C at which R_0 is taken; so does a length L = L_0·(1 + α·t) with L_0 at 0 °C (common
+// practice). A reference at 20 °C needs (t - 20), and a °F reading is never counted from 0 °C.
+TEST_CASE("offset scales: a °C reading beside a reference taken at 0 °C is its rise") {
+    const std::string decl = "R_t : ohm\nR_0 : ohm \"Pt500 resistance at 0 \u00B0C\"\n"
+                             "R_20 : ohm \"winding resistance at 20 \u00B0C\"\n"
+                             "R_10 : ohm \"resistance at 10 \u00B0C\"\nA, α : 1/K\nB : 1/K^2\n"
+                             "t : \u00B0C\nt_F : \u00B0F\nL_0 : m \"length at 0\u00B0C\"\nL : m\n";
+    const auto right =
+        plumb::check_text("r.plumb", decl + "R_t = R_0*(1 + A*t + B*t^2)\n"   // line 11
+                                            "L = (1 + α*t)*L_0\n"             // 12
+                                            "R_t = R_20*(1 + α*(t - 20))\n"); // 13
+    CHECK(right.count(plumb::severity::error) == 0);
+    CHECK(findings(right, plumb::rules::unit_scale).empty());
+    const auto notes = findings(right, plumb::rules::trade_constant);
+    REQUIRE(notes.size() == 2); // once in each formula that reads it so
+    CHECK(line_of(*notes[0]) == 11);
+    CHECK(mentions(*notes[0], "rise above 0 \u00B0C"));
+    CHECK(mentions(*notes[0], "'R_0'"));
+    CHECK(line_of(*notes[1]) == 12);
+    const auto wrong = plumb::check_text("w.plumb", decl + "R_t = R_20*(1 + α*t)\n"  // line 11
+                                                           "R_t = R_10*(1 + α*t)\n"  // 12
+                                                           "R_t = R_0*(1 + A*t_F)\n" // 13
+                                                           "R_t = R_0*(2 + A*t)\n"   // 14
+                                                           "R_t = R_0 + R_0*A*t\n"); // 15
+    const auto offsets = findings(wrong, plumb::rules::offset_scale);
+    REQUIRE(offsets.size() == 5);
+    for (std::size_t i = 0; i < offsets.size(); ++i)
+        CHECK(line_of(*offsets[i]) == 11 + i);
+}
+
 TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6") {
     const std::string decl = "Q : m^3/s\nV : m/s\nD : mm\n";
     const auto r = plumb::check_text("q.plumb", decl + "Q = V*pi*D^2/4\n");

@@ -1369,6 +1369,8 @@ class checker {
     bool enthalpy_above_ice_point(std::uint32_t reading_node, const typed_term& reading,
                                   const typed_term& by);
     static void read_as_rise(typed_term& t);
+    bool reading_from_ice_point_reference(std::uint32_t reading_node);
+    static bool described_at_ice_point(std::string_view description);
 
     // check/formula/means.cpp
     [[gnu::noinline]] std::optional<typed_term> weighted_mean(std::uint32_t index);

@@ -944,6 +944,18 @@ typed_term checker::eval_factors(std::uint32_t index) {
                 read_as_rise(result);
             }
         }
+        // R_0*(1 + α*t) with R_0 at 0 °C: see reading_from_ice_point_reference.
+        if (!divided && (factor->offset != nullptr) != (result.offset != nullptr)) [[unlikely]] {
+            if (factor->offset != nullptr && is_celsius(factor->offset) && result.known &&
+                result.dim == per_kelvin && reading_from_ice_point_reference(op.rhs)) {
+                if (factor != reinterpret_cast<const typed_term*>(evaluated))
+                    factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
+                read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
+            } else if (result.offset != nullptr && is_celsius(result.offset) && factor->known &&
+                       factor->dim == per_kelvin && reading_from_ice_point_reference(offset_node)) {
+                read_as_rise(result);
+            }
+        }
         if (divided && factor->offset == nullptr && factor->point &&
             factor->dim == temperature_dimension()) [[unlikely]]
             report_celsius_fit_beside_kelvins(op.rhs);
@@ -1179,10 +1191,10 @@ typed_term checker::eval_factors(std::uint32_t index) {
             side_hint_ != nullptr && side_hint_->known && side_hint_->dim.is_dimensionless() &&
             side_hint_->scale == 0.01 && file_.nodes[index].kind == expr_kind::divide &&
             holds_gauge(file_.nodes[index].lhs) && holds_gauge(file_.nodes[index].rhs);
-        if (result.known && (result.dim == length_dimension() || result.dim == force_dimension() ||
-                             wall_stress || ring_tension || jet || bearing_area || head_without_g ||
-                             column_gradient || hydraulic_power || percent_of_gauge ||
-                             gauge_over_modulus(index))) {
+        if (result.known &&
+            (result.dim == length_dimension() || result.dim == force_dimension() || wall_stress ||
+             ring_tension || jet || bearing_area || head_without_g || column_gradient ||
+             hydraulic_power || percent_of_gauge || gauge_over_modulus(index))) {
             result.offset = nullptr;
             result.point = false;
             result.origin = 0.0;
@@ -1370,6 +1382,14 @@ typed_term checker::apply_power(const typed_term& base, const typed_term& expone
     typed_term result;
     if (counts_degrees_above_a_reference(base, exponent)) {
         result = temperature_correction(base, exponent, exponent_node);
+        return result;
+    }
+    // t^2 in R_0*(1 + A*t + B*t^2): see reading_from_ice_point_reference.
+    if (base.offset != nullptr && base.known && is_celsius(base.offset) && exponent.value &&
+        exponent.value->den() == 1 && reading_from_ice_point_reference(base_node)) [[unlikely]] {
+        typed_term rise = base;
+        read_as_rise(rise);
+        result = apply_power(rise, exponent, base_node, exponent_node);
         return result;
     }
     // =B5*(50/H5)^$C$19, a radiator's output at another temperature difference (EN 442):

@@ -674,6 +674,69 @@ bool checker::enthalpy_above_ice_point(std::uint32_t reading_node, const typed_t
     return true;
 }
 
+// "Pt500 resistance at 0 °C", "length at 0°C": a reference taken at the ice point (not at
+// 10 or 20 °C).
+bool checker::described_at_ice_point(std::string_view description) {
+    for (const std::string_view mark : {"0 \u00B0C", "0\u00B0C"})
+        for (std::size_t at = description.find(mark); at != std::string_view::npos;
+             at = description.find(mark, at + 1))
+            if (at == 0 || (std::isdigit(static_cast<unsigned char>(description[at - 1])) == 0 &&
+                            description[at - 1] != '.' && description[at - 1] != ','))
+                return true;
+    return false;
+}
+
+// "R_0*(1 + A*t + B*t^2)" with t in °C and R_0 declared at 0 °C: the Callendar-Van Dusen
+// equation of a platinum thermometer (IEC 60751, from memory), and any law X = X_0·(1 + α·t)
+// whose reference is taken at 0 °C, counts t from 0 °C, so the °C reading there is its rise
+// above the reference. Whether `reading_node` lies in such a bracket; a note says so once in
+// each formula. R_20*(1 + α*t) stays an error: its t must be counted from 20 °C.
+bool checker::reading_from_ice_point_reference(std::uint32_t reading_node) {
+    const span at = file_.nodes[reading_node].range;
+    std::optional<std::uint32_t> reference;
+    visit_nodes([&](const syntax::expr_node& n) {
+        if (reference || n.kind != expr_kind::multiply)
+            return;
+        for (const auto& [symbol, bracket] : {std::pair{n.lhs, n.rhs}, std::pair{n.rhs, n.lhs}}) {
+            const syntax::expr_node& s = file_.nodes[syntax::inside_brackets(file_, symbol)];
+            const syntax::expr_node& g = file_.nodes[bracket];
+            if (s.kind != expr_kind::symbol || g.kind != expr_kind::group ||
+                at.begin < g.range.begin || at.end > g.range.end)
+                continue;
+            const symbol_entry* e = symbols_.find(text(s.range));
+            if (e == nullptr || !described_at_ice_point(e->description))
+                continue;
+            // 1 + α·t: a sum whose leading term is the number 1.
+            std::uint32_t lead = syntax::inside_brackets(file_, g.lhs);
+            while (file_.nodes[lead].kind == expr_kind::add ||
+                   file_.nodes[lead].kind == expr_kind::subtract)
+                lead = syntax::inside_brackets(file_, file_.nodes[lead].lhs);
+            if (file_.nodes[lead].kind == expr_kind::number && text(file_.nodes[lead].range) == "1")
+                reference = syntax::inside_brackets(file_, symbol);
+        }
+    });
+    if (!reference)
+        return false;
+    // Once for each formula, though its readings may be read more than once.
+    std::string message = fmt::format("{} is read as the rise above 0 \u00B0C, the temperature "
+                                      "{} is taken at",
+                                      quote(reading_node), quote(*reference));
+    const std::uint32_t begins = file_.nodes[file_.sides[current_->first_side].root].range.begin;
+    const std::size_t since = out_.size() > 8 ? out_.size() - 8 : 0;
+    if (std::none_of(out_.begin() + static_cast<std::ptrdiff_t>(since), out_.end(),
+                     [&](const diagnostic& d) {
+                         return d.message == message && d.where.range.begin >= begins;
+                     })) {
+        diagnostic& d =
+            report(rules::trade_constant, std::move(message), file_.nodes[reading_node].range);
+        d.level = severity::note;
+        d.notes.push_back({"write (t - 0 {\u00B0C}) to say so; a reference taken at another "
+                           "temperature needs the difference from it, (t - t_ref)",
+                           {}});
+    }
+    return true;
+}
+
 void checker::read_as_rise(typed_term& t) {
     t.offset = nullptr;
     t.point = false;
