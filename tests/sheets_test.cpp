@@ -931,3 +931,21 @@ TEST_CASE("sheets: a vacuum row counts down from the site's barometer; lb·ft is
     CHECK(std::none_of(found.begin(), found.end(),
                        [](const std::string& f) { return f.rfind("Plant!B7 ", 0) == 0; }));
 }
+
+// A barrel is 42 US gallons exactly and an hour 60 minutes (NIST SP 811 (2008), B.8): a
+// transfer rate in bbl/h times 42/60 is in gpm. The 60 converts the clock the cells' units
+// count in (h and min), which a ratio of two small whole numbers, 42/60 = 0.7, must not hide.
+TEST_CASE("sheets: bbl/h times 42/60 is gpm, the clock read from the cells' units") {
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Transfer rate", "4200", "bbl/h") +
+        labelled_row(3, "Transfer rate, US", "=B2*42/60", "gpm") +
+        labelled_row(4, "Transfer rate, US, again", "=42*B2/60", "gal/min") +
+        labelled_row(5, "Transfer rate, slip", "=B2*42/24", "gpm") +
+        "</sheetData></worksheet>";
+    const auto found = cell_findings_of_one_sheet("Tank", sheet);
+    CHECK(std::none_of(found.begin(), found.end(), [](const std::string& f) {
+        return f.rfind("Tank!B3 ", 0) == 0 || f.rfind("Tank!B4 ", 0) == 0;
+    }));
+    CHECK(std::any_of(found.begin(), found.end(),
+                      [](const std::string& f) { return f.rfind("Tank!B5 ", 0) == 0; }));
+}

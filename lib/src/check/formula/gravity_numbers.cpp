@@ -372,6 +372,9 @@ unsigned checker::clock_units_of_formula() const {
         if (n.kind == expr_kind::symbol)
             if (const symbol_entry* e = symbols_.find(text(n.range)); e != nullptr)
                 found |= clock_units_in(e->unit_text);
+        // A workbook's cell, by the unit written for it ("=C57*42/60" into gpm from bbl/h).
+        if (n.kind == expr_kind::reference)
+            found |= clock_units_in(file_.references[n.lhs].unit_text);
         return search_step::descend;
     });
     return found;
