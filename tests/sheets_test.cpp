@@ -940,8 +940,7 @@ TEST_CASE("sheets: bbl/h times 42/60 is gpm, the clock read from the cells' unit
         "<worksheet><sheetData>" + labelled_row(2, "Transfer rate", "4200", "bbl/h") +
         labelled_row(3, "Transfer rate, US", "=B2*42/60", "gpm") +
         labelled_row(4, "Transfer rate, US, again", "=42*B2/60", "gal/min") +
-        labelled_row(5, "Transfer rate, slip", "=B2*42/24", "gpm") +
-        "</sheetData></worksheet>";
+        labelled_row(5, "Transfer rate, slip", "=B2*42/24", "gpm") + "</sheetData></worksheet>";
     const auto found = cell_findings_of_one_sheet("Tank", sheet);
     CHECK(std::none_of(found.begin(), found.end(), [](const std::string& f) {
         return f.rfind("Tank!B3 ", 0) == 0 || f.rfind("Tank!B4 ", 0) == 0;
