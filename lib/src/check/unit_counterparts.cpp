@@ -74,6 +74,9 @@ const auto rows = std::to_array<counterpart_row>({
     {flow, {"L/min", 1e-3 / 60.0}, {{{"gpm", us_gallon / 60.0}, {"m\u00B3/h", 1.0 / 3600.0}, {}}}},
     {flow, {"gpm", us_gallon / 60.0}, {{{"m\u00B3/h", 1.0 / 3600.0}, {"L/s", 1e-3}}}},
     {flow, {"cfm", cubic_foot / 60.0}, {{{"m\u00B3/h", 1.0 / 3600.0}, {"L/s", 1e-3}}}},
+    // The oilfield's barrel a day (42 US gal, NIST SP 811 (2008), B.8) beside the gallon a
+    // minute that the pump trade's 1714 and 3960 take.
+    {flow, {"bbl/d", 42.0 * us_gallon / 86400.0}, {{{"gpm", us_gallon / 60.0}, {}}}},
     {velocity, {"m/s", 1.0}, {{{"fpm", foot / 60.0}, {"ft/s", foot}}}},
     {velocity, {"fpm", foot / 60.0}, {{{"m/s", 1.0}, {}}}},
     {velocity, {"ft/s", foot}, {{{"m/s", 1.0}, {}}}},
