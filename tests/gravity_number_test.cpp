@@ -1360,8 +1360,9 @@ TEST_CASE("a pump's 367 beside a flow in L/s names the m³/h it takes") {
 
 // Hydraulic horsepower, HHP = Δp·Q/1714 from psi and gpm (common practice): 1714.29 =
 // 33 000·12/231, a horsepower being 33 000 ft·lbf/min and a US gallon 231 in³ (NIST SP 811
-// (2008), B.8). A barrel is 42 US gal (ibid.), so 1 gpm is 34.2857 bbl/d. Beside a rate in bbl/d the message names the
-// flow's unit and the 34.29 the formula is off by, not 58 776 as though 1714 were no constant.
+// (2008), B.8). A barrel is 42 US gal (ibid.), so 1 gpm is 34.2857 bbl/d. Beside a rate in
+// bbl/d the message names the flow's unit and the 34.29 the formula is off by, not 58 776 as
+// though 1714 were no constant.
 TEST_CASE("the pump trade's 1714 beside a flow in bbl/d names the gpm it takes") {
     const std::string decl = "HHP : hp\np_d, p_s : psig\nq_b : bbl/d\nQ : gpm\n";
     CHECK(problems_in(plumb::test::check_after(decl, "HHP = (p_d - p_s)*Q/1714")) == 0);
