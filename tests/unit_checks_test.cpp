@@ -122,6 +122,25 @@ TEST_CASE("offset scales: a °C reading beside a reference taken at 0 °C is its
         CHECK(line_of(*offsets[i]) == 11 + i);
 }
 
+// A blower's adiabatic power, P = w·R·T_1/(550·n·e)·((p_2/p_1)^n - 1) in hp with R in
+// ft·lbf/(lb·°R) (common practice; from memory): R·T takes the absolute inlet temperature.
+// R has a specific heat's dimension, and ṁ·c_p·t beside it is still told to take a difference.
+TEST_CASE("offset scales: a gas constant times a reading is told to take absolute temperature") {
+    const std::string decl = "w : lb/s\nR_a : ft*lbf/(lb*\u00B0R)\nt_1 : \u00B0F\nn, e : 1\n"
+                             "p_1, p_2 : psia\nP : hp\nc_p : Btu/(lb*\u00B0F)\nQ : Btu/s\n"
+                             "m : kg/s\nR_u : J/(mol*K)\nN : mol/s\nt_c : \u00B0C\nW : W\n";
+    const auto r = plumb::check_text(
+        "g.plumb", decl + "P = w*R_a*t_1/(550*n*e)*((p_2/p_1)^n - 1)\n" // line 14
+                          "Q = w*c_p*t_1\n"                             // 15
+                          "W = N*R_u*t_c\n");                           // 16
+    const auto offsets = findings(r, plumb::rules::offset_scale);
+    REQUIRE(offsets.size() == 3);
+    CHECK(mentions(*offsets[0], "(t_1 + 459.67), in \u00B0R"));
+    CHECK(line_of(*offsets[1]) == 15);
+    CHECK(mentions(*offsets[1], "a heat flow per degree"));
+    CHECK(mentions(*offsets[2], "(t_c + 273.15), in K"));
+}
+
 TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6") {
     const std::string decl = "Q : m^3/s\nV : m/s\nD : mm\n";
     const auto r = plumb::check_text("q.plumb", decl + "Q = V*pi*D^2/4\n");

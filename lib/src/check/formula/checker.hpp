@@ -1302,6 +1302,7 @@ class checker {
     static bool is_heat_per_degree(const compact_dimension& partner);
     static bool is_per_degree_coefficient(const compact_dimension& partner);
     static bool is_slope_of_property(const compact_dimension& partner);
+    bool gas_constant_in_formula() const;
     bool heat_capacity_in_formula(const compact_dimension& partner) const;
     bool linear_fit_on_reading(std::uint32_t node) const;
     void report_offset(std::uint32_t node, const unit_definition& unit, std::string_view where,

@@ -35,6 +35,26 @@ bool checker::heat_capacity_in_formula(const compact_dimension& partner) const {
     return found;
 }
 
+// A symbol of the formula that is a gas constant: of a specific heat's or a molar heat's
+// dimension, named R ("R_a", "R_u") or described as one.
+bool checker::gas_constant_in_formula() const {
+    bool found = false;
+    visit_nodes([&](const syntax::expr_node& n) {
+        if (found || n.kind != expr_kind::symbol)
+            return;
+        const std::string_view name = text(n.range);
+        const symbol_entry* e = symbols_.find(name);
+        if (e == nullptr || !e->compact_dim)
+            return;
+        const bool named = name == "R" || name.starts_with("R_") ||
+                           e->description.find("gas constant") != std::string_view::npos;
+        // J/(kg·K) or J/(mol·K).
+        constexpr compact_dimension molar_heat = compact_dimension::whole({1, 2, -2, -1, -1, 0, 0});
+        found = named && (*e->compact_dim == specific_heat_dim || *e->compact_dim == molar_heat);
+    });
+    return found;
+}
+
 // a in c_p = c_0 + a·t (kJ/(kg·K²)): the slope of a property that is itself per degree.
 bool checker::is_slope_of_property(const compact_dimension& partner) {
     try {
@@ -181,6 +201,30 @@ void checker::report_offset(std::uint32_t node, const unit_definition& unit, std
                          "write ({} - {}) with {} the coefficient's reference temperature "
                          "in {}",
                          display_text(file_.nodes[node].range), reference, reference, unit.symbol),
+             {}});
+        return;
+    }
+    // w·R·T/550 with R_a in ft·lbf/(lb·°R): a gas constant has a specific heat's dimension,
+    // but R·T is a gas's state or its work (p·v = R·T, a blower's adiabatic power), which
+    // takes the absolute temperature, not a difference.
+    if (temperature && partner != nullptr && gas_constant_in_formula()) {
+        // "(T_F + 273.15)": the reading inside, with the other scale's number replaced.
+        const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, node)];
+        const bool number_added =
+            (sum.kind == expr_kind::add || sum.kind == expr_kind::subtract) &&
+            file_.nodes[syntax::inside_brackets(file_, sum.rhs)].kind == expr_kind::number;
+        const std::string reading =
+            display_text(number_added ? file_.nodes[syntax::inside_brackets(file_, sum.lhs)].range
+                                      : file_.nodes[node].range);
+        d.notes.push_back(
+            {fmt::format("R times a temperature is a gas law's (p\u00B7v = R\u00B7T, a "
+                         "compressor's or blower's power), which takes absolute temperature: "
+                         "write ({} + {:g}), in {}{}",
+                         reading, unit.offset / unit.factor,
+                         std::abs(unit.factor - 1.0) < 1e-12 ? "K" : "\u00B0R",
+                         number_added ? fmt::format(", in place of {}",
+                                                    display_text(file_.nodes[node].range))
+                                      : std::string()),
              {}});
         return;
     }
@@ -534,11 +578,10 @@ bool checker::gauge_over_modulus(std::uint32_t product) const {
                 ++gauges;
                 return false;
             }
-            const bool modulus =
-                name == "E" || name.starts_with("E_") ||
-                e->description.find("modulus") != std::string_view::npos ||
-                e->description.find("Modulus") != std::string_view::npos ||
-                e->description.find("elastic") != std::string_view::npos;
+            const bool modulus = name == "E" || name.starts_with("E_") ||
+                                 e->description.find("modulus") != std::string_view::npos ||
+                                 e->description.find("Modulus") != std::string_view::npos ||
+                                 e->description.find("elastic") != std::string_view::npos;
             if (!modulus || t.offset != nullptr || sign > 0)
                 return true;
             ++moduli;
