@@ -87,6 +87,22 @@ TEST_CASE("gravity as a number: a missing g and the wrong numbers are still erro
     CHECK(count_of(both, plumb::rules::gravity_number) == 0);
 }
 
+// A Froude number is v/√(g·y) (Chow, Open-Channel Hydraulics, 1959, from memory), and a
+// cold-store door's air exchange carries √(g·H) (Gosney and Olama, as ASHRAE Refrigeration
+// prints it, from memory): a g left out of the root leaves the term √g apart.
+TEST_CASE("a g left out of a square root is named as the square root of an acceleration") {
+    const std::string decl = "Fr : 1\nv : m/s\ny : m\ng : m/s^2\n";
+    const auto missing = run(decl + "Fr = v/sqrt(y)\n");
+    REQUIRE(count_of(missing, plumb::rules::side_mismatch) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(missing, plumb::rules::side_mismatch),
+                            "is a g missing from a square root below it"));
+    const auto extra = run(decl + "v = Fr*sqrt(y)\n");
+    REQUIRE(count_of(extra, plumb::rules::side_mismatch) == 1);
+    CHECK(plumb::test::says(plumb::test::first_under(extra, plumb::rules::side_mismatch),
+                            "times \u221Ag it would match"));
+    CHECK(run(decl + "Fr = v/sqrt(g*y)\n").diagnostics.empty());
+}
+
 TEST_CASE("gravity as a number: a head from a gauge reading with g left out says so") {
     // H = p/(ρ*g) (common practice); a gauge reading may give a head, so the slip is the
     // missing g, not the reading's zero.

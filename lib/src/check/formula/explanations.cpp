@@ -173,6 +173,26 @@ void checker::note_acceleration_or_density_apart(diagnostic& d, std::span<const 
                                  : "divided by g it would match; is a g missing from its "
                                    "denominator (p/(ρ*g)), or is one there too many?"),
                  {}});
+        // "Fr = v/sqrt(y)", "q = 0.221*A*Δh*ρ*(1 - ρ_i/ρ_r)^0.5*H^0.5": g left out of a square
+        // root (Fr = v/√(g·y); a door's air exchange, Gosney and Olama, √(g·H); common
+        // practice).
+        // Not where g is typed as a number (9.81 beside feet), which is no missing g.
+        else if ((*apart == acceleration_dimension().pow(rational(1, 2)) ||
+                  *apart == acceleration_dimension().pow(rational(-1, 2))) &&
+                 std::none_of(literals_.begin() + odd_type.literal_begin,
+                              literals_.begin() + odd_type.literal_begin + odd_type.literal_count,
+                              [](const scale_literal& l) { return is_typed_gravity(l); }))
+            d.notes.push_back(
+                {fmt::format("{} differs from the rest by exactly the square root of an "
+                             "acceleration: {}",
+                             odd,
+                             *apart == acceleration_dimension().pow(rational(1, 2))
+                                 ? "times \u221Ag it would match; is a g missing from a square "
+                                   "root (\u221A(g*h), v/\u221A(g*y))?"
+                                 : "divided by \u221Ag it would match; is a g missing from a "
+                                   "square root below it (v/\u221A(g*y)), or is one there too "
+                                   "many?"),
+                 {}});
         // Not a fraction against a concentration (ppm against mg/L or mg/Nm³), which has
         // notes of its own.
         else if ((*apart == density_dim || *apart == density_dim.pow(-1)) &&
