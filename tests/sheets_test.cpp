@@ -948,3 +948,18 @@ TEST_CASE("sheets: bbl/h times 42/60 is gpm, the clock read from the cells' unit
     CHECK(std::any_of(found.begin(), found.end(),
                       [](const std::string& f) { return f.rfind("Tank!B5 ", 0) == 0; }));
 }
+
+// A °C cell plus 273.15 written into a °F column is in kelvins (NIST SP 811 (2008), B.9): the
+// cell is told to convert the scale, 1.8·t + 32, not that its value is 1.8 times too small.
+TEST_CASE("sheets: a °C cell made absolute in a °F column is told the conversion") {
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Glycol supply", "-4", "\u00B0C") +
+        labelled_row(3, "Glycol supply, US", "=B2+273.15", "\u00B0F") + "</sheetData></worksheet>";
+    const auto report = plumb::test::check_one_sheet("Glycol", sheet);
+    const auto it =
+        std::find_if(report.diagnostics.begin(), report.diagnostics.end(),
+                     [](const plumb::diagnostic& d) { return d.level != plumb::severity::note; });
+    REQUIRE(it != report.diagnostics.end());
+    CHECK(it->rule == plumb::rules::offset_scale);
+    CHECK(plumb::test::says(*it, "write B2*1.8 + 32"));
+}

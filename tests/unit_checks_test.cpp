@@ -129,16 +129,30 @@ TEST_CASE("offset scales: a gas constant times a reading is told to take absolut
     const std::string decl = "w : lb/s\nR_a : ft*lbf/(lb*\u00B0R)\nt_1 : \u00B0F\nn, e : 1\n"
                              "p_1, p_2 : psia\nP : hp\nc_p : Btu/(lb*\u00B0F)\nQ : Btu/s\n"
                              "m : kg/s\nR_u : J/(mol*K)\nN : mol/s\nt_c : \u00B0C\nW : W\n";
-    const auto r = plumb::check_text(
-        "g.plumb", decl + "P = w*R_a*t_1/(550*n*e)*((p_2/p_1)^n - 1)\n" // line 14
-                          "Q = w*c_p*t_1\n"                             // 15
-                          "W = N*R_u*t_c\n");                           // 16
+    const auto r =
+        plumb::check_text("g.plumb", decl + "P = w*R_a*t_1/(550*n*e)*((p_2/p_1)^n - 1)\n" // line 14
+                                            "Q = w*c_p*t_1\n"                             // 15
+                                            "W = N*R_u*t_c\n");                           // 16
     const auto offsets = findings(r, plumb::rules::offset_scale);
     REQUIRE(offsets.size() == 3);
     CHECK(mentions(*offsets[0], "(t_1 + 459.67), in \u00B0R"));
     CHECK(line_of(*offsets[1]) == 15);
     CHECK(mentions(*offsets[1], "a heat flow per degree"));
     CHECK(mentions(*offsets[2], "(t_c + 273.15), in K"));
+}
+
+// t_°F = 1.8·t_°C + 32 and t_°C = (t_°F - 32)/1.8 (NIST SP 811 (2008), 4.2.1.1 and B.9): a
+// °C reading plus 273.15 is in kelvins, which a °F side is not, and the advice is the
+// conversion between the two scales, not the °F reading made absolute.
+TEST_CASE("offset scales: the other scale's reading made absolute is told the conversion") {
+    const std::string decl = "t_C : \u00B0C\nt_F : \u00B0F\n";
+    const auto r = plumb::check_text("c.plumb", decl + "t_F = t_C + 273.15\n"   // line 3
+                                                       "t_C = t_F + 459.67\n"); // 4
+    const auto offsets = findings(r, plumb::rules::offset_scale);
+    REQUIRE(offsets.size() == 2);
+    CHECK(mentions(*offsets[0], "write t_C*1.8 + 32"));
+    CHECK(mentions(*offsets[1], "write (t_F - 32)/1.8"));
+    CHECK(plumb::check_text("c.plumb", decl + "t_F = t_C*1.8 + 32\n").diagnostics.empty());
 }
 
 TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6") {

@@ -1041,6 +1041,7 @@ class checker {
     bool report_zero_in_another_unit_added(const operand& t, const shift& sh, double unit,
                                            const compact_dimension& dim,
                                            std::span<const operand> terms);
+    const unit_definition* offset_unit_of(std::uint32_t node) const;
     bool is_whole_side(std::uint32_t node) const;
     const unit_definition* subtracted_scale_zero(std::span<const operand> terms,
                                                  double final_origin, double slack) const;

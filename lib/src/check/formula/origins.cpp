@@ -335,6 +335,24 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
                                          celsius ? "kelvins" : "degrees Rankine",
                                          display_text(file_.nodes[off.node].range), unit->symbol,
                                          display_text(file_.nodes[sum.rhs].range));
+                // "t_F = t_C + 273.15", "=D9+273.15" into °F: the other scale's reading made
+                // absolute; the conversion between the two scales is what was meant.
+                else if (sum.kind == expr_kind::add &&
+                         file_.nodes[sum.rhs].kind == expr_kind::number)
+                    if (const unit_definition* from = offset_unit_of(sum.lhs);
+                        from != nullptr && from != unit &&
+                        std::abs(written_number(file_.nodes[sum.rhs].range) -
+                                 (celsius ? 459.67 : 273.15)) < 0.02)
+                        advice = fmt::format(
+                            "{} takes a reading to {} from {}, but '{}' is on the {} scale: "
+                            "write {}",
+                            display_text(file_.nodes[sum.rhs].range),
+                            celsius ? "degrees Rankine" : "kelvins", from->symbol,
+                            display_text(file_.nodes[off.node].range), unit->symbol,
+                            celsius ? fmt::format("({} - 32)/1.8",
+                                                  display_text(file_.nodes[sum.lhs].range))
+                                    : fmt::format("{}*1.8 + 32",
+                                                  display_text(file_.nodes[sum.lhs].range)));
             }
             // "Δθ_h = θ_h" with Δθ_h in K "rise above ambient": the kelvins are a rise's,
             // and a reading made absolute would only hide the slip.
@@ -851,6 +869,17 @@ bool checker::mixes_units_of_one_kind(std::uint32_t root) const {
         }
     }
     return false;
+}
+
+// The offset scale a reading is declared on: a symbol's unit or a workbook cell's.
+const unit_definition* checker::offset_unit_of(std::uint32_t node) const {
+    const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, node)];
+    if (n.kind == expr_kind::reference)
+        return file_.references[n.lhs].offset;
+    if (n.kind != expr_kind::symbol)
+        return nullptr;
+    const symbol_entry* e = symbols_.find(text(n.range));
+    return e != nullptr ? e->offset_unit : nullptr;
 }
 
 } // namespace plumb::formula_check
