@@ -76,10 +76,10 @@ TEST_CASE("a gauge pressure over an elastic modulus is the strain of a wall or a
     const auto metric = run(prover, "@cps-mm CPS = 1 + P_p*ID_mm/(E_s*WT)");
     CHECK(count_of(metric, plumb::rules::unit_scale) == 1);
     CHECK(count_of(metric, plumb::rules::offset_scale) == 0);
-    fails_with(prover,
-               {"@ratio-to-stress CPS = 1 + P_p*ID/(σ_y*WT)",
-                "@ratio-to-absolute CPS = 1 + P_p/p_a"},
-               plumb::rules::offset_scale);
+    fails_with(
+        prover,
+        {"@ratio-to-stress CPS = 1 + P_p*ID/(σ_y*WT)", "@ratio-to-absolute CPS = 1 + P_p/p_a"},
+        plumb::rules::offset_scale);
 }
 
 TEST_CASE("a gauge pressure in a gas law or a pressure ratio is still an error") {
@@ -566,6 +566,22 @@ TEST_CASE("a gauge reading's advice names the site's declared barometer in the r
     CHECK(plumb::test::says(first_under(n, plumb::rules::offset_scale),
                             "write (100*p_da + 99.5), 'p_b' in kPa"));
     passes(deaerator, {"Δp = 100*(p_da + p_b) - p_v"});
+}
+
+// A blower's pressure ratio takes absolute pressures (common practice): at a site whose
+// barometer the file declares, the advice beside a gauge reading in the ratio names it, in the
+// reading's unit, not the sea level's atmosphere.
+TEST_CASE("a gauge reading in a pressure ratio is told to add the site's declared barometer") {
+    const std::string blower = "p_bar : kPa \"site barometric pressure, 97.7 kPa\"\n"
+                               "p_1 : kPa\np_2g : kPag\np_2s : psig\nr : 1\n";
+    const auto r = run(blower, "r = p_2g/p_1");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale), "write (p_2g + p_bar)"));
+    const auto s = run(blower, "r = p_2s/p_1");
+    CHECK(plumb::test::says(first_under(s, plumb::rules::offset_scale),
+                            "write (p_2s + 14.1702), 'p_bar' in psi"));
+    const auto u = run("p_1 : kPa\np_2g : kPag\nr : 1\n", "r = p_2g/p_1");
+    CHECK(plumb::test::says(first_under(u, plumb::rules::offset_scale),
+                            "add the atmospheric pressure"));
 }
 
 // A gauge reading plus the barometer is absolute (common practice); the atmosphere added

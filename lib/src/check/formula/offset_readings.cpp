@@ -258,6 +258,22 @@ void checker::report_offset(std::uint32_t node, const unit_definition& unit, std
              {}});
         return;
     }
+    // (p_2g/p_1)^n at a site whose barometer the file declares: that barometer is the one to
+    // add, not the sea level's.
+    // Only for the reading itself: a product around it ("p_g/10") has another unit.
+    const expr_kind reading_kind = file_.nodes[syntax::inside_brackets(file_, node)].kind;
+    if (!temperature && unit.scale == unit_scale::gauge &&
+        (reading_kind == expr_kind::symbol || reading_kind == expr_kind::reference))
+        if (std::optional<std::string> site = site_atmosphere_advice(
+                display_text(file_.nodes[node].range), unit.factor, absolute_symbol(unit))) {
+            d.notes.push_back(
+                {fmt::format("gas laws and pressure ratios need absolute pressure; {}", *site),
+                 {}});
+            d.notes.push_back({"a difference of two values on the same scale, such as p_2 - p_1, "
+                               "is an ordinary quantity and may be used freely",
+                               {}});
+            return;
+        }
     // The physics decides which fix is right, and a dimension cannot tell ρ·c_p·T from
     // ρ·R·T: each fix is given with the formulas it suits.
     d.notes.push_back(
