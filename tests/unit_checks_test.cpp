@@ -155,6 +155,18 @@ TEST_CASE("offset scales: the other scale's reading made absolute is told the co
     CHECK(plumb::check_text("c.plumb", decl + "t_F = t_C*1.8 + 32\n").diagnostics.empty());
 }
 
+// A share in % is a hundredth (ISO 80000-1, 8.2, from memory): in n·F·η ≥ F_req with η in %,
+// the side with the percentage is the one that needs the 100, whichever side it stands on.
+TEST_CASE("mixed units: of two sides, the product holding a percentage takes the 100") {
+    const std::string decl = "n : 1\nF_h, F_req : N\nη_i : %\n";
+    const auto r = plumb::check_text("p.plumb", decl + "n*F_h*η_i >= F_req\n"   // line 4
+                                                       "F_req <= n*F_h*η_i\n"); // 5
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 2);
+    CHECK(mentions(*scales[0], "divide 'n*F_h*\u03B7_i' by 100"));
+    CHECK(mentions(*scales[1], "divide 'n*F_h*\u03B7_i' by 100"));
+}
+
 TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6") {
     const std::string decl = "Q : m^3/s\nV : m/s\nD : mm\n";
     const auto r = plumb::check_text("q.plumb", decl + "Q = V*pi*D^2/4\n");

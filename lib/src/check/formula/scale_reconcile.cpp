@@ -294,6 +294,14 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
          (!mixes_units_of_one_kind(ops[index[r.odd]].node) &&
           mixes_units_of_one_kind(ops[index[r.reference]].node))))
         std::swap(r.odd, r.reference);
+    // "n*F_h*η_i >= F_req" with η_i in %: of two sides, the product with the percentage in it
+    // is the one to take the 100, not the plain side beside it.
+    if (what.what.starts_with("sides") && parts.size() == 2 &&
+        holds_percentage(ops[index[r.reference]].node) &&
+        !holds_percentage(ops[index[r.odd]].node) &&
+        file_.nodes[syntax::inside_brackets(file_, ops[index[r.reference]].node)].kind !=
+            expr_kind::symbol)
+        std::swap(r.odd, r.reference);
     // "1/(C_w/S_s + 1 - C_w)" with C_w in %: beside unity the shares in % are the terms off,
     // however many of them there are; the 1 is the whole, not a percent.
     bool unity_beside_percent = false;
