@@ -62,24 +62,28 @@ TEST_CASE("a gauge pressure times a volume, or a volume over a length, is no wal
                plumb::rules::offset_scale);
 }
 
-TEST_CASE("a gauge pressure over an elastic modulus is the strain of a wall or a liquid") {
+TEST_CASE("a gauge pressure over an elastic modulus or a strength is a ratio of stresses") {
     // A pipe prover's correction for the pressure's effect on its steel, CPS = 1 + P·ID/(E·WT),
     // takes P in psig (API MPMS ch. 12.2, from memory); a hydrotest's added volume ΔV = V·p/K
-    // takes the test's gauge reading over water's bulk modulus (common practice).
+    // takes the test's gauge reading over water's bulk modulus (common practice); and a line's
+    // hoop stress as a share of its yield, P·D/(2·t·SMYS), the internal gauge pressure (ASME
+    // B31.8, 841.1.1, from memory).
     const std::string prover = "P_p : psig\np_a : psia\nID, WT : in\nID_mm : mm\n"
                                "E_s : psi \"modulus of elasticity of the prover steel\"\n"
                                "K_w : psi \"bulk modulus of water\"\nσ_y : psi\n"
+                               "S : psi \"SMYS of the line pipe\"\nF : 1\np_b : psia\n"
                                "V_p, ΔV : ft^3\nCPS : 1\n";
-    passes(prover, {"@cps CPS = 1 + P_p*ID/(E_s*WT)", "@hydrotest-volume ΔV = V_p*P_p/K_w"});
-    // The metric diameter beside it is still 25.4 off, and a gauge reading over a stress that is
-    // no modulus, or over an absolute pressure, is still a pressure ratio.
+    passes(prover, {"@cps CPS = 1 + P_p*ID/(E_s*WT)", "@hydrotest-volume ΔV = V_p*P_p/K_w",
+                    "@hoop-share F = P_p*ID/(2*WT*S)", "@hoop-over-yield F = P_p*ID/(2*σ_y*WT)"});
+    // The metric diameter beside it is still 25.4 off, and a gauge reading over an absolute
+    // pressure (the barometer too), or over two strengths, is still a pressure ratio.
     const auto metric = run(prover, "@cps-mm CPS = 1 + P_p*ID_mm/(E_s*WT)");
     CHECK(count_of(metric, plumb::rules::unit_scale) == 1);
     CHECK(count_of(metric, plumb::rules::offset_scale) == 0);
-    fails_with(
-        prover,
-        {"@ratio-to-stress CPS = 1 + P_p*ID/(σ_y*WT)", "@ratio-to-absolute CPS = 1 + P_p/p_a"},
-        plumb::rules::offset_scale);
+    fails_with(prover,
+               {"@ratio-to-absolute CPS = 1 + P_p/p_a", "@ratio-to-barometer F = P_p*ID/(WT*p_b)",
+                "@over-two F = P_p*ID/(WT*S*σ_y)*{psi}"},
+               plumb::rules::offset_scale);
 }
 
 TEST_CASE("a gauge pressure in a gas law or a pressure ratio is still an error") {

@@ -60,6 +60,8 @@ struct reference_value {
     bool specific_gravity = false;
     // A pressure whose row label says it is a vacuum, counted down from the atmosphere.
     bool vacuum = false;
+    // A pressure whose row label names a material's stress, strength or modulus (SMYS, E).
+    bool stress = false;
     // A length whose row label names a circle's diameter or radius (a pulley's, a drum's).
     round_length round = round_length::none;
     // The unit as written for the cell ("Ah", "L/min"), where one is.

@@ -599,6 +599,15 @@ class workbook_checker {
         return words.find("vacuum") != std::string::npos;
     }
 
+    // "SMYS of the line pipe", "Yield strength", "Young's modulus": a material's stress.
+    bool labelled_a_stress(std::size_t s, cell_address a) const {
+        const row_label label = label_of(s, a);
+        return !label.description.empty() &&
+               (names_a_stress(label.name, label.description) ||
+                label.description.find("SMYS") != std::string::npos ||
+                lower_ascii(label.description).find("yield") != std::string::npos);
+    }
+
     bool labelled_a_specific_gravity(std::size_t s, cell_address a) const {
         const row_label label = label_of(s, a);
         return !label.description.empty() && names_specific_gravity(label.name, label.description);
@@ -741,6 +750,8 @@ class workbook_checker {
                                       labelled_a_specific_gravity(r.sheet, r.area.first);
             target.vacuum = r.area.single() && v.dim && v.offset == nullptr &&
                             labelled_a_vacuum(r.sheet, r.area.first);
+            target.stress = r.area.single() && v.dim && v.offset == nullptr &&
+                            labelled_a_stress(r.sheet, r.area.first);
             target.round =
                 r.area.single() && v.dim && *v.dim == dimension::base(base_dimension::length)
                     ? labelled_round(r.sheet, r.area.first)

@@ -573,15 +573,42 @@ bool checker::pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
 // P·ID/(E·WT), p_g*V/K_w: a gauge reading over an elastic modulus, scaled by lengths, areas,
 // volumes and pure numbers, is the strain (or the volume change) the net pressure across a
 // wall or in a liquid causes, which a gauge reads: a prover's CPS (API MPMS ch. 12.2, from
-// memory) and a hydrotest's added volume (common practice). The modulus is a symbol named E
-// or described as one.
+// memory) and a hydrotest's added volume (common practice). Over a strength or a stress,
+// P·D/(2·t·SMYS) is the hoop stress's share of the yield (ASME B31.8, 841.1.1, from memory),
+// and u/σ_v a pore pressure's of the overburden: ratios of stresses. The modulus or stress is
+// a symbol named E or σ, or described as one, or a cell whose row label says so.
 bool checker::gauge_over_modulus(std::uint32_t product) const {
     int gauges = 0;
     int moduli = 0;
+    // A pressure: the gauge reading above, or the material's stress below.
+    const auto pressure = [&](bool gauge, bool material, bool offset, int sign) {
+        if (gauge && sign > 0) {
+            ++gauges;
+            return false;
+        }
+        if (!material || offset || sign > 0)
+            return true;
+        ++moduli;
+        return false;
+    };
+    const auto shape = [](const compact_dimension& dim) {
+        return dim.is_dimensionless() || dim == length_dimension() || dim == area_dimension() ||
+               dim == volume_dim;
+    };
     const bool other = for_each_factor(product, [&](std::uint32_t at, int sign) {
         const syntax::expr_node& n = file_.nodes[at];
         if (n.kind == expr_kind::number || n.kind == expr_kind::pi)
             return false;
+        if (n.kind == expr_kind::reference) {
+            const syntax::reference_value& r = file_.references[n.lhs];
+            if (!r.dim)
+                return true;
+            const compact_dimension dim(*r.dim);
+            if (dim == pressure_dimension())
+                return pressure(r.offset != nullptr && r.offset->scale == unit_scale::gauge,
+                                r.stress, r.offset != nullptr, sign);
+            return !shape(dim);
+        }
         if (n.kind != expr_kind::symbol)
             return true;
         const std::string_view name = text(n.range);
@@ -590,21 +617,15 @@ bool checker::gauge_over_modulus(std::uint32_t product) const {
             return true;
         const typed_term& t = *e->checked_type;
         if (t.dim == pressure_dimension()) {
-            if (t.offset != nullptr && t.offset->scale == unit_scale::gauge && sign > 0) {
-                ++gauges;
-                return false;
-            }
-            const bool modulus = name == "E" || name.starts_with("E_") ||
-                                 e->description.find("modulus") != std::string_view::npos ||
-                                 e->description.find("Modulus") != std::string_view::npos ||
-                                 e->description.find("elastic") != std::string_view::npos;
-            if (!modulus || t.offset != nullptr || sign > 0)
-                return true;
-            ++moduli;
-            return false;
+            const bool material = name == "E" || name.starts_with("E_") ||
+                                  names_a_stress(name, e->description) ||
+                                  e->description.find("elastic") != std::string_view::npos ||
+                                  e->description.find("SMYS") != std::string_view::npos ||
+                                  e->description.find("yield") != std::string_view::npos;
+            return pressure(t.offset != nullptr && t.offset->scale == unit_scale::gauge, material,
+                            t.offset != nullptr, sign);
         }
-        return !(t.dim.is_dimensionless() || t.dim == length_dimension() ||
-                 t.dim == area_dimension() || t.dim == volume_dim);
+        return !shape(t.dim);
     });
     return !other && gauges == 1 && moduli == 1;
 }

@@ -536,9 +536,13 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     const bool one_coefficient = !other_unit_note && coefficient_count == 1 &&
                                  std::isfinite(in_place) && in_place > 0 &&
                                  std::abs(coefficient_exponent) == 1.0;
+    // Not the 384 of a beam's deflection 5·w·L⁴/(384·E·I) (and 185 and 192 for a propped or
+    // fixed end; common practice), which is the formula's own, never a conversion mistaken.
+    const bool formula_whole_number = written == 384.0 || written == 185.0 || written == 192.0;
     const bool in_place_offered = one_coefficient && std::abs(written / needed - 1.0) > 0.05 &&
                                   std::abs(std::log10(in_place / written)) <= std::log10(5.0) &&
-                                  (written >= 10.0 || coefficient_digits >= 3);
+                                  (written >= 10.0 || coefficient_digits >= 3) &&
+                                  !formula_whole_number;
     // "I_in4 = I_cm4/2.54": a length's ratio where these units need its fourth power (cm⁴ to
     // in⁴ is 2.54⁴ = 41.6231, NIST SP 811 (2008), B.8). The power, or 0 where none fits.
     int power_of_ratio = 0;
