@@ -167,6 +167,21 @@ TEST_CASE("mixed units: of two sides, the product holding a percentage takes the
     CHECK(mentions(*scales[1], "divide 'n*F_h*\u03B7_i' by 100"));
 }
 
+// A simply supported beam's midspan deflection, δ = 5·w·L⁴/(384·E·I) (any structures text,
+// e.g. Roark's Formulas for Stress and Strain, table 8.1, from memory): with E in GPa and the
+// rest in N and mm it is 1000 off, and the 384 is the formula's own, never a conversion.
+TEST_CASE("mixed units: a beam's 384 is not offered as a conversion mistaken") {
+    const std::string decl = "δ : mm\nw : kN/m\nL : mm\nE_GPa : GPa\nE : MPa\nI : mm^4\n";
+    const auto r = plumb::check_text("b.plumb", decl + "δ = 5*w*L^4/(384*E_GPa*I)\n");
+    const auto scales = findings(r, plumb::rules::unit_scale);
+    REQUIRE(scales.size() == 1);
+    CHECK(mentions(*scales[0], "by 1000"));
+    CHECK_FALSE(mentions(*scales[0], "if 384 was meant as the conversion"));
+    const auto right = plumb::check_text("b.plumb", decl + "δ = 5*w*L^4/(384*E*I)\n");
+    CHECK(findings(right, plumb::rules::unit_scale).empty());
+    CHECK(right.count(plumb::severity::error) == 0);
+}
+
 TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6") {
     const std::string decl = "Q : m^3/s\nV : m/s\nD : mm\n";
     const auto r = plumb::check_text("q.plumb", decl + "Q = V*pi*D^2/4\n");
