@@ -182,6 +182,24 @@ TEST_CASE("mixed units: a beam's 384 is not offered as a conversion mistaken") {
     CHECK(right.count(plumb::severity::error) == 0);
 }
 
+// A year's output from an hourly or daily rate and the days or hours a plant runs: t/h × 24 ×
+// 330 d, kW × 8000 h (common practice). The number stands in for the year's 365 days or 8760
+// hours (NIST SP 811 (2008), B.8: 1 d = 24 h); a year's number that still leaves the day's 24
+// out, or one in the wrong range, is still a finding.
+TEST_CASE("mixed units: the days or hours a plant runs in a year stand in for the year") {
+    const std::string decl = "m_f : t/h\nm_d : t/d\nm_yr : t/yr\nP : kW\nE : kWh/yr\n";
+    const auto right =
+        plumb::check_text("y.plumb", decl + "m_yr = m_f*24*330\nE = P*8000\nm_yr = m_d*350\n");
+    CHECK(right.count(plumb::severity::error) + right.count(plumb::severity::warning) == 0);
+    const auto notes = findings(right, plumb::rules::trade_constant);
+    REQUIRE(notes.size() == 3);
+    CHECK(mentions(*notes[0], "days a year the plant runs"));
+    CHECK(mentions(*notes[1], "hours a year the plant runs"));
+    const auto wrong = plumb::check_text(
+        "y.plumb", decl + "m_yr = m_f*330\nm_yr = m_f*24*36\nE = P*365\nm_yr = m_d*8000\n");
+    CHECK(findings(wrong, plumb::rules::unit_scale).size() == 4);
+}
+
 TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6") {
     const std::string decl = "Q : m^3/s\nV : m/s\nD : mm\n";
     const auto r = plumb::check_text("q.plumb", decl + "Q = V*pi*D^2/4\n");

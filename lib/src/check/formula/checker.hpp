@@ -1195,6 +1195,7 @@ class checker {
     static std::span<const folded_constant> folded_constants();
     bool may_hold_a_half(const operand& term) const;
     bool squares_something(std::uint32_t node) const;
+    bool accept_operating_time(std::span<const scaled_operand> parts, double& unit);
     bool accept_folded_coefficient(std::span<const operand> ops, std::span<const std::size_t> index,
                                    std::span<const scaled_operand> parts, double& unit);
     static scale_literal exact_conversion_literal(const scale_literal& l, const rational& value);

@@ -187,6 +187,58 @@ bool checker::squares_something(std::uint32_t node) const {
     });
 }
 
+// "m_yr = m_f*24*330", "E = P*8000" into a year's total: a whole number of days (200 to 366)
+// where the units need a year's 365, or of hours (2000 to 8784) where they need its 8760, is
+// the days or hours the plant runs in a year (common practice), not a conversion mistaken.
+// Read so with a note, where it is the only number standing in for the year.
+bool checker::accept_operating_time(std::span<const scaled_operand> parts, double& unit) {
+    constexpr std::size_t most_numbers = 8;
+    std::array<scale_literal, most_numbers> changed_literals{};
+    std::vector<scaled_operand> changed;
+    for (std::size_t i = 0; i < parts.size(); ++i) {
+        if (parts[i].literals.size() > most_numbers)
+            continue;
+        for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
+            const scale_literal& l = parts[i].literals[k];
+            if (l.exponent != 1.0 || l.value != std::round(l.value) ||
+                file_.nodes[l.node].kind != expr_kind::number)
+                continue;
+            const bool days = l.value >= 200.0 && l.value <= 366.0;
+            const bool hours = l.value >= 2000.0 && l.value <= 8784.0;
+            if (!days && !hours)
+                continue;
+            scale_literal year = l;
+            year.value = days ? 365.0 : 8760.0;
+            year.tolerance = days ? 1.0 / 365.0 : 24.0 / 8760.0; // 365 or 366 days
+            year.low = rational(days ? 365 : 8760);
+            year.high = rational(days ? 366 : 8784);
+            year.power_of_ten = false;
+            std::copy(parts[i].literals.begin(), parts[i].literals.end(), changed_literals.begin());
+            changed_literals[k] = year;
+            changed.assign(parts.begin(), parts.end());
+            changed[i].literals = {changed_literals.data(), parts[i].literals.size()};
+            const reconciliation r = reconcile(changed);
+            if (!r.agree)
+                continue;
+            unit = r.unit;
+            diagnostic& d = report(
+                rules::trade_constant,
+                fmt::format("{} is read as the {} a year the plant runs, in place of the year's "
+                            "{}",
+                            text(file_.nodes[l.node].range), days ? "days" : "hours",
+                            days ? "365 days" : "8760 hours"),
+                file_.nodes[l.node].range);
+            d.level = severity::note;
+            d.notes.push_back({fmt::format("declare it with its unit ({} : {} = {}) to say so",
+                                           days ? "n_d" : "t_run", days ? "d/yr" : "h/yr",
+                                           text(file_.nodes[l.node].range)),
+                               {}});
+            return true;
+        }
+    }
+    return false;
+}
+
 bool checker::accept_folded_coefficient(std::span<const operand> ops,
                                         std::span<const std::size_t> index,
                                         std::span<const scaled_operand> parts, double& unit) {

@@ -256,6 +256,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     if (parts.size() <= max_operands_for_flips &&
         accept_folded_coefficient(ops, index, parts, unit))
         return true;
+    if (parts.size() <= max_operands_for_flips && accept_operating_time(parts, unit)) [[unlikely]]
+        return true;
     if (parts.size() <= max_operands_for_flips && report_angle_conversion(ops, index, parts, true))
         [[unlikely]]
         return false;
