@@ -745,7 +745,13 @@ TEST_CASE("gas volumes at two reference temperatures converted by the volume fac
                             "at 60 °F and '35.31*V_n' at 0 °C"));
     passes(gas, {"V_us = 37.3*V_n", "V_us = 37.33*V_n", "V_us = 35.31*V_s", "V_us = 35.38*V_s",
                  "V_s = 1.055*V_n", "V_m = V_n*24*37.3/1000", "V_n = V_us/37.3"});
-    passes(gas, {"V_n = V_s*273.15/288.15"});
+    passes(gas, {"V_n = V_s*273.15/288.15", "V_s = V_n*288.15/273.15", "V_n = 0.948*V_s"});
+    // The temperatures' ratio turned over is 1.0549² = 11.3 % off, and said so.
+    fails_with(gas, {"V_n = V_s*288.15/273.15", "V_n = V_s*1.0549", "V_s = V_n*273.15/288.15"},
+               plumb::rules::unit_scale);
+    CHECK(plumb::test::says(
+        first_under(run(gas, "V_n = V_s*288.15/273.15"), plumb::rules::unit_scale),
+        "turned over: as written the result is 11.3 % off"));
     // A standard cubic foot the description puts at 68 °F (the US EPA's, 40 CFR 60.2, from
     // memory): 1 scfm = 60 × 0.0283168 × 273.15/293.15 = 1.583 Nm³/h, and the volume factor
     // 1.699 alone is 7.3 % off; the warning names the stated temperature.
