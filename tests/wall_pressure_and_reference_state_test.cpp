@@ -588,6 +588,22 @@ TEST_CASE("a gauge reading in a pressure ratio is told to add the site's declare
                             "add the atmospheric pressure"));
 }
 
+// A head of water above a point is the pressure above the atmosphere there over ρ·g (common
+// practice): from a non-vented piezometer, which reads absolute, the barometer comes off
+// first, or the head is some 10 m of water too high. NPSH's (p_abs - p_v)/(ρ·g) and a water
+// barometer's own column are no such slip.
+TEST_CASE("a head from an absolute pressure alone is told to take the barometer off") {
+    const std::string piezometer = "p_pz : kPa \"piezometer reading, absolute\"\n"
+                                   "p_b : kPa \"site barometric pressure, 99.6 kPa\"\n"
+                                   "p_v : kPa \"vapour pressure, absolute\"\n"
+                                   "γ_w : kN/m^3\nρ_w : kg/m^3\nh_pz, NPSH, h_b : m\n";
+    const auto r = run(piezometer, "h_pz = p_pz/γ_w");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale), "write (p_pz - p_b)"));
+    fails_with(piezometer, {"h_pz = p_pz*1000/(ρ_w*{g_n})"}, plumb::rules::offset_scale);
+    passes(piezometer, {"h_pz = (p_pz - p_b)/γ_w", "NPSH = (p_pz - p_v)/γ_w", "h_b = p_b/γ_w"});
+}
+
 // A gauge reading plus the barometer is absolute (common practice); the atmosphere added
 // again as a number counts it twice, 101 kPa high. This passed without a word.
 TEST_CASE("a gauge reading plus the barometer and the atmosphere again") {

@@ -314,6 +314,11 @@ void checker::check_formula(const syntax::formula& f) {
                 (sides[0].type.absolute_pressure_difference ||
                  sides[1].type.absolute_pressure_difference)) [[unlikely]]
                 report_absolute_set_to_difference(sides);
+            if (equation && sides.size() == 2 && out_.size() == findings_before &&
+                sides[0].type.known && sides[0].type.dim == length_dimension() &&
+                (file_.nodes[sides[1].node].kind == expr_kind::divide ||
+                 file_.nodes[sides[0].node].kind == expr_kind::divide)) [[unlikely]]
+                report_head_from_absolute(sides);
         }
         return;
     }

@@ -762,6 +762,59 @@ bool checker::report_share_of_gauge_beside_absolute(std::span<const operand> ter
     return true;
 }
 
+// "h_pz = p_pz*1000/(ρ_w*g)" with p_pz absolute (a non-vented piezometer): over ρ·g an
+// absolute pressure is the column that would stand above a vacuum, some 10 m of water more
+// than the head above the point, which takes the pressure above the atmosphere (common
+// practice). Only a head set equal to one absolute reading over the rest, no other pressure;
+// "(p_pz - p_b)*1000/(ρ*g)" and NPSH's (p_abs - p_v)/(ρ*g) take a difference first.
+void checker::report_head_from_absolute(std::span<const operand> sides) {
+    for (std::size_t k = 0; k < 2; ++k) {
+        const std::uint32_t head = syntax::inside_brackets(file_, sides[k].node);
+        const std::uint32_t column = syntax::inside_brackets(file_, sides[1 - k].node);
+        if (file_.nodes[head].kind != expr_kind::symbol ||
+            file_.nodes[column].kind != expr_kind::divide)
+            continue;
+        const std::string_view head_name = text(file_.nodes[head].range);
+        const symbol_entry* h = symbols_.find(head_name);
+        if (h == nullptr || names_the_atmosphere(head_name, h->description) || said_absolute(*h))
+            continue;
+        std::uint32_t reading = syntax::no_index;
+        bool other = false;
+        for_each_factor(column, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind != expr_kind::symbol)
+                return false;
+            const std::string_view name = text(n.range);
+            const symbol_entry* e = symbols_.find(name);
+            if (e == nullptr || !e->compact_dim || !(*e->compact_dim == pressure_dimension()))
+                return false;
+            if (sign < 0 || reading != syntax::no_index || e->offset_unit != nullptr ||
+                !said_absolute(*e) || names_the_atmosphere(name, e->description))
+                return other = true;
+            reading = at;
+            return false;
+        });
+        if (other || reading == syntax::no_index)
+            continue;
+        const symbol_entry& e = *symbols_.find(text(file_.nodes[reading].range));
+        const std::optional<std::string_view> barometer = barometer_in_unit(e.si_factor);
+        diagnostic& d = report(
+            rules::offset_scale,
+            fmt::format("{} is an absolute pressure: as a column it counts from a vacuum, about "
+                        "10 m of water more than the head {} above the atmosphere",
+                        quote(reading), quote(head)),
+            file_.nodes[sides[1 - k].node].range);
+        d.level = severity::warning;
+        d.notes.push_back(
+            {fmt::format("a head takes the pressure above the atmosphere: write ({} - {})",
+                         display_text(file_.nodes[reading].range),
+                         barometer ? std::string(*barometer)
+                                   : fmt::format("the atmospheric pressure in {}", e.unit_text)),
+             {}});
+        return;
+    }
+}
+
 // "p_abs = (q/K)^2", "p_bot = ρ*g*h" with p_abs called absolute (psia, bar a, or "absolute" in
 // its words): a drop across an orifice or a column of liquid is the pressure above what lies
 // at its far end, the atmosphere for a sprinkler head or an open tank, so alone it gives a
