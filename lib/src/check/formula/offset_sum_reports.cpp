@@ -774,27 +774,45 @@ void checker::report_head_from_absolute(std::span<const operand> sides) {
         if (file_.nodes[head].kind != expr_kind::symbol ||
             file_.nodes[column].kind != expr_kind::divide)
             continue;
+        // The pressures among the column's factors, walked with a small stack of its own: the
+        // rule is asked of many a length, and almost every one has no absolute reading.
+        std::array<std::pair<std::uint32_t, int>, 16> pending{};
+        std::size_t count = 0;
+        pending[count++] = {column, 1};
+        std::uint32_t reading = syntax::no_index;
+        bool other = false;
+        while (count > 0 && !other) {
+            const auto [at, sign] = pending[--count];
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::multiply || n.kind == expr_kind::divide) {
+                if (count + 2 > pending.size()) {
+                    other = true;
+                    break;
+                }
+                pending[count++] = {n.lhs, sign};
+                pending[count++] = {n.rhs, n.kind == expr_kind::divide ? -sign : sign};
+                continue;
+            }
+            if (n.kind == expr_kind::group) {
+                pending[count++] = {n.lhs, sign};
+                continue;
+            }
+            if (n.kind != expr_kind::symbol)
+                continue;
+            const symbol_entry* e = symbols_.find(text(n.range));
+            if (e == nullptr || !e->compact_dim || !(*e->compact_dim == pressure_dimension()))
+                continue;
+            if (sign < 0 || reading != syntax::no_index || e->offset_unit != nullptr ||
+                !said_absolute(*e) || names_the_atmosphere(text(n.range), e->description))
+                other = true;
+            else
+                reading = at;
+        }
+        if (other || reading == syntax::no_index)
+            continue;
         const std::string_view head_name = text(file_.nodes[head].range);
         const symbol_entry* h = symbols_.find(head_name);
         if (h == nullptr || names_the_atmosphere(head_name, h->description) || said_absolute(*h))
-            continue;
-        std::uint32_t reading = syntax::no_index;
-        bool other = false;
-        for_each_factor(column, [&](std::uint32_t at, int sign) {
-            const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind != expr_kind::symbol)
-                return false;
-            const std::string_view name = text(n.range);
-            const symbol_entry* e = symbols_.find(name);
-            if (e == nullptr || !e->compact_dim || !(*e->compact_dim == pressure_dimension()))
-                return false;
-            if (sign < 0 || reading != syntax::no_index || e->offset_unit != nullptr ||
-                !said_absolute(*e) || names_the_atmosphere(name, e->description))
-                return other = true;
-            reading = at;
-            return false;
-        });
-        if (other || reading == syntax::no_index)
             continue;
         const symbol_entry& e = *symbols_.find(text(file_.nodes[reading].range));
         const std::optional<std::string_view> barometer = barometer_in_unit(e.si_factor);
