@@ -200,6 +200,23 @@ TEST_CASE("mixed units: the days or hours a plant runs in a year stand in for th
     CHECK(findings(wrong, plumb::rules::unit_scale).size() == 4);
 }
 
+// Water's kinematic viscosity, ν = 0.0178 St/(1 + 0.0337·t + 0.000221·t²) with t in °C
+// (Poiseuille's fit, as water-treatment handbooks print it; from memory): coefficients marked
+// as fitted (?) in a bracket from 1 are a fit made on the °C scale. Without the marks, or
+// outside such a bracket, the reading is still an error.
+TEST_CASE("offset scales: a fit from 1 with coefficients marked ? takes the °C reading") {
+    const std::string decl = "t : \u00B0C\n\u03BD : m^2/s\n";
+    const auto fit = plumb::check_text(
+        "f.plumb", decl + "\u03BD = 0.0178 {St}/(1 + 0.0337?*t + 0.000221?*t^2)\n");
+    CHECK(fit.count(plumb::severity::error) == 0);
+    REQUIRE(findings(fit, plumb::rules::trade_constant).size() == 1);
+    CHECK(mentions(*findings(fit, plumb::rules::trade_constant)[0], "made on the \u00B0C scale"));
+    const auto outside =
+        plumb::check_text("f.plumb", decl + "\u03BD = 0.0178 {St}/(2 + 0.0337?*t)\n"
+                                            "\u03BD = 0.0178 {St}*0.0337?*t\n");
+    CHECK(findings(outside, plumb::rules::offset_scale).size() == 2);
+}
+
 TEST_CASE("mixed units: a diameter in mm beside a flow in m^3/s is off by 10^6") {
     const std::string decl = "Q : m^3/s\nV : m/s\nD : mm\n";
     const auto r = plumb::check_text("q.plumb", decl + "Q = V*pi*D^2/4\n");

@@ -951,13 +951,17 @@ typed_term checker::eval_factors(std::uint32_t index) {
         }
         // R_0*(1 + α*t) with R_0 at 0 °C: see reading_from_ice_point_reference.
         if (!divided && (factor->offset != nullptr) != (result.offset != nullptr)) [[unlikely]] {
-            if (factor->offset != nullptr && is_celsius(factor->offset) && result.known &&
-                result.dim == per_kelvin && reading_from_ice_point_reference(op.rhs)) {
+            if (factor->offset != nullptr && is_celsius(factor->offset) &&
+                ((result.known && result.dim == per_kelvin) ||
+                 (!result.known && result.inferred)) &&
+                reading_from_ice_point_reference(op.rhs)) {
                 if (factor != reinterpret_cast<const typed_term*>(evaluated))
                     factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
                 read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
-            } else if (result.offset != nullptr && is_celsius(result.offset) && factor->known &&
-                       factor->dim == per_kelvin && reading_from_ice_point_reference(offset_node)) {
+            } else if (result.offset != nullptr && is_celsius(result.offset) &&
+                       ((factor->known && factor->dim == per_kelvin) ||
+                        (!factor->known && factor->inferred)) &&
+                       reading_from_ice_point_reference(offset_node)) {
                 read_as_rise(result);
             }
         }

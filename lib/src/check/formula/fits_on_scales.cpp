@@ -693,34 +693,53 @@ bool checker::described_at_ice_point(std::string_view description) {
 // each formula. R_20*(1 + α*t) stays an error: its t must be counted from 20 °C.
 bool checker::reading_from_ice_point_reference(std::uint32_t reading_node) {
     const span at = file_.nodes[reading_node].range;
+    // 1 + α·t: a bracketed sum, holding the reading, whose leading term is the number 1.
+    const auto from_one = [&](const syntax::expr_node& g) {
+        if (g.kind != expr_kind::group || at.begin < g.range.begin || at.end > g.range.end)
+            return false;
+        std::uint32_t lead = syntax::inside_brackets(file_, g.lhs);
+        if (file_.nodes[lead].kind != expr_kind::add &&
+            file_.nodes[lead].kind != expr_kind::subtract)
+            return false;
+        while (file_.nodes[lead].kind == expr_kind::add ||
+               file_.nodes[lead].kind == expr_kind::subtract)
+            lead = syntax::inside_brackets(file_, file_.nodes[lead].lhs);
+        return file_.nodes[lead].kind == expr_kind::number && text(file_.nodes[lead].range) == "1";
+    };
     std::optional<std::uint32_t> reference;
+    bool fitted = false;
     visit_nodes([&](const syntax::expr_node& n) {
-        if (reference || n.kind != expr_kind::multiply)
+        if (reference)
+            return;
+        // "ν = 0.0178 {St}/(1 + 0.0337?*t + 0.000221?*t^2)": coefficients marked as fitted in
+        // a bracket from 1 are a fit made on the scale the reading is in (Poiseuille's for
+        // water's viscosity, as the handbooks print it; from memory).
+        if (!fitted && from_one(n) &&
+            syntax::search_subtree(file_, n.lhs, [](std::uint32_t, const syntax::expr_node& k) {
+                return k.kind == expr_kind::inferred ? search_step::found : search_step::descend;
+            }))
+            fitted = true;
+        if (n.kind != expr_kind::multiply)
             return;
         for (const auto& [symbol, bracket] : {std::pair{n.lhs, n.rhs}, std::pair{n.rhs, n.lhs}}) {
             const syntax::expr_node& s = file_.nodes[syntax::inside_brackets(file_, symbol)];
-            const syntax::expr_node& g = file_.nodes[bracket];
-            if (s.kind != expr_kind::symbol || g.kind != expr_kind::group ||
-                at.begin < g.range.begin || at.end > g.range.end)
+            if (s.kind != expr_kind::symbol || !from_one(file_.nodes[bracket]))
                 continue;
             const symbol_entry* e = symbols_.find(text(s.range));
-            if (e == nullptr || !described_at_ice_point(e->description))
-                continue;
-            // 1 + α·t: a sum whose leading term is the number 1.
-            std::uint32_t lead = syntax::inside_brackets(file_, g.lhs);
-            while (file_.nodes[lead].kind == expr_kind::add ||
-                   file_.nodes[lead].kind == expr_kind::subtract)
-                lead = syntax::inside_brackets(file_, file_.nodes[lead].lhs);
-            if (file_.nodes[lead].kind == expr_kind::number && text(file_.nodes[lead].range) == "1")
+            if (e != nullptr && described_at_ice_point(e->description))
                 reference = syntax::inside_brackets(file_, symbol);
         }
     });
-    if (!reference)
+    if (!reference && !fitted)
         return false;
     // Once for each formula, though its readings may be read more than once.
-    std::string message = fmt::format("{} is read as the rise above 0 \u00B0C, the temperature "
-                                      "{} is taken at",
-                                      quote(reading_node), quote(*reference));
+    std::string message =
+        reference ? fmt::format("{} is read as the rise above 0 \u00B0C, the temperature {} is "
+                                "taken at",
+                                quote(reading_node), quote(*reference))
+                  : fmt::format("{} is read as counted from 0 \u00B0C, in a fit whose "
+                                "coefficients (marked ?) were made on the \u00B0C scale",
+                                quote(reading_node));
     const std::uint32_t begins = file_.nodes[file_.sides[current_->first_side].root].range.begin;
     const std::size_t since = out_.size() > 8 ? out_.size() - 8 : 0;
     if (std::none_of(out_.begin() + static_cast<std::ptrdiff_t>(since), out_.end(),
@@ -730,8 +749,11 @@ bool checker::reading_from_ice_point_reference(std::uint32_t reading_node) {
         diagnostic& d =
             report(rules::trade_constant, std::move(message), file_.nodes[reading_node].range);
         d.level = severity::note;
-        d.notes.push_back({"write (t - 0 {\u00B0C}) to say so; a reference taken at another "
-                           "temperature needs the difference from it, (t - t_ref)",
+        d.notes.push_back({reference ? "write (t - 0 {\u00B0C}) to say so; a reference taken at "
+                                       "another temperature needs the difference from it, "
+                                       "(t - t_ref)"
+                                     : "the fit holds only with the reading in \u00B0C, as "
+                                       "published; write (t - 0 {\u00B0C}) to say so",
                            {}});
     }
     return true;
