@@ -604,6 +604,17 @@ TEST_CASE("a head from an absolute pressure alone is told to take the barometer 
     passes(piezometer, {"h_pz = (p_pz - p_b)/γ_w", "NPSH = (p_pz - p_v)/γ_w", "h_b = p_b/γ_w"});
 }
 
+// The barometer a file declares at sea level (a ship's, 1.013 bar) is still the one to add to
+// a gauge reading, in the reading's unit (1 bar = 100 kPa, NIST SP 811 (2008), B.8).
+TEST_CASE("a gauge reading's advice names the declared barometer in another unit") {
+    const std::string ship = "p_b : bar \"ship's barometric pressure, 1.013 bar\"\n"
+                             "p_ev_g : kPag\np_sat : kPa\np_s : barg\np_v : bar\nΔp : bar\n";
+    const auto r = run(ship, "p_ev_g <= p_sat");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale), "(p_ev_g + p_b*100)"));
+    const auto n = run(ship, "Δp = p_s - p_v");
+    CHECK(plumb::test::says(first_under(n, plumb::rules::offset_scale), "write (p_s + p_b)"));
+}
+
 // A gauge reading plus the barometer is absolute (common practice); the atmosphere added
 // again as a number counts it twice, 101 kPa high. This passed without a word.
 TEST_CASE("a gauge reading plus the barometer and the atmosphere again") {
@@ -873,14 +884,15 @@ TEST_CASE("the barometer added to a pressure already absolute") {
 }
 
 // A gauge reading set equal to an absolute pressure is told what to add: the barometer the
-// file declares in the reading's unit, or the words for it, never a symbol in another unit
-// (1 bar = 14.5038 psi; NIST SP 811 (2008), B.8). A reference temperature beside °R readings
-// is declared in °R (60 °F = 519.67 °R, NIST SP 811, 4.2.1.1).
+// file declares in the reading's unit, or the one in another unit with its conversion, never
+// a symbol in another unit bare (1 bar = 14.5038 psi; NIST SP 811 (2008), B.8). A reference
+// temperature beside °R readings is declared in °R (60 °F = 519.67 °R, NIST SP 811, 4.2.1.1).
 TEST_CASE("the advice names an atmosphere in the reading's unit, and a reference in its system") {
     const std::string bar_only = "p_atm : bar \"atmospheric pressure\"\np_pu : psia\np_g : psig\n";
     const auto words = run(bar_only, "p_pu = p_g");
     CHECK(plumb::test::says(first_under(words, plumb::rules::offset_scale),
-                            "write (p_g + the atmospheric pressure in psi)"));
+                            "write (p_g + p_atm*14.5038)"));
+    CHECK(!plumb::test::says(first_under(words, plumb::rules::offset_scale), "(p_g + p_atm)"));
     const std::string psi_too = bar_only + "p_b : psia \"site barometric pressure\"\n";
     const auto named = run(psi_too, "p_pu = p_g");
     CHECK(plumb::test::says(first_under(named, plumb::rules::offset_scale), "write (p_g + p_b)"));

@@ -1027,6 +1027,9 @@ class checker {
     void report_atmosphere_not_the_site(std::uint32_t number, std::string_view what, double pascals,
                                         const site_barometer& site, double unit,
                                         bool added_to_gauge = true, bool number_subtracted = false);
+    bool declares_a_barometer(const syntax::declaration& decl) const;
+    std::optional<std::string> barometer_converted_to(double unit) const;
+    std::string barometer_advice(std::uint32_t reading, double unit) const;
     std::optional<std::string_view> barometer_in_unit(double unit) const;
     std::string atmosphere_in(double unit, std::string_view unit_name) const;
     std::optional<std::string> site_atmosphere_advice(std::string_view reading, double unit,

@@ -225,9 +225,8 @@ void checker::warn_atmosphere_number_at_site(std::span<const operand> terms, dou
 // What to add to a gauge reading in `unit` to make it absolute: the barometer declared in
 // that unit, or the words for it (a symbol in another unit would be the next slip).
 std::string checker::atmosphere_in(double unit, std::string_view unit_name) const {
-    if (std::isfinite(unit))
-        if (const auto name = barometer_in_unit(unit))
-            return std::string(*name);
+    if (std::optional<std::string> barometer = barometer_converted_to(unit))
+        return std::move(*barometer);
     return fmt::format("the atmospheric pressure in {}", unit_name);
 }
 
@@ -263,36 +262,68 @@ std::optional<std::string_view> checker::barometer_in_unit(double unit) const {
     if (!site_barometer_.name.empty() && std::isfinite(unit) && unit > 0.0 &&
         std::abs(site_barometer_.unit / unit - 1.0) < 1e-9 && !file_.barometer)
         return site_barometer_.name;
+    for (const syntax::declaration& decl : file_.declarations)
+        if (std::abs(decl.kind.si_factor / unit - 1.0) <= 1e-9 && declares_a_barometer(decl))
+            return text(file_.names[decl.first_name].name);
+    return std::nullopt;
+}
+
+// A declaration of one pressure symbol that is the barometer: named for the atmosphere or
+// described as the barometer or the atmospheric pressure.
+bool checker::declares_a_barometer(const syntax::declaration& decl) const {
+    if (!decl.kind.dim || decl.name_count != 1 ||
+        (decl.kind.single_unit != nullptr && decl.kind.single_unit->offset != 0.0))
+        return false;
+    const std::optional<compact_dimension> dim = compact_dimension::fitted(*decl.kind.dim);
+    const std::string_view name = text(file_.names[decl.first_name].name);
+    const std::string_view description = text(decl.description);
+    // A differential "vented to atmosphere" names it but is none.
+    const bool differential = name.starts_with("\u0394") || name.starts_with("d") ||
+                              description.find("differential") != std::string_view::npos ||
+                              description.find("drop") != std::string_view::npos;
+    // Named for it, or described as the barometer or the atmospheric pressure; not a
+    // pressure described as some reading "plus the atmosphere".
+    // Not a name alone where the words call it some other pressure ("P_atm : atm
+    // "saturator pressure, absolute, in atmospheres"").
+    const bool described = description.find("barometr") != std::string_view::npos ||
+                           description.find("barometer") != std::string_view::npos ||
+                           description.find("atmospheric pressure") != std::string_view::npos ||
+                           description.find("ambient pressure") != std::string_view::npos;
+    const bool barometer = described || (names_the_atmosphere(name, {}) &&
+                                         description.find("pressure") == std::string_view::npos);
+    return dim && *dim == pressure_dimension() && barometer && !differential &&
+           description.find("standard") == std::string_view::npos &&
+           description.find("gauge") == std::string_view::npos &&
+           description.find("below") == std::string_view::npos &&
+           description.find("above") == std::string_view::npos &&
+           description.find("vacuum") == std::string_view::npos;
+}
+
+// The advice for a gauge reading beside absolute ones where the file declares no site
+// barometer: its barometer at sea level, where it declares one, in the reading's unit.
+std::string checker::barometer_advice(std::uint32_t reading, double unit) const {
+    if (const std::optional<std::string> barometer = barometer_converted_to(unit);
+        barometer && file_.nodes[syntax::inside_brackets(file_, reading)].kind == expr_kind::symbol)
+        return fmt::format("convert first: a gauge reading plus the barometer is absolute: "
+                           "write ({} + {})",
+                           display_text(file_.nodes[reading].range), *barometer);
+    return "convert first: a gauge reading plus the atmospheric pressure is absolute";
+}
+
+// "p_b*100": the barometer the file declares, in `unit`, where it is declared in another
+// (bar beside kPa); empty where the file declares none.
+std::optional<std::string> checker::barometer_converted_to(double unit) const {
+    if (!std::isfinite(unit) || !(unit > 0.0))
+        return std::nullopt;
+    if (const auto name = barometer_in_unit(unit))
+        return std::string(*name);
     for (const syntax::declaration& decl : file_.declarations) {
-        if (!decl.kind.dim || decl.name_count != 1 ||
-            std::abs(decl.kind.si_factor / unit - 1.0) > 1e-9 ||
-            (decl.kind.single_unit != nullptr && decl.kind.single_unit->offset != 0.0))
+        if (!declares_a_barometer(decl) || !(decl.kind.si_factor > 0.0))
             continue;
-        const std::optional<compact_dimension> dim = compact_dimension::fitted(*decl.kind.dim);
         const std::string_view name = text(file_.names[decl.first_name].name);
-        const std::string_view description = text(decl.description);
-        // A differential "vented to atmosphere" names it but is none.
-        const bool differential = name.starts_with("\u0394") || name.starts_with("d") ||
-                                  description.find("differential") != std::string_view::npos ||
-                                  description.find("drop") != std::string_view::npos;
-        // Named for it, or described as the barometer or the atmospheric pressure; not a
-        // pressure described as some reading "plus the atmosphere".
-        // Not a name alone where the words call it some other pressure ("P_atm : atm
-        // "saturator pressure, absolute, in atmospheres"").
-        const bool described = description.find("barometr") != std::string_view::npos ||
-                               description.find("barometer") != std::string_view::npos ||
-                               description.find("atmospheric pressure") != std::string_view::npos ||
-                               description.find("ambient pressure") != std::string_view::npos;
-        const bool barometer =
-            described || (names_the_atmosphere(name, {}) &&
-                          description.find("pressure") == std::string_view::npos);
-        if (dim && *dim == pressure_dimension() && barometer && !differential &&
-            description.find("standard") == std::string_view::npos &&
-            description.find("gauge") == std::string_view::npos &&
-            description.find("below") == std::string_view::npos &&
-            description.find("above") == std::string_view::npos &&
-            description.find("vacuum") == std::string_view::npos)
-            return name;
+        const double factor = decl.kind.si_factor / unit;
+        return factor >= 1.0 ? fmt::format("{}*{}", name, format_factor(factor))
+                             : fmt::format("{}/{}", name, format_factor(1.0 / factor));
     }
     return std::nullopt;
 }
@@ -571,14 +602,12 @@ void checker::report_mixed_scales(std::span<const operand> terms, double differe
         {temperature && other_scale != nullptr && other_scale != &unit
              ? fmt::format("convert first: take both readings to one scale, {} or {}", unit.symbol,
                            other_scale->symbol)
-         : temperature
-             ? fmt::format("convert first: a {} reading plus {:g} is in {}", unit.symbol,
-                           unit.offset / unit.factor,
-                           std::abs(unit.factor - 1.0) < 1e-12 ? "K" : "degrees Rankine")
-             : site_atmosphere_advice(display_text(file_.nodes[on_offset->node].range),
-                                      numbers_unit, numbers_unit_name)
-                   .value_or("convert first: a gauge reading plus the atmospheric pressure is "
-                             "absolute"),
+         : temperature ? fmt::format("convert first: a {} reading plus {:g} is in {}", unit.symbol,
+                                     unit.offset / unit.factor,
+                                     std::abs(unit.factor - 1.0) < 1e-12 ? "K" : "degrees Rankine")
+                       : site_atmosphere_advice(display_text(file_.nodes[on_offset->node].range),
+                                                numbers_unit, numbers_unit_name)
+                             .value_or(barometer_advice(on_offset->node, numbers_unit)),
          {}});
 }
 
