@@ -579,6 +579,22 @@ TEST_CASE("under an exponent that is not a constant number the base's units must
     const auto r = run(decl, "v_hub = v_ref*(h_ft/h_ref)^α");
     REQUIRE(count_of(r, plumb::rules::unit_scale) == 1);
     CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "do not cancel"));
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale),
+                            "divide '(h_ft/h_ref)' by 3.28084"));
+}
+
+// Arrhenius's k = A·exp(-E_a/(R·T)) with E_a in kJ/mol beside R in J/(mol·K) (CODATA 2018's R),
+// and a jacket's exp(U·A/(ṁ·c_p)) with c_p in kJ/(kg·K): the argument is off by 1000 one way
+// or the other, and the advice says which (1 kJ = 1000 J, SI Brochure 9th ed., table 7).
+TEST_CASE("an argument whose units do not cancel is told the factor, the right way round") {
+    const std::string decl = "k, A_f : 1/s\nE_a : kJ/mol\nR_g : J/(mol*K)\nT : K\nK_j : 1\n"
+                             "U : W/(m^2*K)\nA : m^2\nm : kg/s\nc_o : kJ/(kg*K)\n";
+    const auto arrhenius = run(decl, "k = A_f*exp(-E_a/(R_g*T))");
+    CHECK(plumb::test::says(first_under(arrhenius, plumb::rules::unit_scale),
+                            "multiply '-E_a/(R_g*T)' by 1000"));
+    const auto jacket = run(decl, "K_j = exp(U*A/(m*c_o))");
+    CHECK(plumb::test::says(first_under(jacket, plumb::rules::unit_scale),
+                            "divide 'U*A/(m*c_o)' by 1000"));
 }
 
 // The temperature correction k_T = k_20·θ^(T − 20), T in °C, θ ≈ 1.024-1.08 (common

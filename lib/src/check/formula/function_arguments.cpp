@@ -31,6 +31,18 @@ diagnostic* checker::report_units_not_cancelling(const operand& a, std::string_v
     const std::string units = units_in(a.node);
     if (!units.empty())
         d.notes.push_back({units, {}});
+    // The fix, as a factor to write into the argument: its number times the size of the unit
+    // it is in ("divide ... by 1000" where kJ stands below for J).
+    // Not for degrees, whose note (write sin(θ*π/180)) comes with the trigonometric rule.
+    const double unit = apparent_scale(parts[0]);
+    const double degree = std::numbers::pi / 180.0;
+    if (std::isfinite(unit) && unit > 0.0 && std::abs(unit / degree - 1.0) > 1e-9 &&
+        std::abs(unit * degree - 1.0) > 1e-9)
+        d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
+                                       "write the conversion factor into it)",
+                                       unit > 1.0 ? "multiply" : "divide", quote(a.node),
+                                       format_factor(unit > 1.0 ? unit : 1.0 / unit)),
+                           {}});
     return &d;
 }
 
