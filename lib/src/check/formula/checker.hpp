@@ -1278,6 +1278,18 @@ class checker {
     std::pair<double, std::string> unit_of_numbers(const typed_term& t,
                                                    const unit_definition& scale) const;
     bool mixes_units_of_one_kind(std::uint32_t root) const;
+    // Whether a declared symbol of the formula being checked passes `test(name, entry)`.
+    template <typename Test> bool formula_has_symbol(Test&& test) const {
+        bool found = false;
+        visit_nodes([&](const syntax::expr_node& n) {
+            if (found || n.kind != expr_kind::symbol)
+                return;
+            const std::string_view name = text(n.range);
+            const symbol_entry* e = symbols_.find(name);
+            found = e != nullptr && test(name, *e);
+        });
+        return found;
+    }
     template <typename F> void visit_nodes(F&& f) const {
         // An expression on its own (expression_dimension: a query, or a side's dimension for
         // the list of formulas) belongs to no formula.

@@ -19,40 +19,28 @@ bool checker::heat_capacity_in_formula(const compact_dimension& partner) const {
     const compact_dimension heat = partner * temperature;
     if (!(heat == pressure) && !(heat == velocity_squared_dim) && !(heat == energy_dim))
         return false;
-    bool found = false;
-    visit_nodes([&](const syntax::expr_node& n) {
-        if (found || n.kind != expr_kind::symbol)
-            return;
-        const std::string_view name = text(n.range);
-        const symbol_entry* e = symbols_.find(name);
-        if (e == nullptr || name.starts_with("R"))
-            return;
+    return formula_has_symbol([](std::string_view name, const symbol_entry& e) {
+        if (name.starts_with("R"))
+            return false;
         const bool named = name.starts_with("c_") || name.starts_with("cp") ||
-                           e->description.find("specific heat") != std::string_view::npos ||
-                           e->description.find("heat capacity") != std::string_view::npos;
-        found = named && e->compact_dim && *e->compact_dim == specific_heat_dim;
+                           e.description.find("specific heat") != std::string_view::npos ||
+                           e.description.find("heat capacity") != std::string_view::npos;
+        return named && e.compact_dim && *e.compact_dim == specific_heat_dim;
     });
-    return found;
 }
 
 // A symbol of the formula that is a gas constant: of a specific heat's or a molar heat's
 // dimension, named R ("R_a", "R_u") or described as one.
 bool checker::gas_constant_in_formula() const {
-    bool found = false;
-    visit_nodes([&](const syntax::expr_node& n) {
-        if (found || n.kind != expr_kind::symbol)
-            return;
-        const std::string_view name = text(n.range);
-        const symbol_entry* e = symbols_.find(name);
-        if (e == nullptr || !e->compact_dim)
-            return;
+    return formula_has_symbol([](std::string_view name, const symbol_entry& e) {
+        if (!e.compact_dim)
+            return false;
         const bool named = name == "R" || name.starts_with("R_") ||
-                           e->description.find("gas constant") != std::string_view::npos;
+                           e.description.find("gas constant") != std::string_view::npos;
         // J/(kg·K) or J/(mol·K).
         constexpr compact_dimension molar_heat = compact_dimension::whole({1, 2, -2, -1, -1, 0, 0});
-        found = named && (*e->compact_dim == specific_heat_dim || *e->compact_dim == molar_heat);
+        return named && (*e.compact_dim == specific_heat_dim || *e.compact_dim == molar_heat);
     });
-    return found;
 }
 
 // a in c_p = c_0 + a·t (kJ/(kg·K²)): the slope of a property that is itself per degree.
