@@ -963,3 +963,21 @@ TEST_CASE("sheets: a °C cell made absolute in a °F column is told the conversi
     CHECK(it->rule == plumb::rules::offset_scale);
     CHECK(plumb::test::says(*it, "write B2*1.8 + 32"));
 }
+
+// A reading less a reference number is a difference from it (degree-days over a 15 °C base,
+// a tank's temperature above the 60 °F of a volume correction; common practice): written into
+// a cell whose unit says Δ°C or Δ°F it is clean, as a symbol declared in Δ°C takes it. Into a
+// plain K cell it is still the reading's zero that is wrong.
+TEST_CASE("sheets: a reading less a number into a Δ°C or Δ°F cell is a difference") {
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Tank temperature", "24", "\u00B0C") +
+        labelled_row(3, "Over the base", "=B2-15", "\u0394\u00B0C") +
+        labelled_row(4, "Tank temperature, US", "75", "\u00B0F") +
+        labelled_row(5, "Above the standard", "=B4-60", "\u0394\u00B0F") +
+        labelled_row(6, "Tank temperature, absolute", "=B2-15", "K") + "</sheetData></worksheet>";
+    const auto found = cell_findings_of_one_sheet("Tank", sheet);
+    CHECK(std::none_of(found.begin(), found.end(), [](const std::string& f) {
+        return f.rfind("Tank!B3 ", 0) == 0 || f.rfind("Tank!B5 ", 0) == 0;
+    }));
+    CHECK(std::find(found.begin(), found.end(), "Tank!B6 offset-scale") != found.end());
+}

@@ -775,7 +775,13 @@ class workbook_checker {
             const std::uint32_t root = lowered_.tree.sides[formula.first_side].root;
             // Asked of a specific energy only (names_specific_enthalpy).
             const bool enthalpy = labelled_an_enthalpy(f.sheet, f.source->at);
-            verdict = equation_.check(root, f.written_text, written->unit, false, enthalpy);
+            // "Δ°C", "Δ°F": a temperature written for the cell as a difference, which a
+            // reading less a reference (=C6-15) gives, as a symbol declared in Δ°C takes it.
+            const bool difference_unit =
+                written->unit.offset == nullptr && written->unit.text.starts_with("\u0394") &&
+                written->unit.dim == dimension::base(base_dimension::temperature);
+            verdict =
+                equation_.check(root, f.written_text, written->unit, difference_unit, enthalpy);
             // "Range | =C6-C7 | °F": a cell whose row label says it holds a difference, and
             // whose formula computes one; a reading there ("Mean / range", =AVERAGE(...))
             // was already right as a reading.
