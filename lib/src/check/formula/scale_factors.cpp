@@ -156,6 +156,28 @@ std::span<const checker::folded_constant> checker::folded_constants() {
     return constants;
 }
 
+// Asks whether the parts' units reconcile with number k of part i read as another number,
+// keeping its buffers between questions. A part with more numbers than it holds is not asked.
+class number_swap {
+  public:
+    static constexpr std::size_t most_numbers = 8;
+
+    // The common unit's SI value where they reconcile.
+    std::optional<double> unit_with(std::span<const scaled_operand> parts, std::size_t i,
+                                    std::size_t k, const scale_literal& as) {
+        std::copy(parts[i].literals.begin(), parts[i].literals.end(), literals_.begin());
+        literals_[k] = as;
+        parts_.assign(parts.begin(), parts.end());
+        parts_[i].literals = {literals_.data(), parts[i].literals.size()};
+        const reconciliation r = reconcile(parts_);
+        return r.agree ? std::optional<double>(r.unit) : std::nullopt;
+    }
+
+  private:
+    std::array<scale_literal, most_numbers> literals_{};
+    std::vector<scaled_operand> parts_;
+};
+
 // Where a formula's own half or 2 may stand: a square (v²/(2a)), a length from a length
 // (a radius from a diameter), or two lengths in one product (the hoop stress p·D/(2t)).
 bool checker::may_hold_a_half(const operand& term) const {
@@ -192,11 +214,9 @@ bool checker::squares_something(std::uint32_t node) const {
 // the days or hours the plant runs in a year (common practice), not a conversion mistaken.
 // Read so with a note, where it is the only number standing in for the year.
 bool checker::accept_operating_time(std::span<const scaled_operand> parts, double& unit) {
-    constexpr std::size_t most_numbers = 8;
-    std::array<scale_literal, most_numbers> changed_literals{};
-    std::vector<scaled_operand> changed;
+    number_swap swap;
     for (std::size_t i = 0; i < parts.size(); ++i) {
-        if (parts[i].literals.size() > most_numbers)
+        if (parts[i].literals.size() > number_swap::most_numbers)
             continue;
         for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
             const scale_literal& l = parts[i].literals[k];
@@ -213,14 +233,10 @@ bool checker::accept_operating_time(std::span<const scaled_operand> parts, doubl
             year.low = rational(days ? 365 : 8760);
             year.high = rational(days ? 366 : 8784);
             year.power_of_ten = false;
-            std::copy(parts[i].literals.begin(), parts[i].literals.end(), changed_literals.begin());
-            changed_literals[k] = year;
-            changed.assign(parts.begin(), parts.end());
-            changed[i].literals = {changed_literals.data(), parts[i].literals.size()};
-            const reconciliation r = reconcile(changed);
-            if (!r.agree)
+            const std::optional<double> reconciled = swap.unit_with(parts, i, k, year);
+            if (!reconciled)
                 continue;
-            unit = r.unit;
+            unit = *reconciled;
             diagnostic& d = report(
                 rules::trade_constant,
                 fmt::format("{} is read as the {} a year the plant runs, in place of the year's "
@@ -242,19 +258,12 @@ bool checker::accept_operating_time(std::span<const scaled_operand> parts, doubl
 bool checker::accept_folded_coefficient(std::span<const operand> ops,
                                         std::span<const std::size_t> index,
                                         std::span<const scaled_operand> parts, double& unit) {
-    constexpr std::size_t most_numbers = 8;
-    std::array<scale_literal, most_numbers> changed_literals{};
-    std::vector<scaled_operand> changed;
-    // Whether the units reconcile with the k-th number of operand i replaced by `as`.
+    number_swap swap;
     const auto reconciles_with = [&](std::size_t i, std::size_t k, const scale_literal& as) {
-        std::copy(parts[i].literals.begin(), parts[i].literals.end(), changed_literals.begin());
-        changed_literals[k] = as;
-        changed.assign(parts.begin(), parts.end());
-        changed[i].literals = {changed_literals.data(), parts[i].literals.size()};
-        const reconciliation r = reconcile(changed);
-        if (r.agree)
-            unit = r.unit;
-        return r.agree;
+        const std::optional<double> reconciled = swap.unit_with(parts, i, k, as);
+        if (reconciled)
+            unit = *reconciled;
+        return reconciled.has_value();
     };
     // Pass 0 reads a power of ten; each later pass one folded constant, in the table's
     // order, over every number, so that the half of 1.075 is found before a 2 in 1.47.
@@ -262,7 +271,7 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
     for (std::size_t pass = 0; pass <= constants.size(); ++pass) {
         const bool circle_pass = pass > 0;
         for (std::size_t i = 0; i < parts.size(); ++i) {
-            if (parts[i].literals.size() > most_numbers)
+            if (parts[i].literals.size() > number_swap::most_numbers)
                 continue;
             for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
                 const scale_literal& l = parts[i].literals[k];
@@ -407,11 +416,11 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
     // "π*D^2*L/4e6 + π*D^3/6e9" (a tank's barrel and its two hemispherical ends, D in mm): each
     // term folds its own digit into its own power of ten, which only read together reconcile.
     if (parts.size() > 1 && parts.size() <= 4) {
-        std::array<std::array<scale_literal, most_numbers>, 4> all{};
+        std::array<std::array<scale_literal, number_swap::most_numbers>, 4> all{};
         std::vector<scaled_operand> together(parts.begin(), parts.end());
         int folded = 0;
         for (std::size_t i = 0; i < parts.size(); ++i) {
-            if (parts[i].literals.size() > most_numbers)
+            if (parts[i].literals.size() > number_swap::most_numbers)
                 return false;
             std::copy(parts[i].literals.begin(), parts[i].literals.end(), all[i].begin());
             for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
@@ -568,7 +577,7 @@ bool checker::report_extra_factor(std::span<const operand> ops, std::span<const 
                                   std::span<const scaled_operand> parts, bool dimensionless) {
     if (conversions_all_needed(ops, index, parts, dimensionless))
         return false;
-    constexpr std::size_t most_numbers = 8;
+    number_swap swap;
     // "P/(η_pct/100)*8760*u_pct/100/1000" into kWh/yr: the two 100s cancel, and either
     // one's removal reconciles as well as the 1000's; the numbers that cancel are tried
     // last, so that the 1000 is named.
@@ -580,7 +589,7 @@ bool checker::report_extra_factor(std::span<const operand> ops, std::span<const 
     };
     for (const bool cancelling : {false, true})
         for (std::size_t i = 0; i < parts.size(); ++i) {
-            if (parts[i].literals.size() > most_numbers)
+            if (parts[i].literals.size() > number_swap::most_numbers)
                 continue;
             for (std::size_t k = 0; k < parts[i].literals.size(); ++k) {
                 const scale_literal& l = parts[i].literals[k];
@@ -595,19 +604,16 @@ bool checker::report_extra_factor(std::span<const operand> ops, std::span<const 
                     (l.exponent == 1.0 && (l.value == 1e3 || l.value == 1e6 || l.value == 1e9) &&
                      l.value == counted_multiple(ops[index[i]].node)))
                     continue;
-                std::array<scale_literal, most_numbers> without{};
-                std::copy(parts[i].literals.begin(), parts[i].literals.end(), without.begin());
-                without[k].value = 1.0;
-                without[k].tolerance = 0.0;
-                without[k].low = rational(1);
-                without[k].high = rational(1);
-                without[k].power_of_ten = false;
-                without[k].power = 0;
-                without[k].factor_like = false;
-                without[k].table_digits = false;
-                std::vector<scaled_operand> changed(parts.begin(), parts.end());
-                changed[i].literals = {without.data(), parts[i].literals.size()};
-                if (reconcile(changed).agree)
+                scale_literal without = l;
+                without.value = 1.0;
+                without.tolerance = 0.0;
+                without.low = rational(1);
+                without.high = rational(1);
+                without.power_of_ten = false;
+                without.power = 0;
+                without.factor_like = false;
+                without.table_digits = false;
+                if (swap.unit_with(parts, i, k, without))
                     return report_unneeded(ops[index[i]], l);
             }
         }
