@@ -135,3 +135,33 @@ TEST_CASE("the degree's conversion inside a trigonometric function") {
     CHECK(plumb::test::says(plumb::test::first_under(radians, plumb::rules::unit_scale),
                             "in radians already"));
 }
+
+// 1 psf = 47.88 Pa, 1 US gal = 3.785 L, 1 kW = 3412 Btu/h (NIST SP 811 (2008), B.8): a factor
+// turned over with the kPa's, the litre's or the million's power of ten also left out is named
+// for both, so that following the message mends the line; the right forms stay clean.
+TEST_CASE("factor direction: a factor turned over and a power of ten short") {
+    const std::string decl = "s_k : kPa\nq_psf : psf\nV_m3 : m^3\nV_gal : gal\nQ_kW : kW\n"
+                             "Q_MM : MMBtu/h\n";
+    struct row {
+        const char* wrong;
+        const char* right;
+        const char* said;
+    };
+    for (const row& r :
+         {row{"q_psf = 47.88*s_k", "q_psf = s_k*1000/47.88",
+              "the factor 47.88 is the wrong way round, and a further 1000 is missing: the units "
+              "of '47.88*s_k' need a division by 47.88 and a multiplication by 1000"},
+          row{"V_gal = 3.785*V_m3", "V_gal = V_m3*1000/3.785",
+              "the factor 3.785 is the wrong way round, and a further 1000 is missing"},
+          row{"Q_MM = Q_kW/3412", "Q_MM = Q_kW*3412/10^6",
+              "the factor 3412 is the wrong way round, and a further 10⁶ is missing: the units "
+              "of 'Q_kW/3412' need a multiplication by 3412 and a division by 10⁶"}}) {
+        CAPTURE(r.wrong);
+        CHECK(only_finding(decl + r.wrong + "\n").find(r.said) == 0);
+        CHECK(only_finding(decl + r.right + "\n").empty());
+    }
+    // The psi's 6.895 in place of the psf's 47.88: turned over, still no power of ten apart.
+    const std::string other = only_finding(decl + "q_psf = 6.895*s_k\n");
+    CHECK(other.find("a further") == std::string::npos);
+    CHECK(other.find("counts") != std::string::npos);
+}

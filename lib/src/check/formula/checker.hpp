@@ -1223,6 +1223,9 @@ class checker {
     bool report_unneeded(const operand& op, const scale_literal& l,
                          std::optional<double> folded_power = std::nullopt);
     void report_inverted_factor(const operand& op, const scale_literal& l);
+    bool report_inverted_and_decade_short(std::span<const operand> ops,
+                                          std::span<const std::size_t> index,
+                                          std::span<const scaled_operand> parts);
     [[gnu::noinline]] bool report_circle_left_out(std::span<const operand> ops,
                                                   std::span<const std::size_t> index,
                                                   std::span<const scaled_operand> parts);

@@ -811,4 +811,49 @@ void checker::report_inverted_factor(const operand& op, const scale_literal& l) 
     d.notes.push_back({fmt::format("as written the result is {} times its true value", times), {}});
 }
 
+// "q_psf = 47.88*s_k" with s_k in kPa: 47.88 Pa a psf (NIST SP 811 (2008), B.8) applied the
+// wrong way round, and the kPa's 1000 left out besides. Turned over, the factor leaves the two
+// sides a clean power of ten apart; saying both parts is advice that, followed, mends the line,
+// where a bare "divide by 2.29" would not show what went wrong.
+bool checker::report_inverted_and_decade_short(std::span<const operand> ops,
+                                               std::span<const std::size_t> index,
+                                               std::span<const scaled_operand> parts) {
+    for (std::size_t i = 0; i < 2; ++i)
+        for (std::size_t k = 0; k < parts[i].literals.size() && k < 10; ++k) {
+            const scale_literal& l = parts[i].literals[k];
+            if (std::abs(l.exponent) != 1.0 || l.power_of_ten || !(l.value > 1.0) ||
+                !std::isfinite(l.value) || file_.nodes[l.node].kind != expr_kind::number ||
+                !looks_like_conversion(l, false) || is_time_ratio(l))
+                continue;
+            // How many times as much term i counts as the other, and once the factor is
+            // turned over.
+            const double counts = apparent_scale(parts[1 - i]) / apparent_scale(parts[i]);
+            const double turned = counts * std::pow(l.value, -2.0 * l.exponent);
+            const double slack = 2.0 * std::max(l.tolerance, 1e-6);
+            if (!near_power_of_ten(turned, slack))
+                continue;
+            const double decade = std::pow(10.0, std::round(std::log10(turned)));
+            if (decade < 1e-9 || decade > 1e9 || (decade > 0.02 && decade < 50.0))
+                continue;
+            const operand& op = ops[index[i]];
+            const std::string_view written = text(file_.nodes[l.node].range);
+            const bool divides = l.exponent < 0;
+            diagnostic& d = report(
+                rules::unit_scale,
+                fmt::format("the factor {} is the wrong way round, and a further {} is missing: "
+                            "the units of {} need {} by {} and {} by {}",
+                            written, format_factor(decade > 1.0 ? decade : 1.0 / decade),
+                            quote(op.node), divides ? "a multiplication" : "a division", written,
+                            decade > 1.0 ? "a division" : "a multiplication",
+                            format_factor(decade > 1.0 ? decade : 1.0 / decade)),
+                file_.nodes[l.node].range);
+            add_term_and_units(d, op);
+            d.notes.push_back({fmt::format("as written the result is {} times its true value",
+                                           format_factor(counts)),
+                               {}});
+            return true;
+        }
+    return false;
+}
+
 } // namespace plumb::formula_check

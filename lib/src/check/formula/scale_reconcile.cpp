@@ -278,6 +278,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         return true;
     if (parts.size() <= max_operands_for_flips && report_inverted_trade_constant(ops, index, parts))
         return false;
+    if (parts.size() == 2 && report_inverted_and_decade_short(ops, index, parts)) [[unlikely]]
+        return false;
     // "P*d_pct + P_base" with d_pct in %: in a sum of two the term with the percentage is
     // the one off, whichever came first; and beside a bare number ("f*L/d_mm + 4") the
     // term with units, since the number is the formula's own.
