@@ -654,6 +654,16 @@ TEST_CASE("the well-flow formulas' constants folded with minutes per day") {
     CHECK(plumb::test::says(first_under(r, plumb::rules::trade_constant), "Cooper-Jacob"));
 }
 
+// 1 scfm = 1.607 Nm³/h (60 × 0.028317 × 273.15/288.71, worked from NIST SP 811 (2008), B.8):
+// turned over it is 0.6221, which is also ln 10/(2π) × 1.698, Thiem's constant folded. That
+// reading belongs to a formula taking the logarithm Thiem's constant goes with; elsewhere the
+// 0.6221 is the conversion the wrong way round.
+TEST_CASE("a well-flow constant is read only beside its logarithm") {
+    const std::string decl = "Q_N : Nm3/h\nQ_s : scfm\nQ_a : m^3/h\nQ_c : ft^3/min\n";
+    fails_with(decl, {"Q_N = Q_s*0.6221", "Q_a = Q_c*0.6221"}, plumb::rules::unit_scale);
+    passes(decl, {"Q_N = Q_s*1.607", "Q_a = Q_c*1.699"});
+}
+
 // P = ½·ρ·A·v³·C_p (wind power, common practice) with P in kW: the ½ is the formula's own,
 // and the finding names only the units; a number of more digits is named as a coefficient.
 TEST_CASE("a one-digit number is not named as a coefficient beside a unit finding") {

@@ -1136,7 +1136,8 @@ class checker {
         // Only where the formula can hold a half or a 2 (may_hold_a_half). "Q_m = 0.8494*Q_cfm"
         // is half of 1.699 m³/h per cfm, a conversion with no half in it: a slip, not a fold.
         bool half_of_a_square_or_radius = false;
-        bool beside_pi = false; // only where π is written beside it (π*D^2/576)
+        bool beside_pi = false;        // only where π is written beside it (π*D^2/576)
+        bool beside_logarithm = false; // only in a formula that takes a logarithm (well flow)
     };
 
     // check/formula/scale_reconcile.cpp
@@ -1209,6 +1210,7 @@ class checker {
                                               std::span<const std::size_t> index, std::size_t i,
                                               const scale_literal& l, bool second) const;
     bool holds_pi(std::uint32_t k) const;
+    bool formula_takes_a_logarithm() const;
     bool holds_standard_gravity(std::uint32_t k) const;
     bool conversions_all_needed(std::span<const operand> ops, std::span<const std::size_t> index,
                                 std::span<const scaled_operand> parts, bool dimensionless) const;

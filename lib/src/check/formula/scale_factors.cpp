@@ -1,6 +1,7 @@
 // Factors written into a formula: trade constants, conversions folded with coefficients,
 // factors not needed, applied twice or the wrong way round.
 #include "check/formula/checker.hpp"
+#include "model/ascii_case.hpp"
 
 namespace plumb::formula_check {
 
@@ -132,14 +133,19 @@ std::span<const checker::folded_constant> checker::folded_constants() {
         // speed in ft/s from inches and rpm; common practice).
         {1.0 / std::numbers::pi, "1/\u03C0", "a circumference's \u03C0 (n = V/(\u03C0\u00B7D))",
          true},
+        // The well-flow constants only where the formula takes the logarithm they go with
+        // (Cooper-Jacob's drawdown per log cycle holds it already): "Q_N = Q_scfm*0.6221" (1.607
+        // Nm³/h per scfm applied the wrong way round) is no Thiem constant folded into 1.698.
         {std::numbers::ln10 / (2.0 * std::numbers::pi), "ln 10/(2\u03C0)",
-         "the steady well-flow (Thiem) formula's constant, with log10 for ln,", true},
+         "the steady well-flow (Thiem) formula's constant, with log10 for ln,", true, false, false,
+         false, false, false, true},
         {std::numbers::ln10 / (4.0 * std::numbers::pi), "ln 10/(4\u03C0)",
          "the straight-line (Cooper-Jacob) well-test formula's constant", true},
         // 1055 = 1440 × ln 10/π in the unconfined (Dupuit) well's Q = K(H² - h²)/(1055
         // log10(R/r)) in gpm from gpd/ft², ft (US field form, from memory).
         {std::numbers::ln10 / std::numbers::pi, "ln 10/\u03C0",
-         "the unconfined well-flow (Dupuit) formula's constant, with log10 for ln,", true},
+         "the unconfined well-flow (Dupuit) formula's constant, with log10 for ln,", true, false,
+         false, false, false, false, true},
         // 622 = 0.622 × 1000 in W = 622*p_w/(p - p_w) in g/kg: the molar masses of water
         // and dry air, 18.015/28.965 (ASHRAE Fundamentals, ch. 1, from memory).
         {18.015 / 28.965, "0.622", "the ratio of the molar masses of water and dry air", true,
@@ -380,6 +386,8 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
                         continue;
                     if (c.beside_pi && !holds_pi(ops[index[i]].node))
                         continue;
+                    if (c.beside_logarithm && !formula_takes_a_logarithm())
+                        continue;
                     as.value = l.value / c.value;
                     if (c.beside_power_of_ten && !near_power_of_ten(as.value, 1e-3))
                         continue;
@@ -533,6 +541,18 @@ bool checker::holds_standard_gravity(std::uint32_t k) const {
         return n.kind == expr_kind::quantity && file_.quantities[n.lhs].constant &&
                std::abs(file_.quantities[n.lhs].si_factor - 9.80665) < 1e-12;
     });
+}
+
+bool checker::formula_takes_a_logarithm() const {
+    bool found = false;
+    syntax::search_formula(file_, *current_, [&](std::uint32_t, const syntax::expr_node& n) {
+        if (n.kind == expr_kind::call) {
+            const std::string name = upper_ascii(text(call_name_range(n)));
+            found = name == "LN" || name == "LOG" || name == "LOG10";
+        }
+        return found ? search_step::found : search_step::descend;
+    });
+    return found;
 }
 
 bool checker::holds_pi(std::uint32_t k) const {
