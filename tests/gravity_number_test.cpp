@@ -1401,3 +1401,18 @@ TEST_CASE("a typed g is read as g, not as a conversion beside a twice-g 2") {
     CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::gravity_number),
                             "'9.81' is read as standard gravity"));
 }
+
+// Torricelli's v = √(2·g·h) with √(2·g_n) outside the root: 4.43 m^½/s and 8.02 ft^½/s (g_n =
+// 9.80665 m/s², 1 ft = 0.3048 m, NIST SP 811 (2008), B.8; the orifice forms Q = 8.02*C*a*√H of
+// King and Brater, Handbook of Hydraulics, from memory). The 3 of a weir's 2/3 is no such
+// number, nor 8.02 beside a head in m.
+TEST_CASE("the square root of twice g written outside the root") {
+    const std::string decl = "Q_cfs : ft^3/s\nC : 1\na_ft : ft^2\nH_ft : ft\nQ : m^3/s\na : m^2\n"
+                             "H : m\nv : m/s\nv_f : ft/s\n";
+    passes_with_one_note(decl,
+                         {"Q_cfs = 8.02*C*a_ft*sqrt(H_ft)", "Q = 4.43*C*a*sqrt(H)",
+                          "v = 4.43*sqrt(H)", "v_f = 8.02*sqrt(H_ft)", "v = sqrt(H)*4.429"},
+                         plumb::rules::gravity_number);
+    fails_with(decl, {"v = 8.02*sqrt(H)", "v = 3*sqrt(H)", "v_f = 4.43*sqrt(H_ft)"},
+               plumb::rules::side_mismatch);
+}

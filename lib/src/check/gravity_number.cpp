@@ -46,8 +46,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 33>& quantities() {
-    static const std::array<carried_quantity, 33> table = [] {
+const std::array<carried_quantity, 34>& quantities() {
+    static const std::array<carried_quantity, 34> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -99,7 +99,7 @@ const std::array<carried_quantity, 33>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 33>{{
+        return std::array<carried_quantity, 34>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -375,6 +375,17 @@ const std::array<carried_quantity, 33>& quantities() {
              "write p_0/(R_a*T) with both declared to say so (R_a : J/(kg*K) = 287.05)",
              "write the atmosphere and the gas constant in cells that hold their units to say so",
              density * temperature, 352.9, 353.3},
+            // √(2g) outside the root: Q = 8.02*C*a*sqrt(H) in cfs from ft² and ft, v =
+            // 4.43*sqrt(H) in m/s from m (Torricelli's v = √(2gh); King and Brater, Handbook of
+            // Hydraulics, orifices, from memory). Printed to three digits at least: the 3 of a
+            // weir's 2/3 is no 1/√(2g) in some units.
+            {rules::gravity_number, "the square root of twice standard gravity",
+             "\u221A(2\u00B7g_n)", "1/\u221A(2\u00B7g_n)", "",
+             "write sqrt(2*{g_n}) instead to say so, or the 2*g under the root beside the head",
+             "write sqrt(2*9.80665) or a cell that holds g with its unit to say so",
+             acceleration.pow(rational(1, 2)), std::sqrt(2.0 * standard_gravity),
+             std::sqrt(2.0 * standard_gravity), carried_quantity::term_kind::any, "sqrt(2*{g_n})",
+             2e-3},
         }};
     }();
     return table;
