@@ -221,6 +221,23 @@ TEST_CASE("hardening: plumb dim prints the dimension when there is only a warnin
     CHECK(r.status == 0);
 }
 
+// An expression on its own belongs to no formula: the rules that search the formula around a
+// number (42 US gallons a barrel, a logarithm beside a well-flow constant) once followed a null
+// pointer there, and "plumb dim 'Q_g + Q_b*42/1000'" ended in SIGSEGV.
+TEST_CASE("hardening: plumb dim on a sum whose numbers the rules read against its formula") {
+    const plumb_test::scratch_folder dir("dim-alone");
+    const auto context = dir.write("flows.plumb", "Q_b : bbl/d\nQ_g : gpm\n").string();
+    for (const std::string expression : {"Q_g + Q_b*42/1000", "Q_g + Q_b*0.6221", "Q_g*264"}) {
+        CAPTURE(expression);
+        const auto r = run_plumb({"dim", expression, context});
+        CHECK(r.status == 0);
+        CHECK(contains(r.out, "[L^3 T^-1] (volumetric flow rate)"));
+        const plumb::query_result q = plumb::query_dimension(expression, {context});
+        REQUIRE(q.dim.has_value());
+        CHECK(q.dim->to_string() == "[L^3 T^-1]");
+    }
+}
+
 TEST_CASE("hardening: plumb dim with no expression says so and exits 2") {
     for (const std::string expression : {"", "#", "   # only a comment"}) {
         CAPTURE(expression);

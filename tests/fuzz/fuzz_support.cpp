@@ -16,11 +16,13 @@ namespace fs = std::filesystem;
 
 namespace {
 
-// Dictionaries a fuzz input may `use`: small, and covering plain, offset and user units.
+// Dictionaries a fuzz input may `use`: small, and covering plain, offset and user units, and
+// the barrels and gallons some rules search the formula for.
 constexpr const char* fluids = "ρ : kg/m^3 \"density\"\nμ : Pa*s\nν : m^2/s\ng : m/s^2\n"
                                "V : m/s\nD : m\nL : m\nQ : m^3/s\np : Pa\nΔp : Pa\nf : 1\n";
 constexpr const char* units = "measure ksi = 1000 psi\nmeasure kPag = kPa zero at 101.325 kPa\n"
-                              "p_g : kPag\nσ : ksi\n";
+                              "p_g : kPag\nσ : ksi\nQ_b : bbl/d\nQ_g : gpm\nT_w : gal/(d*ft)\n"
+                              "s : ft\n";
 constexpr const char* thermal = "use \"fluids.plumb\"\nT : °C\nΔT : Δ°C\nc_p : J/(kg*K)\n"
                                 "k : W/(m*K)\nh : W/(m^2*K)\n";
 

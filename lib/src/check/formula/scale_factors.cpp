@@ -386,7 +386,7 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
                         continue;
                     if (c.beside_pi && !holds_pi(ops[index[i]].node))
                         continue;
-                    if (c.beside_logarithm && !formula_takes_a_logarithm())
+                    if (c.beside_logarithm && !formula_takes_a_logarithm(ops[index[i]].node))
                         continue;
                     as.value = l.value / c.value;
                     if (c.beside_power_of_ten && !near_power_of_ten(as.value, 1e-3))
@@ -543,16 +543,18 @@ bool checker::holds_standard_gravity(std::uint32_t k) const {
     });
 }
 
-bool checker::formula_takes_a_logarithm() const {
-    bool found = false;
-    syntax::search_formula(file_, *current_, [&](std::uint32_t, const syntax::expr_node& n) {
-        if (n.kind == expr_kind::call) {
-            const std::string name = upper_ascii(text(call_name_range(n)));
-            found = name == "LN" || name == "LOG" || name == "LOG10";
-        }
-        return found ? search_step::found : search_step::descend;
-    });
-    return found;
+// An expression on its own (a query, a side listed alone) belongs to no formula: then the
+// term itself is searched.
+bool checker::formula_takes_a_logarithm(std::uint32_t term) const {
+    const auto logarithm = [&](std::uint32_t, const syntax::expr_node& n) {
+        if (n.kind != expr_kind::call)
+            return search_step::descend;
+        const std::string name = upper_ascii(text(call_name_range(n)));
+        return name == "LN" || name == "LOG" || name == "LOG10" ? search_step::found
+                                                                : search_step::descend;
+    };
+    return current_ != nullptr ? syntax::search_formula(file_, *current_, logarithm)
+                               : syntax::search_subtree(file_, term, logarithm);
 }
 
 bool checker::holds_pi(std::uint32_t k) const {

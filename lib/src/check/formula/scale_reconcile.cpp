@@ -430,6 +430,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
             return false;
         if (counts_barrels_and_gallons)
             return *counts_barrels_and_gallons;
+        if (current_ == nullptr) // an expression on its own: no formula to search
+            return false;
         bool barrels = false;
         bool gallons = false;
         syntax::search_formula(file_, *current_, [&](std::uint32_t, const syntax::expr_node& n) {
