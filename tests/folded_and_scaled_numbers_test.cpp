@@ -508,6 +508,20 @@ TEST_CASE("words in a description that say a difference are whole words") {
     }
 }
 
+// A fracturing stage's bottomhole treating pressure is the surface pressure plus the column
+// less the pipe friction (common practice): a friction pressure is a loss. A thermometer reading
+// described "180 °F at the manifold plus line loss" is a reading: the loss is beside it.
+TEST_CASE("a friction is a difference, and a loss a reading is taken with is not") {
+    const std::string frac = "p_s, p_bh : psig\np_h : psi \"hydrostatic of the flush column\"\n"
+                             "p_fric : psi \"pipe friction to the perforations\"\n";
+    passes(frac, {"p_bh = p_s + p_h - p_fric"});
+    const std::string rinse = "t_r : °F \"final rinse (180 °F at the manifold plus line loss)\"\n"
+                              "t_in : °F \"booster inlet\"\nΔt : Δ°F \"booster rise\"\n"
+                              "t_C : °C \"final rinse\"\n";
+    passes(rinse, {"Δt = t_r - t_in", "t_C = (t_r - 32)/1.8"});
+    fails_with(rinse, {"t_r = Δt"}, plumb::rules::offset_scale);
+}
+
 TEST_CASE(
     "a spare time ratio, cancelling conversions, an exponent's units, the 120 of n = 120f/p") {
     // 1 d = 24 h (NIST SP 811 (2008), B.8): V/Q is already in days when Q is in m³/d.

@@ -24,7 +24,7 @@ bool names_a_difference(std::string_view name, std::string_view description) {
         if (name.substr(at).starts_with("θ"))
             return true;
     }
-    for (const std::string_view word : {"rise", "drop", "diff", "loss", "lm", "approach"})
+    for (const std::string_view word : {"rise", "drop", "diff", "loss", "lm", "approach", "fric"})
         if (name.find(word) != std::string_view::npos)
             return true;
     // Whole words (a plural too), so that "wellhead", "headspace" and "droplet" are not
@@ -56,9 +56,32 @@ bool names_a_difference(std::string_view name, std::string_view description) {
          {"water column", "liquid column", "column of water", "column of liquid"})
         if (description.find(phrase) != std::string_view::npos)
             return true;
+    // "180 °F at the manifold plus line loss": a word that a reading is taken with, after or
+    // before names a difference beside the quantity, not the quantity itself.
+    const auto beside_a_reading = [&](std::size_t at) {
+        std::size_t end = at;
+        for (int words = 0; words < 2; ++words) {
+            while (end > 0 && !is_letter(description[end - 1]))
+                --end;
+            std::size_t begin = end;
+            while (begin > 0 && is_letter(description[begin - 1]))
+                --begin;
+            if (begin == end)
+                return false;
+            const std::string_view before = description.substr(begin, end - begin);
+            for (const std::string_view joining :
+                 {"plus", "less", "minus", "after", "before", "allowing", "with", "without",
+                  "excluding", "including"})
+                if (before == joining)
+                    return true;
+            end = begin;
+        }
+        return false;
+    };
+    // "pipe friction to the perforations": a friction pressure or head is a loss.
     for (const std::string_view word :
          {"difference", "differential", "rise", "drop", "loss", "change", "increase", "decrease",
-          "approach", "range", "gradient", "swing", "hydrostatic", "net", "driving"})
+          "approach", "range", "gradient", "swing", "hydrostatic", "net", "driving", "friction"})
         for (std::size_t at = description.find(word); at != std::string_view::npos;
              at = description.find(word, at + 1)) {
             std::size_t end = at + word.size();
@@ -67,7 +90,8 @@ bool names_a_difference(std::string_view name, std::string_view description) {
             else if (description.substr(end, 1) == "s")
                 end += 1;
             if ((at == 0 || !is_letter(description[at - 1])) &&
-                (end >= description.size() || !is_letter(description[end])))
+                (end >= description.size() || !is_letter(description[end])) &&
+                !beside_a_reading(at))
                 return true;
         }
     return false;
