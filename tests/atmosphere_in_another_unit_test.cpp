@@ -404,3 +404,19 @@ TEST_CASE("the advice names the site's barometer, not a pressure above it") {
     CHECK(plumb::test::says(d, "declares the site's barometer 'p_b'"));
     CHECK(plumb::test::says(d, "write p_b in place of 101.325"));
 }
+
+// A crude tank's vapour space on its gauge in inches of water: 1 inH2O = 249.09 Pa = 0.0361 psi
+// (NIST SP 811 (2008), B.8), and a tank gauge reads above the atmosphere (common practice). A
+// declaration in inH2O whose words say gauge is a gauge reading, as inH2Og is; a vacuum or a
+// pressure said against the barometer stays as it was, and one said absolute is absolute.
+TEST_CASE("inches of water read on a gauge are a gauge reading") {
+    const std::string d = "p_in : inH2O \"tank vapour space on the tank gauge, 3 in. w.c.\"\n"
+                          "p_ia : inH2O \"tank vapour space, absolute\"\n"
+                          "p_tk : psig \"tank vapour space\"\np_abs : psia \"tank, absolute\"\n"
+                          "p_b : psia \"site barometer\"\n";
+    passes(d, {"p_tk = 0.0361*p_in", "p_abs = 0.0361*p_in + p_b", "p_abs = 0.0361*p_ia"});
+    fails_with(d, {"p_abs = 0.0361*p_in", "p_tk = 0.0361*p_ia"}, plumb::rules::offset_scale);
+    const std::string vacuum = "vac_in : inH2O \"suction vacuum, skid gauge\"\n"
+                               "vac : kPa \"suction vacuum below the barometer\"\n";
+    passes(vacuum, {"vac_in = 4.015*vac"});
+}

@@ -8,6 +8,8 @@
 #include "check/parallel_check.hpp"
 #include "check/path_patterns.hpp"
 #include "groups/studies.hpp"
+#include "model/ascii_case.hpp"
+#include "model/difference_name.hpp"
 #include "model/user_file.hpp"
 #include "model/utf8.hpp"
 #include "notation/markdown.hpp"
@@ -19,6 +21,7 @@
 
 #include <algorithm>
 #include <array>
+#include <cctype>
 #include <cmath>
 #include <fmt/format.h>
 #include <fstream>
@@ -601,6 +604,34 @@ class session {
                       local);
     }
 
+    // "p_tk : inH2O "tank vapour space on the tank gauge"": inches of water that a gauge reads
+    // are a gauge reading, as a tank's, a draft's and a gas supply's are (common practice);
+    // the declaration says so in its words where it does not in its unit (inH2Og).
+    static const unit_definition* water_gauge_reading(std::string_view name,
+                                                      const syntax::declaration& decl,
+                                                      const symbol_entry& entry) {
+        if (decl.kind.single_unit == nullptr || decl.kind.single_unit->symbol != "inH2O" ||
+            entry.unit_text != "inH2O" || names_a_difference(name, entry.description))
+            return nullptr;
+        const std::string words = lower_ascii(entry.description);
+        // A vacuum, a pressure said against the barometer, a drop: a difference already.
+        for (const std::string_view difference :
+             {"absolute", "vacuum", "below", "above", "barometer", "atmospher"})
+            if (words.find(difference) != std::string::npos)
+                return nullptr;
+        for (std::size_t at = words.find("gauge"); at != std::string::npos;
+             at = words.find("gauge", at + 1)) {
+            const bool starts = at == 0 || !std::isalpha(static_cast<unsigned char>(words[at - 1]));
+            const std::size_t end = at + 5;
+            if (starts &&
+                (end == words.size() || !std::isalpha(static_cast<unsigned char>(words[end])) ||
+                 words.compare(end, 1, "d") == 0))
+                if (const auto unit = unit_table::standard().resolve("inH2Og"))
+                    return unit->unit;
+        }
+        return nullptr;
+    }
+
     void declare_names(loaded_file* f, const syntax::parsed_file& tree, std::uint32_t first,
                        std::uint32_t count, symbol_table& table, bool local) {
         for (std::uint32_t i = first; i < first + count; ++i) {
@@ -630,6 +661,8 @@ class session {
                 if (decl.kind.single_unit != nullptr &&
                     decl.kind.single_unit->scale != unit_scale::absolute)
                     entry.offset_unit = decl.kind.single_unit;
+                else if (const unit_definition* gauge = water_gauge_reading(name, decl, entry))
+                    entry.offset_unit = gauge;
             }
             auto [existing, inserted] = table.insert(name, entry);
             if (inserted) {
