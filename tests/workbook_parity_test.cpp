@@ -1174,6 +1174,25 @@ TEST_CASE("workbook parity: a drop across regulators computed from bar a and bar
           std::vector<std::string>{"VIE!B5 offset-scale"});
 }
 
+TEST_CASE("workbook parity: a hydrostatic pressure in psig less a formation pressure in psia") {
+    // Overbalance = hydrostatic pressure − formation pressure, both gauge or both absolute; the
+    // mud column's 0.052·MW·TVD in psig is a gauge reading at its foot (common practice; 1 atm =
+    // 14.696 psi, NIST SP 811 (2008), B.8). Less a psia reading it is 14.7 psi short; with the
+    // rig floor's atmosphere added it is right. In kPa, an absolute unit, the column is ρ·g·h,
+    // a difference, and less an absolute reading gives the absolute pressure above it.
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Hydrostatic pressure at TVD", "5290", "psig") +
+        labelled_row(3, "Formation pressure, wireline test (absolute)", "5120", "psia") +
+        labelled_row(4, "Atmosphere at the rig floor", "14.7", "psia") +
+        labelled_row(5, "Overbalance on the formation", "=B2-B3", "psi") +
+        labelled_row(6, "Overbalance on the formation", "=B2+B4-B3", "psi") +
+        labelled_row(7, "Hydrostatic pressure of the column", "36.5", "kPa") +
+        labelled_row(8, "Pressure at the top of the column", "=B3*6.895-B7", "kPa") +
+        "</sheetData></worksheet>";
+    CHECK(cell_findings(check_one_sheet("Pit", sheet)) ==
+          std::vector<std::string>{"Pit!B5 offset-scale"});
+}
+
 TEST_CASE("workbook parity: a duct's velocity pressure and friction rate in inches of water") {
     // p_v = (V/4005)² in in. w.g. from fpm for standard air (ASHRAE Fundamentals, duct design,
     // from memory); a friction rate in in. w.g. per 100 ft times a length in ft needs the 100.

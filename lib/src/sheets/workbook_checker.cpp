@@ -664,14 +664,25 @@ class workbook_checker {
                a->dim && *a->dim == b->offset->dim();
     }
 
-    bool labelled_a_difference(std::size_t s, cell_address a) const {
-        const row_label label = label_of(s, a);
-        if (!label.description.empty() && names_a_difference(label.name, label.description))
+    // "Hydrostatic pressure at TVD | =0.052*C6*C7 | psig": a column's pressure written in a
+    // gauge unit is the gauge reading at its foot, as the notation reads psig (common
+    // practice); in an absolute unit it is the column's difference, ρ·g·h. `gauge` says which.
+    bool labelled_a_difference(std::size_t s, cell_address a, bool gauge = false) const {
+        const auto says = [&](const row_label& l) {
+            if (l.description.empty())
+                return false;
+            if (!gauge)
+                return names_a_difference(l.name, l.description);
+            std::string words = lower_ascii(l.description);
+            for (std::size_t at = words.find("hydrostatic"); at != std::string::npos;
+                 at = words.find("hydrostatic", at))
+                words.replace(at, 11, "column");
+            return names_a_difference(l.name, words);
+        };
+        if (says(label_of(s, a)))
             return true;
         // "ΔT [°F]", "Rise [K]": the column's heading names it one.
-        const row_label heading = heading_of(s, a);
-        return !heading.description.empty() &&
-               names_a_difference(heading.name, heading.description);
+        return says(heading_of(s, a));
     }
 
     // A length whose row label, or else its column's heading, names a diameter or a radius.
@@ -745,7 +756,9 @@ class workbook_checker {
             target.offset = v.offset;
             target.value = v.value;
             target.difference =
-                r.area.single() && v.dim && labelled_a_difference(r.sheet, r.area.first);
+                r.area.single() && v.dim &&
+                labelled_a_difference(r.sheet, r.area.first,
+                                      v.offset != nullptr && v.offset->scale == unit_scale::gauge);
             target.specific_gravity = r.area.single() && v.dim && v.dim->is_dimensionless() &&
                                       labelled_a_specific_gravity(r.sheet, r.area.first);
             target.vacuum = r.area.single() && v.dim && v.offset == nullptr &&
