@@ -387,6 +387,20 @@ TEST_CASE("water's latent heat written as a number") {
     }
     // 1000 Btu/lb is a rule of thumb 3 % off, not read; a missing latent heat is an error.
     fails_with(steam, {"@thumb Q = 1000*m", "@missing Q = m"}, plumb::rules::side_mismatch);
+    // Below the boiling point, where a cooling tower's basin water evaporates: 2501 kJ/kg at 0
+    // °C to 2257 at 100 °C, 2430 kJ/kg (1045 Btu/lb) near 30 °C, and ISO 18125's 2.443 MJ/kg at
+    // 25 °C (steam tables, from memory).
+    for (const char* formula : {"@basin m = Q/1045", "@basin-si m_k = Q_k/2430",
+                                "@freezing m_k = Q_k/2501", "@iso Q_k = 2.443*m_k*1000"}) {
+        CAPTURE(formula);
+        const auto r = run(steam, formula);
+        CHECK(problems_in(r) == 0);
+        CHECK(first_under(r, plumb::rules::trade_constant).message.find("below 100") !=
+              std::string::npos);
+    }
+    // Ice's 2834 kJ/kg of sublimation (from memory) and a round 3000: no evaporation of water.
+    fails_with(steam, {"@ice m_k = Q_k/2834", "@round m_k = Q_k/3000"},
+               plumb::rules::side_mismatch);
 }
 
 TEST_CASE("the fan trade's 6356, and a number counted as a coefficient named") {

@@ -46,8 +46,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 34>& quantities() {
-    static const std::array<carried_quantity, 34> table = [] {
+const std::array<carried_quantity, 35>& quantities() {
+    static const std::array<carried_quantity, 35> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -99,7 +99,7 @@ const std::array<carried_quantity, 34>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 34>{{
+        return std::array<carried_quantity, 35>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -386,6 +386,26 @@ const std::array<carried_quantity, 34>& quantities() {
              acceleration.pow(rational(1, 2)), std::sqrt(2.0 * standard_gravity),
              std::sqrt(2.0 * standard_gravity), carried_quantity::term_kind::any, "sqrt(2*{g_n})",
              2e-3},
+            // Water's latent heat below its boiling point, where a cooling tower's or an
+            // evaporative condenser's basin water evaporates: 2501 kJ/kg at 0 °C to 2257 at 100
+            // °C (IAPWS-IF97 steam tables, from memory), the 1045 Btu/lb near 85 °F and the air
+            // trade's 1076 (2502.8 kJ/kg, common practice). A round 1000 is a thousand before it
+            // is a latent heat: read only from a number printed to three digits or more.
+            {rules::trade_constant,
+             "the latent heat of evaporation of water below 100 \u00B0C",
+             "h_fg",
+             "1/h_fg",
+             " (2257 kJ/kg at 100 \u00B0C to 2501 kJ/kg at 0 \u00B0C; 1045 Btu/lb near 85 "
+             "\u00B0F)",
+             "declare the latent heat with its unit (h_fg : kJ/kg = 2430) for the water's "
+             "temperature to say so",
+             "write the latent heat in a cell that holds its unit to say so",
+             length * length / (time * time),
+             2257.5e3,
+             2503.0e3,
+             carried_quantity::term_kind::any,
+             {},
+             0.005},
         }};
     }();
     return table;
