@@ -165,3 +165,19 @@ TEST_CASE("factor direction: a factor turned over and a power of ten short") {
     CHECK(other.find("a further") == std::string::npos);
     CHECK(other.find("counts") != std::string::npos);
 }
+
+// 1 kg = 2.20462 lb (NIST SP 811 (2008), B.8): 2.205 × 3600 = 7938 lb/h per kg/s, 0.017 % above
+// the 7936.64 the units need. The finding says how near the number is; the factor for the term
+// is offered only for the reading of 7938 as a coefficient, since with 7938 taken as the
+// conversion, multiplying by it again would leave the line 7938 times too large.
+TEST_CASE("factor direction: a number near the conversion is not told to take it as well") {
+    const std::string found = only_finding("E_lbh : lb/h\nE_kgs : kg/s\nE_lbh = 7938*E_kgs\n");
+    CHECK(found.find("counts") != std::string::npos);
+    const auto r = plumb::check_text("f.plumb", "E_lbh : lb/h\nE_kgs : kg/s\nE_lbh = 7938*E_kgs\n");
+    REQUIRE(plumb::test::count_of(r, plumb::rules::unit_scale) == 1);
+    const plumb::diagnostic& d = plumb::test::first_under(r, plumb::rules::unit_scale);
+    CHECK(plumb::test::says(d, "7938 is 0.017 % above 7936.64"));
+    CHECK(plumb::test::says(d, "if 7938 is a coefficient of the formula and not the conversion, "
+                               "multiply '7938*E_kgs' by 7936.64"));
+    CHECK_FALSE(plumb::test::says(d, "(declare the symbols in coherent units"));
+}

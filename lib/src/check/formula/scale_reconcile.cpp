@@ -619,8 +619,10 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     }
     // "u_fpm = 200*u" (m/s): a rule of thumb for 196.85. Taken as a coefficient, the
     // advice would multiply it by the conversion; say how far it is from the factor.
-    if (const double off = written / in_place - 1.0;
-        coefficient_count == 1 && std::isfinite(off) && std::abs(off) <= 0.05)
+    const double off = written / in_place - 1.0;
+    const bool near_the_factor =
+        coefficient_count == 1 && std::isfinite(off) && std::abs(off) <= 0.05;
+    if (near_the_factor)
         d.notes.push_back({fmt::format("{} is {:.2g} % {} {}, the factor these units need; if "
                                        "it was meant to convert them, write that factor",
                                        coefficients, std::abs(off) * 100.0,
@@ -768,6 +770,14 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                                        coefficients, in_place_text,
                                        multiply ? "multiply" : "divide", quote(op.node), factor),
                            {}});
+    // "E_lbh = 7938*E_kgs": 2.205 × 3600 for the 7936.64 these units need; multiplying the
+    // term by the factor as well would leave it 7938 times too large.
+    else if (near_the_factor)
+        d.notes.push_back(
+            {fmt::format("if {} is a coefficient of the formula and not the "
+                         "conversion, {} {} by {}",
+                         coefficients, multiply ? "multiply" : "divide", quote(op.node), factor),
+             {}});
     else
         d.notes.push_back({fmt::format("{} {} by {} (declare the symbols in coherent units, or "
                                        "write the conversion factor into the formula)",
