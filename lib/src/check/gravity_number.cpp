@@ -111,15 +111,17 @@ const std::array<carried_quantity, 35>& quantities() {
              "write 2*{g_n} instead to say so", "write 2*9.80665 or a cell that holds g to say so",
              acceleration, 2.0 * standard_gravity, 2.0 * standard_gravity,
              carried_quantity::term_kind::any, "2*{g_n}"},
+            // Up to 1000 × 9.81 = 9810 N/m³, the trade's round figures (common practice): the
+            // 2.725 kWh/ML per metre of a pumping energy is 1000·9.81/3600.
             {rules::gravity_number, "the specific weight of water", "\u03B3_w = \u03C1_w\u00B7g_n",
              "1/\u03B3_w",
-             " (water between 0 and 30 \u00B0C, \u03C1_w from 995.65 to 999.975 kg/m\u00B3)",
+             " (water between 0 and 30 \u00B0C, \u03C1_w from 995.65 to 999.975 kg/m\u00B3; "
+             "1000 \u00D7 9.81 as the trade rounds it)",
              "write \u03C1_w*{g_n}, with \u03C1_w declared for the water's temperature, to say "
              "so; for another liquid the specific gravity must multiply \u03C1_w",
              "write the density and g in cells that hold their units to say so; for another "
              "liquid the specific gravity must multiply the density",
-             density * acceleration, water_least * standard_gravity,
-             water_greatest * standard_gravity},
+             density * acceleration, water_least * standard_gravity, 1000.0 * 9.81},
             // Ground engineers round water's unit weight to 10 kN/m³ (EN 1997-1 worked
             // examples, common practice): γ' = γ_sat - 10. Only that round 10, in kN/m³, 2 %
             // above ρ_w·g_n; never a 10 for g.
@@ -567,7 +569,7 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                                                    std::span<const std::string_view> texts,
                                                    const dimension& lacking, bool flipped_too,
                                                    carried_quantity::term_kind term,
-                                                   unsigned clock_units) {
+                                                   unsigned clock_units, bool beside_percentage) {
     if (literals.empty() || literals.size() > most_numbers || texts.size() != literals.size() ||
         !(term_scale > 0) || !(reference_scale > 0) || !std::isfinite(term_scale) ||
         !std::isfinite(reference_scale))
@@ -590,6 +592,8 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
         // TR = gpm·ΔT/24 is 12000/500, water's heat capacity per gpm.)
         if (number.value == 60.0 || number.value == 1440.0 || number.value == 3600.0 ||
             number.value == 86400.0)
+            continue;
+        if (beside_percentage && texts[at] == "100")
             continue;
         const double half_unit = half_unit_in_last_digit(texts[at]);
         for (const carried_quantity& q : quantities()) {

@@ -105,10 +105,14 @@ std::string molar_volume_advice(const molar_volume_mismatch& off);
 // symbols or cells are written in: where one of their factors (60, 3600, 86400, 7000) stands
 // between the number and the quantity, the number is read all the same, and the scale rule
 // names the factor left out (9.81 in ρ*9.81*Q*H/1000 with Q in m³/h).
+//
+// With `beside_percentage`, a 100 among the numbers is the percentage's and is read as no
+// quantity (it may still convert): V*f_pct/100/m_d is no volume over water's density.
 std::optional<gravity_reading> read_gravity_number(
     double term_scale, double reference_scale, std::span<const scale_literal> literals,
     std::span<const std::string_view> texts, const dimension& lacking, bool flipped_too = false,
-    carried_quantity::term_kind term = carried_quantity::term_kind::any, unsigned clock_units = 0);
+    carried_quantity::term_kind term = carried_quantity::term_kind::any, unsigned clock_units = 0,
+    bool beside_percentage = false);
 
 // The units of time and the grain a unit as written counts in, as bits: clock_minute ("min",
 // "cfm", "gpm"), clock_hour ("h", "kWh", "gph"), clock_day ("d", "MGD", "bpd"), clock_grain

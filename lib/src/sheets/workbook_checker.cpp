@@ -1120,18 +1120,25 @@ class workbook_checker {
         for (std::size_t k = 0; k < factors.size(); ++k)
             texts[k] = listing_->text(lowered_.tree.nodes[factors[k].node].range);
         unsigned clock_units = clock_units_in(written.unit.text);
-        for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i)
-            clock_units |= clock_units_in(
+        // "=C34*C35/100/C29" with C35 in %: the 100 is the percentage's, never one over
+        // water's density that the % makes of it.
+        bool beside_percentage = false;
+        for (std::uint32_t i = 0; i < f.lowered.reference_count; ++i) {
+            const std::string_view unit =
                 lowered_.tree
                     .references[lowered_.references[f.lowered.first_reference + i].reference]
-                    .unit_text);
-        const auto reading = read_gravity_number(computed.scale, written.unit.scale, factors,
-                                                 {texts.data(), factors.size()}, lacking, false,
-                                                 carried_quantity::term_kind::any, clock_units);
+                    .unit_text;
+            clock_units |= clock_units_in(unit);
+            beside_percentage = beside_percentage || unit == "%";
+        }
+        const auto reading = read_gravity_number(
+            computed.scale, written.unit.scale, factors, {texts.data(), factors.size()}, lacking,
+            false, carried_quantity::term_kind::any, clock_units, beside_percentage);
         if (!reading)
             return false;
         const std::uint32_t node = factors[reading->literal].node;
         const std::string_view number = texts[reading->literal];
+
         computed.dim = written.unit.dim;
         computed.scale = reading->term_scale;
         computed.exact_scale.reset();

@@ -271,9 +271,15 @@ bool checker::read_gravity_numbers(std::size_t base, const agreement& a, std::ui
         }
         if (!numbers_could_carry(numbers, lacking, texts))
             return false;
-        const auto reading =
-            read_gravity_number(t.scale, reference_scale, numbers, {texts.data(), numbers.size()},
-                                lacking, true, kind_of(t, *a.reference), clock_units_of_formula());
+        // "V*f_pct/100/m_d" with f_pct in %: the 100 is the percentage's, never one over
+        // water's density that the % makes of it.
+        const bool beside_percentage =
+            for_each_factor(operands_[base + i].node, [&](std::uint32_t at, int) {
+                return dimensionless_unit_size(at) == std::optional<double>(0.01);
+            });
+        const auto reading = read_gravity_number(
+            t.scale, reference_scale, numbers, {texts.data(), numbers.size()}, lacking, true,
+            kind_of(t, *a.reference), clock_units_of_formula(), beside_percentage);
         // A bare number standing for the whole quantity is that quantity in the others'
         // unit or nothing: "ρ_p - 1" beside kg/m³ is no water density a thousand apart.
         if (!reading || (t.numeric && reading->shifted))
