@@ -1428,3 +1428,16 @@ TEST_CASE("a 100 beside a percentage carries no quantity") {
     const std::string pumping = "e : kWh/ML\nH : m\nη : %\n";
     passes_with_one_note(pumping, {"e = 2.725*H/(η/100)"}, plumb::rules::gravity_number);
 }
+
+// A drill string's buoyancy factor BF = 1 − ρ_mud/ρ_steel, 1 − MW/65.5 with the mud in lb/gal
+// (API RP 7G, from memory; 65.5 lb/gal = 7849 kg/m³), a plate's mass 7850 kg/m³ and a member's
+// self-weight 77 kN/m³ (EN 1991-1-1, Table A.4, from memory). Steel's 489.5 lb/ft³ beside a mud
+// weight in lb/gal is no density in those units, and stays an error.
+TEST_CASE("steel's density and unit weight typed as numbers") {
+    const std::string d = "MW : lb/gal\nρ_m : kg/m^3\nBF : 1\nw_a : kN/m\nA : m^2\n"
+                          "m : kg\nV_mm : mm^3\n";
+    passes_with_one_note(d, {"BF = 1 - MW/65.5", "BF = 1 - ρ_m/7850", "m = V_mm*7850/1e9"},
+                         plumb::rules::trade_constant);
+    passes_with_one_note(d, {"w_a = 77*A", "w_a = 78.5*A"}, plumb::rules::gravity_number);
+    fails_with(d, {"BF = 1 - MW/489.5", "BF = 1 - MW/60"}, plumb::rules::sum_mismatch);
+}

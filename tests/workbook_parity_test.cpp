@@ -647,18 +647,29 @@ TEST_CASE("workbook parity: a pressure whose row label says it is a drop is a di
 }
 
 TEST_CASE("workbook parity: a large power of ten is a conversion, not water's density") {
-    // A plate's mass from its sides in mm and steel's 7850 kg/m³ typed as a number (common
-    // practice): 1 m³ = 10⁹ mm³ (SI Brochure 9th ed., Table 7). The 7850 carries no unit, so
-    // the cell computes a volume; the 10⁹ must not be read as one over water's density.
-    const check_report r = check_one_sheet("S", sheet_of({
-                                                    {"400", "mm"},                       // B2
-                                                    {"400", "mm"},                       // B3
-                                                    {"30", "mm"},                        // B4
-                                                    {"=B2*B3*B4*7850/1000000000", "kg"}, // B5
-                                                }));
-    const diagnostic* d = finding(r, "S!B5", rules::result_unit);
-    REQUIRE(d != nullptr);
-    CHECK(finding(r, "S!B5", rules::trade_constant) == nullptr);
+    // A plate's mass from its sides in mm and aluminium's 2700 kg/m³ typed as a number
+    // (common practice): 1 m³ = 10⁹ mm³ (SI Brochure 9th ed., Table 7). The 2700 carries no
+    // unit, so the cell computes a volume; the 10⁹ must not be read as one over water's
+    // density. Steel's 7850 is read as the density it is, the 10⁹ as the conversion.
+    for (const char* density : {"2700", "7850"}) {
+        CAPTURE(density);
+        const check_report r =
+            check_one_sheet("S", sheet_of({
+                                     {"400", "mm"}, // B2
+                                     {"400", "mm"}, // B3
+                                     {"30", "mm"},  // B4
+                                     {std::string("=B2*B3*B4*") + density + "/1000000000", "kg"},
+                                 }));
+        const diagnostic* note = finding(r, "S!B5", rules::trade_constant);
+        if (std::string_view(density) == "2700") {
+            CHECK(finding(r, "S!B5", rules::result_unit) != nullptr);
+            CHECK(note == nullptr);
+        } else {
+            CHECK(finding(r, "S!B5", rules::result_unit) == nullptr);
+            REQUIRE(note != nullptr);
+            CHECK(note->message.find("density of steel") != std::string::npos);
+        }
+    }
 }
 
 TEST_CASE("workbook parity: readings on scales with different zeros are not compared") {

@@ -46,8 +46,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 35>& quantities() {
-    static const std::array<carried_quantity, 35> table = [] {
+const std::array<carried_quantity, 37>& quantities() {
+    static const std::array<carried_quantity, 37> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -99,7 +99,7 @@ const std::array<carried_quantity, 35>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 35>{{
+        return std::array<carried_quantity, 37>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -408,6 +408,37 @@ const std::array<carried_quantity, 35>& quantities() {
              carried_quantity::term_kind::any,
              {},
              0.005},
+            // Carbon steel's density, 7850 kg/m³ (EN 1991-1-1, Table A.4, from memory), printed
+            // 490 or 489.5 lb/ft³, 65.5 lb/gal and 7.85 t/m³ (common practice): a drill string's
+            // buoyancy factor BF = 1 - MW/65.5 with the mud weight in ppg, a plate's weight.
+            {rules::trade_constant,
+             "the density of steel",
+             "\u03C1_s",
+             "1/\u03C1_s",
+             " (carbon steel: 7840 to 7860 kg/m\u00B3; 490 lb/ft\u00B3, 65.5 lb/gal)",
+             "declare the steel's density with its unit (\u03C1_s : kg/m^3 = 7850) to say so",
+             "write the steel's density in a cell that holds its unit to say so",
+             density,
+             7840.0,
+             7860.0,
+             carried_quantity::term_kind::any,
+             {},
+             0.011},
+            // Its unit weight, 77 kN/m³ (from 7850 × 9.81) to EN 1991-1-1's 78.5: a member's
+            // self-weight from its area.
+            {rules::gravity_number,
+             "the unit weight of steel",
+             "\u03B3_s = \u03C1_s\u00B7g_n",
+             "1/\u03B3_s",
+             " (77 to 78.5 kN/m\u00B3)",
+             "declare the steel's unit weight with its unit (\u03B3_s : kN/m^3 = 77) to say so",
+             "write the steel's unit weight in a cell that holds its unit to say so",
+             density * acceleration,
+             7840.0 * standard_gravity,
+             78.5e3,
+             carried_quantity::term_kind::any,
+             {},
+             0.011},
         }};
     }();
     return table;
