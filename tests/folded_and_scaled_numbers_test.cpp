@@ -1538,3 +1538,33 @@ TEST_CASE("a diameter squared where a circle's area belongs") {
     const auto folded = run(decl, "v_fps = 0.4085*Q_gpm/d_in^2");
     CHECK(problems_in(folded) == 0);
 }
+
+// A triplex mud pump's output per stroke, q = 3·(π/4)·D²·L·E in bbl from inches, 0.000243 =
+// 3 × 0.7854/9702 in³ per bbl (9702 = 42 × 231, NIST SP 811 (2008), B.8), 0.0102 in US
+// gallons (IADC Drilling Manual, from memory). Without the square there is no plunger's area.
+TEST_CASE("a triplex pump's three plungers folded into its constant") {
+    const std::string pump = "measure stk = 1 1 \"one pump stroke\"\nq : bbl/stk\nq_g : gal/stk\n"
+                             "D : in\nL : in\nE : %\n";
+    for (const char* formula :
+         {"q = 0.000243*D^2*L*E/100", "q_g = 0.0102*D^2*L*E/100", "q = 3*pi/4*D^2*L/9702*E/100"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(pump, formula)) == 0);
+    }
+    CHECK(plumb::test::says(
+        first_under(run(pump, "q = 0.000243*D^2*L*E/100"), plumb::rules::trade_constant),
+        "triplex"));
+    fails_with(pump, {"q = 0.000243*D*L*E/100"}, plumb::rules::side_mismatch);
+    fails_with(pump, {"q = 0.000243*D^2*L*E", "q = 0.000243*D^2*L*E/100*1000"},
+               plumb::rules::unit_scale);
+}
+
+// M = 9550·P/n in N·m from kW and rpm (60000/(2π), common practice) and A = π·D²/4e6 in m²
+// from mm (the circle's 4 beside the 10⁶ of mm² to m², SI Brochure 9th ed., Table 7): read
+// folded, a further 1000 beside them was taken as a coefficient the units agree without, and
+// the line passed 1000 times too large. A reading that leaves a power of ten to spare is none.
+TEST_CASE("a folded constant's reading leaves no power of ten to spare") {
+    const std::string d = "T : N*m\nP : kW\nn : rpm\nA : m^2\nD : mm\n";
+    passes(d, {"T = 9550*P/n", "A = pi*D^2/4e6"});
+    fails_with(d, {"T = 9550*P/n*1000", "A = pi*D^2/4e6*1000", "T = 9550*P/(n*1000)"},
+               plumb::rules::unit_scale);
+}

@@ -105,9 +105,15 @@ bool checker::report_inverted_trade_constant(std::span<const operand> ops,
 }
 
 std::span<const checker::folded_constant> checker::folded_constants() {
-    static const std::array<folded_constant, 14> constants{{
+    static const std::array<folded_constant, 15> constants{{
         {4.0 / std::numbers::pi, "4/\u03C0", "the area of a circle", false, true},
         {std::numbers::pi / 4.0, "\u03C0/4", "the area of a circle", false, true},
+        // 0.000243 = 3 × π/4 / 9702 in³ per bbl in a triplex pump's q = 0.000243·D²·L·E in
+        // bbl/stroke from inches (IADC Drilling Manual, from memory; 0.0102 in gal/stroke).
+        {3.0 * std::numbers::pi / 4.0, "3\u03C0/4",
+         "a triplex pump's three plungers of "
+         "area \u03C0\u00B7D\u00B2/4",
+         false, true},
         // 9550 = 60000/(2π) in M = 9550*P/n (kW, rpm to N·m), 5252 = 33000/(2π) (hp, rpm
         // to lbf·ft); 191.5 = 2π × 30.48 in the Wenner array's ρ = 2π·a·R (ft to Ω·cm).
         {1.0 / (2.0 * std::numbers::pi), "1/(2\u03C0)",
@@ -179,8 +185,45 @@ class number_swap {
         return r.agree ? std::optional<double>(r.unit) : std::nullopt;
     }
 
+    // "T = 9550*P/n*1000", "A = pi*D^2/4e6*1000": read with number k of part i as `as`,
+    // whether a power of ten elsewhere could go as well, which the reading would then have
+    // hidden, since the units agree with or without it.
+    bool leaves_a_spare_power_of_ten(std::span<const scaled_operand> parts, std::size_t i,
+                                     std::size_t k, const scale_literal& as) {
+        for (std::size_t p = 0; p < parts.size(); ++p)
+            for (std::size_t q = 0; q < parts[p].literals.size(); ++q) {
+                const scale_literal& l = parts[p].literals[q];
+                if ((p == i && q == k) || !l.power_of_ten || l.value == 1.0 ||
+                    std::abs(l.exponent) != 1.0 || parts[p].literals.size() > most_numbers ||
+                    parts[i].literals.size() > most_numbers)
+                    continue;
+                scale_literal one = l;
+                one.value = 1.0;
+                one.tolerance = 0.0;
+                one.low = rational(1);
+                one.high = rational(1);
+                one.power_of_ten = false;
+                one.power = 0;
+                parts_.assign(parts.begin(), parts.end());
+                std::copy(parts[i].literals.begin(), parts[i].literals.end(), literals_.begin());
+                literals_[k] = as;
+                parts_[i].literals = {literals_.data(), parts[i].literals.size()};
+                if (p == i) {
+                    literals_[q] = one;
+                } else {
+                    std::copy(parts[p].literals.begin(), parts[p].literals.end(), second_.begin());
+                    second_[q] = one;
+                    parts_[p].literals = {second_.data(), parts[p].literals.size()};
+                }
+                if (reconcile(parts_).agree)
+                    return true;
+            }
+        return false;
+    }
+
   private:
     std::array<scale_literal, most_numbers> literals_{};
+    std::array<scale_literal, most_numbers> second_{};
     std::vector<scaled_operand> parts_;
 };
 
@@ -267,9 +310,10 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
     number_swap swap;
     const auto reconciles_with = [&](std::size_t i, std::size_t k, const scale_literal& as) {
         const std::optional<double> reconciled = swap.unit_with(parts, i, k, as);
-        if (reconciled)
-            unit = *reconciled;
-        return reconciled.has_value();
+        if (!reconciled || swap.leaves_a_spare_power_of_ten(parts, i, k, as))
+            return false;
+        unit = *reconciled;
+        return true;
     };
     // Pass 0 reads a power of ten; each later pass one folded constant, in the table's
     // order, over every number, so that the half of 1.075 is found before a 2 in 1.47.
