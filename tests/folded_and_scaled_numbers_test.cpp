@@ -1568,3 +1568,11 @@ TEST_CASE("a folded constant's reading leaves no power of ten to spare") {
     fails_with(d, {"T = 9550*P/n*1000", "A = pi*D^2/4e6*1000", "T = 9550*P/(n*1000)"},
                plumb::rules::unit_scale);
 }
+
+// W = 8.34·Q·C in lb/d from mgd and mg/L (8.34 lb per US gallon of water, common practice): a
+// 1000 beside it is one the units agree without, and the line is 1000 times too large.
+TEST_CASE("a trade constant's reading leaves no power of ten to spare") {
+    const std::string d = "W : lb/d\nQ : mgd\nC : mg/L\n";
+    passes(d, {"W = 8.34*Q*C"});
+    fails_with(d, {"W = 8.34*Q*C*1000", "W = 8.34*Q*C/1000"}, plumb::rules::unit_scale);
+}

@@ -5,6 +5,65 @@
 
 namespace plumb::formula_check {
 
+// Asks whether the parts' units reconcile with number k of part i read as another number,
+// keeping its buffers between questions. A part with more numbers than it holds is not asked.
+class number_swap {
+  public:
+    static constexpr std::size_t most_numbers = 8;
+
+    // The common unit's SI value where they reconcile.
+    std::optional<double> unit_with(std::span<const scaled_operand> parts, std::size_t i,
+                                    std::size_t k, const scale_literal& as) {
+        std::copy(parts[i].literals.begin(), parts[i].literals.end(), literals_.begin());
+        literals_[k] = as;
+        parts_.assign(parts.begin(), parts.end());
+        parts_[i].literals = {literals_.data(), parts[i].literals.size()};
+        const reconciliation r = reconcile(parts_);
+        return r.agree ? std::optional<double>(r.unit) : std::nullopt;
+    }
+
+    // "T = 9550*P/n*1000", "A = pi*D^2/4e6*1000": read with number k of part i as `as`,
+    // whether a power of ten elsewhere could go as well, which the reading would then have
+    // hidden, since the units agree with or without it.
+    bool leaves_a_spare_power_of_ten(std::span<const scaled_operand> parts, std::size_t i,
+                                     std::size_t k, const scale_literal& as) {
+        for (std::size_t p = 0; p < parts.size(); ++p)
+            for (std::size_t q = 0; q < parts[p].literals.size(); ++q) {
+                const scale_literal& l = parts[p].literals[q];
+                if ((p == i && q == k) || !l.power_of_ten || l.value == 1.0 ||
+                    std::abs(l.exponent) != 1.0 || parts[p].literals.size() > most_numbers ||
+                    parts[i].literals.size() > most_numbers)
+                    continue;
+                scale_literal one = l;
+                one.value = 1.0;
+                one.tolerance = 0.0;
+                one.low = rational(1);
+                one.high = rational(1);
+                one.power_of_ten = false;
+                one.power = 0;
+                parts_.assign(parts.begin(), parts.end());
+                std::copy(parts[i].literals.begin(), parts[i].literals.end(), literals_.begin());
+                literals_[k] = as;
+                parts_[i].literals = {literals_.data(), parts[i].literals.size()};
+                if (p == i) {
+                    literals_[q] = one;
+                } else {
+                    std::copy(parts[p].literals.begin(), parts[p].literals.end(), second_.begin());
+                    second_[q] = one;
+                    parts_[p].literals = {second_.data(), parts[p].literals.size()};
+                }
+                if (reconcile(parts_).agree)
+                    return true;
+            }
+        return false;
+    }
+
+  private:
+    std::array<scale_literal, most_numbers> literals_{};
+    std::array<scale_literal, most_numbers> second_{};
+    std::vector<scaled_operand> parts_;
+};
+
 // The power of ten that brings a printed number into a trade constant's range (1 where it
 // lies there as printed; a thousand or a million apart only for a property's range), or none.
 static std::optional<rational> decade_of_property(const rational& printed,
@@ -51,7 +110,10 @@ checker::read_trade_constant(std::span<const scaled_operand> parts, bool flipped
                 std::vector<scaled_operand> changed(parts.begin(), parts.end());
                 changed[i].literals = literals;
                 const reconciliation r = flipped ? reconcile(changed, {i, k}) : reconcile(changed);
-                if (r.agree)
+                // "W = 8.34*Q*C*1000" from mgd and mg/L: read so, the 1000 beside it is one
+                // the units agree without, 1000 times too large.
+                if (r.agree && (flipped || !number_swap().leaves_a_spare_power_of_ten(parts, i, k,
+                                                                                      literals[k])))
                     return trade_constant_reading{&l, &c, r.unit, *decade};
             }
         }
@@ -167,65 +229,6 @@ std::span<const checker::folded_constant> checker::folded_constants() {
     }};
     return constants;
 }
-
-// Asks whether the parts' units reconcile with number k of part i read as another number,
-// keeping its buffers between questions. A part with more numbers than it holds is not asked.
-class number_swap {
-  public:
-    static constexpr std::size_t most_numbers = 8;
-
-    // The common unit's SI value where they reconcile.
-    std::optional<double> unit_with(std::span<const scaled_operand> parts, std::size_t i,
-                                    std::size_t k, const scale_literal& as) {
-        std::copy(parts[i].literals.begin(), parts[i].literals.end(), literals_.begin());
-        literals_[k] = as;
-        parts_.assign(parts.begin(), parts.end());
-        parts_[i].literals = {literals_.data(), parts[i].literals.size()};
-        const reconciliation r = reconcile(parts_);
-        return r.agree ? std::optional<double>(r.unit) : std::nullopt;
-    }
-
-    // "T = 9550*P/n*1000", "A = pi*D^2/4e6*1000": read with number k of part i as `as`,
-    // whether a power of ten elsewhere could go as well, which the reading would then have
-    // hidden, since the units agree with or without it.
-    bool leaves_a_spare_power_of_ten(std::span<const scaled_operand> parts, std::size_t i,
-                                     std::size_t k, const scale_literal& as) {
-        for (std::size_t p = 0; p < parts.size(); ++p)
-            for (std::size_t q = 0; q < parts[p].literals.size(); ++q) {
-                const scale_literal& l = parts[p].literals[q];
-                if ((p == i && q == k) || !l.power_of_ten || l.value == 1.0 ||
-                    std::abs(l.exponent) != 1.0 || parts[p].literals.size() > most_numbers ||
-                    parts[i].literals.size() > most_numbers)
-                    continue;
-                scale_literal one = l;
-                one.value = 1.0;
-                one.tolerance = 0.0;
-                one.low = rational(1);
-                one.high = rational(1);
-                one.power_of_ten = false;
-                one.power = 0;
-                parts_.assign(parts.begin(), parts.end());
-                std::copy(parts[i].literals.begin(), parts[i].literals.end(), literals_.begin());
-                literals_[k] = as;
-                parts_[i].literals = {literals_.data(), parts[i].literals.size()};
-                if (p == i) {
-                    literals_[q] = one;
-                } else {
-                    std::copy(parts[p].literals.begin(), parts[p].literals.end(), second_.begin());
-                    second_[q] = one;
-                    parts_[p].literals = {second_.data(), parts[p].literals.size()};
-                }
-                if (reconcile(parts_).agree)
-                    return true;
-            }
-        return false;
-    }
-
-  private:
-    std::array<scale_literal, most_numbers> literals_{};
-    std::array<scale_literal, most_numbers> second_{};
-    std::vector<scaled_operand> parts_;
-};
 
 // Where a formula's own half or 2 may stand: a square (v²/(2a)), a length from a length
 // (a radius from a diameter), or two lengths in one product (the hoop stress p·D/(2t)).
