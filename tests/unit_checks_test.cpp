@@ -198,6 +198,10 @@ TEST_CASE("mixed units: the days or hours a plant runs in a year stand in for th
     const auto wrong = plumb::check_text(
         "y.plumb", decl + "m_yr = m_f*330\nm_yr = m_f*24*36\nE = P*365\nm_yr = m_d*8000\n");
     CHECK(findings(wrong, plumb::rules::unit_scale).size() == 4);
+    // A 1000 beside them that the units agree without is still 1000 too many.
+    const auto spare =
+        plumb::check_text("y.plumb", decl + "m_yr = m_f*24*330*1000\nE = P*8000/1000\n");
+    CHECK(findings(spare, plumb::rules::unit_scale).size() == 2);
 }
 
 // Water's kinematic viscosity, ν = 0.0178 St/(1 + 0.0337·t + 0.000221·t²) with t in °C

@@ -286,7 +286,7 @@ bool checker::accept_operating_time(std::span<const scaled_operand> parts, doubl
             year.high = rational(days ? 366 : 8784);
             year.power_of_ten = false;
             const std::optional<double> reconciled = swap.unit_with(parts, i, k, year);
-            if (!reconciled)
+            if (!reconciled || swap.leaves_a_spare_power_of_ten(parts, i, k, year))
                 continue;
             unit = *reconciled;
             diagnostic& d = report(
