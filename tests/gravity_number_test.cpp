@@ -1151,7 +1151,9 @@ TEST_CASE("water's and air's densities typed as numbers in a mass ratio") {
     const std::string d = "LG : 1\nQ : gpm\nV : cfm\nQ_ft : ft^3/min\n";
     passes_with_one_note(d, {"LG = 8.34*Q/(0.075*V)", "LG = 62.4*Q_ft/(0.075*V)"},
                          plumb::rules::trade_constant);
-    for (const char* wrong : {"LG = Q/V", "LG = 8.34*Q/V", "LG = 8.34*Q_ft/(0.075*V)"}) {
+    // A 1000 beside the two densities is one the units agree without: 1000 times too large.
+    for (const char* wrong : {"LG = Q/V", "LG = 8.34*Q/V", "LG = 8.34*Q_ft/(0.075*V)",
+                              "LG = 62.4*Q_ft/(0.075*V)*1000"}) {
         CAPTURE(wrong);
         CHECK(problems_in(run(d + wrong + "\n")) > 0);
     }

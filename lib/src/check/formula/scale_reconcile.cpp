@@ -236,7 +236,15 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         unit = r.unit;
         // "LG = 62.4*Q/(0.075*V)" with both flows in ft³/min: the densities' ratio, no
         // conversion to weigh.
-        if (parts.size() == 2 && dimensionless &&
+        // A power of ten beside them ("*1000") is one the units agree without: not read so.
+        const auto no_power_of_ten = [&] {
+            return std::none_of(parts.begin(), parts.end(), [](const scaled_operand& p) {
+                return std::any_of(
+                    p.literals.begin(), p.literals.end(),
+                    [](const scale_literal& l) { return l.power_of_ten && l.value != 1.0; });
+            });
+        };
+        if (parts.size() == 2 && dimensionless && no_power_of_ten() &&
             (densities_of_water_and_air(parts[0], parts[1], 1.0) ||
              densities_of_water_and_air(parts[1], parts[0], 1.0))) [[unlikely]]
             return true;
