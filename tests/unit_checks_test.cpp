@@ -693,3 +693,28 @@ TEST_CASE("unit scale: a mismatch inside a power is advised inside it") {
     REQUIRE(findings(plain, plumb::rules::unit_scale).size() == 1);
     CHECK(!mentions(*findings(plain, plumb::rules::unit_scale)[0], "inside the power"));
 }
+
+// A chiller's kW/TR is power in per ton of cooling out; a COP or an EER is cooling out per power
+// in: COP = 3.517/(kW/TR), EER = 12/(kW/TR), EER = 3.412·COP (1 TR = 3.517 kW = 12 000 Btu/h,
+// 1 W = 3.412 Btu/h, NIST SP 811 (2008), B.8; AHRI 550/590, from memory). Both are ratios of
+// powers, so the units cannot tell e/3.517 from its reciprocal: the senses are weighed instead.
+TEST_CASE("mixed units: kW per ton is the reciprocal of a COP") {
+    const std::string decl = "e : kW/TR \"chiller efficiency\"\nCOP : 1\nEER : Btu/(W*h)\n"
+                             "PLF : 1\ne_p : kW/TR\n";
+    for (const char* right : {"COP = 3.517/e", "e = 3.517/COP", "EER = 12/e", "EER = 3.412*COP",
+                              "e_p = e*PLF", "COP = 1/(e/3.517)"}) {
+        CAPTURE(right);
+        const auto r = plumb::check_text("c.plumb", decl + right + "\n");
+        CHECK(r.count(plumb::severity::error) == 0);
+        CHECK(findings(r, plumb::rules::unit_scale).empty());
+    }
+    for (const char* wrong :
+         {"COP = e/3.517", "COP = 3.517*e", "e = COP/3.517", "EER = 12*e", "EER = e/12"}) {
+        CAPTURE(wrong);
+        const auto r = plumb::check_text("c.plumb", decl + wrong + "\n");
+        const auto found = findings(r, plumb::rules::unit_scale);
+        REQUIRE(found.size() == 1);
+        CHECK(mentions(*found[0], "power in per ton of cooling out"));
+        CHECK(mentions(*found[0], "COP = 3.517/e"));
+    }
+}

@@ -27,6 +27,7 @@ enum unit_mark : std::uint8_t {
     offset_scale_readings = 8,   // °C, °F, psig, barg: readings whose scale's zero is arbitrary
     mass_fractions = 16,         // ppm, ppb: fractions the trades set beside mg/L in water
     tons = 32,                   // ton: the short ton, where cooling means a ton of refrigeration
+    per_ton_of_cooling = 64,     // kW/TR: a chiller's power in per cooling out, a COP's reciprocal
 };
 
 // "NL/min", "Nl": the normal litre, a thousandth of a normal cubic metre (DIN 1343's state,
@@ -64,6 +65,8 @@ enum unit_mark : std::uint8_t {
         marks |= mass_fractions;
     if (has("ton"))
         marks |= tons;
+    if (has("/TR") || has("/tonR"))
+        marks |= per_ton_of_cooling;
     return marks;
 }
 

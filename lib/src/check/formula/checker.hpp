@@ -677,6 +677,8 @@ class checker {
     bool report_energy_over_apparent_power(const operand& side);
     static bool names_power_factor(std::string_view name);
     [[gnu::noinline]] void report_apparent_as_real_power(std::span<const operand> sides);
+    [[gnu::noinline]] void report_cooling_efficiency_inverted(std::span<const operand> sides,
+                                                              std::size_t findings_before);
     static bool is_gas_volume_or_flow(const compact_dimension& dim);
 
     // Visits the factors of a product, through '*', '/' and groups, each with the power it

@@ -270,6 +270,7 @@ void checker::check_formula(const syntax::formula& f) {
             std::any_of(sides.begin(), sides.end(), [](const operand& side) {
                 return side.type.known && side.type.offset != nullptr;
             });
+        const std::size_t findings_before_scales = out_.size();
         if (on_offset_scale) {
             const std::size_t findings_before = out_.size();
             check_origins(sides, what);
@@ -320,6 +321,10 @@ void checker::check_formula(const syntax::formula& f) {
                  file_.nodes[sides[0].node].kind == expr_kind::divide)) [[unlikely]]
                 report_head_from_absolute(sides);
         }
+        if (equation && sides.size() == 2 && sides[0].type.known &&
+            sides[0].type.dim.is_dimensionless() && !on_offset_scale &&
+            (symbols_.unit_marks() & per_ton_of_cooling) != 0) [[unlikely]]
+            report_cooling_efficiency_inverted(sides, findings_before_scales);
         return;
     }
     if (file_.functions == syntax::function_names::spreadsheet && sides.size() == 2 &&

@@ -3,6 +3,7 @@
 // and the notes on how a side's units were read (a product after a slash, a ton beside a
 // power).
 #include "check/formula/checker.hpp"
+#include "model/ascii_case.hpp"
 
 namespace plumb::formula_check {
 
@@ -372,6 +373,77 @@ void checker::report_apparent_as_real_power(std::span<const operand> sides) {
 
 bool checker::is_gas_volume_or_flow(const compact_dimension& dim) {
     return dim == volume_dim || dim == volume_flow_dim;
+}
+
+// kW/TR, a chiller's power in per ton of cooling out (AHRI 550/590's kW/ton), is the
+// reciprocal of a COP or an EER, cooling out per power in: COP = 3.517/(kW/TR) and EER =
+// 12/(kW/TR), since 1 TR = 3.517 kW = 12 000 Btu/h (NIST SP 811 (2008), B.8). Both are ratios
+// of powers, so "COP = e/3.517" passes the units while it sets one proportional to the other.
+// Asked of an equation whose every symbol is one or the other, with numbers: each side's
+// powers of cooling over input must agree.
+// A factor the scale rules found the wrong way round in such an equation ("COP = 3.517*e") is
+// this mistake, and their advice (divide by 3.517) would leave it: this finding replaces theirs.
+void checker::report_cooling_efficiency_inverted(std::span<const operand> sides,
+                                                 std::size_t findings_before) {
+    enum class sense : std::uint8_t { none, input_per_output, output_per_input };
+    const auto sense_of = [&](std::string_view name, const symbol_entry& e) {
+        if (!e.dim || !e.dim->is_dimensionless())
+            return sense::none;
+        const std::string unit = lower_ascii(e.unit_text);
+        if (unit.starts_with("kw/tr") || unit.starts_with("kw/tonr"))
+            return sense::input_per_output;
+        const std::string upper = upper_ascii(name);
+        for (const std::string_view prefix : {"COP", "EER", "SEER", "IPLV"})
+            if (upper.starts_with(prefix) &&
+                (upper.size() == prefix.size() || upper[prefix.size()] == '_'))
+                return sense::output_per_input;
+        return sense::none;
+    };
+    std::array<int, 2> cooling_over_input{};
+    const symbol_entry* per_ton = nullptr;
+    std::string_view per_ton_name;
+    bool output_kind = false;
+    for (std::size_t i = 0; i < 2; ++i) {
+        const bool other = for_each_factor(sides[i].node, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number)
+                return false;
+            if (n.kind != expr_kind::symbol)
+                return true;
+            const std::string_view name = text(n.range);
+            const symbol_entry* e = symbols_.find(name);
+            const sense found = e != nullptr ? sense_of(name, *e) : sense::none;
+            if (found == sense::none)
+                return true;
+            if (found == sense::input_per_output && per_ton == nullptr) {
+                per_ton = e;
+                per_ton_name = name;
+            }
+            output_kind = output_kind || found == sense::output_per_input;
+            cooling_over_input[i] += found == sense::output_per_input ? sign : -sign;
+            return false;
+        });
+        if (other)
+            return;
+    }
+    if (per_ton == nullptr || !output_kind || cooling_over_input[0] == cooling_over_input[1])
+        return;
+    out_.erase(std::remove_if(out_.begin() + static_cast<std::ptrdiff_t>(findings_before),
+                              out_.end(),
+                              [](const diagnostic& f) { return f.rule == rules::unit_scale; }),
+               out_.end());
+    diagnostic& d = report(
+        rules::unit_scale,
+        fmt::format("'{}' ({}) is power in per ton of cooling out, and a coefficient of "
+                    "performance or an EER is cooling out per power in, its reciprocal: this "
+                    "equation makes one proportional to the other",
+                    per_ton_name, per_ton->unit_text),
+        file_.nodes[sides[1].node].range);
+    d.level = severity::warning;
+    d.notes.push_back({fmt::format("COP = 3.517/{} and EER = 12/{} (1 TR = 3.517 kW = 12 000 "
+                                   "Btu/h); {} = 3.517/COP",
+                                   per_ton_name, per_ton_name, per_ton_name),
+                       {}});
 }
 
 } // namespace plumb::formula_check
