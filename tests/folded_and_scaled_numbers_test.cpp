@@ -645,6 +645,13 @@ TEST_CASE("a rate's temperature correction counts kelvins above a reference") {
     passes(decl, {"k_T = k_20*θ^(20 - T_w)"});
     fails_with(decl, {"k_T = k_20*θ^(T_K - 20)", "k_T = k_20*θ^(20 - T_K)"},
                plumb::rules::offset_scale);
+    // The reference typed in kelvins counts from there too; a °F difference over 1.8, or times
+    // 5/9, is kelvins (a vendor's K_La correction from 68 °F).
+    fails_with(decl, {"k_T = k_20*θ^(T_K - 20 {K})"}, plumb::rules::offset_scale);
+    passes(decl, {"k_T = k_20*θ^(T_K - 293.15 {K})", "k_T = k_20*θ^((T_F - 68)/1.8)",
+                  "k_T = k_20*θ^((T_F - 68)*5/9)", "k_T = k_20*θ^((T_F - 68)*0.5556)"});
+    fails_with(decl, {"k_T = k_20*θ^((T_F - 68)*1.8)", "k_T = k_20*θ^((T_F - 68)/2)"},
+               plumb::rules::unit_scale);
 }
 
 // A conductor's resistance at θ, R = R_20·(1 + α_20·(θ - 20)) with θ in °C and α_20 = 0.00393

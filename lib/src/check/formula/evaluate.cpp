@@ -1520,6 +1520,12 @@ bool checker::counts_degrees_above_a_reference(const typed_term& base, const typ
 
 typed_term checker::temperature_correction(const typed_term& base, const typed_term& exponent,
                                            std::uint32_t exponent_node) {
+    // "θ^((t_F - 68)/1.8)": the exponent's numbers, which may take °F degrees to kelvins.
+    double numbers = 1.0;
+    for (std::size_t k = 0; k < exponent.literal_count; ++k) {
+        const scale_literal& l = literals_[exponent.literal_begin + k];
+        numbers *= std::pow(l.value, l.exponent);
+    }
     cut_literals_to(base.literal_begin);
     typed_term result;
     // θ^(T_K - 20): a kelvin reading less a reference in °C counts from 20 K, some 273
@@ -1550,7 +1556,12 @@ typed_term checker::temperature_correction(const typed_term& base, const typed_t
     }
     // A reading converted to another scale ((T_F - 32)/1.8) counts that scale's degrees.
     const double degree = exponent.offset != nullptr ? exponent.offset->factor : exponent.scale;
-    if (std::isfinite(degree) && std::abs(degree - 1.0) < 1e-9) {
+    // The numbers written make the degrees kelvins where they are the degree's size: 1/1.8
+    // exactly, or 5/9 printed 0.5556, for °F (NIST SP 811 (2008), B.9).
+    const bool converted_to_kelvins = std::isfinite(degree) && std::isfinite(numbers) &&
+                                      numbers != 1.0 && degree > 0.0 &&
+                                      std::abs(numbers / degree - 1.0) < 2e-4;
+    if (std::isfinite(degree) && (std::abs(degree - 1.0) < 1e-9 || converted_to_kelvins)) {
         // "θ^(20 - T_w)": the reference less the reading counts the degrees below it; a rate
         // that rises with temperature takes θ^(T - 20) (common practice).
         const syntax::expr_node& e = file_.nodes[syntax::inside_brackets(file_, exponent_node)];
@@ -1605,6 +1616,11 @@ double checker::reference_subtracted(std::uint32_t node) const {
         return written_number(file_.nodes[n.rhs].range);
     if (file_.nodes[n.lhs].kind == expr_kind::number)
         return written_number(file_.nodes[n.lhs].range);
+    // "T_w - 20 {K}": a reference typed in kelvins (its SI value) counts from there as well.
+    const std::uint32_t typed = syntax::inside_brackets(file_, n.rhs);
+    if (file_.nodes[typed].kind == expr_kind::quantity)
+        if (const double kelvins = quantity_si_value(file_.nodes[typed]); std::isfinite(kelvins))
+            return kelvins;
     return 0.0;
 }
 
