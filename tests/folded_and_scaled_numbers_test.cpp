@@ -525,6 +525,18 @@ TEST_CASE("words in a description that say a difference are whole words") {
 // A fracturing stage's bottomhole treating pressure is the surface pressure plus the column
 // less the pipe friction (common practice): a friction pressure is a loss. A thermometer reading
 // described "180 °F at the manifold plus line loss" is a reading: the loss is beside it.
+// Terzaghi's effective stress σ' = σ − u counts the pore water pressure u from the atmosphere,
+// as a vented piezometer reads it (common practice): u set equal to a kPag reading is right,
+// and an unvented transducer's absolute reading less the site barometer gives it too.
+TEST_CASE("a pore water pressure is a pressure above the atmosphere") {
+    const std::string d = "u : kPa \"pore water pressure at mid-clay\"\n"
+                          "p_pz : kPag \"vented piezometer\"\n"
+                          "p_pa : kPa \"unvented piezometer, absolute\"\n"
+                          "p_b : kPa \"site barometric pressure, 100.2 kPa\"\n"
+                          "σ_v, σ_e : kPa \"total and effective vertical stress\"\n";
+    passes(d, {"u = p_pz", "u = p_pa - p_b", "σ_e = σ_v - u"});
+}
+
 TEST_CASE("a friction is a difference, and a loss a reading is taken with is not") {
     const std::string frac = "p_s, p_bh : psig\np_h : psi \"hydrostatic of the flush column\"\n"
                              "p_fric : psi \"pipe friction to the perforations\"\n";

@@ -52,8 +52,11 @@ bool names_a_difference(std::string_view name, std::string_view description) {
     // "Water column over the diffusers": a liquid column's pressure, ρ·g·h, is its weight
     // per area above the surface's, a difference as "hydrostatic" is (a distillation
     // column's top pressure, a reading, says no "water column").
+    // "pore water pressure": the u of σ' = σ - u counts from the atmosphere, as a vented
+    // piezometer reads it (Terzaghi's effective stress; common practice).
     for (const std::string_view phrase :
-         {"water column", "liquid column", "column of water", "column of liquid"})
+         {"water column", "liquid column", "column of water", "column of liquid", "pore pressure",
+          "pore water pressure", "pore-water pressure", "porewater pressure"})
         if (description.find(phrase) != std::string_view::npos)
             return true;
     // "180 °F at the manifold plus line loss": a word that a reading is taken with, after or
