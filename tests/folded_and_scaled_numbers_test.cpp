@@ -308,6 +308,12 @@ TEST_CASE("an emission's correction to a reference oxygen written upside down") 
     fails_with(stack, {"C_ref = C*(20.9 - O2)/(20.9 - 3)", "C_ref = C*(21 - O2)/(21 - 6)/100"},
                plumb::rules::unit_scale);
     passes(stack, {"C_ref = C*(21 - 6)/(21 - O2)"});
+    // A flow corrects the other way, so that concentration times flow stays the mass emitted
+    // (EN 15259, from memory); a stoichiometric flue gas diluted by its excess air, 20.9/(20.9 -
+    // O2), is a flow's form too (common practice).
+    const std::string flows = "Q, Q_ref, Q_0 : Nm3/h\nO2 : %\n";
+    passes(flows, {"Q_ref = Q*(21 - O2)/(21 - 11)", "Q = Q_0*20.9/(20.9 - O2)"});
+    fails_with(flows, {"Q_ref = Q*(21 - 11)/(21 - O2)"}, plumb::rules::unit_scale);
 }
 
 TEST_CASE("a gauge pressure under a square root drives a discharge to the atmosphere") {

@@ -234,6 +234,30 @@ void checker::settle_percent_divisor(typed_term& result, const typed_term& facto
     } else if (carries_number_of_sum(op.lhs, op.rhs)) {
         result.scale *= factor.scale;
         result.exact_scale = exact_product(result.exact_scale, factor.exact_scale, false);
+        // "Q*(21 - 11)/(21 - O2_m)": a concentration's correction applied to a flow, which
+        // corrects the other way so that the mass emitted stays as measured.
+        // Only with a reference taken off above: 20.9/(20.9 - O2) alone is the dilution of a
+        // stoichiometric flue gas by its excess air, right for a flow.
+        const auto reference_above = [&] {
+            return for_each_factor(op.lhs, [&](std::uint32_t at, int sign) {
+                return sign > 0 &&
+                       file_.nodes[syntax::inside_brackets(file_, at)].kind ==
+                           expr_kind::subtract &&
+                       number_leading_sum(at, true) != syntax::no_index;
+            });
+        };
+        if (const std::uint32_t below = number_leading_sum(op.rhs, false);
+            below != syntax::no_index && oxygen_share_of_air(below) &&
+            has_factor_of_dimension(op.lhs, volume_flow_dim, 1) && reference_above()) [[unlikely]] {
+            diagnostic& d = report(
+                rules::unit_scale,
+                fmt::format("{} corrects a flow to a reference oxygen as a concentration is "
+                            "corrected: a flow takes the reciprocal, (21 - O2_measured)/(21 - "
+                            "O2_ref), so that concentration times flow stays the mass emitted",
+                            quote(op.lhs)),
+                file_.nodes[op.rhs].range);
+            d.level = severity::warning;
+        }
     }
 }
 
@@ -377,6 +401,11 @@ bool checker::report_oxygen_correction_upside_down(std::uint32_t numerator,
     });
     if (measured == syntax::no_index)
         return false;
+    // "Q_N*(21 - O2_m)/(21 - 11)": a flow corrects the other way round, so that concentration
+    // times flow, the mass emitted, stays as measured (EN 15259, from memory). The form is
+    // right there, and its % is settled as the concentration's is.
+    if (has_factor_of_dimension(numerator, volume_flow_dim, 1))
+        return true;
     const auto bracketed = [&](std::uint32_t k) {
         const std::string written = display_text(file_.nodes[k].range);
         return written.starts_with('(') ? written : "(" + written + ")";
