@@ -1230,3 +1230,19 @@ TEST_CASE("workbook parity: a duct's velocity pressure and friction rate in inch
             CHECK_FALSE(says(d, "coefficient"));
         }
 }
+
+TEST_CASE("workbook parity: a flow at 0 °C times a heating value per volume at 15 °C") {
+    // 1 Nm³ (0 °C) = 1.0549 Sm³ (15 °C), both at 101.325 kPa (ISO 13443, from memory): a
+    // meter's normal flow times a heating value per standard volume is 5.2 % low, as a
+    // symbol's declared units already said; the same states, or the ratio written, pass.
+    const std::string sheet =
+        "<worksheet><sheetData>" + labelled_row(2, "Flow, normal", "1800", "Nm³/h") +
+        labelled_row(3, "Flow, standard", "1899", "Sm³/h") +
+        labelled_row(4, "Heating value", "39.2", "MJ/Sm³") +
+        labelled_row(5, "Energy a day", "=B2*24*B4/1000", "GJ/d") +
+        labelled_row(6, "Energy a day", "=B3*24*B4/1000", "GJ/d") +
+        labelled_row(7, "Energy a day", "=B2*288.15/273.15*24*B4/1000", "GJ/d") +
+        "</sheetData></worksheet>";
+    CHECK(cell_findings(check_one_sheet("Gas", sheet)) ==
+          std::vector<std::string>{"Gas!B5 unit-scale"});
+}

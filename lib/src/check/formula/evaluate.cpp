@@ -300,6 +300,12 @@ void checker::check_formula(const syntax::formula& f) {
                 // Not the actual-against-normal rule: sheets write "m³/d" for standard
                 // volumes as often as for actual ones.
                 report_reference_temperatures_left_out(sides);
+            // "=C30*24*C38/1000" with C30 in Nm³/h and C38 in MJ/Sm³: two reference states
+            // in one product, as a symbol's declared units are weighed.
+            if (file_.functions == syntax::function_names::spreadsheet &&
+                out_.size() == findings_before && equation && sides.size() == 2 &&
+                sides[0].type.known && !is_gas_volume_or_flow(sides[0].type.dim)) [[unlikely]]
+                report_reference_states_in_ratio(sides[1]);
             // A workbook's cells declare no units up front: the rotation rules are asked
             // of the formulas whose sides could hold them.
             if (file_.functions == syntax::function_names::spreadsheet && equation &&

@@ -586,6 +586,24 @@ bool checker::report_reference_states_in_ratio(const operand& side) {
             other = other || !plain_conversion_number(at);
             return false;
         }
+        // A workbook's cell: "=C30*24*C38/1000" with C30 in Nm³/h and C38 in MJ/Sm³.
+        if (n.kind == expr_kind::reference) {
+            const syntax::reference_value& r = file_.references[n.lhs];
+            if ((unit_marks_of(r.unit_text) & at_reference_conditions) == 0) {
+                other = other || (r.dim && (compact_dimension(*r.dim) == pressure_dimension() ||
+                                            compact_dimension(*r.dim) == temperature_dimension()));
+                return false;
+            }
+            const std::optional<reference_volume> v = reference_volume_in(r.unit_text);
+            if (!v || std::abs(v->power) != 1)
+                return other = true;
+            const bool up = v->power * sign > 0;
+            if ((up ? above : below) != syntax::no_index)
+                return other = true;
+            (up ? above : below) = at;
+            (up ? top : bottom) = v;
+            return false;
+        }
         if (n.kind != expr_kind::symbol)
             return false;
         const symbol_entry* e = symbols_.find(text(n.range));
