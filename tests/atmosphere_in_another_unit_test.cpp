@@ -143,6 +143,19 @@ TEST_CASE("a net driving pressure is a difference, not a reading") {
 // t_F = 1.8·t_C + 32 and t_C = (t_F - 32)/1.8 (NIST SP 811 (2008), 4.2.1.1 and B.9): each
 // applied to a reading already on the scale it converts to is the conversion run backwards,
 // and the finding says which form the line needs.
+// T/K = (t/°F + 459.67)/1.8 (NIST SP 811 (2008), B.9): a °F reading divided by 1.8 into kelvins
+// has kept the degree's size and lost the zero; the advice adds the zero to the reading itself,
+// where keeping the /1.8 beside it would divide by 1.8 twice (267.7 K for 40 °F, not 277.6).
+TEST_CASE("a reading divided by 1.8 into kelvins is advised from the reading") {
+    const std::string d = "T_ev : K\nt_F : degF\nt_C : degC\n";
+    const auto r = run(d, "T_ev = t_F/1.8");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(r, plumb::rules::offset_scale), "(t_F + 459.67)/1.8 beside K"));
+    CHECK_FALSE(says(first_under(r, plumb::rules::offset_scale), "t_F/1.8 + 459.67"));
+    const auto c = run(d, "T_ev = t_C/1.8");
+    CHECK(says(first_under(c, plumb::rules::offset_scale), "(t_C + 273.15) beside K"));
+}
+
 TEST_CASE("a Fahrenheit conversion run the wrong way names the right form") {
     const std::string d = "T_3 : degC\nT_F : degF\n";
     const auto backwards = run(d, "T_F = (T_3 - 32)/1.8");

@@ -262,8 +262,24 @@ void checker::compare_origins(std::span<const operand> sides, std::string_view r
                 (kind == expr_kind::add || kind == expr_kind::subtract) &&
                 (file_.nodes[syntax::inside_brackets(file_, whole.lhs)].kind == expr_kind::number ||
                  file_.nodes[syntax::inside_brackets(file_, whole.rhs)].kind == expr_kind::number);
-            const std::string reading =
+            std::string reading =
                 has_number ? std::string("the reading") : display_text(file_.nodes[off.node].range);
+            // "T_ev = t_evF/1.8": the reading alone takes the zero; its degree's 1.8 beside
+            // it would only be divided in twice.
+            if (temperature && !has_number &&
+                file_.nodes[syntax::inside_brackets(file_, off.node)].kind != expr_kind::symbol) {
+                std::uint32_t lone = syntax::no_index;
+                const bool other = for_each_factor(off.node, [&](std::uint32_t at, int sign) {
+                    const expr_kind k = file_.nodes[at].kind;
+                    if (k == expr_kind::symbol && sign > 0 && lone == syntax::no_index) {
+                        lone = at;
+                        return false;
+                    }
+                    return k != expr_kind::number;
+                });
+                if (!other && lone != syntax::no_index)
+                    reading = display_text(file_.nodes[lone].range);
+            }
             // "p_0 = 0.9*p_1": a ratio times a gauge reading. An allowance on a set pressure
             // (1.1 × p_set, API 520) is taken of the gauge reading, and the atmosphere added
             // after it; a ratio of absolute pressures (an accumulator's precharge at 0.9 of
