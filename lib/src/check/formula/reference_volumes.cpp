@@ -580,6 +580,17 @@ bool checker::report_reference_states_in_ratio(const operand& side) {
     std::optional<reference_volume> top;
     std::optional<reference_volume> bottom;
     bool other = false;
+    // One gas volume in the product above and one below; a second on one side is no ratio.
+    const auto place = [&](std::uint32_t at, int sign, const std::optional<reference_volume>& v) {
+        if (!v || std::abs(v->power) != 1)
+            return other = true;
+        const bool up = v->power * sign > 0;
+        if ((up ? above : below) != syntax::no_index)
+            return other = true;
+        (up ? above : below) = at;
+        (up ? top : bottom) = v;
+        return false;
+    };
     for_each_factor(side.node, [&](std::uint32_t at, int sign) {
         const syntax::expr_node& n = file_.nodes[at];
         if (n.kind == expr_kind::number) {
@@ -594,15 +605,7 @@ bool checker::report_reference_states_in_ratio(const operand& side) {
                                             compact_dimension(*r.dim) == temperature_dimension()));
                 return false;
             }
-            const std::optional<reference_volume> v = reference_volume_in(r.unit_text);
-            if (!v || std::abs(v->power) != 1)
-                return other = true;
-            const bool up = v->power * sign > 0;
-            if ((up ? above : below) != syntax::no_index)
-                return other = true;
-            (up ? above : below) = at;
-            (up ? top : bottom) = v;
-            return false;
+            return place(at, sign, reference_volume_in(r.unit_text));
         }
         if (n.kind != expr_kind::symbol)
             return false;
@@ -613,15 +616,7 @@ bool checker::report_reference_states_in_ratio(const operand& side) {
                                *e->compact_dim == temperature_dimension()));
             return false;
         }
-        const std::optional<reference_volume> v = stated_reference_volume(*e);
-        if (!v || std::abs(v->power) != 1)
-            return other = true;
-        const bool up = v->power * sign > 0;
-        if ((up ? above : below) != syntax::no_index)
-            return other = true;
-        (up ? above : below) = at;
-        (up ? top : bottom) = v;
-        return false;
+        return place(at, sign, stated_reference_volume(*e));
     });
     if (other || above == syntax::no_index || below == syntax::no_index ||
         std::abs(top->kelvins / bottom->kelvins - 1.0) <= reference_temperature_slack)

@@ -11,6 +11,20 @@ class number_swap {
   public:
     static constexpr std::size_t most_numbers = 8;
 
+    // The number read as exactly 1: as if it were not written.
+    static scale_literal left_out(const scale_literal& l) {
+        scale_literal one = l;
+        one.value = 1.0;
+        one.tolerance = 0.0;
+        one.low = rational(1);
+        one.high = rational(1);
+        one.power_of_ten = false;
+        one.power = 0;
+        one.factor_like = false;
+        one.table_digits = false;
+        return one;
+    }
+
     // The common unit's SI value where they reconcile.
     std::optional<double> unit_with(std::span<const scaled_operand> parts, std::size_t i,
                                     std::size_t k, const scale_literal& as) {
@@ -34,13 +48,7 @@ class number_swap {
                     std::abs(l.exponent) != 1.0 || parts[p].literals.size() > most_numbers ||
                     parts[i].literals.size() > most_numbers)
                     continue;
-                scale_literal one = l;
-                one.value = 1.0;
-                one.tolerance = 0.0;
-                one.low = rational(1);
-                one.high = rational(1);
-                one.power_of_ten = false;
-                one.power = 0;
+                const scale_literal one = left_out(l);
                 parts_.assign(parts.begin(), parts.end());
                 std::copy(parts[i].literals.begin(), parts[i].literals.end(), literals_.begin());
                 literals_[k] = as;
@@ -673,16 +681,7 @@ bool checker::report_extra_factor(std::span<const operand> ops, std::span<const 
                     (l.exponent == 1.0 && (l.value == 1e3 || l.value == 1e6 || l.value == 1e9) &&
                      l.value == counted_multiple(ops[index[i]].node)))
                     continue;
-                scale_literal without = l;
-                without.value = 1.0;
-                without.tolerance = 0.0;
-                without.low = rational(1);
-                without.high = rational(1);
-                without.power_of_ten = false;
-                without.power = 0;
-                without.factor_like = false;
-                without.table_digits = false;
-                if (swap.unit_with(parts, i, k, without))
+                if (swap.unit_with(parts, i, k, number_swap::left_out(l)))
                     return report_unneeded(ops[index[i]], l);
             }
         }
