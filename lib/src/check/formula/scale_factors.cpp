@@ -28,10 +28,7 @@ class number_swap {
     // The common unit's SI value where they reconcile.
     std::optional<double> unit_with(std::span<const scaled_operand> parts, std::size_t i,
                                     std::size_t k, const scale_literal& as) {
-        std::copy(parts[i].literals.begin(), parts[i].literals.end(), literals_.begin());
-        literals_[k] = as;
-        parts_.assign(parts.begin(), parts.end());
-        parts_[i].literals = {literals_.data(), parts[i].literals.size()};
+        swap_in(parts, i, k, as);
         const reconciliation r = reconcile(parts_);
         return r.agree ? std::optional<double>(r.unit) : std::nullopt;
     }
@@ -41,32 +38,41 @@ class number_swap {
     // hidden, since the units agree with or without it.
     bool leaves_a_spare_power_of_ten(std::span<const scaled_operand> parts, std::size_t i,
                                      std::size_t k, const scale_literal& as) {
-        for (std::size_t p = 0; p < parts.size(); ++p)
+        if (parts[i].literals.size() > most_numbers)
+            return false;
+        for (std::size_t p = 0; p < parts.size(); ++p) {
+            if (parts[p].literals.size() > most_numbers)
+                continue;
             for (std::size_t q = 0; q < parts[p].literals.size(); ++q) {
                 const scale_literal& l = parts[p].literals[q];
                 if ((p == i && q == k) || !l.power_of_ten || l.value == 1.0 ||
-                    std::abs(l.exponent) != 1.0 || parts[p].literals.size() > most_numbers ||
-                    parts[i].literals.size() > most_numbers)
+                    std::abs(l.exponent) != 1.0)
                     continue;
-                const scale_literal one = left_out(l);
-                parts_.assign(parts.begin(), parts.end());
-                std::copy(parts[i].literals.begin(), parts[i].literals.end(), literals_.begin());
-                literals_[k] = as;
-                parts_[i].literals = {literals_.data(), parts[i].literals.size()};
+                swap_in(parts, i, k, as);
                 if (p == i) {
-                    literals_[q] = one;
+                    literals_[q] = left_out(l);
                 } else {
                     std::copy(parts[p].literals.begin(), parts[p].literals.end(), second_.begin());
-                    second_[q] = one;
+                    second_[q] = left_out(l);
                     parts_[p].literals = {second_.data(), parts[p].literals.size()};
                 }
                 if (reconcile(parts_).agree)
                     return true;
             }
+        }
         return false;
     }
 
   private:
+    // The parts with number k of part i read as `as`, in parts_.
+    void swap_in(std::span<const scaled_operand> parts, std::size_t i, std::size_t k,
+                 const scale_literal& as) {
+        std::copy(parts[i].literals.begin(), parts[i].literals.end(), literals_.begin());
+        literals_[k] = as;
+        parts_.assign(parts.begin(), parts.end());
+        parts_[i].literals = {literals_.data(), parts[i].literals.size()};
+    }
+
     std::array<scale_literal, most_numbers> literals_{};
     std::array<scale_literal, most_numbers> second_{};
     std::vector<scaled_operand> parts_;
@@ -906,14 +912,14 @@ bool checker::report_inverted_and_decade_short(std::span<const operand> ops,
             const operand& op = ops[index[i]];
             const std::string_view written = text(file_.nodes[l.node].range);
             const bool divides = l.exponent < 0;
+            const std::string missing = format_factor(decade > 1.0 ? decade : 1.0 / decade);
             diagnostic& d = report(
                 rules::unit_scale,
                 fmt::format("the factor {} is the wrong way round, and a further {} is missing: "
                             "the units of {} need {} by {} and {} by {}",
-                            written, format_factor(decade > 1.0 ? decade : 1.0 / decade),
-                            quote(op.node), divides ? "a multiplication" : "a division", written,
-                            decade > 1.0 ? "a division" : "a multiplication",
-                            format_factor(decade > 1.0 ? decade : 1.0 / decade)),
+                            written, missing, quote(op.node),
+                            divides ? "a multiplication" : "a division", written,
+                            decade > 1.0 ? "a division" : "a multiplication", missing),
                 file_.nodes[l.node].range);
             add_term_and_units(d, op);
             d.notes.push_back({fmt::format("as written the result is {} times its true value",
