@@ -15,7 +15,9 @@
 namespace {
 
 using plumb::test::count_of;
+using plumb::test::first_under;
 using plumb::test::problems_in;
+using plumb::test::says;
 constexpr auto fails_with = plumb::test::each_fails_with;
 constexpr auto passes = plumb::test::each_passes;
 
@@ -795,6 +797,30 @@ TEST_CASE("an energy over an apparent power") {
         CHECK(count_of(run(decl + formula + "\n"), plumb::rules::unit_scale) == 1);
     }
     for (const char* formula : {"t = 60*E/(S*pf)", "t = 60*DoD*E/P"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 0);
+    }
+}
+
+// A generating set's fuel burn is its specific fuel consumption, per kWh of real energy,
+// times the real power, the kVA rating times the power factor and the load (ISO 8528-1
+// rates a set in kVA at 0.8 power factor, from memory); an energy into kWh or a tariff per
+// kWh counts the same real power. With the power factor beside the kVA, typed as 0.8 or
+// named, or a charge per kVA, or an energy in kVA·h, nothing is asked.
+TEST_CASE("an apparent power times a rate per unit of real energy") {
+    const std::string decl = "S_r : kVA\nP_e : kW\npf, x_L : 1\nSFC : g/kWh\nm_f : kg/h\n"
+                             "E : kWh\nE_s : kVA*h\nt_r : h\nc_e : $/kWh\nc_d : $/kVA\n"
+                             "C : $\nq_f : L/kWh\nQ_f : L/h\n";
+    for (const char* formula :
+         {"m_f = SFC*x_L*S_r/1000", "E = S_r*t_r", "C = c_e*S_r*t_r", "Q_f = q_f*S_r"}) {
+        CAPTURE(formula);
+        const auto r = run(decl + formula + "\n");
+        CHECK(count_of(r, plumb::rules::unit_scale) == 1);
+        CHECK(says(first_under(r, plumb::rules::unit_scale), "power factor"));
+    }
+    for (const char* formula :
+         {"m_f = SFC*x_L*pf*S_r/1000", "m_f = SFC*S_r*0.8/1000", "m_f = SFC*P_e/1000",
+          "E_s = S_r*t_r", "E = S_r*pf*t_r", "C = c_d*S_r", "C = c_e*E"}) {
         CAPTURE(formula);
         CHECK(problems_in(run(decl + formula + "\n")) == 0);
     }

@@ -674,7 +674,8 @@ class checker {
     [[gnu::noinline]] void ask_of_marked_units(const syntax::formula& f,
                                                std::span<const operand> sides, bool noted);
     [[gnu::noinline]] void report_angular_frequency_as_cycles(std::span<const operand> sides);
-    bool report_energy_over_apparent_power(const operand& side);
+    bool report_apparent_power_without_factor(const operand& side, const operand& other);
+    bool declares_real_energy(std::uint32_t node) const;
     static bool names_power_factor(std::string_view name);
     [[gnu::noinline]] void report_apparent_as_real_power(std::span<const operand> sides);
     [[gnu::noinline]] void report_cooling_efficiency_inverted(std::span<const operand> sides,

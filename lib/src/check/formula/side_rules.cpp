@@ -235,8 +235,8 @@ void checker::ask_of_marked_units(const syntax::formula& f, std::span<const oper
     if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
         report_apparent_as_real_power(sides);
     else if ((marks & apparent_power) != 0)
-        for (const operand& side : sides)
-            if (report_energy_over_apparent_power(side))
+        for (std::size_t i = 0; i < 2; ++i)
+            if (report_apparent_power_without_factor(sides[i], sides[1 - i]))
                 break;
 }
 
@@ -286,45 +286,104 @@ void checker::report_angular_frequency_as_cycles(std::span<const operand> sides)
 
 // "t = 60*E_bat/S_ups" with E in kWh and S in kVA: a battery's or a tank's energy lasts
 // as long as the real power drawn from it, the apparent power times the power factor
-// (and over the inverter's efficiency; IEEE 1184, from memory). Asked of a product that
-// divides an energy by an apparent power with no power factor beside it.
-bool checker::report_energy_over_apparent_power(const operand& side) {
+// (and over the inverter's efficiency; IEEE 1184, from memory). "m_f = SFC*S_r/1000" with
+// SFC in g/kWh and "E = S_r*t" into kWh: a fuel rate, a tariff or an emission factor per
+// kWh counts kWh of real energy, and so does an energy in Wh or J, while a generating set or
+// a transformer is rated in kVA (ISO 8528-1 rates a set at 0.8 power factor, from memory).
+// Asked of a product that divides an energy by an apparent power, or multiplies one by a
+// quantity per unit of energy, or into an energy, with no power factor beside it.
+bool checker::report_apparent_power_without_factor(const operand& side, const operand& other) {
     std::uint32_t energy = syntax::no_index;
+    std::uint32_t per_energy = syntax::no_index;
     std::uint32_t apparent = syntax::no_index;
+    int apparent_sign = 0;
     bool factor_beside = false;
+    const auto is_per_energy = [](const compact_dimension& d) {
+        if (d.is_dimensionless() || d.in_arena())
+            return false;
+        const compact_dimension counted = d * energy_dim;
+        return counted.is_dimensionless() || counted == mass_dim || counted == volume_dim;
+    };
     for_each_factor(side.node, [&](std::uint32_t at, int sign) {
         const syntax::expr_node& n = file_.nodes[at];
+        // "S*0.8": a power factor typed as a number, as a rating's 0.8 is.
+        if (n.kind == expr_kind::number && sign > 0) {
+            const double v = written_number(n.range);
+            factor_beside = factor_beside || (v >= 0.5 && v < 1.0);
+            return false;
+        }
         if (n.kind != expr_kind::symbol)
             return false;
         const std::string_view name = text(n.range);
         const symbol_entry* e = symbols_.find(name);
         if (e == nullptr || !e->compact_dim)
             return false;
-        if ((unit_marks_of(e->unit_text) & apparent_power) != 0 && sign < 0)
+        const bool in_apparent_units = (unit_marks_of(e->unit_text) & apparent_power) != 0;
+        if (in_apparent_units && *e->compact_dim == power_dim) {
             apparent = at;
-        else if (*e->compact_dim == energy_dim && sign > 0 &&
-                 (e->unit_text.find("Wh") != std::string_view::npos ||
-                  e->unit_text.find('J') != std::string_view::npos))
-            energy = at;
-        else if (e->compact_dim->is_dimensionless() && names_power_factor(name))
+            apparent_sign = sign;
+        } else if (in_apparent_units) {
+            // c in $/kVAh or a demand charge per kVA: counted against the apparent power.
             factor_beside = true;
+        } else if (*e->compact_dim == energy_dim && sign > 0 &&
+                   (e->unit_text.find("Wh") != std::string_view::npos ||
+                    e->unit_text.find('J') != std::string_view::npos)) {
+            energy = at;
+        } else if (sign > 0 && is_per_energy(*e->compact_dim)) {
+            per_energy = at;
+        } else if (e->compact_dim->is_dimensionless() && names_power_factor(name)) {
+            factor_beside = true;
+        }
         return false;
     });
-    if (energy == syntax::no_index || apparent == syntax::no_index || factor_beside)
+    if (apparent == syntax::no_index || factor_beside)
         return false;
     const symbol_entry& s = *symbols_.find(text(file_.nodes[apparent].range));
-    diagnostic& d =
-        report(rules::unit_scale,
-               fmt::format("{} is an apparent power ({}): {} lasts as long as the real power drawn "
-                           "from it, which is the apparent power times the power factor, and this "
-                           "formula leaves the power factor out",
-                           quote(apparent), s.unit_text, quote(energy)),
-               file_.nodes[side.node].range);
+    const auto unit_of = [&](std::uint32_t at) {
+        return symbols_.find(text(file_.nodes[at].range))->unit_text;
+    };
+    std::string message;
+    std::string advice;
+    if (apparent_sign < 0 && energy != syntax::no_index) {
+        message = fmt::format("{} is an apparent power ({}): {} lasts as long as the real power "
+                              "drawn from it, which is the apparent power times the power "
+                              "factor, and this formula leaves the power factor out",
+                              quote(apparent), s.unit_text, quote(energy));
+        advice = "divide by the real power, S*pf (and over the inverter's or the drive's "
+                 "efficiency where there is one)";
+    } else if (apparent_sign > 0 && per_energy != syntax::no_index) {
+        message = fmt::format("{} is an apparent power ({}), and {} counts per unit of real "
+                              "energy, in {}: the real power is the apparent power times the "
+                              "power factor, which this formula leaves out",
+                              quote(apparent), s.unit_text, quote(per_energy), unit_of(per_energy));
+        advice = "multiply the apparent power by the power factor, S*pf, or use the real "
+                 "power in kW";
+    } else if (apparent_sign > 0 && side.type.known && side.type.dim == energy_dim &&
+               declares_real_energy(other.node)) {
+        message = fmt::format("{} is an apparent power ({}), and this side is an energy, "
+                              "counted in real power over time: the real power is the apparent "
+                              "power times the power factor, which this formula leaves out",
+                              quote(apparent), s.unit_text);
+        advice = "multiply the apparent power by the power factor, S*pf, or use the real "
+                 "power in kW";
+    } else {
+        return false;
+    }
+    diagnostic& d = report(rules::unit_scale, std::move(message), file_.nodes[side.node].range);
     d.level = severity::warning;
-    d.notes.push_back({"divide by the real power, S*pf (and over the inverter's or the "
-                       "drive's efficiency where there is one)",
-                       {}});
+    d.notes.push_back({std::move(advice), {}});
     return true;
+}
+
+// A side that is a symbol declared in Wh or J (not kVAh), times conversions.
+bool checker::declares_real_energy(std::uint32_t node) const {
+    const std::uint32_t at = sole_symbol_times_conversions(node);
+    if (at == syntax::no_index)
+        return false;
+    const std::optional<std::string_view> unit = declared_unit_text(at);
+    return unit && (unit_marks_of(*unit) & apparent_power) == 0 &&
+           (unit->find("Wh") != std::string_view::npos ||
+            unit->find('J') != std::string_view::npos);
 }
 
 // A power factor or an efficiency by its name: pf, cosφ, η. Not by a description, which
