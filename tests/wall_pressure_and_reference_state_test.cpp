@@ -986,3 +986,46 @@ TEST_CASE("a gauge reading in a gas's adiabatic compression") {
                plumb::rules::offset_scale);
     passes(decl, {"P_kW = k/(k - 1)*p_a*V_s*(r_c^((k - 1)/k) - 1)/η_c", "P_kW = p_g*V_s/η_c"});
 }
+
+// A column's foot is at the atmosphere above it plus the column, p = p_b + ρ·g·h (hydrostatics;
+// any fluids text): at a site whose barometer the file declares, the sea level's 101.325 kPa
+// added to the column is the site's atmosphere missed, as it is beside a gauge reading. An
+// aeration calc at standard conditions, where the sum stands over 101.325 again, is set at the
+// sea level's atmosphere throughout (ASCE 2-06's standard conditions, from memory).
+TEST_CASE("a column's pressure plus the sea-level atmosphere where the site's is declared") {
+    const std::string site = "p_b : kPa \"site barometric pressure, 95.0 kPa\"\n"
+                             "ρ : kg/m^3\nh, z : m\np_abs : kPa\nO_t : %\nC_s, C_m : mg/L\n"
+                             "p_z : kPa \"water column over the diffusers\"\n";
+    fails_with(site, {"p_abs = ρ*{g_n}*h/1000 + 101.325", "p_abs = 101.325 + p_z"},
+               plumb::rules::offset_scale);
+    const auto r = run(site, "p_abs = ρ*{g_n}*h/1000 + 101.325");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale),
+                            "write p_b in place of 101.325"));
+    passes(site, {"p_abs = ρ*{g_n}*h/1000 + p_b", "p_abs = p_b + p_z"});
+    passes(site, {"C_m = C_s*0.5*((101.325 + p_z)/101.325 + O_t/21)"}, 2);
+    // With no site barometer declared, the sea level's is the trade's reading.
+    passes("ρ : kg/m^3\nh : m\np_abs : kPa\n", {"p_abs = ρ*{g_n}*h/1000 + 101.325"}, 1);
+}
+
+// A vacuum gauge reads how far the pressure is below the barometer, so the absolute pressure
+// is the barometer less the vacuum (a condenser's back pressure, 27.4 inHg of vacuum under a
+// 29.92 inHg barometer, is 2.5 inHg absolute; common practice; 1 inHg = 3.386389 kPa, NIST SP
+// 811 (2008), B.8). A vacuum typed in for the absolute pressure is 11 times too high there;
+// negated it is the gauge reading, and converted it is the vacuum in another unit.
+TEST_CASE("a vacuum set equal to an absolute pressure") {
+    const std::string plant = "p_b : kPa \"site barometric pressure, 99.1 kPa\"\n"
+                              "p_vac : inHg \"condenser vacuum on the hotwell gauge\"\n"
+                              "p_c : kPa \"condenser absolute pressure\"\n"
+                              "vac_kPa : kPa \"the same vacuum below the barometer\"\n"
+                              "p_g : kPag \"condenser pressure on the DCS\"\n"
+                              "p_ch : kPa \"chamber vacuum pulse, absolute\"\n";
+    fails_with(plant, {"p_c = 3.386*p_vac", "p_c = p_vac*3.386", "p_c = vac_kPa"},
+               plumb::rules::offset_scale);
+    const auto r = run(plant, "p_c = 3.386*p_vac");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale),
+                            "the absolute pressure is the barometer less the vacuum"));
+    CHECK(
+        plumb::test::says(first_under(r, plumb::rules::offset_scale), "write (p_b - 3.386*p_vac)"));
+    passes(plant, {"p_c = p_b - 3.386*p_vac", "vac_kPa = 3.386*p_vac", "p_g = -3.386*p_vac",
+                   "p_g = -vac_kPa", "p_ch = p_c"});
+}

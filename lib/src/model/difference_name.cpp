@@ -100,6 +100,15 @@ bool names_a_difference(std::string_view name, std::string_view description) {
     return false;
 }
 
+bool counts_below_the_barometer(std::string_view name, std::string_view description) {
+    const bool said = name.find("vac") != std::string_view::npos ||
+                      description.find("vacuum") != std::string_view::npos ||
+                      description.find("Vacuum") != std::string_view::npos;
+    return said && description.find("absolute") == std::string_view::npos &&
+           description.find("Absolute") == std::string_view::npos &&
+           name.find("abs") == std::string_view::npos;
+}
+
 bool names_a_site_barometer(std::string_view name, std::string_view description) {
     if (!names_the_atmosphere(name, description))
         return false;

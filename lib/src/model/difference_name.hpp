@@ -23,6 +23,12 @@ bool names_the_atmosphere(std::string_view name, std::string_view description);
 // atmosphere" names the atmosphere but is none).
 bool names_a_site_barometer(std::string_view name, std::string_view description);
 
+// Whether a pressure's name or description says it is a vacuum ("vac", "condenser vacuum,
+// 27 inHg below the barometer"): a depth below the atmosphere, counted down from it as a
+// gauge counts up, so a difference from the barometer and no absolute reading. Not one whose
+// words call it absolute ("chamber pressure at the first vacuum pulse, absolute").
+bool counts_below_the_barometer(std::string_view name, std::string_view description);
+
 // Whether a pure number's name or description says it is a liquid's specific gravity (SG,
 // SG_m, "specific gravity", "relative density"), which goes wherever water's density goes.
 bool names_specific_gravity(std::string_view name, std::string_view description);

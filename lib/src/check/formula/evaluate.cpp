@@ -110,10 +110,17 @@ bool checker::declared_pressure_difference(const operand& o) const {
     // pressure): a declared difference times numbers and ratios (conversions, or a factor the
     // wrong way round, which the scale rule then names) is a difference still. The side is a
     // pressure, so the other factors of a declared pressure multiply to a pure number.
+    // "p_g = -3.386*p_vac": a difference taken the other way is one still, as a vacuum
+    // is a gauge reading below the atmosphere.
+    std::uint32_t product = o.node;
+    while (file_.nodes[product].kind == expr_kind::negate ||
+           file_.nodes[product].kind == expr_kind::group)
+        product = file_.nodes[product].lhs;
     std::uint32_t difference = syntax::no_index;
-    const bool other = for_each_factor(o.node, [&](std::uint32_t at, int sign) {
+    const bool other = for_each_factor(product, [&](std::uint32_t at, int sign) {
         const syntax::expr_node& n = file_.nodes[at];
-        if (n.kind == expr_kind::number)
+        if (n.kind == expr_kind::number ||
+            (n.kind == expr_kind::negate && file_.nodes[n.lhs].kind == expr_kind::number))
             return false;
         // A cell whose row label says it is a difference ("Friction loss"), as a symbol's
         // name or words do.
@@ -321,6 +328,10 @@ void checker::check_formula(const syntax::formula& f) {
                 (sides[0].type.absolute_pressure_difference ||
                  sides[1].type.absolute_pressure_difference)) [[unlikely]]
                 report_absolute_set_to_difference(sides);
+            if (equation && sides.size() == 2 && out_.size() == findings_before &&
+                sides[0].type.known && sides[0].type.dim == pressure_dimension() &&
+                sides[0].type.point != sides[1].type.point) [[unlikely]]
+                report_vacuum_as_absolute(sides);
             if (equation && sides.size() == 2 && out_.size() == findings_before &&
                 sides[0].type.known && sides[0].type.dim == length_dimension() &&
                 (file_.nodes[sides[1].node].kind == expr_kind::divide ||
@@ -563,7 +574,8 @@ typed_term checker::declared_type(symbol_entry* entry, std::string_view name) {
         const bool difference_unit = entry->unit_text.starts_with("\u0394");
         const bool reading =
             (t.dim == temperature_dimension() ||
-             (t.dim == pressure_dimension() && !names_a_stress(name, entry->description))) &&
+             (t.dim == pressure_dimension() && !names_a_stress(name, entry->description) &&
+              !counts_below_the_barometer(name, entry->description))) &&
             !difference_unit && !names_a_difference(name, entry->description);
         entry->reading = reading ? 1 : 0;
         t.point = reading;

@@ -38,9 +38,13 @@ bool checker::read_column_and_atmosphere(std::size_t base, std::uint32_t sum_nod
         if (op.subtracted || !t.known || !t.numeric || t.zero || t.literal_count != 1)
             continue;
         const scale_literal& l = literals_[t.literal_begin];
+        // "97.5 - 3.386*v_op": the site's declared barometer typed as its number.
+        const site_barometer* site = declared_site_barometer();
+        const bool the_site = site != nullptr && std::abs(l.value * unit / site->pascals - 1.0) <=
+                                                     site_barometer_slack_in_difference;
         if (l.exponent != 1.0 ||
-            read_reference_state(pressure, l.value, text(file_.nodes[l.node].range), unit) ==
-                nullptr)
+            (!the_site && read_reference_state(pressure, l.value, text(file_.nodes[l.node].range),
+                                               unit) == nullptr))
             continue;
         if (atmosphere != count)
             return false; // two atmospheres: no reading
@@ -70,6 +74,7 @@ bool checker::read_column_and_atmosphere(std::size_t base, std::uint32_t sum_nod
     auto& t = const_cast<typed_term&>(operands_[base + atmosphere].type);
     scale_literal& number = literals_[t.literal_begin];
     const std::uint32_t number_node = number.node;
+    const double atmosphere_pascals = number.value * unit;
     const reference_state* state =
         read_reference_state(pressure, number.value, text(file_.nodes[number_node].range), unit);
     t.dim = pressure;
@@ -99,6 +104,40 @@ bool checker::read_column_and_atmosphere(std::size_t base, std::uint32_t sum_nod
         literals_.insert(literals_.end(), saved_literals.begin(), saved_literals.end());
         out_.erase(out_.begin() + static_cast<std::ptrdiff_t>(findings_before), out_.end());
         return false;
+    }
+    // "ρ*g*h/1000 + 101.325" where the file declares its site's barometer at 95 kPa: the
+    // column's foot is at the site's atmosphere plus the column, not the sea level's.
+    // Not "((101.325 + p_z)/101.325 + O_t/21)", an oxygen transfer's standard conditions,
+    // which set the whole formula at the sea level's atmosphere (ASCE 2-06, from memory).
+    const auto another_standard_atmosphere = [&] {
+        const auto standard = [&](std::uint32_t at, const syntax::expr_node& n) {
+            return at != number_node && n.kind == expr_kind::number &&
+                           std::abs(written_number(n.range) * unit / standard_atmosphere - 1.0) <=
+                               0.005
+                       ? search_step::found
+                       : search_step::descend;
+        };
+        return current_ != nullptr ? syntax::search_formula(file_, *current_, standard)
+                                   : syntax::search_subtree(file_, sum_node, standard);
+    };
+    if (const site_barometer* site = declared_site_barometer();
+        site != nullptr && std::abs(atmosphere_pascals / standard_atmosphere - 1.0) <= 0.005 &&
+        std::abs(atmosphere_pascals / site->pascals - 1.0) > site_barometer_slack &&
+        !another_standard_atmosphere()) {
+        report_atmosphere_not_the_site(number_node, "the atmosphere at sea level",
+                                       atmosphere_pascals, *site, unit, false);
+        return true;
+    }
+    if (state == nullptr) {
+        const site_barometer& site = *declared_site_barometer();
+        diagnostic& d = report(rules::trade_constant,
+                               fmt::format("'{}' is read as the site's barometer '{}', typed as "
+                                           "its number",
+                                           display_text(file_.nodes[number_node].range), site.name),
+                               file_.nodes[number_node].range);
+        d.level = severity::note;
+        d.notes.push_back({fmt::format("write '{}' to say so", site.name), {}});
+        return true;
     }
     diagnostic& d =
         report(rules::trade_constant,

@@ -914,6 +914,48 @@ void checker::report_absolute_set_to_difference(std::span<const operand> sides) 
     }
 }
 
+// "p_c = 3.386*p_vac" with p_c the condenser's absolute pressure and p_vac its vacuum in
+// inHg: a vacuum gauge reads how far below the barometer the pressure is, so the absolute
+// pressure is the barometer less the vacuum (ASME PTC 12.2 reads a condenser so, from
+// memory). Both sides are pressures in plain units, and no unit tells them apart.
+void checker::report_vacuum_as_absolute(std::span<const operand> sides) {
+    for (std::size_t k = 0; k < 2; ++k) {
+        const std::uint32_t absolute = sole_symbol_times_conversions(sides[k].node);
+        const std::uint32_t vacuum = sole_symbol_times_conversions(sides[1 - k].node);
+        if (absolute == syntax::no_index || vacuum == syntax::no_index)
+            continue;
+        const std::string_view absolute_name = text(file_.nodes[absolute].range);
+        const std::string_view vacuum_name = text(file_.nodes[vacuum].range);
+        const symbol_entry* a = symbols_.find(absolute_name);
+        const symbol_entry* v = symbols_.find(vacuum_name);
+        if (a == nullptr || v == nullptr || !a->compact_dim || !v->compact_dim ||
+            *a->compact_dim != pressure_dimension() || *v->compact_dim != pressure_dimension() ||
+            a->offset_unit != nullptr || v->offset_unit != nullptr || !said_absolute(*a) ||
+            counts_below_the_barometer(absolute_name, a->description) ||
+            !counts_below_the_barometer(vacuum_name, v->description) ||
+            names_a_difference(absolute_name, a->description))
+            continue;
+        diagnostic& d =
+            report(rules::offset_scale,
+                   fmt::format("{} is an absolute pressure, but {} is a vacuum, counted down from "
+                               "the barometer: the absolute pressure is the barometer less the "
+                               "vacuum",
+                               quote(absolute), quote(vacuum)),
+                   file_.nodes[sides[1 - k].node].range);
+        d.level = severity::warning;
+        add_term(d, sides[k]);
+        add_term(d, sides[1 - k], true);
+        const std::string written = display_text(file_.nodes[sides[1 - k].node].range);
+        const std::optional<std::string> barometer = barometer_converted_to(sides[k].type.scale);
+        d.notes.push_back(
+            {barometer ? fmt::format("write ({} - {})", *barometer, written)
+                       : fmt::format("write (barometer - {}), the barometer in the unit of {}",
+                                     written, quote(absolute)),
+             {}});
+        return;
+    }
+}
+
 // "ρ_a = 101.325 {kPa}*M_a/({R}*T_a)": the air's density at the site from the gas law takes the
 // pressure there, the site's barometer where the file declares one, not the standard
 // atmosphere typed as a quantity. Only where the atmosphere multiplies and is the product's one
