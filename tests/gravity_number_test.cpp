@@ -681,6 +681,19 @@ TEST_CASE("a hydraulic motor's torque from its displacement per revolution") {
     }
 }
 
+// An angular speed from a speed in rpm, ω = 2π·n/60 (ISO 80000-3), is as often written π·n/30,
+// the 2 taken into the 60, and so is a shaft's power P = T·π·n/30; the speed back in rpm is
+// 30·ω/π. A 30 beside π with a 2 written as well is the 2 twice, and stays a finding.
+TEST_CASE("a speed in rpm turned into radians per second with pi over 30") {
+    const std::string decl = "n : rpm\nω : rad/s\nP : kW\nT : kN*m\n";
+    passes(decl, {"ω = pi*n/30", "ω = n*pi/30", "n = 30*ω/pi", "P = T*pi*n/30", "ω = 2*pi*n/60"});
+    const auto r = run(decl + "ω = pi*n/30\n");
+    CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::trade_constant),
+                            "30 is read as 60 \u00F7 2"));
+    CHECK(count_of(run(decl + "ω = 2*pi*n/30\n"), plumb::rules::unit_scale) == 1);
+    CHECK(count_of(run(decl + "ω = pi*n/3\n"), plumb::rules::unit_scale) == 1);
+}
+
 // The US rational method Q = C·i·A gives cfs from in/h and acres, leaving out 1 acre·in/h =
 // 43560 ft² × (1/12 ft)/3600 s = 1.00833 cfs (NIST SP 811 (2008), B.8, acre and inch; the
 // convention is common practice): a note, not a warning. In mm/h the units are 100 times or

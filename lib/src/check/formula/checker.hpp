@@ -1214,6 +1214,7 @@ class checker {
                                               std::span<const std::size_t> index, std::size_t i,
                                               const scale_literal& l, bool second) const;
     bool holds_pi(std::uint32_t k) const;
+    bool holds_number(std::uint32_t k, double value) const;
     bool formula_takes_a_logarithm(std::uint32_t term) const;
     bool holds_standard_gravity(std::uint32_t k) const;
     bool conversions_all_needed(std::span<const operand> ops, std::span<const std::size_t> index,

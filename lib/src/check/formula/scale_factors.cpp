@@ -349,13 +349,23 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
                 if (!circle_pass) {
                     // "Δp*V/(24*π)" in lbf·ft from psi and in³: a revolution's 2 beside π,
                     // and 12 in per ft (2 × 60 likewise, from a minute), as 20·π is 2 × 10.
+                    // "2*pi*n/30" is the 2 twice: the half reading is for a product with none.
+                    const bool half = l.value == 30.0;
                     if (const std::optional<scale_literal> twice = twice_a_conversion(l);
-                        twice && holds_pi(ops[index[i]].node) && reconciles_with(i, k, *twice)) {
+                        twice && holds_pi(ops[index[i]].node) &&
+                        !(half && holds_number(ops[index[i]].node, 2.0)) &&
+                        reconciles_with(i, k, *twice)) {
+                        const std::string written(text(file_.nodes[l.node].range));
+                        const std::string conversion = format_factor(twice->value);
                         diagnostic& d = report(
                             rules::trade_constant,
-                            fmt::format("{} is read as 2 × {}, the {} converting the units",
-                                        text(file_.nodes[l.node].range),
-                                        format_factor(twice->value), format_factor(twice->value)),
+                            half ? fmt::format("{} is read as {} \u00F7 2, the {} converting the "
+                                               "units and the 2 that of the 2\u03C0 of a "
+                                               "revolution",
+                                               written, conversion, conversion)
+                                 : fmt::format("{} is read as 2 \u00D7 {}, the {} converting the "
+                                               "units",
+                                               written, conversion, conversion),
                             file_.nodes[l.node].range);
                         d.level = severity::note;
                         return true;
@@ -545,11 +555,15 @@ scale_literal checker::power_of_ten_literal(const scale_literal& l, double power
     return as;
 }
 
-// 24 as 2 × 12 (in per ft) and 120 as 2 × 60 (s per min): the conversion alone, exact.
+// 24 as 2 × 12 (in per ft) and 120 as 2 × 60 (s per min): the conversion alone, exact. And
+// 30 as 60 ÷ 2, "ω = π*n/30" with n in rpm: 2π/60 with its 2 taken into the 60 (ISO 80000-3's
+// ω = 2πn; the trades write π/30 as often).
 std::optional<scale_literal> checker::twice_a_conversion(const scale_literal& l) {
     for (const std::int64_t conversion : {12, 60})
         if (l.value == 2.0 * static_cast<double>(conversion))
             return exact_conversion_literal(l, rational(conversion));
+    if (l.value == 30.0)
+        return exact_conversion_literal(l, rational(60));
     return std::nullopt;
 }
 
@@ -616,6 +630,13 @@ bool checker::formula_takes_a_logarithm(std::uint32_t term) const {
     };
     return current_ != nullptr ? syntax::search_formula(file_, *current_, logarithm)
                                : syntax::search_subtree(file_, term, logarithm);
+}
+
+bool checker::holds_number(std::uint32_t k, double value) const {
+    return for_each_factor(k, [&](std::uint32_t at, int) {
+        return file_.nodes[at].kind == expr_kind::number &&
+               written_number(file_.nodes[at].range) == value;
+    });
 }
 
 bool checker::holds_pi(std::uint32_t k) const {
