@@ -1601,3 +1601,15 @@ TEST_CASE("a trade constant's reading leaves no power of ten to spare") {
     passes(d, {"W = 8.34*Q*C"});
     fails_with(d, {"W = 8.34*Q*C*1000", "W = 8.34*Q*C/1000"}, plumb::rules::unit_scale);
 }
+
+// A car wash's fresh water is the share its reclaim does not return, V·(1 − r) (common
+// practice); typed with the reclaim's 0.70 the share is 0.30, which is 0.3048 m per ft rounded
+// (NIST SP 811 (2008), B.8) only by chance. A sum of numbers is the formula's own fraction, no
+// conversion: no finding says it is not needed. A missing /1000 beside it is still reported.
+TEST_CASE("a share written as one less a fraction is no conversion") {
+    const std::string decl = "V_fd : m^3/d\nn_d : 1/d\nv_car : L\n";
+    passes(decl, {"V_fd = n_d*v_car*(1 - 0.70)/1000", "V_fd = n_d*v_car*(1 - 0.69)/1000",
+                  "V_fd = n_d*v_car*(1 - 0.75)/1000", "V_fd = n_d*v_car*(1 + 0.15)/1000"});
+    fails_with(decl, {"V_fd = n_d*v_car*(1 - 0.70)", "V_fd = n_d*v_car*0.3048"},
+               plumb::rules::unit_scale);
+}

@@ -840,6 +840,11 @@ bool checker::report_unneeded(const operand& op, const scale_literal& l,
                               std::optional<double> folded_power) {
     if (percentage_written_out(l) || hundred_over_percent_sum(op.node, l))
         return false;
+    // "(1 - 0.70)", the share a reclaim leaves, whose 0.30 only looks like 0.3048 m per ft:
+    // a sum of numbers is a fraction of the formula's own, never a conversion typed in.
+    if (const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, l.node)];
+        n.kind == expr_kind::add || n.kind == expr_kind::subtract)
+        return false;
     const double factor = std::pow(l.value, l.exponent);
     // "/10^6": the factor is the power, not its base.
     const std::uint32_t shown =
