@@ -145,6 +145,9 @@ TEST_CASE("lengths, areas and volumes (NIST SP 811 (2008), Appendix B.8/B.9)") {
     check_printed("in3", volume, 1.638706e-5, 1e-11);
     check_printed("gal", volume, 3.785412e-3, 1e-9);
     check_printed("bbl", volume, 1.589873e-1, 1e-7);
+    // pint and quart (U.S. liquid), not a picotonne or a quectotonne.
+    check_printed("pt", volume, 4.731765e-4, 1e-10);
+    check_printed("qt", volume, 9.463529e-4, 1e-10);
     check_printed("darcy", area, 9.869233e-13, 1e-19);
     check_printed("D", area, 9.869233e-13, 1e-19);
     // The millidarcy is not printed by NIST: a thousandth of the printed darcy.

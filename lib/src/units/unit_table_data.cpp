@@ -299,6 +299,11 @@ constexpr unit_definition rows[] = {
              "NIST SP 811 (2008), B.8 prints 3.785412E-03; exact as 231 in^3"),
     absolute("bbl", "barrel (oil, 42 U.S. gal)", volume, 0.158987294928, "0.158987294928",
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 1.589873E-01; exact as 42 gal"),
+    // A dehumidifier's pints a day, not picotonnes: no trade weighs in pt.
+    absolute("pt", "pint (U.S. liquid)", volume, 0.000473176473, "0.000473176473",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 4.731765E-04; exact as gal/8"),
+    absolute("qt", "quart (U.S. liquid)", volume, 0.000946352946, "0.000946352946",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 9.463529E-04; exact as gal/4"),
 
     // Mass.
     pound_mass,
