@@ -1613,3 +1613,16 @@ TEST_CASE("a share written as one less a fraction is no conversion") {
     fails_with(decl, {"V_fd = n_d*v_car*(1 - 0.70)", "V_fd = n_d*v_car*0.3048"},
                plumb::rules::unit_scale);
 }
+
+// Struvite's solubility product from its pK, K_sp = 10^(−13.26) (mol/L)³ (Snoeyink and Jenkins,
+// Water Chemistry, from memory): ten raised to a fitted power is a value, no conversion the
+// units could do without. Into mmol/L the 1000 the units need is still asked for.
+TEST_CASE("ten raised to a fitted power is a value, not a power of ten to convert by") {
+    const std::string decl = "K_sp : mol^3/L^3\nK_a : mol/L\nK_m : mmol/L\n";
+    passes(decl, {"K_sp = 10^(-13.26)*1 {mol^3/L^3}", "K_a = 10^(-8.2)*1 {mol/L}",
+                  "K_m = 1000*10^(-8.2)*1 {mol/L}"});
+    const auto r = run(decl, "K_m = 10^(-8.2)*1 {mol/L}");
+    CHECK(count_of(r, plumb::rules::unit_scale) == 1);
+    CHECK(plumb::test::says(first_under(r, plumb::rules::unit_scale), "by 1000"));
+    fails_with(decl, {"K_a = 10^(-3)*1 {mol/L}"}, plumb::rules::unit_scale);
+}

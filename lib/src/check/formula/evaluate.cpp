@@ -1470,7 +1470,11 @@ typed_term checker::apply_power(const typed_term& base, const typed_term& expone
                                         fmt::format("the base {}", quote(base_node))) == nullptr;
     // The exponent's own numbers are not factors of the power; the base's are, raised.
     cut_literals_to(base.literal_begin + base.literal_count);
-    if (exponent.value)
+    // "10^(-13.26)", a solubility product from its pK: a number raised to a fitted power is a
+    // value, no conversion that a power of ten could be.
+    if (exponent.value && base.numeric && exponent.value->den() > 3)
+        cut_literals_to(base.literal_begin);
+    else if (exponent.value)
         for (std::uint32_t i = 0; i < base.literal_count; ++i)
             literals_[base.literal_begin + i].exponent *= exponent.value->to_double();
     else
