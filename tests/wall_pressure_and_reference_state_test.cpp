@@ -1029,3 +1029,16 @@ TEST_CASE("a vacuum set equal to an absolute pressure") {
     passes(plant, {"p_c = p_b - 3.386*p_vac", "vac_kPa = 3.386*p_vac", "p_g = -3.386*p_vac",
                    "p_g = -vac_kPa", "p_ch = p_c"});
 }
+
+// A steam header's gauge in psig made absolute in bar for the steam table: p/14.5 + p_b/1000
+// with the barometer in mbar (1 bar = 14.50377 psi, NIST SP 811 (2008), B.8). The rounded
+// 14.5 is 0.026 % off, within its digits; the sum takes the unit it rounds, bar, as a sum of
+// differences does. The barometer left in mbar is still reported.
+TEST_CASE("a gauge reading converted by a rounded factor plus the barometer in another unit") {
+    const std::string header = "p_st_a : bar \"steam header, absolute\"\n"
+                               "p_b : mbar \"site barometer, 1003 mbar\"\np_g : psig\n";
+    passes(header, {"p_st_a = p_g/14.5 + p_b/1000", "p_st_a = p_g/14.5038 + p_b/1000",
+                    "p_st_a = p_g*0.06895 + p_b/1000"});
+    CHECK(problems_in(run(header, "p_st_a = p_g/14.5 + p_b")) >= 1);
+    CHECK(problems_in(run(header, "p_st_a = p_g/145 + p_b/1000")) >= 1);
+}

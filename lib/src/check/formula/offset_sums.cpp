@@ -914,6 +914,14 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
         cut_literals_to(literal_base + term.type.literal_count);
         unit = terms[only].type.scale;
     } else {
+        // "p_a = p_psig/14.5 + p_b/1000" into bar: the sum takes the unit its rounded factors
+        // round, as a sum of differences does.
+        if (index == side_hint_node_ && std::isfinite(unit)) [[unlikely]] {
+            typed_term settled = result;
+            settled.scale = unit;
+            settle_rounded_side(settled, literal_base);
+            unit = settled.scale;
+        }
         cut_literals_to(literal_base);
     }
     result.scale = unit;
