@@ -1042,3 +1042,22 @@ TEST_CASE("a gauge reading converted by a rounded factor plus the barometer in a
     CHECK(problems_in(run(header, "p_st_a = p_g/14.5 + p_b")) >= 1);
     CHECK(problems_in(run(header, "p_st_a = p_g/145 + p_b/1000")) >= 1);
 }
+
+// A Bourdon gauge reads above the barometer whatever its dial's unit is called (ASME B40.100,
+// from memory): a US sheet's "58 psi" on a skid gauge is 58 psig. Typed in for the absolute
+// pressure a steam table wants, it is one atmosphere short (4.0 bar where 5.0 bar abs is
+// right; 1 bar = 14.50377 psi, NIST SP 811 (2008), B.8). With the barometer added it is right;
+// a strain gauge's stress or a differential gauge's reading is no such reading.
+TEST_CASE("a pressure whose words say a gauge reads it set equal to an absolute one") {
+    const std::string skid = "p_st_a : bar \"steam header, absolute\"\n"
+                             "p_b : mbar \"site barometer, 1003 mbar\"\n"
+                             "p_skid : psi \"steam header on the skid's pressure gauge, 58 psi\"\n"
+                             "p_dp : psi \"differential pressure gauge across the strainer\"\n"
+                             "p_a2 : psia \"header, absolute\"\n";
+    fails_with(skid, {"p_st_a = p_skid/14.5", "p_a2 = p_skid"}, plumb::rules::offset_scale);
+    const auto r = run(skid, "p_st_a = p_skid/14.5");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale),
+                            "write (p_skid/14.5 + p_b/1000)"));
+    passes(skid, {"p_st_a = p_skid/14.5 + p_b/1000"});
+    CHECK(count_of(run(skid, "p_st_a = p_dp/14.5"), plumb::rules::offset_scale) == 0);
+}

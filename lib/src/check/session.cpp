@@ -613,23 +613,10 @@ class session {
         if (decl.kind.single_unit == nullptr || decl.kind.single_unit->symbol != "inH2O" ||
             entry.unit_text != "inH2O" || names_a_difference(name, entry.description))
             return nullptr;
-        const std::string words = lower_ascii(entry.description);
-        // A vacuum, a pressure said against the barometer, a drop: a difference already.
-        for (const std::string_view difference :
-             {"absolute", "vacuum", "below", "above", "barometer", "atmospher"})
-            if (words.find(difference) != std::string::npos)
-                return nullptr;
-        for (std::size_t at = words.find("gauge"); at != std::string::npos;
-             at = words.find("gauge", at + 1)) {
-            const bool starts = at == 0 || !std::isalpha(static_cast<unsigned char>(words[at - 1]));
-            const std::size_t end = at + 5;
-            if (starts &&
-                (end == words.size() || !std::isalpha(static_cast<unsigned char>(words[end])) ||
-                 words.compare(end, 1, "d") == 0))
-                if (const auto unit = unit_table::standard().resolve("inH2Og"))
-                    return unit->unit;
-        }
-        return nullptr;
+        if (!describes_a_gauge_reading(entry.description))
+            return nullptr;
+        const auto unit = unit_table::standard().resolve("inH2Og");
+        return unit ? unit->unit : nullptr;
     }
 
     void declare_names(loaded_file* f, const syntax::parsed_file& tree, std::uint32_t first,

@@ -109,6 +109,27 @@ bool counts_below_the_barometer(std::string_view name, std::string_view descript
            name.find("abs") == std::string_view::npos;
 }
 
+bool describes_a_gauge_reading(std::string_view description) {
+    std::string words(description);
+    for (char& c : words)
+        if (c >= 'A' && c <= 'Z')
+            c = static_cast<char>(c - 'A' + 'a');
+    for (const std::string_view other :
+         {"absolute", "vacuum", "below", "above", "barometer", "atmospher", "strain gauge",
+          "rain gauge", "wire gauge", "track gauge", "gauge length", "differential"})
+        if (words.find(other) != std::string::npos)
+            return false;
+    const auto is_letter = [](char c) { return c >= 'a' && c <= 'z'; };
+    for (std::size_t at = words.find("gauge"); at != std::string::npos;
+         at = words.find("gauge", at + 1)) {
+        const std::size_t end = at + 5;
+        if ((at == 0 || !is_letter(words[at - 1])) &&
+            (end == words.size() || !is_letter(words[end]) || words[end] == 'd'))
+            return true;
+    }
+    return false;
+}
+
 bool names_a_site_barometer(std::string_view name, std::string_view description) {
     if (!names_the_atmosphere(name, description))
         return false;

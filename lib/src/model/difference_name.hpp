@@ -29,6 +29,12 @@ bool names_a_site_barometer(std::string_view name, std::string_view description)
 // words call it absolute ("chamber pressure at the first vacuum pulse, absolute").
 bool counts_below_the_barometer(std::string_view name, std::string_view description);
 
+// Whether a pressure's description says a gauge reads it ("on the skid's pressure gauge",
+// "psi gauge"): above the atmosphere, whatever its unit is called. Not one whose words call it
+// absolute, a vacuum, a pressure said against the barometer, or another kind of gauge (a
+// strain, rain, wire or track gauge).
+bool describes_a_gauge_reading(std::string_view description);
+
 // Whether a pure number's name or description says it is a liquid's specific gravity (SG,
 // SG_m, "specific gravity", "relative density"), which goes wherever water's density goes.
 bool names_specific_gravity(std::string_view name, std::string_view description);

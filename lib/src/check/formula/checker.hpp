@@ -1153,7 +1153,7 @@ class checker {
     static bool said_absolute(const symbol_entry& e);
     [[gnu::noinline]] void report_barometer_added_to_absolute(std::span<const operand> terms);
     [[gnu::noinline]] void report_absolute_set_to_difference(std::span<const operand> sides);
-    [[gnu::noinline]] void report_vacuum_as_absolute(std::span<const operand> sides);
+    [[gnu::noinline]] void report_barometer_reading_as_absolute(std::span<const operand> sides);
     [[gnu::noinline]] void report_head_from_absolute(std::span<const operand> sides);
     [[gnu::noinline]] void report_sea_level_atmosphere_in_products(const syntax::formula& f);
     bool names_a_vacuum(std::uint32_t node) const;

@@ -329,9 +329,8 @@ void checker::check_formula(const syntax::formula& f) {
                  sides[1].type.absolute_pressure_difference)) [[unlikely]]
                 report_absolute_set_to_difference(sides);
             if (equation && sides.size() == 2 && out_.size() == findings_before &&
-                sides[0].type.known && sides[0].type.dim == pressure_dimension() &&
-                sides[0].type.point != sides[1].type.point) [[unlikely]]
-                report_vacuum_as_absolute(sides);
+                sides[0].type.known && sides[0].type.dim == pressure_dimension()) [[unlikely]]
+                report_barometer_reading_as_absolute(sides);
             if (equation && sides.size() == 2 && out_.size() == findings_before &&
                 sides[0].type.known && sides[0].type.dim == length_dimension() &&
                 (file_.nodes[sides[1].node].kind == expr_kind::divide ||

@@ -917,41 +917,65 @@ void checker::report_absolute_set_to_difference(std::span<const operand> sides) 
 // "p_c = 3.386*p_vac" with p_c the condenser's absolute pressure and p_vac its vacuum in
 // inHg: a vacuum gauge reads how far below the barometer the pressure is, so the absolute
 // pressure is the barometer less the vacuum (ASME PTC 12.2 reads a condenser so, from
-// memory). Both sides are pressures in plain units, and no unit tells them apart.
-void checker::report_vacuum_as_absolute(std::span<const operand> sides) {
+// memory). And "p_st_a = p_skid/14.5" with p_skid in psi "on the skid's pressure gauge": a
+// gauge reads above the barometer, whatever its dial's unit is called. Both sides are
+// pressures in plain units, and only the words tell them apart.
+void checker::report_barometer_reading_as_absolute(std::span<const operand> sides) {
+    // The sides agree in unit already, so the numbers beside the symbol convert it (14.5).
+    const auto sole_symbol = [&](std::uint32_t k) {
+        std::uint32_t found = syntax::no_index;
+        const bool other = for_each_factor(k, [&](std::uint32_t at, int) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::symbol) {
+                const bool second = found != syntax::no_index;
+                found = at;
+                return second;
+            }
+            return n.kind != expr_kind::number;
+        });
+        return other ? syntax::no_index : found;
+    };
     for (std::size_t k = 0; k < 2; ++k) {
-        const std::uint32_t absolute = sole_symbol_times_conversions(sides[k].node);
-        const std::uint32_t vacuum = sole_symbol_times_conversions(sides[1 - k].node);
-        if (absolute == syntax::no_index || vacuum == syntax::no_index)
+        const std::uint32_t absolute = sole_symbol(sides[k].node);
+        const std::uint32_t reading = sole_symbol(sides[1 - k].node);
+        if (absolute == syntax::no_index || reading == syntax::no_index)
             continue;
         const std::string_view absolute_name = text(file_.nodes[absolute].range);
-        const std::string_view vacuum_name = text(file_.nodes[vacuum].range);
+        const std::string_view reading_name = text(file_.nodes[reading].range);
         const symbol_entry* a = symbols_.find(absolute_name);
-        const symbol_entry* v = symbols_.find(vacuum_name);
-        if (a == nullptr || v == nullptr || !a->compact_dim || !v->compact_dim ||
-            *a->compact_dim != pressure_dimension() || *v->compact_dim != pressure_dimension() ||
-            a->offset_unit != nullptr || v->offset_unit != nullptr || !said_absolute(*a) ||
+        const symbol_entry* r = symbols_.find(reading_name);
+        if (a == nullptr || r == nullptr || !a->compact_dim || !r->compact_dim ||
+            *a->compact_dim != pressure_dimension() || *r->compact_dim != pressure_dimension() ||
+            a->offset_unit != nullptr || r->offset_unit != nullptr || !said_absolute(*a) ||
             counts_below_the_barometer(absolute_name, a->description) ||
-            !counts_below_the_barometer(vacuum_name, v->description) ||
-            names_a_difference(absolute_name, a->description))
+            names_a_difference(absolute_name, a->description) ||
+            names_a_difference(reading_name, r->description) || said_absolute(*r))
             continue;
-        diagnostic& d =
-            report(rules::offset_scale,
-                   fmt::format("{} is an absolute pressure, but {} is a vacuum, counted down from "
-                               "the barometer: the absolute pressure is the barometer less the "
-                               "vacuum",
-                               quote(absolute), quote(vacuum)),
-                   file_.nodes[sides[1 - k].node].range);
+        const bool vacuum = counts_below_the_barometer(reading_name, r->description);
+        if (!vacuum && !describes_a_gauge_reading(r->description))
+            continue;
+        diagnostic& d = report(
+            rules::offset_scale,
+            vacuum ? fmt::format("{} is an absolute pressure, but {} is a vacuum, counted down "
+                                 "from the barometer: the absolute pressure is the barometer "
+                                 "less the vacuum",
+                                 quote(absolute), quote(reading))
+                   : fmt::format("{} is an absolute pressure, but {} is read on a gauge, by its "
+                                 "words, counted up from the barometer: the absolute pressure is "
+                                 "the gauge reading plus the barometer",
+                                 quote(absolute), quote(reading)),
+            file_.nodes[sides[1 - k].node].range);
         d.level = severity::warning;
         add_term(d, sides[k]);
         add_term(d, sides[1 - k], true);
         const std::string written = display_text(file_.nodes[sides[1 - k].node].range);
         const std::optional<std::string> barometer = barometer_converted_to(sides[k].type.scale);
-        d.notes.push_back(
-            {barometer ? fmt::format("write ({} - {})", *barometer, written)
-                       : fmt::format("write (barometer - {}), the barometer in the unit of {}",
-                                     written, quote(absolute)),
-             {}});
+        const std::string site = barometer ? *barometer : std::string("barometer");
+        std::string advice = vacuum ? fmt::format("write ({} - {})", site, written)
+                                    : fmt::format("write ({} + {})", written, site);
+        if (!barometer)
+            advice += fmt::format(", the barometer in the unit of {}", quote(absolute));
+        d.notes.push_back({std::move(advice), {}});
         return;
     }
 }
