@@ -1061,3 +1061,16 @@ TEST_CASE("a pressure whose words say a gauge reads it set equal to an absolute 
     passes(skid, {"p_st_a = p_skid/14.5 + p_b/1000"});
     CHECK(count_of(run(skid, "p_st_a = p_dp/14.5"), plumb::rules::offset_scale) == 0);
 }
+
+// An injector's bottomhole pressure is held below a share of the fracture pressure, FG·D
+// from a step-rate test, which a gauge reads (Bourgoyne et al., Applied Drilling Engineering,
+// 1986, ch. 6, from memory): the share, a safety factor of 0.9, may be a declared pure number
+// as well as a typed 0.9. A gradient times a depth set against an absolute reading is still
+// reported.
+TEST_CASE("a share of a gradient times a depth is a gauge reading's limit") {
+    const std::string well = "p_bhg : psig \"bottomhole injection pressure\"\n"
+                             "SF : 1 \"safety factor, 0.9\"\nFG : psi/ft \"fracture gradient\"\n"
+                             "D : ft \"true vertical depth\"\np_a : psia\n";
+    passes(well, {"p_bhg <= SF*FG*D", "p_bhg <= 0.9*FG*D", "p_bhg <= FG*D/SF"});
+    fails_with(well, {"p_bhg <= p_a"}, plumb::rules::offset_scale);
+}

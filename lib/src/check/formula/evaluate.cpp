@@ -87,7 +87,13 @@ bool checker::gradient_times_depth(std::uint32_t k) const {
             return false;
         const symbol_entry* e =
             n.kind == expr_kind::symbol ? symbols_.find(text(n.range)) : nullptr;
-        if (sign < 0 || e == nullptr || !e->compact_dim)
+        if (e == nullptr || !e->compact_dim)
+            return true;
+        // "SF*FG*D", a share of the fracture pressure (a safety factor of 0.9): a pure
+        // number's symbol scales the column as a typed 0.9 does.
+        if (e->compact_dim->is_dimensionless() && e->offset_unit == nullptr)
+            return false;
+        if (sign < 0)
             return true;
         if (*e->compact_dim == pressure_gradient_dim)
             ++gradients;
