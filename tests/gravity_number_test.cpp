@@ -1482,3 +1482,22 @@ TEST_CASE("steel's density and unit weight typed as numbers") {
     passes_with_one_note(d, {"w_a = 77*A", "w_a = 78.5*A"}, plumb::rules::gravity_number);
     fails_with(d, {"BF = 1 - MW/489.5", "BF = 1 - MW/60"}, plumb::rules::sum_mismatch);
 }
+
+// Real power is the apparent power times the power factor, P = S·pf, so S = P/pf (IEC 80000-6,
+// from memory): the power factor is at most 1 and the apparent power the larger. Written the
+// other way round (S = P·pf, P = S/pf) the kVA comes out pf² of its value; the units cannot
+// say so, as the power factor is a pure number. An efficiency beside it changes nothing.
+TEST_CASE("a power factor on the wrong side of an apparent power") {
+    const std::string decl =
+        "S : kVA\nP : kW\nP_w : MW\npf : 1 \"power factor\"\nη : 1 \"efficiency\"\n";
+    for (const char* formula : {"S = P*pf", "P = S/pf", "S = 1000*P_w*pf"}) {
+        CAPTURE(formula);
+        const auto r = run(decl + formula + "\n");
+        CHECK(count_of(r, plumb::rules::unit_scale) == 1);
+        CHECK(says(first_under(r, plumb::rules::unit_scale), "wrong way round"));
+    }
+    for (const char* formula : {"S = P/pf", "P = S*pf", "S = P/(η*pf)", "P = η*pf*S"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 0);
+    }
+}

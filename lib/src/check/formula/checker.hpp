@@ -677,6 +677,7 @@ class checker {
     bool report_apparent_power_without_factor(const operand& side, const operand& other);
     bool declares_real_energy(std::uint32_t node) const;
     static bool names_power_factor(std::string_view name);
+    static bool names_efficiency(std::string_view name);
     [[gnu::noinline]] void report_apparent_as_real_power(std::span<const operand> sides);
     [[gnu::noinline]] void report_cooling_efficiency_inverted(std::span<const operand> sides,
                                                               std::size_t findings_before);

@@ -399,35 +399,84 @@ bool checker::names_power_factor(std::string_view name) {
 // factor; the units alone cannot say so, as both are watts to the dimension.
 // A workbook's cells count as symbols here: "=C11" under kW with C11 in kVA.
 void checker::report_apparent_as_real_power(std::span<const operand> sides) {
-    const std::uint32_t left = sole_symbol_times_conversions(sides[0].node, true);
-    const std::uint32_t right = sole_symbol_times_conversions(sides[1].node, true);
-    if (left == syntax::no_index || right == syntax::no_index)
+    // Each side's one power, a symbol or a cell, with the power of a power factor beside it
+    // (pf, cosφ; an efficiency or a conversion beside it changes nothing here).
+    struct power_side {
+        std::uint32_t power = syntax::no_index;
+        int factor = 0;
+    };
+    const auto read_side = [&](std::uint32_t k) -> std::optional<power_side> {
+        power_side side;
+        const bool other = for_each_factor(k, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number)
+                return !plain_conversion_number(at);
+            if (n.kind == expr_kind::symbol) {
+                const std::string_view name = text(n.range);
+                const symbol_entry* e = symbols_.find(name);
+                if (e != nullptr && e->compact_dim && e->compact_dim->is_dimensionless()) {
+                    if (names_power_factor(name))
+                        side.factor += names_efficiency(name) ? 0 : sign;
+                    return !names_power_factor(name);
+                }
+            }
+            if (n.kind != expr_kind::symbol && n.kind != expr_kind::reference)
+                return true;
+            const bool second = side.power != syntax::no_index;
+            side.power = at;
+            return second || sign < 0;
+        });
+        if (other || side.power == syntax::no_index)
+            return std::nullopt;
+        return side;
+    };
+    const std::optional<power_side> left = read_side(sides[0].node);
+    const std::optional<power_side> right = read_side(sides[1].node);
+    if (!left || !right)
         return;
-    const std::optional<std::string_view> a = declared_unit_text(left);
-    const std::optional<std::string_view> b = declared_unit_text(right);
+    const std::optional<std::string_view> a = declared_unit_text(left->power);
+    const std::optional<std::string_view> b = declared_unit_text(right->power);
     if (!a || !b)
         return;
     const bool a_apparent = (unit_marks_of(*a) & apparent_power) != 0;
     const bool b_apparent = (unit_marks_of(*b) & apparent_power) != 0;
     if (a_apparent == b_apparent)
         return;
-    const std::uint32_t apparent_node = a_apparent ? left : right;
-    const std::uint32_t real_node = a_apparent ? right : left;
+    const power_side& apparent_side = a_apparent ? *left : *right;
+    const power_side& real_side = a_apparent ? *right : *left;
     const std::string_view apparent = a_apparent ? *a : *b;
     const std::string_view real = a_apparent ? *b : *a;
     if (real.find('W') == std::string_view::npos)
         return;
+    // S·pf = P, or S = P/pf: the power factor stands once with the apparent power.
+    const int factor = apparent_side.factor - real_side.factor;
+    if (factor == 1 || (factor != 0 && factor != -1))
+        return;
+    const std::string apparent_name(text(file_.nodes[apparent_side.power].range));
+    const std::string real_name(text(file_.nodes[real_side.power].range));
     diagnostic& d = report(
         rules::unit_scale,
-        fmt::format("'{}' is an apparent power ({}) and '{}' a real power ({}): they differ by "
-                    "the power factor, which this formula leaves out",
-                    text(file_.nodes[apparent_node].range), apparent,
-                    text(file_.nodes[real_node].range), real),
+        factor == 0
+            ? fmt::format("'{}' is an apparent power ({}) and '{}' a real power ({}): they differ "
+                          "by the power factor, which this formula leaves out",
+                          apparent_name, apparent, real_name, real)
+            : fmt::format("the power factor is the wrong way round: '{}' is an apparent power "
+                          "({}) and '{}' a real power ({}), and the apparent power is the larger",
+                          apparent_name, apparent, real_name, real),
         file_.nodes[sides[1].node].range);
     d.level = severity::warning;
     d.notes.push_back({"real power is the apparent power times the power factor, P = S*pf "
                        "(and S = sqrt(3)*V*I for three phases)",
                        {}});
+}
+
+// An efficiency by its name (η, eff): beside a power factor it changes nothing about where
+// the power factor goes.
+bool checker::names_efficiency(std::string_view name) {
+    for (const std::string_view part : {"\u03B7", "eta", "eff"})
+        if (name.find(part) != std::string_view::npos)
+            return true;
+    return false;
 }
 
 bool checker::is_gas_volume_or_flow(const compact_dimension& dim) {
