@@ -1074,3 +1074,14 @@ TEST_CASE("a share of a gradient times a depth is a gauge reading's limit") {
     passes(well, {"p_bhg <= SF*FG*D", "p_bhg <= 0.9*FG*D", "p_bhg <= FG*D/SF"});
     fails_with(well, {"p_bhg <= p_a"}, plumb::rules::offset_scale);
 }
+
+// A pump's head from its discharge gauge, H = 2.31·p/SG in ft from psig (Hydraulic Institute,
+// common practice; 2.31 ft of water per psi), with the slurry's specific gravity written as a
+// ratio of its density to water's: a gauge reading scaled by a pure number still. A gauge
+// reading over one density alone is no head, and stays an error.
+TEST_CASE("a gauge reading over a specific gravity written as a ratio of densities") {
+    const std::string pump = "H_ft : ft\np_d : psig\nρ_sl, ρ_w : kg/m^3\nH_m : m\np_k : kPag\n";
+    passes(pump, {"H_ft = 2.31*p_d/(ρ_sl/ρ_w)", "H_ft = 2.31*p_d*ρ_w/ρ_sl"}, 1);
+    passes(pump, {"H_m = p_k/(9.81*ρ_sl/ρ_w)"}, 1);
+    CHECK(problems_in(run(pump, "H_ft = 2.31*p_d/ρ_sl")) >= 1);
+}

@@ -480,6 +480,7 @@ bool checker::pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
         return false;
     int other_pressures = 0;
     int stresses = 0;
+    int densities = 0;
     bool shape = false;
     if (geometric != nullptr)
         *geometric = false;
@@ -546,6 +547,9 @@ bool checker::pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
                 shape = true;
                 if (geometric != nullptr && !t.dim.is_dimensionless())
                     *geometric = true;
+            } else if (t.dim == density_dim) {
+                // "2.31*p_d/(ρ_sl/ρ_w)": a liquid's specific gravity as a ratio of densities.
+                ++densities;
             } else {
                 return false;
             }
@@ -555,6 +559,8 @@ bool checker::pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
             return false;
         }
     }
+    if (densities % 2 != 0)
+        return false;
     return with_gauge ? stresses % 2 == 0 : (other_pressures == 1 && shape);
 }
 
