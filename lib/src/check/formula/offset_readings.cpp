@@ -481,6 +481,7 @@ bool checker::pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
     int other_pressures = 0;
     int stresses = 0;
     int densities = 0;
+    bool water = false;
     bool shape = false;
     if (geometric != nullptr)
         *geometric = false;
@@ -547,9 +548,14 @@ bool checker::pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
                 shape = true;
                 if (geometric != nullptr && !t.dim.is_dimensionless())
                     *geometric = true;
-            } else if (t.dim == density_dim) {
-                // "2.31*p_d/(ρ_sl/ρ_w)": a liquid's specific gravity as a ratio of densities.
+            } else if (t.dim == density_dim && n.kind == expr_kind::symbol) {
+                // "2.31*p_d/(ρ_sl/ρ_w)": a liquid's specific gravity, its density over
+                // water's; not "p_g*ρ_2/ρ_1", a gas's densities, which a gas law weighs.
                 ++densities;
+                const std::string_view name = text(n.range);
+                const symbol_entry* e = symbols_.find(name);
+                water = water || name.ends_with("_w") ||
+                        (e != nullptr && e->description.find("water") != std::string_view::npos);
             } else {
                 return false;
             }
@@ -559,7 +565,7 @@ bool checker::pressure_scaled_by_shape(std::uint32_t product, bool with_gauge,
             return false;
         }
     }
-    if (densities % 2 != 0)
+    if (densities % 2 != 0 || (densities > 0 && !water))
         return false;
     return with_gauge ? stresses % 2 == 0 : (other_pressures == 1 && shape);
 }
