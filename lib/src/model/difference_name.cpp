@@ -104,8 +104,11 @@ bool counts_below_the_barometer(std::string_view name, std::string_view descript
     const bool said = name.find("vac") != std::string_view::npos ||
                       description.find("vacuum") != std::string_view::npos ||
                       description.find("Vacuum") != std::string_view::npos;
-    return said && description.find("absolute") == std::string_view::npos &&
-           description.find("Absolute") == std::string_view::npos &&
+    // "mmHg abs, as the old vacuum recorder logs it": "abs" and "(a)" say absolute too.
+    return said && description.find("abs") == std::string_view::npos &&
+           description.find("Abs") == std::string_view::npos &&
+           description.find("ABS") == std::string_view::npos &&
+           description.find("(a)") == std::string_view::npos &&
            name.find("abs") == std::string_view::npos;
 }
 
