@@ -1085,3 +1085,29 @@ TEST_CASE("a gauge reading over a specific gravity written as a ratio of densiti
     passes(pump, {"H_m = p_k/(9.81*ρ_sl/ρ_w)"}, 1);
     CHECK(problems_in(run(pump, "H_ft = 2.31*p_d/ρ_sl")) >= 1);
 }
+
+// A sprinkler's or a nozzle's flow goes with the root of the pressure it discharges across to
+// the atmosphere, Q = K·√p with p in psig (NFPA 13, from memory): balancing two heads by
+// √(p_2/p_1) takes the gauge readings as they are. A gauge reading over an absolute one, or
+// over one in another gauge unit, or the ratio without its root, is still reported.
+TEST_CASE("the root of a ratio of two gauge readings is a nozzle's flow law") {
+    const std::string heads = "q_n, q_r : gpm\np_h, p_r : psig\np_a : psia\np_b : barg\n";
+    passes(heads, {"q_n = q_r*sqrt(p_h/p_r)", "q_n = q_r*(p_h/p_r)^0.5"});
+    fails_with(heads,
+               {"q_n = q_r*sqrt(p_h/p_a)", "q_n = q_r*sqrt(p_h/p_b)", "q_n = q_r*p_h/p_r",
+                "q_n = q_r*(p_h/p_a)^0.5"},
+               plumb::rules::offset_scale);
+    // Read without the walk, the two readings still count as used.
+    CHECK(count_of(run("q_n, q_r : gpm\np_h, p_r : psig\n", "q_n = q_r*sqrt(p_h/p_r)"),
+                   plumb::rules::unused) == 0);
+}
+
+// "mmHg abs, as the old vacuum recorder logs it": "abs" and "(a)" call a pressure absolute
+// as "absolute" does, whatever instrument its words name.
+TEST_CASE("a pressure called abs beside the word vacuum is no vacuum") {
+    const std::string suction = "p_1 : kPa \"suction, absolute\"\n"
+                                "p_mm : mmHg \"suction, mmHg abs, off the vacuum recorder\"\n"
+                                "p_v : mmHg \"suction vacuum on the recorder\"\n";
+    passes(suction, {"p_mm = 7.50062*p_1"});
+    fails_with(suction, {"p_v = 7.50062*p_1"}, plumb::rules::offset_scale);
+}

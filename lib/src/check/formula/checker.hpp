@@ -676,6 +676,7 @@ class checker {
     [[gnu::noinline]] void report_angular_frequency_as_cycles(std::span<const operand> sides);
     bool report_apparent_power_without_factor(const operand& side, const operand& other);
     bool declares_real_energy(std::uint32_t node) const;
+    bool ratio_of_gauge_readings(std::uint32_t node);
     static bool names_power_factor(std::string_view name);
     static bool names_efficiency(std::string_view name);
     [[gnu::noinline]] void report_apparent_as_real_power(std::span<const operand> sides);

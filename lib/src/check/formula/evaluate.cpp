@@ -23,6 +23,14 @@ typed_term checker::eval_negate(const syntax::expr_node& n) {
 }
 
 typed_term checker::eval_power(const syntax::expr_node& n) {
+    // "(p/p_r)^0.5", the root of a ratio of gauge readings, as sqrt(p/p_r) is read.
+    if (const syntax::expr_node& e = file_.nodes[syntax::inside_brackets(file_, n.rhs)];
+        e.kind == expr_kind::number && written_number(e.range) == 0.5 &&
+        ratio_of_gauge_readings(n.lhs)) [[unlikely]] {
+        typed_term ratio;
+        ratio.literal_begin = static_cast<std::uint32_t>(literals_.size());
+        return ratio;
+    }
     const typed_term* kept = kept_symbol_type(n.lhs); // V^2: most bases are symbols
     typed_term base = kept != nullptr ? *kept : eval(n.lhs);
     if (kept != nullptr)
@@ -1680,6 +1688,30 @@ span checker::call_name_range(const syntax::expr_node& n) const {
             n.range.begin + static_cast<std::uint32_t>(end)};
 }
 
+// "p_h/p_r" with both in psig: one gauge reading over another, on one scale and in one unit.
+bool checker::ratio_of_gauge_readings(std::uint32_t node) {
+    const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, node)];
+    if (n.kind != expr_kind::divide)
+        return false;
+    const auto gauge = [&](std::uint32_t k) -> symbol_entry* {
+        const syntax::expr_node& s = file_.nodes[syntax::inside_brackets(file_, k)];
+        if (s.kind != expr_kind::symbol)
+            return nullptr;
+        symbol_entry* e = symbols_.find(text(s.range));
+        return e != nullptr && e->offset_unit != nullptr &&
+                       e->offset_unit->scale == unit_scale::gauge
+                   ? e
+                   : nullptr;
+    };
+    symbol_entry* above = gauge(n.lhs);
+    symbol_entry* below = gauge(n.rhs);
+    if (above == nullptr || below == nullptr || above->offset_unit != below->offset_unit)
+        return false;
+    above->used = true; // read here rather than by the walk
+    below->used = true;
+    return true;
+}
+
 typed_term checker::eval_call(const syntax::expr_node& n) {
     const span name_range = call_name_range(n);
     const std::string_view name = text(name_range);
@@ -1701,6 +1733,17 @@ typed_term checker::eval_call(const syntax::expr_node& n) {
             prefer_dimensionless_ = node;
         if (square_root)
             square_root_argument_ = node;
+        if (square_root && ratio_of_gauge_readings(node)) [[unlikely]] {
+            // "q = q_r*sqrt(p/p_r)": a nozzle's or a sprinkler's flow goes with the root of the
+            // pressure it discharges across to the atmosphere, q = K·√p with p in psig (NFPA 13,
+            // from memory): a ratio of two gauge readings on one scale is a pure number there.
+            typed_term& ratio = types_.push(typed_term{});
+            ratio.literal_begin = static_cast<std::uint32_t>(literals_.size());
+            operands_.push_back({ratio, node});
+            prefer_dimensionless_ = saved;
+            square_root_argument_ = saved_root;
+            continue;
+        }
         operands_.push_back({push_operand_type(node, types_base, 0), node});
         prefer_dimensionless_ = saved;
         square_root_argument_ = saved_root;
