@@ -1111,3 +1111,17 @@ TEST_CASE("a pressure called abs beside the word vacuum is no vacuum") {
     passes(suction, {"p_mm = 7.50062*p_1"});
     fails_with(suction, {"p_v = 7.50062*p_1"}, plumb::rules::offset_scale);
 }
+
+// A gas's density at standard conditions, ρ_S = M·p_S/(R·T_S) at 101.325 kPa and 15 °C
+// (ISO 13443), is defined at the sea level's pressure wherever the plant is; the air's density
+// where the plant is takes the site's barometer. Beside 288.15 K the atmosphere is the
+// reference state's, beside the gas's own temperature it is still reported.
+TEST_CASE("the atmosphere beside a standard reference temperature is a reference state") {
+    const std::string site = "p_b : kPa \"site barometer, 95.0 kPa\"\nρ_S, ρ_a : kg/m^3\n"
+                             "M_g : kg/mol\nR_u : J/(mol*K)\nT_a : K\n";
+    CHECK(count_of(run(site, "ρ_S = M_g*101325 {Pa}/(R_u*288.15 {K})"),
+                   plumb::rules::offset_scale) == 0);
+    CHECK(count_of(run(site, "ρ_S = M_g*101.325 {kPa}/(R_u*273.15 {K})"),
+                   plumb::rules::offset_scale) == 0);
+    CHECK(count_of(run(site, "ρ_a = M_g*101325 {Pa}/(R_u*T_a)"), plumb::rules::offset_scale) == 1);
+}

@@ -997,6 +997,23 @@ void checker::report_sea_level_atmosphere_in_products(const syntax::formula& f) 
         });
     if (names_the_barometer)
         return;
+    // "ρ_S = M*101325 {Pa}/(R*288.15 {K})": the atmosphere beside a standard reference
+    // temperature, 0 °C, 15 °C, 60 °F, 20 °C or 25 °C, is a reference state's density or
+    // volume (ISO 13443), defined at sea level's pressure wherever the gas is.
+    const auto standard_temperature = [&](std::uint32_t, const syntax::expr_node& n) {
+        if (n.kind != expr_kind::quantity)
+            return search_step::descend;
+        const syntax::quantity_literal& q = file_.quantities[n.lhs];
+        if (!q.dim || compact_dimension::fitted(*q.dim) != std::optional(temperature_dimension()))
+            return search_step::skip;
+        const double kelvins = quantity_si_value(n);
+        for (const double reference : {273.15, 288.15, 288.706, 293.15, 298.15})
+            if (std::abs(kelvins - reference) < 0.05)
+                return search_step::found;
+        return search_step::skip;
+    };
+    if (syntax::search_formula(file_, f, standard_temperature))
+        return;
     bool reported = false;
     syntax::search_formula(file_, f, [&](std::uint32_t at, const syntax::expr_node& n) {
         if (reported)
