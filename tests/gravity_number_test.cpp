@@ -1501,3 +1501,19 @@ TEST_CASE("a power factor on the wrong side of an apparent power") {
         CHECK(problems_in(run(decl + formula + "\n")) == 0);
     }
 }
+
+// Sea water is about 1025 kg/m³ (ITTC 7.5-02-01-03, 2011, from memory), 64 lb/ft³ and 1.99
+// slug/ft³ (NIST SP 811 (2008), B.8: 1 lb/ft³ = 16.01846 kg/m³, 1 slug/ft³ = 515.3788 kg/m³);
+// its weight, 10.05 kN/m³ or 0.445 psi per foot, gives a sea wall's or a caisson's pressure.
+// A bare 1000 beside a pump's flow and head into kW is water's density with g left out, and
+// stays a finding.
+TEST_CASE("sea water's density and specific weight typed as numbers") {
+    const std::string decl = "p_psi : psi\nh_ft : ft\nγ_sat, γ_b : kN/m^3\nγ_pcf, γ_bp : lbf/ft^3\n"
+                             "p_kPa : kPa\nh : m\nρ_lb : slug/ft^3\nP : kW\nQ : m^3/s\nη : 1\n";
+    passes_with_one_note(
+        decl, {"p_psi = 0.445*h_ft", "γ_b = γ_sat - 10.05", "γ_bp = γ_pcf - 64", "p_kPa = 10.05*h"},
+        plumb::rules::gravity_number);
+    passes_with_one_note(decl, {"ρ_lb = 1.99"}, plumb::rules::trade_constant);
+    CHECK(problems_in(run(decl + "P = 1000*Q*h/η\n")) >= 1);
+    CHECK(problems_in(run(decl + "p_kPa = 10.05*h_ft\n")) >= 1);
+}

@@ -46,8 +46,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 37>& quantities() {
-    static const std::array<carried_quantity, 37> table = [] {
+const std::array<carried_quantity, 39>& quantities() {
+    static const std::array<carried_quantity, 39> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -99,7 +99,7 @@ const std::array<carried_quantity, 37>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 37>{{
+        return std::array<carried_quantity, 39>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -439,6 +439,25 @@ const std::array<carried_quantity, 37>& quantities() {
              carried_quantity::term_kind::any,
              {},
              0.011},
+            // Sea water's density, about 1025 kg/m³ at 35 g/kg salinity (ITTC 7.5-02-01-03,
+            // Fresh Water and Seawater Properties, 2011, from memory), printed 64 lb/ft³,
+            // 8.55 lb/gal and 1.99 slug/ft³ (common practice): a platform's firewater head, a
+            // sea wall's toe pressure, 0.445 psi/ft.
+            {rules::trade_constant, "the density of sea water", "\u03C1_sw", "1/\u03C1_sw",
+             " (sea water: 1020 to 1030 kg/m\u00B3; 64 lb/ft\u00B3, 0.445 psi/ft)",
+             "declare the sea water's density with its unit (\u03C1_sw : kg/m^3 = 1025) to say "
+             "so",
+             "write the sea water's density in a cell that holds its unit to say so", density,
+             1020.0, 1030.0},
+            // Its specific weight, 10.05 to 10.1 kN/m³ (1025 × 9.80665 to 1030 × 9.81): a
+            // sea wall's 0.445 psi per foot of depth, a caisson's 10.05 kPa/m. Not from 1020:
+            // 10.0 kN/m³ would read a bare 1000 (water's density, g left out) as it.
+            {rules::gravity_number, "the specific weight of sea water",
+             "\u03B3_sw = \u03C1_sw\u00B7g_n", "1/\u03B3_sw",
+             " (sea water, 1025 to 1030 kg/m\u00B3: 10.05 to 10.1 kN/m\u00B3, 0.445 psi/ft)",
+             "write \u03C1_sw*{g_n}, with \u03C1_sw declared, to say so",
+             "write the density and g in cells that hold their units to say so",
+             density * acceleration, 1025.0 * standard_gravity, 1030.0 * 9.81},
         }};
     }();
     return table;
