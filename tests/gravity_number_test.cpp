@@ -1517,3 +1517,22 @@ TEST_CASE("sea water's density and specific weight typed as numbers") {
     CHECK(problems_in(run(decl + "P = 1000*Q*h/η\n")) >= 1);
     CHECK(problems_in(run(decl + "p_kPa = 10.05*h_ft\n")) >= 1);
 }
+
+// A gas line's friction in psi from a density in lb/ft³, Δp = f·(L/D)·ρ·v²/(2·g_c·144) (Crane
+// TP-410, from memory), with the bore in inches over 12: every number converts (in to ft, ft²
+// to in²), and what the line lacks is g_c = 32.174 lbm·ft/(lbf·s²) (NIST SP 811 (2008), B.8:
+// 1 lbf = 4.448222 N, g_n/0.3048 m = 32.174 ft/s²). The finding names g_c, and its advice,
+// followed, gives the right line, which passes.
+TEST_CASE("a pound-mass density into pounds of force without g_c") {
+    const std::string decl = "Δp : psi\nf : 1\nL, d : in\nρ : lb/ft^3\nv : ft/s\nL_ft : ft\n";
+    for (const char* formula :
+         {"Δp = f*(L_ft/(d/12))*ρ*v^2/(2*144)", "Δp = f*(L/d)*ρ*v^2/(2*144)"}) {
+        CAPTURE(formula);
+        const auto r = run(decl + formula + "\n");
+        CHECK(count_of(r, plumb::rules::unit_scale) == 1);
+        CHECK(says(first_under(r, plumb::rules::unit_scale), "g_c = 32.174"));
+        CHECK(says(first_under(r, plumb::rules::unit_scale), "divide"));
+    }
+    CHECK(problems_in(run(decl + "Δp = f*(L_ft/(d/12))*ρ*v^2/(2*32.174*144)\n")) == 0);
+    CHECK(problems_in(run(decl + "Δp = f*(L/d)*ρ*v^2/(2*32.2*144)\n")) == 0);
+}

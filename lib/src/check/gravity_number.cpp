@@ -443,8 +443,9 @@ const std::array<carried_quantity, 39>& quantities() {
             // Fresh Water and Seawater Properties, 2011, from memory), printed 64 lb/ft³,
             // 8.55 lb/gal and 1.99 slug/ft³ (common practice): a platform's firewater head, a
             // sea wall's toe pressure, 0.445 psi/ft.
-            {rules::trade_constant, "the density of sea water", "\u03C1_sw", "1/\u03C1_sw",
-             " (sea water: 1020 to 1030 kg/m\u00B3; 64 lb/ft\u00B3, 0.445 psi/ft)",
+            // Milk's, 1028 to 1035 kg/m³ (from memory), falls in the same range: 8.6 lb/gal.
+            {rules::trade_constant, "the density of sea water (or milk)", "\u03C1_sw",
+             "1/\u03C1_sw", " (sea water: 1020 to 1030 kg/m\u00B3; 64 lb/ft\u00B3, 8.6 lb/gal)",
              "declare the sea water's density with its unit (\u03C1_sw : kg/m^3 = 1025) to say "
              "so",
              "write the sea water's density in a cell that holds its unit to say so", density,

@@ -1167,6 +1167,8 @@ class checker {
     static bool units_agree_within_a_millionth(std::span<const operand> ops, double& unit);
     [[gnu::noinline]] bool reconcile_scales(std::span<const operand> ops, meeting_point what,
                                             double& unit, bool with_numbers);
+    bool report_pound_mass_without_gc(const operand& op, const operand& reference,
+                                      const scaled_operand& odd, const scaled_operand& in_unit);
     [[gnu::noinline]] bool reconcile_in_full(std::span<const operand> ops, meeting_point what,
                                              double& unit);
     static int significant_digits(std::string_view written);

@@ -200,6 +200,45 @@ bool checker::report_term_left_unconverted(std::span<const operand> ops,
 
 // reconcile_scales past its test of plain numbers, which most meeting points with numbers
 // pass: out of line, so that those do not pay for this one's frame.
+// "Δp = f*(L/(d/12))*ρ*v^2/(2*144)" in psi with ρ in lb/ft³: every number converts (in to
+// ft, ft² to in²), and what is left is g_c = 32.174 lbm·ft/(lbf·s²), which a density in
+// pounds of mass needs to give pounds of force (NIST SP 811 (2008), B.8: 1 lbf = 32.174 lb·ft/s²
+// as g_n/0.3048 m). Said so, rather than that the numbers are coefficients, whose advice
+// (divide by 386.089, 12 × 32.174) would leave the line 12 times too small.
+bool checker::report_pound_mass_without_gc(const operand& op, const operand& reference,
+                                           const scaled_operand& odd,
+                                           const scaled_operand& in_unit) {
+    // Every number taken as written, but a formula's own small whole number (v²/2).
+    const auto with_numbers = [](const scaled_operand& p) {
+        double s = p.scale;
+        for (const auto& l : p.literals)
+            if (!(l.value < 10.0 && l.value == std::round(l.value)))
+                s /= std::pow(l.value, l.exponent);
+        return s;
+    };
+    const double full = with_numbers(in_unit) / with_numbers(odd);
+    constexpr double g_c = 9.80665 / 0.3048;
+    const bool too_large = std::abs(full / g_c - 1.0) < 2e-3;
+    if (!too_large && std::abs(full * g_c - 1.0) >= 2e-3)
+        return false;
+    const std::string units = units_in(op.node) + " " + units_in(reference.node);
+    if (units.find("lb") == std::string::npos)
+        return false;
+    diagnostic& d = report(
+        rules::unit_scale,
+        fmt::format("as written, {} counts {} as much as {}: a mass in pounds needs g_c = "
+                    "32.174 lbm\u00B7ft/(lbf\u00B7s\u00B2) to give pounds of force",
+                    quote(op.node), too_large ? "32.174 times" : "1/32.174", quote(reference.node)),
+        file_.nodes[op.node].range);
+    d.level = severity::warning;
+    add_term(d, op);
+    add_term(d, reference);
+    d.notes.push_back({fmt::format("{} {} by g_c, 32.174 (32.2 as the trades round it)",
+                                   too_large ? "divide" : "multiply", quote(op.node)),
+                       {}});
+    return true;
+}
+
 bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what, double& unit) {
     const std::size_t base = scaled_.size();
     bool dimensionless = false;
@@ -358,6 +397,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
         ratio = *clean;
         exact_ratio.reset();
     }
+    if (report_pound_mass_without_gc(op, reference, parts[r.odd], parts[r.reference])) [[unlikely]]
+        return false;
     // "V_scf = 37.3*V_Nm3": the factor holds the reference temperatures beside the volume
     // factor (35.31 × 288.7/273.15), which is the conversion between the two.
     if (((symbols_.unit_marks() & at_reference_conditions) != 0 ||
