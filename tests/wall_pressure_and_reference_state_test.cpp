@@ -1125,3 +1125,15 @@ TEST_CASE("the atmosphere beside a standard reference temperature is a reference
                    plumb::rules::offset_scale) == 0);
     CHECK(count_of(run(site, "ρ_a = M_g*101325 {Pa}/(R_u*T_a)"), plumb::rules::offset_scale) == 1);
 }
+
+// A normal volume corrected to the line's state, V = V_N·(101.325/p)·(T/273.15) (ideal gas,
+// DIN 1343's normal state, from memory), with p in bar made kPa by its 100 beside it: the
+// 101.325 is the normal pressure in the unit the 100 makes, as it is beside 1.01325 and bar.
+// Without the 100, or with 10, the units still disagree.
+TEST_CASE("a reference pressure beside a reading a power of ten converts") {
+    const std::string line = "Q_a, Q_N : m^3/h\np_2a : bar \"absolute\"\nT_2 : K\nZ_2 : 1\n";
+    passes(line, {"Q_a = Q_N*(101.325/(100*p_2a))*(T_2/273.15)*Z_2"}, 2);
+    passes(line, {"Q_a = Q_N*101.325/(100*p_2a)"}, 1);
+    CHECK(problems_in(run(line, "Q_a = Q_N*(101.325/p_2a)")) >= 1);
+    CHECK(problems_in(run(line, "Q_a = Q_N*(101.325/(10*p_2a))")) >= 1);
+}

@@ -413,8 +413,13 @@ void checker::read_reference_states(reference_state_pairs& pairs, typed_term& re
                 if (c == i || conversion.sign != reading.sign)
                     continue;
                 const std::string_view digits = text(file_.nodes[conversion.node].range);
-                if (significant_digits(digits) < 4 ||
-                    !is_ratio_of_units(read_literal(digits, conversion.value, conversion.node)))
+                // "101.325/(100*p_2a)" with p_2a in bar: a power of ten converts bar to kPa.
+                const double tens = std::round(std::log10(conversion.value));
+                const bool power_of_ten =
+                    tens != 0.0 && std::abs(conversion.value / std::pow(10.0, tens) - 1.0) < 1e-12;
+                if (!power_of_ten &&
+                    (significant_digits(digits) < 4 ||
+                     !is_ratio_of_units(read_literal(digits, conversion.value, conversion.node))))
                     continue;
                 state = read_reference_state(reading.dim, number.value, written,
                                              reading.scale / conversion.value);
