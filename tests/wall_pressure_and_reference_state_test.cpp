@@ -1137,3 +1137,14 @@ TEST_CASE("a reference pressure beside a reading a power of ten converts") {
     CHECK(problems_in(run(line, "Q_a = Q_N*(101.325/p_2a)")) >= 1);
     CHECK(problems_in(run(line, "Q_a = Q_N*(101.325/(10*p_2a))")) >= 1);
 }
+
+// Nm³/h into scfm by the volume factor alone, 35.3147/60 = 0.588578 (NIST SP 811 (2008), B.8:
+// 1 ft³ = 0.02831685 m³), leaves out the reference temperatures, 0 °C against 60 °F: 5.7 % low.
+// Typed exact, or cut to 0.5885 from the rounded 35.31, it is the same slip; 37.33/60 =
+// 0.6222, which holds the temperatures, passes.
+TEST_CASE("a volume factor alone between normal and standard volumes, exact or cut") {
+    const std::string decl = "Q_scfm : scfm\nQ_N : Nm3/h\n";
+    fails_with(decl, {"Q_scfm = 0.58857*Q_N", "Q_scfm = 0.5885*Q_N", "Q_scfm = 0.5886*Q_N"},
+               plumb::rules::unit_scale);
+    passes(decl, {"Q_scfm = 0.6222*Q_N", "Q_scfm = 37.33*Q_N/60"});
+}

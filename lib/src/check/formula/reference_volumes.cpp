@@ -163,7 +163,9 @@ void checker::report_reference_temperatures_left_out(std::span<const operand> si
     // is the slip; equal as amounts of gas (V_n = V_s*273.15/288.15) is the conversion.
     const double as_volumes =
         (sides[0].type.scale / a->numbers) / (sides[1].type.scale / b->numbers);
-    const double rounding = a->rounding + b->rounding + 1e-9;
+    // "Q_scfm = 0.5885*Q_N": 35.31/60 typed to four digits, cut rather than rounded from
+    // 0.588578, is the volume factor still; no reference temperatures lie so close together.
+    const double rounding = std::max(a->rounding + b->rounding, 3e-4) + 1e-9;
     // "V_N = V_S*288.15/273.15": the temperatures' ratio written, but turned over; the result
     // is off by its square (11 % between 0 and 15 °C).
     const double turned = std::pow(b->kelvins / a->kelvins, a->power);
