@@ -155,6 +155,14 @@ TEST_CASE("sheets: unit texts read the way engineers type them") {
     same("US gallon/h", "gal/h");
     same("US gallons", "gal");
     same("US gpm", "gpm");
+    // The millimetre of water of a fan's or a filter's data sheet, 9.80665 Pa (NIST SP 811
+    // (2008), B.8), and a humidity ratio in grains per pound (7000 gr to the lb, ibid.).
+    same("mm w.g.", "mmH2O");
+    same("mmWC", "mmH2O");
+    same("mm H2O", "mmH2O");
+    same("grains/lb", "gr/lb");
+    CHECK(read_unit_text("mm w.g.")->scale == doctest::Approx(9.80665));
+    CHECK(read_unit_text("grains/lb")->scale == doctest::Approx(1.0 / 7000.0));
     // A share by mass or volume, as the chemical trades head it (common practice).
     same("% w/w", "%");
     same("wt%", "%");

@@ -177,6 +177,7 @@ TEST_CASE("pressure (NIST SP 811 (2008), Appendix B.8/B.9)") {
     check_printed("mmHg", pressure, 1.333224e2, 1e-4);
     check_printed("inHg", pressure, 3.386389e3, 1e-3);
     check_printed("inH2O", pressure, 2.490889e2, 1e-4);
+    check_printed("mmH2O", pressure, 9.80665, 1e-6);
     check_printed("ftH2O", pressure, 2.989067e3, 1e-3);
 }
 

@@ -216,7 +216,7 @@ std::string without_species(std::string t) {
 
 std::string trade_spelling(std::string t) {
     t = without_species(std::move(t));
-    static constexpr std::array<std::pair<std::string_view, std::string_view>, 122> whole{{
+    static constexpr std::array<std::pair<std::string_view, std::string_view>, 136> whole{{
         {"in. w.g.", "inH2O"},
         {"in.w.g.", "inH2O"},
         {"in w.g.", "inH2O"},
@@ -249,6 +249,21 @@ std::string trade_spelling(std::string t) {
         {"\"wc", "inH2O"},
         {"\"WG", "inH2O"},
         {"in w.c.", "inH2O"},
+        // The millimetre of water of fan and filter data sheets (NIST SP 811 (2008), B.8).
+        {"mm w.g.", "mmH2O"},
+        {"mm wg", "mmH2O"},
+        {"mm WG", "mmH2O"},
+        {"mmWG", "mmH2O"},
+        {"mm w.c.", "mmH2O"},
+        {"mm WC", "mmH2O"},
+        {"mmWC", "mmH2O"},
+        {"mm H2O", "mmH2O"},
+        {"mm H\u2082O", "mmH2O"},
+        // Humidity ratios in grains of moisture per pound of dry air (ASHRAE, common practice).
+        {"grains/lb", "gr/lb"},
+        {"grains per lb", "gr/lb"},
+        {"gr/lb da", "gr/lb"},
+        {"grains/lb da", "gr/lb"},
         // A gauge reading of the inch of water said in words beside the unit.
         {"in. w.c. g", "inH2Og"},
         {"in. w.c.(g)", "inH2Og"},

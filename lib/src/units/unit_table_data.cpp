@@ -394,6 +394,8 @@ constexpr unit_definition rows[] = {
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 2.490889E+02; exact by convention"),
     absolute("ftH2O", "foot of water (conventional)", pressure, 2989.06692, "2989.06692",
              prefixes::refused, "NIST SP 811 (2008), B.8 prints 2.989067E+03; exact by convention"),
+    absolute("mmH2O", "millimetre of water (conventional)", pressure, 9.80665, "9.80665",
+             prefixes::refused, "NIST SP 811 (2008), B.8 prints 9.80665 E+00; exact by convention"),
     gauge("inH2Og", "inch of water (conventional), gauge", 249.08891, "249.08891",
           "NIST SP 811 (2008), B.8 prints 2.490889E+02; exact by convention"
           "; common practice: gas piping's inches of water column are gauge, against the "
