@@ -1536,3 +1536,31 @@ TEST_CASE("a pound-mass density into pounds of force without g_c") {
     CHECK(problems_in(run(decl + "Δp = f*(L_ft/(d/12))*ρ*v^2/(2*32.174*144)\n")) == 0);
     CHECK(problems_in(run(decl + "Δp = f*(L/d)*ρ*v^2/(2*32.2*144)\n")) == 0);
 }
+
+// Moist air's enthalpy counts from dry air at 0 °C on the SI chart and at 0 °F on the I-P chart
+// (ASHRAE Handbook—Fundamentals, ch. 1, from memory): 1.006 × (−17.78 °C) = −17.88 kJ/kg, so a
+// reading converts as h_IP = h_SI/2.326 + 7.687 Btu/lb (1 Btu/lb = 2.326 kJ/kg, NIST SP 811
+// (2008), B.8). The factor alone is the slip; a difference converts by it alone, and a steam
+// table's enthalpies share one zero in both systems.
+TEST_CASE("moist air's enthalpy between the SI and I-P charts") {
+    const std::string decl =
+        "h_o : kJ/kg \"outdoor air enthalpy\"\n"
+        "h_oI : Btu/lb \"outdoor air enthalpy, I-P chart\"\n"
+        "Δh : kJ/kg \"air enthalpy difference across the coil\"\n"
+        "Δh_I : Btu/lb \"the same difference, I-P\"\n"
+        "h_s : kJ/kg \"steam enthalpy\"\nh_sI : Btu/lb \"steam enthalpy, I-P\"\n";
+    for (const char* formula : {"h_oI = h_o/2.326", "h_o = 2.326*h_oI", "h_oI = 0.4299*h_o"}) {
+        CAPTURE(formula);
+        const auto r = run(decl + formula + "\n");
+        CHECK(count_of(r, plumb::rules::offset_scale) == 1);
+        CHECK(says(first_under(r, plumb::rules::offset_scale), "7.687 Btu/lb"));
+    }
+    passes_with_one_note(decl, {"h_oI = h_o/2.326 + 7.68", "h_o = 2.326*(h_oI - 7.687)"},
+                         plumb::rules::trade_constant);
+    for (const char* formula :
+         {"h_oI = h_o/2.326 + 7.68 {Btu/lb}", "Δh_I = Δh/2.326", "h_sI = h_s/2.326"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(decl + formula + "\n")) == 0);
+    }
+    CHECK(problems_in(run(decl + "h_oI = h_o/2.326 + 7.0\n")) >= 1);
+}

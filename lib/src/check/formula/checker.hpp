@@ -883,6 +883,11 @@ class checker {
 
     // check/formula/gravity_numbers.cpp
     bool read_column_and_atmosphere(std::size_t base, std::uint32_t sum_node);
+
+    // check/formula/air_enthalpy.cpp
+    const symbol_entry* air_enthalpy_symbol(std::uint32_t node, bool said_air) const;
+    bool read_air_enthalpy_datum(std::size_t base);
+    [[gnu::noinline]] void report_air_enthalpy_datum_left_out(std::span<const operand> sides);
     bool numbers_could_carry(std::span<const scale_literal> numbers, const dimension& lacking,
                              std::span<std::string_view> texts) const;
     static carried_quantity::term_kind kind_of(const typed_term& t);

@@ -346,6 +346,9 @@ void checker::check_formula(const syntax::formula& f) {
                 sides[0].type.known && sides[0].type.dim == pressure_dimension()) [[unlikely]]
                 report_barometer_reading_as_absolute(sides);
             if (equation && sides.size() == 2 && out_.size() == findings_before &&
+                sides[0].type.known && sides[0].type.dim == velocity_squared_dim) [[unlikely]]
+                report_air_enthalpy_datum_left_out(sides);
+            if (equation && sides.size() == 2 && out_.size() == findings_before &&
                 sides[0].type.known && sides[0].type.dim == length_dimension() &&
                 (file_.nodes[sides[1].node].kind == expr_kind::divide ||
                  file_.nodes[sides[0].node].kind == expr_kind::divide)) [[unlikely]]
@@ -714,6 +717,9 @@ typed_term checker::eval_sum(std::uint32_t index) {
     if (!a.odd.empty() && !prefer_dimensionless && read_gravity_numbers_either_way(base, a, index))
         a = find_agreement(terms, prefer_dimensionless);
     if (!a.odd.empty() && !prefer_dimensionless && read_column_and_atmosphere(base, index))
+        a = find_agreement(terms, prefer_dimensionless);
+    if (!a.odd.empty() && !prefer_dimensionless && a.reference &&
+        *a.reference == velocity_squared_dim && read_air_enthalpy_datum(base)) [[unlikely]]
         a = find_agreement(terms, prefer_dimensionless);
     // "M = M_tm + H*t" with M in kN·m, "W_s = ρ_s*A_s + ρ_c*A_c + m_c - B_w" in N/m: the
     // terms with the other side's dimension are right, however few and wherever they are.

@@ -1,0 +1,161 @@
+// Moist air's enthalpy on the two charts: the SI chart counts dry air from 0 °C, the I-P
+// chart from 0 °F (ASHRAE Handbook—Fundamentals, ch. 1, from memory: h = 1.006·t + W·(2501
+// + 1.86·t) kJ/kg with t in °C, h = 0.240·t + W·(1061 + 0.444·t) Btu/lb with t in °F). At
+// 0 °F the SI chart reads 1.006 × (−17.78) = −17.88 kJ/kg, so a reading converts as
+// h_IP = h_SI/2.326 + 7.687 Btu/lb, and only a difference converts by 2.326 alone.
+#include "check/formula/checker.hpp"
+#include "model/ascii_case.hpp"
+#include "model/difference_name.hpp"
+#include "plumb/rules.hpp"
+
+#include <cmath>
+#include <fmt/format.h>
+
+namespace plumb::formula_check {
+
+namespace {
+constexpr double btu_per_lb = 2326.0;             // J/kg (NIST SP 811 (2008), B.8, Btu_IT/lb)
+constexpr double datum_si = 17.88e3;              // J/kg between the two zeros, dry air
+constexpr double datum_ip = 17.88e3 / btu_per_lb; // 7.687 Btu/lb
+} // namespace
+
+// A symbol declared as moist air's enthalpy: a specific energy in Btu/lb or J/kg whose name
+// or words say enthalpy and, where `said_air`, whose words say air; never one whose words say
+// water, steam or a refrigerant, whose tables share one zero in both systems.
+const symbol_entry* checker::air_enthalpy_symbol(std::uint32_t node, bool said_air) const {
+    const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, node)];
+    if (n.kind != expr_kind::symbol)
+        return nullptr;
+    const std::string_view name = text(n.range);
+    const symbol_entry* e = symbols_.find(name);
+    if (e == nullptr || !e->compact_dim || *e->compact_dim != velocity_squared_dim ||
+        (e->unit_text.find("Btu/lb") == std::string_view::npos &&
+         e->unit_text.find("J/kg") == std::string_view::npos))
+        return nullptr;
+    // A difference of enthalpies (Δh across a coil) converts by the factor alone.
+    if (names_a_difference(name, e->description))
+        return nullptr;
+    const std::string words = lower_ascii(e->description);
+    // Air by name, or by the places an air handler's enthalpies are taken.
+    bool air = !said_air || words.starts_with("air");
+    for (const std::string_view place :
+         {" air", "psychrometric", "outdoor", "room", "supply", "return", "mixed"})
+        air = air || words.find(place) != std::string::npos;
+    const bool enthalpy = words.find("enthalpy") != std::string::npos || name.starts_with("h");
+    for (const std::string_view other :
+         {"water", "steam", "refrigerant", "vapour", "vapor", "liquid", "ammonia", "brine"})
+        if (words.find(other) != std::string::npos)
+            return nullptr;
+    return air && enthalpy ? e : nullptr;
+}
+
+// "h_oI = h_o/2.326 + 7.68": the number between the charts' zeros, in the sum's unit, is a
+// quantity, as the atmosphere beside a column's pressure is.
+bool checker::read_air_enthalpy_datum(std::size_t base) {
+    const std::size_t count = operands_.size() - base;
+    std::size_t number = count;
+    double unit = std::numeric_limits<double>::quiet_NaN();
+    for (std::size_t i = 0; i < count; ++i) {
+        const operand& op = operands_[base + i];
+        const typed_term& t = op.type;
+        if (!t.known)
+            return false;
+        if (t.numeric) {
+            if (number != count || t.literal_count != 1)
+                return false;
+            number = i;
+            continue;
+        }
+        if (t.dim != velocity_squared_dim)
+            return false;
+        const bool holds_air = for_each_factor(op.node, [&](std::uint32_t at, int) {
+            return air_enthalpy_symbol(at, true) != nullptr;
+        });
+        const double u = unit_as_written(t);
+        if (!holds_air || !std::isfinite(u) ||
+            (std::isfinite(unit) && std::abs(u / unit - 1.0) > 2e-3))
+            return false;
+        unit = u;
+    }
+    if (number == count || !std::isfinite(unit))
+        return false;
+    auto& t =
+        const_cast<typed_term&>(operands_[base + number].type); // as the atmosphere's reading does
+    scale_literal& l = literals_[t.literal_begin];
+    const double joules = l.value * unit;
+    if (l.exponent != 1.0 || std::abs(joules / datum_si - 1.0) > 2e-3)
+        return false;
+    const std::uint32_t node = l.node;
+    t.dim = velocity_squared_dim;
+    t.scale = unit;
+    t.exact_scale.reset();
+    t.numeric = false;
+    t.value.reset();
+    read_as_quantity(l);
+    diagnostic& d = report(
+        rules::trade_constant,
+        fmt::format("'{}' is read as the step between moist air's two zeros, dry air at 0 \u00B0C "
+                    "and at 0 \u00B0F: {} kJ/kg, {} Btu/lb",
+                    display_text(file_.nodes[node].range), format_factor(datum_si / 1000.0),
+                    format_factor(std::round(datum_ip * 1000.0) / 1000.0)),
+        file_.nodes[node].range);
+    d.level = severity::note;
+    d.notes.push_back({"write it with its unit (7.687 {Btu/lb} or 17.88 {kJ/kg}) to say so", {}});
+    return true;
+}
+
+// "h_oI = h_o/2.326": moist air's enthalpy read off one chart and converted by the factor
+// alone to the other, whose zero is 17.88 kJ/kg (7.687 Btu/lb) away.
+void checker::report_air_enthalpy_datum_left_out(std::span<const operand> sides) {
+    const auto sole = [&](std::uint32_t k) -> const symbol_entry* {
+        const symbol_entry* found = nullptr;
+        const bool other = for_each_factor(k, [&](std::uint32_t at, int sign) {
+            const syntax::expr_node& n = file_.nodes[at];
+            if (n.kind == expr_kind::number)
+                return false;
+            const symbol_entry* e = air_enthalpy_symbol(at, false);
+            if (e == nullptr || found != nullptr || sign < 0)
+                return true;
+            found = e;
+            return false;
+        });
+        return other ? nullptr : found;
+    };
+    const symbol_entry* a = sole(sides[0].node);
+    const symbol_entry* b = sole(sides[1].node);
+    // One of the two said to be air's ("the same enthalpies, US sheet" beside the outdoor air's).
+    const auto said_air = [&](std::uint32_t k) {
+        return for_each_factor(
+            k, [&](std::uint32_t at, int) { return air_enthalpy_symbol(at, true) != nullptr; });
+    };
+    if (a == nullptr || b == nullptr || !(said_air(sides[0].node) || said_air(sides[1].node)))
+        return;
+    const bool a_ip = a->unit_text.find("Btu/lb") != std::string_view::npos;
+    const bool b_ip = b->unit_text.find("Btu/lb") != std::string_view::npos;
+    if (a_ip == b_ip)
+        return;
+    const operand& si = a_ip ? sides[1] : sides[0];
+    const operand& ip = a_ip ? sides[0] : sides[1];
+    diagnostic& d = report(
+        rules::offset_scale,
+        fmt::format("{} and {} are moist air's enthalpies, which the I-P chart counts from dry air "
+                    "at 0 \u00B0F and the SI chart from 0 \u00B0C: converted by the factor alone, "
+                    "a reading is off by 7.687 Btu/lb (17.88 kJ/kg)",
+                    quote(ip.node), quote(si.node)),
+        file_.nodes[sides[1].node].range);
+    d.level = severity::warning;
+    add_term(d, sides[0]);
+    add_term(d, sides[1], true);
+    const bool ip_alone =
+        file_.nodes[syntax::inside_brackets(file_, ip.node)].kind == expr_kind::symbol;
+    d.notes.push_back(
+        {ip_alone ? fmt::format("write ({} + 7.687 {{Btu/lb}}); a difference of enthalpies "
+                                "converts by 2.326 alone",
+                                display_text(file_.nodes[si.node].range))
+                  : fmt::format("write ({} - 17.88 {{kJ/kg}}); a difference of enthalpies "
+                                "converts by 2.326 alone",
+                                display_text(file_.nodes[ip.node].range)),
+         {}});
+}
+
+} // namespace plumb::formula_check
