@@ -1148,3 +1148,16 @@ TEST_CASE("a volume factor alone between normal and standard volumes, exact or c
                plumb::rules::unit_scale);
     passes(decl, {"Q_scfm = 0.6222*Q_N", "Q_scfm = 37.33*Q_N/60"});
 }
+
+// A sealed piezometer reads absolute; less the site's barometer it is the pore pressure above
+// the atmosphere (common practice), with the barometer in hPa taken to kPa by 0.1 or /10 (NIST
+// SP 811 (2008), B.8: 1 hPa = 100 Pa). The power of ten converts the barometer's unit and
+// weighs nothing; the result is a gauge reading. Taken to 10 times the unit it is still off.
+TEST_CASE("an absolute reading less a barometer a power of ten converts is a gauge reading") {
+    const std::string piezometer = "p_v1 : kPag \"pore pressure\"\n"
+                                   "p_n3 : kPa \"sealed gauge reading, absolute\"\n"
+                                   "p_bh : hPa \"site barometer, 987 hPa\"\n";
+    passes(piezometer, {"p_v1 = p_n3 - 0.1*p_bh", "p_v1 = p_n3 - p_bh/10"});
+    CHECK(problems_in(run(piezometer, "p_v1 = p_n3 - p_bh")) >= 1);
+    CHECK(problems_in(run(piezometer, "p_v1 = 10*p_n3 - p_bh")) >= 1);
+}

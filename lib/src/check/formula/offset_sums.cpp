@@ -616,6 +616,17 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
             t.type.offset->scale == unit_scale::gauge &&
             gauge_divided_into_absolute_unit(terms, t.type.scale * w->den())) [[unlikely]]
             w = rational(1);
+        // "p_n - 0.1*p_bh" with the reading in kPa and the barometer in hPa, "10*p_n - p_bh":
+        // a power of ten that takes one absolute reading into another's unit converts it.
+        if (w && t.type.point && t.type.offset == nullptr && w->num() > 0 &&
+            (w->num() == 1 || w->den() == 1) && w->num() * w->den() > 1 &&
+            (w->num() * w->den()) % 10 == 0 &&
+            std::any_of(terms.begin(), terms.end(), [&](const operand& o) {
+                return &o != &t && o.type.known && o.type.point && o.type.offset == nullptr &&
+                       o.type.dim == t.type.dim && o.type.literal_count == 0 &&
+                       std::abs(o.type.scale * w->to_double() / t.type.scale - 1.0) < 1e-9;
+            })) [[unlikely]]
+            w = rational(1);
         if (weight && w && std::isfinite(t.type.origin_tolerance)) {
             try {
                 weight = t.subtracted ? *weight - *w : *weight + *w;
