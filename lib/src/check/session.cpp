@@ -657,6 +657,9 @@ class session {
                     table.note_unit_marks(unit_marks_of(entry.unit_text));
                 if (entry.offset_unit != nullptr)
                     table.note_unit_marks(offset_scale_readings);
+                if (entry.description.find("auge") != std::string_view::npos ||
+                    counts_below_the_barometer(name, entry.description))
+                    table.note_unit_marks(read_from_barometer);
                 continue;
             }
             if (existing->declared_at.file == at.file &&

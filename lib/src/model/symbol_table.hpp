@@ -28,6 +28,7 @@ enum unit_mark : std::uint8_t {
     mass_fractions = 16,         // ppm, ppb: fractions the trades set beside mg/L in water
     tons = 32,                   // ton: the short ton, where cooling means a ton of refrigeration
     per_ton_of_cooling = 64,     // kW/TR: a chiller's power in per cooling out, a COP's reciprocal
+    read_from_barometer = 128,   // a pressure whose words say a gauge or a vacuum reads it
 };
 
 // "NL/min", "Nl": the normal litre, a thousandth of a normal cubic metre (DIN 1343's state,

@@ -24,9 +24,10 @@ typed_term checker::eval_negate(const syntax::expr_node& n) {
 
 typed_term checker::eval_power(const syntax::expr_node& n) {
     // "(p/p_r)^0.5", the root of a ratio of gauge readings, as sqrt(p/p_r) is read.
-    if (const syntax::expr_node& e = file_.nodes[syntax::inside_brackets(file_, n.rhs)];
-        e.kind == expr_kind::number && written_number(e.range) == 0.5 &&
-        ratio_of_gauge_readings(n.lhs)) [[unlikely]] {
+    if (const syntax::expr_node& e = file_.nodes[n.rhs];
+        (symbols_.unit_marks() & offset_scale_readings) != 0 && e.kind == expr_kind::number &&
+        file_.nodes[syntax::inside_brackets(file_, n.lhs)].kind == expr_kind::divide &&
+        written_number(e.range) == 0.5 && ratio_of_gauge_readings(n.lhs)) [[unlikely]] {
         typed_term ratio;
         ratio.literal_begin = static_cast<std::uint32_t>(literals_.size());
         return ratio;
@@ -342,8 +343,9 @@ void checker::check_formula(const syntax::formula& f) {
                 (sides[0].type.absolute_pressure_difference ||
                  sides[1].type.absolute_pressure_difference)) [[unlikely]]
                 report_absolute_set_to_difference(sides);
-            if (equation && sides.size() == 2 && out_.size() == findings_before &&
-                sides[0].type.known && sides[0].type.dim == pressure_dimension()) [[unlikely]]
+            if ((symbols_.unit_marks() & read_from_barometer) != 0 && equation &&
+                sides.size() == 2 && out_.size() == findings_before && sides[0].type.known &&
+                sides[0].type.dim == pressure_dimension()) [[unlikely]]
                 report_barometer_reading_as_absolute(sides);
             if (equation && sides.size() == 2 && out_.size() == findings_before &&
                 sides[0].type.known && sides[0].type.dim == velocity_squared_dim) [[unlikely]]
@@ -1739,7 +1741,8 @@ typed_term checker::eval_call(const syntax::expr_node& n) {
             prefer_dimensionless_ = node;
         if (square_root)
             square_root_argument_ = node;
-        if (square_root && ratio_of_gauge_readings(node)) [[unlikely]] {
+        if (square_root && (symbols_.unit_marks() & offset_scale_readings) != 0 &&
+            ratio_of_gauge_readings(node)) [[unlikely]] {
             // "q = q_r*sqrt(p/p_r)": a nozzle's or a sprinkler's flow goes with the root of the
             // pressure it discharges across to the atmosphere, q = K·√p with p in psig (NFPA 13,
             // from memory): a ratio of two gauge readings on one scale is a pure number there.

@@ -944,7 +944,12 @@ void checker::report_barometer_reading_as_absolute(std::span<const operand> side
         const std::string_view reading_name = text(file_.nodes[reading].range);
         const symbol_entry* a = symbols_.find(absolute_name);
         const symbol_entry* r = symbols_.find(reading_name);
-        if (a == nullptr || r == nullptr || !a->compact_dim || !r->compact_dim ||
+        // The cheap test first: every pressure equation comes here, few with a reading whose
+        // words say a gauge or a vacuum reads it.
+        if (r == nullptr || (r->description.find("auge") == std::string_view::npos &&
+                             !counts_below_the_barometer(reading_name, r->description)))
+            continue;
+        if (a == nullptr || !a->compact_dim || !r->compact_dim ||
             *a->compact_dim != pressure_dimension() || *r->compact_dim != pressure_dimension() ||
             a->offset_unit != nullptr || r->offset_unit != nullptr || !said_absolute(*a) ||
             counts_below_the_barometer(absolute_name, a->description) ||
