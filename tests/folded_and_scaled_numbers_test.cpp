@@ -1612,6 +1612,10 @@ TEST_CASE("a share written as one less a fraction is no conversion") {
                   "V_fd = n_d*v_car*(1 - 0.75)/1000", "V_fd = n_d*v_car*(1 + 0.15)/1000"});
     fails_with(decl, {"V_fd = n_d*v_car*(1 - 0.70)", "V_fd = n_d*v_car*0.3048"},
                plumb::rules::unit_scale);
+    // The slip there is the /1000 left out: the share is no part of the ratio told.
+    CHECK(plumb::test::says(
+        first_under(run(decl, "V_fd = n_d*v_car*(1 - 0.70)"), plumb::rules::unit_scale),
+        "counts 1000 times as much"));
 }
 
 // Struvite's solubility product from its pK, K_sp = 10^(−13.26) (mol/L)³ (Snoeyink and Jenkins,

@@ -781,9 +781,14 @@ typed_term checker::eval_sum(std::uint32_t index) {
     if (result.numeric) {
         // A sum of numbers is one number: physics or a conversion as a whole.
         cut_literals_to(literal_base);
-        if (result.value && !result.value->is_zero())
+        if (result.value && !result.value->is_zero()) {
             literals_.push_back(read_literal(text(file_.nodes[index].range),
                                              result.value->to_double(), index, result.value));
+            // "(1 - 0.70)", a share, is no table's unit ratio, whatever its value comes near
+            // (0.30 beside 0.3048 m per ft): it is weighed as a coefficient.
+            literals_.back().factor_like = false;
+            literals_.back().table_digits = false;
+        }
         return result;
     }
     if (result.dim == pressure_dimension() && terms.size() <= 4) [[unlikely]]
