@@ -1,5 +1,7 @@
 #include "model/difference_name.hpp"
 
+#include "model/ascii_case.hpp"
+
 #include <string>
 
 namespace plumb {
@@ -113,10 +115,7 @@ bool counts_below_the_barometer(std::string_view name, std::string_view descript
 }
 
 bool describes_a_gauge_reading(std::string_view description) {
-    std::string words(description);
-    for (char& c : words)
-        if (c >= 'A' && c <= 'Z')
-            c = static_cast<char>(c - 'A' + 'a');
+    const std::string words = lower_ascii(description);
     for (const std::string_view other :
          {"absolute", "vacuum", "below", "above", "barometer", "atmospher", "strain gauge",
           "rain gauge", "wire gauge", "track gauge", "gauge length", "differential"})

@@ -108,18 +108,8 @@ bool checker::read_air_enthalpy_datum(std::size_t base) {
 // alone to the other, whose zero is 17.88 kJ/kg (7.687 Btu/lb) away.
 void checker::report_air_enthalpy_datum_left_out(std::span<const operand> sides) {
     const auto sole = [&](std::uint32_t k) -> const symbol_entry* {
-        const symbol_entry* found = nullptr;
-        const bool other = for_each_factor(k, [&](std::uint32_t at, int sign) {
-            const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind == expr_kind::number)
-                return false;
-            const symbol_entry* e = air_enthalpy_symbol(at, false);
-            if (e == nullptr || found != nullptr || sign < 0)
-                return true;
-            found = e;
-            return false;
-        });
-        return other ? nullptr : found;
+        const std::uint32_t at = sole_symbol_times_numbers(k);
+        return at != syntax::no_index ? air_enthalpy_symbol(at, false) : nullptr;
     };
     const symbol_entry* a = sole(sides[0].node);
     const symbol_entry* b = sole(sides[1].node);

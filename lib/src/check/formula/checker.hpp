@@ -708,6 +708,7 @@ class checker {
     // check/formula/reference_volumes.cpp
     std::optional<std::string_view> declared_unit_text(std::uint32_t at) const;
     std::uint32_t sole_symbol_times_conversions(std::uint32_t k, bool cells_too = false) const;
+    std::uint32_t sole_symbol_times_numbers(std::uint32_t k) const;
     static std::optional<reference_volume> stated_reference_volume(const symbol_entry& e);
     std::optional<reference_volume> reference_volume_of_sum(std::uint32_t k) const;
     std::optional<reference_volume> reference_volume_of(std::uint32_t k) const;

@@ -921,23 +921,9 @@ void checker::report_absolute_set_to_difference(std::span<const operand> sides) 
 // gauge reads above the barometer, whatever its dial's unit is called. Both sides are
 // pressures in plain units, and only the words tell them apart.
 void checker::report_barometer_reading_as_absolute(std::span<const operand> sides) {
-    // The sides agree in unit already, so the numbers beside the symbol convert it (14.5).
-    const auto sole_symbol = [&](std::uint32_t k) {
-        std::uint32_t found = syntax::no_index;
-        const bool other = for_each_factor(k, [&](std::uint32_t at, int) {
-            const syntax::expr_node& n = file_.nodes[at];
-            if (n.kind == expr_kind::symbol) {
-                const bool second = found != syntax::no_index;
-                found = at;
-                return second;
-            }
-            return n.kind != expr_kind::number;
-        });
-        return other ? syntax::no_index : found;
-    };
     for (std::size_t k = 0; k < 2; ++k) {
-        const std::uint32_t absolute = sole_symbol(sides[k].node);
-        const std::uint32_t reading = sole_symbol(sides[1 - k].node);
+        const std::uint32_t absolute = sole_symbol_times_numbers(sides[k].node);
+        const std::uint32_t reading = sole_symbol_times_numbers(sides[1 - k].node);
         if (absolute == syntax::no_index || reading == syntax::no_index)
             continue;
         const std::string_view absolute_name = text(file_.nodes[absolute].range);

@@ -35,6 +35,23 @@ std::uint32_t checker::sole_symbol_times_conversions(std::uint32_t k, bool cells
     return other ? syntax::no_index : found;
 }
 
+// The one symbol of a product whose other factors are numbers, above the line; none where
+// there is another factor or the symbol divides. Where the sides agree in unit already the
+// numbers convert it, rounded (14.5) or not.
+std::uint32_t checker::sole_symbol_times_numbers(std::uint32_t k) const {
+    std::uint32_t found = syntax::no_index;
+    const bool other = for_each_factor(k, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::symbol) {
+            const bool second = found != syntax::no_index;
+            found = at;
+            return second || sign < 0;
+        }
+        return n.kind != expr_kind::number;
+    });
+    return other ? syntax::no_index : found;
+}
+
 // "Q_s : scfm "exhaust, standard at 68 °F"": a gas volume whose description states a
 // reference temperature other than its unit's usual one (the US EPA's standard cubic foot
 // at 68 °F, 40 CFR 60.2, from memory, beside the gas trade's 60 °F): the stated one rules.
