@@ -694,6 +694,32 @@ TEST_CASE("a speed in rpm turned into radians per second with pi over 30") {
     CHECK(count_of(run(decl + "ω = pi*n/3\n"), plumb::rules::unit_scale) == 1);
 }
 
+// π written where 2π belongs, "ω = π·n/60", halves the angular speed and the power from a
+// torque (ω = 2π·n, ISO 80000-3; P = 2π·n·M, ISO 80000-4). A rim speed takes π alone,
+// v = π·D·n, and 30000 beside π is 60000 ÷ 2 as 30 is 60 ÷ 2 (kW from N·m and rpm).
+// "2*pi*n/30" takes the 2 twice and is twice its true value, not four times.
+TEST_CASE("a speed in rpm with pi alone where 2 pi belongs") {
+    const std::string decl =
+        "n : rpm\nω : rad/s\nP : kW\nT : N*m\nD : m \"wheel diameter\"\nv : m/s\n";
+    passes(decl, {"ω = 2*pi*n/60", "ω = pi*2*n/60", "P = 2*pi*T*n/60000", "P = T*pi*n/30000",
+                  "v = pi*D*n/60", "ω = 0.10472*n"});
+    const auto note = run(decl + "P = T*pi*n/30000\n");
+    CHECK(plumb::test::says(plumb::test::first_under(note, plumb::rules::trade_constant),
+                            "30000 is read as 60000 \u00F7 2"));
+    for (const char* half : {"ω = pi*n/60\n", "P = pi*T*n/60000\n", "ω = pi*(n/60)\n"}) {
+        CAPTURE(half);
+        const auto r = run(decl + half);
+        CHECK(count_of(r, plumb::rules::unit_scale) == 1);
+        CHECK(plumb::test::says(plumb::test::first_under(r, plumb::rules::unit_scale),
+                                "half its true value"));
+    }
+    const auto twice = run(decl + "ω = 2*pi*n/30\n");
+    CHECK(plumb::test::says(plumb::test::first_under(twice, plumb::rules::unit_scale),
+                            "2 times its true value"));
+    CHECK_FALSE(plumb::test::says(plumb::test::first_under(twice, plumb::rules::unit_scale),
+                                  "4 times"));
+}
+
 // The US rational method Q = C·i·A gives cfs from in/h and acres, leaving out 1 acre·in/h =
 // 43560 ft² × (1/12 ft)/3600 s = 1.00833 cfs (NIST SP 811 (2008), B.8, acre and inch; the
 // convention is common practice): a note, not a warning. In mm/h the units are 100 times or

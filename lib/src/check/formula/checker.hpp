@@ -744,6 +744,31 @@ class checker {
         }
     };
 
+    // What a formula holds that the rotation rules weigh: its parts by kind, and counts.
+    struct rotation_census {
+        rotating_part torque;
+        rotating_part speed;
+        rotating_part partner; // an angular speed in radians, or an inertia
+        rotating_part rim;     // a speed along a path (m/s, fpm)
+        rotating_part length;
+        round_length length_round = round_length::none;
+        int torques = 0;
+        int speeds = 0;
+        int powers = 0;
+        int energies = 0; // in an energy unit (J, kWh), which no torque is written in
+        int angular_speeds = 0;
+        int inertias = 0;
+        int rim_speeds = 0;
+        int lengths = 0;
+        int other_numbers = 0; // not powers of ten or 60: π/12, a screw's 2 strokes
+        int displacements = 0; // a volume per revolution (cm³/rev): a pump's or motor's
+        int pressures = 0;
+        int capacitors = 0; // a capacitance or an inductance
+        int reactives = 0;  // a reactive power (var, kvar)
+        int pis = 0;        // π written as π, not folded into a number
+        int numbers_not_clock_conversions = 0; // neither 10^k nor 60·10^k, as 2 or 30
+    };
+
     // check/formula/rotation.cpp
     void warn_of_missing_pi(const syntax::formula& f, std::string message, std::string fix);
     static bool is_rotating_power_or_torque(const compact_dimension& dim);
@@ -753,6 +778,7 @@ class checker {
     void report_rim_speed_without_pi(const syntax::formula& f, const rotating_part& speed,
                                      const rotating_part& rim, const rotating_part& length,
                                      bool radius);
+    void report_half_of_two_pi(const syntax::formula& f, const rotation_census& c);
     void report_revolutions_beside_radians(const syntax::formula& f, const rotating_part& speed,
                                            const rotating_part& partner, bool angular);
 
@@ -1239,6 +1265,7 @@ class checker {
     std::uint32_t raised_number(std::uint32_t root, std::uint32_t number) const;
     bool report_unneeded(const operand& op, const scale_literal& l,
                          std::optional<double> folded_power = std::nullopt);
+    bool report_two_of_two_pi_twice(const operand& op, const scale_literal& l);
     void report_inverted_factor(const operand& op, const scale_literal& l);
     bool report_inverted_and_decade_short(std::span<const operand> ops,
                                           std::span<const std::size_t> index,

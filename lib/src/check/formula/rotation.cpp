@@ -33,48 +33,30 @@ bool checker::asks_for_two_pi(const compact_dimension& dim) {
 // along a rim meets one in revolutions and a diameter (v = π·D·n).
 void checker::report_revolution_without_two_pi(const syntax::formula& f,
                                                const compact_dimension& sides_dim) {
-    rotating_part torque;
-    rotating_part speed;
-    rotating_part partner; // an angular speed in radians, or an inertia
-    rotating_part rim;     // a speed along a path (m/s, fpm)
-    rotating_part length;
-    round_length length_round = round_length::none;
-    int torques = 0;
-    int speeds = 0;
-    int powers = 0;
-    int energies = 0; // in an energy unit (J, kWh), which no torque is written in
-    int angular_speeds = 0;
-    int inertias = 0;
-    int rim_speeds = 0;
-    int lengths = 0;
-    int other_numbers = 0; // not powers of ten or 60: π/12, a screw's 2 strokes
-    int displacements = 0; // a volume per revolution (cm³/rev): a pump's or motor's
-    int pressures = 0;
-    int capacitors = 0; // a capacitance or an inductance
-    int reactives = 0;  // a reactive power (var, kvar)
+    rotation_census c;
     const auto classify = [&](rotating_part part, const compact_dimension& dim,
                               round_length round) {
         const bool reactive = part.unit.find("var") != std::string_view::npos ||
                               part.unit.find("VAr") != std::string_view::npos ||
                               part.unit.find("VAR") != std::string_view::npos;
         if (dim == volume_dim && (unit_marks_of(part.unit) & counts_revolutions) != 0) {
-            ++displacements;
+            ++c.displacements;
         } else if (dim == pressure_dimension()) {
-            ++pressures;
+            ++c.pressures;
         } else if (dim == capacitance_dim || dim == inductance_dim) {
-            ++capacitors;
+            ++c.capacitors;
         } else if (dim == power_dim && reactive) {
-            ++reactives;
+            ++c.reactives;
         } else if ((unit_marks_of(part.unit) & counts_revolutions) != 0) {
-            speed = part;
-            ++speeds;
+            c.speed = part;
+            ++c.speeds;
         } else if (dim == frequency_dim && part.unit.find("rad") != std::string_view::npos) {
-            partner = part;
-            ++angular_speeds;
+            c.partner = part;
+            ++c.angular_speeds;
         } else if (dim == moment_of_inertia_dim) {
-            if (angular_speeds == 0)
-                partner = part;
-            ++inertias;
+            if (c.angular_speeds == 0)
+                c.partner = part;
+            ++c.inertias;
         } else if (dim == energy_dim) {
             bool energy_unit_named = part.unit.empty();
             for (const std::string_view energy_unit :
@@ -82,20 +64,20 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
                 energy_unit_named =
                     energy_unit_named || part.unit.find(energy_unit) != std::string_view::npos;
             if (energy_unit_named) {
-                ++energies;
+                ++c.energies;
             } else {
-                torque = part;
-                ++torques;
+                c.torque = part;
+                ++c.torques;
             }
         } else if (dim == power_dim) {
-            ++powers;
+            ++c.powers;
         } else if (dim == velocity_dim) {
-            rim = part;
-            ++rim_speeds;
+            c.rim = part;
+            ++c.rim_speeds;
         } else if (dim == length_dim) {
-            length = part;
-            length_round = round;
-            ++lengths;
+            c.length = part;
+            c.length_round = round;
+            ++c.lengths;
         }
     };
     // Found: a 2π written in the formula, or a term this rule cannot read.
@@ -104,7 +86,8 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
         syntax::search_formula(file_, f, [&](std::uint32_t at, const syntax::expr_node& n) {
             switch (n.kind) {
             case expr_kind::pi:
-                return search_step::found;
+                ++c.pis;
+                return search_step::skip;
             case expr_kind::number: {
                 // 2π, π or their inverses written as numbers (6.283, 3.1416, 0.159), and with a
                 // minute folded in (2π/60 = 0.1047 rad/s per rpm, 60/2π = 9.549).
@@ -124,7 +107,15 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
                                      std::abs(rest - 1.0) < 1e-12;
                     }
                 if (!conversion)
-                    ++other_numbers;
+                    ++c.other_numbers;
+                // 2 is 10 × (12 in per ft)/(60 s per min) above: the half-of-2π rule counts
+                // only powers of ten and a minute as conversions.
+                bool clock_conversion = false;
+                for (const double clock : {1.0, 60.0, 1.0 / 60.0})
+                    clock_conversion = clock_conversion || near_power_of_ten(v / clock, 1e-12) ||
+                                       std::abs(v / clock - 1.0) < 1e-12;
+                if (!clock_conversion)
+                    ++c.numbers_not_clock_conversions;
                 return search_step::skip;
             }
             case expr_kind::symbol: {
@@ -165,49 +156,53 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
         });
     if (not_for_this_rule)
         return;
-    if (speeds >= 1 &&
-        (angular_speeds >= 1 || (inertias >= 1 && is_rotating_power_or_torque(sides_dim)))) {
-        report_revolutions_beside_radians(f, speed, partner, angular_speeds >= 1);
+    if (c.pis > 0) {
+        report_half_of_two_pi(f, c);
+        return;
+    }
+    if (c.speeds >= 1 &&
+        (c.angular_speeds >= 1 || (c.inertias >= 1 && is_rotating_power_or_torque(sides_dim)))) {
+        report_revolutions_beside_radians(f, c.speed, c.partner, c.angular_speeds >= 1);
         return;
     }
     // Only a speed in revolutions (rpm, rev/s): a frequency in Hz over a diameter is a
     // vortex shedding or an acoustic mode, f = St·V/d (Blevins, Flow-Induced Vibration, 2nd
     // ed., ch. 3, from memory), with no π in it.
-    if (speeds == 1 && rim_speeds == 1 && lengths == 1 && torques == 0 && powers == 0 &&
-        energies == 0 && angular_speeds == 0 && inertias == 0 && other_numbers == 0 &&
-        length_round != round_length::none && speed.unit.find("Hz") == std::string_view::npos) {
-        report_rim_speed_without_pi(f, speed, rim, length, length_round == round_length::radius);
+    if (c.speeds == 1 && c.rim_speeds == 1 && c.lengths == 1 && c.torques == 0 && c.powers == 0 &&
+        c.energies == 0 && c.angular_speeds == 0 && c.inertias == 0 && c.other_numbers == 0 &&
+        c.length_round != round_length::none && c.speed.unit.find("Hz") == std::string_view::npos) {
+        report_rim_speed_without_pi(f, c.speed, c.rim, c.length, c.length_round == round_length::radius);
         return;
     }
     // X_C = 1/(2π·f·C), Q_c = 2π·f·C·V²: a capacitor's or reactor's reactance takes the
     // angular frequency ω = 2π·f (IEC 60050-131, from memory). Only with a reactance or a
     // reactive power in the formula: a switching loss C·V²·f in W needs no 2π.
-    if (speeds == 1 && capacitors == 1 && angular_speeds == 0 &&
-        (reactives >= 1 || sides_dim == resistance_dim) && torques == 0 && rim_speeds == 0) {
+    if (c.speeds == 1 && c.capacitors == 1 && c.angular_speeds == 0 &&
+        (c.reactives >= 1 || sides_dim == resistance_dim) && c.torques == 0 && c.rim_speeds == 0) {
         warn_of_missing_pi(
             f,
             fmt::format("{} is a frequency in cycles ({}), and a capacitor's or reactor's "
                         "reactance takes the angular frequency ω = 2π·f "
                         "(X_C = 1/(2π·f·C), Q = 2π·f·C·V²); "
                         "this formula has no 2π, so it is off by 6.28319",
-                        speed.shown(), speed.unit),
+                        c.speed.shown(), c.speed.unit),
             "write 2*pi*f, or declare the angular frequency in rad/s");
         return;
     }
     // T = Δp·V_g/(2π): a hydraulic motor's displacement is per revolution, 2π radians
     // (ISO 4391, from memory); a pump's flow V_g·n needs no 2π, and has a speed beside it.
-    if (displacements == 1 && torques == 1 && pressures >= 1 && speeds == 0 && powers == 0 &&
-        energies == 0 && angular_speeds == 0) {
+    if (c.displacements == 1 && c.torques == 1 && c.pressures >= 1 && c.speeds == 0 && c.powers == 0 &&
+        c.energies == 0 && c.angular_speeds == 0) {
         warn_of_missing_pi(
             f,
             fmt::format("{} is a torque ({}) from a displacement per revolution: a motor's "
                         "torque is Δp·V_g/(2π), the 2π radians of each "
                         "revolution, and this formula has no 2π, so it is off by 6.28319",
-                        torque.shown(), torque.unit),
+                        c.torque.shown(), c.torque.unit),
             "revolutions count as cycles: divide by 2*pi (T = Δp*V_g/(2*pi))");
         return;
     }
-    if (torques != 1 || speeds != 1 || powers != 1 || energies != 0)
+    if (c.torques != 1 || c.speeds != 1 || c.powers != 1 || c.energies != 0)
         return;
     warn_of_missing_pi(
         f,
@@ -215,7 +210,7 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
                     "torque meet through the 2\u03C0 radians of each revolution, P = "
                     "2\u03C0\u00B7n\u00B7M, and this formula has no 2\u03C0, so it is "
                     "off by 6.28319",
-                    torque.shown(), torque.unit, speed.shown(), speed.unit),
+                    c.torque.shown(), c.torque.unit, c.speed.shown(), c.speed.unit),
         "revolutions count as cycles: write 2*pi*n for the angular speed "
         "(M = 60000*P/(2*pi*n) in N·m from kW and rpm is M = 9549*P/n), or "
         "declare the speed in rad/s");
@@ -243,6 +238,33 @@ void checker::report_rim_speed_without_pi(const syntax::formula& f, const rotati
                           "conversions kept beside it (a speed in revolutions counts cycles)",
                           radius ? "2\u03C0" : "\u03C0", rim.name, radius ? "2*pi" : "pi",
                           length.name, speed.name));
+}
+
+// "ω = π*n/60", "P = T*π*n/60000": the 2 of 2π left out, where π/30 (2π/60) was meant. Only
+// with π alone, no other number than unit conversions beside it (a 2, a 30, a 4 of a circle
+// make it some other formula), and no rim or diameter (v = π·D·n takes π alone).
+void checker::report_half_of_two_pi(const syntax::formula& f, const rotation_census& c) {
+    if (c.pis != 1 || c.speeds != 1 || c.numbers_not_clock_conversions != 0 || c.rim_speeds != 0 ||
+        c.lengths != 0 || c.inertias != 0 || c.energies != 0 || c.displacements != 0 ||
+        c.capacitors != 0)
+        return;
+    const bool radians = c.angular_speeds == 1 && c.torques == 0 && c.powers == 0;
+    const bool power = c.angular_speeds == 0 && c.torques == 1 && c.powers == 1;
+    if (!radians && !power)
+        return;
+    const std::string meets =
+        radians ? fmt::format("{} an angular speed in radians ({}): a revolution is 2\u03C0 "
+                              "radians",
+                              c.partner.shown(), c.partner.unit)
+                : fmt::format("{} a torque ({}): power and torque meet through the 2\u03C0 "
+                              "radians of each revolution, P = 2\u03C0\u00B7n\u00B7M",
+                              c.torque.shown(), c.torque.unit);
+    warn_of_missing_pi(f,
+                       fmt::format("{} is a speed in revolutions ({}) and {}, and this formula "
+                                   "has \u03C0 alone, so it is half its true value",
+                                   c.speed.shown(), c.speed.unit, meets),
+                       "write 2*pi*n/60 for the angular speed in rad/s from rpm (or pi*n/30, "
+                       "the 2 taken into the 60)");
 }
 
 void checker::report_revolutions_beside_radians(const syntax::formula& f,

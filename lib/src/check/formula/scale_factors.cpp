@@ -350,7 +350,7 @@ bool checker::accept_folded_coefficient(std::span<const operand> ops,
                     // "Δp*V/(24*π)" in lbf·ft from psi and in³: a revolution's 2 beside π,
                     // and 12 in per ft (2 × 60 likewise, from a minute), as 20·π is 2 × 10.
                     // "2*pi*n/30" is the 2 twice: the half reading is for a product with none.
-                    const bool half = l.value == 30.0;
+                    const bool half = l.value == 30.0 || l.value == 30000.0;
                     if (const std::optional<scale_literal> twice = twice_a_conversion(l);
                         twice && holds_pi(ops[index[i]].node) &&
                         !(half && holds_number(ops[index[i]].node, 2.0)) &&
@@ -562,9 +562,28 @@ std::optional<scale_literal> checker::twice_a_conversion(const scale_literal& l)
     for (const std::int64_t conversion : {12, 60})
         if (l.value == 2.0 * static_cast<double>(conversion))
             return exact_conversion_literal(l, rational(conversion));
-    if (l.value == 30.0)
-        return exact_conversion_literal(l, rational(60));
+    // 30000 in "P = T*π*n/30000", kW from N·m and rpm: 60000 ÷ 2 likewise.
+    if (l.value == 30.0 || l.value == 30000.0)
+        return exact_conversion_literal(l, rational(2 * static_cast<std::int64_t>(l.value)));
     return std::nullopt;
+}
+
+// "ω = 2*π*n/30" with n in rpm: π/30 is 2π/60 already, so the 2 is taken twice. Turning the
+// 2 over reconciles the units too, but advice to divide by it, "4 times its true value",
+// would leave a reader puzzled where the line is simply twice too large.
+bool checker::report_two_of_two_pi_twice(const operand& op, const scale_literal& l) {
+    if (l.value != 2.0 || l.exponent != 1.0 || !holds_pi(op.node) ||
+        !(holds_number(op.node, 30.0) || holds_number(op.node, 30000.0)))
+        return false;
+    diagnostic& d = report(rules::unit_scale,
+                           fmt::format("{} takes the 2 of 2\u03C0 twice: \u03C0/30 is 2\u03C0/60 "
+                                       "already, so as written the result is 2 times its true "
+                                       "value",
+                                       quote(op.node)),
+                           file_.nodes[l.node].range);
+    add_term_and_units(d, op);
+    d.notes.push_back({"write 2*pi*n/60, or pi*n/30 (ω = 2πn, ISO 80000-3)", {}});
+    return true;
 }
 
 // `second`: the reading one power lower, where the number has one (1.6e7 as 16 × 10⁶).

@@ -318,6 +318,8 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
             const reconciliation flipped = reconcile(parts, {i, k});
             if (!flipped.agree)
                 continue;
+            if (report_two_of_two_pi_twice(ops[index[i]], parts[i].literals[k])) [[unlikely]]
+                return false;
             report_inverted_factor(ops[index[i]], parts[i].literals[k]);
             return false;
         }
