@@ -1590,3 +1590,29 @@ TEST_CASE("moist air's enthalpy between the SI and I-P charts") {
     }
     CHECK(problems_in(run(decl + "h_oI = h_o/2.326 + 7.0\n")) >= 1);
 }
+
+// The chart's own formula typed with bare numbers (ASHRAE Handbook—Fundamentals, ch. 1,
+// from memory): h = 1.006·t + W·(2501 + 1.86·t) kJ/kg with t in °C, h = 0.240·t + W·(1061 +
+// 0.444·t) Btu/lb with t in °F. Its numbers carry units, and t counts from the chart's zero;
+// the SI numbers with a °F reading, or an enthalpy in J/kg, or grams per kilogram without
+// the 1000, stay findings.
+TEST_CASE("moist air's enthalpy typed with the chart's bare numbers") {
+    const std::string decl = "t, t_2 : °C \"supply air\"\nt_F : °F \"supply air\"\n"
+                             "W : kg/kg \"humidity ratio\"\nW_g : g/kg \"humidity ratio\"\n"
+                             "W_gr : gr/lb \"humidity ratio\"\nh : kJ/kg \"moist air enthalpy\"\n"
+                             "h_J : J/kg \"moist air enthalpy\"\nh_ip : Btu/lb \"enthalpy\"\n";
+    passes_with_one_note(decl,
+                         {"h = 1.006*t + W*(2501 + 1.86*t)", "h = 1.005*t + W*(2500 + 1.88*t)",
+                          "h = 1.006*t + W_g/1000*(2501 + 1.86*t)",
+                          "h = 1.006*t + 2501*W + 1.86*W*t", "h = W*(1.86*t + 2501) + t*1.006",
+                          "h_ip = 0.240*t_F + W*(1061 + 0.444*t_F)",
+                          "h_ip = 0.24*t_F + W_gr/7000*(1061 + 0.444*t_F)"},
+                         plumb::rules::trade_constant);
+    for (const char* slip :
+         {"h = 1.006*t_F + W*(2501 + 1.86*t_F)", "h_J = 1.006*t + W*(2501 + 1.86*t)",
+          "h_ip = 0.240*t + W*(1061 + 0.444*t)", "h = 1.006*t + W_g*(2501 + 1.86*t)",
+          "h = 1.006*t + W*(2501 + 1.86*t_2)", "h_ip = 0.240*t_F + W*(2501 + 0.444*t_F)"}) {
+        CAPTURE(slip);
+        CHECK(problems_in(run(decl + slip + "\n")) >= 1);
+    }
+}

@@ -148,4 +148,96 @@ void checker::report_air_enthalpy_datum_left_out(std::span<const operand> sides)
          {}});
 }
 
+// "h = 1.006*t + W*(2501 + 1.86*t)" with h in kJ/kg and t in °C, or its I-P twin in Btu/lb
+// and °F: the chart's formula typed with its numbers bare, which carry kJ/(kg·K) and kJ/kg
+// and count t from the chart's zero. Multiplied out (in any order, W in kg/kg, g/kg or gr/lb)
+// into a term in t, one in W and one in W·t, each number is weighed in SI units against the
+// published ones; a reading on the other chart's scale, or an enthalpy in J/kg beside
+// kJ/kg numbers, matches neither and is checked as any formula is.
+bool checker::read_moist_air_enthalpy_fit(const syntax::formula& f) {
+    if (f.side_count != 2 || file_.sides[f.first_side + 1].relation_before !=
+                                 syntax::relation_kind::equal)
+        return false;
+    const std::uint32_t right = syntax::inside_brackets(file_, file_.sides[f.first_side + 1].root);
+    const expr_kind shape = file_.nodes[right].kind;
+    if (shape != expr_kind::add && shape != expr_kind::subtract)
+        return false;
+    const syntax::expr_node& left =
+        file_.nodes[syntax::inside_brackets(file_, file_.sides[f.first_side].root)];
+    if (left.kind != expr_kind::symbol)
+        return false;
+    const symbol_entry* h = symbols_.find(text(left.range));
+    if (h == nullptr || !h->compact_dim || *h->compact_dim != velocity_squared_dim ||
+        h->offset_unit != nullptr)
+        return false;
+    expansion terms;
+    if (!expand(right, terms) || terms.size() != 3)
+        return false;
+    const auto entry = [&](std::uint32_t node) { return symbols_.find(text(file_.nodes[node].range)); };
+    const symbol_entry* reading = nullptr;
+    const symbol_entry* ratio = nullptr;
+    double dry = 0.0;
+    double latent = 0.0;
+    double vapour = 0.0;
+    for (const expanded_term& t : terms) {
+        if (t.count != 1 || file_.nodes[t.symbols[0]].kind != expr_kind::symbol)
+            continue;
+        const symbol_entry* e = entry(t.symbols[0]);
+        if (e == nullptr || !e->compact_dim)
+            return false;
+        if (e->offset_unit != nullptr && *e->compact_dim == temperature_dimension()) {
+            reading = e;
+            dry = t.coefficient;
+        } else if (e->offset_unit == nullptr && e->compact_dim->is_dimensionless()) {
+            ratio = e;
+            latent = t.coefficient;
+        }
+    }
+    if (reading == nullptr || ratio == nullptr)
+        return false;
+    for (const expanded_term& t : terms) {
+        if (t.count != 2)
+            continue;
+        const symbol_entry* a = entry(t.symbols[0]);
+        const symbol_entry* b = entry(t.symbols[1]);
+        if ((a == reading && b == ratio) || (a == ratio && b == reading))
+            vapour = t.coefficient;
+    }
+    // J/kg for each unit of the enthalpy, and per kelvin for each degree of the reading.
+    const double per_degree = h->si_factor / reading->offset_unit->factor;
+    const bool celsius = std::abs(reading->offset_unit->offset - 273.15) < 1e-9 &&
+                         reading->offset_unit->factor == 1.0;
+    const bool fahrenheit = std::abs(reading->offset_unit->offset - 255.372222) < 1e-3 &&
+                            std::abs(reading->offset_unit->factor - 5.0 / 9.0) < 1e-9;
+    const double dry_si = dry * per_degree;
+    const double latent_si = latent * h->si_factor / ratio->si_factor;
+    const double vapour_si = vapour * per_degree / ratio->si_factor;
+    // 1.005 to 1.006 kJ/(kg·K) for dry air (0.240 Btu/(lb·°F)), 1.805 to 1.88 for the vapour
+    // (0.444 to 0.45), 2501 kJ/kg over liquid water at 0 °C, and 1061 Btu/lb at 0 °F over
+    // liquid water at 32 °F, which is 2468 kJ/kg.
+    const bool dry_air = dry_si >= 995.0 && dry_si <= 1010.0;
+    const bool vapour_heat = vapour_si >= 1800.0 && vapour_si <= 1900.0;
+    const bool si_chart = celsius && latent_si >= 2.495e6 && latent_si <= 2.505e6;
+    const bool ip_chart = fahrenheit && latent_si >= 2.460e6 && latent_si <= 2.475e6;
+    if (!dry_air || !vapour_heat || !(si_chart || ip_chart))
+        return false;
+    diagnostic& d = report(
+        rules::trade_constant,
+        si_chart ? std::string("read as moist air's enthalpy on the SI chart, h = 1.006\u00B7t "
+                               "+ W\u00B7(2501 + 1.86\u00B7t) kJ/kg with t in \u00B0C: its numbers "
+                               "carry kJ/(kg\u00B7K) and kJ/kg, and t counts from the chart's "
+                               "0 \u00B0C")
+                 : std::string("read as moist air's enthalpy on the I-P chart, h = 0.240\u00B7t "
+                               "+ W\u00B7(1061 + 0.444\u00B7t) Btu/lb with t in \u00B0F: its numbers "
+                               "carry Btu/(lb\u00B7\u00B0F) and Btu/lb, and t counts from the "
+                               "chart's 0 \u00B0F"),
+        file_.nodes[right].range);
+    d.level = severity::note;
+    d.notes.push_back({"ASHRAE Handbook\u2014Fundamentals, ch. 1 (psychrometrics); the same "
+                       "numbers on the other chart's scale, or in another unit of enthalpy, "
+                       "would be a finding",
+                       {}});
+    return true;
+}
+
 } // namespace plumb::formula_check

@@ -240,6 +240,8 @@ std::optional<double> checker::scale_left_for_sum(std::uint32_t root, const type
 void checker::check_formula(const syntax::formula& f) {
     current_ = &f;
     inner_scale_ratio_ = 0.0;
+    if (read_moist_air_enthalpy_fit(f)) [[unlikely]]
+        return;
     // Asked only once a new declaration may have named a barometer, or where one was found.
     if (!file_.quantities.empty() &&
         (!site_barometer_.name.empty() ||
