@@ -1544,6 +1544,18 @@ TEST_CASE("sea water's density and specific weight typed as numbers") {
     CHECK(problems_in(run(decl + "p_kPa = 10.05*h_ft\n")) >= 1);
 }
 
+// Hot water's density, 983.2 kg/m³ at 60 °C to 958.4 at 100 °C (CRC Handbook of Chemistry and
+// Physics, water's density by temperature; from memory): a heating flow in L/s from kg/s
+// divides by it. Sea water's 1.025 multiplied where it divides stays a finding, and so does
+// a density far from water's.
+TEST_CASE("hot water's density typed as a number") {
+    const std::string decl = "m : kg/s\nQ : L/s\n";
+    passes_with_one_note(decl, {"Q = m/0.978", "Q = m/0.9718", "Q = m/0.9832", "Q = m/0.998"},
+                         plumb::rules::trade_constant);
+    CHECK(problems_in(run(decl + "Q = m*1.025\n")) >= 1);
+    CHECK(problems_in(run(decl + "Q = m/0.90\n")) >= 1);
+}
+
 // A gas line's friction in psi from a density in lb/ft³, Δp = f·(L/D)·ρ·v²/(2·g_c·144) (Crane
 // TP-410, from memory), with the bore in inches over 12: every number converts (in to ft, ft²
 // to in²), and what the line lacks is g_c = 32.174 lbm·ft/(lbf·s²) (NIST SP 811 (2008), B.8:

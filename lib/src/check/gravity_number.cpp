@@ -39,6 +39,7 @@ constexpr std::size_t round_water_row = 3; // the ground engineer's 10 kN/m³
 constexpr std::size_t molar_volume_row = 7;
 constexpr std::size_t year_row = 16; // the hours of a year
 constexpr std::size_t day_row = 19;  // the hours of a day
+constexpr std::size_t hot_water_row = 39; // 958 to 995.65 kg/m³, read only as a density
 
 const dimension& density_dimension() {
     static const dimension density = dimension::base(base_dimension::mass) /
@@ -46,8 +47,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 39>& quantities() {
-    static const std::array<carried_quantity, 39> table = [] {
+const std::array<carried_quantity, 40>& quantities() {
+    static const std::array<carried_quantity, 40> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -99,7 +100,7 @@ const std::array<carried_quantity, 39>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 39>{{
+        return std::array<carried_quantity, 40>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -459,6 +460,14 @@ const std::array<carried_quantity, 39>& quantities() {
              "write \u03C1_sw*{g_n}, with \u03C1_sw declared, to say so",
              "write the density and g in cells that hold their units to say so",
              density * acceleration, 1025.0 * standard_gravity, 1030.0 * 9.81},
+            // Hot water's density, 995.65 kg/m³ at 30 °C to 958.4 at 100 °C (IAPWS-95 as
+            // tabulated in the CRC Handbook; from memory): a heating circuit's 977.8 at
+            // 70 °C, a calorifier's 983.2 at 60 °C. A flow in L/s from kg/s divides by it.
+            {rules::trade_constant, "the density of hot water", "\u03C1_w", "1/\u03C1_w",
+             " (water between 30 and 100 \u00B0C: 958.4 to 995.65 kg/m\u00B3)",
+             "declare the water's density with its unit (\u03C1_w : kg/m^3 = 977.8) to say so",
+             "write the density in a cell that holds its unit to say so", density, 958.0,
+             995.65},
         }};
     }();
     return table;
@@ -671,6 +680,10 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                 continue;
             for (const bool reciprocal : {false, true}) {
                 if (!is_power_of(lacking, q.dim, reciprocal ? -x : x))
+                    continue;
+                // One over hot water's density, 1.004 to 1.044, would read sea water's 1.025
+                // multiplied where it divides; the trades divide by the density.
+                if (reciprocal && &q == &quantities()[hot_water_row])
                     continue;
                 // What the number stands for, in SI: the quantity or one over it.
                 const double si_low = reciprocal ? 1.0 / q.greatest : q.least;
