@@ -838,3 +838,17 @@ TEST_CASE("a temperature correction's exponent turned round is said so") {
     CHECK(first_under(right, plumb::rules::temperature_correction)
               .message.find("above a reference") != std::string::npos);
 }
+
+// API MPMS ch. 11.2.1 (from memory) sets the equilibrium vapour pressure, gauge, to zero where
+// the true vapour pressure is below the atmosphere: max(P_va - p_b, 0). The call keeps what
+// its argument is, a gauge reading from two absolute ones; an absolute argument, or one set
+// beside a gauge-like one, stays a finding.
+TEST_CASE("a gauge reading from two absolute ones keeps its footing inside max and min") {
+    const std::string decl = "P_va, p_b : psia\nP_e : psig\nT : K\nt, t_2 : °C\n";
+    passes(decl, {"P_e = max(P_va - p_b, 0)", "P_e = max(0, P_va - p_b)",
+                  "P_e = P_va - p_b"});
+    fails_with(decl,
+               {"P_e = max(P_va, 0)", "P_e = min(P_va - p_b, P_va)", "T = max(t, 0)",
+                "T = max(t, t_2)"},
+               plumb::rules::offset_scale);
+}

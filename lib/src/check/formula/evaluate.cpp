@@ -1915,10 +1915,30 @@ typed_term checker::eval_call(const syntax::expr_node& n) {
             return unknown_type();
         result.dim = a.reference.value_or(compact_dimension{});
         result.scale = scales_agree ? unit : std::numeric_limits<double>::quiet_NaN();
-        result.offset = values[0].type.offset;
-        result.origin = values[0].type.origin;
-        result.origin_tolerance = values[0].type.origin_tolerance;
-        result.point = values[0].type.point;
+        // "max(p_v - p_b, 0)": the value is what the symbols' argument is, a gauge reading
+        // from two absolute ones, not the bare number's.
+        // Only where every such argument is alike: min(p_v - p_b, p_v) compares a gauge
+        // reading with an absolute one and stays on the first's footing, as before.
+        const auto read = std::find_if(values.begin(), values.end(),
+                                       [](const operand& v) { return !v.type.numeric; });
+        const bool alike =
+            read != values.end() &&
+            std::all_of(values.begin(), values.end(), [&](const operand& v) {
+                return v.type.numeric ||
+                       (v.type.absolute_pressure_difference ==
+                            read->type.absolute_pressure_difference &&
+                        v.type.zero_of == read->type.zero_of && v.type.point == read->type.point);
+            });
+        const typed_term& like = alike ? read->type : values[0].type;
+        result.offset = like.offset;
+        result.origin = like.origin;
+        result.origin_tolerance = like.origin_tolerance;
+        result.point = like.point;
+        if (alike) {
+            result.zero_of = like.zero_of;
+            result.absolute_pressure_difference = like.absolute_pressure_difference;
+            result.reading_or_difference = like.reading_or_difference;
+        }
         return result;
     }
     case function_rule::power:
