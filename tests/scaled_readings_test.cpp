@@ -39,6 +39,18 @@ TEST_CASE("a gauge reading times an allowance, plus the atmosphere, is absolute"
                     "@test-number p_t = 1.5*p_set"});
 }
 
+// The same allowance with the site's barometer declared beside the set pressure: API 520 Part
+// I's P_1 = 1.10·p_set + p_atm for a single valve, 1.21·p_set + p_atm in a fire (from memory).
+// A ratio under 1 taken of a gauge reading before the atmosphere is added is a gas's
+// precharge written wrongly, and two gauge readings added are no allowance.
+TEST_CASE("a set pressure's allowance, plus the site's barometer, is absolute") {
+    const std::string decl = "p_set, p_2 : psig\np_b : psia \"site barometer\"\nP_1 : psia\n";
+    passes(decl, {"P_1 = 1.10*p_set + p_b", "P_1 = 1.21*p_set + p_b", "P_1 = 1.16*p_set + p_b",
+                  "P_1 = p_b + 1.1*p_set"});
+    fails_with(decl, {"P_1 = 0.9*p_set + p_b", "P_1 = p_set + p_2 + p_b", "P_1 = 1.1*p_set"},
+               plumb::rules::offset_scale);
+}
+
 // A wellhead's gauge pressure from the bottom-hole pressure: p_wh = p_bh - 14.7 - p_hyd (the
 // hydrostatic column a drop, 14.7 psi the atmosphere, NIST SP 811 (2008), B.8, rounded;
 // common practice). An absolute reading less the atmosphere as a number is a gauge reading and

@@ -590,6 +590,8 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
     // not), where every weight is followed.
     std::optional<rational> weight = rational(0);
     double weighted_origin = 0.0;
+    // The weights of the gauge readings added: 11/10 in "1.1*p_set + p_b".
+    std::optional<rational> gauge_weight = rational(0);
     for (const auto& t : terms) {
         if (!t.type.known || t.type.zero || is_shift_candidate(t) || !t.type.point)
             continue;
@@ -641,6 +643,11 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
             !t.subtracted) {
             ++gauges;
             gauge_zero = t.type.offset->offset;
+            try {
+                gauge_weight = gauge_weight && w ? std::optional(*gauge_weight + *w) : std::nullopt;
+            } catch (const std::exception&) {
+                gauge_weight.reset();
+            }
         } else if (t.type.offset == nullptr && t.type.dim == pressure_dimension() &&
                    !t.subtracted) {
             ++absolute_pressures_added;
@@ -680,6 +687,13 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
         points -= absolute_pressures_added;
         if (weight)
             weight = *weight - rational(absolute_pressures_added);
+        // "1.1*p_set + p_b": a set pressure's allowance (10 % over it, 21 % in a fire; API
+        // 520 Part I, from memory) is taken of the gauge reading and the atmosphere added
+        // after it, as with "1.1*p_set + 14.7". Only an allowance over 1 and up to 3/2:
+        // "0.9*p_g + p_atm" is a gas's precharge, whose ratio takes the atmosphere inside.
+        if (weight && gauge_weight && rational(1) < *gauge_weight &&
+            !(rational(3, 2) < *gauge_weight))
+            weight = *weight - *gauge_weight + rational(1);
     }
     // "p_sat + p_air": absolute pressures added are partial pressures making one absolute
     // reading (Dalton's law), not a reading weighing two; set equal to a gauge reading its
