@@ -864,3 +864,24 @@ TEST_CASE("a gauge reading from two absolute ones keeps its footing inside max a
                 "T = max(t, t_2)"},
                plumb::rules::offset_scale);
 }
+
+// A gauge pressure times an area is the net force on a face with the atmosphere on its other
+// side (a jack's load from its gauge, p·A; common practice): an absolute pressure there, a
+// gauge reading with the atmosphere added or a symbol said absolute, overstates it by the
+// atmosphere's push, and so an area from a load over it comes out small. The atmosphere's own
+// push on a face over a vacuum, and an absolute less the barometer, pass.
+TEST_CASE("a force or an area from an absolute pressure") {
+    const std::string decl = "p_jack : psig\nA_ram : in2\nP : kip\n"
+                             "p_fa : kPa \"absolute pressure in the silo head\"\nA : m2\nF : kN\n"
+                             "p_tg : psig\nW : lbf\nA_in : in^2\np_b : kPa \"site barometer\"\n"
+                             "p_g : kPa(g)\np_atm : kPa \"atmospheric pressure\"\n";
+    for (const char* slip : {"P = (p_jack + 14.7 {psi})*A_ram/1000", "F = p_fa*A",
+                             "A_in = W/(p_tg + 14.7)", "F = (p_g + p_b)*A"}) {
+        CAPTURE(slip);
+        const auto r = run(decl, slip);
+        CHECK(count_of(r, plumb::rules::offset_scale) == 1);
+        CHECK(says(first_under(r, plumb::rules::offset_scale), "gauge pressure"));
+    }
+    passes(decl, {"P = p_jack*A_ram/1000", "F = (p_fa - p_b)*A", "A_in = W/p_tg",
+                  "F = p_atm*A", "F = p_g*A"});
+}

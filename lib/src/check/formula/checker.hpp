@@ -915,6 +915,10 @@ class checker {
     const symbol_entry* air_enthalpy_symbol(std::uint32_t node, bool said_air) const;
     bool read_air_enthalpy_datum(std::size_t base);
     bool read_moist_air_enthalpy_fit(const syntax::formula& f);
+
+    // check/formula/net_force.cpp
+    std::uint32_t absolute_pressure_in_factor(std::uint32_t at) const;
+    [[gnu::noinline]] void report_force_from_absolute_pressure(std::span<const operand> sides);
     [[gnu::noinline]] void report_air_enthalpy_datum_left_out(std::span<const operand> sides);
     bool numbers_could_carry(std::span<const scale_literal> numbers, const dimension& lacking,
                              std::span<std::string_view> texts) const;

@@ -357,6 +357,10 @@ void checker::check_formula(const syntax::formula& f) {
                 (file_.nodes[sides[1].node].kind == expr_kind::divide ||
                  file_.nodes[sides[0].node].kind == expr_kind::divide)) [[unlikely]]
                 report_head_from_absolute(sides);
+            if (equation && sides.size() == 2 && out_.size() == findings_before &&
+                sides[0].type.known &&
+                (sides[0].type.dim == force_dim || sides[0].type.dim == area_dim)) [[unlikely]]
+                report_force_from_absolute_pressure(sides);
         }
         if (equation && sides.size() == 2 && sides[0].type.known &&
             sides[0].type.dim.is_dimensionless() && !on_offset_scale &&
