@@ -885,3 +885,15 @@ TEST_CASE("a force or an area from an absolute pressure") {
     passes(decl, {"P = p_jack*A_ram/1000", "F = (p_fa - p_b)*A", "A_in = W/p_tg",
                   "F = p_atm*A", "F = p_g*A"});
 }
+
+// A liquid's or a fill's column, ρ·g·h or γ·H, is what a gauge at its foot reads, so a gauge
+// reading taken from it leaves a difference: a membrane bioreactor's transmembrane pressure,
+// the column over the fibres less the permeate suction gauge (common practice), and a vacuum
+// preload's fill less the membrane gauge's negative reading. Two gauge readings taken from a
+// column stay a finding.
+TEST_CASE("a gauge reading taken from a column's pressure is a difference") {
+    const std::string decl = "ρ : kg/m^3\ng : m/s^2\nh : m\np_s, p_m : kPa(g)\nTMP, Δσ : kPa\n"
+                             "γ_f : kN/m^3\nH_f : m\n";
+    passes(decl, {"TMP = ρ*g*h/1000 - p_s", "Δσ = γ_f*H_f - p_m", "TMP = ρ*{g_n}*h/1000 - p_s"});
+    fails_with(decl, {"TMP = ρ*g*h/1000 - p_s - p_m"}, plumb::rules::offset_scale);
+}

@@ -566,6 +566,37 @@ bool checker::gauge_divided_into_absolute_unit(std::span<const operand> terms, d
     });
 }
 
+// "ρ*g*h", "γ*H", "0.433*SG*h": a liquid's or a fill's column, a density (with g) or a unit
+// weight times one height, and numbers.
+bool checker::column_pressure(std::uint32_t node) const {
+    int lengths = 0;
+    int densities = 0;
+    int weights = 0;
+    int gravities = 0;
+    const bool other = for_each_factor(node, [&](std::uint32_t at, int sign) {
+        const syntax::expr_node& n = file_.nodes[at];
+        if (n.kind == expr_kind::number)
+            return false;
+        if (n.kind == expr_kind::quantity) {
+            gravities += file_.quantities[n.lhs].constant ? 1 : 0;
+            return !file_.quantities[n.lhs].constant;
+        }
+        if (n.kind != expr_kind::symbol || sign < 0)
+            return true;
+        const symbol_entry* e = symbols_.find(text(n.range));
+        if (e == nullptr || !e->compact_dim)
+            return true;
+        const compact_dimension& dim = *e->compact_dim;
+        lengths += dim == length_dim ? 1 : 0;
+        densities += dim == density_dim ? 1 : 0;
+        weights += dim == pressure_gradient_dim ? 1 : 0;
+        gravities += dim == acceleration_dimension() ? 1 : 0;
+        return !(dim == length_dim || dim == density_dim || dim == pressure_gradient_dim ||
+                 dim == acceleration_dimension() || dim.is_dimensionless());
+    });
+    return !other && lengths == 1 && densities + weights == 1 && gravities <= 1;
+}
+
 typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term result,
                                       std::size_t literal_base, std::uint32_t index) {
     // The terms with units (not the numbers that shift the zero).
@@ -581,6 +612,8 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
     double origin_tolerance = 0.0;
     int points = 0;
     int gauges = 0;
+    int gauges_subtracted = 0;
+    double subtracted_gauge_zero = 0.0;
     int absolute_pressures_added = 0;
     int absolute_pressures_subtracted = 0;
     int offset_temperatures = 0;
@@ -643,11 +676,19 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
             !t.subtracted) {
             ++gauges;
             gauge_zero = t.type.offset->offset;
+            if (negative) { // "-p_suc + ρ*g*h": added, but negated
+                ++gauges_subtracted;
+                subtracted_gauge_zero = gauge_zero;
+            }
             try {
                 gauge_weight = gauge_weight && w ? std::optional(*gauge_weight + *w) : std::nullopt;
             } catch (const std::exception&) {
                 gauge_weight.reset();
             }
+        } else if (t.type.offset != nullptr && t.type.offset->scale == unit_scale::gauge &&
+                   !negative) {
+            ++gauges_subtracted;
+            subtracted_gauge_zero = t.type.offset->offset;
         } else if (t.type.offset == nullptr && t.type.dim == pressure_dimension() &&
                    !t.subtracted) {
             ++absolute_pressures_added;
@@ -694,6 +735,22 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
         if (weight && gauge_weight && rational(1) < *gauge_weight &&
             !(rational(3, 2) < *gauge_weight))
             weight = *weight - *gauge_weight + rational(1);
+    }
+    // "ρ*g*h/1000 - p_suc": a column's pressure is what a gauge at its foot reads, so a gauge
+    // reading taken from it leaves a difference (a membrane's transmembrane pressure; a
+    // preload's fill less the vacuum gauge's negative reading), as "-p_suc + ρ*g*h" is.
+    if (weight && *weight == rational(-1) && points == -1 && gauges <= 1 &&
+        gauges_subtracted == 1 && absolute_pressures_added == 0 &&
+        std::none_of(terms.begin(), terms.end(),
+                     [&](const operand& t) { return is_shift_candidate(t); }) &&
+        std::any_of(terms.begin(), terms.end(), [&](const operand& t) {
+            return !t.subtracted && t.type.known && !t.type.point &&
+                   t.type.dim == pressure_dimension() && column_pressure(t.node);
+        })) [[unlikely]] {
+        origin += subtracted_gauge_zero;
+        weighted_origin += subtracted_gauge_zero;
+        points = 0;
+        weight = rational(0);
     }
     // "p_sat + p_air": absolute pressures added are partial pressures making one absolute
     // reading (Dalton's law), not a reading weighing two; set equal to a gauge reading its
