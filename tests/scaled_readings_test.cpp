@@ -897,3 +897,17 @@ TEST_CASE("a gauge reading taken from a column's pressure is a difference") {
     passes(decl, {"TMP = ρ*g*h/1000 - p_s", "Δσ = γ_f*H_f - p_m", "TMP = ρ*{g_n}*h/1000 - p_s"});
     fails_with(decl, {"TMP = ρ*g*h/1000 - p_s - p_m"}, plumb::rules::offset_scale);
 }
+
+// IEC 60076-2 (from memory): a winding's temperature from its resistance, θ_2 = R_2/R_1·(235 +
+// θ_1) - 235, and the ratio written as its own equation, R_2/R_1 = (235 + θ_2)/(235 + θ_1);
+// IEC 60076-1's resistance at 75 °C, R_75 = R_t·(235 + 75)/(235 + θ_t). A kelvin temperature
+// set to the reading, or another zero taken off, stays a finding.
+TEST_CASE("a winding's temperature and resistance from copper's inferred zero") {
+    const std::string decl = "R_1, R_2, R_t, R_75 : ohm\nθ_1, θ_2, θ_t : °C\nT_2 : K\n";
+    passes(decl, {"θ_2 = R_2/R_1*(235 + θ_1) - 235", "θ_2 = R_2/R_1*(234.5 + θ_1) - 234.5",
+                  "R_2/R_1 = (235 + θ_2)/(235 + θ_1)", "R_75 = R_t*(235 + 75)/(235 + θ_t)",
+                  "R_2 = R_1*(235 + θ_2)/(235 + θ_1)"});
+    fails_with(decl, {"T_2 = R_2/R_1*(235 + θ_1) - 235"}, plumb::rules::offset_scale);
+    CHECK(problems_in(run(decl, "θ_2 = R_2/R_1*(235 + θ_1) - 234.5")) >= 1);
+    CHECK(problems_in(run(decl, "θ_2 = R_2*(235 + θ_1) - 235")) >= 1);
+}

@@ -664,11 +664,60 @@ std::optional<typed_term> checker::eval_log_difference(std::uint32_t index) {
     return result;
 }
 
+// "R_2/R_1*(235 + θ_1) - 235" (IEC 60076-2's winding temperature from its resistance, from
+// memory): the product is the rise above the conductor's inferred zero of resistance, and the
+// same 235 taken off it again leaves a reading on the °C scale.
+std::optional<typed_term> checker::eval_reading_from_inferred_zero(std::uint32_t index) {
+    const syntax::expr_node& n = file_.nodes[index];
+    const std::string_view zero = text(file_.nodes[n.rhs].range);
+    if (zero != "235" && zero != "234.5" && zero != "225" && zero != "228")
+        return std::nullopt;
+    std::uint32_t bracket = syntax::no_index;
+    for_each_factor(n.lhs, [&](std::uint32_t at, int sign) {
+        if (sign > 0 && from_inferred_zero_of_resistance(at)) {
+            const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, at)];
+            const std::uint32_t number =
+                file_.nodes[sum.lhs].kind == expr_kind::number ? sum.lhs : sum.rhs;
+            if (text(file_.nodes[number].range) == zero)
+                bracket = syntax::inside_brackets(file_, at);
+        }
+        return bracket != syntax::no_index;
+    });
+    if (bracket == syntax::no_index)
+        return std::nullopt;
+    const syntax::expr_node& sum = file_.nodes[bracket];
+    const std::uint32_t reading = file_.nodes[sum.lhs].kind == expr_kind::symbol ? sum.lhs : sum.rhs;
+    const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
+    if (e == nullptr || e->offset_unit == nullptr)
+        return std::nullopt;
+    const std::size_t findings_before = out_.size();
+    const std::size_t literal_base = literals_.size();
+    typed_term rise = eval(n.lhs);
+    cut_literals_to(literal_base);
+    rise.literal_count = 0;
+    if (!rise.known)
+        return rise; // reported already
+    if (!(rise.dim == temperature_dimension()) || rise.offset != nullptr) {
+        out_.resize(findings_before); // the sum reads the product again, and says so
+        return std::nullopt;
+    }
+    rise.offset = e->offset_unit;
+    rise.origin = e->offset_unit->offset;
+    rise.point = true;
+    rise.numeric = false;
+    rise.value.reset();
+    return rise;
+}
+
 typed_term checker::eval_sum(std::uint32_t index) {
     if (file_.nodes[index].kind == expr_kind::subtract &&
         file_.nodes[file_.nodes[index].rhs].kind == expr_kind::call) [[unlikely]]
         if (std::optional<typed_term> logs = eval_log_difference(index))
             return *logs;
+    if (file_.nodes[index].kind == expr_kind::subtract &&
+        file_.nodes[file_.nodes[index].rhs].kind == expr_kind::number) [[unlikely]]
+        if (std::optional<typed_term> reading = eval_reading_from_inferred_zero(index))
+            return *reading;
     const bool prefer_dimensionless = index == prefer_dimensionless_;
     // Walk the left spine iteratively: a long sum must not recurse once per term.
     const std::size_t spine_base = spine_.size();
@@ -978,6 +1027,12 @@ typed_term checker::eval_factors(std::uint32_t index) {
             if (factor != reinterpret_cast<const typed_term*>(evaluated))
                 factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
             read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
+            // "R_t*(235 + 75)/(235 + θ_t)", a test's resistance corrected to 75 °C (IEC
+            // 60076-1, from memory): the reference's rise typed in numbers over the reading's.
+            if (divided && for_each_factor(op.lhs, [&](std::uint32_t at, int sign) {
+                    return sign > 0 && from_inferred_zero_of_resistance(at, true);
+                }))
+                result.dim = result.dim * temperature_dimension();
         } else if (divided && factor->numeric && result.known && !result.numeric &&
                    file_.nodes[syntax::inside_brackets(file_, op.rhs)].kind == expr_kind::add &&
                    reference_rise_from_inferred_zero(op.lhs, op.rhs)) [[unlikely]] {
@@ -992,6 +1047,14 @@ typed_term checker::eval_factors(std::uint32_t index) {
                    factor->offset == nullptr && factor->dim.is_dimensionless() &&
                    from_inferred_zero_of_resistance(n) && k == spine_.size()) {
             read_as_rise(result);
+        } else if (divided && result.offset != nullptr && factor->offset != nullptr &&
+                   k == spine_.size() && from_inferred_zero_of_resistance(n) &&
+                   from_inferred_zero_of_resistance(op.rhs)) [[unlikely]] {
+            // "(235 + θ_2)/(235 + θ_1)", the ratio of resistances written as its own side.
+            read_as_rise(result);
+            if (factor != reinterpret_cast<const typed_term*>(evaluated))
+                factor = ::new (static_cast<void*>(evaluated)) typed_term(*factor);
+            read_as_rise(*reinterpret_cast<typed_term*>(evaluated));
         }
         if (!divided && enthalpy_side_ != syntax::no_index &&
             (factor->offset != nullptr) != (result.offset != nullptr)) [[unlikely]] {
