@@ -166,6 +166,11 @@ bool checker::read_moist_air_enthalpy_fit(const syntax::formula& f) {
         file_.nodes[syntax::inside_brackets(file_, file_.sides[f.first_side].root)];
     if (left.kind != expr_kind::symbol)
         return false;
+    // Asked of every sum: the latent heat's digits (2501, 2500, 1061) before any lookup.
+    const std::string_view written = text(file_.nodes[right].range);
+    if (written.find("250") == std::string_view::npos &&
+        written.find("106") == std::string_view::npos)
+        return false;
     const symbol_entry* h = symbols_.find(text(left.range));
     if (h == nullptr || !h->compact_dim || *h->compact_dim != velocity_squared_dim ||
         h->offset_unit != nullptr)

@@ -866,6 +866,8 @@ class checker {
     site_barometer site_barometer_;
     bool site_barometer_settled_ = false;         // none, and none to come
     std::size_t site_barometer_declarations_ = 0; // declarations searched so far
+    std::size_t pressure_declarations_seen_ = 0;  // by declares_gauge_or_absolute_pressure
+    bool gauge_or_absolute_declared_ = false;
     // The ratio of the last scale warning inside the formula being checked, 0 where none.
     double inner_scale_ratio_ = 0.0;
     // The side set equal to a specific enthalpy (h_f, "enthalpy"): see enthalpy_above_ice_point.
@@ -914,9 +916,10 @@ class checker {
     // check/formula/air_enthalpy.cpp
     const symbol_entry* air_enthalpy_symbol(std::uint32_t node, bool said_air) const;
     bool read_air_enthalpy_datum(std::size_t base);
-    bool read_moist_air_enthalpy_fit(const syntax::formula& f);
+    [[gnu::noinline]] bool read_moist_air_enthalpy_fit(const syntax::formula& f);
 
     // check/formula/net_force.cpp
+    bool declares_gauge_or_absolute_pressure();
     std::uint32_t absolute_pressure_in_factor(std::uint32_t at) const;
     [[gnu::noinline]] void report_force_from_absolute_pressure(std::span<const operand> sides);
     [[gnu::noinline]] void report_air_enthalpy_datum_left_out(std::span<const operand> sides);

@@ -240,7 +240,11 @@ std::optional<double> checker::scale_left_for_sum(std::uint32_t root, const type
 void checker::check_formula(const syntax::formula& f) {
     current_ = &f;
     inner_scale_ratio_ = 0.0;
-    if (read_moist_air_enthalpy_fit(f)) [[unlikely]]
+    // Only a sum on the right can be the chart's formula; most formulas stop at this test.
+    if (f.side_count == 2 &&
+        file_.nodes[file_.sides[f.first_side + 1].root].kind == expr_kind::add &&
+        file_.nodes[file_.sides[f.first_side].root].kind == expr_kind::symbol &&
+        read_moist_air_enthalpy_fit(f)) [[unlikely]]
         return;
     // Asked only once a new declaration may have named a barometer, or where one was found.
     if (!file_.quantities.empty() &&

@@ -52,9 +52,28 @@ std::uint32_t checker::absolute_pressure_in_factor(std::uint32_t at) const {
     return gauge != syntax::no_index && atmosphere ? gauge : syntax::no_index;
 }
 
+// Whether the file has declared, so far, a gauge pressure or one it calls absolute: without
+// one no product can hold an absolute pressure this rule would name. Each declaration is
+// looked at once, as the file is read.
+bool checker::declares_gauge_or_absolute_pressure() {
+    for (; pressure_declarations_seen_ < file_.declarations.size(); ++pressure_declarations_seen_) {
+        const syntax::declaration& decl = file_.declarations[pressure_declarations_seen_];
+        if (decl.name_count == 0)
+            continue;
+        const symbol_entry* e = symbols_.find(text(file_.names[decl.first_name].name));
+        if (e != nullptr && e->compact_dim && *e->compact_dim == pressure_dimension() &&
+            ((e->offset_unit != nullptr && e->offset_unit->scale == unit_scale::gauge) ||
+             said_absolute(*e)))
+            gauge_or_absolute_declared_ = true;
+    }
+    return gauge_or_absolute_declared_;
+}
+
 // "R_p = p_2a*A_c" in kN with p_2a absolute, "A = P/(p_tg + 14.7)": asked of an equation whose
 // sides agree, one of them a force or an area and the other a product with one pressure in it.
 void checker::report_force_from_absolute_pressure(std::span<const operand> sides) {
+    if (!declares_gauge_or_absolute_pressure())
+        return;
     for (std::size_t i = 0; i < sides.size(); ++i) {
         const operand& result = sides[i];
         const operand& product = sides[1 - i];
