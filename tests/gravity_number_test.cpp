@@ -528,6 +528,19 @@ TEST_CASE("molar volume as a number: it follows the gas volumes' reference state
     CHECK(plumb::test::says(plumb::test::first_under(high, plumb::rules::unit_scale),
                             "9.1 % too large"));
     CHECK(count_of(run(stack + "c_s = C*M/24.45\n"), plumb::rules::unit_scale) == 1);
+    // 359 scf/lbmol is the 0 °C one (379.5 × 273.15/288.71): said as 0 °C, never "-0 °C".
+    const auto ice = run(stack + "E = C*M*Q_s*60/359e6\n");
+    CHECK(plumb::test::says(plumb::test::first_under(ice, plumb::rules::unit_scale), "at 0 \u00B0C"));
+    CHECK_FALSE(plumb::test::says(plumb::test::first_under(ice, plumb::rules::unit_scale), "-0"));
+}
+
+// A membrane bioreactor's specific aeration demand, SAD_m = Q_air/A_m in Nm³/(m²·h) (Judd, The
+// MBR Book, 2nd ed., 2011; from memory), is stated at reference conditions itself and is no
+// gas's speed; a speed in m/s from a normal flow still takes the gas's state.
+TEST_CASE("a rate per area stated at reference conditions is no velocity") {
+    const std::string decl = "A_m, A_d : m^2\nQ_air : Nm3/h\nSAD_m : Nm3/(m^2*h)\nv : m/s\n";
+    CHECK(problems_in(run(decl + "SAD_m = Q_air/A_m\n")) == 0);
+    CHECK(count_of(run(decl + "v = Q_air/3600/A_d\n"), plumb::rules::unit_scale) == 1);
 }
 
 TEST_CASE("molar volume as a number: ppm conversions") {
@@ -839,6 +852,9 @@ TEST_CASE("an energy over an apparent power") {
         CAPTURE(formula);
         CHECK(problems_in(run(decl + formula + "\n")) == 0);
     }
+    // A machine's inertia constant H = E/S_rated, in seconds, is defined on the apparent
+    // power (Kundur, Power System Stability and Control, 1994, ch. 3; from memory).
+    CHECK(problems_in(run(decl + "H : s \"inertia constant\"\nE_k : kJ\nH = E_k/S\n")) == 0);
 }
 
 // A generating set's fuel burn is its specific fuel consumption, per kWh of real energy,

@@ -543,7 +543,9 @@ std::string molar_volume_message(std::string_view number, const gravity_reading&
     return fmt::format("{} is {}the molar volume of an ideal gas at {:.0f} \u00B0C, but the gas "
                        "volumes {} are at {}, where it is {:.4g}: as written the result is "
                        "{:.1f} % too {}",
-                       number, reading.reciprocal ? "one over " : "", off.implied_celsius, of_what,
+                       // + 0.0: a -0.3 °C rounds to "-0" otherwise.
+                       number, reading.reciprocal ? "one over " : "",
+                       std::round(off.implied_celsius) + 0.0, of_what,
                        state, off.wanted, std::abs(off.result_off) * 100.0,
                        off.result_off > 0 ? "large" : "small");
 }

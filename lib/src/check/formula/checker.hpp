@@ -671,6 +671,8 @@ class checker {
     [[gnu::noinline]] void note_ton_beside_power(diagnostic& d, std::span<const operand> sides);
     [[gnu::noinline]] bool fit_constant_carries_cell_unit(std::span<const operand> sides);
     bool report_hazen_williams_constant(std::span<const operand> sides, std::uint32_t constant);
+    bool lone_symbol_at_reference(std::span<const operand> sides) const;
+    bool names_inertia_constant(std::span<const operand> sides) const;
     [[gnu::noinline]] void ask_of_marked_units(const syntax::formula& f,
                                                std::span<const operand> sides, bool noted);
     [[gnu::noinline]] void report_angular_frequency_as_cycles(std::span<const operand> sides);

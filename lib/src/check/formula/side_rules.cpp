@@ -193,6 +193,31 @@ bool checker::report_hazen_williams_constant(std::span<const operand> sides,
     return true;
 }
 
+// "H = E/S_r": a machine's inertia constant is its stored energy over its rated apparent
+// power, in seconds (Kundur, Power System Stability and Control, 1994, ch. 3; from memory),
+// with no power factor in it.
+bool checker::names_inertia_constant(std::span<const operand> sides) const {
+    return std::any_of(sides.begin(), sides.end(), [&](const operand& side) {
+        const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, side.node)];
+        if (n.kind != expr_kind::symbol || !side.type.known || !(side.type.dim == time_dim))
+            return false;
+        const symbol_entry* e = symbols_.find(text(n.range));
+        return e != nullptr && lower_ascii(e->description).find("inertia") != std::string::npos;
+    });
+}
+
+// "SAD_m = Q_air/A_m" with SAD_m in Nm³/(m²·h): a side that is one symbol stated at reference
+// conditions, a specific aeration demand or a standard superficial rate, and no gas's speed.
+bool checker::lone_symbol_at_reference(std::span<const operand> sides) const {
+    return std::any_of(sides.begin(), sides.end(), [&](const operand& side) {
+        const syntax::expr_node& n = file_.nodes[syntax::inside_brackets(file_, side.node)];
+        if (n.kind != expr_kind::symbol)
+            return false;
+        const symbol_entry* e = symbols_.find(text(n.range));
+        return e != nullptr && (unit_marks_of(e->unit_text) & at_reference_conditions) != 0;
+    });
+}
+
 // Rules for units that the file declares (symbol_table::unit_marks), asked of an equation
 // whose sides agree. Where a note read a number in it (`noted`: 9549 holds the 2π, 6356 is
 // the fan trade's), only the gas-state rules ask, which no number the notes read answers.
@@ -223,7 +248,8 @@ void checker::ask_of_marked_units(const syntax::formula& f, std::span<const oper
                     break;
                 if (report_normal_measure_times_actual_volume(side) ||
                     (sides[0].type.dim == power_dim && report_power_from_normal_flow(side)) ||
-                    (sides[0].type.dim == velocity_dim && report_velocity_from_normal_flow(side)) ||
+                    (sides[0].type.dim == velocity_dim && !lone_symbol_at_reference(sides) &&
+                     report_velocity_from_normal_flow(side)) ||
                     (sides[0].type.dim == area_dimension() && report_area_from_normal_flow(side)) ||
                     report_reference_states_in_ratio(side))
                     break;
@@ -234,7 +260,7 @@ void checker::ask_of_marked_units(const syntax::formula& f, std::span<const oper
         return;
     if ((marks & apparent_power) != 0 && sides[0].type.dim == power_dim)
         report_apparent_as_real_power(sides);
-    else if ((marks & apparent_power) != 0)
+    else if ((marks & apparent_power) != 0 && !names_inertia_constant(sides))
         for (std::size_t i = 0; i < 2; ++i)
             if (report_apparent_power_without_factor(sides[i], sides[1 - i]))
                 break;
