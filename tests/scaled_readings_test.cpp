@@ -911,3 +911,16 @@ TEST_CASE("a winding's temperature and resistance from copper's inferred zero") 
     CHECK(problems_in(run(decl, "θ_2 = R_2/R_1*(235 + θ_1) - 234.5")) >= 1);
     CHECK(problems_in(run(decl, "θ_2 = R_2*(235 + θ_1) - 235")) >= 1);
 }
+
+// A UHT holding tube is kept a bar or so above the saturation pressure of its product (common
+// practice): in a limit, "+ 1.0 {bar}" is that margin even where the site's barometer is 1.002
+// bar. Set against a gauge reading, the absolute side is the finding, named as such.
+TEST_CASE("a typed margin in a limit is no barometer, however near its value") {
+    const std::string decl = "p_hg : barg\np_b : bar = 1.002 \"site barometric pressure\"\n"
+                             "p_sat : bar \"saturation pressure, 3.92 bar a\"\n";
+    passes(decl, {"p_hg + p_b >= p_sat + 1.0 {bar}", "p_hg + p_b >= p_sat + 0.5 {bar}"});
+    const auto r = run(decl, "p_hg >= p_sat + 1.0 {bar}");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(r, plumb::rules::offset_scale), "'p_hg'"));
+    CHECK_FALSE(says(first_under(r, plumb::rules::offset_scale), "counts the atmosphere twice"));
+}

@@ -673,6 +673,17 @@ class checker {
     bool report_hazen_williams_constant(std::span<const operand> sides, std::uint32_t constant);
     bool lone_symbol_at_reference(std::span<const operand> sides) const;
     bool names_inertia_constant(std::span<const operand> sides) const;
+    // Whether the formula being checked relates its sides by <, <=, > or >=.
+    bool current_is_limit() const {
+        if (current_ == nullptr)
+            return false;
+        for (std::uint32_t i = 1; i < current_->side_count; ++i) {
+            const syntax::relation_kind r = file_.sides[current_->first_side + i].relation_before;
+            if (r != syntax::relation_kind::none && r != syntax::relation_kind::equal)
+                return true;
+        }
+        return false;
+    }
     [[gnu::noinline]] void ask_of_marked_units(const syntax::formula& f,
                                                std::span<const operand> sides, bool noted);
     [[gnu::noinline]] void report_angular_frequency_as_cycles(std::span<const operand> sides);
