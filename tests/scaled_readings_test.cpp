@@ -924,3 +924,21 @@ TEST_CASE("a typed margin in a limit is no barometer, however near its value") {
     CHECK(says(first_under(r, plumb::rules::offset_scale), "'p_hg'"));
     CHECK_FALSE(says(first_under(r, plumb::rules::offset_scale), "counts the atmosphere twice"));
 }
+
+// A sterilising process's lethal rate L = 10^((T - 121.1)/z) with T in °C, and its D value
+// D_T = D_121·10^((121.1 - T)/z) (common practice; 121.1 °C = 250 °F, NIST SP 811 (2008), B.8:
+// t/°F = 1.8·t/°C + 32): the reference typed on the other scale than the reading's is warned.
+TEST_CASE("a lethal rate's reference temperature typed on the other scale") {
+    const std::string decl = "t : °C\nt_F : °F\nz : K\nz_F : Δ°F\nL : 1\nD, D_r : min\n";
+    passes(decl, {"L = 10^((t - 121.1)/z)", "L = 10^((t_F - 250)/z_F)",
+                  "D = D_r*10^((121.1 - t)/z)"});
+    for (const char* slip : {"L = 10^((t - 250)/z)", "L = 10^((t_F - 121.1)/z_F)",
+                             "D = D_r*10^((250 - t)/z)"}) {
+        CAPTURE(slip);
+        const auto r = run(decl, slip);
+        CHECK(count_of(r, plumb::rules::offset_scale) == 1);
+        CHECK(says(first_under(r, plumb::rules::offset_scale), "250 \u00B0F"));
+    }
+    // Not outside a power of ten: a reading less 250 is any other difference there.
+    passes(decl, {"L = (t - 250)/z"});
+}

@@ -1079,6 +1079,7 @@ class checker {
                                        std::span<const operand> terms) const;
     bool column_pressure(std::uint32_t node) const;
     std::optional<typed_term> eval_reading_from_inferred_zero(std::uint32_t index);
+    void report_lethality_reference_on_other_scale(std::uint32_t index);
     static bool gauge_divided_into_absolute_unit(std::span<const operand> terms, double scale);
     typed_term finish_offset_sum(std::span<const operand> terms, typed_term result,
                                  std::size_t literal_base, std::uint32_t index);
