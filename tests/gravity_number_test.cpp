@@ -1643,4 +1643,10 @@ TEST_CASE("moist air's enthalpy typed with the chart's bare numbers") {
         CAPTURE(slip);
         CHECK(problems_in(run(decl + slip + "\n")) >= 1);
     }
+    // Said for what it is, not as a fit to be accepted with a reviewed mark.
+    const auto fahrenheit = run(decl + "h = 1.006*t_F + W*(2501 + 1.86*t_F)\n");
+    CHECK(says(first_under(fahrenheit, plumb::rules::offset_scale), "the reading is in \u00B0F"));
+    CHECK_FALSE(says(first_under(fahrenheit, plumb::rules::offset_scale), "reviewed"));
+    const auto grams = run(decl + "h = 1.006*t + W_g*(2501 + 1.86*t)\n");
+    CHECK(says(first_under(grams, plumb::rules::unit_scale), "divide it by 1000"));
 }

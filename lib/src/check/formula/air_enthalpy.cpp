@@ -225,7 +225,7 @@ bool checker::read_moist_air_enthalpy_fit(const syntax::formula& f) {
     const bool si_chart = celsius && latent_si >= 2.495e6 && latent_si <= 2.505e6;
     const bool ip_chart = fahrenheit && latent_si >= 2.460e6 && latent_si <= 2.475e6;
     if (!dry_air || !vapour_heat || !(si_chart || ip_chart))
-        return false;
+        return report_moist_air_enthalpy_units(right, *h, *reading, *ratio, dry, latent);
     diagnostic& d = report(
         rules::trade_constant,
         si_chart ? std::string("read as moist air's enthalpy on the SI chart, h = 1.006\u00B7t "
@@ -241,6 +241,55 @@ bool checker::read_moist_air_enthalpy_fit(const syntax::formula& f) {
     d.notes.push_back({"ASHRAE Handbook\u2014Fundamentals, ch. 1 (psychrometrics); the same "
                        "numbers on the other chart's scale, or in another unit of enthalpy, "
                        "would be a finding",
+                       {}});
+    return true;
+}
+
+// The chart's formula typed as printed, its numbers those of one chart, with an input in
+// another unit: said as such, where the reading's scale alone would advise accepting a fit.
+bool checker::report_moist_air_enthalpy_units(std::uint32_t right, const symbol_entry& h,
+                                              const symbol_entry& reading,
+                                              const symbol_entry& ratio, double dry,
+                                              double latent) {
+    const auto near = [](double x, double c) { return std::abs(x / c - 1.0) < 0.002; };
+    const bool si_numbers = dry >= 0.995 && dry <= 1.01 &&
+                            (near(latent, 2501.0) || near(latent / ratio.si_factor, 2501.0));
+    const bool ip_numbers = dry >= 0.238 && dry <= 0.242 &&
+                            (near(latent, 1061.0) || near(latent / ratio.si_factor, 1061.0));
+    if (!si_numbers && !ip_numbers)
+        return false;
+    const bool celsius = is_celsius(reading.offset_unit);
+    const bool fahrenheit = std::abs(reading.offset_unit->factor - 5.0 / 9.0) < 1e-9;
+    std::string why;
+    const auto add = [&](std::string part) { why += (why.empty() ? "" : "; ") + part; };
+    if (si_numbers ? !celsius : !fahrenheit)
+        add(fmt::format("the reading is in {}, where the chart counts from 0 {}",
+                        reading.offset_unit->symbol, si_numbers ? "\u00B0C" : "\u00B0F"));
+    if (!near(h.si_factor, si_numbers ? 1000.0 : btu_per_lb))
+        add(fmt::format("the enthalpy is in {}, where the numbers give {}", h.unit_text,
+                        si_numbers ? "kJ/kg" : "Btu/lb"));
+    if (!near(latent / ratio.si_factor, si_numbers ? 2501.0 : 1061.0))
+        add(fmt::format("the humidity ratio is in {}, where the numbers take {} (divide it by "
+                        "{:g})",
+                        ratio.unit_text, si_numbers ? "kg/kg" : "lb/lb", 1.0 / ratio.si_factor));
+    if (why.empty())
+        return false;
+    diagnostic& d = report(
+        rules::offset_scale,
+        fmt::format("this is moist air's enthalpy on the {} chart, {}, but {}",
+                    si_numbers ? "SI" : "I-P",
+                    si_numbers ? "h = 1.006\u00B7t + W\u00B7(2501 + 1.86\u00B7t) kJ/kg with t in "
+                                 "\u00B0C"
+                               : "h = 0.240\u00B7t + W\u00B7(1061 + 0.444\u00B7t) Btu/lb with t "
+                                 "in \u00B0F",
+                    why),
+        file_.nodes[right].range);
+    if (si_numbers ? celsius : fahrenheit) { // the sizes of units alone, as any such finding
+        d.rule = std::string(rules::unit_scale);
+        d.level = severity::warning;
+    }
+    d.notes.push_back({"ASHRAE Handbook\u2014Fundamentals, ch. 1 (psychrometrics): each chart's "
+                       "numbers hold only in its own units and from its own zero",
                        {}});
     return true;
 }

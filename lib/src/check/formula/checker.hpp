@@ -930,6 +930,9 @@ class checker {
     const symbol_entry* air_enthalpy_symbol(std::uint32_t node, bool said_air) const;
     bool read_air_enthalpy_datum(std::size_t base);
     [[gnu::noinline]] bool read_moist_air_enthalpy_fit(const syntax::formula& f);
+    bool report_moist_air_enthalpy_units(std::uint32_t right, const symbol_entry& h,
+                                         const symbol_entry& reading, const symbol_entry& ratio,
+                                         double dry, double latent);
 
     // check/formula/net_force.cpp
     bool declares_gauge_or_absolute_pressure();
