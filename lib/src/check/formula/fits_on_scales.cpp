@@ -795,4 +795,49 @@ void checker::read_as_rise(typed_term& t) {
     t.origin_tolerance = 0.0;
 }
 
+// "R_2/R_1*(235 + θ_1) - 235" (IEC 60076-2's winding temperature from its resistance, from
+// memory): the product is the rise above the conductor's inferred zero of resistance, and the
+// same 235 taken off it again leaves a reading on the °C scale.
+std::optional<typed_term> checker::eval_reading_from_inferred_zero(std::uint32_t index) {
+    const syntax::expr_node& n = file_.nodes[index];
+    const std::string_view zero = text(file_.nodes[n.rhs].range);
+    if (zero != "235" && zero != "234.5" && zero != "225" && zero != "228")
+        return std::nullopt;
+    std::uint32_t bracket = syntax::no_index;
+    for_each_factor(n.lhs, [&](std::uint32_t at, int sign) {
+        if (sign > 0 && from_inferred_zero_of_resistance(at)) {
+            const syntax::expr_node& sum = file_.nodes[syntax::inside_brackets(file_, at)];
+            const std::uint32_t number =
+                file_.nodes[sum.lhs].kind == expr_kind::number ? sum.lhs : sum.rhs;
+            if (text(file_.nodes[number].range) == zero)
+                bracket = syntax::inside_brackets(file_, at);
+        }
+        return bracket != syntax::no_index;
+    });
+    if (bracket == syntax::no_index)
+        return std::nullopt;
+    const syntax::expr_node& sum = file_.nodes[bracket];
+    const std::uint32_t reading = file_.nodes[sum.lhs].kind == expr_kind::symbol ? sum.lhs : sum.rhs;
+    const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
+    if (e == nullptr || e->offset_unit == nullptr)
+        return std::nullopt;
+    const std::size_t findings_before = out_.size();
+    const std::size_t literal_base = literals_.size();
+    typed_term rise = eval(n.lhs);
+    cut_literals_to(literal_base);
+    rise.literal_count = 0;
+    if (!rise.known)
+        return rise; // reported already
+    if (!(rise.dim == temperature_dimension()) || rise.offset != nullptr) {
+        out_.resize(findings_before); // the sum reads the product again, and says so
+        return std::nullopt;
+    }
+    rise.offset = e->offset_unit;
+    rise.origin = e->offset_unit->offset;
+    rise.point = true;
+    rise.numeric = false;
+    rise.value.reset();
+    return rise;
+}
+
 } // namespace plumb::formula_check

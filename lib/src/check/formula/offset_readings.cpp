@@ -659,4 +659,57 @@ bool checker::holds_gauge(std::uint32_t node) const {
     });
 }
 
+// "10^((t - 250)/z)" with t in °C: a sterilising process's lethal rate counts from 121.1 °C,
+// which is 250 °F (common practice; the F0 value's reference), and the number typed beside the
+// reading is on the other scale: the rate comes out some 10^13 times too small. Only in a
+// formula with a power of 10 in it, the lethal rate's form.
+void checker::report_lethality_reference_on_other_scale(std::uint32_t index) {
+    const syntax::expr_node& n = file_.nodes[index];
+    const bool number_first = file_.nodes[n.lhs].kind == expr_kind::number;
+    const std::uint32_t number = number_first ? n.lhs : n.rhs;
+    const std::uint32_t reading_node = number_first ? n.rhs : n.lhs;
+    const double reference = written_number(file_.nodes[number].range);
+    const bool fahrenheit_number = std::abs(reference - 250.0) <= 0.5;
+    const bool celsius_number = std::abs(reference - 121.1) <= 0.15;
+    if (!fahrenheit_number && !celsius_number)
+        return;
+    const syntax::expr_node& reading = file_.nodes[syntax::inside_brackets(file_, reading_node)];
+    if (reading.kind != expr_kind::symbol)
+        return;
+    const symbol_entry* e = symbols_.find(text(reading.range));
+    if (e == nullptr || e->offset_unit == nullptr ||
+        !(e->compact_dim && *e->compact_dim == temperature_dimension()))
+        return;
+    const bool celsius_reading = is_celsius(e->offset_unit);
+    const bool fahrenheit_reading = std::abs(e->offset_unit->factor - 5.0 / 9.0) < 1e-9;
+    if (!(fahrenheit_number && celsius_reading) && !(celsius_number && fahrenheit_reading))
+        return;
+    const bool power_of_ten =
+        current_ != nullptr &&
+        syntax::search_formula(file_, *current_, [&](std::uint32_t, const syntax::expr_node& p) {
+            return p.kind == expr_kind::power && file_.nodes[p.lhs].kind == expr_kind::number &&
+                           written_number(file_.nodes[p.lhs].range) == 10.0
+                       ? search_step::found
+                       : search_step::descend;
+        });
+    if (!power_of_ten)
+        return;
+    diagnostic& d = report(
+        rules::offset_scale,
+        fmt::format("{} stands beside {}, a reading in {}, but {} is the lethal rate's reference "
+                    "in {} (121.1 \u00B0C is 250 \u00B0F): the difference in the exponent is "
+                    "off by 128.9 {}",
+                    display_text(file_.nodes[number].range), quote(reading_node),
+                    e->offset_unit->symbol, display_text(file_.nodes[number].range),
+                    fahrenheit_number ? "\u00B0F" : "\u00B0C", e->offset_unit->symbol),
+        file_.nodes[number].range);
+    d.level = severity::warning;
+    d.notes.push_back({fahrenheit_number
+                           ? "write 121.1 beside a °C reading, or the reference with its unit "
+                             "(250 {°F}) and a reading in °F"
+                           : "write 250 beside a °F reading, or the reference with its unit "
+                             "(121.1 {°C}) and a reading in °C",
+                       {}});
+}
+
 } // namespace plumb::formula_check
