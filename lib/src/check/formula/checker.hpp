@@ -1081,8 +1081,6 @@ class checker {
                                        const compact_dimension& dim,
                                        std::span<const operand> terms) const;
     bool column_pressure(std::uint32_t node) const;
-    std::optional<typed_term> eval_reading_from_inferred_zero(std::uint32_t index);
-    void report_lethality_reference_on_other_scale(std::uint32_t index);
     static bool gauge_divided_into_absolute_unit(std::span<const operand> terms, double scale);
     typed_term finish_offset_sum(std::span<const operand> terms, typed_term result,
                                  std::size_t literal_base, std::uint32_t index);
@@ -1391,6 +1389,7 @@ class checker {
     }
 
     // check/formula/offset_readings.cpp
+    void report_lethality_reference_on_other_scale(std::uint32_t index);
     static bool is_heat_per_degree(const compact_dimension& partner);
     static bool is_per_degree_coefficient(const compact_dimension& partner);
     static bool is_slope_of_property(const compact_dimension& partner);
@@ -1422,6 +1421,7 @@ class checker {
     using expansion = std::vector<expanded_term>;
 
     // check/formula/fits_on_scales.cpp
+    std::optional<typed_term> eval_reading_from_inferred_zero(std::uint32_t index);
     bool expand(std::uint32_t i, expansion& out) const;
     static void sort_names(std::array<std::string_view, 6>& names, std::size_t size);
     typed_term expanded_factor_type(const syntax::expr_node& factor);
