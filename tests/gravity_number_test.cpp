@@ -530,7 +530,8 @@ TEST_CASE("molar volume as a number: it follows the gas volumes' reference state
     CHECK(count_of(run(stack + "c_s = C*M/24.45\n"), plumb::rules::unit_scale) == 1);
     // 359 scf/lbmol is the 0 °C one (379.5 × 273.15/288.71): said as 0 °C, never "-0 °C".
     const auto ice = run(stack + "E = C*M*Q_s*60/359e6\n");
-    CHECK(plumb::test::says(plumb::test::first_under(ice, plumb::rules::unit_scale), "at 0 \u00B0C"));
+    CHECK(
+        plumb::test::says(plumb::test::first_under(ice, plumb::rules::unit_scale), "at 0 \u00B0C"));
     CHECK_FALSE(plumb::test::says(plumb::test::first_under(ice, plumb::rules::unit_scale), "-0"));
 }
 
@@ -729,8 +730,8 @@ TEST_CASE("a speed in rpm with pi alone where 2 pi belongs") {
     const auto twice = run(decl + "ω = 2*pi*n/30\n");
     CHECK(plumb::test::says(plumb::test::first_under(twice, plumb::rules::unit_scale),
                             "2 times its true value"));
-    CHECK_FALSE(plumb::test::says(plumb::test::first_under(twice, plumb::rules::unit_scale),
-                                  "4 times"));
+    CHECK_FALSE(
+        plumb::test::says(plumb::test::first_under(twice, plumb::rules::unit_scale), "4 times"));
 }
 
 // The US rational method Q = C·i·A gives cfs from in/h and acres, leaving out 1 acre·in/h =

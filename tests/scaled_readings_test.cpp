@@ -857,12 +857,11 @@ TEST_CASE("a temperature correction's exponent turned round is said so") {
 // beside a gauge-like one, stays a finding.
 TEST_CASE("a gauge reading from two absolute ones keeps its footing inside max and min") {
     const std::string decl = "P_va, p_b : psia\nP_e : psig\nT : K\nt, t_2 : °C\n";
-    passes(decl, {"P_e = max(P_va - p_b, 0)", "P_e = max(0, P_va - p_b)",
-                  "P_e = P_va - p_b"});
-    fails_with(decl,
-               {"P_e = max(P_va, 0)", "P_e = min(P_va - p_b, P_va)", "T = max(t, 0)",
-                "T = max(t, t_2)"},
-               plumb::rules::offset_scale);
+    passes(decl, {"P_e = max(P_va - p_b, 0)", "P_e = max(0, P_va - p_b)", "P_e = P_va - p_b"});
+    fails_with(
+        decl,
+        {"P_e = max(P_va, 0)", "P_e = min(P_va - p_b, P_va)", "T = max(t, 0)", "T = max(t, t_2)"},
+        plumb::rules::offset_scale);
 }
 
 // A gauge pressure times an area is the net force on a face with the atmosphere on its other
@@ -882,8 +881,8 @@ TEST_CASE("a force or an area from an absolute pressure") {
         CHECK(count_of(r, plumb::rules::offset_scale) == 1);
         CHECK(says(first_under(r, plumb::rules::offset_scale), "gauge pressure"));
     }
-    passes(decl, {"P = p_jack*A_ram/1000", "F = (p_fa - p_b)*A", "A_in = W/p_tg",
-                  "F = p_atm*A", "F = p_g*A"});
+    passes(decl, {"P = p_jack*A_ram/1000", "F = (p_fa - p_b)*A", "A_in = W/p_tg", "F = p_atm*A",
+                  "F = p_g*A"});
 }
 
 // A liquid's or a fill's column, ρ·g·h or γ·H, is what a gauge at its foot reads, so a gauge
@@ -930,10 +929,10 @@ TEST_CASE("a typed margin in a limit is no barometer, however near its value") {
 // t/°F = 1.8·t/°C + 32): the reference typed on the other scale than the reading's is warned.
 TEST_CASE("a lethal rate's reference temperature typed on the other scale") {
     const std::string decl = "t : °C\nt_F : °F\nz : K\nz_F : Δ°F\nL : 1\nD, D_r : min\n";
-    passes(decl, {"L = 10^((t - 121.1)/z)", "L = 10^((t_F - 250)/z_F)",
-                  "D = D_r*10^((121.1 - t)/z)"});
-    for (const char* slip : {"L = 10^((t - 250)/z)", "L = 10^((t_F - 121.1)/z_F)",
-                             "D = D_r*10^((250 - t)/z)"}) {
+    passes(decl,
+           {"L = 10^((t - 121.1)/z)", "L = 10^((t_F - 250)/z_F)", "D = D_r*10^((121.1 - t)/z)"});
+    for (const char* slip :
+         {"L = 10^((t - 250)/z)", "L = 10^((t_F - 121.1)/z_F)", "D = D_r*10^((250 - t)/z)"}) {
         CAPTURE(slip);
         const auto r = run(decl, slip);
         CHECK(count_of(r, plumb::rules::offset_scale) == 1);

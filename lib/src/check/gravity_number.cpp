@@ -37,8 +37,8 @@ constexpr std::size_t most_numbers = 8;
 constexpr std::size_t twice_gravity_row = 1;
 constexpr std::size_t round_water_row = 3; // the ground engineer's 10 kN/m³
 constexpr std::size_t molar_volume_row = 7;
-constexpr std::size_t year_row = 16; // the hours of a year
-constexpr std::size_t day_row = 19;  // the hours of a day
+constexpr std::size_t year_row = 16;      // the hours of a year
+constexpr std::size_t day_row = 19;       // the hours of a day
 constexpr std::size_t hot_water_row = 39; // 958 to 995.65 kg/m³, read only as a density
 
 const dimension& density_dimension() {
@@ -466,8 +466,7 @@ const std::array<carried_quantity, 40>& quantities() {
             {rules::trade_constant, "the density of hot water", "\u03C1_w", "1/\u03C1_w",
              " (water between 30 and 100 \u00B0C: 958.4 to 995.65 kg/m\u00B3)",
              "declare the water's density with its unit (\u03C1_w : kg/m^3 = 977.8) to say so",
-             "write the density in a cell that holds its unit to say so", density, 958.0,
-             995.65},
+             "write the density in a cell that holds its unit to say so", density, 958.0, 995.65},
         }};
     }();
     return table;
@@ -545,9 +544,8 @@ std::string molar_volume_message(std::string_view number, const gravity_reading&
                        "{:.1f} % too {}",
                        // + 0.0: a -0.3 °C rounds to "-0" otherwise.
                        number, reading.reciprocal ? "one over " : "",
-                       std::round(off.implied_celsius) + 0.0, of_what,
-                       state, off.wanted, std::abs(off.result_off) * 100.0,
-                       off.result_off > 0 ? "large" : "small");
+                       std::round(off.implied_celsius) + 0.0, of_what, state, off.wanted,
+                       std::abs(off.result_off) * 100.0, off.result_off > 0 ? "large" : "small");
 }
 
 std::string molar_volume_advice(const molar_volume_mismatch& off) {

@@ -155,8 +155,8 @@ void checker::report_air_enthalpy_datum_left_out(std::span<const operand> sides)
 // published ones; a reading on the other chart's scale, or an enthalpy in J/kg beside
 // kJ/kg numbers, matches neither and is checked as any formula is.
 bool checker::read_moist_air_enthalpy_fit(const syntax::formula& f) {
-    if (f.side_count != 2 || file_.sides[f.first_side + 1].relation_before !=
-                                 syntax::relation_kind::equal)
+    if (f.side_count != 2 ||
+        file_.sides[f.first_side + 1].relation_before != syntax::relation_kind::equal)
         return false;
     const std::uint32_t right = syntax::inside_brackets(file_, file_.sides[f.first_side + 1].root);
     const expr_kind shape = file_.nodes[right].kind;
@@ -178,7 +178,9 @@ bool checker::read_moist_air_enthalpy_fit(const syntax::formula& f) {
     expansion terms;
     if (!expand(right, terms) || terms.size() != 3)
         return false;
-    const auto entry = [&](std::uint32_t node) { return symbols_.find(text(file_.nodes[node].range)); };
+    const auto entry = [&](std::uint32_t node) {
+        return symbols_.find(text(file_.nodes[node].range));
+    };
     const symbol_entry* reading = nullptr;
     const symbol_entry* ratio = nullptr;
     double dry = 0.0;
@@ -228,14 +230,15 @@ bool checker::read_moist_air_enthalpy_fit(const syntax::formula& f) {
         return report_moist_air_enthalpy_units(right, *h, *reading, *ratio, dry, latent);
     diagnostic& d = report(
         rules::trade_constant,
-        si_chart ? std::string("read as moist air's enthalpy on the SI chart, h = 1.006\u00B7t "
-                               "+ W\u00B7(2501 + 1.86\u00B7t) kJ/kg with t in \u00B0C: its numbers "
-                               "carry kJ/(kg\u00B7K) and kJ/kg, and t counts from the chart's "
-                               "0 \u00B0C")
-                 : std::string("read as moist air's enthalpy on the I-P chart, h = 0.240\u00B7t "
-                               "+ W\u00B7(1061 + 0.444\u00B7t) Btu/lb with t in \u00B0F: its numbers "
-                               "carry Btu/(lb\u00B7\u00B0F) and Btu/lb, and t counts from the "
-                               "chart's 0 \u00B0F"),
+        si_chart
+            ? std::string("read as moist air's enthalpy on the SI chart, h = 1.006\u00B7t "
+                          "+ W\u00B7(2501 + 1.86\u00B7t) kJ/kg with t in \u00B0C: its numbers "
+                          "carry kJ/(kg\u00B7K) and kJ/kg, and t counts from the chart's "
+                          "0 \u00B0C")
+            : std::string("read as moist air's enthalpy on the I-P chart, h = 0.240\u00B7t "
+                          "+ W\u00B7(1061 + 0.444\u00B7t) Btu/lb with t in \u00B0F: its numbers "
+                          "carry Btu/(lb\u00B7\u00B0F) and Btu/lb, and t counts from the "
+                          "chart's 0 \u00B0F"),
         file_.nodes[right].range);
     d.level = severity::note;
     d.notes.push_back({"ASHRAE Handbook\u2014Fundamentals, ch. 1 (psychrometrics); the same "

@@ -776,9 +776,9 @@ class checker {
         int other_numbers = 0; // not powers of ten or 60: π/12, a screw's 2 strokes
         int displacements = 0; // a volume per revolution (cm³/rev): a pump's or motor's
         int pressures = 0;
-        int capacitors = 0; // a capacitance or an inductance
-        int reactives = 0;  // a reactive power (var, kvar)
-        int pis = 0;        // π written as π, not folded into a number
+        int capacitors = 0;                    // a capacitance or an inductance
+        int reactives = 0;                     // a reactive power (var, kvar)
+        int pis = 0;                           // π written as π, not folded into a number
         int numbers_not_clock_conversions = 0; // neither 10^k nor 60·10^k, as 2 or 30
     };
 

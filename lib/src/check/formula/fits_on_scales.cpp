@@ -817,7 +817,8 @@ std::optional<typed_term> checker::eval_reading_from_inferred_zero(std::uint32_t
     if (bracket == syntax::no_index)
         return std::nullopt;
     const syntax::expr_node& sum = file_.nodes[bracket];
-    const std::uint32_t reading = file_.nodes[sum.lhs].kind == expr_kind::symbol ? sum.lhs : sum.rhs;
+    const std::uint32_t reading =
+        file_.nodes[sum.lhs].kind == expr_kind::symbol ? sum.lhs : sum.rhs;
     const symbol_entry* e = symbols_.find(text(file_.nodes[reading].range));
     if (e == nullptr || e->offset_unit == nullptr)
         return std::nullopt;

@@ -171,7 +171,8 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
     if (c.speeds == 1 && c.rim_speeds == 1 && c.lengths == 1 && c.torques == 0 && c.powers == 0 &&
         c.energies == 0 && c.angular_speeds == 0 && c.inertias == 0 && c.other_numbers == 0 &&
         c.length_round != round_length::none && c.speed.unit.find("Hz") == std::string_view::npos) {
-        report_rim_speed_without_pi(f, c.speed, c.rim, c.length, c.length_round == round_length::radius);
+        report_rim_speed_without_pi(f, c.speed, c.rim, c.length,
+                                    c.length_round == round_length::radius);
         return;
     }
     // X_C = 1/(2π·f·C), Q_c = 2π·f·C·V²: a capacitor's or reactor's reactance takes the
@@ -191,8 +192,8 @@ void checker::report_revolution_without_two_pi(const syntax::formula& f,
     }
     // T = Δp·V_g/(2π): a hydraulic motor's displacement is per revolution, 2π radians
     // (ISO 4391, from memory); a pump's flow V_g·n needs no 2π, and has a speed beside it.
-    if (c.displacements == 1 && c.torques == 1 && c.pressures >= 1 && c.speeds == 0 && c.powers == 0 &&
-        c.energies == 0 && c.angular_speeds == 0) {
+    if (c.displacements == 1 && c.torques == 1 && c.pressures >= 1 && c.speeds == 0 &&
+        c.powers == 0 && c.energies == 0 && c.angular_speeds == 0) {
         warn_of_missing_pi(
             f,
             fmt::format("{} is a torque ({}) from a displacement per revolution: a motor's "
