@@ -941,3 +941,21 @@ TEST_CASE("a lethal rate's reference temperature typed on the other scale") {
     // Not outside a power of ten: a reading less 250 is any other difference there.
     passes(decl, {"L = (t - 250)/z"});
 }
+
+// A vacuum counts down from the barometer: absolute = barometric - vacuum (common practice;
+// 1 inH2O = 0.2491 kPa, NIST SP 811 (2008), B.8, rounded). Added to the barometer, the sum
+// stands as far above the atmosphere as the inlet is below it.
+TEST_CASE("a vacuum added to the barometer") {
+    const std::string decl = "p_vac : inH2O \"vacuum at the blower inlet\"\n"
+                             "p_b : kPa \"site barometric pressure\"\np_in : kPa\n"
+                             "v_c : kPa \"condenser vacuum\"\nΔp_f : kPa \"filter loss\"\n"
+                             "p_vg : kPag \"vacuum gauge, -69 kPa g\"\n";
+    passes(decl, {"p_in = p_b - 0.2491*p_vac", "p_in = p_b - v_c", "p_in = p_b + Δp_f",
+                  "p_in = p_vg + p_b"});
+    for (const char* slip : {"p_in = p_b + 0.2491*p_vac", "p_in = v_c + p_b"}) {
+        CAPTURE(slip);
+        const auto r = run(decl, slip);
+        CHECK(count_of(r, plumb::rules::offset_scale) == 1);
+        CHECK(says(first_under(r, plumb::rules::offset_scale), "counts down from the barometer"));
+    }
+}

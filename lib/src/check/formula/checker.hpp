@@ -1081,6 +1081,7 @@ class checker {
                                        const compact_dimension& dim,
                                        std::span<const operand> terms) const;
     bool column_pressure(std::uint32_t node) const;
+    bool report_vacuum_added_to_barometer(std::span<const operand> terms);
     static bool gauge_divided_into_absolute_unit(std::span<const operand> terms, double scale);
     typed_term finish_offset_sum(std::span<const operand> terms, typed_term result,
                                  std::size_t literal_base, std::uint32_t index);

@@ -597,8 +597,44 @@ bool checker::column_pressure(std::uint32_t node) const {
     return !other && lengths == 1 && densities + weights == 1 && gravities <= 1;
 }
 
+// "p_in = p_b + 0.2491*p_vac": a vacuum counts down from the barometer, so added to it the sum
+// stands as far above the atmosphere as the inlet is below it (common practice: absolute =
+// barometric - vacuum). Asked of a sum of two added pressures, one the atmosphere by its name.
+bool checker::report_vacuum_added_to_barometer(std::span<const operand> terms) {
+    if (terms.size() != 2 || terms[0].subtracted || terms[1].subtracted)
+        return false;
+    for (std::size_t i = 0; i < 2; ++i) {
+        const operand& atmosphere = terms[i];
+        const operand& vacuum = terms[1 - i];
+        // A gauge reading under a vacuum is negative, and the barometer added to it is right
+        // ("p_abs = p_vg + p_b" with p_vg at -69 kPa g).
+        if (!atmosphere.type.known || !vacuum.type.known || vacuum.type.offset != nullptr ||
+            !(atmosphere.type.dim == pressure_dimension()) ||
+            !(vacuum.type.dim == pressure_dimension()) || !names_atmosphere(atmosphere.node) ||
+            names_atmosphere(vacuum.node) || !names_a_vacuum(vacuum.node))
+            continue;
+        diagnostic& d =
+            report(rules::offset_scale,
+                   fmt::format("{} is a vacuum, which counts down from the barometer {}: added "
+                               "to it, the sum stands as far above the atmosphere as the "
+                               "pressure is below it",
+                               quote(vacuum.node), quote(atmosphere.node)),
+                   file_.nodes[vacuum.node].range);
+        d.level = severity::warning;
+        d.notes.push_back({fmt::format("an absolute pressure under a vacuum is the barometer "
+                                       "less the vacuum: write ({} - {})",
+                                       display_text(file_.nodes[atmosphere.node].range),
+                                       display_text(file_.nodes[vacuum.node].range)),
+                           {}});
+        return true;
+    }
+    return false;
+}
+
 typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term result,
                                       std::size_t literal_base, std::uint32_t index) {
+    if (terms.size() == 2 && result.known && result.dim == pressure_dimension()) [[unlikely]]
+        report_vacuum_added_to_barometer(terms);
     // The terms with units (not the numbers that shift the zero).
     std::size_t unit_terms = 0;
     std::size_t only = 0;
