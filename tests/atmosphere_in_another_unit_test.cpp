@@ -433,3 +433,28 @@ TEST_CASE("inches of water read on a gauge are a gauge reading") {
                                "vac : kPa \"suction vacuum below the barometer\"\n";
     passes(vacuum, {"vac_in = 4.015*vac"});
 }
+
+// NPSH available is (p_s + p_atm - p_v)/(ρ·g) with the suction gauge reading p_s (Karassik et
+// al., Pump Handbook, 4th ed., from memory). The site's barometer typed as a number among the
+// sum's other terms (99.8 kPa about 130 m up, 62.9 kPa about 3840 m up, 1.0 bar; the standard
+// atmosphere's barometric formula, from memory) puts the gauge reading on the absolute scale, as
+// it does beside the reading alone. A number no atmosphere has, one subtracted, or the sea
+// level's beside a declared barometer stays a finding; a gauge reading plus a number set equal
+// to another gauge reading is a pump's rise, not an atmosphere.
+TEST_CASE("the site's barometer typed among a sum's other terms") {
+    const std::string d = "p_s : kPa(g)\np_v : kPa\nrho : kg/m^3\nH : m\nq_s : bar(g)\n"
+                          "q_v : bar\np_d : kPa(g)\n";
+    passes(d, {"H = (p_s + 99.8 - p_v)*1000/(rho*{g_n})", "H = 1000*(62.9 + p_s - p_v)/(rho*{g_n})",
+               "H = (q_s + 1.0 - q_v)*1e5/(rho*{g_n})", "p_d = p_s + 99.8"});
+    const auto read = run(d, "H = (p_s + 99.8 - p_v)*1000/(rho*{g_n})");
+    CHECK(says(first_under(read, plumb::rules::trade_constant),
+               "99.8 is read as the atmospheric pressure where the gauge is"));
+    fails_with(d,
+               {"H = (p_s + 20 - p_v)*1000/(rho*{g_n})", "H = (p_s - 99.8 - p_v)*1000/(rho*{g_n})",
+                "H = (p_s - p_v)*1000/(rho*{g_n})"},
+               plumb::rules::offset_scale);
+    const std::string site = d + "p_b : kPa = 97.5 \"site barometer\"\n";
+    const auto other = run(site, "H = (p_s + 88 - p_v)*1000/(rho*{g_n})");
+    REQUIRE(count_of(other, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(other, plumb::rules::offset_scale), "site's barometer 'p_b'"));
+}

@@ -1246,3 +1246,30 @@ TEST_CASE("workbook parity: a flow at 0 °C times a heating value per volume at 
     CHECK(cell_findings(check_one_sheet("Gas", sheet)) ==
           std::vector<std::string>{"Gas!B5 unit-scale"});
 }
+
+TEST_CASE("workbook parity: a gauge cell plus the site's barometer typed into an absolute cell") {
+    // Absolute = gauge + the local atmosphere (common practice); 99.8 kPa and 1.0 bar are the
+    // standard atmosphere's about 130 m and 110 m up (its barometric formula, from memory). The
+    // notation reads "p_a = p_g + 99.8" so; a cell whose unit is absolute is read the same way.
+    // A number no atmosphere has stays the offset-scale error, and so does NPSH with it.
+    const check_report r =
+        check_one_sheet("Baro", sheet_of({
+                                    {"22", "kPa(g)"},                         // B2
+                                    {"=B2+99.8", "kPa"},                      // B3: right
+                                    {"8", "bar(g)"},                          // B4
+                                    {"=B4+1.0", "bar a"},                     // B5: right
+                                    {"=B2+20", "kPa"},                        // B6: no atmosphere
+                                    {"1.4", "kPa"},                           // B7: vapour pressure
+                                    {"999.5", "kg/m³"},                       // B8
+                                    {"=(B2+99.8-B7)*1000/(B8*9.80665)", "m"}, // B9: right, NPSHa
+                                    {"=(B2+20-B7)*1000/(B8*9.80665)", "m"},   // B10: no atmosphere
+                                }));
+    CHECK_FALSE(error_at(r, "Baro!B3"));
+    CHECK_FALSE(error_at(r, "Baro!B5"));
+    CHECK_FALSE(error_at(r, "Baro!B9"));
+    const diagnostic* note = finding(r, "Baro!B3", rules::trade_constant);
+    REQUIRE(note != nullptr);
+    CHECK(says(*note, "99.8 is read as the atmospheric pressure where the gauge is"));
+    CHECK(finding(r, "Baro!B6", rules::offset_scale) != nullptr);
+    CHECK(finding(r, "Baro!B10", rules::offset_scale) != nullptr);
+}

@@ -42,15 +42,10 @@ EXTRA = {
          "multiplying it as it should", "Water!C77 gravity-number"),
     ],
     "meter-station-harrow-moss": [
-        ("FLAGGED CORRECT CELL (plumb's limit): the meter gauge reading plus the site barometer "
-         "typed as the flow computer holds it, =C8+1.006 into bar a, the very value of the "
-         "barometer the sheet declares in C9. plumb says the value is on the barg scale and "
-         "advises 'add or subtract the atmospheric pressure', which the formula does: misleading. "
-         "The notation reads the same line as the site's barometer with a note (probe/p5.plumb: "
-         "p_g + 1, p_g + 0.98, psig + 14.2 all notes), but in a workbook only the sea-level "
-         "atmosphere passes (+1.01325, +1.013, +14.7, +101.3); +1, +0.98, +14.2 and +98 kPa are "
-         "errors, with or without a declared barometer (probe/p3.py, p4.py)",
-         "Station!C11 offset-scale"),
+        ("a note on a correct cell, flagged until the cell's unit was weighed with the number "
+         "added: the meter gauge reading plus the site barometer typed as the flow computer "
+         "holds it, =C8+1.006 into bar a, read as the site's atmosphere (a note), as the "
+         "notation reads p_g + 1", "Station!C11 trade-constant"),
     ],
     "solar-whinmoor-lane-school": [
         ("FLAGGED CORRECT CELL (defensible): the store's temperature rise over a mean day from "

@@ -36,11 +36,10 @@ EXTRA = {
          "Station!C53 gravity-number"),
         ("a note on a correct cell: 9.81 read as g_n in Joukowsky's a·Δv/g",
          "Station!C59 gravity-number"),
-        ("FLAGGED CORRECT CELL (plumb's limit): suction gauge plus the site barometer typed from "
-         "the site log, 22 kPa(g) + 99.8 = 121.8 kPa absolute (common practice); plumb calls it "
-         "a gauge value written as absolute and says 'add or subtract the atmospheric pressure', "
-         "which the formula does. The same with 101.325 typed is only a warning (probe/"
-         "barometer.py)", "Station!C65 offset-scale"),
+        ("a note on a correct cell, flagged until the cell's unit was weighed with the number "
+         "added: suction gauge plus the site barometer typed from the site log, 22 kPa(g) + "
+         "99.8 = 121.8 kPa absolute (common practice), read as the site's atmosphere",
+         "Station!C65 trade-constant"),
         ("a note on a correct cell: 9.81 read as g_n in NPSHa", "Station!C66 gravity-number"),
         ("a note on a correct cell: 9.81 read as g_n in ρ·g·Q·H", "Station!C73 gravity-number"),
         ("a note on a planted cell (beside its error): 9.81 read as g_n",
@@ -54,10 +53,10 @@ EXTRA = {
          "Station!C91 gravity-number"),
     ],
     "evaporator-cip-ashgill-moor": [
-        ("FLAGGED CORRECT CELL (plumb's limit): motive steam 8.0 bar(g) + 1.0 typed from the "
-         "boiler log (the site barometer, 1.00 bar a, in C24) = 9.0 bar a (common practice). "
-         "plumb says the number added does not put the zero where the other side has it and to "
-         "add C24 instead, the cell that holds the same 1.00", "Evaporator!C26 offset-scale"),
+        ("a note on a correct cell, flagged until the cell's unit was weighed with the number "
+         "added: motive steam 8.0 bar(g) + 1.0 typed from the boiler log (the site barometer, "
+         "1.00 bar a, in C24) = 9.0 bar a (common practice), read as the site's atmosphere",
+         "Evaporator!C26 trade-constant"),
     ],
     "crusher-conveyor-stainmoor-edge": [
         ("FLAGGED CORRECT CELL (plumb's limit): Bond's W = 10·W_i·(1/√P80 − 1/√F80) with P80 "

@@ -1335,6 +1335,8 @@ class checker {
     bool read_local_atmosphere_taken_off(const operand& difference);
     bool read_number_as_local_atmosphere(std::uint32_t number, double unit);
     bool read_local_atmosphere(const operand& sum, double other_scale);
+    bool read_site_atmosphere_in_sum(std::span<const operand> terms, double unit,
+                                     double shifted_origin, double tolerance);
     void settle_rounded_side(typed_term& side, std::size_t literal_base) const;
     void report_unbalanced_readings(const operand& side);
     bool report_scale_zero_beside_difference(std::span<const operand> sides);
@@ -1437,7 +1439,8 @@ class checker {
     [[gnu::noinline]] void settle_percent_divisor(typed_term& result, const typed_term& factor,
                                                   const syntax::expr_node& op);
     std::optional<std::pair<std::uint32_t, std::uint32_t>>
-    number_beside_symbol(std::uint32_t k) const;
+    number_beside_symbol(std::uint32_t k, bool cells = false) const;
+    std::optional<double> gauge_reading_unit(std::uint32_t node) const;
     [[gnu::noinline]] void note_bare_fit_on_scale(std::uint32_t denominator);
     bool holds_symbol_in_unit(std::uint32_t node,
                               std::initializer_list<std::string_view> parts) const;

@@ -262,17 +262,20 @@ void checker::settle_percent_divisor(typed_term& result, const typed_term& facto
 }
 
 // "233.426 + t", "p_g + 92.1": a sum of a number and a symbol, in either order, as the
-// number's node and the symbol's; empty for any other node.
+// number's node and the symbol's; empty for any other node. With `cells`, a workbook's cell
+// ("=C63+99.8") stands where the symbol does.
 std::optional<std::pair<std::uint32_t, std::uint32_t>>
-checker::number_beside_symbol(std::uint32_t k) const {
+checker::number_beside_symbol(std::uint32_t k, bool cells) const {
     const syntax::expr_node& n = file_.nodes[k];
     if (n.kind != expr_kind::add)
         return std::nullopt;
-    if (file_.nodes[n.lhs].kind == expr_kind::number &&
-        file_.nodes[n.rhs].kind == expr_kind::symbol)
+    const auto reading = [&](std::uint32_t at) {
+        const expr_kind kind = file_.nodes[at].kind;
+        return kind == expr_kind::symbol || (cells && kind == expr_kind::reference);
+    };
+    if (file_.nodes[n.lhs].kind == expr_kind::number && reading(n.rhs))
         return std::pair{n.lhs, n.rhs};
-    if (file_.nodes[n.rhs].kind == expr_kind::number &&
-        file_.nodes[n.lhs].kind == expr_kind::symbol)
+    if (file_.nodes[n.rhs].kind == expr_kind::number && reading(n.lhs))
         return std::pair{n.rhs, n.lhs};
     return std::nullopt;
 }

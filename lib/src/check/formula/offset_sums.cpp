@@ -951,6 +951,11 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
             final_origin = 0.0;
             tolerance = std::abs(o);
             shifted_to_a_zero = true;
+        } else if (gauges > 0 && unit_terms >= 2 &&
+                   read_site_atmosphere_in_sum(terms, unit, o, tol)) [[unlikely]] {
+            final_origin = 0.0;
+            tolerance = std::abs(o) + tol;
+            shifted_to_a_zero = true;
         }
     }
     // "p_psig = p_d/6.895 + 14.696": set equal to a gauge reading, the atmosphere added is

@@ -579,7 +579,7 @@ bool checker::read_local_atmosphere(const operand& sum, double other_scale) {
     // the reading into the other side's unit within their rounding (14.5 psi per bar is
     // 14.5038); `inner` is a bracketed sum of the symbol and a number, where one is.
     const auto converted_reading = [&](std::uint32_t product, std::uint32_t& inner) {
-        const symbol_entry* reading = nullptr;
+        std::optional<double> reading;
         double numbers = 1.0;
         double rounding = 1e-9;
         const bool other = for_each_factor(product, [&](std::uint32_t at, int sign) {
@@ -592,41 +592,40 @@ bool checker::read_local_atmosphere(const operand& sum, double other_scale) {
                 rounding += read_literal(text(n.range), v, at).tolerance;
                 return false;
             }
-            if (sign < 0 || reading != nullptr)
+            if (sign < 0 || reading)
                 return true;
             std::uint32_t symbol = at;
-            if (n.kind != expr_kind::symbol) {
-                const auto parts = number_beside_symbol(at);
+            if (n.kind != expr_kind::symbol && n.kind != expr_kind::reference) {
+                const auto parts = number_beside_symbol(at, true);
                 if (!parts)
                     return true;
                 inner = at;
                 symbol = parts->second;
             }
-            reading = symbols_.find(text(file_.nodes[symbol].range));
-            return reading == nullptr || reading->offset_unit == nullptr;
+            reading = gauge_reading_unit(symbol);
+            return !reading;
         });
-        return !other && reading != nullptr && std::isfinite(other_scale) && other_scale > 0.0 &&
-                       std::abs(reading->si_factor / numbers / other_scale - 1.0) <= rounding
+        return !other && reading && std::isfinite(other_scale) && other_scale > 0.0 &&
+                       std::abs(*reading / numbers / other_scale - 1.0) <= rounding
                    ? reading
-                   : nullptr;
+                   : std::nullopt;
     };
-    if (const auto parts = number_beside_symbol(k)) {
+    if (const auto parts = number_beside_symbol(k, true)) {
         number = parts->first;
     } else if (file_.nodes[k].kind == expr_kind::multiply) {
         std::uint32_t inner = syntax::no_index;
-        const symbol_entry* reading = converted_reading(k, inner);
-        if (reading == nullptr || inner == syntax::no_index)
+        const std::optional<double> reading = converted_reading(k, inner);
+        if (!reading || inner == syntax::no_index)
             return false;
-        number = number_beside_symbol(inner)->first;
-        unit = reading->si_factor;
+        number = number_beside_symbol(inner, true)->first;
+        unit = *reading;
     } else if (file_.nodes[k].kind == expr_kind::add) {
         const syntax::expr_node& n = file_.nodes[k];
         const bool left_number = file_.nodes[n.lhs].kind == expr_kind::number;
         const std::uint32_t written = left_number ? n.lhs : n.rhs;
         std::uint32_t inner = syntax::no_index;
         if (file_.nodes[written].kind != expr_kind::number ||
-            converted_reading(left_number ? n.rhs : n.lhs, inner) == nullptr ||
-            inner != syntax::no_index)
+            !converted_reading(left_number ? n.rhs : n.lhs, inner) || inner != syntax::no_index)
             return false;
         number = written;
         unit = other_scale;
@@ -634,6 +633,42 @@ bool checker::read_local_atmosphere(const operand& sum, double other_scale) {
         return false;
     }
     return read_number_as_local_atmosphere(number, unit);
+}
+
+// "(p_g + 99.8 - p_v)" in NPSHa, "p_g + 1.0 + ρ*g*h": a gauge reading among other terms with
+// one number added where the standard atmosphere would put the sum's zero at the absolute one.
+// The number is the site's barometer, as it is beside a gauge reading alone (above).
+bool checker::read_site_atmosphere_in_sum(std::span<const operand> terms, double unit,
+                                          double shifted_origin, double tolerance) {
+    const operand* number = nullptr;
+    for (const auto& t : terms) {
+        if (!is_shift_candidate(t))
+            continue;
+        if (number != nullptr || t.subtracted || !t.type.numeric ||
+            file_.nodes[t.node].kind != expr_kind::number)
+            return false;
+        number = &t;
+    }
+    if (number == nullptr || !std::isfinite(unit))
+        return false;
+    const double added = shift_of(*number).written * unit;
+    return std::abs(shifted_origin + added - standard_atmosphere) <=
+               tolerance + 3e-4 * standard_atmosphere &&
+           read_number_as_local_atmosphere(number->node, unit);
+}
+
+// The SI value of one unit of a reading on an offset scale (psig, barg): a symbol declared in
+// one, or a workbook's cell with one written beside it.
+std::optional<double> checker::gauge_reading_unit(std::uint32_t node) const {
+    const syntax::expr_node& n = file_.nodes[node];
+    if (n.kind == expr_kind::symbol) {
+        if (const symbol_entry* e = symbols_.find(text(n.range)); e != nullptr && e->offset_unit)
+            return e->si_factor;
+    } else if (n.kind == expr_kind::reference) {
+        if (const syntax::reference_value& cell = file_.references[n.lhs]; cell.offset != nullptr)
+            return cell.scale;
+    }
+    return std::nullopt;
 }
 
 // "p_psig = p_sa - 14.2", "p_k/6.895 - 14.2" into psig: an absolute reading, or one converted
