@@ -320,13 +320,26 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
     if (exact && exact->num() < 0)
         exact = -*exact;
     if (exact && !exact->is_zero()) {
-        const auto width = half_unit_narrower
-                               ? exact_product(exact_power_of_ten(last_place), rational(2), true)
-                               : exact_product(exact, rational(100), true);
+        auto width = half_unit_narrower
+                         ? exact_product(exact_power_of_ten(last_place), rational(2), true)
+                         : exact_product(exact, rational(100), true);
         // Tables and codes print some factors cut rather than rounded (US EPA AP-42's 5.614
         // ft³/bbl for 5.6146, 2.204 lb/kg for 2.20462): from four digits on, the value may
         // lie up to a whole unit above the digits, never more below them than half of one.
         const bool table_printed = has_point ? significant >= 4 : l.value >= 1000;
+        // Tables also carry factors rounded from older definitions or chained from two rounded
+        // ones (3413 Btu/h per kW for 3412.14; 249.1 Pa per in. w.g. over 0.3048 m per ft,
+        // 817.3 for 817.22): printed to four digits, the half unit is at least 0.03 % of the
+        // value, which no slip of units comes near. Five digits or more (273.15, 1.01325) are
+        // printed that precisely on purpose. The interval stays centred as before, so the
+        // digits can be read back from it (printed_value).
+        if (table_printed && significant == 4 && half_unit_narrower && width && exact) {
+            const auto floor = exact_product(exact, rational(3, 10000), false);
+            if (floor && *width < *floor) {
+                width = floor;
+                l.tolerance = std::max(l.tolerance, 3e-4);
+            }
+        }
         if (width) {
             try {
                 l.low = *exact - *width;
