@@ -722,6 +722,21 @@ TEST_CASE("a concentration per standard volume times an actual flow") {
     passes(decl, {"m_lb = C_mg*Q_s*0.02832*1440/453592", "m_g = C_mg*Q_m*(p/p_n)*(T_n/T)"});
 }
 
+// A flare's heat release P = Q·LHV (common practice) with the heating value per Nm³ (methane's
+// 35.8 MJ/Nm³, from memory) or per scf: times the actual flow at 35 °C and the train's pressure
+// it counts the gas as if at the reference state, some 12 % high. A heating value per volume
+// has a pressure's dimension, which must not read as a pressure correcting the state. With the
+// normal flow, or the correction (p/p_n)·(T_n/T) written in, it passes (1 h = 3600 s, SI
+// Brochure 9th ed., Table 8).
+TEST_CASE("a heating value per reference volume times an actual flow") {
+    const std::string decl = "LHV_n : MJ/Nm3\nLHV_s : Btu/scf\nQ_a : m^3/h \"actual gas flow\"\n"
+                             "Q_acfm : acfm\nQ_n : Nm3/h\nQ_scfm : scfm\nP_th : MW\nH : Btu/h\n"
+                             "y : 1\np, p_n : kPa\nT, T_n : K\n";
+    fails_with(decl, {"P_th = Q_a*y*LHV_n/3600", "H = Q_acfm*LHV_s*60"}, plumb::rules::unit_scale);
+    passes(decl, {"P_th = Q_n*y*LHV_n/3600", "H = Q_scfm*LHV_s*60",
+                  "P_th = Q_a*(p/p_n)*(T_n/T)*y*LHV_n/3600"});
+}
+
 // A fan sized in acfm from a flow in Nm³/h by the volume factor alone, 0.5886 cfm per m³/h or
 // 1.699 m³/h per cfm (NIST SP 811 (2008), B.8, rounded): the gas at the fan's outlet is hot and
 // the fan comes out small. A factor near 1 that could be the state correction folded in, or

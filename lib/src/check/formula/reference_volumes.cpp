@@ -344,13 +344,16 @@ bool checker::report_normal_measure_times_actual_volume(const operand& side) {
         if (n.kind != expr_kind::symbol)
             return true;
         const symbol_entry* e = symbols_.find(text(n.range));
-        if (e == nullptr || !e->compact_dim || *e->compact_dim == pressure_dimension() ||
-            *e->compact_dim == temperature_dimension())
+        if (e == nullptr || !e->compact_dim)
             return true;
+        // Asked before the pressure's test: a heating value per Nm³ (MJ/Nm³) has a pressure's
+        // dimension, and is no pressure that could correct the state.
         if ((unit_marks_of(e->unit_text) & at_reference_conditions) != 0) {
             normal_node = at;
             return false;
         }
+        if (*e->compact_dim == pressure_dimension() || *e->compact_dim == temperature_dimension())
+            return true;
         if (sign > 0 && is_gas_volume_or_flow(*e->compact_dim) && names_actual_volume(*e))
             actual_node = at;
         return false;
