@@ -604,6 +604,23 @@ TEST_CASE("a head from an absolute pressure alone is told to take the barometer 
     passes(piezometer, {"h_pz = (p_pz - p_b)/γ_w", "NPSH = (p_pz - p_v)/γ_w", "h_b = p_b/γ_w"});
 }
 
+// The same absolute reading as one term of the energy's sum, a turbine's net head H = p/(ρ·g) +
+// V²/(2·g) (IEC 60041, from memory), or times the feet of water per psi, 2.31 (1 psi = 6894.76
+// Pa, NIST SP 811 (2008), B.8; ρ_w·g_n = 9.79 kN/m³ at 15 °C, common practice): the head is
+// still some 10 m of water high. A gauge reading there, a difference of absolute readings, and
+// a sum with no pressure in it pass.
+TEST_CASE("a head from an absolute pressure among the energy's terms or times 2.31") {
+    const std::string d = "p_a : bar \"turbine inlet, absolute transducer\"\np_g : bar(g)\n"
+                          "p_v : bar \"vapour pressure, absolute\"\nρ : kg/m^3\nV : m/s\n"
+                          "H, z : m\np_psia : psia \"unvented transducer, absolute\"\nH_ft : ft\n";
+    fails_with(d,
+               {"H = 1e5*p_a/(ρ*{g_n}) + V^2/(2*{g_n})",
+                "H = z + 1e5*p_a/(ρ*{g_n}) + V^2/(2*{g_n})", "H_ft = 2.31*p_psia"},
+               plumb::rules::offset_scale);
+    passes(d, {"H = 1e5*p_g/(ρ*{g_n}) + V^2/(2*{g_n})",
+               "H = 1e5*(p_a - p_v)/(ρ*{g_n}) + V^2/(2*{g_n})", "H = z + V^2/(2*{g_n})"});
+}
+
 // The barometer a file declares at sea level (a ship's, 1.013 bar) is still the one to add to
 // a gauge reading, in the reading's unit (1 bar = 100 kPa, NIST SP 811 (2008), B.8).
 TEST_CASE("a gauge reading's advice names the declared barometer in another unit") {

@@ -359,7 +359,9 @@ void checker::check_formula(const syntax::formula& f) {
             if (equation && sides.size() == 2 && out_.size() == findings_before &&
                 sides[0].type.known && sides[0].type.dim == length_dimension() &&
                 (file_.nodes[sides[1].node].kind == expr_kind::divide ||
-                 file_.nodes[sides[0].node].kind == expr_kind::divide)) [[unlikely]]
+                 file_.nodes[sides[0].node].kind == expr_kind::divide ||
+                 file_.nodes[sides[1].node].kind == expr_kind::multiply ||
+                 file_.nodes[sides[1].node].kind == expr_kind::add)) [[unlikely]]
                 report_head_from_absolute(sides);
             if (equation && sides.size() == 2 && out_.size() == findings_before &&
                 sides[0].type.known &&

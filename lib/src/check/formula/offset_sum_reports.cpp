@@ -799,22 +799,19 @@ bool checker::report_share_of_gauge_beside_absolute(std::span<const operand> ter
 // "h_pz = p_pz*1000/(ρ_w*g)" with p_pz absolute (a non-vented piezometer): over ρ·g an
 // absolute pressure is the column that would stand above a vacuum, some 10 m of water more
 // than the head above the point, which takes the pressure above the atmosphere (common
-// practice). Only a head set equal to one absolute reading over the rest, no other pressure;
+// practice). Only a head set equal to one absolute reading over the rest or times them
+// (2.31*p_psia in ft of water), no other pressure, alone or as one term of the energy's sum
+// ("p_a/(ρ*g) + V^2/(2*g)", a turbine's net head);
 // "(p_pz - p_b)*1000/(ρ*g)" and NPSH's (p_abs - p_v)/(ρ*g) take a difference first.
 void checker::report_head_from_absolute(std::span<const operand> sides) {
-    for (std::size_t k = 0; k < 2; ++k) {
-        const std::uint32_t head = syntax::inside_brackets(file_, sides[k].node);
-        const std::uint32_t column = syntax::inside_brackets(file_, sides[1 - k].node);
-        if (file_.nodes[head].kind != expr_kind::symbol ||
-            file_.nodes[column].kind != expr_kind::divide)
-            continue;
-        // The pressures among the column's factors, walked with a small stack of its own: the
-        // rule is asked of many a length, and almost every one has no absolute reading.
+    // The one absolute reading among a quotient's factors, walked with a small stack of its
+    // own: the rule is asked of many a length, and almost every one has no absolute reading.
+    // `other`: a pressure that is no lone absolute reading over the rest.
+    const auto absolute_reading = [&](std::uint32_t column, bool& other) {
         std::array<std::pair<std::uint32_t, int>, 16> pending{};
         std::size_t count = 0;
         pending[count++] = {column, 1};
         std::uint32_t reading = syntax::no_index;
-        bool other = false;
         while (count > 0 && !other) {
             const auto [at, sign] = pending[--count];
             const syntax::expr_node& n = file_.nodes[at];
@@ -842,6 +839,42 @@ void checker::report_head_from_absolute(std::span<const operand> sides) {
             else
                 reading = at;
         }
+        return reading;
+    };
+    for (std::size_t k = 0; k < 2; ++k) {
+        const std::uint32_t head = syntax::inside_brackets(file_, sides[k].node);
+        std::uint32_t column = syntax::inside_brackets(file_, sides[1 - k].node);
+        if (file_.nodes[head].kind != expr_kind::symbol)
+            continue;
+        bool other = false;
+        std::uint32_t reading = syntax::no_index;
+        if (file_.nodes[column].kind == expr_kind::divide ||
+            file_.nodes[column].kind == expr_kind::multiply) {
+            reading = absolute_reading(column, other);
+        } else if (file_.nodes[column].kind == expr_kind::add) {
+            // The energy's terms: the one that holds the reading is added, a quotient, and
+            // no other term holds a pressure.
+            std::uint32_t found = syntax::no_index;
+            std::uint32_t at = column;
+            while (!other) {
+                const syntax::expr_node& n = file_.nodes[at];
+                const bool more = n.kind == expr_kind::add || n.kind == expr_kind::subtract;
+                const std::uint32_t term = more ? n.rhs : at;
+                const std::uint32_t r = absolute_reading(term, other);
+                if (r != syntax::no_index) {
+                    const expr_kind kind = file_.nodes[syntax::inside_brackets(file_, term)].kind;
+                    if (found != syntax::no_index || (more && n.kind == expr_kind::subtract) ||
+                        (kind != expr_kind::divide && kind != expr_kind::multiply))
+                        other = true;
+                    found = term;
+                    reading = r;
+                }
+                if (!more)
+                    break;
+                at = n.lhs;
+            }
+            column = found;
+        }
         if (other || reading == syntax::no_index)
             continue;
         const std::string_view head_name = text(file_.nodes[head].range);
@@ -855,7 +888,7 @@ void checker::report_head_from_absolute(std::span<const operand> sides) {
             fmt::format("{} is an absolute pressure: as a column it counts from a vacuum, about "
                         "10 m of water more than the head {} above the atmosphere",
                         quote(reading), quote(head)),
-            file_.nodes[sides[1 - k].node].range);
+            file_.nodes[column].range);
         d.level = severity::warning;
         d.notes.push_back(
             {fmt::format("a head takes the pressure above the atmosphere: write ({} - {})",
