@@ -417,6 +417,24 @@ TEST_CASE("heat capacity of a volume as a number: the trade's 1.08 and 500") {
     }
 }
 
+// The hydronic trade's 500 for a water-glycol loop: ρ·c_p of 20 to 50 % ethylene or propylene
+// glycol between -10 and 40 °C is about 3.45 to 4.10 MJ/(m³·K) (ASHRAE Handbook—Fundamentals,
+// the glycol tables, from memory), 413 to 490 in Btu/(h·gpm·°F) (NIST SP 811 (2008), B.8, as
+// the case above works out). Printed in 400s it is a note naming the mix; water's own number
+// with air's flow, the glycol figure on a cfm, and one that divides stay errors.
+TEST_CASE("the hydronic 500 printed for a water-glycol mix") {
+    const std::string loop = "Q : Btu/h\nQ_k : kW\ngpm : gal/min\ncfm : ft^3/min\nΔT : Δ°F\n";
+    passes_with_one_note(
+        loop, {"gpm = Q/(465*ΔT)", "gpm = 3412*Q_k/(450*ΔT)", "Q = 485*gpm*ΔT", "Q = 430*gpm*ΔT"},
+        plumb::rules::trade_constant);
+    CHECK(message_of(run(loop + "Q = 465*gpm*ΔT\n"), plumb::rules::trade_constant)
+              .find("a water-glycol mix") != std::string::npos);
+    for (const char* formula : {"Q = 465*cfm*ΔT", "Q = 380*gpm*ΔT", "Q = gpm*ΔT/465"}) {
+        CAPTURE(formula);
+        CHECK(problems_in(run(loop + formula + "\n")) == 1);
+    }
+}
+
 // The air trade's moisture numbers (common practice), worked out here from NIST SP 811 (2008)
 // App. B (lb = 0.45359237 kg, ft³ = 0.028316846592 m³, grain = 64.79891 mg, Btu_IT/h =
 // 0.29307107 W): 4.5 lb/h per cfm is 1.201 kg/m³ of air, inside dry air's 1.13-1.29 between 0

@@ -40,6 +40,7 @@ constexpr std::size_t molar_volume_row = 7;
 constexpr std::size_t year_row = 16;      // the hours of a year
 constexpr std::size_t day_row = 19;       // the hours of a day
 constexpr std::size_t hot_water_row = 39; // 958 to 995.65 kg/m³, read only as a density
+constexpr std::size_t glycol_row = 40;    // the hydronic 500's glycol figures, 400 to 499
 
 const dimension& density_dimension() {
     static const dimension density = dimension::base(base_dimension::mass) /
@@ -47,8 +48,8 @@ const dimension& density_dimension() {
     return density;
 }
 
-const std::array<carried_quantity, 40>& quantities() {
-    static const std::array<carried_quantity, 40> table = [] {
+const std::array<carried_quantity, 41>& quantities() {
+    static const std::array<carried_quantity, 41> table = [] {
         const dimension mass = dimension::base(base_dimension::mass);
         const dimension length = dimension::base(base_dimension::length);
         const dimension time = dimension::base(base_dimension::time);
@@ -100,7 +101,7 @@ const std::array<carried_quantity, 40>& quantities() {
         // trade's 1076 Btu/lb (2502.8 kJ/kg, common practice), inside its 0.68 and 4840.
         const double air_latent_least = air_density(40.0) * 2406.0e3;
         const double air_latent_greatest = air_density(0.0) * 2503.0e3;
-        return std::array<carried_quantity, 40>{{
+        return std::array<carried_quantity, 41>{{
             {rules::gravity_number, "standard gravity", "g_n = 9.80665 m/s\u00B2", "1/g_n", "",
              "write {g_n} instead to say so, or declare local gravity with its unit "
              "(g_site : m/s^2) where it differs",
@@ -467,6 +468,18 @@ const std::array<carried_quantity, 40>& quantities() {
              " (water between 30 and 100 \u00B0C: 958.4 to 995.65 kg/m\u00B3)",
              "declare the water's density with its unit (\u03C1_w : kg/m^3 = 977.8) to say so",
              "write the density in a cell that holds its unit to say so", density, 958.0, 995.65},
+            // A water-glycol mix's ρ·c_p, ethylene or propylene glycol from 20 to 50 % by mass
+            // between -10 and 40 °C: about 3.45 to 4.10 MJ/(m³·K) (ASHRAE Handbook—Fundamentals,
+            // the glycol tables of ch. 31, from memory), below water's 4.16. The hydronic trade's
+            // 500 becomes 413 to 490 (465 for 25 % propylene glycol); its 4.19 becomes 3.45 to 4.1.
+            {rules::trade_constant, "the heat capacity of a volume of a water-glycol mix",
+             "\u03C1\u00B7c_p", "1/(\u03C1\u00B7c_p)",
+             " (ethylene or propylene glycol, 20 to 50 % by mass, -10 to 40 \u00B0C: about 3.45 "
+             "to 4.10 MJ/(m\u00B3\u00B7K); for water it is 4.16 to 4.22)",
+             "write \u03C1*c_p with both declared for the mix to say so; for plain water the "
+             "number is water's (500 in Btu/(h\u00B7gpm\u00B7\u00B0F))",
+             "write the density and specific heat in cells that hold their units to say so",
+             density * specific_heat, 3.45e6, 4.10e6},
         }};
     }();
     return table;
@@ -684,6 +697,12 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
                 // One over hot water's density, 1.004 to 1.044, would read sea water's 1.025
                 // multiplied where it divides; the trades divide by the density.
                 if (reciprocal && &q == &quantities()[hot_water_row])
+                    continue;
+                // A glycol mix's heat capacity spans 17 %, wide enough to fit 1.08, 4.19 over a
+                // gpm or 1.163/1000 by chance: read only as the hydronic trade prints it in
+                // place of water's 500, a number from 400 to 499 that multiplies.
+                if (&q == &quantities()[glycol_row] &&
+                    (reciprocal || flipped || !(number.value >= 400.0 && number.value < 500.0)))
                     continue;
                 // What the number stands for, in SI: the quantity or one over it.
                 const double si_low = reciprocal ? 1.0 / q.greatest : q.least;
