@@ -159,6 +159,7 @@ TEST_CASE("mass and force (NIST SP 811 (2008), Appendix B.8/B.9)") {
     const dimension force = typed(1, 1, -2);
     check_printed("lb", mass, 4.535924e-1, 1e-7);
     check_printed("lbm", mass, 4.535924e-1, 1e-7);
+    check_printed("oz", mass, 2.834952e-2, 1e-8); // ounce (avoirdupois)
     check_printed("slug", mass, 1.459390e1, 1e-5);
     check_printed("ton", mass, 9.071847e2, 1e-4);
     check_printed("lbf", force, 4.448222, 1e-6);
