@@ -804,6 +804,8 @@ bool checker::report_share_of_gauge_beside_absolute(std::span<const operand> ter
 // ("p_a/(ρ*g) + V^2/(2*g)", a turbine's net head);
 // "(p_pz - p_b)*1000/(ρ*g)" and NPSH's (p_abs - p_v)/(ρ*g) take a difference first.
 void checker::report_head_from_absolute(std::span<const operand> sides) {
+    if (!declares_gauge_or_absolute_pressure())
+        return;
     // The one absolute reading among a quotient's factors, walked with a small stack of its
     // own: the rule is asked of many a length, and almost every one has no absolute reading.
     // `other`: a pressure that is no lone absolute reading over the rest.
