@@ -1273,3 +1273,31 @@ TEST_CASE("workbook parity: a gauge cell plus the site's barometer typed into an
     CHECK(finding(r, "Baro!B6", rules::offset_scale) != nullptr);
     CHECK(finding(r, "Baro!B10", rules::offset_scale) != nullptr);
 }
+
+TEST_CASE("workbook parity: a g left out of a cell's formula is said outright") {
+    // P = ρ·g·Q·H (common practice) and a line load w = m·g (g_n = 9.80665 m/s², SI Brochure
+    // 9th ed., Table 8, standard acceleration of gravity); without g the cell computes a
+    // momentum rate or a linear density, which names no slip. With g it passes; a g too many
+    // is asked the other way.
+    const check_report r =
+        check_one_sheet("G", sheet_of({
+                                 {"998", "kg/m³"},                 // B2
+                                 {"0.05", "m³/s"},                 // B3
+                                 {"30", "m"},                      // B4
+                                 {"=B2*B3*B4/1000", "kW"},         // B5: g left out
+                                 {"=B2*9.80665*B3*B4/1000", "kW"}, // B6: right
+                                 {"25", "kg/m"},                   // B7
+                                 {"=B7/1000", "kN/m"},             // B8: g left out
+                                 {"9.80665", "m/s²"},              // B9: g
+                                 {"=B2*B9*B9*B4/1000", "kPa"},     // B10: a g too many
+                             }));
+    for (const char* cell : {"G!B5", "G!B8"}) {
+        const diagnostic* d = finding(r, cell, rules::result_unit);
+        REQUIRE_MESSAGE(d != nullptr, cell);
+        CHECK(says(*d, "times g it would match; is a g missing"));
+    }
+    CHECK_FALSE(error_at(r, "G!B6"));
+    const diagnostic* twice = finding(r, "G!B10", rules::result_unit);
+    REQUIRE(twice != nullptr);
+    CHECK(says(*twice, "divided by g it would match"));
+}

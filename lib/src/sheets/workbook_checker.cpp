@@ -1279,6 +1279,7 @@ class workbook_checker {
                                {},
                                {}});
             add_input_notes(d, f);
+            note_gravity_apart(d, computed.dim, written.unit.dim);
             note_ton_of_refrigeration(d, computed.dim, written);
             note_constant_in_other_units(d, computed, written, factors,
                                          lowered_.tree.sides[formula.first_side].root);
@@ -1613,6 +1614,27 @@ class workbook_checker {
                                           const cell_unit& written) {
         if (auto note = ton_of_refrigeration_note(written.unit.text, computed / written.unit.dim))
             d.notes.push_back({std::move(*note), {}});
+    }
+
+    // "=C6*C7*C8/1000" into kW from kg/m³, m³/s and m, "=C11/1000" into kN/m from kg/m: the
+    // slip engineers make most, a g left out (or one too many), said outright as the notation
+    // says it; "momentum" or "linear density" alone does not point at it.
+    static void note_gravity_apart(diagnostic& d, const dimension& computed,
+                                   const dimension& written) {
+        const dimension acceleration = dimension::base(base_dimension::length) /
+                                       dimension::base(base_dimension::time).pow(rational(2));
+        try {
+            if (computed * acceleration == written)
+                d.notes.push_back({"times g it would match; is a g missing from it (ρ*g*Q*H, "
+                                   "m*g)?",
+                                   {}});
+            else if (written * acceleration == computed)
+                d.notes.push_back({"divided by g it would match; is a g missing from its "
+                                   "denominator (p/(ρ*g)), or is one there too many?",
+                                   {}});
+        } catch (const std::exception&) {
+            // Exponents past the exact range: no note.
+        }
     }
 
     // "C8", or "Lift!C8" where the cell is on another sheet than the formula's, which has a C8
