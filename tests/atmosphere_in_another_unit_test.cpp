@@ -458,3 +458,18 @@ TEST_CASE("the site's barometer typed among a sum's other terms") {
     REQUIRE(count_of(other, plumb::rules::offset_scale) == 1);
     CHECK(says(first_under(other, plumb::rules::offset_scale), "site's barometer 'p_b'"));
 }
+
+// An expansion vessel's or receiver's volume by Boyle's law, V_t = V_e/(1 - p_1/p_2) with the
+// pressures absolute (common practice): the gauge readings plus the site's barometer typed as a
+// number (1.009 bar, about 40 m up by the standard atmosphere's barometric formula, from memory)
+// make them so inside the ratio, as beside a gauge reading set equal to an absolute pressure. A
+// number no atmosphere has stays an error.
+TEST_CASE("the site's barometer typed beside a gauge reading inside a ratio") {
+    const std::string d = "V_t, V_e : L\np_1g, p_2g : bar(g)\n";
+    passes(d, {"V_t = V_e/(1 - (p_1g + 1.009)/(p_2g + 1.009))",
+               "V_t = V_e*(p_2g + 1.009)/(p_2g - p_1g)"});
+    const auto read = run(d, "V_t = V_e/(1 - (p_1g + 1.009)/(p_2g + 1.009))");
+    CHECK(count_of(read, plumb::rules::trade_constant) == 2);
+    fails_with(d, {"V_t = V_e/(1 - (p_1g + 0.5)/(p_2g + 0.5))", "V_t = V_e/(1 - p_1g/p_2g)"},
+               plumb::rules::offset_scale);
+}

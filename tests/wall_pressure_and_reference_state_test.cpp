@@ -889,14 +889,24 @@ TEST_CASE("a sum of normal flows over an area is no velocity either") {
 
 // EN 12828's expansion vessel, V_n = V_e·(p_e + 1)/(p_e - p_0) with the pressures in bar g (EN
 // 12828:2012, Annex D, from memory): the 1 is the atmosphere rounded to 1 bar, 1.3 % under the
-// standard one, and with it the numerator is an absolute pressure. 100 in kPa alike; not 0.95,
-// and not 14.5 psi (the bar's conversion).
+// standard one, and with it the numerator is an absolute pressure. 100 in kPa alike. A site's
+// own barometer typed there, 0.95 bar (about 540 m up) or 14.5 psi (about 110 m up, by the
+// standard atmosphere's barometric formula, from memory), is read as it, with a note that says
+// the height; a number no atmosphere has (0.3 bar, 1 psi) or none at all stays an error.
 TEST_CASE("the atmosphere rounded to 1 bar inside an expansion vessel's ratio") {
     const std::string decl = "p_e, p_0 : barg\np_k, p_k0 : kPag\np_s, p_s0 : psig\nV_n, V_e : L\n";
     passes(decl, {"V_n = V_e*(p_e + 1)/(p_e - p_0)", "V_n = V_e*(p_k + 100)/(p_k - p_k0)",
                   "V_n = V_e*(p_e + 1.013)/(p_e - p_0)"});
+    for (const char* site :
+         {"V_n = V_e*(p_e + 0.95)/(p_e - p_0)", "V_n = V_e*(p_s + 14.5)/(p_s - p_s0)"}) {
+        CAPTURE(site);
+        const auto r = plumb::test::check_after(decl, site);
+        CHECK(plumb::test::problems_in(r) == 0);
+        CHECK(plumb::test::says(first_under(r, plumb::rules::trade_constant),
+                                "is read as the atmospheric pressure where the gauge is"));
+    }
     fails_with(decl,
-               {"V_n = V_e*(p_e + 0.95)/(p_e - p_0)", "V_n = V_e*(p_s + 14.5)/(p_s - p_s0)",
+               {"V_n = V_e*(p_e + 0.3)/(p_e - p_0)", "V_n = V_e*(p_s + 1)/(p_s - p_s0)",
                 "V_n = V_e*p_e/(p_e - p_0)"},
                plumb::rules::offset_scale);
 }

@@ -951,7 +951,9 @@ typed_term checker::finish_offset_sum(std::span<const operand> terms, typed_term
             final_origin = 0.0;
             tolerance = std::abs(o);
             shifted_to_a_zero = true;
-        } else if (gauges > 0 && unit_terms >= 2 &&
+        } else if (gauges > 0 &&
+                   (unit_terms >= 2 ||
+                    (terms[only].type.literal_count == 0 && !is_whole_side(index))) &&
                    read_site_atmosphere_in_sum(terms, unit, o, tol)) [[unlikely]] {
             final_origin = 0.0;
             tolerance = std::abs(o) + tol;

@@ -636,8 +636,10 @@ bool checker::read_local_atmosphere(const operand& sum, double other_scale) {
 }
 
 // "(p_g + 99.8 - p_v)" in NPSHa, "p_g + 1.0 + ρ*g*h": a gauge reading among other terms with
-// one number added where the standard atmosphere would put the sum's zero at the absolute one.
-// The number is the site's barometer, as it is beside a gauge reading alone (above).
+// one number added where the standard atmosphere would put the sum's zero at the absolute one;
+// or a gauge reading and the number alone inside a side, "(p_1g + 1.009)/(p_2g + 1.009)" in
+// Boyle's law. The number is the site's barometer, as it is beside a gauge reading set equal
+// to an absolute pressure (above).
 bool checker::read_site_atmosphere_in_sum(std::span<const operand> terms, double unit,
                                           double shifted_origin, double tolerance) {
     const operand* number = nullptr;
