@@ -198,3 +198,18 @@ TEST_CASE("factor direction: a four-digit factor rounded from a chained or older
          {"E_lbh = 7946*E_kgs", "Q_B = 3416*Q_k", "dp_m = 818*dp_us", "dp_m = 818.1*dp_us"})
         CHECK_MESSAGE(only_finding(d + wrong + "\n").find("counts") != std::string::npos, wrong);
 }
+
+// A fan's shaft power P = Q·Δp/η (common practice): 1 mbar·m³/s is 100 W = 0.1 kW, so /10
+// converts mbar and m³/s to kW; with the flow in m³/h the hour's 3600 is left out (1 h = 3600 s,
+// SI Brochure 9th ed., Table 8). Read only as a coefficient, the advice "divide by 36000" would
+// leave the line ten times too small: the finding counts it both ways and names the 3600.
+TEST_CASE("factor direction: a power of ten that converts, with the hour left out") {
+    const auto r =
+        plumb::check_text("f.plumb", "P : kW\nQ_h : m3/h\nΔp : mbar\nη : 1\nP = Q_h*Δp/(10*η)\n");
+    REQUIRE(plumb::test::count_of(r, plumb::rules::unit_scale) == 1);
+    const plumb::diagnostic& d = plumb::test::first_under(r, plumb::rules::unit_scale);
+    CHECK(plumb::test::says(d, "counts 3600 times as much as 'P' if 10 was meant as the "
+                               "conversion, 36000 times as much if it is a coefficient"));
+    CHECK(plumb::test::says(d, "the units need 3600 as well: divide 'Q_h*Δp/(10*η)' by 3600"));
+    CHECK(only_finding("P : kW\nQ_s : m3/s\nΔp : mbar\nη : 1\nP = Q_s*Δp/(10*η)\n").empty());
+}

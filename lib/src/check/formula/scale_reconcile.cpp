@@ -639,6 +639,17 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
                 also_needed = -*also_needed; // negative: multiply by it
         }
     }
+    // "P = Q_h*Δp/(10*η)" in kW from m³/h and mbar: the 10 is the conversion mbar·m³/s to kW,
+    // and the hour's 3600 is what is left out. Taken as a coefficient, the advice to divide by
+    // 36000 would leave the line ten times too small; counted both ways, the clock is named.
+    if (!also_needed && one_coefficient && coefficient != nullptr && !in_place_offered &&
+        power_of_ratio == 0 && !power_for_power && coefficient->power_of_ten && written >= 10.0) {
+        const double left = std::pow(written / in_place, coefficient_exponent);
+        const double whole_left = left >= 1.0 ? left : 1.0 / left;
+        for (const double clock : {60.0, 3600.0, 86400.0, 1440.0, 24.0})
+            if (std::abs(whole_left / clock - 1.0) <= 1e-6)
+                also_needed = left < 1.0 ? -clock : clock;
+    }
     const bool counted_both_ways = (in_place_offered && is_power_trade_constant(written)) ||
                                    power_of_ratio != 0 || power_for_power || also_needed;
     const std::string in_place_text =
