@@ -621,6 +621,32 @@ TEST_CASE("a head from an absolute pressure among the energy's terms or times 2.
                "H = 1e5*(p_a - p_v)/(ρ*{g_n}) + V^2/(2*{g_n})", "H = z + V^2/(2*{g_n})"});
 }
 
+// A pore water pressure counts from the atmosphere, as a vented piezometer reads it (Terzaghi's
+// σ' = σ - u; common practice): an unvented transducer's absolute reading, converted from psia
+// (1 psi = 6.894757 kPa, NIST SP 811 (2008), B.8), or a vented one with the barometer added,
+// set equal to it is an atmosphere high; so is the pressure across a drum's hole taken as its
+// absolute reading. The absolute reading less the barometer, and the vented reading alone, pass;
+// a vacuum with the barometer added is told to negate the gauge reading instead.
+TEST_CASE("a pressure counted from the atmosphere set equal to an absolute one") {
+    const std::string d = "u : kPa \"pore water pressure at the tip\"\n"
+                          "p_A : psia \"unvented transducer, absolute\"\n"
+                          "p_V : psig \"vented transducer\"\n"
+                          "p_b : kPa \"site barometric pressure\"\n"
+                          "Δp : bar \"pressure difference across the hole\"\n"
+                          "p_da : bar \"drum pressure, absolute\"\np_dg : bar(g)\n"
+                          "p_vac : kPa \"vacuum under the membrane, counted below the barometer\"\n"
+                          "p_mg : kPag \"membrane dial gauge\"\n";
+    fails_with(d, {"u = 6.895*p_A", "u = 6.895*p_V + p_b", "Δp = p_da"},
+               plumb::rules::offset_scale);
+    const auto r = run(d, "u = 6.895*p_A");
+    CHECK(plumb::test::says(first_under(r, plumb::rules::offset_scale),
+                            "take the barometer off: write (6.895*p_A - p_b)"));
+    const auto v = run(d, "p_vac = p_b + p_mg");
+    REQUIRE(count_of(v, plumb::rules::offset_scale) == 1);
+    CHECK(plumb::test::says(first_under(v, plumb::rules::offset_scale), "write -(p_mg)"));
+    passes(d, {"u = 6.895*p_A - p_b", "u = 6.895*p_V", "Δp = p_dg", "Δp = p_da - p_b/100"});
+}
+
 // The barometer a file declares at sea level (a ship's, 1.013 bar) is still the one to add to
 // a gauge reading, in the reading's unit (1 bar = 100 kPa, NIST SP 811 (2008), B.8).
 TEST_CASE("a gauge reading's advice names the declared barometer in another unit") {

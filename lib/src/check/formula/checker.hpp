@@ -1215,6 +1215,7 @@ class checker {
     [[gnu::noinline]] void report_absolute_set_to_difference(std::span<const operand> sides);
     [[gnu::noinline]] void report_barometer_reading_as_absolute(std::span<const operand> sides);
     [[gnu::noinline]] void report_head_from_absolute(std::span<const operand> sides);
+    [[gnu::noinline]] void report_difference_set_to_absolute(std::span<const operand> sides);
     [[gnu::noinline]] void report_sea_level_atmosphere_in_products(const syntax::formula& f);
     bool names_a_vacuum(std::uint32_t node) const;
     [[gnu::noinline]] bool report_share_of_gauge_beside_absolute(std::span<const operand> terms);

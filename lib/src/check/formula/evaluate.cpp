@@ -349,6 +349,10 @@ void checker::check_formula(const syntax::formula& f) {
                 (sides[0].type.absolute_pressure_difference ||
                  sides[1].type.absolute_pressure_difference)) [[unlikely]]
                 report_absolute_set_to_difference(sides);
+            if (equation && sides.size() == 2 && out_.size() == findings_before &&
+                sides[0].type.point != sides[1].type.point && sides[0].type.known &&
+                sides[0].type.dim == pressure_dimension()) [[unlikely]]
+                report_difference_set_to_absolute(sides);
             if ((symbols_.unit_marks() & read_from_barometer) != 0 && equation &&
                 sides.size() == 2 && out_.size() == findings_before && sides[0].type.known &&
                 sides[0].type.dim == pressure_dimension()) [[unlikely]]

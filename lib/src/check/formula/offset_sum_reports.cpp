@@ -954,6 +954,90 @@ void checker::report_absolute_set_to_difference(std::span<const operand> sides) 
     }
 }
 
+// "u = 6.895*p_A" with u a pore water pressure, counted from the atmosphere as a vented
+// piezometer reads it, and p_A an unvented transducer's absolute reading; "u = 6.895*p_V + p_b",
+// a vented one with the barometer added: a pressure the file counts from the atmosphere (a
+// difference by its name or words) set equal to an absolute reading comes out an atmosphere
+// high (common practice). Only a lone reading said absolute, or a gauge reading plus a
+// barometer, times numbers that convert it.
+void checker::report_difference_set_to_absolute(std::span<const operand> sides) {
+    if (!declares_gauge_or_absolute_pressure())
+        return;
+    for (std::size_t k = 0; k < 2; ++k) {
+        const operand& difference = sides[k];
+        const operand& other = sides[1 - k];
+        const std::uint32_t named = syntax::inside_brackets(file_, difference.node);
+        if (file_.nodes[named].kind != expr_kind::symbol || difference.type.point ||
+            difference.type.numeric || difference.type.offset != nullptr ||
+            !difference.type.known || !(difference.type.dim == pressure_dimension()))
+            continue;
+        const symbol_entry* d_entry = symbols_.find(text(file_.nodes[named].range));
+        if (d_entry == nullptr || said_absolute(*d_entry))
+            continue;
+        const std::uint32_t side = syntax::inside_brackets(file_, other.node);
+        const std::uint32_t reading = sole_symbol_times_numbers(side);
+        if (reading != syntax::no_index) {
+            const std::string_view name = text(file_.nodes[reading].range);
+            const symbol_entry* e = symbols_.find(name);
+            if (e == nullptr || e->offset_unit != nullptr || !said_absolute(*e) ||
+                names_the_atmosphere(name, e->description))
+                continue;
+            const std::optional<std::string_view> barometer =
+                barometer_in_unit(difference.type.scale);
+            diagnostic& d =
+                report(rules::offset_scale,
+                       fmt::format("{} is an absolute pressure, but {} counts from the atmosphere: "
+                                   "set equal to it, the result is one atmosphere high",
+                                   quote(other.node), quote(difference.node)),
+                       file_.nodes[other.node].range);
+            d.level = severity::warning;
+            add_term(d, other);
+            add_term(d, difference, true);
+            d.notes.push_back({fmt::format("take the barometer off: write ({} - {})",
+                                           display_text(file_.nodes[other.node].range),
+                                           barometer ? std::string(*barometer)
+                                                     : std::string("the atmospheric pressure")),
+                               {}});
+            return;
+        }
+        const syntax::expr_node& sum = file_.nodes[side];
+        if (sum.kind != expr_kind::add)
+            continue;
+        for (const auto& [gauge_term, barometer_term] :
+             {std::pair{sum.lhs, sum.rhs}, std::pair{sum.rhs, sum.lhs}}) {
+            const std::uint32_t gauge = sole_symbol_times_numbers(gauge_term);
+            const std::uint32_t barometer = syntax::inside_brackets(file_, barometer_term);
+            if (gauge == syntax::no_index || file_.nodes[barometer].kind != expr_kind::symbol ||
+                !names_atmosphere(barometer))
+                continue;
+            const symbol_entry* g = symbols_.find(text(file_.nodes[gauge].range));
+            if (g == nullptr || g->offset_unit == nullptr ||
+                g->offset_unit->scale != unit_scale::gauge)
+                continue;
+            diagnostic& d =
+                report(rules::offset_scale,
+                       fmt::format("{} adds the barometer {} to a gauge reading, which makes it "
+                                   "absolute, but {} counts from the atmosphere, as the gauge "
+                                   "reading does: the result is one atmosphere high",
+                                   quote(other.node), quote(barometer), quote(difference.node)),
+                       file_.nodes[barometer].range);
+            d.level = severity::warning;
+            add_term(d, difference, true);
+            // A vacuum counts down from the atmosphere: the gauge's reading below it, negated.
+            d.notes.push_back(
+                {names_a_vacuum(named)
+                     ? fmt::format("a vacuum is how far below the barometer the pressure is: "
+                                   "write -({}), the gauge reading negated",
+                                   display_text(file_.nodes[gauge_term].range))
+                     : fmt::format("drop the {}: the gauge reading, converted, is already the "
+                                   "pressure above the atmosphere",
+                                   display_text(file_.nodes[barometer].range)),
+                 {}});
+            return;
+        }
+    }
+}
+
 // "p_c = 3.386*p_vac" with p_c the condenser's absolute pressure and p_vac its vacuum in
 // inHg: a vacuum gauge reads how far below the barometer the pressure is, so the absolute
 // pressure is the barometer less the vacuum (ASME PTC 12.2 reads a condenser so, from
