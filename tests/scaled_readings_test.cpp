@@ -959,3 +959,20 @@ TEST_CASE("a vacuum added to the barometer") {
         CHECK(says(first_under(r, plumb::rules::offset_scale), "counts down from the barometer"));
     }
 }
+
+// Moist air's density ρ = p/(R_D·T) takes the absolute temperature (the ideal gas law, common
+// practice); a mean of two °C readings written R_D*(t_w + t_a)/2 is reported, and the advice
+// converts each reading (T = t + 273.15 K, SI Brochure 9th ed., 2.3.1), since "((t_w + t_a) +
+// 273.15)" with the /2 outside would leave the mean 136.6 K low. The mean in its own brackets
+// is converted as a whole.
+TEST_CASE("a gas law's mean of two readings is converted reading by reading") {
+    const std::string d = "R_D : J/(kg*K)\nt_w, t_a : °C\np : Pa\nρ : kg/m^3\n";
+    const auto r = run(d, "ρ = p/(R_D*(t_w + t_a)/2)");
+    REQUIRE(count_of(r, plumb::rules::offset_scale) == 1);
+    CHECK(says(first_under(r, plumb::rules::offset_scale),
+               "convert each reading, ((t_w + 273.15) + (t_a + 273.15)), in K"));
+    CHECK_FALSE(says(first_under(r, plumb::rules::offset_scale), "((t_w + t_a) + 273.15)"));
+    const auto m = run(d, "ρ = p/(R_D*((t_w + t_a)/2))");
+    CHECK(says(first_under(m, plumb::rules::offset_scale), "(((t_w + t_a)/2) + 273.15)"));
+    passes(d, {"ρ = p/(R_D*((t_w + 273.15) + (t_a + 273.15))/2)"});
+}

@@ -204,12 +204,34 @@ void checker::report_offset(std::uint32_t node, const unit_definition& unit, std
         const std::string reading =
             display_text(number_added ? file_.nodes[syntax::inside_brackets(file_, sum.lhs)].range
                                       : file_.nodes[node].range);
+        const double zero = unit.offset / unit.factor;
+        const std::string_view absolute_unit =
+            std::abs(unit.factor - 1.0) < 1e-12 ? "K" : "\u00B0R";
+        // "R_D*(t_w + t_a)/2": two readings added, a mean whose halving stands further on.
+        // Each reading is converted, so that the /2, wherever it stands, halves kelvins;
+        // "((t_w + t_a) + 273.15)" would leave the mean 136.6 K low.
+        const bool two_readings =
+            !number_added && sum.kind == expr_kind::add &&
+            file_.nodes[syntax::inside_brackets(file_, sum.lhs)].kind == expr_kind::symbol &&
+            file_.nodes[syntax::inside_brackets(file_, sum.rhs)].kind == expr_kind::symbol;
+        if (two_readings) {
+            const std::uint32_t left = syntax::inside_brackets(file_, sum.lhs);
+            const std::uint32_t right = syntax::inside_brackets(file_, sum.rhs);
+            d.notes.push_back(
+                {fmt::format("R times a temperature is a gas law's (p\u00B7v = R\u00B7T, a "
+                             "compressor's or blower's power), which takes absolute "
+                             "temperature: convert each reading, (({} + {:g}) + ({} + {:g})), "
+                             "in {}",
+                             display_text(file_.nodes[left].range), zero,
+                             display_text(file_.nodes[right].range), zero, absolute_unit),
+                 {}});
+            return;
+        }
         d.notes.push_back(
             {fmt::format("R times a temperature is a gas law's (p\u00B7v = R\u00B7T, a "
                          "compressor's or blower's power), which takes absolute temperature: "
                          "write ({} + {:g}), in {}{}",
-                         reading, unit.offset / unit.factor,
-                         std::abs(unit.factor - 1.0) < 1e-12 ? "K" : "\u00B0R",
+                         reading, zero, absolute_unit,
                          number_added ? fmt::format(", in place of {}",
                                                     display_text(file_.nodes[node].range))
                                       : std::string()),
