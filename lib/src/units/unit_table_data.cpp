@@ -315,8 +315,8 @@ constexpr unit_definition rows[] = {
     absolute("gr", "grain", mass, 0.00006479891, "0.00006479891", prefixes::refused,
              "NIST SP 811 (2008), B.8 prints 6.479891E-05; exact as 1/7000 lb"),
     // The ounce of hop and malt additions and of dosing sheets (oz per barrel), 1/16 lb.
-    absolute("oz", "ounce (avoirdupois)", mass, 0.028349523125, "0.028349523125",
-             prefixes::refused, "NIST SP 811 (2008), B.8 prints 2.834952E-02; exact as 1/16 lb"),
+    absolute("oz", "ounce (avoirdupois)", mass, 0.028349523125, "0.028349523125", prefixes::refused,
+             "NIST SP 811 (2008), B.8 prints 2.834952E-02; exact as 1/16 lb"),
     // The pound-mole of US gas and process calcs: as many particles as 1 lb of carbon-12 over
     // 12 g (the mole of lb), 453.59237 mol exactly from the pound's definition (NIST SP 811
     // (2008), B.8, pound; the unit is common practice).
