@@ -37,10 +37,8 @@ constexpr std::size_t most_numbers = 8;
 constexpr std::size_t twice_gravity_row = 1;
 constexpr std::size_t round_water_row = 3; // the ground engineer's 10 kN/m³
 constexpr std::size_t molar_volume_row = 7;
-constexpr std::size_t year_row = 16;      // the hours of a year
-constexpr std::size_t day_row = 19;       // the hours of a day
-constexpr std::size_t hot_water_row = 39; // 958 to 995.65 kg/m³, read only as a density
-constexpr std::size_t glycol_row = 40;    // the hydronic 500's glycol figures, 400 to 499
+constexpr std::size_t year_row = 16; // the hours of a year
+constexpr std::size_t day_row = 19;  // the hours of a day
 
 const dimension& density_dimension() {
     static const dimension density = dimension::base(base_dimension::mass) /
@@ -464,22 +462,42 @@ const std::array<carried_quantity, 41>& quantities() {
             // Hot water's density, 995.65 kg/m³ at 30 °C to 958.4 at 100 °C (IAPWS-95 as
             // tabulated in the CRC Handbook; from memory): a heating circuit's 977.8 at
             // 70 °C, a calorifier's 983.2 at 60 °C. A flow in L/s from kg/s divides by it.
-            {rules::trade_constant, "the density of hot water", "\u03C1_w", "1/\u03C1_w",
+            {rules::trade_constant,
+             "the density of hot water",
+             "\u03C1_w",
+             "1/\u03C1_w",
              " (water between 30 and 100 \u00B0C: 958.4 to 995.65 kg/m\u00B3)",
              "declare the water's density with its unit (\u03C1_w : kg/m^3 = 977.8) to say so",
-             "write the density in a cell that holds its unit to say so", density, 958.0, 995.65},
+             "write the density in a cell that holds its unit to say so",
+             density,
+             958.0,
+             995.65,
+             carried_quantity::term_kind::any,
+             {},
+             0.0,
+             false},
             // A water-glycol mix's ρ·c_p, ethylene or propylene glycol from 20 to 50 % by mass
             // between -10 and 40 °C: about 3.45 to 4.10 MJ/(m³·K) (ASHRAE Handbook—Fundamentals,
             // the glycol tables of ch. 31, from memory), below water's 4.16. The hydronic trade's
             // 500 becomes 413 to 490 (465 for 25 % propylene glycol); its 4.19 becomes 3.45 to 4.1.
-            {rules::trade_constant, "the heat capacity of a volume of a water-glycol mix",
-             "\u03C1\u00B7c_p", "1/(\u03C1\u00B7c_p)",
+            {rules::trade_constant,
+             "the heat capacity of a volume of a water-glycol mix",
+             "\u03C1\u00B7c_p",
+             "1/(\u03C1\u00B7c_p)",
              " (ethylene or propylene glycol, 20 to 50 % by mass, -10 to 40 \u00B0C: about 3.45 "
              "to 4.10 MJ/(m\u00B3\u00B7K); for water it is 4.16 to 4.22)",
              "write \u03C1*c_p with both declared for the mix to say so; for plain water the "
              "number is water's (500 in Btu/(h\u00B7gpm\u00B7\u00B0F))",
              "write the density and specific heat in cells that hold their units to say so",
-             density * specific_heat, 3.45e6, 4.10e6},
+             density * specific_heat,
+             3.45e6,
+             4.10e6,
+             carried_quantity::term_kind::any,
+             {},
+             0.0,
+             false,
+             400.0,
+             500.0},
         }};
     }();
     return table;
@@ -691,18 +709,15 @@ std::optional<gravity_reading> read_gravity_number(double term_scale, double ref
             if (number.power_of_ten &&
                 (&q == &quantities()[day_row] || &q == &quantities()[year_row]))
                 continue;
+            // A glycol mix's heat capacity spans 17 %, wide enough to fit 1.08, 4.19 over a gpm
+            // or 1.163/1000 by chance: such a quantity is read only as the trade prints it.
+            if (q.printed_below > 0.0 &&
+                (flipped || !(number.value >= q.printed_least && number.value < q.printed_below)))
+                continue;
             for (const bool reciprocal : {false, true}) {
                 if (!is_power_of(lacking, q.dim, reciprocal ? -x : x))
                     continue;
-                // One over hot water's density, 1.004 to 1.044, would read sea water's 1.025
-                // multiplied where it divides; the trades divide by the density.
-                if (reciprocal && &q == &quantities()[hot_water_row])
-                    continue;
-                // A glycol mix's heat capacity spans 17 %, wide enough to fit 1.08, 4.19 over a
-                // gpm or 1.163/1000 by chance: read only as the hydronic trade prints it in
-                // place of water's 500, a number from 400 to 499 that multiplies.
-                if (&q == &quantities()[glycol_row] &&
-                    (reciprocal || flipped || !(number.value >= 400.0 && number.value < 500.0)))
+                if (reciprocal && !q.reads_reciprocal)
                     continue;
                 // What the number stands for, in SI: the quantity or one over it.
                 const double si_low = reciprocal ? 1.0 / q.greatest : q.least;

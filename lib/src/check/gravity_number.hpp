@@ -45,6 +45,13 @@ struct carried_quantity {
     // this share of its value (1.225 and 0.0765 for air's density, not a factor's 1.25).
     // 0 reads any number.
     double finest_rounding = 0.0;
+    // Read as one over the quantity too (2.31 ft/psi, 3960); false where that would read
+    // another quantity's slip (hot water's 1.004 to 1.044 is sea water's 1.025 turned over).
+    bool reads_reciprocal = true;
+    // Read only from a number printed in this range and multiplying, as the trade prints it
+    // (the hydronic 500's glycol figures, 400 to 499); 0 and 0 read any.
+    double printed_least = 0.0;
+    double printed_below = 0.0;
 };
 
 struct gravity_reading {
@@ -58,6 +65,14 @@ struct gravity_reading {
     double greatest = 0.0;
     double term_scale = 1.0; // the term's SI value per written value, once read
 };
+
+// What to ask where a side or a cell differs from the other by exactly an acceleration: a g
+// left out (times g it would match) or one too many, the slip engineers make most.
+inline constexpr std::string_view g_left_out_advice =
+    "times g it would match; is a g missing from it (\u03C1*g*h)?";
+inline constexpr std::string_view g_too_many_advice =
+    "divided by g it would match; is a g missing from its denominator (p/(\u03C1*g)), or is "
+    "one there too many?";
 
 // Whether a term lacking `lacking` could hold one of the quantities through a number entering
 // it with `exponent` (1 in ρ*9.81*h, -1 in p/(ρ*9.81), 1/2 in sqrt(2*9.81*h)): a cheap test

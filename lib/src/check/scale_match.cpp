@@ -333,7 +333,7 @@ scale_literal read_literal(std::string_view text, double value, std::uint32_t no
         // value, which no slip of units comes near. Five digits or more (273.15, 1.01325) are
         // printed that precisely on purpose. The interval stays centred as before, so the
         // digits can be read back from it (printed_value).
-        if (table_printed && significant == 4 && half_unit_narrower && width && exact) {
+        if (table_printed && significant == 4 && half_unit_narrower && width) {
             const auto floor = exact_product(exact, rational(3, 10000), false);
             if (floor && *width < *floor) {
                 width = floor;

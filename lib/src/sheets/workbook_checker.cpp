@@ -1625,13 +1625,9 @@ class workbook_checker {
                                        dimension::base(base_dimension::time).pow(rational(2));
         try {
             if (computed * acceleration == written)
-                d.notes.push_back({"times g it would match; is a g missing from it (ρ*g*Q*H, "
-                                   "m*g)?",
-                                   {}});
+                d.notes.push_back({std::string(g_left_out_advice), {}});
             else if (written * acceleration == computed)
-                d.notes.push_back({"divided by g it would match; is a g missing from its "
-                                   "denominator (p/(ρ*g)), or is one there too many?",
-                                   {}});
+                d.notes.push_back({std::string(g_too_many_advice), {}});
         } catch (const std::exception&) {
             // Exponents past the exact range: no note.
         }

@@ -168,10 +168,8 @@ void checker::note_acceleration_or_density_apart(diagnostic& d, std::span<const 
         else if (*apart == acceleration_dimension() || *apart == acceleration_dimension().pow(-1))
             d.notes.push_back(
                 {fmt::format("{} differs from the rest by exactly an acceleration: {}", odd,
-                             *apart == acceleration_dimension()
-                                 ? "times g it would match; is a g missing from it (ρ*g*h)?"
-                                 : "divided by g it would match; is a g missing from its "
-                                   "denominator (p/(ρ*g)), or is one there too many?"),
+                             *apart == acceleration_dimension() ? g_left_out_advice
+                                                                : g_too_many_advice),
                  {}});
         // "Fr = v/sqrt(y)", "q = 0.221*A*Δh*ρ*(1 - ρ_i/ρ_r)^0.5*H^0.5": g left out of a square
         // root (Fr = v/√(g·y); a door's air exchange, Gosney and Olama, √(g·H); common

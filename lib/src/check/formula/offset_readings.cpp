@@ -210,13 +210,11 @@ void checker::report_offset(std::uint32_t node, const unit_definition& unit, std
         // "R_D*(t_w + t_a)/2": two readings added, a mean whose halving stands further on.
         // Each reading is converted, so that the /2, wherever it stands, halves kelvins;
         // "((t_w + t_a) + 273.15)" would leave the mean 136.6 K low.
-        const bool two_readings =
-            !number_added && sum.kind == expr_kind::add &&
-            file_.nodes[syntax::inside_brackets(file_, sum.lhs)].kind == expr_kind::symbol &&
-            file_.nodes[syntax::inside_brackets(file_, sum.rhs)].kind == expr_kind::symbol;
-        if (two_readings) {
-            const std::uint32_t left = syntax::inside_brackets(file_, sum.lhs);
-            const std::uint32_t right = syntax::inside_brackets(file_, sum.rhs);
+        const bool a_sum = !number_added && sum.kind == expr_kind::add;
+        const std::uint32_t left = a_sum ? syntax::inside_brackets(file_, sum.lhs) : node;
+        const std::uint32_t right = a_sum ? syntax::inside_brackets(file_, sum.rhs) : node;
+        if (a_sum && file_.nodes[left].kind == expr_kind::symbol &&
+            file_.nodes[right].kind == expr_kind::symbol) {
             d.notes.push_back(
                 {fmt::format("R times a temperature is a gas law's (p\u00B7v = R\u00B7T, a "
                              "compressor's or blower's power), which takes absolute "

@@ -617,38 +617,36 @@ bool checker::reconcile_in_full(std::span<const operand> ops, meeting_point what
     // is a conversion, or a trade's constant, of its own; taken as one, the units still need
     // another common factor (365 days a year; 3785.41 m³ per million US gallons, NIST SP 811
     // (2008), B.8). The finding is counted both ways, and the advice names that factor.
+    // "P = Q_h*Δp/(10*η)" in kW from m³/h and mbar: a power of ten that converts (mbar·m³/s to
+    // kW), with the hour's 3600 left out; taken as a coefficient, the advice to divide by 36000
+    // would leave the line ten times too small.
     std::optional<double> also_needed;
     if (one_coefficient && coefficient != nullptr && !in_place_offered && power_of_ratio == 0 &&
-        !power_for_power && coefficient_digits >= 3) {
-        const std::optional<rational> printed = printed_power(*coefficient, 1.0);
-        const bool conversion_itself =
-            common_conversion(written, std::max(2.0 * coefficient->tolerance, 1e-4)) ||
-            (printed && trade_constant_for(*printed) != nullptr);
+        !power_for_power) {
         const double left = std::pow(written / in_place, coefficient_exponent);
         const double whole_left = left >= 1.0 ? left : 1.0 / left;
-        const double slack = std::max(3.0 * coefficient->tolerance, 2e-3);
-        if (conversion_itself && std::isfinite(whole_left)) {
-            for (const double known :
-                 {365.0, 365.25, 8760.0, 1000.0, 100.0, 1.0e6, 3785.41, 1440.0, 86400.0})
-                if (std::abs(whole_left / known - 1.0) <= slack)
-                    also_needed = known;
-            if (!also_needed)
-                if (const auto c = common_conversion(whole_left, slack); c && *c > 1.0)
-                    also_needed = *c;
-            if (also_needed && left < 1.0)
-                also_needed = -*also_needed; // negative: multiply by it
+        if (coefficient_digits >= 3 && std::isfinite(whole_left)) {
+            const std::optional<rational> printed = printed_power(*coefficient, 1.0);
+            const bool conversion_itself =
+                common_conversion(written, std::max(2.0 * coefficient->tolerance, 1e-4)) ||
+                (printed && trade_constant_for(*printed) != nullptr);
+            const double slack = std::max(3.0 * coefficient->tolerance, 2e-3);
+            if (conversion_itself) {
+                for (const double known :
+                     {365.0, 365.25, 8760.0, 1000.0, 100.0, 1.0e6, 3785.41, 1440.0, 86400.0})
+                    if (std::abs(whole_left / known - 1.0) <= slack)
+                        also_needed = known;
+                if (!also_needed)
+                    if (const auto c = common_conversion(whole_left, slack); c && *c > 1.0)
+                        also_needed = *c;
+            }
         }
-    }
-    // "P = Q_h*Δp/(10*η)" in kW from m³/h and mbar: the 10 is the conversion mbar·m³/s to kW,
-    // and the hour's 3600 is what is left out. Taken as a coefficient, the advice to divide by
-    // 36000 would leave the line ten times too small; counted both ways, the clock is named.
-    if (!also_needed && one_coefficient && coefficient != nullptr && !in_place_offered &&
-        power_of_ratio == 0 && !power_for_power && coefficient->power_of_ten && written >= 10.0) {
-        const double left = std::pow(written / in_place, coefficient_exponent);
-        const double whole_left = left >= 1.0 ? left : 1.0 / left;
-        for (const double clock : {60.0, 3600.0, 86400.0, 1440.0, 24.0})
-            if (std::abs(whole_left / clock - 1.0) <= 1e-6)
-                also_needed = left < 1.0 ? -clock : clock;
+        if (!also_needed && coefficient->power_of_ten && written >= 10.0)
+            for (const double clock : {60.0, 3600.0, 86400.0, 1440.0, 24.0})
+                if (std::abs(whole_left / clock - 1.0) <= 1e-6)
+                    also_needed = clock;
+        if (also_needed && left < 1.0)
+            also_needed = -*also_needed; // negative: multiply by it
     }
     const bool counted_both_ways = (in_place_offered && is_power_trade_constant(written)) ||
                                    power_of_ratio != 0 || power_for_power || also_needed;
